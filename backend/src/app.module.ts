@@ -1,0 +1,16 @@
+import { Module } from '@nestjs/common';
+import { AuthModule } from './auth/auth.module.js';
+import { DatabaseModule } from './database/database.module.js';
+import { HealthModule } from './health/health.module.js';
+import { PeopleModule } from './people/people.module.js';
+
+// One line per domain module.
+@Module({
+  imports: [
+    DatabaseModule,
+    AuthModule,
+    HealthModule,
+    PeopleModule,
+  ],
+})
+export class AppModule {}

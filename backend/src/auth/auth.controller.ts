@@ -1,0 +1,33 @@
+import { Controller, Get, HttpCode, Post, Req, Res, UseGuards } from '@nestjs/common';
+import { AuthGuard } from '@nestjs/passport';
+import type { FastifyReply, FastifyRequest } from 'fastify';
+import { CurrentUser, Public } from './decorators.js';
+import { LoginBodyGuard } from './login-body.guard.js';
+import { toUserResponse, type SessionUser } from './session-user.js';
+
+@Controller('auth')
+export class AuthController {
+  @Public()
+  @Post('login')
+  @HttpCode(200)
+  @UseGuards(LoginBodyGuard, AuthGuard('local'))
+  async login(@Req() req: FastifyRequest & { user: SessionUser }) {
+    // A new session id on sign-in, so a planted id cannot be taken over.
+    await req.session.regenerate();
+    req.session.set('userId', req.user.id);
+    return { user: toUserResponse(req.user) };
+  }
+
+  @Public()
+  @Post('logout')
+  @HttpCode(204)
+  async logout(@Req() req: FastifyRequest, @Res({ passthrough: true }) reply: FastifyReply) {
+    if (req.session) await req.session.destroy();
+    reply.clearCookie('railwright.sid', { path: '/' });
+  }
+
+  @Get('me')
+  me(@CurrentUser() user: SessionUser) {
+    return { user: toUserResponse(user) };
+  }
+}

@@ -1,0 +1,26 @@
+import { Global, Module } from '@nestjs/common';
+import { APP_GUARD } from '@nestjs/core';
+import { PassportModule } from '@nestjs/passport';
+import { AuthController } from './auth.controller.js';
+import { AuthRepository } from './auth.repository.js';
+import { AuthService } from './auth.service.js';
+import { LocalStrategy } from './local.strategy.js';
+import { LoginBodyGuard } from './login-body.guard.js';
+import { LoginThrottle } from './login-throttle.js';
+import { SessionAuthGuard } from './session-auth.guard.js';
+
+@Global()
+@Module({
+  imports: [PassportModule.register({ session: false })],
+  controllers: [AuthController],
+  providers: [
+    AuthRepository,
+    AuthService,
+    LocalStrategy,
+    LoginBodyGuard,
+    { provide: LoginThrottle, useFactory: () => new LoginThrottle() },
+    { provide: APP_GUARD, useClass: SessionAuthGuard },
+  ],
+  exports: [AuthService],
+})
+export class AuthModule {}

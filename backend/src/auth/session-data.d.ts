@@ -1,0 +1,7 @@
+import '@fastify/session';
+
+declare module 'fastify' {
+  interface Session {
+    userId?: string;
+  }
+}

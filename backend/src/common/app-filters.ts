@@ -1,0 +1,9 @@
+import type { ExceptionFilter } from '@nestjs/common';
+
+/**
+ * Filters that modules add for their own error types (for example the engine's input errors → 400).
+ * Add a line here; they are tried before the catch-all database filter.
+ */
+export function appFilters(): ExceptionFilter[] {
+  return [];
+}

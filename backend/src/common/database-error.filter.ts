@@ -1,0 +1,46 @@
+import { ArgumentsHost, Catch, ExceptionFilter, HttpException, Logger } from '@nestjs/common';
+import type { FastifyReply } from 'fastify';
+
+interface PgError {
+  code?: string;
+  detail?: string;
+  constraint?: string;
+  cause?: PgError;
+}
+
+// Database refusals that mean "bad request", not "server broke".
+const CLIENT_CODES: Record<string, { status: number; message: string }> = {
+  '22P02': { status: 400, message: 'A value has the wrong form (for example an id that is not a uuid)' },
+  '22003': { status: 400, message: 'A number is out of range' },
+  '23505': { status: 409, message: 'That record already exists' },
+  '23503': { status: 400, message: 'A referenced record does not exist' },
+  '23514': { status: 400, message: 'A value breaks a rule of the record' },
+};
+
+/** Last line: known database refusals become 4xx with a message; anything else is logged as a 500. */
+@Catch()
+export class DatabaseErrorFilter implements ExceptionFilter {
+  private readonly logger = new Logger('Errors');
+
+  catch(exception: unknown, host: ArgumentsHost) {
+    const reply = host.switchToHttp().getResponse<FastifyReply>();
+    if (exception instanceof HttpException) {
+      reply.status(exception.getStatus()).send(exception.getResponse());
+      return;
+    }
+    const err = exception as PgError & { statusCode?: number; message?: string };
+    const code = err?.code ?? err?.cause?.code;
+    const known = code ? CLIENT_CODES[code] : undefined;
+    if (known) {
+      reply.status(known.status).send({ statusCode: known.status, message: known.message, error: code });
+      return;
+    }
+    // Fastify's own errors (bad JSON, body too large) carry their status.
+    if (err?.statusCode && err.statusCode >= 400 && err.statusCode < 500) {
+      reply.status(err.statusCode).send({ statusCode: err.statusCode, message: err.message });
+      return;
+    }
+    this.logger.error(exception instanceof Error ? exception.stack : String(exception));
+    reply.status(500).send({ statusCode: 500, message: 'Something went wrong on the server' });
+  }
+}

@@ -1,0 +1,29 @@
+import { Global, Inject, Module, OnApplicationShutdown } from '@nestjs/common';
+import { drizzle } from 'drizzle-orm/node-postgres';
+import pg from 'pg';
+import { loadConfig } from '../config/config.js';
+import * as schema from './schema/index.js';
+import { DRIZZLE, PG_POOL } from './database.tokens.js';
+
+@Global()
+@Module({
+  providers: [
+    {
+      provide: PG_POOL,
+      useFactory: () => new pg.Pool({ connectionString: loadConfig().databaseUrl, max: 10 }),
+    },
+    {
+      provide: DRIZZLE,
+      inject: [PG_POOL],
+      useFactory: (pool: pg.Pool) => drizzle(pool, { schema }),
+    },
+  ],
+  exports: [PG_POOL, DRIZZLE],
+})
+export class DatabaseModule implements OnApplicationShutdown {
+  constructor(@Inject(PG_POOL) private readonly pool: pg.Pool) {}
+
+  async onApplicationShutdown() {
+    await this.pool.end();
+  }
+}

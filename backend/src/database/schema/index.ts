@@ -1,0 +1,3 @@
+// Every table of the product, one file per domain concept. drizzle-kit reads this file.
+export * from './workshops.js';
+export * from './users.js';

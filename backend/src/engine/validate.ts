@@ -1,0 +1,92 @@
+import { EngineInputError } from './engine-input-error.js';
+
+/** Largest point count any computation accepts; keeps one request bounded in time and memory. */
+export const MAX_POINTS = 200_000;
+
+export function requireFinite(field: string, value: unknown): number {
+  if (typeof value !== 'number' || !Number.isFinite(value)) {
+    throw new EngineInputError(`${field} must be a finite number`, field);
+  }
+  return value;
+}
+
+export function requirePositive(field: string, value: unknown): number {
+  const v = requireFinite(field, value);
+  if (v <= 0) throw new EngineInputError(`${field} must be greater than zero`, field);
+  return v;
+}
+
+export function requireNonNegative(field: string, value: unknown): number {
+  const v = requireFinite(field, value);
+  if (v < 0) throw new EngineInputError(`${field} must not be negative`, field);
+  return v;
+}
+
+export function requirePositiveInteger(field: string, value: unknown): number {
+  const v = requirePositive(field, value);
+  if (!Number.isInteger(v)) throw new EngineInputError(`${field} must be a whole number`, field);
+  return v;
+}
+
+/** Checks an array of finite numbers with a minimum (and the global maximum) length. */
+export function requireNumberArray(field: string, values: unknown, minLength: number): number[] {
+  if (!Array.isArray(values)) throw new EngineInputError(`${field} must be a list of numbers`, field);
+  requireCount(field, values.length, minLength);
+  for (let i = 0; i < values.length; i++) {
+    const v = values[i];
+    if (typeof v !== 'number' || !Number.isFinite(v)) {
+      throw new EngineInputError(`${field}[${i}] must be a finite number`, field);
+    }
+  }
+  return values as number[];
+}
+
+export function requireCount(field: string, count: number, minLength: number): void {
+  if (count < minLength) {
+    throw new EngineInputError(
+      `${field} needs at least ${minLength} value${minLength === 1 ? '' : 's'} (got ${count})`,
+      field,
+    );
+  }
+  if (count > MAX_POINTS) {
+    throw new EngineInputError(`${field} has ${count} values; at most ${MAX_POINTS} are accepted`, field);
+  }
+}
+
+export function requireSameLength(fieldA: string, a: ArrayLike<unknown>, fieldB: string, b: ArrayLike<unknown>): void {
+  if (a.length !== b.length) {
+    throw new EngineInputError(
+      `${fieldA} and ${fieldB} must have the same length (${a.length} and ${b.length})`,
+      fieldB,
+    );
+  }
+}
+
+/**
+ * Returns the indices of `positions` in ascending order, or null when they already are ascending
+ * (the usual case for stations read along a rail, which then costs one pass and no sort).
+ * Throws on a repeated position.
+ */
+export function ascendingOrder(field: string, positions: ArrayLike<number>): Uint32Array | null {
+  const n = positions.length;
+  let ascending = true;
+  for (let i = 1; i < n; i++) {
+    if (positions[i] <= positions[i - 1]) {
+      ascending = false;
+      break;
+    }
+  }
+  if (ascending) return null;
+  const order = new Uint32Array(n);
+  for (let i = 0; i < n; i++) order[i] = i;
+  order.sort((a, b) => positions[a] - positions[b]);
+  for (let k = 1; k < n; k++) {
+    if (positions[order[k]] === positions[order[k - 1]]) {
+      throw new EngineInputError(
+        `${field} repeats the value ${positions[order[k]]} (at ${field}[${Math.min(order[k], order[k - 1])}] and ${field}[${Math.max(order[k], order[k - 1])}])`,
+        field,
+      );
+    }
+  }
+  return order;
+}

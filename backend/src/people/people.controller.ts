@@ -1,0 +1,27 @@
+import { Body, Controller, Get, Param, ParseUUIDPipe, Patch, Post } from '@nestjs/common';
+import { CurrentUser, Roles } from '../auth/decorators.js';
+import type { SessionUser } from '../auth/session-user.js';
+import { CreatePersonDto } from './dto/create-person.dto.js';
+import { UpdatePersonDto } from './dto/update-person.dto.js';
+import { PeopleService } from './people.service.js';
+
+@Controller('people')
+@Roles('admin')
+export class PeopleController {
+  constructor(private readonly people: PeopleService) {}
+
+  @Get()
+  list(@CurrentUser() user: SessionUser) {
+    return this.people.list(user);
+  }
+
+  @Post()
+  add(@CurrentUser() user: SessionUser, @Body() dto: CreatePersonDto) {
+    return this.people.add(user, dto);
+  }
+
+  @Patch(':id')
+  update(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string, @Body() dto: UpdatePersonDto) {
+    return this.people.update(user, id, dto);
+  }
+}
