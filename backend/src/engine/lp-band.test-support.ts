@@ -1,4 +1,10 @@
-import solver from 'javascript-lp-solver';
+import lpSolverModule from 'javascript-lp-solver';
+
+interface LpSolver {
+  Solve(model: unknown): Record<string, number | boolean | undefined>;
+}
+// The package's typings describe its CommonJS face; under ESM the default export is the solver.
+const solver: LpSolver = ((lpSolverModule as unknown as { default?: LpSolver }).default ?? lpSolverModule) as LpSolver;
 
 /**
  * Independent minimum-zone check: the vertical minimax band solved as a linear programme by a
@@ -27,7 +33,7 @@ export function lpBandWidth(x: readonly number[], y: readonly number[]): { width
     constraints,
     variables: { m, c, h },
     unrestricted: { m: 1, c: 1 },
-  } as any) as any;
+  });
   if (!result.feasible) throw new Error('LP band problem reported infeasible');
-  return { width: 2 * (result.h ?? 0), slope: result.m ?? 0 };
+  return { width: 2 * Number(result.h ?? 0), slope: Number(result.m ?? 0) };
 }

@@ -1,6 +1,6 @@
 import { fitLine } from './linear-fit.js';
 import { minimumZoneLine } from './minimum-zone.js';
-import { ascendingOrder, requireNumberArray, requireSameLength } from './validate.js';
+import { MAX_POINTS, ascendingOrder, requireNumberArray, requireSameLength } from './validate.js';
 
 /**
  * Straightness of a rail from indicator readings at stations along it (all in mm).
@@ -32,6 +32,11 @@ export interface StraightnessResult {
 
 export const MIN_STRAIGHTNESS_POINTS = 3;
 
+export interface StraightnessOptions {
+  /** Largest station count accepted (MAX_POINTS by default; the bench lifts it). */
+  maxPoints?: number;
+}
+
 function againstLine(
   positions: readonly number[],
   readings: readonly number[],
@@ -51,28 +56,29 @@ function againstLine(
   return { slope, interceptMm: intercept, straightnessMm: max - min, residualsMm: residuals };
 }
 
-function validated(input: StraightnessInput) {
-  const positions = requireNumberArray('positions', input.positionsMm, MIN_STRAIGHTNESS_POINTS);
-  const readings = requireNumberArray('readings', input.readingsMm, 0);
+function validated(input: StraightnessInput, options: StraightnessOptions) {
+  const max = options.maxPoints ?? MAX_POINTS;
+  const positions = requireNumberArray('positions', input.positionsMm, MIN_STRAIGHTNESS_POINTS, max);
+  const readings = requireNumberArray('readings', input.readingsMm, 0, max);
   requireSameLength('positions', positions, 'readings', readings);
   const order = ascendingOrder('positions', positions);
   return { positions, readings, order };
 }
 
-export function leastSquaresStraightness(input: StraightnessInput): ReferenceLineResult {
-  const { positions, readings } = validated(input);
+export function leastSquaresStraightness(input: StraightnessInput, options: StraightnessOptions = {}): ReferenceLineResult {
+  const { positions, readings } = validated(input, options);
   const fit = fitLine(positions, readings);
   return againstLine(positions, readings, fit.slope, fit.intercept);
 }
 
-export function minimumZoneStraightness(input: StraightnessInput): ReferenceLineResult {
-  const { positions, readings, order } = validated(input);
+export function minimumZoneStraightness(input: StraightnessInput, options: StraightnessOptions = {}): ReferenceLineResult {
+  const { positions, readings, order } = validated(input, options);
   const zone = minimumZoneLine(positions, readings, order);
   return againstLine(positions, readings, zone.slope, zone.intercept);
 }
 
-export function endPointStraightness(input: StraightnessInput): ReferenceLineResult {
-  const { positions, readings, order } = validated(input);
+export function endPointStraightness(input: StraightnessInput, options: StraightnessOptions = {}): ReferenceLineResult {
+  const { positions, readings, order } = validated(input, options);
   return endPointFrom(positions, readings, order);
 }
 
@@ -84,8 +90,8 @@ function endPointFrom(positions: readonly number[], readings: readonly number[],
   return againstLine(positions, readings, slope, intercept);
 }
 
-export function evaluateStraightness(input: StraightnessInput): StraightnessResult {
-  const { positions, readings, order } = validated(input);
+export function evaluateStraightness(input: StraightnessInput, options: StraightnessOptions = {}): StraightnessResult {
+  const { positions, readings, order } = validated(input, options);
   const fit = fitLine(positions, readings);
   const zone = minimumZoneLine(positions, readings, order);
   return {

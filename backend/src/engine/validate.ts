@@ -1,4 +1,5 @@
 import { EngineInputError } from './engine-input-error.js';
+import { sortedOrder } from './sort-order.js';
 
 /** Largest point count any computation accepts; keeps one request bounded in time and memory. */
 export const MAX_POINTS = 200_000;
@@ -29,9 +30,9 @@ export function requirePositiveInteger(field: string, value: unknown): number {
 }
 
 /** Checks an array of finite numbers with a minimum (and the global maximum) length. */
-export function requireNumberArray(field: string, values: unknown, minLength: number): number[] {
+export function requireNumberArray(field: string, values: unknown, minLength: number, maxLength = MAX_POINTS): number[] {
   if (!Array.isArray(values)) throw new EngineInputError(`${field} must be a list of numbers`, field);
-  requireCount(field, values.length, minLength);
+  requireCount(field, values.length, minLength, maxLength);
   for (let i = 0; i < values.length; i++) {
     const v = values[i];
     if (typeof v !== 'number' || !Number.isFinite(v)) {
@@ -41,15 +42,15 @@ export function requireNumberArray(field: string, values: unknown, minLength: nu
   return values as number[];
 }
 
-export function requireCount(field: string, count: number, minLength: number): void {
+export function requireCount(field: string, count: number, minLength: number, maxLength = MAX_POINTS): void {
   if (count < minLength) {
     throw new EngineInputError(
       `${field} needs at least ${minLength} value${minLength === 1 ? '' : 's'} (got ${count})`,
       field,
     );
   }
-  if (count > MAX_POINTS) {
-    throw new EngineInputError(`${field} has ${count} values; at most ${MAX_POINTS} are accepted`, field);
+  if (count > maxLength) {
+    throw new EngineInputError(`${field} has ${count} values; at most ${maxLength} are accepted`, field);
   }
 }
 
@@ -77,16 +78,18 @@ export function ascendingOrder(field: string, positions: ArrayLike<number>): Uin
     }
   }
   if (ascending) return null;
-  const order = new Uint32Array(n);
-  for (let i = 0; i < n; i++) order[i] = i;
-  order.sort((a, b) => positions[a] - positions[b]);
+  const order = sortedOrder(positions);
+  let previous = positions[order[0]];
   for (let k = 1; k < n; k++) {
-    if (positions[order[k]] === positions[order[k - 1]]) {
-      throw new EngineInputError(
-        `${field} repeats the value ${positions[order[k]]} (at ${field}[${Math.min(order[k], order[k - 1])}] and ${field}[${Math.max(order[k], order[k - 1])}])`,
-        field,
-      );
-    }
+    const v = positions[order[k]];
+    if (v === previous) throw repeatedValue(field, positions, v);
+    previous = v;
   }
   return order;
+}
+
+function repeatedValue(field: string, positions: ArrayLike<number>, value: number): EngineInputError {
+  const at: number[] = [];
+  for (let i = 0; i < positions.length && at.length < 2; i++) if (positions[i] === value) at.push(i);
+  return new EngineInputError(`${field} repeats the value ${value} (at ${field}[${at[0]}] and ${field}[${at[1]}])`, field);
 }
