@@ -9,6 +9,8 @@ export interface SeedContext {
   demo: { workshopId: string; people: Record<Role, SessionUser> };
   /** A second invented workshop, so isolation can be seen. */
   other: { workshopId: string; people: { owner: SessionUser } };
+  /** The demo machines, once seeded: a plasma table being commissioned and an approved router. */
+  machines?: { plasma: string; router: string; other: string };
 }
 
 export const DEMO_PASSWORD = 'railwright-demo';

@@ -3,6 +3,8 @@ import { AuthModule } from './auth/auth.module.js';
 import { DatabaseModule } from './database/database.module.js';
 import { HealthModule } from './health/health.module.js';
 import { PeopleModule } from './people/people.module.js';
+import { RecordsModule } from './records/records.module.js';
+import { MachinesModule } from './machines/machines.module.js';
 
 // One line per domain module.
 @Module({
@@ -11,6 +13,8 @@ import { PeopleModule } from './people/people.module.js';
     AuthModule,
     HealthModule,
     PeopleModule,
+    RecordsModule,
+    MachinesModule,
   ],
 })
 export class AppModule {}

@@ -41,6 +41,6 @@ export async function configureApp(app: NestFastifyApplication, config: AppConfi
   if (dist) {
     await app.register(fastifyStatic as never, { root: dist, prefix: '/', index: false, wildcard: true, maxAge: '1h' });
   }
-  // Order matters: Nest tries the last registered filter first.
+  // Nest tries the last registered filter first: the catch-all goes first, the page fallback last.
   app.useGlobalFilters(new DatabaseErrorFilter(), ...appFilters(), new SpaFallbackFilter(dist));
 }

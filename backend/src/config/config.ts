@@ -1,3 +1,4 @@
+import { existsSync } from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 
@@ -15,12 +16,14 @@ export interface AppConfig {
 
 let cached: AppConfig | null = null;
 
+/** The clone's top folder: the first parent holding both backend/ and frontend/. */
 function repoRoot(): string {
-  // src/config or dist/backend/src/config: walk up to the folder holding backend/.
-  const here = path.dirname(fileURLToPath(import.meta.url));
-  const marker = `${path.sep}backend${path.sep}`;
-  const at = here.lastIndexOf(marker);
-  return at >= 0 ? here.slice(0, at) : path.resolve(here, '../../..');
+  let dir = path.dirname(fileURLToPath(import.meta.url));
+  for (let i = 0; i < 10; i++) {
+    if (existsSync(path.join(dir, 'backend', 'package.json')) && existsSync(path.join(dir, 'frontend'))) return dir;
+    dir = path.dirname(dir);
+  }
+  return process.cwd();
 }
 
 /** Reads and checks the environment once; a bad value stops the boot with a clear message. */

@@ -10,7 +10,12 @@ import { DRIZZLE, PG_POOL } from './database.tokens.js';
   providers: [
     {
       provide: PG_POOL,
-      useFactory: () => new pg.Pool({ connectionString: loadConfig().databaseUrl, max: 10 }),
+      useFactory: () => {
+        const pool = new pg.Pool({ connectionString: loadConfig().databaseUrl, max: 10 });
+        // An idle connection dropped by the server must not take the process down; the pool reconnects.
+        pool.on('error', (err) => console.error(`Database connection lost: ${err.message}`));
+        return pool;
+      },
     },
     {
       provide: DRIZZLE,

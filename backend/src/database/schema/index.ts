@@ -1,3 +1,6 @@
 // Every table of the product, one file per domain concept. drizzle-kit reads this file.
 export * from './workshops.js';
 export * from './users.js';
+export * from './target-sets.js';
+export * from './machines.js';
+export * from './records.js';

@@ -1,0 +1,30 @@
+import { index, integer, pgTable, real, text, timestamp, uuid } from 'drizzle-orm/pg-core';
+import { id, timestamps } from './columns.js';
+import { workshops } from './workshops.js';
+import { targetSets } from './target-sets.js';
+
+export const MACHINE_KINDS = ['plasma', 'router', 'other'] as const;
+export type MachineKind = (typeof MACHINE_KINDS)[number];
+
+export const MACHINE_STATES = ['being-built', 'awaiting-approval', 'ready-to-cut', 'recheck-due', 'retired'] as const;
+export type MachineState = (typeof MACHINE_STATES)[number];
+
+export const machines = pgTable(
+  'machines',
+  {
+    id: id(),
+    workshopId: uuid('workshop_id').notNull().references(() => workshops.id),
+    name: text('name').notNull(),
+    kind: text('kind', { enum: MACHINE_KINDS }).notNull(),
+    workAreaXMm: real('work_area_x_mm').notNull(),
+    workAreaYMm: real('work_area_y_mm').notNull(),
+    notes: text('notes').notNull().default(''),
+    targetSetId: uuid('target_set_id').notNull().references(() => targetSets.id),
+    state: text('state', { enum: MACHINE_STATES }).notNull().default('being-built'),
+    /** Bumped on every change, so optimistic edits can be refused when stale. */
+    version: integer('version').notNull().default(1),
+    lastActivityAt: timestamp('last_activity_at', { withTimezone: true }).notNull().defaultNow(),
+    ...timestamps,
+  },
+  (t) => [index('machines_workshop_idx').on(t.workshopId)],
+);

@@ -1,0 +1,36 @@
+import { index, jsonb, pgTable, text, timestamp, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
+import { id } from './columns.js';
+import { workshops } from './workshops.js';
+import { users } from './users.js';
+
+/** Who changed what, when: every create, update and delete of every record of a machine. */
+export const auditEntries = pgTable(
+  'audit_entries',
+  {
+    id: id(),
+    workshopId: uuid('workshop_id').notNull().references(() => workshops.id),
+    machineId: uuid('machine_id'),
+    recordType: text('record_type').notNull(),
+    recordId: uuid('record_id'),
+    action: text('action').notNull(),
+    summary: text('summary').notNull().default(''),
+    changes: jsonb('changes').$type<Record<string, unknown>>(),
+    actorId: uuid('actor_id').references(() => users.id),
+    actorName: text('actor_name').notNull(),
+    at: timestamp('at', { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index('audit_machine_idx').on(t.machineId, t.at), index('audit_workshop_idx').on(t.workshopId)],
+);
+
+/** A record that an approval was based on; it can no longer be edited or deleted. */
+export const recordLocks = pgTable(
+  'record_locks',
+  {
+    id: id(),
+    recordType: text('record_type').notNull(),
+    recordId: uuid('record_id').notNull(),
+    approvalId: uuid('approval_id').notNull(),
+    lockedAt: timestamp('locked_at', { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [uniqueIndex('record_locks_unique').on(t.recordType, t.recordId, t.approvalId), index('record_locks_record_idx').on(t.recordType, t.recordId)],
+);

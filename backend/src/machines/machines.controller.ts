@@ -1,0 +1,38 @@
+import { Body, Controller, Get, Param, ParseUUIDPipe, Patch, Post } from '@nestjs/common';
+import { CurrentUser, RECORDERS, Roles } from '../auth/decorators.js';
+import type { SessionUser } from '../auth/session-user.js';
+import { CreateMachineDto } from './dto/create-machine.dto.js';
+import { UpdateMachineDto } from './dto/update-machine.dto.js';
+import { MachinesService } from './machines.service.js';
+
+@Controller('machines')
+export class MachinesController {
+  constructor(private readonly machines: MachinesService) {}
+
+  @Get()
+  list(@CurrentUser() user: SessionUser) {
+    return this.machines.list(user);
+  }
+
+  @Post()
+  @Roles(...RECORDERS)
+  create(@CurrentUser() user: SessionUser, @Body() dto: CreateMachineDto) {
+    return this.machines.create(user, dto);
+  }
+
+  @Get(':id')
+  get(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string) {
+    return this.machines.get(user, id);
+  }
+
+  @Patch(':id')
+  @Roles(...RECORDERS)
+  update(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string, @Body() dto: UpdateMachineDto) {
+    return this.machines.update(user, id, dto);
+  }
+
+  @Get(':id/history')
+  history(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string) {
+    return this.machines.history(user, id);
+  }
+}

@@ -1,0 +1,43 @@
+import { Inject, Injectable } from '@nestjs/common';
+import { and, desc, eq } from 'drizzle-orm';
+import { DRIZZLE, type Database } from '../database/database.tokens.js';
+import { machines, targetSets } from '../database/schema/index.js';
+import type { MachineRow } from './machine.mapper.js';
+
+@Injectable()
+export class MachinesRepository {
+  constructor(@Inject(DRIZZLE) private readonly db: Database) {}
+
+  list(workshopId: string) {
+    return this.db
+      .select({ machine: machines, targetSetName: targetSets.name })
+      .from(machines)
+      .innerJoin(targetSets, eq(targetSets.id, machines.targetSetId))
+      .where(eq(machines.workshopId, workshopId))
+      .orderBy(desc(machines.lastActivityAt));
+  }
+
+  async find(workshopId: string, id: string) {
+    const [row] = await this.db
+      .select({ machine: machines, targetSetName: targetSets.name })
+      .from(machines)
+      .innerJoin(targetSets, eq(targetSets.id, machines.targetSetId))
+      .where(and(eq(machines.workshopId, workshopId), eq(machines.id, id)));
+    return row ?? null;
+  }
+
+  async insert(values: typeof machines.$inferInsert): Promise<MachineRow> {
+    const [row] = await this.db.insert(machines).values(values).returning();
+    return row;
+  }
+
+  async update(workshopId: string, id: string, values: Partial<typeof machines.$inferInsert>): Promise<MachineRow> {
+    const [current] = await this.db.select({ version: machines.version }).from(machines).where(eq(machines.id, id));
+    const [row] = await this.db
+      .update(machines)
+      .set({ ...values, version: (current?.version ?? 0) + 1, updatedAt: new Date(), lastActivityAt: new Date() })
+      .where(and(eq(machines.workshopId, workshopId), eq(machines.id, id)))
+      .returning();
+    return row;
+  }
+}

@@ -1,0 +1,117 @@
+import { Injectable, NotFoundException } from '@nestjs/common';
+import type { SessionUser } from '../auth/session-user.js';
+import type { MachineState } from '../database/schema/machines.js';
+import type { MachineRef } from '../records/readiness.js';
+import { ReadinessRegistry } from '../records/readiness.registry.js';
+import { RecordsService } from '../records/records.service.js';
+import { TargetSetsService } from '../target-sets/target-sets.service.js';
+import { countChecks, toMachineResponse, type MachineListItem, type MachineResponse, type MachineRow } from './machine.mapper.js';
+import { MachinesRepository } from './machines.repository.js';
+import type { CreateMachineDto } from './dto/create-machine.dto.js';
+import type { UpdateMachineDto } from './dto/update-machine.dto.js';
+
+@Injectable()
+export class MachinesService {
+  constructor(
+    private readonly repo: MachinesRepository,
+    private readonly targetSets: TargetSetsService,
+    private readonly records: RecordsService,
+    private readonly readiness: ReadinessRegistry,
+  ) {}
+
+  async list(actor: SessionUser): Promise<MachineListItem[]> {
+    const rows = await this.repo.list(actor.workshopId);
+    return Promise.all(
+      rows.map(async ({ machine, targetSetName }) => ({
+        ...toMachineResponse(machine, targetSetName),
+        checks: countChecks(await this.readiness.checksFor(toRef(machine))),
+      })),
+    );
+  }
+
+  async get(actor: SessionUser, id: string): Promise<MachineResponse> {
+    const found = await this.repo.find(actor.workshopId, id);
+    if (!found) throw new NotFoundException('No such machine in this workshop');
+    return toMachineResponse(found.machine, found.targetSetName);
+  }
+
+  /** The machine as other modules need it; another workshop's machine is a 404. */
+  async getRef(actor: SessionUser | { workshopId: string }, id: string): Promise<MachineRef & { name: string; state: MachineState }> {
+    const found = await this.repo.find(actor.workshopId, id);
+    if (!found) throw new NotFoundException('No such machine in this workshop');
+    return { ...toRef(found.machine), name: found.machine.name, state: found.machine.state };
+  }
+
+  async create(actor: SessionUser, dto: CreateMachineDto): Promise<MachineResponse> {
+    const sets = await this.targetSets.ensureDefaults(actor.workshopId);
+    let targetSetId = dto.targetSetId;
+    if (targetSetId) await this.targetSets.findRow(actor.workshopId, targetSetId);
+    else targetSetId = (sets.find((s) => s.name.toLowerCase().startsWith(dto.kind === 'router' ? 'router' : 'plasma')) ?? sets[0]).id;
+    const row = await this.repo.insert({
+      workshopId: actor.workshopId,
+      name: dto.name.trim(),
+      kind: dto.kind,
+      workAreaXMm: dto.workArea.x,
+      workAreaYMm: dto.workArea.y,
+      notes: dto.notes ?? '',
+      targetSetId,
+    });
+    await this.records.audit(actor, { machineId: row.id, recordType: 'machine', recordId: row.id, action: 'created', summary: `Machine file ${row.name} opened` });
+    return this.get(actor, row.id);
+  }
+
+  async update(actor: SessionUser, id: string, dto: UpdateMachineDto): Promise<MachineResponse> {
+    const before = await this.get(actor, id);
+    if (dto.targetSetId) await this.targetSets.findRow(actor.workshopId, dto.targetSetId);
+    await this.repo.update(actor.workshopId, id, {
+      name: dto.name?.trim(),
+      kind: dto.kind,
+      workAreaXMm: dto.workArea?.x,
+      workAreaYMm: dto.workArea?.y,
+      notes: dto.notes,
+      targetSetId: dto.targetSetId,
+    });
+    const after = await this.get(actor, id);
+    await this.records.audit(actor, {
+      machineId: id,
+      recordType: 'machine',
+      recordId: id,
+      action: 'updated',
+      summary: `Machine file ${after.name} changed`,
+      changes: diff(before, after),
+    });
+    return after;
+  }
+
+  /** Used by approvals to move the machine between states. */
+  async setState(workshopId: string, id: string, state: MachineState): Promise<void> {
+    await this.repo.update(workshopId, id, { state });
+  }
+
+  async history(actor: SessionUser, id: string) {
+    await this.getRef(actor, id);
+    const rows = await this.records.history(actor.workshopId, id);
+    return rows.map((r) => ({
+      id: r.id,
+      at: r.at.toISOString(),
+      actor: r.actorName,
+      recordType: r.recordType,
+      recordId: r.recordId,
+      action: r.action,
+      summary: r.summary,
+      changes: r.changes,
+    }));
+  }
+}
+
+function toRef(m: MachineRow): MachineRef {
+  return { id: m.id, workshopId: m.workshopId, targetSetId: m.targetSetId, kind: m.kind, workAreaXMm: m.workAreaXMm, workAreaYMm: m.workAreaYMm };
+}
+
+function diff(before: MachineResponse, after: MachineResponse): Record<string, unknown> {
+  const out: Record<string, unknown> = {};
+  for (const key of ['name', 'kind', 'notes', 'workArea', 'targetSet'] as const) {
+    if (JSON.stringify(before[key]) !== JSON.stringify(after[key])) out[key] = { from: before[key], to: after[key] };
+  }
+  return out;
+}

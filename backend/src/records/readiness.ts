@@ -1,0 +1,48 @@
+import type { TargetValue } from '../database/schema/target-sets.js';
+
+export type CheckStatus = 'not-started' | 'within-target' | 'outside-target' | 'waived';
+
+/**
+ * One required check of a machine as the readiness board shows it. Each domain module reports
+ * its own checks (rails, drives, frame, safety); the approvals module puts them together.
+ */
+export interface ReadinessCheck {
+  /** Stable across rounds: the same check of the same subject keeps its key (e.g. "straightness:<railId>"). */
+  key: string;
+  kind:
+    | 'rail-straightness'
+    | 'rail-parallelism'
+    | 'travel-trial'
+    | 'positioning'
+    | 'speed-check'
+    | 'travel-envelope'
+    | 'diagonal-check'
+    | 'bed-grid'
+    | 'test-cut'
+    | 'safety-walk';
+  /** What is checked, in words: "Rail Y1 (left)", "Axis X". */
+  subject: string;
+  status: Exclude<CheckStatus, 'waived'>;
+  target: (TargetValue & { label?: string }) | null;
+  /** The headline result in a display unit, with a one-line summary. */
+  result: { value: number; unit: string; summary: string } | null;
+  /** The record the result comes from; approvals lock it. */
+  recordType: string | null;
+  recordId: string | null;
+  recordedAt: string | null;
+  /** Client path to the evidence. */
+  link: string;
+}
+
+export interface MachineRef {
+  id: string;
+  workshopId: string;
+  targetSetId: string;
+  kind: string;
+  workAreaXMm: number;
+  workAreaYMm: number;
+}
+
+export interface ReadinessContributor {
+  checksFor(machine: MachineRef): Promise<ReadinessCheck[]>;
+}

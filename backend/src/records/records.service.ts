@@ -1,0 +1,85 @@
+import { ConflictException, Injectable, Logger } from '@nestjs/common';
+import type { SessionUser } from '../auth/session-user.js';
+import type { CheckStatus } from './readiness.js';
+import { RecordsRepository } from './records.repository.js';
+
+export interface AuditInput {
+  machineId?: string | null;
+  recordType: string;
+  recordId?: string | null;
+  action: string;
+  summary: string;
+  changes?: Record<string, unknown>;
+}
+
+export interface CheckRecordedEvent {
+  machineId: string;
+  kind: string;
+  recordType: string;
+  recordId: string;
+  status: CheckStatus;
+}
+
+type Listener = (actor: SessionUser, event: CheckRecordedEvent) => Promise<void>;
+
+/**
+ * What every record of a machine goes through: the audit history, the approval locks, and the
+ * "a check was recorded" signal (the machine's last activity, and approvals reacting to it).
+ */
+@Injectable()
+export class RecordsService {
+  private readonly logger = new Logger(RecordsService.name);
+  private readonly listeners: Listener[] = [];
+
+  constructor(private readonly repo: RecordsRepository) {}
+
+  async audit(actor: SessionUser, input: AuditInput): Promise<void> {
+    await this.repo.insertAudit({
+      workshopId: actor.workshopId,
+      machineId: input.machineId ?? null,
+      recordType: input.recordType,
+      recordId: input.recordId ?? null,
+      action: input.action,
+      summary: input.summary,
+      changes: input.changes ?? null,
+      actorId: actor.id,
+      actorName: actor.name,
+    });
+    if (input.machineId) await this.repo.touchMachine(input.machineId);
+  }
+
+  /** Call after saving a check's result: audits it and lets approvals react (e.g. leave ready-to-cut). */
+  async checkRecorded(actor: SessionUser, event: CheckRecordedEvent, summary: string): Promise<void> {
+    await this.audit(actor, { machineId: event.machineId, recordType: event.recordType, recordId: event.recordId, action: 'recorded', summary, changes: { status: event.status } });
+    for (const listener of this.listeners) {
+      try {
+        await listener(actor, event);
+      } catch (err) {
+        this.logger.error(`check listener failed: ${(err as Error).message}`);
+      }
+    }
+  }
+
+  onCheckRecorded(listener: Listener): void {
+    this.listeners.push(listener);
+  }
+
+  /** Refuses (409) a change to a record that an approval was based on. */
+  async assertEditable(recordType: string, recordId: string, what = 'This record'): Promise<void> {
+    if (await this.repo.lockOf(recordType, recordId)) {
+      throw new ConflictException(`${what} is part of an approved commissioning record and can no longer be changed or deleted. Record a new check instead.`);
+    }
+  }
+
+  lockedIds(recordType: string, recordIds: string[]): Promise<Set<string>> {
+    return this.repo.lockedIds(recordType, recordIds);
+  }
+
+  lock(approvalId: string, refs: { recordType: string; recordId: string }[]): Promise<void> {
+    return this.repo.insertLocks(approvalId, refs);
+  }
+
+  history(workshopId: string, machineId: string, limit = 500) {
+    return this.repo.history(workshopId, machineId, limit);
+  }
+}

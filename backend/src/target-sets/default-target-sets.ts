@@ -1,0 +1,42 @@
+import type { TargetValue } from '../database/schema/target-sets.js';
+import type { TargetKey } from './target-keys.js';
+
+// Starting values are common practice, not a standard; the owner edits them per workshop.
+const CP = 'common practice';
+
+export const PLASMA_DEFAULTS: Record<TargetKey, TargetValue> = {
+  railStraightness: { value: 2, unit: 'thou', source: `${CP}: one to two thou over a rail's length for a carefully built plasma table` },
+  railParallelism: { value: 2, unit: 'thou', source: `${CP}: one to two thou between partner rails` },
+  railHeightDifference: { value: 0.25, unit: 'mm', source: `${CP}: coarser than a rail maker's 0.13 mm at 500 mm spacing for light preload` },
+  squareness: { value: 0.5, unit: 'mm/m', source: `${CP}: 0.5–1 mm diagonal difference over a sheet-sized test` },
+  bedFlatness: { value: 0.03, unit: 'in', source: `${CP}: torch height over the cutting area within about 0.03 in` },
+  stepsPerMmError: { value: 0.1, unit: '%', source: `${CP}: 1 mm in a metre is visible on a sheet part` },
+  reversal: { value: 0.1, unit: 'mm', source: `${CP}: backlash well under the kerf variation` },
+  repeatability: { value: 0.1, unit: 'mm', source: CP },
+  positioningAccuracy: { value: 0.3, unit: 'mm', source: `${CP}: rack drives are adequate for sheet cutting at 0.2–0.3 mm` },
+  screwSpeedHeadroom: { value: 10, unit: '%', source: `${CP}: keep the fastest feed at least 10 % below the permissible screw speed` },
+  travelMargin: { value: 25, unit: 'mm', source: `${CP}: room to pierce and lead in beyond the sheet edge` },
+  partTolerance: { value: 0.9, unit: 'mm', source: 'ISO 9013 class 2, about ±0.9 mm on 35–125 mm parts in 3–6 mm plate (thermal cutting)' },
+  recheckIntervalDays: { value: 180, unit: 'days', source: `${CP}: twice a year, and after any crash or move` },
+};
+
+export const ROUTER_DEFAULTS: Record<TargetKey, TargetValue> = {
+  railStraightness: { value: 20, unit: 'um', source: `${CP}: finer than a plasma table` },
+  railParallelism: { value: 25, unit: 'um', source: "One rail maker's permissible parallelism for light preload, sizes 15/20" },
+  railHeightDifference: { value: 0.13, unit: 'mm', source: "One rail maker's permissible height difference at 500 mm spacing, light preload" },
+  squareness: { value: 0.2, unit: 'mm/m', source: `${CP}: 0.1–0.25 mm diagonal difference on a 500–1000 mm square` },
+  bedFlatness: { value: 0.1, unit: 'mm', source: `${CP}: spoilboard surfaced flat to about a tenth` },
+  stepsPerMmError: { value: 0.05, unit: '%', source: CP },
+  reversal: { value: 0.03, unit: 'mm', source: CP },
+  repeatability: { value: 0.03, unit: 'mm', source: CP },
+  positioningAccuracy: { value: 0.1, unit: 'mm', source: `${CP}: routers are judged in tenths of a millimetre` },
+  screwSpeedHeadroom: { value: 10, unit: '%', source: `${CP}: keep the fastest feed at least 10 % below the permissible screw speed` },
+  travelMargin: { value: 10, unit: 'mm', source: `${CP}: room for the cutter radius and a clamp` },
+  partTolerance: { value: 0.2, unit: 'mm', source: `${CP}: routers are judged in tenths of a millimetre` },
+  recheckIntervalDays: { value: 90, unit: 'days', source: `${CP}: quarterly, and after any crash or move` },
+};
+
+export const DEFAULT_TARGET_SETS = [
+  { name: 'Plasma table (default)', description: 'Starting tolerances for a carefully built plasma table; common practice, not a standard.', targets: PLASMA_DEFAULTS },
+  { name: 'Router (default)', description: 'Finer starting tolerances for a router or engraver; common practice, not a standard.', targets: ROUTER_DEFAULTS },
+];

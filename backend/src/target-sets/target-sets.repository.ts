@@ -1,0 +1,36 @@
+import { Inject, Injectable } from '@nestjs/common';
+import { and, asc, eq } from 'drizzle-orm';
+import { DRIZZLE, type Database } from '../database/database.tokens.js';
+import { targetSets, type TargetValue } from '../database/schema/index.js';
+import type { TargetSetRow } from './target-set.mapper.js';
+
+@Injectable()
+export class TargetSetsRepository {
+  constructor(@Inject(DRIZZLE) private readonly db: Database) {}
+
+  list(workshopId: string): Promise<TargetSetRow[]> {
+    return this.db.select().from(targetSets).where(eq(targetSets.workshopId, workshopId)).orderBy(asc(targetSets.createdAt));
+  }
+
+  async find(workshopId: string, id: string): Promise<TargetSetRow | null> {
+    const [row] = await this.db
+      .select()
+      .from(targetSets)
+      .where(and(eq(targetSets.workshopId, workshopId), eq(targetSets.id, id)));
+    return row ?? null;
+  }
+
+  async insert(workshopId: string, values: { name: string; description: string; targets: Record<string, TargetValue> }) {
+    const [row] = await this.db.insert(targetSets).values({ workshopId, ...values }).returning();
+    return row;
+  }
+
+  async update(workshopId: string, id: string, values: Partial<{ name: string; description: string; targets: Record<string, TargetValue> }>) {
+    const [row] = await this.db
+      .update(targetSets)
+      .set({ ...values, updatedAt: new Date() })
+      .where(and(eq(targetSets.workshopId, workshopId), eq(targetSets.id, id)))
+      .returning();
+    return row;
+  }
+}

@@ -1,0 +1,69 @@
+import { expect, test } from '@playwright/test';
+import { DEMO, signInAs, snap } from './support/session';
+
+const EVERYONE = ['Machines', 'Target sets', 'Calculators'];
+
+test.describe('sign-in and the app frame', () => {
+  for (const [role, email] of Object.entries(DEMO).filter(([r]) => r !== 'other')) {
+    test(`${role} signs in and sees the navigation for the role`, async ({ page }) => {
+      await signInAs(page, email);
+      await expect(page.getByTestId('workshop-name')).toHaveText('Harbour Lane Fabrication');
+      const nav = page.getByRole('navigation', { name: 'Main' });
+      for (const label of EVERYONE) await expect(nav.getByRole('link', { name: label })).toBeVisible();
+      if (role === 'admin') await expect(nav.getByRole('link', { name: 'People' })).toBeVisible();
+      else await expect(nav.getByRole('link', { name: 'People' })).toHaveCount(0);
+    });
+  }
+
+  test('a wrong password shows one clear message and no session', async ({ page }) => {
+    await page.goto('/sign-in');
+    await page.getByLabel('E-mail').fill(DEMO.owner);
+    await page.getByLabel('Password').fill('not-the-password');
+    await page.getByRole('button', { name: 'Sign in' }).click();
+    await expect(page.getByRole('alert')).toContainText('do not match');
+    await page.goto('/machines');
+    await expect(page).toHaveURL(/sign-in/);
+  });
+
+  test('the second workshop sees its own name only', async ({ page }) => {
+    await signInAs(page, DEMO.other);
+    await expect(page.getByTestId('workshop-name')).toHaveText('Kestrel Yard Makerspace');
+  });
+
+  test('client routes survive a reload, unknown pages say so, and sign-out works', async ({ page }) => {
+    await signInAs(page, DEMO.admin);
+    await page.goto('/people');
+    await expect(page.getByRole('table', { name: 'Members' })).toBeVisible();
+    await page.reload();
+    await expect(page.getByRole('table', { name: 'Members' })).toContainText('viewer@example.com');
+    await snap(page, 'frame-people-desktop');
+    await page.goto('/no/such/page');
+    await expect(page.getByText('Page not found')).toBeVisible();
+    await page.getByRole('button', { name: 'Sign out' }).click();
+    await expect(page).toHaveURL(/sign-in/);
+  });
+
+  test('the frame works at tablet size with a navigation drawer', async ({ page }) => {
+    await page.setViewportSize({ width: 820, height: 1180 });
+    await signInAs(page, DEMO.technician);
+    await page.getByRole('button', { name: 'Open navigation' }).click();
+    await expect(page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Calculators' })).toBeVisible();
+    await snap(page, 'frame-tablet-drawer');
+  });
+
+  test('an admin adds a member who can sign in with the password shown once', async ({ page, browser }) => {
+    await signInAs(page, DEMO.admin);
+    await page.goto('/people');
+    await page.getByRole('button', { name: 'Add member' }).click();
+    const email = `new.${Date.now()}@example.com`;
+    await page.getByLabel('Name').fill('Nell Carver');
+    await page.getByLabel('E-mail').fill(email);
+    await page.getByRole('dialog').getByRole('button', { name: 'Add member' }).click();
+    const password = (await page.getByTestId('temporary-password').textContent())!.trim();
+    await page.getByRole('button', { name: 'Done' }).click();
+    await expect(page.getByRole('table', { name: 'Members' })).toContainText('Nell Carver');
+    const other = await browser.newPage();
+    await signInAs(other, email, password);
+    await other.close();
+  });
+});

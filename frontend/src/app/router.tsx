@@ -1,0 +1,25 @@
+import { createBrowserRouter, Navigate, RouterProvider } from 'react-router-dom';
+import { paths } from '../config/paths';
+import { SignedInLayout } from './routes/signed-in-layout';
+import { SignInRoute } from './routes/sign-in';
+import { NotFoundRoute } from './routes/not-found';
+
+// Pages load on demand so the sign-in screen stays light.
+const page = (load: () => Promise<{ default: React.ComponentType }>) => async () => ({ Component: (await load()).default });
+
+const router = createBrowserRouter([
+  { path: paths.signIn, Component: SignInRoute },
+  {
+    Component: SignedInLayout,
+    children: [
+      { index: true, element: <Navigate to={paths.machines} replace /> },
+      { path: paths.people, lazy: page(() => import('./routes/people')) },
+      // Feature routes: one line each.
+      { path: '*', Component: NotFoundRoute },
+    ],
+  },
+]);
+
+export function AppRouter() {
+  return <RouterProvider router={router} />;
+}

@@ -1,0 +1,10 @@
+/** Every route path of the app, so links are never typed twice. */
+export const paths = {
+  signIn: '/sign-in',
+  home: '/',
+  machines: '/machines',
+  machine: (id: string) => `/machines/${id}`,
+  calculators: '/calculators',
+  targetSets: '/target-sets',
+  people: '/people',
+} as const;

@@ -1,0 +1,18 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { api } from '../../../lib/api-client';
+import type { Role } from '../../auth/types';
+import { peopleKeys, type Person } from '../types';
+
+export interface AddPersonInput {
+  name: string;
+  email: string;
+  role: Role;
+}
+
+export function useAddPerson() {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (input: AddPersonInput) => api.post<{ person: Person; temporaryPassword?: string; invitationSent?: boolean }>('/people', input),
+    onSuccess: () => qc.invalidateQueries({ queryKey: peopleKeys.all }),
+  });
+}

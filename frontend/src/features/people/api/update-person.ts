@@ -1,0 +1,12 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { api } from '../../../lib/api-client';
+import type { Role } from '../../auth/types';
+import { peopleKeys, type Person } from '../types';
+
+export function useUpdatePerson() {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: ({ id, ...patch }: { id: string; role?: Role; active?: boolean }) => api.patch<Person>(`/people/${id}`, patch),
+    onSettled: () => qc.invalidateQueries({ queryKey: peopleKeys.all }),
+  });
+}

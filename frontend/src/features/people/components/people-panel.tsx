@@ -1,0 +1,81 @@
+import { useState } from 'react';
+import { Alert, Box, Button, Chip, MenuItem, Paper, Select, Table, TableBody, TableCell, TableContainer, TableHead, TableRow } from '@mui/material';
+import PersonAddOutlined from '@mui/icons-material/PersonAddOutlined';
+import { ROLE_LABELS, type Role } from '../../auth/types';
+import { useMe } from '../../auth/api/get-me';
+import { usePeople } from '../api/get-people';
+import { useUpdatePerson } from '../api/update-person';
+import { AddPersonDialog } from './add-person-dialog';
+import { LoadingState } from '../../../components/states/loading-state';
+import { ErrorState } from '../../../components/states/error-state';
+
+const ROLES = Object.keys(ROLE_LABELS) as Role[];
+
+export function PeoplePanel() {
+  const people = usePeople();
+  const me = useMe();
+  const update = useUpdatePerson();
+  const [adding, setAdding] = useState(false);
+
+  if (people.isPending) return <LoadingState label="Loading members…" />;
+  if (people.isError) return <ErrorState error={people.error} onRetry={() => people.refetch()} />;
+
+  return (
+    <>
+      <Box sx={{ display: 'flex', justifyContent: 'flex-end', mb: 2 }}>
+        <Button variant="contained" startIcon={<PersonAddOutlined />} onClick={() => setAdding(true)}>
+          Add member
+        </Button>
+      </Box>
+      {update.error && (
+        <Alert severity="error" sx={{ mb: 2 }} onClose={() => update.reset()}>
+          {update.error.message}
+        </Alert>
+      )}
+      <TableContainer component={Paper}>
+        <Table aria-label="Members">
+          <TableHead>
+            <TableRow>
+              <TableCell>Name</TableCell>
+              <TableCell>E-mail</TableCell>
+              <TableCell>Role</TableCell>
+              <TableCell>Status</TableCell>
+              <TableCell align="right">Access</TableCell>
+            </TableRow>
+          </TableHead>
+          <TableBody>
+            {people.data.map((p) => (
+              <TableRow key={p.id} sx={{ opacity: p.active ? 1 : 0.6 }}>
+                <TableCell>{p.name}{p.id === me.data?.id ? ' (you)' : ''}</TableCell>
+                <TableCell>{p.email}</TableCell>
+                <TableCell>
+                  <Select
+                    size="small"
+                    value={p.role}
+                    inputProps={{ 'aria-label': `Role of ${p.name}` }}
+                    onChange={(e) => update.mutate({ id: p.id, role: e.target.value as Role })}
+                  >
+                    {ROLES.map((r) => (
+                      <MenuItem key={r} value={r}>
+                        {ROLE_LABELS[r]}
+                      </MenuItem>
+                    ))}
+                  </Select>
+                </TableCell>
+                <TableCell>
+                  <Chip size="small" label={p.active ? 'Active' : 'Deactivated'} color={p.active ? 'success' : 'default'} variant="outlined" />
+                </TableCell>
+                <TableCell align="right">
+                  <Button size="small" color={p.active ? 'error' : 'primary'} onClick={() => update.mutate({ id: p.id, active: !p.active })}>
+                    {p.active ? 'Deactivate' : 'Reactivate'}
+                  </Button>
+                </TableCell>
+              </TableRow>
+            ))}
+          </TableBody>
+        </Table>
+      </TableContainer>
+      <AddPersonDialog open={adding} onClose={() => setAdding(false)} />
+    </>
+  );
+}

@@ -1,0 +1,46 @@
+import { createTheme } from '@mui/material/styles';
+
+// Railwright's own look: deep verdigris steel with a brass accent on warm paper.
+export const palette = {
+  steel: '#1d4f4a',
+  steelLight: '#3f7a73',
+  steelDark: '#0f2f2c',
+  brass: '#c8932a',
+  paper: '#f6f4ef',
+  ink: '#1e2624',
+  within: '#2e7d4f',
+  outside: '#b3261e',
+  waived: '#7a5aa6',
+  notStarted: '#6b7572',
+};
+
+export const theme = createTheme({
+  palette: {
+    mode: 'light',
+    primary: { main: palette.steel, light: palette.steelLight, dark: palette.steelDark, contrastText: '#ffffff' },
+    secondary: { main: palette.brass, contrastText: '#1e1608' },
+    success: { main: palette.within },
+    error: { main: palette.outside },
+    background: { default: palette.paper, paper: '#ffffff' },
+    text: { primary: palette.ink, secondary: '#4d5855' },
+  },
+  shape: { borderRadius: 6 },
+  typography: {
+    fontFamily: 'Roboto, system-ui, sans-serif',
+    h1: { fontSize: '2rem', fontWeight: 500, letterSpacing: '-0.01em' },
+    h2: { fontSize: '1.6rem', fontWeight: 500 },
+    h3: { fontSize: '1.3rem', fontWeight: 500 },
+    h4: { fontSize: '1.1rem', fontWeight: 500 },
+    h5: { fontSize: '1rem', fontWeight: 500 },
+    h6: { fontSize: '0.95rem', fontWeight: 500 },
+    button: { textTransform: 'none', fontWeight: 500 },
+    overline: { letterSpacing: '0.12em', fontWeight: 500 },
+  },
+  components: {
+    MuiAppBar: { defaultProps: { elevation: 0 } },
+    MuiPaper: { defaultProps: { elevation: 0 }, styleOverrides: { root: { border: '1px solid #e2ded4' } } },
+    MuiButton: { defaultProps: { disableElevation: true } },
+    MuiTextField: { defaultProps: { size: 'small' } },
+    MuiTableCell: { styleOverrides: { head: { fontWeight: 600, color: '#4d5855' } } },
+  },
+});
