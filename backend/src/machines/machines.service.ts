@@ -1,9 +1,10 @@
-import { Injectable, NotFoundException } from '@nestjs/common';
+import { Injectable, NotFoundException, OnModuleInit } from '@nestjs/common';
 import type { SessionUser } from '../auth/session-user.js';
 import type { MachineState } from '../database/schema/machines.js';
 import type { MachineRef } from '../records/readiness.js';
 import { ReadinessRegistry } from '../records/readiness.registry.js';
 import { RecordsService } from '../records/records.service.js';
+import { SubjectsRegistry } from '../records/subjects.registry.js';
 import { TargetSetsService } from '../target-sets/target-sets.service.js';
 import { countChecks, toMachineResponse, type MachineListItem, type MachineResponse, type MachineRow } from './machine.mapper.js';
 import { MachinesRepository } from './machines.repository.js';
@@ -11,13 +12,21 @@ import type { CreateMachineDto } from './dto/create-machine.dto.js';
 import type { UpdateMachineDto } from './dto/update-machine.dto.js';
 
 @Injectable()
-export class MachinesService {
+export class MachinesService implements OnModuleInit {
   constructor(
     private readonly repo: MachinesRepository,
     private readonly targetSets: TargetSetsService,
     private readonly records: RecordsService,
     private readonly readiness: ReadinessRegistry,
+    private readonly subjects: SubjectsRegistry,
   ) {}
+
+  onModuleInit() {
+    this.subjects.register('machine', async (workshopId, id) => {
+      const found = await this.repo.find(workshopId, id);
+      return found ? { machineId: id, recordType: 'machine', recordId: id, label: found.machine.name } : null;
+    });
+  }
 
   async list(actor: SessionUser): Promise<MachineListItem[]> {
     const rows = await this.repo.list(actor.workshopId);

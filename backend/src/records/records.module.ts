@@ -2,11 +2,12 @@ import { Global, Module } from '@nestjs/common';
 import { ReadinessRegistry } from './readiness.registry.js';
 import { RecordsRepository } from './records.repository.js';
 import { RecordsService } from './records.service.js';
+import { SubjectsRegistry } from './subjects.registry.js';
 
 /** Shared by every domain module: audit history, approval locks, readiness contributors. */
 @Global()
 @Module({
-  providers: [RecordsRepository, RecordsService, ReadinessRegistry],
-  exports: [RecordsService, ReadinessRegistry],
+  providers: [RecordsRepository, RecordsService, ReadinessRegistry, SubjectsRegistry],
+  exports: [RecordsService, ReadinessRegistry, SubjectsRegistry],
 })
 export class RecordsModule {}

@@ -14,6 +14,8 @@ const router = createBrowserRouter([
     children: [
       { index: true, element: <Navigate to={paths.machines} replace /> },
       { path: paths.people, lazy: page(() => import('./routes/people')) },
+      { path: paths.machines, lazy: page(() => import('./routes/machines')) },
+      { path: '/machines/:machineId', lazy: page(() => import('./routes/machine-file')) },
       // Feature routes: one line each.
       { path: '*', Component: NotFoundRoute },
     ],

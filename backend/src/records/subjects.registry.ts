@@ -1,0 +1,35 @@
+import { Injectable } from '@nestjs/common';
+
+/** Where a record sits: its machine, and whether approvals may lock it. */
+export interface SubjectRef {
+  machineId: string;
+  /** The record type as used by RecordsService locks ("rail-sweep", "travel-trial", …). */
+  recordType: string;
+  recordId: string;
+  label: string;
+}
+
+export type SubjectResolver = (workshopId: string, id: string) => Promise<SubjectRef | null>;
+
+/**
+ * Lets modules that attach things to any record (evidence) find that record without importing
+ * every domain module: each domain registers its subject types ("rail", "axis", "rail-sweep"…).
+ */
+@Injectable()
+export class SubjectsRegistry {
+  private readonly resolvers = new Map<string, SubjectResolver>();
+
+  register(subjectType: string, resolver: SubjectResolver): void {
+    this.resolvers.set(subjectType, resolver);
+  }
+
+  types(): string[] {
+    return [...this.resolvers.keys()].sort();
+  }
+
+  /** null when the type is unknown or the record is not in this workshop. */
+  async resolve(workshopId: string, subjectType: string, id: string): Promise<SubjectRef | null> {
+    const resolver = this.resolvers.get(subjectType);
+    return resolver ? resolver(workshopId, id) : null;
+  }
+}

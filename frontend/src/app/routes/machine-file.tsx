@@ -1,0 +1,53 @@
+import type { ReactNode } from 'react';
+import { useParams, useSearchParams } from 'react-router-dom';
+import { Box, Tab, Tabs } from '@mui/material';
+import { PageHeader } from '../../components/layout/page-header';
+import { LoadingState } from '../../components/states/loading-state';
+import { ErrorState } from '../../components/states/error-state';
+import { useMachine } from '../../features/machines/api/get-machine';
+import { MachineOverview } from '../../features/machines/components/machine-overview';
+import { MachineHistory } from '../../features/machines/components/machine-history';
+import { MachineStateChip } from '../../features/machines/components/machine-state-chip';
+import { KIND_LABELS, type Machine } from '../../features/machines/types';
+
+interface Section {
+  id: string;
+  label: string;
+  render: (machine: Machine) => ReactNode;
+}
+
+// The machine file's sections; each feature adds its own tab here.
+const SECTIONS: Section[] = [
+  { id: 'overview', label: 'Specification', render: (m) => <MachineOverview machine={m} /> },
+  { id: 'history', label: 'History', render: (m) => <MachineHistory machineId={m.id} /> },
+];
+
+export default function MachineFileRoute() {
+  const { machineId = '' } = useParams();
+  const [params, setParams] = useSearchParams();
+  const machine = useMachine(machineId);
+  const tab = SECTIONS.some((s) => s.id === params.get('tab')) ? params.get('tab')! : SECTIONS[0].id;
+
+  if (machine.isPending) return <LoadingState label="Opening the machine file…" />;
+  if (machine.isError) return <ErrorState error={machine.error} onRetry={() => machine.refetch()} />;
+  const m = machine.data;
+  const section = SECTIONS.find((s) => s.id === tab)!;
+
+  return (
+    <>
+      <PageHeader
+        title={m.name}
+        subtitle={`${KIND_LABELS[m.kind]} · work area ${m.workArea.x} × ${m.workArea.y} mm · ${m.targetSet.name}`}
+        actions={<MachineStateChip state={m.state} />}
+      />
+      <Box sx={{ borderBottom: 1, borderColor: 'divider', mb: 2 }}>
+        <Tabs value={tab} onChange={(_, v) => setParams({ tab: v }, { replace: true })} variant="scrollable" allowScrollButtonsMobile aria-label="Machine file sections">
+          {SECTIONS.map((s) => (
+            <Tab key={s.id} value={s.id} label={s.label} />
+          ))}
+        </Tabs>
+      </Box>
+      {section.render(m)}
+    </>
+  );
+}

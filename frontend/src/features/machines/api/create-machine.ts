@@ -1,0 +1,19 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { api } from '../../../lib/api-client';
+import { machineKeys, type Machine, type MachineKind } from '../types';
+
+export interface CreateMachineInput {
+  name: string;
+  kind: MachineKind;
+  workArea: { x: number; y: number };
+  notes?: string;
+  targetSetId?: string;
+}
+
+export function useCreateMachine() {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (input: CreateMachineInput) => api.post<Machine>('/machines', input),
+    onSuccess: () => qc.invalidateQueries({ queryKey: machineKeys.all }),
+  });
+}

@@ -1,0 +1,48 @@
+export type MachineKind = 'plasma' | 'router' | 'other';
+export type MachineState = 'being-built' | 'awaiting-approval' | 'ready-to-cut' | 'recheck-due' | 'retired';
+
+export interface Machine {
+  id: string;
+  name: string;
+  kind: MachineKind;
+  state: MachineState;
+  workArea: { x: number; y: number };
+  notes: string;
+  targetSet: { id: string; name: string };
+  lastActivityAt: string;
+  createdAt: string;
+  updatedAt: string;
+}
+
+export interface MachineListItem extends Machine {
+  checks: { within: number; total: number; outside: number };
+}
+
+export interface HistoryEntry {
+  id: string;
+  at: string;
+  actor: string;
+  recordType: string;
+  recordId: string | null;
+  action: string;
+  summary: string;
+  changes: Record<string, unknown> | null;
+}
+
+export const KIND_LABELS: Record<MachineKind, string> = { plasma: 'Plasma table', router: 'Router', other: 'Other' };
+
+export const STATE_LABELS: Record<MachineState, string> = {
+  'being-built': 'Being built',
+  'awaiting-approval': 'Awaiting approval',
+  'ready-to-cut': 'Ready to cut',
+  'recheck-due': 'Re-check due',
+  retired: 'Retired',
+};
+
+/** One key factory for the feature; other features invalidate through it too. */
+export const machineKeys = {
+  all: ['machines'] as const,
+  list: () => [...machineKeys.all, 'list'] as const,
+  detail: (id: string) => [...machineKeys.all, 'detail', id] as const,
+  history: (id: string) => [...machineKeys.all, 'history', id] as const,
+};
