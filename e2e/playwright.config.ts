@@ -28,7 +28,7 @@ export default defineConfig({
     screenshot: 'only-on-failure',
   },
   webServer: {
-    command: `node ${path.join(root, 'backend/dist/backend/src/main.js')}`,
+    command: `node ${process.env.E2E_SERVER ?? path.join(root, 'backend/dist/backend/src/main.js')}`,
     url: `http://127.0.0.1:${port}/api/health`,
     reuseExistingServer: false,
     timeout: 60_000,
@@ -39,6 +39,8 @@ export default defineConfig({
       DATABASE_URL: process.env.E2E_DATABASE_URL ?? '',
       SESSION_SECRET: 'e2e-session-secret-that-is-long-enough-123',
       RAILWRIGHT_DATA: process.env.RAILWRIGHT_DATA ?? path.join(root, '.test-data/e2e'),
+      ...(process.env.FRONTEND_DIST ? { FRONTEND_DIST: process.env.FRONTEND_DIST } : {}),
+      ...(process.env.SMTP_PORT ? { SMTP_PORT: process.env.SMTP_PORT } : {}),
     },
   },
 });
