@@ -5,6 +5,7 @@ import { HealthModule } from './health/health.module.js';
 import { PeopleModule } from './people/people.module.js';
 import { RecordsModule } from './records/records.module.js';
 import { MachinesModule } from './machines/machines.module.js';
+import { CalculatorsModule } from './calculators/calculators.module.js';
 
 // One line per domain module.
 @Module({
@@ -15,6 +16,7 @@ import { MachinesModule } from './machines/machines.module.js';
     PeopleModule,
     RecordsModule,
     MachinesModule,
+    CalculatorsModule,
   ],
 })
 export class AppModule {}

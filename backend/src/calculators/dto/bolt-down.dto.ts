@@ -1,0 +1,45 @@
+import { Type } from 'class-transformer';
+import { ArrayMaxSize, IsArray, IsIn, IsInt, IsObject, IsOptional, Min, ValidateNested } from 'class-validator';
+import { TARGET_MODES, type TargetMode } from '../../engine/bolt-down.js';
+import type { LengthUnit } from '../../engine/units.js';
+import { MAX_POINTS } from '../../engine/validate.js';
+import { FiniteNumber, ReadingUnit } from './validators.js';
+
+export class HoleReadingDto {
+  /** Index of the hole from the rail's start (0 = first hole). */
+  @IsInt({ message: 'hole must be a whole number' })
+  @Min(0, { message: 'hole must not be negative' })
+  hole: number;
+
+  /** Reading at the hole once tightened, in `unit`. */
+  @FiniteNumber('reading')
+  reading: number;
+}
+
+/** Lengths in mm. */
+export class BoltDownDto {
+  @FiniteNumber('length')
+  length: number;
+
+  @FiniteNumber('pitch')
+  pitch: number;
+
+  @FiniteNumber('firstHoleOffset')
+  firstHoleOffset: number;
+
+  /** Aim at the first fixed hole's reading ("face") or at the line through fixed holes ("line", default). */
+  @IsOptional()
+  @IsIn(TARGET_MODES, { message: `mode must be one of ${TARGET_MODES.join(', ')}` })
+  mode?: TargetMode;
+
+  @IsOptional()
+  @IsArray({ message: 'readings must be a list of {hole, reading}' })
+  @ArrayMaxSize(MAX_POINTS, { message: `readings has more than ${MAX_POINTS} entries` })
+  @IsObject({ each: true, message: 'every entry of readings must be {hole, reading}' })
+  @ValidateNested({ each: true })
+  @Type(() => HoleReadingDto)
+  readings?: HoleReadingDto[];
+
+  @ReadingUnit()
+  unit?: LengthUnit;
+}

@@ -1,0 +1,30 @@
+import { Type } from 'class-transformer';
+import { ArrayMaxSize, IsArray, IsObject, ValidateNested } from 'class-validator';
+import type { LengthUnit } from '../../engine/units.js';
+import { MAX_POINTS } from '../../engine/validate.js';
+import { FiniteNumber, ReadingUnit } from './validators.js';
+
+export class GridPointDto {
+  /** Position on the bed, mm. */
+  @FiniteNumber('x')
+  x: number;
+
+  @FiniteNumber('y')
+  y: number;
+
+  /** Height reading in `unit`. */
+  @FiniteNumber('z')
+  z: number;
+}
+
+export class FlatnessDto {
+  @IsArray({ message: 'points must be a list of {x, y, z}' })
+  @ArrayMaxSize(MAX_POINTS, { message: `points has more than ${MAX_POINTS} values; at most ${MAX_POINTS} are accepted` })
+  @IsObject({ each: true, message: 'every entry of points must be {x, y, z}' })
+  @ValidateNested({ each: true })
+  @Type(() => GridPointDto)
+  points: GridPointDto[];
+
+  @ReadingUnit()
+  unit?: LengthUnit;
+}
