@@ -4,3 +4,4 @@ export * from './users.js';
 export * from './target-sets.js';
 export * from './machines.js';
 export * from './records.js';
+export * from './rails.js';

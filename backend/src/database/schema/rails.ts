@@ -1,0 +1,80 @@
+import { doublePrecision, index, integer, jsonb, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
+import { id, timestamps } from './columns.js';
+import { workshops } from './workshops.js';
+import { machines } from './machines.js';
+import { users } from './users.js';
+
+export const SWEEP_PHASES = ['as-found', 'as-left'] as const;
+export type SweepPhase = (typeof SWEEP_PHASES)[number];
+
+export const SWEEP_UNITS = ['mm', 'um', 'in', 'thou'] as const;
+export type SweepUnit = (typeof SWEEP_UNITS)[number];
+
+/** A linear rail of a machine; its hole positions follow from length, pitch and first-hole offset. */
+export const rails = pgTable(
+  'rails',
+  {
+    id: id(),
+    workshopId: uuid('workshop_id').notNull().references(() => workshops.id),
+    machineId: uuid('machine_id').notNull().references(() => machines.id),
+    label: text('label').notNull(),
+    axis: text('axis').notNull(),
+    lengthMm: doublePrecision('length_mm').notNull(),
+    profileSizeMm: integer('profile_size_mm'),
+    holePitchMm: doublePrecision('hole_pitch_mm').notNull(),
+    firstHoleMm: doublePrecision('first_hole_mm').notNull(),
+    /** Kept symmetric by the service: when A names B, B names A. */
+    partnerRailId: uuid('partner_rail_id'),
+    ...timestamps,
+  },
+  (t) => [index('rails_machine_idx').on(t.workshopId, t.machineId)],
+);
+
+/** Stored engine result of a sweep; every length in mm. */
+export interface StoredLine {
+  slope: number;
+  intercept: number;
+  straightness: number;
+  residuals: number[];
+}
+export interface StoredSweepResult {
+  leastSquares: StoredLine;
+  minimumZone: StoredLine;
+  endPoint: StoredLine;
+}
+
+/** One series of indicator readings along a rail, with the readings as entered and in mm. */
+export const railSweeps = pgTable(
+  'rail_sweeps',
+  {
+    /** Made by the browser when it can, so a retried save is the same sweep. */
+    id: id(),
+    workshopId: uuid('workshop_id').notNull().references(() => workshops.id),
+    machineId: uuid('machine_id').notNull().references(() => machines.id),
+    railId: uuid('rail_id').notNull().references(() => rails.id, { onDelete: 'cascade' }),
+    unit: text('unit', { enum: SWEEP_UNITS }).notNull(),
+    positionsMm: jsonb('positions_mm').$type<number[]>().notNull(),
+    /** Readings as typed, in `unit`. */
+    readingsRaw: jsonb('readings_raw').$type<number[]>().notNull(),
+    readingsMm: jsonb('readings_mm').$type<number[]>().notNull(),
+    instrument: text('instrument').notNull().default(''),
+    /** Smallest step of the instrument, in `unit`. */
+    resolution: doublePrecision('resolution'),
+    temperatureC: doublePrecision('temperature_c'),
+    phase: text('phase', { enum: SWEEP_PHASES }).notNull(),
+    takenBy: text('taken_by').notNull(),
+    boltSize: text('bolt_size'),
+    torqueNm: doublePrecision('torque_nm'),
+    /** Label of the common datum the readings were taken against (for parallelism of partners). */
+    datum: text('datum'),
+    notes: text('notes').notNull().default(''),
+    result: jsonb('result').$type<StoredSweepResult>().notNull(),
+    status: text('status', { enum: ['within-target', 'outside-target'] }).notNull(),
+    /** The target the sweep was judged against when it was saved. */
+    target: jsonb('target').$type<{ value: number; unit: string }>().notNull(),
+    createdById: uuid('created_by_id').references(() => users.id),
+    takenAt: timestamp('taken_at', { withTimezone: true }).notNull().defaultNow(),
+    ...timestamps,
+  },
+  (t) => [index('rail_sweeps_rail_idx').on(t.railId, t.takenAt)],
+);
