@@ -5,3 +5,5 @@ export * from './target-sets.js';
 export * from './machines.js';
 export * from './records.js';
 export * from './rails.js';
+export * from './frame.js';
+export * from './safety.js';

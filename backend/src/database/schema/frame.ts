@@ -1,0 +1,83 @@
+import { doublePrecision, index, integer, jsonb, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
+import { id } from './columns.js';
+import { workshops } from './workshops.js';
+import { machines } from './machines.js';
+import { users } from './users.js';
+
+/** Length units a reading may be entered in; values are stored in mm beside the entered unit. */
+export type EnteredUnit = 'mm' | 'um' | 'in' | 'thou';
+
+/** Who recorded a frame check, and when; the name is kept so the record reads right after a rename. */
+const recorded = {
+  recordedById: uuid('recorded_by_id').references(() => users.id),
+  recordedByName: text('recorded_by_name').notNull(),
+  recordedAt: timestamp('recorded_at', { withTimezone: true }).notNull().defaultNow(),
+};
+
+/** Squareness from the two diagonals of a rectangle the machine marked or cut (or of the frame). */
+export const diagonalChecks = pgTable(
+  'diagonal_checks',
+  {
+    id: id(),
+    workshopId: uuid('workshop_id').notNull().references(() => workshops.id),
+    machineId: uuid('machine_id').notNull().references(() => machines.id),
+    unit: text('unit').$type<EnteredUnit>().notNull(),
+    sideXMm: doublePrecision('side_x_mm').notNull(),
+    sideYMm: doublePrecision('side_y_mm').notNull(),
+    diagonal1Mm: doublePrecision('diagonal1_mm').notNull(),
+    diagonal2Mm: doublePrecision('diagonal2_mm').notNull(),
+    gantrySpanMm: doublePrecision('gantry_span_mm'),
+    note: text('note').notNull().default(''),
+    ...recorded,
+  },
+  (t) => [index('diagonal_checks_machine_idx').on(t.workshopId, t.machineId, t.recordedAt)],
+);
+
+export interface BedGridPointMm {
+  xMm: number;
+  yMm: number;
+  zMm: number;
+}
+
+/** Heights over the bed or slats at grid positions (positions in mm, heights stored in mm). */
+export const bedGrids = pgTable(
+  'bed_grids',
+  {
+    id: id(),
+    workshopId: uuid('workshop_id').notNull().references(() => workshops.id),
+    machineId: uuid('machine_id').notNull().references(() => machines.id),
+    unit: text('unit').$type<EnteredUnit>().notNull(),
+    rows: integer('rows'),
+    columns: integer('columns'),
+    points: jsonb('points').$type<BedGridPointMm[]>().notNull(),
+    note: text('note').notNull().default(''),
+    ...recorded,
+  },
+  (t) => [index('bed_grids_machine_idx').on(t.workshopId, t.machineId, t.recordedAt)],
+);
+
+export type CircleKind = 'hole' | 'disc';
+
+export interface TestCutSizesMm {
+  nominal: { xMm: number; yMm: number; circleMm: number };
+  measured: { xMm: number; yMm: number; diagonal1Mm: number; diagonal2Mm: number; circleXMm: number; circleYMm: number };
+  /** Width of cut the controller did not compensate for (0 when kerf compensation was on). */
+  kerfMm: number;
+  circleKind: CircleKind;
+  stepsPerMm: { x: number | null; y: number | null };
+}
+
+/** The acceptance cut: a large square with a circle, its commanded and measured sizes. */
+export const testCuts = pgTable(
+  'test_cuts',
+  {
+    id: id(),
+    workshopId: uuid('workshop_id').notNull().references(() => workshops.id),
+    machineId: uuid('machine_id').notNull().references(() => machines.id),
+    unit: text('unit').$type<EnteredUnit>().notNull(),
+    sizes: jsonb('sizes').$type<TestCutSizesMm>().notNull(),
+    note: text('note').notNull().default(''),
+    ...recorded,
+  },
+  (t) => [index('test_cuts_machine_idx').on(t.workshopId, t.machineId, t.recordedAt)],
+);
