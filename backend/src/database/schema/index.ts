@@ -7,3 +7,4 @@ export * from './records.js';
 export * from './rails.js';
 export * from './frame.js';
 export * from './safety.js';
+export * from './drives.js';

@@ -1,0 +1,110 @@
+import { boolean, doublePrecision, index, integer, jsonb, pgTable, text, timestamp, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
+import { sql } from 'drizzle-orm';
+import { id, timestamps } from './columns.js';
+import { workshops } from './workshops.js';
+import { machines } from './machines.js';
+import { users } from './users.js';
+
+export const DRIVE_KINDS = ['screw', 'belt', 'rack'] as const;
+export type DriveKind = (typeof DRIVE_KINDS)[number];
+
+/**
+ * The drive of an axis with the calculators' field names, all lengths in mm. Which fields are
+ * set depends on the type: screw (lead, diameters, length between supports, mounting), belt
+ * (pitch, pulley teeth) or rack and pinion (module, teeth).
+ */
+export interface DriveRecord {
+  type: DriveKind;
+  lead?: number;
+  nominalDiameter?: number;
+  rootDiameter?: number;
+  unsupportedLength?: number;
+  mounting?: 'fixed-free' | 'supported-supported' | 'fixed-supported' | 'fixed-fixed';
+  /** Nominal diameter × rpm the nut is rated for; the rolled-screw 70 000 when absent. */
+  dnLimit?: number;
+  beltPitch?: number;
+  pulleyTeeth?: number;
+  pinionModule?: number;
+  pinionTeeth?: number;
+}
+
+/** One change of the steps per mm set in the controller. */
+export interface StepsChange {
+  from: number;
+  to: number;
+  at: string;
+  by: string;
+  reason: 'edited' | 'travel-trial';
+  trialId?: string;
+}
+
+/** One axis of a machine; a dual-drive gantry has one per side (Y1, Y2). */
+export const axes = pgTable(
+  'axes',
+  {
+    id: id(),
+    workshopId: uuid('workshop_id').notNull().references(() => workshops.id),
+    machineId: uuid('machine_id').notNull().references(() => machines.id),
+    name: text('name').notNull(),
+    drive: jsonb('drive').$type<DriveRecord>().notNull(),
+    motorStepsPerRev: integer('motor_steps_per_rev').notNull(),
+    microsteps: doublePrecision('microsteps').notNull(),
+    gearRatio: doublePrecision('gear_ratio').notNull().default(1),
+    stepsPerMm: doublePrecision('steps_per_mm').notNull(),
+    maxFeedRateMmPerMin: doublePrecision('max_feed_rate_mm_per_min'),
+    measuredTravelMm: doublePrecision('measured_travel_mm'),
+    notes: text('notes').notNull().default(''),
+    stepsHistory: jsonb('steps_history').$type<StepsChange[]>().notNull().default([]),
+    ...timestamps,
+  },
+  (t) => [
+    index('axes_machine_idx').on(t.workshopId, t.machineId),
+    uniqueIndex('axes_machine_name_unique').on(t.machineId, sql`lower(${t.name})`),
+  ],
+);
+
+/** Commanded-versus-measured moves of one axis, as entered, with the engine's fit (mm). */
+export const travelTrials = pgTable(
+  'travel_trials',
+  {
+    id: id(),
+    workshopId: uuid('workshop_id').notNull().references(() => workshops.id),
+    machineId: uuid('machine_id').notNull().references(() => machines.id),
+    axisId: uuid('axis_id').notNull().references(() => axes.id, { onDelete: 'cascade' }),
+    unit: text('unit').notNull(),
+    stepsPerMmUsed: doublePrecision('steps_per_mm_used').notNull(),
+    /** Commanded in mm, measured in `unit`, as typed. */
+    moves: jsonb('moves').$type<{ commanded: number; measured: number }[]>().notNull(),
+    throughOrigin: boolean('through_origin').notNull().default(false),
+    result: jsonb('result').$type<Record<string, unknown>>().notNull(),
+    notes: text('notes').notNull().default(''),
+    recordedById: uuid('recorded_by_id').references(() => users.id),
+    recordedByName: text('recorded_by_name').notNull(),
+    appliedAt: timestamp('applied_at', { withTimezone: true }),
+    appliedByName: text('applied_by_name'),
+    ...timestamps,
+  },
+  (t) => [index('travel_trials_axis_idx').on(t.workshopId, t.axisId, t.createdAt)],
+);
+
+/** A repeat-and-reverse run (ISO 230-2 positioning test) of one axis. */
+export const positioningRuns = pgTable(
+  'positioning_runs',
+  {
+    id: id(),
+    workshopId: uuid('workshop_id').notNull().references(() => workshops.id),
+    machineId: uuid('machine_id').notNull().references(() => machines.id),
+    axisId: uuid('axis_id').notNull().references(() => axes.id, { onDelete: 'cascade' }),
+    unit: text('unit').notNull(),
+    /** Target positions, mm. */
+    targets: jsonb('targets').$type<number[]>().notNull(),
+    /** Deviations (actual − target) in `unit`, as typed. */
+    runs: jsonb('runs').$type<{ direction: 'up' | 'down'; deviations: number[] }[]>().notNull(),
+    result: jsonb('result').$type<Record<string, unknown>>().notNull(),
+    notes: text('notes').notNull().default(''),
+    recordedById: uuid('recorded_by_id').references(() => users.id),
+    recordedByName: text('recorded_by_name').notNull(),
+    ...timestamps,
+  },
+  (t) => [index('positioning_runs_axis_idx').on(t.workshopId, t.axisId, t.createdAt)],
+);
