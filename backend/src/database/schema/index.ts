@@ -8,3 +8,4 @@ export * from './rails.js';
 export * from './frame.js';
 export * from './safety.js';
 export * from './drives.js';
+export * from './bolt-downs.js';

@@ -1,0 +1,75 @@
+import { boolean, doublePrecision, index, integer, jsonb, pgTable, text, timestamp, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
+import { id, timestamps } from './columns.js';
+import { workshops } from './workshops.js';
+import { machines } from './machines.js';
+import { rails, railSweeps } from './rails.js';
+import { users } from './users.js';
+
+export const BOLT_DOWN_MODES = ['face', 'line'] as const;
+export type BoltDownMode = (typeof BOLT_DOWN_MODES)[number];
+
+export const BOLT_DOWN_UNITS = ['mm', 'um', 'in', 'thou'] as const;
+export type BoltDownUnit = (typeof BOLT_DOWN_UNITS)[number];
+
+/** One rail being fixed down hole by hole. */
+export const boltDowns = pgTable(
+  'bolt_downs',
+  {
+    id: id(),
+    workshopId: uuid('workshop_id').notNull().references(() => workshops.id),
+    machineId: uuid('machine_id').notNull().references(() => machines.id),
+    railId: uuid('rail_id').notNull().references(() => rails.id, { onDelete: 'cascade' }),
+    mode: text('mode', { enum: BOLT_DOWN_MODES }).notNull(),
+    /** Unit readings are typed in. */
+    unit: text('unit', { enum: BOLT_DOWN_UNITS }).notNull(),
+    /** Hole centres when the bolt-down began, so a later change to the rail cannot shift them. */
+    holePositionsMm: jsonb('hole_positions_mm').$type<number[]>().notNull(),
+    /** Half-width of the band around the aim that counts as on target. */
+    bandMm: doublePrecision('band_mm').notNull(),
+    /** Counter handing out the order in which holes were fixed. */
+    fixCounter: integer('fix_counter').notNull().default(0),
+    finalSweepId: uuid('final_sweep_id').references(() => railSweeps.id, { onDelete: 'set null' }),
+    createdById: uuid('created_by_id').references(() => users.id),
+    createdByName: text('created_by_name').notNull(),
+    ...timestamps,
+  },
+  (t) => [index('bolt_downs_rail_idx').on(t.workshopId, t.railId, t.createdAt)],
+);
+
+/** What has been typed and fixed at one hole; rows appear as holes are first written. */
+export const boltDownHoles = pgTable(
+  'bolt_down_holes',
+  {
+    id: id(),
+    boltDownId: uuid('bolt_down_id').notNull().references(() => boltDowns.id, { onDelete: 'cascade' }),
+    holeIndex: integer('hole_index').notNull(),
+    /** As typed, in the bolt-down's unit. */
+    readingRaw: doublePrecision('reading_raw'),
+    readingMm: doublePrecision('reading_mm'),
+    fixed: boolean('fixed').notNull().default(false),
+    fixSeq: integer('fix_seq'),
+    fixedAt: timestamp('fixed_at', { withTimezone: true }),
+    fixedById: uuid('fixed_by_id').references(() => users.id),
+    fixedByName: text('fixed_by_name'),
+    lastWriteId: uuid('last_write_id'),
+    ...timestamps,
+  },
+  (t) => [uniqueIndex('bolt_down_holes_unique').on(t.boltDownId, t.holeIndex)],
+);
+
+/**
+ * Every write id the browser has sent: a repeat of the same id is the same write and is never
+ * applied twice (workshop wifi drops and the browser retries).
+ */
+export const boltDownWrites = pgTable(
+  'bolt_down_writes',
+  {
+    writeId: uuid('write_id').primaryKey(),
+    workshopId: uuid('workshop_id').notNull().references(() => workshops.id),
+    boltDownId: uuid('bolt_down_id').notNull().references(() => boltDowns.id, { onDelete: 'cascade' }),
+    /** "hole:<index>" or "final-sweep". */
+    target: text('target').notNull(),
+    createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index('bolt_down_writes_bolt_down_idx').on(t.boltDownId)],
+);
