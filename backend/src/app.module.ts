@@ -6,6 +6,11 @@ import { PeopleModule } from './people/people.module.js';
 import { RecordsModule } from './records/records.module.js';
 import { MachinesModule } from './machines/machines.module.js';
 import { CalculatorsModule } from './calculators/calculators.module.js';
+import { RailsModule } from './rails/rails.module.js';
+import { BoltDownsModule } from './bolt-downs/bolt-downs.module.js';
+import { FrameModule } from './frame/frame.module.js';
+import { SafetyModule } from './safety/safety.module.js';
+import { EvidenceModule } from './evidence/evidence.module.js';
 
 // One line per domain module.
 @Module({
@@ -17,6 +22,11 @@ import { CalculatorsModule } from './calculators/calculators.module.js';
     RecordsModule,
     MachinesModule,
     CalculatorsModule,
+    RailsModule,
+    BoltDownsModule,
+    FrameModule,
+    SafetyModule,
+    EvidenceModule,
   ],
 })
 export class AppModule {}

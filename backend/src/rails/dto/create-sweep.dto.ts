@@ -1,0 +1,100 @@
+import { Type } from 'class-transformer';
+import {
+  ArrayMaxSize,
+  ArrayMinSize,
+  IsArray,
+  IsDateString,
+  IsDefined,
+  IsIn,
+  IsNumber,
+  IsOptional,
+  IsString,
+  IsUUID,
+  Matches,
+  Max,
+  MaxLength,
+  Min,
+  ValidateNested,
+} from 'class-validator';
+import { SWEEP_PHASES, SWEEP_UNITS, type SweepPhase, type SweepUnit } from '../../database/schema/rails.js';
+
+const FINITE = { allowNaN: false, allowInfinity: false } as const;
+export const MAX_STATIONS = 2000;
+
+export class StationDto {
+  @IsNumber(FINITE, { message: 'position must be a number of mm along the rail' })
+  @Min(-20_000, { message: 'position must be within ±20 000 mm' })
+  @Max(20_000, { message: 'position must be within ±20 000 mm' })
+  position: number;
+
+  @IsNumber(FINITE, { message: 'reading must be a number in the sweep unit' })
+  reading: number;
+}
+
+export class CreateSweepDto {
+  @IsOptional()
+  @IsUUID('all', { message: 'id must be a uuid made by the client' })
+  id?: string;
+
+  @IsIn(SWEEP_UNITS, { message: `unit must be one of ${SWEEP_UNITS.join(', ')}` })
+  unit: SweepUnit;
+
+  @IsDefined({ message: 'stations is required: a list of {position, reading}' })
+  @IsArray({ message: 'stations must be a list of {position, reading}' })
+  @ArrayMinSize(3, { message: 'stations needs at least 3 readings for a straightness' })
+  @ArrayMaxSize(MAX_STATIONS, { message: `stations has more than ${MAX_STATIONS} readings` })
+  @ValidateNested({ each: true })
+  @Type(() => StationDto)
+  stations: StationDto[];
+
+  @IsOptional()
+  @IsString({ message: 'instrument must be text' })
+  @MaxLength(120, { message: 'instrument must be at most 120 characters' })
+  instrument?: string;
+
+  /** Smallest step of the instrument, in `unit`. */
+  @IsOptional()
+  @IsNumber(FINITE, { message: 'resolution must be a number in the sweep unit' })
+  @Min(0, { message: 'resolution must not be negative' })
+  resolution?: number;
+
+  @IsOptional()
+  @IsNumber(FINITE, { message: 'temperatureC must be a number of °C' })
+  @Min(-40, { message: 'temperatureC must be at least -40 °C' })
+  @Max(80, { message: 'temperatureC must be at most 80 °C' })
+  temperatureC?: number;
+
+  @IsIn(SWEEP_PHASES, { message: `phase must be one of ${SWEEP_PHASES.join(', ')}` })
+  phase: SweepPhase;
+
+  @IsOptional()
+  @IsString({ message: 'takenBy must be text' })
+  @MaxLength(120, { message: 'takenBy must be at most 120 characters' })
+  takenBy?: string;
+
+  @IsOptional()
+  @IsString({ message: 'boltSize must be text such as M5' })
+  @Matches(/^M\d{1,2}(\.\d)?$/, { message: 'boltSize must be a metric bolt size such as M4, M5, M6 or M8' })
+  boltSize?: string;
+
+  @IsOptional()
+  @IsNumber(FINITE, { message: 'torqueNm must be a number of N·m' })
+  @Min(0, { message: 'torqueNm must not be negative' })
+  @Max(500, { message: 'torqueNm must be at most 500 N·m' })
+  torqueNm?: number;
+
+  @IsOptional()
+  @IsString({ message: 'datum must be text naming the common datum' })
+  @MaxLength(120, { message: 'datum must be at most 120 characters' })
+  datum?: string;
+
+  @IsOptional()
+  @IsString({ message: 'notes must be text' })
+  @MaxLength(5000, { message: 'notes must be at most 5000 characters' })
+  notes?: string;
+
+  /** When the readings were taken, if not now (a notebook entered later). */
+  @IsOptional()
+  @IsDateString({}, { message: 'takenAt must be a date and time (ISO 8601)' })
+  takenAt?: string;
+}

@@ -1,0 +1,137 @@
+import { BadRequestException, ConflictException, Injectable, NotFoundException } from '@nestjs/common';
+import type { SessionUser } from '../auth/session-user.js';
+import { evaluateStraightness, type ReferenceLineResult } from '../engine/straightness.js';
+import { arrayToMm, fromMm } from '../engine/units.js';
+import type { StoredLine, StoredSweepResult } from '../database/schema/rails.js';
+import { MachinesService } from '../machines/machines.service.js';
+import { RecordsService } from '../records/records.service.js';
+import { TargetSetsService } from '../target-sets/target-sets.service.js';
+import { toSweepResponse, type SweepResponse } from './rail.mapper.js';
+import { RailsRepository, type SweepRow } from './rails.repository.js';
+import { RailsService } from './rails.service.js';
+import type { CreateSweepDto } from './dto/create-sweep.dto.js';
+
+const line = (r: ReferenceLineResult): StoredLine => ({ slope: r.slope, intercept: r.interceptMm, straightness: r.straightnessMm, residuals: r.residualsMm });
+
+/** Rail sweeps: readings along a rail, fitted by the engine and stored with their result. */
+@Injectable()
+export class RailSweepsService {
+  constructor(
+    private readonly repo: RailsRepository,
+    private readonly rails: RailsService,
+    private readonly machines: MachinesService,
+    private readonly targetSets: TargetSetsService,
+    private readonly records: RecordsService,
+  ) {}
+
+  async list(actor: SessionUser, railId: string): Promise<SweepResponse[]> {
+    await this.rails.findRow(actor, railId);
+    const rows = await this.repo.listSweeps(actor.workshopId, railId);
+    const locked = await this.records.lockedIds('rail-sweep', rows.map((r) => r.id));
+    return rows.map((r) => toSweepResponse(r, locked.has(r.id)));
+  }
+
+  async get(actor: SessionUser, id: string): Promise<SweepResponse> {
+    const row = await this.findRow(actor, id);
+    return toSweepResponse(row, (await this.records.lockedIds('rail-sweep', [id])).has(id));
+  }
+
+  /**
+   * Saves a sweep; a repeat of the same client id answers the sweep already saved
+   * (`created: false`) and changes nothing.
+   */
+  async record(actor: SessionUser, railId: string, dto: CreateSweepDto): Promise<{ created: boolean; sweep: SweepResponse }> {
+    const rail = await this.rails.findRow(actor, railId);
+    if (dto.id) {
+      const existing = await this.repeatOf(actor, railId, dto.id);
+      if (existing) return { created: false, sweep: existing };
+    }
+    checkStations(dto);
+    const takenAt = dto.takenAt ? new Date(dto.takenAt) : new Date();
+    if (takenAt.getTime() > Date.now() + 5 * 60_000) throw new BadRequestException(['takenAt must not be in the future']);
+
+    const machine = await this.machines.getRef(actor, rail.machineId);
+    const positionsMm = dto.stations.map((s) => s.position);
+    const readingsRaw = dto.stations.map((s) => s.reading);
+    const readingsMm = arrayToMm(readingsRaw, dto.unit);
+    const fitted = evaluateStraightness({ positionsMm, readingsMm });
+    const result: StoredSweepResult = { leastSquares: line(fitted.leastSquares), minimumZone: line(fitted.minimumZone), endPoint: line(fitted.endPoint) };
+    const { target, base } = await this.targetSets.targetFor(actor.workshopId, machine.targetSetId, 'railStraightness');
+    const status = result.leastSquares.straightness <= base ? 'within-target' : 'outside-target';
+
+    const row = await this.repo.insertSweep({
+      ...(dto.id ? { id: dto.id } : {}),
+      workshopId: actor.workshopId,
+      machineId: rail.machineId,
+      railId,
+      unit: dto.unit,
+      positionsMm,
+      readingsRaw,
+      readingsMm,
+      instrument: dto.instrument?.trim() ?? '',
+      resolution: dto.resolution ?? null,
+      temperatureC: dto.temperatureC ?? null,
+      phase: dto.phase,
+      takenBy: dto.takenBy?.trim() || actor.name,
+      boltSize: dto.boltSize ?? null,
+      torqueNm: dto.torqueNm ?? null,
+      datum: dto.datum?.trim() || null,
+      notes: dto.notes ?? '',
+      result,
+      status,
+      target: { value: target.value, unit: target.unit },
+      createdById: actor.id,
+      takenAt,
+    });
+    if (!row) {
+      // Two copies of one save raced; the first one won.
+      const existing = await this.repeatOf(actor, railId, dto.id!);
+      if (existing) return { created: false, sweep: existing };
+      throw new ConflictException('That sweep id is already used by another record');
+    }
+    const unit = dto.unit;
+    await this.records.checkRecorded(
+      actor,
+      { machineId: rail.machineId, kind: 'rail-straightness', recordType: 'rail-sweep', recordId: row.id, status },
+      `Sweep of rail ${rail.label} (${dto.phase}): least squares ${fmt(result.leastSquares.straightness, unit)}, minimum zone ${fmt(result.minimumZone.straightness, unit)}, target ${target.value} ${target.unit}`,
+    );
+    return { created: true, sweep: toSweepResponse(row, false) };
+  }
+
+  async remove(actor: SessionUser, id: string): Promise<void> {
+    const row = await this.findRow(actor, id);
+    await this.records.assertEditable('rail-sweep', id, 'This sweep');
+    await this.repo.deleteSweep(actor.workshopId, id);
+    await this.records.audit(actor, { machineId: row.machineId, recordType: 'rail-sweep', recordId: id, action: 'deleted', summary: `Sweep of ${row.takenAt.toISOString().slice(0, 10)} (${row.phase}) deleted` });
+  }
+
+  private async findRow(actor: SessionUser, id: string): Promise<SweepRow> {
+    const row = await this.repo.findSweep(actor.workshopId, id);
+    if (!row) throw new NotFoundException('No such sweep in this workshop');
+    return row;
+  }
+
+  private async repeatOf(actor: SessionUser, railId: string, id: string): Promise<SweepResponse | null> {
+    const row = await this.repo.findSweep(actor.workshopId, id);
+    if (row && row.railId === railId) return this.get(actor, id);
+    if (row || (await this.repo.sweepIdTaken(id))) throw new ConflictException('That sweep id is already used by another record');
+    return null;
+  }
+}
+
+/** Names the first bad station so the person can find it on the indicator sheet. */
+function checkStations(dto: CreateSweepDto) {
+  const seen = new Map<number, number>();
+  const problems: string[] = [];
+  dto.stations.forEach((s, i) => {
+    const first = seen.get(s.position);
+    if (first !== undefined) problems.push(`stations.${i}.position repeats ${s.position} mm (also at stations.${first})`);
+    else seen.set(s.position, i);
+  });
+  if (problems.length) throw new BadRequestException(problems);
+}
+
+function fmt(mm: number, unit: CreateSweepDto['unit']) {
+  const v = fromMm(mm, unit);
+  return `${v.toFixed(unit === 'mm' ? 4 : unit === 'in' ? 5 : 2)} ${unit === 'um' ? 'µm' : unit}`;
+}

@@ -1,0 +1,85 @@
+import { Body, Controller, Delete, Get, HttpCode, Param, ParseUUIDPipe, Patch, Post, Res } from '@nestjs/common';
+import type { FastifyReply } from 'fastify';
+import { CurrentUser, RECORDERS, Roles } from '../auth/decorators.js';
+import type { SessionUser } from '../auth/session-user.js';
+import { boltTorqueTable } from './bolt-torques.js';
+import { CreateRailDto } from './dto/create-rail.dto.js';
+import { CreateSweepDto } from './dto/create-sweep.dto.js';
+import { UpdateRailDto } from './dto/update-rail.dto.js';
+import { RailChecksService } from './rail-checks.service.js';
+import { RailSweepsService } from './rail-sweeps.service.js';
+import { RailsService } from './rails.service.js';
+
+@Controller()
+export class RailsController {
+  constructor(
+    private readonly rails: RailsService,
+    private readonly sweeps: RailSweepsService,
+    private readonly checks: RailChecksService,
+  ) {}
+
+  @Get('rails/bolt-torques')
+  boltTorques() {
+    return boltTorqueTable();
+  }
+
+  @Get('machines/:id/rails')
+  list(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) machineId: string) {
+    return this.rails.list(user, machineId);
+  }
+
+  @Post('machines/:id/rails')
+  @Roles(...RECORDERS)
+  create(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) machineId: string, @Body() dto: CreateRailDto) {
+    return this.rails.create(user, machineId, dto);
+  }
+
+  @Get('rails/:id')
+  get(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string) {
+    return this.rails.get(user, id);
+  }
+
+  @Patch('rails/:id')
+  @Roles(...RECORDERS)
+  update(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string, @Body() dto: UpdateRailDto) {
+    return this.rails.update(user, id, dto);
+  }
+
+  @Delete('rails/:id')
+  @Roles(...RECORDERS)
+  @HttpCode(204)
+  remove(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string) {
+    return this.rails.remove(user, id);
+  }
+
+  @Get('rails/:id/parallelism')
+  parallelism(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string) {
+    return this.checks.parallelismOf(user, id);
+  }
+
+  @Get('rails/:id/sweeps')
+  listSweeps(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string) {
+    return this.sweeps.list(user, id);
+  }
+
+  /** 201 for a new sweep; 200 with the same sweep when the client id was seen before. */
+  @Post('rails/:id/sweeps')
+  @Roles(...RECORDERS)
+  async recordSweep(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string, @Body() dto: CreateSweepDto, @Res({ passthrough: true }) reply: FastifyReply) {
+    const { created, sweep } = await this.sweeps.record(user, id, dto);
+    reply.status(created ? 201 : 200);
+    return sweep;
+  }
+
+  @Get('sweeps/:id')
+  getSweep(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string) {
+    return this.sweeps.get(user, id);
+  }
+
+  @Delete('sweeps/:id')
+  @Roles(...RECORDERS)
+  @HttpCode(204)
+  removeSweep(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string) {
+    return this.sweeps.remove(user, id);
+  }
+}
