@@ -7,10 +7,6 @@ import { RecordsModule } from './records/records.module.js';
 import { MachinesModule } from './machines/machines.module.js';
 import { CalculatorsModule } from './calculators/calculators.module.js';
 import { RailsModule } from './rails/rails.module.js';
-import { BoltDownsModule } from './bolt-downs/bolt-downs.module.js';
-import { FrameModule } from './frame/frame.module.js';
-import { SafetyModule } from './safety/safety.module.js';
-import { EvidenceModule } from './evidence/evidence.module.js';
 
 // One line per domain module.
 @Module({
@@ -23,10 +19,6 @@ import { EvidenceModule } from './evidence/evidence.module.js';
     MachinesModule,
     CalculatorsModule,
     RailsModule,
-    BoltDownsModule,
-    FrameModule,
-    SafetyModule,
-    EvidenceModule,
   ],
 })
 export class AppModule {}
