@@ -7,6 +7,7 @@ import { RecordsModule } from './records/records.module.js';
 import { MachinesModule } from './machines/machines.module.js';
 import { CalculatorsModule } from './calculators/calculators.module.js';
 import { RailsModule } from './rails/rails.module.js';
+import { EvidenceModule } from './evidence/evidence.module.js';
 
 // One line per domain module.
 @Module({
@@ -19,6 +20,7 @@ import { RailsModule } from './rails/rails.module.js';
     MachinesModule,
     CalculatorsModule,
     RailsModule,
+    EvidenceModule,
   ],
 })
 export class AppModule {}

@@ -3,6 +3,7 @@ import type { NestFastifyApplication } from '@nestjs/platform-fastify';
 import fastifyCookie from '@fastify/cookie';
 import fastifySession from '@fastify/session';
 import fastifyStatic from '@fastify/static';
+import fastifyMultipart from '@fastify/multipart';
 import connectPgSimple from 'connect-pg-simple';
 import expressSession from 'express-session';
 import { existsSync } from 'node:fs';
@@ -12,6 +13,7 @@ import { PG_POOL } from './database/database.tokens.js';
 import { DatabaseErrorFilter } from './common/database-error.filter.js';
 import { SpaFallbackFilter } from './common/spa-fallback.filter.js';
 import { appFilters } from './common/app-filters.js';
+import { loadEvidenceConfig } from './evidence/evidence.config.js';
 
 const SESSION_DAYS = 14;
 
@@ -34,6 +36,8 @@ export async function configureApp(app: NestFastifyApplication, config: AppConfi
       maxAge: SESSION_DAYS * 24 * 3600 * 1000,
     },
   });
+  // Evidence uploads: one file a request, streamed; the size limit comes from EVIDENCE_MAX_BYTES.
+  await app.register(fastifyMultipart as never, { limits: { fileSize: loadEvidenceConfig().maxBytes, files: 1, fields: 10, fieldSize: 4096, parts: 12 } });
   app.useGlobalPipes(
     new ValidationPipe({ whitelist: true, forbidNonWhitelisted: true, transform: true, stopAtFirstError: false }),
   );

@@ -4,6 +4,7 @@ export * from './users.js';
 export * from './target-sets.js';
 export * from './machines.js';
 export * from './records.js';
+export * from './evidence.js';
 export * from './rails.js';
 export * from './frame.js';
 export * from './safety.js';

@@ -1,0 +1,17 @@
+import { IsOptional, IsString, IsUUID, MinLength } from 'class-validator';
+
+/** Either one subject (subjectType + subjectId) or a whole machine (machineId). */
+export class ListEvidenceQueryDto {
+  @IsOptional()
+  @IsString({ message: 'subjectType must be text, for example machine or rail-sweep' })
+  @MinLength(1, { message: 'subjectType must not be empty' })
+  subjectType?: string;
+
+  @IsOptional()
+  @IsUUID('all', { message: 'subjectId must be the id (a uuid) of a record' })
+  subjectId?: string;
+
+  @IsOptional()
+  @IsUUID('all', { message: 'machineId must be the id (a uuid) of a machine' })
+  machineId?: string;
+}

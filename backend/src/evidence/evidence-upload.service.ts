@@ -1,0 +1,205 @@
+import {
+  BadRequestException,
+  Inject,
+  Injectable,
+  Logger,
+  PayloadTooLargeException,
+  UnsupportedMediaTypeException,
+} from '@nestjs/common';
+import type { MultipartFile, MultipartValue } from '@fastify/multipart';
+import { plainToInstance } from 'class-transformer';
+import { validate } from 'class-validator';
+import type { FastifyRequest } from 'fastify';
+import { randomUUID } from 'node:crypto';
+import { pipeline } from 'node:stream';
+import type { SessionUser } from '../auth/session-user.js';
+import type { SubjectRef } from '../records/subjects.registry.js';
+import { RecordsService } from '../records/records.service.js';
+import { decideType, type AcceptedType } from './content-type.js';
+import { UploadFieldsDto } from './dto/upload-fields.dto.js';
+import { EVIDENCE_CONFIG, type EvidenceConfig } from './evidence.config.js';
+import { toEvidenceResponse, type EvidenceResponse } from './evidence.mapper.js';
+import { EvidenceRepository } from './evidence.repository.js';
+import { EvidenceSubjects } from './evidence-subjects.js';
+import { sanitizeFileName, withExtension } from './file-name.js';
+import { EVIDENCE_STORAGE, type EvidenceStorage } from './storage/evidence-storage.js';
+import { makeThumbnail, THUMBNAIL_TYPE, type Thumbnail } from './thumbnail.js';
+import { UploadInspector } from './upload-inspector.js';
+
+interface Received {
+  tempKey: string;
+  rawName: string;
+  inspector: UploadInspector;
+}
+
+/**
+ * One upload, start to end: stream the file to a temporary object while inspecting it, check
+ * the fields, the subject, the size and the type from the bytes, make the thumbnail, and only
+ * then commit the object and write the row. Anything refused is removed before answering.
+ */
+@Injectable()
+export class EvidenceUploadService {
+  private readonly logger = new Logger(EvidenceUploadService.name);
+
+  constructor(
+    private readonly repo: EvidenceRepository,
+    private readonly subjects: EvidenceSubjects,
+    private readonly records: RecordsService,
+    @Inject(EVIDENCE_STORAGE) private readonly storage: EvidenceStorage,
+    @Inject(EVIDENCE_CONFIG) private readonly config: EvidenceConfig,
+  ) {}
+
+  async upload(actor: SessionUser, req: FastifyRequest): Promise<EvidenceResponse> {
+    if (!req.isMultipart()) throw new BadRequestException(['Send the upload as multipart/form-data with the photo or file in a field named file']);
+    const fields: Record<string, string> = {};
+    let received: Received | null = null;
+    let committed = false;
+    try {
+      let subject: SubjectRef | null = null;
+      for await (const part of req.parts()) {
+        if (part.type === 'field') {
+          const value = (part as MultipartValue).value;
+          fields[part.fieldname] = typeof value === 'string' ? value : String(value);
+          continue;
+        }
+        const file = part as MultipartFile;
+        if (file.fieldname !== 'file') {
+          file.file.resume();
+          throw new BadRequestException([`${file.fieldname} should not exist: send the photo or file in a field named file`]);
+        }
+        // Fields sent ahead of the file are checked before a byte is stored.
+        if (fields.subjectType !== undefined || fields.subjectId !== undefined) {
+          subject = await this.checkedSubject(actor, fields).catch((err) => {
+            file.file.resume();
+            throw err;
+          });
+        }
+        received = await this.receive(file);
+      }
+      if (!received) throw new BadRequestException(['file is required: attach one photo or file']);
+      subject ??= await this.checkedSubject(actor, fields);
+      const saved = await this.store(actor, subject, fields, received);
+      committed = true;
+      return saved;
+    } catch (err) {
+      throw translateMultipartError(err, this.config.maxBytes);
+    } finally {
+      if (received && !committed) await this.storage.discard(received.tempKey).catch(() => undefined);
+    }
+  }
+
+  private async receive(file: MultipartFile): Promise<Received> {
+    const inspector = new UploadInspector();
+    const source = pipeline(file.file, inspector, () => undefined);
+    const tempKey = await this.storage.writeTemp(source);
+    const received = { tempKey, rawName: file.filename, inspector };
+    if (file.file.truncated) {
+      await this.storage.discard(tempKey).catch(() => undefined);
+      throw new PayloadTooLargeException(tooLarge(file.filename, this.config.maxBytes));
+    }
+    return received;
+  }
+
+  private async checkedSubject(actor: SessionUser, fields: Record<string, string>): Promise<SubjectRef> {
+    const dto = plainToInstance(UploadFieldsDto, fields);
+    const errors = await validate(dto, { whitelist: true, forbidNonWhitelisted: true });
+    if (errors.length) throw new BadRequestException(errors.flatMap((e) => Object.values(e.constraints ?? {})));
+    return this.subjects.resolve(actor.workshopId, dto.subjectType, dto.subjectId);
+  }
+
+  private async store(actor: SessionUser, subject: SubjectRef, fields: Record<string, string>, received: Received): Promise<EvidenceResponse> {
+    const sniff = received.inspector.result();
+    const shownName = sanitizeFileName(received.rawName);
+    if (sniff.sizeBytes === 0) throw new BadRequestException([`${shownName} is empty (0 bytes)`]);
+    const decision = await decideType(shownName, sniff);
+    if ('refused' in decision) throw new UnsupportedMediaTypeException(decision.refused);
+    const type = decision.accepted;
+    const fileName = withExtension(shownName, type.extensions);
+    const thumb = type.kind === 'photo' ? await this.thumbnailOf(received.tempKey, fileName, type) : null;
+
+    const id = randomUUID();
+    const key = `${actor.workshopId}/${subject.machineId}/${id}`;
+    const thumbnailKey = thumb ? `${key}.thumb.webp` : null;
+    await this.storage.commit(received.tempKey, key, type.contentType);
+    try {
+      if (thumb && thumbnailKey) await this.storage.put(thumbnailKey, thumb.body, THUMBNAIL_TYPE);
+      const row = await this.repo.insert({
+        id,
+        workshopId: actor.workshopId,
+        machineId: subject.machineId,
+        subjectType: fields.subjectType,
+        subjectId: fields.subjectId,
+        subjectLabel: subject.label,
+        recordType: subject.recordType,
+        recordId: subject.recordId,
+        kind: type.kind,
+        fileName,
+        caption: (fields.caption ?? '').trim(),
+        contentType: type.contentType,
+        sizeBytes: sniff.sizeBytes,
+        sha256: sniff.sha256,
+        storageKey: key,
+        thumbnailKey,
+        widthPx: thumb?.widthPx ?? null,
+        heightPx: thumb?.heightPx ?? null,
+        uploadedById: actor.id,
+        uploadedByName: actor.name,
+      });
+      await this.records.audit(actor, {
+        machineId: subject.machineId,
+        recordType: 'evidence',
+        recordId: id,
+        action: 'attached',
+        summary: `${type.kind === 'photo' ? 'Photo' : 'File'} ${fileName} attached to ${subject.label}`,
+        changes: { subjectType: fields.subjectType, subjectId: fields.subjectId, contentType: type.contentType, sizeBytes: sniff.sizeBytes },
+      });
+      return toEvidenceResponse(row, { locked: false, canDelete: true });
+    } catch (err) {
+      // The object is committed but the record is not: take both back out.
+      await this.storage.remove(key).catch(() => undefined);
+      if (thumbnailKey) await this.storage.remove(thumbnailKey).catch(() => undefined);
+      throw err;
+    }
+  }
+
+  private async thumbnailOf(tempKey: string, fileName: string, type: AcceptedType): Promise<Thumbnail> {
+    const stored = await this.storage.read(tempKey);
+    if (!stored) throw new Error(`temporary upload ${tempKey} vanished`);
+    try {
+      return await makeThumbnail(stored.stream);
+    } catch (err) {
+      this.logger.warn(`photo refused, not readable: ${(err as Error).message}`);
+      stored.stream.destroy();
+      throw new UnsupportedMediaTypeException(`${fileName} starts like a ${type.label} photo but could not be read as one (damaged or cut short?)`);
+    }
+  }
+}
+
+function tooLarge(name: string, maxBytes: number): string {
+  return `${sanitizeFileName(name)} is larger than the limit of ${formatBytes(maxBytes)} a file`;
+}
+
+export function formatBytes(bytes: number): string {
+  if (bytes >= 1024 * 1024) return `${+(bytes / (1024 * 1024)).toFixed(1)} MB`;
+  if (bytes >= 1024) return `${+(bytes / 1024).toFixed(1)} kB`;
+  return `${bytes} bytes`;
+}
+
+/** The multipart parser's own errors, as clear 4xx answers. */
+function translateMultipartError(err: unknown, maxBytes: number): unknown {
+  const code = (err as { code?: string })?.code;
+  if (code === 'FST_REQ_FILE_TOO_LARGE') {
+    const name = (err as { part?: { filename?: string } }).part?.filename ?? 'The file';
+    return new PayloadTooLargeException(tooLarge(name, maxBytes));
+  }
+  if (code === 'FST_FILES_LIMIT') return new BadRequestException(['Send one file per upload; several files go up as several uploads']);
+  if (code === 'FST_PARTS_LIMIT' || code === 'FST_FIELDS_LIMIT') return new BadRequestException(['Too many fields: send file, subjectType, subjectId and caption only']);
+  if (code === 'FST_PROTO_VIOLATION' || code === 'FST_INVALID_MULTIPART_CONTENT_TYPE' || code === 'FST_INVALID_JSON_FIELD_ERROR') return new BadRequestException(['The upload is not a well-formed multipart/form-data body']);
+  if (err instanceof Error && /Unexpected end of (multipart|form)|terminated early|Malformed/i.test(err.message)) {
+    return new BadRequestException(['The upload was cut off before it finished; try again']);
+  }
+  if (code === 'FST_MP_PREMATURE_CLOSE' || code === 'ERR_STREAM_PREMATURE_CLOSE') {
+    return new BadRequestException(['The upload was cut off before it finished; try again']);
+  }
+  return err;
+}

@@ -1,0 +1,59 @@
+import { Controller, Delete, Get, HttpCode, Param, ParseUUIDPipe, Post, Query, Req, Res } from '@nestjs/common';
+import type { FastifyReply, FastifyRequest } from 'fastify';
+import { CurrentUser, RECORDERS, Roles } from '../auth/decorators.js';
+import type { SessionUser } from '../auth/session-user.js';
+import { ListEvidenceQueryDto } from './dto/list-evidence.query.js';
+import { EvidenceUploadService } from './evidence-upload.service.js';
+import { EvidenceService, type Download } from './evidence.service.js';
+
+@Controller('evidence')
+export class EvidenceController {
+  constructor(
+    private readonly evidence: EvidenceService,
+    private readonly uploads: EvidenceUploadService,
+  ) {}
+
+  /** multipart/form-data: file, subjectType, subjectId, caption (optional). */
+  @Post()
+  @Roles(...RECORDERS)
+  upload(@CurrentUser() user: SessionUser, @Req() req: FastifyRequest) {
+    return this.uploads.upload(user, req);
+  }
+
+  @Get()
+  list(@CurrentUser() user: SessionUser, @Query() query: ListEvidenceQueryDto) {
+    return this.evidence.list(user, query);
+  }
+
+  @Get('limits')
+  limits() {
+    return this.evidence.limits();
+  }
+
+  @Get(':id')
+  get(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string) {
+    return this.evidence.get(user, id);
+  }
+
+  @Get(':id/content')
+  async content(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string, @Res({ passthrough: true }) reply: FastifyReply) {
+    return send(reply, await this.evidence.content(user, id));
+  }
+
+  @Get(':id/thumbnail')
+  async thumbnail(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string, @Res({ passthrough: true }) reply: FastifyReply) {
+    return send(reply, await this.evidence.thumbnail(user, id));
+  }
+
+  @Delete(':id')
+  @Roles(...RECORDERS)
+  @HttpCode(204)
+  remove(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string) {
+    return this.evidence.remove(user, id);
+  }
+}
+
+function send(reply: FastifyReply, download: Download) {
+  reply.headers(download.headers);
+  return download.file;
+}
