@@ -7,6 +7,7 @@ import { RecordsModule } from './records/records.module.js';
 import { MachinesModule } from './machines/machines.module.js';
 import { CalculatorsModule } from './calculators/calculators.module.js';
 import { RailsModule } from './rails/rails.module.js';
+import { BoltDownsModule } from './bolt-downs/bolt-downs.module.js';
 import { EvidenceModule } from './evidence/evidence.module.js';
 
 // One line per domain module.
@@ -20,6 +21,7 @@ import { EvidenceModule } from './evidence/evidence.module.js';
     MachinesModule,
     CalculatorsModule,
     RailsModule,
+    BoltDownsModule,
     EvidenceModule,
   ],
 })

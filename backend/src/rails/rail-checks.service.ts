@@ -145,7 +145,7 @@ export class RailChecksService implements OnModuleInit {
       result: {
         value: inUnit(out.parallelismMm, t.parallelism),
         unit: t.parallelism.unit,
-        summary: `Parallelism ${show(out.parallelismMm, t.parallelism)} (target ${t.parallelism.value} ${t.parallelism.unit}); height difference ${show(out.meanOffsetMm, t.height)} (target ${t.height.value} ${t.height.unit}${heightWithin ? '' : ', outside'}); datum ${out.datum}`,
+        summary: `Parallelism ${show(out.parallelismMm, t.parallelism)} (target ${unitWord(t.parallelism)}); height difference ${show(out.meanOffsetMm, t.height)} (target ${unitWord(t.height)}${heightWithin ? '' : ', outside'}); datum ${out.datum}`,
       },
       recordType: 'rail-sweep',
       recordId: newer.id,
@@ -155,6 +155,7 @@ export class RailChecksService implements OnModuleInit {
 }
 
 const plain = (t: TargetValue) => ({ value: t.value, unit: t.unit });
+const unitWord = (t: TargetValue) => `${t.value} ${t.unit === 'um' ? 'µm' : t.unit}`;
 
 /** Each partner pair once, ids sorted so the check key is stable. */
 function pairs(rails: RailRow[]): [RailRow, RailRow][] {
