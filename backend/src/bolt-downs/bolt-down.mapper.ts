@@ -1,0 +1,101 @@
+import { boltDownSession, type SessionHoleInput } from '../engine/bolt-down-session.js';
+import { fromMm } from '../engine/units.js';
+import type { BoltDownHoleRow, BoltDownRow } from './bolt-downs.repository.js';
+
+export interface BoltDownHoleResponse {
+  index: number;
+  /** Hole centre from the rail's start, mm. */
+  position: number;
+  /** Rank in the proposed fixing order (0 = first). */
+  order: number;
+  /** Reading to aim for, in the bolt-down's unit (null until the first hole is fixed). */
+  target: number | null;
+  targetMm: number | null;
+  /** Reading as typed, in the bolt-down's unit. */
+  reading: number | null;
+  readingMm: number | null;
+  /** reading − target, in the bolt-down's unit. */
+  difference: number | null;
+  /** Within ±band of the aim (null when there is no reading or no aim yet). */
+  onTarget: boolean | null;
+  fixed: boolean;
+  fixedAt: string | null;
+  fixedBy: string | null;
+}
+
+export interface BoltDownResponse {
+  id: string;
+  railId: string;
+  machineId: string;
+  rail: { label: string; axis: string; lengthMm: number };
+  mode: BoltDownRow['mode'];
+  unit: BoltDownRow['unit'];
+  /** Half-width around the aim that counts as on target, in the unit and in mm. */
+  band: number;
+  bandMm: number;
+  holes: BoltDownHoleResponse[];
+  nextHole: number | null;
+  fixedCount: number;
+  holeCount: number;
+  complete: boolean;
+  finalSweepId: string | null;
+  createdBy: string;
+  createdAt: string;
+  updatedAt: string;
+}
+
+/** A hole write's answer: the whole bolt-down, and whether this write was a repeat of one already applied. */
+export interface HoleWriteResponse extends BoltDownResponse {
+  writeId: string;
+  repeated: boolean;
+}
+
+export function sessionOf(row: BoltDownRow, holes: BoltDownHoleRow[]) {
+  const inputs = new Map<number, SessionHoleInput>(holes.map((h) => [h.holeIndex, { readingMm: h.readingMm, fixed: h.fixed, fixSeq: h.fixSeq }]));
+  return boltDownSession(row.holePositionsMm, row.mode, inputs);
+}
+
+// Binary rounding of unit conversions (0.3 thou → mm → thou) must not read as a miss of the band.
+const BAND_SLACK_MM = 1e-12;
+
+export function toBoltDownResponse(row: BoltDownRow, holes: BoltDownHoleRow[], rail: BoltDownResponse['rail']): BoltDownResponse {
+  const session = sessionOf(row, holes);
+  const byIndex = new Map(holes.map((h) => [h.holeIndex, h]));
+  const inUnit = (mm: number | null) => (mm === null ? null : fromMm(mm, row.unit));
+  return {
+    id: row.id,
+    railId: row.railId,
+    machineId: row.machineId,
+    rail,
+    mode: row.mode,
+    unit: row.unit,
+    band: fromMm(row.bandMm, row.unit),
+    bandMm: row.bandMm,
+    holes: session.holes.map((h) => {
+      const stored = byIndex.get(h.index);
+      return {
+        index: h.index,
+        position: h.positionMm,
+        order: h.order,
+        target: inUnit(h.targetMm),
+        targetMm: h.targetMm,
+        // The raw value as typed, not a round trip through mm.
+        reading: stored?.readingRaw ?? null,
+        readingMm: h.readingMm,
+        difference: inUnit(h.differenceMm),
+        onTarget: h.differenceMm === null ? null : Math.abs(h.differenceMm) <= row.bandMm + BAND_SLACK_MM,
+        fixed: h.fixed,
+        fixedAt: stored?.fixed && stored.fixedAt ? stored.fixedAt.toISOString() : null,
+        fixedBy: stored?.fixed ? stored.fixedByName : null,
+      };
+    }),
+    nextHole: session.nextHole,
+    fixedCount: session.fixedCount,
+    holeCount: row.holePositionsMm.length,
+    complete: session.complete,
+    finalSweepId: row.finalSweepId,
+    createdBy: row.createdByName,
+    createdAt: row.createdAt.toISOString(),
+    updatedAt: row.updatedAt.toISOString(),
+  };
+}

@@ -1,0 +1,45 @@
+import { Body, Controller, Get, Param, ParseUUIDPipe, Post, Put, Res } from '@nestjs/common';
+import type { FastifyReply } from 'fastify';
+import { CurrentUser, RECORDERS, Roles } from '../auth/decorators.js';
+import type { SessionUser } from '../auth/session-user.js';
+import { BoltDownsService } from './bolt-downs.service.js';
+import { CreateBoltDownDto } from './dto/create-bolt-down.dto.js';
+import { FinalSweepDto } from './dto/final-sweep.dto.js';
+import { RecordHoleDto } from './dto/record-hole.dto.js';
+
+@Controller()
+export class BoltDownsController {
+  constructor(private readonly boltDowns: BoltDownsService) {}
+
+  @Post('rails/:id/bolt-downs')
+  @Roles(...RECORDERS)
+  start(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) railId: string, @Body() dto: CreateBoltDownDto) {
+    return this.boltDowns.start(user, railId, dto);
+  }
+
+  /** Latest first. */
+  @Get('rails/:id/bolt-downs')
+  list(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) railId: string) {
+    return this.boltDowns.listForRail(user, railId);
+  }
+
+  @Get('bolt-downs/:id')
+  get(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string) {
+    return this.boltDowns.get(user, id);
+  }
+
+  @Put('bolt-downs/:id/holes/:index')
+  @Roles(...RECORDERS)
+  recordHole(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string, @Param('index') index: string, @Body() dto: RecordHoleDto) {
+    return this.boltDowns.recordHole(user, id, index, dto);
+  }
+
+  /** 201 with the new sweep; 200 with the same one when its id was seen before. */
+  @Post('bolt-downs/:id/final-sweep')
+  @Roles(...RECORDERS)
+  async finalSweep(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string, @Body() dto: FinalSweepDto, @Res({ passthrough: true }) reply: FastifyReply) {
+    const { created, boltDown, sweep } = await this.boltDowns.recordFinalSweep(user, id, dto);
+    reply.status(created ? 201 : 200);
+    return { boltDown, sweep };
+  }
+}

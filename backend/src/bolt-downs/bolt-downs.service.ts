@@ -1,0 +1,207 @@
+import { BadRequestException, ConflictException, Injectable, NotFoundException, OnModuleInit } from '@nestjs/common';
+import type { SessionUser } from '../auth/session-user.js';
+import { holePositions } from '../engine/bolt-down.js';
+import { fromMm, toMm, type LengthUnit } from '../engine/units.js';
+import { MachinesService } from '../machines/machines.service.js';
+import { RailSweepsService } from '../rails/rail-sweeps.service.js';
+import { RailsService } from '../rails/rails.service.js';
+import type { RailRow } from '../rails/rails.repository.js';
+import type { SweepResponse } from '../rails/rail.mapper.js';
+import { RecordsService } from '../records/records.service.js';
+import { SubjectsRegistry } from '../records/subjects.registry.js';
+import { TargetSetsService } from '../target-sets/target-sets.service.js';
+import { sessionOf, toBoltDownResponse, type BoltDownResponse, type HoleWriteResponse } from './bolt-down.mapper.js';
+import { BoltDownsRepository, type BoltDownRow } from './bolt-downs.repository.js';
+import type { CreateBoltDownDto } from './dto/create-bolt-down.dto.js';
+import type { FinalSweepDto } from './dto/final-sweep.dto.js';
+import type { RecordHoleDto } from './dto/record-hole.dto.js';
+
+const RECORD_TYPE = 'bolt-down';
+/** A hole-by-hole guide beyond this many holes is not a rail anyone bolts down by hand. */
+export const MAX_HOLES = 1000;
+/** Largest reading a dial indicator gives, in mm; beyond it the reading is a typing slip. */
+const MAX_READING_MM = 100;
+// Positions of a final-sweep station and its hole may differ by rounding only.
+const STATION_SLACK_MM = 1e-6;
+
+/** The bolt-down guide: a rail fixed hole by hole, its progress kept on the server. */
+@Injectable()
+export class BoltDownsService implements OnModuleInit {
+  constructor(
+    private readonly repo: BoltDownsRepository,
+    private readonly rails: RailsService,
+    private readonly sweeps: RailSweepsService,
+    private readonly machines: MachinesService,
+    private readonly targetSets: TargetSetsService,
+    private readonly records: RecordsService,
+    private readonly subjects: SubjectsRegistry,
+  ) {}
+
+  onModuleInit() {
+    this.subjects.register(RECORD_TYPE, async (workshopId, id) => {
+      const row = await this.repo.find(workshopId, id);
+      if (!row) return null;
+      const rail = await this.rails.findRow({ workshopId }, row.railId);
+      return { machineId: row.machineId, recordType: RECORD_TYPE, recordId: id, label: `Bolt-down of rail ${rail.label}` };
+    });
+  }
+
+  async start(actor: SessionUser, railId: string, dto: CreateBoltDownDto): Promise<BoltDownResponse> {
+    const rail = await this.rails.findRow(actor, railId);
+    const unit: LengthUnit = dto.unit ?? 'mm';
+    const positions = holePositions({ lengthMm: rail.lengthMm, pitchMm: rail.holePitchMm, firstHoleOffsetMm: rail.firstHoleMm });
+    if (positions.length > MAX_HOLES) throw new BadRequestException([`the rail has ${positions.length} holes; the guide takes at most ${MAX_HOLES}`]);
+    const bandMm = dto.band !== undefined ? toMm(dto.band, unit) : await this.defaultBandMm(actor, rail);
+    const row = await this.repo.insert({
+      workshopId: actor.workshopId,
+      machineId: rail.machineId,
+      railId,
+      mode: dto.mode,
+      unit,
+      holePositionsMm: positions,
+      bandMm,
+      createdById: actor.id,
+      createdByName: actor.name,
+    });
+    await this.records.audit(actor, {
+      machineId: rail.machineId,
+      recordType: RECORD_TYPE,
+      recordId: row.id,
+      action: 'created',
+      summary: `Bolt-down of rail ${rail.label} begun (${dto.mode} mode, ${positions.length} holes, readings in ${unit})`,
+    });
+    return toBoltDownResponse(row, [], railInfo(rail));
+  }
+
+  async listForRail(actor: SessionUser, railId: string): Promise<BoltDownResponse[]> {
+    const rail = await this.rails.findRow(actor, railId);
+    const rows = await this.repo.listForRail(actor.workshopId, railId);
+    const holes = await this.repo.holesOf(actor.workshopId, rows.map((r) => r.id));
+    return rows.map((r) => toBoltDownResponse(r, holes.get(r.id)!, railInfo(rail)));
+  }
+
+  async get(actor: SessionUser, id: string): Promise<BoltDownResponse> {
+    const { row, rail } = await this.load(actor, id);
+    return this.respond(actor, row, rail);
+  }
+
+  /** Records a reading (and whether the hole is now fixed); a repeated writeId changes nothing. */
+  async recordHole(actor: SessionUser, id: string, indexParam: string, dto: RecordHoleDto): Promise<HoleWriteResponse> {
+    const { row, rail } = await this.load(actor, id);
+    const holeIndex = parseIndex(indexParam, row.holePositionsMm.length);
+    const readingMm = toMm(dto.reading, row.unit);
+    if (Math.abs(readingMm) > MAX_READING_MM) throw new BadRequestException([`reading must be within ±${fromMm(MAX_READING_MM, row.unit)} ${row.unit}`]);
+    // A repeat of a write already applied answers the same, even once the bolt-down is finished.
+    const seen = await this.repo.writeSeen(dto.writeId);
+    if (seen) {
+      if (seen.workshopId !== actor.workshopId || seen.boltDownId !== id || seen.target !== `hole:${holeIndex}`) {
+        throw new ConflictException('writeId was already used for another write; make a new one for each write');
+      }
+      return { ...(await this.respond(actor, row, rail)), writeId: dto.writeId, repeated: true };
+    }
+    if (row.finalSweepId) throw new ConflictException('This bolt-down is finished and has its final sweep; begin a new bolt-down to re-align the rail');
+    await this.records.assertEditable(RECORD_TYPE, id, 'This bolt-down');
+
+    const target = sessionOf(row, (await this.repo.holesOf(actor.workshopId, [id])).get(id)!).holes[holeIndex].targetMm;
+    const outcome = await this.repo.recordHole(actor.workshopId, id, { writeId: dto.writeId, holeIndex, readingRaw: dto.reading, readingMm, fixed: dto.fixed, actor });
+    if (outcome.kind === 'id-taken') throw new ConflictException('writeId was already used for another write; make a new one for each write');
+    if (outcome.kind === 'applied') {
+      const fmt = (mm: number | null) => (mm === null ? 'none yet' : `${signed(fromMm(mm, row.unit))} ${row.unit}`);
+      const at = `hole ${holeIndex + 1} at ${row.holePositionsMm[holeIndex]} mm`;
+      const summary = dto.fixed
+        ? `Rail ${rail.label}: ${at} fixed at ${signed(dto.reading)} ${row.unit} (aim ${fmt(target)})`
+        : outcome.before?.fixed
+          ? `Rail ${rail.label}: ${at} loosened again (reading ${signed(dto.reading)} ${row.unit})`
+          : `Rail ${rail.label}: reading ${signed(dto.reading)} ${row.unit} typed at ${at}`;
+      await this.records.audit(actor, {
+        machineId: row.machineId,
+        recordType: RECORD_TYPE,
+        recordId: id,
+        action: 'updated',
+        summary,
+        changes: { hole: holeIndex, reading: dto.reading, unit: row.unit, fixed: dto.fixed, writeId: dto.writeId },
+      });
+    }
+    const fresh = await this.repo.find(actor.workshopId, id);
+    return { ...(await this.respond(actor, fresh!, rail)), writeId: dto.writeId, repeated: outcome.kind === 'repeat' };
+  }
+
+  /**
+   * Saves the sweep taken at every hole once every hole is fixed, through the rails module so its
+   * result and status are the engine's like any other sweep. The sweep id (dto.id) makes a retry
+   * the same save.
+   */
+  async recordFinalSweep(actor: SessionUser, id: string, dto: FinalSweepDto): Promise<{ created: boolean; boltDown: BoltDownResponse; sweep: SweepResponse }> {
+    const { row, rail } = await this.load(actor, id);
+    if (row.finalSweepId) {
+      if (dto.id && dto.id === row.finalSweepId) {
+        return { created: false, boltDown: await this.respond(actor, row, rail), sweep: await this.sweeps.get(actor, row.finalSweepId) };
+      }
+      throw new ConflictException('This bolt-down already has its final sweep');
+    }
+    const session = sessionOf(row, (await this.repo.holesOf(actor.workshopId, [id])).get(id)!);
+    if (!session.complete) {
+      throw new ConflictException(`Fix every hole before the final sweep: ${session.fixedCount} of ${row.holePositionsMm.length} holes are fixed`);
+    }
+    checkStationsAtHoles(dto, row.holePositionsMm);
+    const { created, sweep } = await this.sweeps.record(actor, row.railId, dto);
+    const linked = await this.repo.linkFinalSweep(actor.workshopId, id, sweep.id);
+    if (linked !== sweep.id) throw new ConflictException('This bolt-down already has its final sweep');
+    if (created) {
+      await this.records.audit(actor, {
+        machineId: row.machineId,
+        recordType: RECORD_TYPE,
+        recordId: id,
+        action: 'updated',
+        summary: `Bolt-down of rail ${rail.label} finished with a final sweep at every hole (${sweep.status === 'within-target' ? 'within' : 'outside'} target)`,
+        changes: { finalSweepId: sweep.id },
+      });
+    }
+    const fresh = await this.repo.find(actor.workshopId, id);
+    return { created, boltDown: await this.respond(actor, fresh!, rail), sweep };
+  }
+
+  private async load(actor: SessionUser, id: string): Promise<{ row: BoltDownRow; rail: RailRow }> {
+    const row = await this.repo.find(actor.workshopId, id);
+    if (!row) throw new NotFoundException('No such bolt-down in this workshop');
+    return { row, rail: await this.rails.findRow(actor, row.railId) };
+  }
+
+  private async respond(actor: SessionUser, row: BoltDownRow, rail: RailRow): Promise<BoltDownResponse> {
+    const holes = await this.repo.holesOf(actor.workshopId, [row.id]);
+    return toBoltDownResponse(row, holes.get(row.id)!, railInfo(rail));
+  }
+
+  /** Half the rail straightness target: holes within ± that of the aim keep the rail inside it. */
+  private async defaultBandMm(actor: SessionUser, rail: RailRow): Promise<number> {
+    const machine = await this.machines.getRef(actor, rail.machineId);
+    const { base } = await this.targetSets.targetFor(actor.workshopId, machine.targetSetId, 'railStraightness');
+    return base / 2;
+  }
+}
+
+function railInfo(rail: RailRow) {
+  return { label: rail.label, axis: rail.axis, lengthMm: rail.lengthMm };
+}
+
+function parseIndex(raw: string, count: number): number {
+  const index = /^\d+$/.test(raw) ? Number(raw) : NaN;
+  if (!Number.isInteger(index) || index >= count) {
+    throw new BadRequestException([`index must be a hole of this rail: a whole number from 0 to ${count - 1}`]);
+  }
+  return index;
+}
+
+function checkStationsAtHoles(dto: FinalSweepDto, positionsMm: number[]) {
+  const missing = positionsMm.filter((p) => !dto.stations.some((s) => Math.abs(s.position - p) <= STATION_SLACK_MM));
+  const extra = dto.stations.filter((s) => !positionsMm.some((p) => Math.abs(s.position - p) <= STATION_SLACK_MM));
+  const problems: string[] = [];
+  if (missing.length) problems.push(`stations must include every hole: missing ${missing.slice(0, 5).join(', ')} mm${missing.length > 5 ? ' …' : ''}`);
+  if (extra.length) problems.push(`stations must be at the holes only: ${extra.slice(0, 5).map((s) => s.position).join(', ')} mm is not a hole`);
+  if (problems.length) throw new BadRequestException(problems);
+}
+
+function signed(v: number): string {
+  const r = Number(v.toPrecision(6));
+  return r > 0 ? `+${r}` : `${r}`;
+}
