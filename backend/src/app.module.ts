@@ -9,6 +9,7 @@ import { CalculatorsModule } from './calculators/calculators.module.js';
 import { RailsModule } from './rails/rails.module.js';
 import { BoltDownsModule } from './bolt-downs/bolt-downs.module.js';
 import { EvidenceModule } from './evidence/evidence.module.js';
+import { DrivesModule } from './drives/drives.module.js';
 
 // One line per domain module.
 @Module({
@@ -23,6 +24,7 @@ import { EvidenceModule } from './evidence/evidence.module.js';
     RailsModule,
     BoltDownsModule,
     EvidenceModule,
+    DrivesModule,
   ],
 })
 export class AppModule {}

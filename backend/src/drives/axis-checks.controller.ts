@@ -1,0 +1,82 @@
+import { Body, Controller, Delete, Get, HttpCode, Param, ParseUUIDPipe, Post, Query, Res } from '@nestjs/common';
+import type { FastifyReply } from 'fastify';
+import { CurrentUser, Roles } from '../auth/decorators.js';
+import type { SessionUser } from '../auth/session-user.js';
+import { CALIBRATORS } from './drive-roles.js';
+import { CreatePositioningRunDto } from './dto/positioning-run.dto.js';
+import { TestProgramQuery } from './dto/test-program.query.js';
+import { CreateTravelTrialDto } from './dto/travel-trial.dto.js';
+import { PositioningRunsService } from './positioning-runs.service.js';
+import { TestProgramService } from './test-program.service.js';
+import { TravelTrialsService } from './travel-trials.service.js';
+
+/** Travel trials, repeat-and-reverse runs and test programs of one axis. */
+@Controller('axes/:id')
+export class AxisChecksController {
+  constructor(
+    private readonly trials: TravelTrialsService,
+    private readonly runs: PositioningRunsService,
+    private readonly programs: TestProgramService,
+  ) {}
+
+  @Get('travel-trials')
+  listTrials(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) axisId: string) {
+    return this.trials.list(user, axisId);
+  }
+
+  @Post('travel-trials')
+  @Roles(...CALIBRATORS)
+  createTrial(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) axisId: string, @Body() dto: CreateTravelTrialDto) {
+    return this.trials.create(user, axisId, dto);
+  }
+
+  @Get('travel-trials/:trialId')
+  getTrial(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) axisId: string, @Param('trialId', ParseUUIDPipe) id: string) {
+    return this.trials.get(user, axisId, id);
+  }
+
+  @Post('travel-trials/:trialId/apply')
+  @Roles(...CALIBRATORS)
+  @HttpCode(200)
+  apply(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) axisId: string, @Param('trialId', ParseUUIDPipe) id: string) {
+    return this.trials.apply(user, axisId, id);
+  }
+
+  @Delete('travel-trials/:trialId')
+  @Roles(...CALIBRATORS)
+  @HttpCode(204)
+  deleteTrial(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) axisId: string, @Param('trialId', ParseUUIDPipe) id: string) {
+    return this.trials.delete(user, axisId, id);
+  }
+
+  @Get('positioning-runs')
+  listRuns(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) axisId: string) {
+    return this.runs.list(user, axisId);
+  }
+
+  @Post('positioning-runs')
+  @Roles(...CALIBRATORS)
+  createRun(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) axisId: string, @Body() dto: CreatePositioningRunDto) {
+    return this.runs.create(user, axisId, dto);
+  }
+
+  @Get('positioning-runs/:runId')
+  getRun(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) axisId: string, @Param('runId', ParseUUIDPipe) id: string) {
+    return this.runs.get(user, axisId, id);
+  }
+
+  @Delete('positioning-runs/:runId')
+  @Roles(...CALIBRATORS)
+  @HttpCode(204)
+  deleteRun(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) axisId: string, @Param('runId', ParseUUIDPipe) id: string) {
+    return this.runs.delete(user, axisId, id);
+  }
+
+  @Get('test-program')
+  async testProgram(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) axisId: string, @Query() q: TestProgramQuery, @Res({ passthrough: true }) reply: FastifyReply) {
+    const { filename, text } = await this.programs.program(user, axisId, q);
+    reply.header('Content-Type', 'text/plain; charset=utf-8');
+    reply.header('Content-Disposition', `attachment; filename="${filename}"`);
+    return text;
+  }
+}

@@ -1,0 +1,157 @@
+import { Injectable, OnModuleInit } from '@nestjs/common';
+import type { SessionUser } from '../auth/session-user.js';
+import type { PositioningResult } from '../engine/positioning.js';
+import type { TravelTrialResult } from '../engine/travel-trial.js';
+import { MachinesService } from '../machines/machines.service.js';
+import type { MachineRef, ReadinessCheck } from '../records/readiness.js';
+import { ReadinessRegistry } from '../records/readiness.registry.js';
+import { TARGET_LABELS } from '../target-sets/target-keys.js';
+import { AxesRepository, type AxisRow } from './axes.repository.js';
+import { AxesService } from './axes.service.js';
+import type { AxisCheckSummary, AxisResponse } from './axis.mapper.js';
+import { AxisChecksRepository } from './axis-checks.repository.js';
+import { positioningVerdicts, travelTrialStatus } from './drive-status.js';
+import { DriveTargetsService, type DriveTargets } from './drive-targets.js';
+import { speedCheckOf } from './speed-check.js';
+import { travelEnvelopeOf } from './travel-envelope.js';
+
+const fmt = (v: number, d = 3) => v.toFixed(d);
+const axisLink = (machineId: string, axisId: string) => `/machines/${machineId}/axes/${axisId}`;
+
+/**
+ * The drive checks of a machine as the readiness board and the Drives tab see them: per axis the
+ * latest travel trial, the latest repeat-and-reverse run and (screw axes) the speed check, and
+ * one travel-envelope check per machine, each against the machine's current target set.
+ */
+@Injectable()
+export class DriveChecksService implements OnModuleInit {
+  constructor(
+    private readonly axesRepo: AxesRepository,
+    private readonly axes: AxesService,
+    private readonly checks: AxisChecksRepository,
+    private readonly machines: MachinesService,
+    private readonly targets: DriveTargetsService,
+    private readonly readiness: ReadinessRegistry,
+  ) {}
+
+  onModuleInit() {
+    this.readiness.register({ checksFor: (machine) => this.checksFor(machine) });
+  }
+
+  async checksFor(machine: MachineRef): Promise<ReadinessCheck[]> {
+    const rows = await this.axesRepo.list(machine.workshopId, machine.id);
+    const targets = await this.targets.forMachine(machine);
+    const perAxis = await this.axisChecks(machine, rows, targets);
+    const envelope = travelEnvelopeOf(machine, rows, targets);
+    const envelopeCheck: ReadinessCheck = {
+      key: `travel-envelope:${machine.id}`,
+      kind: 'travel-envelope',
+      subject: 'Travel envelope (X and Y)',
+      status: envelope.status,
+      target: { ...envelope.margin, label: TARGET_LABELS.travelMargin },
+      result: envelope.axes.some((a) => a.spare !== null)
+        ? { value: Math.min(...envelope.axes.filter((a) => a.spare !== null).map((a) => a.spare!)), unit: 'mm', summary: envelope.summary }
+        : null,
+      recordType: null,
+      recordId: null,
+      recordedAt: null,
+      link: `/machines/${machine.id}?tab=drives`,
+    };
+    return [...perAxis.flatMap((a) => a.checks), envelopeCheck];
+  }
+
+  /** GET /api/machines/:id/axes: each axis with its latest statuses. */
+  async listWithChecks(actor: SessionUser, machineId: string): Promise<(AxisResponse & { checks: Record<'travelTrial' | 'positioning' | 'speedCheck', AxisCheckSummary> })[]> {
+    const machine = await this.machines.getRef(actor, machineId);
+    const rows = await this.axesRepo.list(actor.workshopId, machineId);
+    const [responses, targets] = await Promise.all([this.axes.respondMany(rows), this.targets.forMachine(machine)]);
+    const perAxis = await this.axisChecks(machine, rows, targets);
+    return responses.map((axis, i) => {
+      const [travelTrial, positioning, speedCheck] = perAxis[i].summaries;
+      return { ...axis, checks: { travelTrial, positioning, speedCheck } };
+    });
+  }
+
+  async travelEnvelope(actor: SessionUser, machineId: string) {
+    const machine = await this.machines.getRef(actor, machineId);
+    const rows = await this.axesRepo.list(actor.workshopId, machineId);
+    return travelEnvelopeOf(machine, rows, await this.targets.forMachine(machine));
+  }
+
+  async speedCheck(actor: SessionUser, axisId: string) {
+    const row = await this.axes.findRow(actor, axisId);
+    const machine = await this.machines.getRef(actor, row.machineId);
+    return speedCheckOf(row, await this.targets.forMachine(machine));
+  }
+
+  private async axisChecks(machine: MachineRef, rows: AxisRow[], targets: DriveTargets) {
+    const ids = rows.map((r) => r.id);
+    const [trials, runs] = await Promise.all([this.checks.latestTrials(machine.workshopId, ids), this.checks.latestRuns(machine.workshopId, ids)]);
+    return rows.map((axis) => {
+      const link = axisLink(machine.id, axis.id);
+      const out: ReadinessCheck[] = [];
+      const summaries: AxisCheckSummary[] = [];
+
+      const trial = trials.get(axis.id);
+      const tr = trial ? (trial.result as unknown as TravelTrialResult) : null;
+      const trialSummary = tr
+        ? `${fmt(tr.errorPercent)} % scale error at ${trial!.stepsPerMmUsed} steps/mm; corrected ${fmt(tr.correctedStepsPerMm, 4)} steps/mm${trial!.appliedAt ? ' (applied — record a confirming trial)' : ''}`
+        : 'No travel trial recorded yet';
+      const trialStatus = tr ? travelTrialStatus(tr.errorPercent, targets) : 'not-started';
+      out.push({
+        key: `travel-trial:${axis.id}`,
+        kind: 'travel-trial',
+        subject: `Axis ${axis.name}`,
+        status: trialStatus,
+        target: { ...targets.stepsPerMmError.target, label: TARGET_LABELS.stepsPerMmError },
+        result: tr ? { value: tr.errorPercent, unit: '%', summary: trialSummary } : null,
+        recordType: trial ? 'travel-trial' : null,
+        recordId: trial?.id ?? null,
+        recordedAt: trial?.createdAt.toISOString() ?? null,
+        link,
+      });
+      summaries.push({ status: trialStatus, summary: trialSummary, recordId: trial?.id ?? null, recordedAt: trial?.createdAt.toISOString() ?? null });
+
+      const run = runs.get(axis.id);
+      const pr = run ? (run.result as unknown as PositioningResult) : null;
+      const verdict = pr ? positioningVerdicts({ accuracy: pr.accuracyMm, repeatability: pr.repeatabilityMm, reversal: pr.reversalMm }, targets) : null;
+      const runSummary = pr ? `accuracy ${fmt(pr.accuracyMm)} mm, repeatability ${fmt(pr.repeatabilityMm)} mm, reversal ${fmt(pr.reversalMm)} mm` : 'No repeat-and-reverse run recorded yet';
+      const t = targets;
+      out.push({
+        key: `positioning:${axis.id}`,
+        kind: 'positioning',
+        subject: `Axis ${axis.name}`,
+        status: verdict?.status ?? 'not-started',
+        target: {
+          ...t.positioningAccuracy.target,
+          label: `${TARGET_LABELS.positioningAccuracy} ≤ ${t.positioningAccuracy.target.value} ${t.positioningAccuracy.target.unit}, repeatability ≤ ${t.repeatability.target.value} ${t.repeatability.target.unit}, reversal ≤ ${t.reversal.target.value} ${t.reversal.target.unit}`,
+        },
+        result: pr ? { value: pr.accuracyMm, unit: 'mm', summary: runSummary } : null,
+        recordType: run ? 'positioning-run' : null,
+        recordId: run?.id ?? null,
+        recordedAt: run?.createdAt.toISOString() ?? null,
+        link,
+      });
+      summaries.push({ status: verdict?.status ?? 'not-started', summary: runSummary, recordId: run?.id ?? null, recordedAt: run?.createdAt.toISOString() ?? null });
+
+      const speed = speedCheckOf(axis, targets);
+      const speedSummary = speed.rpm !== null ? `${Math.round(speed.rpm)} rpm at ${speed.feedRate} mm/min; allowed ${Math.round(Math.min(speed.allowedSpeed!, speed.dnLimitSpeed!))} rpm (highest safe feed ${Math.round(speed.safeFeedRate!)} mm/min)` : speed.reason!;
+      if (speed.applicable) {
+        out.push({
+          key: `speed-check:${axis.id}`,
+          kind: 'speed-check',
+          subject: `Axis ${axis.name}`,
+          status: speed.status as ReadinessCheck['status'],
+          target: { ...targets.screwSpeedHeadroom.target, label: `${TARGET_LABELS.screwSpeedHeadroom}, and within the d·n limit` },
+          result: speed.rpm !== null ? { value: speed.rpm, unit: 'rpm', summary: speedSummary } : null,
+          recordType: 'axis',
+          recordId: axis.id,
+          recordedAt: speed.rpm !== null ? axis.updatedAt.toISOString() : null,
+          link,
+        });
+      }
+      summaries.push({ status: speed.status, summary: speedSummary, recordId: speed.applicable ? axis.id : null, recordedAt: null });
+      return { checks: out, summaries };
+    });
+  }
+}

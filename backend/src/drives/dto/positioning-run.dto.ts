@@ -1,0 +1,40 @@
+import { Type } from 'class-transformer';
+import { ArrayMaxSize, IsArray, IsIn, IsNumber, IsObject, IsOptional, IsString, MaxLength, ValidateNested } from 'class-validator';
+import type { Direction } from '../../engine/positioning.js';
+import { LENGTH_UNITS, type LengthUnit } from '../../engine/units.js';
+
+const FINITE = { allowNaN: false, allowInfinity: false } as const;
+
+export class PositioningRunEntryDto {
+  @IsIn(['up', 'down'], { message: 'runs[].direction must be up or down' })
+  direction: Direction;
+
+  /** Actual − target at each target, in the run's unit. */
+  @IsArray({ message: 'runs[].deviations must be a list of numbers' })
+  @ArrayMaxSize(500, { message: 'runs[].deviations holds at most 500 values' })
+  @IsNumber(FINITE, { each: true, message: 'every value in runs[].deviations must be a finite number' })
+  deviations: number[];
+}
+
+export class CreatePositioningRunDto {
+  @IsIn(LENGTH_UNITS, { message: `unit must be one of ${LENGTH_UNITS.join(', ')}` })
+  unit: LengthUnit;
+
+  /** Target positions along the axis, mm, ascending. */
+  @IsArray({ message: 'targets must be a list of numbers (mm)' })
+  @ArrayMaxSize(500, { message: 'targets holds at most 500 positions' })
+  @IsNumber(FINITE, { each: true, message: 'every value in targets must be a finite number' })
+  targets: number[];
+
+  @IsArray({ message: 'runs must be a list of {direction, deviations}' })
+  @ArrayMaxSize(100, { message: 'runs holds at most 100 runs' })
+  @IsObject({ each: true, message: 'every entry of runs must be {direction, deviations}' })
+  @ValidateNested({ each: true })
+  @Type(() => PositioningRunEntryDto)
+  runs: PositioningRunEntryDto[];
+
+  @IsOptional()
+  @IsString({ message: 'notes must be text' })
+  @MaxLength(2000, { message: 'notes must be at most 2000 characters' })
+  notes?: string;
+}

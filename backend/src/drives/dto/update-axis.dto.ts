@@ -1,0 +1,44 @@
+import { Type } from 'class-transformer';
+import { IsObject, IsOptional, IsString, Matches, MaxLength, ValidateIf, ValidateNested } from 'class-validator';
+import { DriveDto } from './drive.dto.js';
+import { Finite, OptionalFinite } from './validators.js';
+
+/** Every field optional; a drive given replaces the whole drive. null clears maxFeedRate or measuredTravelMm. */
+export class UpdateAxisDto {
+  @IsOptional()
+  @IsString({ message: 'name must be text such as X, Y1 or Z' })
+  @Matches(/\S/, { message: 'name must not be empty' })
+  @MaxLength(40, { message: 'name must be at most 40 characters' })
+  name?: string;
+
+  @IsOptional()
+  @IsObject({ message: 'drive must be an object {type, …}' })
+  @ValidateNested()
+  @Type(() => DriveDto)
+  drive?: DriveDto;
+
+  @OptionalFinite('motorStepsPerRev')
+  motorStepsPerRev?: number;
+
+  @OptionalFinite('microsteps')
+  microsteps?: number;
+
+  @OptionalFinite('gearRatio')
+  gearRatio?: number;
+
+  @OptionalFinite('stepsPerMm')
+  stepsPerMm?: number;
+
+  @ValidateIf((_, v) => v !== null && v !== undefined)
+  @Finite('maxFeedRate')
+  maxFeedRate?: number | null;
+
+  @ValidateIf((_, v) => v !== null && v !== undefined)
+  @Finite('measuredTravelMm')
+  measuredTravelMm?: number | null;
+
+  @IsOptional()
+  @IsString({ message: 'notes must be text' })
+  @MaxLength(5000, { message: 'notes must be at most 5000 characters' })
+  notes?: string;
+}

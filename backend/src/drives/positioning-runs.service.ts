@@ -1,0 +1,92 @@
+import { Injectable, NotFoundException, OnModuleInit } from '@nestjs/common';
+import type { SessionUser } from '../auth/session-user.js';
+import { evaluatePositioning } from '../engine/positioning.js';
+import { arrayToMm } from '../engine/units.js';
+import { MachinesService } from '../machines/machines.service.js';
+import { RecordsService } from '../records/records.service.js';
+import { SubjectsRegistry } from '../records/subjects.registry.js';
+import { AxesService } from './axes.service.js';
+import { toPositioningRunResponse } from './axis-check.mapper.js';
+import { AxisChecksRepository, type PositioningRunRow } from './axis-checks.repository.js';
+import { DriveTargetsService } from './drive-targets.js';
+import type { CreatePositioningRunDto } from './dto/positioning-run.dto.js';
+
+/** Repeat-and-reverse runs (ISO 230-2 positioning test) of an axis. */
+@Injectable()
+export class PositioningRunsService implements OnModuleInit {
+  constructor(
+    private readonly repo: AxisChecksRepository,
+    private readonly axes: AxesService,
+    private readonly machines: MachinesService,
+    private readonly targets: DriveTargetsService,
+    private readonly records: RecordsService,
+    private readonly subjects: SubjectsRegistry,
+  ) {}
+
+  onModuleInit() {
+    this.subjects.register('positioning-run', async (workshopId, id) => {
+      const row = await this.repo.runById(workshopId, id);
+      if (!row) return null;
+      const axis = await this.axes.findRow({ workshopId }, row.axisId);
+      return { machineId: row.machineId, recordType: 'positioning-run', recordId: id, label: `Repeat-and-reverse run of ${axis.name}` };
+    });
+  }
+
+  async list(actor: SessionUser, axisId: string) {
+    const axis = await this.axes.findRow(actor, axisId);
+    const [rows, targets] = await Promise.all([this.repo.runs(actor.workshopId, axisId), this.targetsOf(actor, axis.machineId)]);
+    const locked = await this.records.lockedIds('positioning-run', rows.map((r) => r.id));
+    return rows.map((r) => toPositioningRunResponse(r, targets, locked.has(r.id)));
+  }
+
+  async get(actor: SessionUser, axisId: string, id: string) {
+    const axis = await this.axes.findRow(actor, axisId);
+    const row = await this.findRow(actor, axisId, id);
+    const locked = await this.records.lockedIds('positioning-run', [id]);
+    return toPositioningRunResponse(row, await this.targetsOf(actor, axis.machineId), locked.has(id));
+  }
+
+  async create(actor: SessionUser, axisId: string, dto: CreatePositioningRunDto) {
+    const axis = await this.axes.findRow(actor, axisId);
+    const result = evaluatePositioning({
+      targetsMm: dto.targets,
+      runs: dto.runs.map((r) => ({ direction: r.direction, deviationsMm: arrayToMm(r.deviations, dto.unit) })),
+    });
+    const row = await this.repo.insertRun({
+      workshopId: actor.workshopId,
+      machineId: axis.machineId,
+      axisId,
+      unit: dto.unit,
+      targets: dto.targets,
+      runs: dto.runs.map((r) => ({ direction: r.direction, deviations: r.deviations })),
+      result: result as unknown as Record<string, unknown>,
+      notes: dto.notes ?? '',
+      recordedById: actor.id,
+      recordedByName: actor.name,
+    });
+    const response = toPositioningRunResponse(row, await this.targetsOf(actor, axis.machineId), false);
+    await this.records.checkRecorded(
+      actor,
+      { machineId: axis.machineId, kind: 'positioning', recordType: 'positioning-run', recordId: row.id, status: response.status },
+      `Repeat-and-reverse run of axis ${axis.name}: accuracy ${result.accuracyMm.toFixed(3)} mm, repeatability ${result.repeatabilityMm.toFixed(3)} mm, reversal ${result.reversalMm.toFixed(3)} mm`,
+    );
+    return response;
+  }
+
+  async delete(actor: SessionUser, axisId: string, id: string): Promise<void> {
+    const row = await this.findRow(actor, axisId, id);
+    await this.records.assertEditable('positioning-run', id, 'This repeat-and-reverse run');
+    await this.repo.deleteRun(actor.workshopId, id);
+    await this.records.audit(actor, { machineId: row.machineId, recordType: 'positioning-run', recordId: id, action: 'deleted', summary: 'Repeat-and-reverse run deleted' });
+  }
+
+  private async findRow(actor: SessionUser, axisId: string, id: string): Promise<PositioningRunRow> {
+    const row = await this.repo.run(actor.workshopId, axisId, id);
+    if (!row) throw new NotFoundException('No such repeat-and-reverse run of this axis');
+    return row;
+  }
+
+  private async targetsOf(actor: SessionUser, machineId: string) {
+    return this.targets.forMachine(await this.machines.getRef(actor, machineId));
+  }
+}
