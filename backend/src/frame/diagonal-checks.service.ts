@@ -1,0 +1,100 @@
+import { BadRequestException, Injectable } from '@nestjs/common';
+import type { SessionUser } from '../auth/session-user.js';
+import { toMm } from '../engine/units.js';
+import { MachinesService } from '../machines/machines.service.js';
+import type { MachineRef, ReadinessCheck } from '../records/readiness.js';
+import { RecordsService } from '../records/records.service.js';
+import { diagonalCheckResult, impossibleDiagonals, type DiagonalInputMm } from './diagonal-check-result.js';
+import type { CreateDiagonalCheckDto } from './dto/create-diagonal-check.dto.js';
+import { FrameTargets, judge, type TargetOf } from './frame-targets.js';
+import { toDiagonalCheckResponse, type DiagonalCheckResponse } from './frame.mapper.js';
+import { FrameRepository, type DiagonalCheckRow } from './frame.repository.js';
+
+export const DIAGONAL_CHECK = 'diagonal-check';
+
+@Injectable()
+export class DiagonalChecksService {
+  constructor(
+    private readonly repo: FrameRepository,
+    private readonly machines: MachinesService,
+    private readonly targets: FrameTargets,
+    private readonly records: RecordsService,
+  ) {}
+
+  async create(actor: SessionUser, machineId: string, dto: CreateDiagonalCheckDto): Promise<DiagonalCheckResponse> {
+    const machine = await this.machines.getRef(actor, machineId);
+    const unit = dto.unit ?? 'mm';
+    const input: DiagonalInputMm = {
+      sideXMm: toMm(dto.sideX, unit),
+      sideYMm: toMm(dto.sideY, unit),
+      diagonal1Mm: toMm(dto.diagonal1, unit),
+      diagonal2Mm: toMm(dto.diagonal2, unit),
+      gantrySpanMm: dto.gantrySpan == null ? null : toMm(dto.gantrySpan, unit),
+    };
+    const impossible = impossibleDiagonals(input);
+    if (impossible.length) throw new BadRequestException(impossible);
+    // Evaluated before saving so input the engine refuses is never stored.
+    diagonalCheckResult(input);
+    const row = await this.repo.insertDiagonalCheck({
+      workshopId: actor.workshopId,
+      machineId: machine.id,
+      unit,
+      ...input,
+      note: dto.note?.trim() ?? '',
+      recordedById: actor.id,
+      recordedByName: actor.name,
+    });
+    const response = this.respond(row, await this.targets.of(machine, 'squareness'), false);
+    await this.records.checkRecorded(
+      actor,
+      { machineId: machine.id, kind: DIAGONAL_CHECK, recordType: DIAGONAL_CHECK, recordId: row.id, status: response.status },
+      `Diagonal check: ${response.result.mmPerMetre.toFixed(3)} mm/m out of square (${response.result.outOfSquareArcsec.toFixed(0)}″), ${response.status.replace('-', ' ')}`,
+    );
+    return response;
+  }
+
+  async list(actor: SessionUser, machineId: string): Promise<DiagonalCheckResponse[]> {
+    const machine = await this.machines.getRef(actor, machineId);
+    const rows = await this.repo.listDiagonalChecks(actor.workshopId, machine.id);
+    const locked = await this.records.lockedIds(DIAGONAL_CHECK, rows.map((r) => r.id));
+    const target = await this.targets.of(machine, 'squareness');
+    return rows.map((r) => this.respond(r, target, locked.has(r.id)));
+  }
+
+  async readiness(machine: MachineRef): Promise<ReadinessCheck> {
+    const [row] = await this.repo.listDiagonalChecks(machine.workshopId, machine.id, 1);
+    const t = await this.targets.of(machine, 'squareness');
+    const { target } = t;
+    const base: ReadinessCheck = {
+      key: `${DIAGONAL_CHECK}:${machine.id}`,
+      kind: DIAGONAL_CHECK,
+      subject: 'Gantry squareness (diagonals)',
+      status: 'not-started',
+      target,
+      result: null,
+      recordType: DIAGONAL_CHECK,
+      recordId: null,
+      recordedAt: null,
+      link: `/machines/${machine.id}?tab=frame`,
+    };
+    if (!row) return base;
+    const r = this.respond(row, t, false);
+    return {
+      ...base,
+      status: r.status,
+      result: { value: r.result.mmPerMetre, unit: 'mm/m', summary: `${r.result.mmPerMetre.toFixed(3)} mm/m out of square; move one side ${r.result.correction.moveMm.toFixed(2)} mm` },
+      recordId: row.id,
+      recordedAt: r.recordedAt,
+    };
+  }
+
+  async resolve(workshopId: string, id: string) {
+    const row = await this.repo.findDiagonalCheck(workshopId, id);
+    return row ? { machineId: row.machineId, recordType: DIAGONAL_CHECK, recordId: row.id, label: `Diagonal check of ${row.recordedAt.toISOString().slice(0, 10)}` } : null;
+  }
+
+  private respond(row: DiagonalCheckRow, { target, base }: TargetOf, locked: boolean): DiagonalCheckResponse {
+    const result = diagonalCheckResult(row);
+    return toDiagonalCheckResponse(row, result, judge(result.mmPerMetre, base), target, locked);
+  }
+}

@@ -1,0 +1,48 @@
+import { Type } from 'class-transformer';
+import { ArrayMaxSize, ArrayMinSize, IsArray, IsInt, IsObject, IsOptional, Max, Min, ValidateNested } from 'class-validator';
+import type { LengthUnit } from '../../engine/units.js';
+import { FiniteNumber, OptionalNote, OptionalUnit } from './fields.js';
+
+export const MAX_GRID_POINTS = 2500;
+
+export class GridPointDto {
+  /** Position across the bed, mm. */
+  @FiniteNumber('points[].x')
+  x: number;
+
+  /** Position along the bed, mm. */
+  @FiniteNumber('points[].y')
+  y: number;
+
+  /** Height at the point, in the grid's unit. */
+  @FiniteNumber('points[].z')
+  z: number;
+}
+
+export class CreateBedGridDto {
+  @OptionalUnit()
+  unit?: LengthUnit;
+
+  @IsOptional()
+  @IsInt({ message: 'rows must be a whole number' })
+  @Min(1, { message: 'rows must be at least 1' })
+  @Max(50, { message: 'rows must be at most 50' })
+  rows?: number;
+
+  @IsOptional()
+  @IsInt({ message: 'columns must be a whole number' })
+  @Min(1, { message: 'columns must be at least 1' })
+  @Max(50, { message: 'columns must be at most 50' })
+  columns?: number;
+
+  @IsArray({ message: 'points must be a list of {x, y, z}' })
+  @ArrayMinSize(3, { message: 'points needs at least 3 points for a plane' })
+  @ArrayMaxSize(MAX_GRID_POINTS, { message: `points has more than ${MAX_GRID_POINTS} entries` })
+  @IsObject({ each: true, message: 'every entry of points must be {x, y, z}' })
+  @ValidateNested({ each: true })
+  @Type(() => GridPointDto)
+  points: GridPointDto[];
+
+  @OptionalNote()
+  note?: string;
+}

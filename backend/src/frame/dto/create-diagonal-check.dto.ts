@@ -1,0 +1,32 @@
+import { IsOptional } from 'class-validator';
+import type { LengthUnit } from '../../engine/units.js';
+import { OptionalNote, OptionalUnit, PositiveLength } from './fields.js';
+
+/**
+ * A rectangle the machine marked or cut (or the frame): its two sides, both diagonals and the
+ * gantry span, all in `unit` (mm when absent). Diagonal 1 runs from the X0 Y0 corner to the far
+ * corner, diagonal 2 from the X-far Y0 corner to the X0 Y-far corner.
+ */
+export class CreateDiagonalCheckDto {
+  @PositiveLength('sideX')
+  sideX: number;
+
+  @PositiveLength('sideY')
+  sideY: number;
+
+  @PositiveLength('diagonal1')
+  diagonal1: number;
+
+  @PositiveLength('diagonal2')
+  diagonal2: number;
+
+  @IsOptional()
+  @PositiveLength('gantrySpan')
+  gantrySpan?: number;
+
+  @OptionalUnit()
+  unit?: LengthUnit;
+
+  @OptionalNote()
+  note?: string;
+}

@@ -1,0 +1,87 @@
+import { Type } from 'class-transformer';
+import { IsIn, IsNumber, IsObject, IsOptional, IsPositive, Max, Min, ValidateNested } from 'class-validator';
+import type { CircleKind } from '../../database/schema/frame.js';
+import type { LengthUnit } from '../../engine/units.js';
+import { OptionalNote, OptionalUnit, PositiveLength } from './fields.js';
+
+export class TestCutNominalDto {
+  @PositiveLength('nominal.x')
+  x: number;
+
+  @PositiveLength('nominal.y')
+  y: number;
+
+  /** Commanded diameter of the circle. */
+  @PositiveLength('nominal.circle')
+  circle: number;
+}
+
+export class TestCutMeasuredDto {
+  @PositiveLength('measured.x')
+  x: number;
+
+  @PositiveLength('measured.y')
+  y: number;
+
+  @PositiveLength('measured.diagonal1')
+  diagonal1: number;
+
+  @PositiveLength('measured.diagonal2')
+  diagonal2: number;
+
+  @PositiveLength('measured.circleX')
+  circleX: number;
+
+  @PositiveLength('measured.circleY')
+  circleY: number;
+
+  /** Width of cut the controller did not compensate for; leave out (or 0) when kerf compensation was on. */
+  @IsOptional()
+  @IsNumber({ allowNaN: false, allowInfinity: false }, { message: 'measured.kerf must be a number' })
+  @Min(0, { message: 'measured.kerf must not be negative' })
+  @Max(25, { message: 'measured.kerf must be at most 25 mm' })
+  kerf?: number;
+}
+
+export class StepsPerMmDto {
+  @IsOptional()
+  @IsNumber({ allowNaN: false, allowInfinity: false }, { message: 'stepsPerMm.x must be a number' })
+  @IsPositive({ message: 'stepsPerMm.x must be greater than zero' })
+  x?: number;
+
+  @IsOptional()
+  @IsNumber({ allowNaN: false, allowInfinity: false }, { message: 'stepsPerMm.y must be a number' })
+  @IsPositive({ message: 'stepsPerMm.y must be greater than zero' })
+  y?: number;
+}
+
+/** Commanded and measured sizes of the test cut, lengths in `unit` (mm when absent). */
+export class CreateTestCutDto {
+  @OptionalUnit()
+  unit?: LengthUnit;
+
+  @IsObject({ message: 'nominal must be {x, y, circle}' })
+  @ValidateNested()
+  @Type(() => TestCutNominalDto)
+  nominal: TestCutNominalDto;
+
+  @IsObject({ message: 'measured must be {x, y, diagonal1, diagonal2, circleX, circleY, kerf?}' })
+  @ValidateNested()
+  @Type(() => TestCutMeasuredDto)
+  measured: TestCutMeasuredDto;
+
+  /** Whether the circle is a hole in the square (default) or a disc cut on its own. */
+  @IsOptional()
+  @IsIn(['hole', 'disc'], { message: 'circleKind must be hole or disc' })
+  circleKind?: CircleKind;
+
+  /** The controller's steps per mm when the cut was made, for the suggested new values. */
+  @IsOptional()
+  @IsObject({ message: 'stepsPerMm must be {x, y}' })
+  @ValidateNested()
+  @Type(() => StepsPerMmDto)
+  stepsPerMm?: StepsPerMmDto;
+
+  @OptionalNote()
+  note?: string;
+}

@@ -1,0 +1,56 @@
+import { Body, Controller, Get, Param, ParseUUIDPipe, Post } from '@nestjs/common';
+import { CurrentUser, Roles } from '../auth/decorators.js';
+import type { SessionUser } from '../auth/session-user.js';
+import type { Role } from '../database/schema/users.js';
+import { BedGridsService } from './bed-grids.service.js';
+import { DiagonalChecksService } from './diagonal-checks.service.js';
+import { CreateBedGridDto } from './dto/create-bed-grid.dto.js';
+import { CreateDiagonalCheckDto } from './dto/create-diagonal-check.dto.js';
+import { CreateTestCutDto } from './dto/create-test-cut.dto.js';
+import { TestCutsService } from './test-cuts.service.js';
+
+// Builders square and level the frame as they build it; the test cut is a technician's job.
+const FRAME_RECORDERS: Role[] = ['admin', 'owner', 'technician', 'builder'];
+const CUT_RECORDERS: Role[] = ['admin', 'owner', 'technician'];
+
+@Controller('machines/:id')
+export class FrameController {
+  constructor(
+    private readonly diagonals: DiagonalChecksService,
+    private readonly grids: BedGridsService,
+    private readonly cuts: TestCutsService,
+  ) {}
+
+  @Post('diagonal-checks')
+  @Roles(...FRAME_RECORDERS)
+  createDiagonalCheck(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string, @Body() dto: CreateDiagonalCheckDto) {
+    return this.diagonals.create(user, id, dto);
+  }
+
+  @Get('diagonal-checks')
+  listDiagonalChecks(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string) {
+    return this.diagonals.list(user, id);
+  }
+
+  @Post('bed-grids')
+  @Roles(...FRAME_RECORDERS)
+  createBedGrid(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string, @Body() dto: CreateBedGridDto) {
+    return this.grids.create(user, id, dto);
+  }
+
+  @Get('bed-grids')
+  listBedGrids(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string) {
+    return this.grids.list(user, id);
+  }
+
+  @Post('test-cuts')
+  @Roles(...CUT_RECORDERS)
+  createTestCut(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string, @Body() dto: CreateTestCutDto) {
+    return this.cuts.create(user, id, dto);
+  }
+
+  @Get('test-cuts')
+  listTestCuts(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string) {
+    return this.cuts.list(user, id);
+  }
+}

@@ -1,0 +1,129 @@
+import { BadRequestException, Injectable } from '@nestjs/common';
+import type { SessionUser } from '../auth/session-user.js';
+import type { TestCutSizesMm } from '../database/schema/frame.js';
+import { toMm } from '../engine/units.js';
+import { MachinesService } from '../machines/machines.service.js';
+import type { MachineRef, ReadinessCheck } from '../records/readiness.js';
+import { RecordsService } from '../records/records.service.js';
+import type { CreateTestCutDto } from './dto/create-test-cut.dto.js';
+import { FrameTargets, type TargetOf } from './frame-targets.js';
+import { toTestCutResponse, type FrameStatus, type TestCutResponse } from './frame.mapper.js';
+import { FrameRepository, type TestCutRow } from './frame.repository.js';
+import { afterKerf, testCutResult } from './test-cut-result.js';
+import { impossibleDiagonals } from './diagonal-check-result.js';
+
+export const TEST_CUT = 'test-cut';
+
+interface TestCutTargets {
+  part: TargetOf;
+  squareness: TargetOf;
+}
+
+@Injectable()
+export class TestCutsService {
+  constructor(
+    private readonly repo: FrameRepository,
+    private readonly machines: MachinesService,
+    private readonly targets: FrameTargets,
+    private readonly records: RecordsService,
+  ) {}
+
+  async create(actor: SessionUser, machineId: string, dto: CreateTestCutDto): Promise<TestCutResponse> {
+    const machine = await this.machines.getRef(actor, machineId);
+    const unit = dto.unit ?? 'mm';
+    const mm = (v: number) => toMm(v, unit);
+    const sizes: TestCutSizesMm = {
+      nominal: { xMm: mm(dto.nominal.x), yMm: mm(dto.nominal.y), circleMm: mm(dto.nominal.circle) },
+      measured: {
+        xMm: mm(dto.measured.x),
+        yMm: mm(dto.measured.y),
+        diagonal1Mm: mm(dto.measured.diagonal1),
+        diagonal2Mm: mm(dto.measured.diagonal2),
+        circleXMm: mm(dto.measured.circleX),
+        circleYMm: mm(dto.measured.circleY),
+      },
+      kerfMm: mm(dto.measured.kerf ?? 0),
+      circleKind: dto.circleKind ?? 'hole',
+      stepsPerMm: { x: dto.stepsPerMm?.x ?? null, y: dto.stepsPerMm?.y ?? null },
+    };
+    const m = afterKerf(sizes);
+    const impossible = impossibleDiagonals({ sideXMm: m.xMm, sideYMm: m.yMm, diagonal1Mm: m.diagonal1Mm, diagonal2Mm: m.diagonal2Mm, gantrySpanMm: null });
+    if (impossible.length) throw new BadRequestException(impossible.map((msg) => `measured.${msg.replace(/side([XY])/g, 'measured.$1')}`));
+    const targets = await this.targetsOf(machine);
+    // Evaluated before saving so input the engine refuses is never stored.
+    testCutResult(sizes, targets.part.base);
+    const row = await this.repo.insertTestCut({
+      workshopId: actor.workshopId,
+      machineId: machine.id,
+      unit,
+      sizes,
+      note: dto.note?.trim() ?? '',
+      recordedById: actor.id,
+      recordedByName: actor.name,
+    });
+    const r = this.respond(row, targets, false);
+    await this.records.checkRecorded(
+      actor,
+      { machineId: machine.id, kind: TEST_CUT, recordType: TEST_CUT, recordId: row.id, status: r.status },
+      `Test cut: scale X ${r.result.scaleErrorX.toFixed(3)} %, Y ${r.result.scaleErrorY.toFixed(3)} %, ${r.result.squareness.mmPerMetre.toFixed(3)} mm/m out of square, ${r.status.replace('-', ' ')}`,
+    );
+    return r;
+  }
+
+  async list(actor: SessionUser, machineId: string): Promise<TestCutResponse[]> {
+    const machine = await this.machines.getRef(actor, machineId);
+    const rows = await this.repo.listTestCuts(actor.workshopId, machine.id);
+    const locked = await this.records.lockedIds(TEST_CUT, rows.map((r) => r.id));
+    const targets = await this.targetsOf(machine);
+    return rows.map((r) => this.respond(r, targets, locked.has(r.id)));
+  }
+
+  async readiness(machine: MachineRef): Promise<ReadinessCheck> {
+    const [row] = await this.repo.listTestCuts(machine.workshopId, machine.id, 1);
+    const targets = await this.targetsOf(machine);
+    const base: ReadinessCheck = {
+      key: `${TEST_CUT}:${machine.id}`,
+      kind: TEST_CUT,
+      subject: 'Test cut (part sizes and squareness)',
+      status: 'not-started',
+      target: targets.part.target,
+      result: null,
+      recordType: TEST_CUT,
+      recordId: null,
+      recordedAt: null,
+      link: `/machines/${machine.id}?tab=frame`,
+    };
+    if (!row) return base;
+    const r = this.respond(row, targets, false);
+    const worst = Math.max(...r.result.parts.map((p) => Math.abs(p.deviationMm)));
+    const outside = r.result.parts.filter((p) => !p.within).length;
+    return {
+      ...base,
+      status: r.status,
+      result: {
+        value: worst,
+        unit: 'mm',
+        summary: `largest part size error ${worst.toFixed(2)} mm${outside ? ` (${outside} of 4 outside ±${targets.part.base.toFixed(2)} mm)` : ''}; ${r.result.squareness.mmPerMetre.toFixed(3)} mm/m out of square`,
+      },
+      recordId: row.id,
+      recordedAt: r.recordedAt,
+    };
+  }
+
+  async resolve(workshopId: string, id: string) {
+    const row = await this.repo.findTestCut(workshopId, id);
+    return row ? { machineId: row.machineId, recordType: TEST_CUT, recordId: row.id, label: `Test cut of ${row.recordedAt.toISOString().slice(0, 10)}` } : null;
+  }
+
+  private async targetsOf(machine: MachineRef): Promise<TestCutTargets> {
+    return { part: await this.targets.of(machine, 'partTolerance'), squareness: await this.targets.of(machine, 'squareness') };
+  }
+
+  /** Within target only when every part size is within ± the part tolerance and the cut is square enough. */
+  private respond(row: TestCutRow, targets: TestCutTargets, locked: boolean): TestCutResponse {
+    const result = testCutResult(row.sizes, targets.part.base);
+    const within = result.parts.every((p) => p.within) && result.squareness.mmPerMetre <= targets.squareness.base;
+    const status: FrameStatus = within ? 'within-target' : 'outside-target';
+    return toTestCutResponse(row, result, status, { part: targets.part.target, squareness: targets.squareness.target }, locked);
+  }
+}
