@@ -8,8 +8,12 @@ import { MachinesModule } from './machines/machines.module.js';
 import { CalculatorsModule } from './calculators/calculators.module.js';
 import { RailsModule } from './rails/rails.module.js';
 import { BoltDownsModule } from './bolt-downs/bolt-downs.module.js';
+import { FrameModule } from './frame/frame.module.js';
+import { SafetyModule } from './safety/safety.module.js';
 import { EvidenceModule } from './evidence/evidence.module.js';
 import { DrivesModule } from './drives/drives.module.js';
+import { MailModule } from './mail/mail.module.js';
+import { ApprovalsModule } from './approvals/approvals.module.js';
 
 // One line per domain module.
 @Module({
@@ -23,8 +27,12 @@ import { DrivesModule } from './drives/drives.module.js';
     CalculatorsModule,
     RailsModule,
     BoltDownsModule,
+    FrameModule,
+    SafetyModule,
     EvidenceModule,
     DrivesModule,
+    MailModule,
+    ApprovalsModule,
   ],
 })
 export class AppModule {}
