@@ -17,6 +17,7 @@ const router = createBrowserRouter([
       { path: paths.machines, lazy: page(() => import('./routes/machines')) },
       { path: '/machines/:machineId', lazy: page(() => import('./routes/machine-file')) },
       // Feature routes: one line each.
+      { path: paths.calculators, lazy: page(() => import('./routes/calculators')) },
       { path: '*', Component: NotFoundRoute },
     ],
   },

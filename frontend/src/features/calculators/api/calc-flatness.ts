@@ -1,0 +1,6 @@
+import { useCalculation } from './run-calculation';
+import type { FlatnessRequest, FlatnessResult } from '../types';
+
+/** POST /api/calc/flatness */
+export const useFlatnessCalculation = (body: FlatnessRequest | null) =>
+  useCalculation<FlatnessRequest, FlatnessResult>('flatness', body);

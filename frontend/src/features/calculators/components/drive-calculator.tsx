@@ -1,0 +1,93 @@
+import { useState } from 'react';
+import { MenuItem, TextField } from '@mui/material';
+import { useDriveCalculation } from '../api/calc-drive';
+import { useStableBody } from '../hooks/use-stable-body';
+import type { DriveRequest, DriveType } from '../types';
+import { significant } from '../utils/format';
+import { CalculationState } from './calculation-state';
+import { CalculatorLayout } from './calculator-layout';
+import { FieldGrid } from './field-grid';
+import { NumberField, numberOrNull } from './number-field';
+import { ResultTable } from './result-table';
+
+const TYPES: { value: DriveType; label: string }[] = [
+  { value: 'screw', label: 'Screw (ball or lead screw)' },
+  { value: 'belt', label: 'Belt and pulley' },
+  { value: 'rack', label: 'Rack and pinion' },
+];
+
+type Field = 'motorStepsPerRev' | 'microsteps' | 'gearRatio' | 'lead' | 'beltPitch' | 'pulleyTeeth' | 'pinionModule' | 'pinionTeeth';
+const NEEDS: Record<DriveType, Field[]> = { screw: ['lead'], belt: ['beltPitch', 'pulleyTeeth'], rack: ['pinionModule', 'pinionTeeth'] };
+
+export function DriveCalculator() {
+  const [type, setType] = useState<DriveType>('screw');
+  const [v, setV] = useState<Record<Field, string>>({
+    motorStepsPerRev: '200',
+    microsteps: '8',
+    gearRatio: '1',
+    lead: '',
+    beltPitch: '',
+    pulleyTeeth: '',
+    pinionModule: '',
+    pinionTeeth: '',
+  });
+  const set = (f: Field) => (text: string) => setV((s) => ({ ...s, [f]: text }));
+  const n = (f: Field) => numberOrNull(v[f]);
+  const needed: Field[] = ['motorStepsPerRev', 'microsteps', ...NEEDS[type]];
+  const ready = needed.every((f) => n(f) !== null);
+  const body = useStableBody<DriveRequest>(
+    ready
+      ? {
+          type,
+          motorStepsPerRev: n('motorStepsPerRev')!,
+          microsteps: n('microsteps')!,
+          ...(n('gearRatio') !== null ? { gearRatio: n('gearRatio')! } : {}),
+          ...Object.fromEntries(NEEDS[type].map((f) => [f, n(f)])),
+        }
+      : null,
+  );
+  const calc = useDriveCalculation(body);
+  const r = calc.data?.result;
+
+  return (
+    <CalculatorLayout
+      intro="Steps per millimetre from the motor, the driver's microstepping and the drive. Lead is the travel per screw turn (pitch × starts), not the thread pitch alone."
+      inputs={
+        <>
+          <TextField select label="Drive" value={type} onChange={(e) => setType(e.target.value as DriveType)} sx={{ minWidth: 260, justifySelf: 'start' }}>
+            {TYPES.map((t) => (
+              <MenuItem key={t.value} value={t.value}>
+                {t.label}
+              </MenuItem>
+            ))}
+          </TextField>
+          <FieldGrid>
+            <NumberField label="Motor steps per revolution" value={v.motorStepsPerRev} onChange={set('motorStepsPerRev')} unit="steps" helperText="200 for a 1.8° motor" />
+            <NumberField label="Microsteps" value={v.microsteps} onChange={set('microsteps')} unit="×" />
+            <NumberField label="Gear ratio" value={v.gearRatio} onChange={set('gearRatio')} unit=": 1" required={false} helperText="Motor turns per screw, pulley or pinion turn" />
+            {type === 'screw' && <NumberField label="Lead" value={v.lead} onChange={set('lead')} unit="mm" />}
+            {type === 'belt' && <NumberField label="Belt pitch" value={v.beltPitch} onChange={set('beltPitch')} unit="mm" />}
+            {type === 'belt' && <NumberField label="Pulley teeth" value={v.pulleyTeeth} onChange={set('pulleyTeeth')} unit="teeth" />}
+            {type === 'rack' && <NumberField label="Pinion module" value={v.pinionModule} onChange={set('pinionModule')} unit="mm" />}
+            {type === 'rack' && <NumberField label="Pinion teeth" value={v.pinionTeeth} onChange={set('pinionTeeth')} unit="teeth" />}
+          </FieldGrid>
+        </>
+      }
+      results={
+        <CalculationState waitingFor={ready ? null : 'Fill in every field marked *.'} isFetching={calc.isFetching} error={calc.error}>
+          {r && (
+            <ResultTable
+              title="Steps per mm result"
+              rows={[
+                { label: 'Steps per mm', value: significant(r.stepsPerMm, 7, 'steps/mm'), strong: true },
+                { label: 'Travel per revolution', value: significant(r.travelPerRev, 6, 'mm'), note: 'Of the screw, pulley or pinion' },
+                { label: 'Travel per motor revolution', value: significant(r.travelPerMotorRev, 6, 'mm') },
+                { label: 'Resolution', value: significant(r.resolution * 1000, 4, 'µm per step'), note: 'Microsteps add resolution, not accuracy' },
+              ]}
+            />
+          )}
+        </CalculationState>
+      }
+    />
+  );
+}
