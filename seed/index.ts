@@ -2,12 +2,16 @@ import type { INestApplicationContext } from '@nestjs/common';
 import type { SeedContext } from './context.js';
 import { seedPeople } from './people.js';
 import { seedMachines } from './machines.js';
+import { seedFrame } from './frame.js';
+import { seedSafety } from './safety.js';
 import { seedRails } from './rails.js';
 
 /** The demo workshop, built through the product's own services so results match the engine. */
 export async function runDemoSeed(app: INestApplicationContext): Promise<SeedContext> {
   const ctx: SeedContext = { app, ...(await seedPeople(app)) };
   ctx.machines = await seedMachines(ctx);
+  await seedFrame(ctx);
+  await seedSafety(ctx);
   await seedRails(ctx);
   // Each domain adds its demo records here, in dependency order.
   return ctx;
