@@ -8,19 +8,24 @@ import { LocalStrategy } from './local.strategy.js';
 import { LoginBodyGuard } from './login-body.guard.js';
 import { LoginThrottle } from './login-throttle.js';
 import { SessionAuthGuard } from './session-auth.guard.js';
+import { PasswordLinksController } from './password-links.controller.js';
+import { PasswordLinksRepository } from './password-links.repository.js';
+import { PasswordLinksService } from './password-links.service.js';
 
 @Global()
 @Module({
   imports: [PassportModule.register({ session: false })],
-  controllers: [AuthController],
+  controllers: [AuthController, PasswordLinksController],
   providers: [
     AuthRepository,
     AuthService,
     LocalStrategy,
     LoginBodyGuard,
+    PasswordLinksRepository,
+    PasswordLinksService,
     { provide: LoginThrottle, useFactory: () => new LoginThrottle() },
     { provide: APP_GUARD, useClass: SessionAuthGuard },
   ],
-  exports: [AuthService],
+  exports: [AuthService, PasswordLinksService],
 })
 export class AuthModule {}

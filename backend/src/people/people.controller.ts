@@ -20,6 +20,11 @@ export class PeopleController {
     return this.people.add(user, dto);
   }
 
+  @Post(':id/invitation')
+  resendInvitation(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string) {
+    return this.people.resendInvitation(user, id);
+  }
+
   @Patch(':id')
   update(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string, @Body() dto: UpdatePersonDto) {
     return this.people.update(user, id, dto);

@@ -32,6 +32,22 @@ export interface ReadinessCheck {
   recordedAt: string | null;
   /** Client path to the evidence. */
   link: string;
+  /**
+   * Optional small data series behind the result (a few hundred points at most), kept in the
+   * approval snapshot and drawn on the certificate: residuals per station for straightness,
+   * mean deviation per target position for positioning, the measured rectangle for squareness.
+   */
+  series?: CheckSeries;
+}
+
+/** A chart's data in the units it is drawn in: lines of [x, y] points and optional limit lines. */
+export interface CheckSeries {
+  title?: string;
+  x: { label: string; unit: string };
+  y: { label: string; unit: string };
+  lines: { label: string; points: [number, number][] }[];
+  /** Horizontal limits, e.g. the tolerance band (+t/2 and -t/2) in the y unit. */
+  limits?: { label: string; value: number }[];
 }
 
 export interface MachineRef {

@@ -10,3 +10,5 @@ export * from './frame.js';
 export * from './safety.js';
 export * from './drives.js';
 export * from './bolt-downs.js';
+export * from './approvals.js';
+export * from './password-links.js';

@@ -1,0 +1,65 @@
+import { Injectable } from '@nestjs/common';
+import type { SessionUser } from '../auth/session-user.js';
+import { loadConfig } from '../config/config.js';
+import { MailService } from '../mail/mail.service.js';
+import { approvalRequestedMail, approvedMail, recheckDueMail } from './approval-mails.js';
+import { ApprovalsRepository, type ApprovalRow } from './approvals.repository.js';
+import { CertificateService } from './certificate/certificate.service.js';
+import type { BoardCheck } from './snapshot.js';
+
+const machineUrl = (machineId: string) => `${loadConfig().appUrl}/machines/${machineId}?tab=readiness`;
+
+/** Who hears of what: owners of a request, the whole workshop of an approval, owners and technicians of a re-check. */
+@Injectable()
+export class ApprovalNotifier {
+  constructor(
+    private readonly repo: ApprovalsRepository,
+    private readonly mail: MailService,
+    private readonly certificates: CertificateService,
+  ) {}
+
+  async approvalRequested(actor: SessionUser, machineName: string, machineId: string, checks: BoardCheck[]) {
+    const owners = (await this.repo.members(actor.workshopId)).filter((m) => m.role === 'owner');
+    const { subject, text } = approvalRequestedMail({
+      machineName,
+      workshopName: actor.workshopName,
+      requestedBy: actor.name,
+      url: machineUrl(machineId),
+      checkCount: checks.length,
+      waivedCount: checks.filter((c) => c.status === 'waived').length,
+    });
+    await this.mail.send({ workshopId: actor.workshopId, to: owners.map((o) => o.email), subject, text });
+  }
+
+  async approved(actor: SessionUser, approval: ApprovalRow) {
+    const everyone = await this.repo.members(actor.workshopId);
+    const pdf = await this.certificates.render(approval);
+    const { subject, text } = approvedMail({
+      snapshot: approval.snapshot,
+      approvedBy: approval.approvedByName,
+      approvedAt: approval.approvedAt,
+      recordHash: approval.recordHash,
+      recheckDueAt: approval.recheckDueAt,
+      url: machineUrl(approval.machineId),
+    });
+    await this.mail.send({
+      workshopId: actor.workshopId,
+      to: everyone.map((m) => m.email),
+      subject,
+      text,
+      attachments: [{ filename: this.certificates.filename(approval), content: pdf, contentType: 'application/pdf' }],
+    });
+  }
+
+  async recheckDue(approval: ApprovalRow, machineName: string) {
+    const people = (await this.repo.members(approval.workshopId)).filter((m) => m.role === 'owner' || m.role === 'technician');
+    const { subject, text } = recheckDueMail({
+      machineName,
+      workshopName: approval.snapshot.workshop.name,
+      approvedAt: approval.approvedAt,
+      recheckDueAt: approval.recheckDueAt,
+      url: machineUrl(approval.machineId),
+    });
+    await this.mail.send({ workshopId: approval.workshopId, to: people.map((p) => p.email), subject, text });
+  }
+}

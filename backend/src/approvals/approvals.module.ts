@@ -1,0 +1,30 @@
+import { Module } from '@nestjs/common';
+import { APP_INTERCEPTOR } from '@nestjs/core';
+import { MachinesModule } from '../machines/machines.module.js';
+import { MailModule } from '../mail/mail.module.js';
+import { ApprovalNotifier } from './approval-notifier.js';
+import { ApprovalsController } from './approvals.controller.js';
+import { ApprovalsRepository } from './approvals.repository.js';
+import { ApprovalsService } from './approvals.service.js';
+import { CertificateService } from './certificate/certificate.service.js';
+import { DriftService } from './drift.service.js';
+import { ReadinessBoardService } from './readiness-board.service.js';
+import { RecheckInterceptor } from './recheck.interceptor.js';
+import { RecheckService } from './recheck.service.js';
+
+@Module({
+  imports: [MachinesModule, MailModule],
+  controllers: [ApprovalsController],
+  providers: [
+    ApprovalsRepository,
+    ApprovalsService,
+    ReadinessBoardService,
+    ApprovalNotifier,
+    CertificateService,
+    DriftService,
+    RecheckService,
+    { provide: APP_INTERCEPTOR, useClass: RecheckInterceptor },
+  ],
+  exports: [ApprovalsService],
+})
+export class ApprovalsModule {}

@@ -1,0 +1,126 @@
+import { Inject, Injectable } from '@nestjs/common';
+import { and, asc, desc, eq, inArray, isNull, lte } from 'drizzle-orm';
+import { DRIZZLE, type Database } from '../database/database.tokens.js';
+import { approvalRequests, approvals, machines, users, waivers, workshops } from '../database/schema/index.js';
+
+export type WaiverRow = typeof waivers.$inferSelect;
+export type ApprovalRow = typeof approvals.$inferSelect;
+export type RequestRow = typeof approvalRequests.$inferSelect;
+
+@Injectable()
+export class ApprovalsRepository {
+  constructor(@Inject(DRIZZLE) private readonly db: Database) {}
+
+  waivers(workshopId: string, machineId: string): Promise<WaiverRow[]> {
+    return this.db
+      .select()
+      .from(waivers)
+      .where(and(eq(waivers.workshopId, workshopId), eq(waivers.machineId, machineId)))
+      .orderBy(desc(waivers.waivedAt));
+  }
+
+  async insertWaiver(values: typeof waivers.$inferInsert): Promise<WaiverRow> {
+    const [row] = await this.db.insert(waivers).values(values).returning();
+    return row;
+  }
+
+  async openRequest(workshopId: string, machineId: string): Promise<RequestRow | null> {
+    const [row] = await this.db
+      .select()
+      .from(approvalRequests)
+      .where(and(eq(approvalRequests.workshopId, workshopId), eq(approvalRequests.machineId, machineId), eq(approvalRequests.status, 'open')))
+      .orderBy(desc(approvalRequests.requestedAt))
+      .limit(1);
+    return row ?? null;
+  }
+
+  async insertRequest(values: typeof approvalRequests.$inferInsert): Promise<RequestRow> {
+    const [row] = await this.db.insert(approvalRequests).values(values).returning();
+    return row;
+  }
+
+  async closeOpenRequests(workshopId: string, machineId: string): Promise<void> {
+    await this.db
+      .update(approvalRequests)
+      .set({ status: 'closed' })
+      .where(and(eq(approvalRequests.workshopId, workshopId), eq(approvalRequests.machineId, machineId), eq(approvalRequests.status, 'open')));
+  }
+
+  /**
+   * Stores the approval only if its request is still open, in one transaction, so two owners
+   * approving at once cannot both succeed. null when the request was taken first.
+   */
+  async insertApproval(requestId: string, values: typeof approvals.$inferInsert): Promise<ApprovalRow | null> {
+    return this.db.transaction(async (tx) => {
+      const taken = await tx
+        .update(approvalRequests)
+        .set({ status: 'approved' })
+        .where(and(eq(approvalRequests.id, requestId), eq(approvalRequests.status, 'open')))
+        .returning({ id: approvalRequests.id });
+      if (!taken.length) return null;
+      const [row] = await tx.insert(approvals).values(values).returning();
+      return row;
+    });
+  }
+
+  async latestApproval(workshopId: string, machineId: string): Promise<ApprovalRow | null> {
+    const [row] = await this.db
+      .select()
+      .from(approvals)
+      .where(and(eq(approvals.workshopId, workshopId), eq(approvals.machineId, machineId)))
+      .orderBy(desc(approvals.approvedAt))
+      .limit(1);
+    return row ?? null;
+  }
+
+  async approval(workshopId: string, machineId: string, approvalId: string): Promise<ApprovalRow | null> {
+    const [row] = await this.db
+      .select()
+      .from(approvals)
+      .where(and(eq(approvals.workshopId, workshopId), eq(approvals.machineId, machineId), eq(approvals.id, approvalId)));
+    return row ?? null;
+  }
+
+  listApprovals(workshopId: string, machineId: string): Promise<ApprovalRow[]> {
+    return this.db
+      .select()
+      .from(approvals)
+      .where(and(eq(approvals.workshopId, workshopId), eq(approvals.machineId, machineId)))
+      .orderBy(desc(approvals.approvedAt));
+  }
+
+  /** The latest approval of each machine in the given states (all workshops when workshopId is null). */
+  async latestApprovalsOfMachinesIn(workshopId: string | null, states: ('ready-to-cut' | 'recheck-due')[]) {
+    const rows = await this.db
+      .selectDistinctOn([approvals.machineId], { approval: approvals, state: machines.state, machineName: machines.name })
+      .from(approvals)
+      .innerJoin(machines, eq(machines.id, approvals.machineId))
+      .where(and(inArray(machines.state, states), workshopId ? eq(approvals.workshopId, workshopId) : undefined))
+      .orderBy(approvals.machineId, desc(approvals.approvedAt));
+    return rows;
+  }
+
+  /** True for the one caller that marks the re-check mail as sent. */
+  async markRecheckNotified(approvalId: string): Promise<boolean> {
+    const rows = await this.db
+      .update(approvals)
+      .set({ recheckNotifiedAt: new Date() })
+      .where(and(eq(approvals.id, approvalId), isNull(approvals.recheckNotifiedAt), lte(approvals.recheckDueAt, new Date())))
+      .returning({ id: approvals.id });
+    return rows.length > 0;
+  }
+
+  /** Active members of the workshop, for addressing mail. */
+  members(workshopId: string) {
+    return this.db
+      .select({ id: users.id, email: users.email, name: users.name, role: users.role })
+      .from(users)
+      .where(and(eq(users.workshopId, workshopId), eq(users.active, true)))
+      .orderBy(asc(users.name));
+  }
+
+  async workshopName(workshopId: string): Promise<string> {
+    const [row] = await this.db.select({ name: workshops.name }).from(workshops).where(eq(workshops.id, workshopId));
+    return row?.name ?? '';
+  }
+}

@@ -1,0 +1,182 @@
+import { BadRequestException, ConflictException, ForbiddenException, Injectable, OnModuleInit } from '@nestjs/common';
+import type { SessionUser } from '../auth/session-user.js';
+import { AuthService } from '../auth/auth.service.js';
+import type { MachineState } from '../database/schema/machines.js';
+import { MachinesService } from '../machines/machines.service.js';
+import { RecordsService, type CheckRecordedEvent } from '../records/records.service.js';
+import { ApprovalNotifier } from './approval-notifier.js';
+import { ApprovalsRepository } from './approvals.repository.js';
+import { toApprovalResponse, toBlocking, toCheckResponse, toRequestResponse } from './approval.mapper.js';
+import { KIND_LABELS } from './board.js';
+import { ReadinessBoardService } from './readiness-board.service.js';
+import { RecheckService } from './recheck.service.js';
+import { snapshotHash } from './snapshot.js';
+import { defaultStatement } from './statement.js';
+import type { ApproveDto } from './dto/approve.dto.js';
+import type { WaiverDto } from './dto/waiver.dto.js';
+
+const DAY_MS = 24 * 3600_000;
+
+/** The owner's job: the board, waivers, approval requests, signed approvals and what undoes them. */
+@Injectable()
+export class ApprovalsService implements OnModuleInit {
+  constructor(
+    private readonly repo: ApprovalsRepository,
+    private readonly board: ReadinessBoardService,
+    private readonly machines: MachinesService,
+    private readonly records: RecordsService,
+    private readonly auth: AuthService,
+    private readonly recheck: RecheckService,
+    private readonly notifier: ApprovalNotifier,
+  ) {}
+
+  onModuleInit() {
+    this.records.onCheckRecorded((actor, event) => this.onCheckRecorded(actor, event));
+  }
+
+  async readiness(actor: SessionUser, machineId: string) {
+    await this.machines.getRef(actor, machineId);
+    await this.recheck.sweepWorkshop(actor.workshopId);
+    const b = await this.board.board(actor, machineId);
+    const [approval, request] = await Promise.all([this.repo.latestApproval(actor.workshopId, machineId), this.repo.openRequest(actor.workshopId, machineId)]);
+    return {
+      machineId,
+      state: b.machine.state,
+      checks: b.checks.map(toCheckResponse),
+      blocking: b.blocking.map(toBlocking),
+      counts: countsOf(b.checks),
+      approval: approval ? toApprovalResponse(approval) : null,
+      request: request ? toRequestResponse(request) : null,
+      recheckDueAt: approval && ['ready-to-cut', 'recheck-due'].includes(b.machine.state) ? approval.recheckDueAt.toISOString() : null,
+      targetSet: b.targetSet,
+      defaultStatement: defaultStatement(b.machine.name, b.targetSet.name),
+    };
+  }
+
+  async waive(actor: SessionUser, machineId: string, checkKey: string, dto: WaiverDto) {
+    const b = await this.board.board(actor, machineId);
+    const check = b.checks.find((c) => c.key === checkKey);
+    if (!check) throw new BadRequestException([`checkId "${checkKey}" is not a required check of this machine`]);
+    if (check.measuredStatus === 'within-target') throw new ConflictException(`${check.subject}: ${KIND_LABELS[check.kind].toLowerCase()} is within target and needs no waiver`);
+    if (check.status === 'waived') throw new ConflictException(`${check.subject}: ${KIND_LABELS[check.kind].toLowerCase()} is already waived for its current record`);
+    if (b.machine.state === 'awaiting-approval') throw new ConflictException('The machine is awaiting approval: waive before requesting it, or record the check again');
+    const row = await this.repo.insertWaiver({
+      workshopId: actor.workshopId,
+      machineId,
+      checkKey,
+      recordType: check.recordType,
+      recordId: check.recordId,
+      reason: dto.reason,
+      waivedById: actor.id,
+      waivedByName: actor.name,
+    });
+    await this.records.audit(actor, {
+      machineId,
+      recordType: 'waiver',
+      recordId: row.id,
+      action: 'created',
+      summary: `Waived ${KIND_LABELS[check.kind].toLowerCase()} of ${check.subject}: ${dto.reason}`,
+      changes: { check: checkKey, status: { from: check.measuredStatus, to: 'waived' }, reason: dto.reason },
+    });
+    return { id: row.id, checkKey, reason: row.reason, waivedBy: row.waivedByName, waivedAt: row.waivedAt.toISOString(), recordId: row.recordId };
+  }
+
+  async requestApproval(actor: SessionUser, machineId: string) {
+    const b = await this.board.board(actor, machineId);
+    refuseUnlessState(b.machine.state, ['being-built', 'recheck-due'], 'request approval');
+    if (!b.checks.length) throw new ConflictException({ message: 'No required checks are reported for this machine yet', blocking: [] });
+    if (b.blocking.length) {
+      throw new ConflictException({
+        message: `${b.blocking.length} check${b.blocking.length === 1 ? '' : 's'} must be within target or waived first: ${b.blocking.map((c) => `${KIND_LABELS[c.kind]} (${c.subject})`).join(', ')}`,
+        blocking: b.blocking.map(toBlocking),
+      });
+    }
+    await this.repo.closeOpenRequests(actor.workshopId, machineId);
+    const request = await this.repo.insertRequest({ workshopId: actor.workshopId, machineId, requestedById: actor.id, requestedByName: actor.name });
+    await this.changeState(actor, machineId, b.machine.state, 'awaiting-approval', `${actor.name} requested approval`);
+    await this.notifier.approvalRequested(actor, b.machine.name, machineId, b.checks);
+    return { ...toRequestResponse(request), state: 'awaiting-approval' as const };
+  }
+
+  async approve(actor: SessionUser, machineId: string, dto: ApproveDto) {
+    const machine = await this.machines.getRef(actor, machineId);
+    refuseUnlessState(machine.state, ['awaiting-approval'], 'approve');
+    if (!(await this.auth.confirmPassword(actor.id, dto.password))) {
+      throw new ForbiddenException('That password is not right: re-enter your own password to sign the approval');
+    }
+    const request = await this.repo.openRequest(actor.workshopId, machineId);
+    const { snapshot, blocking } = await this.board.snapshot(actor, machineId);
+    if (!request || blocking.length) {
+      throw new ConflictException({
+        message: `The machine can no longer be approved: ${blocking.map((c) => `${KIND_LABELS[c.kind]} (${c.subject})`).join(', ') || 'its request was closed'}`,
+        blocking: blocking.map(toBlocking),
+      });
+    }
+    const approvedAt = new Date(Math.floor(Date.now() / 1000) * 1000);
+    const interval = snapshot.targetSet.recheckIntervalDays;
+    const row = await this.repo.insertApproval(request.id, {
+      workshopId: actor.workshopId,
+      machineId,
+      requestId: request.id,
+      approvedById: actor.id,
+      approvedByName: actor.name,
+      approvedAt,
+      statement: dto.statement,
+      snapshot,
+      recordHash: snapshotHash(snapshot),
+      recheckIntervalDays: interval,
+      recheckDueAt: new Date(approvedAt.getTime() + interval * DAY_MS),
+    });
+    if (!row) throw new ConflictException({ message: 'Someone else has just approved or closed this request', blocking: [] });
+    await this.records.lock(
+      row.id,
+      snapshot.checks.filter((c) => c.recordType && c.recordId).map((c) => ({ recordType: c.recordType!, recordId: c.recordId! })),
+    );
+    await this.records.audit(actor, {
+      machineId,
+      recordType: 'approval',
+      recordId: row.id,
+      action: 'approved',
+      summary: `${actor.name} approved the machine as ready to cut (record hash ${row.recordHash.slice(0, 12)}…, re-check due ${row.recheckDueAt.toISOString().slice(0, 10)})`,
+      changes: { recordHash: row.recordHash, checks: snapshot.checks.length, waived: snapshot.checks.filter((c) => c.status === 'waived').length },
+    });
+    await this.changeState(actor, machineId, 'awaiting-approval', 'ready-to-cut', 'Approved as ready to cut');
+    await this.notifier.approved(actor, row);
+    const response = toApprovalResponse(row);
+    return { id: response.id, approvedAt: response.approvedAt, approvedBy: response.approvedBy, recordHash: response.recordHash, recheckDueAt: response.recheckDueAt };
+  }
+
+  /** A check recorded outside target undoes a request or an approval until the machine is approved again. */
+  private async onCheckRecorded(actor: SessionUser, event: CheckRecordedEvent) {
+    if (event.status !== 'outside-target') return;
+    const machine = await this.machines.getRef(actor, event.machineId);
+    if (!['awaiting-approval', 'ready-to-cut', 'recheck-due'].includes(machine.state)) return;
+    await this.repo.closeOpenRequests(actor.workshopId, machine.id);
+    const what = KIND_LABELS[event.kind as keyof typeof KIND_LABELS] ?? event.kind;
+    await this.changeState(actor, machine.id, machine.state, 'being-built', `${what} recorded outside target: the machine is no longer ${machine.state === 'awaiting-approval' ? 'awaiting approval' : 'ready to cut'} until it is approved again`);
+  }
+
+  private async changeState(actor: SessionUser, machineId: string, from: MachineState, to: MachineState, summary: string) {
+    await this.machines.setState(actor.workshopId, machineId, to);
+    await this.records.audit(actor, { machineId, recordType: 'machine', recordId: machineId, action: 'state-changed', summary, changes: { state: { from, to } } });
+  }
+}
+
+const STATE_WORDS: Record<MachineState, string> = {
+  'being-built': 'being built',
+  'awaiting-approval': 'already awaiting approval',
+  'ready-to-cut': 'already approved and ready to cut',
+  'recheck-due': 'due for its re-check',
+  retired: 'retired',
+};
+
+function refuseUnlessState(state: MachineState, allowed: MachineState[], what: string) {
+  if (allowed.includes(state)) return;
+  const hint = what === 'approve' ? ' A technician, owner or admin requests approval first.' : '';
+  throw new ConflictException({ message: `Cannot ${what}: the machine is ${STATE_WORDS[state]}.${hint}`, blocking: [] });
+}
+
+function countsOf(checks: { status: string }[]) {
+  const n = (s: string) => checks.filter((c) => c.status === s).length;
+  return { total: checks.length, within: n('within-target'), outside: n('outside-target'), waived: n('waived'), notStarted: n('not-started') };
+}

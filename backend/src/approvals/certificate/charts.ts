@@ -1,0 +1,102 @@
+import type PDFKit from 'pdfkit';
+import type { CheckSeries } from '../../records/readiness.js';
+import type { BoardCheck } from '../snapshot.js';
+import { num, targetText, unitLabel } from './format.js';
+import { widthOf, write } from './pdf-text.js';
+import { INK, MUTED, RULE, STATUS_COLOURS } from './palette.js';
+
+type Doc = PDFKit.PDFDocument;
+export interface Box { x: number; y: number; w: number; h: number }
+
+const LINE_COLOURS = ['#1d4f4a', '#c8932a', '#7a5aa6', '#2e7d4f', '#b3261e'];
+
+function niceStep(range: number, count: number): number {
+  const raw = range / Math.max(1, count);
+  const mag = 10 ** Math.floor(Math.log10(raw));
+  const f = raw / mag;
+  return (f <= 1 ? 1 : f <= 2 ? 2 : f <= 2.5 ? 2.5 : f <= 5 ? 5 : 10) * mag;
+}
+
+function ticks(min: number, max: number, count: number): number[] {
+  const step = niceStep(max - min || 1, count);
+  const out: number[] = [];
+  for (let v = Math.ceil(min / step) * step; v <= max + step * 1e-9; v += step) out.push(Math.abs(v) < step * 1e-9 ? 0 : v);
+  return out;
+}
+
+/** A line chart of the snapshot's series: axes with ticks and units, each line with its points, dashed limits. */
+export function drawSeriesChart(doc: Doc, box: Box, s: CheckSeries): void {
+  const pts = s.lines.flatMap((l) => l.points).filter(([x, y]) => Number.isFinite(x) && Number.isFinite(y));
+  if (!pts.length) return drawNoData(doc, box, 'no chart data');
+  const ys = [...pts.map((p) => p[1]), ...(s.limits ?? []).map((l) => l.value), 0];
+  let [xMin, xMax] = [Math.min(...pts.map((p) => p[0])), Math.max(...pts.map((p) => p[0]))];
+  let [yMin, yMax] = [Math.min(...ys), Math.max(...ys)];
+  if (xMax === xMin) [xMin, xMax] = [xMin - 1, xMax + 1];
+  const pad = (yMax - yMin || 1) * 0.1;
+  [yMin, yMax] = [yMin - pad, yMax + pad];
+  const plot = { x: box.x + 46, y: box.y + 8, w: box.w - 56, h: box.h - 44 };
+  const px = (x: number) => plot.x + ((x - xMin) / (xMax - xMin)) * plot.w;
+  const py = (y: number) => plot.y + plot.h - ((y - yMin) / (yMax - yMin)) * plot.h;
+
+  doc.save().lineWidth(0.4).strokeColor(RULE);
+  for (const t of ticks(yMin, yMax, 4)) {
+    doc.moveTo(plot.x, py(t)).lineTo(plot.x + plot.w, py(t)).stroke();
+    write(doc, 'regular', 6.5, num(t), plot.x - 44, py(t) - 3, { width: 40, align: 'right', lineBreak: false });
+  }
+  for (const t of ticks(xMin, xMax, 6)) write(doc, 'regular', 6.5, num(t), px(t) - 20, plot.y + plot.h + 3, { width: 40, align: 'center', lineBreak: false });
+  doc.lineWidth(0.8).strokeColor(INK).rect(plot.x, plot.y, plot.w, plot.h).stroke();
+  for (const l of s.limits ?? []) {
+    if (l.value < yMin || l.value > yMax) continue;
+    doc.lineWidth(0.8).strokeColor(STATUS_COLOURS['outside-target']).dash(3, { space: 2 }).moveTo(plot.x, py(l.value)).lineTo(plot.x + plot.w, py(l.value)).stroke().undash();
+    write(doc, 'regular', 6, l.label, plot.x + plot.w - 120, py(l.value) - 8, { width: 118, align: 'right', lineBreak: false });
+  }
+  s.lines.forEach((line, i) => {
+    const colour = LINE_COLOURS[i % LINE_COLOURS.length];
+    const p = line.points.filter(([x, y]) => Number.isFinite(x) && Number.isFinite(y));
+    if (!p.length) return;
+    doc.lineWidth(1.1).strokeColor(colour);
+    p.forEach(([x, y], j) => (j ? doc.lineTo(px(x), py(y)) : doc.moveTo(px(x), py(y))));
+    doc.stroke();
+    doc.fillColor(colour);
+    for (const [x, y] of p) doc.circle(px(x), py(y), 1.6).fill();
+  });
+  doc.restore();
+  const xLabel = `${s.x.label} (${unitLabel(s.x.unit)})`;
+  write(doc, 'regular', 7, xLabel, plot.x, plot.y + plot.h + 13, { width: plot.w, align: 'center', lineBreak: false });
+  doc.save().rotate(-90, { origin: [box.x + 6, plot.y + plot.h / 2] });
+  write(doc, 'regular', 7, `${s.y.label} (${unitLabel(s.y.unit)})`, box.x + 6 - plot.h / 2, plot.y + plot.h / 2 - 3, { width: plot.h, align: 'center', lineBreak: false });
+  doc.restore();
+  let lx = plot.x;
+  s.lines.forEach((line, i) => {
+    doc.save().lineWidth(1.5).strokeColor(LINE_COLOURS[i % LINE_COLOURS.length]).moveTo(lx, box.y + box.h - 5).lineTo(lx + 12, box.y + box.h - 5).stroke().restore();
+    write(doc, 'regular', 6.5, line.label, lx + 15, box.y + box.h - 8, { lineBreak: false });
+    lx += 24 + widthOf(doc, 'regular', 6.5, line.label);
+  });
+  doc.fillColor(INK);
+}
+
+/**
+ * Without a series, draw what there is: the result beside its target on one scale, and say so.
+ */
+export function drawResultGauge(doc: Doc, box: Box, c: BoardCheck): void {
+  drawNoData(doc, box, 'no chart data \u2014 the result against its target:');
+  if (!c.result || !c.target) return;
+  const max = Math.max(Math.abs(c.result.value), c.target.value, 1e-9) * 1.25;
+  const bar = { x: box.x + 16, y: box.y + box.h / 2, w: box.w - 32 };
+  const at = (v: number) => bar.x + (Math.min(Math.abs(v), max) / max) * bar.w;
+  doc.save();
+  doc.lineWidth(0.6).strokeColor(RULE).moveTo(bar.x, bar.y + 8).lineTo(bar.x + bar.w, bar.y + 8).stroke();
+  doc.fillColor(STATUS_COLOURS[c.status] ?? INK).rect(bar.x, bar.y, Math.max(1, at(c.result.value) - bar.x), 8).fill();
+  doc.lineWidth(1).strokeColor(STATUS_COLOURS['outside-target']).dash(2, { space: 2 }).moveTo(at(c.target.value), bar.y - 6).lineTo(at(c.target.value), bar.y + 14).stroke().undash();
+  doc.restore();
+  const same = c.target.unit === c.result.unit;
+  write(doc, 'regular', 7, `result ${num(c.result.value)} ${unitLabel(c.result.unit)}`, bar.x, bar.y + 12, { lineBreak: false });
+  write(doc, 'regular', 7, `target ${targetText(c)}${same ? '' : ' (other unit)'}`, at(c.target.value) - 60, bar.y - 16, { width: 120, align: 'center', lineBreak: false });
+}
+
+function drawNoData(doc: Doc, box: Box, text: string) {
+  doc.save().lineWidth(0.5).strokeColor(RULE).rect(box.x, box.y, box.w, box.h).stroke().restore();
+  doc.fillColor(MUTED);
+  write(doc, 'italic', 7.5, text, box.x + 8, box.y + 6, { lineBreak: false });
+  doc.fillColor(INK);
+}

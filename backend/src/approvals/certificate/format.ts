@@ -1,0 +1,29 @@
+import type { BoardCheck } from '../snapshot.js';
+
+const UNIT_WORDS: Record<string, string> = { um: '\u00b5m', thou: 'thou', in: 'in', mm: 'mm', 'mm/m': 'mm/m', '%': '%', days: 'days' };
+
+export const unitLabel = (unit: string) => UNIT_WORDS[unit] ?? unit;
+
+/** A result value to four significant figures, without exponents for everyday sizes. */
+export function num(v: number): string {
+  if (v === 0) return '0';
+  if (Math.abs(v) < 1e-4) return v.toExponential(2);
+  return String(Number(v.toPrecision(4)));
+}
+
+/** Speed headroom and travel margin are minimums; part size is a ± band; the rest are maximums. */
+export function targetText(c: Pick<BoardCheck, 'kind' | 'target'>): string {
+  if (!c.target) return '\u2014';
+  const value = `${num(c.target.value)} ${unitLabel(c.target.unit)}`;
+  if (c.kind === 'speed-check' || c.kind === 'travel-envelope') return `\u2265 ${value}`;
+  if (c.kind === 'test-cut') return `\u00b1 ${value}`;
+  if (c.kind === 'safety-walk') return c.target.value ? `${value}` : 'every item passed';
+  return `\u2264 ${value}`;
+}
+
+export function resultText(c: Pick<BoardCheck, 'result'>): string {
+  return c.result ? `${num(c.result.value)} ${unitLabel(c.result.unit)}` : 'not recorded';
+}
+
+export const utc = (iso: string | Date) => `${new Date(iso).toISOString().replace('T', ' ').slice(0, 16)} UTC`;
+export const dayOf = (iso: string | Date) => new Date(iso).toISOString().slice(0, 10);

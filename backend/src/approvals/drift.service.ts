@@ -1,0 +1,59 @@
+import { Injectable } from '@nestjs/common';
+import type { SessionUser } from '../auth/session-user.js';
+import { ApprovalsRepository } from './approvals.repository.js';
+import { ReadinessBoardService } from './readiness-board.service.js';
+import type { BoardCheck } from './snapshot.js';
+
+export interface DriftSide {
+  status: BoardCheck['status'];
+  result: BoardCheck['result'];
+  recordId: string | null;
+  recordedAt: string | null;
+}
+
+const side = (c: BoardCheck | undefined): DriftSide | null =>
+  c ? { status: c.status, result: c.result, recordId: c.recordId, recordedAt: c.recordedAt } : null;
+
+/** "What drifted": the approved round (from the approval snapshot) beside the latest result of each check. */
+@Injectable()
+export class DriftService {
+  constructor(
+    private readonly repo: ApprovalsRepository,
+    private readonly board: ReadinessBoardService,
+  ) {}
+
+  async compare(actor: SessionUser, machineId: string) {
+    const b = await this.board.board(actor, machineId);
+    const approval = await this.repo.latestApproval(actor.workshopId, machineId);
+    if (!approval) return { approval: null, rows: [] };
+    const approved = new Map(approval.snapshot.checks.map((c) => [c.key, c]));
+    const latest = new Map(b.checks.map((c) => [c.key, c]));
+    const keys = [...approval.snapshot.checks.map((c) => c.key), ...b.checks.map((c) => c.key).filter((k) => !approved.has(k))];
+    const rows = keys.map((key) => {
+      const a = approved.get(key);
+      const l = latest.get(key);
+      const ref = l ?? a!;
+      const sameRecord = !!a && !!l && a.recordId === l.recordId;
+      const change = a?.result && l?.result && a.result.unit === l.result.unit && !sameRecord ? round(l.result.value - a.result.value) : null;
+      return {
+        key,
+        kind: ref.kind,
+        subject: ref.subject,
+        target: ref.target,
+        approved: side(a),
+        latest: side(l),
+        /** Latest minus approved, in the result's unit; null when either is missing or nothing new was recorded. */
+        change,
+        unit: ref.result?.unit ?? a?.result?.unit ?? null,
+        rechecked: !!l?.recordId && !sameRecord,
+        worse: !!l && l.status === 'outside-target' && a?.status !== 'outside-target',
+      };
+    });
+    return {
+      approval: { id: approval.id, approvedAt: approval.approvedAt.toISOString(), approvedBy: approval.approvedByName, recordHash: approval.recordHash },
+      rows,
+    };
+  }
+}
+
+const round = (v: number) => Math.round(v * 1e6) / 1e6;

@@ -1,0 +1,67 @@
+import { index, integer, jsonb, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
+import { id } from './columns.js';
+import { workshops } from './workshops.js';
+import { machines } from './machines.js';
+import { users } from './users.js';
+import type { ApprovalSnapshot } from '../../approvals/snapshot.js';
+
+/**
+ * An owner's written reason for letting one check pass. It belongs to the record the check had
+ * when it was waived: a new record of that check needs a new waiver.
+ */
+export const waivers = pgTable(
+  'waivers',
+  {
+    id: id(),
+    workshopId: uuid('workshop_id').notNull().references(() => workshops.id),
+    machineId: uuid('machine_id').notNull().references(() => machines.id),
+    checkKey: text('check_key').notNull(),
+    /** The check's record when waived; null for a check never started. */
+    recordType: text('record_type'),
+    recordId: uuid('record_id'),
+    reason: text('reason').notNull(),
+    waivedById: uuid('waived_by_id').notNull().references(() => users.id),
+    waivedByName: text('waived_by_name').notNull(),
+    waivedAt: timestamp('waived_at', { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index('waivers_machine_idx').on(t.machineId, t.checkKey)],
+);
+
+/** A technician's (or owner's) request that the machine be approved; it moves it to awaiting-approval. */
+export const approvalRequests = pgTable(
+  'approval_requests',
+  {
+    id: id(),
+    workshopId: uuid('workshop_id').notNull().references(() => workshops.id),
+    machineId: uuid('machine_id').notNull().references(() => machines.id),
+    requestedById: uuid('requested_by_id').notNull().references(() => users.id),
+    requestedByName: text('requested_by_name').notNull(),
+    requestedAt: timestamp('requested_at', { withTimezone: true }).notNull().defaultNow(),
+    /** open until approved, or closed when a check leaves the target before that. */
+    status: text('status', { enum: ['open', 'approved', 'closed'] }).notNull().default('open'),
+  },
+  (t) => [index('approval_requests_machine_idx').on(t.machineId)],
+);
+
+/** The owner's signed approval: who, when, the statement, and the exact results it was based on. */
+export const approvals = pgTable(
+  'approvals',
+  {
+    id: id(),
+    workshopId: uuid('workshop_id').notNull().references(() => workshops.id),
+    machineId: uuid('machine_id').notNull().references(() => machines.id),
+    requestId: uuid('request_id').references(() => approvalRequests.id),
+    approvedById: uuid('approved_by_id').notNull().references(() => users.id),
+    approvedByName: text('approved_by_name').notNull(),
+    approvedAt: timestamp('approved_at', { withTimezone: true }).notNull(),
+    statement: text('statement').notNull(),
+    snapshot: jsonb('snapshot').$type<ApprovalSnapshot>().notNull(),
+    /** SHA-256 (hex) of the snapshot's canonical JSON. */
+    recordHash: text('record_hash').notNull(),
+    recheckIntervalDays: integer('recheck_interval_days').notNull(),
+    recheckDueAt: timestamp('recheck_due_at', { withTimezone: true }).notNull(),
+    /** Set once the re-check-due e-mail went out, so it goes once per due date. */
+    recheckNotifiedAt: timestamp('recheck_notified_at', { withTimezone: true }),
+  },
+  (t) => [index('approvals_machine_idx').on(t.machineId, t.approvedAt), index('approvals_recheck_idx').on(t.recheckDueAt)],
+);
