@@ -1,4 +1,4 @@
-import { Injectable, NotFoundException, OnModuleInit } from '@nestjs/common';
+import { BadRequestException, Injectable, NotFoundException, OnModuleInit } from '@nestjs/common';
 import type { SessionUser } from '../auth/session-user.js';
 import { evaluatePositioning } from '../engine/positioning.js';
 import { arrayToMm } from '../engine/units.js';
@@ -48,6 +48,10 @@ export class PositioningRunsService implements OnModuleInit {
 
   async create(actor: SessionUser, axisId: string, dto: CreatePositioningRunDto) {
     const axis = await this.axes.findRow(actor, axisId);
+    // The grid's columns are positions along the axis; a record keeps them in order.
+    for (let i = 1; i < dto.targets.length; i++) {
+      if (!(dto.targets[i] > dto.targets[i - 1])) throw new BadRequestException([`targets must rise along the axis (targets[${i}] = ${dto.targets[i]} is not above ${dto.targets[i - 1]})`]);
+    }
     const result = evaluatePositioning({
       targetsMm: dto.targets,
       runs: dto.runs.map((r) => ({ direction: r.direction, deviationsMm: arrayToMm(r.deviations, dto.unit) })),

@@ -28,7 +28,7 @@ export function travelEnvelopeOf(machine: MachineRef, rows: AxisRow[], targets: 
     .map((r) => ({ row: r, letter: axisLetter(r.name) }))
     .filter((a): a is { row: AxisRow; letter: 'X' | 'Y' } => a.letter === 'X' || a.letter === 'Y');
   const missing: string[] = [];
-  for (const l of ['X', 'Y'] as const) if (!relevant.some((a) => a.letter === l)) missing.push(`an ${l} axis`);
+  for (const l of ['X', 'Y'] as const) if (!relevant.some((a) => a.letter === l)) missing.push(l === 'X' ? 'an X axis' : 'a Y axis');
   for (const a of relevant) if (a.row.measuredTravelMm == null) missing.push(`the measured travel of ${a.row.name}`);
   const measured = relevant.filter((a) => a.row.measuredTravelMm != null);
   const result = measured.length
