@@ -29,6 +29,16 @@ test.describe('calculators page', () => {
     await page.getByLabel('Reading unit').click();
     await page.getByRole('option', { name: 'thou' }).click();
     await expect(result.getByRole('row', { name: /minimum zone/ })).toContainText('6.750 thou');
+
+    // Cutting the set below three stations takes the result and chart away rather than leaving a stale one.
+    await box.fill('0\t0\n100\t3');
+    await expect(page.getByText('Enter at least three stations')).toBeVisible();
+    await expect(page.getByRole('figure', { name: 'Straightness chart' })).toHaveCount(0);
+
+    await page.setViewportSize({ width: 820, height: 1180 });
+    await box.fill(S1);
+    await expect(result.getByRole('row', { name: /minimum zone/ })).toContainText('6.750 thou');
+    await snap(page, 'calculators-straightness-tablet');
   });
 
   test('a bad line is named and the server refusal is shown', async ({ page }) => {

@@ -84,7 +84,7 @@ export function PositioningCalculator() {
         </CalculationState>
       }
       chart={
-        r && (
+        !waiting && !calc.error && r && (
           <>
             <PositioningChart
               targets={r.targets.map((t) => ({

@@ -67,7 +67,7 @@ export function StraightnessCalculator() {
         </CalculationState>
       }
       chart={
-        r &&
+        ready && !calc.error && r &&
         req && (
           <Box>
             <StraightnessChart

@@ -70,7 +70,7 @@ export function TravelTrialCalculator() {
         </CalculationState>
       }
       chart={
-        r && (
+        ready && !calc.error && r && (
           <TravelErrorChart
             moves={r.moves.map((m) => ({ commanded: m.commanded, error: fromMm(m.error, chartUnit) }))}
             fit={{ slope: fromMm(r.scale - 1, chartUnit), offset: fromMm(r.offset, chartUnit) }}
