@@ -5,6 +5,7 @@ import { seedMachines } from './machines.js';
 import { seedFrame } from './frame.js';
 import { seedSafety } from './safety.js';
 import { seedRails } from './rails.js';
+import { seedBoltDowns } from './bolt-downs.js';
 
 /** The demo workshop, built through the product's own services so results match the engine. */
 export async function runDemoSeed(app: INestApplicationContext): Promise<SeedContext> {
@@ -13,6 +14,7 @@ export async function runDemoSeed(app: INestApplicationContext): Promise<SeedCon
   await seedFrame(ctx);
   await seedSafety(ctx);
   await seedRails(ctx);
+  await seedBoltDowns(ctx);
   // Each domain adds its demo records here, in dependency order.
   return ctx;
 }

@@ -18,6 +18,7 @@ const router = createBrowserRouter([
       { path: '/machines/:machineId', lazy: page(() => import('./routes/machine-file')) },
       // Feature routes: one line each.
       { path: paths.calculators, lazy: page(() => import('./routes/calculators')) },
+      { path: '/machines/:machineId/rails/:railId/bolt-down', lazy: page(() => import('./routes/bolt-down')) },
       { path: '*', Component: NotFoundRoute },
     ],
   },

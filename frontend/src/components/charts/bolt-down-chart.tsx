@@ -33,7 +33,7 @@ export function BoltDownChart({ fixed, holePositions, aim, lengthMm, unitLabel, 
           <YAxis type="number" dataKey="reading" domain={[floor, hi + pad]} tickFormatter={fmt} width={64} label={{ value: unitLabel, angle: -90, position: 'insideLeft', offset: 8 }} />
           <Tooltip formatter={(v) => `${fmt(Number(v))} ${unitLabel}`} labelFormatter={(l) => `${fmt(Number(l))} mm`} />
           <Legend verticalAlign="top" height={28} />
-          <Scatter name="Holes" data={holePositions.map((position) => ({ position, reading: floor }))} fill={chartColors.grid} shape="diamond" legendType="none" isAnimationActive={false} />
+          <Scatter name="Holes" data={holePositions.map((position) => ({ position, reading: floor }))} fill={chartColors.grid} shape="diamond" legendType="none" tooltipType="none" isAnimationActive={false} />
           <Line data={points} dataKey="reading" name="Fixed reading" stroke={chartColors.reading} strokeWidth={2} dot={{ r: 3 }} isAnimationActive={false} />
           {aim && <Scatter name="Aim at this hole" data={[aim]} fill={chartColors.band} shape="star" isAnimationActive={false} />}
         </ComposedChart>

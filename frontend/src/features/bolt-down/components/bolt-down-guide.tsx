@@ -1,0 +1,81 @@
+import { useState } from 'react';
+import { Alert, Box, LinearProgress, Paper, Typography } from '@mui/material';
+import { BoltDownChart } from '../../../components/charts/bolt-down-chart';
+import { UNIT_LABELS } from '../../../lib/units';
+import { useOfflineQueue } from '../../../lib/use-offline-queue';
+import { holePath } from '../api/record-hole';
+import { MODE_EXPLAINED, MODE_LABELS, type BoltDown } from '../types';
+import { guideState } from '../utils/guide-state';
+import { FinalSweepForm } from './final-sweep-form';
+import { FinalSweepResult } from './final-sweep-result';
+import { HoleEntryPanel } from './hole-entry-panel';
+import { HolesTable } from './holes-table';
+import { OfflineBanner } from './offline-banner';
+
+interface Props {
+  bd: BoltDown;
+  canRecord: boolean;
+  typicalBoltSize: string | null;
+}
+
+/** The hole-by-hole guide: the hole to fix, its aim and difference, progress, and the holes in order. */
+export function BoltDownGuide({ bd, canRecord, typicalBoltSize }: Props) {
+  const { pending } = useOfflineQueue(`/bolt-downs/${bd.id}/`);
+  const state = guideState(bd, pending);
+  const [picked, setPicked] = useState<number | null>(null);
+  const selected = picked ?? state.nextHole;
+  const hole = selected === null ? null : state.holes[selected];
+  const unit = UNIT_LABELS[bd.unit];
+  const sweepWaiting = pending.some((w) => !w.path.startsWith(holePath(bd.id)));
+  const fixed = state.holes.filter((h) => h.fixed && h.reading !== null).map((h) => ({ position: h.position, reading: h.reading! }));
+
+  return (
+    <Box>
+      <OfflineBanner pathPrefix={`/bolt-downs/${bd.id}/`} />
+      <Alert severity="info" icon={false} sx={{ mb: 2 }}>
+        <strong>{MODE_LABELS[bd.mode]}.</strong> {MODE_EXPLAINED[bd.mode]} Holes are fixed one end first, then the far end, then the middles of the gaps. Readings in {unit}; on
+        target within ±{bd.band} {unit} of the aim.
+      </Alert>
+
+      <Paper sx={{ p: 2, mb: 2 }}>
+        <Typography variant="h3" component="p" data-testid="progress">
+          {state.fixedCount} of {bd.holeCount} holes fixed
+        </Typography>
+        <LinearProgress variant="determinate" value={(100 * state.fixedCount) / Math.max(bd.holeCount, 1)} sx={{ mt: 1, height: 8, borderRadius: 4 }} aria-label="Holes fixed" />
+      </Paper>
+
+      <Box sx={{ display: 'grid', gridTemplateColumns: { xs: '1fr', lg: 'minmax(0, 3fr) minmax(0, 2fr)' }, gap: 2, mb: 2 }}>
+        <Box>
+          {canRecord && hole && !bd.finalSweepId && (
+            <HoleEntryPanel bd={bd} hole={hole} isNext={hole.index === state.nextHole} onFixed={() => setPicked(null)} />
+          )}
+          {!canRecord && !state.complete && (
+            <Alert severity="info">You can follow the guide; people who record checks fix the holes.</Alert>
+          )}
+          {state.complete && state.waitingCount === 0 && !bd.finalSweepId && !sweepWaiting && canRecord && picked === null && (
+            <FinalSweepForm bd={bd} typicalBoltSize={typicalBoltSize} />
+          )}
+          {state.complete && state.waitingCount > 0 && <Alert severity="warning">Every hole is fixed; the final sweep is offered once the waiting readings are sent.</Alert>}
+          {bd.finalSweepId && <FinalSweepResult sweepId={bd.finalSweepId} />}
+        </Box>
+        <Paper sx={{ p: 2 }}>
+          <Typography variant="h4" component="h2" gutterBottom>
+            Fixed readings along the rail
+          </Typography>
+          <BoltDownChart
+            fixed={fixed}
+            holePositions={bd.holes.map((h) => h.position)}
+            aim={hole && !hole.fixed && hole.target !== null ? { position: hole.position, reading: hole.target } : null}
+            lengthMm={bd.rail.lengthMm}
+            unitLabel={unit}
+          />
+        </Paper>
+      </Box>
+
+      <Typography variant="h4" component="h2" sx={{ mb: 1 }}>
+        Holes in fixing order{canRecord && !bd.finalSweepId ? ' (pick one to fix or re-fix it)' : ''}
+      </Typography>
+      <HolesTable bd={bd} holes={state.inOrder} nextHole={state.nextHole} selected={selected} onSelect={canRecord && !bd.finalSweepId ? setPicked : undefined} />
+    </Box>
+  );
+}

@@ -1,0 +1,67 @@
+import { useState } from 'react';
+import { Box, Button, MenuItem, TextField } from '@mui/material';
+import { ErrorState } from '../../../components/states/error-state';
+import { LoadingState } from '../../../components/states/loading-state';
+import { EmptyState } from '../../../components/states/empty-state';
+import { useBoltDown } from '../api/get-bolt-down';
+import { useBoltDowns } from '../api/get-bolt-downs';
+import type { RailSummary } from '../types';
+import { BoltDownGuide } from './bolt-down-guide';
+import { StartBoltDownForm } from './start-bolt-down-form';
+
+interface Props {
+  rail: RailSummary;
+  canRecord: boolean;
+}
+
+/** The rail's latest bolt-down (or an earlier one picked), or the form to begin one. */
+export function BoltDownScreen({ rail, canRecord }: Props) {
+  const list = useBoltDowns(rail.id);
+  const [chosen, setChosen] = useState<string | null>(null);
+  const [starting, setStarting] = useState(false);
+  const id = chosen ?? list.data?.[0]?.id;
+  const bd = useBoltDown(starting ? undefined : id);
+
+  if (list.isPending) return <LoadingState label="Loading the bolt-down…" />;
+  if (list.isError && !list.data) return <ErrorState error={list.error} onRetry={() => list.refetch()} />;
+  if (starting || !id) {
+    if (!canRecord) return <EmptyState title="No bolt-down yet">Nobody has begun fixing this rail down with the guide.</EmptyState>;
+    return (
+      <StartBoltDownForm
+        rail={rail}
+        onStarted={(started) => {
+          setChosen(started.id);
+          setStarting(false);
+        }}
+      />
+    );
+  }
+  // Keep showing what is known while the connection is down.
+  if (bd.isPending) return <LoadingState label="Loading the bolt-down…" />;
+  if (!bd.data) return <ErrorState error={bd.error} onRetry={() => bd.refetch()} />;
+
+  const others = list.data ?? [];
+  return (
+    <>
+      {(others.length > 1 || (canRecord && bd.data.finalSweepId)) && (
+        <Box sx={{ display: 'flex', gap: 2, flexWrap: 'wrap', alignItems: 'center', mb: 2 }}>
+          {others.length > 1 && (
+            <TextField select label="Bolt-down" value={bd.data.id} onChange={(e) => setChosen(e.target.value)} sx={{ minWidth: 300 }}>
+              {others.map((b, i) => (
+                <MenuItem key={b.id} value={b.id}>
+                  {new Date(b.createdAt).toLocaleString()} · {b.fixedCount} of {b.holeCount} fixed{i === 0 ? ' (latest)' : ''}
+                </MenuItem>
+              ))}
+            </TextField>
+          )}
+          {canRecord && bd.data.finalSweepId && (
+            <Button variant="outlined" onClick={() => setStarting(true)}>
+              Begin a new bolt-down
+            </Button>
+          )}
+        </Box>
+      )}
+      <BoltDownGuide key={bd.data.id} bd={bd.data} canRecord={canRecord} typicalBoltSize={rail.typicalBoltSize} />
+    </>
+  );
+}

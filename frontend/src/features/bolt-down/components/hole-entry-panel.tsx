@@ -1,0 +1,117 @@
+import { useEffect, useRef, useState, type FormEvent } from 'react';
+import { Alert, Box, Button, Chip, Paper, Stack, TextField, Typography } from '@mui/material';
+import CheckOutlined from '@mui/icons-material/CheckOutlined';
+import { ApiError } from '../../../lib/api-client';
+import { UNIT_LABELS } from '../../../lib/units';
+import { palette } from '../../../theme/theme';
+import { useRecordHole } from '../api/record-hole';
+import type { BoltDown } from '../types';
+import type { GuideHole } from '../utils/guide-state';
+import { holeName, parseReading, plain, signed } from '../utils/format';
+
+interface Props {
+  bd: BoltDown;
+  hole: GuideHole;
+  isNext: boolean;
+  /** Called once a hole is fixed (sent or kept waiting), so the guide can move on. */
+  onFixed: (index: number) => void;
+}
+
+/** The hole being fixed: its aim, the reading as it is typed, and the difference, large. */
+export function HoleEntryPanel({ bd, hole, isNext, onFixed }: Props) {
+  const [text, setText] = useState('');
+  const [problem, setProblem] = useState<string | null>(null);
+  const input = useRef<HTMLInputElement>(null);
+  const record = useRecordHole(bd.id);
+  const unit = UNIT_LABELS[bd.unit];
+
+  useEffect(() => {
+    setText('');
+    setProblem(null);
+    input.current?.focus();
+  }, [hole.index]);
+
+  const typed = parseReading(text);
+  const difference = typed !== null && hole.target !== null ? typed - hole.target : null;
+  const within = difference !== null && Math.abs(difference) <= bd.band + 1e-9;
+
+  async function fix(e: FormEvent) {
+    e.preventDefault();
+    if (typed === null) {
+      setProblem(text.trim() ? `“${text}” is not a number: type the indicator reading in ${unit}` : `Type the indicator reading in ${unit} first`);
+      return;
+    }
+    try {
+      await record.mutateAsync({ index: hole.index, positionMm: hole.position, reading: typed, unit: bd.unit, fixed: true });
+      onFixed(hole.index);
+    } catch (err) {
+      // Refused by the server: keep what was typed so it can be corrected.
+      setProblem(err instanceof ApiError ? err.details.join('; ') || err.message : String(err));
+    }
+  }
+
+  const colour = difference === null ? 'text.secondary' : within ? palette.within : palette.brass;
+  return (
+    <Paper component="form" onSubmit={fix} noValidate sx={{ p: { xs: 2, md: 3 } }} aria-label={`Fixing ${holeName(hole.index)}`}>
+      <Stack direction="row" spacing={1} sx={{ alignItems: 'center', flexWrap: 'wrap', mb: 1 }}>
+        <Typography variant="h2" component="h2">
+          {holeName(hole.index)}
+        </Typography>
+        <Typography color="text.secondary">{hole.position} mm from the rail start</Typography>
+        {isNext ? <Chip size="small" color="primary" label="Next in the order" /> : <Chip size="small" variant="outlined" label={`No. ${hole.order + 1} in the order`} />}
+        {hole.fixed && <Chip size="small" color="success" variant="outlined" label={`Fixed at ${signed(hole.reading, bd.unit)}`} />}
+      </Stack>
+
+      <Box sx={{ display: 'grid', gridTemplateColumns: { xs: '1fr', sm: '1fr 1fr' }, gap: 2, alignItems: 'start' }}>
+        <Box>
+          <Typography color="text.secondary">Aim for</Typography>
+          <Typography sx={{ fontSize: { xs: '2rem', md: '2.4rem' }, fontWeight: 500, lineHeight: 1.2 }} data-testid="aim">
+            {hole.target === null ? 'any reading' : signed(hole.target, bd.unit)}
+          </Typography>
+          <Typography variant="body2" color="text.secondary">
+            {hole.target === null ? 'The first hole fixed sets the datum the others are aimed at.' : `On target within ±${plain(bd.band, bd.unit)}.`}
+          </Typography>
+          <TextField
+            inputRef={input}
+            autoFocus
+            label={`Reading at ${holeName(hole.index).toLowerCase()} (${unit})`}
+            value={text}
+            onChange={(e) => {
+              setText(e.target.value);
+              setProblem(null);
+            }}
+            error={!!problem}
+            helperText={problem ?? 'Enter fixes the hole'}
+            slotProps={{ htmlInput: { inputMode: 'decimal', autoComplete: 'off', style: { fontSize: '1.8rem', padding: '10px 12px' } } }}
+            sx={{ mt: 2, width: '100%', maxWidth: 320 }}
+            size="medium"
+          />
+        </Box>
+        <Box role="status" aria-live="polite" aria-label="Difference from the aim" sx={{ textAlign: { xs: 'left', sm: 'right' } }}>
+          <Typography color="text.secondary">Difference from the aim</Typography>
+          <Typography sx={{ fontSize: { xs: '3.2rem', md: '4.2rem' }, fontWeight: 700, lineHeight: 1.1, color: colour, fontVariantNumeric: 'tabular-nums' }} data-testid="difference">
+            {difference === null ? (typed === null ? '—' : 'datum') : signed(difference, bd.unit)}
+          </Typography>
+          <Typography sx={{ color: colour, fontWeight: 500 }}>
+            {difference === null
+              ? typed === null
+                ? 'Type the reading as the rail is nudged'
+                : 'This reading becomes the datum'
+              : within
+                ? `Within ±${plain(bd.band, bd.unit)}: tighten and fix`
+                : `Outside ±${plain(bd.band, bd.unit)}: nudge the rail until the dial reads ${signed(hole.target, bd.unit)}`}
+          </Typography>
+        </Box>
+      </Box>
+
+      {problem && record.isError && (
+        <Alert severity="error" sx={{ mt: 2 }}>
+          The server refused this reading: {problem}. Nothing else was changed.
+        </Alert>
+      )}
+      <Button type="submit" variant="contained" size="large" startIcon={<CheckOutlined />} disabled={record.isPending} sx={{ mt: 2, px: 4, py: 1.25, fontSize: '1.1rem' }}>
+        Fix {holeName(hole.index).toLowerCase()}
+      </Button>
+    </Paper>
+  );
+}

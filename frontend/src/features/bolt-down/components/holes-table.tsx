@@ -1,0 +1,75 @@
+import { Chip, Paper, Table, TableBody, TableCell, TableContainer, TableHead, TableRow, Tooltip, Typography } from '@mui/material';
+import CloudUploadOutlined from '@mui/icons-material/CloudUploadOutlined';
+import CheckCircleOutlined from '@mui/icons-material/CheckCircleOutlined';
+import { UNIT_LABELS } from '../../../lib/units';
+import type { BoltDown } from '../types';
+import type { GuideHole } from '../utils/guide-state';
+import { signed } from '../utils/format';
+
+interface Props {
+  bd: BoltDown;
+  holes: GuideHole[];
+  nextHole: number | null;
+  selected: number | null;
+  /** Present when the person may record: picking a row makes it the hole being fixed. */
+  onSelect?: (index: number) => void;
+}
+
+function State({ hole, isNext }: { hole: GuideHole; isNext: boolean }) {
+  if (hole.waiting) return <Chip size="small" icon={<CloudUploadOutlined />} label="Waiting to send" sx={{ bgcolor: 'rgba(200,147,42,0.18)', color: '#6b4a0c' }} />;
+  if (hole.fixed) {
+    return (
+      <Tooltip title={hole.fixedAt ? `Fixed by ${hole.fixedBy ?? 'someone'} at ${new Date(hole.fixedAt).toLocaleString()}` : 'Fixed'}>
+        <Chip size="small" color="success" variant="outlined" icon={<CheckCircleOutlined />} label="Fixed" />
+      </Tooltip>
+    );
+  }
+  if (isNext) return <Chip size="small" color="primary" label="Next" />;
+  return <Typography variant="body2" color="text.secondary">Open</Typography>;
+}
+
+/** Every hole in the order to fix it, with its aim, reading and state. */
+export function HolesTable({ bd, holes, nextHole, selected, onSelect }: Props) {
+  const unit = UNIT_LABELS[bd.unit];
+  return (
+    <TableContainer component={Paper}>
+      <Table size="small" aria-label="Holes in fixing order">
+        <TableHead>
+          <TableRow>
+            <TableCell>Order</TableCell>
+            <TableCell>Hole</TableCell>
+            <TableCell align="right">Position (mm)</TableCell>
+            <TableCell align="right">Aim ({unit})</TableCell>
+            <TableCell align="right">Reading ({unit})</TableCell>
+            <TableCell align="right">Difference ({unit})</TableCell>
+            <TableCell>State</TableCell>
+          </TableRow>
+        </TableHead>
+        <TableBody>
+          {holes.map((h) => (
+            <TableRow
+              key={h.index}
+              hover={!!onSelect}
+              selected={h.index === selected}
+              onClick={onSelect ? () => onSelect(h.index) : undefined}
+              sx={{ cursor: onSelect ? 'pointer' : 'default' }}
+              aria-label={`Hole ${h.index + 1}`}
+            >
+              <TableCell>{h.order + 1}</TableCell>
+              <TableCell>{h.index + 1}</TableCell>
+              <TableCell align="right">{h.position}</TableCell>
+              <TableCell align="right">{h.target === null ? '—' : signed(h.target, bd.unit).replace(` ${unit}`, '')}</TableCell>
+              <TableCell align="right">{h.reading === null ? '—' : signed(h.reading, bd.unit).replace(` ${unit}`, '')}</TableCell>
+              <TableCell align="right" sx={{ color: h.onTarget === false ? '#8a5a00' : h.onTarget ? 'success.main' : undefined, fontWeight: h.difference !== null ? 500 : undefined }}>
+                {h.difference === null ? '—' : signed(h.difference, bd.unit).replace(` ${unit}`, '')}
+              </TableCell>
+              <TableCell>
+                <State hole={h} isNext={h.index === nextHole} />
+              </TableCell>
+            </TableRow>
+          ))}
+        </TableBody>
+      </Table>
+    </TableContainer>
+  );
+}
