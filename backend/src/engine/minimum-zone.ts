@@ -13,7 +13,7 @@
 export interface MinimumZoneLine {
   /** Slope of the band's centre line (reading units per position unit). */
   slope: number;
-  /** Intercept of the centre line; the band is centre ± widthMm / 2. */
+  /** Intercept of the centre line; the band is centre ± width / 2. */
   intercept: number;
   /** Band width along the reading axis. */
   width: number;
