@@ -1,6 +1,7 @@
 import type { NestFastifyApplication } from '@nestjs/platform-fastify';
 import { anonymous, createTestApp, createTestWorkshop, type TestWorkshop } from './helpers/test-app.js';
 import { ROLES } from '../src/database/schema/users.js';
+import { MailService } from '../src/mail/mail.service.js';
 
 describe('people (admin only, one workshop)', () => {
   let app: NestFastifyApplication;
@@ -43,16 +44,21 @@ describe('people (admin only, one workshop)', () => {
     });
   });
 
-  it('adds a member with a temporary password shown once, who can then sign in', async () => {
+  it('adds a member and e-mails them a set-your-password link instead of showing a password', async () => {
     const email = `new.${Date.now()}@test.example.com`;
     const res = await ws.as.admin.post('/api/people').send({ name: 'New Person', email, role: 'builder' });
     expect(res.status).toBe(201);
     expect(res.body.person).toMatchObject({ email, role: 'builder', active: true });
-    expect(typeof res.body.temporaryPassword).toBe('string');
-    const login = await anonymous(app).post('/api/auth/login').send({ email, password: res.body.temporaryPassword });
+    expect(res.body).toMatchObject({ invitationSent: true, invitationExpiresAt: expect.any(String) });
+    expect(res.body.temporaryPassword).toBeUndefined();
+    const mail = await app.get(MailService).fake!.waitFor((m) => m.envelopeTo.includes(email));
+    const token = /set-password\?token=([\w-]+)/.exec(mail.text)![1];
+    const set = await anonymous(app).post('/api/auth/password-reset').send({ token, password: 'a new long password' });
+    expect(set.status).toBe(200);
+    const login = await anonymous(app).post('/api/auth/login').send({ email, password: 'a new long password' });
     expect(login.status).toBe(200);
     const list = await ws.as.admin.get('/api/people');
-    expect(JSON.stringify(list.body)).not.toContain(res.body.temporaryPassword);
+    expect(JSON.stringify(list.body)).not.toContain(token);
   });
 
   it('refuses a second account for the same e-mail with 409', async () => {

@@ -90,26 +90,33 @@ function decodeQuotedPrintable(text: string): Buffer {
 
 /** RFC 2047: adjacent encoded words are joined byte-wise, so a character split across two survives. */
 export function decodeWords(header: string): string {
-  const latin = Buffer.from(header, 'latin1').toString('utf8');
-  const words = /=\?([^?]+)\?([BQbq])\?([^?]*)\?=/g;
-  if (!words.test(header)) return latin;
+  const WORD = /=\?([^?]+)\?([BQbq])\?([^?]*)\?=/g;
+  if (!/=\?[^?]+\?[BQbq]\?[^?]*\?=/.test(header)) return header;
+  // Whitespace between two encoded words is not part of the text.
   const joined = header.replace(/\?=\s+=\?/g, '?==?');
   let result = '';
   let last = 0;
-  let pending: Buffer[] = [];
+  let pending: { charset: string; bytes: Buffer[] } | null = null;
   const flush = () => {
-    if (pending.length) result += Buffer.concat(pending).toString('utf8');
-    pending = [];
+    if (pending) result += decodeCharset(Buffer.concat(pending.bytes), pending.charset);
+    pending = null;
   };
-  for (const m of joined.matchAll(/=\?([^?]+)\?([BQbq])\?([^?]*)\?=/g)) {
+  for (const m of joined.matchAll(WORD)) {
     if (m.index! > last) {
       flush();
       result += joined.slice(last, m.index);
     }
+    const charset = m[1].toLowerCase().split('*')[0];
     const data = m[2].toUpperCase() === 'B' ? Buffer.from(m[3], 'base64') : decodeQuotedPrintable(m[3].replace(/_/g, ' '));
-    pending.push(data);
+    if (pending && pending.charset !== charset) flush();
+    pending ??= { charset, bytes: [] };
+    pending.bytes.push(data);
     last = m.index! + m[0].length;
   }
   flush();
   return result + joined.slice(last);
+}
+
+function decodeCharset(bytes: Buffer, charset: string): string {
+  return charset === 'iso-8859-1' || charset === 'latin1' || charset === 'us-ascii' ? bytes.toString('latin1') : bytes.toString('utf8');
 }

@@ -131,12 +131,13 @@ function checksTable(doc: Doc, checks: BoardCheck[]) {
   heading(doc, 'Checks the approval was based on');
   const headerRow = () => {
     let x = M;
+    const y = doc.y;
     doc.fillColor(MUTED);
     for (const c of COLS) {
-      write(doc, 'medium', 7.5, c.title.toUpperCase(), x + 3, doc.y, { width: c.w - 6, lineBreak: false });
+      write(doc, 'medium', 7.5, c.title.toUpperCase(), x + 3, y, { width: c.w - 6, lineBreak: false });
       x += c.w;
     }
-    doc.y += 12;
+    doc.y = y + 12;
     doc.save().lineWidth(0.8).strokeColor(INK).moveTo(M, doc.y).lineTo(M + WIDTH, doc.y).stroke().restore();
     doc.y += 4;
     doc.fillColor(INK);

@@ -91,7 +91,9 @@ export function drawResultGauge(doc: Doc, box: Box, c: BoardCheck): void {
   doc.restore();
   const same = c.target.unit === c.result.unit;
   write(doc, 'regular', 7, `result ${num(c.result.value)} ${unitLabel(c.result.unit)}`, bar.x, bar.y + 12, { lineBreak: false });
-  write(doc, 'regular', 7, `target ${targetText(c)}${same ? '' : ' (other unit)'}`, at(c.target.value) - 60, bar.y - 16, { width: 120, align: 'center', lineBreak: false });
+  const label = `target ${targetText(c)}${same ? '' : ' (other unit)'}`;
+  const tx = Math.min(at(c.target.value) + 4, bar.x + bar.w - widthOf(doc, 'regular', 7, label));
+  write(doc, 'regular', 7, label, tx, bar.y - 14, { lineBreak: false });
 }
 
 function drawNoData(doc: Doc, box: Box, text: string) {
