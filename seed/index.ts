@@ -6,6 +6,7 @@ import { seedFrame } from './frame.js';
 import { seedSafety } from './safety.js';
 import { seedRails } from './rails.js';
 import { seedBoltDowns } from './bolt-downs.js';
+import { seedDrives } from './drives.js';
 
 /** The demo workshop, built through the product's own services so results match the engine. */
 export async function runDemoSeed(app: INestApplicationContext): Promise<SeedContext> {
@@ -15,6 +16,7 @@ export async function runDemoSeed(app: INestApplicationContext): Promise<SeedCon
   await seedSafety(ctx);
   await seedRails(ctx);
   await seedBoltDowns(ctx);
+  await seedDrives(ctx);
   // Each domain adds its demo records here, in dependency order.
   return ctx;
 }
