@@ -78,7 +78,7 @@ export function AppFrame({ user, children }: { user: User; children: ReactNode }
         variant={wide ? 'permanent' : 'temporary'}
         open={wide || open}
         onClose={() => setOpen(false)}
-        sx={{ width: wide ? DRAWER_WIDTH : undefined, flexShrink: 0, '& .MuiDrawer-paper': { width: DRAWER_WIDTH, boxSizing: 'border-box', bgcolor: '#fbfaf7' } }}
+        sx={{ width: wide ? DRAWER_WIDTH : undefined, flexShrink: 0, '& .MuiDrawer-paper': { width: DRAWER_WIDTH, boxSizing: 'border-box', bgcolor: '#fbfaf7', border: 'none', borderRight: '1px solid #e2ded4' } }}
       >
         <Toolbar />
         {nav}
