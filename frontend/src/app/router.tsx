@@ -17,6 +17,8 @@ const router = createBrowserRouter([
       { path: paths.machines, lazy: page(() => import('./routes/machines')) },
       { path: '/machines/:machineId', lazy: page(() => import('./routes/machine-file')) },
       // Feature routes: one line each.
+      { path: paths.targetSets, lazy: page(() => import('./routes/target-sets')) },
+      { path: '/machines/:machineId/rails/:railId', lazy: page(() => import('./routes/rail')) },
       { path: paths.calculators, lazy: page(() => import('./routes/calculators')) },
       { path: '/machines/:machineId/rails/:railId/bolt-down', lazy: page(() => import('./routes/bolt-down')) },
       { path: '*', Component: NotFoundRoute },

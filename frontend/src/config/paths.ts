@@ -4,6 +4,7 @@ export const paths = {
   home: '/',
   machines: '/machines',
   machine: (id: string) => `/machines/${id}`,
+  rail: (machineId: string, railId: string) => `/machines/${machineId}/rails/${railId}`,
   boltDown: (machineId: string, railId: string) => `/machines/${machineId}/rails/${railId}/bolt-down`,
   calculators: '/calculators',
   targetSets: '/target-sets',

@@ -9,6 +9,7 @@ import { MachineOverview } from '../../features/machines/components/machine-over
 import { MachineHistory } from '../../features/machines/components/machine-history';
 import { MachineStateChip } from '../../features/machines/components/machine-state-chip';
 import { KIND_LABELS, type Machine } from '../../features/machines/types';
+import { RailsPanel } from '../../features/rails/components/rails-panel';
 
 interface Section {
   id: string;
@@ -19,6 +20,7 @@ interface Section {
 // The machine file's sections; each feature adds its own tab here.
 const SECTIONS: Section[] = [
   { id: 'overview', label: 'Specification', render: (m) => <MachineOverview machine={m} /> },
+  { id: 'rails', label: 'Rails', render: (m) => <RailsPanel machineId={m.id} /> },
   { id: 'history', label: 'History', render: (m) => <MachineHistory machineId={m.id} /> },
 ];
 

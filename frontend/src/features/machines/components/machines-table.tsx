@@ -1,36 +1,75 @@
+import { useMemo } from 'react';
 import { Link as RouterLink } from 'react-router-dom';
-import { Link, Paper, Table, TableBody, TableCell, TableContainer, TableHead, TableRow } from '@mui/material';
+import { Link, Paper } from '@mui/material';
+import { DataGrid, type GridColDef } from '@mui/x-data-grid';
 import { paths } from '../../../config/paths';
-import { KIND_LABELS, type MachineListItem } from '../types';
+import { KIND_LABELS, STATE_LABELS, type MachineKind, type MachineListItem, type MachineState } from '../types';
 import { MachineStateChip } from './machine-state-chip';
 
+const kindOptions = (Object.keys(KIND_LABELS) as MachineKind[]).map((value) => ({ value, label: KIND_LABELS[value] }));
+const stateOptions = (Object.keys(STATE_LABELS) as MachineState[]).map((value) => ({ value, label: STATE_LABELS[value] }));
+
+/** Every machine file, sortable and filterable (by state too, e.g. "Re-check due"). */
 export function MachinesTable({ machines }: { machines: MachineListItem[] }) {
+  const columns = useMemo<GridColDef<MachineListItem>[]>(
+    () => [
+      {
+        field: 'name',
+        headerName: 'Name',
+        flex: 1.4,
+        minWidth: 180,
+        renderCell: ({ row }) => (
+          <Link component={RouterLink} to={paths.machine(row.id)} sx={{ fontWeight: 500 }}>
+            {row.name}
+          </Link>
+        ),
+      },
+      { field: 'kind', headerName: 'Kind', type: 'singleSelect', valueOptions: kindOptions, flex: 0.8, minWidth: 120 },
+      {
+        field: 'state',
+        headerName: 'State',
+        type: 'singleSelect',
+        valueOptions: stateOptions,
+        flex: 0.9,
+        minWidth: 150,
+        renderCell: ({ row }) => <MachineStateChip state={row.state} />,
+      },
+      {
+        field: 'checksWithin',
+        headerName: 'Checks within target',
+        type: 'number',
+        flex: 0.9,
+        minWidth: 170,
+        align: 'left',
+        headerAlign: 'left',
+        valueGetter: (_v, row) => row.checks.within,
+        renderCell: ({ row }) => `${row.checks.within} of ${row.checks.total}${row.checks.outside ? ` · ${row.checks.outside} outside` : ''}`,
+      },
+      {
+        field: 'lastActivityAt',
+        headerName: 'Last activity',
+        type: 'dateTime',
+        flex: 1,
+        minWidth: 170,
+        valueGetter: (v) => new Date(v as string),
+        valueFormatter: (v: Date) => v.toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' }),
+      },
+    ],
+    [],
+  );
   return (
-    <TableContainer component={Paper}>
-      <Table aria-label="Machines">
-        <TableHead>
-          <TableRow>
-            <TableCell>Name</TableCell>
-            <TableCell>Kind</TableCell>
-            <TableCell>State</TableCell>
-            <TableCell>Checks within target</TableCell>
-            <TableCell>Last activity</TableCell>
-          </TableRow>
-        </TableHead>
-        <TableBody>
-          {machines.map((m) => (
-            <TableRow key={m.id} hover>
-              <TableCell>
-                <Link component={RouterLink} to={paths.machine(m.id)}>{m.name}</Link>
-              </TableCell>
-              <TableCell>{KIND_LABELS[m.kind]}</TableCell>
-              <TableCell><MachineStateChip state={m.state} /></TableCell>
-              <TableCell>{m.checks.within} of {m.checks.total}</TableCell>
-              <TableCell>{new Date(m.lastActivityAt).toLocaleString()}</TableCell>
-            </TableRow>
-          ))}
-        </TableBody>
-      </Table>
-    </TableContainer>
+    <Paper sx={{ width: '100%' }}>
+      <DataGrid
+        aria-label="Machines"
+        rows={machines}
+        columns={columns}
+        autoHeight
+        disableRowSelectionOnClick
+        initialState={{ sorting: { sortModel: [{ field: 'lastActivityAt', sort: 'desc' }] } }}
+        pageSizeOptions={[25, 50, 100]}
+        showToolbar
+        sx={{ border: 0 }}
+      />
+    </Paper>
   );
 }

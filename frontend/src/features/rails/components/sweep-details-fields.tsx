@@ -1,0 +1,79 @@
+import { InputAdornment, MenuItem, Stack, TextField, ToggleButton, ToggleButtonGroup, Typography } from '@mui/material';
+import type { BoltTorques, SweepPhase } from '../types';
+import type { SweepDraft } from '../hooks/use-sweep-draft';
+
+type Details = Pick<SweepDraft, 'instrument' | 'resolution' | 'temperatureC' | 'phase' | 'takenBy' | 'boltSize' | 'torqueNm' | 'datum' | 'notes'>;
+
+/** What a sweep records besides the readings: instrument, temperature, phase, who, bolts, datum. */
+export function SweepDetailsFields({
+  value,
+  unitLabel,
+  torques,
+  onChange,
+}: {
+  value: Details;
+  unitLabel: string;
+  torques: BoltTorques | undefined;
+  onChange: (patch: Partial<Details>) => void;
+}) {
+  const usual = torques?.bolts.find((b) => b.boltSize === value.boltSize);
+  const pickBolt = (boltSize: string) => {
+    const next = torques?.bolts.find((b) => b.boltSize === boltSize);
+    const torqueWasUsual = !value.torqueNm || torques?.bolts.some((b) => String(b.torqueNm) === value.torqueNm);
+    onChange({ boltSize, ...(torqueWasUsual ? { torqueNm: next ? String(next.torqueNm) : '' } : {}) });
+  };
+  const setPhase = (phase: SweepPhase) => onChange({ phase });
+  return (
+    <Stack spacing={2}>
+      <Stack direction="row" spacing={1.5} useFlexGap sx={{ alignItems: 'center', flexWrap: 'wrap' }}>
+        <Typography id="phase-label" color="text.secondary">
+          This sweep is
+        </Typography>
+        <ToggleButtonGroup exclusive size="small" value={value.phase} onChange={(_, v) => v && setPhase(v)} aria-labelledby="phase-label">
+          <ToggleButton value="as-found">As found</ToggleButton>
+          <ToggleButton value="as-left">As left</ToggleButton>
+        </ToggleButtonGroup>
+      </Stack>
+      <Stack direction={{ xs: 'column', sm: 'row' }} spacing={1.5}>
+        <TextField label="Instrument" value={value.instrument} onChange={(e) => onChange({ instrument: e.target.value })} placeholder="Dial indicator on a carriage" fullWidth />
+        <TextField
+          label="Resolution"
+          value={value.resolution}
+          onChange={(e) => onChange({ resolution: e.target.value })}
+          slotProps={{ htmlInput: { inputMode: 'decimal' }, input: { endAdornment: <InputAdornment position="end">{unitLabel}</InputAdornment> } }}
+          sx={{ minWidth: 140 }}
+        />
+        <TextField
+          label="Temperature"
+          value={value.temperatureC}
+          onChange={(e) => onChange({ temperatureC: e.target.value })}
+          slotProps={{ htmlInput: { inputMode: 'decimal' }, input: { endAdornment: <InputAdornment position="end">°C</InputAdornment> } }}
+          sx={{ minWidth: 130 }}
+        />
+      </Stack>
+      <Stack direction={{ xs: 'column', sm: 'row' }} spacing={1.5}>
+        <TextField label="Taken by" value={value.takenBy} onChange={(e) => onChange({ takenBy: e.target.value })} fullWidth />
+        <TextField label="Datum" value={value.datum} onChange={(e) => onChange({ datum: e.target.value })} helperText="Name the common datum to compare partner rails" fullWidth />
+      </Stack>
+      <Stack direction={{ xs: 'column', sm: 'row' }} spacing={1.5} sx={{ alignItems: 'flex-start' }}>
+        <TextField select label="Bolt size" value={value.boltSize} onChange={(e) => pickBolt(e.target.value)} sx={{ minWidth: 140 }} helperText="Bolts as tightened">
+          <MenuItem value="">Not recorded</MenuItem>
+          {torques?.bolts.map((b) => (
+            <MenuItem key={b.boltSize} value={b.boltSize}>
+              {b.boltSize}
+            </MenuItem>
+          ))}
+        </TextField>
+        <TextField
+          label="Torque"
+          value={value.torqueNm}
+          onChange={(e) => onChange({ torqueNm: e.target.value })}
+          slotProps={{ htmlInput: { inputMode: 'decimal' }, input: { endAdornment: <InputAdornment position="end">N·m</InputAdornment> } }}
+          helperText={usual ? `Usual for ${usual.boltSize} into steel: ${usual.torqueNm} N·m (a rail maker's table; follow your rail's instructions)` : 'Pick a bolt size for the usual torque'}
+          fullWidth
+        />
+      </Stack>
+      <TextField label="Notes" value={value.notes} onChange={(e) => onChange({ notes: e.target.value })} multiline minRows={2} />
+    </Stack>
+  );
+}

@@ -1,0 +1,135 @@
+import { useMemo, useRef, useState } from 'react';
+import { Alert, Box, Button, Grid, InputAdornment, MenuItem, Paper, Stack, TextField, ToggleButton, ToggleButtonGroup, Typography } from '@mui/material';
+import FileUploadOutlined from '@mui/icons-material/FileUploadOutlined';
+import { fromMm, UNIT_LABELS, type LengthUnit } from '../../../lib/units';
+import { useBoltTorques } from '../api/get-bolt-torques';
+import { useRecordSweep } from '../api/record-sweep';
+import { useStraightnessPreview } from '../api/preview-straightness';
+import { useDebounced } from '../hooks/use-debounced';
+import { newDraft, useSweepDraft, type SweepDraft } from '../hooks/use-sweep-draft';
+import type { Rail, Sweep, TargetValue } from '../types';
+import { readyStations, stationsAtHoles, stationsByStep } from '../utils/stations';
+import { CsvImportDialog } from './csv-import-dialog';
+import { StationReadings } from './station-readings';
+import { SweepDetailsFields } from './sweep-details-fields';
+import { SweepPreview } from './sweep-preview';
+
+const UNITS: LengthUnit[] = ['thou', 'mm', 'um', 'in'];
+const num = (s: string) => (s.trim() === '' ? undefined : Number(s.replace(',', '.')));
+
+/** Entering a sweep at the machine: stations from the holes or a fixed step, a reading each, a live fit. */
+export function SweepEntry({ rail, target, takenBy, onSaved }: { rail: Rail; target: TargetValue | null; takenBy: string; onSaved: (s: Sweep) => void }) {
+  const [draft, setDraft] = useSweepDraft(rail.id, () => newDraft(stationsAtHoles(rail.holes), { takenBy, boltSize: rail.typicalBoltSize ?? '' }));
+  const [stepMm, setStepMm] = useState('100');
+  const [source, setSource] = useState<'holes' | 'step'>('holes');
+  const [csvOpen, setCsvOpen] = useState(false);
+  const saveRef = useRef<HTMLButtonElement>(null);
+  const torques = useBoltTorques();
+  const record = useRecordSweep(rail.id);
+  const patch = (p: Partial<SweepDraft>) => setDraft((d) => ({ ...d, ...p }));
+
+  const ready = useMemo(() => readyStations(draft.stations), [draft.stations]);
+  const body = ready.stations.length >= 3 && ready.problems.size === 0 ? { positions: ready.stations.map((s) => s.position), readings: ready.stations.map((s) => s.reading), unit: draft.unit } : null;
+  const preview = useStraightnessPreview(useDebounced(body));
+  const result = preview.data?.result ?? null;
+  // Residuals back onto the rows they belong to (rows without a reading have none).
+  const residuals = useMemo(() => {
+    if (!preview.data) return undefined;
+    const byPosition = new Map(preview.data.body.positions.map((p, k) => [p, fromMm(preview.data!.result.leastSquares.residuals[k], draft.unit)]));
+    return draft.stations.map((r) => byPosition.get(Number(r.position)) ?? null);
+  }, [preview.data, draft.stations, draft.unit]);
+
+  const hasReadings = draft.stations.some((s) => s.reading.trim() !== '');
+  const layStations = (rows: SweepDraft['stations']) => {
+    if (hasReadings && !window.confirm('Replace the stations? The readings typed so far will be cleared.')) return;
+    patch({ stations: rows });
+  };
+  const save = () => {
+    if (!body) return;
+    record.mutate(
+      {
+        id: draft.id,
+        unit: draft.unit,
+        stations: ready.stations,
+        phase: draft.phase,
+        instrument: draft.instrument.trim() || undefined,
+        resolution: num(draft.resolution),
+        temperatureC: num(draft.temperatureC),
+        takenBy: draft.takenBy.trim() || undefined,
+        boltSize: draft.boltSize || undefined,
+        torqueNm: num(draft.torqueNm),
+        datum: draft.datum.trim() || undefined,
+        notes: draft.notes.trim() || undefined,
+      },
+      {
+        onSuccess: (sweep) => {
+          // Keep the set-up (instrument, datum, bolts) for the next sweep; clear the readings.
+          setDraft(({ id: _saved, stations, ...setUp }) => newDraft(stations.map((s) => ({ ...s, reading: '' })), setUp));
+          onSaved(sweep);
+        },
+      },
+    );
+  };
+
+  return (
+    <Paper component="section" aria-label="New sweep" sx={{ p: { xs: 1.5, sm: 2.5 } }}>
+      <Typography variant="h3" component="h2" gutterBottom>
+        New sweep
+      </Typography>
+      <Alert severity="info" icon={false} sx={{ mb: 2 }}>
+        <strong>Sign:</strong> + means the rail is further from the reference, − nearer to it. Zero the indicator anywhere: only the shape counts.
+      </Alert>
+      <Stack direction="row" spacing={1.5} useFlexGap sx={{ alignItems: 'center', flexWrap: 'wrap', mb: 2 }}>
+        <TextField select label="Unit" value={draft.unit} onChange={(e) => patch({ unit: e.target.value as LengthUnit })} sx={{ width: 110 }}>
+          {UNITS.map((u) => (
+            <MenuItem key={u} value={u}>
+              {UNIT_LABELS[u]}
+            </MenuItem>
+          ))}
+        </TextField>
+        <ToggleButtonGroup exclusive size="small" value={source} onChange={(_, v) => v && setSource(v)} aria-label="Where the stations are">
+          <ToggleButton value="holes">At the holes</ToggleButton>
+          <ToggleButton value="step">Fixed step</ToggleButton>
+        </ToggleButtonGroup>
+        {source === 'step' && (
+          <TextField label="Step" value={stepMm} onChange={(e) => setStepMm(e.target.value)} sx={{ width: 120 }} slotProps={{ htmlInput: { inputMode: 'decimal' }, input: { endAdornment: <InputAdornment position="end">mm</InputAdornment> } }} />
+        )}
+        <Button variant="outlined" onClick={() => layStations(source === 'holes' ? stationsAtHoles(rail.holes) : stationsByStep(rail.lengthMm, Number(stepMm)))}>
+          {source === 'holes' ? `Lay ${rail.holes.length} stations at the holes` : 'Lay stations'}
+        </Button>
+        <Button startIcon={<FileUploadOutlined />} onClick={() => setCsvOpen(true)}>
+          Import CSV
+        </Button>
+      </Stack>
+      <Grid container spacing={2.5}>
+        <Grid size={{ xs: 12, lg: 5 }}>
+          <StationReadings rows={draft.stations} unit={draft.unit} problems={ready.problems} residuals={residuals} onChange={(stations) => patch({ stations })} onLastEnter={() => saveRef.current?.focus()} />
+        </Grid>
+        <Grid size={{ xs: 12, lg: 7 }}>
+          <Stack spacing={2.5}>
+            <SweepPreview points={ready.stations} unit={draft.unit} result={body ? result : null} target={target} label="Live straightness chart" pending={preview.isFetching} />
+            {preview.error && <Alert severity="error">{preview.error.message}</Alert>}
+            <SweepDetailsFields value={draft} unitLabel={UNIT_LABELS[draft.unit]} torques={torques.data} onChange={patch} />
+          </Stack>
+        </Grid>
+      </Grid>
+      <Box sx={{ display: 'flex', gap: 2, alignItems: 'center', flexWrap: 'wrap', mt: 2.5 }}>
+        <Button ref={saveRef} variant="contained" size="large" onClick={save} disabled={!body || record.isPending}>
+          {record.isPending ? 'Saving…' : 'Save sweep'}
+        </Button>
+        <Typography color="text.secondary">
+          {ready.stations.length} reading{ready.stations.length === 1 ? '' : 's'}
+          {ready.blank ? ` · ${ready.blank} station${ready.blank === 1 ? '' : 's'} without a reading will be left out` : ''}
+          {ready.problems.size ? ` · ${ready.problems.size} to fix` : ''}
+        </Typography>
+        {record.error && <Alert severity="error" sx={{ flex: '1 1 100%' }}>{record.error.message} — nothing was lost; fix it and save again.</Alert>}
+      </Box>
+      <CsvImportDialog
+        open={csvOpen}
+        unit={draft.unit}
+        onClose={() => setCsvOpen(false)}
+        onImport={(stations) => patch({ stations: stations.map((s) => ({ position: String(s.position), reading: String(s.reading) })) })}
+      />
+    </Paper>
+  );
+}

@@ -1,0 +1,108 @@
+import { useState } from 'react';
+import { Alert, Box, Button, Checkbox, IconButton, Paper, Stack, Table, TableBody, TableCell, TableContainer, TableHead, TableRow, Tooltip, Typography } from '@mui/material';
+import DeleteOutline from '@mui/icons-material/DeleteOutlined';
+import LockOutlined from '@mui/icons-material/LockOutlined';
+import { SweepOverlayChart } from '../../../components/charts/sweep-overlay-chart';
+import { fromMm, UNIT_LABELS } from '../../../lib/units';
+import { useDeleteSweep } from '../api/delete-sweep';
+import { PHASE_LABELS, type Sweep } from '../types';
+import { showInTargetUnit } from '../utils/display';
+import { CheckStatusChip } from './check-status-chip';
+import { SweepResult } from './sweep-result';
+
+const when = (s: Sweep) => new Date(s.takenAt).toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' });
+
+/** Every sweep of the rail, newest first; pick two to overlay, open one to see its residuals. */
+export function SweepHistory({ sweeps, canRecord }: { sweeps: Sweep[]; canRecord: boolean }) {
+  // Until someone picks, the overlay follows the two newest sweeps.
+  const [chosenIds, setPicked] = useState<string[] | null>(null);
+  const picked = chosenIds ?? sweeps.slice(0, 2).map((s) => s.id);
+  const [open, setOpen] = useState<string | null>(null);
+  const remove = useDeleteSweep();
+  if (!sweeps.length) return null;
+  const chosen = sweeps.filter((s) => picked.includes(s.id));
+  const unit = chosen[0]?.unit ?? sweeps[0].unit;
+  const toggle = (id: string) => setPicked(picked.includes(id) ? picked.filter((x) => x !== id) : [...picked, id].slice(-2));
+  const opened = sweeps.find((s) => s.id === open);
+
+  return (
+    <Stack spacing={2}>
+      <Paper component="section" aria-label="Sweep history" sx={{ p: { xs: 1.5, sm: 2.5 } }}>
+        <Typography variant="h3" component="h2" gutterBottom>
+          Sweep history
+        </Typography>
+        {remove.error && <Alert severity="error" sx={{ mb: 1 }}>{remove.error.message}</Alert>}
+        <TableContainer>
+          <Table size="small" aria-label="Sweeps">
+            <TableHead>
+              <TableRow>
+                <TableCell padding="checkbox">Overlay</TableCell>
+                <TableCell>Taken</TableCell>
+                <TableCell>Phase</TableCell>
+                <TableCell>Least squares</TableCell>
+                <TableCell>Minimum zone</TableCell>
+                <TableCell>Status</TableCell>
+                <TableCell />
+              </TableRow>
+            </TableHead>
+            <TableBody>
+              {sweeps.map((s) => (
+                <TableRow key={s.id} hover selected={open === s.id}>
+                  <TableCell padding="checkbox">
+                    <Checkbox checked={picked.includes(s.id)} onChange={() => toggle(s.id)} slotProps={{ input: { 'aria-label': `Overlay the sweep of ${when(s)}` } }} />
+                  </TableCell>
+                  <TableCell>
+                    {when(s)}
+                    <Typography variant="body2" color="text.secondary">
+                      {s.takenBy}
+                      {s.datum ? ` · ${s.datum}` : ''}
+                    </Typography>
+                  </TableCell>
+                  <TableCell>{PHASE_LABELS[s.phase]}</TableCell>
+                  <TableCell>{showInTargetUnit(s.result.leastSquares.straightness, s.target)}</TableCell>
+                  <TableCell>{showInTargetUnit(s.result.minimumZone.straightness, s.target)}</TableCell>
+                  <TableCell>
+                    <CheckStatusChip status={s.status} />
+                  </TableCell>
+                  <TableCell align="right" sx={{ whiteSpace: 'nowrap' }}>
+                    <Button size="small" onClick={() => setOpen(open === s.id ? null : s.id)}>
+                      {open === s.id ? 'Close' : 'Open'}
+                    </Button>
+                    {s.locked ? (
+                      <Tooltip title="Part of an approval: kept as it is">
+                        <LockOutlined fontSize="small" sx={{ verticalAlign: 'middle', color: 'text.secondary', ml: 1 }} aria-label="Locked by an approval" />
+                      </Tooltip>
+                    ) : (
+                      canRecord && (
+                        <IconButton size="small" aria-label={`Delete the sweep of ${when(s)}`} onClick={() => window.confirm('Delete this sweep? Its readings are removed from the rail.') && remove.mutate(s.id)}>
+                          <DeleteOutline fontSize="small" />
+                        </IconButton>
+                      )
+                    )}
+                  </TableCell>
+                </TableRow>
+              ))}
+            </TableBody>
+          </Table>
+        </TableContainer>
+        {chosen.length > 0 && (
+          <Box sx={{ mt: 2 }}>
+            <Typography color="text.secondary" sx={{ mb: 1 }}>
+              Deviation of each sweep from its own least-squares line, so sweeps zeroed differently compare shape for shape.
+            </Typography>
+            <SweepOverlayChart
+              label="Sweeps overlaid"
+              unitLabel={UNIT_LABELS[unit]}
+              yLabel="Deviation"
+              series={chosen.map((s) => ({
+                name: `${when(s)} (${PHASE_LABELS[s.phase].toLowerCase()})`,
+                points: s.stations.map((st, i) => ({ position: st.position, value: fromMm(s.result.leastSquares.residuals[i], unit) })),
+              }))}
+            />
+          </Box>
+        )}
+      </Paper>
+      {opened && <SweepResult sweep={opened} title={`Sweep of ${when(opened)}`} />}
+    </Stack>
+  );
+}

@@ -1,0 +1,75 @@
+import { Alert, Box, Stack, Typography } from '@mui/material';
+import { StraightnessChart } from '../../../components/charts/straightness-chart';
+import { fromMm, UNIT_LABELS, type LengthUnit } from '../../../lib/units';
+import type { StraightnessResult, TargetValue } from '../types';
+import { showInTargetUnit, showLength, showTarget, targetMm } from '../utils/display';
+import { CheckStatusChip } from './check-status-chip';
+
+/** Readings with their fitted line and band, in the entry unit, and the result against the target. */
+export function SweepPreview({
+  points,
+  unit,
+  result,
+  target,
+  label,
+  pending,
+}: {
+  points: { position: number; reading: number }[];
+  unit: LengthUnit;
+  result: StraightnessResult | null;
+  target: TargetValue | null;
+  label: string;
+  pending?: boolean;
+}) {
+  if (points.length < 3 || !result) {
+    return (
+      <Box sx={{ p: 3, border: '1px dashed', borderColor: 'divider', borderRadius: 1, color: 'text.secondary' }}>
+        {pending ? 'Fitting…' : 'Type at least three readings: the chart and the straightness appear as you go.'}
+      </Box>
+    );
+  }
+  const u = (mm: number) => fromMm(mm, unit);
+  const ls = result.leastSquares;
+  const mz = result.minimumZone;
+  const status = target ? (ls.straightness <= targetMm(target) + 1e-12 ? 'within-target' : 'outside-target') : null;
+  return (
+    <Stack spacing={1.5}>
+      <StraightnessChart
+        points={points}
+        leastSquares={{ slope: u(ls.slope), intercept: u(ls.intercept) }}
+        zone={{ slope: u(mz.slope), intercept: u(mz.intercept), width: u(mz.straightness) }}
+        unitLabel={UNIT_LABELS[unit]}
+        height={300}
+        label={label}
+      />
+      <Stack direction="row" spacing={3} useFlexGap sx={{ alignItems: 'center', flexWrap: 'wrap' }}>
+        <Box>
+          <Typography variant="body2" color="text.secondary">
+            Least squares
+          </Typography>
+          <Typography sx={{ fontWeight: 600 }} data-testid="ls-straightness">
+            {showLength(ls.straightness, unit)}
+          </Typography>
+        </Box>
+        <Box>
+          <Typography variant="body2" color="text.secondary">
+            Minimum zone
+          </Typography>
+          <Typography sx={{ fontWeight: 600 }}>{showLength(mz.straightness, unit)}</Typography>
+        </Box>
+        {target && (
+          <Box>
+            <Typography variant="body2" color="text.secondary">
+              Target
+            </Typography>
+            <Typography sx={{ fontWeight: 600 }}>
+              {showTarget(target)} <Typography component="span" color="text.secondary">({showInTargetUnit(ls.straightness, target)} now)</Typography>
+            </Typography>
+          </Box>
+        )}
+        {status && <CheckStatusChip status={status} />}
+      </Stack>
+      {pending && <Alert severity="info" variant="outlined" sx={{ py: 0 }}>Updating…</Alert>}
+    </Stack>
+  );
+}

@@ -1,0 +1,68 @@
+import { Alert, Box, Paper, Stack, Table, TableBody, TableCell, TableContainer, TableHead, TableRow, Typography } from '@mui/material';
+import { fromMm, UNIT_LABELS } from '../../../lib/units';
+import { PHASE_LABELS, type Sweep } from '../types';
+import { showInTargetUnit, showLength, showTarget } from '../utils/display';
+import { CheckStatusChip } from './check-status-chip';
+import { SweepPreview } from './sweep-preview';
+
+/** A saved sweep: the server's fit, the residual at each station, and the verdict beside its target. */
+export function SweepResult({ sweep, title = 'Saved sweep' }: { sweep: Sweep; title?: string }) {
+  const unit = sweep.unit;
+  const digits = unit === 'um' ? 1 : unit === 'mm' ? 4 : unit === 'in' ? 5 : 2;
+  return (
+    <Paper component="section" aria-label={title} sx={{ p: { xs: 1.5, sm: 2.5 } }}>
+      <Box sx={{ display: 'flex', alignItems: 'center', gap: 1.5, flexWrap: 'wrap', mb: 1 }}>
+        <Typography variant="h3" component="h2" sx={{ flex: '1 1 240px' }}>
+          {title}
+        </Typography>
+        <CheckStatusChip status={sweep.status} size="medium" />
+      </Box>
+      <Typography color="text.secondary" sx={{ mb: 2 }}>
+        {PHASE_LABELS[sweep.phase]} · {new Date(sweep.takenAt).toLocaleString()} · {sweep.takenBy}
+        {sweep.instrument ? ` · ${sweep.instrument}` : ''}
+        {sweep.resolution !== null ? ` (${sweep.resolution} ${UNIT_LABELS[unit]})` : ''}
+        {sweep.temperatureC !== null ? ` · ${sweep.temperatureC} °C` : ''}
+        {sweep.boltSize ? ` · ${sweep.boltSize}${sweep.torqueNm !== null ? ` at ${sweep.torqueNm} N·m` : ''}` : ''}
+        {sweep.datum ? ` · datum: ${sweep.datum}` : ''}
+      </Typography>
+      <Alert severity={sweep.status === 'within-target' ? 'success' : 'error'} sx={{ mb: 2 }}>
+        Least-squares straightness {showInTargetUnit(sweep.result.leastSquares.straightness, sweep.target)} against a target of {showTarget(sweep.target)}:{' '}
+        {sweep.status === 'within-target' ? 'within target.' : 'outside target.'} Minimum zone {showInTargetUnit(sweep.result.minimumZone.straightness, sweep.target)}.
+      </Alert>
+      <Stack direction={{ xs: 'column', lg: 'row' }} spacing={2.5}>
+        <Box sx={{ flex: 3, minWidth: 0 }}>
+          <SweepPreview points={sweep.stations.map((s) => ({ position: s.position, reading: s.reading }))} unit={unit} result={sweep.result} target={sweep.target} label="Saved sweep straightness chart" />
+        </Box>
+        <TableContainer sx={{ flex: 2, maxHeight: 380 }}>
+          <Table size="small" stickyHeader aria-label="Residual per station">
+            <TableHead>
+              <TableRow>
+                <TableCell>Station (mm)</TableCell>
+                <TableCell align="right">Reading ({UNIT_LABELS[unit]})</TableCell>
+                <TableCell align="right">Residual ({UNIT_LABELS[unit]})</TableCell>
+              </TableRow>
+            </TableHead>
+            <TableBody>
+              {sweep.stations.map((s, i) => {
+                const r = fromMm(sweep.result.leastSquares.residuals[i], unit);
+                return (
+                  <TableRow key={i}>
+                    <TableCell>{s.position}</TableCell>
+                    <TableCell align="right">{s.reading}</TableCell>
+                    <TableCell align="right" sx={{ fontVariantNumeric: 'tabular-nums' }}>
+                      {r >= 0 ? '+' : ''}
+                      {r.toFixed(digits)}
+                    </TableCell>
+                  </TableRow>
+                );
+              })}
+            </TableBody>
+          </Table>
+        </TableContainer>
+      </Stack>
+      <Typography variant="body2" color="text.secondary" sx={{ mt: 1 }}>
+        End-point straightness {showLength(sweep.result.endPoint.straightness, unit)}. Residuals are from the least-squares line.
+      </Typography>
+    </Paper>
+  );
+}

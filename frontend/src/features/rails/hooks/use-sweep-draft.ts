@@ -1,0 +1,63 @@
+import { useEffect, useState } from 'react';
+import type { LengthUnit } from '../../../lib/units';
+import type { SweepPhase } from '../types';
+import { clientId } from '../utils/client-id';
+
+export interface StationDraft {
+  position: string;
+  reading: string;
+}
+
+export interface SweepDraft {
+  id: string;
+  unit: LengthUnit;
+  stations: StationDraft[];
+  instrument: string;
+  resolution: string;
+  temperatureC: string;
+  phase: SweepPhase;
+  takenBy: string;
+  boltSize: string;
+  torqueNm: string;
+  datum: string;
+  notes: string;
+}
+
+export const newDraft = (stations: StationDraft[], keep?: Partial<SweepDraft>): SweepDraft => ({
+  id: clientId(),
+  unit: 'thou',
+  instrument: '',
+  resolution: '',
+  temperatureC: '',
+  phase: 'as-found',
+  takenBy: '',
+  boltSize: '',
+  torqueNm: '',
+  datum: '',
+  notes: '',
+  ...keep,
+  stations,
+});
+
+const key = (railId: string) => `railwright.sweep-draft.${railId}`;
+
+/** The sweep being typed, kept in the browser so a reload or a dropped tab loses no reading. */
+export function useSweepDraft(railId: string, initial: () => SweepDraft) {
+  const [draft, setDraft] = useState<SweepDraft>(() => {
+    try {
+      const saved = localStorage.getItem(key(railId));
+      if (saved) return JSON.parse(saved) as SweepDraft;
+    } catch {
+      // A broken saved draft is dropped; the new one starts clean.
+    }
+    return initial();
+  });
+  useEffect(() => {
+    try {
+      localStorage.setItem(key(railId), JSON.stringify(draft));
+    } catch {
+      // Storage full or blocked: the draft still lives in memory.
+    }
+  }, [railId, draft]);
+  return [draft, setDraft] as const;
+}

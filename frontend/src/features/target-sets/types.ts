@@ -1,0 +1,26 @@
+export type TargetUnit = 'mm' | 'um' | 'in' | 'thou' | 'mm/m' | '%' | 'days';
+
+export interface Target {
+  value: number;
+  unit: TargetUnit;
+  source?: string;
+  label: string;
+}
+
+export interface TargetSet {
+  id: string;
+  name: string;
+  description: string;
+  targets: Record<string, Target>;
+  updatedAt: string;
+}
+
+export const UNIT_WORDS: Record<TargetUnit, string> = { mm: 'mm', um: 'µm', in: 'in', thou: 'thou', 'mm/m': 'mm/m', '%': '%', days: 'days' };
+
+/** Which units a target may be given in: lengths in any length unit, others as they are. */
+export const unitChoices = (unit: TargetUnit): TargetUnit[] => (['mm', 'um', 'in', 'thou'].includes(unit) ? ['mm', 'um', 'in', 'thou'] : [unit]);
+
+export const targetSetKeys = {
+  all: ['target-sets'] as const,
+  list: () => [...targetSetKeys.all, 'list'] as const,
+};
