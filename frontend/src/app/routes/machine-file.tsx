@@ -10,6 +10,7 @@ import { MachineHistory } from '../../features/machines/components/machine-histo
 import { MachineStateChip } from '../../features/machines/components/machine-state-chip';
 import { KIND_LABELS, type Machine } from '../../features/machines/types';
 import { RailsPanel } from '../../features/rails/components/rails-panel';
+import { MachineEvidence } from '../../features/evidence/components/machine-evidence';
 
 interface Section {
   id: string;
@@ -21,6 +22,7 @@ interface Section {
 const SECTIONS: Section[] = [
   { id: 'overview', label: 'Specification', render: (m) => <MachineOverview machine={m} /> },
   { id: 'rails', label: 'Rails', render: (m) => <RailsPanel machineId={m.id} /> },
+  { id: 'evidence', label: 'Evidence', render: (m) => <MachineEvidence machineId={m.id} /> },
   { id: 'history', label: 'History', render: (m) => <MachineHistory machineId={m.id} /> },
 ];
 
