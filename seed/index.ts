@@ -7,6 +7,7 @@ import { seedSafety } from './safety.js';
 import { seedRails } from './rails.js';
 import { seedBoltDowns } from './bolt-downs.js';
 import { seedDrives } from './drives.js';
+import { seedApprovals } from './approvals.js';
 
 /** The demo workshop, built through the product's own services so results match the engine. */
 export async function runDemoSeed(app: INestApplicationContext): Promise<SeedContext> {
@@ -18,5 +19,6 @@ export async function runDemoSeed(app: INestApplicationContext): Promise<SeedCon
   await seedBoltDowns(ctx);
   await seedDrives(ctx);
   // Each domain adds its demo records here, in dependency order.
+  await seedApprovals(ctx); // last: signs off the router on everything above
   return ctx;
 }

@@ -12,6 +12,7 @@ import { ReadinessBoardService } from './readiness-board.service.js';
 import { RecheckService } from './recheck.service.js';
 import { snapshotHash } from './snapshot.js';
 import { defaultStatement } from './statement.js';
+import { cautionsFor } from './cautions.js';
 import type { ApproveDto } from './dto/approve.dto.js';
 import type { WaiverDto } from './dto/waiver.dto.js';
 
@@ -50,6 +51,7 @@ export class ApprovalsService implements OnModuleInit {
       recheckDueAt: approval && ['ready-to-cut', 'recheck-due'].includes(b.machine.state) ? approval.recheckDueAt.toISOString() : null,
       targetSet: b.targetSet,
       defaultStatement: defaultStatement(b.machine.name, b.targetSet.name),
+      cautions: cautionsFor(b.machine.kind).map(({ title, text }) => ({ title, text })),
     };
   }
 

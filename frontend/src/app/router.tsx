@@ -9,6 +9,7 @@ const page = (load: () => Promise<{ default: React.ComponentType }>) => async ()
 
 const router = createBrowserRouter([
   { path: paths.signIn, Component: SignInRoute },
+  { path: paths.setPassword, lazy: page(() => import('./routes/set-password')) },
   {
     Component: SignedInLayout,
     children: [
@@ -21,6 +22,7 @@ const router = createBrowserRouter([
       { path: '/machines/:machineId/rails/:railId', lazy: page(() => import('./routes/rail')) },
       { path: paths.calculators, lazy: page(() => import('./routes/calculators')) },
       { path: '/machines/:machineId/rails/:railId/bolt-down', lazy: page(() => import('./routes/bolt-down')) },
+      { path: paths.outbox, lazy: page(() => import('./routes/outbox')) },
       { path: '*', Component: NotFoundRoute },
     ],
   },

@@ -3,6 +3,7 @@ import PrecisionManufacturingOutlined from '@mui/icons-material/PrecisionManufac
 import CalculateOutlined from '@mui/icons-material/CalculateOutlined';
 import TuneOutlined from '@mui/icons-material/TuneOutlined';
 import GroupOutlined from '@mui/icons-material/GroupOutlined';
+import MarkEmailReadOutlined from '@mui/icons-material/MarkEmailReadOutlined';
 import type { Role } from '../features/auth/types';
 import { paths } from './paths';
 
@@ -19,6 +20,7 @@ export const NAV_ITEMS: NavItem[] = [
   { label: 'Target sets', path: paths.targetSets, icon: TuneOutlined },
   { label: 'Calculators', path: paths.calculators, icon: CalculateOutlined },
   { label: 'People', path: paths.people, icon: GroupOutlined, roles: ['admin'] },
+  { label: 'Outbox', path: paths.outbox, icon: MarkEmailReadOutlined, roles: ['admin'] },
 ];
 
 export const navItemsFor = (role: Role) => NAV_ITEMS.filter((i) => !i.roles || i.roles.includes(role));

@@ -9,4 +9,6 @@ export const paths = {
   calculators: '/calculators',
   targetSets: '/target-sets',
   people: '/people',
+  setPassword: '/set-password',
+  outbox: '/outbox',
 } as const;

@@ -9,6 +9,7 @@ import { MachineOverview } from '../../features/machines/components/machine-over
 import { MachineHistory } from '../../features/machines/components/machine-history';
 import { MachineStateChip } from '../../features/machines/components/machine-state-chip';
 import { KIND_LABELS, type Machine } from '../../features/machines/types';
+import { ReadinessBoard } from '../../features/approvals/components/readiness-board';
 import { RailsPanel } from '../../features/rails/components/rails-panel';
 import { MachineEvidence } from '../../features/evidence/components/machine-evidence';
 
@@ -20,6 +21,7 @@ interface Section {
 
 // The machine file's sections; each feature adds its own tab here.
 const SECTIONS: Section[] = [
+  { id: 'readiness', label: 'Readiness', render: (m) => <ReadinessBoard machineId={m.id} machineName={m.name} /> },
   { id: 'overview', label: 'Specification', render: (m) => <MachineOverview machine={m} /> },
   { id: 'rails', label: 'Rails', render: (m) => <RailsPanel machineId={m.id} /> },
   { id: 'evidence', label: 'Evidence', render: (m) => <MachineEvidence machineId={m.id} /> },

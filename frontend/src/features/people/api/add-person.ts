@@ -2,6 +2,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
 import type { Role } from '../../auth/types';
 import { peopleKeys, type Person } from '../types';
+import type { InvitationResult } from './resend-invitation';
 
 export interface AddPersonInput {
   name: string;
@@ -12,7 +13,7 @@ export interface AddPersonInput {
 export function useAddPerson() {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (input: AddPersonInput) => api.post<{ person: Person; temporaryPassword?: string; invitationSent?: boolean }>('/people', input),
+    mutationFn: (input: AddPersonInput) => api.post<{ person: Person } & InvitationResult>('/people', input),
     onSuccess: () => qc.invalidateQueries({ queryKey: peopleKeys.all }),
   });
 }

@@ -26,16 +26,18 @@ export function AddPersonDialog({ open, onClose }: { open: boolean; onClose: () 
       <DialogContent>
         {done ? (
           <Stack spacing={2} sx={{ pt: 1 }}>
-            <Alert severity="success">{done.person.name} can now sign in as {ROLE_LABELS[done.person.role].toLowerCase()}.</Alert>
-            {done.temporaryPassword ? (
+            <Alert severity="success">{done.person.name} is a member as {ROLE_LABELS[done.person.role].toLowerCase()}.</Alert>
+            {done.invitationSent ? (
+              <Typography>
+                We have e-mailed {done.person.email} a link to choose their password. It works once, until {new Date(done.invitationExpiresAt).toLocaleString()}.
+              </Typography>
+            ) : (
               <>
-                <Typography>Give them this temporary password. It is shown only once:</Typography>
-                <Typography component="code" data-testid="temporary-password" sx={{ fontFamily: 'monospace', fontSize: '1.2rem', p: 1.5, bgcolor: '#f1eee6', borderRadius: 1 }}>
-                  {done.temporaryPassword}
+                <Alert severity="warning">The sign-in mail could not be sent. Give them this link yourself; it works once:</Alert>
+                <Typography component="code" data-testid="invitation-link" sx={{ fontFamily: 'monospace', p: 1.5, bgcolor: '#f1eee6', borderRadius: 1, wordBreak: 'break-all' }}>
+                  {done.invitationLink}
                 </Typography>
               </>
-            ) : (
-              <Typography>We have e-mailed {done.person.email} a link to set their password.</Typography>
             )}
           </Stack>
         ) : (

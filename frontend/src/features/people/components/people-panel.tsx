@@ -5,6 +5,7 @@ import { ROLE_LABELS, type Role } from '../../auth/types';
 import { useMe } from '../../auth/api/get-me';
 import { usePeople } from '../api/get-people';
 import { useUpdatePerson } from '../api/update-person';
+import { useResendInvitation } from '../api/resend-invitation';
 import { AddPersonDialog } from './add-person-dialog';
 import { LoadingState } from '../../../components/states/loading-state';
 import { ErrorState } from '../../../components/states/error-state';
@@ -15,6 +16,7 @@ export function PeoplePanel() {
   const people = usePeople();
   const me = useMe();
   const update = useUpdatePerson();
+  const resend = useResendInvitation();
   const [adding, setAdding] = useState(false);
 
   if (people.isPending) return <LoadingState label="Loading members…" />;
@@ -27,6 +29,16 @@ export function PeoplePanel() {
           Add member
         </Button>
       </Box>
+      {resend.data && (
+        <Alert severity={resend.data.invitationSent ? 'success' : 'warning'} sx={{ mb: 2 }} onClose={() => resend.reset()}>
+          {resend.data.invitationSent ? 'A new sign-in link is on its way.' : `The mail could not be sent; pass on this link: ${resend.data.invitationLink}`}
+        </Alert>
+      )}
+      {resend.error && (
+        <Alert severity="error" sx={{ mb: 2 }} onClose={() => resend.reset()}>
+          {resend.error.message}
+        </Alert>
+      )}
       {update.error && (
         <Alert severity="error" sx={{ mb: 2 }} onClose={() => update.reset()}>
           {update.error.message}
@@ -66,6 +78,11 @@ export function PeoplePanel() {
                   <Chip size="small" label={p.active ? 'Active' : 'Deactivated'} color={p.active ? 'success' : 'default'} variant="outlined" />
                 </TableCell>
                 <TableCell align="right">
+                  {p.active && p.id !== me.data?.id && (
+                    <Button size="small" onClick={() => resend.mutate(p.id)} disabled={resend.isPending}>
+                      Send sign-in link
+                    </Button>
+                  )}
                   <Button size="small" color={p.active ? 'error' : 'primary'} onClick={() => update.mutate({ id: p.id, active: !p.active })}>
                     {p.active ? 'Deactivate' : 'Reactivate'}
                   </Button>

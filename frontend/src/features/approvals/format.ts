@@ -1,0 +1,25 @@
+import type { BoardCheck, Target } from './types';
+
+const UNIT_WORDS: Record<string, string> = { um: 'µm', thou: 'thou', in: 'in', mm: 'mm' };
+export const unitLabel = (unit: string) => UNIT_WORDS[unit] ?? unit;
+
+export function num(v: number): string {
+  if (v === 0) return '0';
+  if (Math.abs(v) < 1e-4) return v.toExponential(2);
+  return String(Number(v.toPrecision(4)));
+}
+
+/** Headroom and travel margin are minimums, a test cut is a ± band, the rest are maximums. */
+export function targetText(kind: BoardCheck['kind'], target: Target | null): string {
+  if (!target) return '—';
+  const value = `${num(target.value)} ${unitLabel(target.unit)}`;
+  if (kind === 'speed-check' || kind === 'travel-envelope') return `≥ ${value}`;
+  if (kind === 'test-cut') return `± ${value}`;
+  if (kind === 'safety-walk') return target.value ? value : 'every item passed';
+  return `≤ ${value}`;
+}
+
+export const resultText = (r: BoardCheck['result']) => (r ? `${num(r.value)} ${unitLabel(r.unit)}` : '—');
+
+export const dateTime = (iso: string) => new Date(iso).toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' });
+export const dateOnly = (iso: string) => new Date(iso).toLocaleDateString(undefined, { dateStyle: 'medium' });

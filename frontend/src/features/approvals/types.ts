@@ -1,0 +1,129 @@
+import type { MachineState } from '../machines/types';
+
+export type CheckStatus = 'not-started' | 'within-target' | 'outside-target' | 'waived';
+export type CheckKind =
+  | 'rail-straightness'
+  | 'rail-parallelism'
+  | 'travel-trial'
+  | 'positioning'
+  | 'speed-check'
+  | 'travel-envelope'
+  | 'diagonal-check'
+  | 'bed-grid'
+  | 'test-cut'
+  | 'safety-walk';
+
+export interface Target {
+  value: number;
+  unit: string;
+  source?: string;
+  label?: string;
+}
+
+export interface Waiver {
+  id: string;
+  reason: string;
+  by: string;
+  at: string;
+}
+
+export interface BoardCheck {
+  key: string;
+  kind: CheckKind;
+  subject: string;
+  status: CheckStatus;
+  measuredStatus: Exclude<CheckStatus, 'waived'>;
+  target: Target | null;
+  result: { value: number; unit: string; summary: string } | null;
+  recordType: string | null;
+  recordId: string | null;
+  recordedAt: string | null;
+  link: string;
+  waiver: Waiver | null;
+}
+
+export interface BlockingCheck {
+  key: string;
+  kind: CheckKind;
+  subject: string;
+  status: CheckStatus;
+}
+
+export interface Approval {
+  id: string;
+  approvedAt: string;
+  approvedBy: string;
+  recordHash: string;
+  statement: string;
+  recheckDueAt: string;
+  recheckIntervalDays: number;
+}
+
+export interface Readiness {
+  machineId: string;
+  state: MachineState;
+  checks: BoardCheck[];
+  blocking: BlockingCheck[];
+  counts: { total: number; within: number; outside: number; waived: number; notStarted: number };
+  approval: Approval | null;
+  request: { id: string; requestedAt: string; requestedBy: string } | null;
+  recheckDueAt: string | null;
+  targetSet: { id: string; name: string; recheckIntervalDays: number };
+  defaultStatement: string;
+  /** The usual cautions for this kind of machine, read before signing. */
+  cautions: { title: string; text: string }[];
+}
+
+export interface DriftSide {
+  status: CheckStatus;
+  result: BoardCheck['result'];
+  recordId: string | null;
+  recordedAt: string | null;
+}
+
+export interface DriftRow {
+  key: string;
+  kind: CheckKind;
+  subject: string;
+  target: Target | null;
+  approved: DriftSide | null;
+  latest: DriftSide | null;
+  change: number | null;
+  unit: string | null;
+  rechecked: boolean;
+  worse: boolean;
+}
+
+export interface Drift {
+  approval: { id: string; approvedAt: string; approvedBy: string; recordHash: string } | null;
+  rows: DriftRow[];
+}
+
+export const KIND_LABELS: Record<CheckKind, string> = {
+  'rail-straightness': 'Rail straightness',
+  'rail-parallelism': 'Rail parallelism',
+  'travel-trial': 'Travel trial',
+  positioning: 'Repeat-and-reverse run',
+  'speed-check': 'Speed check',
+  'travel-envelope': 'Travel envelope',
+  'diagonal-check': 'Diagonal check',
+  'bed-grid': 'Bed grid',
+  'test-cut': 'Test cut',
+  'safety-walk': 'Safety walk',
+};
+
+export const STATUS_LABELS: Record<CheckStatus, string> = {
+  'not-started': 'Not started',
+  'within-target': 'Within target',
+  'outside-target': 'Outside target',
+  waived: 'Waived',
+};
+
+export const approvalKeys = {
+  all: ['approvals'] as const,
+  readiness: (machineId: string) => [...approvalKeys.all, 'readiness', machineId] as const,
+  drift: (machineId: string) => [...approvalKeys.all, 'drift', machineId] as const,
+};
+
+export const certificateUrl = (machineId: string, approvalId?: string) =>
+  `/api/machines/${machineId}/certificate.pdf${approvalId ? `?approval=${approvalId}` : ''}`;
