@@ -22,6 +22,18 @@ const KIND_WORDS: Record<string, string> = {
  */
 export async function seedApprovals(ctx: SeedContext): Promise<void> {
   const log = new Logger('Seed');
+  // The readiness contributors, the mail transport and the approval listeners start in
+  // onModuleInit; the seed may run before the server listens, so make sure they are up.
+  await ctx.app.init();
+  try {
+    await approveRouter(ctx, log);
+  } catch (err) {
+    // A demo that cannot be approved must not stop the server from starting.
+    log.warn(`The demo router was not approved: ${(err as Error).message}`);
+  }
+}
+
+async function approveRouter(ctx: SeedContext, log: Logger): Promise<void> {
   const approvals = ctx.app.get(ApprovalsService);
   const { owner, technician } = ctx.demo.people;
   const routerId = ctx.machines!.router;
