@@ -1,0 +1,114 @@
+import { expect, test, type Page } from '@playwright/test';
+import path from 'node:path';
+import { DEMO, signInAs, snap } from './support/session';
+
+async function openTab(page: Page, machine: string, tab: 'Frame' | 'Safety walk') {
+  await page.goto('/machines');
+  await page.getByRole('link', { name: machine }).click();
+  await page.getByRole('tab', { name: tab }).click();
+}
+
+/** A close look at one figure, beside the full-page shots. */
+const shoot = (page: Page, selector: string, name: string) =>
+  page.locator(selector).first().screenshot({ path: path.join(__dirname, 'screenshots', `${name}.png`) });
+
+test.describe('frame and safety walk', () => {
+  test('a technician records a diagonal check and a 3 × 4 bed grid and answers the safety walk', async ({ page }) => {
+    await signInAs(page, DEMO.technician);
+    await openTab(page, 'Big plasma table', 'Frame');
+
+    // The seeded squaring history converges; the newest check is drawn.
+    const history = page.getByRole('table', { name: 'Diagonal checks' });
+    await expect(history.getByRole('row')).toHaveCount(6);
+    const form = page.getByRole('form', { name: 'Diagonal check' });
+    await form.getByLabel('X side').fill('2000');
+    await form.getByLabel('Y side').fill('1200');
+    await form.getByLabel(/^Diagonal 1/).fill('2332.15');
+    await form.getByLabel(/^Diagonal 2/).fill('2332.85');
+    await form.getByLabel(/^Gantry span/).fill('3200');
+    await form.getByRole('button', { name: 'Record diagonal check' }).click();
+    await expect(history.getByRole('row')).toHaveCount(7);
+    // Diagonal 2 long by 0.7 mm on 2000 × 1200: 0.34 mm/m, within the 0.5 mm/m plasma target.
+    await expect(page.getByTestId('squareness-result')).toContainText('0.34');
+    await expect(page.getByText(/Lean exaggerated ×\d+/)).toBeVisible();
+    await expect(page.getByText(/Move the X0 end back towards Y0 by 1\.0\d mm/)).toBeVisible();
+    await shoot(page, 'svg[aria-label^="Measured rectangle"]', 'frame-squareness-drawing-desktop');
+
+    // A 3 × 4 grid by keyboard: type, Enter to the next cell.
+    const grid = page.getByRole('form', { name: 'Bed grid' });
+    await expect(grid.getByLabel('Rows')).toHaveValue('3');
+    await expect(grid.getByLabel('Columns')).toHaveValue('4');
+    const heights = ['0.10', '0.05', '0.00', '-0.05', '0.08', '0.02', '0.62', '-0.04', '0.04', '0.00', '-0.02', '-0.08'];
+    await grid.getByLabel('Height at row 1, column 1').click();
+    for (const h of heights) {
+      await page.keyboard.type(h);
+      await page.keyboard.press('Enter');
+    }
+    await expect(grid.getByLabel('Height at row 3, column 4')).toHaveValue('-0.08');
+    await grid.getByRole('button', { name: 'Record bed grid' }).click();
+    await expect(page.getByTestId('flatness-result')).toContainText('Flatness');
+    await expect(page.getByRole('list', { name: 'Worst points' }).getByRole('listitem').first()).toContainText('row 2, column 3: +0.');
+    await expect(page.getByRole('img', { name: /Bed grid colour map of residuals in mm, 3 rows by 4 columns/ })).toBeVisible();
+    await shoot(page, 'svg[aria-label^="Bed grid colour map"]', 'frame-bed-grid-map-desktop');
+    await snap(page, 'frame-tab-desktop');
+
+    // The safety walk: the seeded "no" blocks approval; answer one more item.
+    await page.getByRole('tab', { name: 'Safety walk' }).click();
+    await expect(page.getByText(/does not replace local codes, the equipment makers’ instructions, or licensed practice/)).toBeVisible();
+    await expect(page.getByText('Blocks approval')).toBeVisible();
+    const before = await page.getByTestId('walk-counts').textContent();
+    expect(before).toMatch(/^7 of 14 answered/);
+    const item = page.getByRole('group', { name: /licensed electrician/ });
+    await item.getByLabel('Note').fill('Inspected by the site electrician, certificate in the office');
+    await item.getByRole('button', { name: 'Yes' }).click();
+    await expect(item).toContainText('Yes · Tamsin Hale');
+    await expect(page.getByTestId('walk-counts')).toContainText('8 of 14 answered');
+    await expect(page.getByTestId('walk-status')).toHaveText('Not complete');
+    // Put the "no" right: the walk no longer blocks.
+    await page.getByRole('group', { name: /extraction or ventilation/ }).getByRole('button', { name: 'Yes' }).click();
+    await expect(page.getByText('Blocks approval')).toHaveCount(0);
+    await page.reload();
+    await expect(page.getByRole('group', { name: /licensed electrician/ }).getByLabel('Note')).toHaveValue('Inspected by the site electrician, certificate in the office');
+    await snap(page, 'safety-walk-desktop');
+  });
+
+  test('the router shows its complete walk; builders record frame checks but not test cuts', async ({ page }) => {
+    await signInAs(page, DEMO.builder);
+    await openTab(page, 'Small router', 'Frame');
+    await expect(page.getByRole('button', { name: 'Record diagonal check' })).toBeVisible();
+    await expect(page.getByRole('button', { name: 'Record bed grid' })).toBeVisible();
+    await expect(page.getByRole('button', { name: 'Record test cut' })).toHaveCount(0);
+    await expect(page.getByRole('table', { name: 'Part sizes' })).toContainText('within');
+    await expect(page.getByText(/routers are judged in tenths of a millimetre/).first()).toBeVisible();
+    await page.getByRole('tab', { name: 'Safety walk' }).click();
+    await expect(page.getByTestId('walk-status')).toHaveText('Complete');
+    await expect(page.getByRole('button', { name: 'Yes' }).first()).toBeDisabled();
+  });
+
+  test('an owner adds a workshop item that every machine is asked', async ({ page }) => {
+    await signInAs(page, DEMO.owner);
+    await openTab(page, 'Small router', 'Safety walk');
+    await page.getByRole('button', { name: 'Add a workshop item' }).click();
+    await page.getByRole('dialog').getByLabel('What is checked').fill('The spare torch consumables are stored dry');
+    await page.getByRole('dialog').getByRole('button', { name: 'Add item' }).click();
+    await expect(page.getByRole('group', { name: 'The spare torch consumables are stored dry' })).toContainText('Not answered yet');
+    await expect(page.getByTestId('walk-status')).toHaveText('Not complete');
+    await page.getByRole('group', { name: 'The spare torch consumables are stored dry' }).getByRole('button', { name: 'Not applicable' }).click();
+    await expect(page.getByTestId('walk-status')).toHaveText('Complete');
+  });
+
+  test('the drawing, the colour map and the walk at tablet size', async ({ page }) => {
+    await page.setViewportSize({ width: 820, height: 1180 });
+    await signInAs(page, DEMO.viewer);
+    await openTab(page, 'Big plasma table', 'Frame');
+    await expect(page.getByRole('img', { name: /Measured rectangle/ })).toBeVisible();
+    await expect(page.getByRole('button', { name: 'Record diagonal check' })).toHaveCount(0);
+    await expect(page.getByRole('figure', { name: 'Squaring history chart' })).toBeVisible();
+    await shoot(page, 'section[aria-labelledby="diagonal-check-title"]', 'frame-diagonal-tablet');
+    await shoot(page, 'section[aria-labelledby="bed-grid-title"]', 'frame-bed-grid-tablet');
+    await snap(page, 'frame-tab-tablet');
+    await page.getByRole('tab', { name: 'Safety walk' }).click();
+    await expect(page.getByText('Technicians, owners and admins answer the walk.')).toBeVisible();
+    await snap(page, 'safety-walk-tablet');
+  });
+});

@@ -1,0 +1,76 @@
+import { useState } from 'react';
+import { Alert, Box, Paper, Stack, Typography } from '@mui/material';
+import { LoadingState } from '../../../components/states/loading-state';
+import { ErrorState } from '../../../components/states/error-state';
+import { useDiagonalChecks } from '../api/get-diagonal-checks';
+import type { DiagonalCheck } from '../types';
+import { showTarget } from '../utils/format';
+import { DiagonalCheckForm } from './diagonal-check-form';
+import { SquarenessDrawing } from './squareness-drawing';
+import { SquaringHistory } from './squaring-history';
+import { StatusChip } from './status-chip';
+
+/** Squareness from the diagonals: entry, the drawing of the latest (or chosen) check, and the history. */
+export function DiagonalCheckSection({ machineId, canRecord }: { machineId: string; canRecord: boolean }) {
+  const checks = useDiagonalChecks(machineId);
+  const [selectedId, setSelectedId] = useState<string | null>(null);
+  if (checks.isPending) return <LoadingState label="Loading diagonal checks…" />;
+  if (checks.isError) return <ErrorState error={checks.error} onRetry={() => checks.refetch()} />;
+  const list = checks.data;
+  const shown: DiagonalCheck | undefined = list.find((c) => c.id === selectedId) ?? list[0];
+
+  return (
+    <Paper sx={{ p: { xs: 2, md: 2.5 } }} component="section" aria-labelledby="diagonal-check-title">
+      <Typography variant="h3" id="diagonal-check-title" gutterBottom>
+        Diagonal check
+      </Typography>
+      <Typography color="text.secondary" sx={{ mb: 2 }}>
+        Mark or cut a large rectangle with the machine, measure both sides and both diagonals. Equal diagonals mean a square gantry; the difference gives the angle and how far to move one end of a dual-drive gantry (usually by offsetting its home switch), then re-home and check again.
+      </Typography>
+      <Box sx={{ display: 'grid', gap: 3, gridTemplateColumns: { xs: '1fr', lg: canRecord ? 'minmax(320px, 5fr) 7fr' : '1fr' } }}>
+        {canRecord && <DiagonalCheckForm machineId={machineId} onSaved={(c) => setSelectedId(c.id)} />}
+        <Box>
+          {shown ? (
+            <Stack spacing={1.5}>
+              <Box sx={{ display: 'flex', gap: 1.5, alignItems: 'center', flexWrap: 'wrap' }}>
+                <Typography variant="h4" component="p" data-testid="squareness-result">
+                  {shown.result.mmPerMetre.toFixed(3)} mm/m out of square · {shown.result.outOfSquareArcsec.toFixed(0)}″ ({shown.result.outOfSquareDeg.toFixed(4)}°)
+                </Typography>
+                <StatusChip status={shown.status} />
+              </Box>
+              <Typography variant="body2" color="text.secondary">
+                Target {showTarget(shown.target)} · {shown.target.source}
+              </Typography>
+              <SquarenessDrawing
+                sideXMm={shown.inputMm.sideX}
+                sideYMm={shown.inputMm.sideY}
+                diagonal1Mm={shown.inputMm.diagonal1}
+                diagonal2Mm={shown.inputMm.diagonal2}
+                outOfSquareRad={shown.result.outOfSquareRad}
+                longDiagonal={shown.result.longDiagonal}
+                correction={shown.result.correction}
+                unit={shown.unit}
+              />
+              <Alert severity={shown.result.correction.end ? 'info' : 'success'} icon={false}>
+                {shown.result.correction.instruction}
+              </Alert>
+              {shown.result.warnings.map((w) => (
+                <Alert key={w} severity="warning">{w}</Alert>
+              ))}
+            </Stack>
+          ) : (
+            <Typography color="text.secondary">No diagonal check yet.</Typography>
+          )}
+        </Box>
+      </Box>
+      {list.length > 0 && (
+        <Box sx={{ mt: 3 }}>
+          <Typography variant="h4" gutterBottom>
+            Squaring history
+          </Typography>
+          <SquaringHistory checks={list} selectedId={shown?.id} onSelect={(c) => setSelectedId(c.id)} />
+        </Box>
+      )}
+    </Paper>
+  );
+}

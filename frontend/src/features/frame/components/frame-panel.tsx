@@ -1,0 +1,19 @@
+import { Stack } from '@mui/material';
+import { useMe } from '../../auth/api/get-me';
+import { canCalibrate, canRecord } from '../../auth/types';
+import { BedGridSection } from './bed-grid-section';
+import { DiagonalCheckSection } from './diagonal-check-section';
+import { TestCutSection } from './test-cut-section';
+
+/** The machine file's Frame tab: squareness, bed flatness and the test cut. */
+export function FramePanel({ machine }: { machine: { id: string; workArea: { x: number; y: number } } }) {
+  const role = useMe().data?.role;
+  // Builders square and level the frame; the test cut is for those who calibrate.
+  return (
+    <Stack spacing={3}>
+      <DiagonalCheckSection machineId={machine.id} canRecord={canRecord(role)} />
+      <BedGridSection machineId={machine.id} workArea={machine.workArea} canRecord={canRecord(role)} />
+      <TestCutSection machineId={machine.id} canRecord={canCalibrate(role)} />
+    </Stack>
+  );
+}

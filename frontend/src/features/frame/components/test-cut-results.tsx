@@ -1,0 +1,100 @@
+import { Alert, Box, Stack, Table, TableBody, TableCell, TableContainer, TableHead, TableRow, Typography } from '@mui/material';
+import type { TestCut } from '../types';
+import { showDate, showLength, showSigned, showTarget } from '../utils/format';
+import { StatusChip } from './status-chip';
+
+const POINTS_TO: Record<TestCut['result']['ovalityPointsTo'], string> = {
+  round: 'round',
+  scale: 'unequal scale',
+  'x-backlash': 'backlash on X',
+  'y-backlash': 'backlash on Y',
+};
+
+/** What a test cut says: scale per axis and its correction, squareness, ovality, part sizes against ±. */
+export function TestCutResults({ cut }: { cut: TestCut }) {
+  const r = cut.result;
+  const tol = cut.targets.part;
+  return (
+    <Stack spacing={2}>
+      <Box sx={{ display: 'flex', gap: 1.5, alignItems: 'center', flexWrap: 'wrap' }}>
+        <Typography variant="h4" component="p">Test cut of {showDate(cut.recordedAt)}</Typography>
+        <StatusChip status={cut.status} />
+        <Typography variant="body2" color="text.secondary">by {cut.recordedBy.name}</Typography>
+      </Box>
+      <TableContainer>
+        <Table size="small" aria-label="Scale per axis">
+          <TableHead>
+            <TableRow>
+              <TableCell>Axis</TableCell>
+              <TableCell align="right">Commanded</TableCell>
+              <TableCell align="right">Measured{cut.measured.kerf ? ' + kerf' : ''}</TableCell>
+              <TableCell align="right">Scale error</TableCell>
+              <TableCell align="right">Steps/mm × factor</TableCell>
+              <TableCell align="right">Suggested steps/mm</TableCell>
+            </TableRow>
+          </TableHead>
+          <TableBody>
+            {(['x', 'y'] as const).map((k) => (
+              <TableRow key={k}>
+                <TableCell>{k.toUpperCase()}</TableCell>
+                <TableCell align="right">{showLength(r[k].commandedMm, 'mm', 2)}</TableCell>
+                <TableCell align="right">{showLength(r[k].afterKerfMm, 'mm', 2)}</TableCell>
+                <TableCell align="right">{r[k].errorPercent >= 0 ? '+' : '−'}{Math.abs(r[k].errorPercent).toFixed(3)} % ({showSigned(r[k].errorMm, 'mm', 2)})</TableCell>
+                <TableCell align="right">× {r[k].correctionFactor.toFixed(5)}</TableCell>
+                <TableCell align="right">{r[k].suggestedStepsPerMm === null ? '—' : `${r[k].suggestedStepsPerMm.toFixed(4)} steps/mm`}</TableCell>
+              </TableRow>
+            ))}
+          </TableBody>
+        </Table>
+      </TableContainer>
+      <Typography variant="body2" color="text.secondary">
+        New steps per mm = old × commanded ÷ measured, per axis (common practice). Set steps per mm first, then square the gantry, re-home and cut again.
+      </Typography>
+      <Box sx={{ display: 'grid', gap: 2, gridTemplateColumns: { xs: '1fr', md: '1fr 1fr' } }}>
+        <Box>
+          <Typography variant="h5" component="h4">Squareness</Typography>
+          <Typography>
+            {r.squareness.mmPerMetre.toFixed(3)} mm/m · {r.outOfSquareArcsec.toFixed(0)}″ · diagonal {r.squareness.longDiagonal} long by {r.squareness.diagonalDifferenceMm.toFixed(2)} mm
+          </Typography>
+          <Typography variant="body2" color="text.secondary">Target {showTarget(cut.targets.squareness)}</Typography>
+        </Box>
+        <Box>
+          <Typography variant="h5" component="h4">Ovality: {showLength(r.ovality, 'mm', 2)} · {POINTS_TO[r.ovalityPointsTo]}</Typography>
+          <Typography variant="body2">{r.ovalityExplanation}</Typography>
+        </Box>
+      </Box>
+      <TableContainer>
+        <Table size="small" aria-label="Part sizes">
+          <TableHead>
+            <TableRow>
+              <TableCell>Part size</TableCell>
+              <TableCell align="right">Programmed</TableCell>
+              <TableCell align="right">As cut{cut.measured.kerf ? ' (kerf allowed for)' : ''}</TableCell>
+              <TableCell align="right">Deviation</TableCell>
+              <TableCell align="right">Tolerance</TableCell>
+              <TableCell>Result</TableCell>
+            </TableRow>
+          </TableHead>
+          <TableBody>
+            {r.parts.map((p) => (
+              <TableRow key={p.part}>
+                <TableCell>{p.label}</TableCell>
+                <TableCell align="right">{showLength(p.nominalMm, 'mm', 2)}</TableCell>
+                <TableCell align="right">{showLength(p.afterKerfMm, 'mm', 2)}</TableCell>
+                <TableCell align="right" sx={{ color: p.within ? 'inherit' : 'error.main', fontWeight: p.within ? 400 : 600 }}>{showSigned(p.deviationMm, 'mm', 2)}</TableCell>
+                <TableCell align="right">± {showLength(p.toleranceMm, 'mm', 2)}</TableCell>
+                <TableCell>{p.within ? 'within' : 'outside'}</TableCell>
+              </TableRow>
+            ))}
+          </TableBody>
+        </Table>
+      </TableContainer>
+      <Typography variant="body2" color="text.secondary">
+        Tolerance ± {showTarget(tol)} · source: {tol.source ?? 'the machine’s target set'}
+      </Typography>
+      {[...r.notes, ...r.squareness.warnings].map((n) => (
+        <Alert key={n} severity="info">{n[0].toUpperCase() + n.slice(1)}.</Alert>
+      ))}
+    </Stack>
+  );
+}

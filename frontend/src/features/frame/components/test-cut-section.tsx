@@ -1,0 +1,43 @@
+import { useState } from 'react';
+import { Box, MenuItem, Paper, TextField, Typography } from '@mui/material';
+import { LoadingState } from '../../../components/states/loading-state';
+import { ErrorState } from '../../../components/states/error-state';
+import { useTestCuts } from '../api/get-test-cuts';
+import { showDate } from '../utils/format';
+import { TestCutForm } from './test-cut-form';
+import { TestCutResults } from './test-cut-results';
+
+/** The acceptance cut: entry for technicians, results for everyone, earlier cuts to compare. */
+export function TestCutSection({ machineId, canRecord }: { machineId: string; canRecord: boolean }) {
+  const cuts = useTestCuts(machineId);
+  const [selectedId, setSelectedId] = useState<string | null>(null);
+  if (cuts.isPending) return <LoadingState label="Loading test cuts…" />;
+  if (cuts.isError) return <ErrorState error={cuts.error} onRetry={() => cuts.refetch()} />;
+  const list = cuts.data;
+  const cut = list.find((c) => c.id === selectedId) ?? list[0];
+  return (
+    <Paper sx={{ p: { xs: 2, md: 2.5 } }} component="section" aria-labelledby="test-cut-title">
+      <Typography variant="h3" id="test-cut-title" gutterBottom>
+        Test cut
+      </Typography>
+      <Typography color="text.secondary" sx={{ mb: 2 }}>
+        Cut a large square with a circle in it and measure it: the outside sizes give each axis's scale (steps per mm), the diagonals squareness, and the circle's two diameters show an oval from backlash or unequal scale. Part sizes are judged against the ± tolerance of the target set.
+      </Typography>
+      <Box sx={{ display: 'grid', gap: 3, gridTemplateColumns: { xs: '1fr', lg: canRecord ? 'minmax(320px, 5fr) 7fr' : '1fr' } }}>
+        {canRecord && <TestCutForm machineId={machineId} onSaved={(c) => setSelectedId(c.id)} />}
+        <Box sx={{ minWidth: 0 }}>
+          {cut ? <TestCutResults cut={cut} /> : <Typography color="text.secondary">No test cut yet.</Typography>}
+          {list.length > 1 && (
+            <TextField select label="Earlier cuts" value={cut?.id ?? ''} onChange={(e) => setSelectedId(e.target.value)} sx={{ mt: 2, minWidth: 280 }}>
+              {list.map((c) => (
+                <MenuItem key={c.id} value={c.id}>
+                  {showDate(c.recordedAt)} · {c.status === 'within-target' ? 'within target' : 'outside target'}
+                </MenuItem>
+              ))}
+            </TextField>
+          )}
+        </Box>
+      </Box>
+    </Paper>
+  );
+}

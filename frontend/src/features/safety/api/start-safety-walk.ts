@@ -1,0 +1,12 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { api } from '../../../lib/api-client';
+import { safetyKeys, type SafetyWalk } from '../types';
+
+/** A fresh walk, for a re-check or once the approved one is locked. */
+export function useStartSafetyWalk(machineId: string) {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: () => api.post<SafetyWalk>(`/machines/${machineId}/safety-walk/rounds`),
+    onSuccess: (walk) => qc.setQueryData(safetyKeys.walk(machineId), walk),
+  });
+}

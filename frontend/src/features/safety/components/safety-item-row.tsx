@@ -1,0 +1,61 @@
+import { useEffect, useState } from 'react';
+import { Box, Chip, TextField, ToggleButton, ToggleButtonGroup, Typography } from '@mui/material';
+import { palette } from '../../../theme/theme';
+import { ANSWER_LABELS, type SafetyAnswer, type WalkItem } from '../types';
+
+const COLOURS: Record<SafetyAnswer, string> = { yes: palette.within, no: palette.outside, na: palette.notStarted };
+
+/** One item of the walk: its answer (yes / no / not applicable), a note, who answered and when. */
+export function SafetyItemRow({ item, canAnswer, busy, onAnswer }: { item: WalkItem; canAnswer: boolean; busy: boolean; onAnswer: (answer: SafetyAnswer, note: string) => void }) {
+  const a = item.answer;
+  const [note, setNote] = useState(a?.note ?? '');
+  useEffect(() => setNote(a?.note ?? ''), [a?.note]);
+  const isNo = a?.answer === 'no';
+
+  return (
+    <Box
+      role="group"
+      aria-label={item.text}
+      sx={{ py: 1.5, px: 1.5, borderLeft: '4px solid', borderColor: a ? COLOURS[a.answer] : '#d8d3c7', bgcolor: isNo ? 'rgba(179, 38, 30, 0.06)' : 'transparent', borderRadius: '0 4px 4px 0' }}
+    >
+      <Box sx={{ display: 'flex', gap: 2, flexWrap: 'wrap', alignItems: 'flex-start' }}>
+        <Box sx={{ flex: '1 1 300px', minWidth: 0 }}>
+          <Typography>
+            {item.text}
+            {!item.builtIn && <Chip size="small" label="Workshop item" variant="outlined" sx={{ ml: 1, height: 20 }} />}
+          </Typography>
+          <Typography variant="body2" color="text.secondary" sx={{ mt: 0.25 }}>
+            {a ? `${ANSWER_LABELS[a.answer]} · ${a.answeredBy.name} · ${new Date(a.answeredAt).toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' })}` : 'Not answered yet'}
+          </Typography>
+          {isNo && <Chip size="small" label="Blocks approval" sx={{ mt: 0.5, bgcolor: palette.outside, color: '#fff', fontWeight: 600 }} />}
+        </Box>
+        <ToggleButtonGroup
+          exclusive
+          size="small"
+          value={a?.answer ?? null}
+          disabled={!canAnswer || busy}
+          onChange={(_, v: SafetyAnswer | null) => v && onAnswer(v, note)}
+          aria-label="Answer"
+        >
+          {(['yes', 'no', 'na'] as const).map((v) => (
+            <ToggleButton key={v} value={v} sx={{ px: 1.5, '&.Mui-selected': { bgcolor: COLOURS[v], color: '#fff', '&:hover': { bgcolor: COLOURS[v] } } }}>
+              {ANSWER_LABELS[v]}
+            </ToggleButton>
+          ))}
+        </ToggleButtonGroup>
+      </Box>
+      {(canAnswer || a?.note) && (
+        <TextField
+          label="Note"
+          value={note}
+          onChange={(e) => setNote(e.target.value)}
+          onBlur={() => a && note.trim() !== a.note && onAnswer(a.answer, note)}
+          disabled={!canAnswer || busy}
+          fullWidth
+          sx={{ mt: 1 }}
+          helperText={canAnswer && !a ? 'Saved with the answer' : undefined}
+        />
+      )}
+    </Box>
+  );
+}
