@@ -22,6 +22,7 @@ const router = createBrowserRouter([
       { path: '/machines/:machineId/rails/:railId', lazy: page(() => import('./routes/rail')) },
       { path: paths.calculators, lazy: page(() => import('./routes/calculators')) },
       { path: '/machines/:machineId/rails/:railId/bolt-down', lazy: page(() => import('./routes/bolt-down')) },
+      { path: '/machines/:machineId/axes/:axisId', lazy: page(() => import('./routes/axis')) },
       { path: paths.outbox, lazy: page(() => import('./routes/outbox')) },
       { path: '*', Component: NotFoundRoute },
     ],

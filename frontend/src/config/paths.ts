@@ -6,6 +6,7 @@ export const paths = {
   machine: (id: string) => `/machines/${id}`,
   rail: (machineId: string, railId: string) => `/machines/${machineId}/rails/${railId}`,
   boltDown: (machineId: string, railId: string) => `/machines/${machineId}/rails/${railId}/bolt-down`,
+  axis: (machineId: string, axisId: string) => `/machines/${machineId}/axes/${axisId}`,
   calculators: '/calculators',
   targetSets: '/target-sets',
   people: '/people',

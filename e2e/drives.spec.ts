@@ -1,0 +1,175 @@
+import { expect, test, type APIRequestContext, type Locator, type Page } from '@playwright/test';
+import { readFile } from 'node:fs/promises';
+import { DEMO, signInAs, snap } from './support/session';
+
+const TABLET = { width: 820, height: 1180 };
+
+/** A fresh router with one 16 × 5 screw axis, so the demo machines stay as they are for other specs. */
+async function newAxis(request: APIRequestContext) {
+  const machine = await request.post('/api/machines', { data: { name: `Drives test ${Date.now()}`, kind: 'router', workArea: { x: 900, y: 600 } } });
+  expect(machine.status()).toBe(201);
+  const machineId = (await machine.json()).id as string;
+  const axis = await request.post(`/api/machines/${machineId}/axes`, {
+    data: {
+      name: 'X',
+      drive: { type: 'screw', lead: 5, nominalDiameter: 16, rootDiameter: 12.9, unsupportedLength: 1050, mounting: 'fixed-supported' },
+      motorStepsPerRev: 200,
+      microsteps: 16,
+      stepsPerMm: 640,
+      maxFeedRate: 5000,
+      measuredTravelMm: 926,
+    },
+  });
+  expect(axis.status()).toBe(201);
+  return { machineId, axisId: (await axis.json()).id as string };
+}
+
+/** What a spreadsheet puts on the clipboard, delivered as a paste event to a field. */
+async function paste(field: Locator, text: string) {
+  await field.focus();
+  await field.evaluate((el, t) => {
+    const data = new DataTransfer();
+    data.setData('text/plain', t);
+    el.dispatchEvent(new ClipboardEvent('paste', { clipboardData: data, bubbles: true, cancelable: true }));
+  }, text);
+}
+
+async function openDrivesTab(page: Page, machineName: string) {
+  await page.goto('/machines');
+  await page.getByRole('link', { name: machineName }).first().click();
+  await page.getByRole('tab', { name: 'Drives' }).click();
+  await expect(page.getByRole('table', { name: 'Axes' })).toBeVisible();
+}
+
+test.describe('drives', () => {
+  test('the Drives tab lists each axis with its drive, steps per mm and checks; Y2 needs correction', async ({ page }) => {
+    await signInAs(page, DEMO.viewer);
+    await openDrivesTab(page, 'Big plasma table');
+    const axes = page.getByRole('table', { name: 'Axes' });
+    const y2 = axes.getByRole('row').filter({ hasText: /^Y2/ });
+    await expect(y2).toContainText('Rack and pinion, module 1.5, 20-tooth pinion');
+    await expect(y2).toContainText('50.9296 steps/mm');
+    await expect(y2.getByText('Outside target')).toBeVisible();
+    await expect(axes.getByRole('row').filter({ hasText: /^Z/ })).toContainText('Screw Ø16 mm, lead 5 mm');
+    await expect(page.getByRole('region', { name: 'Travel envelope' })).toContainText('3000 × 1500 mm');
+    // Viewers read but do not add axes.
+    await expect(page.getByRole('button', { name: 'Add axis' })).toHaveCount(0);
+    await snap(page, 'drives-tab-plasma-desktop');
+    await page.setViewportSize(TABLET);
+    await snap(page, 'drives-tab-plasma-tablet');
+
+    await page.setViewportSize({ width: 1366, height: 900 });
+    await axes.getByRole('link', { name: 'Y2' }).click();
+    await expect(page.getByRole('heading', { name: 'Axis Y2' })).toBeVisible();
+    await expect(page.getByRole('region', { name: 'Travel trial result' })).toContainText('-0.201 %');
+    await expect(page.getByRole('button', { name: /^Apply/ })).toHaveCount(0);
+    await expect(page.getByRole('region', { name: 'Speed check' })).toContainText('A rack-and-pinion drive has no screw to whirl');
+  });
+
+  test('a technician enters a travel trial, applies the correction, and enters a 5-run repeat-and-reverse run by paste', async ({ page }) => {
+    await signInAs(page, DEMO.technician);
+    const { machineId, axisId } = await newAxis(page.request);
+    await page.goto(`/machines/${machineId}/axes/${axisId}`);
+    await expect(page.getByRole('heading', { name: 'Axis X' })).toBeVisible();
+    await expect(page.getByText('Theoretical from the drive')).toBeVisible();
+
+    // Travel trial: type the first move, Enter to the next row, paste the rest.
+    await page.getByLabel('Commanded move 1').fill('200');
+    await page.getByLabel('Measured move 1').fill('199.8');
+    await page.getByLabel('Measured move 1').press('Enter');
+    await expect(page.getByLabel('Measured move 2')).toBeFocused();
+    await paste(page.getByLabel('Commanded move 2'), '400\t399.6\n800\t799.2\n');
+    await expect(page.getByLabel('Measured move 3')).toHaveValue('799.2');
+    await page.getByRole('button', { name: 'Record trial' }).click();
+    const trial = page.getByRole('region', { name: 'Travel trial result' });
+    await expect(trial).toContainText('-0.100 %');
+    await expect(trial.getByText('Outside target')).toBeVisible();
+    // 640 × 200 ÷ 199.8 = 640.6406 steps/mm
+    await expect(trial.getByLabel('Corrected steps per mm')).toHaveText('640.6406');
+    await expect(trial.getByRole('figure', { name: /Error against commanded distance/ })).toBeVisible();
+    await snap(page, 'axis-travel-trial-desktop');
+
+    await trial.getByRole('button', { name: 'Apply 640.6406 steps/mm to axis X' }).click();
+    await expect(trial.getByText(/Applied on .* Set 640.6406 steps\/mm in the controller/)).toBeVisible();
+    const history = page.getByRole('table', { name: 'Steps per mm history' });
+    await expect(history).toContainText('640 steps/mm');
+    await expect(history).toContainText('640.6406 steps/mm');
+    await expect(history).toContainText('Travel trial applied');
+    await expect(page.getByText('Steps per mm in use').locator('..')).toContainText('640.6406 steps/mm');
+
+    // Repeat-and-reverse: µm, targets pasted into the header row, the 10 × 5 block into the first cell.
+    await page.getByLabel('Deviations in').click();
+    await page.getByRole('option', { name: 'µm' }).click();
+    await paste(page.getByLabel('Target 1 (mm)'), '15\t236.2\t452.9\t674.3\t895');
+    await expect(page.getByLabel('Target 5 (mm)')).toHaveValue('895');
+    const block = [
+      [6, 11, 9, 5, 4], [-2, 2, 1, -3, -4], [7, 12, 9, 4, 5], [-1, 3, 0, -4, -3], [5, 10, 8, 5, 3],
+      [-2, 2, 1, -2, -4], [6, 12, 10, 4, 4], [-1, 3, 2, -3, -3], [6, 11, 9, 5, 4], [-2, 2, 1, -3, -4],
+    ];
+    await paste(page.getByLabel('Up 1, target 1'), block.map((r) => r.join('\t')).join('\n'));
+    await expect(page.getByLabel('Down 5, target 5')).toHaveValue('-4');
+    // Enter moves down a column.
+    await page.getByLabel('Up 1, target 2').press('Enter');
+    await expect(page.getByLabel('Down 1, target 2')).toBeFocused();
+    await snap(page, 'axis-run-grid-desktop');
+    await page.getByRole('button', { name: 'Record run' }).click();
+    const run = page.getByRole('region', { name: 'Repeat-and-reverse result' });
+    await expect(run.getByText('Positioning accuracy A')).toBeVisible();
+    await expect(run).toContainText('µm');
+    await expect(run.getByText('Within target')).toBeVisible();
+    await expect(run.getByRole('figure', { name: /Mean deviations up and down with ±2s bands/ })).toBeVisible();
+    await expect(run.locator('.recharts-line').first()).toBeVisible();
+    await snap(page, 'axis-run-result-desktop');
+    await page.setViewportSize(TABLET);
+    await snap(page, 'axis-page-tablet');
+  });
+
+  test('the test program downloads as a G-code file with its parameters and the caution', async ({ page }) => {
+    await signInAs(page, DEMO.technician);
+    const { machineId, axisId } = await newAxis(page.request);
+    await page.goto(`/machines/${machineId}/axes/${axisId}`);
+    await page.getByRole('button', { name: 'Download test program' }).click();
+    const dialog = page.getByRole('dialog');
+    await expect(dialog).toContainText('plasma source or torch off');
+    await dialog.getByLabel('Targets (mm, comma-separated)').fill('20, 300, 610, 880');
+    await dialog.getByLabel('Feed rate').fill('900');
+    await snap(page, 'axis-test-program-dialog-desktop');
+    const [download] = await Promise.all([page.waitForEvent('download'), dialog.getByRole('button', { name: 'Download' }).click()]);
+    expect(download.suggestedFilename()).toMatch(/-x-repeat-and-reverse\.nc$/);
+    const text = await readFile((await download.path())!, 'utf8');
+    expect(text).toContain('G21');
+    expect(text).toContain('(Targets mm: 20, 300, 610, 880)');
+    expect(text).toContain('G1 X880.000 F900');
+    await expect(dialog).toContainText('downloaded');
+    // A bad target list is answered in words.
+    await dialog.getByLabel('Targets (mm, comma-separated)').fill('300, 20');
+    await dialog.getByRole('button', { name: 'Download' }).click();
+    await expect(dialog.getByRole('alert').filter({ hasText: 'targets must rise along the axis' })).toBeVisible();
+  });
+
+  test('a technician adds an axis: the drive type switches the fields and the theoretical value shows', async ({ page }) => {
+    await signInAs(page, DEMO.technician);
+    const machine = await page.request.post('/api/machines', { data: { name: `Axis form ${Date.now()}`, kind: 'plasma', workArea: { x: 3000, y: 1500 } } });
+    const machineId = (await machine.json()).id as string;
+    await page.goto(`/machines/${machineId}?tab=drives`);
+    await page.getByRole('button', { name: 'Add axis' }).click();
+    const dialog = page.getByRole('dialog');
+    await dialog.getByLabel('Axis name').fill('Y1');
+    await dialog.getByRole('button', { name: 'Rack and pinion' }).click();
+    await expect(dialog.getByLabel('Lead')).toHaveCount(0);
+    await dialog.getByLabel('Pinion module').fill('1.5');
+    await dialog.getByLabel('Pinion teeth').fill('20');
+    await dialog.getByLabel('Microsteps').fill('8');
+    await dialog.getByLabel('Gear ratio').fill('3');
+    // π × 1.5 × 20 = 94.2478 mm per turn; 200 × 8 × 3 ÷ 94.2478 = 50.9296 steps/mm
+    await expect(dialog.getByTestId('theoretical-steps')).toHaveText('50.9296 steps/mm');
+    await dialog.getByRole('button', { name: 'Use the theoretical value' }).click();
+    await dialog.getByLabel('Measured travel').fill('1540');
+    await snap(page, 'axis-form-rack-desktop');
+    await dialog.getByRole('button', { name: 'Add axis' }).click();
+    await expect(dialog).toBeHidden();
+    const row = page.getByRole('table', { name: 'Axes' }).getByRole('row').filter({ hasText: /^Y1/ });
+    await expect(row).toContainText('Rack and pinion, module 1.5, 20-tooth pinion');
+    await expect(row.getByText('Does not apply')).toBeVisible();
+  });
+});

@@ -1,0 +1,69 @@
+import { useState } from 'react';
+import { Link as RouterLink, useParams } from 'react-router-dom';
+import { Box, Button, Link, Stack } from '@mui/material';
+import ArrowBack from '@mui/icons-material/ArrowBack';
+import EditOutlined from '@mui/icons-material/EditOutlined';
+import FileDownloadOutlined from '@mui/icons-material/FileDownloadOutlined';
+import { PageHeader } from '../../components/layout/page-header';
+import { ErrorState } from '../../components/states/error-state';
+import { LoadingState } from '../../components/states/loading-state';
+import { paths } from '../../config/paths';
+import { useMe } from '../../features/auth/api/get-me';
+import { canCalibrate } from '../../features/auth/types';
+import { useMachine } from '../../features/machines/api/get-machine';
+import { useAxis } from '../../features/drives/api/get-axis';
+import { AxisFormDialog } from '../../features/drives/components/axis-form-dialog';
+import { AxisSummary } from '../../features/drives/components/axis-summary';
+import { PositioningSection } from '../../features/drives/components/positioning-section';
+import { SpeedCheckCard } from '../../features/drives/components/speed-check-card';
+import { TestProgramDialog } from '../../features/drives/components/test-program-dialog';
+import { TravelTrialSection } from '../../features/drives/components/travel-trial-section';
+
+export default function AxisRoute() {
+  const { machineId = '', axisId = '' } = useParams();
+  const axis = useAxis(axisId);
+  const machine = useMachine(machineId);
+  const me = useMe();
+  const mayRecord = canCalibrate(me.data?.role);
+  const [editing, setEditing] = useState(false);
+  const [program, setProgram] = useState(false);
+
+  if (axis.isPending) return <LoadingState label="Opening the axis…" />;
+  if (axis.isError) return <ErrorState error={axis.error} onRetry={() => axis.refetch()} />;
+  const a = axis.data;
+  return (
+    <>
+      <Link component={RouterLink} to={`${paths.machine(machineId)}?tab=drives`} sx={{ display: 'inline-flex', alignItems: 'center', gap: 0.5, mb: 1 }}>
+        <ArrowBack fontSize="small" /> {machine.data?.name ?? 'Machine file'} · Drives
+      </Link>
+      <PageHeader
+        title={`Axis ${a.name}`}
+        subtitle={a.driveSummary}
+        actions={
+          <>
+            <Button variant="outlined" startIcon={<FileDownloadOutlined />} onClick={() => setProgram(true)}>
+              Download test program
+            </Button>
+            {mayRecord && (
+              <Button variant="outlined" startIcon={<EditOutlined />} onClick={() => setEditing(true)} disabled={a.locked}>
+                Edit axis
+              </Button>
+            )}
+          </>
+        }
+      />
+      <Stack spacing={3}>
+        <AxisSummary axis={a} />
+        <Box sx={{ display: 'grid', gridTemplateColumns: { xs: '1fr', lg: '2fr 1fr' }, gap: 3, alignItems: 'start' }}>
+          <TravelTrialSection axis={a} mayRecord={mayRecord} />
+          <Box sx={{ pt: { lg: 6 } }}>
+            <SpeedCheckCard axis={a} />
+          </Box>
+        </Box>
+        <PositioningSection axis={a} mayRecord={mayRecord} />
+      </Stack>
+      {mayRecord && <AxisFormDialog machineId={machineId} axis={a} open={editing} onClose={() => setEditing(false)} />}
+      <TestProgramDialog axis={a} open={program} onClose={() => setProgram(false)} />
+    </>
+  );
+}

@@ -1,0 +1,19 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { api } from '../../../lib/api-client';
+import type { LengthUnit } from '../../../lib/units';
+import { driveKeys, type PositioningRun } from '../types';
+
+export interface PositioningRunInput {
+  unit: LengthUnit;
+  targets: number[];
+  runs: { direction: 'up' | 'down'; deviations: number[] }[];
+  notes?: string;
+}
+
+export function useRecordPositioningRun(axisId: string) {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (input: PositioningRunInput) => api.post<PositioningRun>(`/axes/${axisId}/positioning-runs`, input),
+    onSuccess: () => Promise.all([qc.invalidateQueries({ queryKey: driveKeys.all }), qc.invalidateQueries({ queryKey: ['machines'] })]),
+  });
+}

@@ -1,0 +1,20 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { api } from '../../../lib/api-client';
+import type { LengthUnit } from '../../../lib/units';
+import { driveKeys, type TravelTrial } from '../types';
+
+export interface TravelTrialInput {
+  unit: LengthUnit;
+  stepsPerMmUsed?: number;
+  moves: { commanded: number; measured: number }[];
+  throughOrigin?: boolean;
+  notes?: string;
+}
+
+export function useRecordTravelTrial(axisId: string) {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (input: TravelTrialInput) => api.post<TravelTrial>(`/axes/${axisId}/travel-trials`, input),
+    onSuccess: () => Promise.all([qc.invalidateQueries({ queryKey: driveKeys.all }), qc.invalidateQueries({ queryKey: ['machines'] })]),
+  });
+}

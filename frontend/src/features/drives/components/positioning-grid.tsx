@@ -1,0 +1,225 @@
+import { useRef, useState } from 'react';
+import { Alert, Box, Button, MenuItem, Paper, Stack, TextField, Typography } from '@mui/material';
+import UploadFileOutlined from '@mui/icons-material/UploadFileOutlined';
+import { UNIT_LABELS, type LengthUnit } from '../../../lib/units';
+import { useRecordPositioningRun } from '../api/record-positioning-run';
+import type { Axis, PositioningRun } from '../types';
+import { errorText } from '../utils/format';
+import { parseRunsCsv, splitRows } from '../utils/parse-grid';
+import { pasteBlock, resize, rowLabel, type RowOrder } from '../utils/run-grid';
+import { numberOf } from './number-input';
+import { UnitPicker } from './unit-picker';
+
+const cellSx = { width: 92, '& input': { textAlign: 'right', py: 0.75, px: 1 } };
+
+/** A spread of targets over the measured travel, as a starting point for the header row. */
+function startTargets(axis: Axis): string[] {
+  if (!axis.measuredTravelMm) return ['', '', '', '', ''];
+  const from = 10;
+  const to = axis.measuredTravelMm - 10;
+  return [0, 1, 2, 3, 4].map((i) => String(Math.round(from + ((to - from) * i) / 4)));
+}
+
+/**
+ * Repeat-and-reverse entry: targets as columns, runs as rows (up and down). Enter moves down a
+ * column, Tab along a row; a block pasted from a spreadsheet fills from the cell it lands in; a
+ * CSV file may carry a "target" header row and "up"/"down" at the start of each row.
+ */
+export function PositioningGrid({ axis, onRecorded }: { axis: Axis; onRecorded: (r: PositioningRun) => void }) {
+  const [unit, setUnit] = useState<LengthUnit>('mm');
+  const [runs, setRuns] = useState(5);
+  const [order, setOrder] = useState<RowOrder>('alternate');
+  const [targets, setTargets] = useState<string[]>(() => startTargets(axis));
+  const [cells, setCells] = useState<string[][]>(() => resize([], 10, 5));
+  const [notes, setNotes] = useState('');
+  const [problems, setProblems] = useState<string[]>([]);
+  const file = useRef<HTMLInputElement>(null);
+  const record = useRecordPositioningRun(axis.id);
+  const cols = targets.length;
+  const rows = runs * 2;
+
+  const setRunCount = (n: number) => {
+    setRuns(n);
+    setCells((c) => resize(c, n * 2, cols));
+  };
+  const setColCount = (n: number) => {
+    setTargets((t) => Array.from({ length: n }, (_, i) => t[i] ?? ''));
+    setCells((c) => resize(c, rows, n));
+  };
+
+  const focusCell = (r: number, c: number) => setTimeout(() => document.querySelector<HTMLInputElement>(`[data-cell="${r}-${c}"]`)?.focus());
+  const onKeyDown = (r: number, c: number) => (e: React.KeyboardEvent) => {
+    if (e.key !== 'Enter') return;
+    e.preventDefault();
+    const next = e.shiftKey ? r - 1 : r + 1;
+    if (next < -1) return;
+    if (next >= rows) focusCell(0, Math.min(c + 1, cols - 1));
+    else focusCell(next, c);
+  };
+
+  const onPaste = (r: number, c: number) => (e: React.ClipboardEvent) => {
+    const text = e.clipboardData.getData('text');
+    if (!/[\t\n;,]/.test(text.trim())) return;
+    e.preventDefault();
+    const block = splitRows(text);
+    if (r === -1) {
+      // Pasted into the targets row: the first line is targets, any further lines are runs.
+      const [head, ...rest] = block;
+      const t = [...targets];
+      head.forEach((v, i) => (t[c + i] = v));
+      setTargets(t);
+      if (rest.length) applyBlock(rest, 0, c, t.length);
+      else setCells((x) => resize(x, rows, t.length));
+      return;
+    }
+    applyBlock(block, r, c, cols);
+  };
+
+  const applyBlock = (block: string[][], r: number, c: number, colCount: number) => {
+    const next = pasteBlock(resize(cells, rows, colCount), block, r, c);
+    const runCount = Math.ceil(next.length / 2);
+    if (next[0].length > colCount) setTargets((t) => Array.from({ length: next[0].length }, (_, i) => t[i] ?? ''));
+    setRuns(runCount);
+    setCells(resize(next, runCount * 2, next[0].length));
+  };
+
+  const onFile = async (f: File | undefined) => {
+    if (!f) return;
+    const parsed = parseRunsCsv(await f.text());
+    setProblems(parsed.problems);
+    if (parsed.problems.length) return;
+    const t = parsed.targets?.map(String) ?? targets;
+    const ups = parsed.rows.filter((x) => x.direction === 'up');
+    const downs = parsed.rows.filter((x) => x.direction === 'down');
+    const directed = ups.length + downs.length === parsed.rows.length && ups.length > 0;
+    const runCount = directed ? Math.max(ups.length, downs.length) : Math.ceil(parsed.rows.length / 2);
+    const width = Math.max(t.length, ...parsed.rows.map((x) => x.values.length));
+    const grid = resize([], runCount * 2, width);
+    if (directed) {
+      for (let i = 0; i < runCount * 2; i++) {
+        const { direction, run } = rowLabel(i, runCount, order);
+        const src = (direction === 'up' ? ups : downs)[run - 1];
+        if (src) grid[i] = Array.from({ length: width }, (_, c) => (src.values[c] === null || src.values[c] === undefined ? '' : String(src.values[c])));
+      }
+    } else parsed.rows.forEach((x, i) => (grid[i] = Array.from({ length: width }, (_, c) => (x.values[c] == null ? '' : String(x.values[c])))));
+    setTargets(Array.from({ length: width }, (_, i) => t[i] ?? ''));
+    setRuns(runCount);
+    setCells(grid);
+  };
+
+  const allNumbers = targets.every((t) => numberOf(t) !== undefined) && cells.every((row) => row.every((v) => numberOf(v) !== undefined));
+  const submit = () => {
+    setProblems([]);
+    record.mutate(
+      {
+        unit,
+        targets: targets.map(Number),
+        runs: cells.map((row, i) => ({ direction: rowLabel(i, runs, order).direction, deviations: row.map(Number) })),
+        notes: notes.trim() || undefined,
+      },
+      { onSuccess: (r) => onRecorded(r) },
+    );
+  };
+  const empty = cells.flat().filter((v) => v.trim() === '').length;
+
+  return (
+    <Paper sx={{ p: 2.5 }}>
+      <Typography variant="h4" component="h3" gutterBottom>
+        Record a repeat-and-reverse run
+      </Typography>
+      <Typography color="text.secondary" sx={{ mb: 2 }}>
+        Approach every target {runs} times moving up and {runs} times moving down (ISO 230-2 asks for five each way) and enter the deviation, actual − target, read at each.
+      </Typography>
+      <Stack spacing={2}>
+        <Box sx={{ display: 'flex', gap: 2, flexWrap: 'wrap', alignItems: 'center' }}>
+          <UnitPicker value={unit} onChange={setUnit} label="Deviations in" />
+          <TextField select label="Runs each way" value={runs} onChange={(e) => setRunCount(Number(e.target.value))} sx={{ width: 140 }}>
+            {[2, 3, 4, 5, 6, 7, 8, 9, 10].map((n) => (
+              <MenuItem key={n} value={n}>
+                {n}
+              </MenuItem>
+            ))}
+          </TextField>
+          <TextField select label="Targets" value={cols} onChange={(e) => setColCount(Number(e.target.value))} sx={{ width: 110 }}>
+            {Array.from({ length: 20 }, (_, i) => i + 2).map((n) => (
+              <MenuItem key={n} value={n}>
+                {n}
+              </MenuItem>
+            ))}
+          </TextField>
+          <TextField select label="Row order" value={order} onChange={(e) => setOrder(e.target.value as RowOrder)} sx={{ width: 230 }}>
+            <MenuItem value="alternate">Up, down, up, down… (as run)</MenuItem>
+            <MenuItem value="grouped">All up runs, then all down</MenuItem>
+          </TextField>
+          <Button startIcon={<UploadFileOutlined />} onClick={() => file.current?.click()}>
+            Load a CSV file
+          </Button>
+          <input ref={file} type="file" accept=".csv,.txt,text/csv,text/plain" hidden aria-label="CSV file of runs" onChange={(e) => onFile(e.target.files?.[0]).finally(() => (e.target.value = ''))} />
+        </Box>
+        {problems.length > 0 && <Alert severity="error">{problems.join('; ')}</Alert>}
+        {record.error && <Alert severity="error">{errorText(record.error)}</Alert>}
+        <Box sx={{ overflowX: 'auto', pb: 1 }}>
+          <Box component="table" role="grid" aria-label="Repeat-and-reverse readings" sx={{ borderCollapse: 'collapse', '& th, & td': { p: 0.25 }, '& th': { fontWeight: 500, color: 'text.secondary', textAlign: 'left', whiteSpace: 'nowrap', pr: 1 } }}>
+            <thead>
+              <tr>
+                <th scope="col">Target (mm)</th>
+                {targets.map((t, c) => (
+                  <th key={c} scope="col">
+                    <TextField
+                      value={t}
+                      onChange={(e) => setTargets((x) => x.map((v, i) => (i === c ? e.target.value.replace(',', '.') : v)))}
+                      onPaste={onPaste(-1, c)}
+                      onKeyDown={onKeyDown(-1, c)}
+                      error={t.trim() !== '' && numberOf(t) === undefined}
+                      sx={{ ...cellSx, '& input': { ...cellSx['& input'], fontWeight: 600 } }}
+                      slotProps={{ htmlInput: { inputMode: 'decimal', 'data-cell': `-1-${c}`, 'aria-label': `Target ${c + 1} (mm)` } }}
+                    />
+                  </th>
+                ))}
+              </tr>
+            </thead>
+            <tbody>
+              {cells.map((row, r) => {
+                const { direction, run } = rowLabel(r, runs, order);
+                return (
+                  <tr key={r}>
+                    <th scope="row" style={{ color: direction === 'up' ? '#1d4f4a' : '#a4522f' }}>
+                      {direction === 'up' ? '↑ Up' : '↓ Down'} {run} ({UNIT_LABELS[unit]})
+                    </th>
+                    {row.map((v, c) => (
+                      <td key={c}>
+                        <TextField
+                          value={v}
+                          onChange={(e) => setCells((x) => x.map((line, i) => (i === r ? line.map((old, j) => (j === c ? e.target.value.replace(',', '.') : old)) : line)))}
+                          onPaste={onPaste(r, c)}
+                          onKeyDown={onKeyDown(r, c)}
+                          error={v.trim() !== '' && numberOf(v) === undefined}
+                          sx={cellSx}
+                          slotProps={{ htmlInput: { inputMode: 'decimal', 'data-cell': `${r}-${c}`, 'aria-label': `${direction === 'up' ? 'Up' : 'Down'} ${run}, target ${c + 1}` } }}
+                        />
+                      </td>
+                    ))}
+                  </tr>
+                );
+              })}
+            </tbody>
+          </Box>
+        </Box>
+        <Typography variant="body2" color="text.secondary">
+          Enter moves down a column and Tab along a row. Paste a block copied from a spreadsheet into the first cell; a CSV may start with a row of targets and each row with up or down.
+        </Typography>
+        <TextField label="Notes (instrument, temperature)" value={notes} onChange={(e) => setNotes(e.target.value)} />
+        <Box sx={{ display: 'flex', gap: 2, alignItems: 'center', flexWrap: 'wrap' }}>
+          <Button variant="contained" onClick={submit} disabled={!allNumbers || record.isPending}>
+            Record run
+          </Button>
+          {!allNumbers && (
+            <Typography variant="body2" color="text.secondary">
+              {empty ? `${empty} reading${empty === 1 ? '' : 's'} still to enter` : 'Every cell needs a number'}
+            </Typography>
+          )}
+        </Box>
+      </Stack>
+    </Paper>
+  );
+}

@@ -1,0 +1,80 @@
+import { Alert, Box, Button, Paper, Stack, Typography } from '@mui/material';
+import { TravelErrorChart } from '../../../components/charts/travel-error-chart';
+import { fromMm, UNIT_LABELS, type LengthUnit } from '../../../lib/units';
+import { useApplyTravelTrial } from '../api/apply-travel-trial';
+import type { Axis, TravelTrial } from '../types';
+import { errorText, showDateTime, showLength, showPercent, showTarget } from '../utils/format';
+import { CopyValue } from './copy-value';
+import { DriveStatusChip } from './drive-status-chip';
+
+const CHART_UNIT: Record<LengthUnit, LengthUnit> = { mm: 'mm', um: 'um', in: 'thou', thou: 'thou' };
+
+function Figure({ label, value }: { label: string; value: string }) {
+  return (
+    <Box>
+      <Typography variant="body2" color="text.secondary">
+        {label}
+      </Typography>
+      <Typography sx={{ fontWeight: 600 }}>{value}</Typography>
+    </Box>
+  );
+}
+
+/** One travel trial's fit, its chart, and the corrected value ready to copy and apply. */
+export function TravelTrialResult({ axis, trial, mayApply }: { axis: Axis; trial: TravelTrial; mayApply: boolean }) {
+  const apply = useApplyTravelTrial(axis.id);
+  const r = trial.result;
+  const unit = CHART_UNIT[trial.unit];
+  const corrected = Number(r.correctedStepsPerMm.toFixed(4)).toString();
+  const differs = Math.abs(axis.stepsPerMm - Number(corrected)) > 1e-9;
+  return (
+    <Paper sx={{ p: 2.5 }} component="section" aria-label="Travel trial result">
+      <Box sx={{ display: 'flex', alignItems: 'center', gap: 1.5, flexWrap: 'wrap', mb: 1.5 }}>
+        <Typography variant="h4" component="h3" sx={{ flex: '1 1 auto' }}>
+          Travel trial of {showDateTime(trial.recordedAt)}
+        </Typography>
+        <DriveStatusChip status={trial.status} />
+      </Box>
+      <Box sx={{ display: 'grid', gridTemplateColumns: { xs: '1fr 1fr', md: 'repeat(5, 1fr)' }, gap: 2, mb: 2 }}>
+        <Figure label="Scale error" value={showPercent(r.errorPercent)} />
+        <Figure label="Target" value={`within ±${showTarget(trial.target)}`} />
+        <Figure label="Steps per mm used" value={`${trial.stepsPerMmUsed} steps/mm`} />
+        <Figure label="Offset of the fit" value={showLength(r.offset, unit)} />
+        <Figure label="Largest residual" value={showLength(r.residualMax, unit)} />
+      </Box>
+      <Stack spacing={1.5} sx={{ mb: 2 }}>
+        <CopyValue label="Corrected steps per mm" value={corrected} unit="steps/mm" />
+        {trial.appliedAt ? (
+          <Alert severity="success">
+            Applied on {showDateTime(trial.appliedAt)} by {trial.appliedBy}. Set {corrected} steps/mm in the controller, then record a confirming trial.
+          </Alert>
+        ) : (
+          mayApply &&
+          differs && (
+            <Box sx={{ display: 'flex', gap: 1.5, alignItems: 'center', flexWrap: 'wrap' }}>
+              <Button variant="contained" onClick={() => apply.mutate(trial.id)} disabled={apply.isPending}>
+                Apply {corrected} steps/mm to axis {axis.name}
+              </Button>
+              <Typography variant="body2" color="text.secondary">
+                The axis keeps {axis.stepsPerMm} steps/mm in its history.
+              </Typography>
+            </Box>
+          )
+        )}
+        {apply.error && <Alert severity="error">{errorText(apply.error)}</Alert>}
+      </Stack>
+      <TravelErrorChart
+        label={`Error against commanded distance, ${UNIT_LABELS[unit]}`}
+        unitLabel={UNIT_LABELS[unit]}
+        moves={r.moves.map((m) => ({ commanded: m.commanded, error: fromMm(m.error, unit) }))}
+        fit={{ slope: fromMm(r.scale - 1, unit), offset: fromMm(r.offset, unit) }}
+        height={260}
+      />
+      {trial.notes && (
+        <Typography variant="body2" color="text.secondary" sx={{ mt: 1 }}>
+          {trial.notes} — {trial.recordedBy}
+        </Typography>
+      )}
+    </Paper>
+  );
+}

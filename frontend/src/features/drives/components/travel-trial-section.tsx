@@ -1,0 +1,30 @@
+import { useState } from 'react';
+import { Stack, Typography } from '@mui/material';
+import { EmptyState } from '../../../components/states/empty-state';
+import { ErrorState } from '../../../components/states/error-state';
+import { LoadingState } from '../../../components/states/loading-state';
+import { useTravelTrials } from '../api/get-travel-trials';
+import type { Axis } from '../types';
+import { TravelTrialEntry } from './travel-trial-entry';
+import { TravelTrialHistory } from './travel-trial-history';
+import { TravelTrialResult } from './travel-trial-result';
+
+export function TravelTrialSection({ axis, mayRecord }: { axis: Axis; mayRecord: boolean }) {
+  const trials = useTravelTrials(axis.id);
+  const [selected, setSelected] = useState<string | null>(null);
+  const list = trials.data ?? [];
+  const shown = list.find((t) => t.id === selected) ?? list[0];
+  return (
+    <Stack spacing={2} component="section" aria-labelledby="trial-title">
+      <Typography variant="h3" component="h2" id="trial-title">
+        Travel trial
+      </Typography>
+      {mayRecord && <TravelTrialEntry axis={axis} onRecorded={(t) => setSelected(t.id)} />}
+      {trials.isPending && <LoadingState label="Loading travel trials…" />}
+      {trials.isError && <ErrorState error={trials.error} onRetry={() => trials.refetch()} />}
+      {trials.data && !shown && <EmptyState title="No travel trial yet">Record commanded and measured moves to check and correct the steps per mm.</EmptyState>}
+      {shown && <TravelTrialResult axis={axis} trial={shown} mayApply={mayRecord} />}
+      <TravelTrialHistory trials={list} selectedId={shown?.id ?? null} onSelect={setSelected} />
+    </Stack>
+  );
+}

@@ -1,0 +1,200 @@
+import type { LengthUnit } from '../../lib/units';
+
+export type DriveType = 'screw' | 'belt' | 'rack';
+export type Mounting = 'fixed-free' | 'supported-supported' | 'fixed-supported' | 'fixed-fixed';
+export type DriveStatus = 'not-started' | 'within-target' | 'outside-target' | 'not-applicable';
+
+export interface TargetValue {
+  value: number;
+  unit: string;
+  source?: string;
+}
+
+export interface Drive {
+  type: DriveType;
+  lead?: number;
+  nominalDiameter?: number;
+  rootDiameter?: number;
+  unsupportedLength?: number;
+  mounting?: Mounting;
+  dnLimit?: number;
+  beltPitch?: number;
+  pulleyTeeth?: number;
+  pinionModule?: number;
+  pinionTeeth?: number;
+}
+
+export interface StepsChange {
+  from: number;
+  to: number;
+  at: string;
+  by: string;
+  reason: 'edited' | 'travel-trial';
+  trialId?: string;
+}
+
+export interface Axis {
+  id: string;
+  machineId: string;
+  name: string;
+  letter: string | null;
+  drive: Drive;
+  driveSummary: string;
+  motorStepsPerRev: number;
+  microsteps: number;
+  gearRatio: number;
+  stepsPerMm: number;
+  theoreticalStepsPerMm: number;
+  stepsPerMmDifferencePercent: number;
+  travelPerRevMm: number;
+  resolutionMm: number;
+  maxFeedRate: number | null;
+  measuredTravelMm: number | null;
+  notes: string;
+  stepsHistory: StepsChange[];
+  locked: boolean;
+  createdAt: string;
+  updatedAt: string;
+}
+
+export interface CheckSummary {
+  status: DriveStatus;
+  summary: string;
+  recordId: string | null;
+  recordedAt: string | null;
+}
+
+export interface AxisListItem extends Axis {
+  checks: { travelTrial: CheckSummary; positioning: CheckSummary; speedCheck: CheckSummary };
+}
+
+export interface TravelTrial {
+  id: string;
+  axisId: string;
+  unit: LengthUnit;
+  stepsPerMmUsed: number;
+  throughOrigin: boolean;
+  moves: { commanded: number; measured: number }[];
+  result: {
+    correctedStepsPerMm: number;
+    errorPercent: number;
+    scale: number;
+    offset: number;
+    residuals: number[];
+    residualMax: number;
+    moves: { commanded: number; measured: number; error: number; residual: number }[];
+  };
+  status: 'within-target' | 'outside-target';
+  target: TargetValue;
+  notes: string;
+  recordedBy: string;
+  recordedAt: string;
+  appliedAt: string | null;
+  appliedBy: string | null;
+  locked: boolean;
+}
+
+export interface PositioningTargetResult {
+  target: number;
+  meanUp: number;
+  meanDown: number;
+  mean: number;
+  reversal: number;
+  sUp: number;
+  sDown: number;
+  repeatabilityUp: number;
+  repeatabilityDown: number;
+  repeatability: number;
+}
+
+export interface Verdict {
+  value: number;
+  target: TargetValue;
+  targetMm: number;
+  pass: boolean;
+}
+
+export interface PositioningRun {
+  id: string;
+  axisId: string;
+  unit: LengthUnit;
+  targets: number[];
+  runs: { direction: 'up' | 'down'; deviations: number[] }[];
+  result: {
+    accuracy: number;
+    accuracyUp: number;
+    accuracyDown: number;
+    repeatability: number;
+    repeatabilityUp: number;
+    repeatabilityDown: number;
+    reversal: number;
+    reversalMean: number;
+    systematic: number;
+    systematicUp: number;
+    systematicDown: number;
+    meanRange: number;
+    runsUp: number;
+    runsDown: number;
+    targets: PositioningTargetResult[];
+    warnings: string[];
+  };
+  checks: { accuracy: Verdict; repeatability: Verdict; reversal: Verdict };
+  status: 'within-target' | 'outside-target';
+  notes: string;
+  recordedBy: string;
+  recordedAt: string;
+  locked: boolean;
+}
+
+export interface SpeedCheck {
+  axisId: string;
+  applicable: boolean;
+  status: DriveStatus;
+  reason: string | null;
+  missing: string[];
+  feedRate: number | null;
+  rpm: number | null;
+  criticalSpeed: number | null;
+  permissibleSpeed: number | null;
+  dnLimitSpeed: number | null;
+  dnLimit: number | null;
+  mountingFactor: number | null;
+  limitedBy: 'critical-speed' | 'dn-limit' | null;
+  maxFeedRate: number | null;
+  allowedSpeed: number | null;
+  safeFeedRate: number | null;
+  headroom: TargetValue;
+  withinLimits: boolean | null;
+  source: string;
+}
+
+export interface TravelEnvelope {
+  machineId: string;
+  status: 'within-target' | 'outside-target' | 'not-started';
+  workArea: { x: number; y: number };
+  margin: TargetValue;
+  marginMm: number;
+  axes: { axisId: string; axis: string; letter: 'X' | 'Y'; measuredTravel: number | null; workSize: number; requiredTravel: number; spare: number | null; covers: boolean | null }[];
+  missing: string[];
+  summary: string;
+}
+
+export const DRIVE_LABELS: Record<DriveType, string> = { screw: 'Screw', belt: 'Belt', rack: 'Rack and pinion' };
+export const MOUNTING_LABELS: Record<Mounting, string> = {
+  'fixed-free': 'Fixed – free',
+  'supported-supported': 'Supported – supported',
+  'fixed-supported': 'Fixed – supported',
+  'fixed-fixed': 'Fixed – fixed',
+};
+
+/** One key factory for the feature. */
+export const driveKeys = {
+  all: ['drives'] as const,
+  axes: (machineId: string) => [...driveKeys.all, 'axes', machineId] as const,
+  axis: (axisId: string) => [...driveKeys.all, 'axis', axisId] as const,
+  trials: (axisId: string) => [...driveKeys.all, 'axis', axisId, 'trials'] as const,
+  runs: (axisId: string) => [...driveKeys.all, 'axis', axisId, 'runs'] as const,
+  speed: (axisId: string) => [...driveKeys.all, 'axis', axisId, 'speed'] as const,
+  envelope: (machineId: string) => [...driveKeys.all, 'envelope', machineId] as const,
+  preview: (body: unknown) => [...driveKeys.all, 'preview', body] as const,
+};
