@@ -144,6 +144,20 @@ test.describe('evidence: photos and files', () => {
     await expect(page.getByRole('region', { name: /^Evidence: Tablet table/ })).toContainText('1 photo, 1 file');
   });
 
+  test("the demo plasma table's evidence is grouped by what it is attached to", async ({ page }) => {
+    await signInAs(page, DEMO.owner);
+    await page.goto('/machines');
+    await page.getByRole('link', { name: 'Big plasma table' }).click();
+    await page.getByRole('tab', { name: 'Evidence' }).click();
+    const machine = page.getByRole('region', { name: 'Evidence: Big plasma table' });
+    await expect(machine).toContainText('2 photos');
+    const rail = page.getByRole('region', { name: /^Evidence: .*Y1/ });
+    await expect(rail).toContainText('1 photo, 1 file');
+    await expect(rail.getByRole('link', { name: 'y1-as-found.csv' })).toBeVisible();
+    for (const img of await page.getByRole('img').all()) await img.evaluate((i: HTMLImageElement) => i.decode());
+    await snap(page, 'evidence-demo-desktop');
+  });
+
   test('a viewer sees the evidence but no upload and no delete', async ({ page, browser }) => {
     const builder = await browser.newPage();
     await signInAs(builder, DEMO.builder);

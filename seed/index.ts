@@ -8,6 +8,7 @@ import { seedRails } from './rails.js';
 import { seedBoltDowns } from './bolt-downs.js';
 import { seedDrives } from './drives.js';
 import { seedApprovals } from './approvals.js';
+import { seedEvidence } from './evidence.js';
 
 /** The demo workshop, built through the product's own services so results match the engine. */
 export async function runDemoSeed(app: INestApplicationContext): Promise<SeedContext> {
@@ -19,6 +20,7 @@ export async function runDemoSeed(app: INestApplicationContext): Promise<SeedCon
   await seedBoltDowns(ctx);
   await seedDrives(ctx);
   // Each domain adds its demo records here, in dependency order.
+  await seedEvidence(ctx);
   await seedApprovals(ctx); // last: signs off the router on everything above
   return ctx;
 }

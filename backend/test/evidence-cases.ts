@@ -1,6 +1,7 @@
 import type { NestFastifyApplication } from '@nestjs/platform-fastify';
 import { createHash, randomUUID } from 'node:crypto';
 import sharp from 'sharp';
+import zlib from 'node:zlib';
 import type { Role } from '../src/database/schema/index.js';
 import { RecordsService } from '../src/records/records.service.js';
 import { SubjectsRegistry } from '../src/records/subjects.registry.js';
@@ -32,6 +33,23 @@ export function makeElf(): Buffer {
 /** A Windows program's first bytes (DOS/PE header "MZ"), padded out. */
 export function makePe(): Buffer {
   return Buffer.concat([Buffer.from('MZ\x90\x00\x03\x00\x00\x00', 'latin1'), Buffer.alloc(4096, 0x00)]);
+}
+/** A small PNG whose header claims 20000 × 13000 pixels: it would unpack into about 780 MB. */
+export function makePngBomb(): Buffer {
+  const chunk = (type: string, data: Buffer) => {
+    const body = Buffer.concat([Buffer.from(type, 'latin1'), data]);
+    const len = Buffer.alloc(4);
+    len.writeUInt32BE(data.length);
+    const crc = Buffer.alloc(4);
+    crc.writeUInt32BE(zlib.crc32(body));
+    return Buffer.concat([len, body, crc]);
+  };
+  const ihdr = Buffer.alloc(13);
+  ihdr.writeUInt32BE(20000, 0);
+  ihdr.writeUInt32BE(13000, 4);
+  ihdr.set([8, 2, 0, 0, 0], 8);
+  const signature = Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]);
+  return Buffer.concat([signature, chunk('IHDR', ihdr), chunk('IDAT', zlib.deflateSync(Buffer.alloc(60_000))), chunk('IEND', Buffer.alloc(0))]);
 }
 export const PDF = Buffer.from('%PDF-1.4\n1 0 obj << /Type /Catalog >> endobj\ntrailer << /Root 1 0 R >>\n%%EOF\n', 'latin1');
 export const CSV = Buffer.from('station_mm,reading_mm\n0,0.000\n250,0.012\n500,-0.004\n', 'utf8');
@@ -200,6 +218,7 @@ export function evidenceApiCases(driver: string, harness: DriverHarness) {
       ['text not named .csv', () => CSV, 'readings.txt', 415, /not a type Railwright keeps/],
       ['a .csv holding NUL bytes', () => Buffer.concat([CSV, Buffer.from([0, 1, 2])]), 'readings.csv', 415, /not plain UTF-8 text/],
       ['a .csv that is not UTF-8', () => Buffer.from([0x61, 0x2c, 0xff, 0xfe, 0x0a]), 'readings.csv', 415, /not plain UTF-8/],
+      ['a photo of more than 250 megapixels', makePngBomb, 'huge.png', 415, /huge\.png has more than 250 megapixels/],
       ['a cut-short PNG', async () => (await makePng()).subarray(0, 300), 'half.png', 415, /could not be read/],
       ['an empty file', () => Buffer.alloc(0), 'empty.png', 400, /empty/],
     ];

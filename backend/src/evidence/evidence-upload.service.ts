@@ -11,7 +11,7 @@ import { plainToInstance } from 'class-transformer';
 import { validate } from 'class-validator';
 import type { FastifyRequest } from 'fastify';
 import { randomUUID } from 'node:crypto';
-import { pipeline } from 'node:stream';
+import { pipeline, type Readable } from 'node:stream';
 import type { SessionUser } from '../auth/session-user.js';
 import type { SubjectRef } from '../records/subjects.registry.js';
 import { RecordsService } from '../records/records.service.js';
@@ -23,8 +23,9 @@ import { EvidenceRepository } from './evidence.repository.js';
 import { EvidenceSubjects } from './evidence-subjects.js';
 import { sanitizeFileName, withExtension } from './file-name.js';
 import { EVIDENCE_STORAGE, type EvidenceStorage } from './storage/evidence-storage.js';
-import { makeThumbnail, THUMBNAIL_TYPE, type Thumbnail } from './thumbnail.js';
+import { makeThumbnail, MAX_PHOTO_MEGAPIXELS, THUMBNAIL_TYPE, type Thumbnail } from './thumbnail.js';
 import { UploadInspector } from './upload-inspector.js';
+import { tooLarge, translateMultipartError } from './upload-errors.js';
 
 interface Received {
   tempKey: string;
@@ -88,16 +89,39 @@ export class EvidenceUploadService {
     }
   }
 
+  /**
+   * The same checks for a file made on the server (the demo seed): the stream is stored and
+   * checked exactly as an upload is, the size limit included.
+   */
+  async attach(actor: SessionUser, fields: { subjectType: string; subjectId: string; caption?: string }, file: { name: string; stream: Readable }): Promise<EvidenceResponse> {
+    const values: Record<string, string> = { subjectType: fields.subjectType, subjectId: fields.subjectId, ...(fields.caption ? { caption: fields.caption } : {}) };
+    const subject = await this.checkedSubject(actor, values);
+    const received = await this.receiveStream(file.stream, file.name);
+    let committed = false;
+    try {
+      if (received.inspector.result().sizeBytes > this.config.maxBytes) throw new PayloadTooLargeException(tooLarge(file.name, this.config.maxBytes));
+      const saved = await this.store(actor, subject, values, received);
+      committed = true;
+      return saved;
+    } finally {
+      if (!committed) await this.storage.discard(received.tempKey).catch(() => undefined);
+    }
+  }
+
   private async receive(file: MultipartFile): Promise<Received> {
-    const inspector = new UploadInspector();
-    const source = pipeline(file.file, inspector, () => undefined);
-    const tempKey = await this.storage.writeTemp(source);
-    const received = { tempKey, rawName: file.filename, inspector };
+    const received = await this.receiveStream(file.file, file.filename);
     if (file.file.truncated) {
-      await this.storage.discard(tempKey).catch(() => undefined);
+      await this.storage.discard(received.tempKey).catch(() => undefined);
       throw new PayloadTooLargeException(tooLarge(file.filename, this.config.maxBytes));
     }
     return received;
+  }
+
+  private async receiveStream(stream: Readable, rawName: string): Promise<Received> {
+    const inspector = new UploadInspector();
+    const source = pipeline(stream, inspector, () => undefined);
+    const tempKey = await this.storage.writeTemp(source);
+    return { tempKey, rawName, inspector };
   }
 
   private async checkedSubject(actor: SessionUser, fields: Record<string, string>): Promise<SubjectRef> {
@@ -168,38 +192,13 @@ export class EvidenceUploadService {
     try {
       return await makeThumbnail(stored.stream);
     } catch (err) {
-      this.logger.warn(`photo refused, not readable: ${(err as Error).message}`);
       stored.stream.destroy();
+      const message = (err as Error).message;
+      if (/pixel limit/i.test(message)) {
+        throw new UnsupportedMediaTypeException(`${fileName} has more than ${MAX_PHOTO_MEGAPIXELS} megapixels; save it smaller and attach it again`);
+      }
+      this.logger.warn(`photo refused, not readable: ${message}`);
       throw new UnsupportedMediaTypeException(`${fileName} starts like a ${type.label} photo but could not be read as one (damaged or cut short?)`);
     }
   }
-}
-
-function tooLarge(name: string, maxBytes: number): string {
-  return `${sanitizeFileName(name)} is larger than the limit of ${formatBytes(maxBytes)} a file`;
-}
-
-export function formatBytes(bytes: number): string {
-  if (bytes >= 1024 * 1024) return `${+(bytes / (1024 * 1024)).toFixed(1)} MB`;
-  if (bytes >= 1024) return `${+(bytes / 1024).toFixed(1)} kB`;
-  return `${bytes} bytes`;
-}
-
-/** The multipart parser's own errors, as clear 4xx answers. */
-function translateMultipartError(err: unknown, maxBytes: number): unknown {
-  const code = (err as { code?: string })?.code;
-  if (code === 'FST_REQ_FILE_TOO_LARGE') {
-    const name = (err as { part?: { filename?: string } }).part?.filename ?? 'The file';
-    return new PayloadTooLargeException(tooLarge(name, maxBytes));
-  }
-  if (code === 'FST_FILES_LIMIT') return new BadRequestException(['Send one file per upload; several files go up as several uploads']);
-  if (code === 'FST_PARTS_LIMIT' || code === 'FST_FIELDS_LIMIT') return new BadRequestException(['Too many fields: send file, subjectType, subjectId and caption only']);
-  if (code === 'FST_PROTO_VIOLATION' || code === 'FST_INVALID_MULTIPART_CONTENT_TYPE' || code === 'FST_INVALID_JSON_FIELD_ERROR') return new BadRequestException(['The upload is not a well-formed multipart/form-data body']);
-  if (err instanceof Error && /Unexpected end of (multipart|form)|terminated early|Malformed/i.test(err.message)) {
-    return new BadRequestException(['The upload was cut off before it finished; try again']);
-  }
-  if (code === 'FST_MP_PREMATURE_CLOSE' || code === 'ERR_STREAM_PREMATURE_CLOSE') {
-    return new BadRequestException(['The upload was cut off before it finished; try again']);
-  }
-  return err;
 }

@@ -3,6 +3,8 @@ import type { Readable } from 'node:stream';
 
 export const THUMBNAIL_PX = 320;
 export const THUMBNAIL_TYPE = 'image/webp';
+/** Above any phone camera's sensor; stops a tiny file that unpacks into a huge image. */
+export const MAX_PHOTO_MEGAPIXELS = 250;
 
 export interface Thumbnail {
   body: Buffer;
@@ -16,7 +18,7 @@ export interface Thumbnail {
  * the bytes are not a readable image, so a damaged photo is refused rather than stored.
  */
 export async function makeThumbnail(source: Readable): Promise<Thumbnail> {
-  const base = sharp({ failOn: 'error', limitInputPixels: 100_000_000 });
+  const base = sharp({ failOn: 'error', limitInputPixels: MAX_PHOTO_MEGAPIXELS * 1_000_000 });
   const meta = base.clone().metadata();
   const thumb = base
     .clone()

@@ -46,7 +46,11 @@ export class UploadInspector extends Transform {
     }
   }
 
+  private digest: string | null = null;
+
+  /** Read once the stream has ended. */
   result(): SniffResult & { sha256: string } {
-    return { head: Buffer.concat(this.headChunks), sizeBytes: this.sizeBytes, plainText: this.plainText && this.sizeBytes > 0, sha256: this.hash.digest('hex') };
+    this.digest ??= this.hash.digest('hex');
+    return { head: Buffer.concat(this.headChunks), sizeBytes: this.sizeBytes, plainText: this.plainText && this.sizeBytes > 0, sha256: this.digest };
   }
 }
