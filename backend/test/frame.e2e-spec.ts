@@ -79,6 +79,10 @@ describe('frame: diagonal checks', () => {
     const diag = checks.find((c) => c.kind === 'diagonal-check')!;
     expect(diag).toMatchObject({ status: 'within-target', recordType: 'diagonal-check', link: `/machines/${router}?tab=frame`, result: { unit: 'mm/m' } });
     expect(checks.find((c) => c.kind === 'bed-grid')).toMatchObject({ status: 'not-started', result: null });
+    // The squaring history for the certificate, oldest first, against the 0.2 mm/m router target.
+    expect(diag.series!.lines[0].points.map(([n]) => n)).toEqual([1, 2]);
+    expect(diag.series!.lines[0].points[1][1]).toBeCloseTo(diag.result!.value, 12);
+    expect(diag.series!.limits).toEqual([{ label: 'Target 0.2 mm/m', value: 0.2 }]);
     const subject = await app.get(SubjectsRegistry).resolve(ws.id, 'diagonal-check', diag.recordId!);
     expect(subject).toMatchObject({ machineId: router, recordType: 'diagonal-check' });
     expect(await app.get(SubjectsRegistry).resolve(other.id, 'diagonal-check', diag.recordId!)).toBeNull();

@@ -5,7 +5,7 @@ import { fromMm, toMm, type LengthUnit } from '../engine/units.js';
 import { MachinesService } from '../machines/machines.service.js';
 import type { MachineRef, ReadinessCheck } from '../records/readiness.js';
 import { RecordsService } from '../records/records.service.js';
-import { bedGridResult } from './bed-grid-result.js';
+import { bedGridResult, type BedGridPointResult } from './bed-grid-result.js';
 import type { CreateBedGridDto } from './dto/create-bed-grid.dto.js';
 import { FrameTargets, judge, type TargetOf } from './frame-targets.js';
 import { toBedGridResponse, type BedGridResponse } from './frame.mapper.js';
@@ -86,6 +86,12 @@ export class BedGridsService {
       result: { value: fromMm(flatness, unit), unit, summary: `flatness ${show(flatness, unit)} over ${row.points.length} points; tilt ${r.result.tilt.mmPerMetre.toFixed(2)} mm/m` },
       recordId: row.id,
       recordedAt: r.recordedAt,
+      series: {
+        title: 'Heights about the fitted plane, row by row',
+        x: { label: 'X position', unit: 'mm' },
+        y: { label: 'Residual', unit },
+        lines: rowsOf(r.result.points).map(([n, pts]) => ({ label: `Row ${n} (Y ${pts[0].yMm} mm)`, points: pts.map((p): [number, number] => [p.xMm, fromMm(p.residualMm, unit)]) })),
+      },
     };
   }
 
@@ -98,6 +104,12 @@ export class BedGridsService {
     const result = bedGridResult(row.points);
     return toBedGridResponse(row, result, judge(result.leastSquares.flatnessMm, base), target, locked);
   }
+}
+
+function rowsOf(points: BedGridPointResult[]): [number, BedGridPointResult[]][] {
+  const byRow = new Map<number, BedGridPointResult[]>();
+  for (const p of points) byRow.set(p.row, [...(byRow.get(p.row) ?? []), p]);
+  return [...byRow.entries()].sort((a, b) => a[0] - b[0]).map(([n, pts]) => [n, pts.sort((a, b) => a.xMm - b.xMm)]);
 }
 
 const DECIMALS: Record<LengthUnit, number> = { mm: 3, um: 1, in: 4, thou: 2 };

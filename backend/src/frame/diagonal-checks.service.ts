@@ -62,7 +62,8 @@ export class DiagonalChecksService {
   }
 
   async readiness(machine: MachineRef): Promise<ReadinessCheck> {
-    const [row] = await this.repo.listDiagonalChecks(machine.workshopId, machine.id, 1);
+    const rows = await this.repo.listDiagonalChecks(machine.workshopId, machine.id, 30);
+    const row = rows[0];
     const t = await this.targets.of(machine, 'squareness');
     const { target } = t;
     const base: ReadinessCheck = {
@@ -85,6 +86,14 @@ export class DiagonalChecksService {
       result: { value: r.result.mmPerMetre, unit: 'mm/m', summary: `${r.result.mmPerMetre.toFixed(3)} mm/m out of square; move one side ${r.result.correction.moveMm.toFixed(2)} mm` },
       recordId: row.id,
       recordedAt: r.recordedAt,
+      // The squaring history, oldest first, for the certificate's chart.
+      series: {
+        title: 'Squaring history',
+        x: { label: 'Check', unit: '#' },
+        y: { label: 'Out of square', unit: 'mm/m' },
+        lines: [{ label: 'Out of square', points: [...rows].reverse().map((x, i): [number, number] => [i + 1, diagonalCheckResult(x).mmPerMetre]) }],
+        limits: [{ label: `Target ${t.target.value} mm/m`, value: t.base }],
+      },
     };
   }
 
