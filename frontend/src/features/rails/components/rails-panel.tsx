@@ -24,7 +24,11 @@ export function RailsPanel({ machineId }: { machineId: string }) {
   if (rails.isError) return <ErrorState error={rails.error} onRetry={() => rails.refetch()} />;
   const list = rails.data;
   const byId = new Map(list.map((r) => [r.id, r]));
-  const pairs = list.filter((r) => r.partnerRailId && byId.has(r.partnerRailId) && r.id < r.partnerRailId);
+  // Each pair once, named in label order (Y1 and Y2).
+  const pairs = list.filter((r) => {
+    const p = r.partnerRailId ? byId.get(r.partnerRailId) : undefined;
+    return !!p && (r.label.localeCompare(p.label) || r.id.localeCompare(p.id)) < 0;
+  });
   const addButton = canRecord && (
     <Button variant="contained" startIcon={<AddOutlined />} onClick={() => setAdding(true)}>
       Add rail

@@ -35,13 +35,13 @@ export function StationReadings({
   };
   return (
     <TableContainer sx={{ maxHeight: 520 }}>
-      <Table size="small" stickyHeader aria-label="Stations and readings">
+      <Table size="small" stickyHeader aria-label="Stations and readings" sx={{ '& td, & th': { px: 1 } }}>
         <TableHead>
           <TableRow>
             <TableCell sx={{ width: 40 }}>#</TableCell>
-            <TableCell sx={{ width: 130 }}>Station (mm)</TableCell>
+            <TableCell sx={{ width: 100 }}>Station (mm)</TableCell>
             <TableCell>Reading ({UNIT_LABELS[unit]})</TableCell>
-            <TableCell align="right" sx={{ width: 110 }}>
+            <TableCell align="right" sx={{ width: 80 }}>
               Residual
             </TableCell>
             <TableCell sx={{ width: 40 }} />
@@ -60,7 +60,7 @@ export function StationReadings({
                     onChange={(e) => set(i, { position: e.target.value })}
                     variant="standard"
                     slotProps={{ htmlInput: { inputMode: 'decimal', 'aria-label': `Station ${i + 1} position (mm)`, tabIndex: -1 } }}
-                    sx={{ width: 100 }}
+                    sx={{ width: 80 }}
                   />
                 </TableCell>
                 <TableCell>
@@ -83,7 +83,7 @@ export function StationReadings({
                       htmlInput: { inputMode: 'decimal', 'aria-label': `Reading at ${r.position || '?'} mm`, enterKeyHint: 'next' },
                       input: { endAdornment: <InputAdornment position="end">{UNIT_LABELS[unit]}</InputAdornment> },
                     }}
-                    sx={{ width: 150 }}
+                    sx={{ width: 130 }}
                   />
                 </TableCell>
                 <TableCell align="right" sx={{ color: 'text.secondary', fontVariantNumeric: 'tabular-nums' }}>

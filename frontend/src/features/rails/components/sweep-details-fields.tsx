@@ -1,4 +1,4 @@
-import { InputAdornment, MenuItem, Stack, TextField, ToggleButton, ToggleButtonGroup, Typography } from '@mui/material';
+import { Box, InputAdornment, MenuItem, Stack, TextField, ToggleButton, ToggleButtonGroup, Typography } from '@mui/material';
 import type { BoltTorques, SweepPhase } from '../types';
 import type { SweepDraft } from '../hooks/use-sweep-draft';
 
@@ -34,29 +34,23 @@ export function SweepDetailsFields({
           <ToggleButton value="as-left">As left</ToggleButton>
         </ToggleButtonGroup>
       </Stack>
-      <Stack direction={{ xs: 'column', sm: 'row' }} spacing={1.5}>
-        <TextField label="Instrument" value={value.instrument} onChange={(e) => onChange({ instrument: e.target.value })} placeholder="Dial indicator on a carriage" fullWidth />
+      <Box sx={{ display: 'grid', gap: 2, gridTemplateColumns: { xs: '1fr', sm: '1fr 1fr', lg: '2fr 1fr 1fr' } }}>
+        <TextField label="Instrument" value={value.instrument} onChange={(e) => onChange({ instrument: e.target.value })} placeholder="Dial indicator on a carriage" sx={{ gridColumn: { sm: '1 / -1', lg: 'auto' } }} />
         <TextField
           label="Resolution"
           value={value.resolution}
           onChange={(e) => onChange({ resolution: e.target.value })}
           slotProps={{ htmlInput: { inputMode: 'decimal' }, input: { endAdornment: <InputAdornment position="end">{unitLabel}</InputAdornment> } }}
-          sx={{ minWidth: 140 }}
         />
         <TextField
           label="Temperature"
           value={value.temperatureC}
           onChange={(e) => onChange({ temperatureC: e.target.value })}
           slotProps={{ htmlInput: { inputMode: 'decimal' }, input: { endAdornment: <InputAdornment position="end">°C</InputAdornment> } }}
-          sx={{ minWidth: 130 }}
         />
-      </Stack>
-      <Stack direction={{ xs: 'column', sm: 'row' }} spacing={1.5}>
-        <TextField label="Taken by" value={value.takenBy} onChange={(e) => onChange({ takenBy: e.target.value })} fullWidth />
-        <TextField label="Datum" value={value.datum} onChange={(e) => onChange({ datum: e.target.value })} helperText="Name the common datum to compare partner rails" fullWidth />
-      </Stack>
-      <Stack direction={{ xs: 'column', sm: 'row' }} spacing={1.5} sx={{ alignItems: 'flex-start' }}>
-        <TextField select label="Bolt size" value={value.boltSize} onChange={(e) => pickBolt(e.target.value)} sx={{ minWidth: 140 }} helperText="Bolts as tightened">
+        <TextField label="Taken by" value={value.takenBy} onChange={(e) => onChange({ takenBy: e.target.value })} />
+        <TextField label="Datum" value={value.datum} onChange={(e) => onChange({ datum: e.target.value })} helperText="Name the common datum to compare partner rails" sx={{ gridColumn: { lg: 'span 2' } }} />
+        <TextField select label="Bolt size" value={value.boltSize} onChange={(e) => pickBolt(e.target.value)} helperText="Bolts as tightened">
           <MenuItem value="">Not recorded</MenuItem>
           {torques?.bolts.map((b) => (
             <MenuItem key={b.boltSize} value={b.boltSize}>
@@ -70,9 +64,9 @@ export function SweepDetailsFields({
           onChange={(e) => onChange({ torqueNm: e.target.value })}
           slotProps={{ htmlInput: { inputMode: 'decimal' }, input: { endAdornment: <InputAdornment position="end">N·m</InputAdornment> } }}
           helperText={usual ? `Usual for ${usual.boltSize} into steel: ${usual.torqueNm} N·m (a rail maker's table; follow your rail's instructions)` : 'Pick a bolt size for the usual torque'}
-          fullWidth
+          sx={{ gridColumn: { lg: 'span 2' } }}
         />
-      </Stack>
+      </Box>
       <TextField label="Notes" value={value.notes} onChange={(e) => onChange({ notes: e.target.value })} multiline minRows={2} />
     </Stack>
   );

@@ -102,15 +102,16 @@ export function SweepEntry({ rail, target, takenBy, onSaved }: { rail: Rail; tar
         </Button>
       </Stack>
       <Grid container spacing={2.5}>
-        <Grid size={{ xs: 12, lg: 5 }}>
+        {/* On a narrow screen the chart comes first, so it stays in view above the readings being typed. */}
+        <Grid size={{ xs: 12, md: 6 }} sx={{ order: { xs: 2, md: 1 } }}>
           <StationReadings rows={draft.stations} unit={draft.unit} problems={ready.problems} residuals={residuals} onChange={(stations) => patch({ stations })} onLastEnter={() => saveRef.current?.focus()} />
         </Grid>
-        <Grid size={{ xs: 12, lg: 7 }}>
-          <Stack spacing={2.5}>
-            <SweepPreview points={ready.stations} unit={draft.unit} result={body ? result : null} target={target} label="Live straightness chart" pending={preview.isFetching} />
-            {preview.error && <Alert severity="error">{preview.error.message}</Alert>}
-            <SweepDetailsFields value={draft} unitLabel={UNIT_LABELS[draft.unit]} torques={torques.data} onChange={patch} />
-          </Stack>
+        <Grid size={{ xs: 12, md: 6 }} sx={{ order: { xs: 1, md: 2 } }}>
+          <SweepPreview points={ready.stations} unit={draft.unit} result={body ? result : null} target={target} label="Live straightness chart" pending={preview.isFetching} />
+          {preview.error && <Alert severity="error" sx={{ mt: 1 }}>{preview.error.message}</Alert>}
+        </Grid>
+        <Grid size={12} sx={{ order: 3 }}>
+          <SweepDetailsFields value={draft} unitLabel={UNIT_LABELS[draft.unit]} torques={torques.data} onChange={patch} />
         </Grid>
       </Grid>
       <Box sx={{ display: 'flex', gap: 2, alignItems: 'center', flexWrap: 'wrap', mt: 2.5 }}>

@@ -1,0 +1,149 @@
+import { expect, test, type Page } from '@playwright/test';
+import { DEMO, signInAs, snap } from './support/session';
+
+const TABLET = { width: 820, height: 1180 };
+
+async function openMachine(page: Page, name: string) {
+  await page.goto('/machines');
+  await page.getByRole('link', { name }).click();
+  await expect(page.getByRole('heading', { name, level: 1 })).toBeVisible();
+}
+
+async function newMachineWithRail(page: Page, name: string) {
+  await page.goto('/machines');
+  await page.getByRole('button', { name: 'New machine' }).click();
+  const dialog = page.getByRole('dialog', { name: 'New machine' });
+  await dialog.getByLabel('Name').fill(name);
+  await dialog.getByLabel('Work area X').fill('3000');
+  await dialog.getByLabel('Work area Y').fill('1500');
+  await dialog.getByLabel('Notes').fill('Test frame');
+  await dialog.getByRole('button', { name: 'Open machine file' }).click();
+  await expect(page.getByRole('heading', { name, level: 1 })).toBeVisible();
+  await page.getByRole('tab', { name: 'Rails' }).click();
+  await page.getByRole('button', { name: 'Add rail' }).click();
+  const add = page.getByRole('dialog', { name: 'Add rail' });
+  await add.getByLabel('Label').fill('Y1 (left)');
+  await add.getByLabel('Axis').fill('Y1');
+  await add.getByLabel('Length').fill('600');
+  await add.getByLabel('Hole pitch').fill('100');
+  await add.getByLabel('First hole').fill('50');
+  await add.getByRole('button', { name: 'Add rail' }).click();
+  await expect(add).toBeHidden();
+  await page.getByRole('table', { name: 'Rails' }).getByRole('link', { name: 'Y1 (left)' }).click();
+  await expect(page.getByRole('heading', { name: 'Rail Y1 (left)' })).toBeVisible();
+}
+
+test.describe('machines and rails', () => {
+  test('a builder opens a machine file, adds a rail and enters a sweep by keyboard', async ({ page }) => {
+    await signInAs(page, DEMO.builder);
+    await newMachineWithRail(page, `Keyboard table ${Date.now()}`);
+    // Holes at 50, 150 … 550 mm: one reading field per hole, Enter moves on.
+    await expect(page.getByLabel('Hole positions').getByText('550')).toBeVisible();
+    await expect(page.getByText('+ means the rail is further from the reference')).toBeVisible();
+    const first = page.getByLabel('Reading at 50 mm');
+    await first.click();
+    for (const r of ['0', '1', '2.5', '3', '1.5', '0']) {
+      await page.keyboard.type(r);
+      await page.keyboard.press('Enter');
+    }
+    await expect(page.getByLabel('Reading at 550 mm')).toHaveValue('0');
+    await expect(page.getByRole('button', { name: 'Save sweep' })).toBeFocused();
+    await expect(page.getByRole('figure', { name: 'Live straightness chart' })).toBeVisible();
+    await expect(page.getByRole('figure', { name: 'Live straightness chart' }).locator('.recharts-line-dots circle').first()).toBeVisible();
+    // A bow of 3 thou on a 2 thou target: the live verdict is outside before saving.
+    await expect(page.getByRole('region', { name: 'New sweep' }).getByText('Outside target')).toBeVisible();
+    await page.getByRole('button', { name: 'Save sweep' }).press('Enter');
+    const saved = page.getByRole('region', { name: 'Sweep saved' });
+    await expect(saved.getByText(/Least-squares straightness .* thou against a target of 2 thou: outside target/)).toBeVisible();
+    await expect(saved.getByRole('table', { name: 'Residual per station' }).getByRole('row')).toHaveCount(7);
+    await expect(page.getByRole('table', { name: 'Sweeps' }).getByRole('row')).toHaveCount(2);
+    // The draft is cleared for the next sweep and nothing is left waiting.
+    await expect(page.getByLabel('Reading at 50 mm')).toHaveValue('');
+  });
+
+  test('a CSV import with a bad row is refused until the row is fixed, then imported', async ({ page }) => {
+    await signInAs(page, DEMO.technician);
+    await newMachineWithRail(page, `CSV table ${Date.now()}`);
+    await page.getByRole('button', { name: 'Import CSV' }).click();
+    const dialog = page.getByRole('dialog', { name: 'Import readings from CSV' });
+    await dialog.getByLabel('Paste readings').fill('position_mm,reading\n0,0\n150,0.5\n300,abc\n450,1\n450,0.5\n600\n');
+    const preview = dialog.getByRole('table', { name: 'Import preview' });
+    await expect(preview.getByText('Reading "abc" is not a number')).toBeVisible();
+    await expect(preview.getByText('Position 450 mm repeats line 5')).toBeVisible();
+    await expect(preview.getByText('Missing reading')).toBeVisible();
+    await expect(dialog.getByText('3 rows must be fixed in the text or dropped before the import.')).toBeVisible();
+    const importButton = dialog.getByRole('button', { name: /^Import \d+ station/ });
+    await expect(importButton).toBeDisabled();
+    await snap(page, 'rail-csv-refused-desktop');
+    // Fix one in the text, drop the other two.
+    await dialog.getByLabel('Paste readings').fill('position_mm,reading\n0,0\n150,0.5\n300,1.5\n450,1\n450,0.5\n600\n');
+    await dialog.getByRole('button', { name: 'Drop bad rows' }).click();
+    await expect(importButton).toHaveText('Import 4 stations');
+    await importButton.click();
+    await expect(page.getByLabel('Reading at 300 mm')).toHaveValue('1.5');
+    await page.getByRole('button', { name: 'Save sweep' }).click();
+    await expect(page.getByRole('region', { name: 'Sweep saved' }).getByText(/against a target of 2 thou: within target/)).toBeVisible();
+  });
+
+  test('the demo router is within target on every rail and pair; the plasma table is not', async ({ page }) => {
+    await signInAs(page, DEMO.viewer);
+    const machines = await (await page.request.get('/api/machines')).json();
+    const router = machines.find((m: { name: string }) => m.name === 'Small router');
+    const plasma = machines.find((m: { name: string }) => m.name === 'Big plasma table');
+    const routerRails = await (await page.request.get(`/api/machines/${router.id}/rails`)).json();
+    expect(routerRails.length).toBe(4);
+    for (const r of routerRails) {
+      expect(r.latestSweep.status).toBe('within-target');
+      const p = await (await page.request.get(`/api/rails/${r.id}/parallelism`)).json();
+      expect(p.status).toBe('within-target');
+    }
+    const plasmaRails = await (await page.request.get(`/api/machines/${plasma.id}/rails`)).json();
+    expect(plasmaRails.map((r: { label: string }) => r.label).sort()).toEqual(['X front', 'X rear', 'Y1 (left)', 'Y2 (right)']);
+    expect(plasmaRails.some((r: { latestSweep: { status: string } }) => r.latestSweep.status === 'outside-target')).toBe(true);
+  });
+
+  test('a viewer reads rails and target sets but records nothing', async ({ page }) => {
+    await signInAs(page, DEMO.viewer);
+    await page.goto('/machines');
+    await expect(page.getByRole('button', { name: 'New machine' })).toHaveCount(0);
+    await openMachine(page, 'Big plasma table');
+    await page.getByRole('tab', { name: 'Rails' }).click();
+    await expect(page.getByRole('button', { name: 'Add rail' })).toHaveCount(0);
+    await page.getByRole('link', { name: 'Y2 (right)' }).click();
+    await expect(page.getByRole('region', { name: 'Sweep history' })).toBeVisible();
+    await expect(page.getByRole('region', { name: 'New sweep' })).toHaveCount(0);
+    await page.goto('/target-sets');
+    await expect(page.getByText('Read only').first()).toBeVisible();
+    await expect(page.getByRole('table', { name: 'Targets of Plasma table (default)' })).toContainText('common practice');
+  });
+
+  test('an owner edits a target set', async ({ page }) => {
+    await signInAs(page, DEMO.owner);
+    await page.goto('/target-sets');
+    await page.getByRole('button', { name: 'Edit Router (default)' }).click();
+    const dialog = page.getByRole('dialog');
+    await dialog.getByLabel('Bed flatness: value').fill('0.08');
+    await dialog.getByRole('button', { name: 'Save targets' }).click();
+    await expect(dialog).toBeHidden();
+    await expect(page.getByRole('table', { name: 'Targets of Router (default)' })).toContainText('0.08 mm');
+    await snap(page, 'target-sets-desktop');
+  });
+
+  for (const [size, viewport] of [['desktop', { width: 1366, height: 900 }], ['tablet', TABLET]] as const) {
+    test(`screenshots at ${size} size: machines list, rails tab, rail page`, async ({ page }) => {
+      await page.setViewportSize(viewport);
+      await signInAs(page, DEMO.builder);
+      await page.goto('/machines');
+      await expect(page.getByRole('link', { name: 'Big plasma table' })).toBeVisible();
+      await snap(page, `machines-list-${size}`);
+      await openMachine(page, 'Big plasma table');
+      await page.getByRole('tab', { name: 'Rails' }).click();
+      await expect(page.getByRole('region', { name: /Parallelism Y/ })).toContainText('target');
+      await snap(page, `machine-rails-tab-${size}`);
+      await page.getByRole('table', { name: 'Rails' }).getByRole('link', { name: 'Y2 (right)' }).click();
+      await expect(page.getByRole('table', { name: 'Sweeps' }).getByRole('row')).toHaveCount(4);
+      await expect(page.getByRole('figure', { name: 'Sweeps overlaid' })).toBeVisible();
+      await snap(page, `rail-page-${size}`);
+    });
+  }
+});
