@@ -258,6 +258,22 @@ export function evidenceApiCases(driver: string, harness: DriverHarness) {
     });
   });
 
+  it('answers 400 to a body that is not well-formed multipart, and keeps nothing', async () => {
+    const before = await harness.storedKeys();
+    const noBoundary = await ctx.ws.as.builder.post('/api/evidence').set('Content-Type', 'multipart/form-data').send('garbage');
+    expect(noBoundary.status).toBe(400);
+    const cut = await ctx.ws.as.builder
+      .post('/api/evidence')
+      .set('Content-Type', 'multipart/form-data; boundary=XYZ')
+      .send(`--XYZ\r\nContent-Disposition: form-data; name="subjectType"\r\n\r\nmachine\r\n--XYZ\r\nContent-Disposition: form-data; name="subjectId"\r\n\r\n${ctx.machineId}\r\n--XYZ\r\nContent-Disposition: form-data; name="file"; filename="a.png"\r\nContent-Type: image/png\r\n\r\n\x89PNG half a fi`);
+    expect(cut.status).toBe(400);
+    expect(JSON.stringify(cut.body.message)).toMatch(/cut off/);
+    const json = await ctx.ws.as.builder.post('/api/evidence').send({ subjectType: 'machine', subjectId: ctx.machineId });
+    expect(json.status).toBe(400);
+    expect(JSON.stringify(json.body.message)).toMatch(/multipart\/form-data/);
+    expect(await harness.storedKeys()).toEqual(before);
+  });
+
   it('takes the fields after the file as well', async () => {
     const res = await ctx.ws.as.builder
       .post('/api/evidence')

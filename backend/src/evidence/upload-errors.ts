@@ -1,4 +1,4 @@
-import { BadRequestException, PayloadTooLargeException } from '@nestjs/common';
+import { BadRequestException, HttpException, PayloadTooLargeException, ServiceUnavailableException } from '@nestjs/common';
 import { sanitizeFileName } from './file-name.js';
 
 export function tooLarge(name: string, maxBytes: number): string {
@@ -27,5 +27,20 @@ export function translateMultipartError(err: unknown, maxBytes: number): unknown
   if (code === 'FST_MP_PREMATURE_CLOSE' || code === 'ERR_STREAM_PREMATURE_CLOSE') {
     return new BadRequestException(['The upload was cut off before it finished; try again']);
   }
+  if (err instanceof Error && /Multipart: |Boundary required|needle|Unsupported content type|Malformed part header/i.test(err.message)) {
+    return new BadRequestException(['The upload is not a well-formed multipart/form-data body']);
+  }
+  if (isStorageFailure(err)) {
+    return new ServiceUnavailableException('The file store did not answer, so nothing was kept. Try again in a moment.');
+  }
   return err;
+}
+
+// S3 SDK errors carry $metadata; disk and network failures carry a system error code.
+const SYSTEM_CODES = new Set(['ECONNREFUSED', 'ECONNRESET', 'ETIMEDOUT', 'ENOTFOUND', 'EAI_AGAIN', 'ENOSPC', 'EROFS', 'EACCES', 'EPERM', 'EIO']);
+
+function isStorageFailure(err: unknown): boolean {
+  if (!err || typeof err !== 'object' || err instanceof HttpException) return false;
+  const e = err as { $metadata?: unknown; code?: string; cause?: { code?: string } };
+  return e.$metadata !== undefined || SYSTEM_CODES.has(e.code ?? '') || SYSTEM_CODES.has(e.cause?.code ?? '');
 }
