@@ -1,6 +1,6 @@
 import { expect, test, type Browser, type Page } from '@playwright/test';
 import { execFileSync } from 'node:child_process';
-import { mkdtempSync, readFileSync, readdirSync, renameSync } from 'node:fs';
+import { mkdtempSync, readFileSync, readdirSync, renameSync, writeFileSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import { DEMO, DEMO_PASSWORD, signInAs, snap } from './support/session';
@@ -113,6 +113,14 @@ test.describe('readiness board to signed certificate', () => {
     await viewer.getByRole('button', { name: 'What drifted' }).click();
     await expect(viewer.getByRole('table', { name: 'What drifted' })).toBeVisible();
     await snap(viewer, 'readiness-drift');
+    // The demo router's certificate, with every real check, as PNG pages to look at.
+    const cert = await viewer.request.get(`/api/machines/${router.id}/certificate.pdf`);
+    expect(cert.headers()['content-type']).toBe('application/pdf');
+    const dir = mkdtempSync(path.join(os.tmpdir(), 'rw-cert-'));
+    writeFileSync(path.join(dir, 'router.pdf'), await cert.body());
+    expect(execFileSync('pdftotext', [path.join(dir, 'router.pdf'), '-']).toString('utf8')).toContain((await viewer.getByTestId('record-hash').textContent())!.trim());
+    execFileSync('pdftoppm', ['-png', '-r', '80', path.join(dir, 'router.pdf'), path.join(dir, 'page')]);
+    for (const f of readdirSync(dir).filter((n) => n.endsWith('.png')).sort()) renameSync(path.join(dir, f), path.join(SHOTS, `certificate-router-${f.replace(/^page-0*/, 'page-')}`));
     await viewer.setViewportSize({ width: 820, height: 1180 });
     await viewer.getByRole('button', { name: 'Checks' }).click();
     await snap(viewer, 'readiness-board-tablet');

@@ -181,7 +181,8 @@ function waivers(doc: Doc, checks: BoardCheck[]) {
   if (!waived.length) return para(doc, 'No check was waived: every check was within its target.', 'regular', 9, MUTED);
   for (const c of waived) {
     ensure(doc, 40);
-    write(doc, 'medium', 9, `${KIND_LABELS[c.kind]} \u2014 ${c.subject} (${STATUS_LABELS[c.measuredStatus].toLowerCase()}, ${resultText(c)})`, M, doc.y, { width: WIDTH });
+    const was = c.result ? `${STATUS_LABELS[c.measuredStatus].toLowerCase()}, ${resultText(c)}` : 'not started';
+    write(doc, 'medium', 9, `${KIND_LABELS[c.kind]} \u2014 ${c.subject} (${was})`, M, doc.y, { width: WIDTH });
     para(doc, `\u201c${c.waiver!.reason}\u201d`, 'italic', 9);
     para(doc, `Waived by ${c.waiver!.by} on ${utc(c.waiver!.at)}`, 'regular', 7.5, MUTED);
     doc.moveDown(0.4);
@@ -193,7 +194,7 @@ function charts(doc: Doc, checks: BoardCheck[]) {
   heading(doc, 'Charts: straightness, positioning, squareness');
   if (!charted.length) return para(doc, 'This machine had no straightness, positioning or squareness checks to chart.', 'regular', 9, MUTED);
   for (const c of charted) {
-    const h = c.series ? 170 : 66;
+    const h = c.series ? 170 : c.result && c.target ? 66 : 24;
     ensure(doc, h + 24);
     write(doc, 'medium', 9, `${KIND_LABELS[c.kind]} \u2014 ${c.subject}${c.series?.title ? `: ${c.series.title}` : ''}`, M, doc.y, { width: WIDTH });
     const box = { x: M, y: doc.y + 4, w: WIDTH, h };

@@ -79,8 +79,8 @@ export function drawSeriesChart(doc: Doc, box: Box, s: CheckSeries): void {
  * Without a series, draw what there is: the result beside its target on one scale, and say so.
  */
 export function drawResultGauge(doc: Doc, box: Box, c: BoardCheck): void {
+  if (!c.result || !c.target) return drawNoData(doc, box, c.result ? 'no chart data (no target to compare with)' : 'no chart data \u2014 not recorded');
   drawNoData(doc, box, 'no chart data \u2014 the result against its target:');
-  if (!c.result || !c.target) return;
   const max = Math.max(Math.abs(c.result.value), c.target.value, 1e-9) * 1.25;
   const bar = { x: box.x + 16, y: box.y + box.h / 2, w: box.w - 32 };
   const at = (v: number) => bar.x + (Math.min(Math.abs(v), max) / max) * bar.w;

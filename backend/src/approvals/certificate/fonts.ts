@@ -1,5 +1,6 @@
 import { createRequire } from 'node:module';
 import { readFileSync } from 'node:fs';
+import { woffToSfnt } from './woff-to-sfnt.js';
 
 const require = createRequire(import.meta.url);
 
@@ -16,10 +17,10 @@ export type FontName = keyof typeof FILES;
 
 let cache: Record<FontName, Buffer> | null = null;
 
-/** The font files, read once; embedded as subsets so the PDF carries only the glyphs it uses. */
+/** The font files, read and unpacked once; embedded as subsets so the PDF carries only the glyphs it uses. */
 export function certificateFonts(): Record<FontName, Buffer> {
   cache ??= Object.fromEntries(
-    Object.entries(FILES).map(([name, file]) => [name, readFileSync(require.resolve(`@fontsource/roboto/files/${file}`))]),
+    Object.entries(FILES).map(([name, file]) => [name, woffToSfnt(readFileSync(require.resolve(`@fontsource/roboto/files/${file}`)))]),
   ) as Record<FontName, Buffer>;
   return cache;
 }

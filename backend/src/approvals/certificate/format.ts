@@ -4,11 +4,12 @@ const UNIT_WORDS: Record<string, string> = { um: '\u00b5m', thou: 'thou', in: 'i
 
 export const unitLabel = (unit: string) => UNIT_WORDS[unit] ?? unit;
 
-/** A result value to four significant figures, without exponents for everyday sizes. */
+/** A result value for reading, without exponents for everyday sizes. */
 export function num(v: number): string {
   if (v === 0) return '0';
   if (Math.abs(v) < 1e-4) return v.toExponential(2);
-  return String(Number(v.toPrecision(4)));
+  // Three significant figures, whole numbers from 100 up: the board is read, not computed with.
+  return Math.abs(v) >= 100 ? String(Math.round(v)) : String(Number(v.toPrecision(3)));
 }
 
 /** Speed headroom and travel margin are minimums; part size is a ± band; the rest are maximums. */

@@ -6,7 +6,8 @@ export const unitLabel = (unit: string) => UNIT_WORDS[unit] ?? unit;
 export function num(v: number): string {
   if (v === 0) return '0';
   if (Math.abs(v) < 1e-4) return v.toExponential(2);
-  return String(Number(v.toPrecision(4)));
+  // Three significant figures, whole numbers from 100 up: the board is read, not computed with.
+  return Math.abs(v) >= 100 ? String(Math.round(v)) : String(Number(v.toPrecision(3)));
 }
 
 /** Headroom and travel margin are minimums, a test cut is a ± band, the rest are maximums. */
