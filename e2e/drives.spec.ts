@@ -1,6 +1,14 @@
 import { expect, test, type APIRequestContext, type Locator, type Page } from '@playwright/test';
 import { readFile } from 'node:fs/promises';
-import { DEMO, signInAs, snap } from './support/session';
+import path from 'node:path';
+import { DEMO, signInAs, snap as snapPage } from './support/session';
+
+/** Full-page screenshots from the top, so the fixed app bar does not land in the middle. */
+async function snap(page: Page, name: string) {
+  await page.mouse.move(0, 0); // no chart tooltip left open under the pointer
+  await page.evaluate(() => window.scrollTo(0, 0));
+  await snapPage(page, name);
+}
 
 const TABLET = { width: 820, height: 1180 };
 
@@ -122,6 +130,33 @@ test.describe('drives', () => {
     await snap(page, 'axis-run-result-desktop');
     await page.setViewportSize(TABLET);
     await snap(page, 'axis-page-tablet');
+    await page.mouse.move(0, 0);
+    await run.screenshot({ path: path.join(__dirname, 'screenshots', 'axis-run-result-tablet.png') });
+    await trial.screenshot({ path: path.join(__dirname, 'screenshots', 'axis-travel-trial-tablet.png') });
+  });
+
+  test('a repeat-and-reverse run loads from a CSV file with a targets row and up/down rows', async ({ page }) => {
+    await signInAs(page, DEMO.technician);
+    const { machineId, axisId } = await newAxis(page.request);
+    await page.goto(`/machines/${machineId}/axes/${axisId}`);
+    const csv = [
+      'target,20,300,610,880',
+      ...[0, 1, 2, 3, 4].map((i) => `up,${0.004 + i * 0.001},0.006,0.005,0.003`),
+      ...[0, 1, 2, 3, 4].map((i) => `down,${-0.004 - i * 0.001},-0.002,-0.003,-0.005`),
+    ].join('\n');
+    await page.getByLabel('CSV file of runs').setInputFiles({ name: 'runs.csv', mimeType: 'text/csv', buffer: Buffer.from(csv) });
+    await expect(page.getByLabel('Target 4 (mm)')).toHaveValue('880');
+    await expect(page.getByLabel('Targets', { exact: true })).toHaveText('4');
+    // The grid runs up, down, up…: the file's grouped rows land in their places.
+    await expect(page.getByLabel('Up 1, target 1')).toHaveValue('0.004');
+    await expect(page.getByLabel('Down 1, target 1')).toHaveValue('-0.004');
+    await expect(page.getByLabel('Down 5, target 1')).toHaveValue('-0.008');
+    await page.getByRole('button', { name: 'Record run' }).click();
+    const run = page.getByRole('region', { name: 'Repeat-and-reverse result' });
+    await expect(run.getByText('Reversal value B')).toBeVisible();
+    await expect(run).toContainText('ISO 230-2 asks for at least 5 targets');
+    // After recording, the grid is cleared for the next run.
+    await expect(page.getByLabel('Up 1, target 1')).toHaveValue('');
   });
 
   test('the test program downloads as a G-code file with its parameters and the caution', async ({ page }) => {

@@ -57,6 +57,6 @@ export function travelEnvelopeOf(machine: MachineRef, rows: AxisRow[], targets: 
     ? `${short.map((a) => `${a.axis} is ${Math.abs(a.spare!).toFixed(1)} mm short`).join('; ')} of the work area plus ${marginMm} mm`
     : missing.length
       ? `Needs ${missing.join(', ')}`
-      : `Every X and Y axis covers the ${workArea.x} × ${workArea.y} mm work area with ${marginMm} mm to spare or more`;
+      : `Every X and Y axis covers the ${workArea.x} × ${workArea.y} mm work area plus ${marginMm} mm`;
   return { machineId: machine.id, status, workArea, margin: targets.travelMargin.target, marginMm, axes, missing, summary };
 }

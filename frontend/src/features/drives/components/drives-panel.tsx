@@ -27,7 +27,7 @@ function StepsCell({ a }: { a: AxisListItem }) {
   const off = Math.abs(a.stepsPerMmDifferencePercent) >= 0.0001;
   return (
     <TableCell>
-      <Typography sx={{ fontWeight: 500 }}>{showSteps(a.stepsPerMm)}</Typography>
+      <Typography sx={{ fontWeight: 500, whiteSpace: 'nowrap' }}>{showSteps(a.stepsPerMm)}</Typography>
       <Typography variant="body2" color="text.secondary">
         theoretical {showSteps(a.theoreticalStepsPerMm)}
         {off ? ` (${showPercent(a.stepsPerMmDifferencePercent, 2)})` : ''}
@@ -82,7 +82,7 @@ export function DrivesPanel({ machineId }: { machineId: string }) {
                     <Link component={RouterLink} to={paths.axis(machineId, a.id)} sx={{ fontWeight: 600 }}>
                       {a.name}
                     </Link>
-                    <Typography variant="body2" color="text.secondary">
+                    <Typography variant="body2" color="text.secondary" sx={{ whiteSpace: 'nowrap' }}>
                       {a.measuredTravelMm ? `${a.measuredTravelMm} mm travel` : 'travel not measured'}
                     </Typography>
                   </TableCell>

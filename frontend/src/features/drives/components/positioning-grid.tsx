@@ -117,7 +117,13 @@ export function PositioningGrid({ axis, onRecorded }: { axis: Axis; onRecorded: 
         runs: cells.map((row, i) => ({ direction: rowLabel(i, runs, order).direction, deviations: row.map(Number) })),
         notes: notes.trim() || undefined,
       },
-      { onSuccess: (r) => onRecorded(r) },
+      {
+        onSuccess: (r) => {
+          setCells(resize([], rows, cols));
+          setNotes('');
+          onRecorded(r);
+        },
+      },
     );
   };
   const empty = cells.flat().filter((v) => v.trim() === '').length;
@@ -148,8 +154,8 @@ export function PositioningGrid({ axis, onRecorded }: { axis: Axis; onRecorded: 
             ))}
           </TextField>
           <TextField select label="Row order" value={order} onChange={(e) => setOrder(e.target.value as RowOrder)} sx={{ width: 230 }}>
-            <MenuItem value="alternate">Up, down, up, down… (as run)</MenuItem>
-            <MenuItem value="grouped">All up runs, then all down</MenuItem>
+            <MenuItem value="alternate">Up, down, up… (as run)</MenuItem>
+            <MenuItem value="grouped">All up, then all down</MenuItem>
           </TextField>
           <Button startIcon={<UploadFileOutlined />} onClick={() => file.current?.click()}>
             Load a CSV file

@@ -10,7 +10,7 @@ function Row({ label, value, strong }: { label: string; value: string; strong?: 
   return (
     <Box sx={{ display: 'flex', justifyContent: 'space-between', gap: 2, py: 0.5, borderBottom: '1px solid', borderColor: 'divider' }}>
       <Typography color="text.secondary">{label}</Typography>
-      <Typography sx={{ fontWeight: strong ? 700 : 500, textAlign: 'right' }}>{value}</Typography>
+      <Typography sx={{ fontWeight: strong ? 700 : 500, textAlign: 'right', whiteSpace: 'nowrap' }}>{value}</Typography>
     </Box>
   );
 }
