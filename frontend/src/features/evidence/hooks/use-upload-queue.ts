@@ -64,11 +64,15 @@ export function useUploadQueue(subject: EvidenceSubject, limits: EvidenceLimits 
   const dismiss = useCallback((key: string) => setItems((list) => list.filter((i) => i.key !== key)), []);
   const clearFinished = useCallback(() => setItems((list) => list.filter((i) => i.status === 'uploading')), []);
 
-  // Leaving the page stops uploads still under way rather than leaving them running unseen.
+  // Uploads still under way when the uploader closes (another tab of the machine file) carry on;
+  // the gallery picks them up when they land. Leaving the app itself would cut them off: ask first.
+  const busy = items.some((i) => i.status === 'uploading');
   useEffect(() => {
-    const open = handles.current;
-    return () => open.forEach((h) => h.abort());
-  }, []);
+    if (!busy) return;
+    const warn = (e: BeforeUnloadEvent) => e.preventDefault();
+    window.addEventListener('beforeunload', warn);
+    return () => window.removeEventListener('beforeunload', warn);
+  }, [busy]);
 
   return { items, add, cancel, dismiss, clearFinished };
 }
