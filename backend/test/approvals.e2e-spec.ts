@@ -262,6 +262,28 @@ describe('readiness board, waivers, approval and certificate', () => {
     expect(res.body.blocking).toEqual([expect.objectContaining({ key: 'fake-straightness:Y1', status: 'outside-target' })]);
   });
 
+  it('locks a real rail sweep it was based on: deleting it answers 409, and a new sweep takes the machine out of ready to cut', async () => {
+    const machineId = await newMachine(ws, 'Swept router');
+    const rail = await ws.as.builder.post(`/api/machines/${machineId}/rails`).send({ label: 'Y1 (left)', axis: 'Y1', lengthMm: 800, holePitchMm: 60, firstHoleMm: 20 });
+    expect([rail.status, rail.body.message]).toEqual([201, undefined]);
+    // Readings within a few µm of a straight line: well inside the router's 20 µm.
+    const stations = [0, 200, 400, 600, 800].map((position, i) => ({ position, reading: [0, 2, 1, 3, 2][i] }));
+    const sweep = await ws.as.builder.post(`/api/rails/${rail.body.id}/sweeps`).send({ unit: 'um', phase: 'as-left', stations });
+    expect([sweep.status, sweep.body.message]).toEqual([201, undefined]);
+    const straightKey = (await board(ws, machineId)).checks.find((c) => c.recordId === sweep.body.id)?.key;
+    expect(straightKey).toBeDefined();
+    await waiveAllBut(ws, machineId, (key) => key === straightKey);
+    await requestAndApprove(ws, machineId, TEST_PASSWORD);
+    const del = await ws.as.builder.delete(`/api/sweeps/${sweep.body.id}`);
+    expect(del.status).toBe(409);
+    expect(del.body.message).toMatch(/approved commissioning record/);
+    expect((await ws.as.builder.get(`/api/sweeps/${sweep.body.id}`)).status).toBe(200);
+    // A new sweep far outside target: the rails module reports it, and approvals react.
+    const bad = await ws.as.builder.post(`/api/rails/${rail.body.id}/sweeps`).send({ unit: 'um', phase: 'as-left', stations: stations.map((st, i) => ({ ...st, reading: [0, 60, -40, 70, 0][i] })) });
+    expect(bad.status).toBe(201);
+    expect((await board(ws, machineId)).state).toBe('being-built');
+  });
+
   it('answers 409 with a message for the certificate of a machine never approved', async () => {
     const machineId = await newMachine(ws, 'Unapproved router');
     const res = await ws.as.viewer.get(`/api/machines/${machineId}/certificate.pdf`);
