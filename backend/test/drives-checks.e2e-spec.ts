@@ -248,7 +248,18 @@ describe('travel trials and repeat-and-reverse runs', () => {
     const within = await ws.as.technician.post(`/api/axes/${x}/travel-trials`).send({ unit: 'mm', moves: [{ commanded: 500, measured: 500.1 }] });
     expect(within.body.status).toBe('within-target'); // 0.02 % ≤ 0.05 %
     checks = await app.get(ReadinessRegistry).checksFor(ref);
-    expect(checks.find((c) => c.key === `travel-trial:${x}`)).toMatchObject({ status: 'within-target', recordType: 'travel-trial', recordId: within.body.id, result: { unit: '%' } });
+    const trialCheck2 = checks.find((c) => c.key === `travel-trial:${x}`)!;
+    expect(trialCheck2).toMatchObject({ status: 'within-target', recordType: 'travel-trial', recordId: within.body.id, result: { unit: '%' } });
+    expect(trialCheck2.series!.lines[0].points[0][0]).toBe(500);
+    expect(trialCheck2.series!.lines[0].points[0][1]).toBeCloseTo(0.1, 12);
+    await ws.as.technician.post(`/api/axes/${x}/positioning-runs`).send(isoBody());
+    checks = await app.get(ReadinessRegistry).checksFor(ref);
+    const runCheck = checks.find((c) => c.key === `positioning:${x}`)!;
+    expect(runCheck.status).toBe('within-target');
+    // chart series in µm: the constructed example's mean up at 125 mm is 5 µm, mean down 1 µm
+    expect(runCheck.series!.lines.map((l) => l.label)).toEqual(['Mean up', 'Mean down']);
+    expect(runCheck.series!.lines[0].points[1][1]).toBeCloseTo(iso.per_target[1].mean_up, 9);
+    expect(runCheck.series!.lines[1].points[1][1]).toBeCloseTo(iso.per_target[1].mean_down, 9);
     // The Drives tab's list carries the same statuses.
     const list = await ws.as.viewer.get(`/api/machines/${m}/axes`);
     expect(list.body.find((a: { id: string }) => a.id === x).checks.travelTrial).toMatchObject({ status: 'within-target', recordId: within.body.id });

@@ -109,6 +109,16 @@ export class DriveChecksService implements OnModuleInit {
         recordId: trial?.id ?? null,
         recordedAt: trial?.createdAt.toISOString() ?? null,
         link,
+        ...(tr
+          ? {
+              series: {
+                title: 'Error of each move against the commanded distance',
+                x: { label: 'Commanded', unit: 'mm' },
+                y: { label: 'Measured − commanded', unit: 'mm' },
+                lines: [{ label: `At ${trial!.stepsPerMmUsed} steps/mm`, points: tr.moves.map((m): [number, number] => [m.commandedMm, m.errorMm]) }],
+              },
+            }
+          : {}),
       });
       summaries.push({ status: trialStatus, summary: trialSummary, recordId: trial?.id ?? null, recordedAt: trial?.createdAt.toISOString() ?? null });
 
@@ -131,6 +141,19 @@ export class DriveChecksService implements OnModuleInit {
         recordId: run?.id ?? null,
         recordedAt: run?.createdAt.toISOString() ?? null,
         link,
+        ...(pr
+          ? {
+              series: {
+                title: 'Mean deviation at each target, approached up and down',
+                x: { label: 'Target', unit: 'mm' },
+                y: { label: 'Mean deviation', unit: 'um' },
+                lines: [
+                  { label: 'Mean up', points: pr.targets.map((p): [number, number] => [p.targetMm, p.meanUpMm * 1000]) },
+                  { label: 'Mean down', points: pr.targets.map((p): [number, number] => [p.targetMm, p.meanDownMm * 1000]) },
+                ],
+              },
+            }
+          : {}),
       });
       summaries.push({ status: verdict?.status ?? 'not-started', summary: runSummary, recordId: run?.id ?? null, recordedAt: run?.createdAt.toISOString() ?? null });
 
