@@ -149,6 +149,12 @@ test.describe('machines and rails', () => {
       await page.goto('/machines');
       await expect(page.getByRole('link', { name: 'Big plasma table' })).toBeVisible();
       await snap(page, `machines-list-${size}`);
+      // The state filter: "Re-check due" hides the tables being built, "All" brings them back.
+      const states = page.getByRole('group', { name: 'Filter by state' });
+      await states.getByRole('button', { name: /^Re-check due/ }).click();
+      await expect(page.getByRole('link', { name: 'Big plasma table' })).toBeHidden();
+      await states.getByRole('button', { name: 'All' }).click();
+      await expect(page.getByRole('link', { name: 'Big plasma table' })).toBeVisible();
       await openMachine(page, 'Big plasma table');
       await page.getByRole('tab', { name: 'Rails' }).click();
       await expect(page.getByRole('region', { name: /Parallelism Y/ })).toContainText('target');

@@ -1,7 +1,7 @@
-import { useMemo } from 'react';
+import { useMemo, useState } from 'react';
 import { Link as RouterLink } from 'react-router-dom';
-import { Link, Paper } from '@mui/material';
-import { DataGrid, type GridColDef } from '@mui/x-data-grid';
+import { Box, Chip, Link, Paper, Typography } from '@mui/material';
+import { DataGrid, type GridColDef, type GridFilterModel } from '@mui/x-data-grid';
 import { paths } from '../../../config/paths';
 import { KIND_LABELS, STATE_LABELS, type MachineKind, type MachineListItem, type MachineState } from '../types';
 import { MachineStateChip } from './machine-state-chip';
@@ -11,6 +11,12 @@ const stateOptions = (Object.keys(STATE_LABELS) as MachineState[]).map((value) =
 
 /** Every machine file, sortable and filterable (by state too, e.g. "Re-check due"). */
 export function MachinesTable({ machines }: { machines: MachineListItem[] }) {
+  const [filterModel, setFilterModel] = useState<GridFilterModel>({ items: [] });
+  const stateFilter = filterModel.items.length === 1 && filterModel.items[0].field === 'state' && filterModel.items[0].operator === 'is' ? (filterModel.items[0].value as MachineState) : null;
+  const pickState = (state: MachineState | null) =>
+    setFilterModel({ ...filterModel, items: state ? [{ id: 'state', field: 'state', operator: 'is', value: state }] : [] });
+  const counts = new Map<MachineState, number>();
+  for (const m of machines) counts.set(m.state, (counts.get(m.state) ?? 0) + 1);
   const columns = useMemo<GridColDef<MachineListItem>[]>(
     () => [
       {
@@ -59,7 +65,26 @@ export function MachinesTable({ machines }: { machines: MachineListItem[] }) {
   );
   return (
     <Paper sx={{ width: '100%' }}>
+      <Box role="group" aria-label="Filter by state" sx={{ display: 'flex', gap: 1, flexWrap: 'wrap', alignItems: 'center', px: 1.5, pt: 1.5 }}>
+        <Typography variant="body2" color="text.secondary" sx={{ mr: 0.5 }}>
+          State
+        </Typography>
+        <Chip label="All" size="small" color={stateFilter ? 'default' : 'primary'} variant={stateFilter ? 'outlined' : 'filled'} onClick={() => pickState(null)} aria-pressed={!stateFilter} />
+        {stateOptions.map((o) => (
+          <Chip
+            key={o.value}
+            size="small"
+            label={`${o.label} (${counts.get(o.value) ?? 0})`}
+            color={stateFilter === o.value ? 'primary' : 'default'}
+            variant={stateFilter === o.value ? 'filled' : 'outlined'}
+            onClick={() => pickState(stateFilter === o.value ? null : o.value)}
+            aria-pressed={stateFilter === o.value}
+          />
+        ))}
+      </Box>
       <DataGrid
+        filterModel={filterModel}
+        onFilterModelChange={setFilterModel}
         aria-label="Machines"
         rows={machines}
         columns={columns}
