@@ -87,14 +87,20 @@ test.describe('frame and safety walk', () => {
 
   test('an owner adds a workshop item that every machine is asked', async ({ page }) => {
     await signInAs(page, DEMO.owner);
-    await openTab(page, 'Small router', 'Safety walk');
+    await openTab(page, 'Big plasma table', 'Safety walk');
+    const total = Number((await page.getByTestId('walk-counts').textContent())!.match(/of (\d+) answered/)![1]);
     await page.getByRole('button', { name: 'Add a workshop item' }).click();
     await page.getByRole('dialog').getByLabel('What is checked').fill('The spare torch consumables are stored dry');
     await page.getByRole('dialog').getByRole('button', { name: 'Add item' }).click();
-    await expect(page.getByRole('group', { name: 'The spare torch consumables are stored dry' })).toContainText('Not answered yet');
-    await expect(page.getByTestId('walk-status')).toHaveText('Not complete');
-    await page.getByRole('group', { name: 'The spare torch consumables are stored dry' }).getByRole('button', { name: 'Not applicable' }).click();
-    await expect(page.getByTestId('walk-status')).toHaveText('Complete');
+    const item = page.getByRole('group', { name: 'The spare torch consumables are stored dry' });
+    await expect(item).toContainText('Not answered yet');
+    await expect(item).toContainText('Workshop item');
+    await expect(page.getByTestId('walk-counts')).toContainText(`of ${total + 1} answered`);
+    await item.getByRole('button', { name: 'Not applicable' }).click();
+    await expect(item).toContainText('Not applicable · Owen Pryce');
+    // Asked on the other machine's walk too.
+    await openTab(page, 'Small router', 'Safety walk');
+    await expect(page.getByRole('group', { name: 'The spare torch consumables are stored dry' })).toBeVisible();
   });
 
   test('the drawing, the colour map and the walk at tablet size', async ({ page }) => {
