@@ -158,6 +158,19 @@ test.describe('evidence: photos and files', () => {
     await snap(page, 'evidence-demo-desktop');
   });
 
+  test("the approved router's sweep photo is kept: no delete, even for the owner", async ({ page }) => {
+    await signInAs(page, DEMO.owner);
+    await page.goto('/machines');
+    await page.getByRole('link', { name: 'Small router' }).click();
+    await page.getByRole('tab', { name: 'Evidence' }).click();
+    await expect(page.getByRole('button', { name: 'View router-y1-sweep.jpg full size' })).toBeVisible();
+    await expect(page.getByLabel('Kept: the check is part of an approval')).toBeVisible();
+    await expect(page.getByRole('button', { name: 'Delete router-y1-sweep.jpg' })).toHaveCount(0);
+    // Machine-level evidence is not part of the approval and can still go.
+    await expect(page.getByRole('button', { name: 'Delete router-frame.jpg' })).toBeVisible();
+    await snap(page, 'evidence-locked-desktop');
+  });
+
   test('a viewer sees the evidence but no upload and no delete', async ({ page, browser }) => {
     const builder = await browser.newPage();
     await signInAs(builder, DEMO.builder);

@@ -50,6 +50,12 @@ export async function seedEvidence(ctx: SeedContext): Promise<void> {
   const file = (name: string, body: Buffer | string) => ({ name, stream: Readable.from([Buffer.from(body)]) });
   try {
     await evidence.attach(builder, { subjectType: 'machine', subjectId: ctx.machines.router, caption: 'Router frame before the gantry went on' }, file('router-frame.jpg', await weldedFrame()));
+    // On the router's final Y1 sweep: the approval that follows locks it, so this photo is kept.
+    const routerRails = await ctx.app.get(RailsService).list(builder, ctx.machines.router);
+    const routerSweep = routerRails.find((r) => r.label.startsWith('Y1'))?.latestSweep;
+    if (routerSweep) {
+      await evidence.attach(builder, { subjectType: 'rail-sweep', subjectId: routerSweep.id, caption: 'Indicator set-up for the final Y1 sweep' }, file('router-y1-sweep.jpg', await indicatorOnRail()));
+    }
     const plasma = ctx.machines.plasma;
     await evidence.attach(builder, { subjectType: 'machine', subjectId: plasma, caption: 'Frame welded and levelled on its feet, before the rails' }, file('frame-on-feet.jpg', await weldedFrame()));
     await evidence.attach(technician, { subjectType: 'machine', subjectId: plasma, caption: 'Tram marks for the diagonals' }, file('squaring-marks.jpg', await squaringMarks()));
