@@ -1,6 +1,7 @@
 import type { NestFastifyApplication } from '@nestjs/platform-fastify';
 import { anonymous, createTestApp, createTestWorkshop, type TestWorkshop } from './helpers/test-app.js';
 import { newAxis, newMachine, rackAxis, screwAxis } from './helpers/drives.js';
+import { SubjectsRegistry } from '../src/records/subjects.registry.js';
 
 describe('axes and their drive records', () => {
   let app: NestFastifyApplication;
@@ -45,6 +46,29 @@ describe('axes and their drive records', () => {
     // GT2 2 mm × 20 teeth = 40 mm/rev, 200 × 16 ÷ 40 = 80 steps/mm (Klipper rotation distance)
     expect(res.body.theoreticalStepsPerMm).toBe(80);
     expect(res.body.letter).toBe('A');
+  });
+
+  it('the theoretical value on the axis equals the calculators API for the same drive', async () => {
+    const body = { ...rackAxis('R'), drive: { type: 'rack', pinionModule: 2, pinionTeeth: 18 }, microsteps: 10, gearRatio: 4.5 };
+    const axis = await ws.as.technician.post(`/api/machines/${machineId}/axes`).send(body);
+    const calc = await ws.as.viewer.post('/api/calc/drive').send({ type: 'rack', pinionModule: 2, pinionTeeth: 18, motorStepsPerRev: 200, microsteps: 10, gearRatio: 4.5 });
+    expect(calc.status).toBe(200);
+    expect(axis.body.theoreticalStepsPerMm).toBe(calc.body.stepsPerMm);
+    expect(axis.body.travelPerRevMm).toBe(calc.body.travelPerRev);
+    expect(axis.body.resolutionMm).toBe(calc.body.resolution);
+  });
+
+  it('axes, travel trials and runs are subjects evidence can be attached to; another workshop resolves none', async () => {
+    const id = await newAxis(ws, machineId, screwAxis('S'));
+    const trial = await ws.as.technician.post(`/api/axes/${id}/travel-trials`).send({ unit: 'mm', moves: [{ commanded: 100, measured: 100.01 }] });
+    const run = await ws.as.technician.post(`/api/axes/${id}/positioning-runs`).send({ unit: 'um', targets: [10, 20], runs: [{ direction: 'up', deviations: [1, 2] }, { direction: 'up', deviations: [2, 2] }, { direction: 'down', deviations: [0, 1] }, { direction: 'down', deviations: [-1, 0] }] });
+    const subjects = app.get(SubjectsRegistry);
+    expect(subjects.types()).toEqual(expect.arrayContaining(['axis', 'travel-trial', 'positioning-run']));
+    expect(await subjects.resolve(ws.id, 'axis', id)).toEqual({ machineId, recordType: 'axis', recordId: id, label: 'Axis S' });
+    expect(await subjects.resolve(ws.id, 'travel-trial', trial.body.id)).toMatchObject({ machineId, recordType: 'travel-trial', label: 'Travel trial of S' });
+    expect(await subjects.resolve(ws.id, 'positioning-run', run.body.id)).toMatchObject({ machineId, recordType: 'positioning-run', label: 'Repeat-and-reverse run of S' });
+    expect(await subjects.resolve(other.id, 'axis', id)).toBeNull();
+    expect(await subjects.resolve(other.id, 'travel-trial', trial.body.id)).toBeNull();
   });
 
   it('builders and viewers read; they cannot add or change axes; anonymous is 401', async () => {
