@@ -11,7 +11,7 @@ import type { SeedContext } from './context.js';
 
 // How far each fixed hole ended up from its aim, in thou (the dial reads to 0.5 thou).
 const MISS_THOU = [0, 0, 0.5, -0.5, 0, 0.5, 0, -0.5, 0];
-const START_THOU = [0.5, 1.5];
+const START_THOU = [0.5, 1.0];
 
 export async function seedBoltDowns(ctx: SeedContext): Promise<void> {
   if (!ctx.machines) throw new Error('seedBoltDowns needs the machines seeded first');

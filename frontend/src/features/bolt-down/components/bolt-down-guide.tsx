@@ -4,11 +4,13 @@ import { BoltDownChart } from '../../../components/charts/bolt-down-chart';
 import { UNIT_LABELS } from '../../../lib/units';
 import { useOfflineQueue } from '../../../lib/use-offline-queue';
 import { holePath } from '../api/record-hole';
+import { useBoltDownSync } from '../hooks/use-bolt-down-sync';
 import { MODE_EXPLAINED, MODE_LABELS, type BoltDown } from '../types';
 import { guideState } from '../utils/guide-state';
+import { signed } from '../utils/format';
 import { FinalSweepForm } from './final-sweep-form';
 import { FinalSweepResult } from './final-sweep-result';
-import { HoleEntryPanel } from './hole-entry-panel';
+import { HoleEntryPanel, type Refusal } from './hole-entry-panel';
 import { HolesTable } from './holes-table';
 import { OfflineBanner } from './offline-banner';
 
@@ -20,9 +22,11 @@ interface Props {
 
 /** The hole-by-hole guide: the hole to fix, its aim and difference, progress, and the holes in order. */
 export function BoltDownGuide({ bd, canRecord, typicalBoltSize }: Props) {
+  useBoltDownSync(bd.id);
   const { pending } = useOfflineQueue(`/bolt-downs/${bd.id}/`);
   const state = guideState(bd, pending);
   const [picked, setPicked] = useState<number | null>(null);
+  const [refusal, setRefusal] = useState<Refusal | null>(null);
   const selected = picked ?? state.nextHole;
   const hole = selected === null ? null : state.holes[selected];
   const unit = UNIT_LABELS[bd.unit];
@@ -32,7 +36,7 @@ export function BoltDownGuide({ bd, canRecord, typicalBoltSize }: Props) {
   return (
     <Box>
       <OfflineBanner pathPrefix={`/bolt-downs/${bd.id}/`} />
-      <Alert severity="info" icon={false} sx={{ mb: 2 }}>
+      <Alert severity="info" icon={false} sx={{ mb: 2 }} role="note" data-testid="mode-explained">
         <strong>{MODE_LABELS[bd.mode]}.</strong> {MODE_EXPLAINED[bd.mode]} Holes are fixed one end first, then the far end, then the middles of the gaps. Readings in {unit}; on
         target within ±{bd.band} {unit} of the aim.
       </Alert>
@@ -47,13 +51,36 @@ export function BoltDownGuide({ bd, canRecord, typicalBoltSize }: Props) {
       <Box sx={{ display: 'grid', gridTemplateColumns: { xs: '1fr', lg: 'minmax(0, 3fr) minmax(0, 2fr)' }, gap: 2, mb: 2 }}>
         <Box>
           {canRecord && hole && !bd.finalSweepId && (
-            <HoleEntryPanel bd={bd} hole={hole} isNext={hole.index === state.nextHole} onFixed={() => setPicked(null)} />
+            <HoleEntryPanel
+              key={hole.index}
+              bd={bd}
+              hole={hole}
+              isNext={hole.index === state.nextHole}
+              refusal={refusal?.index === hole.index ? refusal : null}
+              onFixed={() => {
+                setPicked(null);
+                setRefusal(null);
+              }}
+              onRefused={(r) => {
+                setRefusal(r);
+                setPicked(r.index);
+              }}
+            />
           )}
-          {!canRecord && !state.complete && (
-            <Alert severity="info">You can follow the guide; people who record checks fix the holes.</Alert>
+          {!canRecord && !state.complete && hole && (
+            <Paper sx={{ p: { xs: 2, md: 3 } }} aria-label="Next hole">
+              <Typography color="text.secondary">Next to fix</Typography>
+              <Typography variant="h2" component="h2" sx={{ mb: 0.5 }}>
+                Hole {hole.index + 1} · {hole.position} mm
+              </Typography>
+              <Typography sx={{ fontSize: '1.6rem', fontWeight: 500 }}>Aim {hole.target === null ? 'any reading (sets the datum)' : signed(hole.target, bd.unit)}</Typography>
+              <Alert severity="info" sx={{ mt: 2 }}>
+                You can follow the guide; people who record checks fix the holes.
+              </Alert>
+            </Paper>
           )}
-          {state.complete && state.waitingCount === 0 && !bd.finalSweepId && !sweepWaiting && canRecord && picked === null && (
-            <FinalSweepForm bd={bd} typicalBoltSize={typicalBoltSize} />
+          {state.complete && state.waitingCount === 0 && !bd.finalSweepId && canRecord && picked === null && (
+            <FinalSweepForm bd={bd} typicalBoltSize={typicalBoltSize} waiting={sweepWaiting} />
           )}
           {state.complete && state.waitingCount > 0 && <Alert severity="warning">Every hole is fixed; the final sweep is offered once the waiting readings are sent.</Alert>}
           {bd.finalSweepId && <FinalSweepResult sweepId={bd.finalSweepId} />}

@@ -36,17 +36,18 @@ export function BoltDownScreen({ rail, canRecord }: Props) {
       />
     );
   }
-  // Keep showing what is known while the connection is down.
-  if (bd.isPending) return <LoadingState label="Loading the bolt-down…" />;
-  if (!bd.data) return <ErrorState error={bd.error} onRetry={() => bd.refetch()} />;
+  // Keep showing what is known while the connection is down: the list holds each bolt-down too.
+  const shown = bd.data ?? list.data?.find((b) => b.id === id);
+  if (!shown && bd.isPending) return <LoadingState label="Loading the bolt-down…" />;
+  if (!shown) return <ErrorState error={bd.error} onRetry={() => bd.refetch()} />;
 
   const others = list.data ?? [];
   return (
     <>
-      {(others.length > 1 || (canRecord && bd.data.finalSweepId)) && (
+      {(others.length > 1 || (canRecord && shown.finalSweepId)) && (
         <Box sx={{ display: 'flex', gap: 2, flexWrap: 'wrap', alignItems: 'center', mb: 2 }}>
           {others.length > 1 && (
-            <TextField select label="Bolt-down" value={bd.data.id} onChange={(e) => setChosen(e.target.value)} sx={{ minWidth: 300 }}>
+            <TextField select label="Bolt-down" value={shown.id} onChange={(e) => setChosen(e.target.value)} sx={{ minWidth: 300 }}>
               {others.map((b, i) => (
                 <MenuItem key={b.id} value={b.id}>
                   {new Date(b.createdAt).toLocaleString()} · {b.fixedCount} of {b.holeCount} fixed{i === 0 ? ' (latest)' : ''}
@@ -54,14 +55,14 @@ export function BoltDownScreen({ rail, canRecord }: Props) {
               ))}
             </TextField>
           )}
-          {canRecord && bd.data.finalSweepId && (
+          {canRecord && shown.finalSweepId && (
             <Button variant="outlined" onClick={() => setStarting(true)}>
               Begin a new bolt-down
             </Button>
           )}
         </Box>
       )}
-      <BoltDownGuide key={bd.data.id} bd={bd.data} canRecord={canRecord} typicalBoltSize={rail.typicalBoltSize} />
+      <BoltDownGuide key={shown.id} bd={shown} canRecord={canRecord} typicalBoltSize={rail.typicalBoltSize} />
     </>
   );
 }

@@ -10,6 +10,8 @@ import { parseReading } from '../utils/format';
 interface Props {
   bd: BoltDown;
   typicalBoltSize: string | null;
+  /** A final sweep of this bolt-down is kept on this device, waiting to be sent. */
+  waiting: boolean;
 }
 
 const optionalNumber = (text: string) => (text.trim() === '' ? undefined : parseReading(text));
@@ -18,7 +20,7 @@ const optionalNumber = (text: string) => (text.trim() === '' ? undefined : parse
  * The offer at the end of a bolt-down: one more pass of the carriage with a station at every
  * hole, pre-filled with the readings the holes were fixed at, saved as the rail's sweep.
  */
-export function FinalSweepForm({ bd, typicalBoltSize }: Props) {
+export function FinalSweepForm({ bd, typicalBoltSize, waiting }: Props) {
   const unit = UNIT_LABELS[bd.unit];
   const [readings, setReadings] = useState(() => bd.holes.map((h) => (h.reading === null ? '' : String(h.reading))));
   const [instrument, setInstrument] = useState('Dial indicator on a carriage');
@@ -28,7 +30,6 @@ export function FinalSweepForm({ bd, typicalBoltSize }: Props) {
   const [boltSize, setBoltSize] = useState(typicalBoltSize ?? '');
   const [torque, setTorque] = useState('');
   const [problem, setProblem] = useState<string | null>(null);
-  const [queued, setQueued] = useState(false);
   const torques = useBoltTorques();
   const save = useSaveFinalSweep(bd.id);
   const inputs = useRef<(HTMLInputElement | null)[]>([]);
@@ -54,7 +55,7 @@ export function FinalSweepForm({ bd, typicalBoltSize }: Props) {
     if (badField) return setProblem(`${badField[0]} must be a number`);
     setProblem(null);
     try {
-      const outcome = await save.mutateAsync({
+      await save.mutateAsync({
         unit: bd.unit,
         phase,
         stations: bd.holes.map((h, i) => ({ position: h.position, reading: parseReading(readings[i])! })),
@@ -64,7 +65,6 @@ export function FinalSweepForm({ bd, typicalBoltSize }: Props) {
         boltSize: boltSize || undefined,
         torqueNm: numbers.torqueNm ?? undefined,
       });
-      setQueued(outcome.status === 'queued');
     } catch (err) {
       setProblem(err instanceof ApiError ? err.details.join('; ') || err.message : String(err));
     }
@@ -147,12 +147,12 @@ export function FinalSweepForm({ bd, typicalBoltSize }: Props) {
           {problem}
         </Alert>
       )}
-      {queued && (
+      {waiting && !save.isPending && (
         <Alert severity="warning" sx={{ mt: 2 }}>
           The final sweep is waiting to send; it is kept on this device and saved once the connection is back.
         </Alert>
       )}
-      <Button ref={submit} type="submit" variant="contained" size="large" disabled={save.isPending || queued} sx={{ mt: 2 }}>
+      <Button ref={submit} type="submit" variant="contained" size="large" disabled={save.isPending || waiting} sx={{ mt: 2 }}>
         Save the final sweep
       </Button>
     </Paper>

@@ -1,4 +1,4 @@
-import { useEffect, useRef, useState, type FormEvent } from 'react';
+import { useState, type FormEvent } from 'react';
 import { Alert, Box, Button, Chip, Paper, Stack, TextField, Typography } from '@mui/material';
 import CheckOutlined from '@mui/icons-material/CheckOutlined';
 import { ApiError } from '../../../lib/api-client';
@@ -9,27 +9,31 @@ import type { BoltDown } from '../types';
 import type { GuideHole } from '../utils/guide-state';
 import { holeName, parseReading, plain, signed } from '../utils/format';
 
+export interface Refusal {
+  index: number;
+  text: string;
+  message: string;
+}
+
 interface Props {
   bd: BoltDown;
   hole: GuideHole;
   isNext: boolean;
+  /** The server's refusal of the last reading typed at this hole, to show with it. */
+  refusal?: Refusal | null;
   /** Called once a hole is fixed (sent or kept waiting), so the guide can move on. */
   onFixed: (index: number) => void;
+  /** Called when the server refuses the reading: the guide comes back to this hole with it. */
+  onRefused: (refusal: Refusal) => void;
 }
 
 /** The hole being fixed: its aim, the reading as it is typed, and the difference, large. */
-export function HoleEntryPanel({ bd, hole, isNext, onFixed }: Props) {
-  const [text, setText] = useState('');
+// Mounted afresh for each hole (keyed by the guide), so nothing typed at one hole leaks to the next.
+export function HoleEntryPanel({ bd, hole, isNext, refusal, onFixed, onRefused }: Props) {
+  const [text, setText] = useState(refusal?.text ?? '');
   const [problem, setProblem] = useState<string | null>(null);
-  const input = useRef<HTMLInputElement>(null);
   const record = useRecordHole(bd.id);
   const unit = UNIT_LABELS[bd.unit];
-
-  useEffect(() => {
-    setText('');
-    setProblem(null);
-    input.current?.focus();
-  }, [hole.index]);
 
   const typed = parseReading(text);
   const difference = typed !== null && hole.target !== null ? typed - hole.target : null;
@@ -45,8 +49,8 @@ export function HoleEntryPanel({ bd, hole, isNext, onFixed }: Props) {
       await record.mutateAsync({ index: hole.index, positionMm: hole.position, reading: typed, unit: bd.unit, fixed: true });
       onFixed(hole.index);
     } catch (err) {
-      // Refused by the server: keep what was typed so it can be corrected.
-      setProblem(err instanceof ApiError ? err.details.join('; ') || err.message : String(err));
+      // Refused by the server: back to this hole with what was typed, so it can be corrected.
+      onRefused({ index: hole.index, text, message: err instanceof ApiError ? err.details.join('; ') || err.message : String(err) });
     }
   }
 
@@ -72,7 +76,6 @@ export function HoleEntryPanel({ bd, hole, isNext, onFixed }: Props) {
             {hole.target === null ? 'The first hole fixed sets the datum the others are aimed at.' : `On target within ±${plain(bd.band, bd.unit)}.`}
           </Typography>
           <TextField
-            inputRef={input}
             autoFocus
             label={`Reading at ${holeName(hole.index).toLowerCase()} (${unit})`}
             value={text}
@@ -104,9 +107,9 @@ export function HoleEntryPanel({ bd, hole, isNext, onFixed }: Props) {
         </Box>
       </Box>
 
-      {problem && record.isError && (
+      {refusal && !problem && (
         <Alert severity="error" sx={{ mt: 2 }}>
-          The server refused this reading: {problem}. Nothing else was changed.
+          The server refused the reading {refusal.text} {unit}: {refusal.message}. Nothing else was changed.
         </Alert>
       )}
       <Button type="submit" variant="contained" size="large" startIcon={<CheckOutlined />} disabled={record.isPending} sx={{ mt: 2, px: 4, py: 1.25, fontSize: '1.1rem' }}>

@@ -32,8 +32,9 @@ function State({ hole, isNext }: { hole: GuideHole; isNext: boolean }) {
 export function HolesTable({ bd, holes, nextHole, selected, onSelect }: Props) {
   const unit = UNIT_LABELS[bd.unit];
   return (
-    <TableContainer component={Paper}>
-      <Table size="small" aria-label="Holes in fixing order">
+    // Long rails scroll inside the table so the hole being fixed stays in reach above it.
+    <TableContainer component={Paper} sx={{ maxHeight: holes.length > 20 ? 620 : undefined }}>
+      <Table size="small" stickyHeader aria-label="Holes in fixing order">
         <TableHead>
           <TableRow>
             <TableCell>Order</TableCell>

@@ -12,7 +12,7 @@ export function OfflineBanner({ pathPrefix }: { pathPrefix?: string }) {
           role="alert"
           sx={{ mb: 2 }}
           action={
-            <Button color="inherit" size="small" onClick={retryNow}>
+            <Button color="inherit" size="small" onClick={retryNow} sx={{ whiteSpace: 'nowrap' }}>
               Send now
             </Button>
           }

@@ -1,0 +1,171 @@
+import { expect, test, type APIRequestContext, type Page } from '@playwright/test';
+import { DEMO, signInAs, snap } from './support/session';
+
+const TABLET = { width: 820, height: 1180 };
+
+interface HistoryEntry {
+  recordType: string;
+  action: string;
+  changes: { writeId?: string; hole?: number; reading?: number; fixed?: boolean } | null;
+}
+
+/** A new plasma machine file and one rail of it, made through the API as the signed-in builder. */
+async function newRail(request: APIRequestContext, rail: { lengthMm: number; holePitchMm: number; firstHoleMm: number }) {
+  const machine = await request.post('/api/machines', { data: { name: `Guide test ${Date.now()}`, kind: 'plasma', workArea: { x: 3000, y: 1500 } } });
+  expect(machine.status()).toBe(201);
+  const machineId = (await machine.json()).id as string;
+  const made = await request.post(`/api/machines/${machineId}/rails`, { data: { label: 'Y1 (left)', axis: 'Y1', profileSize: 20, ...rail } });
+  expect(made.status()).toBe(201);
+  return { machineId, railId: (await made.json()).id as string };
+}
+
+async function begin(page: Page, machineId: string, railId: string) {
+  await page.goto(`/machines/${machineId}/rails/${railId}/bolt-down`);
+  await expect(page.getByRole('heading', { name: /Bolt-down guide · Y1 \(left\)/ })).toBeVisible();
+  await page.getByRole('radio', { name: /Line mode/ }).check();
+  await page.getByRole('button', { name: 'Begin the bolt-down' }).click();
+  await expect(page.getByTestId('progress')).toHaveText(/0 of \d+ holes fixed/);
+}
+
+async function fixHole(page: Page, hole: number, reading: string) {
+  const input = page.getByLabel(`Reading at hole ${hole} (thou)`);
+  await input.fill(reading);
+  await input.press('Enter');
+}
+
+test.describe('bolt-down guide', () => {
+  test('runs the guide to the end on a new rail and saves the final sweep as the rail sweep', async ({ page }) => {
+    await signInAs(page, DEMO.builder);
+    // 300 mm rail, holes every 60 mm from 30 mm: 5 holes, fixed in the order 1, 5, 3, 2, 4.
+    const { machineId, railId } = await newRail(page.request, { lengthMm: 300, holePitchMm: 60, firstHoleMm: 30 });
+    await begin(page, machineId, railId);
+    await expect(page.getByTestId('mode-explained')).toContainText('Line mode. Each hole is aimed at the straight line between the nearest fixed holes');
+
+    await expect(page.getByRole('heading', { name: 'Hole 1', exact: true })).toBeVisible();
+    await expect(page.getByTestId('aim')).toHaveText('any reading');
+    await fixHole(page, 1, '0.5');
+    await expect(page.getByTestId('progress')).toHaveText('1 of 5 holes fixed');
+
+    // The far end is aimed at the first reading; the difference follows the typing.
+    await expect(page.getByRole('heading', { name: 'Hole 5', exact: true })).toBeVisible();
+    await expect(page.getByTestId('aim')).toHaveText('+0.5 thou');
+    const reading5 = page.getByLabel('Reading at hole 5 (thou)');
+    await reading5.fill('2.5');
+    await expect(page.getByTestId('difference')).toHaveText('+2.0 thou');
+    await expect(page.getByRole('status', { name: 'Difference from the aim' })).toContainText('Outside ±1.0 thou');
+    await snap(page, 'bolt-down-guide-outside-desktop');
+    await reading5.fill('1.3');
+    await expect(page.getByTestId('difference')).toHaveText('+0.8 thou');
+    await expect(page.getByRole('status', { name: 'Difference from the aim' })).toContainText('Within ±1.0 thou');
+    await reading5.press('Enter');
+
+    // Line mode: hole 3 (150 mm) halfway between 0.5 and 1.3 thou.
+    await expect(page.getByTestId('aim')).toHaveText('+0.9 thou');
+    await page.setViewportSize(TABLET);
+    await snap(page, 'bolt-down-guide-tablet');
+    await page.setViewportSize({ width: 1366, height: 900 });
+    await fixHole(page, 3, '1.0');
+    await expect(page.getByTestId('progress')).toHaveText('3 of 5 holes fixed');
+    await snap(page, 'bolt-down-guide-desktop');
+    await fixHole(page, 2, '0.8');
+    await fixHole(page, 4, '1.2');
+    await expect(page.getByTestId('progress')).toHaveText('5 of 5 holes fixed');
+
+    // The guide survives a reload: progress is on the server.
+    await page.reload();
+    await expect(page.getByTestId('progress')).toHaveText('5 of 5 holes fixed');
+
+    // The final sweep is offered with a station at every hole, filled with the fixed readings.
+    const form = page.getByRole('form', { name: 'Final sweep at every hole' });
+    await expect(form).toBeVisible();
+    await expect(form.getByLabel('Final reading at 150 mm')).toHaveValue('1');
+    await form.getByLabel('Final reading at 270 mm').fill('1.3');
+    await form.getByLabel('Temperature (°C)').fill('18');
+    await form.getByRole('button', { name: 'Save the final sweep' }).click();
+    const result = page.getByRole('region', { name: 'Final sweep result' }).or(page.getByLabel('Final sweep result'));
+    await expect(result).toBeVisible();
+    await expect(page.getByTestId('final-sweep-status')).toHaveText('Within target');
+    await expect(page.getByRole('figure', { name: 'Straightness of the final sweep' })).toBeVisible();
+    await snap(page, 'bolt-down-final-sweep-desktop');
+    await page.setViewportSize(TABLET);
+    await snap(page, 'bolt-down-final-sweep-tablet');
+
+    // The sweep is the rail's, with the readings typed and the usual M5 torque offered.
+    const sweeps = await (await page.request.get(`/api/rails/${railId}/sweeps`)).json();
+    expect(sweeps).toHaveLength(1);
+    expect(sweeps[0]).toMatchObject({ unit: 'thou', phase: 'as-left', boltSize: 'M5', torqueNm: 8.8, temperatureC: 18, status: 'within-target' });
+    expect(sweeps[0].stations.map((s: { reading: number }) => s.reading)).toEqual([0.5, 0.8, 1, 1.2, 1.3]);
+  });
+
+  test('keeps typing and fixing while the connection is cut, then saves every reading exactly once', async ({ page }) => {
+    await signInAs(page, DEMO.builder);
+    // 500 mm rail, holes every 60 mm from 10 mm: 9 holes, fixed in the order 1, 9, 5, 3, 7, 2, 4, 6, 8.
+    const { machineId, railId } = await newRail(page.request, { lengthMm: 500, holePitchMm: 60, firstHoleMm: 10 });
+    await page.setViewportSize(TABLET);
+    await begin(page, machineId, railId);
+    await fixHole(page, 1, '0');
+    await fixHole(page, 9, '2.0');
+    await expect(page.getByTestId('progress')).toHaveText('2 of 9 holes fixed');
+    const bd = (await (await page.request.get(`/api/rails/${railId}/bolt-downs`)).json())[0];
+
+    // The first write after the cut reaches the server but its answer is lost; the rest never leave.
+    let answersLost = 0;
+    await page.route('**/api/bolt-downs/**', async (route) => {
+      if (answersLost === 0 && route.request().method() === 'PUT') {
+        answersLost++;
+        await route.fetch();
+      }
+      await route.abort('internetdisconnected');
+    });
+    // Hole 5 (250 mm) halfway along the line from 0 to 2.0 thou.
+    await expect(page.getByTestId('aim')).toHaveText('+1.0 thou');
+    await fixHole(page, 5, '1.5');
+    await expect(page.getByRole('row', { name: 'Hole 5', exact: true })).toContainText('Waiting to send');
+    // Aims still follow the holes fixed, worked out in the browser: hole 3 (130 mm) between 0 and 1.5.
+    await expect(page.getByTestId('aim')).toHaveText('+0.8 thou');
+    await fixHole(page, 3, '0.5');
+    await fixHole(page, 7, '2.0');
+    await expect(page.getByRole('alert').filter({ hasText: 'Offline — 3 readings waiting' })).toBeVisible();
+    await expect(page.getByTestId('progress')).toHaveText('5 of 9 holes fixed');
+    await snap(page, 'bolt-down-offline-tablet');
+
+    // What is waiting survives a reload of the page while still offline.
+    await page.reload();
+    await expect(page.getByRole('alert').filter({ hasText: 'Offline — 3 readings waiting' })).toBeVisible();
+    await expect(page.getByRole('row', { name: 'Hole 7', exact: true })).toContainText('Waiting to send');
+    await fixHole(page, 2, '0.4');
+    await expect(page.getByRole('alert').filter({ hasText: 'Offline — 4 readings waiting' })).toBeVisible();
+
+    // The connection returns: the waiting writes go out in order on their own.
+    await page.unroute('**/api/bolt-downs/**');
+    await expect(page.getByRole('alert').filter({ hasText: 'readings waiting' })).toHaveCount(0, { timeout: 40_000 });
+    await expect(page.getByText('Waiting to send')).toHaveCount(0);
+    await fixHole(page, 4, '0.7');
+    await expect(page.getByTestId('progress')).toHaveText('7 of 9 holes fixed');
+
+    const state = await (await page.request.get(`/api/bolt-downs/${bd.id}`)).json();
+    const readings = Object.fromEntries(state.holes.filter((h: { fixed: boolean }) => h.fixed).map((h: { index: number; reading: number }) => [h.index + 1, h.reading]));
+    expect(readings).toEqual({ 1: 0, 9: 2, 5: 1.5, 3: 0.5, 7: 2, 2: 0.4, 4: 0.7 });
+    // Each fix was applied exactly once, though the first offline one reached the server twice.
+    const history: HistoryEntry[] = await (await page.request.get(`/api/machines/${machineId}/history`)).json();
+    const writes = history.filter((e) => e.recordType === 'bolt-down' && e.action === 'updated');
+    expect(writes).toHaveLength(7);
+    expect(new Set(writes.map((e) => e.changes?.writeId)).size).toBe(7);
+    expect(writes.map((e) => e.changes?.hole).sort()).toEqual([0, 1, 2, 3, 4, 6, 8]);
+    expect(answersLost).toBe(1);
+  });
+
+  test('the demo plasma table has a bolt-down in progress; a viewer follows it without recording', async ({ page }) => {
+    await signInAs(page, DEMO.viewer);
+    const machines = await (await page.request.get('/api/machines')).json();
+    const plasma = machines.find((m: { kind: string; name: string }) => m.kind === 'plasma' && m.name === 'Big plasma table');
+    const rails = await (await page.request.get(`/api/machines/${plasma.id}/rails`)).json();
+    const y2 = rails.find((r: { axis: string }) => r.axis === 'Y2');
+    await page.goto(`/machines/${plasma.id}/rails/${y2.id}/bolt-down`);
+    await expect(page.getByTestId('progress')).toHaveText(/^9 of \d+ holes fixed$/);
+    await expect(page.getByRole('table', { name: 'Holes in fixing order' })).toContainText('Fixed');
+    await expect(page.getByRole('button', { name: /Fix hole/ })).toHaveCount(0);
+    await expect(page.getByText('people who record checks fix the holes')).toBeVisible();
+    await snap(page, 'bolt-down-demo-viewer-desktop');
+  });
+});
