@@ -76,4 +76,3 @@ test.describe('sign-in and the app frame', () => {
     await other.close();
   });
 });
-});
