@@ -13,6 +13,8 @@ export interface DriverHarness {
   env(): Record<string, string>;
   /** Every object or file the driver holds, temporary ones included. */
   storedKeys(): Promise<string[]>;
+  /** Takes an object away behind the app's back. */
+  removeKey(key: string): Promise<void>;
 }
 
 export const sha256 = (b: Buffer) => createHash('sha256').update(b).digest('hex');
@@ -352,6 +354,16 @@ export function evidenceApiCases(driver: string, harness: DriverHarness) {
     const evidenceEntries = history.body.filter((h: { recordType: string }) => h.recordType === 'evidence');
     expect(evidenceEntries.find((h: { recordId: string; action: string }) => h.recordId === a.body.id && h.action === 'deleted')).toMatchObject({ summary: 'Photo a.png removed from Bench check 1' });
     expect(evidenceEntries.find((h: { recordId: string; action: string }) => h.recordId === c.body.id && h.action === 'attached')).toMatchObject({ summary: 'Photo c.png attached to Bench check 1' });
+  });
+
+  it('answers 404 with a message when the stored file has gone missing', async () => {
+    const made = await upload(ctx.ws.as.builder, onMachine(), { body: PDF, name: 'lost.pdf' });
+    const key = (await harness.storedKeys()).find((k) => k.endsWith(made.body.id));
+    expect(key).toBeDefined();
+    await harness.removeKey(key!);
+    const res = await ctx.ws.as.builder.get(`/api/evidence/${made.body.id}/content`);
+    expect(res.status).toBe(404);
+    expect(res.body.message).toMatch(/stored file is missing/);
   });
 
   it('reports its limits and the accepted types', async () => {

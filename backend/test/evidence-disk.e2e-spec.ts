@@ -1,5 +1,5 @@
 import { mkdtempSync, rmSync } from 'node:fs';
-import { readdir } from 'node:fs/promises';
+import { readdir, rm } from 'node:fs/promises';
 import os from 'node:os';
 import path from 'node:path';
 import { evidenceApiCases, evidenceSizeLimitCases, type DriverHarness } from './evidence-cases.js';
@@ -22,6 +22,7 @@ async function walk(dir: string, prefix = ''): Promise<string[]> {
 const harness: DriverHarness = {
   env: () => ({ RAILWRIGHT_STORAGE: 'disk', RAILWRIGHT_DATA: data }),
   storedKeys: () => walk(root),
+  removeKey: (key) => rm(path.join(root, ...key.split('/'))),
 };
 
 afterAll(() => rmSync(data, { recursive: true, force: true }));

@@ -1,4 +1,4 @@
-import { ListObjectsV2Command, S3Client } from '@aws-sdk/client-s3';
+import { DeleteObjectCommand, ListObjectsV2Command, S3Client } from '@aws-sdk/client-s3';
 import { mkdtempSync, rmSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
@@ -51,6 +51,9 @@ const harness: DriverHarness = {
     RAILWRIGHT_DATA: path.join(dir, 'data'),
   }),
   storedKeys: listAll,
+  removeKey: async (key) => {
+    await client.send(new DeleteObjectCommand({ Bucket: BUCKET, Key: key }));
+  },
 };
 
 describe('evidence API on the S3 driver', () => {
