@@ -20,7 +20,10 @@ async function newRail(request: APIRequestContext, rail: { lengthMm: number; hol
 }
 
 async function begin(page: Page, machineId: string, railId: string) {
-  await page.goto(`/machines/${machineId}/rails/${railId}/bolt-down`);
+  // The rail page leads to the guide.
+  await page.goto(`/machines/${machineId}/rails/${railId}`);
+  await page.getByRole('link', { name: 'Bolt-down guide' }).click();
+  await expect(page).toHaveURL(new RegExp(`/machines/${machineId}/rails/${railId}/bolt-down$`));
   await expect(page.getByRole('heading', { name: /Bolt-down guide · Y1 \(left\)/ })).toBeVisible();
   await page.getByRole('radio', { name: /Line mode/ }).check();
   await page.getByRole('button', { name: 'Begin the bolt-down' }).click();
@@ -86,6 +89,7 @@ test.describe('bolt-down guide', () => {
     await expect(result).toBeVisible();
     await expect(page.getByTestId('final-sweep-status')).toHaveText('Within target');
     await expect(page.getByRole('figure', { name: 'Straightness of the final sweep' })).toBeVisible();
+    await page.evaluate(() => window.scrollTo(0, 0));
     await snap(page, 'bolt-down-final-sweep-desktop');
     await page.setViewportSize(TABLET);
     await snap(page, 'bolt-down-final-sweep-tablet');

@@ -25,10 +25,13 @@ export default function BoltDownRoute() {
         <Link component={RouterLink} to={paths.machines}>
           Machines
         </Link>
-        <Link component={RouterLink} to={paths.machine(machineId)}>
+        <Link component={RouterLink} to={`${paths.machine(machineId)}?tab=rails`}>
           {machine.data?.name ?? 'Machine file'}
         </Link>
-        <Typography color="text.primary">{r.label}</Typography>
+        <Link component={RouterLink} to={paths.rail(machineId, railId)}>
+          Rail {r.label}
+        </Link>
+        <Typography color="text.primary">Bolt-down guide</Typography>
       </Breadcrumbs>
       <PageHeader title={`Bolt-down guide · ${r.label}`} subtitle={`${machine.data?.name ?? ''} · ${r.axis} rail, ${r.lengthMm} mm, ${r.holes.length} holes`} />
       <BoltDownScreen rail={r} canRecord={canRecord(me.data?.role)} />

@@ -1,6 +1,7 @@
 import { useState } from 'react';
 import { Link as RouterLink, useParams } from 'react-router-dom';
-import { Grid, Link, Stack } from '@mui/material';
+import { Button, Grid, Link, Stack } from '@mui/material';
+import HardwareOutlined from '@mui/icons-material/HardwareOutlined';
 import { paths } from '../../config/paths';
 import { PageHeader } from '../../components/layout/page-header';
 import { LoadingState } from '../../components/states/loading-state';
@@ -46,6 +47,9 @@ export default function RailRoute() {
     <>
       {recorder && <RailActions rail={r} others={rails.data ?? []} afterDelete={railsTab} />}
       {/* Bolt-down guide: its link or button goes here, beside the rail's own actions. */}
+      <Button component={RouterLink} to={paths.boltDown(machineId, railId)} variant="outlined" startIcon={<HardwareOutlined />}>
+        Bolt-down guide
+      </Button>
     </>
   );
 

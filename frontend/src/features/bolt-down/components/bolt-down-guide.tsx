@@ -7,7 +7,7 @@ import { holePath } from '../api/record-hole';
 import { useBoltDownSync } from '../hooks/use-bolt-down-sync';
 import { MODE_EXPLAINED, MODE_LABELS, type BoltDown } from '../types';
 import { guideState } from '../utils/guide-state';
-import { signed } from '../utils/format';
+import { plain, signed } from '../utils/format';
 import { FinalSweepForm } from './final-sweep-form';
 import { FinalSweepResult } from './final-sweep-result';
 import { HoleEntryPanel, type Refusal } from './hole-entry-panel';
@@ -38,7 +38,7 @@ export function BoltDownGuide({ bd, canRecord, typicalBoltSize }: Props) {
       <OfflineBanner pathPrefix={`/bolt-downs/${bd.id}/`} />
       <Alert severity="info" icon={false} sx={{ mb: 2 }} role="note" data-testid="mode-explained">
         <strong>{MODE_LABELS[bd.mode]}.</strong> {MODE_EXPLAINED[bd.mode]} Holes are fixed one end first, then the far end, then the middles of the gaps. Readings in {unit}; on
-        target within ±{bd.band} {unit} of the aim.
+        target within ±{plain(bd.band, bd.unit)} of the aim.
       </Alert>
 
       <Paper sx={{ p: 2, mb: 2 }}>

@@ -2,9 +2,8 @@ import { Alert, Box, Chip, Paper, Stack, Typography } from '@mui/material';
 import { StraightnessChart } from '../../../components/charts/straightness-chart';
 import { LoadingState } from '../../../components/states/loading-state';
 import { ErrorState } from '../../../components/states/error-state';
-import { fromMm, UNIT_LABELS } from '../../../lib/units';
+import { formatLength, fromMm, UNIT_LABELS } from '../../../lib/units';
 import { useFinalSweep } from '../api/get-sweep';
-import { plain } from '../utils/format';
 
 /** The saved final sweep: its straightness against the target, as the rails feature computed it. */
 export function FinalSweepResult({ sweepId }: { sweepId: string }) {
@@ -28,11 +27,11 @@ export function FinalSweepResult({ sweepId }: { sweepId: string }) {
       <Box sx={{ display: 'flex', gap: 4, flexWrap: 'wrap', mb: 2 }}>
         <Box>
           <Typography color="text.secondary">Straightness, least squares</Typography>
-          <Typography sx={{ fontSize: '1.6rem', fontWeight: 600 }}>{plain(fromMm(ls.straightness, u), u)}</Typography>
+          <Typography sx={{ fontSize: '1.6rem', fontWeight: 600 }}>{formatLength(ls.straightness, u)}</Typography>
         </Box>
         <Box>
           <Typography color="text.secondary">Minimum zone</Typography>
-          <Typography sx={{ fontSize: '1.6rem', fontWeight: 600 }}>{plain(fromMm(mz.straightness, u), u)}</Typography>
+          <Typography sx={{ fontSize: '1.6rem', fontWeight: 600 }}>{formatLength(mz.straightness, u)}</Typography>
         </Box>
         <Box>
           <Typography color="text.secondary">Target</Typography>
