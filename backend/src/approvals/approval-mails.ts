@@ -23,7 +23,7 @@ export function approvedMail(i: { snapshot: ApprovalSnapshot; approvedBy: string
     text: [
       `${i.approvedBy} approved ${i.snapshot.machine.name} (${i.snapshot.workshop.name}) as ready to cut on ${i.approvedAt.toISOString().replace('T', ' ').slice(0, 16)} UTC.`,
       '',
-      `Checks: ${i.snapshot.checks.length}, of which ${waived.length} waived.`,
+      waived.length ? `Checks: ${i.snapshot.checks.length}, of which ${waived.length} waived:` : `Checks: ${i.snapshot.checks.length}, all within target.`,
       ...waived.map((c) => `  Waived: ${KIND_LABELS[c.kind]} \u2014 ${c.subject}: ${c.waiver?.reason ?? ''}`),
       `Re-check due: ${day(i.recheckDueAt)}.`,
       `Record hash (SHA-256): ${i.recordHash}`,

@@ -77,7 +77,7 @@ export class ApprovalsService implements OnModuleInit {
       recordType: 'waiver',
       recordId: row.id,
       action: 'created',
-      summary: `Waived ${KIND_LABELS[check.kind].toLowerCase()} of ${check.subject}: ${dto.reason}`,
+      summary: `Waived the ${KIND_LABELS[check.kind].toLowerCase()} (${check.subject}): ${dto.reason}`,
       changes: { check: checkKey, status: { from: check.measuredStatus, to: 'waived' }, reason: dto.reason },
     });
     return { id: row.id, checkKey, reason: row.reason, waivedBy: row.waivedByName, waivedAt: row.waivedAt.toISOString(), recordId: row.recordId };

@@ -111,7 +111,10 @@ function header(doc: Doc, s: ApprovalSnapshot, a: CertificateInput['approval']) 
   doc.y = box.y + box.h + 4;
   const counts = countOf(s.checks);
   doc.moveDown(0.6);
-  para(doc, `${s.checks.length} required checks: ${counts.within} within target, ${counts.waived} waived by an owner with a written reason.`, 'regular', 9, MUTED);
+  const summary = counts.waived
+    ? `${s.checks.length} required checks: ${counts.within} within target, ${counts.waived} waived by an owner with a written reason.`
+    : `${s.checks.length} required checks, all within target.`;
+  para(doc, summary, 'regular', 9, MUTED);
 }
 
 const countOf = (checks: BoardCheck[]) => ({

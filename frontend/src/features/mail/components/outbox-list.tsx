@@ -14,7 +14,7 @@ const URL_RE = /(https?:\/\/[^\s]+)/g;
 function Body({ text }: { text: string }) {
   return (
     <Typography component="pre" sx={{ whiteSpace: 'pre-wrap', fontFamily: 'inherit', m: 0, wordBreak: 'break-word' }}>
-      {text.split(URL_RE).map((part, i) => (URL_RE.test(part) ? <Link key={i} href={part}>{part}</Link> : part))}
+      {text.split(URL_RE).map((part, i) => (/^https?:\/\//.test(part) ? <Link key={i} href={part}>{part}</Link> : part))}
     </Typography>
   );
 }
