@@ -98,6 +98,28 @@ test.describe('machines and rails', () => {
     await expect(page.getByRole('region', { name: 'Sweep saved' }).getByText(/against a target of 2 thou: within target/)).toBeVisible();
   });
 
+  test('the specification is edited with the target set chosen; a CSV file can be uploaded', async ({ page }) => {
+    await signInAs(page, DEMO.builder);
+    const name = `Spec table ${Date.now()}`;
+    await newMachineWithRail(page, name);
+    await page.getByRole('button', { name: 'Import CSV' }).click();
+    const dialog = page.getByRole('dialog', { name: 'Import readings from CSV' });
+    await dialog.getByLabel('CSV file').setInputFiles({ name: 'sweep.csv', mimeType: 'text/csv', buffer: Buffer.from('position;reading\n0;0\n200;0,5\n400;1\n600;0,5\n') });
+    await expect(dialog.getByRole('table', { name: 'Import preview' }).getByRole('row')).toHaveCount(5);
+    await dialog.getByRole('button', { name: 'Import 4 stations' }).click();
+    await expect(page.getByLabel('Reading at 200 mm')).toHaveValue('0.5');
+    await page.getByRole('link', { name }).click();
+    await page.getByRole('tab', { name: 'Specification' }).click();
+    await page.getByRole('button', { name: 'Edit specification' }).click();
+    const edit = page.getByRole('dialog', { name: 'Edit specification' });
+    await edit.getByLabel('Target set').click();
+    await page.getByRole('option', { name: 'Router (default)' }).click();
+    await edit.getByLabel('Work area X').fill('2500');
+    await edit.getByRole('button', { name: 'Save specification' }).click();
+    await expect(edit).toBeHidden();
+    await expect(page.getByText(/work area 2500 × 1500 mm · Router \(default\)/)).toBeVisible();
+  });
+
   test('the demo router is within target on every rail and pair; the plasma table is not', async ({ page }) => {
     await signInAs(page, DEMO.viewer);
     const machines = await (await page.request.get('/api/machines')).json();
