@@ -56,6 +56,18 @@ export function makePngBomb(): Buffer {
 export const PDF = Buffer.from('%PDF-1.4\n1 0 obj << /Type /Catalog >> endobj\ntrailer << /Root 1 0 R >>\n%%EOF\n', 'latin1');
 export const CSV = Buffer.from('station_mm,reading_mm\n0,0.000\n250,0.012\n500,-0.004\n', 'utf8');
 
+/** A GET whose body is kept as raw bytes, whatever its content type. */
+export function download(agent: Agent, url: string) {
+  return agent
+    .get(url)
+    .buffer(true)
+    .parse((res, cb) => {
+      const chunks: Buffer[] = [];
+      res.on('data', (d: Buffer) => chunks.push(d));
+      res.on('end', () => cb(null, Buffer.concat(chunks)));
+    });
+}
+
 /** Field order as a browser's FormData sends it: fields first, then the file. */
 export function upload(agent: Agent | ReturnType<typeof anonymous>, fields: Record<string, string>, file?: { body: Buffer; name: string; type?: string }) {
   let req = agent.post('/api/evidence');
@@ -157,11 +169,7 @@ export function evidenceApiCases(driver: string, harness: DriverHarness) {
     for (const c of cases) {
       const made = await upload(ctx.ws.as.technician, onMachine(), { body: c.body, name: c.name, type: 'application/octet-stream' });
       expect(made.status).toBe(201);
-      const res = await ctx.ws.as.viewer.get(`/api/evidence/${made.body.id}/content`).buffer(true).parse((r, cb) => {
-        const chunks: Buffer[] = [];
-        r.on('data', (d: Buffer) => chunks.push(d));
-        r.on('end', () => cb(null, Buffer.concat(chunks)));
-      });
+      const res = await download(ctx.ws.as.viewer, `/api/evidence/${made.body.id}/content`);
       expect(res.status).toBe(200);
       expect(res.headers['content-type']).toBe(c.type);
       expect(res.headers['content-disposition']).toMatch(c.disposition);
@@ -177,21 +185,13 @@ export function evidenceApiCases(driver: string, harness: DriverHarness) {
     const made = await upload(ctx.ws.as.builder, onMachine(), { body, name: 'wiring drawings.pdf' });
     expect(made.status).toBe(201);
     expect(made.body).toMatchObject({ size: body.length, sha256: sha256(body), contentType: 'application/pdf' });
-    const res = await ctx.ws.as.builder.get(`/api/evidence/${made.body.id}/content`).buffer(true).parse((r, cb) => {
-      const chunks: Buffer[] = [];
-      r.on('data', (d: Buffer) => chunks.push(d));
-      r.on('end', () => cb(null, Buffer.concat(chunks)));
-    });
+    const res = await download(ctx.ws.as.builder, `/api/evidence/${made.body.id}/content`);
     expect(sha256(res.body as Buffer)).toBe(sha256(body));
   });
 
   it('makes a WebP thumbnail at most 320 px for photos, none for files', async () => {
     const made = await upload(ctx.ws.as.builder, onMachine(), { body: await makeJpeg(1600, 1200), name: 'gantry.jpg' });
-    const thumb = await ctx.ws.as.viewer.get(`/api/evidence/${made.body.id}/thumbnail`).buffer(true).parse((r, cb) => {
-      const chunks: Buffer[] = [];
-      r.on('data', (d: Buffer) => chunks.push(d));
-      r.on('end', () => cb(null, Buffer.concat(chunks)));
-    });
+    const thumb = await download(ctx.ws.as.viewer, `/api/evidence/${made.body.id}/thumbnail`);
     expect(thumb.status).toBe(200);
     expect(thumb.headers['content-type']).toBe('image/webp');
     const meta = await sharp(thumb.body as Buffer).metadata();
@@ -200,6 +200,15 @@ export function evidenceApiCases(driver: string, harness: DriverHarness) {
     const pdf = await upload(ctx.ws.as.builder, onMachine(), { body: PDF, name: 'manual.pdf' });
     expect(pdf.body.thumbnailUrl).toBeNull();
     expect((await ctx.ws.as.builder.get(`/api/evidence/${pdf.body.id}/thumbnail`)).status).toBe(404);
+  });
+
+  it('turns a phone photo upright: size and thumbnail follow its camera orientation', async () => {
+    // EXIF orientation 6: stored 1200 wide × 900 high, shown turned a quarter, 900 × 1200.
+    const turned = await sharp({ create: { width: 1200, height: 900, channels: 3, background: '#777' } }).jpeg().withMetadata({ orientation: 6 }).toBuffer();
+    const made = await upload(ctx.ws.as.builder, onMachine(), { body: turned, name: 'portrait.jpg' });
+    expect(made.body).toMatchObject({ widthPx: 900, heightPx: 1200 });
+    const thumb = await download(ctx.ws.as.builder, made.body.thumbnailUrl);
+    expect(await sharp(thumb.body as Buffer).metadata()).toMatchObject({ width: 240, height: 320 });
   });
 
   it('decides the type from the bytes, not the name', async () => {
