@@ -1,5 +1,7 @@
 import type { NestFastifyApplication } from '@nestjs/platform-fastify';
 import { randomUUID } from 'node:crypto';
+import { RecordsService } from '../src/records/records.service.js';
+import { SubjectsRegistry } from '../src/records/subjects.registry.js';
 import { anonymous, createTestApp, createTestWorkshop, type Agent, type TestWorkshop } from './helpers/test-app.js';
 
 // A 300 mm rail with holes every 60 mm from 30 mm: holes 0…4 at 30, 90, 150, 210, 270 mm.
@@ -254,6 +256,24 @@ describe('bolt-down guide API', () => {
     const state = (await ws.as.viewer.get(`/api/bolt-downs/${bd.id}`)).body;
     expect(state.holes[0]).toMatchObject({ reading: 0.25, fixed: true });
     expect(state.fixedCount).toBe(2);
+  });
+
+  it('is a subject other records can be attached to, within its workshop only', async () => {
+    const bd = await start(await newRail());
+    const subjects = app.get(SubjectsRegistry);
+    expect(subjects.types()).toContain('bolt-down');
+    expect(await subjects.resolve(ws.id, 'bolt-down', bd.id)).toEqual({ machineId, recordType: 'bolt-down', recordId: bd.id, label: 'Bolt-down of rail Y1 (left)' });
+    expect(await subjects.resolve(other.id, 'bolt-down', bd.id)).toBeNull();
+  });
+
+  it('refuses changes (409) once an approval was based on the bolt-down, and keeps it as it was', async () => {
+    const bd = await start(await newRail());
+    await fix(bd.id, 0, 0.1);
+    await app.get(RecordsService).lock(randomUUID(), [{ recordType: 'bolt-down', recordId: bd.id }]);
+    const res = await put(bd.id, 4, { reading: 1, fixed: true, writeId: randomUUID() });
+    expect(res.status).toBe(409);
+    expect(res.body.message).toMatch(/approved commissioning record/);
+    expect((await ws.as.viewer.get(`/api/bolt-downs/${bd.id}`)).body.fixedCount).toBe(1);
   });
 
   describe('final sweep', () => {
