@@ -7,10 +7,10 @@ import { NumberField, parseNumber } from './number-field';
 import { UnitSelect } from './unit-select';
 
 const FIELDS = [
-  ['sideX', 'X side'],
-  ['sideY', 'Y side'],
-  ['diagonal1', 'Diagonal 1 (X0 Y0 corner to far corner)'],
-  ['diagonal2', 'Diagonal 2 (X-far Y0 corner to X0 Y-far corner)'],
+  ['sideX', 'X side', undefined],
+  ['sideY', 'Y side', undefined],
+  ['diagonal1', 'Diagonal 1', 'X0 Y0 corner to the far corner'],
+  ['diagonal2', 'Diagonal 2', 'X-far Y0 corner to X0 Y-far corner'],
 ] as const;
 type Field = (typeof FIELDS)[number][0];
 
@@ -29,7 +29,7 @@ export function DiagonalCheckForm({ machineId, onSaved }: { machineId: string; o
     const parsed = {} as Record<Field, number>;
     for (const [key, label] of FIELDS) {
       const v = parseNumber(values[key]);
-      if (v === null || v <= 0) found[key] = `${label.split(' (')[0]} must be a length greater than zero`;
+      if (v === null || v <= 0) found[key] = `${label} must be a length greater than zero`;
       else parsed[key] = v;
     }
     const span = parseNumber(values.gantrySpan);
@@ -46,9 +46,9 @@ export function DiagonalCheckForm({ machineId, onSaved }: { machineId: string; o
         {create.error && <Alert severity="error">{(create.error as Error).message}</Alert>}
         <Box sx={{ display: 'grid', gap: 1.5, gridTemplateColumns: { xs: '1fr', sm: '1fr 1fr' } }}>
           <UnitSelect value={unit} onChange={setUnit} />
-          <NumberField label="Gantry span (between the two drives)" unit={u} value={values.gantrySpan} onChange={set('gantrySpan')} error={!!errors.gantrySpan} helperText={errors.gantrySpan ?? 'Optional; the X side when empty'} />
-          {FIELDS.map(([key, label]) => (
-            <NumberField key={key} label={label} unit={u} value={values[key]} onChange={set(key)} error={!!errors[key]} helperText={errors[key]} required />
+          <NumberField label="Gantry span" unit={u} value={values.gantrySpan} onChange={set('gantrySpan')} error={!!errors.gantrySpan} helperText={errors.gantrySpan ?? 'Between the two drives; the X side when empty'} />
+          {FIELDS.map(([key, label, help]) => (
+            <NumberField key={key} label={label} unit={u} value={values[key]} onChange={set(key)} error={!!errors[key]} helperText={errors[key] ?? help} required />
           ))}
         </Box>
         <TextField label="Note" value={note} onChange={(e) => setNote(e.target.value)} placeholder="How the rectangle was marked and read" />

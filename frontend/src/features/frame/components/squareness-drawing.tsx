@@ -15,7 +15,7 @@ export interface SquarenessDrawingProps {
 }
 
 const W = 640;
-const H = 430;
+const MAX_H = 430;
 const RUST = '#a4522f';
 
 type P = [number, number];
@@ -43,8 +43,11 @@ export function SquarenessDrawing(p: SquarenessDrawingProps) {
   const ys = [A, B, C, D, [a, 0], [a, b]].map((q) => q[1]);
   const minX = Math.min(...xs);
   const minY = Math.min(...ys);
-  const s = Math.min((W - M.l - M.r) / (Math.max(...xs) - minX), (H - M.t - M.b) / (Math.max(...ys) - minY));
-  const at = ([x, y]: P): P => [M.l + (x - minX) * s, H - M.b - (y - minY) * s];
+  const s = Math.min((W - M.l - M.r) / (Math.max(...xs) - minX), (MAX_H - M.t - M.b) / (Math.max(...ys) - minY));
+  // As tall as the figure needs, so a wide rectangle leaves no empty band above it.
+  const figureH = Math.ceil(M.t + (Math.max(...ys) - minY) * s + M.b);
+  const H = figureH + 48;
+  const at = ([x, y]: P): P => [M.l + (x - minX) * s, figureH - M.b - (y - minY) * s];
   const [a2, b2, c2, d2] = [at(A), at(B), at(C), at(D)];
   const ideal = [at([0, 0]), at([a, 0]), at([a, b]), at([0, b])];
   const poly = (pts: P[]) => pts.map((q) => q.join(',')).join(' ');
@@ -53,8 +56,10 @@ export function SquarenessDrawing(p: SquarenessDrawingProps) {
   const along = (from: P, to: P, f: number): P => [from[0] + (to[0] - from[0]) * f, from[1] + (to[1] - from[1]) * f];
   const d1Long = p.longDiagonal === 1 && sign !== 0;
   const d2Long = p.longDiagonal === 2 && sign !== 0;
-  const l1 = along(a2, c2, 0.22);
-  const l2 = along(b2, d2, 0.22);
+  // Numbered tags near each diagonal's starting corner, the lengths in a key below the figure,
+  // so nothing is written across the crossing.
+  const l1 = along(a2, c2, 0.14);
+  const l2 = along(b2, d2, 0.14);
 
   // The arrow sits beside the end of the gantry that runs ahead and points back towards Y0.
   const end = p.correction.end;
@@ -77,12 +82,28 @@ export function SquarenessDrawing(p: SquarenessDrawingProps) {
         <polygon points={poly([a2, b2, c2, d2])} fill="rgba(29, 79, 74, 0.05)" stroke={palette.ink} strokeWidth={2.2} />
         <line x1={a2[0]} y1={a2[1]} x2={c2[0]} y2={c2[1]} stroke={d1Long ? RUST : palette.steelLight} strokeWidth={d1Long ? 3 : 2} />
         <line x1={b2[0]} y1={b2[1]} x2={d2[0]} y2={d2[1]} stroke={d2Long ? RUST : palette.steelLight} strokeWidth={d2Long ? 3 : 2} />
-        <text x={l1[0] + 8} y={l1[1] - 8} fontSize={13} fill={d1Long ? RUST : palette.steel} fontWeight={d1Long ? 700 : 500} style={halo}>
-          Diagonal 1 · {len(p.diagonal1Mm)}{d1Long ? ' (long)' : ''}
-        </text>
-        <text x={l2[0] - 8} y={l2[1] - 8} fontSize={13} textAnchor="end" fill={d2Long ? RUST : palette.steel} fontWeight={d2Long ? 700 : 500} style={halo}>
-          Diagonal 2 · {len(p.diagonal2Mm)}{d2Long ? ' (long)' : ''}
-        </text>
+        {[
+          [l1, '1', d1Long],
+          [l2, '2', d2Long],
+        ].map(([pt, n, long]) => (
+          <g key={n as string}>
+            <circle cx={(pt as P)[0]} cy={(pt as P)[1]} r={10} fill="#ffffff" stroke={long ? RUST : palette.steelLight} strokeWidth={2} />
+            <text x={(pt as P)[0]} y={(pt as P)[1] + 4.5} fontSize={12.5} fontWeight={700} textAnchor="middle" fill={long ? RUST : palette.steel}>
+              {n as string}
+            </text>
+          </g>
+        ))}
+        {[
+          [1, p.diagonal1Mm, d1Long, 'X0 Y0 corner to the far corner'],
+          [2, p.diagonal2Mm, d2Long, 'X-far Y0 corner to X0 Y-far corner'],
+        ].map(([n, mm, long, path], i) => (
+          <g key={n as number}>
+            <line x1={M.l} x2={M.l + 28} y1={figureH + 8 + i * 20} y2={figureH + 8 + i * 20} stroke={long ? RUST : palette.steelLight} strokeWidth={long ? 3 : 2} />
+            <text x={M.l + 36} y={figureH + 12.5 + i * 20} fontSize={13} fill={long ? RUST : palette.ink} fontWeight={long ? 700 : 400}>
+              {`Diagonal ${n} · ${len(mm as number)}${long ? ' (long)' : ''} · ${path as string}`}
+            </text>
+          </g>
+        ))}
         <text x={(a2[0] + b2[0]) / 2} y={Math.max(a2[1], b2[1]) + 24} fontSize={13} textAnchor="middle" fill={palette.ink}>
           X side {len(a)}
         </text>

@@ -10,7 +10,6 @@ export function SquaringHistory({ checks, selectedId, onSelect }: { checks: Diag
   const ordered = [...checks].reverse();
   const target = checks[0]?.target;
   const rows = ordered.map((c, i) => ({ n: i + 1, mmPerMetre: Number(c.result.mmPerMetre.toFixed(4)) }));
-  const top = Math.max(target?.value ?? 0, ...rows.map((r) => r.mmPerMetre)) * 1.15;
   return (
     <Box>
       {rows.length >= 2 && (
@@ -19,9 +18,9 @@ export function SquaringHistory({ checks, selectedId, onSelect }: { checks: Diag
             <LineChart data={rows} margin={{ top: 12, right: 24, bottom: 18, left: 4 }}>
               <CartesianGrid stroke="#e2ded4" />
               <XAxis dataKey="n" type="number" domain={[1, rows.length]} allowDecimals={false} tickCount={rows.length} label={{ value: 'Check', position: 'insideBottom', offset: -8 }} />
-              <YAxis domain={[0, Number(top.toPrecision(2))]} width={64} label={{ value: 'mm/m', angle: -90, position: 'insideLeft', offset: 8 }} />
+              <YAxis domain={[0, 'auto']} width={64} label={{ value: 'mm/m', angle: -90, position: 'insideLeft', offset: 8 }} />
               <Tooltip formatter={(v) => [`${Number(v).toFixed(3)} mm/m`, 'Out of square']} labelFormatter={(n) => `Check ${n}`} />
-              {target && <ReferenceLine y={target.value} stroke={palette.brass} strokeDasharray="6 4" label={{ value: `target ${target.value} mm/m`, position: 'insideTopRight', fill: '#6b5420', fontSize: 12 }} />}
+              {target && <ReferenceLine y={target.value} ifOverflow="extendDomain" stroke={palette.brass} strokeDasharray="6 4" label={{ value: `target ${target.value} mm/m`, position: 'insideBottomLeft', fill: '#6b5420', fontSize: 12 }} />}
               <Line dataKey="mmPerMetre" stroke={palette.steel} strokeWidth={2} dot={{ r: 4 }} isAnimationActive={false} />
             </LineChart>
           </ResponsiveContainer>

@@ -7,17 +7,17 @@ import { NumberField, parseNumber } from './number-field';
 import { UnitSelect } from './unit-select';
 
 const NOMINAL = [
-  ['nx', 'Commanded X size'],
-  ['ny', 'Commanded Y size'],
-  ['nc', 'Commanded circle diameter'],
+  ['nx', 'Programmed X'],
+  ['ny', 'Programmed Y'],
+  ['nc', 'Programmed circle ⌀'],
 ] as const;
 const MEASURED = [
-  ['mx', 'Measured X size'],
-  ['my', 'Measured Y size'],
-  ['d1', 'Measured diagonal 1'],
-  ['d2', 'Measured diagonal 2'],
-  ['cx', 'Circle diameter along X'],
-  ['cy', 'Circle diameter along Y'],
+  ['mx', 'Measured X'],
+  ['my', 'Measured Y'],
+  ['d1', 'Diagonal 1'],
+  ['d2', 'Diagonal 2'],
+  ['cx', 'Circle ⌀ along X'],
+  ['cy', 'Circle ⌀ along Y'],
 ] as const;
 type Key = (typeof NOMINAL)[number][0] | (typeof MEASURED)[number][0];
 
@@ -83,12 +83,12 @@ export function TestCutForm({ machineId, onSaved }: { machineId: string; onSaved
         <Typography variant="h5" component="h4">As measured</Typography>
         <Box sx={grid}>
           {MEASURED.map(field)}
-          <NumberField label="Kerf not compensated" unit={u} value={v.kerf} onChange={set('kerf')} error={!!errors.kerf} helperText={errors.kerf ?? 'Leave empty when kerf compensation was on'} />
+          <NumberField label="Kerf (uncompensated)" unit={u} value={v.kerf} onChange={set('kerf')} error={!!errors.kerf} helperText={errors.kerf ?? 'Leave empty when kerf compensation was on'} />
         </Box>
         <Typography variant="h5" component="h4">Steps per mm when cut (optional)</Typography>
         <Box sx={grid}>
-          <NumberField label="Steps per mm X" unit="steps/mm" value={v.sx} onChange={set('sx')} error={!!errors.sx} helperText={errors.sx} />
-          <NumberField label="Steps per mm Y" unit="steps/mm" value={v.sy} onChange={set('sy')} error={!!errors.sy} helperText={errors.sy} />
+          <NumberField label="Steps/mm X" unit="steps/mm" value={v.sx} onChange={set('sx')} error={!!errors.sx} helperText={errors.sx} />
+          <NumberField label="Steps/mm Y" unit="steps/mm" value={v.sy} onChange={set('sy')} error={!!errors.sy} helperText={errors.sy} />
         </Box>
         <TextField label="Note" value={note} onChange={(e) => setNote(e.target.value)} placeholder="Material, thickness, current, speed" />
         <Box>
