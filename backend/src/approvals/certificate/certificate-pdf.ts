@@ -2,7 +2,7 @@ import PDFDocument from 'pdfkit';
 import type { ApprovalSnapshot, BoardCheck } from '../snapshot.js';
 import { KIND_LABELS, STATUS_LABELS } from '../board.js';
 import { cautionsFor } from '../cautions.js';
-import { drawResultGauge, drawSeriesChart } from './charts.js';
+import { drawResultGauge, drawSeriesChart, drawSquarenessSketch } from './charts.js';
 import { certificateFonts, type FontName } from './fonts.js';
 import { dayOf, resultText, targetText, utc } from './format.js';
 import { BRASS, INK, MUTED, PAPER, RULE, STATUS_COLOURS, STEEL } from './palette.js';
@@ -54,7 +54,7 @@ export function renderCertificate(input: CertificateInput): Promise<Buffer> {
   header(doc, s, a);
   checksTable(doc, s.checks);
   waivers(doc, s.checks);
-  charts(doc, s.checks);
+  charts(doc, s.checks, s.machine.workArea);
   signature(doc, a);
   cautions(doc, s.machine.kind);
   verification(doc, s, a);
@@ -192,16 +192,18 @@ function waivers(doc: Doc, checks: BoardCheck[]) {
   }
 }
 
-function charts(doc: Doc, checks: BoardCheck[]) {
+function charts(doc: Doc, checks: BoardCheck[], workArea: { x: number; y: number }) {
   const charted = checks.filter((c) => CHART_KINDS.includes(c.kind));
   heading(doc, 'Charts: straightness, positioning, squareness');
   if (!charted.length) return para(doc, 'This machine had no straightness, positioning or squareness checks to chart.', 'regular', 9, MUTED);
   for (const c of charted) {
-    const h = c.series ? 170 : c.result && c.target ? 66 : 24;
+    const sketch = !c.series && c.kind === 'diagonal-check' && c.result?.unit === 'mm/m';
+    const h = c.series ? 170 : sketch ? 110 : c.result && c.target ? 66 : 24;
     ensure(doc, h + 24);
     write(doc, 'medium', 9, `${KIND_LABELS[c.kind]} \u2014 ${c.subject}${c.series?.title ? `: ${c.series.title}` : ''}`, M, doc.y, { width: WIDTH });
     const box = { x: M, y: doc.y + 4, w: WIDTH, h };
     if (c.series) drawSeriesChart(doc, box, c.series);
+    else if (sketch) drawSquarenessSketch(doc, box, c, workArea);
     else drawResultGauge(doc, box, c);
     doc.y = box.y + h + 10;
   }

@@ -102,3 +102,31 @@ function drawNoData(doc: Doc, box: Box, text: string) {
   write(doc, 'italic', 7.5, text, box.x + 8, box.y + 6, { lineBreak: false });
   doc.fillColor(INK);
 }
+
+/**
+ * A diagonal check without a series: the work area's rectangle beside the parallelogram its
+ * measured out-of-square angle makes, the skew drawn exaggerated so it can be seen at all.
+ */
+export function drawSquarenessSketch(doc: Doc, box: Box, c: BoardCheck, workArea: { x: number; y: number }): void {
+  if (!c.result || c.result.unit !== 'mm/m') return drawResultGauge(doc, box, c);
+  drawNoData(doc, box, 'no chart data \u2014 sketch of the measured out-of-square, skew exaggerated:');
+  const h = box.h - 34;
+  const w = Math.min(box.w * 0.45, (h * workArea.x) / Math.max(1, workArea.y));
+  const x0 = box.x + 24;
+  const y0 = box.y + 22;
+  // 0.1 mm/m leans by a tenth of the height (capped): visible, and labelled with the true value.
+  const lean = Math.max(-0.35, Math.min(0.35, c.result.value)) * h;
+  doc.save();
+  doc.lineWidth(0.6).strokeColor(RULE).dash(2, { space: 2 }).rect(x0, y0, w, h).stroke().undash();
+  doc.lineWidth(1.4).strokeColor(STATUS_COLOURS[c.status] ?? INK);
+  doc.moveTo(x0, y0 + h).lineTo(x0 + w, y0 + h).lineTo(x0 + w + lean, y0).lineTo(x0 + lean, y0).closePath().stroke();
+  doc.lineWidth(0.6).strokeColor(MUTED).moveTo(x0, y0 + h).lineTo(x0 + w + lean, y0).moveTo(x0 + w, y0 + h).lineTo(x0 + lean, y0).stroke();
+  doc.restore();
+  const tx = x0 + w + Math.abs(lean) + 24;
+  write(doc, 'medium', 8, `${num(c.result.value)} mm/m out of square`, tx, y0 + 4, { lineBreak: false });
+  write(doc, 'regular', 7.5, `target ${targetText(c)}`, tx, y0 + 18, { lineBreak: false });
+  doc.fillColor(MUTED);
+  write(doc, 'regular', 7, c.result.summary, tx, y0 + 32, { width: box.x + box.w - tx - 8 });
+  write(doc, 'regular', 7, `dashed: square; solid: as measured; diagonals drawn thin (work area ${workArea.x} \u00d7 ${workArea.y} mm)`, tx, y0 + h - 10, { width: box.x + box.w - tx - 8, lineBreak: false });
+  doc.fillColor(INK);
+}
