@@ -58,6 +58,7 @@ test.describe('drives', () => {
     await expect(y2).toContainText('Rack and pinion, module 1.5, 20-tooth pinion');
     await expect(y2).toContainText('50.9296 steps/mm');
     await expect(y2.getByText('Outside target')).toBeVisible();
+    await expect(y2).toContainText('-0.201 % scale error');
     await expect(axes.getByRole('row').filter({ hasText: /^Z/ })).toContainText('Screw Ø16 mm, lead 5 mm');
     await expect(page.getByRole('region', { name: 'Travel envelope' })).toContainText('3000 × 1500 mm');
     // Viewers read but do not add axes.

@@ -222,6 +222,11 @@ describe('travel trials and repeat-and-reverse runs', () => {
     const patch = await ws.as.technician.patch(`/api/axes/${id}`).send({ notes: 'x' });
     expect(patch.status).toBe(409);
     expect((await ws.as.technician.get(`/api/axes/${id}`)).body.locked).toBe(true);
+    // A recalibration after approval still goes through, and into the history.
+    const again = await ws.as.technician.post(`/api/axes/${id}/travel-trials`).send({ unit: 'mm', moves: [{ commanded: 100, measured: 100.1 }] });
+    const reapplied = await ws.as.technician.post(`/api/axes/${id}/travel-trials/${again.body.id}/apply`);
+    expect(reapplied.status).toBe(200);
+    expect(reapplied.body.stepsHistory.at(-1)).toMatchObject({ from: 641.2826, reason: 'travel-trial', trialId: again.body.id });
   });
 
   it('unlocked trials and runs can be deleted by a calibrator', async () => {

@@ -101,9 +101,12 @@ export class AxesService implements OnModuleInit {
     return this.respond(row);
   }
 
-  /** Stores a corrected steps per mm from a travel trial; the old value goes into the history. */
+  /**
+   * Stores a corrected steps per mm from a travel trial; the old value goes into the history.
+   * Allowed on a locked axis: the lock keeps the drive record the speed check and the travel
+   * envelope were judged on, and a recalibration after approval must stay possible (and audited).
+   */
   async applyStepsPerMm(actor: SessionUser, axis: AxisRow, value: number, trialId: string): Promise<AxisRow> {
-    await this.records.assertEditable('axis', axis.id, `Axis ${axis.name}`);
     const stepsHistory = [...axis.stepsHistory, change(actor, axis.stepsPerMm, value, 'travel-trial', trialId)];
     const row = await this.repo.update(actor.workshopId, axis.id, { stepsPerMm: value, stepsHistory });
     await this.records.audit(actor, {

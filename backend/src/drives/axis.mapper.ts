@@ -6,6 +6,8 @@ import { axisLetter, describeDrive, toEngineDrive } from './drive-record.js';
 export interface AxisCheckSummary {
   status: 'not-started' | 'within-target' | 'outside-target' | 'not-applicable';
   summary: string;
+  /** The result in a few words for a table cell ("−0.201 %"), or null when nothing is recorded. */
+  headline: string | null;
   recordId: string | null;
   recordedAt: string | null;
 }

@@ -120,7 +120,7 @@ export class DriveChecksService implements OnModuleInit {
             }
           : {}),
       });
-      summaries.push({ status: trialStatus, summary: trialSummary, recordId: trial?.id ?? null, recordedAt: trial?.createdAt.toISOString() ?? null });
+      summaries.push({ status: trialStatus, summary: trialSummary, headline: tr ? `${tr.errorPercent >= 0 ? '+' : ''}${fmt(tr.errorPercent)} % scale error` : null, recordId: trial?.id ?? null, recordedAt: trial?.createdAt.toISOString() ?? null });
 
       const run = runs.get(axis.id);
       const pr = run ? (run.result as unknown as PositioningResult) : null;
@@ -155,7 +155,7 @@ export class DriveChecksService implements OnModuleInit {
             }
           : {}),
       });
-      summaries.push({ status: verdict?.status ?? 'not-started', summary: runSummary, recordId: run?.id ?? null, recordedAt: run?.createdAt.toISOString() ?? null });
+      summaries.push({ status: verdict?.status ?? 'not-started', summary: runSummary, headline: pr ? `accuracy ${fmt(pr.accuracyMm)} mm` : null, recordId: run?.id ?? null, recordedAt: run?.createdAt.toISOString() ?? null });
 
       const speed = speedCheckOf(axis, targets);
       const speedSummary = speed.rpm !== null ? `${Math.round(speed.rpm)} rpm at ${speed.feedRate} mm/min; allowed ${Math.round(Math.min(speed.allowedSpeed!, speed.dnLimitSpeed!))} rpm (highest safe feed ${Math.round(speed.safeFeedRate!)} mm/min)` : speed.reason!;
@@ -173,7 +173,7 @@ export class DriveChecksService implements OnModuleInit {
           link,
         });
       }
-      summaries.push({ status: speed.status, summary: speedSummary, recordId: speed.applicable ? axis.id : null, recordedAt: null });
+      summaries.push({ status: speed.status, summary: speedSummary, headline: speed.rpm !== null ? `${Math.round(speed.rpm)} of ${Math.round(Math.min(speed.allowedSpeed!, speed.dnLimitSpeed!))} rpm allowed` : null, recordId: speed.applicable ? axis.id : null, recordedAt: null });
       return { checks: out, summaries };
     });
   }

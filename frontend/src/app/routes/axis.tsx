@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { Link as RouterLink, useParams } from 'react-router-dom';
-import { Box, Button, Link, Stack } from '@mui/material';
+import { Alert, Box, Button, Link, Stack } from '@mui/material';
 import ArrowBack from '@mui/icons-material/ArrowBack';
 import EditOutlined from '@mui/icons-material/EditOutlined';
 import FileDownloadOutlined from '@mui/icons-material/FileDownloadOutlined';
@@ -53,6 +53,7 @@ export default function AxisRoute() {
         }
       />
       <Stack spacing={3}>
+        {a.locked && <Alert severity="info">An approval was based on this axis's drive record, so the drive can no longer be edited. A correction from a new travel trial can still be applied; the old value stays in the history.</Alert>}
         <AxisSummary axis={a} />
         <Box sx={{ display: 'grid', gridTemplateColumns: { xs: '1fr', lg: '2fr 1fr' }, gap: 3, alignItems: 'start' }}>
           <TravelTrialSection axis={a} mayRecord={mayRecord} />

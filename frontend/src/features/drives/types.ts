@@ -60,6 +60,7 @@ export interface Axis {
 export interface CheckSummary {
   status: DriveStatus;
   summary: string;
+  headline: string | null;
   recordId: string | null;
   recordedAt: string | null;
 }

@@ -15,10 +15,17 @@ import { AxisFormDialog } from './axis-form-dialog';
 import { DriveStatusChip } from './drive-status-chip';
 import { TravelEnvelopeCard } from './travel-envelope-card';
 
+/** The chip, with the headline figure under it and the full summary on hover. */
 function CheckCell({ check }: { check: CheckSummary }) {
+  const headline = check.headline;
   return (
     <TableCell title={check.summary}>
       <DriveStatusChip status={check.status} />
+      {headline && (
+        <Typography variant="body2" color="text.secondary" sx={{ mt: 0.5, maxWidth: 180 }}>
+          {headline}
+        </Typography>
+      )}
     </TableCell>
   );
 }
@@ -64,7 +71,7 @@ export function DrivesPanel({ machineId }: { machineId: string }) {
         </EmptyState>
       ) : (
         <TableContainer component={Paper}>
-          <Table aria-label="Axes" size="small" sx={{ '& td, & th': { py: 1.25 } }}>
+          <Table aria-label="Axes" size="small" sx={{ '& td, & th': { py: 1.25, px: { xs: 1, md: 2 } } }}>
             <TableHead>
               <TableRow>
                 <TableCell>Axis</TableCell>
@@ -86,7 +93,7 @@ export function DrivesPanel({ machineId }: { machineId: string }) {
                       {a.measuredTravelMm ? `${a.measuredTravelMm} mm travel` : 'travel not measured'}
                     </Typography>
                   </TableCell>
-                  <TableCell sx={{ maxWidth: 260 }}>
+                  <TableCell sx={{ maxWidth: 260, minWidth: 160 }}>
                     {a.driveSummary}
                     <Typography variant="body2" color="text.secondary">
                       {a.motorStepsPerRev} steps × {a.microsteps} microsteps{a.gearRatio !== 1 ? ` × ${a.gearRatio}:1` : ''}

@@ -4,6 +4,8 @@ import { fromMm, UNIT_LABELS } from '../../../lib/units';
 import type { PositioningRun, Verdict } from '../types';
 import { showDateTime, showLength, showTarget } from '../utils/format';
 import { DriveStatusChip } from './drive-status-chip';
+import { DeleteRecordButton } from './delete-record-button';
+import { useDeletePositioningRun } from '../api/delete-positioning-run';
 
 function Judged({ label, verdict, unit }: { label: string; verdict: Verdict; unit: PositioningRun['unit'] }) {
   return (
@@ -20,7 +22,8 @@ function Judged({ label, verdict, unit }: { label: string; verdict: Verdict; uni
 }
 
 /** ISO 230-2 results of one run, judged against the target set, with the mean deviations chart. */
-export function PositioningResult({ run }: { run: PositioningRun }) {
+export function PositioningResult({ run, mayDelete }: { run: PositioningRun; mayDelete: boolean }) {
+  const remove = useDeletePositioningRun(run.axisId);
   const r = run.result;
   const u = run.unit;
   const ul = UNIT_LABELS[u];
@@ -88,6 +91,11 @@ export function PositioningResult({ run }: { run: PositioningRun }) {
         {r.runsUp} runs up, {r.runsDown} down · recorded by {run.recordedBy}
         {run.notes ? ` · ${run.notes}` : ''}. Accuracy, repeatability and reversal follow ISO 230-2 (±2s bands, 4s repeatability).
       </Typography>
+      {mayDelete && (
+        <Box sx={{ mt: 1 }}>
+          <DeleteRecordButton what="run" locked={run.locked} onDelete={() => remove.mutate(run.id)} pending={remove.isPending} error={remove.error} />
+        </Box>
+      )}
     </Paper>
   );
 }

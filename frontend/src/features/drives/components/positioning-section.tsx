@@ -32,7 +32,7 @@ export function PositioningSection({ axis, mayRecord }: { axis: Axis; mayRecord:
           ))}
         </TextField>
       )}
-      {shown && <PositioningResult run={shown} />}
+      {shown && <PositioningResult run={shown} mayDelete={mayRecord} />}
     </Stack>
   );
 }

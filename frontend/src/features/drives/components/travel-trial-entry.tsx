@@ -1,4 +1,4 @@
-import { useState } from 'react';
+import { useEffect, useState } from 'react';
 import { Alert, Box, Button, Checkbox, FormControlLabel, IconButton, Paper, Stack, Table, TableBody, TableCell, TableHead, TableRow, TextField, Typography } from '@mui/material';
 import AddOutlined from '@mui/icons-material/AddOutlined';
 import DeleteOutline from '@mui/icons-material/DeleteOutlined';
@@ -25,6 +25,8 @@ export function TravelTrialEntry({ axis, onRecorded }: { axis: Axis; onRecorded:
   const [throughOrigin, setThroughOrigin] = useState(false);
   const [notes, setNotes] = useState('');
   const record = useRecordTravelTrial(axis.id);
+  // After a correction is applied the next (confirming) trial runs at the new value.
+  useEffect(() => setSteps(String(axis.stepsPerMm)), [axis.stepsPerMm]);
 
   const filled = rows.filter((r) => r.commanded.trim() !== '' || r.measured.trim() !== '');
   const complete = filled.length > 0 && filled.every((r) => numberOf(r.commanded) !== undefined && numberOf(r.measured) !== undefined);

@@ -2,6 +2,8 @@ import { Alert, Box, Button, Paper, Stack, Typography } from '@mui/material';
 import { TravelErrorChart } from '../../../components/charts/travel-error-chart';
 import { fromMm, UNIT_LABELS, type LengthUnit } from '../../../lib/units';
 import { useApplyTravelTrial } from '../api/apply-travel-trial';
+import { useDeleteTravelTrial } from '../api/delete-travel-trial';
+import { DeleteRecordButton } from './delete-record-button';
 import type { Axis, TravelTrial } from '../types';
 import { errorText, showDateTime, showLength, showPercent, showTarget } from '../utils/format';
 import { CopyValue } from './copy-value';
@@ -23,6 +25,7 @@ function Figure({ label, value }: { label: string; value: string }) {
 /** One travel trial's fit, its chart, and the corrected value ready to copy and apply. */
 export function TravelTrialResult({ axis, trial, mayApply }: { axis: Axis; trial: TravelTrial; mayApply: boolean }) {
   const apply = useApplyTravelTrial(axis.id);
+  const remove = useDeleteTravelTrial(axis.id);
   const r = trial.result;
   const unit = CHART_UNIT[trial.unit];
   const corrected = Number(r.correctedStepsPerMm.toFixed(4)).toString();
@@ -70,10 +73,15 @@ export function TravelTrialResult({ axis, trial, mayApply }: { axis: Axis; trial
         fit={{ slope: fromMm(r.scale - 1, unit), offset: fromMm(r.offset, unit) }}
         height={260}
       />
-      {trial.notes && (
-        <Typography variant="body2" color="text.secondary" sx={{ mt: 1 }}>
-          {trial.notes} — {trial.recordedBy}
-        </Typography>
+      <Typography variant="body2" color="text.secondary" sx={{ mt: 1 }}>
+        {trial.moves.length} move{trial.moves.length === 1 ? '' : 's'} measured in {UNIT_LABELS[trial.unit]}
+        {trial.throughOrigin ? ', fitted through zero' : ''} · recorded by {trial.recordedBy}
+        {trial.notes ? ` · ${trial.notes}` : ''}
+      </Typography>
+      {mayApply && (
+        <Box sx={{ mt: 1 }}>
+          <DeleteRecordButton what="trial" locked={trial.locked} onDelete={() => remove.mutate(trial.id)} pending={remove.isPending} error={remove.error} />
+        </Box>
       )}
     </Paper>
   );
