@@ -1,11 +1,12 @@
 import type { NestFastifyApplication } from '@nestjs/platform-fastify';
-import { createHash, randomUUID } from 'node:crypto';
+import { randomUUID } from 'node:crypto';
 import sharp from 'sharp';
-import zlib from 'node:zlib';
 import type { Role } from '../src/database/schema/index.js';
 import { RecordsService } from '../src/records/records.service.js';
 import { SubjectsRegistry } from '../src/records/subjects.registry.js';
-import { anonymous, createTestApp, createTestWorkshop, type Agent, type TestWorkshop } from './helpers/test-app.js';
+import { anonymous, createTestApp, createTestWorkshop, type TestWorkshop } from './helpers/test-app.js';
+import { CSV, download, makeJpeg, makePng, makeWebp, PDF, sha256, upload } from './evidence-fixtures.js';
+import { refusalCases } from './evidence-refusal-cases.js';
 
 /** What a driver's spec provides: a way to start the app on it and to see every stored key. */
 export interface DriverHarness {
@@ -17,66 +18,7 @@ export interface DriverHarness {
   removeKey(key: string): Promise<void>;
 }
 
-export const sha256 = (b: Buffer) => createHash('sha256').update(b).digest('hex');
-
-export async function makePng(width = 800, height = 600): Promise<Buffer> {
-  return sharp({ create: { width, height, channels: 3, background: '#3f7a73' } }).png().toBuffer();
-}
-export async function makeJpeg(width = 1200, height = 900): Promise<Buffer> {
-  return sharp({ create: { width, height, channels: 3, background: '#c8932a' } }).jpeg({ quality: 80 }).toBuffer();
-}
-export async function makeWebp(): Promise<Buffer> {
-  return sharp({ create: { width: 400, height: 400, channels: 3, background: '#1d4f4a' } }).webp().toBuffer();
-}
-/** A Linux program's first bytes (ELF header), padded out. */
-export function makeElf(): Buffer {
-  return Buffer.concat([Buffer.from([0x7f, 0x45, 0x4c, 0x46, 0x02, 0x01, 0x01, 0x00]), Buffer.alloc(4096, 0x90)]);
-}
-/** A Windows program's first bytes (DOS/PE header "MZ"), padded out. */
-export function makePe(): Buffer {
-  return Buffer.concat([Buffer.from('MZ\x90\x00\x03\x00\x00\x00', 'latin1'), Buffer.alloc(4096, 0x00)]);
-}
-/** A small PNG whose header claims 20000 × 13000 pixels: it would unpack into about 780 MB. */
-export function makePngBomb(): Buffer {
-  const chunk = (type: string, data: Buffer) => {
-    const body = Buffer.concat([Buffer.from(type, 'latin1'), data]);
-    const len = Buffer.alloc(4);
-    len.writeUInt32BE(data.length);
-    const crc = Buffer.alloc(4);
-    crc.writeUInt32BE(zlib.crc32(body));
-    return Buffer.concat([len, body, crc]);
-  };
-  const ihdr = Buffer.alloc(13);
-  ihdr.writeUInt32BE(20000, 0);
-  ihdr.writeUInt32BE(13000, 4);
-  ihdr.set([8, 2, 0, 0, 0], 8);
-  const signature = Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]);
-  return Buffer.concat([signature, chunk('IHDR', ihdr), chunk('IDAT', zlib.deflateSync(Buffer.alloc(60_000))), chunk('IEND', Buffer.alloc(0))]);
-}
-export const PDF = Buffer.from('%PDF-1.4\n1 0 obj << /Type /Catalog >> endobj\ntrailer << /Root 1 0 R >>\n%%EOF\n', 'latin1');
-export const CSV = Buffer.from('station_mm,reading_mm\n0,0.000\n250,0.012\n500,-0.004\n', 'utf8');
-
-/** A GET whose body is kept as raw bytes, whatever its content type. */
-export function download(agent: Agent, url: string) {
-  return agent
-    .get(url)
-    .buffer(true)
-    .parse((res, cb) => {
-      const chunks: Buffer[] = [];
-      res.on('data', (d: Buffer) => chunks.push(d));
-      res.on('end', () => cb(null, Buffer.concat(chunks)));
-    });
-}
-
-/** Field order as a browser's FormData sends it: fields first, then the file. */
-export function upload(agent: Agent | ReturnType<typeof anonymous>, fields: Record<string, string>, file?: { body: Buffer; name: string; type?: string }) {
-  let req = agent.post('/api/evidence');
-  for (const [k, v] of Object.entries(fields)) req = req.field(k, v);
-  if (file) req = req.attach('file', file.body, { filename: file.name, contentType: file.type ?? 'application/octet-stream' });
-  return req;
-}
-
-interface Ctx {
+export interface Ctx {
   app: NestFastifyApplication;
   ws: TestWorkshop;
   other: TestWorkshop;
@@ -221,69 +163,7 @@ export function evidenceApiCases(driver: string, harness: DriverHarness) {
     expect(noName.body).toMatchObject({ contentType: 'application/pdf', fileName: 'scan.pdf' });
   });
 
-  describe('refused files leave nothing behind', () => {
-    const refusals: [string, () => Promise<Buffer> | Buffer, string, number, RegExp][] = [
-      ['a Linux program named photo.jpg', makeElf, 'photo.jpg', 415, /photo\.jpg is a program \(ELF\)/],
-      ['a Windows program named photo.jpg', makePe, 'photo.jpg', 415, /photo\.jpg is a program \(EXE\)/],
-      ['a GIF', () => Buffer.from('GIF89a\x01\x00\x01\x00\x00\x00\x00;', 'latin1'), 'anim.gif', 415, /GIF/],
-      ['text not named .csv', () => CSV, 'readings.txt', 415, /not a type Railwright keeps/],
-      ['a .csv holding NUL bytes', () => Buffer.concat([CSV, Buffer.from([0, 1, 2])]), 'readings.csv', 415, /not plain UTF-8 text/],
-      ['a .csv that is not UTF-8', () => Buffer.from([0x61, 0x2c, 0xff, 0xfe, 0x0a]), 'readings.csv', 415, /not plain UTF-8/],
-      ['a photo of more than 250 megapixels', makePngBomb, 'huge.png', 415, /huge\.png has more than 250 megapixels/],
-      ['a cut-short PNG', async () => (await makePng()).subarray(0, 300), 'half.png', 415, /could not be read/],
-      ['an empty file', () => Buffer.alloc(0), 'empty.png', 400, /empty/],
-    ];
-    it.each(refusals)('refuses %s', async (_what, make, name, status, message) => {
-      const before = await harness.storedKeys();
-      const listBefore = (await ctx.ws.as.owner.get('/api/evidence').query(onMachine())).body.length;
-      const res = await upload(ctx.ws.as.builder, onMachine(), { body: await make(), name, type: 'image/jpeg' });
-      expect(res.status).toBe(status);
-      expect(JSON.stringify(res.body.message)).toMatch(message);
-      expect(await harness.storedKeys()).toEqual(before);
-      expect((await ctx.ws.as.owner.get('/api/evidence').query(onMachine())).body.length).toBe(listBefore);
-    });
-
-    it.each([
-      [{ subjectType: 'spaceship', subjectId: randomUUID() }, 400, /subjectType must be one of .*bench-check.*machine/],
-      [{ subjectType: 'machine', subjectId: 'not-a-uuid' }, 400, /subjectId must be the id/],
-      [{ subjectType: 'machine' }, 400, /subjectId must be the id/],
-      [{ subjectType: 'machine', subjectId: randomUUID() }, 404, /No such machine/],
-      [{ subjectType: 'machine', subjectId: '', colour: 'red' }, 400, /colour should not exist/],
-    ])('refuses fields %j', async (fields, status, message) => {
-      const before = await harness.storedKeys();
-      const res = await upload(ctx.ws.as.builder, fields as Record<string, string>, { body: await makePng(16, 16), name: 'x.png' });
-      expect(res.status).toBe(status);
-      expect(JSON.stringify(res.body.message)).toMatch(message);
-      expect(await harness.storedKeys()).toEqual(before);
-    });
-
-    it('refuses an upload without a file, and a second file in one upload', async () => {
-      const none = await upload(ctx.ws.as.builder, onMachine());
-      expect(none.status).toBe(400);
-      const before = await harness.storedKeys();
-      const png = await makePng(16, 16);
-      const two = await ctx.ws.as.builder.post('/api/evidence').field(onMachine()).attach('file', png, 'a.png').attach('file', png, 'b.png');
-      expect(two.status).toBe(400);
-      expect(JSON.stringify(two.body.message)).toMatch(/one file per upload/);
-      expect(await harness.storedKeys()).toEqual(before);
-    });
-  });
-
-  it('answers 400 to a body that is not well-formed multipart, and keeps nothing', async () => {
-    const before = await harness.storedKeys();
-    const noBoundary = await ctx.ws.as.builder.post('/api/evidence').set('Content-Type', 'multipart/form-data').send('garbage');
-    expect(noBoundary.status).toBe(400);
-    const cut = await ctx.ws.as.builder
-      .post('/api/evidence')
-      .set('Content-Type', 'multipart/form-data; boundary=XYZ')
-      .send(`--XYZ\r\nContent-Disposition: form-data; name="subjectType"\r\n\r\nmachine\r\n--XYZ\r\nContent-Disposition: form-data; name="subjectId"\r\n\r\n${ctx.machineId}\r\n--XYZ\r\nContent-Disposition: form-data; name="file"; filename="a.png"\r\nContent-Type: image/png\r\n\r\n\x89PNG half a fi`);
-    expect(cut.status).toBe(400);
-    expect(JSON.stringify(cut.body.message)).toMatch(/cut off/);
-    const json = await ctx.ws.as.builder.post('/api/evidence').send({ subjectType: 'machine', subjectId: ctx.machineId });
-    expect(json.status).toBe(400);
-    expect(JSON.stringify(json.body.message)).toMatch(/multipart\/form-data/);
-    expect(await harness.storedKeys()).toEqual(before);
-  });
+  refusalCases(ctx, harness);
 
   it('takes the fields after the file as well', async () => {
     const res = await ctx.ws.as.builder
@@ -384,37 +264,5 @@ export function evidenceApiCases(driver: string, harness: DriverHarness) {
 
   it('never leaves temporary uploads behind', async () => {
     expect((await harness.storedKeys()).filter((k) => k.startsWith('incoming/'))).toEqual([]);
-  });
-}
-
-/** A second app with a small size limit: an over-size file is refused with 413 and not kept. */
-export function evidenceSizeLimitCases(harness: DriverHarness) {
-  let app: NestFastifyApplication;
-  let ws: TestWorkshop;
-  let machineId: string;
-  const saved = { ...process.env };
-  const LIMIT = 64 * 1024;
-
-  beforeAll(async () => {
-    Object.assign(process.env, harness.env(), { EVIDENCE_MAX_BYTES: String(LIMIT) });
-    app = await createTestApp();
-    ws = await createTestWorkshop(app, 'Evidence limit');
-    machineId = (await ws.as.builder.post('/api/machines').send({ name: 'Limit table', kind: 'plasma', workArea: { x: 1000, y: 1000 } })).body.id;
-  });
-  afterAll(async () => {
-    await app?.close();
-    process.env = saved;
-  });
-
-  it('refuses a file over EVIDENCE_MAX_BYTES with 413 and keeps nothing', async () => {
-    const before = await harness.storedKeys();
-    const big = Buffer.concat([await makePng(8, 8), Buffer.alloc(LIMIT * 3, 7)]);
-    const res = await upload(ws.as.builder, { subjectType: 'machine', subjectId: machineId }, { body: big, name: 'huge.png' });
-    expect(res.status).toBe(413);
-    expect(res.body.message).toMatch(/huge\.png is larger than the limit of 64 kB a file/);
-    expect(await harness.storedKeys()).toEqual(before);
-    expect((await ws.as.builder.get('/api/evidence').query({ subjectType: 'machine', subjectId: machineId })).body).toEqual([]);
-    const justUnder = await upload(ws.as.builder, { subjectType: 'machine', subjectId: machineId }, { body: await makePng(16, 16), name: 'small.png' });
-    expect(justUnder.status).toBe(201);
   });
 }

@@ -2,7 +2,8 @@ import { mkdtempSync, rmSync } from 'node:fs';
 import { readdir, rm } from 'node:fs/promises';
 import os from 'node:os';
 import path from 'node:path';
-import { evidenceApiCases, evidenceSizeLimitCases, type DriverHarness } from './evidence-cases.js';
+import { evidenceApiCases, type DriverHarness } from './evidence-cases.js';
+import { evidenceSizeLimitCases } from './evidence-refusal-cases.js';
 
 // The disk driver under a data folder of this spec's own, so "nothing left behind" is exact.
 const data = mkdtempSync(path.join(os.tmpdir(), 'railwright-evidence-disk-'));

@@ -3,7 +3,8 @@ import { mkdtempSync, rmSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import S3rver from 's3rver';
-import { evidenceApiCases, evidenceSizeLimitCases, type DriverHarness } from './evidence-cases.js';
+import { evidenceApiCases, type DriverHarness } from './evidence-cases.js';
+import { evidenceSizeLimitCases } from './evidence-refusal-cases.js';
 
 // The S3 driver against a fake S3 server on 127.0.0.1, started and stopped by this spec.
 const BUCKET = 'railwright-evidence-test';
