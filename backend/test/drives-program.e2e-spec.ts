@@ -129,6 +129,8 @@ describe('test programs, speed check and travel envelope', () => {
     [{ kind: 'positioning', feed: 'fast' }, /feed must be a number of mm\/min/],
     [{ kind: 'travel', distances: 'far' }, /distances must be comma-separated numbers/],
     [{ kind: 'travel', distances: '100,-50' }, /distances must all be greater than zero/],
+    [{ kind: 'travel', start: 2 }, /start less the overrun takes the axis to -3.000 mm, below 0 mm/],
+    [{ kind: 'travel', start: 100, distances: '500,900' }, /distances takes the axis to 1000.000 mm, beyond its measured travel of 920 mm/],
     [{ kind: 'travel', letter: 'Q' }, /letter must be one of/],
     [{ kind: 'travel', format: 'pdf' }, /format must be nc or txt/],
   ])('test program %j is refused with 400 naming the field', async (query, message) => {

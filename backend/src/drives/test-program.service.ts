@@ -62,7 +62,8 @@ export class TestProgramService {
         distances = [0.25, 0.5, 0.75, 1].map((f) => Math.floor((usable * f) / 10) * 10).filter((d) => d > 0);
       } else problems.push('distances is required when the axis has no measured travel (for example distances=100,200,300)');
       if (q.distances !== undefined && distances.some((d) => d <= 0)) problems.push('distances must all be greater than zero (mm)');
-      if (!problems.length) inside('distances', [start - overrun, ...distances.map((d) => start + d)]);
+      if (!problems.length) inside('start less the overrun', [start - overrun]);
+      if (!problems.length) inside('distances', distances.map((d) => start + d));
       if (problems.length) throw new BadRequestException(problems);
       const text = travelTrialProgram({
         ...base,
