@@ -71,7 +71,11 @@ test.describe('bolt-down guide', () => {
     await expect(page.getByTestId('progress')).toHaveText('3 of 5 holes fixed');
     await snap(page, 'bolt-down-guide-desktop');
     await fixHole(page, 2, '0.8');
-    await fixHole(page, 4, '1.2');
+    // A reading typed but not fixed yet survives a reload too.
+    await page.getByLabel('Reading at hole 4 (thou)').fill('1.2');
+    await page.reload();
+    await expect(page.getByLabel('Reading at hole 4 (thou)')).toHaveValue('1.2');
+    await page.getByLabel('Reading at hole 4 (thou)').press('Enter');
     await expect(page.getByTestId('progress')).toHaveText('5 of 5 holes fixed');
 
     // The guide survives a reload: progress is on the server.

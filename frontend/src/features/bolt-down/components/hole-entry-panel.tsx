@@ -7,6 +7,7 @@ import { palette } from '../../../theme/theme';
 import { useRecordHole } from '../api/record-hole';
 import type { BoltDown } from '../types';
 import type { GuideHole } from '../utils/guide-state';
+import { loadDraft, saveDraft } from '../utils/draft';
 import { holeName, parseReading, plain, signed } from '../utils/format';
 
 export interface Refusal {
@@ -30,7 +31,7 @@ interface Props {
 /** The hole being fixed: its aim, the reading as it is typed, and the difference, large. */
 // Mounted afresh for each hole (keyed by the guide), so nothing typed at one hole leaks to the next.
 export function HoleEntryPanel({ bd, hole, isNext, refusal, onFixed, onRefused }: Props) {
-  const [text, setText] = useState(refusal?.text ?? '');
+  const [text, setText] = useState(() => refusal?.text ?? loadDraft(bd.id, hole.index));
   const [problem, setProblem] = useState<string | null>(null);
   const record = useRecordHole(bd.id);
   const unit = UNIT_LABELS[bd.unit];
@@ -46,7 +47,10 @@ export function HoleEntryPanel({ bd, hole, isNext, refusal, onFixed, onRefused }
       return;
     }
     try {
-      await record.mutateAsync({ index: hole.index, positionMm: hole.position, reading: typed, unit: bd.unit, fixed: true });
+      const sending = record.mutateAsync({ index: hole.index, positionMm: hole.position, reading: typed, unit: bd.unit, fixed: true });
+      // The write itself is kept by the queue from here on; the draft is no longer needed.
+      saveDraft(bd.id, hole.index, '');
+      await sending;
       onFixed(hole.index);
     } catch (err) {
       // Refused by the server: back to this hole with what was typed, so it can be corrected.
@@ -81,6 +85,7 @@ export function HoleEntryPanel({ bd, hole, isNext, refusal, onFixed, onRefused }
             value={text}
             onChange={(e) => {
               setText(e.target.value);
+              saveDraft(bd.id, hole.index, e.target.value);
               setProblem(null);
             }}
             error={!!problem}
