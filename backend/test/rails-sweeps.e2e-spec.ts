@@ -200,6 +200,9 @@ describe('rail sweeps, parallelism and readiness', () => {
     const railChecks = async () => (await registry.checksFor(ref)).filter((c) => c.kind === 'rail-straightness' || c.kind === 'rail-parallelism');
     let checks = await railChecks();
     expect(checks.map((c) => `${c.kind}:${c.status}`).sort()).toEqual(['rail-parallelism:not-started', 'rail-straightness:not-started', 'rail-straightness:not-started', 'rail-straightness:not-started']);
+    const waiting = checks.find((c) => c.kind === 'rail-parallelism')!;
+    expect(waiting.result).toBeNull();
+    expect(waiting.subject).toMatch(/Rails Y[12] and Y[12] \(No sweep of rail/);
 
     const sa = (await ws.as.builder.post(`/api/rails/${a.id}/sweeps`).send(sweep(thou, { datum: 'Frame' }))).body;
     const sb = (await ws.as.builder.post(`/api/rails/${b.id}/sweeps`).send(sweep([0, 0.5, 0.5, 1, 0.5, 0.5, 0, 0.5, 0, 0], { datum: 'Frame' }))).body;

@@ -134,7 +134,8 @@ export class RailChecksService implements OnModuleInit {
       link: railLink(a.machineId, a.id),
     };
     if (!out.comparable) {
-      return { ...common, status: 'not-started', result: { value: 0, unit: t.parallelism.unit, summary: out.reason }, recordType: null, recordId: null, recordedAt: null };
+      // No number to show yet; the reason goes with the subject so the board says what is missing.
+      return { ...common, subject: `${common.subject} (${out.reason})`, status: 'not-started', result: null, recordType: null, recordId: null, recordedAt: null };
     }
     const parallelWithin = out.parallelismMm <= targetInBaseUnit(t.parallelism);
     const heightWithin = Math.abs(out.meanOffsetMm) <= targetInBaseUnit(t.height);
