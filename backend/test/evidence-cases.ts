@@ -165,6 +165,25 @@ export function evidenceApiCases(driver: string, harness: DriverHarness) {
 
   refusalCases(ctx, harness);
 
+  it('checks fields that follow the file too: a subject swapped in after the file is refused', async () => {
+    const before = await harness.storedKeys();
+    const swapped = await ctx.ws.as.builder
+      .post('/api/evidence')
+      .field('subjectType', 'machine')
+      .field('subjectId', ctx.machineId)
+      .attach('file', await makePng(20, 20), 'swap.png')
+      .field('subjectId', ctx.otherMachineId);
+    expect(swapped.status).toBe(404);
+    const longCaption = await ctx.ws.as.builder
+      .post('/api/evidence')
+      .field(onMachine())
+      .attach('file', await makePng(20, 20), 'caption.png')
+      .field('caption', 'x'.repeat(501));
+    expect(longCaption.status).toBe(400);
+    expect(JSON.stringify(longCaption.body.message)).toMatch(/caption must be at most 500 characters/);
+    expect(await harness.storedKeys()).toEqual(before);
+  });
+
   it('takes the fields after the file as well', async () => {
     const res = await ctx.ws.as.builder
       .post('/api/evidence')

@@ -56,7 +56,6 @@ export class EvidenceUploadService {
     let received: Received | null = null;
     let committed = false;
     try {
-      let subject: SubjectRef | null = null;
       for await (const part of req.parts()) {
         if (part.type === 'field') {
           const value = (part as MultipartValue).value;
@@ -70,7 +69,7 @@ export class EvidenceUploadService {
         }
         // Fields sent ahead of the file are checked before a byte is stored.
         if (fields.subjectType !== undefined || fields.subjectId !== undefined) {
-          subject = await this.checkedSubject(actor, fields).catch((err) => {
+          await this.checkedSubject(actor, fields).catch((err) => {
             file.file.resume();
             throw err;
           });
@@ -78,7 +77,8 @@ export class EvidenceUploadService {
         received = await this.receive(file);
       }
       if (!received) throw new BadRequestException(['file is required: attach one photo or file']);
-      subject ??= await this.checkedSubject(actor, fields);
+      // Checked again with every field, as fields may also follow the file (or repeat).
+      const subject = await this.checkedSubject(actor, fields);
       const saved = await this.store(actor, subject, fields, received);
       committed = true;
       return saved;
