@@ -43,7 +43,9 @@ export function drawSeriesChart(doc: Doc, box: Box, s: CheckSeries): void {
     doc.moveTo(plot.x, py(t)).lineTo(plot.x + plot.w, py(t)).stroke();
     write(doc, 'regular', 6.5, num(t), plot.x - 44, py(t) - 3, { width: 40, align: 'right', lineBreak: false });
   }
-  for (const t of ticks(xMin, xMax, 6)) write(doc, 'regular', 6.5, num(t), px(t) - 20, plot.y + plot.h + 3, { width: 40, align: 'center', lineBreak: false });
+  // A count (check number) has no halves.
+  const xTicks = ticks(xMin, xMax, 6).filter((t) => s.x.unit !== '#' || Number.isInteger(t));
+  for (const t of xTicks) write(doc, 'regular', 6.5, num(t), px(t) - 20, plot.y + plot.h + 3, { width: 40, align: 'center', lineBreak: false });
   doc.lineWidth(0.8).strokeColor(INK).rect(plot.x, plot.y, plot.w, plot.h).stroke();
   for (const l of s.limits ?? []) {
     if (l.value < yMin || l.value > yMax) continue;
