@@ -74,7 +74,7 @@ export default function RailRoute() {
           </Grid>
           {partner && (
             <Grid size={{ xs: 12, md: 5 }}>
-              <PairParallelismSummary railId={r.id} title={`Parallel with ${partner.label}`} />
+              <PairParallelismSummary railId={r.id} title={`Parallel with ${partner.label}`} partnerLabel={partner.label} />
             </Grid>
           )}
         </Grid>

@@ -1,11 +1,14 @@
 import { Box, Paper, Typography } from '@mui/material';
+import { SweepOverlayChart } from '../../../components/charts/sweep-overlay-chart';
+import { fromMm, UNIT_LABELS } from '../../../lib/units';
 import { useParallelism } from '../api/get-parallelism';
-import { showInTargetUnit, showTarget } from '../utils/display';
+import { isLengthUnit, showInTargetUnit, showTarget } from '../utils/display';
 import { CheckStatusChip } from './check-status-chip';
 
 /** Parallelism and height difference of one partner pair, against their targets. */
-export function PairParallelismSummary({ railId, title }: { railId: string; title: string }) {
+export function PairParallelismSummary({ railId, title, partnerLabel }: { railId: string; title: string; partnerLabel?: string }) {
   const q = useParallelism(railId);
+  const unit = q.data && isLengthUnit(q.data.targets.parallelism.unit) ? q.data.targets.parallelism.unit : 'mm';
   return (
     <Paper component="section" aria-label={`Parallelism ${title}`} sx={{ p: 2, display: 'flex', gap: 2, alignItems: 'center', flexWrap: 'wrap' }}>
       <Box sx={{ flex: '1 1 260px', minWidth: 0 }}>
@@ -21,6 +24,17 @@ export function PairParallelismSummary({ railId, title }: { railId: string; titl
         )}
       </Box>
       {q.data && <CheckStatusChip status={q.data.status} />}
+      {partnerLabel && q.data?.differences && q.data.positions && (
+        <Box sx={{ flex: '1 1 100%', minWidth: 0 }}>
+          <SweepOverlayChart
+            label="Partner rail differences"
+            height={200}
+            unitLabel={UNIT_LABELS[unit]}
+            yLabel="Difference"
+            series={[{ name: `${partnerLabel} − this rail, per station`, points: q.data.positions.map((position, i) => ({ position, value: fromMm(q.data!.differences![i], unit) })) }]}
+          />
+        </Box>
+      )}
     </Paper>
   );
 }
