@@ -10,9 +10,9 @@ export function refusalCases(ctx: Ctx, harness: DriverHarness) {
 
   describe('refused files leave nothing behind', () => {
     const refusals: [string, () => Promise<Buffer> | Buffer, string, number, RegExp][] = [
-      ['a Linux program named photo.jpg', makeElf, 'photo.jpg', 415, /photo\.jpg is a program \(ELF\)/],
+      ['a Linux program named photo.jpg', makeElf, 'photo.jpg', 415, /photo\.jpg is a program \(ELF\), whatever its name says/],
       ['a Windows program named photo.jpg', makePe, 'photo.jpg', 415, /photo\.jpg is a program \(EXE\)/],
-      ['a GIF', () => Buffer.from('GIF89a\x01\x00\x01\x00\x00\x00\x00;', 'latin1'), 'anim.gif', 415, /GIF/],
+      ['a GIF', () => Buffer.from('GIF89a\x01\x00\x01\x00\x00\x00\x00;', 'latin1'), 'anim.gif', 415, /^"anim\.gif is a GIF file \(image\/gif\)\. Accepted: JPEG, PNG, WebP, PDF, CSV\./],
       ['text not named .csv', () => CSV, 'readings.txt', 415, /not a type Railwright keeps/],
       ['a .csv holding NUL bytes', () => Buffer.concat([CSV, Buffer.from([0, 1, 2])]), 'readings.csv', 415, /not plain UTF-8 text/],
       ['a .csv that is not UTF-8', () => Buffer.from([0x61, 0x2c, 0xff, 0xfe, 0x0a]), 'readings.csv', 415, /not plain UTF-8/],

@@ -35,8 +35,9 @@ export async function decideType(fileName: string, sniff: SniffResult): Promise<
   if (found) {
     const accepted = ACCEPTED_TYPES.find((t) => t.contentType === found.mime);
     if (accepted) return { accepted };
-    const what = PROGRAMS.has(found.ext) ? `a program (${found.ext.toUpperCase()})` : `${found.ext.toUpperCase()} (${found.mime})`;
-    return { refused: `${fileName} is ${what}, whatever its name says. Accepted: ${ACCEPTED_LABELS}.` };
+    const what = PROGRAMS.has(found.ext) ? `a program (${found.ext.toUpperCase()})` : `a ${found.ext.toUpperCase()} file (${found.mime})`;
+    const disguised = !fileName.toLowerCase().endsWith(`.${found.ext}`);
+    return { refused: `${fileName} is ${what}${disguised ? ', whatever its name says' : ''}. Accepted: ${ACCEPTED_LABELS}.` };
   }
   if (fileName.toLowerCase().endsWith('.csv')) {
     if (sniff.plainText) return { accepted: ACCEPTED_TYPES.find((t) => t.contentType === 'text/csv')! };
