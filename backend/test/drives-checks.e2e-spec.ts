@@ -249,7 +249,10 @@ describe('travel trials and repeat-and-reverse runs', () => {
     const trialCheck = mine.find((c) => c.key === `travel-trial:${x}`)!;
     expect(trialCheck).toMatchObject({ status: 'not-started', subject: 'Axis X', result: null, link: `/machines/${m}/axes/${x}` });
     // Y travels 605 mm; the router needs 600 + 10 mm.
-    expect(mine.find((c) => c.kind === 'travel-envelope')).toMatchObject({ status: 'outside-target' });
+    expect(mine.find((c) => c.kind === 'travel-envelope')).toMatchObject({ status: 'outside-target', result: { value: 5, unit: 'mm' }, target: { value: 10, unit: 'mm' } });
+    // 5000 mm/min at 5 mm lead = 1000 rpm, permissible 1947.9 rpm (THK λ2 = 15.1, 12.9 mm root, 1000 mm): 48.66 % headroom
+    expect(mine.find((c) => c.key === `speed-check:${x}`)!.result).toMatchObject({ unit: '%' });
+    expect(mine.find((c) => c.key === `speed-check:${x}`)!.result!.value).toBeCloseTo((1 - 1000 / 1947.9) * 100, 9);
     const within = await ws.as.technician.post(`/api/axes/${x}/travel-trials`).send({ unit: 'mm', moves: [{ commanded: 500, measured: 500.1 }] });
     expect(within.body.status).toBe('within-target'); // 0.02 % ≤ 0.05 %
     checks = await app.get(ReadinessRegistry).checksFor(ref);

@@ -50,7 +50,8 @@ export class DriveChecksService implements OnModuleInit {
       status: envelope.status,
       target: { ...envelope.margin, label: TARGET_LABELS.travelMargin },
       result: envelope.axes.some((a) => a.spare !== null)
-        ? { value: Math.min(...envelope.axes.filter((a) => a.spare !== null).map((a) => a.spare!)), unit: 'mm', summary: envelope.summary }
+        ? // The smallest margin beyond the work area, read against the margin the target asks for.
+          { value: Math.min(...envelope.axes.filter((a) => a.measuredTravel !== null).map((a) => a.measuredTravel! - a.workSize)), unit: 'mm', summary: envelope.summary }
         : null,
       recordType: null,
       recordId: null,
@@ -104,7 +105,8 @@ export class DriveChecksService implements OnModuleInit {
         subject: `Axis ${axis.name}`,
         status: trialStatus,
         target: { ...targets.stepsPerMmError.target, label: TARGET_LABELS.stepsPerMmError },
-        result: tr ? { value: tr.errorPercent, unit: '%', summary: trialSummary } : null,
+        // The size of the error against the ± target; the summary keeps its sign.
+        result: tr ? { value: Math.abs(tr.errorPercent), unit: '%', summary: trialSummary } : null,
         recordType: trial ? 'travel-trial' : null,
         recordId: trial?.id ?? null,
         recordedAt: trial?.createdAt.toISOString() ?? null,
@@ -158,7 +160,10 @@ export class DriveChecksService implements OnModuleInit {
       summaries.push({ status: verdict?.status ?? 'not-started', summary: runSummary, headline: pr ? `accuracy ${fmt(pr.accuracyMm)} mm` : null, recordId: run?.id ?? null, recordedAt: run?.createdAt.toISOString() ?? null });
 
       const speed = speedCheckOf(axis, targets);
-      const speedSummary = speed.rpm !== null ? `${Math.round(speed.rpm)} rpm at ${speed.feedRate} mm/min; allowed ${Math.round(Math.min(speed.allowedSpeed!, speed.dnLimitSpeed!))} rpm (highest safe feed ${Math.round(speed.safeFeedRate!)} mm/min)` : speed.reason!;
+      const speedSummary =
+        speed.rpm !== null
+          ? `${Math.round(speed.rpm)} rpm at ${speed.feedRate} mm/min; permissible ${Math.round(speed.permissibleSpeed!)} rpm, d·n limit ${Math.round(speed.dnLimitSpeed!)} rpm${speed.rpm > speed.dnLimitSpeed! ? ' (above the d·n limit)' : ''}; highest safe feed ${Math.round(speed.safeFeedRate!)} mm/min`
+          : speed.reason!;
       if (speed.applicable) {
         out.push({
           key: `speed-check:${axis.id}`,
@@ -166,7 +171,8 @@ export class DriveChecksService implements OnModuleInit {
           subject: `Axis ${axis.name}`,
           status: speed.status as ReadinessCheck['status'],
           target: { ...targets.screwSpeedHeadroom.target, label: `${TARGET_LABELS.screwSpeedHeadroom}, and within the d·n limit` },
-          result: speed.rpm !== null ? { value: speed.rpm, unit: 'rpm', summary: speedSummary } : null,
+          // Headroom below the permissible speed, read against the headroom the target asks for.
+          result: speed.rpm !== null ? { value: (1 - speed.rpm / speed.permissibleSpeed!) * 100, unit: '%', summary: speedSummary } : null,
           recordType: 'axis',
           recordId: axis.id,
           recordedAt: speed.rpm !== null ? axis.updatedAt.toISOString() : null,
