@@ -50,6 +50,8 @@ test.describe('frame and safety walk', () => {
     await expect(page.getByRole('list', { name: 'Worst points' }).getByRole('listitem').first()).toContainText('row 2, column 3: +0.');
     await expect(page.getByRole('img', { name: /Bed grid colour map of residuals in mm, 3 rows by 4 columns/ })).toBeVisible();
     await shoot(page, 'svg[aria-label^="Bed grid colour map"]', 'frame-bed-grid-map-desktop');
+    await shoot(page, 'section[aria-labelledby="bed-grid-title"]', 'frame-bed-grid-desktop');
+    await shoot(page, 'section[aria-labelledby="test-cut-title"]', 'frame-test-cut-desktop');
     await snap(page, 'frame-tab-desktop');
 
     // The safety walk: the seeded "no" blocks approval; answer one more item.

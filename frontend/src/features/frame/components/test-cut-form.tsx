@@ -9,7 +9,7 @@ import { UnitSelect } from './unit-select';
 const NOMINAL = [
   ['nx', 'Programmed X'],
   ['ny', 'Programmed Y'],
-  ['nc', 'Programmed circle ⌀'],
+  ['nc', 'Circle ⌀'],
 ] as const;
 const MEASURED = [
   ['mx', 'Measured X'],
@@ -83,7 +83,7 @@ export function TestCutForm({ machineId, onSaved }: { machineId: string; onSaved
         <Typography variant="h5" component="h4">As measured</Typography>
         <Box sx={grid}>
           {MEASURED.map(field)}
-          <NumberField label="Kerf (uncompensated)" unit={u} value={v.kerf} onChange={set('kerf')} error={!!errors.kerf} helperText={errors.kerf ?? 'Leave empty when kerf compensation was on'} />
+          <NumberField label="Kerf" unit={u} value={v.kerf} onChange={set('kerf')} error={!!errors.kerf} helperText={errors.kerf ?? 'Width the controller did not compensate; empty when compensation was on'} />
         </Box>
         <Typography variant="h5" component="h4">Steps per mm when cut (optional)</Typography>
         <Box sx={grid}>

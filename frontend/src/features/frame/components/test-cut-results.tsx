@@ -3,6 +3,8 @@ import type { TestCut } from '../types';
 import { showDate, showLength, showSigned, showTarget } from '../utils/format';
 import { StatusChip } from './status-chip';
 
+const SHORT: Record<string, string> = { 'outside-x': 'Outside X', 'outside-y': 'Outside Y', 'circle-x': 'Circle ⌀ along X', 'circle-y': 'Circle ⌀ along Y' };
+
 const POINTS_TO: Record<TestCut['result']['ovalityPointsTo'], string> = {
   round: 'round',
   scale: 'unequal scale',
@@ -22,12 +24,12 @@ export function TestCutResults({ cut }: { cut: TestCut }) {
         <Typography variant="body2" color="text.secondary">by {cut.recordedBy.name}</Typography>
       </Box>
       <TableContainer>
-        <Table size="small" aria-label="Scale per axis">
+        <Table size="small" aria-label="Scale per axis" sx={{ '& td': { whiteSpace: 'nowrap' } }}>
           <TableHead>
             <TableRow>
               <TableCell>Axis</TableCell>
               <TableCell align="right">Commanded</TableCell>
-              <TableCell align="right">Measured{cut.measured.kerf ? ' + kerf' : ''}</TableCell>
+              <TableCell align="right">{cut.measured.kerf ? 'Measured + kerf' : 'Measured'}</TableCell>
               <TableCell align="right">Scale error</TableCell>
               <TableCell align="right">Steps/mm × factor</TableCell>
               <TableCell align="right">Suggested steps/mm</TableCell>
@@ -39,7 +41,11 @@ export function TestCutResults({ cut }: { cut: TestCut }) {
                 <TableCell>{k.toUpperCase()}</TableCell>
                 <TableCell align="right">{showLength(r[k].commandedMm, 'mm', 2)}</TableCell>
                 <TableCell align="right">{showLength(r[k].afterKerfMm, 'mm', 2)}</TableCell>
-                <TableCell align="right">{r[k].errorPercent >= 0 ? '+' : '−'}{Math.abs(r[k].errorPercent).toFixed(3)} % ({showSigned(r[k].errorMm, 'mm', 2)})</TableCell>
+                <TableCell align="right">
+                  {r[k].errorPercent >= 0 ? '+' : '−'}
+                  {Math.abs(r[k].errorPercent).toFixed(3)} %
+                  <Typography variant="caption" color="text.secondary" component="div">{showSigned(r[k].errorMm, 'mm', 2)}</Typography>
+                </TableCell>
                 <TableCell align="right">× {r[k].correctionFactor.toFixed(5)}</TableCell>
                 <TableCell align="right">{r[k].suggestedStepsPerMm === null ? '—' : `${r[k].suggestedStepsPerMm.toFixed(4)} steps/mm`}</TableCell>
               </TableRow>
@@ -64,12 +70,12 @@ export function TestCutResults({ cut }: { cut: TestCut }) {
         </Box>
       </Box>
       <TableContainer>
-        <Table size="small" aria-label="Part sizes">
+        <Table size="small" aria-label="Part sizes" sx={{ '& td, & th': { whiteSpace: 'nowrap' } }}>
           <TableHead>
             <TableRow>
               <TableCell>Part size</TableCell>
               <TableCell align="right">Programmed</TableCell>
-              <TableCell align="right">As cut{cut.measured.kerf ? ' (kerf allowed for)' : ''}</TableCell>
+              <TableCell align="right">{cut.measured.kerf ? 'After kerf' : 'As cut'}</TableCell>
               <TableCell align="right">Deviation</TableCell>
               <TableCell align="right">Tolerance</TableCell>
               <TableCell>Result</TableCell>
@@ -78,7 +84,7 @@ export function TestCutResults({ cut }: { cut: TestCut }) {
           <TableBody>
             {r.parts.map((p) => (
               <TableRow key={p.part}>
-                <TableCell>{p.label}</TableCell>
+                <TableCell>{SHORT[p.part] ?? p.label}</TableCell>
                 <TableCell align="right">{showLength(p.nominalMm, 'mm', 2)}</TableCell>
                 <TableCell align="right">{showLength(p.afterKerfMm, 'mm', 2)}</TableCell>
                 <TableCell align="right" sx={{ color: p.within ? 'inherit' : 'error.main', fontWeight: p.within ? 400 : 600 }}>{showSigned(p.deviationMm, 'mm', 2)}</TableCell>

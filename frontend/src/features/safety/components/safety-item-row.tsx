@@ -44,7 +44,13 @@ export function SafetyItemRow({ item, canAnswer, busy, onAnswer }: { item: WalkI
           ))}
         </ToggleButtonGroup>
       </Box>
-      {(canAnswer || a?.note) && (
+      {!canAnswer && a?.note && (
+        <Typography variant="body2" sx={{ mt: 0.75 }}>
+          <Box component="span" sx={{ color: 'text.secondary' }}>Note: </Box>
+          {a.note}
+        </Typography>
+      )}
+      {canAnswer && (
         <TextField
           label="Note"
           value={note}
