@@ -30,8 +30,8 @@ export function PairParallelismSummary({ railId, title, partnerLabel }: { railId
             label="Partner rail differences"
             height={200}
             unitLabel={UNIT_LABELS[unit]}
-            yLabel="Difference"
-            series={[{ name: `${partnerLabel} − this rail, per station`, points: q.data.positions.map((position, i) => ({ position, value: fromMm(q.data!.differences![i], unit) })) }]}
+            yLabel="B − A"
+            series={[{ name: `B − A: ${partnerLabel} minus this rail`, points: q.data.positions.map((position, i) => ({ position, value: fromMm(q.data!.differences![i], unit) })) }]}
           />
         </Box>
       )}
