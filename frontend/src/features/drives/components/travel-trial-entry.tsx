@@ -29,7 +29,8 @@ export function TravelTrialEntry({ axis, onRecorded }: { axis: Axis; onRecorded:
   useEffect(() => setSteps(String(axis.stepsPerMm)), [axis.stepsPerMm]);
 
   const filled = rows.filter((r) => r.commanded.trim() !== '' || r.measured.trim() !== '');
-  const complete = filled.length > 0 && filled.every((r) => numberOf(r.commanded) !== undefined && numberOf(r.measured) !== undefined);
+  const stepsOk = numberOf(steps) !== undefined && Number(steps) > 0;
+  const complete = stepsOk && filled.length > 0 && filled.every((r) => numberOf(r.commanded) !== undefined && numberOf(r.measured) !== undefined);
   const setCell = (i: number, k: keyof Row, v: string) => setRows((rs) => rs.map((r, j) => (j === i ? { ...r, [k]: v } : r)));
 
   const onPaste = (i: number, k: keyof Row) => (e: React.ClipboardEvent) => {
