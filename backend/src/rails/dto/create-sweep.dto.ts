@@ -28,6 +28,8 @@ export class StationDto {
   position: number;
 
   @IsNumber(FINITE, { message: 'reading must be a number in the sweep unit' })
+  @Min(-1_000_000, { message: 'reading must be within ±1 000 000 in the sweep unit' })
+  @Max(1_000_000, { message: 'reading must be within ±1 000 000 in the sweep unit' })
   reading: number;
 }
 
