@@ -6,6 +6,8 @@ import { evaluateTestCut } from '../src/engine/test-cut.js';
 import { ReadinessRegistry } from '../src/records/readiness.registry.js';
 import { SubjectsRegistry } from '../src/records/subjects.registry.js';
 import { MachinesService } from '../src/machines/machines.service.js';
+import { RecordsService } from '../src/records/records.service.js';
+import { randomUUID } from 'node:crypto';
 import { anonymous, createTestApp, createTestWorkshop, type TestWorkshop } from './helpers/test-app.js';
 
 // Worked example derived from the parallelogram relation p², q² = a² + b² ∓ 2ab·cos θ.
@@ -110,6 +112,23 @@ describe('frame: diagonal checks', () => {
     expect(res.body.result.warnings.join(' ')).toMatch(/do not match the sides/);
   });
 
+  it('deletes a mistaken check (recorders only); the previous one is current again; a locked one stays (409)', async () => {
+    const body = { sideX: 1000, sideY: 600, diagonal1: 1166.2, diagonal2: 1166 };
+    const keep = await ws.as.builder.post(`/api/machines/${plasma}/diagonal-checks`).send(body);
+    const wrong = await ws.as.builder.post(`/api/machines/${plasma}/diagonal-checks`).send({ ...body, diagonal1: 1176 });
+    expect((await ws.as.viewer.delete(`/api/machines/${plasma}/diagonal-checks/${wrong.body.id}`)).status).toBe(403);
+    expect((await other.as.owner.delete(`/api/machines/${plasma}/diagonal-checks/${wrong.body.id}`)).status).toBe(404);
+    expect((await ws.as.builder.delete(`/api/machines/${router}/diagonal-checks/${wrong.body.id}`)).status).toBe(404);
+    expect((await ws.as.builder.delete(`/api/machines/${plasma}/diagonal-checks/${wrong.body.id}`)).status).toBe(204);
+    expect((await ws.as.builder.delete(`/api/machines/${plasma}/diagonal-checks/${wrong.body.id}`)).status).toBe(404);
+    const list = await ws.as.viewer.get(`/api/machines/${plasma}/diagonal-checks`);
+    expect(list.body[0].id).toBe(keep.body.id);
+    expect((await ws.as.viewer.get(`/api/machines/${plasma}/history`)).body[0]).toMatchObject({ action: 'deleted', recordId: wrong.body.id });
+    await app.get(RecordsService).lock(randomUUID(), [{ recordType: 'diagonal-check', recordId: keep.body.id }]);
+    expect((await ws.as.builder.delete(`/api/machines/${plasma}/diagonal-checks/${keep.body.id}`)).status).toBe(409);
+    expect((await ws.as.viewer.get(`/api/machines/${plasma}/diagonal-checks`)).body[0]).toMatchObject({ id: keep.body.id, locked: true });
+  });
+
   it('lets viewers read but not record; other workshops get 404; anonymous 401', async () => {
     const body = { sideX: 1000, sideY: 600, diagonal1: 1166.2, diagonal2: 1166 };
     expect((await ws.as.viewer.post(`/api/machines/${plasma}/diagonal-checks`).send(body)).status).toBe(403);
@@ -203,6 +222,9 @@ describe('frame: bed grids', () => {
 
   it('viewers cannot record; other workshops get 404', async () => {
     const body = { unit: 'mm', points: grid(2, 2, () => 0) };
+    const made = await ws.as.builder.post(`/api/machines/${plasma}/bed-grids`).send(body);
+    expect((await ws.as.viewer.delete(`/api/machines/${plasma}/bed-grids/${made.body.id}`)).status).toBe(403);
+    expect((await ws.as.builder.delete(`/api/machines/${plasma}/bed-grids/${made.body.id}`)).status).toBe(204);
     expect((await ws.as.viewer.post(`/api/machines/${plasma}/bed-grids`).send(body)).status).toBe(403);
     expect((await other.as.technician.post(`/api/machines/${plasma}/bed-grids`).send(body)).status).toBe(404);
     expect((await other.as.viewer.get(`/api/machines/${plasma}/bed-grids`)).status).toBe(404);
@@ -301,6 +323,9 @@ describe('frame: test cuts', () => {
   it('builders and viewers do not record test cuts; other workshops get 404', async () => {
     const body = { nominal: { x: 300, y: 300, circle: 100 }, measured: { x: 300, y: 300, ...square(300, 300), circleX: 100, circleY: 100 } };
     expect((await ws.as.builder.post(`/api/machines/${plasma}/test-cuts`).send(body)).status).toBe(403);
+    const made = await ws.as.technician.post(`/api/machines/${plasma}/test-cuts`).send(body);
+    expect((await ws.as.builder.delete(`/api/machines/${plasma}/test-cuts/${made.body.id}`)).status).toBe(403);
+    expect((await ws.as.technician.delete(`/api/machines/${plasma}/test-cuts/${made.body.id}`)).status).toBe(204);
     expect((await ws.as.viewer.post(`/api/machines/${plasma}/test-cuts`).send(body)).status).toBe(403);
     expect((await other.as.technician.post(`/api/machines/${plasma}/test-cuts`).send(body)).status).toBe(404);
     expect((await ws.as.viewer.get(`/api/machines/${plasma}/test-cuts`)).status).toBe(200);

@@ -1,4 +1,4 @@
-import { BadRequestException, Injectable } from '@nestjs/common';
+import { BadRequestException, Injectable, NotFoundException } from '@nestjs/common';
 import type { SessionUser } from '../auth/session-user.js';
 import type { BedGridPointMm } from '../database/schema/frame.js';
 import { fromMm, toMm, type LengthUnit } from '../engine/units.js';
@@ -50,6 +50,16 @@ export class BedGridsService {
       `Bed grid of ${points.length} points: flatness ${show(response.result.leastSquares.flatnessMm, unit)}, ${response.status.replace('-', ' ')}`,
     );
     return response;
+  }
+
+  /** Removes a record entered by mistake; one an approval was based on is kept (409). */
+  async remove(actor: SessionUser, machineId: string, id: string): Promise<void> {
+    const machine = await this.machines.getRef(actor, machineId);
+    const row = await this.repo.findBedGrid(actor.workshopId, id);
+    if (!row || row.machineId !== machine.id) throw new NotFoundException('No such bed grid on this machine');
+    await this.records.assertEditable(BED_GRID, row.id, 'This bed grid');
+    await this.repo.deleteBedGrid(actor.workshopId, row.id);
+    await this.records.audit(actor, { machineId: machine.id, recordType: BED_GRID, recordId: row.id, action: 'deleted', summary: `Bed grid of ${row.recordedAt.toISOString().slice(0, 10)} by ${row.recordedByName} deleted` });
   }
 
   async list(actor: SessionUser, machineId: string): Promise<BedGridResponse[]> {

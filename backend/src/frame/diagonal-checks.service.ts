@@ -1,4 +1,4 @@
-import { BadRequestException, Injectable } from '@nestjs/common';
+import { BadRequestException, Injectable, NotFoundException } from '@nestjs/common';
 import type { SessionUser } from '../auth/session-user.js';
 import { toMm } from '../engine/units.js';
 import { MachinesService } from '../machines/machines.service.js';
@@ -51,6 +51,16 @@ export class DiagonalChecksService {
       `Diagonal check: ${response.result.mmPerMetre.toFixed(3)} mm/m out of square (${response.result.outOfSquareArcsec.toFixed(0)}″), ${response.status.replace('-', ' ')}`,
     );
     return response;
+  }
+
+  /** Removes a record entered by mistake; one an approval was based on is kept (409). */
+  async remove(actor: SessionUser, machineId: string, id: string): Promise<void> {
+    const machine = await this.machines.getRef(actor, machineId);
+    const row = await this.repo.findDiagonalCheck(actor.workshopId, id);
+    if (!row || row.machineId !== machine.id) throw new NotFoundException('No such diagonal check on this machine');
+    await this.records.assertEditable(DIAGONAL_CHECK, row.id, 'This diagonal check');
+    await this.repo.deleteDiagonalCheck(actor.workshopId, row.id);
+    await this.records.audit(actor, { machineId: machine.id, recordType: DIAGONAL_CHECK, recordId: row.id, action: 'deleted', summary: `Diagonal check of ${row.recordedAt.toISOString().slice(0, 10)} by ${row.recordedByName} deleted` });
   }
 
   async list(actor: SessionUser, machineId: string): Promise<DiagonalCheckResponse[]> {

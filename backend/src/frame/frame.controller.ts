@@ -1,4 +1,4 @@
-import { Body, Controller, Get, Param, ParseUUIDPipe, Post } from '@nestjs/common';
+import { Body, Controller, Delete, Get, HttpCode, Param, ParseUUIDPipe, Post } from '@nestjs/common';
 import { CurrentUser, Roles } from '../auth/decorators.js';
 import type { SessionUser } from '../auth/session-user.js';
 import type { Role } from '../database/schema/users.js';
@@ -52,5 +52,26 @@ export class FrameController {
   @Get('test-cuts')
   listTestCuts(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string) {
     return this.cuts.list(user, id);
+  }
+
+  @Delete('diagonal-checks/:recordId')
+  @HttpCode(204)
+  @Roles(...FRAME_RECORDERS)
+  deleteDiagonalCheck(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string, @Param('recordId', ParseUUIDPipe) recordId: string) {
+    return this.diagonals.remove(user, id, recordId);
+  }
+
+  @Delete('bed-grids/:recordId')
+  @HttpCode(204)
+  @Roles(...FRAME_RECORDERS)
+  deleteBedGrid(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string, @Param('recordId', ParseUUIDPipe) recordId: string) {
+    return this.grids.remove(user, id, recordId);
+  }
+
+  @Delete('test-cuts/:recordId')
+  @HttpCode(204)
+  @Roles(...CUT_RECORDERS)
+  deleteTestCut(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string, @Param('recordId', ParseUUIDPipe) recordId: string) {
+    return this.cuts.remove(user, id, recordId);
   }
 }

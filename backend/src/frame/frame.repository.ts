@@ -31,6 +31,10 @@ export class FrameRepository {
     return row ?? null;
   }
 
+  async deleteDiagonalCheck(workshopId: string, id: string): Promise<void> {
+    await this.db.delete(diagonalChecks).where(and(eq(diagonalChecks.workshopId, workshopId), eq(diagonalChecks.id, id)));
+  }
+
   async insertBedGrid(values: typeof bedGrids.$inferInsert): Promise<BedGridRow> {
     const [row] = await this.db.insert(bedGrids).values(values).returning();
     return row;
@@ -50,6 +54,10 @@ export class FrameRepository {
     return row ?? null;
   }
 
+  async deleteBedGrid(workshopId: string, id: string): Promise<void> {
+    await this.db.delete(bedGrids).where(and(eq(bedGrids.workshopId, workshopId), eq(bedGrids.id, id)));
+  }
+
   async insertTestCut(values: typeof testCuts.$inferInsert): Promise<TestCutRow> {
     const [row] = await this.db.insert(testCuts).values(values).returning();
     return row;
@@ -67,5 +75,9 @@ export class FrameRepository {
   async findTestCut(workshopId: string, id: string): Promise<TestCutRow | null> {
     const [row] = await this.db.select().from(testCuts).where(and(eq(testCuts.workshopId, workshopId), eq(testCuts.id, id)));
     return row ?? null;
+  }
+
+  async deleteTestCut(workshopId: string, id: string): Promise<void> {
+    await this.db.delete(testCuts).where(and(eq(testCuts.workshopId, workshopId), eq(testCuts.id, id)));
   }
 }

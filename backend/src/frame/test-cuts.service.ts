@@ -1,4 +1,4 @@
-import { BadRequestException, Injectable } from '@nestjs/common';
+import { BadRequestException, Injectable, NotFoundException } from '@nestjs/common';
 import type { SessionUser } from '../auth/session-user.js';
 import type { TestCutSizesMm } from '../database/schema/frame.js';
 import { toMm } from '../engine/units.js';
@@ -68,6 +68,16 @@ export class TestCutsService {
       `Test cut: scale X ${r.result.scaleErrorX.toFixed(3)} %, Y ${r.result.scaleErrorY.toFixed(3)} %, ${r.result.squareness.mmPerMetre.toFixed(3)} mm/m out of square, ${r.status.replace('-', ' ')}`,
     );
     return r;
+  }
+
+  /** Removes a record entered by mistake; one an approval was based on is kept (409). */
+  async remove(actor: SessionUser, machineId: string, id: string): Promise<void> {
+    const machine = await this.machines.getRef(actor, machineId);
+    const row = await this.repo.findTestCut(actor.workshopId, id);
+    if (!row || row.machineId !== machine.id) throw new NotFoundException('No such test cut on this machine');
+    await this.records.assertEditable(TEST_CUT, row.id, 'This test cut');
+    await this.repo.deleteTestCut(actor.workshopId, row.id);
+    await this.records.audit(actor, { machineId: machine.id, recordType: TEST_CUT, recordId: row.id, action: 'deleted', summary: `Test cut of ${row.recordedAt.toISOString().slice(0, 10)} by ${row.recordedByName} deleted` });
   }
 
   async list(actor: SessionUser, machineId: string): Promise<TestCutResponse[]> {
