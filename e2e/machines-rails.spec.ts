@@ -61,13 +61,18 @@ test.describe('machines and rails', () => {
     await expect(page.getByRole('figure', { name: 'Live straightness chart' }).locator('.recharts-line-dots circle').first()).toBeVisible();
     // A bow of 3 thou on a 2 thou target: the live verdict is outside before saving.
     await expect(page.getByRole('region', { name: 'New sweep' }).getByText('Outside target')).toBeVisible();
+    // The usual torque for the rail's typical bolt (M5 on a 20 mm rail) is offered, not imposed.
+    await page.getByRole('button', { name: 'Use 8.8' }).click();
+    await expect(page.getByLabel('Torque')).toHaveValue('8.8');
+    await page.getByRole('button', { name: 'As left' }).click();
     await snap(page, 'rail-entry-desktop');
     await page.setViewportSize(TABLET);
     await snap(page, 'rail-entry-tablet');
     await page.setViewportSize({ width: 1366, height: 900 });
-    await page.getByRole('button', { name: 'Save sweep' }).press('Enter');
+    await page.getByRole('button', { name: 'Save sweep' }).click();
     const saved = page.getByRole('region', { name: 'Sweep saved' });
     await expect(saved.getByText(/Least-squares straightness .* thou against a target of 2 thou: outside target/)).toBeVisible();
+    await expect(saved.getByText(/As left .* M5 at 8\.8 N·m/)).toBeVisible();
     await expect(saved.getByRole('table', { name: 'Residual per station' }).getByRole('row')).toHaveCount(7);
     await expect(page.getByRole('table', { name: 'Sweeps' }).getByRole('row')).toHaveCount(2);
     // The draft is cleared for the next sweep and nothing is left waiting.

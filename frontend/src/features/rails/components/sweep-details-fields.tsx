@@ -1,4 +1,4 @@
-import { Box, InputAdornment, MenuItem, Stack, TextField, ToggleButton, ToggleButtonGroup, Typography } from '@mui/material';
+import { Box, Button, InputAdornment, MenuItem, Stack, TextField, ToggleButton, ToggleButtonGroup, Typography } from '@mui/material';
 import type { BoltTorques, SweepPhase } from '../types';
 import type { SweepDraft } from '../hooks/use-sweep-draft';
 
@@ -62,7 +62,21 @@ export function SweepDetailsFields({
           label="Torque"
           value={value.torqueNm}
           onChange={(e) => onChange({ torqueNm: e.target.value })}
-          slotProps={{ htmlInput: { inputMode: 'decimal' }, input: { endAdornment: <InputAdornment position="end">N·m</InputAdornment> } }}
+          slotProps={{
+            htmlInput: { inputMode: 'decimal' },
+            input: {
+              endAdornment: (
+                <InputAdornment position="end">
+                  {usual && value.torqueNm !== String(usual.torqueNm) && (
+                    <Button size="small" onClick={() => onChange({ torqueNm: String(usual.torqueNm) })} sx={{ mr: 1 }}>
+                      Use {usual.torqueNm}
+                    </Button>
+                  )}
+                  N·m
+                </InputAdornment>
+              ),
+            },
+          }}
           helperText={usual ? `Usual for ${usual.boltSize} into steel: ${usual.torqueNm} N·m (a rail maker's table; follow your rail's instructions)` : 'Pick a bolt size for the usual torque'}
           sx={{ gridColumn: { lg: 'span 2' } }}
         />
