@@ -103,6 +103,21 @@ describe('axes and their drive records', () => {
     expect(history.body[0]).toMatchObject({ recordType: 'axis', recordId: id, action: 'updated', changes: { stepsPerMm: { from: 640, to: 641.5 } } });
   });
 
+  it('a saved screw drive counts as a recorded speed check; a measured X or Y travel as a recorded travel envelope', async () => {
+    const m = await newMachine(ws, 'router', { x: 900, y: 600 });
+    const id = await newAxis(ws, m, screwAxis('X'));
+    let history = (await ws.as.viewer.get(`/api/machines/${m}/history`)).body as { action: string; summary: string; recordId: string; changes: { status?: string } | null }[];
+    expect(history.find((h) => h.action === 'recorded' && /Speed check of axis X/.test(h.summary))).toMatchObject({ recordId: id, changes: { status: 'within-target' } });
+    // A Y axis completes the envelope: X 920 ≥ 910 mm, Y 605 < 610 mm.
+    const y = await newAxis(ws, m, { ...screwAxis('Y'), measuredTravelMm: 605 });
+    history = (await ws.as.viewer.get(`/api/machines/${m}/history`)).body;
+    expect(history.find((h) => h.action === 'recorded' && h.recordId === y && /Travel envelope/.test(h.summary))).toMatchObject({ changes: { status: 'outside-target' } });
+    // A faster feed than the screw allows is recorded outside target.
+    await ws.as.technician.patch(`/api/axes/${id}`).send({ maxFeedRate: 12000 });
+    history = (await ws.as.viewer.get(`/api/machines/${m}/history`)).body;
+    expect(history.find((h) => h.action === 'recorded' && /Speed check of axis X: 2400 rpm/.test(h.summary))).toMatchObject({ changes: { status: 'outside-target' } });
+  });
+
   it('a drive given on PATCH replaces the drive; null clears the fastest feed', async () => {
     const id = await newAxis(ws, machineId, screwAxis('V'));
     const res = await ws.as.technician.patch(`/api/axes/${id}`).send({ drive: { type: 'belt', beltPitch: 3, pulleyTeeth: 20 }, maxFeedRate: null });

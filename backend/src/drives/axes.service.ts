@@ -12,9 +12,13 @@ import { toDriveRecord, toEngineDrive } from './drive-record.js';
 import type { CreateAxisDto } from './dto/create-axis.dto.js';
 import type { UpdateAxisDto } from './dto/update-axis.dto.js';
 
+type AxisSaved = (actor: SessionUser, row: AxisRow, before: AxisRow | null) => Promise<void>;
+
 /** Axes of a machine and their drive records: access, validation, steps-per-mm history. */
 @Injectable()
 export class AxesService implements OnModuleInit {
+  private readonly saved: AxisSaved[] = [];
+
   constructor(
     private readonly repo: AxesRepository,
     private readonly checks: AxisChecksRepository,
@@ -28,6 +32,15 @@ export class AxesService implements OnModuleInit {
       const row = await this.repo.find(workshopId, id);
       return row ? { machineId: row.machineId, recordType: 'axis', recordId: id, label: `Axis ${row.name}` } : null;
     });
+  }
+
+  /** Lets the drive checks record the speed check and travel envelope a saved drive record gives. */
+  onAxisSaved(listener: AxisSaved): void {
+    this.saved.push(listener);
+  }
+
+  private async notifySaved(actor: SessionUser, row: AxisRow, before: AxisRow | null) {
+    for (const listener of this.saved) await listener(actor, row, before);
   }
 
   async listRows(actor: SessionUser | { workshopId: string }, machineId: string): Promise<AxisRow[]> {
@@ -74,6 +87,7 @@ export class AxesService implements OnModuleInit {
     await this.assertNameFree(actor, machineId, values.name, null);
     const row = await this.repo.insert(values);
     await this.records.audit(actor, { machineId, recordType: 'axis', recordId: row.id, action: 'created', summary: `Axis ${row.name} added (${row.drive.type} drive, ${row.stepsPerMm} steps/mm in use)` });
+    await this.notifySaved(actor, row, null);
     return this.respond(row);
   }
 
@@ -98,6 +112,7 @@ export class AxesService implements OnModuleInit {
     const { id: _id, workshopId: _w, machineId: _m, createdAt: _c, updatedAt: _u, ...fields } = next as AxisRow;
     const row = await this.repo.update(actor.workshopId, id, { ...fields, stepsHistory });
     await this.records.audit(actor, { machineId: row.machineId, recordType: 'axis', recordId: id, action: 'updated', summary: `Axis ${row.name} changed`, changes: diff(before, row) });
+    await this.notifySaved(actor, row, before);
     return this.respond(row);
   }
 

@@ -5,6 +5,7 @@ import type { TravelTrialResult } from '../engine/travel-trial.js';
 import { MachinesService } from '../machines/machines.service.js';
 import type { MachineRef, ReadinessCheck } from '../records/readiness.js';
 import { ReadinessRegistry } from '../records/readiness.registry.js';
+import { RecordsService } from '../records/records.service.js';
 import { TARGET_LABELS } from '../target-sets/target-keys.js';
 import { AxesRepository, type AxisRow } from './axes.repository.js';
 import { AxesService } from './axes.service.js';
@@ -32,10 +33,36 @@ export class DriveChecksService implements OnModuleInit {
     private readonly machines: MachinesService,
     private readonly targets: DriveTargetsService,
     private readonly readiness: ReadinessRegistry,
+    private readonly records: RecordsService,
   ) {}
 
   onModuleInit() {
     this.readiness.register({ checksFor: (machine) => this.checksFor(machine) });
+    this.axes.onAxisSaved((actor, row, before) => this.axisSaved(actor, row, before));
+  }
+
+  /**
+   * The speed check and the travel envelope are worked out from the drive record rather than
+   * saved: when a save changes what they rest on, they count as recorded (audit, approvals).
+   */
+  private async axisSaved(actor: SessionUser, row: AxisRow, before: AxisRow | null) {
+    const machine = await this.machines.getRef(actor, row.machineId);
+    const targets = await this.targets.forMachine(machine);
+    const changed = (keys: (keyof AxisRow)[]) => !before || keys.some((k) => JSON.stringify(before[k]) !== JSON.stringify(row[k]));
+    const speed = speedCheckOf(row, targets);
+    if (speed.rpm !== null && changed(['drive', 'maxFeedRateMmPerMin'])) {
+      await this.records.checkRecorded(
+        actor,
+        { machineId: machine.id, kind: 'speed-check', recordType: 'axis', recordId: row.id, status: speed.status as 'within-target' | 'outside-target' },
+        `Speed check of axis ${row.name}: ${Math.round(speed.rpm)} rpm at ${speed.feedRate} mm/min, permissible ${Math.round(speed.permissibleSpeed!)} rpm, d·n limit ${Math.round(speed.dnLimitSpeed!)} rpm`,
+      );
+    }
+    if (row.measuredTravelMm !== null && changed(['measuredTravelMm', 'name'])) {
+      const envelope = travelEnvelopeOf(machine, await this.axesRepo.list(machine.workshopId, machine.id), targets);
+      if (envelope.status !== 'not-started' && envelope.axes.some((a) => a.axisId === row.id)) {
+        await this.records.checkRecorded(actor, { machineId: machine.id, kind: 'travel-envelope', recordType: 'axis', recordId: row.id, status: envelope.status }, `Travel envelope: ${envelope.summary}`);
+      }
+    }
   }
 
   async checksFor(machine: MachineRef): Promise<ReadinessCheck[]> {
