@@ -4,6 +4,7 @@ import { AuthService } from '../auth/auth.service.js';
 import type { MachineState } from '../database/schema/machines.js';
 import { MachinesService } from '../machines/machines.service.js';
 import { RecordsService, type CheckRecordedEvent } from '../records/records.service.js';
+import { MailService } from '../mail/mail.service.js';
 import { ApprovalNotifier } from './approval-notifier.js';
 import { ApprovalsRepository } from './approvals.repository.js';
 import { toApprovalResponse, toBlocking, toCheckResponse, toRequestResponse } from './approval.mapper.js';
@@ -29,6 +30,7 @@ export class ApprovalsService implements OnModuleInit {
     private readonly auth: AuthService,
     private readonly recheck: RecheckService,
     private readonly notifier: ApprovalNotifier,
+    private readonly mail: MailService,
   ) {}
 
   onModuleInit() {
@@ -96,7 +98,7 @@ export class ApprovalsService implements OnModuleInit {
     await this.repo.closeOpenRequests(actor.workshopId, machineId);
     const request = await this.repo.insertRequest({ workshopId: actor.workshopId, machineId, requestedById: actor.id, requestedByName: actor.name });
     await this.changeState(actor, machineId, b.machine.state, 'awaiting-approval', `${actor.name} requested approval`);
-    await this.notifier.approvalRequested(actor, b.machine.name, machineId, b.checks);
+    this.mail.later(this.notifier.approvalRequested(actor, b.machine.name, machineId, b.checks), 'approval-requested mail');
     return { ...toRequestResponse(request), state: 'awaiting-approval' as const };
   }
 
@@ -143,7 +145,7 @@ export class ApprovalsService implements OnModuleInit {
       changes: { recordHash: row.recordHash, checks: snapshot.checks.length, waived: snapshot.checks.filter((c) => c.status === 'waived').length },
     });
     await this.changeState(actor, machineId, 'awaiting-approval', 'ready-to-cut', 'Approved as ready to cut');
-    await this.notifier.approved(actor, row);
+    this.mail.later(this.notifier.approved(actor, row), 'approved mail');
     const response = toApprovalResponse(row);
     return { id: response.id, approvedAt: response.approvedAt, approvedBy: response.approvedBy, recordHash: response.recordHash, recheckDueAt: response.recheckDueAt };
   }

@@ -26,6 +26,7 @@ export class MailService implements OnModuleInit, OnModuleDestroy {
   private transport: Transporter | null = null;
   /** Present only while the fake server is in use. */
   fake: FakeSmtpServer | null = null;
+  private readonly pending = new Set<Promise<unknown>>();
 
   async onModuleInit() {
     const s = this.settings;
@@ -44,13 +45,28 @@ export class MailService implements OnModuleInit, OnModuleDestroy {
       host: s.host!,
       port: s.port,
       secure: s.secure,
+      // Bounded, so a mail server that does not answer never holds a request for minutes.
+      connectionTimeout: 10_000,
+      greetingTimeout: 10_000,
+      socketTimeout: 20_000,
       ...(s.user ? { auth: { user: s.user, pass: s.password ?? '' } } : {}),
     });
   }
 
   async onModuleDestroy() {
+    // Let mail already on its way go out before the transport closes (the database is still up).
+    await Promise.allSettled([...this.pending]);
     this.transport?.close();
     await this.fake?.stop();
+  }
+
+  /**
+   * Runs mail work after the answer has gone (a slow mail server never holds up a request);
+   * failures are logged, and shutdown waits for it.
+   */
+  later(work: Promise<unknown>, what: string): void {
+    const tracked = work.catch((err) => this.logger.error(`${what} failed: ${(err as Error).message}`)).finally(() => this.pending.delete(tracked));
+    this.pending.add(tracked);
   }
 
   /** Hands the message over; a failure is logged and reported as false, never thrown at the caller. */
