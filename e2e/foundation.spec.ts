@@ -70,6 +70,7 @@ test.describe('sign-in and the app frame', () => {
     await other.goto(link);
     await other.getByLabel('New password').fill('nell chooses this one');
     await other.getByLabel('Repeat the password').fill('nell chooses this one');
+    await expect(other.getByRole('button', { name: 'Set password' })).toBeEnabled();
     await snap(other, 'set-password');
     await other.getByRole('button', { name: 'Set password' }).click();
     await expect(other).toHaveURL(/sign-in/);
