@@ -33,6 +33,11 @@ test.describe('frame and safety walk', () => {
     await expect(page.getByText(/Lean exaggerated ×\d+/)).toBeVisible();
     await expect(page.getByText(/Move the X0 end back towards Y0 by 1\.0\d mm/)).toBeVisible();
     await shoot(page, 'svg[aria-label^="Measured rectangle"]', 'frame-squareness-drawing-desktop');
+    // Entered by mistake: deleted after a confirmation, the seeded history is current again.
+    await page.getByRole('region', { name: 'Diagonal check' }).getByRole('button', { name: 'Delete' }).click();
+    await page.getByRole('dialog').getByRole('button', { name: 'Delete' }).click();
+    await expect(history.getByRole('row')).toHaveCount(6);
+    await expect(page.getByTestId('squareness-result')).toContainText('0.121');
 
     // A 3 × 4 grid by keyboard: type, Enter to the next cell.
     const grid = page.getByRole('form', { name: 'Bed grid' });

@@ -9,6 +9,7 @@ import { namePoint } from '../utils/grid-labels';
 import { BedGridEntry } from './bed-grid-entry';
 import { BedGridMap } from './bed-grid-map';
 import { StatusChip } from './status-chip';
+import { DeleteRecordButton } from './delete-record-button';
 
 const DIGITS: Record<LengthUnit, number> = { mm: 2, um: 0, in: 4, thou: 1 };
 
@@ -42,12 +43,14 @@ export function BedGridSection({ machineId, workArea, canRecord }: { machineId: 
                   {targetUnit !== 'mm' && ` (${showLength(g.result.leastSquares.flatnessMm, 'mm')})`}
                 </Typography>
                 <StatusChip status={g.status} />
+                {canRecord && !g.locked && <DeleteRecordButton machineId={machineId} kind="bed-grids" id={g.id} what="this bed grid" onDeleted={() => setSelectedId(null)} />}
               </Box>
               <Typography variant="body2" color="text.secondary">
                 Target {showTarget(g.target)} · {g.target.source}
               </Typography>
               <Typography variant="body2">
                 Tilt {g.result.tilt.mmPerMetre.toFixed(3)} mm/m (X {g.result.tilt.xMmPerMetre.toFixed(3)} mm/m, Y {g.result.tilt.yMmPerMetre.toFixed(3)} mm/m) · {g.rows} × {g.columns} points · {showDate(g.recordedAt)} by {g.recordedBy.name}
+                {g.note ? ` · ${g.note}` : ''}
               </Typography>
               <BedGridMap points={g.result.points} unit={unit} worstIndex={g.result.worstPoints[0]?.index} />
               <Box>

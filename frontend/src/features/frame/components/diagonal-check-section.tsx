@@ -4,7 +4,8 @@ import { LoadingState } from '../../../components/states/loading-state';
 import { ErrorState } from '../../../components/states/error-state';
 import { useDiagonalChecks } from '../api/get-diagonal-checks';
 import type { DiagonalCheck } from '../types';
-import { showTarget } from '../utils/format';
+import { showDate, showTarget } from '../utils/format';
+import { DeleteRecordButton } from './delete-record-button';
 import { DiagonalCheckForm } from './diagonal-check-form';
 import { SquarenessDrawing } from './squareness-drawing';
 import { SquaringHistory } from './squaring-history';
@@ -37,7 +38,11 @@ export function DiagonalCheckSection({ machineId, canRecord }: { machineId: stri
                   {shown.result.mmPerMetre.toFixed(3)} mm/m out of square · {shown.result.outOfSquareArcsec.toFixed(0)}″ ({shown.result.outOfSquareDeg.toFixed(4)}°)
                 </Typography>
                 <StatusChip status={shown.status} />
+                {canRecord && !shown.locked && <DeleteRecordButton machineId={machineId} kind="diagonal-checks" id={shown.id} what="this diagonal check" onDeleted={() => setSelectedId(null)} />}
               </Box>
+              <Typography variant="body2" color="text.secondary">
+                Recorded {showDate(shown.recordedAt)} by {shown.recordedBy.name}{shown.note ? ` · ${shown.note}` : ''}
+              </Typography>
               <Typography variant="body2" color="text.secondary">
                 Target {showTarget(shown.target)} · {shown.target.source}
               </Typography>

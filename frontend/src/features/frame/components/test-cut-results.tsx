@@ -1,3 +1,4 @@
+import type { ReactNode } from 'react';
 import { Alert, Box, Stack, Table, TableBody, TableCell, TableContainer, TableHead, TableRow, Typography } from '@mui/material';
 import type { TestCut } from '../types';
 import { showDate, showLength, showSigned, showTarget } from '../utils/format';
@@ -13,7 +14,7 @@ const POINTS_TO: Record<TestCut['result']['ovalityPointsTo'], string> = {
 };
 
 /** What a test cut says: scale per axis and its correction, squareness, ovality, part sizes against ±. */
-export function TestCutResults({ cut }: { cut: TestCut }) {
+export function TestCutResults({ cut, actions }: { cut: TestCut; actions?: ReactNode }) {
   const r = cut.result;
   const tol = cut.targets.part;
   return (
@@ -22,7 +23,9 @@ export function TestCutResults({ cut }: { cut: TestCut }) {
         <Typography variant="h4" component="p">Test cut of {showDate(cut.recordedAt)}</Typography>
         <StatusChip status={cut.status} />
         <Typography variant="body2" color="text.secondary">by {cut.recordedBy.name}</Typography>
+        {actions}
       </Box>
+      {cut.note && <Typography variant="body2" color="text.secondary">{cut.note}</Typography>}
       <TableContainer>
         <Table size="small" aria-label="Scale per axis" sx={{ '& td': { whiteSpace: 'nowrap' } }}>
           <TableHead>

@@ -6,6 +6,7 @@ import { useTestCuts } from '../api/get-test-cuts';
 import { showDate } from '../utils/format';
 import { TestCutForm } from './test-cut-form';
 import { TestCutResults } from './test-cut-results';
+import { DeleteRecordButton } from './delete-record-button';
 
 /** The acceptance cut: entry for technicians, results for everyone, earlier cuts to compare. */
 export function TestCutSection({ machineId, canRecord }: { machineId: string; canRecord: boolean }) {
@@ -26,7 +27,14 @@ export function TestCutSection({ machineId, canRecord }: { machineId: string; ca
       <Box sx={{ display: 'grid', gap: 3, gridTemplateColumns: { xs: '1fr', lg: canRecord ? 'minmax(320px, 5fr) 7fr' : '1fr' } }}>
         {canRecord && <TestCutForm machineId={machineId} onSaved={(c) => setSelectedId(c.id)} />}
         <Box sx={{ minWidth: 0 }}>
-          {cut ? <TestCutResults cut={cut} /> : <Typography color="text.secondary">No test cut yet.</Typography>}
+          {cut ? (
+            <TestCutResults
+              cut={cut}
+              actions={canRecord && !cut.locked ? <DeleteRecordButton machineId={machineId} kind="test-cuts" id={cut.id} what="this test cut" onDeleted={() => setSelectedId(null)} /> : undefined}
+            />
+          ) : (
+            <Typography color="text.secondary">No test cut yet.</Typography>
+          )}
           {list.length > 1 && (
             <TextField select label="Earlier cuts" value={cut?.id ?? ''} onChange={(e) => setSelectedId(e.target.value)} sx={{ mt: 2, minWidth: 280 }}>
               {list.map((c) => (
