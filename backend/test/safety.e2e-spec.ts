@@ -16,6 +16,7 @@ interface Walk {
   id: string | null;
   status: string;
   blocking: boolean;
+  locked: boolean;
   counts: { total: number; answered: number; no: number };
   sections: { id: string; label: string; items: WalkItem[] }[];
 }

@@ -12,6 +12,8 @@ import { KIND_LABELS, type Machine } from '../../features/machines/types';
 import { ReadinessBoard } from '../../features/approvals/components/readiness-board';
 import { RailsPanel } from '../../features/rails/components/rails-panel';
 import { MachineEvidence } from '../../features/evidence/components/machine-evidence';
+import { FramePanel } from '../../features/frame/components/frame-panel';
+import { SafetyWalkPanel } from '../../features/safety/components/safety-walk-panel';
 import { DrivesPanel } from '../../features/drives/components/drives-panel';
 
 interface Section {
@@ -26,6 +28,8 @@ const SECTIONS: Section[] = [
   { id: 'overview', label: 'Specification', render: (m) => <MachineOverview machine={m} /> },
   { id: 'rails', label: 'Rails', render: (m) => <RailsPanel machineId={m.id} /> },
   { id: 'drives', label: 'Drives', render: (m) => <DrivesPanel machineId={m.id} /> },
+  { id: 'frame', label: 'Frame', render: (m) => <FramePanel machine={m} /> },
+  { id: 'safety', label: 'Safety walk', render: (m) => <SafetyWalkPanel machineId={m.id} /> },
   { id: 'evidence', label: 'Evidence', render: (m) => <MachineEvidence machineId={m.id} /> },
   { id: 'history', label: 'History', render: (m) => <MachineHistory machineId={m.id} /> },
 ];
