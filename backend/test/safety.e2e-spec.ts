@@ -131,6 +131,21 @@ describe('safety walk', () => {
     expect(list.body.workshop.map((i: { id: string }) => i.id)).toContain(added.body.id);
   });
 
+  it('a "no" blocks approval and the walk cannot be waived', async () => {
+    const machine = await newMachine();
+    expect((await answer(ws.as.technician, machine, 'stop-limits', { answer: 'no', note: 'Y2 limit switch loose' })).status).toBe(200);
+    const board = await ws.as.owner.get(`/api/machines/${machine}/readiness`);
+    const walk = board.body.checks.find((c: { kind: string }) => c.kind === 'safety-walk');
+    expect(walk.status).toBe('outside-target');
+    const waiver = await ws.as.owner
+      .post(`/api/machines/${machine}/checks/${encodeURIComponent(walk.key)}/waiver`)
+      .send({ reason: 'We will fix the switch next week.' });
+    expect(waiver.status).toBe(409);
+    expect(waiver.body.message).toMatch(/safety walk cannot be waived/);
+    const request = await ws.as.technician.post(`/api/machines/${machine}/approval-requests`);
+    expect(request.status).toBe(409);
+  });
+
   it('an approved walk is locked (409); a new walk can then be started', async () => {
     const machine = await newMachine();
     const res = await answer(ws.as.technician, machine, 'stop-limits', { answer: 'yes' });

@@ -61,6 +61,9 @@ export class ApprovalsService implements OnModuleInit {
     const b = await this.board.board(actor, machineId);
     const check = b.checks.find((c) => c.key === checkKey);
     if (!check) throw new BadRequestException([`checkId "${checkKey}" is not a required check of this machine`]);
+    if (check.kind === 'safety-walk') {
+      throw new ConflictException('The safety walk cannot be waived: put right what was answered "no" and answer it again (items that do not apply can be answered "not applicable")');
+    }
     if (check.measuredStatus === 'within-target') throw new ConflictException(`${check.subject}: ${KIND_LABELS[check.kind].toLowerCase()} is within target and needs no waiver`);
     if (check.status === 'waived') throw new ConflictException(`${check.subject}: ${KIND_LABELS[check.kind].toLowerCase()} is already waived for its current record`);
     if (b.machine.state === 'awaiting-approval') throw new ConflictException('The machine is awaiting approval: waive before requesting it, or record the check again');

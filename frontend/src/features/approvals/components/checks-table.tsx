@@ -44,7 +44,8 @@ export function ChecksTable({ checks, onWaive }: Props) {
                     “{c.waiver.reason}” — {c.waiver.by}, {dateTime(c.waiver.at)}
                   </Typography>
                 )}
-                {onWaive && (c.status === 'outside-target' || c.status === 'not-started') && (
+                {/* The safety walk is answered, never waived. */}
+                {onWaive && c.kind !== 'safety-walk' && (c.status === 'outside-target' || c.status === 'not-started') && (
                   <Box sx={{ mt: 0.5 }}>
                     <Button size="small" onClick={() => onWaive(c)} aria-label={`Waive ${KIND_LABELS[c.kind]} of ${c.subject}`}>Waive…</Button>
                   </Box>
