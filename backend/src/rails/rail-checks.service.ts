@@ -107,7 +107,8 @@ export class RailChecksService implements OnModuleInit {
     const common = {
       key: `straightness:${rail.id}`,
       kind: 'rail-straightness' as const,
-      subject: `Rail ${rail.label} (${rail.axis})`,
+      // "Rail Y1 (left)" already names its axis; "Rail left" gets it added.
+      subject: rail.label.includes(rail.axis) ? `Rail ${rail.label}` : `Rail ${rail.label} (${rail.axis})`,
       target: { ...plain(target), label: TARGET_LABELS.railStraightness },
       link: railLink(rail.machineId, rail.id),
     };
