@@ -1,3 +1,4 @@
+import { toPositioningResponse as positioningResult } from '../calculators/calculators.mapper.js';
 import type { TargetValue } from '../database/schema/target-sets.js';
 import type { PositioningResult } from '../engine/positioning.js';
 import type { TravelTrialResult } from '../engine/travel-trial.js';
@@ -38,35 +39,8 @@ export function toTravelTrialResponse(row: TravelTrialRow, targets: DriveTargets
   };
 }
 
-export const positioningResult = (r: PositioningResult) => ({
-  accuracy: r.accuracyMm,
-  accuracyUp: r.accuracyUpMm,
-  accuracyDown: r.accuracyDownMm,
-  repeatability: r.repeatabilityMm,
-  repeatabilityUp: r.repeatabilityUpMm,
-  repeatabilityDown: r.repeatabilityDownMm,
-  reversal: r.reversalMm,
-  reversalMean: r.reversalMeanMm,
-  systematic: r.systematicMm,
-  systematicUp: r.systematicUpMm,
-  systematicDown: r.systematicDownMm,
-  meanRange: r.meanRangeMm,
-  runsUp: r.runsUp,
-  runsDown: r.runsDown,
-  targets: r.targets.map((t) => ({
-    target: t.targetMm,
-    meanUp: t.meanUpMm,
-    meanDown: t.meanDownMm,
-    mean: t.meanMm,
-    reversal: t.reversalMm,
-    sUp: t.sUpMm,
-    sDown: t.sDownMm,
-    repeatabilityUp: t.repeatabilityUpMm,
-    repeatabilityDown: t.repeatabilityDownMm,
-    repeatability: t.repeatabilityMm,
-  })),
-  warnings: r.warnings,
-});
+// Records answer with exactly the calculators' fields, so both read the same.
+export { positioningResult };
 
 export function toPositioningRunResponse(row: PositioningRunRow, targets: DriveTargets, locked: boolean) {
   const r = row.result as unknown as PositioningResult;
