@@ -184,4 +184,19 @@ test.describe('evidence: photos and files', () => {
     await expect(page.getByRole('button', { name: 'Choose files' })).toHaveCount(0);
     await expect(page.getByRole('button', { name: 'Delete frame.jpg' })).toHaveCount(0);
   });
+  test('a photo goes straight onto a rail from the rail page, and shows there and in the machine file', async ({ page }) => {
+    await signInAs(page, DEMO.builder);
+    const machineId = await newMachine(page.request, `Rail photo table ${Date.now()}`);
+    const rail = await page.request.post(`/api/machines/${machineId}/rails`, { data: { label: 'Y1 (left)', axis: 'Y1', lengthMm: 600, holePitchMm: 60, firstHoleMm: 30 } });
+    expect(rail.status()).toBe(201);
+    const railId = (await rail.json()).id as string;
+    await page.goto(`/machines/${machineId}/rails/${railId}`);
+    const panel = page.getByRole('region', { name: 'Photos and files of this rail' });
+    await panel.getByLabel('Choose photos or files').setInputFiles([{ name: 'indicator-on-y1.jpg', mimeType: 'image/jpeg', buffer: await railPhoto() }]);
+    await expect(panel.getByRole('button', { name: 'View indicator-on-y1.jpg full size' })).toBeVisible();
+    const listed = await (await page.request.get(`/api/evidence?subjectType=rail&subjectId=${railId}`)).json();
+    expect(listed.map((e: { fileName: string }) => e.fileName)).toContain('indicator-on-y1.jpg');
+    await openEvidence(page, machineId);
+    await expect(page.getByRole('button', { name: 'View indicator-on-y1.jpg full size' })).toBeVisible();
+  });
 });

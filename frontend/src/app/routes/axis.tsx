@@ -18,6 +18,7 @@ import { PositioningSection } from '../../features/drives/components/positioning
 import { SpeedCheckCard } from '../../features/drives/components/speed-check-card';
 import { TestProgramDialog } from '../../features/drives/components/test-program-dialog';
 import { TravelTrialSection } from '../../features/drives/components/travel-trial-section';
+import { EvidencePanel } from '../../features/evidence/components/evidence-panel';
 
 export default function AxisRoute() {
   const { machineId = '', axisId = '' } = useParams();
@@ -62,6 +63,7 @@ export default function AxisRoute() {
           </Box>
         </Box>
         <PositioningSection axis={a} mayRecord={mayRecord} />
+        <EvidencePanel subjectType="axis" subjectId={a.id} title="Photos and files of this axis" what={`axis ${a.name}`} />
       </Stack>
       {mayRecord && <AxisFormDialog machineId={machineId} axis={a} open={editing} onClose={() => setEditing(false)} />}
       <TestProgramDialog axis={a} open={program} onClose={() => setProgram(false)} />

@@ -21,6 +21,7 @@ import { SweepEntry } from '../../features/rails/components/sweep-entry';
 import { SweepHistory } from '../../features/rails/components/sweep-history';
 import { SweepResult } from '../../features/rails/components/sweep-result';
 import type { Sweep } from '../../features/rails/types';
+import { EvidencePanel } from '../../features/evidence/components/evidence-panel';
 
 export default function RailRoute() {
   const { machineId = '', railId = '' } = useParams();
@@ -82,6 +83,7 @@ export default function RailRoute() {
         {saved && <SweepResult sweep={saved} title="Sweep saved" />}
         {sweeps.isError && <ErrorState error={sweeps.error} onRetry={() => sweeps.refetch()} />}
         {sweeps.data && <SweepHistory sweeps={sweeps.data} canRecord={recorder} />}
+        <EvidencePanel subjectType="rail" subjectId={r.id} title="Photos and files of this rail" what={`rail ${r.label}`} />
       </Stack>
     </>
   );
