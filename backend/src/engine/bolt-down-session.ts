@@ -1,6 +1,6 @@
 import { fixingOrder, targetReading, TARGET_MODES, type FixedHole, type TargetMode } from './bolt-down.js';
 import { EngineInputError } from './engine-input-error.js';
-import { requireFinite } from './validate.js';
+import { requireFinite, requireFiniteResult } from './validate.js';
 
 /**
  * A bolt-down in progress, as recorded at the machine: the builder may fix holes out of the
@@ -84,5 +84,5 @@ export function boltDownSession(
     };
   });
   const nextHole = order.find((hole) => !states[hole].fixed) ?? null;
-  return { holes: states, nextHole, fixedCount: sequence.length, complete: positionsMm.length > 0 && nextHole === null };
+  return requireFiniteResult('readings', { holes: states, nextHole, fixedCount: sequence.length, complete: positionsMm.length > 0 && nextHole === null });
 }

@@ -1,5 +1,5 @@
 import { EngineInputError } from './engine-input-error.js';
-import { MAX_POINTS, requireFinite, requireNonNegative, requirePositive } from './validate.js';
+import { MAX_POINTS, requireFinite, requireNonNegative, requirePositive, requireFiniteResult } from './validate.js';
 
 /**
  * Bolt-down guide for a rail fixed hole by hole: where the holes are, the order to fix them
@@ -137,5 +137,5 @@ export function boltDownGuide(
       fixed.push({ positionMm, readingMm: requireFinite(`reading at hole ${hole}`, reading) });
     }
   }
-  return { steps, nextHole };
+  return requireFiniteResult('readings', { steps, nextHole });
 }

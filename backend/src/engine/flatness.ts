@@ -1,5 +1,5 @@
 import { EngineInputError } from './engine-input-error.js';
-import { requireCount, requireFinite } from './validate.js';
+import { requireCount, requireFinite, requireFiniteResult } from './validate.js';
 
 /**
  * Flatness of a bed grid: least-squares plane z = a·x + b·y + c through heights measured at
@@ -96,7 +96,7 @@ export function evaluateFlatness(points: readonly GridPoint[]): FlatnessResult {
     if (r > max) max = r;
   });
 
-  return {
+  return requireFiniteResult('points', {
     a,
     b,
     cMm: c,
@@ -106,5 +106,5 @@ export function evaluateFlatness(points: readonly GridPoint[]): FlatnessResult {
     tiltYMmPerMetre: b * 1000,
     tiltMmPerMetre: Math.hypot(a, b) * 1000,
     tiltDirectionDeg: (Math.atan2(b, a) * 180) / Math.PI,
-  };
+  });
 }

@@ -1,4 +1,4 @@
-import { ascendingOrder, requireNumberArray, requireSameLength } from './validate.js';
+import { ascendingOrder, requireNumberArray, requireSameLength, requireFiniteResult } from './validate.js';
 
 /**
  * Parallelism of two rails read at the same stations against one datum (all mm): the spread of
@@ -39,5 +39,5 @@ export function evaluateParallelism(input: ParallelismInput): ParallelismResult 
     if (d > max) max = d;
     sum += d;
   }
-  return { parallelismMm: max - min, meanOffsetMm: sum / positions.length, differencesMm: differences };
+  return requireFiniteResult('railAMm and railBMm', { parallelismMm: max - min, meanOffsetMm: sum / positions.length, differencesMm: differences });
 }

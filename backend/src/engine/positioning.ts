@@ -1,5 +1,5 @@
 import { EngineInputError } from './engine-input-error.js';
-import { MAX_POINTS, ascendingOrder, requireNumberArray } from './validate.js';
+import { MAX_POINTS, ascendingOrder, requireNumberArray, requireFiniteResult } from './validate.js';
 
 /**
  * Positioning accuracy and repeatability of a linear axis from a repeat-and-reverse run, with
@@ -167,7 +167,7 @@ export function evaluatePositioning(input: PositioningInput): PositioningResult 
     warnings.push(`ISO 230-2 asks for at least ${STANDARD_MIN_TARGETS} targets along the axis (got ${m})`);
   }
 
-  return {
+  return requireFiniteResult('runs', {
     targets: perTarget,
     reversalMm: maxOf(col((t) => Math.abs(t.reversalMm))),
     reversalMeanMm: col((t) => t.reversalMm).reduce((s, v) => s + v, 0) / m,
@@ -184,5 +184,5 @@ export function evaluatePositioning(input: PositioningInput): PositioningResult 
     runsUp,
     runsDown,
     warnings,
-  };
+  });
 }

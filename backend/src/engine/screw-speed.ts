@@ -1,5 +1,5 @@
 import { EngineInputError } from './engine-input-error.js';
-import { requireNonNegative, requirePositive } from './validate.js';
+import { requireNonNegative, requirePositive, requireFiniteResult } from './validate.js';
 
 /**
  * Ball-screw speed check: the screw's rotational speed at a feed rate against its permissible
@@ -77,7 +77,7 @@ export function evaluateScrewSpeed(input: ScrewSpeedInput): ScrewSpeedResult {
   const dnLimitSpeed = dnLimit / nominal;
   const rpm = feed / lead;
   const top = Math.min(permissible, dnLimitSpeed);
-  return {
+  return requireFiniteResult('the screw and feed values', {
     rpm,
     criticalSpeedRpm: critical,
     permissibleSpeedRpm: permissible,
@@ -88,5 +88,5 @@ export function evaluateScrewSpeed(input: ScrewSpeedInput): ScrewSpeedResult {
     mountingFactor: factor,
     dnLimit,
     source: SCREW_SPEED_SOURCE,
-  };
+  });
 }

@@ -1,5 +1,5 @@
 import { EngineInputError } from './engine-input-error.js';
-import { requirePositive } from './validate.js';
+import { requirePositive, requireFiniteResult } from './validate.js';
 
 /**
  * Squareness of a gantry from the two diagonals of a rectangle it traced (or that was measured on
@@ -66,7 +66,7 @@ export function evaluateSquareness(input: SquarenessInput): SquarenessResult {
     );
   }
 
-  return {
+  return requireFiniteResult('the sides and diagonals', {
     outOfSquareRad: gamma,
     outOfSquareDeg: (gamma * 180) / Math.PI,
     outOfSquareArcsec: (gamma * 180 * 3600) / Math.PI,
@@ -76,5 +76,5 @@ export function evaluateSquareness(input: SquarenessInput): SquarenessResult {
     correctionMm: span * tanGamma,
     spanMm: span,
     warnings,
-  };
+  });
 }

@@ -1,5 +1,5 @@
 import { EngineInputError } from './engine-input-error.js';
-import { requirePositive, requirePositiveInteger } from './validate.js';
+import { requirePositive, requirePositiveInteger, requireFiniteResult } from './validate.js';
 
 /**
  * Steps per millimetre of a stepper (or step/direction servo) axis:
@@ -66,10 +66,10 @@ export function evaluateDrive(input: DriveInput): DriveResult {
   const microsteps = requirePositive('microsteps', input.microsteps);
   const gearRatio = input.gearRatio == null ? 1 : requirePositive('gearRatio', input.gearRatio);
   const stepsPerMm = (steps * microsteps * gearRatio) / travel;
-  return {
+  return requireFiniteResult('the drive values', {
     travelPerRevMm: travel,
     travelPerMotorRevMm: travel / gearRatio,
     stepsPerMm,
     resolutionMm: 1 / stepsPerMm,
-  };
+  });
 }

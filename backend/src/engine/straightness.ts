@@ -1,6 +1,6 @@
 import { fitLine } from './linear-fit.js';
 import { minimumZoneLine } from './minimum-zone.js';
-import { MAX_POINTS, ascendingOrder, requireNumberArray, requireSameLength } from './validate.js';
+import { MAX_POINTS, ascendingOrder, requireNumberArray, requireSameLength, requireFiniteResult } from './validate.js';
 
 /**
  * Straightness of a rail from indicator readings at stations along it (all in mm).
@@ -94,9 +94,9 @@ export function evaluateStraightness(input: StraightnessInput, options: Straight
   const { positions, readings, order } = validated(input, options);
   const fit = fitLine(positions, readings);
   const zone = minimumZoneLine(positions, readings, order);
-  return {
+  return requireFiniteResult('readingsMm', {
     leastSquares: againstLine(positions, readings, fit.slope, fit.intercept),
     minimumZone: againstLine(positions, readings, zone.slope, zone.intercept),
     endPoint: endPointFrom(positions, readings, order),
-  };
+  });
 }

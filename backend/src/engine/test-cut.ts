@@ -1,6 +1,6 @@
 import { EngineInputError } from './engine-input-error.js';
 import { evaluateSquareness, type SquarenessResult } from './squareness.js';
-import { requireNonNegative, requirePositive } from './validate.js';
+import { requireNonNegative, requirePositive, requireFiniteResult } from './validate.js';
 
 /**
  * Test-cut evaluation (common practice for commissioning a cutting table): a large square with
@@ -119,5 +119,5 @@ export function evaluateTestCut(input: TestCutInput): TestCutResult {
   if (squareness && (Math.abs(x.errorMm) > tolerance || Math.abs(y.errorMm) > tolerance)) {
     notes.push('set steps per mm first, then square the gantry, re-home and cut again');
   }
-  return { x, y, squareness, ovality, notes };
+  return requireFiniteResult('the measured sizes', { x, y, squareness, ovality, notes });
 }

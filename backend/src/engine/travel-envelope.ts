@@ -1,5 +1,5 @@
 import { EngineInputError } from './engine-input-error.js';
-import { requireNonNegative, requirePositive } from './validate.js';
+import { requireNonNegative, requirePositive, requireFiniteResult } from './validate.js';
 
 /**
  * Travel envelope: whether each axis's measured travel covers the sheet or work size it must
@@ -49,5 +49,5 @@ export function evaluateTravelEnvelope(input: TravelEnvelopeInput): TravelEnvelo
     const required = work + 2 * margin;
     return { axis: a.axis, measuredTravelMm: measured, workSizeMm: work, requiredTravelMm: required, spareMm: measured - required, covers: measured >= required };
   });
-  return { axes, marginPerSideMm: margin, coversAll: axes.every((a) => a.covers) };
+  return requireFiniteResult('axes', { axes, marginPerSideMm: margin, coversAll: axes.every((a) => a.covers) });
 }

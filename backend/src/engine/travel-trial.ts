@@ -1,6 +1,6 @@
 import { EngineInputError } from './engine-input-error.js';
 import { fitLine, fitLineThroughOrigin } from './linear-fit.js';
-import { requireCount, requireFinite, requirePositive } from './validate.js';
+import { requireCount, requireFinite, requirePositive, requireFiniteResult } from './validate.js';
 
 /**
  * Travel trial: commanded moves against measured moves of one axis (mm). A least-squares line
@@ -73,12 +73,12 @@ export function evaluateTravelTrial(input: TravelTrialInput): TravelTrialResult 
     return { commandedMm: c, measuredMm: measured[i], errorMm: measured[i] - c, residualMm: residual };
   });
 
-  return {
+  return requireFiniteResult('moves', {
     scale,
     offsetMm: offset,
     correctedStepsPerMm: used / scale,
     errorPercent: (scale - 1) * 100,
     residualMaxMm: residualMax,
     moves,
-  };
+  });
 }

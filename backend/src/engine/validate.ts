@@ -4,11 +4,23 @@ import { sortedOrder } from './sort-order.js';
 /** Largest point count any computation accepts; keeps one request bounded in time and memory. */
 export const MAX_POINTS = 200_000;
 
+/**
+ * Largest size any single input number may have. Far beyond any length, speed or count on a
+ * gantry machine, and small enough that sums of squares of 200 000 such values stay finite,
+ * so no computation can overflow into a result that cannot be shown or stored.
+ */
+export const MAX_MAGNITUDE = 1e9;
+
 export function requireFinite(field: string, value: unknown): number {
   if (typeof value !== 'number' || !Number.isFinite(value)) {
     throw new EngineInputError(`${field} must be a finite number`, field);
   }
+  if (Math.abs(value) > MAX_MAGNITUDE) throw outOfRange(field, value);
   return value;
+}
+
+function outOfRange(field: string, value: number): EngineInputError {
+  return new EngineInputError(`${field} is out of range (${value}); at most ${MAX_MAGNITUDE} in size is accepted`, field);
 }
 
 export function requirePositive(field: string, value: unknown): number {
@@ -38,8 +50,47 @@ export function requireNumberArray(field: string, values: unknown, minLength: nu
     if (typeof v !== 'number' || !Number.isFinite(v)) {
       throw new EngineInputError(`${field}[${i}] must be a finite number`, field);
     }
+    if (Math.abs(v) > MAX_MAGNITUDE) throw outOfRange(`${field}[${i}]`, v);
   }
   return values as number[];
+}
+
+/**
+ * The last check of every computation: a result holding NaN or ±Infinity (an overflow, or a
+ * division by a vanishing fit) would be stored and then break every page that reads it, so the
+ * inputs are refused instead. `field` names the input the caller should change.
+ */
+export function requireFiniteResult<T>(field: string, result: T): T {
+  const bad = firstNonFinite(result, '');
+  if (bad !== null) {
+    throw new EngineInputError(
+      `${field} give a result that cannot be computed (${bad || 'result'} is not a finite number); check the values entered`,
+      field,
+    );
+  }
+  return result;
+}
+
+function firstNonFinite(value: unknown, path: string): string | null {
+  if (typeof value === 'number') return Number.isFinite(value) ? null : path;
+  if (value === null || typeof value !== 'object') return null;
+  if (ArrayBuffer.isView(value)) {
+    const arr = value as unknown as ArrayLike<number>;
+    for (let i = 0; i < arr.length; i++) if (typeof arr[i] === 'number' && !Number.isFinite(arr[i])) return `${path}[${i}]`;
+    return null;
+  }
+  if (Array.isArray(value)) {
+    for (let i = 0; i < value.length; i++) {
+      const found = firstNonFinite(value[i], `${path}[${i}]`);
+      if (found !== null) return found;
+    }
+    return null;
+  }
+  for (const [key, v] of Object.entries(value)) {
+    const found = firstNonFinite(v, path ? `${path}.${key}` : key);
+    if (found !== null) return found;
+  }
+  return null;
 }
 
 export function requireCount(field: string, count: number, minLength: number, maxLength = MAX_POINTS): void {
