@@ -5,6 +5,13 @@ import type { TravelTrialResult } from '../engine/travel-trial.js';
 import type { PositioningRunRow, TravelTrialRow } from './axis-checks.repository.js';
 import { positioningVerdicts, travelTrialStatus } from './drive-status.js';
 import type { DriveTargets } from './drive-targets.js';
+import { readableResult, UNREADABLE_RESULT } from '../common/stored-result.js';
+
+/** The numbers the readers of a stored travel trial and positioning run use. */
+export const TRAVEL_TRIAL_SHAPE = ['correctedStepsPerMm', 'errorPercent', 'scale', 'offsetMm', 'residualMaxMm', 'moves[]', 'moves[].commandedMm', 'moves[].measuredMm', 'moves[].errorMm', 'moves[].residualMm'];
+export const POSITIONING_SHAPE = ['accuracyMm', 'repeatabilityMm', 'reversalMm', 'targets[]', 'targets[].targetMm', 'targets[].meanUpMm', 'targets[].meanDownMm'];
+export const storedTravelTrial = (stored: unknown) => readableResult<TravelTrialResult>(stored, TRAVEL_TRIAL_SHAPE);
+export const storedPositioning = (stored: unknown) => readableResult<PositioningResult>(stored, POSITIONING_SHAPE);
 
 /** Engine result (mm) with the calculators' field names. */
 export const travelTrialResult = (r: TravelTrialResult) => ({
@@ -18,7 +25,7 @@ export const travelTrialResult = (r: TravelTrialResult) => ({
 });
 
 export function toTravelTrialResponse(row: TravelTrialRow, targets: DriveTargets, locked: boolean) {
-  const r = row.result as unknown as TravelTrialResult;
+  const r = storedTravelTrial(row.result);
   return {
     id: row.id,
     axisId: row.axisId,
@@ -27,8 +34,9 @@ export function toTravelTrialResponse(row: TravelTrialRow, targets: DriveTargets
     stepsPerMmUsed: row.stepsPerMmUsed,
     throughOrigin: row.throughOrigin,
     moves: row.moves,
-    result: travelTrialResult(r),
-    status: travelTrialStatus(r.errorPercent, targets),
+    result: r ? travelTrialResult(r) : null,
+    status: r ? travelTrialStatus(r.errorPercent, targets) : ('outside-target' as const),
+    ...(r ? {} : { unreadable: UNREADABLE_RESULT }),
     target: targets.stepsPerMmError.target as TargetValue,
     notes: row.notes,
     recordedBy: row.recordedByName,
@@ -43,8 +51,10 @@ export function toTravelTrialResponse(row: TravelTrialRow, targets: DriveTargets
 export { positioningResult };
 
 export function toPositioningRunResponse(row: PositioningRunRow, targets: DriveTargets, locked: boolean) {
-  const r = row.result as unknown as PositioningResult;
-  const { checks, status } = positioningVerdicts({ accuracy: r.accuracyMm, repeatability: r.repeatabilityMm, reversal: r.reversalMm }, targets);
+  const r = storedPositioning(row.result);
+  const { checks, status } = r
+    ? positioningVerdicts({ accuracy: r.accuracyMm, repeatability: r.repeatabilityMm, reversal: r.reversalMm }, targets)
+    : { checks: null, status: 'outside-target' as const };
   return {
     id: row.id,
     axisId: row.axisId,
@@ -52,9 +62,10 @@ export function toPositioningRunResponse(row: PositioningRunRow, targets: DriveT
     unit: row.unit,
     targets: row.targets,
     runs: row.runs,
-    result: positioningResult(r),
+    result: r ? positioningResult(r) : null,
     checks,
     status,
+    ...(r ? {} : { unreadable: UNREADABLE_RESULT }),
     notes: row.notes,
     recordedBy: row.recordedByName,
     recordedAt: row.createdAt.toISOString(),

@@ -15,6 +15,8 @@ import { positioningVerdicts, travelTrialStatus } from './drive-status.js';
 import { DriveTargetsService, type DriveTargets } from './drive-targets.js';
 import { speedCheckOf } from './speed-check.js';
 import { travelEnvelopeOf } from './travel-envelope.js';
+import { storedPositioning, storedTravelTrial } from './axis-check.mapper.js';
+import { UNREADABLE_RESULT } from '../common/stored-result.js';
 
 const fmt = (v: number, d = 3) => v.toFixed(d);
 const axisLink = (machineId: string, axisId: string) => `/machines/${machineId}/axes/${axisId}`;
@@ -121,15 +123,17 @@ export class DriveChecksService implements OnModuleInit {
       const summaries: AxisCheckSummary[] = [];
 
       const trial = trials.get(axis.id);
-      const tr = trial ? (trial.result as unknown as TravelTrialResult) : null;
+      const tr: TravelTrialResult | null = trial ? storedTravelTrial(trial.result) : null;
+      // A latest trial that cannot be read blocks like a failed one and says why.
+      const trialUnreadable = trial !== undefined && tr === null;
       const trialSummary = tr
         ? `${fmt(tr.errorPercent)} % scale error at ${trial!.stepsPerMmUsed} steps/mm; corrected ${fmt(tr.correctedStepsPerMm, 4)} steps/mm${trial!.appliedAt ? ' (applied — record a confirming trial)' : ''}`
-        : 'No travel trial recorded yet';
-      const trialStatus = tr ? travelTrialStatus(tr.errorPercent, targets) : 'not-started';
+        : trialUnreadable ? UNREADABLE_RESULT : 'No travel trial recorded yet';
+      const trialStatus = tr ? travelTrialStatus(tr.errorPercent, targets) : trialUnreadable ? 'outside-target' : 'not-started';
       out.push({
         key: `travel-trial:${axis.id}`,
         kind: 'travel-trial',
-        subject: `Axis ${axis.name}`,
+        subject: trialUnreadable ? `Axis ${axis.name} (latest travel trial unreadable)` : `Axis ${axis.name}`,
         status: trialStatus,
         target: { ...targets.stepsPerMmError.target, label: TARGET_LABELS.stepsPerMmError },
         // The size of the error against the ± target; the summary keeps its sign.
@@ -152,14 +156,19 @@ export class DriveChecksService implements OnModuleInit {
       summaries.push({ status: trialStatus, summary: trialSummary, headline: tr ? `${tr.errorPercent >= 0 ? '+' : ''}${fmt(tr.errorPercent)} % scale error` : null, recordId: trial?.id ?? null, recordedAt: trial?.createdAt.toISOString() ?? null });
 
       const run = runs.get(axis.id);
-      const pr = run ? (run.result as unknown as PositioningResult) : null;
-      const verdict = pr ? positioningVerdicts({ accuracy: pr.accuracyMm, repeatability: pr.repeatabilityMm, reversal: pr.reversalMm }, targets) : null;
-      const runSummary = pr ? `accuracy ${fmt(pr.accuracyMm)} mm, repeatability ${fmt(pr.repeatabilityMm)} mm, reversal ${fmt(pr.reversalMm)} mm` : 'No repeat-and-reverse run recorded yet';
+      const pr: PositioningResult | null = run ? storedPositioning(run.result) : null;
+      const runUnreadable = run !== undefined && pr === null;
+      const verdict = pr
+        ? positioningVerdicts({ accuracy: pr.accuracyMm, repeatability: pr.repeatabilityMm, reversal: pr.reversalMm }, targets)
+        : runUnreadable ? { status: 'outside-target' as const } : null;
+      const runSummary = pr
+        ? `accuracy ${fmt(pr.accuracyMm)} mm, repeatability ${fmt(pr.repeatabilityMm)} mm, reversal ${fmt(pr.reversalMm)} mm`
+        : runUnreadable ? UNREADABLE_RESULT : 'No repeat-and-reverse run recorded yet';
       const t = targets;
       out.push({
         key: `positioning:${axis.id}`,
         kind: 'positioning',
-        subject: `Axis ${axis.name}`,
+        subject: runUnreadable ? `Axis ${axis.name} (latest repeat-and-reverse run unreadable)` : `Axis ${axis.name}`,
         status: verdict?.status ?? 'not-started',
         target: {
           ...t.positioningAccuracy.target,
