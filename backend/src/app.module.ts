@@ -1,4 +1,6 @@
 import { Module } from '@nestjs/common';
+import { APP_INTERCEPTOR } from '@nestjs/core';
+import { CommandTransactionInterceptor } from './database/command-transaction.interceptor.js';
 import { AuthModule } from './auth/auth.module.js';
 import { DatabaseModule } from './database/database.module.js';
 import { HealthModule } from './health/health.module.js';
@@ -34,5 +36,6 @@ import { ApprovalsModule } from './approvals/approvals.module.js';
     MailModule,
     ApprovalsModule,
   ],
+  providers: [{ provide: APP_INTERCEPTOR, useClass: CommandTransactionInterceptor }],
 })
 export class AppModule {}

@@ -218,26 +218,29 @@ describe('readiness board, waivers, approval and certificate', () => {
       expect((await other.as.owner.get(`/api/machines/${machineId}/certificate.pdf`)).status).toBe(404);
     });
 
-    it('a later check outside target takes the machine out of ready to cut, and leaves the approved record as it was', async () => {
+    it('keeps the record read-only while the approval stands; the owner reopens it with a reason, audited and mailed', async () => {
       const before = await pdfOf(ws.as.viewer, machineId);
-      const rec = fake.record(machineId, 'fake-straightness:Y2', 31, 'outside-target');
-      await app.get(RecordsService).checkRecorded(
-        { id: ws.userIds.builder, name: 'builder', email: ws.emails.builder, role: 'builder', workshopId: ws.id, workshopName: ws.name },
-        { machineId, kind: 'rail-straightness', recordType: 'fake-check', recordId: rec.recordId!, status: 'outside-target' },
-        'Rail Y2 swept again: 31 µm',
-      );
+      // Only the owner reopens, and only with a reason.
+      expect((await ws.as.technician.post(`/api/machines/${machineId}/reopen`).send({ reason: 'Y2 rail was knocked by a forklift' })).status).toBe(403);
+      const short = await ws.as.owner.post(`/api/machines/${machineId}/reopen`).send({ reason: 'bump' });
+      expect([short.status, short.body.message]).toEqual([400, [expect.stringMatching(/^reason /)]]);
+      expect((await board(ws, machineId)).state).toBe('ready-to-cut');
+      const reopened = await ws.as.owner.post(`/api/machines/${machineId}/reopen`).send({ reason: 'Y2 rail was knocked by a forklift' });
+      expect([reopened.status, reopened.body.state]).toEqual([201, 'reopened']);
+      // A second reopen (a double click) finds nothing standing.
+      expect((await ws.as.owner.post(`/api/machines/${machineId}/reopen`).send({ reason: 'Y2 rail was knocked by a forklift' })).status).toBe(409);
+      fake.record(machineId, 'fake-straightness:Y2', 31, 'outside-target');
       const b = await board(ws, machineId);
-      expect(b.state).toBe('being-built');
+      expect(b.state).toBe('reopened');
       expect(b.approval?.id).toBe(approval.id);
       const history = await ws.as.viewer.get(`/api/machines/${machineId}/history`);
-      expect(history.body.find((e: { action: string }) => e.action === 'state-changed')).toMatchObject({
-        summary: expect.stringMatching(/Rail straightness recorded outside target: the machine is no longer ready to cut/),
-        changes: { state: { from: 'ready-to-cut', to: 'being-built' } },
+      expect(history.body.find((e: { action: string }) => e.action === 'reopened')).toMatchObject({
+        actor: expect.stringContaining('owner'),
+        summary: expect.stringMatching(/reopened the machine for changes: Y2 rail was knocked by a forklift/),
       });
+      await smtp.waitFor((m) => m.subject.startsWith('Reopened: Signed router'));
       const after = await pdfOf(ws.as.viewer, machineId);
       expect(Buffer.compare(before.body, after.body)).toBe(0);
-      const verify = await ws.as.viewer.get(`/api/machines/${machineId}/approvals/${approval.id}/verification`);
-      expect(verify.body.matches).toBe(true);
     });
 
     it('shows what drifted: the approved round beside the latest results', async () => {
@@ -278,10 +281,14 @@ describe('readiness board, waivers, approval and certificate', () => {
     expect(del.status).toBe(409);
     expect(del.body.message).toMatch(/approved commissioning record/);
     expect((await ws.as.builder.get(`/api/sweeps/${sweep.body.id}`)).status).toBe(200);
-    // A new sweep far outside target: the rails module reports it, and approvals react.
-    const bad = await ws.as.builder.post(`/api/rails/${rail.body.id}/sweeps`).send({ unit: 'um', phase: 'as-left', stations: stations.map((st, i) => ({ ...st, reading: [0, 60, -40, 70, 0][i] })) });
+    // A new sweep is refused while the approval stands; after reopening it is recorded.
+    const badSweep = { unit: 'um', phase: 'as-left', stations: stations.map((st, i) => ({ ...st, reading: [0, 60, -40, 70, 0][i] })) };
+    const refused = await ws.as.builder.post(`/api/rails/${rail.body.id}/sweeps`).send(badSweep);
+    expect([refused.status, refused.body.message]).toEqual([409, expect.stringMatching(/Swept router is approved as ready to cut: .* The owner can reopen the machine with a reason/)]);
+    expect((await ws.as.owner.post(`/api/machines/${machineId}/reopen`).send({ reason: 'Rail re-bedded after a crash' })).status).toBe(201);
+    const bad = await ws.as.builder.post(`/api/rails/${rail.body.id}/sweeps`).send(badSweep);
     expect(bad.status).toBe(201);
-    expect((await board(ws, machineId)).state).toBe('being-built');
+    expect((await board(ws, machineId)).state).toBe('reopened');
   });
 
   it('answers 409 with a message for the certificate of a machine never approved', async () => {
@@ -309,7 +316,8 @@ describe('readiness board, waivers, approval and certificate', () => {
       expect([...mails[0].envelopeTo].sort()).toEqual([ws.emails.owner, ws.emails.technician].sort());
       const history = await ws.as.viewer.get(`/api/machines/${machineId}/history`);
       expect(history.body[0]).toMatchObject({ action: 'state-changed', changes: { state: { from: 'ready-to-cut', to: 'recheck-due' } } });
-      // A re-check round is approved again through the same flow.
+      // A re-check round: the owner reopens the machine, and it is approved again through the same flow.
+      expect((await ws.as.owner.post(`/api/machines/${machineId}/reopen`).send({ reason: 'Six-monthly re-check' })).status).toBe(201);
       fake.record(machineId, 'fake-straightness:Y1', 13.1, 'within-target');
       const again = await requestAndApprove(ws, machineId, TEST_PASSWORD);
       expect(again.recordHash).not.toBe(a.recordHash);

@@ -45,3 +45,17 @@ export function recheckDueMail(i: { machineName: string; workshopName: string; a
     ].join('\n'),
   };
 }
+
+export function reopenedMail(i: { machineName: string; workshopName: string; reopenedBy: string; reason: string; approvedAt: Date; url: string }) {
+  return {
+    subject: `Reopened: ${i.machineName} is no longer approved as ready to cut`,
+    text: [
+      `${i.reopenedBy} reopened ${i.machineName} (${i.workshopName}) for changes. The approval of ${i.approvedAt.toISOString().slice(0, 10)} no longer stands.`,
+      '',
+      `Reason: ${i.reason}`,
+      '',
+      'Do not cut with this machine until its changed checks are recorded and it is approved again.',
+      `Machine file: ${i.url}`,
+    ].join('\n'),
+  };
+}

@@ -2,7 +2,7 @@ import { Injectable } from '@nestjs/common';
 import type { SessionUser } from '../auth/session-user.js';
 import { loadConfig } from '../config/config.js';
 import { MailService } from '../mail/mail.service.js';
-import { approvalRequestedMail, approvedMail, recheckDueMail } from './approval-mails.js';
+import { approvalRequestedMail, approvedMail, recheckDueMail, reopenedMail } from './approval-mails.js';
 import { ApprovalsRepository, type ApprovalRow } from './approvals.repository.js';
 import { CertificateService } from './certificate/certificate.service.js';
 import type { BoardCheck } from './snapshot.js';
@@ -61,5 +61,12 @@ export class ApprovalNotifier {
       url: machineUrl(approval.machineId),
     });
     await this.mail.send({ workshopId: approval.workshopId, to: people.map((p) => p.email), subject, text });
+  }
+
+  /** Everyone who recorded for, requested or signed the approval, and the workshop's owners. */
+  async reopened(actor: SessionUser, approval: ApprovalRow, machineName: string, reason: string) {
+    const people = (await this.repo.members(actor.workshopId)).filter((m) => m.role === 'owner' || m.role === 'technician' || m.role === 'builder' || m.id === approval.approvedById);
+    const { subject, text } = reopenedMail({ machineName, workshopName: actor.workshopName, reopenedBy: actor.name, reason, approvedAt: approval.approvedAt, url: machineUrl(approval.machineId) });
+    await this.mail.send({ workshopId: actor.workshopId, to: people.map((p) => p.email), subject, text });
   }
 }

@@ -8,6 +8,7 @@ import { DriftService } from './drift.service.js';
 import { ApproveDto } from './dto/approve.dto.js';
 import { CertificateQueryDto } from './dto/certificate-query.dto.js';
 import { WaiverDto } from './dto/waiver.dto.js';
+import { ReopenDto } from './dto/reopen.dto.js';
 
 @Controller('machines/:id')
 export class ApprovalsController {
@@ -38,6 +39,12 @@ export class ApprovalsController {
   @Roles('owner')
   approve(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string, @Body() dto: ApproveDto) {
     return this.approvals.approve(user, id, dto);
+  }
+
+  @Post('reopen')
+  @Roles('owner')
+  reopen(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string, @Body() dto: ReopenDto) {
+    return this.approvals.reopen(user, id, dto);
   }
 
   @Get('approvals')

@@ -11,6 +11,7 @@ import { DriftService } from './drift.service.js';
 import { ReadinessBoardService } from './readiness-board.service.js';
 import { RecheckInterceptor } from './recheck.interceptor.js';
 import { RecheckService } from './recheck.service.js';
+import { SignedRecordService } from './signing/signed-record.service.js';
 
 @Module({
   imports: [MachinesModule, MailModule],
@@ -23,6 +24,7 @@ import { RecheckService } from './recheck.service.js';
     CertificateService,
     DriftService,
     RecheckService,
+    SignedRecordService,
     { provide: APP_INTERCEPTOR, useClass: RecheckInterceptor },
   ],
   exports: [ApprovalsService],

@@ -1,7 +1,7 @@
 import { Inject, Injectable } from '@nestjs/common';
 import { and, asc, desc, eq, inArray, isNull, lte } from 'drizzle-orm';
 import { DRIZZLE, type Database } from '../database/database.tokens.js';
-import { approvalRequests, approvals, machines, users, waivers, workshops } from '../database/schema/index.js';
+import { approvalRequests, approvals, axes, machines, rails, users, waivers, workshops } from '../database/schema/index.js';
 
 export type WaiverRow = typeof waivers.$inferSelect;
 export type ApprovalRow = typeof approvals.$inferSelect;
@@ -47,20 +47,47 @@ export class ApprovalsRepository {
   }
 
   /**
-   * Stores the approval only if its request is still open, in one transaction, so two owners
-   * approving at once cannot both succeed. null when the request was taken first.
+   * Stores the approval only if its request is still open (the command's transaction holds the
+   * machine's row, and the database allows one standing approval). null when the request was taken first.
    */
   async insertApproval(requestId: string, values: typeof approvals.$inferInsert): Promise<ApprovalRow | null> {
-    return this.db.transaction(async (tx) => {
-      const taken = await tx
-        .update(approvalRequests)
-        .set({ status: 'approved' })
-        .where(and(eq(approvalRequests.id, requestId), eq(approvalRequests.status, 'open')))
-        .returning({ id: approvalRequests.id });
-      if (!taken.length) return null;
-      const [row] = await tx.insert(approvals).values(values).returning();
-      return row;
-    });
+    const taken = await this.db
+      .update(approvalRequests)
+      .set({ status: 'approved' })
+      .where(and(eq(approvalRequests.id, requestId), eq(approvalRequests.status, 'open')))
+      .returning({ id: approvalRequests.id });
+    if (!taken.length) return null;
+    const [row] = await this.db.insert(approvals).values(values).returning();
+    return row;
+  }
+
+  /** The approval that stands (not reopened), if any. */
+  async standingApproval(workshopId: string, machineId: string): Promise<ApprovalRow | null> {
+    const [row] = await this.db
+      .select()
+      .from(approvals)
+      .where(and(eq(approvals.workshopId, workshopId), eq(approvals.machineId, machineId), isNull(approvals.endedAt)))
+      .limit(1);
+    return row ?? null;
+  }
+
+  async endApproval(id: string, values: Pick<typeof approvals.$inferInsert, 'endedAt' | 'endedById' | 'endedByName' | 'endReason'>): Promise<ApprovalRow> {
+    const [row] = await this.db.update(approvals).set(values).where(eq(approvals.id, id)).returning();
+    return row;
+  }
+
+  async setSignature(id: string, values: Pick<typeof approvals.$inferInsert, 'signature' | 'signingKeyId' | 'signedContent'>): Promise<ApprovalRow> {
+    const [row] = await this.db.update(approvals).set(values).where(eq(approvals.id, id)).returning();
+    return row;
+  }
+
+  /** The machine's rails and axes: their geometry and drive settings are part of what is approved. */
+  async partsOf(machineId: string): Promise<{ recordType: string; recordId: string }[]> {
+    const [railRows, axisRows] = await Promise.all([
+      this.db.select({ id: rails.id }).from(rails).where(eq(rails.machineId, machineId)),
+      this.db.select({ id: axes.id }).from(axes).where(eq(axes.machineId, machineId)),
+    ]);
+    return [...railRows.map((r) => ({ recordType: 'rail', recordId: r.id })), ...axisRows.map((a) => ({ recordType: 'axis', recordId: a.id }))];
   }
 
   async latestApproval(workshopId: string, machineId: string): Promise<ApprovalRow | null> {

@@ -1,7 +1,10 @@
 import { BadRequestException, ConflictException, ForbiddenException, Injectable, OnModuleInit } from '@nestjs/common';
 import type { SessionUser } from '../auth/session-user.js';
 import { AuthService } from '../auth/auth.service.js';
-import type { MachineState } from '../database/schema/machines.js';
+import { APPROVED_STATES, type MachineState } from '../database/schema/machines.js';
+import { randomBytes } from 'node:crypto';
+import { TargetSetsService } from '../target-sets/target-sets.service.js';
+import { SignedRecordService } from './signing/signed-record.service.js';
 import { MachinesService } from '../machines/machines.service.js';
 import { RecordsService, type CheckRecordedEvent } from '../records/records.service.js';
 import { MailService } from '../mail/mail.service.js';
@@ -16,6 +19,7 @@ import { defaultStatement } from './statement.js';
 import { cautionsFor } from './cautions.js';
 import type { ApproveDto } from './dto/approve.dto.js';
 import type { WaiverDto } from './dto/waiver.dto.js';
+import type { ReopenDto } from './dto/reopen.dto.js';
 
 const DAY_MS = 24 * 3600_000;
 
@@ -31,6 +35,8 @@ export class ApprovalsService implements OnModuleInit {
     private readonly recheck: RecheckService,
     private readonly notifier: ApprovalNotifier,
     private readonly mail: MailService,
+    private readonly targetSets: TargetSetsService,
+    private readonly signatures: SignedRecordService,
   ) {}
 
   onModuleInit() {
@@ -58,6 +64,8 @@ export class ApprovalsService implements OnModuleInit {
   }
 
   async waive(actor: SessionUser, machineId: string, checkKey: string, dto: WaiverDto) {
+    const machine = await this.machines.lockForCommand(actor, machineId);
+    refuseWhileApproved(machine.state, machine.name);
     const b = await this.board.board(actor, machineId);
     const check = b.checks.find((c) => c.key === checkKey);
     if (!check) throw new BadRequestException([`checkId "${checkKey}" is not a required check of this machine`]);
@@ -89,8 +97,9 @@ export class ApprovalsService implements OnModuleInit {
   }
 
   async requestApproval(actor: SessionUser, machineId: string) {
+    const machine = await this.machines.lockForCommand(actor, machineId);
+    refuseUnlessState(machine.state, ['being-built', 'reopened'], 'request approval');
     const b = await this.board.board(actor, machineId);
-    refuseUnlessState(b.machine.state, ['being-built', 'recheck-due'], 'request approval');
     if (!b.checks.length) throw new ConflictException({ message: 'No required checks are reported for this machine yet', blocking: [] });
     if (b.blocking.length) {
       throw new ConflictException({
@@ -98,15 +107,14 @@ export class ApprovalsService implements OnModuleInit {
         blocking: b.blocking.map(toBlocking),
       });
     }
-    await this.repo.closeOpenRequests(actor.workshopId, machineId);
     const request = await this.repo.insertRequest({ workshopId: actor.workshopId, machineId, requestedById: actor.id, requestedByName: actor.name });
-    await this.changeState(actor, machineId, b.machine.state, 'awaiting-approval', `${actor.name} requested approval`);
-    this.mail.later(this.notifier.approvalRequested(actor, b.machine.name, machineId, b.checks), 'approval-requested mail');
+    await this.changeState(actor, machineId, machine.state, 'awaiting-approval', `${actor.name} requested approval`);
+    this.mail.later(() => this.notifier.approvalRequested(actor, b.machine.name, machineId, b.checks), 'approval-requested mail');
     return { ...toRequestResponse(request), state: 'awaiting-approval' as const };
   }
 
   async approve(actor: SessionUser, machineId: string, dto: ApproveDto) {
-    const machine = await this.machines.getRef(actor, machineId);
+    const machine = await this.machines.lockForCommand(actor, machineId);
     refuseUnlessState(machine.state, ['awaiting-approval'], 'approve');
     if (!(await this.auth.confirmPassword(actor.id, dto.password))) {
       throw new ForbiddenException('That password is not right: re-enter your own password to sign the approval');
@@ -121,7 +129,8 @@ export class ApprovalsService implements OnModuleInit {
     }
     const approvedAt = new Date(Math.floor(Date.now() / 1000) * 1000);
     const interval = snapshot.targetSet.recheckIntervalDays;
-    const row = await this.repo.insertApproval(request.id, {
+    const targetSet = await this.targetSets.findRow(actor.workshopId, machine.targetSetId);
+    const inserted = await this.repo.insertApproval(request.id, {
       workshopId: actor.workshopId,
       machineId,
       requestId: request.id,
@@ -133,12 +142,17 @@ export class ApprovalsService implements OnModuleInit {
       recordHash: snapshotHash(snapshot),
       recheckIntervalDays: interval,
       recheckDueAt: new Date(approvedAt.getTime() + interval * DAY_MS),
+      targetValues: targetSet.targets,
+      verificationToken: randomBytes(24).toString('base64url'),
     });
-    if (!row) throw new ConflictException({ message: 'Someone else has just approved or closed this request', blocking: [] });
-    await this.records.lock(
-      row.id,
-      snapshot.checks.filter((c) => c.recordType && c.recordId).map((c) => ({ recordType: c.recordType!, recordId: c.recordId! })),
-    );
+    if (!inserted) throw new ConflictException({ message: 'Someone else has just approved or closed this request', blocking: [] });
+    await this.records.lock(inserted.id, [
+      { recordType: 'machine', recordId: machineId },
+      ...(await this.repo.partsOf(machineId)),
+      ...snapshot.checks.filter((c) => c.recordType && c.recordId).map((c) => ({ recordType: c.recordType!, recordId: c.recordId! })),
+      ...snapshot.checks.filter((c) => c.waiver).map((c) => ({ recordType: 'waiver', recordId: c.waiver!.id })),
+    ]);
+    const row = await this.signatures.seal(inserted);
     await this.records.audit(actor, {
       machineId,
       recordType: 'approval',
@@ -148,19 +162,43 @@ export class ApprovalsService implements OnModuleInit {
       changes: { recordHash: row.recordHash, checks: snapshot.checks.length, waived: snapshot.checks.filter((c) => c.status === 'waived').length },
     });
     await this.changeState(actor, machineId, 'awaiting-approval', 'ready-to-cut', 'Approved as ready to cut');
-    this.mail.later(this.notifier.approved(actor, row), 'approved mail');
+    this.mail.later(() => this.notifier.approved(actor, row), 'approved mail');
     const response = toApprovalResponse(row);
     return { id: response.id, approvedAt: response.approvedAt, approvedBy: response.approvedBy, recordHash: response.recordHash, recheckDueAt: response.recheckDueAt };
   }
 
-  /** A check recorded outside target undoes a request or an approval until the machine is approved again. */
+  /**
+   * The owner takes back a standing approval to change the machine: audited, mailed, and the
+   * machine is "reopened" (not "being built") until it is approved again.
+   */
+  async reopen(actor: SessionUser, machineId: string, dto: ReopenDto) {
+    const machine = await this.machines.lockForCommand(actor, machineId);
+    refuseUnlessState(machine.state, APPROVED_STATES, 'reopen');
+    const approval = await this.repo.standingApproval(actor.workshopId, machineId);
+    if (!approval) throw new ConflictException({ message: 'No approval of this machine stands', blocking: [] });
+    const ended = await this.repo.endApproval(approval.id, { endedAt: new Date(), endedById: actor.id, endedByName: actor.name, endReason: dto.reason });
+    await this.records.audit(actor, {
+      machineId,
+      recordType: 'approval',
+      recordId: approval.id,
+      action: 'reopened',
+      summary: `${actor.name} reopened the machine for changes: ${dto.reason}`,
+      changes: { reason: dto.reason, approvedAt: approval.approvedAt.toISOString(), approvedBy: approval.approvedByName },
+    });
+    await this.changeState(actor, machineId, machine.state, 'reopened', `Reopened for changes: the approval of ${approval.approvedAt.toISOString().slice(0, 10)} no longer stands`);
+    this.mail.later(() => this.notifier.reopened(actor, approval, machine.name, dto.reason), 'reopened mail');
+    return { state: 'reopened' as const, approval: toApprovalResponse(ended) };
+  }
+
+  /** A check recorded outside target while approval is awaited closes the request. */
   private async onCheckRecorded(actor: SessionUser, event: CheckRecordedEvent) {
     if (event.status !== 'outside-target') return;
-    const machine = await this.machines.getRef(actor, event.machineId);
-    if (!['awaiting-approval', 'ready-to-cut', 'recheck-due'].includes(machine.state)) return;
+    const machine = await this.machines.lockForCommand(actor, event.machineId);
+    if (machine.state !== 'awaiting-approval') return;
     await this.repo.closeOpenRequests(actor.workshopId, machine.id);
+    const to: MachineState = (await this.repo.latestApproval(actor.workshopId, machine.id)) ? 'reopened' : 'being-built';
     const what = KIND_LABELS[event.kind as keyof typeof KIND_LABELS] ?? event.kind;
-    await this.changeState(actor, machine.id, machine.state, 'being-built', `${what} recorded outside target: the machine is no longer ${machine.state === 'awaiting-approval' ? 'awaiting approval' : 'ready to cut'} until it is approved again`);
+    await this.changeState(actor, machine.id, machine.state, to, `${what} recorded outside target: the request for approval is closed`);
   }
 
   private async changeState(actor: SessionUser, machineId: string, from: MachineState, to: MachineState, summary: string) {
@@ -173,14 +211,28 @@ const STATE_WORDS: Record<MachineState, string> = {
   'being-built': 'being built',
   'awaiting-approval': 'already awaiting approval',
   'ready-to-cut': 'already approved and ready to cut',
-  'recheck-due': 'due for its re-check',
+  'recheck-due': 'approved and due for its re-check',
+  reopened: 'reopened for changes',
   retired: 'retired',
 };
 
-function refuseUnlessState(state: MachineState, allowed: MachineState[], what: string) {
+function refuseUnlessState(state: MachineState, allowed: readonly MachineState[], what: string) {
   if (allowed.includes(state)) return;
-  const hint = what === 'approve' ? ' A technician, owner or admin requests approval first.' : '';
+  const hint =
+    what === 'approve'
+      ? ' A technician, owner or admin requests approval first.'
+      : APPROVED_STATES.includes(state)
+        ? ' The owner reopens it with a reason first.'
+        : '';
   throw new ConflictException({ message: `Cannot ${what}: the machine is ${STATE_WORDS[state]}.${hint}`, blocking: [] });
+}
+
+function refuseWhileApproved(state: MachineState, name: string) {
+  if (!APPROVED_STATES.includes(state)) return;
+  throw new ConflictException({
+    message: `${name} is approved as ready to cut: what the approval stands on is read-only while it stands. The owner can reopen the machine with a reason to change it.`,
+    blocking: [],
+  });
 }
 
 function countsOf(checks: { status: string }[]) {

@@ -30,6 +30,14 @@ export class DatabaseErrorFilter implements ExceptionFilter {
     }
     const err = exception as PgError & { statusCode?: number; message?: string };
     const code = err?.code ?? err?.cause?.code;
+    // Refusals raised by the database's own rules (approval locks, append-only history) carry a
+    // message written for people: pass it on.
+    const own = code?.startsWith('RW') ? (err.cause?.code === code ? err.cause : err) : null;
+    if (own) {
+      const status = Number(code!.slice(2));
+      reply.status(status).send({ statusCode: status, message: (own as { message?: string }).message, error: status === 409 ? 'Conflict' : 'Forbidden' });
+      return;
+    }
     const known = code ? CLIENT_CODES[code] : undefined;
     if (known) {
       reply.status(known.status).send({ statusCode: known.status, message: known.message, error: code });

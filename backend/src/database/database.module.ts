@@ -3,7 +3,8 @@ import { drizzle } from 'drizzle-orm/node-postgres';
 import pg from 'pg';
 import { loadConfig } from '../config/config.js';
 import * as schema from './schema/index.js';
-import { DRIZZLE, PG_POOL } from './database.tokens.js';
+import { DRIZZLE, PG_POOL, ROOT_DRIZZLE } from './database.tokens.js';
+import { TransactionContext, transactionalDatabase } from './transaction-context.js';
 
 @Global()
 @Module({
@@ -18,12 +19,22 @@ import { DRIZZLE, PG_POOL } from './database.tokens.js';
       },
     },
     {
-      provide: DRIZZLE,
+      provide: ROOT_DRIZZLE,
       inject: [PG_POOL],
       useFactory: (pool: pg.Pool) => drizzle(pool, { schema }),
     },
+    {
+      provide: TransactionContext,
+      inject: [ROOT_DRIZZLE],
+      useFactory: (root: ReturnType<typeof drizzle<typeof schema>>) => new TransactionContext(root),
+    },
+    {
+      provide: DRIZZLE,
+      inject: [TransactionContext],
+      useFactory: (context: TransactionContext) => transactionalDatabase(context),
+    },
   ],
-  exports: [PG_POOL, DRIZZLE],
+  exports: [PG_POOL, DRIZZLE, TransactionContext],
 })
 export class DatabaseModule implements OnApplicationShutdown {
   constructor(@Inject(PG_POOL) private readonly pool: pg.Pool) {}

@@ -1,5 +1,5 @@
 import { Inject, Injectable } from '@nestjs/common';
-import { and, desc, eq } from 'drizzle-orm';
+import { and, desc, eq, sql } from 'drizzle-orm';
 import { DRIZZLE, type Database } from '../database/database.tokens.js';
 import { machines, targetSets } from '../database/schema/index.js';
 import type { MachineRow } from './machine.mapper.js';
@@ -26,16 +26,25 @@ export class MachinesRepository {
     return row ?? null;
   }
 
+  /** The machine's row, locked until the current command commits: its state cannot move meanwhile. */
+  async lock(workshopId: string, id: string): Promise<MachineRow | null> {
+    const [row] = await this.db
+      .select()
+      .from(machines)
+      .where(and(eq(machines.workshopId, workshopId), eq(machines.id, id)))
+      .for('no key update');
+    return row ?? null;
+  }
+
   async insert(values: typeof machines.$inferInsert): Promise<MachineRow> {
     const [row] = await this.db.insert(machines).values(values).returning();
     return row;
   }
 
   async update(workshopId: string, id: string, values: Partial<typeof machines.$inferInsert>): Promise<MachineRow> {
-    const [current] = await this.db.select({ version: machines.version }).from(machines).where(eq(machines.id, id));
     const [row] = await this.db
       .update(machines)
-      .set({ ...values, version: (current?.version ?? 0) + 1, updatedAt: new Date(), lastActivityAt: new Date() })
+      .set({ ...values, version: sql`${machines.version} + 1`, updatedAt: new Date(), lastActivityAt: new Date() })
       .where(and(eq(machines.workshopId, workshopId), eq(machines.id, id)))
       .returning();
     return row;

@@ -51,6 +51,16 @@ export class MachinesService implements OnModuleInit {
     return { ...toRef(found.machine), name: found.machine.name, state: found.machine.state };
   }
 
+  /**
+   * The machine for a command that changes its state: its row is locked until the command
+   * commits, so two requests, approvals or server instances act on it one after the other.
+   */
+  async lockForCommand(actor: SessionUser, id: string): Promise<MachineRef & { name: string; state: MachineState }> {
+    const row = await this.repo.lock(actor.workshopId, id);
+    if (!row) throw new NotFoundException('No such machine in this workshop');
+    return { ...toRef(row), name: row.name, state: row.state };
+  }
+
   async create(actor: SessionUser, dto: CreateMachineDto): Promise<MachineResponse> {
     const sets = await this.targetSets.ensureDefaults(actor.workshopId);
     let targetSetId = dto.targetSetId;

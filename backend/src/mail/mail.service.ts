@@ -1,5 +1,6 @@
 import { Injectable, Logger, OnModuleDestroy, OnModuleInit } from '@nestjs/common';
 import nodemailer, { type Transporter } from 'nodemailer';
+import { TransactionContext } from '../database/transaction-context.js';
 import { FakeSmtpServer } from './fake-smtp.server.js';
 import { mailSettings, type MailSettings } from './mail-settings.js';
 
@@ -27,6 +28,8 @@ export class MailService implements OnModuleInit, OnModuleDestroy {
   /** Present only while the fake server is in use. */
   fake: FakeSmtpServer | null = null;
   private readonly pending = new Set<Promise<unknown>>();
+
+  constructor(private readonly transactions: TransactionContext) {}
 
   async onModuleInit() {
     const s = this.settings;
@@ -61,10 +64,14 @@ export class MailService implements OnModuleInit, OnModuleDestroy {
   }
 
   /**
-   * Runs mail work after the answer has gone (a slow mail server never holds up a request);
-   * failures are logged, and shutdown waits for it.
+   * Runs mail work once the command has committed (a slow mail server never holds up a request,
+   * and a command that fails sends nothing); failures are logged, and shutdown waits for it.
    */
-  later(work: Promise<unknown>, what: string): void {
+  later(work: () => Promise<unknown>, what: string): void {
+    this.transactions.afterCommit(() => this.track(this.transactions.outside(work), what));
+  }
+
+  private track(work: Promise<unknown>, what: string): void {
     const tracked = work.catch((err) => this.logger.error(`${what} failed: ${(err as Error).message}`)).finally(() => this.pending.delete(tracked));
     this.pending.add(tracked);
   }

@@ -1,9 +1,11 @@
-import { index, integer, jsonb, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
+import { index, integer, jsonb, pgTable, text, timestamp, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
+import { sql } from 'drizzle-orm';
 import { id } from './columns.js';
 import { workshops } from './workshops.js';
 import { machines } from './machines.js';
 import { users } from './users.js';
 import type { ApprovalSnapshot } from '../../approvals/snapshot.js';
+import type { TargetValue } from './target-sets.js';
 
 /**
  * An owner's written reason for letting one check pass. It belongs to the record the check had
@@ -40,7 +42,11 @@ export const approvalRequests = pgTable(
     /** open until approved, or closed when a check leaves the target before that. */
     status: text('status', { enum: ['open', 'approved', 'closed'] }).notNull().default('open'),
   },
-  (t) => [index('approval_requests_machine_idx').on(t.machineId)],
+  (t) => [
+    index('approval_requests_machine_idx').on(t.machineId),
+    // One open request per machine, however many clicks or server instances ask at once.
+    uniqueIndex('approval_requests_one_open').on(t.machineId).where(sql`${t.status} = 'open'`),
+  ],
 );
 
 /** The owner's signed approval: who, when, the statement, and the exact results it was based on. */
@@ -62,6 +68,27 @@ export const approvals = pgTable(
     recheckDueAt: timestamp('recheck_due_at', { withTimezone: true }).notNull(),
     /** Set once the re-check-due e-mail went out, so it goes once per due date. */
     recheckNotifiedAt: timestamp('recheck_notified_at', { withTimezone: true }),
+    /** The target values the machine was judged against, as they were when signed. */
+    targetValues: jsonb('target_values').$type<Record<string, TargetValue>>(),
+    /** Ed25519 signature (base64) over the canonical signed record; null for approvals signed before signatures. */
+    signature: text('signature'),
+    /** SHA-256 fingerprint of the public key that made the signature. */
+    signingKeyId: text('signing_key_id'),
+    /** The canonical record as signed: kept only to name what differs, never to decide validity. */
+    signedContent: text('signed_content'),
+    /** Unguessable token of the public verification address printed on the certificate. */
+    verificationToken: text('verification_token'),
+    /** Set when the owner reopens the machine: the approval no longer stands. */
+    endedAt: timestamp('ended_at', { withTimezone: true }),
+    endedById: uuid('ended_by_id').references(() => users.id),
+    endedByName: text('ended_by_name'),
+    endReason: text('end_reason'),
   },
-  (t) => [index('approvals_machine_idx').on(t.machineId, t.approvedAt), index('approvals_recheck_idx').on(t.recheckDueAt)],
+  (t) => [
+    index('approvals_machine_idx').on(t.machineId, t.approvedAt),
+    index('approvals_recheck_idx').on(t.recheckDueAt),
+    // One standing approval per machine: a second signature for the same request is refused by the database.
+    uniqueIndex('approvals_one_standing').on(t.machineId).where(sql`${t.endedAt} is null`),
+    uniqueIndex('approvals_verification_token').on(t.verificationToken),
+  ],
 );

@@ -6,7 +6,9 @@ import { targetSets } from './target-sets.js';
 export const MACHINE_KINDS = ['plasma', 'router', 'other'] as const;
 export type MachineKind = (typeof MACHINE_KINDS)[number];
 
-export const MACHINE_STATES = ['being-built', 'awaiting-approval', 'ready-to-cut', 'recheck-due', 'retired'] as const;
+export const MACHINE_STATES = ['being-built', 'awaiting-approval', 'ready-to-cut', 'recheck-due', 'reopened', 'retired'] as const;
+/** States in which an approval stands, so the machine's record is read-only. */
+export const APPROVED_STATES: readonly MachineState[] = ['ready-to-cut', 'recheck-due'];
 export type MachineState = (typeof MACHINE_STATES)[number];
 
 export const machines = pgTable(

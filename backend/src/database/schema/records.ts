@@ -1,4 +1,5 @@
-import { index, jsonb, pgTable, text, timestamp, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
+import { bigint, index, jsonb, pgTable, text, timestamp, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
+import { sql } from 'drizzle-orm';
 import { id } from './columns.js';
 import { workshops } from './workshops.js';
 import { users } from './users.js';
@@ -18,8 +19,34 @@ export const auditEntries = pgTable(
     actorId: uuid('actor_id').references(() => users.id),
     actorName: text('actor_name').notNull(),
     at: timestamp('at', { withTimezone: true }).notNull().defaultNow(),
+    /** The transaction that wrote it: joins the summary to the row changes it made. */
+    txid: bigint('txid', { mode: 'number' }).notNull().default(sql`txid_current()`),
   },
-  (t) => [index('audit_machine_idx').on(t.machineId, t.at), index('audit_workshop_idx').on(t.workshopId)],
+  (t) => [index('audit_machine_idx').on(t.machineId, t.at), index('audit_workshop_idx').on(t.workshopId, t.at), index('audit_txid_idx').on(t.txid)],
+);
+
+/**
+ * Every insert, update and delete of every record, with its values before and after, written by
+ * database triggers in the same transaction (so nothing escapes it) and never changed afterwards.
+ * Secrets (password hashes, link tokens) are shown only as "changed".
+ */
+export const changeLog = pgTable(
+  'change_log',
+  {
+    id: id(),
+    at: timestamp('at', { withTimezone: true }).notNull().defaultNow(),
+    txid: bigint('txid', { mode: 'number' }).notNull().default(sql`txid_current()`),
+    workshopId: uuid('workshop_id'),
+    machineId: uuid('machine_id'),
+    tableName: text('table_name').notNull(),
+    recordId: uuid('record_id'),
+    operation: text('operation', { enum: ['insert', 'update', 'delete'] }).notNull(),
+    oldValues: jsonb('old_values').$type<Record<string, unknown>>(),
+    newValues: jsonb('new_values').$type<Record<string, unknown>>(),
+    actorId: uuid('actor_id'),
+    actorName: text('actor_name'),
+  },
+  (t) => [index('change_log_machine_idx').on(t.machineId, t.at), index('change_log_txid_idx').on(t.txid), index('change_log_workshop_idx').on(t.workshopId, t.at)],
 );
 
 /** A record that an approval was based on; it can no longer be edited or deleted. */

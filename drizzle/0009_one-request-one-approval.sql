@@ -1,0 +1,3 @@
+CREATE UNIQUE INDEX "approval_requests_one_open" ON "approval_requests" USING btree ("machine_id") WHERE "approval_requests"."status" = 'open';--> statement-breakpoint
+CREATE UNIQUE INDEX "approvals_one_standing" ON "approvals" USING btree ("machine_id") WHERE "approvals"."ended_at" is null;--> statement-breakpoint
+CREATE UNIQUE INDEX "approvals_verification_token" ON "approvals" USING btree ("verification_token");
