@@ -12,3 +12,4 @@ export * from './drives.js';
 export * from './bolt-downs.js';
 export * from './approvals.js';
 export * from './password-links.js';
+export * from './sign-in-attempts.js';
