@@ -1,4 +1,4 @@
-import { boolean, index, pgTable, text, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
+import { boolean, index, pgTable, text, timestamp, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
 import { sql } from 'drizzle-orm';
 import { id, timestamps } from './columns.js';
 import { workshops } from './workshops.js';
@@ -18,6 +18,10 @@ export const users = pgTable(
     role: text('role', { enum: ROLES }).notNull(),
     passwordHash: text('password_hash').notNull(),
     active: boolean('active').notNull().default(true),
+    /** Invited but has not chosen a password yet: only then may an admin send a sign-in link. */
+    passwordPending: boolean('password_pending').notNull().default(false),
+    /** Sessions signed in before this moment are refused: set when the password changes or the person is deactivated. */
+    sessionsValidFrom: timestamp('sessions_valid_from', { withTimezone: true }).notNull().defaultNow(),
     ...timestamps,
   },
   (t) => [

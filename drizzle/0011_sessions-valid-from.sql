@@ -1,0 +1,2 @@
+ALTER TABLE "users" ADD COLUMN "password_pending" boolean DEFAULT false NOT NULL;--> statement-breakpoint
+ALTER TABLE "users" ADD COLUMN "sessions_valid_from" timestamp with time zone DEFAULT now() NOT NULL;
