@@ -37,6 +37,7 @@ export default defineConfig({
     env: {
       PORT: String(port),
       DATABASE_URL: process.env.E2E_DATABASE_URL ?? '',
+      ...(process.env.E2E_DATABASE_OWNER_URL ? { DATABASE_OWNER_URL: process.env.E2E_DATABASE_OWNER_URL } : {}),
       SESSION_SECRET: 'e2e-session-secret-that-is-long-enough-123',
       RAILWRIGHT_DATA: process.env.RAILWRIGHT_DATA ?? path.join(root, '.test-data/e2e'),
       ...(process.env.FRONTEND_DIST ? { FRONTEND_DIST: process.env.FRONTEND_DIST } : {}),

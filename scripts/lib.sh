@@ -35,8 +35,19 @@ find_pg_bin() {
 }
 
 # Runs a PostgreSQL command as the cluster's owner: initdb and postgres refuse to run as root.
+# PGPASSWORD (the cluster owner's password, where the cluster asks for one) goes along.
 as_pg() {
-  if [ "$(id -u)" = "0" ]; then runuser -u postgres -- "$@"; else "$@"; fi
+  if [ "$(id -u)" = "0" ]; then runuser -u postgres -- env PGPASSWORD="${PGPASSWORD:-}" "$@"; else "$@"; fi
+}
+
+# A secret kept in a file of its own (mode 600), made on first use: prints it.
+secret_file() {
+  local file="$1"
+  if [ ! -s "$file" ]; then
+    (umask 077 && head -c 32 /dev/urandom | base64 | tr -d '\n/+=' > "$file")
+  fi
+  chmod 600 "$file"
+  cat "$file"
 }
 
 # True when the postgres system user can reach (traverse and write) the folder.
@@ -68,19 +79,41 @@ choose_cluster_dir() {
 }
 
 # init (first time) and start a cluster on 127.0.0.1:$2, socket inside the cluster folder.
+# With PGPASSWORD set, every connection must give a password (scram-sha-256), loopback included;
+# the cluster owner is "app" with that password.
 start_cluster() {
   local dir="$1" port="$2" extra="${3:-}"
   if [ ! -f "$dir/PG_VERSION" ]; then
     say "Creating a private PostgreSQL cluster in $dir"
-    as_pg "$PG_BIN/initdb" -D "$dir" -U app --auth=trust --encoding=UTF8 --no-locale >/dev/null
+    if [ -n "${PGPASSWORD:-}" ]; then
+      local pwfile
+      pwfile="$(dirname "$dir")/.initdb-password.$$"
+      (umask 077 && printf '%s' "$PGPASSWORD" > "$pwfile")
+      [ "$(id -u)" = "0" ] && chown postgres "$pwfile"
+      as_pg "$PG_BIN/initdb" -D "$dir" -U app --auth=scram-sha-256 --pwfile="$pwfile" --encoding=UTF8 --no-locale >/dev/null
+      rm -f "$pwfile"
+    else
+      as_pg "$PG_BIN/initdb" -D "$dir" -U app --auth=trust --encoding=UTF8 --no-locale >/dev/null
+    fi
   fi
   if as_pg "$PG_BIN/pg_ctl" -D "$dir" status >/dev/null 2>&1; then
     say "PostgreSQL is already running in $dir"
     return 0
   fi
+  # fd 9 (start.sh's single-instance lock) stays with start.sh, not with the server.
   as_pg "$PG_BIN/pg_ctl" -D "$dir" -w -l "$dir/server.log" \
-    -o "-c listen_addresses=127.0.0.1 -p $port -k $dir $extra" start >/dev/null \
+    -o "-c listen_addresses=127.0.0.1 -p $port -k $dir $extra" start >/dev/null 9>&- \
     || { tail -n 20 "$dir/server.log" >&2; fail "PostgreSQL did not start on port $port (is the port taken? set PGPORT)"; }
+}
+
+# A cluster made before passwords were required: give the owner PGPASSWORD and ask for it from now on.
+require_passwords() {
+  local dir="$1" port="$2"
+  grep -qE '^[[:space:]]*(local|host)[^#]*[[:space:]]trust([[:space:]]|$)' "$dir/pg_hba.conf" || return 0
+  say "Securing the PostgreSQL cluster: passwords from now on (scram-sha-256)"
+  as_pg "$PG_BIN/psql" -h 127.0.0.1 -p "$port" -U app -d postgres -qAtc "set password_encryption = 'scram-sha-256'; alter role app with password '$PGPASSWORD'" >/dev/null
+  sed -i -E 's/([[:space:]])trust([[:space:]]|$)/\1scram-sha-256\2/' "$dir/pg_hba.conf"
+  as_pg "$PG_BIN/pg_ctl" -D "$dir" reload >/dev/null
 }
 
 stop_cluster() {

@@ -6,7 +6,7 @@ import { seedDemoOnce } from './seed/seed-demo-once.js';
 
 async function main() {
   const config = loadConfig();
-  await runMigrations(config.databaseUrl);
+  await runMigrations(config.databaseOwnerUrl ?? config.databaseUrl, config.databaseUrl);
   const app = await createApp(config);
   app.enableShutdownHooks();
   if (process.env.RAILWRIGHT_SEED !== 'off') await seedDemoOnce(app);

@@ -4,6 +4,8 @@ import { fileURLToPath } from 'node:url';
 
 export interface AppConfig {
   databaseUrl: string;
+  /** The schema owner's connection, for migrations only; the application itself connects as DATABASE_URL's role. */
+  databaseOwnerUrl: string | null;
   port: number;
   host: string;
   sessionSecret: string;
@@ -32,6 +34,8 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
   const problems: string[] = [];
   const databaseUrl = env.DATABASE_URL ?? '';
   if (!/^postgres(ql)?:\/\//.test(databaseUrl)) problems.push('DATABASE_URL must be a postgres:// URL');
+  const databaseOwnerUrl = env.DATABASE_OWNER_URL || null;
+  if (databaseOwnerUrl && !/^postgres(ql)?:\/\//.test(databaseOwnerUrl)) problems.push('DATABASE_OWNER_URL must be a postgres:// URL');
   const port = Number(env.PORT ?? 3000);
   if (!Number.isInteger(port) || port < 1 || port > 65535) problems.push('PORT must be a whole number from 1 to 65535');
   const sessionSecret = env.SESSION_SECRET ?? 'railwright-development-session-secret-change-me';
@@ -41,6 +45,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
   const dist = env.FRONTEND_DIST ?? path.join(repoRoot(), 'frontend', 'dist');
   const config: AppConfig = {
     databaseUrl,
+    databaseOwnerUrl,
     port,
     host,
     sessionSecret,

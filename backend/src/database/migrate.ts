@@ -4,6 +4,8 @@ import { existsSync } from 'node:fs';
 import { drizzle } from 'drizzle-orm/node-postgres';
 import { migrate } from 'drizzle-orm/node-postgres/migrator';
 import pg from 'pg';
+import { ensureAppRole } from './app-role.js';
+import { withAdvisoryLock } from './advisory-lock.js';
 
 /** The top-level drizzle/ folder, found by walking up from this file (source or build). */
 export function migrationsFolder(): string {
@@ -16,10 +18,18 @@ export function migrationsFolder(): string {
   throw new Error('The drizzle/ migrations folder was not found above ' + fileURLToPath(import.meta.url));
 }
 
-export async function runMigrations(databaseUrl: string): Promise<void> {
-  const pool = new pg.Pool({ connectionString: databaseUrl, max: 1 });
+/**
+ * Brings the database to the latest schema as its owner, then makes sure the role the application
+ * connects as (the user of `appUrl`) may read and write records but never rewrite history. Several
+ * instances starting together take turns: the first migrates, the others find nothing to do.
+ */
+export async function runMigrations(ownerUrl: string, appUrl: string = ownerUrl): Promise<void> {
+  const pool = new pg.Pool({ connectionString: ownerUrl, max: 1 });
   try {
-    await migrate(drizzle(pool), { migrationsFolder: migrationsFolder() });
+    await withAdvisoryLock(pool, 'migrations', async (client) => {
+      await migrate(drizzle(client), { migrationsFolder: migrationsFolder() });
+      await ensureAppRole(client, appUrl, ownerUrl);
+    });
   } finally {
     await pool.end();
   }
