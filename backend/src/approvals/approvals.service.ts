@@ -64,8 +64,7 @@ export class ApprovalsService implements OnModuleInit {
   }
 
   async waive(actor: SessionUser, machineId: string, checkKey: string, dto: WaiverDto) {
-    const machine = await this.machines.lockForCommand(actor, machineId);
-    refuseWhileApproved(machine.state, machine.name);
+    await this.machines.lockForChange(actor, machineId);
     const b = await this.board.board(actor, machineId);
     const check = b.checks.find((c) => c.key === checkKey);
     if (!check) throw new BadRequestException([`checkId "${checkKey}" is not a required check of this machine`]);
@@ -225,14 +224,6 @@ function refuseUnlessState(state: MachineState, allowed: readonly MachineState[]
         ? ' The owner reopens it with a reason first.'
         : '';
   throw new ConflictException({ message: `Cannot ${what}: the machine is ${STATE_WORDS[state]}.${hint}`, blocking: [] });
-}
-
-function refuseWhileApproved(state: MachineState, name: string) {
-  if (!APPROVED_STATES.includes(state)) return;
-  throw new ConflictException({
-    message: `${name} is approved as ready to cut: what the approval stands on is read-only while it stands. The owner can reopen the machine with a reason to change it.`,
-    blocking: [],
-  });
 }
 
 function countsOf(checks: { status: string }[]) {

@@ -99,6 +99,8 @@ export class BoltDownsService implements OnModuleInit {
       }
       return { ...(await this.respond(actor, row, rail)), writeId: dto.writeId, repeated: true };
     }
+    // The machine's row before any write: concurrent writers of one bolt-down queue here instead of deadlocking.
+    await this.machines.lockForChange(actor, row.machineId);
     if (row.finalSweepId) throw new ConflictException('This bolt-down is finished and has its final sweep; begin a new bolt-down to re-align the rail');
     await this.records.assertEditable(RECORD_TYPE, id, 'This bolt-down');
 
@@ -133,6 +135,7 @@ export class BoltDownsService implements OnModuleInit {
    */
   async recordFinalSweep(actor: SessionUser, id: string, dto: FinalSweepDto): Promise<{ created: boolean; boltDown: BoltDownResponse; sweep: SweepResponse }> {
     const { row, rail } = await this.load(actor, id);
+    await this.machines.lockForChange(actor, row.machineId);
     if (row.finalSweepId) {
       if (dto.id && dto.id === row.finalSweepId) {
         return { created: false, boltDown: await this.respond(actor, row, rail), sweep: await this.sweeps.get(actor, row.finalSweepId) };

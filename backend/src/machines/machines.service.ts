@@ -1,6 +1,6 @@
-import { Injectable, NotFoundException, OnModuleInit } from '@nestjs/common';
+import { ConflictException, Injectable, NotFoundException, OnModuleInit } from '@nestjs/common';
 import type { SessionUser } from '../auth/session-user.js';
-import type { MachineState } from '../database/schema/machines.js';
+import { APPROVED_STATES, type MachineState } from '../database/schema/machines.js';
 import type { MachineRef } from '../records/readiness.js';
 import { ReadinessRegistry } from '../records/readiness.registry.js';
 import { RecordsService } from '../records/records.service.js';
@@ -10,6 +10,7 @@ import { countChecks, toMachineResponse, type MachineListItem, type MachineRespo
 import { MachinesRepository } from './machines.repository.js';
 import type { CreateMachineDto } from './dto/create-machine.dto.js';
 import type { UpdateMachineDto } from './dto/update-machine.dto.js';
+import type { HistoryQueryDto } from '../history/dto/history-query.dto.js';
 
 @Injectable()
 export class MachinesService implements OnModuleInit {
@@ -61,6 +62,20 @@ export class MachinesService implements OnModuleInit {
     return { ...toRef(row), name: row.name, state: row.state };
   }
 
+  /**
+   * Like lockForCommand, for a command that changes the machine's record: refused (409) while an
+   * approval stands. The database refuses such writes anyway; this says so before other checks.
+   */
+  async lockForChange(actor: SessionUser, id: string): Promise<MachineRef & { name: string; state: MachineState }> {
+    const machine = await this.lockForCommand(actor, id);
+    if (APPROVED_STATES.includes(machine.state)) {
+      throw new ConflictException(
+        `${machine.name} is approved as ready to cut: what the approval stands on is read-only while it stands. The owner can reopen the machine with a reason to change it.`,
+      );
+    }
+    return machine;
+  }
+
   async create(actor: SessionUser, dto: CreateMachineDto): Promise<MachineResponse> {
     const sets = await this.targetSets.ensureDefaults(actor.workshopId);
     let targetSetId = dto.targetSetId;
@@ -107,19 +122,10 @@ export class MachinesService implements OnModuleInit {
     await this.repo.update(workshopId, id, { state });
   }
 
-  async history(actor: SessionUser, id: string) {
+  /** The machine's history, a page at a time, filtered. */
+  async history(actor: SessionUser, id: string, query: HistoryQueryDto) {
     await this.getRef(actor, id);
-    const rows = await this.records.history(actor.workshopId, id);
-    return rows.map((r) => ({
-      id: r.id,
-      at: r.at.toISOString(),
-      actor: r.actorName,
-      recordType: r.recordType,
-      recordId: r.recordId,
-      action: r.action,
-      summary: r.summary,
-      changes: r.changes,
-    }));
+    return this.records.history(actor.workshopId, query, id);
   }
 }
 
