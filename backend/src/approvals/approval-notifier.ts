@@ -4,7 +4,7 @@ import { loadConfig } from '../config/config.js';
 import { MailService } from '../mail/mail.service.js';
 import { approvalRequestedMail, approvedMail, recheckDueMail, reopenedMail } from './approval-mails.js';
 import { ApprovalsRepository, type ApprovalRow } from './approvals.repository.js';
-import { CertificateService } from './certificate/certificate.service.js';
+import { CertificateService, verificationUrl } from './certificate/certificate.service.js';
 import type { BoardCheck } from './snapshot.js';
 
 const machineUrl = (machineId: string) => `${loadConfig().appUrl}/machines/${machineId}?tab=readiness`;
@@ -31,6 +31,7 @@ export class ApprovalNotifier {
     await this.mail.send({ workshopId: actor.workshopId, to: owners.map((o) => o.email), subject, text });
   }
 
+  /** `approval` is the sealed row: its certificate carries the verification address of the signature. */
   async approved(actor: SessionUser, approval: ApprovalRow) {
     const everyone = await this.repo.members(actor.workshopId);
     const pdf = await this.certificates.render(approval);
@@ -42,11 +43,12 @@ export class ApprovalNotifier {
       recheckDueAt: approval.recheckDueAt,
       url: machineUrl(approval.machineId),
     });
+    const check = approval.verificationToken ? `\n\nAnyone holding the certificate can check its signature, without an account:\n${verificationUrl(approval.verificationToken)}` : '';
     await this.mail.send({
       workshopId: actor.workshopId,
       to: everyone.map((m) => m.email),
       subject,
-      text,
+      text: text + check,
       attachments: [{ filename: this.certificates.filename(approval), content: pdf, contentType: 'application/pdf' }],
     });
   }

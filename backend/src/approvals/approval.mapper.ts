@@ -1,5 +1,7 @@
 import type { ApprovalRow, RequestRow } from './approvals.repository.js';
 import type { BoardCheck } from './snapshot.js';
+import type { Verification } from './signing/signed-record.service.js';
+import { SIGNING_ALGORITHM } from './signing/signing-key.service.js';
 
 export interface ApprovalResponse {
   id: string;
@@ -30,3 +32,35 @@ export function toCheckResponse(c: BoardCheck) {
 }
 
 export const toBlocking = (c: BoardCheck) => ({ key: c.key, kind: c.kind, subject: c.subject, status: c.status });
+
+/** The outcome of checking an approval's signature against the live records, with who signed and when. */
+export const toVerificationResponse = (a: ApprovalRow, v: Verification) => ({
+  approvalId: a.id,
+  status: v.status,
+  valid: v.valid,
+  unchanged: v.unchanged,
+  message: v.message,
+  signedBy: a.approvedByName,
+  signedAt: a.approvedAt.toISOString(),
+  algorithm: SIGNING_ALGORITHM,
+  keyId: v.keyId,
+  signedCopyIntact: v.signedCopyIntact,
+  differences: v.differences,
+  moreDifferences: v.moreDifferences,
+  recordHash: a.recordHash,
+  stands: !a.endedAt,
+  reopened: a.endedAt ? { at: a.endedAt.toISOString(), by: a.endedByName, reason: a.endReason } : null,
+});
+
+/** What anyone holding the certificate sees: the approval as printed and whether it can be trusted. */
+export const toPublicVerificationResponse = (a: ApprovalRow, v: Verification) => ({
+  ...toVerificationResponse(a, v),
+  machine: { name: a.snapshot.machine.name, kind: a.snapshot.machine.kind },
+  workshop: a.snapshot.workshop.name,
+  statement: a.statement,
+  recheckDueAt: a.recheckDueAt.toISOString(),
+  recheckIntervalDays: a.recheckIntervalDays,
+  targetSet: a.snapshot.targetSet.name,
+  checkCount: a.snapshot.checks.length,
+  waivedCount: a.snapshot.checks.filter((c) => c.status === 'waived').length,
+});

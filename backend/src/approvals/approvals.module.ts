@@ -12,10 +12,14 @@ import { ReadinessBoardService } from './readiness-board.service.js';
 import { RecheckInterceptor } from './recheck.interceptor.js';
 import { RecheckService } from './recheck.service.js';
 import { SignedRecordService } from './signing/signed-record.service.js';
+import { SignedRecordsRepository } from './signing/signed-records.repository.js';
+import { SigningKeyService } from './signing/signing-key.service.js';
+import { PublicVerificationService } from './signing/public-verification.service.js';
+import { PublicVerificationController } from './public-verification.controller.js';
 
 @Module({
   imports: [MachinesModule, MailModule],
-  controllers: [ApprovalsController],
+  controllers: [ApprovalsController, PublicVerificationController],
   providers: [
     ApprovalsRepository,
     ApprovalsService,
@@ -25,6 +29,9 @@ import { SignedRecordService } from './signing/signed-record.service.js';
     DriftService,
     RecheckService,
     SignedRecordService,
+    SignedRecordsRepository,
+    SigningKeyService,
+    PublicVerificationService,
     { provide: APP_INTERCEPTOR, useClass: RecheckInterceptor },
   ],
   exports: [ApprovalsService],

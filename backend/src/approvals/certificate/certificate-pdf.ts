@@ -7,10 +7,13 @@ import { certificateFonts, type FontName } from './fonts.js';
 import { dayOf, resultText, targetText, utc } from './format.js';
 import { BRASS, INK, MUTED, PAPER, RULE, STATUS_COLOURS, STEEL } from './palette.js';
 import { write } from './pdf-text.js';
+import { drawQrCode } from './qr-code.js';
 
 export interface CertificateInput {
   snapshot: ApprovalSnapshot;
   approval: { id: string; approvedAt: Date; approvedBy: string; statement: string; recordHash: string; recheckDueAt: Date };
+  /** Public address where anyone can check the signature; null for approvals signed before signatures were kept. */
+  verificationUrl: string | null;
 }
 
 type Doc = PDFKit.PDFDocument;
@@ -57,7 +60,7 @@ export function renderCertificate(input: CertificateInput): Promise<Buffer> {
   charts(doc, s.checks, s.machine.workArea);
   signature(doc, a);
   cautions(doc, s.machine.kind);
-  verification(doc, s, a);
+  verification(doc, s, a, input.verificationUrl);
   footers(doc, s, a);
   doc.end();
   return done;
@@ -229,15 +232,42 @@ function cautions(doc: Doc, kind: string) {
   }
 }
 
-function verification(doc: Doc, s: ApprovalSnapshot, a: CertificateInput['approval']) {
+function verification(doc: Doc, s: ApprovalSnapshot, a: CertificateInput['approval'], url: string | null) {
   heading(doc, 'How to verify this certificate');
-  para(
+  if (!url) {
+    para(
+      doc,
+      `Open the machine file of \u201c${s.machine.name}\u201d in Railwright (Readiness tab) and compare the record hash shown there with the one printed here: ${a.recordHash}.`,
+      'regular',
+      8.5,
+    );
+    return;
+  }
+  const qr = 92;
+  ensure(doc, qr + 8);
+  const top = doc.y;
+  drawQrCode(doc, url, M, top, qr, INK);
+  const x = M + qr + 14;
+  const w = WIDTH - qr - 14;
+  doc.fillColor(INK);
+  write(doc, 'medium', 9, 'Scan the code or open this address to check the certificate, no account needed:', x, top + 6, { width: w });
+  doc.fillColor(STEEL);
+  write(doc, 'medium', 9, url, x, doc.y + 3, { width: w, link: url });
+  doc.fillColor(INK);
+  write(
     doc,
-    `Open the machine file of \u201c${s.machine.name}\u201d in Railwright (Readiness tab) and compare the record hash shown there with the one printed here: ${a.recordHash}. ` +
-      'The hash is SHA-256 over the canonical JSON (keys sorted, no spaces) of the exact results the approval was based on; the approved records cannot be changed afterwards, and checks recorded later do not alter it.',
     'regular',
-    8.5,
+    8,
+    'The page shows whether the owner\u2019s Ed25519 signature is valid for the record as it is kept now, and names anything changed since it was signed. ' +
+      'It also offers the signed record (JSON) and the public key, to check it offline.',
+    x,
+    doc.y + 4,
+    { width: w, lineGap: 1 },
   );
+  doc.fillColor(MUTED);
+  write(doc, 'regular', 7.5, `Record hash (SHA-256 of the results above): ${a.recordHash}`, x, doc.y + 4, { width: w });
+  doc.fillColor(INK);
+  doc.y = Math.max(doc.y, top + qr) + 4;
 }
 
 function footers(doc: Doc, s: ApprovalSnapshot, a: CertificateInput['approval']) {

@@ -2,9 +2,13 @@ import { ConflictException, Injectable, NotFoundException } from '@nestjs/common
 import type { SessionUser } from '../../auth/session-user.js';
 import { MachinesService } from '../../machines/machines.service.js';
 import { ApprovalsRepository, type ApprovalRow } from '../approvals.repository.js';
-import { toApprovalResponse } from '../approval.mapper.js';
-import { snapshotHash } from '../snapshot.js';
+import { toApprovalResponse, toVerificationResponse } from '../approval.mapper.js';
+import { SignedRecordService } from '../signing/signed-record.service.js';
+import { loadConfig } from '../../config/config.js';
 import { renderCertificate } from './certificate-pdf.js';
+
+/** The public address printed on the certificate: anyone holding it can check the signature there. */
+export const verificationUrl = (token: string) => `${loadConfig().appUrl.replace(/\/+$/, '')}/verify/${token}`;
 
 /** The certificate of an approval, made from its stored snapshot only (never from live data). */
 @Injectable()
@@ -12,12 +16,14 @@ export class CertificateService {
   constructor(
     private readonly repo: ApprovalsRepository,
     private readonly machines: MachinesService,
+    private readonly signatures: SignedRecordService,
   ) {}
 
   render(a: ApprovalRow): Promise<Buffer> {
     return renderCertificate({
       snapshot: a.snapshot,
       approval: { id: a.id, approvedAt: a.approvedAt, approvedBy: a.approvedByName, statement: a.statement, recordHash: a.recordHash, recheckDueAt: a.recheckDueAt },
+      verificationUrl: a.verificationToken ? verificationUrl(a.verificationToken) : null,
     });
   }
 
@@ -39,12 +45,11 @@ export class CertificateService {
     return (await this.repo.listApprovals(actor.workshopId, machineId)).map(toApprovalResponse);
   }
 
-  /** Recomputes the hash from the stored snapshot, for anyone holding a printed certificate. */
+  /** Checks the owner's signature against the machine's records as they are now, naming what differs. */
   async verify(actor: SessionUser, machineId: string, approvalId: string) {
     await this.machines.getRef(actor, machineId);
     const a = await this.repo.approval(actor.workshopId, machineId, approvalId);
     if (!a) throw new NotFoundException('No such approval of this machine');
-    const recomputed = snapshotHash(a.snapshot);
-    return { approvalId: a.id, recordHash: a.recordHash, recomputedHash: recomputed, matches: recomputed === a.recordHash };
+    return toVerificationResponse(a, await this.signatures.verify(a));
   }
 }
