@@ -1,9 +1,10 @@
-import { ValidationPipe } from '@nestjs/common';
 import type { NestFastifyApplication } from '@nestjs/platform-fastify';
 import fastifyCookie from '@fastify/cookie';
 import fastifySession from '@fastify/session';
 import fastifyStatic from '@fastify/static';
 import fastifyMultipart from '@fastify/multipart';
+import fastifyHelmet from '@fastify/helmet';
+import type { FastifyInstance } from 'fastify';
 import connectPgSimple from 'connect-pg-simple';
 import expressSession from 'express-session';
 import { existsSync } from 'node:fs';
@@ -13,13 +14,50 @@ import { PG_POOL } from './database/database.tokens.js';
 import { DatabaseErrorFilter } from './common/database-error.filter.js';
 import { SpaFallbackFilter } from './common/spa-fallback.filter.js';
 import { appFilters } from './common/app-filters.js';
+import { AppValidationPipe } from './common/app-validation.pipe.js';
+import { registerRequestGuards } from './common/request-guards.js';
+import { absoluteSessionLifetime } from './common/session-lifetime.js';
+import { staticCacheHeaders } from './common/static-cache.js';
 import { loadEvidenceConfig } from './evidence/evidence.config.js';
 
-const SESSION_DAYS = 14;
+/** Idle lifetime: the cookie and the stored session expire this long after the last request. */
+const SESSION_IDLE_DAYS = 14;
+/** Absolute lifetime: a session ends this long after sign-in, however active. */
+export const SESSION_ABSOLUTE_DAYS = 30;
+
+// Strict policy: the app's own scripts only. MUI (emotion) inserts <style> elements at run
+// time, so styles also allow inline; no inline script anywhere.
+const CONTENT_SECURITY_POLICY = {
+  useDefaults: false,
+  directives: {
+    defaultSrc: ["'self'"],
+    scriptSrc: ["'self'"],
+    styleSrc: ["'self'", "'unsafe-inline'"],
+    imgSrc: ["'self'", 'data:', 'blob:'],
+    fontSrc: ["'self'", 'data:'],
+    connectSrc: ["'self'"],
+    objectSrc: ["'none'"],
+    baseUri: ["'self'"],
+    formAction: ["'self'"],
+    frameAncestors: ["'none'"],
+  },
+};
 
 /** Everything main.ts and the API tests share: prefix, sessions, validation, static files, filters. */
 export async function configureApp(app: NestFastifyApplication, config: AppConfig): Promise<void> {
   app.setGlobalPrefix('api');
+  const fastify = app.getHttpAdapter().getInstance() as unknown as FastifyInstance;
+  registerRequestGuards(fastify, {
+    allowedOrigins: [config.appUrl, ...config.extraOrigins],
+    uploadBodyLimit: loadEvidenceConfig().maxBytes + 1024 * 1024,
+  });
+  await app.register(fastifyHelmet as never, {
+    contentSecurityPolicy: CONTENT_SECURITY_POLICY,
+    frameguard: { action: 'deny' },
+    referrerPolicy: { policy: 'same-origin' },
+    crossOriginEmbedderPolicy: false,
+    hsts: config.appUrl.startsWith('https://') ? { maxAge: 180 * 24 * 3600 } : false,
+  });
   const PgStore = connectPgSimple(expressSession as never);
   const store = new PgStore({ pool: app.get<pg.Pool>(PG_POOL), createTableIfMissing: true, pruneSessionInterval: 60 * 15 });
   await app.register(fastifyCookie as never);
@@ -33,17 +71,27 @@ export async function configureApp(app: NestFastifyApplication, config: AppConfi
       sameSite: 'lax',
       secure: config.secureCookies,
       path: '/',
-      maxAge: SESSION_DAYS * 24 * 3600 * 1000,
+      maxAge: SESSION_IDLE_DAYS * 24 * 3600 * 1000,
     },
+    rolling: true,
   });
+  absoluteSessionLifetime(fastify, SESSION_ABSOLUTE_DAYS * 24 * 3600 * 1000);
   // Evidence uploads: one file a request, streamed; the size limit comes from EVIDENCE_MAX_BYTES.
   await app.register(fastifyMultipart as never, { limits: { fileSize: loadEvidenceConfig().maxBytes, files: 1, fields: 10, fieldSize: 4096, parts: 12 } });
   app.useGlobalPipes(
-    new ValidationPipe({ whitelist: true, forbidNonWhitelisted: true, transform: true, stopAtFirstError: false }),
+    new AppValidationPipe({ whitelist: true, forbidNonWhitelisted: true, transform: true, stopAtFirstError: false }),
   );
   const dist = config.frontendDist && existsSync(config.frontendDist) ? config.frontendDist : null;
   if (dist) {
-    await app.register(fastifyStatic as never, { root: dist, prefix: '/', index: false, wildcard: true, maxAge: '1h' });
+    // index.html at / as well (with index: false, / was a directory listing refused with 403).
+    await app.register(fastifyStatic as never, {
+      root: dist,
+      prefix: '/',
+      index: ['index.html'],
+      wildcard: true,
+      cacheControl: false,
+      setHeaders: staticCacheHeaders,
+    });
   }
   // Nest tries the last registered filter first: the catch-all goes first, the page fallback last.
   app.useGlobalFilters(new DatabaseErrorFilter(), ...appFilters(), new SpaFallbackFilter(dist));

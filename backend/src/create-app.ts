@@ -3,14 +3,13 @@ import { FastifyAdapter, type NestFastifyApplication } from '@nestjs/platform-fa
 import { AppModule } from './app.module.js';
 import { configureApp } from './app.setup.js';
 import type { AppConfig } from './config/config.js';
-
-// Large enough for 200 000 stations as JSON; the engine refuses more with a clear 400.
-const BODY_LIMIT_BYTES = 16 * 1024 * 1024;
+import { DEFAULT_BODY_LIMIT_BYTES } from './common/request-guards.js';
 
 export async function createApp(config: AppConfig): Promise<NestFastifyApplication> {
   const app = await NestFactory.create<NestFastifyApplication>(
     AppModule,
-    new FastifyAdapter({ bodyLimit: BODY_LIMIT_BYTES, trustProxy: false }),
+    // Each route's own limit is set in common/request-guards.ts; this is the default.
+    new FastifyAdapter({ bodyLimit: DEFAULT_BODY_LIMIT_BYTES, trustProxy: config.trustProxy as boolean }),
     { logger: process.env.JEST_WORKER_ID ? ['error', 'warn'] : ['error', 'warn', 'log'] },
   );
   await configureApp(app, config);

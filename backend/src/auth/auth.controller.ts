@@ -15,6 +15,8 @@ export class AuthController {
     // A new session id on sign-in, so a planted id cannot be taken over.
     await req.session.regenerate();
     req.session.set('userId', req.user.id);
+    // The start of the absolute lifetime (common/session-lifetime.ts).
+    req.session.set('createdAt', Date.now());
     return { user: toUserResponse(req.user) };
   }
 

@@ -6,7 +6,8 @@ import { AuthRepository } from './auth.repository.js';
 import { AuthService } from './auth.service.js';
 import { LocalStrategy } from './local.strategy.js';
 import { LoginBodyGuard } from './login-body.guard.js';
-import { LoginThrottle } from './login-throttle.js';
+import { SignInThrottle } from './login-throttle.js';
+import { SignInAttemptsRepository } from './sign-in-attempts.repository.js';
 import { SessionAuthGuard } from './session-auth.guard.js';
 import { PasswordLinksController } from './password-links.controller.js';
 import { PasswordLinksRepository } from './password-links.repository.js';
@@ -23,9 +24,10 @@ import { PasswordLinksService } from './password-links.service.js';
     LoginBodyGuard,
     PasswordLinksRepository,
     PasswordLinksService,
-    { provide: LoginThrottle, useFactory: () => new LoginThrottle() },
+    SignInAttemptsRepository,
+    SignInThrottle,
     { provide: APP_GUARD, useClass: SessionAuthGuard },
   ],
-  exports: [AuthService, PasswordLinksService],
+  exports: [AuthService, PasswordLinksService, SignInThrottle],
 })
 export class AuthModule {}

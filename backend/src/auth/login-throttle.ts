@@ -1,62 +1,70 @@
-import { HttpException, HttpStatus, Injectable } from '@nestjs/common';
+import { HttpException, HttpStatus, Injectable, Logger } from '@nestjs/common';
+import { SignInAttemptsRepository, type AttemptPolicy } from './sign-in-attempts.repository.js';
 
-const WINDOW_MS = 15 * 60 * 1000;
-const MAX_FAILURES_PER_ACCOUNT = 5;
-const MAX_FAILURES_PER_ADDRESS = 50;
+/** Per account: five tries, then a wait from 30 s doubling up to 15 minutes (ASVS 2.2.1: well under 100 failures an hour). */
+export const ACCOUNT_POLICY: AttemptPolicy = { free: 5, firstDelaySeconds: 30, maxDelaySeconds: 15 * 60, quietResetSeconds: 3600 };
+/**
+ * Per address: many people may sign in from behind one address (a workshop's router), so the
+ * address only slows down — 30 tries, then a wait from 2 s doubling up to 30 s — and never
+ * locks out the others behind it.
+ */
+export const ADDRESS_POLICY: AttemptPolicy = { free: 30, firstDelaySeconds: 2, maxDelaySeconds: 30, quietResetSeconds: 3600 };
 
-interface Counter {
-  failures: number;
-  windowStart: number;
+const PRUNE_EVERY = 200;
+
+export class SignInThrottled extends HttpException {
+  constructor(readonly retryAfterSeconds: number) {
+    const wait = retryAfterSeconds >= 60 ? `${Math.ceil(retryAfterSeconds / 60)} minutes` : `${retryAfterSeconds} seconds`;
+    super(
+      { statusCode: 429, message: `Too many failed sign-ins. Try again in ${wait}.`, retryAfterSeconds },
+      HttpStatus.TOO_MANY_REQUESTS,
+    );
+  }
 }
+
+export const accountKey = (email: string) => `account:${email.trim().toLowerCase()}`;
+export const addressKey = (address: string) => `address:${address}`;
 
 /**
- * Counts failed sign-ins per (address, e-mail) and per address; past the limit further attempts
- * are refused with 429 until the window ends, whether or not the password would be right.
+ * Sign-in throttling shared by every instance (counted in PostgreSQL). `check` counts the attempt
+ * before any password is compared, so parallel attempts cannot slip past the count; `succeed`
+ * takes the count back for a right password. A failure needs no further call: it was counted.
+ * Also meant for any other place a password is re-entered (the approval signature).
  */
 @Injectable()
-export class LoginThrottle {
-  private readonly counters = new Map<string, Counter>();
+export class SignInThrottle {
+  private readonly logger = new Logger('SignInThrottle');
+  private checks = 0;
 
-  constructor(private readonly now: () => number = Date.now) {}
+  constructor(private readonly attempts: SignInAttemptsRepository) {}
 
-  assertAllowed(address: string, email: string): void {
-    const retryAfter = Math.max(
-      this.blockedFor(`acct:${address}|${email.toLowerCase()}`, MAX_FAILURES_PER_ACCOUNT),
-      this.blockedFor(`addr:${address}`, MAX_FAILURES_PER_ADDRESS),
-    );
-    if (retryAfter > 0) {
-      const minutes = Math.ceil(retryAfter / 60000);
-      throw new HttpException(
-        { statusCode: 429, message: `Too many failed sign-ins. Try again in ${minutes} minute${minutes === 1 ? '' : 's'}.`, retryAfterSeconds: Math.ceil(retryAfter / 1000) },
-        HttpStatus.TOO_MANY_REQUESTS,
-      );
+  /** Counts one attempt for the account and the address; throws SignInThrottled (429) when either must wait. */
+  async check(email: string, address: string): Promise<void> {
+    if (++this.checks % PRUNE_EVERY === 0) {
+      this.attempts.prune(ACCOUNT_POLICY.quietResetSeconds).catch((err) => this.logger.warn(`prune failed: ${err}`));
+    }
+    const addressWait = await this.attempts.charge(addressKey(address), ADDRESS_POLICY);
+    if (addressWait !== null) throw new SignInThrottled(addressWait);
+    const accountWait = await this.attempts.charge(accountKey(email), ACCOUNT_POLICY);
+    if (accountWait !== null) {
+      // Not evaluated, so not held against the others behind this address.
+      await this.attempts.refund(addressKey(address));
+      throw new SignInThrottled(accountWait);
     }
   }
 
-  recordFailure(address: string, email: string): void {
-    this.bump(`acct:${address}|${email.toLowerCase()}`);
-    this.bump(`addr:${address}`);
+  /** The password was right: the account starts again from zero and the address gets its try back. */
+  async succeed(email: string, address: string): Promise<void> {
+    await Promise.all([this.attempts.clear(accountKey(email)), this.attempts.refund(addressKey(address))]);
   }
 
-  recordSuccess(address: string, email: string): void {
-    this.counters.delete(`acct:${address}|${email.toLowerCase()}`);
-  }
-
-  private blockedFor(key: string, limit: number): number {
-    const c = this.counters.get(key);
-    if (!c) return 0;
-    const elapsed = this.now() - c.windowStart;
-    if (elapsed >= WINDOW_MS) {
-      this.counters.delete(key);
-      return 0;
-    }
-    return c.failures >= limit ? WINDOW_MS - elapsed : 0;
-  }
-
-  private bump(key: string): void {
-    const c = this.counters.get(key);
-    if (!c || this.now() - c.windowStart >= WINDOW_MS) this.counters.set(key, { failures: 1, windowStart: this.now() });
-    else c.failures += 1;
-    if (this.counters.size > 100_000) this.counters.clear(); // bound memory under a flood
-  }
+  /**
+   * Kept while AuthService still reports outcomes itself: counting now happens in `check` and
+   * `succeed`, which the sign-in strategy calls, so these do nothing.
+   */
+  recordFailure(_address: string, _email: string): void {}
+  recordSuccess(_address: string, _email: string): void {}
 }
+
+/** The name AuthService injects. */
+export { SignInThrottle as LoginThrottle };

@@ -1,9 +1,10 @@
 import { Type } from 'class-transformer';
-import { ArrayMaxSize, IsArray, IsIn, IsInt, IsObject, IsOptional, Min, ValidateNested } from 'class-validator';
+import { ArrayMaxSize, IsArray, IsIn, IsInt, IsObject, Min, ValidateNested } from 'class-validator';
 import { TARGET_MODES, type TargetMode } from '../../engine/bolt-down.js';
 import type { LengthUnit } from '../../engine/units.js';
 import { MAX_POINTS } from '../../engine/validate.js';
 import { FiniteNumber, ReadingUnit } from './validators.js';
+import { Optional } from '../../common/optional.js';
 
 export class HoleReadingDto {
   /** Index of the hole from the rail's start (0 = first hole). */
@@ -28,11 +29,11 @@ export class BoltDownDto {
   firstHoleOffset: number;
 
   /** Aim at the first fixed hole's reading ("face") or at the line through fixed holes ("line", default). */
-  @IsOptional()
+  @Optional()
   @IsIn(TARGET_MODES, { message: `mode must be one of ${TARGET_MODES.join(', ')}` })
   mode?: TargetMode;
 
-  @IsOptional()
+  @Optional()
   @IsArray({ message: 'readings must be a list of {hole, reading}' })
   @ArrayMaxSize(MAX_POINTS, { message: `readings has more than ${MAX_POINTS} entries` })
   @IsObject({ each: true, message: 'every entry of readings must be {hole, reading}' })

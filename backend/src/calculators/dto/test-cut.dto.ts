@@ -1,6 +1,7 @@
 import { Type } from 'class-transformer';
-import { IsObject, IsOptional, ValidateNested } from 'class-validator';
+import { IsObject, ValidateNested } from 'class-validator';
 import { FiniteNumber, OptionalFiniteNumber } from './validators.js';
+import { Optional } from '../../common/optional.js';
 
 export class CutSizeDto {
   @FiniteNumber('commanded')
@@ -48,7 +49,7 @@ export class TestCutDto {
   @OptionalFiniteNumber('gantrySpan')
   gantrySpan?: number;
 
-  @IsOptional()
+  @Optional()
   @IsObject({ message: 'circle must be {commandedDiameter, measuredX, measuredY}' })
   @ValidateNested()
   @Type(() => CutCircleDto)

@@ -1,8 +1,9 @@
 import { Type } from 'class-transformer';
-import { ArrayMaxSize, IsArray, IsBoolean, IsObject, IsOptional, ValidateNested } from 'class-validator';
+import { ArrayMaxSize, IsArray, IsBoolean, IsObject, ValidateNested } from 'class-validator';
 import type { LengthUnit } from '../../engine/units.js';
 import { MAX_POINTS } from '../../engine/validate.js';
 import { FiniteNumber, ReadingUnit } from './validators.js';
+import { Optional } from '../../common/optional.js';
 
 export class TravelMoveDto {
   /** Commanded move, mm. */
@@ -29,7 +30,7 @@ export class TravelTrialDto {
   unit?: LengthUnit;
 
   /** Fit without an offset (moves measured from a zeroed start). */
-  @IsOptional()
+  @Optional()
   @IsBoolean({ message: 'throughOrigin must be true or false' })
   throughOrigin?: boolean;
 }

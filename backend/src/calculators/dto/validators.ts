@@ -1,14 +1,15 @@
 import { applyDecorators } from '@nestjs/common';
-import { ArrayMaxSize, IsArray, IsIn, IsNumber, IsOptional } from 'class-validator';
+import { ArrayMaxSize, IsArray, IsIn, IsNumber } from 'class-validator';
 import { LENGTH_UNITS } from '../../engine/units.js';
 import { MAX_POINTS } from '../../engine/validate.js';
+import { Optional } from '../../common/optional.js';
 
 const FINITE = { allowNaN: false, allowInfinity: false } as const;
 
 /** A required finite number; range rules (positive, whole) are the engine's, with its messages. */
 export const FiniteNumber = (field: string) => IsNumber(FINITE, { message: `${field} must be a finite number` });
 
-export const OptionalFiniteNumber = (field: string) => applyDecorators(IsOptional(), FiniteNumber(field));
+export const OptionalFiniteNumber = (field: string) => applyDecorators(Optional(), FiniteNumber(field));
 
 /** A list of finite numbers, at most MAX_POINTS long (minimum counts are checked by the engine). */
 export const NumberList = (field: string) =>
@@ -20,4 +21,4 @@ export const NumberList = (field: string) =>
 
 /** The unit readings are given in; mm when absent. */
 export const ReadingUnit = () =>
-  applyDecorators(IsOptional(), IsIn(LENGTH_UNITS, { message: `unit must be one of ${LENGTH_UNITS.join(', ')}` }));
+  applyDecorators(Optional(), IsIn(LENGTH_UNITS, { message: `unit must be one of ${LENGTH_UNITS.join(', ')}` }));

@@ -1,7 +1,8 @@
 import { Type } from 'class-transformer';
-import { IsObject, IsOptional, IsString, Matches, MaxLength, ValidateNested } from 'class-validator';
+import { IsObject, IsString, Matches, MaxLength, ValidateNested } from 'class-validator';
 import { DriveDto } from './drive.dto.js';
 import { Finite, OptionalFinite } from './validators.js';
+import { Optional } from '../../common/optional.js';
 
 export class CreateAxisDto {
   /** "X", "Y1", "Y2", "Z": the first letter is the axis letter the test program moves. */
@@ -36,7 +37,7 @@ export class CreateAxisDto {
   @OptionalFinite('measuredTravelMm')
   measuredTravelMm?: number;
 
-  @IsOptional()
+  @Optional()
   @IsString({ message: 'notes must be text' })
   @MaxLength(5000, { message: 'notes must be at most 5000 characters' })
   notes?: string;

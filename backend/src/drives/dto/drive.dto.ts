@@ -1,7 +1,8 @@
-import { IsIn, IsOptional } from 'class-validator';
+import { IsIn } from 'class-validator';
 import { DRIVE_TYPES, type DriveType } from '../../engine/steps-per-mm.js';
 import { MOUNTINGS, type Mounting } from '../../engine/screw-speed.js';
 import { OptionalFinite } from './validators.js';
+import { Optional } from '../../common/optional.js';
 
 /**
  * An axis drive with the calculators' field names (lengths in mm). Which fields apply depends on
@@ -23,7 +24,7 @@ export class DriveDto {
   @OptionalFinite('drive.unsupportedLength')
   unsupportedLength?: number;
 
-  @IsOptional()
+  @Optional()
   @IsIn(MOUNTINGS, { message: `drive.mounting must be one of ${MOUNTINGS.join(', ')}` })
   mounting?: Mounting;
 

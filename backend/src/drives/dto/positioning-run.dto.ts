@@ -1,7 +1,8 @@
 import { Type } from 'class-transformer';
-import { ArrayMaxSize, IsArray, IsIn, IsNumber, IsObject, IsOptional, IsString, MaxLength, ValidateNested } from 'class-validator';
+import { ArrayMaxSize, IsArray, IsIn, IsNumber, IsObject, IsString, MaxLength, ValidateNested } from 'class-validator';
 import type { Direction } from '../../engine/positioning.js';
 import { LENGTH_UNITS, type LengthUnit } from '../../engine/units.js';
+import { Optional } from '../../common/optional.js';
 
 const FINITE = { allowNaN: false, allowInfinity: false } as const;
 
@@ -33,7 +34,7 @@ export class CreatePositioningRunDto {
   @Type(() => PositioningRunEntryDto)
   runs: PositioningRunEntryDto[];
 
-  @IsOptional()
+  @Optional()
   @IsString({ message: 'notes must be text' })
   @MaxLength(2000, { message: 'notes must be at most 2000 characters' })
   notes?: string;

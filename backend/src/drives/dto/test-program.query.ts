@@ -1,5 +1,6 @@
 import { Transform } from 'class-transformer';
-import { IsIn, IsNumber, IsOptional, Matches } from 'class-validator';
+import { IsIn, IsNumber, Matches } from 'class-validator';
+import { Optional } from '../../common/optional.js';
 
 const FINITE = { allowNaN: false, allowInfinity: false } as const;
 const toNumber = ({ value }: { value: unknown }) => (value === undefined || value === '' ? undefined : Number(value));
@@ -10,51 +11,51 @@ export class TestProgramQuery {
   kind: 'travel' | 'positioning';
 
   /** Feed rate of the measuring moves, mm/min. */
-  @IsOptional()
+  @Optional()
   @Transform(toNumber)
   @IsNumber(FINITE, { message: 'feed must be a number of mm/min' })
   feed?: number;
 
   /** Travel trial: the commanded distances from the start, mm ("100,250,500"). */
-  @IsOptional()
+  @Optional()
   @Matches(/^\s*-?[\d.]+(\s*,\s*-?[\d.]+)*\s*$/, { message: 'distances must be comma-separated numbers of mm' })
   distances?: string;
 
   /** Repeat-and-reverse run: the targets, mm ("10,212.5,405"). */
-  @IsOptional()
+  @Optional()
   @Matches(/^\s*-?[\d.]+(\s*,\s*-?[\d.]+)*\s*$/, { message: 'targets must be comma-separated numbers of mm' })
   targets?: string;
 
   /** Where the travel trial starts, mm. */
-  @IsOptional()
+  @Optional()
   @Transform(toNumber)
   @IsNumber(FINITE, { message: 'start must be a number of mm' })
   start?: number;
 
   /** Runs in each direction (repeat-and-reverse run). */
-  @IsOptional()
+  @Optional()
   @Transform(toNumber)
   @IsNumber(FINITE, { message: 'runs must be a whole number' })
   runs?: number;
 
   /** How far past a target the axis goes before approaching it, mm. */
-  @IsOptional()
+  @Optional()
   @Transform(toNumber)
   @IsNumber(FINITE, { message: 'overrun must be a number of mm' })
   overrun?: number;
 
   /** Dwell at each target for the reading, seconds. */
-  @IsOptional()
+  @Optional()
   @Transform(toNumber)
   @IsNumber(FINITE, { message: 'dwell must be a number of seconds' })
   dwell?: number;
 
   /** G-code axis letter; from the axis name (Y1 → Y) when absent. */
-  @IsOptional()
+  @Optional()
   @Matches(/^[XYZABCUVW]$/i, { message: 'letter must be one of X, Y, Z, A, B, C, U, V, W' })
   letter?: string;
 
-  @IsOptional()
+  @Optional()
   @IsIn(['nc', 'txt'], { message: 'format must be nc or txt' })
   format?: 'nc' | 'txt';
 }

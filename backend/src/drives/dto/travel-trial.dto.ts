@@ -1,7 +1,8 @@
 import { Type } from 'class-transformer';
-import { ArrayMaxSize, ArrayMinSize, IsArray, IsBoolean, IsIn, IsObject, IsOptional, IsString, MaxLength, ValidateNested } from 'class-validator';
+import { ArrayMaxSize, ArrayMinSize, IsArray, IsBoolean, IsIn, IsObject, IsString, MaxLength, ValidateNested } from 'class-validator';
 import { LENGTH_UNITS, type LengthUnit } from '../../engine/units.js';
 import { Finite, OptionalFinite } from './validators.js';
+import { Optional } from '../../common/optional.js';
 
 export class TravelMoveDto {
   /** Commanded move, mm (the test program runs in G21). */
@@ -30,11 +31,11 @@ export class CreateTravelTrialDto {
   moves: TravelMoveDto[];
 
   /** Fit measured = scale × commanded with no offset (moves measured from a zeroed start). */
-  @IsOptional()
+  @Optional()
   @IsBoolean({ message: 'throughOrigin must be true or false' })
   throughOrigin?: boolean;
 
-  @IsOptional()
+  @Optional()
   @IsString({ message: 'notes must be text' })
   @MaxLength(2000, { message: 'notes must be at most 2000 characters' })
   notes?: string;

@@ -1,17 +1,18 @@
 import { Type } from 'class-transformer';
-import { IsObject, IsOptional, IsString, Matches, MaxLength, ValidateIf, ValidateNested } from 'class-validator';
+import { IsObject, IsString, Matches, MaxLength, ValidateIf, ValidateNested } from 'class-validator';
 import { DriveDto } from './drive.dto.js';
 import { Finite, OptionalFinite } from './validators.js';
+import { Optional } from '../../common/optional.js';
 
 /** Every field optional; a drive given replaces the whole drive. null clears maxFeedRate or measuredTravelMm. */
 export class UpdateAxisDto {
-  @IsOptional()
+  @Optional()
   @IsString({ message: 'name must be text such as X, Y1 or Z' })
   @Matches(/\S/, { message: 'name must not be empty' })
   @MaxLength(40, { message: 'name must be at most 40 characters' })
   name?: string;
 
-  @IsOptional()
+  @Optional()
   @IsObject({ message: 'drive must be an object {type, …}' })
   @ValidateNested()
   @Type(() => DriveDto)
@@ -37,7 +38,7 @@ export class UpdateAxisDto {
   @Finite('measuredTravelMm')
   measuredTravelMm?: number | null;
 
-  @IsOptional()
+  @Optional()
   @IsString({ message: 'notes must be text' })
   @MaxLength(5000, { message: 'notes must be at most 5000 characters' })
   notes?: string;

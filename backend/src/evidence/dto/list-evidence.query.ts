@@ -1,17 +1,18 @@
-import { IsOptional, IsString, IsUUID, MinLength } from 'class-validator';
+import { IsString, IsUUID, MinLength } from 'class-validator';
+import { Optional } from '../../common/optional.js';
 
 /** Either one subject (subjectType + subjectId) or a whole machine (machineId). */
 export class ListEvidenceQueryDto {
-  @IsOptional()
+  @Optional()
   @IsString({ message: 'subjectType must be text, for example machine or rail-sweep' })
   @MinLength(1, { message: 'subjectType must not be empty' })
   subjectType?: string;
 
-  @IsOptional()
+  @Optional()
   @IsUUID('all', { message: 'subjectId must be the id (a uuid) of a record' })
   subjectId?: string;
 
-  @IsOptional()
+  @Optional()
   @IsUUID('all', { message: 'machineId must be the id (a uuid) of a machine' })
   machineId?: string;
 }

@@ -1,4 +1,5 @@
-import { IsOptional, IsString, IsUUID, MaxLength, MinLength } from 'class-validator';
+import { IsString, IsUUID, MaxLength, MinLength } from 'class-validator';
+import { Optional } from '../../common/optional.js';
 
 /** The text fields sent beside the file in a multipart upload. */
 export class UploadFieldsDto {
@@ -9,7 +10,7 @@ export class UploadFieldsDto {
   @IsUUID('all', { message: 'subjectId must be the id (a uuid) of the record the file is attached to' })
   subjectId: string;
 
-  @IsOptional()
+  @Optional()
   @IsString({ message: 'caption must be text' })
   @MaxLength(500, { message: 'caption must be at most 500 characters' })
   caption?: string;

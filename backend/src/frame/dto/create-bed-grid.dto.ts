@@ -1,7 +1,8 @@
 import { Type } from 'class-transformer';
-import { ArrayMaxSize, ArrayMinSize, IsArray, IsInt, IsObject, IsOptional, Max, Min, ValidateNested } from 'class-validator';
+import { ArrayMaxSize, ArrayMinSize, IsArray, IsInt, IsObject, Max, Min, ValidateNested } from 'class-validator';
 import type { LengthUnit } from '../../engine/units.js';
 import { FiniteNumber, OptionalNote, OptionalUnit } from './fields.js';
+import { Optional } from '../../common/optional.js';
 
 export const MAX_GRID_POINTS = 2500;
 
@@ -23,13 +24,13 @@ export class CreateBedGridDto {
   @OptionalUnit()
   unit?: LengthUnit;
 
-  @IsOptional()
+  @Optional()
   @IsInt({ message: 'rows must be a whole number' })
   @Min(1, { message: 'rows must be at least 1' })
   @Max(50, { message: 'rows must be at most 50' })
   rows?: number;
 
-  @IsOptional()
+  @Optional()
   @IsInt({ message: 'columns must be a whole number' })
   @Min(1, { message: 'columns must be at least 1' })
   @Max(50, { message: 'columns must be at most 50' })

@@ -1,6 +1,6 @@
-import { IsOptional } from 'class-validator';
 import type { LengthUnit } from '../../engine/units.js';
 import { OptionalNote, OptionalUnit, PositiveLength } from './fields.js';
+import { Optional } from '../../common/optional.js';
 
 /**
  * A rectangle the machine marked or cut (or the frame): its two sides, both diagonals and the
@@ -20,7 +20,7 @@ export class CreateDiagonalCheckDto {
   @PositiveLength('diagonal2')
   diagonal2: number;
 
-  @IsOptional()
+  @Optional()
   @PositiveLength('gantrySpan')
   gantrySpan?: number;
 

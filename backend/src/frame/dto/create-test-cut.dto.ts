@@ -1,8 +1,9 @@
 import { Type } from 'class-transformer';
-import { IsIn, IsNumber, IsObject, IsOptional, IsPositive, Max, Min, ValidateNested } from 'class-validator';
+import { IsIn, IsNumber, IsObject, IsPositive, Max, Min, ValidateNested } from 'class-validator';
 import type { CircleKind } from '../../database/schema/frame.js';
 import type { LengthUnit } from '../../engine/units.js';
 import { OptionalNote, OptionalUnit, PositiveLength } from './fields.js';
+import { Optional } from '../../common/optional.js';
 
 export class TestCutNominalDto {
   @PositiveLength('nominal.x')
@@ -36,7 +37,7 @@ export class TestCutMeasuredDto {
   circleY: number;
 
   /** Width of cut the controller did not compensate for; leave out (or 0) when kerf compensation was on. */
-  @IsOptional()
+  @Optional()
   @IsNumber({ allowNaN: false, allowInfinity: false }, { message: 'measured.kerf must be a number' })
   @Min(0, { message: 'measured.kerf must not be negative' })
   @Max(25, { message: 'measured.kerf must be at most 25 mm' })
@@ -44,12 +45,12 @@ export class TestCutMeasuredDto {
 }
 
 export class StepsPerMmDto {
-  @IsOptional()
+  @Optional()
   @IsNumber({ allowNaN: false, allowInfinity: false }, { message: 'stepsPerMm.x must be a number' })
   @IsPositive({ message: 'stepsPerMm.x must be greater than zero' })
   x?: number;
 
-  @IsOptional()
+  @Optional()
   @IsNumber({ allowNaN: false, allowInfinity: false }, { message: 'stepsPerMm.y must be a number' })
   @IsPositive({ message: 'stepsPerMm.y must be greater than zero' })
   y?: number;
@@ -71,12 +72,12 @@ export class CreateTestCutDto {
   measured: TestCutMeasuredDto;
 
   /** Whether the circle is a hole in the square (default) or a disc cut on its own. */
-  @IsOptional()
+  @Optional()
   @IsIn(['hole', 'disc'], { message: 'circleKind must be hole or disc' })
   circleKind?: CircleKind;
 
   /** The controller's steps per mm when the cut was made, for the suggested new values. */
-  @IsOptional()
+  @Optional()
   @IsObject({ message: 'stepsPerMm must be {x, y}' })
   @ValidateNested()
   @Type(() => StepsPerMmDto)

@@ -1,6 +1,7 @@
 import { applyDecorators } from '@nestjs/common';
-import { IsIn, IsNumber, IsOptional, IsPositive, IsString, Max, MaxLength, Min } from 'class-validator';
+import { IsIn, IsNumber, IsPositive, IsString, Max, MaxLength, Min } from 'class-validator';
 import { LENGTH_UNITS } from '../../engine/units.js';
+import { Optional } from '../../common/optional.js';
 
 const FINITE = { allowNaN: false, allowInfinity: false };
 
@@ -16,7 +17,7 @@ export const FiniteNumber = (field: string) =>
   applyDecorators(IsNumber(FINITE, { message: `${field} must be a number` }), Min(-1_000_000, { message: `${field} is too small` }), Max(1_000_000, { message: `${field} is too large` }));
 
 export const OptionalUnit = () =>
-  applyDecorators(IsOptional(), IsIn(LENGTH_UNITS, { message: `unit must be one of ${LENGTH_UNITS.join(', ')}` }));
+  applyDecorators(Optional(), IsIn(LENGTH_UNITS, { message: `unit must be one of ${LENGTH_UNITS.join(', ')}` }));
 
 export const OptionalNote = () =>
-  applyDecorators(IsOptional(), IsString({ message: 'note must be text' }), MaxLength(2000, { message: 'note must be at most 2000 characters' }));
+  applyDecorators(Optional(), IsString({ message: 'note must be text' }), MaxLength(2000, { message: 'note must be at most 2000 characters' }));

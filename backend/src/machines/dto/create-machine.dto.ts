@@ -1,6 +1,7 @@
 import { Type } from 'class-transformer';
-import { IsIn, IsNumber, IsObject, IsOptional, IsString, IsUUID, Max, MaxLength, Min, MinLength, ValidateNested } from 'class-validator';
+import { IsIn, IsNumber, IsObject, IsString, IsUUID, Max, MaxLength, Min, MinLength, ValidateNested } from 'class-validator';
 import { MACHINE_KINDS, type MachineKind } from '../../database/schema/machines.js';
+import { Optional } from '../../common/optional.js';
 
 export class WorkAreaDto {
   @IsNumber({ allowNaN: false, allowInfinity: false }, { message: 'workArea.x must be a number of mm' })
@@ -28,12 +29,12 @@ export class CreateMachineDto {
   @Type(() => WorkAreaDto)
   workArea: WorkAreaDto;
 
-  @IsOptional()
+  @Optional()
   @IsString()
   @MaxLength(5000)
   notes?: string;
 
-  @IsOptional()
+  @Optional()
   @IsUUID('all', { message: 'targetSetId must be the id of a target set' })
   targetSetId?: string;
 }

@@ -1,12 +1,13 @@
-import { IsBoolean, IsIn, IsOptional } from 'class-validator';
+import { IsBoolean, IsIn } from 'class-validator';
 import { ROLES, type Role } from '../../database/schema/users.js';
+import { Optional } from '../../common/optional.js';
 
 export class UpdatePersonDto {
-  @IsOptional()
+  @Optional()
   @IsIn(ROLES, { message: `role must be one of ${ROLES.join(', ')}` })
   role?: Role;
 
-  @IsOptional()
+  @Optional()
   @IsBoolean({ message: 'active must be true or false' })
   active?: boolean;
 }

@@ -1,4 +1,5 @@
-import { IsInt, IsNumber, IsOptional, IsString, IsUUID, Matches, Max, MaxLength, Min, MinLength, ValidateIf } from 'class-validator';
+import { IsInt, IsNumber, IsString, IsUUID, Matches, Max, MaxLength, Min, MinLength, ValidateIf } from 'class-validator';
+import { Optional } from '../../common/optional.js';
 
 const FINITE = { allowNaN: false, allowInfinity: false } as const;
 
@@ -17,7 +18,7 @@ export class CreateRailDto {
   @Max(20_000, { message: 'lengthMm must be at most 20 000 mm' })
   lengthMm: number;
 
-  @IsOptional()
+  @Optional()
   @IsInt({ message: 'profileSize must be a whole number of mm (e.g. 15, 20, 25)' })
   @Min(5, { message: 'profileSize must be at least 5 mm' })
   @Max(100, { message: 'profileSize must be at most 100 mm' })
@@ -32,7 +33,7 @@ export class CreateRailDto {
   @Min(0, { message: 'firstHoleMm must not be negative' })
   firstHoleMm: number;
 
-  @IsOptional()
+  @Optional()
   @ValidateIf((_, v) => v !== null)
   @IsUUID('all', { message: 'partnerRailId must be the id of another rail of this machine' })
   partnerRailId?: string | null;

@@ -7,7 +7,6 @@ import {
   IsDefined,
   IsIn,
   IsNumber,
-  IsOptional,
   IsString,
   IsUUID,
   Matches,
@@ -17,6 +16,7 @@ import {
   ValidateNested,
 } from 'class-validator';
 import { SWEEP_PHASES, SWEEP_UNITS, type SweepPhase, type SweepUnit } from '../../database/schema/rails.js';
+import { Optional } from '../../common/optional.js';
 
 const FINITE = { allowNaN: false, allowInfinity: false } as const;
 export const MAX_STATIONS = 2000;
@@ -34,7 +34,7 @@ export class StationDto {
 }
 
 export class CreateSweepDto {
-  @IsOptional()
+  @Optional()
   @IsUUID('all', { message: 'id must be a uuid made by the client' })
   id?: string;
 
@@ -49,18 +49,18 @@ export class CreateSweepDto {
   @Type(() => StationDto)
   stations: StationDto[];
 
-  @IsOptional()
+  @Optional()
   @IsString({ message: 'instrument must be text' })
   @MaxLength(120, { message: 'instrument must be at most 120 characters' })
   instrument?: string;
 
   /** Smallest step of the instrument, in `unit`. */
-  @IsOptional()
+  @Optional()
   @IsNumber(FINITE, { message: 'resolution must be a number in the sweep unit' })
   @Min(0, { message: 'resolution must not be negative' })
   resolution?: number;
 
-  @IsOptional()
+  @Optional()
   @IsNumber(FINITE, { message: 'temperatureC must be a number of °C' })
   @Min(-40, { message: 'temperatureC must be at least -40 °C' })
   @Max(80, { message: 'temperatureC must be at most 80 °C' })
@@ -69,34 +69,34 @@ export class CreateSweepDto {
   @IsIn(SWEEP_PHASES, { message: `phase must be one of ${SWEEP_PHASES.join(', ')}` })
   phase: SweepPhase;
 
-  @IsOptional()
+  @Optional()
   @IsString({ message: 'takenBy must be text' })
   @MaxLength(120, { message: 'takenBy must be at most 120 characters' })
   takenBy?: string;
 
-  @IsOptional()
+  @Optional()
   @IsString({ message: 'boltSize must be text such as M5' })
   @Matches(/^M\d{1,2}(\.\d)?$/, { message: 'boltSize must be a metric bolt size such as M4, M5, M6 or M8' })
   boltSize?: string;
 
-  @IsOptional()
+  @Optional()
   @IsNumber(FINITE, { message: 'torqueNm must be a number of N·m' })
   @Min(0, { message: 'torqueNm must not be negative' })
   @Max(500, { message: 'torqueNm must be at most 500 N·m' })
   torqueNm?: number;
 
-  @IsOptional()
+  @Optional()
   @IsString({ message: 'datum must be text naming the common datum' })
   @MaxLength(120, { message: 'datum must be at most 120 characters' })
   datum?: string;
 
-  @IsOptional()
+  @Optional()
   @IsString({ message: 'notes must be text' })
   @MaxLength(5000, { message: 'notes must be at most 5000 characters' })
   notes?: string;
 
   /** When the readings were taken, if not now (a notebook entered later). */
-  @IsOptional()
+  @Optional()
   @IsDateString({}, { message: 'takenAt must be a date and time (ISO 8601)' })
   takenAt?: string;
 }

@@ -1,5 +1,6 @@
-import { IsObject, IsOptional, IsString, MaxLength, MinLength } from 'class-validator';
+import { IsObject, IsString, MaxLength, MinLength } from 'class-validator';
 import type { TargetValue } from '../../database/schema/target-sets.js';
+import { Optional } from '../../common/optional.js';
 
 export class CreateTargetSetDto {
   @IsString()
@@ -7,7 +8,7 @@ export class CreateTargetSetDto {
   @MaxLength(120)
   name: string;
 
-  @IsOptional()
+  @Optional()
   @IsString()
   @MaxLength(2000)
   description?: string;
@@ -18,18 +19,18 @@ export class CreateTargetSetDto {
 }
 
 export class UpdateTargetSetDto {
-  @IsOptional()
+  @Optional()
   @IsString()
   @MinLength(1, { message: 'name must not be empty' })
   @MaxLength(120)
   name?: string;
 
-  @IsOptional()
+  @Optional()
   @IsString()
   @MaxLength(2000)
   description?: string;
 
-  @IsOptional()
+  @Optional()
   @IsObject({ message: 'targets must be an object keyed by target name' })
   targets?: Record<string, Partial<TargetValue>>;
 }
