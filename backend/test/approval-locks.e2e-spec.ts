@@ -6,6 +6,7 @@ import { DRIZZLE, type Database } from '../src/database/database.tokens.js';
 import { createTestApp, createTestWorkshop, TEST_PASSWORD, type TestWorkshop } from './helpers/test-app.js';
 import { newAxis, screwAxis } from './helpers/drives.js';
 import { board, requestAndApprove, waiveAllBut } from './support/approval-flow.js';
+import { CSV, upload } from './evidence-fixtures.js';
 
 const RECORDERS: Role[] = ['admin', 'owner', 'technician', 'builder'];
 const CALIBRATORS: Role[] = ['admin', 'owner', 'technician'];
@@ -133,11 +134,20 @@ describe('an approved machine is read-only while its approval stands', () => {
     expect(axis.body.stepsPerMm).toBe(640);
   });
 
+  it('evidence may still be attached while approved, marked as added after approval; before approval it is not', async () => {
+    const res = await upload(ws.as.builder, { subjectType: 'machine', subjectId: machineId }, { body: CSV, name: 'after.csv', type: 'text/csv' });
+    expect([res.status, res.body.addedAfterApproval]).toEqual([201, true]);
+    const list = await ws.as.viewer.get(`/api/evidence?machineId=${machineId}`);
+    expect(JSON.stringify(list.body)).toContain('"addedAfterApproval":true');
+  });
+
   it('after the owner reopens the machine with a reason, the same routes write again', async () => {
     expect((await ws.as.owner.post(`/api/machines/${machineId}/reopen`).send({ reason: 'Rail Y1 re-bedded after a crash' })).status).toBe(201);
     const res = await ws.as.builder.patch(`/api/rails/${ids.rail}`).send({ holePitchMm: 90 });
     expect(res.status).toBe(200);
     expect((await ws.as.builder.post(`/api/rails/${ids.rail}/sweeps`).send(sweep)).status).toBe(201);
     expect((await board(ws, machineId)).state).toBe('reopened');
+    const attached = await upload(ws.as.builder, { subjectType: 'machine', subjectId: machineId }, { body: CSV, name: 'reopened.csv', type: 'text/csv' });
+    expect([attached.status, attached.body.addedAfterApproval]).toEqual([201, false]);
   });
 });

@@ -83,13 +83,24 @@ export class TravelTrialsService implements OnModuleInit {
     return response;
   }
 
-  /** Makes the trial's corrected value the axis's steps per mm (allowed on a locked trial: it changes the axis). */
+  /**
+   * Makes the trial's corrected value the axis's steps per mm. Idempotent: applying the same trial
+   * again (a double click, a retry) answers the axis as it is and changes nothing. The machine's
+   * row is locked first, so parallel applies run one after the other, and an approved machine refuses.
+   */
   async apply(actor: SessionUser, axisId: string, id: string) {
+    const found = await this.axes.findRow(actor, axisId);
+    await this.machines.lockForChange(actor, found.machineId);
     const axis = await this.axes.findRow(actor, axisId);
     const trial = await this.findRow(actor, axisId, id);
-    if (trial.appliedAt) throw new ConflictException(`This trial's correction was already applied on ${trial.appliedAt.toISOString().slice(0, 10)} by ${trial.appliedByName}`);
     const corrected = roundStepsPerMm((trial.result as unknown as TravelTrialResult).correctedStepsPerMm);
     if (!(corrected > 0)) throw new BadRequestException(['the trial has no usable corrected steps per mm']);
+    if (trial.appliedAt) {
+      if (axis.stepsPerMm === corrected) return this.axes.respond(axis);
+      throw new ConflictException(
+        `This trial's correction (${corrected} steps/mm) was applied on ${trial.appliedAt.toISOString().slice(0, 10)} by ${trial.appliedByName}; the axis has been set to ${axis.stepsPerMm} steps/mm since. Record a new trial to correct it again.`,
+      );
+    }
     const row = await this.axes.applyStepsPerMm(actor, axis, corrected, id);
     await this.repo.markApplied(actor.workshopId, id, actor.name);
     return this.axes.respond(row);

@@ -14,6 +14,8 @@ import { randomUUID } from 'node:crypto';
 import { pipeline, type Readable } from 'node:stream';
 import type { SessionUser } from '../auth/session-user.js';
 import type { SubjectRef } from '../records/subjects.registry.js';
+import { MachinesService } from '../machines/machines.service.js';
+import { APPROVED_STATES } from '../database/schema/machines.js';
 import { RecordsService } from '../records/records.service.js';
 import { decideType, type AcceptedType } from './content-type.js';
 import { UploadFieldsDto } from './dto/upload-fields.dto.js';
@@ -48,6 +50,7 @@ export class EvidenceUploadService {
     private readonly records: RecordsService,
     @Inject(EVIDENCE_STORAGE) private readonly storage: EvidenceStorage,
     @Inject(EVIDENCE_CONFIG) private readonly config: EvidenceConfig,
+    private readonly machines: MachinesService,
   ) {}
 
   async upload(actor: SessionUser, req: FastifyRequest): Promise<EvidenceResponse> {
@@ -141,6 +144,9 @@ export class EvidenceUploadService {
     const fileName = withExtension(shownName, type.extensions);
     const thumb = type.kind === 'photo' ? await this.thumbnailOf(received.tempKey, fileName, type) : null;
 
+    // Evidence may still be added while an approval stands, marked as such: it was not signed.
+    const machine = await this.machines.lockForCommand(actor, subject.machineId);
+    const addedAfterApproval = APPROVED_STATES.includes(machine.state);
     const id = randomUUID();
     const key = `${actor.workshopId}/${subject.machineId}/${id}`;
     const thumbnailKey = thumb ? `${key}.thumb.webp` : null;
@@ -168,13 +174,14 @@ export class EvidenceUploadService {
         heightPx: thumb?.heightPx ?? null,
         uploadedById: actor.id,
         uploadedByName: actor.name,
+        addedAfterApproval,
       });
       await this.records.audit(actor, {
         machineId: subject.machineId,
         recordType: 'evidence',
         recordId: id,
         action: 'attached',
-        summary: `${type.kind === 'photo' ? 'Photo' : 'File'} ${fileName} attached to ${subject.label}`,
+        summary: `${type.kind === 'photo' ? 'Photo' : 'File'} ${fileName} attached to ${subject.label}${addedAfterApproval ? ' after the approval (not part of what was signed)' : ''}`,
         changes: { subjectType: fields.subjectType, subjectId: fields.subjectId, contentType: type.contentType, sizeBytes: sniff.sizeBytes },
       });
       return toEvidenceResponse(row, { locked: false, canDelete: true });

@@ -23,6 +23,8 @@ export interface EvidenceResponse {
   locked: boolean;
   /** Whether the person asking may delete it now. */
   canDelete: boolean;
+  /** Attached while an approval stood: not part of what was signed. */
+  addedAfterApproval: boolean;
 }
 
 export function toEvidenceResponse(row: EvidenceRow, extra: { subjectLabel?: string; locked: boolean; canDelete: boolean }): EvidenceResponse {
@@ -44,5 +46,6 @@ export function toEvidenceResponse(row: EvidenceRow, extra: { subjectLabel?: str
     uploadedAt: row.createdAt.toISOString(),
     locked: extra.locked,
     canDelete: extra.canDelete,
+    addedAfterApproval: row.addedAfterApproval,
   };
 }

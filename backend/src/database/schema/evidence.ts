@@ -1,4 +1,4 @@
-import { bigint, index, integer, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
+import { bigint, boolean, index, integer, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
 import { id } from './columns.js';
 import { workshops } from './workshops.js';
 import { machines } from './machines.js';
@@ -37,6 +37,8 @@ export const evidence = pgTable(
     heightPx: integer('height_px'),
     uploadedById: uuid('uploaded_by_id').references(() => users.id),
     uploadedByName: text('uploaded_by_name').notNull(),
+    /** Attached while an approval of the machine stood: shown apart, never part of what was signed. */
+    addedAfterApproval: boolean('added_after_approval').notNull().default(false),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
   },
   (t) => [

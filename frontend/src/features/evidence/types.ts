@@ -19,6 +19,8 @@ export interface Evidence {
   uploadedAt: string;
   locked: boolean;
   canDelete: boolean;
+  /** Attached while an approval stood: not part of what was signed. */
+  addedAfterApproval: boolean;
 }
 
 export interface EvidenceLimits {

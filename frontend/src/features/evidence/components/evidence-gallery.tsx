@@ -5,7 +5,7 @@ import DescriptionOutlined from '@mui/icons-material/DescriptionOutlined';
 import LockOutlined from '@mui/icons-material/LockOutlined';
 import PictureAsPdfOutlined from '@mui/icons-material/PictureAsPdfOutlined';
 import type { Evidence } from '../types';
-import { evidenceMeta as meta } from '../utils/evidence-meta';
+import { AFTER_APPROVAL, evidenceMeta as meta } from '../utils/evidence-meta';
 import { formatBytes } from '../utils/format-bytes';
 import { DeleteEvidenceDialog } from './delete-evidence-dialog';
 import { EvidenceViewer } from './evidence-viewer';
@@ -45,6 +45,11 @@ export function EvidenceGallery({ items, label = 'Evidence' }: { items: Evidence
                   <Typography variant="caption" color="text.secondary" noWrap component="p">
                     {new Date(p.uploadedAt).toLocaleDateString()} · {formatBytes(p.size)}
                   </Typography>
+                  {p.addedAfterApproval && (
+                    <Typography variant="caption" color="warning.main" noWrap component="p">
+                      {AFTER_APPROVAL}
+                    </Typography>
+                  )}
                 </Box>
                 <ItemActions item={p} onDelete={setDeleting} />
               </Box>

@@ -1,0 +1,1 @@
+ALTER TABLE "evidence" ADD COLUMN "added_after_approval" boolean DEFAULT false NOT NULL;
