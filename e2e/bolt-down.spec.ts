@@ -158,7 +158,7 @@ test.describe('bolt-down guide', () => {
     };
     await expect.poll(fixedOnServer, { timeout: 20_000 }).toEqual({ 1: 0, 9: 2, 5: 1.5, 3: 0.5, 7: 2, 2: 0.4, 4: 0.7 });
     // Each fix was applied exactly once, though the first offline one reached the server twice.
-    const history: HistoryEntry[] = await (await page.request.get(`/api/machines/${machineId}/history`)).json();
+    const history: HistoryEntry[] = (await (await page.request.get(`/api/machines/${machineId}/history?limit=200`)).json()).entries;
     const writes = history.filter((e) => e.recordType === 'bolt-down' && e.action === 'updated');
     expect(writes).toHaveLength(7);
     expect(new Set(writes.map((e) => e.changes?.writeId)).size).toBe(7);

@@ -16,6 +16,7 @@ import { EvidenceModule } from './evidence/evidence.module.js';
 import { DrivesModule } from './drives/drives.module.js';
 import { MailModule } from './mail/mail.module.js';
 import { ApprovalsModule } from './approvals/approvals.module.js';
+import { HistoryModule } from './history/history.module.js';
 
 // One line per domain module.
 @Module({
@@ -35,6 +36,7 @@ import { ApprovalsModule } from './approvals/approvals.module.js';
     DrivesModule,
     MailModule,
     ApprovalsModule,
+    HistoryModule,
   ],
   providers: [{ provide: APP_INTERCEPTOR, useClass: CommandTransactionInterceptor }],
 })

@@ -107,8 +107,8 @@ describe('readiness board, waivers, approval and certificate', () => {
       x = (await board(ws, machineId)).checks.find((c) => c.key === 'fake-positioning:X')!;
       expect(x.status).toBe('outside-target');
       expect(x.waiver).toBeNull();
-      const history = await ws.as.viewer.get(`/api/machines/${machineId}/history`);
-      expect(history.body.find((e: { recordType: string }) => e.recordType === 'waiver')).toMatchObject({ action: 'created', summary: expect.stringContaining('0.22 mm is fine'), actor: expect.stringContaining('owner') });
+      const history = await ws.as.viewer.get(`/api/machines/${machineId}/history?limit=200`);
+      expect(history.body.entries.find((e: { recordType: string }) => e.recordType === 'waiver')).toMatchObject({ action: 'created', summary: expect.stringContaining('0.22 mm is fine'), actor: expect.stringContaining('owner') });
     });
   });
 
@@ -136,8 +136,8 @@ describe('readiness board, waivers, approval and certificate', () => {
       const mail = await smtp.waitFor((m) => m.subject === 'Approval requested: Signed router' && m.envelopeTo.includes(ws.emails.owner));
       expect(mail.envelopeTo).toEqual([ws.emails.owner]);
       expect(mail.text).toContain(`/machines/${machineId}?tab=readiness`);
-      const history = await ws.as.viewer.get(`/api/machines/${machineId}/history`);
-      expect(history.body[0]).toMatchObject({ action: 'state-changed', changes: { state: { from: 'being-built', to: 'awaiting-approval' } } });
+      const history = await ws.as.viewer.get(`/api/machines/${machineId}/history?limit=200`);
+      expect(history.body.entries[0]).toMatchObject({ action: 'state-changed', changes: { state: { from: 'being-built', to: 'awaiting-approval' } } });
     });
 
     it('refuses a technician (403), a wrong password (403) and a missing statement (400)', async () => {
@@ -233,8 +233,8 @@ describe('readiness board, waivers, approval and certificate', () => {
       const b = await board(ws, machineId);
       expect(b.state).toBe('reopened');
       expect(b.approval?.id).toBe(approval.id);
-      const history = await ws.as.viewer.get(`/api/machines/${machineId}/history`);
-      expect(history.body.find((e: { action: string }) => e.action === 'reopened')).toMatchObject({
+      const history = await ws.as.viewer.get(`/api/machines/${machineId}/history?limit=200`);
+      expect(history.body.entries.find((e: { action: string }) => e.action === 'reopened')).toMatchObject({
         actor: expect.stringContaining('owner'),
         summary: expect.stringMatching(/reopened the machine for changes: Y2 rail was knocked by a forklift/),
       });
@@ -314,8 +314,8 @@ describe('readiness board, waivers, approval and certificate', () => {
       const mails = smtp.messages.filter((m) => m.subject === 'Re-check due: Recheck router');
       expect(mails).toHaveLength(1);
       expect([...mails[0].envelopeTo].sort()).toEqual([ws.emails.owner, ws.emails.technician].sort());
-      const history = await ws.as.viewer.get(`/api/machines/${machineId}/history`);
-      expect(history.body[0]).toMatchObject({ action: 'state-changed', changes: { state: { from: 'ready-to-cut', to: 'recheck-due' } } });
+      const history = await ws.as.viewer.get(`/api/machines/${machineId}/history?limit=200`);
+      expect(history.body.entries[0]).toMatchObject({ action: 'state-changed', changes: { state: { from: 'ready-to-cut', to: 'recheck-due' } } });
       // A re-check round: the owner reopens the machine, and it is approved again through the same flow.
       expect((await ws.as.owner.post(`/api/machines/${machineId}/reopen`).send({ reason: 'Six-monthly re-check' })).status).toBe(201);
       fake.record(machineId, 'fake-straightness:Y1', 13.1, 'within-target');

@@ -49,8 +49,8 @@ describe('bolt-down guide API', () => {
     return res.body as { holes: Hole[]; nextHole: number | null; complete: boolean; repeated: boolean; fixedCount: number };
   };
   const boltDownHistory = async (writeId?: string) => {
-    const res = await ws.as.viewer.get(`/api/machines/${machineId}/history`);
-    const entries = (res.body as { recordType: string; changes: { writeId?: string } | null; summary: string }[]).filter((e) => e.recordType === 'bolt-down');
+    const res = await ws.as.viewer.get(`/api/machines/${machineId}/history?limit=200`);
+    const entries = (res.body.entries as { recordType: string; changes: { writeId?: string } | null; summary: string }[]).filter((e) => e.recordType === 'bolt-down');
     return writeId ? entries.filter((e) => e.changes?.writeId === writeId) : entries;
   };
 

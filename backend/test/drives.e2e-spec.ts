@@ -99,22 +99,22 @@ describe('axes and their drive records', () => {
     expect(res.status).toBe(200);
     expect(res.body.stepsPerMm).toBe(641.5);
     expect(res.body.stepsHistory).toEqual([expect.objectContaining({ from: 640, to: 641.5, reason: 'edited', by: expect.stringContaining('technician') })]);
-    const history = await ws.as.viewer.get(`/api/machines/${machineId}/history`);
-    expect(history.body[0]).toMatchObject({ recordType: 'axis', recordId: id, action: 'updated', changes: { stepsPerMm: { from: 640, to: 641.5 } } });
+    const history = await ws.as.viewer.get(`/api/machines/${machineId}/history?limit=200`);
+    expect(history.body.entries[0]).toMatchObject({ recordType: 'axis', recordId: id, action: 'updated', changes: { stepsPerMm: { from: 640, to: 641.5 } } });
   });
 
   it('a saved screw drive counts as a recorded speed check; a measured X or Y travel as a recorded travel envelope', async () => {
     const m = await newMachine(ws, 'router', { x: 900, y: 600 });
     const id = await newAxis(ws, m, screwAxis('X'));
-    let history = (await ws.as.viewer.get(`/api/machines/${m}/history`)).body as { action: string; summary: string; recordId: string; changes: { status?: string } | null }[];
+    let history = (await ws.as.viewer.get(`/api/machines/${m}/history?limit=200`)).body.entries as { action: string; summary: string; recordId: string; changes: { status?: string } | null }[];
     expect(history.find((h) => h.action === 'recorded' && /Speed check of axis X/.test(h.summary))).toMatchObject({ recordId: id, changes: { status: 'within-target' } });
     // A Y axis completes the envelope: X 920 ≥ 910 mm, Y 605 < 610 mm.
     const y = await newAxis(ws, m, { ...screwAxis('Y'), measuredTravelMm: 605 });
-    history = (await ws.as.viewer.get(`/api/machines/${m}/history`)).body;
+    history = (await ws.as.viewer.get(`/api/machines/${m}/history?limit=200`)).body.entries;
     expect(history.find((h) => h.action === 'recorded' && h.recordId === y && /Travel envelope/.test(h.summary))).toMatchObject({ changes: { status: 'outside-target' } });
     // A faster feed than the screw allows is recorded outside target.
     await ws.as.technician.patch(`/api/axes/${id}`).send({ maxFeedRate: 12000 });
-    history = (await ws.as.viewer.get(`/api/machines/${m}/history`)).body;
+    history = (await ws.as.viewer.get(`/api/machines/${m}/history?limit=200`)).body.entries;
     expect(history.find((h) => h.action === 'recorded' && /Speed check of axis X: 2400 rpm/.test(h.summary))).toMatchObject({ changes: { status: 'outside-target' } });
   });
 

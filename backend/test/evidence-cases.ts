@@ -258,8 +258,8 @@ export function evidenceApiCases(driver: string, harness: DriverHarness) {
     expect(listed.body.find((e: { id: string }) => e.id === c.body.id)).toMatchObject({ locked: true, canDelete: false });
     expect((await ctx.ws.as.builder.get(`/api/evidence/${c.body.id}/content`)).status).toBe(200);
 
-    const history = await ctx.ws.as.viewer.get(`/api/machines/${ctx.machineId}/history`);
-    const evidenceEntries = history.body.filter((h: { recordType: string }) => h.recordType === 'evidence');
+    const history = await ctx.ws.as.viewer.get(`/api/machines/${ctx.machineId}/history?limit=200`);
+    const evidenceEntries = history.body.entries.filter((h: { recordType: string }) => h.recordType === 'evidence');
     expect(evidenceEntries.find((h: { recordId: string; action: string }) => h.recordId === a.body.id && h.action === 'deleted')).toMatchObject({ summary: 'Photo a.png removed from Bench check 1' });
     expect(evidenceEntries.find((h: { recordId: string; action: string }) => h.recordId === c.body.id && h.action === 'attached')).toMatchObject({ summary: 'Photo c.png attached to Bench check 1' });
   });

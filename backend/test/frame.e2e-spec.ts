@@ -71,8 +71,8 @@ describe('frame: diagonal checks', () => {
     const list = await ws.as.viewer.get(`/api/machines/${router}/diagonal-checks`);
     expect(list.status).toBe(200);
     expect(list.body.map((c: { id: string }) => c.id)).toEqual([second.body.id, first.body.id]);
-    const history = await ws.as.viewer.get(`/api/machines/${router}/history`);
-    expect(history.body[0]).toMatchObject({ recordType: 'diagonal-check', recordId: second.body.id, action: 'recorded' });
+    const history = await ws.as.viewer.get(`/api/machines/${router}/history?limit=200`);
+    expect(history.body.entries[0]).toMatchObject({ recordType: 'diagonal-check', recordId: second.body.id, action: 'recorded' });
   });
 
   it('reports the latest check on the readiness board and resolves it as a subject', async () => {
@@ -123,7 +123,7 @@ describe('frame: diagonal checks', () => {
     expect((await ws.as.builder.delete(`/api/machines/${plasma}/diagonal-checks/${wrong.body.id}`)).status).toBe(404);
     const list = await ws.as.viewer.get(`/api/machines/${plasma}/diagonal-checks`);
     expect(list.body[0].id).toBe(keep.body.id);
-    expect((await ws.as.viewer.get(`/api/machines/${plasma}/history`)).body[0]).toMatchObject({ action: 'deleted', recordId: wrong.body.id });
+    expect((await ws.as.viewer.get(`/api/machines/${plasma}/history?limit=200`)).body.entries[0]).toMatchObject({ action: 'deleted', recordId: wrong.body.id });
     await app.get(RecordsService).lock(randomUUID(), [{ recordType: 'diagonal-check', recordId: keep.body.id }]);
     expect((await ws.as.builder.delete(`/api/machines/${plasma}/diagonal-checks/${keep.body.id}`)).status).toBe(409);
     expect((await ws.as.viewer.get(`/api/machines/${plasma}/diagonal-checks`)).body[0]).toMatchObject({ id: keep.body.id, locked: true });

@@ -44,7 +44,7 @@ describe('machine files and target sets', () => {
     const made = await ws.as.owner.post('/api/machines').send(plasma);
     expect((await other.as.owner.get(`/api/machines/${made.body.id}`)).status).toBe(404);
     expect((await other.as.owner.patch(`/api/machines/${made.body.id}`).send({ name: 'mine now' })).status).toBe(404);
-    expect((await other.as.owner.get(`/api/machines/${made.body.id}/history`)).status).toBe(404);
+    expect((await other.as.owner.get(`/api/machines/${made.body.id}/history?limit=200`)).status).toBe(404);
     expect((await other.as.owner.get('/api/machines')).body.map((m: { id: string }) => m.id)).not.toContain(made.body.id);
   });
 
@@ -53,9 +53,9 @@ describe('machine files and target sets', () => {
     const res = await ws.as.technician.patch(`/api/machines/${made.body.id}`).send({ workArea: { x: 3050, y: 1520 } });
     expect(res.status).toBe(200);
     expect(res.body.workArea).toEqual({ x: 3050, y: 1520 });
-    const history = await ws.as.viewer.get(`/api/machines/${made.body.id}/history`);
-    expect(history.body[0]).toMatchObject({ action: 'updated', actor: expect.stringContaining('technician'), changes: { workArea: { from: { x: 3000, y: 1500 }, to: { x: 3050, y: 1520 } } } });
-    expect(history.body[1]).toMatchObject({ action: 'created' });
+    const history = await ws.as.viewer.get(`/api/machines/${made.body.id}/history?limit=200`);
+    expect(history.body.entries[0]).toMatchObject({ action: 'updated', actor: expect.stringContaining('technician'), changes: { workArea: { from: { x: 3000, y: 1500 }, to: { x: 3050, y: 1520 } } } });
+    expect(history.body.entries[1]).toMatchObject({ action: 'created' });
   });
 
   it.each([

@@ -108,7 +108,9 @@ describe('mail: the fake SMTP server, the outbox, and set-your-password links', 
       const res = await ws.as.admin.get('/api/dev/outbox');
       expect(res.status).toBe(200);
       const mine = res.body.find((m: { to: string[] }) => m.to.includes(email));
-      expect(mine).toMatchObject({ subject: `Your Railwright sign-in for ${ws.name}`, text: expect.stringContaining('/set-password?token='), attachments: [] });
+      // The set-your-password link is for the person alone: the admin's outbox shows it hidden.
+      expect(mine).toMatchObject({ subject: `Your Railwright sign-in for ${ws.name}`, linkHidden: true, text: expect.stringContaining(`[link hidden: only ${email} can open it]`), attachments: [] });
+      expect(JSON.stringify(res.body)).not.toMatch(/token=/);
       expect(res.body.some((m: { subject: string }) => m.subject.includes(other.name))).toBe(false);
     });
 

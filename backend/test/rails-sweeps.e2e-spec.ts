@@ -62,8 +62,8 @@ describe('rail sweeps, parallelism and readiness', () => {
     expect(list.status).toBe(200);
     expect(list.body.map((s: { id: string }) => s.id)).toEqual([good.body.id, res.body.id]); // newest first
     expect((await ws.as.viewer.get(`/api/sweeps/${res.body.id}`)).body.id).toBe(res.body.id);
-    const history = await ws.as.viewer.get(`/api/machines/${machineId}/history`);
-    expect(history.body[0]).toMatchObject({ recordType: 'rail-sweep', action: 'recorded', recordId: good.body.id });
+    const history = await ws.as.viewer.get(`/api/machines/${machineId}/history?limit=200`);
+    expect(history.body.entries[0]).toMatchObject({ recordType: 'rail-sweep', action: 'recorded', recordId: good.body.id });
   });
 
   it('each reading unit is converted to mm: 1 in = 25.4 mm, 1 µm = 0.001 mm', async () => {

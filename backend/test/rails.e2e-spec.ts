@@ -107,8 +107,8 @@ describe('rails', () => {
     const res = await ws.as.builder.patch(`/api/rails/${rail.id}`).send({ holePitchMm: 120, firstHoleMm: 40 });
     expect(res.status).toBe(200);
     expect(res.body.holes.map((h: { position: number }) => h.position)).toEqual([40, 160, 280, 400, 520, 640, 760, 880, 1000]);
-    const history = await ws.as.viewer.get(`/api/machines/${machineId}/history`);
-    expect(history.body[0]).toMatchObject({ recordType: 'rail', action: 'updated', changes: { holePitchMm: { from: 60, to: 120 } } });
+    const history = await ws.as.viewer.get(`/api/machines/${machineId}/history?limit=200`);
+    expect(history.body.entries[0]).toMatchObject({ recordType: 'rail', action: 'updated', changes: { holePitchMm: { from: 60, to: 120 } } });
     const refused = await ws.as.builder.patch(`/api/rails/${rail.id}`).send({ lengthMm: 30 });
     expect(refused.status).toBe(400);
     expect(JSON.stringify(refused.body.message)).toMatch(/firstHoleMm must not be larger than lengthMm/);

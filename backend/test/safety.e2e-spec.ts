@@ -69,8 +69,8 @@ describe('safety walk', () => {
     const ref = await app.get(MachinesService).getRef({ workshopId: ws.id }, machine);
     const check = (await app.get(ReadinessRegistry).checksFor(ref)).find((c) => c.kind === 'safety-walk');
     expect(check).toMatchObject({ status: 'within-target', recordType: 'safety-walk', recordId: done.id, link: `/machines/${machine}?tab=safety` });
-    const history = await ws.as.viewer.get(`/api/machines/${machine}/history`);
-    expect(history.body[0]).toMatchObject({ recordType: 'safety-walk', action: 'recorded' });
+    const history = await ws.as.viewer.get(`/api/machines/${machine}/history?limit=200`);
+    expect(history.body.entries[0]).toMatchObject({ recordType: 'safety-walk', action: 'recorded' });
   });
 
   it('a "no" blocks approval until it is answered again', async () => {

@@ -1,4 +1,6 @@
 import { Injectable } from '@nestjs/common';
+import { TransactionContext } from '../database/transaction-context.js';
+import { RecordsService } from '../records/records.service.js';
 import { AuthRepository } from './auth.repository.js';
 import { LoginThrottle } from './login-throttle.js';
 import { verifyPassword } from './password.js';
@@ -13,6 +15,8 @@ export class AuthService {
   constructor(
     private readonly repo: AuthRepository,
     private readonly throttle: LoginThrottle,
+    private readonly records: RecordsService,
+    private readonly transactions: TransactionContext,
   ) {}
 
   async checkCredentials(address: string, email: string, password: string): Promise<SessionUser | null> {
@@ -20,16 +24,49 @@ export class AuthService {
     const ok = await verifyPassword(password, found?.passwordHash ?? DUMMY_HASH);
     if (!found || !ok) {
       this.throttle.recordFailure(address, email);
+      await this.auditFailedSignIn(address, email);
       return null;
     }
     this.throttle.recordSuccess(address, email);
     const { passwordHash: _omit, ...user } = found;
+    await this.kept(() => this.records.audit(user, { recordType: 'sign-in', recordId: user.id, action: 'signed-in', summary: `${user.name} signed in` }));
     return user;
   }
 
-  /** Re-entered password, used where a signature is needed (approval). */
+  /**
+   * Re-entered password, used where a signature is needed (approval). Throttled like sign-in
+   * (429 past the limit), per person: the count is kept outside the command's transaction,
+   * because a wrong password answers 403 and rolls the command back.
+   */
   async confirmPassword(userId: string, password: string): Promise<boolean> {
+    const key = `signing:${userId}`;
+    await this.transactions.outside(() => this.throttle.check(key, key));
     const hash = await this.repo.findPasswordHash(userId);
-    return hash ? verifyPassword(password, hash) : false;
+    const ok = hash ? await verifyPassword(password, hash) : false;
+    if (ok) await this.transactions.outside(() => this.throttle.succeed(key, key));
+    return ok;
+  }
+
+  /** Signs the person out everywhere: on a password change, a reset and a deactivation. */
+  endSessions(userId: string): Promise<void> {
+    return this.repo.endSessions(userId, new Date());
+  }
+
+  /** A failed sign-in to an existing account is kept in that account's workshop history. */
+  private async auditFailedSignIn(address: string, email: string): Promise<void> {
+    const account = await this.repo.findAccountByEmail(email);
+    if (!account) return;
+    const why = account.active ? 'wrong password' : 'the account is deactivated';
+    await this.kept(() =>
+      this.records.audit(
+        { id: null, name: `Unknown (from address ${address})`, workshopId: account.workshopId },
+        { recordType: 'sign-in', recordId: account.id, action: 'sign-in-failed', summary: `Failed sign-in to ${account.name}'s account (${why})` },
+      ),
+    );
+  }
+
+  /** Written on the pool, outside any command: a refused sign-in answers 401 and must keep its entry. */
+  private kept(work: () => Promise<void>): Promise<void> {
+    return this.transactions.outside(work);
   }
 }

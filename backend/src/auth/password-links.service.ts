@@ -1,19 +1,36 @@
-import { GoneException, Injectable, NotFoundException } from '@nestjs/common';
+import { GoneException, Injectable, NotFoundException, OnModuleInit } from '@nestjs/common';
+import { ModuleRef } from '@nestjs/core';
 import { createHash, randomBytes } from 'node:crypto';
 import { loadConfig } from '../config/config.js';
+import { MailService } from '../mail/mail.service.js';
+import { RecordsService } from '../records/records.service.js';
+import { AuthRepository } from './auth.repository.js';
 import { hashPassword } from './password.js';
+import { passwordChangedMail } from './password-links.mails.js';
 import { PasswordLinksRepository } from './password-links.repository.js';
 
 export const LINK_HOURS = 72;
 
 const hashToken = (token: string) => createHash('sha256').update(token).digest('hex');
 
-/** Set-your-password links: single use, expiring, only their hash stored. */
+/** Set-your-password links: single use, expiring, only their hash stored, mailed to their person only. */
 @Injectable()
-export class PasswordLinksService {
-  constructor(private readonly repo: PasswordLinksRepository) {}
+export class PasswordLinksService implements OnModuleInit {
+  private mail: MailService | null = null;
 
-  /** A new link for the person; the token itself is returned once and never stored. */
+  constructor(
+    private readonly repo: PasswordLinksRepository,
+    private readonly accounts: AuthRepository,
+    private readonly records: RecordsService,
+    private readonly moduleRef: ModuleRef,
+  ) {}
+
+  onModuleInit() {
+    // The mail module is not a dependency of the (global) auth module; look its service up once.
+    this.mail = this.moduleRef.get(MailService, { strict: false });
+  }
+
+  /** A new link for the person; the token itself is returned once, to be mailed, and never stored. */
   async create(userId: string, purpose: 'invitation' | 'reset' = 'invitation'): Promise<{ url: string; expiresAt: Date }> {
     const token = randomBytes(32).toString('base64url');
     const expiresAt = new Date(Date.now() + LINK_HOURS * 3600_000);
@@ -27,10 +44,29 @@ export class PasswordLinksService {
     return { email: found.email, name: found.name, workshop: found.workshopName, expiresAt: found.link.expiresAt.toISOString() };
   }
 
+  /**
+   * Sets the password, ends every session the person had, keeps it in the history and tells
+   * them by mail, so a change they did not make does not go unnoticed.
+   */
   async setPassword(token: string, password: string): Promise<{ email: string }> {
     const found = await this.usable(token);
-    const ok = await this.repo.consume(found.link.id, found.link.userId, await hashPassword(password));
+    const person = { id: found.link.userId, name: found.name, workshopId: found.workshopId };
+    const ok = await this.repo.consume(found.link.id, person, await hashPassword(password));
     if (!ok) throw new GoneException('This link has already been used. Sign in, or ask an admin for a new link.');
+    const now = new Date();
+    await this.accounts.endSessions(person.id, now);
+    const first = found.link.purpose === 'invitation';
+    await this.records.audit(person, {
+      recordType: 'password',
+      recordId: person.id,
+      action: first ? 'first-password-set' : 'password-changed',
+      summary: first ? `${found.name} chose their first password` : `${found.name} chose a new password; every earlier session was signed out`,
+    });
+    const mail = this.mail;
+    if (mail && !first) {
+      const { subject, text } = passwordChangedMail({ name: found.name, workshopName: found.workshopName, at: now });
+      mail.later(() => mail.send({ workshopId: found.workshopId, to: [found.email], subject, text }), 'password-changed mail');
+    }
     return { email: found.email };
   }
 

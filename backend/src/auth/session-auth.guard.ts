@@ -20,8 +20,16 @@ export class SessionAuthGuard implements CanActivate {
     if (this.reflector.getAllAndOverride<boolean>(IS_PUBLIC, targets)) return true;
     const req = ctx.switchToHttp().getRequest();
     const userId: string | undefined = req.session?.get?.('userId');
-    const user = userId ? await this.users.findSessionUser(userId) : null;
-    if (!user) throw new UnauthorizedException('Sign in to continue');
+    const found = userId ? await this.users.findSessionUser(userId) : null;
+    if (!found) throw new UnauthorizedException('Sign in to continue');
+    // A session signed in before the password changed or the person was deactivated stays dead,
+    // even if a request still in flight wrote it back to the store.
+    const signedInAt: unknown = req.session.get('createdAt');
+    if (typeof signedInAt === 'number' && signedInAt < found.sessionsValidFrom.getTime()) {
+      await req.session.destroy();
+      throw new UnauthorizedException('Your session has ended (your password was changed or your account was deactivated). Sign in again.');
+    }
+    const { sessionsValidFrom: _omit, ...user } = found;
     req.user = user;
     const roles = this.reflector.getAllAndOverride<Role[] | undefined>(ROLES_KEY, targets);
     if (roles && !roles.includes(user.role)) {

@@ -1,9 +1,10 @@
-import { Body, Controller, Get, Param, ParseUUIDPipe, Patch, Post } from '@nestjs/common';
+import { Body, Controller, Get, Param, ParseUUIDPipe, Patch, Post, Query } from '@nestjs/common';
 import { CurrentUser, RECORDERS, Roles } from '../auth/decorators.js';
 import type { SessionUser } from '../auth/session-user.js';
 import { CreateMachineDto } from './dto/create-machine.dto.js';
 import { UpdateMachineDto } from './dto/update-machine.dto.js';
 import { MachinesService } from './machines.service.js';
+import { HistoryQueryDto } from '../history/dto/history-query.dto.js';
 
 @Controller('machines')
 export class MachinesController {
@@ -32,7 +33,7 @@ export class MachinesController {
   }
 
   @Get(':id/history')
-  history(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string) {
-    return this.machines.history(user, id);
+  history(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string, @Query() query: HistoryQueryDto) {
+    return this.machines.history(user, id, query);
   }
 }

@@ -25,6 +25,12 @@ export class PeopleController {
     return this.people.resendInvitation(user, id);
   }
 
+  /** Resets an existing member's password: the link goes to their own e-mail only. */
+  @Post(':id/password-reset')
+  resetPassword(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string) {
+    return this.people.resetPassword(user, id);
+  }
+
   @Patch(':id')
   update(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string, @Body() dto: UpdatePersonDto) {
     return this.people.update(user, id, dto);

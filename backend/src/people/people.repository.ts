@@ -10,6 +10,7 @@ const columns = {
   name: users.name,
   role: users.role,
   active: users.active,
+  passwordPending: users.passwordPending,
   createdAt: users.createdAt,
 };
 
@@ -37,7 +38,7 @@ export class PeopleRepository {
     return !!row;
   }
 
-  async insert(workshopId: string, values: { name: string; email: string; role: Role; passwordHash: string }) {
+  async insert(workshopId: string, values: { name: string; email: string; role: Role; passwordHash: string; passwordPending: boolean }) {
     const [row] = await this.db
       .insert(users)
       .values({ workshopId, ...values })

@@ -6,6 +6,7 @@ export interface PersonRow {
   name: string;
   role: Role;
   active: boolean;
+  passwordPending: boolean;
   createdAt: Date;
 }
 
@@ -15,6 +16,8 @@ export interface PersonResponse {
   name: string;
   role: Role;
   active: boolean;
+  /** Invited and not yet signed up: the admin may send the invitation again. */
+  invitationPending: boolean;
   createdAt: string;
 }
 
@@ -24,5 +27,6 @@ export const toPersonResponse = (row: PersonRow): PersonResponse => ({
   name: row.name,
   role: row.role,
   active: row.active,
+  invitationPending: row.passwordPending,
   createdAt: row.createdAt.toISOString(),
 });

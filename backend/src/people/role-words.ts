@@ -7,3 +7,6 @@ export const ROLE_WORDS: Record<Role, string> = {
   builder: 'a builder (mounts and aligns rails)',
   viewer: 'a viewer (reads records and certificates)',
 };
+
+/** The role's short name, for the history. */
+export const ROLE_NAMES: Record<Role, string> = { admin: 'admin', owner: 'owner', technician: 'technician', builder: 'builder', viewer: 'viewer' };

@@ -1,23 +1,90 @@
 import { Inject, Injectable } from '@nestjs/common';
-import { and, desc, eq, inArray } from 'drizzle-orm';
+import { and, asc, desc, eq, gte, ilike, inArray, lt, or, sql, type SQL } from 'drizzle-orm';
 import { DRIZZLE, type Database } from '../database/database.tokens.js';
-import { auditEntries, machines, recordLocks } from '../database/schema/index.js';
+import { auditEntries, changeLog, machines, recordLocks } from '../database/schema/index.js';
+
+export interface HistoryFilter {
+  machineId?: string;
+  recordType?: string;
+  person?: string;
+  from?: Date;
+  toExclusive?: Date;
+  /** The last entry of the page before: its time exactly as stored (text) and its id. */
+  after?: { at: string; id: string };
+  limit: number;
+}
+
+const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+const likeEscape = (s: string) => s.replace(/[\\%_]/g, (c) => `\\${c}`);
 
 @Injectable()
 export class RecordsRepository {
   constructor(@Inject(DRIZZLE) private readonly db: Database) {}
 
   async insertAudit(values: typeof auditEntries.$inferInsert) {
-    await this.db.insert(auditEntries).values(values);
+    // The clock, not the transaction's start: several entries of one command keep their order.
+    await this.db.insert(auditEntries).values({ at: sql`clock_timestamp()`, ...values });
   }
 
-  history(workshopId: string, machineId: string, limit: number) {
+  /** One page of a workshop's (or one machine's) history, newest first; one row more than asked tells there is a next page. */
+  historyPage(workshopId: string, f: HistoryFilter) {
+    const where: (SQL | undefined)[] = [eq(auditEntries.workshopId, workshopId)];
+    if (f.machineId) where.push(eq(auditEntries.machineId, f.machineId));
+    if (f.recordType) where.push(eq(auditEntries.recordType, f.recordType));
+    if (f.person) {
+      const byName = ilike(auditEntries.actorName, `%${likeEscape(f.person)}%`);
+      where.push(UUID.test(f.person) ? or(eq(auditEntries.actorId, f.person), byName) : byName);
+    }
+    if (f.from) where.push(gte(auditEntries.at, f.from));
+    if (f.toExclusive) where.push(lt(auditEntries.at, f.toExclusive));
+    if (f.after) where.push(sql`(${auditEntries.at}, ${auditEntries.id}) < (${f.after.at}::timestamptz, ${f.after.id}::uuid)`);
     return this.db
-      .select()
+      .select({
+        id: auditEntries.id,
+        at: auditEntries.at,
+        atText: sql<string>`${auditEntries.at}::text`,
+        actorName: auditEntries.actorName,
+        machineId: auditEntries.machineId,
+        machineName: machines.name,
+        recordType: auditEntries.recordType,
+        recordId: auditEntries.recordId,
+        action: auditEntries.action,
+        summary: auditEntries.summary,
+        changes: auditEntries.changes,
+        txid: auditEntries.txid,
+      })
       .from(auditEntries)
-      .where(and(eq(auditEntries.workshopId, workshopId), eq(auditEntries.machineId, machineId)))
-      .orderBy(desc(auditEntries.at))
-      .limit(limit);
+      .leftJoin(machines, eq(machines.id, auditEntries.machineId))
+      .where(and(...where))
+      .orderBy(desc(auditEntries.at), desc(auditEntries.id))
+      .limit(f.limit + 1);
+  }
+
+  /** Every summary written by these transactions (to share their row changes out among them). */
+  entriesOfTransactions(workshopId: string, txids: number[]) {
+    if (!txids.length) return Promise.resolve([]);
+    return this.db
+      .select({ id: auditEntries.id, txid: auditEntries.txid, recordId: auditEntries.recordId })
+      .from(auditEntries)
+      .where(and(eq(auditEntries.workshopId, workshopId), inArray(auditEntries.txid, txids)))
+      .orderBy(asc(auditEntries.at), asc(auditEntries.id));
+  }
+
+  /** The row changes those transactions made, with their values before and after. */
+  changesOfTransactions(workshopId: string, txids: number[]) {
+    if (!txids.length) return Promise.resolve([]);
+    return this.db
+      .select({
+        txid: changeLog.txid,
+        tableName: changeLog.tableName,
+        recordId: changeLog.recordId,
+        operation: changeLog.operation,
+        oldValues: changeLog.oldValues,
+        newValues: changeLog.newValues,
+      })
+      .from(changeLog)
+      .where(and(inArray(changeLog.txid, txids), or(eq(changeLog.workshopId, workshopId), sql`${changeLog.workshopId} is null`)))
+      .orderBy(asc(changeLog.at), asc(changeLog.id));
   }
 
   async touchMachine(machineId: string) {

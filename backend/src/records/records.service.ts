@@ -1,7 +1,15 @@
-import { ConflictException, Injectable, Logger } from '@nestjs/common';
+import { BadRequestException, ConflictException, Injectable, Logger } from '@nestjs/common';
 import type { SessionUser } from '../auth/session-user.js';
+import { assignChanges, decodeCursor, encodeCursor, toHistoryEntry, type HistoryPage } from '../history/history.mapper.js';
+import type { HistoryQueryDto } from '../history/dto/history-query.dto.js';
 import type { CheckStatus } from './readiness.js';
 import { RecordsRepository } from './records.repository.js';
+
+/** Who an audit entry names: a signed-in person, or (for a failed sign-in) nobody known. */
+export type AuditActor = Pick<SessionUser, 'workshopId' | 'name'> & { id: string | null };
+
+const DEFAULT_PAGE = 50;
+const DATE_ONLY = /^\d{4}-\d{2}-\d{2}$/;
 
 export interface AuditInput {
   machineId?: string | null;
@@ -33,7 +41,7 @@ export class RecordsService {
 
   constructor(private readonly repo: RecordsRepository) {}
 
-  async audit(actor: SessionUser, input: AuditInput): Promise<void> {
+  async audit(actor: AuditActor, input: AuditInput): Promise<void> {
     await this.repo.insertAudit({
       workshopId: actor.workshopId,
       machineId: input.machineId ?? null,
@@ -79,7 +87,25 @@ export class RecordsService {
     return this.repo.insertLocks(approvalId, refs);
   }
 
-  history(workshopId: string, machineId: string, limit = 500) {
-    return this.repo.history(workshopId, machineId, limit);
+  /**
+   * A page of the workshop's history (or one machine's), newest first, each summary with the
+   * values its command changed. A date without a time in `to` includes that whole day (UTC).
+   */
+  async history(workshopId: string, query: HistoryQueryDto, machineId?: string): Promise<HistoryPage> {
+    const after = query.cursor ? decodeCursor(query.cursor) : undefined;
+    if (after === null) throw new BadRequestException(['cursor must be the nextCursor of an earlier page']);
+    const from = query.from ? new Date(query.from) : undefined;
+    const toExclusive = query.to ? (DATE_ONLY.test(query.to) ? new Date(Date.parse(query.to) + 86_400_000) : new Date(Date.parse(query.to) + 1)) : undefined;
+    if (from && toExclusive && from >= toExclusive) throw new BadRequestException(['from must be before to']);
+    const limit = query.limit ?? DEFAULT_PAGE;
+    const rows = await this.repo.historyPage(workshopId, { machineId, recordType: query.kind, person: query.person?.trim() || undefined, from, toExclusive, after, limit });
+    const page = rows.slice(0, limit);
+    const txids = [...new Set(page.map((r) => r.txid))];
+    const [txEntries, changes] = await Promise.all([this.repo.entriesOfTransactions(workshopId, txids), this.repo.changesOfTransactions(workshopId, txids)]);
+    const assigned = assignChanges(txEntries, changes);
+    return {
+      entries: page.map((r) => toHistoryEntry(r, assigned.get(r.id) ?? [])),
+      nextCursor: rows.length > limit ? encodeCursor(page[page.length - 1]) : null,
+    };
   }
 }

@@ -1,0 +1,70 @@
+/** Plain words for what a history entry is about; the keys are the record types the services audit. */
+export const KIND_LABELS: Record<string, string> = {
+  machine: 'Machine',
+  rail: 'Rail',
+  'rail-sweep': 'Rail sweep',
+  'bolt-down': 'Bolt-down',
+  axis: 'Axis',
+  'travel-trial': 'Travel trial',
+  'positioning-run': 'Positioning run',
+  'diagonal-check': 'Squareness check',
+  'bed-grid': 'Bed flatness',
+  'test-cut': 'Test cut',
+  'safety-walk': 'Safety walk',
+  'safety-item': 'Safety-walk item',
+  waiver: 'Waiver',
+  approval: 'Approval',
+  'approval-request': 'Approval request',
+  evidence: 'Photo or file',
+  'target-set': 'Target set',
+  person: 'Person',
+  'sign-in': 'Sign-in',
+  password: 'Password',
+};
+
+export const kindLabel = (recordType: string): string => KIND_LABELS[recordType] ?? recordType.replace(/-/g, ' ').replace(/^./, (c) => c.toUpperCase());
+
+/** The tables the change log names, in the same plain words. */
+const TABLE_LABELS: Record<string, string> = {
+  workshops: 'Workshop',
+  users: 'Person',
+  target_sets: 'Target set',
+  machines: 'Machine',
+  rails: 'Rail',
+  rail_sweeps: 'Rail sweep',
+  bolt_downs: 'Bolt-down',
+  bolt_down_holes: 'Bolt-down hole',
+  bolt_down_writes: 'Bolt-down reading',
+  axes: 'Axis',
+  travel_trials: 'Travel trial',
+  positioning_runs: 'Positioning run',
+  diagonal_checks: 'Squareness check',
+  bed_grids: 'Bed flatness',
+  test_cuts: 'Test cut',
+  safety_items: 'Safety-walk item',
+  safety_walks: 'Safety walk',
+  safety_answers: 'Safety-walk answer',
+  waivers: 'Waiver',
+  approval_requests: 'Approval request',
+  approvals: 'Approval',
+  record_locks: 'Approval lock',
+  evidence: 'Photo or file',
+  password_links: 'Password link',
+};
+
+export const tableLabel = (table: string): string => TABLE_LABELS[table] ?? table.replace(/_/g, ' ');
+
+/**
+ * Columns not shown to people: internal ids, bookkeeping times and anything that is a secret or
+ * a hash (the change log already masks password hashes and link tokens; these keep them out).
+ */
+const HIDDEN = new Set(['id', 'created_at', 'updated_at', 'last_activity_at', 'version', 'sessions_valid_from', 'token_hash', 'password_hash']);
+
+export function isShownField(column: string): boolean {
+  if (HIDDEN.has(column)) return false;
+  if (column === 'id' || column.endsWith('_id')) return false;
+  return !/(hash|token|signature|secret)/.test(column);
+}
+
+/** "work_area_x_mm" → "work area x mm": the column in words. */
+export const fieldLabel = (column: string): string => column.replace(/_/g, ' ');
