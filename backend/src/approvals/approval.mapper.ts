@@ -11,6 +11,10 @@ export interface ApprovalResponse {
   statement: string;
   recheckDueAt: string;
   recheckIntervalDays: number;
+  /** Path of the public verification page printed on the certificate; null before signatures were kept. */
+  verificationPath: string | null;
+  /** Set once the owner reopened the machine: the approval no longer stands. */
+  reopened: { at: string; by: string | null; reason: string | null } | null;
 }
 
 export const toApprovalResponse = (a: ApprovalRow): ApprovalResponse => ({
@@ -21,6 +25,8 @@ export const toApprovalResponse = (a: ApprovalRow): ApprovalResponse => ({
   statement: a.statement,
   recheckDueAt: a.recheckDueAt.toISOString(),
   recheckIntervalDays: a.recheckIntervalDays,
+  verificationPath: a.verificationToken ? `/verify/${a.verificationToken}` : null,
+  reopened: a.endedAt ? { at: a.endedAt.toISOString(), by: a.endedByName, reason: a.endReason } : null,
 });
 
 export const toRequestResponse = (r: RequestRow) => ({ id: r.id, requestedAt: r.requestedAt.toISOString(), requestedBy: r.requestedByName });

@@ -10,6 +10,7 @@ const page = (load: () => Promise<{ default: React.ComponentType }>) => async ()
 const router = createBrowserRouter([
   { path: paths.signIn, Component: SignInRoute },
   { path: paths.setPassword, lazy: page(() => import('./routes/set-password')) },
+  { path: '/verify/:token', lazy: page(() => import('./routes/verify')) },
   {
     Component: SignedInLayout,
     children: [

@@ -12,4 +12,5 @@ export const paths = {
   people: '/people',
   setPassword: '/set-password',
   outbox: '/outbox',
+  verify: (token: string) => `/verify/${token}`,
 } as const;

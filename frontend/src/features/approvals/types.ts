@@ -57,6 +57,10 @@ export interface Approval {
   statement: string;
   recheckDueAt: string;
   recheckIntervalDays: number;
+  /** The public verification page printed on the certificate; null for approvals signed before signatures were kept. */
+  verificationPath: string | null;
+  /** Set when the owner reopened the machine: the approval no longer stands. */
+  reopened: { at: string; by: string | null; reason: string | null } | null;
 }
 
 export interface Readiness {

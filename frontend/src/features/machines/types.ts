@@ -1,5 +1,5 @@
 export type MachineKind = 'plasma' | 'router' | 'other';
-export type MachineState = 'being-built' | 'awaiting-approval' | 'ready-to-cut' | 'recheck-due' | 'retired';
+export type MachineState = 'being-built' | 'awaiting-approval' | 'ready-to-cut' | 'recheck-due' | 'reopened' | 'retired';
 
 export interface Machine {
   id: string;
@@ -36,6 +36,7 @@ export const STATE_LABELS: Record<MachineState, string> = {
   'awaiting-approval': 'Awaiting approval',
   'ready-to-cut': 'Ready to cut',
   'recheck-due': 'Re-check due',
+  reopened: 'Reopened for changes',
   retired: 'Retired',
 };
 

@@ -3,6 +3,8 @@ import { Box, Button, IconButton, Paper, Stack, Tooltip, Typography } from '@mui
 import ContentCopyOutlined from '@mui/icons-material/ContentCopyOutlined';
 import DownloadOutlined from '@mui/icons-material/DownloadOutlined';
 import VerifiedOutlined from '@mui/icons-material/VerifiedOutlined';
+import FactCheckOutlined from '@mui/icons-material/FactCheckOutlined';
+import { Link as RouterLink } from 'react-router-dom';
 import { palette } from '../../../theme/theme';
 import { dateOnly, dateTime } from '../format';
 import { certificateUrl, type Approval } from '../types';
@@ -19,6 +21,11 @@ export function ApprovalSummary({ machineId, approval, current }: { machineId: s
           <Typography variant="h4" component="p">
             {current ? 'Approved as ready to cut' : 'Last approval (no longer in force)'} by {approval.approvedBy}
           </Typography>
+          {approval.reopened && (
+            <Typography variant="body2" sx={{ color: '#4d2f78' }}>
+              Reopened for changes{approval.reopened.by ? ` by ${approval.reopened.by}` : ''} on {dateTime(approval.reopened.at)}: “{approval.reopened.reason}”
+            </Typography>
+          )}
           <Typography variant="body2" color="text.secondary">
             Signed {dateTime(approval.approvedAt)} · re-check due by {dateOnly(approval.recheckDueAt)} (every {approval.recheckIntervalDays} days)
           </Typography>
@@ -32,12 +39,21 @@ export function ApprovalSummary({ machineId, approval, current }: { machineId: s
             </Tooltip>
           </Stack>
           <Typography variant="caption" color="text.secondary" component="p">
-            A printed certificate is genuine when its record hash matches this one.
+            {approval.verificationPath
+              ? 'The certificate carries an address where anyone can check the owner’s signature against the record as it is kept now.'
+              : 'Signed before signatures were kept: a printed certificate is genuine when its record hash matches this one.'}
           </Typography>
         </Box>
-        <Button variant="outlined" startIcon={<DownloadOutlined />} href={certificateUrl(machineId, approval.id)} download sx={{ flexShrink: 0 }}>
-          Download certificate
-        </Button>
+        <Stack direction={{ xs: 'row', md: 'column' }} useFlexGap sx={{ flexShrink: 0, flexWrap: 'wrap', gap: 1 }}>
+          <Button variant="outlined" startIcon={<DownloadOutlined />} href={certificateUrl(machineId, approval.id)} download>
+            Download certificate
+          </Button>
+          {approval.verificationPath && (
+            <Button variant="text" startIcon={<FactCheckOutlined />} component={RouterLink} to={approval.verificationPath}>
+              Check the signature
+            </Button>
+          )}
+        </Stack>
       </Stack>
     </Paper>
   );

@@ -14,6 +14,7 @@ import { BlockingAlert } from './blocking-alert';
 import { ChecksTable } from './checks-table';
 import { DriftTable } from './drift-table';
 import { ReadinessActions } from './readiness-actions';
+import { ReopenDialog } from './reopen-dialog';
 import { WaiverDialog } from './waiver-dialog';
 
 /** The readiness board: every required check at a glance, and the way to approval. */
@@ -23,6 +24,7 @@ export function ReadinessBoard({ machineId, machineName }: { machineId: string; 
   const request = useRequestApproval(machineId);
   const [waiving, setWaiving] = useState<BoardCheck | null>(null);
   const [approving, setApproving] = useState(false);
+  const [reopening, setReopening] = useState(false);
   const [view, setView] = useState<'checks' | 'drift'>('checks');
 
   if (readiness.isPending) return <LoadingState label="Gathering the checks…" />;
@@ -43,7 +45,7 @@ export function ReadinessBoard({ machineId, machineName }: { machineId: string; 
               {r.counts.within} of {r.counts.total} within target · {r.counts.waived} waived · {r.counts.outside} outside · {r.counts.notStarted} not started — judged against {r.targetSet.name}
             </Typography>
           </Box>
-          <ReadinessActions readiness={r} role={role} requesting={request.isPending} onRequest={() => request.mutate()} onApprove={() => setApproving(true)} />
+          <ReadinessActions readiness={r} role={role} requesting={request.isPending} onRequest={() => request.mutate()} onApprove={() => setApproving(true)} onReopen={() => setReopening(true)} />
         </Stack>
       </Paper>
       {refusal && <BlockingAlert message={refusal.message} blocking={refusedBlocking} onClose={() => request.reset()} />}
@@ -62,6 +64,7 @@ export function ReadinessBoard({ machineId, machineName }: { machineId: string; 
         <EmptyState title="No required checks yet">Add the machine’s rails and axes: each brings its checks to this board.</EmptyState>
       )}
       <WaiverDialog machineId={machineId} check={waiving} onClose={() => setWaiving(null)} />
+      {reopening && r.approval && <ReopenDialog machineId={machineId} machineName={machineName} approval={r.approval} onClose={() => setReopening(false)} />}
       {approving && <ApproveDialog open onClose={() => setApproving(false)} machineName={machineName} readiness={r} />}
     </Stack>
   );

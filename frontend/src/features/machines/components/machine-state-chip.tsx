@@ -6,6 +6,7 @@ const COLORS: Record<MachineState, { bg: string; fg: string }> = {
   'awaiting-approval': { bg: '#fdf0d5', fg: '#6b4a00' },
   'ready-to-cut': { bg: '#dcefe3', fg: '#1d5a35' },
   'recheck-due': { bg: '#fbe3df', fg: '#8a1f16' },
+  reopened: { bg: '#ece4f5', fg: '#4d2f78' },
   retired: { bg: '#ecebe8', fg: '#5b5b57' },
 };
 

@@ -1,0 +1,61 @@
+export type VerificationStatus = 'valid' | 'changed' | 'unsigned' | 'unknown-key';
+
+export interface RecordDifference {
+  /** Where in the signed record, e.g. records["rail-sweep:…"].row.readingsRaw[2]. */
+  path: string;
+  record: { kind: string; id: string } | null;
+  change: 'changed' | 'added' | 'removed';
+  signed: unknown;
+  current: unknown;
+}
+
+/** GET /api/public/verify/:token — the approval printed on a certificate and whether it can be trusted. */
+export interface PublicVerification {
+  approvalId: string;
+  status: VerificationStatus;
+  valid: boolean;
+  unchanged: boolean | null;
+  message: string;
+  signedBy: string;
+  signedAt: string;
+  algorithm: 'Ed25519';
+  keyId: string | null;
+  signedCopyIntact: boolean | null;
+  differences: RecordDifference[];
+  moreDifferences: number;
+  recordHash: string;
+  stands: boolean;
+  reopened: { at: string; by: string | null; reason: string | null } | null;
+  machine: { name: string; kind: string };
+  workshop: string;
+  statement: string;
+  recheckDueAt: string;
+  recheckIntervalDays: number;
+  targetSet: string;
+  checkCount: number;
+  waivedCount: number;
+}
+
+export const verificationKeys = {
+  all: ['verification'] as const,
+  byToken: (token: string) => [...verificationKeys.all, token] as const,
+};
+
+/** Plain names for the kinds of record an approval stands on. */
+export const RECORD_KIND_LABELS: Record<string, string> = {
+  machine: 'Machine specification',
+  rail: 'Rail',
+  axis: 'Axis',
+  waiver: 'Waiver',
+  'rail-sweep': 'Rail sweep',
+  'bolt-down': 'Bolt-down',
+  'travel-trial': 'Travel trial',
+  'positioning-run': 'Repeat-and-reverse run',
+  'diagonal-check': 'Diagonal check',
+  'bed-grid': 'Bed grid',
+  'test-cut': 'Test cut',
+  'safety-walk': 'Safety walk',
+};
+
+export const dateTime = (iso: string) => new Date(iso).toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' });
+export const dateOnly = (iso: string) => new Date(iso).toLocaleDateString(undefined, { dateStyle: 'medium' });
