@@ -31,6 +31,8 @@ const UPLOAD_ROUTE = /^\/api\/evidence\/?(\?|$)/;
 const MULTI_LINE_FIELD = /^(notes?|description|reason|statement|comment|remarks?)$/i;
 const CONTROL = /[\u0000-\u001f\u007f]/;
 const CONTROL_EXCEPT_LINES = /[\u0000-\u0008\u000b\u000c\u000e-\u001f\u007f]/;
+// Half of a surrogate pair alone is not a character: it would be stored as U+FFFD, changing the text.
+const LONE_SURROGATE = /[\ud800-\udbff](?![\udc00-\udfff])|(?<![\ud800-\udbff])[\udc00-\udfff]/;
 
 export interface RequestGuardOptions {
   /** Origins the app is served from (scheme://host[:port]), e.g. the public URL and the dev server. */
@@ -66,16 +68,17 @@ export function registerRequestGuards(fastify: FastifyInstance, options: Request
     if (url.startsWith('/api')) reply.header('cache-control', 'no-store');
     if (!WRITE_METHODS.has(req.method)) return;
     const refusal = crossSiteRefusal(req, allowed) ?? contentTypeRefusal(req);
-    if (refusal) reply.code(refusal.statusCode).send({ statusCode: refusal.statusCode, message: refusal.message });
+    // Returning the reply ends the request here; the handler never runs.
+    if (refusal) return reply.code(refusal.statusCode).send({ statusCode: refusal.statusCode, message: refusal.message });
   });
 
   fastify.addHook('preValidation', async (req, reply) => {
     const found = controlCharacterIn(req.body, '') ?? controlCharacterIn(req.query, '');
     if (found !== null) {
-      reply.code(400).send({
+      return reply.code(400).send({
         statusCode: 400,
         error: 'Bad Request',
-        message: [`${found || 'the body'} must not contain control characters (such as NUL)`],
+        message: [`${found || 'the body'} must not contain control characters (such as NUL) or broken characters`],
       });
     }
   });
@@ -114,7 +117,7 @@ function contentTypeRefusal(req: FastifyRequest): RequestRefusal | null {
 export function controlCharacterIn(value: unknown, path: string, key = ''): string | null {
   if (typeof value === 'string') {
     const pattern = MULTI_LINE_FIELD.test(key) ? CONTROL_EXCEPT_LINES : CONTROL;
-    return pattern.test(value) ? path : null;
+    return pattern.test(value) || LONE_SURROGATE.test(value) ? path : null;
   }
   if (value === null || typeof value !== 'object') return null;
   if (Array.isArray(value)) {
