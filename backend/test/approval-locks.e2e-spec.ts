@@ -134,6 +134,24 @@ describe('an approved machine is read-only while its approval stands', () => {
     expect(axis.body.stepsPerMm).toBe(640);
   });
 
+  it('editing the target set it was judged against names the approved machine and leaves the signed approval as it was', async () => {
+    const machine = await ws.as.viewer.get(`/api/machines/${machineId}`);
+    const setId = machine.body.targetSet.id;
+    const approval = (await board(ws, machineId)).approval!;
+    const before = await ws.as.viewer.get(`/api/machines/${machineId}/approvals/${approval.id}/verification`);
+    expect(before.body.valid).toBe(true);
+    const sets = await ws.as.owner.get('/api/target-sets');
+    const set = sets.body.find((s: { id: string }) => s.id === setId);
+    expect(set.usedBy).toEqual([expect.objectContaining({ id: machineId, name: 'Locked router', state: 'ready-to-cut', approved: true })]);
+    const key = Object.keys(set.targets)[0];
+    const edited = await ws.as.owner.patch(`/api/target-sets/${setId}`).send({ targets: { [key]: { ...set.targets[key], label: undefined, value: set.targets[key].value / 2 } } });
+    expect(edited.status).toBe(200);
+    expect(edited.body.usedBy).toEqual([expect.objectContaining({ id: machineId, approved: true })]);
+    const after = await ws.as.viewer.get(`/api/machines/${machineId}/approvals/${approval.id}/verification`);
+    expect([after.body.valid, after.body.unchanged]).toEqual([true, true]);
+    expect((await board(ws, machineId)).state).toBe('ready-to-cut');
+  });
+
   it('evidence may still be attached while approved, marked as added after approval; before approval it is not', async () => {
     const res = await upload(ws.as.builder, { subjectType: 'machine', subjectId: machineId }, { body: CSV, name: 'after.csv', type: 'text/csv' });
     expect([res.status, res.body.addedAfterApproval]).toEqual([201, true]);

@@ -1,7 +1,7 @@
 import { Inject, Injectable } from '@nestjs/common';
 import { and, asc, eq } from 'drizzle-orm';
 import { DRIZZLE, type Database } from '../database/database.tokens.js';
-import { targetSets, type TargetValue } from '../database/schema/index.js';
+import { machines, targetSets, type TargetValue } from '../database/schema/index.js';
 import type { TargetSetRow } from './target-set.mapper.js';
 
 @Injectable()
@@ -32,5 +32,14 @@ export class TargetSetsRepository {
       .where(and(eq(targetSets.workshopId, workshopId), eq(targetSets.id, id)))
       .returning();
     return row;
+  }
+
+  /** The workshop's machines judged against each target set (one query for every set). */
+  machinesUsing(workshopId: string) {
+    return this.db
+      .select({ targetSetId: machines.targetSetId, id: machines.id, name: machines.name, state: machines.state })
+      .from(machines)
+      .where(eq(machines.workshopId, workshopId))
+      .orderBy(asc(machines.name));
   }
 }

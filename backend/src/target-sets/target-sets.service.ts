@@ -4,7 +4,7 @@ import type { TargetValue } from '../database/schema/target-sets.js';
 import { RecordsService } from '../records/records.service.js';
 import { DEFAULT_TARGET_SETS } from './default-target-sets.js';
 import { TARGET_KEYS, TARGET_UNIT_KIND, targetInBaseUnit, type TargetKey } from './target-keys.js';
-import { toTargetSetResponse, type TargetSetResponse, type TargetSetRow } from './target-set.mapper.js';
+import { toTargetSetResponse, toTargetSetUser, type TargetSetResponse, type TargetSetRow, type TargetSetUser } from './target-set.mapper.js';
 import { TargetSetsRepository } from './target-sets.repository.js';
 import type { CreateTargetSetDto, UpdateTargetSetDto } from './dto/target-set.dto.js';
 
@@ -26,11 +26,19 @@ export class TargetSetsService {
   }
 
   async list(actor: SessionUser): Promise<TargetSetResponse[]> {
-    return (await this.ensureDefaults(actor.workshopId)).map(toTargetSetResponse);
+    const [rows, users] = await Promise.all([this.ensureDefaults(actor.workshopId), this.usersBySet(actor.workshopId)]);
+    return rows.map((row) => toTargetSetResponse(row, users.get(row.id)));
   }
 
   async get(actor: SessionUser, id: string): Promise<TargetSetResponse> {
-    return toTargetSetResponse(await this.findRow(actor.workshopId, id));
+    const [row, users] = await Promise.all([this.findRow(actor.workshopId, id), this.usersBySet(actor.workshopId)]);
+    return toTargetSetResponse(row, users.get(id));
+  }
+
+  private async usersBySet(workshopId: string): Promise<Map<string, TargetSetUser[]>> {
+    const out = new Map<string, TargetSetUser[]>();
+    for (const m of await this.repo.machinesUsing(workshopId)) out.set(m.targetSetId, [...(out.get(m.targetSetId) ?? []), toTargetSetUser(m)]);
+    return out;
   }
 
   async findRow(workshopId: string, id: string): Promise<TargetSetRow> {
@@ -64,7 +72,7 @@ export class TargetSetsService {
       summary: `Target set ${row.name} changed`,
       changes: { before: current.targets, after: row.targets },
     });
-    return toTargetSetResponse(row);
+    return toTargetSetResponse(row, (await this.usersBySet(actor.workshopId)).get(id));
   }
 }
 

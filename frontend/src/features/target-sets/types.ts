@@ -13,6 +13,8 @@ export interface TargetSet {
   description: string;
   targets: Record<string, Target>;
   updatedAt: string;
+  /** Machines judged against this set; `approved` ones keep the values they were signed with. */
+  usedBy: { id: string; name: string; state: string; approved: boolean }[];
 }
 
 export const UNIT_WORDS: Record<TargetUnit, string> = { mm: 'mm', um: 'µm', in: 'in', thou: 'thou', 'mm/m': 'mm/m', '%': '%', days: 'days' };

@@ -1,5 +1,6 @@
 import { useState } from 'react';
 import { Alert, Button, Dialog, DialogActions, DialogContent, DialogTitle, MenuItem, Stack, TextField, Typography } from '@mui/material';
+import { TargetSetUsers } from './target-set-users';
 import { useUpdateTargetSet } from '../api/update-target-set';
 import { unitChoices, UNIT_WORDS, type TargetSet, type TargetUnit } from '../types';
 
@@ -27,6 +28,7 @@ export function EditTargetSetDialog({ set, onClose }: { set: TargetSet; onClose:
       <DialogContent>
         <Stack spacing={2} sx={{ pt: 1 }}>
           {update.error && <Alert severity="error">{update.error.message}</Alert>}
+          <TargetSetUsers set={set} />
           <TextField label="Name" value={name} onChange={(e) => setName(e.target.value)} error={!name.trim()} helperText={!name.trim() ? 'A name is needed' : undefined} />
           {Object.entries(draft).map(([key, d]) => {
             const t = set.targets[key];

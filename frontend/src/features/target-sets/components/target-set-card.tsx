@@ -1,6 +1,7 @@
 import { Box, Button, Chip, Paper, Table, TableBody, TableCell, TableContainer, TableHead, TableRow, Typography } from '@mui/material';
 import EditOutlined from '@mui/icons-material/EditOutlined';
 import { UNIT_WORDS, type TargetSet } from '../types';
+import { TargetSetUsers } from './target-set-users';
 
 /** One target set: every target with its value, unit and where the value came from. */
 export function TargetSetCard({ set, canEdit, onEdit }: { set: TargetSet; canEdit: boolean; onEdit: () => void }) {
@@ -22,6 +23,7 @@ export function TargetSetCard({ set, canEdit, onEdit }: { set: TargetSet; canEdi
           <Chip label="Read only" size="small" variant="outlined" />
         )}
       </Box>
+      <TargetSetUsers set={set} />
       <TableContainer>
         <Table size="small" aria-label={`Targets of ${set.name}`}>
           <TableHead>
