@@ -107,7 +107,7 @@ test.describe('the signed record', () => {
     await expect(verdict).toContainText('Not valid · the record has changed since it was signed');
     const diff = stranger.getByRole('table', { name: 'Differences from the signed record' });
     await expect(diff).toContainText('Machine specification');
-    await expect(diff).toContainText('row.notes');
+    await expect(diff).toContainText('notes');
     await expect(diff).toContainText('Y2 rail re-bedded.');
     await snapAtWidths(stranger, 'verify-changed');
 

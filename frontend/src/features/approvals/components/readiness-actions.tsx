@@ -36,8 +36,8 @@ export function ReadinessActions({ readiness: r, role, requesting, onRequest, on
       )}
       {r.state === 'reopened' && r.approval?.reopened && (
         <Alert severity="info">
-          Reopened for changes{r.approval.reopened.by ? ` by ${r.approval.reopened.by}` : ''} on {dateTime(r.approval.reopened.at)}: “{r.approval.reopened.reason}”. Record what changed, then
-          request approval again.
+          Reopened for changes{r.approval.reopened.by ? ` by ${r.approval.reopened.by}` : ''} on {dateTime(r.approval.reopened.at)}: “{r.approval.reopened.reason?.replace(/[.\s]+$/, '')}”. Record what changed,
+          then request approval again.
         </Alert>
       )}
       {(canRequest || canApprove || canReopen) && (

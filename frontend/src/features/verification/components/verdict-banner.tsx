@@ -28,7 +28,7 @@ export function VerdictBanner({ v }: { v: PublicVerification }) {
         {!v.stands && v.reopened && (
           <Typography sx={{ mt: 1, fontWeight: 600, color: '#4d2f78' }}>
             This approval no longer stands: the machine was reopened for changes on {new Date(v.reopened.at).toLocaleDateString(undefined, { dateStyle: 'medium' })}
-            {v.reopened.by ? ` by ${v.reopened.by}` : ''}. Reason given: “{v.reopened.reason}”.
+            {v.reopened.by ? ` by ${v.reopened.by}` : ''}. Reason given: “{v.reopened.reason?.replace(/[.\s]+$/, '')}”.
           </Typography>
         )}
       </Box>
