@@ -32,6 +32,8 @@ export class AppValidationPipe extends ValidationPipe {
     for (const { key } of lists) sampled[key] = (value[key] as unknown[]).slice(0, SAMPLE);
     const dto = (await super.transform(sampled, metadata)) as Record<string, unknown>;
     for (const { key } of lists) dto[key] = value[key];
+    // A long computation follows: let requests that arrived meanwhile (health checks, page loads) go first.
+    await new Promise((resolve) => setImmediate(resolve));
     return dto;
   }
 }
