@@ -58,7 +58,7 @@ function paths(value: unknown, prefix: (string | number)[] = []): (string | numb
 
 function setAt(body: unknown, path: (string | number)[], value: unknown, drop: boolean): unknown {
   if (path.length === 0) return value;
-  const copy: Record<string | number, unknown> = Array.isArray(body) ? [...body] : { ...(body as object) };
+  const copy = (Array.isArray(body) ? [...body] : { ...(body as object) }) as Record<string | number, unknown>;
   const [head, ...rest] = path;
   if (rest.length === 0 && drop) delete copy[head];
   else copy[head] = setAt(copy[head], rest, value, drop);

@@ -10,10 +10,11 @@ import { canonicalJson } from '../src/approvals/canonical-json.js';
 import { MailService } from '../src/mail/mail.service.js';
 
 const pdfText = (pdf: Buffer) => execFileSync('pdftotext', ['-layout', '-', '-'], { input: pdf }).toString('utf8');
-const binary = (res: NodeJS.ReadableStream, cb: (err: Error | null, body: Buffer) => void) => {
+const binary = (res: unknown, cb: (err: Error | null, body: Buffer) => void) => {
+  const stream = res as NodeJS.ReadableStream;
   const chunks: Buffer[] = [];
-  res.on('data', (c: Buffer) => chunks.push(c));
-  res.on('end', () => cb(null, Buffer.concat(chunks)));
+  stream.on('data', (c: Buffer) => chunks.push(c));
+  stream.on('end', () => cb(null, Buffer.concat(chunks)));
 };
 
 /** Writes straight to the database as its owner, with the approval-lock triggers off: what someone with database access could do. */
