@@ -13,3 +13,4 @@ export * from './bolt-downs.js';
 export * from './approvals.js';
 export * from './password-links.js';
 export * from './sign-in-attempts.js';
+export * from './machine-readiness.js';

@@ -1,3 +1,4 @@
+import { sql } from 'drizzle-orm';
 import { doublePrecision, index, integer, jsonb, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
 import { id, timestamps } from './columns.js';
 import { workshops } from './workshops.js';
@@ -76,5 +77,13 @@ export const railSweeps = pgTable(
     takenAt: timestamp('taken_at', { withTimezone: true }).notNull().defaultNow(),
     ...timestamps,
   },
-  (t) => [index('rail_sweeps_rail_idx').on(t.railId, t.takenAt)],
+  (t) => [
+    index('rail_sweeps_rail_idx').on(t.railId, t.takenAt),
+    // The newest sweep of a rail in one index step, however many it has.
+    index('rail_sweeps_latest_idx').on(t.railId, t.takenAt.desc(), t.createdAt.desc()),
+    // The newest sweep of a rail against each named datum (partner parallelism), also in index steps.
+    index('rail_sweeps_datum_idx')
+      .on(t.railId, sql`lower(${t.datum})`, t.takenAt.desc(), t.createdAt.desc())
+      .where(sql`${t.datum} is not null`),
+  ],
 );

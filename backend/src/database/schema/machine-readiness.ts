@@ -1,0 +1,34 @@
+import { integer, jsonb, pgTable, timestamp, uuid } from 'drizzle-orm/pg-core';
+import { machines } from './machines.js';
+import { workshops } from './workshops.js';
+
+/** The first check that stops approval, as the machines list names it. */
+export interface BlockingCheckRef {
+  key: string;
+  kind: string;
+  subject: string;
+  status: 'not-started' | 'outside-target';
+}
+
+/**
+ * Each machine's readiness counted as the readiness board counts it (waivers applied), kept
+ * current in the transaction of every command that changes what the board would show, so the
+ * machines list reads one row per machine instead of every record behind it.
+ */
+export const machineReadiness = pgTable('machine_readiness', {
+  machineId: uuid('machine_id')
+    .primaryKey()
+    .references(() => machines.id, { onDelete: 'cascade' }),
+  workshopId: uuid('workshop_id')
+    .notNull()
+    .references(() => workshops.id),
+  total: integer('total').notNull(),
+  notStarted: integer('not_started').notNull(),
+  within: integer('within').notNull(),
+  outside: integer('outside').notNull(),
+  waived: integer('waived').notNull(),
+  firstBlocking: jsonb('first_blocking').$type<BlockingCheckRef>(),
+  /** How the counts were made; a start-up with a newer way recounts every machine. */
+  version: integer('version').notNull(),
+  refreshedAt: timestamp('refreshed_at', { withTimezone: true }).notNull().defaultNow(),
+});
