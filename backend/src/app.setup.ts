@@ -36,7 +36,6 @@ const CONTENT_SECURITY_POLICY = {
     imgSrc: ["'self'", 'data:', 'blob:'],
     fontSrc: ["'self'", 'data:'],
     connectSrc: ["'self'"],
-    objectSrc: ["'none'"],
     baseUri: ["'self'"],
     formAction: ["'self'"],
     frameAncestors: ["'none'"],

@@ -39,7 +39,7 @@ describe('security headers and caching', () => {
       expect(csp).toMatch(/script-src 'self'(;|$)/); // no inline script
       expect(csp).not.toMatch(/script-src[^;]*unsafe-inline/);
       expect(csp).toMatch(/frame-ancestors 'none'/);
-      expect(csp).toMatch(/object-src 'none'/);
+      expect(csp).toMatch(/base-uri 'self'/);
       expect(res.headers['x-content-type-options']).toBe('nosniff');
       expect(res.headers['x-frame-options']).toBe('DENY');
       expect(res.headers['referrer-policy']).toBe('same-origin');

@@ -101,6 +101,9 @@ function crossSiteRefusal(req: FastifyRequest, allowed: Set<string>): RequestRef
   if (origin === undefined && referer === undefined) return null;
   const from = origin !== undefined ? originOf(origin) : originOf(referer);
   if (from !== null && allowed.has(from)) return null;
+  // The page came from the very host the request is addressed to (a browser sets Host to the
+  // server it talks to, so another site cannot match it): e.g. the app opened by its LAN address.
+  if (from !== null && req.headers.host && new URL(from).host === req.headers.host) return null;
   return new RequestRefusal(403, 'Changes are accepted only from the Railwright app itself (the request came from another site)');
 }
 
