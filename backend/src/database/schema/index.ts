@@ -14,3 +14,4 @@ export * from './approvals.js';
 export * from './password-links.js';
 export * from './sign-in-attempts.js';
 export * from './machine-readiness.js';
+export * from './hole-patterns.js';

@@ -1,0 +1,51 @@
+import { doublePrecision, index, jsonb, pgTable, text, uuid } from 'drizzle-orm/pg-core';
+import { id, timestamps } from './columns.js';
+import { workshops } from './workshops.js';
+import { machines } from './machines.js';
+
+/** Which corner or edge of the outline is laid against the workpiece's datum. */
+export const PATTERN_REFERENCES = ['bottom-left', 'bottom-right', 'top-left', 'top-right', 'left', 'right', 'bottom', 'top'] as const;
+export type PatternReference = (typeof PATTERN_REFERENCES)[number];
+
+/** Units a pattern may be entered in; holes are kept in mm whatever was typed. */
+export const PATTERN_UNITS = ['mm', 'in'] as const;
+export type PatternUnit = (typeof PATTERN_UNITS)[number];
+
+export const PATTERN_ENTRIES = ['list', 'grid', 'circle'] as const;
+export type PatternEntryKind = (typeof PATTERN_ENTRIES)[number];
+
+/** The pattern as the person entered it, in `unit` (so it can be edited the way it was typed). */
+export type StoredPatternEntry =
+  | { kind: 'list'; holes: { x: number; y: number; diameter: number }[] }
+  | { kind: 'grid'; originX: number; originY: number; rows: number; columns: number; pitchX: number; pitchY: number; diameter: number }
+  | { kind: 'circle'; centreX: number; centreY: number; circleDiameter: number; count: number; startAngleDeg: number; diameter: number };
+
+export interface StoredHole {
+  xMm: number;
+  yMm: number;
+  diameterMm: number;
+}
+
+/**
+ * A drilling pattern of a machine (a bracket's or plate's bolt holes). Coordinates run from the
+ * outline's lower-left corner, x to the right and y upwards, in mm. A shop aid for marking out,
+ * not evidence an approval stands on, so it carries no approval guard.
+ */
+export const holePatterns = pgTable(
+  'hole_patterns',
+  {
+    id: id(),
+    workshopId: uuid('workshop_id').notNull().references(() => workshops.id),
+    machineId: uuid('machine_id').notNull().references(() => machines.id),
+    name: text('name').notNull(),
+    reference: text('reference', { enum: PATTERN_REFERENCES }).notNull(),
+    unit: text('unit', { enum: PATTERN_UNITS }).notNull(),
+    widthMm: doublePrecision('width_mm').notNull(),
+    heightMm: doublePrecision('height_mm').notNull(),
+    entry: jsonb('entry').$type<StoredPatternEntry>().notNull(),
+    holes: jsonb('holes').$type<StoredHole[]>().notNull(),
+    notes: text('notes').notNull().default(''),
+    ...timestamps,
+  },
+  (t) => [index('hole_patterns_machine_idx').on(t.workshopId, t.machineId)],
+);
