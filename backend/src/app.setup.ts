@@ -17,11 +17,14 @@ import { appFilters } from './common/app-filters.js';
 import { AppValidationPipe } from './common/app-validation.pipe.js';
 import { registerRequestGuards } from './common/request-guards.js';
 import { absoluteSessionLifetime } from './common/session-lifetime.js';
+import { refreshSessionsPeriodically } from './common/session-refresh.js';
 import { staticCacheHeaders } from './common/static-cache.js';
 import { loadEvidenceConfig } from './evidence/evidence.config.js';
 
 /** Idle lifetime: the cookie and the stored session expire this long after the last request. */
 const SESSION_IDLE_DAYS = 14;
+/** A session's idle expiry is pushed forward (and stored) at most this often. */
+const SESSION_REFRESH_HOURS = 24;
 /** Absolute lifetime: a session ends this long after sign-in, however active. */
 export const SESSION_ABSOLUTE_DAYS = 30;
 
@@ -72,9 +75,11 @@ export async function configureApp(app: NestFastifyApplication, config: AppConfi
       path: '/',
       maxAge: SESSION_IDLE_DAYS * 24 * 3600 * 1000,
     },
-    rolling: true,
+    // Not on every request: a session is stored again at most once a day (refreshSessionsPeriodically).
+    rolling: false,
   });
   absoluteSessionLifetime(fastify, SESSION_ABSOLUTE_DAYS * 24 * 3600 * 1000);
+  refreshSessionsPeriodically(fastify, SESSION_REFRESH_HOURS * 3600 * 1000);
   // Evidence uploads: one file a request, streamed; the size limit comes from EVIDENCE_MAX_BYTES.
   await app.register(fastifyMultipart as never, { limits: { fileSize: loadEvidenceConfig().maxBytes, files: 1, fields: 10, fieldSize: 4096, parts: 12 } });
   app.useGlobalPipes(

@@ -1,7 +1,7 @@
 import { Inject, Injectable } from '@nestjs/common';
 import { and, asc, desc, eq, inArray, sql } from 'drizzle-orm';
 import { DRIZZLE, type Database } from '../database/database.tokens.js';
-import { boltDownHoles, boltDowns, boltDownWrites } from '../database/schema/index.js';
+import { boltDownHoles, boltDowns, boltDownWrites, rails, recordLocks } from '../database/schema/index.js';
 
 export type BoltDownRow = typeof boltDowns.$inferSelect;
 export type BoltDownHoleRow = typeof boltDownHoles.$inferSelect;
@@ -14,16 +14,29 @@ export interface HoleWrite {
   readingMm: number;
   fixed: boolean;
   actor: { id: string; name: string };
+  /** The hole as it stood before this write (read after the machine was locked). */
+  before: BoltDownHoleRow | null;
+  now: Date;
 }
 
 /**
- * The outcome of a hole write: applied (with the hole as it was before), a repeat of a write
- * already applied, or an id already used for something else.
+ * The outcome of a hole write: applied (with the bolt-down and the hole as written), a repeat of
+ * a write already applied, an id already used for something else, or a bolt-down that got its
+ * final sweep meanwhile.
  */
 export type HoleWriteOutcome =
-  | { kind: 'applied'; before: BoltDownHoleRow | null }
+  | { kind: 'applied'; fixCounter: number; hole: BoltDownHoleRow }
   | { kind: 'repeat' }
-  | { kind: 'id-taken' };
+  | { kind: 'id-taken' }
+  | { kind: 'finished' };
+
+/** A bolt-down with what a hole write needs besides: its rail, a write id seen before, its approval lock. */
+export interface HoleWriteContext {
+  row: BoltDownRow;
+  rail: { label: string; axis: string; lengthMm: number };
+  seen: { workshopId: string; boltDownId: string; target: string } | null;
+  locked: boolean;
+}
 
 @Injectable()
 export class BoltDownsRepository {
@@ -66,51 +79,6 @@ export class BoltDownsRepository {
     return row ?? null;
   }
 
-  /**
-   * Applies one hole write exactly once. The write id goes in first: a second copy of the same
-   * write (a retry after a lost answer, even one racing the first) finds it taken and changes
-   * nothing. The bolt-down row is locked so fixes are numbered in the order they land.
-   */
-  recordHole(workshopId: string, boltDownId: string, write: HoleWrite): Promise<HoleWriteOutcome> {
-    const target = `hole:${write.holeIndex}`;
-    return this.db.transaction(async (tx) => {
-      const [claimed] = await tx
-        .insert(boltDownWrites)
-        .values({ writeId: write.writeId, workshopId, boltDownId, target })
-        .onConflictDoNothing()
-        .returning();
-      if (!claimed) {
-        const [seen] = await tx.select().from(boltDownWrites).where(eq(boltDownWrites.writeId, write.writeId));
-        const same = seen && seen.workshopId === workshopId && seen.boltDownId === boltDownId && seen.target === target;
-        return same ? { kind: 'repeat' } : { kind: 'id-taken' };
-      }
-      await tx.select({ id: boltDowns.id }).from(boltDowns).where(eq(boltDowns.id, boltDownId)).for('update');
-      const [before] = await tx
-        .select()
-        .from(boltDownHoles)
-        .where(and(eq(boltDownHoles.boltDownId, boltDownId), eq(boltDownHoles.holeIndex, write.holeIndex)));
-      const now = new Date();
-      let fixing: Pick<BoltDownHoleRow, 'fixSeq' | 'fixedAt' | 'fixedById' | 'fixedByName'>;
-      if (!write.fixed) fixing = { fixSeq: null, fixedAt: null, fixedById: null, fixedByName: null };
-      else if (before?.fixed) fixing = { fixSeq: before.fixSeq, fixedAt: before.fixedAt, fixedById: write.actor.id, fixedByName: write.actor.name };
-      else {
-        const [counter] = await tx
-          .update(boltDowns)
-          .set({ fixCounter: sql`${boltDowns.fixCounter} + 1` })
-          .where(eq(boltDowns.id, boltDownId))
-          .returning({ seq: boltDowns.fixCounter });
-        fixing = { fixSeq: counter.seq, fixedAt: now, fixedById: write.actor.id, fixedByName: write.actor.name };
-      }
-      const values = { readingRaw: write.readingRaw, readingMm: write.readingMm, fixed: write.fixed, ...fixing, lastWriteId: write.writeId, updatedAt: now };
-      await tx
-        .insert(boltDownHoles)
-        .values({ boltDownId, holeIndex: write.holeIndex, ...values })
-        .onConflictDoUpdate({ target: [boltDownHoles.boltDownId, boltDownHoles.holeIndex], set: values });
-      await tx.update(boltDowns).set({ updatedAt: now }).where(eq(boltDowns.id, boltDownId));
-      return { kind: 'applied', before: before ?? null };
-    });
-  }
-
   /** Links the final sweep unless another one got there first; returns the linked sweep id. */
   async linkFinalSweep(workshopId: string, id: string, sweepId: string): Promise<string | null> {
     await this.db
@@ -118,5 +86,80 @@ export class BoltDownsRepository {
       .set({ finalSweepId: sweepId, updatedAt: new Date() })
       .where(and(eq(boltDowns.workshopId, workshopId), eq(boltDowns.id, id), sql`${boltDowns.finalSweepId} is null`));
     return (await this.find(workshopId, id))?.finalSweepId ?? null;
+  }
+
+  /** One read for a hole write: the bolt-down, its rail's label, the write id if seen, and whether an approval locked it. */
+  async findForHoleWrite(workshopId: string, id: string, writeId: string): Promise<HoleWriteContext | null> {
+    const [found] = await this.db
+      .select({
+        row: boltDowns,
+        rail: { label: rails.label, axis: rails.axis, lengthMm: rails.lengthMm },
+        seen: { workshopId: boltDownWrites.workshopId, boltDownId: boltDownWrites.boltDownId, target: boltDownWrites.target },
+        locked: sql<boolean>`exists (select 1 from ${recordLocks} where ${recordLocks.recordType} = 'bolt-down' and ${recordLocks.recordId} = ${boltDowns.id})`,
+      })
+      .from(boltDowns)
+      .innerJoin(rails, eq(rails.id, boltDowns.railId))
+      .leftJoin(boltDownWrites, eq(boltDownWrites.writeId, writeId))
+      .where(and(eq(boltDowns.workshopId, workshopId), eq(boltDowns.id, id)));
+    return found ? { ...found, seen: found.seen?.target ? found.seen : null } : null;
+  }
+
+  /**
+   * Applies one hole write exactly once, in one statement. The write id goes in first: a second
+   * copy of the same write (a retry after a lost answer, even one racing the first) finds it taken
+   * and changes nothing. Callers lock the machine first, so writers of one bolt-down take turns
+   * and fixes are numbered in the order they land; a bolt-down finished meanwhile is not written.
+   */
+  async writeHole(workshopId: string, boltDownId: string, w: HoleWrite): Promise<HoleWriteOutcome> {
+    const target = `hole:${w.holeIndex}`;
+    const newFix = w.fixed && !w.before?.fixed;
+    const kept = w.fixed && w.before?.fixed ? w.before : null;
+    const fixedAt = !w.fixed ? null : kept ? kept.fixedAt : w.now;
+    const result = await this.db.execute<{ claimed: number; fix_counter: number | null; hole_id: string | null; fix_seq: number | null }>(sql`
+      with claim as (
+        insert into ${boltDownWrites} (write_id, workshop_id, bolt_down_id, target)
+        values (${w.writeId}::uuid, ${workshopId}::uuid, ${boltDownId}::uuid, ${target})
+        on conflict do nothing returning write_id
+      ), b as (
+        update ${boltDowns} set fix_counter = fix_counter + ${newFix ? 1 : 0}::int, updated_at = ${w.now.toISOString()}::timestamptz
+        where id = ${boltDownId}::uuid and final_sweep_id is null and exists (select 1 from claim)
+        returning fix_counter
+      ), h as (
+        insert into ${boltDownHoles} (bolt_down_id, hole_index, reading_raw, reading_mm, fixed, fix_seq, fixed_at, fixed_by_id, fixed_by_name, last_write_id, updated_at)
+        select ${boltDownId}::uuid, ${w.holeIndex}::int, ${w.readingRaw}::float8, ${w.readingMm}::float8, ${w.fixed}::boolean,
+          case when ${newFix}::boolean then b.fix_counter else ${kept?.fixSeq ?? null}::int end,
+          ${fixedAt ? fixedAt.toISOString() : null}::timestamptz, ${w.fixed ? w.actor.id : null}::uuid, ${w.fixed ? w.actor.name : null}::text,
+          ${w.writeId}::uuid, ${w.now.toISOString()}::timestamptz
+        from b
+        on conflict (bolt_down_id, hole_index) do update set reading_raw = excluded.reading_raw, reading_mm = excluded.reading_mm,
+          fixed = excluded.fixed, fix_seq = excluded.fix_seq, fixed_at = excluded.fixed_at, fixed_by_id = excluded.fixed_by_id,
+          fixed_by_name = excluded.fixed_by_name, last_write_id = excluded.last_write_id, updated_at = excluded.updated_at
+        returning id, fix_seq
+      )
+      select (select count(*) from claim)::int as claimed, (select fix_counter from b) as fix_counter,
+        (select id from h) as hole_id, (select fix_seq from h) as fix_seq`);
+    const out = result.rows[0];
+    if (!out.claimed) {
+      const seen = await this.writeSeen(w.writeId);
+      const same = seen && seen.workshopId === workshopId && seen.boltDownId === boltDownId && seen.target === target;
+      return same ? { kind: 'repeat' } : { kind: 'id-taken' };
+    }
+    if (out.hole_id === null || out.fix_counter === null) return { kind: 'finished' };
+    const hole: BoltDownHoleRow = {
+      id: out.hole_id,
+      boltDownId,
+      holeIndex: w.holeIndex,
+      readingRaw: w.readingRaw,
+      readingMm: w.readingMm,
+      fixed: w.fixed,
+      fixSeq: out.fix_seq,
+      fixedAt,
+      fixedById: w.fixed ? w.actor.id : null,
+      fixedByName: w.fixed ? w.actor.name : null,
+      lastWriteId: w.writeId,
+      createdAt: w.before?.createdAt ?? w.now,
+      updatedAt: w.now,
+    };
+    return { kind: 'applied', fixCounter: out.fix_counter, hole };
   }
 }

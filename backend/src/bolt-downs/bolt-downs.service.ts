@@ -7,7 +7,7 @@ import { RailSweepsService } from '../rails/rail-sweeps.service.js';
 import { RailsService } from '../rails/rails.service.js';
 import type { RailRow } from '../rails/rails.repository.js';
 import type { SweepResponse } from '../rails/rail.mapper.js';
-import { RecordsService } from '../records/records.service.js';
+import { lockedRecordConflict, RecordsService } from '../records/records.service.js';
 import { SubjectsRegistry } from '../records/subjects.registry.js';
 import { TargetSetsService } from '../target-sets/target-sets.service.js';
 import { sessionOf, toBoltDownResponse, type BoltDownResponse, type HoleWriteResponse } from './bolt-down.mapper.js';
@@ -85,14 +85,19 @@ export class BoltDownsService implements OnModuleInit {
     return this.respond(actor, row, rail);
   }
 
-  /** Records a reading (and whether the hole is now fixed); a repeated writeId changes nothing. */
+  /**
+   * Records a reading (and whether the hole is now fixed); a repeated writeId changes nothing.
+   * One read of the bolt-down, the machine locked, one read of its holes, one write, one audit:
+   * the answer is built from what was written.
+   */
   async recordHole(actor: SessionUser, id: string, indexParam: string, dto: RecordHoleDto): Promise<HoleWriteResponse> {
-    const { row, rail } = await this.load(actor, id);
+    const found = await this.repo.findForHoleWrite(actor.workshopId, id, dto.writeId);
+    if (!found) throw new NotFoundException('No such bolt-down in this workshop');
+    const { row, rail, seen } = found;
     const holeIndex = parseIndex(indexParam, row.holePositionsMm.length);
     const readingMm = toMm(dto.reading, row.unit);
     if (Math.abs(readingMm) > MAX_READING_MM) throw new BadRequestException([`reading must be within ±${fromMm(MAX_READING_MM, row.unit)} ${row.unit}`]);
     // A repeat of a write already applied answers the same, even once the bolt-down is finished.
-    const seen = await this.repo.writeSeen(dto.writeId);
     if (seen) {
       if (seen.workshopId !== actor.workshopId || seen.boltDownId !== id || seen.target !== `hole:${holeIndex}`) {
         throw new ConflictException('writeId was already used for another write; make a new one for each write');
@@ -101,31 +106,36 @@ export class BoltDownsService implements OnModuleInit {
     }
     // The machine's row before any write: concurrent writers of one bolt-down queue here instead of deadlocking.
     await this.machines.lockForChange(actor, row.machineId);
-    if (row.finalSweepId) throw new ConflictException('This bolt-down is finished and has its final sweep; begin a new bolt-down to re-align the rail');
-    await this.records.assertEditable(RECORD_TYPE, id, 'This bolt-down');
+    if (row.finalSweepId) throw finishedConflict();
+    if (found.locked) throw lockedRecordConflict('This bolt-down');
 
-    const target = sessionOf(row, (await this.repo.holesOf(actor.workshopId, [id])).get(id)!).holes[holeIndex].targetMm;
-    const outcome = await this.repo.recordHole(actor.workshopId, id, { writeId: dto.writeId, holeIndex, readingRaw: dto.reading, readingMm, fixed: dto.fixed, actor });
+    // Read after the lock, so no other writer of this machine can change them before this write.
+    const holes = (await this.repo.holesOf(actor.workshopId, [id])).get(id)!;
+    const before = holes.find((h) => h.holeIndex === holeIndex) ?? null;
+    const target = sessionOf(row, holes).holes[holeIndex].targetMm;
+    const outcome = await this.repo.writeHole(actor.workshopId, id, { writeId: dto.writeId, holeIndex, readingRaw: dto.reading, readingMm, fixed: dto.fixed, actor, before, now: new Date() });
     if (outcome.kind === 'id-taken') throw new ConflictException('writeId was already used for another write; make a new one for each write');
-    if (outcome.kind === 'applied') {
-      const fmt = (mm: number | null) => (mm === null ? 'none yet' : `${signed(fromMm(mm, row.unit))} ${row.unit}`);
-      const at = `hole ${holeIndex + 1} at ${row.holePositionsMm[holeIndex]} mm`;
-      const summary = dto.fixed
-        ? `Rail ${rail.label}: ${at} fixed at ${signed(dto.reading)} ${row.unit} (aim ${fmt(target)})`
-        : outcome.before?.fixed
-          ? `Rail ${rail.label}: ${at} loosened again (reading ${signed(dto.reading)} ${row.unit})`
-          : `Rail ${rail.label}: reading ${signed(dto.reading)} ${row.unit} typed at ${at}`;
-      await this.records.audit(actor, {
-        machineId: row.machineId,
-        recordType: RECORD_TYPE,
-        recordId: id,
-        action: 'updated',
-        summary,
-        changes: { hole: holeIndex, reading: dto.reading, unit: row.unit, fixed: dto.fixed, writeId: dto.writeId },
-      });
-    }
-    const fresh = await this.repo.find(actor.workshopId, id);
-    return { ...(await this.respond(actor, fresh!, rail)), writeId: dto.writeId, repeated: outcome.kind === 'repeat' };
+    if (outcome.kind === 'finished') throw finishedConflict();
+    if (outcome.kind === 'repeat') return { ...(await this.respond(actor, row, rail)), writeId: dto.writeId, repeated: true };
+
+    const fmt = (mm: number | null) => (mm === null ? 'none yet' : `${signed(fromMm(mm, row.unit))} ${row.unit}`);
+    const at = `hole ${holeIndex + 1} at ${row.holePositionsMm[holeIndex]} mm`;
+    const summary = dto.fixed
+      ? `Rail ${rail.label}: ${at} fixed at ${signed(dto.reading)} ${row.unit} (aim ${fmt(target)})`
+      : before?.fixed
+        ? `Rail ${rail.label}: ${at} loosened again (reading ${signed(dto.reading)} ${row.unit})`
+        : `Rail ${rail.label}: reading ${signed(dto.reading)} ${row.unit} typed at ${at}`;
+    await this.records.audit(actor, {
+      machineId: row.machineId,
+      recordType: RECORD_TYPE,
+      recordId: id,
+      action: 'updated',
+      summary,
+      changes: { hole: holeIndex, reading: dto.reading, unit: row.unit, fixed: dto.fixed, writeId: dto.writeId },
+    });
+    const written = [...holes.filter((h) => h.holeIndex !== holeIndex), outcome.hole].sort((a, b) => a.holeIndex - b.holeIndex);
+    const fresh = { ...row, fixCounter: outcome.fixCounter, updatedAt: outcome.hole.updatedAt };
+    return { ...toBoltDownResponse(fresh, written, railInfo(rail)), writeId: dto.writeId, repeated: false };
   }
 
   /**
@@ -170,7 +180,7 @@ export class BoltDownsService implements OnModuleInit {
     return { row, rail: await this.rails.findRow(actor, row.railId) };
   }
 
-  private async respond(actor: SessionUser, row: BoltDownRow, rail: RailRow): Promise<BoltDownResponse> {
+  private async respond(actor: SessionUser, row: BoltDownRow, rail: RailInfo): Promise<BoltDownResponse> {
     const holes = await this.repo.holesOf(actor.workshopId, [row.id]);
     return toBoltDownResponse(row, holes.get(row.id)!, railInfo(rail));
   }
@@ -183,7 +193,11 @@ export class BoltDownsService implements OnModuleInit {
   }
 }
 
-function railInfo(rail: RailRow) {
+type RailInfo = Pick<RailRow, 'label' | 'axis' | 'lengthMm'>;
+
+const finishedConflict = () => new ConflictException('This bolt-down is finished and has its final sweep; begin a new bolt-down to re-align the rail');
+
+function railInfo(rail: RailInfo) {
   return { label: rail.label, axis: rail.axis, lengthMm: rail.lengthMm };
 }
 

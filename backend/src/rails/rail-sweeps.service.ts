@@ -41,7 +41,9 @@ export class RailSweepsService {
    * (`created: false`) and changes nothing.
    */
   async record(actor: SessionUser, railId: string, dto: CreateSweepDto): Promise<{ created: boolean; sweep: SweepResponse }> {
-    const rail = await this.rails.findRow(actor, railId);
+    const found = await this.repo.findRailForSweep(actor.workshopId, railId);
+    if (!found) throw new NotFoundException('No such rail in this workshop');
+    const { rail, targetSetId } = found;
     if (dto.id) {
       const existing = await this.repeatOf(actor, railId, dto.id);
       if (existing) return { created: false, sweep: existing };
@@ -50,16 +52,16 @@ export class RailSweepsService {
     const takenAt = dto.takenAt ? new Date(dto.takenAt) : new Date();
     if (takenAt.getTime() > Date.now() + 5 * 60_000) throw new BadRequestException(['takenAt must not be in the future']);
 
-    const machine = await this.machines.getRef(actor, rail.machineId);
     const positionsMm = dto.stations.map((s) => s.position);
     const readingsRaw = dto.stations.map((s) => s.reading);
     const readingsMm = arrayToMm(readingsRaw, dto.unit);
     const fitted = evaluateStraightness({ positionsMm, readingsMm });
     const result: StoredSweepResult = { leastSquares: line(fitted.leastSquares), minimumZone: line(fitted.minimumZone), endPoint: line(fitted.endPoint) };
-    const { target, base } = await this.targetSets.targetFor(actor.workshopId, machine.targetSetId, 'railStraightness');
+    const { target, base } = await this.targetSets.targetFor(actor.workshopId, targetSetId, 'railStraightness');
     const status = result.leastSquares.straightness <= base ? 'within-target' : 'outside-target';
 
-    const row = await this.repo.insertSweep({
+    const now = new Date();
+    const row = await this.repo.insertSweepFromValues({
       ...(dto.id ? { id: dto.id } : {}),
       workshopId: actor.workshopId,
       machineId: rail.machineId,
@@ -82,6 +84,7 @@ export class RailSweepsService {
       target: { value: target.value, unit: target.unit },
       createdById: actor.id,
       takenAt,
+      createdAt: now,
     });
     if (!row) {
       // Two copies of one save raced; the first one won.

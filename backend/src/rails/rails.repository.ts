@@ -1,7 +1,7 @@
 import { Inject, Injectable } from '@nestjs/common';
 import { and, asc, desc, eq, inArray } from 'drizzle-orm';
 import { DRIZZLE, type Database } from '../database/database.tokens.js';
-import { rails, railSweeps } from '../database/schema/index.js';
+import { machines, rails, railSweeps } from '../database/schema/index.js';
 
 export type RailRow = typeof rails.$inferSelect;
 export type SweepRow = typeof railSweeps.$inferSelect;
@@ -110,5 +110,37 @@ export class RailsRepository {
 
   async deleteSweep(workshopId: string, id: string): Promise<void> {
     await this.db.delete(railSweeps).where(and(eq(railSweeps.workshopId, workshopId), eq(railSweeps.id, id)));
+  }
+
+  /** A rail with its machine's target set, in one read, for recording a sweep on it. */
+  async findRailForSweep(workshopId: string, railId: string): Promise<{ rail: RailRow; targetSetId: string } | null> {
+    const [found] = await this.db
+      .select({ rail: rails, targetSetId: machines.targetSetId })
+      .from(rails)
+      .innerJoin(machines, eq(machines.id, rails.machineId))
+      .where(and(eq(rails.workshopId, workshopId), eq(rails.id, railId)));
+    return found ?? null;
+  }
+
+  /**
+   * Inserts unless the id exists already (a retried save: null). Only the columns the database
+   * fills are sent back; the rest of the row is what was written.
+   */
+  async insertSweepFromValues(values: SweepInsert & { createdAt: Date; takenAt: Date }): Promise<SweepRow | null> {
+    const [made] = await this.db.insert(railSweeps).values(values).onConflictDoNothing({ target: railSweeps.id }).returning({ id: railSweeps.id });
+    if (!made) return null;
+    return {
+      instrument: '',
+      resolution: null,
+      temperatureC: null,
+      boltSize: null,
+      torqueNm: null,
+      datum: null,
+      notes: '',
+      createdById: null,
+      updatedAt: values.createdAt,
+      ...values,
+      id: made.id,
+    } as SweepRow;
   }
 }

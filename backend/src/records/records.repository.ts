@@ -26,6 +26,12 @@ export class RecordsRepository {
     await this.db.insert(auditEntries).values({ at: sql`clock_timestamp()`, ...values });
   }
 
+  /** The audit entry and the machine's last activity in one statement (one round trip per command). */
+  async insertAuditAndTouch(values: typeof auditEntries.$inferInsert & { machineId: string }) {
+    const insert = this.db.insert(auditEntries).values({ at: sql`clock_timestamp()`, ...values });
+    await this.db.execute(sql`with audit as (${insert.getSQL()}) update ${machines} set last_activity_at = now() where ${machines.id} = ${values.machineId}`);
+  }
+
   /** One page of a workshop's (or one machine's) history, newest first; one row more than asked tells there is a next page. */
   historyPage(workshopId: string, f: HistoryFilter) {
     const where: (SQL | undefined)[] = [eq(auditEntries.workshopId, workshopId)];

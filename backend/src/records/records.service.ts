@@ -5,6 +5,11 @@ import type { HistoryQueryDto } from '../history/dto/history-query.dto.js';
 import type { CheckStatus } from './readiness.js';
 import { RecordsRepository } from './records.repository.js';
 
+/** The refusal for a change to a record that an approval was based on. */
+export function lockedRecordConflict(what = 'This record'): ConflictException {
+  return new ConflictException(`${what} is part of an approved commissioning record and can no longer be changed or deleted. Record a new check instead.`);
+}
+
 /** Who an audit entry names: a signed-in person, or (for a failed sign-in) nobody known. */
 export type AuditActor = Pick<SessionUser, 'workshopId' | 'name'> & { id: string | null };
 
@@ -42,7 +47,7 @@ export class RecordsService {
   constructor(private readonly repo: RecordsRepository) {}
 
   async audit(actor: AuditActor, input: AuditInput): Promise<void> {
-    await this.repo.insertAudit({
+    const values = {
       workshopId: actor.workshopId,
       machineId: input.machineId ?? null,
       recordType: input.recordType,
@@ -52,8 +57,9 @@ export class RecordsService {
       changes: input.changes ?? null,
       actorId: actor.id,
       actorName: actor.name,
-    });
-    if (input.machineId) await this.repo.touchMachine(input.machineId);
+    };
+    if (input.machineId) await this.repo.insertAuditAndTouch({ ...values, machineId: input.machineId });
+    else await this.repo.insertAudit(values);
   }
 
   /** Call after saving a check's result: audits it and lets approvals react (e.g. leave ready-to-cut). */
@@ -74,9 +80,7 @@ export class RecordsService {
 
   /** Refuses (409) a change to a record that an approval was based on. */
   async assertEditable(recordType: string, recordId: string, what = 'This record'): Promise<void> {
-    if (await this.repo.lockOf(recordType, recordId)) {
-      throw new ConflictException(`${what} is part of an approved commissioning record and can no longer be changed or deleted. Record a new check instead.`);
-    }
+    if (await this.repo.lockOf(recordType, recordId)) throw lockedRecordConflict(what);
   }
 
   lockedIds(recordType: string, recordIds: string[]): Promise<Set<string>> {

@@ -1,0 +1,105 @@
+import type { NestFastifyApplication } from '@nestjs/platform-fastify';
+import pg from 'pg';
+import { randomUUID } from 'node:crypto';
+import { createTestApp, createTestWorkshop, type TestWorkshop } from './helpers/test-app.js';
+
+/**
+ * How many SQL statements one sweep write and one hole write send to PostgreSQL, counted at the
+ * pg client (session store, transaction control and the command's own statements alike). Before
+ * this was tightened a sweep write took 12 and a hole write 24; the bounds are the counts now, so
+ * a change that adds a round trip to the hot write paths fails here.
+ */
+
+const RAIL = { label: 'X1', axis: 'X', lengthMm: 300, profileSize: 20, holePitchMm: 60, firstHoleMm: 30 };
+
+let statements: string[] = [];
+let counting = false;
+const originalQuery = pg.Client.prototype.query;
+
+function startCounting() {
+  statements = [];
+  counting = true;
+}
+function stopCounting(): string[] {
+  counting = false;
+  return statements;
+}
+
+describe('statements per write', () => {
+  let app: NestFastifyApplication;
+  let ws: TestWorkshop;
+  let railId: string;
+  let boltDownId: string;
+
+  beforeAll(async () => {
+    pg.Client.prototype.query = function (this: pg.Client, ...args: unknown[]) {
+      if (counting) {
+        const q = args[0] as string | { text?: string };
+        statements.push(typeof q === 'string' ? q : (q?.text ?? '?'));
+      }
+      return (originalQuery as (...a: unknown[]) => unknown).apply(this, args);
+    } as typeof pg.Client.prototype.query;
+    app = await createTestApp();
+    ws = await createTestWorkshop(app, 'Statements');
+    const machine = await ws.as.builder.post('/api/machines').send({ name: 'Router', kind: 'router', workArea: { x: 1200, y: 800 } });
+    railId = (await ws.as.builder.post(`/api/machines/${machine.body.id}/rails`).send(RAIL)).body.id;
+    boltDownId = (await ws.as.builder.post(`/api/rails/${railId}/bolt-downs`).send({ mode: 'line', unit: 'mm' })).body.id;
+  });
+  afterAll(async () => {
+    pg.Client.prototype.query = originalQuery;
+    await app.close();
+  });
+
+  const report = (what: string, list: string[]) => {
+    if (process.env.SHOW_STATEMENTS) console.log(`${what}: ${list.length}\n${list.map((s) => `  ${s.replace(/\s+/g, ' ').slice(0, 160)}`).join('\n')}`);
+  };
+
+  it('a sweep write: session read, transaction, record with its audit, nothing read back', async () => {
+    // Warm up once so one-off lookups (e.g. default target sets) are not counted.
+    await ws.as.builder.post(`/api/rails/${railId}/sweeps`).send({ unit: 'mm', phase: 'as-found', stations: [0, 1, 2, 3].map((i) => ({ position: i * 100, reading: i * 0.01 })) });
+    startCounting();
+    const res = await ws.as.builder
+      .post(`/api/rails/${railId}/sweeps`)
+      .send({ unit: 'mm', phase: 'as-found', stations: [0, 1, 2, 3].map((i) => ({ position: i * 100, reading: (i % 2) * 0.01 })) });
+    const list = stopCounting();
+    report('sweep write', list);
+    expect(res.status).toBe(201);
+    // Readiness listeners run between the audit and the commit; they are counted by their own spec.
+    const audit = list.findIndex((s) => /audit_entries/.test(s));
+    const commit = list.lastIndexOf('commit');
+    const own = list.filter((_, i) => i <= audit || i >= commit);
+    report('sweep write without check-recorded listeners', own);
+    expect(list.filter((s) => /audit_entries/.test(s))).toHaveLength(1);
+    expect(list.filter((s) => /^update "machines"/i.test(s.trim()))).toEqual([]);
+    expect(res.body.result.leastSquares.straightness).toBeGreaterThan(0);
+    // The answer comes from what was inserted: no statement reads the new sweep back.
+    expect(list.filter((s) => /^select/i.test(s.trim()) && /from "rail_sweeps"/i.test(s))).toEqual([]);
+    expect(own.length).toBeLessThanOrEqual(9);
+  });
+
+  it('a hole write: the machine locked once, the hole, its audit, the answer from one read of the holes', async () => {
+    await ws.as.builder.put(`/api/bolt-downs/${boltDownId}/holes/0`).send({ reading: 0, fixed: true, writeId: randomUUID() });
+    startCounting();
+    const res = await ws.as.builder.put(`/api/bolt-downs/${boltDownId}/holes/1`).send({ reading: 0.01, fixed: true, writeId: randomUUID() });
+    const list = stopCounting();
+    report('hole write', list);
+    expect(res.status).toBe(200);
+    expect(res.body.fixedCount).toBe(2);
+    expect(res.body.holes[1]).toMatchObject({ fixed: true, readingMm: 0.01 });
+    // The bolt-down row is read once, the machine row locked once.
+    expect(list.filter((s) => /^select/i.test(s.trim()) && /from "bolt_downs"/i.test(s))).toHaveLength(1);
+    expect(list.filter((s) => /from "machines"/i.test(s))).toHaveLength(1);
+    expect(list.filter((s) => /savepoint/i.test(s))).toEqual([]);
+    expect(list.length).toBeLessThanOrEqual(10);
+  });
+
+  it('an authenticated read writes no session row while the session is fresh', async () => {
+    await ws.as.viewer.get('/api/auth/me');
+    startCounting();
+    const res = await ws.as.viewer.get('/api/auth/me');
+    const list = stopCounting();
+    report('GET /api/auth/me', list);
+    expect(res.status).toBe(200);
+    expect(list.filter((s) => /insert into "session"|update "session"/i.test(s))).toEqual([]);
+  });
+});
