@@ -1,10 +1,10 @@
 import { createBrowserRouter, Navigate, RouterProvider } from 'react-router-dom';
 import { paths } from '../config/paths';
-import { SignedInLayout } from './routes/signed-in-layout';
 import { SignInRoute } from './routes/sign-in';
 import { NotFoundRoute } from './routes/not-found';
 
-// Pages load on demand so the sign-in screen stays light.
+// Pages load on demand so the sign-in screen stays light; the signed-in frame (navigation,
+// drawer, tooltips) too, as the sign-in page never shows it.
 const page = (load: () => Promise<{ default: React.ComponentType }>) => async () => ({ Component: (await load()).default });
 
 const router = createBrowserRouter([
@@ -12,7 +12,7 @@ const router = createBrowserRouter([
   { path: paths.setPassword, lazy: page(() => import('./routes/set-password')) },
   { path: '/verify/:token', lazy: page(() => import('./routes/verify')) },
   {
-    Component: SignedInLayout,
+    lazy: async () => ({ Component: (await import('./routes/signed-in-layout')).SignedInLayout }),
     children: [
       { index: true, element: <Navigate to={paths.machines} replace /> },
       { path: paths.people, lazy: page(() => import('./routes/people')) },
@@ -25,6 +25,7 @@ const router = createBrowserRouter([
       { path: '/machines/:machineId/rails/:railId/bolt-down', lazy: page(() => import('./routes/bolt-down')) },
       { path: '/machines/:machineId/axes/:axisId', lazy: page(() => import('./routes/axis')) },
       { path: paths.outbox, lazy: page(() => import('./routes/outbox')) },
+      { path: paths.activity, lazy: page(() => import('./routes/activity')) },
       { path: '*', Component: NotFoundRoute },
     ],
   },

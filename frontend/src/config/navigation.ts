@@ -4,6 +4,7 @@ import CalculateOutlined from '@mui/icons-material/CalculateOutlined';
 import TuneOutlined from '@mui/icons-material/TuneOutlined';
 import GroupOutlined from '@mui/icons-material/GroupOutlined';
 import MarkEmailReadOutlined from '@mui/icons-material/MarkEmailReadOutlined';
+import HistoryOutlined from '@mui/icons-material/HistoryOutlined';
 import type { Role } from '../features/auth/types';
 import { paths } from './paths';
 
@@ -21,6 +22,7 @@ export const NAV_ITEMS: NavItem[] = [
   { label: 'Calculators', path: paths.calculators, icon: CalculateOutlined },
   { label: 'People', path: paths.people, icon: GroupOutlined, roles: ['admin'] },
   { label: 'Outbox', path: paths.outbox, icon: MarkEmailReadOutlined, roles: ['admin'] },
+  { label: 'Activity', path: paths.activity, icon: HistoryOutlined, roles: ['admin', 'owner'] },
 ];
 
 export const navItemsFor = (role: Role) => NAV_ITEMS.filter((i) => !i.roles || i.roles.includes(role));

@@ -12,5 +12,6 @@ export const paths = {
   people: '/people',
   setPassword: '/set-password',
   outbox: '/outbox',
+  activity: '/activity',
   verify: (token: string) => `/verify/${token}`,
 } as const;

@@ -18,17 +18,6 @@ export interface MachineListItem extends Machine {
   checks: { within: number; total: number; outside: number };
 }
 
-export interface HistoryEntry {
-  id: string;
-  at: string;
-  actor: string;
-  recordType: string;
-  recordId: string | null;
-  action: string;
-  summary: string;
-  changes: Record<string, unknown> | null;
-}
-
 export const KIND_LABELS: Record<MachineKind, string> = { plasma: 'Plasma table', router: 'Router', other: 'Other' };
 
 export const STATE_LABELS: Record<MachineState, string> = {

@@ -5,6 +5,8 @@ export interface OutboxMessage {
   to: string[];
   subject: string;
   text: string;
+  /** A set-your-password link was cut out: only its recipient may see it. */
+  linkHidden: boolean;
   attachments: { index: number; filename: string; contentType: string; sizeBytes: number }[];
 }
 

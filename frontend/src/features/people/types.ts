@@ -6,6 +6,8 @@ export interface Person {
   name: string;
   role: Role;
   active: boolean;
+  /** Invited and not signed up yet: only then can the invitation be sent again. */
+  invitationPending: boolean;
   createdAt: string;
 }
 

@@ -1,8 +1,15 @@
-import { queryOptions, useQuery } from '@tanstack/react-query';
+import { infiniteQueryOptions, useInfiniteQuery } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
-import { machineKeys, type HistoryEntry } from '../types';
+import { historyQuery, type HistoryFilters, type HistoryPage } from '../../../components/history/history-types';
+import { machineKeys } from '../types';
 
-export const machineHistoryQueryOptions = (id: string) =>
-  queryOptions({ queryKey: machineKeys.history(id), queryFn: () => api.get<HistoryEntry[]>(`/machines/${id}/history`) });
+export const machineHistoryQueryOptions = (id: string, filters: HistoryFilters) =>
+  infiniteQueryOptions({
+    // Under machineKeys.history(id), so every change that invalidates it refreshes each filtered view.
+    queryKey: [...machineKeys.history(id), filters] as const,
+    queryFn: ({ pageParam }) => api.get<HistoryPage>(`/machines/${id}/history?${historyQuery(filters, pageParam)}`),
+    initialPageParam: null as string | null,
+    getNextPageParam: (last) => last.nextCursor,
+  });
 
-export const useMachineHistory = (id: string) => useQuery(machineHistoryQueryOptions(id));
+export const useMachineHistory = (id: string, filters: HistoryFilters) => useInfiniteQuery(machineHistoryQueryOptions(id, filters));

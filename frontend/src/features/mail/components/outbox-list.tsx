@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { Accordion, AccordionDetails, AccordionSummary, Box, Chip, Link, Stack, Typography } from '@mui/material';
+import { Accordion, Alert, AccordionDetails, AccordionSummary, Box, Chip, Link, Stack, Typography } from '@mui/material';
 import ExpandMoreIcon from '@mui/icons-material/ExpandMore';
 import AttachFileOutlined from '@mui/icons-material/AttachFileOutlined';
 import { LoadingState } from '../../../components/states/loading-state';
@@ -41,6 +41,11 @@ export function OutboxList() {
           </AccordionSummary>
           <AccordionDetails>
             <Typography variant="caption" color="text.secondary" component="p" sx={{ mb: 1 }}>From {m.from}</Typography>
+            {m.linkHidden && (
+              <Alert severity="info" sx={{ mb: 1 }}>
+                Sent to {m.to.join(', ')}, link hidden: a password link is for its recipient alone.
+              </Alert>
+            )}
             <Body text={m.text} />
             {m.attachments.map((a) => (
               <Chip key={a.index} icon={<AttachFileOutlined />} label={`${a.filename} (${Math.ceil(a.sizeBytes / 1024)} kB)`} component="a" href={attachmentUrl(m.id, a.index)} clickable sx={{ mt: 1, mr: 1 }} />

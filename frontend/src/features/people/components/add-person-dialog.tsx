@@ -32,12 +32,9 @@ export function AddPersonDialog({ open, onClose }: { open: boolean; onClose: () 
                 We have e-mailed {done.person.email} a link to choose their password. It works once, until {new Date(done.invitationExpiresAt).toLocaleString()}.
               </Typography>
             ) : (
-              <>
-                <Alert severity="warning">The sign-in mail could not be sent. Give them this link yourself; it works once:</Alert>
-                <Typography component="code" data-testid="invitation-link" sx={{ fontFamily: 'monospace', p: 1.5, bgcolor: '#f1eee6', borderRadius: 1, wordBreak: 'break-all' }}>
-                  {done.invitationLink}
-                </Typography>
-              </>
+              <Alert severity="warning">
+                The sign-in mail to {done.person.email} could not be sent. The link is only ever sent to them: check the mail settings, then use “Send sign-in link” on their row.
+              </Alert>
             )}
           </Stack>
         ) : (

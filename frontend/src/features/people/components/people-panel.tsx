@@ -6,6 +6,9 @@ import { useMe } from '../../auth/api/get-me';
 import { usePeople } from '../api/get-people';
 import { useUpdatePerson } from '../api/update-person';
 import { useResendInvitation } from '../api/resend-invitation';
+import { useResetPassword } from '../api/reset-password';
+import { ResetPasswordDialog } from './reset-password-dialog';
+import type { Person } from '../types';
 import { AddPersonDialog } from './add-person-dialog';
 import { LoadingState } from '../../../components/states/loading-state';
 import { ErrorState } from '../../../components/states/error-state';
@@ -17,7 +20,9 @@ export function PeoplePanel() {
   const me = useMe();
   const update = useUpdatePerson();
   const resend = useResendInvitation();
+  const reset = useResetPassword();
   const [adding, setAdding] = useState(false);
+  const [resetting, setResetting] = useState<Person | null>(null);
 
   if (people.isPending) return <LoadingState label="Loading members…" />;
   if (people.isError) return <ErrorState error={people.error} onRetry={() => people.refetch()} />;
@@ -31,7 +36,19 @@ export function PeoplePanel() {
       </Box>
       {resend.data && (
         <Alert severity={resend.data.invitationSent ? 'success' : 'warning'} sx={{ mb: 2 }} onClose={() => resend.reset()}>
-          {resend.data.invitationSent ? 'A new sign-in link is on its way.' : `The mail could not be sent; pass on this link: ${resend.data.invitationLink}`}
+          {resend.data.invitationSent ? 'A new sign-in link is on its way to them.' : 'The mail could not be sent. Check the mail settings and try again.'}
+        </Alert>
+      )}
+      {reset.data && (
+        <Alert severity={reset.data.resetSent ? 'success' : 'warning'} sx={{ mb: 2 }} onClose={() => reset.reset()}>
+          {reset.data.resetSent
+            ? 'The password was reset: they are signed out everywhere and a link to choose a new one is on its way to their own e-mail.'
+            : 'The password was reset and they are signed out, but the mail could not be sent. Check the mail settings and reset again.'}
+        </Alert>
+      )}
+      {reset.error && (
+        <Alert severity="error" sx={{ mb: 2 }} onClose={() => reset.reset()}>
+          {reset.error.message}
         </Alert>
       )}
       {resend.error && (
@@ -78,9 +95,14 @@ export function PeoplePanel() {
                   <Chip size="small" label={p.active ? 'Active' : 'Deactivated'} color={p.active ? 'success' : 'default'} variant="outlined" />
                 </TableCell>
                 <TableCell align="right">
-                  {p.active && p.id !== me.data?.id && (
+                  {p.active && p.invitationPending && (
                     <Button size="small" onClick={() => resend.mutate(p.id)} disabled={resend.isPending}>
                       Send sign-in link
+                    </Button>
+                  )}
+                  {p.active && !p.invitationPending && (
+                    <Button size="small" onClick={() => setResetting(p)} disabled={reset.isPending}>
+                      Reset password
                     </Button>
                   )}
                   <Button size="small" color={p.active ? 'error' : 'primary'} onClick={() => update.mutate({ id: p.id, active: !p.active })}>
@@ -93,6 +115,14 @@ export function PeoplePanel() {
         </Table>
       </TableContainer>
       <AddPersonDialog open={adding} onClose={() => setAdding(false)} />
+      <ResetPasswordDialog
+        person={resetting}
+        onCancel={() => setResetting(null)}
+        onConfirm={(p) => {
+          setResetting(null);
+          reset.mutate(p.id);
+        }}
+      />
     </>
   );
 }
