@@ -57,6 +57,20 @@ describe('bad text and null in optional fields', () => {
     expect(res.body.message.join(' ')).toMatch(field);
   });
 
+  it('refuses a NUL in an upload caption (a multipart field, not JSON) with 400 naming it, and attaches nothing', async () => {
+    const png = Buffer.from('89504e470d0a1a0a0000000d4948445200000001000000010806000000' + '1f15c4890000000d49444154789c6360000002000154a24f5d0000000049454e44ae426082', 'hex');
+    const before = (await ws.as.viewer.get('/api/evidence').query({ machineId })).body;
+    const res = await ws.as.builder
+      .post('/api/evidence')
+      .field('subjectType', 'machine')
+      .field('subjectId', machineId)
+      .field('caption', 'dial \u0000 set-up')
+      .attach('file', png, 'set-up.png');
+    expect(res.status).toBe(400);
+    expect(JSON.stringify(res.body.message)).toMatch(/caption must not contain control characters/);
+    expect((await ws.as.viewer.get('/api/evidence').query({ machineId })).body).toEqual(before);
+  });
+
   it('null still clears where the field says so (partner rail)', async () => {
     const res = await ws.as.builder.patch(`/api/rails/${railId}`).send({ partnerRailId: null });
     expect(res.status).toBe(200);

@@ -12,6 +12,9 @@ interface PgError {
 const CLIENT_CODES: Record<string, { status: number; message: string }> = {
   '22P02': { status: 400, message: 'A value has the wrong form (for example an id that is not a uuid)' },
   '22003': { status: 400, message: 'A number is out of range' },
+  // Text the database cannot store (NUL, invalid characters): refused before it gets here; a backstop.
+  '22021': { status: 400, message: 'A text holds a character that cannot be stored' },
+  '22P05': { status: 400, message: 'A text holds a character that cannot be stored' },
   '23505': { status: 409, message: 'That record already exists' },
   '23503': { status: 400, message: 'A referenced record does not exist' },
   '23514': { status: 400, message: 'A value breaks a rule of the record' },
@@ -41,6 +44,12 @@ export class DatabaseErrorFilter implements ExceptionFilter {
     const known = code ? CLIENT_CODES[code] : undefined;
     if (known) {
       reply.status(known.status).send({ statusCode: known.status, message: known.message, error: code });
+      return;
+    }
+    // A deadlock or serialization failure that outlived the command's reruns (transaction-context.ts):
+    // the change was not made and can be sent again; never a 500.
+    if (code === '40P01' || code === '40001') {
+      reply.header('retry-after', '1').status(503).send({ statusCode: 503, message: 'Others were changing the same records at that moment; nothing was saved. Send it again.', error: 'Service Unavailable' });
       return;
     }
     // Fastify's own errors (bad JSON, body too large) carry their status.

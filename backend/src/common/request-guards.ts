@@ -116,6 +116,11 @@ function contentTypeRefusal(req: FastifyRequest): RequestRefusal | null {
   return new RequestRefusal(415, `Content-Type ${type} is not accepted here; send application/json`);
 }
 
+/** True when text holds a control character (tab and line breaks allowed when `multiLine`) or half a surrogate pair. */
+export function hasUnshowableCharacter(text: string, multiLine = false): boolean {
+  return (multiLine ? CONTROL_EXCEPT_LINES : CONTROL).test(text) || LONE_SURROGATE.test(text);
+}
+
 /** The path of the first string holding a control character ('' for the body itself), or null. */
 export function controlCharacterIn(value: unknown, path: string, key = ''): string | null {
   if (typeof value === 'string') {
