@@ -17,6 +17,7 @@ import { DrivesModule } from './drives/drives.module.js';
 import { MailModule } from './mail/mail.module.js';
 import { ApprovalsModule } from './approvals/approvals.module.js';
 import { HistoryModule } from './history/history.module.js';
+import { HolePatternsModule } from './hole-patterns/hole-patterns.module.js';
 
 // One line per domain module.
 @Module({
@@ -37,6 +38,7 @@ import { HistoryModule } from './history/history.module.js';
     MailModule,
     ApprovalsModule,
     HistoryModule,
+    HolePatternsModule,
   ],
   providers: [{ provide: APP_INTERCEPTOR, useClass: CommandTransactionInterceptor }],
 })

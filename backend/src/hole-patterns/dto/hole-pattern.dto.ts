@@ -1,0 +1,147 @@
+import { Type } from 'class-transformer';
+import { ArrayMaxSize, ArrayMinSize, IsArray, IsIn, IsInt, IsNumber, IsObject, IsString, Max, MaxLength, Min, MinLength, ValidateIf, ValidateNested } from 'class-validator';
+import { Optional } from '../../common/optional.js';
+import { PATTERN_ENTRIES, PATTERN_REFERENCES, PATTERN_UNITS, type PatternEntryKind, type PatternReference, type PatternUnit } from '../../database/schema/hole-patterns.js';
+
+const FINITE = { allowNaN: false, allowInfinity: false } as const;
+/** Coordinates and sizes are bounded in the entered unit here; the service bounds them in mm. */
+const LIMIT = 100_000;
+export const MAX_HOLES = 1000;
+
+export class HoleDto {
+  @IsNumber(FINITE, { message: 'x must be a number in the pattern unit (from the outline’s left edge)' })
+  @Min(-LIMIT, { message: `x must be within ±${LIMIT}` })
+  @Max(LIMIT, { message: `x must be within ±${LIMIT}` })
+  x: number;
+
+  @IsNumber(FINITE, { message: 'y must be a number in the pattern unit (from the outline’s lower edge)' })
+  @Min(-LIMIT, { message: `y must be within ±${LIMIT}` })
+  @Max(LIMIT, { message: `y must be within ±${LIMIT}` })
+  y: number;
+
+  @IsNumber(FINITE, { message: 'diameter must be a number in the pattern unit' })
+  @Min(0, { message: 'diameter must be greater than 0' })
+  @Max(LIMIT, { message: `diameter must be at most ${LIMIT}` })
+  diameter: number;
+}
+
+export class GridDto {
+  @IsNumber(FINITE, { message: 'originX must be the x of the first hole, in the pattern unit' })
+  @Min(-LIMIT, { message: `originX must be within ±${LIMIT}` })
+  @Max(LIMIT, { message: `originX must be within ±${LIMIT}` })
+  originX: number;
+
+  @IsNumber(FINITE, { message: 'originY must be the y of the first hole, in the pattern unit' })
+  @Min(-LIMIT, { message: `originY must be within ±${LIMIT}` })
+  @Max(LIMIT, { message: `originY must be within ±${LIMIT}` })
+  originY: number;
+
+  @IsInt({ message: 'rows must be a whole number' })
+  @Min(1, { message: 'rows must be at least 1' })
+  @Max(100, { message: 'rows must be at most 100' })
+  rows: number;
+
+  @IsInt({ message: 'columns must be a whole number' })
+  @Min(1, { message: 'columns must be at least 1' })
+  @Max(100, { message: 'columns must be at most 100' })
+  columns: number;
+
+  @IsNumber(FINITE, { message: 'pitchX must be the distance between columns, in the pattern unit' })
+  @Min(0, { message: 'pitchX must not be negative' })
+  @Max(LIMIT, { message: `pitchX must be at most ${LIMIT}` })
+  pitchX: number;
+
+  @IsNumber(FINITE, { message: 'pitchY must be the distance between rows, in the pattern unit' })
+  @Min(0, { message: 'pitchY must not be negative' })
+  @Max(LIMIT, { message: `pitchY must be at most ${LIMIT}` })
+  pitchY: number;
+
+  @IsNumber(FINITE, { message: 'diameter must be a number in the pattern unit' })
+  @Min(0, { message: 'diameter must be greater than 0' })
+  @Max(LIMIT, { message: `diameter must be at most ${LIMIT}` })
+  diameter: number;
+}
+
+export class CircleDto {
+  @IsNumber(FINITE, { message: 'centreX must be the x of the circle’s centre, in the pattern unit' })
+  @Min(-LIMIT, { message: `centreX must be within ±${LIMIT}` })
+  @Max(LIMIT, { message: `centreX must be within ±${LIMIT}` })
+  centreX: number;
+
+  @IsNumber(FINITE, { message: 'centreY must be the y of the circle’s centre, in the pattern unit' })
+  @Min(-LIMIT, { message: `centreY must be within ±${LIMIT}` })
+  @Max(LIMIT, { message: `centreY must be within ±${LIMIT}` })
+  centreY: number;
+
+  @IsNumber(FINITE, { message: 'circleDiameter must be the diameter the hole centres lie on, in the pattern unit' })
+  @Min(0, { message: 'circleDiameter must not be negative' })
+  @Max(LIMIT, { message: `circleDiameter must be at most ${LIMIT}` })
+  circleDiameter: number;
+
+  @IsInt({ message: 'count must be a whole number of holes' })
+  @Min(1, { message: 'count must be at least 1' })
+  @Max(360, { message: 'count must be at most 360' })
+  count: number;
+
+  @IsNumber(FINITE, { message: 'startAngleDeg must be an angle in degrees from the +x direction' })
+  @Min(-360, { message: 'startAngleDeg must be within ±360°' })
+  @Max(360, { message: 'startAngleDeg must be within ±360°' })
+  startAngleDeg: number;
+
+  @IsNumber(FINITE, { message: 'diameter must be a number in the pattern unit' })
+  @Min(0, { message: 'diameter must be greater than 0' })
+  @Max(LIMIT, { message: `diameter must be at most ${LIMIT}` })
+  diameter: number;
+}
+
+/** A pattern as entered: an outline, its reference, and holes as a list, a grid or a bolt circle. */
+export class HolePatternDto {
+  @IsString({ message: 'name must be text, e.g. "Y1 motor bracket"' })
+  @MinLength(1, { message: 'name is required' })
+  @MaxLength(80, { message: 'name must be at most 80 characters' })
+  name: string;
+
+  @IsIn(PATTERN_REFERENCES, { message: `reference must be one of ${PATTERN_REFERENCES.join(', ')}` })
+  reference: PatternReference;
+
+  @IsIn(PATTERN_UNITS, { message: 'unit must be mm or in' })
+  unit: PatternUnit;
+
+  @IsNumber(FINITE, { message: 'width must be the outline’s width, in the pattern unit' })
+  @Min(0, { message: 'width must be greater than 0' })
+  @Max(LIMIT, { message: `width must be at most ${LIMIT}` })
+  width: number;
+
+  @IsNumber(FINITE, { message: 'height must be the outline’s height, in the pattern unit' })
+  @Min(0, { message: 'height must be greater than 0' })
+  @Max(LIMIT, { message: `height must be at most ${LIMIT}` })
+  height: number;
+
+  @IsIn(PATTERN_ENTRIES, { message: 'entry must be list, grid or circle' })
+  entry: PatternEntryKind;
+
+  @ValidateIf((o: HolePatternDto) => o.entry === 'list' || o.holes !== undefined)
+  @IsArray({ message: 'holes must be a list of holes (x, y, diameter) when entry is list' })
+  @ArrayMinSize(1, { message: 'holes must hold at least one hole' })
+  @ArrayMaxSize(MAX_HOLES, { message: `holes must hold at most ${MAX_HOLES} holes` })
+  @ValidateNested({ each: true })
+  @Type(() => HoleDto)
+  holes?: HoleDto[];
+
+  @ValidateIf((o: HolePatternDto) => o.entry === 'grid' || o.grid !== undefined)
+  @IsObject({ message: 'grid must give originX, originY, rows, columns, pitchX, pitchY and diameter when entry is grid' })
+  @ValidateNested()
+  @Type(() => GridDto)
+  grid?: GridDto;
+
+  @ValidateIf((o: HolePatternDto) => o.entry === 'circle' || o.circle !== undefined)
+  @IsObject({ message: 'circle must give centreX, centreY, circleDiameter, count, startAngleDeg and diameter when entry is circle' })
+  @ValidateNested()
+  @Type(() => CircleDto)
+  circle?: CircleDto;
+
+  @Optional()
+  @IsString({ message: 'notes must be text' })
+  @MaxLength(500, { message: 'notes must be at most 500 characters' })
+  notes?: string;
+}

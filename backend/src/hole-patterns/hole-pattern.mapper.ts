@@ -1,0 +1,56 @@
+import type { PatternEntryKind, PatternReference, PatternUnit, StoredHole, StoredPatternEntry } from '../database/schema/hole-patterns.js';
+import type { HolePatternRow } from './hole-patterns.repository.js';
+
+export interface HolePatternResponse {
+  id: string;
+  machineId: string;
+  name: string;
+  reference: PatternReference;
+  unit: PatternUnit;
+  /** Outline in mm; `width`/`height` as entered, in `unit`. */
+  widthMm: number;
+  heightMm: number;
+  width: number;
+  height: number;
+  entry: PatternEntryKind;
+  /** The entry as typed, in `unit`: one of these is set, matching `entry`. */
+  holesEntered: { x: number; y: number; diameter: number }[] | null;
+  grid: Omit<Extract<StoredPatternEntry, { kind: 'grid' }>, 'kind'> | null;
+  circle: Omit<Extract<StoredPatternEntry, { kind: 'circle' }>, 'kind'> | null;
+  /** Every hole centre and diameter, mm, from the outline's lower-left corner. */
+  holes: StoredHole[];
+  notes: string;
+  createdAt: string;
+  updatedAt: string;
+}
+
+export interface PatternPreviewResponse {
+  widthMm: number;
+  heightMm: number;
+  holes: StoredHole[];
+}
+
+const inUnit = (mm: number, unit: PatternUnit) => (unit === 'in' ? Number(((mm * 10) / 254).toFixed(6)) : mm);
+
+export function toHolePatternResponse(row: HolePatternRow): HolePatternResponse {
+  const { kind, ...params } = row.entry;
+  return {
+    id: row.id,
+    machineId: row.machineId,
+    name: row.name,
+    reference: row.reference,
+    unit: row.unit,
+    widthMm: row.widthMm,
+    heightMm: row.heightMm,
+    width: inUnit(row.widthMm, row.unit),
+    height: inUnit(row.heightMm, row.unit),
+    entry: kind,
+    holesEntered: row.entry.kind === 'list' ? row.entry.holes : null,
+    grid: row.entry.kind === 'grid' ? (params as HolePatternResponse['grid']) : null,
+    circle: row.entry.kind === 'circle' ? (params as HolePatternResponse['circle']) : null,
+    holes: row.holes,
+    notes: row.notes,
+    createdAt: row.createdAt.toISOString(),
+    updatedAt: row.updatedAt.toISOString(),
+  };
+}
