@@ -9,6 +9,7 @@ import { seedBoltDowns } from './bolt-downs.js';
 import { seedDrives } from './drives.js';
 import { seedApprovals } from './approvals.js';
 import { seedEvidence } from './evidence.js';
+import { seedHolePatterns } from './hole-patterns.js';
 
 /** The demo workshop, built through the product's own services so results match the engine. */
 export async function runDemoSeed(app: INestApplicationContext): Promise<SeedContext> {
@@ -20,6 +21,7 @@ export async function runDemoSeed(app: INestApplicationContext): Promise<SeedCon
   await seedBoltDowns(ctx);
   await seedDrives(ctx);
   // Each domain adds its demo records here, in dependency order.
+  await seedHolePatterns(ctx);
   await seedEvidence(ctx);
   await seedApprovals(ctx); // last: signs off the router on everything above
   return ctx;

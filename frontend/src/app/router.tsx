@@ -26,6 +26,7 @@ const router = createBrowserRouter([
       { path: '/machines/:machineId/axes/:axisId', lazy: page(() => import('./routes/axis')) },
       { path: paths.outbox, lazy: page(() => import('./routes/outbox')) },
       { path: paths.activity, lazy: page(() => import('./routes/activity')) },
+      { path: '/machines/:machineId/templates/:patternId', lazy: page(() => import('./routes/hole-pattern')) },
       { path: '*', Component: NotFoundRoute },
     ],
   },

@@ -7,6 +7,7 @@ export const paths = {
   rail: (machineId: string, railId: string) => `/machines/${machineId}/rails/${railId}`,
   boltDown: (machineId: string, railId: string) => `/machines/${machineId}/rails/${railId}/bolt-down`,
   axis: (machineId: string, axisId: string) => `/machines/${machineId}/axes/${axisId}`,
+  holePattern: (machineId: string, patternId: string) => `/machines/${machineId}/templates/${patternId}`,
   calculators: '/calculators',
   targetSets: '/target-sets',
   people: '/people',

@@ -15,6 +15,7 @@ import { MachineEvidence } from '../../features/evidence/components/machine-evid
 import { FramePanel } from '../../features/frame/components/frame-panel';
 import { SafetyWalkPanel } from '../../features/safety/components/safety-walk-panel';
 import { DrivesPanel } from '../../features/drives/components/drives-panel';
+import { HolePatternsPanel } from '../../features/hole-patterns/components/hole-patterns-panel';
 
 interface Section {
   id: string;
@@ -30,6 +31,7 @@ const SECTIONS: Section[] = [
   { id: 'drives', label: 'Drives', render: (m) => <DrivesPanel machineId={m.id} /> },
   { id: 'frame', label: 'Frame', render: (m) => <FramePanel machine={m} /> },
   { id: 'safety', label: 'Safety walk', render: (m) => <SafetyWalkPanel machineId={m.id} /> },
+  { id: 'templates', label: 'Templates', render: (m) => <HolePatternsPanel machineId={m.id} /> },
   { id: 'evidence', label: 'Evidence', render: (m) => <MachineEvidence machineId={m.id} /> },
   { id: 'history', label: 'History', render: (m) => <MachineHistory machineId={m.id} /> },
 ];

@@ -1,5 +1,5 @@
 import type { ReactNode } from 'react';
-import { Box, Chip, Paper, Stack, Typography } from '@mui/material';
+import { Box, Button, Chip, Paper, Stack, Typography } from '@mui/material';
 import type { Rail } from '../types';
 
 /** The rail as built: length, profile, hole pitch and every hole position. */
@@ -21,6 +21,7 @@ export function RailGeometry({ rail, partnerLabel, actions }: { rail: Rail; part
         {/* Actions on this rail: edit, delete, and the bolt-down guide. */}
         <Box data-testid="rail-actions" sx={{ display: 'flex', gap: 1, flexWrap: 'wrap' }}>
           {actions}
+          <Button variant="outlined" href={`/api/rails/${rail.id}/template.pdf`} target="_blank" rel="noopener">Print template (PDF)</Button>
         </Box>
       </Box>
       <Stack spacing={0.75} sx={{ mb: 2 }}>
