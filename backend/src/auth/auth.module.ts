@@ -1,6 +1,7 @@
 import { Global, Module } from '@nestjs/common';
 import { APP_GUARD } from '@nestjs/core';
 import { PassportModule } from '@nestjs/passport';
+import { MailModule } from '../mail/mail.module.js';
 import { AuthController } from './auth.controller.js';
 import { AuthRepository } from './auth.repository.js';
 import { AuthService } from './auth.service.js';
@@ -15,7 +16,7 @@ import { PasswordLinksService } from './password-links.service.js';
 
 @Global()
 @Module({
-  imports: [PassportModule.register({ session: false })],
+  imports: [PassportModule.register({ session: false }), MailModule],
   controllers: [AuthController, PasswordLinksController],
   providers: [
     AuthRepository,

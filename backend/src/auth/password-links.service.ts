@@ -1,5 +1,4 @@
-import { GoneException, Injectable, NotFoundException, OnModuleInit } from '@nestjs/common';
-import { ModuleRef } from '@nestjs/core';
+import { GoneException, Injectable, NotFoundException } from '@nestjs/common';
 import { createHash, randomBytes } from 'node:crypto';
 import { loadConfig } from '../config/config.js';
 import { MailService } from '../mail/mail.service.js';
@@ -15,20 +14,13 @@ const hashToken = (token: string) => createHash('sha256').update(token).digest('
 
 /** Set-your-password links: single use, expiring, only their hash stored, mailed to their person only. */
 @Injectable()
-export class PasswordLinksService implements OnModuleInit {
-  private mail: MailService | null = null;
-
+export class PasswordLinksService {
   constructor(
     private readonly repo: PasswordLinksRepository,
     private readonly accounts: AuthRepository,
     private readonly records: RecordsService,
-    private readonly moduleRef: ModuleRef,
+    private readonly mail: MailService,
   ) {}
-
-  onModuleInit() {
-    // The mail module is not a dependency of the (global) auth module; look its service up once.
-    this.mail = this.moduleRef.get(MailService, { strict: false });
-  }
 
   /** A new link for the person; the token itself is returned once, to be mailed, and never stored. */
   async create(userId: string, purpose: 'invitation' | 'reset' = 'invitation'): Promise<{ url: string; expiresAt: Date }> {
@@ -62,10 +54,9 @@ export class PasswordLinksService implements OnModuleInit {
       action: first ? 'first-password-set' : 'password-changed',
       summary: first ? `${found.name} chose their first password` : `${found.name} chose a new password; every earlier session was signed out`,
     });
-    const mail = this.mail;
-    if (mail && !first) {
+    if (!first) {
       const { subject, text } = passwordChangedMail({ name: found.name, workshopName: found.workshopName, at: now });
-      mail.later(() => mail.send({ workshopId: found.workshopId, to: [found.email], subject, text }), 'password-changed mail');
+      this.mail.later(() => this.mail.send({ workshopId: found.workshopId, to: [found.email], subject, text }), 'password-changed mail');
     }
     return { email: found.email };
   }

@@ -1,5 +1,7 @@
 import { SMTPServer } from 'smtp-server';
 import type { AddressInfo } from 'node:net';
+import { mkdir, writeFile } from 'node:fs/promises';
+import path from 'node:path';
 import { randomUUID } from 'node:crypto';
 import { parseMail, type ParsedMail } from './mime-parse.js';
 
@@ -69,7 +71,19 @@ export class FakeSmtpServer {
     });
   }
 
+  /**
+   * Where each caught message is also written as a file (mode 600): in development the person a
+   * password link is for is whoever runs the machine, and the outbox page never shows such links.
+   */
+  mailDrop: string | null = null;
+
   private capture(mail: CapturedMail) {
+    if (this.mailDrop) {
+      const file = path.join(this.mailDrop, `${mail.receivedAt.toISOString().replace(/[:.]/g, '-')}-${mail.id.slice(0, 8)}.eml`);
+      mkdir(this.mailDrop, { recursive: true, mode: 0o700 })
+        .then(() => writeFile(file, mail.raw, { mode: 0o600 }))
+        .catch(() => undefined);
+    }
     this.messages.unshift(mail);
     if (this.messages.length > KEEP) this.messages.length = KEEP;
     for (const w of [...this.waiters]) {

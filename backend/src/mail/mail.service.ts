@@ -1,4 +1,5 @@
 import { Injectable, Logger, OnModuleDestroy, OnModuleInit } from '@nestjs/common';
+import path from 'node:path';
 import nodemailer, { type Transporter } from 'nodemailer';
 import { TransactionContext } from '../database/transaction-context.js';
 import { FakeSmtpServer } from './fake-smtp.server.js';
@@ -39,9 +40,10 @@ export class MailService implements OnModuleInit, OnModuleDestroy {
     }
     if (s.mode === 'fake') {
       this.fake = new FakeSmtpServer();
+      if (process.env.RAILWRIGHT_DATA && !process.env.JEST_WORKER_ID) this.fake.mailDrop = path.join(path.resolve(process.env.RAILWRIGHT_DATA), 'mail');
       const port = await this.fake.start(s.port);
       this.transport = nodemailer.createTransport({ host: '127.0.0.1', port, secure: false, ignoreTLS: true });
-      if (!process.env.JEST_WORKER_ID) this.logger.log(`Mail goes to the local fake SMTP server on 127.0.0.1:${port} (read it on the outbox page)`);
+      if (!process.env.JEST_WORKER_ID) this.logger.log(`Mail goes to the local fake SMTP server on 127.0.0.1:${port} (read it on the outbox page; whole messages, password links included, in ${this.fake.mailDrop ?? 'memory only'})`);
       return;
     }
     this.transport = nodemailer.createTransport({
