@@ -1,4 +1,5 @@
 import type { NestFastifyApplication } from '@nestjs/platform-fastify';
+import fastifyCompress from '@fastify/compress';
 import fastifyCookie from '@fastify/cookie';
 import fastifySession from '@fastify/session';
 import fastifyStatic from '@fastify/static';
@@ -8,6 +9,7 @@ import type { FastifyInstance } from 'fastify';
 import connectPgSimple from 'connect-pg-simple';
 import expressSession from 'express-session';
 import { existsSync } from 'node:fs';
+import { constants as zlibConstants } from 'node:zlib';
 import type pg from 'pg';
 import type { AppConfig } from './config/config.js';
 import { PG_POOL } from './database/database.tokens.js';
@@ -23,6 +25,8 @@ import { loadEvidenceConfig } from './evidence/evidence.config.js';
 
 /** Idle lifetime: the cookie and the stored session expire this long after the last request. */
 const SESSION_IDLE_DAYS = 14;
+/** JSON answers smaller than this go out as they are: compressing them saves less than it costs. */
+const COMPRESS_ABOVE_BYTES = 2048;
 /** A session's idle expiry is pushed forward (and stored) at most this often. */
 const SESSION_REFRESH_HOURS = 24;
 /** Absolute lifetime: a session ends this long after sign-in, however active. */
@@ -59,6 +63,15 @@ export async function configureApp(app: NestFastifyApplication, config: AppConfi
     referrerPolicy: { policy: 'same-origin' },
     crossOriginEmbedderPolicy: false,
     hsts: config.appUrl.startsWith('https://') ? { maxAge: 180 * 24 * 3600 } : false,
+  });
+  // API answers above a size go out compressed (brotli or gzip, as the browser asks). Static files
+  // are served precompressed by @fastify/static; whatever already carries an encoding is left alone.
+  await app.register(fastifyCompress as never, {
+    global: true,
+    threshold: COMPRESS_ABOVE_BYTES,
+    encodings: ['br', 'gzip'],
+    // Fast brotli: on a 2-core server a quality-11 pass over a large answer costs more than it saves.
+    brotliOptions: { params: { [zlibConstants.BROTLI_PARAM_QUALITY]: 4 } },
   });
   const PgStore = connectPgSimple(expressSession as never);
   const store = new PgStore({ pool: app.get<pg.Pool>(PG_POOL), createTableIfMissing: true, pruneSessionInterval: 60 * 15 });

@@ -1,4 +1,4 @@
-import { Body, Controller, HttpCode, Post } from '@nestjs/common';
+import { Body, Controller, HttpCode, Post, Query } from '@nestjs/common';
 import { CalculatorsService } from './calculators.service.js';
 import { BoltDownDto } from './dto/bolt-down.dto.js';
 import { DriveDto } from './dto/drive.dto.js';
@@ -12,15 +12,19 @@ import { TestCutDto } from './dto/test-cut.dto.js';
 import { TravelEnvelopeDto } from './dto/travel-envelope.dto.js';
 import { TravelTrialDto } from './dto/travel-trial.dto.js';
 
-/** Calculations without saving anything: any signed-in role (the global guard refuses anonymous callers). */
+/**
+ * Calculations without saving anything: any signed-in role (the global guard refuses anonymous
+ * callers). Straightness and flatness send each point's residual with `?residuals=true` (and,
+ * unasked, for small inputs only).
+ */
 @Controller('calc')
 export class CalculatorsController {
   constructor(private readonly calc: CalculatorsService) {}
 
   @Post('straightness')
   @HttpCode(200)
-  straightness(@Body() dto: StraightnessDto) {
-    return this.calc.straightness(dto);
+  straightness(@Body() dto: StraightnessDto, @Query('residuals') residuals?: string) {
+    return this.calc.straightness(dto, residuals);
   }
 
   @Post('parallelism')
@@ -37,8 +41,8 @@ export class CalculatorsController {
 
   @Post('flatness')
   @HttpCode(200)
-  flatness(@Body() dto: FlatnessDto) {
-    return this.calc.flatness(dto);
+  flatness(@Body() dto: FlatnessDto, @Query('residuals') residuals?: string) {
+    return this.calc.flatness(dto, residuals);
   }
 
   @Post('drive')

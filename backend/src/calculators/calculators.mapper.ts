@@ -13,18 +13,19 @@ import type { TravelTrialResult } from '../engine/travel-trial.js';
 // Responses of the calculators API. Every length is in mm whatever unit the readings came in;
 // slopes are mm/mm, speeds rpm, feed rates mm/min, angles in the unit their name says.
 
-const line = (r: ReferenceLineResult) => ({
+// Residuals (one per point) only when asked: see residuals-option.ts.
+const line = (r: ReferenceLineResult, residuals: boolean) => ({
   slope: r.slope,
   intercept: r.interceptMm,
   straightness: r.straightnessMm,
-  residuals: r.residualsMm,
+  ...(residuals ? { residuals: r.residualsMm } : {}),
 });
 
-export const toStraightnessResponse = (r: StraightnessResult) => ({
-  leastSquares: line(r.leastSquares),
+export const toStraightnessResponse = (r: StraightnessResult, residuals = true) => ({
+  leastSquares: line(r.leastSquares, residuals),
   // Centre line of the band; the band is the line ± straightness / 2.
-  minimumZone: line(r.minimumZone),
-  endPoint: line(r.endPoint),
+  minimumZone: line(r.minimumZone, residuals),
+  endPoint: line(r.endPoint, residuals),
 });
 
 export const toParallelismResponse = (r: ParallelismResult) => ({
@@ -44,8 +45,8 @@ export const toSquarenessResponse = (r: SquarenessResult) => ({
   warnings: r.warnings,
 });
 
-export const toFlatnessResponse = (r: FlatnessResult) => ({
-  leastSquares: { a: r.a, b: r.b, c: r.cMm, flatness: r.flatnessMm, residuals: r.residualsMm },
+export const toFlatnessResponse = (r: FlatnessResult, residuals = true) => ({
+  leastSquares: { a: r.a, b: r.b, c: r.cMm, flatness: r.flatnessMm, ...(residuals ? { residuals: r.residualsMm } : {}) },
   tilt: {
     xMmPerMetre: r.tiltXMmPerMetre,
     yMmPerMetre: r.tiltYMmPerMetre,

@@ -1,18 +1,17 @@
 import { Injectable } from '@nestjs/common';
 import { boltDownGuide, planHoles } from '../engine/bolt-down.js';
 import { EngineInputError } from '../engine/engine-input-error.js';
-import { evaluateFlatness } from '../engine/flatness.js';
-import { evaluateParallelism } from '../engine/parallelism.js';
 import { evaluatePositioning } from '../engine/positioning.js';
 import { evaluateScrewSpeed } from '../engine/screw-speed.js';
 import { evaluateSquareness } from '../engine/squareness.js';
 import { evaluateDrive } from '../engine/steps-per-mm.js';
-import { evaluateStraightness } from '../engine/straightness.js';
 import { evaluateTestCut } from '../engine/test-cut.js';
 import { evaluateTravelEnvelope } from '../engine/travel-envelope.js';
 import { evaluateTravelTrial } from '../engine/travel-trial.js';
 import { arrayToMm, parseLengthUnit, toMm } from '../engine/units.js';
+import { EnginePool } from '../engine-worker/engine-pool.js';
 import * as map from './calculators.mapper.js';
+import { residualsWanted } from './residuals-option.js';
 import type { BoltDownDto } from './dto/bolt-down.dto.js';
 import type { DriveDto } from './dto/drive.dto.js';
 import type { FlatnessDto } from './dto/flatness.dto.js';
@@ -28,20 +27,23 @@ import type { TravelTrialDto } from './dto/travel-trial.dto.js';
 /**
  * Stateless calculations: converts readings from the request's unit to mm, runs the engine and
  * maps its result. Nothing is stored. Engine input errors become 400s through the global filter.
+ * The calculations that take long lists go through the engine pool (large ones in a worker thread).
  */
 @Injectable()
 export class CalculatorsService {
-  straightness(dto: StraightnessDto) {
+  constructor(private readonly engine: EnginePool) {}
+
+  async straightness(dto: StraightnessDto, residuals?: string) {
     const unit = parseLengthUnit(dto.unit);
-    return map.toStraightnessResponse(
-      evaluateStraightness({ positionsMm: dto.positions, readingsMm: arrayToMm(dto.readings, unit) }),
-    );
+    const withResiduals = residualsWanted(residuals, dto.positions.length);
+    const result = await this.engine.run({ kind: 'straightness', input: { positionsMm: dto.positions, readingsMm: arrayToMm(dto.readings, unit) } });
+    return map.toStraightnessResponse(result, withResiduals);
   }
 
-  parallelism(dto: ParallelismDto) {
+  async parallelism(dto: ParallelismDto) {
     const unit = parseLengthUnit(dto.unit);
     return map.toParallelismResponse(
-      evaluateParallelism({ positionsMm: dto.positions, railAMm: arrayToMm(dto.railA, unit), railBMm: arrayToMm(dto.railB, unit) }),
+      await this.engine.run({ kind: 'parallelism', input: { positionsMm: dto.positions, railAMm: arrayToMm(dto.railA, unit), railBMm: arrayToMm(dto.railB, unit) } }),
     );
   }
 
@@ -57,9 +59,11 @@ export class CalculatorsService {
     );
   }
 
-  flatness(dto: FlatnessDto) {
+  async flatness(dto: FlatnessDto, residuals?: string) {
     const unit = parseLengthUnit(dto.unit);
-    return map.toFlatnessResponse(evaluateFlatness(dto.points.map((p) => ({ xMm: p.x, yMm: p.y, zMm: toMm(p.z, unit) }))));
+    const withResiduals = residualsWanted(residuals, dto.points.length);
+    const result = await this.engine.run({ kind: 'flatness', input: dto.points.map((p) => ({ xMm: p.x, yMm: p.y, zMm: toMm(p.z, unit) })) });
+    return map.toFlatnessResponse(result, withResiduals);
   }
 
   drive(dto: DriveDto) {

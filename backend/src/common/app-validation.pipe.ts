@@ -26,16 +26,21 @@ export class AppValidationPipe extends ValidationPipe {
     if (!type || !isPlainObject(value) || !isDto(type)) return super.transform(value, metadata);
     const tooLong = arrayCapBreach(value, type, '', 0);
     if (tooLong) throw new BadRequestException([tooLong]);
-    const lists = numberListsOf(value, type);
-    if (!lists.length) return super.transform(value, metadata);
-    const sampled = { ...value };
-    for (const { key } of lists) sampled[key] = (value[key] as unknown[]).slice(0, SAMPLE);
-    const dto = (await super.transform(sampled, metadata)) as Record<string, unknown>;
-    for (const { key } of lists) dto[key] = value[key];
+    const long: LongList[] = [];
+    const sampled = compactLongLists(value, type, [], long, 0);
+    if (!long.length) return super.transform(value, metadata);
+    const dto = await super.transform(sampled, metadata);
+    for (const { path, values } of long) putAt(dto, path, values);
     // A long computation follows: let requests that arrived meanwhile (health checks, page loads) go first.
     await new Promise((resolve) => setImmediate(resolve));
     return dto;
   }
+}
+
+/** A long list checked in one pass, where it sits in the body, and its values to put back. */
+interface LongList {
+  path: (string | number)[];
+  values: unknown[];
 }
 
 function isPlainObject(v: unknown): v is Record<string, unknown> {
@@ -84,25 +89,103 @@ function arrayCapBreach(value: Record<string, unknown>, type: Ctor, prefix: stri
   return null;
 }
 
-/** Top-level lists longer than the sample whose rules are only "array of numbers, size bounds". */
-function numberListsOf(value: Record<string, unknown>, type: Ctor): { key: string }[] {
+/**
+ * A copy of the body in which every long list that needs only "finite number" checks is checked
+ * here in one loop and cut to a short sample for class-transformer and class-validator (which
+ * still see the sample, so their messages for the rest of the body are unchanged). Two shapes
+ * qualify: a list of numbers (`positions`, also inside nested objects like `runs[i].deviations`),
+ * and a list of objects whose every field is a finite number (`points: [{x, y, z}]`).
+ */
+function compactLongLists(value: Record<string, unknown>, type: Ctor, path: (string | number)[], out: LongList[], depth: number): Record<string, unknown> {
+  if (depth > 4) return value;
+  let copy: Record<string, unknown> | null = null;
+  const set = (key: string, v: unknown) => ((copy ??= { ...value })[key] = v);
+  for (const [key, metas] of metadatasByKey(type)) {
+    const v = value[key];
+    if (Array.isArray(v) && v.length > SAMPLE && isNumberList(metas)) {
+      checkNumbers(v, key, metas, `${[...path, key].join('.')}`);
+      out.push({ path: [...path, key], values: v });
+      set(key, v.slice(0, SAMPLE));
+      continue;
+    }
+    const nested = metas.some((m) => m.type === 'nestedValidation') ? nestedType(type, key) : null;
+    if (!nested || v === null || typeof v !== 'object') continue;
+    const fields = numberFieldsOf(nested);
+    if (Array.isArray(v) && v.length > SAMPLE && fields && metas.every((m) => m.type === 'nestedValidation' || (m.name !== undefined && OBJECT_LIST_RULES.has(m.name)))) {
+      checkNumberObjects(v, key, fields, nested);
+      out.push({ path: [...path, key], values: v });
+      set(key, v.slice(0, SAMPLE));
+      continue;
+    }
+    const items = Array.isArray(v) ? v : [v];
+    const compacted = items.map((item, i) =>
+      isPlainObject(item) ? compactLongLists(item, nested, Array.isArray(v) ? [...path, key, i] : [...path, key], out, depth + 1) : item,
+    );
+    if (compacted.some((c, i) => c !== items[i])) set(key, Array.isArray(v) ? compacted : compacted[0]);
+  }
+  return copy ?? value;
+}
+
+// Rules a list of numeric objects may carry for the one-pass check to be equivalent.
+const OBJECT_LIST_RULES = new Set(['isArray', 'arrayMaxSize', 'arrayMinSize', 'isObject', 'isDefined']);
+
+function metadatasByKey(type: Ctor): Map<string, ValidationMetadata[]> {
   const byKey = new Map<string, ValidationMetadata[]>();
   for (const m of metadatasOf(type)) byKey.set(m.propertyName, [...(byKey.get(m.propertyName) ?? []), m]);
-  const lists: { key: string }[] = [];
-  for (const [key, metas] of byKey) {
-    const v = value[key];
-    if (!Array.isArray(v) || v.length <= SAMPLE) continue;
-    if (!metas.every((m) => m.name !== undefined && LIST_RULES.has(m.name))) continue;
-    const numberRule = metas.find((m) => m.name === 'isNumber' && m.each);
-    if (!numberRule) continue;
-    for (let i = 0; i < v.length; i++) {
-      const x = v[i];
-      if (typeof x !== 'number' || !Number.isFinite(x)) {
-        const msg = typeof numberRule.message === 'string' ? numberRule.message : `every value in ${key} must be a finite number`;
-        throw new BadRequestException([`${msg} (${key}[${i}])`]);
-      }
+  return byKey;
+}
+
+function isNumberList(metas: ValidationMetadata[]): boolean {
+  return metas.every((m) => m.name !== undefined && LIST_RULES.has(m.name)) && metas.some((m) => m.name === 'isNumber' && m.each);
+}
+
+function messageOf(m: ValidationMetadata | undefined, fallback: string): string {
+  return typeof m?.message === 'string' ? m.message : fallback;
+}
+
+function checkNumbers(v: unknown[], key: string, metas: ValidationMetadata[], where: string) {
+  const rule = metas.find((m) => m.name === 'isNumber' && m.each);
+  for (let i = 0; i < v.length; i++) {
+    const x = v[i];
+    if (typeof x !== 'number' || !Number.isFinite(x)) {
+      throw new BadRequestException([`${messageOf(rule, `every value in ${key} must be a finite number`)} (${where}[${i}])`]);
     }
-    lists.push({ key });
   }
-  return lists;
+}
+
+/** The fields of a DTO whose only rule is "a finite number" (each required), or null if it has other rules. */
+function numberFieldsOf(type: Ctor): Map<string, ValidationMetadata> | null {
+  const fields = new Map<string, ValidationMetadata>();
+  for (const [key, metas] of metadatasByKey(type)) {
+    const rule = metas.find((m) => m.name === 'isNumber' && !m.each);
+    if (!rule || metas.length !== 1) return null;
+    const c = rule.constraints?.[0] as { allowNaN?: boolean; allowInfinity?: boolean } | undefined;
+    if (c?.allowNaN || c?.allowInfinity) return null;
+    fields.set(key, rule);
+  }
+  return fields.size ? fields : null;
+}
+
+function checkNumberObjects(v: unknown[], key: string, fields: Map<string, ValidationMetadata>, type: Ctor) {
+  const names = [...fields.keys()];
+  const shape = `{${names.join(', ')}}`;
+  for (let i = 0; i < v.length; i++) {
+    const item = v[i];
+    if (!isPlainObject(item)) throw new BadRequestException([`every entry of ${key} must be ${shape} (${key}[${i}])`]);
+    for (const name of names) {
+      const x = item[name];
+      if (typeof x !== 'number' || !Number.isFinite(x)) throw new BadRequestException([`${key}.${i}.${messageOf(fields.get(name), `${name} must be a finite number`)}`]);
+    }
+    // The pipe refuses fields the DTO does not name (forbidNonWhitelisted): so does this check.
+    for (const extra in item) {
+      if (!fields.has(extra)) throw new BadRequestException([`${key}.${i}.property ${extra} should not exist`]);
+    }
+  }
+  void type;
+}
+
+function putAt(target: unknown, path: (string | number)[], values: unknown[]) {
+  let at = target as Record<string | number, unknown>;
+  for (const step of path.slice(0, -1)) at = at[step] as Record<string | number, unknown>;
+  at[path[path.length - 1]] = values;
 }
