@@ -1,21 +1,24 @@
-import type { ReactNode } from 'react';
+import { lazy, Suspense, type ReactNode } from 'react';
 import { useParams, useSearchParams } from 'react-router-dom';
 import { Box, Tab, Tabs } from '@mui/material';
 import { PageHeader } from '../../components/layout/page-header';
 import { LoadingState } from '../../components/states/loading-state';
 import { ErrorState } from '../../components/states/error-state';
 import { useMachine } from '../../features/machines/api/get-machine';
-import { MachineOverview } from '../../features/machines/components/machine-overview';
-import { MachineHistory } from '../../features/machines/components/machine-history';
 import { MachineStateChip } from '../../features/machines/components/machine-state-chip';
 import { KIND_LABELS, type Machine } from '../../features/machines/types';
-import { ReadinessBoard } from '../../features/approvals/components/readiness-board';
-import { RailsPanel } from '../../features/rails/components/rails-panel';
-import { MachineEvidence } from '../../features/evidence/components/machine-evidence';
-import { FramePanel } from '../../features/frame/components/frame-panel';
-import { SafetyWalkPanel } from '../../features/safety/components/safety-walk-panel';
-import { DrivesPanel } from '../../features/drives/components/drives-panel';
-import { HolePatternsPanel } from '../../features/hole-patterns/components/hole-patterns-panel';
+
+// Each tab's code loads when the tab opens: the file opens on readiness without the charts,
+// grids and forms of the other tabs.
+const ReadinessBoard = lazy(() => import('../../features/approvals/components/readiness-board').then((m) => ({ default: m.ReadinessBoard })));
+const MachineOverview = lazy(() => import('../../features/machines/components/machine-overview').then((m) => ({ default: m.MachineOverview })));
+const RailsPanel = lazy(() => import('../../features/rails/components/rails-panel').then((m) => ({ default: m.RailsPanel })));
+const DrivesPanel = lazy(() => import('../../features/drives/components/drives-panel').then((m) => ({ default: m.DrivesPanel })));
+const FramePanel = lazy(() => import('../../features/frame/components/frame-panel').then((m) => ({ default: m.FramePanel })));
+const SafetyWalkPanel = lazy(() => import('../../features/safety/components/safety-walk-panel').then((m) => ({ default: m.SafetyWalkPanel })));
+const MachineEvidence = lazy(() => import('../../features/evidence/components/machine-evidence').then((m) => ({ default: m.MachineEvidence })));
+const HolePatternsPanel = lazy(() => import('../../features/hole-patterns/components/hole-patterns-panel').then((m) => ({ default: m.HolePatternsPanel })));
+const MachineHistory = lazy(() => import('../../features/machines/components/machine-history').then((m) => ({ default: m.MachineHistory })));
 
 interface Section {
   id: string;
@@ -61,7 +64,7 @@ export default function MachineFileRoute() {
           ))}
         </Tabs>
       </Box>
-      {section.render(m)}
+      <Suspense fallback={<LoadingState label={`Opening ${section.label.toLowerCase()}…`} />}>{section.render(m)}</Suspense>
     </>
   );
 }

@@ -1,5 +1,6 @@
 import { useState, type FormEvent } from 'react';
-import { Alert, Box, Button, Stack, TextField, Typography } from '@mui/material';
+import { Alert, Box, Button, Stack, Typography } from '@mui/material';
+import { LightTextField } from '../../../components/form/light-text-field';
 import { useLogin } from '../api/login';
 
 export function SignInForm({ onSignedIn }: { onSignedIn: () => void }) {
@@ -23,7 +24,7 @@ export function SignInForm({ onSignedIn }: { onSignedIn: () => void }) {
             {login.error.message}
           </Alert>
         )}
-        <TextField
+        <LightTextField
           label="E-mail"
           type="email"
           autoComplete="username"
@@ -31,16 +32,14 @@ export function SignInForm({ onSignedIn }: { onSignedIn: () => void }) {
           onChange={(e) => setEmail(e.target.value)}
           required
           autoFocus
-          fullWidth
         />
-        <TextField
+        <LightTextField
           label="Password"
           type="password"
           autoComplete="current-password"
           value={password}
           onChange={(e) => setPassword(e.target.value)}
           required
-          fullWidth
         />
         <Button type="submit" variant="contained" size="large" disabled={login.isPending || !email || !password}>
           {login.isPending ? 'Signing in…' : 'Sign in'}

@@ -1,3 +1,4 @@
+import { memo } from 'react';
 import { Box, Button, InputAdornment, MenuItem, Stack, TextField, ToggleButton, ToggleButtonGroup, Typography } from '@mui/material';
 import type { BoltTorques, SweepPhase } from '../types';
 import type { SweepDraft } from '../hooks/use-sweep-draft';
@@ -5,7 +6,8 @@ import type { SweepDraft } from '../hooks/use-sweep-draft';
 type Details = Pick<SweepDraft, 'instrument' | 'resolution' | 'temperatureC' | 'phase' | 'takenBy' | 'boltSize' | 'torqueNm' | 'datum' | 'notes'>;
 
 /** What a sweep records besides the readings: instrument, temperature, phase, who, bolts, datum. */
-export function SweepDetailsFields({
+// Memoised: typing a reading does not re-render these fields (value is memoised by the form).
+export const SweepDetailsFields = memo(function SweepDetailsFields({
   value,
   unitLabel,
   torques,
@@ -84,4 +86,4 @@ export function SweepDetailsFields({
       <TextField label="Notes" value={value.notes} onChange={(e) => onChange({ notes: e.target.value })} multiline minRows={2} />
     </Stack>
   );
-}
+});

@@ -1,4 +1,4 @@
-import { useMemo, useRef, useState } from 'react';
+import { useCallback, useDeferredValue, useMemo, useRef, useState } from 'react';
 import { Alert, Box, Button, Grid, InputAdornment, MenuItem, Paper, Stack, TextField, ToggleButton, ToggleButtonGroup, Typography } from '@mui/material';
 import FileUploadOutlined from '@mui/icons-material/FileUploadOutlined';
 import { fromMm, UNIT_LABELS, type LengthUnit } from '../../../lib/units';
@@ -6,7 +6,7 @@ import { useBoltTorques } from '../api/get-bolt-torques';
 import { useRecordSweep } from '../api/record-sweep';
 import { useStraightnessPreview } from '../api/preview-straightness';
 import { useDebounced } from '../hooks/use-debounced';
-import { newDraft, useSweepDraft, type SweepDraft } from '../hooks/use-sweep-draft';
+import { newDraft, useSweepDraft, type StationDraft, type SweepDraft } from '../hooks/use-sweep-draft';
 import type { Rail, Sweep, TargetValue } from '../types';
 import { readyStations, stationsAtHoles, stationsByStep } from '../utils/stations';
 import { CsvImportDialog } from './csv-import-dialog';
@@ -26,12 +26,31 @@ export function SweepEntry({ rail, target, takenBy, onSaved }: { rail: Rail; tar
   const saveRef = useRef<HTMLButtonElement>(null);
   const torques = useBoltTorques();
   const record = useRecordSweep(rail.id);
-  const patch = (p: Partial<SweepDraft>) => setDraft((d) => ({ ...d, ...p }));
+  // Stable callbacks (setDraft keeps its identity), so memoised rows and fields skip re-rendering.
+  const patch = useCallback((p: Partial<SweepDraft>) => setDraft((d) => ({ ...d, ...p })), [setDraft]);
+  const setRow = useCallback(
+    (i: number, p: Partial<StationDraft>) => setDraft((d) => ({ ...d, stations: d.stations.map((r, k) => (k === i ? { ...r, ...p } : r)) })),
+    [setDraft],
+  );
+  const dropRow = useCallback((i: number) => setDraft((d) => ({ ...d, stations: d.stations.filter((_, k) => k !== i) })), [setDraft]);
+  const focusSave = useCallback(() => saveRef.current?.focus(), []);
 
   const ready = useMemo(() => readyStations(draft.stations), [draft.stations]);
-  const body = ready.stations.length >= 3 && ready.problems.size === 0 ? { positions: ready.stations.map((s) => s.position), readings: ready.stations.map((s) => s.reading), unit: draft.unit } : null;
-  const preview = useStraightnessPreview(useDebounced(body));
+  const body = useMemo(
+    () => (ready.stations.length >= 3 && ready.problems.size === 0 ? { positions: ready.stations.map((s) => s.position), readings: ready.stations.map((s) => s.reading), unit: draft.unit } : null),
+    [ready, draft.unit],
+  );
+  // The fit is asked for once typing pauses; the chart draws the same settled readings, at low
+  // priority (deferred), so a keystroke never waits for the chart.
+  const settled = useDebounced(body);
+  const preview = useStraightnessPreview(settled);
   const result = preview.data?.result ?? null;
+  const chartPoints = useDeferredValue(useMemo(() => (settled ? settled.positions.map((position, k) => ({ position, reading: settled.readings[k] })) : []), [settled]));
+  const chartResult = useDeferredValue(body && settled ? result : null);
+  const details = useMemo(
+    () => ({ instrument: draft.instrument, resolution: draft.resolution, temperatureC: draft.temperatureC, phase: draft.phase, takenBy: draft.takenBy, boltSize: draft.boltSize, torqueNm: draft.torqueNm, datum: draft.datum, notes: draft.notes }),
+    [draft.instrument, draft.resolution, draft.temperatureC, draft.phase, draft.takenBy, draft.boltSize, draft.torqueNm, draft.datum, draft.notes],
+  );
   // Residuals back onto the rows they belong to (rows without a reading have none).
   const residuals = useMemo(() => {
     if (!preview.data) return undefined;
@@ -104,14 +123,14 @@ export function SweepEntry({ rail, target, takenBy, onSaved }: { rail: Rail; tar
       <Grid container spacing={2.5}>
         {/* On a narrow screen the chart comes first, so it stays in view above the readings being typed. */}
         <Grid size={{ xs: 12, md: 6 }} sx={{ order: { xs: 2, md: 1 } }}>
-          <StationReadings rows={draft.stations} unit={draft.unit} problems={ready.problems} residuals={residuals} onChange={(stations) => patch({ stations })} onLastEnter={() => saveRef.current?.focus()} />
+          <StationReadings rows={draft.stations} unit={draft.unit} problems={ready.problems} residuals={residuals} onRowChange={setRow} onDrop={dropRow} onLastEnter={focusSave} />
         </Grid>
         <Grid size={{ xs: 12, md: 6 }} sx={{ order: { xs: 1, md: 2 } }}>
-          <SweepPreview points={ready.stations} unit={draft.unit} result={body ? result : null} target={target} label="Live straightness chart" pending={preview.isFetching} />
+          <SweepPreview points={chartPoints} unit={settled?.unit ?? draft.unit} result={chartResult} target={target} label="Live straightness chart" pending={preview.isFetching} />
           {preview.error && <Alert severity="error" sx={{ mt: 1 }}>{preview.error.message}</Alert>}
         </Grid>
         <Grid size={12} sx={{ order: 3 }}>
-          <SweepDetailsFields value={draft} unitLabel={UNIT_LABELS[draft.unit]} torques={torques.data} onChange={patch} />
+          <SweepDetailsFields value={details} unitLabel={UNIT_LABELS[draft.unit]} torques={torques.data} onChange={patch} />
         </Grid>
       </Grid>
       <Box sx={{ display: 'flex', gap: 2, alignItems: 'center', flexWrap: 'wrap', mt: 2.5 }}>

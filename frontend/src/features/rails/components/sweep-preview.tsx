@@ -1,12 +1,16 @@
-import { Alert, Box, Stack, Typography } from '@mui/material';
+import { memo } from 'react';
+import { Box, Stack, Typography } from '@mui/material';
 import { StraightnessChart } from '../../../components/charts/straightness-chart';
 import { fromMm, UNIT_LABELS, type LengthUnit } from '../../../lib/units';
 import type { StraightnessResult, TargetValue } from '../types';
 import { showInTargetUnit, showLength, showTarget, targetMm } from '../utils/display';
 import { CheckStatusChip } from './check-status-chip';
 
-/** Readings with their fitted line and band, in the entry unit, and the result against the target. */
-export function SweepPreview({
+/**
+ * Readings with their fitted line and band, in the entry unit, and the result against the target.
+ * Memoised: the chart is the costliest thing on the entry form and redraws only when its data does.
+ */
+export const SweepPreview = memo(function SweepPreview({
   points,
   unit,
   result,
@@ -69,7 +73,10 @@ export function SweepPreview({
         )}
         {status && <CheckStatusChip status={status} />}
       </Stack>
-      {pending && <Alert severity="info" variant="outlined" sx={{ py: 0 }}>Updating…</Alert>}
+      {/* Always takes its line, so the readings below (on a phone) do not jump while a fit runs. */}
+      <Typography variant="body2" color="text.secondary" role="status" sx={{ minHeight: '1.5em', visibility: pending ? 'visible' : 'hidden' }}>
+        Updating the fit…
+      </Typography>
     </Stack>
   );
-}
+});

@@ -1,4 +1,5 @@
 import { useEffect, useState } from 'react';
+import { readDraft, saveDraftSoon } from '../../../lib/draft-storage';
 import type { LengthUnit } from '../../../lib/units';
 import type { SweepPhase } from '../types';
 import { clientId } from '../utils/client-id';
@@ -41,23 +42,20 @@ export const newDraft = (stations: StationDraft[], keep?: Partial<SweepDraft>): 
 
 const key = (railId: string) => `railwright.sweep-draft.${railId}`;
 
-/** The sweep being typed, kept in the browser so a reload or a dropped tab loses no reading. */
+/**
+ * The sweep being typed, kept in the browser so a reload or a dropped tab loses no reading.
+ * Saved a few times a second at most (lib/draft-storage.ts), and at once when the page is left.
+ */
 export function useSweepDraft(railId: string, initial: () => SweepDraft) {
   const [draft, setDraft] = useState<SweepDraft>(() => {
     try {
-      const saved = localStorage.getItem(key(railId));
+      const saved = readDraft(key(railId));
       if (saved) return JSON.parse(saved) as SweepDraft;
     } catch {
       // A broken saved draft is dropped; the new one starts clean.
     }
     return initial();
   });
-  useEffect(() => {
-    try {
-      localStorage.setItem(key(railId), JSON.stringify(draft));
-    } catch {
-      // Storage full or blocked: the draft still lives in memory.
-    }
-  }, [railId, draft]);
+  useEffect(() => saveDraftSoon(key(railId), JSON.stringify(draft)), [railId, draft]);
   return [draft, setDraft] as const;
 }
