@@ -1,39 +1,33 @@
 import { Injectable } from '@nestjs/common';
 import type { SessionUser } from '../auth/session-user.js';
 import { MachinesService } from '../machines/machines.service.js';
-import { ReadinessRegistry } from '../records/readiness.registry.js';
-import { TargetSetsService } from '../target-sets/target-sets.service.js';
+import { ReadinessSummaryService } from '../records/readiness-summary.service.js';
 import { ApprovalsRepository } from './approvals.repository.js';
-import { blockingOf, boardChecks } from './board.js';
 import type { ApprovalSnapshot, BoardCheck } from './snapshot.js';
 
 export type BoardMachine = Awaited<ReturnType<MachinesService['getRef']>>;
 
-/** Puts together what every contributor reports for a machine, with the waivers applied. */
+/**
+ * Puts together what every contributor reports for a machine, with the waivers applied. The
+ * board reads summary columns only; the approval snapshot also reads the certificate's series.
+ */
 @Injectable()
 export class ReadinessBoardService {
   constructor(
     private readonly machines: MachinesService,
-    private readonly registry: ReadinessRegistry,
-    private readonly targetSets: TargetSetsService,
+    private readonly readiness: ReadinessSummaryService,
     private readonly repo: ApprovalsRepository,
   ) {}
 
-  async board(actor: SessionUser | { workshopId: string }, machineId: string) {
+  async board(actor: SessionUser | { workshopId: string }, machineId: string, options: { series: boolean } = { series: false }) {
     const machine = await this.machines.getRef(actor, machineId);
-    const [raw, waivers, targetSet] = await Promise.all([
-      this.registry.checksFor(machine),
-      this.repo.waivers(machine.workshopId, machine.id),
-      this.targetSets.findRow(machine.workshopId, machine.targetSetId),
-    ]);
-    const checks = boardChecks(raw, waivers);
-    const interval = targetSet.targets.recheckIntervalDays;
-    return { machine, checks, blocking: blockingOf(checks), targetSet: { id: targetSet.id, name: targetSet.name, recheckIntervalDays: Math.round(interval?.value ?? 180) } };
+    const { checks, blocking, targetSet } = await this.readiness.evaluate(machine, options);
+    return { machine, checks, blocking, targetSet };
   }
 
   /** The exact data an approval keeps and the certificate is drawn from. */
   async snapshot(actor: SessionUser, machineId: string): Promise<{ snapshot: ApprovalSnapshot; blocking: BoardCheck[] }> {
-    const b = await this.board(actor, machineId);
+    const b = await this.board(actor, machineId, { series: true });
     const full = await this.machines.get(actor, machineId);
     return {
       blocking: b.blocking,

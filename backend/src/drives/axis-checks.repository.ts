@@ -1,10 +1,25 @@
 import { Inject, Injectable } from '@nestjs/common';
-import { and, desc, eq, inArray } from 'drizzle-orm';
+import { and, desc, eq, sql } from 'drizzle-orm';
 import { DRIZZLE, type Database } from '../database/database.tokens.js';
 import { positioningRuns, travelTrials } from '../database/schema/index.js';
 
 export type TravelTrialRow = typeof travelTrials.$inferSelect;
 export type PositioningRunRow = typeof positioningRuns.$inferSelect;
+
+/** The newest trial or run of an axis as readiness reads it; `result` holds only the headline figures unless full. */
+export interface LatestAxisCheck {
+  id: string;
+  axisId: string;
+  createdAt: Date;
+  result: Record<string, unknown>;
+}
+export type LatestTrial = LatestAxisCheck & { stepsPerMmUsed: number; appliedAt: Date | null };
+
+/** The figures the board and the Drives tab read; the certificate's series needs the whole result. */
+const TRIAL_FIGURES = ['errorPercent', 'correctedStepsPerMm'];
+const RUN_FIGURES = ['accuracyMm', 'repeatabilityMm', 'reversalMm'];
+const figures = (names: string[]) => sql.raw(`jsonb_build_object(${names.map((n) => `'${n}', x.result->'${n}'`).join(', ')})`);
+const uuidArray = (ids: string[]) => sql`array[${sql.join(ids.map((id) => sql`${id}`), sql`, `)}]::uuid[]`;
 
 /** Travel trials and repeat-and-reverse runs of axes, newest first. */
 @Injectable()
@@ -80,26 +95,38 @@ export class AxisChecksRepository {
     await this.db.delete(positioningRuns).where(and(eq(positioningRuns.workshopId, workshopId), eq(positioningRuns.id, id)));
   }
 
-  /** The newest trial of each axis listed. */
-  async latestTrials(workshopId: string, axisIds: string[]): Promise<Map<string, TravelTrialRow>> {
+  /**
+   * The newest trial of each axis listed: one index step per axis (travel_trials_axis_idx), so the
+   * cost does not grow with the trials recorded; the whole stored result only when `full`.
+   */
+  async latestTrials(workshopId: string, axisIds: string[], full = true): Promise<Map<string, LatestTrial>> {
     if (!axisIds.length) return new Map();
-    const rows = await this.db
-      .select()
-      .from(travelTrials)
-      .where(and(eq(travelTrials.workshopId, workshopId), inArray(travelTrials.axisId, axisIds)))
-      .orderBy(desc(travelTrials.createdAt));
-    return firstPerAxis(rows);
+    const { rows } = await this.db.execute<{ id: string; axis_id: string; created_at: string; steps_per_mm_used: number; applied_at: string | null; result: Record<string, unknown> }>(sql`
+      select t.* from unnest(${uuidArray(axisIds)}) as a(id)
+      cross join lateral (
+        select x.id, x.axis_id, x.created_at, x.steps_per_mm_used, x.applied_at, ${full ? sql`x.result` : figures(TRIAL_FIGURES)} as result
+        from travel_trials x where x.workshop_id = ${workshopId} and x.axis_id = a.id
+        order by x.created_at desc limit 1
+      ) t`);
+    return new Map(
+      rows.map((r) => [
+        r.axis_id,
+        { id: r.id, axisId: r.axis_id, createdAt: new Date(r.created_at), stepsPerMmUsed: Number(r.steps_per_mm_used), appliedAt: r.applied_at ? new Date(r.applied_at) : null, result: r.result },
+      ]),
+    );
   }
 
-  /** The newest run of each axis listed. */
-  async latestRuns(workshopId: string, axisIds: string[]): Promise<Map<string, PositioningRunRow>> {
+  /** The newest run of each axis listed, the same way. */
+  async latestRuns(workshopId: string, axisIds: string[], full = true): Promise<Map<string, LatestAxisCheck>> {
     if (!axisIds.length) return new Map();
-    const rows = await this.db
-      .select()
-      .from(positioningRuns)
-      .where(and(eq(positioningRuns.workshopId, workshopId), inArray(positioningRuns.axisId, axisIds)))
-      .orderBy(desc(positioningRuns.createdAt));
-    return firstPerAxis(rows);
+    const { rows } = await this.db.execute<{ id: string; axis_id: string; created_at: string; result: Record<string, unknown> }>(sql`
+      select r.* from unnest(${uuidArray(axisIds)}) as a(id)
+      cross join lateral (
+        select x.id, x.axis_id, x.created_at, ${full ? sql`x.result` : figures(RUN_FIGURES)} as result
+        from positioning_runs x where x.workshop_id = ${workshopId} and x.axis_id = a.id
+        order by x.created_at desc limit 1
+      ) r`);
+    return new Map(rows.map((r) => [r.axis_id, { id: r.id, axisId: r.axis_id, createdAt: new Date(r.created_at), result: r.result }]));
   }
 
   /** Ids of every trial and run of an axis (to check approval locks before deleting it). */
@@ -110,10 +137,4 @@ export class AxisChecksRepository {
     ]);
     return { trialIds: trials.map((t) => t.id), runIds: runs.map((r) => r.id) };
   }
-}
-
-function firstPerAxis<T extends { axisId: string }>(rows: T[]): Map<string, T> {
-  const out = new Map<string, T>();
-  for (const r of rows) if (!out.has(r.axisId)) out.set(r.axisId, r);
-  return out;
 }

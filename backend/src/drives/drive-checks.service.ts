@@ -3,7 +3,7 @@ import type { SessionUser } from '../auth/session-user.js';
 import type { PositioningResult } from '../engine/positioning.js';
 import type { TravelTrialResult } from '../engine/travel-trial.js';
 import { MachinesService } from '../machines/machines.service.js';
-import type { MachineRef, ReadinessCheck } from '../records/readiness.js';
+import { targetIn, type MachineRef, type ReadinessCheck, type ReadinessContext } from '../records/readiness.js';
 import { ReadinessRegistry } from '../records/readiness.registry.js';
 import { RecordsService } from '../records/records.service.js';
 import { TARGET_LABELS } from '../target-sets/target-keys.js';
@@ -12,13 +12,25 @@ import { AxesService } from './axes.service.js';
 import type { AxisCheckSummary, AxisResponse } from './axis.mapper.js';
 import { AxisChecksRepository } from './axis-checks.repository.js';
 import { positioningVerdicts, travelTrialStatus } from './drive-status.js';
-import { DriveTargetsService, type DriveTargets } from './drive-targets.js';
+import { DriveTargetsService, type DriveTargetKey, type DriveTargets } from './drive-targets.js';
 import { speedCheckOf } from './speed-check.js';
 import { travelEnvelopeOf } from './travel-envelope.js';
 import { storedPositioning, storedTravelTrial } from './axis-check.mapper.js';
-import { UNREADABLE_RESULT } from '../common/stored-result.js';
+import { readableResult, UNREADABLE_RESULT } from '../common/stored-result.js';
 
 const fmt = (v: number, d = 3) => v.toFixed(d);
+
+// The headline figures the board and the Drives tab read; the whole result (with the moves and
+// per-target means) is read only for the certificate's series.
+const trialFigures = (stored: unknown) => readableResult<Pick<TravelTrialResult, 'errorPercent' | 'correctedStepsPerMm'>>(stored, ['errorPercent', 'correctedStepsPerMm']);
+const runFigures = (stored: unknown) => readableResult<Pick<PositioningResult, 'accuracyMm' | 'repeatabilityMm' | 'reversalMm'>>(stored, ['accuracyMm', 'repeatabilityMm', 'reversalMm']);
+
+const DRIVE_TARGET_KEYS: Record<DriveTargetKey, true> = { stepsPerMmError: true, positioningAccuracy: true, repeatability: true, reversal: true, screwSpeedHeadroom: true, travelMargin: true };
+
+/** The drive targets out of a target set read once for the whole readiness read. */
+function driveTargetsOf(context: ReadinessContext): DriveTargets {
+  return Object.fromEntries((Object.keys(DRIVE_TARGET_KEYS) as DriveTargetKey[]).map((k) => [k, targetIn(context, k)])) as DriveTargets;
+}
 const axisLink = (machineId: string, axisId: string) => `/machines/${machineId}/axes/${axisId}`;
 
 /**
@@ -39,7 +51,7 @@ export class DriveChecksService implements OnModuleInit {
   ) {}
 
   onModuleInit() {
-    this.readiness.register({ checksFor: (machine) => this.checksFor(machine) });
+    this.readiness.register({ checksFor: (machine, context) => this.checksFor(machine, context) });
     this.axes.onAxisSaved((actor, row, before) => this.axisSaved(actor, row, before));
   }
 
@@ -67,10 +79,10 @@ export class DriveChecksService implements OnModuleInit {
     }
   }
 
-  async checksFor(machine: MachineRef): Promise<ReadinessCheck[]> {
+  async checksFor(machine: MachineRef, context: ReadinessContext): Promise<ReadinessCheck[]> {
     const rows = await this.axesRepo.list(machine.workshopId, machine.id);
-    const targets = await this.targets.forMachine(machine);
-    const perAxis = await this.axisChecks(machine, rows, targets);
+    const targets = driveTargetsOf(context);
+    const perAxis = await this.axisChecks(machine, rows, targets, context.series);
     const envelope = travelEnvelopeOf(machine, rows, targets);
     const envelopeCheck: ReadinessCheck = {
       key: `travel-envelope:${machine.id}`,
@@ -95,7 +107,7 @@ export class DriveChecksService implements OnModuleInit {
     const machine = await this.machines.getRef(actor, machineId);
     const rows = await this.axesRepo.list(actor.workshopId, machineId);
     const [responses, targets] = await Promise.all([this.axes.respondMany(rows), this.targets.forMachine(machine)]);
-    const perAxis = await this.axisChecks(machine, rows, targets);
+    const perAxis = await this.axisChecks(machine, rows, targets, false);
     return responses.map((axis, i) => {
       const [travelTrial, positioning, speedCheck] = perAxis[i].summaries;
       return { ...axis, checks: { travelTrial, positioning, speedCheck } };
@@ -114,16 +126,17 @@ export class DriveChecksService implements OnModuleInit {
     return speedCheckOf(row, await this.targets.forMachine(machine));
   }
 
-  private async axisChecks(machine: MachineRef, rows: AxisRow[], targets: DriveTargets) {
+  private async axisChecks(machine: MachineRef, rows: AxisRow[], targets: DriveTargets, series: boolean) {
     const ids = rows.map((r) => r.id);
-    const [trials, runs] = await Promise.all([this.checks.latestTrials(machine.workshopId, ids), this.checks.latestRuns(machine.workshopId, ids)]);
+    const [trials, runs] = await Promise.all([this.checks.latestTrials(machine.workshopId, ids, series), this.checks.latestRuns(machine.workshopId, ids, series)]);
     return rows.map((axis) => {
       const link = axisLink(machine.id, axis.id);
       const out: ReadinessCheck[] = [];
       const summaries: AxisCheckSummary[] = [];
 
       const trial = trials.get(axis.id);
-      const tr: TravelTrialResult | null = trial ? storedTravelTrial(trial.result) : null;
+      const tr = trial ? (series ? storedTravelTrial(trial.result) : trialFigures(trial.result)) : null;
+      const moves = tr && 'moves' in tr ? (tr as TravelTrialResult).moves : null;
       // A latest trial that cannot be read blocks like a failed one and says why.
       const trialUnreadable = trial !== undefined && tr === null;
       const trialSummary = tr
@@ -142,13 +155,13 @@ export class DriveChecksService implements OnModuleInit {
         recordId: trial?.id ?? null,
         recordedAt: trial?.createdAt.toISOString() ?? null,
         link,
-        ...(tr
+        ...(moves
           ? {
               series: {
                 title: 'Error of each move against the commanded distance',
                 x: { label: 'Commanded', unit: 'mm' },
                 y: { label: 'Measured − commanded', unit: 'mm' },
-                lines: [{ label: `At ${trial!.stepsPerMmUsed} steps/mm`, points: tr.moves.map((m): [number, number] => [m.commandedMm, m.errorMm]) }],
+                lines: [{ label: `At ${trial!.stepsPerMmUsed} steps/mm`, points: moves.map((m): [number, number] => [m.commandedMm, m.errorMm]) }],
               },
             }
           : {}),
@@ -156,7 +169,8 @@ export class DriveChecksService implements OnModuleInit {
       summaries.push({ status: trialStatus, summary: trialSummary, headline: tr ? `${tr.errorPercent >= 0 ? '+' : ''}${fmt(tr.errorPercent)} % scale error` : null, recordId: trial?.id ?? null, recordedAt: trial?.createdAt.toISOString() ?? null });
 
       const run = runs.get(axis.id);
-      const pr: PositioningResult | null = run ? storedPositioning(run.result) : null;
+      const pr = run ? (series ? storedPositioning(run.result) : runFigures(run.result)) : null;
+      const perTarget = pr && 'targets' in pr ? (pr as PositioningResult).targets : null;
       const runUnreadable = run !== undefined && pr === null;
       const verdict = pr
         ? positioningVerdicts({ accuracy: pr.accuracyMm, repeatability: pr.repeatabilityMm, reversal: pr.reversalMm }, targets)
@@ -179,15 +193,15 @@ export class DriveChecksService implements OnModuleInit {
         recordId: run?.id ?? null,
         recordedAt: run?.createdAt.toISOString() ?? null,
         link,
-        ...(pr
+        ...(perTarget
           ? {
               series: {
                 title: 'Mean deviation at each target, approached up and down',
                 x: { label: 'Target', unit: 'mm' },
                 y: { label: 'Mean deviation', unit: 'um' },
                 lines: [
-                  { label: 'Mean up', points: pr.targets.map((p): [number, number] => [p.targetMm, p.meanUpMm * 1000]) },
-                  { label: 'Mean down', points: pr.targets.map((p): [number, number] => [p.targetMm, p.meanDownMm * 1000]) },
+                  { label: 'Mean up', points: perTarget.map((p): [number, number] => [p.targetMm, p.meanUpMm * 1000]) },
+                  { label: 'Mean down', points: perTarget.map((p): [number, number] => [p.targetMm, p.meanDownMm * 1000]) },
                 ],
               },
             }

@@ -3,11 +3,11 @@ import type { SessionUser } from '../auth/session-user.js';
 import type { BedGridPointMm } from '../database/schema/frame.js';
 import { fromMm, toMm, type LengthUnit } from '../engine/units.js';
 import { MachinesService } from '../machines/machines.service.js';
-import type { MachineRef, ReadinessCheck } from '../records/readiness.js';
+import type { MachineRef, ReadinessCheck, ReadinessContext } from '../records/readiness.js';
 import { RecordsService } from '../records/records.service.js';
 import { bedGridResult, type BedGridPointResult } from './bed-grid-result.js';
 import type { CreateBedGridDto } from './dto/create-bed-grid.dto.js';
-import { FrameTargets, judge, type TargetOf } from './frame-targets.js';
+import { FrameTargets, frameTargetIn, judge, type TargetOf } from './frame-targets.js';
 import { toBedGridResponse, type BedGridResponse } from './frame.mapper.js';
 import { FrameRepository, type BedGridRow } from './frame.repository.js';
 
@@ -70,9 +70,9 @@ export class BedGridsService {
     return rows.map((r) => this.respond(r, target, locked.has(r.id)));
   }
 
-  async readiness(machine: MachineRef): Promise<ReadinessCheck> {
+  async readiness(machine: MachineRef, context: ReadinessContext): Promise<ReadinessCheck> {
     const [row] = await this.repo.listBedGrids(machine.workshopId, machine.id, 1);
-    const t = await this.targets.of(machine, 'bedFlatness');
+    const t = frameTargetIn(context, 'bedFlatness');
     const base: ReadinessCheck = {
       key: `${BED_GRID}:${machine.id}`,
       kind: BED_GRID,
@@ -96,12 +96,14 @@ export class BedGridsService {
       result: { value: fromMm(flatness, unit), unit, summary: `flatness ${show(flatness, unit)} over ${row.points.length} points; tilt ${r.result.tilt.mmPerMetre.toFixed(2)} mm/m` },
       recordId: row.id,
       recordedAt: r.recordedAt,
-      series: {
-        title: 'Heights about the fitted plane, row by row',
-        x: { label: 'X position', unit: 'mm' },
-        y: { label: 'Residual', unit },
-        lines: rowsOf(r.result.points).map(([n, pts]) => ({ label: `Row ${n} (Y ${pts[0].yMm} mm)`, points: pts.map((p): [number, number] => [p.xMm, fromMm(p.residualMm, unit)]) })),
-      },
+      ...(context.series && {
+        series: {
+          title: 'Heights about the fitted plane, row by row',
+          x: { label: 'X position', unit: 'mm' },
+          y: { label: 'Residual', unit },
+          lines: rowsOf(r.result.points).map(([n, pts]) => ({ label: `Row ${n} (Y ${pts[0].yMm} mm)`, points: pts.map((p): [number, number] => [p.xMm, fromMm(p.residualMm, unit)]) })),
+        },
+      }),
     };
   }
 

@@ -2,11 +2,11 @@ import { BadRequestException, Injectable, NotFoundException } from '@nestjs/comm
 import type { SessionUser } from '../auth/session-user.js';
 import { toMm } from '../engine/units.js';
 import { MachinesService } from '../machines/machines.service.js';
-import type { MachineRef, ReadinessCheck } from '../records/readiness.js';
+import type { MachineRef, ReadinessCheck, ReadinessContext } from '../records/readiness.js';
 import { RecordsService } from '../records/records.service.js';
 import { diagonalCheckResult, impossibleDiagonals, type DiagonalInputMm } from './diagonal-check-result.js';
 import type { CreateDiagonalCheckDto } from './dto/create-diagonal-check.dto.js';
-import { FrameTargets, judge, type TargetOf } from './frame-targets.js';
+import { FrameTargets, frameTargetIn, judge, type TargetOf } from './frame-targets.js';
 import { toDiagonalCheckResponse, type DiagonalCheckResponse } from './frame.mapper.js';
 import { FrameRepository, type DiagonalCheckRow } from './frame.repository.js';
 
@@ -71,10 +71,11 @@ export class DiagonalChecksService {
     return rows.map((r) => this.respond(r, target, locked.has(r.id)));
   }
 
-  async readiness(machine: MachineRef): Promise<ReadinessCheck> {
-    const rows = await this.repo.listDiagonalChecks(machine.workshopId, machine.id, 30);
+  async readiness(machine: MachineRef, context: ReadinessContext): Promise<ReadinessCheck> {
+    // The squaring history is read only for the certificate's chart; the board needs the newest check.
+    const rows = await this.repo.listDiagonalChecks(machine.workshopId, machine.id, context.series ? 30 : 1);
     const row = rows[0];
-    const t = await this.targets.of(machine, 'squareness');
+    const t = frameTargetIn(context, 'squareness');
     const { target } = t;
     const base: ReadinessCheck = {
       key: `${DIAGONAL_CHECK}:${machine.id}`,
@@ -97,13 +98,15 @@ export class DiagonalChecksService {
       recordId: row.id,
       recordedAt: r.recordedAt,
       // The squaring history, oldest first, for the certificate's chart.
-      series: {
-        title: 'Squaring history',
-        x: { label: 'Check', unit: '#' },
-        y: { label: 'Out of square', unit: 'mm/m' },
-        lines: [{ label: 'Out of square', points: [...rows].reverse().map((x, i): [number, number] => [i + 1, diagonalCheckResult(x).mmPerMetre]) }],
-        limits: [{ label: `Target ${t.target.value} mm/m`, value: t.base }],
-      },
+      ...(context.series && {
+        series: {
+          title: 'Squaring history',
+          x: { label: 'Check', unit: '#' },
+          y: { label: 'Out of square', unit: 'mm/m' },
+          lines: [{ label: 'Out of square', points: [...rows].reverse().map((x, i): [number, number] => [i + 1, diagonalCheckResult(x).mmPerMetre]) }],
+          limits: [{ label: `Target ${t.target.value} mm/m`, value: t.base }],
+        },
+      }),
     };
   }
 

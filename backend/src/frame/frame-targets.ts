@@ -1,5 +1,5 @@
 import { Injectable } from '@nestjs/common';
-import type { MachineRef } from '../records/readiness.js';
+import { targetIn, type MachineRef, type ReadinessContext } from '../records/readiness.js';
 import { TARGET_LABELS, type TargetKey } from '../target-sets/target-keys.js';
 import { TargetSetsService } from '../target-sets/target-sets.service.js';
 import type { FrameStatus, JudgedTarget } from './frame.mapper.js';
@@ -19,6 +19,12 @@ export class FrameTargets {
     const { target, base } = await this.targetSets.targetFor(machine.workshopId, machine.targetSetId, key);
     return { target: { ...target, label: TARGET_LABELS[key] }, base };
   }
+}
+
+/** The same, out of a target set already read for the whole readiness read. */
+export function frameTargetIn(context: ReadinessContext, key: TargetKey): TargetOf {
+  const { target, base } = targetIn(context, key);
+  return { target: { ...target, label: TARGET_LABELS[key] }, base };
 }
 
 /** A result at most the target is within it (targets are limits, inclusive). */

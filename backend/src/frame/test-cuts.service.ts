@@ -3,10 +3,10 @@ import type { SessionUser } from '../auth/session-user.js';
 import type { TestCutSizesMm } from '../database/schema/frame.js';
 import { toMm } from '../engine/units.js';
 import { MachinesService } from '../machines/machines.service.js';
-import type { MachineRef, ReadinessCheck } from '../records/readiness.js';
+import type { MachineRef, ReadinessCheck, ReadinessContext } from '../records/readiness.js';
 import { RecordsService } from '../records/records.service.js';
 import type { CreateTestCutDto } from './dto/create-test-cut.dto.js';
-import { FrameTargets, type TargetOf } from './frame-targets.js';
+import { FrameTargets, frameTargetIn, type TargetOf } from './frame-targets.js';
 import { toTestCutResponse, type FrameStatus, type TestCutResponse } from './frame.mapper.js';
 import { FrameRepository, type TestCutRow } from './frame.repository.js';
 import { afterKerf, testCutResult } from './test-cut-result.js';
@@ -88,9 +88,9 @@ export class TestCutsService {
     return rows.map((r) => this.respond(r, targets, locked.has(r.id)));
   }
 
-  async readiness(machine: MachineRef): Promise<ReadinessCheck> {
+  async readiness(machine: MachineRef, context: ReadinessContext): Promise<ReadinessCheck> {
     const [row] = await this.repo.listTestCuts(machine.workshopId, machine.id, 1);
-    const targets = await this.targetsOf(machine);
+    const targets = { part: frameTargetIn(context, 'partTolerance'), squareness: frameTargetIn(context, 'squareness') };
     const base: ReadinessCheck = {
       key: `${TEST_CUT}:${machine.id}`,
       kind: TEST_CUT,

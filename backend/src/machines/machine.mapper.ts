@@ -1,5 +1,6 @@
 import type { machines } from '../database/schema/index.js';
-import type { ReadinessCheck } from '../records/readiness.js';
+import type { BlockingCheckRef } from '../database/schema/machine-readiness.js';
+import type { ReadinessCounts } from '../records/readiness-summary.service.js';
 
 export type MachineRow = typeof machines.$inferSelect;
 
@@ -17,7 +18,8 @@ export interface MachineResponse {
 }
 
 export interface MachineListItem extends MachineResponse {
-  checks: { within: number; total: number; outside: number };
+  /** Counted as the readiness board counts (waivers applied); `blocking` names the first check that stops approval. */
+  checks: { total: number; within: number; outside: number; waived: number; notStarted: number; blocking: BlockingCheckRef | null };
 }
 
 export function toMachineResponse(row: MachineRow, targetSetName: string): MachineResponse {
@@ -35,10 +37,6 @@ export function toMachineResponse(row: MachineRow, targetSetName: string): Machi
   };
 }
 
-export function countChecks(checks: ReadinessCheck[]) {
-  return {
-    total: checks.length,
-    within: checks.filter((c) => c.status === 'within-target').length,
-    outside: checks.filter((c) => c.status === 'outside-target').length,
-  };
+export function toListChecks(c: ReadinessCounts): MachineListItem['checks'] {
+  return { total: c.total, within: c.within, outside: c.outside, waived: c.waived, notStarted: c.notStarted, blocking: c.firstBlocking };
 }

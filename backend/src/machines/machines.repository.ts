@@ -1,18 +1,20 @@
 import { Inject, Injectable } from '@nestjs/common';
 import { and, desc, eq, sql } from 'drizzle-orm';
 import { DRIZZLE, type Database } from '../database/database.tokens.js';
-import { machines, targetSets } from '../database/schema/index.js';
+import { machineReadiness, machines, targetSets } from '../database/schema/index.js';
 import type { MachineRow } from './machine.mapper.js';
 
 @Injectable()
 export class MachinesRepository {
   constructor(@Inject(DRIZZLE) private readonly db: Database) {}
 
+  /** The workshop's machines with their readiness summaries: one statement, whatever their history. */
   list(workshopId: string) {
     return this.db
-      .select({ machine: machines, targetSetName: targetSets.name })
+      .select({ machine: machines, targetSetName: targetSets.name, readiness: machineReadiness })
       .from(machines)
       .innerJoin(targetSets, eq(targetSets.id, machines.targetSetId))
+      .leftJoin(machineReadiness, eq(machineReadiness.machineId, machines.id))
       .where(eq(machines.workshopId, workshopId))
       .orderBy(desc(machines.lastActivityAt));
   }

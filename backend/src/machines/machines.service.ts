@@ -2,11 +2,11 @@ import { ConflictException, Injectable, NotFoundException, OnModuleInit } from '
 import type { SessionUser } from '../auth/session-user.js';
 import { APPROVED_STATES, type MachineState } from '../database/schema/machines.js';
 import type { MachineRef } from '../records/readiness.js';
-import { ReadinessRegistry } from '../records/readiness.registry.js';
+import { ReadinessSummaryService } from '../records/readiness-summary.service.js';
 import { RecordsService } from '../records/records.service.js';
 import { SubjectsRegistry } from '../records/subjects.registry.js';
 import { TargetSetsService } from '../target-sets/target-sets.service.js';
-import { countChecks, toMachineResponse, type MachineListItem, type MachineResponse, type MachineRow } from './machine.mapper.js';
+import { toListChecks, toMachineResponse, type MachineListItem, type MachineResponse, type MachineRow } from './machine.mapper.js';
 import { MachinesRepository } from './machines.repository.js';
 import type { CreateMachineDto } from './dto/create-machine.dto.js';
 import type { UpdateMachineDto } from './dto/update-machine.dto.js';
@@ -18,7 +18,7 @@ export class MachinesService implements OnModuleInit {
     private readonly repo: MachinesRepository,
     private readonly targetSets: TargetSetsService,
     private readonly records: RecordsService,
-    private readonly readiness: ReadinessRegistry,
+    private readonly readiness: ReadinessSummaryService,
     private readonly subjects: SubjectsRegistry,
   ) {}
 
@@ -29,14 +29,19 @@ export class MachinesService implements OnModuleInit {
     });
   }
 
+  /**
+   * Served from each machine's readiness summary (kept current by every change's transaction),
+   * so the list costs one statement however much history the machines have. A machine without
+   * a summary (made by hand in the database) is counted once here and keeps its summary.
+   */
   async list(actor: SessionUser): Promise<MachineListItem[]> {
     const rows = await this.repo.list(actor.workshopId);
-    return Promise.all(
-      rows.map(async ({ machine, targetSetName }) => ({
-        ...toMachineResponse(machine, targetSetName),
-        checks: countChecks(await this.readiness.checksFor(toRef(machine))),
-      })),
-    );
+    const out: MachineListItem[] = [];
+    for (const { machine, targetSetName, readiness } of rows) {
+      const counts = readiness ?? (await this.readiness.refresh(machine.workshopId, machine.id));
+      out.push({ ...toMachineResponse(machine, targetSetName), checks: toListChecks(counts!) });
+    }
+    return out;
   }
 
   async get(actor: SessionUser, id: string): Promise<MachineResponse> {

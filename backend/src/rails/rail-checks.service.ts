@@ -2,14 +2,14 @@ import { Injectable, OnModuleInit } from '@nestjs/common';
 import type { SessionUser } from '../auth/session-user.js';
 import type { TargetValue } from '../database/schema/target-sets.js';
 import { fromMm, isLengthUnit } from '../engine/units.js';
-import type { MachineRef, ReadinessCheck } from '../records/readiness.js';
+import type { MachineRef, ReadinessCheck, ReadinessContext } from '../records/readiness.js';
 import { ReadinessRegistry } from '../records/readiness.registry.js';
 import { SubjectsRegistry } from '../records/subjects.registry.js';
 import { TargetSetsService } from '../target-sets/target-sets.service.js';
 import { TARGET_LABELS, targetInBaseUnit } from '../target-sets/target-keys.js';
 import { MachinesService } from '../machines/machines.service.js';
-import { partnerParallelism } from './rail-parallelism.js';
-import { RailsRepository, type RailRow, type SweepRow } from './rails.repository.js';
+import { partnerParallelism, type ComparedSweep } from './rail-parallelism.js';
+import { RailsRepository, type DatumSweep, type LatestSweep, type RailRow } from './rails.repository.js';
 import { RailsService } from './rails.service.js';
 
 const railLink = (machineId: string, railId: string) => `/machines/${machineId}/rails/${railId}`;
@@ -41,7 +41,7 @@ export class RailChecksService implements OnModuleInit {
   ) {}
 
   onModuleInit() {
-    this.readiness.register({ checksFor: (m) => this.checksFor(m) });
+    this.readiness.register({ checksFor: (m, context) => this.checksFor(m, context) });
     this.subjects.register('rail', async (workshopId, id) => {
       const rail = await this.repo.findRail(workshopId, id);
       return rail ? { machineId: rail.machineId, recordType: 'rail', recordId: id, label: `Rail ${rail.label}` } : null;
@@ -54,14 +54,22 @@ export class RailChecksService implements OnModuleInit {
     });
   }
 
-  async checksFor(machine: MachineRef): Promise<ReadinessCheck[]> {
+  /**
+   * Three queries whatever the history: the rails, the newest sweep of each (summary columns),
+   * and the newest sweep of each rail per datum (for the partner pairs).
+   */
+  async checksFor(machine: MachineRef, context: ReadinessContext): Promise<ReadinessCheck[]> {
     const rails = await this.repo.listRails(machine.workshopId, machine.id);
     if (!rails.length) return [];
-    const sweeps = await this.repo.sweepsOfRails(machine.workshopId, rails.map((r) => r.id));
-    const targets = await this.targetsOf(machine.workshopId, machine.targetSetId);
-    const of = (id: string) => sweeps.filter((s) => s.railId === id);
-    const checks = rails.map((r) => this.straightnessCheck(r, of(r.id)[0] ?? null, targets.straightness));
-    for (const [a, b] of pairs(rails)) checks.push(this.parallelismCheck(a, b, of(a.id), of(b.id), targets));
+    const targets = { straightness: context.targets.railStraightness, parallelism: context.targets.railParallelism, height: context.targets.railHeightDifference };
+    const paired = pairs(rails);
+    const ids = rails.map((r) => r.id);
+    const [latest, perDatum] = await Promise.all([
+      this.repo.latestSweeps(machine.workshopId, ids),
+      paired.length ? this.repo.latestSweepsPerDatum(machine.workshopId, ids) : Promise.resolve([]),
+    ]);
+    const checks = rails.map((r) => this.straightnessCheck(r, latest.get(r.id) ?? null, targets.straightness));
+    for (const [a, b] of paired) checks.push(this.parallelismCheck(a, b, comparedOf(a.id, latest, perDatum), comparedOf(b.id, latest, perDatum), targets));
     return checks;
   }
 
@@ -75,8 +83,11 @@ export class RailChecksService implements OnModuleInit {
     if (!partner) {
       return { railId, partnerRailId: null, status: 'not-comparable' as const, reason: `Rail ${rail.label} has no partner rail`, targets: shownTargets };
     }
-    const [sa, sb] = await Promise.all([this.repo.listSweeps(actor.workshopId, rail.id), this.repo.listSweeps(actor.workshopId, partner.id)]);
-    const out = partnerParallelism(sa, sb, { a: rail.label, b: partner.label });
+    const [latest, perDatum] = await Promise.all([
+      this.repo.latestSweeps(actor.workshopId, [rail.id, partner.id]),
+      this.repo.latestSweepsPerDatum(actor.workshopId, [rail.id, partner.id]),
+    ]);
+    const out = partnerParallelism(comparedOf(rail.id, latest, perDatum), comparedOf(partner.id, latest, perDatum), { a: rail.label, b: partner.label });
     const base = { railId, partnerRailId: partner.id, targets: shownTargets, sweeps: { a: out.a?.id ?? null, b: out.b?.id ?? null } };
     if (!out.comparable) return { ...base, status: 'not-comparable' as const, reason: out.reason };
     const parallelWithin = out.parallelismMm <= targetInBaseUnit(targets.parallelism);
@@ -95,15 +106,11 @@ export class RailChecksService implements OnModuleInit {
   }
 
   private async targetsOf(workshopId: string, targetSetId: string) {
-    const [s, p, h] = await Promise.all([
-      this.targetSets.targetFor(workshopId, targetSetId, 'railStraightness'),
-      this.targetSets.targetFor(workshopId, targetSetId, 'railParallelism'),
-      this.targetSets.targetFor(workshopId, targetSetId, 'railHeightDifference'),
-    ]);
-    return { straightness: s.target, parallelism: p.target, height: h.target };
+    const { targets } = await this.targetSets.findRow(workshopId, targetSetId);
+    return { straightness: targets.railStraightness, parallelism: targets.railParallelism, height: targets.railHeightDifference };
   }
 
-  private straightnessCheck(rail: RailRow, latest: SweepRow | null, target: TargetValue): ReadinessCheck {
+  private straightnessCheck(rail: RailRow, latest: LatestSweep | null, target: TargetValue): ReadinessCheck {
     const common = {
       key: `straightness:${rail.id}`,
       kind: 'rail-straightness' as const,
@@ -113,19 +120,19 @@ export class RailChecksService implements OnModuleInit {
       link: railLink(rail.machineId, rail.id),
     };
     if (!latest) return { ...common, status: 'not-started', result: null, recordType: null, recordId: null, recordedAt: null };
-    const ls = latest.result.leastSquares.straightness;
-    const mz = latest.result.minimumZone.straightness;
+    const ls = latest.leastSquaresStraightness;
+    const mz = latest.minimumZoneStraightness;
     return {
       ...common,
       status: ls <= targetInBaseUnit(target) ? 'within-target' : 'outside-target',
-      result: { value: inUnit(ls, target), unit: target.unit, summary: `Least squares ${show(ls, target)}, minimum zone ${show(mz, target)} (${latest.phase}, ${latest.positionsMm.length} stations)` },
+      result: { value: inUnit(ls, target), unit: target.unit, summary: `Least squares ${show(ls, target)}, minimum zone ${show(mz, target)} (${latest.phase}, ${latest.stationCount} stations)` },
       recordType: 'rail-sweep',
       recordId: latest.id,
       recordedAt: latest.takenAt.toISOString(),
     };
   }
 
-  private parallelismCheck(a: RailRow, b: RailRow, sa: SweepRow[], sb: SweepRow[], t: { parallelism: TargetValue; height: TargetValue }): ReadinessCheck {
+  private parallelismCheck(a: RailRow, b: RailRow, sa: ComparedSweep[], sb: ComparedSweep[], t: { parallelism: TargetValue; height: TargetValue }): ReadinessCheck {
     const out = partnerParallelism(sa, sb, { a: a.label, b: b.label });
     const common = {
       key: `parallelism:${a.id}:${b.id}`,
@@ -158,6 +165,17 @@ export class RailChecksService implements OnModuleInit {
 
 const plain = (t: TargetValue) => ({ value: t.value, unit: t.unit });
 const unitWord = (t: TargetValue) => `${t.value} ${t.unit === 'um' ? 'µm' : t.unit}`;
+
+/**
+ * A rail's sweeps as the comparison needs them, newest first: its newest sweep per datum (with
+ * readings), and its newest sweep overall only to say that it has one (no datum, no readings).
+ */
+function comparedOf(railId: string, latest: Map<string, LatestSweep>, perDatum: DatumSweep[]): ComparedSweep[] {
+  const own: ComparedSweep[] = perDatum.filter((s) => s.railId === railId);
+  const newest = latest.get(railId);
+  if (newest && !own.some((s) => s.id === newest.id)) own.push({ id: newest.id, datum: null, takenAt: newest.takenAt, positionsMm: [], readingsMm: [] });
+  return own.sort((x, y) => y.takenAt.getTime() - x.takenAt.getTime());
+}
 
 /** Each partner pair once, ids sorted so the check key is stable. */
 function pairs(rails: RailRow[]): [RailRow, RailRow][] {

@@ -1,12 +1,15 @@
 import { evaluateParallelism } from '../engine/parallelism.js';
 import type { SweepRow } from './rails.repository.js';
 
+/** What the comparison reads of a sweep (full rows fit too). */
+export type ComparedSweep = Pick<SweepRow, 'id' | 'datum' | 'takenAt' | 'positionsMm' | 'readingsMm'>;
+
 // Two stations are the same place when they agree to a micrometre (positions are typed in mm).
 const SAME_POSITION_MM = 0.001;
 
-export type PairOutcome =
-  | { comparable: true; a: SweepRow; b: SweepRow; datum: string; positionsMm: number[]; parallelismMm: number; meanOffsetMm: number; differencesMm: number[] }
-  | { comparable: false; reason: string; a: SweepRow | null; b: SweepRow | null };
+export type PairOutcome<S extends ComparedSweep = ComparedSweep> =
+  | { comparable: true; a: S; b: S; datum: string; positionsMm: number[]; parallelismMm: number; meanOffsetMm: number; differencesMm: number[] }
+  | { comparable: false; reason: string; a: S | null; b: S | null };
 
 const datumKey = (d: string | null) => (d ?? '').trim().toLowerCase();
 
@@ -15,19 +18,19 @@ const datumKey = (d: string | null) => (d ?? '').trim().toLowerCase();
  * (sweeps newest first). Differences are B − A at each station; their mean is the height
  * (offset) of B over A. The stations must be the same positions on both rails.
  */
-export function partnerParallelism(sweepsA: SweepRow[], sweepsB: SweepRow[], labels: { a: string; b: string }): PairOutcome {
+export function partnerParallelism<S extends ComparedSweep>(sweepsA: S[], sweepsB: S[], labels: { a: string; b: string }): PairOutcome<S> {
   if (!sweepsA.length || !sweepsB.length) {
     const missing = [!sweepsA.length ? labels.a : null, !sweepsB.length ? labels.b : null].filter(Boolean).join(' and ');
     return { comparable: false, reason: `No sweep of rail ${missing} yet`, a: sweepsA[0] ?? null, b: sweepsB[0] ?? null };
   }
-  const latestByDatum = (sweeps: SweepRow[]) => {
-    const out = new Map<string, SweepRow>();
+  const latestByDatum = (sweeps: S[]) => {
+    const out = new Map<string, S>();
     for (const s of sweeps) if (datumKey(s.datum) && !out.has(datumKey(s.datum))) out.set(datumKey(s.datum), s);
     return out;
   };
   const byA = latestByDatum(sweepsA);
   const byB = latestByDatum(sweepsB);
-  let best: { a: SweepRow; b: SweepRow } | null = null;
+  let best: { a: S; b: S } | null = null;
   for (const [key, a] of byA) {
     const b = byB.get(key);
     if (!b) continue;

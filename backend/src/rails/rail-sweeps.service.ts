@@ -6,7 +6,9 @@ import type { StoredLine, StoredSweepResult } from '../database/schema/rails.js'
 import { MachinesService } from '../machines/machines.service.js';
 import { RecordsService } from '../records/records.service.js';
 import { TargetSetsService } from '../target-sets/target-sets.service.js';
-import { toSweepResponse, type SweepResponse } from './rail.mapper.js';
+import { toSweepListItem, toSweepResponse, type SweepListItem, type SweepResponse } from './rail.mapper.js';
+import { DEFAULT_PAGE_SIZE } from '../records/page-cursor.js';
+import type { SweepPageQuery } from './dto/sweep-page.query.js';
 import { RailsRepository, type SweepRow } from './rails.repository.js';
 import { RailsService } from './rails.service.js';
 import type { CreateSweepDto } from './dto/create-sweep.dto.js';
@@ -24,11 +26,15 @@ export class RailSweepsService {
     private readonly records: RecordsService,
   ) {}
 
-  async list(actor: SessionUser, railId: string): Promise<SweepResponse[]> {
+  /** A page of the rail's sweeps, newest first, summaries only; `nextCursor` asks for the page after. */
+  async list(actor: SessionUser, railId: string, query: SweepPageQuery = {}): Promise<{ items: SweepListItem[]; nextCursor: string | null }> {
     await this.rails.findRow(actor, railId);
-    const rows = await this.repo.listSweeps(actor.workshopId, railId);
-    const locked = await this.records.lockedIds('rail-sweep', rows.map((r) => r.id));
-    return rows.map((r) => toSweepResponse(r, locked.has(r.id)));
+    const limit = query.limit ?? DEFAULT_PAGE_SIZE;
+    const rows = await this.repo.sweepPage(actor.workshopId, railId, query.cursor ?? null, limit);
+    const page = rows.slice(0, limit);
+    const locked = await this.records.lockedIds('rail-sweep', page.map((r) => r.id));
+    const last = page[page.length - 1];
+    return { items: page.map((r) => toSweepListItem(r, locked.has(r.id))), nextCursor: rows.length > limit ? last.id : null };
   }
 
   async get(actor: SessionUser, id: string): Promise<SweepResponse> {

@@ -1,7 +1,7 @@
 import { holePositions } from '../engine/bolt-down.js';
 import type { StoredSweepResult } from '../database/schema/rails.js';
 import { typicalBoltFor } from './bolt-torques.js';
-import type { RailRow, SweepRow } from './rails.repository.js';
+import type { RailRow, SweepListRow, SweepRow } from './rails.repository.js';
 
 export interface RailResponse {
   id: string;
@@ -29,6 +29,17 @@ export interface SweepSummary {
   minimumZoneStraightness: number;
   status: SweepRow['status'];
   target: { value: number; unit: string };
+}
+
+/** A sweep in its rail's list: the summary and what the history table shows, no readings (GET /api/sweeps/:id has them). */
+export interface SweepListItem extends SweepSummary {
+  railId: string;
+  machineId: string;
+  unit: SweepRow['unit'];
+  takenBy: string;
+  stationCount: number;
+  createdAt: string;
+  locked: boolean;
 }
 
 export interface RailListItem extends RailResponse {
@@ -116,6 +127,26 @@ export function toSweepResponse(row: SweepRow, locked: boolean): SweepResponse {
     status: row.status,
     target: row.target,
     takenAt: row.takenAt.toISOString(),
+    createdAt: row.createdAt.toISOString(),
+    locked,
+  };
+}
+
+export function toSweepListItem(row: SweepListRow, locked: boolean): SweepListItem {
+  return {
+    id: row.id,
+    railId: row.railId,
+    machineId: row.machineId,
+    unit: row.unit,
+    takenAt: row.takenAt.toISOString(),
+    takenBy: row.takenBy,
+    phase: row.phase,
+    datum: row.datum,
+    leastSquaresStraightness: row.leastSquaresStraightness,
+    minimumZoneStraightness: row.minimumZoneStraightness,
+    status: row.status,
+    target: row.target,
+    stationCount: row.stationCount,
     createdAt: row.createdAt.toISOString(),
     locked,
   };

@@ -1,10 +1,12 @@
-import { Body, Controller, Delete, Get, HttpCode, Param, ParseUUIDPipe, Patch, Post, Res } from '@nestjs/common';
+import { Body, Controller, Delete, Get, HttpCode, Param, ParseUUIDPipe, Patch, Post, Query, Res } from '@nestjs/common';
 import type { FastifyReply } from 'fastify';
 import { CurrentUser, RECORDERS, Roles } from '../auth/decorators.js';
 import type { SessionUser } from '../auth/session-user.js';
 import { boltTorqueTable } from './bolt-torques.js';
 import { CreateRailDto } from './dto/create-rail.dto.js';
 import { CreateSweepDto } from './dto/create-sweep.dto.js';
+import { SweepPageQuery } from './dto/sweep-page.query.js';
+import { NEXT_CURSOR_HEADER } from '../records/page-cursor.js';
 import { UpdateRailDto } from './dto/update-rail.dto.js';
 import { RailChecksService } from './rail-checks.service.js';
 import { RailSweepsService } from './rail-sweeps.service.js';
@@ -57,9 +59,12 @@ export class RailsController {
     return this.checks.parallelismOf(user, id);
   }
 
+  /** Newest first, summaries only, a page at a time: the next page's cursor comes in the X-Next-Cursor header. */
   @Get('rails/:id/sweeps')
-  listSweeps(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string) {
-    return this.sweeps.list(user, id);
+  async listSweeps(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string, @Query() query: SweepPageQuery, @Res({ passthrough: true }) reply: FastifyReply) {
+    const { items, nextCursor } = await this.sweeps.list(user, id, query);
+    if (nextCursor) reply.header(NEXT_CURSOR_HEADER, nextCursor);
+    return items;
   }
 
   /** 201 for a new sweep; 200 with the same sweep when the client id was seen before. */

@@ -1,11 +1,38 @@
 import { Inject, Injectable } from '@nestjs/common';
-import { and, asc, desc, eq, inArray } from 'drizzle-orm';
+import { and, asc, desc, eq, inArray, sql } from 'drizzle-orm';
 import { DRIZZLE, type Database } from '../database/database.tokens.js';
 import { machines, rails, railSweeps } from '../database/schema/index.js';
 
 export type RailRow = typeof rails.$inferSelect;
 export type SweepRow = typeof railSweeps.$inferSelect;
 type RailInsert = typeof rails.$inferInsert;
+
+/** What the readiness board and the rails tab need of a rail's newest sweep: no reading arrays. */
+export interface LatestSweep {
+  id: string;
+  railId: string;
+  takenAt: Date;
+  phase: SweepRow['phase'];
+  datum: string | null;
+  status: SweepRow['status'];
+  leastSquaresStraightness: number;
+  minimumZoneStraightness: number;
+  stationCount: number;
+  target: SweepRow['target'];
+}
+
+/** A sweep as partner parallelism compares it: stations and readings, no fitted result. */
+export type DatumSweep = Pick<SweepRow, 'id' | 'railId' | 'datum' | 'takenAt' | 'positionsMm' | 'readingsMm'>;
+
+/** A sweep as a page of the rail's list shows it: summary columns only. */
+export interface SweepListRow extends LatestSweep {
+  machineId: string;
+  unit: SweepRow['unit'];
+  takenBy: string;
+  createdAt: Date;
+}
+
+const uuidArray = (ids: string[]) => sql`array[${sql.join(ids.map((id) => sql`${id}`), sql`, `)}]::uuid[]`;
 type SweepInsert = typeof railSweeps.$inferInsert;
 
 @Injectable()
@@ -84,6 +111,126 @@ export class RailsRepository {
       .orderBy(desc(railSweeps.takenAt), desc(railSweeps.createdAt));
   }
 
+  /**
+   * The newest sweep of each rail listed, one index step per rail (rail_sweeps_latest_idx), so
+   * the cost does not grow with the number of sweeps recorded.
+   */
+  async latestSweeps(workshopId: string, railIds: string[]): Promise<Map<string, LatestSweep>> {
+    if (!railIds.length) return new Map();
+    const { rows } = await this.db.execute<{
+      id: string;
+      rail_id: string;
+      taken_at: string;
+      phase: SweepRow['phase'];
+      datum: string | null;
+      status: SweepRow['status'];
+      ls: number;
+      mz: number;
+      stations: number;
+      target: SweepRow['target'];
+    }>(sql`
+      select s.id, s.rail_id, s.taken_at, s.phase, s.datum, s.status, s.target,
+             (s.result #>> '{leastSquares,straightness}')::float8 as ls,
+             (s.result #>> '{minimumZone,straightness}')::float8 as mz,
+             jsonb_array_length(s.positions_mm) as stations
+      from unnest(${uuidArray(railIds)}) as r(id)
+      cross join lateral (
+        select * from rail_sweeps x
+        where x.rail_id = r.id and x.workshop_id = ${workshopId}
+        order by x.taken_at desc, x.created_at desc
+        limit 1
+      ) s`);
+    return new Map(
+      rows.map((r) => [
+        r.rail_id,
+        {
+          id: r.id,
+          railId: r.rail_id,
+          takenAt: new Date(r.taken_at),
+          phase: r.phase,
+          datum: r.datum,
+          status: r.status,
+          leastSquaresStraightness: Number(r.ls),
+          minimumZoneStraightness: Number(r.mz),
+          stationCount: Number(r.stations),
+          target: r.target,
+        },
+      ]),
+    );
+  }
+
+  /**
+   * The newest sweep of each rail against each datum it names (what partner parallelism compares),
+   * with stations and readings. The datums of a rail are walked through the index one at a time
+   * (a loose index scan), so the cost follows the number of datums, not of sweeps.
+   */
+  async latestSweepsPerDatum(workshopId: string, railIds: string[]): Promise<DatumSweep[]> {
+    if (!railIds.length) return [];
+    const { rows } = await this.db.execute<{ id: string; rail_id: string; datum: string; taken_at: string; positions_mm: number[]; readings_mm: number[] }>(sql`
+      with recursive keys(rail_id, dkey) as (
+        select r.id, (select lower(x.datum) from rail_sweeps x where x.rail_id = r.id and x.datum is not null order by lower(x.datum) limit 1)
+        from unnest(${uuidArray(railIds)}) as r(id)
+        union all
+        select k.rail_id, (select lower(x.datum) from rail_sweeps x where x.rail_id = k.rail_id and x.datum is not null and lower(x.datum) > k.dkey order by lower(x.datum) limit 1)
+        from keys k where k.dkey is not null
+      )
+      select s.id, s.rail_id, s.datum, s.taken_at, s.positions_mm, s.readings_mm
+      from keys k
+      cross join lateral (
+        select x.id, x.rail_id, x.datum, x.taken_at, x.positions_mm, x.readings_mm from rail_sweeps x
+        where x.rail_id = k.rail_id and x.datum is not null and lower(x.datum) = k.dkey and x.workshop_id = ${workshopId}
+        order by x.taken_at desc, x.created_at desc
+        limit 1
+      ) s
+      where k.dkey is not null`);
+    return rows.map((r) => ({ id: r.id, railId: r.rail_id, datum: r.datum, takenAt: new Date(r.taken_at), positionsMm: r.positions_mm, readingsMm: r.readings_mm }));
+  }
+
+  /** One page of a rail's sweeps, newest first, after the given one; one row more than asked tells there is a next page. */
+  async sweepPage(workshopId: string, railId: string, afterId: string | null, limit: number): Promise<SweepListRow[]> {
+    const { rows } = await this.db.execute<{
+      id: string;
+      rail_id: string;
+      machine_id: string;
+      unit: SweepRow['unit'];
+      taken_by: string;
+      taken_at: string;
+      created_at: string;
+      phase: SweepRow['phase'];
+      datum: string | null;
+      status: SweepRow['status'];
+      target: SweepRow['target'];
+      ls: number;
+      mz: number;
+      stations: number;
+    }>(sql`
+      select s.id, s.rail_id, s.machine_id, s.unit, s.taken_by, s.taken_at, s.created_at, s.phase, s.datum, s.status, s.target,
+             (s.result #>> '{leastSquares,straightness}')::float8 as ls,
+             (s.result #>> '{minimumZone,straightness}')::float8 as mz,
+             jsonb_array_length(s.positions_mm) as stations
+      from rail_sweeps s
+      where s.workshop_id = ${workshopId} and s.rail_id = ${railId}
+        ${afterId ? sql`and (s.taken_at, s.id) < (select c.taken_at, c.id from rail_sweeps c where c.id = ${afterId} and c.rail_id = ${railId})` : sql``}
+      order by s.taken_at desc, s.id desc
+      limit ${limit + 1}`);
+    return rows.map((r) => ({
+      id: r.id,
+      railId: r.rail_id,
+      machineId: r.machine_id,
+      unit: r.unit,
+      takenBy: r.taken_by,
+      takenAt: new Date(r.taken_at),
+      createdAt: new Date(r.created_at),
+      phase: r.phase,
+      datum: r.datum,
+      status: r.status,
+      target: r.target,
+      leastSquaresStraightness: Number(r.ls),
+      minimumZoneStraightness: Number(r.mz),
+      stationCount: Number(r.stations),
+    }));
+  }
+
   sweepIds(workshopId: string, railId: string): Promise<{ id: string }[]> {
     return this.db
       .select({ id: railSweeps.id })
@@ -144,3 +291,4 @@ export class RailsRepository {
     } as SweepRow;
   }
 }
+

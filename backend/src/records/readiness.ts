@@ -1,4 +1,5 @@
 import type { TargetValue } from '../database/schema/target-sets.js';
+import { targetInBaseUnit, type TargetKey } from '../target-sets/target-keys.js';
 
 export type CheckStatus = 'not-started' | 'within-target' | 'outside-target' | 'waived';
 
@@ -59,6 +60,22 @@ export interface MachineRef {
   workAreaYMm: number;
 }
 
+/**
+ * What one readiness read shares between contributors: the machine's target set, read once by
+ * the caller, and whether the certificate's data series are wanted (only the approval snapshot
+ * wants them; the board and the machines list read summary columns only).
+ */
+export interface ReadinessContext {
+  targets: Record<string, TargetValue>;
+  series: boolean;
+}
+
+/** A target of the context's set as TargetSetsService.targetFor gives it: stored, and in mm (lengths) or as stored. */
+export function targetIn(context: ReadinessContext, key: TargetKey): { target: TargetValue; base: number } {
+  const target = context.targets[key];
+  return { target, base: targetInBaseUnit(target) };
+}
+
 export interface ReadinessContributor {
-  checksFor(machine: MachineRef): Promise<ReadinessCheck[]>;
+  checksFor(machine: MachineRef, context: ReadinessContext): Promise<ReadinessCheck[]>;
 }

@@ -1,5 +1,7 @@
 import { Global, Module } from '@nestjs/common';
 import { ReadinessRegistry } from './readiness.registry.js';
+import { ReadinessSummaryRepository } from './readiness-summary.repository.js';
+import { ReadinessSummaryService } from './readiness-summary.service.js';
 import { RecordsRepository } from './records.repository.js';
 import { RecordsService } from './records.service.js';
 import { SubjectsRegistry } from './subjects.registry.js';
@@ -7,7 +9,7 @@ import { SubjectsRegistry } from './subjects.registry.js';
 /** Shared by every domain module: audit history, approval locks, readiness contributors. */
 @Global()
 @Module({
-  providers: [RecordsRepository, RecordsService, ReadinessRegistry, SubjectsRegistry],
-  exports: [RecordsService, ReadinessRegistry, SubjectsRegistry],
+  providers: [RecordsRepository, RecordsService, ReadinessRegistry, SubjectsRegistry, ReadinessSummaryRepository, ReadinessSummaryService],
+  exports: [RecordsService, ReadinessRegistry, SubjectsRegistry, ReadinessSummaryService],
 })
 export class RecordsModule {}

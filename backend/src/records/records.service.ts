@@ -35,6 +35,10 @@ export interface CheckRecordedEvent {
 
 type Listener = (actor: SessionUser, event: CheckRecordedEvent) => Promise<void>;
 
+/** What an audited change touched: enough to know whose readiness may have moved. */
+export type RecordChange = Pick<AuditInput, 'machineId' | 'recordType' | 'recordId' | 'action'>;
+type ChangeListener = (workshopId: string, change: RecordChange) => Promise<void>;
+
 /**
  * What every record of a machine goes through: the audit history, the approval locks, and the
  * "a check was recorded" signal (the machine's last activity, and approvals reacting to it).
@@ -43,6 +47,7 @@ type Listener = (actor: SessionUser, event: CheckRecordedEvent) => Promise<void>
 export class RecordsService {
   private readonly logger = new Logger(RecordsService.name);
   private readonly listeners: Listener[] = [];
+  private readonly changeListeners: ChangeListener[] = [];
 
   constructor(private readonly repo: RecordsRepository) {}
 
@@ -60,6 +65,15 @@ export class RecordsService {
     };
     if (input.machineId) await this.repo.insertAuditAndTouch({ ...values, machineId: input.machineId });
     else await this.repo.insertAudit(values);
+    // After the machine's touch: that row lock makes commands on one machine take turns, so each
+    // listener (the readiness summary) reads what the command before it committed.
+    const change: RecordChange = { machineId: input.machineId ?? null, recordType: input.recordType, recordId: input.recordId ?? null, action: input.action };
+    for (const listener of this.changeListeners) await listener(actor.workshopId, change);
+  }
+
+  /** Runs in the changing command's transaction after every audited change; a failure fails the command. */
+  onRecordChanged(listener: ChangeListener): void {
+    this.changeListeners.push(listener);
   }
 
   /** Call after saving a check's result: audits it and lets approvals react (e.g. leave ready-to-cut). */

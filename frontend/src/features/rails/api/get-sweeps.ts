@@ -1,8 +1,29 @@
-import { queryOptions, useQuery } from '@tanstack/react-query';
+import { infiniteQueryOptions, useInfiniteQuery } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
-import { railKeys, type Sweep } from '../types';
+import type { LengthUnit } from '../../../lib/units';
+import { railKeys, type SweepSummary } from '../types';
 
-/** Newest first. */
-export const sweepsQueryOptions = (railId: string) => queryOptions({ queryKey: railKeys.sweeps(railId), queryFn: () => api.get<Sweep[]>(`/rails/${railId}/sweeps`) });
+/** A sweep as the rail's list gives it: the summary, no readings (useSweep has them). */
+export interface SweepListItem extends SweepSummary {
+  railId: string;
+  machineId: string;
+  unit: LengthUnit;
+  takenBy: string;
+  stationCount: number;
+  createdAt: string;
+  locked: boolean;
+}
 
-export const useSweeps = (railId: string) => useQuery(sweepsQueryOptions(railId));
+export const SWEEP_PAGE_SIZE = 50;
+
+/** Newest first, a page at a time; the next page starts after the last sweep of the one before. */
+export const sweepsQueryOptions = (railId: string) =>
+  infiniteQueryOptions({
+    queryKey: railKeys.sweeps(railId),
+    queryFn: ({ pageParam }) => api.get<SweepListItem[]>(`/rails/${railId}/sweeps?limit=${SWEEP_PAGE_SIZE}${pageParam ? `&cursor=${pageParam}` : ''}`),
+    initialPageParam: '',
+    getNextPageParam: (last) => (last.length === SWEEP_PAGE_SIZE ? last[last.length - 1].id : undefined),
+    select: (data) => data.pages.flat(),
+  });
+
+export const useSweeps = (railId: string) => useInfiniteQuery(sweepsQueryOptions(railId));

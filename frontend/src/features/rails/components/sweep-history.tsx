@@ -5,25 +5,32 @@ import LockOutlined from '@mui/icons-material/LockOutlined';
 import { SweepOverlayChart } from '../../../components/charts/sweep-overlay-chart';
 import { fromMm, UNIT_LABELS } from '../../../lib/units';
 import { useDeleteSweep } from '../api/delete-sweep';
-import { PHASE_LABELS, type Sweep } from '../types';
+import { useSweepsById } from '../api/get-sweep';
+import { useSweeps, type SweepListItem } from '../api/get-sweeps';
+import { PHASE_LABELS } from '../types';
 import { showInTargetUnit } from '../utils/display';
 import { CheckStatusChip } from './check-status-chip';
 import { SweepResult } from './sweep-result';
 
-const when = (s: Sweep) => new Date(s.takenAt).toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' });
+const when = (s: { takenAt: string }) => new Date(s.takenAt).toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' });
 
-/** Every sweep of the rail, newest first; pick two to overlay, open one to see its residuals. */
-export function SweepHistory({ sweeps, canRecord }: { sweeps: Sweep[]; canRecord: boolean }) {
+/**
+ * The rail's sweeps, newest first, a page at a time; pick two to overlay, open one to see its
+ * residuals. The list holds summaries; the readings of the sweeps overlaid or opened are fetched.
+ */
+export function SweepHistory({ sweeps, canRecord }: { sweeps: SweepListItem[]; canRecord: boolean }) {
   // Until someone picks, the overlay follows the two newest sweeps.
   const [chosenIds, setPicked] = useState<string[] | null>(null);
   const picked = chosenIds ?? sweeps.slice(0, 2).map((s) => s.id);
   const [open, setOpen] = useState<string | null>(null);
   const remove = useDeleteSweep();
+  const more = useSweeps(sweeps[0]?.railId ?? '');
+  const full = useSweepsById([...picked, ...(open && !picked.includes(open) ? [open] : [])]);
   if (!sweeps.length) return null;
-  const chosen = sweeps.filter((s) => picked.includes(s.id));
+  const chosen = full.filter((s) => picked.includes(s.id));
   const unit = chosen[0]?.unit ?? sweeps[0].unit;
   const toggle = (id: string) => setPicked(picked.includes(id) ? picked.filter((x) => x !== id) : [...picked, id].slice(-2));
-  const opened = sweeps.find((s) => s.id === open);
+  const opened = full.find((s) => s.id === open);
 
   return (
     <Stack spacing={2}>
@@ -59,8 +66,8 @@ export function SweepHistory({ sweeps, canRecord }: { sweeps: Sweep[]; canRecord
                     </Typography>
                   </TableCell>
                   <TableCell>{PHASE_LABELS[s.phase]}</TableCell>
-                  <TableCell>{showInTargetUnit(s.result.leastSquares.straightness, s.target)}</TableCell>
-                  <TableCell>{showInTargetUnit(s.result.minimumZone.straightness, s.target)}</TableCell>
+                  <TableCell>{showInTargetUnit(s.leastSquaresStraightness, s.target)}</TableCell>
+                  <TableCell>{showInTargetUnit(s.minimumZoneStraightness, s.target)}</TableCell>
                   <TableCell>
                     <CheckStatusChip status={s.status} />
                   </TableCell>
@@ -85,6 +92,13 @@ export function SweepHistory({ sweeps, canRecord }: { sweeps: Sweep[]; canRecord
             </TableBody>
           </Table>
         </TableContainer>
+        {more.hasNextPage && (
+          <Box sx={{ mt: 1 }}>
+            <Button onClick={() => more.fetchNextPage()} disabled={more.isFetchingNextPage}>
+              {more.isFetchingNextPage ? 'Loading older sweeps…' : 'Load older sweeps'}
+            </Button>
+          </Box>
+        )}
         {chosen.length > 0 && (
           <Box sx={{ mt: 2 }}>
             <Typography color="text.secondary" sx={{ mb: 1 }}>
