@@ -144,11 +144,14 @@ function seamLine(doc: Doc, sheet: Sheet, at: number, along: 'x' | 'y', label: s
   if (along === 'x') {
     const x = toPage(sheet, at, 0).x * K;
     doc.moveTo(x, w.top * K).lineTo(x, (w.top + w.height) * K).stroke(GUIDE);
-    doc.undash().font('regular').fontSize(6).fillColor(GUIDE).text(label, x + 2, (w.top + w.height) * K - 10, { lineBreak: false });
+    // The label sits on this sheet's side of the line, so the window's edge never cuts it.
+    const own = label.startsWith('trim');
+    doc.undash().font('regular').fontSize(6).fillColor(GUIDE).text(label, own ? x + 2 : x - 102, (w.top + w.height) * K - 10, { width: 100, align: own ? 'left' : 'right', lineBreak: false });
   } else {
     const y = toPage(sheet, 0, at).y * K;
     doc.moveTo(w.left * K, y).lineTo((w.left + w.width) * K, y).stroke(GUIDE);
-    doc.undash().font('regular').fontSize(6).fillColor(GUIDE).text(label, w.left * K + 2, y + 2, { lineBreak: false });
+    const own = label.startsWith('trim');
+    doc.undash().font('regular').fontSize(6).fillColor(GUIDE).text(label, w.left * K + 2, own ? y + 2 : y - 9, { lineBreak: false });
   }
   doc.undash();
 }

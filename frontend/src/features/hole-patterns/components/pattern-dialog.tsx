@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { Alert, Box, Button, Dialog, DialogActions, DialogContent, DialogTitle, MenuItem, Stack, Tab, Tabs, TextField, Typography } from '@mui/material';
+import { Alert, Box, Button, Dialog, useMediaQuery, useTheme, DialogActions, DialogContent, DialogTitle, MenuItem, Stack, Tab, Tabs, TextField, Typography } from '@mui/material';
 import { ApiError } from '../../../lib/api-client';
 import { useSettled } from '../utils/use-settled';
 import { usePatternPreview } from '../api/preview-hole-pattern';
@@ -26,9 +26,11 @@ export function PatternDialog({ title, initial, saving, error, onSave, onClose }
   const problems = preview.error instanceof ApiError ? preview.error.details : preview.error ? [preview.error.message] : [];
   const saveProblems = error instanceof ApiError && error.details.length ? error.details : error ? [error.message] : [];
   const set = (change: (d: PatternDraft) => PatternDraft) => setDraft(change);
+  // On a phone the form and its drawing get the whole screen rather than a cramped box.
+  const phone = useMediaQuery(useTheme().breakpoints.down('sm'));
 
   return (
-    <Dialog open onClose={onClose} fullWidth maxWidth="md" aria-labelledby="pattern-dialog-title">
+    <Dialog open onClose={onClose} fullWidth fullScreen={phone} maxWidth="md" aria-labelledby="pattern-dialog-title">
       <DialogTitle id="pattern-dialog-title">{title}</DialogTitle>
       <DialogContent>
         <Stack spacing={2} sx={{ pt: 1 }}>
