@@ -16,6 +16,7 @@ export const KIND_LABELS: Record<string, string> = {
   approval: 'Approval',
   'approval-request': 'Approval request',
   evidence: 'Photo or file',
+  'hole-pattern': 'Hole pattern',
   'target-set': 'Target set',
   person: 'Person',
   'sign-in': 'Sign-in',
@@ -49,6 +50,7 @@ const TABLE_LABELS: Record<string, string> = {
   approvals: 'Approval',
   record_locks: 'Approval lock',
   evidence: 'Photo or file',
+  hole_patterns: 'Hole pattern',
   password_links: 'Password link',
 };
 
