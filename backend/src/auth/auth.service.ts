@@ -2,7 +2,7 @@ import { Injectable } from '@nestjs/common';
 import { TransactionContext } from '../database/transaction-context.js';
 import { RecordsService } from '../records/records.service.js';
 import { AuthRepository } from './auth.repository.js';
-import { LoginThrottle } from './login-throttle.js';
+import { SignInThrottle } from './login-throttle.js';
 import { verifyPassword } from './password.js';
 import type { SessionUser } from './session-user.js';
 
@@ -14,7 +14,7 @@ const DUMMY_HASH =
 export class AuthService {
   constructor(
     private readonly repo: AuthRepository,
-    private readonly throttle: LoginThrottle,
+    private readonly throttle: SignInThrottle,
     private readonly records: RecordsService,
     private readonly transactions: TransactionContext,
   ) {}
@@ -22,12 +22,11 @@ export class AuthService {
   async checkCredentials(address: string, email: string, password: string): Promise<SessionUser | null> {
     const found = await this.repo.findActiveByEmail(email);
     const ok = await verifyPassword(password, found?.passwordHash ?? DUMMY_HASH);
+    // Attempts are counted by the sign-in guard and strategy (SignInThrottle), before this runs.
     if (!found || !ok) {
-      this.throttle.recordFailure(address, email);
       await this.auditFailedSignIn(address, email);
       return null;
     }
-    this.throttle.recordSuccess(address, email);
     const { passwordHash: _omit, ...user } = found;
     await this.kept(() => this.records.audit(user, { recordType: 'sign-in', recordId: user.id, action: 'signed-in', summary: `${user.name} signed in` }));
     return user;

@@ -57,14 +57,4 @@ export class SignInThrottle {
   async succeed(email: string, address: string): Promise<void> {
     await Promise.all([this.attempts.clear(accountKey(email)), this.attempts.refund(addressKey(address))]);
   }
-
-  /**
-   * Kept while AuthService still reports outcomes itself: counting now happens in `check` and
-   * `succeed`, which the sign-in strategy calls, so these do nothing.
-   */
-  recordFailure(_address: string, _email: string): void {}
-  recordSuccess(_address: string, _email: string): void {}
 }
-
-/** The name AuthService injects. */
-export { SignInThrottle as LoginThrottle };

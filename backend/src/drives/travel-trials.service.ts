@@ -1,12 +1,12 @@
 import { BadRequestException, ConflictException, Injectable, NotFoundException, OnModuleInit } from '@nestjs/common';
 import type { SessionUser } from '../auth/session-user.js';
-import { evaluateTravelTrial, type TravelTrialResult } from '../engine/travel-trial.js';
+import { evaluateTravelTrial } from '../engine/travel-trial.js';
 import { toMm } from '../engine/units.js';
 import { MachinesService } from '../machines/machines.service.js';
 import { RecordsService } from '../records/records.service.js';
 import { SubjectsRegistry } from '../records/subjects.registry.js';
 import { AxesService } from './axes.service.js';
-import { toTravelTrialResponse } from './axis-check.mapper.js';
+import { storedTravelTrial, toTravelTrialResponse } from './axis-check.mapper.js';
 import { AxisChecksRepository, type TravelTrialRow } from './axis-checks.repository.js';
 import { DriveTargetsService } from './drive-targets.js';
 import type { CreateTravelTrialDto } from './dto/travel-trial.dto.js';
@@ -93,7 +93,9 @@ export class TravelTrialsService implements OnModuleInit {
     await this.machines.lockForChange(actor, found.machineId);
     const axis = await this.axes.findRow(actor, axisId);
     const trial = await this.findRow(actor, axisId, id);
-    const corrected = roundStepsPerMm((trial.result as unknown as TravelTrialResult).correctedStepsPerMm);
+    const result = storedTravelTrial(trial.result);
+    if (!result) throw new ConflictException('This trial\'s stored result cannot be read, so it cannot be applied: record the trial again');
+    const corrected = roundStepsPerMm(result.correctedStepsPerMm);
     if (!(corrected > 0)) throw new BadRequestException(['the trial has no usable corrected steps per mm']);
     if (trial.appliedAt) {
       if (axis.stepsPerMm === corrected) return this.axes.respond(axis);
