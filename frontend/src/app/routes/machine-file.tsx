@@ -1,5 +1,6 @@
-import { lazy, Suspense, type ReactNode } from 'react';
+import { lazy, Suspense, useEffect, type ReactNode } from 'react';
 import { useParams, useSearchParams } from 'react-router-dom';
+import { useQueryClient } from '@tanstack/react-query';
 import { Box, Tab, Tabs } from '@mui/material';
 import { PageHeader } from '../../components/layout/page-header';
 import { LoadingState } from '../../components/states/loading-state';
@@ -7,10 +8,12 @@ import { ErrorState } from '../../components/states/error-state';
 import { useMachine } from '../../features/machines/api/get-machine';
 import { MachineStateChip } from '../../features/machines/components/machine-state-chip';
 import { KIND_LABELS, type Machine } from '../../features/machines/types';
+import { readinessQueryOptions } from '../../features/approvals/api/get-readiness';
 
 // Each tab's code loads when the tab opens: the file opens on readiness without the charts,
 // grids and forms of the other tabs.
-const ReadinessBoard = lazy(() => import('../../features/approvals/components/readiness-board').then((m) => ({ default: m.ReadinessBoard })));
+const loadReadinessBoard = () => import('../../features/approvals/components/readiness-board');
+const ReadinessBoard = lazy(() => loadReadinessBoard().then((m) => ({ default: m.ReadinessBoard })));
 const MachineOverview = lazy(() => import('../../features/machines/components/machine-overview').then((m) => ({ default: m.MachineOverview })));
 const RailsPanel = lazy(() => import('../../features/rails/components/rails-panel').then((m) => ({ default: m.RailsPanel })));
 const DrivesPanel = lazy(() => import('../../features/drives/components/drives-panel').then((m) => ({ default: m.DrivesPanel })));
@@ -44,6 +47,13 @@ export default function MachineFileRoute() {
   const [params, setParams] = useSearchParams();
   const machine = useMachine(machineId);
   const tab = SECTIONS.some((s) => s.id === params.get('tab')) ? params.get('tab')! : SECTIONS[0].id;
+  const queryClient = useQueryClient();
+  // The file opens on readiness: fetch its code and its data alongside the machine, not after it.
+  useEffect(() => {
+    if (tab !== 'readiness' || !machineId) return;
+    void loadReadinessBoard();
+    void queryClient.prefetchQuery(readinessQueryOptions(machineId));
+  }, [tab, machineId, queryClient]);
 
   if (machine.isPending) return <LoadingState label="Opening the machine file…" />;
   if (machine.isError) return <ErrorState error={machine.error} onRetry={() => machine.refetch()} />;

@@ -43,13 +43,13 @@ export function StationReadings({
   );
   return (
     <TableContainer sx={{ maxHeight: 520 }}>
-      <Table size="small" stickyHeader aria-label="Stations and readings" sx={{ '& td, & th': { px: 1 } }}>
+      <Table size="small" stickyHeader aria-label="Stations and readings" sx={{ '& td, & th': { px: { xs: 0.5, sm: 1 } } }}>
         <TableHead>
           <TableRow>
-            <TableCell sx={{ width: 40 }}>#</TableCell>
-            <TableCell sx={{ width: 100 }}>Station (mm)</TableCell>
+            <TableCell sx={{ width: { xs: 24, sm: 40 } }}>#</TableCell>
+            <TableCell sx={{ width: { xs: 72, sm: 100 } }}>Station (mm)</TableCell>
             <TableCell>Reading ({UNIT_LABELS[unit]})</TableCell>
-            <TableCell align="right" sx={{ width: 80 }}>
+            <TableCell align="right" sx={{ width: { xs: 56, sm: 80 } }}>
               Residual
             </TableCell>
             <TableCell sx={{ width: 40 }} />

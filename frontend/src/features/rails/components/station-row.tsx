@@ -32,7 +32,7 @@ export const StationRow = memo(function StationRow({ index: i, row: r, unit, pro
           onChange={(e) => onRowChange(i, { position: e.target.value })}
           variant="standard"
           slotProps={{ htmlInput: { inputMode: 'decimal', 'aria-label': `Station ${i + 1} position (mm)`, tabIndex: -1 } }}
-          sx={{ width: 80 }}
+          sx={{ width: { xs: 60, sm: 80 } }}
         />
       </TableCell>
       <TableCell>
@@ -50,10 +50,10 @@ export const StationRow = memo(function StationRow({ index: i, row: r, unit, pro
           helperText={problem}
           autoComplete="off"
           slotProps={{
-            htmlInput: { inputMode: 'decimal', 'aria-label': `Reading at ${r.position || '?'} mm`, enterKeyHint: 'next' },
+            htmlInput: { inputMode: 'decimal', 'aria-label': `Reading at ${r.position || '?'} mm`, enterKeyHint: 'next', 'data-indicator-cell': i },
             input: { endAdornment: <InputAdornment position="end">{UNIT_LABELS[unit]}</InputAdornment> },
           }}
-          sx={{ width: 130 }}
+          sx={{ width: { xs: 108, sm: 130 } }}
         />
       </TableCell>
       <TableCell align="right" sx={{ color: 'text.secondary', fontVariantNumeric: 'tabular-nums' }}>
