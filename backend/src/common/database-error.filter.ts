@@ -57,7 +57,21 @@ export class DatabaseErrorFilter implements ExceptionFilter {
       reply.status(err.statusCode).send({ statusCode: err.statusCode, message: err.message });
       return;
     }
-    this.logger.error(exception instanceof Error ? exception.stack : String(exception));
+    this.logger.error(loggable(exception));
     reply.status(500).send({ statusCode: 500, message: 'Something went wrong on the server' });
   }
+}
+
+/**
+ * What a failure leaves in the log: a failed query's text and the database's own message, never
+ * its parameters (they can hold password hashes, tokens or anything a person typed).
+ */
+export function loggable(exception: unknown): string {
+  const e = exception as { query?: unknown; params?: unknown; cause?: { message?: string; code?: string }; stack?: string; name?: string };
+  if (e && typeof e === 'object' && typeof e.query === 'string' && 'params' in e) {
+    const cause = e.cause ? ` — ${e.cause.code ?? ''} ${e.cause.message ?? ''}`.trimEnd() : '';
+    const where = (e.stack ?? '').split('\n').filter((l) => l.trim().startsWith('at ')).slice(0, 5).join('\n');
+    return `Failed query: ${e.query}${cause}\n${where}`;
+  }
+  return exception instanceof Error ? (exception.stack ?? exception.message) : String(exception);
 }
