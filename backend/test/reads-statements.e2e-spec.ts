@@ -75,7 +75,7 @@ describe('reads: statements per request do not grow with the number of sweeps', 
   }
 
   it('lists machines and shows the board in a fixed number of statements at 0, 100 and 1 000 old sweeps', async () => {
-    const seen: Record<number, { list: number; board: number }> = {};
+    const seen: Record<number, { list: number; board: number; rails: number }> = {};
     let firstBoard: unknown = null;
     let firstList: unknown = null;
     for (const total of [0, 100, 1000]) {
@@ -86,7 +86,11 @@ describe('reads: statements per request do not grow with the number of sweeps', 
       }
       const list = await count('/api/machines');
       const board = await count(`/api/machines/${machineId}/readiness`);
-      seen[total] = { list: list.n, board: board.n };
+      const rails = await count(`/api/machines/${machineId}/rails`);
+      seen[total] = { list: list.n, board: board.n, rails: rails.n };
+      // The rails tab counts the sweeps and shows the newest: it never reads their readings.
+      expect((rails.body as { sweepCount: number }[]).map((r) => r.sweepCount)).toEqual([total + 1, total + 1]);
+      expect(rails.statements.some((s) => /readings_mm|readings_raw/.test(s))).toBe(false);
       // Old sweeps change nothing the reads show: the newest sweep of each rail still decides.
       const mine = (list.body as { id: string }[]).find((m) => m.id === machineId);
       firstList ??= mine;

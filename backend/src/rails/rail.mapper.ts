@@ -1,7 +1,7 @@
 import { holePositions } from '../engine/bolt-down.js';
 import type { StoredSweepResult } from '../database/schema/rails.js';
 import { typicalBoltFor } from './bolt-torques.js';
-import type { RailRow, SweepListRow, SweepRow } from './rails.repository.js';
+import type { LatestSweep, RailRow, SweepListRow, SweepRow } from './rails.repository.js';
 
 export interface RailResponse {
   id: string;
@@ -104,6 +104,20 @@ export function toSweepSummary(row: SweepRow): SweepSummary {
     minimumZoneStraightness: row.result.minimumZone.straightness,
     status: row.status,
     target: row.target,
+  };
+}
+
+/** The same summary from the newest-sweep query, which reads no readings. */
+export function toLatestSweepSummary(s: LatestSweep): SweepSummary {
+  return {
+    id: s.id,
+    takenAt: s.takenAt.toISOString(),
+    phase: s.phase,
+    datum: s.datum,
+    leastSquaresStraightness: s.leastSquaresStraightness,
+    minimumZoneStraightness: s.minimumZoneStraightness,
+    status: s.status,
+    target: s.target,
   };
 }
 

@@ -1,5 +1,5 @@
 import { Inject, Injectable } from '@nestjs/common';
-import { and, asc, desc, eq, inArray, sql } from 'drizzle-orm';
+import { and, asc, count, desc, eq, inArray, sql } from 'drizzle-orm';
 import { DRIZZLE, type Database } from '../database/database.tokens.js';
 import { machines, rails, railSweeps } from '../database/schema/index.js';
 
@@ -102,13 +102,15 @@ export class RailsRepository {
   }
 
   /** Every sweep of the given rails, newest first (for readiness and the rails tab). */
-  sweepsOfRails(workshopId: string, railIds: string[]): Promise<SweepRow[]> {
-    if (!railIds.length) return Promise.resolve([]);
-    return this.db
-      .select()
+  /** How many sweeps each rail has: counted on the index, no sweep row is read. */
+  async sweepCounts(workshopId: string, railIds: string[]): Promise<Map<string, number>> {
+    if (!railIds.length) return new Map();
+    const rows = await this.db
+      .select({ railId: railSweeps.railId, n: count() })
       .from(railSweeps)
       .where(and(eq(railSweeps.workshopId, workshopId), inArray(railSweeps.railId, railIds)))
-      .orderBy(desc(railSweeps.takenAt), desc(railSweeps.createdAt));
+      .groupBy(railSweeps.railId);
+    return new Map(rows.map((r) => [r.railId, Number(r.n)]));
   }
 
   /**
