@@ -1,59 +1,48 @@
-import { evaluatePositioning, type PositioningRun } from '../src/engine/positioning.js';
-import { randomRailSweep, seededRandom } from '../src/engine/seeded-random.js';
-import { leastSquaresStraightness, minimumZoneStraightness } from '../src/engine/straightness.js';
+import { existsSync } from 'node:fs';
+import os from 'node:os';
+import { fileURLToPath } from 'node:url';
+import { benchTable } from './bench-table.js';
+import { engineTimings } from './engine-timings.js';
+import { seedBenchWorkshop } from './server/bench-seed.js';
+import type { BenchContext, BenchRow } from './server/bench-types.js';
+import { writeScenarios } from './server/scenarios-writes.js';
 
 /**
- * Times the engine's heavy computations: least-squares and minimum-zone straightness for 10k,
- * 100k and 1M stations (cost should grow no faster than n log n), and an ISO 230-2 evaluation of
- * 20 targets × 5 runs × 2 directions. Prints the median of several runs of each.
- * The 200 000-point request limit is lifted for these calls so the 1M case can be timed.
+ * `npm run bench` (scripts/bench.sh starts PostgreSQL, the product and the bare baseline, then
+ * this): reads, writes and calculations of the product against the bare server in one run, the
+ * page's sizes, and the engine's own timings, printed as one table of goals met or not.
+ * Without BENCH_PRODUCT_URL only the engine is timed.
  */
 
-function median(values: number[]): number {
-  const s = [...values].sort((a, b) => a - b);
-  const mid = s.length >> 1;
-  return s.length % 2 ? s[mid] : (s[mid - 1] + s[mid]) / 2;
-}
-
-function time(runs: number, fn: () => unknown): number {
-  fn(); // warm-up: let the JIT compile before timing
-  const samples: number[] = [];
-  for (let i = 0; i < runs; i++) {
-    const t0 = process.hrtime.bigint();
-    fn();
-    samples.push(Number(process.hrtime.bigint() - t0) / 1e6);
+async function optional<T>(file: string, name: string, call: (fn: (...a: never[]) => Promise<T>) => Promise<T>): Promise<T | null> {
+  const path = fileURLToPath(new URL(file, import.meta.url));
+  if (!existsSync(path)) return null;
+  try {
+    const mod = (await import(path)) as Record<string, (...a: never[]) => Promise<T>>;
+    return await call(mod[name]);
+  } catch (err) {
+    // One section failing (e.g. no frontend build to weigh) must not lose the rest of the table.
+    console.error(`bench: ${file} failed: ${(err as Error).message}`);
+    return null;
   }
-  return median(samples);
 }
 
-const fmt = (ms: number) => `${ms.toFixed(2).padStart(9)} ms`;
-
-console.log('Railwright engine bench (median of repeated runs)\n');
-console.log('stations     least squares   minimum zone   minimum zone (shuffled)');
-for (const n of [10_000, 100_000, 1_000_000]) {
-  const sweep = randomRailSweep(n, 42);
-  const rand = seededRandom(7);
-  const order = Array.from({ length: n }, (_, i) => i);
-  for (let i = n - 1; i > 0; i--) {
-    const j = Math.floor(rand() * (i + 1));
-    [order[i], order[j]] = [order[j], order[i]];
-  }
-  const shuffled = { positionsMm: order.map((i) => sweep.positionsMm[i]), readingsMm: order.map((i) => sweep.readingsMm[i]) };
-  const runs = n >= 1_000_000 ? 5 : 15;
-  const ls = time(runs, () => leastSquaresStraightness(sweep, { maxPoints: Infinity }));
-  const mz = time(runs, () => minimumZoneStraightness(sweep, { maxPoints: Infinity }));
-  const mzShuffled = time(runs, () => minimumZoneStraightness(shuffled, { maxPoints: Infinity }));
-  console.log(`${String(n).padStart(9)}   ${fmt(ls)}    ${fmt(mz)}    ${fmt(mzShuffled)}`);
+const rows: BenchRow[] = [];
+const started = Date.now();
+const productUrl = process.env.BENCH_PRODUCT_URL;
+if (productUrl) {
+  const ctx = await seedBenchWorkshop(productUrl, process.env.BENCH_BARE_URL!, process.env.BENCH_OWNER_DATABASE_URL!);
+  const reads = await optional<BenchRow[]>('./server/scenarios-reads.js', 'readScenarios', (fn) => (fn as unknown as (c: BenchContext) => Promise<BenchRow[]>)(ctx));
+  if (reads) rows.push(...reads);
+  else console.error('bench: no read scenarios (bench/server/scenarios-reads.ts) in this build');
+  rows.push(...(await writeScenarios(ctx)));
 }
+const sizes = await optional<BenchRow[]>('./server/frontend-sizes.js', 'frontendSizes', (fn) => (fn as unknown as () => Promise<BenchRow[]>)());
+if (sizes) rows.push(...sizes);
+rows.push(...engineTimings());
 
-const rand = seededRandom(3);
-const targetsMm = Array.from({ length: 20 }, (_, i) => i * 97 + Math.round(rand() * 20));
-const runs: PositioningRun[] = [];
-for (let k = 0; k < 10; k++) {
-  runs.push({
-    direction: k < 5 ? 'up' : 'down',
-    deviationsMm: targetsMm.map((t) => 1e-5 * t + (k < 5 ? 0.004 : -0.004) + (rand() - 0.5) * 0.006),
-  });
-}
-const iso = time(200, () => evaluatePositioning({ targetsMm, runs }));
-console.log(`\nISO 230-2, 20 targets × 5 runs × 2 directions: ${fmt(iso)}`);
+const cpu = os.cpus()[0]?.model.trim() ?? 'unknown CPU';
+console.log(`\nRailwright bench, ${new Date().toISOString().slice(0, 10)}, ${os.cpus().length} × ${cpu}, Node ${process.version}, ${Math.round((Date.now() - started) / 1000)} s\n`);
+console.log(benchTable(rows));
+const missed = rows.filter((r) => r.met === false);
+console.log(`\n${rows.filter((r) => r.met).length} goals met, ${missed.length} missed${missed.length ? `: ${missed.map((r) => r.name).join('; ')}` : ''}`);
