@@ -1,7 +1,7 @@
 import { Injectable } from '@nestjs/common';
 import type { TargetValue } from '../database/schema/target-sets.js';
 import { TargetSetsService } from '../target-sets/target-sets.service.js';
-import type { TargetKey } from '../target-sets/target-keys.js';
+import { targetInBaseUnit, type TargetKey } from '../target-sets/target-keys.js';
 
 export type DriveTargetKey = Extract<TargetKey, 'stepsPerMmError' | 'positioningAccuracy' | 'repeatability' | 'reversal' | 'screwSpeedHeadroom' | 'travelMargin'>;
 const KEYS: DriveTargetKey[] = ['stepsPerMmError', 'positioningAccuracy', 'repeatability', 'reversal', 'screwSpeedHeadroom', 'travelMargin'];
@@ -19,8 +19,9 @@ export type DriveTargets = Record<DriveTargetKey, Target>;
 export class DriveTargetsService {
   constructor(private readonly targetSets: TargetSetsService) {}
 
+  /** One read of the target set for every drive target. */
   async forMachine(machine: { workshopId: string; targetSetId: string }): Promise<DriveTargets> {
-    const entries = await Promise.all(KEYS.map(async (k) => [k, await this.targetSets.targetFor(machine.workshopId, machine.targetSetId, k)] as const));
-    return Object.fromEntries(entries) as DriveTargets;
+    const set = await this.targetSets.findRow(machine.workshopId, machine.targetSetId);
+    return Object.fromEntries(KEYS.map((k) => [k, { target: set.targets[k], base: targetInBaseUnit(set.targets[k]) }])) as DriveTargets;
   }
 }
