@@ -74,7 +74,7 @@ describe('statements per write', () => {
     expect(res.body.result.leastSquares.straightness).toBeGreaterThan(0);
     // The answer comes from what was inserted: no statement reads the new sweep back.
     expect(list.filter((s) => /^select/i.test(s.trim()) && /from "rail_sweeps"/i.test(s))).toEqual([]);
-    expect(own.length).toBeLessThanOrEqual(9);
+    expect(own.length).toBeLessThanOrEqual(8);
   });
 
   it('a hole write: the machine locked once, the hole, its audit, the answer from one read of the holes', async () => {

@@ -5,6 +5,7 @@ import { arrayToMm, fromMm } from '../engine/units.js';
 import type { StoredLine, StoredSweepResult } from '../database/schema/rails.js';
 import { MachinesService } from '../machines/machines.service.js';
 import { RecordsService } from '../records/records.service.js';
+import { targetInBaseUnit } from '../target-sets/target-keys.js';
 import { TargetSetsService } from '../target-sets/target-sets.service.js';
 import { toSweepListItem, toSweepResponse, type SweepListItem, type SweepResponse } from './rail.mapper.js';
 import { DEFAULT_PAGE_SIZE } from '../records/page-cursor.js';
@@ -49,7 +50,7 @@ export class RailSweepsService {
   async record(actor: SessionUser, railId: string, dto: CreateSweepDto): Promise<{ created: boolean; sweep: SweepResponse }> {
     const found = await this.repo.findRailForSweep(actor.workshopId, railId);
     if (!found) throw new NotFoundException('No such rail in this workshop');
-    const { rail, targetSetId } = found;
+    const { rail, targets } = found;
     if (dto.id) {
       const existing = await this.repeatOf(actor, railId, dto.id);
       if (existing) return { created: false, sweep: existing };
@@ -63,7 +64,8 @@ export class RailSweepsService {
     const readingsMm = arrayToMm(readingsRaw, dto.unit);
     const fitted = evaluateStraightness({ positionsMm, readingsMm });
     const result: StoredSweepResult = { leastSquares: line(fitted.leastSquares), minimumZone: line(fitted.minimumZone), endPoint: line(fitted.endPoint) };
-    const { target, base } = await this.targetSets.targetFor(actor.workshopId, targetSetId, 'railStraightness');
+    const target = targets.railStraightness;
+    const base = targetInBaseUnit(target);
     const status = result.leastSquares.straightness <= base ? 'within-target' : 'outside-target';
 
     const now = new Date();

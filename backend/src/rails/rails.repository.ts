@@ -1,9 +1,10 @@
 import { Inject, Injectable } from '@nestjs/common';
 import { and, asc, count, desc, eq, inArray, sql } from 'drizzle-orm';
 import { DRIZZLE, type Database } from '../database/database.tokens.js';
-import { machines, rails, railSweeps } from '../database/schema/index.js';
+import { machines, rails, railSweeps, targetSets } from '../database/schema/index.js';
 
 export type RailRow = typeof rails.$inferSelect;
+type TargetSetRow = typeof targetSets.$inferSelect;
 export type SweepRow = typeof railSweeps.$inferSelect;
 type RailInsert = typeof rails.$inferInsert;
 
@@ -261,12 +262,13 @@ export class RailsRepository {
     await this.db.delete(railSweeps).where(and(eq(railSweeps.workshopId, workshopId), eq(railSweeps.id, id)));
   }
 
-  /** A rail with its machine's target set, in one read, for recording a sweep on it. */
-  async findRailForSweep(workshopId: string, railId: string): Promise<{ rail: RailRow; targetSetId: string } | null> {
+  /** A rail with its machine's target set and that set's targets, in one read, for recording a sweep on it. */
+  async findRailForSweep(workshopId: string, railId: string): Promise<{ rail: RailRow; targetSetId: string; targets: TargetSetRow['targets'] } | null> {
     const [found] = await this.db
-      .select({ rail: rails, targetSetId: machines.targetSetId })
+      .select({ rail: rails, targetSetId: machines.targetSetId, targets: targetSets.targets })
       .from(rails)
       .innerJoin(machines, eq(machines.id, rails.machineId))
+      .innerJoin(targetSets, and(eq(targetSets.id, machines.targetSetId), eq(targetSets.workshopId, workshopId)))
       .where(and(eq(rails.workshopId, workshopId), eq(rails.id, railId)));
     return found ?? null;
   }
