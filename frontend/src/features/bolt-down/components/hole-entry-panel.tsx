@@ -1,6 +1,8 @@
 import { useState, type FormEvent } from 'react';
 import { Alert, Box, Button, Chip, Paper, Stack, TextField, Typography } from '@mui/material';
 import CheckOutlined from '@mui/icons-material/CheckOutlined';
+import { IndicatorPanel } from '../../../components/indicator-input/indicator-panel';
+import { useIndicatorInput } from '../../../components/indicator-input/use-indicator-input';
 import { ApiError } from '../../../lib/api-client';
 import { UNIT_LABELS } from '../../../lib/units';
 import { palette } from '../../../theme/theme';
@@ -35,6 +37,20 @@ export function HoleEntryPanel({ bd, hole, isNext, refusal, onFixed, onRefused }
   const [problem, setProblem] = useState<string | null>(null);
   const record = useRecordHole(bd.id);
   const unit = UNIT_LABELS[bd.unit];
+  const typeIn = (t: string) => {
+    setText(t);
+    saveDraft(bd.id, hole.index, t);
+    setProblem(null);
+  };
+  // A reading from an indicator fills the field and never fixes the hole: fixing stays the person's act.
+  const indicator = useIndicatorInput({
+    unit: bd.unit,
+    enterMovesOn: false,
+    place: (t) => {
+      typeIn(t);
+      return { cell: 'reading', label: `${holeName(hole.index).toLowerCase()} at ${hole.position} mm, not fixed yet`, undo: () => typeIn('') };
+    },
+  });
 
   const typed = parseReading(text);
   const difference = typed !== null && hole.target !== null ? typed - hole.target : null;
@@ -60,7 +76,7 @@ export function HoleEntryPanel({ bd, hole, isNext, refusal, onFixed, onRefused }
 
   const colour = difference === null ? 'text.secondary' : within ? palette.within : palette.brass;
   return (
-    <Paper component="form" onSubmit={fix} noValidate sx={{ p: { xs: 2, md: 3 } }} aria-label={`Fixing ${holeName(hole.index)}`}>
+    <Paper ref={indicator.containerRef} component="form" onSubmit={fix} noValidate sx={{ p: { xs: 2, md: 3 } }} aria-label={`Fixing ${holeName(hole.index)}`}>
       <Stack direction="row" spacing={1} sx={{ alignItems: 'center', flexWrap: 'wrap', mb: 1 }}>
         <Typography variant="h2" component="h2">
           {holeName(hole.index)}
@@ -69,6 +85,7 @@ export function HoleEntryPanel({ bd, hole, isNext, refusal, onFixed, onRefused }
         {isNext ? <Chip size="small" color="primary" label="Next in the order" /> : <Chip size="small" variant="outlined" label={`No. ${hole.order + 1} in the order`} />}
         {hole.fixed && <Chip size="small" color="success" variant="outlined" label={`Fixed at ${signed(hole.reading, bd.unit)}`} />}
       </Stack>
+      <IndicatorPanel indicator={indicator} nextLabel="this hole's reading" />
 
       <Box sx={{ display: 'grid', gridTemplateColumns: { xs: '1fr', sm: '1fr 1fr' }, gap: 2, alignItems: 'start' }}>
         <Box>
@@ -83,14 +100,10 @@ export function HoleEntryPanel({ bd, hole, isNext, refusal, onFixed, onRefused }
             autoFocus
             label={`Reading at ${holeName(hole.index).toLowerCase()} (${unit})`}
             value={text}
-            onChange={(e) => {
-              setText(e.target.value);
-              saveDraft(bd.id, hole.index, e.target.value);
-              setProblem(null);
-            }}
+            onChange={(e) => typeIn(e.target.value)}
             error={!!problem}
-            helperText={problem ?? 'Enter fixes the hole'}
-            slotProps={{ htmlInput: { inputMode: 'decimal', autoComplete: 'off', style: { fontSize: '1.8rem', padding: '10px 12px' } } }}
+            helperText={problem ?? 'Enter fixes the hole (a reading sent by an indicator does not)'}
+            slotProps={{ htmlInput: { inputMode: 'decimal', autoComplete: 'off', 'data-indicator-cell': 'reading', style: { fontSize: '1.8rem', padding: '10px 12px' } } }}
             sx={{ mt: 2, width: '100%', maxWidth: 320 }}
             size="medium"
           />

@@ -1,6 +1,8 @@
 import { useRef, useState } from 'react';
 import { Alert, Box, Button, MenuItem, Paper, Stack, TextField, Typography } from '@mui/material';
 import UploadFileOutlined from '@mui/icons-material/UploadFileOutlined';
+import { IndicatorPanel } from '../../../components/indicator-input/indicator-panel';
+import { useIndicatorInput } from '../../../components/indicator-input/use-indicator-input';
 import { UNIT_LABELS, type LengthUnit } from '../../../lib/units';
 import { useRecordPositioningRun } from '../api/record-positioning-run';
 import type { Axis, PositioningRun } from '../types';
@@ -46,6 +48,20 @@ export function PositioningGrid({ axis, onRecorded }: { axis: Axis; onRecorded: 
     setTargets((t) => Array.from({ length: n }, (_, i) => t[i] ?? ''));
     setCells((c) => resize(c, rows, n));
   };
+
+  const setCell = (r: number, c: number, v: string) => setCells((x) => x.map((line, i) => (i === r ? line.map((old, j) => (j === c ? v : old)) : line)));
+  // An indicator's reading goes to the cell it was typed in, or else the first empty one down the columns (the Enter order).
+  const indicator = useIndicatorInput({
+    unit,
+    place: (text, cell) => {
+      const empty = Array.from({ length: rows * cols }, (_, k) => [k % rows, Math.floor(k / rows)]).find(([r, c]) => !cells[r]?.[c]?.trim());
+      const [r, c] = cell ? cell.split('-').map(Number) : (empty ?? [-1, -1]);
+      if (r < 0) return null;
+      setCell(r, c, text);
+      const { direction, run } = rowLabel(r, runs, order);
+      return { cell: `${r}-${c}`, label: `${direction} ${run}, target ${c + 1} at ${targets[c] || '?'} mm`, undo: () => setCell(r, c, '') };
+    },
+  });
 
   const focusCell = (r: number, c: number) => setTimeout(() => document.querySelector<HTMLInputElement>(`[data-cell="${r}-${c}"]`)?.focus());
   const onKeyDown = (r: number, c: number) => (e: React.KeyboardEvent) => {
@@ -129,7 +145,7 @@ export function PositioningGrid({ axis, onRecorded }: { axis: Axis; onRecorded: 
   const empty = cells.flat().filter((v) => v.trim() === '').length;
 
   return (
-    <Paper sx={{ p: 2.5 }}>
+    <Paper ref={indicator.containerRef} sx={{ p: 2.5 }}>
       <Typography variant="h4" component="h3" gutterBottom>
         Record a repeat-and-reverse run
       </Typography>
@@ -162,6 +178,7 @@ export function PositioningGrid({ axis, onRecorded }: { axis: Axis; onRecorded: 
           </Button>
           <input ref={file} type="file" accept=".csv,.txt,text/csv,text/plain" hidden aria-label="CSV file of runs" onChange={(e) => onFile(e.target.files?.[0]).finally(() => (e.target.value = ''))} />
         </Box>
+        <IndicatorPanel indicator={indicator} />
         {problems.length > 0 && <Alert severity="error">{problems.join('; ')}</Alert>}
         {record.error && <Alert severity="error">{errorText(record.error)}</Alert>}
         <Box sx={{ overflowX: 'auto', pb: 1 }}>
@@ -196,12 +213,12 @@ export function PositioningGrid({ axis, onRecorded }: { axis: Axis; onRecorded: 
                       <td key={c}>
                         <TextField
                           value={v}
-                          onChange={(e) => setCells((x) => x.map((line, i) => (i === r ? line.map((old, j) => (j === c ? e.target.value.replace(',', '.') : old)) : line)))}
+                          onChange={(e) => setCell(r, c, e.target.value.replace(',', '.'))}
                           onPaste={onPaste(r, c)}
                           onKeyDown={onKeyDown(r, c)}
                           error={v.trim() !== '' && numberOf(v) === undefined}
                           sx={cellSx}
-                          slotProps={{ htmlInput: { inputMode: 'decimal', 'data-cell': `${r}-${c}`, 'aria-label': `${direction === 'up' ? 'Up' : 'Down'} ${run}, target ${c + 1}` } }}
+                          slotProps={{ htmlInput: { inputMode: 'decimal', 'data-cell': `${r}-${c}`, 'data-indicator-cell': `${r}-${c}`, 'aria-label': `${direction === 'up' ? 'Up' : 'Down'} ${run}, target ${c + 1}` } }}
                         />
                       </td>
                     ))}

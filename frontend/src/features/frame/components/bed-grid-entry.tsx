@@ -1,5 +1,7 @@
 import { useRef, useState, type ClipboardEvent, type FormEvent, type KeyboardEvent } from 'react';
 import { Alert, Box, Button, InputBase, Stack, Table, TableBody, TableCell, TableContainer, TableHead, TableRow, TextField, Typography } from '@mui/material';
+import { IndicatorPanel } from '../../../components/indicator-input/indicator-panel';
+import { useIndicatorInput } from '../../../components/indicator-input/use-indicator-input';
 import { UNIT_LABELS, type LengthUnit } from '../../../lib/units';
 import { useCreateBedGrid } from '../api/create-bed-grid';
 import type { BedGrid } from '../types';
@@ -37,6 +39,19 @@ export function BedGridEntry({ machineId, workArea, onSaved }: { machineId: stri
     if (nr !== rows) setYs(evenPositions(nr, workArea.y).map(String));
     setZ((old) => resize(old, nr, () => []).map((row) => resize(row, nc, () => '')));
   };
+
+  const setHeight = (r: number, c: number, v: string) => setZ((old) => old.map((row, i) => (i === r ? row.map((x, k) => (k === c ? v : x)) : row)));
+  // An indicator's reading goes to the cell it was typed in, or else the first empty one, row by row (the Enter order).
+  const indicator = useIndicatorInput({
+    unit,
+    place: (text, cell) => {
+      const empty = Array.from({ length: rows * columns }, (_, k) => [Math.floor(k / columns), k % columns]).find(([r, c]) => !z[r]?.[c]?.trim());
+      const [r, c] = cell ? cell.split('-').map(Number) : (empty ?? [-1, -1]);
+      if (r < 0) return null;
+      setHeight(r, c, text);
+      return { cell: `${r}-${c}`, label: `row ${r + 1}, column ${c + 1} (X ${xs[c]}, Y ${ys[r]} mm)`, undo: () => setHeight(r, c, '') };
+    },
+  });
 
   const focus = (r: number, c: number) => cells.current.get(`${r}-${c}`)?.select();
   const onKey = (r: number, c: number) => (e: KeyboardEvent<HTMLInputElement>) => {
@@ -90,7 +105,7 @@ export function BedGridEntry({ machineId, workArea, onSaved }: { machineId: stri
   };
 
   return (
-    <Box component="form" onSubmit={submit} noValidate aria-label="Bed grid">
+    <Box ref={indicator.containerRef} component="form" onSubmit={submit} noValidate aria-label="Bed grid">
       <Stack spacing={1.5}>
         <Box sx={{ display: 'flex', gap: 1.5, flexWrap: 'wrap' }}>
           <TextField label="Rows" type="number" value={rows} onChange={(e) => setSize(Number(e.target.value), columns)} slotProps={{ htmlInput: { min: 1, max: MAX } }} sx={{ width: 96 }} />
@@ -100,6 +115,7 @@ export function BedGridEntry({ machineId, workArea, onSaved }: { machineId: stri
         <Typography variant="body2" color="text.secondary">
           Positions in mm; heights in {UNIT_LABELS[unit]}, from a gauge block or an indicator, any zero. Enter moves on, ↑ ↓ move between rows, a pasted block fills the grid.
         </Typography>
+        <IndicatorPanel indicator={indicator} />
         <TableContainer sx={{ maxWidth: '100%' }}>
           <Table size="small" aria-label="Bed grid heights" sx={{ '& td, & th': { px: 0.5, py: 0.5, borderBottom: 0 } }}>
             <TableHead>
@@ -124,14 +140,14 @@ export function BedGridEntry({ machineId, workArea, onSaved }: { machineId: stri
                     <TableCell key={c}>
                       <InputBase
                         value={z[r]?.[c] ?? ''}
-                        onChange={(e) => setZ((old) => old.map((row, i) => (i === r ? row.map((v, k) => (k === c ? e.target.value : v)) : row)))}
+                        onChange={(e) => setHeight(r, c, e.target.value)}
                         onKeyDown={onKey(r, c)}
                         onPaste={onPaste(r, c)}
                         inputRef={(el: HTMLInputElement | null) => {
                           if (el) cells.current.set(`${r}-${c}`, el);
                           else cells.current.delete(`${r}-${c}`);
                         }}
-                        inputProps={{ 'aria-label': `Height at row ${r + 1}, column ${c + 1}`, inputMode: 'decimal' }}
+                        inputProps={{ 'aria-label': `Height at row ${r + 1}, column ${c + 1}`, inputMode: 'decimal', 'data-indicator-cell': `${r}-${c}` }}
                         sx={cellSx}
                       />
                     </TableCell>

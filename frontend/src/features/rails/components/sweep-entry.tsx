@@ -1,6 +1,8 @@
 import { useCallback, useDeferredValue, useMemo, useRef, useState } from 'react';
 import { Alert, Box, Button, Grid, InputAdornment, MenuItem, Paper, Stack, TextField, ToggleButton, ToggleButtonGroup, Typography } from '@mui/material';
 import FileUploadOutlined from '@mui/icons-material/FileUploadOutlined';
+import { IndicatorPanel } from '../../../components/indicator-input/indicator-panel';
+import { useIndicatorInput } from '../../../components/indicator-input/use-indicator-input';
 import { fromMm, UNIT_LABELS, type LengthUnit } from '../../../lib/units';
 import { useBoltTorques } from '../api/get-bolt-torques';
 import { useRecordSweep } from '../api/record-sweep';
@@ -34,6 +36,17 @@ export function SweepEntry({ rail, target, takenBy, onSaved }: { rail: Rail; tar
   );
   const dropRow = useCallback((i: number) => setDraft((d) => ({ ...d, stations: d.stations.filter((_, k) => k !== i) })), [setDraft]);
   const focusSave = useCallback(() => saveRef.current?.focus(), []);
+  // An indicator's reading goes to the station it was typed at, or else the first without a reading.
+  const indicator = useIndicatorInput({
+    unit: draft.unit,
+    place: (text, cell) => {
+      const i = cell !== null ? Number(cell) : draft.stations.findIndex((s) => s.reading.trim() === '');
+      const row = draft.stations[i];
+      if (!row) return null;
+      setRow(i, { reading: text });
+      return { cell: String(i), label: `station ${i + 1} at ${row.position} mm`, undo: () => setRow(i, { reading: '' }) };
+    },
+  });
 
   const ready = useMemo(() => readyStations(draft.stations), [draft.stations]);
   const body = useMemo(
@@ -91,7 +104,7 @@ export function SweepEntry({ rail, target, takenBy, onSaved }: { rail: Rail; tar
   };
 
   return (
-    <Paper component="section" aria-label="New sweep" sx={{ p: { xs: 1.5, sm: 2.5 } }}>
+    <Paper ref={indicator.containerRef} component="section" aria-label="New sweep" sx={{ p: { xs: 1.5, sm: 2.5 } }}>
       <Typography variant="h3" component="h2" gutterBottom>
         New sweep
       </Typography>
@@ -120,6 +133,7 @@ export function SweepEntry({ rail, target, takenBy, onSaved }: { rail: Rail; tar
           Import CSV
         </Button>
       </Stack>
+      <IndicatorPanel indicator={indicator} nextLabel="the next station without a reading" />
       <Grid container spacing={2.5}>
         {/* On a narrow screen the chart comes first, so it stays in view above the readings being typed. */}
         <Grid size={{ xs: 12, md: 6 }} sx={{ order: { xs: 2, md: 1 } }}>

@@ -1,0 +1,218 @@
+import { expect, test, type APIRequestContext, type Page } from '@playwright/test';
+import { DEMO, signInAs, snap } from './support/session';
+
+const TABLET = { width: 820, height: 1180 };
+const PHONE = { width: 390, height: 844 };
+
+/** A new machine file with one rail, made through the API as the signed-in person. */
+async function newRail(request: APIRequestContext, rail: { lengthMm: number; holePitchMm: number; firstHoleMm: number }) {
+  const machine = await request.post('/api/machines', { data: { name: `Indicator test ${Date.now()}`, kind: 'plasma', workArea: { x: 3000, y: 1500 } } });
+  expect(machine.status()).toBe(201);
+  const machineId = (await machine.json()).id as string;
+  const made = await request.post(`/api/machines/${machineId}/rails`, { data: { label: 'Y1 (left)', axis: 'Y1', profileSize: 20, ...rail } });
+  expect(made.status()).toBe(201);
+  return { machineId, railId: (await made.json()).id as string };
+}
+
+/** A USB indicator in keyboard mode: the reading's keys and Enter, milliseconds apart. */
+async function indicatorSends(page: Page, reading: string) {
+  await page.keyboard.type(reading);
+  await page.keyboard.press('Enter');
+}
+
+const arrived = (page: Page) => page.getByRole('status', { name: 'Last reading' });
+const reading = (page: Page, positionMm: number) => page.getByLabel(`Reading at ${positionMm} mm`);
+
+/** Takes the focus off every field, as when the builder has put the tablet down. */
+const blur = (page: Page) => page.evaluate(() => (document.activeElement as HTMLElement | null)?.blur());
+
+async function openSweep(page: Page) {
+  // 600 mm rail, holes every 100 mm from 50 mm: stations at 50, 150 … 550 mm.
+  const { machineId, railId } = await newRail(page.request, { lengthMm: 600, holePitchMm: 100, firstHoleMm: 50 });
+  await page.goto(`/machines/${machineId}/rails/${railId}`);
+  await expect(reading(page, 550)).toBeVisible();
+  return railId;
+}
+
+test.describe('indicator input', () => {
+  test('a keyboard-mode indicator fills a sweep station by station, whatever its decimal style or sign, and the sweep saves them', async ({ page }) => {
+    await signInAs(page, DEMO.builder);
+    const railId = await openSweep(page);
+
+    // Typed into the first station: each reading lands where it was sent and the focus moves on.
+    await reading(page, 50).click();
+    await indicatorSends(page, '0,012');
+    await indicatorSends(page, '-0.004');
+    await indicatorSends(page, '+0.010');
+    await expect(reading(page, 50)).toHaveValue('0.012');
+    await expect(reading(page, 150)).toHaveValue('-0.004');
+    await expect(reading(page, 250)).toHaveValue('0.01');
+    await expect(reading(page, 350)).toBeFocused();
+    await expect(arrived(page)).toContainText('0.01 thou → station 3 at 250 mm');
+
+    // "From an indicator": with no field selected, a burst fills the next station without a reading.
+    await page.getByLabel('From an indicator').check();
+    await blur(page);
+    await indicatorSends(page, '- 0,002');
+    await expect(reading(page, 350)).toHaveValue('-0.002');
+    await expect(arrived(page)).toContainText('-0.002 thou → station 4 at 350 mm');
+    // A reading sent in another unit is converted to the sweep's (0.0254 mm is 1 thou).
+    await indicatorSends(page, '0.0254 mm');
+    await expect(reading(page, 450)).toHaveValue('1');
+    await expect(arrived(page)).toContainText('1 thou → station 5 at 450 mm');
+    await expect(arrived(page)).toContainText('Sent as 0.0254 mm');
+
+    // Taken back: the station is empty again and the next reading goes there.
+    await arrived(page).getByRole('button', { name: 'Undo' }).click();
+    await expect(reading(page, 450)).toHaveValue('');
+    await expect(arrived(page)).toHaveCount(0);
+    await indicatorSends(page, '0.8');
+    await expect(reading(page, 450)).toHaveValue('0.8');
+
+    // Something that is not a reading fills nothing and says why.
+    await indicatorSends(page, '12abc');
+    await expect(page.getByRole('alert').filter({ hasText: '“12abc” is not a reading' })).toBeVisible();
+    await expect(reading(page, 550)).toHaveValue('');
+    // A person typing at a person's pace is not an indicator: nothing is captured.
+    await page.keyboard.type('0.7', { delay: 120 });
+    await page.keyboard.press('Enter');
+    await expect(reading(page, 550)).toHaveValue('');
+
+    await indicatorSends(page, '0.3');
+    await expect(reading(page, 550)).toHaveValue('0.3');
+    await page.getByRole('button', { name: 'Save sweep' }).click();
+    await expect(page.getByRole('region', { name: 'Sweep saved' })).toBeVisible();
+    const sweeps = await (await page.request.get(`/api/rails/${railId}/sweeps`)).json();
+    const saved = (Array.isArray(sweeps) ? sweeps : sweeps.items)[0];
+    const full = await (await page.request.get(`/api/sweeps/${saved.id}`)).json();
+    expect(full.unit).toBe('thou');
+    expect(full.stations).toEqual([
+      { position: 50, reading: 0.012 },
+      { position: 150, reading: -0.004 },
+      { position: 250, reading: 0.01 },
+      { position: 350, reading: -0.002 },
+      { position: 450, reading: 0.8 },
+      { position: 550, reading: 0.3 },
+    ].map((s) => expect.objectContaining(s)));
+  });
+
+  test('indicator readings fill two bolt-down holes without fixing them; the builder fixes each', async ({ page }) => {
+    await signInAs(page, DEMO.builder);
+    // 300 mm rail, holes every 60 mm from 30 mm: fixed in the order 1, 5, 3, 2, 4.
+    const { machineId, railId } = await newRail(page.request, { lengthMm: 300, holePitchMm: 60, firstHoleMm: 30 });
+    await page.goto(`/machines/${machineId}/rails/${railId}/bolt-down`);
+    await page.getByRole('radio', { name: /Line mode/ }).check();
+    await page.getByRole('button', { name: 'Begin the bolt-down' }).click();
+    const progress = page.getByTestId('progress');
+    await expect(progress).toHaveText(/0 of 5 holes fixed/);
+    const fixedOnServer = async () => {
+      const bd = (await (await page.request.get(`/api/rails/${railId}/bolt-downs`)).json())[0];
+      const full = await (await page.request.get(`/api/bolt-downs/${bd.id}`)).json();
+      return (full.holes as { fixed: boolean }[]).filter((h) => h.fixed).length;
+    };
+
+    // The reading field has the focus: the indicator's reading and Enter fill it, nothing more.
+    await expect(page.getByLabel('Reading at hole 1 (thou)')).toBeFocused();
+    await indicatorSends(page, '0,5');
+    await expect(page.getByLabel('Reading at hole 1 (thou)')).toHaveValue('0.5');
+    await expect(arrived(page)).toContainText('0.5 thou → hole 1 at 30 mm, not fixed yet');
+    await expect(page.getByRole('heading', { name: 'Hole 1', exact: true })).toBeVisible();
+    await expect(progress).toHaveText('0 of 5 holes fixed');
+    expect(await fixedOnServer()).toBe(0);
+    await page.getByRole('button', { name: 'Fix hole 1' }).click();
+    await expect(progress).toHaveText('1 of 5 holes fixed');
+
+    // The far end, from a negative reading: filled, aimed against, still not fixed.
+    await expect(page.getByRole('heading', { name: 'Hole 5', exact: true })).toBeVisible();
+    await expect(page.getByLabel('Reading at hole 5 (thou)')).toBeFocused();
+    await indicatorSends(page, '-0.4');
+    await expect(page.getByLabel('Reading at hole 5 (thou)')).toHaveValue('-0.4');
+    await expect(page.getByTestId('difference')).toHaveText('−0.9 thou');
+    await expect(progress).toHaveText('1 of 5 holes fixed');
+    expect(await fixedOnServer()).toBe(1);
+    await page.getByRole('button', { name: 'Fix hole 5' }).click();
+    await expect(progress).toHaveText('2 of 5 holes fixed');
+    expect(await fixedOnServer()).toBe(2);
+  });
+
+  test('a serial indicator fills a sweep line by line, and a reading can be taken back', async ({ page }) => {
+    // A stand-in for Web Serial: the port picker returns a port whose stream yields what the test pushes.
+    await page.addInitScript(() => {
+      const w = window as unknown as { serialPush: (t: string) => void; serialBaud: number };
+      const readable = new ReadableStream<Uint8Array>({
+        start(controller) {
+          w.serialPush = (t: string) => controller.enqueue(new TextEncoder().encode(t));
+        },
+      });
+      const port = {
+        readable,
+        open: async (o: { baudRate: number }) => {
+          w.serialBaud = o.baudRate;
+        },
+        close: async () => {},
+      };
+      Object.defineProperty(Navigator.prototype, 'serial', { configurable: true, get: () => ({ requestPort: async () => port }) });
+    });
+    const push = (text: string) => page.evaluate((t) => (window as unknown as { serialPush: (t: string) => void }).serialPush(t), text);
+
+    await signInAs(page, DEMO.builder);
+    const railId = await openSweep(page);
+    await page.getByRole('button', { name: 'Serial cable…' }).click();
+    await page.getByRole('button', { name: 'Connect a serial indicator' }).click();
+    await expect(page.getByText('Connected: each line fills the next empty cell.')).toBeVisible();
+    expect(await page.evaluate(() => (window as unknown as { serialBaud: number }).serialBaud)).toBe(9600);
+
+    // Two lines in one chunk land in two stations, in order.
+    await push('0.010\r\n-0.002\r\n');
+    await expect(reading(page, 50)).toHaveValue('0.01');
+    await expect(reading(page, 150)).toHaveValue('-0.002');
+    await expect(arrived(page)).toContainText('-0.002 thou → station 2 at 150 mm');
+
+    // Undo clears station 2; the next line goes there again.
+    await arrived(page).getByRole('button', { name: 'Undo' }).click();
+    await expect(reading(page, 150)).toHaveValue('');
+    await push('-0,003\r\n');
+    await expect(reading(page, 150)).toHaveValue('-0.003');
+    // A line split over two chunks still reads as one.
+    await push('+0.0');
+    await push('07\r\n');
+    await expect(reading(page, 250)).toHaveValue('0.007');
+    await push('E-12\r\n');
+    await expect(page.getByRole('alert').filter({ hasText: '“E-12” is not a reading' })).toBeVisible();
+    await expect(reading(page, 350)).toHaveValue('');
+    await push('0.004\r\n');
+    await expect(reading(page, 350)).toHaveValue('0.004');
+    await expect(arrived(page)).toContainText('0.004 thou → station 4 at 350 mm');
+
+    await page.setViewportSize(TABLET);
+    await arrived(page).scrollIntoViewIfNeeded();
+    await snap(page, 'indicator-sweep-tablet');
+    await page.setViewportSize(PHONE);
+    await arrived(page).scrollIntoViewIfNeeded();
+    await snap(page, 'indicator-sweep-phone');
+    // Undo is a full-size touch target on a phone.
+    const undo = await arrived(page).getByRole('button', { name: 'Undo' }).boundingBox();
+    expect(undo!.height).toBeGreaterThanOrEqual(44);
+    expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(PHONE.width);
+
+    await page.getByRole('button', { name: 'Save sweep' }).click();
+    await expect(page.getByRole('region', { name: 'Sweep saved' })).toBeVisible();
+    const sweeps = await (await page.request.get(`/api/rails/${railId}/sweeps`)).json();
+    const saved = (Array.isArray(sweeps) ? sweeps : sweeps.items)[0];
+    const full = await (await page.request.get(`/api/sweeps/${saved.id}`)).json();
+    expect(full.stations.map((s: { reading: number }) => s.reading)).toEqual([0.01, -0.003, 0.007, 0.004]);
+  });
+
+  test('without Web Serial the page says so and keyboard mode still works', async ({ page }) => {
+    await page.addInitScript(() => {
+      delete (Navigator.prototype as unknown as { serial?: unknown }).serial;
+    });
+    await signInAs(page, DEMO.builder);
+    await openSweep(page);
+    await page.getByRole('button', { name: 'Serial cable…' }).click();
+    await expect(page.getByText('not available in this browser (use Chrome or Edge on a computer, or keyboard mode)')).toBeVisible();
+    await reading(page, 50).click();
+    await indicatorSends(page, '-0,25');
+    await expect(reading(page, 50)).toHaveValue('-0.25');
+  });
+});
