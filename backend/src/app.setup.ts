@@ -66,6 +66,11 @@ export async function configureApp(app: NestFastifyApplication, config: AppConfi
   });
   // API answers above a size go out compressed (brotli or gzip, as the browser asks). Static files
   // are served precompressed by @fastify/static; whatever already carries an encoding is left alone.
+  // Stored photos and files go out byte for byte, with their length: photos do not shrink, and
+  // a download's checksum stays checkable. (Set before compression registers, which reads it.)
+  app.getHttpAdapter().getInstance().addHook('onRoute', (route) => {
+    if (/^\/api\/evidence\/:[^/]+\/(content|thumbnail)$/.test(route.url)) (route as { compress?: boolean }).compress = false;
+  });
   await app.register(fastifyCompress as never, {
     global: true,
     threshold: COMPRESS_ABOVE_BYTES,
@@ -108,6 +113,8 @@ export async function configureApp(app: NestFastifyApplication, config: AppConfi
       wildcard: true,
       cacheControl: false,
       setHeaders: staticCacheHeaders,
+      // The build writes .br and .gz beside each file; the copy the browser accepts is sent as it is.
+      preCompressed: true,
     });
   }
   // Nest tries the last registered filter first: the catch-all goes first, the page fallback last.

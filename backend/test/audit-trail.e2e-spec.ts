@@ -1,6 +1,6 @@
 import type { NestFastifyApplication } from '@nestjs/platform-fastify';
 import { randomUUID } from 'node:crypto';
-import type pg from 'pg';
+import pg from 'pg';
 import { PG_POOL } from '../src/database/database.tokens.js';
 import { createTestApp, createTestWorkshop, TEST_PASSWORD, type Agent, type TestWorkshop } from './helpers/test-app.js';
 import { newAxis, newMachine, screwAxis } from './helpers/drives.js';
@@ -160,10 +160,20 @@ describe('audit trail', () => {
   });
 
   it('the history cannot be changed or deleted, not even by the database role of the application', async () => {
-    await expect(pool.query('delete from audit_entries where workshop_id = $1', [ws.id])).rejects.toThrow(/append-only/);
+    await expect(pool.query('delete from audit_entries where workshop_id = $1', [ws.id])).rejects.toThrow(/append-only|permission denied/);
     await expect(pool.query("update audit_entries set summary = 'rewritten' where workshop_id = $1", [ws.id])).rejects.toThrow(/append-only|permission/);
     await expect(pool.query('delete from change_log where workshop_id = $1', [ws.id])).rejects.toThrow(/append-only|permission/);
     await expect(pool.query('truncate audit_entries')).rejects.toThrow(/append-only|permission|owner/);
+    // The table owner (who runs migrations) is refused too: by the triggers, not by grants.
+    const owner = new pg.Client({ connectionString: process.env.DATABASE_OWNER_URL ?? process.env.DATABASE_URL });
+    await owner.connect();
+    try {
+      await expect(owner.query('delete from audit_entries where workshop_id = $1', [ws.id])).rejects.toThrow(/audit_entries is append-only/);
+      await expect(owner.query("update change_log set actor_name = 'someone else' where workshop_id = $1", [ws.id])).rejects.toThrow(/change_log is append-only/);
+      await expect(owner.query('truncate change_log')).rejects.toThrow(/change_log is append-only/);
+    } finally {
+      await owner.end();
+    }
   });
 
   describe('reading it', () => {
