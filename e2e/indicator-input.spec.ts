@@ -1,6 +1,8 @@
 import { expect, test, type APIRequestContext, type Page } from '@playwright/test';
-import { DEMO, signInAs, snap } from './support/session';
+import path from 'node:path';
+import { DEMO, signInAs } from './support/session';
 
+const shot = (name: string) => path.join(__dirname, 'screenshots', `${name}.png`);
 const TABLET = { width: 820, height: 1180 };
 const PHONE = { width: 390, height: 844 };
 
@@ -119,6 +121,8 @@ test.describe('indicator input', () => {
     await expect(page.getByRole('heading', { name: 'Hole 1', exact: true })).toBeVisible();
     await expect(progress).toHaveText('0 of 5 holes fixed');
     expect(await fixedOnServer()).toBe(0);
+    await page.setViewportSize(TABLET);
+    await page.getByRole('form', { name: 'Fixing Hole 1' }).screenshot({ path: shot('indicator-bolt-down-tablet') });
     await page.getByRole('button', { name: 'Fix hole 1' }).click();
     await expect(progress).toHaveText('1 of 5 holes fixed');
 
@@ -184,12 +188,11 @@ test.describe('indicator input', () => {
     await expect(reading(page, 350)).toHaveValue('0.004');
     await expect(arrived(page)).toContainText('0.004 thou → station 4 at 350 mm');
 
+    const sweepForm = page.getByRole('region', { name: 'New sweep' });
     await page.setViewportSize(TABLET);
-    await arrived(page).scrollIntoViewIfNeeded();
-    await snap(page, 'indicator-sweep-tablet');
+    await sweepForm.screenshot({ path: shot('indicator-sweep-tablet') });
     await page.setViewportSize(PHONE);
-    await arrived(page).scrollIntoViewIfNeeded();
-    await snap(page, 'indicator-sweep-phone');
+    await sweepForm.screenshot({ path: shot('indicator-sweep-phone') });
     // Undo is a full-size touch target on a phone.
     const undo = await arrived(page).getByRole('button', { name: 'Undo' }).boundingBox();
     expect(undo!.height).toBeGreaterThanOrEqual(44);

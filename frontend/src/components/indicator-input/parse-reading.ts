@@ -8,8 +8,8 @@ import { fromMm, toMm, type LengthUnit } from '../../lib/units';
 export type LineFormat = 'number' | 'last-number';
 
 export const LINE_FORMATS: Record<LineFormat, string> = {
-  number: 'The number alone, with an optional unit',
-  'last-number': 'The last number in the line (text before it is skipped)',
+  number: 'Number, optional unit',
+  'last-number': 'Last number in the line',
 };
 
 export type ParsedReading = { ok: true; value: number; unit: LengthUnit | null } | { ok: false; message: string };

@@ -36,7 +36,7 @@ export function SerialControls({ lineFormat, onLineFormat }: { lineFormat: LineF
           </MenuItem>
         ))}
       </TextField>
-      <TextField select label="Line format" value={lineFormat} onChange={(e) => onLineFormat(e.target.value as LineFormat)} sx={{ width: { xs: '100%', sm: 300 } }}>
+      <TextField select label="Line format" value={lineFormat} onChange={(e) => onLineFormat(e.target.value as LineFormat)} helperText={lineFormat === 'last-number' ? 'Text before the number is skipped' : undefined} sx={{ width: { xs: '100%', sm: 230 } }}>
         {(Object.keys(LINE_FORMATS) as LineFormat[]).map((k) => (
           <MenuItem key={k} value={k}>
             {LINE_FORMATS[k]}
