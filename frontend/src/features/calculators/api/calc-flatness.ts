@@ -3,4 +3,4 @@ import type { FlatnessRequest, FlatnessResult } from '../types';
 
 /** POST /api/calc/flatness */
 export const useFlatnessCalculation = (body: FlatnessRequest | null) =>
-  useCalculation<FlatnessRequest, FlatnessResult>('flatness', body);
+  useCalculation<FlatnessRequest, FlatnessResult>('flatness?residuals=true', body);

@@ -3,4 +3,4 @@ import type { StraightnessRequest, StraightnessResult } from '../types';
 
 /** POST /api/calc/straightness */
 export const useStraightnessCalculation = (body: StraightnessRequest | null) =>
-  useCalculation<StraightnessRequest, StraightnessResult>('straightness', body);
+  useCalculation<StraightnessRequest, StraightnessResult>('straightness?residuals=true', body);

@@ -13,7 +13,7 @@ export interface PreviewBody {
 export const straightnessPreviewQueryOptions = (body: PreviewBody | null) =>
   queryOptions({
     queryKey: railKeys.preview(body),
-    queryFn: async () => ({ body: body!, result: await api.post<StraightnessResult>('/calc/straightness', body) }),
+    queryFn: async () => ({ body: body!, result: await api.post<StraightnessResult>('/calc/straightness?residuals=true', body) }),
     enabled: body !== null,
     placeholderData: keepPreviousData,
     staleTime: Infinity,
