@@ -2,7 +2,7 @@ import { toPositioningResponse as positioningResult } from '../calculators/calcu
 import type { TargetValue } from '../database/schema/target-sets.js';
 import type { PositioningResult } from '../engine/positioning.js';
 import type { TravelTrialResult } from '../engine/travel-trial.js';
-import type { PositioningRunRow, TravelTrialRow } from './axis-checks.repository.js';
+import type { PositioningRunListRow, PositioningRunRow, TravelTrialListRow, TravelTrialRow } from './axis-checks.repository.js';
 import { positioningVerdicts, travelTrialStatus } from './drive-status.js';
 import type { DriveTargets } from './drive-targets.js';
 import { readableResult, UNREADABLE_RESULT } from '../common/stored-result.js';
@@ -67,6 +67,56 @@ export function toPositioningRunResponse(row: PositioningRunRow, targets: DriveT
     status,
     ...(r ? {} : { unreadable: UNREADABLE_RESULT }),
     notes: row.notes,
+    recordedBy: row.recordedByName,
+    recordedAt: row.createdAt.toISOString(),
+    locked,
+  };
+}
+
+/** The headline figures a list item reads of a stored result (the list query selects only these). */
+export const TRAVEL_TRIAL_LIST_SHAPE = ['correctedStepsPerMm', 'errorPercent', 'scale', 'offsetMm', 'residualMaxMm'];
+export const POSITIONING_LIST_SHAPE = ['accuracyMm', 'repeatabilityMm', 'reversalMm'];
+
+/** A trial in its axis's list: headline figures and status, no moves (the single trial has them). */
+export function toTravelTrialListItem(row: TravelTrialListRow, targets: DriveTargets, locked: boolean) {
+  const r = readableResult<Pick<TravelTrialResult, 'correctedStepsPerMm' | 'errorPercent' | 'scale' | 'offsetMm' | 'residualMaxMm'>>(row.result, TRAVEL_TRIAL_LIST_SHAPE);
+  return {
+    id: row.id,
+    axisId: row.axisId,
+    machineId: row.machineId,
+    unit: row.unit,
+    stepsPerMmUsed: row.stepsPerMmUsed,
+    throughOrigin: row.throughOrigin,
+    moveCount: row.moveCount,
+    result: r ? { correctedStepsPerMm: r.correctedStepsPerMm, errorPercent: r.errorPercent, scale: r.scale, offset: r.offsetMm, residualMax: r.residualMaxMm } : null,
+    status: r ? travelTrialStatus(r.errorPercent, targets) : ('outside-target' as const),
+    ...(r ? {} : { unreadable: UNREADABLE_RESULT }),
+    target: targets.stepsPerMmError.target as TargetValue,
+    recordedBy: row.recordedByName,
+    recordedAt: row.createdAt.toISOString(),
+    appliedAt: row.appliedAt?.toISOString() ?? null,
+    appliedBy: row.appliedByName,
+    locked,
+  };
+}
+
+/** A run in its axis's list: the three figures against their targets, no deviations (the single run has them). */
+export function toPositioningRunListItem(row: PositioningRunListRow, targets: DriveTargets, locked: boolean) {
+  const r = readableResult<Pick<PositioningResult, 'accuracyMm' | 'repeatabilityMm' | 'reversalMm'>>(row.result, POSITIONING_LIST_SHAPE);
+  const { checks, status } = r
+    ? positioningVerdicts({ accuracy: r.accuracyMm, repeatability: r.repeatabilityMm, reversal: r.reversalMm }, targets)
+    : { checks: null, status: 'outside-target' as const };
+  return {
+    id: row.id,
+    axisId: row.axisId,
+    machineId: row.machineId,
+    unit: row.unit,
+    targetCount: row.targetCount,
+    runCount: row.runCount,
+    result: r ? { accuracy: r.accuracyMm, repeatability: r.repeatabilityMm, reversal: r.reversalMm } : null,
+    checks,
+    status,
+    ...(r ? {} : { unreadable: UNREADABLE_RESULT }),
     recordedBy: row.recordedByName,
     recordedAt: row.createdAt.toISOString(),
     locked,

@@ -3,6 +3,8 @@ import type { FastifyReply } from 'fastify';
 import { CurrentUser, Roles } from '../auth/decorators.js';
 import type { SessionUser } from '../auth/session-user.js';
 import { CALIBRATORS } from './drive-roles.js';
+import { AxisCheckPageQuery } from './dto/axis-check-page.query.js';
+import { NEXT_CURSOR_HEADER } from '../records/page-cursor.js';
 import { CreatePositioningRunDto } from './dto/positioning-run.dto.js';
 import { TestProgramQuery } from './dto/test-program.query.js';
 import { CreateTravelTrialDto } from './dto/travel-trial.dto.js';
@@ -19,9 +21,12 @@ export class AxisChecksController {
     private readonly programs: TestProgramService,
   ) {}
 
+  /** Newest first, without moves, a page at a time: the next page's cursor comes in the X-Next-Cursor header. */
   @Get('travel-trials')
-  listTrials(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) axisId: string) {
-    return this.trials.list(user, axisId);
+  async listTrials(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) axisId: string, @Query() query: AxisCheckPageQuery, @Res({ passthrough: true }) reply: FastifyReply) {
+    const { items, nextCursor } = await this.trials.list(user, axisId, query);
+    if (nextCursor) reply.header(NEXT_CURSOR_HEADER, nextCursor);
+    return items;
   }
 
   @Post('travel-trials')
@@ -49,9 +54,12 @@ export class AxisChecksController {
     return this.trials.delete(user, axisId, id);
   }
 
+  /** Newest first, without deviations, a page at a time, as the trials. */
   @Get('positioning-runs')
-  listRuns(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) axisId: string) {
-    return this.runs.list(user, axisId);
+  async listRuns(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) axisId: string, @Query() query: AxisCheckPageQuery, @Res({ passthrough: true }) reply: FastifyReply) {
+    const { items, nextCursor } = await this.runs.list(user, axisId, query);
+    if (nextCursor) reply.header(NEXT_CURSOR_HEADER, nextCursor);
+    return items;
   }
 
   @Post('positioning-runs')

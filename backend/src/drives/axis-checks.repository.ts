@@ -19,6 +19,45 @@ export type LatestTrial = LatestAxisCheck & { stepsPerMmUsed: number; appliedAt:
 const TRIAL_FIGURES = ['errorPercent', 'correctedStepsPerMm'];
 const RUN_FIGURES = ['accuracyMm', 'repeatabilityMm', 'reversalMm'];
 const figures = (names: string[]) => sql.raw(`jsonb_build_object(${names.map((n) => `'${n}', x.result->'${n}'`).join(', ')})`);
+/** A travel trial as a page of its axis's list shows it: the headline figures, no moves. */
+export interface TravelTrialListRow {
+  id: string;
+  axisId: string;
+  machineId: string;
+  unit: string;
+  stepsPerMmUsed: number;
+  throughOrigin: boolean;
+  moveCount: number;
+  /** The headline figures of the stored result only (TRIAL_LIST_FIGURES). */
+  result: Record<string, unknown>;
+  recordedByName: string;
+  createdAt: Date;
+  appliedAt: Date | null;
+  appliedByName: string | null;
+}
+
+/** A repeat-and-reverse run as a page of its axis's list shows it: the headline figures, no deviations. */
+export interface PositioningRunListRow {
+  id: string;
+  axisId: string;
+  machineId: string;
+  unit: string;
+  targetCount: number;
+  runCount: number;
+  /** The headline figures of the stored result only (RUN_FIGURES). */
+  result: Record<string, unknown>;
+  recordedByName: string;
+  createdAt: Date;
+}
+
+const TRIAL_LIST_FIGURES = ['correctedStepsPerMm', 'errorPercent', 'scale', 'offsetMm', 'residualMaxMm'];
+// A damaged row may hold something other than a list; it counts as none rather than failing the page.
+const lengthOf = (column: string) => sql.raw(`case jsonb_typeof(x.${column}) when 'array' then jsonb_array_length(x.${column}) else 0 end`);
+/** Rows after the cursor's record in newest-first order (none when the cursor is not of this axis). */
+const afterCursor = (table: string, workshopId: string, axisId: string, afterId: string | null) =>
+  afterId
+    ? sql`and (x.created_at, x.id) < (select c.created_at, c.id from ${sql.raw(table)} c where c.id = ${afterId} and c.workshop_id = ${workshopId} and c.axis_id = ${axisId})`
+    : sql``;
 const uuidArray = (ids: string[]) => sql`array[${sql.join(ids.map((id) => sql`${id}`), sql`, `)}]::uuid[]`;
 
 /** Travel trials and repeat-and-reverse runs of axes, newest first. */
@@ -26,12 +65,45 @@ const uuidArray = (ids: string[]) => sql`array[${sql.join(ids.map((id) => sql`${
 export class AxisChecksRepository {
   constructor(@Inject(DRIZZLE) private readonly db: Database) {}
 
-  trials(workshopId: string, axisId: string): Promise<TravelTrialRow[]> {
-    return this.db
-      .select()
-      .from(travelTrials)
-      .where(and(eq(travelTrials.workshopId, workshopId), eq(travelTrials.axisId, axisId)))
-      .orderBy(desc(travelTrials.createdAt));
+  /**
+   * A page of the axis's trials, newest first, summary columns only: `limit + 1` rows so the
+   * caller knows whether another page follows. Walks travel_trials_axis_idx from the cursor.
+   */
+  async trialPage(workshopId: string, axisId: string, afterId: string | null, limit: number): Promise<TravelTrialListRow[]> {
+    const { rows } = await this.db.execute<{
+      id: string;
+      axis_id: string;
+      machine_id: string;
+      unit: string;
+      steps_per_mm_used: number;
+      through_origin: boolean;
+      move_count: number;
+      result: Record<string, unknown>;
+      recorded_by_name: string;
+      created_at: string;
+      applied_at: string | null;
+      applied_by_name: string | null;
+    }>(sql`
+      select x.id, x.axis_id, x.machine_id, x.unit, x.steps_per_mm_used, x.through_origin, ${lengthOf('moves')} as move_count,
+             ${figures(TRIAL_LIST_FIGURES)} as result, x.recorded_by_name, x.created_at, x.applied_at, x.applied_by_name
+      from travel_trials x
+      where x.workshop_id = ${workshopId} and x.axis_id = ${axisId} ${afterCursor('travel_trials', workshopId, axisId, afterId)}
+      order by x.created_at desc, x.id desc
+      limit ${limit + 1}`);
+    return rows.map((r) => ({
+      id: r.id,
+      axisId: r.axis_id,
+      machineId: r.machine_id,
+      unit: r.unit,
+      stepsPerMmUsed: Number(r.steps_per_mm_used),
+      throughOrigin: r.through_origin,
+      moveCount: Number(r.move_count),
+      result: r.result,
+      recordedByName: r.recorded_by_name,
+      createdAt: new Date(r.created_at),
+      appliedAt: r.applied_at ? new Date(r.applied_at) : null,
+      appliedByName: r.applied_by_name,
+    }));
   }
 
   async trial(workshopId: string, axisId: string, id: string): Promise<TravelTrialRow | null> {
@@ -70,12 +142,36 @@ export class AxisChecksRepository {
     await this.db.delete(travelTrials).where(and(eq(travelTrials.workshopId, workshopId), eq(travelTrials.id, id)));
   }
 
-  runs(workshopId: string, axisId: string): Promise<PositioningRunRow[]> {
-    return this.db
-      .select()
-      .from(positioningRuns)
-      .where(and(eq(positioningRuns.workshopId, workshopId), eq(positioningRuns.axisId, axisId)))
-      .orderBy(desc(positioningRuns.createdAt));
+  /** A page of the axis's runs, newest first, summary columns only (`limit + 1` rows, as trialPage). */
+  async runPage(workshopId: string, axisId: string, afterId: string | null, limit: number): Promise<PositioningRunListRow[]> {
+    const { rows } = await this.db.execute<{
+      id: string;
+      axis_id: string;
+      machine_id: string;
+      unit: string;
+      target_count: number;
+      run_count: number;
+      result: Record<string, unknown>;
+      recorded_by_name: string;
+      created_at: string;
+    }>(sql`
+      select x.id, x.axis_id, x.machine_id, x.unit, ${lengthOf('targets')} as target_count, ${lengthOf('runs')} as run_count,
+             ${figures(RUN_FIGURES)} as result, x.recorded_by_name, x.created_at
+      from positioning_runs x
+      where x.workshop_id = ${workshopId} and x.axis_id = ${axisId} ${afterCursor('positioning_runs', workshopId, axisId, afterId)}
+      order by x.created_at desc, x.id desc
+      limit ${limit + 1}`);
+    return rows.map((r) => ({
+      id: r.id,
+      axisId: r.axis_id,
+      machineId: r.machine_id,
+      unit: r.unit,
+      targetCount: Number(r.target_count),
+      runCount: Number(r.run_count),
+      result: r.result,
+      recordedByName: r.recorded_by_name,
+      createdAt: new Date(r.created_at),
+    }));
   }
 
   async run(workshopId: string, axisId: string, id: string): Promise<PositioningRunRow | null> {

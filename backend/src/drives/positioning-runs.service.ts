@@ -6,7 +6,9 @@ import { MachinesService } from '../machines/machines.service.js';
 import { RecordsService } from '../records/records.service.js';
 import { SubjectsRegistry } from '../records/subjects.registry.js';
 import { AxesService } from './axes.service.js';
-import { toPositioningRunResponse } from './axis-check.mapper.js';
+import { toPositioningRunListItem, toPositioningRunResponse } from './axis-check.mapper.js';
+import { DEFAULT_PAGE_SIZE } from '../records/page-cursor.js';
+import type { AxisCheckPageQuery } from './dto/axis-check-page.query.js';
 import { AxisChecksRepository, type PositioningRunRow } from './axis-checks.repository.js';
 import { DriveTargetsService } from './drive-targets.js';
 import type { CreatePositioningRunDto } from './dto/positioning-run.dto.js';
@@ -32,11 +34,14 @@ export class PositioningRunsService implements OnModuleInit {
     });
   }
 
-  async list(actor: SessionUser, axisId: string) {
+  /** A page of the axis's runs, newest first, without their deviations; `nextCursor` asks for the page after. */
+  async list(actor: SessionUser, axisId: string, query: AxisCheckPageQuery = {}) {
     const axis = await this.axes.findRow(actor, axisId);
-    const [rows, targets] = await Promise.all([this.repo.runs(actor.workshopId, axisId), this.targetsOf(actor, axis.machineId)]);
-    const locked = await this.records.lockedIds('positioning-run', rows.map((r) => r.id));
-    return rows.map((r) => toPositioningRunResponse(r, targets, locked.has(r.id)));
+    const limit = query.limit ?? DEFAULT_PAGE_SIZE;
+    const [rows, targets] = await Promise.all([this.repo.runPage(actor.workshopId, axisId, query.cursor ?? null, limit), this.targetsOf(actor, axis.machineId)]);
+    const page = rows.slice(0, limit);
+    const locked = await this.records.lockedIds('positioning-run', page.map((r) => r.id));
+    return { items: page.map((r) => toPositioningRunListItem(r, targets, locked.has(r.id))), nextCursor: rows.length > limit ? page[page.length - 1].id : null };
   }
 
   async get(actor: SessionUser, axisId: string, id: string) {

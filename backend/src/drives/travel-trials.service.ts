@@ -6,7 +6,9 @@ import { MachinesService } from '../machines/machines.service.js';
 import { RecordsService } from '../records/records.service.js';
 import { SubjectsRegistry } from '../records/subjects.registry.js';
 import { AxesService } from './axes.service.js';
-import { storedTravelTrial, toTravelTrialResponse } from './axis-check.mapper.js';
+import { storedTravelTrial, toTravelTrialListItem, toTravelTrialResponse } from './axis-check.mapper.js';
+import { DEFAULT_PAGE_SIZE } from '../records/page-cursor.js';
+import type { AxisCheckPageQuery } from './dto/axis-check-page.query.js';
 import { AxisChecksRepository, type TravelTrialRow } from './axis-checks.repository.js';
 import { DriveTargetsService } from './drive-targets.js';
 import type { CreateTravelTrialDto } from './dto/travel-trial.dto.js';
@@ -40,11 +42,14 @@ export class TravelTrialsService implements OnModuleInit {
     return { ...row, axisName: axis.name };
   }
 
-  async list(actor: SessionUser, axisId: string) {
+  /** A page of the axis's trials, newest first, without their moves; `nextCursor` asks for the page after. */
+  async list(actor: SessionUser, axisId: string, query: AxisCheckPageQuery = {}) {
     const axis = await this.axes.findRow(actor, axisId);
-    const [rows, targets] = await Promise.all([this.repo.trials(actor.workshopId, axisId), this.targetsOf(actor, axis.machineId)]);
-    const locked = await this.records.lockedIds('travel-trial', rows.map((r) => r.id));
-    return rows.map((r) => toTravelTrialResponse(r, targets, locked.has(r.id)));
+    const limit = query.limit ?? DEFAULT_PAGE_SIZE;
+    const [rows, targets] = await Promise.all([this.repo.trialPage(actor.workshopId, axisId, query.cursor ?? null, limit), this.targetsOf(actor, axis.machineId)]);
+    const page = rows.slice(0, limit);
+    const locked = await this.records.lockedIds('travel-trial', page.map((r) => r.id));
+    return { items: page.map((r) => toTravelTrialListItem(r, targets, locked.has(r.id))), nextCursor: rows.length > limit ? page[page.length - 1].id : null };
   }
 
   async get(actor: SessionUser, axisId: string, id: string) {
