@@ -1,6 +1,7 @@
 import { boltDownSession, type SessionHoleInput } from '../engine/bolt-down-session.js';
 import { fromMm } from '../engine/units.js';
 import type { BoltDownHoleRow, BoltDownRow } from './bolt-downs.repository.js';
+import { finiteList, UNREADABLE_INPUT } from '../common/stored-result.js';
 
 export interface BoltDownHoleResponse {
   index: number;
@@ -42,6 +43,8 @@ export interface BoltDownResponse {
   createdBy: string;
   createdAt: string;
   updatedAt: string;
+  /** Present when the stored hole positions, band or readings cannot be read: holes is then empty. */
+  unreadable?: string;
 }
 
 /** A hole write's answer: the whole bolt-down, and whether this write was a repeat of one already applied. */
@@ -58,8 +61,41 @@ export function sessionOf(row: BoltDownRow, holes: BoltDownHoleRow[]) {
 // Binary rounding of unit conversions (0.3 thou → mm → thou) must not read as a miss of the band.
 const BAND_SLACK_MM = 1e-12;
 
+/** The guide's state, or null when an old stored row holds a position, band or reading that is not a finite number. */
+function readableSession(row: BoltDownRow, holes: BoltDownHoleRow[]) {
+  const readingsOk = holes.every((h) => (h.readingMm === null || Number.isFinite(h.readingMm)) && (h.readingRaw === null || Number.isFinite(h.readingRaw)));
+  if (!finiteList(row.holePositionsMm) || !Number.isFinite(row.bandMm) || !readingsOk) return null;
+  try {
+    return sessionOf(row, holes);
+  } catch {
+    return null;
+  }
+}
+
 export function toBoltDownResponse(row: BoltDownRow, holes: BoltDownHoleRow[], rail: BoltDownResponse['rail']): BoltDownResponse {
-  const session = sessionOf(row, holes);
+  const session = readableSession(row, holes);
+  if (!session) {
+    return {
+      id: row.id,
+      railId: row.railId,
+      machineId: row.machineId,
+      rail,
+      mode: row.mode,
+      unit: row.unit,
+      band: fromMm(row.bandMm, row.unit),
+      bandMm: row.bandMm,
+      holes: [],
+      nextHole: null,
+      fixedCount: holes.filter((h) => h.fixed).length,
+      holeCount: Array.isArray(row.holePositionsMm) ? row.holePositionsMm.length : 0,
+      complete: false,
+      finalSweepId: row.finalSweepId,
+      createdBy: row.createdByName,
+      createdAt: row.createdAt.toISOString(),
+      updatedAt: row.updatedAt.toISOString(),
+      unreadable: UNREADABLE_INPUT,
+    };
+  }
   const byIndex = new Map(holes.map((h) => [h.holeIndex, h]));
   const inUnit = (mm: number | null) => (mm === null ? null : fromMm(mm, row.unit));
   return {

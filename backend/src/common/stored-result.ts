@@ -39,3 +39,22 @@ function pathHolds(value: unknown, parts: string[]): boolean {
   }
   return pathHolds((value as Record<string, unknown>)[head], rest);
 }
+
+/** A stored list of numbers (readings, positions) holds only finite numbers. */
+export const finiteList = (v: unknown): v is number[] => Array.isArray(v) && v.every((x) => typeof x === 'number' && Number.isFinite(x));
+
+/**
+ * Some results are computed again from the stored input on every read (frame checks, bolt-downs).
+ * Input that the engine now refuses, or that is missing a field, makes that one record unreadable
+ * rather than failing the whole page, so anything thrown here is read as "cannot be read".
+ */
+export function readableComputation<T>(compute: () => T, shape: ResultShape): T | null {
+  try {
+    return readableResult<T>(compute(), shape);
+  } catch {
+    return null;
+  }
+}
+
+export const UNREADABLE_INPUT =
+  'The stored measurements of this record cannot be read (a number in them is missing or not finite); record the check again and delete this one.';

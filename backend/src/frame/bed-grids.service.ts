@@ -6,6 +6,10 @@ import { MachinesService } from '../machines/machines.service.js';
 import type { MachineRef, ReadinessCheck, ReadinessContext } from '../records/readiness.js';
 import { RecordsService } from '../records/records.service.js';
 import { bedGridResult, type BedGridPointResult } from './bed-grid-result.js';
+import { readableComputation } from '../common/stored-result.js';
+
+/** The numbers the readers of a bed grid use, computed again from its stored points. */
+const BED_GRID_SHAPE = ['leastSquares.flatnessMm', 'tilt.mmPerMetre', 'points[]', 'points[].xMm', 'points[].yMm', 'points[].residualMm'];
 import type { CreateBedGridDto } from './dto/create-bed-grid.dto.js';
 import { FrameTargets, frameTargetIn, judge, type TargetOf } from './frame-targets.js';
 import { toBedGridResponse, type BedGridResponse } from './frame.mapper.js';
@@ -47,7 +51,7 @@ export class BedGridsService {
     await this.records.checkRecorded(
       actor,
       { machineId: machine.id, kind: BED_GRID, recordType: BED_GRID, recordId: row.id, status: response.status },
-      `Bed grid of ${points.length} points: flatness ${show(response.result.leastSquares.flatnessMm, unit)}, ${response.status.replace('-', ' ')}`,
+      `Bed grid of ${points.length} points: flatness ${show(response.result!.leastSquares.flatnessMm, unit)}, ${response.status.replace('-', ' ')}`,
     );
     return response;
   }
@@ -87,6 +91,10 @@ export class BedGridsService {
     };
     if (!row) return base;
     const r = this.respond(row, t, false);
+    if (!r.result) {
+      // A latest grid that cannot be read blocks like a failed one and says why.
+      return { ...base, subject: `${base.subject} (latest bed grid unreadable)`, status: 'outside-target', recordId: row.id, recordedAt: r.recordedAt };
+    }
     // Shown in the target's unit, so result and target read side by side.
     const unit = (['mm', 'um', 'in', 'thou'].includes(t.target.unit) ? t.target.unit : 'mm') as LengthUnit;
     const flatness = r.result.leastSquares.flatnessMm;
@@ -113,8 +121,8 @@ export class BedGridsService {
   }
 
   private respond(row: BedGridRow, { target, base }: TargetOf, locked: boolean): BedGridResponse {
-    const result = bedGridResult(row.points);
-    return toBedGridResponse(row, result, judge(result.leastSquares.flatnessMm, base), target, locked);
+    const result = readableComputation(() => bedGridResult(row.points), BED_GRID_SHAPE);
+    return toBedGridResponse(row, result, result ? judge(result.leastSquares.flatnessMm, base) : 'outside-target', target, locked);
   }
 }
 

@@ -9,6 +9,11 @@ import type { CreateDiagonalCheckDto } from './dto/create-diagonal-check.dto.js'
 import { FrameTargets, frameTargetIn, judge, type TargetOf } from './frame-targets.js';
 import { toDiagonalCheckResponse, type DiagonalCheckResponse } from './frame.mapper.js';
 import { FrameRepository, type DiagonalCheckRow } from './frame.repository.js';
+import { readableComputation } from '../common/stored-result.js';
+
+/** The numbers the readers of a diagonal check use, computed again from its stored lengths. */
+const DIAGONAL_SHAPE = ['mmPerMetre', 'outOfSquareArcsec', 'correction.moveMm'];
+const storedDiagonal = (row: DiagonalCheckRow) => readableComputation(() => diagonalCheckResult(row), DIAGONAL_SHAPE);
 
 export const DIAGONAL_CHECK = 'diagonal-check';
 
@@ -48,7 +53,7 @@ export class DiagonalChecksService {
     await this.records.checkRecorded(
       actor,
       { machineId: machine.id, kind: DIAGONAL_CHECK, recordType: DIAGONAL_CHECK, recordId: row.id, status: response.status },
-      `Diagonal check: ${response.result.mmPerMetre.toFixed(3)} mm/m out of square (${response.result.outOfSquareArcsec.toFixed(0)}″), ${response.status.replace('-', ' ')}`,
+      `Diagonal check: ${response.result!.mmPerMetre.toFixed(3)} mm/m out of square (${response.result!.outOfSquareArcsec.toFixed(0)}″), ${response.status.replace('-', ' ')}`,
     );
     return response;
   }
@@ -91,6 +96,10 @@ export class DiagonalChecksService {
     };
     if (!row) return base;
     const r = this.respond(row, t, false);
+    if (!r.result) {
+      // A latest check that cannot be read blocks like a failed one and says why.
+      return { ...base, subject: `${base.subject} (latest diagonal check unreadable)`, status: 'outside-target', result: null, recordId: row.id, recordedAt: r.recordedAt };
+    }
     return {
       ...base,
       status: r.status,
@@ -103,7 +112,10 @@ export class DiagonalChecksService {
           title: 'Squaring history',
           x: { label: 'Check', unit: '#' },
           y: { label: 'Out of square', unit: 'mm/m' },
-          lines: [{ label: 'Out of square', points: [...rows].reverse().map((x, i): [number, number] => [i + 1, diagonalCheckResult(x).mmPerMetre]) }],
+          lines: [{ label: 'Out of square', points: [...rows].reverse().flatMap((x, i): [number, number][] => {
+            const result = storedDiagonal(x);
+            return result ? [[i + 1, result.mmPerMetre]] : [];
+          }) }],
           limits: [{ label: `Target ${t.target.value} mm/m`, value: t.base }],
         },
       }),
@@ -116,7 +128,7 @@ export class DiagonalChecksService {
   }
 
   private respond(row: DiagonalCheckRow, { target, base }: TargetOf, locked: boolean): DiagonalCheckResponse {
-    const result = diagonalCheckResult(row);
-    return toDiagonalCheckResponse(row, result, judge(result.mmPerMetre, base), target, locked);
+    const result = storedDiagonal(row);
+    return toDiagonalCheckResponse(row, result, result ? judge(result.mmPerMetre, base) : 'outside-target', target, locked);
   }
 }

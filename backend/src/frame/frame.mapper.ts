@@ -5,6 +5,7 @@ import type { BedGridResult } from './bed-grid-result.js';
 import type { DiagonalCheckResult } from './diagonal-check-result.js';
 import type { BedGridRow, DiagonalCheckRow, TestCutRow } from './frame.repository.js';
 import type { TestCutResult } from './test-cut-result.js';
+import { finiteOrNull, UNREADABLE_INPUT } from '../common/stored-result.js';
 
 export type FrameStatus = Exclude<CheckStatus, 'waived' | 'not-started'>;
 
@@ -39,9 +40,16 @@ function common(row: DiagonalCheckRow | BedGridRow | TestCutRow, status: FrameSt
 }
 
 // Back in the entered unit; 12 significant digits drop the binary noise of the round trip through mm.
-const inUnit = (mm: number, unit: LengthUnit) => Number(fromMm(mm, unit).toPrecision(12));
+// A stored number that cannot be read (an old bad row) goes out as null, never as a thrown error.
+const inUnit = (mm: unknown, unit: LengthUnit): number | null => {
+  const v = finiteOrNull(mm as number);
+  return v === null ? null : Number(fromMm(v, unit).toPrecision(12));
+};
+const field = (o: unknown, key: string): unknown => (o !== null && typeof o === 'object' ? (o as Record<string, unknown>)[key] : undefined);
+/** A record whose stored measurements cannot be read carries no result and says so. */
+const unreadable = (result: unknown) => (result === null ? { unreadable: UNREADABLE_INPUT } : {});
 
-export function toDiagonalCheckResponse(row: DiagonalCheckRow, result: DiagonalCheckResult, status: FrameStatus, target: JudgedTarget, locked: boolean) {
+export function toDiagonalCheckResponse(row: DiagonalCheckRow, result: DiagonalCheckResult | null, status: FrameStatus, target: JudgedTarget, locked: boolean) {
   const u = row.unit;
   return {
     ...common(row, status, target, locked),
@@ -53,41 +61,46 @@ export function toDiagonalCheckResponse(row: DiagonalCheckRow, result: DiagonalC
       diagonal2: inUnit(row.diagonal2Mm, u),
       gantrySpan: row.gantrySpanMm == null ? null : inUnit(row.gantrySpanMm, u),
     },
-    inputMm: { sideX: row.sideXMm, sideY: row.sideYMm, diagonal1: row.diagonal1Mm, diagonal2: row.diagonal2Mm, gantrySpan: row.gantrySpanMm },
+    inputMm: { sideX: finiteOrNull(row.sideXMm), sideY: finiteOrNull(row.sideYMm), diagonal1: finiteOrNull(row.diagonal1Mm), diagonal2: finiteOrNull(row.diagonal2Mm), gantrySpan: finiteOrNull(row.gantrySpanMm) },
     result,
+    ...unreadable(result),
   };
 }
 
-export function toBedGridResponse(row: BedGridRow, result: BedGridResult, status: FrameStatus, target: JudgedTarget, locked: boolean) {
+export function toBedGridResponse(row: BedGridRow, result: BedGridResult | null, status: FrameStatus, target: JudgedTarget, locked: boolean) {
   return {
     ...common(row, status, target, locked),
-    rows: row.rows ?? result.rows,
-    columns: row.columns ?? result.columns,
+    rows: row.rows ?? result?.rows ?? null,
+    columns: row.columns ?? result?.columns ?? null,
     // Positions in mm, heights as entered (in `unit`).
-    points: row.points.map((p) => ({ x: p.xMm, y: p.yMm, z: inUnit(p.zMm, row.unit) })),
+    points: (Array.isArray(row.points) ? row.points : []).map((p) => ({ x: finiteOrNull(field(p, 'xMm') as number), y: finiteOrNull(field(p, 'yMm') as number), z: inUnit(field(p, 'zMm'), row.unit) })),
     result,
+    ...unreadable(result),
   };
 }
 
-export function toTestCutResponse(row: TestCutRow, result: TestCutResult, status: FrameStatus, target: { part: JudgedTarget; squareness: JudgedTarget }, locked: boolean) {
+export function toTestCutResponse(row: TestCutRow, result: TestCutResult | null, status: FrameStatus, target: { part: JudgedTarget; squareness: JudgedTarget }, locked: boolean) {
   const u = row.unit;
   const s = row.sizes;
+  const nominal = field(s, 'nominal');
+  const measured = field(s, 'measured');
   return {
     ...common(row, status, target.part, locked),
     targets: target,
-    nominal: { x: inUnit(s.nominal.xMm, u), y: inUnit(s.nominal.yMm, u), circle: inUnit(s.nominal.circleMm, u) },
+    nominal: { x: inUnit(field(nominal, 'xMm'), u), y: inUnit(field(nominal, 'yMm'), u), circle: inUnit(field(nominal, 'circleMm'), u) },
     measured: {
-      x: inUnit(s.measured.xMm, u),
-      y: inUnit(s.measured.yMm, u),
-      diagonal1: inUnit(s.measured.diagonal1Mm, u),
-      diagonal2: inUnit(s.measured.diagonal2Mm, u),
-      circleX: inUnit(s.measured.circleXMm, u),
-      circleY: inUnit(s.measured.circleYMm, u),
-      kerf: inUnit(s.kerfMm, u),
+      x: inUnit(field(measured, 'xMm'), u),
+      y: inUnit(field(measured, 'yMm'), u),
+      diagonal1: inUnit(field(measured, 'diagonal1Mm'), u),
+      diagonal2: inUnit(field(measured, 'diagonal2Mm'), u),
+      circleX: inUnit(field(measured, 'circleXMm'), u),
+      circleY: inUnit(field(measured, 'circleYMm'), u),
+      kerf: inUnit(field(s, 'kerfMm'), u),
     },
-    circleKind: s.circleKind,
-    stepsPerMm: s.stepsPerMm,
+    circleKind: (field(s, 'circleKind') ?? null) as TestCutRow['sizes']['circleKind'] | null,
+    stepsPerMm: (field(s, 'stepsPerMm') ?? null) as TestCutRow['sizes']['stepsPerMm'] | null,
     result,
+    ...unreadable(result),
   };
 }
 

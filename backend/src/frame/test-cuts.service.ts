@@ -10,6 +10,10 @@ import { FrameTargets, frameTargetIn, type TargetOf } from './frame-targets.js';
 import { toTestCutResponse, type FrameStatus, type TestCutResponse } from './frame.mapper.js';
 import { FrameRepository, type TestCutRow } from './frame.repository.js';
 import { afterKerf, testCutResult } from './test-cut-result.js';
+import { readableComputation } from '../common/stored-result.js';
+
+/** The numbers the readers of a test cut use, computed again from its stored sizes. */
+const TEST_CUT_SHAPE = ['squareness.mmPerMetre', 'parts[]', 'parts[].deviationMm'];
 import { impossibleDiagonals } from './diagonal-check-result.js';
 
 export const TEST_CUT = 'test-cut';
@@ -65,7 +69,7 @@ export class TestCutsService {
     await this.records.checkRecorded(
       actor,
       { machineId: machine.id, kind: TEST_CUT, recordType: TEST_CUT, recordId: row.id, status: r.status },
-      `Test cut: scale X ${r.result.scaleErrorX.toFixed(3)} %, Y ${r.result.scaleErrorY.toFixed(3)} %, ${r.result.squareness.mmPerMetre.toFixed(3)} mm/m out of square, ${r.status.replace('-', ' ')}`,
+      `Test cut: scale X ${r.result!.scaleErrorX.toFixed(3)} %, Y ${r.result!.scaleErrorY.toFixed(3)} %, ${r.result!.squareness.mmPerMetre.toFixed(3)} mm/m out of square, ${r.status.replace('-', ' ')}`,
     );
     return r;
   }
@@ -105,6 +109,10 @@ export class TestCutsService {
     };
     if (!row) return base;
     const r = this.respond(row, targets, false);
+    if (!r.result) {
+      // A latest cut that cannot be read blocks like a failed one and says why.
+      return { ...base, subject: `${base.subject} (latest test cut unreadable)`, status: 'outside-target', recordId: row.id, recordedAt: r.recordedAt };
+    }
     const worst = Math.max(...r.result.parts.map((p) => Math.abs(p.deviationMm)));
     const outside = r.result.parts.filter((p) => !p.within).length;
     return {
@@ -131,7 +139,8 @@ export class TestCutsService {
 
   /** Within target only when every part size is within ± the part tolerance and the cut is square enough. */
   private respond(row: TestCutRow, targets: TestCutTargets, locked: boolean): TestCutResponse {
-    const result = testCutResult(row.sizes, targets.part.base);
+    const result = readableComputation(() => testCutResult(row.sizes, targets.part.base), TEST_CUT_SHAPE);
+    if (!result) return toTestCutResponse(row, null, 'outside-target', { part: targets.part.target, squareness: targets.squareness.target }, locked);
     const within = result.parts.every((p) => p.within) && result.squareness.mmPerMetre <= targets.squareness.base;
     const status: FrameStatus = within ? 'within-target' : 'outside-target';
     return toTestCutResponse(row, result, status, { part: targets.part.target, squareness: targets.squareness.target }, locked);

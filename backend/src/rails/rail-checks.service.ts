@@ -11,6 +11,8 @@ import { MachinesService } from '../machines/machines.service.js';
 import { partnerParallelism, type ComparedSweep } from './rail-parallelism.js';
 import { RailsRepository, type DatumSweep, type LatestSweep, type RailRow } from './rails.repository.js';
 import { RailsService } from './rails.service.js';
+import { summaryReadable } from './rail.mapper.js';
+import { UNREADABLE_INPUT } from '../common/stored-result.js';
 
 const railLink = (machineId: string, railId: string) => `/machines/${machineId}/rails/${railId}`;
 
@@ -89,7 +91,7 @@ export class RailChecksService implements OnModuleInit {
     ]);
     const out = partnerParallelism(comparedOf(rail.id, latest, perDatum), comparedOf(partner.id, latest, perDatum), { a: rail.label, b: partner.label });
     const base = { railId, partnerRailId: partner.id, targets: shownTargets, sweeps: { a: out.a?.id ?? null, b: out.b?.id ?? null } };
-    if (!out.comparable) return { ...base, status: 'not-comparable' as const, reason: out.reason };
+    if (!out.comparable) return { ...base, status: 'not-comparable' as const, reason: out.reason, ...(out.unreadable ? { unreadable: UNREADABLE_INPUT } : {}) };
     const parallelWithin = out.parallelismMm <= targetInBaseUnit(targets.parallelism);
     const heightWithin = Math.abs(out.meanOffsetMm) <= targetInBaseUnit(targets.height);
     return {
@@ -120,6 +122,10 @@ export class RailChecksService implements OnModuleInit {
       link: railLink(rail.machineId, rail.id),
     };
     if (!latest) return { ...common, status: 'not-started', result: null, recordType: null, recordId: null, recordedAt: null };
+    if (!summaryReadable(latest)) {
+      // A latest sweep that cannot be read blocks like a failed one and says why.
+      return { ...common, subject: `${common.subject} (latest sweep unreadable)`, status: 'outside-target', result: null, recordType: 'rail-sweep', recordId: latest.id, recordedAt: latest.takenAt.toISOString() };
+    }
     const ls = latest.leastSquaresStraightness;
     const mz = latest.minimumZoneStraightness;
     return {
@@ -141,6 +147,10 @@ export class RailChecksService implements OnModuleInit {
       target: { ...plain(t.parallelism), label: TARGET_LABELS.railParallelism },
       link: railLink(a.machineId, a.id),
     };
+    if (!out.comparable && out.unreadable) {
+      const bad = out.a!.takenAt >= out.b!.takenAt ? out.a! : out.b!;
+      return { ...common, subject: `${common.subject} (latest sweep unreadable: ${out.reason})`, status: 'outside-target', result: null, recordType: 'rail-sweep', recordId: bad.id, recordedAt: bad.takenAt.toISOString() };
+    }
     if (!out.comparable) {
       // No number to show yet; the reason goes with the subject so the board says what is missing.
       return { ...common, subject: `${common.subject} (${out.reason})`, status: 'not-started', result: null, recordType: null, recordId: null, recordedAt: null };

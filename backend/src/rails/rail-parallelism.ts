@@ -1,5 +1,6 @@
 import { evaluateParallelism } from '../engine/parallelism.js';
 import type { SweepRow } from './rails.repository.js';
+import { finiteList } from '../common/stored-result.js';
 
 /** What the comparison reads of a sweep (full rows fit too). */
 export type ComparedSweep = Pick<SweepRow, 'id' | 'datum' | 'takenAt' | 'positionsMm' | 'readingsMm'>;
@@ -9,7 +10,7 @@ const SAME_POSITION_MM = 0.001;
 
 export type PairOutcome<S extends ComparedSweep = ComparedSweep> =
   | { comparable: true; a: S; b: S; datum: string; positionsMm: number[]; parallelismMm: number; meanOffsetMm: number; differencesMm: number[] }
-  | { comparable: false; reason: string; a: S | null; b: S | null };
+  | { comparable: false; reason: string; a: S | null; b: S | null; unreadable?: true };
 
 const datumKey = (d: string | null) => (d ?? '').trim().toLowerCase();
 
@@ -46,6 +47,11 @@ export function partnerParallelism<S extends ComparedSweep>(sweepsA: S[], sweeps
     };
   }
   const { a, b } = best;
+  // An old stored sweep with a reading or position that is not a number cannot be compared; say which.
+  const bad = [[a, labels.a], [b, labels.b]].filter(([s]) => !finiteList((s as S).positionsMm) || !finiteList((s as S).readingsMm) || (s as S).positionsMm.length !== (s as S).readingsMm.length).map(([, l]) => l as string);
+  if (bad.length) {
+    return { comparable: false, unreadable: true, reason: `The stored readings of the latest sweep of rail ${bad.join(' and rail ')} against datum ${a.datum!.trim()} cannot be read; sweep again and delete that sweep`, a, b };
+  }
   const order = a.positionsMm.map((p, i) => ({ p, i })).sort((x, y) => x.p - y.p);
   const bOrder = b.positionsMm.map((p, i) => ({ p, i })).sort((x, y) => x.p - y.p);
   const same = order.length === bOrder.length && order.every((x, k) => Math.abs(x.p - bOrder[k].p) <= SAME_POSITION_MM);
