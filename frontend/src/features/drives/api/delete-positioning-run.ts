@@ -1,5 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
+import { positioningRunQueryOptions } from './get-positioning-run';
 import { driveKeys } from '../types';
 
 /** Removes a run recorded in error (refused once an approval was based on it). */
@@ -7,6 +8,10 @@ export function useDeletePositioningRun(axisId: string) {
   const qc = useQueryClient();
   return useMutation({
     mutationFn: (runId: string) => api.delete<void>(`/axes/${axisId}/positioning-runs/${runId}`),
-    onSuccess: () => Promise.all([qc.invalidateQueries({ queryKey: driveKeys.all }), qc.invalidateQueries({ queryKey: ['machines'] })]),
+    onSuccess: (_: void, runId: string) => {
+      // Gone: nothing should ask for it again while the list catches up.
+      qc.removeQueries({ queryKey: positioningRunQueryOptions(axisId, runId).queryKey, exact: true });
+      return Promise.all([qc.invalidateQueries({ queryKey: driveKeys.all }), qc.invalidateQueries({ queryKey: ['machines'] })]);
+    },
   });
 }

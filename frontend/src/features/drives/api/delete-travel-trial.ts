@@ -1,5 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
+import { travelTrialQueryOptions } from './get-travel-trial';
 import { driveKeys } from '../types';
 
 /** Removes a trial recorded in error (refused once an approval was based on it). */
@@ -7,6 +8,10 @@ export function useDeleteTravelTrial(axisId: string) {
   const qc = useQueryClient();
   return useMutation({
     mutationFn: (trialId: string) => api.delete<void>(`/axes/${axisId}/travel-trials/${trialId}`),
-    onSuccess: () => Promise.all([qc.invalidateQueries({ queryKey: driveKeys.all }), qc.invalidateQueries({ queryKey: ['machines'] })]),
+    onSuccess: (_: void, trialId: string) => {
+      // Gone: nothing should ask for it again while the list catches up.
+      qc.removeQueries({ queryKey: travelTrialQueryOptions(axisId, trialId).queryKey, exact: true });
+      return Promise.all([qc.invalidateQueries({ queryKey: driveKeys.all }), qc.invalidateQueries({ queryKey: ['machines'] })]);
+    },
   });
 }

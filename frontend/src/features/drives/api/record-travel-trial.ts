@@ -1,6 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
 import type { LengthUnit } from '../../../lib/units';
+import { travelTrialQueryOptions } from './get-travel-trial';
 import { driveKeys, type TravelTrial } from '../types';
 
 export interface TravelTrialInput {
@@ -15,6 +16,10 @@ export function useRecordTravelTrial(axisId: string) {
   const qc = useQueryClient();
   return useMutation({
     mutationFn: (input: TravelTrialInput) => api.post<TravelTrial>(`/axes/${axisId}/travel-trials`, input),
-    onSuccess: () => Promise.all([qc.invalidateQueries({ queryKey: driveKeys.all }), qc.invalidateQueries({ queryKey: ['machines'] })]),
+    onSuccess: (saved: TravelTrial) => {
+      // The answer is the record in full: the result above the list shows it without asking again.
+      qc.setQueryData(travelTrialQueryOptions(axisId, saved.id).queryKey, saved);
+      return Promise.all([qc.invalidateQueries({ queryKey: driveKeys.all }), qc.invalidateQueries({ queryKey: ['machines'] })]);
+    },
   });
 }

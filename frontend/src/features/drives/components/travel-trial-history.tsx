@@ -1,10 +1,20 @@
-import { Paper, Table, TableBody, TableCell, TableContainer, TableHead, TableRow, Typography } from '@mui/material';
-import type { TravelTrial } from '../types';
+import { Box, Button, Paper, Table, TableBody, TableCell, TableContainer, TableHead, TableRow, Typography } from '@mui/material';
+import type { TravelTrialListItem } from '../api/get-travel-trials';
 import { showDateTime, showPercent } from '../utils/format';
 import { DriveStatusChip } from './drive-status-chip';
 
-/** Every trial of the axis, newest first; a row opens it above. */
-export function TravelTrialHistory({ trials, selectedId, onSelect }: { trials: TravelTrial[]; selectedId: string | null; onSelect: (id: string) => void }) {
+interface Props {
+  trials: TravelTrialListItem[];
+  selectedId: string | null;
+  onSelect: (id: string) => void;
+  /** More trials than one page: the button below asks for the next. */
+  hasOlder: boolean;
+  loadingOlder: boolean;
+  onLoadOlder: () => void;
+}
+
+/** The axis's trials, newest first, a page at a time; a row opens it above. */
+export function TravelTrialHistory({ trials, selectedId, onSelect, hasOlder, loadingOlder, onLoadOlder }: Props) {
   if (trials.length < 2) return null;
   return (
     <TableContainer component={Paper}>
@@ -26,9 +36,9 @@ export function TravelTrialHistory({ trials, selectedId, onSelect }: { trials: T
           {trials.map((t) => (
             <TableRow key={t.id} hover selected={t.id === selectedId} onClick={() => onSelect(t.id)} sx={{ cursor: 'pointer' }}>
               <TableCell>{showDateTime(t.recordedAt)}</TableCell>
-              <TableCell align="right">{t.moves.length}</TableCell>
-              <TableCell align="right">{showPercent(t.result.errorPercent)}</TableCell>
-              <TableCell align="right">{Number(t.result.correctedStepsPerMm.toFixed(4))} steps/mm</TableCell>
+              <TableCell align="right">{t.moveCount}</TableCell>
+              <TableCell align="right">{t.result ? showPercent(t.result.errorPercent) : 'Unreadable'}</TableCell>
+              <TableCell align="right">{t.result ? `${Number(t.result.correctedStepsPerMm.toFixed(4))} steps/mm` : '—'}</TableCell>
               <TableCell>
                 <DriveStatusChip status={t.status} />
               </TableCell>
@@ -37,6 +47,13 @@ export function TravelTrialHistory({ trials, selectedId, onSelect }: { trials: T
           ))}
         </TableBody>
       </Table>
+      {hasOlder && (
+        <Box sx={{ px: 2, py: 1 }}>
+          <Button onClick={onLoadOlder} disabled={loadingOlder}>
+            {loadingOlder ? 'Loading older trials…' : 'Load older trials'}
+          </Button>
+        </Box>
+      )}
     </TableContainer>
   );
 }
