@@ -3,7 +3,7 @@ import type { FastifyReply } from 'fastify';
 import { CurrentUser, Roles } from '../auth/decorators.js';
 import type { SessionUser } from '../auth/session-user.js';
 import { CALIBRATORS } from './drive-roles.js';
-import { AxisCheckPageQuery } from './dto/axis-check-page.query.js';
+import { PageQuery } from '../records/page.query.js';
 import { NEXT_CURSOR_HEADER } from '../records/page-cursor.js';
 import { CreatePositioningRunDto } from './dto/positioning-run.dto.js';
 import { TestProgramQuery } from './dto/test-program.query.js';
@@ -23,7 +23,7 @@ export class AxisChecksController {
 
   /** Newest first, without moves, a page at a time: the next page's cursor comes in the X-Next-Cursor header. */
   @Get('travel-trials')
-  async listTrials(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) axisId: string, @Query() query: AxisCheckPageQuery, @Res({ passthrough: true }) reply: FastifyReply) {
+  async listTrials(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) axisId: string, @Query() query: PageQuery, @Res({ passthrough: true }) reply: FastifyReply) {
     const { items, nextCursor } = await this.trials.list(user, axisId, query);
     if (nextCursor) reply.header(NEXT_CURSOR_HEADER, nextCursor);
     return items;
@@ -56,7 +56,7 @@ export class AxisChecksController {
 
   /** Newest first, without deviations, a page at a time, as the trials. */
   @Get('positioning-runs')
-  async listRuns(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) axisId: string, @Query() query: AxisCheckPageQuery, @Res({ passthrough: true }) reply: FastifyReply) {
+  async listRuns(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) axisId: string, @Query() query: PageQuery, @Res({ passthrough: true }) reply: FastifyReply) {
     const { items, nextCursor } = await this.runs.list(user, axisId, query);
     if (nextCursor) reply.header(NEXT_CURSOR_HEADER, nextCursor);
     return items;

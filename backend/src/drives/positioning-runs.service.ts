@@ -8,7 +8,7 @@ import { SubjectsRegistry } from '../records/subjects.registry.js';
 import { AxesService } from './axes.service.js';
 import { toPositioningRunListItem, toPositioningRunResponse } from './axis-check.mapper.js';
 import { DEFAULT_PAGE_SIZE } from '../records/page-cursor.js';
-import type { AxisCheckPageQuery } from './dto/axis-check-page.query.js';
+import type { PageQuery } from '../records/page.query.js';
 import { AxisChecksRepository, type PositioningRunRow } from './axis-checks.repository.js';
 import { DriveTargetsService } from './drive-targets.js';
 import type { CreatePositioningRunDto } from './dto/positioning-run.dto.js';
@@ -35,7 +35,7 @@ export class PositioningRunsService implements OnModuleInit {
   }
 
   /** A page of the axis's runs, newest first, without their deviations; `nextCursor` asks for the page after. */
-  async list(actor: SessionUser, axisId: string, query: AxisCheckPageQuery = {}) {
+  async list(actor: SessionUser, axisId: string, query: PageQuery = {}) {
     const axis = await this.axes.findRow(actor, axisId);
     const limit = query.limit ?? DEFAULT_PAGE_SIZE;
     const [rows, targets] = await Promise.all([this.repo.runPage(actor.workshopId, axisId, query.cursor ?? null, limit), this.targetsOf(actor, axis.machineId)]);

@@ -8,7 +8,7 @@ import { SubjectsRegistry } from '../records/subjects.registry.js';
 import { AxesService } from './axes.service.js';
 import { storedTravelTrial, toTravelTrialListItem, toTravelTrialResponse } from './axis-check.mapper.js';
 import { DEFAULT_PAGE_SIZE } from '../records/page-cursor.js';
-import type { AxisCheckPageQuery } from './dto/axis-check-page.query.js';
+import type { PageQuery } from '../records/page.query.js';
 import { AxisChecksRepository, type TravelTrialRow } from './axis-checks.repository.js';
 import { DriveTargetsService } from './drive-targets.js';
 import type { CreateTravelTrialDto } from './dto/travel-trial.dto.js';
@@ -43,7 +43,7 @@ export class TravelTrialsService implements OnModuleInit {
   }
 
   /** A page of the axis's trials, newest first, without their moves; `nextCursor` asks for the page after. */
-  async list(actor: SessionUser, axisId: string, query: AxisCheckPageQuery = {}) {
+  async list(actor: SessionUser, axisId: string, query: PageQuery = {}) {
     const axis = await this.axes.findRow(actor, axisId);
     const limit = query.limit ?? DEFAULT_PAGE_SIZE;
     const [rows, targets] = await Promise.all([this.repo.trialPage(actor.workshopId, axisId, query.cursor ?? null, limit), this.targetsOf(actor, axis.machineId)]);

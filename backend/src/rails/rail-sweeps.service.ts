@@ -9,7 +9,7 @@ import { targetInBaseUnit } from '../target-sets/target-keys.js';
 import { TargetSetsService } from '../target-sets/target-sets.service.js';
 import { toSweepListItem, toSweepResponse, type SweepListItem, type SweepResponse } from './rail.mapper.js';
 import { DEFAULT_PAGE_SIZE } from '../records/page-cursor.js';
-import type { SweepPageQuery } from './dto/sweep-page.query.js';
+import type { PageQuery } from '../records/page.query.js';
 import { RailsRepository, type SweepRow } from './rails.repository.js';
 import { RailsService } from './rails.service.js';
 import type { CreateSweepDto } from './dto/create-sweep.dto.js';
@@ -28,7 +28,7 @@ export class RailSweepsService {
   ) {}
 
   /** A page of the rail's sweeps, newest first, summaries only; `nextCursor` asks for the page after. */
-  async list(actor: SessionUser, railId: string, query: SweepPageQuery = {}): Promise<{ items: SweepListItem[]; nextCursor: string | null }> {
+  async list(actor: SessionUser, railId: string, query: PageQuery = {}): Promise<{ items: SweepListItem[]; nextCursor: string | null }> {
     await this.rails.findRow(actor, railId);
     const limit = query.limit ?? DEFAULT_PAGE_SIZE;
     const rows = await this.repo.sweepPage(actor.workshopId, railId, query.cursor ?? null, limit);

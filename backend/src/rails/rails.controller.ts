@@ -5,7 +5,7 @@ import type { SessionUser } from '../auth/session-user.js';
 import { boltTorqueTable } from './bolt-torques.js';
 import { CreateRailDto } from './dto/create-rail.dto.js';
 import { CreateSweepDto } from './dto/create-sweep.dto.js';
-import { SweepPageQuery } from './dto/sweep-page.query.js';
+import { PageQuery } from '../records/page.query.js';
 import { NEXT_CURSOR_HEADER } from '../records/page-cursor.js';
 import { UpdateRailDto } from './dto/update-rail.dto.js';
 import { RailChecksService } from './rail-checks.service.js';
@@ -61,7 +61,7 @@ export class RailsController {
 
   /** Newest first, summaries only, a page at a time: the next page's cursor comes in the X-Next-Cursor header. */
   @Get('rails/:id/sweeps')
-  async listSweeps(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string, @Query() query: SweepPageQuery, @Res({ passthrough: true }) reply: FastifyReply) {
+  async listSweeps(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string, @Query() query: PageQuery, @Res({ passthrough: true }) reply: FastifyReply) {
     const { items, nextCursor } = await this.sweeps.list(user, id, query);
     if (nextCursor) reply.header(NEXT_CURSOR_HEADER, nextCursor);
     return items;

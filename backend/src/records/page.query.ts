@@ -1,12 +1,12 @@
 import { Type } from 'class-transformer';
 import { IsInt, IsUUID, Max, Min } from 'class-validator';
-import { Optional } from '../../common/optional.js';
+import { Optional } from '../common/optional.js';
 
 /**
- * One page of an axis's travel trials or repeat-and-reverse runs: `limit` of them (default 50),
- * after the page `cursor` ended. The same paging as a rail's sweeps (records/page-cursor.ts).
+ * One page of a list of records (a rail's sweeps, an axis's trials or runs): `limit` of them
+ * (default 50), after the page `cursor` ended. See page-cursor.ts.
  */
-export class AxisCheckPageQuery {
+export class PageQuery {
   @Optional()
   @Type(() => Number)
   @IsInt({ message: 'limit must be a whole number' })
