@@ -25,6 +25,17 @@ async function indicatorSends(page: Page, reading: string) {
 const arrived = (page: Page) => page.getByRole('status', { name: 'Last reading' });
 const reading = (page: Page, positionMm: number) => page.getByLabel(`Reading at ${positionMm} mm`);
 
+/**
+ * The next reading comes once the carriage has moved to the next station: by then the live chart
+ * has drawn. (Simulated keys carry the time they were sent from here, so a chart drawing between
+ * two of them would stretch the burst; a real indicator's keys carry the time they were typed.)
+ */
+async function settle(page: Page) {
+  await page.waitForTimeout(300);
+  await page.waitForLoadState('networkidle');
+  await page.evaluate(() => new Promise((done) => requestAnimationFrame(() => requestAnimationFrame(done))));
+}
+
 /** Takes the focus off every field, as when the builder has put the tablet down. */
 const blur = (page: Page) => page.evaluate(() => (document.activeElement as HTMLElement | null)?.blur());
 
@@ -55,10 +66,12 @@ test.describe('indicator input', () => {
     // "From an indicator": with no field selected, a burst fills the next station without a reading.
     await page.getByLabel('From an indicator').check();
     await blur(page);
+    await settle(page);
     await indicatorSends(page, '- 0,002');
     await expect(reading(page, 350)).toHaveValue('-0.002');
     await expect(arrived(page)).toContainText('-0.002 thou → station 4 at 350 mm');
     // A reading sent in another unit is converted to the sweep's (0.0254 mm is 1 thou).
+    await settle(page);
     await indicatorSends(page, '0.0254 mm');
     await expect(reading(page, 450)).toHaveValue('1');
     await expect(arrived(page)).toContainText('1 thou → station 5 at 450 mm');
@@ -68,18 +81,22 @@ test.describe('indicator input', () => {
     await arrived(page).getByRole('button', { name: 'Undo' }).click();
     await expect(reading(page, 450)).toHaveValue('');
     await expect(arrived(page)).toHaveCount(0);
+    await settle(page);
     await indicatorSends(page, '0.8');
     await expect(reading(page, 450)).toHaveValue('0.8');
 
     // Something that is not a reading fills nothing and says why.
+    await settle(page);
     await indicatorSends(page, '12abc');
     await expect(page.getByRole('alert').filter({ hasText: '“12abc” is not a reading' })).toBeVisible();
     await expect(reading(page, 550)).toHaveValue('');
     // A person typing at a person's pace is not an indicator: nothing is captured.
+    await settle(page);
     await page.keyboard.type('0.7', { delay: 120 });
     await page.keyboard.press('Enter');
     await expect(reading(page, 550)).toHaveValue('');
 
+    await settle(page);
     await indicatorSends(page, '0.3');
     await expect(reading(page, 550)).toHaveValue('0.3');
     await page.getByRole('button', { name: 'Save sweep' }).click();
