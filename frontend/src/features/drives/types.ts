@@ -84,7 +84,9 @@ export interface TravelTrial {
     residuals: number[];
     residualMax: number;
     moves: { commanded: number; measured: number; error: number; residual: number }[];
-  };
+  } | null;
+  /** Present when the stored result cannot be read (result is then null). */
+  unreadable?: string;
   status: 'within-target' | 'outside-target';
   target: TargetValue;
   notes: string;
@@ -138,8 +140,10 @@ export interface PositioningRun {
     runsDown: number;
     targets: PositioningTargetResult[];
     warnings: string[];
-  };
-  checks: { accuracy: Verdict; repeatability: Verdict; reversal: Verdict };
+  } | null;
+  /** null with `result` when the stored result cannot be read (then `unreadable` says so). */
+  checks: { accuracy: Verdict; repeatability: Verdict; reversal: Verdict } | null;
+  unreadable?: string;
   status: 'within-target' | 'outside-target';
   notes: string;
   recordedBy: string;

@@ -33,7 +33,9 @@ export interface DiagonalCheck extends RecordCommon {
     diagonalDifferenceMm: number;
     warnings: string[];
     correction: { moveMm: number; spanMm: number; end: 'x-far' | 'x0' | null; towards: 'y0' | null; instruction: string };
-  };
+  } | null;
+  /** Present when the record's stored measurements cannot be read (result is then null). */
+  unreadable?: string;
 }
 
 export interface GridPointResult {
@@ -59,7 +61,9 @@ export interface BedGrid extends RecordCommon {
     worstPoints: GridPointResult[];
     rows: number;
     columns: number;
-  };
+  } | null;
+  /** Present when the record's stored measurements cannot be read (result is then null). */
+  unreadable?: string;
 }
 
 export interface AxisReading {
@@ -101,7 +105,9 @@ export interface TestCut extends RecordCommon {
     ovalityToleranceMm: number;
     parts: PartSizeCheck[];
     notes: string[];
-  };
+  } | null;
+  /** Present when the record's stored measurements cannot be read (result is then null). */
+  unreadable?: string;
 }
 
 /** One key factory for the feature. */

@@ -23,6 +23,8 @@ export interface Rail {
   typicalBoltSize: string | null;
   createdAt: string;
   updatedAt: string;
+  /** Present when the stored length, pitch or first hole cannot be read (holes is then empty). */
+  unreadable?: string;
 }
 
 export interface SweepSummary {
@@ -30,10 +32,12 @@ export interface SweepSummary {
   takenAt: string;
   phase: SweepPhase;
   datum: string | null;
-  leastSquaresStraightness: number;
-  minimumZoneStraightness: number;
+  /** null when the stored result cannot be read (then `unreadable` says so). */
+  leastSquaresStraightness: number | null;
+  minimumZoneStraightness: number | null;
   status: SweepStatus;
   target: TargetValue;
+  unreadable?: string;
 }
 
 export interface RailListItem extends Rail {
@@ -59,7 +63,8 @@ export interface Sweep {
   railId: string;
   machineId: string;
   unit: LengthUnit;
-  stations: { position: number; reading: number; readingMm: number }[];
+  /** null (with `unreadable`) when the stored readings cannot be read. */
+  stations: { position: number; reading: number; readingMm: number }[] | null;
   instrument: string;
   resolution: number | null;
   temperatureC: number | null;
@@ -69,9 +74,11 @@ export interface Sweep {
   torqueNm: number | null;
   datum: string | null;
   notes: string;
-  result: StraightnessResult;
+  /** null (with `unreadable`) when the stored result cannot be read. */
+  result: StraightnessResult | null;
   status: SweepStatus;
   target: TargetValue;
+  unreadable?: string;
   takenAt: string;
   createdAt: string;
   locked: boolean;

@@ -11,7 +11,7 @@ export interface PositioningRunListItem {
   targetCount: number;
   runCount: number;
   /** null when the stored result cannot be read (then `unreadable` says so). */
-  result: Pick<PositioningRun['result'], 'accuracy' | 'repeatability' | 'reversal'> | null;
+  result: Pick<NonNullable<PositioningRun['result']>, 'accuracy' | 'repeatability' | 'reversal'> | null;
   checks: PositioningRun['checks'] | null;
   unreadable?: string;
   status: PositioningRun['status'];

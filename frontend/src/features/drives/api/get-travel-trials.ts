@@ -12,7 +12,7 @@ export interface TravelTrialListItem {
   throughOrigin: boolean;
   moveCount: number;
   /** null when the stored result cannot be read (then `unreadable` says so). */
-  result: Pick<TravelTrial['result'], 'correctedStepsPerMm' | 'errorPercent' | 'scale' | 'offset' | 'residualMax'> | null;
+  result: Pick<NonNullable<TravelTrial['result']>, 'correctedStepsPerMm' | 'errorPercent' | 'scale' | 'offset' | 'residualMax'> | null;
   unreadable?: string;
   status: TravelTrial['status'];
   target: TargetValue;

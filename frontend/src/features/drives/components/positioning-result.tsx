@@ -5,6 +5,7 @@ import type { PositioningRun, Verdict } from '../types';
 import { showDateTime, showLength, showTarget } from '../utils/format';
 import { DriveStatusChip } from './drive-status-chip';
 import { DeleteRecordButton } from './delete-record-button';
+import { UnreadableRecord } from '../../../components/unreadable-record';
 import { useDeletePositioningRun } from '../api/delete-positioning-run';
 
 function Judged({ label, verdict, unit }: { label: string; verdict: Verdict; unit: PositioningRun['unit'] }) {
@@ -25,8 +26,24 @@ function Judged({ label, verdict, unit }: { label: string; verdict: Verdict; uni
 export function PositioningResult({ run, mayDelete }: { run: PositioningRun; mayDelete: boolean }) {
   const remove = useDeletePositioningRun(run.axisId);
   const r = run.result;
+  const checks = run.checks;
   const u = run.unit;
   const ul = UNIT_LABELS[u];
+  if (!r || !checks) {
+    return (
+      <Paper sx={{ p: 2.5 }} component="section" aria-label="Repeat-and-reverse result">
+        <Typography variant="h4" component="h3" gutterBottom>
+          Repeat-and-reverse run of {showDateTime(run.recordedAt)}
+        </Typography>
+        <UnreadableRecord message={run.unreadable ?? 'This run cannot be read.'} />
+        {mayDelete && (
+          <Box sx={{ mt: 1 }}>
+            <DeleteRecordButton what="run" locked={run.locked} onDelete={() => remove.mutate(run.id)} pending={remove.isPending} error={remove.error} />
+          </Box>
+        )}
+      </Paper>
+    );
+  }
   return (
     <Paper sx={{ p: 2.5 }} component="section" aria-label="Repeat-and-reverse result">
       <Box sx={{ display: 'flex', alignItems: 'center', gap: 1.5, flexWrap: 'wrap', mb: 1.5 }}>
@@ -36,9 +53,9 @@ export function PositioningResult({ run, mayDelete }: { run: PositioningRun; may
         <DriveStatusChip status={run.status} />
       </Box>
       <Box sx={{ display: 'grid', gridTemplateColumns: { xs: '1fr 1fr', md: 'repeat(4, 1fr)' }, gap: 2, mb: 2 }}>
-        <Judged label="Positioning accuracy A" verdict={run.checks.accuracy} unit={u} />
-        <Judged label="Repeatability R (bidirectional)" verdict={run.checks.repeatability} unit={u} />
-        <Judged label="Reversal value B" verdict={run.checks.reversal} unit={u} />
+        <Judged label="Positioning accuracy A" verdict={checks.accuracy} unit={u} />
+        <Judged label="Repeatability R (bidirectional)" verdict={checks.repeatability} unit={u} />
+        <Judged label="Reversal value B" verdict={checks.reversal} unit={u} />
         <Box>
           <Typography variant="body2" color="text.secondary">
             Systematic deviation E

@@ -1,6 +1,7 @@
 import { Box, Button, Paper, Table, TableBody, TableCell, TableContainer, TableHead, TableRow, Typography } from '@mui/material';
 import type { TravelTrialListItem } from '../api/get-travel-trials';
 import { showDateTime, showPercent } from '../utils/format';
+import { UnreadableRecord } from '../../../components/unreadable-record';
 import { DriveStatusChip } from './drive-status-chip';
 
 interface Props {
@@ -37,8 +38,16 @@ export function TravelTrialHistory({ trials, selectedId, onSelect, hasOlder, loa
             <TableRow key={t.id} hover selected={t.id === selectedId} onClick={() => onSelect(t.id)} sx={{ cursor: 'pointer' }}>
               <TableCell>{showDateTime(t.recordedAt)}</TableCell>
               <TableCell align="right">{t.moveCount}</TableCell>
-              <TableCell align="right">{t.result ? showPercent(t.result.errorPercent) : 'Unreadable'}</TableCell>
-              <TableCell align="right">{t.result ? `${Number(t.result.correctedStepsPerMm.toFixed(4))} steps/mm` : '—'}</TableCell>
+              {t.result ? (
+                <>
+                  <TableCell align="right">{showPercent(t.result.errorPercent)}</TableCell>
+                  <TableCell align="right">{`${Number(t.result.correctedStepsPerMm.toFixed(4))} steps/mm`}</TableCell>
+                </>
+              ) : (
+                <TableCell colSpan={2}>
+                  <UnreadableRecord inline message={t.unreadable ?? ''} />
+                </TableCell>
+              )}
               <TableCell>
                 <DriveStatusChip status={t.status} />
               </TableCell>

@@ -7,6 +7,7 @@ import { DeleteRecordButton } from './delete-record-button';
 import type { Axis, TravelTrial } from '../types';
 import { errorText, showDateTime, showLength, showPercent, showTarget } from '../utils/format';
 import { CopyValue } from './copy-value';
+import { UnreadableRecord } from '../../../components/unreadable-record';
 import { DriveStatusChip } from './drive-status-chip';
 
 const CHART_UNIT: Record<LengthUnit, LengthUnit> = { mm: 'mm', um: 'um', in: 'thou', thou: 'thou' };
@@ -28,6 +29,21 @@ export function TravelTrialResult({ axis, trial, mayApply }: { axis: Axis; trial
   const remove = useDeleteTravelTrial(axis.id);
   const r = trial.result;
   const unit = CHART_UNIT[trial.unit];
+  if (!r) {
+    return (
+      <Paper sx={{ p: 2.5 }} component="section" aria-label="Travel trial result">
+        <Typography variant="h4" component="h3" gutterBottom>
+          Travel trial of {showDateTime(trial.recordedAt)}
+        </Typography>
+        <UnreadableRecord message={trial.unreadable ?? 'This trial cannot be read.'} />
+        {mayApply && (
+          <Box sx={{ mt: 1 }}>
+            <DeleteRecordButton what="trial" locked={trial.locked} onDelete={() => remove.mutate(trial.id)} pending={remove.isPending} error={remove.error} />
+          </Box>
+        )}
+      </Paper>
+    );
+  }
   const corrected = Number(r.correctedStepsPerMm.toFixed(4)).toString();
   const differs = Math.abs(axis.stepsPerMm - Number(corrected)) > 1e-9;
   return (

@@ -9,6 +9,7 @@ import { namePoint } from '../utils/grid-labels';
 import { BedGridEntry } from './bed-grid-entry';
 import { BedGridMap } from './bed-grid-map';
 import { StatusChip } from './status-chip';
+import { UnreadableRecord } from '../../../components/unreadable-record';
 import { DeleteRecordButton } from './delete-record-button';
 
 const DIGITS: Record<LengthUnit, number> = { mm: 2, um: 0, in: 4, thou: 1 };
@@ -35,7 +36,15 @@ export function BedGridSection({ machineId, workArea, canRecord }: { machineId: 
       <Box sx={{ display: 'grid', gap: 3, gridTemplateColumns: { xs: '1fr', lg: canRecord ? 'minmax(360px, 1fr) 1fr' : '1fr' } }}>
         {canRecord && <BedGridEntry machineId={machineId} workArea={workArea} onSaved={(x) => setSelectedId(x.id)} />}
         <Box>
-          {g ? (
+          {g && !g.result ? (
+            <Stack spacing={1.5}>
+              <UnreadableRecord message={g.unreadable ?? 'This bed grid cannot be read.'} />
+              <Typography variant="body2" color="text.secondary">
+                Recorded {showDate(g.recordedAt)} by {g.recordedBy.name}
+              </Typography>
+              {canRecord && !g.locked && <DeleteRecordButton machineId={machineId} kind="bed-grids" id={g.id} what="this bed grid" onDeleted={() => setSelectedId(null)} />}
+            </Stack>
+          ) : g && g.result ? (
             <Stack spacing={1.5}>
               <Box sx={{ display: 'flex', gap: 1.5, alignItems: 'center', flexWrap: 'wrap' }}>
                 <Typography variant="h4" component="p" data-testid="flatness-result">
@@ -73,7 +82,7 @@ export function BedGridSection({ machineId, workArea, canRecord }: { machineId: 
         <TextField select label="Earlier grids" value={g?.id ?? ''} onChange={(e) => setSelectedId(e.target.value)} sx={{ mt: 2, minWidth: 320 }}>
           {list.map((x) => (
             <MenuItem key={x.id} value={x.id}>
-              {showDate(x.recordedAt)} · flatness {showLength(x.result.leastSquares.flatnessMm, isLengthUnit(x.target.unit) ? x.target.unit : 'mm')} · {x.status === 'within-target' ? 'within' : 'outside'}
+              {showDate(x.recordedAt)} · {x.result ? `flatness ${showLength(x.result.leastSquares.flatnessMm, isLengthUnit(x.target.unit) ? x.target.unit : 'mm')} · ${x.status === 'within-target' ? 'within' : 'outside'}` : 'cannot be read'}
             </MenuItem>
           ))}
         </TextField>

@@ -9,6 +9,7 @@ import { DeleteRecordButton } from './delete-record-button';
 import { DiagonalCheckForm } from './diagonal-check-form';
 import { SquarenessDrawing } from './squareness-drawing';
 import { SquaringHistory } from './squaring-history';
+import { UnreadableRecord } from '../../../components/unreadable-record';
 import { StatusChip } from './status-chip';
 
 /** Squareness from the diagonals: entry, the drawing of the latest (or chosen) check, and the history. */
@@ -31,7 +32,15 @@ export function DiagonalCheckSection({ machineId, canRecord }: { machineId: stri
       <Box sx={{ display: 'grid', gap: 3, gridTemplateColumns: { xs: '1fr', lg: canRecord ? 'minmax(320px, 5fr) 7fr' : '1fr' } }}>
         {canRecord && <DiagonalCheckForm machineId={machineId} onSaved={(c) => setSelectedId(c.id)} />}
         <Box>
-          {shown ? (
+          {shown && !shown.result ? (
+            <Stack spacing={1.5}>
+              <UnreadableRecord message={shown.unreadable ?? 'This diagonal check cannot be read.'} />
+              <Typography variant="body2" color="text.secondary">
+                Recorded {showDate(shown.recordedAt)} by {shown.recordedBy.name}
+              </Typography>
+              {canRecord && !shown.locked && <DeleteRecordButton machineId={machineId} kind="diagonal-checks" id={shown.id} what="this diagonal check" onDeleted={() => setSelectedId(null)} />}
+            </Stack>
+          ) : shown && shown.result ? (
             <Stack spacing={1.5}>
               <Box sx={{ display: 'flex', gap: 1.5, alignItems: 'center', flexWrap: 'wrap' }}>
                 <Typography variant="h4" component="p" data-testid="squareness-result">

@@ -3,13 +3,15 @@ import { Box, Table, TableBody, TableCell, TableContainer, TableHead, TableRow, 
 import { palette } from '../../../theme/theme';
 import type { DiagonalCheck } from '../types';
 import { showDate } from '../utils/format';
+import { UnreadableRecord } from '../../../components/unreadable-record';
 import { StatusChip } from './status-chip';
 
 /** Every diagonal check of the machine, oldest first, so squaring can be seen to converge. */
 export function SquaringHistory({ checks, selectedId, onSelect }: { checks: DiagonalCheck[]; selectedId?: string; onSelect: (c: DiagonalCheck) => void }) {
   const ordered = [...checks].reverse();
   const target = checks[0]?.target;
-  const rows = ordered.map((c, i) => ({ n: i + 1, mmPerMetre: Number(c.result.mmPerMetre.toFixed(4)) }));
+  // A check that cannot be read keeps its number in the table but has no point on the chart.
+  const rows = ordered.flatMap((c, i) => (c.result ? [{ n: i + 1, mmPerMetre: Number(c.result.mmPerMetre.toFixed(4)) }] : []));
   return (
     <Box>
       {rows.length >= 2 && (
@@ -46,12 +48,20 @@ export function SquaringHistory({ checks, selectedId, onSelect }: { checks: Diag
                   <Typography variant="body2">{showDate(c.recordedAt)}</Typography>
                   <Typography variant="caption" color="text.secondary">{c.recordedBy.name}</Typography>
                 </TableCell>
-                <TableCell align="right">
-                  {c.result.mmPerMetre.toFixed(3)} mm/m
-                  <Typography variant="caption" color="text.secondary" component="div">{c.result.outOfSquareArcsec.toFixed(0)}″</Typography>
-                </TableCell>
-                <TableCell>{c.result.diagonalDifferenceMm === 0 ? 'equal' : `${c.result.longDiagonal} (+${c.result.diagonalDifferenceMm.toFixed(2)} mm)`}</TableCell>
-                <TableCell align="right">{c.result.correction.moveMm.toFixed(2)} mm</TableCell>
+                {c.result ? (
+                  <>
+                    <TableCell align="right">
+                      {c.result.mmPerMetre.toFixed(3)} mm/m
+                      <Typography variant="caption" color="text.secondary" component="div">{c.result.outOfSquareArcsec.toFixed(0)}″</Typography>
+                    </TableCell>
+                    <TableCell>{c.result.diagonalDifferenceMm === 0 ? 'equal' : `${c.result.longDiagonal} (+${c.result.diagonalDifferenceMm.toFixed(2)} mm)`}</TableCell>
+                    <TableCell align="right">{c.result.correction.moveMm.toFixed(2)} mm</TableCell>
+                  </>
+                ) : (
+                  <TableCell colSpan={3}>
+                    <UnreadableRecord inline message={c.unreadable ?? ''} />
+                  </TableCell>
+                )}
                 <TableCell>
                   <StatusChip status={c.status} />
                 </TableCell>

@@ -2,11 +2,12 @@ import type { ReactNode } from 'react';
 import { Alert, Box, Stack, Table, TableBody, TableCell, TableContainer, TableHead, TableRow, Typography } from '@mui/material';
 import type { TestCut } from '../types';
 import { showDate, showLength, showSigned, showTarget } from '../utils/format';
+import { UnreadableRecord } from '../../../components/unreadable-record';
 import { StatusChip } from './status-chip';
 
 const SHORT: Record<string, string> = { 'outside-x': 'Outside X', 'outside-y': 'Outside Y', 'circle-x': 'Circle ⌀ along X', 'circle-y': 'Circle ⌀ along Y' };
 
-const POINTS_TO: Record<TestCut['result']['ovalityPointsTo'], string> = {
+const POINTS_TO: Record<NonNullable<TestCut['result']>['ovalityPointsTo'], string> = {
   round: 'round',
   scale: 'unequal scale',
   'x-backlash': 'backlash on X',
@@ -17,14 +18,25 @@ const POINTS_TO: Record<TestCut['result']['ovalityPointsTo'], string> = {
 export function TestCutResults({ cut, actions }: { cut: TestCut; actions?: ReactNode }) {
   const r = cut.result;
   const tol = cut.targets.part;
+  const heading = (
+    <Box sx={{ display: 'flex', gap: 1.5, alignItems: 'center', flexWrap: 'wrap' }}>
+      <Typography variant="h4" component="p">Test cut of {showDate(cut.recordedAt)}</Typography>
+      <StatusChip status={cut.status} />
+      <Typography variant="body2" color="text.secondary">by {cut.recordedBy.name}</Typography>
+      {actions}
+    </Box>
+  );
+  if (!r) {
+    return (
+      <Stack spacing={2}>
+        {heading}
+        <UnreadableRecord message={cut.unreadable ?? 'This test cut cannot be read.'} />
+      </Stack>
+    );
+  }
   return (
     <Stack spacing={2}>
-      <Box sx={{ display: 'flex', gap: 1.5, alignItems: 'center', flexWrap: 'wrap' }}>
-        <Typography variant="h4" component="p">Test cut of {showDate(cut.recordedAt)}</Typography>
-        <StatusChip status={cut.status} />
-        <Typography variant="body2" color="text.secondary">by {cut.recordedBy.name}</Typography>
-        {actions}
-      </Box>
+      {heading}
       {cut.note && <Typography variant="body2" color="text.secondary">{cut.note}</Typography>}
       <TableContainer>
         <Table size="small" aria-label="Scale per axis" sx={{ '& td': { whiteSpace: 'nowrap' } }}>

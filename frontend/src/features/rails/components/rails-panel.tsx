@@ -12,6 +12,7 @@ import { useRails } from '../api/get-rails';
 import { showInTargetUnit, showTarget } from '../utils/display';
 import { AddRailDialog } from './add-rail-dialog';
 import { CheckStatusChip } from './check-status-chip';
+import { UnreadableRecord } from '../../../components/unreadable-record';
 import { PairParallelismSummary } from './pair-parallelism-summary';
 
 /** The machine file's rails: each with its latest straightness, and each partner pair's parallelism. */
@@ -75,13 +76,15 @@ export function RailsPanel({ machineId }: { machineId: string }) {
                       </Typography>
                     </TableCell>
                     <TableCell>
-                      {r.lengthMm} mm · {r.holes.length} holes
+                      {r.unreadable ? <UnreadableRecord inline message={r.unreadable} /> : `${r.lengthMm} mm · ${r.holes.length} holes`}
                       <Typography variant="body2" color="text.secondary">
                         pitch {r.holePitchMm} mm
                       </Typography>
                     </TableCell>
                     <TableCell>
-                      {s ? (
+                      {s && (s.leastSquaresStraightness === null || s.minimumZoneStraightness === null) ? (
+                        <UnreadableRecord inline message={s.unreadable ?? ''} />
+                      ) : s && s.leastSquaresStraightness !== null && s.minimumZoneStraightness !== null ? (
                         <>
                           {showInTargetUnit(s.leastSquaresStraightness, s.target)} least squares
                           <Typography variant="body2" color="text.secondary">

@@ -11,6 +11,7 @@ import { PHASE_LABELS } from '../types';
 import { showInTargetUnit } from '../utils/display';
 import { CheckStatusChip } from './check-status-chip';
 import { SweepResult } from './sweep-result';
+import { UnreadableRecord } from '../../../components/unreadable-record';
 
 const when = (s: { takenAt: string }) => new Date(s.takenAt).toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' });
 
@@ -27,7 +28,8 @@ export function SweepHistory({ sweeps, canRecord }: { sweeps: SweepListItem[]; c
   const more = useSweeps(sweeps[0]?.railId ?? '');
   const full = useSweepsById([...picked, ...(open && !picked.includes(open) ? [open] : [])]);
   if (!sweeps.length) return null;
-  const chosen = full.filter((s) => picked.includes(s.id));
+  // A sweep whose readings or result cannot be read has nothing to draw.
+  const chosen = full.filter((s) => picked.includes(s.id)).flatMap((s) => (s.result && s.stations ? [{ ...s, result: s.result, stations: s.stations }] : []));
   const unit = chosen[0]?.unit ?? sweeps[0].unit;
   const toggle = (id: string) => setPicked(picked.includes(id) ? picked.filter((x) => x !== id) : [...picked, id].slice(-2));
   const opened = full.find((s) => s.id === open);
@@ -66,8 +68,16 @@ export function SweepHistory({ sweeps, canRecord }: { sweeps: SweepListItem[]; c
                     </Typography>
                   </TableCell>
                   <TableCell>{PHASE_LABELS[s.phase]}</TableCell>
-                  <TableCell>{showInTargetUnit(s.leastSquaresStraightness, s.target)}</TableCell>
-                  <TableCell>{showInTargetUnit(s.minimumZoneStraightness, s.target)}</TableCell>
+                  {s.leastSquaresStraightness === null || s.minimumZoneStraightness === null ? (
+                    <TableCell colSpan={2}>
+                      <UnreadableRecord inline message={s.unreadable ?? ''} />
+                    </TableCell>
+                  ) : (
+                    <>
+                      <TableCell>{showInTargetUnit(s.leastSquaresStraightness, s.target)}</TableCell>
+                      <TableCell>{showInTargetUnit(s.minimumZoneStraightness, s.target)}</TableCell>
+                    </>
+                  )}
                   <TableCell>
                     <CheckStatusChip status={s.status} />
                   </TableCell>

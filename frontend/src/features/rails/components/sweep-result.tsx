@@ -4,11 +4,23 @@ import { PHASE_LABELS, type Sweep } from '../types';
 import { showInTargetUnit, showLength, showTarget } from '../utils/display';
 import { CheckStatusChip } from './check-status-chip';
 import { SweepPreview } from './sweep-preview';
+import { UnreadableRecord } from '../../../components/unreadable-record';
 
 /** A saved sweep: the server's fit, the residual at each station, and the verdict beside its target. */
 export function SweepResult({ sweep, title = 'Saved sweep' }: { sweep: Sweep; title?: string }) {
   const unit = sweep.unit;
   const digits = unit === 'um' ? 1 : unit === 'mm' ? 4 : unit === 'in' ? 5 : 2;
+  const { result, stations } = sweep;
+  if (!result || !stations) {
+    return (
+      <Paper component="section" aria-label={title} sx={{ p: { xs: 1.5, sm: 2.5 } }}>
+        <Typography variant="h3" component="h2" gutterBottom>
+          {title}
+        </Typography>
+        <UnreadableRecord message={sweep.unreadable ?? 'This sweep cannot be read.'} />
+      </Paper>
+    );
+  }
   return (
     <Paper component="section" aria-label={title} sx={{ p: { xs: 1.5, sm: 2.5 } }}>
       <Box sx={{ display: 'flex', alignItems: 'center', gap: 1.5, flexWrap: 'wrap', mb: 1 }}>
@@ -26,12 +38,12 @@ export function SweepResult({ sweep, title = 'Saved sweep' }: { sweep: Sweep; ti
         {sweep.datum ? ` · datum: ${sweep.datum}` : ''}
       </Typography>
       <Alert severity={sweep.status === 'within-target' ? 'success' : 'error'} sx={{ mb: 2 }}>
-        Least-squares straightness {showInTargetUnit(sweep.result.leastSquares.straightness, sweep.target)} against a target of {showTarget(sweep.target)}:{' '}
-        {sweep.status === 'within-target' ? 'within target.' : 'outside target.'} Minimum zone {showInTargetUnit(sweep.result.minimumZone.straightness, sweep.target)}.
+        Least-squares straightness {showInTargetUnit(result.leastSquares.straightness, sweep.target)} against a target of {showTarget(sweep.target)}:{' '}
+        {sweep.status === 'within-target' ? 'within target.' : 'outside target.'} Minimum zone {showInTargetUnit(result.minimumZone.straightness, sweep.target)}.
       </Alert>
       <Stack direction={{ xs: 'column', lg: 'row' }} spacing={2.5}>
         <Box sx={{ flex: 3, minWidth: 0 }}>
-          <SweepPreview points={sweep.stations.map((s) => ({ position: s.position, reading: s.reading }))} unit={unit} result={sweep.result} target={sweep.target} label="Saved sweep straightness chart" />
+          <SweepPreview points={stations.map((s) => ({ position: s.position, reading: s.reading }))} unit={unit} result={result} target={sweep.target} label="Saved sweep straightness chart" />
         </Box>
         <TableContainer sx={{ flex: 2, maxHeight: 380 }}>
           <Table size="small" stickyHeader aria-label="Residual per station">
@@ -43,8 +55,8 @@ export function SweepResult({ sweep, title = 'Saved sweep' }: { sweep: Sweep; ti
               </TableRow>
             </TableHead>
             <TableBody>
-              {sweep.stations.map((s, i) => {
-                const r = fromMm(sweep.result.leastSquares.residuals[i], unit);
+              {stations.map((s, i) => {
+                const r = fromMm(result.leastSquares.residuals[i], unit);
                 return (
                   <TableRow key={i}>
                     <TableCell>{s.position}</TableCell>
@@ -61,7 +73,7 @@ export function SweepResult({ sweep, title = 'Saved sweep' }: { sweep: Sweep; ti
         </TableContainer>
       </Stack>
       <Typography variant="body2" color="text.secondary" sx={{ mt: 1 }}>
-        End-point straightness {showLength(sweep.result.endPoint.straightness, unit)}. Residuals are from the least-squares line.
+        End-point straightness {showLength(result.endPoint.straightness, unit)}. Residuals are from the least-squares line.
       </Typography>
     </Paper>
   );
