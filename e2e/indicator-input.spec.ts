@@ -59,9 +59,10 @@ test.describe('indicator input', () => {
     await indicatorSends(page, '+0.010');
     await expect(reading(page, 50)).toHaveValue('0.012');
     await expect(reading(page, 150)).toHaveValue('-0.004');
-    await expect(reading(page, 250)).toHaveValue('0.01');
+    // The reading as sent, trailing zero kept (it tells the resolution), without the plus.
+    await expect(reading(page, 250)).toHaveValue('0.010');
     await expect(reading(page, 350)).toBeFocused();
-    await expect(arrived(page)).toContainText('0.01 thou → station 3 at 250 mm');
+    await expect(arrived(page)).toContainText('0.010 thou → station 3 at 250 mm');
 
     // "From an indicator": with no field selected, a burst fills the next station without a reading.
     await page.getByLabel('From an indicator').check();
@@ -185,7 +186,7 @@ test.describe('indicator input', () => {
 
     // Two lines in one chunk land in two stations, in order.
     await push('0.010\r\n-0.002\r\n');
-    await expect(reading(page, 50)).toHaveValue('0.01');
+    await expect(reading(page, 50)).toHaveValue('0.010');
     await expect(reading(page, 150)).toHaveValue('-0.002');
     await expect(arrived(page)).toContainText('-0.002 thou → station 2 at 150 mm');
 
@@ -221,6 +222,28 @@ test.describe('indicator input', () => {
     const saved = (Array.isArray(sweeps) ? sweeps : sweeps.items)[0];
     const full = await (await page.request.get(`/api/sweeps/${saved.id}`)).json();
     expect(full.stations.map((s: { reading: number }) => s.reading)).toEqual([0.01, -0.003, 0.007, 0.004]);
+  });
+
+  test('in the bed grid a reading lands in the selected cell and moves on; Undo goes back to that cell', async ({ page }) => {
+    await signInAs(page, DEMO.technician);
+    await page.goto('/machines');
+    await page.getByRole('link', { name: 'Big plasma table' }).click();
+    await page.getByRole('tab', { name: 'Frame' }).click();
+    const grid = page.getByRole('form', { name: 'Bed grid' });
+    const cell = (r: number, c: number) => grid.getByLabel(`Height at row ${r}, column ${c}`);
+    await cell(1, 1).click();
+    await indicatorSends(page, '0,10');
+    await indicatorSends(page, '-0.05');
+    await expect(cell(1, 1)).toHaveValue('0.10');
+    await expect(cell(1, 2)).toHaveValue('-0.05');
+    await expect(cell(1, 3)).toBeFocused();
+    await expect(arrived(page)).toContainText('-0.05 mm → row 1, column 2');
+    await arrived(page).getByRole('button', { name: 'Undo' }).click();
+    await expect(cell(1, 2)).toHaveValue('');
+    await expect(cell(1, 2)).toBeFocused();
+    await indicatorSends(page, '0.02');
+    await expect(cell(1, 2)).toHaveValue('0.02');
+    await expect(cell(1, 3)).toBeFocused();
   });
 
   test('without Web Serial the page says so and keyboard mode still works', async ({ page }) => {

@@ -12,7 +12,8 @@ export const LINE_FORMATS: Record<LineFormat, string> = {
   'last-number': 'Last number in the line',
 };
 
-export type ParsedReading = { ok: true; value: number; unit: LengthUnit | null } | { ok: false; message: string };
+/** `text` is the number as sent, with a point for a comma and no plus sign ("+0,0120" → "0.0120"): the trailing zeros tell the resolution. */
+export type ParsedReading = { ok: true; value: number; text: string; unit: LengthUnit | null } | { ok: false; message: string };
 
 // Unit words as indicators print them; µ (micro sign) and μ (Greek mu) both occur.
 const UNIT_WORDS: Record<string, LengthUnit> = { mm: 'mm', in: 'in', inch: 'in', '"': 'in', um: 'um', 'µm': 'um', 'μm': 'um', thou: 'thou' };
@@ -33,12 +34,14 @@ export function parseReadingLine(line: string, format: LineFormat = 'number'): P
   }
   const magnitude = Number(m[2].replace(',', '.'));
   const value = m[1] === '-' || m[1] === '−' ? -magnitude : magnitude;
-  return { ok: true, value: Object.is(value, -0) ? 0 : value, unit: m[3] ? UNIT_WORDS[m[3].toLowerCase()] ?? null : null };
+  const digits = m[2].replace(',', '.').replace(/^\./, '0.');
+  return { ok: true, value: Object.is(value, -0) ? 0 : value, text: value < 0 ? `-${digits}` : digits, unit: m[3] ? UNIT_WORDS[m[3].toLowerCase()] ?? null : null };
 }
 
-/** The reading as cell text in the grid's unit: a reading sent in another unit is converted. */
-export function readingInUnit(value: number, from: LengthUnit | null, to: LengthUnit): string {
-  const v = from && from !== to ? fromMm(toMm(value, from), to) : value;
+/** The reading as cell text in the grid's unit: as sent, or converted when sent in another unit. */
+export function readingInUnit(reading: { value: number; text: string; unit: LengthUnit | null }, to: LengthUnit): string {
+  if (!reading.unit || reading.unit === to) return reading.text;
+  const v = fromMm(toMm(reading.value, reading.unit), to);
   // Ten significant figures drop the binary noise of the conversion and keep every real digit.
   return String(Number(v.toPrecision(10)));
 }

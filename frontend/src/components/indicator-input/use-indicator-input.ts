@@ -26,6 +26,8 @@ export interface Arrival {
   sent: string | null;
   label: string | null;
   cell: string | null;
+  /** Typed into a selected cell (rather than sent to the next empty one). */
+  inCell: boolean;
   undo: (() => void) | null;
 }
 
@@ -83,10 +85,10 @@ export function useIndicatorInput({ unit, place, enterMovesOn = true }: { unit: 
       return;
     }
     const { unit: gridUnit, place: put } = live.current;
-    const text = readingInUnit(parsed.value, parsed.unit, gridUnit);
+    const text = readingInUnit(parsed, gridUnit);
     const placed = put(text, next.cell);
     setRefused(placed ? null : `Every cell already has a reading: ${text} ${UNIT_LABELS[gridUnit]} was not filled.`);
-    setLast({ text, unit: gridUnit, sent: parsed.unit && parsed.unit !== gridUnit ? next.line.trim() : null, label: placed?.label ?? null, cell: placed?.cell ?? null, undo: placed?.undo ?? null });
+    setLast({ text, unit: gridUnit, sent: parsed.unit && parsed.unit !== gridUnit ? next.line.trim() : null, label: placed?.label ?? null, cell: placed?.cell ?? null, inCell: next.cell !== null, undo: placed?.undo ?? null });
   });
 
   useEffect(() => {
@@ -153,9 +155,9 @@ export function useIndicatorInput({ unit, place, enterMovesOn = true }: { unit: 
     if (!a) return;
     a.undo?.();
     setLast(null);
-    // Typing into the grid: back to the cleared cell, so the next reading goes there again.
+    // Sent into a selected cell: that cell is selected again, so the next reading goes there.
     const box = container.current;
-    if (a.cell !== null && box?.contains(document.activeElement) && document.activeElement?.closest('[data-indicator-cell]')) {
+    if (a.cell !== null && a.inCell && box) {
       const el = box.querySelector<HTMLElement>(`[data-indicator-cell="${CSS.escape(a.cell)}"]`);
       el?.focus();
       if (el instanceof HTMLInputElement) el.select();
