@@ -133,8 +133,8 @@ export class RailsRepository {
       target: SweepRow['target'];
     }>(sql`
       select s.id, s.rail_id, s.taken_at, s.phase, s.datum, s.status, s.target,
-             (s.result #>> '{leastSquares,straightness}')::float8 as ls,
-             (s.result #>> '{minimumZone,straightness}')::float8 as mz,
+             case when jsonb_typeof(s.result #> '{leastSquares,straightness}') = 'number' then (s.result #>> '{leastSquares,straightness}')::float8 end as ls,
+             case when jsonb_typeof(s.result #> '{minimumZone,straightness}') = 'number' then (s.result #>> '{minimumZone,straightness}')::float8 end as mz,
              jsonb_array_length(s.positions_mm) as stations
       from unnest(${uuidArray(railIds)}) as r(id)
       cross join lateral (
@@ -153,8 +153,8 @@ export class RailsRepository {
           phase: r.phase,
           datum: r.datum,
           status: r.status,
-          leastSquaresStraightness: Number(r.ls),
-          minimumZoneStraightness: Number(r.mz),
+          leastSquaresStraightness: storedNumber(r.ls),
+          minimumZoneStraightness: storedNumber(r.mz),
           stationCount: Number(r.stations),
           target: r.target,
         },
@@ -208,8 +208,8 @@ export class RailsRepository {
       stations: number;
     }>(sql`
       select s.id, s.rail_id, s.machine_id, s.unit, s.taken_by, s.taken_at, s.created_at, s.phase, s.datum, s.status, s.target,
-             (s.result #>> '{leastSquares,straightness}')::float8 as ls,
-             (s.result #>> '{minimumZone,straightness}')::float8 as mz,
+             case when jsonb_typeof(s.result #> '{leastSquares,straightness}') = 'number' then (s.result #>> '{leastSquares,straightness}')::float8 end as ls,
+             case when jsonb_typeof(s.result #> '{minimumZone,straightness}') = 'number' then (s.result #>> '{minimumZone,straightness}')::float8 end as mz,
              jsonb_array_length(s.positions_mm) as stations
       from rail_sweeps s
       where s.workshop_id = ${workshopId} and s.rail_id = ${railId}
@@ -228,8 +228,8 @@ export class RailsRepository {
       datum: r.datum,
       status: r.status,
       target: r.target,
-      leastSquaresStraightness: Number(r.ls),
-      minimumZoneStraightness: Number(r.mz),
+      leastSquaresStraightness: storedNumber(r.ls),
+      minimumZoneStraightness: storedNumber(r.mz),
       stationCount: Number(r.stations),
     }));
   }
@@ -296,3 +296,7 @@ export class RailsRepository {
   }
 }
 
+/** A figure read out of a stored result: missing or not a number stays NaN, so readers flag it instead of showing 0. */
+function storedNumber(v: unknown): number {
+  return v === null || v === undefined ? NaN : Number(v);
+}
