@@ -1,5 +1,5 @@
 import { Inject, Injectable } from '@nestjs/common';
-import { and, asc, desc, eq, inArray, isNull, lte } from 'drizzle-orm';
+import { and, asc, desc, eq, inArray, isNull, lte, sql } from 'drizzle-orm';
 import { DRIZZLE, type Database } from '../database/database.tokens.js';
 import { approvalRequests, approvals, axes, machines, rails, users, waivers, workshops } from '../database/schema/index.js';
 
@@ -90,12 +90,13 @@ export class ApprovalsRepository {
     return [...railRows.map((r) => ({ recordType: 'rail', recordId: r.id })), ...axisRows.map((a) => ({ recordType: 'axis', recordId: a.id }))];
   }
 
+  /** The standing approval if there is one, else the newest (times are kept to the second, so two may tie). */
   async latestApproval(workshopId: string, machineId: string): Promise<ApprovalRow | null> {
     const [row] = await this.db
       .select()
       .from(approvals)
       .where(and(eq(approvals.workshopId, workshopId), eq(approvals.machineId, machineId)))
-      .orderBy(desc(approvals.approvedAt))
+      .orderBy(sql`${approvals.endedAt} is null desc`, desc(approvals.approvedAt), desc(approvals.endedAt))
       .limit(1);
     return row ?? null;
   }
@@ -116,13 +117,14 @@ export class ApprovalsRepository {
       .orderBy(desc(approvals.approvedAt));
   }
 
-  /** The latest approval of each machine in the given states (all workshops when workshopId is null). */
+  /** The standing approval of each machine in the given states (all workshops when workshopId is null). */
   async latestApprovalsOfMachinesIn(workshopId: string | null, states: ('ready-to-cut' | 'recheck-due')[]) {
     const rows = await this.db
       .selectDistinctOn([approvals.machineId], { approval: approvals, state: machines.state, machineName: machines.name })
       .from(approvals)
       .innerJoin(machines, eq(machines.id, approvals.machineId))
-      .where(and(inArray(machines.state, states), workshopId ? eq(approvals.workshopId, workshopId) : undefined))
+      // Only the approval that stands: an earlier one, reopened, no longer asks for its re-check.
+      .where(and(inArray(machines.state, states), isNull(approvals.endedAt), workshopId ? eq(approvals.workshopId, workshopId) : undefined))
       .orderBy(approvals.machineId, desc(approvals.approvedAt));
     return rows;
   }
