@@ -101,8 +101,10 @@ test.describe('bolt-down guide', () => {
     // The sweep is the rail's, with the readings typed and the usual M5 torque offered.
     const sweeps = await (await page.request.get(`/api/rails/${railId}/sweeps`)).json();
     expect(sweeps).toHaveLength(1);
-    expect(sweeps[0]).toMatchObject({ unit: 'thou', phase: 'as-left', boltSize: 'M5', torqueNm: 8.8, temperatureC: 18, status: 'within-target' });
-    expect(sweeps[0].stations.map((s: { reading: number }) => s.reading)).toEqual([0.5, 0.8, 1, 1.2, 1.3]);
+    // The list holds summaries; the sweep itself has every detail and reading.
+    const sweep = await (await page.request.get(`/api/sweeps/${sweeps[0].id}`)).json();
+    expect(sweep).toMatchObject({ unit: 'thou', phase: 'as-left', boltSize: 'M5', torqueNm: 8.8, temperatureC: 18, status: 'within-target' });
+    expect(sweep.stations.map((s: { reading: number }) => s.reading)).toEqual([0.5, 0.8, 1, 1.2, 1.3]);
   });
 
   test('keeps typing and fixing while the connection is cut, then saves every reading exactly once', async ({ page }) => {

@@ -53,7 +53,7 @@ export const StationRow = memo(function StationRow({ index: i, row: r, unit, pro
             htmlInput: { inputMode: 'decimal', 'aria-label': `Reading at ${r.position || '?'} mm`, enterKeyHint: 'next', 'data-indicator-cell': i },
             input: { endAdornment: <InputAdornment position="end">{UNIT_LABELS[unit]}</InputAdornment> },
           }}
-          sx={{ width: { xs: 108, sm: 130 } }}
+          sx={{ width: { xs: 124, sm: 130 } }}
         />
       </TableCell>
       <TableCell align="right" sx={{ color: 'text.secondary', fontVariantNumeric: 'tabular-nums' }}>
