@@ -6,7 +6,7 @@ import { useDrivePreview, type DrivePreviewInput } from '../api/preview-drive';
 import type { Axis, Drive } from '../types';
 import { DriveFields, type DriveDraft } from './drive-fields';
 import { NumberInput, numberOf } from './number-input';
-import { useDebounced } from '../hooks/use-debounced';
+import { useDebounced } from '../../../lib/use-debounced';
 import { errorText } from '../utils/format';
 
 const str = (v: number | null | undefined) => (v === null || v === undefined ? '' : String(v));

@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { Alert, Box, Button, Dialog, useMediaQuery, useTheme, DialogActions, DialogContent, DialogTitle, MenuItem, Stack, Tab, Tabs, TextField, Typography } from '@mui/material';
 import { ApiError } from '../../../lib/api-client';
-import { useSettled } from '../utils/use-settled';
+import { useDebounced } from '../../../lib/use-debounced';
 import { usePatternPreview } from '../api/preview-hole-pattern';
 import { ENTRY_LABELS, REFERENCE_LABELS, type PatternEntry, type PatternInput, type PatternReference, type PatternUnit } from '../types';
 import { emptyDraft, inputOf, type PatternDraft } from '../utils/pattern-draft';
@@ -21,7 +21,7 @@ interface Props {
 export function PatternDialog({ title, initial, saving, error, onSave, onClose }: Props) {
   const [draft, setDraft] = useState<PatternDraft>(initial ?? emptyDraft());
   const input = inputOf(draft);
-  const settled = useSettled(input);
+  const settled = useDebounced(input, 250);
   const preview = usePatternPreview(settled);
   const problems = preview.error instanceof ApiError ? preview.error.details : preview.error ? [preview.error.message] : [];
   const saveProblems = error instanceof ApiError && error.details.length ? error.details : error ? [error.message] : [];

@@ -7,7 +7,7 @@ import { fromMm, UNIT_LABELS, type LengthUnit } from '../../../lib/units';
 import { useBoltTorques } from '../api/get-bolt-torques';
 import { useRecordSweep } from '../api/record-sweep';
 import { useStraightnessPreview } from '../api/preview-straightness';
-import { useDebounced } from '../hooks/use-debounced';
+import { useDebounced } from '../../../lib/use-debounced';
 import { newDraft, useSweepDraft, type StationDraft, type SweepDraft } from '../hooks/use-sweep-draft';
 import type { Rail, Sweep, TargetValue } from '../types';
 import { readyStations, stationsAtHoles, stationsByStep } from '../utils/stations';
