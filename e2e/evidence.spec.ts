@@ -158,16 +158,17 @@ test.describe('evidence: photos and files', () => {
     await snap(page, 'evidence-demo-desktop');
   });
 
-  test("the approved router's sweep photo is kept: no delete, even for the owner", async ({ page }) => {
+  test("the approved router's photos are kept: no delete, even for the owner", async ({ page }) => {
     await signInAs(page, DEMO.owner);
     await page.goto('/machines');
     await page.getByRole('link', { name: 'Small router' }).click();
     await page.getByRole('tab', { name: 'Evidence' }).click();
     await expect(page.getByRole('button', { name: 'View router-y1-sweep.jpg full size' })).toBeVisible();
-    await expect(page.getByLabel('Kept: the check is part of an approval')).toBeVisible();
+    await expect(page.getByRole('list', { name: /^Photos: Sweep of rail Y1/ }).getByLabel('Kept: part of what an approval stands on')).toBeVisible();
     await expect(page.getByRole('button', { name: 'Delete router-y1-sweep.jpg' })).toHaveCount(0);
-    // Machine-level evidence is not part of the approval and can still go.
-    await expect(page.getByRole('button', { name: 'Delete router-frame.jpg' })).toBeVisible();
+    // While the approval stands the machine file itself is part of what was signed: its photos are kept too.
+    await expect(page.getByRole('list', { name: /^Photos: Small router/ }).getByLabel('Kept: part of what an approval stands on')).toBeVisible();
+    await expect(page.getByRole('button', { name: 'Delete router-frame.jpg' })).toHaveCount(0);
     await snap(page, 'evidence-locked-desktop');
   });
 

@@ -66,7 +66,7 @@ test.describe('sign-in and the app frame', () => {
     // The local fake mail server caught the sign-in mail: the outbox shows the admin that it went,
     // never its link; the whole message is in the data folder's mail drop, as the person would get it.
     await page.goto('/outbox');
-    await page.getByText(`to ${email}`).click();
+    await page.getByRole('button', { name: /Your Railwright sign-in for/ }).filter({ hasText: email }).click();
     await expect(page.getByText(/link hidden/).first()).toBeVisible();
     await expect(page.getByRole('link', { name: /set-password\?token=/ })).toHaveCount(0);
     const link = await linkMailedTo(email);

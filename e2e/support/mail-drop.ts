@@ -19,7 +19,7 @@ export async function linkMailedTo(email: string): Promise<string> {
       for (const f of files) {
         const raw = readFileSync(path.join(dropFolder(), f), 'utf8');
         if (!raw.toLowerCase().includes(email.toLowerCase())) continue;
-        const unfolded = raw.replace(/=\r?\n/g, '').replace(/=3D/g, '=');
+        const unfolded = bodyText(raw);
         link = /(https?:\/\/\S*?\/set-password\?token=[A-Za-z0-9_-]+)/.exec(unfolded)?.[1] ?? null;
         if (link) return link;
       }
@@ -27,4 +27,13 @@ export async function linkMailedTo(email: string): Promise<string> {
     })
     .not.toBeNull();
   return new URL(link!).pathname + new URL(link!).search;
+}
+
+/** The text of a single-part message as the fake server stored it (base64 or quoted-printable). */
+function bodyText(raw: string): string {
+  const split = raw.search(/\r?\n\r?\n/);
+  const headers = raw.slice(0, split);
+  const body = raw.slice(split).trim();
+  if (/content-transfer-encoding:\s*base64/i.test(headers)) return Buffer.from(body.replace(/\s+/g, ''), 'base64').toString('utf8');
+  return body.replace(/=\r?\n/g, '').replace(/=3D/g, '=');
 }

@@ -10,7 +10,7 @@ import { formatBytes } from '../utils/format-bytes';
 import { DeleteEvidenceDialog } from './delete-evidence-dialog';
 import { EvidenceViewer } from './evidence-viewer';
 
-const LOCKED_HINT = 'Kept: the check is part of an approval';
+const LOCKED_HINT = 'Kept: part of what an approval stands on';
 
 /** Thumbnails of the photos (click for full size) and a list of the other files. */
 export function EvidenceGallery({ items, label = 'Evidence' }: { items: Evidence[]; label?: string }) {
