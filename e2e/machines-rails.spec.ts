@@ -119,6 +119,8 @@ test.describe('machines and rails', () => {
     const edit = page.getByRole('dialog', { name: 'Edit specification' });
     await edit.getByLabel('Target set').click();
     await page.getByRole('option', { name: 'Router (default)' }).click();
+    await expect(page.getByRole('listbox')).toBeHidden();
+    await expect(edit.getByLabel('Target set')).toHaveText(/Router \(default\)/);
     await edit.getByLabel('Work area X').fill('2500');
     await edit.getByRole('button', { name: 'Save specification' }).click();
     await expect(edit).toBeHidden();

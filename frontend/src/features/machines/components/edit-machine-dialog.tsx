@@ -32,7 +32,8 @@ export function EditMachineDialog({ machine, open, onClose }: { machine: Machine
   };
 
   return (
-    <Dialog open={open} onClose={close} fullWidth maxWidth="sm" slotProps={{ transition: { onEnter: () => setValues(fromMachine(machine)) } }}>
+    // A stray click beside the form (or one that lands as a menu closes) must not throw away what was typed: Cancel or Escape closes it.
+    <Dialog open={open} onClose={(_e, reason) => reason !== 'backdropClick' && close()} fullWidth maxWidth="sm" slotProps={{ transition: { onEnter: () => setValues(fromMachine(machine)) } }}>
       <DialogTitle>Edit specification</DialogTitle>
       <DialogContent>
         {update.error && <Alert severity="error" sx={{ mb: 1 }}>{update.error.message}</Alert>}
