@@ -1,5 +1,6 @@
 import { expect, test, type Page } from '@playwright/test';
 import { DEMO, signInAs, snap } from './support/session';
+import { newMachineWithRail as railOf } from './support/machine-with-rail';
 
 const TABLET = { width: 820, height: 1180 };
 
@@ -9,29 +10,7 @@ async function openMachine(page: Page, name: string) {
   await expect(page.getByRole('heading', { name, level: 1 })).toBeVisible();
 }
 
-async function newMachineWithRail(page: Page, name: string) {
-  await page.goto('/machines');
-  await page.getByRole('button', { name: 'New machine' }).click();
-  const dialog = page.getByRole('dialog', { name: 'New machine' });
-  await dialog.getByLabel('Name').fill(name);
-  await dialog.getByLabel('Work area X').fill('3000');
-  await dialog.getByLabel('Work area Y').fill('1500');
-  await dialog.getByLabel('Notes').fill('Test frame');
-  await dialog.getByRole('button', { name: 'Open machine file' }).click();
-  await expect(page.getByRole('heading', { name, level: 1 })).toBeVisible();
-  await page.getByRole('tab', { name: 'Rails' }).click();
-  await page.getByRole('button', { name: 'Add rail' }).click();
-  const add = page.getByRole('dialog', { name: 'Add rail' });
-  await add.getByLabel('Label').fill('Y1 (left)');
-  await add.getByLabel('Axis').fill('Y1');
-  await add.getByLabel('Length').fill('600');
-  await add.getByLabel('Hole pitch').fill('100');
-  await add.getByLabel('First hole').fill('50');
-  await add.getByRole('button', { name: 'Add rail' }).click();
-  await expect(add).toBeHidden();
-  await page.getByRole('table', { name: 'Rails' }).getByRole('link', { name: 'Y1 (left)' }).click();
-  await expect(page.getByRole('heading', { name: 'Rail Y1 (left)' })).toBeVisible();
-}
+const newMachineWithRail = (page: Page, name: string) => railOf(page, name, { lengthMm: 600, holePitchMm: 100, firstHoleMm: 50 }, { x: 3000, y: 1500 }, 'Test frame');
 
 test.describe('machines and rails', () => {
   test('a builder opens a machine file, adds a rail and enters a sweep by keyboard', async ({ page }) => {

@@ -1,5 +1,6 @@
 import { expect, test, type Page } from '@playwright/test';
 import { DEMO, signInAs } from './support/session';
+import { newMachineWithRail } from './support/machine-with-rail';
 
 /**
  * The sweep form on a slow tablet. React reports every commit to a developer-tools hook when one
@@ -43,29 +44,8 @@ async function countCommits(page: Page) {
 }
 
 /** A machine with one 2250 mm rail, holes every 50 mm from 25 mm: 45 stations. */
-async function railWith45Stations(page: Page) {
-  const name = `Typing table ${Date.now()}`;
-  await page.goto('/machines');
-  await page.getByRole('button', { name: 'New machine' }).click();
-  const dialog = page.getByRole('dialog', { name: 'New machine' });
-  await dialog.getByLabel('Name').fill(name);
-  await dialog.getByLabel('Work area X').fill('3000');
-  await dialog.getByLabel('Work area Y').fill('2400');
-  await dialog.getByRole('button', { name: 'Open machine file' }).click();
-  await expect(page.getByRole('heading', { name, level: 1 })).toBeVisible();
-  await page.getByRole('tab', { name: 'Rails' }).click();
-  await page.getByRole('button', { name: 'Add rail' }).click();
-  const add = page.getByRole('dialog', { name: 'Add rail' });
-  await add.getByLabel('Label').fill('Y1 (left)');
-  await add.getByLabel('Axis').fill('Y1');
-  await add.getByLabel('Length').fill('2250');
-  await add.getByLabel('Hole pitch').fill('50');
-  await add.getByLabel('First hole').fill('25');
-  await add.getByRole('button', { name: 'Add rail' }).click();
-  await expect(add).toBeHidden();
-  await page.getByRole('table', { name: 'Rails' }).getByRole('link', { name: 'Y1 (left)' }).click();
-  await expect(page.getByRole('heading', { name: 'Rail Y1 (left)' })).toBeVisible();
-}
+const railWith45Stations = (page: Page) =>
+  newMachineWithRail(page, `Typing table ${Date.now()}`, { lengthMm: 2250, holePitchMm: 50, firstHoleMm: 25 }, { x: 3000, y: 2400 });
 
 const position = (i: number) => 25 + 50 * i;
 // A gently bowed rail with a little noise: readings in thou.

@@ -52,9 +52,7 @@ export { positioningResult };
 
 export function toPositioningRunResponse(row: PositioningRunRow, targets: DriveTargets, locked: boolean) {
   const r = storedPositioning(row.result);
-  const { checks, status } = r
-    ? positioningVerdicts({ accuracy: r.accuracyMm, repeatability: r.repeatabilityMm, reversal: r.reversalMm }, targets)
-    : { checks: null, status: 'outside-target' as const };
+  const { checks, status } = verdictsOf(r, targets);
   return {
     id: row.id,
     axisId: row.axisId,
@@ -103,9 +101,7 @@ export function toTravelTrialListItem(row: TravelTrialListRow, targets: DriveTar
 /** A run in its axis's list: the three figures against their targets, no deviations (the single run has them). */
 export function toPositioningRunListItem(row: PositioningRunListRow, targets: DriveTargets, locked: boolean) {
   const r = readableResult<Pick<PositioningResult, 'accuracyMm' | 'repeatabilityMm' | 'reversalMm'>>(row.result, POSITIONING_LIST_SHAPE);
-  const { checks, status } = r
-    ? positioningVerdicts({ accuracy: r.accuracyMm, repeatability: r.repeatabilityMm, reversal: r.reversalMm }, targets)
-    : { checks: null, status: 'outside-target' as const };
+  const { checks, status } = verdictsOf(r, targets);
   return {
     id: row.id,
     axisId: row.axisId,
@@ -121,4 +117,11 @@ export function toPositioningRunListItem(row: PositioningRunListRow, targets: Dr
     recordedAt: row.createdAt.toISOString(),
     locked,
   };
+}
+
+/** A run's three figures against their targets; a run that cannot be read is outside target. */
+function verdictsOf(r: Pick<PositioningResult, 'accuracyMm' | 'repeatabilityMm' | 'reversalMm'> | null, targets: DriveTargets) {
+  return r
+    ? positioningVerdicts({ accuracy: r.accuracyMm, repeatability: r.repeatabilityMm, reversal: r.reversalMm }, targets)
+    : { checks: null, status: 'outside-target' as const };
 }
