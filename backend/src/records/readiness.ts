@@ -1,4 +1,5 @@
 import type { TargetValue } from '../database/schema/target-sets.js';
+import type { ResultWarning } from '../engine/warnings.js';
 import { targetInBaseUnit, type TargetKey } from '../target-sets/target-keys.js';
 
 export type CheckStatus = 'not-started' | 'within-target' | 'outside-target' | 'waived';
@@ -20,7 +21,8 @@ export interface ReadinessCheck {
     | 'diagonal-check'
     | 'bed-grid'
     | 'test-cut'
-    | 'safety-walk';
+    | 'safety-walk'
+    | 'backlash';
   /** What is checked, in words: "Rail Y1 (left)", "Axis X". */
   subject: string;
   status: Exclude<CheckStatus, 'waived'>;
@@ -39,6 +41,8 @@ export interface ReadinessCheck {
    * mean deviation per target position for positioning, the measured rectangle for squareness.
    */
   series?: CheckSeries;
+  /** What a person should know about the result (see engine/warnings.ts); empty when none. */
+  warnings?: ResultWarning[];
 }
 
 /** A chart's data in the units it is drawn in: lines of [x, y] points and optional limit lines. */
