@@ -28,7 +28,7 @@ export function UnitFamilySelect({
       value={value}
       onChange={(e) => onChange(e.target.value as LengthUnit)}
       sx={{ minWidth: 140, justifySelf: 'start' }}
-      inputProps={{ 'data-unit-family': family }}
+      slotProps={{ htmlInput: { 'data-unit-family': family } }}
     >
       {units.map((u) => (
         <MenuItem key={u} value={u}>
