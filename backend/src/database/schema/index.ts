@@ -15,3 +15,4 @@ export * from './password-links.js';
 export * from './sign-in-attempts.js';
 export * from './machine-readiness.js';
 export * from './hole-patterns.js';
+export * from './backlash.js';
