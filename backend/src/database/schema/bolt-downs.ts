@@ -20,8 +20,10 @@ export const boltDowns = pgTable(
     machineId: uuid('machine_id').notNull().references(() => machines.id),
     railId: uuid('rail_id').notNull().references(() => rails.id, { onDelete: 'cascade' }),
     mode: text('mode', { enum: BOLT_DOWN_MODES }).notNull(),
-    /** Unit readings are typed in. */
-    unit: text('unit', { enum: BOLT_DOWN_UNITS }).notNull(),
+    /** Unit readings and the band are typed in. */
+    readingUnit: text('reading_unit', { enum: BOLT_DOWN_UNITS }).notNull().default('mm'),
+    /** Unit hole positions are shown in (kept in mm). */
+    lengthUnit: text('length_unit', { enum: BOLT_DOWN_UNITS }).notNull().default('mm'),
     /** Hole centres when the bolt-down began, so a later change to the rail cannot shift them. */
     holePositionsMm: jsonb('hole_positions_mm').$type<number[]>().notNull(),
     /** Half-width of the band around the aim that counts as on target. */

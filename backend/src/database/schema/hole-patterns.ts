@@ -8,13 +8,13 @@ export const PATTERN_REFERENCES = ['bottom-left', 'bottom-right', 'top-left', 't
 export type PatternReference = (typeof PATTERN_REFERENCES)[number];
 
 /** Units a pattern may be entered in; holes are kept in mm whatever was typed. */
-export const PATTERN_UNITS = ['mm', 'in'] as const;
+export const PATTERN_UNITS = ['mm', 'um', 'in', 'thou'] as const;
 export type PatternUnit = (typeof PATTERN_UNITS)[number];
 
 export const PATTERN_ENTRIES = ['list', 'grid', 'circle'] as const;
 export type PatternEntryKind = (typeof PATTERN_ENTRIES)[number];
 
-/** The pattern as the person entered it, in `unit` (so it can be edited the way it was typed). */
+/** The pattern as the person entered it, in `lengthUnit` (so it can be edited the way it was typed). */
 export type StoredPatternEntry =
   | { kind: 'list'; holes: { x: number; y: number; diameter: number }[] }
   | { kind: 'grid'; originX: number; originY: number; rows: number; columns: number; pitchX: number; pitchY: number; diameter: number }
@@ -39,7 +39,8 @@ export const holePatterns = pgTable(
     machineId: uuid('machine_id').notNull().references(() => machines.id),
     name: text('name').notNull(),
     reference: text('reference', { enum: PATTERN_REFERENCES }).notNull(),
-    unit: text('unit', { enum: PATTERN_UNITS }).notNull(),
+    /** Unit the outline and the entry were typed in (holes kept in mm). */
+    lengthUnit: text('length_unit', { enum: PATTERN_UNITS }).notNull().default('mm'),
     widthMm: doublePrecision('width_mm').notNull(),
     heightMm: doublePrecision('height_mm').notNull(),
     entry: jsonb('entry').$type<StoredPatternEntry>().notNull(),

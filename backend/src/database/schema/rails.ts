@@ -4,12 +4,18 @@ import { id, timestamps } from './columns.js';
 import { workshops } from './workshops.js';
 import { machines } from './machines.js';
 import { users } from './users.js';
+import type { ResultWarning } from '../../engine/warnings.js';
+import type { StraightnessReference } from './target-sets.js';
 
 export const SWEEP_PHASES = ['as-found', 'as-left'] as const;
 export type SweepPhase = (typeof SWEEP_PHASES)[number];
 
 export const SWEEP_UNITS = ['mm', 'um', 'in', 'thou'] as const;
 export type SweepUnit = (typeof SWEEP_UNITS)[number];
+
+/** Which face of the rail the indicator reads: the side (sideways straightness) or the top (heights). */
+export const SWEEP_FACES = ['side', 'top'] as const;
+export type SweepFace = (typeof SWEEP_FACES)[number];
 
 /** A linear rail of a machine; its hole positions follow from length, pitch and first-hole offset. */
 export const rails = pgTable(
@@ -24,6 +30,12 @@ export const rails = pgTable(
     profileSizeMm: integer('profile_size_mm'),
     holePitchMm: doublePrecision('hole_pitch_mm').notNull(),
     firstHoleMm: doublePrecision('first_hole_mm').notNull(),
+    /** Unit the rail's length, pitch, first hole, spacing and end distance were typed in (values kept in mm). */
+    lengthUnit: text('length_unit', { enum: SWEEP_UNITS }).notNull().default('mm'),
+    /** Centre-to-centre distance to the partner rail, a in S = a × K; null until entered. */
+    spacingMm: doublePrecision('spacing_mm'),
+    /** Least distance from a hole centre to either end of the rail; null: the default for the bolt size. */
+    endDistanceMm: doublePrecision('end_distance_mm'),
     /** Kept symmetric by the service: when A names B, B names A. */
     partnerRailId: uuid('partner_rail_id'),
     ...timestamps,
@@ -38,10 +50,19 @@ export interface StoredLine {
   straightness: number;
   residuals: number[];
 }
+/** Largest slope between neighbouring stations (or over a stated base), mm per metre. */
+export interface StoredLocalSlope {
+  mmPerM: number;
+  fromMm: number;
+  toMm: number;
+  baseMm: number | null;
+}
 export interface StoredSweepResult {
   leastSquares: StoredLine;
   minimumZone: StoredLine;
   endPoint: StoredLine;
+  /** Absent on sweeps saved before local slope was kept. */
+  localSlope?: StoredLocalSlope;
 }
 
 /** One series of indicator readings along a rail, with the readings as entered and in mm. */
@@ -53,7 +74,12 @@ export const railSweeps = pgTable(
     workshopId: uuid('workshop_id').notNull().references(() => workshops.id),
     machineId: uuid('machine_id').notNull().references(() => machines.id),
     railId: uuid('rail_id').notNull().references(() => rails.id, { onDelete: 'cascade' }),
-    unit: text('unit', { enum: SWEEP_UNITS }).notNull(),
+    /** Unit the readings and the instrument resolution were typed in. */
+    readingUnit: text('reading_unit', { enum: SWEEP_UNITS }).notNull().default('mm'),
+    /** Unit the station positions were typed in (positions kept in mm). */
+    lengthUnit: text('length_unit', { enum: SWEEP_UNITS }).notNull().default('mm'),
+    /** Face the indicator read; only top-face sweeps against a common datum give a height. */
+    face: text('face', { enum: SWEEP_FACES }).notNull().default('side'),
     positionsMm: jsonb('positions_mm').$type<number[]>().notNull(),
     /** Readings as typed, in `unit`. */
     readingsRaw: jsonb('readings_raw').$type<number[]>().notNull(),
@@ -70,9 +96,11 @@ export const railSweeps = pgTable(
     datum: text('datum'),
     notes: text('notes').notNull().default(''),
     result: jsonb('result').$type<StoredSweepResult>().notNull(),
+    /** What a person should know about the result when it was saved (engine/warnings.ts). */
+    warnings: jsonb('warnings').$type<ResultWarning[]>().notNull().default([]),
     status: text('status', { enum: ['within-target', 'outside-target'] }).notNull(),
     /** The target the sweep was judged against when it was saved. */
-    target: jsonb('target').$type<{ value: number; unit: string }>().notNull(),
+    target: jsonb('target').$type<{ value: number; unit: string; reference?: StraightnessReference }>().notNull(),
     createdById: uuid('created_by_id').references(() => users.id),
     takenAt: timestamp('taken_at', { withTimezone: true }).notNull().defaultNow(),
     ...timestamps,
