@@ -98,7 +98,8 @@ export function evaluateBacklash(input: BacklashInput): BacklashResult {
   });
 }
 
-function backlashWarnings(positions: BacklashAtPosition[], resolutionMm: number | null, targetMm: number | null): ResultWarning[] {
+/** The warnings of a result, read again against the target in force (it may have changed since). */
+export function backlashWarnings(positions: BacklashAtPosition[], resolutionMm: number | null, targetMm: number | null): ResultWarning[] {
   const out: ResultWarning[] = [];
   const few = positions.filter((p) => Math.min(p.approachesUp, p.approachesDown) < MIN_APPROACHES);
   if (few.length) {
