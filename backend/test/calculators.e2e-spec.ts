@@ -8,7 +8,7 @@ const VALID: Record<string, object> = {
   straightness: {
     positions: [0, 100, 200, 300, 400, 500, 600, 700, 800, 900, 1000],
     readings: [0, 3, 7, 8, 6, 9, 12, 10, 7, 8, 11],
-    unit: 'um',
+    readingUnit: 'um',
   },
   parallelism: { positions: [0, 250, 500, 750, 1000], railA: [0, 0.01, 0.02, 0.01, 0], railB: [0.1, 0.12, 0.11, 0.1, 0.13] },
   squareness: { sideX: 1000, sideY: 600.000208333, diagonal1: 1166.6191537944164, diagonal2: 1165.7616608895662, gantrySpan: 600 },
@@ -24,7 +24,7 @@ const VALID: Record<string, object> = {
       { x: 100, y: 200, z: 0 },
       { x: 200, y: 200, z: 0 },
     ],
-    unit: 'um',
+    readingUnit: 'um',
   },
   drive: { type: 'belt', motorStepsPerRev: 200, microsteps: 16, beltPitch: 2, pulleyTeeth: 20 },
   'travel-trial': { stepsPerMmUsed: 640, moves: [{ commanded: 100, measured: 99.8 }] },
@@ -36,7 +36,7 @@ const VALID: Record<string, object> = {
       { direction: 'down', deviations: [-1, 2] },
       { direction: 'down', deviations: [-1, 4] },
     ],
-    unit: 'um',
+    readingUnit: 'um',
   },
   'screw-speed': {
     nominalDiameter: 15,
@@ -46,7 +46,7 @@ const VALID: Record<string, object> = {
     mounting: 'fixed-supported',
     feedRate: 10000,
   },
-  'bolt-down': { length: 480, pitch: 60, firstHoleOffset: 0, mode: 'line', readings: [{ hole: 0, reading: 0 }, { hole: 8, reading: 80 }], unit: 'um' },
+  'bolt-down': { length: 480, pitch: 60, firstHoleOffset: 0, mode: 'line', readings: [{ hole: 0, reading: 0 }, { hole: 8, reading: 80 }], readingUnit: 'um' },
   'travel-envelope': { axes: [{ axis: 'X', measuredTravel: 1562, workSize: 1500 }], marginPerSide: 25 },
   'test-cut': { x: { commanded: 300, measured: 299.4 }, y: { commanded: 300, measured: 300 }, stepsPerMmX: 80 },
 };
@@ -91,9 +91,9 @@ describe('calculators API', () => {
     });
 
     it('straightness readings in thou and inches convert at 25.4 mm per inch', async () => {
-      const thou = await post('straightness', { positions: [0, 1, 2, 3, 4], readings: [0, 0, 0, 0, 4], unit: 'thou' });
+      const thou = await post('straightness', { positions: [0, 1, 2, 3, 4], readings: [0, 0, 0, 0, 4], readingUnit: 'thou' });
       expect(thou.body.leastSquares.straightness).toBeCloseTo(3.2 * 0.0254, 12);
-      const inch = await post('straightness', { positions: [0, 1, 2, 3, 4], readings: [0, 0, 0, 0, 0.004], unit: 'in' });
+      const inch = await post('straightness', { positions: [0, 1, 2, 3, 4], readings: [0, 0, 0, 0, 0.004], readingUnit: 'in' });
       expect(inch.body.minimumZone.straightness).toBeCloseTo(3 * 0.0254, 12);
     });
 
@@ -137,7 +137,7 @@ describe('calculators API', () => {
       expect(res.body.correctedStepsPerMm).toBeCloseTo(641.2825651302605, 9);
       expect(res.body.errorPercent).toBeCloseTo(-0.2, 10);
       expect(res.body.residualMax).toBeCloseTo(0, 10);
-      const um = await post('travel-trial', { stepsPerMmUsed: 80, moves: [{ commanded: 10, measured: 10010 }, { commanded: 20, measured: 20020 }], unit: 'um' });
+      const um = await post('travel-trial', { stepsPerMmUsed: 80, moves: [{ commanded: 10000, measured: 10010 }, { commanded: 20000, measured: 20020 }], lengthUnit: 'um' });
       expect(um.body.scale).toBeCloseTo(1.001, 10);
     });
 
@@ -155,7 +155,8 @@ describe('calculators API', () => {
       for (const key of ['repeatabilityUp', 'repeatabilityDown', 'systematicUp', 'systematicDown', 'accuracyUp', 'accuracyDown']) {
         expect(typeof res.body[key]).toBe('number');
       }
-      expect(res.body.warnings.join(' ')).toMatch(/5 runs in each direction/);
+      expect(res.body.warnings.map((w: { code: string }) => w.code)).toEqual(['few-runs', 'few-targets']);
+      expect(res.body.warnings[0].message).toMatch(/ISO 230-2 asks for 5 runs in each direction.*2 up.*2 down/);
     });
 
     it('screw speed: the MISUMI example (3024 rpm allowable) with its catalogue named', async () => {
@@ -234,7 +235,8 @@ describe('calculators API', () => {
 
     it('unknown mounting, unit, drive type or direction', async () => {
       await expect400('screw-speed', { ...VALID['screw-speed'], mounting: 'clamped' }, /mounting must be one of fixed-free, supported-supported, fixed-supported, fixed-fixed/);
-      await expect400('straightness', { ...VALID.straightness, unit: 'cm' }, /unit must be one of mm, um, in, thou/);
+      await expect400('straightness', { ...VALID.straightness, readingUnit: 'cm' }, /readingUnit must be one of mm, um, in, thou/);
+      await expect400('straightness', { ...VALID.straightness, lengthUnit: 'ft' }, /lengthUnit must be one of mm, um, in, thou/);
       await expect400('drive', { ...VALID.drive, type: 'chain' }, /type must be one of screw, belt, rack/);
       await expect400('positioning', { targets: [0], runs: [{ direction: 'left', deviations: [0] }] }, /runs\.0\.direction must be up or down/);
     });

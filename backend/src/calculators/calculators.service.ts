@@ -1,4 +1,4 @@
-import { Injectable } from '@nestjs/common';
+import { BadRequestException, Injectable } from '@nestjs/common';
 import { boltDownGuide, planHoles } from '../engine/bolt-down.js';
 import { EngineInputError } from '../engine/engine-input-error.js';
 import { evaluatePositioning } from '../engine/positioning.js';
@@ -8,10 +8,11 @@ import { evaluateDrive } from '../engine/steps-per-mm.js';
 import { evaluateTestCut } from '../engine/test-cut.js';
 import { evaluateTravelEnvelope } from '../engine/travel-envelope.js';
 import { evaluateTravelTrial } from '../engine/travel-trial.js';
-import { arrayToMm, parseLengthUnit, toMm } from '../engine/units.js';
+import { arrayToMm, toMm } from '../engine/units.js';
 import { EnginePool } from '../engine-worker/engine-pool.js';
 import * as map from './calculators.mapper.js';
 import { residualsWanted } from './residuals-option.js';
+import { unitsOf } from './units-of.js';
 import type { BoltDownDto } from './dto/bolt-down.dto.js';
 import type { DriveDto } from './dto/drive.dto.js';
 import type { FlatnessDto } from './dto/flatness.dto.js';
@@ -25,137 +26,161 @@ import type { TravelEnvelopeDto } from './dto/travel-envelope.dto.js';
 import type { TravelTrialDto } from './dto/travel-trial.dto.js';
 
 /**
- * Stateless calculations: converts readings from the request's unit to mm, runs the engine and
- * maps its result. Nothing is stored. Engine input errors become 400s through the global filter.
- * The calculations that take long lists go through the engine pool (large ones in a worker thread).
+ * Stateless calculations: converts the request's lengths (lengthUnit) and readings (readingUnit)
+ * to mm, runs the engine and maps its result, which is in mm whatever came in and names its
+ * units. Nothing is stored. Engine input errors become 400s through the global filter. The
+ * calculations that take long lists go through the engine pool (large ones in a worker thread).
  */
 @Injectable()
 export class CalculatorsService {
   constructor(private readonly engine: EnginePool) {}
 
   async straightness(dto: StraightnessDto, residuals?: string) {
-    const unit = parseLengthUnit(dto.unit);
+    const u = unitsOf(dto);
     const withResiduals = residualsWanted(residuals, dto.positions.length);
-    const result = await this.engine.run({ kind: 'straightness', input: { positionsMm: dto.positions, readingsMm: arrayToMm(dto.readings, unit) } });
-    return map.toStraightnessResponse(result, withResiduals);
+    const result = await this.engine.run({
+      kind: 'straightness',
+      input: { positionsMm: arrayToMm(dto.positions, u.lengthUnit), readingsMm: arrayToMm(dto.readings, u.readingUnit) },
+    });
+    return map.toStraightnessResponse(result, withResiduals, u);
   }
 
   async parallelism(dto: ParallelismDto) {
-    const unit = parseLengthUnit(dto.unit);
-    return map.toParallelismResponse(
-      await this.engine.run({ kind: 'parallelism', input: { positionsMm: dto.positions, railAMm: arrayToMm(dto.railA, unit), railBMm: arrayToMm(dto.railB, unit) } }),
-    );
+    const u = unitsOf(dto);
+    const result = await this.engine.run({
+      kind: 'parallelism',
+      input: { positionsMm: arrayToMm(dto.positions, u.lengthUnit), railAMm: arrayToMm(dto.railA, u.readingUnit), railBMm: arrayToMm(dto.railB, u.readingUnit) },
+    });
+    return map.toParallelismResponse(result, u);
   }
 
   squareness(dto: SquarenessDto) {
-    return map.toSquarenessResponse(
-      evaluateSquareness({
-        sideXMm: dto.sideX,
-        sideYMm: dto.sideY,
-        diagonal1Mm: dto.diagonal1,
-        diagonal2Mm: dto.diagonal2,
-        gantrySpanMm: dto.gantrySpan,
-      }),
-    );
+    const u = unitsOf(dto);
+    const mm = (v: number) => toMm(v, u.lengthUnit);
+    const result = evaluateSquareness({
+      sideXMm: mm(dto.sideX),
+      sideYMm: mm(dto.sideY),
+      diagonal1Mm: mm(dto.diagonal1),
+      diagonal2Mm: mm(dto.diagonal2),
+      gantrySpanMm: dto.gantrySpan == null ? undefined : mm(dto.gantrySpan),
+    });
+    return map.toSquarenessResponse(result, u, dto.gantrySpan == null);
   }
 
   async flatness(dto: FlatnessDto, residuals?: string) {
-    const unit = parseLengthUnit(dto.unit);
+    const u = unitsOf(dto);
     const withResiduals = residualsWanted(residuals, dto.points.length);
-    const result = await this.engine.run({ kind: 'flatness', input: dto.points.map((p) => ({ xMm: p.x, yMm: p.y, zMm: toMm(p.z, unit) })) });
-    return map.toFlatnessResponse(result, withResiduals);
+    const result = await this.engine.run({
+      kind: 'flatness',
+      input: dto.points.map((p) => ({ xMm: toMm(p.x, u.lengthUnit), yMm: toMm(p.y, u.lengthUnit), zMm: toMm(p.z, u.readingUnit) })),
+    });
+    return map.toFlatnessResponse(result, withResiduals, u);
   }
 
   drive(dto: DriveDto) {
-    return map.toDriveResponse(
-      evaluateDrive({
-        type: dto.type,
-        motorStepsPerRev: dto.motorStepsPerRev,
-        microsteps: dto.microsteps,
-        gearRatio: dto.gearRatio,
-        leadMm: dto.lead,
-        beltPitchMm: dto.beltPitch,
-        pulleyTeeth: dto.pulleyTeeth,
-        pinionTeeth: dto.pinionTeeth,
-        pinionModuleMm: dto.pinionModule,
-      }),
-    );
+    const u = unitsOf(dto);
+    const mm = (v: number | undefined) => (v == null ? undefined : toMm(v, u.lengthUnit));
+    if (dto.lead != null && dto.threadsPerInch != null) {
+      throw new BadRequestException(['give lead or threadsPerInch, not both']);
+    }
+    if (dto.threadsPerInch != null && !(dto.threadsPerInch > 0)) {
+      throw new BadRequestException(['threadsPerInch must be greater than 0']);
+    }
+    // One inch of thread holds `threadsPerInch` turns: the lead of a single-start screw is 1 in ÷ TPI.
+    const leadMm = dto.threadsPerInch != null ? toMm(1, 'in') / dto.threadsPerInch : mm(dto.lead);
+    const result = evaluateDrive({
+      type: dto.type,
+      motorStepsPerRev: dto.motorStepsPerRev,
+      microsteps: dto.microsteps,
+      gearRatio: dto.gearRatio,
+      leadMm,
+      beltPitchMm: mm(dto.beltPitch),
+      pulleyTeeth: dto.pulleyTeeth,
+      pinionTeeth: dto.pinionTeeth,
+      // The module is a length in mm by definition (ISO 54), whatever unit the rest is in.
+      pinionModuleMm: dto.pinionModule,
+    });
+    return map.toDriveResponse(result, u);
   }
 
   travelTrial(dto: TravelTrialDto) {
-    const unit = parseLengthUnit(dto.unit);
-    return map.toTravelTrialResponse(
-      evaluateTravelTrial({
-        stepsPerMmUsed: dto.stepsPerMmUsed,
-        moves: dto.moves.map((m) => ({ commandedMm: m.commanded, measuredMm: toMm(m.measured, unit) })),
-        throughOrigin: dto.throughOrigin,
-      }),
-    );
+    const u = unitsOf(dto);
+    const result = evaluateTravelTrial({
+      stepsPerMmUsed: dto.stepsPerMmUsed,
+      moves: dto.moves.map((m) => ({ commandedMm: toMm(m.commanded, u.lengthUnit), measuredMm: toMm(m.measured, u.lengthUnit) })),
+      throughOrigin: dto.throughOrigin,
+    });
+    const expected = dto.theoreticalStepsPerMm ?? dto.stepsPerMmUsed;
+    return map.toTravelTrialResponse(result, u, { expected, expectedLabel: dto.theoreticalStepsPerMm != null ? 'worked out from the drive' : 'in use' });
   }
 
   positioning(dto: PositioningDto) {
-    const unit = parseLengthUnit(dto.unit);
-    return map.toPositioningResponse(
-      evaluatePositioning({
-        targetsMm: dto.targets,
-        runs: dto.runs.map((r) => ({ direction: r.direction, deviationsMm: arrayToMm(r.deviations, unit) })),
-      }),
-    );
+    const u = unitsOf(dto);
+    const result = evaluatePositioning({
+      targetsMm: arrayToMm(dto.targets, u.lengthUnit),
+      runs: dto.runs.map((r) => ({ direction: r.direction, deviationsMm: arrayToMm(r.deviations, u.readingUnit) })),
+    });
+    return map.toPositioningResponse(result, u);
   }
 
   screwSpeed(dto: ScrewSpeedDto) {
-    return map.toScrewSpeedResponse(
-      evaluateScrewSpeed({
-        nominalDiameterMm: dto.nominalDiameter,
-        rootDiameterMm: dto.rootDiameter,
-        unsupportedLengthMm: dto.unsupportedLength,
-        leadMm: dto.lead,
-        mounting: dto.mounting,
-        feedRateMmPerMin: dto.feedRate,
-        dnLimit: dto.dnLimit,
-      }),
-    );
+    const u = unitsOf(dto);
+    const mm = (v: number) => toMm(v, u.lengthUnit);
+    const result = evaluateScrewSpeed({
+      nominalDiameterMm: mm(dto.nominalDiameter),
+      rootDiameterMm: mm(dto.rootDiameter),
+      unsupportedLengthMm: mm(dto.unsupportedLength),
+      leadMm: mm(dto.lead),
+      mounting: dto.mounting,
+      feedRateMmPerMin: mm(dto.feedRate),
+      dnLimit: dto.dnLimit,
+    });
+    return map.toScrewSpeedResponse(result, u);
   }
 
   boltDown(dto: BoltDownDto) {
-    const unit = parseLengthUnit(dto.unit);
-    const plan = planHoles({ lengthMm: dto.length, pitchMm: dto.pitch, firstHoleOffsetMm: dto.firstHoleOffset });
+    const u = unitsOf(dto);
+    const mm = (v: number) => toMm(v, u.lengthUnit);
+    const plan = planHoles({ lengthMm: mm(dto.length), pitchMm: mm(dto.pitch), firstHoleOffsetMm: mm(dto.firstHoleOffset) });
     const readings = new Map<number, number>();
     for (const r of dto.readings ?? []) {
       if (r.hole >= plan.positionsMm.length) {
         throw new EngineInputError(`readings names hole ${r.hole}, but the rail has holes 0 to ${plan.positionsMm.length - 1}`, 'readings');
       }
       if (readings.has(r.hole)) throw new EngineInputError(`readings gives hole ${r.hole} twice`, 'readings');
-      readings.set(r.hole, toMm(r.reading, unit));
+      readings.set(r.hole, toMm(r.reading, u.readingUnit));
     }
     const guide = boltDownGuide(plan, dto.mode ?? 'line', readings);
-    return map.toBoltDownResponse(plan.positionsMm, guide.steps, guide.nextHole);
+    return map.toBoltDownResponse(plan.positionsMm, guide.steps, guide.nextHole, u);
   }
 
   travelEnvelope(dto: TravelEnvelopeDto) {
-    return map.toTravelEnvelopeResponse(
-      evaluateTravelEnvelope({
-        axes: dto.axes.map((a) => ({ axis: a.axis, measuredTravelMm: a.measuredTravel, workSizeMm: a.workSize })),
-        marginPerSideMm: dto.marginPerSide,
-      }),
-    );
+    const u = unitsOf(dto);
+    const mm = (v: number) => toMm(v, u.lengthUnit);
+    const result = evaluateTravelEnvelope({
+      axes: dto.axes.map((a) => ({ axis: a.axis, measuredTravelMm: mm(a.measuredTravel), workSizeMm: mm(a.workSize) })),
+      marginPerSideMm: dto.marginPerSide == null ? undefined : mm(dto.marginPerSide),
+    });
+    return map.toTravelEnvelopeResponse(result, u);
   }
 
   testCut(dto: TestCutDto) {
-    return map.toTestCutResponse(
-      evaluateTestCut({
-        x: { commandedMm: dto.x.commanded, measuredMm: dto.x.measured },
-        y: { commandedMm: dto.y.commanded, measuredMm: dto.y.measured },
-        stepsPerMmX: dto.stepsPerMmX,
-        stepsPerMmY: dto.stepsPerMmY,
-        diagonal1Mm: dto.diagonal1,
-        diagonal2Mm: dto.diagonal2,
-        gantrySpanMm: dto.gantrySpan,
-        circle: dto.circle
-          ? { commandedDiameterMm: dto.circle.commandedDiameter, measuredXMm: dto.circle.measuredX, measuredYMm: dto.circle.measuredY }
-          : undefined,
-        ovalityToleranceMm: dto.ovalityTolerance,
-      }),
-    );
+    const u = unitsOf(dto);
+    const mm = (v: number) => toMm(v, u.lengthUnit);
+    const opt = (v: number | undefined) => (v == null ? undefined : mm(v));
+    const result = evaluateTestCut({
+      x: { commandedMm: mm(dto.x.commanded), measuredMm: mm(dto.x.measured) },
+      y: { commandedMm: mm(dto.y.commanded), measuredMm: mm(dto.y.measured) },
+      stepsPerMmX: dto.stepsPerMmX,
+      stepsPerMmY: dto.stepsPerMmY,
+      diagonal1Mm: opt(dto.diagonal1),
+      diagonal2Mm: opt(dto.diagonal2),
+      gantrySpanMm: opt(dto.gantrySpan),
+      circle: dto.circle
+        ? { commandedDiameterMm: mm(dto.circle.commandedDiameter), measuredXMm: mm(dto.circle.measuredX), measuredYMm: mm(dto.circle.measuredY) }
+        : undefined,
+      ovalityToleranceMm: opt(dto.ovalityTolerance),
+    });
+    return map.toTestCutResponse(result, u, { stepsPerMmX: dto.stepsPerMmX, stepsPerMmY: dto.stepsPerMmY, spanAssumed: dto.gantrySpan == null });
   }
 }

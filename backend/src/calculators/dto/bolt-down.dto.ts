@@ -1,9 +1,9 @@
 import { Type } from 'class-transformer';
 import { ArrayMaxSize, IsArray, IsIn, IsInt, IsObject, Min, ValidateNested } from 'class-validator';
 import { TARGET_MODES, type TargetMode } from '../../engine/bolt-down.js';
-import type { LengthUnit } from '../../engine/units.js';
 import { MAX_POINTS } from '../../engine/validate.js';
-import { FiniteNumber, ReadingUnit } from './validators.js';
+import { FiniteNumber } from './validators.js';
+import { UnitFamiliesDto } from './unit-families.dto.js';
 import { Optional } from '../../common/optional.js';
 
 export class HoleReadingDto {
@@ -12,13 +12,13 @@ export class HoleReadingDto {
   @Min(0, { message: 'hole must not be negative' })
   hole: number;
 
-  /** Reading at the hole once tightened, in `unit`. */
+  /** Reading at the hole once tightened, in `readingUnit`. */
   @FiniteNumber('reading')
   reading: number;
 }
 
-/** Lengths in mm. */
-export class BoltDownDto {
+/** Rail length, hole pitch and first hole in `lengthUnit`; readings in `readingUnit`. */
+export class BoltDownDto extends UnitFamiliesDto {
   @FiniteNumber('length')
   length: number;
 
@@ -40,7 +40,4 @@ export class BoltDownDto {
   @ValidateNested({ each: true })
   @Type(() => HoleReadingDto)
   readings?: HoleReadingDto[];
-
-  @ReadingUnit()
-  unit?: LengthUnit;
 }

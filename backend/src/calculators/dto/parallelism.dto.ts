@@ -1,7 +1,8 @@
-import type { LengthUnit } from '../../engine/units.js';
-import { NumberList, ReadingUnit } from './validators.js';
+import { NumberList } from './validators.js';
+import { UnitFamiliesDto } from './unit-families.dto.js';
 
-export class ParallelismDto {
+/** Stations in `lengthUnit`; both rails' readings, against one datum, in `readingUnit`. */
+export class ParallelismDto extends UnitFamiliesDto {
   @NumberList('positions')
   positions: number[];
 
@@ -10,7 +11,4 @@ export class ParallelismDto {
 
   @NumberList('railB')
   railB: number[];
-
-  @ReadingUnit()
-  unit?: LengthUnit;
 }

@@ -1,21 +1,21 @@
 import { Type } from 'class-transformer';
 import { ArrayMaxSize, IsArray, IsIn, IsObject, ValidateNested } from 'class-validator';
 import type { Direction } from '../../engine/positioning.js';
-import type { LengthUnit } from '../../engine/units.js';
 import { MAX_POINTS } from '../../engine/validate.js';
-import { NumberList, ReadingUnit } from './validators.js';
+import { NumberList } from './validators.js';
+import { UnitFamiliesDto } from './unit-families.dto.js';
 
 export class PositioningRunDto {
   @IsIn(['up', 'down'], { message: 'direction must be up or down' })
   direction: Direction;
 
-  /** Actual − target at each target, in `unit`. */
+  /** Actual − target at each target, in `readingUnit`. */
   @NumberList('deviations')
   deviations: number[];
 }
 
-export class PositioningDto {
-  /** Target positions, mm. */
+export class PositioningDto extends UnitFamiliesDto {
+  /** Target positions, in `lengthUnit`. */
   @NumberList('targets')
   targets: number[];
 
@@ -25,7 +25,4 @@ export class PositioningDto {
   @ValidateNested({ each: true })
   @Type(() => PositioningRunDto)
   runs: PositioningRunDto[];
-
-  @ReadingUnit()
-  unit?: LengthUnit;
 }

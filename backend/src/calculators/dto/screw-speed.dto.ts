@@ -1,9 +1,10 @@
 import { IsIn } from 'class-validator';
 import { MOUNTINGS, type Mounting } from '../../engine/screw-speed.js';
 import { FiniteNumber, OptionalFiniteNumber } from './validators.js';
+import { UnitFamiliesDto } from './unit-families.dto.js';
 
-/** Lengths in mm, feed rate in mm/min. */
-export class ScrewSpeedDto {
+/** Diameters, length and lead in `lengthUnit`, feed rate in `lengthUnit` per minute. */
+export class ScrewSpeedDto extends UnitFamiliesDto {
   @FiniteNumber('nominalDiameter')
   nominalDiameter: number;
 
@@ -22,7 +23,7 @@ export class ScrewSpeedDto {
   @FiniteNumber('feedRate')
   feedRate: number;
 
-  /** Nominal diameter × rpm limit of the nut; 70 000 (rolled screws) when absent. */
+  /** Nominal diameter in mm × rpm limit of the nut (defined in mm whatever the unit); 70 000 (rolled screws) when absent. */
   @OptionalFiniteNumber('dnLimit')
   dnLimit?: number;
 }

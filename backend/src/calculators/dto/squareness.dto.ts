@@ -1,7 +1,8 @@
 import { FiniteNumber, OptionalFiniteNumber } from './validators.js';
+import { UnitFamiliesDto } from './unit-families.dto.js';
 
-/** All lengths in mm. */
-export class SquarenessDto {
+/** Sides, diagonals and gantry span in `lengthUnit`. */
+export class SquarenessDto extends UnitFamiliesDto {
   @FiniteNumber('sideX')
   sideX: number;
 

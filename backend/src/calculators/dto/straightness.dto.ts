@@ -1,15 +1,12 @@
-import type { LengthUnit } from '../../engine/units.js';
-import { NumberList, ReadingUnit } from './validators.js';
+import { NumberList } from './validators.js';
+import { UnitFamiliesDto } from './unit-families.dto.js';
 
-export class StraightnessDto {
-  /** Stations along the rail, mm. */
+export class StraightnessDto extends UnitFamiliesDto {
+  /** Stations along the rail, in `lengthUnit`. */
   @NumberList('positions')
   positions: number[];
 
-  /** Indicator readings in `unit`. */
+  /** Indicator readings in `readingUnit`. */
   @NumberList('readings')
   readings: number[];
-
-  @ReadingUnit()
-  unit?: LengthUnit;
 }

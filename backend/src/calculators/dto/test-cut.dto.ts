@@ -1,6 +1,7 @@
 import { Type } from 'class-transformer';
 import { IsObject, ValidateNested } from 'class-validator';
 import { FiniteNumber, OptionalFiniteNumber } from './validators.js';
+import { UnitFamiliesDto } from './unit-families.dto.js';
 import { Optional } from '../../common/optional.js';
 
 export class CutSizeDto {
@@ -22,8 +23,8 @@ export class CutCircleDto {
   measuredY: number;
 }
 
-/** Outside sizes of a cut square (and optionally its diagonals and a circle), all mm. */
-export class TestCutDto {
+/** Outside sizes of a cut square (and optionally its diagonals and a circle), all in `lengthUnit`. */
+export class TestCutDto extends UnitFamiliesDto {
   @IsObject({ message: 'x must be {commanded, measured}' })
   @ValidateNested()
   @Type(() => CutSizeDto)

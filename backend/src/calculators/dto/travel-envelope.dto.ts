@@ -1,6 +1,7 @@
 import { Type } from 'class-transformer';
 import { ArrayMaxSize, IsArray, IsObject, IsString, MaxLength, MinLength, ValidateNested } from 'class-validator';
 import { FiniteNumber, OptionalFiniteNumber } from './validators.js';
+import { UnitFamiliesDto } from './unit-families.dto.js';
 
 export class AxisTravelDto {
   @IsString({ message: 'axis must name the axis' })
@@ -15,8 +16,8 @@ export class AxisTravelDto {
   workSize: number;
 }
 
-/** Lengths in mm. */
-export class TravelEnvelopeDto {
+/** Travel, work size and margin in `lengthUnit`. */
+export class TravelEnvelopeDto extends UnitFamiliesDto {
   @IsArray({ message: 'axes must be a list of {axis, measuredTravel, workSize}' })
   @ArrayMaxSize(12, { message: 'axes has more than 12 entries' })
   @IsObject({ each: true, message: 'every entry of axes must be {axis, measuredTravel, workSize}' })

@@ -1,23 +1,27 @@
 import { Type } from 'class-transformer';
 import { ArrayMaxSize, IsArray, IsBoolean, IsObject, ValidateNested } from 'class-validator';
-import type { LengthUnit } from '../../engine/units.js';
 import { MAX_POINTS } from '../../engine/validate.js';
-import { FiniteNumber, ReadingUnit } from './validators.js';
+import { FiniteNumber, OptionalFiniteNumber } from './validators.js';
+import { UnitFamiliesDto } from './unit-families.dto.js';
 import { Optional } from '../../common/optional.js';
 
 export class TravelMoveDto {
-  /** Commanded move, mm. */
+  /** Commanded move, in `lengthUnit`. */
   @FiniteNumber('commanded')
   commanded: number;
 
-  /** Measured move in `unit`. */
+  /** Measured move, in `lengthUnit` too: both are moves of the axis. */
   @FiniteNumber('measured')
   measured: number;
 }
 
-export class TravelTrialDto {
+export class TravelTrialDto extends UnitFamiliesDto {
   @FiniteNumber('stepsPerMmUsed')
   stepsPerMmUsed: number;
+
+  /** Steps per mm worked out from the drive; a correction far from it is flagged (the value in use when absent). */
+  @OptionalFiniteNumber('theoreticalStepsPerMm')
+  theoreticalStepsPerMm?: number;
 
   @IsArray({ message: 'moves must be a list of {commanded, measured}' })
   @ArrayMaxSize(MAX_POINTS, { message: `moves has more than ${MAX_POINTS} values; at most ${MAX_POINTS} are accepted` })
@@ -25,9 +29,6 @@ export class TravelTrialDto {
   @ValidateNested({ each: true })
   @Type(() => TravelMoveDto)
   moves: TravelMoveDto[];
-
-  @ReadingUnit()
-  unit?: LengthUnit;
 
   /** Fit without an offset (moves measured from a zeroed start). */
   @Optional()

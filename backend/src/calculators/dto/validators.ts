@@ -1,6 +1,5 @@
 import { applyDecorators } from '@nestjs/common';
-import { ArrayMaxSize, IsArray, IsIn, IsNumber } from 'class-validator';
-import { LENGTH_UNITS } from '../../engine/units.js';
+import { ArrayMaxSize, IsArray, IsNumber } from 'class-validator';
 import { MAX_POINTS } from '../../engine/validate.js';
 import { Optional } from '../../common/optional.js';
 
@@ -18,7 +17,3 @@ export const NumberList = (field: string) =>
     ArrayMaxSize(MAX_POINTS, { message: `${field} has more than ${MAX_POINTS} values; at most ${MAX_POINTS} are accepted` }),
     IsNumber(FINITE, { each: true, message: `every value in ${field} must be a finite number` }),
   );
-
-/** The unit readings are given in; mm when absent. */
-export const ReadingUnit = () =>
-  applyDecorators(Optional(), IsIn(LENGTH_UNITS, { message: `unit must be one of ${LENGTH_UNITS.join(', ')}` }));
