@@ -78,6 +78,19 @@ test.describe('calculators page', () => {
     await snap(page, 'calculators-travel-trial');
     await page.getByLabel('Commanded and measured moves').fill('100\t99.8');
     await expect(trial.getByRole('row', { name: /Corrected steps per mm/ })).toContainText('641.2826 steps/mm');
+    // The same rule with the moves in inches: 80 × 20 / 19.95 = 80.2005 steps/mm, 2037.093 steps/in.
+    await page.getByLabel('Steps per mm used').fill('80');
+    await page.getByLabel('Move unit').click();
+    await page.getByRole('option', { name: 'in', exact: true }).click();
+    await page.getByLabel('Commanded and measured moves').fill('20\t19.95');
+    await expect(trial.getByRole('row', { name: /Corrected steps per mm/ })).toContainText('80.20050 steps/mm');
+    await expect(trial.getByRole('row', { name: /Corrected steps per inch/ })).toContainText('2037.093 steps/in');
+    // A correction 25 times off (a measurement in inches typed as mm) is flagged, not quietly given.
+    await page.getByLabel('Move unit').click();
+    await page.getByRole('option', { name: 'mm', exact: true }).click();
+    await page.getByLabel('Commanded and measured moves').fill('500\t19.69');
+    await expect(page.getByRole('region', { name: 'Warnings' }).getByRole('alert').first()).toContainText(/same unit|lead/);
+    await snap(page, 'calculators-travel-trial-warning');
 
     // MISUMI catalogue example: Ø15, root 12.5 mm, fixed–supported, 790 mm → 3024 rpm allowable.
     await page.getByRole('tab', { name: 'Speed check' }).click();
@@ -94,6 +107,11 @@ test.describe('calculators page', () => {
     await page.getByRole('tab', { name: 'Steps per mm' }).click();
     await page.getByLabel('Lead').fill('5');
     await expect(page.getByRole('table', { name: 'Steps per mm result' }).getByRole('row', { name: /^Steps per mm/ })).toContainText('320 steps/mm');
+    // A 5 threads-per-inch screw advances 0.2 in a turn: 200 × 8 / 0.2 = 8000 steps/in (definition of TPI).
+    await page.getByLabel('Screw given by').click();
+    await page.getByRole('option', { name: /Threads per inch/ }).click();
+    await page.getByLabel('Threads per inch').fill('5');
+    await expect(page.getByRole('table', { name: 'Steps per mm result' }).getByRole('row', { name: /^Steps per inch/ })).toContainText('8000 steps/in');
 
     // Constructed diagonal example: 1000 × 600 mm with the Y side leaning 0.5 mm → 0.5 mm over 600 mm.
     await page.getByRole('tab', { name: 'Diagonal check' }).click();

@@ -1,7 +1,26 @@
 import type { LengthUnit } from '../../lib/units';
 
-// Requests and responses of the calculators API. Positions and lengths in mm; readings in
-// `unit`; every length in a response is in mm.
+// Requests and responses of the calculators API. Lengths (positions, moves, sizes, lead, travel)
+// in `lengthUnit`, readings (indicator readings, deviations, heights) in `readingUnit`; every
+// length in a response is in mm, and `units` names the unit of each result field.
+
+/** The two unit families every calculator request names (the server takes mm when absent). */
+export interface UnitFamilies {
+  lengthUnit: LengthUnit;
+  readingUnit: LengthUnit;
+}
+
+/** Something a person should know about a result: a stable code and a plain sentence. */
+export interface ResultWarning {
+  code: string;
+  message: string;
+}
+
+/** What every calculator answers besides its own figures. */
+export interface CalculatedCommon extends UnitFamilies {
+  units: Record<string, string>;
+  warnings: ResultWarning[];
+}
 
 export interface ReferenceLine {
   slope: number;
@@ -10,38 +29,36 @@ export interface ReferenceLine {
   residuals: number[];
 }
 
-export interface StraightnessRequest {
+export interface StraightnessRequest extends UnitFamilies {
   positions: number[];
   readings: number[];
-  unit: LengthUnit;
 }
-export interface StraightnessResult {
+export interface StraightnessResult extends CalculatedCommon {
   leastSquares: ReferenceLine;
   /** Centre line of the band; the band is the line ± straightness / 2. */
   minimumZone: ReferenceLine;
   endPoint: ReferenceLine;
 }
 
-export interface ParallelismRequest {
+export interface ParallelismRequest extends UnitFamilies {
   positions: number[];
   railA: number[];
   railB: number[];
-  unit: LengthUnit;
 }
-export interface ParallelismResult {
+export interface ParallelismResult extends CalculatedCommon {
   parallelism: number;
   meanOffset: number;
   differences: number[];
 }
 
-export interface SquarenessRequest {
+export interface SquarenessRequest extends UnitFamilies {
   sideX: number;
   sideY: number;
   diagonal1: number;
   diagonal2: number;
   gantrySpan?: number;
 }
-export interface SquarenessResult {
+export interface SquarenessResult extends CalculatedCommon {
   outOfSquareDeg: number;
   outOfSquareArcsec: number;
   mmPerMetre: number;
@@ -49,55 +66,55 @@ export interface SquarenessResult {
   diagonalDifference: number;
   correction: number;
   span: number;
-  warnings: string[];
 }
 
-export interface FlatnessRequest {
+export interface FlatnessRequest extends UnitFamilies {
   points: { x: number; y: number; z: number }[];
-  unit: LengthUnit;
 }
-export interface FlatnessResult {
+export interface FlatnessResult extends CalculatedCommon {
   leastSquares: { a: number; b: number; c: number; flatness: number; residuals: number[] };
   tilt: { xMmPerMetre: number; yMmPerMetre: number; mmPerMetre: number; directionDeg: number };
 }
 
 export type DriveType = 'screw' | 'belt' | 'rack';
-export interface DriveRequest {
+export interface DriveRequest extends UnitFamilies {
   type: DriveType;
   motorStepsPerRev: number;
   microsteps: number;
   gearRatio?: number;
   lead?: number;
+  threadsPerInch?: number;
   beltPitch?: number;
   pulleyTeeth?: number;
   pinionTeeth?: number;
   pinionModule?: number;
 }
-export interface DriveResult {
+export interface DriveResult extends CalculatedCommon {
   travelPerRev: number;
   travelPerMotorRev: number;
   stepsPerMm: number;
+  stepsPerIn: number;
   resolution: number;
 }
 
-export interface TravelTrialRequest {
+export interface TravelTrialRequest extends UnitFamilies {
   stepsPerMmUsed: number;
+  theoreticalStepsPerMm?: number;
   moves: { commanded: number; measured: number }[];
-  unit: LengthUnit;
 }
-export interface TravelTrialResult {
+export interface TravelTrialResult extends CalculatedCommon {
   scale: number;
   offset: number;
   correctedStepsPerMm: number;
+  correctedStepsPerIn: number;
   errorPercent: number;
   residualMax: number;
   moves: { commanded: number; measured: number; error: number; residual: number }[];
 }
 
-export interface PositioningRequest {
+export interface PositioningRequest extends UnitFamilies {
   targets: number[];
   runs: { direction: 'up' | 'down'; deviations: number[] }[];
-  unit: LengthUnit;
 }
 export interface PositioningTarget {
   target: number;
@@ -111,7 +128,7 @@ export interface PositioningTarget {
   repeatabilityDown: number;
   repeatability: number;
 }
-export interface PositioningResult {
+export interface PositioningResult extends CalculatedCommon {
   targets: PositioningTarget[];
   reversal: number;
   reversalMean: number;
@@ -127,11 +144,10 @@ export interface PositioningResult {
   accuracy: number;
   runsUp: number;
   runsDown: number;
-  warnings: string[];
 }
 
 export type Mounting = 'fixed-free' | 'supported-supported' | 'fixed-supported' | 'fixed-fixed';
-export interface ScrewSpeedRequest {
+export interface ScrewSpeedRequest extends UnitFamilies {
   nominalDiameter: number;
   rootDiameter: number;
   unsupportedLength: number;
@@ -140,7 +156,7 @@ export interface ScrewSpeedRequest {
   feedRate: number;
   dnLimit?: number;
 }
-export interface ScrewSpeedResult {
+export interface ScrewSpeedResult extends CalculatedCommon {
   rpm: number;
   criticalSpeed: number;
   permissibleSpeed: number;

@@ -1,5 +1,5 @@
 import { useMemo, useState } from 'react';
-import { UNIT_LABELS, type LengthUnit } from '../../../lib/units';
+import { UNIT_LABELS } from '../../../lib/units';
 import { useFlatnessCalculation } from '../api/calc-flatness';
 import { useStableBody } from '../hooks/use-stable-body';
 import type { FlatnessRequest } from '../types';
@@ -9,29 +9,31 @@ import { CalculationState } from './calculation-state';
 import { CalculatorLayout } from './calculator-layout';
 import { PasteField } from './paste-field';
 import { ResultTable } from './result-table';
-import { UnitSelect } from './unit-select';
+import { ResultWarnings } from './result-warnings';
+import { UnitFamilyPickers, useUnitFamilies } from './unit-families';
 
 export function FlatnessCalculator() {
   const [text, setText] = useState('');
-  const [unit, setUnit] = useState<LengthUnit>('mm');
+  const families = useUnitFamilies({ lengthUnit: 'mm', readingUnit: 'mm' });
+  const { lengthUnit, readingUnit } = families.units;
   const parsed = useMemo(() => parseTable(text, 3, 3, 'x, y and height'), [text]);
   const ready = parsed.rows.length >= 3 && parsed.errors.length === 0;
-  const body = useStableBody<FlatnessRequest>(ready ? { points: parsed.rows.map(([x, y, z]) => ({ x, y, z })), unit } : null);
+  const body = useStableBody<FlatnessRequest>(ready ? { points: parsed.rows.map(([x, y, z]) => ({ x, y, z })), lengthUnit, readingUnit } : null);
   const calc = useFlatnessCalculation(body);
   const r = calc.data?.result;
-  const shown = calc.data?.request.unit ?? unit;
+  const shown = calc.data?.request.readingUnit ?? readingUnit;
 
   return (
     <CalculatorLayout
       intro="Heights over the bed or slats, read with a gauge or indicator at points of a grid. Paste three columns: x, y and the height reading."
       inputs={
         <>
-          <UnitSelect label="Height unit" value={unit} onChange={setUnit} />
+          <UnitFamilyPickers {...families} lengthLabel="Position unit" readingLabel="Height unit" />
           <PasteField
             label="Grid points"
             value={text}
             onChange={setText}
-            columnsHint={`x (mm), y (mm) and height (${UNIT_LABELS[unit]})`}
+            columnsHint={`x and y (${UNIT_LABELS[lengthUnit]}) and height (${UNIT_LABELS[readingUnit]})`}
             placeholder={'0\t0\t0.00\n750\t0\t0.12\n1500\t0\t0.31\n0\t1500\t-0.05'}
             errors={parsed.errors}
             rowCount={parsed.rows.length}
@@ -46,6 +48,7 @@ export function FlatnessCalculator() {
           error={calc.error}
         >
           {r && (
+            <>
             <ResultTable
               title="Flatness result"
               rows={[
@@ -56,6 +59,8 @@ export function FlatnessCalculator() {
                 { label: 'Points', value: String(r.leastSquares.residuals.length) },
               ]}
             />
+            <ResultWarnings warnings={r.warnings} />
+            </>
           )}
         </CalculationState>
       }

@@ -1,5 +1,5 @@
 import { useMemo, useState } from 'react';
-import { UNIT_LABELS, type LengthUnit } from '../../../lib/units';
+import { UNIT_LABELS } from '../../../lib/units';
 import { useParallelismCalculation } from '../api/calc-parallelism';
 import { useStableBody } from '../hooks/use-stable-body';
 import type { ParallelismRequest } from '../types';
@@ -9,19 +9,24 @@ import { CalculationState } from './calculation-state';
 import { CalculatorLayout } from './calculator-layout';
 import { PasteField } from './paste-field';
 import { ResultTable } from './result-table';
-import { UnitSelect } from './unit-select';
+import { ResultWarnings } from './result-warnings';
+import { UnitFamilyPickers, useUnitFamilies } from './unit-families';
 
 export function ParallelismCalculator() {
   const [text, setText] = useState('');
-  const [unit, setUnit] = useState<LengthUnit>('um');
+  const families = useUnitFamilies({ lengthUnit: 'mm', readingUnit: 'um' });
+  const { lengthUnit, readingUnit } = families.units;
   const parsed = useMemo(() => parseTable(text, 3, 3, 'station and two readings'), [text]);
   const ready = parsed.rows.length >= 2 && parsed.errors.length === 0;
   const body = useStableBody<ParallelismRequest>(
-    ready ? { positions: parsed.rows.map((r) => r[0]), railA: parsed.rows.map((r) => r[1]), railB: parsed.rows.map((r) => r[2]), unit } : null,
+    ready
+      ? { positions: parsed.rows.map((r) => r[0]), railA: parsed.rows.map((r) => r[1]), railB: parsed.rows.map((r) => r[2]), lengthUnit, readingUnit }
+      : null,
   );
   const calc = useParallelismCalculation(body);
   const r = calc.data?.result;
-  const shown = calc.data?.request.unit ?? unit;
+  const req = calc.data?.request;
+  const shown = req?.readingUnit ?? readingUnit;
   const spread = r ? r.differences.map((d, i) => ({ d, i })) : [];
   const widest = spread.length ? spread.reduce((a, b) => (Math.abs(b.d - r!.meanOffset) > Math.abs(a.d - r!.meanOffset) ? b : a)) : null;
 
@@ -30,12 +35,12 @@ export function ParallelismCalculator() {
       intro="Both rails read at the same stations against one datum (a straightedge, a level line or the master rail). Paste three columns: station, rail A, rail B."
       inputs={
         <>
-          <UnitSelect label="Reading unit" value={unit} onChange={setUnit} />
+          <UnitFamilyPickers {...families} lengthLabel="Station unit" />
           <PasteField
             label="Stations and readings of both rails"
             value={text}
             onChange={setText}
-            columnsHint={`Station (mm), rail A and rail B (${UNIT_LABELS[unit]})`}
+            columnsHint={`Station (${UNIT_LABELS[lengthUnit]}), rail A and rail B (${UNIT_LABELS[readingUnit]})`}
             placeholder={'0\t0\t12\n250\t4\t15\n500\t6\t13'}
             errors={parsed.errors}
             rowCount={parsed.rows.length}
@@ -49,17 +54,20 @@ export function ParallelismCalculator() {
           isFetching={calc.isFetching}
           error={calc.error}
         >
-          {r && calc.data && (
-            <ResultTable
-              title="Parallelism result"
-              rows={[
-                { label: 'Parallelism', value: lengthIn(r.parallelism, shown), note: 'Spread of B − A over the stations', strong: true },
-                { label: 'Height difference (mean B − A)', value: lengthIn(r.meanOffset, shown), note: 'How far rail B sits above rail A on average' },
-                ...(widest
-                  ? [{ label: 'Furthest from the mean', value: `${lengthIn(r.differences[widest.i], shown)} at ${calc.data.request.positions[widest.i]} mm` }]
-                  : []),
-              ]}
-            />
+          {r && req && (
+            <>
+              <ResultTable
+                title="Parallelism result"
+                rows={[
+                  { label: 'Parallelism', value: lengthIn(r.parallelism, shown), note: 'Spread of B − A over the stations', strong: true },
+                  { label: 'Height difference (mean B − A)', value: lengthIn(r.meanOffset, shown), note: 'How far rail B sits above rail A on average' },
+                  ...(widest
+                    ? [{ label: 'Furthest from the mean', value: `${lengthIn(r.differences[widest.i], shown)} at ${req.positions[widest.i]} ${UNIT_LABELS[req.lengthUnit]}` }]
+                    : []),
+                ]}
+              />
+              <ResultWarnings warnings={r.warnings} />
+            </>
           )}
         </CalculationState>
       }

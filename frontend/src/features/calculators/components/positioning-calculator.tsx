@@ -1,10 +1,9 @@
 import { useMemo, useState } from 'react';
-import { Alert } from '@mui/material';
 import { PositioningChart } from '../../../components/charts/positioning-chart';
-import { fromMm, UNIT_LABELS, type LengthUnit } from '../../../lib/units';
+import { fromMm, UNIT_LABELS } from '../../../lib/units';
 import { usePositioningCalculation } from '../api/calc-positioning';
 import { useStableBody } from '../hooks/use-stable-body';
-import type { PositioningRequest } from '../types';
+import type { PositioningRequest, UnitFamilies } from '../types';
 import { lengthIn } from '../utils/format';
 import { parseTable } from '../utils/parse-columns';
 import { CalculationState } from './calculation-state';
@@ -12,10 +11,11 @@ import { CalculatorLayout } from './calculator-layout';
 import { PasteField } from './paste-field';
 import { PositioningTargetsTable } from './positioning-targets-table';
 import { ResultTable } from './result-table';
-import { UnitSelect } from './unit-select';
+import { ResultWarnings } from './result-warnings';
+import { UnitFamilyPickers, useUnitFamilies } from './unit-families';
 
 /** Rows: target, then n deviations approaching up, then n approaching down. */
-function toRequest(rows: number[][], unit: LengthUnit): { body: PositioningRequest | null; problem: string | null } {
+function toRequest(rows: number[][], units: UnitFamilies): { body: PositioningRequest | null; problem: string | null } {
   if (rows.length === 0) return { body: null, problem: 'Enter one line per target.' };
   const width = rows[0].length;
   if (rows.some((r) => r.length !== width)) return { body: null, problem: 'Every line needs the same number of runs.' };
@@ -26,19 +26,20 @@ function toRequest(rows: number[][], unit: LengthUnit): { body: PositioningReque
   const runs: PositioningRequest['runs'] = [];
   for (let j = 0; j < n; j++) runs.push({ direction: 'up', deviations: rows.map((r) => r[1 + j]) });
   for (let j = 0; j < n; j++) runs.push({ direction: 'down', deviations: rows.map((r) => r[1 + n + j]) });
-  return { body: { targets: rows.map((r) => r[0]), runs, unit }, problem: null };
+  return { body: { targets: rows.map((r) => r[0]), runs, ...units }, problem: null };
 }
 
 export function PositioningCalculator() {
   const [text, setText] = useState('');
-  const [unit, setUnit] = useState<LengthUnit>('um');
+  const families = useUnitFamilies({ lengthUnit: 'mm', readingUnit: 'um' });
+  const { lengthUnit, readingUnit } = families.units;
   const parsed = useMemo(() => parseTable(text, 1, Infinity, 'target and deviations'), [text]);
-  const { body: request, problem } = useMemo(() => toRequest(parsed.rows, unit), [parsed.rows, unit]);
+  const { body: request, problem } = useMemo(() => toRequest(parsed.rows, { lengthUnit, readingUnit }), [parsed.rows, lengthUnit, readingUnit]);
   const waiting = parsed.errors.length ? 'Correct the lines marked in red.' : problem;
   const body = useStableBody<PositioningRequest>(waiting ? null : request);
   const calc = usePositioningCalculation(body);
   const r = calc.data?.result;
-  const shown = calc.data?.request.unit ?? unit;
+  const shown = calc.data?.request.readingUnit ?? readingUnit;
   const len = (mm: number) => lengthIn(mm, shown);
 
   return (
@@ -46,12 +47,12 @@ export function PositioningCalculator() {
       intro="A repeat-and-reverse run evaluated as ISO 230-2 defines it. One line per target: the target, then the deviations (actual − target) of each run approaching up, then of each run approaching down. Five runs each way is the standard cycle."
       inputs={
         <>
-          <UnitSelect label="Deviation unit" value={unit} onChange={setUnit} />
+          <UnitFamilyPickers {...families} lengthLabel="Target unit" readingLabel="Deviation unit" />
           <PasteField
             label="Targets and deviations"
             value={text}
             onChange={setText}
-            columnsHint={`Target (mm), up runs, down runs (${UNIT_LABELS[unit]})`}
+            columnsHint={`Target (${UNIT_LABELS[lengthUnit]}), up runs, down runs (${UNIT_LABELS[readingUnit]})`}
             placeholder={'0\t2\t3\t1\t-2\t-1\t-3\n125\t5\t6\t4\t1\t2\t0'}
             errors={parsed.errors}
             rowCount={parsed.rows.length}
@@ -74,11 +75,7 @@ export function PositioningCalculator() {
                   { label: 'Runs', value: `${r.runsUp} up, ${r.runsDown} down` },
                 ]}
               />
-              {r.warnings.map((w) => (
-                <Alert key={w} severity="info" sx={{ mt: 2 }}>
-                  {w}
-                </Alert>
-              ))}
+              <ResultWarnings warnings={r.warnings} />
             </>
           )}
         </CalculationState>

@@ -1,5 +1,6 @@
 import { useState } from 'react';
 import { Chip, MenuItem, TextField, Typography } from '@mui/material';
+import { fromMm, UNIT_LABELS } from '../../../lib/units';
 import { useScrewSpeedCalculation } from '../api/calc-screw-speed';
 import { useStableBody } from '../hooks/use-stable-body';
 import type { Mounting, ScrewSpeedRequest } from '../types';
@@ -9,6 +10,8 @@ import { CalculatorLayout } from './calculator-layout';
 import { FieldGrid } from './field-grid';
 import { NumberField, numberOrNull } from './number-field';
 import { ResultTable } from './result-table';
+import { ResultWarnings } from './result-warnings';
+import { UnitFamilyPickers, useUnitFamilies } from './unit-families';
 
 const MOUNTINGS: { value: Mounting; label: string }[] = [
   { value: 'fixed-free', label: 'Fixed – free' },
@@ -22,6 +25,9 @@ type Field = 'nominalDiameter' | 'rootDiameter' | 'unsupportedLength' | 'lead' |
 export function ScrewSpeedCalculator() {
   const [mounting, setMounting] = useState<Mounting>('fixed-supported');
   const [v, setV] = useState<Record<Field, string>>({ nominalDiameter: '16', rootDiameter: '12.9', unsupportedLength: '', lead: '5', feedRate: '', dnLimit: '' });
+  const families = useUnitFamilies({ lengthUnit: 'mm', readingUnit: 'mm' });
+  const unit = families.units.lengthUnit;
+  const u = UNIT_LABELS[unit];
   const set = (f: Field) => (text: string) => setV((s) => ({ ...s, [f]: text }));
   const n = (f: Field) => numberOrNull(v[f]);
   const required: Field[] = ['nominalDiameter', 'rootDiameter', 'unsupportedLength', 'lead', 'feedRate'];
@@ -36,11 +42,14 @@ export function ScrewSpeedCalculator() {
           mounting,
           feedRate: n('feedRate')!,
           ...(n('dnLimit') !== null ? { dnLimit: n('dnLimit')! } : {}),
+          ...families.units,
         }
       : null,
   );
   const calc = useScrewSpeedCalculation(body);
   const r = calc.data?.result;
+  const shown = calc.data?.request.lengthUnit ?? unit;
+  const feedDecimals = shown === 'in' ? 1 : 0;
 
   return (
     <CalculatorLayout
@@ -54,13 +63,14 @@ export function ScrewSpeedCalculator() {
               </MenuItem>
             ))}
           </TextField>
+          <UnitFamilyPickers {...families} readings={false} />
           <FieldGrid>
-            <NumberField label="Nominal diameter" value={v.nominalDiameter} onChange={set('nominalDiameter')} unit="mm" />
-            <NumberField label="Root diameter" value={v.rootDiameter} onChange={set('rootDiameter')} unit="mm" />
-            <NumberField label="Unsupported length" value={v.unsupportedLength} onChange={set('unsupportedLength')} unit="mm" helperText="Between the bearings, or bearing to nut at full travel" />
-            <NumberField label="Lead" value={v.lead} onChange={set('lead')} unit="mm" />
-            <NumberField label="Feed rate" value={v.feedRate} onChange={set('feedRate')} unit="mm/min" />
-            <NumberField label="d·n limit" value={v.dnLimit} onChange={set('dnLimit')} unit="mm·rpm" required={false} helperText="70 000 for rolled screws when blank" />
+            <NumberField label="Nominal diameter" value={v.nominalDiameter} onChange={set('nominalDiameter')} unit={u} />
+            <NumberField label="Root diameter" value={v.rootDiameter} onChange={set('rootDiameter')} unit={u} />
+            <NumberField label="Unsupported length" value={v.unsupportedLength} onChange={set('unsupportedLength')} unit={u} helperText="Between the bearings, or bearing to nut at full travel" />
+            <NumberField label="Lead" value={v.lead} onChange={set('lead')} unit={u} />
+            <NumberField label="Feed rate" value={v.feedRate} onChange={set('feedRate')} unit={`${u}/min`} />
+            <NumberField label="d·n limit" value={v.dnLimit} onChange={set('dnLimit')} unit="mm·rpm" required={false} helperText="Nominal diameter in mm × rpm; 70 000 for rolled screws when blank" />
           </FieldGrid>
         </>
       }
@@ -82,12 +92,13 @@ export function ScrewSpeedCalculator() {
                   { label: 'd·n limit speed', value: fixed(r.dnLimitSpeed, 0, 'rpm'), note: `${fixed(r.dnLimit, 0)} ÷ nominal diameter` },
                   {
                     label: 'Highest feed rate',
-                    value: fixed(r.maxFeedRate, 0, 'mm/min'),
+                    value: fixed(fromMm(r.maxFeedRate, shown), feedDecimals, `${UNIT_LABELS[shown]}/min`),
                     note: r.limitedBy === 'dn-limit' ? 'Set by the d·n limit' : 'Set by the whirling speed',
                     strong: true,
                   },
                 ]}
               />
+              <ResultWarnings warnings={r.warnings} />
               <Typography variant="caption" color="text.secondary" component="p" sx={{ mt: 1 }}>
                 Source: {r.source}. Check the screw and nut maker’s own limits before running at speed.
               </Typography>

@@ -1,6 +1,5 @@
 import { useState } from 'react';
-import { Alert } from '@mui/material';
-import { fromMm, toMm, UNIT_LABELS, type LengthUnit } from '../../../lib/units';
+import { fromMm, UNIT_LABELS } from '../../../lib/units';
 import { useSquarenessCalculation } from '../api/calc-squareness';
 import { useStableBody } from '../hooks/use-stable-body';
 import type { SquarenessRequest } from '../types';
@@ -10,26 +9,27 @@ import { CalculatorLayout } from './calculator-layout';
 import { FieldGrid } from './field-grid';
 import { NumberField, numberOrNull } from './number-field';
 import { ResultTable } from './result-table';
-import { UnitSelect } from './unit-select';
+import { ResultWarnings } from './result-warnings';
+import { UnitFamilyPickers, useUnitFamilies } from './unit-families';
 
 const FIELDS = ['sideX', 'sideY', 'diagonal1', 'diagonal2', 'gantrySpan'] as const;
 type Field = (typeof FIELDS)[number];
 
 export function SquarenessCalculator() {
-  const [unit, setUnit] = useState<LengthUnit>('mm');
+  const families = useUnitFamilies({ lengthUnit: 'mm', readingUnit: 'mm' });
+  const unit = families.units.lengthUnit;
   const [values, setValues] = useState<Record<Field, string>>({ sideX: '', sideY: '', diagonal1: '', diagonal2: '', gantrySpan: '' });
   const set = (f: Field) => (text: string) => setValues((v) => ({ ...v, [f]: text }));
-  const mm = (f: Field) => {
-    const n = numberOrNull(values[f]);
-    return n === null ? null : toMm(n, unit);
-  };
-  const [sideX, sideY, diagonal1, diagonal2, gantrySpan] = FIELDS.map(mm);
+  const [sideX, sideY, diagonal1, diagonal2, gantrySpan] = FIELDS.map((f) => numberOrNull(values[f]));
   const ready = sideX !== null && sideY !== null && diagonal1 !== null && diagonal2 !== null;
   const body = useStableBody<SquarenessRequest>(
-    ready ? { sideX: sideX!, sideY: sideY!, diagonal1: diagonal1!, diagonal2: diagonal2!, ...(gantrySpan !== null ? { gantrySpan } : {}) } : null,
+    ready
+      ? { sideX: sideX!, sideY: sideY!, diagonal1: diagonal1!, diagonal2: diagonal2!, ...(gantrySpan !== null ? { gantrySpan } : {}), ...families.units }
+      : null,
   );
   const calc = useSquarenessCalculation(body);
   const r = calc.data?.result;
+  const shown = calc.data?.request.lengthUnit ?? unit;
   const u = UNIT_LABELS[unit];
 
   return (
@@ -37,7 +37,7 @@ export function SquarenessCalculator() {
       intro="Measure the two sides and both diagonals of a large rectangle the machine marked or cut (or of the frame). Diagonal 1 runs from the home corner to the far corner."
       inputs={
         <>
-          <UnitSelect label="Length unit" value={unit} onChange={setUnit} units={['mm', 'in']} />
+          <UnitFamilyPickers {...families} readings={false} />
           <FieldGrid>
             <NumberField label="Side along X" value={values.sideX} onChange={set('sideX')} unit={u} />
             <NumberField label="Side along Y" value={values.sideY} onChange={set('sideY')} unit={u} />
@@ -49,7 +49,7 @@ export function SquarenessCalculator() {
               onChange={set('gantrySpan')}
               unit={u}
               required={false}
-              helperText="Distance between the two driven sides; the X side when blank"
+              helperText="Distance between the two driven sides (or home switches); the X side when blank"
             />
           </FieldGrid>
         </>
@@ -63,21 +63,17 @@ export function SquarenessCalculator() {
                 rows={[
                   { label: 'Out of square', value: `${fixed(r.outOfSquareDeg, 4)}° (${fixed(r.outOfSquareArcsec, 0)}″)`, strong: true },
                   { label: 'Per metre of travel', value: fixed(r.mmPerMetre, 3, 'mm/m') },
-                  { label: 'Diagonal difference', value: lengthIn(r.diagonalDifference, unit) },
+                  { label: 'Diagonal difference', value: lengthIn(r.diagonalDifference, shown) },
                   { label: 'Longer diagonal', value: r.outOfSquareDeg === 0 ? 'equal' : `Diagonal ${r.longDiagonal}` },
                   {
                     label: 'Move one side of the gantry by',
-                    value: lengthIn(r.correction, unit),
-                    note: `Over a span of ${fixed(fromMm(r.span, unit), unit === 'mm' ? 0 : 2, UNIT_LABELS[unit])}, in the direction that shortens diagonal ${r.longDiagonal}`,
+                    value: lengthIn(r.correction, shown),
+                    note: `Over a span of ${fixed(fromMm(r.span, shown), shown === 'mm' || shown === 'um' ? 0 : 2, UNIT_LABELS[shown])}, in the direction that shortens diagonal ${r.longDiagonal}`,
                     strong: true,
                   },
                 ]}
               />
-              {r.warnings.map((w) => (
-                <Alert key={w} severity="warning" sx={{ mt: 2 }}>
-                  {w}
-                </Alert>
-              ))}
+              <ResultWarnings warnings={r.warnings} />
             </>
           )}
         </CalculationState>

@@ -1,7 +1,7 @@
 import { useMemo, useState } from 'react';
 import { Box } from '@mui/material';
 import { StraightnessChart } from '../../../components/charts/straightness-chart';
-import { fromMm, UNIT_LABELS, type LengthUnit } from '../../../lib/units';
+import { fromMm, toMm, UNIT_LABELS } from '../../../lib/units';
 import { useStraightnessCalculation } from '../api/calc-straightness';
 import { useStableBody } from '../hooks/use-stable-body';
 import type { StraightnessRequest } from '../types';
@@ -11,34 +11,35 @@ import { CalculationState } from './calculation-state';
 import { CalculatorLayout } from './calculator-layout';
 import { PasteField } from './paste-field';
 import { ResultTable } from './result-table';
-import { UnitSelect } from './unit-select';
+import { ResultWarnings } from './result-warnings';
+import { UnitFamilyPickers, useUnitFamilies } from './unit-families';
 
 export function StraightnessCalculator() {
   const [text, setText] = useState('');
-  const [unit, setUnit] = useState<LengthUnit>('um');
+  const families = useUnitFamilies({ lengthUnit: 'mm', readingUnit: 'um' });
+  const { lengthUnit, readingUnit } = families.units;
   const parsed = useMemo(() => parseTable(text, 2, 2, 'station and reading'), [text]);
   const ready = parsed.rows.length >= 3 && parsed.errors.length === 0;
   const body = useStableBody<StraightnessRequest>(
-    ready ? { positions: parsed.rows.map((r) => r[0]), readings: parsed.rows.map((r) => r[1]), unit } : null,
+    ready ? { positions: parsed.rows.map((r) => r[0]), readings: parsed.rows.map((r) => r[1]), lengthUnit, readingUnit } : null,
   );
   const calc = useStraightnessCalculation(body);
   const r = calc.data?.result;
   const req = calc.data?.request;
-  const u = UNIT_LABELS[unit];
-  // Results are shown in the unit the answered readings were given in.
-  const shown = req?.unit ?? unit;
+  // Results are shown in the units the answered request was given in.
+  const shown = req?.readingUnit ?? readingUnit;
 
   return (
     <CalculatorLayout
       intro="Indicator readings at stations along one rail. Paste two columns from a spreadsheet or type one station per line; the result follows as you type."
       inputs={
         <>
-          <UnitSelect label="Reading unit" value={unit} onChange={setUnit} />
+          <UnitFamilyPickers {...families} lengthLabel="Station unit" />
           <PasteField
             label="Stations and readings"
             value={text}
             onChange={setText}
-            columnsHint={`Station (mm) and reading (${u})`}
+            columnsHint={`Station (${UNIT_LABELS[lengthUnit]}) and reading (${UNIT_LABELS[readingUnit]})`}
             placeholder={'0\t0\n100\t3\n200\t7\n300\t8'}
             errors={parsed.errors}
             rowCount={parsed.rows.length}
@@ -53,16 +54,19 @@ export function StraightnessCalculator() {
           error={calc.error}
         >
           {r && (
-            <ResultTable
-              title="Straightness result"
-              rows={[
-                { label: 'Straightness, minimum zone', value: lengthIn(r.minimumZone.straightness, shown), note: 'Narrowest band holding every reading', strong: true },
-                { label: 'Straightness, least squares', value: lengthIn(r.leastSquares.straightness, shown), note: 'Spread about the best-fit line' },
-                { label: 'Straightness, end points', value: lengthIn(r.endPoint.straightness, shown), note: 'Spread about the line through the first and last stations' },
-                { label: 'Slope of the least-squares line', value: slopePerMetre(r.leastSquares.slope, shown), note: 'Tilt of the rail against the indicator’s reference' },
-                { label: 'Stations', value: String(r.leastSquares.residuals.length) },
-              ]}
-            />
+            <>
+              <ResultTable
+                title="Straightness result"
+                rows={[
+                  { label: 'Straightness, minimum zone', value: lengthIn(r.minimumZone.straightness, shown), note: 'Narrowest band holding every reading (ISO 1101)', strong: true },
+                  { label: 'Straightness, least squares', value: lengthIn(r.leastSquares.straightness, shown), note: 'Spread about the best-fit line' },
+                  { label: 'Straightness, end points', value: lengthIn(r.endPoint.straightness, shown), note: 'Spread about the line through the first and last stations' },
+                  { label: 'Slope of the least-squares line', value: slopePerMetre(r.leastSquares.slope, shown), note: 'Tilt of the rail against the indicator’s reference' },
+                  { label: 'Stations', value: String(r.leastSquares.residuals.length) },
+                ]}
+              />
+              <ResultWarnings warnings={r.warnings} />
+            </>
           )}
         </CalculationState>
       }
@@ -71,7 +75,7 @@ export function StraightnessCalculator() {
         req && (
           <Box>
             <StraightnessChart
-              points={req.positions.map((position, i) => ({ position, reading: req.readings[i] }))}
+              points={req.positions.map((position, i) => ({ position: toMm(position, req.lengthUnit), reading: req.readings[i] }))}
               leastSquares={{ slope: fromMm(r.leastSquares.slope, shown), intercept: fromMm(r.leastSquares.intercept, shown) }}
               zone={{ slope: fromMm(r.minimumZone.slope, shown), intercept: fromMm(r.minimumZone.intercept, shown), width: fromMm(r.minimumZone.straightness, shown) }}
               unitLabel={UNIT_LABELS[shown]}
@@ -82,4 +86,3 @@ export function StraightnessCalculator() {
     />
   );
 }
-
