@@ -1,4 +1,5 @@
 import { evaluateFlatness, type FlatnessResult } from '../engine/flatness.js';
+import { minimumZonePlane } from '../engine/flatness-zone.js';
 import type { BedGridPointMm } from '../database/schema/frame.js';
 
 export interface BedGridPointResult {
@@ -9,8 +10,32 @@ export interface BedGridPointResult {
   xMm: number;
   yMm: number;
   zMm: number;
+  /** Height minus the least-squares plane, mm. */
   residualMm: number;
+  /** Height minus the middle plane of the minimum zone, mm. */
+  zoneResidualMm: number;
+  /** Height above the lower bound of the judged zone, mm (0 … judged value): what the bed map draws. */
+  judgedHeightMm: number;
 }
+
+/**
+ * Which value is judged against the bed target, by machine kind:
+ * - plasma: the range of the heights as read from a gauge carried by the gantry, tilt left in.
+ *   The torch rides the gantry, so what matters is the bed parallel to the plane of the gantry's
+ *   travel, not level to earth nor flat after a best-fit tilt is taken out (TRADE.md: "what matters
+ *   is the bed parallel to the torch plane"); the target is the torch-height tolerance.
+ * - router and other machines: minimum-zone flatness (ISO 1101's definition of flatness), the
+ *   spoilboard's or bed's own form; a tilt is surfaced away or shimmed separately.
+ * Least squares is shown beside both.
+ */
+export type BedJudgedBasis = 'height-range' | 'minimum-zone';
+
+export const JUDGED_LABEL: Record<BedJudgedBasis, string> = {
+  'height-range': 'Height range to the gantry’s plane of travel (tilt left in)',
+  'minimum-zone': 'Minimum-zone flatness (ISO 1101)',
+};
+
+export const judgedBasisFor = (machineKind: string): BedJudgedBasis => (machineKind === 'plasma' ? 'height-range' : 'minimum-zone');
 
 export interface BedGridResult {
   leastSquares: {
@@ -22,11 +47,17 @@ export interface BedGridResult {
     flatness: number;
     flatnessMm: number;
   };
+  /** The ISO 1101 zone: middle plane z = a·x + b·y + c and the zone's width along the height axis. */
+  minimumZone: { a: number; b: number; c: number; flatnessMm: number };
+  /** Highest minus lowest height as read, tilt left in. */
+  heightRange: { rangeMm: number };
+  /** The value this machine's bed is judged on (see BedJudgedBasis). */
+  judged: { basis: BedJudgedBasis; label: string; valueMm: number };
   tilt: { xMmPerMetre: number; yMmPerMetre: number; mmPerMetre: number; directionDeg: number };
   points: BedGridPointResult[];
   highest: BedGridPointResult;
   lowest: BedGridPointResult;
-  /** The points furthest from the plane, largest first (up to five). */
+  /** The points furthest from the middle of the judged zone, largest first (up to five). */
   worstPoints: BedGridPointResult[];
   rows: number;
   columns: number;
@@ -39,8 +70,14 @@ function rankOf(values: number[]): Map<number, number> {
   return new Map(distinct.map((v, i) => [v, i + 1]));
 }
 
-export function bedGridResult(points: BedGridPointMm[]): BedGridResult {
+export function bedGridResult(points: BedGridPointMm[], basis: BedJudgedBasis): BedGridResult {
   const f: FlatnessResult = evaluateFlatness(points);
+  const zone = minimumZonePlane(points);
+  const zs = points.map((p) => p.zMm);
+  const lowestZ = Math.min(...zs);
+  const rangeMm = Math.max(...zs) - lowestZ;
+  const judgedValue = basis === 'height-range' ? rangeMm : zone.flatnessMm;
+  const judgedHeight = (i: number) => (basis === 'height-range' ? zs[i] - lowestZ : zone.residualsMm[i] + zone.flatnessMm / 2);
   const rowOf = rankOf(points.map((p) => p.yMm));
   const columnOf = rankOf(points.map((p) => p.xMm));
   const rows = rowOf.size;
@@ -53,15 +90,21 @@ export function bedGridResult(points: BedGridPointMm[]): BedGridResult {
     yMm: p.yMm,
     zMm: p.zMm,
     residualMm: f.residualsMm[i],
+    zoneResidualMm: zone.residualsMm[i],
+    judgedHeightMm: judgedHeight(i),
   }));
-  const byResidual = [...out].sort((p, q) => q.residualMm - p.residualMm);
-  const worst = [...out].sort((p, q) => Math.abs(q.residualMm) - Math.abs(p.residualMm)).slice(0, WORST_COUNT);
+  const off = (p: BedGridPointResult) => p.judgedHeightMm - judgedValue / 2;
+  const byHeight = [...out].sort((p, q) => q.judgedHeightMm - p.judgedHeightMm);
+  const worst = [...out].sort((p, q) => Math.abs(off(q)) - Math.abs(off(p))).slice(0, WORST_COUNT);
   return {
     leastSquares: { a: f.a, b: f.b, c: f.cMm, flatness: f.flatnessMm, flatnessMm: f.flatnessMm },
+    minimumZone: { a: zone.a, b: zone.b, c: zone.cMm, flatnessMm: zone.flatnessMm },
+    heightRange: { rangeMm },
+    judged: { basis, label: JUDGED_LABEL[basis], valueMm: judgedValue },
     tilt: { xMmPerMetre: f.tiltXMmPerMetre, yMmPerMetre: f.tiltYMmPerMetre, mmPerMetre: f.tiltMmPerMetre, directionDeg: f.tiltDirectionDeg },
     points: out,
-    highest: byResidual[0],
-    lowest: byResidual[byResidual.length - 1],
+    highest: byHeight[0],
+    lowest: byHeight[byHeight.length - 1],
     worstPoints: worst,
     rows,
     columns,

@@ -1,21 +1,24 @@
 import { BadRequestException, Injectable, NotFoundException } from '@nestjs/common';
 import type { SessionUser } from '../auth/session-user.js';
 import type { BedGridPointMm } from '../database/schema/frame.js';
-import { fromMm, toMm, type LengthUnit } from '../engine/units.js';
+import { fromMm, toMm } from '../engine/units.js';
 import { MachinesService } from '../machines/machines.service.js';
-import type { MachineRef, ReadinessCheck, ReadinessContext } from '../records/readiness.js';
+import type { CheckSeries, MachineRef, ReadinessCheck, ReadinessContext } from '../records/readiness.js';
 import { RecordsService } from '../records/records.service.js';
-import { bedGridResult, type BedGridPointResult } from './bed-grid-result.js';
+import { bedGridResult, judgedBasisFor, type BedGridPointResult, type BedGridResult } from './bed-grid-result.js';
 import { readableComputation } from '../common/stored-result.js';
-
-/** The numbers the readers of a bed grid use, computed again from its stored points. */
-const BED_GRID_SHAPE = ['leastSquares.flatnessMm', 'tilt.mmPerMetre', 'points[]', 'points[].xMm', 'points[].yMm', 'points[].residualMm'];
 import type { CreateBedGridDto } from './dto/create-bed-grid.dto.js';
 import { FrameTargets, frameTargetIn, judge, type TargetOf } from './frame-targets.js';
+import { bedGridWarnings, show } from './frame-warnings.js';
 import { toBedGridResponse, type BedGridResponse } from './frame.mapper.js';
 import { FrameRepository, type BedGridRow } from './frame.repository.js';
 
+/** The numbers the readers of a bed grid use, computed again from its stored points. */
+const BED_GRID_SHAPE = ['leastSquares.flatnessMm', 'minimumZone.flatnessMm', 'judged.valueMm', 'tilt.mmPerMetre', 'points[]', 'points[].xMm', 'points[].yMm', 'points[].residualMm', 'points[].judgedHeightMm'];
+
 export const BED_GRID = 'bed-grid';
+
+type GridMachine = Pick<MachineRef, 'kind' | 'workAreaXMm' | 'workAreaYMm'>;
 
 @Injectable()
 export class BedGridsService {
@@ -28,18 +31,21 @@ export class BedGridsService {
 
   async create(actor: SessionUser, machineId: string, dto: CreateBedGridDto): Promise<BedGridResponse> {
     const machine = await this.machines.getRef(actor, machineId);
-    const unit = dto.unit ?? 'mm';
+    const lengthUnit = dto.lengthUnit ?? 'mm';
+    const readingUnit = dto.readingUnit ?? 'mm';
     if ((dto.rows == null) !== (dto.columns == null)) throw new BadRequestException([`${dto.rows == null ? 'rows' : 'columns'} is needed with ${dto.rows == null ? 'columns' : 'rows'}`]);
     if (dto.rows != null && dto.columns != null && dto.rows * dto.columns !== dto.points.length) {
       throw new BadRequestException([`points must hold rows × columns = ${dto.rows * dto.columns} points (got ${dto.points.length})`]);
     }
-    const points: BedGridPointMm[] = dto.points.map((p) => ({ xMm: p.x, yMm: p.y, zMm: toMm(p.z, unit) }));
+    const points: BedGridPointMm[] = dto.points.map((p) => ({ xMm: toMm(p.x, lengthUnit), yMm: toMm(p.y, lengthUnit), zMm: toMm(p.z, readingUnit) }));
     // Evaluated before saving: a grid the engine refuses (all on one line, repeated positions) is never stored.
-    bedGridResult(points);
+    bedGridResult(points, judgedBasisFor(machine.kind));
     const row = await this.repo.insertBedGrid({
       workshopId: actor.workshopId,
       machineId: machine.id,
-      unit,
+      lengthUnit,
+      readingUnit,
+      resolutionMm: dto.resolution == null ? null : toMm(dto.resolution, readingUnit),
       rows: dto.rows ?? null,
       columns: dto.columns ?? null,
       points,
@@ -47,11 +53,12 @@ export class BedGridsService {
       recordedById: actor.id,
       recordedByName: actor.name,
     });
-    const response = this.respond(row, await this.targets.of(machine, 'bedFlatness'), false);
+    const response = this.respond(row, machine, await this.targets.of(machine, 'bedFlatness'), false);
+    const judged = response.result!.judged;
     await this.records.checkRecorded(
       actor,
       { machineId: machine.id, kind: BED_GRID, recordType: BED_GRID, recordId: row.id, status: response.status },
-      `Bed grid of ${points.length} points: flatness ${show(response.result!.leastSquares.flatnessMm, unit)}, ${response.status.replace('-', ' ')}`,
+      `Bed grid of ${points.length} points: ${judged.label.toLowerCase()} ${show(judged.valueMm, readingUnit)}, ${response.status.replace('-', ' ')}`,
     );
     return response;
   }
@@ -71,7 +78,7 @@ export class BedGridsService {
     const rows = await this.repo.listBedGrids(actor.workshopId, machine.id);
     const locked = await this.records.lockedIds(BED_GRID, rows.map((r) => r.id));
     const target = await this.targets.of(machine, 'bedFlatness');
-    return rows.map((r) => this.respond(r, target, locked.has(r.id)));
+    return rows.map((r) => this.respond(r, machine, target, locked.has(r.id)));
   }
 
   async readiness(machine: MachineRef, context: ReadinessContext): Promise<ReadinessCheck> {
@@ -88,30 +95,28 @@ export class BedGridsService {
       recordId: null,
       recordedAt: null,
       link: `/machines/${machine.id}?tab=frame`,
+      warnings: [],
     };
     if (!row) return base;
-    const r = this.respond(row, t, false);
+    const r = this.respond(row, machine, t, false);
     if (!r.result) {
       // A latest grid that cannot be read blocks like a failed one and says why.
-      return { ...base, subject: `${base.subject} (latest bed grid unreadable)`, status: 'outside-target', recordId: row.id, recordedAt: r.recordedAt };
+      return { ...base, subject: `${base.subject} (latest bed grid unreadable)`, status: 'outside-target', result: null, recordId: row.id, recordedAt: r.recordedAt };
     }
-    // Shown in the target's unit, so result and target read side by side.
-    const unit = (['mm', 'um', 'in', 'thou'].includes(t.target.unit) ? t.target.unit : 'mm') as LengthUnit;
-    const flatness = r.result.leastSquares.flatnessMm;
+    const unit = row.readingUnit;
+    const { judged, leastSquares, minimumZone } = r.result;
     return {
       ...base,
       status: r.status,
-      result: { value: fromMm(flatness, unit), unit, summary: `flatness ${show(flatness, unit)} over ${row.points.length} points; tilt ${r.result.tilt.mmPerMetre.toFixed(2)} mm/m` },
+      result: {
+        value: fromMm(judged.valueMm, unit),
+        unit,
+        summary: `${judged.label}: ${show(judged.valueMm, unit)} over ${row.points.length} points (judged); minimum zone ${show(minimumZone.flatnessMm, unit)}, least squares ${show(leastSquares.flatnessMm, unit)}; tilt ${r.result.tilt.mmPerMetre.toFixed(2)} mm/m`,
+      },
       recordId: row.id,
       recordedAt: r.recordedAt,
-      ...(context.series && {
-        series: {
-          title: 'Heights about the fitted plane, row by row',
-          x: { label: 'X position', unit: 'mm' },
-          y: { label: 'Residual', unit },
-          lines: rowsOf(r.result.points).map(([n, pts]) => ({ label: `Row ${n} (Y ${pts[0].yMm} mm)`, points: pts.map((p): [number, number] => [p.xMm, fromMm(p.residualMm, unit)]) })),
-        },
-      }),
+      warnings: r.warnings,
+      ...(context.series && { series: bedMapSeries(r.result, row, t) }),
     };
   }
 
@@ -120,10 +125,33 @@ export class BedGridsService {
     return row ? { machineId: row.machineId, recordType: BED_GRID, recordId: row.id, label: `Bed grid of ${row.recordedAt.toISOString().slice(0, 10)}` } : null;
   }
 
-  private respond(row: BedGridRow, { target, base }: TargetOf, locked: boolean): BedGridResponse {
-    const result = readableComputation(() => bedGridResult(row.points), BED_GRID_SHAPE);
-    return toBedGridResponse(row, result, result ? judge(result.leastSquares.flatnessMm, base) : 'outside-target', target, locked);
+  private respond(row: BedGridRow, machine: GridMachine, { target, base }: TargetOf, locked: boolean): BedGridResponse {
+    const result = readableComputation(() => bedGridResult(row.points, judgedBasisFor(machine.kind)), BED_GRID_SHAPE);
+    const warnings = result
+      ? bedGridWarnings(row.points, result, { workAreaXMm: machine.workAreaXMm, workAreaYMm: machine.workAreaYMm, targetMm: base, resolutionMm: row.resolutionMm, lengthUnit: row.lengthUnit, readingUnit: row.readingUnit })
+      : [];
+    return toBedGridResponse(row, result, result ? judge(result.judged.valueMm, base) : 'outside-target', target, locked, warnings);
   }
+}
+
+/**
+ * The bed map for the certificate: one line per grid row (Y0 first, label "Row r · Y = y <unit>"),
+ * points [x in the grid's lengthUnit, height in its readingUnit] in X order. Heights are above the
+ * lower bound of the judged zone, so every point lies between 0 and the judged value, and the
+ * target is the one limit: a point above it is where the bed is out.
+ */
+export function bedMapSeries(r: BedGridResult, row: Pick<BedGridRow, 'lengthUnit' | 'readingUnit'>, t: TargetOf): CheckSeries {
+  const { lengthUnit, readingUnit } = row;
+  return {
+    title: `Bed map: ${r.judged.label.toLowerCase()}, ${r.rows} rows by ${r.columns} columns`,
+    x: { label: 'X position', unit: lengthUnit },
+    y: { label: 'Height above the lowest of the judged zone', unit: readingUnit },
+    lines: rowsOf(r.points).map(([n, pts]) => ({
+      label: `Row ${n} · Y = ${Number(fromMm(pts[0].yMm, lengthUnit).toFixed(4))} ${lengthUnit}`,
+      points: pts.map((p): [number, number] => [Number(fromMm(p.xMm, lengthUnit).toFixed(6)), fromMm(p.judgedHeightMm, readingUnit)]),
+    })),
+    limits: [{ label: `Target ${t.target.value} ${t.target.unit}`, value: fromMm(t.base, readingUnit) }],
+  };
 }
 
 function rowsOf(points: BedGridPointResult[]): [number, BedGridPointResult[]][] {
@@ -131,7 +159,3 @@ function rowsOf(points: BedGridPointResult[]): [number, BedGridPointResult[]][] 
   for (const p of points) byRow.set(p.row, [...(byRow.get(p.row) ?? []), p]);
   return [...byRow.entries()].sort((a, b) => a[0] - b[0]).map(([n, pts]) => [n, pts.sort((a, b) => a.xMm - b.xMm)]);
 }
-
-const DECIMALS: Record<LengthUnit, number> = { mm: 3, um: 1, in: 4, thou: 2 };
-const LABEL: Record<LengthUnit, string> = { mm: 'mm', um: 'µm', in: 'in', thou: 'thou' };
-const show = (mm: number, unit: LengthUnit) => `${fromMm(mm, unit).toFixed(DECIMALS[unit])} ${LABEL[unit]}`;

@@ -10,6 +10,7 @@ import { FrameTargets, frameTargetIn, judge, type TargetOf } from './frame-targe
 import { toDiagonalCheckResponse, type DiagonalCheckResponse } from './frame.mapper.js';
 import { FrameRepository, type DiagonalCheckRow } from './frame.repository.js';
 import { readableComputation } from '../common/stored-result.js';
+import { diagonalWarnings } from './frame-warnings.js';
 
 /** The numbers the readers of a diagonal check use, computed again from its stored lengths. */
 const DIAGONAL_SHAPE = ['mmPerMetre', 'outOfSquareArcsec', 'correction.moveMm'];
@@ -28,7 +29,7 @@ export class DiagonalChecksService {
 
   async create(actor: SessionUser, machineId: string, dto: CreateDiagonalCheckDto): Promise<DiagonalCheckResponse> {
     const machine = await this.machines.getRef(actor, machineId);
-    const unit = dto.unit ?? 'mm';
+    const unit = dto.lengthUnit ?? 'mm';
     const input: DiagonalInputMm = {
       sideXMm: toMm(dto.sideX, unit),
       sideYMm: toMm(dto.sideY, unit),
@@ -43,7 +44,8 @@ export class DiagonalChecksService {
     const row = await this.repo.insertDiagonalCheck({
       workshopId: actor.workshopId,
       machineId: machine.id,
-      unit,
+      lengthUnit: unit,
+      resolutionMm: dto.resolution == null ? null : toMm(dto.resolution, unit),
       ...input,
       note: dto.note?.trim() ?? '',
       recordedById: actor.id,
@@ -93,6 +95,7 @@ export class DiagonalChecksService {
       recordId: null,
       recordedAt: null,
       link: `/machines/${machine.id}?tab=frame`,
+      warnings: [],
     };
     if (!row) return base;
     const r = this.respond(row, t, false);
@@ -106,6 +109,7 @@ export class DiagonalChecksService {
       result: { value: r.result.mmPerMetre, unit: 'mm/m', summary: `${r.result.mmPerMetre.toFixed(3)} mm/m out of square; move one side ${r.result.correction.moveMm.toFixed(2)} mm` },
       recordId: row.id,
       recordedAt: r.recordedAt,
+      warnings: r.warnings,
       // The squaring history, oldest first, for the certificate's chart.
       ...(context.series && {
         series: {
@@ -129,6 +133,7 @@ export class DiagonalChecksService {
 
   private respond(row: DiagonalCheckRow, { target, base }: TargetOf, locked: boolean): DiagonalCheckResponse {
     const result = storedDiagonal(row);
-    return toDiagonalCheckResponse(row, result, result ? judge(result.mmPerMetre, base) : 'outside-target', target, locked);
+    const warnings = result ? diagonalWarnings(row, result.warnings, base, row.resolutionMm, row.lengthUnit) : [];
+    return toDiagonalCheckResponse(row, result, result ? judge(result.mmPerMetre, base) : 'outside-target', target, locked, warnings);
   }
 }

@@ -6,6 +6,7 @@ import type { DiagonalCheckResult } from './diagonal-check-result.js';
 import type { BedGridRow, DiagonalCheckRow, TestCutRow } from './frame.repository.js';
 import type { TestCutResult } from './test-cut-result.js';
 import { finiteOrNull, UNREADABLE_INPUT } from '../common/stored-result.js';
+import type { ResultWarning } from '../engine/warnings.js';
 
 export type FrameStatus = Exclude<CheckStatus, 'waived' | 'not-started'>;
 
@@ -16,26 +17,30 @@ export interface JudgedTarget extends TargetValue {
 interface Common {
   id: string;
   machineId: string;
-  unit: LengthUnit;
+  /** Unit the record's lengths were entered in and are given back in. */
+  lengthUnit: LengthUnit;
   note: string;
   recordedBy: { id: string | null; name: string };
   recordedAt: string;
   status: FrameStatus;
   target: JudgedTarget;
   locked: boolean;
+  /** What a person should know about the result (empty when none). */
+  warnings: ResultWarning[];
 }
 
-function common(row: DiagonalCheckRow | BedGridRow | TestCutRow, status: FrameStatus, target: JudgedTarget, locked: boolean): Common {
+function common(row: DiagonalCheckRow | BedGridRow | TestCutRow, status: FrameStatus, target: JudgedTarget, locked: boolean, warnings: ResultWarning[]): Common {
   return {
     id: row.id,
     machineId: row.machineId,
-    unit: row.unit,
+    lengthUnit: row.lengthUnit,
     note: row.note,
     recordedBy: { id: row.recordedById, name: row.recordedByName },
     recordedAt: row.recordedAt.toISOString(),
     status,
     target,
     locked,
+    warnings,
   };
 }
 
@@ -49,11 +54,12 @@ const field = (o: unknown, key: string): unknown => (o !== null && typeof o === 
 /** A record whose stored measurements cannot be read carries no result and says so. */
 const unreadable = (result: unknown) => (result === null ? { unreadable: UNREADABLE_INPUT } : {});
 
-export function toDiagonalCheckResponse(row: DiagonalCheckRow, result: DiagonalCheckResult | null, status: FrameStatus, target: JudgedTarget, locked: boolean) {
-  const u = row.unit;
+export function toDiagonalCheckResponse(row: DiagonalCheckRow, result: DiagonalCheckResult | null, status: FrameStatus, target: JudgedTarget, locked: boolean, warnings: ResultWarning[]) {
+  const u = row.lengthUnit;
   return {
-    ...common(row, status, target, locked),
-    // As entered (in `unit`) and in mm.
+    ...common(row, status, target, locked, warnings),
+    resolution: row.resolutionMm == null ? null : inUnit(row.resolutionMm, u),
+    // As entered (in `lengthUnit`) and in mm.
     input: {
       sideX: inUnit(row.sideXMm, u),
       sideY: inUnit(row.sideYMm, u),
@@ -67,26 +73,32 @@ export function toDiagonalCheckResponse(row: DiagonalCheckRow, result: DiagonalC
   };
 }
 
-export function toBedGridResponse(row: BedGridRow, result: BedGridResult | null, status: FrameStatus, target: JudgedTarget, locked: boolean) {
+export function toBedGridResponse(row: BedGridRow, result: BedGridResult | null, status: FrameStatus, target: JudgedTarget, locked: boolean, warnings: ResultWarning[]) {
   return {
-    ...common(row, status, target, locked),
+    ...common(row, status, target, locked, warnings),
+    /** Unit the heights (and the gauge's resolution) were read in and are given back in. */
+    readingUnit: row.readingUnit,
+    resolution: row.resolutionMm == null ? null : inUnit(row.resolutionMm, row.readingUnit),
     rows: row.rows ?? result?.rows ?? null,
     columns: row.columns ?? result?.columns ?? null,
-    // Positions in mm, heights as entered (in `unit`).
-    points: (Array.isArray(row.points) ? row.points : []).map((p) => ({ x: finiteOrNull(field(p, 'xMm') as number), y: finiteOrNull(field(p, 'yMm') as number), z: inUnit(field(p, 'zMm'), row.unit) })),
+    // Positions as entered (in `lengthUnit`), heights as entered (in `readingUnit`); the result is in mm.
+    points: (Array.isArray(row.points) ? row.points : []).map((p) => ({ x: inUnit(field(p, 'xMm'), row.lengthUnit), y: inUnit(field(p, 'yMm'), row.lengthUnit), z: inUnit(field(p, 'zMm'), row.readingUnit) })),
     result,
     ...unreadable(result),
   };
 }
 
-export function toTestCutResponse(row: TestCutRow, result: TestCutResult | null, status: FrameStatus, target: { part: JudgedTarget; squareness: JudgedTarget }, locked: boolean) {
-  const u = row.unit;
+export function toTestCutResponse(row: TestCutRow, result: TestCutResult | null, status: FrameStatus, target: { part: JudgedTarget; squareness: JudgedTarget }, locked: boolean, warnings: ResultWarning[]) {
+  const u = row.lengthUnit;
   const s = row.sizes;
   const nominal = field(s, 'nominal');
   const measured = field(s, 'measured');
   return {
-    ...common(row, status, target.part, locked),
+    ...common(row, status, target.part, locked, warnings),
     targets: target,
+    plateThickness: row.plateThicknessMm == null ? null : inUnit(row.plateThicknessMm, u),
+    plateThicknessMm: finiteOrNull(row.plateThicknessMm),
+    resolution: row.resolutionMm == null ? null : inUnit(row.resolutionMm, u),
     nominal: { x: inUnit(field(nominal, 'xMm'), u), y: inUnit(field(nominal, 'yMm'), u), circle: inUnit(field(nominal, 'circleMm'), u) },
     measured: {
       x: inUnit(field(measured, 'xMm'), u),

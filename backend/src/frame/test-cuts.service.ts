@@ -1,20 +1,28 @@
 import { BadRequestException, Injectable, NotFoundException } from '@nestjs/common';
 import type { SessionUser } from '../auth/session-user.js';
 import type { TestCutSizesMm } from '../database/schema/frame.js';
-import { toMm } from '../engine/units.js';
+import { fromMm, toMm } from '../engine/units.js';
 import { MachinesService } from '../machines/machines.service.js';
-import type { MachineRef, ReadinessCheck, ReadinessContext } from '../records/readiness.js';
+import type { CheckSeries, MachineRef, ReadinessCheck, ReadinessContext } from '../records/readiness.js';
 import { RecordsService } from '../records/records.service.js';
 import type { CreateTestCutDto } from './dto/create-test-cut.dto.js';
 import { FrameTargets, frameTargetIn, type TargetOf } from './frame-targets.js';
 import { toTestCutResponse, type FrameStatus, type TestCutResponse } from './frame.mapper.js';
 import { FrameRepository, type TestCutRow } from './frame.repository.js';
-import { afterKerf, testCutResult } from './test-cut-result.js';
+import { afterKerf, testCutResult, type PartTolerancePolicy, type TestCutResult } from './test-cut-result.js';
 import { readableComputation } from '../common/stored-result.js';
+import { impossibleDiagonals } from './diagonal-check-result.js';
+import { show, testCutWarnings } from './frame-warnings.js';
 
 /** The numbers the readers of a test cut use, computed again from its stored sizes. */
-const TEST_CUT_SHAPE = ['squareness.mmPerMetre', 'parts[]', 'parts[].deviationMm'];
-import { impossibleDiagonals } from './diagonal-check-result.js';
+const TEST_CUT_SHAPE = ['squareness.mmPerMetre', 'parts[]', 'parts[].deviationMm', 'parts[].toleranceMm'];
+/** Widest kerf taken as a kerf rather than a typing slip (common practice: 0.03–0.08 in, far less than this). */
+const MAX_KERF_MM = 25;
+
+/** Plasma tables are judged by ISO 9013's bands; routers and other machines by the target as it stands. */
+function policyFor(machine: Pick<MachineRef, 'kind'>, targetMm: number, plateThicknessMm: number | null): PartTolerancePolicy {
+  return machine.kind === 'plasma' ? { basis: 'iso9013-class-2', targetMm, plateThicknessMm } : { basis: 'target', targetMm };
+}
 
 export const TEST_CUT = 'test-cut';
 
@@ -34,8 +42,10 @@ export class TestCutsService {
 
   async create(actor: SessionUser, machineId: string, dto: CreateTestCutDto): Promise<TestCutResponse> {
     const machine = await this.machines.getRef(actor, machineId);
-    const unit = dto.unit ?? 'mm';
+    const unit = dto.lengthUnit ?? 'mm';
     const mm = (v: number) => toMm(v, unit);
+    if (dto.measured.kerf != null && mm(dto.measured.kerf) > MAX_KERF_MM) throw new BadRequestException([`measured.kerf must be at most ${MAX_KERF_MM} mm (${show(MAX_KERF_MM, unit)})`]);
+    const plateThicknessMm = dto.plateThickness == null ? null : mm(dto.plateThickness);
     const sizes: TestCutSizesMm = {
       nominal: { xMm: mm(dto.nominal.x), yMm: mm(dto.nominal.y), circleMm: mm(dto.nominal.circle) },
       measured: {
@@ -55,17 +65,19 @@ export class TestCutsService {
     if (impossible.length) throw new BadRequestException(impossible.map((msg) => `measured.${msg.replace(/side([XY])/g, 'measured.$1')}`));
     const targets = await this.targetsOf(machine);
     // Evaluated before saving so input the engine refuses is never stored.
-    testCutResult(sizes, targets.part.base);
+    testCutResult(sizes, policyFor(machine, targets.part.base, plateThicknessMm));
     const row = await this.repo.insertTestCut({
       workshopId: actor.workshopId,
       machineId: machine.id,
-      unit,
+      lengthUnit: unit,
+      plateThicknessMm,
+      resolutionMm: dto.resolution == null ? null : mm(dto.resolution),
       sizes,
       note: dto.note?.trim() ?? '',
       recordedById: actor.id,
       recordedByName: actor.name,
     });
-    const r = this.respond(row, targets, false);
+    const r = this.respond(row, machine, targets, false);
     await this.records.checkRecorded(
       actor,
       { machineId: machine.id, kind: TEST_CUT, recordType: TEST_CUT, recordId: row.id, status: r.status },
@@ -89,7 +101,7 @@ export class TestCutsService {
     const rows = await this.repo.listTestCuts(actor.workshopId, machine.id);
     const locked = await this.records.lockedIds(TEST_CUT, rows.map((r) => r.id));
     const targets = await this.targetsOf(machine);
-    return rows.map((r) => this.respond(r, targets, locked.has(r.id)));
+    return rows.map((r) => this.respond(r, machine, targets, locked.has(r.id)));
   }
 
   async readiness(machine: MachineRef, context: ReadinessContext): Promise<ReadinessCheck> {
@@ -108,23 +120,27 @@ export class TestCutsService {
       link: `/machines/${machine.id}?tab=frame`,
     };
     if (!row) return base;
-    const r = this.respond(row, targets, false);
+    const r = this.respond(row, machine, targets, false);
     if (!r.result) {
       // A latest cut that cannot be read blocks like a failed one and says why.
       return { ...base, subject: `${base.subject} (latest test cut unreadable)`, status: 'outside-target', recordId: row.id, recordedAt: r.recordedAt };
     }
-    const worst = Math.max(...r.result.parts.map((p) => Math.abs(p.deviationMm)));
+    const u = row.lengthUnit;
+    const worst = r.result.parts.reduce((w, p) => (Math.abs(p.deviationMm) > Math.abs(w.deviationMm) ? p : w));
     const outside = r.result.parts.filter((p) => !p.within).length;
+    const plate = row.plateThicknessMm == null ? '' : ` in ${show(row.plateThicknessMm, u)} plate`;
     return {
       ...base,
       status: r.status,
       result: {
-        value: worst,
-        unit: 'mm',
-        summary: `largest part size error ${worst.toFixed(2)} mm${outside ? ` (${outside} of 4 outside ±${targets.part.base.toFixed(2)} mm)` : ''}; ${r.result.squareness.mmPerMetre.toFixed(3)} mm/m out of square`,
+        value: fromMm(Math.abs(worst.deviationMm), u),
+        unit: u,
+        summary: `largest part size error ${show(Math.abs(worst.deviationMm), u)} (${worst.label.toLowerCase()}, ±${show(worst.toleranceMm, u)} allowed)${plate}${outside ? `; ${outside} of 4 outside their tolerance` : ''}; ${r.result.squareness.mmPerMetre.toFixed(3)} mm/m out of square`,
       },
       recordId: row.id,
       recordedAt: r.recordedAt,
+      warnings: r.warnings,
+      ...(context.series && { series: partTableSeries(r.result, u) }),
     };
   }
 
@@ -138,11 +154,36 @@ export class TestCutsService {
   }
 
   /** Within target only when every part size is within ± the part tolerance and the cut is square enough. */
-  private respond(row: TestCutRow, targets: TestCutTargets, locked: boolean): TestCutResponse {
-    const result = readableComputation(() => testCutResult(row.sizes, targets.part.base), TEST_CUT_SHAPE);
-    if (!result) return toTestCutResponse(row, null, 'outside-target', { part: targets.part.target, squareness: targets.squareness.target }, locked);
+  private respond(row: TestCutRow, machine: Pick<MachineRef, 'kind'>, targets: TestCutTargets, locked: boolean): TestCutResponse {
+    const policy = policyFor(machine, targets.part.base, row.plateThicknessMm);
+    const judgedBy = { part: targets.part.target, squareness: targets.squareness.target };
+    const result = readableComputation(() => testCutResult(row.sizes, policy), TEST_CUT_SHAPE);
+    if (!result) return toTestCutResponse(row, null, 'outside-target', judgedBy, locked, []);
     const within = result.parts.every((p) => p.within) && result.squareness.mmPerMetre <= targets.squareness.base;
     const status: FrameStatus = within ? 'within-target' : 'outside-target';
-    return toTestCutResponse(row, result, status, { part: targets.part.target, squareness: targets.squareness.target }, locked);
+    const warnings = testCutWarnings(result, { policy, targetSource: targets.part.target.source, resolutionMm: row.resolutionMm, lengthUnit: row.lengthUnit });
+    return toTestCutResponse(row, result, status, judgedBy, locked, warnings);
   }
+}
+
+/**
+ * The test cut's table for the certificate, in the cut's lengthUnit. Lines come in pairs, one pair
+ * per part in the order outside X, outside Y, circle X, circle Y:
+ * - line 2k, label = the part ("Outside size in X"): one point [nominal size, deviation after kerf];
+ * - line 2k + 1, label = "±<tolerance> <unit>: <where the tolerance comes from>": two points
+ *   [nominal, −tolerance] and [nominal, +tolerance], a bar a chart can draw behind the deviation.
+ * A table reads: part, nominal (x of either line), deviation (y of line 2k), tolerance (y of the
+ * second point of line 2k + 1), basis (label of line 2k + 1).
+ */
+export function partTableSeries(r: TestCutResult, u: TestCutRow['lengthUnit']): CheckSeries {
+  const at = (mm: number) => fromMm(mm, u);
+  return {
+    title: 'Test-cut part sizes after kerf: deviation and tolerance',
+    x: { label: 'Nominal size', unit: u },
+    y: { label: 'Deviation from nominal', unit: u },
+    lines: r.parts.flatMap((p) => [
+      { label: p.label, points: [[at(p.nominalMm), at(p.deviationMm)]] as [number, number][] },
+      { label: `±${show(p.toleranceMm, u)}: ${p.toleranceBasis}`, points: [[at(p.nominalMm), -at(p.toleranceMm)], [at(p.nominalMm), at(p.toleranceMm)]] as [number, number][] },
+    ]),
+  };
 }

@@ -21,7 +21,10 @@ export const diagonalChecks = pgTable(
     id: id(),
     workshopId: uuid('workshop_id').notNull().references(() => workshops.id),
     machineId: uuid('machine_id').notNull().references(() => machines.id),
-    unit: text('unit').$type<EnteredUnit>().notNull(),
+    /** Unit the sides, diagonals and gantry span were entered in. */
+    lengthUnit: text('length_unit').$type<EnteredUnit>().notNull().default('mm'),
+    /** Smallest step of the tape or rule the diagonals were read with, mm (null: not recorded). */
+    resolutionMm: doublePrecision('resolution_mm'),
     sideXMm: doublePrecision('side_x_mm').notNull(),
     sideYMm: doublePrecision('side_y_mm').notNull(),
     diagonal1Mm: doublePrecision('diagonal1_mm').notNull(),
@@ -46,7 +49,12 @@ export const bedGrids = pgTable(
     id: id(),
     workshopId: uuid('workshop_id').notNull().references(() => workshops.id),
     machineId: uuid('machine_id').notNull().references(() => machines.id),
-    unit: text('unit').$type<EnteredUnit>().notNull(),
+    /** Unit the grid positions were entered in (stored in mm). */
+    lengthUnit: text('length_unit').$type<EnteredUnit>().notNull().default('mm'),
+    /** Unit the heights were read in (stored in mm). */
+    readingUnit: text('reading_unit').$type<EnteredUnit>().notNull().default('mm'),
+    /** Smallest step of the height gauge, mm (null: not recorded). */
+    resolutionMm: doublePrecision('resolution_mm'),
     rows: integer('rows'),
     columns: integer('columns'),
     points: jsonb('points').$type<BedGridPointMm[]>().notNull(),
@@ -74,7 +82,12 @@ export const testCuts = pgTable(
     id: id(),
     workshopId: uuid('workshop_id').notNull().references(() => workshops.id),
     machineId: uuid('machine_id').notNull().references(() => machines.id),
-    unit: text('unit').$type<EnteredUnit>().notNull(),
+    /** Unit the part sizes, diagonals, circle diameters, kerf and plate thickness were entered in. */
+    lengthUnit: text('length_unit').$type<EnteredUnit>().notNull().default('mm'),
+    /** Thickness of the plate cut, mm (null on cuts recorded before it was asked). */
+    plateThicknessMm: doublePrecision('plate_thickness_mm'),
+    /** Smallest step of the caliper or rule the sizes were read with, mm (null: not recorded). */
+    resolutionMm: doublePrecision('resolution_mm'),
     sizes: jsonb('sizes').$type<TestCutSizesMm>().notNull(),
     note: text('note').notNull().default(''),
     ...recorded,

@@ -1,28 +1,41 @@
 import { Type } from 'class-transformer';
 import { ArrayMaxSize, ArrayMinSize, IsArray, IsInt, IsObject, Max, Min, ValidateNested } from 'class-validator';
 import type { LengthUnit } from '../../engine/units.js';
-import { FiniteNumber, OptionalNote, OptionalUnit } from './fields.js';
+import { LengthUnitField, ReadingUnitField } from '../../common/unit-fields.js';
+import { FiniteNumber, NoSingleUnit, OptionalNote, OptionalPositive } from './fields.js';
 import { Optional } from '../../common/optional.js';
 
 export const MAX_GRID_POINTS = 2500;
 
 export class GridPointDto {
-  /** Position across the bed, mm. */
+  /** Position across the bed, in lengthUnit. */
   @FiniteNumber('points[].x')
   x: number;
 
-  /** Position along the bed, mm. */
+  /** Position along the bed, in lengthUnit. */
   @FiniteNumber('points[].y')
   y: number;
 
-  /** Height at the point, in the grid's unit. */
+  /** Height at the point as the gantry-carried gauge reads it, in readingUnit. */
   @FiniteNumber('points[].z')
   z: number;
 }
 
 export class CreateBedGridDto {
-  @OptionalUnit()
-  unit?: LengthUnit;
+  /** Unit of the grid positions x and y (mm when absent). */
+  @LengthUnitField()
+  lengthUnit?: LengthUnit;
+
+  /** Unit of the heights z and of the gauge's resolution (mm when absent). */
+  @ReadingUnitField()
+  readingUnit?: LengthUnit;
+
+  @NoSingleUnit()
+  unit?: unknown;
+
+  /** Smallest step of the height gauge, in readingUnit. */
+  @OptionalPositive('resolution')
+  resolution?: number;
 
   @Optional()
   @IsInt({ message: 'rows must be a whole number' })

@@ -1,10 +1,11 @@
 import type { LengthUnit } from '../../engine/units.js';
-import { OptionalNote, OptionalUnit, PositiveLength } from './fields.js';
+import { LengthUnitField } from '../../common/unit-fields.js';
+import { NoSingleUnit, OptionalNote, OptionalPositive, PositiveLength } from './fields.js';
 import { Optional } from '../../common/optional.js';
 
 /**
  * A rectangle the machine marked or cut (or the frame): its two sides, both diagonals and the
- * gantry span, all in `unit` (mm when absent). Diagonal 1 runs from the X0 Y0 corner to the far
+ * gantry span, all in `lengthUnit` (mm when absent). Diagonal 1 runs from the X0 Y0 corner to the far
  * corner, diagonal 2 from the X-far Y0 corner to the X0 Y-far corner.
  */
 export class CreateDiagonalCheckDto {
@@ -24,8 +25,15 @@ export class CreateDiagonalCheckDto {
   @PositiveLength('gantrySpan')
   gantrySpan?: number;
 
-  @OptionalUnit()
-  unit?: LengthUnit;
+  /** Smallest step of the tape or rule the diagonals were read with, in lengthUnit. */
+  @OptionalPositive('resolution')
+  resolution?: number;
+
+  @LengthUnitField()
+  lengthUnit?: LengthUnit;
+
+  @NoSingleUnit()
+  unit?: unknown;
 
   @OptionalNote()
   note?: string;

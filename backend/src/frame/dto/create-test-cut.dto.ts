@@ -2,7 +2,8 @@ import { Type } from 'class-transformer';
 import { IsIn, IsNumber, IsObject, IsPositive, Max, Min, ValidateNested } from 'class-validator';
 import type { CircleKind } from '../../database/schema/frame.js';
 import type { LengthUnit } from '../../engine/units.js';
-import { OptionalNote, OptionalUnit, PositiveLength } from './fields.js';
+import { LengthUnitField } from '../../common/unit-fields.js';
+import { NoSingleUnit, OptionalNote, OptionalPositive, PositiveLength } from './fields.js';
 import { Optional } from '../../common/optional.js';
 
 export class TestCutNominalDto {
@@ -40,7 +41,7 @@ export class TestCutMeasuredDto {
   @Optional()
   @IsNumber({ allowNaN: false, allowInfinity: false }, { message: 'measured.kerf must be a number' })
   @Min(0, { message: 'measured.kerf must not be negative' })
-  @Max(25, { message: 'measured.kerf must be at most 25 mm' })
+  @Max(1_000_000, { message: 'measured.kerf is too large' })
   kerf?: number;
 }
 
@@ -56,10 +57,22 @@ export class StepsPerMmDto {
   y?: number;
 }
 
-/** Commanded and measured sizes of the test cut, lengths in `unit` (mm when absent). */
+/** Commanded and measured sizes of the test cut, lengths in `lengthUnit` (mm when absent). */
 export class CreateTestCutDto {
-  @OptionalUnit()
-  unit?: LengthUnit;
+  /** Unit of every size, diagonal, diameter, kerf, plate thickness and resolution (mm when absent). */
+  @LengthUnitField()
+  lengthUnit?: LengthUnit;
+
+  @NoSingleUnit()
+  unit?: unknown;
+
+  /** Thickness of the plate cut, in lengthUnit: with the part size it picks the ISO 9013 band. */
+  @OptionalPositive('plateThickness')
+  plateThickness?: number;
+
+  /** Smallest step of the caliper or rule the sizes were read with, in lengthUnit. */
+  @OptionalPositive('resolution')
+  resolution?: number;
 
   @IsObject({ message: 'nominal must be {x, y, circle}' })
   @ValidateNested()
