@@ -50,7 +50,7 @@ DATABASE_OWNER_URL="$OWNER_URL" DATABASE_URL="$APP_URL" node "$OUT/backend/src/d
 say "Starting the product on :$PRODUCT_PORT and the bare baseline on :$BARE_PORT…"
 NODE_ENV=production SESSION_SECRET="$(secret_file "$TMP/session-secret")" PORT="$PRODUCT_PORT" \
   DATABASE_URL="$APP_URL" DATABASE_OWNER_URL="$OWNER_URL" RAILWRIGHT_DATA="$TMP/data" RAILWRIGHT_SEED=off FRONTEND_DIST="" \
-  node "$OUT/backend/src/main.js" >"$TMP/product.log" 2>&1 &
+  BENCH_LOOP_FILE="$TMP/loop.log" node --import "$OUT/backend/bench/server/loop-monitor.js" "$OUT/backend/src/main.js" >"$TMP/product.log" 2>&1 &
 PIDS+=($!)
 BARE_PORT="$BARE_PORT" DATABASE_URL="$APP_URL" node "$OUT/backend/bench/server/bare-server.js" >"$TMP/bare.log" 2>&1 &
 PIDS+=($!)
@@ -67,7 +67,7 @@ say "Measuring (about 3 minutes; keep the machine otherwise idle for figures wor
 status=0
 # The page's sizes are read from the frontend build beside a private build, or frontend/dist.
 if [ -n "${BENCH_BUILD:-}" ] && [ -d "$BENCH_BUILD/frontend-dist" ]; then export FRONTEND_DIST="$BENCH_BUILD/frontend-dist"; fi
-BENCH_PRODUCT_URL="http://127.0.0.1:$PRODUCT_PORT" BENCH_BARE_URL="http://127.0.0.1:$BARE_PORT" BENCH_OWNER_DATABASE_URL="$OWNER_URL" \
+BENCH_LOOP_FILE="$TMP/loop.log" BENCH_PRODUCT_URL="http://127.0.0.1:$PRODUCT_PORT" BENCH_BARE_URL="http://127.0.0.1:$BARE_PORT" BENCH_OWNER_DATABASE_URL="$OWNER_URL" \
   node "$BENCH" || status=$?
 if [ "$status" != 0 ]; then tail -n 30 "$TMP/product.log" "$TMP/bare.log" >&2; fi
 exit "$status"

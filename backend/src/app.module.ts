@@ -3,6 +3,7 @@ import { APP_INTERCEPTOR } from '@nestjs/core';
 import { CommandTransactionInterceptor } from './database/command-transaction.interceptor.js';
 import { AuthModule } from './auth/auth.module.js';
 import { DatabaseModule } from './database/database.module.js';
+import { EngineWorkerModule } from './engine-worker/engine-worker.module.js';
 import { HealthModule } from './health/health.module.js';
 import { PeopleModule } from './people/people.module.js';
 import { RecordsModule } from './records/records.module.js';
@@ -23,6 +24,7 @@ import { HolePatternsModule } from './hole-patterns/hole-patterns.module.js';
 @Module({
   imports: [
     DatabaseModule,
+    EngineWorkerModule,
     AuthModule,
     HealthModule,
     PeopleModule,

@@ -3,6 +3,7 @@ import { randomRailSweep } from '../../src/engine/seeded-random.js';
 import { loadAutocannon, round, type Autocannon, type AutocannonRequest, type AutocannonResult } from './autocannon.js';
 import { productJson } from './bench-seed.js';
 import type { BenchContext, BenchRow } from './bench-types.js';
+import { eventLoopDuringLargeBodies } from './scenarios-event-loop.js';
 
 /**
  * The product's hot writes against the bare baseline doing the same work: a rail sweep and a
@@ -113,6 +114,7 @@ export async function writeScenarios(ctx: BenchContext & { userId: string; userN
   }
 
   rows.push(...(await healthWhileFitting(autocannon, ctx)));
+  rows.push(...(await eventLoopDuringLargeBodies(ctx)));
   return rows;
 }
 

@@ -6,7 +6,8 @@ import { fileURLToPath } from 'node:url';
 import { Piscina } from 'piscina';
 import { EngineInputError } from '../engine/engine-input-error.js';
 import { runEngineTask, taskSize, type EngineTask, type EngineTaskResult } from './engine-tasks.js';
-import type { WorkerAnswer } from './engine-worker.js';
+import type { StringifyJsonTask, WorkerAnswer, WorkerTask } from './engine-worker.js';
+import { packNumberArrays, unpackNumberArrays } from './number-arrays.js';
 
 /** Up to this many points a computation stays on the event loop: a thread hand-off costs more than it. */
 export const INLINE_MAX_POINTS = 5_000;
@@ -35,9 +36,17 @@ export class EnginePool implements OnModuleInit, OnModuleDestroy {
 
   async run<K extends EngineTask['kind']>(task: EngineTask & { kind: K }): Promise<EngineTaskResult<K>> {
     if (taskSize(task) <= INLINE_MAX_POINTS || !this.threaded) return runEngineTask(task) as EngineTaskResult<K>;
-    const answer = await this.worker(task);
+    const answer = await this.worker(packNumberArrays(task) as WorkerTask);
     if (!answer.ok) throw new EngineInputError(answer.message, answer.field);
-    return answer.result as EngineTaskResult<K>;
+    return unpackNumberArrays(answer.result) as EngineTaskResult<K>;
+  }
+
+  /** A response as JSON bytes, compressed with `encoding` when given, written in the worker thread. */
+  async serialize(value: unknown, encoding: StringifyJsonTask['encoding']): Promise<Buffer> {
+    const answer = await this.worker({ kind: 'stringify-json', value: packNumberArrays(value), encoding });
+    if (!answer.ok) throw new Error(answer.message);
+    const bytes = answer.result as Uint8Array;
+    return Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength);
   }
 
   /**
@@ -53,13 +62,13 @@ export class EnginePool implements OnModuleInit, OnModuleDestroy {
     fastify.addContentTypeParser('application/json', { parseAs: 'buffer' }, (req: FastifyRequest, body: Buffer | string, done) => {
       if (body.length < LARGE_BODY_BYTES) return inline(req, body as string, done); // it takes a Buffer as well (secure-json-parse reads either)
       this.worker({ kind: 'parse-json', body: body as Buffer }).then(
-        (answer) => (answer.ok ? done(null, answer.result) : done(Object.assign(new SyntaxError(`Body is not valid JSON: ${answer.message}`), { statusCode: 400 }), undefined)),
+        (answer) => (answer.ok ? done(null, unpackNumberArrays(answer.result)) : done(Object.assign(new SyntaxError(`Body is not valid JSON: ${answer.message}`), { statusCode: 400 }), undefined)),
         (err: Error) => done(err, undefined),
       );
     });
   }
 
-  private worker(task: Parameters<typeof import('./engine-worker.js').default>[0]): Promise<WorkerAnswer> {
+  private worker(task: WorkerTask): Promise<WorkerAnswer> {
     if (!this.pool) {
       this.logger.log('Large calculations run in a worker thread');
       this.pool = new Piscina({ filename: this.workerFile, minThreads: 1, maxThreads: 1, idleTimeout: 60_000 });
