@@ -1,36 +1,35 @@
 import type { NestFastifyApplication } from '@nestjs/platform-fastify';
+import { sql } from 'drizzle-orm';
+import { DRIZZLE, type Database } from '../src/database/database.tokens.js';
 import { createTestApp, createTestWorkshop, type TestWorkshop } from './helpers/test-app.js';
 import { newAxis, newMachine, rackAxis, screwAxis } from './helpers/drives.js';
+import { readProgram } from './support/program-reader.js';
 
-/** A tiny RS-274 reader for what the test programs use: words after stripping (comments). */
+/** The program read back by an independent RS-274 reader and simulated (support/program-reader.ts). */
 function parseProgram(text: string, letter: string) {
-  let pos: number | null = null;
-  let feed: number | null = null;
-  const moves: { from: number | null; to: number; code: string; feed: number | null }[] = [];
-  const readings: { at: number; approach: 'up' | 'down' }[] = [];
-  const stops: number[] = [];
-  const words = new Set<string>();
-  let lastMoveDir: 'up' | 'down' | null = null;
-  for (const raw of text.split('\n')) {
-    const line = raw.replace(/\([^)]*\)/g, '').trim();
-    if (!line || line === '%') continue;
-    const tokens = line.split(/\s+/);
-    const codes = tokens.filter((t) => /^[GM]\d+$/.test(t));
-    codes.forEach((c) => words.add(c));
-    for (const t of tokens) if (!/^[GMFP]\d+(\.\d+)?$/.test(t) && !new RegExp(`^${letter}-?\\d+\\.\\d{3}$`).test(t)) throw new Error(`unexpected word ${t} in "${raw}"`);
-    const f = tokens.find((t) => t.startsWith('F'));
-    if (f) feed = Number(f.slice(1));
-    const axisWord = tokens.find((t) => t.startsWith(letter));
-    if (axisWord && (codes.includes('G0') || codes.includes('G1'))) {
-      const to = Number(axisWord.slice(1));
-      if (pos !== null && to !== pos) lastMoveDir = to > pos ? 'up' : 'down';
-      moves.push({ from: pos, to, code: codes.includes('G0') ? 'G0' : 'G1', feed: codes.includes('G1') ? feed : null });
-      pos = to;
-    }
-    if (codes.includes('G4')) readings.push({ at: pos!, approach: lastMoveDir! });
-    if (codes.includes('M0')) stops.push(pos!);
+  const run = readProgram(text, letter);
+  const moves = run.moves.map((m) => ({ from: m.fromMm, to: m.toMm, code: m.code, feed: m.feedMmPerMin }));
+  const readings = run.stops.map((s) => ({ at: s.atMm, approach: s.approach }));
+  return { ...run, moves, readings, stopsAt: run.stops.map((s) => s.atMm), words: run.codes };
+}
+
+/** What every program must keep, whatever its kind (RS-274/NGC modal groups; common practice for a safety line). */
+function expectSafeProgram(text: string, letter: string, travelMm: number, units: 'G20' | 'G21') {
+  const run = readProgram(text, letter);
+  expect(run.safetyAt).toBeGreaterThan(0);
+  // No motion or axis word before the safety line, and no word of any kind before it.
+  expect(run.firstMotionAt).toBeGreaterThan(run.safetyAt);
+  expect(run.blocks.slice(0, run.safetyAt).every((b) => b.words.length === 0)).toBe(true);
+  expect(run.modalAfterSafety).toMatchObject({ plane: 'G17', units, distance: 'G90', feedMode: 'G94', cutterComp: 'G40' });
+  expect(run.moves.length).toBeGreaterThan(0);
+  for (const m of run.moves) {
+    expect(m.toMm).toBeGreaterThanOrEqual(-1e-6);
+    expect(m.toMm).toBeLessThanOrEqual(travelMm + 1e-6);
   }
-  return { moves, readings, stops, words };
+  // Every comment is whole: nothing in it could end it early or open another.
+  for (const b of run.blocks) for (const c of b.comments) expect(c).not.toMatch(/[()\[\];%\r\n]/);
+  expect(text).not.toMatch(/\r/);
+  return run;
 }
 
 describe('test programs, speed check and travel envelope', () => {
@@ -56,14 +55,21 @@ describe('test programs, speed check and travel envelope', () => {
     expect(res.headers['content-type']).toMatch(/^text\/plain/);
     expect(res.headers['content-disposition']).toMatch(/^attachment; filename=".*-x-repeat-and-reverse\.nc"$/);
     const text = res.text;
-    expect(text).toMatch(/\(CAUTION: run this program with the plasma source or torch off, the spindle off/);
-    expect(text).toMatch(/hands, tools and people clear of the gantry/);
+    // The usual cautions (TRADE.md: moving gantry pinch points, E-stop, plasma off; common practice).
+    expect(text).toMatch(/\(CAUTIONS - the machine moves on its own while this program runs\.\)/);
+    expect(text).toMatch(/\(Plasma source off so the torch cannot fire, spindle off, laser off\.\)/);
+    expect(text).toMatch(/keep hands, tools and people clear of the gantry and its pinch points/);
+    expect(text).toMatch(/\(Keep the E-stop within reach/);
+    expect(text).toMatch(/\(WORK ZERO: before running, move the X axis to the end its travel is measured from\)/);
+    expect(text).toMatch(/Positive X moves away from that zero towards the far end/);
+    expect(text).toMatch(/\(The axis will move between X16\.000 and X884\.000 mm\.\)/);
     expect(text).toMatch(/\(Targets mm: 20, 215.3, 431.7, 640.2, 880\)/);
-    expect(text).toMatch(/\(Runs: 5 up and 5 down {2}Overrun: 4 mm\)/);
+    expect(text).toMatch(/\(Runs: 5 up and 5 down Overrun: 4 mm\)/);
     expect(text).toMatch(/\(Written: \d{4}-\d{2}-\d{2}\)/);
+    expectSafeProgram(text, 'X', 920, 'G21');
     const p = parseProgram(text, 'X');
-    expect([...p.words].sort()).toEqual(['G0', 'G1', 'G21', 'G4', 'G90', 'M2']);
-    expect(text.indexOf('G21')).toBeLessThan(text.indexOf('G0 '));
+    expect([...p.words].sort()).toEqual(['G0', 'G1', 'G17', 'G21', 'G4', 'G40', 'G80', 'G90', 'G94', 'M1', 'M2']);
+    // One optional stop at each target of each run, where the reading is taken.
     expect(p.readings).toHaveLength(5 * 2 * targets.length);
     for (let run = 0; run < 5; run++) {
       const up = p.readings.slice(run * 10, run * 10 + 5);
@@ -79,7 +85,7 @@ describe('test programs, speed check and travel envelope', () => {
     expect(Math.max(...positions)).toBe(880 + 4);
     expect(positions.filter((x) => x === 884)).toHaveLength(5);
     expect(p.moves.filter((m) => m.code === 'G1').every((m) => m.feed === 800)).toBe(true);
-    expect(text).toMatch(/G4 P3 /);
+    expect(text).toMatch(/^G4 P3$/m);
     expect(text.trim().split('\n').slice(-2)).toEqual(['M2', '%']);
   });
 
@@ -88,6 +94,7 @@ describe('test programs, speed check and travel envelope', () => {
     expect(res.status).toBe(200);
     expect(res.headers['content-disposition']).toMatch(/\.txt"$/);
     const p = parseProgram(res.text, 'X');
+    expectSafeProgram(res.text, 'X', 920, 'G21');
     const up = p.readings.slice(0, p.readings.length / 10);
     expect(up.length).toBeGreaterThanOrEqual(5);
     const at = up.map((r) => r.at);
@@ -105,10 +112,12 @@ describe('test programs, speed check and travel envelope', () => {
     expect(res.status).toBe(200);
     expect(res.headers['content-disposition']).toMatch(/travel-trial\.nc"$/);
     const p = parseProgram(res.text, 'X');
-    expect(p.words.has('M0')).toBe(true);
-    expect(p.stops).toEqual([10, 110, 310, 610, 860]);
+    expectSafeProgram(res.text, 'X', 920, 'G21');
+    expect(p.words.has('M0')).toBe(false);
+    // An optional stop at the start and at each distance: one per reading.
+    expect(p.stopsAt).toEqual([10, 110, 310, 610, 860]);
     // every measured position is reached moving up, from the start approached from below
-    const arrivals = p.moves.filter((m) => p.stops.slice(1).includes(m.to));
+    const arrivals = p.moves.filter((m) => p.stopsAt.slice(1).includes(m.to));
     expect(arrivals.every((m) => m.from === 10)).toBe(true);
     const backToStart = p.moves.filter((m) => m.to === 10);
     expect(backToStart.every((m) => m.from === 5)).toBe(true);
@@ -124,13 +133,16 @@ describe('test programs, speed check and travel envelope', () => {
     [{ kind: 'positioning', targets: '100,50,200' }, /targets must rise along the axis/],
     [{ kind: 'positioning', targets: '100' }, /targets needs at least 2 positions/],
     [{ kind: 'positioning', targets: '100,500,918' }, /beyond its measured travel of 920 mm/],
-    [{ kind: 'positioning', targets: '2,500' }, /below 0 mm/],
+    [{ kind: 'positioning', targets: '2,500' }, /below 0 of its work coordinates/],
+    [{ kind: 'positioning', lengthUnit: 'in', targets: '1,36.1' }, /targets with the overrun takes the axis to 36.29685 in, beyond its measured travel of 36.220472 in/],
+    [{ kind: 'positioning', lengthUnit: 'cm' }, /lengthUnit must be one of mm, um, in, thou/],
+    [{ kind: 'positioning', notes: 'x'.repeat(201) }, /notes must be at most 200 characters/],
     [{ kind: 'positioning', feed: 9000 }, /feed must not exceed the axis's fastest feed of 5000 mm\/min/],
-    [{ kind: 'positioning', feed: 'fast' }, /feed must be a number of mm\/min/],
+    [{ kind: 'positioning', feed: 'fast' }, /feed must be a number \(lengthUnit per minute\)/],
     [{ kind: 'travel', distances: 'far' }, /distances must be comma-separated numbers/],
     [{ kind: 'travel', distances: '100,-50' }, /distances must all be greater than zero/],
-    [{ kind: 'travel', start: 2 }, /start less the overrun takes the axis to -3.000 mm, below 0 mm/],
-    [{ kind: 'travel', start: 100, distances: '500,900' }, /distances takes the axis to 1000.000 mm, beyond its measured travel of 920 mm/],
+    [{ kind: 'travel', start: 2 }, /start less the overrun takes the axis to -3 mm, below 0 of its work coordinates/],
+    [{ kind: 'travel', start: 100, distances: '500,900' }, /distances takes the axis to 1000 mm, beyond its measured travel of 920 mm/],
     [{ kind: 'travel', letter: 'Q' }, /letter must be one of/],
     [{ kind: 'travel', format: 'pdf' }, /format must be nc or txt/],
   ])('test program %j is refused with 400 naming the field', async (query, message) => {
@@ -147,8 +159,112 @@ describe('test programs, speed check and travel envelope', () => {
     expect(JSON.stringify(res.body.message)).toMatch(/distances is required when the axis has no measured travel/);
     const ok = await ws.as.technician.get(`/api/axes/${id}/test-program?kind=travel&letter=y&distances=50,100`);
     expect(ok.status).toBe(200);
-    expect(parseProgram(ok.text, 'Y').stops).toEqual([5, 55, 105]);
+    expect(parseProgram(ok.text, 'Y').stopsAt).toEqual([5, 55, 105]);
     expect((await other.as.owner.get(`/api/axes/${id}/test-program?kind=travel&letter=Y&distances=50`)).status).toBe(404);
+  });
+
+  describe('text that reaches a program', () => {
+    const hostile = [
+      'Table\nG0 X-500',
+      'Table\r\nG0 X-500\rM3',
+      'Table (G0 X-500) and ) G0 X-500 (',
+      'Table ; G0 X-500',
+      'Table %\nG0 X-500\n%',
+      'Table [G0 X-500] {M3} <G0> #1=5 *7 / G0 X-500',
+      'Tablé µ – “quoted”\u0085G0 X-500\u2028G0 X-500',
+    ];
+
+    it.each(hostile)('a machine, axis and notes text %j cannot end a comment or make a new block', async (name) => {
+      const m = await newMachine(ws, 'router');
+      const axis = await newAxis(ws, m, screwAxis('X'));
+      const db = app.get<Database>(DRIZZLE);
+      // Written straight to the rows, so the test holds whatever the forms let through.
+      await db.execute(sql`update machines set name = ${name} where id = ${m}`);
+      await db.execute(sql`update axes set name = ${`X ${name}`} where id = ${axis}`);
+      const plain = await ws.as.technician.get(`/api/axes/${axis}/test-program`).query({ kind: 'positioning', targets: '20,400,880', runs: 2, letter: 'X' });
+      expect(plain.status).toBe(200);
+      const withNotes = await ws.as.technician.get(`/api/axes/${axis}/test-program`).query({ kind: 'positioning', targets: '20,400,880', runs: 2, letter: 'X', notes: name });
+      expect(withNotes.status).toBe(200);
+      for (const text of [plain.text, withNotes.text]) {
+        const run = expectSafeProgram(text, 'X', 920, 'G21');
+        expect(run.moves.every((m) => m.toMm !== -500)).toBe(true);
+        expect(run.codes.has('M3')).toBe(false);
+        // Only the program's own words, each block as written: % twice, comments, and the known words.
+        for (const b of run.blocks) for (const w of b.words) expect(w).toMatch(/^(G(0|1|4|17|21|40|80|90|94)|M(1|2)|X\d+(\.\d+)?|F\d+(\.\d+)?|P\d+(\.\d+)?)$/);
+        expect(text.split('\n').filter((l) => l === '%')).toHaveLength(2);
+        expect(text.split('\n').filter((l) => l !== '' && l !== '%').every((l) => /^(\(|G|M)/.test(l))).toBe(true);
+      }
+      // The notes add exactly one line to the header, and nothing else.
+      expect(withNotes.text.split('\n').length).toBe(plain.text.split('\n').length + 1);
+      expect(plain.headers['content-disposition']).toMatch(/^attachment; filename="[a-z0-9-]+\.nc"$/);
+    });
+  });
+
+  describe('an axis set up in inches', () => {
+    let inchAxis: string;
+    beforeAll(async () => {
+      inchAxis = await newAxis(ws, machineId, screwAxis('U'));
+      await app.get<Database>(DRIZZLE).execute(sql`update axes set length_unit = 'in' where id = ${inchAxis}`);
+    });
+
+    it('gets its program in G20: every coordinate and feed in inches, the same moves as in mm', async () => {
+      const res = await ws.as.technician.get(`/api/axes/${inchAxis}/test-program`).query({ kind: 'positioning', lengthUnit: 'in', targets: '1,10,20,30,35', runs: 2, overrun: 0.25, feed: 40 });
+      expect(res.status).toBe(200);
+      const run = expectSafeProgram(res.text, 'U', 920, 'G20');
+      expect(run.codes.has('G21')).toBe(false);
+      // 1 in = 25.4 mm exactly (NIST SP 811); the reader converts G20 coordinates back to mm.
+      expect(run.stops.slice(0, 5).map((s) => s.atMm)).toEqual([25.4, 254, 508, 762, 889].map((v) => expect.closeTo(v, 9)));
+      expect(Math.min(...run.moves.map((m) => m.toMm))).toBeCloseTo(0.75 * 25.4, 9);
+      expect(run.moves.filter((m) => m.code === 'G1').every((m) => Math.abs(m.feedMmPerMin! - 40 * 25.4) < 1e-9)).toBe(true);
+      expect(res.text).toMatch(/^G1 U10\.0000 F40$/m);
+      expect(res.text).toMatch(/\(Units: inches G20/);
+      // The same run asked in mm gives the same moves.
+      const mm = await ws.as.technician.get(`/api/axes/${inchAxis}/test-program`).query({ kind: 'positioning', targets: '25.4,254,508,762,889', runs: 2, overrun: 6.35, feed: 1016 });
+      const again = readProgram(mm.text, 'U');
+      expect(again.moves.map((m) => m.toMm)).toEqual(run.moves.map((m) => expect.closeTo(m.toMm, 6)));
+    });
+
+    it('a travel trial in inches keeps its stops where they were asked', async () => {
+      const res = await ws.as.technician.get(`/api/axes/${inchAxis}/test-program`).query({ kind: 'travel', lengthUnit: 'in', start: 0.5, distances: '4,12,24', overrun: 0.25 });
+      expect(res.status).toBe(200);
+      const run = expectSafeProgram(res.text, 'U', 920, 'G20');
+      expect(run.stops.map((s) => s.atMm / 25.4)).toEqual([0.5, 4.5, 12.5, 24.5].map((v) => expect.closeTo(v, 9)));
+    });
+  });
+
+  describe('the targets of the repeat-and-reverse run', () => {
+    it('one list for the program and the entry grid: the program reads at exactly the targets the route gives', async () => {
+      const t = await ws.as.viewer.get(`/api/axes/${xId}/test-targets`);
+      expect(t.status).toBe(200);
+      expect(t.body).toMatchObject({ lengthUnit: 'mm', overrun: 5, overrunMm: 5, runs: 5, reason: null });
+      expect(t.body.targets.length).toBeGreaterThanOrEqual(5);
+      expect(t.body.targetsMm).toEqual(t.body.targets);
+      expect(t.body.source).toMatch(/ISO 230-2/);
+      const prog = await ws.as.technician.get(`/api/axes/${xId}/test-program?kind=positioning`);
+      const run = readProgram(prog.text, 'X');
+      expect(run.stops.slice(0, t.body.targets.length).map((s) => s.atMm)).toEqual(t.body.targetsMm);
+      // M1 count = targets × runs × 2 directions: a stop at every reading and nowhere else.
+      expect(run.stops).toHaveLength(t.body.targets.length * t.body.runs * 2);
+      const wider = await ws.as.viewer.get(`/api/axes/${xId}/test-targets`).query({ overrun: 20 });
+      expect(Math.min(...wider.body.targetsMm)).toBe(40);
+      expect((await ws.as.viewer.get(`/api/axes/${xId}/test-targets`).query({ overrun: 0 })).status).toBe(400);
+    });
+
+    it('an inch axis gets its targets in inches, and an axis without travel says why the list is empty', async () => {
+      const inch = await newAxis(ws, machineId, screwAxis('V'));
+      await app.get<Database>(DRIZZLE).execute(sql`update axes set length_unit = 'in' where id = ${inch}`);
+      const t = await ws.as.viewer.get(`/api/axes/${inch}/test-targets`);
+      expect(t.body.lengthUnit).toBe('in');
+      t.body.targets.forEach((v: number, i: number) => {
+        expect(Math.abs(v * 10 - Math.round(v * 10))).toBeLessThan(1e-9);
+        expect(t.body.targetsMm[i]).toBeCloseTo(v * 25.4, 9);
+      });
+      const bare = await newAxis(ws, machineId, { ...screwAxis('W'), measuredTravelMm: undefined });
+      const none = await ws.as.viewer.get(`/api/axes/${bare}/test-targets`);
+      expect(none.body).toMatchObject({ targets: [], targetsMm: [] });
+      expect(none.body.reason).toMatch(/no measured travel/);
+      expect((await other.as.owner.get(`/api/axes/${xId}/test-targets`)).status).toBe(404);
+    });
   });
 
   describe('speed check', () => {
