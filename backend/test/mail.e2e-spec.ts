@@ -57,7 +57,10 @@ describe('mail: the fake SMTP server, the outbox, and set-your-password links', 
 
     const short = await anonymous(app).post('/api/auth/password-reset').send({ token, password: 'short' });
     expect(short.status).toBe(400);
-    expect(JSON.stringify(short.body.message)).toMatch(/password must be at least 10 characters/);
+    expect(JSON.stringify(short.body.message)).toMatch(/password must be at least 12 characters/);
+    // ASVS 2.1.1: 12 characters at least; eleven are refused.
+    const eleven = await anonymous(app).post('/api/auth/password-reset').send({ token, password: 'gantry true' });
+    expect(eleven.status).toBe(400);
 
     const set = await anonymous(app).post('/api/auth/password-reset').send({ token, password: 'gantry square and true' });
     expect(set.status).toBe(200);

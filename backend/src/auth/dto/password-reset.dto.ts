@@ -6,7 +6,7 @@ export class PasswordResetDto {
   token: string;
 
   @IsString({ message: 'password must be a string' })
-  @MinLength(10, { message: 'password must be at least 10 characters' })
+  @MinLength(12, { message: 'password must be at least 12 characters' })
   @MaxLength(200, { message: 'password must be at most 200 characters' })
   password: string;
 }

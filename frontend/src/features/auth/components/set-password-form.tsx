@@ -3,7 +3,7 @@ import { Alert, Box, Button, Stack, TextField, Typography } from '@mui/material'
 import { LoadingState } from '../../../components/states/loading-state';
 import { usePasswordLink, useSetPassword } from '../api/password-link';
 
-const MIN = 10;
+const MIN = 12;
 
 /** The page a new member reaches from the sign-in mail: choose a password, then sign in. */
 export function SetPasswordForm({ token, onDone }: { token: string; onDone: (email: string) => void }) {
