@@ -14,6 +14,7 @@ import { useMachine } from '../../features/machines/api/get-machine';
 import { useAxis } from '../../features/drives/api/get-axis';
 import { AxisFormDialog } from '../../features/drives/components/axis-form-dialog';
 import { AxisSummary } from '../../features/drives/components/axis-summary';
+import { BacklashSection } from '../../features/drives/components/backlash-section';
 import { PositioningSection } from '../../features/drives/components/positioning-section';
 import { SpeedCheckCard } from '../../features/drives/components/speed-check-card';
 import { TestProgramDialog } from '../../features/drives/components/test-program-dialog';
@@ -63,6 +64,7 @@ export default function AxisRoute() {
           </Box>
         </Box>
         <PositioningSection axis={a} mayRecord={mayRecord} />
+        <BacklashSection axis={a} mayRecord={mayRecord} />
         <EvidencePanel subjectType="axis" subjectId={a.id} title="Photos and files of this axis" what={`axis ${a.name}`} />
       </Stack>
       {mayRecord && <AxisFormDialog machineId={machineId} axis={a} open={editing} onClose={() => setEditing(false)} />}
