@@ -16,7 +16,7 @@ export function BacklashResult({ check, mayDelete }: { check: BacklashCheck; may
   const r = check.result;
   const show = (v: number) => `${v.toFixed(DIGITS[check.readingUnit])} ${ru}`;
   return (
-    <Paper variant="outlined" sx={{ p: 2 }} aria-label="Backlash result">
+    <Paper component="section" variant="outlined" sx={{ p: 2 }} aria-label="Backlash result">
       <Stack spacing={1.5}>
         <Box sx={{ display: 'flex', gap: 1.5, alignItems: 'center', flexWrap: 'wrap' }}>
           <DriveStatusChip status={check.status} />
