@@ -1,5 +1,11 @@
 import type { LengthUnit } from '../../lib/units';
 
+/** Something to know about a result that does not change its number (server: engine/warnings.ts). */
+export interface ResultWarning {
+  code: string;
+  message: string;
+}
+
 export type FrameStatus = 'within-target' | 'outside-target';
 
 export interface JudgedTarget {
@@ -12,16 +18,20 @@ export interface JudgedTarget {
 interface RecordCommon {
   id: string;
   machineId: string;
-  unit: LengthUnit;
+  /** Unit the record's lengths were entered in. */
+  lengthUnit: LengthUnit;
   note: string;
   recordedBy: { id: string | null; name: string };
   recordedAt: string;
   status: FrameStatus;
   target: JudgedTarget;
   locked: boolean;
+  warnings: ResultWarning[];
 }
 
 export interface DiagonalCheck extends RecordCommon {
+  /** Smallest step of the tape or rule, in lengthUnit (null: not recorded). */
+  resolution: number | null;
   input: { sideX: number; sideY: number; diagonal1: number; diagonal2: number; gantrySpan: number | null };
   inputMm: { sideX: number; sideY: number; diagonal1: number; diagonal2: number; gantrySpan: number | null };
   result: {
@@ -46,14 +56,24 @@ export interface GridPointResult {
   yMm: number;
   zMm: number;
   residualMm: number;
+  zoneResidualMm: number;
+  judgedHeightMm: number;
 }
 
+export type BedJudgedBasis = 'height-range' | 'minimum-zone';
+
 export interface BedGrid extends RecordCommon {
+  /** Unit the heights were read in. */
+  readingUnit: LengthUnit;
+  resolution: number | null;
   rows: number;
   columns: number;
   points: { x: number; y: number; z: number }[];
   result: {
     leastSquares: { a: number; b: number; c: number; flatness: number; flatnessMm: number };
+    minimumZone: { a: number; b: number; c: number; flatnessMm: number };
+    heightRange: { rangeMm: number };
+    judged: { basis: BedJudgedBasis; label: string; valueMm: number };
     tilt: { xMmPerMetre: number; yMmPerMetre: number; mmPerMetre: number; directionDeg: number };
     points: GridPointResult[];
     highest: GridPointResult;
@@ -83,11 +103,18 @@ export interface PartSizeCheck {
   afterKerfMm: number;
   deviationMm: number;
   toleranceMm: number;
+  toleranceBasis: string;
+  sizeBandMm: [number, number] | null;
+  thicknessBandMm: [number, number] | null;
+  outsideBand: string | null;
   within: boolean;
 }
 
 export interface TestCut extends RecordCommon {
   targets: { part: JudgedTarget; squareness: JudgedTarget };
+  plateThickness: number | null;
+  plateThicknessMm: number | null;
+  resolution: number | null;
   nominal: { x: number; y: number; circle: number };
   measured: { x: number; y: number; diagonal1: number; diagonal2: number; circleX: number; circleY: number; kerf: number };
   circleKind: 'hole' | 'disc';

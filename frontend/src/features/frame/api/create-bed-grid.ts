@@ -4,10 +4,13 @@ import type { LengthUnit } from '../../../lib/units';
 import { frameKeys, type BedGrid } from '../types';
 
 export interface BedGridInput {
-  unit: LengthUnit;
+  lengthUnit: LengthUnit;
+  readingUnit: LengthUnit;
+  /** Smallest step of the height gauge, in readingUnit. */
+  resolution?: number;
   rows: number;
   columns: number;
-  /** Positions in mm, heights in `unit`, row by row. */
+  /** Positions in lengthUnit, heights in readingUnit, row by row. */
   points: { x: number; y: number; z: number }[];
   note?: string;
 }

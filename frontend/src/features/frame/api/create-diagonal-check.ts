@@ -9,7 +9,9 @@ export interface DiagonalCheckInput {
   diagonal1: number;
   diagonal2: number;
   gantrySpan?: number;
-  unit: LengthUnit;
+  /** Smallest step of the tape or rule, in lengthUnit. */
+  resolution?: number;
+  lengthUnit: LengthUnit;
   note?: string;
 }
 

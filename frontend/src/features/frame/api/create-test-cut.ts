@@ -4,7 +4,11 @@ import type { LengthUnit } from '../../../lib/units';
 import { frameKeys, type TestCut } from '../types';
 
 export interface TestCutInput {
-  unit: LengthUnit;
+  lengthUnit: LengthUnit;
+  /** Thickness of the plate cut, in lengthUnit. */
+  plateThickness?: number;
+  /** Smallest step of the caliper or rule, in lengthUnit. */
+  resolution?: number;
   nominal: { x: number; y: number; circle: number };
   measured: { x: number; y: number; diagonal1: number; diagonal2: number; circleX: number; circleY: number; kerf?: number };
   circleKind: 'hole' | 'disc';

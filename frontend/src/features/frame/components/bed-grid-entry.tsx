@@ -2,12 +2,12 @@ import { useRef, useState, type ClipboardEvent, type FormEvent, type KeyboardEve
 import { Alert, Box, Button, InputBase, Stack, Table, TableBody, TableCell, TableContainer, TableHead, TableRow, TextField, Typography } from '@mui/material';
 import { IndicatorPanel } from '../../../components/indicator-input/indicator-panel';
 import { useIndicatorInput } from '../../../components/indicator-input/use-indicator-input';
-import { UNIT_LABELS, type LengthUnit } from '../../../lib/units';
+import { fromMm, toMm, UNIT_LABELS, type LengthUnit } from '../../../lib/units';
+import { UnitFamilySelect } from '../../../components/form/unit-select';
 import { useCreateBedGrid } from '../api/create-bed-grid';
 import type { BedGrid } from '../types';
 import { evenPositions } from '../utils/grid-labels';
-import { parseNumber } from './number-field';
-import { UnitSelect } from './unit-select';
+import { NumberField, parseNumber } from './number-field';
 
 const MAX = 20;
 const cellSx = { width: '100%', fontSize: 14, '& input': { textAlign: 'right', py: 0.75, px: 1 }, border: '1px solid #d8d3c7', borderRadius: 1, bgcolor: '#fff' };
@@ -20,10 +20,25 @@ const resize = <T,>(list: T[], n: number, fill: (i: number) => T) => Array.from(
  */
 export function BedGridEntry({ machineId, workArea, onSaved }: { machineId: string; workArea: { x: number; y: number }; onSaved: (g: BedGrid) => void }) {
   const [unit, setUnit] = useState<LengthUnit>('mm');
+  const [lengthUnit, setLengthUnit] = useState<LengthUnit>('mm');
+  const [resolution, setResolution] = useState('');
   const [rows, setRows] = useState(3);
   const [columns, setColumns] = useState(4);
   const [xs, setXs] = useState<string[]>(() => evenPositions(4, workArea.x).map(String));
   const [ys, setYs] = useState<string[]>(() => evenPositions(3, workArea.y).map(String));
+  const lu = UNIT_LABELS[lengthUnit];
+  // Even positions over the work area in the chosen position unit (whole mm, or 0.01 in).
+  const spread = (n: number, lengthMm: number, u = lengthUnit) => evenPositions(n, lengthMm).map((mm) => String(Number(fromMm(mm, u).toFixed(u === 'in' ? 2 : 0))));
+  // Positions typed so far keep their place on the bed when the unit changes.
+  const changeLengthUnit = (next: LengthUnit) => {
+    const convert = (list: string[]) => list.map((t) => {
+      const v = parseNumber(t);
+      return v === null ? t : String(Number(fromMm(toMm(v, lengthUnit), next).toFixed(next === 'in' ? 3 : next === 'mm' ? 1 : 0)));
+    });
+    setXs(convert);
+    setYs(convert);
+    setLengthUnit(next);
+  };
   const [z, setZ] = useState<string[][]>(() => Array.from({ length: 3 }, () => Array(4).fill('')));
   const [problem, setProblem] = useState<string | null>(null);
   const [note, setNote] = useState('');
@@ -35,8 +50,8 @@ export function BedGridEntry({ machineId, workArea, onSaved }: { machineId: stri
     const nc = Math.max(1, Math.min(MAX, c || 1));
     setRows(nr);
     setColumns(nc);
-    if (nc !== columns) setXs(evenPositions(nc, workArea.x).map(String));
-    if (nr !== rows) setYs(evenPositions(nr, workArea.y).map(String));
+    if (nc !== columns) setXs(spread(nc, workArea.x));
+    if (nr !== rows) setYs(spread(nr, workArea.y));
     setZ((old) => resize(old, nr, () => []).map((row) => resize(row, nc, () => '')));
   };
 
@@ -49,7 +64,7 @@ export function BedGridEntry({ machineId, workArea, onSaved }: { machineId: stri
       const [r, c] = cell ? cell.split('-').map(Number) : (empty ?? [-1, -1]);
       if (r < 0) return null;
       setHeight(r, c, text);
-      return { cell: `${r}-${c}`, label: `row ${r + 1}, column ${c + 1} (X ${xs[c]}, Y ${ys[r]} mm)`, undo: () => setHeight(r, c, '') };
+      return { cell: `${r}-${c}`, label: `row ${r + 1}, column ${c + 1} (X ${xs[c]}, Y ${ys[r]} ${lu})`, undo: () => setHeight(r, c, '') };
     },
   });
 
@@ -86,9 +101,11 @@ export function BedGridEntry({ machineId, workArea, onSaved }: { machineId: stri
     const px = xs.map(parseNumber);
     const py = ys.map(parseNumber);
     const bad = px.findIndex((v) => v === null);
-    if (bad >= 0) return setProblem(`X position of column ${bad + 1} must be a number of mm`);
+    if (bad >= 0) return setProblem(`X position of column ${bad + 1} must be a number of ${lu}`);
     const badY = py.findIndex((v) => v === null);
-    if (badY >= 0) return setProblem(`Y position of row ${badY + 1} must be a number of mm`);
+    if (badY >= 0) return setProblem(`Y position of row ${badY + 1} must be a number of ${lu}`);
+    const res = parseNumber(resolution);
+    if (resolution.trim() && (res === null || res <= 0)) return setProblem('Gauge resolution must be greater than zero, or left empty');
     const points = [];
     for (let r = 0; r < rows; r++) {
       for (let c = 0; c < columns; c++) {
@@ -101,7 +118,7 @@ export function BedGridEntry({ machineId, workArea, onSaved }: { machineId: stri
       }
     }
     setProblem(null);
-    create.mutate({ unit, rows, columns, points, note: note.trim() || undefined }, { onSuccess: onSaved });
+    create.mutate({ lengthUnit, readingUnit: unit, resolution: res ?? undefined, rows, columns, points, note: note.trim() || undefined }, { onSuccess: onSaved });
   };
 
   return (
@@ -110,10 +127,12 @@ export function BedGridEntry({ machineId, workArea, onSaved }: { machineId: stri
         <Box sx={{ display: 'flex', gap: 1.5, flexWrap: 'wrap' }}>
           <TextField label="Rows" type="number" value={rows} onChange={(e) => setSize(Number(e.target.value), columns)} slotProps={{ htmlInput: { min: 1, max: MAX } }} sx={{ width: 96 }} />
           <TextField label="Columns" type="number" value={columns} onChange={(e) => setSize(rows, Number(e.target.value))} slotProps={{ htmlInput: { min: 1, max: MAX } }} sx={{ width: 96 }} />
-          <UnitSelect label="Height unit" value={unit} onChange={setUnit} units={['mm', 'um', 'in', 'thou']} />
+          <UnitFamilySelect family="length" label="Position unit" value={lengthUnit} onChange={changeLengthUnit} />
+          <UnitFamilySelect family="reading" label="Height unit" value={unit} onChange={setUnit} />
+          <NumberField label="Gauge reads to" unit={UNIT_LABELS[unit]} value={resolution} onChange={(e) => setResolution(e.target.value)} sx={{ width: 170 }} />
         </Box>
         <Typography variant="body2" color="text.secondary">
-          Positions in mm; heights in {UNIT_LABELS[unit]}, from a gauge block or an indicator, any zero. Enter moves on, ↑ ↓ move between rows, a pasted block fills the grid.
+          Positions in {lu}; heights in {UNIT_LABELS[unit]}, read from a gauge or indicator carried by the gantry (in the torch or spindle holder), any zero. Enter moves on, ↑ ↓ move between rows, a pasted block fills the grid.
         </Typography>
         <IndicatorPanel indicator={indicator} />
         <TableContainer sx={{ maxWidth: '100%' }}>
@@ -125,7 +144,7 @@ export function BedGridEntry({ machineId, workArea, onSaved }: { machineId: stri
                 </TableCell>
                 {xs.map((x, c) => (
                   <TableCell key={c} sx={{ minWidth: 72 }}>
-                    <InputBase value={x} onChange={(e) => setXs((v) => v.map((old, i) => (i === c ? e.target.value : old)))} inputProps={{ 'aria-label': `X position of column ${c + 1} (mm)`, inputMode: 'decimal' }} sx={{ ...cellSx, bgcolor: '#f1eee6' }} />
+                    <InputBase value={x} onChange={(e) => setXs((v) => v.map((old, i) => (i === c ? e.target.value : old)))} inputProps={{ 'aria-label': `X position of column ${c + 1} (${lu})`, inputMode: 'decimal' }} sx={{ ...cellSx, bgcolor: '#f1eee6' }} />
                   </TableCell>
                 ))}
               </TableRow>
@@ -134,7 +153,7 @@ export function BedGridEntry({ machineId, workArea, onSaved }: { machineId: stri
               {ys.map((y, r) => (
                 <TableRow key={r}>
                   <TableCell>
-                    <InputBase value={y} onChange={(e) => setYs((v) => v.map((old, i) => (i === r ? e.target.value : old)))} inputProps={{ 'aria-label': `Y position of row ${r + 1} (mm)`, inputMode: 'decimal' }} sx={{ ...cellSx, bgcolor: '#f1eee6' }} />
+                    <InputBase value={y} onChange={(e) => setYs((v) => v.map((old, i) => (i === r ? e.target.value : old)))} inputProps={{ 'aria-label': `Y position of row ${r + 1} (${lu})`, inputMode: 'decimal' }} sx={{ ...cellSx, bgcolor: '#f1eee6' }} />
                   </TableCell>
                   {xs.map((_, c) => (
                     <TableCell key={c}>

@@ -11,6 +11,7 @@ import { SquarenessDrawing } from './squareness-drawing';
 import { SquaringHistory } from './squaring-history';
 import { UnreadableRecord } from '../../../components/unreadable-record';
 import { StatusChip } from './status-chip';
+import { ResultWarnings } from './result-warnings';
 
 /** Squareness from the diagonals: entry, the drawing of the latest (or chosen) check, and the history. */
 export function DiagonalCheckSection({ machineId, canRecord }: { machineId: string; canRecord: boolean }) {
@@ -63,14 +64,12 @@ export function DiagonalCheckSection({ machineId, canRecord }: { machineId: stri
                 outOfSquareRad={shown.result.outOfSquareRad}
                 longDiagonal={shown.result.longDiagonal}
                 correction={shown.result.correction}
-                unit={shown.unit}
+                unit={shown.lengthUnit}
               />
               <Alert severity={shown.result.correction.end ? 'info' : 'success'} icon={false}>
                 {shown.result.correction.instruction}
               </Alert>
-              {shown.result.warnings.map((w) => (
-                <Alert key={w} severity="warning">{w}</Alert>
-              ))}
+              <ResultWarnings warnings={shown.warnings} label="Diagonal check warnings" />
             </Stack>
           ) : (
             <Typography color="text.secondary">No diagonal check yet.</Typography>

@@ -6,14 +6,14 @@ import { DiagonalCheckSection } from './diagonal-check-section';
 import { TestCutSection } from './test-cut-section';
 
 /** The machine file's Frame tab: squareness, bed flatness and the test cut. */
-export function FramePanel({ machine }: { machine: { id: string; workArea: { x: number; y: number } } }) {
+export function FramePanel({ machine }: { machine: { id: string; kind: string; workArea: { x: number; y: number } } }) {
   const role = useMe().data?.role;
   // Builders square and level the frame; the test cut is for those who calibrate.
   return (
     <Stack spacing={3}>
       <DiagonalCheckSection machineId={machine.id} canRecord={canRecord(role)} />
-      <BedGridSection machineId={machine.id} workArea={machine.workArea} canRecord={canRecord(role)} />
-      <TestCutSection machineId={machine.id} canRecord={canCalibrate(role)} />
+      <BedGridSection machineId={machine.id} machineKind={machine.kind} workArea={machine.workArea} canRecord={canRecord(role)} />
+      <TestCutSection machineId={machine.id} machineKind={machine.kind} canRecord={canCalibrate(role)} />
     </Stack>
   );
 }

@@ -4,7 +4,7 @@ import { UNIT_LABELS, type LengthUnit } from '../../../lib/units';
 import { useCreateTestCut } from '../api/create-test-cut';
 import type { TestCut } from '../types';
 import { NumberField, parseNumber } from './number-field';
-import { UnitSelect } from './unit-select';
+import { UnitFamilySelect } from '../../../components/form/unit-select';
 
 const NOMINAL = [
   ['nx', 'Programmed X'],
@@ -22,9 +22,9 @@ const MEASURED = [
 type Key = (typeof NOMINAL)[number][0] | (typeof MEASURED)[number][0];
 
 /** Commanded and measured sizes of the acceptance cut: a large square with a circle. */
-export function TestCutForm({ machineId, onSaved }: { machineId: string; onSaved: (c: TestCut) => void }) {
+export function TestCutForm({ machineId, machineKind, onSaved }: { machineId: string; machineKind: string; onSaved: (c: TestCut) => void }) {
   const [unit, setUnit] = useState<LengthUnit>('mm');
-  const [v, setV] = useState<Record<Key | 'kerf' | 'sx' | 'sy', string>>({ nx: '', ny: '', nc: '', mx: '', my: '', d1: '', d2: '', cx: '', cy: '', kerf: '', sx: '', sy: '' });
+  const [v, setV] = useState<Record<Key | 'kerf' | 'sx' | 'sy' | 'plate' | 'res', string>>({ nx: '', ny: '', nc: '', mx: '', my: '', d1: '', d2: '', cx: '', cy: '', kerf: '', sx: '', sy: '', plate: '', res: '' });
   const [circleKind, setCircleKind] = useState<'hole' | 'disc'>('hole');
   const [note, setNote] = useState('');
   const [errors, setErrors] = useState<Partial<Record<string, string>>>({});
@@ -41,7 +41,7 @@ export function TestCutForm({ machineId, onSaved }: { machineId: string; onSaved
       if (x === null || x <= 0) found[k] = `${label} must be a length greater than zero`;
       else n[k] = x;
     }
-    const optional = (k: 'kerf' | 'sx' | 'sy', label: string, allowZero: boolean) => {
+    const optional = (k: 'kerf' | 'sx' | 'sy' | 'plate' | 'res', label: string, allowZero: boolean) => {
       if (!v[k].trim()) return undefined;
       const x = parseNumber(v[k]);
       if (x === null || x < 0 || (!allowZero && x === 0)) found[k] = `${label} must be ${allowZero ? 'zero or more' : 'greater than zero'}, or left empty`;
@@ -50,11 +50,15 @@ export function TestCutForm({ machineId, onSaved }: { machineId: string; onSaved
     const kerf = optional('kerf', 'Kerf', true);
     const sx = optional('sx', 'Steps per mm X', false);
     const sy = optional('sy', 'Steps per mm Y', false);
+    const plateThickness = optional('plate', 'Plate thickness', false);
+    const resolution = optional('res', 'Resolution', false);
     setErrors(found);
     if (Object.keys(found).length) return;
     create.mutate(
       {
-        unit,
+        lengthUnit: unit,
+        plateThickness,
+        resolution,
         nominal: { x: n.nx, y: n.ny, circle: n.nc },
         measured: { x: n.mx, y: n.my, diagonal1: n.d1, diagonal2: n.d2, circleX: n.cx, circleY: n.cy, kerf },
         circleKind,
@@ -72,7 +76,7 @@ export function TestCutForm({ machineId, onSaved }: { machineId: string; onSaved
       <Stack spacing={1.5}>
         {create.error && <Alert severity="error">{(create.error as Error).message}</Alert>}
         <Box sx={grid}>
-          <UnitSelect value={unit} onChange={setUnit} />
+          <UnitFamilySelect family="length" value={unit} onChange={setUnit} />
           <TextField select label="The circle is" value={circleKind} onChange={(e) => setCircleKind(e.target.value as 'hole' | 'disc')}>
             <MenuItem value="hole">a hole in the square</MenuItem>
             <MenuItem value="disc">a disc cut on its own</MenuItem>
@@ -83,6 +87,15 @@ export function TestCutForm({ machineId, onSaved }: { machineId: string; onSaved
         <Typography variant="h5" component="h4">As measured</Typography>
         <Box sx={grid}>
           {MEASURED.map(field)}
+          <NumberField
+            label="Plate thickness"
+            unit={u}
+            value={v.plate}
+            onChange={set('plate')}
+            error={!!errors.plate}
+            helperText={errors.plate ?? (machineKind === 'plasma' ? 'With each part size it picks the ISO 9013 tolerance band' : 'Material thickness, for the record')}
+          />
+          <NumberField label="Read to" unit={u} value={v.res} onChange={set('res')} error={!!errors.res} helperText={errors.res ?? 'Smallest step of the caliper or rule'} />
           <NumberField label="Kerf" unit={u} value={v.kerf} onChange={set('kerf')} error={!!errors.kerf} helperText={errors.kerf ?? 'Width the controller did not compensate; empty when compensation was on'} />
         </Box>
         <Typography variant="h5" component="h4">Steps per mm when cut (optional)</Typography>

@@ -4,6 +4,7 @@ import type { TestCut } from '../types';
 import { showDate, showLength, showSigned, showTarget } from '../utils/format';
 import { UnreadableRecord } from '../../../components/unreadable-record';
 import { StatusChip } from './status-chip';
+import { ResultWarnings } from './result-warnings';
 
 const SHORT: Record<string, string> = { 'outside-x': 'Outside X', 'outside-y': 'Outside Y', 'circle-x': 'Circle ⌀ along X', 'circle-y': 'Circle ⌀ along Y' };
 
@@ -18,6 +19,8 @@ const POINTS_TO: Record<NonNullable<TestCut['result']>['ovalityPointsTo'], strin
 export function TestCutResults({ cut, actions }: { cut: TestCut; actions?: ReactNode }) {
   const r = cut.result;
   const tol = cut.targets.part;
+  const u = cut.lengthUnit;
+  const digits = u === 'in' ? 4 : u === 'thou' ? 1 : u === 'um' ? 0 : 2;
   const heading = (
     <Box sx={{ display: 'flex', gap: 1.5, alignItems: 'center', flexWrap: 'wrap' }}>
       <Typography variant="h4" component="p">Test cut of {showDate(cut.recordedAt)}</Typography>
@@ -37,7 +40,12 @@ export function TestCutResults({ cut, actions }: { cut: TestCut; actions?: React
   return (
     <Stack spacing={2}>
       {heading}
-      {cut.note && <Typography variant="body2" color="text.secondary">{cut.note}</Typography>}
+      <Typography variant="body2" color="text.secondary">
+        Plate {cut.plateThicknessMm === null ? 'thickness not recorded' : showLength(cut.plateThicknessMm, u, digits)}
+        {cut.resolution !== null && ` · sizes read to ${cut.resolution} ${u === 'um' ? 'µm' : u}`}
+        {cut.note && ` · ${cut.note}`}
+      </Typography>
+      <ResultWarnings warnings={cut.warnings} label="Test cut warnings" />
       <TableContainer>
         <Table size="small" aria-label="Scale per axis" sx={{ '& td': { whiteSpace: 'nowrap' } }}>
           <TableHead>
@@ -54,12 +62,12 @@ export function TestCutResults({ cut, actions }: { cut: TestCut; actions?: React
             {(['x', 'y'] as const).map((k) => (
               <TableRow key={k}>
                 <TableCell>{k.toUpperCase()}</TableCell>
-                <TableCell align="right">{showLength(r[k].commandedMm, 'mm', 2)}</TableCell>
-                <TableCell align="right">{showLength(r[k].afterKerfMm, 'mm', 2)}</TableCell>
+                <TableCell align="right">{showLength(r[k].commandedMm, u, digits)}</TableCell>
+                <TableCell align="right">{showLength(r[k].afterKerfMm, u, digits)}</TableCell>
                 <TableCell align="right">
                   {r[k].errorPercent >= 0 ? '+' : '−'}
                   {Math.abs(r[k].errorPercent).toFixed(3)} %
-                  <Typography variant="caption" color="text.secondary" component="div">{showSigned(r[k].errorMm, 'mm', 2)}</Typography>
+                  <Typography variant="caption" color="text.secondary" component="div">{showSigned(r[k].errorMm, u, digits)}</Typography>
                 </TableCell>
                 <TableCell align="right">× {r[k].correctionFactor.toFixed(5)}</TableCell>
                 <TableCell align="right">{r[k].suggestedStepsPerMm === null ? '—' : `${r[k].suggestedStepsPerMm.toFixed(4)} steps/mm`}</TableCell>
@@ -80,7 +88,7 @@ export function TestCutResults({ cut, actions }: { cut: TestCut; actions?: React
           <Typography variant="body2" color="text.secondary">Target {showTarget(cut.targets.squareness)}</Typography>
         </Box>
         <Box>
-          <Typography variant="h5" component="h4">Ovality: {showLength(r.ovality, 'mm', 2)} · {POINTS_TO[r.ovalityPointsTo]}</Typography>
+          <Typography variant="h5" component="h4">Ovality: {showLength(r.ovality, u, digits)} · {POINTS_TO[r.ovalityPointsTo]}</Typography>
           <Typography variant="body2">{r.ovalityExplanation}</Typography>
         </Box>
       </Box>
@@ -94,26 +102,30 @@ export function TestCutResults({ cut, actions }: { cut: TestCut; actions?: React
               <TableCell align="right">Deviation</TableCell>
               <TableCell align="right">Tolerance</TableCell>
               <TableCell>Result</TableCell>
+              <TableCell>Tolerance from</TableCell>
             </TableRow>
           </TableHead>
           <TableBody>
             {r.parts.map((p) => (
               <TableRow key={p.part}>
                 <TableCell>{SHORT[p.part] ?? p.label}</TableCell>
-                <TableCell align="right">{showLength(p.nominalMm, 'mm', 2)}</TableCell>
-                <TableCell align="right">{showLength(p.afterKerfMm, 'mm', 2)}</TableCell>
-                <TableCell align="right" sx={{ color: p.within ? 'inherit' : 'error.main', fontWeight: p.within ? 400 : 600 }}>{showSigned(p.deviationMm, 'mm', 2)}</TableCell>
-                <TableCell align="right">± {showLength(p.toleranceMm, 'mm', 2)}</TableCell>
+                <TableCell align="right">{showLength(p.nominalMm, u, digits)}</TableCell>
+                <TableCell align="right">{showLength(p.afterKerfMm, u, digits)}</TableCell>
+                <TableCell align="right" sx={{ color: p.within ? 'inherit' : 'error.main', fontWeight: p.within ? 400 : 600 }}>{showSigned(p.deviationMm, u, digits)}</TableCell>
+                <TableCell align="right">± {showLength(p.toleranceMm, u, digits)}</TableCell>
                 <TableCell>{p.within ? 'within' : 'outside'}</TableCell>
+                <TableCell sx={{ whiteSpace: 'normal !important', minWidth: 220 }}>
+                  <Typography variant="body2" color="text.secondary">{p.toleranceBasis}</Typography>
+                </TableCell>
               </TableRow>
             ))}
           </TableBody>
         </Table>
       </TableContainer>
       <Typography variant="body2" color="text.secondary">
-        Tolerance ± {showTarget(tol)} · source: {tol.source ?? 'the machine’s target set'}
+        Target ± {showTarget(tol)} · source: {tol.source ?? 'the machine’s target set'}
       </Typography>
-      {[...r.notes, ...r.squareness.warnings].map((n) => (
+      {r.notes.map((n) => (
         <Alert key={n} severity="info">{n[0].toUpperCase() + n.slice(1)}.</Alert>
       ))}
     </Stack>

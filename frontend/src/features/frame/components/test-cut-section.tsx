@@ -9,7 +9,7 @@ import { TestCutResults } from './test-cut-results';
 import { DeleteRecordButton } from './delete-record-button';
 
 /** The acceptance cut: entry for technicians, results for everyone, earlier cuts to compare. */
-export function TestCutSection({ machineId, canRecord }: { machineId: string; canRecord: boolean }) {
+export function TestCutSection({ machineId, machineKind, canRecord }: { machineId: string; machineKind: string; canRecord: boolean }) {
   const cuts = useTestCuts(machineId);
   const [selectedId, setSelectedId] = useState<string | null>(null);
   if (cuts.isPending) return <LoadingState label="Loading test cuts…" />;
@@ -22,10 +22,12 @@ export function TestCutSection({ machineId, canRecord }: { machineId: string; ca
         Test cut
       </Typography>
       <Typography color="text.secondary" sx={{ mb: 2 }}>
-        Cut a large square with a circle in it and measure it: the outside sizes give each axis's scale (steps per mm), the diagonals squareness, and the circle's two diameters show an oval from backlash or unequal scale. Part sizes are judged against the ± tolerance of the target set.
+        Cut a large square with a circle in it and measure it: the outside sizes give each axis's scale (steps per mm), the diagonals squareness, and the circle's two diameters show an oval from backlash or unequal scale.{' '} {machineKind === 'plasma'
+          ? ' Each part size is judged by its ISO 9013 class 2 band: the tolerance grows with the part size and the plate thickness, scaled by the target set’s value for 35–125 mm parts in 3.15–6.3 mm plate.'
+          : ' Part sizes are judged against the ± tolerance of the target set.'}
       </Typography>
       <Box sx={{ display: 'grid', gap: 3, gridTemplateColumns: { xs: '1fr', lg: canRecord ? 'minmax(320px, 5fr) 7fr' : '1fr' } }}>
-        {canRecord && <TestCutForm machineId={machineId} onSaved={(c) => setSelectedId(c.id)} />}
+        {canRecord && <TestCutForm machineId={machineId} machineKind={machineKind} onSaved={(c) => setSelectedId(c.id)} />}
         <Box sx={{ minWidth: 0 }}>
           {cut ? (
             <TestCutResults

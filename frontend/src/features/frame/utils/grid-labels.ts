@@ -9,8 +9,8 @@ export function residualOf(mm: number, unit: LengthUnit, digits: number): string
   return `${sign}${text} ${UNIT_LABELS[unit]}`;
 }
 
-/** "row 2, column 3: +0.41 mm". */
-export const namePoint = (p: GridPointResult, unit: LengthUnit, digits: number) => `row ${p.row}, column ${p.column}: ${residualOf(p.residualMm, unit, digits)}`;
+/** "row 2, column 3: +0.41 mm" (the least-squares residual, or the value given). */
+export const namePoint = (p: GridPointResult, unit: LengthUnit, digits: number, valueMm = p.residualMm) => `row ${p.row}, column ${p.column}: ${residualOf(valueMm, unit, digits)}`;
 
 /** Positions spread evenly from 0 to the length, rounded to whole mm. */
 export const evenPositions = (count: number, lengthMm: number) =>
