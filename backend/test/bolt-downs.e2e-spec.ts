@@ -6,7 +6,7 @@ import { anonymous, createTestApp, createTestWorkshop, type Agent, type TestWork
 
 // A 300 mm rail with holes every 60 mm from 30 mm: holes 0…4 at 30, 90, 150, 210, 270 mm.
 // Proposed fixing order (one end, the far end, then halving the gaps): 0, 4, 2, 1, 3.
-const RAIL = { label: 'Y1 (left)', axis: 'Y1', lengthMm: 300, profileSize: 20, holePitchMm: 60, firstHoleMm: 30 };
+const RAIL = { label: 'Y1 (left)', axis: 'Y1', length: 300, profileSize: 20, holePitch: 60, firstHole: 30 };
 const POSITIONS = [30, 90, 150, 210, 270];
 const THOU_MM = 0.0254; // 1 thou = 0.001 in = 0.0254 mm exactly
 
@@ -36,7 +36,7 @@ describe('bolt-down guide API', () => {
     expect(res.status).toBe(201);
     return res.body.id as string;
   };
-  const start = async (railId: string, body: Record<string, unknown> = { mode: 'line', unit: 'thou' }, agent: Agent = ws.as.builder) => {
+  const start = async (railId: string, body: Record<string, unknown> = { mode: 'line', readingUnit: 'thou' }, agent: Agent = ws.as.builder) => {
     const res = await agent.post(`/api/rails/${railId}/bolt-downs`).send(body);
     expect(res.status).toBe(201);
     return res.body as { id: string; holes: Hole[]; [k: string]: unknown };
@@ -65,21 +65,21 @@ describe('bolt-down guide API', () => {
 
   it('a builder begins a bolt-down: holes from the rail, the proposed order, nothing fixed yet', async () => {
     const railId = await newRail();
-    const res = await ws.as.builder.post(`/api/rails/${railId}/bolt-downs`).send({ mode: 'line', unit: 'thou' });
+    const res = await ws.as.builder.post(`/api/rails/${railId}/bolt-downs`).send({ mode: 'line', readingUnit: 'thou' });
     expect(res.status).toBe(201);
-    expect(res.body).toMatchObject({ railId, machineId, mode: 'line', unit: 'thou', nextHole: 0, fixedCount: 0, holeCount: 5, complete: false, finalSweepId: null });
+    expect(res.body).toMatchObject({ railId, machineId, mode: 'line', readingUnit: 'thou', nextHole: 0, fixedCount: 0, holeCount: 5, complete: false, finalSweepId: null });
     expect(res.body.rail).toEqual({ label: 'Y1 (left)', axis: 'Y1', lengthMm: 300 });
     expect(res.body.holes.map((h: Hole) => h.position)).toEqual(POSITIONS);
     expect(res.body.holes.map((h: Hole) => h.order)).toEqual([0, 3, 2, 4, 1]);
     expect(res.body.holes[0]).toEqual({
-      index: 0, position: 30, order: 0, target: null, targetMm: null, reading: null, readingMm: null, difference: null, onTarget: null, fixed: false, fixedAt: null, fixedBy: null,
+      index: 0, position: 30, at: 30, order: 0, target: null, targetMm: null, reading: null, readingMm: null, difference: null, onTarget: null, fixed: false, fixedAt: null, fixedBy: null,
     });
     // The plasma default target is 2 thou of straightness (common practice); the band is half of it.
     expect(res.body.band).toBeCloseTo(1, 12);
     expect(res.body.bandMm).toBeCloseTo(THOU_MM, 12);
     // mm when no unit is given; a band given in the unit is kept.
     const mm = await start(railId, { mode: 'face', band: 0.01 });
-    expect(mm).toMatchObject({ unit: 'mm', mode: 'face', band: 0.01, bandMm: 0.01 });
+    expect(mm).toMatchObject({ readingUnit: 'mm', mode: 'face', band: 0.01, bandMm: 0.01 });
   });
 
   it('recomputes the aims of the open holes as holes are fixed (line mode, worked by hand)', async () => {
@@ -107,7 +107,7 @@ describe('bolt-down guide API', () => {
   });
 
   it('aims every hole at the first fixed reading in face mode', async () => {
-    const bd = await start(await newRail(), { mode: 'face', unit: 'mm' });
+    const bd = await start(await newRail(), { mode: 'face', readingUnit: 'mm' });
     await fix(bd.id, 0, 0.012);
     const s = await fix(bd.id, 4, 0.05);
     for (const i of [1, 2, 3, 4]) expect(s.holes[i].target).toBe(0.012);
@@ -171,7 +171,7 @@ describe('bolt-down guide API', () => {
   });
 
   it('loosening a fixed hole takes it out of the aims and the count', async () => {
-    const bd = await start(await newRail(), { mode: 'face', unit: 'thou' });
+    const bd = await start(await newRail(), { mode: 'face', readingUnit: 'thou' });
     await fix(bd.id, 0, 0.2);
     await fix(bd.id, 4, 0.5);
     const res = await put(bd.id, 0, { reading: 0.2, fixed: false, writeId: randomUUID() });
@@ -208,7 +208,7 @@ describe('bolt-down guide API', () => {
     expect((await them.get(`/api/rails/${railId}/bolt-downs`)).status).toBe(404);
     expect((await them.post(`/api/rails/${railId}/bolt-downs`).send({ mode: 'line' })).status).toBe(404);
     expect((await put(bd.id, 0, { reading: 1, fixed: true, writeId: randomUUID() }, them)).status).toBe(404);
-    expect((await them.post(`/api/bolt-downs/${bd.id}/final-sweep`).send({ unit: 'thou', phase: 'as-left', stations: POSITIONS.map((position) => ({ position, reading: 0 })) })).status).toBe(404);
+    expect((await them.post(`/api/bolt-downs/${bd.id}/final-sweep`).send({ readingUnit: 'thou', phase: 'as-left', stations: POSITIONS.map((position) => ({ position, reading: 0 })) })).status).toBe(404);
     expect((await ws.as.viewer.get(`/api/bolt-downs/${bd.id}`)).body.fixedCount).toBe(0);
     expect((await ws.as.builder.get(`/api/bolt-downs/${randomUUID()}`)).status).toBe(404);
   });
@@ -216,7 +216,8 @@ describe('bolt-down guide API', () => {
   it.each([
     [{ mode: 'edge' }, /mode must be one of face, line/],
     [{}, /mode must be one of/],
-    [{ mode: 'line', unit: 'cm' }, /unit must be one of mm, um, in, thou/],
+    [{ mode: 'line', readingUnit: 'cm' }, /readingUnit must be one of mm, um, in, thou/],
+    [{ mode: 'line', unit: 'thou' }, /unit is no longer accepted: send lengthUnit and readingUnit/],
     [{ mode: 'line', band: -1 }, /band must not be negative/],
     [{ mode: 'line', band: 'wide' }, /band must be a number/],
     [{ mode: 'line', colour: 'red' }, /colour should not exist/],
@@ -285,7 +286,7 @@ describe('bolt-down guide API', () => {
     const READINGS = [0, 0, 1, 0, 0];
     const sweepBody = (overrides: Record<string, unknown> = {}) => ({
       id: randomUUID(),
-      unit: 'thou',
+      readingUnit: 'thou',
       phase: 'as-left',
       instrument: 'Dial indicator 0.0005 in',
       resolution: 0.5,
@@ -315,8 +316,8 @@ describe('bolt-down guide API', () => {
       expect(JSON.stringify(missing.body.message)).toMatch(/stations must include every hole: missing 270 mm/);
       const extra = await ws.as.builder.post(`/api/bolt-downs/${bd.id}/final-sweep`).send(sweepBody({ stations: [...POSITIONS, 100].map((position) => ({ position, reading: 0 })) }));
       expect(JSON.stringify(extra.body.message)).toMatch(/100 mm is not a hole/);
-      const badUnit = await ws.as.builder.post(`/api/bolt-downs/${bd.id}/final-sweep`).send(sweepBody({ unit: 'furlong' }));
-      expect(JSON.stringify(badUnit.body.message)).toMatch(/unit must be one of/);
+      const badUnit = await ws.as.builder.post(`/api/bolt-downs/${bd.id}/final-sweep`).send(sweepBody({ readingUnit: 'furlong' }));
+      expect(JSON.stringify(badUnit.body.message)).toMatch(/readingUnit must be one of/);
       expect((await ws.as.viewer.get(`/api/rails/${railId}/sweeps`)).body).toHaveLength(0);
     });
 
@@ -325,7 +326,7 @@ describe('bolt-down guide API', () => {
       const res = await ws.as.builder.post(`/api/bolt-downs/${bd.id}/final-sweep`).send(body);
       expect(res.status).toBe(201);
       expect(res.body.boltDown).toMatchObject({ id: bd.id, finalSweepId: body.id, complete: true });
-      expect(res.body.sweep).toMatchObject({ id: body.id, railId, unit: 'thou', phase: 'as-left', boltSize: 'M5', torqueNm: 8.8, status: 'within-target' });
+      expect(res.body.sweep).toMatchObject({ id: body.id, railId, readingUnit: 'thou', phase: 'as-left', boltSize: 'M5', torqueNm: 8.8, status: 'within-target' });
       expect(res.body.sweep.result.leastSquares.straightness).toBeCloseTo(THOU_MM, 9);
       expect(res.body.sweep.result.minimumZone.straightness).toBeCloseTo(THOU_MM, 9);
 

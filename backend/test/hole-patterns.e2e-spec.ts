@@ -11,7 +11,7 @@ const plasma = { name: 'Template test table', kind: 'plasma', workArea: { x: 300
 const bracket = {
   name: 'Y1 motor bracket',
   reference: 'bottom-left',
-  unit: 'mm',
+  lengthUnit: 'mm',
   width: 120,
   height: 90,
   entry: 'circle',
@@ -47,7 +47,7 @@ describe('hole patterns and drilling templates', () => {
 
   it('a builder saves a bolt-circle pattern; every role reads it; its holes are in mm on the circle', async () => {
     const p = await create(bracket);
-    expect(p).toMatchObject({ name: 'Y1 motor bracket', reference: 'bottom-left', unit: 'mm', widthMm: 120, heightMm: 90, entry: 'circle', circle: bracket.circle });
+    expect(p).toMatchObject({ name: 'Y1 motor bracket', reference: 'bottom-left', lengthUnit: 'mm', widthMm: 120, heightMm: 90, entry: 'circle', circle: bracket.circle });
     expect(p.holes).toHaveLength(4);
     // 66.68 mm PCD at 45°: each hole 66.68 / 2 / √2 = 23.5756 mm from the centre along x and y.
     expect(p.holes[0].xMm).toBeCloseTo(60 + 33.34 / Math.SQRT2, 9);
@@ -60,7 +60,7 @@ describe('hole patterns and drilling templates', () => {
   });
 
   it('takes inches: 1 in = 25.4 mm exactly, and keeps the entry as typed', async () => {
-    const p = await create({ name: 'Carriage plate (inch)', reference: 'left', unit: 'in', width: 6, height: 4, entry: 'grid', grid: { originX: 0.5, originY: 0.5, rows: 2, columns: 3, pitchX: 2.5, pitchY: 3, diameter: 0.257 } });
+    const p = await create({ name: 'Carriage plate (inch)', reference: 'left', lengthUnit: 'in', width: 6, height: 4, entry: 'grid', grid: { originX: 0.5, originY: 0.5, rows: 2, columns: 3, pitchX: 2.5, pitchY: 3, diameter: 0.257 } });
     expect(p.widthMm).toBe(152.4);
     expect(p.heightMm).toBe(101.6);
     expect(p.holes[5]).toEqual({ xMm: 12.7 + 2 * 63.5, yMm: 12.7 + 76.2, diameterMm: expect.closeTo(6.5278, 12) });
@@ -78,11 +78,12 @@ describe('hole patterns and drilling templates', () => {
       [{ ...bracket, entry: 'list', circle: undefined, holes: [{ x: 10, y: 10, diameter: -1 }] }, /holes\.0\.diameter must be greater than 0/],
       [{ ...bracket, entry: 'grid', circle: undefined, grid: { originX: 10, originY: 10, rows: 40, columns: 40, pitchX: 1, pitchY: 1, diameter: 0.5 } }, /^grid: rows × columns must be at most 1000/],
       [{ ...bracket, entry: 'grid' }, /grid must give originX/],
-      [{ ...bracket, unit: 'cm' }, /unit must be mm or in/],
+      [{ ...bracket, lengthUnit: 'cm' }, /lengthUnit must be one of mm, um, in, thou/],
+      [{ ...bracket, unit: 'mm' }, /unit is no longer accepted: send lengthUnit and readingUnit/],
       [{ ...bracket, reference: 'middle' }, /reference must be one of/],
       [{ ...bracket, name: '' }, /name is required/],
       [{ ...bracket, width: 0 }, /width must be greater than 0/],
-      [{ ...bracket, unit: 'in', width: 300 }, /width must be at most 6000 mm/],
+      [{ ...bracket, lengthUnit: 'in', width: 300 }, /width must be at most 6000 mm/],
       [{ ...bracket, holes: [{ x: 1, y: 1, diameter: 1 }] }, /holes is only read when entry is list/],
       [{ ...bracket, circle: { ...bracket.circle, count: 2.5 } }, /count must be a whole number/],
     ];
@@ -149,7 +150,7 @@ describe('hole patterns and drilling templates', () => {
   });
 
   it('a rail’s template is derived from the rail: holes at its pitch on the centre line, tiled over A4', async () => {
-    const rail = (await ws.as.builder.post(`/api/machines/${machineId}/rails`).send({ label: 'Y1 (left)', axis: 'Y1', lengthMm: 1000, profileSize: 20, holePitchMm: 60, firstHoleMm: 20 })).body;
+    const rail = (await ws.as.builder.post(`/api/machines/${machineId}/rails`).send({ label: 'Y1 (left)', axis: 'Y1', length: 1000, profileSize: 20, holePitch: 60, firstHole: 20 })).body;
     const res = await getPdf(ws.as.viewer, `/api/rails/${rail.id}/template.pdf`);
     expect(res.status).toBe(200);
     const pdf = res.body as Buffer;

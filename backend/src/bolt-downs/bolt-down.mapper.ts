@@ -6,7 +6,9 @@ import { finiteList, UNREADABLE_INPUT } from '../common/stored-result.js';
 export interface BoltDownHoleResponse {
   index: number;
   /** Hole centre from the rail's start, mm. */
+  /** Hole centre, mm from the rail's start; `at` the same in the bolt-down's lengthUnit. */
   position: number;
+  at: number;
   /** Rank in the proposed fixing order (0 = first). */
   order: number;
   /** Reading to aim for, in the bolt-down's unit (null until the first hole is fixed). */
@@ -30,7 +32,9 @@ export interface BoltDownResponse {
   machineId: string;
   rail: { label: string; axis: string; lengthMm: number };
   mode: BoltDownRow['mode'];
-  unit: BoltDownRow['unit'];
+  /** Readings, aims and the band are in readingUnit; hole positions `at` in lengthUnit (`position` in mm). */
+  readingUnit: BoltDownRow['readingUnit'];
+  lengthUnit: BoltDownRow['lengthUnit'];
   /** Half-width around the aim that counts as on target, in the unit and in mm. */
   band: number;
   bandMm: number;
@@ -81,8 +85,9 @@ export function toBoltDownResponse(row: BoltDownRow, holes: BoltDownHoleRow[], r
       machineId: row.machineId,
       rail,
       mode: row.mode,
-      unit: row.unit,
-      band: fromMm(row.bandMm, row.unit),
+      readingUnit: row.readingUnit,
+      lengthUnit: row.lengthUnit,
+      band: fromMm(row.bandMm, row.readingUnit),
       bandMm: row.bandMm,
       holes: [],
       nextHole: null,
@@ -97,21 +102,23 @@ export function toBoltDownResponse(row: BoltDownRow, holes: BoltDownHoleRow[], r
     };
   }
   const byIndex = new Map(holes.map((h) => [h.holeIndex, h]));
-  const inUnit = (mm: number | null) => (mm === null ? null : fromMm(mm, row.unit));
+  const inUnit = (mm: number | null) => (mm === null ? null : fromMm(mm, row.readingUnit));
   return {
     id: row.id,
     railId: row.railId,
     machineId: row.machineId,
     rail,
     mode: row.mode,
-    unit: row.unit,
-    band: fromMm(row.bandMm, row.unit),
+    readingUnit: row.readingUnit,
+    lengthUnit: row.lengthUnit,
+    band: fromMm(row.bandMm, row.readingUnit),
     bandMm: row.bandMm,
     holes: session.holes.map((h) => {
       const stored = byIndex.get(h.index);
       return {
         index: h.index,
         position: h.positionMm,
+        at: Number(fromMm(h.positionMm, row.lengthUnit).toPrecision(15)),
         order: h.order,
         target: inUnit(h.targetMm),
         targetMm: h.targetMm,

@@ -1,6 +1,8 @@
 import { BadRequestException, ConflictException, Injectable, NotFoundException, OnModuleInit } from '@nestjs/common';
 import type { SessionUser } from '../auth/session-user.js';
 import { holePositions } from '../engine/bolt-down.js';
+import { endDistanceProblem } from '../engine/rail-holes.js';
+import { railEndDistanceMm } from '../rails/rail.mapper.js';
 import { fromMm, toMm, type LengthUnit } from '../engine/units.js';
 import { MachinesService } from '../machines/machines.service.js';
 import { RailSweepsService } from '../rails/rail-sweeps.service.js';
@@ -48,8 +50,16 @@ export class BoltDownsService implements OnModuleInit {
 
   async start(actor: SessionUser, railId: string, dto: CreateBoltDownDto): Promise<BoltDownResponse> {
     const rail = await this.rails.findRow(actor, railId);
-    const unit: LengthUnit = dto.unit ?? 'mm';
+    const unit: LengthUnit = dto.readingUnit ?? 'mm';
+    const lengthUnit: LengthUnit = dto.lengthUnit ?? rail.lengthUnit;
     const positions = holePositions({ lengthMm: rail.lengthMm, pitchMm: rail.holePitchMm, firstHoleOffsetMm: rail.firstHoleMm });
+    const endDistanceMm = railEndDistanceMm(rail);
+    const bad = endDistanceProblem(positions, rail.lengthMm, endDistanceMm);
+    if (bad) {
+      throw new BadRequestException([
+        `railId: rail ${rail.label} has a hole at ${+fromMm(bad.positionMm, lengthUnit).toPrecision(10)} ${lengthUnit} ${bad.clearanceMm <= 0 ? 'on or beyond' : 'too near'} its ${bad.end === 'start' ? 'start' : 'far end'} (each hole centre needs ${+fromMm(endDistanceMm, lengthUnit).toPrecision(6)} ${lengthUnit} from both ends); correct the rail's firstHole, holePitch or length first`,
+      ]);
+    }
     if (positions.length > MAX_HOLES) throw new BadRequestException([`the rail has ${positions.length} holes; the guide takes at most ${MAX_HOLES}`]);
     const bandMm = dto.band !== undefined ? toMm(dto.band, unit) : await this.defaultBandMm(actor, rail);
     const row = await this.repo.insert({
@@ -57,7 +67,8 @@ export class BoltDownsService implements OnModuleInit {
       machineId: rail.machineId,
       railId,
       mode: dto.mode,
-      unit,
+      readingUnit: unit,
+      lengthUnit,
       holePositionsMm: positions,
       bandMm,
       createdById: actor.id,
@@ -95,8 +106,8 @@ export class BoltDownsService implements OnModuleInit {
     if (!found) throw new NotFoundException('No such bolt-down in this workshop');
     const { row, rail, seen } = found;
     const holeIndex = parseIndex(indexParam, row.holePositionsMm.length);
-    const readingMm = toMm(dto.reading, row.unit);
-    if (Math.abs(readingMm) > MAX_READING_MM) throw new BadRequestException([`reading must be within ±${fromMm(MAX_READING_MM, row.unit)} ${row.unit}`]);
+    const readingMm = toMm(dto.reading, row.readingUnit);
+    if (Math.abs(readingMm) > MAX_READING_MM) throw new BadRequestException([`reading must be within ±${fromMm(MAX_READING_MM, row.readingUnit)} ${row.readingUnit}`]);
     // A repeat of a write already applied answers the same, even once the bolt-down is finished.
     if (seen) {
       if (seen.workshopId !== actor.workshopId || seen.boltDownId !== id || seen.target !== `hole:${holeIndex}`) {
@@ -118,20 +129,20 @@ export class BoltDownsService implements OnModuleInit {
     if (outcome.kind === 'finished') throw finishedConflict();
     if (outcome.kind === 'repeat') return { ...(await this.respond(actor, row, rail)), writeId: dto.writeId, repeated: true };
 
-    const fmt = (mm: number | null) => (mm === null ? 'none yet' : `${signed(fromMm(mm, row.unit))} ${row.unit}`);
-    const at = `hole ${holeIndex + 1} at ${row.holePositionsMm[holeIndex]} mm`;
+    const fmt = (mm: number | null) => (mm === null ? 'none yet' : `${signed(fromMm(mm, row.readingUnit))} ${row.readingUnit}`);
+    const at = `hole ${holeIndex + 1} at ${+fromMm(row.holePositionsMm[holeIndex], row.lengthUnit).toPrecision(10)} ${row.lengthUnit}`;
     const summary = dto.fixed
-      ? `Rail ${rail.label}: ${at} fixed at ${signed(dto.reading)} ${row.unit} (aim ${fmt(target)})`
+      ? `Rail ${rail.label}: ${at} fixed at ${signed(dto.reading)} ${row.readingUnit} (aim ${fmt(target)})`
       : before?.fixed
-        ? `Rail ${rail.label}: ${at} loosened again (reading ${signed(dto.reading)} ${row.unit})`
-        : `Rail ${rail.label}: reading ${signed(dto.reading)} ${row.unit} typed at ${at}`;
+        ? `Rail ${rail.label}: ${at} loosened again (reading ${signed(dto.reading)} ${row.readingUnit})`
+        : `Rail ${rail.label}: reading ${signed(dto.reading)} ${row.readingUnit} typed at ${at}`;
     await this.records.audit(actor, {
       machineId: row.machineId,
       recordType: RECORD_TYPE,
       recordId: id,
       action: 'updated',
       summary,
-      changes: { hole: holeIndex, reading: dto.reading, unit: row.unit, fixed: dto.fixed, writeId: dto.writeId },
+      changes: { hole: holeIndex, reading: dto.reading, unit: row.readingUnit, fixed: dto.fixed, writeId: dto.writeId },
     });
     const written = [...holes.filter((h) => h.holeIndex !== holeIndex), outcome.hole].sort((a, b) => a.holeIndex - b.holeIndex);
     const fresh = { ...row, fixCounter: outcome.fixCounter, updatedAt: outcome.hole.updatedAt };
@@ -210,11 +221,14 @@ function parseIndex(raw: string, count: number): number {
 }
 
 function checkStationsAtHoles(dto: FinalSweepDto, positionsMm: number[]) {
-  const missing = positionsMm.filter((p) => !dto.stations.some((s) => Math.abs(s.position - p) <= STATION_SLACK_MM));
-  const extra = dto.stations.filter((s) => !positionsMm.some((p) => Math.abs(s.position - p) <= STATION_SLACK_MM));
+  const unit = dto.lengthUnit ?? 'mm';
+  const stationsMm = dto.stations.map((s) => toMm(s.position, unit));
+  const missing = positionsMm.filter((p) => !stationsMm.some((s) => Math.abs(s - p) <= STATION_SLACK_MM));
+  const extra = dto.stations.filter((_, i) => !positionsMm.some((p) => Math.abs(stationsMm[i] - p) <= STATION_SLACK_MM));
+  const show = (mm: number) => +fromMm(mm, unit).toPrecision(10);
   const problems: string[] = [];
-  if (missing.length) problems.push(`stations must include every hole: missing ${missing.slice(0, 5).join(', ')} mm${missing.length > 5 ? ' …' : ''}`);
-  if (extra.length) problems.push(`stations must be at the holes only: ${extra.slice(0, 5).map((s) => s.position).join(', ')} mm is not a hole`);
+  if (missing.length) problems.push(`stations must include every hole: missing ${missing.slice(0, 5).map(show).join(', ')} ${unit}${missing.length > 5 ? ' …' : ''}`);
+  if (extra.length) problems.push(`stations must be at the holes only: ${extra.slice(0, 5).map((s) => s.position).join(', ')} ${unit} is not a hole`);
   if (problems.length) throw new BadRequestException(problems);
 }
 

@@ -1,3 +1,4 @@
+import { fromMm } from '../engine/units.js';
 import type { PatternEntryKind, PatternReference, PatternUnit, StoredHole, StoredPatternEntry } from '../database/schema/hole-patterns.js';
 import type { HolePatternRow } from './hole-patterns.repository.js';
 
@@ -6,7 +7,7 @@ export interface HolePatternResponse {
   machineId: string;
   name: string;
   reference: PatternReference;
-  unit: PatternUnit;
+  lengthUnit: PatternUnit;
   /** Outline in mm; `width`/`height` as entered, in `unit`. */
   widthMm: number;
   heightMm: number;
@@ -30,7 +31,7 @@ export interface PatternPreviewResponse {
   holes: StoredHole[];
 }
 
-const inUnit = (mm: number, unit: PatternUnit) => (unit === 'in' ? Number(((mm * 10) / 254).toFixed(6)) : mm);
+const inUnit = (mm: number, unit: PatternUnit) => (unit === 'mm' ? mm : Number(fromMm(mm, unit).toPrecision(15)));
 
 export function toHolePatternResponse(row: HolePatternRow): HolePatternResponse {
   const { kind, ...params } = row.entry;
@@ -39,11 +40,11 @@ export function toHolePatternResponse(row: HolePatternRow): HolePatternResponse 
     machineId: row.machineId,
     name: row.name,
     reference: row.reference,
-    unit: row.unit,
+    lengthUnit: row.lengthUnit,
     widthMm: row.widthMm,
     heightMm: row.heightMm,
-    width: inUnit(row.widthMm, row.unit),
-    height: inUnit(row.heightMm, row.unit),
+    width: inUnit(row.widthMm, row.lengthUnit),
+    height: inUnit(row.heightMm, row.lengthUnit),
     entry: kind,
     holesEntered: row.entry.kind === 'list' ? row.entry.holes : null,
     grid: row.entry.kind === 'grid' ? (params as HolePatternResponse['grid']) : null,

@@ -78,12 +78,12 @@ function resolveOrRefuse(dto: HolePatternDto): ResolvedPattern {
 }
 
 function valuesOf(dto: HolePatternDto, p: ResolvedPattern): HolePatternValues {
-  return { name: dto.name.trim(), reference: dto.reference, unit: dto.unit, widthMm: p.widthMm, heightMm: p.heightMm, entry: p.entry, holes: p.holes, notes: dto.notes?.trim() ?? '' };
+  return { name: dto.name.trim(), reference: dto.reference, lengthUnit: dto.lengthUnit ?? 'mm', widthMm: p.widthMm, heightMm: p.heightMm, entry: p.entry, holes: p.holes, notes: dto.notes?.trim() ?? '' };
 }
 
 function changes(before: HolePatternRow, after: HolePatternRow): Record<string, unknown> {
   const out: Record<string, unknown> = {};
-  for (const key of ['name', 'reference', 'unit', 'widthMm', 'heightMm', 'entry', 'notes'] as const) {
+  for (const key of ['name', 'reference', 'lengthUnit', 'widthMm', 'heightMm', 'entry', 'notes'] as const) {
     if (JSON.stringify(before[key]) !== JSON.stringify(after[key])) out[key] = { from: before[key], to: after[key] };
   }
   if (before.holes.length !== after.holes.length) out.holeCount = { from: before.holes.length, to: after.holes.length };

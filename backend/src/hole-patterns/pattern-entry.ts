@@ -18,13 +18,13 @@ export interface ResolvedPattern {
  * holes in mm, or the list of what is wrong, each message naming its field.
  */
 export function resolvePattern(dto: HolePatternDto): { pattern: ResolvedPattern | null; problems: string[] } {
-  const mm = (v: number) => toMm(v, dto.unit);
+  const mm = (v: number) => toMm(v, dto.lengthUnit ?? 'mm');
   const problems: string[] = [];
   const widthMm = mm(dto.width);
   const heightMm = mm(dto.height);
   for (const [field, value] of [['width', widthMm], ['height', heightMm]] as const) {
     if (!(value > 0)) problems.push(`${field} must be greater than 0`);
-    else if (value > MAX_SIDE_MM) problems.push(`${field} must be at most ${MAX_SIDE_MM} mm (${dto[field]} ${dto.unit} given)`);
+    else if (value > MAX_SIDE_MM) problems.push(`${field} must be at most ${MAX_SIDE_MM} mm (${dto[field]} ${dto.lengthUnit ?? 'mm'} given)`);
   }
   for (const other of ['holes', 'grid', 'circle'] as const) {
     const owner = other === 'holes' ? 'list' : other;

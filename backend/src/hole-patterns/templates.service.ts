@@ -37,7 +37,7 @@ export class TemplatesService {
       widthMm: row.widthMm,
       heightMm: row.heightMm,
       reference: row.reference,
-      unit: row.unit,
+      unit: row.lengthUnit,
       holes: row.holes,
     };
     return render(input, `template-${slug(row.name)}`, format, paper);

@@ -1,17 +1,21 @@
 import { Injectable, OnModuleInit } from '@nestjs/common';
 import type { SessionUser } from '../auth/session-user.js';
 import type { TargetValue } from '../database/schema/target-sets.js';
-import { fromMm, isLengthUnit } from '../engine/units.js';
-import type { MachineRef, ReadinessCheck, ReadinessContext } from '../records/readiness.js';
+import { fromMm, isLengthUnit, toMm } from '../engine/units.js';
+import type { ResultWarning } from '../engine/warnings.js';
+import { finiteList } from '../common/stored-result.js';
+import { HEIGHT_SOURCE, judgePair } from './rail-pair.js';
+import { judgedFigure, referenceOf, REFERENCE_WORDS, showIn, targetLengthUnit, warningsForSweep } from './sweep-judgement.js';
+import type { CheckSeries, MachineRef, ReadinessCheck, ReadinessContext } from '../records/readiness.js';
 import { ReadinessRegistry } from '../records/readiness.registry.js';
 import { SubjectsRegistry } from '../records/subjects.registry.js';
 import { TargetSetsService } from '../target-sets/target-sets.service.js';
 import { TARGET_LABELS, targetInBaseUnit } from '../target-sets/target-keys.js';
 import { MachinesService } from '../machines/machines.service.js';
-import { partnerParallelism, type ComparedSweep } from './rail-parallelism.js';
-import { RailsRepository, type DatumSweep, type LatestSweep, type RailRow } from './rails.repository.js';
+import type { ComparedSweep } from './rail-parallelism.js';
+import { RailsRepository, type DatumSweep, type LatestSweep, type RailRow, type SweepRow } from './rails.repository.js';
 import { RailsService } from './rails.service.js';
-import { summaryReadable } from './rail.mapper.js';
+import { inLengthUnit, storedSweepResult, summaryReadable } from './rail.mapper.js';
 import { UNREADABLE_INPUT } from '../common/stored-result.js';
 
 const railLink = (machineId: string, railId: string) => `/machines/${machineId}/rails/${railId}`;
@@ -58,7 +62,8 @@ export class RailChecksService implements OnModuleInit {
 
   /**
    * Three queries whatever the history: the rails, the newest sweep of each (summary columns),
-   * and the newest sweep of each rail per datum (for the partner pairs).
+   * and the newest sweep of each rail per datum and face (for the partner pairs); a fourth for
+   * the certificate's series when they are asked for.
    */
   async checksFor(machine: MachineRef, context: ReadinessContext): Promise<ReadinessCheck[]> {
     const rails = await this.repo.listRails(machine.workshopId, machine.id);
@@ -70,8 +75,15 @@ export class RailChecksService implements OnModuleInit {
       this.repo.latestSweeps(machine.workshopId, ids),
       paired.length ? this.repo.latestSweepsPerDatum(machine.workshopId, ids) : Promise.resolve([]),
     ]);
-    const checks = rails.map((r) => this.straightnessCheck(r, latest.get(r.id) ?? null, targets.straightness));
-    for (const [a, b] of paired) checks.push(this.parallelismCheck(a, b, comparedOf(a.id, latest, perDatum), comparedOf(b.id, latest, perDatum), targets));
+    const full = context.series ? new Map((await this.repo.sweepsByIds(machine.workshopId, [...latest.values()].map((s) => s.id))).map((s) => [s.id, s])) : null;
+    const checks = rails.map((r) => {
+      const newest = latest.get(r.id) ?? null;
+      const check = this.straightnessCheck(r, newest, targets.straightness);
+      const row = newest && full?.get(newest.id);
+      if (row && check.result) check.series = straightnessSeries(r, row, targets.straightness);
+      return check;
+    });
+    for (const [a, b] of paired) checks.push(this.parallelismCheck(a, b, comparedOf(a.id, latest, perDatum), comparedOf(b.id, latest, perDatum), targets, context.series));
     return checks;
   }
 
@@ -80,30 +92,50 @@ export class RailChecksService implements OnModuleInit {
     const rail = await this.rails.findRow(actor, railId);
     const machine = await this.machines.getRef(actor, rail.machineId);
     const targets = await this.targetsOf(actor.workshopId, machine.targetSetId);
-    const shownTargets = { parallelism: plain(targets.parallelism), heightDifference: plain(targets.height) };
+    const shownTargets = { parallelism: plain(targets.parallelism), heightDifference: { ...plain(targets.height), source: HEIGHT_SOURCE } };
     const partner = rail.partnerRailId ? await this.repo.findRail(actor.workshopId, rail.partnerRailId) : null;
     if (!partner) {
-      return { railId, partnerRailId: null, status: 'not-comparable' as const, reason: `Rail ${rail.label} has no partner rail`, targets: shownTargets };
+      return { railId, partnerRailId: null, status: 'not-comparable' as const, reason: `Rail ${rail.label} has no partner rail`, targets: shownTargets, warnings: [] };
     }
     const [latest, perDatum] = await Promise.all([
       this.repo.latestSweeps(actor.workshopId, [rail.id, partner.id]),
       this.repo.latestSweepsPerDatum(actor.workshopId, [rail.id, partner.id]),
     ]);
-    const out = partnerParallelism(comparedOf(rail.id, latest, perDatum), comparedOf(partner.id, latest, perDatum), { a: rail.label, b: partner.label });
-    const base = { railId, partnerRailId: partner.id, targets: shownTargets, sweeps: { a: out.a?.id ?? null, b: out.b?.id ?? null } };
-    if (!out.comparable) return { ...base, status: 'not-comparable' as const, reason: out.reason, ...(out.unreadable ? { unreadable: UNREADABLE_INPUT } : {}) };
-    const parallelWithin = out.parallelismMm <= targetInBaseUnit(targets.parallelism);
-    const heightWithin = Math.abs(out.meanOffsetMm) <= targetInBaseUnit(targets.height);
+    const j = judgePair(rail, partner, comparedOf(rail.id, latest, perDatum), comparedOf(partner.id, latest, perDatum), targets);
+    const out = j.parallelism;
+    const height = {
+      measured: j.height.measured,
+      reason: j.height.reason ?? null,
+      datum: j.height.datum ?? null,
+      worst: j.height.worstMm ?? null,
+      worstSigned: j.height.worstSignedMm ?? null,
+      at: j.height.atMm ?? null,
+      differences: j.height.differencesMm ?? null,
+      spacing: j.height.spacingMm ?? null,
+      kUmPerMm: j.height.kUmPerMm ?? null,
+      permissible: j.height.permissibleMm ?? null,
+      targetText: j.height.targetText ?? null,
+      within: j.height.within ?? null,
+      unit: 'mm',
+    };
+    const base = { railId, partnerRailId: partner.id, targets: shownTargets, sweeps: { a: out.a?.id ?? null, b: out.b?.id ?? null }, height, warnings: j.warnings };
+    if (!out.comparable && j.status !== 'within-target' && j.status !== 'outside-target') return { ...base, status: 'not-comparable' as const, reason: out.reason };
+    if (!out.comparable && out.unreadable) return { ...base, status: 'not-comparable' as const, reason: out.reason, unreadable: UNREADABLE_INPUT };
     return {
       ...base,
-      status: parallelWithin && heightWithin ? ('within-target' as const) : ('outside-target' as const),
-      datum: out.datum,
-      parallelism: out.parallelismMm,
-      meanOffset: out.meanOffsetMm,
-      positions: out.positionsMm,
-      differences: out.differencesMm,
-      parallelismWithin: parallelWithin,
-      heightDifferenceWithin: heightWithin,
+      status: j.status as 'within-target' | 'outside-target',
+      ...(out.comparable
+        ? {
+            datum: out.datum,
+            face: out.a.face ?? 'side',
+            parallelism: out.parallelismMm,
+            meanOffset: out.meanOffsetMm,
+            positions: out.positionsMm,
+            differences: out.differencesMm,
+            parallelismWithin: j.parallelismWithin,
+          }
+        : { reason: out.reason, parallelism: null, parallelismWithin: null }),
+      heightDifferenceWithin: j.height.within ?? null,
     };
   }
 
@@ -113,65 +145,130 @@ export class RailChecksService implements OnModuleInit {
   }
 
   private straightnessCheck(rail: RailRow, latest: LatestSweep | null, target: TargetValue): ReadinessCheck {
+    const reference = referenceOf(target);
     const common = {
       key: `straightness:${rail.id}`,
       kind: 'rail-straightness' as const,
       // "Rail Y1 (left)" already names its axis; "Rail left" gets it added.
       subject: rail.label.includes(rail.axis) ? `Rail ${rail.label}` : `Rail ${rail.label} (${rail.axis})`,
-      target: { ...plain(target), label: TARGET_LABELS.railStraightness },
+      target: { ...plain(target), reference, label: `${TARGET_LABELS.railStraightness}, judged on the ${REFERENCE_WORDS[reference]}` },
       link: railLink(rail.machineId, rail.id),
+      warnings: [] as ResultWarning[],
     };
     if (!latest) return { ...common, status: 'not-started', result: null, recordType: null, recordId: null, recordedAt: null };
     if (!summaryReadable(latest)) {
       // A latest sweep that cannot be read blocks like a failed one and says why.
       return { ...common, subject: `${common.subject} (latest sweep unreadable)`, status: 'outside-target', result: null, recordType: 'rail-sweep', recordId: latest.id, recordedAt: latest.takenAt.toISOString() };
     }
-    const ls = latest.leastSquaresStraightness;
-    const mz = latest.minimumZoneStraightness;
+    const judged = judgedFigure(latest, reference);
+    const other = reference === 'minimum-zone' ? `least squares ${show(latest.leastSquaresStraightness, target)}` : `minimum zone ${show(latest.minimumZoneStraightness, target)}`;
+    const slope = latest.localSlopeMmPerM === null ? '' : `; largest local slope ${latest.localSlopeMmPerM.toFixed(3)} mm/m`;
+    const resolutionMm = latest.resolution === null ? null : toMm(latest.resolution, latest.readingUnit);
     return {
       ...common,
-      status: ls <= targetInBaseUnit(target) ? 'within-target' : 'outside-target',
-      result: { value: inUnit(ls, target), unit: target.unit, summary: `Least squares ${show(ls, target)}, minimum zone ${show(mz, target)} (${latest.phase}, ${latest.stationCount} stations)` },
+      status: judged <= targetInBaseUnit(target) ? 'within-target' : 'outside-target',
+      result: {
+        value: inUnit(judged, target),
+        unit: target.unit,
+        summary: `${capital(REFERENCE_WORDS[reference])} ${show(judged, target)} against ${unitWord(target)} (${other})${slope} (${latest.phase}, ${latest.face} face, ${latest.stationCount} stations)`,
+      },
       recordType: 'rail-sweep',
       recordId: latest.id,
       recordedAt: latest.takenAt.toISOString(),
+      warnings: warningsForSweep({ stationCount: latest.stationCount, resolutionMm, readingUnit: latest.readingUnit, spanMm: latest.spanMm }, rail.lengthMm, target, rail.lengthUnit),
     };
   }
 
-  private parallelismCheck(a: RailRow, b: RailRow, sa: ComparedSweep[], sb: ComparedSweep[], t: { parallelism: TargetValue; height: TargetValue }): ReadinessCheck {
-    const out = partnerParallelism(sa, sb, { a: a.label, b: b.label });
+  private parallelismCheck(a: RailRow, b: RailRow, sa: ComparedSweep[], sb: ComparedSweep[], t: { parallelism: TargetValue; height: TargetValue }, withSeries: boolean): ReadinessCheck {
+    const j = judgePair(a, b, sa, sb, t);
+    const out = j.parallelism;
     const common = {
       key: `parallelism:${a.id}:${b.id}`,
       kind: 'rail-parallelism' as const,
       subject: `Rails ${a.label} and ${b.label}`,
       target: { ...plain(t.parallelism), label: TARGET_LABELS.railParallelism },
       link: railLink(a.machineId, a.id),
+      warnings: j.warnings,
     };
     if (!out.comparable && out.unreadable) {
       const bad = out.a!.takenAt >= out.b!.takenAt ? out.a! : out.b!;
       return { ...common, subject: `${common.subject} (latest sweep unreadable: ${out.reason})`, status: 'outside-target', result: null, recordType: 'rail-sweep', recordId: bad.id, recordedAt: bad.takenAt.toISOString() };
     }
-    if (!out.comparable) {
+    if (j.status === 'not-started') {
       // No number to show yet; the reason goes with the subject so the board says what is missing.
-      return { ...common, subject: `${common.subject} (${out.reason})`, status: 'not-started', result: null, recordType: null, recordId: null, recordedAt: null };
+      return { ...common, subject: `${common.subject} (${out.comparable ? 'no height yet' : out.reason})`, status: 'not-started', result: null, recordType: null, recordId: null, recordedAt: null };
     }
-    const parallelWithin = out.parallelismMm <= targetInBaseUnit(t.parallelism);
-    const heightWithin = Math.abs(out.meanOffsetMm) <= targetInBaseUnit(t.height);
-    const newer = out.a.takenAt >= out.b.takenAt ? out.a : out.b;
-    return {
+    const h = j.height;
+    const heightText = h.measured
+      ? `worst-station height difference ${show(h.worstMm!, t.parallelism)} at ${showIn(h.atMm!, a.lengthUnit)} (target ${h.targetText}${h.within ? '' : ', outside'}; top face, datum ${h.datum})`
+      : 'no height difference (needs top-face sweeps against one common datum)';
+    const parallelText = out.comparable
+      ? `Parallelism ${show(out.parallelismMm, t.parallelism)} (target ${unitWord(t.parallelism)}, ${out.a.face ?? 'side'} face, datum ${out.datum})`
+      : `No parallelism yet (${out.reason})`;
+    const newer = out.comparable ? (out.a.takenAt >= out.b.takenAt ? out.a : out.b) : null;
+    const check: ReadinessCheck = {
       ...common,
-      status: parallelWithin && heightWithin ? 'within-target' : 'outside-target',
+      status: j.status,
       result: {
-        value: inUnit(out.parallelismMm, t.parallelism),
+        value: out.comparable ? inUnit(out.parallelismMm, t.parallelism) : inUnit(h.worstMm!, t.parallelism),
         unit: t.parallelism.unit,
-        summary: `Parallelism ${show(out.parallelismMm, t.parallelism)} (target ${unitWord(t.parallelism)}); height difference ${show(out.meanOffsetMm, t.height)} (target ${unitWord(t.height)}${heightWithin ? '' : ', outside'}); datum ${out.datum}`,
+        summary: `${parallelText}; ${heightText}`,
       },
       recordType: 'rail-sweep',
-      recordId: newer.id,
-      recordedAt: newer.takenAt.toISOString(),
+      recordId: newer?.id ?? null,
+      recordedAt: newer?.takenAt.toISOString() ?? null,
     };
+    if (withSeries && out.comparable) check.series = parallelismSeries(a, b, out.positionsMm, out.differencesMm, t.parallelism);
+    return check;
   }
 }
+
+const capital = (s: string) => s.charAt(0).toUpperCase() + s.slice(1);
+
+/**
+ * Residuals of the judged reference line per station, in the sweep's reading unit, centred on the
+ * zone's middle so the tolerance band is ±t/2 around zero.
+ */
+function straightnessSeries(rail: RailRow, row: SweepRow, target: TargetValue): CheckSeries | undefined {
+  const result = storedSweepResult(row.result);
+  if (!result || !finiteList(row.positionsMm) || row.positionsMm.length !== result.leastSquares.residuals.length) return undefined;
+  const reference = referenceOf(target);
+  const residuals = reference === 'least-squares' ? result.leastSquares.residuals : result.minimumZone.residuals;
+  const mid = (Math.max(...residuals) + Math.min(...residuals)) / 2;
+  const ru = row.readingUnit;
+  const lu = row.lengthUnit;
+  const halfBand = fromMm(targetInBaseUnit(target) / 2, ru);
+  const order = row.positionsMm.map((p, i) => i).sort((i, k) => row.positionsMm[i] - row.positionsMm[k]);
+  return {
+    title: `Rail ${rail.label}: residuals from the ${REFERENCE_WORDS[reference]}`,
+    x: { label: 'Position along the rail', unit: unitLabel(lu) },
+    y: { label: 'Deviation', unit: unitLabel(ru) },
+    lines: [{ label: `Sweep of ${row.takenAt.toISOString().slice(0, 10)} (${row.phase}, ${row.face} face)`, points: order.map((i) => [inLengthUnit(row.positionsMm[i], lu), fromMm(residuals[i] - mid, ru)] as [number, number]) }],
+    limits: [
+      { label: `+t/2 (target ${unitWord(target)})`, value: halfBand },
+      { label: `−t/2 (target ${unitWord(target)})`, value: -halfBand },
+    ],
+  };
+}
+
+/** B − A per station against the common datum, in the parallelism target's unit, with the band centred on the mean. */
+function parallelismSeries(a: RailRow, b: RailRow, positionsMm: number[], differencesMm: number[], target: TargetValue): CheckSeries {
+  const unit = targetLengthUnit(target);
+  const mid = (Math.max(...differencesMm) + Math.min(...differencesMm)) / 2;
+  const half = fromMm(targetInBaseUnit(target) / 2, unit);
+  return {
+    title: `Rails ${a.label} and ${b.label}: ${b.label} − ${a.label} against the common datum`,
+    x: { label: 'Position along the rails', unit: unitLabel(a.lengthUnit) },
+    y: { label: 'Difference', unit: unitLabel(unit) },
+    lines: [{ label: `${b.label} − ${a.label}`, points: positionsMm.map((p, i) => [inLengthUnit(p, a.lengthUnit), fromMm(differencesMm[i] - mid, unit)] as [number, number]) }],
+    limits: [
+      { label: `+t/2 (target ${unitWord(target)})`, value: half },
+      { label: `−t/2 (target ${unitWord(target)})`, value: -half },
+    ],
+  };
+}
+
+const unitLabel = (u: string) => (u === 'um' ? 'µm' : u);
 
 const plain = (t: TargetValue) => ({ value: t.value, unit: t.unit });
 const unitWord = (t: TargetValue) => `${t.value} ${t.unit === 'um' ? 'µm' : t.unit}`;
@@ -183,7 +280,7 @@ const unitWord = (t: TargetValue) => `${t.value} ${t.unit === 'um' ? 'µm' : t.u
 function comparedOf(railId: string, latest: Map<string, LatestSweep>, perDatum: DatumSweep[]): ComparedSweep[] {
   const own: ComparedSweep[] = perDatum.filter((s) => s.railId === railId);
   const newest = latest.get(railId);
-  if (newest && !own.some((s) => s.id === newest.id)) own.push({ id: newest.id, datum: null, takenAt: newest.takenAt, positionsMm: [], readingsMm: [] });
+  if (newest && !own.some((s) => s.id === newest.id)) own.push({ id: newest.id, datum: null, face: newest.face, takenAt: newest.takenAt, positionsMm: [], readingsMm: [] });
   return own.sort((x, y) => y.takenAt.getTime() - x.takenAt.getTime());
 }
 

@@ -3,7 +3,7 @@ import type { SweepRow } from './rails.repository.js';
 import { finiteList } from '../common/stored-result.js';
 
 /** What the comparison reads of a sweep (full rows fit too). */
-export type ComparedSweep = Pick<SweepRow, 'id' | 'datum' | 'takenAt' | 'positionsMm' | 'readingsMm'>;
+export type ComparedSweep = Pick<SweepRow, 'id' | 'datum' | 'takenAt' | 'positionsMm' | 'readingsMm'> & { face?: SweepRow['face'] | null };
 
 // Two stations are the same place when they agree to a micrometre (positions are typed in mm).
 const SAME_POSITION_MM = 0.001;

@@ -1,7 +1,8 @@
 import { BadRequestException, ConflictException, Injectable, NotFoundException } from '@nestjs/common';
 import type { SessionUser } from '../auth/session-user.js';
 import { evaluateStraightness, type ReferenceLineResult } from '../engine/straightness.js';
-import { arrayToMm, fromMm } from '../engine/units.js';
+import { arrayToMm, toMm } from '../engine/units.js';
+import { judgedStraightnessMm, referenceOf, REFERENCE_WORDS, showIn, slopeOf, warningsForSweep } from './sweep-judgement.js';
 import type { StoredLine, StoredSweepResult } from '../database/schema/rails.js';
 import { MachinesService } from '../machines/machines.service.js';
 import { RecordsService } from '../records/records.service.js';
@@ -59,14 +60,27 @@ export class RailSweepsService {
     const takenAt = dto.takenAt ? new Date(dto.takenAt) : new Date();
     if (takenAt.getTime() > Date.now() + 5 * 60_000) throw new BadRequestException(['takenAt must not be in the future']);
 
-    const positionsMm = dto.stations.map((s) => s.position);
+    const readingUnit = dto.readingUnit ?? 'mm';
+    const lengthUnit = dto.lengthUnit ?? 'mm';
+    const positionsMm = arrayToMm(dto.stations.map((s) => s.position), lengthUnit);
+    checkPositionsMm(positionsMm, lengthUnit);
     const readingsRaw = dto.stations.map((s) => s.reading);
-    const readingsMm = arrayToMm(readingsRaw, dto.unit);
+    const readingsMm = arrayToMm(readingsRaw, readingUnit);
     const fitted = evaluateStraightness({ positionsMm, readingsMm });
-    const result: StoredSweepResult = { leastSquares: line(fitted.leastSquares), minimumZone: line(fitted.minimumZone), endPoint: line(fitted.endPoint) };
     const target = targets.railStraightness;
-    const base = targetInBaseUnit(target);
-    const status = result.leastSquares.straightness <= base ? 'within-target' : 'outside-target';
+    const reference = referenceOf(target);
+    const result: StoredSweepResult = { leastSquares: line(fitted.leastSquares), minimumZone: line(fitted.minimumZone), endPoint: line(fitted.endPoint) };
+    const slope = slopeOf(positionsMm, result, reference);
+    result.localSlope = { mmPerM: slope.mmPerM, fromMm: slope.fromMm, toMm: slope.toMm, baseMm: slope.baseMm };
+    const judged = judgedStraightnessMm(result, reference);
+    const status = judged <= targetInBaseUnit(target) ? 'within-target' : 'outside-target';
+    const resolutionMm = dto.resolution === undefined ? null : toMm(dto.resolution, readingUnit);
+    const warnings = warningsForSweep(
+      { stationCount: positionsMm.length, resolutionMm, readingUnit, spanMm: Math.max(...positionsMm) - Math.min(...positionsMm) },
+      rail.lengthMm,
+      target,
+      lengthUnit,
+    );
 
     const now = new Date();
     const row = await this.repo.insertSweepFromValues({
@@ -74,7 +88,9 @@ export class RailSweepsService {
       workshopId: actor.workshopId,
       machineId: rail.machineId,
       railId,
-      unit: dto.unit,
+      readingUnit,
+      lengthUnit,
+      face: dto.face ?? 'side',
       positionsMm,
       readingsRaw,
       readingsMm,
@@ -88,8 +104,9 @@ export class RailSweepsService {
       datum: dto.datum?.trim() || null,
       notes: dto.notes ?? '',
       result,
+      warnings,
       status,
-      target: { value: target.value, unit: target.unit },
+      target: { value: target.value, unit: target.unit, reference },
       createdById: actor.id,
       takenAt,
       createdAt: now,
@@ -100,11 +117,11 @@ export class RailSweepsService {
       if (existing) return { created: false, sweep: existing };
       throw new ConflictException('That sweep id is already used by another record');
     }
-    const unit = dto.unit;
     await this.records.checkRecorded(
       actor,
       { machineId: rail.machineId, kind: 'rail-straightness', recordType: 'rail-sweep', recordId: row.id, status },
-      `Sweep of rail ${rail.label} (${dto.phase}): least squares ${fmt(result.leastSquares.straightness, unit)}, minimum zone ${fmt(result.minimumZone.straightness, unit)}, target ${target.value} ${target.unit}`,
+      `Sweep of rail ${rail.label} (${dto.phase}, ${row.face} face): ${REFERENCE_WORDS[reference]} ${showIn(judged, readingUnit)} against a target of ${target.value} ${target.unit === 'um' ? 'µm' : target.unit}` +
+        ` (least squares ${showIn(result.leastSquares.straightness, readingUnit)}, minimum zone ${showIn(result.minimumZone.straightness, readingUnit)}); largest local slope ${slope.mmPerM.toFixed(3)} mm/m`,
     );
     return { created: true, sweep: toSweepResponse(row, false) };
   }
@@ -136,13 +153,14 @@ function checkStations(dto: CreateSweepDto) {
   const problems: string[] = [];
   dto.stations.forEach((s, i) => {
     const first = seen.get(s.position);
-    if (first !== undefined) problems.push(`stations.${i}.position repeats ${s.position} mm (also at stations.${first})`);
+    if (first !== undefined) problems.push(`stations.${i}.position repeats ${s.position} ${dto.lengthUnit ?? 'mm'} (also at stations.${first})`);
     else seen.set(s.position, i);
   });
   if (problems.length) throw new BadRequestException(problems);
 }
 
-function fmt(mm: number, unit: CreateSweepDto['unit']) {
-  const v = fromMm(mm, unit);
-  return `${v.toFixed(unit === 'mm' ? 4 : unit === 'in' ? 5 : 2)} ${unit === 'um' ? 'µm' : unit}`;
+/** Positions are bounded in mm whatever unit they were typed in. */
+function checkPositionsMm(positionsMm: number[], unit: string) {
+  const i = positionsMm.findIndex((p) => Math.abs(p) > 20_000);
+  if (i >= 0) throw new BadRequestException([`stations.${i}.position must be within ±20 000 mm along the rail (in ${unit})`]);
 }

@@ -1,6 +1,10 @@
 import { holePositions } from '../engine/bolt-down.js';
-import type { StoredSweepResult } from '../database/schema/rails.js';
+import type { StoredLocalSlope, StoredSweepResult } from '../database/schema/rails.js';
+import type { ResultWarning } from '../engine/warnings.js';
+import { slopeOf } from './sweep-judgement.js';
 import { typicalBoltFor } from './bolt-torques.js';
+import { defaultEndDistanceMm } from '../engine/rail-holes.js';
+import { fromMm, type LengthUnit } from '../engine/units.js';
 import type { LatestSweep, RailRow, SweepListRow, SweepRow } from './rails.repository.js';
 import { finiteList, finiteOrNull, readableResult, UNREADABLE_INPUT, UNREADABLE_RESULT } from '../common/stored-result.js';
 
@@ -19,14 +23,26 @@ export interface RailResponse {
   machineId: string;
   label: string;
   axis: string;
+  /** Unit the lengths below were typed in; `length`, `holePitch`, … are in it, the `…Mm` twins in mm. */
+  lengthUnit: RailRow['lengthUnit'];
+  length: number;
+  holePitch: number;
+  firstHole: number;
+  /** Distance to the partner rail (a in S = a × K); null until entered. */
+  spacing: number | null;
+  /** The end distance the holes keep, in lengthUnit; `endDistanceIsDefault` when not entered. */
+  endDistance: number;
+  endDistanceIsDefault: boolean;
   /** Goes out as null when the stored length cannot be read (see `unreadable`). */
   lengthMm: number;
   profileSize: number | null;
   holePitchMm: number;
   firstHoleMm: number;
+  spacingMm: number | null;
+  endDistanceMm: number;
   partnerRailId: string | null;
-  /** Hole centres from the rail's start, mm. */
-  holes: { index: number; position: number }[];
+  /** Hole centres from the rail's start, in mm (`position`) and in lengthUnit (`at`). */
+  holes: { index: number; position: number; at: number }[];
   typicalBoltSize: string | null;
   createdAt: string;
   updatedAt: string;
@@ -43,7 +59,12 @@ export interface SweepSummary {
   leastSquaresStraightness: number | null;
   minimumZoneStraightness: number | null;
   status: SweepRow['status'];
-  target: { value: number; unit: string };
+  target: SweepRow['target'];
+  face: SweepRow['face'];
+  readingUnit: SweepRow['readingUnit'];
+  lengthUnit: SweepRow['lengthUnit'];
+  /** Largest local slope of the judged residuals, mm/m (null on sweeps saved before it was kept). */
+  localSlopeMmPerM: number | null;
   unreadable?: string;
 }
 
@@ -51,7 +72,6 @@ export interface SweepSummary {
 export interface SweepListItem extends SweepSummary {
   railId: string;
   machineId: string;
-  unit: SweepRow['unit'];
   takenBy: string;
   stationCount: number;
   createdAt: string;
@@ -67,9 +87,13 @@ export interface SweepResponse {
   id: string;
   railId: string;
   machineId: string;
-  unit: SweepRow['unit'];
-  /** position in mm; reading as entered (in `unit`); readingMm converted. */
-  stations: { position: number; reading: number; readingMm: number }[] | null;
+  /** Positions are in lengthUnit, readings and resolution in readingUnit, as typed; the `…Mm` twins in mm. */
+  lengthUnit: SweepRow['lengthUnit'];
+  readingUnit: SweepRow['readingUnit'];
+  face: SweepRow['face'];
+  stations: { position: number; positionMm: number; reading: number; readingMm: number }[] | null;
+  localSlope: StoredLocalSlope | null;
+  warnings: ResultWarning[];
   instrument: string;
   resolution: number | null;
   temperatureC: number | null;
@@ -81,7 +105,7 @@ export interface SweepResponse {
   notes: string;
   result: StoredSweepResult | null;
   status: SweepRow['status'];
-  target: { value: number; unit: string };
+  target: SweepRow['target'];
   /** Present when the stored result or readings cannot be read: those come back null. */
   unreadable?: string;
   takenAt: string;
@@ -92,6 +116,13 @@ export interface SweepResponse {
 
 export function railHoles(row: Pick<RailRow, 'lengthMm' | 'holePitchMm' | 'firstHoleMm'>) {
   return holePositions({ lengthMm: row.lengthMm, pitchMm: row.holePitchMm, firstHoleOffsetMm: row.firstHoleMm }).map((position, index) => ({ index, position }));
+}
+
+/** A length in mm back in the unit it was typed in, without binary noise (31.5 in stays 31.5). */
+export const inLengthUnit = (mm: number, unit: LengthUnit) => (unit === 'mm' ? mm : Number(fromMm(mm, unit).toPrecision(15)));
+
+export function railEndDistanceMm(row: Pick<RailRow, 'endDistanceMm' | 'profileSizeMm'>): number {
+  return row.endDistanceMm ?? defaultEndDistanceMm(typicalBoltFor(row.profileSizeMm));
 }
 
 /** The rail's holes, or null when its stored geometry cannot be read (an old bad row). */
@@ -111,12 +142,21 @@ export function toRailResponse(row: RailRow): RailResponse {
     machineId: row.machineId,
     label: row.label,
     axis: row.axis,
+    lengthUnit: row.lengthUnit,
+    length: inLengthUnit(row.lengthMm, row.lengthUnit),
+    holePitch: inLengthUnit(row.holePitchMm, row.lengthUnit),
+    firstHole: inLengthUnit(row.firstHoleMm, row.lengthUnit),
+    spacing: row.spacingMm === null ? null : inLengthUnit(row.spacingMm, row.lengthUnit),
+    endDistance: inLengthUnit(railEndDistanceMm(row), row.lengthUnit),
+    endDistanceIsDefault: row.endDistanceMm === null,
     lengthMm: row.lengthMm,
     profileSize: row.profileSizeMm,
     holePitchMm: row.holePitchMm,
     firstHoleMm: row.firstHoleMm,
+    spacingMm: row.spacingMm,
+    endDistanceMm: railEndDistanceMm(row),
     partnerRailId: row.partnerRailId,
-    holes: holes ?? [],
+    holes: (holes ?? []).map((h) => ({ ...h, at: inLengthUnit(h.position, row.lengthUnit) })),
     ...(holes ? {} : { unreadable: UNREADABLE_RAIL }),
     typicalBoltSize: typicalBoltFor(row.profileSizeMm),
     createdAt: row.createdAt.toISOString(),
@@ -135,6 +175,10 @@ export function toSweepSummary(row: SweepRow): SweepSummary {
     minimumZoneStraightness: r ? r.minimumZone.straightness : null,
     status: r ? row.status : 'outside-target',
     target: row.target,
+    face: row.face,
+    readingUnit: row.readingUnit,
+    lengthUnit: row.lengthUnit,
+    localSlopeMmPerM: r?.localSlope?.mmPerM ?? null,
     ...(r ? {} : { unreadable: UNREADABLE_RESULT }),
   };
 }
@@ -152,6 +196,10 @@ export function toLatestSweepSummary(s: LatestSweep): SweepSummary {
     datum: s.datum,
     ...readableFigures(s),
     target: s.target,
+    face: s.face,
+    readingUnit: s.readingUnit,
+    lengthUnit: s.lengthUnit,
+    localSlopeMmPerM: s.localSlopeMmPerM,
   };
 }
 
@@ -168,8 +216,14 @@ export function toSweepResponse(row: SweepRow, locked: boolean): SweepResponse {
     id: row.id,
     railId: row.railId,
     machineId: row.machineId,
-    unit: row.unit,
-    stations: readings ? row.positionsMm.map((position, i) => ({ position, reading: row.readingsRaw[i], readingMm: row.readingsMm[i] })) : null,
+    lengthUnit: row.lengthUnit,
+    readingUnit: row.readingUnit,
+    face: row.face,
+    stations: readings
+      ? row.positionsMm.map((positionMm, i) => ({ position: inLengthUnit(positionMm, row.lengthUnit), positionMm, reading: row.readingsRaw[i], readingMm: row.readingsMm[i] }))
+      : null,
+    localSlope: result && readings ? (result.localSlope ?? slopeOf(row.positionsMm, result, row.target.reference ?? 'least-squares')) : null,
+    warnings: Array.isArray(row.warnings) ? row.warnings : [],
     instrument: row.instrument,
     resolution: row.resolution,
     temperatureC: row.temperatureC,
@@ -194,13 +248,16 @@ export function toSweepListItem(row: SweepListRow, locked: boolean): SweepListIt
     id: row.id,
     railId: row.railId,
     machineId: row.machineId,
-    unit: row.unit,
     takenAt: row.takenAt.toISOString(),
     takenBy: row.takenBy,
     phase: row.phase,
     datum: row.datum,
     ...readableFigures(row),
     target: row.target,
+    face: row.face,
+    readingUnit: row.readingUnit,
+    lengthUnit: row.lengthUnit,
+    localSlopeMmPerM: row.localSlopeMmPerM,
     stationCount: row.stationCount,
     createdAt: row.createdAt.toISOString(),
     locked,

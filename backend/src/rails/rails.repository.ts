@@ -20,15 +20,23 @@ export interface LatestSweep {
   minimumZoneStraightness: number;
   stationCount: number;
   target: SweepRow['target'];
+  face: SweepRow['face'];
+  readingUnit: SweepRow['readingUnit'];
+  lengthUnit: SweepRow['lengthUnit'];
+  /** In readingUnit, as typed. */
+  resolution: number | null;
+  /** First to last station, mm. */
+  spanMm: number;
+  /** Largest local slope kept with the result, mm/m; null on sweeps saved before it was kept. */
+  localSlopeMmPerM: number | null;
 }
 
 /** A sweep as partner parallelism compares it: stations and readings, no fitted result. */
-export type DatumSweep = Pick<SweepRow, 'id' | 'railId' | 'datum' | 'takenAt' | 'positionsMm' | 'readingsMm'>;
+export type DatumSweep = Pick<SweepRow, 'id' | 'railId' | 'datum' | 'face' | 'takenAt' | 'positionsMm' | 'readingsMm'>;
 
 /** A sweep as a page of the rail's list shows it: summary columns only. */
 export interface SweepListRow extends LatestSweep {
   machineId: string;
-  unit: SweepRow['unit'];
   takenBy: string;
   createdAt: Date;
 }
@@ -131,11 +139,14 @@ export class RailsRepository {
       mz: number;
       stations: number;
       target: SweepRow['target'];
-    }>(sql`
+    } & SummaryExtras>(sql`
       select s.id, s.rail_id, s.taken_at, s.phase, s.datum, s.status, s.target,
              case when jsonb_typeof(s.result #> '{leastSquares,straightness}') = 'number' then (s.result #>> '{leastSquares,straightness}')::float8 end as ls,
              case when jsonb_typeof(s.result #> '{minimumZone,straightness}') = 'number' then (s.result #>> '{minimumZone,straightness}')::float8 end as mz,
-             jsonb_array_length(s.positions_mm) as stations
+             jsonb_array_length(s.positions_mm) as stations,
+             s.face, s.reading_unit, s.length_unit, s.resolution,
+             (select max(v::float8) - min(v::float8) from jsonb_array_elements_text(s.positions_mm) v) as span,
+             case when jsonb_typeof(s.result #> '{localSlope,mmPerM}') = 'number' then (s.result #>> '{localSlope,mmPerM}')::float8 end as slope
       from unnest(${uuidArray(railIds)}) as r(id)
       cross join lateral (
         select * from rail_sweeps x
@@ -157,6 +168,7 @@ export class RailsRepository {
           minimumZoneStraightness: storedNumber(r.mz),
           stationCount: Number(r.stations),
           target: r.target,
+          ...summaryExtras(r),
         },
       ]),
     );
@@ -169,7 +181,7 @@ export class RailsRepository {
    */
   async latestSweepsPerDatum(workshopId: string, railIds: string[]): Promise<DatumSweep[]> {
     if (!railIds.length) return [];
-    const { rows } = await this.db.execute<{ id: string; rail_id: string; datum: string; taken_at: string; positions_mm: number[]; readings_mm: number[] }>(sql`
+    const { rows } = await this.db.execute<{ id: string; rail_id: string; datum: string; face: SweepRow['face']; taken_at: string; positions_mm: number[]; readings_mm: number[] }>(sql`
       with recursive keys(rail_id, dkey) as (
         select r.id, (select lower(x.datum) from rail_sweeps x where x.rail_id = r.id and x.datum is not null order by lower(x.datum) limit 1)
         from unnest(${uuidArray(railIds)}) as r(id)
@@ -177,16 +189,17 @@ export class RailsRepository {
         select k.rail_id, (select lower(x.datum) from rail_sweeps x where x.rail_id = k.rail_id and x.datum is not null and lower(x.datum) > k.dkey order by lower(x.datum) limit 1)
         from keys k where k.dkey is not null
       )
-      select s.id, s.rail_id, s.datum, s.taken_at, s.positions_mm, s.readings_mm
+      select s.id, s.rail_id, s.datum, s.face, s.taken_at, s.positions_mm, s.readings_mm
       from keys k
+      cross join (values ('side'), ('top')) as f(face)
       cross join lateral (
-        select x.id, x.rail_id, x.datum, x.taken_at, x.positions_mm, x.readings_mm from rail_sweeps x
-        where x.rail_id = k.rail_id and x.datum is not null and lower(x.datum) = k.dkey and x.workshop_id = ${workshopId}
+        select x.id, x.rail_id, x.datum, x.face, x.taken_at, x.positions_mm, x.readings_mm from rail_sweeps x
+        where x.rail_id = k.rail_id and x.datum is not null and lower(x.datum) = k.dkey and x.face = f.face and x.workshop_id = ${workshopId}
         order by x.taken_at desc, x.created_at desc
         limit 1
       ) s
       where k.dkey is not null`);
-    return rows.map((r) => ({ id: r.id, railId: r.rail_id, datum: r.datum, takenAt: new Date(r.taken_at), positionsMm: r.positions_mm, readingsMm: r.readings_mm }));
+    return rows.map((r) => ({ id: r.id, railId: r.rail_id, datum: r.datum, face: r.face, takenAt: new Date(r.taken_at), positionsMm: r.positions_mm, readingsMm: r.readings_mm }));
   }
 
   /** One page of a rail's sweeps, newest first, after the given one; one row more than asked tells there is a next page. */
@@ -195,7 +208,6 @@ export class RailsRepository {
       id: string;
       rail_id: string;
       machine_id: string;
-      unit: SweepRow['unit'];
       taken_by: string;
       taken_at: string;
       created_at: string;
@@ -206,11 +218,14 @@ export class RailsRepository {
       ls: number;
       mz: number;
       stations: number;
-    }>(sql`
-      select s.id, s.rail_id, s.machine_id, s.unit, s.taken_by, s.taken_at, s.created_at, s.phase, s.datum, s.status, s.target,
+    } & SummaryExtras>(sql`
+      select s.id, s.rail_id, s.machine_id, s.taken_by, s.taken_at, s.created_at, s.phase, s.datum, s.status, s.target,
              case when jsonb_typeof(s.result #> '{leastSquares,straightness}') = 'number' then (s.result #>> '{leastSquares,straightness}')::float8 end as ls,
              case when jsonb_typeof(s.result #> '{minimumZone,straightness}') = 'number' then (s.result #>> '{minimumZone,straightness}')::float8 end as mz,
-             jsonb_array_length(s.positions_mm) as stations
+             jsonb_array_length(s.positions_mm) as stations,
+             s.face, s.reading_unit, s.length_unit, s.resolution,
+             (select max(v::float8) - min(v::float8) from jsonb_array_elements_text(s.positions_mm) v) as span,
+             case when jsonb_typeof(s.result #> '{localSlope,mmPerM}') = 'number' then (s.result #>> '{localSlope,mmPerM}')::float8 end as slope
       from rail_sweeps s
       where s.workshop_id = ${workshopId} and s.rail_id = ${railId}
         ${afterId ? sql`and (s.taken_at, s.id) < (select c.taken_at, c.id from rail_sweeps c where c.id = ${afterId} and c.rail_id = ${railId})` : sql``}
@@ -220,7 +235,6 @@ export class RailsRepository {
       id: r.id,
       railId: r.rail_id,
       machineId: r.machine_id,
-      unit: r.unit,
       takenBy: r.taken_by,
       takenAt: new Date(r.taken_at),
       createdAt: new Date(r.created_at),
@@ -231,6 +245,7 @@ export class RailsRepository {
       leastSquaresStraightness: storedNumber(r.ls),
       minimumZoneStraightness: storedNumber(r.mz),
       stationCount: Number(r.stations),
+      ...summaryExtras(r),
     }));
   }
 
@@ -250,6 +265,12 @@ export class RailsRepository {
   async sweepIdTaken(id: string): Promise<boolean> {
     const [row] = await this.db.select({ id: railSweeps.id }).from(railSweeps).where(eq(railSweeps.id, id));
     return !!row;
+  }
+
+  /** Whole sweeps by id, this workshop's only (the certificate's series read their residuals). */
+  sweepsByIds(workshopId: string, ids: string[]): Promise<SweepRow[]> {
+    if (!ids.length) return Promise.resolve([]);
+    return this.db.select().from(railSweeps).where(and(eq(railSweeps.workshopId, workshopId), inArray(railSweeps.id, ids)));
   }
 
   /** Inserts unless the id exists already; returns null when it did (a retried save). */
@@ -299,4 +320,24 @@ export class RailsRepository {
 /** A figure read out of a stored result: missing or not a number stays NaN, so readers flag it instead of showing 0. */
 function storedNumber(v: unknown): number {
   return v === null || v === undefined ? NaN : Number(v);
+}
+
+type SummaryExtras = {
+  face: SweepRow['face'];
+  reading_unit: SweepRow['readingUnit'];
+  length_unit: SweepRow['lengthUnit'];
+  resolution: number | null;
+  span: number | null;
+  slope: number | null;
+};
+
+function summaryExtras(r: SummaryExtras) {
+  return {
+    face: r.face,
+    readingUnit: r.reading_unit,
+    lengthUnit: r.length_unit,
+    resolution: r.resolution === null ? null : Number(r.resolution),
+    spanMm: r.span === null ? 0 : Number(r.span),
+    localSlopeMmPerM: r.slope === null ? null : Number(r.slope),
+  };
 }

@@ -21,7 +21,7 @@ export type TargetKey = (typeof TARGET_KEYS)[number];
 export const TARGET_LABELS: Record<TargetKey, string> = {
   railStraightness: 'Rail straightness (over the rail length)',
   railParallelism: 'Rail parallelism (partner rails)',
-  railHeightDifference: 'Height difference between partner rails',
+  railHeightDifference: 'Height difference between partner rails (S = a × K, a the rail spacing)',
   squareness: 'Gantry squareness',
   bedFlatness: 'Bed flatness',
   stepsPerMmError: 'Steps-per-mm error',
@@ -35,10 +35,10 @@ export const TARGET_LABELS: Record<TargetKey, string> = {
 };
 
 /** Which kind of unit each target may be stored in. */
-export const TARGET_UNIT_KIND: Record<TargetKey, 'length' | 'mm/m' | '%' | 'days'> = {
+export const TARGET_UNIT_KIND: Record<TargetKey, 'length' | 'mm/m' | '%' | 'days' | 'per-spacing'> = {
   railStraightness: 'length',
   railParallelism: 'length',
-  railHeightDifference: 'length',
+  railHeightDifference: 'per-spacing',
   squareness: 'mm/m',
   bedFlatness: 'length',
   stepsPerMmError: '%',

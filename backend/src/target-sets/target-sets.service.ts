@@ -1,6 +1,6 @@
 import { BadRequestException, Injectable, NotFoundException } from '@nestjs/common';
 import type { SessionUser } from '../auth/session-user.js';
-import type { TargetValue } from '../database/schema/target-sets.js';
+import { STRAIGHTNESS_REFERENCES, type TargetValue } from '../database/schema/target-sets.js';
 import { RecordsService } from '../records/records.service.js';
 import { DEFAULT_TARGET_SETS } from './default-target-sets.js';
 import { TARGET_KEYS, TARGET_UNIT_KIND, targetInBaseUnit, type TargetKey } from './target-keys.js';
@@ -8,7 +8,8 @@ import { toTargetSetResponse, toTargetSetUser, type TargetSetResponse, type Targ
 import { TargetSetsRepository } from './target-sets.repository.js';
 import type { CreateTargetSetDto, UpdateTargetSetDto } from './dto/target-set.dto.js';
 
-const UNITS_BY_KIND = { length: ['mm', 'um', 'in', 'thou'], 'mm/m': ['mm/m'], '%': ['%'], days: ['days'] } as const;
+// Height difference scales with rail spacing (K in µm per mm); a plain length is still read as stored.
+const UNITS_BY_KIND = { length: ['mm', 'um', 'in', 'thou'], 'mm/m': ['mm/m'], '%': ['%'], days: ['days'], 'per-spacing': ['um/mm', 'mm', 'um', 'in', 'thou'] } as const;
 
 @Injectable()
 export class TargetSetsService {
@@ -90,7 +91,9 @@ function checkTargets(input: Record<string, Partial<TargetValue>>, complete: boo
     else if (typeof t.value !== 'number' || !Number.isFinite(t.value) || t.value < 0) problems.push(`targets.${key}.value must be a number of 0 or more`);
     else if (!t.unit || !allowed.includes(t.unit)) problems.push(`targets.${key}.unit must be one of ${allowed.join(', ')}`);
     else if (t.source !== undefined && (typeof t.source !== 'string' || t.source.length > 500)) problems.push(`targets.${key}.source must be text of at most 500 characters`);
-    else out[key] = { value: t.value, unit: t.unit, ...(t.source ? { source: t.source } : {}) };
+    else if (t.reference !== undefined && (key !== 'railStraightness' || !(STRAIGHTNESS_REFERENCES as readonly string[]).includes(t.reference)))
+      problems.push(key === 'railStraightness' ? `targets.${key}.reference must be one of ${STRAIGHTNESS_REFERENCES.join(', ')}` : `targets.${key}.reference is read on railStraightness only`);
+    else out[key] = { value: t.value, unit: t.unit, ...(t.source ? { source: t.source } : {}), ...(t.reference ? { reference: t.reference } : {}) };
   }
   if (complete) for (const key of TARGET_KEYS) if (!(key in input)) problems.push(`targets.${key} is required`);
   if (problems.length) throw new BadRequestException(problems);

@@ -1,5 +1,7 @@
 import { IsIn, IsNumber, Max, Min } from 'class-validator';
-import { BOLT_DOWN_MODES, BOLT_DOWN_UNITS, type BoltDownMode, type BoltDownUnit } from '../../database/schema/bolt-downs.js';
+import { BOLT_DOWN_MODES, type BoltDownMode, type BoltDownUnit } from '../../database/schema/bolt-downs.js';
+import { LengthUnitField, ReadingUnitField } from '../../common/unit-fields.js';
+import { ReplacedUnitField } from '../../rails/dto/replaced-unit.js';
 import { Optional } from '../../common/optional.js';
 
 export class CreateBoltDownDto {
@@ -7,17 +9,23 @@ export class CreateBoltDownDto {
   @IsIn(BOLT_DOWN_MODES, { message: `mode must be one of ${BOLT_DOWN_MODES.join(', ')}` })
   mode: BoltDownMode;
 
-  /** Unit the readings are typed in; mm when absent. */
-  @Optional()
-  @IsIn(BOLT_DOWN_UNITS, { message: `unit must be one of ${BOLT_DOWN_UNITS.join(', ')}` })
-  unit?: BoltDownUnit;
+  /** Unit the readings and the band are typed in; mm when absent. */
+  @ReadingUnitField()
+  readingUnit?: BoltDownUnit;
+
+  /** Unit the hole positions are shown in; the rail's own length unit when absent. */
+  @LengthUnitField()
+  lengthUnit?: BoltDownUnit;
+
+  @ReplacedUnitField()
+  unit?: never;
 
   /**
-   * Half-width of the band around the aim that counts as on target, in `unit`; when absent, half
+   * Half-width of the band around the aim that counts as on target, in `readingUnit`; when absent, half
    * the rail straightness target of the machine's target set.
    */
   @Optional()
-  @IsNumber({ allowNaN: false, allowInfinity: false }, { message: 'band must be a number in the bolt-down unit' })
+  @IsNumber({ allowNaN: false, allowInfinity: false }, { message: 'band must be a number in readingUnit' })
   @Min(0, { message: 'band must not be negative' })
   @Max(100_000, { message: 'band is too large' })
   band?: number;

@@ -1,3 +1,5 @@
+import { LengthUnitField } from '../../common/unit-fields.js';
+import { ReplacedUnitField } from '../../rails/dto/replaced-unit.js';
 import { Type } from 'class-transformer';
 import { ArrayMaxSize, ArrayMinSize, IsArray, IsIn, IsInt, IsNumber, IsObject, IsString, Max, MaxLength, Min, MinLength, ValidateIf, ValidateNested } from 'class-validator';
 import { Optional } from '../../common/optional.js';
@@ -9,29 +11,29 @@ const LIMIT = 100_000;
 export const MAX_HOLES = 1000;
 
 export class HoleDto {
-  @IsNumber(FINITE, { message: 'x must be a number in the pattern unit (from the outline’s left edge)' })
+  @IsNumber(FINITE, { message: 'x must be a number in lengthUnit (from the outline’s left edge)' })
   @Min(-LIMIT, { message: `x must be within ±${LIMIT}` })
   @Max(LIMIT, { message: `x must be within ±${LIMIT}` })
   x: number;
 
-  @IsNumber(FINITE, { message: 'y must be a number in the pattern unit (from the outline’s lower edge)' })
+  @IsNumber(FINITE, { message: 'y must be a number in lengthUnit (from the outline’s lower edge)' })
   @Min(-LIMIT, { message: `y must be within ±${LIMIT}` })
   @Max(LIMIT, { message: `y must be within ±${LIMIT}` })
   y: number;
 
-  @IsNumber(FINITE, { message: 'diameter must be a number in the pattern unit' })
+  @IsNumber(FINITE, { message: 'diameter must be a number in lengthUnit' })
   @Min(0, { message: 'diameter must be greater than 0' })
   @Max(LIMIT, { message: `diameter must be at most ${LIMIT}` })
   diameter: number;
 }
 
 export class GridDto {
-  @IsNumber(FINITE, { message: 'originX must be the x of the first hole, in the pattern unit' })
+  @IsNumber(FINITE, { message: 'originX must be the x of the first hole, in lengthUnit' })
   @Min(-LIMIT, { message: `originX must be within ±${LIMIT}` })
   @Max(LIMIT, { message: `originX must be within ±${LIMIT}` })
   originX: number;
 
-  @IsNumber(FINITE, { message: 'originY must be the y of the first hole, in the pattern unit' })
+  @IsNumber(FINITE, { message: 'originY must be the y of the first hole, in lengthUnit' })
   @Min(-LIMIT, { message: `originY must be within ±${LIMIT}` })
   @Max(LIMIT, { message: `originY must be within ±${LIMIT}` })
   originY: number;
@@ -46,34 +48,34 @@ export class GridDto {
   @Max(100, { message: 'columns must be at most 100' })
   columns: number;
 
-  @IsNumber(FINITE, { message: 'pitchX must be the distance between columns, in the pattern unit' })
+  @IsNumber(FINITE, { message: 'pitchX must be the distance between columns, in lengthUnit' })
   @Min(0, { message: 'pitchX must not be negative' })
   @Max(LIMIT, { message: `pitchX must be at most ${LIMIT}` })
   pitchX: number;
 
-  @IsNumber(FINITE, { message: 'pitchY must be the distance between rows, in the pattern unit' })
+  @IsNumber(FINITE, { message: 'pitchY must be the distance between rows, in lengthUnit' })
   @Min(0, { message: 'pitchY must not be negative' })
   @Max(LIMIT, { message: `pitchY must be at most ${LIMIT}` })
   pitchY: number;
 
-  @IsNumber(FINITE, { message: 'diameter must be a number in the pattern unit' })
+  @IsNumber(FINITE, { message: 'diameter must be a number in lengthUnit' })
   @Min(0, { message: 'diameter must be greater than 0' })
   @Max(LIMIT, { message: `diameter must be at most ${LIMIT}` })
   diameter: number;
 }
 
 export class CircleDto {
-  @IsNumber(FINITE, { message: 'centreX must be the x of the circle’s centre, in the pattern unit' })
+  @IsNumber(FINITE, { message: 'centreX must be the x of the circle’s centre, in lengthUnit' })
   @Min(-LIMIT, { message: `centreX must be within ±${LIMIT}` })
   @Max(LIMIT, { message: `centreX must be within ±${LIMIT}` })
   centreX: number;
 
-  @IsNumber(FINITE, { message: 'centreY must be the y of the circle’s centre, in the pattern unit' })
+  @IsNumber(FINITE, { message: 'centreY must be the y of the circle’s centre, in lengthUnit' })
   @Min(-LIMIT, { message: `centreY must be within ±${LIMIT}` })
   @Max(LIMIT, { message: `centreY must be within ±${LIMIT}` })
   centreY: number;
 
-  @IsNumber(FINITE, { message: 'circleDiameter must be the diameter the hole centres lie on, in the pattern unit' })
+  @IsNumber(FINITE, { message: 'circleDiameter must be the diameter the hole centres lie on, in lengthUnit' })
   @Min(0, { message: 'circleDiameter must not be negative' })
   @Max(LIMIT, { message: `circleDiameter must be at most ${LIMIT}` })
   circleDiameter: number;
@@ -88,7 +90,7 @@ export class CircleDto {
   @Max(360, { message: 'startAngleDeg must be within ±360°' })
   startAngleDeg: number;
 
-  @IsNumber(FINITE, { message: 'diameter must be a number in the pattern unit' })
+  @IsNumber(FINITE, { message: 'diameter must be a number in lengthUnit' })
   @Min(0, { message: 'diameter must be greater than 0' })
   @Max(LIMIT, { message: `diameter must be at most ${LIMIT}` })
   diameter: number;
@@ -104,15 +106,19 @@ export class HolePatternDto {
   @IsIn(PATTERN_REFERENCES, { message: `reference must be one of ${PATTERN_REFERENCES.join(', ')}` })
   reference: PatternReference;
 
-  @IsIn(PATTERN_UNITS, { message: 'unit must be mm or in' })
-  unit: PatternUnit;
+  /** Unit of the outline and every coordinate and diameter of the entry; mm when absent. */
+  @LengthUnitField()
+  lengthUnit?: PatternUnit;
 
-  @IsNumber(FINITE, { message: 'width must be the outline’s width, in the pattern unit' })
+  @ReplacedUnitField()
+  unit?: never;
+
+  @IsNumber(FINITE, { message: 'width must be the outline’s width, in lengthUnit' })
   @Min(0, { message: 'width must be greater than 0' })
   @Max(LIMIT, { message: `width must be at most ${LIMIT}` })
   width: number;
 
-  @IsNumber(FINITE, { message: 'height must be the outline’s height, in the pattern unit' })
+  @IsNumber(FINITE, { message: 'height must be the outline’s height, in lengthUnit' })
   @Min(0, { message: 'height must be greater than 0' })
   @Max(LIMIT, { message: `height must be at most ${LIMIT}` })
   height: number;

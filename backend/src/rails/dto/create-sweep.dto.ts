@@ -15,21 +15,24 @@ import {
   Min,
   ValidateNested,
 } from 'class-validator';
-import { SWEEP_PHASES, SWEEP_UNITS, type SweepPhase, type SweepUnit } from '../../database/schema/rails.js';
+import { SWEEP_FACES, SWEEP_PHASES, type SweepFace, type SweepPhase } from '../../database/schema/rails.js';
 import { Optional } from '../../common/optional.js';
+import { LengthUnitField, ReadingUnitField } from '../../common/unit-fields.js';
+import type { LengthUnit } from '../../engine/units.js';
+import { ReplacedUnitField } from './replaced-unit.js';
 
 const FINITE = { allowNaN: false, allowInfinity: false } as const;
 export const MAX_STATIONS = 2000;
 
 export class StationDto {
-  @IsNumber(FINITE, { message: 'position must be a number of mm along the rail' })
-  @Min(-20_000, { message: 'position must be within ±20 000 mm' })
-  @Max(20_000, { message: 'position must be within ±20 000 mm' })
+  @IsNumber(FINITE, { message: 'position must be a number along the rail, in lengthUnit' })
+  @Min(-1_000_000, { message: 'position must be within ±1 000 000 in lengthUnit' })
+  @Max(1_000_000, { message: 'position must be within ±1 000 000 in lengthUnit' })
   position: number;
 
-  @IsNumber(FINITE, { message: 'reading must be a number in the sweep unit' })
-  @Min(-1_000_000, { message: 'reading must be within ±1 000 000 in the sweep unit' })
-  @Max(1_000_000, { message: 'reading must be within ±1 000 000 in the sweep unit' })
+  @IsNumber(FINITE, { message: 'reading must be a number in readingUnit' })
+  @Min(-1_000_000, { message: 'reading must be within ±1 000 000 in readingUnit' })
+  @Max(1_000_000, { message: 'reading must be within ±1 000 000 in readingUnit' })
   reading: number;
 }
 
@@ -38,8 +41,21 @@ export class CreateSweepDto {
   @IsUUID('all', { message: 'id must be a uuid made by the client' })
   id?: string;
 
-  @IsIn(SWEEP_UNITS, { message: `unit must be one of ${SWEEP_UNITS.join(', ')}` })
-  unit: SweepUnit;
+  /** Unit of the readings and of the instrument resolution. */
+  @ReadingUnitField()
+  readingUnit?: LengthUnit;
+
+  /** Unit of the station positions. */
+  @LengthUnitField()
+  lengthUnit?: LengthUnit;
+
+  @ReplacedUnitField()
+  unit?: never;
+
+  /** The face the indicator reads: side (sideways straightness) or top (heights); side when absent. */
+  @Optional()
+  @IsIn(SWEEP_FACES, { message: `face must be one of ${SWEEP_FACES.join(', ')}: the rail face the indicator reads` })
+  face?: SweepFace;
 
   @IsDefined({ message: 'stations is required: a list of {position, reading}' })
   @IsArray({ message: 'stations must be a list of {position, reading}' })
@@ -54,9 +70,9 @@ export class CreateSweepDto {
   @MaxLength(120, { message: 'instrument must be at most 120 characters' })
   instrument?: string;
 
-  /** Smallest step of the instrument, in `unit`. */
+  /** Smallest step of the instrument, in `readingUnit`. */
   @Optional()
-  @IsNumber(FINITE, { message: 'resolution must be a number in the sweep unit' })
+  @IsNumber(FINITE, { message: 'resolution must be a number in readingUnit' })
   @Min(0, { message: 'resolution must not be negative' })
   resolution?: number;
 
