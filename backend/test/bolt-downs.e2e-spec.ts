@@ -3,6 +3,9 @@ import { randomUUID } from 'node:crypto';
 import { RecordsService } from '../src/records/records.service.js';
 import { SubjectsRegistry } from '../src/records/subjects.registry.js';
 import { anonymous, createTestApp, createTestWorkshop, type Agent, type TestWorkshop } from './helpers/test-app.js';
+import { eq } from 'drizzle-orm';
+import { DRIZZLE, type Database } from '../src/database/database.tokens.js';
+import { rails } from '../src/database/schema/index.js';
 
 // A 300 mm rail with holes every 60 mm from 30 mm: holes 0…4 at 30, 90, 150, 210, 270 mm.
 // Proposed fixing order (one end, the far end, then halving the gaps): 0, 4, 2, 1, 3.
@@ -62,6 +65,37 @@ describe('bolt-down guide API', () => {
     machineId = machine.body.id;
   });
   afterAll(() => app.close());
+
+  // 1 thou = 0.0254 mm exactly: the same readings typed in mm and in thou give the same aims in mm;
+  // hole positions come back in the bolt-down's length unit as well as in mm.
+  it('mm and thou/inch give the same guide', async () => {
+    const metric = await start(await newRail(), { mode: 'line', readingUnit: 'mm', lengthUnit: 'mm' });
+    const inch = await start(await newRail(), { mode: 'line', readingUnit: 'thou', lengthUnit: 'in' });
+    expect(inch).toMatchObject({ readingUnit: 'thou', lengthUnit: 'in' });
+    expect(inch.holes[1].at).toBeCloseTo(90 / 25.4, 12);
+    const thou = [0, 2, 1, 3, 1];
+    let a: Awaited<ReturnType<typeof fix>> | null = null;
+    let b: Awaited<ReturnType<typeof fix>> | null = null;
+    for (let k = 0; k < 4; k++) {
+      const hole = a?.nextHole ?? 0;
+      a = await fix(metric.id, hole, (thou[k] * 254) / 10000);
+      b = await fix(inch.id, hole, thou[k]);
+    }
+    a!.holes.forEach((h, i) => {
+      expect(b!.holes[i].targetMm ?? null).toEqual(h.targetMm === null ? null : expect.closeTo(h.targetMm, 12));
+      expect(b!.holes[i].onTarget).toBe(h.onTarget);
+    });
+  });
+
+  it('refuses to begin on a rail whose holes sit on its end, naming the rail field', async () => {
+    const db = app.get<Database>(DRIZZLE);
+    const id = await newRail();
+    // A rail saved before end distances were kept: 300 mm long, holes from 0 mm.
+    await db.update(rails).set({ firstHoleMm: 0 }).where(eq(rails.id, id));
+    const res = await ws.as.builder.post(`/api/rails/${id}/bolt-downs`).send({ mode: 'line' });
+    expect(res.status).toBe(400);
+    expect(res.body.message).toEqual([expect.stringMatching(/^railId: rail Y1 \(left\) has a hole at 0 mm on or beyond its start .* correct the rail's firstHole, holePitch or length first/)]);
+  });
 
   it('a builder begins a bolt-down: holes from the rail, the proposed order, nothing fixed yet', async () => {
     const railId = await newRail();

@@ -68,6 +68,20 @@ describe('hole patterns and drilling templates', () => {
     expect([p.width, p.height]).toEqual([6, 4]);
   });
 
+  // 1 in = 25.4 mm, 1 thou = 0.0254 mm exactly: one pattern typed in mm and in thou has the same holes.
+  it('mm and thou give the same pattern', async () => {
+    const grid = (k: number) => ({ originX: 10 * k, originY: 12.7 * k, rows: 2, columns: 2, pitchX: 50.8 * k, pitchY: 25.4 * k, diameter: 6.35 * k });
+    const mm = await create({ name: 'Plate mm', reference: 'left', lengthUnit: 'mm', width: 101.6, height: 63.5, entry: 'grid', grid: grid(1) });
+    const thou = await create({ name: 'Plate thou', reference: 'left', lengthUnit: 'thou', width: 4000, height: 2500, entry: 'grid', grid: grid(1000 / 25.4) });
+    expect(thou.lengthUnit).toBe('thou');
+    expect(thou.widthMm).toBeCloseTo(mm.widthMm, 9);
+    thou.holes.forEach((h: { xMm: number; yMm: number; diameterMm: number }, i: number) => {
+      expect(h.xMm).toBeCloseTo(mm.holes[i].xMm, 9);
+      expect(h.yMm).toBeCloseTo(mm.holes[i].yMm, 9);
+      expect(h.diameterMm).toBeCloseTo(mm.holes[i].diameterMm, 9);
+    });
+  });
+
   it('refuses bad patterns with 400s naming the field, and stores nothing', async () => {
     const count = async () => (await ws.as.viewer.get(`/api/machines/${machineId}/hole-patterns`)).body.length;
     const before = await count();
