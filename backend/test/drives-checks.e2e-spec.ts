@@ -35,7 +35,7 @@ describe('travel trials and repeat-and-reverse runs', () => {
   });
   afterAll(() => app.close());
 
-  const trialBody = { unit: 'mm', stepsPerMmUsed: 640, moves: [{ commanded: 100, measured: 99.8 }] };
+  const trialBody = { lengthUnit: 'mm', stepsPerMmUsed: 640, moves: [{ commanded: 100, measured: 99.8 }] };
 
   it('a single 100 mm move measured 99.8 mm: corrected 641.2826 steps/mm, outside the router target', async () => {
     const res = await ws.as.technician.post(`/api/axes/${axisId}/travel-trials`).send(trialBody);
@@ -56,15 +56,18 @@ describe('travel trials and repeat-and-reverse runs', () => {
       { commanded: 600, measured: 23.5756 },
       { commanded: 900, measured: 35.3622 },
     ];
-    const res = await ws.as.technician.post(`/api/axes/${axisId}/travel-trials`).send({ unit: 'in', stepsPerMmUsed: 640, moves });
+    // Commanded in mm, measured in inches: the calculators' form; the record takes one lengthUnit for both,
+    // so the measured moves go to it in mm (× 25.4 exactly, unit_facts.json).
+    const movesMm = moves.map((m) => ({ commanded: m.commanded, measured: (m.measured * 254) / 10 }));
+    const res = await ws.as.technician.post(`/api/axes/${axisId}/travel-trials`).send({ lengthUnit: 'mm', stepsPerMmUsed: 640, moves: movesMm });
     expect(res.status).toBe(201);
     const engine = evaluateTravelTrial({ stepsPerMmUsed: 640, moves: moves.map((m) => ({ commandedMm: m.commanded, measuredMm: (m.measured * 254) / 10 })) });
     expect(res.body.result.correctedStepsPerMm).toBe(engine.correctedStepsPerMm);
     expect(res.body.result.errorPercent).toBe(engine.errorPercent);
     expect(res.body.result.offset).toBe(engine.offsetMm);
     expect(res.body.result.residuals).toEqual(engine.moves.map((m) => m.residualMm));
-    expect(res.body.moves).toEqual(moves); // kept as entered, in inches
-    const calc = await ws.as.viewer.post('/api/calc/travel-trial').send({ unit: 'in', stepsPerMmUsed: 640, moves });
+    expect(res.body.moves).toEqual(movesMm); // kept as entered
+    const calc = await ws.as.viewer.post('/api/calc/travel-trial').send({ lengthUnit: 'mm', stepsPerMmUsed: 640, moves: movesMm });
     expect(calc.status).toBe(200);
     expect(res.body.result.correctedStepsPerMm).toBe(calc.body.correctedStepsPerMm);
     expect(res.body.result.residualMax).toBe(calc.body.residualMax);
@@ -93,7 +96,7 @@ describe('travel trials and repeat-and-reverse runs', () => {
 
   it('stepsPerMmUsed defaults to the axis value; throughOrigin fits without an offset', async () => {
     const id = await newAxis(ws, machineId, screwAxis('Y'));
-    const res = await ws.as.owner.post(`/api/axes/${id}/travel-trials`).send({ unit: 'mm', moves: [{ commanded: 200, measured: 200.05 }, { commanded: 400, measured: 400.09 }], throughOrigin: true });
+    const res = await ws.as.owner.post(`/api/axes/${id}/travel-trials`).send({ lengthUnit: 'mm', moves: [{ commanded: 200, measured: 200.05 }, { commanded: 400, measured: 400.09 }], throughOrigin: true });
     expect(res.status).toBe(201);
     expect(res.body.stepsPerMmUsed).toBe(640);
     expect(res.body.result.offset).toBe(0);
@@ -120,7 +123,13 @@ describe('travel trials and repeat-and-reverse runs', () => {
   });
 
   it.each([
-    [{ ...trialBody, unit: 'cubit' }, /unit must be one of mm, um, in, thou/],
+    [{ ...trialBody, lengthUnit: 'cubit' }, /lengthUnit must be one of mm, um, in, thou/],
+    [{ ...trialBody, readingUnit: 'cubit' }, /readingUnit must be one of mm, um, in, thou/],
+    [{ ...trialBody, unit: 'mm' }, /unit is no longer accepted: send lengthUnit and readingUnit/],
+    [{ ...trialBody, machineTemperature: 'warm' }, /machineTemperature must be a finite number/],
+    [{ ...trialBody, machineTemperature: 20, scaleTemperature: 300 }, /scaleTemperature must be between -40 and 80/],
+    [{ ...trialBody, scaleMaterial: 'wood' }, /scaleMaterial must be one of steel/],
+    [{ ...trialBody, instrumentResolution: 0 }, /instrumentResolution must be greater than zero/],
     [{ ...trialBody, moves: [] }, /moves needs at least one/],
     [{ ...trialBody, moves: 'long' }, /moves must be a list/],
     [{ ...trialBody, moves: [{ commanded: 100 }] }, /moves\[\].measured must be a finite number/],
@@ -136,8 +145,8 @@ describe('travel trials and repeat-and-reverse runs', () => {
     expect((await ws.as.technician.get(`/api/axes/${axisId}/travel-trials`)).body.length).toBe(before);
   });
 
-  const isoBody = (unit = 'um') => ({
-    unit,
+  const isoBody = (readingUnit = 'um') => ({
+    readingUnit,
     targets: ISO_TARGETS,
     runs: [...ISO_UP.map((d) => ({ direction: 'up', deviations: d })), ...ISO_DOWN.map((d) => ({ direction: 'down', deviations: d }))],
   });
@@ -181,10 +190,18 @@ describe('travel trials and repeat-and-reverse runs', () => {
   });
 
   it('fewer than 5 runs a direction are kept with a warning', async () => {
-    const body = { unit: 'um', targets: ISO_TARGETS, runs: [...ISO_UP.slice(0, 3).map((d) => ({ direction: 'up', deviations: d })), ...ISO_DOWN.slice(0, 3).map((d) => ({ direction: 'down', deviations: d }))] };
+    const body = { readingUnit: 'um', targets: ISO_TARGETS, runs: [...ISO_UP.slice(0, 3).map((d) => ({ direction: 'up', deviations: d })), ...ISO_DOWN.slice(0, 3).map((d) => ({ direction: 'down', deviations: d }))] };
     const res = await ws.as.technician.post(`/api/axes/${axisId}/positioning-runs`).send(body);
     expect(res.status).toBe(201);
-    expect(res.body.result.warnings.join(' ')).toMatch(/asks for 5 runs in each direction/);
+    expect(res.body.warnings).toEqual([expect.objectContaining({ code: 'few-runs', message: expect.stringMatching(/asks for 5 runs in each direction \(got 3 up, 3 down\)/) })]);
+    // Kept with the record: the single read, the list and the readiness board return it.
+    const again = await ws.as.viewer.get(`/api/axes/${axisId}/positioning-runs/${res.body.id}`);
+    expect(again.body.warnings).toEqual(res.body.warnings);
+    const list = await ws.as.viewer.get(`/api/axes/${axisId}/positioning-runs`);
+    expect(list.body.find((x: { id: string }) => x.id === res.body.id).warnings).toEqual(res.body.warnings);
+    const ref = await app.get(MachinesService).getRef({ workshopId: ws.id }, machineId);
+    const check = (await app.get(ReadinessRegistry).checksFor(ref)).find((c) => c.key === `positioning:${axisId}`)!;
+    expect(check.warnings).toEqual(res.body.warnings);
   });
 
   const good = isoBody();
@@ -197,7 +214,8 @@ describe('travel trials and repeat-and-reverse runs', () => {
     [{ ...good, runs: [{ direction: 'sideways', deviations: [1, 2, 3, 4, 5] }] }, /runs\[\].direction must be up or down/],
     [{ ...good, runs: [{ direction: 'up', deviations: [1, 'x', 3, 4, 5] }] }, /every value in runs\[\].deviations must be a finite number/],
     [{ ...good, targets: 'all of them' }, /targets must be a list/],
-    [{ ...good, unit: undefined }, /unit must be one of/],
+    [{ ...good, readingUnit: 'cubit' }, /readingUnit must be one of/],
+    [{ ...good, unit: 'um' }, /unit is no longer accepted: send lengthUnit and readingUnit/],
   ])('a run %j is refused with 400 naming the field', async (body, message) => {
     const res = await ws.as.technician.post(`/api/axes/${axisId}/positioning-runs`).send(body);
     expect(res.status).toBe(400);
@@ -225,7 +243,7 @@ describe('travel trials and repeat-and-reverse runs', () => {
     expect(patch.status).toBe(409);
     expect((await ws.as.technician.get(`/api/axes/${id}`)).body.locked).toBe(true);
     // Records kept by an earlier approval (the machine since reopened) do not stop a recalibration.
-    const again = await ws.as.technician.post(`/api/axes/${id}/travel-trials`).send({ unit: 'mm', moves: [{ commanded: 100, measured: 100.1 }] });
+    const again = await ws.as.technician.post(`/api/axes/${id}/travel-trials`).send({ lengthUnit: 'mm', moves: [{ commanded: 100, measured: 100.1 }] });
     const reapplied = await ws.as.technician.post(`/api/axes/${id}/travel-trials/${again.body.id}/apply`);
     expect(reapplied.status).toBe(200);
     expect(reapplied.body.stepsHistory.at(-1)).toMatchObject({ from: 641.2826, reason: 'travel-trial', trialId: again.body.id });
@@ -265,7 +283,7 @@ describe('travel trials and repeat-and-reverse runs', () => {
     // 5000 mm/min at 5 mm lead = 1000 rpm, permissible 1947.9 rpm (THK λ2 = 15.1, 12.9 mm root, 1000 mm): 48.66 % headroom
     expect(mine.find((c) => c.key === `speed-check:${x}`)!.result).toMatchObject({ unit: '%' });
     expect(mine.find((c) => c.key === `speed-check:${x}`)!.result!.value).toBeCloseTo((1 - 1000 / 1947.9) * 100, 9);
-    const within = await ws.as.technician.post(`/api/axes/${x}/travel-trials`).send({ unit: 'mm', moves: [{ commanded: 500, measured: 500.1 }] });
+    const within = await ws.as.technician.post(`/api/axes/${x}/travel-trials`).send({ lengthUnit: 'mm', moves: [{ commanded: 500, measured: 500.1 }] });
     expect(within.body.status).toBe('within-target'); // 0.02 % ≤ 0.05 %
     checks = await app.get(ReadinessRegistry).checksFor(ref);
     const trialCheck2 = checks.find((c) => c.key === `travel-trial:${x}`)!;

@@ -60,8 +60,8 @@ describe('axes and their drive records', () => {
 
   it('axes, travel trials and runs are subjects evidence can be attached to; another workshop resolves none', async () => {
     const id = await newAxis(ws, machineId, screwAxis('S'));
-    const trial = await ws.as.technician.post(`/api/axes/${id}/travel-trials`).send({ unit: 'mm', moves: [{ commanded: 100, measured: 100.01 }] });
-    const run = await ws.as.technician.post(`/api/axes/${id}/positioning-runs`).send({ unit: 'um', targets: [10, 20], runs: [{ direction: 'up', deviations: [1, 2] }, { direction: 'up', deviations: [2, 2] }, { direction: 'down', deviations: [0, 1] }, { direction: 'down', deviations: [-1, 0] }] });
+    const trial = await ws.as.technician.post(`/api/axes/${id}/travel-trials`).send({ lengthUnit: 'mm', moves: [{ commanded: 100, measured: 100.01 }] });
+    const run = await ws.as.technician.post(`/api/axes/${id}/positioning-runs`).send({ readingUnit: 'um', targets: [10, 20], runs: [{ direction: 'up', deviations: [1, 2] }, { direction: 'up', deviations: [2, 2] }, { direction: 'down', deviations: [0, 1] }, { direction: 'down', deviations: [-1, 0] }] });
     const subjects = app.get(SubjectsRegistry);
     expect(subjects.types()).toEqual(expect.arrayContaining(['axis', 'travel-trial', 'positioning-run']));
     expect(await subjects.resolve(ws.id, 'axis', id)).toEqual({ machineId, recordType: 'axis', recordId: id, label: 'Axis S' });

@@ -2,6 +2,7 @@ import { BadRequestException, ConflictException, Injectable, NotFoundException, 
 import type { SessionUser } from '../auth/session-user.js';
 import type { StepsChange } from '../database/schema/drives.js';
 import { evaluateDrive } from '../engine/steps-per-mm.js';
+import { toMm, type LengthUnit } from '../engine/units.js';
 import { MachinesService } from '../machines/machines.service.js';
 import { RecordsService } from '../records/records.service.js';
 import { SubjectsRegistry } from '../records/subjects.registry.js';
@@ -70,17 +71,19 @@ export class AxesService implements OnModuleInit {
 
   async create(actor: SessionUser, machineId: string, dto: CreateAxisDto): Promise<AxisResponse> {
     await this.machines.getRef(actor, machineId);
+    const unit = dto.lengthUnit ?? 'mm';
     const values: AxisInsert = {
       workshopId: actor.workshopId,
       machineId,
       name: dto.name.trim(),
-      drive: toDriveRecord(dto.drive),
+      lengthUnit: unit,
+      drive: toDriveRecord(dto.drive, unit),
       motorStepsPerRev: dto.motorStepsPerRev,
       microsteps: dto.microsteps,
       gearRatio: dto.gearRatio ?? 1,
       stepsPerMm: dto.stepsPerMm,
-      maxFeedRateMmPerMin: dto.maxFeedRate ?? null,
-      measuredTravelMm: dto.measuredTravelMm ?? null,
+      maxFeedRateMmPerMin: dto.maxFeedRate == null ? null : toMm(dto.maxFeedRate, unit),
+      measuredTravelMm: travelMm(dto.measuredTravel, dto.measuredTravelMm, unit) ?? null,
       notes: dto.notes ?? '',
     };
     checkNumbers(values);
@@ -94,16 +97,20 @@ export class AxesService implements OnModuleInit {
   async update(actor: SessionUser, id: string, dto: UpdateAxisDto): Promise<AxisResponse> {
     const before = await this.findRow(actor, id);
     await this.records.assertEditable('axis', id, `Axis ${before.name}`);
+    // Lengths sent are in the unit sent, else in the axis's own; changing the unit alone keeps every length.
+    const unit = (dto.lengthUnit ?? before.lengthUnit) as LengthUnit;
+    const travel = travelMm(dto.measuredTravel, dto.measuredTravelMm, unit);
     const next: AxisInsert = {
       ...before,
       name: dto.name?.trim() ?? before.name,
-      drive: dto.drive ? toDriveRecord(dto.drive) : before.drive,
+      lengthUnit: unit,
+      drive: dto.drive ? toDriveRecord(dto.drive, unit) : before.drive,
       motorStepsPerRev: dto.motorStepsPerRev ?? before.motorStepsPerRev,
       microsteps: dto.microsteps ?? before.microsteps,
       gearRatio: dto.gearRatio ?? before.gearRatio,
       stepsPerMm: dto.stepsPerMm ?? before.stepsPerMm,
-      maxFeedRateMmPerMin: dto.maxFeedRate === undefined ? before.maxFeedRateMmPerMin : dto.maxFeedRate,
-      measuredTravelMm: dto.measuredTravelMm === undefined ? before.measuredTravelMm : dto.measuredTravelMm,
+      maxFeedRateMmPerMin: dto.maxFeedRate === undefined ? before.maxFeedRateMmPerMin : dto.maxFeedRate === null ? null : toMm(dto.maxFeedRate, unit),
+      measuredTravelMm: travel === undefined ? before.measuredTravelMm : travel,
       notes: dto.notes ?? before.notes,
     };
     checkNumbers(next);
@@ -121,7 +128,7 @@ export class AxesService implements OnModuleInit {
    * Allowed on a locked axis: the lock keeps the drive record the speed check and the travel
    * envelope were judged on, and a recalibration after approval must stay possible (and audited).
    */
-  async applyStepsPerMm(actor: SessionUser, axis: AxisRow, value: number, trialId: string): Promise<AxisRow> {
+  async applyStepsPerMm(actor: SessionUser, axis: AxisRow, value: number, trialId: string, confirmedFromTheoryPercent: number | null = null): Promise<AxisRow> {
     const stepsHistory = [...axis.stepsHistory, change(actor, axis.stepsPerMm, value, 'travel-trial', trialId)];
     const row = await this.repo.update(actor.workshopId, axis.id, { stepsPerMm: value, stepsHistory });
     await this.records.audit(actor, {
@@ -129,7 +136,7 @@ export class AxesService implements OnModuleInit {
       recordType: 'axis',
       recordId: axis.id,
       action: 'updated',
-      summary: `Axis ${axis.name}: steps per mm ${axis.stepsPerMm} → ${value} from a travel trial`,
+      summary: `Axis ${axis.name}: steps per mm ${axis.stepsPerMm} → ${value} from a travel trial${confirmedFromTheoryPercent === null ? '' : ` (${confirmedFromTheoryPercent.toFixed(1)} % from the theoretical value, confirmed)`}`,
       changes: { stepsPerMm: { from: axis.stepsPerMm, to: value }, travelTrialId: trialId },
     });
     return row;
@@ -153,12 +160,21 @@ export class AxesService implements OnModuleInit {
   }
 }
 
+/** The measured travel in mm from `measuredTravel` (in the axis's unit) or `measuredTravelMm`; undefined when neither is sent. */
+function travelMm(inUnit: number | null | undefined, mm: number | null | undefined, unit: LengthUnit): number | null | undefined {
+  if (inUnit !== undefined && mm !== undefined) throw new BadRequestException(['measuredTravel and measuredTravelMm give the same thing: send one of them (measuredTravel is in lengthUnit)']);
+  const [field, value] = inUnit !== undefined ? ['measuredTravel', inUnit] : ['measuredTravelMm', mm];
+  if (value !== undefined && value !== null && !(value > 0)) throw new BadRequestException([`${field} must be greater than zero`]);
+  if (inUnit !== undefined) return inUnit === null ? null : toMm(inUnit, unit);
+  return mm;
+}
+
 /** Range rules the DTO cannot express; the engine checks the drive itself (and names the field). */
 function checkNumbers(v: AxisInsert): void {
   const problems: string[] = [];
   if (!(v.stepsPerMm > 0)) problems.push('stepsPerMm must be greater than zero');
-  if (v.maxFeedRateMmPerMin != null && !(v.maxFeedRateMmPerMin > 0)) problems.push('maxFeedRate must be greater than zero (mm/min)');
-  if (v.measuredTravelMm != null && !(v.measuredTravelMm > 0)) problems.push('measuredTravelMm must be greater than zero');
+  if (v.maxFeedRateMmPerMin != null && !(v.maxFeedRateMmPerMin > 0)) problems.push('maxFeedRate must be greater than zero (lengthUnit per minute)');
+  if (v.measuredTravelMm != null && !(v.measuredTravelMm > 0)) problems.push('measuredTravel must be greater than zero');
   if (!Number.isInteger(v.motorStepsPerRev) || v.motorStepsPerRev <= 0) problems.push('motorStepsPerRev must be a whole number greater than zero');
   if (!(v.microsteps > 0)) problems.push('microsteps must be greater than zero');
   if (v.gearRatio != null && !(v.gearRatio > 0)) problems.push('gearRatio must be greater than zero');
@@ -172,7 +188,7 @@ function change(actor: SessionUser, from: number, to: number, reason: StepsChang
 
 function diff(before: AxisRow, after: AxisRow): Record<string, unknown> {
   const out: Record<string, unknown> = {};
-  for (const key of ['name', 'drive', 'motorStepsPerRev', 'microsteps', 'gearRatio', 'stepsPerMm', 'maxFeedRateMmPerMin', 'measuredTravelMm', 'notes'] as const) {
+  for (const key of ['name', 'lengthUnit', 'drive', 'motorStepsPerRev', 'microsteps', 'gearRatio', 'stepsPerMm', 'maxFeedRateMmPerMin', 'measuredTravelMm', 'notes'] as const) {
     if (JSON.stringify(before[key]) !== JSON.stringify(after[key])) out[key] = { from: before[key], to: after[key] };
   }
   return out;

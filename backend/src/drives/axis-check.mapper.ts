@@ -6,6 +6,20 @@ import type { PositioningRunListRow, PositioningRunRow, TravelTrialListRow, Trav
 import { positioningVerdicts, travelTrialStatus } from './drive-status.js';
 import type { DriveTargets } from './drive-targets.js';
 import { readableResult, UNREADABLE_RESULT } from '../common/stored-result.js';
+import { storedWarnings } from './result-warnings.js';
+import type { ThermalReference } from '../engine/thermal.js';
+
+/** What a record says about temperature: as recorded, and how the result was referred to 20 °C. */
+function temperatureOf(row: { machineTemperatureC: number | null; scaleTemperatureC: number | null; scaleMaterial: string | null; instrumentResolution: number | null }, result: unknown) {
+  const thermal = result && typeof result === 'object' ? ((result as { thermal?: ThermalReference }).thermal ?? null) : null;
+  return {
+    machineTemperature: row.machineTemperatureC,
+    scaleTemperature: row.scaleTemperatureC,
+    scaleMaterial: row.scaleMaterial,
+    instrumentResolution: row.instrumentResolution,
+    thermal,
+  };
+}
 
 /** The numbers the readers of a stored travel trial and positioning run use. */
 export const TRAVEL_TRIAL_SHAPE = ['correctedStepsPerMm', 'errorPercent', 'scale', 'offsetMm', 'residualMaxMm', 'moves[]', 'moves[].commandedMm', 'moves[].measuredMm', 'moves[].errorMm', 'moves[].residualMm'];
@@ -22,6 +36,9 @@ export const travelTrialResult = (r: TravelTrialResult) => ({
   residuals: r.moves.map((m) => m.residualMm),
   residualMax: r.residualMaxMm,
   moves: r.moves.map((m) => ({ commanded: m.commandedMm, measured: m.measuredMm, error: m.errorMm, residual: m.residualMm })),
+  theoryDifferencePercent: r.theoryDifferencePercent ?? null,
+  farFromTheory: r.farFromTheory ?? false,
+  thermalCorrectionPercent: r.thermalCorrectionPercent ?? 0,
 });
 
 export function toTravelTrialResponse(row: TravelTrialRow, targets: DriveTargets, locked: boolean) {
@@ -30,11 +47,14 @@ export function toTravelTrialResponse(row: TravelTrialRow, targets: DriveTargets
     id: row.id,
     axisId: row.axisId,
     machineId: row.machineId,
-    unit: row.unit,
+    lengthUnit: row.lengthUnit,
+    readingUnit: row.readingUnit,
+    ...temperatureOf(row, row.result),
     stepsPerMmUsed: row.stepsPerMmUsed,
     throughOrigin: row.throughOrigin,
     moves: row.moves,
     result: r ? travelTrialResult(r) : null,
+    warnings: storedWarnings(row.result),
     status: r ? travelTrialStatus(r.errorPercent, targets) : ('outside-target' as const),
     ...(r ? {} : { unreadable: UNREADABLE_RESULT }),
     target: targets.stepsPerMmError.target as TargetValue,
@@ -57,10 +77,13 @@ export function toPositioningRunResponse(row: PositioningRunRow, targets: DriveT
     id: row.id,
     axisId: row.axisId,
     machineId: row.machineId,
-    unit: row.unit,
+    lengthUnit: row.lengthUnit,
+    readingUnit: row.readingUnit,
+    ...temperatureOf(row, row.result),
     targets: row.targets,
     runs: row.runs,
-    result: r ? positioningResult(r) : null,
+    result: r ? { ...positioningResult(r), warnings: storedWarnings(row.result), thermalCorrectionMax: r.thermalCorrectionMaxMm ?? 0 } : null,
+    warnings: storedWarnings(row.result),
     checks,
     status,
     ...(r ? {} : { unreadable: UNREADABLE_RESULT }),
@@ -82,10 +105,12 @@ export function toTravelTrialListItem(row: TravelTrialListRow, targets: DriveTar
     id: row.id,
     axisId: row.axisId,
     machineId: row.machineId,
-    unit: row.unit,
+    lengthUnit: row.lengthUnit,
+    readingUnit: row.readingUnit,
     stepsPerMmUsed: row.stepsPerMmUsed,
     throughOrigin: row.throughOrigin,
     moveCount: row.moveCount,
+    warnings: storedWarnings(row.result),
     result: r ? { correctedStepsPerMm: r.correctedStepsPerMm, errorPercent: r.errorPercent, scale: r.scale, offset: r.offsetMm, residualMax: r.residualMaxMm } : null,
     status: r ? travelTrialStatus(r.errorPercent, targets) : ('outside-target' as const),
     ...(r ? {} : { unreadable: UNREADABLE_RESULT }),
@@ -106,8 +131,10 @@ export function toPositioningRunListItem(row: PositioningRunListRow, targets: Dr
     id: row.id,
     axisId: row.axisId,
     machineId: row.machineId,
-    unit: row.unit,
+    lengthUnit: row.lengthUnit,
+    readingUnit: row.readingUnit,
     targetCount: row.targetCount,
+    warnings: storedWarnings(row.result),
     runCount: row.runCount,
     result: r ? { accuracy: r.accuracyMm, repeatability: r.repeatabilityMm, reversal: r.reversalMm } : null,
     checks,

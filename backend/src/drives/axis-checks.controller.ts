@@ -7,7 +7,7 @@ import { PageQuery } from '../records/page.query.js';
 import { NEXT_CURSOR_HEADER } from '../records/page-cursor.js';
 import { CreatePositioningRunDto } from './dto/positioning-run.dto.js';
 import { TestProgramQuery, TestTargetsQuery } from './dto/test-program.query.js';
-import { CreateTravelTrialDto } from './dto/travel-trial.dto.js';
+import { ApplyTravelTrialDto, CreateTravelTrialDto } from './dto/travel-trial.dto.js';
 import { PositioningRunsService } from './positioning-runs.service.js';
 import { TestProgramService } from './test-program.service.js';
 import { TravelTrialsService } from './travel-trials.service.js';
@@ -43,8 +43,8 @@ export class AxisChecksController {
   @Post('travel-trials/:trialId/apply')
   @Roles(...CALIBRATORS)
   @HttpCode(200)
-  apply(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) axisId: string, @Param('trialId', ParseUUIDPipe) id: string) {
-    return this.trials.apply(user, axisId, id);
+  apply(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) axisId: string, @Param('trialId', ParseUUIDPipe) id: string, @Body() dto: ApplyTravelTrialDto) {
+    return this.trials.apply(user, axisId, id, dto ?? {});
   }
 
   @Delete('travel-trials/:trialId')

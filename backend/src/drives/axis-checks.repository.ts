@@ -16,15 +16,16 @@ export interface LatestAxisCheck {
 export type LatestTrial = LatestAxisCheck & { stepsPerMmUsed: number; appliedAt: Date | null };
 
 /** The figures the board and the Drives tab read; the certificate's series needs the whole result. */
-const TRIAL_FIGURES = ['errorPercent', 'correctedStepsPerMm'];
-const RUN_FIGURES = ['accuracyMm', 'repeatabilityMm', 'reversalMm'];
+const TRIAL_FIGURES = ['errorPercent', 'correctedStepsPerMm', 'warnings'];
+const RUN_FIGURES = ['accuracyMm', 'repeatabilityMm', 'reversalMm', 'warnings'];
 const figures = (names: string[]) => sql.raw(`jsonb_build_object(${names.map((n) => `'${n}', x.result->'${n}'`).join(', ')})`);
 /** A travel trial as a page of its axis's list shows it: the headline figures, no moves. */
 export interface TravelTrialListRow {
   id: string;
   axisId: string;
   machineId: string;
-  unit: string;
+  lengthUnit: string;
+  readingUnit: string;
   stepsPerMmUsed: number;
   throughOrigin: boolean;
   moveCount: number;
@@ -41,7 +42,8 @@ export interface PositioningRunListRow {
   id: string;
   axisId: string;
   machineId: string;
-  unit: string;
+  lengthUnit: string;
+  readingUnit: string;
   targetCount: number;
   runCount: number;
   /** The headline figures of the stored result only (RUN_FIGURES). */
@@ -50,7 +52,7 @@ export interface PositioningRunListRow {
   createdAt: Date;
 }
 
-const TRIAL_LIST_FIGURES = ['correctedStepsPerMm', 'errorPercent', 'scale', 'offsetMm', 'residualMaxMm'];
+const TRIAL_LIST_FIGURES = ['correctedStepsPerMm', 'errorPercent', 'scale', 'offsetMm', 'residualMaxMm', 'farFromTheory', 'warnings'];
 // A damaged row may hold something other than a list; it counts as none rather than failing the page.
 const lengthOf = (column: string) => sql.raw(`case jsonb_typeof(x.${column}) when 'array' then jsonb_array_length(x.${column}) else 0 end`);
 /** Rows after the cursor's record in newest-first order (none when the cursor is not of this axis). */
@@ -74,7 +76,8 @@ export class AxisChecksRepository {
       id: string;
       axis_id: string;
       machine_id: string;
-      unit: string;
+      length_unit: string;
+      reading_unit: string;
       steps_per_mm_used: number;
       through_origin: boolean;
       move_count: number;
@@ -84,7 +87,7 @@ export class AxisChecksRepository {
       applied_at: string | null;
       applied_by_name: string | null;
     }>(sql`
-      select x.id, x.axis_id, x.machine_id, x.unit, x.steps_per_mm_used, x.through_origin, ${lengthOf('moves')} as move_count,
+      select x.id, x.axis_id, x.machine_id, x.length_unit, x.reading_unit, x.steps_per_mm_used, x.through_origin, ${lengthOf('moves')} as move_count,
              ${figures(TRIAL_LIST_FIGURES)} as result, x.recorded_by_name, x.created_at, x.applied_at, x.applied_by_name
       from travel_trials x
       where x.workshop_id = ${workshopId} and x.axis_id = ${axisId} ${afterCursor('travel_trials', workshopId, axisId, afterId)}
@@ -94,7 +97,8 @@ export class AxisChecksRepository {
       id: r.id,
       axisId: r.axis_id,
       machineId: r.machine_id,
-      unit: r.unit,
+      lengthUnit: r.length_unit,
+      readingUnit: r.reading_unit,
       stepsPerMmUsed: Number(r.steps_per_mm_used),
       throughOrigin: r.through_origin,
       moveCount: Number(r.move_count),
@@ -148,14 +152,15 @@ export class AxisChecksRepository {
       id: string;
       axis_id: string;
       machine_id: string;
-      unit: string;
+      length_unit: string;
+      reading_unit: string;
       target_count: number;
       run_count: number;
       result: Record<string, unknown>;
       recorded_by_name: string;
       created_at: string;
     }>(sql`
-      select x.id, x.axis_id, x.machine_id, x.unit, ${lengthOf('targets')} as target_count, ${lengthOf('runs')} as run_count,
+      select x.id, x.axis_id, x.machine_id, x.length_unit, x.reading_unit, ${lengthOf('targets')} as target_count, ${lengthOf('runs')} as run_count,
              ${figures(RUN_FIGURES)} as result, x.recorded_by_name, x.created_at
       from positioning_runs x
       where x.workshop_id = ${workshopId} and x.axis_id = ${axisId} ${afterCursor('positioning_runs', workshopId, axisId, afterId)}
@@ -165,7 +170,8 @@ export class AxisChecksRepository {
       id: r.id,
       axisId: r.axis_id,
       machineId: r.machine_id,
-      unit: r.unit,
+      lengthUnit: r.length_unit,
+      readingUnit: r.reading_unit,
       targetCount: Number(r.target_count),
       runCount: Number(r.run_count),
       result: r.result,

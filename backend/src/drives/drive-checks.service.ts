@@ -17,6 +17,8 @@ import { speedCheckOf } from './speed-check.js';
 import { travelEnvelopeOf } from './travel-envelope.js';
 import { storedPositioning, storedTravelTrial } from './axis-check.mapper.js';
 import { readableResult, UNREADABLE_RESULT } from '../common/stored-result.js';
+import { storedWarnings } from './result-warnings.js';
+import type { ResultWarning } from '../engine/warnings.js';
 
 const fmt = (v: number, d = 3) => v.toFixed(d);
 
@@ -31,6 +33,20 @@ const DRIVE_TARGET_KEYS: Record<DriveTargetKey, true> = { stepsPerMmError: true,
 function driveTargetsOf(context: ReadinessContext): DriveTargets {
   return Object.fromEntries((Object.keys(DRIVE_TARGET_KEYS) as DriveTargetKey[]).map((k) => [k, targetIn(context, k)])) as DriveTargets;
 }
+/** Feeds in inches keep two decimals; in mm, µm or thou a whole number is enough. */
+const formatFeed = (v: number, unit: string) => (unit === 'in' ? v.toFixed(2) : String(Math.round(v)));
+
+/** The speed check says when the d·n limit, not whirling, sets the top speed (the easily missed one). */
+function speedWarnings(speed: ReturnType<typeof speedCheckOf>): ResultWarning[] {
+  if (speed.rpm === null || speed.limitedBy !== 'dn-limit') return [];
+  return [
+    {
+      code: 'dn-limit-governs',
+      message: `The screw's d·n limit (${speed.dnLimit} ÷ nominal diameter = ${Math.round(speed.dnLimitSpeed!)} rpm) is lower than its permissible whirling speed (${Math.round(speed.permissibleSpeed!)} rpm): headroom is measured from the d·n limit.`,
+    },
+  ];
+}
+
 const axisLink = (machineId: string, axisId: string) => `/machines/${machineId}/axes/${axisId}`;
 
 /**
@@ -68,7 +84,7 @@ export class DriveChecksService implements OnModuleInit {
       await this.records.checkRecorded(
         actor,
         { machineId: machine.id, kind: 'speed-check', recordType: 'axis', recordId: row.id, status: speed.status as 'within-target' | 'outside-target' },
-        `Speed check of axis ${row.name}: ${Math.round(speed.rpm)} rpm at ${speed.feedRate} mm/min, permissible ${Math.round(speed.permissibleSpeed!)} rpm, d·n limit ${Math.round(speed.dnLimitSpeed!)} rpm`,
+        `Speed check of axis ${row.name}: ${Math.round(speed.rpm)} rpm at ${speed.feedRate} ${speed.lengthUnit}/min, permissible ${Math.round(speed.permissibleSpeed!)} rpm, d·n limit ${Math.round(speed.dnLimitSpeed!)} rpm, ${speed.headroomPercent!.toFixed(0)} % headroom`,
       );
     }
     if (row.measuredTravelMm !== null && changed(['measuredTravelMm', 'name'])) {
@@ -153,6 +169,7 @@ export class DriveChecksService implements OnModuleInit {
         result: tr ? { value: Math.abs(tr.errorPercent), unit: '%', summary: trialSummary } : null,
         recordType: trial ? 'travel-trial' : null,
         recordId: trial?.id ?? null,
+        warnings: trial ? storedWarnings(trial.result) : [],
         recordedAt: trial?.createdAt.toISOString() ?? null,
         link,
         ...(moves
@@ -191,6 +208,7 @@ export class DriveChecksService implements OnModuleInit {
         result: pr ? { value: pr.accuracyMm, unit: 'mm', summary: runSummary } : null,
         recordType: run ? 'positioning-run' : null,
         recordId: run?.id ?? null,
+        warnings: run ? storedWarnings(run.result) : [],
         recordedAt: run?.createdAt.toISOString() ?? null,
         link,
         ...(perTarget
@@ -212,7 +230,7 @@ export class DriveChecksService implements OnModuleInit {
       const speed = speedCheckOf(axis, targets);
       const speedSummary =
         speed.rpm !== null
-          ? `${Math.round(speed.rpm)} rpm at ${speed.feedRate} mm/min; permissible ${Math.round(speed.permissibleSpeed!)} rpm, d·n limit ${Math.round(speed.dnLimitSpeed!)} rpm${speed.rpm > speed.dnLimitSpeed! ? ' (above the d·n limit)' : ''}; highest safe feed ${Math.round(speed.safeFeedRate!)} mm/min`
+          ? `${Math.round(speed.rpm)} rpm at ${speed.feedRate} ${speed.lengthUnit}/min; permissible ${Math.round(speed.permissibleSpeed!)} rpm, d·n limit ${Math.round(speed.dnLimitSpeed!)} rpm${speed.rpm > speed.dnLimitSpeed! ? ' (above the d·n limit)' : ''}; ${speed.headroomPercent!.toFixed(0)} % headroom below the lower of the two; highest safe feed ${formatFeed(speed.safeFeedRate!, speed.lengthUnit)} ${speed.lengthUnit}/min`
           : speed.reason!;
       if (speed.applicable) {
         out.push({
@@ -221,15 +239,16 @@ export class DriveChecksService implements OnModuleInit {
           subject: `Axis ${axis.name}`,
           status: speed.status as ReadinessCheck['status'],
           target: { ...targets.screwSpeedHeadroom.target, label: `${TARGET_LABELS.screwSpeedHeadroom}, and within the d·n limit` },
-          // Headroom below the permissible speed, read against the headroom the target asks for.
-          result: speed.rpm !== null ? { value: (1 - speed.rpm / speed.permissibleSpeed!) * 100, unit: '%', summary: speedSummary } : null,
+          // Headroom below the lower of the permissible and the d·n limit speeds, read against the headroom the target asks for.
+          result: speed.rpm !== null ? { value: speed.headroomPercent!, unit: '%', summary: speedSummary } : null,
+          warnings: speedWarnings(speed),
           recordType: 'axis',
           recordId: axis.id,
           recordedAt: speed.rpm !== null ? axis.updatedAt.toISOString() : null,
           link,
         });
       }
-      summaries.push({ status: speed.status, summary: speedSummary, headline: speed.rpm !== null ? `${Math.round(speed.rpm)} of ${Math.round(Math.min(speed.allowedSpeed!, speed.dnLimitSpeed!))} rpm allowed` : null, recordId: speed.applicable ? axis.id : null, recordedAt: null });
+      summaries.push({ status: speed.status, summary: speedSummary, headline: speed.rpm !== null ? `${Math.round(speed.rpm)} of ${Math.round(speed.allowedSpeed!)} rpm allowed` : null, recordId: speed.applicable ? axis.id : null, recordedAt: null });
       return { checks: out, summaries };
     });
   }

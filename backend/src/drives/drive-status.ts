@@ -28,13 +28,13 @@ export function positioningVerdicts(r: PositioningFigures, targets: DriveTargets
 }
 
 /**
- * Speed check: the screw speed at the fastest feed must stay the headroom below the permissible
- * (whirling) speed and within the d·n limit. Returns the speed allowed and the feed it gives.
+ * Speed check: the screw speed at the fastest feed must stay the headroom below the lower of the
+ * permissible (whirling) speed and the d·n limit speed, so the headroom shown and the verdict
+ * always read the same limit. Returns the speed allowed and the feed it gives.
  */
 export function speedVerdict(r: ScrewSpeedResult, leadMm: number, targets: DriveTargets) {
   const headroomPercent = targets.screwSpeedHeadroom.base;
-  const allowedSpeedRpm = r.permissibleSpeedRpm * (1 - headroomPercent / 100);
-  const topRpm = Math.min(allowedSpeedRpm, r.dnLimitSpeedRpm);
-  const status: DriveCheckStatus = r.rpm <= allowedSpeedRpm && r.rpm <= r.dnLimitSpeedRpm ? 'within-target' : 'outside-target';
-  return { headroomPercent, allowedSpeedRpm, safeFeedRateMmPerMin: leadMm * topRpm, status };
+  const allowedSpeedRpm = r.limitSpeedRpm * (1 - headroomPercent / 100);
+  const status: DriveCheckStatus = r.rpm <= allowedSpeedRpm ? 'within-target' : 'outside-target';
+  return { headroomPercent, allowedSpeedRpm, safeFeedRateMmPerMin: leadMm * allowedSpeedRpm, status };
 }

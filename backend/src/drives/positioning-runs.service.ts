@@ -1,7 +1,9 @@
 import { BadRequestException, Injectable, NotFoundException, OnModuleInit } from '@nestjs/common';
 import type { SessionUser } from '../auth/session-user.js';
 import { evaluatePositioning } from '../engine/positioning.js';
+import { thermalReference } from '../engine/thermal.js';
 import { arrayToMm } from '../engine/units.js';
+import { resolutionMmOf, temperatureWarnings } from './temperature.js';
 import { MachinesService } from '../machines/machines.service.js';
 import { RecordsService } from '../records/records.service.js';
 import { SubjectsRegistry } from '../records/subjects.registry.js';
@@ -57,23 +59,39 @@ export class PositioningRunsService implements OnModuleInit {
     for (let i = 1; i < dto.targets.length; i++) {
       if (!(dto.targets[i] > dto.targets[i - 1])) throw new BadRequestException([`targets must rise along the axis (targets[${i}] = ${dto.targets[i]} is not above ${dto.targets[i - 1]})`]);
     }
+    // Callers inside the server written before the two unit families may still send `unit` (HTTP
+    // refuses it): it named the deviations, with the targets in mm.
+    const lengthUnit = dto.lengthUnit ?? 'mm';
+    const readingUnit = dto.readingUnit ?? dto.unit ?? 'mm';
+    const targets = await this.targetsOf(actor, axis.machineId);
+    const thermal = thermalReference({ machineTemperatureC: dto.machineTemperature, scaleTemperatureC: dto.scaleTemperature, scaleMaterial: dto.scaleMaterial });
     const result = evaluatePositioning({
-      targetsMm: dto.targets,
-      runs: dto.runs.map((r) => ({ direction: r.direction, deviationsMm: arrayToMm(r.deviations, dto.unit) })),
+      targetsMm: arrayToMm(dto.targets, lengthUnit),
+      runs: dto.runs.map((r) => ({ direction: r.direction, deviationsMm: arrayToMm(r.deviations, readingUnit) })),
+      thermalFactor: thermal.factor,
+      instrumentResolutionMm: resolutionMmOf(dto.instrumentResolution, readingUnit) ?? undefined,
+      // The tightest of the three figures' targets: the instrument must resolve a quarter of it.
+      toleranceMm: Math.min(targets.positioningAccuracy.base, targets.repeatability.base, targets.reversal.base),
     });
+    const warnings = [...result.warnings, ...temperatureWarnings(dto)];
     const row = await this.repo.insertRun({
       workshopId: actor.workshopId,
       machineId: axis.machineId,
       axisId,
-      unit: dto.unit,
+      lengthUnit,
+      readingUnit,
+      machineTemperatureC: dto.machineTemperature ?? null,
+      scaleTemperatureC: dto.scaleTemperature ?? null,
+      scaleMaterial: dto.scaleMaterial ?? null,
+      instrumentResolution: dto.instrumentResolution ?? null,
       targets: dto.targets,
       runs: dto.runs.map((r) => ({ direction: r.direction, deviations: r.deviations })),
-      result: result as unknown as Record<string, unknown>,
+      result: { ...result, warnings, thermal } as unknown as Record<string, unknown>,
       notes: dto.notes ?? '',
       recordedById: actor.id,
       recordedByName: actor.name,
     });
-    const response = toPositioningRunResponse(row, await this.targetsOf(actor, axis.machineId), false);
+    const response = toPositioningRunResponse(row, targets, false);
     await this.records.checkRecorded(
       actor,
       { machineId: axis.machineId, kind: 'positioning', recordType: 'positioning-run', recordId: row.id, status: response.status },

@@ -4,6 +4,8 @@ import type { AxisRow } from './axes.repository.js';
 import { missingForSpeedCheck, toEngineScrew } from './drive-record.js';
 import { speedVerdict } from './drive-status.js';
 import type { DriveTargets } from './drive-targets.js';
+import { tidy } from './drive-record.js';
+import type { LengthUnit } from '../engine/units.js';
 
 export interface SpeedCheckResponse {
   axisId: string;
@@ -12,8 +14,11 @@ export interface SpeedCheckResponse {
   /** Why the check cannot run (or does not apply), in words. */
   reason: string | null;
   missing: string[];
-  /** The fastest feed the axis will be asked for, mm/min. */
+  /** The axis's unit: feed rates below are in it per minute. */
+  lengthUnit: LengthUnit;
+  /** The fastest feed the axis will be asked for, lengthUnit per minute. */
   feedRate: number | null;
+  feedRateMmPerMin: number | null;
   rpm: number | null;
   criticalSpeed: number | null;
   permissibleSpeed: number | null;
@@ -21,12 +26,17 @@ export interface SpeedCheckResponse {
   dnLimit: number | null;
   mountingFactor: number | null;
   limitedBy: 'critical-speed' | 'dn-limit' | null;
-  /** Highest feed at the permissible speed or the d·n limit (no headroom), mm/min. */
+  /** The lower of the permissible speed and the d·n limit speed, rpm: headroom is measured from it. */
+  limitSpeed: number | null;
+  /** How far the speed stays below that limit, % (negative above it). */
+  headroomPercent: number | null;
+  /** Highest feed at the lower limit (no headroom), lengthUnit per minute. */
   maxFeedRate: number | null;
-  /** Permissible speed less the target set's headroom, rpm. */
+  /** The lower limit less the target set's headroom, rpm. */
   allowedSpeed: number | null;
-  /** Highest feed within the headroom and the d·n limit, mm/min. */
+  /** Highest feed within the headroom, lengthUnit per minute. */
   safeFeedRate: number | null;
+  safeFeedRateMmPerMin: number | null;
   headroom: TargetValue;
   withinLimits: boolean | null;
   source: string;
@@ -34,9 +44,12 @@ export interface SpeedCheckResponse {
 
 /** The speed check of one axis from its drive record and fastest feed (screw drives only). */
 export function speedCheckOf(axis: AxisRow, targets: DriveTargets): SpeedCheckResponse {
+  const unit = axis.lengthUnit as LengthUnit;
   const base = {
     axisId: axis.id,
-    feedRate: axis.maxFeedRateMmPerMin,
+    lengthUnit: unit,
+    feedRate: axis.maxFeedRateMmPerMin === null ? null : tidy(axis.maxFeedRateMmPerMin, unit),
+    feedRateMmPerMin: axis.maxFeedRateMmPerMin,
     rpm: null,
     criticalSpeed: null,
     permissibleSpeed: null,
@@ -44,9 +57,12 @@ export function speedCheckOf(axis: AxisRow, targets: DriveTargets): SpeedCheckRe
     dnLimit: null,
     mountingFactor: null,
     limitedBy: null,
+    limitSpeed: null,
+    headroomPercent: null,
     maxFeedRate: null,
     allowedSpeed: null,
     safeFeedRate: null,
+    safeFeedRateMmPerMin: null,
     headroom: targets.screwSpeedHeadroom.target,
     withinLimits: null,
     source: SCREW_SPEED_SOURCE,
@@ -74,9 +90,12 @@ export function speedCheckOf(axis: AxisRow, targets: DriveTargets): SpeedCheckRe
     dnLimit: r.dnLimit,
     mountingFactor: r.mountingFactor,
     limitedBy: r.limitedBy,
-    maxFeedRate: r.maxFeedRateMmPerMin,
+    limitSpeed: r.limitSpeedRpm,
+    headroomPercent: r.headroomPercent,
+    maxFeedRate: tidy(r.maxFeedRateMmPerMin, unit),
     allowedSpeed: v.allowedSpeedRpm,
-    safeFeedRate: v.safeFeedRateMmPerMin,
+    safeFeedRate: tidy(v.safeFeedRateMmPerMin, unit),
+    safeFeedRateMmPerMin: v.safeFeedRateMmPerMin,
     withinLimits: r.withinLimits,
     source: r.source,
   };

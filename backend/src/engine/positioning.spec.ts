@@ -1,4 +1,4 @@
-import { evaluatePositioning, type PositioningRun } from './positioning.js';
+import { targetsNeeded, evaluatePositioning, type PositioningRun } from './positioning.js';
 import { referenceCsv, referenceJson } from './reference-data/reference-data.js';
 import { seededRandom } from './seeded-random.js';
 import { arrayToMm } from './units.js';
@@ -85,7 +85,8 @@ describe('ISO 230-2 positioning', () => {
     expect(r.accuracyDownMm).toBeCloseTo(4 + 2 * r2, 14);
     expect(r.accuracyMm).toBeCloseTo(4 + 2 * r2, 14);
     expect(r.warnings).toHaveLength(2);
-    expect(r.warnings[0]).toMatch(/5 runs in each direction \(got 2 up, 2 down\)/);
+    expect(r.warnings[0]).toMatchObject({ code: 'few-runs', message: expect.stringMatching(/5 runs in each direction \(got 2 up, 2 down\)/) });
+    expect(r.warnings[1].code).toBe('few-targets');
   });
 
   // Definition property: a constant offset of the whole axis moves the means but no spread.
@@ -125,5 +126,47 @@ describe('ISO 230-2 positioning', () => {
     expect(() =>
       evaluatePositioning({ targetsMm: [0, 10], runs: [...runs(2), { direction: 'up', deviationsMm: [0, Infinity] }] }),
     ).toThrow('runs[4].deviations[1] must be a finite number');
+  });
+});
+
+describe('positioning warnings and the reference temperature', () => {
+  const runsAt = (targets: number[], n: number, dev: (t: number, k: number) => number): PositioningRun[] =>
+    (['up', 'down'] as const).flatMap((direction) => Array.from({ length: n }, (_, k) => ({ direction, deviationsMm: targets.map((t) => dev(t, k)) })));
+
+  // iso230_2_formulas.md (ISO 230-2, from memory): at least 5 targets, and 5 per metre of travel.
+  it('asks for 5 targets per metre: 1000 mm of travel with 5 targets is enough, 1500 mm needs 8', () => {
+    expect(targetsNeeded(1000)).toBe(5);
+    expect(targetsNeeded(1500)).toBe(8);
+    expect(targetsNeeded(200)).toBe(5);
+    const five = [0, 230, 480, 760, 1000];
+    expect(evaluatePositioning({ targetsMm: five, runs: runsAt(five, 5, (t, k) => k * 0.001) }).warnings).toEqual([]);
+    const long = [0, 330, 700, 1100, 1500];
+    const w = evaluatePositioning({ targetsMm: long, runs: runsAt(long, 5, (t, k) => k * 0.001) }).warnings;
+    expect(w.map((x) => x.code)).toEqual(['few-targets']);
+    expect(w[0].message).toMatch(/8 over these 1500\.0 mm \(got 5\)/);
+  });
+
+  // TRADE.md (common practice, "Data worth capturing"): instrument resolution; the rule of thumb
+  // that an instrument should resolve a quarter of the tolerance or better (from memory).
+  it('flags an instrument coarser than a quarter of the tolerance', () => {
+    const t = [0, 100, 200, 300, 400];
+    const base = { targetsMm: t, runs: runsAt(t, 5, (x, k) => k * 0.001), toleranceMm: 0.04 };
+    expect(evaluatePositioning({ ...base, instrumentResolutionMm: 0.01 }).warnings).toEqual([]);
+    const w = evaluatePositioning({ ...base, instrumentResolutionMm: 0.02 }).warnings;
+    expect(w.map((x) => x.code)).toEqual(['coarse-instrument']);
+  });
+
+  // ΔL = α·L·ΔT (TRADE.md): an aluminium rule 10 K warm against a steel machine at 20 °C reads
+  // short by 23.1e-6 × 10 per mm; the deviation at 400 mm from the first target grows by 0.0924 mm.
+  it('refers deviations to 20 °C by their distance from the first target', () => {
+    const t = [0, 100, 200, 300, 400];
+    const factor = 23.1e-6 * 10;
+    const plain = evaluatePositioning({ targetsMm: t, runs: runsAt(t, 5, (x, k) => k * 0.001) });
+    const warm = evaluatePositioning({ targetsMm: t, runs: runsAt(t, 5, (x, k) => k * 0.001), thermalFactor: factor, toleranceMm: 0.05 });
+    expect(warm.targets[4].meanUpMm - plain.targets[4].meanUpMm).toBeCloseTo(400 * factor, 12);
+    expect(warm.targets[0].meanUpMm).toBeCloseTo(plain.targets[0].meanUpMm, 15);
+    expect(warm.thermalCorrectionMaxMm).toBeCloseTo(0.0924, 12);
+    expect(warm.systematicMm - plain.systematicMm).toBeCloseTo(0.0924, 12);
+    expect(warm.warnings.map((x) => x.code)).toEqual(['thermal-correction']);
   });
 });

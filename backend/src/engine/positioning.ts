@@ -1,5 +1,6 @@
 import { EngineInputError } from './engine-input-error.js';
-import { MAX_POINTS, ascendingOrder, requireNumberArray, requireFiniteResult } from './validate.js';
+import { MAX_POINTS, ascendingOrder, requireFinite, requireNumberArray, requirePositive, requireFiniteResult } from './validate.js';
+import type { ResultWarning } from './warnings.js';
 
 /**
  * Positioning accuracy and repeatability of a linear axis from a repeat-and-reverse run, with
@@ -18,6 +19,15 @@ export interface PositioningRun {
 export interface PositioningInput {
   targetsMm: readonly number[];
   runs: readonly PositioningRun[];
+  /**
+   * Fraction of the distance from the first target (where the scale is zeroed) to add to each
+   * deviation to refer it to the machine at 20 °C (thermal.ts); 0 when absent.
+   */
+  thermalFactor?: number;
+  /** Smallest step the instrument reads, mm; flagged when coarser than a quarter of the tolerance. */
+  instrumentResolutionMm?: number;
+  /** The tightest tolerance the figures are judged against, mm (for the resolution and thermal warnings). */
+  toleranceMm?: number;
 }
 
 export interface TargetResult {
@@ -59,13 +69,22 @@ export interface PositioningResult {
   accuracyMm: number;
   runsUp: number;
   runsDown: number;
-  warnings: string[];
+  /** Largest thermal correction made to a deviation, mm (0 when none). */
+  thermalCorrectionMaxMm: number;
+  warnings: ResultWarning[];
 }
 
 export const MIN_RUNS_PER_DIRECTION = 2;
 /** Runs per direction and targets the standard test cycle asks for. */
 export const STANDARD_RUNS_PER_DIRECTION = 5;
 export const STANDARD_MIN_TARGETS = 5;
+/** Targets per metre of travel the standard asks for (iso230_2_formulas.md, from memory). */
+export const STANDARD_TARGETS_PER_METRE = 5;
+
+/** Targets a travel needs: at least 5, and 5 per metre (iso230_2_formulas.md, from memory). */
+export function targetsNeeded(travelMm: number): number {
+  return Math.max(STANDARD_MIN_TARGETS, Math.ceil((STANDARD_TARGETS_PER_METRE * travelMm) / 1000 - 1e-9));
+}
 
 function meanAndS(values: number[]): { mean: number; s: number } {
   const n = values.length;
@@ -103,6 +122,7 @@ export function evaluatePositioning(input: PositioningInput): PositioningResult 
     throw new EngineInputError(`runs hold ${m * input.runs.length} deviations; at most ${MAX_POINTS} are accepted`, 'runs');
   }
 
+  const thermal = input.thermalFactor == null ? 0 : requireFinite('thermalFactor', input.thermalFactor);
   const up: number[][] = targets.map(() => []);
   const down: number[][] = targets.map(() => []);
   input.runs.forEach((run, r) => {
@@ -110,7 +130,7 @@ export function evaluatePositioning(input: PositioningInput): PositioningResult 
     if (run.direction !== 'up' && run.direction !== 'down') {
       throw new EngineInputError(`runs[${r}].direction must be up or down`, 'runs');
     }
-    const dev = requireNumberArray(`runs[${r}].deviations`, run.deviationsMm, 0);
+    const dev = requireNumberArray(`runs[${r}].deviations`, run.deviationsMm, 0).map((d, i) => d + (targets[i] - targets[0]) * thermal);
     if (dev.length !== m) {
       throw new EngineInputError(`runs[${r}].deviations must have one value per target (${m}, got ${dev.length})`, 'runs');
     }
@@ -157,15 +177,8 @@ export function evaluatePositioning(input: PositioningInput): PositioningResult 
   const upperDown = col((t) => t.meanDownMm + 2 * t.sDownMm);
   const lowerDown = col((t) => t.meanDownMm - 2 * t.sDownMm);
 
-  const warnings: string[] = [];
-  if (runsUp < STANDARD_RUNS_PER_DIRECTION || runsDown < STANDARD_RUNS_PER_DIRECTION) {
-    warnings.push(
-      `ISO 230-2 asks for ${STANDARD_RUNS_PER_DIRECTION} runs in each direction (got ${runsUp} up, ${runsDown} down); repeatability from fewer runs is less certain`,
-    );
-  }
-  if (m < STANDARD_MIN_TARGETS) {
-    warnings.push(`ISO 230-2 asks for at least ${STANDARD_MIN_TARGETS} targets along the axis (got ${m})`);
-  }
+  const warnings = positioningWarnings(input, targets, runsUp, runsDown, thermal);
+  const thermalCorrectionMaxMm = Math.abs((targets[m - 1] - targets[0]) * thermal);
 
   return requireFiniteResult('runs', {
     targets: perTarget,
@@ -183,6 +196,44 @@ export function evaluatePositioning(input: PositioningInput): PositioningResult 
     accuracyMm: maxOf(upperUp, upperDown) - minOf(lowerUp, lowerDown),
     runsUp,
     runsDown,
+    thermalCorrectionMaxMm,
     warnings,
   });
+}
+
+const um = (mm: number) => `${(mm * 1000).toPrecision(3)} µm`;
+
+function positioningWarnings(input: PositioningInput, targets: number[], runsUp: number, runsDown: number, thermal: number): ResultWarning[] {
+  const warnings: ResultWarning[] = [];
+  const m = targets.length;
+  if (runsUp < STANDARD_RUNS_PER_DIRECTION || runsDown < STANDARD_RUNS_PER_DIRECTION) {
+    warnings.push({
+      code: 'few-runs',
+      message: `ISO 230-2 asks for ${STANDARD_RUNS_PER_DIRECTION} runs in each direction (got ${runsUp} up, ${runsDown} down); repeatability from fewer runs is less certain.`,
+    });
+  }
+  const travelMm = targets[m - 1] - targets[0];
+  const needed = targetsNeeded(travelMm);
+  if (m < needed) {
+    warnings.push({
+      code: 'few-targets',
+      message: `ISO 230-2 asks for at least ${STANDARD_MIN_TARGETS} targets and ${STANDARD_TARGETS_PER_METRE} per metre of travel: ${needed} over these ${travelMm.toFixed(1)} mm (got ${m}).`,
+    });
+  }
+  const tolerance = input.toleranceMm == null ? null : requirePositive('tolerance', input.toleranceMm);
+  const resolution = input.instrumentResolutionMm == null ? null : requirePositive('instrumentResolution', input.instrumentResolutionMm);
+  if (tolerance !== null && resolution !== null && resolution > tolerance / 4) {
+    warnings.push({
+      code: 'coarse-instrument',
+      message: `The instrument reads in steps of ${um(resolution)}, coarser than a quarter of the ${um(tolerance)} tolerance (${um(tolerance / 4)}); use a finer instrument for a result that can be trusted against this target.`,
+    });
+  }
+  const thermalMax = Math.abs(travelMm * thermal);
+  if (tolerance !== null && thermalMax > tolerance / 10) {
+    warnings.push({
+      code: 'thermal-correction',
+      message: `Referred to 20 °C: the temperatures of the machine and the scale move the deviations by up to ${um(thermalMax)} over the run, more than a tenth of the ${um(tolerance)} tolerance; the figures shown are the referred ones.`,
+    });
+  }
+  return warnings;
 }

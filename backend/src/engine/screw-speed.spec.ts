@@ -110,3 +110,31 @@ describe('screw speed', () => {
     expect(() => evaluateScrewSpeed({ ...base, dnLimit: NaN })).toThrow('dnLimit must be a finite number');
   });
 });
+
+describe('speed headroom against the lower limit', () => {
+  const base = { nominalDiameterMm: 16, rootDiameterMm: 12.9, leadMm: 5, mounting: 'fixed-supported' as const };
+  // ballscrew_critical_speed.json: a 16 mm rolled screw's d·n limit is 70 000 / 16 = 4375 rpm (HIWIN),
+  // while THK's permissible speed fixed-supported over 500 mm is 7791.6 rpm
+  // (ballscrew_16x5_derived_speeds.csv): the d·n limit is the lower, so headroom is taken from it.
+  it('takes headroom from the d·n limit when it is lower than the whirling limit', () => {
+    const r = evaluateScrewSpeed({ ...base, unsupportedLengthMm: 500, feedRateMmPerMin: 5 * 4000 });
+    expect(r.permissibleSpeedRpm).toBeCloseTo(7791.6, 6);
+    expect(r.limitSpeedRpm).toBe(4375);
+    expect(r.headroomPercent).toBeCloseTo((1 - 4000 / 4375) * 100, 12);
+    // Against the whirling limit alone the same speed would show (1 − 4000/7791.6) ≈ 48.7 % headroom.
+    expect(r.headroomPercent).toBeLessThan(9);
+  });
+
+  it('is negative above the d·n limit, never a large headroom beside a breach', () => {
+    const r = evaluateScrewSpeed({ ...base, unsupportedLengthMm: 500, feedRateMmPerMin: 5 * 5000 });
+    expect(r.withinLimits).toBe(false);
+    expect(r.headroomPercent).toBeCloseTo((1 - 5000 / 4375) * 100, 12);
+  });
+
+  // THK permissible 1947.9 rpm at 1000 mm (derived_check_values) is below 4375: headroom from it.
+  it('takes headroom from the permissible speed when whirling is the lower limit', () => {
+    const r = evaluateScrewSpeed({ ...base, unsupportedLengthMm: 1000, feedRateMmPerMin: 5000 });
+    expect(r.limitSpeedRpm).toBeCloseTo(1947.9, 6);
+    expect(r.headroomPercent).toBeCloseTo((1 - 1000 / 1947.9) * 100, 6);
+  });
+});

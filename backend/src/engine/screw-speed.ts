@@ -50,6 +50,10 @@ export interface ScrewSpeedResult {
   dnLimitSpeedRpm: number;
   maxFeedRateMmPerMin: number;
   withinLimits: boolean;
+  /** The lower of the permissible (whirling) speed and the d·n limit speed: the speed headroom is taken from. */
+  limitSpeedRpm: number;
+  /** How far the speed stays below that lower limit, % of it (negative above it). */
+  headroomPercent: number;
   /** Which limit sets the top speed. */
   limitedBy: 'critical-speed' | 'dn-limit';
   mountingFactor: number;
@@ -83,6 +87,8 @@ export function evaluateScrewSpeed(input: ScrewSpeedInput): ScrewSpeedResult {
     permissibleSpeedRpm: permissible,
     dnLimitSpeedRpm: dnLimitSpeed,
     maxFeedRateMmPerMin: lead * top,
+    limitSpeedRpm: top,
+    headroomPercent: (1 - rpm / top) * 100,
     withinLimits: rpm <= permissible && rpm <= dnLimitSpeed,
     limitedBy: permissible <= dnLimitSpeed ? 'critical-speed' : 'dn-limit',
     mountingFactor: factor,

@@ -70,3 +70,44 @@ describe('travel trial', () => {
     );
   });
 });
+
+describe('travel trial guards', () => {
+  // The reported case: 20 in commanded, 19.95 in measured, both in inches (unit_facts.json: 1 in = 25.4 mm
+  // exactly) → 508 mm against 506.73 mm; new = old × commanded ÷ measured (TRADE.md, common practice).
+  it('20 in commanded, 19.95 in measured corrects 80 steps/mm to 80.2', () => {
+    const r = evaluateTravelTrial({ stepsPerMmUsed: 80, moves: [{ commandedMm: 508, measuredMm: 506.73 }], theoreticalStepsPerMm: 80 });
+    expect(r.correctedStepsPerMm).toBeCloseTo((80 * 508) / 506.73, 10);
+    expect(r.correctedStepsPerMm).toBeCloseTo(80.2, 1);
+    expect(r.farFromTheory).toBe(false);
+    expect(r.warnings.map((w) => w.code)).toEqual(['single-distance']);
+  });
+
+  // The same trial with the commanded 20 read as mm: a 25× correction (320 → 12.6 steps/mm). TRADE.md:
+  // "measured far from calculated usually means a wrong ratio, lead or pulley, not tuning".
+  it('holds back the 25× correction and names the usual causes', () => {
+    const r = evaluateTravelTrial({ stepsPerMmUsed: 320, moves: [{ commandedMm: 20, measuredMm: 506.73 }], theoreticalStepsPerMm: 320 });
+    expect(r.correctedStepsPerMm).toBeCloseTo((320 * 20) / 506.73, 10);
+    expect(r.farFromTheory).toBe(true);
+    const codes = r.warnings.map((w) => w.code);
+    expect(codes).toEqual(expect.arrayContaining(['correction-cannot-be-right', 'correction-far-from-theory']));
+    const far = r.warnings.find((w) => w.code === 'correction-far-from-theory')!.message;
+    expect(far).toMatch(/lead/);
+    expect(far).toMatch(/pulley teeth/);
+    expect(far).toMatch(/microsteps/);
+  });
+
+  it('a correction 6 % from theory is far; 4 % is not (the 5 % rule)', () => {
+    const at = (measured: number) => evaluateTravelTrial({ stepsPerMmUsed: 100, moves: [{ commandedMm: 100, measuredMm: measured }, { commandedMm: 200, measuredMm: measured * 2 }], theoreticalStepsPerMm: 100 });
+    expect(at(100 / 1.06).farFromTheory).toBe(true);
+    expect(at(100 / 1.04).farFromTheory).toBe(false);
+  });
+
+  // ΔL = α·L·ΔT (TRADE.md): a steel tape at 30 °C on a steel machine at 20 °C reads 1000 mm where
+  // the machine moved 1000 × (1 + 11.5e-6 × 10) mm; the corrected steps per mm follows.
+  it('refers measured moves to 20 °C through the thermal factor', () => {
+    const factor = 11.5e-6 * 10;
+    const r = evaluateTravelTrial({ stepsPerMmUsed: 100, moves: [{ commandedMm: 1000, measuredMm: 1000 }], thermalFactor: factor });
+    expect(r.scale).toBeCloseTo(1 + factor, 14);
+    expect(r.thermalCorrectionPercent).toBeCloseTo(0.0115, 12);
+  });
+});

@@ -4,6 +4,10 @@ import { id, timestamps } from './columns.js';
 import { workshops } from './workshops.js';
 import { machines } from './machines.js';
 import { users } from './users.js';
+import type { ScaleMaterial } from '../../engine/thermal.js';
+
+/** The units lengths and readings are typed in (1 in = 25.4 mm exactly). */
+export const DRIVE_UNITS = ['mm', 'um', 'in', 'thou'] as const;
 
 export const DRIVE_KINDS = ['screw', 'belt', 'rack'] as const;
 export type DriveKind = (typeof DRIVE_KINDS)[number];
@@ -16,6 +20,8 @@ export type DriveKind = (typeof DRIVE_KINDS)[number];
 export interface DriveRecord {
   type: DriveKind;
   lead?: number;
+  /** Threads per inch, when the lead was given that way (lead = 25.4 / threadsPerInch mm, single start). */
+  threadsPerInch?: number;
   nominalDiameter?: number;
   rootDiameter?: number;
   unsupportedLength?: number;
@@ -46,6 +52,8 @@ export const axes = pgTable(
     workshopId: uuid('workshop_id').notNull().references(() => workshops.id),
     machineId: uuid('machine_id').notNull().references(() => machines.id),
     name: text('name').notNull(),
+    /** The unit the axis is set up in: travel, lead, feed rates (per minute) are shown in it; stored in mm. */
+    lengthUnit: text('length_unit', { enum: DRIVE_UNITS }).notNull().default('mm'),
     drive: jsonb('drive').$type<DriveRecord>().notNull(),
     motorStepsPerRev: integer('motor_steps_per_rev').notNull(),
     microsteps: doublePrecision('microsteps').notNull(),
@@ -71,9 +79,18 @@ export const travelTrials = pgTable(
     workshopId: uuid('workshop_id').notNull().references(() => workshops.id),
     machineId: uuid('machine_id').notNull().references(() => machines.id),
     axisId: uuid('axis_id').notNull().references(() => axes.id, { onDelete: 'cascade' }),
-    unit: text('unit').notNull(),
+    /** Unit of the commanded and measured moves. */
+    lengthUnit: text('length_unit', { enum: DRIVE_UNITS }).notNull().default('mm'),
+    /** Errors and residuals are shown in it; the instrument's resolution is typed in it. */
+    readingUnit: text('reading_unit', { enum: DRIVE_UNITS }).notNull().default('mm'),
+    /** Machine and scale (tape, rule) temperatures, °C, and the scale's material, for referring results to 20 °C. */
+    machineTemperatureC: doublePrecision('machine_temperature_c'),
+    scaleTemperatureC: doublePrecision('scale_temperature_c'),
+    scaleMaterial: text('scale_material').$type<ScaleMaterial>(),
+    /** Smallest step the instrument reads, in readingUnit. */
+    instrumentResolution: doublePrecision('instrument_resolution'),
     stepsPerMmUsed: doublePrecision('steps_per_mm_used').notNull(),
-    /** Commanded in mm, measured in `unit`, as typed. */
+    /** Commanded and measured in lengthUnit, as typed. */
     moves: jsonb('moves').$type<{ commanded: number; measured: number }[]>().notNull(),
     throughOrigin: boolean('through_origin').notNull().default(false),
     result: jsonb('result').$type<Record<string, unknown>>().notNull(),
@@ -95,10 +112,19 @@ export const positioningRuns = pgTable(
     workshopId: uuid('workshop_id').notNull().references(() => workshops.id),
     machineId: uuid('machine_id').notNull().references(() => machines.id),
     axisId: uuid('axis_id').notNull().references(() => axes.id, { onDelete: 'cascade' }),
-    unit: text('unit').notNull(),
-    /** Target positions, mm. */
+    /** Unit of the target positions. */
+    lengthUnit: text('length_unit', { enum: DRIVE_UNITS }).notNull().default('mm'),
+    /** Unit of the deviations. */
+    readingUnit: text('reading_unit', { enum: DRIVE_UNITS }).notNull().default('mm'),
+    /** Machine and scale (tape, rule) temperatures, °C, and the scale's material, for referring results to 20 °C. */
+    machineTemperatureC: doublePrecision('machine_temperature_c'),
+    scaleTemperatureC: doublePrecision('scale_temperature_c'),
+    scaleMaterial: text('scale_material').$type<ScaleMaterial>(),
+    /** Smallest step the instrument reads, in readingUnit. */
+    instrumentResolution: doublePrecision('instrument_resolution'),
+    /** Target positions in lengthUnit, as typed. */
     targets: jsonb('targets').$type<number[]>().notNull(),
-    /** Deviations (actual − target) in `unit`, as typed. */
+    /** Deviations (actual − target) in readingUnit, as typed. */
     runs: jsonb('runs').$type<{ direction: 'up' | 'down'; deviations: number[] }[]>().notNull(),
     result: jsonb('result').$type<Record<string, unknown>>().notNull(),
     notes: text('notes').notNull().default(''),

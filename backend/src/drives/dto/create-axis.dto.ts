@@ -3,6 +3,8 @@ import { IsObject, IsString, Matches, MaxLength, ValidateNested } from 'class-va
 import { DriveDto } from './drive.dto.js';
 import { Finite, OptionalFinite } from './validators.js';
 import { Optional } from '../../common/optional.js';
+import { LengthUnitField } from '../../common/unit-fields.js';
+import type { LengthUnit } from '../../engine/units.js';
 
 export class CreateAxisDto {
   /** "X", "Y1", "Y2", "Z": the first letter is the axis letter the test program moves. */
@@ -10,6 +12,10 @@ export class CreateAxisDto {
   @Matches(/\S/, { message: 'name is required (X, Y1, Z…)' })
   @MaxLength(40, { message: 'name must be at most 40 characters' })
   name: string;
+
+  /** The unit the axis is set up in: drive lengths, feed rates (per minute) and travel are typed in it. */
+  @LengthUnitField()
+  lengthUnit?: LengthUnit;
 
   @IsObject({ message: 'drive must be an object {type, …}' })
   @ValidateNested()
@@ -30,10 +36,15 @@ export class CreateAxisDto {
   @Finite('stepsPerMm')
   stepsPerMm: number;
 
-  /** The fastest feed rate the axis will be asked for, mm/min. */
+  /** The fastest feed rate the axis will be asked for, lengthUnit per minute. */
   @OptionalFinite('maxFeedRate')
   maxFeedRate?: number;
 
+  /** Travel measured end to end, in lengthUnit. */
+  @OptionalFinite('measuredTravel')
+  measuredTravel?: number;
+
+  /** The same in mm whatever lengthUnit says (older callers); not together with measuredTravel. */
   @OptionalFinite('measuredTravelMm')
   measuredTravelMm?: number;
 

@@ -5,7 +5,8 @@ import { OptionalFinite } from './validators.js';
 import { Optional } from '../../common/optional.js';
 
 /**
- * An axis drive with the calculators' field names (lengths in mm). Which fields apply depends on
+ * An axis drive with the calculators' field names; lengths in the axis's lengthUnit (the pinion
+ * module is in mm by definition). Which fields apply depends on
  * `type`; the service refuses a missing one the type needs and one it does not use.
  */
 export class DriveDto {
@@ -14,6 +15,10 @@ export class DriveDto {
 
   @OptionalFinite('drive.lead')
   lead?: number;
+
+  /** A single-start screw's lead given as threads per inch (lead = 1/threadsPerInch in), in place of lead. */
+  @OptionalFinite('drive.threadsPerInch')
+  threadsPerInch?: number;
 
   @OptionalFinite('drive.nominalDiameter')
   nominalDiameter?: number;

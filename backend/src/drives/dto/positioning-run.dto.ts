@@ -1,8 +1,11 @@
 import { Type } from 'class-transformer';
 import { ArrayMaxSize, IsArray, IsIn, IsNumber, IsObject, IsString, MaxLength, ValidateNested } from 'class-validator';
 import type { Direction } from '../../engine/positioning.js';
-import { LENGTH_UNITS, type LengthUnit } from '../../engine/units.js';
+import type { LengthUnit } from '../../engine/units.js';
+import { LengthUnitField, ReadingUnitField } from '../../common/unit-fields.js';
 import { Optional } from '../../common/optional.js';
+import { ReplacedUnitField } from './replaced-unit.js';
+import { TemperatureFieldsDto } from './temperature-fields.js';
 
 const FINITE = { allowNaN: false, allowInfinity: false } as const;
 
@@ -10,19 +13,27 @@ export class PositioningRunEntryDto {
   @IsIn(['up', 'down'], { message: 'runs[].direction must be up or down' })
   direction: Direction;
 
-  /** Actual − target at each target, in the run's unit. */
+  /** Actual − target at each target, in readingUnit. */
   @IsArray({ message: 'runs[].deviations must be a list of numbers' })
   @ArrayMaxSize(500, { message: 'runs[].deviations holds at most 500 values' })
   @IsNumber(FINITE, { each: true, message: 'every value in runs[].deviations must be a finite number' })
   deviations: number[];
 }
 
-export class CreatePositioningRunDto {
-  @IsIn(LENGTH_UNITS, { message: `unit must be one of ${LENGTH_UNITS.join(', ')}` })
-  unit: LengthUnit;
+export class CreatePositioningRunDto extends TemperatureFieldsDto {
+  /** Unit of the target positions (mm when absent). */
+  @LengthUnitField()
+  lengthUnit?: LengthUnit;
 
-  /** Target positions along the axis, mm, ascending. */
-  @IsArray({ message: 'targets must be a list of numbers (mm)' })
+  /** Unit of the deviations and the instrument resolution (mm when absent). */
+  @ReadingUnitField()
+  readingUnit?: LengthUnit;
+
+  @ReplacedUnitField()
+  unit?: LengthUnit;
+
+  /** Target positions along the axis, in lengthUnit, ascending. */
+  @IsArray({ message: 'targets must be a list of numbers (in lengthUnit)' })
   @ArrayMaxSize(500, { message: 'targets holds at most 500 positions' })
   @IsNumber(FINITE, { each: true, message: 'every value in targets must be a finite number' })
   targets: number[];

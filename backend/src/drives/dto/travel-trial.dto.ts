@@ -1,22 +1,33 @@
 import { Type } from 'class-transformer';
-import { ArrayMaxSize, ArrayMinSize, IsArray, IsBoolean, IsIn, IsObject, IsString, MaxLength, ValidateNested } from 'class-validator';
-import { LENGTH_UNITS, type LengthUnit } from '../../engine/units.js';
+import { ArrayMaxSize, ArrayMinSize, IsArray, IsBoolean, IsObject, IsString, MaxLength, ValidateNested } from 'class-validator';
+import type { LengthUnit } from '../../engine/units.js';
+import { LengthUnitField, ReadingUnitField } from '../../common/unit-fields.js';
 import { Finite, OptionalFinite } from './validators.js';
 import { Optional } from '../../common/optional.js';
+import { ReplacedUnitField } from './replaced-unit.js';
+import { TemperatureFieldsDto } from './temperature-fields.js';
 
 export class TravelMoveDto {
-  /** Commanded move, mm (the test program runs in G21). */
+  /** Commanded move, in lengthUnit. */
   @Finite('moves[].commanded')
   commanded: number;
 
-  /** Measured move, in the trial's unit. */
+  /** Measured move, in lengthUnit. */
   @Finite('moves[].measured')
   measured: number;
 }
 
-export class CreateTravelTrialDto {
-  @IsIn(LENGTH_UNITS, { message: `unit must be one of ${LENGTH_UNITS.join(', ')}` })
-  unit: LengthUnit;
+export class CreateTravelTrialDto extends TemperatureFieldsDto {
+  /** Unit of the commanded and the measured moves (mm when absent). */
+  @LengthUnitField()
+  lengthUnit?: LengthUnit;
+
+  /** Unit the errors and residuals are shown in, and the instrument resolution is typed in (mm when absent). */
+  @ReadingUnitField()
+  readingUnit?: LengthUnit;
+
+  @ReplacedUnitField()
+  unit?: LengthUnit;
 
   /** Steps per mm in the controller while the moves were made; the axis's value when absent. */
   @OptionalFinite('stepsPerMmUsed')
@@ -39,4 +50,11 @@ export class CreateTravelTrialDto {
   @IsString({ message: 'notes must be text' })
   @MaxLength(2000, { message: 'notes must be at most 2000 characters' })
   notes?: string;
+}
+
+export class ApplyTravelTrialDto {
+  /** Needed when the correction is more than 5 % from the drive's theoretical steps per mm. */
+  @Optional()
+  @IsBoolean({ message: 'confirmFarCorrection must be true or false' })
+  confirmFarCorrection?: boolean;
 }
