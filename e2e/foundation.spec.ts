@@ -62,7 +62,9 @@ test.describe('sign-in and the app frame', () => {
     await page.getByRole('dialog').getByRole('button', { name: 'Add member' }).click();
     await expect(page.getByRole('dialog')).toContainText(`We have e-mailed ${email}`);
     await page.getByRole('button', { name: 'Done' }).click();
-    await expect(page.getByRole('table', { name: 'Members' })).toContainText('Nell Carver');
+    const members = page.getByRole('table', { name: 'Members' });
+    await expect(members).toContainText('Nell Carver');
+    await expect(members.getByRole('row').filter({ hasText: 'Nell Carver' })).toContainText('Invited, not signed in yet');
     // The local fake mail server caught the sign-in mail: the outbox shows the admin that it went,
     // never its link; the whole message is in the data folder's mail drop, as the person would get it.
     await page.goto('/outbox');
@@ -74,11 +76,41 @@ test.describe('sign-in and the app frame', () => {
     await other.goto(link);
     await other.getByLabel('New password').fill('nell chooses this one');
     await other.getByLabel('Repeat the password').fill('nell chooses this one');
-    await expect(other.getByRole('button', { name: 'Set password' })).toBeEnabled();
+    await expect(other.getByRole('button', { name: 'Set password and sign in' })).toBeEnabled();
     await snap(other, 'set-password');
-    await other.getByRole('button', { name: 'Set password' }).click();
-    await expect(other).toHaveURL(/sign-in/);
-    await signInAs(other, email, 'nell chooses this one');
+    await other.getByRole('button', { name: 'Set password and sign in' }).click();
+    // Signed in straight away, on the machines list; the admin now sees her as active.
+    await expect(other).toHaveURL(/\/machines$/);
+    await expect(other.getByRole('heading', { name: 'Machines' })).toBeVisible();
     await other.close();
+    await page.goto('/people');
+    await expect(page.getByRole('table', { name: 'Members' }).getByRole('row').filter({ hasText: 'Nell Carver' })).toContainText('Active');
+  });
+
+  test('someone who forgot their password asks for a link from the sign-in page and is signed in after choosing a new one', async ({ page }) => {
+    const admin = await page.context().browser()!.newPage();
+    await signInAs(admin, DEMO.admin);
+    await admin.goto('/people');
+    await admin.getByRole('button', { name: 'Add member' }).click();
+    const email = `forgot.${Date.now()}@example.com`;
+    await admin.getByLabel('Name').fill('Fern Forgetful');
+    await admin.getByLabel('E-mail').fill(email);
+    await admin.getByRole('dialog').getByRole('button', { name: 'Add member' }).click();
+    await expect(admin.getByRole('dialog')).toContainText(`We have e-mailed ${email}`);
+    await admin.close();
+    // She never used the invitation and lost it: she asks for a link herself.
+    await page.goto('/sign-in');
+    await page.getByLabel('E-mail').fill(email);
+    await page.getByRole('link', { name: 'Forgot your password?' }).click();
+    await expect(page.getByLabel('E-mail')).toHaveValue(email);
+    await page.getByRole('button', { name: 'Send me a link' }).click();
+    await expect(page.getByRole('status')).toContainText('If an active account uses this address');
+    await snap(page, 'forgot-password-sent');
+    const link = await linkMailedTo(email, /Choose a new Railwright password/);
+    await page.goto(link);
+    await page.getByLabel('New password').fill('fern remembers this one');
+    await page.getByLabel('Repeat the password').fill('fern remembers this one');
+    await page.getByRole('button', { name: 'Set password and sign in' }).click();
+    await expect(page).toHaveURL(/\/machines$/);
   });
 });

@@ -5,8 +5,8 @@ import { expect } from '@playwright/test';
 // The server under test writes each caught message into its data folder (see playwright.config.ts).
 const dropFolder = () => path.join(process.env.RAILWRIGHT_DATA ?? path.resolve(__dirname, '../../.test-data/e2e'), 'mail');
 
-/** The set-password link of the newest message to `email` in the local mail drop. */
-export async function linkMailedTo(email: string): Promise<string> {
+/** The set-password link of the newest message to `email` (whose subject matches `subject`, when given) in the local mail drop. */
+export async function linkMailedTo(email: string, subject?: RegExp): Promise<string> {
   let link: string | null = null;
   await expect
     .poll(() => {
@@ -19,6 +19,7 @@ export async function linkMailedTo(email: string): Promise<string> {
       for (const f of files) {
         const raw = readFileSync(path.join(dropFolder(), f), 'utf8');
         if (!raw.toLowerCase().includes(email.toLowerCase())) continue;
+        if (subject && !subject.test(/^subject:(.*)$/im.exec(raw)?.[1] ?? '')) continue;
         const unfolded = bodyText(raw);
         link = /(https?:\/\/\S*?\/set-password\?token=[A-Za-z0-9_-]+)/.exec(unfolded)?.[1] ?? null;
         if (link) return link;

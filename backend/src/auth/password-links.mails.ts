@@ -27,3 +27,18 @@ export function passwordChangedMail(input: { name: string; workshopName: string;
   ].join('\n');
   return { subject, text };
 }
+
+export function passwordForgottenMail(input: { name: string; workshopName: string; url: string; hours: number }) {
+  const subject = `Choose a new Railwright password for ${input.workshopName}`;
+  const text = [
+    `Hello ${input.name},`,
+    '',
+    `Someone asked for a link to choose a new Railwright password for ${input.workshopName}, for this e-mail address.`,
+    '',
+    `Choose a new password with this link (it works once, for the next ${input.hours} hours):`,
+    input.url,
+    '',
+    'Your current password keeps working until the link is used. If you did not ask for this, ignore this message.',
+  ].join('\n');
+  return { subject, text };
+}

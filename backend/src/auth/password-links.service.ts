@@ -1,11 +1,13 @@
-import { GoneException, Injectable, NotFoundException } from '@nestjs/common';
+import { GoneException, HttpException, HttpStatus, Injectable, NotFoundException } from '@nestjs/common';
 import { createHash, randomBytes } from 'node:crypto';
 import { loadConfig } from '../config/config.js';
 import { MailService } from '../mail/mail.service.js';
 import { RecordsService } from '../records/records.service.js';
 import { AuthRepository } from './auth.repository.js';
 import { hashPassword } from './password.js';
-import { passwordChangedMail } from './password-links.mails.js';
+import { passwordChangedMail, passwordForgottenMail } from './password-links.mails.js';
+import { SignInThrottle, SignInThrottled } from './login-throttle.js';
+import { TransactionContext } from '../database/transaction-context.js';
 import { PasswordLinksRepository } from './password-links.repository.js';
 
 export const LINK_HOURS = 72;
@@ -20,7 +22,35 @@ export class PasswordLinksService {
     private readonly accounts: AuthRepository,
     private readonly records: RecordsService,
     private readonly mail: MailService,
+    private readonly throttle: SignInThrottle,
+    private readonly transactions: TransactionContext,
   ) {}
+
+  /**
+   * "Forgot my password": a link to choose a new one goes to the address, and only to it, when an
+   * active account has it. The answer is the same either way, so nobody learns which addresses
+   * have accounts; requests are counted per address and per e-mail like sign-ins, outside the
+   * command so a refused one still counts. The current password keeps working until the link is used.
+   */
+  async requestByEmail(email: string, address: string): Promise<void> {
+    const key = `forgot:${email.trim().toLowerCase()}`;
+    try {
+      await this.transactions.outside(() => this.throttle.check(key, address));
+    } catch (err) {
+      if (!(err instanceof SignInThrottled)) throw err;
+      const wait = err.retryAfterSeconds >= 60 ? `${Math.ceil(err.retryAfterSeconds / 60)} minutes` : `${err.retryAfterSeconds} seconds`;
+      throw new HttpException({ statusCode: 429, message: `Too many requests for a password link. Try again in ${wait}.`, retryAfterSeconds: err.retryAfterSeconds }, HttpStatus.TOO_MANY_REQUESTS);
+    }
+    const account = await this.accounts.findActiveByEmail(email);
+    if (!account) return;
+    const link = await this.create(account.id, 'reset');
+    await this.records.audit(
+      { id: null, name: account.name, workshopId: account.workshopId },
+      { recordType: 'password', recordId: account.id, action: 'password-link-requested', summary: `A link to choose a new password was e-mailed to ${account.name} (asked for on the sign-in page)` },
+    );
+    const { subject, text } = passwordForgottenMail({ name: account.name, workshopName: account.workshopName, url: link.url, hours: LINK_HOURS });
+    this.mail.later(() => this.mail.send({ workshopId: account.workshopId, to: [account.email], subject, text }), 'password link mail');
+  }
 
   /** A new link for the person; the token itself is returned once, to be mailed, and never stored. */
   async create(userId: string, purpose: 'invitation' | 'reset' = 'invitation'): Promise<{ url: string; expiresAt: Date }> {
@@ -40,7 +70,7 @@ export class PasswordLinksService {
    * Sets the password, ends every session the person had, keeps it in the history and tells
    * them by mail, so a change they did not make does not go unnoticed.
    */
-  async setPassword(token: string, password: string): Promise<{ email: string }> {
+  async setPassword(token: string, password: string): Promise<{ email: string; userId: string }> {
     const found = await this.usable(token);
     const person = { id: found.link.userId, name: found.name, workshopId: found.workshopId };
     const ok = await this.repo.consume(found.link.id, person, await hashPassword(password));
@@ -58,7 +88,7 @@ export class PasswordLinksService {
       const { subject, text } = passwordChangedMail({ name: found.name, workshopName: found.workshopName, at: now });
       this.mail.later(() => this.mail.send({ workshopId: found.workshopId, to: [found.email], subject, text }), 'password-changed mail');
     }
-    return { email: found.email };
+    return { email: found.email, userId: person.id };
   }
 
   private async usable(token: string) {

@@ -10,6 +10,7 @@ const page = (load: () => Promise<{ default: React.ComponentType }>) => async ()
 const router = createBrowserRouter([
   { path: paths.signIn, Component: SignInRoute },
   { path: paths.setPassword, lazy: page(() => import('./routes/set-password')) },
+  { path: paths.forgotPassword, lazy: page(() => import('./routes/forgot-password')) },
   { path: '/verify/:token', lazy: page(() => import('./routes/verify')) },
   {
     lazy: async () => ({ Component: (await import('./routes/signed-in-layout')).SignedInLayout }),

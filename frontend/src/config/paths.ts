@@ -12,6 +12,7 @@ export const paths = {
   targetSets: '/target-sets',
   people: '/people',
   setPassword: '/set-password',
+  forgotPassword: '/forgot-password',
   outbox: '/outbox',
   activity: '/activity',
   verify: (token: string) => `/verify/${token}`,

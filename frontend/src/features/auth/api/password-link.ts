@@ -14,4 +14,8 @@ export const passwordLinkQueryOptions = (token: string) =>
 export const usePasswordLink = (token: string) => useQuery({ ...passwordLinkQueryOptions(token), enabled: !!token });
 
 export const useSetPassword = () =>
-  useMutation({ mutationFn: (input: { token: string; password: string }) => api.post<{ email: string }>('/auth/password-reset', input) });
+  useMutation({ mutationFn: (input: { token: string; password: string }) => api.post<{ email: string; signedIn: boolean }>('/auth/password-reset', input) });
+
+/** "Forgot my password": the answer is the same whether or not the address has an account. */
+export const useRequestPasswordLink = () =>
+  useMutation({ mutationFn: (input: { email: string }) => api.post<{ message: string }>('/auth/password-reset/request', input) });

@@ -5,7 +5,7 @@ import { usePasswordLink, useSetPassword } from '../api/password-link';
 
 const MIN = 12;
 
-/** The page a new member reaches from the sign-in mail: choose a password, then sign in. */
+/** The page a person reaches from a mailed link: choose a password, and be signed in with it. */
 export function SetPasswordForm({ token, onDone }: { token: string; onDone: (email: string) => void }) {
   const link = usePasswordLink(token);
   const set = useSetPassword();
@@ -31,7 +31,7 @@ export function SetPasswordForm({ token, onDone }: { token: string; onDone: (ema
         <TextField label="New password" type="password" autoComplete="new-password" value={password} onChange={(e) => setPassword(e.target.value)} helperText={`At least ${MIN} characters`} error={password.length > 0 && tooShort} required fullWidth autoFocus />
         <TextField label="Repeat the password" type="password" autoComplete="new-password" value={repeat} onChange={(e) => setRepeat(e.target.value)} error={mismatch} helperText={mismatch ? 'The two entries differ' : ' '} required fullWidth />
         <Button type="submit" variant="contained" size="large" disabled={tooShort || repeat !== password || set.isPending}>
-          {set.isPending ? 'Saving…' : 'Set password'}
+          {set.isPending ? 'Saving…' : 'Set password and sign in'}
         </Button>
       </Stack>
     </Box>

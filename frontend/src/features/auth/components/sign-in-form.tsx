@@ -1,5 +1,7 @@
 import { useState, type FormEvent } from 'react';
-import { Alert, Box, Button, Stack, Typography } from '@mui/material';
+import { Alert, Box, Button, Link, Stack, Typography } from '@mui/material';
+import { Link as RouterLink } from 'react-router-dom';
+import { paths } from '../../../config/paths';
 import { LightTextField } from '../../../components/form/light-text-field';
 import { useLogin } from '../api/login';
 
@@ -44,6 +46,9 @@ export function SignInForm({ onSignedIn }: { onSignedIn: () => void }) {
         <Button type="submit" variant="contained" size="large" disabled={login.isPending || !email || !password}>
           {login.isPending ? 'Signing in…' : 'Sign in'}
         </Button>
+        <Link component={RouterLink} to={email ? `${paths.forgotPassword}?email=${encodeURIComponent(email.trim())}` : paths.forgotPassword} sx={{ alignSelf: 'center', py: 1.25 }}>
+          Forgot your password?
+        </Link>
       </Stack>
     </Box>
   );

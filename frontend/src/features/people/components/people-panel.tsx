@@ -92,7 +92,7 @@ export function PeoplePanel() {
                   </Select>
                 </TableCell>
                 <TableCell>
-                  <Chip size="small" label={p.active ? 'Active' : 'Deactivated'} color={p.active ? 'success' : 'default'} variant="outlined" />
+                  <PersonStatusChip active={p.active} invited={p.invitationPending} />
                 </TableCell>
                 <TableCell align="right">
                   {p.active && p.invitationPending && (
@@ -125,4 +125,11 @@ export function PeoplePanel() {
       />
     </>
   );
+}
+
+/** Invited people have not chosen a password yet, so they have never signed in: they are not "active" yet. */
+function PersonStatusChip({ active, invited }: { active: boolean; invited: boolean }) {
+  if (!active) return <Chip size="small" label="Deactivated" variant="outlined" />;
+  if (invited) return <Chip size="small" label="Invited, not signed in yet" color="info" variant="outlined" />;
+  return <Chip size="small" label="Active" color="success" variant="outlined" />;
 }
