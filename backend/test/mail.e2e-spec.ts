@@ -64,7 +64,7 @@ describe('mail: the fake SMTP server, the outbox, and set-your-password links', 
 
     const set = await anonymous(app).post('/api/auth/password-reset').send({ token, password: 'gantry square and true' });
     expect(set.status).toBe(200);
-    expect(set.body).toEqual({ email });
+    expect(set.body).toEqual({ email, signedIn: true });
     expect((await anonymous(app).post('/api/auth/login').send({ email, password: 'gantry square and true' })).status).toBe(200);
 
     const again = await anonymous(app).post('/api/auth/password-reset').send({ token, password: 'someone else entirely' });
