@@ -267,11 +267,11 @@ describe('readiness board, waivers, approval and certificate', () => {
 
   it('locks a real rail sweep it was based on: deleting it answers 409, and a new sweep takes the machine out of ready to cut', async () => {
     const machineId = await newMachine(ws, 'Swept router');
-    const rail = await ws.as.builder.post(`/api/machines/${machineId}/rails`).send({ label: 'Y1 (left)', axis: 'Y1', lengthMm: 800, holePitchMm: 60, firstHoleMm: 20 });
+    const rail = await ws.as.builder.post(`/api/machines/${machineId}/rails`).send({ label: 'Y1 (left)', axis: 'Y1', length: 800, holePitch: 60, firstHole: 40 });
     expect([rail.status, rail.body.message]).toEqual([201, undefined]);
     // Readings within a few µm of a straight line: well inside the router's 20 µm.
     const stations = [0, 200, 400, 600, 800].map((position, i) => ({ position, reading: [0, 2, 1, 3, 2][i] }));
-    const sweep = await ws.as.builder.post(`/api/rails/${rail.body.id}/sweeps`).send({ unit: 'um', phase: 'as-left', stations });
+    const sweep = await ws.as.builder.post(`/api/rails/${rail.body.id}/sweeps`).send({ readingUnit: 'um', phase: 'as-left', stations });
     expect([sweep.status, sweep.body.message]).toEqual([201, undefined]);
     const straightKey = (await board(ws, machineId)).checks.find((c) => c.recordId === sweep.body.id)?.key;
     expect(straightKey).toBeDefined();
@@ -282,7 +282,7 @@ describe('readiness board, waivers, approval and certificate', () => {
     expect(del.body.message).toMatch(/approved commissioning record/);
     expect((await ws.as.builder.get(`/api/sweeps/${sweep.body.id}`)).status).toBe(200);
     // A new sweep is refused while the approval stands; after reopening it is recorded.
-    const badSweep = { unit: 'um', phase: 'as-left', stations: stations.map((st, i) => ({ ...st, reading: [0, 60, -40, 70, 0][i] })) };
+    const badSweep = { readingUnit: 'um', phase: 'as-left', stations: stations.map((st, i) => ({ ...st, reading: [0, 60, -40, 70, 0][i] })) };
     const refused = await ws.as.builder.post(`/api/rails/${rail.body.id}/sweeps`).send(badSweep);
     expect([refused.status, refused.body.message]).toEqual([409, expect.stringMatching(/Swept router is approved as ready to cut: .* The owner can reopen the machine with a reason/)]);
     expect((await ws.as.owner.post(`/api/machines/${machineId}/reopen`).send({ reason: 'Rail re-bedded after a crash' })).status).toBe(201);

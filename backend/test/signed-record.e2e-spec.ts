@@ -62,9 +62,10 @@ describe('the signed record', () => {
     app = await createTestApp();
     ws = await createTestWorkshop(app, 'Signing');
     machineId = await newMachine(ws, 'Sealed router');
-    const rail = await ws.as.builder.post(`/api/machines/${machineId}/rails`).send({ label: 'Y1 (left)', axis: 'Y1', lengthMm: 800, holePitchMm: 60, firstHoleMm: 20 });
+    const rail = await ws.as.builder.post(`/api/machines/${machineId}/rails`).send({ label: 'Y1 (left)', axis: 'Y1', length: 800, holePitch: 60, firstHole: 40 });
+    expect([rail.status, rail.body.message]).toEqual([201, undefined]);
     const stations = [0, 200, 400, 600, 800].map((position, i) => ({ position, reading: readings[i] }));
-    const sweep = await ws.as.builder.post(`/api/rails/${rail.body.id}/sweeps`).send({ unit: 'um', phase: 'as-left', stations });
+    const sweep = await ws.as.builder.post(`/api/rails/${rail.body.id}/sweeps`).send({ readingUnit: 'um', phase: 'as-left', stations });
     expect([sweep.status, sweep.body.message]).toEqual([201, undefined]);
     sweepId = sweep.body.id;
     const straightKey = (await board(ws, machineId)).checks.find((c) => c.recordId === sweepId)?.key;

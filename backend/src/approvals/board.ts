@@ -39,6 +39,8 @@ export function boardChecks(checks: ReadinessCheck[], waivers: WaiverRow[]): Boa
         recordedAt: c.recordedAt,
         link: c.link,
         waiver: w ? { id: w.id, reason: w.reason, by: w.waivedByName, at: w.waivedAt.toISOString() } : null,
+        // Kept with the check in the approval snapshot, so the certificate prints them as they stood.
+        warnings: (c.warnings ?? []).map((w) => ({ code: w.code, message: w.message })),
         ...(c.series ? { series: c.series } : {}),
       };
     })

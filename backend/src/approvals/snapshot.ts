@@ -1,5 +1,6 @@
 import type { CheckSeries, ReadinessCheck } from '../records/readiness.js';
 import type { TargetValue } from '../database/schema/target-sets.js';
+import type { ResultWarning } from '../engine/warnings.js';
 import { canonicalJson, sha256Hex } from './canonical-json.js';
 
 export interface WaiverInfo {
@@ -24,6 +25,8 @@ export interface BoardCheck {
   recordedAt: string | null;
   link: string;
   waiver: WaiverInfo | null;
+  /** What a person should know about the result; absent in snapshots taken before warnings were kept. */
+  warnings?: ResultWarning[];
   series?: CheckSeries;
 }
 

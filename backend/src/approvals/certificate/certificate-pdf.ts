@@ -2,10 +2,12 @@ import PDFDocument from 'pdfkit';
 import type { ApprovalSnapshot, BoardCheck } from '../snapshot.js';
 import { KIND_LABELS, STATUS_LABELS } from '../board.js';
 import { cautionsFor } from '../cautions.js';
-import { drawResultGauge, drawSeriesChart, drawSquarenessSketch } from './charts.js';
+import { bedMapLayout, drawBedMap } from './bed-map.js';
+import { drawResultGauge, drawSeriesChart, drawSquarenessSketch, legendRows } from './charts.js';
+import { drawPartTable, partRows, partTableHeight } from './part-table.js';
 import { certificateFonts, type FontName } from './fonts.js';
 import { dayOf, resultText, targetText, utc } from './format.js';
-import { BRASS, INK, MUTED, PAPER, RULE, STATUS_COLOURS, STEEL } from './palette.js';
+import { BRASS, INK, MUTED, PAPER, RULE, STATUS_COLOURS, STEEL, WARNING_INK } from './palette.js';
 import { write } from './pdf-text.js';
 import { drawQrCode } from './qr-code.js';
 
@@ -21,7 +23,6 @@ const M = 48;
 const PAGE = { w: 595.28, h: 841.89 };
 const BOTTOM = PAGE.h - M - 20;
 const WIDTH = PAGE.w - 2 * M;
-const CHART_KINDS: BoardCheck['kind'][] = ['rail-straightness', 'positioning', 'diagonal-check'];
 const KIND_LINES = { plasma: 'Plasma table', router: 'Router', other: 'Gantry machine' } as Record<string, string>;
 
 /**
@@ -118,6 +119,8 @@ function header(doc: Doc, s: ApprovalSnapshot, a: CertificateInput['approval']) 
     ? `${s.checks.length} required checks: ${counts.within} within target, ${counts.waived} waived by an owner with a written reason.`
     : `${s.checks.length} required checks, all within target.`;
   para(doc, summary, 'regular', 9, MUTED);
+  const warned = s.checks.filter((c) => c.warnings?.length).length;
+  if (warned) para(doc, `${warned} ${warned === 1 ? 'check carries' : 'checks carry'} warnings, printed under ${warned === 1 ? 'it' : 'each'} below.`, 'regular', 9, WARNING_INK);
 }
 
 const countOf = (checks: BoardCheck[]) => ({
@@ -176,8 +179,30 @@ function checksTable(doc: Doc, checks: BoardCheck[]) {
       doc.fillColor(INK);
       doc.y += 2;
     }
+    checkWarnings(doc, c);
     doc.save().lineWidth(0.4).strokeColor(RULE).moveTo(M, doc.y).lineTo(M + WIDTH, doc.y).stroke().restore();
     doc.y += 4;
+  }
+}
+
+/** Every warning of a check, under its row: what a reader should know about the number above it. */
+function checkWarnings(doc: Doc, c: BoardCheck) {
+  const x = M + COLS[0].w + 3;
+  const w = WIDTH - COLS[0].w - 6;
+  for (const warning of c.warnings ?? []) {
+    const text = `Warning: ${warning.message}`;
+    doc.font('regular').fontSize(7.5);
+    const h = doc.heightOfString(text, { width: w - 8, lineGap: 1 }) + 3;
+    if (doc.y + h > BOTTOM) {
+      doc.addPage();
+      doc.y = M;
+    }
+    const y = doc.y;
+    doc.save().rect(x, y + 1, 2, h - 4).fill(BRASS).restore();
+    doc.fillColor(WARNING_INK);
+    write(doc, 'regular', 7.5, text, x + 7, y, { width: w - 8, lineGap: 1 });
+    doc.fillColor(INK);
+    doc.y = y + h;
   }
 }
 
@@ -195,17 +220,30 @@ function waivers(doc: Doc, checks: BoardCheck[]) {
   }
 }
 
+/** Kinds charted even without a series: the result is drawn against its target instead. */
+const GAUGE_KINDS: BoardCheck['kind'][] = ['rail-straightness', 'rail-parallelism', 'positioning', 'diagonal-check', 'bed-grid', 'backlash'];
+
 function charts(doc: Doc, checks: BoardCheck[], workArea: { x: number; y: number }) {
-  const charted = checks.filter((c) => CHART_KINDS.includes(c.kind));
-  heading(doc, 'Charts: straightness, positioning, squareness');
-  if (!charted.length) return para(doc, 'This machine had no straightness, positioning or squareness checks to chart.', 'regular', 9, MUTED);
+  // A check with nothing recorded (waived before it was started) has nothing to draw; the table says so.
+  const charted = checks.filter((c) => c.series || (GAUGE_KINDS.includes(c.kind) && c.result));
+  heading(doc, 'Charts and tables of the results');
+  if (!charted.length) return para(doc, 'This machine had no rail, positioning, backlash, squareness, bed or test-cut results to chart.', 'regular', 9, MUTED);
   for (const c of charted) {
-    const sketch = !c.series && c.kind === 'diagonal-check' && c.result?.unit === 'mm/m';
-    const h = c.series ? 170 : sketch ? 110 : c.result && c.target ? 66 : 24;
-    ensure(doc, h + 24);
-    write(doc, 'medium', 9, `${KIND_LABELS[c.kind]} \u2014 ${c.subject}${c.series?.title ? `: ${c.series.title}` : ''}`, M, doc.y, { width: WIDTH });
+    const title = `${KIND_LABELS[c.kind]} \u2014 ${c.subject}`;
+    const s = c.series;
+    const bed = s && c.kind === 'bed-grid' ? bedMapLayout(s) : null;
+    const parts = s && c.kind === 'test-cut' ? partRows(s) : null;
+    const sketch = !s && c.kind === 'diagonal-check' && c.result?.unit === 'mm/m';
+    const h = bed ? bed.height : parts ? partTableHeight(doc, WIDTH, parts) : s ? 170 + (legendRows(doc, s, WIDTH - 56) - 1) * 9 : sketch ? 110 : c.result && c.target ? 66 : 24;
+    doc.font('medium').fontSize(9);
+    const titleH = doc.heightOfString(`${title}${s?.title ? `: ${s.title}` : ''}`, { width: WIDTH });
+    ensure(doc, h + titleH + 14);
+    write(doc, 'medium', 9, title, M, doc.y, { width: WIDTH, continued: !!s?.title });
+    if (s?.title) doc.font('regular').text(`: ${s.title}`, { width: WIDTH });
     const box = { x: M, y: doc.y + 4, w: WIDTH, h };
-    if (c.series) drawSeriesChart(doc, box, c.series);
+    if (bed && s) drawBedMap(doc, box, s, bed);
+    else if (parts && s) drawPartTable(doc, box, s, parts);
+    else if (s) drawSeriesChart(doc, box, s, { valueLabels: c.kind === 'backlash' || s.lines.every((l) => l.points.length <= 1) });
     else if (sketch) drawSquarenessSketch(doc, box, c, workArea);
     else drawResultGauge(doc, box, c);
     doc.y = box.y + h + 10;
@@ -233,6 +271,8 @@ function cautions(doc: Doc, kind: string) {
 }
 
 function verification(doc: Doc, s: ApprovalSnapshot, a: CertificateInput['approval'], url: string | null) {
+  // The heading stays with its code and address rather than ending a page alone.
+  if (url) ensure(doc, 170);
   heading(doc, 'How to verify this certificate');
   if (!url) {
     para(

@@ -10,6 +10,37 @@ export interface Box { x: number; y: number; w: number; h: number }
 
 const LINE_COLOURS = ['#1d4f4a', '#c8932a', '#7a5aa6', '#2e7d4f', '#b3261e'];
 
+/**
+ * One colour per measured line; a band edge takes the colour of the measured line its label
+ * starts with ("Mean up + 2s" goes with "Mean up"), or of the line before it.
+ */
+function lineColours(s: CheckSeries): string[] {
+  const out: string[] = [];
+  let next = 0;
+  s.lines.forEach((line, i) => {
+    if (isBandEdge(line.label)) {
+      const owner = s.lines.findIndex((l, j) => j !== i && !isBandEdge(l.label) && line.label.startsWith(l.label));
+      out.push(owner >= 0 && owner < out.length ? out[owner] : owner >= 0 ? LINE_COLOURS[s.lines.slice(0, owner).filter((l) => !isBandEdge(l.label)).length % LINE_COLOURS.length] : (out[i - 1] ?? LINE_COLOURS[0]));
+    } else out.push(LINE_COLOURS[next++ % LINE_COLOURS.length]);
+  });
+  return out;
+}
+
+/** Lines of the legend a series needs at a width (for the box height). */
+export function legendRows(doc: Doc, s: CheckSeries, width: number): number {
+  let rows = 1;
+  let x = 0;
+  for (const line of s.lines) {
+    const w = 24 + widthOf(doc, 'regular', 6.5, line.label);
+    if (x > 0 && x + w > width) {
+      rows++;
+      x = 0;
+    }
+    x += w;
+  }
+  return rows;
+}
+
 function niceStep(range: number, count: number): number {
   const raw = range / Math.max(1, count);
   const mag = 10 ** Math.floor(Math.log10(raw));
@@ -24,8 +55,18 @@ function ticks(min: number, max: number, count: number): number[] {
   return out;
 }
 
-/** A line chart of the snapshot's series: axes with ticks and units, each line with its points, dashed limits. */
-export function drawSeriesChart(doc: Doc, box: Box, s: CheckSeries): void {
+/**
+ * Lines of a series that are the edges of a band (mean ± 2s of a repeat-and-reverse run) rather
+ * than measured values: drawn thin and dashed in the colour of the line they belong to.
+ */
+export const isBandEdge = (label: string) => /(?:[±+\u2212-]\s*2\s*s\b)|\bband\b/i.test(label);
+
+/**
+ * A line chart of the snapshot's series: axes with ticks and units, each line with its points,
+ * dashed limits. With `valueLabels` each point carries its value (for a handful of points, such as
+ * backlash at the ends and middle of an axis).
+ */
+export function drawSeriesChart(doc: Doc, box: Box, s: CheckSeries, options: { valueLabels?: boolean } = {}): void {
   const pts = s.lines.flatMap((l) => l.points).filter(([x, y]) => Number.isFinite(x) && Number.isFinite(y));
   if (!pts.length) return drawNoData(doc, box, 'no chart data');
   const ys = [...pts.map((p) => p[1]), ...(s.limits ?? []).map((l) => l.value), 0];
@@ -34,7 +75,8 @@ export function drawSeriesChart(doc: Doc, box: Box, s: CheckSeries): void {
   if (xMax === xMin) [xMin, xMax] = [xMin - 1, xMax + 1];
   const pad = (yMax - yMin || 1) * 0.1;
   [yMin, yMax] = [yMin - pad, yMax + pad];
-  const plot = { x: box.x + 46, y: box.y + 8, w: box.w - 56, h: box.h - 44 };
+  const legendExtra = (legendRows(doc, s, box.w - 56) - 1) * 9;
+  const plot = { x: box.x + 46, y: box.y + 8, w: box.w - 56, h: box.h - 44 - legendExtra };
   const px = (x: number) => plot.x + ((x - xMin) / (xMax - xMin)) * plot.w;
   const py = (y: number) => plot.y + plot.h - ((y - yMin) / (yMax - yMin)) * plot.h;
 
@@ -52,15 +94,24 @@ export function drawSeriesChart(doc: Doc, box: Box, s: CheckSeries): void {
     doc.lineWidth(0.8).strokeColor(STATUS_COLOURS['outside-target']).dash(3, { space: 2 }).moveTo(plot.x, py(l.value)).lineTo(plot.x + plot.w, py(l.value)).stroke().undash();
     write(doc, 'regular', 6, l.label, plot.x + plot.w - 120, py(l.value) - 8, { width: 118, align: 'right', lineBreak: false });
   }
+  const colours = lineColours(s);
   s.lines.forEach((line, i) => {
-    const colour = LINE_COLOURS[i % LINE_COLOURS.length];
+    const colour = colours[i];
     const p = line.points.filter(([x, y]) => Number.isFinite(x) && Number.isFinite(y));
     if (!p.length) return;
+    if (isBandEdge(line.label)) {
+      doc.lineWidth(0.7).strokeColor(colour).dash(2, { space: 1.5 });
+      p.forEach(([x, y], j) => (j ? doc.lineTo(px(x), py(y)) : doc.moveTo(px(x), py(y))));
+      doc.stroke().undash();
+      return;
+    }
     doc.lineWidth(1.1).strokeColor(colour);
     p.forEach(([x, y], j) => (j ? doc.lineTo(px(x), py(y)) : doc.moveTo(px(x), py(y))));
     doc.stroke();
     doc.fillColor(colour);
     for (const [x, y] of p) doc.circle(px(x), py(y), 1.6).fill();
+    // Value labels sit above their point, kept inside the plot at its edges.
+    if (options.valueLabels) for (const [x, y] of p) write(doc, 'medium', 6.5, num(y), Math.min(Math.max(px(x) - 20, plot.x + 2), plot.x + plot.w - 42), py(y) - 10, { width: 40, align: 'center', lineBreak: false });
   });
   doc.restore();
   const xLabel = `${s.x.label} (${unitLabel(s.x.unit)})`;
@@ -69,10 +120,20 @@ export function drawSeriesChart(doc: Doc, box: Box, s: CheckSeries): void {
   write(doc, 'regular', 7, `${s.y.label} (${unitLabel(s.y.unit)})`, box.x + 6 - plot.h / 2, plot.y + plot.h / 2 - 3, { width: plot.h, align: 'center', lineBreak: false });
   doc.restore();
   let lx = plot.x;
+  let ly = box.y + box.h - 8 - legendExtra;
   s.lines.forEach((line, i) => {
-    doc.save().lineWidth(1.5).strokeColor(LINE_COLOURS[i % LINE_COLOURS.length]).moveTo(lx, box.y + box.h - 5).lineTo(lx + 12, box.y + box.h - 5).stroke().restore();
-    write(doc, 'regular', 6.5, line.label, lx + 15, box.y + box.h - 8, { lineBreak: false });
-    lx += 24 + widthOf(doc, 'regular', 6.5, line.label);
+    const w = 24 + widthOf(doc, 'regular', 6.5, line.label);
+    // Legends that do not fit on one line wrap onto the next rather than running off the page.
+    if (lx > plot.x && lx + w > plot.x + plot.w) {
+      lx = plot.x;
+      ly += 9;
+    }
+    const band = isBandEdge(line.label);
+    doc.save().lineWidth(band ? 0.7 : 1.5).strokeColor(colours[i]);
+    if (band) doc.dash(2, { space: 1.5 });
+    doc.moveTo(lx, ly + 3).lineTo(lx + 12, ly + 3).stroke().restore();
+    write(doc, 'regular', 6.5, line.label, lx + 15, ly, { lineBreak: false });
+    lx += w;
   });
   doc.fillColor(INK);
 }

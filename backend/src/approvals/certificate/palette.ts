@@ -5,6 +5,8 @@ export const RULE = '#d9d4c7';
 export const STEEL = '#1d4f4a';
 export const BRASS = '#c8932a';
 export const PAPER = '#f6f4ef';
+/** Warning text: a dark brass that reads as caution without looking like a failed check. */
+export const WARNING_INK = '#7a5312';
 export const STATUS_COLOURS: Record<string, string> = {
   'within-target': '#2e7d4f',
   'outside-target': '#b3261e',
