@@ -10,9 +10,46 @@ export interface TargetValue {
   source?: string;
 }
 
+/** Something a person should know about a result: kept with the record. */
+export interface ResultWarning {
+  code: string;
+  message: string;
+}
+
+export type ScaleMaterial = 'steel' | 'stainless-steel' | 'aluminium' | 'glass' | 'invar';
+export const SCALE_MATERIAL_LABELS: Record<ScaleMaterial, string> = {
+  steel: 'Steel (tape, rule)',
+  'stainless-steel': 'Stainless steel',
+  aluminium: 'Aluminium',
+  glass: 'Glass scale',
+  invar: 'Invar',
+};
+
+/** How a record was referred to 20 °C. */
+export interface ThermalReference {
+  applied: boolean;
+  machineTemperatureC: number | null;
+  scaleTemperatureC: number | null;
+  scaleMaterial: ScaleMaterial;
+  scaleAlphaUmPerMK: number;
+  machineAlphaUmPerMK: number;
+  factor: number;
+  source: string;
+}
+
+/** What a trial or run records about temperature and the instrument. */
+export interface RecordConditions {
+  machineTemperature: number | null;
+  scaleTemperature: number | null;
+  scaleMaterial: ScaleMaterial | null;
+  instrumentResolution: number | null;
+  thermal: ThermalReference | null;
+}
+
 export interface Drive {
   type: DriveType;
   lead?: number;
+  threadsPerInch?: number;
   nominalDiameter?: number;
   rootDiameter?: number;
   unsupportedLength?: number;
@@ -38,7 +75,10 @@ export interface Axis {
   machineId: string;
   name: string;
   letter: string | null;
+  /** Drive lengths, feed rates (per minute) and travel are in it. */
+  lengthUnit: LengthUnit;
   drive: Drive;
+  driveMm: Drive;
   driveSummary: string;
   motorStepsPerRev: number;
   microsteps: number;
@@ -46,9 +86,15 @@ export interface Axis {
   stepsPerMm: number;
   theoreticalStepsPerMm: number;
   stepsPerMmDifferencePercent: number;
+  stepsPerInch: number;
+  theoreticalStepsPerInch: number;
   travelPerRevMm: number;
+  travelPerRev: number;
   resolutionMm: number;
+  /** lengthUnit per minute. */
   maxFeedRate: number | null;
+  maxFeedRateMmPerMin: number | null;
+  measuredTravel: number | null;
   measuredTravelMm: number | null;
   notes: string;
   stepsHistory: StepsChange[];
@@ -69,10 +115,12 @@ export interface AxisListItem extends Axis {
   checks: { travelTrial: CheckSummary; positioning: CheckSummary; speedCheck: CheckSummary };
 }
 
-export interface TravelTrial {
+export interface TravelTrial extends RecordConditions {
   id: string;
   axisId: string;
-  unit: LengthUnit;
+  lengthUnit: LengthUnit;
+  readingUnit: LengthUnit;
+  warnings: ResultWarning[];
   stepsPerMmUsed: number;
   throughOrigin: boolean;
   moves: { commanded: number; measured: number }[];
@@ -84,6 +132,9 @@ export interface TravelTrial {
     residuals: number[];
     residualMax: number;
     moves: { commanded: number; measured: number; error: number; residual: number }[];
+    theoryDifferencePercent: number | null;
+    farFromTheory: boolean;
+    thermalCorrectionPercent: number;
   } | null;
   /** Present when the stored result cannot be read (result is then null). */
   unreadable?: string;
@@ -117,10 +168,12 @@ export interface Verdict {
   pass: boolean;
 }
 
-export interface PositioningRun {
+export interface PositioningRun extends RecordConditions {
   id: string;
   axisId: string;
-  unit: LengthUnit;
+  lengthUnit: LengthUnit;
+  readingUnit: LengthUnit;
+  warnings: ResultWarning[];
   targets: number[];
   runs: { direction: 'up' | 'down'; deviations: number[] }[];
   result: {
@@ -139,7 +192,8 @@ export interface PositioningRun {
     runsUp: number;
     runsDown: number;
     targets: PositioningTargetResult[];
-    warnings: string[];
+    warnings: ResultWarning[];
+    thermalCorrectionMax: number;
   } | null;
   /** null with `result` when the stored result cannot be read (then `unreadable` says so). */
   checks: { accuracy: Verdict; repeatability: Verdict; reversal: Verdict } | null;
@@ -157,7 +211,10 @@ export interface SpeedCheck {
   status: DriveStatus;
   reason: string | null;
   missing: string[];
+  lengthUnit: LengthUnit;
+  /** lengthUnit per minute, as are maxFeedRate and safeFeedRate. */
   feedRate: number | null;
+  feedRateMmPerMin: number | null;
   rpm: number | null;
   criticalSpeed: number | null;
   permissibleSpeed: number | null;
@@ -165,9 +222,13 @@ export interface SpeedCheck {
   dnLimit: number | null;
   mountingFactor: number | null;
   limitedBy: 'critical-speed' | 'dn-limit' | null;
+  /** The lower of the permissible and the d·n limit speeds, rpm; headroom is taken from it. */
+  limitSpeed: number | null;
+  headroomPercent: number | null;
   maxFeedRate: number | null;
   allowedSpeed: number | null;
   safeFeedRate: number | null;
+  safeFeedRateMmPerMin: number | null;
   headroom: TargetValue;
   withinLimits: boolean | null;
   source: string;

@@ -2,11 +2,15 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
 import { driveKeys, type Axis } from '../types';
 
-/** Makes the trial's corrected steps per mm the axis's value; answers with the axis. */
+/**
+ * Makes the trial's corrected steps per mm the axis's value; answers with the axis. A correction
+ * far from the drive's theoretical value needs `confirmFarCorrection`.
+ */
 export function useApplyTravelTrial(axisId: string) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (trialId: string) => api.post<Axis>(`/axes/${axisId}/travel-trials/${trialId}/apply`),
+    mutationFn: ({ trialId, confirmFarCorrection }: { trialId: string; confirmFarCorrection?: boolean }) =>
+      api.post<Axis>(`/axes/${axisId}/travel-trials/${trialId}/apply`, confirmFarCorrection ? { confirmFarCorrection: true } : {}),
     onSuccess: (axis) => {
       qc.setQueryData(driveKeys.axis(axisId), axis);
       return Promise.all([qc.invalidateQueries({ queryKey: driveKeys.all }), qc.invalidateQueries({ queryKey: ['machines'] })]);

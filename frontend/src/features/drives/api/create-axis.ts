@@ -1,16 +1,19 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
 import { driveKeys, type Axis, type Drive } from '../types';
+import type { LengthUnit } from '../../../lib/units';
 
 export interface AxisInput {
   name: string;
+  /** Drive lengths, travel and feed rates (per minute) are in it. */
+  lengthUnit: LengthUnit;
   drive: Drive;
   motorStepsPerRev: number;
   microsteps: number;
   gearRatio?: number;
   stepsPerMm: number;
   maxFeedRate?: number | null;
-  measuredTravelMm?: number | null;
+  measuredTravel?: number | null;
   notes?: string;
 }
 

@@ -4,10 +4,12 @@ import { driveKeys } from '../types';
 
 export interface DrivePreviewInput {
   type: string;
+  lengthUnit: string;
   motorStepsPerRev: number;
   microsteps: number;
   gearRatio?: number;
   lead?: number;
+  threadsPerInch?: number;
   beltPitch?: number;
   pulleyTeeth?: number;
   pinionModule?: number;

@@ -2,10 +2,17 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
 import type { LengthUnit } from '../../../lib/units';
 import { positioningRunQueryOptions } from './get-positioning-run';
-import { driveKeys, type PositioningRun } from '../types';
+import { driveKeys, type PositioningRun, type ScaleMaterial } from '../types';
 
 export interface PositioningRunInput {
-  unit: LengthUnit;
+  /** Target positions. */
+  lengthUnit: LengthUnit;
+  /** Deviations and the instrument resolution. */
+  readingUnit: LengthUnit;
+  machineTemperature?: number;
+  scaleTemperature?: number;
+  scaleMaterial?: ScaleMaterial;
+  instrumentResolution?: number;
   targets: number[];
   runs: { direction: 'up' | 'down'; deviations: number[] }[];
   notes?: string;

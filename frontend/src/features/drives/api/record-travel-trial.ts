@@ -2,10 +2,17 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
 import type { LengthUnit } from '../../../lib/units';
 import { travelTrialQueryOptions } from './get-travel-trial';
-import { driveKeys, type TravelTrial } from '../types';
+import { driveKeys, type ScaleMaterial, type TravelTrial } from '../types';
 
 export interface TravelTrialInput {
-  unit: LengthUnit;
+  /** Commanded and measured moves. */
+  lengthUnit: LengthUnit;
+  /** Errors and residuals, and the instrument resolution. */
+  readingUnit: LengthUnit;
+  machineTemperature?: number;
+  scaleTemperature?: number;
+  scaleMaterial?: ScaleMaterial;
+  instrumentResolution?: number;
   stepsPerMmUsed?: number;
   moves: { commanded: number; measured: number }[];
   throughOrigin?: boolean;

@@ -8,6 +8,8 @@ import { DriveFields, type DriveDraft } from './drive-fields';
 import { NumberInput, numberOf } from './number-input';
 import { useDebounced } from '../../../lib/use-debounced';
 import { errorText } from '../utils/format';
+import { UnitFamilySelect } from '../../../components/form/unit-select';
+import { UNIT_LABELS, type LengthUnit } from '../../../lib/units';
 
 const str = (v: number | null | undefined) => (v === null || v === undefined ? '' : String(v));
 
@@ -15,9 +17,12 @@ function draftOf(axis?: Axis) {
   const d = axis?.drive;
   return {
     name: axis?.name ?? '',
+    lengthUnit: (axis?.lengthUnit ?? 'mm') as LengthUnit,
     drive: {
       type: d?.type ?? 'screw',
-      lead: str(d?.lead),
+      leadAs: d?.threadsPerInch ? 'tpi' : 'length',
+      lead: d?.threadsPerInch ? '' : str(d?.lead),
+      threadsPerInch: str(d?.threadsPerInch),
       nominalDiameter: str(d?.nominalDiameter),
       rootDiameter: str(d?.rootDiameter),
       unsupportedLength: str(d?.unsupportedLength),
@@ -33,7 +38,7 @@ function draftOf(axis?: Axis) {
     gearRatio: str(axis?.gearRatio ?? 1),
     stepsPerMm: str(axis?.stepsPerMm),
     maxFeedRate: str(axis?.maxFeedRate),
-    measuredTravelMm: str(axis?.measuredTravelMm),
+    measuredTravel: str(axis?.measuredTravel),
     notes: axis?.notes ?? '',
   };
 }
@@ -43,7 +48,8 @@ function driveOf(d: DriveDraft): Drive {
   const pick = (keys: (keyof DriveDraft)[]) => Object.fromEntries(keys.map((k) => [k, numberOf(d[k])]).filter(([, v]) => v !== undefined));
   if (d.type === 'belt') return { type: 'belt', ...pick(['beltPitch', 'pulleyTeeth']) };
   if (d.type === 'rack') return { type: 'rack', ...pick(['pinionModule', 'pinionTeeth']) };
-  return { type: 'screw', ...pick(['lead', 'nominalDiameter', 'rootDiameter', 'unsupportedLength', 'dnLimit']), ...(d.mounting ? { mounting: d.mounting } : {}) };
+  const lead = d.leadAs === 'tpi' ? pick(['threadsPerInch']) : pick(['lead']);
+  return { type: 'screw', ...lead, ...pick(['nominalDiameter', 'rootDiameter', 'unsupportedLength', 'dnLimit']), ...(d.mounting ? { mounting: d.mounting } : {}) };
 }
 
 /** Adds an axis to a machine, or edits one. */
@@ -60,9 +66,11 @@ export function AxisFormDialog({ machineId, axis, open, onClose }: { machineId: 
   const drive = driveOf(f.drive);
   const steps = numberOf(f.motorStepsPerRev);
   const micro = numberOf(f.microsteps);
-  const { type, lead, beltPitch, pulleyTeeth, pinionModule, pinionTeeth } = drive;
+  const { type, lead, threadsPerInch, beltPitch, pulleyTeeth, pinionModule, pinionTeeth } = drive;
   const previewInput: DrivePreviewInput | null =
-    steps && micro ? { type, motorStepsPerRev: steps, microsteps: micro, gearRatio: numberOf(f.gearRatio), lead, beltPitch, pulleyTeeth, pinionModule, pinionTeeth } : null;
+    steps && micro ? { type, lengthUnit: f.lengthUnit, motorStepsPerRev: steps, microsteps: micro, gearRatio: numberOf(f.gearRatio), lead, threadsPerInch, beltPitch, pulleyTeeth, pinionModule, pinionTeeth } : null;
+  const u = UNIT_LABELS[f.lengthUnit];
+  const inches = f.lengthUnit === 'in' || f.lengthUnit === 'thou';
   const debounced = useDebounced(previewInput, 250);
   const preview = useDrivePreview(debounced);
   const theoretical = preview.isError ? null : preview.data?.stepsPerMm;
@@ -70,18 +78,19 @@ export function AxisFormDialog({ machineId, axis, open, onClose }: { machineId: 
   const submit = () => {
     const input: AxisInput = {
       name: f.name.trim(),
+      lengthUnit: f.lengthUnit,
       drive,
       motorStepsPerRev: numberOf(f.motorStepsPerRev) ?? NaN,
       microsteps: numberOf(f.microsteps) ?? NaN,
       gearRatio: numberOf(f.gearRatio) ?? 1,
       stepsPerMm: numberOf(f.stepsPerMm) ?? NaN,
       maxFeedRate: numberOf(f.maxFeedRate) ?? null,
-      measuredTravelMm: numberOf(f.measuredTravelMm) ?? null,
+      measuredTravel: numberOf(f.measuredTravel) ?? null,
       notes: f.notes,
     };
     if (!axis) {
       if (input.maxFeedRate === null) delete input.maxFeedRate;
-      if (input.measuredTravelMm === null) delete input.measuredTravelMm;
+      if (input.measuredTravel === null) delete input.measuredTravel;
     }
     save.mutate(input, { onSuccess: () => close() });
   };
@@ -100,7 +109,13 @@ export function AxisFormDialog({ machineId, axis, open, onClose }: { machineId: 
             <Alert severity="error">{errorText(save.error)}</Alert>
           )}
           <TextField label="Axis name" value={f.name} onChange={(e) => set('name')(e.target.value)} required autoFocus helperText="X, Y1, Y2, Z… — one record per motor; the first letter is the G-code axis" sx={{ maxWidth: 360 }} />
-          <DriveFields draft={f.drive} onChange={(drive) => setF((x) => ({ ...x, drive }))} />
+          <Box sx={{ display: 'flex', gap: 2, alignItems: 'center', flexWrap: 'wrap' }}>
+            <UnitFamilySelect family="length" label="Axis set up in" value={f.lengthUnit} onChange={(lengthUnit) => setF((x) => ({ ...x, lengthUnit }))} units={['mm', 'in']} />
+            <Typography variant="body2" color="text.secondary" sx={{ flex: '1 1 240px' }}>
+              Lead, diameters, lengths, travel and feed rates below are in {u}{inches ? '; the test programs run in G20 (inches)' : ''}.
+            </Typography>
+          </Box>
+          <DriveFields draft={f.drive} unit={f.lengthUnit} onChange={(drive) => setF((x) => ({ ...x, drive }))} />
           <Divider />
           <Box sx={grid}>
             <NumberInput label="Motor steps per revolution" value={f.motorStepsPerRev} onChange={set('motorStepsPerRev')} required helperText="200 for a 1.8° motor, 400 for 0.9°" />
@@ -114,7 +129,7 @@ export function AxisFormDialog({ machineId, axis, open, onClose }: { machineId: 
                 Theoretical from the drive
               </Typography>
               <Typography sx={{ fontWeight: 600 }} data-testid="theoretical-steps">
-                {theoretical ? `${Number(theoretical.toFixed(4))} steps/mm` : '—'}
+                {theoretical ? `${Number(theoretical.toFixed(4))} steps/mm${inches ? ` · ${Number((theoretical * 25.4).toFixed(3))} steps/in` : ''}` : '—'}
               </Typography>
             </Box>
             {theoretical && (
@@ -124,8 +139,8 @@ export function AxisFormDialog({ machineId, axis, open, onClose }: { machineId: 
             )}
           </Box>
           <Box sx={grid}>
-            <NumberInput label="Fastest feed rate" unit="mm/min" value={f.maxFeedRate} onChange={set('maxFeedRate')} helperText="The fastest it will be asked to move" />
-            <NumberInput label="Measured travel" unit="mm" value={f.measuredTravelMm} onChange={set('measuredTravelMm')} helperText="End to end, limit switch to limit switch" />
+            <NumberInput label="Fastest feed rate" unit={`${u}/min`} value={f.maxFeedRate} onChange={set('maxFeedRate')} helperText="The fastest it will be asked to move" />
+            <NumberInput label="Measured travel" unit={u} value={f.measuredTravel} onChange={set('measuredTravel')} helperText="End to end, limit switch to limit switch" />
           </Box>
           <TextField label="Notes" value={f.notes} onChange={(e) => set('notes')(e.target.value)} multiline minRows={2} />
         </Stack>

@@ -1,6 +1,7 @@
 import { Box, Paper, Table, TableBody, TableCell, TableHead, TableRow, Typography } from '@mui/material';
 import type { Axis } from '../types';
-import { showDateTime, showLength, showPercent, showSteps } from '../utils/format';
+import { showDateTime, showFeed, showLength, showPercent, showSteps, showStepsPerInch } from '../utils/format';
+import { UNIT_LABELS } from '../../../lib/units';
 
 function Item({ label, value, sub }: { label: string; value: string; sub?: string }) {
   return (
@@ -20,13 +21,15 @@ function Item({ label, value, sub }: { label: string; value: string; sub?: strin
 
 /** The axis's drive at a glance: the value in use beside the theoretical one, and its history. */
 export function AxisSummary({ axis }: { axis: Axis }) {
+  const inches = axis.lengthUnit === 'in' || axis.lengthUnit === 'thou';
+  const u = UNIT_LABELS[axis.lengthUnit];
   return (
     <Paper sx={{ p: 2.5 }}>
       <Box sx={{ display: 'grid', gridTemplateColumns: { xs: '1fr 1fr', md: 'repeat(4, 1fr)' }, gap: 2 }}>
-        <Item label="Steps per mm in use" value={showSteps(axis.stepsPerMm)} sub={`${showPercent(axis.stepsPerMmDifferencePercent, 3)} from theoretical`} />
-        <Item label="Theoretical from the drive" value={showSteps(axis.theoreticalStepsPerMm)} sub={`${Number(axis.travelPerRevMm.toFixed(4))} mm per ${axis.drive.type === 'screw' ? 'screw' : axis.drive.type === 'belt' ? 'pulley' : 'pinion'} turn`} />
+        <Item label="Steps per mm in use" value={`${showSteps(axis.stepsPerMm)}${inches ? ` · ${showStepsPerInch(axis.stepsPerInch)}` : ''}`} sub={`${showPercent(axis.stepsPerMmDifferencePercent, 3)} from theoretical`} />
+        <Item label="Theoretical from the drive" value={`${showSteps(axis.theoreticalStepsPerMm)}${inches ? ` · ${showStepsPerInch(axis.theoreticalStepsPerInch)}` : ''}`} sub={`${Number(axis.travelPerRev.toFixed(inches ? 5 : 4))} ${u} per ${axis.drive.type === 'screw' ? 'screw' : axis.drive.type === 'belt' ? 'pulley' : 'pinion'} turn`} />
         <Item label="Drive" value={axis.driveSummary} sub={`${axis.motorStepsPerRev} steps × ${axis.microsteps} microsteps${axis.gearRatio !== 1 ? ` × ${axis.gearRatio}:1` : ''}; ${showLength(axis.resolutionMm, 'um', 2)} per step`} />
-        <Item label="Fastest feed · travel" value={`${axis.maxFeedRate ? `${axis.maxFeedRate} mm/min` : 'feed not set'} · ${axis.measuredTravelMm ? `${axis.measuredTravelMm} mm` : 'travel not measured'}`} />
+        <Item label="Fastest feed · travel" value={`${axis.maxFeedRate ? showFeed(axis.maxFeedRate, axis.lengthUnit) : 'feed not set'} · ${axis.measuredTravel ? `${axis.measuredTravel} ${u}` : 'travel not measured'}`} sub={`Set up in ${u}`} />
       </Box>
       {axis.notes && (
         <Typography color="text.secondary" sx={{ mt: 1.5 }}>

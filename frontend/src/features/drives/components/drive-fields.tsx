@@ -1,10 +1,14 @@
 import { Box, MenuItem, TextField, ToggleButton, ToggleButtonGroup, Typography } from '@mui/material';
 import { DRIVE_LABELS, MOUNTING_LABELS, type DriveType, type Mounting } from '../types';
+import { UNIT_LABELS, type LengthUnit } from '../../../lib/units';
 import { NumberInput } from './number-input';
 
 export interface DriveDraft {
   type: DriveType;
+  /** A screw's lead given as a length or as threads per inch. */
+  leadAs: 'length' | 'tpi';
   lead: string;
+  threadsPerInch: string;
   nominalDiameter: string;
   rootDiameter: string;
   unsupportedLength: string;
@@ -18,9 +22,10 @@ export interface DriveDraft {
 
 const grid = { display: 'grid', gridTemplateColumns: { xs: '1fr', sm: '1fr 1fr' }, gap: 2 } as const;
 
-/** The drive's own fields, switched by its type. */
-export function DriveFields({ draft, onChange }: { draft: DriveDraft; onChange: (d: DriveDraft) => void }) {
+/** The drive's own fields, switched by its type; lengths in the axis's unit (the pinion module in mm). */
+export function DriveFields({ draft, onChange, unit }: { draft: DriveDraft; onChange: (d: DriveDraft) => void; unit: LengthUnit }) {
   const set = (k: keyof DriveDraft) => (v: string) => onChange({ ...draft, [k]: v });
+  const u = UNIT_LABELS[unit];
   return (
     <Box sx={{ display: 'grid', gap: 2 }}>
       <Box>
@@ -38,10 +43,20 @@ export function DriveFields({ draft, onChange }: { draft: DriveDraft; onChange: 
       {draft.type === 'screw' && (
         <>
           <Box sx={grid}>
-            <NumberInput label="Lead" unit="mm" required value={draft.lead} onChange={set('lead')} helperText="Pitch × starts: travel per screw turn" />
-            <NumberInput label="Nominal diameter" unit="mm" value={draft.nominalDiameter} onChange={set('nominalDiameter')} />
-            <NumberInput label="Root diameter" unit="mm" value={draft.rootDiameter} onChange={set('rootDiameter')} helperText="Thread root (core); about 12.9 mm on a rolled 16 × 5" />
-            <NumberInput label="Length between supports" unit="mm" value={draft.unsupportedLength} onChange={set('unsupportedLength')} helperText="Unsupported length the screw can whirl over" />
+            <Box sx={{ display: 'flex', gap: 1, alignItems: 'flex-start' }}>
+              <TextField select label="Lead given as" value={draft.leadAs} onChange={(e) => onChange({ ...draft, leadAs: e.target.value as DriveDraft['leadAs'] })} sx={{ minWidth: 150 }}>
+                <MenuItem value="length">Lead ({u})</MenuItem>
+                <MenuItem value="tpi">Threads per inch</MenuItem>
+              </TextField>
+              {draft.leadAs === 'tpi' ? (
+                <NumberInput label="Threads per inch" unit="TPI" required value={draft.threadsPerInch} onChange={set('threadsPerInch')} helperText="Single-start screw: lead = 1 ÷ TPI inch" />
+              ) : (
+                <NumberInput label="Lead" unit={u} required value={draft.lead} onChange={set('lead')} helperText="Pitch × starts: travel per screw turn" />
+              )}
+            </Box>
+            <NumberInput label="Nominal diameter" unit={u} value={draft.nominalDiameter} onChange={set('nominalDiameter')} />
+            <NumberInput label="Root diameter" unit={u} value={draft.rootDiameter} onChange={set('rootDiameter')} helperText="Thread root (core); about 12.9 mm (0.51 in) on a rolled 16 × 5" />
+            <NumberInput label="Length between supports" unit={u} value={draft.unsupportedLength} onChange={set('unsupportedLength')} helperText="Unsupported length the screw can whirl over" />
             <TextField select label="End mounting" value={draft.mounting} onChange={(e) => onChange({ ...draft, mounting: e.target.value as Mounting })}>
               <MenuItem value="">
                 <em>Not known yet</em>
@@ -61,13 +76,13 @@ export function DriveFields({ draft, onChange }: { draft: DriveDraft; onChange: 
       )}
       {draft.type === 'belt' && (
         <Box sx={grid}>
-          <NumberInput label="Belt pitch" unit="mm" required value={draft.beltPitch} onChange={set('beltPitch')} />
+          <NumberInput label="Belt pitch" unit={u} required value={draft.beltPitch} onChange={set('beltPitch')} />
           <NumberInput label="Pulley teeth" required value={draft.pulleyTeeth} onChange={set('pulleyTeeth')} />
         </Box>
       )}
       {draft.type === 'rack' && (
         <Box sx={grid}>
-          <NumberInput label="Pinion module" unit="mm" required value={draft.pinionModule} onChange={set('pinionModule')} helperText="One pinion turn moves π × module × teeth" />
+          <NumberInput label="Pinion module" unit="mm" required value={draft.pinionModule} onChange={set('pinionModule')} helperText="Always in mm: one pinion turn moves π × module × teeth" />
           <NumberInput label="Pinion teeth" required value={draft.pinionTeeth} onChange={set('pinionTeeth')} />
         </Box>
       )}

@@ -90,7 +90,7 @@ export function DrivesPanel({ machineId }: { machineId: string }) {
                       {a.name}
                     </Link>
                     <Typography variant="body2" color="text.secondary" sx={{ whiteSpace: 'nowrap' }}>
-                      {a.measuredTravelMm ? `${a.measuredTravelMm} mm travel` : 'travel not measured'}
+                      {a.measuredTravel ? `${a.measuredTravel} ${a.lengthUnit === 'um' ? 'µm' : a.lengthUnit} travel` : 'travel not measured'}
                     </Typography>
                   </TableCell>
                   <TableCell sx={{ maxWidth: 260, minWidth: 160 }}>

@@ -10,16 +10,22 @@ import { errorText } from '../utils/format';
 import { parseRunsCsv, splitRows } from '../utils/parse-grid';
 import { pasteBlock, resize, rowLabel, type RowOrder } from '../utils/run-grid';
 import { numberOf } from './number-input';
-import { UnitPicker } from './unit-picker';
+import { UnitFamilySelect } from '../../../components/form/unit-select';
+import { fromMm } from '../../../lib/units';
+import { blankConditions, ConditionsFields, conditionsOf } from './conditions-fields';
 
 const cellSx = { width: 92, '& input': { textAlign: 'right', py: 0.75, px: 1 } };
 
-/** A spread of targets over the measured travel, as a starting point for the header row. */
+/** A spread of targets over the measured travel in the axis's unit, as a starting point for the header row. */
 function startTargets(axis: Axis): string[] {
   if (!axis.measuredTravelMm) return ['', '', '', '', ''];
   const from = 10;
   const to = axis.measuredTravelMm - 10;
-  return [0, 1, 2, 3, 4].map((i) => String(Math.round(from + ((to - from) * i) / 4)));
+  const inches = axis.lengthUnit === 'in';
+  return [0, 1, 2, 3, 4].map((i) => {
+    const v = fromMm(from + ((to - from) * i) / 4, axis.lengthUnit);
+    return String(inches ? Number(v.toFixed(2)) : Math.round(v));
+  });
 }
 
 /**
@@ -28,7 +34,9 @@ function startTargets(axis: Axis): string[] {
  * CSV file may carry a "target" header row and "up"/"down" at the start of each row.
  */
 export function PositioningGrid({ axis, onRecorded }: { axis: Axis; onRecorded: (r: PositioningRun) => void }) {
-  const [unit, setUnit] = useState<LengthUnit>('mm');
+  const [unit, setUnit] = useState<LengthUnit>(axis.lengthUnit === 'in' ? 'thou' : 'mm');
+  const [lengthUnit, setLengthUnit] = useState<LengthUnit>(axis.lengthUnit);
+  const [conditions, setConditions] = useState(blankConditions);
   const [runs, setRuns] = useState(5);
   const [order, setOrder] = useState<RowOrder>('alternate');
   const [targets, setTargets] = useState<string[]>(() => startTargets(axis));
@@ -128,7 +136,9 @@ export function PositioningGrid({ axis, onRecorded }: { axis: Axis; onRecorded: 
     setProblems([]);
     record.mutate(
       {
-        unit,
+        lengthUnit,
+        readingUnit: unit,
+        ...conditionsOf(conditions),
         targets: targets.map(Number),
         runs: cells.map((row, i) => ({ direction: rowLabel(i, runs, order).direction, deviations: row.map(Number) })),
         notes: notes.trim() || undefined,
@@ -154,7 +164,8 @@ export function PositioningGrid({ axis, onRecorded }: { axis: Axis; onRecorded: 
       </Typography>
       <Stack spacing={2}>
         <Box sx={{ display: 'flex', gap: 2, flexWrap: 'wrap', alignItems: 'center' }}>
-          <UnitPicker value={unit} onChange={setUnit} label="Deviations in" />
+          <UnitFamilySelect family="length" label="Targets in" value={lengthUnit} onChange={setLengthUnit} units={['mm', 'in']} />
+          <UnitFamilySelect family="reading" label="Deviations in" value={unit} onChange={setUnit} />
           <TextField select label="Runs each way" value={runs} onChange={(e) => setRunCount(Number(e.target.value))} sx={{ width: 140 }}>
             {[2, 3, 4, 5, 6, 7, 8, 9, 10].map((n) => (
               <MenuItem key={n} value={n}>
@@ -185,7 +196,7 @@ export function PositioningGrid({ axis, onRecorded }: { axis: Axis; onRecorded: 
           <Box component="table" role="grid" aria-label="Repeat-and-reverse readings" sx={{ borderCollapse: 'collapse', '& th, & td': { p: 0.25 }, '& th': { fontWeight: 500, color: 'text.secondary', textAlign: 'left', whiteSpace: 'nowrap', pr: 1 } }}>
             <thead>
               <tr>
-                <th scope="col">Target (mm)</th>
+                <th scope="col">Target ({UNIT_LABELS[lengthUnit]})</th>
                 {targets.map((t, c) => (
                   <th key={c} scope="col">
                     <TextField
@@ -195,7 +206,7 @@ export function PositioningGrid({ axis, onRecorded }: { axis: Axis; onRecorded: 
                       onKeyDown={onKeyDown(-1, c)}
                       error={t.trim() !== '' && numberOf(t) === undefined}
                       sx={{ ...cellSx, '& input': { ...cellSx['& input'], fontWeight: 600 } }}
-                      slotProps={{ htmlInput: { inputMode: 'decimal', 'data-cell': `-1-${c}`, 'aria-label': `Target ${c + 1} (mm)` } }}
+                      slotProps={{ htmlInput: { inputMode: 'decimal', 'data-cell': `-1-${c}`, 'aria-label': `Target ${c + 1} (${UNIT_LABELS[lengthUnit]})` } }}
                     />
                   </th>
                 ))}

@@ -7,8 +7,10 @@ import { DriveStatusChip } from './drive-status-chip';
 import { DeleteRecordButton } from './delete-record-button';
 import { UnreadableRecord } from '../../../components/unreadable-record';
 import { useDeletePositioningRun } from '../api/delete-positioning-run';
+import { WarningList } from './warning-list';
+import { ThermalNote } from './thermal-note';
 
-function Judged({ label, verdict, unit }: { label: string; verdict: Verdict; unit: PositioningRun['unit'] }) {
+function Judged({ label, verdict, unit }: { label: string; verdict: Verdict; unit: PositioningRun['readingUnit'] }) {
   return (
     <Box>
       <Typography variant="body2" color="text.secondary">
@@ -27,7 +29,8 @@ export function PositioningResult({ run, mayDelete }: { run: PositioningRun; may
   const remove = useDeletePositioningRun(run.axisId);
   const r = run.result;
   const checks = run.checks;
-  const u = run.unit;
+  const u = run.readingUnit;
+  const lu = run.lengthUnit;
   const ul = UNIT_LABELS[u];
   if (!r || !checks) {
     return (
@@ -66,11 +69,7 @@ export function PositioningResult({ run, mayDelete }: { run: PositioningRun; may
           </Typography>
         </Box>
       </Box>
-      {r.warnings.map((w) => (
-        <Alert key={w} severity="warning" sx={{ mb: 1.5 }}>
-          {w}
-        </Alert>
-      ))}
+      <WarningList warnings={run.warnings} />
       <PositioningChart
         label={`Mean deviations up and down with ±2s bands, ${ul}`}
         unitLabel={ul}
@@ -92,7 +91,7 @@ export function PositioningResult({ run, mayDelete }: { run: PositioningRun; may
           <TableBody>
             {r.targets.map((t) => (
               <TableRow key={t.target}>
-                <TableCell>{t.target} mm</TableCell>
+                <TableCell>{showLength(t.target, lu, lu === 'in' ? 3 : 1)}</TableCell>
                 <TableCell align="right">{showLength(t.meanUp, u)}</TableCell>
                 <TableCell align="right">{showLength(t.meanDown, u)}</TableCell>
                 <TableCell align="right">{showLength(t.reversal, u)}</TableCell>
@@ -108,6 +107,7 @@ export function PositioningResult({ run, mayDelete }: { run: PositioningRun; may
         {r.runsUp} runs up, {r.runsDown} down · recorded by {run.recordedBy}
         {run.notes ? ` · ${run.notes}` : ''}. Accuracy, repeatability and reversal follow ISO 230-2 (±2s bands, 4s repeatability).
       </Typography>
+      <ThermalNote record={run} />
       {mayDelete && (
         <Box sx={{ mt: 1 }}>
           <DeleteRecordButton what="run" locked={run.locked} onDelete={() => remove.mutate(run.id)} pending={remove.isPending} error={remove.error} />

@@ -18,6 +18,8 @@ function Row({ label, value, strong }: { label: string; value: string; strong?: 
 /** Screw speed at the fastest feed against whirling (critical) speed and the d·n limit. */
 export function SpeedCheckCard({ axis }: { axis: Axis }) {
   const q = useSpeedCheck(axis.id);
+  const u = axis.lengthUnit === 'in' ? 'in' : axis.lengthUnit;
+  const ul = u === 'um' ? 'µm' : u;
   return (
     <Paper sx={{ p: 2.5 }} component="section" aria-labelledby="speed-title">
       <Box sx={{ display: 'flex', alignItems: 'center', gap: 1.5, mb: 1.5, flexWrap: 'wrap' }}>
@@ -33,14 +35,16 @@ export function SpeedCheckCard({ axis }: { axis: Axis }) {
       {q.data && q.data.rpm !== null && (
         <>
           <Typography color="text.secondary" sx={{ mb: 1 }}>
-            Lead {axis.drive.lead} mm, root Ø{axis.drive.rootDiameter} mm, {MOUNTING_LABELS[axis.drive.mounting!].toLowerCase()} over {axis.drive.unsupportedLength} mm, at {showFeed(q.data.feedRate)}.
+            Lead {axis.drive.lead} {ul}, root Ø{axis.drive.rootDiameter} {ul}, {MOUNTING_LABELS[axis.drive.mounting!].toLowerCase()} over {axis.drive.unsupportedLength} {ul}, at {showFeed(q.data.feedRate, u)}.
           </Typography>
           <Row label="Screw speed at the fastest feed" value={showRpm(q.data.rpm)} strong />
           <Row label="Critical (whirling) speed" value={showRpm(q.data.criticalSpeed)} />
           <Row label="Permissible speed (0.8 × critical)" value={showRpm(q.data.permissibleSpeed)} />
+          <Row label={`d·n limit (${q.data.dnLimit?.toLocaleString('en-GB')} ÷ Ø${axis.driveMm.nominalDiameter} mm)`} value={showRpm(q.data.dnLimitSpeed)} />
+          <Row label={`Lower limit (${q.data.limitedBy === 'dn-limit' ? 'the d·n limit' : 'whirling'})`} value={showRpm(q.data.limitSpeed)} />
+          <Row label="Headroom below the lower limit" value={q.data.headroomPercent === null ? '—' : `${q.data.headroomPercent.toFixed(1)} % (target ≥ ${showTarget(q.data.headroom)})`} strong />
           <Row label={`Allowed with ${showTarget(q.data.headroom)} headroom`} value={showRpm(q.data.allowedSpeed)} />
-          <Row label={`d·n limit (${q.data.dnLimit?.toLocaleString('en-GB')} ÷ Ø${axis.drive.nominalDiameter} mm)`} value={showRpm(q.data.dnLimitSpeed)} />
-          <Row label="Highest safe feed rate" value={showFeed(q.data.safeFeedRate)} strong />
+          <Row label="Highest safe feed rate" value={showFeed(q.data.safeFeedRate, u)} strong />
           <Typography sx={{ mt: 1.5, fontWeight: 500, color: q.data.status === 'within-target' ? 'success.main' : 'error.main' }}>
             {q.data.status === 'within-target'
               ? 'Within limits, with the headroom the target set asks for.'

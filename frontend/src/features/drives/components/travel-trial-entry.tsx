@@ -8,7 +8,8 @@ import type { Axis, TravelTrial } from '../types';
 import { errorText } from '../utils/format';
 import { splitRows } from '../utils/parse-grid';
 import { NumberInput, numberOf } from './number-input';
-import { UnitPicker } from './unit-picker';
+import { UnitFamilySelect } from '../../../components/form/unit-select';
+import { blankConditions, ConditionsFields, conditionsOf } from './conditions-fields';
 
 interface Row {
   commanded: string;
@@ -19,7 +20,9 @@ const blankRows = (): Row[] => [{ commanded: '', measured: '' }, { commanded: ''
 
 /** Commanded-versus-measured moves: a small table, Enter moves down, a pasted block fills the table. */
 export function TravelTrialEntry({ axis, onRecorded }: { axis: Axis; onRecorded: (t: TravelTrial) => void }) {
-  const [unit, setUnit] = useState<LengthUnit>('mm');
+  const [unit, setUnit] = useState<LengthUnit>(axis.lengthUnit);
+  const [readingUnit, setReadingUnit] = useState<LengthUnit>(axis.lengthUnit === 'in' ? 'thou' : 'mm');
+  const [conditions, setConditions] = useState(blankConditions);
   const [rows, setRows] = useState<Row[]>(blankRows);
   const [steps, setSteps] = useState(String(axis.stepsPerMm));
   const [throughOrigin, setThroughOrigin] = useState(false);
@@ -61,7 +64,9 @@ export function TravelTrialEntry({ axis, onRecorded }: { axis: Axis; onRecorded:
   const submit = () =>
     record.mutate(
       {
-        unit,
+        lengthUnit: unit,
+        readingUnit,
+        ...conditionsOf(conditions),
         stepsPerMmUsed: numberOf(steps),
         moves: filled.map((r) => ({ commanded: Number(r.commanded), measured: Number(r.measured) })),
         throughOrigin: throughOrigin || undefined,
@@ -82,12 +87,13 @@ export function TravelTrialEntry({ axis, onRecorded }: { axis: Axis; onRecorded:
         Record a travel trial
       </Typography>
       <Typography color="text.secondary" sx={{ mb: 2 }}>
-        Command moves from a fixed start and measure each one (rule, tape, calipers or indicator). The longer the moves, the better the correction.
+        Command moves from a fixed start and measure each one (rule, tape, calipers or indicator), commanded and measured in the same unit. The longer the moves, the better the correction.
       </Typography>
       <Stack spacing={2}>
         {record.error && <Alert severity="error">{errorText(record.error)}</Alert>}
         <Box sx={{ display: 'flex', gap: 2, flexWrap: 'wrap', alignItems: 'flex-start' }}>
-          <UnitPicker value={unit} onChange={setUnit} label="Measured in" />
+          <UnitFamilySelect family="length" label="Moves in" value={unit} onChange={setUnit} units={['mm', 'in']} />
+          <UnitFamilySelect family="reading" label="Errors shown in" value={readingUnit} onChange={setReadingUnit} />
           <NumberInput label="Steps per mm while measured" unit="steps/mm" value={steps} onChange={setSteps} sx={{ width: 260 }} />
           <FormControlLabel control={<Checkbox checked={throughOrigin} onChange={(e) => setThroughOrigin(e.target.checked)} />} label="Measured from a zeroed start (fit through zero)" />
         </Box>
@@ -96,7 +102,7 @@ export function TravelTrialEntry({ axis, onRecorded }: { axis: Axis; onRecorded:
             <TableHead>
               <TableRow>
                 <TableCell sx={{ width: 40 }}>#</TableCell>
-                <TableCell>Commanded (mm)</TableCell>
+                <TableCell>Commanded ({UNIT_LABELS[unit]})</TableCell>
                 <TableCell>Measured ({UNIT_LABELS[unit]})</TableCell>
                 <TableCell sx={{ width: 48 }} />
               </TableRow>
@@ -136,6 +142,7 @@ export function TravelTrialEntry({ axis, onRecorded }: { axis: Axis; onRecorded:
             Enter goes to the next row; paste two columns from a spreadsheet into the first cell.
           </Typography>
         </Box>
+ <ConditionsFields draft={conditions} onChange={setConditions} readingUnit={readingUnit} />
         <TextField label="Notes (instrument, where it was read)" value={notes} onChange={(e) => setNotes(e.target.value)} />
         <Box>
           <Button variant="contained" onClick={submit} disabled={!complete || record.isPending}>

@@ -18,7 +18,12 @@ export const showSteps = (v: number) => `${Number(v.toFixed(4))} steps/mm`;
 
 export const showRpm = (v: number | null) => (v === null ? '—' : `${Math.round(v).toLocaleString('en-GB')} rpm`);
 
-export const showFeed = (v: number | null) => (v === null ? '—' : `${Math.round(v).toLocaleString('en-GB')} mm/min`);
+/** A feed rate in a length unit per minute: whole mm, inches to two decimals. */
+export const showFeed = (v: number | null, unit: LengthUnit = 'mm') =>
+  v === null ? '—' : `${unit === 'in' ? v.toFixed(2) : Math.round(v).toLocaleString('en-GB')} ${UNIT_LABELS[unit]}/min`;
+
+/** Steps per inch (steps per mm × 25.4). */
+export const showStepsPerInch = (stepsPerInch: number) => `${Number(stepsPerInch.toFixed(3))} steps/in`;
 
 export const showPercent = (v: number, digits = 3) => `${v >= 0 ? '+' : ''}${v.toFixed(digits)} %`;
 
