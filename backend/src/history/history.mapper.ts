@@ -77,7 +77,8 @@ export function toFieldChanges(row: ChangeRow): FieldChange[] {
     const a = column in after ? after[column] : null;
     if (row.operation === 'update' && JSON.stringify(b) === JSON.stringify(a)) continue;
     if (row.operation !== 'update' && (row.operation === 'insert' ? a : b) === null) continue;
-    out.push({ record, operation, field: fieldLabel(column), before: row.operation === 'insert' ? null : b, after: row.operation === 'delete' ? null : a });
+    const shown = shownValue(column, b, a);
+    out.push({ record, operation, field: shown.field ?? fieldLabel(column), before: row.operation === 'insert' ? null : shown.before, after: row.operation === 'delete' ? null : shown.after });
   }
   return out;
 }
@@ -123,4 +124,16 @@ export function decodeCursor(cursor: string): { at: string; id: string } | null 
   const [at, id] = Buffer.from(cursor, 'base64url').toString('utf8').split('|');
   if (!at || !id || !/^[0-9a-f-]{36}$/i.test(id) || !STORED_TIME.test(at)) return null;
   return { at, id };
+}
+
+/**
+ * Values stored counted from zero (a hole's index) are shown counted from one, as the summary and
+ * every screen number them: "hole 3" is the third hole everywhere.
+ */
+function shownValue(column: string, before: unknown, after: unknown): { field?: string; before: unknown; after: unknown } {
+  if (column === 'hole_index') {
+    const plusOne = (v: unknown) => (typeof v === 'number' ? v + 1 : v);
+    return { field: 'hole', before: plusOne(before), after: plusOne(after) };
+  }
+  return { before, after };
 }
