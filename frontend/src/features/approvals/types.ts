@@ -11,7 +11,8 @@ export type CheckKind =
   | 'diagonal-check'
   | 'bed-grid'
   | 'test-cut'
-  | 'safety-walk';
+  | 'safety-walk'
+  | 'backlash';
 
 export interface Target {
   value: number;
@@ -40,6 +41,14 @@ export interface BoardCheck {
   recordedAt: string | null;
   link: string;
   waiver: Waiver | null;
+  /** What a person should know about the result; absent in approvals taken before warnings were kept. */
+  warnings?: CheckWarning[];
+}
+
+/** A warning on a check's result: a stable code and a plain sentence with its numbers. */
+export interface CheckWarning {
+  code: string;
+  message: string;
 }
 
 export interface BlockingCheck {
@@ -107,6 +116,7 @@ export const KIND_LABELS: Record<CheckKind, string> = {
   'rail-straightness': 'Rail straightness',
   'rail-parallelism': 'Rail parallelism',
   'travel-trial': 'Travel trial',
+  backlash: 'Backlash check',
   positioning: 'Repeat-and-reverse run',
   'speed-check': 'Speed check',
   'travel-envelope': 'Travel envelope',

@@ -3,6 +3,7 @@ import { Box, Button, Link, Paper, Table, TableBody, TableCell, TableContainer, 
 import { dateOnly, dateTime, resultText, targetText } from '../format';
 import { KIND_LABELS, type BoardCheck } from '../types';
 import { CheckStatusChip } from './check-status-chip';
+import { CheckWarnings } from './check-warnings';
 
 interface Props {
   checks: BoardCheck[];
@@ -35,6 +36,7 @@ export function ChecksTable({ checks, onWaive }: Props) {
                 <Typography variant="body2" sx={{ fontWeight: 600, fontVariantNumeric: 'tabular-nums' }}>{resultText(c.result)}</Typography>
                 {c.result?.summary && <Typography variant="caption" color="text.secondary" component="div">{c.result.summary}</Typography>}
                 {c.recordedAt && <Typography variant="caption" color="text.secondary" component="div">recorded {dateOnly(c.recordedAt)}</Typography>}
+                <CheckWarnings warnings={c.warnings} />
               </TableCell>
               <TableCell sx={{ whiteSpace: 'nowrap', fontVariantNumeric: 'tabular-nums' }}>{targetText(c.kind, c.target)}</TableCell>
               <TableCell sx={{ minWidth: 150 }}>
