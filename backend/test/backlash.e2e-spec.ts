@@ -1,7 +1,9 @@
 import type { NestFastifyApplication } from '@nestjs/platform-fastify';
 import { sql } from 'drizzle-orm';
+import pg from 'pg';
 import { DRIZZLE, type Database } from '../src/database/database.tokens.js';
 import { ReadinessRegistry } from '../src/records/readiness.registry.js';
+import { BacklashReadinessService } from '../src/drives/backlash-readiness.service.js';
 import { createTestApp, createTestWorkshop, TEST_PASSWORD, type TestWorkshop } from './helpers/test-app.js';
 import { newAxis, newMachine, screwAxis } from './helpers/drives.js';
 import { board, requestAndApprove, waiveAllBut } from './support/approval-flow.js';
@@ -142,6 +144,36 @@ describe('backlash checks', () => {
     expect(direct).toMatch(/approved as ready to cut/);
     expect((await ws.as.viewer.get(`/api/axes/${axis}/backlash-checks`)).body).toHaveLength(1);
   }, 60_000);
+
+  it('the board reads backlash in two statements whatever the number of checks and axes (one index step per axis)', async () => {
+    const m = await newMachine(ws, 'router');
+    const axes = [await newAxis(ws, m, screwAxis('X')), await newAxis(ws, m, screwAxis('Y'))];
+    const ref = { id: m, workshopId: ws.id, targetSetId: '', kind: 'router', workAreaXMm: 900, workAreaYMm: 600 };
+    const db = app.get<Database>(DRIZZLE);
+    ref.targetSetId = (await db.execute<{ target_set_id: string }>(sql`select target_set_id from machines where id = ${m}`)).rows[0].target_set_id;
+    const set = (await db.execute<{ targets: Record<string, never> }>(sql`select targets from target_sets where id = ${ref.targetSetId}`)).rows[0].targets;
+    const contributor = app.get(BacklashReadinessService);
+    const original = pg.Client.prototype.query;
+    const counted = async () => {
+      let n = 0;
+      pg.Client.prototype.query = function (this: pg.Client, ...args: unknown[]) {
+        n++;
+        return (original as (...a: unknown[]) => unknown).apply(this, args);
+      } as typeof pg.Client.prototype.query;
+      try {
+        const checks = await contributor.checksFor(ref, { targets: set, series: true });
+        return { n, checks };
+      } finally {
+        pg.Client.prototype.query = original;
+      }
+    };
+    const before = await counted();
+    for (const a of axes) for (let i = 0; i < 5; i++) expect((await ws.as.technician.post(`/api/axes/${a}/backlash-checks`).send(check)).status).toBe(201);
+    const after = await counted();
+    expect(before.checks.map((c) => c.status)).toEqual(['not-started', 'not-started']);
+    expect(after.checks.map((c) => c.status)).toEqual(['within-target', 'within-target']);
+    expect([before.n, after.n]).toEqual([2, 2]);
+  });
 
   it('deletes a check that no approval stands on, with its history', async () => {
     const made = await ws.as.technician.post(`/api/axes/${xId}/backlash-checks`).send(check);
