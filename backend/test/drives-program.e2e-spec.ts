@@ -21,6 +21,8 @@ function expectSafeProgram(text: string, letter: string, travelMm: number, units
   expect(run.firstMotionAt).toBeGreaterThan(run.safetyAt);
   expect(run.blocks.slice(0, run.safetyAt).every((b) => b.words.length === 0)).toBe(true);
   expect(run.modalAfterSafety).toMatchObject({ plane: 'G17', units, distance: 'G90', feedMode: 'G94', cutterComp: 'G40' });
+  // RS-274/NGC: one word of each modal group per block.
+  expect(run.groupClashes).toEqual([]);
   expect(run.moves.length).toBeGreaterThan(0);
   for (const m of run.moves) {
     expect(m.toMm).toBeGreaterThanOrEqual(-1e-6);

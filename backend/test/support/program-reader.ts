@@ -27,6 +27,8 @@ export interface ProgramRun {
   /** Where the axis stood at each M1, mm, and the direction of the move that arrived there. */
   stops: { atMm: number; approach: 'up' | 'down' | null }[];
   codes: Set<string>;
+  /** Blocks holding two words of one modal group, which RS-274/NGC refuses. */
+  groupClashes: string[];
 }
 
 const GROUP: Record<string, string> = {
@@ -53,11 +55,14 @@ export function readProgram(text: string, letter: string): ProgramRun {
   const moves: SimulatedMove[] = [];
   const stops: ProgramRun['stops'] = [];
   const codes = new Set<string>();
+  const groupClashes: string[] = [];
   const toMm = (v: number) => (modal.units === 'G20' ? v * 25.4 : v);
 
   parsed.forEach((p, i) => {
     const gm = p.words.filter(([l]) => l === 'G' || l === 'M').map(word);
     gm.forEach((c) => codes.add(c));
+    const groups = gm.filter((c) => GROUP[c]).map((c) => GROUP[c]);
+    if (new Set(groups).size !== groups.length) groupClashes.push(p.line);
     for (const c of gm) if (GROUP[c]) modal[GROUP[c]] = c;
     const f = p.words.find(([l]) => l === 'F');
     if (f) feed = toMm(f[1]);
@@ -77,5 +82,5 @@ export function readProgram(text: string, letter: string): ProgramRun {
     }
     if (gm.includes('M1')) stops.push({ atMm: pos!, approach: lastDir });
   });
-  return { blocks, safetyAt, firstMotionAt, modalAfterSafety, moves, stops, codes };
+  return { blocks, safetyAt, firstMotionAt, modalAfterSafety, moves, stops, codes, groupClashes };
 }
