@@ -16,3 +16,4 @@ export * from './sign-in-attempts.js';
 export * from './machine-readiness.js';
 export * from './hole-patterns.js';
 export * from './backlash.js';
+export * from './command-keys.js';
