@@ -208,4 +208,47 @@ test.describe('drives', () => {
     await expect(row).toContainText('Rack and pinion, module 1.5, 20-tooth pinion');
     await expect(row.getByText('Does not apply')).toBeVisible();
   });
+  test('an axis in inches: steps per inch, a trial in inches, a far correction asks first, warnings and temperatures on the run', async ({ page }) => {
+    await signInAs(page, DEMO.technician);
+    const machine = await page.request.post('/api/machines', { data: { name: `Inch axis ${Date.now()}`, kind: 'router', workArea: { x: 900, y: 600 } } });
+    const machineId = (await machine.json()).id as string;
+    // 200 steps × 8 microsteps × 5 threads per inch = 8000 steps/in (common practice), 314.9606 steps/mm.
+    const axis = await page.request.post(`/api/machines/${machineId}/axes`, {
+      data: { name: 'X', lengthUnit: 'in', drive: { type: 'screw', threadsPerInch: 5 }, motorStepsPerRev: 200, microsteps: 8, stepsPerMm: 314.9606, maxFeedRate: 100, measuredTravel: 36 },
+    });
+    expect(axis.status()).toBe(201);
+    const axisId = (await axis.json()).id as string;
+    for (const viewport of [{ width: 1280, height: 900 }, { width: 390, height: 844 }]) {
+      await page.setViewportSize(viewport);
+      await page.goto(`/machines/${machineId}/axes/${axisId}`);
+      await expect(page.getByText('8000 steps/in').first()).toBeVisible();
+      await expect(page.getByText('100.00 in/min').first()).toBeVisible();
+    }
+    await page.setViewportSize({ width: 1280, height: 900 });
+    // The reported case, typed right: 20 in commanded, 19.95 in measured → 314.9606 × 20 / 19.95.
+    await page.getByLabel('Commanded move 1').fill('20');
+    await page.getByLabel('Measured move 1').fill('19.95');
+    await page.getByRole('button', { name: 'Record trial' }).click();
+    const trial = page.getByRole('region', { name: 'Travel trial result' });
+    await expect(trial.getByLabel('Corrected steps per mm')).toHaveText(String(Number(((314.9606 * 20) / 19.95).toFixed(4))));
+    // The same moves with the commanded distance in mm by mistake: 25× off, held back until confirmed.
+    await page.getByLabel('Commanded move 1').fill('20');
+    await page.getByLabel('Measured move 1').fill('506.73');
+    await page.getByLabel('Moves in').click();
+    await page.getByRole('option', { name: 'mm' }).click();
+    await page.getByLabel('Machine temperature').fill('24');
+    await page.getByRole('button', { name: 'Record trial' }).click();
+    await expect(trial.locator('[data-warning-code="correction-far-from-theory"]')).toContainText('pulley teeth');
+    await expect(trial.locator('[data-warning-code="temperature-incomplete"]')).toBeVisible();
+    await trial.getByRole('button', { name: /^Apply/ }).click();
+    const confirm = page.getByRole('dialog', { name: 'Apply a correction far from the theoretical value?' });
+    await expect(confirm).toBeVisible();
+    await snap(page, 'drives-far-correction-confirm-desktop');
+    await confirm.getByRole('button', { name: 'Check first' }).click();
+    await expect(confirm).toBeHidden();
+    await expect(page.getByText('8000 steps/in').first()).toBeVisible();
+    await snap(page, 'drives-inch-axis-desktop');
+    await page.setViewportSize({ width: 390, height: 844 });
+    await snap(page, 'drives-inch-axis-phone');
+  });
 });

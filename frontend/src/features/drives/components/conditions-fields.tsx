@@ -30,7 +30,7 @@ export function ConditionsFields({ draft, onChange, readingUnit }: { draft: Cond
   const set = (k: keyof ConditionsDraft) => (v: string) => onChange({ ...draft, [k]: v });
   return (
     <Box>
-      <Box sx={{ display: 'grid', gridTemplateColumns: { xs: '1fr 1fr', md: 'repeat(4, 1fr)' }, gap: 2 }}>
+      <Box sx={{ display: 'grid', gridTemplateColumns: { xs: '1fr', sm: '1fr 1fr' }, gap: 2 }}>
         <NumberInput label="Machine temperature" unit="°C" value={draft.machineTemperature} onChange={set('machineTemperature')} />
         <NumberInput label="Scale temperature" unit="°C" value={draft.scaleTemperature} onChange={set('scaleTemperature')} />
         <TextField select label="Scale material" value={draft.scaleMaterial} onChange={(e) => onChange({ ...draft, scaleMaterial: e.target.value as ScaleMaterial })}>
