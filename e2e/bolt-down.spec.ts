@@ -14,7 +14,9 @@ async function newRail(request: APIRequestContext, rail: { lengthMm: number; hol
   const machine = await request.post('/api/machines', { data: { name: `Guide test ${Date.now()}`, kind: 'plasma', workArea: { x: 3000, y: 1500 } } });
   expect(machine.status()).toBe(201);
   const machineId = (await machine.json()).id as string;
-  const made = await request.post(`/api/machines/${machineId}/rails`, { data: { label: 'Y1 (left)', axis: 'Y1', profileSize: 20, ...rail } });
+  const made = await request.post(`/api/machines/${machineId}/rails`, {
+    data: { label: 'Y1 (left)', axis: 'Y1', profileSize: 20, lengthUnit: 'mm', length: rail.lengthMm, holePitch: rail.holePitchMm, firstHole: rail.firstHoleMm },
+  });
   expect(made.status()).toBe(201);
   return { machineId, railId: (await made.json()).id as string };
 }
@@ -103,7 +105,7 @@ test.describe('bolt-down guide', () => {
     expect(sweeps).toHaveLength(1);
     // The list holds summaries; the sweep itself has every detail and reading.
     const sweep = await (await page.request.get(`/api/sweeps/${sweeps[0].id}`)).json();
-    expect(sweep).toMatchObject({ unit: 'thou', phase: 'as-left', boltSize: 'M5', torqueNm: 8.8, temperatureC: 18, status: 'within-target' });
+    expect(sweep).toMatchObject({ readingUnit: 'thou', phase: 'as-left', boltSize: 'M5', torqueNm: 8.8, temperatureC: 18, status: 'within-target' });
     expect(sweep.stations.map((s: { reading: number }) => s.reading)).toEqual([0.5, 0.8, 1, 1.2, 1.3]);
   });
 

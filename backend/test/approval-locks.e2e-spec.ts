@@ -11,7 +11,7 @@ import { CSV, upload } from './evidence-fixtures.js';
 const RECORDERS: Role[] = ['admin', 'owner', 'technician', 'builder'];
 const CALIBRATORS: Role[] = ['admin', 'owner', 'technician'];
 const stations = [0, 200, 400, 600, 800].map((position, i) => ({ position, reading: [0, 2, 1, 3, 2][i] }));
-const sweep = { unit: 'um', phase: 'as-left', stations };
+const sweep = { readingUnit: 'um', phase: 'as-left', stations };
 const trial = { unit: 'mm', stepsPerMmUsed: 640, moves: [{ commanded: 100, measured: 99.8 }, { commanded: 200, measured: 199.6 }] };
 const targets = [0, 100, 200, 300, 400];
 const run = (direction: 'up' | 'down', k: number) => ({ direction, deviations: targets.map((_, i) => (i + k) % 3) });
@@ -53,9 +53,9 @@ describe('an approved machine is read-only while its approval stands', () => {
     app = await createTestApp();
     ws = await createTestWorkshop(app, 'Locks');
     machineId = ok(await ws.as.owner.post('/api/machines').send({ name: 'Locked router', kind: 'router', workArea: { x: 900, y: 600 } })).id;
-    ids.rail = ok(await ws.as.builder.post(`/api/machines/${machineId}/rails`).send({ label: 'Y1 (left)', axis: 'Y1', lengthMm: 800, holePitchMm: 60, firstHoleMm: 40 })).id;
+    ids.rail = ok(await ws.as.builder.post(`/api/machines/${machineId}/rails`).send({ label: 'Y1 (left)', axis: 'Y1', length: 800, holePitch: 60, firstHole: 40 })).id;
     ids.sweep = ok(await ws.as.builder.post(`/api/rails/${ids.rail}/sweeps`).send(sweep)).id;
-    ids.boltDown = ok(await ws.as.builder.post(`/api/rails/${ids.rail}/bolt-downs`).send({ mode: 'line', unit: 'um' })).id;
+    ids.boltDown = ok(await ws.as.builder.post(`/api/rails/${ids.rail}/bolt-downs`).send({ mode: 'line', readingUnit: 'um' })).id;
     ok(await ws.as.builder.put(`/api/bolt-downs/${ids.boltDown}/holes/0`).send({ reading: 0, fixed: true, writeId: randomUUID() }), 200);
     ids.axis = await newAxis(ws, machineId, screwAxis('X'));
     ids.trial = ok(await ws.as.technician.post(`/api/axes/${ids.axis}/travel-trials`).send(trial)).id;
@@ -74,12 +74,12 @@ describe('an approved machine is read-only while its approval stands', () => {
     routes = [
       { what: 'machine specification', method: 'patch', path: `/api/machines/${machineId}`, body: { workArea: { x: 1000, y: 600 } }, roles: RECORDERS },
       { what: 'machine notes', method: 'patch', path: `/api/machines/${machineId}`, body: { notes: 'changed after approval' }, roles: RECORDERS },
-      { what: 'new rail', method: 'post', path: `/api/machines/${machineId}/rails`, body: { label: 'Y2', axis: 'Y2', lengthMm: 800, holePitchMm: 60, firstHoleMm: 40 }, roles: RECORDERS },
-      { what: 'rail hole pitch', method: 'patch', path: `/api/rails/${ids.rail}`, body: { holePitchMm: 90 }, roles: RECORDERS },
+      { what: 'new rail', method: 'post', path: `/api/machines/${machineId}/rails`, body: { label: 'Y2', axis: 'Y2', length: 800, holePitch: 60, firstHole: 40 }, roles: RECORDERS },
+      { what: 'rail hole pitch', method: 'patch', path: `/api/rails/${ids.rail}`, body: { holePitch: 90 }, roles: RECORDERS },
       { what: 'rail delete', method: 'delete', path: `/api/rails/${ids.rail}`, roles: RECORDERS },
       { what: 'new sweep', method: 'post', path: `/api/rails/${ids.rail}/sweeps`, body: sweep, roles: RECORDERS },
       { what: 'sweep delete', method: 'delete', path: `/api/sweeps/${ids.sweep}`, roles: RECORDERS },
-      { what: 'new bolt-down', method: 'post', path: `/api/rails/${ids.rail}/bolt-downs`, body: { mode: 'line', unit: 'um' }, roles: RECORDERS },
+      { what: 'new bolt-down', method: 'post', path: `/api/rails/${ids.rail}/bolt-downs`, body: { mode: 'line', readingUnit: 'um' }, roles: RECORDERS },
       { what: 'bolt-down hole', method: 'put', path: `/api/bolt-downs/${ids.boltDown}/holes/1`, body: { reading: 1, fixed: true, writeId: randomUUID() }, roles: RECORDERS },
       { what: 'bolt-down final sweep', method: 'post', path: `/api/bolt-downs/${ids.boltDown}/final-sweep`, body: sweep, roles: RECORDERS },
       { what: 'new axis', method: 'post', path: `/api/machines/${machineId}/axes`, body: screwAxis('Z'), roles: CALIBRATORS },
@@ -161,7 +161,7 @@ describe('an approved machine is read-only while its approval stands', () => {
 
   it('after the owner reopens the machine with a reason, the same routes write again', async () => {
     expect((await ws.as.owner.post(`/api/machines/${machineId}/reopen`).send({ reason: 'Rail Y1 re-bedded after a crash' })).status).toBe(201);
-    const res = await ws.as.builder.patch(`/api/rails/${ids.rail}`).send({ holePitchMm: 90 });
+    const res = await ws.as.builder.patch(`/api/rails/${ids.rail}`).send({ holePitch: 90 });
     expect(res.status).toBe(200);
     expect((await ws.as.builder.post(`/api/rails/${ids.rail}/sweeps`).send(sweep)).status).toBe(201);
     expect((await board(ws, machineId)).state).toBe('reopened');

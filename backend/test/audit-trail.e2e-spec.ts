@@ -52,18 +52,18 @@ describe('audit trail', () => {
   const steps: Step[] = [
     ['POST /api/machines', 'owner', (a) => a.post('/api/machines').send({ name: `Audit router ${randomUUID().slice(0, 6)}`, kind: 'router', workArea: { x: 900, y: 600 } }), { table: 'machines', operation: 'insert' }, 'machine'],
     ['PATCH /api/machines/:id', 'owner', (a) => a.patch(`/api/machines/${ids.machine}`).send({ notes: 'gantry on the north wall' }), { table: 'machines', operation: 'update' }],
-    ['POST /api/machines/:id/rails', 'builder', (a) => a.post(`/api/machines/${ids.machine}/rails`).send({ label: 'Y1 (left)', axis: 'Y1', lengthMm: 800, holePitchMm: 60, firstHoleMm: 40 }), { table: 'rails', operation: 'insert' }, 'rail'],
-    ['PATCH /api/rails/:id', 'builder', (a) => a.patch(`/api/rails/${ids.rail}`).send({ holePitchMm: 120 }), { table: 'rails', operation: 'update' }],
-    ['POST /api/rails/:id/sweeps', 'builder', (a) => a.post(`/api/rails/${ids.rail}/sweeps`).send({ unit: 'mm', phase: 'as-left', stations }), { table: 'rail_sweeps', operation: 'insert' }, 'sweep'],
+    ['POST /api/machines/:id/rails', 'builder', (a) => a.post(`/api/machines/${ids.machine}/rails`).send({ label: 'Y1 (left)', axis: 'Y1', length: 800, holePitch: 60, firstHole: 40 }), { table: 'rails', operation: 'insert' }, 'rail'],
+    ['PATCH /api/rails/:id', 'builder', (a) => a.patch(`/api/rails/${ids.rail}`).send({ holePitch: 120 }), { table: 'rails', operation: 'update' }],
+    ['POST /api/rails/:id/sweeps', 'builder', (a) => a.post(`/api/rails/${ids.rail}/sweeps`).send({ readingUnit: 'mm', phase: 'as-left', stations }), { table: 'rail_sweeps', operation: 'insert' }, 'sweep'],
     ['DELETE /api/sweeps/:id', 'builder', (a) => a.delete(`/api/sweeps/${ids.sweep}`), { table: 'rail_sweeps', operation: 'delete' }],
-    ['POST /api/rails/:id/bolt-downs', 'builder', (a) => a.post(`/api/rails/${ids.rail}/bolt-downs`).send({ mode: 'line', unit: 'um' }), { table: 'bolt_downs', operation: 'insert' }, 'boltDown'],
+    ['POST /api/rails/:id/bolt-downs', 'builder', (a) => a.post(`/api/rails/${ids.rail}/bolt-downs`).send({ mode: 'line', readingUnit: 'um' }), { table: 'bolt_downs', operation: 'insert' }, 'boltDown'],
     ['PUT /api/bolt-downs/:id/holes/:index', 'builder', (a) => a.put(`/api/bolt-downs/${ids.boltDown}/holes/1`).send({ reading: 2, fixed: false, writeId: randomUUID() }), { table: 'bolt_down_holes', operation: 'insert' }],
     ['POST /api/bolt-downs/:id/final-sweep', 'builder', async (a) => {
       // The final sweep is taken once every hole is fixed.
       const bd = await a.get(`/api/bolt-downs/${ids.boltDown}`);
       for (let i = 0; i < bd.body.holes.length; i++) await a.put(`/api/bolt-downs/${ids.boltDown}/holes/${i}`).send({ reading: 1, fixed: true, writeId: randomUUID() });
       const atHoles = (bd.body.holes as { position: number }[]).map((h) => ({ position: h.position, reading: 1 }));
-      return a.post(`/api/bolt-downs/${ids.boltDown}/final-sweep`).send({ unit: 'um', phase: 'as-left', stations: atHoles });
+      return a.post(`/api/bolt-downs/${ids.boltDown}/final-sweep`).send({ readingUnit: 'um', phase: 'as-left', stations: atHoles });
     }, { table: 'rail_sweeps', operation: 'insert' }],
     ['POST /api/machines/:id/axes', 'technician', (a) => a.post(`/api/machines/${ids.machine}/axes`).send(screwAxis('X')), { table: 'axes', operation: 'insert' }, 'axis'],
     ['PATCH /api/axes/:id', 'technician', (a) => a.patch(`/api/axes/${ids.axis}`).send({ maxFeedRate: 4000 }), { table: 'axes', operation: 'update' }],
@@ -82,7 +82,7 @@ describe('audit trail', () => {
     ['POST /api/safety-items', 'owner', (a) => a.post('/api/safety-items').send({ section: 'cutting', text: 'Slag bin emptied' }), { table: 'safety_items', operation: 'insert' }, 'safetyItem'],
     ['PUT /api/machines/:id/safety-walk/items/:itemId', 'technician', (a) => a.put(`/api/machines/${ids.machine}/safety-walk/items/${ids.safetyItem}`).send({ answer: 'yes' }), { table: 'safety_answers', operation: 'insert' }],
     ['POST /api/machines/:id/safety-walk/rounds', 'owner', (a) => a.post(`/api/machines/${ids.machine}/safety-walk/rounds`), { table: 'safety_walks', operation: 'insert' }],
-    ['DELETE /api/rails/:id', 'builder', (a) => a.post(`/api/machines/${ids.machine}/rails`).send({ label: 'X1', axis: 'X', lengthMm: 600, holePitchMm: 60, firstHoleMm: 30 }).then((r) => a.delete(`/api/rails/${r.body.id}`)), { table: 'rails', operation: 'delete' }],
+    ['DELETE /api/rails/:id', 'builder', (a) => a.post(`/api/machines/${ids.machine}/rails`).send({ label: 'X1', axis: 'X', length: 600, holePitch: 60, firstHole: 30 }).then((r) => a.delete(`/api/rails/${r.body.id}`)), { table: 'rails', operation: 'delete' }],
     ['DELETE /api/axes/:id', 'technician', (a) => a.post(`/api/machines/${ids.machine}/axes`).send(screwAxis('Z')).then((r) => a.delete(`/api/axes/${r.body.id}`)), { table: 'axes', operation: 'delete' }],
     ['POST /api/target-sets', 'owner', (a) => a.get('/api/target-sets').then((l) => a.post('/api/target-sets').send({ name: `Audit set ${randomUUID().slice(0, 6)}`, description: 'for the audit test', targets: l.body[0].targets })), { table: 'target_sets', operation: 'insert' }, 'targetSet'],
     ['PATCH /api/target-sets/:id', 'owner', (a) => a.patch(`/api/target-sets/${ids.targetSet}`).send({ description: 'Edited for the audit test' }), { table: 'target_sets', operation: 'update' }],

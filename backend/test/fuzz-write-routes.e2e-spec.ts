@@ -97,9 +97,9 @@ describe('fuzz: generated bad bodies on every write route', () => {
     ws = await createTestWorkshop(app, 'Fuzz');
     ids.machine = await newMachine(ws, 'plasma');
     ids.axis = await newAxis(ws, ids.machine, screwAxis('X'));
-    const rail = await ws.as.builder.post(`/api/machines/${ids.machine}/rails`).send({ label: 'Y1 (left)', axis: 'Y1', lengthMm: 800, holePitchMm: 60, firstHoleMm: 40 });
+    const rail = await ws.as.builder.post(`/api/machines/${ids.machine}/rails`).send({ label: 'Y1 (left)', axis: 'Y1', length: 800, holePitch: 60, firstHole: 40 });
     ids.rail = rail.body.id;
-    ids.boltDown = (await ws.as.builder.post(`/api/rails/${ids.rail}/bolt-downs`).send({ mode: 'line', unit: 'um' })).body.id;
+    ids.boltDown = (await ws.as.builder.post(`/api/rails/${ids.rail}/bolt-downs`).send({ mode: 'line', readingUnit: 'um' })).body.id;
     ids.trial = (await ws.as.technician.post(`/api/axes/${ids.axis}/travel-trials`).send({ unit: 'mm', stepsPerMmUsed: 640, moves: [{ commanded: 100, measured: 99.8 }] })).body.id;
     ids.targetSet = (await ws.as.owner.get('/api/target-sets')).body[0].id;
     ids.person = ws.userIds.viewer;
@@ -115,12 +115,12 @@ describe('fuzz: generated bad bodies on every write route', () => {
     'POST /api/auth/password-reset': { method: 'post', path: () => '/api/auth/password-reset', role: 'viewer', body: () => ({ token: 'A'.repeat(30), password: 'a long enough password' }) },
     'POST /api/machines': { method: 'post', path: () => '/api/machines', role: 'owner', body: () => ({ name: `Fuzz ${randomUUID().slice(0, 6)}`, kind: 'router', workArea: { x: 900, y: 600 }, notes: 'bench\nnotes' }) },
     'PATCH /api/machines/:id': { method: 'patch', path: () => `/api/machines/${ids.machine}`, role: 'owner', body: () => ({ notes: 'new notes', name: `Fuzz machine ${randomUUID().slice(0, 6)}` }) },
-    'POST /api/machines/:id/rails': { method: 'post', path: () => `/api/machines/${ids.machine}/rails`, role: 'builder', body: () => ({ label: 'X1', axis: 'X', lengthMm: 1000, holePitchMm: 60, firstHoleMm: 20, profileSize: 15 }) },
-    'PATCH /api/rails/:id': { method: 'patch', path: () => `/api/rails/${ids.rail}`, role: 'builder', body: () => ({ label: 'Y1 (left)', holePitchMm: 60 }) },
-    'POST /api/rails/:id/sweeps': { method: 'post', path: () => `/api/rails/${ids.rail}/sweeps`, role: 'builder', body: () => ({ unit: 'mm', phase: 'as-left', stations, notes: 'ok', instrument: 'dial', temperatureC: 20 }) },
-    'POST /api/rails/:id/bolt-downs': { method: 'post', path: () => `/api/rails/${ids.rail}/bolt-downs`, role: 'builder', body: () => ({ mode: 'line', unit: 'um' }) },
+    'POST /api/machines/:id/rails': { method: 'post', path: () => `/api/machines/${ids.machine}/rails`, role: 'builder', body: () => ({ label: 'X1', axis: 'X', length: 1000, holePitch: 60, firstHole: 20, profileSize: 15 }) },
+    'PATCH /api/rails/:id': { method: 'patch', path: () => `/api/rails/${ids.rail}`, role: 'builder', body: () => ({ label: 'Y1 (left)', holePitch: 60 }) },
+    'POST /api/rails/:id/sweeps': { method: 'post', path: () => `/api/rails/${ids.rail}/sweeps`, role: 'builder', body: () => ({ readingUnit: 'mm', phase: 'as-left', stations, notes: 'ok', instrument: 'dial', temperatureC: 20 }) },
+    'POST /api/rails/:id/bolt-downs': { method: 'post', path: () => `/api/rails/${ids.rail}/bolt-downs`, role: 'builder', body: () => ({ mode: 'line', readingUnit: 'um' }) },
     'PUT /api/bolt-downs/:id/holes/:index': { method: 'put', path: () => `/api/bolt-downs/${ids.boltDown}/holes/1`, role: 'builder', body: () => ({ reading: 0.001, fixed: false, writeId: randomUUID() }) },
-    'POST /api/bolt-downs/:id/final-sweep': { method: 'post', path: () => `/api/bolt-downs/${ids.boltDown}/final-sweep`, role: 'builder', body: () => ({ unit: 'um', phase: 'as-left', stations }) },
+    'POST /api/bolt-downs/:id/final-sweep': { method: 'post', path: () => `/api/bolt-downs/${ids.boltDown}/final-sweep`, role: 'builder', body: () => ({ readingUnit: 'um', phase: 'as-left', stations }) },
     'POST /api/machines/:id/axes': { method: 'post', path: () => `/api/machines/${ids.machine}/axes`, role: 'technician', body: () => screwAxis('Z') },
     'PATCH /api/axes/:id': { method: 'patch', path: () => `/api/axes/${ids.axis}`, role: 'technician', body: () => ({ maxFeedRate: 4000, measuredTravelMm: 900 }) },
     'POST /api/axes/:id/travel-trials': { method: 'post', path: () => `/api/axes/${ids.axis}/travel-trials`, role: 'technician', body: () => ({ unit: 'mm', stepsPerMmUsed: 640, moves: [{ commanded: 100, measured: 99.8 }, { commanded: 300, measured: 299.5 }] }) },

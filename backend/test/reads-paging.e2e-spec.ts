@@ -1,10 +1,10 @@
 import type { NestFastifyApplication } from '@nestjs/platform-fastify';
 import { createTestApp, createTestWorkshop, type TestWorkshop } from './helpers/test-app.js';
 
-const rail = { label: 'Y1', axis: 'Y', lengthMm: 1000, profileSize: 20, holePitchMm: 60, firstHoleMm: 20 };
+const rail = { label: 'Y1', axis: 'Y', length: 1000, profileSize: 20, holePitch: 60, firstHole: 20 };
 const positions = [0, 100, 200, 300, 400, 500, 600, 700, 800, 900];
 const sweep = (i: number) => ({
-  unit: 'mm',
+  readingUnit: 'mm',
   phase: 'as-found',
   // Distinct times a minute apart, oldest first, so the expected order is known.
   takenAt: new Date(Date.UTC(2026, 0, 1, 8, i)).toISOString(),
@@ -52,7 +52,7 @@ describe('reads: paged sweep lists', () => {
     expect(list.headers['x-next-cursor']).toBeUndefined();
     expect(list.body).toHaveLength(5);
     const [first] = list.body;
-    expect(first).toMatchObject({ id: ids[0], railId, unit: 'mm', phase: 'as-found', stationCount: 10, locked: false });
+    expect(first).toMatchObject({ id: ids[0], railId, readingUnit: 'mm', phase: 'as-found', stationCount: 10, locked: false });
     expect(typeof first.leastSquaresStraightness).toBe('number');
     expect(first.stations).toBeUndefined();
     expect(first.result).toBeUndefined();

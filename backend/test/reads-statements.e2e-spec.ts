@@ -4,10 +4,10 @@ import { createTestApp, createTestWorkshop, type TestWorkshop } from './helpers/
 import { newAxis, screwAxis } from './helpers/drives.js';
 import { PG_POOL } from '../src/database/database.tokens.js';
 
-const rail = { axis: 'Y', lengthMm: 1000, profileSize: 20, holePitchMm: 60, firstHoleMm: 20 };
+const rail = { axis: 'Y', length: 1000, profileSize: 20, holePitch: 60, firstHole: 20 };
 const positions = [0, 100, 200, 300, 400, 500, 600, 700, 800, 900];
 const sweep = (readings: number[], extra: Record<string, unknown> = {}) => ({
-  unit: 'mm',
+  readingUnit: 'mm',
   phase: 'as-left',
   datum: 'Frame face',
   stations: readings.map((reading, i) => ({ position: positions[i], reading })),

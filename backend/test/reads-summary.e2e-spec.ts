@@ -4,9 +4,9 @@ import { createTestApp, createTestWorkshop, type TestWorkshop } from './helpers/
 import { newAxis, screwAxis } from './helpers/drives.js';
 import { PG_POOL } from '../src/database/database.tokens.js';
 
-const rail = { axis: 'Y', lengthMm: 1000, profileSize: 20, holePitchMm: 60, firstHoleMm: 20 };
+const rail = { axis: 'Y', length: 1000, profileSize: 20, holePitch: 60, firstHole: 20 };
 const positions = [0, 100, 200, 300, 400, 500, 600, 700, 800, 900];
-const sweep = (readings: number[], datum = 'Frame face') => ({ unit: 'mm', phase: 'as-left', datum, stations: readings.map((reading, i) => ({ position: positions[i], reading })) });
+const sweep = (readings: number[], datum = 'Frame face') => ({ readingUnit: 'mm', phase: 'as-left', datum, stations: readings.map((reading, i) => ({ position: positions[i], reading })) });
 // Within any rail target of the default sets (a few µm of bow) and well outside them (0.5 mm bow).
 const straight = [0, 0.001, 0.002, 0.002, 0.001, 0, 0.001, 0.002, 0.001, 0];
 const bowed = [0, 0.2, 0.35, 0.45, 0.5, 0.5, 0.45, 0.35, 0.2, 0];
@@ -102,7 +102,7 @@ describe('reads: the machines list agrees with the readiness board', () => {
     const [, , spare] = machines;
     const before = (await pool.query('select total, within, outside, waived, not_started from machine_readiness where machine_id = $1', [spare])).rows[0];
     expect(before).toBeDefined();
-    const r = await ws.as.builder.post(`/api/machines/${spare}/rails`).send({ ...rail, label: 'Y1', lengthMm: 10, firstHoleMm: 20 });
+    const r = await ws.as.builder.post(`/api/machines/${spare}/rails`).send({ ...rail, label: 'Y1', length: 10, firstHole: 20 });
     expect(r.status).toBe(400);
     const after = (await pool.query('select total, within, outside, waived, not_started from machine_readiness where machine_id = $1', [spare])).rows[0];
     expect(after).toEqual(before);

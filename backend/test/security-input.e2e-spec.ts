@@ -13,7 +13,7 @@ describe('bad text and null in optional fields', () => {
     app = await createTestApp();
     ws = await createTestWorkshop(app, 'Input');
     machineId = await newMachine(ws, 'router');
-    railId = (await ws.as.builder.post(`/api/machines/${machineId}/rails`).send({ label: 'Y1 (left)', axis: 'Y1', lengthMm: 800, holePitchMm: 60, firstHoleMm: 40 })).body.id;
+    railId = (await ws.as.builder.post(`/api/machines/${machineId}/rails`).send({ label: 'Y1 (left)', axis: 'Y1', length: 800, holePitch: 60, firstHole: 40 })).body.id;
   });
   afterAll(() => app.close());
 
@@ -47,7 +47,7 @@ describe('bad text and null in optional fields', () => {
   it.each([
     ['machine notes', () => ws.as.owner.patch(`/api/machines/${machineId}`), { notes: null }, /notes/],
     ['machine notes on create', () => ws.as.owner.post('/api/machines'), { name: 'N', kind: 'router', workArea: { x: 100, y: 100 }, notes: null }, /notes/],
-    ['rail hole pitch', () => ws.as.builder.patch(`/api/rails/${railId}`), { holePitchMm: null }, /holePitchMm/],
+    ['rail hole pitch', () => ws.as.builder.patch(`/api/rails/${railId}`), { holePitch: null }, /holePitch must be a number/],
     ['bolt-down band', () => ws.as.builder.post(`/api/rails/${railId}/bolt-downs`), { mode: 'line', band: null }, /band/],
     ['person role', () => ws.as.admin.patch(`/api/people/${ws.userIds.viewer}`), { role: null }, /role/],
     ['target-set description', () => ws.as.owner.post('/api/target-sets'), { name: 'With null', description: null, targets: {} }, /description/],

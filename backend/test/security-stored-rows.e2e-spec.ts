@@ -76,7 +76,7 @@ describe('stored rail, frame and bolt-down rows that cannot be read', () => {
   let ws: TestWorkshop;
   let pool: pg.Pool;
   let machineId: string;
-  const rail = { axis: 'Y', lengthMm: 1000, profileSize: 20, holePitchMm: 60, firstHoleMm: 20 };
+  const rail = { axis: 'Y', length: 1000, profileSize: 20, holePitch: 60, firstHole: 20 };
   const stations = (readings: number[]) => readings.map((reading, i) => ({ position: i * 100, reading }));
   let a: string; // partner of b; its sweep result is damaged
   let b: string; // partner of a; a reading of its sweep is damaged
@@ -91,7 +91,7 @@ describe('stored rail, frame and bolt-down rows that cannot be read', () => {
     return res.body.id as string;
   };
   const newSweep = async (railId: string, readings: number[]) => {
-    const res = await ws.as.builder.post(`/api/rails/${railId}/sweeps`).send({ unit: 'mm', phase: 'as-left', datum: 'granite straightedge', stations: stations(readings) });
+    const res = await ws.as.builder.post(`/api/rails/${railId}/sweeps`).send({ readingUnit: 'mm', phase: 'as-left', datum: 'granite straightedge', stations: stations(readings) });
     expect(res.status).toBe(201);
     return res.body.id as string;
   };
@@ -119,8 +119,8 @@ describe('stored rail, frame and bolt-down rows that cannot be read', () => {
     expect((await ws.as.builder.post(`/api/machines/${machineId}/bed-grids`).send({ unit: 'mm', rows: 2, columns: 2, points })).status).toBe(201);
     const cut = { nominal: { x: 300, y: 300, circle: 100 }, measured: { x: 300, y: 300, diagonal1: Math.hypot(300, 300), diagonal2: Math.hypot(300, 300), circleX: 100, circleY: 100 } };
     expect((await ws.as.technician.post(`/api/machines/${machineId}/test-cuts`).send(cut)).status).toBe(201);
-    expect((await ws.as.builder.post(`/api/rails/${good}/bolt-downs`).send({ mode: 'line', unit: 'mm' })).status).toBe(201);
-    expect((await ws.as.builder.post(`/api/rails/${good}/bolt-downs`).send({ mode: 'line', unit: 'mm' })).status).toBe(201);
+    expect((await ws.as.builder.post(`/api/rails/${good}/bolt-downs`).send({ mode: 'line', readingUnit: 'mm' })).status).toBe(201);
+    expect((await ws.as.builder.post(`/api/rails/${good}/bolt-downs`).send({ mode: 'line', readingUnit: 'mm' })).status).toBe(201);
 
     // Written straight into the database, as an old row or a hand edit would have left them.
     // JSON has no NaN: a writer that kept it wrote text where the number was.

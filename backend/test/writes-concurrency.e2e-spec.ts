@@ -3,7 +3,7 @@ import { randomUUID } from 'node:crypto';
 import { createTestApp, createTestWorkshop, signIn, TEST_PASSWORD, type Agent, type TestWorkshop } from './helpers/test-app.js';
 
 // A 900 mm rail with holes every 60 mm from 30 mm: 15 holes, 30 … 870 mm.
-const RAIL = { label: 'Y2 (right)', axis: 'Y2', lengthMm: 900, profileSize: 20, holePitchMm: 60, firstHoleMm: 30 };
+const RAIL = { label: 'Y2 (right)', axis: 'Y2', length: 900, profileSize: 20, holePitch: 60, firstHole: 30 };
 const HOLES = 15;
 
 /**
@@ -30,7 +30,7 @@ describe('concurrent hole writes', () => {
 
   const begin = async () => {
     const railId = (await ws.as.builder.post(`/api/machines/${machineId}/rails`).send(RAIL)).body.id;
-    const res = await ws.as.builder.post(`/api/rails/${railId}/bolt-downs`).send({ mode: 'line', unit: 'mm' });
+    const res = await ws.as.builder.post(`/api/rails/${railId}/bolt-downs`).send({ mode: 'line', readingUnit: 'mm' });
     expect(res.status).toBe(201);
     expect(res.body.holeCount).toBe(HOLES);
     return res.body.id as string;

@@ -10,7 +10,7 @@ import { createTestApp, createTestWorkshop, type TestWorkshop } from './helpers/
  * a change that adds a round trip to the hot write paths fails here.
  */
 
-const RAIL = { label: 'X1', axis: 'X', lengthMm: 300, profileSize: 20, holePitchMm: 60, firstHoleMm: 30 };
+const RAIL = { label: 'X1', axis: 'X', length: 300, profileSize: 20, holePitch: 60, firstHole: 30 };
 
 let statements: string[] = [];
 let counting = false;
@@ -43,7 +43,7 @@ describe('statements per write', () => {
     ws = await createTestWorkshop(app, 'Statements');
     const machine = await ws.as.builder.post('/api/machines').send({ name: 'Router', kind: 'router', workArea: { x: 1200, y: 800 } });
     railId = (await ws.as.builder.post(`/api/machines/${machine.body.id}/rails`).send(RAIL)).body.id;
-    boltDownId = (await ws.as.builder.post(`/api/rails/${railId}/bolt-downs`).send({ mode: 'line', unit: 'mm' })).body.id;
+    boltDownId = (await ws.as.builder.post(`/api/rails/${railId}/bolt-downs`).send({ mode: 'line', readingUnit: 'mm' })).body.id;
   });
   afterAll(async () => {
     pg.Client.prototype.query = originalQuery;
@@ -56,11 +56,11 @@ describe('statements per write', () => {
 
   it('a sweep write: session read, transaction, record with its audit, nothing read back', async () => {
     // Warm up once so one-off lookups (e.g. default target sets) are not counted.
-    await ws.as.builder.post(`/api/rails/${railId}/sweeps`).send({ unit: 'mm', phase: 'as-found', stations: [0, 1, 2, 3].map((i) => ({ position: i * 100, reading: i * 0.01 })) });
+    await ws.as.builder.post(`/api/rails/${railId}/sweeps`).send({ readingUnit: 'mm', phase: 'as-found', stations: [0, 1, 2, 3].map((i) => ({ position: i * 100, reading: i * 0.01 })) });
     startCounting();
     const res = await ws.as.builder
       .post(`/api/rails/${railId}/sweeps`)
-      .send({ unit: 'mm', phase: 'as-found', stations: [0, 1, 2, 3].map((i) => ({ position: i * 100, reading: (i % 2) * 0.01 })) });
+      .send({ readingUnit: 'mm', phase: 'as-found', stations: [0, 1, 2, 3].map((i) => ({ position: i * 100, reading: (i % 2) * 0.01 })) });
     const list = stopCounting();
     report('sweep write', list);
     expect(res.status).toBe(201);

@@ -26,7 +26,9 @@ export interface BoltDown {
   machineId: string;
   rail: { label: string; axis: string; lengthMm: number };
   mode: BoltDownMode;
-  unit: LengthUnit;
+  /** Readings, aims and the band are in readingUnit; hole `at` in lengthUnit (`position` in mm). */
+  readingUnit: LengthUnit;
+  lengthUnit: LengthUnit;
   band: number;
   bandMm: number;
   holes: BoltDownHole[];
@@ -61,7 +63,7 @@ export interface FinalSweepResult {
   boltDown: BoltDown;
   sweep: {
     id: string;
-    unit: LengthUnit;
+    readingUnit: LengthUnit;
     stations: { position: number; reading: number; readingMm: number }[];
     status: 'within-target' | 'outside-target';
     target: { value: number; unit: string };

@@ -1,5 +1,6 @@
 export type PatternReference = 'bottom-left' | 'bottom-right' | 'top-left' | 'top-right' | 'left' | 'right' | 'bottom' | 'top';
-export type PatternUnit = 'mm' | 'in';
+/** The length unit of the outline and every coordinate (the length family). */
+export type PatternUnit = 'mm' | 'um' | 'in' | 'thou';
 export type PatternEntry = 'list' | 'grid' | 'circle';
 export type Paper = 'a4' | 'letter';
 
@@ -38,7 +39,7 @@ export interface HolePattern {
   machineId: string;
   name: string;
   reference: PatternReference;
-  unit: PatternUnit;
+  lengthUnit: PatternUnit;
   widthMm: number;
   heightMm: number;
   width: number;
@@ -56,7 +57,7 @@ export interface HolePattern {
 export interface PatternInput {
   name: string;
   reference: PatternReference;
-  unit: PatternUnit;
+  lengthUnit: PatternUnit;
   width: number;
   height: number;
   entry: PatternEntry;

@@ -1,12 +1,22 @@
 import type { LengthUnit } from '../../lib/units';
 
 export type SweepPhase = 'as-found' | 'as-left';
+export type SweepFace = 'side' | 'top';
+export const FACE_LABELS: Record<SweepFace, string> = { side: 'Side face (sideways straightness)', top: 'Top face (heights)' };
 export type SweepStatus = 'within-target' | 'outside-target';
 export type CheckState = SweepStatus | 'not-comparable' | 'not-started';
+
+export type StraightnessReference = 'minimum-zone' | 'least-squares';
 
 export interface TargetValue {
   value: number;
   unit: string;
+  reference?: StraightnessReference;
+}
+
+export interface ResultWarning {
+  code: string;
+  message: string;
 }
 
 export interface Rail {
@@ -14,12 +24,23 @@ export interface Rail {
   machineId: string;
   label: string;
   axis: string;
+  /** Lengths as typed, in lengthUnit; the …Mm twins in mm. */
+  lengthUnit: LengthUnit;
+  length: number;
+  holePitch: number;
+  firstHole: number;
+  spacing: number | null;
+  endDistance: number;
+  endDistanceIsDefault: boolean;
   lengthMm: number;
   profileSize: number | null;
   holePitchMm: number;
   firstHoleMm: number;
+  spacingMm: number | null;
+  endDistanceMm: number;
   partnerRailId: string | null;
-  holes: { index: number; position: number }[];
+  /** position in mm, at in lengthUnit. */
+  holes: { index: number; position: number; at: number }[];
   typicalBoltSize: string | null;
   createdAt: string;
   updatedAt: string;
@@ -37,6 +58,10 @@ export interface SweepSummary {
   minimumZoneStraightness: number | null;
   status: SweepStatus;
   target: TargetValue;
+  face: SweepFace;
+  readingUnit: LengthUnit;
+  lengthUnit: LengthUnit;
+  localSlopeMmPerM: number | null;
   unreadable?: string;
 }
 
@@ -52,19 +77,32 @@ export interface FitLine {
   residuals: number[];
 }
 
+export interface LocalSlope {
+  mmPerM: number;
+  fromMm: number;
+  toMm: number;
+  baseMm: number | null;
+}
+
 export interface StraightnessResult {
   leastSquares: FitLine;
   minimumZone: FitLine;
   endPoint: FitLine;
+  localSlope?: LocalSlope;
 }
 
 export interface Sweep {
   id: string;
   railId: string;
   machineId: string;
-  unit: LengthUnit;
+  /** Positions in lengthUnit, readings and resolution in readingUnit, as typed. */
+  lengthUnit: LengthUnit;
+  readingUnit: LengthUnit;
+  face: SweepFace;
   /** null (with `unreadable`) when the stored readings cannot be read. */
-  stations: { position: number; reading: number; readingMm: number }[] | null;
+  stations: { position: number; positionMm: number; reading: number; readingMm: number }[] | null;
+  localSlope: LocalSlope | null;
+  warnings: ResultWarning[];
   instrument: string;
   resolution: number | null;
   temperatureC: number | null;
@@ -86,7 +124,9 @@ export interface Sweep {
 
 export interface NewSweep {
   id: string;
-  unit: LengthUnit;
+  readingUnit: LengthUnit;
+  lengthUnit: LengthUnit;
+  face: SweepFace;
   stations: { position: number; reading: number }[];
   instrument?: string;
   resolution?: number;
@@ -109,9 +149,23 @@ export interface Parallelism {
   meanOffset?: number;
   positions?: number[];
   differences?: number[];
-  parallelismWithin?: boolean;
-  heightDifferenceWithin?: boolean;
-  targets: { parallelism: TargetValue; heightDifference: TargetValue };
+  face?: SweepFace;
+  parallelismWithin?: boolean | null;
+  heightDifferenceWithin?: boolean | null;
+  height?: {
+    measured: boolean;
+    reason: string | null;
+    datum: string | null;
+    worst: number | null;
+    at: number | null;
+    spacing: number | null;
+    kUmPerMm: number | null;
+    permissible: number | null;
+    targetText: string | null;
+    within: boolean | null;
+  };
+  warnings: ResultWarning[];
+  targets: { parallelism: TargetValue; heightDifference: TargetValue & { source?: string } };
 }
 
 export interface BoltTorques {

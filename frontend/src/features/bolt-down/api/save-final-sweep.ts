@@ -4,7 +4,8 @@ import type { LengthUnit } from '../../../lib/units';
 import type { FinalSweepResult } from '../types';
 
 export interface FinalSweepInput {
-  unit: LengthUnit;
+  readingUnit: LengthUnit;
+  lengthUnit: LengthUnit;
   phase: 'as-left' | 'as-found';
   stations: { position: number; reading: number }[];
   instrument?: string;

@@ -5,8 +5,8 @@ import { boltDownKeys, type BoltDown, type BoltDownMode } from '../types';
 
 export interface StartBoltDownInput {
   mode: BoltDownMode;
-  unit: LengthUnit;
-  /** Half-width of the on-target band in `unit`; the server's default when absent. */
+  readingUnit: LengthUnit;
+  /** Half-width of the on-target band in `readingUnit`; the server's default when absent. */
   band?: number;
 }
 

@@ -29,7 +29,7 @@ export function BoltDownGuide({ bd, canRecord, typicalBoltSize }: Props) {
   const [refusal, setRefusal] = useState<Refusal | null>(null);
   const selected = picked ?? state.nextHole;
   const hole = selected === null ? null : state.holes[selected];
-  const unit = UNIT_LABELS[bd.unit];
+  const unit = UNIT_LABELS[bd.readingUnit];
   const sweepWaiting = pending.some((w) => !w.path.startsWith(holePath(bd.id)));
   const fixed = state.holes.filter((h) => h.fixed && h.reading !== null).map((h) => ({ position: h.position, reading: h.reading! }));
 
@@ -38,7 +38,7 @@ export function BoltDownGuide({ bd, canRecord, typicalBoltSize }: Props) {
       <OfflineBanner pathPrefix={`/bolt-downs/${bd.id}/`} />
       <Alert severity="info" icon={false} sx={{ mb: 2 }} role="note" data-testid="mode-explained">
         <strong>{MODE_LABELS[bd.mode]}.</strong> {MODE_EXPLAINED[bd.mode]} Holes are fixed one end first, then the far end, then the middles of the gaps. Readings in {unit}; on
-        target within ±{plain(bd.band, bd.unit)} of the aim.
+        target within ±{plain(bd.band, bd.readingUnit)} of the aim.
       </Alert>
 
       <Paper sx={{ p: 2, mb: 2 }}>
@@ -73,7 +73,7 @@ export function BoltDownGuide({ bd, canRecord, typicalBoltSize }: Props) {
               <Typography variant="h2" component="h2" sx={{ mb: 0.5 }}>
                 Hole {hole.index + 1} · {hole.position} mm
               </Typography>
-              <Typography sx={{ fontSize: '1.6rem', fontWeight: 500 }}>Aim {hole.target === null ? 'any reading (sets the datum)' : signed(hole.target, bd.unit)}</Typography>
+              <Typography sx={{ fontSize: '1.6rem', fontWeight: 500 }}>Aim {hole.target === null ? 'any reading (sets the datum)' : signed(hole.target, bd.readingUnit)}</Typography>
               <Alert severity="info" sx={{ mt: 2 }}>
                 You can follow the guide; people who record checks fix the holes.
               </Alert>

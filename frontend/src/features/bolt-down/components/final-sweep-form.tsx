@@ -21,7 +21,7 @@ const optionalNumber = (text: string) => (text.trim() === '' ? undefined : parse
  * hole, pre-filled with the readings the holes were fixed at, saved as the rail's sweep.
  */
 export function FinalSweepForm({ bd, typicalBoltSize, waiting }: Props) {
-  const unit = UNIT_LABELS[bd.unit];
+  const unit = UNIT_LABELS[bd.readingUnit];
   const [readings, setReadings] = useState(() => bd.holes.map((h) => (h.reading === null ? '' : String(h.reading))));
   const [instrument, setInstrument] = useState('Dial indicator on a carriage');
   const [resolution, setResolution] = useState('');
@@ -56,7 +56,9 @@ export function FinalSweepForm({ bd, typicalBoltSize, waiting }: Props) {
     setProblem(null);
     try {
       await save.mutateAsync({
-        unit: bd.unit,
+        readingUnit: bd.readingUnit,
+        // Hole positions are sent as kept, in mm.
+        lengthUnit: 'mm',
         phase,
         stations: bd.holes.map((h, i) => ({ position: h.position, reading: parseReading(readings[i])! })),
         instrument: instrument.trim() || undefined,

@@ -11,7 +11,7 @@ export function FinalSweepResult({ sweepId }: { sweepId: string }) {
   if (sweep.isPending) return <LoadingState label="Loading the final sweep…" />;
   if (sweep.isError) return <ErrorState error={sweep.error} onRetry={() => sweep.refetch()} />;
   const s = sweep.data;
-  const u = s.unit;
+  const u = s.readingUnit;
   const within = s.status === 'within-target';
   const k = fromMm(1, u);
   const ls = s.result.leastSquares;

@@ -36,7 +36,7 @@ export function HoleEntryPanel({ bd, hole, isNext, refusal, onFixed, onRefused }
   const [text, setText] = useState(() => refusal?.text ?? loadDraft(bd.id, hole.index));
   const [problem, setProblem] = useState<string | null>(null);
   const record = useRecordHole(bd.id);
-  const unit = UNIT_LABELS[bd.unit];
+  const unit = UNIT_LABELS[bd.readingUnit];
   const typeIn = (t: string) => {
     setText(t);
     saveDraft(bd.id, hole.index, t);
@@ -44,7 +44,7 @@ export function HoleEntryPanel({ bd, hole, isNext, refusal, onFixed, onRefused }
   };
   // A reading from an indicator fills the field and never fixes the hole: fixing stays the person's act.
   const indicator = useIndicatorInput({
-    unit: bd.unit,
+    unit: bd.readingUnit,
     enterMovesOn: false,
     place: (t) => {
       typeIn(t);
@@ -63,7 +63,7 @@ export function HoleEntryPanel({ bd, hole, isNext, refusal, onFixed, onRefused }
       return;
     }
     try {
-      const sending = record.mutateAsync({ index: hole.index, positionMm: hole.position, reading: typed, unit: bd.unit, fixed: true });
+      const sending = record.mutateAsync({ index: hole.index, positionMm: hole.position, reading: typed, unit: bd.readingUnit, fixed: true });
       // The write itself is kept by the queue from here on; the draft is no longer needed.
       saveDraft(bd.id, hole.index, '');
       await sending;
@@ -83,7 +83,7 @@ export function HoleEntryPanel({ bd, hole, isNext, refusal, onFixed, onRefused }
         </Typography>
         <Typography color="text.secondary">{hole.position} mm from the rail start</Typography>
         {isNext ? <Chip size="small" color="primary" label="Next in the order" /> : <Chip size="small" variant="outlined" label={`No. ${hole.order + 1} in the order`} />}
-        {hole.fixed && <Chip size="small" color="success" variant="outlined" label={`Fixed at ${signed(hole.reading, bd.unit)}`} />}
+        {hole.fixed && <Chip size="small" color="success" variant="outlined" label={`Fixed at ${signed(hole.reading, bd.readingUnit)}`} />}
       </Stack>
       <IndicatorPanel indicator={indicator} nextLabel="this hole's reading" />
 
@@ -91,10 +91,10 @@ export function HoleEntryPanel({ bd, hole, isNext, refusal, onFixed, onRefused }
         <Box>
           <Typography color="text.secondary">Aim for</Typography>
           <Typography sx={{ fontSize: { xs: '2rem', md: '2.4rem' }, fontWeight: 500, lineHeight: 1.2 }} data-testid="aim">
-            {hole.target === null ? 'any reading' : signed(hole.target, bd.unit)}
+            {hole.target === null ? 'any reading' : signed(hole.target, bd.readingUnit)}
           </Typography>
           <Typography variant="body2" color="text.secondary">
-            {hole.target === null ? 'The first hole fixed sets the datum the others are aimed at.' : `On target within ±${plain(bd.band, bd.unit)}.`}
+            {hole.target === null ? 'The first hole fixed sets the datum the others are aimed at.' : `On target within ±${plain(bd.band, bd.readingUnit)}.`}
           </Typography>
           <TextField
             autoFocus
@@ -111,7 +111,7 @@ export function HoleEntryPanel({ bd, hole, isNext, refusal, onFixed, onRefused }
         <Box role="status" aria-live="polite" aria-label="Difference from the aim" sx={{ textAlign: { xs: 'left', sm: 'right' } }}>
           <Typography color="text.secondary">Difference from the aim</Typography>
           <Typography sx={{ fontSize: { xs: '3.2rem', md: '4.2rem' }, fontWeight: 700, lineHeight: 1.1, color: colour, fontVariantNumeric: 'tabular-nums' }} data-testid="difference">
-            {difference === null ? (typed === null ? '—' : 'datum') : signed(difference, bd.unit)}
+            {difference === null ? (typed === null ? '—' : 'datum') : signed(difference, bd.readingUnit)}
           </Typography>
           <Typography sx={{ color: colour, fontWeight: 500 }}>
             {difference === null
@@ -119,8 +119,8 @@ export function HoleEntryPanel({ bd, hole, isNext, refusal, onFixed, onRefused }
                 ? 'Type the reading as the rail is nudged'
                 : 'This reading becomes the datum'
               : within
-                ? `Within ±${plain(bd.band, bd.unit)}: tighten and fix`
-                : `Outside ±${plain(bd.band, bd.unit)}: nudge the rail until the dial reads ${signed(hole.target, bd.unit)}`}
+                ? `Within ±${plain(bd.band, bd.readingUnit)}: tighten and fix`
+                : `Outside ±${plain(bd.band, bd.readingUnit)}: nudge the rail until the dial reads ${signed(hole.target, bd.readingUnit)}`}
           </Typography>
         </Box>
       </Box>

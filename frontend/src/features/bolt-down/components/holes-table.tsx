@@ -30,7 +30,7 @@ function State({ hole, isNext }: { hole: GuideHole; isNext: boolean }) {
 
 /** Every hole in the order to fix it, with its aim, reading and state. */
 export function HolesTable({ bd, holes, nextHole, selected, onSelect }: Props) {
-  const unit = UNIT_LABELS[bd.unit];
+  const unit = UNIT_LABELS[bd.readingUnit];
   return (
     // Long rails scroll inside the table so the hole being fixed stays in reach above it.
     <TableContainer component={Paper} sx={{ maxHeight: holes.length > 20 ? 620 : undefined }}>
@@ -59,10 +59,10 @@ export function HolesTable({ bd, holes, nextHole, selected, onSelect }: Props) {
               <TableCell>{h.order + 1}</TableCell>
               <TableCell>{h.index + 1}</TableCell>
               <TableCell align="right">{h.position}</TableCell>
-              <TableCell align="right">{h.target === null ? '—' : signed(h.target, bd.unit).replace(` ${unit}`, '')}</TableCell>
-              <TableCell align="right">{h.reading === null ? '—' : signed(h.reading, bd.unit).replace(` ${unit}`, '')}</TableCell>
+              <TableCell align="right">{h.target === null ? '—' : signed(h.target, bd.readingUnit).replace(` ${unit}`, '')}</TableCell>
+              <TableCell align="right">{h.reading === null ? '—' : signed(h.reading, bd.readingUnit).replace(` ${unit}`, '')}</TableCell>
               <TableCell align="right" sx={{ color: h.onTarget === false ? '#8a5a00' : h.onTarget ? 'success.main' : undefined, fontWeight: h.difference !== null ? 500 : undefined }}>
-                {h.difference === null ? '—' : signed(h.difference, bd.unit).replace(` ${unit}`, '')}
+                {h.difference === null ? '—' : signed(h.difference, bd.readingUnit).replace(` ${unit}`, '')}
               </TableCell>
               <TableCell>
                 <State hole={h} isNext={h.index === nextHole} />

@@ -24,7 +24,7 @@ export function StartBoltDownForm({ rail, onStarted }: Props) {
     if (value === null || (value !== undefined && value < 0)) return setProblem('The band must be a number that is not negative');
     setProblem(null);
     try {
-      onStarted(await start.mutateAsync({ mode, unit, ...(value !== undefined ? { band: value } : {}) }));
+      onStarted(await start.mutateAsync({ mode, readingUnit: unit, ...(value !== undefined ? { band: value } : {}) }));
     } catch (err) {
       setProblem(err instanceof Error ? err.message : String(err));
     }

@@ -42,7 +42,7 @@ export function HolePatternDetails({ pattern: p, canEdit, afterDelete }: { patte
       </Stack>
       <Sheet variant="outlined" sx={{ p: 2 }}>
         <Typography variant="body2" color="text.secondary" gutterBottom>
-          Outline {p.widthMm} × {p.heightMm} mm · reference {REFERENCE_LABELS[p.reference].toLowerCase()} · entered in {p.unit === 'in' ? 'inches' : 'mm'}
+          Outline {p.widthMm} × {p.heightMm} mm · reference {REFERENCE_LABELS[p.reference].toLowerCase()} · entered in {p.lengthUnit === 'in' ? 'inches' : 'mm'}
           {p.notes ? ` · ${p.notes}` : ''}
         </Typography>
         <PatternDrawing widthMm={p.widthMm} heightMm={p.heightMm} holes={p.holes} reference={p.reference} label={`Drawing of ${p.name}`} />

@@ -1,3 +1,4 @@
+import { UnitFamilySelect } from '../../../components/form/unit-select';
 import { useState } from 'react';
 import { Alert, Box, Button, Dialog, useMediaQuery, useTheme, DialogActions, DialogContent, DialogTitle, MenuItem, Stack, Tab, Tabs, TextField, Typography } from '@mui/material';
 import { ApiError } from '../../../lib/api-client';
@@ -43,10 +44,7 @@ export function PatternDialog({ title, initial, saving, error, onSave, onClose }
                 </MenuItem>
               ))}
             </TextField>
-            <TextField select label="Unit" value={draft.unit} onChange={(e) => set((d) => ({ ...d, unit: e.target.value as PatternUnit }))} sx={{ minWidth: 110 }}>
-              <MenuItem value="mm">mm</MenuItem>
-              <MenuItem value="in">inch</MenuItem>
-            </TextField>
+            <UnitFamilySelect family="length" value={draft.unit} onChange={(unit) => set((d) => ({ ...d, unit }))} label="Length unit" />
             <TextField label={`Outline width (${draft.unit})`} value={draft.width} slotProps={{ htmlInput: { inputMode: 'decimal' } }} onChange={(e) => set((d) => ({ ...d, width: e.target.value }))} />
             <TextField label={`Outline height (${draft.unit})`} value={draft.height} slotProps={{ htmlInput: { inputMode: 'decimal' } }} onChange={(e) => set((d) => ({ ...d, height: e.target.value }))} />
           </Stack>

@@ -35,7 +35,7 @@ export function draftOf(p: HolePattern): PatternDraft {
     ...d,
     name: p.name,
     reference: p.reference,
-    unit: p.unit,
+    unit: p.lengthUnit,
     width: s(p.width),
     height: s(p.height),
     entry: p.entry,
@@ -68,7 +68,7 @@ export function inputOf(d: PatternDraft): PatternInput | null {
   const width = parseNumber(d.width);
   const height = parseNumber(d.height);
   if (width === null || height === null || !d.name.trim()) return null;
-  const base = { name: d.name.trim(), reference: d.reference, unit: d.unit, width, height, entry: d.entry, notes: d.notes };
+  const base = { name: d.name.trim(), reference: d.reference, lengthUnit: d.unit, width, height, entry: d.entry, notes: d.notes };
   if (d.entry === 'list') {
     const holes = d.holes.map((h) => numbers(h));
     return holes.every((h) => h !== null) && holes.length ? { ...base, holes: holes as NonNullable<(typeof holes)[number]>[] } : null;

@@ -1,14 +1,18 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
+import type { LengthUnit } from '../../../lib/units';
 import { railKeys, type Rail } from '../types';
 
 export interface RailInput {
   label: string;
   axis: string;
-  lengthMm: number;
+  lengthUnit: LengthUnit;
+  length: number;
   profileSize?: number;
-  holePitchMm: number;
-  firstHoleMm: number;
+  holePitch: number;
+  firstHole: number;
+  spacing: number | null;
+  endDistance: number | null;
   partnerRailId?: string | null;
 }
 

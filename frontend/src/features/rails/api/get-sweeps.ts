@@ -1,13 +1,11 @@
 import { infiniteQueryOptions, useInfiniteQuery } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
-import type { LengthUnit } from '../../../lib/units';
 import { railKeys, type SweepSummary } from '../types';
 
 /** A sweep as the rail's list gives it: the summary, no readings (useSweep has them). */
 export interface SweepListItem extends SweepSummary {
   railId: string;
   machineId: string;
-  unit: LengthUnit;
   takenBy: string;
   stationCount: number;
   createdAt: string;

@@ -6,7 +6,8 @@ import { railKeys, type StraightnessResult } from '../types';
 export interface PreviewBody {
   positions: number[];
   readings: number[];
-  unit: LengthUnit;
+  readingUnit: LengthUnit;
+  lengthUnit: LengthUnit;
 }
 
 /** Live preview while readings are typed: the calculators route fits them, nothing is saved. */

@@ -1,8 +1,8 @@
-import { Box, Paper, Typography } from '@mui/material';
+import { Alert, Box, Paper, Typography } from '@mui/material';
 import { SweepOverlayChart } from '../../../components/charts/sweep-overlay-chart';
 import { fromMm, UNIT_LABELS } from '../../../lib/units';
 import { useParallelism } from '../api/get-parallelism';
-import { isLengthUnit, showInTargetUnit, showTarget } from '../utils/display';
+import { isLengthUnit, showInTargetUnit, showLength, showTarget } from '../utils/display';
 import { CheckStatusChip } from './check-status-chip';
 
 /** Parallelism and height difference of one partner pair, against their targets. */
@@ -18,8 +18,28 @@ export function PairParallelismSummary({ railId, title, partnerLabel }: { railId
         {q.data && q.data.status === 'not-comparable' && <Typography color="text.secondary">{q.data.reason}</Typography>}
         {q.data && q.data.status !== 'not-comparable' && (
           <Typography color="text.secondary">
-            Parallelism {showInTargetUnit(q.data.parallelism!, q.data.targets.parallelism)} (target {showTarget(q.data.targets.parallelism)}) · height difference{' '}
-            {showInTargetUnit(q.data.meanOffset!, q.data.targets.heightDifference)} (target {showTarget(q.data.targets.heightDifference)}) · datum {q.data.datum}
+            {q.data.parallelism !== null && q.data.parallelism !== undefined
+              ? `Parallelism ${showInTargetUnit(q.data.parallelism, q.data.targets.parallelism)} (target ${showTarget(q.data.targets.parallelism)}, ${q.data.face ?? 'side'} face, datum ${q.data.datum})`
+              : `No parallelism yet: ${q.data.reason ?? 'needs side-face sweeps of both rails against one datum'}`}
+          </Typography>
+        )}
+        {q.data?.height && (
+          <Typography color="text.secondary" data-testid="height-difference">
+            {q.data.height.measured && q.data.height.worst !== null
+              ? `Height difference ${showLength(q.data.height.worst, unit)} at the worst station (${showLength(q.data.height.at ?? 0, 'mm')} along; top face, datum ${q.data.height.datum}) · target ${q.data.height.targetText}`
+              : 'Height difference: not measured. It needs top-face sweeps of both rails read against one common datum.'}
+          </Typography>
+        )}
+        {q.data?.warnings && q.data.warnings.length > 0 && (
+          <Alert severity="warning" sx={{ mt: 1 }}>
+            {q.data.warnings.map((w) => (
+              <div key={w.code}>{w.message}</div>
+            ))}
+          </Alert>
+        )}
+        {q.data && (
+          <Typography variant="body2" color="text.secondary">
+            Height target: {q.data.targets.heightDifference.source ?? showTarget(q.data.targets.heightDifference)}
           </Typography>
         )}
       </Box>

@@ -1,14 +1,19 @@
 import type { ReactNode } from 'react';
 import { Box, Button, Chip, Paper, Stack, Typography } from '@mui/material';
+import { UNIT_LABELS } from '../../../lib/units';
 import type { Rail } from '../types';
 
 /** The rail as built: length, profile, hole pitch and every hole position. */
 export function RailGeometry({ rail, partnerLabel, actions }: { rail: Rail; partnerLabel: string | null; actions?: ReactNode }) {
+  const u = UNIT_LABELS[rail.lengthUnit];
+  const withMm = (v: number, mm: number) => (rail.lengthUnit === 'mm' ? `${v} mm` : `${v} ${u} (${Number(mm.toFixed(3))} mm)`);
   const facts: [string, string][] = [
     ['Axis', rail.axis],
-    ['Length', `${rail.lengthMm} mm`],
+    ['Length', withMm(rail.length, rail.lengthMm)],
     ['Profile size', rail.profileSize ? `${rail.profileSize} mm` : 'not given'],
-    ['Hole pitch', `${rail.holePitchMm} mm, first hole at ${rail.firstHoleMm} mm`],
+    ['Hole pitch', `${withMm(rail.holePitch, rail.holePitchMm)}, first hole at ${withMm(rail.firstHole, rail.firstHoleMm)}`],
+    ['End distance', `${withMm(rail.endDistance, rail.endDistanceMm)} from each end${rail.endDistanceIsDefault ? ' (default: half the bolt head, common practice)' : ''}`],
+    ['Spacing to partner', rail.spacing === null || rail.spacingMm === null ? 'not given (needed for the height target S = a × K)' : withMm(rail.spacing, rail.spacingMm)],
     ['Typical bolt', rail.typicalBoltSize ? `${rail.typicalBoltSize} (from memory for this rail size; check the rail drawing)` : '—'],
     ['Partner rail', partnerLabel ?? 'none'],
   ];
@@ -33,11 +38,11 @@ export function RailGeometry({ rail, partnerLabel, actions }: { rail: Rail; part
         ))}
       </Stack>
       <Typography color="text.secondary" sx={{ mb: 1 }}>
-        {rail.holes.length} holes (mm from the rail's start)
+        {rail.holes.length} holes ({u} from the rail's start)
       </Typography>
       <Box sx={{ display: 'flex', flexWrap: 'wrap', gap: 0.5, maxHeight: 132, overflow: 'auto' }} aria-label="Hole positions">
         {rail.holes.map((h) => (
-          <Chip key={h.index} size="small" variant="outlined" label={h.position} />
+          <Chip key={h.index} size="small" variant="outlined" label={h.at} />
         ))}
       </Box>
     </Paper>

@@ -1,3 +1,4 @@
+import { UNIT_LABELS } from '../../../lib/units';
 import { useState } from 'react';
 import { Link as RouterLink } from 'react-router-dom';
 import { Box, Button, Link, Paper, Stack, Table, TableBody, TableCell, TableContainer, TableHead, TableRow, Typography } from '@mui/material';
@@ -76,9 +77,9 @@ export function RailsPanel({ machineId }: { machineId: string }) {
                       </Typography>
                     </TableCell>
                     <TableCell>
-                      {r.unreadable ? <UnreadableRecord inline message={r.unreadable} /> : `${r.lengthMm} mm · ${r.holes.length} holes`}
+                      {r.unreadable ? <UnreadableRecord inline message={r.unreadable} /> : `${r.length} ${UNIT_LABELS[r.lengthUnit]} · ${r.holes.length} holes`}
                       <Typography variant="body2" color="text.secondary">
-                        pitch {r.holePitchMm} mm
+                        pitch {r.holePitch} {UNIT_LABELS[r.lengthUnit]}
                       </Typography>
                     </TableCell>
                     <TableCell>
@@ -86,9 +87,13 @@ export function RailsPanel({ machineId }: { machineId: string }) {
                         <UnreadableRecord inline message={s.unreadable ?? ''} />
                       ) : s && s.leastSquaresStraightness !== null && s.minimumZoneStraightness !== null ? (
                         <>
-                          {showInTargetUnit(s.leastSquaresStraightness, s.target)} least squares
+                          {s.target.reference === 'least-squares'
+                            ? `${showInTargetUnit(s.leastSquaresStraightness, s.target)} least squares`
+                            : `${showInTargetUnit(s.minimumZoneStraightness, s.target)} minimum zone`}
                           <Typography variant="body2" color="text.secondary">
-                            {showInTargetUnit(s.minimumZoneStraightness, s.target)} minimum zone · target {showTarget(s.target)} · {r.sweepCount} sweep{r.sweepCount === 1 ? '' : 's'}
+                            {s.target.reference === 'least-squares' ? `${showInTargetUnit(s.minimumZoneStraightness, s.target)} minimum zone` : `${showInTargetUnit(s.leastSquaresStraightness, s.target)} least squares`} · target {showTarget(s.target)} (
+                            {s.target.reference === 'least-squares' ? 'least squares' : s.target.reference ? 'minimum zone' : 'least squares, as saved'})
+                            {s.localSlopeMmPerM !== null ? ` · slope ${s.localSlopeMmPerM.toFixed(3)} mm/m` : ''} · {s.face} face · {r.sweepCount} sweep{r.sweepCount === 1 ? '' : 's'}
                           </Typography>
                         </>
                       ) : (

@@ -11,6 +11,7 @@ import { StationRow } from './station-row';
 export function StationReadings({
   rows,
   unit,
+  lengthUnit = 'mm',
   problems,
   residuals,
   onRowChange,
@@ -19,6 +20,8 @@ export function StationReadings({
 }: {
   rows: StationDraft[];
   unit: LengthUnit;
+  /** Unit the positions are typed in. */
+  lengthUnit?: LengthUnit;
   problems: Map<number, string>;
   /** Residual from the live fit per row, in the unit, when known. */
   residuals?: (number | null)[];
@@ -47,7 +50,7 @@ export function StationReadings({
         <TableHead>
           <TableRow>
             <TableCell sx={{ width: { xs: 24, sm: 40 } }}>#</TableCell>
-            <TableCell sx={{ width: { xs: 72, sm: 100 } }}>Station (mm)</TableCell>
+            <TableCell sx={{ width: { xs: 72, sm: 100 } }}>Station ({UNIT_LABELS[lengthUnit]})</TableCell>
             <TableCell>Reading ({UNIT_LABELS[unit]})</TableCell>
             <TableCell align="right" sx={{ width: { xs: 56, sm: 80 } }}>
               Residual

@@ -3,25 +3,25 @@ import { Alert, Box, Button, Grid, InputAdornment, MenuItem, Paper, Stack, TextF
 import FileUploadOutlined from '@mui/icons-material/FileUploadOutlined';
 import { IndicatorPanel } from '../../../components/indicator-input/indicator-panel';
 import { useIndicatorInput } from '../../../components/indicator-input/use-indicator-input';
-import { fromMm, UNIT_LABELS, type LengthUnit } from '../../../lib/units';
+import { fromMm, UNIT_LABELS } from '../../../lib/units';
+import { UnitFamilySelect } from '../../../components/form/unit-select';
 import { useBoltTorques } from '../api/get-bolt-torques';
 import { useRecordSweep } from '../api/record-sweep';
 import { useStraightnessPreview } from '../api/preview-straightness';
 import { useDebounced } from '../../../lib/use-debounced';
 import { newDraft, useSweepDraft, type StationDraft, type SweepDraft } from '../hooks/use-sweep-draft';
-import type { Rail, Sweep, TargetValue } from '../types';
+import { FACE_LABELS, type Rail, type Sweep, type SweepFace, type TargetValue } from '../types';
 import { readyStations, stationsAtHoles, stationsByStep } from '../utils/stations';
 import { CsvImportDialog } from './csv-import-dialog';
 import { StationReadings } from './station-readings';
 import { SweepDetailsFields } from './sweep-details-fields';
 import { SweepPreview } from './sweep-preview';
 
-const UNITS: LengthUnit[] = ['thou', 'mm', 'um', 'in'];
 const num = (s: string) => (s.trim() === '' ? undefined : Number(s.replace(',', '.')));
 
 /** Entering a sweep at the machine: stations from the holes or a fixed step, a reading each, a live fit. */
 export function SweepEntry({ rail, target, takenBy, onSaved }: { rail: Rail; target: TargetValue | null; takenBy: string; onSaved: (s: Sweep) => void }) {
-  const [draft, setDraft] = useSweepDraft(rail.id, () => newDraft(stationsAtHoles(rail.holes), { takenBy, boltSize: rail.typicalBoltSize ?? '' }));
+  const [draft, setDraft] = useSweepDraft(rail.id, () => newDraft(stationsAtHoles(rail.holes, rail.lengthUnit), { takenBy, boltSize: rail.typicalBoltSize ?? '', lengthUnit: rail.lengthUnit }));
   const [stepMm, setStepMm] = useState('100');
   const [source, setSource] = useState<'holes' | 'step'>('holes');
   const [csvOpen, setCsvOpen] = useState(false);
@@ -44,14 +44,14 @@ export function SweepEntry({ rail, target, takenBy, onSaved }: { rail: Rail; tar
       const row = draft.stations[i];
       if (!row) return null;
       setRow(i, { reading: text });
-      return { cell: String(i), label: `station ${i + 1} at ${row.position} mm`, undo: () => setRow(i, { reading: '' }) };
+      return { cell: String(i), label: `station ${i + 1} at ${row.position} ${UNIT_LABELS[draft.lengthUnit]}`, undo: () => setRow(i, { reading: '' }) };
     },
   });
 
   const ready = useMemo(() => readyStations(draft.stations), [draft.stations]);
   const body = useMemo(
-    () => (ready.stations.length >= 3 && ready.problems.size === 0 ? { positions: ready.stations.map((s) => s.position), readings: ready.stations.map((s) => s.reading), unit: draft.unit } : null),
-    [ready, draft.unit],
+    () => (ready.stations.length >= 3 && ready.problems.size === 0 ? { positions: ready.stations.map((s) => s.position), readings: ready.stations.map((s) => s.reading), readingUnit: draft.unit, lengthUnit: draft.lengthUnit } : null),
+    [ready, draft.unit, draft.lengthUnit],
   );
   // The fit is asked for once typing pauses; the chart draws the same settled readings, at low
   // priority (deferred), so a keystroke never waits for the chart.
@@ -81,7 +81,9 @@ export function SweepEntry({ rail, target, takenBy, onSaved }: { rail: Rail; tar
     record.mutate(
       {
         id: draft.id,
-        unit: draft.unit,
+        readingUnit: draft.unit,
+        lengthUnit: draft.lengthUnit,
+        face: draft.face,
         stations: ready.stations,
         phase: draft.phase,
         instrument: draft.instrument.trim() || undefined,
@@ -109,13 +111,18 @@ export function SweepEntry({ rail, target, takenBy, onSaved }: { rail: Rail; tar
         New sweep
       </Typography>
       <Alert severity="info" icon={false} sx={{ mb: 2 }}>
-        <strong>Sign:</strong> + means the rail is further from the reference, − nearer to it. Zero the indicator anywhere: only the shape counts.
+        <strong>Sign:</strong> + means the rail is further from the reference, − nearer to it.{' '}
+        {draft.face === 'side'
+          ? 'Side face: zero the indicator anywhere, only the shape counts (a side sweep gives no height).'
+          : 'Top face: read both partner rails against one common datum (a level bar or straightedge spanning them) and name it the same on both, or no height difference can be worked out.'}
       </Alert>
       <Stack direction="row" spacing={1.5} useFlexGap sx={{ alignItems: 'center', flexWrap: 'wrap', mb: 2 }}>
-        <TextField select label="Unit" value={draft.unit} onChange={(e) => patch({ unit: e.target.value as LengthUnit })} sx={{ width: 110 }}>
-          {UNITS.map((u) => (
-            <MenuItem key={u} value={u}>
-              {UNIT_LABELS[u]}
+        <UnitFamilySelect family="reading" value={draft.unit} onChange={(unit) => patch({ unit })} label="Reading unit" />
+        <UnitFamilySelect family="length" value={draft.lengthUnit} onChange={(lengthUnit) => patch({ lengthUnit })} label="Position unit" />
+        <TextField select label="Face read" value={draft.face} onChange={(e) => patch({ face: e.target.value as SweepFace })} sx={{ minWidth: 220 }} slotProps={{ htmlInput: { 'data-testid': 'sweep-face' } }}>
+          {(['side', 'top'] as const).map((f) => (
+            <MenuItem key={f} value={f}>
+              {FACE_LABELS[f]}
             </MenuItem>
           ))}
         </TextField>
@@ -124,9 +131,9 @@ export function SweepEntry({ rail, target, takenBy, onSaved }: { rail: Rail; tar
           <ToggleButton value="step">Fixed step</ToggleButton>
         </ToggleButtonGroup>
         {source === 'step' && (
-          <TextField label="Step" value={stepMm} onChange={(e) => setStepMm(e.target.value)} sx={{ width: 120 }} slotProps={{ htmlInput: { inputMode: 'decimal' }, input: { endAdornment: <InputAdornment position="end">mm</InputAdornment> } }} />
+          <TextField label="Step" value={stepMm} onChange={(e) => setStepMm(e.target.value)} sx={{ width: 120 }} slotProps={{ htmlInput: { inputMode: 'decimal' }, input: { endAdornment: <InputAdornment position="end">{UNIT_LABELS[draft.lengthUnit]}</InputAdornment> } }} />
         )}
-        <Button variant="outlined" onClick={() => layStations(source === 'holes' ? stationsAtHoles(rail.holes) : stationsByStep(rail.lengthMm, Number(stepMm)))}>
+        <Button variant="outlined" onClick={() => layStations(source === 'holes' ? stationsAtHoles(rail.holes, draft.lengthUnit) : stationsByStep(fromMm(rail.lengthMm, draft.lengthUnit), Number(stepMm)))}>
           {source === 'holes' ? `Lay ${rail.holes.length} stations at the holes` : 'Lay stations'}
         </Button>
         <Button startIcon={<FileUploadOutlined />} onClick={() => setCsvOpen(true)}>
@@ -137,10 +144,10 @@ export function SweepEntry({ rail, target, takenBy, onSaved }: { rail: Rail; tar
       <Grid container spacing={2.5}>
         {/* On a narrow screen the chart comes first, so it stays in view above the readings being typed. */}
         <Grid size={{ xs: 12, md: 6 }} sx={{ order: { xs: 2, md: 1 } }}>
-          <StationReadings rows={draft.stations} unit={draft.unit} problems={ready.problems} residuals={residuals} onRowChange={setRow} onDrop={dropRow} onLastEnter={focusSave} />
+          <StationReadings rows={draft.stations} unit={draft.unit} lengthUnit={draft.lengthUnit} problems={ready.problems} residuals={residuals} onRowChange={setRow} onDrop={dropRow} onLastEnter={focusSave} />
         </Grid>
         <Grid size={{ xs: 12, md: 6 }} sx={{ order: { xs: 1, md: 2 } }}>
-          <SweepPreview points={chartPoints} unit={settled?.unit ?? draft.unit} result={chartResult} target={target} label="Live straightness chart" pending={preview.isFetching} />
+          <SweepPreview points={chartPoints} unit={settled?.readingUnit ?? draft.unit} lengthUnit={settled?.lengthUnit ?? draft.lengthUnit} result={chartResult} target={target} label="Live straightness chart" pending={preview.isFetching} />
           {preview.error && <Alert severity="error" sx={{ mt: 1 }}>{preview.error.message}</Alert>}
         </Grid>
         <Grid size={12} sx={{ order: 3 }}>

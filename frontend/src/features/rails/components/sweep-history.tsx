@@ -30,7 +30,7 @@ export function SweepHistory({ sweeps, canRecord }: { sweeps: SweepListItem[]; c
   if (!sweeps.length) return null;
   // A sweep whose readings or result cannot be read has nothing to draw.
   const chosen = full.filter((s) => picked.includes(s.id)).flatMap((s) => (s.result && s.stations ? [{ ...s, result: s.result, stations: s.stations }] : []));
-  const unit = chosen[0]?.unit ?? sweeps[0].unit;
+  const unit = chosen[0]?.readingUnit ?? sweeps[0].readingUnit;
   const toggle = (id: string) => setPicked(picked.includes(id) ? picked.filter((x) => x !== id) : [...picked, id].slice(-2));
   const opened = full.find((s) => s.id === open);
 
@@ -120,7 +120,7 @@ export function SweepHistory({ sweeps, canRecord }: { sweeps: SweepListItem[]; c
               yLabel="Deviation"
               series={chosen.map((s) => ({
                 name: `${when(s)} (${PHASE_LABELS[s.phase].toLowerCase()})`,
-                points: s.stations.map((st, i) => ({ position: st.position, value: fromMm(s.result.leastSquares.residuals[i], unit) })),
+                points: s.stations.map((st, i) => ({ position: st.positionMm, value: fromMm(s.result.leastSquares.residuals[i], unit) })),
               }))}
             />
           </Box>

@@ -1,7 +1,7 @@
 import { memo } from 'react';
 import { Box, Stack, Typography } from '@mui/material';
 import { StraightnessChart } from '../../../components/charts/straightness-chart';
-import { fromMm, UNIT_LABELS, type LengthUnit } from '../../../lib/units';
+import { fromMm, toMm, UNIT_LABELS, type LengthUnit } from '../../../lib/units';
 import type { StraightnessResult, TargetValue } from '../types';
 import { showInTargetUnit, showLength, showTarget, targetMm } from '../utils/display';
 import { CheckStatusChip } from './check-status-chip';
@@ -13,13 +13,16 @@ import { CheckStatusChip } from './check-status-chip';
 export const SweepPreview = memo(function SweepPreview({
   points,
   unit,
+  lengthUnit = 'mm',
   result,
   target,
   label,
   pending,
 }: {
+  /** Positions in `lengthUnit`, readings in `unit`. */
   points: { position: number; reading: number }[];
   unit: LengthUnit;
+  lengthUnit?: LengthUnit;
   result: StraightnessResult | null;
   target: TargetValue | null;
   label: string;
@@ -35,11 +38,16 @@ export const SweepPreview = memo(function SweepPreview({
   const u = (mm: number) => fromMm(mm, unit);
   const ls = result.leastSquares;
   const mz = result.minimumZone;
-  const status = target ? (ls.straightness <= targetMm(target) + 1e-12 ? 'within-target' : 'outside-target') : null;
+  // Judged on the line the target names: minimum zone (ISO 1101) unless it says least squares.
+  const leastSquares = target?.reference === 'least-squares';
+  const judged = leastSquares ? ls.straightness : mz.straightness;
+  const status = target ? (judged <= targetMm(target) + 1e-12 ? 'within-target' : 'outside-target') : null;
+  // The fit's slope is per mm of travel: the chart draws positions in mm.
+  const pointsMm = lengthUnit === 'mm' ? points : points.map((p) => ({ position: toMm(p.position, lengthUnit), reading: p.reading }));
   return (
     <Stack spacing={1.5}>
       <StraightnessChart
-        points={points}
+        points={pointsMm}
         leastSquares={{ slope: u(ls.slope), intercept: u(ls.intercept) }}
         zone={{ slope: u(mz.slope), intercept: u(mz.intercept), width: u(mz.straightness) }}
         unitLabel={UNIT_LABELS[unit]}
@@ -64,10 +72,10 @@ export const SweepPreview = memo(function SweepPreview({
         {target && (
           <Box>
             <Typography variant="body2" color="text.secondary">
-              Target
+              Target ({leastSquares ? 'least squares' : 'minimum zone, ISO 1101'})
             </Typography>
             <Typography sx={{ fontWeight: 600 }}>
-              {showTarget(target)} <Typography component="span" color="text.secondary">({showInTargetUnit(ls.straightness, target)} now)</Typography>
+              {showTarget(target)} <Typography component="span" color="text.secondary">({showInTargetUnit(judged, target)} now)</Typography>
             </Typography>
           </Box>
         )}

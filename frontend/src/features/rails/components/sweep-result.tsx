@@ -8,7 +8,9 @@ import { UnreadableRecord } from '../../../components/unreadable-record';
 
 /** A saved sweep: the server's fit, the residual at each station, and the verdict beside its target. */
 export function SweepResult({ sweep, title = 'Saved sweep' }: { sweep: Sweep; title?: string }) {
-  const unit = sweep.unit;
+  const unit = sweep.readingUnit;
+  const lengthUnit = sweep.lengthUnit;
+  const leastSquares = sweep.target.reference === 'least-squares';
   const digits = unit === 'um' ? 1 : unit === 'mm' ? 4 : unit === 'in' ? 5 : 2;
   const { result, stations } = sweep;
   if (!result || !stations) {
@@ -30,7 +32,7 @@ export function SweepResult({ sweep, title = 'Saved sweep' }: { sweep: Sweep; ti
         <CheckStatusChip status={sweep.status} size="medium" />
       </Box>
       <Typography color="text.secondary" sx={{ mb: 2 }}>
-        {PHASE_LABELS[sweep.phase]} · {new Date(sweep.takenAt).toLocaleString()} · {sweep.takenBy}
+        {PHASE_LABELS[sweep.phase]} · {sweep.face === 'top' ? 'top face' : 'side face'} · {new Date(sweep.takenAt).toLocaleString()} · {sweep.takenBy}
         {sweep.instrument ? ` · ${sweep.instrument}` : ''}
         {sweep.resolution !== null ? ` (${sweep.resolution} ${UNIT_LABELS[unit]})` : ''}
         {sweep.temperatureC !== null ? ` · ${sweep.temperatureC} °C` : ''}
@@ -38,25 +40,42 @@ export function SweepResult({ sweep, title = 'Saved sweep' }: { sweep: Sweep; ti
         {sweep.datum ? ` · datum: ${sweep.datum}` : ''}
       </Typography>
       <Alert severity={sweep.status === 'within-target' ? 'success' : 'error'} sx={{ mb: 2 }}>
-        Least-squares straightness {showInTargetUnit(result.leastSquares.straightness, sweep.target)} against a target of {showTarget(sweep.target)}:{' '}
-        {sweep.status === 'within-target' ? 'within target.' : 'outside target.'} Minimum zone {showInTargetUnit(result.minimumZone.straightness, sweep.target)}.
+        {leastSquares
+          ? `Least-squares straightness ${showInTargetUnit(result.leastSquares.straightness, sweep.target)}`
+          : `Minimum-zone straightness (ISO 1101) ${showInTargetUnit(result.minimumZone.straightness, sweep.target)}`}{' '}
+        against a target of {showTarget(sweep.target)} ({leastSquares ? 'judged on the least-squares line' : 'judged on the minimum zone'}):{' '}
+        {sweep.status === 'within-target' ? 'within target.' : 'outside target.'}{' '}
+        {leastSquares ? `Minimum zone ${showInTargetUnit(result.minimumZone.straightness, sweep.target)}.` : `Least squares ${showInTargetUnit(result.leastSquares.straightness, sweep.target)}.`}
+        {sweep.localSlope && (
+          <>
+            {' '}
+            Largest local slope <strong data-testid="local-slope">{sweep.localSlope.mmPerM.toFixed(3)} mm/m</strong> (between {showLength(sweep.localSlope.fromMm, lengthUnit)} and {showLength(sweep.localSlope.toMm, lengthUnit)}).
+          </>
+        )}
       </Alert>
+      {sweep.warnings.length > 0 && (
+        <Alert severity="warning" sx={{ mb: 2 }} data-testid="sweep-warnings">
+          {sweep.warnings.map((w) => (
+            <div key={w.code}>{w.message}</div>
+          ))}
+        </Alert>
+      )}
       <Stack direction={{ xs: 'column', lg: 'row' }} spacing={2.5}>
         <Box sx={{ flex: 3, minWidth: 0 }}>
-          <SweepPreview points={stations.map((s) => ({ position: s.position, reading: s.reading }))} unit={unit} result={result} target={sweep.target} label="Saved sweep straightness chart" />
+          <SweepPreview points={stations.map((s) => ({ position: s.position, reading: s.reading }))} unit={unit} lengthUnit={lengthUnit} result={result} target={sweep.target} label="Saved sweep straightness chart" />
         </Box>
         <TableContainer sx={{ flex: 2, maxHeight: 380 }}>
           <Table size="small" stickyHeader aria-label="Residual per station">
             <TableHead>
               <TableRow>
-                <TableCell>Station (mm)</TableCell>
+                <TableCell>Station ({UNIT_LABELS[lengthUnit]})</TableCell>
                 <TableCell align="right">Reading ({UNIT_LABELS[unit]})</TableCell>
                 <TableCell align="right">Residual ({UNIT_LABELS[unit]})</TableCell>
               </TableRow>
             </TableHead>
             <TableBody>
               {stations.map((s, i) => {
-                const r = fromMm(result.leastSquares.residuals[i], unit);
+                const r = fromMm((leastSquares ? result.leastSquares : result.minimumZone).residuals[i], unit);
                 return (
                   <TableRow key={i}>
                     <TableCell>{s.position}</TableCell>
@@ -73,7 +92,7 @@ export function SweepResult({ sweep, title = 'Saved sweep' }: { sweep: Sweep; ti
         </TableContainer>
       </Stack>
       <Typography variant="body2" color="text.secondary" sx={{ mt: 1 }}>
-        End-point straightness {showLength(result.endPoint.straightness, unit)}. Residuals are from the least-squares line.
+        End-point straightness {showLength(result.endPoint.straightness, unit)}. Residuals are from the {leastSquares ? 'least-squares line' : 'minimum-zone line'}, the reference the target names.
       </Typography>
     </Paper>
   );

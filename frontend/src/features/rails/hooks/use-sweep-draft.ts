@@ -1,7 +1,7 @@
 import { useEffect, useState } from 'react';
 import { readDraft, saveDraftSoon } from '../../../lib/draft-storage';
 import type { LengthUnit } from '../../../lib/units';
-import type { SweepPhase } from '../types';
+import type { SweepFace, SweepPhase } from '../types';
 import { clientId } from '../utils/client-id';
 
 export interface StationDraft {
@@ -11,7 +11,11 @@ export interface StationDraft {
 
 export interface SweepDraft {
   id: string;
+  /** Unit of the readings and the resolution (the reading unit). */
   unit: LengthUnit;
+  /** Unit of the station positions. */
+  lengthUnit: LengthUnit;
+  face: SweepFace;
   stations: StationDraft[];
   instrument: string;
   resolution: string;
@@ -27,6 +31,8 @@ export interface SweepDraft {
 export const newDraft = (stations: StationDraft[], keep?: Partial<SweepDraft>): SweepDraft => ({
   id: clientId(),
   unit: 'thou',
+  lengthUnit: 'mm',
+  face: 'side',
   instrument: '',
   resolution: '',
   temperatureC: '',
@@ -50,7 +56,8 @@ export function useSweepDraft(railId: string, initial: () => SweepDraft) {
   const [draft, setDraft] = useState<SweepDraft>(() => {
     try {
       const saved = readDraft(key(railId));
-      if (saved) return JSON.parse(saved) as SweepDraft;
+      // A draft saved before positions had their own unit or the face was asked: those default.
+      if (saved) return { ...initial(), ...(JSON.parse(saved) as Partial<SweepDraft>) } as SweepDraft;
     } catch {
       // A broken saved draft is dropped; the new one starts clean.
     }

@@ -1,11 +1,15 @@
+import { fromMm, type LengthUnit } from '../../../lib/units';
 import type { StationDraft } from '../hooks/use-sweep-draft';
 
-export const stationsAtHoles = (holes: { position: number }[]): StationDraft[] => holes.map((h) => ({ position: String(h.position), reading: '' }));
+/** A station at each hole, its position in `unit` (holes are kept in mm). */
+export const stationsAtHoles = (holes: { position: number }[], unit: LengthUnit = 'mm'): StationDraft[] =>
+  holes.map((h) => ({ position: String(Number(fromMm(h.position, unit).toPrecision(10))), reading: '' }));
 
-export function stationsByStep(lengthMm: number, stepMm: number): StationDraft[] {
-  if (!(stepMm > 0)) return [];
-  const count = Math.min(Math.floor(lengthMm / stepMm + 1e-9) + 1, 2000);
-  return Array.from({ length: count }, (_, i) => ({ position: String(Math.round(i * stepMm * 1000) / 1000), reading: '' }));
+/** Stations every `step` from 0 to `length`, both in the same unit. */
+export function stationsByStep(length: number, step: number): StationDraft[] {
+  if (!(step > 0)) return [];
+  const count = Math.min(Math.floor(length / step + 1e-9) + 1, 2000);
+  return Array.from({ length: count }, (_, i) => ({ position: String(Math.round(i * step * 10000) / 10000), reading: '' }));
 }
 
 const asNumber = (s: string) => {
