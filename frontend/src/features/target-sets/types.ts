@@ -1,9 +1,13 @@
-export type TargetUnit = 'mm' | 'um' | 'in' | 'thou' | 'mm/m' | '%' | 'days';
+export type TargetUnit = 'mm' | 'um' | 'in' | 'thou' | 'mm/m' | '%' | 'days' | 'um/mm';
+export type StraightnessReference = 'minimum-zone' | 'least-squares';
+export const REFERENCE_WORDS: Record<StraightnessReference, string> = { 'minimum-zone': 'minimum zone (ISO 1101)', 'least-squares': 'least squares line' };
 
 export interface Target {
   value: number;
   unit: TargetUnit;
   source?: string;
+  /** Read on the rail straightness target: the line it is judged from (minimum zone when absent). */
+  reference?: StraightnessReference;
   label: string;
 }
 
@@ -17,7 +21,7 @@ export interface TargetSet {
   usedBy: { id: string; name: string; state: string; approved: boolean }[];
 }
 
-export const UNIT_WORDS: Record<TargetUnit, string> = { mm: 'mm', um: 'µm', in: 'in', thou: 'thou', 'mm/m': 'mm/m', '%': '%', days: 'days' };
+export const UNIT_WORDS: Record<TargetUnit, string> = { mm: 'mm', um: 'µm', in: 'in', thou: 'thou', 'mm/m': 'mm/m', '%': '%', days: 'days', 'um/mm': 'µm per mm of rail spacing' };
 
 /** Which units a target may be given in: lengths in any length unit, others as they are. */
 export const unitChoices = (unit: TargetUnit): TargetUnit[] => (['mm', 'um', 'in', 'thou'].includes(unit) ? ['mm', 'um', 'in', 'thou'] : [unit]);

@@ -1,6 +1,6 @@
 import { Box, Button, Chip, Paper, Table, TableBody, TableCell, TableContainer, TableHead, TableRow, Typography } from '@mui/material';
 import EditOutlined from '@mui/icons-material/EditOutlined';
-import { UNIT_WORDS, type TargetSet } from '../types';
+import { REFERENCE_WORDS, UNIT_WORDS, type TargetSet } from '../types';
 import { TargetSetUsers } from './target-set-users';
 
 /** One target set: every target with its value, unit and where the value came from. */
@@ -39,6 +39,7 @@ export function TargetSetCard({ set, canEdit, onEdit }: { set: TargetSet; canEdi
                 <TableCell sx={{ minWidth: 180 }}>{t.label}</TableCell>
                 <TableCell align="right" sx={{ whiteSpace: 'nowrap', fontWeight: 600 }}>
                   {t.value} {UNIT_WORDS[t.unit]}
+                  {key === 'railStraightness' ? `, judged on the ${REFERENCE_WORDS[t.reference ?? 'minimum-zone']}` : ''}
                 </TableCell>
                 <TableCell sx={{ color: 'text.secondary' }}>{t.source || '—'}</TableCell>
               </TableRow>
