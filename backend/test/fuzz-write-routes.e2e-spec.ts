@@ -100,7 +100,7 @@ describe('fuzz: generated bad bodies on every write route', () => {
     const rail = await ws.as.builder.post(`/api/machines/${ids.machine}/rails`).send({ label: 'Y1 (left)', axis: 'Y1', length: 800, holePitch: 60, firstHole: 40 });
     ids.rail = rail.body.id;
     ids.boltDown = (await ws.as.builder.post(`/api/rails/${ids.rail}/bolt-downs`).send({ mode: 'line', readingUnit: 'um' })).body.id;
-    ids.trial = (await ws.as.technician.post(`/api/axes/${ids.axis}/travel-trials`).send({ unit: 'mm', stepsPerMmUsed: 640, moves: [{ commanded: 100, measured: 99.8 }] })).body.id;
+    ids.trial = (await ws.as.technician.post(`/api/axes/${ids.axis}/travel-trials`).send({ lengthUnit: 'mm', stepsPerMmUsed: 640, moves: [{ commanded: 100, measured: 99.8 }] })).body.id;
     ids.targetSet = (await ws.as.owner.get('/api/target-sets')).body[0].id;
     ids.person = ws.userIds.viewer;
     const walk = (await ws.as.viewer.get(`/api/machines/${ids.machine}/safety-walk`)).body;
@@ -123,8 +123,8 @@ describe('fuzz: generated bad bodies on every write route', () => {
     'POST /api/bolt-downs/:id/final-sweep': { method: 'post', path: () => `/api/bolt-downs/${ids.boltDown}/final-sweep`, role: 'builder', body: () => ({ readingUnit: 'um', phase: 'as-left', stations }) },
     'POST /api/machines/:id/axes': { method: 'post', path: () => `/api/machines/${ids.machine}/axes`, role: 'technician', body: () => screwAxis('Z') },
     'PATCH /api/axes/:id': { method: 'patch', path: () => `/api/axes/${ids.axis}`, role: 'technician', body: () => ({ maxFeedRate: 4000, measuredTravelMm: 900 }) },
-    'POST /api/axes/:id/travel-trials': { method: 'post', path: () => `/api/axes/${ids.axis}/travel-trials`, role: 'technician', body: () => ({ unit: 'mm', stepsPerMmUsed: 640, moves: [{ commanded: 100, measured: 99.8 }, { commanded: 300, measured: 299.5 }] }) },
-    'POST /api/axes/:id/positioning-runs': { method: 'post', path: () => `/api/axes/${ids.axis}/positioning-runs`, role: 'technician', body: () => ({ unit: 'um', targets: [10, 20], runs: [{ direction: 'up', deviations: [1, 2] }, { direction: 'up', deviations: [2, 2] }, { direction: 'down', deviations: [0, 1] }, { direction: 'down', deviations: [-1, 0] }] }) },
+    'POST /api/axes/:id/travel-trials': { method: 'post', path: () => `/api/axes/${ids.axis}/travel-trials`, role: 'technician', body: () => ({ lengthUnit: 'mm', stepsPerMmUsed: 640, moves: [{ commanded: 100, measured: 99.8 }, { commanded: 300, measured: 299.5 }] }) },
+    'POST /api/axes/:id/positioning-runs': { method: 'post', path: () => `/api/axes/${ids.axis}/positioning-runs`, role: 'technician', body: () => ({ readingUnit: 'um', targets: [10, 20], runs: [{ direction: 'up', deviations: [1, 2] }, { direction: 'up', deviations: [2, 2] }, { direction: 'down', deviations: [0, 1] }, { direction: 'down', deviations: [-1, 0] }] }) },
     'POST /api/machines/:id/diagonal-checks': { method: 'post', path: () => `/api/machines/${ids.machine}/diagonal-checks`, role: 'technician', body: () => ({ unit: 'mm', sideX: 1000, sideY: 600, diagonal1: 1166.2, diagonal2: 1166.0 }) },
     'POST /api/machines/:id/bed-grids': { method: 'post', path: () => `/api/machines/${ids.machine}/bed-grids`, role: 'technician', body: () => ({ unit: 'mm', columns: 2, rows: 2, points: [{ x: 0, y: 0, z: 0 }, { x: 100, y: 0, z: 0.01 }, { x: 0, y: 100, z: 0 }, { x: 100, y: 100, z: 0.02 }] }) },
     'POST /api/machines/:id/test-cuts': { method: 'post', path: () => `/api/machines/${ids.machine}/test-cuts`, role: 'technician', body: () => ({ unit: 'mm', x: { commandedMm: 100, measuredMm: 100.1 }, y: { commandedMm: 100, measuredMm: 99.9 } }) },

@@ -3,9 +3,9 @@ import { createTestApp, createTestWorkshop, type TestWorkshop } from './helpers/
 import { newAxis, newMachine, screwAxis } from './helpers/drives.js';
 
 // Five trials a little apart in scale error, so each record is told from the others.
-const trial = (i: number) => ({ unit: 'mm', stepsPerMmUsed: 640, moves: [{ commanded: 100, measured: 99.8 + i * 0.01 }, { commanded: 300, measured: 299.5 + i * 0.02 }] });
+const trial = (i: number) => ({ lengthUnit: 'mm', stepsPerMmUsed: 640, moves: [{ commanded: 100, measured: 99.8 + i * 0.01 }, { commanded: 300, measured: 299.5 + i * 0.02 }] });
 const run = (i: number) => ({
-  unit: 'um',
+  readingUnit: 'um',
   targets: [10, 20, 30],
   runs: [
     { direction: 'up', deviations: [1 + i, 2, 3] },
@@ -73,7 +73,7 @@ describe('reads: paged trial and run lists', () => {
 
   it('lists trials without their moves; the single trial keeps them and agrees on the figures', async () => {
     const [first] = (await ws.as.viewer.get(`/api/axes/${axisId}/travel-trials`)).body;
-    expect(first).toMatchObject({ id: trialIds[0], axisId, unit: 'mm', stepsPerMmUsed: 640, moveCount: 2, locked: false, appliedAt: null });
+    expect(first).toMatchObject({ id: trialIds[0], axisId, lengthUnit: 'mm', readingUnit: 'mm', stepsPerMmUsed: 640, moveCount: 2, locked: false, appliedAt: null });
     expect(first.moves).toBeUndefined();
     expect(first.result.moves).toBeUndefined();
     expect(first.result.residuals).toBeUndefined();
@@ -87,7 +87,7 @@ describe('reads: paged trial and run lists', () => {
 
   it('lists runs without their deviations; the single run keeps them and agrees on the verdicts', async () => {
     const [first] = (await ws.as.viewer.get(`/api/axes/${axisId}/positioning-runs`)).body;
-    expect(first).toMatchObject({ id: runIds[0], axisId, unit: 'um', targetCount: 3, runCount: 4, locked: false });
+    expect(first).toMatchObject({ id: runIds[0], axisId, lengthUnit: 'mm', readingUnit: 'um', targetCount: 3, runCount: 4, locked: false });
     expect(first.runs).toBeUndefined();
     expect(first.targets).toBeUndefined();
     expect(first.result.targets).toBeUndefined();

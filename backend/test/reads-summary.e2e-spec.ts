@@ -66,7 +66,7 @@ describe('reads: the machines list agrees with the readiness board', () => {
     expect(plasmaList.checks.outside).toBeGreaterThan(0);
 
     const axis = await newAxis(ws, router, screwAxis('X'));
-    await ws.as.technician.post(`/api/axes/${axis}/travel-trials`).send({ unit: 'mm', stepsPerMmUsed: 640, moves: [{ commanded: 100, measured: 100.5 }, { commanded: 200, measured: 201 }] });
+    await ws.as.technician.post(`/api/axes/${axis}/travel-trials`).send({ lengthUnit: 'mm', stepsPerMmUsed: 640, moves: [{ commanded: 100, measured: 100.5 }, { commanded: 200, measured: 201 }] });
     await ws.as.technician.post(`/api/machines/${router}/diagonal-checks`).send({ sideX: 1000, sideY: 600, diagonal1: Math.hypot(1000, 600), diagonal2: Math.hypot(1000, 600) });
     await expectAgreement('axis, trial and diagonal check recorded');
 

@@ -25,7 +25,7 @@ describe('a stored result that cannot be read', () => {
     goodAxisId = await newAxis(ws, machineId, screwAxis('Z'));
     const moves = [{ commanded: 100, measured: 99.8 }];
     for (const id of [axisId, goodAxisId]) {
-      const t = await ws.as.technician.post(`/api/axes/${id}/travel-trials`).send({ unit: 'mm', stepsPerMmUsed: 640, moves });
+      const t = await ws.as.technician.post(`/api/axes/${id}/travel-trials`).send({ lengthUnit: 'mm', stepsPerMmUsed: 640, moves });
       expect(t.status).toBe(201);
     }
   });
@@ -35,7 +35,7 @@ describe('a stored result that cannot be read', () => {
     const before = (await ws.as.viewer.get(`/api/axes/${axisId}/travel-trials`)).body;
     const res = await ws.as.technician
       .post(`/api/axes/${axisId}/travel-trials`)
-      .send({ unit: 'mm', stepsPerMmUsed: 640, moves: [{ commanded: 100, measured: 1e308 }] });
+      .send({ lengthUnit: 'mm', stepsPerMmUsed: 640, moves: [{ commanded: 100, measured: 1e308 }] });
     expect(res.status).toBe(400);
     expect(JSON.stringify(res.body.message)).toMatch(/measured/);
     const after = (await ws.as.viewer.get(`/api/axes/${axisId}/travel-trials`)).body;

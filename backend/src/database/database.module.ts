@@ -5,6 +5,8 @@ import { loadConfig } from '../config/config.js';
 import * as schema from './schema/index.js';
 import { DRIZZLE, PG_POOL, ROOT_DRIZZLE } from './database.tokens.js';
 import { TransactionContext, transactionalDatabase } from './transaction-context.js';
+import { CommandKeys } from './command-keys.js';
+import { CommandKeysRepository } from './command-keys.repository.js';
 
 @Global()
 @Module({
@@ -33,8 +35,10 @@ import { TransactionContext, transactionalDatabase } from './transaction-context
       inject: [TransactionContext],
       useFactory: (context: TransactionContext) => transactionalDatabase(context),
     },
+    CommandKeysRepository,
+    CommandKeys,
   ],
-  exports: [PG_POOL, DRIZZLE, TransactionContext],
+  exports: [PG_POOL, DRIZZLE, TransactionContext, CommandKeys],
 })
 export class DatabaseModule implements OnApplicationShutdown {
   constructor(@Inject(PG_POOL) private readonly pool: pg.Pool) {}
