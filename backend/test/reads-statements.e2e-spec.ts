@@ -56,8 +56,8 @@ describe('reads: statements per request do not grow with the number of sweeps', 
   /** Older sweeps than the ones recorded through the API, written straight to the table for speed. */
   async function addOldSweeps(railId: string, n: number) {
     await pool.query(
-      `insert into rail_sweeps (workshop_id, machine_id, rail_id, unit, positions_mm, readings_raw, readings_mm, phase, taken_by, datum, result, status, target, taken_at)
-       select s.workshop_id, s.machine_id, s.rail_id, s.unit, s.positions_mm, s.readings_raw, s.readings_mm, 'as-found', 'History', s.datum, s.result, s.status, s.target,
+      `insert into rail_sweeps (workshop_id, machine_id, rail_id, reading_unit, length_unit, face, positions_mm, readings_raw, readings_mm, phase, taken_by, datum, result, status, target, taken_at)
+       select s.workshop_id, s.machine_id, s.rail_id, s.reading_unit, s.length_unit, s.face, s.positions_mm, s.readings_raw, s.readings_mm, 'as-found', 'History', s.datum, s.result, s.status, s.target,
               s.taken_at - make_interval(mins => g)
        from rail_sweeps s cross join generate_series(1, $2::int) g
        where s.id = (select id from rail_sweeps where rail_id = $1 order by taken_at desc limit 1)`,
