@@ -41,7 +41,7 @@ test.describe('backlash check', () => {
     const { machineId, axisId } = await newAxis(page.request);
     await page.goto(`/machines/${machineId}/axes/${axisId}`);
     const section = page.getByRole('region', { name: 'Backlash check' });
-    await expect(section.getByText('No backlash check yet')).toBeVisible();
+    await expect(section.getByText('No backlash check yet')).toBeVisible({ timeout: 30_000 });
     // Positions start near both ends and in the middle of the 926 mm travel.
     await expect(page.getByLabel('Position 1', { exact: true })).toHaveValue('46');
     await expect(page.getByLabel('Position 2', { exact: true })).toHaveValue('463');
