@@ -6,6 +6,7 @@ const KIND_WORDS: Record<string, string> = {
   'rail-straightness': 'rail straightness',
   'rail-parallelism': 'rail parallelism',
   'travel-trial': 'travel trial',
+  backlash: 'backlash check',
   positioning: 'repeat-and-reverse run',
   'speed-check': 'speed check',
   'travel-envelope': 'travel envelope',

@@ -21,7 +21,7 @@ export async function seedBoltDowns(ctx: SeedContext): Promise<void> {
   if (!rail) throw new Error('seedBoltDowns needs the plasma table rails seeded first');
 
   const guide = ctx.app.get(BoltDownsService);
-  let state = await guide.start(builder, rail.id, { mode: 'line', unit: 'thou' });
+  let state = await guide.start(builder, rail.id, { mode: 'line', readingUnit: 'thou', lengthUnit: 'mm' });
   for (const [k, miss] of MISS_THOU.entries()) {
     const hole = state.nextHole!;
     const aim = state.holes[hole].target;

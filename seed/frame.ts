@@ -2,11 +2,11 @@ import type { SessionUser } from '../backend/src/auth/session-user.js';
 import { BedGridsService } from '../backend/src/frame/bed-grids.service.js';
 import { DiagonalChecksService } from '../backend/src/frame/diagonal-checks.service.js';
 import { TestCutsService } from '../backend/src/frame/test-cuts.service.js';
-import type { SeedContext } from './context.js';
+import { PLASMA, type SeedContext } from './context.js';
 
 /*
- * Invented frame checks. The plasma table was squared over five diagonal checks on a 2000 × 1200 mm
- * rectangle it marked, converging from well outside the 0.5 mm/m target to inside it; its slat bed
+ * Invented frame checks. The plasma table was squared over five diagonal checks on a 1200 × 2000 mm
+ * rectangle it marked (the correction worked over the gantry's 1750 mm span), converging from well outside the 0.5 mm/m target to inside it; its slat bed
  * has one low slat (outside 0.03 in); its first test cut is within ISO 9013 class 2 sizes but shows
  * a little X scale error and lost motion on Y. The router's checks are all within its targets.
  */
@@ -38,36 +38,43 @@ export async function seedFrame(ctx: SeedContext): Promise<void> {
 
   for (const [i, step] of PLASMA_SQUARING.entries()) {
     // A negative lean swaps which diagonal is long.
-    const d = diagonals(2000, 1200, Math.abs(step.mmPerMetre), 0.05);
+    const d = diagonals(1200, 2000, Math.abs(step.mmPerMetre), 0.05);
     const [diagonal1, diagonal2] = step.mmPerMetre >= 0 ? [d.diagonal1, d.diagonal2] : [d.diagonal2, d.diagonal1];
     const who: SessionUser = i === 0 ? builder : technician;
-    await diag.create(who, plasma, { sideX: 2000, sideY: 1200, diagonal1, diagonal2, gantrySpan: 3200, unit: 'mm', note: step.note });
+    await diag.create(who, plasma, { sideX: 1200, sideY: 2000, diagonal1, diagonal2, gantrySpan: PLASMA.gantrySpanMm, lengthUnit: 'mm', note: step.note });
   }
+  // Five rows along the 3000 mm of Y, three columns across the 1500 mm of X.
   await grids.create(builder, plasma, {
-    unit: 'mm',
-    rows: 3,
-    columns: 5,
-    points: gridPoints([0, 750, 1500, 2250, 3000], [0, 750, 1500], [
-      [0.1, 0.25, 0.3, 0.2, 0.05],
-      [0.2, 0.35, -0.55, 0.3, 0.15],
-      [0.05, 0.2, 0.25, 0.1, -0.05],
+    lengthUnit: 'mm',
+    readingUnit: 'mm',
+    rows: 5,
+    columns: 3,
+    points: gridPoints([0, 750, 1500], [0, 750, 1500, 2250, 3000], [
+      [0.1, 0.2, 0.05],
+      [0.25, 0.35, 0.2],
+      [0.3, -0.55, 0.25],
+      [0.2, 0.3, 0.1],
+      [0.05, 0.15, -0.05],
     ]),
     note: 'Torch-height gauge block at each point, slats as delivered; the middle slat sags at the centre.',
   });
   await cuts.create(technician, plasma, {
-    unit: 'mm',
+    lengthUnit: 'mm',
+    plateThickness: 6,
     nominal: { x: 400, y: 400, circle: 100 },
     // Without kerf compensation the square comes out a kerf small (diagonals √2 kerf short) and the hole a kerf large.
     measured: { ...shortenBy(diagonals(399.4, 400.05, 0.15, 0.05), Math.SQRT2 * 1.6), x: 399.4 - 1.6, y: 400.05 - 1.6, circleX: 100 + 1.6, circleY: 99.75 + 1.6, kerf: 1.6 },
     circleKind: 'hole',
-    stepsPerMm: { x: 25.4648, y: 25.4648 },
+    // The axes' own steps per mm (seed/drives.ts): the cut is judged at the values the controller used.
+    stepsPerMm: { x: PLASMA.stepsPerMm, y: PLASMA.stepsPerMm },
     note: '6 mm mild steel, 45 A, cut on the path without kerf compensation; kerf measured on the scrap strip.',
   });
 
   const r = diagonals(800, 500, 0.08, 0.01);
-  await diag.create(technician, router, { sideX: 800, sideY: 500, ...r, gantrySpan: 720, unit: 'mm', note: 'Pen plotted on MDF, read with a steel rule and a loupe.' });
+  await diag.create(technician, router, { sideX: 800, sideY: 500, ...r, gantrySpan: 720, lengthUnit: 'mm', note: 'Pen plotted on MDF, read with a steel rule and a loupe.' });
   await grids.create(builder, router, {
-    unit: 'mm',
+    lengthUnit: 'mm',
+    readingUnit: 'mm',
     rows: 3,
     columns: 4,
     points: gridPoints([0, 300, 600, 900], [0, 300, 600], [
@@ -78,7 +85,7 @@ export async function seedFrame(ctx: SeedContext): Promise<void> {
     note: 'Spoilboard after surfacing with a 40 mm fly cutter; dial indicator in the spindle.',
   });
   await cuts.create(technician, router, {
-    unit: 'mm',
+    lengthUnit: 'mm',
     nominal: { x: 300, y: 300, circle: 80 },
     measured: { ...diagonals(300.02, 299.97, 0.05, 0.01), x: 300.02, y: 299.97, circleX: 80.03, circleY: 79.99 },
     circleKind: 'hole',

@@ -10,7 +10,7 @@ import type { SeedContext } from './context.js';
 const MOTOR_BRACKET: HolePatternDto = {
   name: 'Y1 motor bracket',
   reference: 'bottom-left',
-  unit: 'mm',
+  lengthUnit: 'mm',
   width: 100,
   height: 90,
   entry: 'circle',
@@ -21,7 +21,7 @@ const MOTOR_BRACKET: HolePatternDto = {
 const CARRIAGE_PLATE: HolePatternDto = {
   name: 'X carriage plate',
   reference: 'left',
-  unit: 'mm',
+  lengthUnit: 'mm',
   width: 160,
   height: 120,
   entry: 'grid',

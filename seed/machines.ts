@@ -1,6 +1,6 @@
 import { MachinesService } from '../backend/src/machines/machines.service.js';
 import { TargetSetsService } from '../backend/src/target-sets/target-sets.service.js';
-import type { SeedContext } from './context.js';
+import { PLASMA, type SeedContext } from './context.js';
 
 /** The two invented machines of the demo workshop, and the default target sets. */
 export async function seedMachines(ctx: SeedContext): Promise<NonNullable<SeedContext['machines']>> {
@@ -11,8 +11,8 @@ export async function seedMachines(ctx: SeedContext): Promise<NonNullable<SeedCo
   const plasma = await machines.create(builder, {
     name: 'Big plasma table',
     kind: 'plasma',
-    workArea: { x: 3000, y: 1500 },
-    notes: 'Welded 100 × 100 × 4 box-section frame, 20 mm profile rails, rack drive on the long axis with a motor each side (Y1, Y2). Being commissioned.',
+    workArea: PLASMA.workArea,
+    notes: 'Welded 100 × 100 × 4 box-section frame, 1500 × 3000 mm bed of slats, 20 mm profile rails; the gantry runs the long axis (Y) on racks with a motor each side (Y1, Y2), 1750 mm apart. Being commissioned.',
   });
   const router = await machines.create(builder, {
     name: 'Small router',
