@@ -16,6 +16,7 @@ const THOU_MM = 0.0254; // 1 thou = 0.001 in = 0.0254 mm exactly
 interface Hole {
   index: number;
   position: number;
+  at: number;
   order: number;
   target: number | null;
   targetMm: number | null;
