@@ -21,6 +21,8 @@ test.describe('frame and safety walk', () => {
     const history = page.getByRole('table', { name: 'Diagonal checks' });
     await expect(history.getByRole('row')).toHaveCount(6);
     const form = page.getByRole('form', { name: 'Diagonal check' });
+    // Every length of the check is in the one length unit; there are no readings here.
+    await expect(form.getByLabel('Length unit')).toBeVisible();
     await form.getByLabel('X side').fill('2000');
     await form.getByLabel('Y side').fill('1200');
     await form.getByLabel(/^Diagonal 1/).fill('2332.15');
@@ -28,8 +30,12 @@ test.describe('frame and safety walk', () => {
     await form.getByLabel(/^Gantry span/).fill('3200');
     await form.getByRole('button', { name: 'Record diagonal check' }).click();
     await expect(history.getByRole('row')).toHaveCount(7);
-    // Diagonal 2 long by 0.7 mm on 2000 × 1200: 0.34 mm/m, within the 0.5 mm/m plasma target.
+    // Diagonal 2 long by 0.7 mm on 2000 × 1200: 0.34 mm/m, outside the 0.23 mm/m plasma target
+    // (0.5 mm diagonal difference on a 1500 mm square, re-derived from its source).
     await expect(page.getByTestId('squareness-result')).toContainText('0.34');
+    await expect(page.getByRole('region', { name: 'Diagonal check' }).getByText('outside target').first()).toBeVisible();
+    // No resolution given: a tape (about 1/32 in) is too coarse for the 0.47 mm the target allows here.
+    await expect(page.getByRole('list', { name: 'Diagonal check warnings' })).toContainText(/A tape reads to about 1\/32 in \(0.794 mm\)/);
     await expect(page.getByText(/Lean exaggerated ×\d+/)).toBeVisible();
     await expect(page.getByText(/Move the X0 end back towards Y0 by 1\.0\d mm/)).toBeVisible();
     await shoot(page, 'svg[aria-label^="Measured rectangle"]', 'frame-squareness-drawing-desktop');
@@ -41,6 +47,8 @@ test.describe('frame and safety walk', () => {
 
     // A 3 × 4 grid by keyboard: type, Enter to the next cell.
     const grid = page.getByRole('form', { name: 'Bed grid' });
+    await expect(grid.getByLabel('Position unit')).toBeVisible();
+    await expect(grid.getByLabel('Height unit')).toBeVisible();
     await expect(grid.getByLabel('Rows')).toHaveValue('3');
     await expect(grid.getByLabel('Columns')).toHaveValue('4');
     const heights = ['0.10', '0.05', '0.00', '-0.05', '0.08', '0.02', '0.62', '-0.04', '0.04', '0.00', '-0.02', '-0.08'];
@@ -51,11 +59,21 @@ test.describe('frame and safety walk', () => {
     }
     await expect(grid.getByLabel('Height at row 3, column 4')).toHaveValue('-0.08');
     await grid.getByRole('button', { name: 'Record bed grid' }).click();
-    await expect(page.getByTestId('flatness-result')).toContainText('Flatness');
-    await expect(page.getByRole('list', { name: 'Worst points' }).getByRole('listitem').first()).toContainText('row 2, column 3: +0.');
-    await expect(page.getByRole('img', { name: /Bed grid colour map of residuals in mm, 3 rows by 4 columns/ })).toBeVisible();
+    // A plasma table is judged on the range of heights as the gantry-carried gauge read them: 0.62 − (−0.08) = 0.70 mm.
+    await expect(page.getByTestId('flatness-result')).toContainText('Height range to the gantry’s plane of travel (tilt left in): 0.0276 in (0.700 mm)');
+    await expect(page.getByRole('definition').filter({ hasText: /mm/ }).first()).toBeVisible();
+    await expect(page.getByText('Minimum-zone flatness (ISO 1101)', { exact: true })).toBeVisible();
+    await expect(page.getByText('Least-squares flatness', { exact: true })).toBeVisible();
+    // Twelve points on a 3 × 4 grid over part of the bed: fewer than 3 × 3 is fine, but the grid does not cover the bed.
+    await expect(page.getByRole('list', { name: 'Worst points' }).getByRole('listitem').first()).toContainText('row 2, column 3: +0.35');
+    await expect(page.getByRole('img', { name: /Bed grid colour map of heights in mm from the middle of the height range, 3 rows by 4 columns/ })).toBeVisible();
     await shoot(page, 'svg[aria-label^="Bed grid colour map"]', 'frame-bed-grid-map-desktop');
     await shoot(page, 'section[aria-labelledby="bed-grid-title"]', 'frame-bed-grid-desktop');
+    // The seeded cut's 400 mm square is judged in its own ISO 9013 band, not the 35–125 mm one.
+    const parts = page.getByRole('table', { name: 'Part sizes' });
+    await expect(parts).toContainText('315–1000 mm parts');
+    await expect(parts).toContainText('35–125 mm parts');
+    await expect(page.getByRole('form', { name: 'Test cut' }).getByLabel('Plate thickness')).toBeVisible();
     await shoot(page, 'section[aria-labelledby="test-cut-title"]', 'frame-test-cut-desktop');
     await snap(page, 'frame-tab-desktop');
 
@@ -108,6 +126,33 @@ test.describe('frame and safety walk', () => {
     // Asked on the other machine's walk too.
     await openTab(page, 'Small router', 'Safety walk');
     await expect(page.getByRole('group', { name: 'The spare torch consumables are stored dry' })).toBeVisible();
+  });
+
+  test('the frame page on a phone (390 px) and a laptop (1280 px)', async ({ page }) => {
+    for (const [width, name] of [[390, 'phone'], [1280, 'laptop']] as const) {
+      await page.setViewportSize({ width, height: 900 });
+      await signInAs(page, DEMO.technician);
+      await openTab(page, 'Big plasma table', 'Frame');
+      await expect(page.getByTestId('flatness-result')).toContainText('Height range');
+      await expect(page.getByRole('form', { name: 'Test cut' }).getByLabel('Length unit')).toBeVisible();
+      // Nothing wider than the screen: the page itself does not scroll sideways (wide tables scroll in their own box).
+      const offenders = await page.evaluate(() => {
+        const width = document.documentElement.clientWidth;
+        const inScroller = (el: Element) => {
+          for (let p = el.parentElement; p; p = p.parentElement) if (p.scrollWidth > p.clientWidth && getComputedStyle(p).overflowX !== 'visible') return true;
+          return false;
+        };
+        return [...document.querySelectorAll('main *')]
+          .filter((el) => el.getBoundingClientRect().right > width + 1 && !inScroller(el))
+          .slice(0, 5)
+          .map((el) => `${el.tagName.toLowerCase()}.${[...el.classList].join('.')} "${(el.textContent ?? '').slice(0, 40)}"`);
+      });
+      expect(offenders).toEqual([]);
+      await shoot(page, 'section[aria-labelledby="bed-grid-title"]', `frame-bed-grid-${name}`);
+      await shoot(page, 'section[aria-labelledby="test-cut-title"]', `frame-test-cut-${name}`);
+      await snap(page, `frame-tab-${name}`);
+      await page.context().clearCookies();
+    }
   });
 
   test('the drawing, the colour map and the walk at tablet size', async ({ page }) => {

@@ -122,14 +122,14 @@ export function BedGridEntry({ machineId, workArea, onSaved }: { machineId: stri
   };
 
   return (
-    <Box ref={indicator.containerRef} component="form" onSubmit={submit} noValidate aria-label="Bed grid">
+    <Box ref={indicator.containerRef} component="form" onSubmit={submit} noValidate aria-label="Bed grid" sx={{ minWidth: 0 }}>
       <Stack spacing={1.5}>
         <Box sx={{ display: 'flex', gap: 1.5, flexWrap: 'wrap' }}>
           <TextField label="Rows" type="number" value={rows} onChange={(e) => setSize(Number(e.target.value), columns)} slotProps={{ htmlInput: { min: 1, max: MAX } }} sx={{ width: 96 }} />
           <TextField label="Columns" type="number" value={columns} onChange={(e) => setSize(rows, Number(e.target.value))} slotProps={{ htmlInput: { min: 1, max: MAX } }} sx={{ width: 96 }} />
           <UnitFamilySelect family="length" label="Position unit" value={lengthUnit} onChange={changeLengthUnit} />
           <UnitFamilySelect family="reading" label="Height unit" value={unit} onChange={setUnit} />
-          <NumberField label="Gauge reads to" unit={UNIT_LABELS[unit]} value={resolution} onChange={(e) => setResolution(e.target.value)} sx={{ width: 170 }} />
+          <NumberField label="Gauge reads to" unit={UNIT_LABELS[unit]} value={resolution} onChange={(e) => setResolution(e.target.value)} sx={{ width: 170 }} slotProps={{ inputLabel: { shrink: true } }} placeholder="optional" />
         </Box>
         <Typography variant="body2" color="text.secondary">
           Positions in {lu}; heights in {UNIT_LABELS[unit]}, read from a gauge or indicator carried by the gantry (in the torch or spindle holder), any zero. Enter moves on, ↑ ↓ move between rows, a pasted block fills the grid.

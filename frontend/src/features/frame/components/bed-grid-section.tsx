@@ -43,7 +43,7 @@ export function BedGridSection({ machineId, machineKind, workArea, canRecord }: 
           ? 'Heights over the bed or slats on a grid, read from a gauge carried by the gantry. For a plasma table what matters is the bed parallel to the plane the torch travels in, not level to the floor nor flat after a tilt is taken out: the judged value is the range of the heights as read, tilt left in, against the torch-height target. Minimum-zone flatness (ISO 1101) and least squares are shown beside it.'
           : 'Heights over the bed or spoilboard on a grid. The judged value is minimum-zone flatness (ISO 1101: the smallest distance between two parallel planes holding every point); least-squares flatness and the tilt are shown beside it.'}
       </Typography>
-      <Box sx={{ display: 'grid', gap: 3, gridTemplateColumns: { xs: '1fr', lg: canRecord ? 'minmax(360px, 1fr) 1fr' : '1fr' } }}>
+      <Box sx={{ display: 'grid', gap: 3, gridTemplateColumns: { xs: 'minmax(0, 1fr)', lg: canRecord ? 'minmax(360px, 1fr) minmax(0, 1fr)' : 'minmax(0, 1fr)' } }}>
         {canRecord && <BedGridEntry machineId={machineId} workArea={workArea} onSaved={(x) => setSelectedId(x.id)} />}
         <Box>
           {g && !g.result ? (
@@ -101,7 +101,7 @@ export function BedGridSection({ machineId, machineKind, workArea, canRecord }: 
         </Box>
       </Box>
       {list.length > 1 && (
-        <TextField select label="Earlier grids" value={g?.id ?? ''} onChange={(e) => setSelectedId(e.target.value)} sx={{ mt: 2, minWidth: 320 }}>
+        <TextField select label="Earlier grids" value={g?.id ?? ''} onChange={(e) => setSelectedId(e.target.value)} sx={{ mt: 2, minWidth: { sm: 320 }, maxWidth: '100%' }}>
           {list.map((x) => (
             <MenuItem key={x.id} value={x.id}>
               {showDate(x.recordedAt)} · {x.result ? `${x.result.judged.basis === 'height-range' ? 'height range' : 'flatness'} ${showLength(x.result.judged.valueMm, isLengthUnit(x.target.unit) ? x.target.unit : 'mm')} · ${x.status === 'within-target' ? 'within' : 'outside'}` : 'cannot be read'}

@@ -100,8 +100,8 @@ export function TestCutForm({ machineId, machineKind, onSaved }: { machineId: st
         </Box>
         <Typography variant="h5" component="h4">Steps per mm when cut (optional)</Typography>
         <Box sx={grid}>
-          <NumberField label="Steps/mm X" unit="steps/mm" value={v.sx} onChange={set('sx')} error={!!errors.sx} helperText={errors.sx} />
-          <NumberField label="Steps/mm Y" unit="steps/mm" value={v.sy} onChange={set('sy')} error={!!errors.sy} helperText={errors.sy} />
+          <NumberField label="Steps/mm X" unit="steps/mm" slotProps={{ inputLabel: { shrink: true } }} value={v.sx} onChange={set('sx')} error={!!errors.sx} helperText={errors.sx} />
+          <NumberField label="Steps/mm Y" unit="steps/mm" slotProps={{ inputLabel: { shrink: true } }} value={v.sy} onChange={set('sy')} error={!!errors.sy} helperText={errors.sy} />
         </Box>
         <TextField label="Note" value={note} onChange={(e) => setNote(e.target.value)} placeholder="Material, thickness, current, speed" />
         <Box>

@@ -102,21 +102,20 @@ export function TestCutResults({ cut, actions }: { cut: TestCut; actions?: React
               <TableCell align="right">Deviation</TableCell>
               <TableCell align="right">Tolerance</TableCell>
               <TableCell>Result</TableCell>
-              <TableCell>Tolerance from</TableCell>
             </TableRow>
           </TableHead>
           <TableBody>
             {r.parts.map((p) => (
               <TableRow key={p.part}>
-                <TableCell>{SHORT[p.part] ?? p.label}</TableCell>
+                <TableCell sx={{ whiteSpace: 'normal !important', minWidth: 180 }}>
+                  {SHORT[p.part] ?? p.label}
+                  <Typography variant="caption" color="text.secondary" component="div">{p.toleranceBasis}</Typography>
+                </TableCell>
                 <TableCell align="right">{showLength(p.nominalMm, u, digits)}</TableCell>
                 <TableCell align="right">{showLength(p.afterKerfMm, u, digits)}</TableCell>
                 <TableCell align="right" sx={{ color: p.within ? 'inherit' : 'error.main', fontWeight: p.within ? 400 : 600 }}>{showSigned(p.deviationMm, u, digits)}</TableCell>
                 <TableCell align="right">± {showLength(p.toleranceMm, u, digits)}</TableCell>
                 <TableCell>{p.within ? 'within' : 'outside'}</TableCell>
-                <TableCell sx={{ whiteSpace: 'normal !important', minWidth: 220 }}>
-                  <Typography variant="body2" color="text.secondary">{p.toleranceBasis}</Typography>
-                </TableCell>
               </TableRow>
             ))}
           </TableBody>

@@ -26,7 +26,7 @@ export function TestCutSection({ machineId, machineKind, canRecord }: { machineI
           ? ' Each part size is judged by its ISO 9013 class 2 band: the tolerance grows with the part size and the plate thickness, scaled by the target set’s value for 35–125 mm parts in 3.15–6.3 mm plate.'
           : ' Part sizes are judged against the ± tolerance of the target set.'}
       </Typography>
-      <Box sx={{ display: 'grid', gap: 3, gridTemplateColumns: { xs: '1fr', lg: canRecord ? 'minmax(320px, 5fr) 7fr' : '1fr' } }}>
+      <Box sx={{ display: 'grid', gap: 3, gridTemplateColumns: { xs: 'minmax(0, 1fr)', lg: canRecord ? 'minmax(320px, 5fr) minmax(0, 7fr)' : 'minmax(0, 1fr)' } }}>
         {canRecord && <TestCutForm machineId={machineId} machineKind={machineKind} onSaved={(c) => setSelectedId(c.id)} />}
         <Box sx={{ minWidth: 0 }}>
           {cut ? (
@@ -38,7 +38,7 @@ export function TestCutSection({ machineId, machineKind, canRecord }: { machineI
             <Typography color="text.secondary">No test cut yet.</Typography>
           )}
           {list.length > 1 && (
-            <TextField select label="Earlier cuts" value={cut?.id ?? ''} onChange={(e) => setSelectedId(e.target.value)} sx={{ mt: 2, minWidth: 280 }}>
+            <TextField select label="Earlier cuts" value={cut?.id ?? ''} onChange={(e) => setSelectedId(e.target.value)} sx={{ mt: 2, minWidth: { sm: 280 }, maxWidth: '100%' }}>
               {list.map((c) => (
                 <MenuItem key={c.id} value={c.id}>
                   {showDate(c.recordedAt)} · {c.status === 'within-target' ? 'within target' : 'outside target'}
