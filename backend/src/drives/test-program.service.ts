@@ -33,10 +33,7 @@ const TARGETS_SOURCE =
 
 /** An axis set up in inches or thou gets a program in inches (G20); any metric unit gets G21. */
 export const programUnitOf = (axisUnit: LengthUnit): ProgramUnit => (axisUnit === 'in' || axisUnit === 'thou' ? 'in' : 'mm');
-const axisUnitOf = (axis: AxisRow): LengthUnit => {
-  const u = (axis as AxisRow & { lengthUnit?: string }).lengthUnit;
-  return isLengthUnit(u) ? u : 'mm';
-};
+const axisUnitOf = (axis: AxisRow): LengthUnit => (isLengthUnit(axis.lengthUnit) ? axis.lengthUnit : 'mm');
 const tidy = (v: number) => Math.round(v * 1e6) / 1e6;
 
 /** The default targets of an axis in its own unit, rounded to a tenth of that unit, and in mm. */

@@ -18,7 +18,7 @@ function startPositions(axis: Axis, unit: LengthUnit): string[] {
   return [0.05, 0.5, 0.95].map((f) => String(+(Math.round(fromMm(axis.measuredTravelMm! * f, unit) / step) * step).toFixed(4)));
 }
 
-const axisUnit = (axis: Axis): LengthUnit => (axis as Axis & { lengthUnit?: LengthUnit }).lengthUnit ?? 'mm';
+const axisUnit = (axis: Axis): LengthUnit => axis.lengthUnit ?? 'mm';
 
 /**
  * Backlash entry: one row per position (both ends and the middle), the readings approached moving

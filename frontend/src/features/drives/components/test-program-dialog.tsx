@@ -23,7 +23,7 @@ export function TestProgramDialog({ axis, open, onClose }: { axis: Axis; open: b
   const [letter, setLetter] = useState(axis.letter ?? '');
   const [format, setFormat] = useState<'nc' | 'txt'>('nc');
   const [notes, setNotes] = useState('');
-  const [lengthUnit, setLengthUnit] = useState<LengthUnit>(() => (axis as Axis & { lengthUnit?: LengthUnit }).lengthUnit ?? 'mm');
+  const [lengthUnit, setLengthUnit] = useState<LengthUnit>(() => axis.lengthUnit ?? 'mm');
   const serverTargets = useTestTargets(axis.id);
   const download = useDownloadTestProgram(axis.id);
   const done = download.data;
