@@ -206,6 +206,21 @@ describe('frame checks in mm and in inches give the same results', () => {
     });
   });
 
+  it.each([
+    ['diagonal-checks', { sideX: 1000, sideY: 600, diagonal1: 1166, diagonal2: 1166, lengthUnit: null }],
+    ['diagonal-checks', { sideX: 1e6, sideY: 1e6, diagonal1: 1414213, diagonal2: 1414214, lengthUnit: 'um', resolution: 1e6 }],
+    ['diagonal-checks', { sideX: 1000, sideY: 600, diagonal1: 1166, diagonal2: 1166, resolution: 'fine' }],
+    ['bed-grids', { lengthUnit: 'in', readingUnit: 'um', points: [{ x: 1e6, y: 0, z: 1e6 }, { x: 0, y: 1e6, z: -1e6 }, { x: 0, y: 0, z: 0 }], resolution: 1e6 }],
+    ['bed-grids', { points: [{ x: 0, y: 0, z: 0 }, { x: 0, y: 10, z: 0 }, { x: 0, y: 20, z: 1 }] }],
+    ['bed-grids', { points: [{ x: 0, y: 0, z: 0 }, { x: 1, y: 0, z: 0 }, { x: 0, y: 1, z: 0 }], resolution: [1] }],
+    ['test-cuts', { lengthUnit: 'thou', plateThickness: 1e6, resolution: 1e6, nominal: { x: 1e6, y: 1e6, circle: 1 }, measured: { x: 1e6, y: 1e6, diagonal1: 1414213, diagonal2: 1414214, circleX: 1, circleY: 1 } }],
+    ['test-cuts', { plateThickness: { mm: 5 }, nominal: { x: 300, y: 300, circle: 100 }, measured: { x: 300, y: 300, diagonal1: 424, diagonal2: 424, circleX: 100, circleY: 100 } }],
+  ])('%s: odd input %j is answered without a server error', async (route, body) => {
+    const res = await ws.as.technician.post(`/api/machines/${plasma}/${route}`).send(body);
+    expect(res.status).toBeLessThan(500);
+    if (res.status === 400) expect(JSON.stringify(res.body.message)).toMatch(/lengthUnit|readingUnit|resolution|plateThickness|points|diagonal|sideX/);
+  });
+
   // The certificate is drawn from the approval's snapshot: the bed map and the test cut's table go in it.
   it('an approval snapshot holds the bed map and the test-cut table', async () => {
     const ws3 = await createTestWorkshop(app, 'Snapshot');
