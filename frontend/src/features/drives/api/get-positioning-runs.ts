@@ -1,13 +1,16 @@
 import { infiniteQueryOptions, useInfiniteQuery } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
 import type { LengthUnit } from '../../../lib/units';
-import { driveKeys, type PositioningRun } from '../types';
+import { driveKeys, type PositioningRun, type ResultWarning } from '../types';
 
 /** A run as the axis's list gives it: the three figures and their verdicts, no deviations (usePositioningRun has them). */
 export interface PositioningRunListItem {
   id: string;
   axisId: string;
-  unit: LengthUnit;
+  lengthUnit: LengthUnit;
+  readingUnit: LengthUnit;
+  /** Kept with the record: what a person should know about the result. */
+  warnings: ResultWarning[];
   targetCount: number;
   runCount: number;
   /** null when the stored result cannot be read (then `unreadable` says so). */

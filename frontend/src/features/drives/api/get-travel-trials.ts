@@ -1,13 +1,16 @@
 import { infiniteQueryOptions, useInfiniteQuery } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
 import type { LengthUnit } from '../../../lib/units';
-import { driveKeys, type TargetValue, type TravelTrial } from '../types';
+import { driveKeys, type TargetValue, type TravelTrial, type ResultWarning } from '../types';
 
 /** A trial as the axis's list gives it: the headline figures, no moves (useTravelTrial has them). */
 export interface TravelTrialListItem {
   id: string;
   axisId: string;
-  unit: LengthUnit;
+  lengthUnit: LengthUnit;
+  readingUnit: LengthUnit;
+  /** Kept with the record: what a person should know about the result. */
+  warnings: ResultWarning[];
   stepsPerMmUsed: number;
   throughOrigin: boolean;
   moveCount: number;

@@ -31,6 +31,7 @@ export function TravelTrialHistory({ trials, selectedId, onSelect, hasOlder, loa
             <TableCell align="right">Corrected</TableCell>
             <TableCell>Status</TableCell>
             <TableCell>Applied</TableCell>
+            <TableCell>Warnings</TableCell>
           </TableRow>
         </TableHead>
         <TableBody>
@@ -52,6 +53,7 @@ export function TravelTrialHistory({ trials, selectedId, onSelect, hasOlder, loa
                 <DriveStatusChip status={t.status} />
               </TableCell>
               <TableCell>{t.appliedAt ? `Yes, by ${t.appliedBy}` : 'No'}</TableCell>
+              <TableCell title={t.warnings.map((w) => w.message).join('\n')}>{t.warnings.length ? `${t.warnings.length} warning${t.warnings.length === 1 ? '' : 's'}` : '—'}</TableCell>
             </TableRow>
           ))}
         </TableBody>
