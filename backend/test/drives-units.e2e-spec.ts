@@ -190,4 +190,17 @@ describe('drives in mm and in inches', () => {
     close(res.body.result.thermalCorrectionMax, (23.1 - 11.5) * 1e-6 * 400 * 2, 1e-9);
     expect(codes).toContain('thermal-correction');
   });
+
+  it('changing only the unit an axis is set up in keeps every length; lengths sent with it are in it', async () => {
+    const id = await newAxis(ws, machineId, screwAxis('K'));
+    const res = await ws.as.technician.patch(`/api/axes/${id}`).send({ lengthUnit: 'in' });
+    expect(res.status).toBe(200);
+    expect(res.body).toMatchObject({ lengthUnit: 'in', measuredTravelMm: 920, maxFeedRateMmPerMin: 5000 });
+    expect(res.body.measuredTravel).toBe(Number((920 / IN).toPrecision(12)));
+    const travel = await ws.as.technician.patch(`/api/axes/${id}`).send({ measuredTravel: 36 });
+    close(travel.body.measuredTravelMm, 914.4); // 36 × 25.4
+    const both = await ws.as.technician.patch(`/api/axes/${id}`).send({ measuredTravel: 36, measuredTravelMm: 914.4 });
+    expect(both.status).toBe(400);
+    expect(JSON.stringify(both.body.message)).toMatch(/measuredTravel and measuredTravelMm/);
+  });
 });

@@ -1,5 +1,5 @@
 import { BadRequestException } from '@nestjs/common';
-import { axisLetter, describeDrive, missingForSpeedCheck, toDriveRecord } from './drive-record.js';
+import { axisLetter, describeDrive, driveInUnit, missingForSpeedCheck, toDriveRecord } from './drive-record.js';
 import { defaultTargets } from './test-program.js';
 
 describe('drive records', () => {
@@ -51,5 +51,21 @@ describe('default targets of a repeat-and-reverse program', () => {
     for (let i = 1; i < t.length; i++) expect(t[i]).toBeGreaterThan(t[i - 1]);
     const gaps = t.slice(1).map((v, i) => Math.round((v - t[i]) * 10));
     expect(new Set(gaps).size).toBeGreaterThan(1);
+  });
+
+  // unit_facts.json: 1 in = 25.4 mm exactly. An MXL belt's pitch is 0.08 in = 2.032 mm (from memory);
+  // a 1/2-10 Acme screw, 10 threads per inch, has a 0.1 in = 2.54 mm lead (common practice).
+  it('stores lengths typed in inches as mm and shows them back as typed; a lead may be threads per inch', () => {
+    const belt = toDriveRecord({ type: 'belt', beltPitch: 0.08, pulleyTeeth: 20 }, 'in');
+    expect(belt.beltPitch).toBeCloseTo(2.032, 12);
+    expect(driveInUnit(belt, 'in').beltPitch).toBe(0.08);
+    const acme = toDriveRecord({ type: 'screw', threadsPerInch: 10, nominalDiameter: 0.5 }, 'in');
+    expect(acme).toEqual({ type: 'screw', lead: 2.54, threadsPerInch: 10, nominalDiameter: 12.7 });
+    expect(driveInUnit(acme, 'in')).toMatchObject({ lead: 0.1, nominalDiameter: 0.5 });
+    expect(describeDrive(acme, 'in')).toBe('Screw Ø0.5 in, 10 threads per inch (lead 0.1 in)');
+    // The pinion module is millimetres by definition, whatever the axis's unit.
+    expect(toDriveRecord({ type: 'rack', pinionModule: 1.5, pinionTeeth: 20 }, 'in').pinionModule).toBe(1.5);
+    expect(() => toDriveRecord({ type: 'belt', beltPitch: 2, pulleyTeeth: 20, threadsPerInch: 5 })).toThrow(BadRequestException);
+    expect(() => toDriveRecord({ type: 'screw', threadsPerInch: -5 })).toThrow(BadRequestException);
   });
 });
