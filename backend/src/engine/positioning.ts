@@ -130,7 +130,9 @@ export function evaluatePositioning(input: PositioningInput): PositioningResult 
     if (run.direction !== 'up' && run.direction !== 'down') {
       throw new EngineInputError(`runs[${r}].direction must be up or down`, 'runs');
     }
-    const dev = requireNumberArray(`runs[${r}].deviations`, run.deviationsMm, 0).map((d, i) => d + (targets[i] - targets[0]) * thermal);
+    const raw = requireNumberArray(`runs[${r}].deviations`, run.deviationsMm, 0);
+    // Referred to 20 °C by the distance from the first target, where the scale reads zero (a copy: the input stays as given).
+    const dev = thermal === 0 ? raw : raw.map((d, i) => d + ((targets[i] ?? targets[0]) - targets[0]) * thermal);
     if (dev.length !== m) {
       throw new EngineInputError(`runs[${r}].deviations must have one value per target (${m}, got ${dev.length})`, 'runs');
     }
