@@ -6,7 +6,8 @@ import type { Rail } from '../types';
 /** The rail as built: length, profile, hole pitch and every hole position. */
 export function RailGeometry({ rail, partnerLabel, actions }: { rail: Rail; partnerLabel: string | null; actions?: ReactNode }) {
   const u = UNIT_LABELS[rail.lengthUnit];
-  const withMm = (v: number, mm: number) => (rail.lengthUnit === 'mm' ? `${v} mm` : `${v} ${u} (${Number(mm.toFixed(3))} mm)`);
+  // Six significant figures: typed values read as typed, a default converted from mm stays short.
+  const withMm = (v: number, mm: number) => (rail.lengthUnit === 'mm' ? `${Number(v.toPrecision(6))} mm` : `${Number(v.toPrecision(6))} ${u} (${Number(mm.toFixed(3))} mm)`);
   const facts: [string, string][] = [
     ['Axis', rail.axis],
     ['Length', withMm(rail.length, rail.lengthMm)],

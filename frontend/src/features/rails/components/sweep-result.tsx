@@ -49,7 +49,7 @@ export function SweepResult({ sweep, title = 'Saved sweep' }: { sweep: Sweep; ti
         {sweep.localSlope && (
           <>
             {' '}
-            Largest local slope <strong data-testid="local-slope">{sweep.localSlope.mmPerM.toFixed(3)} mm/m</strong> (between {showLength(sweep.localSlope.fromMm, lengthUnit)} and {showLength(sweep.localSlope.toMm, lengthUnit)}).
+            Largest local slope <strong data-testid="local-slope">{sweep.localSlope.mmPerM.toFixed(3)} mm/m</strong> (between {Number(fromMm(sweep.localSlope.fromMm, lengthUnit).toPrecision(6))} and {Number(fromMm(sweep.localSlope.toMm, lengthUnit).toPrecision(6))} {UNIT_LABELS[lengthUnit]} along the rail).
           </>
         )}
       </Alert>
