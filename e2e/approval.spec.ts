@@ -137,6 +137,9 @@ test.describe('readiness board to signed certificate', () => {
     await viewer.setViewportSize({ width: 1366, height: 900 });
     await viewer.goto(`/machines/${plasma.id}`);
     await expect(viewer.getByRole('table', { name: 'Required checks' })).toContainText('Outside target');
+    // A warning sits under the result it is about: the plasma X run has fewer targets than ISO 230-2 asks for.
+    const xRun = viewer.getByRole('table', { name: 'Required checks' }).getByRole('row').filter({ hasText: 'Repeat-and-reverse run' }).filter({ hasText: 'Axis X' });
+    await expect(xRun.getByRole('list', { name: 'Warnings' })).toContainText('ISO 230-2 asks for at least 5 targets');
     await snap(viewer, 'readiness-board-plasma');
 
     const admin = await as(browser, DEMO.admin);

@@ -83,7 +83,7 @@ test.describe('calculators page', () => {
     await page.getByLabel('Move unit').click();
     await page.getByRole('option', { name: 'in', exact: true }).click();
     await page.getByLabel('Commanded and measured moves').fill('20\t19.95');
-    await expect(trial.getByRole('row', { name: /Corrected steps per mm/ })).toContainText('80.20050 steps/mm');
+    await expect(trial.getByRole('row', { name: /Corrected steps per mm/ })).toContainText('80.2005 steps/mm');
     await expect(trial.getByRole('row', { name: /Corrected steps per inch/ })).toContainText('2037.093 steps/in');
     // A correction 25 times off (a measurement in inches typed as mm) is flagged, not quietly given.
     await page.getByLabel('Move unit').click();

@@ -10,6 +10,7 @@ import { seedDrives } from './drives.js';
 import { seedApprovals } from './approvals.js';
 import { seedEvidence } from './evidence.js';
 import { seedHolePatterns } from './hole-patterns.js';
+import { seedImperialRouter } from './imperial.js';
 
 /** The demo workshop, built through the product's own services so results match the engine. */
 export async function runDemoSeed(app: INestApplicationContext): Promise<SeedContext> {
@@ -22,6 +23,8 @@ export async function runDemoSeed(app: INestApplicationContext): Promise<SeedCon
   await seedDrives(ctx);
   // Each domain adds its demo records here, in dependency order.
   await seedHolePatterns(ctx);
+  // A third machine set up in inches end to end, as an inch shop would.
+  await seedImperialRouter(ctx);
   await seedEvidence(ctx);
   await seedApprovals(ctx); // last: signs off the router on everything above
   return ctx;
