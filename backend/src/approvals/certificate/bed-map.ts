@@ -26,7 +26,7 @@ export interface BedMapLayout {
 export function bedMapLayout(s: CheckSeries): BedMapLayout | null {
   const columns = [...new Set(s.lines.flatMap((l) => l.points.map((p) => p[0])).filter(Number.isFinite))].sort((a, b) => a - b);
   if (!columns.length || columns.length > BED_MAP_MAX_COLUMNS || !s.lines.length) return null;
-  const rows = s.lines.map((l) => ({ label: l.label, cells: new Map(l.points.filter(([x, y]) => Number.isFinite(x) && Number.isFinite(y)).map(([x, y]) => [x, y])) }));
+  const rows = s.lines.map((l) => ({ label: l.label, cells: new Map(l.points.filter(([x, y]) => Number.isFinite(x) && Number.isFinite(y)).map(([x, y]) => [x, clean(y)])) }));
   return { columns, rows, height: HEAD_H + rows.length * ROW_H + 22 };
 }
 
@@ -69,6 +69,10 @@ export function drawBedMap(doc: Doc, box: { x: number; y: number; w: number }, s
   write(doc, 'regular', 7, `${range}${target}. Darker is higher.`, box.x, y + 5, { width: box.w });
   doc.fillColor(INK);
 }
+
+// Heights taken from a fitted zone come back as 1e-18 where they are zero: nine decimals is far
+// below any gauge's resolution in any unit, and prints as the 0 it is.
+const clean = (v: number) => Number(v.toFixed(9)) || 0;
 
 const over = (l: BedMapLayout, limit: number) => l.rows.some((r) => [...r.cells.values()].some((v) => v > limit));
 

@@ -230,7 +230,7 @@ function charts(doc: Doc, checks: BoardCheck[], workArea: { x: number; y: number
   if (!charted.length) return para(doc, 'This machine had no rail, positioning, backlash, squareness, bed or test-cut results to chart.', 'regular', 9, MUTED);
   for (const c of charted) {
     const title = `${KIND_LABELS[c.kind]} \u2014 ${c.subject}`;
-    const s = c.series;
+    const s = c.series && withoutSubject(c.series, c.subject);
     const bed = s && c.kind === 'bed-grid' ? bedMapLayout(s) : null;
     const parts = s && c.kind === 'test-cut' ? partRows(s) : null;
     const sketch = !s && c.kind === 'diagonal-check' && c.result?.unit === 'mm/m';
@@ -248,6 +248,13 @@ function charts(doc: Doc, checks: BoardCheck[], workArea: { x: number; y: number
     else drawResultGauge(doc, box, c);
     doc.y = box.y + h + 10;
   }
+}
+
+/** A series title that repeats the subject ("Rail Y1 (left): residuals…") keeps only what it adds. */
+function withoutSubject(s: NonNullable<BoardCheck['series']>, subject: string) {
+  const t = s.title?.trim();
+  if (!t || !t.toLowerCase().startsWith(`${subject.toLowerCase()}:`)) return s;
+  return { ...s, title: t.slice(subject.length + 1).trim() };
 }
 
 function signature(doc: Doc, a: CertificateInput['approval']) {
