@@ -129,9 +129,11 @@ test.describe('frame and safety walk', () => {
   });
 
   test('the frame page on a phone (390 px) and a laptop (1280 px)', async ({ page }) => {
+    // Two page loads and six screenshots: more than one ordinary test's time.
+    test.setTimeout(180_000);
+    await signInAs(page, DEMO.technician);
     for (const [width, name] of [[390, 'phone'], [1280, 'laptop']] as const) {
       await page.setViewportSize({ width, height: 900 });
-      await signInAs(page, DEMO.technician);
       await openTab(page, 'Big plasma table', 'Frame');
       await expect(page.getByTestId('flatness-result')).toContainText('Height range');
       await expect(page.getByRole('form', { name: 'Test cut' }).getByLabel('Length unit')).toBeVisible();
@@ -151,7 +153,6 @@ test.describe('frame and safety walk', () => {
       await shoot(page, 'section[aria-labelledby="bed-grid-title"]', `frame-bed-grid-${name}`);
       await shoot(page, 'section[aria-labelledby="test-cut-title"]', `frame-test-cut-${name}`);
       await snap(page, `frame-tab-${name}`);
-      await page.context().clearCookies();
     }
   });
 
