@@ -21,6 +21,8 @@ async function blocking(page: Page, machineId: string): Promise<{ key: string; s
 
 test.describe('readiness board to signed certificate', () => {
   test('request refused, waivers, request, signature with password, certificate download', async ({ browser }) => {
+    // Three people's pages, a signature and a certificate: longer than one page's test on a busy machine.
+    test.slow();
     const tech = await as(browser, DEMO.technician);
     const created = await tech.request.post('/api/machines', { data: { name: 'Spindle test router', kind: 'router', workArea: { x: 600, y: 400 } } });
     expect(created.status()).toBe(201);

@@ -22,6 +22,8 @@ async function snapAtWidths(page: Page, name: string) {
 
 test.describe('the signed record', () => {
   test('approve, check the certificate signed out, reopen with a reason, see the change named', async ({ browser }) => {
+    // Three people's pages, a signature and a certificate: longer than one page's test on a busy machine.
+    test.slow();
     const tech = await as(browser, DEMO.technician);
     const owner = await as(browser, DEMO.owner);
     const created = await tech.request.post('/api/machines', { data: { name: 'Sealed bench router', kind: 'router', workArea: { x: 600, y: 400 } } });
