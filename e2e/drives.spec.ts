@@ -60,7 +60,7 @@ test.describe('drives', () => {
     await expect(y2.getByText('Outside target')).toBeVisible();
     await expect(y2).toContainText('-0.201 % scale error');
     await expect(axes.getByRole('row').filter({ hasText: /^Z/ })).toContainText('Screw Ø16 mm, lead 5 mm');
-    await expect(page.getByRole('region', { name: 'Travel envelope' })).toContainText('3000 × 1500 mm');
+    await expect(page.getByRole('region', { name: 'Travel envelope' })).toContainText('1500 × 3000 mm');
     // Viewers read but do not add axes.
     await expect(page.getByRole('button', { name: 'Add axis' })).toHaveCount(0);
     await snap(page, 'drives-tab-plasma-desktop');
