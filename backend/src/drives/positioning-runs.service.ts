@@ -59,10 +59,8 @@ export class PositioningRunsService implements OnModuleInit {
     for (let i = 1; i < dto.targets.length; i++) {
       if (!(dto.targets[i] > dto.targets[i - 1])) throw new BadRequestException([`targets must rise along the axis (targets[${i}] = ${dto.targets[i]} is not above ${dto.targets[i - 1]})`]);
     }
-    // Callers inside the server written before the two unit families may still send `unit` (HTTP
-    // refuses it): it named the deviations, with the targets in mm.
     const lengthUnit = dto.lengthUnit ?? 'mm';
-    const readingUnit = dto.readingUnit ?? dto.unit ?? 'mm';
+    const readingUnit = dto.readingUnit ?? 'mm';
     const targets = await this.targetsOf(actor, axis.machineId);
     const thermal = thermalReference({ machineTemperatureC: dto.machineTemperature, scaleTemperatureC: dto.scaleTemperature, scaleMaterial: dto.scaleMaterial });
     const result = evaluatePositioning({

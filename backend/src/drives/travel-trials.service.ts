@@ -65,12 +65,9 @@ export class TravelTrialsService implements OnModuleInit {
   async create(actor: SessionUser, axisId: string, dto: CreateTravelTrialDto) {
     const axis = await this.axes.findRow(actor, axisId);
     const stepsPerMmUsed = dto.stepsPerMmUsed ?? axis.stepsPerMm;
-    // Callers inside the server written before the two unit families may still send `unit` (HTTP
-    // refuses it): it named the measured moves only, with the commanded ones in mm.
-    const legacy = dto.unit && !dto.lengthUnit ? dto.unit : null;
     const lengthUnit = dto.lengthUnit ?? 'mm';
     const readingUnit = dto.readingUnit ?? 'mm';
-    const moves = dto.moves.map((m) => ({ commanded: m.commanded, measured: legacy ? toMm(m.measured, legacy) : m.measured }));
+    const moves = dto.moves.map((m) => ({ commanded: m.commanded, measured: m.measured }));
     const resolutionMm = resolutionMmOf(dto.instrumentResolution, readingUnit);
     const thermal = thermalReference({ machineTemperatureC: dto.machineTemperature, scaleTemperatureC: dto.scaleTemperature, scaleMaterial: dto.scaleMaterial });
     const theory = evaluateDrive(toEngineDrive(axis.drive, axis)).stepsPerMm;

@@ -29,8 +29,9 @@ export class CreatePositioningRunDto extends TemperatureFieldsDto {
   @ReadingUnitField()
   readingUnit?: LengthUnit;
 
+  /** The old single unit field: refused, naming lengthUnit and readingUnit. */
   @ReplacedUnitField()
-  unit?: LengthUnit;
+  unit?: undefined;
 
   /** Target positions along the axis, in lengthUnit, ascending. */
   @IsArray({ message: 'targets must be a list of numbers (in lengthUnit)' })

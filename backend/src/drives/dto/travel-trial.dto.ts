@@ -26,8 +26,9 @@ export class CreateTravelTrialDto extends TemperatureFieldsDto {
   @ReadingUnitField()
   readingUnit?: LengthUnit;
 
+  /** The old single unit field: refused, naming lengthUnit and readingUnit. */
   @ReplacedUnitField()
-  unit?: LengthUnit;
+  unit?: undefined;
 
   /** Steps per mm in the controller while the moves were made; the axis's value when absent. */
   @OptionalFinite('stepsPerMmUsed')
