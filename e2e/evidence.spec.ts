@@ -188,7 +188,7 @@ test.describe('evidence: photos and files', () => {
   test('a photo goes straight onto a rail from the rail page, and shows there and in the machine file', async ({ page }) => {
     await signInAs(page, DEMO.builder);
     const machineId = await newMachine(page.request, `Rail photo table ${Date.now()}`);
-    const rail = await page.request.post(`/api/machines/${machineId}/rails`, { data: { label: 'Y1 (left)', axis: 'Y1', lengthMm: 600, holePitchMm: 60, firstHoleMm: 30 } });
+    const rail = await page.request.post(`/api/machines/${machineId}/rails`, { data: { label: 'Y1 (left)', axis: 'Y1', lengthUnit: 'mm', length: 600, holePitch: 60, firstHole: 30 } });
     expect(rail.status()).toBe(201);
     const railId = (await rail.json()).id as string;
     await page.goto(`/machines/${machineId}/rails/${railId}`);

@@ -11,7 +11,7 @@ async function newRail(request: APIRequestContext, rail: { lengthMm: number; hol
   const machine = await request.post('/api/machines', { data: { name: `Indicator test ${Date.now()}`, kind: 'plasma', workArea: { x: 3000, y: 1500 } } });
   expect(machine.status()).toBe(201);
   const machineId = (await machine.json()).id as string;
-  const made = await request.post(`/api/machines/${machineId}/rails`, { data: { label: 'Y1 (left)', axis: 'Y1', profileSize: 20, ...rail } });
+  const made = await request.post(`/api/machines/${machineId}/rails`, { data: { label: 'Y1 (left)', axis: 'Y1', profileSize: 20, lengthUnit: 'mm', length: rail.lengthMm, holePitch: rail.holePitchMm, firstHole: rail.firstHoleMm } });
   expect(made.status()).toBe(201);
   return { machineId, railId: (await made.json()).id as string };
 }

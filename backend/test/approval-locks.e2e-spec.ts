@@ -17,7 +17,7 @@ const targets = [0, 100, 200, 300, 400];
 const run = (direction: 'up' | 'down', k: number) => ({ direction, deviations: targets.map((_, i) => (i + k) % 3) });
 const positioning = { readingUnit: 'um', targets, runs: [1, 2, 3, 4, 5].flatMap((k) => [run('up', k), run('down', k)]) };
 const diagonal = { sideX: 600, sideY: 400, diagonal1: Math.hypot(600, 400), diagonal2: Math.hypot(600, 400) };
-const bedGrid = { unit: 'mm', points: [0, 300, 600].flatMap((x) => [0, 200, 400].map((y) => ({ x, y, z: 0 }))) };
+const bedGrid = { lengthUnit: 'mm', readingUnit: 'mm', points: [0, 300, 600].flatMap((x) => [0, 200, 400].map((y) => ({ x, y, z: 0 }))) };
 const testCut = { nominal: { x: 300, y: 300, circle: 100 }, measured: { x: 300, y: 300, diagonal1: Math.hypot(300, 300), diagonal2: Math.hypot(300, 300), circleX: 100, circleY: 100 } };
 
 interface Route {

@@ -116,7 +116,7 @@ describe('stored rail, frame and bolt-down rows that cannot be read', () => {
     const body = { sideX: 1000, sideY: 600, diagonal1: 1166.2, diagonal2: 1166 };
     expect((await ws.as.builder.post(`/api/machines/${machineId}/diagonal-checks`).send(body)).status).toBe(201);
     const points = [0, 400].flatMap((y) => [0, 500].map((x) => ({ x, y, z: 0.01 })));
-    expect((await ws.as.builder.post(`/api/machines/${machineId}/bed-grids`).send({ unit: 'mm', rows: 2, columns: 2, points })).status).toBe(201);
+    expect((await ws.as.builder.post(`/api/machines/${machineId}/bed-grids`).send({ lengthUnit: 'mm', readingUnit: 'mm', rows: 2, columns: 2, points })).status).toBe(201);
     const cut = { nominal: { x: 300, y: 300, circle: 100 }, measured: { x: 300, y: 300, diagonal1: Math.hypot(300, 300), diagonal2: Math.hypot(300, 300), circleX: 100, circleY: 100 } };
     expect((await ws.as.technician.post(`/api/machines/${machineId}/test-cuts`).send(cut)).status).toBe(201);
     expect((await ws.as.builder.post(`/api/rails/${good}/bolt-downs`).send({ mode: 'line', readingUnit: 'mm' })).status).toBe(201);

@@ -8,7 +8,8 @@ import { ReadinessSummaryRepository } from './readiness-summary.repository.js';
 import { RecordsService, type RecordChange } from './records.service.js';
 
 /** Bump when the way checks are counted changes: every machine is recounted at the next start. */
-export const SUMMARY_VERSION = 1;
+// 2: every axis gained a backlash check, so every machine is counted again.
+export const SUMMARY_VERSION = 2;
 
 /** Record types whose changes never move a machine's readiness (no refresh for them). */
 const NO_READINESS_EFFECT = new Set(['evidence', 'bolt-down', 'approval', 'sign-in', 'person', 'password-link']);

@@ -1,6 +1,7 @@
 import type { PgColumn, PgTable } from 'drizzle-orm/pg-core';
 import {
   axes,
+  backlashChecks,
   bedGrids,
   boltDownHoles,
   boltDowns,
@@ -30,6 +31,7 @@ export const SIGNED_RECORD_KINDS = [
   'bed-grid',
   'test-cut',
   'safety-walk',
+  'backlash-check',
 ] as const;
 export type SignedRecordKind = (typeof SIGNED_RECORD_KINDS)[number];
 
@@ -71,4 +73,5 @@ export const SIGNED_RECORDS: Record<SignedRecordKind, SignedRecordSpec> = {
   'bed-grid': { table: bedGrids },
   'test-cut': { table: testCuts },
   'safety-walk': { table: safetyWalks, children: { name: 'answers', table: safetyAnswers, parent: safetyAnswers.walkId, orderBy: [safetyAnswers.itemKey, safetyAnswers.id] } },
+  'backlash-check': { table: backlashChecks },
 };

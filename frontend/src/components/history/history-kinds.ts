@@ -7,6 +7,7 @@ export const MACHINE_HISTORY_KINDS: [string, string][] = [
   ['axis', 'Axis'],
   ['travel-trial', 'Travel trial'],
   ['positioning-run', 'Positioning run'],
+  ['backlash-check', 'Backlash check'],
   ['diagonal-check', 'Squareness check'],
   ['bed-grid', 'Bed flatness'],
   ['test-cut', 'Test cut'],

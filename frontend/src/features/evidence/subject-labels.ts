@@ -7,6 +7,7 @@ export const SUBJECT_TYPE_LABELS: Record<string, string> = {
   axis: 'Axis',
   'travel-trial': 'Travel trial',
   'positioning-run': 'Repeat-and-reverse run',
+  'backlash-check': 'Backlash check',
   'diagonal-check': 'Diagonal check',
   'bed-grid': 'Bed grid',
   'test-cut': 'Test cut',

@@ -51,6 +51,7 @@ export const RECORD_KIND_LABELS: Record<string, string> = {
   'bolt-down': 'Bolt-down',
   'travel-trial': 'Travel trial',
   'positioning-run': 'Repeat-and-reverse run',
+  'backlash-check': 'Backlash check',
   'diagonal-check': 'Diagonal check',
   'bed-grid': 'Bed grid',
   'test-cut': 'Test cut',
