@@ -17,6 +17,13 @@ function messagesOf(body: unknown): string[] {
   return typeof m === 'string' ? [m] : [];
 }
 
+let noAnswerListener: (() => void) | null = null;
+
+/** Called whenever a request gets no answer at all (the offline support listens: lib/offline/connection.ts). */
+export function onNoAnswer(listener: () => void): void {
+  noAnswerListener = listener;
+}
+
 export async function apiFetch<T>(path: string, init: RequestInit & { json?: unknown } = {}): Promise<T> {
   const { json, headers, ...rest } = init;
   let res: Response;
@@ -28,6 +35,7 @@ export async function apiFetch<T>(path: string, init: RequestInit & { json?: unk
       body: json !== undefined ? JSON.stringify(json) : rest.body,
     });
   } catch {
+    noAnswerListener?.();
     throw new ApiError(0, 'The server could not be reached. Check the connection and try again.');
   }
   if (res.status === 204) return undefined as T;

@@ -7,6 +7,7 @@ import { LoadingState } from '../../components/states/loading-state';
 import { ErrorState } from '../../components/states/error-state';
 import { ErrorBoundary } from '../../components/states/error-boundary';
 import { paths } from '../../config/paths';
+import { WaitingEntriesBanner } from '../../components/offline/waiting-entries-banner';
 
 /** Every signed-in page: sign-in first, then the frame around the page. */
 export function SignedInLayout() {
@@ -22,6 +23,7 @@ export function SignedInLayout() {
   if (!me.data) return <Navigate to={`${paths.signIn}?next=${encodeURIComponent(location.pathname + location.search)}`} replace />;
   return (
     <AppFrame user={me.data}>
+      <WaitingEntriesBanner meId={me.data.id} />
       <ErrorBoundary key={location.pathname}>
         <Suspense fallback={<LoadingState />}>
           <Outlet />

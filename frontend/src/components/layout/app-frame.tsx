@@ -1,7 +1,8 @@
 import { useState, type ReactNode } from 'react';
+import Snackbar from '@mui/material/Snackbar';
 import { NavLink, useNavigate } from 'react-router-dom';
 import {
-  AppBar, Box, Chip, Divider, Drawer, IconButton, List, ListItemButton, ListItemIcon, ListItemText, Toolbar, Tooltip, Typography, useMediaQuery,
+  Alert, AppBar, Box, Chip, Divider, Drawer, IconButton, List, ListItemButton, ListItemIcon, ListItemText, Toolbar, Tooltip, Typography, useMediaQuery,
 } from '@mui/material';
 import { useTheme } from '@mui/material/styles';
 import MenuIcon from '@mui/icons-material/Menu';
@@ -67,13 +68,16 @@ export function AppFrame({ user, children }: { user: User; children: ReactNode }
             <IconButton
               color="inherit"
               aria-label="Sign out"
-              onClick={() => logout.mutate(undefined, { onSettled: () => navigate(paths.signIn) })}
+              onClick={() => logout.mutate(undefined, { onSuccess: () => navigate(paths.signIn) })}
             >
               <LogoutOutlined />
             </IconButton>
           </Tooltip>
         </Toolbar>
       </AppBar>
+      <Snackbar open={logout.isError && !(logout.error as { status?: number } | null)?.status} onClose={() => logout.reset()} anchorOrigin={{ vertical: 'top', horizontal: 'center' }}>
+        <Alert severity="warning" onClose={() => logout.reset()} role="alert">{logout.error?.message}</Alert>
+      </Snackbar>
       <Drawer
         variant={wide ? 'permanent' : 'temporary'}
         open={wide || open}

@@ -15,7 +15,8 @@ export function useLogin() {
   return useMutation({
     mutationFn: login,
     onSuccess: ({ user }) => {
-      qc.clear();
+      // What the last person saw goes; entries still waiting to be sent stay (each with its author).
+      qc.removeQueries({ predicate: (q) => q.queryKey[0] !== authKeys.me[0] || q.queryKey[1] !== authKeys.me[1] });
       qc.setQueryData(authKeys.me, user);
     },
   });

@@ -60,7 +60,7 @@ export function SafetyWalkPanel({ machineId }: { machineId: string }) {
             This walk is part of an approved commissioning record and can no longer be changed.
           </Alert>
         )}
-        {answer.error && <Alert severity="error" sx={{ mt: 1.5 }} onClose={() => answer.reset()}>{(answer.error as Error).message}</Alert>}
+        {answer.error && <Alert severity="error" sx={{ mt: 1.5 }} onClose={() => answer.reset()}>{answer.error.message}</Alert>}
         {w.sections.map((s) => (
           <Box key={s.id} component="section" aria-label={s.label} sx={{ mt: 2.5 }}>
             <Typography variant="h4" component="h4" sx={{ mb: 0.5 }}>{s.label}</Typography>
@@ -70,8 +70,8 @@ export function SafetyWalkPanel({ machineId }: { machineId: string }) {
                   key={item.id}
                   item={item}
                   canAnswer={canAnswer}
-                  busy={answer.isPending && answer.variables?.itemId === item.id}
-                  onAnswer={(a, note) => answer.mutate({ itemId: item.id, answer: a, note: note.trim() || undefined })}
+                  busy={answer.sendingItemId === item.id}
+                  onAnswer={(a, note) => answer.mutate({ itemId: item.id, itemText: item.text, answer: a, note: note.trim() || undefined })}
                 />
               ))}
             </Stack>
