@@ -295,9 +295,20 @@ describe('travel trials and repeat-and-reverse runs', () => {
     const runCheck = checks.find((c) => c.key === `positioning:${x}`)!;
     expect(runCheck.status).toBe('within-target');
     // chart series in µm: the constructed example's mean up at 125 mm is 5 µm, mean down 1 µm
-    expect(runCheck.series!.lines.map((l) => l.label)).toEqual(['Mean up', 'Mean down']);
-    expect(runCheck.series!.lines[0].points[1][1]).toBeCloseTo(iso.per_target[1].mean_up, 9);
-    expect(runCheck.series!.lines[1].points[1][1]).toBeCloseTo(iso.per_target[1].mean_down, 9);
+    expect(runCheck.series!.lines.map((l) => l.label)).toEqual(['Mean up', 'Mean up + 2s', 'Mean up − 2s', 'Mean down', 'Mean down + 2s', 'Mean down − 2s']);
+    const line = (label: string) => runCheck.series!.lines.find((l) => l.label === label)!.points[1][1];
+    expect(line('Mean up')).toBeCloseTo(iso.per_target[1].mean_up, 9);
+    expect(line('Mean down')).toBeCloseTo(iso.per_target[1].mean_down, 9);
+    // The ±2s band of ISO 230-2 (the reference example's s↑ = s↓ = 0.7071 µm at 125 mm).
+    expect(line('Mean up + 2s')).toBeCloseTo(iso.per_target[1].mean_up + 2 * iso.per_target[1].s_up, 9);
+    expect(line('Mean down − 2s')).toBeCloseTo(iso.per_target[1].mean_down - 2 * iso.per_target[1].s_down, 9);
+    // Limits: a band as wide as the accuracy target, centred on zero.
+    const sets = (await ws.as.viewer.get('/api/target-sets')).body as { id: string; targets: Record<string, { value: number; unit: string }> }[];
+    const accuracy = sets.find((set) => set.id === ref.targetSetId)!.targets.positioningAccuracy;
+    const umPer: Record<string, number> = { mm: 1000, um: 1, in: 25400, thou: 25.4 }; // 1 in = 25.4 mm exactly
+    const [upper, lower] = runCheck.series!.limits!;
+    expect(upper.value - lower.value).toBeCloseTo(accuracy.value * umPer[accuracy.unit], 9);
+    expect(upper.value + lower.value).toBeCloseTo(0, 12);
     // The Drives tab's list carries the same statuses.
     const list = await ws.as.viewer.get(`/api/machines/${m}/axes`);
     expect(list.body.find((a: { id: string }) => a.id === x).checks.travelTrial).toMatchObject({ status: 'within-target', recordId: within.body.id });

@@ -217,9 +217,20 @@ export class DriveChecksService implements OnModuleInit {
                 title: 'Mean deviation at each target, approached up and down',
                 x: { label: 'Target', unit: 'mm' },
                 y: { label: 'Mean deviation', unit: 'um' },
+                // ISO 230-2: the accuracy A spans the lowest mean − 2s to the highest mean + 2s
+                // over both directions, so the band edges are drawn beside the means; the limits
+                // centre a band as wide as the accuracy target on zero.
                 lines: [
                   { label: 'Mean up', points: perTarget.map((p): [number, number] => [p.targetMm, p.meanUpMm * 1000]) },
+                  { label: 'Mean up + 2s', points: perTarget.map((p): [number, number] => [p.targetMm, (p.meanUpMm + 2 * p.sUpMm) * 1000]) },
+                  { label: 'Mean up − 2s', points: perTarget.map((p): [number, number] => [p.targetMm, (p.meanUpMm - 2 * p.sUpMm) * 1000]) },
                   { label: 'Mean down', points: perTarget.map((p): [number, number] => [p.targetMm, p.meanDownMm * 1000]) },
+                  { label: 'Mean down + 2s', points: perTarget.map((p): [number, number] => [p.targetMm, (p.meanDownMm + 2 * p.sDownMm) * 1000]) },
+                  { label: 'Mean down − 2s', points: perTarget.map((p): [number, number] => [p.targetMm, (p.meanDownMm - 2 * p.sDownMm) * 1000]) },
+                ],
+                limits: [
+                  { label: `+A/2 (accuracy target ${t.positioningAccuracy.target.value} ${t.positioningAccuracy.target.unit})`, value: (t.positioningAccuracy.base / 2) * 1000 },
+                  { label: '−A/2', value: (-t.positioningAccuracy.base / 2) * 1000 },
                 ],
               },
             }
