@@ -58,7 +58,7 @@ export class BedGridsService {
     await this.records.checkRecorded(
       actor,
       { machineId: machine.id, kind: BED_GRID, recordType: BED_GRID, recordId: row.id, status: response.status },
-      `Bed grid of ${points.length} points: ${judged.label.toLowerCase()} ${show(judged.valueMm, readingUnit)}, ${response.status.replace('-', ' ')}`,
+      `Bed grid of ${points.length} points: ${lowerFirst(judged.label)} ${show(judged.valueMm, readingUnit)}, ${response.status.replace('-', ' ')}`,
     );
     return response;
   }
@@ -143,7 +143,7 @@ export class BedGridsService {
 export function bedMapSeries(r: BedGridResult, row: Pick<BedGridRow, 'lengthUnit' | 'readingUnit'>, t: TargetOf): CheckSeries {
   const { lengthUnit, readingUnit } = row;
   return {
-    title: `Bed map: ${r.judged.label.toLowerCase()}, ${r.rows} rows by ${r.columns} columns`,
+    title: `Bed map: ${lowerFirst(r.judged.label)}, ${r.rows} rows by ${r.columns} columns`,
     x: { label: 'X position', unit: lengthUnit },
     y: { label: 'Height above the lowest of the judged zone', unit: readingUnit },
     lines: rowsOf(r.points).map(([n, pts]) => ({
@@ -159,3 +159,6 @@ function rowsOf(points: BedGridPointResult[]): [number, BedGridPointResult[]][] 
   for (const p of points) byRow.set(p.row, [...(byRow.get(p.row) ?? []), p]);
   return [...byRow.entries()].sort((a, b) => a[0] - b[0]).map(([n, pts]) => [n, pts.sort((a, b) => a.xMm - b.xMm)]);
 }
+
+/** "Minimum-zone flatness (ISO 1101)" → "minimum-zone flatness (ISO 1101)": only the first letter, so names keep their capitals. */
+const lowerFirst = (text: string) => text.charAt(0).toLowerCase() + text.slice(1);
