@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { Alert, Box, Button, Dialog, DialogActions, DialogContent, DialogTitle, MenuItem, Stack, TextField, ToggleButton, ToggleButtonGroup, Typography } from '@mui/material';
 import { UnitFamilySelect } from '../../../components/form/unit-select';
-import { UNIT_LABELS, type LengthUnit } from '../../../lib/units';
+import { fromMm, UNIT_LABELS, type LengthUnit } from '../../../lib/units';
 import { useDownloadTestProgram } from '../api/download-test-program';
 import { useTestTargets } from '../api/test-program-targets';
 import type { Axis } from '../types';
@@ -43,7 +43,8 @@ export function TestProgramDialog({ axis, open, onClose }: { axis: Axis; open: b
     download.reset();
     onClose();
   };
-  const defaultFeed = Math.min(1000, axis.maxFeedRate ?? 1000);
+  // The program's own default: 1000 mm/min, or the axis's fastest feed if lower, in the program's unit.
+  const defaultFeed = +fromMm(Math.min(1000, axis.maxFeedRateMmPerMin ?? 1000), lengthUnit).toPrecision(4);
   const lu = UNIT_LABELS[lengthUnit];
   const st = serverTargets.data;
   const targetsHint = st ? (st.targets.length ? `Blank: ${st.targets.join(', ')} ${UNIT_LABELS[st.lengthUnit]} - the same targets the entry grid offers (about five per metre, unevenly spaced)` : st.reason ?? '') : 'Loading the default targets…';
@@ -69,7 +70,7 @@ export function TestProgramDialog({ axis, open, onClose }: { axis: Axis; open: b
           </Typography>
           <UnitFamilySelect family="length" label="Values below in" value={lengthUnit} onChange={setLengthUnit} />
           <Box sx={grid}>
-            <NumberInput label="Feed rate" unit={`${lu}/min`} value={feed} onChange={setFeed} helperText={`Blank: ${defaultFeed} mm/min`} />
+            <NumberInput label="Feed rate" unit={`${lu}/min`} value={feed} onChange={setFeed} helperText={`Blank: ${defaultFeed} ${lu}/min`} />
             <NumberInput label="Overrun" unit={lu} value={overrun} onChange={setOverrun} helperText="Past the target before the approach; blank: 5 mm" />
             {kind === 'positioning' ? (
               <>
