@@ -1,4 +1,5 @@
 import { useState } from 'react';
+import { positionText } from '../utils/position-text';
 import { Alert, Box, LinearProgress, Paper, Typography } from '@mui/material';
 import { BoltDownChart } from '../../../components/charts/bolt-down-chart';
 import { UNIT_LABELS } from '../../../lib/units';
@@ -71,7 +72,7 @@ export function BoltDownGuide({ bd, canRecord, typicalBoltSize }: Props) {
             <Paper sx={{ p: { xs: 2, md: 3 } }} aria-label="Next hole">
               <Typography color="text.secondary">Next to fix</Typography>
               <Typography variant="h2" component="h2" sx={{ mb: 0.5 }}>
-                Hole {hole.index + 1} · {hole.position} mm
+                Hole {hole.index + 1} · {positionText(hole.position, bd.lengthUnit)}
               </Typography>
               <Typography sx={{ fontSize: '1.6rem', fontWeight: 500 }}>Aim {hole.target === null ? 'any reading (sets the datum)' : signed(hole.target, bd.readingUnit)}</Typography>
               <Alert severity="info" sx={{ mt: 2 }}>

@@ -1,4 +1,5 @@
 import { useRef, useState, type FormEvent, type KeyboardEvent } from 'react';
+import { positionIn, positionText } from '../utils/position-text';
 import { Alert, Box, Button, MenuItem, Paper, Stack, Table, TableBody, TableCell, TableHead, TableRow, TextField, Typography } from '@mui/material';
 import { ApiError } from '../../../lib/api-client';
 import { UNIT_LABELS } from '../../../lib/units';
@@ -46,7 +47,7 @@ export function FinalSweepForm({ bd, typicalBoltSize, waiting }: Props) {
     e.preventDefault();
     const bad = readings.findIndex((r) => parseReading(r) === null);
     if (bad >= 0) {
-      setProblem(`The reading at ${bd.holes[bad].position} mm is not a number`);
+      setProblem(`The reading at ${positionText(bd.holes[bad].position, bd.lengthUnit)} is not a number`);
       inputs.current[bad]?.focus();
       return;
     }
@@ -117,7 +118,7 @@ export function FinalSweepForm({ bd, typicalBoltSize, waiting }: Props) {
           <TableHead>
             <TableRow>
               <TableCell>Hole</TableCell>
-              <TableCell align="right">Station (mm)</TableCell>
+              <TableCell align="right">Station ({UNIT_LABELS[bd.lengthUnit]})</TableCell>
               <TableCell>Reading ({unit})</TableCell>
             </TableRow>
           </TableHead>
@@ -125,7 +126,7 @@ export function FinalSweepForm({ bd, typicalBoltSize, waiting }: Props) {
             {bd.holes.map((h, i) => (
               <TableRow key={h.index}>
                 <TableCell>{h.index + 1}</TableCell>
-                <TableCell align="right">{h.position}</TableCell>
+                <TableCell align="right">{positionIn(h.position, bd.lengthUnit)}</TableCell>
                 <TableCell sx={{ py: 0.5 }}>
                   <TextField
                     inputRef={(el: HTMLInputElement | null) => {
@@ -135,7 +136,7 @@ export function FinalSweepForm({ bd, typicalBoltSize, waiting }: Props) {
                     onChange={(e) => setReadings((r) => r.map((v, k) => (k === i ? e.target.value : v)))}
                     onKeyDown={onKey(i)}
                     error={parseReading(readings[i]) === null}
-                    slotProps={{ htmlInput: { inputMode: 'decimal', 'aria-label': `Final reading at ${h.position} mm` } }}
+                    slotProps={{ htmlInput: { inputMode: 'decimal', 'aria-label': `Final reading at ${positionText(h.position, bd.lengthUnit)}` } }}
                     sx={{ width: 140 }}
                   />
                 </TableCell>

@@ -1,4 +1,5 @@
 import { useState, type FormEvent } from 'react';
+import { positionText } from '../utils/position-text';
 import { Alert, Box, Button, Chip, Paper, Stack, TextField, Typography } from '@mui/material';
 import CheckOutlined from '@mui/icons-material/CheckOutlined';
 import { IndicatorPanel } from '../../../components/indicator-input/indicator-panel';
@@ -48,7 +49,7 @@ export function HoleEntryPanel({ bd, hole, isNext, refusal, onFixed, onRefused }
     enterMovesOn: false,
     place: (t) => {
       typeIn(t);
-      return { cell: 'reading', label: `${holeName(hole.index).toLowerCase()} at ${hole.position} mm, not fixed yet`, undo: () => typeIn('') };
+      return { cell: 'reading', label: `${holeName(hole.index).toLowerCase()} at ${positionText(hole.position, bd.lengthUnit)}, not fixed yet`, undo: () => typeIn('') };
     },
   });
 
@@ -81,7 +82,7 @@ export function HoleEntryPanel({ bd, hole, isNext, refusal, onFixed, onRefused }
         <Typography variant="h2" component="h2">
           {holeName(hole.index)}
         </Typography>
-        <Typography color="text.secondary">{hole.position} mm from the rail start</Typography>
+        <Typography color="text.secondary">{positionText(hole.position, bd.lengthUnit)} from the rail start</Typography>
         {isNext ? <Chip size="small" color="primary" label="Next in the order" /> : <Chip size="small" variant="outlined" label={`No. ${hole.order + 1} in the order`} />}
         {hole.fixed && <Chip size="small" color="success" variant="outlined" label={`Fixed at ${signed(hole.reading, bd.readingUnit)}`} />}
       </Stack>

@@ -1,4 +1,5 @@
 import { Chip, Paper, Table, TableBody, TableCell, TableContainer, TableHead, TableRow, Tooltip, Typography } from '@mui/material';
+import { positionIn } from '../utils/position-text';
 import CloudUploadOutlined from '@mui/icons-material/CloudUploadOutlined';
 import CheckCircleOutlined from '@mui/icons-material/CheckCircleOutlined';
 import { UNIT_LABELS } from '../../../lib/units';
@@ -39,7 +40,7 @@ export function HolesTable({ bd, holes, nextHole, selected, onSelect }: Props) {
           <TableRow>
             <TableCell>Order</TableCell>
             <TableCell>Hole</TableCell>
-            <TableCell align="right">Position (mm)</TableCell>
+            <TableCell align="right">Position ({UNIT_LABELS[bd.lengthUnit]})</TableCell>
             <TableCell align="right">Aim ({unit})</TableCell>
             <TableCell align="right">Reading ({unit})</TableCell>
             <TableCell align="right">Difference ({unit})</TableCell>
@@ -58,7 +59,7 @@ export function HolesTable({ bd, holes, nextHole, selected, onSelect }: Props) {
             >
               <TableCell>{h.order + 1}</TableCell>
               <TableCell>{h.index + 1}</TableCell>
-              <TableCell align="right">{h.position}</TableCell>
+              <TableCell align="right">{positionIn(h.position, bd.lengthUnit)}</TableCell>
               <TableCell align="right">{h.target === null ? '—' : signed(h.target, bd.readingUnit).replace(` ${unit}`, '')}</TableCell>
               <TableCell align="right">{h.reading === null ? '—' : signed(h.reading, bd.readingUnit).replace(` ${unit}`, '')}</TableCell>
               <TableCell align="right" sx={{ color: h.onTarget === false ? '#8a5a00' : h.onTarget ? 'success.main' : undefined, fontWeight: h.difference !== null ? 500 : undefined }}>
