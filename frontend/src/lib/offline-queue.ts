@@ -1,4 +1,5 @@
 import { ApiError, apiFetch } from './api-client';
+import { newClientId } from './client-id';
 
 /**
  * Writes typed at the machine must survive workshop wifi dropping out. Every write carries an id
@@ -54,15 +55,8 @@ const MAX_BACKOFF_MS = 15_000;
 // A request on a wifi link that dropped can hang for minutes; give up on it and try again later.
 const REQUEST_TIMEOUT_MS = 12_000;
 
-/** A uuid v4; crypto.randomUUID exists only on https or localhost, a tablet on the LAN may use http. */
-export function newWriteId(): string {
-  if (typeof crypto.randomUUID === 'function') return crypto.randomUUID();
-  const b = crypto.getRandomValues(new Uint8Array(16));
-  b[6] = (b[6] & 0x0f) | 0x40;
-  b[8] = (b[8] & 0x3f) | 0x80;
-  const h = [...b].map((x) => x.toString(16).padStart(2, '0')).join('');
-  return `${h.slice(0, 8)}-${h.slice(8, 12)}-${h.slice(12, 16)}-${h.slice(16, 20)}-${h.slice(20)}`;
-}
+/** A uuid v4 made in the browser. */
+export const newWriteId = (): string => newClientId();
 
 /** No answer, a server fault, or a lapsed session: worth sending again later. */
 export function isRetryable(error: unknown): boolean {

@@ -1,6 +1,7 @@
 import { onlineManager, type QueryClient, type QueryKey } from '@tanstack/react-query';
 import { ApiError, apiFetch, onNoAnswer } from '../api-client';
 import { noteNoAnswer } from './connection';
+import { newClientId } from '../client-id';
 import { setSessionOwner, whenSignedInAs } from './session-owner';
 
 /**
@@ -70,15 +71,8 @@ export function registerCommands(client: QueryClient): void {
   });
 }
 
-/** A fresh key for one entry; crypto.randomUUID exists only on https or localhost, a tablet on the LAN may use http. */
-export function newCommandKey(): string {
-  if (typeof crypto.randomUUID === 'function') return crypto.randomUUID();
-  const b = crypto.getRandomValues(new Uint8Array(16));
-  b[6] = (b[6] & 0x0f) | 0x40;
-  b[8] = (b[8] & 0x3f) | 0x80;
-  const h = [...b].map((x) => x.toString(16).padStart(2, '0')).join('');
-  return `${h.slice(0, 8)}-${h.slice(8, 12)}-${h.slice(12, 16)}-${h.slice(16, 20)}-${h.slice(20)}`;
-}
+/** A fresh key for one entry. */
+export const newCommandKey = (): string => newClientId();
 
 export const isOnline = () => onlineManager.isOnline();
 
