@@ -1,10 +1,11 @@
 import { Box, Button, Chip, Paper, Table, TableBody, TableCell, TableContainer, TableHead, TableRow, Typography } from '@mui/material';
 import EditOutlined from '@mui/icons-material/EditOutlined';
+import ContentCopyOutlined from '@mui/icons-material/ContentCopyOutlined';
 import { REFERENCE_WORDS, UNIT_WORDS, type TargetSet } from '../types';
 import { TargetSetUsers } from './target-set-users';
 
 /** One target set: every target with its value, unit and where the value came from. */
-export function TargetSetCard({ set, canEdit, onEdit }: { set: TargetSet; canEdit: boolean; onEdit: () => void }) {
+export function TargetSetCard({ set, canEdit, onEdit, onCopy }: { set: TargetSet; canEdit: boolean; onEdit: () => void; onCopy: () => void }) {
   const entries = Object.entries(set.targets);
   return (
     <Paper component="section" aria-label={set.name} sx={{ p: { xs: 1.5, sm: 2.5 } }}>
@@ -16,9 +17,14 @@ export function TargetSetCard({ set, canEdit, onEdit }: { set: TargetSet; canEdi
           {set.description && <Typography color="text.secondary">{set.description}</Typography>}
         </Box>
         {canEdit ? (
-          <Button startIcon={<EditOutlined />} onClick={onEdit} aria-label={`Edit ${set.name}`}>
-            Edit targets
-          </Button>
+          <Box sx={{ display: 'flex', gap: 1 }}>
+            <Button startIcon={<EditOutlined />} onClick={onEdit} aria-label={`Edit ${set.name}`} sx={{ minHeight: 44 }}>
+              Edit or rename
+            </Button>
+            <Button startIcon={<ContentCopyOutlined />} onClick={onCopy} aria-label={`Copy ${set.name}`} sx={{ minHeight: 44 }}>
+              Copy
+            </Button>
+          </Box>
         ) : (
           <Chip label="Read only" size="small" variant="outlined" />
         )}
