@@ -105,7 +105,8 @@ test.describe('indicator input', () => {
     const sweeps = await (await page.request.get(`/api/rails/${railId}/sweeps`)).json();
     const saved = (Array.isArray(sweeps) ? sweeps : sweeps.items)[0];
     const full = await (await page.request.get(`/api/sweeps/${saved.id}`)).json();
-    expect(full.unit).toBe('thou');
+    expect(full.readingUnit).toBe('thou');
+    expect(full.lengthUnit).toBe('mm');
     expect(full.stations).toEqual([
       { position: 50, reading: 0.012 },
       { position: 150, reading: -0.004 },
