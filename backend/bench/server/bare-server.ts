@@ -53,7 +53,7 @@ function actorOf(headers: Record<string, unknown>) {
 }
 
 interface SweepBody {
-  unit: LengthUnit;
+  readingUnit: LengthUnit;
   phase: string;
   stations: { position: number; reading: number }[];
 }
@@ -70,19 +70,19 @@ fastify.post<{ Params: { id: string }; Body: SweepBody }>('/bare/rails/:id/sweep
     const rail = rails[0];
     const positionsMm = body.stations.map((s) => s.position);
     const readingsRaw = body.stations.map((s) => s.reading);
-    const readingsMm = arrayToMm(readingsRaw, body.unit);
+    const readingsMm = arrayToMm(readingsRaw, body.readingUnit);
     const fitted = evaluateStraightness({ positionsMm, readingsMm });
     const result = { leastSquares: line(fitted.leastSquares), minimumZone: line(fitted.minimumZone), endPoint: line(fitted.endPoint) };
     const { rows: sets } = await c.query('select targets from target_sets where workshop_id = $1 and id = $2', [actor.workshopId, rail.target_set_id]);
     const target = (sets[0].targets as Record<string, TargetValue>).railStraightness;
     const status = result.leastSquares.straightness <= targetInBaseUnit(target) ? 'within-target' : 'outside-target';
     const { rows } = await c.query(
-      `insert into rail_sweeps (workshop_id, machine_id, rail_id, unit, positions_mm, readings_raw, readings_mm, phase, taken_by, result, status, target, created_by_id)
+      `insert into rail_sweeps (workshop_id, machine_id, rail_id, reading_unit, positions_mm, readings_raw, readings_mm, phase, taken_by, result, status, target, created_by_id)
        values ($1, $2, $3, $4, $5, $6, $7, $8, $9, $10, $11, $12, $13) returning id, taken_at, created_at`,
-      [actor.workshopId, rail.machine_id, rail.id, body.unit, JSON.stringify(positionsMm), JSON.stringify(readingsRaw), JSON.stringify(readingsMm), body.phase, actor.name, JSON.stringify(result), status, JSON.stringify(target), actor.id],
+      [actor.workshopId, rail.machine_id, rail.id, body.readingUnit, JSON.stringify(positionsMm), JSON.stringify(readingsRaw), JSON.stringify(readingsMm), body.phase, actor.name, JSON.stringify(result), status, JSON.stringify(target), actor.id],
     );
     await c.query(AUDIT_AND_TOUCH, [actor.workshopId, rail.machine_id, 'rail-sweep', rows[0].id, 'recorded', `Sweep of rail ${rail.label}`, JSON.stringify({ status }), actor.id, actor.name]);
-    return reply.status(201).send({ id: rows[0].id, railId: rail.id, unit: body.unit, positionsMm, readingsRaw, readingsMm, result, status, target, takenAt: rows[0].taken_at, createdAt: rows[0].created_at });
+    return reply.status(201).send({ id: rows[0].id, railId: rail.id, readingUnit: body.readingUnit, lengthUnit: 'mm', positionsMm, readingsRaw, readingsMm, result, status, target, takenAt: rows[0].taken_at, createdAt: rows[0].created_at });
   });
 });
 
@@ -117,7 +117,7 @@ fastify.put<{ Params: { id: string; index: string }; Body: HoleBody }>('/bare/bo
          fix_seq = excluded.fix_seq, fixed_at = excluded.fixed_at, fixed_by_id = excluded.fixed_by_id, fixed_by_name = excluded.fixed_by_name,
          last_write_id = excluded.last_write_id, updated_at = excluded.updated_at
        returning *`,
-      [writeId, actor.workshopId, bd.id, `hole:${holeIndex}`, newFix ? 1 : 0, holeIndex, reading, toMm(reading, bd.unit), fixed, keptSeq, fixed ? actor.id : null, fixed ? actor.name : null],
+      [writeId, actor.workshopId, bd.id, `hole:${holeIndex}`, newFix ? 1 : 0, holeIndex, reading, toMm(reading, bd.reading_unit), fixed, keptSeq, fixed ? actor.id : null, fixed ? actor.name : null],
     );
     await c.query(AUDIT_AND_TOUCH, [actor.workshopId, bd.machine_id, 'bolt-down', bd.id, 'updated', `Rail: hole ${holeIndex + 1} written`, JSON.stringify({ hole: holeIndex, reading, fixed, writeId }), actor.id, actor.name]);
     const all = [...holes.filter((h) => h.hole_index !== holeIndex), ...written];

@@ -38,12 +38,12 @@ async function json<T>(ctx: BenchContext, method: string, path: string, body?: u
 }
 
 const positions = [0, 100, 200, 300, 400, 500, 600, 700, 800, 900];
-const sweep = (offset: number) => ({ unit: 'mm', phase: 'as-left', datum: 'Frame face', stations: positions.map((position, i) => ({ position, reading: offset + (i % 3) * 0.001 })) });
+const sweep = (offset: number) => ({ readingUnit: 'mm', lengthUnit: 'mm', phase: 'as-left', datum: 'Frame face', stations: positions.map((position, i) => ({ position, reading: offset + (i % 3) * 0.001 })) });
 
 /** A machine as a builder leaves it mid-commissioning: two partner rails swept once, one screw axis. */
 async function benchMachine(ctx: BenchContext): Promise<{ machineId: string; railId: string }> {
   const machine = await json<{ id: string }>(ctx, 'POST', '/api/machines', { name: `Bench reads ${Date.now()}`, kind: 'plasma', workArea: { x: 900, y: 600 } });
-  const rail = { axis: 'Y', lengthMm: 1000, profileSize: 20, holePitchMm: 60, firstHoleMm: 20 };
+  const rail = { axis: 'Y', lengthUnit: 'mm', length: 1000, profileSize: 20, holePitch: 60, firstHole: 20 };
   const a = await json<{ id: string }>(ctx, 'POST', `/api/machines/${machine.id}/rails`, { ...rail, label: 'Y1 (left)' });
   const b = await json<{ id: string }>(ctx, 'POST', `/api/machines/${machine.id}/rails`, { ...rail, label: 'Y2 (right)', partnerRailId: a.id });
   await json(ctx, 'POST', `/api/rails/${a.id}/sweeps`, sweep(0));

@@ -32,8 +32,8 @@ async function benchMachines(ctx: BenchContext): Promise<Target[]> {
   const out: Target[] = [];
   for (let i = 0; i < MACHINES; i++) {
     const machine = await productJson<{ id: string }>(ctx, 'POST', '/api/machines', { name: `Bench writes ${i + 1}`, kind: 'router', workArea: { x: 2400, y: 1200 } });
-    const rail = await productJson<{ id: string }>(ctx, 'POST', `/api/machines/${machine.id}/rails`, { label: 'X1', axis: 'X', lengthMm: 3000, profileSize: 20, holePitchMm: 60, firstHoleMm: 30 });
-    const boltDown = await productJson<{ id: string; holeCount: number }>(ctx, 'POST', `/api/rails/${rail.id}/bolt-downs`, { mode: 'line', unit: 'mm' });
+    const rail = await productJson<{ id: string }>(ctx, 'POST', `/api/machines/${machine.id}/rails`, { label: 'X1', axis: 'X', lengthUnit: 'mm', length: 3000, profileSize: 20, holePitch: 60, firstHole: 30 });
+    const boltDown = await productJson<{ id: string; holeCount: number }>(ctx, 'POST', `/api/rails/${rail.id}/bolt-downs`, { mode: 'line', readingUnit: 'mm' });
     out.push({ machineId: machine.id, railId: rail.id, boltDownId: boltDown.id, holes: boltDown.holeCount });
   }
   return out;
@@ -43,7 +43,7 @@ const STATIONS = [0, 300, 600, 900, 1200, 1500, 1800, 2100, 2400, 2700];
 let counter = 0;
 const sweepBody = () => {
   const k = ++counter;
-  return JSON.stringify({ unit: 'mm', phase: 'as-left', stations: STATIONS.map((position, i) => ({ position, reading: ((i * 7 + k) % 11) * 0.001 })) });
+  return JSON.stringify({ readingUnit: 'mm', phase: 'as-left', stations: STATIONS.map((position, i) => ({ position, reading: ((i * 7 + k) % 11) * 0.001 })) });
 };
 const holeBody = () => JSON.stringify({ reading: ((++counter % 9) - 4) * 0.001, fixed: true, writeId: randomUUID() });
 
