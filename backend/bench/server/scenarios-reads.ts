@@ -71,8 +71,8 @@ async function growSweeps(ownerUrl: string, railId: string, total: number): Prom
     await client.query('begin');
     await client.query('set local session_replication_role = replica');
     await client.query(
-      `insert into rail_sweeps (workshop_id, machine_id, rail_id, unit, positions_mm, readings_raw, readings_mm, phase, taken_by, datum, result, status, target, taken_at)
-       select s.workshop_id, s.machine_id, s.rail_id, s.unit, s.positions_mm, s.readings_raw, s.readings_mm, 'as-found', 'Bench history', s.datum, s.result, s.status, s.target,
+      `insert into rail_sweeps (workshop_id, machine_id, rail_id, reading_unit, length_unit, face, positions_mm, readings_raw, readings_mm, phase, taken_by, datum, result, status, target, taken_at)
+       select s.workshop_id, s.machine_id, s.rail_id, s.reading_unit, s.length_unit, s.face, s.positions_mm, s.readings_raw, s.readings_mm, 'as-found', 'Bench history', s.datum, s.result, s.status, s.target,
               s.taken_at - make_interval(secs => g)
        from rail_sweeps s cross join generate_series(1, $2::int) g
        where s.id = (select id from rail_sweeps where rail_id = $1 order by taken_at desc, created_at desc limit 1)`,
