@@ -58,9 +58,25 @@ describe('machine files and target sets', () => {
     expect(history.body.entries[1]).toMatchObject({ action: 'created' });
   });
 
+  it('takes the work area in inches and keeps it in mm: 60 × 120 in is 1524 × 3048 mm (1 in = 25.4 mm exactly)', async () => {
+    const inch = await ws.as.owner.post('/api/machines').send({ ...plasma, name: 'Inch table', lengthUnit: 'in', workArea: { x: 60, y: 120 } });
+    expect(inch.status).toBe(201);
+    expect(inch.body).toMatchObject({ lengthUnit: 'in', workArea: { x: 1524, y: 3048 }, workAreaInLengthUnit: { x: 60, y: 120 } });
+    const mm = await ws.as.owner.post('/api/machines').send({ ...plasma, name: 'Metric table', workArea: { x: 1524, y: 3048 } });
+    expect(mm.body).toMatchObject({ lengthUnit: 'mm', workArea: inch.body.workArea, workAreaInLengthUnit: { x: 1524, y: 3048 } });
+    // A new work area without a unit is in the machine's own unit; a unit alone only changes how it is shown.
+    const wider = await ws.as.owner.patch(`/api/machines/${inch.body.id}`).send({ workArea: { x: 61, y: 120 } });
+    expect(wider.body.workArea.x).toBeCloseTo(1549.4, 9);
+    const shown = await ws.as.owner.patch(`/api/machines/${inch.body.id}`).send({ lengthUnit: 'mm' });
+    expect(shown.body).toMatchObject({ lengthUnit: 'mm', workAreaInLengthUnit: { x: 1549.4, y: 3048 } });
+  });
+
   it.each([
     [{ ...plasma, kind: 'laser' }, /kind must be one of/],
-    [{ ...plasma, workArea: { x: -5, y: 10 } }, /workArea.x must be at least 1/],
+    [{ ...plasma, workArea: { x: -5, y: 10 } }, /workArea.x must be greater than zero/],
+    [{ ...plasma, workArea: { x: 0.5, y: 10 } }, /workArea.x must be between 1 mm and 100 m/],
+    [{ ...plasma, lengthUnit: 'in', workArea: { x: 5000, y: 30 } }, /workArea.x must be between 1 mm and 100 m \(0.0394 to 3937.01 in\)/],
+    [{ ...plasma, lengthUnit: 'furlong' }, /lengthUnit must be one of mm, um, in, thou/],
     [{ ...plasma, workArea: { x: 'wide', y: 10 } }, /workArea.x must be a number/],
     [{ kind: 'plasma', workArea: { x: 1, y: 1 } }, /name/],
     [{ ...plasma, workArea: undefined }, /workArea/],

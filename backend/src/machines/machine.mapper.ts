@@ -1,4 +1,8 @@
 import type { machines } from '../database/schema/index.js';
+import { fromMm, type LengthUnit } from '../engine/units.js';
+
+// Shown as typed: ten significant figures drop the binary noise of converting back from mm.
+const inUnit = (mm: number, unit: LengthUnit) => +fromMm(mm, unit).toPrecision(10);
 import type { BlockingCheckRef } from '../database/schema/machine-readiness.js';
 import type { ReadinessCounts } from '../records/readiness-summary.service.js';
 
@@ -9,7 +13,12 @@ export interface MachineResponse {
   name: string;
   kind: MachineRow['kind'];
   state: MachineRow['state'];
+  /** In mm. */
   workArea: { x: number; y: number };
+  /** The unit the work area was typed in and is shown in. */
+  lengthUnit: LengthUnit;
+  /** The work area in lengthUnit. */
+  workAreaInLengthUnit: { x: number; y: number };
   notes: string;
   targetSet: { id: string; name: string };
   lastActivityAt: string;
@@ -29,6 +38,8 @@ export function toMachineResponse(row: MachineRow, targetSetName: string): Machi
     kind: row.kind,
     state: row.state,
     workArea: { x: row.workAreaXMm, y: row.workAreaYMm },
+    lengthUnit: row.lengthUnit,
+    workAreaInLengthUnit: { x: inUnit(row.workAreaXMm, row.lengthUnit), y: inUnit(row.workAreaYMm, row.lengthUnit) },
     notes: row.notes,
     targetSet: { id: row.targetSetId, name: targetSetName },
     lastActivityAt: row.lastActivityAt.toISOString(),

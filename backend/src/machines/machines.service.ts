@@ -1,4 +1,5 @@
-import { ConflictException, Injectable, NotFoundException, OnModuleInit } from '@nestjs/common';
+import { BadRequestException, ConflictException, Injectable, NotFoundException, OnModuleInit } from '@nestjs/common';
+import { fromMm, toMm, type LengthUnit } from '../engine/units.js';
 import type { SessionUser } from '../auth/session-user.js';
 import { APPROVED_STATES, type MachineState } from '../database/schema/machines.js';
 import type { MachineRef } from '../records/readiness.js';
@@ -90,8 +91,8 @@ export class MachinesService implements OnModuleInit {
       workshopId: actor.workshopId,
       name: dto.name.trim(),
       kind: dto.kind,
-      workAreaXMm: dto.workArea.x,
-      workAreaYMm: dto.workArea.y,
+      ...workAreaMm(dto.workArea, dto.lengthUnit ?? 'mm'),
+      lengthUnit: dto.lengthUnit ?? 'mm',
       notes: dto.notes ?? '',
       targetSetId,
     });
@@ -105,8 +106,8 @@ export class MachinesService implements OnModuleInit {
     await this.repo.update(actor.workshopId, id, {
       name: dto.name?.trim(),
       kind: dto.kind,
-      workAreaXMm: dto.workArea?.x,
-      workAreaYMm: dto.workArea?.y,
+      ...(dto.workArea ? workAreaMm(dto.workArea, dto.lengthUnit ?? before.lengthUnit) : {}),
+      lengthUnit: dto.lengthUnit,
       notes: dto.notes,
       targetSetId: dto.targetSetId,
     });
@@ -144,4 +145,13 @@ function diff(before: MachineResponse, after: MachineResponse): Record<string, u
     if (JSON.stringify(before[key]) !== JSON.stringify(after[key])) out[key] = { from: before[key], to: after[key] };
   }
   return out;
+}
+
+/** The work area in mm, refused (400 naming the field) outside 1 mm to 100 m whatever unit it was typed in. */
+function workAreaMm(area: { x: number; y: number }, unit: LengthUnit): { workAreaXMm: number; workAreaYMm: number } {
+  const x = toMm(area.x, unit);
+  const y = toMm(area.y, unit);
+  const problems = (['x', 'y'] as const).filter((k) => !(({ x, y })[k] >= 1 && ({ x, y })[k] <= 100_000)).map((k) => `workArea.${k} must be between 1 mm and 100 m (${fromMm(1, unit).toPrecision(3)} to ${+fromMm(100_000, unit).toPrecision(6)} ${unit})`);
+  if (problems.length) throw new BadRequestException(problems);
+  return { workAreaXMm: x, workAreaYMm: y };
 }

@@ -20,6 +20,8 @@ export const machines = pgTable(
     kind: text('kind', { enum: MACHINE_KINDS }).notNull(),
     workAreaXMm: real('work_area_x_mm').notNull(),
     workAreaYMm: real('work_area_y_mm').notNull(),
+    /** The unit the work area was typed in and is shown in (the lengths are kept in mm). */
+    lengthUnit: text('length_unit', { enum: ['mm', 'um', 'in', 'thou'] }).notNull().default('mm'),
     notes: text('notes').notNull().default(''),
     targetSetId: uuid('target_set_id').notNull().references(() => targetSets.id),
     state: text('state', { enum: MACHINE_STATES }).notNull().default('being-built'),

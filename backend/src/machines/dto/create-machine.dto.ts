@@ -1,17 +1,20 @@
 import { Type } from 'class-transformer';
-import { IsIn, IsNumber, IsObject, IsString, IsUUID, Max, MaxLength, Min, MinLength, ValidateNested } from 'class-validator';
+import { IsIn, IsNumber, IsObject, IsPositive, IsString, IsUUID, Max, MaxLength, MinLength, ValidateNested } from 'class-validator';
+import { LengthUnitField } from '../../common/unit-fields.js';
+import type { LengthUnit } from '../../engine/units.js';
 import { MACHINE_KINDS, type MachineKind } from '../../database/schema/machines.js';
 import { Optional } from '../../common/optional.js';
 
+/** In the request's lengthUnit; the 1 mm to 100 m range is checked once converted (MachinesService). */
 export class WorkAreaDto {
-  @IsNumber({ allowNaN: false, allowInfinity: false }, { message: 'workArea.x must be a number of mm' })
-  @Min(1, { message: 'workArea.x must be at least 1 mm' })
-  @Max(100_000, { message: 'workArea.x must be at most 100 000 mm' })
+  @IsNumber({ allowNaN: false, allowInfinity: false }, { message: 'workArea.x must be a number in lengthUnit (mm when absent)' })
+  @IsPositive({ message: 'workArea.x must be greater than zero' })
+  @Max(100_000_000, { message: 'workArea.x is too large' })
   x: number;
 
-  @IsNumber({ allowNaN: false, allowInfinity: false }, { message: 'workArea.y must be a number of mm' })
-  @Min(1, { message: 'workArea.y must be at least 1 mm' })
-  @Max(100_000, { message: 'workArea.y must be at most 100 000 mm' })
+  @IsNumber({ allowNaN: false, allowInfinity: false }, { message: 'workArea.y must be a number in lengthUnit (mm when absent)' })
+  @IsPositive({ message: 'workArea.y must be greater than zero' })
+  @Max(100_000_000, { message: 'workArea.y is too large' })
   y: number;
 }
 
@@ -24,7 +27,11 @@ export class CreateMachineDto {
   @IsIn(MACHINE_KINDS, { message: `kind must be one of ${MACHINE_KINDS.join(', ')}` })
   kind: MachineKind;
 
-  @IsObject({ message: 'workArea must be an object {x, y} in mm' })
+  /** Unit of the work area as typed and shown; the lengths are kept in mm. */
+  @LengthUnitField()
+  lengthUnit?: LengthUnit;
+
+  @IsObject({ message: 'workArea must be an object {x, y} in lengthUnit' })
   @ValidateNested()
   @Type(() => WorkAreaDto)
   workArea: WorkAreaDto;

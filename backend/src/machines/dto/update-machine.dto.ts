@@ -3,6 +3,8 @@ import { IsIn, IsObject, IsString, IsUUID, MaxLength, MinLength, ValidateNested 
 import { MACHINE_KINDS, type MachineKind } from '../../database/schema/machines.js';
 import { WorkAreaDto } from './create-machine.dto.js';
 import { Optional } from '../../common/optional.js';
+import { LengthUnitField } from '../../common/unit-fields.js';
+import type { LengthUnit } from '../../engine/units.js';
 
 export class UpdateMachineDto {
   @Optional()
@@ -15,8 +17,12 @@ export class UpdateMachineDto {
   @IsIn(MACHINE_KINDS, { message: `kind must be one of ${MACHINE_KINDS.join(', ')}` })
   kind?: MachineKind;
 
+  /** Changes the unit the work area is typed and shown in; alone, the lengths stay as they are. */
+  @LengthUnitField()
+  lengthUnit?: LengthUnit;
+
   @Optional()
-  @IsObject({ message: 'workArea must be an object {x, y} in mm' })
+  @IsObject({ message: 'workArea must be an object {x, y} in lengthUnit (the machine’s unit when absent)' })
   @ValidateNested()
   @Type(() => WorkAreaDto)
   workArea?: WorkAreaDto;

@@ -1,3 +1,4 @@
+import { UNIT_LABELS } from '../../lib/units';
 import { lazy, Suspense, useEffect, type ReactNode } from 'react';
 import { useParams, useSearchParams } from 'react-router-dom';
 import { useQueryClient } from '@tanstack/react-query';
@@ -64,7 +65,7 @@ export default function MachineFileRoute() {
     <>
       <PageHeader
         title={m.name}
-        subtitle={`${KIND_LABELS[m.kind]} · work area ${m.workArea.x} × ${m.workArea.y} mm · ${m.targetSet.name}`}
+        subtitle={`${KIND_LABELS[m.kind]} · work area ${m.workAreaInLengthUnit.x} × ${m.workAreaInLengthUnit.y} ${UNIT_LABELS[m.lengthUnit]} · ${m.targetSet.name}`}
         actions={<MachineStateChip state={m.state} />}
       />
       <Box sx={{ borderBottom: 1, borderColor: 'divider', mb: 2 }}>

@@ -1,3 +1,5 @@
+import type { LengthUnit } from '../../lib/units';
+
 export type MachineKind = 'plasma' | 'router' | 'other';
 export type MachineState = 'being-built' | 'awaiting-approval' | 'ready-to-cut' | 'recheck-due' | 'reopened' | 'retired';
 
@@ -6,7 +8,11 @@ export interface Machine {
   name: string;
   kind: MachineKind;
   state: MachineState;
+  /** In mm. */
   workArea: { x: number; y: number };
+  /** The unit the work area was typed in and is shown in. */
+  lengthUnit: LengthUnit;
+  workAreaInLengthUnit: { x: number; y: number };
   notes: string;
   targetSet: { id: string; name: string };
   lastActivityAt: string;

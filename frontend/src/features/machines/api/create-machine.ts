@@ -1,10 +1,12 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
 import { machineKeys, type Machine, type MachineKind } from '../types';
+import type { LengthUnit } from '../../../lib/units';
 
 export interface CreateMachineInput {
   name: string;
   kind: MachineKind;
+  lengthUnit: LengthUnit;
   workArea: { x: number; y: number };
   notes?: string;
   targetSetId?: string;

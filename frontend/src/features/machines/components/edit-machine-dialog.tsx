@@ -8,8 +8,9 @@ import { MachineFormFields, machineFormErrors, toMachineInput, type MachineFormV
 const fromMachine = (m: Machine): MachineFormValues => ({
   name: m.name,
   kind: m.kind,
-  x: String(m.workArea.x),
-  y: String(m.workArea.y),
+  lengthUnit: m.lengthUnit,
+  x: String(m.workAreaInLengthUnit.x),
+  y: String(m.workAreaInLengthUnit.y),
   notes: m.notes,
   targetSetId: m.targetSet.id,
 });

@@ -1,17 +1,20 @@
 import { InputAdornment, MenuItem, Stack, TextField } from '@mui/material';
 import type { TargetSetChoice } from '../api/get-target-set-choices';
 import { KIND_LABELS, type MachineKind } from '../types';
+import { UnitFamilySelect } from '../../../components/form/unit-select';
+import { toMm, UNIT_LABELS, type LengthUnit } from '../../../lib/units';
 
 export interface MachineFormValues {
   name: string;
   kind: MachineKind;
+  lengthUnit: LengthUnit;
   x: string;
   y: string;
   notes: string;
   targetSetId: string;
 }
 
-export const emptyMachineForm: MachineFormValues = { name: '', kind: 'plasma', x: '', y: '', notes: '', targetSetId: '' };
+export const emptyMachineForm: MachineFormValues = { name: '', kind: 'plasma', lengthUnit: 'mm', x: '', y: '', notes: '', targetSetId: '' };
 
 /** Field problems in words, checked before anything is sent (the server checks again). */
 export function machineFormErrors(v: MachineFormValues): Partial<Record<keyof MachineFormValues, string>> {
@@ -19,8 +22,8 @@ export function machineFormErrors(v: MachineFormValues): Partial<Record<keyof Ma
   if (!v.name.trim()) errors.name = 'Give the machine a name';
   for (const k of ['x', 'y'] as const) {
     const n = Number(v[k]);
-    if (v[k].trim() === '' || !Number.isFinite(n)) errors[k] = 'A number of mm';
-    else if (n < 1 || n > 100_000) errors[k] = 'Between 1 and 100 000 mm';
+    if (v[k].trim() === '' || !Number.isFinite(n)) errors[k] = `A number of ${UNIT_LABELS[v.lengthUnit]}`;
+    else if (toMm(n, v.lengthUnit) < 1 || toMm(n, v.lengthUnit) > 100_000) errors[k] = 'Between 1 mm and 100 m';
   }
   return errors;
 }
@@ -29,6 +32,7 @@ export function toMachineInput(v: MachineFormValues) {
   return {
     name: v.name.trim(),
     kind: v.kind,
+    lengthUnit: v.lengthUnit,
     workArea: { x: Number(v.x), y: Number(v.y) },
     notes: v.notes,
     ...(v.targetSetId ? { targetSetId: v.targetSetId } : {}),
@@ -50,7 +54,7 @@ export function MachineFormFields({
 }) {
   const errors = showErrors ? machineFormErrors(values) : {};
   const set = (patch: Partial<MachineFormValues>) => onChange({ ...values, ...patch });
-  const mm = { input: { endAdornment: <InputAdornment position="end">mm</InputAdornment> }, htmlInput: { inputMode: 'decimal' as const } };
+  const unitSlot = { input: { endAdornment: <InputAdornment position="end">{UNIT_LABELS[values.lengthUnit]}</InputAdornment> }, htmlInput: { inputMode: 'decimal' as const } };
   return (
     <Stack spacing={2} sx={{ pt: 1 }}>
       <TextField label="Name" value={values.name} onChange={(e) => set({ name: e.target.value })} required autoFocus={autoFocus} error={!!errors.name} helperText={errors.name} />
@@ -61,9 +65,10 @@ export function MachineFormFields({
           </MenuItem>
         ))}
       </TextField>
+      <UnitFamilySelect family="length" label="Work area unit" value={values.lengthUnit} onChange={(lengthUnit) => set({ lengthUnit })} units={['mm', 'in']} />
       <Stack direction="row" spacing={1.5} sx={{ alignItems: 'flex-start' }}>
-        <TextField label="Work area X" value={values.x} onChange={(e) => set({ x: e.target.value })} required slotProps={mm} error={!!errors.x} helperText={errors.x ?? 'Width to cover'} fullWidth />
-        <TextField label="Work area Y" value={values.y} onChange={(e) => set({ y: e.target.value })} required slotProps={mm} error={!!errors.y} helperText={errors.y ?? 'Length to cover'} fullWidth />
+        <TextField label="Work area X" value={values.x} onChange={(e) => set({ x: e.target.value })} required slotProps={unitSlot} error={!!errors.x} helperText={errors.x ?? 'Width to cover'} fullWidth />
+        <TextField label="Work area Y" value={values.y} onChange={(e) => set({ y: e.target.value })} required slotProps={unitSlot} error={!!errors.y} helperText={errors.y ?? 'Length to cover'} fullWidth />
       </Stack>
       <TextField
         select

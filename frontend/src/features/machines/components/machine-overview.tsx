@@ -1,3 +1,4 @@
+import { UNIT_LABELS } from '../../../lib/units';
 import { useState } from 'react';
 import { Box, Button, Paper, Stack, Typography } from '@mui/material';
 import EditOutlined from '@mui/icons-material/EditOutlined';
@@ -13,7 +14,7 @@ export function MachineOverview({ machine }: { machine: Machine }) {
   const rows: [string, string][] = [
     ['Name', machine.name],
     ['Kind', KIND_LABELS[machine.kind]],
-    ['Work area to cover', `${machine.workArea.x} × ${machine.workArea.y} mm`],
+    ['Work area to cover', `${machine.workAreaInLengthUnit.x} × ${machine.workAreaInLengthUnit.y} ${UNIT_LABELS[machine.lengthUnit]}`],
     ['Target set', machine.targetSet.name],
     ['Last activity', new Date(machine.lastActivityAt).toLocaleString()],
   ];

@@ -1,0 +1,1 @@
+ALTER TABLE "machines" ADD COLUMN "length_unit" text DEFAULT 'mm' NOT NULL;
