@@ -19,15 +19,15 @@ import type { SeedContext } from './context.js';
  */
 
 const DAY_MS = 86_400_000;
-const IN = 25.4;
 
 export async function seedImperialRouter(ctx: SeedContext): Promise<string> {
   const { builder, technician } = ctx.demo.people;
   const machine = await ctx.app.get(MachinesService).create(builder, {
     name: 'Garage router (inch)',
     kind: 'router',
-    // 36 × 24 in of work area; the machine file keeps it in mm (914.4 × 609.6).
-    workArea: { x: 36 * IN, y: 24 * IN },
+    // 36 × 24 in of work area, shown in inches; the machine file keeps it in mm (914.4 × 609.6).
+    lengthUnit: 'in',
+    workArea: { x: 36, y: 24 },
     notes: 'Steel-tube frame, 20 mm profile rails, 5 TPI lead screws on every axis; set up and measured in inches.',
   });
   const m = machine.id;
