@@ -66,7 +66,8 @@ export function MachineFormFields({
         ))}
       </TextField>
       <UnitFamilySelect family="length" label="Work area unit" value={values.lengthUnit} onChange={(lengthUnit) => set({ lengthUnit })} units={['mm', 'in']} />
-      <Stack direction="row" spacing={1.5} sx={{ alignItems: 'flex-start' }}>
+      {/* One above the other on a phone: side by side, a label and its unit do not both fit. */}
+      <Stack direction={{ xs: 'column', sm: 'row' }} spacing={{ xs: 2, sm: 1.5 }} sx={{ alignItems: { sm: 'flex-start' } }}>
         <TextField label="Work area X" value={values.x} onChange={(e) => set({ x: e.target.value })} required slotProps={unitSlot} error={!!errors.x} helperText={errors.x ?? 'Width to cover'} fullWidth />
         <TextField label="Work area Y" value={values.y} onChange={(e) => set({ y: e.target.value })} required slotProps={unitSlot} error={!!errors.y} helperText={errors.y ?? 'Length to cover'} fullWidth />
       </Stack>
