@@ -35,10 +35,11 @@ export function AppProviders({ children }: { children: ReactNode }) {
             shouldDehydrateMutation: (m) => m.state.status === 'pending' && m.options.mutationKey?.[0] === COMMAND_KEY[0],
           },
         }}
-        // Who is signed in is asked again (the kept answer may be out of date: the session may have
-        // ended meanwhile); entries restored from an earlier visit go out (each waits for its author).
+        // What was kept shows at once and everything is asked again (others record meanwhile, the
+        // session may have ended); without a connection the kept answers stay. Entries restored from
+        // an earlier visit go out (each waits for its author).
         onSuccess={() => {
-          void queryClient.invalidateQueries({ queryKey: authKeys.me });
+          void queryClient.invalidateQueries();
           resumeKeptCommands(queryClient);
         }}
       >
