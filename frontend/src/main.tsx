@@ -11,11 +11,7 @@ import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
 import { AppProviders } from './app/providers';
 import { AppRouter } from './app/router';
-import { registerSW } from 'virtual:pwa-register';
 
-// The service worker that lets the app open without a connection (vite.config.ts); a new build
-// replaces it on the next visit.
-if ('serviceWorker' in navigator) registerSW({ immediate: true });
 
 createRoot(document.getElementById('root')!).render(
   <StrictMode>

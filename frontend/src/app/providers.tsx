@@ -31,15 +31,17 @@ export function AppProviders({ children }: { children: ReactNode }) {
           maxAge: PERSIST_MAX_AGE_MS,
           buster: KEPT_FORMAT,
           dehydrateOptions: {
+            // Only who is signed in is kept of the answers (so the app and its waiting entries
+            // open without a connection); everything else is asked afresh on every visit.
+            shouldDehydrateQuery: (q) => q.state.status === 'success' && q.queryKey[0] === authKeys.me[0] && q.queryKey[1] === authKeys.me[1],
             // Every entry not yet recorded is kept, paused or waiting for its author to sign in.
             shouldDehydrateMutation: (m) => m.state.status === 'pending' && m.options.mutationKey?.[0] === COMMAND_KEY[0],
           },
         }}
-        // What was kept shows at once and everything is asked again (others record meanwhile, the
-        // session may have ended); without a connection the kept answers stay. Entries restored from
-        // an earlier visit go out (each waits for its author).
+        // Who is signed in is asked again at once (the session may have ended meanwhile); entries
+        // restored from an earlier visit go out (each waits for its author).
         onSuccess={() => {
-          void queryClient.invalidateQueries();
+          void queryClient.invalidateQueries({ queryKey: authKeys.me });
           resumeKeptCommands(queryClient);
         }}
       >

@@ -1,4 +1,5 @@
-import { Suspense } from 'react';
+import { Suspense, useEffect } from 'react';
+import { registerOfflineApp } from '../register-offline-app';
 import { Navigate, Outlet, useLocation } from 'react-router-dom';
 import { Box } from '@mui/material';
 import { useMe } from '../../features/auth/api/get-me';
@@ -13,6 +14,10 @@ import { WaitingEntriesBanner } from '../../components/offline/waiting-entries-b
 export function SignedInLayout() {
   const me = useMe();
   const location = useLocation();
+  const signedIn = !!me.data;
+  useEffect(() => {
+    if (signedIn) registerOfflineApp();
+  }, [signedIn]);
   if (me.isPending) return <LoadingState label="Opening Railwright…" />;
   if (me.isError)
     return (

@@ -12,6 +12,7 @@ export const persister = createAsyncStoragePersister({
   // IndexedDB stores objects as they are; no JSON round trip (which would lose files and dates).
   serialize: (client) => client as never,
   deserialize: (stored) => stored as never,
+
   throttleTime: 500,
 });
 
