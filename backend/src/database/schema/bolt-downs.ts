@@ -31,6 +31,10 @@ export const boltDowns = pgTable(
     /** Counter handing out the order in which holes were fixed. */
     fixCounter: integer('fix_counter').notNull().default(0),
     finalSweepId: uuid('final_sweep_id').references(() => railSweeps.id, { onDelete: 'set null' }),
+    /** Set when the builder gave up on this bolt-down (with why); no hole is written after it. */
+    abandonedAt: timestamp('abandoned_at', { withTimezone: true }),
+    abandonedReason: text('abandoned_reason'),
+    abandonedByName: text('abandoned_by_name'),
     createdById: uuid('created_by_id').references(() => users.id),
     createdByName: text('created_by_name').notNull(),
     ...timestamps,
