@@ -14,6 +14,13 @@ export const palette = {
   notStarted: '#6b7572',
 };
 
+// Phones and tablets are worked with a finger (often gloved, at the machine): below `md` every
+// control offers at least a 44 × 44 px target (WCAG 2.5.5), whatever size it is drawn at.
+export const TOUCH_TARGET = 44;
+const base = createTheme();
+const onTouch = base.breakpoints.down('md');
+const touchTarget = { [onTouch]: { minHeight: TOUCH_TARGET, minWidth: TOUCH_TARGET } };
+
 export const theme = createTheme({
   palette: {
     mode: 'light',
@@ -39,7 +46,16 @@ export const theme = createTheme({
   components: {
     MuiAppBar: { defaultProps: { elevation: 0 } },
     MuiPaper: { defaultProps: { elevation: 0 }, styleOverrides: { root: { border: '1px solid #e2ded4' } } },
-    MuiButton: { defaultProps: { disableElevation: true } },
+    MuiButton: { defaultProps: { disableElevation: true }, styleOverrides: { root: touchTarget } },
+    MuiIconButton: { styleOverrides: { root: touchTarget } },
+    MuiToggleButton: { styleOverrides: { root: touchTarget } },
+    MuiTab: { styleOverrides: { root: { minHeight: 48 } } },
+    MuiListItemButton: { styleOverrides: { root: { [onTouch]: { minHeight: TOUCH_TARGET } } } },
+    MuiMenuItem: { styleOverrides: { root: { [onTouch]: { minHeight: TOUCH_TARGET } } } },
+    MuiCheckbox: { styleOverrides: { root: { [onTouch]: { padding: 10 } } } },
+    MuiRadio: { styleOverrides: { root: { [onTouch]: { padding: 10 } } } },
+    MuiSwitch: { styleOverrides: { switchBase: { [onTouch]: { padding: 12 } } } },
+    MuiInputBase: { styleOverrides: { root: { [onTouch]: { minHeight: TOUCH_TARGET } } } },
     MuiTextField: { defaultProps: { size: 'small' } },
     MuiTableCell: { styleOverrides: { head: { fontWeight: 600, color: '#4d5855' } } },
   },

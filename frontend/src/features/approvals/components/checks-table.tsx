@@ -1,5 +1,6 @@
 import { Link as RouterLink } from 'react-router-dom';
-import { Box, Button, Link, Paper, Table, TableBody, TableCell, TableContainer, TableHead, TableRow, Typography } from '@mui/material';
+import { Box, Button, Paper, Table, TableBody, TableCell, TableHead, TableRow, Typography } from '@mui/material';
+import { ResponsiveTable } from '../../../components/table/responsive-table';
 import { dateOnly, dateTime, resultText, targetText } from '../format';
 import { KIND_LABELS, type BoardCheck } from '../types';
 import { CheckStatusChip } from './check-status-chip';
@@ -14,7 +15,7 @@ interface Props {
 /** Every required check with its latest result, target, state and evidence. */
 export function ChecksTable({ checks, onWaive }: Props) {
   return (
-    <TableContainer component={Paper}>
+    <ResponsiveTable component={Paper}>
       <Table size="small" aria-label="Required checks">
         <TableHead>
           <TableRow>
@@ -54,12 +55,12 @@ export function ChecksTable({ checks, onWaive }: Props) {
                 )}
               </TableCell>
               <TableCell align="right">
-                {c.link ? <Link component={RouterLink} to={c.link}>{c.recordId ? 'Open' : 'Record'}</Link> : '—'}
+                {c.link ? <Button component={RouterLink} to={c.link} size="small">{c.recordId ? 'Open' : 'Record'}</Button> : '—'}
               </TableCell>
             </TableRow>
           ))}
         </TableBody>
       </Table>
-    </TableContainer>
+    </ResponsiveTable>
   );
 }

@@ -1,4 +1,5 @@
-import { Paper, Table, TableBody, TableCell, TableContainer, TableHead, TableRow, Typography } from '@mui/material';
+import { ResponsiveTable } from '../../../components/table/responsive-table';
+import { Paper, Table, TableBody, TableCell, TableHead, TableRow, Typography } from '@mui/material';
 import { palette } from '../../../theme/theme';
 import { LoadingState } from '../../../components/states/loading-state';
 import { ErrorState } from '../../../components/states/error-state';
@@ -38,7 +39,7 @@ export function DriftTable({ machineId }: { machineId: string }) {
   if (drift.isError) return <ErrorState error={drift.error} onRetry={() => drift.refetch()} />;
   if (!drift.data.approval) return <EmptyState title="Nothing to compare yet">Once the machine is approved, a re-check round is compared here with the approved one.</EmptyState>;
   return (
-    <TableContainer component={Paper}>
+    <ResponsiveTable component={Paper}>
       <Typography variant="body2" color="text.secondary" sx={{ px: 2, pt: 1.5 }}>
         Approved round of {dateTime(drift.data.approval.approvedAt)} by {drift.data.approval.approvedBy}, beside the latest result of each check.
       </Typography>
@@ -67,6 +68,6 @@ export function DriftTable({ machineId }: { machineId: string }) {
           ))}
         </TableBody>
       </Table>
-    </TableContainer>
+    </ResponsiveTable>
   );
 }

@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { Alert, Box, Button, Chip, MenuItem, Paper, Select, Table, TableBody, TableCell, TableContainer, TableHead, TableRow } from '@mui/material';
+import { Alert, Box, Button, Chip, MenuItem, Paper, Select, Table, TableBody, TableCell, TableHead, TableRow } from '@mui/material';
 import PersonAddOutlined from '@mui/icons-material/PersonAddOutlined';
 import { ROLE_LABELS, type Role } from '../../auth/types';
 import { useMe } from '../../auth/api/get-me';
@@ -12,6 +12,7 @@ import type { Person } from '../types';
 import { AddPersonDialog } from './add-person-dialog';
 import { LoadingState } from '../../../components/states/loading-state';
 import { ErrorState } from '../../../components/states/error-state';
+import { ResponsiveTable } from '../../../components/table/responsive-table';
 
 const ROLES = Object.keys(ROLE_LABELS) as Role[];
 
@@ -61,7 +62,7 @@ export function PeoplePanel() {
           {update.error.message}
         </Alert>
       )}
-      <TableContainer component={Paper}>
+      <ResponsiveTable component={Paper}>
         <Table aria-label="Members">
           <TableHead>
             <TableRow>
@@ -113,7 +114,7 @@ export function PeoplePanel() {
             ))}
           </TableBody>
         </Table>
-      </TableContainer>
+      </ResponsiveTable>
       <AddPersonDialog open={adding} onClose={() => setAdding(false)} />
       <ResetPasswordDialog
         person={resetting}

@@ -1,8 +1,9 @@
-import { Box, Button, Chip, Paper, Table, TableBody, TableCell, TableContainer, TableHead, TableRow, Typography } from '@mui/material';
+import { Box, Button, Chip, Paper, Table, TableBody, TableCell, TableHead, TableRow, Typography } from '@mui/material';
 import EditOutlined from '@mui/icons-material/EditOutlined';
 import ContentCopyOutlined from '@mui/icons-material/ContentCopyOutlined';
 import { REFERENCE_WORDS, UNIT_WORDS, type TargetSet } from '../types';
 import { TargetSetUsers } from './target-set-users';
+import { ResponsiveTable } from '../../../components/table/responsive-table';
 
 /** One target set: every target with its value, unit and where the value came from. */
 export function TargetSetCard({ set, canEdit, onEdit, onCopy }: { set: TargetSet; canEdit: boolean; onEdit: () => void; onCopy: () => void }) {
@@ -30,7 +31,7 @@ export function TargetSetCard({ set, canEdit, onEdit, onCopy }: { set: TargetSet
         )}
       </Box>
       <TargetSetUsers set={set} />
-      <TableContainer>
+      <ResponsiveTable>
         <Table size="small" aria-label={`Targets of ${set.name}`}>
           <TableHead>
             <TableRow>
@@ -52,7 +53,7 @@ export function TargetSetCard({ set, canEdit, onEdit, onCopy }: { set: TargetSet
             ))}
           </TableBody>
         </Table>
-      </TableContainer>
+      </ResponsiveTable>
     </Paper>
   );
 }
