@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { Link as RouterLink } from 'react-router-dom';
-import { Box, Button, Link, Paper, Stack, Table, TableBody, TableCell, TableContainer, TableHead, TableRow, Typography } from '@mui/material';
+import { Box, Button, Link, Paper, Stack, Table, TableBody, TableCell, TableHead, TableRow, Typography } from '@mui/material';
 import AddOutlined from '@mui/icons-material/AddOutlined';
 import { paths } from '../../../config/paths';
 import { EmptyState } from '../../../components/states/empty-state';
@@ -14,6 +14,7 @@ import { showPercent, showSteps } from '../utils/format';
 import { AxisFormDialog } from './axis-form-dialog';
 import { DriveStatusChip } from './drive-status-chip';
 import { TravelEnvelopeCard } from './travel-envelope-card';
+import { ResponsiveTable } from '../../../components/table/responsive-table';
 
 /** The chip, with the headline figure under it and the full summary on hover. */
 function CheckCell({ check }: { check: CheckSummary }) {
@@ -70,7 +71,7 @@ export function DrivesPanel({ machineId }: { machineId: string }) {
           Add each axis with its drive (screw, belt or rack and pinion), motor and driver settings and the steps per mm set in the controller.
         </EmptyState>
       ) : (
-        <TableContainer component={Paper}>
+        <ResponsiveTable component={Paper}>
           <Table aria-label="Axes" size="small" sx={{ '& td, & th': { py: 1.25, px: { xs: 1, md: 2 } } }}>
             <TableHead>
               <TableRow>
@@ -107,7 +108,7 @@ export function DrivesPanel({ machineId }: { machineId: string }) {
               ))}
             </TableBody>
           </Table>
-        </TableContainer>
+        </ResponsiveTable>
       )}
       <TravelEnvelopeCard machineId={machineId} />
       {mayCalibrate && <AxisFormDialog machineId={machineId} open={adding} onClose={() => setAdding(false)} />}

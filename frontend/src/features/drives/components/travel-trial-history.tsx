@@ -1,8 +1,9 @@
-import { Box, Button, Paper, Table, TableBody, TableCell, TableContainer, TableHead, TableRow, Typography } from '@mui/material';
+import { Box, Button, Paper, Table, TableBody, TableCell, TableHead, TableRow, Typography } from '@mui/material';
 import type { TravelTrialListItem } from '../api/get-travel-trials';
 import { showDateTime, showPercent } from '../utils/format';
 import { UnreadableRecord } from '../../../components/unreadable-record';
 import { DriveStatusChip } from './drive-status-chip';
+import { ResponsiveTable } from '../../../components/table/responsive-table';
 
 interface Props {
   trials: TravelTrialListItem[];
@@ -18,7 +19,7 @@ interface Props {
 export function TravelTrialHistory({ trials, selectedId, onSelect, hasOlder, loadingOlder, onLoadOlder }: Props) {
   if (trials.length < 2) return null;
   return (
-    <TableContainer component={Paper}>
+    <ResponsiveTable component={Paper}>
       <Typography variant="h5" component="h4" sx={{ px: 2, pt: 1.5 }}>
         Earlier trials
       </Typography>
@@ -65,6 +66,6 @@ export function TravelTrialHistory({ trials, selectedId, onSelect, hasOlder, loa
           </Button>
         </Box>
       )}
-    </TableContainer>
+    </ResponsiveTable>
   );
 }

@@ -1,10 +1,11 @@
 import { CartesianGrid, Line, LineChart, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
-import { Box, Table, TableBody, TableCell, TableContainer, TableHead, TableRow, Typography } from '@mui/material';
+import { Box, Table, TableBody, TableCell, TableHead, TableRow, Typography } from '@mui/material';
 import { palette } from '../../../theme/theme';
 import type { DiagonalCheck } from '../types';
 import { showDate } from '../utils/format';
 import { UnreadableRecord } from '../../../components/unreadable-record';
 import { StatusChip } from './status-chip';
+import { ResponsiveTable } from '../../../components/table/responsive-table';
 
 /** Every diagonal check of the machine, oldest first, so squaring can be seen to converge. */
 export function SquaringHistory({ checks, selectedId, onSelect }: { checks: DiagonalCheck[]; selectedId?: string; onSelect: (c: DiagonalCheck) => void }) {
@@ -28,7 +29,7 @@ export function SquaringHistory({ checks, selectedId, onSelect }: { checks: Diag
           </ResponsiveContainer>
         </Box>
       )}
-      <TableContainer>
+      <ResponsiveTable>
         <Table size="small" aria-label="Diagonal checks">
           <TableHead>
             <TableRow>
@@ -69,7 +70,7 @@ export function SquaringHistory({ checks, selectedId, onSelect }: { checks: Diag
             ))}
           </TableBody>
         </Table>
-      </TableContainer>
+      </ResponsiveTable>
     </Box>
   );
 }

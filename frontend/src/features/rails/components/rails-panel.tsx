@@ -1,7 +1,7 @@
 import { UNIT_LABELS } from '../../../lib/units';
 import { useState } from 'react';
 import { Link as RouterLink } from 'react-router-dom';
-import { Box, Button, Link, Paper, Stack, Table, TableBody, TableCell, TableContainer, TableHead, TableRow, Typography } from '@mui/material';
+import { Box, Button, Link, Paper, Stack, Table, TableBody, TableCell, TableHead, TableRow, Typography } from '@mui/material';
 import AddOutlined from '@mui/icons-material/AddOutlined';
 import { paths } from '../../../config/paths';
 import { LoadingState } from '../../../components/states/loading-state';
@@ -15,6 +15,7 @@ import { AddRailDialog } from './add-rail-dialog';
 import { CheckStatusChip } from './check-status-chip';
 import { UnreadableRecord } from '../../../components/unreadable-record';
 import { PairParallelismSummary } from './pair-parallelism-summary';
+import { ResponsiveTable } from '../../../components/table/responsive-table';
 
 /** The machine file's rails: each with its latest straightness, and each partner pair's parallelism. */
 export function RailsPanel({ machineId }: { machineId: string }) {
@@ -50,7 +51,7 @@ export function RailsPanel({ machineId }: { machineId: string }) {
           Add each linear rail with its length and hole pitch, then sweep it with an indicator.
         </EmptyState>
       ) : (
-        <TableContainer component={Paper}>
+        <ResponsiveTable component={Paper}>
           <Table aria-label="Rails" size="small" sx={{ '& td, & th': { py: 1.25 } }}>
             <TableHead>
               <TableRow>
@@ -109,7 +110,7 @@ export function RailsPanel({ machineId }: { machineId: string }) {
               })}
             </TableBody>
           </Table>
-        </TableContainer>
+        </ResponsiveTable>
       )}
       {pairs.length > 0 && (
         <Stack spacing={1.5}>

@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { Alert, Box, Button, Checkbox, IconButton, Paper, Stack, Table, TableBody, TableCell, TableContainer, TableHead, TableRow, Tooltip, Typography } from '@mui/material';
+import { Alert, Box, Button, Checkbox, IconButton, Paper, Stack, Table, TableBody, TableCell, TableHead, TableRow, Tooltip, Typography } from '@mui/material';
 import DeleteOutline from '@mui/icons-material/DeleteOutlined';
 import LockOutlined from '@mui/icons-material/LockOutlined';
 import { SweepOverlayChart } from '../../../components/charts/sweep-overlay-chart';
@@ -12,6 +12,7 @@ import { showInTargetUnit } from '../utils/display';
 import { CheckStatusChip } from './check-status-chip';
 import { SweepResult } from './sweep-result';
 import { UnreadableRecord } from '../../../components/unreadable-record';
+import { ResponsiveTable } from '../../../components/table/responsive-table';
 
 const when = (s: { takenAt: string }) => new Date(s.takenAt).toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' });
 
@@ -41,7 +42,7 @@ export function SweepHistory({ sweeps, canRecord }: { sweeps: SweepListItem[]; c
           Sweep history
         </Typography>
         {remove.error && <Alert severity="error" sx={{ mb: 1 }}>{remove.error.message}</Alert>}
-        <TableContainer>
+        <ResponsiveTable titleFirst={false}>
           <Table size="small" aria-label="Sweeps">
             <TableHead>
               <TableRow>
@@ -101,7 +102,7 @@ export function SweepHistory({ sweeps, canRecord }: { sweeps: SweepListItem[]; c
               ))}
             </TableBody>
           </Table>
-        </TableContainer>
+        </ResponsiveTable>
         {more.hasNextPage && (
           <Box sx={{ mt: 1 }}>
             <Button onClick={() => more.fetchNextPage()} disabled={more.isFetchingNextPage}>
