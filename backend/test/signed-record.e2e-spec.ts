@@ -1,12 +1,13 @@
 import type { NestFastifyApplication } from '@nestjs/platform-fastify';
 import { execFileSync } from 'node:child_process';
-import { createHash, createPublicKey, verify } from 'node:crypto';
-import { statSync } from 'node:fs';
+import { createHash, createPrivateKey, createPublicKey, sign, verify } from 'node:crypto';
+import { readFileSync, statSync } from 'node:fs';
 import pg from 'pg';
 import { anonymous, createTestApp, createTestWorkshop, TEST_PASSWORD, type TestWorkshop } from './helpers/test-app.js';
 import { board, newMachine, requestAndApprove, STATEMENT, waiveAllBut } from './support/approval-flow.js';
 import { signingKeyPath } from '../src/approvals/signing/signing-key.service.js';
 import { canonicalJson } from '../src/approvals/canonical-json.js';
+import { decimalTimes } from '../src/approvals/signing/decimal-times.js';
 import { MailService } from '../src/mail/mail.service.js';
 
 const pdfText = (pdf: Buffer) => execFileSync('pdftotext', ['-layout', '-', '-'], { input: pdf }).toString('utf8');
@@ -156,6 +157,103 @@ describe('the signed record', () => {
 
     it('keeps the other routes closed', async () => {
       expect((await anonymous(app).get(`/api/machines/${machineId}/approvals/${approvalId}/verification`)).status).toBe(401);
+    });
+  });
+
+  describe('signed before a database upgrade changed the layout of its rows', () => {
+    type Content = { records: Record<string, { kind: string; row: Record<string, unknown> }> };
+    const ownerQuery = async <T,>(sql: string, params: unknown[] = []) => {
+      const client = new pg.Client({ connectionString: process.env.DATABASE_OWNER_URL ?? process.env.DATABASE_URL });
+      await client.connect();
+      try {
+        return (await client.query(sql, params)).rows as T[];
+      } finally {
+        await client.end();
+      }
+    };
+    let original: { signed_content: string; signature: string };
+
+    /**
+     * Re-signs the record as the server would have signed it before migrations 0018–0027: sweeps
+     * with one `unit` (the readings' unit) and no face, warnings or length unit; rails and the
+     * machine without their length unit, spacing and end distance.
+     */
+    const signInOldLayout = async () => {
+      [original] = await ownerQuery<{ signed_content: string; signature: string }>('SELECT signed_content, signature FROM approvals WHERE id = $1', [approvalId]);
+      const old = JSON.parse(original.signed_content) as Content;
+      for (const entry of Object.values(old.records)) {
+        const row = entry.row;
+        if (entry.kind === 'rail-sweep') {
+          row.unit = row.readingUnit;
+          for (const k of ['readingUnit', 'lengthUnit', 'face', 'warnings']) delete row[k];
+        }
+        if (entry.kind === 'rail') for (const k of ['lengthUnit', 'spacingMm', 'endDistanceMm']) delete row[k];
+        if (entry.kind === 'machine') delete row.lengthUnit;
+      }
+      const text = canonicalJson(old);
+      const key = createPrivateKey(readFileSync(signingKeyPath(), 'utf8'));
+      const signature = sign(null, Buffer.from(text, 'utf8'), key).toString('base64');
+      await tamper('UPDATE approvals SET signed_content = $2, signature = $3 WHERE id = $1', [approvalId, text, signature]);
+      return { text, old };
+    };
+    const restore = () => tamper('UPDATE approvals SET signed_content = $2, signature = $3 WHERE id = $1', [approvalId, original.signed_content, original.signature]);
+
+    it('still verifies as valid and unchanged, and the offered record is the text that was signed', async () => {
+      const { text, old } = await signInOldLayout();
+      expect(old.records[`rail-sweep:${sweepId}`].row.unit).toBe('um');
+      try {
+        const v = await verification();
+        expect(v).toMatchObject({ status: 'valid', valid: true, unchanged: true, signedCopyIntact: true, differences: [] });
+        expect(v.message).toMatch(/earlier layout/);
+        const pem = (await anonymous(app).get('/api/public/signing-key')).text;
+        const record = (await anonymous(app).get(`/api/public/verify/${token}/record.json`)).body as { content: string; currentContent: string; signature: string };
+        expect(record.content).toBe(text);
+        expect(verify(null, Buffer.from(record.content, 'utf8'), createPublicKey(pem), Buffer.from(record.signature, 'base64'))).toBe(true);
+        expect(JSON.parse(record.currentContent).records[`rail-sweep:${sweepId}`].row.readingUnit).toBe('um');
+      } finally {
+        await restore();
+      }
+    });
+
+    it('a reading changed since is still found, and only the reading is named', async () => {
+      await signInOldLayout();
+      try {
+        await tamper(`UPDATE rail_sweeps SET readings_raw = '[0,2,1,4,2]'::jsonb WHERE id = $1`, [sweepId]);
+        const v = await verification();
+        expect(v).toMatchObject({ status: 'changed', valid: false, signedCopyIntact: true });
+        expect(v.differences).toEqual([{ path: `records["rail-sweep:${sweepId}"].row.readingsRaw[3]`, record: { kind: 'rail-sweep', id: sweepId }, change: 'changed', signed: 3, current: 4 }]);
+      } finally {
+        await tamper(`UPDATE rail_sweeps SET readings_raw = '[0,2,1,3,2]'::jsonb WHERE id = $1`, [sweepId]);
+        await restore();
+      }
+      expect((await verification()).valid).toBe(true);
+    });
+
+    it('a unit changed by hand after signing is not taken for the upgrade', async () => {
+      await signInOldLayout();
+      try {
+        await tamper(`UPDATE rail_sweeps SET reading_unit = 'thou' WHERE id = $1`, [sweepId]);
+        const v = await verification();
+        expect(v.valid).toBe(false);
+        expect(v.differences).toEqual([expect.objectContaining({ path: `records["rail-sweep:${sweepId}"].row.readingUnit`, signed: 'um', current: 'thou' })]);
+      } finally {
+        await tamper(`UPDATE rail_sweeps SET reading_unit = 'um' WHERE id = $1`, [sweepId]);
+        await restore();
+      }
+    });
+
+    it('converts measured moves to mm exactly as the migration did in PostgreSQL numeric arithmetic', async () => {
+      // Independent reference: PostgreSQL's own numeric type, with migration 0024's expression.
+      let seed = 7;
+      const next = () => ((seed = (seed * 48271) % 2147483647) / 2147483647);
+      const values = [19.95, 0.1, 1e-7, 3.3333333333333335, -12.7, 1234.56789, 2.5e-13, 1.5e21, ...Array.from({ length: 200 }, () => (next() - 0.3) * 10 ** Math.floor(next() * 8 - 3))];
+      for (const [unit, factor] of [['in', '25.4'], ['thou', '0.0254'], ['um', '0.001']] as const) {
+        const rows = await ownerQuery<{ v: number }>(
+          `SELECT round((e.m->>'measured')::numeric * $2::numeric, 12)::float8 AS v FROM jsonb_array_elements($1::jsonb) WITH ORDINALITY AS e(m, ord) ORDER BY ord`,
+          [JSON.stringify(values.map((measured) => ({ measured }))), factor],
+        );
+        expect([unit, values.map((v) => decimalTimes(v, factor, 12))]).toEqual([unit, rows.map((r) => Number(r.v))]);
+      }
     });
   });
 

@@ -3,6 +3,7 @@ import { ApprovalsRepository, type ApprovalRow } from '../approvals.repository.j
 import { recordDifferences, type RecordDifference } from './record-diff.js';
 import { signedContent, type LiveRecord } from './signed-content.js';
 import { isSignedRecordKind, SIGNED_RECORD_KINDS } from './signed-record-kinds.js';
+import { upgradeSignedContent } from './signed-record-upgrades.js';
 import { SignedRecordsRepository } from './signed-records.repository.js';
 import { SIGNING_ALGORITHM, SigningKeyService } from './signing-key.service.js';
 
@@ -71,7 +72,21 @@ export class SignedRecordService {
       return { ...base, status: 'valid', valid: true, unchanged: true, signedCopyIntact: true, message: 'The signature is valid and the record is unchanged since it was signed.' };
     }
     const copyIntact = !!approval.signedContent && this.key.verify(approval.signedContent, approval.signature);
-    const all = approval.signedContent ? recordDifferences(approval.signedContent, live) : [];
+    // A copy signed before a migration changed the shape of its rows is carried through the same
+    // steps; matching the live record then means nothing in it has changed since it was signed.
+    const expected = copyIntact ? upgradeSignedContent(approval.signedContent!) : approval.signedContent;
+    if (copyIntact && expected === live) {
+      return {
+        ...base,
+        status: 'valid',
+        valid: true,
+        unchanged: true,
+        signedCopyIntact: true,
+        message:
+          'The signature is valid and the record is unchanged since it was signed. It was signed in an earlier layout of the records (before a database upgrade added columns at their defaults and renamed units); carried through those steps, the signed record equals the record as it is now.',
+      };
+    }
+    const all = expected ? recordDifferences(expected, live) : [];
     const message = copyIntact
       ? `The record has changed since it was signed: ${all.length} difference${all.length === 1 ? '' : 's'} from the signed record.`
       : all.length
@@ -82,11 +97,16 @@ export class SignedRecordService {
 
   /** The signed record as anyone can check it offline: the exact text, recomputed now, with its signature and key. */
   async publicRecord(approval: ApprovalRow) {
+    const live = await this.liveContent(approval);
+    // A record signed in an earlier layout is given as it was signed, so its signature checks out
+    // offline; `currentContent` is the same record in today's layout.
+    const asSigned = approval.signature && approval.signedContent && !this.key.verify(live, approval.signature) && this.key.verify(approval.signedContent, approval.signature) && upgradeSignedContent(approval.signedContent) === live;
     return {
       algorithm: SIGNING_ALGORITHM,
       keyId: approval.signingKeyId,
       publicKey: this.key.publicKeyPem,
-      content: await this.liveContent(approval),
+      content: asSigned ? approval.signedContent : live,
+      ...(asSigned ? { currentContent: live } : {}),
       signature: approval.signature,
     };
   }
