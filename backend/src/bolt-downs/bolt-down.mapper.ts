@@ -44,6 +44,8 @@ export interface BoltDownResponse {
   holeCount: number;
   complete: boolean;
   finalSweepId: string | null;
+  /** Set when the bolt-down was given up: when, by whom and why. No hole is written after it. */
+  abandoned: { at: string; by: string | null; reason: string } | null;
   createdBy: string;
   createdAt: string;
   updatedAt: string;
@@ -95,6 +97,7 @@ export function toBoltDownResponse(row: BoltDownRow, holes: BoltDownHoleRow[], r
       holeCount: Array.isArray(row.holePositionsMm) ? row.holePositionsMm.length : 0,
       complete: false,
       finalSweepId: row.finalSweepId,
+      abandoned: abandonedOf(row),
       createdBy: row.createdByName,
       createdAt: row.createdAt.toISOString(),
       updatedAt: row.updatedAt.toISOString(),
@@ -137,8 +140,13 @@ export function toBoltDownResponse(row: BoltDownRow, holes: BoltDownHoleRow[], r
     holeCount: row.holePositionsMm.length,
     complete: session.complete,
     finalSweepId: row.finalSweepId,
+    abandoned: abandonedOf(row),
     createdBy: row.createdByName,
     createdAt: row.createdAt.toISOString(),
     updatedAt: row.updatedAt.toISOString(),
   };
+}
+
+function abandonedOf(row: BoltDownRow): BoltDownResponse['abandoned'] {
+  return row.abandonedAt ? { at: row.abandonedAt.toISOString(), by: row.abandonedByName, reason: row.abandonedReason ?? '' } : null;
 }

@@ -1,8 +1,9 @@
-import { Body, Controller, Get, Param, ParseUUIDPipe, Post, Put, Res } from '@nestjs/common';
+import { Body, Controller, Get, HttpCode, Param, ParseUUIDPipe, Post, Put, Res } from '@nestjs/common';
 import type { FastifyReply } from 'fastify';
 import { CurrentUser, RECORDERS, Roles } from '../auth/decorators.js';
 import type { SessionUser } from '../auth/session-user.js';
 import { BoltDownsService } from './bolt-downs.service.js';
+import { AbandonBoltDownDto } from './dto/abandon-bolt-down.dto.js';
 import { CreateBoltDownDto } from './dto/create-bolt-down.dto.js';
 import { FinalSweepDto } from './dto/final-sweep.dto.js';
 import { RecordHoleDto } from './dto/record-hole.dto.js';
@@ -32,6 +33,14 @@ export class BoltDownsController {
   @Roles(...RECORDERS)
   recordHole(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string, @Param('index') index: string, @Body() dto: RecordHoleDto) {
     return this.boltDowns.recordHole(user, id, index, dto);
+  }
+
+  /** Gives the bolt-down up with a reason; a new one of the rail can then begin. */
+  @Post('bolt-downs/:id/abandon')
+  @Roles(...RECORDERS)
+  @HttpCode(200)
+  abandon(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string, @Body() dto: AbandonBoltDownDto) {
+    return this.boltDowns.abandon(user, id, dto);
   }
 
   /** 201 with the new sweep; 200 with the same one when its id was seen before. */

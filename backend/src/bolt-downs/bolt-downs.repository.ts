@@ -79,12 +79,22 @@ export class BoltDownsRepository {
     return row ?? null;
   }
 
+  /** Marks the bolt-down abandoned unless it is finished or abandoned already; returns it as it now stands. */
+  async abandon(workshopId: string, id: string, by: { reason: string; name: string; at: Date }): Promise<BoltDownRow | null> {
+    const [row] = await this.db
+      .update(boltDowns)
+      .set({ abandonedAt: by.at, abandonedReason: by.reason, abandonedByName: by.name, updatedAt: by.at })
+      .where(and(eq(boltDowns.workshopId, workshopId), eq(boltDowns.id, id), sql`${boltDowns.finalSweepId} is null`, sql`${boltDowns.abandonedAt} is null`))
+      .returning();
+    return row ?? null;
+  }
+
   /** Links the final sweep unless another one got there first; returns the linked sweep id. */
   async linkFinalSweep(workshopId: string, id: string, sweepId: string): Promise<string | null> {
     await this.db
       .update(boltDowns)
       .set({ finalSweepId: sweepId, updatedAt: new Date() })
-      .where(and(eq(boltDowns.workshopId, workshopId), eq(boltDowns.id, id), sql`${boltDowns.finalSweepId} is null`));
+      .where(and(eq(boltDowns.workshopId, workshopId), eq(boltDowns.id, id), sql`${boltDowns.finalSweepId} is null`, sql`${boltDowns.abandonedAt} is null`));
     return (await this.find(workshopId, id))?.finalSweepId ?? null;
   }
 
@@ -122,7 +132,7 @@ export class BoltDownsRepository {
         on conflict do nothing returning write_id
       ), b as (
         update ${boltDowns} set fix_counter = fix_counter + ${newFix ? 1 : 0}::int, updated_at = ${w.now.toISOString()}::timestamptz
-        where id = ${boltDownId}::uuid and final_sweep_id is null and exists (select 1 from claim)
+        where id = ${boltDownId}::uuid and final_sweep_id is null and abandoned_at is null and exists (select 1 from claim)
         returning fix_counter
       ), h as (
         insert into ${boltDownHoles} (bolt_down_id, hole_index, reading_raw, reading_mm, fixed, fix_seq, fixed_at, fixed_by_id, fixed_by_name, last_write_id, updated_at)

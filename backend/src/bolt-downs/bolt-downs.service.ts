@@ -14,6 +14,7 @@ import { SubjectsRegistry } from '../records/subjects.registry.js';
 import { TargetSetsService } from '../target-sets/target-sets.service.js';
 import { sessionOf, toBoltDownResponse, type BoltDownResponse, type HoleWriteResponse } from './bolt-down.mapper.js';
 import { BoltDownsRepository, type BoltDownRow } from './bolt-downs.repository.js';
+import type { AbandonBoltDownDto } from './dto/abandon-bolt-down.dto.js';
 import type { CreateBoltDownDto } from './dto/create-bolt-down.dto.js';
 import type { FinalSweepDto } from './dto/final-sweep.dto.js';
 import type { RecordHoleDto } from './dto/record-hole.dto.js';
@@ -118,6 +119,7 @@ export class BoltDownsService implements OnModuleInit {
     // The machine's row before any write: concurrent writers of one bolt-down queue here instead of deadlocking.
     await this.machines.lockForChange(actor, row.machineId);
     if (row.finalSweepId) throw finishedConflict();
+    if (row.abandonedAt) throw abandonedConflict(row);
     if (found.locked) throw lockedRecordConflict('This bolt-down');
 
     // Read after the lock, so no other writer of this machine can change them before this write.
@@ -126,7 +128,10 @@ export class BoltDownsService implements OnModuleInit {
     const target = sessionOf(row, holes).holes[holeIndex].targetMm;
     const outcome = await this.repo.writeHole(actor.workshopId, id, { writeId: dto.writeId, holeIndex, readingRaw: dto.reading, readingMm, fixed: dto.fixed, actor, before, now: new Date() });
     if (outcome.kind === 'id-taken') throw new ConflictException('writeId was already used for another write; make a new one for each write');
-    if (outcome.kind === 'finished') throw finishedConflict();
+    if (outcome.kind === 'finished') {
+      const now = await this.repo.find(actor.workshopId, id);
+      throw now?.abandonedAt ? abandonedConflict(now) : finishedConflict();
+    }
     if (outcome.kind === 'repeat') return { ...(await this.respond(actor, row, rail)), writeId: dto.writeId, repeated: true };
 
     const fmt = (mm: number | null) => (mm === null ? 'none yet' : `${signed(fromMm(mm, row.readingUnit))} ${row.readingUnit}`);
@@ -163,6 +168,7 @@ export class BoltDownsService implements OnModuleInit {
       }
       throw new ConflictException('This bolt-down already has its final sweep');
     }
+    if (row.abandonedAt) throw abandonedConflict(row);
     const session = sessionOf(row, (await this.repo.holesOf(actor.workshopId, [id])).get(id)!);
     if (!session.complete) {
       throw new ConflictException(`Fix every hole before the final sweep: ${session.fixedCount} of ${row.holePositionsMm.length} holes are fixed`);
@@ -170,7 +176,10 @@ export class BoltDownsService implements OnModuleInit {
     checkStationsAtHoles(dto, row.holePositionsMm);
     const { created, sweep } = await this.sweeps.record(actor, row.railId, dto);
     const linked = await this.repo.linkFinalSweep(actor.workshopId, id, sweep.id);
-    if (linked !== sweep.id) throw new ConflictException('This bolt-down already has its final sweep');
+    if (linked !== sweep.id) {
+      const now = await this.repo.find(actor.workshopId, id);
+      throw now?.abandonedAt ? abandonedConflict(now) : new ConflictException('This bolt-down already has its final sweep');
+    }
     if (created) {
       await this.records.audit(actor, {
         machineId: row.machineId,
@@ -183,6 +192,31 @@ export class BoltDownsService implements OnModuleInit {
     }
     const fresh = await this.repo.find(actor.workshopId, id);
     return { created, boltDown: await this.respond(actor, fresh!, rail), sweep };
+  }
+
+  /**
+   * Gives up a bolt-down that is not finished, with the reason: kept with it, audited in the same
+   * transaction, and a new bolt-down of the rail can then begin. Refused while an approval stands.
+   */
+  async abandon(actor: SessionUser, id: string, dto: AbandonBoltDownDto): Promise<BoltDownResponse> {
+    const { row, rail } = await this.load(actor, id);
+    await this.machines.lockForChange(actor, row.machineId);
+    await this.records.assertEditable(RECORD_TYPE, id, 'This bolt-down');
+    const current = (await this.repo.find(actor.workshopId, id))!;
+    if (current.abandonedAt) throw abandonedConflict(current);
+    if (current.finalSweepId) throw new ConflictException('This bolt-down is finished and has its final sweep; it cannot be abandoned');
+    const written = await this.repo.abandon(actor.workshopId, id, { reason: dto.reason, name: actor.name, at: new Date() });
+    if (!written) throw new ConflictException('This bolt-down was finished or abandoned meanwhile; reload to see it');
+    const holes = (await this.repo.holesOf(actor.workshopId, [id])).get(id)!;
+    await this.records.audit(actor, {
+      machineId: row.machineId,
+      recordType: RECORD_TYPE,
+      recordId: id,
+      action: 'updated',
+      summary: `Bolt-down of rail ${rail.label} abandoned with ${holes.filter((h) => h.fixed).length} of ${row.holePositionsMm.length} holes fixed: ${dto.reason}`,
+      changes: { abandoned: true, reason: dto.reason },
+    });
+    return toBoltDownResponse(written, holes, railInfo(rail));
   }
 
   private async load(actor: SessionUser, id: string): Promise<{ row: BoltDownRow; rail: RailRow }> {
@@ -207,6 +241,9 @@ export class BoltDownsService implements OnModuleInit {
 type RailInfo = Pick<RailRow, 'label' | 'axis' | 'lengthMm'>;
 
 const finishedConflict = () => new ConflictException('This bolt-down is finished and has its final sweep; begin a new bolt-down to re-align the rail');
+
+const abandonedConflict = (row: BoltDownRow) =>
+  new ConflictException(`This bolt-down was abandoned${row.abandonedByName ? ` by ${row.abandonedByName}` : ''} (${row.abandonedReason ?? 'no reason given'}); begin a new bolt-down to align the rail`);
 
 function railInfo(rail: RailInfo) {
   return { label: rail.label, axis: rail.axis, lengthMm: rail.lengthMm };

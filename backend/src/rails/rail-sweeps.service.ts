@@ -14,6 +14,11 @@ import type { PageQuery } from '../records/page.query.js';
 import { RailsRepository, type SweepRow } from './rails.repository.js';
 import { RailsService } from './rails.service.js';
 import type { CreateSweepDto } from './dto/create-sweep.dto.js';
+import type { UpdateSweepDetailsDto } from './dto/update-sweep-details.dto.js';
+
+/** The details a correction may change; the readings, units, face, phase and time make the result and stay. */
+const DETAIL_FIELDS = ['instrument', 'temperatureC', 'takenBy', 'boltSize', 'torqueNm', 'datum', 'notes'] as const;
+type DetailField = (typeof DETAIL_FIELDS)[number];
 
 const line = (r: ReferenceLineResult): StoredLine => ({ slope: r.slope, intercept: r.interceptMm, straightness: r.straightnessMm, residuals: r.residualsMm });
 
@@ -124,6 +129,46 @@ export class RailSweepsService {
         ` (least squares ${showIn(result.leastSquares.straightness, readingUnit)}, minimum zone ${showIn(result.minimumZone.straightness, readingUnit)}); largest local slope ${slope.mmPerM.toFixed(3)} mm/m`,
     );
     return { created: true, sweep: toSweepResponse(row, false) };
+  }
+
+  /**
+   * Corrects a sweep's details (datum, notes, instrument, who, bolts, temperature) while no
+   * approval stands on it: the machine locked first, the old and new values in the audit row.
+   */
+  async updateDetails(actor: SessionUser, id: string, dto: UpdateSweepDetailsDto): Promise<SweepResponse> {
+    const before = await this.findRow(actor, id);
+    await this.machines.lockForChange(actor, before.machineId);
+    await this.records.assertEditable('rail-sweep', id, 'This sweep');
+    const set: Partial<Pick<SweepRow, DetailField>> = {};
+    const from: Record<string, unknown> = {};
+    const to: Record<string, unknown> = {};
+    for (const field of DETAIL_FIELDS) {
+      const value = dto[field];
+      if (value === undefined) continue;
+      // An empty datum is no datum, as when the sweep was recorded.
+      const next = field === 'datum' && value === '' ? null : value;
+      if (next === before[field]) continue;
+      (set as Record<string, unknown>)[field] = next;
+      from[field] = before[field];
+      to[field] = next;
+    }
+    if (!Object.keys(set).length) return this.get(actor, id);
+    const row = await this.repo.updateSweepDetails(actor.workshopId, id, set);
+    if (!row) throw new NotFoundException('No such sweep in this workshop');
+    const rail = await this.rails.findRow(actor, row.railId);
+    const words = Object.keys(set)
+      .map((f) => (f === 'notes' ? 'notes rewritten' : `${f} ${JSON.stringify(from[f] ?? '')} → ${JSON.stringify(to[f] ?? '')}`))
+      .join(', ');
+    // The audit row keeps the old and new values whole; the summary names them for people.
+    await this.records.audit(actor, {
+      machineId: row.machineId,
+      recordType: 'rail-sweep',
+      recordId: id,
+      action: 'updated',
+      summary: `Sweep of rail ${rail.label} of ${row.takenAt.toISOString().slice(0, 10)}: details corrected (${words})`.slice(0, 2000),
+      changes: { before: from, after: to },
+    });
+    return toSweepResponse(row, false);
   }
 
   async remove(actor: SessionUser, id: string): Promise<void> {

@@ -8,6 +8,7 @@ import { CreateSweepDto } from './dto/create-sweep.dto.js';
 import { PageQuery } from '../records/page.query.js';
 import { NEXT_CURSOR_HEADER } from '../records/page-cursor.js';
 import { UpdateRailDto } from './dto/update-rail.dto.js';
+import { UpdateSweepDetailsDto } from './dto/update-sweep-details.dto.js';
 import { RailChecksService } from './rail-checks.service.js';
 import { RailSweepsService } from './rail-sweeps.service.js';
 import { RailsService } from './rails.service.js';
@@ -79,6 +80,13 @@ export class RailsController {
   @Get('sweeps/:id')
   getSweep(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string) {
     return this.sweeps.get(user, id);
+  }
+
+  /** Corrects a sweep's details (not its readings) while no approval stands on it. */
+  @Patch('sweeps/:id')
+  @Roles(...RECORDERS)
+  updateSweep(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string, @Body() dto: UpdateSweepDetailsDto) {
+    return this.sweeps.updateDetails(user, id, dto);
   }
 
   @Delete('sweeps/:id')

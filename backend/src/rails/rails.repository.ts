@@ -279,6 +279,16 @@ export class RailsRepository {
     return row ?? null;
   }
 
+  /** Writes a sweep's corrected details; returns the row as it now stands. */
+  async updateSweepDetails(workshopId: string, id: string, set: Partial<Pick<SweepRow, 'instrument' | 'temperatureC' | 'takenBy' | 'boltSize' | 'torqueNm' | 'datum' | 'notes'>>): Promise<SweepRow | null> {
+    const [row] = await this.db
+      .update(railSweeps)
+      .set({ ...set, updatedAt: new Date() })
+      .where(and(eq(railSweeps.workshopId, workshopId), eq(railSweeps.id, id)))
+      .returning();
+    return row ?? null;
+  }
+
   async deleteSweep(workshopId: string, id: string): Promise<void> {
     await this.db.delete(railSweeps).where(and(eq(railSweeps.workshopId, workshopId), eq(railSweeps.id, id)));
   }
