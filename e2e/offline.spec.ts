@@ -66,6 +66,33 @@ test.describe('offline at the machine', () => {
     expect(new Set(keys).size).toBe(2);
   });
 
+  test('an entry waiting on the device is never sent under another person’s sign-in', async ({ page, context }) => {
+    const machineId = await newMachine(page, `Shared tablet ${Date.now()}`);
+    await signInAs(page, DEMO.technician);
+    await openWalk(page, machineId);
+    await context.setOffline(true);
+    await item(page, /licensed electrician/).getByRole('button', { name: 'Yes' }).click();
+    await expect(page.getByRole('status').filter({ hasText: 'Offline' })).toContainText('Offline: 1 entry waiting on this device');
+
+    // The technician's session ends while the entry waits (as after an expiry on the server),
+    // and the builder signs in on the same tablet once the connection is back.
+    await context.clearCookies();
+    await context.setOffline(false);
+    await page.goto('/sign-in');
+    await signInAs(page, DEMO.builder);
+    await expect(page.getByText(/1 entry typed on this device by Tamsin Hale waits until its author signs in here again/)).toBeVisible({ timeout: 15_000 });
+    await page.waitForTimeout(1500);
+    expect(await answersOf(page, machineId)).toEqual({});
+    await snap(page, 'offline-waiting-for-author');
+
+    // Back under the technician's own sign-in it goes out, once.
+    await page.getByRole('button', { name: 'Sign out' }).click();
+    await expect(page).toHaveURL(/sign-in/);
+    await signInAs(page, DEMO.technician);
+    await expect.poll(async () => Object.values(await answersOf(page, machineId)), { timeout: 20_000 }).toEqual(['yes']);
+    await expect(page.getByText(/typed on this device by/)).toHaveCount(0);
+  });
+
   test('signing out needs the connection: without one the person stays signed in and is told so', async ({ page, context }) => {
     await signInAs(page, DEMO.viewer);
     await page.waitForFunction(async () => !!(await navigator.serviceWorker.ready));

@@ -12,8 +12,10 @@ export const persister = createAsyncStoragePersister({
   // IndexedDB stores objects as they are; no JSON round trip (which would lose files and dates).
   serialize: (client) => client as never,
   deserialize: (stored) => stored as never,
-
-  throttleTime: 500,
+  // No pause between saves (still one at a time, each with the latest state): an entry typed
+  // just before a reload or a closed tab must already be in IndexedDB. What is saved is small
+  // (who is signed in and the entries not yet recorded), so saving on every change costs little.
+  throttleTime: 0,
 });
 
 /** Keep a week: long enough for a weekend without a connection, short enough not to show stale data for long. */
