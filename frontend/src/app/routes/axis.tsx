@@ -35,7 +35,7 @@ export default function AxisRoute() {
   const a = axis.data;
   return (
     <>
-      <Link component={RouterLink} to={`${paths.machine(machineId)}?tab=drives`} sx={{ display: 'inline-flex', alignItems: 'center', gap: 0.5, mb: 1 }}>
+      <Link component={RouterLink} to={`${paths.machine(machineId)}?tab=drives`} sx={{ display: 'inline-flex', alignItems: 'center', gap: 0.5, mb: 1, minHeight: { xs: 44, md: 'auto' } }}>
         <ArrowBack fontSize="small" /> {machine.data?.name ?? 'Machine file'} · Drives
       </Link>
       <PageHeader

@@ -35,12 +35,16 @@ export function ResponsiveTable({ children, titleFirst = true, component, sx }: 
 }
 
 const stackedOnPhone = (titleFirst: boolean) => (theme: Theme) => ({
+  // A link in a cell (a rail's or an axis's name) is a finger's target on phones and tablets.
+  [theme.breakpoints.down('md')]: {
+    '& tbody td a:not(.MuiButtonBase-root)': { display: 'inline-flex', alignItems: 'center', minHeight: 44, minWidth: 44 },
+  },
   [theme.breakpoints.down('sm')]: {
     overflowX: 'visible',
     '& table, & tbody, & tr, & td': { display: 'block', width: '100%', boxSizing: 'border-box' },
     '& table': { minWidth: 0 },
     // The header is read from each cell's label; keep it for screen readers only.
-    '& thead': { position: 'absolute', width: 1, height: 1, overflow: 'hidden', clip: 'rect(0 0 0 0)', whiteSpace: 'nowrap' },
+    '& thead': { display: 'block', position: 'absolute', width: 1, height: 1, overflow: 'hidden', clip: 'rect(0 0 0 0)', whiteSpace: 'nowrap' },
     '& tbody tr': {
       border: `1px solid ${theme.palette.divider}`,
       borderRadius: `${theme.shape.borderRadius}px`,

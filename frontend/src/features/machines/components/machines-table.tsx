@@ -83,7 +83,7 @@ export function MachinesTable({ machines }: { machines: MachineListItem[] }) {
             {shown.map((m) => (
               <TableRow key={m.id} hover>
                 <TableCell>
-                  <Link component={RouterLink} to={paths.machine(m.id)} sx={{ fontWeight: 500 }}>
+                  <Link component={RouterLink} to={paths.machine(m.id)} sx={{ fontWeight: 500, display: 'inline-flex', alignItems: 'center', minHeight: { xs: 44, md: 'auto' } }}>
                     {m.name}
                   </Link>
                   <Typography variant="body2" color="text.secondary" sx={{ display: { sm: 'none' } }}>
