@@ -5,6 +5,7 @@ import type { BacklashCheck } from '../backlash-types';
 import { showDateTime, showTarget } from '../utils/format';
 import { DeleteRecordButton } from './delete-record-button';
 import { DriveStatusChip } from './drive-status-chip';
+import { ResponsiveTable } from '../../../components/table/responsive-table';
 
 const DIGITS = { mm: 4, um: 1, in: 5, thou: 2 } as const;
 
@@ -38,6 +39,7 @@ export function BacklashResult({ check, mayDelete }: { check: BacklashCheck; may
           </Alert>
         ))}
         {r && (
+          <ResponsiveTable titleFirst={false}>
           <Table size="small" aria-label="Backlash at each position">
             <TableHead>
               <TableRow>
@@ -64,6 +66,7 @@ export function BacklashResult({ check, mayDelete }: { check: BacklashCheck; may
               ))}
             </TableBody>
           </Table>
+          </ResponsiveTable>
         )}
         <Typography variant="body2" color="text.secondary">
           {check.definition}

@@ -64,7 +64,7 @@ export function EvidenceGallery({ items, label = 'Evidence' }: { items: Evidence
               <ListItemIcon sx={{ minWidth: 36 }}>{f.contentType === 'application/pdf' ? <PictureAsPdfOutlined /> : <DescriptionOutlined />}</ListItemIcon>
               <ListItemText
                 primary={
-                  <Link href={f.contentUrl} download={f.fileName} underline="hover">
+                  <Link href={f.contentUrl} download={f.fileName} underline="hover" sx={{ display: 'inline-block', maxWidth: '100%', overflow: 'hidden', textOverflow: 'ellipsis', verticalAlign: 'top', lineHeight: { xs: '44px', md: 'inherit' } }}>
                     {f.fileName}
                   </Link>
                 }
