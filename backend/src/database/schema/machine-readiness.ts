@@ -15,6 +15,19 @@ export interface BlockingCheckRef {
  * current in the transaction of every command that changes what the board would show, so the
  * machines list reads one row per machine instead of every record behind it.
  */
+/**
+ * One check as the summary keeps it: enough to count it again (waivers applied) when only the
+ * contributor that reports it is asked again. `contributor` is its place in the registry.
+ */
+export interface SummaryCheck {
+  contributor: number;
+  key: string;
+  kind: string;
+  subject: string;
+  status: 'not-started' | 'within-target' | 'outside-target';
+  recordId: string | null;
+}
+
 export const machineReadiness = pgTable('machine_readiness', {
   machineId: uuid('machine_id')
     .primaryKey()
@@ -28,6 +41,8 @@ export const machineReadiness = pgTable('machine_readiness', {
   outside: integer('outside').notNull(),
   waived: integer('waived').notNull(),
   firstBlocking: jsonb('first_blocking').$type<BlockingCheckRef>(),
+  /** Every check as counted (not read by the list): a change of one check asks only its contributor again. */
+  checks: jsonb('checks').$type<SummaryCheck[]>(),
   /** How the counts were made; a start-up with a newer way recounts every machine. */
   version: integer('version').notNull(),
   refreshedAt: timestamp('refreshed_at', { withTimezone: true }).notNull().defaultNow(),

@@ -109,9 +109,10 @@ export const railSweeps = pgTable(
     index('rail_sweeps_rail_idx').on(t.railId, t.takenAt),
     // The newest sweep of a rail in one index step, however many it has.
     index('rail_sweeps_latest_idx').on(t.railId, t.takenAt.desc(), t.createdAt.desc()),
-    // The newest sweep of a rail against each named datum (partner parallelism), also in index steps.
-    index('rail_sweeps_datum_idx')
-      .on(t.railId, sql`lower(${t.datum})`, t.takenAt.desc(), t.createdAt.desc())
+    // The newest sweep of a rail against each named datum and face (partner parallelism), also in
+    // index steps: with the face in the key, a face never swept does not walk every other sweep.
+    index('rail_sweeps_datum_face_idx')
+      .on(t.railId, sql`lower(${t.datum})`, t.face, t.takenAt.desc(), t.createdAt.desc())
       .where(sql`${t.datum} is not null`),
   ],
 );
