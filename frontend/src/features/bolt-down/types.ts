@@ -37,6 +37,8 @@ export interface BoltDown {
   holeCount: number;
   complete: boolean;
   finalSweepId: string | null;
+  /** Set when the bolt-down was given up: when, by whom and why. */
+  abandoned: { at: string; by: string | null; reason: string } | null;
   createdBy: string;
   createdAt: string;
   updatedAt: string;

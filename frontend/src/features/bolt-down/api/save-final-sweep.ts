@@ -1,7 +1,9 @@
-import { useMutation } from '@tanstack/react-query';
-import { newWriteId, sendWriteWithin } from '../../../lib/offline-queue';
+import { useQueryClient } from '@tanstack/react-query';
+import { MACHINE_STATE_KEYS } from '../../../lib/machine-state-keys';
+import { newCommandKey } from '../../../lib/offline/commands';
+import { useCommand } from '../../../lib/offline/use-command';
 import type { LengthUnit } from '../../../lib/units';
-import type { FinalSweepResult } from '../types';
+import { boltDownKeys, type BoltDown, type FinalSweepResult } from '../types';
 
 export interface FinalSweepInput {
   readingUnit: LengthUnit;
@@ -11,22 +13,42 @@ export interface FinalSweepInput {
   instrument?: string;
   resolution?: number;
   temperatureC?: number;
+  takenBy?: string;
   boltSize?: string;
   torqueNm?: number;
+  datum?: string;
   notes?: string;
 }
 
 export const finalSweepPath = (boltDownId: string) => `/bolt-downs/${boltDownId}/final-sweep`;
 
 /**
- * Saves the final sweep through the offline queue; the sweep id made here makes a resend the
- * same sweep. The server saves it as the rail's sweep (result and status from the engine).
+ * Saves the final sweep as an entry of the device's queue; the sweep id made here is also its
+ * Idempotency-Key, so a resend is the same sweep. The server saves it as the rail's sweep (result
+ * and status from the engine); the rail's pages and the machine's state are read again after.
  */
-export function useSaveFinalSweep(boltDownId: string) {
-  return useMutation({
-    mutationFn: (input: FinalSweepInput) => {
-      const id = newWriteId();
-      return sendWriteWithin<FinalSweepResult>({ id, method: 'POST', path: finalSweepPath(boltDownId), body: { ...input, id }, label: 'Final sweep at every hole' }, 8000);
-    },
-  });
+export function useSaveFinalSweep(bd: Pick<BoltDown, 'id' | 'rail'>, onRefused?: (message: string) => void) {
+  const qc = useQueryClient();
+  const command = useCommand<FinalSweepResult>();
+  return (input: FinalSweepInput) => {
+    const id = newCommandKey();
+    command.send(
+      {
+        method: 'POST',
+        path: finalSweepPath(bd.id),
+        body: { ...input, id },
+        label: `Final sweep of rail ${bd.rail.label} at every hole`,
+        // ['rails']: the rail's page and sweep history show the new sweep too.
+        refresh: [boltDownKeys.all, ['rails'], ...MACHINE_STATE_KEYS],
+      },
+      {
+        key: id,
+        onSuccess: ({ boltDown, sweep }) => {
+          qc.setQueryData(boltDownKeys.detail(bd.id), boltDown);
+          qc.setQueryData([...boltDownKeys.all, 'sweep', sweep.id], sweep);
+        },
+        onError: (err) => onRefused?.(err.message),
+      },
+    );
+  };
 }

@@ -1,11 +1,11 @@
 import { useState } from 'react';
 import { positionText } from '../utils/position-text';
-import { Alert, Box, LinearProgress, Paper, Typography } from '@mui/material';
+import { Alert, AlertTitle, Box, LinearProgress, Paper, Typography } from '@mui/material';
 import { BoltDownChart } from '../../../components/charts/bolt-down-chart';
 import { UNIT_LABELS } from '../../../lib/units';
-import { useOfflineQueue } from '../../../lib/use-offline-queue';
-import { holePath } from '../api/record-hole';
-import { useBoltDownSync } from '../hooks/use-bolt-down-sync';
+import { useWaitingEntries } from '../../../lib/offline/use-waiting-entries';
+import { useRecordHole } from '../api/record-hole';
+import { finalSweepPath } from '../api/save-final-sweep';
 import { MODE_EXPLAINED, MODE_LABELS, type BoltDown } from '../types';
 import { guideState } from '../utils/guide-state';
 import { plain, signed } from '../utils/format';
@@ -13,7 +13,6 @@ import { FinalSweepForm } from './final-sweep-form';
 import { FinalSweepResult } from './final-sweep-result';
 import { HoleEntryPanel, type Refusal } from './hole-entry-panel';
 import { HolesTable } from './holes-table';
-import { OfflineBanner } from './offline-banner';
 
 interface Props {
   bd: BoltDown;
@@ -23,20 +22,31 @@ interface Props {
 
 /** The hole-by-hole guide: the hole to fix, its aim and difference, progress, and the holes in order. */
 export function BoltDownGuide({ bd, canRecord, typicalBoltSize }: Props) {
-  useBoltDownSync(bd.id);
-  const { pending } = useOfflineQueue(`/bolt-downs/${bd.id}/`);
+  const pending = useWaitingEntries(`/bolt-downs/${bd.id}/`);
   const state = guideState(bd, pending);
   const [picked, setPicked] = useState<number | null>(null);
   const [refusal, setRefusal] = useState<Refusal | null>(null);
+  // Refused by the server: back to that hole with what was typed, so it can be corrected.
+  const record = useRecordHole(bd, (input, message) => {
+    setRefusal({ index: input.index, text: String(input.reading), message });
+    setPicked(input.index);
+  });
+  const open = !bd.finalSweepId && !bd.abandoned;
   const selected = picked ?? state.nextHole;
   const hole = selected === null ? null : state.holes[selected];
   const unit = UNIT_LABELS[bd.readingUnit];
-  const sweepWaiting = pending.some((w) => !w.path.startsWith(holePath(bd.id)));
+  const sweepWaiting = pending.some((w) => w.path === finalSweepPath(bd.id));
   const fixed = state.holes.filter((h) => h.fixed && h.reading !== null).map((h) => ({ position: h.position, reading: h.reading! }));
 
   return (
     <Box>
-      <OfflineBanner pathPrefix={`/bolt-downs/${bd.id}/`} />
+      {bd.abandoned && (
+        <Alert severity="warning" sx={{ mb: 2 }} data-testid="abandoned">
+          <AlertTitle>Abandoned</AlertTitle>
+          {bd.abandoned.by ?? 'Someone'} abandoned this bolt-down on {new Date(bd.abandoned.at).toLocaleString()} with {state.fixedCount} of {bd.holeCount} holes fixed: “{bd.abandoned.reason}”. Its
+          readings stay in the machine&apos;s history; begin a new bolt-down to align the rail.
+        </Alert>
+      )}
       <Alert severity="info" icon={false} sx={{ mb: 2 }} role="note" data-testid="mode-explained">
         <strong>{MODE_LABELS[bd.mode]}.</strong> {MODE_EXPLAINED[bd.mode]} Holes are fixed one end first, then the far end, then the middles of the gaps. Readings in {unit}; on
         target within ±{plain(bd.band, bd.readingUnit)} of the aim.
@@ -51,24 +61,22 @@ export function BoltDownGuide({ bd, canRecord, typicalBoltSize }: Props) {
 
       <Box sx={{ display: 'grid', gridTemplateColumns: { xs: '1fr', lg: 'minmax(0, 3fr) minmax(0, 2fr)' }, gap: 2, mb: 2 }}>
         <Box>
-          {canRecord && hole && !bd.finalSweepId && (
+          {canRecord && hole && open && (
             <HoleEntryPanel
+              // Keyed by the hole, so nothing typed at one hole leaks to the next.
               key={hole.index}
               bd={bd}
               hole={hole}
               isNext={hole.index === state.nextHole}
               refusal={refusal?.index === hole.index ? refusal : null}
+              record={record}
               onFixed={() => {
                 setPicked(null);
                 setRefusal(null);
               }}
-              onRefused={(r) => {
-                setRefusal(r);
-                setPicked(r.index);
-              }}
             />
           )}
-          {!canRecord && !state.complete && hole && (
+          {!canRecord && open && !state.complete && hole && (
             <Paper sx={{ p: { xs: 2, md: 3 } }} aria-label="Next hole">
               <Typography color="text.secondary">Next to fix</Typography>
               <Typography variant="h2" component="h2" sx={{ mb: 0.5 }}>
@@ -80,10 +88,13 @@ export function BoltDownGuide({ bd, canRecord, typicalBoltSize }: Props) {
               </Alert>
             </Paper>
           )}
-          {state.complete && state.waitingCount === 0 && !bd.finalSweepId && canRecord && picked === null && (
-            <FinalSweepForm bd={bd} typicalBoltSize={typicalBoltSize} waiting={sweepWaiting} />
+          {state.complete && open && canRecord && picked === null && !sweepWaiting && <FinalSweepForm bd={bd} holes={state.holes} typicalBoltSize={typicalBoltSize} />}
+          {sweepWaiting && !bd.finalSweepId && (
+            <Alert severity="info" sx={{ mb: 2 }} data-testid="final-sweep-waiting">
+              <AlertTitle>Final sweep waiting to send</AlertTitle>
+              It is kept on this device and recorded once, after the hole readings before it, when the connection returns.
+            </Alert>
           )}
-          {state.complete && state.waitingCount > 0 && <Alert severity="warning">Every hole is fixed; the final sweep is offered once the waiting readings are sent.</Alert>}
           {bd.finalSweepId && <FinalSweepResult sweepId={bd.finalSweepId} />}
         </Box>
         <Paper sx={{ p: 2 }}>
@@ -101,9 +112,9 @@ export function BoltDownGuide({ bd, canRecord, typicalBoltSize }: Props) {
       </Box>
 
       <Typography variant="h4" component="h2" sx={{ mb: 1 }}>
-        Holes in fixing order{canRecord && !bd.finalSweepId ? ' (pick one to fix or re-fix it)' : ''}
+        Holes in fixing order{canRecord && open ? ' (pick one to fix or re-fix it)' : ''}
       </Typography>
-      <HolesTable bd={bd} holes={state.inOrder} nextHole={state.nextHole} selected={selected} onSelect={canRecord && !bd.finalSweepId ? setPicked : undefined} />
+      <HolesTable bd={bd} holes={state.inOrder} nextHole={open ? state.nextHole : null} selected={open ? selected : null} onSelect={canRecord && open ? setPicked : undefined} />
     </Box>
   );
 }

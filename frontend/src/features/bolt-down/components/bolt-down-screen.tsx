@@ -8,6 +8,7 @@ import { useBoltDowns } from '../api/get-bolt-downs';
 import type { RailSummary } from '../types';
 import { BoltDownGuide } from './bolt-down-guide';
 import { StartBoltDownForm } from './start-bolt-down-form';
+import { AbandonBoltDownDialog } from './abandon-bolt-down-dialog';
 
 interface Props {
   rail: RailSummary;
@@ -19,6 +20,7 @@ export function BoltDownScreen({ rail, canRecord }: Props) {
   const list = useBoltDowns(rail.id);
   const [chosen, setChosen] = useState<string | null>(null);
   const [starting, setStarting] = useState(false);
+  const [abandoning, setAbandoning] = useState(false);
   const id = chosen ?? list.data?.[0]?.id;
   const bd = useBoltDown(starting ? undefined : id);
 
@@ -42,26 +44,33 @@ export function BoltDownScreen({ rail, canRecord }: Props) {
   if (!shown) return <ErrorState error={bd.error} onRetry={() => bd.refetch()} />;
 
   const others = list.data ?? [];
+  const over = !!shown.finalSweepId || !!shown.abandoned;
   return (
     <>
-      {(others.length > 1 || (canRecord && shown.finalSweepId)) && (
+      {(others.length > 1 || canRecord) && (
         <Box sx={{ display: 'flex', gap: 2, flexWrap: 'wrap', alignItems: 'center', mb: 2 }}>
           {others.length > 1 && (
             <TextField select label="Bolt-down" value={shown.id} onChange={(e) => setChosen(e.target.value)} sx={{ minWidth: 300 }}>
               {others.map((b, i) => (
                 <MenuItem key={b.id} value={b.id}>
-                  {new Date(b.createdAt).toLocaleString()} · {b.fixedCount} of {b.holeCount} fixed{i === 0 ? ' (latest)' : ''}
+                  {new Date(b.createdAt).toLocaleString()} · {b.fixedCount} of {b.holeCount} fixed{b.abandoned ? ' · abandoned' : ''}{i === 0 ? ' (latest)' : ''}
                 </MenuItem>
               ))}
             </TextField>
           )}
-          {canRecord && shown.finalSweepId && (
+          {canRecord && over && (
             <Button variant="outlined" onClick={() => setStarting(true)}>
               Begin a new bolt-down
             </Button>
           )}
+          {canRecord && !over && (
+            <Button color="warning" onClick={() => setAbandoning(true)} sx={{ ml: { sm: 'auto' } }}>
+              Abandon this bolt-down…
+            </Button>
+          )}
         </Box>
       )}
+      {canRecord && !over && abandoning && <AbandonBoltDownDialog bd={shown} open onClose={() => setAbandoning(false)} />}
       <BoltDownGuide key={shown.id} bd={shown} canRecord={canRecord} typicalBoltSize={rail.typicalBoltSize} />
     </>
   );

@@ -1,13 +1,12 @@
-import { useState, type FormEvent } from 'react';
+import { useRef, useState, type FormEvent } from 'react';
 import { positionText } from '../utils/position-text';
-import { Alert, Box, Button, Chip, Paper, Stack, TextField, Typography } from '@mui/material';
+import { Alert, AlertTitle, Box, Button, Chip, Paper, Stack, TextField, Typography } from '@mui/material';
 import CheckOutlined from '@mui/icons-material/CheckOutlined';
 import { IndicatorPanel } from '../../../components/indicator-input/indicator-panel';
 import { useIndicatorInput } from '../../../components/indicator-input/use-indicator-input';
-import { ApiError } from '../../../lib/api-client';
 import { UNIT_LABELS } from '../../../lib/units';
 import { palette } from '../../../theme/theme';
-import { useRecordHole } from '../api/record-hole';
+import type { RecordHoleInput } from '../api/record-hole';
 import type { BoltDown } from '../types';
 import type { GuideHole } from '../utils/guide-state';
 import { loadDraft, saveDraft } from '../utils/draft';
@@ -25,23 +24,26 @@ interface Props {
   isNext: boolean;
   /** The server's refusal of the last reading typed at this hole, to show with it. */
   refusal?: Refusal | null;
+  /** Sends the write (at once, or kept on this device until the connection returns). */
+  record: (input: RecordHoleInput) => void;
   /** Called once a hole is fixed (sent or kept waiting), so the guide can move on. */
   onFixed: (index: number) => void;
-  /** Called when the server refuses the reading: the guide comes back to this hole with it. */
-  onRefused: (refusal: Refusal) => void;
 }
 
 /** The hole being fixed: its aim, the reading as it is typed, and the difference, large. */
 // Mounted afresh for each hole (keyed by the guide), so nothing typed at one hole leaks to the next.
-export function HoleEntryPanel({ bd, hole, isNext, refusal, onFixed, onRefused }: Props) {
+export function HoleEntryPanel({ bd, hole, isNext, refusal, record, onFixed }: Props) {
   const [text, setText] = useState(() => refusal?.text ?? loadDraft(bd.id, hole.index));
   const [problem, setProblem] = useState<string | null>(null);
-  const record = useRecordHole(bd.id);
+  // A reading outside the band is fixed only by a second, deliberate act: never by Enter alone.
+  const [confirming, setConfirming] = useState(false);
+  const inputRef = useRef<HTMLInputElement>(null);
   const unit = UNIT_LABELS[bd.readingUnit];
   const typeIn = (t: string) => {
     setText(t);
     saveDraft(bd.id, hole.index, t);
     setProblem(null);
+    setConfirming(false);
   };
   // A reading from an indicator fills the field and never fixes the hole: fixing stays the person's act.
   const indicator = useIndicatorInput({
@@ -57,22 +59,26 @@ export function HoleEntryPanel({ bd, hole, isNext, refusal, onFixed, onRefused }
   const difference = typed !== null && hole.target !== null ? typed - hole.target : null;
   const within = difference !== null && Math.abs(difference) <= bd.band + 1e-9;
 
-  async function fix(e: FormEvent) {
+  const send = () => {
+    if (typed === null) return;
+    record({ index: hole.index, positionMm: hole.position, reading: typed, fixed: true });
+    // The entry is kept by the device's queue from here on; the draft is no longer needed.
+    saveDraft(bd.id, hole.index, '');
+    onFixed(hole.index);
+  };
+
+  function fix(e: FormEvent) {
     e.preventDefault();
     if (typed === null) {
       setProblem(text.trim() ? `“${text}” is not a number: type the indicator reading in ${unit}` : `Type the indicator reading in ${unit} first`);
       return;
     }
-    try {
-      const sending = record.mutateAsync({ index: hole.index, positionMm: hole.position, reading: typed, unit: bd.readingUnit, fixed: true });
-      // The write itself is kept by the queue from here on; the draft is no longer needed.
-      saveDraft(bd.id, hole.index, '');
-      await sending;
-      onFixed(hole.index);
-    } catch (err) {
-      // Refused by the server: back to this hole with what was typed, so it can be corrected.
-      onRefused({ index: hole.index, text, message: err instanceof ApiError ? err.details.join('; ') || err.message : String(err) });
+    if (difference !== null && !within) {
+      // Enter (or the Fix button) on a miss only shows the miss; fixing it needs the confirm below.
+      setConfirming(true);
+      return;
     }
+    send();
   }
 
   const colour = difference === null ? 'text.secondary' : within ? palette.within : palette.brass;
@@ -84,7 +90,14 @@ export function HoleEntryPanel({ bd, hole, isNext, refusal, onFixed, onRefused }
         </Typography>
         <Typography color="text.secondary">{positionText(hole.position, bd.lengthUnit)} from the rail start</Typography>
         {isNext ? <Chip size="small" color="primary" label="Next in the order" /> : <Chip size="small" variant="outlined" label={`No. ${hole.order + 1} in the order`} />}
-        {hole.fixed && <Chip size="small" color="success" variant="outlined" label={`Fixed at ${signed(hole.reading, bd.readingUnit)}`} />}
+        {hole.fixed && (
+          <Chip
+            size="small"
+            color={hole.onTarget === false ? 'warning' : 'success'}
+            variant="outlined"
+            label={`Fixed at ${signed(hole.reading, bd.readingUnit)}${hole.onTarget === false ? `, ${plain(Math.abs(hole.difference ?? 0), bd.readingUnit)} off its aim` : ''}`}
+          />
+        )}
       </Stack>
       <IndicatorPanel indicator={indicator} nextLabel="this hole's reading" />
 
@@ -103,7 +116,8 @@ export function HoleEntryPanel({ bd, hole, isNext, refusal, onFixed, onRefused }
             value={text}
             onChange={(e) => typeIn(e.target.value)}
             error={!!problem}
-            helperText={problem ?? 'Enter fixes the hole (a reading sent by an indicator does not)'}
+            helperText={problem ?? 'Enter fixes the hole when the reading is within the band (a reading sent by an indicator never does)'}
+            inputRef={inputRef}
             slotProps={{ htmlInput: { inputMode: 'decimal', autoComplete: 'off', 'data-indicator-cell': 'reading', style: { fontSize: '1.8rem', padding: '10px 12px' } } }}
             sx={{ mt: 2, width: '100%', maxWidth: 320 }}
             size="medium"
@@ -126,12 +140,43 @@ export function HoleEntryPanel({ bd, hole, isNext, refusal, onFixed, onRefused }
         </Box>
       </Box>
 
+      {confirming && difference !== null && (
+        <Alert
+          severity="warning"
+          sx={{ mt: 2 }}
+          role="alert"
+          data-testid="miss-confirm"
+          action={
+            <Stack direction={{ xs: 'column', sm: 'row' }} spacing={1} sx={{ alignItems: 'stretch' }}>
+              <Button
+                color="inherit"
+                variant="outlined"
+                onClick={() => {
+                  setConfirming(false);
+                  inputRef.current?.focus();
+                }}
+              >
+                Keep nudging
+              </Button>
+              <Button color="warning" variant="contained" onClick={send} sx={{ whiteSpace: 'nowrap' }}>
+                Fix it anyway
+              </Button>
+            </Stack>
+          }
+        >
+          <AlertTitle>
+            {holeName(hole.index)} reads {plain(Math.abs(difference), bd.readingUnit)} {difference > 0 ? 'above' : 'below'} its aim
+          </AlertTitle>
+          The band is ±{plain(bd.band, bd.readingUnit)}, so this is {plain(Math.max(Math.abs(difference) - bd.band, 0), bd.readingUnit)} outside it. Holes fixed after this one are aimed
+          from it. Nudge the rail to {signed(hole.target, bd.readingUnit)}, or fix it here on purpose.
+        </Alert>
+      )}
       {refusal && !problem && (
         <Alert severity="error" sx={{ mt: 2 }}>
           The server refused the reading {refusal.text} {unit}: {refusal.message}. Nothing else was changed.
         </Alert>
       )}
-      <Button type="submit" variant="contained" size="large" startIcon={<CheckOutlined />} disabled={record.isPending} sx={{ mt: 2, px: 4, py: 1.25, fontSize: '1.1rem' }}>
+      <Button type="submit" variant="contained" size="large" startIcon={<CheckOutlined />} disabled={confirming} sx={{ mt: 2, px: 4, py: 1.25, fontSize: '1.1rem' }}>
         Fix {holeName(hole.index).toLowerCase()}
       </Button>
     </Paper>

@@ -2,10 +2,11 @@ import { Chip, Paper, Table, TableBody, TableCell, TableContainer, TableHead, Ta
 import { positionIn } from '../utils/position-text';
 import CloudUploadOutlined from '@mui/icons-material/CloudUploadOutlined';
 import CheckCircleOutlined from '@mui/icons-material/CheckCircleOutlined';
-import { UNIT_LABELS } from '../../../lib/units';
+import WarningAmberOutlined from '@mui/icons-material/WarningAmberOutlined';
+import { UNIT_LABELS, type LengthUnit } from '../../../lib/units';
 import type { BoltDown } from '../types';
 import type { GuideHole } from '../utils/guide-state';
-import { signed } from '../utils/format';
+import { plain, signed } from '../utils/format';
 
 interface Props {
   bd: BoltDown;
@@ -16,8 +17,16 @@ interface Props {
   onSelect?: (index: number) => void;
 }
 
-function State({ hole, isNext }: { hole: GuideHole; isNext: boolean }) {
+function State({ hole, isNext, unit, band }: { hole: GuideHole; isNext: boolean; unit: LengthUnit; band: number }) {
   if (hole.waiting) return <Chip size="small" icon={<CloudUploadOutlined />} label="Waiting to send" sx={{ bgcolor: 'rgba(200,147,42,0.18)', color: '#6b4a0c' }} />;
+  if (hole.fixed && hole.onTarget === false) {
+    // Fixed on purpose outside its band: never shown like a hole fixed on target.
+    return (
+      <Tooltip title={`Fixed ${hole.difference === null ? '' : `${signed(Math.abs(hole.difference), unit).replace(/^[+−]/, '')} off its aim, `}outside the ±${plain(band, unit)} band${hole.fixedBy ? `, by ${hole.fixedBy}` : ''}`}>
+        <Chip size="small" color="warning" icon={<WarningAmberOutlined />} label="Fixed outside band" />
+      </Tooltip>
+    );
+  }
   if (hole.fixed) {
     return (
       <Tooltip title={hole.fixedAt ? `Fixed by ${hole.fixedBy ?? 'someone'} at ${new Date(hole.fixedAt).toLocaleString()}` : 'Fixed'}>
@@ -66,7 +75,7 @@ export function HolesTable({ bd, holes, nextHole, selected, onSelect }: Props) {
                 {h.difference === null ? '—' : signed(h.difference, bd.readingUnit).replace(` ${unit}`, '')}
               </TableCell>
               <TableCell>
-                <State hole={h} isNext={h.index === nextHole} />
+                <State hole={h} isNext={h.index === nextHole} unit={bd.readingUnit} band={bd.band} />
               </TableCell>
             </TableRow>
           ))}

@@ -1,6 +1,11 @@
-import type { QueuedWrite } from '../../../lib/offline-queue';
 import type { HoleWriteBody } from '../api/record-hole';
 import type { BoltDown, BoltDownHole, BoltDownMode } from '../types';
+
+/** An entry of this device not yet recorded: its path and body. */
+export interface WaitingWrite {
+  path: string;
+  body?: unknown;
+}
 
 export interface GuideHole extends BoltDownHole {
   /** A write for this hole is kept on this device, waiting to be sent. */
@@ -24,7 +29,7 @@ export interface GuideState {
  * line between the nearest fixed holes either side, or the nearest one beyond the ends), so work
  * can go on without a connection; once the writes are sent the server's values replace these.
  */
-export function guideState(bd: BoltDown, waiting: readonly QueuedWrite[]): GuideState {
+export function guideState(bd: BoltDown, waiting: readonly WaitingWrite[]): GuideState {
   const own = waiting.filter((w) => w.path.startsWith(`/bolt-downs/${bd.id}/holes/`));
   if (!own.length) return finish(bd.holes.map((h) => ({ ...h, waiting: false })), bd.nextHole, bd.fixedCount, bd.complete, 0);
 

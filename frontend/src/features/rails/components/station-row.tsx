@@ -41,8 +41,12 @@ export const StationRow = memo(function StationRow({ index: i, row: r, unit, pro
           onChange={(e) => onRowChange(i, { reading: e.target.value })}
           onKeyDown={(e) => {
             if (e.key === 'Enter') {
+              // Enter only ever moves on to the next station's reading; it never drops a row.
               e.preventDefault();
               onEnter(i);
+            } else if (e.key === 'Delete' && (e.ctrlKey || e.metaKey)) {
+              e.preventDefault();
+              onDrop(i);
             }
           }}
           inputRef={(el: HTMLInputElement | null) => inputRef(i, el)}
@@ -50,7 +54,7 @@ export const StationRow = memo(function StationRow({ index: i, row: r, unit, pro
           helperText={problem}
           autoComplete="off"
           slotProps={{
-            htmlInput: { inputMode: 'decimal', 'aria-label': `Reading at ${r.position || '?'} mm`, enterKeyHint: 'next', 'data-indicator-cell': i },
+            htmlInput: { inputMode: 'decimal', 'aria-label': `Reading at ${r.position || '?'} mm`, 'aria-keyshortcuts': 'Control+Delete', enterKeyHint: 'next', 'data-indicator-cell': i },
             input: { endAdornment: <InputAdornment position="end">{UNIT_LABELS[unit]}</InputAdornment> },
           }}
           sx={{ width: { xs: 124, sm: 130 } }}
@@ -60,8 +64,9 @@ export const StationRow = memo(function StationRow({ index: i, row: r, unit, pro
         {residual === null || residual === undefined ? '' : `${residual >= 0 ? '+' : ''}${residual.toFixed(DECIMALS[unit])}`}
       </TableCell>
       <TableCell>
-        <Tooltip title="Drop this station">
-          <IconButton size="small" aria-label={`Drop station ${i + 1}`} tabIndex={-1} onClick={() => onDrop(i)}>
+        {/* Out of the tab order, so Tab goes from reading to reading; Ctrl+Delete in the reading drops it too. */}
+        <Tooltip title="Drop this station (Ctrl+Delete in its reading)">
+          <IconButton size="small" aria-label={`Drop station ${i + 1}`} aria-keyshortcuts="Control+Delete" tabIndex={-1} onClick={() => onDrop(i)}>
             <DeleteOutline fontSize="small" />
           </IconButton>
         </Tooltip>

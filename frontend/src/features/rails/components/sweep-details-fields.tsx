@@ -19,11 +19,8 @@ export const SweepDetailsFields = memo(function SweepDetailsFields({
   onChange: (patch: Partial<Details>) => void;
 }) {
   const usual = torques?.bolts.find((b) => b.boltSize === value.boltSize);
-  const pickBolt = (boltSize: string) => {
-    const next = torques?.bolts.find((b) => b.boltSize === boltSize);
-    const torqueWasUsual = !value.torqueNm || torques?.bolts.some((b) => String(b.torqueNm) === value.torqueNm);
-    onChange({ boltSize, ...(torqueWasUsual ? { torqueNm: next ? String(next.torqueNm) : '' } : {}) });
-  };
+  // The usual torque is offered (the "Use" button), never filled in: only a torque typed or accepted is recorded.
+  const pickBolt = (boltSize: string) => onChange({ boltSize });
   const setPhase = (phase: SweepPhase) => onChange({ phase });
   return (
     <Stack spacing={2}>
@@ -79,7 +76,11 @@ export const SweepDetailsFields = memo(function SweepDetailsFields({
               ),
             },
           }}
-          helperText={usual ? `Usual for ${usual.boltSize} into steel: ${usual.torqueNm} N·m (a rail maker's table; follow your rail's instructions)` : 'Pick a bolt size for the usual torque'}
+          helperText={
+            usual
+              ? `Usual for ${usual.boltSize} into steel: ${usual.torqueNm} N·m (a rail maker's table; follow your rail's instructions)${value.torqueNm.trim() ? '' : ' — recorded only if typed or used'}`
+              : 'Pick a bolt size for the usual torque'
+          }
           sx={{ gridColumn: { lg: 'span 2' } }}
         />
       </Box>

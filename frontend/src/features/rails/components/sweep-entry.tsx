@@ -1,12 +1,13 @@
 import { useCallback, useDeferredValue, useMemo, useRef, useState } from 'react';
-import { Alert, Box, Button, Grid, InputAdornment, MenuItem, Paper, Stack, TextField, ToggleButton, ToggleButtonGroup, Typography } from '@mui/material';
+import { Alert, Box, Button, Grid, InputAdornment, MenuItem, Paper, Snackbar, Stack, TextField, ToggleButton, ToggleButtonGroup, Typography } from '@mui/material';
 import FileUploadOutlined from '@mui/icons-material/FileUploadOutlined';
 import { IndicatorPanel } from '../../../components/indicator-input/indicator-panel';
 import { useIndicatorInput } from '../../../components/indicator-input/use-indicator-input';
 import { fromMm, UNIT_LABELS } from '../../../lib/units';
 import { UnitFamilySelect } from '../../../components/form/unit-select';
 import { useBoltTorques } from '../api/get-bolt-torques';
-import { useRecordSweep } from '../api/record-sweep';
+import { sweepsPath, useRecordSweep } from '../api/record-sweep';
+import { useWaitingEntries } from '../../../lib/offline/use-waiting-entries';
 import { useStraightnessPreview } from '../api/preview-straightness';
 import { useDebounced } from '../../../lib/use-debounced';
 import { newDraft, useSweepDraft, type StationDraft, type SweepDraft } from '../hooks/use-sweep-draft';
@@ -27,14 +28,32 @@ export function SweepEntry({ rail, target, takenBy, onSaved }: { rail: Rail; tar
   const [csvOpen, setCsvOpen] = useState(false);
   const saveRef = useRef<HTMLButtonElement>(null);
   const torques = useBoltTorques();
-  const record = useRecordSweep(rail.id);
+  const record = useRecordSweep(rail);
+  const waiting = useWaitingEntries(sweepsPath(rail.id));
+  const [refused, setRefused] = useState<string | null>(null);
   // Stable callbacks (setDraft keeps its identity), so memoised rows and fields skip re-rendering.
   const patch = useCallback((p: Partial<SweepDraft>) => setDraft((d) => ({ ...d, ...p })), [setDraft]);
   const setRow = useCallback(
     (i: number, p: Partial<StationDraft>) => setDraft((d) => ({ ...d, stations: d.stations.map((r, k) => (k === i ? { ...r, ...p } : r)) })),
     [setDraft],
   );
-  const dropRow = useCallback((i: number) => setDraft((d) => ({ ...d, stations: d.stations.filter((_, k) => k !== i) })), [setDraft]);
+  // A dropped station can be put back (the snackbar's Undo) where it was, reading and all.
+  const [dropped, setDropped] = useState<{ index: number; row: StationDraft } | null>(null);
+  const dropRow = useCallback(
+    (i: number) =>
+      setDraft((d) => {
+        const row = d.stations[i];
+        if (!row) return d;
+        setDropped({ index: i, row });
+        return { ...d, stations: d.stations.filter((_, k) => k !== i) };
+      }),
+    [setDraft],
+  );
+  const undoDrop = () => {
+    if (!dropped) return;
+    setDraft((d) => ({ ...d, stations: [...d.stations.slice(0, dropped.index), dropped.row, ...d.stations.slice(dropped.index)] }));
+    setDropped(null);
+  };
   const focusSave = useCallback(() => saveRef.current?.focus(), []);
   // An indicator's reading goes to the station it was typed at, or else the first without a reading.
   const indicator = useIndicatorInput({
@@ -78,7 +97,9 @@ export function SweepEntry({ rail, target, takenBy, onSaved }: { rail: Rail; tar
   };
   const save = () => {
     if (!body) return;
-    record.mutate(
+    const sent = draft;
+    setRefused(null);
+    record.send(
       {
         id: draft.id,
         readingUnit: draft.unit,
@@ -96,13 +117,17 @@ export function SweepEntry({ rail, target, takenBy, onSaved }: { rail: Rail; tar
         notes: draft.notes.trim() || undefined,
       },
       {
-        onSuccess: (sweep) => {
-          // Keep the set-up (instrument, datum, bolts) for the next sweep; clear the readings.
-          setDraft(({ id: _saved, stations, ...setUp }) => newDraft(stations.map((s) => ({ ...s, reading: '' })), setUp));
-          onSaved(sweep);
+        onSuccess: onSaved,
+        // Refused by the server: the readings come back to the form with the reason, nothing lost.
+        onError: (err) => {
+          setDraft(sent);
+          setRefused(err.message);
         },
       },
     );
+    // The entry is kept by the device's queue from here on (sent now, or when the connection
+    // returns): keep the set-up (instrument, datum, bolts) for the next sweep; clear the readings.
+    setDraft(({ id: _saved, stations, ...setUp }) => newDraft(stations.map((s) => ({ ...s, reading: '' })), setUp));
   };
 
   return (
@@ -155,16 +180,32 @@ export function SweepEntry({ rail, target, takenBy, onSaved }: { rail: Rail; tar
         </Grid>
       </Grid>
       <Box sx={{ display: 'flex', gap: 2, alignItems: 'center', flexWrap: 'wrap', mt: 2.5 }}>
-        <Button ref={saveRef} variant="contained" size="large" onClick={save} disabled={!body || record.isPending}>
-          {record.isPending ? 'Saving…' : 'Save sweep'}
+        <Button ref={saveRef} variant="contained" size="large" onClick={save} disabled={!body}>
+          Save sweep
         </Button>
         <Typography color="text.secondary">
           {ready.stations.length} reading{ready.stations.length === 1 ? '' : 's'}
           {ready.blank ? ` · ${ready.blank} station${ready.blank === 1 ? '' : 's'} without a reading will be left out` : ''}
           {ready.problems.size ? ` · ${ready.problems.size} to fix` : ''}
         </Typography>
-        {record.error && <Alert severity="error" sx={{ flex: '1 1 100%' }}>{record.error.message} — nothing was lost; fix it and save again.</Alert>}
+        {refused && <Alert severity="error" sx={{ flex: '1 1 100%' }}>{refused} — nothing was lost; fix it and save again.</Alert>}
+        {waiting.map((w) => (
+          <Alert key={w.key} severity="info" sx={{ flex: '1 1 100%' }} data-testid="sweep-waiting">
+            Waiting to send: {w.label}. It is kept on this device and recorded once when the connection returns.
+          </Alert>
+        ))}
       </Box>
+      <Snackbar
+        open={!!dropped}
+        autoHideDuration={10_000}
+        onClose={(_, why) => why !== 'clickaway' && setDropped(null)}
+        message={dropped ? `Removed station ${dropped.index + 1} at ${dropped.row.position || '?'} ${UNIT_LABELS[draft.lengthUnit]}${dropped.row.reading.trim() ? ` (reading ${dropped.row.reading})` : ''}` : ''}
+        action={
+          <Button color="inherit" size="small" onClick={undoDrop}>
+            Undo
+          </Button>
+        }
+      />
       <CsvImportDialog
         open={csvOpen}
         unit={draft.unit}

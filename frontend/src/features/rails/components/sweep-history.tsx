@@ -2,6 +2,7 @@ import { useState } from 'react';
 import { Alert, Box, Button, Checkbox, IconButton, Paper, Stack, Table, TableBody, TableCell, TableHead, TableRow, Tooltip, Typography } from '@mui/material';
 import DeleteOutline from '@mui/icons-material/DeleteOutlined';
 import LockOutlined from '@mui/icons-material/LockOutlined';
+import EditOutlined from '@mui/icons-material/EditOutlined';
 import { SweepOverlayChart } from '../../../components/charts/sweep-overlay-chart';
 import { fromMm, UNIT_LABELS } from '../../../lib/units';
 import { useDeleteSweep } from '../api/delete-sweep';
@@ -11,6 +12,7 @@ import { PHASE_LABELS } from '../types';
 import { showInTargetUnit } from '../utils/display';
 import { CheckStatusChip } from './check-status-chip';
 import { SweepResult } from './sweep-result';
+import { EditSweepDetailsDialog } from './edit-sweep-details-dialog';
 import { UnreadableRecord } from '../../../components/unreadable-record';
 import { ResponsiveTable } from '../../../components/table/responsive-table';
 
@@ -25,6 +27,7 @@ export function SweepHistory({ sweeps, canRecord }: { sweeps: SweepListItem[]; c
   const [chosenIds, setPicked] = useState<string[] | null>(null);
   const picked = chosenIds ?? sweeps.slice(0, 2).map((s) => s.id);
   const [open, setOpen] = useState<string | null>(null);
+  const [editing, setEditing] = useState<SweepListItem | null>(null);
   const remove = useDeleteSweep();
   const more = useSweeps(sweeps[0]?.railId ?? '');
   const full = useSweepsById([...picked, ...(open && !picked.includes(open) ? [open] : [])]);
@@ -86,6 +89,11 @@ export function SweepHistory({ sweeps, canRecord }: { sweeps: SweepListItem[]; c
                     <Button size="small" onClick={() => setOpen(open === s.id ? null : s.id)}>
                       {open === s.id ? 'Close' : 'Open'}
                     </Button>
+                    {canRecord && !s.locked && (
+                      <Button size="small" startIcon={<EditOutlined />} onClick={() => setEditing(s)} aria-label={`Edit details of the sweep of ${when(s)}`}>
+                        Edit details
+                      </Button>
+                    )}
                     {s.locked ? (
                       <Tooltip title="Part of an approval: kept as it is">
                         <LockOutlined fontSize="small" sx={{ verticalAlign: 'middle', color: 'text.secondary', ml: 1 }} aria-label="Locked by an approval" />
@@ -127,6 +135,7 @@ export function SweepHistory({ sweeps, canRecord }: { sweeps: SweepListItem[]; c
           </Box>
         )}
       </Paper>
+      {editing && <EditSweepDetailsDialog sweepId={editing.id} title={`sweep of ${when(editing)}`} onClose={() => setEditing(null)} />}
       {opened && <SweepResult sweep={opened} title={`Sweep of ${when(opened)}`} />}
     </Stack>
   );
