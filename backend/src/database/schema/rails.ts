@@ -107,12 +107,14 @@ export const railSweeps = pgTable(
   },
   (t) => [
     index('rail_sweeps_rail_idx').on(t.railId, t.takenAt),
-    // The newest sweep of a rail in one index step, however many it has.
-    index('rail_sweeps_latest_idx').on(t.railId, t.takenAt.desc(), t.createdAt.desc()),
+    // The newest sweep of a rail in one index step, however many it has. The order is exactly the
+    // queries' (`desc` puts nulls first): an index sorted nulls last would make PostgreSQL sort
+    // every sweep of the rail to find the newest.
+    index('rail_sweeps_latest_desc_idx').on(t.railId, t.takenAt.desc().nullsFirst(), t.createdAt.desc().nullsFirst()),
     // The newest sweep of a rail against each named datum and face (partner parallelism), also in
     // index steps: with the face in the key, a face never swept does not walk every other sweep.
-    index('rail_sweeps_datum_face_idx')
-      .on(t.railId, sql`lower(${t.datum})`, t.face, t.takenAt.desc(), t.createdAt.desc())
+    index('rail_sweeps_datum_face_desc_idx')
+      .on(t.railId, sql`lower(${t.datum})`, t.face, t.takenAt.desc().nullsFirst(), t.createdAt.desc().nullsFirst())
       .where(sql`${t.datum} is not null`),
   ],
 );
