@@ -8,4 +8,5 @@ export const chartColors = {
   up: palette.steel,
   down: '#a4522f',
   grid: '#e2ded4',
+  target: palette.within,
 };
