@@ -73,6 +73,7 @@ export function PositioningResult({ run, mayDelete }: { run: PositioningRun; may
       <PositioningChart
         label={`Mean deviations up and down with ±2s bands, ${ul}`}
         unitLabel={ul}
+        target={{ width: fromMm(checks.accuracy.targetMm, u), label: `Accuracy target ${showTarget(checks.accuracy.target)} wide` }}
         targets={r.targets.map((t) => ({ target: t.target, meanUp: fromMm(t.meanUp, u), meanDown: fromMm(t.meanDown, u), sUp: fromMm(t.sUp, u), sDown: fromMm(t.sDown, u) }))}
       />
       <Box sx={{ overflowX: 'auto', mt: 1 }}>

@@ -2,7 +2,7 @@ import { Alert, Box, Paper, Typography } from '@mui/material';
 import { SweepOverlayChart } from '../../../components/charts/sweep-overlay-chart';
 import { fromMm, UNIT_LABELS } from '../../../lib/units';
 import { useParallelism } from '../api/get-parallelism';
-import { isLengthUnit, showInTargetUnit, showLength, showTarget } from '../utils/display';
+import { isLengthUnit, showInTargetUnit, showLength, showTarget, targetMm } from '../utils/display';
 import { CheckStatusChip } from './check-status-chip';
 
 /** Parallelism and height difference of one partner pair, against their targets. */
@@ -51,6 +51,7 @@ export function PairParallelismSummary({ railId, title, partnerLabel }: { railId
             height={200}
             unitLabel={UNIT_LABELS[unit]}
             yLabel="B − A"
+            target={{ width: fromMm(targetMm(q.data.targets.parallelism), unit), label: `Parallelism target ${showTarget(q.data.targets.parallelism)} wide` }}
             series={[{ name: `B − A: ${partnerLabel} minus this rail`, points: q.data.positions.map((position, i) => ({ position, value: fromMm(q.data!.differences![i], unit) })) }]}
           />
         </Box>

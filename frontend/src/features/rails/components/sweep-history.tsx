@@ -9,12 +9,16 @@ import { useDeleteSweep } from '../api/delete-sweep';
 import { useSweepsById } from '../api/get-sweep';
 import { useSweeps, type SweepListItem } from '../api/get-sweeps';
 import { PHASE_LABELS } from '../types';
-import { showInTargetUnit } from '../utils/display';
+import { isLengthUnit, showInTargetUnit, showTarget, targetMm } from '../utils/display';
 import { CheckStatusChip } from './check-status-chip';
 import { SweepResult } from './sweep-result';
 import { EditSweepDetailsDialog } from './edit-sweep-details-dialog';
 import { UnreadableRecord } from '../../../components/unreadable-record';
 import { ResponsiveTable } from '../../../components/table/responsive-table';
+
+/** The straightness target as a zone of its full width, in the chart's unit. */
+const targetZone = (t: { value: number; unit: string } | undefined, unit: Parameters<typeof fromMm>[1]) =>
+  t && isLengthUnit(t.unit) ? { width: fromMm(targetMm(t), unit), label: `Target zone ${showTarget(t)} wide` } : null;
 
 const when = (s: { takenAt: string }) => new Date(s.takenAt).toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' });
 
@@ -127,6 +131,7 @@ export function SweepHistory({ sweeps, canRecord }: { sweeps: SweepListItem[]; c
               label="Sweeps overlaid"
               unitLabel={UNIT_LABELS[unit]}
               yLabel="Deviation"
+              target={targetZone(sweeps.find((s) => s.id === chosen[0].id)?.target, unit)}
               series={chosen.map((s) => ({
                 name: `${when(s)} (${PHASE_LABELS[s.phase].toLowerCase()})`,
                 points: s.stations.map((st, i) => ({ position: st.positionMm, value: fromMm(s.result.leastSquares.residuals[i], unit) })),

@@ -3,7 +3,7 @@ import { Box, Stack, Typography } from '@mui/material';
 import { StraightnessChart } from '../../../components/charts/straightness-chart';
 import { fromMm, toMm, UNIT_LABELS, type LengthUnit } from '../../../lib/units';
 import type { StraightnessResult, TargetValue } from '../types';
-import { showInTargetUnit, showLength, showTarget, targetMm } from '../utils/display';
+import { isLengthUnit, showInTargetUnit, showLength, showTarget, targetMm } from '../utils/display';
 import { CheckStatusChip } from './check-status-chip';
 
 /**
@@ -50,6 +50,7 @@ export const SweepPreview = memo(function SweepPreview({
         points={pointsMm}
         leastSquares={{ slope: u(ls.slope), intercept: u(ls.intercept) }}
         zone={{ slope: u(mz.slope), intercept: u(mz.intercept), width: u(mz.straightness) }}
+        target={target && isLengthUnit(target.unit) ? { width: u(targetMm(target)), reference: leastSquares ? 'least-squares' : 'minimum-zone', label: `Target zone ${showTarget(target)} wide` } : null}
         unitLabel={UNIT_LABELS[unit]}
         height={300}
         label={label}
