@@ -44,7 +44,7 @@ const stackedOnPhone = (titleFirst: boolean) => (theme: Theme) => ({
     '& table, & tbody, & tr, & td': { display: 'block', width: '100%', boxSizing: 'border-box' },
     '& table': { minWidth: 0 },
     // The header is read from each cell's label; keep it for screen readers only.
-    '& thead': { display: 'block', position: 'absolute', width: 1, height: 1, overflow: 'hidden', clip: 'rect(0 0 0 0)', whiteSpace: 'nowrap' },
+    '& thead': { display: 'block', position: 'absolute', width: '1px', height: '1px', overflow: 'hidden', clip: 'rect(0 0 0 0)', whiteSpace: 'nowrap' },
     '& tbody tr': {
       border: `1px solid ${theme.palette.divider}`,
       borderRadius: `${theme.shape.borderRadius}px`,

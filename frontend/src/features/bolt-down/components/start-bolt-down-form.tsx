@@ -43,7 +43,7 @@ export function StartBoltDownForm({ rail, onStarted }: Props) {
         <FormLabel id="bolt-down-mode">What each hole is aimed at</FormLabel>
         <RadioGroup aria-labelledby="bolt-down-mode" value={mode} onChange={(e) => setMode(e.target.value as BoltDownMode)}>
           {(['line', 'face'] as const).map((m) => (
-            <FormControlLabel key={m} value={m} control={<Radio />} label={<span><strong>{MODE_LABELS[m]}</strong> — {MODE_EXPLAINED[m]}</span>} sx={{ alignItems: 'flex-start', mb: 1, '& .MuiRadio-root': { pt: 0.5 } }} />
+            <FormControlLabel key={m} value={m} control={<Radio />} label={<span><strong>{MODE_LABELS[m]}</strong> — {MODE_EXPLAINED[m]}</span>} sx={{ alignItems: 'flex-start', mb: 1, '& .MuiRadio-root': { pt: { md: 0.5 } } }} />
           ))}
         </RadioGroup>
       </FormControl>

@@ -75,7 +75,7 @@ export function HolePatternsPanel({ machineId }: { machineId: string }) {
             <Grid key={p.id} size={{ xs: 12, sm: 6, lg: 4 }}>
               <Card variant="outlined" sx={{ height: '100%' }}>
                 <CardContent>
-                  <Link component={RouterLink} to={paths.holePattern(machineId, p.id)} variant="h4">
+                  <Link component={RouterLink} to={paths.holePattern(machineId, p.id)} variant="h4" sx={{ display: 'inline-flex', alignItems: 'center', minHeight: { xs: 44, md: 'auto' } }}>
                     {p.name}
                   </Link>
                   <Typography variant="body2" color="text.secondary" sx={{ mb: 1 }}>
