@@ -82,11 +82,11 @@ test.describe('drives', () => {
     await expect(page.getByRole('heading', { name: 'Axis X' })).toBeVisible();
     await expect(page.getByText('Theoretical from the drive')).toBeVisible();
 
-    // Travel trial: type the first move, Enter to the next row, paste the rest.
+    // Travel trial: type the first move, Enter to the next row's first cell, paste the rest.
     await page.getByLabel('Commanded move 1').fill('200');
     await page.getByLabel('Measured move 1').fill('199.8');
     await page.getByLabel('Measured move 1').press('Enter');
-    await expect(page.getByLabel('Measured move 2')).toBeFocused();
+    await expect(page.getByLabel('Commanded move 2')).toBeFocused();
     await paste(page.getByLabel('Commanded move 2'), '400\t399.6\n800\t799.2\n');
     await expect(page.getByLabel('Measured move 3')).toHaveValue('799.2');
     await page.getByRole('button', { name: 'Record trial' }).click();
@@ -109,6 +109,9 @@ test.describe('drives', () => {
     // Repeat-and-reverse: µm, targets pasted into the header row, the 10 × 5 block into the first cell.
     await page.getByLabel('Deviations in').click();
     await page.getByRole('option', { name: 'µm' }).click();
+    // Five targets of our own in place of the test program's.
+    await page.getByRole('combobox', { name: 'Targets', exact: true }).click();
+    await page.getByRole('option', { name: '5', exact: true }).click();
     await paste(page.getByLabel('Target 1 (mm)'), '15\t236.2\t452.9\t674.3\t895');
     await expect(page.getByLabel('Target 5 (mm)')).toHaveValue('895');
     const block = [
@@ -117,9 +120,9 @@ test.describe('drives', () => {
     ];
     await paste(page.getByLabel('Up 1, target 1'), block.map((r) => r.join('\t')).join('\n'));
     await expect(page.getByLabel('Down 5, target 5')).toHaveValue('-4');
-    // Enter moves down a column.
+    // Enter goes to the next row's first cell.
     await page.getByLabel('Up 1, target 2').press('Enter');
-    await expect(page.getByLabel('Down 1, target 2')).toBeFocused();
+    await expect(page.getByLabel('Down 1, target 1')).toBeFocused();
     await snap(page, 'axis-run-grid-desktop');
     await page.getByRole('button', { name: 'Record run' }).click();
     const run = page.getByRole('region', { name: 'Repeat-and-reverse result' });

@@ -42,6 +42,26 @@ async function settled(page: Page) {
   await expect(page.locator('.MuiDialog-container')).toHaveCSS('opacity', '1');
 }
 
+/** Resolves once the device keeps the signed-in person (IndexedDB, lib/offline/persister.ts). */
+async function signInKept(page: Page) {
+  await page.waitForFunction(
+    () =>
+      new Promise<boolean>((resolve) => {
+        const open = indexedDB.open('keyval-store');
+        open.onerror = () => resolve(false);
+        open.onsuccess = () => {
+          const db = open.result;
+          if (!db.objectStoreNames.contains('keyval')) return resolve(false);
+          const get = db.transaction('keyval', 'readonly').objectStore('keyval').get('railwright.cache.v1');
+          get.onerror = () => resolve(false);
+          get.onsuccess = () => resolve(JSON.stringify(get.result?.clientState?.queries?.map((q: { state: { data: unknown } }) => q.state.data) ?? []).includes('"role"'));
+        };
+      }),
+    undefined,
+    { polling: 100 },
+  );
+}
+
 async function openEvidence(page: Page, machineId: string) {
   await page.goto(`/machines/${machineId}?tab=evidence`);
   await expect(page.getByRole('tab', { name: 'Evidence', selected: true })).toBeVisible();
@@ -103,8 +123,13 @@ test.describe('evidence: photos and files', () => {
 
   test('drops files on the drop zone', async ({ page }) => {
     await signInAs(page, DEMO.technician);
+    // The sign-in is kept on the device a moment after it happens; a page opened before that
+    // starts from the sign-in kept before (none), goes by the sign-in page and comes back, and a
+    // drop made meanwhile lands on a drop zone that is about to be replaced.
+    await signInKept(page);
     const machineId = await newMachine(page.request, `Drop table ${Date.now()}`);
     await openEvidence(page, machineId);
+    await expect(page.getByText('No evidence yet')).toBeVisible();
     const jpeg = (await railPhoto()).toString('base64');
     const data = await page.evaluateHandle((b64) => {
       const bytes = Uint8Array.from(atob(b64), (c) => c.charCodeAt(0));
@@ -113,6 +138,7 @@ test.describe('evidence: photos and files', () => {
       return dt;
     }, jpeg);
     await page.getByRole('group', { name: 'Attach photos or files to this machine' }).dispatchEvent('drop', { dataTransfer: data });
+    await expect(page.getByRole('list', { name: 'Uploads' }).getByText('dropped.jpg')).toBeVisible();
     await expect(page.getByRole('button', { name: 'View dropped.jpg full size' })).toBeVisible();
   });
 

@@ -3,6 +3,7 @@ import { ApiError, apiFetch, onNoAnswer } from '../api-client';
 import { noteNoAnswer } from './connection';
 import { newClientId } from '../client-id';
 import { setSessionOwner, whenSignedInAs } from './session-owner';
+import { sendForm, type CommandForm } from './send-form';
 
 /**
  * A recording made at the machine, as a mutation that survives a lost connection and a reload:
@@ -15,6 +16,8 @@ export interface CommandVariables {
   /** API path without /api, e.g. /rails/…/sweeps. */
   path: string;
   body?: unknown;
+  /** A multipart body instead (a photo and its fields; only with POST): the file is kept on the device as it is. */
+  form?: CommandForm;
   /** Client-made, one per entry (a UUID). */
   key: string;
   /** The person who typed it: their id (only their session may send it) and name (for the banner). */
@@ -36,6 +39,7 @@ export async function sendCommand<T>(v: CommandVariables): Promise<T> {
   for (;;) {
     await whenSignedInAs(v.ownerId);
     try {
+      if (v.form) return await sendForm<T>(v.path, v.key, v.form, noteNoAnswer);
       return await apiFetch<T>(v.path, { method: v.method, json: v.body ?? (v.method === 'DELETE' ? undefined : {}), headers: { 'Idempotency-Key': v.key } });
     } catch (err) {
       if (!(err instanceof ApiError) || err.status !== 401) throw err;

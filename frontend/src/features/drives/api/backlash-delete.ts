@@ -1,5 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
+import { MACHINE_STATE_KEYS } from '../../../lib/machine-state-keys';
 import { driveKeys } from '../types';
 
 /** Removes a check recorded in error (refused once an approval was based on it). */
@@ -7,6 +8,6 @@ export function useDeleteBacklash(axisId: string) {
   const qc = useQueryClient();
   return useMutation({
     mutationFn: (checkId: string) => api.delete<void>(`/axes/${axisId}/backlash-checks/${checkId}`),
-    onSuccess: () => Promise.all([qc.invalidateQueries({ queryKey: driveKeys.all }), qc.invalidateQueries({ queryKey: ['machines'] })]),
+    onSuccess: () => Promise.all([qc.invalidateQueries({ queryKey: driveKeys.all }), ...MACHINE_STATE_KEYS.map((queryKey) => qc.invalidateQueries({ queryKey }))]),
   });
 }

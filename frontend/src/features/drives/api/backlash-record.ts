@@ -1,5 +1,5 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { MACHINE_STATE_KEYS } from '../../../lib/machine-state-keys';
+import { useRecording } from '../../../lib/offline/use-command';
 import type { LengthUnit } from '../../../lib/units';
 import type { BacklashCheck, BacklashPosition } from '../backlash-types';
 import { driveKeys } from '../types';
@@ -12,10 +12,21 @@ export interface BacklashInput {
   notes?: string;
 }
 
-export function useRecordBacklash(axisId: string) {
-  const qc = useQueryClient();
-  return useMutation({
-    mutationFn: (input: BacklashInput) => api.post<BacklashCheck>(`/axes/${axisId}/backlash-checks`, input),
-    onSuccess: () => Promise.all([qc.invalidateQueries({ queryKey: driveKeys.all }), qc.invalidateQueries({ queryKey: ['machines'] })]),
-  });
+/** Records a backlash check through the device's queue of entries (see record-travel-trial.ts). */
+export function useRecordBacklash(axisId: string, axisName = '') {
+  const recording = useRecording<BacklashCheck>();
+  const record = (input: BacklashInput, on: { onRecorded?: (c: BacklashCheck) => void; onQueued?: () => void } = {}) =>
+    recording.record(
+      {
+        method: 'POST',
+        path: backlashChecksPath(axisId),
+        body: input,
+        label: `Backlash check of axis ${axisName} (${input.positions.length} positions)`,
+        refresh: [driveKeys.all, ...MACHINE_STATE_KEYS],
+      },
+      on,
+    );
+  return { ...recording, record };
 }
+
+export const backlashChecksPath = (axisId: string) => `/axes/${axisId}/backlash-checks`;

@@ -1,5 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
+import { MACHINE_STATE_KEYS } from '../../../lib/machine-state-keys';
 import { driveKeys, type Axis, type Drive } from '../types';
 import type { LengthUnit } from '../../../lib/units';
 
@@ -21,6 +22,6 @@ export function useCreateAxis(machineId: string) {
   const qc = useQueryClient();
   return useMutation({
     mutationFn: (input: AxisInput) => api.post<Axis>(`/machines/${machineId}/axes`, input),
-    onSuccess: () => Promise.all([qc.invalidateQueries({ queryKey: driveKeys.all }), qc.invalidateQueries({ queryKey: ['machines'] })]),
+    onSuccess: () => Promise.all([qc.invalidateQueries({ queryKey: driveKeys.all }), ...MACHINE_STATE_KEYS.map((queryKey) => qc.invalidateQueries({ queryKey }))]),
   });
 }

@@ -1,5 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
+import { MACHINE_STATE_KEYS } from '../../../lib/machine-state-keys';
 import { positioningRunQueryOptions } from './get-positioning-run';
 import { driveKeys } from '../types';
 
@@ -11,7 +12,7 @@ export function useDeletePositioningRun(axisId: string) {
     onSuccess: (_: void, runId: string) => {
       // Gone: nothing should ask for it again while the list catches up.
       qc.removeQueries({ queryKey: positioningRunQueryOptions(axisId, runId).queryKey, exact: true });
-      return Promise.all([qc.invalidateQueries({ queryKey: driveKeys.all }), qc.invalidateQueries({ queryKey: ['machines'] })]);
+      return Promise.all([qc.invalidateQueries({ queryKey: driveKeys.all }), ...MACHINE_STATE_KEYS.map((queryKey) => qc.invalidateQueries({ queryKey }))]);
     },
   });
 }

@@ -1,5 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
+import { MACHINE_STATE_KEYS } from '../../../lib/machine-state-keys';
 import { travelTrialQueryOptions } from './get-travel-trial';
 import { driveKeys } from '../types';
 
@@ -11,7 +12,7 @@ export function useDeleteTravelTrial(axisId: string) {
     onSuccess: (_: void, trialId: string) => {
       // Gone: nothing should ask for it again while the list catches up.
       qc.removeQueries({ queryKey: travelTrialQueryOptions(axisId, trialId).queryKey, exact: true });
-      return Promise.all([qc.invalidateQueries({ queryKey: driveKeys.all }), qc.invalidateQueries({ queryKey: ['machines'] })]);
+      return Promise.all([qc.invalidateQueries({ queryKey: driveKeys.all }), ...MACHINE_STATE_KEYS.map((queryKey) => qc.invalidateQueries({ queryKey }))]);
     },
   });
 }

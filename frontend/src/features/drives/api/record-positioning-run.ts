@@ -1,5 +1,6 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { useQueryClient } from '@tanstack/react-query';
+import { MACHINE_STATE_KEYS } from '../../../lib/machine-state-keys';
+import { useRecording } from '../../../lib/offline/use-command';
 import type { LengthUnit } from '../../../lib/units';
 import { positioningRunQueryOptions } from './get-positioning-run';
 import { driveKeys, type PositioningRun, type ScaleMaterial } from '../types';
@@ -18,14 +19,28 @@ export interface PositioningRunInput {
   notes?: string;
 }
 
-export function useRecordPositioningRun(axisId: string) {
+/** Records a run through the device's queue of entries (see record-travel-trial.ts). */
+export function useRecordPositioningRun(axisId: string, axisName = '') {
   const qc = useQueryClient();
-  return useMutation({
-    mutationFn: (input: PositioningRunInput) => api.post<PositioningRun>(`/axes/${axisId}/positioning-runs`, input),
-    onSuccess: (saved: PositioningRun) => {
-      // The answer is the record in full: the result above the list shows it without asking again.
-      qc.setQueryData(positioningRunQueryOptions(axisId, saved.id).queryKey, saved);
-      return Promise.all([qc.invalidateQueries({ queryKey: driveKeys.all }), qc.invalidateQueries({ queryKey: ['machines'] })]);
-    },
-  });
+  const recording = useRecording<PositioningRun>();
+  const record = (input: PositioningRunInput, on: { onRecorded?: (r: PositioningRun) => void; onQueued?: () => void } = {}) =>
+    recording.record(
+      {
+        method: 'POST',
+        path: positioningRunsPath(axisId),
+        body: input,
+        label: `Repeat-and-reverse run of axis ${axisName} (${input.targets.length} targets, ${input.runs.length / 2} runs each way)`,
+        refresh: [driveKeys.all, ...MACHINE_STATE_KEYS],
+      },
+      {
+        onQueued: on.onQueued,
+        onRecorded: (saved) => {
+          qc.setQueryData(positioningRunQueryOptions(axisId, saved.id).queryKey, saved);
+          on.onRecorded?.(saved);
+        },
+      },
+    );
+  return { ...recording, record };
 }
+
+export const positioningRunsPath = (axisId: string) => `/axes/${axisId}/positioning-runs`;

@@ -1,5 +1,6 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { useQueryClient } from '@tanstack/react-query';
+import { MACHINE_STATE_KEYS } from '../../../lib/machine-state-keys';
+import { useRecording } from '../../../lib/offline/use-command';
 import type { LengthUnit } from '../../../lib/units';
 import { travelTrialQueryOptions } from './get-travel-trial';
 import { driveKeys, type ScaleMaterial, type TravelTrial } from '../types';
@@ -19,14 +20,32 @@ export interface TravelTrialInput {
   notes?: string;
 }
 
-export function useRecordTravelTrial(axisId: string) {
+/**
+ * Records a trial through the device's queue of entries: sent at once with a connection, kept
+ * and sent once when it returns without one. Refreshes the axis's records and the machine's state.
+ */
+export function useRecordTravelTrial(axisId: string, axisName = '') {
   const qc = useQueryClient();
-  return useMutation({
-    mutationFn: (input: TravelTrialInput) => api.post<TravelTrial>(`/axes/${axisId}/travel-trials`, input),
-    onSuccess: (saved: TravelTrial) => {
-      // The answer is the record in full: the result above the list shows it without asking again.
-      qc.setQueryData(travelTrialQueryOptions(axisId, saved.id).queryKey, saved);
-      return Promise.all([qc.invalidateQueries({ queryKey: driveKeys.all }), qc.invalidateQueries({ queryKey: ['machines'] })]);
-    },
-  });
+  const recording = useRecording<TravelTrial>();
+  const record = (input: TravelTrialInput, on: { onRecorded?: (t: TravelTrial) => void; onQueued?: () => void } = {}) =>
+    recording.record(
+      {
+        method: 'POST',
+        path: travelTrialsPath(axisId),
+        body: input,
+        label: `Travel trial of axis ${axisName} (${input.moves.length} ${input.moves.length === 1 ? 'move' : 'moves'})`,
+        refresh: [driveKeys.all, ...MACHINE_STATE_KEYS],
+      },
+      {
+        onQueued: on.onQueued,
+        onRecorded: (saved) => {
+          // The answer is the record in full: the result above the list shows it without asking again.
+          qc.setQueryData(travelTrialQueryOptions(axisId, saved.id).queryKey, saved);
+          on.onRecorded?.(saved);
+        },
+      },
+    );
+  return { ...recording, record };
 }
+
+export const travelTrialsPath = (axisId: string) => `/axes/${axisId}/travel-trials`;

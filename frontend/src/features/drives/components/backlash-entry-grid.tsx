@@ -2,7 +2,9 @@ import { useRef, useState, type KeyboardEvent } from 'react';
 import { Alert, Box, Button, MenuItem, Paper, Stack, TextField, Typography } from '@mui/material';
 import { UnitFamilySelect } from '../../../components/form/unit-select';
 import { fromMm, UNIT_LABELS, type LengthUnit } from '../../../lib/units';
-import { useRecordBacklash } from '../api/backlash-record';
+import { backlashChecksPath, useRecordBacklash } from '../api/backlash-record';
+import { removeButtonProps, useUndoRemove } from './undo-remove';
+import { WaitingEntries } from './waiting-entries';
 import type { BacklashCheck } from '../backlash-types';
 import type { Axis } from '../types';
 import { errorText } from '../utils/format';
@@ -22,8 +24,9 @@ const axisUnit = (axis: Axis): LengthUnit => axis.lengthUnit ?? 'mm';
 
 /**
  * Backlash entry: one row per position (both ends and the middle), the readings approached moving
- * up and moving down across. Tab moves along a row; Enter moves to the next row's first cell and
- * never clears or sends anything.
+ * up and moving down across. Tab moves along a row (never onto a remove button); Enter moves to
+ * the next row's first cell, adding a position after the last, and never clears or sends anything.
+ * A removed position can be put back.
  */
 export function BacklashEntryGrid({ axis, onRecorded }: { axis: Axis; onRecorded: (c: BacklashCheck) => void }) {
   const [lengthUnit, setLengthUnit] = useState<LengthUnit>(() => axisUnit(axis));
@@ -34,7 +37,8 @@ export function BacklashEntryGrid({ axis, onRecorded }: { axis: Axis; onRecorded
   const [resolution, setResolution] = useState('');
   const [notes, setNotes] = useState('');
   const grid = useRef<HTMLTableElement>(null);
-  const record = useRecordBacklash(axis.id);
+  const record = useRecordBacklash(axis.id, axis.name);
+  const undo = useUndoRemove();
   const width = approaches * 2;
 
   const setCell = (r: number, c: number, v: string) => setCells((old) => old.map((row, i) => (i === r ? row.map((x, j) => (j === c ? v.replace(',', '.') : x)) : row)));
@@ -50,23 +54,46 @@ export function BacklashEntryGrid({ axis, onRecorded }: { axis: Axis; onRecorded
     setPositions((p) => [...p, '']);
     setCells((c) => [...c, Array(width).fill('')]);
   };
+  const focusRow = (r: number) =>
+    setTimeout(() => {
+      const next = grid.current?.querySelector<HTMLInputElement>(`input[data-backlash-cell="${r}-0"]`);
+      next?.focus();
+      next?.select();
+    });
   const removeRow = (r: number) => {
+    const position = positions[r];
+    const row = cells[r];
     setPositions((p) => p.filter((_, i) => i !== r));
     setCells((c) => c.filter((_, i) => i !== r));
+    undo.removed(`position ${r + 1}${position.trim() ? ` (${position} ${UNIT_LABELS[lengthUnit]})` : ''}`, () => {
+      setPositions((p) => [...p.slice(0, r), position, ...p.slice(r)]);
+      // Readings keep their side if the approach count changed meanwhile.
+      setCells((c) => {
+        const half = (c[0]?.length ?? row.length) / 2;
+        const fit = (side: string[]) => [...side, ...Array(Math.max(0, half - side.length)).fill('')].slice(0, half);
+        const back = [...fit(row.slice(0, row.length / 2)), ...fit(row.slice(row.length / 2))];
+        return [...c.slice(0, r), back, ...c.slice(r)];
+      });
+    });
+    focusRow(Math.min(r, positions.length - 2));
   };
   const onKey = (e: KeyboardEvent<HTMLInputElement>, r: number) => {
     if (e.key !== 'Enter') return;
     e.preventDefault();
-    const next = grid.current?.querySelector<HTMLInputElement>(`input[data-backlash-cell="${r + 1}-0"]`);
-    next?.focus();
-    next?.select();
+    if (e.shiftKey) return r > 0 ? focusRow(r - 1) : undefined;
+    if (r + 1 >= positions.length) addRow();
+    focusRow(r + 1);
   };
 
   const rowWidth = (row: string[]) => row.length / 2;
   const values = cells.map((row) => ({ up: row.slice(0, rowWidth(row)).filter((v) => v.trim() !== '').map(Number), down: row.slice(rowWidth(row)).filter((v) => v.trim() !== '').map(Number) }));
   const complete = positions.every((p) => numberOf(p) !== undefined) && values.every((v) => v.up.length >= 3 && v.down.length >= 3 && [...v.up, ...v.down].every(Number.isFinite));
+  const clear = () => {
+    setCells((c) => c.map((row) => row.map(() => '')));
+    setNotes('');
+  };
   const submit = () =>
-    record.mutate(
+    record.record(
       {
         lengthUnit,
         readingUnit,
@@ -74,7 +101,13 @@ export function BacklashEntryGrid({ axis, onRecorded }: { axis: Axis; onRecorded
         ...(numberOf(resolution) !== undefined ? { resolution: numberOf(resolution) } : {}),
         ...(notes.trim() ? { notes: notes.trim() } : {}),
       },
-      { onSuccess: (saved) => onRecorded(saved) },
+      {
+        onQueued: clear,
+        onRecorded: (saved) => {
+          clear();
+          onRecorded(saved);
+        },
+      },
     );
 
   const ru = UNIT_LABELS[readingUnit];
@@ -129,7 +162,7 @@ export function BacklashEntryGrid({ axis, onRecorded }: { axis: Axis; onRecorded
                   })}
                   <td>
                     {positions.length > 3 && (
-                      <Button size="small" onClick={() => removeRow(r)} aria-label={`Remove position ${r + 1}`}>
+                      <Button size="small" {...removeButtonProps} onClick={() => removeRow(r)} aria-label={`Remove position ${r + 1}`}>
                         Remove
                       </Button>
                     )}
@@ -147,12 +180,14 @@ export function BacklashEntryGrid({ axis, onRecorded }: { axis: Axis; onRecorded
         <TextField label="Notes" value={notes} onChange={(e) => setNotes(e.target.value)} multiline minRows={1} slotProps={{ htmlInput: { maxLength: 2000 } }} />
         {!complete && <Typography variant="body2" color="text.secondary">Fill every position and at least 3 readings each way on every row to record the check.</Typography>}
         {record.error && <Alert severity="error">{errorText(record.error)}</Alert>}
+        <WaitingEntries path={backlashChecksPath(axis.id)} />
         <Box>
-          <Button variant="contained" onClick={submit} disabled={!complete || record.isPending}>
-            {record.isPending ? 'Recording…' : 'Record backlash check'}
+          <Button variant="contained" onClick={submit} disabled={!complete || record.busy}>
+            {record.busy ? 'Recording…' : 'Record backlash check'}
           </Button>
         </Box>
       </Stack>
+      {undo.snackbar}
     </Paper>
   );
 }

@@ -4,7 +4,9 @@ import UploadFileOutlined from '@mui/icons-material/UploadFileOutlined';
 import { IndicatorPanel } from '../../../components/indicator-input/indicator-panel';
 import { useIndicatorInput } from '../../../components/indicator-input/use-indicator-input';
 import { UNIT_LABELS, type LengthUnit } from '../../../lib/units';
-import { useRecordPositioningRun } from '../api/record-positioning-run';
+import { positioningRunsPath, useRecordPositioningRun } from '../api/record-positioning-run';
+import { useTestTargets, type TestTargets } from '../api/test-program-targets';
+import { WaitingEntries } from './waiting-entries';
 import type { Axis, PositioningRun } from '../types';
 import { errorText } from '../utils/format';
 import { parseRunsCsv, splitRows } from '../utils/parse-grid';
@@ -16,37 +18,41 @@ import { blankConditions, ConditionsFields, conditionsOf } from './conditions-fi
 
 const cellSx = { width: 92, '& input': { textAlign: 'right', py: 0.75, px: 1 } };
 
-/** A spread of targets over the measured travel in the axis's unit, as a starting point for the header row. */
-function startTargets(axis: Axis): string[] {
-  if (!axis.measuredTravelMm) return ['', '', '', '', ''];
-  const from = 10;
-  const to = axis.measuredTravelMm - 10;
-  const inches = axis.lengthUnit === 'in';
-  return [0, 1, 2, 3, 4].map((i) => {
-    const v = fromMm(from + ((to - from) * i) / 4, axis.lengthUnit);
-    return String(inches ? Number(v.toFixed(2)) : Math.round(v));
-  });
+/** The server's targets (those the downloaded program reads at) in the grid's unit; blanks until they come or when there are none. */
+function serverTargetsIn(st: TestTargets | undefined, unit: LengthUnit): string[] {
+  if (!st?.targets.length) return ['', '', '', '', ''];
+  if (st.lengthUnit === unit) return st.targets.map(String);
+  return st.targetsMm.map((mm) => String(Number(fromMm(mm, unit).toFixed(unit === 'in' ? 4 : 3))));
 }
 
 /**
- * Repeat-and-reverse entry: targets as columns, runs as rows (up and down). Enter moves down a
- * column, Tab along a row; a block pasted from a spreadsheet fills from the cell it lands in; a
- * CSV file may carry a "target" header row and "up"/"down" at the start of each row.
+ * Repeat-and-reverse entry: targets as columns, runs as rows (up and down). The targets are the
+ * server's (GET /axes/:id/test-targets, the list the downloaded program uses) until the person
+ * types their own. Tab goes along a row and Enter to the next row's first cell; a block pasted
+ * from a spreadsheet fills from the cell it lands in; a CSV file may carry a "target" header row
+ * and "up"/"down" at the start of each row.
  */
 export function PositioningGrid({ axis, onRecorded }: { axis: Axis; onRecorded: (r: PositioningRun) => void }) {
   const [unit, setUnit] = useState<LengthUnit>(axis.lengthUnit === 'in' ? 'thou' : 'mm');
   const [lengthUnit, setLengthUnit] = useState<LengthUnit>(axis.lengthUnit);
   const [conditions, setConditions] = useState(blankConditions);
-  const [runs, setRuns] = useState(5);
+  const serverTargets = useTestTargets(axis.id);
+  const [chosenRuns, setRuns] = useState<number | null>(null);
+  const runs = chosenRuns ?? serverTargets.data?.runs ?? 5;
   const [order, setOrder] = useState<RowOrder>('alternate');
-  const [targets, setTargets] = useState<string[]>(() => startTargets(axis));
-  const [cells, setCells] = useState<string[][]>(() => resize([], 10, 5));
+  // null: the server's targets, in the unit picked; a list once the person types, pastes or loads their own.
+  const [typedTargets, setTypedTargets] = useState<string[] | null>(null);
+  const targets = typedTargets ?? serverTargetsIn(serverTargets.data, lengthUnit);
+  const setTargets = (next: string[] | ((old: string[]) => string[])) => setTypedTargets((old) => (typeof next === 'function' ? next(old ?? targets) : next));
+  const [typedCells, setCells] = useState<string[][]>([]);
   const [notes, setNotes] = useState('');
   const [problems, setProblems] = useState<string[]>([]);
   const file = useRef<HTMLInputElement>(null);
-  const record = useRecordPositioningRun(axis.id);
+  const record = useRecordPositioningRun(axis.id, axis.name);
   const cols = targets.length;
   const rows = runs * 2;
+  // What is typed, in the grid's current shape (the server's targets may come after typing began).
+  const cells = resize(typedCells, rows, cols);
 
   const setRunCount = (n: number) => {
     setRuns(n);
@@ -57,12 +63,12 @@ export function PositioningGrid({ axis, onRecorded }: { axis: Axis; onRecorded: 
     setCells((c) => resize(c, rows, n));
   };
 
-  const setCell = (r: number, c: number, v: string) => setCells((x) => x.map((line, i) => (i === r ? line.map((old, j) => (j === c ? v : old)) : line)));
-  // An indicator's reading goes to the cell it was typed in, or else the first empty one down the columns (the Enter order).
+  const setCell = (r: number, c: number, v: string) => setCells((x) => resize(x, rows, cols).map((line, i) => (i === r ? line.map((old, j) => (j === c ? v : old)) : line)));
+  // An indicator's reading goes to the cell it was typed in, or else the first empty one along the rows (the Enter order).
   const indicator = useIndicatorInput({
     unit,
     place: (text, cell) => {
-      const empty = Array.from({ length: rows * cols }, (_, k) => [k % rows, Math.floor(k / rows)]).find(([r, c]) => !cells[r]?.[c]?.trim());
+      const empty = Array.from({ length: rows * cols }, (_, k) => [Math.floor(k / cols), k % cols]).find(([r, c]) => !cells[r]?.[c]?.trim());
       const [r, c] = cell ? cell.split('-').map(Number) : (empty ?? [-1, -1]);
       if (r < 0) return null;
       setCell(r, c, text);
@@ -72,13 +78,12 @@ export function PositioningGrid({ axis, onRecorded }: { axis: Axis; onRecorded: 
   });
 
   const focusCell = (r: number, c: number) => setTimeout(() => document.querySelector<HTMLInputElement>(`[data-cell="${r}-${c}"]`)?.focus());
-  const onKeyDown = (r: number, c: number) => (e: React.KeyboardEvent) => {
+  // Enter: the next row's first cell (from the targets row, the first run's); Shift+Enter the row before.
+  const onKeyDown = (r: number) => (e: React.KeyboardEvent) => {
     if (e.key !== 'Enter') return;
     e.preventDefault();
     const next = e.shiftKey ? r - 1 : r + 1;
-    if (next < -1) return;
-    if (next >= rows) focusCell(0, Math.min(c + 1, cols - 1));
-    else focusCell(next, c);
+    if (next >= -1 && next < rows) focusCell(next, 0);
   };
 
   const onPaste = (r: number, c: number) => (e: React.ClipboardEvent) => {
@@ -132,9 +137,13 @@ export function PositioningGrid({ axis, onRecorded }: { axis: Axis; onRecorded: 
   };
 
   const allNumbers = targets.every((t) => numberOf(t) !== undefined) && cells.every((row) => row.every((v) => numberOf(v) !== undefined));
+  const clear = () => {
+    setCells([]);
+    setNotes('');
+  };
   const submit = () => {
     setProblems([]);
-    record.mutate(
+    record.record(
       {
         lengthUnit,
         readingUnit: unit,
@@ -144,9 +153,9 @@ export function PositioningGrid({ axis, onRecorded }: { axis: Axis; onRecorded: 
         notes: notes.trim() || undefined,
       },
       {
-        onSuccess: (r) => {
-          setCells(resize([], rows, cols));
-          setNotes('');
+        onQueued: clear,
+        onRecorded: (r) => {
+          clear();
           onRecorded(r);
         },
       },
@@ -189,9 +198,15 @@ export function PositioningGrid({ axis, onRecorded }: { axis: Axis; onRecorded: 
           </Button>
           <input ref={file} type="file" accept=".csv,.txt,text/csv,text/plain" hidden aria-label="CSV file of runs" onChange={(e) => onFile(e.target.files?.[0]).finally(() => (e.target.value = ''))} />
         </Box>
+        <Typography variant="body2" color="text.secondary" data-testid="targets-source">
+          {typedTargets
+            ? 'Targets as typed: download the test program with the same targets.'
+            : serverTargets.data?.reason ?? (serverTargets.data ? 'Targets: the same list the downloaded test program moves to.' : 'Loading the targets of the test program…')}
+        </Typography>
         <IndicatorPanel indicator={indicator} />
         {problems.length > 0 && <Alert severity="error">{problems.join('; ')}</Alert>}
         {record.error && <Alert severity="error">{errorText(record.error)}</Alert>}
+        <WaitingEntries path={positioningRunsPath(axis.id)} />
         <Box sx={{ overflowX: 'auto', pb: 1 }}>
           <Box component="table" role="grid" aria-label="Repeat-and-reverse readings" sx={{ borderCollapse: 'collapse', '& th, & td': { p: 0.25 }, '& th': { fontWeight: 500, color: 'text.secondary', textAlign: 'left', whiteSpace: 'nowrap', pr: 1 } }}>
             <thead>
@@ -203,7 +218,7 @@ export function PositioningGrid({ axis, onRecorded }: { axis: Axis; onRecorded: 
                       value={t}
                       onChange={(e) => setTargets((x) => x.map((v, i) => (i === c ? e.target.value.replace(',', '.') : v)))}
                       onPaste={onPaste(-1, c)}
-                      onKeyDown={onKeyDown(-1, c)}
+                      onKeyDown={onKeyDown(-1)}
                       error={t.trim() !== '' && numberOf(t) === undefined}
                       sx={{ ...cellSx, '& input': { ...cellSx['& input'], fontWeight: 600 } }}
                       slotProps={{ htmlInput: { inputMode: 'decimal', 'data-cell': `-1-${c}`, 'aria-label': `Target ${c + 1} (${UNIT_LABELS[lengthUnit]})` } }}
@@ -226,7 +241,7 @@ export function PositioningGrid({ axis, onRecorded }: { axis: Axis; onRecorded: 
                           value={v}
                           onChange={(e) => setCell(r, c, e.target.value.replace(',', '.'))}
                           onPaste={onPaste(r, c)}
-                          onKeyDown={onKeyDown(r, c)}
+                          onKeyDown={onKeyDown(r)}
                           error={v.trim() !== '' && numberOf(v) === undefined}
                           sx={cellSx}
                           slotProps={{ htmlInput: { inputMode: 'decimal', 'data-cell': `${r}-${c}`, 'data-indicator-cell': `${r}-${c}`, 'aria-label': `${direction === 'up' ? 'Up' : 'Down'} ${run}, target ${c + 1}` } }}
@@ -240,11 +255,11 @@ export function PositioningGrid({ axis, onRecorded }: { axis: Axis; onRecorded: 
           </Box>
         </Box>
         <Typography variant="body2" color="text.secondary">
-          Enter moves down a column and Tab along a row. Paste a block copied from a spreadsheet into the first cell; a CSV may start with a row of targets and each row with up or down.
+          Tab goes along a row and Enter to the next row's first cell. Paste a block copied from a spreadsheet into the first cell; a CSV may start with a row of targets and each row with up or down.
         </Typography>
         <TextField label="Notes (instrument, temperature)" value={notes} onChange={(e) => setNotes(e.target.value)} />
         <Box sx={{ display: 'flex', gap: 2, alignItems: 'center', flexWrap: 'wrap' }}>
-          <Button variant="contained" onClick={submit} disabled={!allNumbers || record.isPending}>
+          <Button variant="contained" onClick={submit} disabled={!allNumbers || record.busy}>
             Record run
           </Button>
           {!allNumbers && (

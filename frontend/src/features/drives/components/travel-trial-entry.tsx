@@ -3,7 +3,9 @@ import { Alert, Box, Button, Checkbox, FormControlLabel, IconButton, Paper, Stac
 import AddOutlined from '@mui/icons-material/AddOutlined';
 import DeleteOutline from '@mui/icons-material/DeleteOutlined';
 import { UNIT_LABELS, type LengthUnit } from '../../../lib/units';
-import { useRecordTravelTrial } from '../api/record-travel-trial';
+import { travelTrialsPath, useRecordTravelTrial } from '../api/record-travel-trial';
+import { removeButtonProps, useUndoRemove } from './undo-remove';
+import { WaitingEntries } from './waiting-entries';
 import type { Axis, TravelTrial } from '../types';
 import { errorText } from '../utils/format';
 import { splitRows } from '../utils/parse-grid';
@@ -12,13 +14,21 @@ import { UnitFamilySelect } from '../../../components/form/unit-select';
 import { blankConditions, ConditionsFields, conditionsOf } from './conditions-fields';
 
 interface Row {
+  /** Stable across removals, so a focused cell or button never slides onto another move. */
+  id: number;
   commanded: string;
   measured: string;
 }
 
-const blankRows = (): Row[] => [{ commanded: '', measured: '' }, { commanded: '', measured: '' }, { commanded: '', measured: '' }];
+let nextRowId = 0;
+const blankRow = (): Row => ({ id: ++nextRowId, commanded: '', measured: '' });
+const blankRows = (): Row[] => [blankRow(), blankRow(), blankRow()];
 
-/** Commanded-versus-measured moves: a small table, Enter moves down, a pasted block fills the table. */
+/**
+ * Commanded-versus-measured moves: a small table. Enter goes to the next move's commanded cell
+ * (adding a move after the last), Tab visits only the cells, a removed move can be put back, and
+ * a pasted block fills the table.
+ */
 export function TravelTrialEntry({ axis, onRecorded }: { axis: Axis; onRecorded: (t: TravelTrial) => void }) {
   const [unit, setUnit] = useState<LengthUnit>(axis.lengthUnit);
   const [readingUnit, setReadingUnit] = useState<LengthUnit>(axis.lengthUnit === 'in' ? 'thou' : 'mm');
@@ -27,16 +37,17 @@ export function TravelTrialEntry({ axis, onRecorded }: { axis: Axis; onRecorded:
   const [steps, setSteps] = useState(String(axis.stepsPerMm));
   const [throughOrigin, setThroughOrigin] = useState(false);
   const [notes, setNotes] = useState('');
-  const record = useRecordTravelTrial(axis.id);
+  const record = useRecordTravelTrial(axis.id, axis.name);
+  const undo = useUndoRemove();
   // After a correction is applied the next (confirming) trial runs at the new value.
   useEffect(() => setSteps(String(axis.stepsPerMm)), [axis.stepsPerMm]);
 
   const filled = rows.filter((r) => r.commanded.trim() !== '' || r.measured.trim() !== '');
   const stepsOk = numberOf(steps) !== undefined && Number(steps) > 0;
   const complete = stepsOk && filled.length > 0 && filled.every((r) => numberOf(r.commanded) !== undefined && numberOf(r.measured) !== undefined);
-  const setCell = (i: number, k: keyof Row, v: string) => setRows((rs) => rs.map((r, j) => (j === i ? { ...r, [k]: v } : r)));
+  const setCell = (i: number, k: 'commanded' | 'measured', v: string) => setRows((rs) => rs.map((r, j) => (j === i ? { ...r, [k]: v } : r)));
 
-  const onPaste = (i: number, k: keyof Row) => (e: React.ClipboardEvent) => {
+  const onPaste = (i: number, k: 'commanded' | 'measured') => (e: React.ClipboardEvent) => {
     const text = e.clipboardData.getData('text');
     if (!/[\t\n]/.test(text.trim())) return;
     e.preventDefault();
@@ -45,24 +56,44 @@ export function TravelTrialEntry({ axis, onRecorded }: { axis: Axis; onRecorded:
       const next = [...rs];
       block.forEach((cells, r) => {
         const at = i + r;
-        while (next.length <= at) next.push({ commanded: '', measured: '' });
-        if (k === 'commanded') next[at] = { commanded: cells[0] ?? '', measured: cells[1] ?? next[at].measured };
+        while (next.length <= at) next.push(blankRow());
+        if (k === 'commanded') next[at] = { id: next[at].id, commanded: cells[0] ?? '', measured: cells[1] ?? next[at].measured };
         else next[at] = { ...next[at], measured: cells[0] ?? '' };
       });
       return next;
     });
   };
 
-  const onKeyDown = (i: number, k: keyof Row) => (e: React.KeyboardEvent) => {
+  const focusRow = (i: number) => setTimeout(() => document.querySelector<HTMLInputElement>(`[data-trial-cell="${Math.max(0, i)}-commanded"]`)?.focus());
+  // Enter reads along a move and on to the next: the next move's first cell, a new move after the last.
+  const onKeyDown = (i: number) => (e: React.KeyboardEvent) => {
     if (e.key !== 'Enter') return;
     e.preventDefault();
     const nextRow = e.shiftKey ? i - 1 : i + 1;
-    if (nextRow >= rows.length) setRows((rs) => [...rs, { commanded: '', measured: '' }]);
-    setTimeout(() => document.querySelector<HTMLInputElement>(`[data-trial-cell="${Math.max(0, nextRow)}-${k}"]`)?.focus());
+    if (nextRow >= rows.length) setRows((rs) => [...rs, blankRow()]);
+    focusRow(nextRow);
+  };
+  const remove = (i: number) => {
+    const row = rows[i];
+    setRows((rs) => (rs.length > 1 ? rs.filter((r) => r.id !== row.id) : [blankRow()]));
+    const onlyRow = rows.length === 1;
+    undo.removed(`move ${i + 1}`, () =>
+      setRows((rs) => {
+        if (rs.some((r) => r.id === row.id)) return rs;
+        // The blank move that stood in for the only one removed gives way to it again.
+        const rest = onlyRow && rs.length === 1 && !rs[0].commanded && !rs[0].measured ? [] : rs;
+        return [...rest.slice(0, i), row, ...rest.slice(i)];
+      }),
+    );
+    focusRow(Math.min(i, rows.length - 2));
   };
 
+  const clear = () => {
+    setRows(blankRows());
+    setNotes('');
+  };
   const submit = () =>
-    record.mutate(
+    record.record(
       {
         lengthUnit: unit,
         readingUnit,
@@ -73,9 +104,9 @@ export function TravelTrialEntry({ axis, onRecorded }: { axis: Axis; onRecorded:
         notes: notes.trim() || undefined,
       },
       {
-        onSuccess: (t) => {
-          setRows(blankRows());
-          setNotes('');
+        onQueued: clear,
+        onRecorded: (t) => {
+          clear();
           onRecorded(t);
         },
       },
@@ -91,6 +122,7 @@ export function TravelTrialEntry({ axis, onRecorded }: { axis: Axis; onRecorded:
       </Typography>
       <Stack spacing={2}>
         {record.error && <Alert severity="error">{errorText(record.error)}</Alert>}
+        <WaitingEntries path={travelTrialsPath(axis.id)} />
         <Box sx={{ display: 'flex', gap: 2, flexWrap: 'wrap', alignItems: 'flex-start' }}>
           <UnitFamilySelect family="length" label="Moves in" value={unit} onChange={setUnit} units={['mm', 'in']} />
           <UnitFamilySelect family="reading" label="Errors shown in" value={readingUnit} onChange={setReadingUnit} />
@@ -109,7 +141,7 @@ export function TravelTrialEntry({ axis, onRecorded }: { axis: Axis; onRecorded:
             </TableHead>
             <TableBody>
               {rows.map((r, i) => (
-                <TableRow key={i}>
+                <TableRow key={r.id}>
                   <TableCell>{i + 1}</TableCell>
                   {(['commanded', 'measured'] as const).map((k) => (
                     <TableCell key={k}>
@@ -117,7 +149,7 @@ export function TravelTrialEntry({ axis, onRecorded }: { axis: Axis; onRecorded:
                         value={r[k]}
                         onChange={(e) => setCell(i, k, e.target.value.replace(',', '.'))}
                         onPaste={onPaste(i, k)}
-                        onKeyDown={onKeyDown(i, k)}
+                        onKeyDown={onKeyDown(i)}
                         error={r[k].trim() !== '' && numberOf(r[k]) === undefined}
                         slotProps={{ htmlInput: { inputMode: 'decimal', 'data-trial-cell': `${i}-${k}`, 'aria-label': `${k === 'commanded' ? 'Commanded' : 'Measured'} move ${i + 1}` } }}
                         fullWidth
@@ -125,7 +157,7 @@ export function TravelTrialEntry({ axis, onRecorded }: { axis: Axis; onRecorded:
                     </TableCell>
                   ))}
                   <TableCell>
-                    <IconButton aria-label={`Remove move ${i + 1}`} size="small" onClick={() => setRows((rs) => (rs.length > 1 ? rs.filter((_, j) => j !== i) : blankRows()))}>
+                    <IconButton aria-label={`Remove move ${i + 1}`} size="small" {...removeButtonProps} onClick={() => remove(i)}>
                       <DeleteOutline fontSize="small" />
                     </IconButton>
                   </TableCell>
@@ -135,21 +167,22 @@ export function TravelTrialEntry({ axis, onRecorded }: { axis: Axis; onRecorded:
           </Table>
         </Box>
         <Box sx={{ display: 'flex', gap: 1, flexWrap: 'wrap' }}>
-          <Button startIcon={<AddOutlined />} onClick={() => setRows((rs) => [...rs, { commanded: '', measured: '' }])}>
+          <Button startIcon={<AddOutlined />} onClick={() => setRows((rs) => [...rs, blankRow()])}>
             Add a move
           </Button>
           <Typography variant="body2" color="text.secondary" sx={{ alignSelf: 'center' }}>
-            Enter goes to the next row; paste two columns from a spreadsheet into the first cell.
+            Enter goes to the next move (a new one after the last); paste two columns from a spreadsheet into the first cell.
           </Typography>
         </Box>
- <ConditionsFields draft={conditions} onChange={setConditions} readingUnit={readingUnit} />
+        <ConditionsFields draft={conditions} onChange={setConditions} readingUnit={readingUnit} />
         <TextField label="Notes (instrument, where it was read)" value={notes} onChange={(e) => setNotes(e.target.value)} />
         <Box>
-          <Button variant="contained" onClick={submit} disabled={!complete || record.isPending}>
+          <Button variant="contained" onClick={submit} disabled={!complete || record.busy}>
             Record trial
           </Button>
         </Box>
       </Stack>
+      {undo.snackbar}
     </Paper>
   );
 }

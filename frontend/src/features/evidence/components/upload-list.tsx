@@ -11,10 +11,10 @@ interface Props {
   onClearFinished: () => void;
 }
 
-/** One row per file being sent: a progress bar while it goes, then attached or why it was refused. */
+/** One row per file: waiting for the connection, a progress bar while it goes, then attached or why it was refused. */
 export function UploadList({ items, onCancel, onDismiss, onClearFinished }: Props) {
   if (!items.length) return null;
-  const finished = items.some((i) => i.status !== 'uploading');
+  const finished = items.some((i) => i.status !== 'uploading' && i.status !== 'waiting');
   return (
     <Box sx={{ mt: 1.5 }}>
       <List dense disablePadding aria-label="Uploads">
@@ -47,6 +47,7 @@ export function UploadList({ items, onCancel, onDismiss, onClearFinished }: Prop
 function UploadRow({ item, onCancel }: { item: UploadItem; onCancel: (key: string) => void }) {
   const percent = Math.round(item.progress * 100);
   const done = item.status === 'done';
+  const waiting = item.status === 'waiting';
   return (
     <Box>
       <Box sx={{ display: 'flex', alignItems: 'center', gap: 1 }}>
@@ -55,7 +56,7 @@ function UploadRow({ item, onCancel }: { item: UploadItem; onCancel: (key: strin
         </Typography>
         <Typography variant="body2" color={done ? 'success.main' : 'text.secondary'} sx={{ display: 'flex', alignItems: 'center', gap: 0.5, whiteSpace: 'nowrap' }}>
           {done ? <CheckCircleOutline fontSize="small" /> : null}
-          {done ? `Attached · ${formatBytes(item.sizeBytes)}` : `${percent} % of ${formatBytes(item.sizeBytes)}`}
+          {done ? `Attached · ${formatBytes(item.sizeBytes)}` : waiting ? `Waiting to be sent · ${formatBytes(item.sizeBytes)}` : `${percent} % of ${formatBytes(item.sizeBytes)}`}
         </Typography>
         {!done && (
           <IconButton size="small" aria-label={`Cancel ${item.name}`} onClick={() => onCancel(item.key)}>
@@ -65,7 +66,8 @@ function UploadRow({ item, onCancel }: { item: UploadItem; onCancel: (key: strin
       </Box>
       <LinearProgress
         variant="determinate"
-        value={percent}
+        value={waiting ? 0 : percent}
+        aria-valuetext={waiting ? 'Waiting to be sent' : undefined}
         color={done ? 'success' : 'primary'}
         aria-label={`Upload of ${item.name}`}
         sx={{ height: 6, borderRadius: 3, mt: 0.5, '& .MuiLinearProgress-bar': done ? { transition: 'none' } : {} }}

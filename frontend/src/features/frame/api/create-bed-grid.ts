@@ -1,5 +1,5 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { MACHINE_STATE_KEYS } from '../../../lib/machine-state-keys';
+import { useRecording } from '../../../lib/offline/use-command';
 import type { LengthUnit } from '../../../lib/units';
 import { frameKeys, type BedGrid } from '../types';
 
@@ -15,10 +15,10 @@ export interface BedGridInput {
   note?: string;
 }
 
+/** Records a bed grid through the device's queue of entries: sent at once with a connection, kept and sent once when it returns. */
 export function useCreateBedGrid(machineId: string) {
-  const qc = useQueryClient();
-  return useMutation({
-    mutationFn: (input: BedGridInput) => api.post<BedGrid>(`/machines/${machineId}/bed-grids`, input),
-    onSuccess: () => qc.invalidateQueries({ queryKey: frameKeys.bedGrids(machineId) }),
-  });
+  const recording = useRecording<BedGrid>();
+  const record = (input: BedGridInput, on: { onRecorded?: (saved: BedGrid) => void; onQueued?: () => void } = {}) =>
+    recording.record({ method: 'POST', path: `/machines/${machineId}/bed-grids`, body: input, label: `Bed grid, ${input.rows} × ${input.columns} points`, refresh: [frameKeys.bedGrids(machineId), ...MACHINE_STATE_KEYS] }, on);
+  return { ...recording, record };
 }

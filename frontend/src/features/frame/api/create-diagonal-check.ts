@@ -1,5 +1,5 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { MACHINE_STATE_KEYS } from '../../../lib/machine-state-keys';
+import { useRecording } from '../../../lib/offline/use-command';
 import type { LengthUnit } from '../../../lib/units';
 import { frameKeys, type DiagonalCheck } from '../types';
 
@@ -15,10 +15,10 @@ export interface DiagonalCheckInput {
   note?: string;
 }
 
+/** Records a diagonal check through the device's queue of entries: sent at once with a connection, kept and sent once when it returns. */
 export function useCreateDiagonalCheck(machineId: string) {
-  const qc = useQueryClient();
-  return useMutation({
-    mutationFn: (input: DiagonalCheckInput) => api.post<DiagonalCheck>(`/machines/${machineId}/diagonal-checks`, input),
-    onSuccess: () => qc.invalidateQueries({ queryKey: frameKeys.diagonalChecks(machineId) }),
-  });
+  const recording = useRecording<DiagonalCheck>();
+  const record = (input: DiagonalCheckInput, on: { onRecorded?: (saved: DiagonalCheck) => void; onQueued?: () => void } = {}) =>
+    recording.record({ method: 'POST', path: `/machines/${machineId}/diagonal-checks`, body: input, label: `Diagonal check: ${input.diagonal1} and ${input.diagonal2} ${input.lengthUnit}`, refresh: [frameKeys.diagonalChecks(machineId), ...MACHINE_STATE_KEYS] }, on);
+  return { ...recording, record };
 }

@@ -1,5 +1,5 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { MACHINE_STATE_KEYS } from '../../../lib/machine-state-keys';
+import { useRecording } from '../../../lib/offline/use-command';
 import type { LengthUnit } from '../../../lib/units';
 import { frameKeys, type TestCut } from '../types';
 
@@ -16,10 +16,10 @@ export interface TestCutInput {
   note?: string;
 }
 
+/** Records a test cut through the device's queue of entries: sent at once with a connection, kept and sent once when it returns. */
 export function useCreateTestCut(machineId: string) {
-  const qc = useQueryClient();
-  return useMutation({
-    mutationFn: (input: TestCutInput) => api.post<TestCut>(`/machines/${machineId}/test-cuts`, input),
-    onSuccess: () => qc.invalidateQueries({ queryKey: frameKeys.testCuts(machineId) }),
-  });
+  const recording = useRecording<TestCut>();
+  const record = (input: TestCutInput, on: { onRecorded?: (saved: TestCut) => void; onQueued?: () => void } = {}) =>
+    recording.record({ method: 'POST', path: `/machines/${machineId}/test-cuts`, body: input, label: 'Test cut', refresh: [frameKeys.testCuts(machineId), ...MACHINE_STATE_KEYS] }, on);
+  return { ...recording, record };
 }

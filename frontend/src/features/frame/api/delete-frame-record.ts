@@ -1,5 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
+import { MACHINE_STATE_KEYS } from '../../../lib/machine-state-keys';
 import { frameKeys } from '../types';
 
 export type FrameRecordKind = 'diagonal-checks' | 'bed-grids' | 'test-cuts';
@@ -11,6 +12,6 @@ export function useDeleteFrameRecord(machineId: string, kind: FrameRecordKind) {
   const qc = useQueryClient();
   return useMutation({
     mutationFn: (id: string) => api.delete<void>(`/machines/${machineId}/${kind}/${id}`),
-    onSettled: () => qc.invalidateQueries({ queryKey: KEYS[kind](machineId) }),
+    onSettled: () => Promise.all([KEYS[kind](machineId), ...MACHINE_STATE_KEYS].map((queryKey) => qc.invalidateQueries({ queryKey }))),
   });
 }

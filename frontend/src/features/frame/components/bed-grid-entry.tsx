@@ -5,6 +5,7 @@ import { useIndicatorInput } from '../../../components/indicator-input/use-indic
 import { fromMm, toMm, UNIT_LABELS, type LengthUnit } from '../../../lib/units';
 import { UnitFamilySelect } from '../../../components/form/unit-select';
 import { useCreateBedGrid } from '../api/create-bed-grid';
+import { WaitingEntries } from './waiting-entries';
 import type { BedGrid } from '../types';
 import { evenPositions } from '../utils/grid-labels';
 import { NumberField, parseNumber } from './number-field';
@@ -118,7 +119,17 @@ export function BedGridEntry({ machineId, workArea, onSaved }: { machineId: stri
       }
     }
     setProblem(null);
-    create.mutate({ lengthUnit, readingUnit: unit, resolution: res ?? undefined, rows, columns, points, note: note.trim() || undefined }, { onSuccess: onSaved });
+    create.record(
+      { lengthUnit, readingUnit: unit, resolution: res ?? undefined, rows, columns, points, note: note.trim() || undefined },
+      {
+        onRecorded: onSaved,
+        // Waiting for the connection: the heights go with it (shown as waiting); the grid's shape stays for the next one.
+        onQueued: () => {
+          setZ((old) => old.map((row) => row.map(() => '')));
+          setNote('');
+        },
+      },
+    );
   };
 
   return (
@@ -177,10 +188,11 @@ export function BedGridEntry({ machineId, workArea, onSaved }: { machineId: stri
           </Table>
         </TableContainer>
         {(problem || create.error) && <Alert severity="error">{problem ?? (create.error as Error).message}</Alert>}
+        <WaitingEntries path={`/machines/${machineId}/bed-grids`} />
         <TextField label="Note" value={note} onChange={(e) => setNote(e.target.value)} placeholder="Instrument, slats, where the zero is" />
         <Box>
-          <Button type="submit" variant="contained" disabled={create.isPending}>
-            {create.isPending ? 'Fitting the plane…' : 'Record bed grid'}
+          <Button type="submit" variant="contained" disabled={create.busy}>
+            {create.busy ? 'Fitting the plane…' : 'Record bed grid'}
           </Button>
         </Box>
       </Stack>

@@ -2,6 +2,7 @@ import { useState, type FormEvent } from 'react';
 import { Alert, Box, Button, Stack, TextField } from '@mui/material';
 import { UNIT_LABELS, type LengthUnit } from '../../../lib/units';
 import { useCreateDiagonalCheck } from '../api/create-diagonal-check';
+import { WaitingEntries } from './waiting-entries';
 import type { DiagonalCheck } from '../types';
 import { NumberField, parseNumber } from './number-field';
 import { UnitFamilySelect } from '../../../components/form/unit-select';
@@ -38,7 +39,17 @@ export function DiagonalCheckForm({ machineId, onSaved }: { machineId: string; o
     if (values.resolution.trim() && (resolution === null || resolution <= 0)) found.resolution = 'Resolution must be greater than zero, or left empty';
     setErrors(found);
     if (Object.keys(found).length) return;
-    create.mutate({ ...parsed, gantrySpan: span ?? undefined, resolution: resolution ?? undefined, lengthUnit: unit, note: note.trim() || undefined }, { onSuccess: (c) => onSaved(c) });
+    create.record(
+      { ...parsed, gantrySpan: span ?? undefined, resolution: resolution ?? undefined, lengthUnit: unit, note: note.trim() || undefined },
+      {
+        onRecorded: onSaved,
+        // Waiting for the connection: the lengths go with it (shown as waiting); the span and resolution stay for the next check.
+        onQueued: () => {
+          setValues((v) => ({ ...v, sideX: '', sideY: '', diagonal1: '', diagonal2: '' }));
+          setNote('');
+        },
+      },
+    );
   };
 
   const set = (key: Field | 'gantrySpan' | 'resolution') => (e: { target: { value: string } }) => setValues((v) => ({ ...v, [key]: e.target.value }));
@@ -46,6 +57,7 @@ export function DiagonalCheckForm({ machineId, onSaved }: { machineId: string; o
     <Box component="form" onSubmit={submit} noValidate aria-label="Diagonal check">
       <Stack spacing={1.5}>
         {create.error && <Alert severity="error">{(create.error as Error).message}</Alert>}
+        <WaitingEntries path={`/machines/${machineId}/diagonal-checks`} />
         <Box sx={{ display: 'grid', gap: 1.5, gridTemplateColumns: { xs: '1fr', sm: '1fr 1fr' } }}>
           <UnitFamilySelect family="length" value={unit} onChange={setUnit} />
           <NumberField label="Gantry span" unit={u} value={values.gantrySpan} onChange={set('gantrySpan')} error={!!errors.gantrySpan} helperText={errors.gantrySpan ?? 'Between the two drives; the X side when empty'} />
@@ -56,8 +68,8 @@ export function DiagonalCheckForm({ machineId, onSaved }: { machineId: string; o
         </Box>
         <TextField label="Note" value={note} onChange={(e) => setNote(e.target.value)} placeholder="How the rectangle was marked and read" />
         <Box>
-          <Button type="submit" variant="contained" disabled={create.isPending}>
-            {create.isPending ? 'Working it out…' : 'Record diagonal check'}
+          <Button type="submit" variant="contained" disabled={create.busy}>
+            {create.busy ? 'Working it out…' : 'Record diagonal check'}
           </Button>
         </Box>
       </Stack>

@@ -2,6 +2,7 @@ import { useState, type FormEvent } from 'react';
 import { Alert, Box, Button, MenuItem, Stack, TextField, Typography } from '@mui/material';
 import { UNIT_LABELS, type LengthUnit } from '../../../lib/units';
 import { useCreateTestCut } from '../api/create-test-cut';
+import { WaitingEntries } from './waiting-entries';
 import type { TestCut } from '../types';
 import { NumberField, parseNumber } from './number-field';
 import { UnitFamilySelect } from '../../../components/form/unit-select';
@@ -54,7 +55,7 @@ export function TestCutForm({ machineId, machineKind, onSaved }: { machineId: st
     const resolution = optional('res', 'Resolution', false);
     setErrors(found);
     if (Object.keys(found).length) return;
-    create.mutate(
+    create.record(
       {
         lengthUnit: unit,
         plateThickness,
@@ -65,7 +66,8 @@ export function TestCutForm({ machineId, machineKind, onSaved }: { machineId: st
         stepsPerMm: sx || sy ? { x: sx, y: sy } : undefined,
         note: note.trim() || undefined,
       },
-      { onSuccess: onSaved },
+      // Waiting for the connection: the sizes measured go with it (shown as waiting); the nominal ones stay for the next cut.
+      { onRecorded: onSaved, onQueued: () => setV((old) => ({ ...old, mx: '', my: '', d1: '', d2: '', cx: '', cy: '', kerf: '' })) },
     );
   };
 
@@ -75,6 +77,7 @@ export function TestCutForm({ machineId, machineKind, onSaved }: { machineId: st
     <Box component="form" onSubmit={submit} noValidate aria-label="Test cut">
       <Stack spacing={1.5}>
         {create.error && <Alert severity="error">{(create.error as Error).message}</Alert>}
+        <WaitingEntries path={`/machines/${machineId}/test-cuts`} />
         <Box sx={grid}>
           <UnitFamilySelect family="length" value={unit} onChange={setUnit} />
           <TextField select label="The circle is" value={circleKind} onChange={(e) => setCircleKind(e.target.value as 'hole' | 'disc')}>
@@ -105,8 +108,8 @@ export function TestCutForm({ machineId, machineKind, onSaved }: { machineId: st
         </Box>
         <TextField label="Note" value={note} onChange={(e) => setNote(e.target.value)} placeholder="Material, thickness, current, speed" />
         <Box>
-          <Button type="submit" variant="contained" disabled={create.isPending}>
-            {create.isPending ? 'Working it out…' : 'Record test cut'}
+          <Button type="submit" variant="contained" disabled={create.busy}>
+            {create.busy ? 'Working it out…' : 'Record test cut'}
           </Button>
         </Box>
       </Stack>

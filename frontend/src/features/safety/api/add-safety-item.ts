@@ -1,5 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
+import { MACHINE_STATE_KEYS } from '../../../lib/machine-state-keys';
 import { safetyKeys, type SafetySection } from '../types';
 
 export interface SafetyItemInput {
@@ -12,6 +13,7 @@ export function useAddSafetyItem() {
   const qc = useQueryClient();
   return useMutation({
     mutationFn: (input: SafetyItemInput) => api.post<{ id: string }>('/safety-items', input),
-    onSuccess: () => qc.invalidateQueries({ queryKey: safetyKeys.all }),
+    // A new item is asked on every walk: each machine's walk is unfinished again until it is answered.
+    onSuccess: () => Promise.all([safetyKeys.all, ...MACHINE_STATE_KEYS].map((queryKey) => qc.invalidateQueries({ queryKey }))),
   });
 }
