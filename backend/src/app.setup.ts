@@ -6,13 +6,12 @@ import fastifyStatic from '@fastify/static';
 import fastifyMultipart from '@fastify/multipart';
 import fastifyHelmet from '@fastify/helmet';
 import type { FastifyInstance } from 'fastify';
-import connectPgSimple from 'connect-pg-simple';
-import expressSession from 'express-session';
 import { existsSync } from 'node:fs';
 import { constants as zlibConstants } from 'node:zlib';
 import type pg from 'pg';
 import type { AppConfig } from './config/config.js';
 import { PG_POOL } from './database/database.tokens.js';
+import { createSessionStore } from './database/session-store.js';
 import { DatabaseErrorFilter } from './common/database-error.filter.js';
 import { SpaFallbackFilter } from './common/spa-fallback.filter.js';
 import { appFilters } from './common/app-filters.js';
@@ -78,8 +77,7 @@ export async function configureApp(app: NestFastifyApplication, config: AppConfi
     // Fast brotli: on a 2-core server a quality-11 pass over a large answer costs more than it saves.
     brotliOptions: { params: { [zlibConstants.BROTLI_PARAM_QUALITY]: 4 } },
   });
-  const PgStore = connectPgSimple(expressSession as never);
-  const store = new PgStore({ pool: app.get<pg.Pool>(PG_POOL), createTableIfMissing: true, pruneSessionInterval: 60 * 15 });
+  const store = createSessionStore(app.get<pg.Pool>(PG_POOL));
   await app.register(fastifyCookie as never);
   await app.register(fastifySession as never, {
     secret: config.sessionSecret,

@@ -7,6 +7,9 @@ import type { ApprovalSnapshot, BoardCheck } from './snapshot.js';
 
 export type BoardMachine = Awaited<ReturnType<MachinesService['getRef']>>;
 
+// The machine comes with the board's first statement (with its target set and waivers); another
+// workshop's machine is a 404 there, as getRef gives it.
+
 /**
  * Puts together what every contributor reports for a machine, with the waivers applied. The
  * board reads summary columns only; the approval snapshot also reads the certificate's series.
@@ -20,9 +23,8 @@ export class ReadinessBoardService {
   ) {}
 
   async board(actor: SessionUser | { workshopId: string }, machineId: string, options: { series: boolean } = { series: false }) {
-    const machine = await this.machines.getRef(actor, machineId);
-    const { checks, blocking, targetSet } = await this.readiness.evaluate(machine, options);
-    return { machine, checks, blocking, targetSet };
+    const { machine, checks, blocking, targetSet } = await this.readiness.evaluate(actor.workshopId, machineId, options);
+    return { machine: machine as BoardMachine, checks, blocking, targetSet };
   }
 
   /** The exact data an approval keeps and the certificate is drawn from. */

@@ -3,8 +3,9 @@ import { from, switchMap, type Observable } from 'rxjs';
 import type { SessionUser } from '../auth/session-user.js';
 import { RecheckService } from './recheck.service.js';
 
-// The machines list and a machine file; the readiness board sweeps by itself.
-const MACHINE_READS = /^\/api\/machines(\/[0-9a-f-]{36})?\/?(\?.*)?$/i;
+// A machine file. The machines list asks the schedule itself, only when a machine is due; the
+// readiness board sweeps by itself.
+const MACHINE_READS = /^\/api\/machines\/[0-9a-f-]{36}\/?(\?.*)?$/i;
 
 /** Brings re-check dates up to date before machines are read, so nobody sees a stale state. */
 @Injectable()

@@ -28,6 +28,7 @@ export class RecheckService implements OnApplicationBootstrap, OnModuleDestroy {
   ) {}
 
   onApplicationBootstrap() {
+    this.machines.onRecheckDue((workshopId) => this.sweepWorkshop(workshopId));
     void this.sweep(null);
     this.timer = setInterval(() => void this.sweep(null), HOUR_MS);
     this.timer.unref();

@@ -27,8 +27,8 @@ import { CommandKeysRepository } from './command-keys.repository.js';
     },
     {
       provide: TransactionContext,
-      inject: [ROOT_DRIZZLE],
-      useFactory: (root: ReturnType<typeof drizzle<typeof schema>>) => new TransactionContext(root),
+      inject: [ROOT_DRIZZLE, PG_POOL],
+      useFactory: (root: ReturnType<typeof drizzle<typeof schema>>, pool: pg.Pool) => new TransactionContext(root, pool),
     },
     {
       provide: DRIZZLE,

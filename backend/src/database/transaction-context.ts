@@ -1,5 +1,7 @@
 import { AsyncLocalStorage } from 'node:async_hooks';
 import { sql } from 'drizzle-orm';
+import { NodePgSession, NodePgTransaction } from 'drizzle-orm/node-postgres';
+import type pg from 'pg';
 import type { Database } from './database.tokens.js';
 
 /** Who a command runs for: the database's change log reads it back from transaction settings. */
@@ -31,7 +33,14 @@ export function isRetryable(err: unknown): boolean {
  * audit row, its lock check and any state change commit together or not at all.
  */
 export class TransactionContext {
-  constructor(private readonly root: Database) {}
+  /**
+   * With the pool, a command's transaction opens and names its actor in one round trip; without
+   * it (unit specs with a stand-in database) through the database's own `transaction`.
+   */
+  constructor(
+    private readonly root: Database,
+    private readonly pool?: pg.Pool,
+  ) {}
 
   /** The current command's transaction, or the pool outside one. */
   current(): Database {
@@ -51,11 +60,16 @@ export class TransactionContext {
     for (let attempt = 1; ; attempt++) {
       const frame: Frame = { tx: this.root, afterCommit: [] };
       try {
-        const result = await this.root.transaction(async (tx) => {
-          frame.tx = tx as unknown as Database;
-          if (options.actor) await setActor(frame.tx, options.actor);
+        const inFrame = (tx: Database) => {
+          frame.tx = tx;
           return storage.run(frame, work);
-        });
+        };
+        const result = this.pool
+          ? await this.pooledTransaction(this.pool, options.actor, inFrame)
+          : await this.root.transaction(async (tx) => {
+              if (options.actor) await setActor(tx as unknown as Database, options.actor);
+              return inFrame(tx as unknown as Database);
+            });
         for (const fn of frame.afterCommit) fn();
         return result;
       } catch (err) {
@@ -72,10 +86,47 @@ export class TransactionContext {
     else fn();
   }
 
+  /**
+   * Drizzle's transaction on one pool client, opened by a single simple-protocol statement that
+   * also sets the actor for the change log (`begin; select set_config(...)`): one round trip less
+   * on every command. The actor's values go in as escaped literals.
+   */
+  private async pooledTransaction<T>(pool: pg.Pool, actor: CommandActor | undefined, work: (tx: Database) => Promise<T>): Promise<T> {
+    const client = await pool.connect();
+    const root = this.root as unknown as { dialect: ConstructorParameters<typeof NodePgSession>[1]; session: { schema: never; options: object } };
+    const session = new NodePgSession(client, root.dialect, root.session.schema, root.session.options);
+    const tx = new NodePgTransaction(root.dialect, session, root.session.schema) as unknown as Database;
+    // Set when the connection's state is unknown (begin, commit or rollback failed): it is dropped, not reused.
+    let broken: Error | undefined;
+    const control = (text: string) => client.query(text).catch((err: Error) => {
+      broken = err;
+      throw err;
+    });
+    try {
+      await control(actor ? `begin; ${actorStatement(client, actor)}` : 'begin');
+      let result: T;
+      try {
+        result = await work(tx);
+      } catch (err) {
+        await control('rollback').catch(() => undefined);
+        throw err;
+      }
+      await control('commit');
+      return result;
+    } finally {
+      client.release(broken);
+    }
+  }
+
   /** Runs `work` on the pool, outside the current transaction: for what must stay even if the command fails. */
   outside<T>(work: () => Promise<T>): Promise<T> {
     return storage.exit(work);
   }
+}
+
+function actorStatement(client: pg.PoolClient, actor: CommandActor): string {
+  const literal = (v: string) => client.escapeLiteral(v);
+  return `select set_config('railwright.actor_id', ${literal(actor.id ?? '')}, true), set_config('railwright.actor_name', ${literal(actor.name)}, true), set_config('railwright.workshop_id', ${literal(actor.workshopId ?? '')}, true)`;
 }
 
 async function setActor(tx: Database, actor: CommandActor) {

@@ -1,17 +1,34 @@
 import { Inject, Injectable } from '@nestjs/common';
 import { and, desc, eq, sql } from 'drizzle-orm';
 import { DRIZZLE, type Database } from '../database/database.tokens.js';
-import { machineReadiness, machines, targetSets } from '../database/schema/index.js';
+import { approvals, machineReadiness, machines, targetSets } from '../database/schema/index.js';
 import type { MachineRow } from './machine.mapper.js';
 
 @Injectable()
 export class MachinesRepository {
   constructor(@Inject(DRIZZLE) private readonly db: Database) {}
 
-  /** The workshop's machines with their readiness summaries: one statement, whatever their history. */
+  /**
+   * The workshop's machines with their readiness summaries (counts only): one statement, whatever
+   * their history. `recheckDue` tells whether an approval's re-check date has passed unhandled.
+   */
   list(workshopId: string) {
     return this.db
-      .select({ machine: machines, targetSetName: targetSets.name, readiness: machineReadiness })
+      .select({
+        machine: machines,
+        targetSetName: targetSets.name,
+        readiness: {
+          total: machineReadiness.total,
+          within: machineReadiness.within,
+          outside: machineReadiness.outside,
+          waived: machineReadiness.waived,
+          notStarted: machineReadiness.notStarted,
+          firstBlocking: machineReadiness.firstBlocking,
+        },
+        recheckDue: sql<boolean>`${machines.state} in ('ready-to-cut', 'recheck-due') and exists (
+          select 1 from ${approvals} a where a.machine_id = ${machines.id} and a.ended_at is null and a.recheck_due_at <= now()
+            and (${machines.state} = 'ready-to-cut' or a.recheck_notified_at is null))`,
+      })
       .from(machines)
       .innerJoin(targetSets, eq(targetSets.id, machines.targetSetId))
       .leftJoin(machineReadiness, eq(machineReadiness.machineId, machines.id))

@@ -23,6 +23,13 @@ export class MachinesService implements OnModuleInit {
     private readonly subjects: SubjectsRegistry,
   ) {}
 
+  private recheckSweep: ((workshopId: string) => Promise<void>) | null = null;
+
+  /** The re-check schedule registers here: the list asks it only when one of its machines is due. */
+  onRecheckDue(sweep: (workshopId: string) => Promise<void>): void {
+    this.recheckSweep = sweep;
+  }
+
   onModuleInit() {
     this.subjects.register('machine', async (workshopId, id) => {
       const found = await this.repo.find(workshopId, id);
@@ -33,13 +40,18 @@ export class MachinesService implements OnModuleInit {
   /**
    * Served from each machine's readiness summary (kept current by every change's transaction),
    * so the list costs one statement however much history the machines have. A machine without
-   * a summary (made by hand in the database) is counted once here and keeps its summary.
+   * a summary (made by hand in the database) is counted once here and keeps its summary. When an
+   * approval's re-check date has passed, the schedule moves it first and the list is read again.
    */
   async list(actor: SessionUser): Promise<MachineListItem[]> {
-    const rows = await this.repo.list(actor.workshopId);
+    let rows = await this.repo.list(actor.workshopId);
+    if (this.recheckSweep && rows.some((r) => r.recheckDue)) {
+      await this.recheckSweep(actor.workshopId);
+      rows = await this.repo.list(actor.workshopId);
+    }
     const out: MachineListItem[] = [];
     for (const { machine, targetSetName, readiness } of rows) {
-      const counts = readiness ?? (await this.readiness.refresh(machine.workshopId, machine.id));
+      const counts = readiness?.total == null ? await this.readiness.refresh(machine.workshopId, machine.id) : readiness;
       out.push({ ...toMachineResponse(machine, targetSetName), checks: toListChecks(counts!) });
     }
     return out;

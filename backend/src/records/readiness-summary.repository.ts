@@ -1,15 +1,83 @@
 import { Inject, Injectable } from '@nestjs/common';
-import { and, desc, eq, isNull, ne, or } from 'drizzle-orm';
+import { and, eq, isNull, ne, or, sql } from 'drizzle-orm';
 import { DRIZZLE, type Database } from '../database/database.tokens.js';
 import { machineReadiness, machines, targetSets, waivers } from '../database/schema/index.js';
+import type { MachineState } from '../database/schema/machines.js';
+import type { SummaryCheck } from '../database/schema/machine-readiness.js';
+import type { TargetValue } from '../database/schema/target-sets.js';
+import type { MachineRef } from './readiness.js';
 
 export type ReadinessSummaryRow = typeof machineReadiness.$inferSelect;
 export type SummaryWaiverRow = typeof waivers.$inferSelect;
+
+/** Everything a readiness count needs besides the contributors' own reads, from one statement. */
+export interface ReadinessContextRow {
+  machine: MachineRef & { name: string; state: MachineState };
+  targetSet: { id: string; name: string; targets: Record<string, TargetValue> } | null;
+  /** Newest first, as the board picks the newest waiver of a check. */
+  waivers: SummaryWaiverRow[];
+  /** The stored summary's checks and how they were counted (only when asked for). */
+  summary: { checks: SummaryCheck[] | null; version: number } | null;
+}
 
 /** The reads a readiness count needs besides the contributors', and the summary rows themselves. */
 @Injectable()
 export class ReadinessSummaryRepository {
   constructor(@Inject(DRIZZLE) private readonly db: Database) {}
+
+  /**
+   * The machine, its target set and its waivers (and its stored summary when asked for) in one
+   * statement: a count costs this plus the contributors' own reads, whatever the history.
+   */
+  async context(workshopId: string, machineId: string, withSummary: boolean): Promise<ReadinessContextRow | null> {
+    const { rows } = await this.db.execute<{
+      id: string;
+      workshop_id: string;
+      target_set_id: string;
+      kind: string;
+      work_area_x_mm: number;
+      work_area_y_mm: number;
+      name: string;
+      state: MachineState;
+      t_id: string | null;
+      t_name: string | null;
+      targets: Record<string, TargetValue> | null;
+      waivers: (Omit<SummaryWaiverRow, 'waivedAt'> & { waivedAt: string })[];
+      s_checks: SummaryCheck[] | null;
+      s_version: number | null;
+    }>(sql`
+      select m.id, m.workshop_id, m.target_set_id, m.kind, m.work_area_x_mm, m.work_area_y_mm, m.name, m.state,
+             t.id as t_id, t.name as t_name, t.targets,
+             coalesce((
+               select jsonb_agg(jsonb_build_object(
+                        'id', w.id, 'workshopId', w.workshop_id, 'machineId', w.machine_id, 'checkKey', w.check_key, 'recordType', w.record_type,
+                        'recordId', w.record_id, 'reason', w.reason, 'waivedById', w.waived_by_id, 'waivedByName', w.waived_by_name, 'waivedAt', w.waived_at
+                      ) order by w.waived_at desc)
+               from ${waivers} w where w.workshop_id = m.workshop_id and w.machine_id = m.id
+             ), '[]'::jsonb) as waivers,
+             ${withSummary ? sql`r.checks` : sql`null::jsonb`} as s_checks, ${withSummary ? sql`r.version` : sql`null::int`} as s_version
+      from ${machines} m
+      left join ${targetSets} t on t.id = m.target_set_id and t.workshop_id = m.workshop_id
+      left join ${machineReadiness} r on ${withSummary ? sql`r.machine_id = m.id` : sql`false`}
+      where m.workshop_id = ${workshopId} and m.id = ${machineId}`);
+    const row = rows[0];
+    if (!row) return null;
+    return {
+      machine: {
+        id: row.id,
+        workshopId: row.workshop_id,
+        targetSetId: row.target_set_id,
+        kind: row.kind,
+        workAreaXMm: Number(row.work_area_x_mm),
+        workAreaYMm: Number(row.work_area_y_mm),
+        name: row.name,
+        state: row.state,
+      },
+      targetSet: row.t_id ? { id: row.t_id, name: row.t_name!, targets: row.targets! } : null,
+      waivers: row.waivers.map((w) => ({ ...w, waivedAt: new Date(w.waivedAt) })),
+      summary: row.s_version === null ? null : { checks: row.s_checks, version: row.s_version },
+    };
+  }
 
   async targetSet(workshopId: string, id: string) {
     const [row] = await this.db
@@ -17,30 +85,6 @@ export class ReadinessSummaryRepository {
       .from(targetSets)
       .where(and(eq(targetSets.workshopId, workshopId), eq(targetSets.id, id)));
     return row ?? null;
-  }
-
-  async machine(workshopId: string, id: string) {
-    const [row] = await this.db
-      .select({
-        id: machines.id,
-        workshopId: machines.workshopId,
-        targetSetId: machines.targetSetId,
-        kind: machines.kind,
-        workAreaXMm: machines.workAreaXMm,
-        workAreaYMm: machines.workAreaYMm,
-      })
-      .from(machines)
-      .where(and(eq(machines.workshopId, workshopId), eq(machines.id, id)));
-    return row ?? null;
-  }
-
-  /** Newest first, as the board picks the newest waiver of a check. */
-  waivers(workshopId: string, machineId: string): Promise<SummaryWaiverRow[]> {
-    return this.db
-      .select()
-      .from(waivers)
-      .where(and(eq(waivers.workshopId, workshopId), eq(waivers.machineId, machineId)))
-      .orderBy(desc(waivers.waivedAt));
   }
 
   async machineIds(workshopId: string, targetSetId?: string): Promise<string[]> {

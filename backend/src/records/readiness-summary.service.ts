@@ -1,20 +1,23 @@
 import { Injectable, Logger, NotFoundException, OnApplicationBootstrap, OnModuleInit } from '@nestjs/common';
 import { blockingOf, boardChecks } from '../approvals/board.js';
 import type { BoardCheck } from '../approvals/snapshot.js';
-import type { BlockingCheckRef } from '../database/schema/machine-readiness.js';
-import type { MachineRef, ReadinessContext } from './readiness.js';
+import type { BlockingCheckRef, SummaryCheck } from '../database/schema/machine-readiness.js';
+import type { MachineState } from '../database/schema/machines.js';
+import type { MachineRef, ReadinessCheck, ReadinessContext } from './readiness.js';
 import { ReadinessRegistry } from './readiness.registry.js';
-import { ReadinessSummaryRepository } from './readiness-summary.repository.js';
+import { ReadinessSummaryRepository, type ReadinessContextRow } from './readiness-summary.repository.js';
 import { RecordsService, type RecordChange } from './records.service.js';
 
 /** Bump when the way checks are counted changes: every machine is recounted at the next start. */
 // 2: every axis gained a backlash check, so every machine is counted again.
-export const SUMMARY_VERSION = 2;
+// 3: the summary keeps its checks, so that a recorded check asks only its own contributor again.
+export const SUMMARY_VERSION = 3;
 
 /** Record types whose changes never move a machine's readiness (no refresh for them). */
 const NO_READINESS_EFFECT = new Set(['evidence', 'bolt-down', 'approval', 'sign-in', 'person', 'password-link']);
 
 export interface ReadinessEvaluation {
+  machine: MachineRef & { name: string; state: MachineState };
   checks: BoardCheck[];
   blocking: BoardCheck[];
   targetSet: { id: string; name: string; recheckIntervalDays: number };
@@ -66,33 +69,57 @@ export class ReadinessSummaryService implements OnModuleInit, OnApplicationBoots
   /** Machines made before the summary existed (or counted an older way) are counted at start. */
   async onApplicationBootstrap() {
     try {
-      for (const m of await this.repo.missingOrOlder(SUMMARY_VERSION)) await this.refresh(m.workshopId, m.id);
+      for (const m of await this.repo.missingOrOlder(this.countVersion())) await this.refresh(m.workshopId, m.id);
     } catch (err) {
       this.logger.error(`readiness summaries could not be brought up to date: ${(err as Error).message}`);
     }
   }
 
-  /** Every check of the machine with waivers applied; the target set is read once for all contributors. */
-  async evaluate(machine: MachineRef, options: { series: boolean }): Promise<ReadinessEvaluation> {
-    const [targetSet, waivers] = await Promise.all([this.repo.targetSet(machine.workshopId, machine.targetSetId), this.repo.waivers(machine.workshopId, machine.id)]);
-    if (!targetSet) throw new NotFoundException('No such target set in this workshop');
-    const context: ReadinessContext = { targets: targetSet.targets, series: options.series };
-    const checks = boardChecks(await this.registry.checksFor(machine, context), waivers);
+  /**
+   * Every check of the machine with waivers applied. The machine, its target set and waivers come
+   * from one statement; then each contributor's own reads (one query per kind of record).
+   */
+  async evaluate(workshopId: string, machineId: string, options: { series: boolean }): Promise<ReadinessEvaluation> {
+    const found = await this.repo.context(workshopId, machineId, false);
+    if (!found) throw new NotFoundException('No such machine in this workshop');
+    const targetSet = targetSetOf(found);
+    const checks = boardChecks(await this.registry.checksFor(found.machine, { targets: targetSet.targets, series: options.series }), found.waivers);
     const interval = targetSet.targets.recheckIntervalDays;
     return {
+      machine: found.machine,
       checks,
       blocking: blockingOf(checks),
       targetSet: { id: targetSet.id, name: targetSet.name, recheckIntervalDays: Math.round(interval?.value ?? 180) },
     };
   }
 
-  /** Recounts one machine into its summary row (in the current command's transaction, if any). */
-  async refresh(workshopId: string, machineId: string): Promise<ReadinessCounts | null> {
-    const machine = await this.repo.machine(workshopId, machineId);
-    if (!machine) return null;
-    const counts = countBoard((await this.evaluate(machine, { series: false })).checks);
-    await this.repo.upsert({ machineId, workshopId, ...counts, version: SUMMARY_VERSION });
+  /**
+   * Recounts one machine into its summary row (in the current command's transaction, if any).
+   * After a recorded check of a known kind only the contributor that reports that kind is asked
+   * again; the other checks are taken from the stored summary. Anything else asks every contributor.
+   */
+  async refresh(workshopId: string, machineId: string, checkKind?: string): Promise<ReadinessCounts | null> {
+    const found = await this.repo.context(workshopId, machineId, true);
+    if (!found) return null;
+    const context: ReadinessContext = { targets: targetSetOf(found).targets, series: false };
+    const version = this.countVersion();
+    const only = checkKind ? this.registry.contributorsOf(checkKind) : [];
+    const stored = found.summary?.version === version ? found.summary.checks : null;
+    let checks: SummaryCheck[];
+    if (only.length && stored) {
+      const fresh = await Promise.all(only.map(async (index) => (await this.registry.checksOf(index, found.machine, context)).map((c) => summaryCheck(index, c))));
+      checks = [...stored.filter((c) => !only.includes(c.contributor)), ...fresh.flat()];
+    } else {
+      checks = (await this.registry.byContributor(found.machine, context)).flatMap((list, index) => list.map((c) => summaryCheck(index, c)));
+    }
+    const counts = countBoard(boardChecks(checks.map(asReadinessCheck), found.waivers));
+    await this.repo.upsert({ machineId, workshopId, ...counts, checks, version });
     return counts;
+  }
+
+  /** The summary's version: the way of counting and the number of contributors it was counted with. */
+  private countVersion(): number {
+    return SUMMARY_VERSION * 1000 + this.registry.size;
   }
 
   /** Recounts the workshop's machines (those judged against one target set, when given). */
@@ -104,11 +131,25 @@ export class ReadinessSummaryService implements OnModuleInit, OnApplicationBoots
     if (NO_READINESS_EFFECT.has(change.recordType)) return;
     if (change.machineId) {
       if (change.recordType === 'machine' && change.action === 'state-changed') return;
-      await this.refresh(workshopId, change.machineId);
+      await this.refresh(workshopId, change.machineId, change.checkKind);
       return;
     }
     // Changes that are not one machine's but judge many: a target set, the workshop's safety-walk items.
     if (change.recordType === 'target-set' && change.recordId) await this.refreshWorkshop(workshopId, change.recordId);
     else if (change.recordType === 'safety-item') await this.refreshWorkshop(workshopId);
   }
+}
+
+function targetSetOf(found: ReadinessContextRow): NonNullable<ReadinessContextRow['targetSet']> {
+  if (!found.targetSet) throw new NotFoundException('No such target set in this workshop');
+  return found.targetSet;
+}
+
+function summaryCheck(contributor: number, c: ReadinessCheck): SummaryCheck {
+  return { contributor, key: c.key, kind: c.kind, subject: c.subject, status: c.status, recordId: c.recordId };
+}
+
+/** A stored check as the board counts it: waivers match on key and record, order on kind, subject and key. */
+function asReadinessCheck(c: SummaryCheck): ReadinessCheck {
+  return { key: c.key, kind: c.kind as ReadinessCheck['kind'], subject: c.subject, status: c.status, recordId: c.recordId, target: null, result: null, recordType: null, recordedAt: null, link: '' };
 }

@@ -6,11 +6,18 @@ import type { MachineRef, ReadinessCheck, ReadinessContext, ReadinessContributor
 @Injectable()
 export class ReadinessRegistry {
   private readonly contributors: ReadinessContributor[] = [];
+  /** Which contributors have reported each check kind (learnt from their answers). */
+  private readonly kinds = new Map<string, Set<number>>();
 
   constructor(private readonly repo: ReadinessSummaryRepository) {}
 
   register(contributor: ReadinessContributor): void {
     this.contributors.push(contributor);
+  }
+
+  /** How many contributors there are: a stored summary counted with another number is counted again. */
+  get size(): number {
+    return this.contributors.length;
   }
 
   /** Without a context, reads the machine's target set itself and includes the data series. */
@@ -20,7 +27,33 @@ export class ReadinessRegistry {
       if (!set) throw new NotFoundException('No such target set in this workshop');
       return this.checksFor(machine, { targets: set.targets, series: true });
     }
+    return (await this.byContributor(machine, context)).flat();
+  }
+
+  /** Every contributor's checks, in registration order. */
+  async byContributor(machine: MachineRef, context: ReadinessContext): Promise<ReadinessCheck[][]> {
     const lists = await Promise.all(this.contributors.map((c) => c.checksFor(machine, context)));
-    return lists.flat();
+    lists.forEach((list, index) => this.learn(index, list));
+    return lists;
+  }
+
+  /** One contributor's checks. */
+  async checksOf(index: number, machine: MachineRef, context: ReadinessContext): Promise<ReadinessCheck[]> {
+    const list = await this.contributors[index].checksFor(machine, context);
+    this.learn(index, list);
+    return list;
+  }
+
+  /** The contributors known to report checks of this kind; empty while none has yet. */
+  contributorsOf(kind: string): number[] {
+    return [...(this.kinds.get(kind) ?? [])];
+  }
+
+  private learn(index: number, list: ReadinessCheck[]): void {
+    for (const check of list) {
+      const known = this.kinds.get(check.kind);
+      if (known) known.add(index);
+      else this.kinds.set(check.kind, new Set([index]));
+    }
   }
 }

@@ -23,6 +23,8 @@ export interface AuditInput {
   action: string;
   summary: string;
   changes?: Record<string, unknown>;
+  /** For a recorded check: its readiness kind (not stored), so only the contributor reporting it is asked again. */
+  checkKind?: string;
 }
 
 export interface CheckRecordedEvent {
@@ -36,7 +38,7 @@ export interface CheckRecordedEvent {
 type Listener = (actor: SessionUser, event: CheckRecordedEvent) => Promise<void>;
 
 /** What an audited change touched: enough to know whose readiness may have moved. */
-export type RecordChange = Pick<AuditInput, 'machineId' | 'recordType' | 'recordId' | 'action'>;
+export type RecordChange = Pick<AuditInput, 'machineId' | 'recordType' | 'recordId' | 'action' | 'checkKind'>;
 type ChangeListener = (workshopId: string, change: RecordChange) => Promise<void>;
 
 /**
@@ -67,7 +69,7 @@ export class RecordsService {
     else await this.repo.insertAudit(values);
     // After the machine's touch: that row lock makes commands on one machine take turns, so each
     // listener (the readiness summary) reads what the command before it committed.
-    const change: RecordChange = { machineId: input.machineId ?? null, recordType: input.recordType, recordId: input.recordId ?? null, action: input.action };
+    const change: RecordChange = { machineId: input.machineId ?? null, recordType: input.recordType, recordId: input.recordId ?? null, action: input.action, checkKind: input.checkKind };
     for (const listener of this.changeListeners) await listener(actor.workshopId, change);
   }
 
@@ -78,7 +80,7 @@ export class RecordsService {
 
   /** Call after saving a check's result: audits it and lets approvals react (e.g. leave ready-to-cut). */
   async checkRecorded(actor: SessionUser, event: CheckRecordedEvent, summary: string): Promise<void> {
-    await this.audit(actor, { machineId: event.machineId, recordType: event.recordType, recordId: event.recordId, action: 'recorded', summary, changes: { status: event.status } });
+    await this.audit(actor, { machineId: event.machineId, recordType: event.recordType, recordId: event.recordId, action: 'recorded', summary, changes: { status: event.status }, checkKind: event.kind });
     for (const listener of this.listeners) {
       try {
         await listener(actor, event);
