@@ -144,6 +144,9 @@ test.describe('indicator input', () => {
     await page.getByRole('form', { name: 'Fixing Hole 1' }).screenshot({ path: shot('indicator-bolt-down-tablet') });
     await page.getByRole('button', { name: 'Fix hole 1' }).click();
     await expect(progress).toHaveText('1 of 5 holes fixed');
+    // The fix is shown at once and recorded just after; once it is (the page has read the server's
+    // answer and drawn it), the next reading comes, as it would once the carriage is at hole 5.
+    await expect(page.getByRole('row', { name: 'Hole 1', exact: true })).toContainText(/Fixed$/);
 
     // The far end, from a negative reading: filled, aimed against, still not fixed.
     await expect(page.getByRole('heading', { name: 'Hole 5', exact: true })).toBeVisible();
@@ -152,10 +155,11 @@ test.describe('indicator input', () => {
     await expect(page.getByLabel('Reading at hole 5 (thou)')).toHaveValue('-0.4');
     await expect(page.getByTestId('difference')).toHaveText('−0.9 thou');
     await expect(progress).toHaveText('1 of 5 holes fixed');
-    expect(await fixedOnServer()).toBe(1);
+    await expect.poll(fixedOnServer).toBe(1);
     await page.getByRole('button', { name: 'Fix hole 5' }).click();
     await expect(progress).toHaveText('2 of 5 holes fixed');
-    expect(await fixedOnServer()).toBe(2);
+    // The fix is shown at once and sent as an entry of the device's queue: it reaches the server just after.
+    await expect.poll(fixedOnServer).toBe(2);
   });
 
   test('a serial indicator fills a sweep line by line, and a reading can be taken back', async ({ page }) => {

@@ -104,7 +104,7 @@ export function BoltDownGuide({ bd, canRecord, typicalBoltSize }: Props) {
           <BoltDownChart
             fixed={fixed}
             holePositions={bd.holes.map((h) => h.position)}
-            aim={hole && !hole.fixed && hole.target !== null ? { position: hole.position, reading: hole.target } : null}
+            aim={open && hole && !hole.fixed && hole.target !== null ? { position: hole.position, reading: hole.target } : null}
             lengthMm={bd.rail.lengthMm}
             unitLabel={unit}
           />

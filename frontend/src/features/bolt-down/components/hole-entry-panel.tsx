@@ -141,34 +141,28 @@ export function HoleEntryPanel({ bd, hole, isNext, refusal, record, onFixed }: P
       </Box>
 
       {confirming && difference !== null && (
-        <Alert
-          severity="warning"
-          sx={{ mt: 2 }}
-          role="alert"
-          data-testid="miss-confirm"
-          action={
-            <Stack direction={{ xs: 'column', sm: 'row' }} spacing={1} sx={{ alignItems: 'stretch' }}>
-              <Button
-                color="inherit"
-                variant="outlined"
-                onClick={() => {
-                  setConfirming(false);
-                  inputRef.current?.focus();
-                }}
-              >
-                Keep nudging
-              </Button>
-              <Button color="warning" variant="contained" onClick={send} sx={{ whiteSpace: 'nowrap' }}>
-                Fix it anyway
-              </Button>
-            </Stack>
-          }
-        >
+        <Alert severity="warning" sx={{ mt: 2 }} role="alert" data-testid="miss-confirm">
           <AlertTitle>
             {holeName(hole.index)} reads {plain(Math.abs(difference), bd.readingUnit)} {difference > 0 ? 'above' : 'below'} its aim
           </AlertTitle>
           The band is ±{plain(bd.band, bd.readingUnit)}, so this is {plain(Math.max(Math.abs(difference) - bd.band, 0), bd.readingUnit)} outside it. Holes fixed after this one are aimed
           from it. Nudge the rail to {signed(hole.target, bd.readingUnit)}, or fix it here on purpose.
+          <Stack direction="row" spacing={1} useFlexGap sx={{ mt: 1.5, flexWrap: 'wrap' }}>
+            <Button color="warning" variant="contained" onClick={send} sx={{ whiteSpace: 'nowrap' }}>
+              Fix it anyway
+            </Button>
+            <Button
+              color="inherit"
+              variant="outlined"
+              sx={{ whiteSpace: 'nowrap' }}
+              onClick={() => {
+                setConfirming(false);
+                inputRef.current?.focus();
+              }}
+            >
+              Keep nudging
+            </Button>
+          </Stack>
         </Alert>
       )}
       {refusal && !problem && (

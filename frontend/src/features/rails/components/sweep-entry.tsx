@@ -201,7 +201,7 @@ export function SweepEntry({ rail, target, takenBy, onSaved }: { rail: Rail; tar
         onClose={(_, why) => why !== 'clickaway' && setDropped(null)}
         message={dropped ? `Removed station ${dropped.index + 1} at ${dropped.row.position || '?'} ${UNIT_LABELS[draft.lengthUnit]}${dropped.row.reading.trim() ? ` (reading ${dropped.row.reading})` : ''}` : ''}
         action={
-          <Button color="inherit" size="small" onClick={undoDrop}>
+          <Button color="inherit" size="small" onClick={undoDrop} aria-label={dropped ? `Undo removing station ${dropped.index + 1}` : 'Undo'}>
             Undo
           </Button>
         }
