@@ -101,13 +101,9 @@ export function BacklashEntryGrid({ axis, onRecorded }: { axis: Axis; onRecorded
         ...(numberOf(resolution) !== undefined ? { resolution: numberOf(resolution) } : {}),
         ...(notes.trim() ? { notes: notes.trim() } : {}),
       },
-      {
-        onQueued: clear,
-        onRecorded: (saved) => {
-          clear();
-          onRecorded(saved);
-        },
-      },
+      // Recorded: the readings stay, to be corrected and recorded again if need be. Waiting for the
+      // connection: they go with the entry (shown as waiting) and the grid is free for the next check.
+      { onQueued: clear, onRecorded },
     );
 
   const ru = UNIT_LABELS[readingUnit];
