@@ -1,35 +1,41 @@
-import { useCallback, useRef } from 'react';
+import { memo, useCallback, useMemo, useRef } from 'react';
 import { Table, TableBody, TableCell, TableContainer, TableHead, TableRow } from '@mui/material';
-import { UNIT_LABELS, type LengthUnit } from '../../../lib/units';
-import type { StationDraft } from '../hooks/use-sweep-draft';
+import { fromMm, UNIT_LABELS, type LengthUnit } from '../../../lib/units';
+import { useDraft, type StationDraft, type SweepDraftStore } from '../hooks/use-sweep-draft';
+import type { PreviewBody } from '../api/preview-straightness';
+import type { StraightnessResult } from '../types';
+import { readyStations } from '../utils/stations';
 import { StationRow } from './station-row';
 
 /**
  * One reading field per station, made for a hand that holds an indicator: Enter moves to the next
  * station's reading (and from the last one to Save).
  */
-export function StationReadings({
-  rows,
+export const StationReadings = memo(function StationReadings({
+  store,
   unit,
   lengthUnit = 'mm',
-  problems,
-  residuals,
+  fit,
   onRowChange,
   onDrop,
   onLastEnter,
 }: {
-  rows: StationDraft[];
+  store: SweepDraftStore;
   unit: LengthUnit;
   /** Unit the positions are typed in. */
   lengthUnit?: LengthUnit;
-  problems: Map<number, string>;
-  /** Residual from the live fit per row, in the unit, when known. */
-  residuals?: (number | null)[];
+  /** The live fit, whose residuals are shown beside the readings they belong to. */
+  fit: { body: PreviewBody; result: StraightnessResult } | undefined;
   /** These three should keep their identity between renders (useCallback), so rows stay memoised. */
   onRowChange: (index: number, patch: Partial<StationDraft>) => void;
   onDrop: (index: number) => void;
   onLastEnter: () => void;
 }) {
+  // The rows are read here (not by the form), so a keystroke re-renders this table and its one row.
+  const rows = useDraft(store, (d) => d.stations);
+  const problems = useMemo(() => readyStations(rows).problems, [rows]);
+  // Residuals back onto the rows they belong to (rows without a reading have none).
+  const byPosition = useMemo(() => (fit ? new Map(fit.body.positions.map((p, k) => [p, fromMm(fit.result.leastSquares.residuals[k], unit)])) : null), [fit, unit]);
   const inputs = useRef<(HTMLInputElement | null)[]>([]);
   const inputRef = useCallback((i: number, el: HTMLInputElement | null) => {
     inputs.current[i] = el;
@@ -66,7 +72,7 @@ export function StationReadings({
               row={r}
               unit={unit}
               problem={problems.get(i)}
-              residual={residuals?.[i]}
+              residual={byPosition ? (byPosition.get(Number(r.position)) ?? null) : undefined}
               onRowChange={onRowChange}
               onEnter={next}
               onDrop={onDrop}
@@ -77,4 +83,4 @@ export function StationReadings({
       </Table>
     </TableContainer>
   );
-}
+});
