@@ -211,7 +211,10 @@ export function PositioningGrid({ axis, onRecorded }: { axis: Axis; onRecorded: 
           <Box component="table" role="grid" aria-label="Repeat-and-reverse readings" sx={{ borderCollapse: 'collapse', '& th, & td': { p: 0.25 }, '& th': { fontWeight: 500, color: 'text.secondary', textAlign: 'left', whiteSpace: 'nowrap', pr: 1 } }}>
             <thead>
               <tr>
-                <th scope="col">Target ({UNIT_LABELS[lengthUnit]})</th>
+                {/* The row names stay in view while a phone scrolls along the targets. */}
+                <Box component="th" scope="col" sx={{ position: 'sticky', left: 0, zIndex: 1, bgcolor: 'background.paper' }}>
+                  Target ({UNIT_LABELS[lengthUnit]})
+                </Box>
                 {targets.map((t, c) => (
                   <th key={c} scope="col">
                     <TextField
@@ -232,9 +235,9 @@ export function PositioningGrid({ axis, onRecorded }: { axis: Axis; onRecorded: 
                 const { direction, run } = rowLabel(r, runs, order);
                 return (
                   <tr key={r}>
-                    <th scope="row" style={{ color: direction === 'up' ? '#1d4f4a' : '#a4522f' }}>
+                    <Box component="th" scope="row" sx={{ color: direction === 'up' ? '#1d4f4a' : '#a4522f', position: 'sticky', left: 0, zIndex: 1, bgcolor: 'background.paper' }}>
                       {direction === 'up' ? '↑ Up' : '↓ Down'} {run} ({UNIT_LABELS[unit]})
-                    </th>
+                    </Box>
                     {row.map((v, c) => (
                       <td key={c}>
                         <TextField
