@@ -68,6 +68,20 @@ test.describe('backlash check', () => {
         await page.getByLabel(`Down ${i + 1} at position ${r + 1}`).fill(READINGS[r].down[i]);
       }
     }
+    // Enter on the last position adds one and goes to it. Remove buttons are reached by pointer,
+    // never by Tab, and a removed position comes back, readings and all, with Undo.
+    await page.getByLabel('Down 3 at position 3').press('Enter');
+    await expect(page.getByLabel('Position 4', { exact: true })).toBeFocused();
+    const remove4 = page.getByRole('button', { name: 'Remove position 4' });
+    await expect(remove4).toHaveAttribute('tabindex', '-1');
+    await page.getByRole('button', { name: 'Remove position 2' }).click();
+    await expect(page.getByLabel('Position 2', { exact: true })).toHaveValue('880');
+    await expect(page.getByText('Removed position 2 (463 mm)')).toBeVisible();
+    await page.getByRole('button', { name: 'Undo' }).click();
+    await expect(page.getByLabel('Position 2', { exact: true })).toHaveValue('463');
+    await expect(page.getByLabel('Up 1 at position 2')).toHaveValue(READINGS[1].up[0]);
+    await remove4.click();
+    await expect(page.getByLabel('Position 4', { exact: true })).toHaveCount(0);
     await page.getByLabel('Position 3', { exact: true }).fill('900');
     await page.getByRole('button', { name: 'Record backlash check' }).click();
 
