@@ -5,6 +5,7 @@ import ArrowBack from '@mui/icons-material/ArrowBack';
 import EditOutlined from '@mui/icons-material/EditOutlined';
 import FileDownloadOutlined from '@mui/icons-material/FileDownloadOutlined';
 import { PageHeader } from '../../components/layout/page-header';
+import { PrintButton } from '../../components/print/print-button';
 import { ErrorState } from '../../components/states/error-state';
 import { LoadingState } from '../../components/states/loading-state';
 import { paths } from '../../config/paths';
@@ -43,6 +44,7 @@ export default function AxisRoute() {
         subtitle={a.driveSummary}
         actions={
           <>
+            <PrintButton what={`axis ${a.name}`} />
             <Button variant="outlined" startIcon={<FileDownloadOutlined />} onClick={() => setProgram(true)}>
               Download test program
             </Button>

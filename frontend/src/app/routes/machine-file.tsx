@@ -2,8 +2,9 @@ import { UNIT_LABELS } from '../../lib/units';
 import { lazy, Suspense, useEffect, type ReactNode } from 'react';
 import { useParams, useSearchParams } from 'react-router-dom';
 import { useQueryClient } from '@tanstack/react-query';
-import { Box, Tab, Tabs } from '@mui/material';
+import { Box, Tab, Tabs, Typography } from '@mui/material';
 import { PageHeader } from '../../components/layout/page-header';
+import { PrintButton } from '../../components/print/print-button';
 import { LoadingState } from '../../components/states/loading-state';
 import { ErrorState } from '../../components/states/error-state';
 import { useMachine } from '../../features/machines/api/get-machine';
@@ -66,7 +67,12 @@ export default function MachineFileRoute() {
       <PageHeader
         title={m.name}
         subtitle={`${KIND_LABELS[m.kind]} · work area ${m.workAreaInLengthUnit.x} × ${m.workAreaInLengthUnit.y} ${UNIT_LABELS[m.lengthUnit]} · ${m.targetSet.name}`}
-        actions={<MachineStateChip state={m.state} />}
+        actions={
+          <>
+            <MachineStateChip state={m.state} />
+            <PrintButton what={`${section.label.toLowerCase()} of ${m.name}`} />
+          </>
+        }
       />
       <Box sx={{ borderBottom: 1, borderColor: 'divider', mb: 2 }}>
         <Tabs value={tab} onChange={(_, v) => setParams({ tab: v }, { replace: true })} variant="scrollable" allowScrollButtonsMobile aria-label="Machine file sections">
@@ -75,6 +81,9 @@ export default function MachineFileRoute() {
           ))}
         </Tabs>
       </Box>
+      <Typography data-print="only" variant="h2" sx={{ mb: 2 }}>
+        {section.label}
+      </Typography>
       <Suspense fallback={<LoadingState label={`Opening ${section.label.toLowerCase()}…`} />}>{section.render(m)}</Suspense>
     </>
   );

@@ -1,9 +1,10 @@
 import { useState } from 'react';
 import { Link as RouterLink, useParams } from 'react-router-dom';
-import { Button, Grid, Link, Stack } from '@mui/material';
+import { Box, Button, Grid, Link, Stack } from '@mui/material';
 import HardwareOutlined from '@mui/icons-material/HardwareOutlined';
 import { paths } from '../../config/paths';
 import { PageHeader } from '../../components/layout/page-header';
+import { PrintButton } from '../../components/print/print-button';
 import { LoadingState } from '../../components/states/loading-state';
 import { ErrorState } from '../../components/states/error-state';
 import { useMe } from '../../features/auth/api/get-me';
@@ -66,7 +67,12 @@ export default function RailRoute() {
             · axis {r.axis} · {r.lengthMm} mm · target {target ? `${target.value} ${target.unit === 'um' ? 'µm' : target.unit}` : '…'} straightness ({m.targetSet.name})
           </>
         }
-        actions={<CheckStatusChip status={latest ? latest.status : 'not-started'} size="medium" />}
+        actions={
+          <>
+            <CheckStatusChip status={latest ? latest.status : 'not-started'} size="medium" />
+            <PrintButton what={`rail ${r.label}`} />
+          </>
+        }
       />
       <Stack spacing={2.5}>
         <Grid container spacing={2.5}>
@@ -79,7 +85,7 @@ export default function RailRoute() {
             </Grid>
           )}
         </Grid>
-        {recorder && <SweepEntry key={r.id} rail={r} target={target} takenBy={me.data?.name ?? ''} onSaved={setSaved} />}
+        {recorder && <Box data-print="hide"><SweepEntry key={r.id} rail={r} target={target} takenBy={me.data?.name ?? ''} onSaved={setSaved} /></Box>}
         {saved && <SweepResult sweep={saved} title="Sweep saved" />}
         {sweeps.isError && <ErrorState error={sweeps.error} onRetry={() => sweeps.refetch()} />}
         {sweeps.data && <SweepHistory sweeps={sweeps.data} canRecord={recorder} />}

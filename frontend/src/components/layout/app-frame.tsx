@@ -11,6 +11,7 @@ import { navItemsFor } from '../../config/navigation';
 import { paths } from '../../config/paths';
 import { ROLE_LABELS, type User } from '../../features/auth/types';
 import { useLogout } from '../../features/auth/api/logout';
+import { PrintStyles } from '../print/print-styles';
 
 const DRAWER_WIDTH = 232;
 
@@ -88,6 +89,10 @@ export function AppFrame({ user, children }: { user: User; children: ReactNode }
         {nav}
       </Drawer>
       <Box component="main" sx={{ flexGrow: 1, minWidth: 0, p: { xs: 2, sm: 3 }, pt: { xs: 10, sm: 11 } }}>
+        <PrintStyles />
+        <Typography data-print="only" variant="body2" color="text.secondary" sx={{ mb: 1 }}>
+          Railwright · {user.workshop.name} · printed {new Date().toISOString().slice(0, 16).replace('T', ' ')} UTC by {user.name}
+        </Typography>
         {children}
       </Box>
     </Box>
