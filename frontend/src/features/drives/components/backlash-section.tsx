@@ -20,7 +20,7 @@ export function BacklashSection({ axis, mayRecord }: { axis: Axis; mayRecord: bo
       <Typography variant="h3" component="h2" id="backlash-title">
         Backlash check
       </Typography>
-      {mayRecord && <BacklashEntryGrid axis={axis} onRecorded={(c) => setSelected(c.id)} />}
+      {mayRecord && <Box data-print="hide"><BacklashEntryGrid axis={axis} onRecorded={(c) => setSelected(c.id)} /></Box>}
       {checks.isPending && <LoadingState label="Loading backlash checks…" />}
       {checks.isError && <ErrorState error={checks.error} onRetry={() => checks.refetch()} />}
       {checks.data && !shown && <EmptyState title="No backlash check yet">Read the indicator from both sides at both ends and the middle of the travel and enter the readings.</EmptyState>}

@@ -24,7 +24,7 @@ export function PositioningSection({ axis, mayRecord }: { axis: Axis; mayRecord:
       <Typography variant="h3" component="h2" id="runs-title">
         Repeat-and-reverse run
       </Typography>
-      {mayRecord && <PositioningGrid axis={axis} onRecorded={(r) => setSelected(r.id)} />}
+      {mayRecord && <Box data-print="hide"><PositioningGrid axis={axis} onRecorded={(r) => setSelected(r.id)} /></Box>}
       {runs.isPending && <LoadingState label="Loading runs…" />}
       {runs.isError && <ErrorState error={runs.error} onRetry={() => runs.refetch()} />}
       {runs.data && !shownId && <EmptyState title="No repeat-and-reverse run yet">Download the test program, run it with an indicator on the axis and enter the readings.</EmptyState>}

@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { Stack, Typography } from '@mui/material';
+import { Box, Stack, Typography } from '@mui/material';
 import { EmptyState } from '../../../components/states/empty-state';
 import { ErrorState } from '../../../components/states/error-state';
 import { LoadingState } from '../../../components/states/loading-state';
@@ -22,7 +22,7 @@ export function TravelTrialSection({ axis, mayRecord }: { axis: Axis; mayRecord:
       <Typography variant="h3" component="h2" id="trial-title">
         Travel trial
       </Typography>
-      {mayRecord && <TravelTrialEntry axis={axis} onRecorded={(t) => setSelected(t.id)} />}
+      {mayRecord && <Box data-print="hide"><TravelTrialEntry axis={axis} onRecorded={(t) => setSelected(t.id)} /></Box>}
       {trials.isPending && <LoadingState label="Loading travel trials…" />}
       {trials.isError && <ErrorState error={trials.error} onRetry={() => trials.refetch()} />}
       {trials.data && !shownId && <EmptyState title="No travel trial yet">Record commanded and measured moves to check and correct the steps per mm.</EmptyState>}

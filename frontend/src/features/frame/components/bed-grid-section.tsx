@@ -44,7 +44,7 @@ export function BedGridSection({ machineId, machineKind, workArea, canRecord }: 
           : 'Heights over the bed or spoilboard on a grid. The judged value is minimum-zone flatness (ISO 1101: the smallest distance between two parallel planes holding every point); least-squares flatness and the tilt are shown beside it.'}
       </Typography>
       <Box sx={{ display: 'grid', gap: 3, gridTemplateColumns: { xs: 'minmax(0, 1fr)', lg: canRecord ? 'minmax(360px, 1fr) minmax(0, 1fr)' : 'minmax(0, 1fr)' } }}>
-        {canRecord && <BedGridEntry machineId={machineId} workArea={workArea} onSaved={(x) => setSelectedId(x.id)} />}
+        {canRecord && <Box data-print="hide"><BedGridEntry machineId={machineId} workArea={workArea} onSaved={(x) => setSelectedId(x.id)} /></Box>}
         <Box>
           {g && !g.result ? (
             <Stack spacing={1.5}>

@@ -31,7 +31,7 @@ export function DiagonalCheckSection({ machineId, canRecord }: { machineId: stri
         Mark or cut a large rectangle with the machine, measure both sides and both diagonals. Equal diagonals mean a square gantry; the difference gives the angle and how far to move one end of a dual-drive gantry (usually by offsetting its home switch), then re-home and check again.
       </Typography>
       <Box sx={{ display: 'grid', gap: 3, gridTemplateColumns: { xs: 'minmax(0, 1fr)', lg: canRecord ? 'minmax(320px, 5fr) minmax(0, 7fr)' : 'minmax(0, 1fr)' } }}>
-        {canRecord && <DiagonalCheckForm machineId={machineId} onSaved={(c) => setSelectedId(c.id)} />}
+        {canRecord && <Box data-print="hide"><DiagonalCheckForm machineId={machineId} onSaved={(c) => setSelectedId(c.id)} /></Box>}
         <Box>
           {shown && !shown.result ? (
             <Stack spacing={1.5}>

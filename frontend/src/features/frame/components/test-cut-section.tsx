@@ -27,7 +27,7 @@ export function TestCutSection({ machineId, machineKind, canRecord }: { machineI
           : ' Part sizes are judged against the ± tolerance of the target set.'}
       </Typography>
       <Box sx={{ display: 'grid', gap: 3, gridTemplateColumns: { xs: 'minmax(0, 1fr)', lg: canRecord ? 'minmax(320px, 5fr) minmax(0, 7fr)' : 'minmax(0, 1fr)' } }}>
-        {canRecord && <TestCutForm machineId={machineId} machineKind={machineKind} onSaved={(c) => setSelectedId(c.id)} />}
+        {canRecord && <Box data-print="hide"><TestCutForm machineId={machineId} machineKind={machineKind} onSaved={(c) => setSelectedId(c.id)} /></Box>}
         <Box sx={{ minWidth: 0 }}>
           {cut ? (
             <TestCutResults
