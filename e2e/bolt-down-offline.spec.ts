@@ -34,6 +34,8 @@ test('bolt-down holes and a rail sweep typed offline are each recorded once when
   await expect(page.getByTestId('progress')).toHaveText('1 of 5 holes fixed');
   const bd = (await (await page.request.get(`/api/rails/${railId}/bolt-downs`)).json())[0];
   await expect.poll(async () => (await (await page.request.get(`/api/bolt-downs/${bd.id}`)).json()).fixedCount).toBe(1);
+  // Recorded, and the server's answer read back, before the connection is cut.
+  await expect(page.getByRole('row', { name: 'Hole 1', exact: true })).toContainText(/Fixed$/);
   // The service worker has taken the page over: from now on the app opens without a connection.
   await page.waitForFunction(async () => !!(await navigator.serviceWorker.ready) && !!navigator.serviceWorker.controller);
 

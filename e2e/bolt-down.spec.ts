@@ -125,6 +125,9 @@ test.describe('bolt-down guide', () => {
     await fixHole(page, 9, '2.0');
     await page.getByTestId('miss-confirm').getByRole('button', { name: 'Fix it anyway' }).click();
     await expect(page.getByTestId('progress')).toHaveText('2 of 9 holes fixed');
+    // Both recorded (the server's answer read back) before the link drops.
+    await expect(page.getByRole('row', { name: 'Hole 9', exact: true })).toContainText('Fixed outside band');
+    await expect(page.getByRole('row', { name: 'Hole 1', exact: true })).toContainText(/Fixed$/);
     const bd = (await (await page.request.get(`/api/rails/${railId}/bolt-downs`)).json())[0];
 
     // The link to the server drops: the first write after it reaches the server but its answer is
