@@ -4,6 +4,7 @@ import { DRIZZLE, type Database } from '../src/database/database.tokens.js';
 import { createTestApp, createTestWorkshop, type TestWorkshop } from './helpers/test-app.js';
 import { newAxis, newMachine, rackAxis, screwAxis } from './helpers/drives.js';
 import { readProgram } from './support/program-reader.js';
+import { disposition } from './support/disposition.js';
 
 /** The program read back by an independent RS-274 reader and simulated (support/program-reader.ts). */
 function parseProgram(text: string, letter: string) {
@@ -55,7 +56,7 @@ describe('test programs, speed check and travel envelope', () => {
     const res = await ws.as.viewer.get(`/api/axes/${xId}/test-program`).query({ kind: 'positioning', targets: targets.join(','), runs: 5, overrun: 4, feed: 800, dwell: 3 });
     expect(res.status).toBe(200);
     expect(res.headers['content-type']).toMatch(/^text\/plain/);
-    expect(res.headers['content-disposition']).toMatch(/^attachment; filename=".*-x-repeat-and-reverse\.nc"$/);
+    expect(disposition(res.headers['content-disposition'])).toEqual({ type: 'attachment', filename: expect.stringMatching(/-x-repeat-and-reverse\.nc$/) });
     const text = res.text;
     // The usual cautions (TRADE.md: moving gantry pinch points, E-stop, plasma off; common practice).
     expect(text).toMatch(/\(CAUTIONS - the machine moves on its own while this program runs\.\)/);
@@ -94,7 +95,7 @@ describe('test programs, speed check and travel envelope', () => {
   it('default targets: at least five, rising, inside the measured travel with room for the overrun', async () => {
     const res = await ws.as.technician.get(`/api/axes/${xId}/test-program?kind=positioning&format=txt`);
     expect(res.status).toBe(200);
-    expect(res.headers['content-disposition']).toMatch(/\.txt"$/);
+    expect(disposition(res.headers['content-disposition']).filename).toMatch(/\.txt$/);
     const p = parseProgram(res.text, 'X');
     expectSafeProgram(res.text, 'X', 920, 'G21');
     const up = p.readings.slice(0, p.readings.length / 10);
@@ -112,7 +113,7 @@ describe('test programs, speed check and travel envelope', () => {
   it('a travel-trial program: out to each distance from the start and back, a stop to measure at each', async () => {
     const res = await ws.as.technician.get(`/api/axes/${xId}/test-program`).query({ kind: 'travel', distances: '100,300,600,850', start: 10, overrun: 5, feed: 1200 });
     expect(res.status).toBe(200);
-    expect(res.headers['content-disposition']).toMatch(/travel-trial\.nc"$/);
+    expect(disposition(res.headers['content-disposition']).filename).toMatch(/travel-trial\.nc$/);
     const p = parseProgram(res.text, 'X');
     expectSafeProgram(res.text, 'X', 920, 'G21');
     expect(p.words.has('M0')).toBe(false);
@@ -198,7 +199,7 @@ describe('test programs, speed check and travel envelope', () => {
       }
       // The notes add exactly one line to the header, and nothing else.
       expect(withNotes.text.split('\n').length).toBe(plain.text.split('\n').length + 1);
-      expect(plain.headers['content-disposition']).toMatch(/^attachment; filename="[a-z0-9-]+\.nc"$/);
+      expect(disposition(plain.headers['content-disposition'])).toEqual({ type: 'attachment', filename: expect.stringMatching(/^[a-z0-9-]+\.nc$/) });
     });
   });
 

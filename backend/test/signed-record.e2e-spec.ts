@@ -9,6 +9,7 @@ import { signingKeyPath } from '../src/approvals/signing/signing-key.service.js'
 import { canonicalJson } from '../src/approvals/canonical-json.js';
 import { decimalTimes } from '../src/approvals/signing/decimal-times.js';
 import { MailService } from '../src/mail/mail.service.js';
+import { disposition } from './support/disposition.js';
 
 const pdfText = (pdf: Buffer) => execFileSync('pdftotext', ['-layout', '-', '-'], { input: pdf }).toString('utf8');
 const binary = (res: unknown, cb: (err: Error | null, body: Buffer) => void) => {
@@ -133,7 +134,7 @@ describe('the signed record', () => {
       const pem = (await anonymous(app).get('/api/public/signing-key')).text;
       const res = await anonymous(app).get(`/api/public/verify/${token}/record.json`);
       expect(res.status).toBe(200);
-      expect(res.headers['content-disposition']).toMatch(/attachment; filename="railwright-signed-record-.*\.json"/);
+      expect(disposition(res.headers['content-disposition'])).toEqual({ type: 'attachment', filename: expect.stringMatching(/^railwright-signed-record-.*\.json$/) });
       const record = res.body as { algorithm: string; keyId: string; publicKey: string; content: string; signature: string };
       expect(record.algorithm).toBe('Ed25519');
       expect(verify(null, Buffer.from(record.content, 'utf8'), createPublicKey(pem), Buffer.from(record.signature, 'base64'))).toBe(true);

@@ -9,6 +9,7 @@ import { ApproveDto } from './dto/approve.dto.js';
 import { CertificateQueryDto } from './dto/certificate-query.dto.js';
 import { WaiverDto } from './dto/waiver.dto.js';
 import { ReopenDto } from './dto/reopen.dto.js';
+import { create as contentDisposition } from 'content-disposition';
 
 @Controller('machines/:id')
 export class ApprovalsController {
@@ -66,7 +67,7 @@ export class ApprovalsController {
   async certificate(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string, @Query() query: CertificateQueryDto, @Res({ passthrough: true }) reply: FastifyReply) {
     const { pdf, filename } = await this.certificates.forMachine(user, id, query.approval);
     reply.header('Content-Type', 'application/pdf');
-    reply.header('Content-Disposition', `attachment; filename="${filename}"`);
+    reply.header('Content-Disposition', contentDisposition(filename));
     reply.header('Cache-Control', 'private, no-store');
     return pdf;
   }

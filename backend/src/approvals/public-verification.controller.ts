@@ -2,6 +2,7 @@ import { Controller, Get, Header, Param, Res } from '@nestjs/common';
 import type { FastifyReply } from 'fastify';
 import { Public } from '../auth/decorators.js';
 import { PublicVerificationService } from './signing/public-verification.service.js';
+import { create as contentDisposition } from 'content-disposition';
 
 /** Open to anyone: the address on a certificate, its signed record and the key that checks it. */
 @Controller('public')
@@ -26,7 +27,7 @@ export class PublicVerificationController {
   async record(@Param('token') token: string, @Res({ passthrough: true }) reply: FastifyReply) {
     const { record, filename } = await this.verification.record(token);
     reply.header('Cache-Control', 'no-store');
-    reply.header('Content-Disposition', `attachment; filename="${filename}"`);
+    reply.header('Content-Disposition', contentDisposition(filename));
     return record;
   }
 }

@@ -11,6 +11,7 @@ import { ApplyTravelTrialDto, CreateTravelTrialDto } from './dto/travel-trial.dt
 import { PositioningRunsService } from './positioning-runs.service.js';
 import { TestProgramService } from './test-program.service.js';
 import { TravelTrialsService } from './travel-trials.service.js';
+import { create as contentDisposition } from 'content-disposition';
 
 /** Travel trials, repeat-and-reverse runs and test programs of one axis. */
 @Controller('axes/:id')
@@ -90,7 +91,7 @@ export class AxisChecksController {
   async testProgram(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) axisId: string, @Query() q: TestProgramQuery, @Res({ passthrough: true }) reply: FastifyReply) {
     const { filename, text } = await this.programs.program(user, axisId, q);
     reply.header('Content-Type', 'text/plain; charset=utf-8');
-    reply.header('Content-Disposition', `attachment; filename="${filename}"`);
+    reply.header('Content-Disposition', contentDisposition(filename));
     return text;
   }
 }

@@ -1,4 +1,4 @@
-import contentDispositionLib from 'content-disposition';
+import { parse } from 'content-disposition';
 import { contentDisposition, sanitizeFileName, withExtension } from './file-name.js';
 
 describe('sanitizeFileName', () => {
@@ -40,10 +40,11 @@ describe('withExtension', () => {
 });
 
 describe('contentDisposition', () => {
-  // Checked against an independent parser: the content-disposition npm package (RFC 6266 / 5987).
+  // Written and read back by the content-disposition package (RFC 6266 / 8187); the header stays
+  // plain ASCII, with the exact name in filename* for names that are not.
   it.each(['plain.png', 'Rail Y1 — left.jpg', 'quote"back\\slash.pdf', 'Ölwanne (alt).csv', "it's 100%.png"])('%j reads back exactly', (name) => {
     const header = contentDisposition('attachment', name);
-    const parsed = contentDispositionLib.parse(header);
+    const parsed = parse(header);
     expect(parsed.type).toBe('attachment');
     expect(parsed.parameters.filename).toBe(name);
     expect(header).toMatch(/^[\x20-\x7e]+$/);

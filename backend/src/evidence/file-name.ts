@@ -1,3 +1,4 @@
+import { create } from 'content-disposition';
 const MAX_NAME_CHARS = 120;
 
 // C0/C1 control characters and the bidirectional overrides that can disguise an extension.
@@ -29,9 +30,7 @@ export function withExtension(name: string, extensions: readonly string[]): stri
   return sanitizeFileName(name + extensions[0]);
 }
 
-/** content-disposition with an ASCII fallback and the exact name for browsers that read RFC 5987. */
+/** content-disposition with an ASCII fallback and the exact name for browsers that read RFC 5987/8187. */
 export function contentDisposition(type: 'inline' | 'attachment', name: string): string {
-  const ascii = name.replace(/[^\x20-\x7e]/g, '_').replace(/["\\]/g, '_');
-  const encoded = encodeURIComponent(name).replace(/['()*]/g, (c) => '%' + c.charCodeAt(0).toString(16).toUpperCase());
-  return `${type}; filename="${ascii}"; filename*=UTF-8''${encoded}`;
+  return create(name, { type });
 }

@@ -6,6 +6,7 @@ import { HolePatternDto } from './dto/hole-pattern.dto.js';
 import { TemplateQueryDto } from './dto/template-query.dto.js';
 import { HolePatternsService } from './hole-patterns.service.js';
 import { TemplatesService, type TemplateFile } from './templates.service.js';
+import { create as contentDisposition } from 'content-disposition';
 
 @Controller()
 export class HolePatternsController {
@@ -74,6 +75,6 @@ export class HolePatternsController {
 /** Inline, so the link opens the browser's viewer to print from; the name is kept for saving. */
 function send(reply: FastifyReply, file: TemplateFile) {
   reply.header('Content-Type', file.contentType);
-  reply.header('Content-Disposition', `inline; filename="${file.filename}"`);
+  reply.header('Content-Disposition', contentDisposition(file.filename, { type: 'inline' }));
   return file.body;
 }

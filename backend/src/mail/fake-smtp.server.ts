@@ -38,8 +38,14 @@ export class FakeSmtpServer {
         stream.on('end', () => {
           const raw = Buffer.concat(chunks);
           const envelopeTo = session.envelope.rcptTo.map((r) => r.address);
-          this.capture({ id: randomUUID(), receivedAt: new Date(), envelopeTo, raw, ...parseMail(raw) });
-          callback();
+          // Taken as received only once read, so a sender that waits for the answer finds it in the outbox.
+          parseMail(raw).then(
+            (parsed) => {
+              this.capture({ id: randomUUID(), receivedAt: new Date(), envelopeTo, raw, ...parsed });
+              callback();
+            },
+            (err: Error) => callback(err),
+          );
         });
       },
     });

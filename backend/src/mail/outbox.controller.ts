@@ -4,6 +4,7 @@ import { CurrentUser, Roles } from '../auth/decorators.js';
 import type { SessionUser } from '../auth/session-user.js';
 import { MailService, WORKSHOP_HEADER } from './mail.service.js';
 import { toOutboxMessage } from './outbox.mapper.js';
+import { create as contentDisposition } from 'content-disposition';
 
 /** The development outbox: what the fake SMTP server caught for this workshop. Admins only. */
 @Controller('dev/outbox')
@@ -27,7 +28,7 @@ export class OutboxController {
     const file = this.mine(user).find((m) => m.id === id)?.attachments[index];
     if (!file) throw new NotFoundException('No such attachment in the outbox');
     reply.header('Content-Type', file.contentType);
-    reply.header('Content-Disposition', `attachment; filename="${file.filename.replace(/[^\w.-]+/g, '_')}"`);
+    reply.header('Content-Disposition', contentDisposition(file.filename));
     return file.content;
   }
 

@@ -4,8 +4,9 @@ import { ApiError } from '../../../lib/api-client';
 export type TestProgramParams = Record<string, string | number | undefined>;
 
 function filenameOf(res: Response): string {
-  const m = /filename="([^"]+)"/.exec(res.headers.get('content-disposition') ?? '');
-  return m ? m[1] : 'test-program.nc';
+  // The name is quoted only when it needs to be (RFC 6266): filename="a b.nc" or filename=a-b.nc.
+  const m = /filename=(?:"([^"]+)"|([^;\s]+))/.exec(res.headers.get('content-disposition') ?? '');
+  return m ? (m[1] ?? m[2]) : 'test-program.nc';
 }
 
 /** Fetches the G-code as text and hands it to the browser as a file download. */
