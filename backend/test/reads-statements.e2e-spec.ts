@@ -16,7 +16,9 @@ const sweep = (readings: number[], extra: Record<string, unknown> = {}) => ({
 
 /**
  * Reads that do not grow with history: the machines list and the readiness board issue the same
- * number of SQL statements whether a rail has no old sweeps, 100 or 1 000.
+ * number of SQL statements whether a rail has no old sweeps, 100 or 1 000, and read no sweep's
+ * readings but the newest per datum and face. The list was 4 statements and the board 22; now
+ * 2 (the session with its person, the summaries) and 18.
  */
 describe('reads: statements per request do not grow with the number of sweeps', () => {
   let app: NestFastifyApplication;
@@ -97,15 +99,25 @@ describe('reads: statements per request do not grow with the number of sweeps', 
       firstBoard ??= board.body.checks;
       expect(mine).toEqual(firstList);
       expect(board.body.checks).toEqual(firstBoard);
-      // No statement reads a sweep's readings for these two reads except the per-datum comparison.
+      // The list reads the summaries only: no record table, no re-check query when nothing is due.
       expect(list.statements.some((s) => /rail_sweeps/.test(s))).toBe(false);
+      expect(list.statements.filter((s) => /from "session"/.test(s))).toHaveLength(1);
+      expect(list.statements.filter((s) => /machine_readiness/.test(s))).toHaveLength(1);
+      expect(list.statements.some((s) => /"checks"/.test(s))).toBe(false);
+      // The board reads a sweep's readings only for the newest sweep per rail, datum and face.
+      const readingArrays = board.statements.filter((s) => /readings_mm|readings_raw|positions_mm\b(?!\))/.test(s));
+      expect(readingArrays.every((s) => /lower\(x\.datum\) = k\.dkey/.test(s))).toBe(true);
+      // The machine, its target set and its waivers come in one statement.
+      const context = board.statements.filter((s) => /"target_sets"|"waivers"/.test(s));
+      expect(context).toHaveLength(1);
+      expect(context[0]).toMatch(/from "machines" m[\s\S]*"target_sets"[\s\S]*"waivers"|"waivers"[\s\S]*from "machines" m[\s\S]*"target_sets"/);
     }
     // Measured on this code: printed so a change in the numbers is seen in the test output.
     console.log(`SQL statements per request by old sweeps per rail: ${JSON.stringify(seen)}`);
     expect(seen[100]).toEqual(seen[0]);
     expect(seen[1000]).toEqual(seen[0]);
     // The list reads the summaries, not the records: a handful of statements, not one per check.
-    expect(seen[0].list).toBeLessThanOrEqual(6);
-    expect(seen[0].board).toBeLessThanOrEqual(25);
+    expect(seen[0].list).toBe(2);
+    expect(seen[0].board).toBeLessThanOrEqual(18);
   });
 });

@@ -1,14 +1,20 @@
 import type { NestFastifyApplication } from '@nestjs/platform-fastify';
 import pg from 'pg';
 import { randomUUID } from 'node:crypto';
-import { createTestApp, createTestWorkshop, type TestWorkshop } from './helpers/test-app.js';
+import { createTestApp, createTestWorkshop, signIn, TEST_PASSWORD, type TestWorkshop } from './helpers/test-app.js';
+import { PG_POOL } from '../src/database/database.tokens.js';
 
 /**
  * How many SQL statements one sweep write and one hole write send to PostgreSQL, counted at the
- * pg client (session store, transaction control and the command's own statements alike). Before
- * this was tightened a sweep write took 12 and a hole write 24; the bounds are the counts now, so
- * a change that adds a round trip to the hot write paths fails here.
+ * pg client (session store, transaction control and the command's own statements alike). A sweep
+ * write took 21 (12 of its own and 13 recounting the machine's readiness from every contributor)
+ * and a hole write 10; now 10 and 8: the session and its person are read together, the
+ * transaction opens with its actor, and a recorded check asks only its own contributor again.
+ * The bounds are the counts now, so a change that adds a round trip to the hot paths fails here.
  */
+
+// Tables only other contributors read: a sweep's recount must not touch them.
+const OTHER_CONTRIBUTORS = /"?(axes|travel_trials|positioning_runs|backlash_checks|diagonal_checks|bed_grids|test_cuts|safety_walks|safety_items|safety_answers)"?\b/;
 
 const RAIL = { label: 'X1', axis: 'X', length: 300, profileSize: 20, holePitch: 60, firstHole: 30 };
 
@@ -54,7 +60,7 @@ describe('statements per write', () => {
     if (process.env.SHOW_STATEMENTS) console.log(`${what}: ${list.length}\n${list.map((s) => `  ${s.replace(/\s+/g, ' ').slice(0, 160)}`).join('\n')}`);
   };
 
-  it('a sweep write: session read, transaction, record with its audit, nothing read back', async () => {
+  it('a sweep write: session read, transaction, record with its audit, nothing read back, its own contributor recounted', async () => {
     // Warm up once so one-off lookups (e.g. default target sets) are not counted.
     await ws.as.builder.post(`/api/rails/${railId}/sweeps`).send({ readingUnit: 'mm', phase: 'as-found', stations: [0, 1, 2, 3].map((i) => ({ position: i * 100, reading: i * 0.01 })) });
     startCounting();
@@ -64,17 +70,28 @@ describe('statements per write', () => {
     const list = stopCounting();
     report('sweep write', list);
     expect(res.status).toBe(201);
-    // Readiness listeners run between the audit and the commit; they are counted by their own spec.
+    // Readiness listeners run between the audit and the commit.
     const audit = list.findIndex((s) => /audit_entries/.test(s));
     const commit = list.lastIndexOf('commit');
     const own = list.filter((_, i) => i <= audit || i >= commit);
+    const listeners = list.slice(audit + 1, commit);
     report('sweep write without check-recorded listeners', own);
     expect(list.filter((s) => /audit_entries/.test(s))).toHaveLength(1);
     expect(list.filter((s) => /^update "machines"/i.test(s.trim()))).toEqual([]);
     expect(res.body.result.leastSquares.straightness).toBeGreaterThan(0);
     // The answer comes from what was inserted: no statement reads the new sweep back.
     expect(list.filter((s) => /^select/i.test(s.trim()) && /from "rail_sweeps"/i.test(s))).toEqual([]);
-    expect(own.length).toBeLessThanOrEqual(8);
+    // The session and the person behind it in one statement; the transaction opens with its actor.
+    expect(list.filter((s) => /"session"/.test(s))).toHaveLength(1);
+    expect(list.filter((s) => /from "users"/i.test(s))).toEqual([]);
+    expect(list.filter((s) => /set_config/.test(s))).toEqual([expect.stringMatching(/^begin; select set_config/)]);
+    expect(own.length).toBeLessThanOrEqual(6);
+    // Only the rails' contributor is asked again: the machine's context, its rails, their newest
+    // sweeps, and the summary written; nothing of the axes, frame or safety walk.
+    expect(listeners.filter((s) => OTHER_CONTRIBUTORS.test(s))).toEqual([]);
+    expect(listeners.filter((s) => /machine_readiness/.test(s) && /^insert/i.test(s.trim()))).toHaveLength(1);
+    expect(listeners.length).toBeLessThanOrEqual(4);
+    expect(list.length).toBeLessThanOrEqual(10);
   });
 
   it('a hole write: the machine locked once, the hole, its audit, the answer from one read of the holes', async () => {
@@ -90,7 +107,8 @@ describe('statements per write', () => {
     expect(list.filter((s) => /^select/i.test(s.trim()) && /from "bolt_downs"/i.test(s))).toHaveLength(1);
     expect(list.filter((s) => /from "machines"/i.test(s))).toHaveLength(1);
     expect(list.filter((s) => /savepoint/i.test(s))).toEqual([]);
-    expect(list.length).toBeLessThanOrEqual(10);
+    expect(list.filter((s) => /set_config/.test(s))).toEqual([expect.stringMatching(/^begin; select set_config/)]);
+    expect(list.length).toBeLessThanOrEqual(8);
   });
 
   it('an authenticated read writes no session row while the session is fresh', async () => {
@@ -101,5 +119,28 @@ describe('statements per write', () => {
     report('GET /api/auth/me', list);
     expect(res.status).toBe(200);
     expect(list.filter((s) => /insert into "session"|update "session"/i.test(s))).toEqual([]);
+    // One statement reads the session and the person it names.
+    expect(list).toHaveLength(1);
+    expect(res.body.user).toMatchObject({ email: ws.emails.viewer, role: 'viewer' });
+  });
+
+  it('what the session store reads beside a session (its person) is never stored with it, also when the session is refreshed', async () => {
+    const pool = app.get<pg.Pool>(PG_POOL);
+    const agent = await signIn(app, ws.emails.technician, TEST_PASSWORD);
+    expect((await agent.get('/api/auth/me')).status).toBe(200);
+    // Last refreshed two days ago: the next request pushes its expiry on and stores it again.
+    const twoDaysAgo = Date.now() - 2 * 24 * 3600_000;
+    await pool.query(`update "session" set sess = jsonb_set(sess::jsonb, '{refreshedAt}', to_jsonb($2::bigint))::json where sess->>'userId' = $1`, [ws.userIds.technician, twoDaysAgo]);
+    startCounting();
+    expect((await agent.get('/api/auth/me')).status).toBe(200);
+    const list = stopCounting();
+    expect(list.filter((s) => /insert into "session"|update "session"/i.test(s))).toHaveLength(1);
+    const { rows } = await pool.query<{ sess: Record<string, unknown> }>(`select sess from "session" where sess->>'userId' = $1`, [ws.userIds.technician]);
+    expect(rows.length).toBeGreaterThanOrEqual(2);
+    expect(rows.some((r) => Number(r.sess.refreshedAt) > twoDaysAgo)).toBe(true);
+    for (const row of rows) {
+      expect(row.sess.userId).toBe(ws.userIds.technician);
+      expect(row.sess).not.toHaveProperty('loadedUser');
+    }
   });
 });

@@ -44,7 +44,7 @@ export class ApprovalsService implements OnModuleInit {
   }
 
   async readiness(actor: SessionUser, machineId: string) {
-    await this.machines.getRef(actor, machineId);
+    // Another workshop's machine is a 404 from the board's first statement.
     await this.recheck.sweepWorkshop(actor.workshopId);
     const b = await this.board.board(actor, machineId);
     const [approval, request] = await Promise.all([this.repo.latestApproval(actor.workshopId, machineId), this.repo.openRequest(actor.workshopId, machineId)]);
