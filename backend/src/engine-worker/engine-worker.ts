@@ -1,4 +1,6 @@
 import sjson from 'secure-json-parse';
+import { isMainThread } from 'node:worker_threads';
+import { lowerThreadPriority } from './thread-priority.js';
 import { brotliCompressSync, constants as zlib, gzipSync } from 'node:zlib';
 import { EngineInputError } from '../engine/engine-input-error.js';
 import { runEngineTask, type EngineTask } from './engine-tasks.js';
@@ -34,6 +36,10 @@ function compress(bytes: Buffer, encoding: StringifyJsonTask['encoding']): Uint8
  * Errors the client caused cross the thread boundary as plain data, so the request still answers
  * 400 with the engine's (or the parser's) message.
  */
+// Only in the pool's thread (tests load this module on their own main thread too): bulk work
+// here yields the CPU to the event loop (thread-priority.ts).
+if (!isMainThread) lowerThreadPriority();
+
 export default function run(task: WorkerTask): WorkerAnswer {
   try {
     if (task.kind === 'parse-json') {
