@@ -102,4 +102,31 @@ test.describe('sweep entry grid and sweep details', () => {
     expect(edits).toHaveLength(1);
     expect(edits[0].changes).toEqual({ before: { datum: null, notes: '' }, after: { datum: 'Granite bar across Y1 and Y2', notes: 'Datum named after the sweep' } });
   });
+
+  test('a deleted sweep can be brought back with Undo; otherwise the delete is sent a few seconds later', async ({ page }) => {
+    await signInAs(page, DEMO.builder);
+    await newMachineWithRail(page, `Delete table ${Date.now()}`, RAIL);
+    await typeReadings(page, ['0', '1', '2', '1', '0.5', '0']);
+    await page.getByRole('button', { name: 'Save sweep' }).click();
+    await expect(page.getByRole('region', { name: 'Sweep saved' })).toBeVisible();
+    const railId = page.url().split('/rails/')[1].split(/[/?#]/)[0];
+    const count = async () => ((await (await page.request.get(`/api/rails/${railId}/sweeps`)).json()) as unknown[]).length;
+    const history = page.getByRole('region', { name: 'Sweep history' });
+    const rows = history.getByRole('table', { name: 'Sweeps' }).locator('tbody tr');
+    await expect(rows).toHaveCount(1);
+
+    await history.getByRole('button', { name: /Delete the sweep of/ }).click();
+    await expect(rows).toHaveCount(0);
+    await expect(page.getByText(/Deleted the sweep of/)).toBeVisible();
+    await page.getByRole('button', { name: /Undo deleting the sweep of/ }).click();
+    await expect(rows).toHaveCount(1);
+    await page.waitForTimeout(9000);
+    expect(await count()).toBe(1);
+
+    await history.getByRole('button', { name: /Delete the sweep of/ }).click();
+    await expect(rows).toHaveCount(0);
+    expect(await count()).toBe(1);
+    await expect.poll(count, { timeout: 20_000 }).toBe(0);
+    await expect(page.getByText(/Deleted the sweep of/)).toHaveCount(0);
+  });
 });

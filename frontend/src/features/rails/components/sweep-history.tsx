@@ -1,5 +1,5 @@
-import { useState } from 'react';
-import { Alert, Box, Button, Checkbox, IconButton, Paper, Stack, Table, TableBody, TableCell, TableHead, TableRow, Tooltip, Typography } from '@mui/material';
+import { useEffect, useRef, useState } from 'react';
+import { Alert, Box, Button, Checkbox, IconButton, Paper, Snackbar, Stack, Table, TableBody, TableCell, TableHead, TableRow, Tooltip, Typography } from '@mui/material';
 import DeleteOutline from '@mui/icons-material/DeleteOutlined';
 import LockOutlined from '@mui/icons-material/LockOutlined';
 import EditOutlined from '@mui/icons-material/EditOutlined';
@@ -20,6 +20,9 @@ import { ResponsiveTable } from '../../../components/table/responsive-table';
 const targetZone = (t: { value: number; unit: string } | undefined, unit: Parameters<typeof fromMm>[1]) =>
   t && isLengthUnit(t.unit) ? { width: fromMm(targetMm(t), unit), label: `Target zone ${showTarget(t)} wide` } : null;
 
+/** How long a deleted sweep can be brought back before the delete is sent. */
+const UNDO_MS = 8000;
+
 const when = (s: { takenAt: string }) => new Date(s.takenAt).toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' });
 
 /**
@@ -33,8 +36,40 @@ export function SweepHistory({ sweeps, canRecord }: { sweeps: SweepListItem[]; c
   const [open, setOpen] = useState<string | null>(null);
   const [editing, setEditing] = useState<SweepListItem | null>(null);
   const remove = useDeleteSweep();
+  // A delete waits a few seconds (the row hidden) so it can be undone; then it is sent.
+  const [deleting, setDeleting] = useState<SweepListItem | null>(null);
+  const timer = useRef<number | undefined>(undefined);
+  const waitingDelete = useRef<SweepListItem | null>(null);
+  const sendDelete = (s: SweepListItem) => {
+    window.clearTimeout(timer.current);
+    waitingDelete.current = null;
+    remove.mutate(s.id);
+  };
+  const askDelete = (s: SweepListItem) => {
+    // One at a time: a delete already waiting goes ahead now.
+    if (waitingDelete.current) sendDelete(waitingDelete.current);
+    waitingDelete.current = s;
+    setDeleting(s);
+    timer.current = window.setTimeout(() => {
+      sendDelete(s);
+      setDeleting(null);
+    }, UNDO_MS);
+  };
+  const undoDelete = () => {
+    window.clearTimeout(timer.current);
+    waitingDelete.current = null;
+    setDeleting(null);
+  };
+  // Leaving the page does not cancel a delete the person asked for.
+  useEffect(
+    () => () => {
+      if (waitingDelete.current) sendDelete(waitingDelete.current);
+    },
+    [],
+  );
   const more = useSweeps(sweeps[0]?.railId ?? '');
   const full = useSweepsById([...picked, ...(open && !picked.includes(open) ? [open] : [])]);
+  const shown = sweeps.filter((s) => s.id !== deleting?.id);
   if (!sweeps.length) return null;
   // A sweep whose readings or result cannot be read has nothing to draw.
   const chosen = full.filter((s) => picked.includes(s.id)).flatMap((s) => (s.result && s.stations ? [{ ...s, result: s.result, stations: s.stations }] : []));
@@ -63,7 +98,7 @@ export function SweepHistory({ sweeps, canRecord }: { sweeps: SweepListItem[]; c
               </TableRow>
             </TableHead>
             <TableBody>
-              {sweeps.map((s) => (
+              {shown.map((s) => (
                 <TableRow key={s.id} hover selected={open === s.id}>
                   <TableCell padding="checkbox">
                     <Checkbox checked={picked.includes(s.id)} onChange={() => toggle(s.id)} slotProps={{ input: { 'aria-label': `Overlay the sweep of ${when(s)}` } }} />
@@ -104,7 +139,7 @@ export function SweepHistory({ sweeps, canRecord }: { sweeps: SweepListItem[]; c
                       </Tooltip>
                     ) : (
                       canRecord && (
-                        <IconButton size="small" aria-label={`Delete the sweep of ${when(s)}`} onClick={() => window.confirm('Delete this sweep? Its readings are removed from the rail.') && remove.mutate(s.id)}>
+                        <IconButton size="small" aria-label={`Delete the sweep of ${when(s)}`} onClick={() => askDelete(s)}>
                           <DeleteOutline fontSize="small" />
                         </IconButton>
                       )
@@ -142,6 +177,15 @@ export function SweepHistory({ sweeps, canRecord }: { sweeps: SweepListItem[]; c
       </Paper>
       {editing && <EditSweepDetailsDialog sweepId={editing.id} title={`sweep of ${when(editing)}`} onClose={() => setEditing(null)} />}
       {opened && <SweepResult sweep={opened} title={`Sweep of ${when(opened)}`} />}
+      <Snackbar
+        open={!!deleting}
+        message={deleting ? `Deleted the sweep of ${when(deleting)}` : ''}
+        action={
+          <Button color="inherit" size="small" onClick={undoDelete} aria-label={deleting ? `Undo deleting the sweep of ${when(deleting)}` : 'Undo'}>
+            Undo
+          </Button>
+        }
+      />
     </Stack>
   );
 }
