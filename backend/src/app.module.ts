@@ -19,6 +19,7 @@ import { MailModule } from './mail/mail.module.js';
 import { ApprovalsModule } from './approvals/approvals.module.js';
 import { HistoryModule } from './history/history.module.js';
 import { HolePatternsModule } from './hole-patterns/hole-patterns.module.js';
+import { ExportsModule } from './exports/exports.module.js';
 
 // One line per domain module.
 @Module({
@@ -41,6 +42,7 @@ import { HolePatternsModule } from './hole-patterns/hole-patterns.module.js';
     ApprovalsModule,
     HistoryModule,
     HolePatternsModule,
+    ExportsModule,
   ],
   providers: [{ provide: APP_INTERCEPTOR, useClass: CommandTransactionInterceptor }],
 })

@@ -6,6 +6,7 @@ import EditOutlined from '@mui/icons-material/EditOutlined';
 import FileDownloadOutlined from '@mui/icons-material/FileDownloadOutlined';
 import { PageHeader } from '../../components/layout/page-header';
 import { PrintButton } from '../../components/print/print-button';
+import { CsvDownloads } from '../../components/export/csv-downloads';
 import { ErrorState } from '../../components/states/error-state';
 import { LoadingState } from '../../components/states/loading-state';
 import { paths } from '../../config/paths';
@@ -45,6 +46,12 @@ export default function AxisRoute() {
         actions={
           <>
             <PrintButton what={`axis ${a.name}`} />
+            <CsvDownloads
+              files={[
+                { label: `Travel trials of axis ${a.name}`, href: `/api/axes/${a.id}/travel-trials.csv` },
+                { label: `Repeat-and-reverse runs of axis ${a.name}`, href: `/api/axes/${a.id}/positioning-runs.csv` },
+              ]}
+            />
             <Button variant="outlined" startIcon={<FileDownloadOutlined />} onClick={() => setProgram(true)}>
               Download test program
             </Button>

@@ -5,6 +5,7 @@ import { useQueryClient } from '@tanstack/react-query';
 import { Box, Tab, Tabs, Typography } from '@mui/material';
 import { PageHeader } from '../../components/layout/page-header';
 import { PrintButton } from '../../components/print/print-button';
+import { CsvDownloads } from '../../components/export/csv-downloads';
 import { LoadingState } from '../../components/states/loading-state';
 import { ErrorState } from '../../components/states/error-state';
 import { useMachine } from '../../features/machines/api/get-machine';
@@ -71,6 +72,7 @@ export default function MachineFileRoute() {
           <>
             <MachineStateChip state={m.state} />
             <PrintButton what={`${section.label.toLowerCase()} of ${m.name}`} />
+            <CsvDownloads files={[{ label: `Bed grids of ${m.name}`, href: `/api/machines/${m.id}/bed-grids.csv` }]} />
           </>
         }
       />

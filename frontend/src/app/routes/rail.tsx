@@ -5,6 +5,7 @@ import HardwareOutlined from '@mui/icons-material/HardwareOutlined';
 import { paths } from '../../config/paths';
 import { PageHeader } from '../../components/layout/page-header';
 import { PrintButton } from '../../components/print/print-button';
+import { CsvDownloads } from '../../components/export/csv-downloads';
 import { LoadingState } from '../../components/states/loading-state';
 import { ErrorState } from '../../components/states/error-state';
 import { useMe } from '../../features/auth/api/get-me';
@@ -71,6 +72,7 @@ export default function RailRoute() {
           <>
             <CheckStatusChip status={latest ? latest.status : 'not-started'} size="medium" />
             <PrintButton what={`rail ${r.label}`} />
+            <CsvDownloads files={[{ label: `Sweeps of rail ${r.label}`, href: `/api/rails/${r.id}/sweeps.csv` }]} />
           </>
         }
       />
