@@ -1,4 +1,5 @@
-import { Chip, Paper, Table, TableBody, TableCell, TableContainer, TableHead, TableRow, Tooltip, Typography } from '@mui/material';
+import { Chip, Paper, Table, TableBody, TableCell, TableHead, TableRow, Tooltip, Typography } from '@mui/material';
+import { ResponsiveTable } from '../../../components/table/responsive-table';
 import { positionIn } from '../utils/position-text';
 import CloudUploadOutlined from '@mui/icons-material/CloudUploadOutlined';
 import CheckCircleOutlined from '@mui/icons-material/CheckCircleOutlined';
@@ -43,7 +44,8 @@ export function HolesTable({ bd, holes, nextHole, selected, onSelect }: Props) {
   const unit = UNIT_LABELS[bd.readingUnit];
   return (
     // Long rails scroll inside the table so the hole being fixed stays in reach above it.
-    <TableContainer component={Paper} sx={{ maxHeight: holes.length > 20 ? 620 : undefined }}>
+    // On a phone each hole is a card of label–value lines (its place in the order is the card's place).
+    <ResponsiveTable component={Paper} titleFirst={false} sx={{ maxHeight: holes.length > 20 ? 620 : undefined, '& tr > :first-of-type': { display: { xs: 'none', sm: 'table-cell' } } }}>
       <Table size="small" stickyHeader aria-label="Holes in fixing order">
         <TableHead>
           <TableRow>
@@ -81,6 +83,6 @@ export function HolesTable({ bd, holes, nextHole, selected, onSelect }: Props) {
           ))}
         </TableBody>
       </Table>
-    </TableContainer>
+    </ResponsiveTable>
   );
 }
