@@ -1,5 +1,5 @@
 import { useEffect, useRef, useState } from 'react';
-import { useMutation, useMutationState, useQueryClient, type MutateOptions } from '@tanstack/react-query';
+import { useMutation, useQueryClient, type MutateOptions } from '@tanstack/react-query';
 import { COMMAND_KEY, isOnline, newCommandKey, type CommandVariables } from './commands';
 import { sessionOwner, sessionOwnerName } from './session-owner';
 
@@ -66,11 +66,4 @@ export function useRecording<TData = unknown>() {
     return key;
   };
   return { record, error, clearError: () => setError(null), busy: command.isPending && !command.isPaused };
-}
-
-/** Entries of the signed-in person waiting to be sent to paths `matches` accepts, oldest first. */
-export function useWaitingEntries(matches: (v: CommandVariables) => boolean): CommandVariables[] {
-  const owner = sessionOwner();
-  const waiting = useMutationState({ filters: { mutationKey: COMMAND_KEY, status: 'pending' }, select: (m) => m.state.variables as CommandVariables });
-  return waiting.filter((v) => v && v.ownerId === owner && matches(v));
 }

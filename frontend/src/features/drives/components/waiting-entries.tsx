@@ -1,10 +1,10 @@
 import { Box, Chip, Paper, Typography } from '@mui/material';
 import ScheduleOutlined from '@mui/icons-material/ScheduleOutlined';
-import { useWaitingEntries } from '../../../lib/offline/use-command';
+import { useWaitingEntries } from '../../../lib/offline/use-waiting-entries';
 
 /** Entries typed here for `path` that wait on the device for the connection, shown where they will land. */
 export function WaitingEntries({ path }: { path: string }) {
-  const waiting = useWaitingEntries((v) => v.path === path);
+  const waiting = useWaitingEntries(path);
   if (!waiting.length) return null;
   return (
     <Paper variant="outlined" sx={{ p: 1.5, borderStyle: 'dashed' }} aria-label="Entries waiting to be sent">
