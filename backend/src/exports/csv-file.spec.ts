@@ -13,6 +13,10 @@ describe('csvFile', () => {
     ]);
   });
 
+  it('a file without rows is its header line alone', () => {
+    expect(csvFile(['Sweep', 'Reading (mm)'], [])).toBe('Sweep,Reading (mm)\r\n');
+  });
+
   it('keeps text a spreadsheet would run as a formula from running, but leaves negative numbers alone', () => {
     // Common practice (OWASP "CSV injection"): text starting with = + - @ gets a leading apostrophe.
     const text = csvFile(['Datum', 'Deviation (mm)'], [['=HYPERLINK("x")', -0.02], ['@SUM(A1)', -1], ['-straightedge', 0]]);

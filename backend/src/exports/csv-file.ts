@@ -13,7 +13,9 @@ export const UNIT_NAMES: Readonly<Record<LengthUnit, string>> = { mm: 'mm', um: 
  * (starting with =, +, -, @, tab or CR) is written with a leading apostrophe.
  */
 export function csvFile(header: string[], rows: Cell[][]): string {
-  return Papa.unparse({ fields: header, data: rows }, { newline: '\r\n', escapeFormulae: true, quotes: false }) + '\r\n';
+  const text = Papa.unparse({ fields: header, data: rows }, { newline: '\r\n', escapeFormulae: true, quotes: false });
+  // With no rows papaparse already ends the header's line; every line ends once.
+  return text.endsWith('\r\n') ? text : text + '\r\n';
 }
 
 /** A length given in `from` expressed in `to`, exactly (1 in = 25.4 mm), to ten significant digits. */
