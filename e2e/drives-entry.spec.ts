@@ -118,6 +118,13 @@ test.describe('entry grids of the drives', () => {
     await page.keyboard.press('Shift+Enter');
     await expect(page.getByLabel('Up 1, target 1', { exact: true })).toBeFocused();
     await expect(page.getByLabel('Up 1, target 2', { exact: true })).toHaveValue('4');
+    // An indicator's readings each end in Enter: with it on, Enter moves target after target.
+    await page.getByLabel('From an indicator').check();
+    await page.getByLabel('Down 1, target 1', { exact: true }).click();
+    await page.keyboard.type('-2');
+    await page.keyboard.press('Enter');
+    await expect(page.getByLabel('Down 1, target 2', { exact: true })).toBeFocused();
+    await page.getByLabel('From an indicator').uncheck();
 
     for (const [size, name] of [[TABLET, 'tablet'], [PHONE, 'phone']] as const) {
       await page.setViewportSize(size);

@@ -79,9 +79,16 @@ export function PositioningGrid({ axis, onRecorded }: { axis: Axis; onRecorded: 
 
   const focusCell = (r: number, c: number) => setTimeout(() => document.querySelector<HTMLInputElement>(`[data-cell="${r}-${c}"]`)?.focus());
   // Enter: the next row's first cell (from the targets row, the first run's); Shift+Enter the row before.
-  const onKeyDown = (r: number) => (e: React.KeyboardEvent) => {
+  // With "From an indicator" on, every reading ends in an Enter: it moves along the row, as the
+  // readings are taken (target after target), and on to the next row after the last target.
+  const onKeyDown = (r: number, c: number) => (e: React.KeyboardEvent) => {
     if (e.key !== 'Enter') return;
     e.preventDefault();
+    if (indicator.capture && r >= 0 && !e.shiftKey) {
+      if (c + 1 < cols) focusCell(r, c + 1);
+      else if (r + 1 < rows) focusCell(r + 1, 0);
+      return;
+    }
     const next = e.shiftKey ? r - 1 : r + 1;
     if (next >= -1 && next < rows) focusCell(next, 0);
   };
@@ -221,7 +228,7 @@ export function PositioningGrid({ axis, onRecorded }: { axis: Axis; onRecorded: 
                       value={t}
                       onChange={(e) => setTargets((x) => x.map((v, i) => (i === c ? e.target.value.replace(',', '.') : v)))}
                       onPaste={onPaste(-1, c)}
-                      onKeyDown={onKeyDown(-1)}
+                      onKeyDown={onKeyDown(-1, c)}
                       error={t.trim() !== '' && numberOf(t) === undefined}
                       sx={{ ...cellSx, '& input': { ...cellSx['& input'], fontWeight: 600 } }}
                       slotProps={{ htmlInput: { inputMode: 'decimal', 'data-cell': `-1-${c}`, 'aria-label': `Target ${c + 1} (${UNIT_LABELS[lengthUnit]})` } }}
@@ -244,7 +251,7 @@ export function PositioningGrid({ axis, onRecorded }: { axis: Axis; onRecorded: 
                           value={v}
                           onChange={(e) => setCell(r, c, e.target.value.replace(',', '.'))}
                           onPaste={onPaste(r, c)}
-                          onKeyDown={onKeyDown(r)}
+                          onKeyDown={onKeyDown(r, c)}
                           error={v.trim() !== '' && numberOf(v) === undefined}
                           sx={cellSx}
                           slotProps={{ htmlInput: { inputMode: 'decimal', 'data-cell': `${r}-${c}`, 'data-indicator-cell': `${r}-${c}`, 'aria-label': `${direction === 'up' ? 'Up' : 'Down'} ${run}, target ${c + 1}` } }}
@@ -258,7 +265,7 @@ export function PositioningGrid({ axis, onRecorded }: { axis: Axis; onRecorded: 
           </Box>
         </Box>
         <Typography variant="body2" color="text.secondary">
-          Tab goes along a row and Enter to the next row's first cell. Paste a block copied from a spreadsheet into the first cell; a CSV may start with a row of targets and each row with up or down.
+          Tab goes along a row and Enter to the next row's first cell (with “From an indicator” on, each reading moves on to the next target). Paste a block copied from a spreadsheet into the first cell; a CSV may start with a row of targets and each row with up or down.
         </Typography>
         <TextField label="Notes (instrument, temperature)" value={notes} onChange={(e) => setNotes(e.target.value)} />
         <Box sx={{ display: 'flex', gap: 2, alignItems: 'center', flexWrap: 'wrap' }}>
