@@ -38,7 +38,7 @@ import { CommandKeysRepository } from './command-keys.repository.js';
     CommandKeysRepository,
     CommandKeys,
   ],
-  exports: [PG_POOL, DRIZZLE, TransactionContext, CommandKeys],
+  exports: [PG_POOL, DRIZZLE, ROOT_DRIZZLE, TransactionContext, CommandKeys],
 })
 export class DatabaseModule implements OnApplicationShutdown {
   constructor(@Inject(PG_POOL) private readonly pool: pg.Pool) {}

@@ -43,7 +43,7 @@ interface Row {
 
 type Callback = (err: unknown, value?: unknown) => void;
 interface PgStoreBase {
-  query(sql: string, params: unknown[], fn: (err: unknown, row?: Row) => void): void;
+  query(sql: string | { name: string; text: string }, params: unknown[], fn: (err: unknown, row?: Row) => void): void;
   set(sid: string, sess: Record<string, unknown>, fn?: Callback): void;
   destroy(sid: string, fn?: Callback): void;
 }
@@ -65,7 +65,8 @@ export function createSessionStore(pool: pg.Pool): unknown {
   const PgStore = connectPgSimple(expressSession as never) as unknown as new (options: object) => PgStoreBase;
   class SessionWithUserStore extends PgStore {
     get(sid: string, fn: Callback): void {
-      this.query(SESSION_WITH_USER, [sid, Math.floor(Date.now() / 1000)], (err, row) => {
+      // Named: each connection parses and plans it once, not on every request.
+      this.query({ name: 'session_with_user', text: SESSION_WITH_USER }, [sid, Math.floor(Date.now() / 1000)], (err, row) => {
         if (err) return fn(err);
         if (!row) return fn(null);
         let sess: Record<string, unknown>;

@@ -1,19 +1,34 @@
 import { Inject, Injectable } from '@nestjs/common';
 import { and, desc, eq, sql } from 'drizzle-orm';
-import { DRIZZLE, type Database } from '../database/database.tokens.js';
+import { DRIZZLE, ROOT_DRIZZLE, type Database } from '../database/database.tokens.js';
+import { TransactionContext } from '../database/transaction-context.js';
 import { approvals, machineReadiness, machines, targetSets } from '../database/schema/index.js';
 import type { MachineRow } from './machine.mapper.js';
 
 @Injectable()
 export class MachinesRepository {
-  constructor(@Inject(DRIZZLE) private readonly db: Database) {}
+  constructor(
+    @Inject(DRIZZLE) private readonly db: Database,
+    @Inject(ROOT_DRIZZLE) private readonly root: Database,
+    private readonly transactions: TransactionContext,
+  ) {}
 
   /**
    * The workshop's machines with their readiness summaries (counts only): one statement, whatever
    * their history. `recheckDue` tells whether an approval's re-check date has passed unhandled.
+   * Outside a command it is a named prepared statement: the most read page is not rebuilt and
+   * re-planned on every request.
    */
   list(workshopId: string) {
-    return this.db
+    if (this.transactions.inTransaction()) return this.listQuery(this.db, eq(machines.workshopId, workshopId));
+    this.preparedList ??= this.listQuery(this.root, eq(machines.workshopId, sql.placeholder('workshopId'))).prepare('machines_list');
+    return this.preparedList.execute({ workshopId });
+  }
+
+  private preparedList: ReturnType<ReturnType<MachinesRepository['listQuery']>['prepare']> | null = null;
+
+  private listQuery(db: Database, workshop: ReturnType<typeof eq>) {
+    return db
       .select({
         machine: machines,
         targetSetName: targetSets.name,
@@ -32,7 +47,7 @@ export class MachinesRepository {
       .from(machines)
       .innerJoin(targetSets, eq(targetSets.id, machines.targetSetId))
       .leftJoin(machineReadiness, eq(machineReadiness.machineId, machines.id))
-      .where(eq(machines.workshopId, workshopId))
+      .where(workshop)
       .orderBy(desc(machines.lastActivityAt));
   }
 
