@@ -72,7 +72,7 @@ export default function MachineFileRoute() {
           <>
             <MachineStateChip state={m.state} />
             <PrintButton what={`${section.label.toLowerCase()} of ${m.name}`} />
-            <CsvDownloads files={[{ label: `Bed grids of ${m.name}`, href: `/api/machines/${m.id}/bed-grids.csv` }]} />
+            <CsvDownloads text="Bed grids CSV" files={[{ label: `Bed grids of ${m.name}`, href: `/api/machines/${m.id}/bed-grids.csv` }]} />
           </>
         }
       />
