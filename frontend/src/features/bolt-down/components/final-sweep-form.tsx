@@ -103,6 +103,10 @@ export function FinalSweepForm({ bd, holes, typicalBoltSize }: Props) {
           onChange={(e) => setTemperature(e.target.value)}
           slotProps={{ htmlInput: { inputMode: 'decimal' }, input: { endAdornment: <InputAdornment position="end">°C</InputAdornment> } }}
         />
+        <TextField select label="Phase" value={phase} onChange={(e) => setPhase(e.target.value as FinalSweepInput['phase'])}>
+          <MenuItem value="as-left">As left (final)</MenuItem>
+          <MenuItem value="as-found">As found</MenuItem>
+        </TextField>
         <TextField
           label="Datum"
           value={datum}
@@ -110,10 +114,6 @@ export function FinalSweepForm({ bd, holes, typicalBoltSize }: Props) {
           helperText="Name the common datum, the same as on the partner rail, to compare the two"
           sx={{ gridColumn: { sm: '1 / -1', md: 'auto' } }}
         />
-        <TextField select label="Taken" value={phase} onChange={(e) => setPhase(e.target.value as FinalSweepInput['phase'])}>
-          <MenuItem value="as-left">As left (final)</MenuItem>
-          <MenuItem value="as-found">As found</MenuItem>
-        </TextField>
         <TextField label="Taken by" value={takenBy} onChange={(e) => setTakenBy(e.target.value)} placeholder={me.data?.name} helperText={takenBy.trim() ? ' ' : 'You, when left empty'} />
         <TextField select label="Bolt size" value={boltSize} onChange={(e) => setBoltSize(e.target.value)}>
           <MenuItem value="">Not recorded</MenuItem>
@@ -143,7 +143,7 @@ export function FinalSweepForm({ bd, holes, typicalBoltSize }: Props) {
             },
           }}
           helperText={usual !== undefined ? (torque.trim() ? ' ' : `Usual for ${boltSize}: ${usual} N·m — not recorded unless typed or used`) : 'Type the torque used, if measured'}
-          sx={{ gridColumn: { md: 'span 2' } }}
+          sx={{ gridColumn: { sm: '1 / -1', md: 'span 2' } }}
         />
         <TextField label="Notes" value={notes} onChange={(e) => setNotes(e.target.value)} multiline minRows={1} sx={{ gridColumn: '1 / -1' }} />
       </Box>
