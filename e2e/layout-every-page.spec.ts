@@ -85,9 +85,10 @@ async function measure(page: Page): Promise<{ scrollWidth: number; innerWidth: n
 
 /** The page has drawn its data: nothing is still loading. */
 async function settled(page: Page) {
-  await page.waitForLoadState('networkidle');
-  await expect(page.locator('[role="progressbar"]:visible')).toHaveCount(0);
+  // The page's heading shows with its data; every part still loading shows a progress bar.
   await expect(page.getByRole('heading', { level: 1 }).first()).toBeVisible();
+  await expect(page.locator('[role="progressbar"]:visible')).toHaveCount(0);
+  await page.evaluate(() => document.fonts.ready);
 }
 
 async function demoIds(page: Page) {
