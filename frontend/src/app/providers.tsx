@@ -1,10 +1,11 @@
 import { useEffect, type ReactNode } from 'react';
 import { CssBaseline, ThemeProvider } from '@mui/material';
-import { PersistQueryClientProvider } from '@tanstack/react-query-persist-client';
+import { PersistQueryClientProvider, persistQueryClientSave, type PersistQueryClientOptions } from '@tanstack/react-query-persist-client';
 import { queryClient } from '../lib/query-client';
-import { persister, PERSIST_MAX_AGE_MS } from '../lib/offline/persister';
+import { persister, persisterNow, PERSIST_MAX_AGE_MS } from '../lib/offline/persister';
 import { COMMAND_KEY, registerCommands, resumeKeptCommands } from '../lib/offline/commands';
 import { trackSessionOwner } from '../lib/offline/track-session-owner';
+import { isKeptQuery } from '../lib/offline/kept-queries';
 import { followSessionEnd } from './session-end';
 import { authKeys } from '../features/auth/api/get-me';
 import { theme } from '../theme/theme';
@@ -16,9 +17,25 @@ registerCommands(queryClient);
 // included, so it is not tied to each build (an update must not lose what was typed offline).
 const KEPT_FORMAT = 'railwright-1';
 
+const dehydrateOptions: PersistQueryClientOptions['dehydrateOptions'] = {
+  // Who is signed in and the machines' data are kept (lib/offline/kept-queries.ts), so
+  // a page reloaded without a connection opens with what was last seen.
+  shouldDehydrateQuery: isKeptQuery,
+  // Every entry not yet recorded is kept, paused or waiting for its author to sign in.
+  shouldDehydrateMutation: (m) => m.state.status === 'pending' && m.options.mutationKey?.[0] === COMMAND_KEY[0],
+};
+
+/** An entry typed or changing state is saved at once, not with the next regular save. */
+function saveEntriesAtOnce(): () => void {
+  return queryClient.getMutationCache().subscribe((event) => {
+    if (event.mutation?.options.mutationKey?.[0] !== COMMAND_KEY[0]) return;
+    void persistQueryClientSave({ queryClient, persister: persisterNow, buster: KEPT_FORMAT, dehydrateOptions });
+  });
+}
+
 export function AppProviders({ children }: { children: ReactNode }) {
   useEffect(() => {
-    const stops = [trackSessionOwner(queryClient, authKeys.me), followSessionEnd(queryClient, authKeys.me)];
+    const stops = [trackSessionOwner(queryClient, authKeys.me), followSessionEnd(queryClient, authKeys.me), saveEntriesAtOnce()];
     return () => stops.forEach((stop) => stop());
   }, []);
   return (
@@ -30,18 +47,13 @@ export function AppProviders({ children }: { children: ReactNode }) {
           persister,
           maxAge: PERSIST_MAX_AGE_MS,
           buster: KEPT_FORMAT,
-          dehydrateOptions: {
-            // Only who is signed in is kept of the answers (so the app and its waiting entries
-            // open without a connection); everything else is asked afresh on every visit.
-            shouldDehydrateQuery: (q) => q.state.status === 'success' && q.queryKey[0] === authKeys.me[0] && q.queryKey[1] === authKeys.me[1],
-            // Every entry not yet recorded is kept, paused or waiting for its author to sign in.
-            shouldDehydrateMutation: (m) => m.state.status === 'pending' && m.options.mutationKey?.[0] === COMMAND_KEY[0],
-          },
+          dehydrateOptions,
         }}
-        // Who is signed in is asked again at once (the session may have ended meanwhile); entries
-        // restored from an earlier visit go out (each waits for its author).
+        // What was kept shows at once and is all asked again (others record meanwhile, the
+        // session may have ended); without a connection the kept answers stay. Entries restored
+        // from an earlier visit go out (each waits for its author).
         onSuccess={() => {
-          void queryClient.invalidateQueries({ queryKey: authKeys.me });
+          void queryClient.invalidateQueries();
           resumeKeptCommands(queryClient);
         }}
       >

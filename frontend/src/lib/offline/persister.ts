@@ -6,17 +6,24 @@ import { del, get, set } from 'idb-keyval';
  * photo waiting to be sent keeps its file). One store for the device; what is in it is checked
  * against the signed-in person before anything waiting is sent (session-owner.ts).
  */
-export const persister = createAsyncStoragePersister({
-  storage: { getItem: (key: string) => get(key), setItem: (key: string, value: unknown) => set(key, value), removeItem: (key: string) => del(key) },
+const storage = { getItem: (key: string) => get(key), setItem: (key: string, value: unknown) => set(key, value), removeItem: (key: string) => del(key) };
+const options = {
+  storage,
   key: 'railwright.cache.v1',
   // IndexedDB stores objects as they are; no JSON round trip (which would lose files and dates).
-  serialize: (client) => client as never,
-  deserialize: (stored) => stored as never,
-  // No pause between saves (still one at a time, each with the latest state): an entry typed
-  // just before a reload or a closed tab must already be in IndexedDB. What is saved is small
-  // (who is signed in and the entries not yet recorded), so saving on every change costs little.
-  throttleTime: 0,
-});
+  serialize: (client: unknown) => client as never,
+  deserialize: (stored: unknown) => stored as never,
+};
+
+/** Saves what is kept at most once a second: pages' answers change often and are not precious. */
+export const persister = createAsyncStoragePersister({ ...options, throttleTime: 1000 });
+
+/**
+ * Saves at once (still one save at a time, each with the latest state): used when an entry is
+ * typed or changes state, so an entry typed just before a reload or a closed tab is already in
+ * IndexedDB.
+ */
+export const persisterNow = createAsyncStoragePersister({ ...options, throttleTime: 0 });
 
 /** Keep a week: long enough for a weekend without a connection, short enough not to show stale data for long. */
 export const PERSIST_MAX_AGE_MS = 7 * 24 * 3600_000;
