@@ -44,9 +44,13 @@ export class ApprovalsService implements OnModuleInit {
   }
 
   async readiness(actor: SessionUser, machineId: string) {
-    // Another workshop's machine is a 404 from the board's first statement.
-    await this.recheck.sweepWorkshop(actor.workshopId);
-    const b = await this.board.board(actor, machineId);
+    // Another workshop's machine is a 404 from the board's first statement, which also tells
+    // whether a re-check date has passed: only then does the schedule act, and the board is read again.
+    let b = await this.board.board(actor, machineId);
+    if (b.recheckDue) {
+      await this.recheck.sweepWorkshop(actor.workshopId);
+      b = await this.board.board(actor, machineId);
+    }
     const [approval, request] = await Promise.all([this.repo.latestApproval(actor.workshopId, machineId), this.repo.openRequest(actor.workshopId, machineId)]);
     return {
       machineId,

@@ -18,6 +18,8 @@ const NO_READINESS_EFFECT = new Set(['evidence', 'bolt-down', 'approval', 'sign-
 
 export interface ReadinessEvaluation {
   machine: MachineRef & { name: string; state: MachineState };
+  /** An approval's re-check date has passed unhandled: the schedule should act before this is shown. */
+  recheckDue: boolean;
   checks: BoardCheck[];
   blocking: BoardCheck[];
   targetSet: { id: string; name: string; recheckIntervalDays: number };
@@ -87,6 +89,7 @@ export class ReadinessSummaryService implements OnModuleInit, OnApplicationBoots
     const interval = targetSet.targets.recheckIntervalDays;
     return {
       machine: found.machine,
+      recheckDue: found.recheckDue,
       checks,
       blocking: blockingOf(checks),
       targetSet: { id: targetSet.id, name: targetSet.name, recheckIntervalDays: Math.round(interval?.value ?? 180) },
