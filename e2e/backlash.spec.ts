@@ -1,26 +1,7 @@
-import { expect, test, type APIRequestContext, type Page } from '@playwright/test';
+import { expect, test, type Page } from '@playwright/test';
 import { readFile } from 'node:fs/promises';
+import { newAxis } from './support/machine-with-axis';
 import { DEMO, signInAs, snap } from './support/session';
-
-/** A fresh router with one 16 × 5 screw axis of 926 mm measured travel (router target: backlash ≤ 0.03 mm). */
-async function newAxis(request: APIRequestContext) {
-  const machine = await request.post('/api/machines', { data: { name: `Backlash test ${Date.now()}`, kind: 'router', workArea: { x: 900, y: 600 } } });
-  expect(machine.status()).toBe(201);
-  const machineId = (await machine.json()).id as string;
-  const axis = await request.post(`/api/machines/${machineId}/axes`, {
-    data: {
-      name: 'X',
-      drive: { type: 'screw', lead: 5, nominalDiameter: 16, rootDiameter: 12.9, unsupportedLength: 1050, mounting: 'fixed-supported' },
-      motorStepsPerRev: 200,
-      microsteps: 16,
-      stepsPerMm: 640,
-      maxFeedRate: 5000,
-      measuredTravelMm: 926,
-    },
-  });
-  expect(axis.status()).toBe(201);
-  return { machineId, axisId: (await axis.json()).id as string };
-}
 
 // Hand-worked (backend/src/engine/backlash.spec.ts): backlash = |mean up − mean down| per position,
 // largest reported (TRADE.md, common practice). µm: 20, 17 and 29 → 29 µm at the far end.
@@ -38,7 +19,7 @@ async function pickReadingUnit(page: Page, label: string) {
 test.describe('backlash check', () => {
   test('a technician enters readings from both sides at both ends and the middle; Enter moves on and never clears', async ({ page }) => {
     await signInAs(page, DEMO.technician);
-    const { machineId, axisId } = await newAxis(page.request);
+    const { machineId, axisId } = await newAxis(page.request, `Backlash test ${Date.now()}`);
     await page.goto(`/machines/${machineId}/axes/${axisId}`);
     const section = page.getByRole('region', { name: 'Backlash check' });
     await expect(section.getByText('No backlash check yet')).toBeVisible({ timeout: 30_000 });
@@ -110,7 +91,7 @@ test.describe('backlash check', () => {
 
   test('a viewer reads the check but gets no entry grid', async ({ page, browser }) => {
     await signInAs(page, DEMO.technician);
-    const { machineId, axisId } = await newAxis(page.request);
+    const { machineId, axisId } = await newAxis(page.request, `Backlash test ${Date.now()}`);
     const positions = READINGS.map((r, i) => ({ position: [46, 463, 900][i], up: r.up.map(Number), down: r.down.map(Number) }));
     expect((await page.request.post(`/api/axes/${axisId}/backlash-checks`, { data: { readingUnit: 'um', positions } })).status()).toBe(201);
     const viewer = await browser.newPage();
@@ -123,7 +104,7 @@ test.describe('backlash check', () => {
 
   test('the test program shows the server target list and keeps a note inside its comment', async ({ page }) => {
     await signInAs(page, DEMO.technician);
-    const { machineId, axisId } = await newAxis(page.request);
+    const { machineId, axisId } = await newAxis(page.request, `Backlash test ${Date.now()}`);
     const targets = (await (await page.request.get(`/api/axes/${axisId}/test-targets`)).json()) as { targets: number[] };
     await page.goto(`/machines/${machineId}/axes/${axisId}`);
     await page.getByRole('button', { name: 'Download test program' }).click();

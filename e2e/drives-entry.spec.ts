@@ -1,28 +1,9 @@
 import { expect, test, type APIRequestContext, type Page } from '@playwright/test';
+import { newAxis } from './support/machine-with-axis';
 import { DEMO, signInAs, snap } from './support/session';
 
 const PHONE = { width: 390, height: 844 };
 const TABLET = { width: 820, height: 1180 };
-
-/** A fresh router with one screw axis of 926 mm measured travel. */
-async function newAxis(request: APIRequestContext, name = `Entry grid ${Date.now()}`) {
-  const machine = await request.post('/api/machines', { data: { name, kind: 'router', workArea: { x: 900, y: 600 } } });
-  expect(machine.status()).toBe(201);
-  const machineId = (await machine.json()).id as string;
-  const axis = await request.post(`/api/machines/${machineId}/axes`, {
-    data: {
-      name: 'X',
-      drive: { type: 'screw', lead: 5, nominalDiameter: 16, rootDiameter: 12.9, unsupportedLength: 1050, mounting: 'fixed-supported' },
-      motorStepsPerRev: 200,
-      microsteps: 16,
-      stepsPerMm: 640,
-      maxFeedRate: 5000,
-      measuredTravelMm: 926,
-    },
-  });
-  expect(axis.status()).toBe(201);
-  return { machineId, axisId: (await axis.json()).id as string };
-}
 
 async function trialsOf(request: APIRequestContext, axisId: string) {
   const res = await request.get(`/api/axes/${axisId}/travel-trials`);
@@ -36,7 +17,7 @@ const cell = (page: Page, k: 'Commanded' | 'Measured', n: number) => page.getByL
 test.describe('entry grids of the drives', () => {
   test('travel trial by keyboard: Enter to the next move, Tab skips the remove buttons, a removed move comes back with Undo, three moves are saved as three', async ({ page }) => {
     await signInAs(page, DEMO.technician);
-    const { machineId, axisId } = await newAxis(page.request);
+    const { machineId, axisId } = await newAxis(page.request, `Entry grid ${Date.now()}`);
     await page.goto(`/machines/${machineId}/axes/${axisId}`);
     await expect(page.getByRole('heading', { name: 'Axis X' })).toBeVisible();
 
@@ -93,7 +74,7 @@ test.describe('entry grids of the drives', () => {
 
   test('repeat-and-reverse grid: its targets are the test program’s; Enter goes to the next row’s first cell, Tab along a row', async ({ page }) => {
     await signInAs(page, DEMO.technician);
-    const { machineId, axisId } = await newAxis(page.request);
+    const { machineId, axisId } = await newAxis(page.request, `Entry grid ${Date.now()}`);
     const program = await page.request.get(`/api/axes/${axisId}/test-program?kind=positioning`);
     expect(program.status()).toBe(200);
     const line = /\(Targets mm: ([^)]*)\)/.exec(await program.text());

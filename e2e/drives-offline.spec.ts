@@ -1,5 +1,6 @@
-import { expect, test, type APIRequestContext, type Page } from '@playwright/test';
+import { expect, test, type Page } from '@playwright/test';
 import sharp from 'sharp';
+import { newAxis } from './support/machine-with-axis';
 import { DEMO, signInAs, snap } from './support/session';
 
 /**
@@ -8,32 +9,13 @@ import { DEMO, signInAs, snap } from './support/session';
  * recorded exactly once when the connection returns.
  */
 
-async function newAxis(request: APIRequestContext) {
-  const machine = await request.post('/api/machines', { data: { name: `Offline entries ${Date.now()}`, kind: 'router', workArea: { x: 900, y: 600 } } });
-  expect(machine.status()).toBe(201);
-  const machineId = (await machine.json()).id as string;
-  const axis = await request.post(`/api/machines/${machineId}/axes`, {
-    data: {
-      name: 'X',
-      drive: { type: 'screw', lead: 5, nominalDiameter: 16, rootDiameter: 12.9, unsupportedLength: 1050, mounting: 'fixed-supported' },
-      motorStepsPerRev: 200,
-      microsteps: 16,
-      stepsPerMm: 640,
-      maxFeedRate: 5000,
-      measuredTravelMm: 926,
-    },
-  });
-  expect(axis.status()).toBe(201);
-  return { machineId, axisId: (await axis.json()).id as string };
-}
-
 const listOf = (body: unknown) => (Array.isArray(body) ? body : ((body as { items?: unknown[] }).items ?? [])) as unknown[];
 const count = async (page: Page, path: string) => listOf(await (await page.request.get(path)).json()).length;
 const banner = (page: Page) => page.getByRole('status').filter({ hasText: 'Offline' });
 
 test('a travel trial, a diagonal check and a photo typed offline wait on the device and are recorded once when the connection returns', async ({ page, context }) => {
   await signInAs(page, DEMO.technician);
-  const { machineId, axisId } = await newAxis(page.request);
+  const { machineId, axisId } = await newAxis(page.request, `Offline entries ${Date.now()}`);
   const sent: Record<string, string[]> = {};
   page.on('request', (r) => {
     const key = r.headers()['idempotency-key'];

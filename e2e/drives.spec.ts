@@ -1,6 +1,7 @@
-import { expect, test, type APIRequestContext, type Locator, type Page } from '@playwright/test';
+import { expect, test, type Locator, type Page } from '@playwright/test';
 import { readFile } from 'node:fs/promises';
 import path from 'node:path';
+import { newAxis } from './support/machine-with-axis';
 import { DEMO, signInAs, snap as snapPage } from './support/session';
 
 /** Full-page screenshots from the top, so the fixed app bar does not land in the middle. */
@@ -11,26 +12,6 @@ async function snap(page: Page, name: string) {
 }
 
 const TABLET = { width: 820, height: 1180 };
-
-/** A fresh router with one 16 × 5 screw axis, so the demo machines stay as they are for other specs. */
-async function newAxis(request: APIRequestContext) {
-  const machine = await request.post('/api/machines', { data: { name: `Drives test ${Date.now()}`, kind: 'router', workArea: { x: 900, y: 600 } } });
-  expect(machine.status()).toBe(201);
-  const machineId = (await machine.json()).id as string;
-  const axis = await request.post(`/api/machines/${machineId}/axes`, {
-    data: {
-      name: 'X',
-      drive: { type: 'screw', lead: 5, nominalDiameter: 16, rootDiameter: 12.9, unsupportedLength: 1050, mounting: 'fixed-supported' },
-      motorStepsPerRev: 200,
-      microsteps: 16,
-      stepsPerMm: 640,
-      maxFeedRate: 5000,
-      measuredTravelMm: 926,
-    },
-  });
-  expect(axis.status()).toBe(201);
-  return { machineId, axisId: (await axis.json()).id as string };
-}
 
 /** What a spreadsheet puts on the clipboard, delivered as a paste event to a field. */
 async function paste(field: Locator, text: string) {

@@ -4,7 +4,7 @@ import { UnitFamilySelect } from '../../../components/form/unit-select';
 import { fromMm, UNIT_LABELS, type LengthUnit } from '../../../lib/units';
 import { backlashChecksPath, useRecordBacklash } from '../api/backlash-record';
 import { removeButtonProps, useUndoRemove } from './undo-remove';
-import { WaitingEntries } from './waiting-entries';
+import { WaitingEntries } from '../../../components/offline/waiting-entries';
 import type { BacklashCheck } from '../backlash-types';
 import type { Axis } from '../types';
 import { errorText } from '../utils/format';

@@ -6,7 +6,7 @@ import { useIndicatorInput } from '../../../components/indicator-input/use-indic
 import { UNIT_LABELS, type LengthUnit } from '../../../lib/units';
 import { positioningRunsPath, useRecordPositioningRun } from '../api/record-positioning-run';
 import { useTestTargets, type TestTargets } from '../api/test-program-targets';
-import { WaitingEntries } from './waiting-entries';
+import { WaitingEntries } from '../../../components/offline/waiting-entries';
 import type { Axis, PositioningRun } from '../types';
 import { errorText } from '../utils/format';
 import { parseRunsCsv, splitRows } from '../utils/parse-grid';

@@ -5,7 +5,7 @@ import DeleteOutline from '@mui/icons-material/DeleteOutlined';
 import { UNIT_LABELS, type LengthUnit } from '../../../lib/units';
 import { travelTrialsPath, useRecordTravelTrial } from '../api/record-travel-trial';
 import { removeButtonProps, useUndoRemove } from './undo-remove';
-import { WaitingEntries } from './waiting-entries';
+import { WaitingEntries } from '../../../components/offline/waiting-entries';
 import type { Axis, TravelTrial } from '../types';
 import { errorText } from '../utils/format';
 import { splitRows } from '../utils/parse-grid';

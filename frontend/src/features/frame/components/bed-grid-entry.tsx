@@ -5,7 +5,7 @@ import { useIndicatorInput } from '../../../components/indicator-input/use-indic
 import { fromMm, toMm, UNIT_LABELS, type LengthUnit } from '../../../lib/units';
 import { UnitFamilySelect } from '../../../components/form/unit-select';
 import { useCreateBedGrid } from '../api/create-bed-grid';
-import { WaitingEntries } from './waiting-entries';
+import { WaitingEntries } from '../../../components/offline/waiting-entries';
 import type { BedGrid } from '../types';
 import { evenPositions } from '../utils/grid-labels';
 import { NumberField, parseNumber } from './number-field';

@@ -2,7 +2,7 @@ import { useState, type FormEvent } from 'react';
 import { Alert, Box, Button, Stack, TextField } from '@mui/material';
 import { UNIT_LABELS, type LengthUnit } from '../../../lib/units';
 import { useCreateDiagonalCheck } from '../api/create-diagonal-check';
-import { WaitingEntries } from './waiting-entries';
+import { WaitingEntries } from '../../../components/offline/waiting-entries';
 import type { DiagonalCheck } from '../types';
 import { NumberField, parseNumber } from './number-field';
 import { UnitFamilySelect } from '../../../components/form/unit-select';

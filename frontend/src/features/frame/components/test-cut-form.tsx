@@ -2,7 +2,7 @@ import { useState, type FormEvent } from 'react';
 import { Alert, Box, Button, MenuItem, Stack, TextField, Typography } from '@mui/material';
 import { UNIT_LABELS, type LengthUnit } from '../../../lib/units';
 import { useCreateTestCut } from '../api/create-test-cut';
-import { WaitingEntries } from './waiting-entries';
+import { WaitingEntries } from '../../../components/offline/waiting-entries';
 import type { TestCut } from '../types';
 import { NumberField, parseNumber } from './number-field';
 import { UnitFamilySelect } from '../../../components/form/unit-select';

@@ -1,6 +1,6 @@
 import { Box, Chip, Paper, Typography } from '@mui/material';
 import ScheduleOutlined from '@mui/icons-material/ScheduleOutlined';
-import { useWaitingEntries } from '../../../lib/offline/use-waiting-entries';
+import { useWaitingEntries } from '../../lib/offline/use-waiting-entries';
 
 /** Entries typed here for `path` that wait on the device for the connection, shown where they will land. */
 export function WaitingEntries({ path }: { path: string }) {
