@@ -81,7 +81,7 @@ export async function configureApp(app: NestFastifyApplication, config: AppConfi
   await app.register(fastifyCookie as never);
   await app.register(fastifySession as never, {
     secret: config.sessionSecret,
-    cookieName: 'railwright.sid',
+    cookieName: config.sessionCookieName,
     saveUninitialized: false,
     store,
     cookie: {

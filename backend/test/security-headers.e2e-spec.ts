@@ -7,7 +7,7 @@ import { loadConfig } from '../src/config/config.js';
 import { createApp } from '../src/create-app.js';
 import pg from 'pg';
 import { PG_POOL } from '../src/database/database.tokens.js';
-import { createTestApp, createTestWorkshop, type TestWorkshop } from './helpers/test-app.js';
+import { createTestApp, createTestWorkshop, TEST_PASSWORD, type TestWorkshop } from './helpers/test-app.js';
 
 describe('security headers and caching', () => {
   let api: NestFastifyApplication;
@@ -87,6 +87,27 @@ describe('security headers and caching', () => {
 
     expect(loadConfig({ ...process.env, PUBLIC_URL: 'https://railwright.example.org' }).secureCookies).toBe(true);
     expect(loadConfig({ ...process.env, PUBLIC_URL: 'http://127.0.0.1:3000', SECURE_COOKIES: undefined }).secureCookies).toBe(false);
+  });
+
+  it('served over https, the session cookie is named with the __Host- prefix: Secure, path /, no domain', async () => {
+    const w = await createTestWorkshop(api, 'Host cookie');
+    // Behind a TLS-terminating proxy, as an https installation runs: the proxy says the request was https.
+    const https = await createApp(loadConfig({ ...process.env, FRONTEND_DIST: '', PUBLIC_URL: 'https://railwright.example.org', TRUST_PROXY: 'true' }));
+    await https.init();
+    await https.getHttpAdapter().getInstance().ready();
+    try {
+      const res = await request(https.getHttpServer()).post('/api/auth/login').set('x-forwarded-proto', 'https').send({ email: w.emails.viewer, password: TEST_PASSWORD });
+      expect(res.status).toBe(200);
+      const cookie = ([] as string[]).concat(res.headers['set-cookie'] ?? []).find((c) => c.includes('railwright.sid='));
+      expect(cookie).toMatch(/^__Host-railwright\.sid=/);
+      expect(cookie).toMatch(/; Secure/);
+      expect(cookie).toMatch(/; Path=\/(;|$)/);
+      expect(cookie).not.toMatch(/Domain=/i);
+    } finally {
+      await https.close();
+    }
+    // Over plain http (a workshop's own network) a __Host- cookie would be refused by browsers.
+    expect(loadConfig({ ...process.env, PUBLIC_URL: 'http://127.0.0.1:3000', SECURE_COOKIES: undefined }).sessionCookieName).toBe('railwright.sid');
   });
 
   it('production refuses to start without a session secret, with a clear message', () => {

@@ -4,6 +4,7 @@ import type { FastifyReply, FastifyRequest } from 'fastify';
 import { CurrentUser, Public } from './decorators.js';
 import { LoginBodyGuard } from './login-body.guard.js';
 import { toUserResponse, type SessionUser } from './session-user.js';
+import { loadConfig } from '../config/config.js';
 
 @Controller('auth')
 export class AuthController {
@@ -25,7 +26,7 @@ export class AuthController {
   @HttpCode(204)
   async logout(@Req() req: FastifyRequest, @Res({ passthrough: true }) reply: FastifyReply) {
     if (req.session) await req.session.destroy();
-    reply.clearCookie('railwright.sid', { path: '/' });
+    reply.clearCookie(loadConfig().sessionCookieName, { path: '/' });
   }
 
   @Get('me')

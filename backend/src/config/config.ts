@@ -14,6 +14,8 @@ export interface AppConfig {
   frontendDist: string | null;
   /** Secure cookies whenever the public URL is https (or SECURE_COOKIES=true). */
   secureCookies: boolean;
+  /** The session cookie's name: `__Host-` prefixed when Secure, so only this host over https can set it. */
+  sessionCookieName: string;
   /** The address people open, e.g. https://railwright.example.org; its origin is the only one allowed to write. */
   appUrl: string;
   /** Further origins allowed to write: the Vite dev server outside production. */
@@ -91,6 +93,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
   if (!/^https?:\/\/[^/]+/.test(appUrl)) problems.push('PUBLIC_URL must be an http:// or https:// address');
   if (problems.length) throw new Error('Configuration: ' + problems.join('; '));
   const dist = env.FRONTEND_DIST ?? path.join(repoRoot(), 'frontend', 'dist');
+  const secureCookies = env.SECURE_COOKIES === 'true' || appUrl.startsWith('https://');
   const config: AppConfig = {
     databaseUrl,
     databaseOwnerUrl,
@@ -98,7 +101,8 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
     host,
     sessionSecret,
     frontendDist: env.FRONTEND_DIST === '' ? null : dist,
-    secureCookies: env.SECURE_COOKIES === 'true' || appUrl.startsWith('https://'),
+    secureCookies,
+    sessionCookieName: secureCookies ? '__Host-railwright.sid' : 'railwright.sid',
     appUrl,
     extraOrigins: production ? [] : [...DEV_SERVER_ORIGINS, `http://127.0.0.1:${port}`, `http://localhost:${port}`],
     trustProxy,
