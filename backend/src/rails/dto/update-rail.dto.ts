@@ -1,4 +1,9 @@
-import { RailFieldsDto } from './rail-geometry.dto.js';
+import { PartialType } from '@nestjs/mapped-types';
+import { CreateRailDto } from './create-rail.dto.js';
 
-/** Every field optional; partnerRailId null unpairs both rails. */
-export class UpdateRailDto extends RailFieldsDto {}
+/**
+ * Every field of a new rail, each optional; partnerRailId null unpairs both rails. Absent fields
+ * skip their rules, but null is checked (and refused with the field's own message) except where
+ * the create DTO already takes null as "clear" (profileSize, spacing, endDistance, partnerRailId).
+ */
+export class UpdateRailDto extends PartialType(CreateRailDto, { skipNullProperties: false }) {}
