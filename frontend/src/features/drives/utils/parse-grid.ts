@@ -1,21 +1,12 @@
+import { cellProblem, normaliseCell, parseNumberCell, readRows } from '../../../lib/tabular-input';
+
 /**
- * Reading a block of numbers pasted from a spreadsheet or a CSV file. Tab-separated text (what
- * spreadsheets put on the clipboard) may use a decimal comma; comma- or semicolon-separated text
- * uses a decimal point. Empty cells stay empty (null).
+ * A block pasted from a spreadsheet or read from a CSV file, as the text of each cell: numbers with
+ * a decimal point ("0,5" pasted becomes "0.5"), anything else as it was for the grid to flag.
+ * Blank lines are left out.
  */
 export function splitRows(text: string): string[][] {
-  const lines = text.replace(/\r\n?/g, '\n').split('\n');
-  while (lines.length && lines[lines.length - 1].trim() === '') lines.pop();
-  const tabbed = lines.some((l) => l.includes('\t'));
-  const semicolon = !tabbed && lines.some((l) => l.includes(';'));
-  const sep = tabbed ? '\t' : semicolon ? ';' : ',';
-  return lines.map((l) => l.split(sep).map((c) => (tabbed || semicolon ? c.trim().replace(',', '.') : c.trim())));
-}
-
-export function parseCell(cell: string): number | null | 'bad' {
-  if (cell === '') return null;
-  const v = Number(cell.replace(/^\+/, ''));
-  return Number.isFinite(v) ? v : 'bad';
+  return readRows(text).map((row) => row.cells.map(normaliseCell));
 }
 
 export interface GridImport {
@@ -34,30 +25,36 @@ export function parseRunsCsv(text: string): GridImport {
   const problems: string[] = [];
   let targets: number[] | null = null;
   const rows: GridImport['rows'] = [];
-  splitRows(text).forEach((cells, r) => {
-    if (cells.every((c) => c === '')) return;
+  readRows(text).forEach((row) => {
+    const { cells } = row;
     const first = cells[0];
     if (/^(targets?|positions?|direction|run)/i.test(first) && targets === null) {
-      const t = cells.slice(1).filter((c) => c !== '').map(Number);
-      if (t.some((v) => !Number.isFinite(v))) problems.push(`Row ${r + 1}: the targets must be numbers of mm`);
-      else targets = t;
+      const t = cells.slice(1).map(parseNumberCell);
+      const bad = t.findIndex((v) => !v.ok);
+      if (bad >= 0) problems.push(`${cellProblem(row, bad + 1, (t[bad] as { reason: string }).reason)}: the targets must be numbers of mm`);
+      else targets = t.flatMap((v) => (v.ok && v.value !== null ? [v.value] : []));
       return;
     }
     let direction: 'up' | 'down' | null = null;
     let rest = cells;
-    if (parseCell(first) === 'bad' && DIRECTION.test(first)) {
+    let skipped = 0;
+    if (!parseNumberCell(first).ok && DIRECTION.test(first)) {
       direction = /^(up|↑|\+|pos)/i.test(first) ? 'up' : 'down';
       rest = cells.slice(1);
+      skipped = 1;
       // "up, 1, …" style: a run number after the direction
-      if (rest.length && /^\d+$/.test(rest[0]) && targets && rest.length === targets.length + 1) rest = rest.slice(1);
+      if (rest.length && /^\d+$/.test(rest[0]) && targets && rest.length === targets.length + 1) {
+        rest = rest.slice(1);
+        skipped = 2;
+      }
     }
-    const values = rest.map(parseCell);
-    const bad = values.findIndex((v) => v === 'bad');
+    const values = rest.map(parseNumberCell);
+    const bad = values.findIndex((v) => !v.ok);
     if (bad >= 0) {
-      problems.push(`Row ${r + 1}, value ${bad + 1} ("${rest[bad]}") is not a number`);
+      problems.push(cellProblem(row, bad + skipped, (values[bad] as { reason: string }).reason));
       return;
     }
-    rows.push({ direction, values: values as (number | null)[] });
+    rows.push({ direction, values: values.map((v) => (v.ok ? v.value : null)) });
   });
   return { targets, rows, problems };
 }

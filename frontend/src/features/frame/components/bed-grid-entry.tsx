@@ -9,6 +9,7 @@ import { WaitingEntries } from '../../../components/offline/waiting-entries';
 import type { BedGrid } from '../types';
 import { evenPositions } from '../utils/grid-labels';
 import { NumberField, parseNumber } from './number-field';
+import { pastedHeights } from '../utils/pasted-heights';
 
 const MAX = 20;
 const cellSx = { width: '100%', fontSize: 14, '& input': { textAlign: 'right', py: 0.75, px: 1 }, border: '1px solid #d8d3c7', borderRadius: 1, bgcolor: '#fff' };
@@ -84,7 +85,8 @@ export function BedGridEntry({ machineId, workArea, onSaved }: { machineId: stri
     }
   };
   const onPaste = (r: number, c: number) => (e: ClipboardEvent<HTMLInputElement>) => {
-    const values = e.clipboardData.getData('text').trim().split(/[\s;]+/).filter(Boolean);
+    // A block from a spreadsheet fills the grid row by row from this cell, blank cells included.
+    const values = pastedHeights(e.clipboardData.getData('text'));
     if (values.length < 2) return;
     e.preventDefault();
     setZ((old) => {

@@ -1,4 +1,5 @@
 import { InputAdornment, TextField, type TextFieldProps } from '@mui/material';
+import { parseNumberCell } from '../../../lib/tabular-input';
 
 /** A decimal entry with its unit beside it; the value stays text until submitted. */
 export function NumberField({ unit, ...props }: TextFieldProps & { unit?: string }) {
@@ -14,10 +15,8 @@ export function NumberField({ unit, ...props }: TextFieldProps & { unit?: string
   );
 }
 
-/** A typed number, or null when empty or not a number ("1,5" is read as 1.5). */
+/** A typed number, or null when empty or not a number ("1,5" is read as 1.5; "1.234,5" is refused). */
 export function parseNumber(text: string): number | null {
-  const t = text.trim().replace(',', '.');
-  if (!t) return null;
-  const v = Number(t);
-  return Number.isFinite(v) ? v : null;
+  const parsed = parseNumberCell(text);
+  return parsed.ok ? parsed.value : null;
 }

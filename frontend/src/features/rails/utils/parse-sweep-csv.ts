@@ -1,3 +1,5 @@
+import { parseNumberCell, readRows } from '../../../lib/tabular-input';
+
 /** One line of a pasted or uploaded sweep: position (mm) and reading, with what is wrong with it. */
 export interface CsvRow {
   line: number;
@@ -13,15 +15,10 @@ export interface ParsedCsv {
   header: string | null;
 }
 
-const SPLIT = /\s*[,;\t]\s*|\s+/;
-
-// A decimal comma ("0,5") is only taken as such when the separator is a semicolon or a tab.
-function toNumber(cell: string | undefined, decimalComma: boolean): number | null {
-  if (cell === undefined) return null;
-  const t = (decimalComma ? cell.replace(',', '.') : cell).trim();
-  if (t === '' || !/^[+-]?(\d+\.?\d*|\.\d+)(e[+-]?\d+)?$/i.test(t)) return null;
-  return Number(t);
-}
+const numberOrNull = (cell: string | undefined) => {
+  const parsed = parseNumberCell(cell ?? '');
+  return parsed.ok ? parsed.value : null;
+};
 
 /** Reads "position, reading" per line (comma, semicolon, tab or spaces), an optional header first. */
 export function parseSweepCsv(text: string): ParsedCsv {
@@ -29,25 +26,25 @@ export function parseSweepCsv(text: string): ParsedCsv {
   const rows: CsvRow[] = [];
   let header: string | null = null;
   const seen = new Map<number, number>();
-  lines.forEach((raw, i) => {
-    const textLine = raw.trim();
-    if (!textLine || textLine.startsWith('#')) return;
-    const decimalComma = /[;\t]/.test(textLine);
-    const cells = decimalComma ? textLine.split(/\s*[;\t]\s*/) : textLine.split(SPLIT);
-    if (!rows.length && header === null && cells.some((c) => /[a-z]/i.test(c)) && cells.every((c) => toNumber(c, decimalComma) === null)) {
+  readRows(text).forEach(({ line, cells }) => {
+    const textLine = (lines[line - 1] ?? '').trim();
+    if (!rows.length && header === null && cells.some((c) => /[a-z]/i.test(c)) && cells.every((c) => numberOrNull(c) === null)) {
       header = textLine;
       return;
     }
-    const position = toNumber(cells[0], decimalComma);
-    const reading = toNumber(cells[1], decimalComma);
+    const pos = parseNumberCell(cells[0] ?? '');
+    const read = parseNumberCell(cells[1] ?? '');
+    const position = pos.ok ? pos.value : null;
+    const reading = read.ok ? read.value : null;
     let problem: string | null = null;
-    if (position === null) problem = cells[0] ? `Position "${cells[0]}" is not a number` : 'No position';
+    if (!pos.ok) problem = `Position ${pos.reason}`;
+    else if (position === null) problem = 'No position';
     else if (cells[1] === undefined || cells[1] === '') problem = 'Missing reading';
-    else if (reading === null) problem = `Reading "${cells[1]}" is not a number`;
+    else if (!read.ok) problem = `Reading ${read.reason}`;
     else if (cells.length > 2) problem = `More than two values (${cells.length})`;
     else if (seen.has(position)) problem = `Position ${position} mm repeats line ${seen.get(position)}`;
-    if (position !== null && !problem) seen.set(position, i + 1);
-    rows.push({ line: i + 1, text: textLine, position, reading, problem });
+    if (position !== null && !problem) seen.set(position, line);
+    rows.push({ line, text: textLine, position, reading, problem });
   });
   return { rows, header };
 }
