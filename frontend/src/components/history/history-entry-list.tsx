@@ -1,6 +1,6 @@
 import { Box, Button, Chip, List, ListItem, Paper, Stack, Typography } from '@mui/material';
-import { formatHistoryTime } from './format-time';
 import type { HistoryEntry } from './history-types';
+import { formatDateTime } from '../../lib/format-time';
 
 const show = (v: unknown): string => {
   if (v === null || v === undefined || v === '') return '—';
@@ -35,7 +35,7 @@ export function HistoryEntryList(props: { entries: HistoryEntry[]; hasMore: bool
               <Chip size="small" variant="outlined" label={e.kind} />
               {props.showMachine && e.machine && <Chip size="small" label={e.machine.name} />}
               <Typography variant="body2" color="text.secondary">
-                {formatHistoryTime(e.at)} · <strong>{e.actor}</strong>
+                {formatDateTime(e.at)} · <strong>{e.actor}</strong>
               </Typography>
             </Stack>
             <Typography variant="body1" sx={{ mt: 0.5, wordBreak: 'break-word' }}>

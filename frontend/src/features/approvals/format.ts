@@ -22,5 +22,4 @@ export function targetText(kind: BoardCheck['kind'], target: Target | null): str
 
 export const resultText = (r: BoardCheck['result']) => (r ? `${num(r.value)} ${unitLabel(r.unit)}` : '—');
 
-export const dateTime = (iso: string) => new Date(iso).toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' });
-export const dateOnly = (iso: string) => new Date(iso).toLocaleDateString(undefined, { dateStyle: 'medium' });
+export { formatDateTime as dateTime, formatDate as dateOnly } from '../../lib/format-time';

@@ -58,5 +58,4 @@ export const RECORD_KIND_LABELS: Record<string, string> = {
   'safety-walk': 'Safety walk',
 };
 
-export const dateTime = (iso: string) => new Date(iso).toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' });
-export const dateOnly = (iso: string) => new Date(iso).toLocaleDateString(undefined, { dateStyle: 'medium' });
+export { formatDateTime as dateTime, formatDate as dateOnly } from '../../lib/format-time';

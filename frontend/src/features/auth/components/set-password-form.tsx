@@ -2,6 +2,7 @@ import { useState, type FormEvent } from 'react';
 import { Alert, Box, Button, Stack, TextField, Typography } from '@mui/material';
 import { LoadingState } from '../../../components/states/loading-state';
 import { usePasswordLink, useSetPassword } from '../api/password-link';
+import { formatDateTime } from '../../../lib/format-time';
 
 const MIN = 12;
 
@@ -25,7 +26,7 @@ export function SetPasswordForm({ token, onDone }: { token: string; onDone: (ema
       <Stack spacing={2}>
         <Typography variant="h2" component="h1">Choose your password</Typography>
         <Typography color="text.secondary">
-          {link.data.name}, {link.data.workshop} · {link.data.email}. This link works once, until {new Date(link.data.expiresAt).toLocaleString()}.
+          {link.data.name}, {link.data.workshop} · {link.data.email}. This link works once, until {formatDateTime(link.data.expiresAt)}.
         </Typography>
         {set.error && <Alert severity="error" role="alert">{set.error.message}</Alert>}
         <TextField label="New password" type="password" autoComplete="new-password" value={password} onChange={(e) => setPassword(e.target.value)} helperText={`At least ${MIN} characters`} error={password.length > 0 && tooShort} required fullWidth autoFocus />

@@ -13,6 +13,7 @@ import { FinalSweepForm } from './final-sweep-form';
 import { FinalSweepResult } from './final-sweep-result';
 import { HoleEntryPanel, type Refusal } from './hole-entry-panel';
 import { HolesTable } from './holes-table';
+import { formatDateTime } from '../../../lib/format-time';
 
 interface Props {
   bd: BoltDown;
@@ -43,7 +44,7 @@ export function BoltDownGuide({ bd, canRecord, typicalBoltSize }: Props) {
       {bd.abandoned && (
         <Alert severity="warning" sx={{ mb: 2 }} data-testid="abandoned">
           <AlertTitle>Abandoned</AlertTitle>
-          {bd.abandoned.by ?? 'Someone'} abandoned this bolt-down on {new Date(bd.abandoned.at).toLocaleString()} with {state.fixedCount} of {bd.holeCount} holes fixed: “{bd.abandoned.reason}”. Its
+          {bd.abandoned.by ?? 'Someone'} abandoned this bolt-down on {formatDateTime(bd.abandoned.at)} with {state.fixedCount} of {bd.holeCount} holes fixed: “{bd.abandoned.reason}”. Its
           readings stay in the machine&apos;s history; begin a new bolt-down to align the rail.
         </Alert>
       )}

@@ -9,6 +9,7 @@ import type { RailSummary } from '../types';
 import { BoltDownGuide } from './bolt-down-guide';
 import { StartBoltDownForm } from './start-bolt-down-form';
 import { AbandonBoltDownDialog } from './abandon-bolt-down-dialog';
+import { formatDateTime } from '../../../lib/format-time';
 
 interface Props {
   rail: RailSummary;
@@ -53,7 +54,7 @@ export function BoltDownScreen({ rail, canRecord }: Props) {
             <TextField select label="Bolt-down" value={shown.id} onChange={(e) => setChosen(e.target.value)} sx={{ minWidth: 300 }}>
               {others.map((b, i) => (
                 <MenuItem key={b.id} value={b.id}>
-                  {new Date(b.createdAt).toLocaleString()} · {b.fixedCount} of {b.holeCount} fixed{b.abandoned ? ' · abandoned' : ''}{i === 0 ? ' (latest)' : ''}
+                  {formatDateTime(b.createdAt)} · {b.fixedCount} of {b.holeCount} fixed{b.abandoned ? ' · abandoned' : ''}{i === 0 ? ' (latest)' : ''}
                 </MenuItem>
               ))}
             </TextField>

@@ -8,6 +8,7 @@ import { UNIT_LABELS, type LengthUnit } from '../../../lib/units';
 import type { BoltDown } from '../types';
 import type { GuideHole } from '../utils/guide-state';
 import { plain, signed } from '../utils/format';
+import { formatDateTime } from '../../../lib/format-time';
 
 interface Props {
   bd: BoltDown;
@@ -30,7 +31,7 @@ function State({ hole, isNext, unit, band }: { hole: GuideHole; isNext: boolean;
   }
   if (hole.fixed) {
     return (
-      <Tooltip title={hole.fixedAt ? `Fixed by ${hole.fixedBy ?? 'someone'} at ${new Date(hole.fixedAt).toLocaleString()}` : 'Fixed'}>
+      <Tooltip title={hole.fixedAt ? `Fixed by ${hole.fixedBy ?? 'someone'} at ${formatDateTime(hole.fixedAt)}` : 'Fixed'}>
         <Chip size="small" color="success" variant="outlined" icon={<CheckCircleOutlined />} label="Fixed" />
       </Tooltip>
     );

@@ -27,7 +27,7 @@ export const showStepsPerInch = (stepsPerInch: number) => `${Number(stepsPerInch
 
 export const showPercent = (v: number, digits = 3) => `${v >= 0 ? '+' : ''}${v.toFixed(digits)} %`;
 
-export const showDate = (iso: string) => new Date(iso).toLocaleDateString('en-GB', { day: 'numeric', month: 'short', year: 'numeric' });
+export { formatDate as showDate } from '../../../lib/format-time';
 
 export const showDateTime = (iso: string) =>
   new Date(iso).toLocaleString('en-GB', { day: 'numeric', month: 'short', year: 'numeric', hour: '2-digit', minute: '2-digit' });

@@ -9,6 +9,7 @@ import { AFTER_APPROVAL, evidenceMeta as meta } from '../utils/evidence-meta';
 import { formatBytes } from '../utils/format-bytes';
 import { DeleteEvidenceDialog } from './delete-evidence-dialog';
 import { EvidenceViewer } from './evidence-viewer';
+import { formatDate } from '../../../lib/format-time';
 
 const LOCKED_HINT = 'Kept: part of what an approval stands on';
 
@@ -43,7 +44,7 @@ export function EvidenceGallery({ items, label = 'Evidence' }: { items: Evidence
                     {p.uploadedBy.name}
                   </Typography>
                   <Typography variant="caption" color="text.secondary" noWrap component="p">
-                    {new Date(p.uploadedAt).toLocaleDateString()} · {formatBytes(p.size)}
+                    {formatDate(p.uploadedAt)} · {formatBytes(p.size)}
                   </Typography>
                   {p.addedAfterApproval && (
                     <Typography variant="caption" color="warning.main" noWrap component="p">

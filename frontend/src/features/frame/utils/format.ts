@@ -18,4 +18,4 @@ export const showSigned = (mm: number, unit: LengthUnit = 'mm', digits?: number)
 
 export const showTarget = (t: JudgedTarget) => `${t.value} ${isLengthUnit(t.unit) ? UNIT_LABELS[t.unit] : t.unit}`;
 
-export const showDate = (iso: string) => new Date(iso).toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' });
+export { formatDateTime as showDate } from '../../../lib/format-time';

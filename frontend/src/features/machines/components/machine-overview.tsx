@@ -6,6 +6,7 @@ import { useMe } from '../../auth/api/get-me';
 import { canRecord } from '../../auth/types';
 import { KIND_LABELS, type Machine } from '../types';
 import { EditMachineDialog } from './edit-machine-dialog';
+import { formatDateTime } from '../../../lib/format-time';
 
 /** The machine's specification at a glance; recorders edit it. */
 export function MachineOverview({ machine }: { machine: Machine }) {
@@ -16,7 +17,7 @@ export function MachineOverview({ machine }: { machine: Machine }) {
     ['Kind', KIND_LABELS[machine.kind]],
     ['Work area to cover', `${machine.workAreaInLengthUnit.x} × ${machine.workAreaInLengthUnit.y} ${UNIT_LABELS[machine.lengthUnit]}`],
     ['Target set', machine.targetSet.name],
-    ['Last activity', new Date(machine.lastActivityAt).toLocaleString()],
+    ['Last activity', formatDateTime(machine.lastActivityAt)],
   ];
   return (
     <Paper sx={{ p: 2.5 }}>

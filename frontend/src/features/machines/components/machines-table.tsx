@@ -6,6 +6,7 @@ import { paths } from '../../../config/paths';
 import { KIND_LABELS, STATE_LABELS, type MachineListItem, type MachineState } from '../types';
 import { MachineStateChip } from './machine-state-chip';
 import { sortMachines, type MachineSort } from '../utils/sort-machines';
+import { formatDateTime } from '../../../lib/format-time';
 
 const STATES = Object.keys(STATE_LABELS) as MachineState[];
 const COLUMNS: { key: MachineSort['by']; label: string; narrow: boolean }[] = [
@@ -18,7 +19,7 @@ const COLUMNS: { key: MachineSort['by']; label: string; narrow: boolean }[] = [
 // Columns that give way on a phone: the kind moves under the name, the rest waits for a wider screen.
 const wideOnly = { display: { xs: 'none', sm: 'table-cell' } };
 
-const showTime = (iso: string) => new Date(iso).toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' });
+const showTime = formatDateTime;
 
 /** Every machine file, sortable by any column and filtered by state (e.g. "Re-check due") or name. */
 export function MachinesTable({ machines }: { machines: MachineListItem[] }) {

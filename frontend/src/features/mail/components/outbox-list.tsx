@@ -7,6 +7,7 @@ import { ErrorState } from '../../../components/states/error-state';
 import { EmptyState } from '../../../components/states/empty-state';
 import { useOutbox } from '../api/get-outbox';
 import { attachmentUrl } from '../types';
+import { formatDateTime } from '../../../lib/format-time';
 
 // Links inside a message, made clickable so a set-your-password link can be followed here.
 const URL_RE = /(https?:\/\/[^\s]+)/g;
@@ -34,7 +35,7 @@ export function OutboxList() {
             <Stack sx={{ minWidth: 0 }}>
               <Typography sx={{ fontWeight: 600 }}>{m.subject}</Typography>
               <Typography variant="body2" color="text.secondary" noWrap>
-                to {m.to.join(', ')} · {new Date(m.receivedAt).toLocaleString()}
+                to {m.to.join(', ')} · {formatDateTime(m.receivedAt)}
                 {m.attachments.length > 0 && ` · ${m.attachments.length} attachment${m.attachments.length > 1 ? 's' : ''}`}
               </Typography>
             </Stack>

@@ -2,6 +2,7 @@ import { useState } from 'react';
 import { Alert, Button, Dialog, DialogActions, DialogContent, DialogTitle, MenuItem, Stack, TextField, Typography } from '@mui/material';
 import { ROLE_LABELS, type Role } from '../../auth/types';
 import { useAddPerson } from '../api/add-person';
+import { formatDateTime } from '../../../lib/format-time';
 
 const ROLES: Role[] = ['builder', 'technician', 'owner', 'viewer', 'admin'];
 
@@ -29,7 +30,7 @@ export function AddPersonDialog({ open, onClose }: { open: boolean; onClose: () 
             <Alert severity="success">{done.person.name} is a member as {ROLE_LABELS[done.person.role].toLowerCase()}.</Alert>
             {done.invitationSent ? (
               <Typography>
-                We have e-mailed {done.person.email} a link to choose their password. It works once, until {new Date(done.invitationExpiresAt).toLocaleString()}.
+                We have e-mailed {done.person.email} a link to choose their password. It works once, until {formatDateTime(done.invitationExpiresAt)}.
               </Typography>
             ) : (
               <Alert severity="warning">

@@ -15,6 +15,7 @@ import { SweepResult } from './sweep-result';
 import { EditSweepDetailsDialog } from './edit-sweep-details-dialog';
 import { UnreadableRecord } from '../../../components/unreadable-record';
 import { ResponsiveTable } from '../../../components/table/responsive-table';
+import { formatDateTime } from '../../../lib/format-time';
 
 /** The straightness target as a zone of its full width, in the chart's unit. */
 const targetZone = (t: { value: number; unit: string } | undefined, unit: Parameters<typeof fromMm>[1]) =>
@@ -23,7 +24,7 @@ const targetZone = (t: { value: number; unit: string } | undefined, unit: Parame
 /** How long a deleted sweep can be brought back before the delete is sent. */
 const UNDO_MS = 8000;
 
-const when = (s: { takenAt: string }) => new Date(s.takenAt).toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' });
+const when = (s: { takenAt: string }) => formatDateTime(s.takenAt);
 
 /**
  * The rail's sweeps, newest first, a page at a time; pick two to overlay, open one to see its

@@ -5,6 +5,7 @@ import { showInTargetUnit, showLength, showTarget } from '../utils/display';
 import { CheckStatusChip } from './check-status-chip';
 import { SweepPreview } from './sweep-preview';
 import { UnreadableRecord } from '../../../components/unreadable-record';
+import { formatDateTime } from '../../../lib/format-time';
 
 /** A saved sweep: the server's fit, the residual at each station, and the verdict beside its target. */
 export function SweepResult({ sweep, title = 'Saved sweep' }: { sweep: Sweep; title?: string }) {
@@ -32,7 +33,7 @@ export function SweepResult({ sweep, title = 'Saved sweep' }: { sweep: Sweep; ti
         <CheckStatusChip status={sweep.status} size="medium" />
       </Box>
       <Typography color="text.secondary" sx={{ mb: 2 }}>
-        {PHASE_LABELS[sweep.phase]} · {sweep.face === 'top' ? 'top face' : 'side face'} · {new Date(sweep.takenAt).toLocaleString()} · {sweep.takenBy}
+        {PHASE_LABELS[sweep.phase]} · {sweep.face === 'top' ? 'top face' : 'side face'} · {formatDateTime(sweep.takenAt)} · {sweep.takenBy}
         {sweep.instrument ? ` · ${sweep.instrument}` : ''}
         {sweep.resolution !== null ? ` (${sweep.resolution} ${UNIT_LABELS[unit]})` : ''}
         {sweep.temperatureC !== null ? ` · ${sweep.temperatureC} °C` : ''}

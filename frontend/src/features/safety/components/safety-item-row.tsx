@@ -2,6 +2,7 @@ import { useEffect, useState } from 'react';
 import { Box, Chip, TextField, ToggleButton, ToggleButtonGroup, Typography } from '@mui/material';
 import { palette } from '../../../theme/theme';
 import { ANSWER_LABELS, type SafetyAnswer, type WalkItem } from '../types';
+import { formatDateTime } from '../../../lib/format-time';
 
 const COLOURS: Record<SafetyAnswer, string> = { yes: palette.within, no: palette.outside, na: palette.notStarted };
 
@@ -25,7 +26,7 @@ export function SafetyItemRow({ item, canAnswer, busy, onAnswer }: { item: WalkI
             {!item.builtIn && <Chip size="small" label="Workshop item" variant="outlined" sx={{ ml: 1, height: 20 }} />}
           </Typography>
           <Typography variant="body2" color="text.secondary" sx={{ mt: 0.25 }}>
-            {a ? `${ANSWER_LABELS[a.answer]} · ${a.answeredBy.name} · ${new Date(a.answeredAt).toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' })}` : 'Not answered yet'}
+            {a ? `${ANSWER_LABELS[a.answer]} · ${a.answeredBy.name} · ${formatDateTime(a.answeredAt)}` : 'Not answered yet'}
           </Typography>
           {isNo && <Chip size="small" label="Blocks approval" sx={{ mt: 0.5, bgcolor: palette.outside, color: '#fff', fontWeight: 600 }} />}
         </Box>

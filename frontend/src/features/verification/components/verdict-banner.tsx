@@ -4,6 +4,7 @@ import GppBadOutlined from '@mui/icons-material/GppBadOutlined';
 import HelpOutlineOutlined from '@mui/icons-material/HelpOutlineOutlined';
 import { palette } from '../../../theme/theme';
 import type { PublicVerification } from '../types';
+import { formatDate } from '../../../lib/format-time';
 
 const HEADLINES: Record<PublicVerification['status'], string> = {
   valid: 'Signature valid · record unchanged',
@@ -27,7 +28,7 @@ export function VerdictBanner({ v }: { v: PublicVerification }) {
         <Typography sx={{ mt: 0.5 }}>{v.message}</Typography>
         {!v.stands && v.reopened && (
           <Typography sx={{ mt: 1, fontWeight: 600, color: '#4d2f78' }}>
-            This approval no longer stands: the machine was reopened for changes on {new Date(v.reopened.at).toLocaleDateString(undefined, { dateStyle: 'medium' })}
+            This approval no longer stands: the machine was reopened for changes on {formatDate(v.reopened.at)}
             {v.reopened.by ? ` by ${v.reopened.by}` : ''}. Reason given: “{v.reopened.reason?.replace(/[.\s]+$/, '')}”.
           </Typography>
         )}
