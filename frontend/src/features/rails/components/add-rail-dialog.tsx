@@ -1,34 +1,30 @@
-import { useState } from 'react';
 import { Alert, Button, Dialog, DialogActions, DialogContent, DialogTitle } from '@mui/material';
+import { useForm } from 'react-hook-form';
+import { zodResolver } from '@hookform/resolvers/zod';
 import { useCreateRail } from '../api/create-rail';
 import type { Rail } from '../types';
-import { emptyRailForm, RailFormFields, railFormErrors, toRailInput } from './rail-form-fields';
+import { RailFormFields } from './rail-form-fields';
+import { emptyRailForm, railFormSchema, toRailInput, type RailFormValues } from './rail-form-schema';
 
 export function AddRailDialog({ machineId, rails, open, onClose }: { machineId: string; rails: Rail[]; open: boolean; onClose: () => void }) {
-  const [values, setValues] = useState(emptyRailForm);
-  const [tried, setTried] = useState(false);
+  const form = useForm<RailFormValues>({ defaultValues: emptyRailForm, resolver: zodResolver(railFormSchema) });
   const create = useCreateRail(machineId);
   const close = () => {
-    setValues(emptyRailForm);
-    setTried(false);
+    form.reset(emptyRailForm);
     create.reset();
     onClose();
   };
-  const submit = () => {
-    setTried(true);
-    if (Object.keys(railFormErrors(values)).length) return;
-    create.mutate(toRailInput(values), { onSuccess: close });
-  };
+  const submit = form.handleSubmit((values) => create.mutate(toRailInput(values), { onSuccess: close }));
   return (
     <Dialog open={open} onClose={close} fullWidth maxWidth="sm">
       <DialogTitle>Add rail</DialogTitle>
       <DialogContent>
         {create.error && <Alert severity="error" sx={{ mb: 1 }}>{create.error.message}</Alert>}
-        <RailFormFields values={values} onChange={setValues} others={rails} showErrors={tried} />
+        <RailFormFields form={form} others={rails} />
       </DialogContent>
       <DialogActions>
         <Button onClick={close}>Cancel</Button>
-        <Button variant="contained" onClick={submit} disabled={create.isPending}>
+        <Button variant="contained" onClick={submit} disabled={create.isPending || form.formState.isSubmitting}>
           Add rail
         </Button>
       </DialogActions>
