@@ -98,7 +98,12 @@ async function demoIds(page: Page) {
   const axes: { id: string }[] = await (await page.request.get(`/api/machines/${plasma.id}/axes`)).json();
   const patterns: { id: string }[] = await (await page.request.get(`/api/machines/${plasma.id}/hole-patterns`)).json();
   expect(rails.length && axes.length && patterns.length).toBeTruthy();
-  return { machine: plasma.id, rail: rails[0].id, axis: axes[0].id, pattern: patterns[0].id };
+  // The approved demo router's certificate address, which anyone holding the paper opens.
+  const router = machines.find((m) => m.name === 'Small router')!;
+  const approvals: { verificationPath: string | null }[] = await (await page.request.get(`/api/machines/${router.id}/approvals`)).json();
+  const verify = approvals.find((a) => a.verificationPath)?.verificationPath;
+  expect(verify).toMatch(/^\/verify\//);
+  return { machine: plasma.id, rail: rails[0].id, axis: axes[0].id, pattern: patterns[0].id, verify: verify! };
 }
 
 function visitsFor(ids: Awaited<ReturnType<typeof demoIds>>): Visit[] {
@@ -144,7 +149,7 @@ for (const size of SIZES) {
 
     // The pages before sign-in first, on a context of their own.
     const guest = await (await browser.newContext({ viewport: { width: size.width, height: size.height } })).newPage();
-    for (const [name, path] of [['sign-in', '/sign-in'], ['forgot-password', '/forgot-password']]) {
+    for (const [name, path] of [['sign-in', '/sign-in'], ['forgot-password', '/forgot-password'], ['verify', ids.verify]]) {
       await guest.goto(path);
       await settled(guest);
       await check(guest, `${size.name}-${name}`);
