@@ -1,57 +1,28 @@
-import { Type } from 'class-transformer';
-import { IsObject, IsString, Matches, MaxLength, ValidateIf, ValidateNested } from 'class-validator';
-import { DriveDto } from './drive.dto.js';
-import { Finite, OptionalFinite } from './validators.js';
-import { Optional } from '../../common/optional.js';
-import { LengthUnitField } from '../../common/unit-fields.js';
-import type { LengthUnit } from '../../engine/units.js';
+import type { Type } from '@nestjs/common';
+import { PartialType } from '@nestjs/mapped-types';
+import { ValidateIf } from 'class-validator';
+import { CreateAxisDto } from './create-axis.dto.js';
 
-/** Every field optional; a drive given replaces the whole drive. null clears maxFeedRate or measuredTravelMm. */
-export class UpdateAxisDto {
-  @Optional()
-  @IsString({ message: 'name must be text such as X, Y1 or Z' })
-  @Matches(/\S/, { message: 'name must not be empty' })
-  @MaxLength(40, { message: 'name must be at most 40 characters' })
-  name?: string;
+/** null clears a field that may be empty; absent leaves it as it is. */
+const Clearable = () => ValidateIf((_: object, v: unknown) => v !== null && v !== undefined);
+type Clearing = 'maxFeedRate' | 'measuredTravel' | 'measuredTravelMm';
+// Typed so that the clearable fields below may be null.
+const Base: Type<Partial<Omit<CreateAxisDto, Clearing>> & { [K in Clearing]?: number | null }> = PartialType(CreateAxisDto, { skipNullProperties: false });
 
-  /** The unit the axis is set up in; lengths sent with it are in it, and the axis shows its values in it. */
-  @LengthUnitField()
-  lengthUnit?: LengthUnit;
-
-  @Optional()
-  @IsObject({ message: 'drive must be an object {type, …}' })
-  @ValidateNested()
-  @Type(() => DriveDto)
-  drive?: DriveDto;
-
-  @OptionalFinite('motorStepsPerRev')
-  motorStepsPerRev?: number;
-
-  @OptionalFinite('microsteps')
-  microsteps?: number;
-
-  @OptionalFinite('gearRatio')
-  gearRatio?: number;
-
-  @OptionalFinite('stepsPerMm')
-  stepsPerMm?: number;
-
-  @ValidateIf((_, v) => v !== null && v !== undefined)
-  @Finite('maxFeedRate')
+/**
+ * Every field of a new axis, each optional, with its rules and messages; a drive given replaces
+ * the whole drive. null clears maxFeedRate, measuredTravel or measuredTravelMm (a field redeclared
+ * here keeps the create DTO's number rule, its own condition replacing the inherited ones).
+ */
+export class UpdateAxisDto extends Base {
+  @Clearable()
   maxFeedRate?: number | null;
 
   /** Travel measured end to end, in lengthUnit; null clears it. */
-  @ValidateIf((_, v) => v !== null && v !== undefined)
-  @Finite('measuredTravel')
+  @Clearable()
   measuredTravel?: number | null;
 
   /** The same in mm whatever lengthUnit says (older callers); not together with measuredTravel. */
-  @ValidateIf((_, v) => v !== null && v !== undefined)
-  @Finite('measuredTravelMm')
+  @Clearable()
   measuredTravelMm?: number | null;
-
-  @Optional()
-  @IsString({ message: 'notes must be text' })
-  @MaxLength(5000, { message: 'notes must be at most 5000 characters' })
-  notes?: string;
 }
