@@ -9,8 +9,17 @@ type TextName = Exclude<keyof RailFormValues, 'lengthUnit' | 'axis' | 'profileSi
 
 /** The rail's fields, each with its error under it once the form has been sent (react-hook-form with the zod schema). */
 export function RailFormFields({ form, others }: { form: UseFormReturn<RailFormValues>; others: Rail[] }) {
-  const { control, formState, watch } = form;
+  const { control, formState, watch, trigger } = form;
   const errors = formState.errors;
+  // Once the form has been sent, every change checks the whole form again: the checks run across
+  // fields (the first hole against the length, every length against the unit).
+  const recheck = () => {
+    if (formState.isSubmitted) void trigger();
+  };
+  const change = (onChange: (value: string) => void) => (value: string) => {
+    onChange(value);
+    recheck();
+  };
   const unitLabel = UNIT_LABELS[watch('lengthUnit')];
   const unit = { input: { endAdornment: <InputAdornment position="end">{unitLabel}</InputAdornment> }, htmlInput: { inputMode: 'decimal' as const } };
   const text = (name: TextName, label: string, hint: string | undefined, extra: { required?: boolean; autoFocus?: boolean; withUnit?: boolean } = {}) => (
@@ -21,7 +30,7 @@ export function RailFormFields({ form, others }: { form: UseFormReturn<RailFormV
         <TextField
           label={label}
           value={field.value}
-          onChange={field.onChange}
+          onChange={(e) => change(field.onChange)(e.target.value)}
           onBlur={field.onBlur}
           inputRef={field.ref}
           required={extra.required}
@@ -46,14 +55,14 @@ export function RailFormFields({ form, others }: { form: UseFormReturn<RailFormV
               freeSolo
               options={['X', 'Y', 'Y1', 'Y2', 'Z']}
               inputValue={field.value}
-              onInputChange={(_, axis) => field.onChange(axis)}
+              onInputChange={(_, axis) => change(field.onChange)(axis)}
               renderInput={(p) => <TextField {...p} label="Axis" required error={!!errors.axis} helperText={errors.axis?.message ?? 'X, Y1, Y2, Z…'} />}
               sx={{ minWidth: 160 }}
             />
           )}
         />
       </Stack>
-      <Controller name="lengthUnit" control={control} render={({ field }) => <UnitFamilySelect family="length" value={field.value} onChange={field.onChange} label="Unit of the rail's dimensions" />} />
+      <Controller name="lengthUnit" control={control} render={({ field }) => <UnitFamilySelect family="length" value={field.value} onChange={change(field.onChange)} label="Unit of the rail's dimensions" />} />
       <Stack direction={{ xs: 'column', sm: 'row' }} spacing={1.5}>
         {text('length', 'Length', undefined, { required: true, withUnit: true })}
         <Controller
