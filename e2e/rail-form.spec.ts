@@ -1,8 +1,11 @@
 import { expect, test } from '@playwright/test';
-import { DEMO, signInAs } from './support/session';
+import { DEMO, signInAs, snap } from './support/session';
 import { newMachineWithRail } from './support/machine-with-rail';
 
 test.describe('rail form', () => {
+  // A phone: the form's fields stack and each message sits under its own field.
+  test.use({ viewport: { width: 390, height: 844 } });
+
   test('each problem shows under its own field, goes as it is fixed, and a decimal comma is read', async ({ page }) => {
     await signInAs(page, DEMO.builder);
     await newMachineWithRail(page, `Rail form table ${Date.now()}`, { lengthMm: 600, holePitchMm: 100, firstHoleMm: 50 });
@@ -14,6 +17,7 @@ test.describe('rail form', () => {
     await edit.getByRole('button', { name: 'Save rail' }).click();
     await expect(edit.getByText('Give the rail a label, e.g. "Y1 (left)"')).toBeVisible();
     await expect(edit.getByText('Between 10 and 20 000 mm')).toBeVisible();
+    await snap(page, 'rail-form-problems-phone');
     // The first hole (50 mm) is beyond a 5 mm rail only once the length is at least 10 mm: not flagged yet.
     await expect(edit.getByText("From the rail's start to the first hole centre")).toBeVisible();
     await edit.getByLabel('Label').fill('Y1 (left side)');

@@ -82,6 +82,9 @@ test.describe('pasted and uploaded tables', () => {
     expect(value('1e999')).toBe('"1e999" is too large');
     expect(normaliseCell('\u22120,50')).toBe('-0.50');
     expect(normaliseCell('+3')).toBe('3');
+    // One number pasted into a cell stays one cell.
+    expect(pastedHeights('0,5')).toEqual(['0.5']);
+    expect(pastedHeights('0,5\t0,75')).toEqual(['0.5', '0.75']);
     expect(readRows('a;"b;c"\n\n1;2').map((r) => [r.line, r.cells])).toEqual([[1, ['a', 'b;c']], [3, ['1', '2']]]);
     expect(cellProblem({ line: 7, cells: [] }, 0, '"x" is not a number')).toBe('Line 7, column 1: "x" is not a number');
   });

@@ -10,6 +10,7 @@ import { WaitingEntries } from '../../../components/offline/waiting-entries';
 import type { Axis, PositioningRun } from '../types';
 import { errorText } from '../utils/format';
 import { parseRunsCsv, splitRows } from '../utils/parse-grid';
+import { parseNumberCell } from '../../../lib/tabular-input';
 import { pasteBlock, resize, rowLabel, type RowOrder } from '../utils/run-grid';
 import { numberOf } from './number-input';
 import { UnitFamilySelect } from '../../../components/form/unit-select';
@@ -95,7 +96,8 @@ export function PositioningGrid({ axis, onRecorded }: { axis: Axis; onRecorded: 
 
   const onPaste = (r: number, c: number) => (e: React.ClipboardEvent) => {
     const text = e.clipboardData.getData('text');
-    if (!/[\t\n;,]/.test(text.trim())) return;
+    // A single number ("0,5" too) goes into the cell as typed; a block fills the grid.
+    if (!/[\t\n;,]/.test(text.trim()) || parseNumberCell(text).ok) return;
     e.preventDefault();
     const block = splitRows(text);
     if (r === -1) {
