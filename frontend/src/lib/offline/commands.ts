@@ -3,7 +3,7 @@ import { ApiError, apiFetch, onNoAnswer } from '../api-client';
 import { noteNoAnswer } from './connection';
 import { newClientId } from '../client-id';
 import { setSessionOwner, whenSignedInAs } from './session-owner';
-import { sendForm, type CommandForm } from './send-form';
+import type { CommandForm } from './send-form';
 
 /**
  * A recording made at the machine, as a mutation that survives a lost connection and a reload:
@@ -39,7 +39,9 @@ export async function sendCommand<T>(v: CommandVariables): Promise<T> {
   for (;;) {
     await whenSignedInAs(v.ownerId);
     try {
-      if (v.form) return await sendForm<T>(v.path, v.key, v.form, noteNoAnswer);
+      // Photos and files are the rare entry: their sender is loaded when one is sent, keeping
+      // it off the sign-in page's download.
+      if (v.form) return await (await import('./send-form')).sendForm<T>(v.path, v.key, v.form, noteNoAnswer);
       return await apiFetch<T>(v.path, { method: v.method, json: v.body ?? (v.method === 'DELETE' ? undefined : {}), headers: { 'Idempotency-Key': v.key } });
     } catch (err) {
       if (!(err instanceof ApiError) || err.status !== 401) throw err;
