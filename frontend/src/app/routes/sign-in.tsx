@@ -9,7 +9,9 @@ export function SignInRoute() {
   const navigate = useNavigate();
   const me = useMe();
   const next = params.get('next')?.startsWith('/') ? params.get('next')! : paths.home;
-  if (me.data) return <Navigate to={next} replace />;
+  // Signed in already: on to the page asked for. Not while who is signed in is being asked again
+  // (a session kept on the device may have ended): the form stays put, with whatever is typed in it.
+  if (me.data && !me.isFetching) return <Navigate to={next} replace />;
   return (
     <Box sx={{ minHeight: '100vh', display: 'grid', placeItems: 'center', p: 2, background: 'linear-gradient(160deg, #0f2f2c 0%, #1d4f4a 55%, #3f7a73 100%)' }}>
       <Box sx={{ width: '100%', maxWidth: 420 }}>
