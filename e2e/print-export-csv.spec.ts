@@ -2,6 +2,7 @@ import { expect, test, type Page } from '@playwright/test';
 import { readFileSync } from 'node:fs';
 import Papa from 'papaparse';
 import { DEMO, signInAs } from './support/session';
+import { demoPlasma } from './support/demo-plasma';
 
 // "Download CSV" beside a rail's sweeps, an axis's trials and runs and a machine's bed grids: the
 // file parses as CSV, names each column's unit, gives times in ISO 8601 with their zone, and
@@ -26,17 +27,9 @@ async function download(page: Page, open: () => Promise<void>): Promise<{ name: 
 const close = (a: string, b: number) => expect(Math.abs(Number(a) - b)).toBeLessThanOrEqual(1e-9 * Math.max(1, Math.abs(b)));
 const sameSecond = (csv: string, iso: string) => expect(csv).toBe(new Date(iso).toISOString().replace(/\.\d{3}Z$/, 'Z'));
 
-async function plasma(page: Page) {
-  const machines: { id: string; name: string }[] = await (await page.request.get('/api/machines')).json();
-  const m = machines.find((x) => x.name === 'Big plasma table')!;
-  const rails: { id: string; label: string }[] = await (await page.request.get(`/api/machines/${m.id}/rails`)).json();
-  const axes: { id: string; name: string }[] = await (await page.request.get(`/api/machines/${m.id}/axes`)).json();
-  return { id: m.id, rail: rails.find((r) => r.label === 'Y2 (right)')!, axis: axes.find((a) => a.name === 'X')! };
-}
-
 test('sweeps of a rail: one row per reading, in the newest sweep\'s units', async ({ page }) => {
   await signInAs(page, DEMO.viewer);
-  const m = await plasma(page);
+  const m = await demoPlasma(page);
   await page.goto(`/machines/${m.id}/rails/${m.rail.id}`);
   const file = await download(page, () => page.getByRole('link', { name: `Download CSV: Sweeps of rail ${m.rail.label}` }).click());
   expect(file.name).toBe('rail-y2-right-sweeps.csv');
@@ -67,7 +60,7 @@ test('sweeps of a rail: one row per reading, in the newest sweep\'s units', asyn
 
 test('travel trials and repeat-and-reverse runs of an axis', async ({ page }) => {
   await signInAs(page, DEMO.technician);
-  const m = await plasma(page);
+  const m = await demoPlasma(page);
   await page.goto(`/machines/${m.id}/axes/${m.axis.id}`);
 
   const pick = (item: string) => async () => {
@@ -111,7 +104,7 @@ test('travel trials and repeat-and-reverse runs of an axis', async ({ page }) =>
 
 test('bed grids of a machine', async ({ page }) => {
   await signInAs(page, DEMO.owner);
-  const m = await plasma(page);
+  const m = await demoPlasma(page);
   await page.goto(`/machines/${m.id}?tab=frame`);
   const file = await download(page, () => page.getByRole('link', { name: 'Download CSV: Bed grids of Big plasma table' }).click());
   expect(file.name).toBe('big-plasma-table-bed-grids.csv');

@@ -1,17 +1,10 @@
 import { expect, test, type Page } from '@playwright/test';
 import path from 'node:path';
 import { DEMO, signInAs, snap } from './support/session';
+import { demoPlasma } from './support/demo-plasma';
 
 // The machine file, a rail and an axis printed on paper: no app bar, navigation, buttons or
 // entry forms; the results, their tables and charts kept. A PDF of each lands in e2e/screenshots/.
-
-async function plasma(page: Page) {
-  const machines: { id: string; name: string }[] = await (await page.request.get('/api/machines')).json();
-  const m = machines.find((x) => x.name === 'Big plasma table')!;
-  const rails: { id: string; label: string }[] = await (await page.request.get(`/api/machines/${m.id}/rails`)).json();
-  const axes: { id: string; name: string }[] = await (await page.request.get(`/api/machines/${m.id}/axes`)).json();
-  return { id: m.id, rail: rails.find((r) => r.label === 'Y2 (right)')!, axis: axes.find((a) => a.name === 'X')! };
-}
 
 /** Chrome of the app and every control: none of it shows on paper. */
 async function expectNoControls(page: Page) {
@@ -29,7 +22,7 @@ async function toPdf(page: Page, name: string) {
 
 test('a rail printed: its results and charts, no sweep form', async ({ page }) => {
   await signInAs(page, DEMO.builder);
-  const m = await plasma(page);
+  const m = await demoPlasma(page);
   await page.goto(`/machines/${m.id}/rails/${m.rail.id}`);
   await expect(page.getByRole('button', { name: `Print rail ${m.rail.label}` })).toBeVisible();
   // On screen a builder has the sweep form.
@@ -49,7 +42,7 @@ test('a rail printed: its results and charts, no sweep form', async ({ page }) =
 
 test('an axis printed: trials, runs and backlash results, no entry grids', async ({ page }) => {
   await signInAs(page, DEMO.technician);
-  const m = await plasma(page);
+  const m = await demoPlasma(page);
   await page.goto(`/machines/${m.id}/axes/${m.axis.id}`);
   await expect(page.getByRole('button', { name: `Print axis ${m.axis.name}` })).toBeVisible();
   // On screen a technician has the entry grids.
@@ -73,7 +66,7 @@ test('an axis printed: trials, runs and backlash results, no entry grids', async
 
 test('the machine file printed: the readiness board with its section named', async ({ page }) => {
   await signInAs(page, DEMO.owner);
-  const m = await plasma(page);
+  const m = await demoPlasma(page);
   await page.goto(`/machines/${m.id}?tab=readiness`);
   await expect(page.getByRole('table', { name: 'Required checks' })).toBeVisible();
   await expect(page.getByRole('button', { name: 'Print readiness of Big plasma table' })).toBeVisible();
