@@ -29,10 +29,11 @@ export class EnginePool implements OnModuleInit, OnModuleDestroy {
 
   constructor(private readonly adapterHost: HttpAdapterHost) {}
 
-  /** Whether large tasks leave the event loop in this process. */
-  get threaded(): boolean {
-    return existsSync(this.workerFile);
-  }
+  /**
+   * Whether large tasks leave the event loop in this process: asked once, as every response asks
+   * it (a file-system call per request showed in profiles of short reads).
+   */
+  readonly threaded = existsSync(this.workerFile);
 
   async run<K extends EngineTask['kind']>(task: EngineTask & { kind: K }): Promise<EngineTaskResult<K>> {
     if (taskSize(task) <= INLINE_MAX_POINTS || !this.threaded) return runEngineTask(task) as EngineTaskResult<K>;
