@@ -1,8 +1,8 @@
 import { useEffect, type ReactNode } from 'react';
 import { CssBaseline, ThemeProvider } from '@mui/material';
-import { PersistQueryClientProvider, persistQueryClientSave, type PersistQueryClientOptions } from '@tanstack/react-query-persist-client';
+import { PersistQueryClientProvider, type PersistQueryClientOptions } from '@tanstack/react-query-persist-client';
 import { queryClient } from '../lib/query-client';
-import { persister, persisterNow, PERSIST_MAX_AGE_MS } from '../lib/offline/persister';
+import { persister, PERSIST_MAX_AGE_MS } from '../lib/offline/persister';
 import { COMMAND_KEY, registerCommands, resumeKeptCommands } from '../lib/offline/commands';
 import { trackSessionOwner } from '../lib/offline/track-session-owner';
 import { isKeptQuery } from '../lib/offline/kept-queries';
@@ -25,17 +25,9 @@ const dehydrateOptions: PersistQueryClientOptions['dehydrateOptions'] = {
   shouldDehydrateMutation: (m) => m.state.status === 'pending' && m.options.mutationKey?.[0] === COMMAND_KEY[0],
 };
 
-/** An entry typed or changing state is saved at once, not with the next regular save. */
-function saveEntriesAtOnce(): () => void {
-  return queryClient.getMutationCache().subscribe((event) => {
-    if (event.mutation?.options.mutationKey?.[0] !== COMMAND_KEY[0]) return;
-    void persistQueryClientSave({ queryClient, persister: persisterNow, buster: KEPT_FORMAT, dehydrateOptions });
-  });
-}
-
 export function AppProviders({ children }: { children: ReactNode }) {
   useEffect(() => {
-    const stops = [trackSessionOwner(queryClient, authKeys.me), followSessionEnd(queryClient, authKeys.me), saveEntriesAtOnce()];
+    const stops = [trackSessionOwner(queryClient, authKeys.me), followSessionEnd(queryClient, authKeys.me)];
     return () => stops.forEach((stop) => stop());
   }, []);
   return (
