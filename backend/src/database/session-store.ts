@@ -1,6 +1,7 @@
 import connectPgSimple from 'connect-pg-simple';
 import expressSession from 'express-session';
 import type pg from 'pg';
+import type { SessionUser } from '../auth/session-user.js';
 import type { Role } from './schema/users.js';
 
 /**
@@ -9,13 +10,8 @@ import type { Role } from './schema/users.js';
  */
 export const LOADED_USER = 'loadedUser';
 
-export interface LoadedSessionUser {
-  id: string;
-  email: string;
-  name: string;
-  role: Role;
-  workshopId: string;
-  workshopName: string;
+/** The signed-in person as handlers see them, and since when their sessions count. */
+export interface LoadedSessionUser extends SessionUser {
   /** Sessions signed in before this moment (ms since the epoch) no longer count. */
   sessionsValidFrom: number;
 }
