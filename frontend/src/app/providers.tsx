@@ -7,7 +7,7 @@ import { COMMAND_KEY, registerCommands, resumeKeptCommands } from '../lib/offlin
 import { trackSessionOwner } from '../lib/offline/track-session-owner';
 import { isKeptQuery } from '../lib/offline/kept-queries';
 import { followSessionEnd } from './session-end';
-import { authKeys } from '../features/auth/api/get-me';
+import { authKeys } from '../lib/session/get-me';
 import { theme } from '../theme/theme';
 import { ErrorBoundary } from '../components/states/error-boundary';
 

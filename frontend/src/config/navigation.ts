@@ -5,7 +5,7 @@ import TuneOutlined from '@mui/icons-material/TuneOutlined';
 import GroupOutlined from '@mui/icons-material/GroupOutlined';
 import MarkEmailReadOutlined from '@mui/icons-material/MarkEmailReadOutlined';
 import HistoryOutlined from '@mui/icons-material/HistoryOutlined';
-import type { Role } from '../features/auth/types';
+import type { Role } from '../lib/session/user';
 import { paths } from './paths';
 
 export interface NavItem {

@@ -1,6 +1,6 @@
 import { useNavigate, useSearchParams } from 'react-router-dom';
 import { useQueryClient } from '@tanstack/react-query';
-import { authKeys } from '../../features/auth/api/get-me';
+import { authKeys } from '../../lib/session/get-me';
 import { Box, Paper, Typography } from '@mui/material';
 import { SetPasswordForm } from '../../features/auth/components/set-password-form';
 import { paths } from '../../config/paths';

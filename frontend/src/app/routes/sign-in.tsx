@@ -1,7 +1,7 @@
 import { Navigate, useNavigate, useSearchParams } from 'react-router-dom';
 import { Box, Paper, Typography } from '@mui/material';
 import { SignInForm } from '../../features/auth/components/sign-in-form';
-import { useMe } from '../../features/auth/api/get-me';
+import { useMe } from '../../lib/session/get-me';
 import { paths } from '../../config/paths';
 
 export function SignInRoute() {

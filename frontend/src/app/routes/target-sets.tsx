@@ -1,6 +1,6 @@
 import { PageHeader } from '../../components/layout/page-header';
-import { useMe } from '../../features/auth/api/get-me';
-import { canManageTargets } from '../../features/auth/types';
+import { useMe } from '../../lib/session/get-me';
+import { canManageTargets } from '../../lib/session/roles';
 import { TargetSetsPanel } from '../../features/target-sets/components/target-sets-panel';
 
 export default function TargetSetsRoute() {

@@ -1,4 +1,4 @@
-import type { MachineState } from '../machines/types';
+import type { MachineState } from '../../lib/machine-state';
 
 export type CheckStatus = 'not-started' | 'within-target' | 'outside-target' | 'waived';
 export type CheckKind =

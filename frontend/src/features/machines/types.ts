@@ -1,7 +1,7 @@
 import type { LengthUnit } from '../../lib/units';
+import type { MachineState } from '../../lib/machine-state';
 
 export type MachineKind = 'plasma' | 'router' | 'other';
-export type MachineState = 'being-built' | 'awaiting-approval' | 'ready-to-cut' | 'recheck-due' | 'reopened' | 'retired';
 
 export interface Machine {
   id: string;
@@ -33,12 +33,4 @@ export const STATE_LABELS: Record<MachineState, string> = {
   'recheck-due': 'Re-check due',
   reopened: 'Reopened for changes',
   retired: 'Retired',
-};
-
-/** One key factory for the feature; other features invalidate through it too. */
-export const machineKeys = {
-  all: ['machines'] as const,
-  list: () => [...machineKeys.all, 'list'] as const,
-  detail: (id: string) => [...machineKeys.all, 'detail', id] as const,
-  history: (id: string) => [...machineKeys.all, 'history', id] as const,
 };

@@ -1,4 +1,4 @@
-import type { Role } from '../auth/types';
+import type { Role } from '../../lib/session/user';
 
 export interface Person {
   id: string;

@@ -1,5 +1,5 @@
 import type { QueryClient } from '@tanstack/react-query';
-import { machineKeys } from '../../machines/types';
+import { machineKeys } from '../../../lib/machine-keys';
 import { approvalKeys } from '../types';
 
 /** After any change of readiness the machine's state, list and history change too. */

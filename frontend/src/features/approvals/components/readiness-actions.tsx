@@ -1,5 +1,5 @@
 import { Alert, Button, Stack } from '@mui/material';
-import type { Role } from '../../auth/types';
+import type { Role } from '../../../lib/session/user';
 import type { Readiness } from '../types';
 import { dateOnly, dateTime } from '../format';
 

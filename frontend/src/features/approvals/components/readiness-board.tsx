@@ -4,7 +4,7 @@ import { LoadingState } from '../../../components/states/loading-state';
 import { ErrorState } from '../../../components/states/error-state';
 import { EmptyState } from '../../../components/states/empty-state';
 import { ApiError } from '../../../lib/api-client';
-import { useMe } from '../../auth/api/get-me';
+import { useMe } from '../../../lib/session/get-me';
 import { useReadiness } from '../api/get-readiness';
 import { useRequestApproval } from '../api/request-approval';
 import type { BlockingCheck, BoardCheck } from '../types';

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
-import type { User } from '../types';
-import { authKeys } from './get-me';
+import type { User } from '../../../lib/session/user';
+import { authKeys } from '../../../lib/session/get-me';
 
 export interface LoginInput {
   email: string;

@@ -1,7 +1,7 @@
 import { onlineManager, useMutation, useQueryClient } from '@tanstack/react-query';
 import { api, ApiError } from '../../../lib/api-client';
 import type { QueryClient } from '@tanstack/react-query';
-import { authKeys } from './get-me';
+import { authKeys } from '../../../lib/session/get-me';
 
 /**
  * Signing out needs the server (the session lives there): without a connection the person stays

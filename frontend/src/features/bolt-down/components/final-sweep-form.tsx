@@ -1,7 +1,7 @@
 import { useRef, useState, type FormEvent, type KeyboardEvent } from 'react';
 import { positionIn, positionText } from '../utils/position-text';
 import { Alert, Box, Button, InputAdornment, MenuItem, Paper, Table, TableBody, TableCell, TableHead, TableRow, TextField, Typography } from '@mui/material';
-import { useMe } from '../../auth/api/get-me';
+import { useMe } from '../../../lib/session/get-me';
 import { UNIT_LABELS } from '../../../lib/units';
 import { useBoltTorques } from '../api/get-bolt-torques';
 import { useSaveFinalSweep, type FinalSweepInput } from '../api/save-final-sweep';

@@ -1,6 +1,6 @@
 import { Box, Paper, Typography } from '@mui/material';
-import { useMe } from '../../auth/api/get-me';
-import { canRecord } from '../../auth/types';
+import { useMe } from '../../../lib/session/get-me';
+import { canRecord } from '../../../lib/session/roles';
 import { useSubjectEvidence } from '../api/get-subject-evidence';
 import { LoadingState } from '../../../components/states/loading-state';
 import { ErrorState } from '../../../components/states/error-state';

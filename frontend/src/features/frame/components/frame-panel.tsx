@@ -1,6 +1,6 @@
 import { Stack } from '@mui/material';
-import { useMe } from '../../auth/api/get-me';
-import { canCalibrate, canRecord } from '../../auth/types';
+import { useMe } from '../../../lib/session/get-me';
+import { canCalibrate, canRecord } from '../../../lib/session/roles';
 import { BedGridSection } from './bed-grid-section';
 import { DiagonalCheckSection } from './diagonal-check-section';
 import { TestCutSection } from './test-cut-section';

@@ -1,6 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
-import { machineKeys, type Machine, type MachineKind } from '../types';
+import { machineKeys } from '../../../lib/machine-keys';
+import type { Machine, MachineKind } from '../types';
 import type { LengthUnit } from '../../../lib/units';
 
 export interface CreateMachineInput {

@@ -1,7 +1,7 @@
 import { infiniteQueryOptions, useInfiniteQuery } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
 import { historyQuery, type HistoryFilters, type HistoryPage } from '../../../components/history/history-types';
-import { machineKeys } from '../types';
+import { machineKeys } from '../../../lib/machine-keys';
 
 export const machineHistoryQueryOptions = (id: string, filters: HistoryFilters) =>
   infiniteQueryOptions({

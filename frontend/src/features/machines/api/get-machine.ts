@@ -1,6 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
-import { machineKeys, type Machine } from '../types';
+import { machineKeys } from '../../../lib/machine-keys';
+import type { Machine } from '../types';
 
 export const machineQueryOptions = (id: string) => queryOptions({ queryKey: machineKeys.detail(id), queryFn: () => api.get<Machine>(`/machines/${id}`) });
 

@@ -1,6 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
-import { machineKeys, type MachineListItem } from '../types';
+import { machineKeys } from '../../../lib/machine-keys';
+import type { MachineListItem } from '../types';
 
 export const machinesQueryOptions = () => queryOptions({ queryKey: machineKeys.list(), queryFn: () => api.get<MachineListItem[]>('/machines') });
 

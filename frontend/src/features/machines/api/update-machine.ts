@@ -1,6 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
-import { machineKeys, type Machine } from '../types';
+import { machineKeys } from '../../../lib/machine-keys';
+import type { Machine } from '../types';
 import type { CreateMachineInput } from './create-machine';
 
 export function useUpdateMachine(id: string) {

@@ -1,5 +1,6 @@
 import { Chip } from '@mui/material';
-import { STATE_LABELS, type MachineState } from '../types';
+import type { MachineState } from '../../../lib/machine-state';
+import { STATE_LABELS } from '../types';
 
 const COLORS: Record<MachineState, { bg: string; fg: string }> = {
   'being-built': { bg: '#e8eef0', fg: '#2b4650' },

@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
-import type { Role } from '../../auth/types';
+import type { Role } from '../../../lib/session/user';
 import { peopleKeys, type Person } from '../types';
 
 export function useUpdatePerson() {

@@ -1,6 +1,7 @@
 import { useState } from 'react';
 import { Alert, Button, Dialog, DialogActions, DialogContent, DialogTitle, MenuItem, Stack, TextField, Typography } from '@mui/material';
-import { ROLE_LABELS, type Role } from '../../auth/types';
+import type { Role } from '../../../lib/session/user';
+import { ROLE_LABELS } from '../../../lib/session/roles';
 import { useAddPerson } from '../api/add-person';
 import { formatDateTime } from '../../../lib/format-time';
 

@@ -1,8 +1,9 @@
 import { useState } from 'react';
 import { Alert, Box, Button, Chip, MenuItem, Paper, Select, Table, TableBody, TableCell, TableHead, TableRow } from '@mui/material';
 import PersonAddOutlined from '@mui/icons-material/PersonAddOutlined';
-import { ROLE_LABELS, type Role } from '../../auth/types';
-import { useMe } from '../../auth/api/get-me';
+import type { Role } from '../../../lib/session/user';
+import { ROLE_LABELS } from '../../../lib/session/roles';
+import { useMe } from '../../../lib/session/get-me';
 import { usePeople } from '../api/get-people';
 import { useUpdatePerson } from '../api/update-person';
 import { useResendInvitation } from '../api/resend-invitation';

@@ -9,9 +9,10 @@ import MenuIcon from '@mui/icons-material/Menu';
 import LogoutOutlined from '@mui/icons-material/LogoutOutlined';
 import { navItemsFor } from '../../config/navigation';
 import { paths } from '../../config/paths';
-import { ROLE_LABELS, type User } from '../../features/auth/types';
+import type { User } from '../../lib/session/user';
+import { ROLE_LABELS } from '../../lib/session/roles';
 import { useLogout } from '../../features/auth/api/logout';
-import { PrintStyles } from '../print/print-styles';
+import { PrintStyles } from '../../components/print/print-styles';
 
 const DRAWER_WIDTH = 232;
 

@@ -1,12 +1,4 @@
-export type Role = 'admin' | 'owner' | 'technician' | 'builder' | 'viewer';
-
-export interface User {
-  id: string;
-  email: string;
-  name: string;
-  role: Role;
-  workshop: { id: string; name: string };
-}
+import type { Role } from './user';
 
 export const ROLE_LABELS: Record<Role, string> = {
   admin: 'Admin',

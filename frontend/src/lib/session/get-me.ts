@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { ApiError, api } from '../../../lib/api-client';
-import type { User } from '../types';
+import { ApiError, api } from '../api-client';
+import type { User } from './user';
 
 export const authKeys = { me: ['auth', 'me'] as const };
 
