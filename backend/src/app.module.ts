@@ -1,5 +1,7 @@
-import { Module } from '@nestjs/common';
+import { Module, type DynamicModule } from '@nestjs/common';
 import { APP_INTERCEPTOR } from '@nestjs/core';
+import { ScheduleModule } from '@nestjs/schedule';
+import { appConfigModule } from './config/app-config.module.js';
 import { CommandTransactionInterceptor } from './database/command-transaction.interceptor.js';
 import { AuthModule } from './auth/auth.module.js';
 import { DatabaseModule } from './database/database.module.js';
@@ -24,6 +26,7 @@ import { ExportsModule } from './exports/exports.module.js';
 // One line per domain module.
 @Module({
   imports: [
+    ScheduleModule.forRoot(),
     DatabaseModule,
     EngineWorkerModule,
     AuthModule,
@@ -46,4 +49,9 @@ import { ExportsModule } from './exports/exports.module.js';
   ],
   providers: [{ provide: APP_INTERCEPTOR, useClass: CommandTransactionInterceptor }],
 })
-export class AppModule {}
+export class AppModule {
+  /** The application for one environment: ConfigModule checks it and serves it as ConfigService. */
+  static for(env: NodeJS.ProcessEnv): DynamicModule {
+    return { module: AppModule, imports: [appConfigModule(env)] };
+  }
+}

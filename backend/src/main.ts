@@ -7,7 +7,7 @@ import { seedDemoOnce } from './seed/seed-demo-once.js';
 async function main() {
   const config = loadConfig();
   await runMigrations(config.databaseOwnerUrl ?? config.databaseUrl, config.databaseUrl);
-  const app = await createApp(config);
+  const app = await createApp(process.env);
   app.enableShutdownHooks();
   if (process.env.RAILWRIGHT_SEED !== 'off') await seedDemoOnce(app);
   await app.listen({ port: config.port, host: config.host });

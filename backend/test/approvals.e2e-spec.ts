@@ -58,7 +58,7 @@ describe('readiness board, waivers, approval and certificate', () => {
       const b = await board(ws, machineId);
       expect(b.state).toBe('being-built');
       const y1 = b.checks.find((c) => c.key === 'fake-straightness:Y1');
-      expect(y1).toMatchObject({ kind: 'rail-straightness', subject: 'Rail Y1 (left)', status: 'within-target', target: { value: 20, unit: 'um' }, result: { value: 12.5, unit: 'µm' }, link: expect.stringContaining(machineId), recordType: 'fake-check', waiver: null });
+      expect(y1).toMatchObject({ kind: 'rail-straightness', subject: 'Rail Y1 (left)', status: 'within-target', target: { value: 20, unit: 'um' }, result: { value: 12.5, unit: 'µm' }, link: expect.stringContaining(machineId), recordType: 'test-cut', waiver: null });
       expect(b.blocking.some((c) => isFake(c.key))).toBe(false);
       expect(b.defaultStatement).toMatch(/ready to cut/);
     });
@@ -183,8 +183,8 @@ describe('readiness board, waivers, approval and certificate', () => {
     it('locks the records it was based on: editing them answers 409', async () => {
       const records = app.get(RecordsService);
       const y1 = fake.get(machineId, 'fake-straightness:Y1');
-      await expect(records.assertEditable('fake-check', y1.recordId!)).rejects.toMatchObject({ status: 409, message: expect.stringMatching(/approved commissioning record/) });
-      await expect(records.assertEditable('fake-check', '00000000-0000-4000-8000-000000000000')).resolves.toBeUndefined();
+      await expect(records.assertEditable('test-cut', y1.recordId!)).rejects.toMatchObject({ status: 409, message: expect.stringMatching(/approved commissioning record/) });
+      await expect(records.assertEditable('test-cut', '00000000-0000-4000-8000-000000000000')).resolves.toBeUndefined();
     });
 
     it('e-mails the whole workshop that the machine is approved, with the certificate attached', async () => {

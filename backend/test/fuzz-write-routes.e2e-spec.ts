@@ -1,7 +1,6 @@
 import type { NestFastifyApplication } from '@nestjs/platform-fastify';
 import fc from 'fast-check';
 import { randomUUID } from 'node:crypto';
-import { loadConfig } from '../src/config/config.js';
 import { createApp } from '../src/create-app.js';
 import { createTestWorkshop, type Agent, type TestWorkshop } from './helpers/test-app.js';
 import { newAxis, newMachine, screwAxis } from './helpers/drives.js';
@@ -91,7 +90,7 @@ describe('fuzz: generated bad bodies on every write route', () => {
   beforeAll(async () => {
     // Through a trusted proxy with a documentation address, so the sign-in fuzzing counts against
     // an address of its own rather than the one every other spec signs in from.
-    app = await createApp(loadConfig({ ...process.env, FRONTEND_DIST: '', TRUST_PROXY: 'true' }));
+    app = await createApp({ ...process.env, FRONTEND_DIST: '', TRUST_PROXY: 'true' });
     await app.init();
     await app.getHttpAdapter().getInstance().ready();
     ws = await createTestWorkshop(app, 'Fuzz');

@@ -23,7 +23,7 @@ describe('security headers and caching', () => {
     writeFileSync(path.join(dist, 'index.html'), '<!doctype html><title>Railwright</title><div id="root"></div><script type="module" src="/assets/index-abc123.js"></script>');
     writeFileSync(path.join(dist, 'assets', 'index-abc123.js'), 'console.log(1)');
     writeFileSync(path.join(dist, 'railwright.svg'), '<svg xmlns="http://www.w3.org/2000/svg"/>');
-    site = await createApp(loadConfig({ ...process.env, FRONTEND_DIST: dist }));
+    site = await createApp({ ...process.env, FRONTEND_DIST: dist });
     await site.init();
     await site.getHttpAdapter().getInstance().ready();
   });
@@ -92,7 +92,7 @@ describe('security headers and caching', () => {
   it('served over https, the session cookie is named with the __Host- prefix: Secure, path /, no domain', async () => {
     const w = await createTestWorkshop(api, 'Host cookie');
     // Behind a TLS-terminating proxy, as an https installation runs: the proxy says the request was https.
-    const https = await createApp(loadConfig({ ...process.env, FRONTEND_DIST: '', PUBLIC_URL: 'https://railwright.example.org', TRUST_PROXY: 'true' }));
+    const https = await createApp({ ...process.env, FRONTEND_DIST: '', PUBLIC_URL: 'https://railwright.example.org', TRUST_PROXY: 'true' });
     await https.init();
     await https.getHttpAdapter().getInstance().ready();
     try {

@@ -1,7 +1,6 @@
 import type { NestFastifyApplication } from '@nestjs/platform-fastify';
 import pg from 'pg';
 import request from 'supertest';
-import { loadConfig } from '../src/config/config.js';
 import { createApp } from '../src/create-app.js';
 import { PG_POOL } from '../src/database/database.tokens.js';
 import { createTestApp, createTestWorkshop, TEST_PASSWORD, type TestWorkshop } from './helpers/test-app.js';
@@ -13,7 +12,7 @@ import { createTestApp, createTestWorkshop, TEST_PASSWORD, type TestWorkshop } f
  * documentation addresses (RFC 5737), so no other spec's sign-ins share their counters.
  */
 async function proxiedApp(): Promise<NestFastifyApplication> {
-  const app = await createApp(loadConfig({ ...process.env, FRONTEND_DIST: '', TRUST_PROXY: 'true' }));
+  const app = await createApp({ ...process.env, FRONTEND_DIST: '', TRUST_PROXY: 'true' });
   await app.init();
   await app.getHttpAdapter().getInstance().ready();
   return app;

@@ -1,13 +1,11 @@
 import { Injectable } from '@nestjs/common';
 import type { SessionUser } from '../auth/session-user.js';
-import { loadConfig } from '../config/config.js';
+import { MailLinks } from '../mail/mail-links.js';
 import { MailService } from '../mail/mail.service.js';
 import { approvalRequestedMail, approvedMail, recheckDueMail, reopenedMail } from './approval-mails.js';
 import { ApprovalsRepository, type ApprovalRow } from './approvals.repository.js';
-import { CertificateService, verificationUrl } from './certificate/certificate.service.js';
+import { CertificateService } from './certificate/certificate.service.js';
 import type { BoardCheck } from './snapshot.js';
-
-const machineUrl = (machineId: string) => `${loadConfig().appUrl}/machines/${machineId}?tab=readiness`;
 
 /** Who hears of what: owners of a request, the whole workshop of an approval, owners and technicians of a re-check. */
 @Injectable()
@@ -16,6 +14,7 @@ export class ApprovalNotifier {
     private readonly repo: ApprovalsRepository,
     private readonly mail: MailService,
     private readonly certificates: CertificateService,
+    private readonly links: MailLinks,
   ) {}
 
   async approvalRequested(actor: SessionUser, machineName: string, machineId: string, checks: BoardCheck[]) {
@@ -24,7 +23,7 @@ export class ApprovalNotifier {
       machineName,
       workshopName: actor.workshopName,
       requestedBy: actor.name,
-      url: machineUrl(machineId),
+      url: this.links.machine(machineId, 'readiness'),
       checkCount: checks.length,
       waivedCount: checks.filter((c) => c.status === 'waived').length,
     });
@@ -41,9 +40,9 @@ export class ApprovalNotifier {
       approvedAt: approval.approvedAt,
       recordHash: approval.recordHash,
       recheckDueAt: approval.recheckDueAt,
-      url: machineUrl(approval.machineId),
+      url: this.links.machine(approval.machineId, 'readiness'),
     });
-    const check = approval.verificationToken ? `\n\nAnyone holding the certificate can check its signature, without an account:\n${verificationUrl(approval.verificationToken)}` : '';
+    const check = approval.verificationToken ? `\n\nAnyone holding the certificate can check its signature, without an account:\n${this.links.verification(approval.verificationToken)}` : '';
     await this.mail.send({
       workshopId: actor.workshopId,
       to: everyone.map((m) => m.email),
@@ -60,7 +59,7 @@ export class ApprovalNotifier {
       workshopName: approval.snapshot.workshop.name,
       approvedAt: approval.approvedAt,
       recheckDueAt: approval.recheckDueAt,
-      url: machineUrl(approval.machineId),
+      url: this.links.machine(approval.machineId, 'readiness'),
     });
     await this.mail.send({ workshopId: approval.workshopId, to: people.map((p) => p.email), subject, text });
   }
@@ -68,7 +67,7 @@ export class ApprovalNotifier {
   /** Everyone who recorded for, requested or signed the approval, and the workshop's owners. */
   async reopened(actor: SessionUser, approval: ApprovalRow, machineName: string, reason: string) {
     const people = (await this.repo.members(actor.workshopId)).filter((m) => m.role === 'owner' || m.role === 'technician' || m.role === 'builder' || m.id === approval.approvedById);
-    const { subject, text } = reopenedMail({ machineName, workshopName: actor.workshopName, reopenedBy: actor.name, reason, approvedAt: approval.approvedAt, url: machineUrl(approval.machineId) });
+    const { subject, text } = reopenedMail({ machineName, workshopName: actor.workshopName, reopenedBy: actor.name, reason, approvedAt: approval.approvedAt, url: this.links.machine(approval.machineId, 'readiness') });
     await this.mail.send({ workshopId: actor.workshopId, to: people.map((p) => p.email), subject, text });
   }
 }

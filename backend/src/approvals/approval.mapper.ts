@@ -11,11 +11,16 @@ export interface ApprovalResponse {
   statement: string;
   recheckDueAt: string;
   recheckIntervalDays: number;
+  /** The approval stands and its re-check date has passed (worked out when read, never stored). */
+  recheckDue: boolean;
   /** Path of the public verification page printed on the certificate; null before signatures were kept. */
   verificationPath: string | null;
   /** Set once the owner reopened the machine: the approval no longer stands. */
   reopened: { at: string; by: string | null; reason: string | null } | null;
 }
+
+/** A standing approval whose re-check date has passed, at `now`. */
+export const recheckDue = (a: Pick<ApprovalRow, 'endedAt' | 'recheckDueAt'>, now = new Date()): boolean => !a.endedAt && a.recheckDueAt.getTime() <= now.getTime();
 
 export const toApprovalResponse = (a: ApprovalRow): ApprovalResponse => ({
   id: a.id,
@@ -25,6 +30,7 @@ export const toApprovalResponse = (a: ApprovalRow): ApprovalResponse => ({
   statement: a.statement,
   recheckDueAt: a.recheckDueAt.toISOString(),
   recheckIntervalDays: a.recheckIntervalDays,
+  recheckDue: recheckDue(a),
   verificationPath: a.verificationToken ? `/verify/${a.verificationToken}` : null,
   reopened: a.endedAt ? { at: a.endedAt.toISOString(), by: a.endedByName, reason: a.endReason } : null,
 });
@@ -66,6 +72,7 @@ export const toPublicVerificationResponse = (a: ApprovalRow, v: Verification) =>
   statement: a.statement,
   recheckDueAt: a.recheckDueAt.toISOString(),
   recheckIntervalDays: a.recheckIntervalDays,
+  recheckDue: recheckDue(a),
   targetSet: a.snapshot.targetSet.name,
   checkCount: a.snapshot.checks.length,
   waivedCount: a.snapshot.checks.filter((c) => c.status === 'waived').length,

@@ -1,5 +1,4 @@
 import { Module } from '@nestjs/common';
-import { APP_INTERCEPTOR } from '@nestjs/core';
 import { MachinesModule } from '../machines/machines.module.js';
 import { MailModule } from '../mail/mail.module.js';
 import { ApprovalNotifier } from './approval-notifier.js';
@@ -9,7 +8,6 @@ import { ApprovalsService } from './approvals.service.js';
 import { CertificateService } from './certificate/certificate.service.js';
 import { DriftService } from './drift.service.js';
 import { ReadinessBoardService } from './readiness-board.service.js';
-import { RecheckInterceptor } from './recheck.interceptor.js';
 import { RecheckService } from './recheck.service.js';
 import { SignedRecordService } from './signing/signed-record.service.js';
 import { SignedRecordsRepository } from './signing/signed-records.repository.js';
@@ -32,7 +30,6 @@ import { PublicVerificationController } from './public-verification.controller.j
     SignedRecordsRepository,
     SigningKeyService,
     PublicVerificationService,
-    { provide: APP_INTERCEPTOR, useClass: RecheckInterceptor },
   ],
   exports: [ApprovalsService],
 })

@@ -82,12 +82,12 @@ export class ApprovalsRepository {
   }
 
   /** The machine's rails and axes: their geometry and drive settings are part of what is approved. */
-  async partsOf(machineId: string): Promise<{ recordType: string; recordId: string }[]> {
+  async partsOf(machineId: string): Promise<{ recordType: 'rail' | 'axis'; recordId: string }[]> {
     const [railRows, axisRows] = await Promise.all([
       this.db.select({ id: rails.id }).from(rails).where(eq(rails.machineId, machineId)),
       this.db.select({ id: axes.id }).from(axes).where(eq(axes.machineId, machineId)),
     ]);
-    return [...railRows.map((r) => ({ recordType: 'rail', recordId: r.id })), ...axisRows.map((a) => ({ recordType: 'axis', recordId: a.id }))];
+    return [...railRows.map((r) => ({ recordType: 'rail' as const, recordId: r.id })), ...axisRows.map((a) => ({ recordType: 'axis' as const, recordId: a.id }))];
   }
 
   /** The standing approval if there is one, else the newest (times are kept to the second, so two may tie). */

@@ -153,7 +153,7 @@ export class ApprovalsService implements OnModuleInit {
       { recordType: 'machine', recordId: machineId },
       ...(await this.repo.partsOf(machineId)),
       ...snapshot.checks.filter((c) => c.recordType && c.recordId).map((c) => ({ recordType: c.recordType!, recordId: c.recordId! })),
-      ...snapshot.checks.filter((c) => c.waiver).map((c) => ({ recordType: 'waiver', recordId: c.waiver!.id })),
+      ...snapshot.checks.filter((c) => c.waiver).map((c) => ({ recordType: 'waiver' as const, recordId: c.waiver!.id })),
     ]);
     const row = await this.signatures.seal(inserted);
     await this.records.audit(actor, {
@@ -200,7 +200,7 @@ export class ApprovalsService implements OnModuleInit {
     if (machine.state !== 'awaiting-approval') return;
     await this.repo.closeOpenRequests(actor.workshopId, machine.id);
     const to: MachineState = (await this.repo.latestApproval(actor.workshopId, machine.id)) ? 'reopened' : 'being-built';
-    const what = KIND_LABELS[event.kind as keyof typeof KIND_LABELS] ?? event.kind;
+    const what = KIND_LABELS[event.kind];
     await this.changeState(actor, machine.id, machine.state, to, `${what} recorded outside target: the request for approval is closed`);
   }
 

@@ -23,8 +23,8 @@ export class ReadinessBoardService {
   ) {}
 
   async board(actor: SessionUser | { workshopId: string }, machineId: string, options: { series: boolean } = { series: false }) {
-    const { machine, checks, blocking, targetSet, recheckDue } = await this.readiness.evaluate(actor.workshopId, machineId, options);
-    return { machine: machine as BoardMachine, checks, blocking, targetSet, recheckDue };
+    const { machine, checks, blocking, targetSet } = await this.readiness.evaluate(actor.workshopId, machineId, options);
+    return { machine: machine as BoardMachine, checks, blocking, targetSet };
   }
 
   /** The exact data an approval keeps and the certificate is drawn from. */

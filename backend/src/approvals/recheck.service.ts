@@ -1,55 +1,49 @@
-import { Injectable, Logger, OnApplicationBootstrap, OnModuleDestroy } from '@nestjs/common';
-import type { SessionUser } from '../auth/session-user.js';
-import { MachinesService } from '../machines/machines.service.js';
-import { RecordsService } from '../records/records.service.js';
+import { Injectable, Logger } from '@nestjs/common';
+import { Cron, CronExpression } from '@nestjs/schedule';
+import { TransactionContext } from '../database/transaction-context.js';
+import { MailService } from '../mail/mail.service.js';
+import { RecordsService, type AuditActor } from '../records/records.service.js';
 import { ApprovalNotifier } from './approval-notifier.js';
 import { ApprovalsRepository } from './approvals.repository.js';
 
-const HOUR_MS = 3600_000;
-
 /** Scheduled work has no person behind it; the history names the product instead. */
-const scheduler = (workshopId: string): SessionUser =>
-  ({ id: null, name: 'Railwright (re-check schedule)', email: '', role: 'admin', workshopId, workshopName: '' }) as unknown as SessionUser;
+const scheduler = (workshopId: string): AuditActor => ({ id: null, name: 'Railwright (re-check schedule)', workshopId });
 
 /**
- * Moves approved machines to re-check due when their date passes, and sends the one e-mail per
- * due date. Runs at start, every hour, and whenever a workshop's machines are read.
+ * The reminder that an approval's re-check has fallen due. A machine reads as re-check due by
+ * itself once the date has passed (see machines/machine-state.ts); this job only tells people,
+ * once per approval: marking the reminder sent, its history entry and the mail (after commit) are
+ * one transaction per approval, and the mark is taken by one instance only.
  */
 @Injectable()
-export class RecheckService implements OnApplicationBootstrap, OnModuleDestroy {
+export class RecheckService {
   private readonly logger = new Logger(RecheckService.name);
-  private timer: NodeJS.Timeout | null = null;
 
   constructor(
     private readonly repo: ApprovalsRepository,
-    private readonly machines: MachinesService,
     private readonly records: RecordsService,
     private readonly notifier: ApprovalNotifier,
+    private readonly mail: MailService,
+    private readonly transactions: TransactionContext,
   ) {}
 
-  onApplicationBootstrap() {
-    this.machines.onRecheckDue((workshopId) => this.sweepWorkshop(workshopId));
-    void this.sweep(null);
-    this.timer = setInterval(() => void this.sweep(null), HOUR_MS);
-    this.timer.unref();
-  }
-
-  onModuleDestroy() {
-    if (this.timer) clearInterval(this.timer);
-  }
-
-  sweepWorkshop(workshopId: string): Promise<void> {
-    return this.sweep(workshopId);
-  }
-
-  private async sweep(workshopId: string | null): Promise<void> {
+  @Cron(CronExpression.EVERY_HOUR, { name: 'recheck-reminders' })
+  async scheduled(): Promise<void> {
     try {
-      const now = Date.now();
-      for (const { approval, state, machineName } of await this.repo.latestApprovalsOfMachinesIn(workshopId, ['ready-to-cut', 'recheck-due'])) {
-        if (approval.recheckDueAt.getTime() > now) continue;
-        if (state === 'ready-to-cut') {
-          const actor = scheduler(approval.workshopId);
-          await this.machines.setState(approval.workshopId, approval.machineId, 'recheck-due');
+      await this.remindDue();
+    } catch (err) {
+      this.logger.error(`re-check reminders failed: ${(err as Error).message}`);
+    }
+  }
+
+  /** Sends the reminder of every approval fallen due since the last run; the number sent. */
+  async remindDue(now = new Date()): Promise<number> {
+    let sent = 0;
+    for (const { approval, machineName } of await this.repo.dueRecheckReminders(now)) {
+      const actor = scheduler(approval.workshopId);
+      const claimed = await this.transactions.run(
+        async () => {
+          if (!(await this.repo.markRecheckNotified(approval.id, now))) return false;
           await this.records.audit(actor, {
             machineId: approval.machineId,
             recordType: 'machine',
@@ -58,11 +52,13 @@ export class RecheckService implements OnApplicationBootstrap, OnModuleDestroy {
             summary: `Re-check due: the approval of ${approval.approvedAt.toISOString().slice(0, 10)} asked for a re-check by ${approval.recheckDueAt.toISOString().slice(0, 10)}`,
             changes: { state: { from: 'ready-to-cut', to: 'recheck-due' } },
           });
-        }
-        if (await this.repo.markRecheckNotified(approval.id)) await this.notifier.recheckDue(approval, machineName);
-      }
-    } catch (err) {
-      this.logger.error(`re-check sweep failed: ${(err as Error).message}`);
+          this.mail.later(() => this.notifier.recheckDue(approval, machineName), 're-check due mail');
+          return true;
+        },
+        { actor },
+      );
+      if (claimed) sent++;
     }
+    return sent;
   }
 }

@@ -4,10 +4,13 @@ import type { FastifyReply, FastifyRequest } from 'fastify';
 import { CurrentUser, Public } from './decorators.js';
 import { LoginBodyGuard } from './login-body.guard.js';
 import { toUserResponse, type SessionUser } from './session-user.js';
-import { loadConfig } from '../config/config.js';
+import { ConfigService } from '@nestjs/config';
+import type { RailwrightConfig } from '../config/app-config.module.js';
 
 @Controller('auth')
 export class AuthController {
+  constructor(private readonly config: ConfigService<RailwrightConfig, true>) {}
+
   @Public()
   @Post('login')
   @HttpCode(200)
@@ -26,7 +29,7 @@ export class AuthController {
   @HttpCode(204)
   async logout(@Req() req: FastifyRequest, @Res({ passthrough: true }) reply: FastifyReply) {
     if (req.session) await req.session.destroy();
-    reply.clearCookie(loadConfig().sessionCookieName, { path: '/' });
+    reply.clearCookie(this.config.get('app', { infer: true }).sessionCookieName, { path: '/' });
   }
 
   @Get('me')

@@ -1,6 +1,6 @@
 import { GoneException, HttpException, HttpStatus, Injectable, NotFoundException } from '@nestjs/common';
 import { createHash, randomBytes } from 'node:crypto';
-import { loadConfig } from '../config/config.js';
+import { MailLinks } from '../mail/mail-links.js';
 import { MailService } from '../mail/mail.service.js';
 import { RecordsService } from '../records/records.service.js';
 import { AuthRepository } from './auth.repository.js';
@@ -22,6 +22,7 @@ export class PasswordLinksService {
     private readonly accounts: AuthRepository,
     private readonly records: RecordsService,
     private readonly mail: MailService,
+    private readonly links: MailLinks,
     private readonly throttle: SignInThrottle,
     private readonly transactions: TransactionContext,
   ) {}
@@ -57,7 +58,7 @@ export class PasswordLinksService {
     const token = randomBytes(32).toString('base64url');
     const expiresAt = new Date(Date.now() + LINK_HOURS * 3600_000);
     await this.repo.insert({ userId, tokenHash: hashToken(token), purpose, expiresAt });
-    return { url: `${loadConfig().appUrl}/set-password?token=${token}`, expiresAt };
+    return { url: this.links.setPassword(token), expiresAt };
   }
 
   /** Whom the link is for, so the page can greet them; 404 unknown, 410 used or expired. */

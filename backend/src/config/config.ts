@@ -59,8 +59,6 @@ function developmentSecret(env: NodeJS.ProcessEnv): string {
   return secret;
 }
 
-let cached: AppConfig | null = null;
-
 /** The clone's top folder: the first parent holding both backend/ and frontend/. */
 function repoRoot(): string {
   let dir = path.dirname(fileURLToPath(import.meta.url));
@@ -71,9 +69,11 @@ function repoRoot(): string {
   return process.cwd();
 }
 
-/** Reads and checks the environment once; a bad value stops the boot with a clear message. */
-export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
-  if (cached && env === process.env) return cached;
+/**
+ * Checks the environment and makes the configuration; a bad value stops the boot with a clear
+ * message naming every problem. The rules behind ConfigModule's `validate` (app-config.module.ts).
+ */
+export function validateEnvironment(env: NodeJS.ProcessEnv): AppConfig {
   const problems: string[] = [];
   const databaseUrl = env.DATABASE_URL ?? '';
   if (!/^postgres(ql)?:\/\//.test(databaseUrl)) problems.push('DATABASE_URL must be a postgres:// URL');
@@ -107,6 +107,16 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
     extraOrigins: production ? [] : [...DEV_SERVER_ORIGINS, `http://127.0.0.1:${port}`, `http://localhost:${port}`],
     trustProxy,
   };
-  if (env === process.env) cached = config;
+  return config;
+}
+
+// One configuration per environment object: the app's ConfigService and the code outside Nest
+// (main.ts before the app exists, scripts, tests) read the same object.
+const made = new WeakMap<NodeJS.ProcessEnv, AppConfig>();
+
+/** The configuration outside Nest's injection (main.ts, scripts, tests); inside, inject AppConfigService. */
+export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
+  let config = made.get(env);
+  if (!config) made.set(env, (config = validateEnvironment(env)));
   return config;
 }

@@ -1,7 +1,8 @@
 import { Global, Inject, Module, OnApplicationShutdown } from '@nestjs/common';
 import { drizzle } from 'drizzle-orm/node-postgres';
 import pg from 'pg';
-import { loadConfig } from '../config/config.js';
+import { ConfigService } from '@nestjs/config';
+import type { RailwrightConfig } from '../config/app-config.module.js';
 import * as schema from './schema/index.js';
 import { DRIZZLE, PG_POOL, ROOT_DRIZZLE } from './database.tokens.js';
 import { TransactionContext, transactionalDatabase } from './transaction-context.js';
@@ -13,8 +14,9 @@ import { CommandKeysRepository } from './command-keys.repository.js';
   providers: [
     {
       provide: PG_POOL,
-      useFactory: () => {
-        const pool = new pg.Pool({ connectionString: loadConfig().databaseUrl, max: 10 });
+      inject: [ConfigService],
+      useFactory: (config: ConfigService<RailwrightConfig, true>) => {
+        const pool = new pg.Pool({ connectionString: config.get('app', { infer: true }).databaseUrl, max: 10 });
         // An idle connection dropped by the server must not take the process down; the pool reconnects.
         pool.on('error', (err) => console.error(`Database connection lost: ${err.message}`));
         return pool;

@@ -1,9 +1,13 @@
 import { Inject, Injectable } from '@nestjs/common';
-import { and, desc, eq, sql } from 'drizzle-orm';
+import { and, desc, eq, getTableColumns, sql } from 'drizzle-orm';
 import { DRIZZLE, ROOT_DRIZZLE, type Database } from '../database/database.tokens.js';
 import { TransactionContext } from '../database/transaction-context.js';
-import { approvals, machineReadiness, machines, targetSets } from '../database/schema/index.js';
+import { machineReadiness, machines, targetSets } from '../database/schema/index.js';
 import type { MachineRow } from './machine.mapper.js';
+import { machineStateNow } from './machine-state.js';
+
+// Every read of a machine gives the state it reads as now (a passed re-check date included).
+const machineNow = { ...getTableColumns(machines), state: machineStateNow(machines) };
 
 @Injectable()
 export class MachinesRepository {
@@ -15,7 +19,7 @@ export class MachinesRepository {
 
   /**
    * The workshop's machines with their readiness summaries (counts only): one statement, whatever
-   * their history. `recheckDue` tells whether an approval's re-check date has passed unhandled.
+   * their history, each in the state it reads as now.
    * Outside a command it is a named prepared statement: the most read page is not rebuilt and
    * re-planned on every request.
    */
@@ -30,7 +34,7 @@ export class MachinesRepository {
   private listQuery(db: Database, workshop: ReturnType<typeof eq>) {
     return db
       .select({
-        machine: machines,
+        machine: machineNow,
         targetSetName: targetSets.name,
         readiness: {
           total: machineReadiness.total,
@@ -40,9 +44,6 @@ export class MachinesRepository {
           notStarted: machineReadiness.notStarted,
           firstBlocking: machineReadiness.firstBlocking,
         },
-        recheckDue: sql<boolean>`${machines.state} in ('ready-to-cut', 'recheck-due') and exists (
-          select 1 from ${approvals} a where a.machine_id = ${machines.id} and a.ended_at is null and a.recheck_due_at <= now()
-            and (${machines.state} = 'ready-to-cut' or a.recheck_notified_at is null))`,
       })
       .from(machines)
       .innerJoin(targetSets, eq(targetSets.id, machines.targetSetId))
@@ -53,7 +54,7 @@ export class MachinesRepository {
 
   async find(workshopId: string, id: string) {
     const [row] = await this.db
-      .select({ machine: machines, targetSetName: targetSets.name })
+      .select({ machine: machineNow, targetSetName: targetSets.name })
       .from(machines)
       .innerJoin(targetSets, eq(targetSets.id, machines.targetSetId))
       .where(and(eq(machines.workshopId, workshopId), eq(machines.id, id)));
@@ -63,7 +64,7 @@ export class MachinesRepository {
   /** The machine's row, locked until the current command commits: its state cannot move meanwhile. */
   async lock(workshopId: string, id: string): Promise<MachineRow | null> {
     const [row] = await this.db
-      .select()
+      .select(machineNow)
       .from(machines)
       .where(and(eq(machines.workshopId, workshopId), eq(machines.id, id)))
       .for('no key update');

@@ -23,13 +23,6 @@ export class MachinesService implements OnModuleInit {
     private readonly subjects: SubjectsRegistry,
   ) {}
 
-  private recheckSweep: ((workshopId: string) => Promise<void>) | null = null;
-
-  /** The re-check schedule registers here: the list asks it only when one of its machines is due. */
-  onRecheckDue(sweep: (workshopId: string) => Promise<void>): void {
-    this.recheckSweep = sweep;
-  }
-
   onModuleInit() {
     this.subjects.register('machine', async (workshopId, id) => {
       const found = await this.repo.find(workshopId, id);
@@ -40,15 +33,11 @@ export class MachinesService implements OnModuleInit {
   /**
    * Served from each machine's readiness summary (kept current by every change's transaction),
    * so the list costs one statement however much history the machines have. A machine without
-   * a summary (made by hand in the database) is counted once here and keeps its summary. When an
-   * approval's re-check date has passed, the schedule moves it first and the list is read again.
+   * a summary (made by hand in the database) is counted once here and keeps its summary. A
+   * machine whose re-check date has passed reads as re-check due; the list writes nothing for it.
    */
   async list(actor: SessionUser): Promise<MachineListItem[]> {
-    let rows = await this.repo.list(actor.workshopId);
-    if (this.recheckSweep && rows.some((r) => r.recheckDue)) {
-      await this.recheckSweep(actor.workshopId);
-      rows = await this.repo.list(actor.workshopId);
-    }
+    const rows = await this.repo.list(actor.workshopId);
     const out: MachineListItem[] = [];
     for (const { machine, targetSetName, readiness } of rows) {
       const counts = readiness?.total == null ? await this.readiness.refresh(machine.workshopId, machine.id) : readiness;

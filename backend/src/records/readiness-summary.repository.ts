@@ -1,7 +1,8 @@
 import { Inject, Injectable } from '@nestjs/common';
 import { and, eq, isNull, ne, or, sql } from 'drizzle-orm';
 import { DRIZZLE, type Database } from '../database/database.tokens.js';
-import { approvals, machineReadiness, machines, targetSets, waivers } from '../database/schema/index.js';
+import { machineReadiness, machines, targetSets, waivers } from '../database/schema/index.js';
+import { machineStateNow } from '../machines/machine-state.js';
 import type { MachineState } from '../database/schema/machines.js';
 import type { SummaryCheck } from '../database/schema/machine-readiness.js';
 import type { TargetValue } from '../database/schema/target-sets.js';
@@ -18,8 +19,6 @@ export interface ReadinessContextRow {
   waivers: SummaryWaiverRow[];
   /** The stored summary's checks and how they were counted (only when asked for). */
   summary: { checks: SummaryCheck[] | null; version: number } | null;
-  /** The standing approval's re-check date has passed and the schedule has not yet acted on it. */
-  recheckDue: boolean;
 }
 
 /** The reads a readiness count needs besides the contributors', and the summary rows themselves. */
@@ -47,9 +46,9 @@ export class ReadinessSummaryRepository {
       waivers: (Omit<SummaryWaiverRow, 'waivedAt'> & { waivedAt: string })[];
       s_checks: SummaryCheck[] | null;
       s_version: number | null;
-      recheck_due: boolean;
     }>(sql`
-      select m.id, m.workshop_id, m.target_set_id, m.kind, m.work_area_x_mm, m.work_area_y_mm, m.name, m.state,
+      select m.id, m.workshop_id, m.target_set_id, m.kind, m.work_area_x_mm, m.work_area_y_mm, m.name,
+             ${machineStateNow({ id: sql`m.id`, state: sql`m.state` })} as state,
              t.id as t_id, t.name as t_name, t.targets,
              coalesce((
                select jsonb_agg(jsonb_build_object(
@@ -58,10 +57,7 @@ export class ReadinessSummaryRepository {
                       ) order by w.waived_at desc)
                from ${waivers} w where w.workshop_id = m.workshop_id and w.machine_id = m.id
              ), '[]'::jsonb) as waivers,
-             ${withSummary ? sql`r.checks` : sql`null::jsonb`} as s_checks, ${withSummary ? sql`r.version` : sql`null::int`} as s_version,
-             m.state in ('ready-to-cut', 'recheck-due') and exists (
-               select 1 from ${approvals} a where a.machine_id = m.id and a.ended_at is null and a.recheck_due_at <= now()
-                 and (m.state = 'ready-to-cut' or a.recheck_notified_at is null)) as recheck_due
+             ${withSummary ? sql`r.checks` : sql`null::jsonb`} as s_checks, ${withSummary ? sql`r.version` : sql`null::int`} as s_version
       from ${machines} m
       left join ${targetSets} t on t.id = m.target_set_id and t.workshop_id = m.workshop_id
       left join ${machineReadiness} r on ${withSummary ? sql`r.machine_id = m.id` : sql`false`}
@@ -82,7 +78,6 @@ export class ReadinessSummaryRepository {
       targetSet: row.t_id ? { id: row.t_id, name: row.t_name!, targets: row.targets! } : null,
       waivers: row.waivers.map((w) => ({ ...w, waivedAt: new Date(w.waivedAt) })),
       summary: row.s_version === null ? null : { checks: row.s_checks, version: row.s_version },
-      recheckDue: row.recheck_due === true,
     };
   }
 

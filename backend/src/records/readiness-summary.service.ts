@@ -3,6 +3,7 @@ import { blockingOf, boardChecks } from '../approvals/board.js';
 import type { BoardCheck } from '../approvals/snapshot.js';
 import type { BlockingCheckRef, SummaryCheck } from '../database/schema/machine-readiness.js';
 import type { MachineState } from '../database/schema/machines.js';
+import { RECORD_TYPES } from './kinds.js';
 import type { MachineRef, ReadinessCheck, ReadinessContext } from './readiness.js';
 import { ReadinessRegistry } from './readiness.registry.js';
 import { ReadinessSummaryRepository, type ReadinessContextRow } from './readiness-summary.repository.js';
@@ -13,8 +14,6 @@ import { RecordsService, type RecordChange } from './records.service.js';
 // 3: the summary keeps its checks, so that a recorded check asks only its own contributor again.
 export const SUMMARY_VERSION = 3;
 
-/** Record types whose changes never move a machine's readiness (no refresh for them). */
-const NO_READINESS_EFFECT = new Set(['evidence', 'bolt-down', 'approval', 'sign-in', 'person', 'password-link']);
 
 export interface ReadinessEvaluation {
   machine: MachineRef & { name: string; state: MachineState };
@@ -131,7 +130,8 @@ export class ReadinessSummaryService implements OnModuleInit, OnApplicationBoots
   }
 
   private async changed(workshopId: string, change: RecordChange): Promise<void> {
-    if (NO_READINESS_EFFECT.has(change.recordType)) return;
+    // Record types whose changes never move a machine's readiness (records/kinds.ts) ask for no recount.
+    if (!RECORD_TYPES[change.recordType].readiness) return;
     if (change.machineId) {
       if (change.recordType === 'machine' && change.action === 'state-changed') return;
       await this.refresh(workshopId, change.machineId, change.checkKind);
@@ -154,5 +154,5 @@ function summaryCheck(contributor: number, c: ReadinessCheck): SummaryCheck {
 
 /** A stored check as the board counts it: waivers match on key and record, order on kind, subject and key. */
 function asReadinessCheck(c: SummaryCheck): ReadinessCheck {
-  return { key: c.key, kind: c.kind as ReadinessCheck['kind'], subject: c.subject, status: c.status, recordId: c.recordId, target: null, result: null, recordType: null, recordedAt: null, link: '' };
+  return { key: c.key, kind: c.kind, subject: c.subject, status: c.status, recordId: c.recordId, target: null, result: null, recordType: null, recordedAt: null, link: '' };
 }

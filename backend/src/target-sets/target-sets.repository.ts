@@ -3,6 +3,7 @@ import { and, asc, eq } from 'drizzle-orm';
 import { DRIZZLE, type Database } from '../database/database.tokens.js';
 import { machines, targetSets, type TargetValue } from '../database/schema/index.js';
 import type { TargetSetRow } from './target-set.mapper.js';
+import { machineStateNow } from '../machines/machine-state.js';
 
 @Injectable()
 export class TargetSetsRepository {
@@ -37,7 +38,7 @@ export class TargetSetsRepository {
   /** The workshop's machines judged against each target set (one query for every set). */
   machinesUsing(workshopId: string) {
     return this.db
-      .select({ targetSetId: machines.targetSetId, id: machines.id, name: machines.name, state: machines.state })
+      .select({ targetSetId: machines.targetSetId, id: machines.id, name: machines.name, state: machineStateNow(machines) })
       .from(machines)
       .where(eq(machines.workshopId, workshopId))
       .orderBy(asc(machines.name));

@@ -2,7 +2,6 @@ import 'reflect-metadata';
 import type { NestFastifyApplication } from '@nestjs/platform-fastify';
 import request from 'supertest';
 import { randomUUID } from 'node:crypto';
-import { loadConfig } from '../../src/config/config.js';
 import { createApp } from '../../src/create-app.js';
 import { DRIZZLE, type Database } from '../../src/database/database.tokens.js';
 import { users, workshops, type Role, ROLES } from '../../src/database/schema/index.js';
@@ -13,7 +12,7 @@ export const TEST_PASSWORD = 'correct horse battery staple';
 /** The real app (same setup as main.ts) on the throwaway database, ready for supertest. */
 export async function createTestApp(): Promise<NestFastifyApplication> {
   if (!process.env.DATABASE_URL) throw new Error('API tests need DATABASE_URL: run them through npm test');
-  const app = await createApp(loadConfig({ ...process.env, FRONTEND_DIST: '' }));
+  const app = await createApp({ ...process.env, FRONTEND_DIST: '' });
   await app.init();
   await app.getHttpAdapter().getInstance().ready();
   return app;

@@ -4,11 +4,8 @@ import { MachinesService } from '../../machines/machines.service.js';
 import { ApprovalsRepository, type ApprovalRow } from '../approvals.repository.js';
 import { toApprovalResponse, toVerificationResponse } from '../approval.mapper.js';
 import { SignedRecordService } from '../signing/signed-record.service.js';
-import { loadConfig } from '../../config/config.js';
+import { MailLinks } from '../../mail/mail-links.js';
 import { renderCertificate } from './certificate-pdf.js';
-
-/** The public address printed on the certificate: anyone holding it can check the signature there. */
-export const verificationUrl = (token: string) => `${loadConfig().appUrl.replace(/\/+$/, '')}/verify/${token}`;
 
 /** The certificate of an approval, made from its stored snapshot only (never from live data). */
 @Injectable()
@@ -17,13 +14,14 @@ export class CertificateService {
     private readonly repo: ApprovalsRepository,
     private readonly machines: MachinesService,
     private readonly signatures: SignedRecordService,
+    private readonly links: MailLinks,
   ) {}
 
   render(a: ApprovalRow): Promise<Buffer> {
     return renderCertificate({
       snapshot: a.snapshot,
       approval: { id: a.id, approvedAt: a.approvedAt, approvedBy: a.approvedByName, statement: a.statement, recordHash: a.recordHash, recheckDueAt: a.recheckDueAt },
-      verificationUrl: a.verificationToken ? verificationUrl(a.verificationToken) : null,
+      verificationUrl: a.verificationToken ? this.links.verification(a.verificationToken) : null,
     });
   }
 
