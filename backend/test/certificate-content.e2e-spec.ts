@@ -21,7 +21,7 @@ const COARSE = { code: 'coarse-instrument', message: 'The indicator reads 10 µm
 function extraChecks(machineId: string): ReadinessCheck[] {
   const base = {
     status: 'within-target' as const,
-    recordType: 'fake-check',
+    recordType: 'test-cut' as const,
     recordedAt: '2026-11-30T10:00:00.000Z',
     link: `/machines/${machineId}`,
   };

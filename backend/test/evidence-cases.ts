@@ -25,7 +25,7 @@ export interface Ctx {
   other: TestWorkshop;
   machineId: string;
   otherMachineId: string;
-  /** A check of this workshop's machine, registered as subject type "bench-check". */
+  /** A check of this workshop's machine, registered in place of the subject type "test-cut". */
   checkId: string;
 }
 
@@ -47,9 +47,9 @@ export function evidenceApiCases(driver: string, harness: DriverHarness) {
     // A stand-in for a check owned by another module: resolves only inside its own workshop.
     ctx.checkId = randomUUID();
     const checks = new Map([[ctx.checkId, { workshopId: ctx.ws.id, machineId: ctx.machineId }]]);
-    ctx.app.get(SubjectsRegistry).register('bench-check', async (workshopId, id) => {
+    ctx.app.get(SubjectsRegistry).register('test-cut', async (workshopId, id) => {
       const c = checks.get(id);
-      return c && c.workshopId === workshopId ? { machineId: c.machineId, recordType: 'bench-check', recordId: id, label: 'Bench check 1' } : null;
+      return c && c.workshopId === workshopId ? { machineId: c.machineId, recordType: 'test-cut', recordId: id, label: 'Bench check 1' } : null;
     });
   });
   afterAll(async () => {
@@ -212,7 +212,7 @@ export function evidenceApiCases(driver: string, harness: DriverHarness) {
     const mine = await upload(ctx.ws.as.builder, onMachine(), { body: png, name: 'mine.png' });
     const before = await harness.storedKeys();
     expect((await upload(ctx.other.as.owner, onMachine(), { body: png, name: 'sneak.png' })).status).toBe(404);
-    expect((await upload(ctx.other.as.owner, { subjectType: 'bench-check', subjectId: ctx.checkId }, { body: png, name: 'sneak.png' })).status).toBe(404);
+    expect((await upload(ctx.other.as.owner, { subjectType: 'test-cut', subjectId: ctx.checkId }, { body: png, name: 'sneak.png' })).status).toBe(404);
     expect(await harness.storedKeys()).toEqual(before);
     for (const path of ['', '/content', '/thumbnail']) {
       expect((await ctx.other.as.owner.get(`/api/evidence/${mine.body.id}${path}`)).status).toBe(404);
@@ -224,21 +224,21 @@ export function evidenceApiCases(driver: string, harness: DriverHarness) {
   });
 
   it('lists a whole machine grouped by subject, and a single subject', async () => {
-    const check = { subjectType: 'bench-check', subjectId: ctx.checkId };
+    const check = { subjectType: 'test-cut', subjectId: ctx.checkId };
     const made = await upload(ctx.ws.as.technician, { ...check, caption: 'dial at hole 4' }, { body: CSV, name: 'bench.csv' });
     expect(made.status).toBe(201);
-    expect(made.body.subject).toEqual({ type: 'bench-check', id: ctx.checkId, label: 'Bench check 1' });
+    expect(made.body.subject).toEqual({ type: 'test-cut', id: ctx.checkId, label: 'Bench check 1' });
     const one = await ctx.ws.as.viewer.get('/api/evidence').query(check);
     expect(one.body.map((e: { id: string }) => e.id)).toEqual([made.body.id]);
     const all = await ctx.ws.as.viewer.get('/api/evidence').query({ machineId: ctx.machineId });
     expect(all.status).toBe(200);
     const types = new Set(all.body.map((e: { subject: { type: string } }) => e.subject.type));
-    expect(types).toEqual(new Set(['machine', 'bench-check']));
+    expect(types).toEqual(new Set(['machine', 'test-cut']));
     expect((await ctx.ws.as.viewer.get('/api/evidence')).status).toBe(400);
   });
 
   it('deletes: own evidence or as owner/admin, refused once the check is part of an approval, all audited', async () => {
-    const check = { subjectType: 'bench-check', subjectId: ctx.checkId };
+    const check = { subjectType: 'test-cut', subjectId: ctx.checkId };
     const png = await makePng(40, 30);
     const a = await upload(ctx.ws.as.builder, check, { body: png, name: 'a.png' });
     const b = await upload(ctx.ws.as.builder, check, { body: png, name: 'b.png' });
@@ -250,7 +250,7 @@ export function evidenceApiCases(driver: string, harness: DriverHarness) {
     expect((await harness.storedKeys()).length).toBe(before.length - 2); // the file and its thumbnail
     expect((await ctx.ws.as.owner.delete(`/api/evidence/${b.body.id}`)).status).toBe(204);
 
-    await ctx.app.get(RecordsService).lock(randomUUID(), [{ recordType: 'bench-check', recordId: ctx.checkId }]);
+    await ctx.app.get(RecordsService).lock(randomUUID(), [{ recordType: 'test-cut', recordId: ctx.checkId }]);
     const refused = await ctx.ws.as.builder.delete(`/api/evidence/${c.body.id}`);
     expect(refused.status).toBe(409);
     expect(refused.body.message).toMatch(/Bench check 1 is part of an approved commissioning record/);

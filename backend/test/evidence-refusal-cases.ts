@@ -31,7 +31,7 @@ export function refusalCases(ctx: Ctx, harness: DriverHarness) {
     });
 
     it.each([
-      [{ subjectType: 'spaceship', subjectId: randomUUID() }, 400, /subjectType must be one of .*bench-check.*machine/],
+      [{ subjectType: 'spaceship', subjectId: randomUUID() }, 400, /subjectType must be one of .*machine.*test-cut/],
       [{ subjectType: 'machine', subjectId: 'not-a-uuid' }, 400, /subjectId must be the id/],
       [{ subjectType: 'machine' }, 400, /subjectId must be the id/],
       [{ subjectType: 'machine', subjectId: randomUUID() }, 404, /No such machine/],

@@ -1,20 +1,10 @@
+import { CHECK_KIND_NAMES, CHECK_KINDS, type CheckKind } from '../records/kinds.js';
 import type { ReadinessCheck } from '../records/readiness.js';
 import type { WaiverRow } from './approvals.repository.js';
 import type { BoardCheck } from './snapshot.js';
 
-const KIND_ORDER: ReadinessCheck['kind'][] = [
-  'rail-straightness',
-  'rail-parallelism',
-  'travel-trial',
-  'backlash',
-  'positioning',
-  'speed-check',
-  'travel-envelope',
-  'diagonal-check',
-  'bed-grid',
-  'test-cut',
-  'safety-walk',
-];
+/** The board's order of kinds is the registry's (records/kinds.ts). */
+const KIND_ORDER: readonly CheckKind[] = CHECK_KIND_NAMES;
 
 /** The newest waiver of the check that belongs to its current record (or to "never started"). */
 export function waiverFor(check: ReadinessCheck, waivers: WaiverRow[]): WaiverRow | null {
@@ -50,19 +40,7 @@ export function boardChecks(checks: ReadinessCheck[], waivers: WaiverRow[]): Boa
 /** Checks that stop a request or an approval: not started or outside target, and not waived. */
 export const blockingOf = (checks: BoardCheck[]) => checks.filter((c) => c.status === 'not-started' || c.status === 'outside-target');
 
-export const KIND_LABELS: Record<ReadinessCheck['kind'], string> = {
-  'rail-straightness': 'Rail straightness',
-  'rail-parallelism': 'Rail parallelism',
-  'travel-trial': 'Travel trial',
-  backlash: 'Backlash check',
-  positioning: 'Repeat-and-reverse run',
-  'speed-check': 'Speed check',
-  'travel-envelope': 'Travel envelope',
-  'diagonal-check': 'Diagonal check',
-  'bed-grid': 'Bed grid',
-  'test-cut': 'Test cut',
-  'safety-walk': 'Safety walk',
-};
+export const KIND_LABELS = Object.fromEntries(CHECK_KIND_NAMES.map((k) => [k, CHECK_KINDS[k].label])) as Record<CheckKind, string>;
 
 export const STATUS_LABELS: Record<BoardCheck['status'], string> = {
   'not-started': 'Not started',

@@ -20,7 +20,7 @@ export interface BoardCheck {
   measuredStatus: ReadinessCheck['status'];
   target: (TargetValue & { label?: string }) | null;
   result: ReadinessCheck['result'];
-  recordType: string | null;
+  recordType: ReadinessCheck['recordType'];
   recordId: string | null;
   recordedAt: string | null;
   link: string;

@@ -13,6 +13,7 @@ import type { FastifyRequest } from 'fastify';
 import { randomUUID } from 'node:crypto';
 import { pipeline, type Readable } from 'node:stream';
 import type { SessionUser } from '../auth/session-user.js';
+import type { EvidenceSubjectType } from '../records/kinds.js';
 import type { SubjectRef } from '../records/subjects.registry.js';
 import { MachinesService } from '../machines/machines.service.js';
 import { APPROVED_STATES } from '../database/schema/machines.js';
@@ -127,14 +128,14 @@ export class EvidenceUploadService {
     return { tempKey, rawName, inspector };
   }
 
-  private async checkedSubject(actor: SessionUser, fields: Record<string, string>): Promise<SubjectRef> {
+  private async checkedSubject(actor: SessionUser, fields: Record<string, string>): Promise<SubjectRef & { subjectType: EvidenceSubjectType }> {
     const dto = plainToInstance(UploadFieldsDto, fields);
     const errors = await validate(dto, { whitelist: true, forbidNonWhitelisted: true });
     if (errors.length) throw new BadRequestException(errors.flatMap((e) => Object.values(e.constraints ?? {})));
     return this.subjects.resolve(actor.workshopId, dto.subjectType, dto.subjectId);
   }
 
-  private async store(actor: SessionUser, subject: SubjectRef, fields: Record<string, string>, received: Received): Promise<EvidenceResponse> {
+  private async store(actor: SessionUser, subject: SubjectRef & { subjectType: EvidenceSubjectType }, fields: Record<string, string>, received: Received): Promise<EvidenceResponse> {
     const sniff = received.inspector.result();
     const shownName = sanitizeFileName(received.rawName);
     if (sniff.sizeBytes === 0) throw new BadRequestException([`${shownName} is empty (0 bytes)`]);
@@ -157,7 +158,7 @@ export class EvidenceUploadService {
         id,
         workshopId: actor.workshopId,
         machineId: subject.machineId,
-        subjectType: fields.subjectType,
+        subjectType: subject.subjectType,
         subjectId: fields.subjectId,
         subjectLabel: subject.label,
         recordType: subject.recordType,

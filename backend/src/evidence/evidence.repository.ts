@@ -1,6 +1,7 @@
 import { Inject, Injectable } from '@nestjs/common';
 import { and, desc, eq } from 'drizzle-orm';
 import { DRIZZLE, type Database } from '../database/database.tokens.js';
+import type { EvidenceSubjectType } from '../records/kinds.js';
 import { evidence } from '../database/schema/index.js';
 
 export type EvidenceRow = typeof evidence.$inferSelect;
@@ -27,7 +28,7 @@ export class EvidenceRepository {
     return this.db
       .select()
       .from(evidence)
-      .where(and(eq(evidence.workshopId, workshopId), eq(evidence.subjectType, subjectType), eq(evidence.subjectId, subjectId)))
+      .where(and(eq(evidence.workshopId, workshopId), eq(evidence.subjectType, subjectType as EvidenceSubjectType), eq(evidence.subjectId, subjectId)))
       .orderBy(desc(evidence.createdAt));
   }
 

@@ -2,6 +2,7 @@ import { BadRequestException, ForbiddenException, Inject, Injectable, Logger, No
 import type { SessionUser } from '../auth/session-user.js';
 import { MachinesService } from '../machines/machines.service.js';
 import { RecordsService } from '../records/records.service.js';
+import type { SignedRecordType } from '../records/kinds.js';
 import { ACCEPTED_TYPES } from './content-type.js';
 import { EVIDENCE_CONFIG, type EvidenceConfig } from './evidence.config.js';
 import { toEvidenceResponse, type EvidenceResponse } from './evidence.mapper.js';
@@ -108,7 +109,7 @@ export class EvidenceService {
   /** Rows with their subjects' current names, their locks and what the caller may do. */
   private async present(actor: SessionUser, rows: EvidenceRow[]): Promise<EvidenceResponse[]> {
     const labels = new Map<string, string>();
-    const refs = new Map<string, { recordType: string; recordId: string }>();
+    const refs = new Map<string, { recordType: SignedRecordType; recordId: string }>();
     for (const row of rows) {
       const key = `${row.subjectType}:${row.subjectId}`;
       if (labels.has(key)) continue;
@@ -116,7 +117,7 @@ export class EvidenceService {
       labels.set(key, ref?.label ?? row.subjectLabel);
       refs.set(key, ref ?? { recordType: row.recordType, recordId: row.recordId });
     }
-    const byType = new Map<string, string[]>();
+    const byType = new Map<SignedRecordType, string[]>();
     for (const ref of refs.values()) byType.set(ref.recordType, [...(byType.get(ref.recordType) ?? []), ref.recordId]);
     const locked = new Set<string>();
     for (const [recordType, ids] of byType) {

@@ -1,3 +1,4 @@
+import type { SubjectRef } from '../records/subjects.registry.js';
 import { BadRequestException, Injectable, NotFoundException } from '@nestjs/common';
 import type { SessionUser } from '../auth/session-user.js';
 import type { BedGridPointMm } from '../database/schema/frame.js';
@@ -120,7 +121,7 @@ export class BedGridsService {
     };
   }
 
-  async resolve(workshopId: string, id: string) {
+  async resolve(workshopId: string, id: string): Promise<SubjectRef | null> {
     const row = await this.repo.findBedGrid(workshopId, id);
     return row ? { machineId: row.machineId, recordType: BED_GRID, recordId: row.id, label: `Bed grid of ${row.recordedAt.toISOString().slice(0, 10)}` } : null;
   }

@@ -1,3 +1,4 @@
+import type { SubjectRef } from '../records/subjects.registry.js';
 import { BadRequestException, Injectable, NotFoundException } from '@nestjs/common';
 import type { SessionUser } from '../auth/session-user.js';
 import { toMm } from '../engine/units.js';
@@ -126,7 +127,7 @@ export class DiagonalChecksService {
     };
   }
 
-  async resolve(workshopId: string, id: string) {
+  async resolve(workshopId: string, id: string): Promise<SubjectRef | null> {
     const row = await this.repo.findDiagonalCheck(workshopId, id);
     return row ? { machineId: row.machineId, recordType: DIAGONAL_CHECK, recordId: row.id, label: `Diagonal check of ${row.recordedAt.toISOString().slice(0, 10)}` } : null;
   }

@@ -1,3 +1,4 @@
+import type { SubjectRef } from '../records/subjects.registry.js';
 import { BadRequestException, Injectable, NotFoundException } from '@nestjs/common';
 import type { SessionUser } from '../auth/session-user.js';
 import type { TestCutSizesMm } from '../database/schema/frame.js';
@@ -144,7 +145,7 @@ export class TestCutsService {
     };
   }
 
-  async resolve(workshopId: string, id: string) {
+  async resolve(workshopId: string, id: string): Promise<SubjectRef | null> {
     const row = await this.repo.findTestCut(workshopId, id);
     return row ? { machineId: row.machineId, recordType: TEST_CUT, recordId: row.id, label: `Test cut of ${row.recordedAt.toISOString().slice(0, 10)}` } : null;
   }

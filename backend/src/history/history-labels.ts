@@ -1,30 +1,7 @@
-/** Plain words for what a history entry is about; the keys are the record types the services audit. */
-export const KIND_LABELS: Record<string, string> = {
-  machine: 'Machine',
-  rail: 'Rail',
-  'rail-sweep': 'Rail sweep',
-  'bolt-down': 'Bolt-down',
-  axis: 'Axis',
-  'travel-trial': 'Travel trial',
-  'positioning-run': 'Positioning run',
-  'backlash-check': 'Backlash check',
-  'diagonal-check': 'Squareness check',
-  'bed-grid': 'Bed flatness',
-  'test-cut': 'Test cut',
-  'safety-walk': 'Safety walk',
-  'safety-item': 'Safety-walk item',
-  waiver: 'Waiver',
-  approval: 'Approval',
-  'approval-request': 'Approval request',
-  evidence: 'Photo or file',
-  'hole-pattern': 'Hole pattern',
-  'target-set': 'Target set',
-  person: 'Person',
-  'sign-in': 'Sign-in',
-  password: 'Password',
-};
+import { recordTypeLabel } from '../records/kinds.js';
 
-export const kindLabel = (recordType: string): string => KIND_LABELS[recordType] ?? recordType.replace(/-/g, ' ').replace(/^./, (c) => c.toUpperCase());
+/** Plain words for what a history entry is about: the record type's label in records/kinds.ts. */
+export const kindLabel = (recordType: string): string => recordTypeLabel(recordType);
 
 /** The tables the change log names, in the same plain words. */
 const TABLE_LABELS: Record<string, string> = {

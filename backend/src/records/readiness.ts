@@ -1,6 +1,7 @@
 import type { TargetValue } from '../database/schema/target-sets.js';
 import type { ResultWarning } from '../engine/warnings.js';
 import { targetInBaseUnit, type TargetKey } from '../target-sets/target-keys.js';
+import type { CheckKind, SignedRecordType } from './kinds.js';
 
 export type CheckStatus = 'not-started' | 'within-target' | 'outside-target' | 'waived';
 
@@ -11,18 +12,8 @@ export type CheckStatus = 'not-started' | 'within-target' | 'outside-target' | '
 export interface ReadinessCheck {
   /** Stable across rounds: the same check of the same subject keeps its key (e.g. "straightness:<railId>"). */
   key: string;
-  kind:
-    | 'rail-straightness'
-    | 'rail-parallelism'
-    | 'travel-trial'
-    | 'positioning'
-    | 'speed-check'
-    | 'travel-envelope'
-    | 'diagonal-check'
-    | 'bed-grid'
-    | 'test-cut'
-    | 'safety-walk'
-    | 'backlash';
+  /** One of the registry's check kinds (records/kinds.ts). */
+  kind: CheckKind;
   /** What is checked, in words: "Rail Y1 (left)", "Axis X". */
   subject: string;
   status: Exclude<CheckStatus, 'waived'>;
@@ -30,7 +21,7 @@ export interface ReadinessCheck {
   /** The headline result in a display unit, with a one-line summary. */
   result: { value: number; unit: string; summary: string } | null;
   /** The record the result comes from; approvals lock it. */
-  recordType: string | null;
+  recordType: SignedRecordType | null;
   recordId: string | null;
   recordedAt: string | null;
   /** Client path to the evidence. */

@@ -2,10 +2,11 @@ import { Inject, Injectable } from '@nestjs/common';
 import { and, asc, desc, eq, gte, ilike, inArray, lt, or, sql, type SQL } from 'drizzle-orm';
 import { DRIZZLE, type Database } from '../database/database.tokens.js';
 import { auditEntries, changeLog, machines, recordLocks } from '../database/schema/index.js';
+import type { RecordType, SignedRecordType } from './kinds.js';
 
 export interface HistoryFilter {
   machineId?: string;
-  recordType?: string;
+  recordType?: RecordType;
   person?: string;
   from?: Date;
   toExclusive?: Date;
@@ -97,7 +98,7 @@ export class RecordsRepository {
     await this.db.update(machines).set({ lastActivityAt: new Date() }).where(eq(machines.id, machineId));
   }
 
-  async lockOf(recordType: string, recordId: string) {
+  async lockOf(recordType: SignedRecordType, recordId: string) {
     const [row] = await this.db
       .select()
       .from(recordLocks)
@@ -106,7 +107,7 @@ export class RecordsRepository {
     return row ?? null;
   }
 
-  async lockedIds(recordType: string, recordIds: string[]): Promise<Set<string>> {
+  async lockedIds(recordType: SignedRecordType, recordIds: string[]): Promise<Set<string>> {
     if (!recordIds.length) return new Set();
     const rows = await this.db
       .select({ id: recordLocks.recordId })
@@ -115,7 +116,7 @@ export class RecordsRepository {
     return new Set(rows.map((r) => r.id));
   }
 
-  async insertLocks(approvalId: string, refs: { recordType: string; recordId: string }[]) {
+  async insertLocks(approvalId: string, refs: { recordType: SignedRecordType; recordId: string }[]) {
     if (!refs.length) return;
     await this.db.insert(recordLocks).values(refs.map((r) => ({ ...r, approvalId }))).onConflictDoNothing();
   }

@@ -2,6 +2,7 @@ import { BadRequestException, ConflictException, Injectable, Logger } from '@nes
 import type { SessionUser } from '../auth/session-user.js';
 import { assignChanges, decodeCursor, encodeCursor, toHistoryEntry, type HistoryPage } from '../history/history.mapper.js';
 import type { HistoryQueryDto } from '../history/dto/history-query.dto.js';
+import { isRecordType, RECORD_TYPE_NAMES, type CheckKind, type RecordType, type SignedRecordType } from './kinds.js';
 import type { CheckStatus } from './readiness.js';
 import { RecordsRepository } from './records.repository.js';
 
@@ -18,19 +19,19 @@ const DATE_ONLY = /^\d{4}-\d{2}-\d{2}$/;
 
 export interface AuditInput {
   machineId?: string | null;
-  recordType: string;
+  recordType: RecordType;
   recordId?: string | null;
   action: string;
   summary: string;
   changes?: Record<string, unknown>;
   /** For a recorded check: its readiness kind (not stored), so only the contributor reporting it is asked again. */
-  checkKind?: string;
+  checkKind?: CheckKind;
 }
 
 export interface CheckRecordedEvent {
   machineId: string;
-  kind: string;
-  recordType: string;
+  kind: CheckKind;
+  recordType: SignedRecordType;
   recordId: string;
   status: CheckStatus;
 }
@@ -95,15 +96,15 @@ export class RecordsService {
   }
 
   /** Refuses (409) a change to a record that an approval was based on. */
-  async assertEditable(recordType: string, recordId: string, what = 'This record'): Promise<void> {
+  async assertEditable(recordType: SignedRecordType, recordId: string, what = 'This record'): Promise<void> {
     if (await this.repo.lockOf(recordType, recordId)) throw lockedRecordConflict(what);
   }
 
-  lockedIds(recordType: string, recordIds: string[]): Promise<Set<string>> {
+  lockedIds(recordType: SignedRecordType, recordIds: string[]): Promise<Set<string>> {
     return this.repo.lockedIds(recordType, recordIds);
   }
 
-  lock(approvalId: string, refs: { recordType: string; recordId: string }[]): Promise<void> {
+  lock(approvalId: string, refs: { recordType: SignedRecordType; recordId: string }[]): Promise<void> {
     return this.repo.insertLocks(approvalId, refs);
   }
 
@@ -117,8 +118,9 @@ export class RecordsService {
     const from = query.from ? new Date(query.from) : undefined;
     const toExclusive = query.to ? (DATE_ONLY.test(query.to) ? new Date(Date.parse(query.to) + 86_400_000) : new Date(Date.parse(query.to) + 1)) : undefined;
     if (from && toExclusive && from >= toExclusive) throw new BadRequestException(['from must be before to']);
+    if (query.kind && !isRecordType(query.kind)) throw new BadRequestException([`kind must be one of ${RECORD_TYPE_NAMES.join(', ')}`]);
     const limit = query.limit ?? DEFAULT_PAGE;
-    const rows = await this.repo.historyPage(workshopId, { machineId, recordType: query.kind, person: query.person?.trim() || undefined, from, toExclusive, after, limit });
+    const rows = await this.repo.historyPage(workshopId, { machineId, recordType: query.kind as RecordType | undefined, person: query.person?.trim() || undefined, from, toExclusive, after, limit });
     const page = rows.slice(0, limit);
     const txids = [...new Set(page.map((r) => r.txid))];
     const [txEntries, changes] = await Promise.all([this.repo.entriesOfTransactions(workshopId, txids), this.repo.changesOfTransactions(workshopId, txids)]);

@@ -6,7 +6,7 @@ import type { MachineRef, ReadinessCheck, ReadinessContributor } from '../../src
  * exactly the checks that spec sets, so every state of the board can be reached on purpose.
  */
 export class FakeChecks implements ReadinessContributor {
-  readonly recordType = 'fake-check';
+  readonly recordType = 'test-cut' as const;
   private readonly byMachine = new Map<string, ReadinessCheck[]>();
 
   async checksFor(machine: MachineRef): Promise<ReadinessCheck[]> {

@@ -1,6 +1,7 @@
 import PDFDocument from 'pdfkit';
 import type { ApprovalSnapshot, BoardCheck } from '../snapshot.js';
 import { KIND_LABELS, STATUS_LABELS } from '../board.js';
+import { CHECK_KINDS } from '../../records/kinds.js';
 import { cautionsFor } from '../cautions.js';
 import { bedMapLayout, drawBedMap } from './bed-map.js';
 import { drawResultGauge, drawSeriesChart, drawSquarenessSketch, legendRows } from './charts.js';
@@ -221,11 +222,10 @@ function waivers(doc: Doc, checks: BoardCheck[]) {
 }
 
 /** Kinds charted even without a series: the result is drawn against its target instead. */
-const GAUGE_KINDS: BoardCheck['kind'][] = ['rail-straightness', 'rail-parallelism', 'positioning', 'diagonal-check', 'bed-grid', 'backlash'];
 
 function charts(doc: Doc, checks: BoardCheck[], workArea: { x: number; y: number }) {
   // A check with nothing recorded (waived before it was started) has nothing to draw; the table says so.
-  const charted = checks.filter((c) => c.series || (GAUGE_KINDS.includes(c.kind) && c.result));
+  const charted = checks.filter((c) => c.series || (CHECK_KINDS[c.kind]?.gauge && c.result));
   heading(doc, 'Charts and tables of the results');
   if (!charted.length) return para(doc, 'This machine had no rail, positioning, backlash, squareness, bed or test-cut results to chart.', 'regular', 9, MUTED);
   for (const c of charted) {

@@ -1,3 +1,4 @@
+import { CHECK_KINDS } from '../../records/kinds.js';
 import type { BoardCheck } from '../snapshot.js';
 
 const UNIT_WORDS: Record<string, string> = { um: '\u00b5m', thou: 'thou', in: 'in', mm: 'mm', 'mm/m': 'mm/m', '%': '%', days: 'days' };
@@ -12,13 +13,14 @@ export function num(v: number): string {
   return Math.abs(v) >= 100 ? String(Math.round(v)) : String(Number(v.toPrecision(3)));
 }
 
-/** Speed headroom and travel margin are minimums; part size is a ± band; the rest are maximums. */
+/** How the target reads depends on the kind's sense (records/kinds.ts): at most, at least, a ± band, every item passed. */
 export function targetText(c: Pick<BoardCheck, 'kind' | 'target'>): string {
   if (!c.target) return '\u2014';
   const value = `${num(c.target.value)} ${unitLabel(c.target.unit)}`;
-  if (c.kind === 'speed-check' || c.kind === 'travel-envelope') return `\u2265 ${value}`;
-  if (c.kind === 'test-cut') return `\u00b1 ${value}`;
-  if (c.kind === 'safety-walk') return c.target.value ? `${value}` : 'every item passed';
+  const sense = CHECK_KINDS[c.kind]?.sense ?? 'at-most';
+  if (sense === 'at-least') return `\u2265 ${value}`;
+  if (sense === 'plus-minus') return `\u00b1 ${value}`;
+  if (sense === 'all-passed') return c.target.value ? `${value}` : 'every item passed';
   return `\u2264 ${value}`;
 }
 

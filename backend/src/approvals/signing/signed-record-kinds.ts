@@ -16,26 +16,13 @@ import {
   travelTrials,
   waivers,
 } from '../../database/schema/index.js';
+import { isSignedRecordType, SIGNED_RECORD_TYPES, type SignedRecordType } from '../../records/kinds.js';
 
-/** Every kind of record an approval can stand on (the record types written to record_locks). */
-export const SIGNED_RECORD_KINDS = [
-  'machine',
-  'rail',
-  'axis',
-  'waiver',
-  'rail-sweep',
-  'bolt-down',
-  'travel-trial',
-  'positioning-run',
-  'diagonal-check',
-  'bed-grid',
-  'test-cut',
-  'safety-walk',
-  'backlash-check',
-] as const;
-export type SignedRecordKind = (typeof SIGNED_RECORD_KINDS)[number];
+/** Every kind of record an approval can stand on (the record types written to record_locks): `signed` in records/kinds.ts. */
+export const SIGNED_RECORD_KINDS: readonly SignedRecordType[] = SIGNED_RECORD_TYPES;
+export type SignedRecordKind = SignedRecordType;
 
-export const isSignedRecordKind = (value: string): value is SignedRecordKind => (SIGNED_RECORD_KINDS as readonly string[]).includes(value);
+export const isSignedRecordKind = isSignedRecordType;
 
 type TableWithId = PgTable & { id: PgColumn };
 
@@ -59,7 +46,7 @@ export interface SignedRecordSpec {
   unsigned?: readonly string[];
 }
 
-/** Where each kind of record lives. A kind added to SIGNED_RECORD_KINDS must be added here (the type insists). */
+/** Where each kind of record lives. A kind marked `signed` in records/kinds.ts must be added here (the type insists). */
 export const SIGNED_RECORDS: Record<SignedRecordKind, SignedRecordSpec> = {
   machine: { table: machines, unsigned: ['state', 'version', 'lastActivityAt', 'updatedAt'] },
   rail: { table: rails },

@@ -6,6 +6,7 @@ import { machines } from './machines.js';
 import { users } from './users.js';
 import type { ApprovalSnapshot } from '../../approvals/snapshot.js';
 import type { TargetValue } from './target-sets.js';
+import type { SignedRecordType } from '../../records/kinds.js';
 
 /**
  * An owner's written reason for letting one check pass. It belongs to the record the check had
@@ -19,7 +20,7 @@ export const waivers = pgTable(
     machineId: uuid('machine_id').notNull().references(() => machines.id),
     checkKey: text('check_key').notNull(),
     /** The check's record when waived; null for a check never started. */
-    recordType: text('record_type'),
+    recordType: text('record_type').$type<SignedRecordType>(),
     recordId: uuid('record_id'),
     reason: text('reason').notNull(),
     waivedById: uuid('waived_by_id').notNull().references(() => users.id),

@@ -3,6 +3,7 @@ import { id } from './columns.js';
 import { workshops } from './workshops.js';
 import { machines } from './machines.js';
 import { users } from './users.js';
+import type { EvidenceSubjectType, SignedRecordType } from '../../records/kinds.js';
 
 export const EVIDENCE_KINDS = ['photo', 'file'] as const;
 export type EvidenceKind = (typeof EVIDENCE_KINDS)[number];
@@ -18,12 +19,12 @@ export const evidence = pgTable(
     id: id(),
     workshopId: uuid('workshop_id').notNull().references(() => workshops.id),
     machineId: uuid('machine_id').notNull().references(() => machines.id),
-    subjectType: text('subject_type').notNull(),
+    subjectType: text('subject_type').$type<EvidenceSubjectType>().notNull(),
     subjectId: uuid('subject_id').notNull(),
     /** The subject's name when the file was attached; shown if the subject is gone later. */
     subjectLabel: text('subject_label').notNull().default(''),
     /** What approvals lock: deleting is refused once this record is part of an approval. */
-    recordType: text('record_type').notNull(),
+    recordType: text('record_type').$type<SignedRecordType>().notNull(),
     recordId: uuid('record_id').notNull(),
     kind: text('kind', { enum: EVIDENCE_KINDS }).notNull(),
     fileName: text('file_name').notNull(),

@@ -1,11 +1,12 @@
 import { integer, jsonb, pgTable, timestamp, uuid } from 'drizzle-orm/pg-core';
 import { machines } from './machines.js';
 import { workshops } from './workshops.js';
+import type { CheckKind } from '../../records/kinds.js';
 
 /** The first check that stops approval, as the machines list names it. */
 export interface BlockingCheckRef {
   key: string;
-  kind: string;
+  kind: CheckKind;
   subject: string;
   status: 'not-started' | 'outside-target';
 }
@@ -22,7 +23,7 @@ export interface BlockingCheckRef {
 export interface SummaryCheck {
   contributor: number;
   key: string;
-  kind: string;
+  kind: CheckKind;
   subject: string;
   status: 'not-started' | 'within-target' | 'outside-target';
   recordId: string | null;

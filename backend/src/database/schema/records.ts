@@ -3,6 +3,7 @@ import { sql } from 'drizzle-orm';
 import { id } from './columns.js';
 import { workshops } from './workshops.js';
 import { users } from './users.js';
+import type { RecordType, SignedRecordType } from '../../records/kinds.js';
 
 /** Who changed what, when: every create, update and delete of every record of a machine. */
 export const auditEntries = pgTable(
@@ -11,7 +12,7 @@ export const auditEntries = pgTable(
     id: id(),
     workshopId: uuid('workshop_id').notNull().references(() => workshops.id),
     machineId: uuid('machine_id'),
-    recordType: text('record_type').notNull(),
+    recordType: text('record_type').$type<RecordType>().notNull(),
     recordId: uuid('record_id'),
     action: text('action').notNull(),
     summary: text('summary').notNull().default(''),
@@ -54,7 +55,7 @@ export const recordLocks = pgTable(
   'record_locks',
   {
     id: id(),
-    recordType: text('record_type').notNull(),
+    recordType: text('record_type').$type<SignedRecordType>().notNull(),
     recordId: uuid('record_id').notNull(),
     approvalId: uuid('approval_id').notNull(),
     lockedAt: timestamp('locked_at', { withTimezone: true }).notNull().defaultNow(),
