@@ -8,7 +8,9 @@ import { board, newMachine, requestAndApprove, STATEMENT, waiveAllBut } from './
 import { ReadinessRegistry } from '../src/records/readiness.registry.js';
 import { RecordsService } from '../src/records/records.service.js';
 import { DRIZZLE, type Database } from '../src/database/database.tokens.js';
-import { approvals } from '../src/database/schema/index.js';
+import { count } from 'drizzle-orm';
+import { approvals, auditEntries, changeLog, machines } from '../src/database/schema/index.js';
+import { RecheckService } from '../src/approvals/recheck.service.js';
 import { MailService } from '../src/mail/mail.service.js';
 import type { FakeSmtpServer } from '../src/mail/fake-smtp.server.js';
 import { disposition } from './support/disposition.js';
@@ -300,29 +302,58 @@ describe('readiness board, waivers, approval and certificate', () => {
   });
 
   describe('re-checks', () => {
-    it('marks the machine re-check due when the date passes, e-mails owners and technicians once, and lists it', async () => {
+    it('reads as re-check due once the date passes without any read writing, and the schedule e-mails owners and technicians once', async () => {
       const machineId = await newMachine(ws, 'Recheck router');
       fake.seed(machineId);
       await waiveAllBut(ws, machineId, isFake);
       const a = await requestAndApprove(ws, machineId, TEST_PASSWORD);
       const db = app.get<Database>(DRIZZLE);
+      expect(await app.get(RecheckService).remindDue()).toBe(0); // not due yet: nothing to send
       await db.update(approvals).set({ recheckDueAt: new Date(Date.now() - 60_000) }).where(eq(approvals.id, a.id));
+      // Everything the reads could write: the machine's row, the approval's row, the history.
+      const written = async () => ({
+        machine: (await db.select().from(machines).where(eq(machines.id, machineId)))[0],
+        approval: (await db.select().from(approvals).where(eq(approvals.id, a.id)))[0],
+        audit: (await db.select({ n: count() }).from(auditEntries).where(eq(auditEntries.machineId, machineId)))[0].n,
+        changes: (await db.select({ n: count() }).from(changeLog).where(eq(changeLog.workshopId, ws.id)))[0].n,
+      });
+      const before = await written();
+      expect(before.machine.state).toBe('ready-to-cut');
       const list = await ws.as.viewer.get('/api/machines');
       expect(list.body.find((m: { id: string }) => m.id === machineId).state).toBe('recheck-due');
-      expect((await board(ws, machineId)).state).toBe('recheck-due');
-      await board(ws, machineId);
+      expect((await ws.as.viewer.get(`/api/machines/${machineId}`)).body.state).toBe('recheck-due');
+      const b = await board(ws, machineId);
+      expect([b.state, b.recheckDueAt]).toEqual(['recheck-due', expect.any(String)]);
+      expect((await ws.as.viewer.get(`/api/machines/${machineId}/approvals`)).body[0]).toMatchObject({ id: a.id, recheckDue: true });
+      const token = before.approval.verificationToken!;
+      expect((await anonymous(app).get(`/api/public/verify/${token}`)).body).toMatchObject({ stands: true, recheckDue: true });
+      expect(await written()).toEqual(before);
+      // A request while due is refused in the state's own words.
+      const requestRefused = await ws.as.technician.post(`/api/machines/${machineId}/approval-requests`);
+      expect([requestRefused.status, requestRefused.body.message]).toEqual([409, expect.stringMatching(/approved and due for its re-check/)]);
+
+      // The schedule's job sends the reminder once, however often it runs.
+      const recheck = app.get(RecheckService);
+      expect(await recheck.remindDue()).toBe(1);
+      expect(await recheck.remindDue()).toBe(0);
       await smtp.waitFor((m) => m.subject === 'Re-check due: Recheck router');
+      await new Promise((r) => setTimeout(r, 200));
       const mails = smtp.messages.filter((m) => m.subject === 'Re-check due: Recheck router');
       expect(mails).toHaveLength(1);
       expect([...mails[0].envelopeTo].sort()).toEqual([ws.emails.owner, ws.emails.technician].sort());
+      expect(mails[0].text).toContain(`/machines/${machineId}?tab=readiness`);
+      expect((await written()).approval.recheckNotifiedAt).not.toBeNull();
       const history = await ws.as.viewer.get(`/api/machines/${machineId}/history?limit=200`);
       expect(history.body.entries[0]).toMatchObject({ action: 'state-changed', changes: { state: { from: 'ready-to-cut', to: 'recheck-due' } } });
       // A re-check round: the owner reopens the machine, and it is approved again through the same flow.
       expect((await ws.as.owner.post(`/api/machines/${machineId}/reopen`).send({ reason: 'Six-monthly re-check' })).status).toBe(201);
+      const reopened = await ws.as.viewer.get(`/api/machines/${machineId}/history?limit=200`);
+      expect(reopened.body.entries.find((e: { action: string }) => e.action === 'state-changed')).toMatchObject({ changes: { state: { from: 'recheck-due', to: 'reopened' } } });
       fake.record(machineId, 'fake-straightness:Y1', 13.1, 'within-target');
       const again = await requestAndApprove(ws, machineId, TEST_PASSWORD);
       expect(again.recordHash).not.toBe(a.recordHash);
       expect((await board(ws, machineId)).state).toBe('ready-to-cut');
+      expect(await recheck.remindDue()).toBe(0);
     });
   });
 });

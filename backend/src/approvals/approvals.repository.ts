@@ -2,6 +2,7 @@ import { Inject, Injectable } from '@nestjs/common';
 import { and, asc, desc, eq, inArray, isNull, lte, sql } from 'drizzle-orm';
 import { DRIZZLE, type Database } from '../database/database.tokens.js';
 import { approvalRequests, approvals, axes, machines, rails, users, waivers, workshops } from '../database/schema/index.js';
+import { APPROVED_STATES } from '../database/schema/machines.js';
 
 export type WaiverRow = typeof waivers.$inferSelect;
 export type ApprovalRow = typeof approvals.$inferSelect;
@@ -117,24 +118,25 @@ export class ApprovalsRepository {
       .orderBy(desc(approvals.approvedAt));
   }
 
-  /** The standing approval of each machine in the given states (all workshops when workshopId is null). */
-  async latestApprovalsOfMachinesIn(workshopId: string | null, states: ('ready-to-cut' | 'recheck-due')[]) {
-    const rows = await this.db
-      .selectDistinctOn([approvals.machineId], { approval: approvals, state: machines.state, machineName: machines.name })
+  /**
+   * Standing approvals whose re-check date has passed and whose reminder has not gone out, of
+   * every workshop, with their machine's name. Read only by the re-check reminder job.
+   */
+  dueRecheckReminders(now: Date) {
+    return this.db
+      .select({ approval: approvals, machineName: machines.name })
       .from(approvals)
       .innerJoin(machines, eq(machines.id, approvals.machineId))
-      // Only the approval that stands: an earlier one, reopened, no longer asks for its re-check.
-      .where(and(inArray(machines.state, states), isNull(approvals.endedAt), workshopId ? eq(approvals.workshopId, workshopId) : undefined))
-      .orderBy(approvals.machineId, desc(approvals.approvedAt));
-    return rows;
+      .where(and(isNull(approvals.endedAt), isNull(approvals.recheckNotifiedAt), lte(approvals.recheckDueAt, now), inArray(machines.state, [...APPROVED_STATES])))
+      .orderBy(asc(approvals.recheckDueAt));
   }
 
-  /** True for the one caller that marks the re-check mail as sent. */
-  async markRecheckNotified(approvalId: string): Promise<boolean> {
+  /** True for the one caller that marks the re-check mail as sent (a standing approval, once). */
+  async markRecheckNotified(approvalId: string, now: Date): Promise<boolean> {
     const rows = await this.db
       .update(approvals)
-      .set({ recheckNotifiedAt: new Date() })
-      .where(and(eq(approvals.id, approvalId), isNull(approvals.recheckNotifiedAt), lte(approvals.recheckDueAt, new Date())))
+      .set({ recheckNotifiedAt: now })
+      .where(and(eq(approvals.id, approvalId), isNull(approvals.recheckNotifiedAt), isNull(approvals.endedAt), lte(approvals.recheckDueAt, now)))
       .returning({ id: approvals.id });
     return rows.length > 0;
   }

@@ -13,7 +13,6 @@ import { ApprovalsRepository } from './approvals.repository.js';
 import { toApprovalResponse, toBlocking, toCheckResponse, toRequestResponse } from './approval.mapper.js';
 import { KIND_LABELS } from './board.js';
 import { ReadinessBoardService } from './readiness-board.service.js';
-import { RecheckService } from './recheck.service.js';
 import { snapshotHash } from './snapshot.js';
 import { defaultStatement } from './statement.js';
 import { cautionsFor } from './cautions.js';
@@ -32,7 +31,6 @@ export class ApprovalsService implements OnModuleInit {
     private readonly machines: MachinesService,
     private readonly records: RecordsService,
     private readonly auth: AuthService,
-    private readonly recheck: RecheckService,
     private readonly notifier: ApprovalNotifier,
     private readonly mail: MailService,
     private readonly targetSets: TargetSetsService,
@@ -44,13 +42,9 @@ export class ApprovalsService implements OnModuleInit {
   }
 
   async readiness(actor: SessionUser, machineId: string) {
-    // Another workshop's machine is a 404 from the board's first statement, which also tells
-    // whether a re-check date has passed: only then does the schedule act, and the board is read again.
-    let b = await this.board.board(actor, machineId);
-    if (b.recheckDue) {
-      await this.recheck.sweepWorkshop(actor.workshopId);
-      b = await this.board.board(actor, machineId);
-    }
+    // Another workshop's machine is a 404 from the board's first statement, which also gives the
+    // state the machine reads as now (re-check due once the date has passed; nothing is written).
+    const b = await this.board.board(actor, machineId);
     const [approval, request] = await Promise.all([this.repo.latestApproval(actor.workshopId, machineId), this.repo.openRequest(actor.workshopId, machineId)]);
     return {
       machineId,

@@ -16,9 +16,8 @@ export const SUMMARY_VERSION = 3;
 
 
 export interface ReadinessEvaluation {
+  /** In the state it reads as now: "recheck-due" once the standing approval's date has passed. */
   machine: MachineRef & { name: string; state: MachineState };
-  /** An approval's re-check date has passed unhandled: the schedule should act before this is shown. */
-  recheckDue: boolean;
   checks: BoardCheck[];
   blocking: BoardCheck[];
   targetSet: { id: string; name: string; recheckIntervalDays: number };
@@ -88,7 +87,6 @@ export class ReadinessSummaryService implements OnModuleInit, OnApplicationBoots
     const interval = targetSet.targets.recheckIntervalDays;
     return {
       machine: found.machine,
-      recheckDue: found.recheckDue,
       checks,
       blocking: blockingOf(checks),
       targetSet: { id: targetSet.id, name: targetSet.name, recheckIntervalDays: Math.round(interval?.value ?? 180) },
