@@ -48,9 +48,12 @@ const CONTENT_SECURITY_POLICY = {
   },
 };
 
+/** Every API route is under /api; everything else is the single-page app. */
+export const API_PREFIX = 'api';
+
 /** Everything main.ts and the API tests share: prefix, sessions, validation, static files, filters. */
 export async function configureApp(app: NestFastifyApplication, config: AppConfig): Promise<void> {
-  app.setGlobalPrefix('api');
+  app.setGlobalPrefix(API_PREFIX);
   const fastify = app.getHttpAdapter().getInstance() as unknown as FastifyInstance;
   registerRequestGuards(fastify, {
     allowedOrigins: [config.appUrl, ...config.extraOrigins],

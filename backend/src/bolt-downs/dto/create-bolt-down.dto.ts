@@ -3,6 +3,7 @@ import { BOLT_DOWN_MODES, type BoltDownMode, type BoltDownUnit } from '../../dat
 import { LengthUnitField, ReadingUnitField } from '../../common/unit-fields.js';
 import { ReplacedUnitField } from '../../rails/dto/replaced-unit.js';
 import { Optional } from '../../common/optional.js';
+import { ApiHideProperty } from '@nestjs/swagger';
 
 export class CreateBoltDownDto {
   /** "face": aim every hole at the first fixed reading; "line": at the line through the nearest fixed holes. */
@@ -18,6 +19,7 @@ export class CreateBoltDownDto {
   lengthUnit?: BoltDownUnit;
 
   @ReplacedUnitField()
+  @ApiHideProperty() // refused when sent, so not part of the described request
   unit?: never;
 
   /**

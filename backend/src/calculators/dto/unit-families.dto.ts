@@ -1,6 +1,7 @@
 import { ValidateIf, Equals } from 'class-validator';
 import { LengthUnitField, ReadingUnitField, UNIT_FAMILY_HINT } from '../../common/unit-fields.js';
 import type { LengthUnit } from '../../engine/units.js';
+import { ApiHideProperty } from '@nestjs/swagger';
 
 /**
  * The two unit families every calculator takes (both mm when absent), with the same meanings as
@@ -20,5 +21,6 @@ export class UnitFamiliesDto {
   // refused with a message that names its replacements rather than the pipe's "should not exist".
   @ValidateIf((_: object, v: unknown) => v !== undefined)
   @Equals(undefined, { message: `unit is no longer accepted: send lengthUnit and readingUnit instead (${UNIT_FAMILY_HINT})` })
+  @ApiHideProperty() // refused when sent, so not part of the described request
   unit?: never;
 }

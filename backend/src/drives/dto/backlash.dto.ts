@@ -4,6 +4,7 @@ import { Optional } from '../../common/optional.js';
 import { LengthUnitField, ReadingUnitField, UNIT_FAMILY_HINT } from '../../common/unit-fields.js';
 import type { LengthUnit } from '../../engine/units.js';
 import { MIN_APPROACHES } from '../../engine/backlash.js';
+import { ApiHideProperty } from '@nestjs/swagger';
 
 const FINITE = { allowNaN: false, allowInfinity: false } as const;
 
@@ -31,6 +32,7 @@ export class CreateBacklashCheckDto {
   /** The single unit field of earlier versions: refused with a pointer to the two families. */
   @Optional()
   @IsEmpty({ message: `unit is no longer accepted: send lengthUnit for the positions and readingUnit for the readings (${UNIT_FAMILY_HINT})` })
+  @ApiHideProperty() // refused when sent, so not part of the described request
   unit?: never;
 
   @LengthUnitField()

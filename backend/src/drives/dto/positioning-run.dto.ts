@@ -6,6 +6,7 @@ import { LengthUnitField, ReadingUnitField } from '../../common/unit-fields.js';
 import { Optional } from '../../common/optional.js';
 import { ReplacedUnitField } from './replaced-unit.js';
 import { TemperatureFieldsDto } from './temperature-fields.js';
+import { ApiHideProperty } from '@nestjs/swagger';
 
 const FINITE = { allowNaN: false, allowInfinity: false } as const;
 
@@ -31,6 +32,7 @@ export class CreatePositioningRunDto extends TemperatureFieldsDto {
 
   /** The old single unit field: refused, naming lengthUnit and readingUnit. */
   @ReplacedUnitField()
+  @ApiHideProperty() // refused when sent, so not part of the described request
   unit?: undefined;
 
   /** Target positions along the axis, in lengthUnit, ascending. */

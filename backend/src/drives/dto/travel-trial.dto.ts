@@ -6,6 +6,7 @@ import { Finite, OptionalFinite } from './validators.js';
 import { Optional } from '../../common/optional.js';
 import { ReplacedUnitField } from './replaced-unit.js';
 import { TemperatureFieldsDto } from './temperature-fields.js';
+import { ApiHideProperty } from '@nestjs/swagger';
 
 export class TravelMoveDto {
   /** Commanded move, in lengthUnit. */
@@ -28,6 +29,7 @@ export class CreateTravelTrialDto extends TemperatureFieldsDto {
 
   /** The old single unit field: refused, naming lengthUnit and readingUnit. */
   @ReplacedUnitField()
+  @ApiHideProperty() // refused when sent, so not part of the described request
   unit?: undefined;
 
   /** Steps per mm in the controller while the moves were made; the axis's value when absent. */

@@ -4,6 +4,7 @@ import type { LengthUnit } from '../../engine/units.js';
 import { LengthUnitField, ReadingUnitField } from '../../common/unit-fields.js';
 import { FiniteNumber, NoSingleUnit, OptionalNote, OptionalPositive } from './fields.js';
 import { Optional } from '../../common/optional.js';
+import { ApiHideProperty } from '@nestjs/swagger';
 
 export const MAX_GRID_POINTS = 2500;
 
@@ -31,6 +32,7 @@ export class CreateBedGridDto {
   readingUnit?: LengthUnit;
 
   @NoSingleUnit()
+  @ApiHideProperty() // refused when sent, so not part of the described request
   unit?: unknown;
 
   /** Smallest step of the height gauge, in readingUnit. */

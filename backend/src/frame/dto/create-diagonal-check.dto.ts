@@ -2,6 +2,7 @@ import type { LengthUnit } from '../../engine/units.js';
 import { LengthUnitField } from '../../common/unit-fields.js';
 import { NoSingleUnit, OptionalNote, OptionalPositive, PositiveLength } from './fields.js';
 import { Optional } from '../../common/optional.js';
+import { ApiHideProperty } from '@nestjs/swagger';
 
 /**
  * A rectangle the machine marked or cut (or the frame): its two sides, both diagonals and the
@@ -33,6 +34,7 @@ export class CreateDiagonalCheckDto {
   lengthUnit?: LengthUnit;
 
   @NoSingleUnit()
+  @ApiHideProperty() // refused when sent, so not part of the described request
   unit?: unknown;
 
   @OptionalNote()

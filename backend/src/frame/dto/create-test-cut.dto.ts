@@ -5,6 +5,7 @@ import type { LengthUnit } from '../../engine/units.js';
 import { LengthUnitField } from '../../common/unit-fields.js';
 import { NoSingleUnit, OptionalNote, OptionalPositive, PositiveLength } from './fields.js';
 import { Optional } from '../../common/optional.js';
+import { ApiHideProperty } from '@nestjs/swagger';
 
 export class TestCutNominalDto {
   @PositiveLength('nominal.x')
@@ -64,6 +65,7 @@ export class CreateTestCutDto {
   lengthUnit?: LengthUnit;
 
   @NoSingleUnit()
+  @ApiHideProperty() // refused when sent, so not part of the described request
   unit?: unknown;
 
   /** Thickness of the plate cut, in lengthUnit: with the part size it picks the ISO 9013 band. */

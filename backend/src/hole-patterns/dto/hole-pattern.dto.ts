@@ -4,6 +4,7 @@ import { Type } from 'class-transformer';
 import { ArrayMaxSize, ArrayMinSize, IsArray, IsIn, IsInt, IsNumber, IsObject, IsString, Max, MaxLength, Min, MinLength, ValidateIf, ValidateNested } from 'class-validator';
 import { Optional } from '../../common/optional.js';
 import { PATTERN_ENTRIES, PATTERN_REFERENCES, PATTERN_UNITS, type PatternEntryKind, type PatternReference, type PatternUnit } from '../../database/schema/hole-patterns.js';
+import { ApiHideProperty } from '@nestjs/swagger';
 
 const FINITE = { allowNaN: false, allowInfinity: false } as const;
 /** Coordinates and sizes are bounded in the entered unit here; the service bounds them in mm. */
@@ -111,6 +112,7 @@ export class HolePatternDto {
   lengthUnit?: PatternUnit;
 
   @ReplacedUnitField()
+  @ApiHideProperty() // refused when sent, so not part of the described request
   unit?: never;
 
   @IsNumber(FINITE, { message: 'width must be the outline’s width, in lengthUnit' })

@@ -3,6 +3,7 @@ import type { LengthUnit } from '../../engine/units.js';
 import { LengthUnitField } from '../../common/unit-fields.js';
 import { Optional } from '../../common/optional.js';
 import { ReplacedUnitField } from './replaced-unit.js';
+import { ApiHideProperty } from '@nestjs/swagger';
 
 const FINITE = { allowNaN: false, allowInfinity: false } as const;
 const IN_UNIT = 'in lengthUnit (mm when absent)';
@@ -24,6 +25,7 @@ export class CreateRailDto {
   lengthUnit?: LengthUnit;
 
   @ReplacedUnitField()
+  @ApiHideProperty() // refused when sent, so not part of the described request
   unit?: never;
 
   @IsDefined({ message: 'length is required, in lengthUnit' })

@@ -20,6 +20,7 @@ import { Optional } from '../../common/optional.js';
 import { LengthUnitField, ReadingUnitField } from '../../common/unit-fields.js';
 import type { LengthUnit } from '../../engine/units.js';
 import { ReplacedUnitField } from './replaced-unit.js';
+import { ApiHideProperty } from '@nestjs/swagger';
 
 const FINITE = { allowNaN: false, allowInfinity: false } as const;
 export const MAX_STATIONS = 2000;
@@ -50,6 +51,7 @@ export class CreateSweepDto {
   lengthUnit?: LengthUnit;
 
   @ReplacedUnitField()
+  @ApiHideProperty() // refused when sent, so not part of the described request
   unit?: never;
 
   /** The face the indicator reads: side (sideways straightness) or top (heights); side when absent. */
