@@ -7,7 +7,7 @@ import type { MachineRow } from './machine.mapper.js';
 import { machineStateNow } from './machine-state.js';
 
 // Every read of a machine gives the state it reads as now (a passed re-check date included).
-const machineNow = { ...getTableColumns(machines), state: machineStateNow(machines) };
+const machineNow = { ...getTableColumns(machines), state: machineStateNow() };
 
 @Injectable()
 export class MachinesRepository {

@@ -48,7 +48,7 @@ export class ReadinessSummaryRepository {
       s_version: number | null;
     }>(sql`
       select m.id, m.workshop_id, m.target_set_id, m.kind, m.work_area_x_mm, m.work_area_y_mm, m.name,
-             ${machineStateNow({ id: sql`m.id`, state: sql`m.state` })} as state,
+             ${machineStateNow(sql`m`)} as state,
              t.id as t_id, t.name as t_name, t.targets,
              coalesce((
                select jsonb_agg(jsonb_build_object(

@@ -38,7 +38,7 @@ export class TargetSetsRepository {
   /** The workshop's machines judged against each target set (one query for every set). */
   machinesUsing(workshopId: string) {
     return this.db
-      .select({ targetSetId: machines.targetSetId, id: machines.id, name: machines.name, state: machineStateNow(machines) })
+      .select({ targetSetId: machines.targetSetId, id: machines.id, name: machines.name, state: machineStateNow() })
       .from(machines)
       .where(eq(machines.workshopId, workshopId))
       .orderBy(asc(machines.name));
