@@ -1,4 +1,7 @@
-/** The one way the client talks to the server: JSON over fetch, errors as ApiError. */
+import createClient, { type Middleware } from 'openapi-fetch';
+import type { paths } from './api/schema';
+
+/** The one way the client talks to the server: JSON over fetch, typed by the server's description, errors as ApiError. */
 export class ApiError extends Error {
   constructor(
     readonly status: number,
@@ -17,35 +20,19 @@ function messagesOf(body: unknown): string[] {
   return typeof m === 'string' ? [m] : [];
 }
 
+/** A refusal, with the server's messages (a 400 lists one per field). */
+export function apiErrorOf(status: number, body: unknown): ApiError {
+  const details = messagesOf(body);
+  return new ApiError(status, details[0] ?? `The server answered ${status}`, details, body);
+}
+
+export const NO_ANSWER_MESSAGE = 'The server could not be reached. Check the connection and try again.';
+
 let noAnswerListener: (() => void) | null = null;
 
 /** Called whenever a request gets no answer at all (the offline support listens: lib/offline/connection.ts). */
 export function onNoAnswer(listener: () => void): void {
   noAnswerListener = listener;
-}
-
-export async function apiFetch<T>(path: string, init: RequestInit & { json?: unknown } = {}): Promise<T> {
-  const { json, headers, ...rest } = init;
-  let res: Response;
-  try {
-    res = await fetch(`/api${path}`, {
-      credentials: 'same-origin',
-      ...rest,
-      headers: { Accept: 'application/json', ...(json !== undefined ? { 'Content-Type': 'application/json' } : {}), ...headers },
-      body: json !== undefined ? JSON.stringify(json) : rest.body,
-    });
-  } catch {
-    noAnswerListener?.();
-    throw new ApiError(0, 'The server could not be reached. Check the connection and try again.');
-  }
-  if (res.status === 204) return undefined as T;
-  const text = await res.text();
-  const body = text ? safeParse(text) : null;
-  if (!res.ok) {
-    const details = messagesOf(body);
-    throw new ApiError(res.status, details[0] ?? `The server answered ${res.status}`, details, body);
-  }
-  return body as T;
 }
 
 function safeParse(text: string): unknown {
@@ -56,10 +43,45 @@ function safeParse(text: string): unknown {
   }
 }
 
+/** No answer at all and refusals both end as ApiError, so a caller only ever sees the answer's data. */
+const answersOrApiError: Middleware = {
+  onError() {
+    noAnswerListener?.();
+    return new ApiError(0, NO_ANSWER_MESSAGE);
+  },
+  async onResponse({ response }) {
+    if (response.ok) return undefined;
+    const text = await response.text();
+    throw apiErrorOf(response.status, text ? safeParse(text) : null);
+  },
+};
+
+/**
+ * `client.GET('/api/machines/{id}', { params: { path: { id } } })`: paths, parameters, bodies and
+ * answers are the ones in backend/openapi.json (types in ./api/schema.d.ts, generated from it).
+ */
+export const client = createClient<paths>({ credentials: 'same-origin', headers: { Accept: 'application/json' } });
+client.use(answersOrApiError);
+
+/** The answer's data; a refusal has been thrown as ApiError already. */
+export async function answer<T>(call: Promise<{ data?: T }>): Promise<T> {
+  return (await call).data as T;
+}
+
+/**
+ * A request whose path is known only at run time: an entry kept on the device (lib/offline) holds
+ * the concrete path it was made for, without /api. Same client, same errors.
+ */
+export function sendTo<T>(method: 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE', path: string, body?: unknown, headers: Record<string, string> = {}): Promise<T> {
+  const request = client.request as unknown as (method: string, path: string, init: { body?: unknown; headers: Record<string, string> }) => Promise<{ data?: T }>;
+  return answer(request(method, `/api${path}`, { body, headers }));
+}
+
+/** Untyped calls, left only where a feature still uses its own copies of the server's shapes. */
 export const api = {
-  get: <T>(path: string) => apiFetch<T>(path),
-  post: <T>(path: string, json?: unknown) => apiFetch<T>(path, { method: 'POST', json: json ?? {} }),
-  put: <T>(path: string, json: unknown) => apiFetch<T>(path, { method: 'PUT', json }),
-  patch: <T>(path: string, json: unknown) => apiFetch<T>(path, { method: 'PATCH', json }),
-  delete: <T>(path: string) => apiFetch<T>(path, { method: 'DELETE' }),
+  get: <T>(path: string) => sendTo<T>('GET', path),
+  post: <T>(path: string, json?: unknown) => sendTo<T>('POST', path, json ?? {}),
+  put: <T>(path: string, json: unknown) => sendTo<T>('PUT', path, json),
+  patch: <T>(path: string, json: unknown) => sendTo<T>('PATCH', path, json),
+  delete: <T>(path: string) => sendTo<T>('DELETE', path),
 };

@@ -1,5 +1,5 @@
 import { onlineManager, type QueryClient, type QueryKey } from '@tanstack/react-query';
-import { ApiError, apiFetch, onNoAnswer } from '../api-client';
+import { ApiError, onNoAnswer, sendTo } from '../api-client';
 import { noteNoAnswer } from './connection';
 import { newClientId } from '../client-id';
 import { setSessionOwner, whenSignedInAs } from './session-owner';
@@ -42,7 +42,7 @@ export async function sendCommand<T>(v: CommandVariables): Promise<T> {
       // Photos and files are the rare entry: their sender is loaded when one is sent, keeping
       // it off the sign-in page's download.
       if (v.form) return await (await import('./send-form')).sendForm<T>(v.path, v.key, v.form, noteNoAnswer);
-      return await apiFetch<T>(v.path, { method: v.method, json: v.body ?? (v.method === 'DELETE' ? undefined : {}), headers: { 'Idempotency-Key': v.key } });
+      return await sendTo<T>(v.method, v.path, v.body ?? (v.method === 'DELETE' ? undefined : {}), { 'Idempotency-Key': v.key });
     } catch (err) {
       if (!(err instanceof ApiError) || err.status !== 401) throw err;
       setSessionOwner(null);
