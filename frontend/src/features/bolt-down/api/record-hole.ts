@@ -1,4 +1,5 @@
 import { useQueryClient } from '@tanstack/react-query';
+import type { Schemas } from '../../../lib/api/schemas';
 import { MACHINE_STATE_KEYS } from '../../../lib/machine-state-keys';
 import { newCommandKey } from '../../../lib/offline/commands';
 import { useCommand } from '../../../lib/offline/use-command';
@@ -17,11 +18,7 @@ export interface RecordHoleInput {
 export const holePath = (boltDownId: string, index?: number) => `/bolt-downs/${boltDownId}/holes/${index ?? ''}`;
 
 /** Body of a hole write, as the guide reads it back from a waiting entry to show it before it is sent. */
-export interface HoleWriteBody {
-  reading: number;
-  fixed: boolean;
-  writeId: string;
-}
+export type HoleWriteBody = Schemas['RecordHoleDto'];
 
 /** Queries a hole write changes: the bolt-down, the rail's list of them, and the machine's state. */
 export const holeRefreshKeys = (bd: Pick<BoltDown, 'id' | 'railId'>) => [boltDownKeys.detail(bd.id), boltDownKeys.forRail(bd.railId), ...MACHINE_STATE_KEYS];

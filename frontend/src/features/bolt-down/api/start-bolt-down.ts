@@ -1,14 +1,9 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
-import type { LengthUnit } from '../../../lib/units';
-import { boltDownKeys, type BoltDown, type BoltDownMode } from '../types';
+import type { Schemas } from '../../../lib/api/schemas';
+import { boltDownKeys, type BoltDown } from '../types';
 
-export interface StartBoltDownInput {
-  mode: BoltDownMode;
-  readingUnit: LengthUnit;
-  /** Half-width of the on-target band in `readingUnit`; the server's default when absent. */
-  band?: number;
-}
+export type StartBoltDownInput = Schemas['CreateBoltDownDto'];
 
 export function useStartBoltDown(railId: string) {
   const qc = useQueryClient();

@@ -1,19 +1,10 @@
 import { MACHINE_STATE_KEYS } from '../../../lib/machine-state-keys';
 import { useRecording } from '../../../lib/offline/use-command';
-import type { LengthUnit } from '../../../lib/units';
+import type { Schemas } from '../../../lib/api/schemas';
 import { frameKeys, type BedGrid } from '../types';
 
-export interface BedGridInput {
-  lengthUnit: LengthUnit;
-  readingUnit: LengthUnit;
-  /** Smallest step of the height gauge, in readingUnit. */
-  resolution?: number;
-  rows: number;
-  columns: number;
-  /** Positions in lengthUnit, heights in readingUnit, row by row. */
-  points: { x: number; y: number; z: number }[];
-  note?: string;
-}
+/** Positions in lengthUnit, heights in readingUnit, row by row. */
+export type BedGridInput = Schemas['CreateBedGridDto'];
 
 /** Records a bed grid through the device's queue of entries: sent at once with a connection, kept and sent once when it returns. */
 export function useCreateBedGrid(machineId: string) {

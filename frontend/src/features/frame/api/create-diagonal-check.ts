@@ -1,19 +1,9 @@
 import { MACHINE_STATE_KEYS } from '../../../lib/machine-state-keys';
 import { useRecording } from '../../../lib/offline/use-command';
-import type { LengthUnit } from '../../../lib/units';
+import type { Schemas } from '../../../lib/api/schemas';
 import { frameKeys, type DiagonalCheck } from '../types';
 
-export interface DiagonalCheckInput {
-  sideX: number;
-  sideY: number;
-  diagonal1: number;
-  diagonal2: number;
-  gantrySpan?: number;
-  /** Smallest step of the tape or rule, in lengthUnit. */
-  resolution?: number;
-  lengthUnit: LengthUnit;
-  note?: string;
-}
+export type DiagonalCheckInput = Schemas['CreateDiagonalCheckDto'];
 
 /** Records a diagonal check through the device's queue of entries: sent at once with a connection, kept and sent once when it returns. */
 export function useCreateDiagonalCheck(machineId: string) {

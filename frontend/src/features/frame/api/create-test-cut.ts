@@ -1,20 +1,9 @@
 import { MACHINE_STATE_KEYS } from '../../../lib/machine-state-keys';
 import { useRecording } from '../../../lib/offline/use-command';
-import type { LengthUnit } from '../../../lib/units';
+import type { Schemas } from '../../../lib/api/schemas';
 import { frameKeys, type TestCut } from '../types';
 
-export interface TestCutInput {
-  lengthUnit: LengthUnit;
-  /** Thickness of the plate cut, in lengthUnit. */
-  plateThickness?: number;
-  /** Smallest step of the caliper or rule, in lengthUnit. */
-  resolution?: number;
-  nominal: { x: number; y: number; circle: number };
-  measured: { x: number; y: number; diagonal1: number; diagonal2: number; circleX: number; circleY: number; kerf?: number };
-  circleKind: 'hole' | 'disc';
-  stepsPerMm?: { x?: number; y?: number };
-  note?: string;
-}
+export type TestCutInput = Schemas['CreateTestCutDto'];
 
 /** Records a test cut through the device's queue of entries: sent at once with a connection, kept and sent once when it returns. */
 export function useCreateTestCut(machineId: string) {

@@ -1,17 +1,10 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
 import { machineKeys } from '../../../lib/machine-keys';
-import type { Machine, MachineKind } from '../types';
-import type { LengthUnit } from '../../../lib/units';
+import type { Machine } from '../types';
+import type { Schemas } from '../../../lib/api/schemas';
 
-export interface CreateMachineInput {
-  name: string;
-  kind: MachineKind;
-  lengthUnit: LengthUnit;
-  workArea: { x: number; y: number };
-  notes?: string;
-  targetSetId?: string;
-}
+export type CreateMachineInput = Schemas['CreateMachineDto'];
 
 export function useCreateMachine() {
   const qc = useQueryClient();

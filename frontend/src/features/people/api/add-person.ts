@@ -1,14 +1,10 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
-import type { Role } from '../../../lib/session/user';
+import type { Schemas } from '../../../lib/api/schemas';
 import { peopleKeys, type Person } from '../types';
 import type { InvitationResult } from './resend-invitation';
 
-export interface AddPersonInput {
-  name: string;
-  email: string;
-  role: Role;
-}
+export type AddPersonInput = Schemas['CreatePersonDto'];
 
 export function useAddPerson() {
   const qc = useQueryClient();

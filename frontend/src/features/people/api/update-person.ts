@@ -1,12 +1,12 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
-import type { Role } from '../../../lib/session/user';
+import type { Schemas } from '../../../lib/api/schemas';
 import { peopleKeys, type Person } from '../types';
 
 export function useUpdatePerson() {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: ({ id, ...patch }: { id: string; role?: Role; active?: boolean }) => api.patch<Person>(`/people/${id}`, patch),
+    mutationFn: ({ id, ...patch }: { id: string } & Schemas['UpdatePersonDto']) => api.patch<Person>(`/people/${id}`, patch),
     onSettled: () => qc.invalidateQueries({ queryKey: peopleKeys.all }),
   });
 }

@@ -1,12 +1,10 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
 import { MACHINE_STATE_KEYS } from '../../../lib/machine-state-keys';
-import { safetyKeys, type SafetySection } from '../types';
+import type { Schemas } from '../../../lib/api/schemas';
+import { safetyKeys } from '../types';
 
-export interface SafetyItemInput {
-  section: SafetySection;
-  text: string;
-}
+export type SafetyItemInput = Schemas['CreateSafetyItemDto'];
 
 /** Adds a workshop item, asked on every machine's walk. */
 export function useAddSafetyItem() {

@@ -2,15 +2,14 @@ import { useQueryClient } from '@tanstack/react-query';
 import { useCommand } from '../../../lib/offline/use-command';
 import { sessionOwner, sessionOwnerName } from '../../../lib/offline/session-owner';
 import { MACHINE_STATE_KEYS } from '../../../lib/machine-state-keys';
-import { safetyKeys, type SafetyAnswer, type SafetyWalk } from '../types';
+import type { Schemas } from '../../../lib/api/schemas';
+import { safetyKeys, type SafetyWalk } from '../types';
 
-export interface AnswerInput {
+export type AnswerInput = Schemas['AnswerItemDto'] & {
   itemId: string;
   /** The item's words, for the list of entries waiting to be sent. */
   itemText: string;
-  answer: SafetyAnswer;
-  note?: string;
-}
+};
 
 /**
  * Answers one item of the walk. Shown at once (kept on the device and sent when the connection
