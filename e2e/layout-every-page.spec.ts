@@ -100,8 +100,9 @@ async function demoIds(page: Page) {
   expect(rails.length && axes.length && patterns.length).toBeTruthy();
   // The approved demo router's certificate address, which anyone holding the paper opens.
   const router = machines.find((m) => m.name === 'Small router')!;
-  const approvals: { verificationPath: string | null }[] = await (await page.request.get(`/api/machines/${router.id}/approvals`)).json();
-  const verify = approvals.find((a) => a.verificationPath)?.verificationPath;
+  const approvals: { verificationToken: string | null }[] = await (await page.request.get(`/api/machines/${router.id}/approvals`)).json();
+  const token = approvals.find((a) => a.verificationToken)?.verificationToken;
+  const verify = token ? `/verify/${token}` : undefined;
   expect(verify).toMatch(/^\/verify\//);
   return { machine: plasma.id, rail: rails[0].id, axis: axes[0].id, pattern: patterns[0].id, verify: verify! };
 }

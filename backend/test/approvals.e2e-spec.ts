@@ -60,7 +60,7 @@ describe('readiness board, waivers, approval and certificate', () => {
       const b = await board(ws, machineId);
       expect(b.state).toBe('being-built');
       const y1 = b.checks.find((c) => c.key === 'fake-straightness:Y1');
-      expect(y1).toMatchObject({ kind: 'rail-straightness', subject: 'Rail Y1 (left)', status: 'within-target', target: { value: 20, unit: 'um' }, result: { value: 12.5, unit: 'µm' }, link: expect.stringContaining(machineId), recordType: 'test-cut', waiver: null });
+      expect(y1).toMatchObject({ kind: 'rail-straightness', subject: 'Rail Y1 (left)', status: 'within-target', target: { value: 20, unit: 'um' }, result: { value: 12.5, unit: 'µm' }, place: { machineId, tab: 'rails' }, recordType: 'test-cut', waiver: null });
       expect(b.blocking.some((c) => isFake(c.key))).toBe(false);
       expect(b.defaultStatement).toMatch(/ready to cut/);
     });

@@ -23,7 +23,7 @@ function extraChecks(machineId: string): ReadinessCheck[] {
     status: 'within-target' as const,
     recordType: 'test-cut' as const,
     recordedAt: '2026-11-30T10:00:00.000Z',
-    link: `/machines/${machineId}`,
+    place: { machineId, tab: 'readiness' as const },
   };
   return [
     {

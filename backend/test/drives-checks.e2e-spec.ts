@@ -277,7 +277,7 @@ describe('travel trials and repeat-and-reverse runs', () => {
     const mine = checks.filter((c) => ['travel-trial', 'positioning', 'speed-check', 'travel-envelope'].includes(c.kind));
     expect(mine.map((c) => c.kind).sort()).toEqual(['positioning', 'positioning', 'speed-check', 'speed-check', 'travel-envelope', 'travel-trial', 'travel-trial']);
     const trialCheck = mine.find((c) => c.key === `travel-trial:${x}`)!;
-    expect(trialCheck).toMatchObject({ status: 'not-started', subject: 'Axis X', result: null, link: `/machines/${m}/axes/${x}` });
+    expect(trialCheck).toMatchObject({ status: 'not-started', subject: 'Axis X', result: null, place: { machineId: m, axisId: x } });
     // Y travels 605 mm; the router needs 600 + 10 mm.
     expect(mine.find((c) => c.kind === 'travel-envelope')).toMatchObject({ status: 'outside-target', result: { value: 5, unit: 'mm' }, target: { value: 10, unit: 'mm' } });
     // 5000 mm/min at 5 mm lead = 1000 rpm, permissible 1947.9 rpm (THK λ2 = 15.1, 12.9 mm root, 1000 mm): 48.66 % headroom

@@ -79,7 +79,7 @@ describe('frame: diagonal checks', () => {
     const ref = await app.get(MachinesService).getRef({ workshopId: ws.id }, router);
     const checks = await app.get(ReadinessRegistry).checksFor(ref);
     const diag = checks.find((c) => c.kind === 'diagonal-check')!;
-    expect(diag).toMatchObject({ status: 'within-target', recordType: 'diagonal-check', link: `/machines/${router}?tab=frame`, result: { unit: 'mm/m' } });
+    expect(diag).toMatchObject({ status: 'within-target', recordType: 'diagonal-check', place: { machineId: router, tab: 'frame' }, result: { unit: 'mm/m' } });
     expect(checks.find((c) => c.kind === 'bed-grid')).toMatchObject({ status: 'not-started', result: null });
     // The squaring history for the certificate, oldest first, against the 0.2 mm/m router target.
     expect(diag.series!.lines[0].points.map(([n]) => n)).toEqual([1, 2]);

@@ -282,7 +282,7 @@ describe('rail sweeps, parallelism and readiness', () => {
     checks = await railChecks();
     const byKey = new Map(checks.map((c) => [c.key, c]));
     const sa1 = byKey.get(`straightness:${a.id}`)!;
-    expect(sa1).toMatchObject({ kind: 'rail-straightness', status: 'outside-target', recordType: 'rail-sweep', recordId: sa.id, target: { value: 2, unit: 'thou', reference: 'minimum-zone' }, link: `/machines/${m}/rails/${a.id}` });
+    expect(sa1).toMatchObject({ kind: 'rail-straightness', status: 'outside-target', recordType: 'rail-sweep', recordId: sa.id, target: { value: 2, unit: 'thou', reference: 'minimum-zone' }, place: { machineId: m, railId: a.id } });
     expect(sa1.result!.value).toBeCloseTo(sa.result.minimumZone.straightness / 0.0254, 10);
     expect(sa1.result!.summary).toMatch(/^Minimum zone \(ISO 1101\) .* thou against 2 thou \(least squares .* thou\); largest local slope .* mm\/m/);
     expect(sa1.target!.label).toMatch(/judged on the minimum zone \(ISO 1101\)/);

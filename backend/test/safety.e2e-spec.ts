@@ -68,7 +68,7 @@ describe('safety walk', () => {
     expect(done).toMatchObject({ status: 'within-target', blocking: false, counts: { answered: done.counts.total, no: 0 } });
     const ref = await app.get(MachinesService).getRef({ workshopId: ws.id }, machine);
     const check = (await app.get(ReadinessRegistry).checksFor(ref)).find((c) => c.kind === 'safety-walk');
-    expect(check).toMatchObject({ status: 'within-target', recordType: 'safety-walk', recordId: done.id, link: `/machines/${machine}?tab=safety` });
+    expect(check).toMatchObject({ status: 'within-target', recordType: 'safety-walk', recordId: done.id, place: { machineId: machine, tab: 'safety' } });
     const history = await ws.as.viewer.get(`/api/machines/${machine}/history?limit=200`);
     expect(history.body.entries[0]).toMatchObject({ recordType: 'safety-walk', action: 'recorded' });
   });

@@ -13,8 +13,8 @@ export interface ApprovalResponse {
   recheckIntervalDays: number;
   /** The approval stands and its re-check date has passed (worked out when read, never stored). */
   recheckDue: boolean;
-  /** Path of the public verification page printed on the certificate; null before signatures were kept. */
-  verificationPath: string | null;
+  /** Token of the public verification page printed on the certificate; null before signatures were kept. */
+  verificationToken: string | null;
   /** Set once the owner reopened the machine: the approval no longer stands. */
   reopened: { at: string; by: string | null; reason: string | null } | null;
 }
@@ -31,7 +31,7 @@ export const toApprovalResponse = (a: ApprovalRow): ApprovalResponse => ({
   recheckDueAt: a.recheckDueAt.toISOString(),
   recheckIntervalDays: a.recheckIntervalDays,
   recheckDue: recheckDue(a),
-  verificationPath: a.verificationToken ? `/verify/${a.verificationToken}` : null,
+  verificationToken: a.verificationToken ?? null,
   reopened: a.endedAt ? { at: a.endedAt.toISOString(), by: a.endedByName, reason: a.endReason } : null,
 });
 

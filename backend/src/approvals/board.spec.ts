@@ -12,7 +12,7 @@ const check = (over: Partial<ReadinessCheck>): ReadinessCheck => ({
   recordType: 'rail-sweep',
   recordId: '11111111-1111-4111-8111-111111111111',
   recordedAt: '2026-11-30T10:00:00.000Z',
-  link: '/x',
+  place: { machineId: 'm', tab: 'frame' },
   ...over,
 });
 

@@ -27,7 +27,7 @@ export function boardChecks(checks: ReadinessCheck[], waivers: WaiverRow[]): Boa
         recordType: c.recordType,
         recordId: c.recordId,
         recordedAt: c.recordedAt,
-        link: c.link,
+        place: c.place,
         waiver: w ? { id: w.id, reason: w.reason, by: w.waivedByName, at: w.waivedAt.toISOString() } : null,
         // Kept with the check in the approval snapshot, so the certificate prints them as they stood.
         warnings: (c.warnings ?? []).map((w) => ({ code: w.code, message: w.message })),

@@ -23,7 +23,8 @@ export interface BoardCheck {
   recordType: ReadinessCheck['recordType'];
   recordId: string | null;
   recordedAt: string | null;
-  link: string;
+  /** Where the check's record is shown (snapshots taken before it was kept name a screen path, `link`, instead). */
+  place: ReadinessCheck['place'];
   waiver: WaiverInfo | null;
   /** What a person should know about the result; absent in snapshots taken before warnings were kept. */
   warnings?: ResultWarning[];

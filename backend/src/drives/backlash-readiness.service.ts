@@ -50,7 +50,7 @@ export class BacklashReadinessService implements OnModuleInit {
         recordType: row ? BACKLASH_RECORD : null,
         recordId: row?.id ?? null,
         recordedAt: row?.createdAt.toISOString() ?? null,
-        link: `/machines/${machine.id}/axes/${axis.id}`,
+        place: { machineId: machine.id, axisId: axis.id },
         warnings: r ? warningsOf(r, row!.resolution, unit, target) : [],
         ...(r && context.series
           ? {

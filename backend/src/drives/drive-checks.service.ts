@@ -47,7 +47,6 @@ function speedWarnings(speed: ReturnType<typeof speedCheckOf>): ResultWarning[] 
   ];
 }
 
-const axisLink = (machineId: string, axisId: string) => `/machines/${machineId}/axes/${axisId}`;
 
 /**
  * The drive checks of a machine as the readiness board and the Drives tab see them: per axis the
@@ -113,7 +112,7 @@ export class DriveChecksService implements OnModuleInit {
       recordType: null,
       recordId: null,
       recordedAt: null,
-      link: `/machines/${machine.id}?tab=drives`,
+      place: { machineId: machine.id, tab: 'drives' },
     };
     return [...perAxis.flatMap((a) => a.checks), envelopeCheck];
   }
@@ -146,7 +145,7 @@ export class DriveChecksService implements OnModuleInit {
     const ids = rows.map((r) => r.id);
     const [trials, runs] = await Promise.all([this.checks.latestTrials(machine.workshopId, ids, series), this.checks.latestRuns(machine.workshopId, ids, series)]);
     return rows.map((axis) => {
-      const link = axisLink(machine.id, axis.id);
+      const place = { machineId: machine.id, axisId: axis.id };
       const out: ReadinessCheck[] = [];
       const summaries: AxisCheckSummary[] = [];
 
@@ -171,7 +170,7 @@ export class DriveChecksService implements OnModuleInit {
         recordId: trial?.id ?? null,
         warnings: trial ? storedWarnings(trial.result) : [],
         recordedAt: trial?.createdAt.toISOString() ?? null,
-        link,
+        place,
         ...(moves
           ? {
               series: {
@@ -210,7 +209,7 @@ export class DriveChecksService implements OnModuleInit {
         recordId: run?.id ?? null,
         warnings: run ? storedWarnings(run.result) : [],
         recordedAt: run?.createdAt.toISOString() ?? null,
-        link,
+        place,
         ...(perTarget
           ? {
               series: {
@@ -256,7 +255,7 @@ export class DriveChecksService implements OnModuleInit {
           recordType: 'axis',
           recordId: axis.id,
           recordedAt: speed.rpm !== null ? axis.updatedAt.toISOString() : null,
-          link,
+          place,
         });
       }
       summaries.push({ status: speed.status, summary: speedSummary, headline: speed.rpm !== null ? `${Math.round(speed.rpm)} of ${Math.round(speed.allowedSpeed!)} rpm allowed` : null, recordId: speed.applicable ? axis.id : null, recordedAt: null });

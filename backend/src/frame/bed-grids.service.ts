@@ -95,7 +95,7 @@ export class BedGridsService {
       recordType: BED_GRID,
       recordId: null,
       recordedAt: null,
-      link: `/machines/${machine.id}?tab=frame`,
+      place: { machineId: machine.id, tab: 'frame' },
       warnings: [],
     };
     if (!row) return base;

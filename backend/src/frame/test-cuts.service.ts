@@ -118,7 +118,7 @@ export class TestCutsService {
       recordType: TEST_CUT,
       recordId: null,
       recordedAt: null,
-      link: `/machines/${machine.id}?tab=frame`,
+      place: { machineId: machine.id, tab: 'frame' },
     };
     if (!row) return base;
     const r = this.respond(row, machine, targets, false);

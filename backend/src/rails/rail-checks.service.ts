@@ -18,7 +18,6 @@ import { RailsService } from './rails.service.js';
 import { inLengthUnit, storedSweepResult, summaryReadable } from './rail.mapper.js';
 import { UNREADABLE_INPUT } from '../common/stored-result.js';
 
-const railLink = (machineId: string, railId: string) => `/machines/${machineId}/rails/${railId}`;
 
 /** In the target's own length unit, so a result reads beside its target. */
 function inUnit(mm: number, t: TargetValue) {
@@ -152,7 +151,7 @@ export class RailChecksService implements OnModuleInit {
       // "Rail Y1 (left)" already names its axis; "Rail left" gets it added.
       subject: rail.label.includes(rail.axis) ? `Rail ${rail.label}` : `Rail ${rail.label} (${rail.axis})`,
       target: { ...plain(target), reference, label: `${TARGET_LABELS.railStraightness}, judged on the ${REFERENCE_WORDS[reference]}` },
-      link: railLink(rail.machineId, rail.id),
+      place: { machineId: rail.machineId, railId: rail.id },
       warnings: [] as ResultWarning[],
     };
     if (!latest) return { ...common, status: 'not-started', result: null, recordType: null, recordId: null, recordedAt: null };
@@ -187,7 +186,7 @@ export class RailChecksService implements OnModuleInit {
       kind: 'rail-parallelism' as const,
       subject: `Rails ${a.label} and ${b.label}`,
       target: { ...plain(t.parallelism), label: TARGET_LABELS.railParallelism },
-      link: railLink(a.machineId, a.id),
+      place: { machineId: a.machineId, railId: a.id },
       warnings: j.warnings,
     };
     if (!out.comparable && out.unreadable) {

@@ -112,7 +112,7 @@ export class ReadinessSummaryService implements OnModuleInit, OnApplicationBoots
     } else {
       checks = (await this.registry.byContributor(found.machine, context)).flatMap((list, index) => list.map((c) => summaryCheck(index, c)));
     }
-    const counts = countBoard(boardChecks(checks.map(asReadinessCheck), found.waivers));
+    const counts = countBoard(boardChecks(checks.map((c) => asReadinessCheck(c, machineId)), found.waivers));
     await this.repo.upsert({ machineId, workshopId, ...counts, checks, version });
     return counts;
   }
@@ -151,6 +151,6 @@ function summaryCheck(contributor: number, c: ReadinessCheck): SummaryCheck {
 }
 
 /** A stored check as the board counts it: waivers match on key and record, order on kind, subject and key. */
-function asReadinessCheck(c: SummaryCheck): ReadinessCheck {
-  return { key: c.key, kind: c.kind, subject: c.subject, status: c.status, recordId: c.recordId, target: null, result: null, recordType: null, recordedAt: null, link: '' };
+function asReadinessCheck(c: SummaryCheck, machineId: string): ReadinessCheck {
+  return { key: c.key, kind: c.kind, subject: c.subject, status: c.status, recordId: c.recordId, target: null, result: null, recordType: null, recordedAt: null, place: { machineId, tab: 'readiness' } };
 }

@@ -24,8 +24,8 @@ export interface ReadinessCheck {
   recordType: SignedRecordType | null;
   recordId: string | null;
   recordedAt: string | null;
-  /** Client path to the evidence. */
-  link: string;
+  /** Where the check's record is shown, as data: the front end makes the link from it. */
+  place: CheckPlace;
   /**
    * Optional small data series behind the result (a few hundred points at most), kept in the
    * approval snapshot and drawn on the certificate: residuals per station for straightness,
@@ -35,6 +35,12 @@ export interface ReadinessCheck {
   /** What a person should know about the result (see engine/warnings.ts); empty when none. */
   warnings?: ResultWarning[];
 }
+
+/**
+ * A machine's screen, as ids: its file (on a tab), one of its rails or one of its axes. The API
+ * answers carry no screen paths; the front end turns this into a link (features/approvals/check-place.ts).
+ */
+export type CheckPlace = { machineId: string; tab: 'readiness' | 'frame' | 'safety' | 'drives' | 'rails' } | { machineId: string; railId: string } | { machineId: string; axisId: string };
 
 /** A chart's data in the units it is drawn in: lines of [x, y] points and optional limit lines. */
 export interface CheckSeries {

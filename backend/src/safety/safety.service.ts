@@ -103,7 +103,7 @@ export class SafetyService implements OnModuleInit {
       recordType: SAFETY_WALK,
       recordId: walk.id,
       recordedAt: latestAnswerAt(walk),
-      link: `/machines/${machine.id}?tab=safety`,
+      place: { machineId: machine.id, tab: 'safety' },
     };
   }
 

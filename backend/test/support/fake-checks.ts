@@ -63,7 +63,7 @@ export class FakeChecks implements ReadinessContributor {
       recordType: this.recordType,
       recordId: randomUUID(),
       recordedAt: '2026-11-30T10:00:00.000Z',
-      link: `/machines/${machineId}?tab=rails`,
+      place: { machineId, tab: 'rails' },
       ...(withSeries
         ? {
             series: {

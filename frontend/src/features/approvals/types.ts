@@ -28,6 +28,9 @@ export interface Waiver {
   at: string;
 }
 
+/** A machine's screen as the server names it: its file on a tab, one of its rails or one of its axes. */
+export type CheckPlace = { machineId: string; tab: 'readiness' | 'frame' | 'safety' | 'drives' | 'rails' } | { machineId: string; railId: string } | { machineId: string; axisId: string };
+
 export interface BoardCheck {
   key: string;
   kind: CheckKind;
@@ -39,7 +42,8 @@ export interface BoardCheck {
   recordType: string | null;
   recordId: string | null;
   recordedAt: string | null;
-  link: string;
+  /** Where the check's record is shown; checkPath() makes the link. */
+  place: CheckPlace;
   waiver: Waiver | null;
   /** What a person should know about the result; absent in approvals taken before warnings were kept. */
   warnings?: CheckWarning[];
@@ -66,8 +70,10 @@ export interface Approval {
   statement: string;
   recheckDueAt: string;
   recheckIntervalDays: number;
-  /** The public verification page printed on the certificate; null for approvals signed before signatures were kept. */
-  verificationPath: string | null;
+  /** Token of the public verification page printed on the certificate; null for approvals signed before signatures were kept. */
+  verificationToken: string | null;
+  /** The approval stands and its re-check date has passed. */
+  recheckDue: boolean;
   /** Set when the owner reopened the machine: the approval no longer stands. */
   reopened: { at: string; by: string | null; reason: string | null } | null;
 }

@@ -31,6 +31,8 @@ export interface PublicVerification {
   statement: string;
   recheckDueAt: string;
   recheckIntervalDays: number;
+  /** The approval stands and its re-check date has passed. */
+  recheckDue: boolean;
   targetSet: string;
   checkCount: number;
   waivedCount: number;

@@ -5,6 +5,7 @@ import DownloadOutlined from '@mui/icons-material/DownloadOutlined';
 import VerifiedOutlined from '@mui/icons-material/VerifiedOutlined';
 import FactCheckOutlined from '@mui/icons-material/FactCheckOutlined';
 import { Link as RouterLink } from 'react-router-dom';
+import { paths } from '../../../config/paths';
 import { palette } from '../../../theme/theme';
 import { dateOnly, dateTime } from '../format';
 import { certificateUrl, type Approval } from '../types';
@@ -27,7 +28,7 @@ export function ApprovalSummary({ machineId, approval, current }: { machineId: s
             </Typography>
           )}
           <Typography variant="body2" color="text.secondary">
-            Signed {dateTime(approval.approvedAt)} · re-check due by {dateOnly(approval.recheckDueAt)} (every {approval.recheckIntervalDays} days)
+            Signed {dateTime(approval.approvedAt)} · {approval.recheckDue ? 're-check fell due on' : 're-check due by'} {dateOnly(approval.recheckDueAt)} (every {approval.recheckIntervalDays} days)
           </Typography>
           <Stack direction="row" spacing={0.5} sx={{ alignItems: 'center', mt: 0.5 }}>
             <Typography variant="caption" color="text.secondary">Record hash (SHA-256)</Typography>
@@ -39,7 +40,7 @@ export function ApprovalSummary({ machineId, approval, current }: { machineId: s
             </Tooltip>
           </Stack>
           <Typography variant="caption" color="text.secondary" component="p">
-            {approval.verificationPath
+            {approval.verificationToken
               ? 'The certificate carries an address where anyone can check the owner’s signature against the record as it is kept now.'
               : 'Signed before signatures were kept: a printed certificate is genuine when its record hash matches this one.'}
           </Typography>
@@ -48,8 +49,8 @@ export function ApprovalSummary({ machineId, approval, current }: { machineId: s
           <Button variant="outlined" startIcon={<DownloadOutlined />} href={certificateUrl(machineId, approval.id)} download>
             Download certificate
           </Button>
-          {approval.verificationPath && (
-            <Button variant="text" startIcon={<FactCheckOutlined />} component={RouterLink} to={approval.verificationPath}>
+          {approval.verificationToken && (
+            <Button variant="text" startIcon={<FactCheckOutlined />} component={RouterLink} to={paths.verify(approval.verificationToken)}>
               Check the signature
             </Button>
           )}

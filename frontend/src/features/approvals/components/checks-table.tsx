@@ -5,6 +5,7 @@ import { dateOnly, dateTime, resultText, targetText } from '../format';
 import { KIND_LABELS, type BoardCheck } from '../types';
 import { CheckStatusChip } from './check-status-chip';
 import { CheckWarnings } from './check-warnings';
+import { checkPath } from '../check-place';
 
 interface Props {
   checks: BoardCheck[];
@@ -55,7 +56,7 @@ export function ChecksTable({ checks, onWaive }: Props) {
                 )}
               </TableCell>
               <TableCell align="right">
-                {c.link ? <Button component={RouterLink} to={c.link} size="small">{c.recordId ? 'Open' : 'Record'}</Button> : '—'}
+                <Button component={RouterLink} to={checkPath(c.place)} size="small">{c.recordId ? 'Open' : 'Record'}</Button>
               </TableCell>
             </TableRow>
           ))}

@@ -33,7 +33,7 @@ export function ApprovalFacts({ v }: { v: PublicVerification }) {
           {v.checkCount} required{v.waivedCount ? `, ${v.waivedCount} waived with a written reason` : ', none waived'}
         </Fact>
         <Fact label="Judged against">{v.targetSet}</Fact>
-        <Fact label="Approval">{v.stands ? 'Stands' : v.reopened ? `Reopened ${dateOnly(v.reopened.at)}` : 'No longer stands'}</Fact>
+        <Fact label="Approval">{v.stands ? (v.recheckDue ? 'Stands; its re-check is due' : 'Stands') : v.reopened ? `Reopened ${dateOnly(v.reopened.at)}` : 'No longer stands'}</Fact>
       </Box>
       <Typography variant="caption" color="text.secondary" component="p" sx={{ mt: 2, textTransform: 'uppercase', letterSpacing: 0.4 }}>
         Statement signed
