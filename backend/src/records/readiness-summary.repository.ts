@@ -7,6 +7,7 @@ import type { MachineState } from '../database/schema/machines.js';
 import type { SummaryCheck } from '../database/schema/machine-readiness.js';
 import type { TargetValue } from '../database/schema/target-sets.js';
 import type { MachineRef } from './readiness.js';
+import { withDefaultTargets } from '../target-sets/default-target-sets.js';
 
 export type ReadinessSummaryRow = typeof machineReadiness.$inferSelect;
 export type SummaryWaiverRow = typeof waivers.$inferSelect;
@@ -75,7 +76,8 @@ export class ReadinessSummaryRepository {
         name: row.name,
         state: row.state,
       },
-      targetSet: row.t_id ? { id: row.t_id, name: row.t_name!, targets: row.targets! } : null,
+      // A key the stored set lacks is judged against the product's default, never a 500.
+      targetSet: row.t_id ? { id: row.t_id, name: row.t_name!, targets: withDefaultTargets(row.targets) } : null,
       waivers: row.waivers.map((w) => ({ ...w, waivedAt: new Date(w.waivedAt) })),
       summary: row.s_version === null ? null : { checks: row.s_checks, version: row.s_version },
     };
@@ -86,7 +88,7 @@ export class ReadinessSummaryRepository {
       .select({ id: targetSets.id, name: targetSets.name, targets: targetSets.targets })
       .from(targetSets)
       .where(and(eq(targetSets.workshopId, workshopId), eq(targetSets.id, id)));
-    return row ?? null;
+    return row ? { ...row, targets: withDefaultTargets(row.targets) } : null;
   }
 
   async machineIds(workshopId: string, targetSetId?: string): Promise<string[]> {

@@ -1,5 +1,5 @@
 import type { TargetValue } from '../database/schema/target-sets.js';
-import type { TargetKey } from './target-keys.js';
+import { TARGET_KEYS, type TargetKey } from './target-keys.js';
 
 // Starting values are common practice, not a standard; the owner edits them per workshop.
 const CP = 'common practice';
@@ -52,3 +52,20 @@ export const DEFAULT_TARGET_SETS = [
   { name: 'Plasma table (default)', description: 'Starting tolerances for a carefully built plasma table; common practice, not a standard.', targets: PLASMA_DEFAULTS },
   { name: 'Router (default)', description: 'Finer starting tolerances for a router or engraver; common practice, not a standard.', targets: ROUTER_DEFAULTS },
 ];
+
+/**
+ * The product's default of each key, for a stored set that lacks it. A new key's migration gives
+ * every stored set its default (see DEVELOPERS.md, "Adding a target key"), so this is only the
+ * safety net: a set read without a key is judged against the default, never answered with a 500.
+ */
+export const FALLBACK_TARGETS: Record<TargetKey, TargetValue> = PLASMA_DEFAULTS;
+
+const isTargetValue = (t: unknown): t is TargetValue =>
+  !!t && typeof t === 'object' && typeof (t as TargetValue).value === 'number' && Number.isFinite((t as TargetValue).value) && typeof (t as TargetValue).unit === 'string';
+
+/** A stored set's targets with every key there: a missing or unreadable one is the product's default. */
+export function withDefaultTargets(stored: Record<string, TargetValue> | null | undefined): Record<string, TargetValue> & Record<TargetKey, TargetValue> {
+  const out: Record<string, TargetValue> = { ...(stored ?? {}) };
+  for (const key of TARGET_KEYS) if (!isTargetValue(out[key])) out[key] = FALLBACK_TARGETS[key];
+  return out as Record<string, TargetValue> & Record<TargetKey, TargetValue>;
+}

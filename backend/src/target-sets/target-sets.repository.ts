@@ -3,14 +3,17 @@ import { and, asc, eq } from 'drizzle-orm';
 import { DRIZZLE, type Database } from '../database/database.tokens.js';
 import { machines, targetSets, type TargetValue } from '../database/schema/index.js';
 import type { TargetSetRow } from './target-set.mapper.js';
+import { withDefaultTargets } from './default-target-sets.js';
 import { machineStateNow } from '../machines/machine-state.js';
 
 @Injectable()
 export class TargetSetsRepository {
   constructor(@Inject(DRIZZLE) private readonly db: Database) {}
 
-  list(workshopId: string): Promise<TargetSetRow[]> {
-    return this.db.select().from(targetSets).where(eq(targetSets.workshopId, workshopId)).orderBy(asc(targetSets.createdAt));
+  /** Every set read here has every key: one a stored set lacks is the product's default (default-target-sets.ts). */
+  async list(workshopId: string): Promise<TargetSetRow[]> {
+    const rows = await this.db.select().from(targetSets).where(eq(targetSets.workshopId, workshopId)).orderBy(asc(targetSets.createdAt));
+    return rows.map(complete);
   }
 
   async find(workshopId: string, id: string): Promise<TargetSetRow | null> {
@@ -18,7 +21,7 @@ export class TargetSetsRepository {
       .select()
       .from(targetSets)
       .where(and(eq(targetSets.workshopId, workshopId), eq(targetSets.id, id)));
-    return row ?? null;
+    return row ? complete(row) : null;
   }
 
   async insert(workshopId: string, values: { name: string; description: string; targets: Record<string, TargetValue> }) {
@@ -44,3 +47,5 @@ export class TargetSetsRepository {
       .orderBy(asc(machines.name));
   }
 }
+
+const complete = (row: TargetSetRow): TargetSetRow => ({ ...row, targets: withDefaultTargets(row.targets) });

@@ -1,12 +1,12 @@
 import { index, integer, jsonb, pgTable, text, timestamp, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
 import { sql } from 'drizzle-orm';
-import { id } from './columns.js';
+import { id, oneOf } from './columns.js';
 import { workshops } from './workshops.js';
 import { machines } from './machines.js';
 import { users } from './users.js';
 import type { ApprovalSnapshot } from '../../approvals/snapshot.js';
 import type { TargetValue } from './target-sets.js';
-import type { SignedRecordType } from '../../records/kinds.js';
+import { SIGNED_RECORD_TYPES, type SignedRecordType } from '../../records/kinds.js';
 
 /**
  * An owner's written reason for letting one check pass. It belongs to the record the check had
@@ -27,8 +27,10 @@ export const waivers = pgTable(
     waivedByName: text('waived_by_name').notNull(),
     waivedAt: timestamp('waived_at', { withTimezone: true }).notNull().defaultNow(),
   },
-  (t) => [index('waivers_machine_idx').on(t.machineId, t.checkKey)],
+  (t) => [index('waivers_machine_idx').on(t.machineId, t.checkKey), oneOf('waivers_record_type_check', t.recordType, SIGNED_RECORD_TYPES)],
 );
+
+export const APPROVAL_REQUEST_STATUSES = ['open', 'approved', 'closed'] as const;
 
 /** A technician's (or owner's) request that the machine be approved; it moves it to awaiting-approval. */
 export const approvalRequests = pgTable(
@@ -41,12 +43,13 @@ export const approvalRequests = pgTable(
     requestedByName: text('requested_by_name').notNull(),
     requestedAt: timestamp('requested_at', { withTimezone: true }).notNull().defaultNow(),
     /** open until approved, or closed when a check leaves the target before that. */
-    status: text('status', { enum: ['open', 'approved', 'closed'] }).notNull().default('open'),
+    status: text('status', { enum: APPROVAL_REQUEST_STATUSES }).notNull().default('open'),
   },
   (t) => [
     index('approval_requests_machine_idx').on(t.machineId),
     // One open request per machine, however many clicks or server instances ask at once.
     uniqueIndex('approval_requests_one_open').on(t.machineId).where(sql`${t.status} = 'open'`),
+    oneOf('approval_requests_status_check', t.status, APPROVAL_REQUEST_STATUSES),
   ],
 );
 

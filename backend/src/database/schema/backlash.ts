@@ -1,5 +1,6 @@
 import { doublePrecision, index, jsonb, pgTable, text, uuid } from 'drizzle-orm/pg-core';
-import { id, timestamps } from './columns.js';
+import { id, oneOf, timestamps } from './columns.js';
+import { LENGTH_UNITS, type LengthUnit } from '../../engine/units.js';
 import { workshops } from './workshops.js';
 import { machines } from './machines.js';
 import { users } from './users.js';
@@ -22,8 +23,8 @@ export const backlashChecks = pgTable(
     workshopId: uuid('workshop_id').notNull().references(() => workshops.id),
     machineId: uuid('machine_id').notNull().references(() => machines.id),
     axisId: uuid('axis_id').notNull().references(() => axes.id, { onDelete: 'cascade' }),
-    lengthUnit: text('length_unit').notNull().default('mm'),
-    readingUnit: text('reading_unit').notNull().default('mm'),
+    lengthUnit: text('length_unit').$type<LengthUnit>().notNull().default('mm'),
+    readingUnit: text('reading_unit').$type<LengthUnit>().notNull().default('mm'),
     positions: jsonb('positions').$type<BacklashPositionRecord[]>().notNull(),
     /** Smallest step of the indicator, in readingUnit, when given. */
     resolution: doublePrecision('resolution'),
@@ -34,5 +35,9 @@ export const backlashChecks = pgTable(
     recordedByName: text('recorded_by_name').notNull(),
     ...timestamps,
   },
-  (t) => [index('backlash_checks_axis_idx').on(t.workshopId, t.axisId, t.createdAt)],
+  (t) => [
+    index('backlash_checks_axis_idx').on(t.workshopId, t.axisId, t.createdAt),
+    oneOf('backlash_checks_length_unit_check', t.lengthUnit, LENGTH_UNITS),
+    oneOf('backlash_checks_reading_unit_check', t.readingUnit, LENGTH_UNITS),
+  ],
 );

@@ -1,5 +1,5 @@
 import { boolean, doublePrecision, index, integer, jsonb, pgTable, text, timestamp, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
-import { id, timestamps } from './columns.js';
+import { id, oneOf, timestamps } from './columns.js';
 import { workshops } from './workshops.js';
 import { machines } from './machines.js';
 import { rails, railSweeps } from './rails.js';
@@ -39,7 +39,12 @@ export const boltDowns = pgTable(
     createdByName: text('created_by_name').notNull(),
     ...timestamps,
   },
-  (t) => [index('bolt_downs_rail_idx').on(t.workshopId, t.railId, t.createdAt)],
+  (t) => [
+    index('bolt_downs_rail_idx').on(t.workshopId, t.railId, t.createdAt),
+    oneOf('bolt_downs_mode_check', t.mode, BOLT_DOWN_MODES),
+    oneOf('bolt_downs_reading_unit_check', t.readingUnit, BOLT_DOWN_UNITS),
+    oneOf('bolt_downs_length_unit_check', t.lengthUnit, BOLT_DOWN_UNITS),
+  ],
 );
 
 /** What has been typed and fixed at one hole; rows appear as holes are first written. */

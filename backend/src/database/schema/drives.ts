@@ -1,10 +1,10 @@
 import { boolean, doublePrecision, index, integer, jsonb, pgTable, text, timestamp, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
 import { sql } from 'drizzle-orm';
-import { id, timestamps } from './columns.js';
+import { id, oneOf, timestamps } from './columns.js';
 import { workshops } from './workshops.js';
 import { machines } from './machines.js';
 import { users } from './users.js';
-import type { ScaleMaterial } from '../../engine/thermal.js';
+import { SCALE_MATERIALS, type ScaleMaterial } from '../../engine/thermal.js';
 
 /** The units lengths and readings are typed in (1 in = 25.4 mm exactly). */
 export const DRIVE_UNITS = ['mm', 'um', 'in', 'thou'] as const;
@@ -68,6 +68,7 @@ export const axes = pgTable(
   (t) => [
     index('axes_machine_idx').on(t.workshopId, t.machineId),
     uniqueIndex('axes_machine_name_unique').on(t.machineId, sql`lower(${t.name})`),
+    oneOf('axes_length_unit_check', t.lengthUnit, DRIVE_UNITS),
   ],
 );
 
@@ -101,7 +102,12 @@ export const travelTrials = pgTable(
     appliedByName: text('applied_by_name'),
     ...timestamps,
   },
-  (t) => [index('travel_trials_axis_idx').on(t.workshopId, t.axisId, t.createdAt)],
+  (t) => [
+    index('travel_trials_axis_idx').on(t.workshopId, t.axisId, t.createdAt),
+    oneOf('travel_trials_length_unit_check', t.lengthUnit, DRIVE_UNITS),
+    oneOf('travel_trials_reading_unit_check', t.readingUnit, DRIVE_UNITS),
+    oneOf('travel_trials_scale_material_check', t.scaleMaterial, SCALE_MATERIALS),
+  ],
 );
 
 /** A repeat-and-reverse run (ISO 230-2 positioning test) of one axis. */
@@ -132,5 +138,10 @@ export const positioningRuns = pgTable(
     recordedByName: text('recorded_by_name').notNull(),
     ...timestamps,
   },
-  (t) => [index('positioning_runs_axis_idx').on(t.workshopId, t.axisId, t.createdAt)],
+  (t) => [
+    index('positioning_runs_axis_idx').on(t.workshopId, t.axisId, t.createdAt),
+    oneOf('positioning_runs_length_unit_check', t.lengthUnit, DRIVE_UNITS),
+    oneOf('positioning_runs_reading_unit_check', t.readingUnit, DRIVE_UNITS),
+    oneOf('positioning_runs_scale_material_check', t.scaleMaterial, SCALE_MATERIALS),
+  ],
 );

@@ -1,9 +1,9 @@
 import { bigint, boolean, index, integer, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
-import { id } from './columns.js';
+import { id, oneOf } from './columns.js';
 import { workshops } from './workshops.js';
 import { machines } from './machines.js';
 import { users } from './users.js';
-import type { EvidenceSubjectType, SignedRecordType } from '../../records/kinds.js';
+import { EVIDENCE_SUBJECT_TYPES, SIGNED_RECORD_TYPES, type EvidenceSubjectType, type SignedRecordType } from '../../records/kinds.js';
 
 export const EVIDENCE_KINDS = ['photo', 'file'] as const;
 export type EvidenceKind = (typeof EVIDENCE_KINDS)[number];
@@ -45,5 +45,8 @@ export const evidence = pgTable(
   (t) => [
     index('evidence_subject_idx').on(t.workshopId, t.subjectType, t.subjectId),
     index('evidence_machine_idx').on(t.workshopId, t.machineId, t.createdAt),
+    oneOf('evidence_subject_type_check', t.subjectType, EVIDENCE_SUBJECT_TYPES),
+    oneOf('evidence_record_type_check', t.recordType, SIGNED_RECORD_TYPES),
+    oneOf('evidence_kind_check', t.kind, EVIDENCE_KINDS),
   ],
 );

@@ -1,11 +1,12 @@
 import { doublePrecision, index, integer, jsonb, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
-import { id } from './columns.js';
+import { id, oneOf } from './columns.js';
+import { LENGTH_UNITS } from '../../engine/units.js';
 import { workshops } from './workshops.js';
 import { machines } from './machines.js';
 import { users } from './users.js';
 
 /** Length units a reading may be entered in; values are stored in mm beside the entered unit. */
-export type EnteredUnit = 'mm' | 'um' | 'in' | 'thou';
+export type EnteredUnit = (typeof LENGTH_UNITS)[number];
 
 /** Who recorded a frame check, and when; the name is kept so the record reads right after a rename. */
 const recorded = {
@@ -33,7 +34,7 @@ export const diagonalChecks = pgTable(
     note: text('note').notNull().default(''),
     ...recorded,
   },
-  (t) => [index('diagonal_checks_machine_idx').on(t.workshopId, t.machineId, t.recordedAt)],
+  (t) => [index('diagonal_checks_machine_idx').on(t.workshopId, t.machineId, t.recordedAt), oneOf('diagonal_checks_length_unit_check', t.lengthUnit, LENGTH_UNITS)],
 );
 
 export interface BedGridPointMm {
@@ -61,7 +62,11 @@ export const bedGrids = pgTable(
     note: text('note').notNull().default(''),
     ...recorded,
   },
-  (t) => [index('bed_grids_machine_idx').on(t.workshopId, t.machineId, t.recordedAt)],
+  (t) => [
+    index('bed_grids_machine_idx').on(t.workshopId, t.machineId, t.recordedAt),
+    oneOf('bed_grids_length_unit_check', t.lengthUnit, LENGTH_UNITS),
+    oneOf('bed_grids_reading_unit_check', t.readingUnit, LENGTH_UNITS),
+  ],
 );
 
 export type CircleKind = 'hole' | 'disc';
@@ -92,5 +97,5 @@ export const testCuts = pgTable(
     note: text('note').notNull().default(''),
     ...recorded,
   },
-  (t) => [index('test_cuts_machine_idx').on(t.workshopId, t.machineId, t.recordedAt)],
+  (t) => [index('test_cuts_machine_idx').on(t.workshopId, t.machineId, t.recordedAt), oneOf('test_cuts_length_unit_check', t.lengthUnit, LENGTH_UNITS)],
 );

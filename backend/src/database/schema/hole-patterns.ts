@@ -1,5 +1,5 @@
 import { doublePrecision, index, jsonb, pgTable, text, uuid } from 'drizzle-orm/pg-core';
-import { id, timestamps } from './columns.js';
+import { id, oneOf, timestamps } from './columns.js';
 import { workshops } from './workshops.js';
 import { machines } from './machines.js';
 
@@ -48,5 +48,9 @@ export const holePatterns = pgTable(
     notes: text('notes').notNull().default(''),
     ...timestamps,
   },
-  (t) => [index('hole_patterns_machine_idx').on(t.workshopId, t.machineId)],
+  (t) => [
+    index('hole_patterns_machine_idx').on(t.workshopId, t.machineId),
+    oneOf('hole_patterns_reference_check', t.reference, PATTERN_REFERENCES),
+    oneOf('hole_patterns_length_unit_check', t.lengthUnit, PATTERN_UNITS),
+  ],
 );

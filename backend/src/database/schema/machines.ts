@@ -1,5 +1,6 @@
 import { index, integer, pgTable, real, text, timestamp, uuid } from 'drizzle-orm/pg-core';
-import { id, timestamps } from './columns.js';
+import { id, oneOf, timestamps } from './columns.js';
+import { LENGTH_UNITS } from '../../engine/units.js';
 import { workshops } from './workshops.js';
 import { targetSets } from './target-sets.js';
 
@@ -21,7 +22,7 @@ export const machines = pgTable(
     workAreaXMm: real('work_area_x_mm').notNull(),
     workAreaYMm: real('work_area_y_mm').notNull(),
     /** The unit the work area was typed in and is shown in (the lengths are kept in mm). */
-    lengthUnit: text('length_unit', { enum: ['mm', 'um', 'in', 'thou'] }).notNull().default('mm'),
+    lengthUnit: text('length_unit', { enum: LENGTH_UNITS }).notNull().default('mm'),
     notes: text('notes').notNull().default(''),
     targetSetId: uuid('target_set_id').notNull().references(() => targetSets.id),
     state: text('state', { enum: MACHINE_STATES }).notNull().default('being-built'),
@@ -30,5 +31,10 @@ export const machines = pgTable(
     lastActivityAt: timestamp('last_activity_at', { withTimezone: true }).notNull().defaultNow(),
     ...timestamps,
   },
-  (t) => [index('machines_workshop_idx').on(t.workshopId)],
+  (t) => [
+    index('machines_workshop_idx').on(t.workshopId),
+    oneOf('machines_kind_check', t.kind, MACHINE_KINDS),
+    oneOf('machines_state_check', t.state, MACHINE_STATES),
+    oneOf('machines_length_unit_check', t.lengthUnit, LENGTH_UNITS),
+  ],
 );

@@ -1,6 +1,6 @@
 import { sql } from 'drizzle-orm';
-import { doublePrecision, index, integer, jsonb, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
-import { id, timestamps } from './columns.js';
+import { doublePrecision, index, integer, jsonb, pgTable, text, timestamp, uuid, type AnyPgColumn } from 'drizzle-orm/pg-core';
+import { id, oneOf, timestamps } from './columns.js';
 import { workshops } from './workshops.js';
 import { machines } from './machines.js';
 import { users } from './users.js';
@@ -12,6 +12,8 @@ export type SweepPhase = (typeof SWEEP_PHASES)[number];
 
 export const SWEEP_UNITS = ['mm', 'um', 'in', 'thou'] as const;
 export type SweepUnit = (typeof SWEEP_UNITS)[number];
+
+export const SWEEP_STATUSES = ['within-target', 'outside-target'] as const;
 
 /** Which face of the rail the indicator reads: the side (sideways straightness) or the top (heights). */
 export const SWEEP_FACES = ['side', 'top'] as const;
@@ -37,10 +39,10 @@ export const rails = pgTable(
     /** Least distance from a hole centre to either end of the rail; null: the default for the bolt size. */
     endDistanceMm: doublePrecision('end_distance_mm'),
     /** Kept symmetric by the service: when A names B, B names A. */
-    partnerRailId: uuid('partner_rail_id'),
+    partnerRailId: uuid('partner_rail_id').references((): AnyPgColumn => rails.id, { onDelete: 'set null' }),
     ...timestamps,
   },
-  (t) => [index('rails_machine_idx').on(t.workshopId, t.machineId)],
+  (t) => [index('rails_machine_idx').on(t.workshopId, t.machineId), oneOf('rails_length_unit_check', t.lengthUnit, SWEEP_UNITS)],
 );
 
 /** Stored engine result of a sweep; every length in mm. */
@@ -98,7 +100,7 @@ export const railSweeps = pgTable(
     result: jsonb('result').$type<StoredSweepResult>().notNull(),
     /** What a person should know about the result when it was saved (engine/warnings.ts). */
     warnings: jsonb('warnings').$type<ResultWarning[]>().notNull().default([]),
-    status: text('status', { enum: ['within-target', 'outside-target'] }).notNull(),
+    status: text('status', { enum: SWEEP_STATUSES }).notNull(),
     /** The target the sweep was judged against when it was saved. */
     target: jsonb('target').$type<{ value: number; unit: string; reference?: StraightnessReference }>().notNull(),
     createdById: uuid('created_by_id').references(() => users.id),
@@ -116,5 +118,10 @@ export const railSweeps = pgTable(
     index('rail_sweeps_datum_face_desc_idx')
       .on(t.railId, sql`lower(${t.datum})`, t.face, t.takenAt.desc().nullsFirst(), t.createdAt.desc().nullsFirst())
       .where(sql`${t.datum} is not null`),
+    oneOf('rail_sweeps_reading_unit_check', t.readingUnit, SWEEP_UNITS),
+    oneOf('rail_sweeps_length_unit_check', t.lengthUnit, SWEEP_UNITS),
+    oneOf('rail_sweeps_face_check', t.face, SWEEP_FACES),
+    oneOf('rail_sweeps_phase_check', t.phase, SWEEP_PHASES),
+    oneOf('rail_sweeps_status_check', t.status, SWEEP_STATUSES),
   ],
 );

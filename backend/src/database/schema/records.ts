@@ -1,9 +1,10 @@
 import { bigint, index, jsonb, pgTable, text, timestamp, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
 import { sql } from 'drizzle-orm';
-import { id } from './columns.js';
+import { id, oneOf } from './columns.js';
+import { machines } from './machines.js';
 import { workshops } from './workshops.js';
 import { users } from './users.js';
-import type { RecordType, SignedRecordType } from '../../records/kinds.js';
+import { RECORD_TYPE_NAMES, SIGNED_RECORD_TYPES, type RecordType, type SignedRecordType } from '../../records/kinds.js';
 
 /** Who changed what, when: every create, update and delete of every record of a machine. */
 export const auditEntries = pgTable(
@@ -11,7 +12,7 @@ export const auditEntries = pgTable(
   {
     id: id(),
     workshopId: uuid('workshop_id').notNull().references(() => workshops.id),
-    machineId: uuid('machine_id'),
+    machineId: uuid('machine_id').references(() => machines.id),
     recordType: text('record_type').$type<RecordType>().notNull(),
     recordId: uuid('record_id'),
     action: text('action').notNull(),
@@ -23,7 +24,12 @@ export const auditEntries = pgTable(
     /** The transaction that wrote it: joins the summary to the row changes it made. */
     txid: bigint('txid', { mode: 'number' }).notNull().default(sql`txid_current()`),
   },
-  (t) => [index('audit_machine_idx').on(t.machineId, t.at), index('audit_workshop_idx').on(t.workshopId, t.at), index('audit_txid_idx').on(t.txid)],
+  (t) => [
+    index('audit_machine_idx').on(t.machineId, t.at),
+    index('audit_workshop_idx').on(t.workshopId, t.at),
+    index('audit_txid_idx').on(t.txid),
+    oneOf('audit_entries_record_type_check', t.recordType, RECORD_TYPE_NAMES),
+  ],
 );
 
 /**
@@ -47,7 +53,12 @@ export const changeLog = pgTable(
     actorId: uuid('actor_id'),
     actorName: text('actor_name'),
   },
-  (t) => [index('change_log_machine_idx').on(t.machineId, t.at), index('change_log_txid_idx').on(t.txid), index('change_log_workshop_idx').on(t.workshopId, t.at)],
+  (t) => [
+    index('change_log_machine_idx').on(t.machineId, t.at),
+    index('change_log_txid_idx').on(t.txid),
+    index('change_log_workshop_idx').on(t.workshopId, t.at),
+    oneOf('change_log_operation_check', t.operation, ['insert', 'update', 'delete']),
+  ],
 );
 
 /** A record that an approval was based on; it can no longer be edited or deleted. */
@@ -60,5 +71,9 @@ export const recordLocks = pgTable(
     approvalId: uuid('approval_id').notNull(),
     lockedAt: timestamp('locked_at', { withTimezone: true }).notNull().defaultNow(),
   },
-  (t) => [uniqueIndex('record_locks_unique').on(t.recordType, t.recordId, t.approvalId), index('record_locks_record_idx').on(t.recordType, t.recordId)],
+  (t) => [
+    uniqueIndex('record_locks_unique').on(t.recordType, t.recordId, t.approvalId),
+    index('record_locks_record_idx').on(t.recordType, t.recordId),
+    oneOf('record_locks_record_type_check', t.recordType, SIGNED_RECORD_TYPES),
+  ],
 );

@@ -1,5 +1,5 @@
 import { boolean, index, pgTable, text, timestamp, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
-import { id } from './columns.js';
+import { id, oneOf } from './columns.js';
 import { workshops } from './workshops.js';
 import { machines } from './machines.js';
 import { users } from './users.js';
@@ -23,7 +23,7 @@ export const safetyItems = pgTable(
     createdByName: text('created_by_name').notNull(),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
   },
-  (t) => [index('safety_items_workshop_idx').on(t.workshopId)],
+  (t) => [index('safety_items_workshop_idx').on(t.workshopId), oneOf('safety_items_section_check', t.section, SAFETY_SECTIONS)],
 );
 
 /** One round of the safety walk of a machine; the latest is the current walk. */
@@ -51,5 +51,5 @@ export const safetyAnswers = pgTable(
     answeredByName: text('answered_by_name').notNull(),
     answeredAt: timestamp('answered_at', { withTimezone: true }).notNull().defaultNow(),
   },
-  (t) => [uniqueIndex('safety_answers_walk_item_unique').on(t.walkId, t.itemKey)],
+  (t) => [uniqueIndex('safety_answers_walk_item_unique').on(t.walkId, t.itemKey), oneOf('safety_answers_answer_check', t.answer, SAFETY_ANSWERS)],
 );

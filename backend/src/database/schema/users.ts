@@ -1,6 +1,6 @@
 import { boolean, index, pgTable, text, timestamp, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
 import { sql } from 'drizzle-orm';
-import { id, timestamps } from './columns.js';
+import { id, oneOf, timestamps } from './columns.js';
 import { workshops } from './workshops.js';
 
 export const ROLES = ['admin', 'owner', 'technician', 'builder', 'viewer'] as const;
@@ -27,5 +27,6 @@ export const users = pgTable(
   (t) => [
     uniqueIndex('users_email_unique').on(sql`lower(${t.email})`),
     index('users_workshop_idx').on(t.workshopId),
+    oneOf('users_role_check', t.role, ROLES),
   ],
 );
