@@ -1,14 +1,11 @@
-import type { LengthUnit } from '../../lib/units';
+import type { Schemas } from '../../lib/api/schemas';
 
 // Requests and responses of the calculators API. Lengths (positions, moves, sizes, lead, travel)
 // in `lengthUnit`, readings (indicator readings, deviations, heights) in `readingUnit`; every
 // length in a response is in mm, and `units` names the unit of each result field.
 
-/** The two unit families every calculator request names (the server takes mm when absent). */
-export interface UnitFamilies {
-  lengthUnit: LengthUnit;
-  readingUnit: LengthUnit;
-}
+/** The two unit families every calculator request names (the server takes mm when absent; the browser always sends both). */
+export type UnitFamilies = Required<Pick<Schemas['StraightnessDto'], 'lengthUnit' | 'readingUnit'>>;
 
 /** Something a person should know about a result: a stable code and a plain sentence. */
 export interface ResultWarning {
@@ -29,10 +26,7 @@ export interface ReferenceLine {
   residuals: number[];
 }
 
-export interface StraightnessRequest extends UnitFamilies {
-  positions: number[];
-  readings: number[];
-}
+export type StraightnessRequest = Schemas['StraightnessDto'] & UnitFamilies;
 export interface StraightnessResult extends CalculatedCommon {
   leastSquares: ReferenceLine;
   /** Centre line of the band; the band is the line ± straightness / 2. */
@@ -40,24 +34,14 @@ export interface StraightnessResult extends CalculatedCommon {
   endPoint: ReferenceLine;
 }
 
-export interface ParallelismRequest extends UnitFamilies {
-  positions: number[];
-  railA: number[];
-  railB: number[];
-}
+export type ParallelismRequest = Schemas['ParallelismDto'] & UnitFamilies;
 export interface ParallelismResult extends CalculatedCommon {
   parallelism: number;
   meanOffset: number;
   differences: number[];
 }
 
-export interface SquarenessRequest extends UnitFamilies {
-  sideX: number;
-  sideY: number;
-  diagonal1: number;
-  diagonal2: number;
-  gantrySpan?: number;
-}
+export type SquarenessRequest = Schemas['SquarenessDto'] & UnitFamilies;
 export interface SquarenessResult extends CalculatedCommon {
   outOfSquareDeg: number;
   outOfSquareArcsec: number;
@@ -68,27 +52,14 @@ export interface SquarenessResult extends CalculatedCommon {
   span: number;
 }
 
-export interface FlatnessRequest extends UnitFamilies {
-  points: { x: number; y: number; z: number }[];
-}
+export type FlatnessRequest = Schemas['FlatnessDto'] & UnitFamilies;
 export interface FlatnessResult extends CalculatedCommon {
   leastSquares: { a: number; b: number; c: number; flatness: number; residuals: number[] };
   tilt: { xMmPerMetre: number; yMmPerMetre: number; mmPerMetre: number; directionDeg: number };
 }
 
-export type DriveType = 'screw' | 'belt' | 'rack';
-export interface DriveRequest extends UnitFamilies {
-  type: DriveType;
-  motorStepsPerRev: number;
-  microsteps: number;
-  gearRatio?: number;
-  lead?: number;
-  threadsPerInch?: number;
-  beltPitch?: number;
-  pulleyTeeth?: number;
-  pinionTeeth?: number;
-  pinionModule?: number;
-}
+export type DriveRequest = Schemas['DriveDto'] & UnitFamilies;
+export type DriveType = DriveRequest['type'];
 export interface DriveResult extends CalculatedCommon {
   travelPerRev: number;
   travelPerMotorRev: number;
@@ -97,11 +68,7 @@ export interface DriveResult extends CalculatedCommon {
   resolution: number;
 }
 
-export interface TravelTrialRequest extends UnitFamilies {
-  stepsPerMmUsed: number;
-  theoreticalStepsPerMm?: number;
-  moves: { commanded: number; measured: number }[];
-}
+export type TravelTrialRequest = Schemas['TravelTrialDto'] & UnitFamilies;
 export interface TravelTrialResult extends CalculatedCommon {
   scale: number;
   offset: number;
@@ -112,10 +79,7 @@ export interface TravelTrialResult extends CalculatedCommon {
   moves: { commanded: number; measured: number; error: number; residual: number }[];
 }
 
-export interface PositioningRequest extends UnitFamilies {
-  targets: number[];
-  runs: { direction: 'up' | 'down'; deviations: number[] }[];
-}
+export type PositioningRequest = Schemas['PositioningDto'] & UnitFamilies;
 export interface PositioningTarget {
   target: number;
   meanUp: number;
@@ -146,16 +110,8 @@ export interface PositioningResult extends CalculatedCommon {
   runsDown: number;
 }
 
-export type Mounting = 'fixed-free' | 'supported-supported' | 'fixed-supported' | 'fixed-fixed';
-export interface ScrewSpeedRequest extends UnitFamilies {
-  nominalDiameter: number;
-  rootDiameter: number;
-  unsupportedLength: number;
-  lead: number;
-  mounting: Mounting;
-  feedRate: number;
-  dnLimit?: number;
-}
+export type ScrewSpeedRequest = Schemas['ScrewSpeedDto'] & UnitFamilies;
+export type Mounting = ScrewSpeedRequest['mounting'];
 export interface ScrewSpeedResult extends CalculatedCommon {
   rpm: number;
   criticalSpeed: number;

@@ -1,20 +1,9 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
-import type { LengthUnit } from '../../../lib/units';
+import type { Schemas } from '../../../lib/api/schemas';
 import { railKeys, type Rail } from '../types';
 
-export interface RailInput {
-  label: string;
-  axis: string;
-  lengthUnit: LengthUnit;
-  length: number;
-  profileSize?: number;
-  holePitch: number;
-  firstHole: number;
-  spacing: number | null;
-  endDistance: number | null;
-  partnerRailId?: string | null;
-}
+export type RailInput = Schemas['CreateRailDto'];
 
 export function useCreateRail(machineId: string) {
   const qc = useQueryClient();

@@ -1,14 +1,10 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '../../../lib/api-client';
-import type { LengthUnit } from '../../../lib/units';
+import type { Schemas } from '../../../lib/api/schemas';
 import { railKeys, type StraightnessResult } from '../types';
 
-export interface PreviewBody {
-  positions: number[];
-  readings: number[];
-  readingUnit: LengthUnit;
-  lengthUnit: LengthUnit;
-}
+/** The straightness calculator's request; the preview always names both unit families. */
+export type PreviewBody = Schemas['StraightnessDto'] & Required<Pick<Schemas['StraightnessDto'], 'lengthUnit' | 'readingUnit'>>;
 
 /** Live preview while readings are typed: the calculators route fits them, nothing is saved. */
 export const straightnessPreviewQueryOptions = (body: PreviewBody | null) =>
