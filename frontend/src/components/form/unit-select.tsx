@@ -1,7 +1,6 @@
 import { MenuItem, TextField } from '@mui/material';
-import { UNIT_LABELS, type LengthUnit } from '../../lib/units';
+import { LENGTH_UNITS, UNIT_LABELS, type LengthUnit } from '../../lib/units';
 
-const ALL: LengthUnit[] = ['mm', 'um', 'in', 'thou'];
 const DEFAULT_LABEL = { length: 'Length unit', reading: 'Reading unit' } as const;
 
 /**
@@ -13,7 +12,7 @@ export function UnitFamilySelect({
   value,
   onChange,
   label = DEFAULT_LABEL[family],
-  units = ALL,
+  units = LENGTH_UNITS,
 }: {
   family: 'length' | 'reading';
   value: LengthUnit;

@@ -1,7 +1,7 @@
+import { isLengthUnit, UNIT_LABELS } from '../../lib/units';
 import type { BoardCheck, Target } from './types';
 
-const UNIT_WORDS: Record<string, string> = { um: 'µm', thou: 'thou', in: 'in', mm: 'mm' };
-export const unitLabel = (unit: string) => UNIT_WORDS[unit] ?? unit;
+export const unitLabel = (unit: string) => (isLengthUnit(unit) ? UNIT_LABELS[unit] : unit);
 
 export function num(v: number): string {
   if (v === 0) return '0';

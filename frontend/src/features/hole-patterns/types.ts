@@ -1,6 +1,8 @@
+import type { LengthUnit } from '../../lib/units';
+
 export type PatternReference = 'bottom-left' | 'bottom-right' | 'top-left' | 'top-right' | 'left' | 'right' | 'bottom' | 'top';
 /** The length unit of the outline and every coordinate (the length family). */
-export type PatternUnit = 'mm' | 'um' | 'in' | 'thou';
+export type PatternUnit = LengthUnit;
 export type PatternEntry = 'list' | 'grid' | 'circle';
 export type Paper = 'a4' | 'letter';
 

@@ -1,4 +1,6 @@
-export type TargetUnit = 'mm' | 'um' | 'in' | 'thou' | 'mm/m' | '%' | 'days' | 'um/mm';
+import { isLengthUnit, LENGTH_UNITS, UNIT_LABELS, type LengthUnit } from '../../lib/units';
+
+export type TargetUnit = LengthUnit | 'mm/m' | '%' | 'days' | 'um/mm';
 export type StraightnessReference = 'minimum-zone' | 'least-squares';
 export const REFERENCE_WORDS: Record<StraightnessReference, string> = { 'minimum-zone': 'minimum zone (ISO 1101)', 'least-squares': 'least squares line' };
 
@@ -21,10 +23,10 @@ export interface TargetSet {
   usedBy: { id: string; name: string; state: string; approved: boolean }[];
 }
 
-export const UNIT_WORDS: Record<TargetUnit, string> = { mm: 'mm', um: 'µm', in: 'in', thou: 'thou', 'mm/m': 'mm/m', '%': '%', days: 'days', 'um/mm': 'µm per mm of rail spacing' };
+export const UNIT_WORDS: Record<TargetUnit, string> = { ...UNIT_LABELS, 'mm/m': 'mm/m', '%': '%', days: 'days', 'um/mm': 'µm per mm of rail spacing' };
 
 /** Which units a target may be given in: lengths in any length unit, others as they are. */
-export const unitChoices = (unit: TargetUnit): TargetUnit[] => (['mm', 'um', 'in', 'thou'].includes(unit) ? ['mm', 'um', 'in', 'thou'] : [unit]);
+export const unitChoices = (unit: TargetUnit): TargetUnit[] => (isLengthUnit(unit) ? LENGTH_UNITS : [unit]);
 
 export const targetSetKeys = {
   all: ['target-sets'] as const,

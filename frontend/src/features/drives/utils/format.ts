@@ -1,9 +1,9 @@
-import { fromMm, UNIT_LABELS, type LengthUnit } from '../../../lib/units';
+import { fromMm, isLengthUnit, UNIT_LABELS, type LengthUnit } from '../../../lib/units';
 import type { TargetValue } from '../types';
 
 const DIGITS: Record<LengthUnit, number> = { mm: 3, um: 1, in: 4, thou: 2 };
 
-export const isLengthUnit = (u: string): u is LengthUnit => u === 'mm' || u === 'um' || u === 'in' || u === 'thou';
+export { isLengthUnit };
 
 /** A length held in mm, shown in a unit with the unit beside it. */
 export function showLength(mm: number | null | undefined, unit: LengthUnit, digits = DIGITS[unit]): string {

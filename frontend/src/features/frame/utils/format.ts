@@ -1,9 +1,9 @@
-import { fromMm, UNIT_LABELS, type LengthUnit } from '../../../lib/units';
+import { fromMm, isLengthUnit, UNIT_LABELS, type LengthUnit } from '../../../lib/units';
 import type { JudgedTarget } from '../types';
 
 const DIGITS: Record<LengthUnit, number> = { mm: 3, um: 1, in: 4, thou: 2 };
 
-export const isLengthUnit = (u: string): u is LengthUnit => u === 'mm' || u === 'um' || u === 'in' || u === 'thou';
+export { isLengthUnit };
 
 /** A length in mm shown in a unit, always with the unit. */
 export const showLength = (mm: number | null | undefined, unit: LengthUnit = 'mm', digits?: number) =>

@@ -1,10 +1,8 @@
 import { z } from 'zod';
 import { parseNumberCell } from '../../../lib/tabular-input';
-import { toMm, UNIT_LABELS, type LengthUnit } from '../../../lib/units';
+import { LENGTH_UNITS, toMm, UNIT_LABELS, type LengthUnit } from '../../../lib/units';
 import type { RailInput } from '../api/create-rail';
 import type { Rail } from '../types';
-
-const LENGTH_UNITS = ['mm', 'um', 'in', 'thou'] as const satisfies readonly LengthUnit[];
 
 /** A typed number ("1,5" reads as 1.5); NaN when empty or not a number. */
 const num = (s: string) => {

@@ -1,4 +1,4 @@
-import { fromMm, UNIT_LABELS, type LengthUnit } from '../../../lib/units';
+import { fromMm, isLengthUnit, toMm, UNIT_LABELS, type LengthUnit } from '../../../lib/units';
 import type { TargetValue } from '../types';
 
 const DIGITS: Record<LengthUnit, number> = { mm: 4, um: 1, in: 5, thou: 2 };
@@ -7,11 +7,11 @@ const DIGITS: Record<LengthUnit, number> = { mm: 4, um: 1, in: 5, thou: 2 };
 export const showLength = (mm: number | null | undefined, unit: LengthUnit) =>
   mm === null || mm === undefined || !Number.isFinite(mm) ? '—' : `${fromMm(mm, unit).toFixed(DIGITS[unit])} ${UNIT_LABELS[unit]}`;
 
-export const isLengthUnit = (u: string): u is LengthUnit => u === 'mm' || u === 'um' || u === 'in' || u === 'thou';
+export { isLengthUnit };
 
 export const showTarget = (t: TargetValue) => `${t.value} ${isLengthUnit(t.unit) ? UNIT_LABELS[t.unit] : t.unit}`;
 
 /** A result in mm shown in the target's unit (the way the target was written). */
 export const showInTargetUnit = (mm: number, t: TargetValue) => showLength(mm, isLengthUnit(t.unit) ? t.unit : 'mm');
 
-export const targetMm = (t: TargetValue) => (isLengthUnit(t.unit) ? { mm: 1, um: 0.001, in: 25.4, thou: 0.0254 }[t.unit] * t.value : t.value);
+export const targetMm = (t: TargetValue) => (isLengthUnit(t.unit) ? toMm(t.value, t.unit) : t.value);
