@@ -4,7 +4,7 @@ import { useFlatnessCalculation } from '../api/calc-flatness';
 import { useStableBody } from '../hooks/use-stable-body';
 import type { FlatnessRequest } from '../types';
 import { fixed, lengthIn } from '../utils/format';
-import { parseTable } from '../utils/parse-columns';
+import { parseTable } from '../utils/read-table';
 import { CalculationState } from './calculation-state';
 import { CalculatorLayout } from './calculator-layout';
 import { PasteField } from './paste-field';

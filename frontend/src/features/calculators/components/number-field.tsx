@@ -1,5 +1,5 @@
 import { InputAdornment, TextField } from '@mui/material';
-import { parseNumber } from '../utils/parse-columns';
+import { parseNumber } from '../utils/read-table';
 
 /** A number typed as text (so "0," mid-typing is not lost), with its unit beside it. */
 export function NumberField({

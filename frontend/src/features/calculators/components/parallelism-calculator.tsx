@@ -4,7 +4,7 @@ import { useParallelismCalculation } from '../api/calc-parallelism';
 import { useStableBody } from '../hooks/use-stable-body';
 import type { ParallelismRequest } from '../types';
 import { lengthIn } from '../utils/format';
-import { parseTable } from '../utils/parse-columns';
+import { parseTable } from '../utils/read-table';
 import { CalculationState } from './calculation-state';
 import { CalculatorLayout } from './calculator-layout';
 import { PasteField } from './paste-field';

@@ -5,7 +5,7 @@ import { usePositioningCalculation } from '../api/calc-positioning';
 import { useStableBody } from '../hooks/use-stable-body';
 import type { PositioningRequest, UnitFamilies } from '../types';
 import { lengthIn } from '../utils/format';
-import { parseTable } from '../utils/parse-columns';
+import { parseTable } from '../utils/read-table';
 import { CalculationState } from './calculation-state';
 import { CalculatorLayout } from './calculator-layout';
 import { PasteField } from './paste-field';

@@ -6,7 +6,7 @@ import { useStraightnessCalculation } from '../api/calc-straightness';
 import { useStableBody } from '../hooks/use-stable-body';
 import type { StraightnessRequest } from '../types';
 import { lengthIn, slopePerMetre } from '../utils/format';
-import { parseTable } from '../utils/parse-columns';
+import { parseTable } from '../utils/read-table';
 import { CalculationState } from './calculation-state';
 import { CalculatorLayout } from './calculator-layout';
 import { PasteField } from './paste-field';

@@ -5,7 +5,7 @@ import { useTravelTrialCalculation } from '../api/calc-travel-trial';
 import { useStableBody } from '../hooks/use-stable-body';
 import type { TravelTrialRequest } from '../types';
 import { fixed, lengthIn, significant } from '../utils/format';
-import { parseTable } from '../utils/parse-columns';
+import { parseTable } from '../utils/read-table';
 import { CalculationState } from './calculation-state';
 import { CalculatorLayout } from './calculator-layout';
 import { FieldGrid } from './field-grid';
