@@ -10,6 +10,7 @@ import { CertificateQueryDto } from './dto/certificate-query.dto.js';
 import { WaiverDto } from './dto/waiver.dto.js';
 import { ReopenDto } from './dto/reopen.dto.js';
 import { create as contentDisposition } from 'content-disposition';
+import { ApiProduces } from '@nestjs/swagger';
 
 @Controller('machines/:id')
 export class ApprovalsController {
@@ -64,6 +65,7 @@ export class ApprovalsController {
   }
 
   @Get('certificate.pdf')
+  @ApiProduces('application/pdf')
   async certificate(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string, @Query() query: CertificateQueryDto, @Res({ passthrough: true }) reply: FastifyReply) {
     const { pdf, filename } = await this.certificates.forMachine(user, id, query.approval);
     reply.header('Content-Type', 'application/pdf');

@@ -3,6 +3,7 @@ import type { FastifyReply } from 'fastify';
 import { Public } from '../auth/decorators.js';
 import { PublicVerificationService } from './signing/public-verification.service.js';
 import { create as contentDisposition } from 'content-disposition';
+import { ApiProduces } from '@nestjs/swagger';
 
 /** Open to anyone: the address on a certificate, its signed record and the key that checks it. */
 @Controller('public')
@@ -11,6 +12,7 @@ export class PublicVerificationController {
   constructor(private readonly verification: PublicVerificationService) {}
 
   @Get('signing-key')
+  @ApiProduces('text/plain')
   @Header('Content-Type', 'text/plain; charset=utf-8')
   @Header('Content-Disposition', 'inline; filename="railwright-signing-key.pem"')
   signingKey() {

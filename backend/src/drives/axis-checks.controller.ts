@@ -12,6 +12,7 @@ import { PositioningRunsService } from './positioning-runs.service.js';
 import { TestProgramService } from './test-program.service.js';
 import { TravelTrialsService } from './travel-trials.service.js';
 import { create as contentDisposition } from 'content-disposition';
+import { ApiProduces } from '@nestjs/swagger';
 
 /** Travel trials, repeat-and-reverse runs and test programs of one axis. */
 @Controller('axes/:id')
@@ -88,6 +89,7 @@ export class AxisChecksController {
   }
 
   @Get('test-program')
+  @ApiProduces('text/plain')
   async testProgram(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) axisId: string, @Query() q: TestProgramQuery, @Res({ passthrough: true }) reply: FastifyReply) {
     const { filename, text } = await this.programs.program(user, axisId, q);
     reply.header('Content-Type', 'text/plain; charset=utf-8');

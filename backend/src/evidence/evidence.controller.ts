@@ -5,6 +5,7 @@ import type { SessionUser } from '../auth/session-user.js';
 import { ListEvidenceQueryDto } from './dto/list-evidence.query.js';
 import { EvidenceUploadService } from './evidence-upload.service.js';
 import { EvidenceService, type Download } from './evidence.service.js';
+import { ApiProduces } from '@nestjs/swagger';
 
 @Controller('evidence')
 export class EvidenceController {
@@ -36,11 +37,13 @@ export class EvidenceController {
   }
 
   @Get(':id/content')
+  @ApiProduces('image/jpeg', 'image/png', 'image/webp', 'application/pdf', 'text/csv')
   async content(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string, @Res({ passthrough: true }) reply: FastifyReply) {
     return send(reply, await this.evidence.content(user, id));
   }
 
   @Get(':id/thumbnail')
+  @ApiProduces('image/webp')
   async thumbnail(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string, @Res({ passthrough: true }) reply: FastifyReply) {
     return send(reply, await this.evidence.thumbnail(user, id));
   }

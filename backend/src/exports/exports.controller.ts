@@ -4,6 +4,7 @@ import { create as contentDisposition } from 'content-disposition';
 import { CurrentUser } from '../auth/decorators.js';
 import type { SessionUser } from '../auth/session-user.js';
 import { ExportsService, type CsvDownload } from './exports.service.js';
+import { ApiProduces } from '@nestjs/swagger';
 
 function send(reply: FastifyReply, file: CsvDownload) {
   reply.header('Content-Type', 'text/csv; charset=utf-8');
@@ -17,21 +18,25 @@ export class ExportsController {
   constructor(private readonly exports: ExportsService) {}
 
   @Get('rails/:id/sweeps.csv')
+  @ApiProduces('text/csv')
   async sweeps(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string, @Res({ passthrough: true }) reply: FastifyReply) {
     return send(reply, await this.exports.sweeps(user, id));
   }
 
   @Get('axes/:id/travel-trials.csv')
+  @ApiProduces('text/csv')
   async travelTrials(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string, @Res({ passthrough: true }) reply: FastifyReply) {
     return send(reply, await this.exports.travelTrials(user, id));
   }
 
   @Get('axes/:id/positioning-runs.csv')
+  @ApiProduces('text/csv')
   async positioningRuns(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string, @Res({ passthrough: true }) reply: FastifyReply) {
     return send(reply, await this.exports.positioningRuns(user, id));
   }
 
   @Get('machines/:id/bed-grids.csv')
+  @ApiProduces('text/csv')
   async bedGrids(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string, @Res({ passthrough: true }) reply: FastifyReply) {
     return send(reply, await this.exports.bedGrids(user, id));
   }

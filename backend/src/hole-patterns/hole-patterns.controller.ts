@@ -7,6 +7,7 @@ import { TemplateQueryDto } from './dto/template-query.dto.js';
 import { HolePatternsService } from './hole-patterns.service.js';
 import { TemplatesService, type TemplateFile } from './templates.service.js';
 import { create as contentDisposition } from 'content-disposition';
+import { ApiProduces } from '@nestjs/swagger';
 
 @Controller()
 export class HolePatternsController {
@@ -52,21 +53,25 @@ export class HolePatternsController {
   }
 
   @Get('hole-patterns/:id/template.pdf')
+  @ApiProduces('application/pdf')
   async patternPdf(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string, @Query() q: TemplateQueryDto, @Res({ passthrough: true }) reply: FastifyReply) {
     return send(reply, await this.templates.forPattern(user, id, 'pdf', q.paper));
   }
 
   @Get('hole-patterns/:id/template.svg')
+  @ApiProduces('image/svg+xml')
   async patternSvg(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string, @Res({ passthrough: true }) reply: FastifyReply) {
     return send(reply, await this.templates.forPattern(user, id, 'svg'));
   }
 
   @Get('rails/:id/template.pdf')
+  @ApiProduces('application/pdf')
   async railPdf(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string, @Query() q: TemplateQueryDto, @Res({ passthrough: true }) reply: FastifyReply) {
     return send(reply, await this.templates.forRail(user, id, 'pdf', q.paper));
   }
 
   @Get('rails/:id/template.svg')
+  @ApiProduces('image/svg+xml')
   async railSvg(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string, @Res({ passthrough: true }) reply: FastifyReply) {
     return send(reply, await this.templates.forRail(user, id, 'svg'));
   }

@@ -5,6 +5,7 @@ import type { SessionUser } from '../auth/session-user.js';
 import { MailService, WORKSHOP_HEADER } from './mail.service.js';
 import { toOutboxMessage } from './outbox.mapper.js';
 import { create as contentDisposition } from 'content-disposition';
+import { ApiProduces } from '@nestjs/swagger';
 
 /** The development outbox: what the fake SMTP server caught for this workshop. Admins only. */
 @Controller('dev/outbox')
@@ -19,6 +20,7 @@ export class OutboxController {
   }
 
   @Get(':id/attachments/:index')
+  @ApiProduces('application/octet-stream')
   attachment(
     @CurrentUser() user: SessionUser,
     @Param('id', ParseUUIDPipe) id: string,

@@ -2047,6 +2047,1136 @@ export interface components {
             circle?: components["schemas"]["CircleDto"];
             notes?: string;
         };
+        OutboxMessage: {
+            id: string;
+            receivedAt: string;
+            from: string;
+            to: string[];
+            subject: string;
+            text: string;
+            /** @description The message held a set-your-password link, which only its recipient may see. */
+            linkHidden: boolean;
+            attachments: {
+                index: number;
+                filename: string;
+                contentType: string;
+                sizeBytes: number;
+            }[];
+        };
+        UserResponse: {
+            id: string;
+            email: string;
+            name: string;
+            /** @enum {string} */
+            role: "admin" | "owner" | "technician" | "builder" | "viewer";
+            workshop: {
+                id: string;
+                name: string;
+            };
+        };
+        PersonResponse: {
+            id: string;
+            email: string;
+            name: string;
+            /** @enum {string} */
+            role: "admin" | "owner" | "technician" | "builder" | "viewer";
+            active: boolean;
+            /** @description Invited and not yet signed up: the admin may send the invitation again. */
+            invitationPending: boolean;
+            createdAt: string;
+        };
+        TargetSetResponse: {
+            id: string;
+            name: string;
+            description: string;
+            targets: {
+                reversal: {
+                    value: number;
+                    /** @enum {string} */
+                    unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
+                    source?: string;
+                    /** @enum {string} */
+                    reference?: "minimum-zone" | "least-squares";
+                    label: string;
+                };
+                repeatability: {
+                    value: number;
+                    /** @enum {string} */
+                    unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
+                    source?: string;
+                    /** @enum {string} */
+                    reference?: "minimum-zone" | "least-squares";
+                    label: string;
+                };
+                squareness: {
+                    value: number;
+                    /** @enum {string} */
+                    unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
+                    source?: string;
+                    /** @enum {string} */
+                    reference?: "minimum-zone" | "least-squares";
+                    label: string;
+                };
+                railStraightness: {
+                    value: number;
+                    /** @enum {string} */
+                    unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
+                    source?: string;
+                    /** @enum {string} */
+                    reference?: "minimum-zone" | "least-squares";
+                    label: string;
+                };
+                railParallelism: {
+                    value: number;
+                    /** @enum {string} */
+                    unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
+                    source?: string;
+                    /** @enum {string} */
+                    reference?: "minimum-zone" | "least-squares";
+                    label: string;
+                };
+                railHeightDifference: {
+                    value: number;
+                    /** @enum {string} */
+                    unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
+                    source?: string;
+                    /** @enum {string} */
+                    reference?: "minimum-zone" | "least-squares";
+                    label: string;
+                };
+                bedFlatness: {
+                    value: number;
+                    /** @enum {string} */
+                    unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
+                    source?: string;
+                    /** @enum {string} */
+                    reference?: "minimum-zone" | "least-squares";
+                    label: string;
+                };
+                stepsPerMmError: {
+                    value: number;
+                    /** @enum {string} */
+                    unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
+                    source?: string;
+                    /** @enum {string} */
+                    reference?: "minimum-zone" | "least-squares";
+                    label: string;
+                };
+                positioningAccuracy: {
+                    value: number;
+                    /** @enum {string} */
+                    unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
+                    source?: string;
+                    /** @enum {string} */
+                    reference?: "minimum-zone" | "least-squares";
+                    label: string;
+                };
+                screwSpeedHeadroom: {
+                    value: number;
+                    /** @enum {string} */
+                    unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
+                    source?: string;
+                    /** @enum {string} */
+                    reference?: "minimum-zone" | "least-squares";
+                    label: string;
+                };
+                travelMargin: {
+                    value: number;
+                    /** @enum {string} */
+                    unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
+                    source?: string;
+                    /** @enum {string} */
+                    reference?: "minimum-zone" | "least-squares";
+                    label: string;
+                };
+                partTolerance: {
+                    value: number;
+                    /** @enum {string} */
+                    unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
+                    source?: string;
+                    /** @enum {string} */
+                    reference?: "minimum-zone" | "least-squares";
+                    label: string;
+                };
+                recheckIntervalDays: {
+                    value: number;
+                    /** @enum {string} */
+                    unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
+                    source?: string;
+                    /** @enum {string} */
+                    reference?: "minimum-zone" | "least-squares";
+                    label: string;
+                };
+            };
+            updatedAt: string;
+            /** @description Machines judged against this set: an edit changes their boards, never their standing approvals. */
+            usedBy: components["schemas"]["TargetSetUser"][];
+        };
+        /** @description A machine judged against a set; `approved` when an approval of it stands on the set's values as they were signed. */
+        TargetSetUser: {
+            id: string;
+            name: string;
+            /** @enum {string} */
+            state: "being-built" | "awaiting-approval" | "ready-to-cut" | "recheck-due" | "reopened" | "retired";
+            approved: boolean;
+        };
+        MachineListItem: {
+            /** @description Counted as the readiness board counts (waivers applied); `blocking` names the first check that stops approval. */
+            checks: {
+                total: number;
+                within: number;
+                outside: number;
+                waived: number;
+                notStarted: number;
+                blocking: components["schemas"]["BlockingCheckRef"] | null;
+            };
+            id: string;
+            name: string;
+            /** @enum {string} */
+            kind: "plasma" | "router" | "other";
+            /** @enum {string} */
+            state: "being-built" | "awaiting-approval" | "ready-to-cut" | "recheck-due" | "reopened" | "retired";
+            /** @description In mm. */
+            workArea: {
+                x: number;
+                y: number;
+            };
+            /**
+             * @description The unit the work area was typed in and is shown in.
+             * @enum {string}
+             */
+            lengthUnit: "mm" | "um" | "in" | "thou";
+            /** @description The work area in lengthUnit. */
+            workAreaInLengthUnit: {
+                x: number;
+                y: number;
+            };
+            notes: string;
+            targetSet: {
+                id: string;
+                name: string;
+            };
+            lastActivityAt: string;
+            createdAt: string;
+            updatedAt: string;
+        };
+        /** @description The first check that stops approval, as the machines list names it. */
+        BlockingCheckRef: {
+            key: string;
+            /** @enum {string} */
+            kind: "positioning" | "rail-straightness" | "travel-trial" | "diagonal-check" | "bed-grid" | "test-cut" | "safety-walk" | "rail-parallelism" | "backlash" | "speed-check" | "travel-envelope";
+            subject: string;
+            /** @enum {string} */
+            status: "outside-target" | "not-started";
+        };
+        MachineResponse: {
+            id: string;
+            name: string;
+            /** @enum {string} */
+            kind: "plasma" | "router" | "other";
+            /** @enum {string} */
+            state: "being-built" | "awaiting-approval" | "ready-to-cut" | "recheck-due" | "reopened" | "retired";
+            /** @description In mm. */
+            workArea: {
+                x: number;
+                y: number;
+            };
+            /**
+             * @description The unit the work area was typed in and is shown in.
+             * @enum {string}
+             */
+            lengthUnit: "mm" | "um" | "in" | "thou";
+            /** @description The work area in lengthUnit. */
+            workAreaInLengthUnit: {
+                x: number;
+                y: number;
+            };
+            notes: string;
+            targetSet: {
+                id: string;
+                name: string;
+            };
+            lastActivityAt: string;
+            createdAt: string;
+            updatedAt: string;
+        };
+        HistoryPage: {
+            entries: components["schemas"]["HistoryEntryResponse"][];
+            nextCursor: string | null;
+        };
+        HistoryEntryResponse: {
+            id: string;
+            /** @description ISO 8601 with the zone (UTC). */
+            at: string;
+            actor: string;
+            /** @description The plain name of what the entry is about, e.g. "Rail sweep". */
+            kind: string;
+            recordType: string;
+            recordId: string | null;
+            machine: {
+                id: string;
+                name: string;
+            } | null;
+            action: string;
+            summary: string;
+            /** @description What the service said changed (kept for readers of the summary). */
+            changes: {
+                [key: string]: unknown;
+            } | null;
+            /** @description Every value the command changed, from the database's change log of the same transaction. */
+            fieldChanges: components["schemas"]["FieldChange"][];
+        };
+        /** @description One value that changed: which record, which field, before and after (null where there was none). */
+        FieldChange: {
+            record: string;
+            /** @enum {string} */
+            operation: "changed" | "created" | "deleted";
+            field: string;
+            before: unknown;
+            after: unknown;
+        };
+        /**
+         * @description Something a person should know about a result that does not change its number: too few runs
+         *     for ISO 230-2's rules, an instrument coarser than a quarter of the tolerance, a correction far
+         *     from the theoretical value. Every computed result carries a list of these, and they travel with
+         *     it to the readiness board, the approval snapshot and the certificate.
+         */
+        ResultWarning: {
+            /** @description Stable, kebab-case: "few-runs", "coarse-instrument", "correction-far-from-theory". */
+            code: string;
+            /** @description One plain sentence with its numbers and units, as shown to people. */
+            message: string;
+        };
+        RailListItem: {
+            sweepCount: number;
+            latestSweep: components["schemas"]["SweepSummary"] | null;
+            id: string;
+            machineId: string;
+            label: string;
+            axis: string;
+            /**
+             * @description Unit the lengths below were typed in; `length`, `holePitch`, … are in it, the `…Mm` twins in mm.
+             * @enum {string}
+             */
+            lengthUnit: "mm" | "um" | "in" | "thou";
+            length: number;
+            holePitch: number;
+            firstHole: number;
+            /** @description Distance to the partner rail (a in S = a × K); null until entered. */
+            spacing: number | null;
+            /** @description The end distance the holes keep, in lengthUnit; `endDistanceIsDefault` when not entered. */
+            endDistance: number;
+            endDistanceIsDefault: boolean;
+            /** @description Goes out as null when the stored length cannot be read (see `unreadable`). */
+            lengthMm: number;
+            profileSize: number | null;
+            holePitchMm: number;
+            firstHoleMm: number;
+            spacingMm: number | null;
+            endDistanceMm: number;
+            partnerRailId: string | null;
+            /** @description Hole centres from the rail's start, in mm (`position`) and in lengthUnit (`at`). */
+            holes: {
+                index: number;
+                position: number;
+                at: number;
+            }[];
+            typicalBoltSize: string | null;
+            createdAt: string;
+            updatedAt: string;
+            /** @description Present when the stored geometry cannot be read: holes is then empty. */
+            unreadable?: string;
+        };
+        SweepSummary: {
+            id: string;
+            takenAt: string;
+            phase: string;
+            datum: string | null;
+            /** @description null when the stored result cannot be read (see `unreadable`). */
+            leastSquaresStraightness: number | null;
+            minimumZoneStraightness: number | null;
+            /** @enum {string} */
+            status: "within-target" | "outside-target";
+            target: {
+                value: number;
+                unit: string;
+                /** @enum {string} */
+                reference?: "minimum-zone" | "least-squares";
+            };
+            /** @enum {string} */
+            face: "side" | "top";
+            /** @enum {string} */
+            readingUnit: "mm" | "um" | "in" | "thou";
+            /** @enum {string} */
+            lengthUnit: "mm" | "um" | "in" | "thou";
+            /** @description Largest local slope of the judged residuals, mm/m (null on sweeps saved before it was kept). */
+            localSlopeMmPerM: number | null;
+            unreadable?: string;
+        };
+        RailResponse: {
+            id: string;
+            machineId: string;
+            label: string;
+            axis: string;
+            /**
+             * @description Unit the lengths below were typed in; `length`, `holePitch`, … are in it, the `…Mm` twins in mm.
+             * @enum {string}
+             */
+            lengthUnit: "mm" | "um" | "in" | "thou";
+            length: number;
+            holePitch: number;
+            firstHole: number;
+            /** @description Distance to the partner rail (a in S = a × K); null until entered. */
+            spacing: number | null;
+            /** @description The end distance the holes keep, in lengthUnit; `endDistanceIsDefault` when not entered. */
+            endDistance: number;
+            endDistanceIsDefault: boolean;
+            /** @description Goes out as null when the stored length cannot be read (see `unreadable`). */
+            lengthMm: number;
+            profileSize: number | null;
+            holePitchMm: number;
+            firstHoleMm: number;
+            spacingMm: number | null;
+            endDistanceMm: number;
+            partnerRailId: string | null;
+            /** @description Hole centres from the rail's start, in mm (`position`) and in lengthUnit (`at`). */
+            holes: {
+                index: number;
+                position: number;
+                at: number;
+            }[];
+            typicalBoltSize: string | null;
+            createdAt: string;
+            updatedAt: string;
+            /** @description Present when the stored geometry cannot be read: holes is then empty. */
+            unreadable?: string;
+        };
+        /** @description A sweep in its rail's list: the summary and what the history table shows, no readings (GET /api/sweeps/:id has them). */
+        SweepListItem: {
+            railId: string;
+            machineId: string;
+            takenBy: string;
+            stationCount: number;
+            createdAt: string;
+            locked: boolean;
+            id: string;
+            takenAt: string;
+            phase: string;
+            datum: string | null;
+            /** @description null when the stored result cannot be read (see `unreadable`). */
+            leastSquaresStraightness: number | null;
+            minimumZoneStraightness: number | null;
+            /** @enum {string} */
+            status: "within-target" | "outside-target";
+            target: {
+                value: number;
+                unit: string;
+                /** @enum {string} */
+                reference?: "minimum-zone" | "least-squares";
+            };
+            /** @enum {string} */
+            face: "side" | "top";
+            /** @enum {string} */
+            readingUnit: "mm" | "um" | "in" | "thou";
+            /** @enum {string} */
+            lengthUnit: "mm" | "um" | "in" | "thou";
+            /** @description Largest local slope of the judged residuals, mm/m (null on sweeps saved before it was kept). */
+            localSlopeMmPerM: number | null;
+            unreadable?: string;
+        };
+        SweepResponse: {
+            id: string;
+            railId: string;
+            machineId: string;
+            /**
+             * @description Positions are in lengthUnit, readings and resolution in readingUnit, as typed; the `…Mm` twins in mm.
+             * @enum {string}
+             */
+            lengthUnit: "mm" | "um" | "in" | "thou";
+            /** @enum {string} */
+            readingUnit: "mm" | "um" | "in" | "thou";
+            /** @enum {string} */
+            face: "side" | "top";
+            stations: {
+                position: number;
+                positionMm: number;
+                reading: number;
+                readingMm: number;
+            }[] | null;
+            localSlope: components["schemas"]["StoredLocalSlope"] | null;
+            warnings: components["schemas"]["ResultWarning"][];
+            instrument: string;
+            resolution: number | null;
+            temperatureC: number | null;
+            /** @enum {string} */
+            phase: "as-found" | "as-left";
+            takenBy: string;
+            boltSize: string | null;
+            torqueNm: number | null;
+            datum: string | null;
+            notes: string;
+            result: components["schemas"]["StoredSweepResult"] | null;
+            /** @enum {string} */
+            status: "within-target" | "outside-target";
+            target: {
+                value: number;
+                unit: string;
+                /** @enum {string} */
+                reference?: "minimum-zone" | "least-squares";
+            };
+            /** @description Present when the stored result or readings cannot be read: those come back null. */
+            unreadable?: string;
+            takenAt: string;
+            createdAt: string;
+            /** @description An approval was based on it: it can no longer be deleted. */
+            locked: boolean;
+        };
+        /** @description Largest slope between neighbouring stations (or over a stated base), mm per metre. */
+        StoredLocalSlope: {
+            mmPerM: number;
+            fromMm: number;
+            toMm: number;
+            baseMm: number | null;
+        };
+        StoredSweepResult: {
+            leastSquares: components["schemas"]["StoredLine"];
+            minimumZone: components["schemas"]["StoredLine"];
+            endPoint: components["schemas"]["StoredLine"];
+            /** @description Absent on sweeps saved before local slope was kept. */
+            localSlope?: components["schemas"]["StoredLocalSlope"];
+        };
+        /** @description Stored engine result of a sweep; every length in mm. */
+        StoredLine: {
+            slope: number;
+            intercept: number;
+            straightness: number;
+            residuals: number[];
+        };
+        BoltDownResponse: {
+            id: string;
+            railId: string;
+            machineId: string;
+            rail: {
+                label: string;
+                axis: string;
+                lengthMm: number;
+            };
+            /** @enum {string} */
+            mode: "face" | "line";
+            /**
+             * @description Readings, aims and the band are in readingUnit; hole positions `at` in lengthUnit (`position` in mm).
+             * @enum {string}
+             */
+            readingUnit: "mm" | "um" | "in" | "thou";
+            /** @enum {string} */
+            lengthUnit: "mm" | "um" | "in" | "thou";
+            /** @description Half-width around the aim that counts as on target, in the unit and in mm. */
+            band: number;
+            bandMm: number;
+            holes: components["schemas"]["BoltDownHoleResponse"][];
+            nextHole: number | null;
+            fixedCount: number;
+            holeCount: number;
+            complete: boolean;
+            finalSweepId: string | null;
+            /** @description Set when the bolt-down was given up: when, by whom and why. No hole is written after it. */
+            abandoned: {
+                at: string;
+                by: string | null;
+                reason: string;
+            } | null;
+            createdBy: string;
+            createdAt: string;
+            updatedAt: string;
+            /** @description Present when the stored hole positions, band or readings cannot be read: holes is then empty. */
+            unreadable?: string;
+        };
+        BoltDownHoleResponse: {
+            index: number;
+            /** @description Hole centre, mm from the rail's start; `at` the same in the bolt-down's lengthUnit. */
+            position: number;
+            at: number;
+            /** @description Rank in the proposed fixing order (0 = first). */
+            order: number;
+            /** @description Reading to aim for, in the bolt-down's unit (null until the first hole is fixed). */
+            target: number | null;
+            targetMm: number | null;
+            /** @description Reading as typed, in the bolt-down's unit. */
+            reading: number | null;
+            readingMm: number | null;
+            /** @description reading − target, in the bolt-down's unit. */
+            difference: number | null;
+            /** @description Within ±band of the aim (null when there is no reading or no aim yet). */
+            onTarget: boolean | null;
+            fixed: boolean;
+            fixedAt: string | null;
+            fixedBy: string | null;
+        };
+        /** @description A hole write's answer: the whole bolt-down, and whether this write was a repeat of one already applied. */
+        HoleWriteResponse: {
+            writeId: string;
+            repeated: boolean;
+            id: string;
+            railId: string;
+            machineId: string;
+            rail: {
+                label: string;
+                axis: string;
+                lengthMm: number;
+            };
+            /** @enum {string} */
+            mode: "face" | "line";
+            /**
+             * @description Readings, aims and the band are in readingUnit; hole positions `at` in lengthUnit (`position` in mm).
+             * @enum {string}
+             */
+            readingUnit: "mm" | "um" | "in" | "thou";
+            /** @enum {string} */
+            lengthUnit: "mm" | "um" | "in" | "thou";
+            /** @description Half-width around the aim that counts as on target, in the unit and in mm. */
+            band: number;
+            bandMm: number;
+            holes: components["schemas"]["BoltDownHoleResponse"][];
+            nextHole: number | null;
+            fixedCount: number;
+            holeCount: number;
+            complete: boolean;
+            finalSweepId: string | null;
+            /** @description Set when the bolt-down was given up: when, by whom and why. No hole is written after it. */
+            abandoned: {
+                at: string;
+                by: string | null;
+                reason: string;
+            } | null;
+            createdBy: string;
+            createdAt: string;
+            updatedAt: string;
+            /** @description Present when the stored hole positions, band or readings cannot be read: holes is then empty. */
+            unreadable?: string;
+        };
+        DiagonalCheckResult: {
+            correction: components["schemas"]["SquaringCorrection"];
+            outOfSquareDeg: number;
+            outOfSquareArcsec: number;
+            /** @description Lateral error per metre of travel: tan γ × 1000. */
+            mmPerMetre: number;
+            warnings: string[];
+            outOfSquareRad: number;
+            /**
+             * @description Which diagonal is longer (1 when they are equal, with a zero angle).
+             * @enum {number}
+             */
+            longDiagonal: 1 | 2;
+            diagonalDifferenceMm: number;
+        };
+        /**
+         * @description How to square a dual-drive gantry riding on the Y rails. Diagonal 1 runs from the X0 Y0 corner
+         *     to the far corner: when it is the long one the gantry's X-far end runs ahead (towards Y-far) of
+         *     its X0 end, so that end is brought back towards Y0 (or the X0 end moved forward) by span × tan γ.
+         */
+        SquaringCorrection: {
+            moveMm: number;
+            spanMm: number;
+            /**
+             * @description The end of the gantry that runs ahead and is moved back.
+             * @enum {string|null}
+             */
+            end: "x-far" | "x0" | null;
+            /** @enum {string|null} */
+            towards: "y0" | null;
+            instruction: string;
+        };
+        JudgedTarget: {
+            label: string;
+            value: number;
+            /** @enum {string} */
+            unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
+            source?: string;
+            /** @enum {string} */
+            reference?: "minimum-zone" | "least-squares";
+        };
+        BedGridResult: {
+            leastSquares: {
+                /** @description Slopes of the plane z = a·x + b·y + c (mm per mm) and its height at X0 Y0 (mm). */
+                a: number;
+                b: number;
+                c: number;
+                /** @description Max − min residual about the plane, mm. */
+                flatness: number;
+                flatnessMm: number;
+            };
+            /** @description The ISO 1101 zone: middle plane z = a·x + b·y + c and the zone's width along the height axis. */
+            minimumZone: {
+                a: number;
+                b: number;
+                c: number;
+                flatnessMm: number;
+            };
+            /** @description Highest minus lowest height as read, tilt left in. */
+            heightRange: {
+                rangeMm: number;
+            };
+            /** @description The value this machine's bed is judged on (see BedJudgedBasis). */
+            judged: {
+                /** @enum {string} */
+                basis: "minimum-zone" | "height-range";
+                label: string;
+                valueMm: number;
+            };
+            tilt: {
+                xMmPerMetre: number;
+                yMmPerMetre: number;
+                mmPerMetre: number;
+                directionDeg: number;
+            };
+            points: components["schemas"]["BedGridPointResult"][];
+            highest: components["schemas"]["BedGridPointResult"];
+            lowest: components["schemas"]["BedGridPointResult"];
+            /** @description The points furthest from the middle of the judged zone, largest first (up to five). */
+            worstPoints: components["schemas"]["BedGridPointResult"][];
+            rows: number;
+            columns: number;
+        };
+        BedGridPointResult: {
+            index: number;
+            /** @description 1-based row (by position along Y, Y0 first) and column (by position along X, X0 first). */
+            row: number;
+            column: number;
+            xMm: number;
+            yMm: number;
+            zMm: number;
+            /** @description Height minus the least-squares plane, mm. */
+            residualMm: number;
+            /** @description Height minus the middle plane of the minimum zone, mm. */
+            zoneResidualMm: number;
+            /** @description Height above the lower bound of the judged zone, mm (0 … judged value): what the bed map draws. */
+            judgedHeightMm: number;
+        };
+        TestCutResult: {
+            scaleErrorX: number;
+            scaleErrorY: number;
+            x: components["schemas"]["AxisReading"];
+            y: components["schemas"]["AxisReading"];
+            outOfSquareArcsec: number;
+            squareness: {
+                outOfSquareDeg: number;
+                mmPerMetre: number;
+                /** @enum {number} */
+                longDiagonal: 1 | 2;
+                diagonalDifferenceMm: number;
+                warnings: string[];
+            };
+            /** @description |circleX − circleY| after kerf, mm. */
+            ovality: number;
+            /** @enum {string} */
+            ovalityPointsTo: "round" | "scale" | "x-backlash" | "y-backlash";
+            ovalityExplanation: string;
+            ovalityToleranceMm: number;
+            parts: components["schemas"]["PartSizeCheck"][];
+            notes: string[];
+        };
+        AxisReading: {
+            commandedMm: number;
+            measuredMm: number;
+            /** @description The measured size with the uncompensated kerf added back (outside contour). */
+            afterKerfMm: number;
+            errorMm: number;
+            errorPercent: number;
+            /** @description Multiply the axis's steps per mm by this: commanded ÷ measured. */
+            correctionFactor: number;
+            suggestedStepsPerMm: number | null;
+        };
+        PartSizeCheck: {
+            /** @enum {string} */
+            part: "outside-x" | "outside-y" | "circle-x" | "circle-y";
+            label: string;
+            nominalMm: number;
+            afterKerfMm: number;
+            deviationMm: number;
+            toleranceMm: number;
+            toleranceBasis: string;
+            sizeBandMm: number[] | null;
+            thicknessBandMm: number[] | null;
+            outsideBand: string | null;
+            within: boolean;
+        };
+        WalkCounts: {
+            total: number;
+            answered: number;
+            yes: number;
+            no: number;
+            na: number;
+        };
+        EvidenceResponse: {
+            id: string;
+            machineId: string;
+            subject: {
+                type: string;
+                id: string;
+                label: string;
+            };
+            /** @enum {string} */
+            kind: "photo" | "file";
+            fileName: string;
+            caption: string;
+            contentType: string;
+            /** @description Bytes. */
+            size: number;
+            sha256: string;
+            widthPx: number | null;
+            heightPx: number | null;
+            contentUrl: string;
+            /** @description Photos only. */
+            thumbnailUrl: string | null;
+            uploadedBy: {
+                id: string | null;
+                name: string;
+            };
+            uploadedAt: string;
+            /** @description The subject is part of an approval: the evidence is kept. */
+            locked: boolean;
+            /** @description Whether the person asking may delete it now. */
+            canDelete: boolean;
+            /** @description Attached while an approval stood: not part of what was signed. */
+            addedAfterApproval: boolean;
+        };
+        /**
+         * @description The drive of an axis with the calculators' field names, all lengths in mm. Which fields are
+         *     set depends on the type: screw (lead, diameters, length between supports, mounting), belt
+         *     (pitch, pulley teeth) or rack and pinion (module, teeth).
+         */
+        DriveRecord: {
+            /** @enum {string} */
+            type: "screw" | "belt" | "rack";
+            lead?: number;
+            /** @description Threads per inch, when the lead was given that way (lead = 25.4 / threadsPerInch mm, single start). */
+            threadsPerInch?: number;
+            nominalDiameter?: number;
+            rootDiameter?: number;
+            unsupportedLength?: number;
+            /** @enum {string} */
+            mounting?: "fixed-free" | "supported-supported" | "fixed-supported" | "fixed-fixed";
+            /** @description Nominal diameter × rpm the nut is rated for; the rolled-screw 70 000 when absent. */
+            dnLimit?: number;
+            beltPitch?: number;
+            pulleyTeeth?: number;
+            pinionModule?: number;
+            pinionTeeth?: number;
+        };
+        /** @description One change of the steps per mm set in the controller. */
+        StepsChange: {
+            from: number;
+            to: number;
+            at: string;
+            by: string;
+            /** @enum {string} */
+            reason: "travel-trial" | "edited";
+            trialId?: string;
+        };
+        AxisCheckSummary: {
+            /** @enum {string} */
+            status: "within-target" | "outside-target" | "not-started" | "not-applicable";
+            summary: string;
+            /** @description The result in a few words for a table cell ("−0.201 %"), or null when nothing is recorded. */
+            headline: string | null;
+            recordId: string | null;
+            recordedAt: string | null;
+        };
+        AxisResponse: {
+            id: string;
+            machineId: string;
+            name: string;
+            /** @description G-code letter the axis moves under (Y1 and Y2 are both Y), or null. */
+            letter: string | null;
+            /**
+             * @description The unit the axis is set up in: drive lengths, feed rates (per minute) and travel below are in it.
+             * @enum {string}
+             */
+            lengthUnit: "mm" | "um" | "in" | "thou";
+            /** @description The drive's lengths in lengthUnit (the pinion module in mm, as always). */
+            drive: components["schemas"]["DriveRecord"];
+            /** @description The same drive in mm. */
+            driveMm: components["schemas"]["DriveRecord"];
+            driveSummary: string;
+            motorStepsPerRev: number;
+            microsteps: number;
+            gearRatio: number;
+            stepsPerMm: number;
+            theoreticalStepsPerMm: number;
+            /** @description Value in use against the drive's theoretical value, %. */
+            stepsPerMmDifferencePercent: number;
+            /** @description Steps per inch (× 25.4), shown beside steps per mm for axes set up in inches. */
+            stepsPerInch: number;
+            theoreticalStepsPerInch: number;
+            travelPerRevMm: number;
+            /** @description Travel per revolution in lengthUnit. */
+            travelPerRev: number;
+            resolutionMm: number;
+            /** @description Fastest feed, lengthUnit per minute. */
+            maxFeedRate: number | null;
+            maxFeedRateMmPerMin: number | null;
+            /** @description Measured travel in lengthUnit. */
+            measuredTravel: number | null;
+            measuredTravelMm: number | null;
+            notes: string;
+            stepsHistory: components["schemas"]["StepsChange"][];
+            locked: boolean;
+            createdAt: string;
+            updatedAt: string;
+        };
+        TravelEnvelopeResponse: {
+            machineId: string;
+            /** @enum {string} */
+            status: "within-target" | "outside-target" | "not-started";
+            workArea: {
+                x: number;
+                y: number;
+            };
+            margin: components["schemas"]["TargetValue"];
+            marginMm: number;
+            axes: {
+                axisId: string;
+                axis: string;
+                /** @enum {string} */
+                letter: "X" | "Y";
+                measuredTravel: number | null;
+                workSize: number;
+                requiredTravel: number;
+                spare: number | null;
+                covers: boolean | null;
+            }[];
+            /** @description What is still missing before the check can be made, in words. */
+            missing: string[];
+            summary: string;
+        };
+        /**
+         * @description One tolerance of a target set, stored with its unit and where its default came from.
+         *     'um/mm' is a target that scales with rail spacing: µm of height difference per mm of spacing
+         *     (K in S = a × K). `reference` is read on the rail straightness target only.
+         */
+        TargetValue: {
+            value: number;
+            /** @enum {string} */
+            unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
+            source?: string;
+            /** @enum {string} */
+            reference?: "minimum-zone" | "least-squares";
+        };
+        SpeedCheckResponse: {
+            axisId: string;
+            applicable: boolean;
+            /** @enum {string} */
+            status: "within-target" | "outside-target" | "not-started" | "not-applicable";
+            /** @description Why the check cannot run (or does not apply), in words. */
+            reason: string | null;
+            missing: string[];
+            /**
+             * @description The axis's unit: feed rates below are in it per minute.
+             * @enum {string}
+             */
+            lengthUnit: "mm" | "um" | "in" | "thou";
+            /** @description The fastest feed the axis will be asked for, lengthUnit per minute. */
+            feedRate: number | null;
+            feedRateMmPerMin: number | null;
+            rpm: number | null;
+            criticalSpeed: number | null;
+            permissibleSpeed: number | null;
+            dnLimitSpeed: number | null;
+            dnLimit: number | null;
+            mountingFactor: number | null;
+            /** @enum {string|null} */
+            limitedBy: "critical-speed" | "dn-limit" | null;
+            /** @description The lower of the permissible speed and the d·n limit speed, rpm: headroom is measured from it. */
+            limitSpeed: number | null;
+            /** @description How far the speed stays below that limit, % (negative above it). */
+            headroomPercent: number | null;
+            /** @description Highest feed at the lower limit (no headroom), lengthUnit per minute. */
+            maxFeedRate: number | null;
+            /** @description The lower limit less the target set's headroom, rpm. */
+            allowedSpeed: number | null;
+            /** @description Highest feed within the headroom, lengthUnit per minute. */
+            safeFeedRate: number | null;
+            safeFeedRateMmPerMin: number | null;
+            headroom: components["schemas"]["TargetValue"];
+            withinLimits: boolean | null;
+            source: string;
+        };
+        ThermalReference: {
+            /** @description True when both temperatures are known and the correction is applied. */
+            applied: boolean;
+            machineTemperatureC: number | null;
+            scaleTemperatureC: number | null;
+            /** @enum {string} */
+            scaleMaterial: "steel" | "stainless-steel" | "aluminium" | "glass" | "invar";
+            scaleAlphaUmPerMK: number;
+            machineAlphaUmPerMK: number;
+            /** @description Add factor · L to a length L read on the scale to get the machine's length at 20 °C. */
+            factor: number;
+            source: string;
+        };
+        /** @description The targets a repeat-and-reverse run reads at: the program and the entry grid use the same list. */
+        TestTargets: {
+            /**
+             * @description The unit the axis is set up in (and `targets` and `overrun` are given in).
+             * @enum {string}
+             */
+            lengthUnit: "mm" | "um" | "in" | "thou";
+            targets: number[];
+            targetsMm: number[];
+            overrun: number;
+            overrunMm: number;
+            runs: number;
+            /** @description Why the list is empty (no measured travel), otherwise null. */
+            reason: string | null;
+            source: string;
+        };
+        /** @description One position of a backlash check as typed: where (lengthUnit) and the readings from each side (readingUnit). */
+        BacklashPositionRecord: {
+            position: number;
+            /** @description Readings after approaching while moving in the positive direction. */
+            up: number[];
+            /** @description Readings after approaching while moving in the negative direction. */
+            down: number[];
+        };
+        WaiverInfo: {
+            id: string;
+            reason: string;
+            by: string;
+            at: string;
+        };
+        ApprovalResponse: {
+            id: string;
+            approvedAt: string;
+            approvedBy: string;
+            recordHash: string;
+            statement: string;
+            recheckDueAt: string;
+            recheckIntervalDays: number;
+            /** @description The approval stands and its re-check date has passed (worked out when read, never stored). */
+            recheckDue: boolean;
+            /** @description Token of the public verification page printed on the certificate; null before signatures were kept. */
+            verificationToken: string | null;
+            /** @description Set once the owner reopened the machine: the approval no longer stands. */
+            reopened: {
+                at: string;
+                by: string | null;
+                reason: string | null;
+            } | null;
+        };
+        /** @description One place where the signed record and the live one differ. */
+        RecordDifference: {
+            /** @description JSON path in the signed record, e.g. records["rail-sweep:…"].row.readingsRaw[2]. */
+            path: string;
+            /** @description The record it is in, when it is in one of the records the approval stands on. */
+            record: {
+                kind: string;
+                id: string;
+            } | null;
+            /**
+             * @description changed; added (absent when signed); removed (absent now).
+             * @enum {string}
+             */
+            change: "changed" | "added" | "removed";
+            /** @description Value when signed (null when absent then). */
+            signed: unknown;
+            /** @description Value now (null when absent now). */
+            current: unknown;
+        };
+        DriftSide: {
+            /** @enum {string} */
+            status: "within-target" | "outside-target" | "not-started" | "waived";
+            result: {
+                value: number;
+                unit: string;
+                summary: string;
+            } | null;
+            recordId: string | null;
+            recordedAt: string | null;
+        };
+        HolePatternResponse: {
+            id: string;
+            machineId: string;
+            name: string;
+            /** @enum {string} */
+            reference: "left" | "right" | "top" | "bottom-left" | "bottom-right" | "top-left" | "top-right" | "bottom";
+            /** @enum {string} */
+            lengthUnit: "mm" | "um" | "in" | "thou";
+            /** @description Outline in mm; `width`/`height` as entered, in `unit`. */
+            widthMm: number;
+            heightMm: number;
+            width: number;
+            height: number;
+            /** @enum {string} */
+            entry: "list" | "grid" | "circle";
+            /** @description The entry as typed, in `unit`: one of these is set, matching `entry`. */
+            holesEntered: {
+                x: number;
+                y: number;
+                diameter: number;
+            }[] | null;
+            grid: {
+                columns: number;
+                rows: number;
+                originX: number;
+                originY: number;
+                pitchX: number;
+                pitchY: number;
+                diameter: number;
+            } | null;
+            circle: {
+                diameter: number;
+                centreX: number;
+                centreY: number;
+                circleDiameter: number;
+                count: number;
+                startAngleDeg: number;
+            } | null;
+            /** @description Every hole centre and diameter, mm, from the outline's lower-left corner. */
+            holes: components["schemas"]["StoredHole"][];
+            notes: string;
+            createdAt: string;
+            updatedAt: string;
+        };
+        StoredHole: {
+            xMm: number;
+            yMm: number;
+            diameterMm: number;
+        };
+        PatternPreviewResponse: {
+            widthMm: number;
+            heightMm: number;
+            holes: components["schemas"]["StoredHole"][];
+        };
+        /** @description A refused request: each message names the field it is about. */
+        ValidationErrorResponse: {
+            /** @enum {number} */
+            statusCode: 400;
+            /** @description One message per problem, each naming its field. */
+            message: string[];
+            /** @enum {string} */
+            error: "Bad Request";
+            /** @description The field a computation could not use, when there is one. */
+            field?: string;
+        };
+        ErrorResponse: {
+            statusCode: number;
+            /** @description Written for people: what was refused and why. */
+            message: string;
+            error?: string;
+        };
+        /** @description The request clashes with the state of the records. */
+        ConflictResponse: {
+            /** @enum {number} */
+            statusCode: 409;
+            /** @description Written for people: what was refused and why. */
+            message: string;
+            /** @enum {string} */
+            error?: "Conflict";
+            /** @description Approval requests only: the checks that stop the machine from being approved. */
+            blocking?: {
+                [key: string]: unknown;
+            }[];
+        };
     };
     responses: never;
     parameters: never;
@@ -2065,11 +3195,25 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": {
+                        user: components["schemas"]["UserResponse"];
+                    };
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
             };
         };
     };
@@ -2082,11 +3226,21 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done; no body. */
             204: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content?: never;
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
             };
         };
     };
@@ -2099,11 +3253,25 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": {
+                        user: components["schemas"]["UserResponse"];
+                    };
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
             };
         };
     };
@@ -2120,11 +3288,25 @@ export interface operations {
             };
         };
         responses: {
+            /** @description Done. */
             202: {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": {
+                        message: string;
+                    };
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
             };
         };
     };
@@ -2139,11 +3321,37 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": {
+                        email: string;
+                        name: string;
+                        workshop: string;
+                        expiresAt: string;
+                    };
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
             };
         };
     };
@@ -2160,11 +3368,26 @@ export interface operations {
             };
         };
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": {
+                        email: string;
+                        signedIn: boolean;
+                    };
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
             };
         };
     };
@@ -2177,12 +3400,31 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": Record<string, never>[];
+                    "application/json": components["schemas"]["OutboxMessage"][];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Only these roles may do this: admin. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
         };
@@ -2199,11 +3441,50 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/octet-stream": string;
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Only these roles may do this: admin. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
             };
         };
     };
@@ -2216,11 +3497,17 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": {
+                        status: string;
+                        database: string;
+                    };
+                };
             };
         };
     };
@@ -2233,12 +3520,31 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": Record<string, never>[];
+                    "application/json": components["schemas"]["PersonResponse"][];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Only these roles may do this: admin. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
         };
@@ -2256,11 +3562,54 @@ export interface operations {
             };
         };
         responses: {
+            /** @description Done. */
             201: {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": {
+                        invitationSent: boolean;
+                        invitationExpiresAt: string;
+                        person: components["schemas"]["PersonResponse"];
+                    };
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Only these roles may do this: admin. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ConflictResponse"];
+                };
             };
         };
     };
@@ -2275,11 +3624,62 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done. */
             201: {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": {
+                        invitationSent: boolean;
+                        invitationExpiresAt: string;
+                    };
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Only these roles may do this: admin. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ConflictResponse"];
+                };
             };
         };
     };
@@ -2294,11 +3694,62 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done. */
             201: {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": {
+                        resetSent: boolean;
+                        resetExpiresAt: string;
+                    };
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Only these roles may do this: admin. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ConflictResponse"];
+                };
             };
         };
     };
@@ -2317,12 +3768,58 @@ export interface operations {
             };
         };
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": Record<string, never>;
+                    "application/json": components["schemas"]["PersonResponse"];
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Only these roles may do this: admin. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ConflictResponse"];
                 };
             };
         };
@@ -2336,12 +3833,22 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": Record<string, never>[];
+                    "application/json": components["schemas"]["MachineListItem"][];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
         };
@@ -2359,12 +3866,49 @@ export interface operations {
             };
         };
         responses: {
+            /** @description Done. */
             201: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": Record<string, never>;
+                    "application/json": components["schemas"]["MachineResponse"];
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Only these roles may do this: admin, owner, technician, builder. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ConflictResponse"];
                 };
             };
         };
@@ -2380,12 +3924,40 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": Record<string, never>;
+                    "application/json": components["schemas"]["MachineResponse"];
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
         };
@@ -2405,12 +3977,58 @@ export interface operations {
             };
         };
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": Record<string, never>;
+                    "application/json": components["schemas"]["MachineResponse"];
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Only these roles may do this: admin, owner, technician, builder. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ConflictResponse"];
                 };
             };
         };
@@ -2433,12 +4051,40 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": Record<string, never>;
+                    "application/json": components["schemas"]["HistoryPage"];
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
         };
@@ -2452,12 +4098,22 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": Record<string, never>[];
+                    "application/json": components["schemas"]["TargetSetResponse"][];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
         };
@@ -2475,12 +4131,49 @@ export interface operations {
             };
         };
         responses: {
+            /** @description Done. */
             201: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": Record<string, never>;
+                    "application/json": components["schemas"]["TargetSetResponse"];
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Only these roles may do this: owner, admin. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ConflictResponse"];
                 };
             };
         };
@@ -2496,12 +4189,40 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": Record<string, never>;
+                    "application/json": components["schemas"]["TargetSetResponse"];
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
         };
@@ -2521,12 +4242,58 @@ export interface operations {
             };
         };
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": Record<string, never>;
+                    "application/json": components["schemas"]["TargetSetResponse"];
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Only these roles may do this: owner, admin. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ConflictResponse"];
                 };
             };
         };
@@ -2546,11 +4313,68 @@ export interface operations {
             };
         };
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": {
+                        warnings: components["schemas"]["ResultWarning"][];
+                        units: {
+                            [key: string]: string;
+                        };
+                        leastSquares: {
+                            residuals?: number[];
+                            slope: number;
+                            intercept: number;
+                            straightness: number;
+                        };
+                        minimumZone: {
+                            residuals?: number[];
+                            slope: number;
+                            intercept: number;
+                            straightness: number;
+                        };
+                        endPoint: {
+                            residuals?: number[];
+                            slope: number;
+                            intercept: number;
+                            straightness: number;
+                        };
+                        /** @enum {string} */
+                        lengthUnit: "mm" | "um" | "in" | "thou";
+                        /** @enum {string} */
+                        readingUnit: "mm" | "um" | "in" | "thou";
+                    };
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ConflictResponse"];
+                };
             };
         };
     };
@@ -2567,11 +4391,53 @@ export interface operations {
             };
         };
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": {
+                        warnings: components["schemas"]["ResultWarning"][];
+                        units: {
+                            [key: string]: string;
+                        };
+                        parallelism: number;
+                        meanOffset: number;
+                        differences: number[];
+                        /** @enum {string} */
+                        lengthUnit: "mm" | "um" | "in" | "thou";
+                        /** @enum {string} */
+                        readingUnit: "mm" | "um" | "in" | "thou";
+                    };
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ConflictResponse"];
+                };
             };
         };
     };
@@ -2588,11 +4454,58 @@ export interface operations {
             };
         };
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": {
+                        warnings: components["schemas"]["ResultWarning"][];
+                        units: {
+                            [key: string]: string;
+                        };
+                        outOfSquareDeg: number;
+                        outOfSquareArcsec: number;
+                        mmPerMetre: number;
+                        /** @enum {number} */
+                        longDiagonal: 1 | 2;
+                        diagonalDifference: number;
+                        correction: number;
+                        span: number;
+                        /** @enum {string} */
+                        lengthUnit: "mm" | "um" | "in" | "thou";
+                        /** @enum {string} */
+                        readingUnit: "mm" | "um" | "in" | "thou";
+                    };
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ConflictResponse"];
+                };
             };
         };
     };
@@ -2611,11 +4524,63 @@ export interface operations {
             };
         };
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": {
+                        warnings: components["schemas"]["ResultWarning"][];
+                        units: {
+                            [key: string]: string;
+                        };
+                        leastSquares: {
+                            residuals?: number[];
+                            a: number;
+                            b: number;
+                            c: number;
+                            flatness: number;
+                        };
+                        tilt: {
+                            xMmPerMetre: number;
+                            yMmPerMetre: number;
+                            mmPerMetre: number;
+                            directionDeg: number;
+                        };
+                        /** @enum {string} */
+                        lengthUnit: "mm" | "um" | "in" | "thou";
+                        /** @enum {string} */
+                        readingUnit: "mm" | "um" | "in" | "thou";
+                    };
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ConflictResponse"];
+                };
             };
         };
     };
@@ -2632,11 +4597,55 @@ export interface operations {
             };
         };
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": {
+                        warnings: components["schemas"]["ResultWarning"][];
+                        units: {
+                            [key: string]: string;
+                        };
+                        travelPerRev: number;
+                        travelPerMotorRev: number;
+                        stepsPerMm: number;
+                        stepsPerIn: number;
+                        resolution: number;
+                        /** @enum {string} */
+                        lengthUnit: "mm" | "um" | "in" | "thou";
+                        /** @enum {string} */
+                        readingUnit: "mm" | "um" | "in" | "thou";
+                    };
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ConflictResponse"];
+                };
             };
         };
     };
@@ -2653,11 +4662,62 @@ export interface operations {
             };
         };
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": {
+                        warnings: components["schemas"]["ResultWarning"][];
+                        units: {
+                            [key: string]: string;
+                        };
+                        scale: number;
+                        offset: number;
+                        correctedStepsPerMm: number;
+                        correctedStepsPerIn: number;
+                        errorPercent: number;
+                        residualMax: number;
+                        moves: {
+                            commanded: number;
+                            measured: number;
+                            error: number;
+                            residual: number;
+                        }[];
+                        /** @enum {string} */
+                        lengthUnit: "mm" | "um" | "in" | "thou";
+                        /** @enum {string} */
+                        readingUnit: "mm" | "um" | "in" | "thou";
+                    };
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ConflictResponse"];
+                };
             };
         };
     };
@@ -2674,11 +4734,76 @@ export interface operations {
             };
         };
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": {
+                        warnings: components["schemas"]["ResultWarning"][];
+                        units: {
+                            [key: string]: string;
+                        };
+                        targets: {
+                            target: number;
+                            meanUp: number;
+                            meanDown: number;
+                            mean: number;
+                            reversal: number;
+                            sUp: number;
+                            sDown: number;
+                            repeatabilityUp: number;
+                            repeatabilityDown: number;
+                            repeatability: number;
+                        }[];
+                        reversal: number;
+                        reversalMean: number;
+                        repeatabilityUp: number;
+                        repeatabilityDown: number;
+                        repeatability: number;
+                        systematicUp: number;
+                        systematicDown: number;
+                        systematic: number;
+                        meanRange: number;
+                        accuracyUp: number;
+                        accuracyDown: number;
+                        accuracy: number;
+                        runsUp: number;
+                        runsDown: number;
+                        /** @enum {string} */
+                        lengthUnit?: "mm" | "um" | "in" | "thou";
+                        /** @enum {string} */
+                        readingUnit?: "mm" | "um" | "in" | "thou";
+                    };
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ConflictResponse"];
+                };
             };
         };
     };
@@ -2695,11 +4820,61 @@ export interface operations {
             };
         };
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": {
+                        warnings: components["schemas"]["ResultWarning"][];
+                        units: {
+                            [key: string]: string;
+                        };
+                        rpm: number;
+                        criticalSpeed: number;
+                        permissibleSpeed: number;
+                        dnLimitSpeed: number;
+                        maxFeedRate: number;
+                        withinLimits: boolean;
+                        /** @enum {string} */
+                        limitedBy: "critical-speed" | "dn-limit";
+                        mountingFactor: number;
+                        dnLimit: number;
+                        source: string;
+                        /** @enum {string} */
+                        lengthUnit: "mm" | "um" | "in" | "thou";
+                        /** @enum {string} */
+                        readingUnit: "mm" | "um" | "in" | "thou";
+                    };
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ConflictResponse"];
+                };
             };
         };
     };
@@ -2716,11 +4891,62 @@ export interface operations {
             };
         };
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": {
+                        warnings: components["schemas"]["ResultWarning"][];
+                        units: {
+                            [key: string]: string;
+                        };
+                        holes: {
+                            hole: number;
+                            position: number;
+                        }[];
+                        steps: {
+                            step: number;
+                            hole: number;
+                            position: number;
+                            target: number | null;
+                            reading: number | null;
+                        }[];
+                        nextHole: number | null;
+                        /** @enum {string} */
+                        lengthUnit: "mm" | "um" | "in" | "thou";
+                        /** @enum {string} */
+                        readingUnit: "mm" | "um" | "in" | "thou";
+                    };
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ConflictResponse"];
+                };
             };
         };
     };
@@ -2737,11 +4963,60 @@ export interface operations {
             };
         };
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": {
+                        warnings: components["schemas"]["ResultWarning"][];
+                        units: {
+                            [key: string]: string;
+                        };
+                        axes: {
+                            axis: string;
+                            measuredTravel: number;
+                            workSize: number;
+                            requiredTravel: number;
+                            spare: number;
+                            covers: boolean;
+                        }[];
+                        marginPerSide: number;
+                        coversAll: boolean;
+                        /** @enum {string} */
+                        lengthUnit: "mm" | "um" | "in" | "thou";
+                        /** @enum {string} */
+                        readingUnit: "mm" | "um" | "in" | "thou";
+                    };
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ConflictResponse"];
+                };
             };
         };
     };
@@ -2758,11 +5033,84 @@ export interface operations {
             };
         };
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": {
+                        warnings: components["schemas"]["ResultWarning"][];
+                        units: {
+                            [key: string]: string;
+                        };
+                        x: {
+                            scale: number;
+                            error: number;
+                            errorPercent: number;
+                            correctedStepsPerMm: number | null;
+                            correctedStepsPerIn: number | null;
+                        };
+                        y: {
+                            scale: number;
+                            error: number;
+                            errorPercent: number;
+                            correctedStepsPerMm: number | null;
+                            correctedStepsPerIn: number | null;
+                        };
+                        squareness: {
+                            warnings: components["schemas"]["ResultWarning"][];
+                            outOfSquareDeg: number;
+                            outOfSquareArcsec: number;
+                            mmPerMetre: number;
+                            /** @enum {number} */
+                            longDiagonal: 1 | 2;
+                            diagonalDifference: number;
+                            correction: number;
+                            span: number;
+                        } | null;
+                        ovality: {
+                            ovality: number;
+                            fromScale: number;
+                            unexplained: number;
+                            /** @enum {string} */
+                            pointsTo: "round" | "scale" | "x-backlash" | "y-backlash";
+                            backlashEstimate: number | null;
+                        } | null;
+                        notes: string[];
+                        /** @enum {string} */
+                        lengthUnit: "mm" | "um" | "in" | "thou";
+                        /** @enum {string} */
+                        readingUnit: "mm" | "um" | "in" | "thou";
+                    };
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ConflictResponse"];
+                };
             };
         };
     };
@@ -2775,11 +5123,34 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": {
+                        bolts: {
+                            boltSize: string;
+                            torqueNm: number;
+                        }[];
+                        source: string;
+                        typicalByProfile: {
+                            profileSize: number;
+                            boltSize: string;
+                        }[];
+                        typicalSource: string;
+                    };
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
             };
         };
     };
@@ -2794,12 +5165,40 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": Record<string, never>[];
+                    "application/json": components["schemas"]["RailListItem"][];
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
         };
@@ -2819,12 +5218,58 @@ export interface operations {
             };
         };
         responses: {
+            /** @description Done. */
             201: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": Record<string, never>;
+                    "application/json": components["schemas"]["RailResponse"];
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Only these roles may do this: admin, owner, technician, builder. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ConflictResponse"];
                 };
             };
         };
@@ -2840,12 +5285,40 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": Record<string, never>;
+                    "application/json": components["schemas"]["RailResponse"];
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
         };
@@ -2861,11 +5334,57 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done; no body. */
             204: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content?: never;
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Only these roles may do this: admin, owner, technician, builder. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ConflictResponse"];
+                };
             };
         };
     };
@@ -2884,12 +5403,58 @@ export interface operations {
             };
         };
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": Record<string, never>;
+                    "application/json": components["schemas"]["RailResponse"];
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Only these roles may do this: admin, owner, technician, builder. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ConflictResponse"];
                 };
             };
         };
@@ -2905,12 +5470,229 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": Record<string, never>;
+                    "application/json": {
+                        railId: string;
+                        partnerRailId: unknown;
+                        /** @enum {string} */
+                        status: "not-comparable";
+                        reason: string;
+                        targets: {
+                            parallelism: {
+                                value: number;
+                                /** @enum {string} */
+                                unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
+                            };
+                            heightDifference: {
+                                source: string;
+                                value: number;
+                                /** @enum {string} */
+                                unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
+                            };
+                        };
+                        warnings: unknown[];
+                    } | {
+                        /** @enum {string} */
+                        status: "not-comparable";
+                        reason: string;
+                        railId: string;
+                        partnerRailId: string;
+                        targets: {
+                            parallelism: {
+                                value: number;
+                                /** @enum {string} */
+                                unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
+                            };
+                            heightDifference: {
+                                source: string;
+                                value: number;
+                                /** @enum {string} */
+                                unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
+                            };
+                        };
+                        sweeps: {
+                            a: string | null;
+                            b: string | null;
+                        };
+                        height: {
+                            measured: boolean;
+                            reason: string | null;
+                            datum: string | null;
+                            worst: number | null;
+                            worstSigned: number | null;
+                            at: number | null;
+                            differences: number[] | null;
+                            spacing: number | null;
+                            kUmPerMm: number | null;
+                            permissible: number | null;
+                            targetText: string | null;
+                            within: boolean | null;
+                            unit: string;
+                        };
+                        warnings: components["schemas"]["ResultWarning"][];
+                    } | {
+                        /** @enum {string} */
+                        status: "not-comparable";
+                        reason: string;
+                        unreadable: string;
+                        railId: string;
+                        partnerRailId: string;
+                        targets: {
+                            parallelism: {
+                                value: number;
+                                /** @enum {string} */
+                                unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
+                            };
+                            heightDifference: {
+                                source: string;
+                                value: number;
+                                /** @enum {string} */
+                                unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
+                            };
+                        };
+                        sweeps: {
+                            a: string | null;
+                            b: string | null;
+                        };
+                        height: {
+                            measured: boolean;
+                            reason: string | null;
+                            datum: string | null;
+                            worst: number | null;
+                            worstSigned: number | null;
+                            at: number | null;
+                            differences: number[] | null;
+                            spacing: number | null;
+                            kUmPerMm: number | null;
+                            permissible: number | null;
+                            targetText: string | null;
+                            within: boolean | null;
+                            unit: string;
+                        };
+                        warnings: components["schemas"]["ResultWarning"][];
+                    } | {
+                        heightDifferenceWithin: boolean | null;
+                        datum: string;
+                        /** @enum {string} */
+                        face: "side" | "top";
+                        parallelism: number;
+                        meanOffset: number;
+                        positions: number[];
+                        differences: number[];
+                        parallelismWithin: boolean | null;
+                        /** @enum {string} */
+                        status: "within-target" | "outside-target";
+                        railId: string;
+                        partnerRailId: string;
+                        targets: {
+                            parallelism: {
+                                value: number;
+                                /** @enum {string} */
+                                unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
+                            };
+                            heightDifference: {
+                                source: string;
+                                value: number;
+                                /** @enum {string} */
+                                unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
+                            };
+                        };
+                        sweeps: {
+                            a: string | null;
+                            b: string | null;
+                        };
+                        height: {
+                            measured: boolean;
+                            reason: string | null;
+                            datum: string | null;
+                            worst: number | null;
+                            worstSigned: number | null;
+                            at: number | null;
+                            differences: number[] | null;
+                            spacing: number | null;
+                            kUmPerMm: number | null;
+                            permissible: number | null;
+                            targetText: string | null;
+                            within: boolean | null;
+                            unit: string;
+                        };
+                        warnings: components["schemas"]["ResultWarning"][];
+                        reason?: unknown;
+                    } | {
+                        heightDifferenceWithin: boolean | null;
+                        reason: string;
+                        parallelism: unknown;
+                        parallelismWithin: unknown;
+                        /** @enum {string} */
+                        status: "within-target" | "outside-target";
+                        railId: string;
+                        partnerRailId: string;
+                        targets: {
+                            parallelism: {
+                                value: number;
+                                /** @enum {string} */
+                                unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
+                            };
+                            heightDifference: {
+                                source: string;
+                                value: number;
+                                /** @enum {string} */
+                                unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
+                            };
+                        };
+                        sweeps: {
+                            a: string | null;
+                            b: string | null;
+                        };
+                        height: {
+                            measured: boolean;
+                            reason: string | null;
+                            datum: string | null;
+                            worst: number | null;
+                            worstSigned: number | null;
+                            at: number | null;
+                            differences: number[] | null;
+                            spacing: number | null;
+                            kUmPerMm: number | null;
+                            permissible: number | null;
+                            targetText: string | null;
+                            within: boolean | null;
+                            unit: string;
+                        };
+                        warnings: components["schemas"]["ResultWarning"][];
+                    };
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
         };
@@ -2930,12 +5712,40 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": Record<string, never>[];
+                    "application/json": components["schemas"]["SweepListItem"][];
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
         };
@@ -2955,12 +5765,58 @@ export interface operations {
             };
         };
         responses: {
+            /** @description Done. */
             201: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": Record<string, never>;
+                    "application/json": components["schemas"]["SweepResponse"];
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Only these roles may do this: admin, owner, technician, builder. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ConflictResponse"];
                 };
             };
         };
@@ -2976,12 +5832,40 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": Record<string, never>;
+                    "application/json": components["schemas"]["SweepResponse"];
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
         };
@@ -2997,11 +5881,57 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done; no body. */
             204: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content?: never;
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Only these roles may do this: admin, owner, technician, builder. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ConflictResponse"];
+                };
             };
         };
     };
@@ -3020,12 +5950,58 @@ export interface operations {
             };
         };
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": Record<string, never>;
+                    "application/json": components["schemas"]["SweepResponse"];
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Only these roles may do this: admin, owner, technician, builder. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ConflictResponse"];
                 };
             };
         };
@@ -3041,12 +6017,40 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": Record<string, never>[];
+                    "application/json": components["schemas"]["BoltDownResponse"][];
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
         };
@@ -3066,12 +6070,58 @@ export interface operations {
             };
         };
         responses: {
+            /** @description Done. */
             201: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": Record<string, never>;
+                    "application/json": components["schemas"]["BoltDownResponse"];
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Only these roles may do this: admin, owner, technician, builder. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ConflictResponse"];
                 };
             };
         };
@@ -3087,12 +6137,40 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": Record<string, never>;
+                    "application/json": components["schemas"]["BoltDownResponse"];
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
         };
@@ -3113,12 +6191,58 @@ export interface operations {
             };
         };
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": Record<string, never>;
+                    "application/json": components["schemas"]["HoleWriteResponse"];
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Only these roles may do this: admin, owner, technician, builder. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ConflictResponse"];
                 };
             };
         };
@@ -3138,12 +6262,58 @@ export interface operations {
             };
         };
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": Record<string, never>;
+                    "application/json": components["schemas"]["BoltDownResponse"];
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Only these roles may do this: admin, owner, technician, builder. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ConflictResponse"];
                 };
             };
         };
@@ -3163,11 +6333,62 @@ export interface operations {
             };
         };
         responses: {
+            /** @description Done. */
             201: {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": {
+                        boltDown: components["schemas"]["BoltDownResponse"];
+                        sweep: components["schemas"]["SweepResponse"];
+                    };
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Only these roles may do this: admin, owner, technician, builder. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ConflictResponse"];
+                };
             };
         };
     };
@@ -3182,12 +6403,114 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": Record<string, never>[];
+                    "application/json": ({
+                        unreadable: string;
+                        resolution: number | null;
+                        input: {
+                            sideX: number | null;
+                            sideY: number | null;
+                            diagonal1: number | null;
+                            diagonal2: number | null;
+                            gantrySpan: number | null;
+                        };
+                        inputMm: {
+                            sideX: number | null;
+                            sideY: number | null;
+                            diagonal1: number | null;
+                            diagonal2: number | null;
+                            gantrySpan: number | null;
+                        };
+                        result: components["schemas"]["DiagonalCheckResult"] | null;
+                        id: string;
+                        machineId: string;
+                        /**
+                         * @description Unit the record's lengths were entered in and are given back in.
+                         * @enum {string}
+                         */
+                        lengthUnit: "mm" | "um" | "in" | "thou";
+                        note: string;
+                        recordedBy: {
+                            id: string | null;
+                            name: string;
+                        };
+                        recordedAt: string;
+                        /** @enum {string} */
+                        status: "within-target" | "outside-target";
+                        target: components["schemas"]["JudgedTarget"];
+                        locked: boolean;
+                        /** @description What a person should know about the result (empty when none). */
+                        warnings: components["schemas"]["ResultWarning"][];
+                    } | {
+                        unreadable?: unknown;
+                        resolution: number | null;
+                        input: {
+                            sideX: number | null;
+                            sideY: number | null;
+                            diagonal1: number | null;
+                            diagonal2: number | null;
+                            gantrySpan: number | null;
+                        };
+                        inputMm: {
+                            sideX: number | null;
+                            sideY: number | null;
+                            diagonal1: number | null;
+                            diagonal2: number | null;
+                            gantrySpan: number | null;
+                        };
+                        result: components["schemas"]["DiagonalCheckResult"] | null;
+                        id: string;
+                        machineId: string;
+                        /**
+                         * @description Unit the record's lengths were entered in and are given back in.
+                         * @enum {string}
+                         */
+                        lengthUnit: "mm" | "um" | "in" | "thou";
+                        note: string;
+                        recordedBy: {
+                            id: string | null;
+                            name: string;
+                        };
+                        recordedAt: string;
+                        /** @enum {string} */
+                        status: "within-target" | "outside-target";
+                        target: components["schemas"]["JudgedTarget"];
+                        locked: boolean;
+                        /** @description What a person should know about the result (empty when none). */
+                        warnings: components["schemas"]["ResultWarning"][];
+                    })[];
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
         };
@@ -3207,12 +6530,132 @@ export interface operations {
             };
         };
         responses: {
+            /** @description Done. */
             201: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": Record<string, never>;
+                    "application/json": {
+                        unreadable: string;
+                        resolution: number | null;
+                        input: {
+                            sideX: number | null;
+                            sideY: number | null;
+                            diagonal1: number | null;
+                            diagonal2: number | null;
+                            gantrySpan: number | null;
+                        };
+                        inputMm: {
+                            sideX: number | null;
+                            sideY: number | null;
+                            diagonal1: number | null;
+                            diagonal2: number | null;
+                            gantrySpan: number | null;
+                        };
+                        result: components["schemas"]["DiagonalCheckResult"] | null;
+                        id: string;
+                        machineId: string;
+                        /**
+                         * @description Unit the record's lengths were entered in and are given back in.
+                         * @enum {string}
+                         */
+                        lengthUnit: "mm" | "um" | "in" | "thou";
+                        note: string;
+                        recordedBy: {
+                            id: string | null;
+                            name: string;
+                        };
+                        recordedAt: string;
+                        /** @enum {string} */
+                        status: "within-target" | "outside-target";
+                        target: components["schemas"]["JudgedTarget"];
+                        locked: boolean;
+                        /** @description What a person should know about the result (empty when none). */
+                        warnings: components["schemas"]["ResultWarning"][];
+                    } | {
+                        unreadable?: unknown;
+                        resolution: number | null;
+                        input: {
+                            sideX: number | null;
+                            sideY: number | null;
+                            diagonal1: number | null;
+                            diagonal2: number | null;
+                            gantrySpan: number | null;
+                        };
+                        inputMm: {
+                            sideX: number | null;
+                            sideY: number | null;
+                            diagonal1: number | null;
+                            diagonal2: number | null;
+                            gantrySpan: number | null;
+                        };
+                        result: components["schemas"]["DiagonalCheckResult"] | null;
+                        id: string;
+                        machineId: string;
+                        /**
+                         * @description Unit the record's lengths were entered in and are given back in.
+                         * @enum {string}
+                         */
+                        lengthUnit: "mm" | "um" | "in" | "thou";
+                        note: string;
+                        recordedBy: {
+                            id: string | null;
+                            name: string;
+                        };
+                        recordedAt: string;
+                        /** @enum {string} */
+                        status: "within-target" | "outside-target";
+                        target: components["schemas"]["JudgedTarget"];
+                        locked: boolean;
+                        /** @description What a person should know about the result (empty when none). */
+                        warnings: components["schemas"]["ResultWarning"][];
+                    };
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Only these roles may do this: admin, owner, technician, builder. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ConflictResponse"];
                 };
             };
         };
@@ -3228,12 +6671,110 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": Record<string, never>[];
+                    "application/json": ({
+                        unreadable: string;
+                        /**
+                         * @description Unit the heights (and the gauge's resolution) were read in and are given back in.
+                         * @enum {string}
+                         */
+                        readingUnit: "mm" | "um" | "in" | "thou";
+                        resolution: number | null;
+                        rows: number | null;
+                        columns: number | null;
+                        points: {
+                            x: number | null;
+                            y: number | null;
+                            z: number | null;
+                        }[];
+                        result: components["schemas"]["BedGridResult"] | null;
+                        id: string;
+                        machineId: string;
+                        /**
+                         * @description Unit the record's lengths were entered in and are given back in.
+                         * @enum {string}
+                         */
+                        lengthUnit: "mm" | "um" | "in" | "thou";
+                        note: string;
+                        recordedBy: {
+                            id: string | null;
+                            name: string;
+                        };
+                        recordedAt: string;
+                        /** @enum {string} */
+                        status: "within-target" | "outside-target";
+                        target: components["schemas"]["JudgedTarget"];
+                        locked: boolean;
+                        /** @description What a person should know about the result (empty when none). */
+                        warnings: components["schemas"]["ResultWarning"][];
+                    } | {
+                        unreadable?: unknown;
+                        /**
+                         * @description Unit the heights (and the gauge's resolution) were read in and are given back in.
+                         * @enum {string}
+                         */
+                        readingUnit: "mm" | "um" | "in" | "thou";
+                        resolution: number | null;
+                        rows: number | null;
+                        columns: number | null;
+                        points: {
+                            x: number | null;
+                            y: number | null;
+                            z: number | null;
+                        }[];
+                        result: components["schemas"]["BedGridResult"] | null;
+                        id: string;
+                        machineId: string;
+                        /**
+                         * @description Unit the record's lengths were entered in and are given back in.
+                         * @enum {string}
+                         */
+                        lengthUnit: "mm" | "um" | "in" | "thou";
+                        note: string;
+                        recordedBy: {
+                            id: string | null;
+                            name: string;
+                        };
+                        recordedAt: string;
+                        /** @enum {string} */
+                        status: "within-target" | "outside-target";
+                        target: components["schemas"]["JudgedTarget"];
+                        locked: boolean;
+                        /** @description What a person should know about the result (empty when none). */
+                        warnings: components["schemas"]["ResultWarning"][];
+                    })[];
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
         };
@@ -3253,12 +6794,128 @@ export interface operations {
             };
         };
         responses: {
+            /** @description Done. */
             201: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": Record<string, never>;
+                    "application/json": {
+                        unreadable: string;
+                        /**
+                         * @description Unit the heights (and the gauge's resolution) were read in and are given back in.
+                         * @enum {string}
+                         */
+                        readingUnit: "mm" | "um" | "in" | "thou";
+                        resolution: number | null;
+                        rows: number | null;
+                        columns: number | null;
+                        points: {
+                            x: number | null;
+                            y: number | null;
+                            z: number | null;
+                        }[];
+                        result: components["schemas"]["BedGridResult"] | null;
+                        id: string;
+                        machineId: string;
+                        /**
+                         * @description Unit the record's lengths were entered in and are given back in.
+                         * @enum {string}
+                         */
+                        lengthUnit: "mm" | "um" | "in" | "thou";
+                        note: string;
+                        recordedBy: {
+                            id: string | null;
+                            name: string;
+                        };
+                        recordedAt: string;
+                        /** @enum {string} */
+                        status: "within-target" | "outside-target";
+                        target: components["schemas"]["JudgedTarget"];
+                        locked: boolean;
+                        /** @description What a person should know about the result (empty when none). */
+                        warnings: components["schemas"]["ResultWarning"][];
+                    } | {
+                        unreadable?: unknown;
+                        /**
+                         * @description Unit the heights (and the gauge's resolution) were read in and are given back in.
+                         * @enum {string}
+                         */
+                        readingUnit: "mm" | "um" | "in" | "thou";
+                        resolution: number | null;
+                        rows: number | null;
+                        columns: number | null;
+                        points: {
+                            x: number | null;
+                            y: number | null;
+                            z: number | null;
+                        }[];
+                        result: components["schemas"]["BedGridResult"] | null;
+                        id: string;
+                        machineId: string;
+                        /**
+                         * @description Unit the record's lengths were entered in and are given back in.
+                         * @enum {string}
+                         */
+                        lengthUnit: "mm" | "um" | "in" | "thou";
+                        note: string;
+                        recordedBy: {
+                            id: string | null;
+                            name: string;
+                        };
+                        recordedAt: string;
+                        /** @enum {string} */
+                        status: "within-target" | "outside-target";
+                        target: components["schemas"]["JudgedTarget"];
+                        locked: boolean;
+                        /** @description What a person should know about the result (empty when none). */
+                        warnings: components["schemas"]["ResultWarning"][];
+                    };
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Only these roles may do this: admin, owner, technician, builder. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ConflictResponse"];
                 };
             };
         };
@@ -3274,12 +6931,138 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": Record<string, never>[];
+                    "application/json": ({
+                        unreadable: string;
+                        targets: {
+                            part: components["schemas"]["JudgedTarget"];
+                            squareness: components["schemas"]["JudgedTarget"];
+                        };
+                        plateThickness: number | null;
+                        plateThicknessMm: number | null;
+                        resolution: number | null;
+                        nominal: {
+                            x: number | null;
+                            y: number | null;
+                            circle: number | null;
+                        };
+                        measured: {
+                            x: number | null;
+                            y: number | null;
+                            diagonal1: number | null;
+                            diagonal2: number | null;
+                            circleX: number | null;
+                            circleY: number | null;
+                            kerf: number | null;
+                        };
+                        /** @enum {string|null} */
+                        circleKind: "hole" | "disc" | null;
+                        stepsPerMm: {
+                            x: number | null;
+                            y: number | null;
+                        } | null;
+                        result: components["schemas"]["TestCutResult"] | null;
+                        id: string;
+                        machineId: string;
+                        /**
+                         * @description Unit the record's lengths were entered in and are given back in.
+                         * @enum {string}
+                         */
+                        lengthUnit: "mm" | "um" | "in" | "thou";
+                        note: string;
+                        recordedBy: {
+                            id: string | null;
+                            name: string;
+                        };
+                        recordedAt: string;
+                        /** @enum {string} */
+                        status: "within-target" | "outside-target";
+                        target: components["schemas"]["JudgedTarget"];
+                        locked: boolean;
+                        /** @description What a person should know about the result (empty when none). */
+                        warnings: components["schemas"]["ResultWarning"][];
+                    } | {
+                        unreadable?: unknown;
+                        targets: {
+                            part: components["schemas"]["JudgedTarget"];
+                            squareness: components["schemas"]["JudgedTarget"];
+                        };
+                        plateThickness: number | null;
+                        plateThicknessMm: number | null;
+                        resolution: number | null;
+                        nominal: {
+                            x: number | null;
+                            y: number | null;
+                            circle: number | null;
+                        };
+                        measured: {
+                            x: number | null;
+                            y: number | null;
+                            diagonal1: number | null;
+                            diagonal2: number | null;
+                            circleX: number | null;
+                            circleY: number | null;
+                            kerf: number | null;
+                        };
+                        /** @enum {string|null} */
+                        circleKind: "hole" | "disc" | null;
+                        stepsPerMm: {
+                            x: number | null;
+                            y: number | null;
+                        } | null;
+                        result: components["schemas"]["TestCutResult"] | null;
+                        id: string;
+                        machineId: string;
+                        /**
+                         * @description Unit the record's lengths were entered in and are given back in.
+                         * @enum {string}
+                         */
+                        lengthUnit: "mm" | "um" | "in" | "thou";
+                        note: string;
+                        recordedBy: {
+                            id: string | null;
+                            name: string;
+                        };
+                        recordedAt: string;
+                        /** @enum {string} */
+                        status: "within-target" | "outside-target";
+                        target: components["schemas"]["JudgedTarget"];
+                        locked: boolean;
+                        /** @description What a person should know about the result (empty when none). */
+                        warnings: components["schemas"]["ResultWarning"][];
+                    })[];
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
         };
@@ -3299,12 +7082,156 @@ export interface operations {
             };
         };
         responses: {
+            /** @description Done. */
             201: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": Record<string, never>;
+                    "application/json": {
+                        unreadable: string;
+                        targets: {
+                            part: components["schemas"]["JudgedTarget"];
+                            squareness: components["schemas"]["JudgedTarget"];
+                        };
+                        plateThickness: number | null;
+                        plateThicknessMm: number | null;
+                        resolution: number | null;
+                        nominal: {
+                            x: number | null;
+                            y: number | null;
+                            circle: number | null;
+                        };
+                        measured: {
+                            x: number | null;
+                            y: number | null;
+                            diagonal1: number | null;
+                            diagonal2: number | null;
+                            circleX: number | null;
+                            circleY: number | null;
+                            kerf: number | null;
+                        };
+                        /** @enum {string|null} */
+                        circleKind: "hole" | "disc" | null;
+                        stepsPerMm: {
+                            x: number | null;
+                            y: number | null;
+                        } | null;
+                        result: components["schemas"]["TestCutResult"] | null;
+                        id: string;
+                        machineId: string;
+                        /**
+                         * @description Unit the record's lengths were entered in and are given back in.
+                         * @enum {string}
+                         */
+                        lengthUnit: "mm" | "um" | "in" | "thou";
+                        note: string;
+                        recordedBy: {
+                            id: string | null;
+                            name: string;
+                        };
+                        recordedAt: string;
+                        /** @enum {string} */
+                        status: "within-target" | "outside-target";
+                        target: components["schemas"]["JudgedTarget"];
+                        locked: boolean;
+                        /** @description What a person should know about the result (empty when none). */
+                        warnings: components["schemas"]["ResultWarning"][];
+                    } | {
+                        unreadable?: unknown;
+                        targets: {
+                            part: components["schemas"]["JudgedTarget"];
+                            squareness: components["schemas"]["JudgedTarget"];
+                        };
+                        plateThickness: number | null;
+                        plateThicknessMm: number | null;
+                        resolution: number | null;
+                        nominal: {
+                            x: number | null;
+                            y: number | null;
+                            circle: number | null;
+                        };
+                        measured: {
+                            x: number | null;
+                            y: number | null;
+                            diagonal1: number | null;
+                            diagonal2: number | null;
+                            circleX: number | null;
+                            circleY: number | null;
+                            kerf: number | null;
+                        };
+                        /** @enum {string|null} */
+                        circleKind: "hole" | "disc" | null;
+                        stepsPerMm: {
+                            x: number | null;
+                            y: number | null;
+                        } | null;
+                        result: components["schemas"]["TestCutResult"] | null;
+                        id: string;
+                        machineId: string;
+                        /**
+                         * @description Unit the record's lengths were entered in and are given back in.
+                         * @enum {string}
+                         */
+                        lengthUnit: "mm" | "um" | "in" | "thou";
+                        note: string;
+                        recordedBy: {
+                            id: string | null;
+                            name: string;
+                        };
+                        recordedAt: string;
+                        /** @enum {string} */
+                        status: "within-target" | "outside-target";
+                        target: components["schemas"]["JudgedTarget"];
+                        locked: boolean;
+                        /** @description What a person should know about the result (empty when none). */
+                        warnings: components["schemas"]["ResultWarning"][];
+                    };
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Only these roles may do this: admin, owner, technician. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ConflictResponse"];
                 };
             };
         };
@@ -3321,11 +7248,57 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done; no body. */
             204: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content?: never;
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Only these roles may do this: admin, owner, technician, builder. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ConflictResponse"];
+                };
             };
         };
     };
@@ -3341,11 +7314,57 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done; no body. */
             204: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content?: never;
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Only these roles may do this: admin, owner, technician, builder. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ConflictResponse"];
+                };
             };
         };
     };
@@ -3361,11 +7380,57 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done; no body. */
             204: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content?: never;
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Only these roles may do this: admin, owner, technician. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ConflictResponse"];
+                };
             };
         };
     };
@@ -3380,11 +7445,72 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": {
+                        id: string | null;
+                        machineId: string;
+                        startedAt: string | null;
+                        /** @enum {string} */
+                        status: "within-target" | "outside-target" | "not-started";
+                        counts: components["schemas"]["WalkCounts"];
+                        /** @description A "no" anywhere keeps the machine from being approved. */
+                        blocking: boolean;
+                        locked: boolean;
+                        sections: {
+                            /** @enum {string} */
+                            id: "stopping" | "electrical" | "cutting" | "people";
+                            label: string;
+                            items: {
+                                id: string;
+                                text: string;
+                                builtIn: boolean;
+                                answer: {
+                                    id: string;
+                                    /** @enum {string} */
+                                    answer: "yes" | "no" | "na";
+                                    note: string;
+                                    answeredBy: {
+                                        id: string | null;
+                                        name: string;
+                                    };
+                                    answeredAt: string;
+                                } | null;
+                            }[];
+                        }[];
+                    };
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
             };
         };
     };
@@ -3404,11 +7530,90 @@ export interface operations {
             };
         };
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": {
+                        id: string | null;
+                        machineId: string;
+                        startedAt: string | null;
+                        /** @enum {string} */
+                        status: "within-target" | "outside-target" | "not-started";
+                        counts: components["schemas"]["WalkCounts"];
+                        /** @description A "no" anywhere keeps the machine from being approved. */
+                        blocking: boolean;
+                        locked: boolean;
+                        sections: {
+                            /** @enum {string} */
+                            id: "stopping" | "electrical" | "cutting" | "people";
+                            label: string;
+                            items: {
+                                id: string;
+                                text: string;
+                                builtIn: boolean;
+                                answer: {
+                                    id: string;
+                                    /** @enum {string} */
+                                    answer: "yes" | "no" | "na";
+                                    note: string;
+                                    answeredBy: {
+                                        id: string | null;
+                                        name: string;
+                                    };
+                                    answeredAt: string;
+                                } | null;
+                            }[];
+                        }[];
+                    };
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Only these roles may do this: admin, owner, technician. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ConflictResponse"];
+                };
             };
         };
     };
@@ -3423,11 +7628,90 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done. */
             201: {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": {
+                        id: string | null;
+                        machineId: string;
+                        startedAt: string | null;
+                        /** @enum {string} */
+                        status: "within-target" | "outside-target" | "not-started";
+                        counts: components["schemas"]["WalkCounts"];
+                        /** @description A "no" anywhere keeps the machine from being approved. */
+                        blocking: boolean;
+                        locked: boolean;
+                        sections: {
+                            /** @enum {string} */
+                            id: "stopping" | "electrical" | "cutting" | "people";
+                            label: string;
+                            items: {
+                                id: string;
+                                text: string;
+                                builtIn: boolean;
+                                answer: {
+                                    id: string;
+                                    /** @enum {string} */
+                                    answer: "yes" | "no" | "na";
+                                    note: string;
+                                    answeredBy: {
+                                        id: string | null;
+                                        name: string;
+                                    };
+                                    answeredAt: string;
+                                } | null;
+                            }[];
+                        }[];
+                    };
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Only these roles may do this: admin, owner, technician. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ConflictResponse"];
+                };
             };
         };
     };
@@ -3440,11 +7724,44 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": {
+                        builtIn: {
+                            builtIn: boolean;
+                            id: string;
+                            /** @enum {string} */
+                            section: "stopping" | "electrical" | "cutting" | "people";
+                            text: string;
+                        }[];
+                        workshop: {
+                            id: string;
+                            /** @enum {string} */
+                            section: "stopping" | "electrical" | "cutting" | "people";
+                            text: string;
+                            builtIn: boolean;
+                            createdBy: string;
+                            createdAt: string;
+                        }[];
+                        sections: {
+                            id: string;
+                            label: string;
+                        }[];
+                    };
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
             };
         };
     };
@@ -3461,11 +7778,58 @@ export interface operations {
             };
         };
         responses: {
+            /** @description Done. */
             201: {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": {
+                        id: string;
+                        /** @enum {string} */
+                        section: "stopping" | "electrical" | "cutting" | "people";
+                        text: string;
+                        builtIn: boolean;
+                        createdBy: string;
+                        createdAt: string;
+                    };
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Only these roles may do this: owner, admin. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ConflictResponse"];
+                };
             };
         };
     };
@@ -3482,12 +7846,31 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": Record<string, never>[];
+                    "application/json": components["schemas"]["EvidenceResponse"][];
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
         };
@@ -3501,12 +7884,49 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done. */
             201: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": Record<string, never>;
+                    "application/json": components["schemas"]["EvidenceResponse"];
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Only these roles may do this: admin, owner, technician, builder. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ConflictResponse"];
                 };
             };
         };
@@ -3520,11 +7940,32 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": {
+                        maxBytes: number;
+                        accepted: {
+                            contentType: string;
+                            label: string;
+                            /** @enum {string} */
+                            kind: "photo" | "file";
+                            extensions: string[];
+                        }[];
+                    };
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
             };
         };
     };
@@ -3539,12 +7980,40 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": Record<string, never>;
+                    "application/json": components["schemas"]["EvidenceResponse"];
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
         };
@@ -3560,11 +8029,57 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done; no body. */
             204: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content?: never;
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Only these roles may do this: admin, owner, technician, builder. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ConflictResponse"];
+                };
             };
         };
     };
@@ -3579,11 +8094,45 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "image/jpeg": string;
+                    "image/png": string;
+                    "image/webp": string;
+                    "application/pdf": string;
+                    "text/csv": string;
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
             };
         };
     };
@@ -3598,11 +8147,41 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "image/webp": string;
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
             };
         };
     };
@@ -3617,12 +8196,86 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": Record<string, never>[];
+                    "application/json": {
+                        id: string;
+                        machineId: string;
+                        name: string;
+                        /** @description G-code letter the axis moves under (Y1 and Y2 are both Y), or null. */
+                        letter: string | null;
+                        /**
+                         * @description The unit the axis is set up in: drive lengths, feed rates (per minute) and travel below are in it.
+                         * @enum {string}
+                         */
+                        lengthUnit: "mm" | "um" | "in" | "thou";
+                        /** @description The drive's lengths in lengthUnit (the pinion module in mm, as always). */
+                        drive: components["schemas"]["DriveRecord"];
+                        /** @description The same drive in mm. */
+                        driveMm: components["schemas"]["DriveRecord"];
+                        driveSummary: string;
+                        motorStepsPerRev: number;
+                        microsteps: number;
+                        gearRatio: number;
+                        stepsPerMm: number;
+                        theoreticalStepsPerMm: number;
+                        /** @description Value in use against the drive's theoretical value, %. */
+                        stepsPerMmDifferencePercent: number;
+                        /** @description Steps per inch (× 25.4), shown beside steps per mm for axes set up in inches. */
+                        stepsPerInch: number;
+                        theoreticalStepsPerInch: number;
+                        travelPerRevMm: number;
+                        /** @description Travel per revolution in lengthUnit. */
+                        travelPerRev: number;
+                        resolutionMm: number;
+                        /** @description Fastest feed, lengthUnit per minute. */
+                        maxFeedRate: number | null;
+                        maxFeedRateMmPerMin: number | null;
+                        /** @description Measured travel in lengthUnit. */
+                        measuredTravel: number | null;
+                        measuredTravelMm: number | null;
+                        notes: string;
+                        stepsHistory: components["schemas"]["StepsChange"][];
+                        locked: boolean;
+                        createdAt: string;
+                        updatedAt: string;
+                        checks: {
+                            travelTrial: components["schemas"]["AxisCheckSummary"];
+                            positioning: components["schemas"]["AxisCheckSummary"];
+                            speedCheck: components["schemas"]["AxisCheckSummary"];
+                        };
+                    }[];
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
         };
@@ -3642,12 +8295,58 @@ export interface operations {
             };
         };
         responses: {
+            /** @description Done. */
             201: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": Record<string, never>;
+                    "application/json": components["schemas"]["AxisResponse"];
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Only these roles may do this: admin, owner, technician. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ConflictResponse"];
                 };
             };
         };
@@ -3663,12 +8362,40 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": Record<string, never>;
+                    "application/json": components["schemas"]["TravelEnvelopeResponse"];
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
         };
@@ -3684,12 +8411,40 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": Record<string, never>;
+                    "application/json": components["schemas"]["AxisResponse"];
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
         };
@@ -3705,11 +8460,57 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done; no body. */
             204: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content?: never;
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Only these roles may do this: admin, owner, technician. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ConflictResponse"];
+                };
             };
         };
     };
@@ -3728,12 +8529,58 @@ export interface operations {
             };
         };
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": Record<string, never>;
+                    "application/json": components["schemas"]["AxisResponse"];
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Only these roles may do this: admin, owner, technician. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ConflictResponse"];
                 };
             };
         };
@@ -3749,12 +8596,40 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": Record<string, never>;
+                    "application/json": components["schemas"]["SpeedCheckResponse"];
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
         };
@@ -3774,11 +8649,67 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": {
+                        target: components["schemas"]["TargetValue"];
+                        recordedBy: string;
+                        recordedAt: string;
+                        appliedAt: string | null;
+                        appliedBy: string | null;
+                        locked: boolean;
+                        unreadable?: string;
+                        id: string;
+                        axisId: string;
+                        machineId: string;
+                        lengthUnit: string;
+                        readingUnit: string;
+                        stepsPerMmUsed: number;
+                        throughOrigin: boolean;
+                        moveCount: number;
+                        warnings: components["schemas"]["ResultWarning"][];
+                        result: {
+                            correctedStepsPerMm: number;
+                            errorPercent: number;
+                            scale: number;
+                            offset: number;
+                            residualMax: number;
+                        } | null;
+                        /** @enum {string} */
+                        status: "within-target" | "outside-target";
+                    }[];
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
             };
         };
     };
@@ -3797,11 +8728,106 @@ export interface operations {
             };
         };
         responses: {
+            /** @description Done. */
             201: {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": {
+                        target: components["schemas"]["TargetValue"];
+                        notes: string;
+                        recordedBy: string;
+                        recordedAt: string;
+                        appliedAt: string | null;
+                        appliedBy: string | null;
+                        locked: boolean;
+                        unreadable?: string;
+                        stepsPerMmUsed: number;
+                        throughOrigin: boolean;
+                        moves: {
+                            commanded: number;
+                            measured: number;
+                        }[];
+                        result: {
+                            correctedStepsPerMm: number;
+                            errorPercent: number;
+                            scale: number;
+                            offset: number;
+                            residuals: number[];
+                            residualMax: number;
+                            moves: {
+                                commanded: number;
+                                measured: number;
+                                error: number;
+                                residual: number;
+                            }[];
+                            theoryDifferencePercent: number | null;
+                            farFromTheory: boolean;
+                            thermalCorrectionPercent: number;
+                        } | null;
+                        warnings: components["schemas"]["ResultWarning"][];
+                        /** @enum {string} */
+                        status: "within-target" | "outside-target";
+                        machineTemperature: number | null;
+                        scaleTemperature: number | null;
+                        scaleMaterial: string | null;
+                        instrumentResolution: number | null;
+                        thermal: components["schemas"]["ThermalReference"] | null;
+                        id: string;
+                        axisId: string;
+                        machineId: string;
+                        /** @enum {string} */
+                        lengthUnit: "mm" | "um" | "in" | "thou";
+                        /** @enum {string} */
+                        readingUnit: "mm" | "um" | "in" | "thou";
+                    };
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Only these roles may do this: admin, owner, technician. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ConflictResponse"];
+                };
             };
         };
     };
@@ -3817,11 +8843,88 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": {
+                        target: components["schemas"]["TargetValue"];
+                        notes: string;
+                        recordedBy: string;
+                        recordedAt: string;
+                        appliedAt: string | null;
+                        appliedBy: string | null;
+                        locked: boolean;
+                        unreadable?: string;
+                        stepsPerMmUsed: number;
+                        throughOrigin: boolean;
+                        moves: {
+                            commanded: number;
+                            measured: number;
+                        }[];
+                        result: {
+                            correctedStepsPerMm: number;
+                            errorPercent: number;
+                            scale: number;
+                            offset: number;
+                            residuals: number[];
+                            residualMax: number;
+                            moves: {
+                                commanded: number;
+                                measured: number;
+                                error: number;
+                                residual: number;
+                            }[];
+                            theoryDifferencePercent: number | null;
+                            farFromTheory: boolean;
+                            thermalCorrectionPercent: number;
+                        } | null;
+                        warnings: components["schemas"]["ResultWarning"][];
+                        /** @enum {string} */
+                        status: "within-target" | "outside-target";
+                        machineTemperature: number | null;
+                        scaleTemperature: number | null;
+                        scaleMaterial: string | null;
+                        instrumentResolution: number | null;
+                        thermal: components["schemas"]["ThermalReference"] | null;
+                        id: string;
+                        axisId: string;
+                        machineId: string;
+                        /** @enum {string} */
+                        lengthUnit: "mm" | "um" | "in" | "thou";
+                        /** @enum {string} */
+                        readingUnit: "mm" | "um" | "in" | "thou";
+                    };
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
             };
         };
     };
@@ -3837,11 +8940,57 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done; no body. */
             204: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content?: never;
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Only these roles may do this: admin, owner, technician. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ConflictResponse"];
+                };
             };
         };
     };
@@ -3861,12 +9010,58 @@ export interface operations {
             };
         };
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": Record<string, never>;
+                    "application/json": components["schemas"]["AxisResponse"];
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Only these roles may do this: admin, owner, technician. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ConflictResponse"];
                 };
             };
         };
@@ -3886,11 +9081,81 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": {
+                        recordedBy: string;
+                        recordedAt: string;
+                        locked: boolean;
+                        unreadable?: string;
+                        id: string;
+                        axisId: string;
+                        machineId: string;
+                        lengthUnit: string;
+                        readingUnit: string;
+                        targetCount: number;
+                        warnings: components["schemas"]["ResultWarning"][];
+                        runCount: number;
+                        result: {
+                            accuracy: number;
+                            repeatability: number;
+                            reversal: number;
+                        } | null;
+                        checks: {
+                            accuracy: {
+                                value: number;
+                                target: components["schemas"]["TargetValue"];
+                                targetMm: number;
+                                pass: boolean;
+                            };
+                            repeatability: {
+                                value: number;
+                                target: components["schemas"]["TargetValue"];
+                                targetMm: number;
+                                pass: boolean;
+                            };
+                            reversal: {
+                                value: number;
+                                target: components["schemas"]["TargetValue"];
+                                targetMm: number;
+                                pass: boolean;
+                            };
+                        } | null;
+                        /** @enum {string} */
+                        status: "within-target" | "outside-target";
+                    }[];
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
             };
         };
     };
@@ -3909,11 +9174,143 @@ export interface operations {
             };
         };
         responses: {
+            /** @description Done. */
             201: {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": {
+                        notes: string;
+                        recordedBy: string;
+                        recordedAt: string;
+                        locked: boolean;
+                        unreadable?: string;
+                        targets: number[];
+                        runs: {
+                            /** @enum {string} */
+                            direction: "up" | "down";
+                            deviations: number[];
+                        }[];
+                        result: {
+                            warnings: components["schemas"]["ResultWarning"][];
+                            thermalCorrectionMax: number;
+                            units: {
+                                [key: string]: string;
+                            };
+                            targets: {
+                                target: number;
+                                meanUp: number;
+                                meanDown: number;
+                                mean: number;
+                                reversal: number;
+                                sUp: number;
+                                sDown: number;
+                                repeatabilityUp: number;
+                                repeatabilityDown: number;
+                                repeatability: number;
+                            }[];
+                            reversal: number;
+                            reversalMean: number;
+                            repeatabilityUp: number;
+                            repeatabilityDown: number;
+                            repeatability: number;
+                            systematicUp: number;
+                            systematicDown: number;
+                            systematic: number;
+                            meanRange: number;
+                            accuracyUp: number;
+                            accuracyDown: number;
+                            accuracy: number;
+                            runsUp: number;
+                            runsDown: number;
+                            /** @enum {string} */
+                            lengthUnit?: "mm" | "um" | "in" | "thou";
+                            /** @enum {string} */
+                            readingUnit?: "mm" | "um" | "in" | "thou";
+                        } | null;
+                        warnings: components["schemas"]["ResultWarning"][];
+                        checks: {
+                            accuracy: {
+                                value: number;
+                                target: components["schemas"]["TargetValue"];
+                                targetMm: number;
+                                pass: boolean;
+                            };
+                            repeatability: {
+                                value: number;
+                                target: components["schemas"]["TargetValue"];
+                                targetMm: number;
+                                pass: boolean;
+                            };
+                            reversal: {
+                                value: number;
+                                target: components["schemas"]["TargetValue"];
+                                targetMm: number;
+                                pass: boolean;
+                            };
+                        } | null;
+                        /** @enum {string} */
+                        status: "within-target" | "outside-target";
+                        machineTemperature: number | null;
+                        scaleTemperature: number | null;
+                        scaleMaterial: string | null;
+                        instrumentResolution: number | null;
+                        thermal: components["schemas"]["ThermalReference"] | null;
+                        id: string;
+                        axisId: string;
+                        machineId: string;
+                        /** @enum {string} */
+                        lengthUnit: "mm" | "um" | "in" | "thou";
+                        /** @enum {string} */
+                        readingUnit: "mm" | "um" | "in" | "thou";
+                    };
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Only these roles may do this: admin, owner, technician. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ConflictResponse"];
+                };
             };
         };
     };
@@ -3929,11 +9326,125 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": {
+                        notes: string;
+                        recordedBy: string;
+                        recordedAt: string;
+                        locked: boolean;
+                        unreadable?: string;
+                        targets: number[];
+                        runs: {
+                            /** @enum {string} */
+                            direction: "up" | "down";
+                            deviations: number[];
+                        }[];
+                        result: {
+                            warnings: components["schemas"]["ResultWarning"][];
+                            thermalCorrectionMax: number;
+                            units: {
+                                [key: string]: string;
+                            };
+                            targets: {
+                                target: number;
+                                meanUp: number;
+                                meanDown: number;
+                                mean: number;
+                                reversal: number;
+                                sUp: number;
+                                sDown: number;
+                                repeatabilityUp: number;
+                                repeatabilityDown: number;
+                                repeatability: number;
+                            }[];
+                            reversal: number;
+                            reversalMean: number;
+                            repeatabilityUp: number;
+                            repeatabilityDown: number;
+                            repeatability: number;
+                            systematicUp: number;
+                            systematicDown: number;
+                            systematic: number;
+                            meanRange: number;
+                            accuracyUp: number;
+                            accuracyDown: number;
+                            accuracy: number;
+                            runsUp: number;
+                            runsDown: number;
+                            /** @enum {string} */
+                            lengthUnit?: "mm" | "um" | "in" | "thou";
+                            /** @enum {string} */
+                            readingUnit?: "mm" | "um" | "in" | "thou";
+                        } | null;
+                        warnings: components["schemas"]["ResultWarning"][];
+                        checks: {
+                            accuracy: {
+                                value: number;
+                                target: components["schemas"]["TargetValue"];
+                                targetMm: number;
+                                pass: boolean;
+                            };
+                            repeatability: {
+                                value: number;
+                                target: components["schemas"]["TargetValue"];
+                                targetMm: number;
+                                pass: boolean;
+                            };
+                            reversal: {
+                                value: number;
+                                target: components["schemas"]["TargetValue"];
+                                targetMm: number;
+                                pass: boolean;
+                            };
+                        } | null;
+                        /** @enum {string} */
+                        status: "within-target" | "outside-target";
+                        machineTemperature: number | null;
+                        scaleTemperature: number | null;
+                        scaleMaterial: string | null;
+                        instrumentResolution: number | null;
+                        thermal: components["schemas"]["ThermalReference"] | null;
+                        id: string;
+                        axisId: string;
+                        machineId: string;
+                        /** @enum {string} */
+                        lengthUnit: "mm" | "um" | "in" | "thou";
+                        /** @enum {string} */
+                        readingUnit: "mm" | "um" | "in" | "thou";
+                    };
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
             };
         };
     };
@@ -3949,11 +9460,57 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done; no body. */
             204: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content?: never;
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Only these roles may do this: admin, owner, technician. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ConflictResponse"];
+                };
             };
         };
     };
@@ -3972,12 +9529,40 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": Record<string, never>;
+                    "application/json": components["schemas"]["TestTargets"];
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
         };
@@ -4016,12 +9601,40 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": string;
+                    "text/plain": string;
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
         };
@@ -4041,11 +9654,89 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": {
+                        warnings: components["schemas"]["ResultWarning"][];
+                        target: {
+                            valueMm: number;
+                            value: number;
+                            /** @enum {string} */
+                            unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
+                            source?: string;
+                            /** @enum {string} */
+                            reference?: "minimum-zone" | "least-squares";
+                        };
+                        notes: string;
+                        recordedBy: string;
+                        recordedAt: string;
+                        locked: boolean;
+                        unreadable?: string;
+                        id: string;
+                        axisId: string;
+                        machineId: string;
+                        /** @enum {string} */
+                        lengthUnit: "mm" | "um" | "in" | "thou";
+                        /** @enum {string} */
+                        readingUnit: "mm" | "um" | "in" | "thou";
+                        positions: components["schemas"]["BacklashPositionRecord"][];
+                        resolution: number | null;
+                        definition: string;
+                        result: {
+                            /** @description The largest, in readingUnit and in mm. */
+                            backlash: number;
+                            backlashMm: number;
+                            worstPosition: number;
+                            worstPositionMm: number;
+                            meanBacklash: number;
+                            meanBacklashMm: number;
+                            positions: {
+                                position: number;
+                                positionMm: number;
+                                meanUp: number;
+                                meanDown: number;
+                                reversal: number;
+                                backlash: number;
+                                backlashMm: number;
+                                approachesUp: number;
+                                approachesDown: number;
+                            }[];
+                        } | null;
+                        /** @enum {string} */
+                        status: "within-target" | "outside-target";
+                    }[];
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
             };
         };
     };
@@ -4064,11 +9755,107 @@ export interface operations {
             };
         };
         responses: {
+            /** @description Done. */
             201: {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": {
+                        warnings: components["schemas"]["ResultWarning"][];
+                        target: {
+                            valueMm: number;
+                            value: number;
+                            /** @enum {string} */
+                            unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
+                            source?: string;
+                            /** @enum {string} */
+                            reference?: "minimum-zone" | "least-squares";
+                        };
+                        notes: string;
+                        recordedBy: string;
+                        recordedAt: string;
+                        locked: boolean;
+                        unreadable?: string;
+                        id: string;
+                        axisId: string;
+                        machineId: string;
+                        /** @enum {string} */
+                        lengthUnit: "mm" | "um" | "in" | "thou";
+                        /** @enum {string} */
+                        readingUnit: "mm" | "um" | "in" | "thou";
+                        positions: components["schemas"]["BacklashPositionRecord"][];
+                        resolution: number | null;
+                        definition: string;
+                        result: {
+                            /** @description The largest, in readingUnit and in mm. */
+                            backlash: number;
+                            backlashMm: number;
+                            worstPosition: number;
+                            worstPositionMm: number;
+                            meanBacklash: number;
+                            meanBacklashMm: number;
+                            positions: {
+                                position: number;
+                                positionMm: number;
+                                meanUp: number;
+                                meanDown: number;
+                                reversal: number;
+                                backlash: number;
+                                backlashMm: number;
+                                approachesUp: number;
+                                approachesDown: number;
+                            }[];
+                        } | null;
+                        /** @enum {string} */
+                        status: "within-target" | "outside-target";
+                    };
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Only these roles may do this: admin, owner, technician. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ConflictResponse"];
+                };
             };
         };
     };
@@ -4084,11 +9871,89 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": {
+                        warnings: components["schemas"]["ResultWarning"][];
+                        target: {
+                            valueMm: number;
+                            value: number;
+                            /** @enum {string} */
+                            unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
+                            source?: string;
+                            /** @enum {string} */
+                            reference?: "minimum-zone" | "least-squares";
+                        };
+                        notes: string;
+                        recordedBy: string;
+                        recordedAt: string;
+                        locked: boolean;
+                        unreadable?: string;
+                        id: string;
+                        axisId: string;
+                        machineId: string;
+                        /** @enum {string} */
+                        lengthUnit: "mm" | "um" | "in" | "thou";
+                        /** @enum {string} */
+                        readingUnit: "mm" | "um" | "in" | "thou";
+                        positions: components["schemas"]["BacklashPositionRecord"][];
+                        resolution: number | null;
+                        definition: string;
+                        result: {
+                            /** @description The largest, in readingUnit and in mm. */
+                            backlash: number;
+                            backlashMm: number;
+                            worstPosition: number;
+                            worstPositionMm: number;
+                            meanBacklash: number;
+                            meanBacklashMm: number;
+                            positions: {
+                                position: number;
+                                positionMm: number;
+                                meanUp: number;
+                                meanDown: number;
+                                reversal: number;
+                                backlash: number;
+                                backlashMm: number;
+                                approachesUp: number;
+                                approachesDown: number;
+                            }[];
+                        } | null;
+                        /** @enum {string} */
+                        status: "within-target" | "outside-target";
+                    };
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
             };
         };
     };
@@ -4104,11 +9969,57 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done; no body. */
             204: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content?: never;
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Only these roles may do this: admin, owner, technician. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ConflictResponse"];
+                };
             };
         };
     };
@@ -4123,11 +10034,124 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": {
+                        machineId: string;
+                        /** @enum {string} */
+                        state: "being-built" | "awaiting-approval" | "ready-to-cut" | "recheck-due" | "reopened" | "retired";
+                        checks: {
+                            hasSeries: boolean;
+                            key: string;
+                            /** @enum {string} */
+                            kind: "positioning" | "rail-straightness" | "travel-trial" | "diagonal-check" | "bed-grid" | "test-cut" | "safety-walk" | "rail-parallelism" | "backlash" | "speed-check" | "travel-envelope";
+                            subject: string;
+                            /** @enum {string} */
+                            status: "within-target" | "outside-target" | "not-started" | "waived";
+                            /**
+                             * @description What the contributor reported before any waiver.
+                             * @enum {string}
+                             */
+                            measuredStatus: "within-target" | "outside-target" | "not-started";
+                            target: {
+                                value: number;
+                                /** @enum {string} */
+                                unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
+                                source?: string;
+                                /** @enum {string} */
+                                reference?: "minimum-zone" | "least-squares";
+                                label?: string;
+                            } | null;
+                            result: {
+                                value: number;
+                                unit: string;
+                                summary: string;
+                            } | null;
+                            /** @enum {string|null} */
+                            recordType: "axis" | "machine" | "waiver" | "rail-sweep" | "rail" | "bolt-down" | "travel-trial" | "positioning-run" | "backlash-check" | "diagonal-check" | "bed-grid" | "test-cut" | "safety-walk" | null;
+                            recordId: string | null;
+                            recordedAt: string | null;
+                            /** @description Where the check's record is shown (snapshots taken before it was kept name a screen path, `link`, instead). */
+                            place: {
+                                machineId: string;
+                                /** @enum {string} */
+                                tab: "rails" | "readiness" | "frame" | "safety" | "drives";
+                            } | {
+                                machineId: string;
+                                railId: string;
+                            } | {
+                                machineId: string;
+                                axisId: string;
+                            };
+                            waiver: components["schemas"]["WaiverInfo"] | null;
+                            /** @description What a person should know about the result; absent in snapshots taken before warnings were kept. */
+                            warnings?: components["schemas"]["ResultWarning"][];
+                        }[];
+                        blocking: {
+                            key: string;
+                            /** @enum {string} */
+                            kind: "positioning" | "rail-straightness" | "travel-trial" | "diagonal-check" | "bed-grid" | "test-cut" | "safety-walk" | "rail-parallelism" | "backlash" | "speed-check" | "travel-envelope";
+                            subject: string;
+                            /** @enum {string} */
+                            status: "within-target" | "outside-target" | "not-started" | "waived";
+                        }[];
+                        counts: {
+                            total: number;
+                            within: number;
+                            outside: number;
+                            waived: number;
+                            notStarted: number;
+                        };
+                        approval: components["schemas"]["ApprovalResponse"] | null;
+                        request: {
+                            id: string;
+                            requestedAt: string;
+                            requestedBy: string;
+                        } | null;
+                        recheckDueAt: string | null;
+                        targetSet: {
+                            id: string;
+                            name: string;
+                            recheckIntervalDays: number;
+                        };
+                        defaultStatement: string;
+                        cautions: {
+                            title: string;
+                            text: string;
+                        }[];
+                    };
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
             };
         };
     };
@@ -4147,11 +10171,66 @@ export interface operations {
             };
         };
         responses: {
+            /** @description Done. */
             201: {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": {
+                        id: string;
+                        checkKey: string;
+                        reason: string;
+                        waivedBy: string;
+                        waivedAt: string;
+                        recordId: string | null;
+                    };
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Only these roles may do this: owner. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ConflictResponse"];
+                };
             };
         };
     };
@@ -4166,11 +10245,65 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done. */
             201: {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": {
+                        /** @enum {string} */
+                        state: "awaiting-approval";
+                        id: string;
+                        requestedAt: string;
+                        requestedBy: string;
+                    };
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Only these roles may do this: technician, owner, admin. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ConflictResponse"];
+                };
             };
         };
     };
@@ -4185,12 +10318,40 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": Record<string, never>[];
+                    "application/json": components["schemas"]["ApprovalResponse"][];
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
         };
@@ -4210,11 +10371,65 @@ export interface operations {
             };
         };
         responses: {
+            /** @description Done. */
             201: {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": {
+                        id: string;
+                        approvedAt: string;
+                        approvedBy: string;
+                        recordHash: string;
+                        recheckDueAt: string;
+                    };
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Only these roles may do this: owner. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ConflictResponse"];
+                };
             };
         };
     };
@@ -4233,11 +10448,63 @@ export interface operations {
             };
         };
         responses: {
+            /** @description Done. */
             201: {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": {
+                        /** @enum {string} */
+                        state: "reopened";
+                        approval: components["schemas"]["ApprovalResponse"];
+                    };
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Only these roles may do this: owner. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ConflictResponse"];
+                };
             };
         };
     };
@@ -4253,11 +10520,63 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": {
+                        approvalId: string;
+                        /** @enum {string} */
+                        status: "valid" | "changed" | "unsigned" | "unknown-key";
+                        valid: boolean;
+                        unchanged: boolean | null;
+                        message: string;
+                        signedBy: string;
+                        signedAt: string;
+                        /** @enum {string} */
+                        algorithm: "Ed25519";
+                        keyId: string | null;
+                        signedCopyIntact: boolean | null;
+                        differences: components["schemas"]["RecordDifference"][];
+                        moreDifferences: number;
+                        recordHash: string;
+                        stands: boolean;
+                        reopened: {
+                            at: string;
+                            by: string | null;
+                            reason: string | null;
+                        } | null;
+                    };
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
             };
         };
     };
@@ -4272,12 +10591,72 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": Record<string, never>;
+                    "application/json": {
+                        approval: unknown;
+                        rows: unknown[];
+                    } | {
+                        approval: {
+                            id: string;
+                            approvedAt: string;
+                            approvedBy: string;
+                            recordHash: string;
+                        };
+                        rows: {
+                            key: string;
+                            /** @enum {string} */
+                            kind: "positioning" | "rail-straightness" | "travel-trial" | "diagonal-check" | "bed-grid" | "test-cut" | "safety-walk" | "rail-parallelism" | "backlash" | "speed-check" | "travel-envelope";
+                            subject: string;
+                            target: {
+                                value: number;
+                                /** @enum {string} */
+                                unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
+                                source?: string;
+                                /** @enum {string} */
+                                reference?: "minimum-zone" | "least-squares";
+                                label?: string;
+                            } | null;
+                            approved: components["schemas"]["DriftSide"] | null;
+                            latest: components["schemas"]["DriftSide"] | null;
+                            /** @description Latest minus approved, in the result's unit; null when either is missing or nothing new was recorded. */
+                            change: number | null;
+                            unit: string | null;
+                            rechecked: boolean;
+                            worse: boolean;
+                        }[];
+                    };
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
         };
@@ -4295,11 +10674,41 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/pdf": string;
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
             };
         };
     };
@@ -4312,12 +10721,13 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": string;
+                    "text/plain": string;
                 };
             };
         };
@@ -4333,11 +10743,66 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": {
+                        machine: {
+                            name: string;
+                            kind: string;
+                        };
+                        workshop: string;
+                        statement: string;
+                        recheckDueAt: string;
+                        recheckIntervalDays: number;
+                        recheckDue: boolean;
+                        targetSet: string;
+                        checkCount: number;
+                        waivedCount: number;
+                        approvalId: string;
+                        /** @enum {string} */
+                        status: "valid" | "changed" | "unsigned" | "unknown-key";
+                        valid: boolean;
+                        unchanged: boolean | null;
+                        message: string;
+                        signedBy: string;
+                        signedAt: string;
+                        /** @enum {string} */
+                        algorithm: "Ed25519";
+                        keyId: string | null;
+                        signedCopyIntact: boolean | null;
+                        differences: components["schemas"]["RecordDifference"][];
+                        moreDifferences: number;
+                        recordHash: string;
+                        stands: boolean;
+                        reopened: {
+                            at: string;
+                            by: string | null;
+                            reason: string | null;
+                        } | null;
+                    };
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
             };
         };
     };
@@ -4352,11 +10817,40 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
-                content?: never;
+                content: {
+                    "application/json": {
+                        signature: string | null;
+                        currentContent?: string;
+                        /** @enum {string} */
+                        algorithm: "Ed25519";
+                        keyId: string | null;
+                        publicKey: string;
+                        content: string | null;
+                    };
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
             };
         };
     };
@@ -4376,12 +10870,40 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": Record<string, never>;
+                    "application/json": components["schemas"]["HistoryPage"];
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Only these roles may do this: admin, owner. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
         };
@@ -4397,12 +10919,40 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": Record<string, never>[];
+                    "application/json": components["schemas"]["HolePatternResponse"][];
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
         };
@@ -4422,12 +10972,58 @@ export interface operations {
             };
         };
         responses: {
+            /** @description Done. */
             201: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": Record<string, never>;
+                    "application/json": components["schemas"]["HolePatternResponse"];
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Only these roles may do this: admin, owner, technician, builder. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ConflictResponse"];
                 };
             };
         };
@@ -4445,12 +11041,49 @@ export interface operations {
             };
         };
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": Record<string, never>;
+                    "application/json": components["schemas"]["PatternPreviewResponse"];
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Only these roles may do this: admin, owner, technician, builder. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ConflictResponse"];
                 };
             };
         };
@@ -4466,12 +11099,40 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": Record<string, never>;
+                    "application/json": components["schemas"]["HolePatternResponse"];
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
         };
@@ -4491,12 +11152,58 @@ export interface operations {
             };
         };
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": Record<string, never>;
+                    "application/json": components["schemas"]["HolePatternResponse"];
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Only these roles may do this: admin, owner, technician, builder. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ConflictResponse"];
                 };
             };
         };
@@ -4512,11 +11219,57 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done; no body. */
             204: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content?: never;
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Only these roles may do this: admin, owner, technician, builder. */
+            403: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            409: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ConflictResponse"];
+                };
             };
         };
     };
@@ -4533,12 +11286,40 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": Record<string, never>;
+                    "application/pdf": string;
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
         };
@@ -4554,12 +11335,40 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": Record<string, never>;
+                    "image/svg+xml": string;
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
         };
@@ -4577,12 +11386,40 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": Record<string, never>;
+                    "application/pdf": string;
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
         };
@@ -4598,12 +11435,40 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": Record<string, never>;
+                    "image/svg+xml": string;
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
         };
@@ -4619,12 +11484,40 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": string;
+                    "text/csv": string;
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
         };
@@ -4640,12 +11533,40 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": string;
+                    "text/csv": string;
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
         };
@@ -4661,12 +11582,40 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": string;
+                    "text/csv": string;
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
         };
@@ -4682,12 +11631,40 @@ export interface operations {
         };
         requestBody?: never;
         responses: {
+            /** @description Done. */
             200: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": string;
+                    "text/csv": string;
+                };
+            };
+            /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
+            400: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ValidationErrorResponse"];
+                };
+            };
+            /** @description No session: sign in first. */
+            401: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
+                };
+            };
+            /** @description No such record in the signed-in workshop. */
+            404: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
         };
