@@ -21,6 +21,7 @@ import { absoluteSessionLifetime } from './common/session-lifetime.js';
 import { refreshSessionsPeriodically } from './common/session-refresh.js';
 import { staticCacheHeaders } from './common/static-cache.js';
 import { loadEvidenceConfig } from './evidence/evidence.config.js';
+import { mountApiReference } from './openapi/api-reference.js';
 
 /** Idle lifetime: the cookie and the stored session expire this long after the last request. */
 const SESSION_IDLE_DAYS = 14;
@@ -118,6 +119,7 @@ export async function configureApp(app: NestFastifyApplication, config: AppConfi
       preCompressed: true,
     });
   }
+  await mountApiReference(app);
   // Nest tries the last registered filter first: the catch-all goes first, the page fallback last.
   app.useGlobalFilters(new DatabaseErrorFilter(), ...appFilters(), new SpaFallbackFilter(dist));
 }

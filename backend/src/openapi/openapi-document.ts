@@ -16,6 +16,7 @@ import { IS_PUBLIC, ROLES_KEY } from '../auth/decorators.js';
 import { ERROR_SCHEMAS, errorResponses, type RouteFacts } from './error-responses.js';
 import pluginMetadata from './plugin-metadata.js';
 import { RESPONSE_SCHEMAS } from './response-schemas.js';
+import { describeNamedUnits } from './units.js';
 
 let metadataLoaded: Promise<void> | null = null;
 
@@ -28,8 +29,18 @@ let metadataLoaded: Promise<void> | null = null;
  * - the errors each route can answer, from its access rules (error-responses.ts).
  */
 export async function buildOpenApiDocument(app: INestApplication): Promise<OpenAPIObject> {
+  await loadOpenApiMetadata();
+  return createOpenApiDocument(app);
+}
+
+/** Gives the DTOs and controllers what the plugin read from them (once a process). */
+export function loadOpenApiMetadata(): Promise<void> {
   metadataLoaded ??= SwaggerModule.loadPluginMetadata(pluginMetadata);
-  await metadataLoaded;
+  return metadataLoaded;
+}
+
+/** The document, once loadOpenApiMetadata() has run. */
+export function createOpenApiDocument(app: INestApplication): OpenAPIObject {
   const config = new DocumentBuilder()
     .setTitle('Railwright API')
     .setDescription(DESCRIPTION)
@@ -57,6 +68,7 @@ export async function buildOpenApiDocument(app: INestApplication): Promise<OpenA
       if (!route.isPublic) operation.security = [{ 'railwright.sid': [] }];
     }
   }
+  describeNamedUnits(document);
   return document;
 }
 

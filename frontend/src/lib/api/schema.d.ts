@@ -1536,18 +1536,30 @@ export interface components {
             positions: number[];
             /** @description Indicator readings in `readingUnit`. */
             readings: number[];
-            /** @enum {string} */
+            /**
+             * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
+             * @enum {string}
+             */
             lengthUnit?: "mm" | "um" | "in" | "thou";
-            /** @enum {string} */
+            /**
+             * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
+             * @enum {string}
+             */
             readingUnit?: "mm" | "um" | "in" | "thou";
         };
         ParallelismDto: {
             positions: number[];
             railA: number[];
             railB: number[];
-            /** @enum {string} */
+            /**
+             * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
+             * @enum {string}
+             */
             lengthUnit?: "mm" | "um" | "in" | "thou";
-            /** @enum {string} */
+            /**
+             * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
+             * @enum {string}
+             */
             readingUnit?: "mm" | "um" | "in" | "thou";
         };
         SquarenessDto: {
@@ -1556,9 +1568,15 @@ export interface components {
             diagonal1: number;
             diagonal2: number;
             gantrySpan?: number;
-            /** @enum {string} */
+            /**
+             * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
+             * @enum {string}
+             */
             lengthUnit?: "mm" | "um" | "in" | "thou";
-            /** @enum {string} */
+            /**
+             * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
+             * @enum {string}
+             */
             readingUnit?: "mm" | "um" | "in" | "thou";
         };
         GridPointDto: {
@@ -1570,9 +1588,15 @@ export interface components {
         };
         FlatnessDto: {
             points: components["schemas"]["GridPointDto"][];
-            /** @enum {string} */
+            /**
+             * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
+             * @enum {string}
+             */
             lengthUnit?: "mm" | "um" | "in" | "thou";
-            /** @enum {string} */
+            /**
+             * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
+             * @enum {string}
+             */
             readingUnit?: "mm" | "um" | "in" | "thou";
         };
         DriveDto: {
@@ -1588,9 +1612,15 @@ export interface components {
             pulleyTeeth?: number;
             pinionTeeth?: number;
             pinionModule?: number;
-            /** @enum {string} */
+            /**
+             * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
+             * @enum {string}
+             */
             lengthUnit?: "mm" | "um" | "in" | "thou";
-            /** @enum {string} */
+            /**
+             * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
+             * @enum {string}
+             */
             readingUnit?: "mm" | "um" | "in" | "thou";
         };
         TravelMoveDto: {
@@ -1606,9 +1636,15 @@ export interface components {
             moves: components["schemas"]["TravelMoveDto"][];
             /** @description Fit without an offset (moves measured from a zeroed start). */
             throughOrigin?: boolean;
-            /** @enum {string} */
+            /**
+             * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
+             * @enum {string}
+             */
             lengthUnit?: "mm" | "um" | "in" | "thou";
-            /** @enum {string} */
+            /**
+             * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
+             * @enum {string}
+             */
             readingUnit?: "mm" | "um" | "in" | "thou";
         };
         PositioningRunDto: {
@@ -1621,9 +1657,15 @@ export interface components {
             /** @description Target positions, in `lengthUnit`. */
             targets: number[];
             runs: components["schemas"]["PositioningRunDto"][];
-            /** @enum {string} */
+            /**
+             * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
+             * @enum {string}
+             */
             lengthUnit?: "mm" | "um" | "in" | "thou";
-            /** @enum {string} */
+            /**
+             * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
+             * @enum {string}
+             */
             readingUnit?: "mm" | "um" | "in" | "thou";
         };
         ScrewSpeedDto: {
@@ -1636,9 +1678,15 @@ export interface components {
             feedRate: number;
             /** @description Nominal diameter in mm × rpm limit of the nut (defined in mm whatever the unit); 70 000 (rolled screws) when absent. */
             dnLimit?: number;
-            /** @enum {string} */
+            /**
+             * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
+             * @enum {string}
+             */
             lengthUnit?: "mm" | "um" | "in" | "thou";
-            /** @enum {string} */
+            /**
+             * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
+             * @enum {string}
+             */
             readingUnit?: "mm" | "um" | "in" | "thou";
         };
         HoleReadingDto: {
@@ -1657,9 +1705,15 @@ export interface components {
              */
             mode?: "face" | "line";
             readings?: components["schemas"]["HoleReadingDto"][];
-            /** @enum {string} */
+            /**
+             * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
+             * @enum {string}
+             */
             lengthUnit?: "mm" | "um" | "in" | "thou";
-            /** @enum {string} */
+            /**
+             * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
+             * @enum {string}
+             */
             readingUnit?: "mm" | "um" | "in" | "thou";
         };
         AxisTravelDto: {
@@ -1671,9 +1725,15 @@ export interface components {
             axes: components["schemas"]["AxisTravelDto"][];
             /** @description Clearance beyond the work at each end of every axis. */
             marginPerSide?: number;
-            /** @enum {string} */
+            /**
+             * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
+             * @enum {string}
+             */
             lengthUnit?: "mm" | "um" | "in" | "thou";
-            /** @enum {string} */
+            /**
+             * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
+             * @enum {string}
+             */
             readingUnit?: "mm" | "um" | "in" | "thou";
         };
         CutSizeDto: {
@@ -1695,15 +1755,24 @@ export interface components {
             gantrySpan?: number;
             circle?: components["schemas"]["CutCircleDto"];
             ovalityTolerance?: number;
-            /** @enum {string} */
+            /**
+             * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
+             * @enum {string}
+             */
             lengthUnit?: "mm" | "um" | "in" | "thou";
-            /** @enum {string} */
+            /**
+             * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
+             * @enum {string}
+             */
             readingUnit?: "mm" | "um" | "in" | "thou";
         };
         CreateRailDto: {
             label: string;
             axis: string;
-            /** @enum {string} */
+            /**
+             * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
+             * @enum {string}
+             */
             lengthUnit?: "mm" | "um" | "in" | "thou";
             length: number;
             profileSize?: number | null;
@@ -1740,6 +1809,7 @@ export interface components {
             instrument?: string;
             /** @description Smallest step of the instrument, in `readingUnit`. */
             resolution?: number;
+            /** @description In °C. */
             temperatureC?: number;
             /** @enum {string} */
             phase: "as-found" | "as-left";
@@ -1753,6 +1823,7 @@ export interface components {
         };
         UpdateSweepDetailsDto: {
             instrument?: string;
+            /** @description In °C. */
             temperatureC?: number | null;
             takenBy?: string;
             boltSize?: string | null;
@@ -1818,6 +1889,7 @@ export interface components {
             instrument?: string;
             /** @description Smallest step of the instrument, in `readingUnit`. */
             resolution?: number;
+            /** @description In °C. */
             temperatureC?: number;
             /** @enum {string} */
             phase: "as-found" | "as-left";
@@ -1837,7 +1909,10 @@ export interface components {
             gantrySpan?: number;
             /** @description Smallest step of the tape or rule the diagonals were read with, in lengthUnit. */
             resolution?: number;
-            /** @enum {string} */
+            /**
+             * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
+             * @enum {string}
+             */
             lengthUnit?: "mm" | "um" | "in" | "thou";
             note?: string;
         };
@@ -1923,7 +1998,7 @@ export interface components {
             microsteps: number;
             /** @description Motor revolutions per revolution of the screw, pulley or pinion; 1 when direct. */
             gearRatio?: number;
-            /** @description The value set in the controller now. */
+            /** @description The value set in the controller now. In mm. */
             stepsPerMm: number;
             /** @description The fastest feed rate the axis will be asked for, lengthUnit per minute. */
             maxFeedRate?: number;
@@ -1993,9 +2068,15 @@ export interface components {
             down: number[];
         };
         CreateBacklashCheckDto: {
-            /** @enum {string} */
+            /**
+             * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
+             * @enum {string}
+             */
             lengthUnit?: "mm" | "um" | "in" | "thou";
-            /** @enum {string} */
+            /**
+             * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
+             * @enum {string}
+             */
             readingUnit?: "mm" | "um" | "in" | "thou";
             /** @description One near each end of the travel and one near its middle (more are welcome). */
             positions: components["schemas"]["BacklashPositionDto"][];
@@ -2026,6 +2107,7 @@ export interface components {
         CircleDto: {
             circleDiameter: number;
             count: number;
+            /** @description In degrees. */
             startAngleDeg: number;
             diameter: number;
         };
@@ -2367,12 +2449,16 @@ export interface components {
             /** @description The end distance the holes keep, in lengthUnit; `endDistanceIsDefault` when not entered. */
             endDistance: number;
             endDistanceIsDefault: boolean;
-            /** @description Goes out as null when the stored length cannot be read (see `unreadable`). */
+            /** @description Goes out as null when the stored length cannot be read (see `unreadable`). In mm. */
             lengthMm: number;
             profileSize: number | null;
+            /** @description In mm. */
             holePitchMm: number;
+            /** @description In mm. */
             firstHoleMm: number;
+            /** @description In mm. */
             spacingMm: number | null;
+            /** @description In mm. */
             endDistanceMm: number;
             partnerRailId: string | null;
             /** @description Hole centres from the rail's start, in mm (`position`) and in lengthUnit (`at`). */
@@ -2405,9 +2491,15 @@ export interface components {
             };
             /** @enum {string} */
             face: "side" | "top";
-            /** @enum {string} */
+            /**
+             * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
+             * @enum {string}
+             */
             readingUnit: "mm" | "um" | "in" | "thou";
-            /** @enum {string} */
+            /**
+             * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
+             * @enum {string}
+             */
             lengthUnit: "mm" | "um" | "in" | "thou";
             /** @description Largest local slope of the judged residuals, mm/m (null on sweeps saved before it was kept). */
             localSlopeMmPerM: number | null;
@@ -2431,12 +2523,16 @@ export interface components {
             /** @description The end distance the holes keep, in lengthUnit; `endDistanceIsDefault` when not entered. */
             endDistance: number;
             endDistanceIsDefault: boolean;
-            /** @description Goes out as null when the stored length cannot be read (see `unreadable`). */
+            /** @description Goes out as null when the stored length cannot be read (see `unreadable`). In mm. */
             lengthMm: number;
             profileSize: number | null;
+            /** @description In mm. */
             holePitchMm: number;
+            /** @description In mm. */
             firstHoleMm: number;
+            /** @description In mm. */
             spacingMm: number | null;
+            /** @description In mm. */
             endDistanceMm: number;
             partnerRailId: string | null;
             /** @description Hole centres from the rail's start, in mm (`position`) and in lengthUnit (`at`). */
@@ -2476,9 +2572,15 @@ export interface components {
             };
             /** @enum {string} */
             face: "side" | "top";
-            /** @enum {string} */
+            /**
+             * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
+             * @enum {string}
+             */
             readingUnit: "mm" | "um" | "in" | "thou";
-            /** @enum {string} */
+            /**
+             * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
+             * @enum {string}
+             */
             lengthUnit: "mm" | "um" | "in" | "thou";
             /** @description Largest local slope of the judged residuals, mm/m (null on sweeps saved before it was kept). */
             localSlopeMmPerM: number | null;
@@ -2493,20 +2595,26 @@ export interface components {
              * @enum {string}
              */
             lengthUnit: "mm" | "um" | "in" | "thou";
-            /** @enum {string} */
+            /**
+             * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
+             * @enum {string}
+             */
             readingUnit: "mm" | "um" | "in" | "thou";
             /** @enum {string} */
             face: "side" | "top";
             stations: {
                 position: number;
+                /** @description In mm. */
                 positionMm: number;
                 reading: number;
+                /** @description In mm. */
                 readingMm: number;
             }[] | null;
             localSlope: components["schemas"]["StoredLocalSlope"] | null;
             warnings: components["schemas"]["ResultWarning"][];
             instrument: string;
             resolution: number | null;
+            /** @description In °C. */
             temperatureC: number | null;
             /** @enum {string} */
             phase: "as-found" | "as-left";
@@ -2534,8 +2642,11 @@ export interface components {
         /** @description Largest slope between neighbouring stations (or over a stated base), mm per metre. */
         StoredLocalSlope: {
             mmPerM: number;
+            /** @description In mm. */
             fromMm: number;
+            /** @description In mm. */
             toMm: number;
+            /** @description In mm. */
             baseMm: number | null;
         };
         StoredSweepResult: {
@@ -2559,6 +2670,7 @@ export interface components {
             rail: {
                 label: string;
                 axis: string;
+                /** @description In mm. */
                 lengthMm: number;
             };
             /** @enum {string} */
@@ -2568,10 +2680,14 @@ export interface components {
              * @enum {string}
              */
             readingUnit: "mm" | "um" | "in" | "thou";
-            /** @enum {string} */
+            /**
+             * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
+             * @enum {string}
+             */
             lengthUnit: "mm" | "um" | "in" | "thou";
             /** @description Half-width around the aim that counts as on target, in the unit and in mm. */
             band: number;
+            /** @description In mm. */
             bandMm: number;
             holes: components["schemas"]["BoltDownHoleResponse"][];
             nextHole: number | null;
@@ -2600,9 +2716,11 @@ export interface components {
             order: number;
             /** @description Reading to aim for, in the bolt-down's unit (null until the first hole is fixed). */
             target: number | null;
+            /** @description In mm. */
             targetMm: number | null;
             /** @description Reading as typed, in the bolt-down's unit. */
             reading: number | null;
+            /** @description In mm. */
             readingMm: number | null;
             /** @description reading − target, in the bolt-down's unit. */
             difference: number | null;
@@ -2622,6 +2740,7 @@ export interface components {
             rail: {
                 label: string;
                 axis: string;
+                /** @description In mm. */
                 lengthMm: number;
             };
             /** @enum {string} */
@@ -2631,10 +2750,14 @@ export interface components {
              * @enum {string}
              */
             readingUnit: "mm" | "um" | "in" | "thou";
-            /** @enum {string} */
+            /**
+             * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
+             * @enum {string}
+             */
             lengthUnit: "mm" | "um" | "in" | "thou";
             /** @description Half-width around the aim that counts as on target, in the unit and in mm. */
             band: number;
+            /** @description In mm. */
             bandMm: number;
             holes: components["schemas"]["BoltDownHoleResponse"][];
             nextHole: number | null;
@@ -2656,6 +2779,7 @@ export interface components {
         };
         DiagonalCheckResult: {
             correction: components["schemas"]["SquaringCorrection"];
+            /** @description In degrees. */
             outOfSquareDeg: number;
             outOfSquareArcsec: number;
             /** @description Lateral error per metre of travel: tan γ × 1000. */
@@ -2667,6 +2791,7 @@ export interface components {
              * @enum {number}
              */
             longDiagonal: 1 | 2;
+            /** @description In mm. */
             diagonalDifferenceMm: number;
         };
         /**
@@ -2675,7 +2800,9 @@ export interface components {
          *     its X0 end, so that end is brought back towards Y0 (or the X0 end moved forward) by span × tan γ.
          */
         SquaringCorrection: {
+            /** @description In mm. */
             moveMm: number;
+            /** @description In mm. */
             spanMm: number;
             /**
              * @description The end of the gantry that runs ahead and is moved back.
@@ -2703,6 +2830,7 @@ export interface components {
                 c: number;
                 /** @description Max − min residual about the plane, mm. */
                 flatness: number;
+                /** @description In mm. */
                 flatnessMm: number;
             };
             /** @description The ISO 1101 zone: middle plane z = a·x + b·y + c and the zone's width along the height axis. */
@@ -2710,10 +2838,12 @@ export interface components {
                 a: number;
                 b: number;
                 c: number;
+                /** @description In mm. */
                 flatnessMm: number;
             };
             /** @description Highest minus lowest height as read, tilt left in. */
             heightRange: {
+                /** @description In mm. */
                 rangeMm: number;
             };
             /** @description The value this machine's bed is judged on (see BedJudgedBasis). */
@@ -2721,12 +2851,14 @@ export interface components {
                 /** @enum {string} */
                 basis: "minimum-zone" | "height-range";
                 label: string;
+                /** @description In mm. */
                 valueMm: number;
             };
             tilt: {
                 xMmPerMetre: number;
                 yMmPerMetre: number;
                 mmPerMetre: number;
+                /** @description In degrees. */
                 directionDeg: number;
             };
             points: components["schemas"]["BedGridPointResult"][];
@@ -2742,8 +2874,11 @@ export interface components {
             /** @description 1-based row (by position along Y, Y0 first) and column (by position along X, X0 first). */
             row: number;
             column: number;
+            /** @description In mm. */
             xMm: number;
+            /** @description In mm. */
             yMm: number;
+            /** @description In mm. */
             zMm: number;
             /** @description Height minus the least-squares plane, mm. */
             residualMm: number;
@@ -2759,10 +2894,12 @@ export interface components {
             y: components["schemas"]["AxisReading"];
             outOfSquareArcsec: number;
             squareness: {
+                /** @description In degrees. */
                 outOfSquareDeg: number;
                 mmPerMetre: number;
                 /** @enum {number} */
                 longDiagonal: 1 | 2;
+                /** @description In mm. */
                 diagonalDifferenceMm: number;
                 warnings: string[];
             };
@@ -2771,28 +2908,37 @@ export interface components {
             /** @enum {string} */
             ovalityPointsTo: "round" | "scale" | "x-backlash" | "y-backlash";
             ovalityExplanation: string;
+            /** @description In mm. */
             ovalityToleranceMm: number;
             parts: components["schemas"]["PartSizeCheck"][];
             notes: string[];
         };
         AxisReading: {
+            /** @description In mm. */
             commandedMm: number;
+            /** @description In mm. */
             measuredMm: number;
-            /** @description The measured size with the uncompensated kerf added back (outside contour). */
+            /** @description The measured size with the uncompensated kerf added back (outside contour). In mm. */
             afterKerfMm: number;
+            /** @description In mm. */
             errorMm: number;
             errorPercent: number;
             /** @description Multiply the axis's steps per mm by this: commanded ÷ measured. */
             correctionFactor: number;
+            /** @description In mm. */
             suggestedStepsPerMm: number | null;
         };
         PartSizeCheck: {
             /** @enum {string} */
             part: "outside-x" | "outside-y" | "circle-x" | "circle-y";
             label: string;
+            /** @description In mm. */
             nominalMm: number;
+            /** @description In mm. */
             afterKerfMm: number;
+            /** @description In mm. */
             deviationMm: number;
+            /** @description In mm. */
             toleranceMm: number;
             toleranceBasis: string;
             sizeBandMm: number[] | null;
@@ -2901,22 +3047,28 @@ export interface components {
             motorStepsPerRev: number;
             microsteps: number;
             gearRatio: number;
+            /** @description In mm. */
             stepsPerMm: number;
+            /** @description In mm. */
             theoreticalStepsPerMm: number;
             /** @description Value in use against the drive's theoretical value, %. */
             stepsPerMmDifferencePercent: number;
             /** @description Steps per inch (× 25.4), shown beside steps per mm for axes set up in inches. */
             stepsPerInch: number;
             theoreticalStepsPerInch: number;
+            /** @description In mm. */
             travelPerRevMm: number;
             /** @description Travel per revolution in lengthUnit. */
             travelPerRev: number;
+            /** @description In mm. */
             resolutionMm: number;
             /** @description Fastest feed, lengthUnit per minute. */
             maxFeedRate: number | null;
+            /** @description In mm per minute. */
             maxFeedRateMmPerMin: number | null;
             /** @description Measured travel in lengthUnit. */
             measuredTravel: number | null;
+            /** @description In mm. */
             measuredTravelMm: number | null;
             notes: string;
             stepsHistory: components["schemas"]["StepsChange"][];
@@ -2933,6 +3085,7 @@ export interface components {
                 y: number;
             };
             margin: components["schemas"]["TargetValue"];
+            /** @description In mm. */
             marginMm: number;
             axes: {
                 axisId: string;
@@ -2977,6 +3130,7 @@ export interface components {
             lengthUnit: "mm" | "um" | "in" | "thou";
             /** @description The fastest feed the axis will be asked for, lengthUnit per minute. */
             feedRate: number | null;
+            /** @description In mm per minute. */
             feedRateMmPerMin: number | null;
             rpm: number | null;
             criticalSpeed: number | null;
@@ -2996,6 +3150,7 @@ export interface components {
             allowedSpeed: number | null;
             /** @description Highest feed within the headroom, lengthUnit per minute. */
             safeFeedRate: number | null;
+            /** @description In mm per minute. */
             safeFeedRateMmPerMin: number | null;
             headroom: components["schemas"]["TargetValue"];
             withinLimits: boolean | null;
@@ -3004,7 +3159,9 @@ export interface components {
         ThermalReference: {
             /** @description True when both temperatures are known and the correction is applied. */
             applied: boolean;
+            /** @description In °C. */
             machineTemperatureC: number | null;
+            /** @description In °C. */
             scaleTemperatureC: number | null;
             /** @enum {string} */
             scaleMaterial: "steel" | "stainless-steel" | "aluminium" | "glass" | "invar";
@@ -3022,8 +3179,10 @@ export interface components {
              */
             lengthUnit: "mm" | "um" | "in" | "thou";
             targets: number[];
+            /** @description In mm. */
             targetsMm: number[];
             overrun: number;
+            /** @description In mm. */
             overrunMm: number;
             runs: number;
             /** @description Why the list is empty (no measured travel), otherwise null. */
@@ -3099,10 +3258,14 @@ export interface components {
             name: string;
             /** @enum {string} */
             reference: "left" | "right" | "top" | "bottom-left" | "bottom-right" | "top-left" | "top-right" | "bottom";
-            /** @enum {string} */
+            /**
+             * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
+             * @enum {string}
+             */
             lengthUnit: "mm" | "um" | "in" | "thou";
             /** @description Outline in mm; `width`/`height` as entered, in `unit`. */
             widthMm: number;
+            /** @description In mm. */
             heightMm: number;
             width: number;
             height: number;
@@ -3129,6 +3292,7 @@ export interface components {
                 centreY: number;
                 circleDiameter: number;
                 count: number;
+                /** @description In degrees. */
                 startAngleDeg: number;
             } | null;
             /** @description Every hole centre and diameter, mm, from the outline's lower-left corner. */
@@ -3138,12 +3302,17 @@ export interface components {
             updatedAt: string;
         };
         StoredHole: {
+            /** @description In mm. */
             xMm: number;
+            /** @description In mm. */
             yMm: number;
+            /** @description In mm. */
             diameterMm: number;
         };
         PatternPreviewResponse: {
+            /** @description In mm. */
             widthMm: number;
+            /** @description In mm. */
             heightMm: number;
             holes: components["schemas"]["StoredHole"][];
         };
@@ -4342,9 +4511,15 @@ export interface operations {
                             intercept: number;
                             straightness: number;
                         };
-                        /** @enum {string} */
+                        /**
+                         * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
+                         * @enum {string}
+                         */
                         lengthUnit: "mm" | "um" | "in" | "thou";
-                        /** @enum {string} */
+                        /**
+                         * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
+                         * @enum {string}
+                         */
                         readingUnit: "mm" | "um" | "in" | "thou";
                     };
                 };
@@ -4405,9 +4580,15 @@ export interface operations {
                         parallelism: number;
                         meanOffset: number;
                         differences: number[];
-                        /** @enum {string} */
+                        /**
+                         * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
+                         * @enum {string}
+                         */
                         lengthUnit: "mm" | "um" | "in" | "thou";
-                        /** @enum {string} */
+                        /**
+                         * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
+                         * @enum {string}
+                         */
                         readingUnit: "mm" | "um" | "in" | "thou";
                     };
                 };
@@ -4465,6 +4646,7 @@ export interface operations {
                         units: {
                             [key: string]: string;
                         };
+                        /** @description In degrees. */
                         outOfSquareDeg: number;
                         outOfSquareArcsec: number;
                         mmPerMetre: number;
@@ -4473,9 +4655,15 @@ export interface operations {
                         diagonalDifference: number;
                         correction: number;
                         span: number;
-                        /** @enum {string} */
+                        /**
+                         * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
+                         * @enum {string}
+                         */
                         lengthUnit: "mm" | "um" | "in" | "thou";
-                        /** @enum {string} */
+                        /**
+                         * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
+                         * @enum {string}
+                         */
                         readingUnit: "mm" | "um" | "in" | "thou";
                     };
                 };
@@ -4546,11 +4734,18 @@ export interface operations {
                             xMmPerMetre: number;
                             yMmPerMetre: number;
                             mmPerMetre: number;
+                            /** @description In degrees. */
                             directionDeg: number;
                         };
-                        /** @enum {string} */
+                        /**
+                         * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
+                         * @enum {string}
+                         */
                         lengthUnit: "mm" | "um" | "in" | "thou";
-                        /** @enum {string} */
+                        /**
+                         * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
+                         * @enum {string}
+                         */
                         readingUnit: "mm" | "um" | "in" | "thou";
                     };
                 };
@@ -4610,12 +4805,19 @@ export interface operations {
                         };
                         travelPerRev: number;
                         travelPerMotorRev: number;
+                        /** @description In mm. */
                         stepsPerMm: number;
                         stepsPerIn: number;
                         resolution: number;
-                        /** @enum {string} */
+                        /**
+                         * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
+                         * @enum {string}
+                         */
                         lengthUnit: "mm" | "um" | "in" | "thou";
-                        /** @enum {string} */
+                        /**
+                         * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
+                         * @enum {string}
+                         */
                         readingUnit: "mm" | "um" | "in" | "thou";
                     };
                 };
@@ -4675,6 +4877,7 @@ export interface operations {
                         };
                         scale: number;
                         offset: number;
+                        /** @description In mm. */
                         correctedStepsPerMm: number;
                         correctedStepsPerIn: number;
                         errorPercent: number;
@@ -4685,9 +4888,15 @@ export interface operations {
                             error: number;
                             residual: number;
                         }[];
-                        /** @enum {string} */
+                        /**
+                         * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
+                         * @enum {string}
+                         */
                         lengthUnit: "mm" | "um" | "in" | "thou";
-                        /** @enum {string} */
+                        /**
+                         * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
+                         * @enum {string}
+                         */
                         readingUnit: "mm" | "um" | "in" | "thou";
                     };
                 };
@@ -4771,9 +4980,15 @@ export interface operations {
                         accuracy: number;
                         runsUp: number;
                         runsDown: number;
-                        /** @enum {string} */
+                        /**
+                         * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
+                         * @enum {string}
+                         */
                         lengthUnit?: "mm" | "um" | "in" | "thou";
-                        /** @enum {string} */
+                        /**
+                         * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
+                         * @enum {string}
+                         */
                         readingUnit?: "mm" | "um" | "in" | "thou";
                     };
                 };
@@ -4842,9 +5057,15 @@ export interface operations {
                         mountingFactor: number;
                         dnLimit: number;
                         source: string;
-                        /** @enum {string} */
+                        /**
+                         * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
+                         * @enum {string}
+                         */
                         lengthUnit: "mm" | "um" | "in" | "thou";
-                        /** @enum {string} */
+                        /**
+                         * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
+                         * @enum {string}
+                         */
                         readingUnit: "mm" | "um" | "in" | "thou";
                     };
                 };
@@ -4914,9 +5135,15 @@ export interface operations {
                             reading: number | null;
                         }[];
                         nextHole: number | null;
-                        /** @enum {string} */
+                        /**
+                         * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
+                         * @enum {string}
+                         */
                         lengthUnit: "mm" | "um" | "in" | "thou";
-                        /** @enum {string} */
+                        /**
+                         * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
+                         * @enum {string}
+                         */
                         readingUnit: "mm" | "um" | "in" | "thou";
                     };
                 };
@@ -4984,9 +5211,15 @@ export interface operations {
                         }[];
                         marginPerSide: number;
                         coversAll: boolean;
-                        /** @enum {string} */
+                        /**
+                         * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
+                         * @enum {string}
+                         */
                         lengthUnit: "mm" | "um" | "in" | "thou";
-                        /** @enum {string} */
+                        /**
+                         * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
+                         * @enum {string}
+                         */
                         readingUnit: "mm" | "um" | "in" | "thou";
                     };
                 };
@@ -5048,6 +5281,7 @@ export interface operations {
                             scale: number;
                             error: number;
                             errorPercent: number;
+                            /** @description In mm. */
                             correctedStepsPerMm: number | null;
                             correctedStepsPerIn: number | null;
                         };
@@ -5055,11 +5289,13 @@ export interface operations {
                             scale: number;
                             error: number;
                             errorPercent: number;
+                            /** @description In mm. */
                             correctedStepsPerMm: number | null;
                             correctedStepsPerIn: number | null;
                         };
                         squareness: {
                             warnings: components["schemas"]["ResultWarning"][];
+                            /** @description In degrees. */
                             outOfSquareDeg: number;
                             outOfSquareArcsec: number;
                             mmPerMetre: number;
@@ -5078,9 +5314,15 @@ export interface operations {
                             backlashEstimate: number | null;
                         } | null;
                         notes: string[];
-                        /** @enum {string} */
+                        /**
+                         * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
+                         * @enum {string}
+                         */
                         lengthUnit: "mm" | "um" | "in" | "thou";
-                        /** @enum {string} */
+                        /**
+                         * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
+                         * @enum {string}
+                         */
                         readingUnit: "mm" | "um" | "in" | "thou";
                     };
                 };
@@ -5528,6 +5770,7 @@ export interface operations {
                             at: number | null;
                             differences: number[] | null;
                             spacing: number | null;
+                            /** @description In mm. */
                             kUmPerMm: number | null;
                             permissible: number | null;
                             targetText: string | null;
@@ -5568,6 +5811,7 @@ export interface operations {
                             at: number | null;
                             differences: number[] | null;
                             spacing: number | null;
+                            /** @description In mm. */
                             kUmPerMm: number | null;
                             permissible: number | null;
                             targetText: string | null;
@@ -5615,6 +5859,7 @@ export interface operations {
                             at: number | null;
                             differences: number[] | null;
                             spacing: number | null;
+                            /** @description In mm. */
                             kUmPerMm: number | null;
                             permissible: number | null;
                             targetText: string | null;
@@ -5658,6 +5903,7 @@ export interface operations {
                             at: number | null;
                             differences: number[] | null;
                             spacing: number | null;
+                            /** @description In mm. */
                             kUmPerMm: number | null;
                             permissible: number | null;
                             targetText: string | null;
@@ -6944,6 +7190,7 @@ export interface operations {
                             squareness: components["schemas"]["JudgedTarget"];
                         };
                         plateThickness: number | null;
+                        /** @description In mm. */
                         plateThicknessMm: number | null;
                         resolution: number | null;
                         nominal: {
@@ -6993,6 +7240,7 @@ export interface operations {
                             squareness: components["schemas"]["JudgedTarget"];
                         };
                         plateThickness: number | null;
+                        /** @description In mm. */
                         plateThicknessMm: number | null;
                         resolution: number | null;
                         nominal: {
@@ -7095,6 +7343,7 @@ export interface operations {
                             squareness: components["schemas"]["JudgedTarget"];
                         };
                         plateThickness: number | null;
+                        /** @description In mm. */
                         plateThicknessMm: number | null;
                         resolution: number | null;
                         nominal: {
@@ -7144,6 +7393,7 @@ export interface operations {
                             squareness: components["schemas"]["JudgedTarget"];
                         };
                         plateThickness: number | null;
+                        /** @description In mm. */
                         plateThicknessMm: number | null;
                         resolution: number | null;
                         nominal: {
@@ -8221,22 +8471,28 @@ export interface operations {
                         motorStepsPerRev: number;
                         microsteps: number;
                         gearRatio: number;
+                        /** @description In mm. */
                         stepsPerMm: number;
+                        /** @description In mm. */
                         theoreticalStepsPerMm: number;
                         /** @description Value in use against the drive's theoretical value, %. */
                         stepsPerMmDifferencePercent: number;
                         /** @description Steps per inch (× 25.4), shown beside steps per mm for axes set up in inches. */
                         stepsPerInch: number;
                         theoreticalStepsPerInch: number;
+                        /** @description In mm. */
                         travelPerRevMm: number;
                         /** @description Travel per revolution in lengthUnit. */
                         travelPerRev: number;
+                        /** @description In mm. */
                         resolutionMm: number;
                         /** @description Fastest feed, lengthUnit per minute. */
                         maxFeedRate: number | null;
+                        /** @description In mm per minute. */
                         maxFeedRateMmPerMin: number | null;
                         /** @description Measured travel in lengthUnit. */
                         measuredTravel: number | null;
+                        /** @description In mm. */
                         measuredTravelMm: number | null;
                         notes: string;
                         stepsHistory: components["schemas"]["StepsChange"][];
@@ -8666,13 +8922,16 @@ export interface operations {
                         id: string;
                         axisId: string;
                         machineId: string;
+                        /** @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly). */
                         lengthUnit: string;
+                        /** @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly). */
                         readingUnit: string;
                         stepsPerMmUsed: number;
                         throughOrigin: boolean;
                         moveCount: number;
                         warnings: components["schemas"]["ResultWarning"][];
                         result: {
+                            /** @description In mm. */
                             correctedStepsPerMm: number;
                             errorPercent: number;
                             scale: number;
@@ -8750,6 +9009,7 @@ export interface operations {
                             measured: number;
                         }[];
                         result: {
+                            /** @description In mm. */
                             correctedStepsPerMm: number;
                             errorPercent: number;
                             scale: number;
@@ -8777,9 +9037,15 @@ export interface operations {
                         id: string;
                         axisId: string;
                         machineId: string;
-                        /** @enum {string} */
+                        /**
+                         * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
+                         * @enum {string}
+                         */
                         lengthUnit: "mm" | "um" | "in" | "thou";
-                        /** @enum {string} */
+                        /**
+                         * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
+                         * @enum {string}
+                         */
                         readingUnit: "mm" | "um" | "in" | "thou";
                     };
                 };
@@ -8865,6 +9131,7 @@ export interface operations {
                             measured: number;
                         }[];
                         result: {
+                            /** @description In mm. */
                             correctedStepsPerMm: number;
                             errorPercent: number;
                             scale: number;
@@ -8892,9 +9159,15 @@ export interface operations {
                         id: string;
                         axisId: string;
                         machineId: string;
-                        /** @enum {string} */
+                        /**
+                         * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
+                         * @enum {string}
+                         */
                         lengthUnit: "mm" | "um" | "in" | "thou";
-                        /** @enum {string} */
+                        /**
+                         * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
+                         * @enum {string}
+                         */
                         readingUnit: "mm" | "um" | "in" | "thou";
                     };
                 };
@@ -9095,7 +9368,9 @@ export interface operations {
                         id: string;
                         axisId: string;
                         machineId: string;
+                        /** @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly). */
                         lengthUnit: string;
+                        /** @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly). */
                         readingUnit: string;
                         targetCount: number;
                         warnings: components["schemas"]["ResultWarning"][];
@@ -9109,18 +9384,21 @@ export interface operations {
                             accuracy: {
                                 value: number;
                                 target: components["schemas"]["TargetValue"];
+                                /** @description In mm. */
                                 targetMm: number;
                                 pass: boolean;
                             };
                             repeatability: {
                                 value: number;
                                 target: components["schemas"]["TargetValue"];
+                                /** @description In mm. */
                                 targetMm: number;
                                 pass: boolean;
                             };
                             reversal: {
                                 value: number;
                                 target: components["schemas"]["TargetValue"];
+                                /** @description In mm. */
                                 targetMm: number;
                                 pass: boolean;
                             };
@@ -9224,9 +9502,15 @@ export interface operations {
                             accuracy: number;
                             runsUp: number;
                             runsDown: number;
-                            /** @enum {string} */
+                            /**
+                             * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
+                             * @enum {string}
+                             */
                             lengthUnit?: "mm" | "um" | "in" | "thou";
-                            /** @enum {string} */
+                            /**
+                             * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
+                             * @enum {string}
+                             */
                             readingUnit?: "mm" | "um" | "in" | "thou";
                         } | null;
                         warnings: components["schemas"]["ResultWarning"][];
@@ -9234,18 +9518,21 @@ export interface operations {
                             accuracy: {
                                 value: number;
                                 target: components["schemas"]["TargetValue"];
+                                /** @description In mm. */
                                 targetMm: number;
                                 pass: boolean;
                             };
                             repeatability: {
                                 value: number;
                                 target: components["schemas"]["TargetValue"];
+                                /** @description In mm. */
                                 targetMm: number;
                                 pass: boolean;
                             };
                             reversal: {
                                 value: number;
                                 target: components["schemas"]["TargetValue"];
+                                /** @description In mm. */
                                 targetMm: number;
                                 pass: boolean;
                             };
@@ -9260,9 +9547,15 @@ export interface operations {
                         id: string;
                         axisId: string;
                         machineId: string;
-                        /** @enum {string} */
+                        /**
+                         * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
+                         * @enum {string}
+                         */
                         lengthUnit: "mm" | "um" | "in" | "thou";
-                        /** @enum {string} */
+                        /**
+                         * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
+                         * @enum {string}
+                         */
                         readingUnit: "mm" | "um" | "in" | "thou";
                     };
                 };
@@ -9376,9 +9669,15 @@ export interface operations {
                             accuracy: number;
                             runsUp: number;
                             runsDown: number;
-                            /** @enum {string} */
+                            /**
+                             * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
+                             * @enum {string}
+                             */
                             lengthUnit?: "mm" | "um" | "in" | "thou";
-                            /** @enum {string} */
+                            /**
+                             * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
+                             * @enum {string}
+                             */
                             readingUnit?: "mm" | "um" | "in" | "thou";
                         } | null;
                         warnings: components["schemas"]["ResultWarning"][];
@@ -9386,18 +9685,21 @@ export interface operations {
                             accuracy: {
                                 value: number;
                                 target: components["schemas"]["TargetValue"];
+                                /** @description In mm. */
                                 targetMm: number;
                                 pass: boolean;
                             };
                             repeatability: {
                                 value: number;
                                 target: components["schemas"]["TargetValue"];
+                                /** @description In mm. */
                                 targetMm: number;
                                 pass: boolean;
                             };
                             reversal: {
                                 value: number;
                                 target: components["schemas"]["TargetValue"];
+                                /** @description In mm. */
                                 targetMm: number;
                                 pass: boolean;
                             };
@@ -9412,9 +9714,15 @@ export interface operations {
                         id: string;
                         axisId: string;
                         machineId: string;
-                        /** @enum {string} */
+                        /**
+                         * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
+                         * @enum {string}
+                         */
                         lengthUnit: "mm" | "um" | "in" | "thou";
-                        /** @enum {string} */
+                        /**
+                         * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
+                         * @enum {string}
+                         */
                         readingUnit: "mm" | "um" | "in" | "thou";
                     };
                 };
@@ -9663,6 +9971,7 @@ export interface operations {
                     "application/json": {
                         warnings: components["schemas"]["ResultWarning"][];
                         target: {
+                            /** @description In mm. */
                             valueMm: number;
                             value: number;
                             /** @enum {string} */
@@ -9679,9 +9988,15 @@ export interface operations {
                         id: string;
                         axisId: string;
                         machineId: string;
-                        /** @enum {string} */
+                        /**
+                         * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
+                         * @enum {string}
+                         */
                         lengthUnit: "mm" | "um" | "in" | "thou";
-                        /** @enum {string} */
+                        /**
+                         * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
+                         * @enum {string}
+                         */
                         readingUnit: "mm" | "um" | "in" | "thou";
                         positions: components["schemas"]["BacklashPositionRecord"][];
                         resolution: number | null;
@@ -9689,18 +10004,23 @@ export interface operations {
                         result: {
                             /** @description The largest, in readingUnit and in mm. */
                             backlash: number;
+                            /** @description In mm. */
                             backlashMm: number;
                             worstPosition: number;
+                            /** @description In mm. */
                             worstPositionMm: number;
                             meanBacklash: number;
+                            /** @description In mm. */
                             meanBacklashMm: number;
                             positions: {
                                 position: number;
+                                /** @description In mm. */
                                 positionMm: number;
                                 meanUp: number;
                                 meanDown: number;
                                 reversal: number;
                                 backlash: number;
+                                /** @description In mm. */
                                 backlashMm: number;
                                 approachesUp: number;
                                 approachesDown: number;
@@ -9764,6 +10084,7 @@ export interface operations {
                     "application/json": {
                         warnings: components["schemas"]["ResultWarning"][];
                         target: {
+                            /** @description In mm. */
                             valueMm: number;
                             value: number;
                             /** @enum {string} */
@@ -9780,9 +10101,15 @@ export interface operations {
                         id: string;
                         axisId: string;
                         machineId: string;
-                        /** @enum {string} */
+                        /**
+                         * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
+                         * @enum {string}
+                         */
                         lengthUnit: "mm" | "um" | "in" | "thou";
-                        /** @enum {string} */
+                        /**
+                         * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
+                         * @enum {string}
+                         */
                         readingUnit: "mm" | "um" | "in" | "thou";
                         positions: components["schemas"]["BacklashPositionRecord"][];
                         resolution: number | null;
@@ -9790,18 +10117,23 @@ export interface operations {
                         result: {
                             /** @description The largest, in readingUnit and in mm. */
                             backlash: number;
+                            /** @description In mm. */
                             backlashMm: number;
                             worstPosition: number;
+                            /** @description In mm. */
                             worstPositionMm: number;
                             meanBacklash: number;
+                            /** @description In mm. */
                             meanBacklashMm: number;
                             positions: {
                                 position: number;
+                                /** @description In mm. */
                                 positionMm: number;
                                 meanUp: number;
                                 meanDown: number;
                                 reversal: number;
                                 backlash: number;
+                                /** @description In mm. */
                                 backlashMm: number;
                                 approachesUp: number;
                                 approachesDown: number;
@@ -9880,6 +10212,7 @@ export interface operations {
                     "application/json": {
                         warnings: components["schemas"]["ResultWarning"][];
                         target: {
+                            /** @description In mm. */
                             valueMm: number;
                             value: number;
                             /** @enum {string} */
@@ -9896,9 +10229,15 @@ export interface operations {
                         id: string;
                         axisId: string;
                         machineId: string;
-                        /** @enum {string} */
+                        /**
+                         * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
+                         * @enum {string}
+                         */
                         lengthUnit: "mm" | "um" | "in" | "thou";
-                        /** @enum {string} */
+                        /**
+                         * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
+                         * @enum {string}
+                         */
                         readingUnit: "mm" | "um" | "in" | "thou";
                         positions: components["schemas"]["BacklashPositionRecord"][];
                         resolution: number | null;
@@ -9906,18 +10245,23 @@ export interface operations {
                         result: {
                             /** @description The largest, in readingUnit and in mm. */
                             backlash: number;
+                            /** @description In mm. */
                             backlashMm: number;
                             worstPosition: number;
+                            /** @description In mm. */
                             worstPositionMm: number;
                             meanBacklash: number;
+                            /** @description In mm. */
                             meanBacklashMm: number;
                             positions: {
                                 position: number;
+                                /** @description In mm. */
                                 positionMm: number;
                                 meanUp: number;
                                 meanDown: number;
                                 reversal: number;
                                 backlash: number;
+                                /** @description In mm. */
                                 backlashMm: number;
                                 approachesUp: number;
                                 approachesDown: number;

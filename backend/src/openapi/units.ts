@@ -1,0 +1,54 @@
+import type { OpenAPIObject, ReferenceObject, SchemaObject } from '@nestjs/swagger';
+
+/**
+ * Units the names already carry (the code's rule: "names carry units where a number has one"),
+ * written into the description where the type's own comment did not say it.
+ */
+const NAMED_UNITS: [RegExp, string, RegExp][] = [
+  [/MmPerMin$/, 'In mm per minute.', /mm per min|mm\/min/i],
+  [/MmPerM$/, 'In mm per metre.', /mm per m|mm\/m/i],
+  [/Mm$/, 'In mm.', /\bmm\b|millimetres/i],
+  [/Um$/, 'In µm.', /µm|\bum\b|micromet/i],
+  [/Degrees$|Deg$/, 'In degrees.', /degree/i],
+  [/Seconds$/, 'In seconds.', /second/i],
+  [/Celsius$|C$/, 'In °C.', /°C|celsius/i],
+];
+
+const FAMILIES: Record<string, string> = {
+  lengthUnit:
+    'Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).',
+  readingUnit: 'Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).',
+};
+
+function describeProperty(name: string, schema: SchemaObject | ReferenceObject): SchemaObject | ReferenceObject {
+  if ('$ref' in schema) return schema;
+  if (name in FAMILIES && !schema.description) return { ...schema, description: FAMILIES[name] };
+  const isNumber = schema.type === 'number' || schema.type === 'integer' || (schema.type === 'array' && !!schema.items && 'type' in schema.items && schema.items.type === 'number');
+  if (!isNumber) return schema;
+  for (const [pattern, text, said] of NAMED_UNITS) {
+    if (!pattern.test(name)) continue;
+    if (schema.description && said.test(schema.description)) return schema;
+    return { ...schema, description: schema.description ? `${schema.description} ${text}` : text };
+  }
+  return schema;
+}
+
+function walk(value: unknown): void {
+  if (Array.isArray(value)) {
+    value.forEach(walk);
+    return;
+  }
+  if (!value || typeof value !== 'object') return;
+  const record = value as Record<string, unknown>;
+  if (record.properties && typeof record.properties === 'object' && record.type === 'object') {
+    const props = record.properties as Record<string, SchemaObject | ReferenceObject>;
+    for (const key of Object.keys(props)) props[key] = describeProperty(key, props[key]);
+  }
+  for (const v of Object.values(record)) walk(v);
+}
+
+/** Names the unit of every number whose name carries one, and what the two unit fields mean. */
+export function describeNamedUnits(document: OpenAPIObject): void {
+  walk(document.components?.schemas);
+  walk(document.paths);
+}
