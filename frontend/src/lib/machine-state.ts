@@ -1,2 +1,4 @@
+import type { Schemas } from './api/schemas';
+
 /** Where a machine stands; shown by the machines feature and judged by approvals. */
-export type MachineState = 'being-built' | 'awaiting-approval' | 'ready-to-cut' | 'recheck-due' | 'reopened' | 'retired';
+export type MachineState = Schemas['MachineResponse']['state'];

@@ -1,22 +1,8 @@
-/** One entry of a history as the server sends it (machine or workshop). */
-export interface HistoryEntry {
-  id: string;
-  at: string;
-  actor: string;
-  kind: string;
-  recordType: string;
-  recordId: string | null;
-  machine: { id: string; name: string } | null;
-  action: string;
-  summary: string;
-  changes: Record<string, unknown> | null;
-  fieldChanges: { record: string; operation: 'created' | 'changed' | 'deleted'; field: string; before: unknown; after: unknown }[];
-}
+import type { Schemas } from '../../lib/api/schemas';
 
-export interface HistoryPage {
-  entries: HistoryEntry[];
-  nextCursor: string | null;
-}
+/** One entry of a history as the server sends it (machine or workshop). */
+export type HistoryEntry = Schemas['HistoryEntryResponse'];
+export type HistoryPage = Schemas['HistoryPage'];
 
 /** The filters a reader sets; dates are local calendar days (yyyy-mm-dd). */
 export interface HistoryFilters {
@@ -28,13 +14,14 @@ export interface HistoryFilters {
 
 export const NO_FILTERS: HistoryFilters = { kind: '', person: '', fromDay: '', toDay: '' };
 
-/** The query string of a page: local days become instants with the reader's zone. */
-export function historyQuery(filters: HistoryFilters, cursor: string | null, limit = 25): string {
-  const q = new URLSearchParams({ limit: String(limit) });
-  if (filters.kind) q.set('kind', filters.kind);
-  if (filters.person.trim()) q.set('person', filters.person.trim());
-  if (filters.fromDay) q.set('from', new Date(`${filters.fromDay}T00:00:00`).toISOString());
-  if (filters.toDay) q.set('to', new Date(`${filters.toDay}T23:59:59.999`).toISOString());
-  if (cursor) q.set('cursor', cursor);
-  return q.toString();
+/** The query of a page: local days become instants with the reader's zone. */
+export function historyQuery(filters: HistoryFilters, cursor: string | null, limit = 25) {
+  return {
+    limit,
+    kind: filters.kind || undefined,
+    person: filters.person.trim() || undefined,
+    from: filters.fromDay ? new Date(`${filters.fromDay}T00:00:00`).toISOString() : undefined,
+    to: filters.toDay ? new Date(`${filters.toDay}T23:59:59.999`).toISOString() : undefined,
+    cursor: cursor ?? undefined,
+  };
 }

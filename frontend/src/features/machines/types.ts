@@ -1,28 +1,9 @@
-import type { LengthUnit } from '../../lib/units';
+import type { Schemas } from '../../lib/api/schemas';
 import type { MachineState } from '../../lib/machine-state';
 
-export type MachineKind = 'plasma' | 'router' | 'other';
-
-export interface Machine {
-  id: string;
-  name: string;
-  kind: MachineKind;
-  state: MachineState;
-  /** In mm. */
-  workArea: { x: number; y: number };
-  /** The unit the work area was typed in and is shown in. */
-  lengthUnit: LengthUnit;
-  workAreaInLengthUnit: { x: number; y: number };
-  notes: string;
-  targetSet: { id: string; name: string };
-  lastActivityAt: string;
-  createdAt: string;
-  updatedAt: string;
-}
-
-export interface MachineListItem extends Machine {
-  checks: { within: number; total: number; outside: number };
-}
+export type Machine = Schemas['MachineResponse'];
+export type MachineListItem = Schemas['MachineListItem'];
+export type MachineKind = Machine['kind'];
 
 export const KIND_LABELS: Record<MachineKind, string> = { plasma: 'Plasma table', router: 'Router', other: 'Other' };
 

@@ -1,14 +1,6 @@
-import type { Role } from '../../lib/session/user';
+import type { Schemas } from '../../lib/api/schemas';
 
-export interface Person {
-  id: string;
-  email: string;
-  name: string;
-  role: Role;
-  active: boolean;
-  /** Invited and not signed up yet: only then can the invitation be sent again. */
-  invitationPending: boolean;
-  createdAt: string;
-}
+/** A member; `invitationPending`: invited and not signed up yet, only then can the invitation be sent again. */
+export type Person = Schemas['PersonResponse'];
 
 export const peopleKeys = { all: ['people'] as const };

@@ -1,5 +1,5 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { ApiError, api } from '../api-client';
+import { ApiError, answer, client } from '../api-client';
 import type { User } from './user';
 
 export const authKeys = { me: ['auth', 'me'] as const };
@@ -7,7 +7,7 @@ export const authKeys = { me: ['auth', 'me'] as const };
 /** The signed-in user, or null when signed out (401 is an answer here, not an error). */
 export async function getMe(): Promise<User | null> {
   try {
-    return (await api.get<{ user: User }>('/auth/me')).user;
+    return (await answer(client.GET('/api/auth/me'))).user;
   } catch (e) {
     if (e instanceof ApiError && e.status === 401) return null;
     throw e;

@@ -1,9 +1,5 @@
-export type Role = 'admin' | 'owner' | 'technician' | 'builder' | 'viewer';
+import type { Schemas } from '../api/schemas';
 
-export interface User {
-  id: string;
-  email: string;
-  name: string;
-  role: Role;
-  workshop: { id: string; name: string };
-}
+/** The signed-in person, as GET /api/auth/me answers. */
+export type User = Schemas['UserResponse'];
+export type Role = User['role'];

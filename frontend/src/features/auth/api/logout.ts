@@ -1,5 +1,5 @@
 import { onlineManager, useMutation, useQueryClient } from '@tanstack/react-query';
-import { api, ApiError } from '../../../lib/api-client';
+import { ApiError, client } from '../../../lib/api-client';
 import type { QueryClient } from '@tanstack/react-query';
 import { authKeys } from '../../../lib/session/get-me';
 
@@ -13,7 +13,7 @@ export function useLogout() {
     networkMode: 'always',
     mutationFn: async () => {
       if (!onlineManager.isOnline()) throw new ApiError(0, 'You are offline: signing out needs the connection. Entries you typed stay on this device and are sent when it returns.');
-      await api.post<void>('/auth/logout');
+      await client.POST('/api/auth/logout');
     },
     onSuccess: () => signedOut(qc),
     // Already signed out on the server (401): the screen follows.

@@ -1,12 +1,12 @@
 import { infiniteQueryOptions, useInfiniteQuery } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
-import { historyQuery, type HistoryFilters, type HistoryPage } from '../../../components/history/history-types';
+import { answer, client } from '../../../lib/api-client';
+import { historyQuery, type HistoryFilters } from '../../../components/history/history-types';
 import { historyKeys } from '../types';
 
 export const workshopHistoryQueryOptions = (filters: HistoryFilters) =>
   infiniteQueryOptions({
     queryKey: historyKeys.list(filters),
-    queryFn: ({ pageParam }) => api.get<HistoryPage>(`/history?${historyQuery(filters, pageParam)}`),
+    queryFn: ({ pageParam }) => answer(client.GET('/api/history', { params: { query: historyQuery(filters, pageParam) } })),
     initialPageParam: null as string | null,
     getNextPageParam: (last) => last.nextCursor,
   });

@@ -1,8 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { answer, client } from '../../../lib/api-client';
 import { machineKeys } from '../../../lib/machine-keys';
-import type { MachineListItem } from '../types';
 
-export const machinesQueryOptions = () => queryOptions({ queryKey: machineKeys.list(), queryFn: () => api.get<MachineListItem[]>('/machines') });
+export const machinesQueryOptions = () => queryOptions({ queryKey: machineKeys.list(), queryFn: () => answer(client.GET('/api/machines')) });
 
 export const useMachines = () => useQuery(machinesQueryOptions());

@@ -1,15 +1,12 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { answer, client } from '../../../lib/api-client';
+import type { Schemas } from '../../../lib/api/schemas';
 
-export interface TargetSetChoice {
-  id: string;
-  name: string;
-  description: string;
-}
+export type TargetSetChoice = Pick<Schemas['TargetSetResponse'], 'id' | 'name' | 'description'>;
 
 // Same key as the target sets page, so both read one cached list.
 export const targetSetChoicesQueryOptions = () =>
-  queryOptions({ queryKey: ['target-sets', 'list'] as const, queryFn: () => api.get<TargetSetChoice[]>('/target-sets') });
+  queryOptions({ queryKey: ['target-sets', 'list'] as const, queryFn: () => answer(client.GET('/api/target-sets')) });
 
 /** The workshop's target sets, to pick one for a machine. */
 export const useTargetSetChoices = () => useQuery(targetSetChoicesQueryOptions());

@@ -7,6 +7,7 @@ import type { CreateMachineInput } from './create-machine';
 export function useUpdateMachine(id: string) {
   const qc = useQueryClient();
   return useMutation({
+    // Untyped until the description gives UpdateMachineDto its fields.
     mutationFn: (patch: Partial<CreateMachineInput>) => api.patch<Machine>(`/machines/${id}`, patch),
     onSuccess: (machine) => {
       qc.setQueryData(machineKeys.detail(id), machine);

@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
-import { peopleKeys, type Person } from '../types';
+import { answer, client } from '../../../lib/api-client';
+import { peopleKeys } from '../types';
 
-export const peopleQueryOptions = () => queryOptions({ queryKey: peopleKeys.all, queryFn: () => api.get<Person[]>('/people') });
+export const peopleQueryOptions = () => queryOptions({ queryKey: peopleKeys.all, queryFn: () => answer(client.GET('/api/people')) });
 
 export const usePeople = () => useQuery(peopleQueryOptions());

@@ -1,9 +1,5 @@
 import { useMutation } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { answer, client } from '../../../lib/api-client';
 
-export interface InvitationResult {
-  invitationSent: boolean;
-  invitationExpiresAt: string;
-}
-
-export const useResendInvitation = () => useMutation({ mutationFn: (id: string) => api.post<InvitationResult>(`/people/${id}/invitation`) });
+export const useResendInvitation = () =>
+  useMutation({ mutationFn: (id: string) => answer(client.POST('/api/people/{id}/invitation', { params: { path: { id } } })) });

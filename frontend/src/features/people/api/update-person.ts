@@ -1,12 +1,12 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { answer, client } from '../../../lib/api-client';
 import type { Schemas } from '../../../lib/api/schemas';
-import { peopleKeys, type Person } from '../types';
+import { peopleKeys } from '../types';
 
 export function useUpdatePerson() {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: ({ id, ...patch }: { id: string } & Schemas['UpdatePersonDto']) => api.patch<Person>(`/people/${id}`, patch),
+    mutationFn: ({ id, ...body }: { id: string } & Schemas['UpdatePersonDto']) => answer(client.PATCH('/api/people/{id}', { params: { path: { id } }, body })),
     onSettled: () => qc.invalidateQueries({ queryKey: peopleKeys.all }),
   });
 }
