@@ -3,7 +3,7 @@ import { randomUUID } from 'node:crypto';
 import pg from 'pg';
 import { PG_POOL } from '../src/database/database.tokens.js';
 import { createTestApp, createTestWorkshop, TEST_PASSWORD, type Agent, type TestWorkshop } from './helpers/test-app.js';
-import { newAxis, newMachine, screwAxis } from './helpers/drives.js';
+import { newMachine, screwAxis } from './helpers/drives.js';
 import { STATEMENT, waiveAllBut } from './support/approval-flow.js';
 import { makePng } from './evidence-fixtures.js';
 

@@ -30,7 +30,7 @@ function expectSafeProgram(text: string, letter: string, travelMm: number, units
     expect(m.toMm).toBeLessThanOrEqual(travelMm + 1e-6);
   }
   // Every comment is whole: nothing in it could end it early or open another.
-  for (const b of run.blocks) for (const c of b.comments) expect(c).not.toMatch(/[()\[\];%\r\n]/);
+  for (const b of run.blocks) for (const c of b.comments) expect(c).not.toMatch(/[()[\];%\r\n]/);
   expect(text).not.toMatch(/\r/);
   return run;
 }

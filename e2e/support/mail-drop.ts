@@ -10,7 +10,7 @@ export async function linkMailedTo(email: string, subject?: RegExp): Promise<str
   let link: string | null = null;
   await expect
     .poll(() => {
-      let files: string[] = [];
+      let files: string[];
       try {
         files = readdirSync(dropFolder()).sort().reverse();
       } catch {

@@ -1,7 +1,9 @@
 import { create } from 'content-disposition';
 const MAX_NAME_CHARS = 120;
 
-// C0/C1 control characters and the bidirectional overrides that can disguise an extension.
+// C0/C1 control characters and the bidirectional overrides that can disguise an extension
+// (control characters are what it looks for, so the lint rule against them is off here).
+// eslint-disable-next-line no-control-regex
 const UNSAFE_CHARS = /[\u0000-\u001f\u007f-\u009f\u200e\u200f\u202a-\u202e\u2066-\u2069]/g;
 
 /**

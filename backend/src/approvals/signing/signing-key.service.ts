@@ -30,7 +30,7 @@ export function loadOrCreateKey(file: string): { key: KeyObject; created: boolea
   try {
     return { key: createPrivateKey(readFileSync(file, 'utf8')), created: false };
   } catch (err) {
-    if ((err as NodeJS.ErrnoException).code !== 'ENOENT') throw new Error(`The signing key ${file} cannot be read: ${(err as Error).message}`);
+    if ((err as NodeJS.ErrnoException).code !== 'ENOENT') throw new Error(`The signing key ${file} cannot be read: ${(err as Error).message}`, { cause: err });
   }
   mkdirSync(path.dirname(file), { recursive: true, mode: 0o700 });
   const { privateKey } = generateKeyPairSync('ed25519');

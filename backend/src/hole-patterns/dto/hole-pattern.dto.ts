@@ -3,7 +3,7 @@ import { ReplacedUnitField } from '../../rails/dto/replaced-unit.js';
 import { Type } from 'class-transformer';
 import { ArrayMaxSize, ArrayMinSize, IsArray, IsIn, IsInt, IsNumber, IsObject, IsString, Max, MaxLength, Min, MinLength, ValidateIf, ValidateNested } from 'class-validator';
 import { Optional } from '../../common/optional.js';
-import { PATTERN_ENTRIES, PATTERN_REFERENCES, PATTERN_UNITS, type PatternEntryKind, type PatternReference, type PatternUnit } from '../../database/schema/hole-patterns.js';
+import { PATTERN_ENTRIES, PATTERN_REFERENCES, type PatternEntryKind, type PatternReference, type PatternUnit } from '../../database/schema/hole-patterns.js';
 import { ApiHideProperty } from '@nestjs/swagger';
 
 const FINITE = { allowNaN: false, allowInfinity: false } as const;

@@ -67,7 +67,7 @@ function parseCairoSvg(svg: string): ReadPage {
     const path = d.trim();
     const cross = CROSS.exec(path);
     if (cross && width === 0.25) {
-      const [x1, y1, x2, y2, x3, y3, x4, y4] = cross.slice(1).map(Number);
+      const [_x1, y1, _x2, y2, x3, _y3, x4, _y4] = cross.slice(1).map(Number);
       if (y1 === y2 && x3 === x4) page.crosshairs.push({ x: x3, y: y1 });
       continue;
     }

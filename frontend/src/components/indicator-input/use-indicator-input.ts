@@ -1,4 +1,4 @@
-import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
+import { useCallback, useEffect, useLayoutEffect, useMemo, useRef, useState } from 'react';
 import { UNIT_LABELS, type LengthUnit } from '../../lib/units';
 import { KeyboardBurst } from './keyboard-burst';
 import { parseReadingLine, readingInUnit, type LineFormat } from './parse-reading';
@@ -65,7 +65,9 @@ export function useIndicatorInput({ unit, place, enterMovesOn = true }: { unit: 
   const container = useRef<HTMLElement | null>(null);
   // The latest props and state, read by the listeners without re-subscribing on every render.
   const live = useRef({ unit, place, enterMovesOn, capture, lineFormat });
-  live.current = { unit, place, enterMovesOn, capture, lineFormat };
+  useLayoutEffect(() => {
+    live.current = { unit, place, enterMovesOn, capture, lineFormat };
+  });
 
   // Readings wait in a queue and are placed one per render, so each sees the cells the one before
   // it filled (a serial chunk often carries several lines at once).
@@ -75,6 +77,9 @@ export function useIndicatorInput({ unit, place, enterMovesOn = true }: { unit: 
     queue.current.push({ line, cell, format });
     setQueued((n) => n + 1);
   }, []);
+  // After every render on purpose: one reading per render until the queue is empty (it only
+  // shrinks here, so the chain of renders ends).
+  // eslint-disable-next-line react-hooks/exhaustive-deps
   useEffect(() => {
     const next = queue.current.shift();
     if (!next) return;
@@ -149,7 +154,9 @@ export function useIndicatorInput({ unit, place, enterMovesOn = true }: { unit: 
     container.current = el;
   }, []);
   const lastRef = useRef(last);
-  lastRef.current = last;
+  useLayoutEffect(() => {
+    lastRef.current = last;
+  });
   const undo = useCallback(() => {
     const a = lastRef.current;
     if (!a) return;

@@ -21,7 +21,7 @@ async function downloadTestProgram(axisId: string, params: TestProgramParams): P
   }
   const text = await res.text();
   if (!res.ok) {
-    let details: string[] = [];
+    let details: string[];
     try {
       const m = JSON.parse(text).message;
       details = Array.isArray(m) ? m.map(String) : [String(m)];

@@ -1,4 +1,4 @@
-import { useEffect, useState } from 'react';
+import { useState } from 'react';
 import { Alert, Box, Button, Dialog, DialogActions, DialogContent, DialogTitle, Divider, Stack, TextField, Typography } from '@mui/material';
 import { useCreateAxis, type AxisInput } from '../api/create-axis';
 import { useUpdateAxis } from '../api/update-axis';
@@ -55,9 +55,13 @@ function driveOf(d: DriveDraft): Drive {
 /** Adds an axis to a machine, or edits one. */
 export function AxisFormDialog({ machineId, axis, open, onClose }: { machineId: string; axis?: Axis; open: boolean; onClose: () => void }) {
   const [f, setF] = useState(() => draftOf(axis));
-  useEffect(() => {
+  // Opened (again) or given another axis: the form starts from that axis. Set while rendering, so
+  // no render shows the previous draft.
+  const [shownFor, setShownFor] = useState({ open, axis });
+  if (shownFor.open !== open || shownFor.axis !== axis) {
+    setShownFor({ open, axis });
     if (open) setF(draftOf(axis));
-  }, [open, axis]);
+  }
   const create = useCreateAxis(machineId);
   const update = useUpdateAxis(axis?.id ?? '');
   const save = axis ? update : create;

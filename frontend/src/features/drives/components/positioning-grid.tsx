@@ -15,7 +15,7 @@ import { pasteBlock, resize, rowLabel, type RowOrder } from '../utils/run-grid';
 import { numberOf } from './number-input';
 import { UnitFamilySelect } from '../../../components/form/unit-select';
 import { fromMm } from '../../../lib/units';
-import { blankConditions, ConditionsFields, conditionsOf } from './conditions-fields';
+import { blankConditions, conditionsOf } from './conditions-fields';
 
 const cellSx = { width: 92, '& input': { textAlign: 'right', py: 0.75, px: 1 } };
 
@@ -36,7 +36,7 @@ function serverTargetsIn(st: TestTargets | undefined, unit: LengthUnit): string[
 export function PositioningGrid({ axis, onRecorded }: { axis: Axis; onRecorded: (r: PositioningRun) => void }) {
   const [unit, setUnit] = useState<LengthUnit>(axis.lengthUnit === 'in' ? 'thou' : 'mm');
   const [lengthUnit, setLengthUnit] = useState<LengthUnit>(axis.lengthUnit);
-  const [conditions, setConditions] = useState(blankConditions);
+  const [conditions] = useState(blankConditions);
   const serverTargets = useTestTargets(axis.id);
   const [chosenRuns, setRuns] = useState<number | null>(null);
   const runs = chosenRuns ?? serverTargets.data?.runs ?? 5;

@@ -1,4 +1,4 @@
-import { Alert, Box, Paper, Table, TableBody, TableCell, TableHead, TableRow, Typography } from '@mui/material';
+import { Box, Paper, Table, TableBody, TableCell, TableHead, TableRow, Typography } from '@mui/material';
 import { PositioningChart } from '../../../components/charts/positioning-chart';
 import { fromMm, UNIT_LABELS } from '../../../lib/units';
 import type { PositioningRun, Verdict } from '../types';

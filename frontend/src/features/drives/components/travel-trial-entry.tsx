@@ -1,4 +1,4 @@
-import { useEffect, useState } from 'react';
+import { useState } from 'react';
 import { Alert, Box, Button, Checkbox, FormControlLabel, IconButton, Paper, Stack, Table, TableBody, TableCell, TableHead, TableRow, TextField, Typography } from '@mui/material';
 import AddOutlined from '@mui/icons-material/AddOutlined';
 import DeleteOutline from '@mui/icons-material/DeleteOutlined';
@@ -40,7 +40,11 @@ export function TravelTrialEntry({ axis, onRecorded }: { axis: Axis; onRecorded:
   const record = useRecordTravelTrial(axis.id, axis.name);
   const undo = useUndoRemove();
   // After a correction is applied the next (confirming) trial runs at the new value.
-  useEffect(() => setSteps(String(axis.stepsPerMm)), [axis.stepsPerMm]);
+  const [stepsFor, setStepsFor] = useState(axis.stepsPerMm);
+  if (axis.stepsPerMm !== stepsFor) {
+    setStepsFor(axis.stepsPerMm);
+    setSteps(String(axis.stepsPerMm));
+  }
 
   const filled = rows.filter((r) => r.commanded.trim() !== '' || r.measured.trim() !== '');
   const stepsOk = numberOf(steps) !== undefined && Number(steps) > 0;

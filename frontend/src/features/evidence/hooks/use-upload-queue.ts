@@ -60,6 +60,9 @@ export function useUploadQueue(subject: EvidenceSubject, limits: EvidenceLimits 
     const failed = queued.filter((q) => q.status === 'error');
     if (!failed.length) return;
     const cancelled = (e: unknown) => e instanceof ApiError && e.status === CANCELLED_STATUS;
+    // The mutation cache is an outside store: its failed uploads move into this list and are
+    // removed from the cache in the same step, so the effect is the place for both.
+    // eslint-disable-next-line react-hooks/set-state-in-effect
     setOutcomes((list) => [
       ...failed.map((q): UploadItem => ({ key: q.v.key, name: q.v.form!.fileName, sizeBytes: q.v.form!.file.size, progress: 0, status: cancelled(q.error) ? 'cancelled' : 'refused', message: q.error?.message ?? '' })),
       ...list,

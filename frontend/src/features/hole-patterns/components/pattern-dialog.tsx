@@ -4,7 +4,7 @@ import { Alert, Box, Button, Dialog, useMediaQuery, useTheme, DialogActions, Dia
 import { ApiError } from '../../../lib/api-client';
 import { useDebounced } from '../../../lib/use-debounced';
 import { usePatternPreview } from '../api/preview-hole-pattern';
-import { ENTRY_LABELS, REFERENCE_LABELS, type PatternEntry, type PatternInput, type PatternReference, type PatternUnit } from '../types';
+import { ENTRY_LABELS, REFERENCE_LABELS, type PatternEntry, type PatternInput, type PatternReference } from '../types';
 import { emptyDraft, inputOf, type PatternDraft } from '../utils/pattern-draft';
 import { EntryFields } from './entry-fields';
 import { PatternDrawing } from './pattern-drawing';

@@ -1,4 +1,4 @@
-import { useEffect, useRef, useState } from 'react';
+import { useEffect, useEffectEvent, useRef, useState } from 'react';
 import { Alert, Box, Button, Checkbox, IconButton, Paper, Snackbar, Stack, Table, TableBody, TableCell, TableHead, TableRow, Tooltip, Typography } from '@mui/material';
 import DeleteOutline from '@mui/icons-material/DeleteOutlined';
 import LockOutlined from '@mui/icons-material/LockOutlined';
@@ -62,12 +62,10 @@ export function SweepHistory({ sweeps, canRecord }: { sweeps: SweepListItem[]; c
     setDeleting(null);
   };
   // Leaving the page does not cancel a delete the person asked for.
-  useEffect(
-    () => () => {
-      if (waitingDelete.current) sendDelete(waitingDelete.current);
-    },
-    [],
-  );
+  const sendWaitingDelete = useEffectEvent(() => {
+    if (waitingDelete.current) sendDelete(waitingDelete.current);
+  });
+  useEffect(() => () => sendWaitingDelete(), []);
   const more = useSweeps(sweeps[0]?.railId ?? '');
   const full = useSweepsById([...picked, ...(open && !picked.includes(open) ? [open] : [])]);
   const shown = sweeps.filter((s) => s.id !== deleting?.id);

@@ -1,4 +1,4 @@
-import { useEffect, useState } from 'react';
+import { useState } from 'react';
 import { Box, Chip, TextField, ToggleButton, ToggleButtonGroup, Typography } from '@mui/material';
 import { palette } from '../../../theme/theme';
 import { ANSWER_LABELS, type SafetyAnswer, type WalkItem } from '../types';
@@ -9,8 +9,14 @@ const COLOURS: Record<SafetyAnswer, string> = { yes: palette.within, no: palette
 /** One item of the walk: its answer (yes / no / not applicable), a note, who answered and when. */
 export function SafetyItemRow({ item, canAnswer, busy, onAnswer }: { item: WalkItem; canAnswer: boolean; busy: boolean; onAnswer: (answer: SafetyAnswer, note: string) => void }) {
   const a = item.answer;
-  const [note, setNote] = useState(a?.note ?? '');
-  useEffect(() => setNote(a?.note ?? ''), [a?.note]);
+  const savedNote = a?.note ?? '';
+  const [note, setNote] = useState(savedNote);
+  // A newly saved note replaces what is typed; set while rendering, so no render shows the old one.
+  const [shownNote, setShownNote] = useState(savedNote);
+  if (savedNote !== shownNote) {
+    setShownNote(savedNote);
+    setNote(savedNote);
+  }
   const isNo = a?.answer === 'no';
 
   return (
