@@ -1,36 +1,17 @@
-import { recordTypeLabel } from '../records/kinds.js';
+import { RECORD_TYPE_NAMES, RECORD_TYPES, recordTypeLabel } from '../records/kinds.js';
 
 /** Plain words for what a history entry is about: the record type's label in records/kinds.ts. */
 export const kindLabel = (recordType: string): string => recordTypeLabel(recordType);
 
-/** The tables the change log names, in the same plain words. */
+/** The tables the change log names, in the same plain words: a record's table by its kind (records/kinds.ts), and the rest. */
 const TABLE_LABELS: Record<string, string> = {
   workshops: 'Workshop',
-  users: 'Person',
-  target_sets: 'Target set',
-  machines: 'Machine',
-  rails: 'Rail',
-  rail_sweeps: 'Rail sweep',
-  bolt_downs: 'Bolt-down',
   bolt_down_holes: 'Bolt-down hole',
   bolt_down_writes: 'Bolt-down reading',
-  axes: 'Axis',
-  travel_trials: 'Travel trial',
-  positioning_runs: 'Positioning run',
-  backlash_checks: 'Backlash check',
-  diagonal_checks: 'Squareness check',
-  bed_grids: 'Bed flatness',
-  test_cuts: 'Test cut',
-  safety_items: 'Safety-walk item',
-  safety_walks: 'Safety walk',
   safety_answers: 'Safety-walk answer',
-  waivers: 'Waiver',
-  approval_requests: 'Approval request',
-  approvals: 'Approval',
   record_locks: 'Approval lock',
-  evidence: 'Photo or file',
-  hole_patterns: 'Hole pattern',
   password_links: 'Password link',
+  ...Object.fromEntries(RECORD_TYPE_NAMES.flatMap((k) => { const spec: { table?: string; label: string } = RECORD_TYPES[k]; return spec.table ? [[spec.table, spec.label]] : []; })),
 };
 
 export const tableLabel = (table: string): string => TABLE_LABELS[table] ?? table.replace(/_/g, ' ');

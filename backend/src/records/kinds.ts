@@ -11,41 +11,43 @@
  */
 
 /** What one kind of record is: its plain name and what the rest of the product does with it. */
-interface RecordTypeSpec {
-  /** Plain words in history ("Travel trial"). */
+type RecordTypeSpec = {
+  /** Plain words in history ("Travel trial"); also the change log's name for its table. */
   label: string;
-  /** An approval can stand on it: it is locked and signed (approvals/signing/signed-record-kinds.ts). */
-  signed: boolean;
   /** Evidence can be attached to it; the name shown beside the file ("Repeat-and-reverse run"). */
   evidence?: string;
   /** A change to it can move a machine's readiness (the summary is recounted). */
   readiness: boolean;
   /** Offered in the history filter: of a machine (and the workshop), of the workshop only, or not at all. */
   history: 'machine' | 'workshop' | null;
-}
+} & (
+  /** An approval can stand on it: it is locked, and its row in `table` is signed (approvals/signing/). */
+  | { signed: true; table: string }
+  | { signed: false; table?: string }
+);
 
 /** Every record type the services audit, lock and attach evidence to; the order is the history filter's. */
 export const RECORD_TYPES = {
-  machine: { label: 'Machine', signed: true, evidence: 'Machine', readiness: true, history: 'machine' },
-  rail: { label: 'Rail', signed: true, evidence: 'Rail', readiness: true, history: 'machine' },
-  'rail-sweep': { label: 'Rail sweep', signed: true, evidence: 'Rail sweep', readiness: true, history: 'machine' },
-  'bolt-down': { label: 'Bolt-down', signed: true, evidence: 'Bolt-down', readiness: false, history: 'machine' },
-  axis: { label: 'Axis', signed: true, evidence: 'Axis', readiness: true, history: 'machine' },
-  'travel-trial': { label: 'Travel trial', signed: true, evidence: 'Travel trial', readiness: true, history: 'machine' },
-  'positioning-run': { label: 'Positioning run', signed: true, evidence: 'Repeat-and-reverse run', readiness: true, history: 'machine' },
-  'backlash-check': { label: 'Backlash check', signed: true, evidence: 'Backlash check', readiness: true, history: 'machine' },
-  'diagonal-check': { label: 'Squareness check', signed: true, evidence: 'Diagonal check', readiness: true, history: 'machine' },
-  'bed-grid': { label: 'Bed flatness', signed: true, evidence: 'Bed grid', readiness: true, history: 'machine' },
-  'test-cut': { label: 'Test cut', signed: true, evidence: 'Test cut', readiness: true, history: 'machine' },
-  'safety-walk': { label: 'Safety walk', signed: true, readiness: true, history: 'machine' },
-  waiver: { label: 'Waiver', signed: true, readiness: true, history: 'machine' },
-  approval: { label: 'Approval', signed: false, readiness: false, history: 'machine' },
-  'approval-request': { label: 'Approval request', signed: false, readiness: true, history: null },
-  evidence: { label: 'Photo or file', signed: false, readiness: false, history: 'machine' },
-  'hole-pattern': { label: 'Hole pattern', signed: false, readiness: true, history: 'machine' },
-  'safety-item': { label: 'Safety-walk item', signed: false, evidence: 'Safety walk item', readiness: true, history: 'workshop' },
-  'target-set': { label: 'Target set', signed: false, readiness: true, history: 'workshop' },
-  person: { label: 'Person', signed: false, readiness: false, history: 'workshop' },
+  machine: { table: 'machines', label: 'Machine', signed: true, evidence: 'Machine', readiness: true, history: 'machine' },
+  rail: { table: 'rails', label: 'Rail', signed: true, evidence: 'Rail', readiness: true, history: 'machine' },
+  'rail-sweep': { table: 'rail_sweeps', label: 'Rail sweep', signed: true, evidence: 'Rail sweep', readiness: true, history: 'machine' },
+  'bolt-down': { table: 'bolt_downs', label: 'Bolt-down', signed: true, evidence: 'Bolt-down', readiness: false, history: 'machine' },
+  axis: { table: 'axes', label: 'Axis', signed: true, evidence: 'Axis', readiness: true, history: 'machine' },
+  'travel-trial': { table: 'travel_trials', label: 'Travel trial', signed: true, evidence: 'Travel trial', readiness: true, history: 'machine' },
+  'positioning-run': { table: 'positioning_runs', label: 'Positioning run', signed: true, evidence: 'Repeat-and-reverse run', readiness: true, history: 'machine' },
+  'backlash-check': { table: 'backlash_checks', label: 'Backlash check', signed: true, evidence: 'Backlash check', readiness: true, history: 'machine' },
+  'diagonal-check': { table: 'diagonal_checks', label: 'Squareness check', signed: true, evidence: 'Diagonal check', readiness: true, history: 'machine' },
+  'bed-grid': { table: 'bed_grids', label: 'Bed flatness', signed: true, evidence: 'Bed grid', readiness: true, history: 'machine' },
+  'test-cut': { table: 'test_cuts', label: 'Test cut', signed: true, evidence: 'Test cut', readiness: true, history: 'machine' },
+  'safety-walk': { table: 'safety_walks', label: 'Safety walk', signed: true, readiness: true, history: 'machine' },
+  waiver: { table: 'waivers', label: 'Waiver', signed: true, readiness: true, history: 'machine' },
+  approval: { table: 'approvals', label: 'Approval', signed: false, readiness: false, history: 'machine' },
+  'approval-request': { table: 'approval_requests', label: 'Approval request', signed: false, readiness: true, history: null },
+  evidence: { table: 'evidence', label: 'Photo or file', signed: false, readiness: false, history: 'machine' },
+  'hole-pattern': { table: 'hole_patterns', label: 'Hole pattern', signed: false, readiness: true, history: 'machine' },
+  'safety-item': { table: 'safety_items', label: 'Safety-walk item', signed: false, evidence: 'Safety walk item', readiness: true, history: 'workshop' },
+  'target-set': { table: 'target_sets', label: 'Target set', signed: false, readiness: true, history: 'workshop' },
+  person: { table: 'users', label: 'Person', signed: false, readiness: false, history: 'workshop' },
   'sign-in': { label: 'Sign-in', signed: false, readiness: false, history: 'workshop' },
   password: { label: 'Password', signed: false, readiness: false, history: 'workshop' },
 } as const satisfies Record<string, RecordTypeSpec>;

@@ -3,7 +3,7 @@ import { blockingOf, boardChecks } from '../approvals/board.js';
 import type { BoardCheck } from '../approvals/snapshot.js';
 import type { BlockingCheckRef, SummaryCheck } from '../database/schema/machine-readiness.js';
 import type { MachineState } from '../database/schema/machines.js';
-import { RECORD_TYPES } from './kinds.js';
+import { CHECK_KIND_NAMES, RECORD_TYPES } from './kinds.js';
 import type { MachineRef, ReadinessCheck, ReadinessContext } from './readiness.js';
 import { ReadinessRegistry } from './readiness.registry.js';
 import { ReadinessSummaryRepository, type ReadinessContextRow } from './readiness-summary.repository.js';
@@ -117,9 +117,12 @@ export class ReadinessSummaryService implements OnModuleInit, OnApplicationBoots
     return counts;
   }
 
-  /** The summary's version: the way of counting and the number of contributors it was counted with. */
+  /**
+   * The summary's version: the way of counting, the number of check kinds (records/kinds.ts) and
+   * of contributors it was counted with, so a new check kind or contributor recounts every machine.
+   */
   private countVersion(): number {
-    return SUMMARY_VERSION * 1000 + this.registry.size;
+    return (SUMMARY_VERSION * 100 + CHECK_KIND_NAMES.length) * 1000 + this.registry.size;
   }
 
   /** Recounts the workshop's machines (those judged against one target set, when given). */

@@ -1,22 +1,8 @@
-import type { PgColumn, PgTable } from 'drizzle-orm/pg-core';
-import {
-  axes,
-  backlashChecks,
-  bedGrids,
-  boltDownHoles,
-  boltDowns,
-  diagonalChecks,
-  machines,
-  positioningRuns,
-  rails,
-  railSweeps,
-  safetyAnswers,
-  safetyWalks,
-  testCuts,
-  travelTrials,
-  waivers,
-} from '../../database/schema/index.js';
-import { isSignedRecordType, SIGNED_RECORD_TYPES, type SignedRecordType } from '../../records/kinds.js';
+import { getTableName, is } from 'drizzle-orm';
+import { PgTable, type PgColumn } from 'drizzle-orm/pg-core';
+import * as schema from '../../database/schema/index.js';
+import { boltDownHoles, safetyAnswers } from '../../database/schema/index.js';
+import { isSignedRecordType, RECORD_TYPES, SIGNED_RECORD_TYPES, type SignedRecordType } from '../../records/kinds.js';
 
 /** Every kind of record an approval can stand on (the record types written to record_locks): `signed` in records/kinds.ts. */
 export const SIGNED_RECORD_KINDS: readonly SignedRecordType[] = SIGNED_RECORD_TYPES;
@@ -46,19 +32,22 @@ export interface SignedRecordSpec {
   unsigned?: readonly string[];
 }
 
-/** Where each kind of record lives. A kind marked `signed` in records/kinds.ts must be added here (the type insists). */
-export const SIGNED_RECORDS: Record<SignedRecordKind, SignedRecordSpec> = {
-  machine: { table: machines, unsigned: ['state', 'version', 'lastActivityAt', 'updatedAt'] },
-  rail: { table: rails },
-  axis: { table: axes },
-  waiver: { table: waivers },
-  'rail-sweep': { table: railSweeps },
-  'bolt-down': { table: boltDowns, children: { name: 'holes', table: boltDownHoles, parent: boltDownHoles.boltDownId, orderBy: [boltDownHoles.holeIndex, boltDownHoles.id] } },
-  'travel-trial': { table: travelTrials },
-  'positioning-run': { table: positioningRuns },
-  'diagonal-check': { table: diagonalChecks },
-  'bed-grid': { table: bedGrids },
-  'test-cut': { table: testCuts },
-  'safety-walk': { table: safetyWalks, children: { name: 'answers', table: safetyAnswers, parent: safetyAnswers.walkId, orderBy: [safetyAnswers.itemKey, safetyAnswers.id] } },
-  'backlash-check': { table: backlashChecks },
+/** Child rows signed with their record, and columns left out of the signature: the exceptions. */
+const CHILDREN: Partial<Record<SignedRecordKind, ChildRows>> = {
+  'bolt-down': { name: 'holes', table: boltDownHoles, parent: boltDownHoles.boltDownId, orderBy: [boltDownHoles.holeIndex, boltDownHoles.id] },
+  'safety-walk': { name: 'answers', table: safetyAnswers, parent: safetyAnswers.walkId, orderBy: [safetyAnswers.itemKey, safetyAnswers.id] },
 };
+const UNSIGNED: Partial<Record<SignedRecordKind, readonly string[]>> = { machine: ['state', 'version', 'lastActivityAt', 'updatedAt'] };
+
+const TABLES = new Map((Object.values(schema) as unknown[]).filter((t): t is TableWithId => is(t, PgTable)).map((t) => [getTableName(t), t]));
+
+function tableOf(kind: SignedRecordKind): TableWithId {
+  const table = TABLES.get(RECORD_TYPES[kind].table);
+  if (!table) throw new Error(`records/kinds.ts names table ${RECORD_TYPES[kind].table} for ${kind}, which the schema does not have`);
+  return table;
+}
+
+/** Where each kind of record lives: the table its entry in records/kinds.ts names, with the exceptions above. */
+export const SIGNED_RECORDS = Object.fromEntries(
+  SIGNED_RECORD_KINDS.map((kind): [SignedRecordKind, SignedRecordSpec] => [kind, { table: tableOf(kind), children: CHILDREN[kind], unsigned: UNSIGNED[kind] }]),
+) as Record<SignedRecordKind, SignedRecordSpec>;

@@ -1,4 +1,5 @@
 import { isLengthUnit, UNIT_LABELS } from '../../lib/units';
+import { CHECK_KINDS } from '../../lib/record-kinds';
 import type { BoardCheck, Target } from './types';
 
 export const unitLabel = (unit: string) => (isLengthUnit(unit) ? UNIT_LABELS[unit] : unit);
@@ -10,13 +11,14 @@ export function num(v: number): string {
   return Math.abs(v) >= 100 ? String(Math.round(v)) : String(Number(v.toPrecision(3)));
 }
 
-/** Headroom and travel margin are minimums, a test cut is a ± band, the rest are maximums. */
+/** How a target reads depends on its kind's sense (lib/record-kinds.ts): at most, at least, a ± band, every item passed. */
 export function targetText(kind: BoardCheck['kind'], target: Target | null): string {
   if (!target) return '—';
   const value = `${num(target.value)} ${unitLabel(target.unit)}`;
-  if (kind === 'speed-check' || kind === 'travel-envelope') return `≥ ${value}`;
-  if (kind === 'test-cut') return `± ${value}`;
-  if (kind === 'safety-walk') return target.value ? value : 'every item passed';
+  const sense = CHECK_KINDS[kind]?.sense ?? 'at-most';
+  if (sense === 'at-least') return `≥ ${value}`;
+  if (sense === 'plus-minus') return `± ${value}`;
+  if (sense === 'all-passed') return target.value ? value : 'every item passed';
   return `≤ ${value}`;
 }
 

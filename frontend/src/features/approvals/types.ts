@@ -1,18 +1,9 @@
+import { CHECK_KIND_LABELS, type CheckKind } from '../../lib/record-kinds';
 import type { MachineState } from '../../lib/machine-state';
 
 export type CheckStatus = 'not-started' | 'within-target' | 'outside-target' | 'waived';
-export type CheckKind =
-  | 'rail-straightness'
-  | 'rail-parallelism'
-  | 'travel-trial'
-  | 'positioning'
-  | 'speed-check'
-  | 'travel-envelope'
-  | 'diagonal-check'
-  | 'bed-grid'
-  | 'test-cut'
-  | 'safety-walk'
-  | 'backlash';
+/** The check kinds and their words come from one list shared with the server's (lib/record-kinds.ts). */
+export type { CheckKind };
 
 export interface Target {
   value: number;
@@ -118,19 +109,7 @@ export interface Drift {
   rows: DriftRow[];
 }
 
-export const KIND_LABELS: Record<CheckKind, string> = {
-  'rail-straightness': 'Rail straightness',
-  'rail-parallelism': 'Rail parallelism',
-  'travel-trial': 'Travel trial',
-  backlash: 'Backlash check',
-  positioning: 'Repeat-and-reverse run',
-  'speed-check': 'Speed check',
-  'travel-envelope': 'Travel envelope',
-  'diagonal-check': 'Diagonal check',
-  'bed-grid': 'Bed grid',
-  'test-cut': 'Test cut',
-  'safety-walk': 'Safety walk',
-};
+export const KIND_LABELS: Record<CheckKind, string> = CHECK_KIND_LABELS;
 
 export const STATUS_LABELS: Record<CheckStatus, string> = {
   'not-started': 'Not started',

@@ -1,3 +1,4 @@
+import { RECORD_TYPES, recordName } from '../../lib/record-kinds';
 export type VerificationStatus = 'valid' | 'changed' | 'unsigned' | 'unknown-key';
 
 export interface RecordDifference {
@@ -43,21 +44,7 @@ export const verificationKeys = {
   byToken: (token: string) => [...verificationKeys.all, token] as const,
 };
 
-/** Plain names for the kinds of record an approval stands on. */
-export const RECORD_KIND_LABELS: Record<string, string> = {
-  machine: 'Machine specification',
-  rail: 'Rail',
-  axis: 'Axis',
-  waiver: 'Waiver',
-  'rail-sweep': 'Rail sweep',
-  'bolt-down': 'Bolt-down',
-  'travel-trial': 'Travel trial',
-  'positioning-run': 'Repeat-and-reverse run',
-  'backlash-check': 'Backlash check',
-  'diagonal-check': 'Diagonal check',
-  'bed-grid': 'Bed grid',
-  'test-cut': 'Test cut',
-  'safety-walk': 'Safety walk',
-};
+/** Plain names for the kinds of record an approval stands on (lib/record-kinds.ts). */
+export const RECORD_KIND_LABELS: Record<string, string> = Object.fromEntries(Object.keys(RECORD_TYPES).map((k) => [k, recordName(k)]));
 
 export { formatDateTime as dateTime, formatDate as dateOnly } from '../../lib/format-time';
