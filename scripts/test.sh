@@ -36,7 +36,7 @@ DATABASE_OWNER_URL="$(owner_url railwright_api)" DATABASE_URL="$(app_url railwri
   node "$ROOT/backend/dist/backend/src/database/migrate-cli.js"
 
 status=0
-say "Type-checking the server, the browser app and the browser tests…"
+say "Linting and type-checking the server, the browser app and the browser tests…"
 (cd "$ROOT" && npm run --silent check) || status=1
 
 say "Unit and API tests (jest)…"
