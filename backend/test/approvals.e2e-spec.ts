@@ -11,6 +11,7 @@ import { DRIZZLE, type Database } from '../src/database/database.tokens.js';
 import { count } from 'drizzle-orm';
 import { approvals, auditEntries, changeLog, machines } from '../src/database/schema/index.js';
 import { RecheckService } from '../src/approvals/recheck.service.js';
+import { CronExpression, SchedulerRegistry } from '@nestjs/schedule';
 import { MailService } from '../src/mail/mail.service.js';
 import type { FakeSmtpServer } from '../src/mail/fake-smtp.server.js';
 import { disposition } from './support/disposition.js';
@@ -332,7 +333,8 @@ describe('readiness board, waivers, approval and certificate', () => {
       const requestRefused = await ws.as.technician.post(`/api/machines/${machineId}/approval-requests`);
       expect([requestRefused.status, requestRefused.body.message]).toEqual([409, expect.stringMatching(/approved and due for its re-check/)]);
 
-      // The schedule's job sends the reminder once, however often it runs.
+      // The schedule's hourly job sends the reminder once, however often it runs.
+      expect(app.get(SchedulerRegistry).getCronJob('recheck-reminders').cronTime.source).toBe(CronExpression.EVERY_HOUR);
       const recheck = app.get(RecheckService);
       expect(await recheck.remindDue()).toBe(1);
       expect(await recheck.remindDue()).toBe(0);
