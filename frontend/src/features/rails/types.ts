@@ -1,126 +1,24 @@
+import type { AnswerOf, Schemas } from '../../lib/api/schemas';
 import type { LengthUnit } from '../../lib/units';
 
-export type SweepPhase = 'as-found' | 'as-left';
-export type SweepFace = 'side' | 'top';
+export type Rail = Schemas['RailResponse'];
+export type RailListItem = Schemas['RailListItem'];
+export type Sweep = Schemas['SweepResponse'];
+export type SweepSummary = Schemas['SweepSummary'];
+export type SweepPhase = Sweep['phase'];
+export type SweepFace = Sweep['face'];
+export type SweepStatus = Sweep['status'];
+export type TargetValue = Sweep['target'];
+export type StraightnessReference = NonNullable<TargetValue['reference']>;
+export type ResultWarning = Schemas['ResultWarning'];
+export type FitLine = Schemas['StoredLine'];
+export type LocalSlope = Schemas['StoredLocalSlope'];
+export type StraightnessResult = Schemas['StoredSweepResult'];
+/** A sweep as the rail's list gives it: the summary, no readings (useSweep has them). The phase is narrowed until the description lists its values. */
+export type SweepListItem = Omit<Schemas['SweepListItem'], 'phase'> & { phase: SweepPhase };
+
 export const FACE_LABELS: Record<SweepFace, string> = { side: 'Side face (sideways straightness)', top: 'Top face (heights)' };
-export type SweepStatus = 'within-target' | 'outside-target';
 export type CheckState = SweepStatus | 'not-comparable' | 'not-started';
-
-export type StraightnessReference = 'minimum-zone' | 'least-squares';
-
-export interface TargetValue {
-  value: number;
-  unit: string;
-  reference?: StraightnessReference;
-}
-
-export interface ResultWarning {
-  code: string;
-  message: string;
-}
-
-export interface Rail {
-  id: string;
-  machineId: string;
-  label: string;
-  axis: string;
-  /** Lengths as typed, in lengthUnit; the …Mm twins in mm. */
-  lengthUnit: LengthUnit;
-  length: number;
-  holePitch: number;
-  firstHole: number;
-  spacing: number | null;
-  endDistance: number;
-  endDistanceIsDefault: boolean;
-  lengthMm: number;
-  profileSize: number | null;
-  holePitchMm: number;
-  firstHoleMm: number;
-  spacingMm: number | null;
-  endDistanceMm: number;
-  partnerRailId: string | null;
-  /** position in mm, at in lengthUnit. */
-  holes: { index: number; position: number; at: number }[];
-  typicalBoltSize: string | null;
-  createdAt: string;
-  updatedAt: string;
-  /** Present when the stored length, pitch or first hole cannot be read (holes is then empty). */
-  unreadable?: string;
-}
-
-export interface SweepSummary {
-  id: string;
-  takenAt: string;
-  phase: SweepPhase;
-  datum: string | null;
-  /** null when the stored result cannot be read (then `unreadable` says so). */
-  leastSquaresStraightness: number | null;
-  minimumZoneStraightness: number | null;
-  status: SweepStatus;
-  target: TargetValue;
-  face: SweepFace;
-  readingUnit: LengthUnit;
-  lengthUnit: LengthUnit;
-  localSlopeMmPerM: number | null;
-  unreadable?: string;
-}
-
-export interface RailListItem extends Rail {
-  sweepCount: number;
-  latestSweep: SweepSummary | null;
-}
-
-export interface FitLine {
-  slope: number;
-  intercept: number;
-  straightness: number;
-  residuals: number[];
-}
-
-export interface LocalSlope {
-  mmPerM: number;
-  fromMm: number;
-  toMm: number;
-  baseMm: number | null;
-}
-
-export interface StraightnessResult {
-  leastSquares: FitLine;
-  minimumZone: FitLine;
-  endPoint: FitLine;
-  localSlope?: LocalSlope;
-}
-
-export interface Sweep {
-  id: string;
-  railId: string;
-  machineId: string;
-  /** Positions in lengthUnit, readings and resolution in readingUnit, as typed. */
-  lengthUnit: LengthUnit;
-  readingUnit: LengthUnit;
-  face: SweepFace;
-  /** null (with `unreadable`) when the stored readings cannot be read. */
-  stations: { position: number; positionMm: number; reading: number; readingMm: number }[] | null;
-  localSlope: LocalSlope | null;
-  warnings: ResultWarning[];
-  instrument: string;
-  resolution: number | null;
-  temperatureC: number | null;
-  phase: SweepPhase;
-  takenBy: string;
-  boltSize: string | null;
-  torqueNm: number | null;
-  datum: string | null;
-  notes: string;
-  /** null (with `unreadable`) when the stored result cannot be read. */
-  result: StraightnessResult | null;
-  status: SweepStatus;
-  target: TargetValue;
-  unreadable?: string;
-  takenAt: string;
-  createdAt: string;
-  locked: boolean;
-}
 
 export interface NewSweep {
   id: string;
@@ -168,12 +66,7 @@ export interface Parallelism {
   targets: { parallelism: TargetValue; heightDifference: TargetValue & { source?: string } };
 }
 
-export interface BoltTorques {
-  bolts: { boltSize: string; torqueNm: number }[];
-  source: string;
-  typicalByProfile: { profileSize: number; boltSize: string }[];
-  typicalSource: string;
-}
+export type BoltTorques = AnswerOf<'/api/rails/bolt-torques', 'get'>;
 
 export const PHASE_LABELS: Record<SweepPhase, string> = { 'as-found': 'As found', 'as-left': 'As left' };
 

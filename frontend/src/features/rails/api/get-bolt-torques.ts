@@ -1,8 +1,8 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
-import { railKeys, type BoltTorques } from '../types';
+import { answer, client } from '../../../lib/api-client';
+import { railKeys } from '../types';
 
 export const boltTorquesQueryOptions = () =>
-  queryOptions({ queryKey: railKeys.boltTorques(), queryFn: () => api.get<BoltTorques>('/rails/bolt-torques'), staleTime: Infinity });
+  queryOptions({ queryKey: railKeys.boltTorques(), queryFn: () => answer(client.GET('/api/rails/bolt-torques')), staleTime: Infinity });
 
 export const useBoltTorques = () => useQuery(boltTorquesQueryOptions());

@@ -1,16 +1,8 @@
 import { infiniteQueryOptions, useInfiniteQuery } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
-import { railKeys, type SweepSummary } from '../types';
+import { answer, client } from '../../../lib/api-client';
+import { railKeys, type SweepListItem } from '../types';
 
-/** A sweep as the rail's list gives it: the summary, no readings (useSweep has them). */
-export interface SweepListItem extends SweepSummary {
-  railId: string;
-  machineId: string;
-  takenBy: string;
-  stationCount: number;
-  createdAt: string;
-  locked: boolean;
-}
+export type { SweepListItem };
 
 export const SWEEP_PAGE_SIZE = 50;
 
@@ -18,7 +10,8 @@ export const SWEEP_PAGE_SIZE = 50;
 export const sweepsQueryOptions = (railId: string) =>
   infiniteQueryOptions({
     queryKey: railKeys.sweeps(railId),
-    queryFn: ({ pageParam }) => api.get<SweepListItem[]>(`/rails/${railId}/sweeps?limit=${SWEEP_PAGE_SIZE}${pageParam ? `&cursor=${pageParam}` : ''}`),
+    queryFn: async ({ pageParam }): Promise<SweepListItem[]> =>
+      (await answer(client.GET('/api/rails/{id}/sweeps', { params: { path: { id: railId }, query: { limit: SWEEP_PAGE_SIZE, cursor: pageParam || undefined } } }))) as SweepListItem[],
     initialPageParam: '',
     getNextPageParam: (last) => (last.length === SWEEP_PAGE_SIZE ? last[last.length - 1].id : undefined),
     select: (data) => data.pages.flat(),
