@@ -79,8 +79,8 @@ export function describeResponses(ts, program, sourceRoot) {
     if (checker.isArrayType(type) || checker.isTupleType(type)) {
       const args = checker.getTypeArguments(type);
       if (checker.isTupleType(type)) {
-        const items = args.map((a) => schemaOf(a, depth + 1));
-        return { type: 'array', items: items.length === 1 ? items[0] : { oneOf: dedupe(items) }, minItems: args.length, maxItems: args.length };
+        const items = dedupe(args.map((a) => schemaOf(a, depth + 1)));
+        return { type: 'array', items: items.length === 1 ? items[0] : { oneOf: items }, minItems: args.length, maxItems: args.length };
       }
       return { type: 'array', items: schemaOf(args[0], depth + 1) };
     }

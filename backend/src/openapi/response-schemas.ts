@@ -11185,11 +11185,7 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
         "sizeBandMm": {
           "type": "array",
           "items": {
-            "oneOf": [
-              {
-                "type": "number"
-              }
-            ]
+            "type": "number"
           },
           "minItems": 2,
           "maxItems": 2,
@@ -11198,11 +11194,7 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
         "thicknessBandMm": {
           "type": "array",
           "items": {
-            "oneOf": [
-              {
-                "type": "number"
-              }
-            ]
+            "type": "number"
           },
           "minItems": 2,
           "maxItems": 2,

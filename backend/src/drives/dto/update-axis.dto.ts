@@ -1,5 +1,5 @@
 import type { Type } from '@nestjs/common';
-import { PartialType } from '@nestjs/mapped-types';
+import { PartialType } from '@nestjs/swagger'; // carries the rules and the API description
 import { ValidateIf } from 'class-validator';
 import { CreateAxisDto } from './create-axis.dto.js';
 

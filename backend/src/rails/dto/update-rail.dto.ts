@@ -1,4 +1,4 @@
-import { PartialType } from '@nestjs/mapped-types';
+import { PartialType } from '@nestjs/swagger'; // carries the rules and the API description
 import { CreateRailDto } from './create-rail.dto.js';
 
 /**

@@ -1,5 +1,5 @@
 import type { Type } from '@nestjs/common';
-import { PartialType, PickType } from '@nestjs/mapped-types';
+import { PartialType, PickType } from '@nestjs/swagger'; // carry the rules and the API description
 import { Transform } from 'class-transformer';
 import { IsString, Matches, MaxLength, ValidateIf } from 'class-validator';
 import { CreateSweepDto } from './create-sweep.dto.js';

@@ -1515,7 +1515,20 @@ export interface components {
             /** Format: uuid */
             targetSetId?: string;
         };
-        UpdateMachineDto: Record<string, never>;
+        UpdateMachineDto: {
+            name?: string;
+            /** @enum {string} */
+            kind?: "plasma" | "router" | "other";
+            /**
+             * @description Unit of the work area as typed and shown; the lengths are kept in mm.
+             * @enum {string}
+             */
+            lengthUnit?: "mm" | "um" | "in" | "thou";
+            workArea?: components["schemas"]["WorkAreaDto"];
+            notes?: string;
+            /** Format: uuid */
+            targetSetId?: string;
+        };
         CreateTargetSetDto: {
             name: string;
             description?: string;
@@ -1785,7 +1798,25 @@ export interface components {
             /** Format: uuid */
             partnerRailId?: string | null;
         };
-        UpdateRailDto: Record<string, never>;
+        UpdateRailDto: {
+            label?: string;
+            axis?: string;
+            /**
+             * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
+             * @enum {string}
+             */
+            lengthUnit?: "mm" | "um" | "in" | "thou";
+            length?: number;
+            profileSize?: number | null;
+            holePitch?: number;
+            firstHole?: number;
+            /** @description Centre-to-centre distance to the partner rail (a in S = a × K); null clears it. */
+            spacing?: number | null;
+            /** @description Least distance from a hole centre to either end; null: half the bolt head (common practice). */
+            endDistance?: number | null;
+            /** Format: uuid */
+            partnerRailId?: string | null;
+        };
         StationDto: Record<string, never>;
         CreateSweepDto: {
             /** Format: uuid */
@@ -1829,6 +1860,7 @@ export interface components {
             boltSize?: string | null;
             torqueNm?: number | null;
             datum?: string | null;
+            notes?: string;
         };
         CreateBoltDownDto: {
             /**
@@ -2009,11 +2041,27 @@ export interface components {
             notes?: string;
         };
         UpdateAxisDto: {
+            /** @description "X", "Y1", "Y2", "Z": the first letter is the axis letter the test program moves. */
+            name?: string;
+            /**
+             * @description The unit the axis is set up in: drive lengths, feed rates (per minute) and travel are typed in it.
+             * @enum {string}
+             */
+            lengthUnit?: "mm" | "um" | "in" | "thou";
+            drive?: components["schemas"]["DriveDto"];
+            motorStepsPerRev?: number;
+            microsteps?: number;
+            /** @description Motor revolutions per revolution of the screw, pulley or pinion; 1 when direct. */
+            gearRatio?: number;
+            /** @description The value set in the controller now. In mm. */
+            stepsPerMm?: number;
+            /** @description The fastest feed rate the axis will be asked for, lengthUnit per minute. */
             maxFeedRate?: number | null;
-            /** @description Travel measured end to end, in lengthUnit; null clears it. */
+            /** @description Travel measured end to end, in lengthUnit. */
             measuredTravel?: number | null;
             /** @description The same in mm whatever lengthUnit says (older callers); not together with measuredTravel. */
             measuredTravelMm?: number | null;
+            notes?: string;
         };
         CreateTravelTrialDto: {
             /**
@@ -2941,7 +2989,9 @@ export interface components {
             /** @description In mm. */
             toleranceMm: number;
             toleranceBasis: string;
+            /** @description In mm. */
             sizeBandMm: number[] | null;
+            /** @description In mm. */
             thicknessBandMm: number[] | null;
             outsideBand: string | null;
             within: boolean;
