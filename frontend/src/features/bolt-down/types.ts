@@ -1,80 +1,15 @@
-import type { LengthUnit } from '../../lib/units';
+import type { AnswerOf, Schemas } from '../../lib/api/schemas';
 
-export type BoltDownMode = 'face' | 'line';
-
-export interface BoltDownHole {
-  index: number;
-  /** Hole centre from the rail's start, mm. */
-  position: number;
-  /** Rank in the proposed fixing order (0 = first). */
-  order: number;
-  /** Aim and reading in the bolt-down's unit. */
-  target: number | null;
-  targetMm: number | null;
-  reading: number | null;
-  readingMm: number | null;
-  difference: number | null;
-  onTarget: boolean | null;
-  fixed: boolean;
-  fixedAt: string | null;
-  fixedBy: string | null;
-}
-
-export interface BoltDown {
-  id: string;
-  railId: string;
-  machineId: string;
-  rail: { label: string; axis: string; lengthMm: number };
-  mode: BoltDownMode;
-  /** Readings, aims and the band are in readingUnit; hole `at` in lengthUnit (`position` in mm). */
-  readingUnit: LengthUnit;
-  lengthUnit: LengthUnit;
-  band: number;
-  bandMm: number;
-  holes: BoltDownHole[];
-  nextHole: number | null;
-  fixedCount: number;
-  holeCount: number;
-  complete: boolean;
-  finalSweepId: string | null;
-  /** Set when the bolt-down was given up: when, by whom and why. */
-  abandoned: { at: string; by: string | null; reason: string } | null;
-  createdBy: string;
-  createdAt: string;
-  updatedAt: string;
-}
-
-export interface HoleWriteResult extends BoltDown {
-  writeId: string;
-  repeated: boolean;
-}
+export type BoltDown = Schemas['BoltDownResponse'];
+export type BoltDownMode = BoltDown['mode'];
+/** `position` in mm from the rail's start, `at` in the bolt-down's lengthUnit; aims and readings in its readingUnit. */
+export type BoltDownHole = Schemas['BoltDownHoleResponse'];
+export type HoleWriteResult = Schemas['HoleWriteResponse'];
 
 /** The parts of the rail the guide needs before a bolt-down exists. */
-export interface RailSummary {
-  id: string;
-  machineId: string;
-  label: string;
-  axis: string;
-  lengthMm: number;
-  profileSize: number | null;
-  holes: { index: number; position: number }[];
-  typicalBoltSize: string | null;
-}
+export type RailSummary = Pick<Schemas['RailResponse'], 'id' | 'machineId' | 'label' | 'axis' | 'lengthMm' | 'profileSize' | 'holes' | 'typicalBoltSize'>;
 
-export interface FinalSweepResult {
-  boltDown: BoltDown;
-  sweep: {
-    id: string;
-    readingUnit: LengthUnit;
-    stations: { position: number; reading: number; readingMm: number }[];
-    status: 'within-target' | 'outside-target';
-    target: { value: number; unit: string };
-    result: {
-      leastSquares: { slope: number; intercept: number; straightness: number };
-      minimumZone: { slope: number; intercept: number; straightness: number };
-    };
-  };
-}
+export type FinalSweepResult = AnswerOf<'/api/bolt-downs/{id}/final-sweep', 'post'>;
 
 export const MODE_LABELS: Record<BoltDownMode, string> = { face: 'Face mode', line: 'Line mode' };
 

@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { answer, client } from '../../../lib/api-client';
 import { MACHINE_STATE_KEYS } from '../../../lib/machine-state-keys';
 import { boltDownKeys, type BoltDown } from '../types';
 
@@ -7,7 +7,7 @@ import { boltDownKeys, type BoltDown } from '../types';
 export function useAbandonBoltDown(bd: Pick<BoltDown, 'id' | 'railId'>) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (reason: string) => api.post<BoltDown>(`/bolt-downs/${bd.id}/abandon`, { reason }),
+    mutationFn: (reason: string) => answer(client.POST('/api/bolt-downs/{id}/abandon', { params: { path: { id: bd.id } }, body: { reason } })),
     onSuccess: async (fresh) => {
       qc.setQueryData(boltDownKeys.detail(bd.id), fresh);
       await Promise.all([boltDownKeys.forRail(bd.railId), ...MACHINE_STATE_KEYS].map((queryKey) => qc.invalidateQueries({ queryKey })));

@@ -1,9 +1,9 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
-import { boltDownKeys, type BoltDown } from '../types';
+import { answer, client } from '../../../lib/api-client';
+import { boltDownKeys } from '../types';
 
 /** Bolt-downs of a rail, latest first. */
 export const boltDownsQueryOptions = (railId: string) =>
-  queryOptions({ queryKey: boltDownKeys.forRail(railId), queryFn: () => api.get<BoltDown[]>(`/rails/${railId}/bolt-downs`) });
+  queryOptions({ queryKey: boltDownKeys.forRail(railId), queryFn: () => answer(client.GET('/api/rails/{id}/bolt-downs', { params: { path: { id: railId } } })) });
 
 export const useBoltDowns = (railId: string) => useQuery(boltDownsQueryOptions(railId));

@@ -1,13 +1,9 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { answer, client } from '../../../lib/api-client';
 import { boltDownKeys } from '../types';
 
-export interface BoltTorqueTable {
-  bolts: { boltSize: string; torqueNm: number }[];
-  source: string;
-}
 
 export const boltTorquesQueryOptions = () =>
-  queryOptions({ queryKey: boltDownKeys.boltTorques(), queryFn: () => api.get<BoltTorqueTable>('/rails/bolt-torques'), staleTime: Infinity });
+  queryOptions({ queryKey: boltDownKeys.boltTorques(), queryFn: () => answer(client.GET('/api/rails/bolt-torques')), staleTime: Infinity });
 
 export const useBoltTorques = () => useQuery(boltTorquesQueryOptions());

@@ -1,8 +1,8 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { answer, client } from '../../../lib/api-client';
 import { boltDownKeys, type RailSummary } from '../types';
 
 export const railSummaryQueryOptions = (railId: string) =>
-  queryOptions({ queryKey: boltDownKeys.rail(railId), queryFn: () => api.get<RailSummary>(`/rails/${railId}`) });
+  queryOptions({ queryKey: boltDownKeys.rail(railId), queryFn: (): Promise<RailSummary> => answer(client.GET('/api/rails/{id}', { params: { path: { id: railId } } })) });
 
 export const useRailSummary = (railId: string) => useQuery(railSummaryQueryOptions(railId));

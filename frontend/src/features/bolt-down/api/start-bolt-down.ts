@@ -1,14 +1,14 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { answer, client } from '../../../lib/api-client';
 import type { Schemas } from '../../../lib/api/schemas';
-import { boltDownKeys, type BoltDown } from '../types';
+import { boltDownKeys } from '../types';
 
 export type StartBoltDownInput = Schemas['CreateBoltDownDto'];
 
 export function useStartBoltDown(railId: string) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (input: StartBoltDownInput) => api.post<BoltDown>(`/rails/${railId}/bolt-downs`, input),
+    mutationFn: (body: StartBoltDownInput) => answer(client.POST('/api/rails/{id}/bolt-downs', { params: { path: { id: railId } }, body })),
     onSuccess: (bd) => {
       qc.setQueryData(boltDownKeys.detail(bd.id), bd);
       return qc.invalidateQueries({ queryKey: boltDownKeys.forRail(railId) });

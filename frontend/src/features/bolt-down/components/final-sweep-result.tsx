@@ -2,9 +2,7 @@ import { Alert, Box, Chip, Paper, Stack, Typography } from '@mui/material';
 import { StraightnessChart } from '../../../components/charts/straightness-chart';
 import { LoadingState } from '../../../components/states/loading-state';
 import { ErrorState } from '../../../components/states/error-state';
-import { formatLength, fromMm, toMm, UNIT_LABELS, type LengthUnit } from '../../../lib/units';
-
-const isLength = (unit: string): unit is LengthUnit => Object.hasOwn(UNIT_LABELS, unit);
+import { formatLength, fromMm, isLengthUnit, toMm, UNIT_LABELS } from '../../../lib/units';
 import { useFinalSweep } from '../api/get-sweep';
 
 /** The saved final sweep: its straightness against the target, as the rails feature computed it. */
@@ -13,6 +11,8 @@ export function FinalSweepResult({ sweepId }: { sweepId: string }) {
   if (sweep.isPending) return <LoadingState label="Loading the final sweep…" />;
   if (sweep.isError) return <ErrorState error={sweep.error} onRetry={() => sweep.refetch()} />;
   const s = sweep.data;
+  // A stored sweep that can no longer be read comes without readings or result, saying why.
+  if (!s.result || !s.stations) return <Alert severity="error">{s.unreadable ?? 'The final sweep could not be read.'}</Alert>;
   const u = s.readingUnit;
   const within = s.status === 'within-target';
   const k = fromMm(1, u);
@@ -46,7 +46,7 @@ export function FinalSweepResult({ sweepId }: { sweepId: string }) {
         points={s.stations.map((st) => ({ position: st.position, reading: st.reading }))}
         leastSquares={{ slope: ls.slope * k, intercept: ls.intercept * k }}
         zone={{ slope: mz.slope * k, intercept: mz.intercept * k, width: mz.straightness * k }}
-        target={isLength(s.target.unit) ? { width: fromMm(toMm(s.target.value, s.target.unit), u), reference: (s.target as { reference?: string }).reference === 'least-squares' ? 'least-squares' : 'minimum-zone', label: `Target zone ${s.target.value} ${UNIT_LABELS[s.target.unit]} wide` } : null}
+        target={isLengthUnit(s.target.unit) ? { width: fromMm(toMm(s.target.value, s.target.unit), u), reference: s.target.reference === 'least-squares' ? 'least-squares' : 'minimum-zone', label: `Target zone ${s.target.value} ${UNIT_LABELS[s.target.unit]} wide` } : null}
         unitLabel={UNIT_LABELS[u]}
         label="Straightness of the final sweep"
       />
