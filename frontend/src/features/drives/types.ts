@@ -1,22 +1,21 @@
+import type { AnswerOf, Schemas } from '../../lib/api/schemas';
 import type { LengthUnit } from '../../lib/units';
 
-export type DriveType = 'screw' | 'belt' | 'rack';
-export type Mounting = 'fixed-free' | 'supported-supported' | 'fixed-supported' | 'fixed-fixed';
-export type DriveStatus = 'not-started' | 'within-target' | 'outside-target' | 'not-applicable';
+export type Drive = Schemas['DriveRecord'];
+export type DriveType = Drive['type'];
+export type Mounting = NonNullable<Drive['mounting']>;
+export type TargetValue = Schemas['TargetValue'];
+export type ResultWarning = Schemas['ResultWarning'];
+export type ThermalReference = Schemas['ThermalReference'];
+export type ScaleMaterial = ThermalReference['scaleMaterial'];
+export type StepsChange = Schemas['StepsChange'];
+export type Axis = Schemas['AxisResponse'];
+export type CheckSummary = Schemas['AxisCheckSummary'];
+export type DriveStatus = CheckSummary['status'];
+export type AxisListItem = AnswerOf<'/api/machines/{id}/axes', 'get'>[number];
+export type SpeedCheck = Schemas['SpeedCheckResponse'];
+export type TravelEnvelope = Schemas['TravelEnvelopeResponse'];
 
-export interface TargetValue {
-  value: number;
-  unit: string;
-  source?: string;
-}
-
-/** Something a person should know about a result: kept with the record. */
-export interface ResultWarning {
-  code: string;
-  message: string;
-}
-
-export type ScaleMaterial = 'steel' | 'stainless-steel' | 'aluminium' | 'glass' | 'invar';
 export const SCALE_MATERIAL_LABELS: Record<ScaleMaterial, string> = {
   steel: 'Steel (tape, rule)',
   'stainless-steel': 'Stainless steel',
@@ -25,18 +24,6 @@ export const SCALE_MATERIAL_LABELS: Record<ScaleMaterial, string> = {
   invar: 'Invar',
 };
 
-/** How a record was referred to 20 °C. */
-export interface ThermalReference {
-  applied: boolean;
-  machineTemperatureC: number | null;
-  scaleTemperatureC: number | null;
-  scaleMaterial: ScaleMaterial;
-  scaleAlphaUmPerMK: number;
-  machineAlphaUmPerMK: number;
-  factor: number;
-  source: string;
-}
-
 /** What a trial or run records about temperature and the instrument. */
 export interface RecordConditions {
   machineTemperature: number | null;
@@ -44,75 +31,6 @@ export interface RecordConditions {
   scaleMaterial: ScaleMaterial | null;
   instrumentResolution: number | null;
   thermal: ThermalReference | null;
-}
-
-export interface Drive {
-  type: DriveType;
-  lead?: number;
-  threadsPerInch?: number;
-  nominalDiameter?: number;
-  rootDiameter?: number;
-  unsupportedLength?: number;
-  mounting?: Mounting;
-  dnLimit?: number;
-  beltPitch?: number;
-  pulleyTeeth?: number;
-  pinionModule?: number;
-  pinionTeeth?: number;
-}
-
-export interface StepsChange {
-  from: number;
-  to: number;
-  at: string;
-  by: string;
-  reason: 'edited' | 'travel-trial';
-  trialId?: string;
-}
-
-export interface Axis {
-  id: string;
-  machineId: string;
-  name: string;
-  letter: string | null;
-  /** Drive lengths, feed rates (per minute) and travel are in it. */
-  lengthUnit: LengthUnit;
-  drive: Drive;
-  driveMm: Drive;
-  driveSummary: string;
-  motorStepsPerRev: number;
-  microsteps: number;
-  gearRatio: number;
-  stepsPerMm: number;
-  theoreticalStepsPerMm: number;
-  stepsPerMmDifferencePercent: number;
-  stepsPerInch: number;
-  theoreticalStepsPerInch: number;
-  travelPerRevMm: number;
-  travelPerRev: number;
-  resolutionMm: number;
-  /** lengthUnit per minute. */
-  maxFeedRate: number | null;
-  maxFeedRateMmPerMin: number | null;
-  measuredTravel: number | null;
-  measuredTravelMm: number | null;
-  notes: string;
-  stepsHistory: StepsChange[];
-  locked: boolean;
-  createdAt: string;
-  updatedAt: string;
-}
-
-export interface CheckSummary {
-  status: DriveStatus;
-  summary: string;
-  headline: string | null;
-  recordId: string | null;
-  recordedAt: string | null;
-}
-
-export interface AxisListItem extends Axis {
-  checks: { travelTrial: CheckSummary; positioning: CheckSummary; speedCheck: CheckSummary };
 }
 
 export interface TravelTrial extends RecordConditions {
@@ -203,46 +121,6 @@ export interface PositioningRun extends RecordConditions {
   recordedBy: string;
   recordedAt: string;
   locked: boolean;
-}
-
-export interface SpeedCheck {
-  axisId: string;
-  applicable: boolean;
-  status: DriveStatus;
-  reason: string | null;
-  missing: string[];
-  lengthUnit: LengthUnit;
-  /** lengthUnit per minute, as are maxFeedRate and safeFeedRate. */
-  feedRate: number | null;
-  feedRateMmPerMin: number | null;
-  rpm: number | null;
-  criticalSpeed: number | null;
-  permissibleSpeed: number | null;
-  dnLimitSpeed: number | null;
-  dnLimit: number | null;
-  mountingFactor: number | null;
-  limitedBy: 'critical-speed' | 'dn-limit' | null;
-  /** The lower of the permissible and the d·n limit speeds, rpm; headroom is taken from it. */
-  limitSpeed: number | null;
-  headroomPercent: number | null;
-  maxFeedRate: number | null;
-  allowedSpeed: number | null;
-  safeFeedRate: number | null;
-  safeFeedRateMmPerMin: number | null;
-  headroom: TargetValue;
-  withinLimits: boolean | null;
-  source: string;
-}
-
-export interface TravelEnvelope {
-  machineId: string;
-  status: 'within-target' | 'outside-target' | 'not-started';
-  workArea: { x: number; y: number };
-  margin: TargetValue;
-  marginMm: number;
-  axes: { axisId: string; axis: string; letter: 'X' | 'Y'; measuredTravel: number | null; workSize: number; requiredTravel: number; spare: number | null; covers: boolean | null }[];
-  missing: string[];
-  summary: string;
 }
 
 export const DRIVE_LABELS: Record<DriveType, string> = { screw: 'Screw', belt: 'Belt', rack: 'Rack and pinion' };

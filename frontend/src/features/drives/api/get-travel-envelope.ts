@@ -1,8 +1,8 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
-import { driveKeys, type TravelEnvelope } from '../types';
+import { answer, client } from '../../../lib/api-client';
+import { driveKeys } from '../types';
 
 export const travelEnvelopeQueryOptions = (machineId: string) =>
-  queryOptions({ queryKey: driveKeys.envelope(machineId), queryFn: () => api.get<TravelEnvelope>(`/machines/${machineId}/travel-envelope`) });
+  queryOptions({ queryKey: driveKeys.envelope(machineId), queryFn: () => answer(client.GET('/api/machines/{id}/travel-envelope', { params: { path: { id: machineId } } })) });
 
 export const useTravelEnvelope = (machineId: string) => useQuery(travelEnvelopeQueryOptions(machineId));
