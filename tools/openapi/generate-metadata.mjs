@@ -19,8 +19,8 @@ const ts = (await import('typescript')).default;
 const pluginUrl = pathToFileURL(path.join(backend, 'node_modules/@nestjs/swagger/dist/plugin/index.js')).href;
 const { ReadonlyVisitor } = await import(pluginUrl);
 
-/** File names whose classes describe bodies, queries and answers (the rest is left alone). */
-export const MODEL_FILE_SUFFIXES = ['.dto.ts', '.query.ts', '.response.ts'];
+/** Files whose classes describe bodies and queries (a name containing one of these; the rest is left alone). */
+export const MODEL_FILE_SUFFIXES = ['/dto/', '.dto.ts', '.query.ts', '.response.ts'];
 
 const visitor = new ReadonlyVisitor({
   pathToSource: outputDir,

@@ -2080,6 +2080,14 @@ export interface components {
             /** @description Fit measured = scale × commanded with no offset (moves measured from a zeroed start). */
             throughOrigin?: boolean;
             notes?: string;
+            /** @description Temperature of the machine (its screw, rack or frame), °C. */
+            machineTemperature?: number;
+            /** @description Temperature of the scale (tape, rule, glass scale), °C. */
+            scaleTemperature?: number;
+            /** @enum {string} */
+            scaleMaterial?: "steel" | "stainless-steel" | "aluminium" | "glass" | "invar";
+            /** @description Smallest step the instrument reads, in readingUnit. */
+            instrumentResolution?: number;
         };
         ApplyTravelTrialDto: {
             /** @description Needed when the correction is more than 5 % from the drive's theoretical steps per mm. */
@@ -2106,6 +2114,14 @@ export interface components {
             targets: number[];
             runs: components["schemas"]["PositioningRunEntryDto"][];
             notes?: string;
+            /** @description Temperature of the machine (its screw, rack or frame), °C. */
+            machineTemperature?: number;
+            /** @description Temperature of the scale (tape, rule, glass scale), °C. */
+            scaleTemperature?: number;
+            /** @enum {string} */
+            scaleMaterial?: "steel" | "stainless-steel" | "aluminium" | "glass" | "invar";
+            /** @description Smallest step the instrument reads, in readingUnit. */
+            instrumentResolution?: number;
         };
         BacklashPositionDto: {
             /** @description Where along the axis, in lengthUnit. */
