@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { parseNumberCell } from '../../../lib/tabular-input';
-import { LENGTH_UNITS, toMm, UNIT_LABELS, type LengthUnit } from '../../../lib/units';
+import { LENGTH_UNITS, toMm, UNIT_LABELS } from '../../../lib/units';
 import type { RailInput } from '../api/create-rail';
 import type { Rail } from '../types';
 
