@@ -1,8 +1,8 @@
 import type { NestFastifyApplication } from '@nestjs/platform-fastify';
 import { randomUUID } from 'node:crypto';
-import { RecordsService } from '../src/records/records.service.js';
 import { createTestApp, createTestWorkshop, TEST_PASSWORD, type Agent, type TestWorkshop } from './helpers/test-app.js';
 import { board, requestAndApprove, waiveAllBut } from './support/approval-flow.js';
+import { lockAsApproved } from './support/stand-in-approval.js';
 
 // A 300 mm rail with holes every 60 mm from 30 mm: five holes at 30, 90, 150, 210, 270 mm.
 const RAIL = { label: 'X1 (front)', axis: 'X1', length: 300, profileSize: 20, holePitch: 60, firstHole: 30 };
@@ -111,7 +111,7 @@ describe('abandoning a bolt-down', () => {
 
   it('is refused (409) when an approval was based on the bolt-down', async () => {
     const bd = await start(await newRail());
-    await app.get(RecordsService).lock(randomUUID(), [{ recordType: 'bolt-down', recordId: bd.id }]);
+    await lockAsApproved(app, [{ recordType: 'bolt-down', recordId: bd.id }]);
     const res = await abandon(bd.id, { reason: REASON });
     expect(res.status).toBe(409);
     expect(res.body.message).toMatch(/approved commissioning record/);

@@ -1,11 +1,11 @@
 import type { NestFastifyApplication } from '@nestjs/platform-fastify';
 import { randomUUID } from 'node:crypto';
-import { RecordsService } from '../src/records/records.service.js';
 import { SubjectsRegistry } from '../src/records/subjects.registry.js';
 import { anonymous, createTestApp, createTestWorkshop, type Agent, type TestWorkshop } from './helpers/test-app.js';
 import { eq } from 'drizzle-orm';
 import { DRIZZLE, type Database } from '../src/database/database.tokens.js';
 import { rails } from '../src/database/schema/index.js';
+import { lockAsApproved } from './support/stand-in-approval.js';
 
 // A 300 mm rail with holes every 60 mm from 30 mm: holes 0…4 at 30, 90, 150, 210, 270 mm.
 // Proposed fixing order (one end, the far end, then halving the gaps): 0, 4, 2, 1, 3.
@@ -305,7 +305,7 @@ describe('bolt-down guide API', () => {
   it('refuses changes (409) once an approval was based on the bolt-down, and keeps it as it was', async () => {
     const bd = await start(await newRail());
     await fix(bd.id, 0, 0.1);
-    await app.get(RecordsService).lock(randomUUID(), [{ recordType: 'bolt-down', recordId: bd.id }]);
+    await lockAsApproved(app, [{ recordType: 'bolt-down', recordId: bd.id }]);
     const res = await put(bd.id, 4, { reading: 1, fixed: true, writeId: randomUUID() });
     expect(res.status).toBe(409);
     expect(res.body.message).toMatch(/approved commissioning record/);

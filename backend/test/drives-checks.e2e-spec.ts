@@ -1,13 +1,12 @@
 import type { NestFastifyApplication } from '@nestjs/platform-fastify';
-import { randomUUID } from 'node:crypto';
 import { evaluatePositioning } from '../src/engine/positioning.js';
 import { evaluateTravelTrial } from '../src/engine/travel-trial.js';
 import { ReadinessRegistry } from '../src/records/readiness.registry.js';
-import { RecordsService } from '../src/records/records.service.js';
 import { MachinesService } from '../src/machines/machines.service.js';
 import { createTestApp, createTestWorkshop, type TestWorkshop } from './helpers/test-app.js';
 import { newAxis, newMachine, screwAxis } from './helpers/drives.js';
 import { referenceCsv, referenceJson } from '../src/engine/reference-data/reference-data.js';
+import { lockAsApproved } from './support/stand-in-approval.js';
 
 // CONSTRUCTED ISO 230-2 data set of the reference folder (5 targets, 5 runs each way, µm),
 // computed there from the formulas written from memory: an internal consistency check.
@@ -226,7 +225,7 @@ describe('travel trials and repeat-and-reverse runs', () => {
     const id = await newAxis(ws, machineId, screwAxis('Z'));
     const trial = await ws.as.technician.post(`/api/axes/${id}/travel-trials`).send(trialBody);
     const run = await ws.as.technician.post(`/api/axes/${id}/positioning-runs`).send(isoBody());
-    await app.get(RecordsService).lock(randomUUID(), [
+    await lockAsApproved(app, [
       { recordType: 'travel-trial', recordId: trial.body.id },
       { recordType: 'positioning-run', recordId: run.body.id },
     ]);
@@ -238,7 +237,7 @@ describe('travel trials and repeat-and-reverse runs', () => {
     expect(applied.status).toBe(200);
     expect(applied.body.stepsPerMm).toBe(641.2826);
     // A locked axis refuses edits.
-    await app.get(RecordsService).lock(randomUUID(), [{ recordType: 'axis', recordId: id }]);
+    await lockAsApproved(app, [{ recordType: 'axis', recordId: id }]);
     const patch = await ws.as.technician.patch(`/api/axes/${id}`).send({ notes: 'x' });
     expect(patch.status).toBe(409);
     expect((await ws.as.technician.get(`/api/axes/${id}`)).body.locked).toBe(true);

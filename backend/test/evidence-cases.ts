@@ -2,12 +2,12 @@ import type { NestFastifyApplication } from '@nestjs/platform-fastify';
 import { randomUUID } from 'node:crypto';
 import sharp from 'sharp';
 import type { Role } from '../src/database/schema/index.js';
-import { RecordsService } from '../src/records/records.service.js';
 import { SubjectsRegistry } from '../src/records/subjects.registry.js';
 import { anonymous, createTestApp, createTestWorkshop, type TestWorkshop } from './helpers/test-app.js';
 import { CSV, download, makeJpeg, makePng, makeWebp, PDF, sha256, upload } from './evidence-fixtures.js';
 import { refusalCases } from './evidence-refusal-cases.js';
 import { disposition } from './support/disposition.js';
+import { lockAsApproved } from './support/stand-in-approval.js';
 
 /** What a driver's spec provides: a way to start the app on it and to see every stored key. */
 export interface DriverHarness {
@@ -250,7 +250,7 @@ export function evidenceApiCases(driver: string, harness: DriverHarness) {
     expect((await harness.storedKeys()).length).toBe(before.length - 2); // the file and its thumbnail
     expect((await ctx.ws.as.owner.delete(`/api/evidence/${b.body.id}`)).status).toBe(204);
 
-    await ctx.app.get(RecordsService).lock(randomUUID(), [{ recordType: 'test-cut', recordId: ctx.checkId }]);
+    await lockAsApproved(ctx.app, [{ recordType: 'test-cut', recordId: ctx.checkId }]);
     const refused = await ctx.ws.as.builder.delete(`/api/evidence/${c.body.id}`);
     expect(refused.status).toBe(409);
     expect(refused.body.message).toMatch(/Bench check 1 is part of an approved commissioning record/);

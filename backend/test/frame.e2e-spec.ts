@@ -6,9 +6,8 @@ import { evaluateTestCut } from '../src/engine/test-cut.js';
 import { ReadinessRegistry } from '../src/records/readiness.registry.js';
 import { SubjectsRegistry } from '../src/records/subjects.registry.js';
 import { MachinesService } from '../src/machines/machines.service.js';
-import { RecordsService } from '../src/records/records.service.js';
-import { randomUUID } from 'node:crypto';
 import { anonymous, createTestApp, createTestWorkshop, type TestWorkshop } from './helpers/test-app.js';
+import { lockAsApproved } from './support/stand-in-approval.js';
 
 // Worked example derived from the parallelogram relation p², q² = a² + b² ∓ 2ab·cos θ.
 const example = referenceJson('squareness_diagonals.json').worked_examples_derived_here[0];
@@ -127,7 +126,7 @@ describe('frame: diagonal checks', () => {
     const list = await ws.as.viewer.get(`/api/machines/${plasma}/diagonal-checks`);
     expect(list.body[0].id).toBe(keep.body.id);
     expect((await ws.as.viewer.get(`/api/machines/${plasma}/history?limit=200`)).body.entries[0]).toMatchObject({ action: 'deleted', recordId: wrong.body.id });
-    await app.get(RecordsService).lock(randomUUID(), [{ recordType: 'diagonal-check', recordId: keep.body.id }]);
+    await lockAsApproved(app, [{ recordType: 'diagonal-check', recordId: keep.body.id }]);
     expect((await ws.as.builder.delete(`/api/machines/${plasma}/diagonal-checks/${keep.body.id}`)).status).toBe(409);
     expect((await ws.as.viewer.get(`/api/machines/${plasma}/diagonal-checks`)).body[0]).toMatchObject({ id: keep.body.id, locked: true });
   });

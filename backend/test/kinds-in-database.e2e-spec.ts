@@ -79,7 +79,7 @@ describe('kinds, units and references in the database', () => {
       code: '23514',
       constraint: 'audit_entries_record_type_check',
     });
-    expect(await refusal("insert into record_locks (record_type, record_id, approval_id) values ('sweep', $1, $2)", [randomUUID(), randomUUID()])).toEqual({
+    expect(await refusal("insert into record_locks (record_type, record_id, approval_id) values ('sweep', $1, $2)", [randomUUID(), randomUUID()])).toMatchObject({
       code: '23514',
       constraint: 'record_locks_record_type_check',
     });
@@ -104,6 +104,13 @@ describe('kinds, units and references in the database', () => {
     await pool.query('delete from rails where id = $1', [right]);
     const { rows } = await pool.query<{ partner_rail_id: string | null }>('select partner_rail_id from rails where id = $1', [left]);
     expect(rows[0].partner_rail_id).toBeNull();
+  });
+
+  it('refuses a lock that names no approval', async () => {
+    expect(await refusal("insert into record_locks (record_type, record_id, approval_id) values ('rail-sweep', $1, $2)", [randomUUID(), randomUUID()])).toEqual({
+      code: '23503',
+      constraint: 'record_locks_approval_id_approvals_id_fk',
+    });
   });
 
   it('refuses a history entry for a machine that does not exist', async () => {

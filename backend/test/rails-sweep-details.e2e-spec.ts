@@ -1,8 +1,8 @@
 import type { NestFastifyApplication } from '@nestjs/platform-fastify';
 import { randomUUID } from 'node:crypto';
-import { RecordsService } from '../src/records/records.service.js';
 import { createTestApp, createTestWorkshop, TEST_PASSWORD, type TestWorkshop } from './helpers/test-app.js';
 import { board, requestAndApprove, waiveAllBut } from './support/approval-flow.js';
+import { lockAsApproved } from './support/stand-in-approval.js';
 
 const RAIL = { label: 'Y1 (left)', axis: 'Y1', length: 800, holePitch: 60, firstHole: 40 };
 const stations = [0, 200, 400, 600, 800].map((position, i) => ({ position, reading: [0, 2, 1, 3, 2][i] }));
@@ -98,7 +98,7 @@ describe("correcting a sweep's details", () => {
 
   it('is refused (409) once an approval was based on the sweep', async () => {
     const sweep = await record();
-    await app.get(RecordsService).lock(randomUUID(), [{ recordType: 'rail-sweep', recordId: sweep.id }]);
+    await lockAsApproved(app, [{ recordType: 'rail-sweep', recordId: sweep.id }]);
     const res = await ws.as.builder.patch(`/api/sweeps/${sweep.id}`).send({ datum: 'Bar' });
     expect(res.status).toBe(409);
     expect(res.body.message).toMatch(/approved commissioning record/);

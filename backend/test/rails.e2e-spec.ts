@@ -1,7 +1,7 @@
 import type { NestFastifyApplication } from '@nestjs/platform-fastify';
 import { randomUUID } from 'node:crypto';
 import { anonymous, createTestApp, createTestWorkshop, type TestWorkshop } from './helpers/test-app.js';
-import { RecordsService } from '../src/records/records.service.js';
+import { lockAsApproved } from './support/stand-in-approval.js';
 
 const plasma = { name: 'Rail test table', kind: 'plasma', workArea: { x: 3000, y: 1500 } };
 const railBody = { label: 'Y1 (left)', axis: 'Y1', length: 1000, profileSize: 20, holePitch: 60, firstHole: 20 };
@@ -166,7 +166,7 @@ describe('rails', () => {
   it('refuses to delete a rail or sweep an approval was based on (409), and keeps them', async () => {
     const rail = await addRail({ label: 'Approved' });
     const sweep = (await ws.as.builder.post(`/api/rails/${rail.id}/sweeps`).send({ readingUnit: 'mm', phase: 'as-left', stations: stations([0, 0.005, 0]) })).body;
-    await app.get(RecordsService).lock(randomUUID(), [{ recordType: 'rail-sweep', recordId: sweep.id }]);
+    await lockAsApproved(app, [{ recordType: 'rail-sweep', recordId: sweep.id }]);
     const res = await ws.as.owner.delete(`/api/rails/${rail.id}`);
     expect(res.status).toBe(409);
     expect(res.body.message).toMatch(/approved commissioning record/);

@@ -1,10 +1,10 @@
 import type { NestFastifyApplication } from '@nestjs/platform-fastify';
 import { randomUUID } from 'node:crypto';
 import { ReadinessRegistry } from '../src/records/readiness.registry.js';
-import { RecordsService } from '../src/records/records.service.js';
 import { SubjectsRegistry } from '../src/records/subjects.registry.js';
 import { MachinesService } from '../src/machines/machines.service.js';
 import { anonymous, createTestApp, createTestWorkshop, type Agent, type TestWorkshop } from './helpers/test-app.js';
+import { lockAsApproved } from './support/stand-in-approval.js';
 
 interface WalkItem {
   id: string;
@@ -149,7 +149,7 @@ describe('safety walk', () => {
   it('an approved walk is locked (409); a new walk can then be started', async () => {
     const machine = await newMachine();
     const res = await answer(ws.as.technician, machine, 'stop-limits', { answer: 'yes' });
-    await app.get(RecordsService).lock(randomUUID(), [{ recordType: 'safety-walk', recordId: res.body.id }]);
+    await lockAsApproved(app, [{ recordType: 'safety-walk', recordId: res.body.id }]);
     const refused = await answer(ws.as.technician, machine, 'stop-limits', { answer: 'no' });
     expect(refused.status).toBe(409);
     expect((await walkOf(ws.as.viewer, machine)).locked).toBe(true);

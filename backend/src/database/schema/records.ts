@@ -2,6 +2,7 @@ import { bigint, index, jsonb, pgTable, text, timestamp, uniqueIndex, uuid } fro
 import { sql } from 'drizzle-orm';
 import { id, oneOf } from './columns.js';
 import { machines } from './machines.js';
+import { approvals } from './approvals.js';
 import { workshops } from './workshops.js';
 import { users } from './users.js';
 import { RECORD_TYPE_NAMES, SIGNED_RECORD_TYPES, type RecordType, type SignedRecordType } from '../../records/kinds.js';
@@ -68,7 +69,7 @@ export const recordLocks = pgTable(
     id: id(),
     recordType: text('record_type').$type<SignedRecordType>().notNull(),
     recordId: uuid('record_id').notNull(),
-    approvalId: uuid('approval_id').notNull(),
+    approvalId: uuid('approval_id').notNull().references(() => approvals.id),
     lockedAt: timestamp('locked_at', { withTimezone: true }).notNull().defaultNow(),
   },
   (t) => [
