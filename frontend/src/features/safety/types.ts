@@ -1,24 +1,10 @@
-export type SafetyAnswer = 'yes' | 'no' | 'na';
-export type SafetySection = 'stopping' | 'electrical' | 'cutting' | 'people';
-export type WalkStatus = 'not-started' | 'within-target' | 'outside-target';
+import type { AnswerOf } from '../../lib/api/schemas';
 
-export interface WalkItem {
-  id: string;
-  text: string;
-  builtIn: boolean;
-  answer: { id: string; answer: SafetyAnswer; note: string; answeredBy: { id: string | null; name: string }; answeredAt: string } | null;
-}
-
-export interface SafetyWalk {
-  id: string | null;
-  machineId: string;
-  startedAt: string | null;
-  status: WalkStatus;
-  counts: { total: number; answered: number; yes: number; no: number; na: number };
-  blocking: boolean;
-  locked: boolean;
-  sections: { id: SafetySection; label: string; items: WalkItem[] }[];
-}
+export type SafetyWalk = AnswerOf<'/api/machines/{id}/safety-walk', 'get'>;
+export type WalkItem = SafetyWalk['sections'][number]['items'][number];
+export type SafetySection = SafetyWalk['sections'][number]['id'];
+export type SafetyAnswer = NonNullable<WalkItem['answer']>['answer'];
+export type WalkStatus = SafetyWalk['status'];
 
 export const ANSWER_LABELS: Record<SafetyAnswer, string> = { yes: 'Yes', no: 'No', na: 'Not applicable' };
 

@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { answer, client } from '../../../lib/api-client';
 import { MACHINE_STATE_KEYS } from '../../../lib/machine-state-keys';
 import type { Schemas } from '../../../lib/api/schemas';
 import { safetyKeys } from '../types';
@@ -10,7 +10,7 @@ export type SafetyItemInput = Schemas['CreateSafetyItemDto'];
 export function useAddSafetyItem() {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (input: SafetyItemInput) => api.post<{ id: string }>('/safety-items', input),
+    mutationFn: (body: SafetyItemInput) => answer(client.POST('/api/safety-items', { body })),
     // A new item is asked on every walk: each machine's walk is unfinished again until it is answered.
     onSuccess: () => Promise.all([safetyKeys.all, ...MACHINE_STATE_KEYS].map((queryKey) => qc.invalidateQueries({ queryKey }))),
   });

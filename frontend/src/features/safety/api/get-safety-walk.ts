@@ -1,8 +1,8 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
-import { safetyKeys, type SafetyWalk } from '../types';
+import { answer, client } from '../../../lib/api-client';
+import { safetyKeys } from '../types';
 
 export const safetyWalkQueryOptions = (machineId: string) =>
-  queryOptions({ queryKey: safetyKeys.walk(machineId), queryFn: () => api.get<SafetyWalk>(`/machines/${machineId}/safety-walk`) });
+  queryOptions({ queryKey: safetyKeys.walk(machineId), queryFn: () => answer(client.GET('/api/machines/{id}/safety-walk', { params: { path: { id: machineId } } })) });
 
 export const useSafetyWalk = (machineId: string) => useQuery(safetyWalkQueryOptions(machineId));
