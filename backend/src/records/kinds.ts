@@ -6,8 +6,9 @@
  * constraints (schema/records.ts, evidence.ts, approvals.ts); `kinds-in-database.e2e-spec.ts`
  * compares them with these lists so they cannot drift apart.
  *
- * A new kind is one entry here; the compiler then asks for it wherever its behaviour is needed
- * (SIGNED_RECORDS for a signed record), and `npm run db:generate` writes the new constraint.
+ * A new kind is one entry here (and its twin in frontend/src/lib/record-kinds.ts): signing finds
+ * a signed record's table by the name given here, and `npm run db:generate` writes the new
+ * constraint. See DEVELOPERS.md, "Adding a check type".
  */
 
 /** What one kind of record is: its plain name and what the rest of the product does with it. */
@@ -102,12 +103,6 @@ export const CHECK_KIND_NAMES = Object.keys(CHECK_KINDS) as CheckKind[];
 
 export const isCheckKind = (value: string): value is CheckKind => Object.hasOwn(CHECK_KINDS, value);
 
-/** The check's plain name ("Backlash check"). */
-export const checkLabel = (kind: CheckKind): string => CHECK_KINDS[kind].label;
-
 /** The record type's plain name; a type no longer known (older history) in words made from it. */
 export const recordTypeLabel = (recordType: string): string =>
   isRecordType(recordType) ? RECORD_TYPES[recordType].label : recordType.replace(/-/g, ' ').replace(/^./, (c) => c.toUpperCase());
-
-/** `'a', 'b'` for a CHECK constraint: the values are the registry's own, never user input. */
-export const sqlList = (values: readonly string[]): string => values.map((v) => `'${v.replace(/'/g, "''")}'`).join(', ');
