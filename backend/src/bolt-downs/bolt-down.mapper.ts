@@ -5,19 +5,19 @@ import { finiteList, UNREADABLE_INPUT } from '../common/stored-result.js';
 
 export interface BoltDownHoleResponse {
   index: number;
-  /** Hole centre from the rail's start, mm. */
   /** Hole centre, mm from the rail's start; `at` the same in the bolt-down's lengthUnit. */
   position: number;
+  /** Hole centre from the rail's start, in the bolt-down's lengthUnit. */
   at: number;
   /** Rank in the proposed fixing order (0 = first). */
   order: number;
-  /** Reading to aim for, in the bolt-down's unit (null until the first hole is fixed). */
+  /** Reading to aim for, in the bolt-down's readingUnit (null until the first hole is fixed). */
   target: number | null;
   targetMm: number | null;
-  /** Reading as typed, in the bolt-down's unit. */
+  /** Reading as typed, in the bolt-down's readingUnit. */
   reading: number | null;
   readingMm: number | null;
-  /** reading − target, in the bolt-down's unit. */
+  /** reading − target, in the bolt-down's readingUnit. */
   difference: number | null;
   /** Within ±band of the aim (null when there is no reading or no aim yet). */
   onTarget: boolean | null;
@@ -30,17 +30,21 @@ export interface BoltDownResponse {
   id: string;
   railId: string;
   machineId: string;
+  /** The rail bolted down; its length in mm. */
   rail: { label: string; axis: string; lengthMm: number };
   mode: BoltDownRow['mode'];
   /** Readings, aims and the band are in readingUnit; hole positions `at` in lengthUnit (`position` in mm). */
   readingUnit: BoltDownRow['readingUnit'];
   lengthUnit: BoltDownRow['lengthUnit'];
-  /** Half-width around the aim that counts as on target, in the unit and in mm. */
+  /** Half-width around the aim that counts as on target, in readingUnit (`bandMm`: in mm). */
   band: number;
   bandMm: number;
   holes: BoltDownHoleResponse[];
+  /** Index of the hole to fix next (null when every hole is fixed). */
   nextHole: number | null;
+  /** How many holes are fixed. */
   fixedCount: number;
+  /** How many holes the rail has. */
   holeCount: number;
   complete: boolean;
   finalSweepId: string | null;

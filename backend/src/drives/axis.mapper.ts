@@ -26,15 +26,21 @@ export interface AxisResponse {
   /** The same drive in mm. */
   driveMm: DriveRecord;
   driveSummary: string;
+  /** Full steps per motor revolution. */
   motorStepsPerRev: number;
+  /** Microsteps per full step set on the driver. */
   microsteps: number;
+  /** Motor turns per turn of the screw or pinion (no unit). */
   gearRatio: number;
+  /** Steps per mm in use in the controller. */
   stepsPerMm: number;
+  /** Steps per mm the drive's geometry gives. */
   theoreticalStepsPerMm: number;
   /** Value in use against the drive's theoretical value, %. */
   stepsPerMmDifferencePercent: number;
   /** Steps per inch (× 25.4), shown beside steps per mm for axes set up in inches. */
   stepsPerInch: number;
+  /** Steps per inch the drive's geometry gives (× 25.4). */
   theoreticalStepsPerInch: number;
   travelPerRevMm: number;
   /** Travel per revolution in lengthUnit. */

@@ -8,15 +8,20 @@ export interface HolePatternResponse {
   name: string;
   reference: PatternReference;
   lengthUnit: PatternUnit;
-  /** Outline in mm; `width`/`height` as entered, in `unit`. */
+  /** Outline width in mm; `width`/`height` as entered, in lengthUnit. */
   widthMm: number;
+  /** Outline height in mm. */
   heightMm: number;
+  /** Outline width as entered, in lengthUnit. */
   width: number;
+  /** Outline height as entered, in lengthUnit. */
   height: number;
   entry: PatternEntryKind;
-  /** The entry as typed, in `unit`: one of these is set, matching `entry`. */
+  /** The entry as typed, in lengthUnit (positions, pitches and diameters; counts are counts): one of these is set, matching `entry`. */
   holesEntered: { x: number; y: number; diameter: number }[] | null;
+  /** A grid entry as typed: origin, pitches and diameter in lengthUnit. */
   grid: Omit<Extract<StoredPatternEntry, { kind: 'grid' }>, 'kind'> | null;
+  /** A bolt-circle entry as typed: centre and diameters in lengthUnit. */
   circle: Omit<Extract<StoredPatternEntry, { kind: 'circle' }>, 'kind'> | null;
   /** Every hole centre and diameter, mm, from the outline's lower-left corner. */
   holes: StoredHole[];

@@ -13,11 +13,11 @@ export interface MachineResponse {
   name: string;
   kind: MachineRow['kind'];
   state: MachineRow['state'];
-  /** In mm. */
+  /** Usable cutting area along X and Y, in mm. */
   workArea: { x: number; y: number };
   /** The unit the work area was typed in and is shown in. */
   lengthUnit: LengthUnit;
-  /** The work area in lengthUnit. */
+  /** The work area along X and Y, in lengthUnit. */
   workAreaInLengthUnit: { x: number; y: number };
   notes: string;
   targetSet: { id: string; name: string };
@@ -27,7 +27,7 @@ export interface MachineResponse {
 }
 
 export interface MachineListItem extends MachineResponse {
-  /** Counted as the readiness board counts (waivers applied); `blocking` names the first check that stops approval. */
+  /** Numbers of required checks, counted as the readiness board counts (waivers applied); `blocking` names the first check that stops approval. */
   checks: { total: number; within: number; outside: number; waived: number; notStarted: number; blocking: BlockingCheckRef | null };
 }
 

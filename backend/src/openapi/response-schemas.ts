@@ -5069,19 +5069,24 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
             "type": "string"
           },
           "motorStepsPerRev": {
-            "type": "number"
+            "type": "number",
+            "description": "Full steps per motor revolution."
           },
           "microsteps": {
-            "type": "number"
+            "type": "number",
+            "description": "Microsteps per full step set on the driver."
           },
           "gearRatio": {
-            "type": "number"
+            "type": "number",
+            "description": "Motor turns per turn of the screw or pinion (no unit)."
           },
           "stepsPerMm": {
-            "type": "number"
+            "type": "number",
+            "description": "Steps per mm in use in the controller."
           },
           "theoreticalStepsPerMm": {
-            "type": "number"
+            "type": "number",
+            "description": "Steps per mm the drive's geometry gives."
           },
           "stepsPerMmDifferencePercent": {
             "type": "number",
@@ -5092,7 +5097,8 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
             "description": "Steps per inch (× 25.4), shown beside steps per mm for axes set up in inches."
           },
           "theoreticalStepsPerInch": {
-            "type": "number"
+            "type": "number",
+            "description": "Steps per inch the drive's geometry gives (× 25.4)."
           },
           "travelPerRevMm": {
             "type": "number"
@@ -9123,7 +9129,7 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
             "notStarted",
             "blocking"
           ],
-          "description": "Counted as the readiness board counts (waivers applied); `blocking` names the first check that stops approval."
+          "description": "Numbers of required checks, counted as the readiness board counts (waivers applied); `blocking` names the first check that stops approval."
         },
         "id": {
           "type": "string"
@@ -9164,7 +9170,7 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
             "x",
             "y"
           ],
-          "description": "In mm."
+          "description": "Usable cutting area along X and Y, in mm."
         },
         "lengthUnit": {
           "type": "string",
@@ -9190,7 +9196,7 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
             "x",
             "y"
           ],
-          "description": "The work area in lengthUnit."
+          "description": "The work area along X and Y, in lengthUnit."
         },
         "notes": {
           "type": "string"
@@ -9319,7 +9325,7 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
             "x",
             "y"
           ],
-          "description": "In mm."
+          "description": "Usable cutting area along X and Y, in mm."
         },
         "lengthUnit": {
           "type": "string",
@@ -9345,7 +9351,7 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
             "x",
             "y"
           ],
-          "description": "The work area in lengthUnit."
+          "description": "The work area along X and Y, in lengthUnit."
         },
         "notes": {
           "type": "string"
@@ -9535,7 +9541,8 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
       "type": "object",
       "properties": {
         "sweepCount": {
-          "type": "number"
+          "type": "number",
+          "description": "How many sweeps the rail has."
         },
         "latestSweep": {
           "allOf": [
@@ -9568,18 +9575,21 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
           "description": "Unit the lengths below were typed in; `length`, `holePitch`, … are in it, the `…Mm` twins in mm."
         },
         "length": {
-          "type": "number"
+          "type": "number",
+          "description": "Rail length, in lengthUnit."
         },
         "holePitch": {
-          "type": "number"
+          "type": "number",
+          "description": "Distance between neighbouring mounting holes, in lengthUnit."
         },
         "firstHole": {
-          "type": "number"
+          "type": "number",
+          "description": "First hole's centre from the rail's start, in lengthUnit."
         },
         "spacing": {
           "type": "number",
           "nullable": true,
-          "description": "Distance to the partner rail (a in S = a × K); null until entered."
+          "description": "Distance to the partner rail (a in S = a × K), in lengthUnit; null until entered."
         },
         "endDistance": {
           "type": "number",
@@ -9590,11 +9600,12 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
         },
         "lengthMm": {
           "type": "number",
-          "description": "Goes out as null when the stored length cannot be read (see `unreadable`)."
+          "description": "Rail length in mm; goes out as null when the stored length cannot be read (see `unreadable`)."
         },
         "profileSize": {
           "type": "number",
-          "nullable": true
+          "nullable": true,
+          "description": "Profile (rail) size, in mm (15, 20, 25 …); null when not entered."
         },
         "holePitchMm": {
           "type": "number"
@@ -9697,11 +9708,12 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
         "leastSquaresStraightness": {
           "type": "number",
           "nullable": true,
-          "description": "null when the stored result cannot be read (see `unreadable`)."
+          "description": "Straightness about the least-squares line, in mm; null when the stored result cannot be read (see `unreadable`)."
         },
         "minimumZoneStraightness": {
           "type": "number",
-          "nullable": true
+          "nullable": true,
+          "description": "Straightness by the minimum zone (the narrowest band holding every reading), in mm; null when unreadable."
         },
         "status": {
           "type": "string",
@@ -9807,18 +9819,21 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
           "description": "Unit the lengths below were typed in; `length`, `holePitch`, … are in it, the `…Mm` twins in mm."
         },
         "length": {
-          "type": "number"
+          "type": "number",
+          "description": "Rail length, in lengthUnit."
         },
         "holePitch": {
-          "type": "number"
+          "type": "number",
+          "description": "Distance between neighbouring mounting holes, in lengthUnit."
         },
         "firstHole": {
-          "type": "number"
+          "type": "number",
+          "description": "First hole's centre from the rail's start, in lengthUnit."
         },
         "spacing": {
           "type": "number",
           "nullable": true,
-          "description": "Distance to the partner rail (a in S = a × K); null until entered."
+          "description": "Distance to the partner rail (a in S = a × K), in lengthUnit; null until entered."
         },
         "endDistance": {
           "type": "number",
@@ -9829,11 +9844,12 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
         },
         "lengthMm": {
           "type": "number",
-          "description": "Goes out as null when the stored length cannot be read (see `unreadable`)."
+          "description": "Rail length in mm; goes out as null when the stored length cannot be read (see `unreadable`)."
         },
         "profileSize": {
           "type": "number",
-          "nullable": true
+          "nullable": true,
+          "description": "Profile (rail) size, in mm (15, 20, 25 …); null when not entered."
         },
         "holePitchMm": {
           "type": "number"
@@ -9928,7 +9944,8 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
           "type": "string"
         },
         "stationCount": {
-          "type": "number"
+          "type": "number",
+          "description": "How many stations were read."
         },
         "createdAt": {
           "type": "string"
@@ -9952,11 +9969,12 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
         "leastSquaresStraightness": {
           "type": "number",
           "nullable": true,
-          "description": "null when the stored result cannot be read (see `unreadable`)."
+          "description": "Straightness about the least-squares line, in mm; null when the stored result cannot be read (see `unreadable`)."
         },
         "minimumZoneStraightness": {
           "type": "number",
-          "nullable": true
+          "nullable": true,
+          "description": "Straightness by the minimum zone (the narrowest band holding every reading), in mm; null when unreadable."
         },
         "status": {
           "type": "string",
@@ -10106,7 +10124,8 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
               "readingMm"
             ]
           },
-          "nullable": true
+          "nullable": true,
+          "description": "Each station: `position` in lengthUnit and in mm, `reading` in readingUnit as typed and in mm."
         },
         "localSlope": {
           "allOf": [
@@ -10127,11 +10146,13 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
         },
         "resolution": {
           "type": "number",
-          "nullable": true
+          "nullable": true,
+          "description": "Smallest step the indicator reads, in readingUnit."
         },
         "temperatureC": {
           "type": "number",
-          "nullable": true
+          "nullable": true,
+          "description": "Air temperature while the sweep was taken, °C."
         },
         "phase": {
           "type": "string",
@@ -10149,7 +10170,8 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
         },
         "torqueNm": {
           "type": "number",
-          "nullable": true
+          "nullable": true,
+          "description": "Bolt tightening torque, N·m."
         },
         "datum": {
           "type": "string",
@@ -10345,7 +10367,8 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
             "label",
             "axis",
             "lengthMm"
-          ]
+          ],
+          "description": "The rail bolted down; its length in mm."
         },
         "mode": {
           "type": "string",
@@ -10375,7 +10398,7 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
         },
         "band": {
           "type": "number",
-          "description": "Half-width around the aim that counts as on target, in the unit and in mm."
+          "description": "Half-width around the aim that counts as on target, in readingUnit (`bandMm`: in mm)."
         },
         "bandMm": {
           "type": "number"
@@ -10388,13 +10411,16 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
         },
         "nextHole": {
           "type": "number",
-          "nullable": true
+          "nullable": true,
+          "description": "Index of the hole to fix next (null when every hole is fixed)."
         },
         "fixedCount": {
-          "type": "number"
+          "type": "number",
+          "description": "How many holes are fixed."
         },
         "holeCount": {
-          "type": "number"
+          "type": "number",
+          "description": "How many holes the rail has."
         },
         "complete": {
           "type": "boolean"
@@ -10472,7 +10498,8 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
           "description": "Hole centre, mm from the rail's start; `at` the same in the bolt-down's lengthUnit."
         },
         "at": {
-          "type": "number"
+          "type": "number",
+          "description": "Hole centre from the rail's start, in the bolt-down's lengthUnit."
         },
         "order": {
           "type": "number",
@@ -10481,7 +10508,7 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
         "target": {
           "type": "number",
           "nullable": true,
-          "description": "Reading to aim for, in the bolt-down's unit (null until the first hole is fixed)."
+          "description": "Reading to aim for, in the bolt-down's readingUnit (null until the first hole is fixed)."
         },
         "targetMm": {
           "type": "number",
@@ -10490,7 +10517,7 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
         "reading": {
           "type": "number",
           "nullable": true,
-          "description": "Reading as typed, in the bolt-down's unit."
+          "description": "Reading as typed, in the bolt-down's readingUnit."
         },
         "readingMm": {
           "type": "number",
@@ -10499,7 +10526,7 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
         "difference": {
           "type": "number",
           "nullable": true,
-          "description": "reading − target, in the bolt-down's unit."
+          "description": "reading − target, in the bolt-down's readingUnit."
         },
         "onTarget": {
           "type": "boolean",
@@ -10569,7 +10596,8 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
             "label",
             "axis",
             "lengthMm"
-          ]
+          ],
+          "description": "The rail bolted down; its length in mm."
         },
         "mode": {
           "type": "string",
@@ -10599,7 +10627,7 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
         },
         "band": {
           "type": "number",
-          "description": "Half-width around the aim that counts as on target, in the unit and in mm."
+          "description": "Half-width around the aim that counts as on target, in readingUnit (`bandMm`: in mm)."
         },
         "bandMm": {
           "type": "number"
@@ -10612,13 +10640,16 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
         },
         "nextHole": {
           "type": "number",
-          "nullable": true
+          "nullable": true,
+          "description": "Index of the hole to fix next (null when every hole is fixed)."
         },
         "fixedCount": {
-          "type": "number"
+          "type": "number",
+          "description": "How many holes are fixed."
         },
         "holeCount": {
-          "type": "number"
+          "type": "number",
+          "description": "How many holes the rail has."
         },
         "complete": {
           "type": "boolean"
@@ -11546,19 +11577,24 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
           "type": "string"
         },
         "motorStepsPerRev": {
-          "type": "number"
+          "type": "number",
+          "description": "Full steps per motor revolution."
         },
         "microsteps": {
-          "type": "number"
+          "type": "number",
+          "description": "Microsteps per full step set on the driver."
         },
         "gearRatio": {
-          "type": "number"
+          "type": "number",
+          "description": "Motor turns per turn of the screw or pinion (no unit)."
         },
         "stepsPerMm": {
-          "type": "number"
+          "type": "number",
+          "description": "Steps per mm in use in the controller."
         },
         "theoreticalStepsPerMm": {
-          "type": "number"
+          "type": "number",
+          "description": "Steps per mm the drive's geometry gives."
         },
         "stepsPerMmDifferencePercent": {
           "type": "number",
@@ -11569,7 +11605,8 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
           "description": "Steps per inch (× 25.4), shown beside steps per mm for axes set up in inches."
         },
         "theoreticalStepsPerInch": {
-          "type": "number"
+          "type": "number",
+          "description": "Steps per inch the drive's geometry gives (× 25.4)."
         },
         "travelPerRevMm": {
           "type": "number"
@@ -12297,16 +12334,19 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
         },
         "widthMm": {
           "type": "number",
-          "description": "Outline in mm; `width`/`height` as entered, in `unit`."
+          "description": "Outline width in mm; `width`/`height` as entered, in lengthUnit."
         },
         "heightMm": {
-          "type": "number"
+          "type": "number",
+          "description": "Outline height in mm."
         },
         "width": {
-          "type": "number"
+          "type": "number",
+          "description": "Outline width as entered, in lengthUnit."
         },
         "height": {
-          "type": "number"
+          "type": "number",
+          "description": "Outline height as entered, in lengthUnit."
         },
         "entry": {
           "type": "string",
@@ -12338,7 +12378,7 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
             ]
           },
           "nullable": true,
-          "description": "The entry as typed, in `unit`: one of these is set, matching `entry`."
+          "description": "The entry as typed, in lengthUnit (positions, pitches and diameters; counts are counts): one of these is set, matching `entry`."
         },
         "grid": {
           "type": "object",
@@ -12374,7 +12414,8 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
             "pitchY",
             "diameter"
           ],
-          "nullable": true
+          "nullable": true,
+          "description": "A grid entry as typed: origin, pitches and diameter in lengthUnit."
         },
         "circle": {
           "type": "object",
@@ -12406,7 +12447,8 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
             "count",
             "startAngleDeg"
           ],
-          "nullable": true
+          "nullable": true,
+          "description": "A bolt-circle entry as typed: centre and diameters in lengthUnit."
         },
         "holes": {
           "type": "array",

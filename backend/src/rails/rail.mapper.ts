@@ -25,16 +25,20 @@ export interface RailResponse {
   axis: string;
   /** Unit the lengths below were typed in; `length`, `holePitch`, … are in it, the `…Mm` twins in mm. */
   lengthUnit: RailRow['lengthUnit'];
+  /** Rail length, in lengthUnit. */
   length: number;
+  /** Distance between neighbouring mounting holes, in lengthUnit. */
   holePitch: number;
+  /** First hole's centre from the rail's start, in lengthUnit. */
   firstHole: number;
-  /** Distance to the partner rail (a in S = a × K); null until entered. */
+  /** Distance to the partner rail (a in S = a × K), in lengthUnit; null until entered. */
   spacing: number | null;
   /** The end distance the holes keep, in lengthUnit; `endDistanceIsDefault` when not entered. */
   endDistance: number;
   endDistanceIsDefault: boolean;
-  /** Goes out as null when the stored length cannot be read (see `unreadable`). */
+  /** Rail length in mm; goes out as null when the stored length cannot be read (see `unreadable`). */
   lengthMm: number;
+  /** Profile (rail) size, in mm (15, 20, 25 …); null when not entered. */
   profileSize: number | null;
   holePitchMm: number;
   firstHoleMm: number;
@@ -55,8 +59,9 @@ export interface SweepSummary {
   takenAt: string;
   phase: string;
   datum: string | null;
-  /** null when the stored result cannot be read (see `unreadable`). */
+  /** Straightness about the least-squares line, in mm; null when the stored result cannot be read (see `unreadable`). */
   leastSquaresStraightness: number | null;
+  /** Straightness by the minimum zone (the narrowest band holding every reading), in mm; null when unreadable. */
   minimumZoneStraightness: number | null;
   status: SweepRow['status'];
   target: SweepRow['target'];
@@ -73,12 +78,14 @@ export interface SweepListItem extends SweepSummary {
   railId: string;
   machineId: string;
   takenBy: string;
+  /** How many stations were read. */
   stationCount: number;
   createdAt: string;
   locked: boolean;
 }
 
 export interface RailListItem extends RailResponse {
+  /** How many sweeps the rail has. */
   sweepCount: number;
   latestSweep: SweepSummary | null;
 }
@@ -91,15 +98,19 @@ export interface SweepResponse {
   lengthUnit: SweepRow['lengthUnit'];
   readingUnit: SweepRow['readingUnit'];
   face: SweepRow['face'];
+  /** Each station: `position` in lengthUnit and in mm, `reading` in readingUnit as typed and in mm. */
   stations: { position: number; positionMm: number; reading: number; readingMm: number }[] | null;
   localSlope: StoredLocalSlope | null;
   warnings: ResultWarning[];
   instrument: string;
+  /** Smallest step the indicator reads, in readingUnit. */
   resolution: number | null;
+  /** Air temperature while the sweep was taken, °C. */
   temperatureC: number | null;
   phase: SweepRow['phase'];
   takenBy: string;
   boltSize: string | null;
+  /** Bolt tightening torque, N·m. */
   torqueNm: number | null;
   datum: string | null;
   notes: string;

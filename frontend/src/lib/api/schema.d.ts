@@ -2367,7 +2367,7 @@ export interface components {
             approved: boolean;
         };
         MachineListItem: {
-            /** @description Counted as the readiness board counts (waivers applied); `blocking` names the first check that stops approval. */
+            /** @description Numbers of required checks, counted as the readiness board counts (waivers applied); `blocking` names the first check that stops approval. */
             checks: {
                 total: number;
                 within: number;
@@ -2382,7 +2382,7 @@ export interface components {
             kind: "plasma" | "router" | "other";
             /** @enum {string} */
             state: "being-built" | "awaiting-approval" | "ready-to-cut" | "recheck-due" | "reopened" | "retired";
-            /** @description In mm. */
+            /** @description Usable cutting area along X and Y, in mm. */
             workArea: {
                 x: number;
                 y: number;
@@ -2392,7 +2392,7 @@ export interface components {
              * @enum {string}
              */
             lengthUnit: "mm" | "um" | "in" | "thou";
-            /** @description The work area in lengthUnit. */
+            /** @description The work area along X and Y, in lengthUnit. */
             workAreaInLengthUnit: {
                 x: number;
                 y: number;
@@ -2422,7 +2422,7 @@ export interface components {
             kind: "plasma" | "router" | "other";
             /** @enum {string} */
             state: "being-built" | "awaiting-approval" | "ready-to-cut" | "recheck-due" | "reopened" | "retired";
-            /** @description In mm. */
+            /** @description Usable cutting area along X and Y, in mm. */
             workArea: {
                 x: number;
                 y: number;
@@ -2432,7 +2432,7 @@ export interface components {
              * @enum {string}
              */
             lengthUnit: "mm" | "um" | "in" | "thou";
-            /** @description The work area in lengthUnit. */
+            /** @description The work area along X and Y, in lengthUnit. */
             workAreaInLengthUnit: {
                 x: number;
                 y: number;
@@ -2494,6 +2494,7 @@ export interface components {
             message: string;
         };
         RailListItem: {
+            /** @description How many sweeps the rail has. */
             sweepCount: number;
             latestSweep: components["schemas"]["SweepSummary"] | null;
             id: string;
@@ -2505,16 +2506,20 @@ export interface components {
              * @enum {string}
              */
             lengthUnit: "mm" | "um" | "in" | "thou";
+            /** @description Rail length, in lengthUnit. */
             length: number;
+            /** @description Distance between neighbouring mounting holes, in lengthUnit. */
             holePitch: number;
+            /** @description First hole's centre from the rail's start, in lengthUnit. */
             firstHole: number;
-            /** @description Distance to the partner rail (a in S = a × K); null until entered. */
+            /** @description Distance to the partner rail (a in S = a × K), in lengthUnit; null until entered. */
             spacing: number | null;
             /** @description The end distance the holes keep, in lengthUnit; `endDistanceIsDefault` when not entered. */
             endDistance: number;
             endDistanceIsDefault: boolean;
-            /** @description Goes out as null when the stored length cannot be read (see `unreadable`). In mm. */
+            /** @description Rail length in mm; goes out as null when the stored length cannot be read (see `unreadable`). */
             lengthMm: number;
+            /** @description Profile (rail) size, in mm (15, 20, 25 …); null when not entered. */
             profileSize: number | null;
             /** @description In mm. */
             holePitchMm: number;
@@ -2542,8 +2547,9 @@ export interface components {
             takenAt: string;
             phase: string;
             datum: string | null;
-            /** @description null when the stored result cannot be read (see `unreadable`). */
+            /** @description Straightness about the least-squares line, in mm; null when the stored result cannot be read (see `unreadable`). */
             leastSquaresStraightness: number | null;
+            /** @description Straightness by the minimum zone (the narrowest band holding every reading), in mm; null when unreadable. */
             minimumZoneStraightness: number | null;
             /** @enum {string} */
             status: "within-target" | "outside-target";
@@ -2579,16 +2585,20 @@ export interface components {
              * @enum {string}
              */
             lengthUnit: "mm" | "um" | "in" | "thou";
+            /** @description Rail length, in lengthUnit. */
             length: number;
+            /** @description Distance between neighbouring mounting holes, in lengthUnit. */
             holePitch: number;
+            /** @description First hole's centre from the rail's start, in lengthUnit. */
             firstHole: number;
-            /** @description Distance to the partner rail (a in S = a × K); null until entered. */
+            /** @description Distance to the partner rail (a in S = a × K), in lengthUnit; null until entered. */
             spacing: number | null;
             /** @description The end distance the holes keep, in lengthUnit; `endDistanceIsDefault` when not entered. */
             endDistance: number;
             endDistanceIsDefault: boolean;
-            /** @description Goes out as null when the stored length cannot be read (see `unreadable`). In mm. */
+            /** @description Rail length in mm; goes out as null when the stored length cannot be read (see `unreadable`). */
             lengthMm: number;
+            /** @description Profile (rail) size, in mm (15, 20, 25 …); null when not entered. */
             profileSize: number | null;
             /** @description In mm. */
             holePitchMm: number;
@@ -2616,6 +2626,7 @@ export interface components {
             railId: string;
             machineId: string;
             takenBy: string;
+            /** @description How many stations were read. */
             stationCount: number;
             createdAt: string;
             locked: boolean;
@@ -2623,8 +2634,9 @@ export interface components {
             takenAt: string;
             phase: string;
             datum: string | null;
-            /** @description null when the stored result cannot be read (see `unreadable`). */
+            /** @description Straightness about the least-squares line, in mm; null when the stored result cannot be read (see `unreadable`). */
             leastSquaresStraightness: number | null;
+            /** @description Straightness by the minimum zone (the narrowest band holding every reading), in mm; null when unreadable. */
             minimumZoneStraightness: number | null;
             /** @enum {string} */
             status: "within-target" | "outside-target";
@@ -2666,6 +2678,7 @@ export interface components {
             readingUnit: "mm" | "um" | "in" | "thou";
             /** @enum {string} */
             face: "side" | "top";
+            /** @description Each station: `position` in lengthUnit and in mm, `reading` in readingUnit as typed and in mm. */
             stations: {
                 position: number;
                 /** @description In mm. */
@@ -2677,13 +2690,15 @@ export interface components {
             localSlope: components["schemas"]["StoredLocalSlope"] | null;
             warnings: components["schemas"]["ResultWarning"][];
             instrument: string;
+            /** @description Smallest step the indicator reads, in readingUnit. */
             resolution: number | null;
-            /** @description In °C. */
+            /** @description Air temperature while the sweep was taken, °C. */
             temperatureC: number | null;
             /** @enum {string} */
             phase: "as-found" | "as-left";
             takenBy: string;
             boltSize: string | null;
+            /** @description Bolt tightening torque, N·m. */
             torqueNm: number | null;
             datum: string | null;
             notes: string;
@@ -2731,6 +2746,7 @@ export interface components {
             id: string;
             railId: string;
             machineId: string;
+            /** @description The rail bolted down; its length in mm. */
             rail: {
                 label: string;
                 axis: string;
@@ -2749,13 +2765,16 @@ export interface components {
              * @enum {string}
              */
             lengthUnit: "mm" | "um" | "in" | "thou";
-            /** @description Half-width around the aim that counts as on target, in the unit and in mm. */
+            /** @description Half-width around the aim that counts as on target, in readingUnit (`bandMm`: in mm). */
             band: number;
             /** @description In mm. */
             bandMm: number;
             holes: components["schemas"]["BoltDownHoleResponse"][];
+            /** @description Index of the hole to fix next (null when every hole is fixed). */
             nextHole: number | null;
+            /** @description How many holes are fixed. */
             fixedCount: number;
+            /** @description How many holes the rail has. */
             holeCount: number;
             complete: boolean;
             finalSweepId: string | null;
@@ -2775,18 +2794,19 @@ export interface components {
             index: number;
             /** @description Hole centre, mm from the rail's start; `at` the same in the bolt-down's lengthUnit. */
             position: number;
+            /** @description Hole centre from the rail's start, in the bolt-down's lengthUnit. */
             at: number;
             /** @description Rank in the proposed fixing order (0 = first). */
             order: number;
-            /** @description Reading to aim for, in the bolt-down's unit (null until the first hole is fixed). */
+            /** @description Reading to aim for, in the bolt-down's readingUnit (null until the first hole is fixed). */
             target: number | null;
             /** @description In mm. */
             targetMm: number | null;
-            /** @description Reading as typed, in the bolt-down's unit. */
+            /** @description Reading as typed, in the bolt-down's readingUnit. */
             reading: number | null;
             /** @description In mm. */
             readingMm: number | null;
-            /** @description reading − target, in the bolt-down's unit. */
+            /** @description reading − target, in the bolt-down's readingUnit. */
             difference: number | null;
             /** @description Within ±band of the aim (null when there is no reading or no aim yet). */
             onTarget: boolean | null;
@@ -2801,6 +2821,7 @@ export interface components {
             id: string;
             railId: string;
             machineId: string;
+            /** @description The rail bolted down; its length in mm. */
             rail: {
                 label: string;
                 axis: string;
@@ -2819,13 +2840,16 @@ export interface components {
              * @enum {string}
              */
             lengthUnit: "mm" | "um" | "in" | "thou";
-            /** @description Half-width around the aim that counts as on target, in the unit and in mm. */
+            /** @description Half-width around the aim that counts as on target, in readingUnit (`bandMm`: in mm). */
             band: number;
             /** @description In mm. */
             bandMm: number;
             holes: components["schemas"]["BoltDownHoleResponse"][];
+            /** @description Index of the hole to fix next (null when every hole is fixed). */
             nextHole: number | null;
+            /** @description How many holes are fixed. */
             fixedCount: number;
+            /** @description How many holes the rail has. */
             holeCount: number;
             complete: boolean;
             finalSweepId: string | null;
@@ -3110,17 +3134,21 @@ export interface components {
             /** @description The same drive in mm. */
             driveMm: components["schemas"]["DriveRecord"];
             driveSummary: string;
+            /** @description Full steps per motor revolution. */
             motorStepsPerRev: number;
+            /** @description Microsteps per full step set on the driver. */
             microsteps: number;
+            /** @description Motor turns per turn of the screw or pinion (no unit). */
             gearRatio: number;
-            /** @description In mm. */
+            /** @description Steps per mm in use in the controller. */
             stepsPerMm: number;
-            /** @description In mm. */
+            /** @description Steps per mm the drive's geometry gives. */
             theoreticalStepsPerMm: number;
             /** @description Value in use against the drive's theoretical value, %. */
             stepsPerMmDifferencePercent: number;
             /** @description Steps per inch (× 25.4), shown beside steps per mm for axes set up in inches. */
             stepsPerInch: number;
+            /** @description Steps per inch the drive's geometry gives (× 25.4). */
             theoreticalStepsPerInch: number;
             /** @description In mm. */
             travelPerRevMm: number;
@@ -3329,20 +3357,23 @@ export interface components {
              * @enum {string}
              */
             lengthUnit: "mm" | "um" | "in" | "thou";
-            /** @description Outline in mm; `width`/`height` as entered, in `unit`. */
+            /** @description Outline width in mm; `width`/`height` as entered, in lengthUnit. */
             widthMm: number;
-            /** @description In mm. */
+            /** @description Outline height in mm. */
             heightMm: number;
+            /** @description Outline width as entered, in lengthUnit. */
             width: number;
+            /** @description Outline height as entered, in lengthUnit. */
             height: number;
             /** @enum {string} */
             entry: "list" | "grid" | "circle";
-            /** @description The entry as typed, in `unit`: one of these is set, matching `entry`. */
+            /** @description The entry as typed, in lengthUnit (positions, pitches and diameters; counts are counts): one of these is set, matching `entry`. */
             holesEntered: {
                 x: number;
                 y: number;
                 diameter: number;
             }[] | null;
+            /** @description A grid entry as typed: origin, pitches and diameter in lengthUnit. */
             grid: {
                 columns: number;
                 rows: number;
@@ -3352,6 +3383,7 @@ export interface components {
                 pitchY: number;
                 diameter: number;
             } | null;
+            /** @description A bolt-circle entry as typed: centre and diameters in lengthUnit. */
             circle: {
                 diameter: number;
                 centreX: number;
@@ -8534,17 +8566,21 @@ export interface operations {
                         /** @description The same drive in mm. */
                         driveMm: components["schemas"]["DriveRecord"];
                         driveSummary: string;
+                        /** @description Full steps per motor revolution. */
                         motorStepsPerRev: number;
+                        /** @description Microsteps per full step set on the driver. */
                         microsteps: number;
+                        /** @description Motor turns per turn of the screw or pinion (no unit). */
                         gearRatio: number;
-                        /** @description In mm. */
+                        /** @description Steps per mm in use in the controller. */
                         stepsPerMm: number;
-                        /** @description In mm. */
+                        /** @description Steps per mm the drive's geometry gives. */
                         theoreticalStepsPerMm: number;
                         /** @description Value in use against the drive's theoretical value, %. */
                         stepsPerMmDifferencePercent: number;
                         /** @description Steps per inch (× 25.4), shown beside steps per mm for axes set up in inches. */
                         stepsPerInch: number;
+                        /** @description Steps per inch the drive's geometry gives (× 25.4). */
                         theoreticalStepsPerInch: number;
                         /** @description In mm. */
                         travelPerRevMm: number;
