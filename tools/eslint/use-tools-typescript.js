@@ -11,6 +11,7 @@ const toolsRoot = toolsTypescript.slice(0, toolsTypescript.lastIndexOf('/typescr
 const resolve = Module._resolveFilename;
 Module._resolveFilename = function resolveToolsTypescript(request, parent, ...rest) {
   if (request === 'typescript') return toolsTypescript;
-  if (request.startsWith('typescript/')) return resolve.call(this, toolsRoot + request.slice('typescript/'.length), parent, ...rest);
+  if (request.startsWith('typescript/'))
+    return resolve.call(this, toolsRoot + request.slice('typescript/'.length), parent, ...rest);
   return resolve.call(this, request, parent, ...rest);
 };

@@ -2,7 +2,21 @@ import { useState, type ReactNode } from 'react';
 import Snackbar from '@mui/material/Snackbar';
 import { NavLink, useNavigate } from 'react-router-dom';
 import {
-  Alert, AppBar, Box, Chip, Divider, Drawer, IconButton, List, ListItemButton, ListItemIcon, ListItemText, Toolbar, Tooltip, Typography, useMediaQuery,
+  Alert,
+  AppBar,
+  Box,
+  Chip,
+  Divider,
+  Drawer,
+  IconButton,
+  List,
+  ListItemButton,
+  ListItemIcon,
+  ListItemText,
+  Toolbar,
+  Tooltip,
+  Typography,
+  useMediaQuery,
 } from '@mui/material';
 import { useTheme } from '@mui/material/styles';
 import MenuIcon from '@mui/icons-material/Menu';
@@ -32,7 +46,11 @@ export function AppFrame({ user, children }: { user: User; children: ReactNode }
             component={NavLink}
             to={item.path}
             onClick={() => setOpen(false)}
-            sx={{ mx: 1, borderRadius: 1, '&.active': { bgcolor: 'rgba(29,79,74,0.12)', color: 'primary.dark', fontWeight: 600 } }}
+            sx={{
+              mx: 1,
+              borderRadius: 1,
+              '&.active': { bgcolor: 'rgba(29,79,74,0.12)', color: 'primary.dark', fontWeight: 600 },
+            }}
           >
             <ListItemIcon sx={{ minWidth: 36, color: 'inherit' }}>
               <item.icon fontSize="small" />
@@ -57,15 +75,28 @@ export function AppFrame({ user, children }: { user: User; children: ReactNode }
           <Typography variant="h6" component="span" sx={{ fontWeight: 700, letterSpacing: '0.02em' }}>
             Railwright
           </Typography>
-          <Divider orientation="vertical" flexItem sx={{ borderColor: 'rgba(255,255,255,0.25)', mx: 0.5, display: { xs: 'none', sm: 'block' } }} />
-          <Typography component="span" sx={{ flexGrow: 1, opacity: 0.9, display: { xs: 'none', sm: 'block' } }} noWrap data-testid="workshop-name">
+          <Divider
+            orientation="vertical"
+            flexItem
+            sx={{ borderColor: 'rgba(255,255,255,0.25)', mx: 0.5, display: { xs: 'none', sm: 'block' } }}
+          />
+          <Typography
+            component="span"
+            sx={{ flexGrow: 1, opacity: 0.9, display: { xs: 'none', sm: 'block' } }}
+            noWrap
+            data-testid="workshop-name"
+          >
             {user.workshop.name}
           </Typography>
           <Box sx={{ flexGrow: { xs: 1, sm: 0 } }} />
           <Typography component="span" sx={{ display: { xs: 'none', md: 'block' }, opacity: 0.9 }}>
             {user.name}
           </Typography>
-          <Chip label={ROLE_LABELS[user.role]} size="small" sx={{ bgcolor: 'secondary.main', color: 'secondary.contrastText', fontWeight: 600 }} />
+          <Chip
+            label={ROLE_LABELS[user.role]}
+            size="small"
+            sx={{ bgcolor: 'secondary.main', color: 'secondary.contrastText', fontWeight: 600 }}
+          />
           <Tooltip title="Sign out">
             <IconButton
               color="inherit"
@@ -77,14 +108,30 @@ export function AppFrame({ user, children }: { user: User; children: ReactNode }
           </Tooltip>
         </Toolbar>
       </AppBar>
-      <Snackbar open={logout.isError && !(logout.error as { status?: number } | null)?.status} onClose={() => logout.reset()} anchorOrigin={{ vertical: 'top', horizontal: 'center' }}>
-        <Alert severity="warning" onClose={() => logout.reset()} role="alert">{logout.error?.message}</Alert>
+      <Snackbar
+        open={logout.isError && !(logout.error as { status?: number } | null)?.status}
+        onClose={() => logout.reset()}
+        anchorOrigin={{ vertical: 'top', horizontal: 'center' }}
+      >
+        <Alert severity="warning" onClose={() => logout.reset()} role="alert">
+          {logout.error?.message}
+        </Alert>
       </Snackbar>
       <Drawer
         variant={wide ? 'permanent' : 'temporary'}
         open={wide || open}
         onClose={() => setOpen(false)}
-        sx={{ width: wide ? DRAWER_WIDTH : undefined, flexShrink: 0, '& .MuiDrawer-paper': { width: DRAWER_WIDTH, boxSizing: 'border-box', bgcolor: '#fbfaf7', border: 'none', borderRight: '1px solid #e2ded4' } }}
+        sx={{
+          width: wide ? DRAWER_WIDTH : undefined,
+          flexShrink: 0,
+          '& .MuiDrawer-paper': {
+            width: DRAWER_WIDTH,
+            boxSizing: 'border-box',
+            bgcolor: '#fbfaf7',
+            border: 'none',
+            borderRight: '1px solid #e2ded4',
+          },
+        }}
       >
         <Toolbar />
         {nav}
@@ -92,7 +139,8 @@ export function AppFrame({ user, children }: { user: User; children: ReactNode }
       <Box component="main" sx={{ flexGrow: 1, minWidth: 0, p: { xs: 2, sm: 3 }, pt: { xs: 10, sm: 11 } }}>
         <PrintStyles />
         <Typography data-print="only" variant="body2" color="text.secondary" sx={{ mb: 1 }}>
-          Railwright · {user.workshop.name} · printed {new Date().toISOString().slice(0, 16).replace('T', ' ')} UTC by {user.name}
+          Railwright · {user.workshop.name} · printed {new Date().toISOString().slice(0, 16).replace('T', ' ')} UTC by{' '}
+          {user.name}
         </Typography>
         {children}
       </Box>
