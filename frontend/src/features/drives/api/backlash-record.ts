@@ -1,16 +1,10 @@
 import { MACHINE_STATE_KEYS } from '../../../lib/machine-state-keys';
 import { useRecording } from '../../../lib/offline/use-command';
-import type { LengthUnit } from '../../../lib/units';
-import type { BacklashCheck, BacklashPosition } from '../backlash-types';
+import type { Schemas } from '../../../lib/api/schemas';
+import type { BacklashCheck } from '../backlash-types';
 import { driveKeys } from '../types';
 
-export interface BacklashInput {
-  lengthUnit: LengthUnit;
-  readingUnit: LengthUnit;
-  positions: BacklashPosition[];
-  resolution?: number;
-  notes?: string;
-}
+export type BacklashInput = Schemas['CreateBacklashCheckDto'];
 
 /** Records a backlash check through the device's queue of entries (see record-travel-trial.ts). */
 export function useRecordBacklash(axisId: string, axisName = '') {

@@ -1,23 +1,12 @@
 import { useQueryClient } from '@tanstack/react-query';
 import { MACHINE_STATE_KEYS } from '../../../lib/machine-state-keys';
 import { useRecording } from '../../../lib/offline/use-command';
-import type { LengthUnit } from '../../../lib/units';
+import type { Schemas } from '../../../lib/api/schemas';
 import { positioningRunQueryOptions } from './get-positioning-run';
-import { driveKeys, type PositioningRun, type ScaleMaterial } from '../types';
+import { driveKeys, type PositioningRun } from '../types';
 
-export interface PositioningRunInput {
-  /** Target positions. */
-  lengthUnit: LengthUnit;
-  /** Deviations and the instrument resolution. */
-  readingUnit: LengthUnit;
-  machineTemperature?: number;
-  scaleTemperature?: number;
-  scaleMaterial?: ScaleMaterial;
-  instrumentResolution?: number;
-  targets: number[];
-  runs: { direction: 'up' | 'down'; deviations: number[] }[];
-  notes?: string;
-}
+/** Targets in lengthUnit; deviations and the instrument resolution in readingUnit. */
+export type PositioningRunInput = Schemas['CreatePositioningRunDto'];
 
 /** Records a run through the device's queue of entries (see record-travel-trial.ts). */
 export function useRecordPositioningRun(axisId: string, axisName = '') {

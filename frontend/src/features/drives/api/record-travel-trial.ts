@@ -1,24 +1,12 @@
 import { useQueryClient } from '@tanstack/react-query';
 import { MACHINE_STATE_KEYS } from '../../../lib/machine-state-keys';
 import { useRecording } from '../../../lib/offline/use-command';
-import type { LengthUnit } from '../../../lib/units';
+import type { Schemas } from '../../../lib/api/schemas';
 import { travelTrialQueryOptions } from './get-travel-trial';
-import { driveKeys, type ScaleMaterial, type TravelTrial } from '../types';
+import { driveKeys, type TravelTrial } from '../types';
 
-export interface TravelTrialInput {
-  /** Commanded and measured moves. */
-  lengthUnit: LengthUnit;
-  /** Errors and residuals, and the instrument resolution. */
-  readingUnit: LengthUnit;
-  machineTemperature?: number;
-  scaleTemperature?: number;
-  scaleMaterial?: ScaleMaterial;
-  instrumentResolution?: number;
-  stepsPerMmUsed?: number;
-  moves: { commanded: number; measured: number }[];
-  throughOrigin?: boolean;
-  notes?: string;
-}
+/** Moves in lengthUnit; errors, residuals and the instrument resolution in readingUnit. */
+export type TravelTrialInput = Schemas['CreateTravelTrialDto'];
 
 /**
  * Records a trial through the device's queue of entries: sent at once with a connection, kept

@@ -1,14 +1,12 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { answer, client } from '../../../lib/api-client';
+import type { Schemas } from '../../../lib/api/schemas';
 import { machineKeys } from '../../../lib/machine-keys';
-import type { Machine } from '../types';
-import type { CreateMachineInput } from './create-machine';
 
 export function useUpdateMachine(id: string) {
   const qc = useQueryClient();
   return useMutation({
-    // Untyped until the description gives UpdateMachineDto its fields.
-    mutationFn: (patch: Partial<CreateMachineInput>) => api.patch<Machine>(`/machines/${id}`, patch),
+    mutationFn: (body: Schemas['UpdateMachineDto']) => answer(client.PATCH('/api/machines/{id}', { params: { path: { id } }, body })),
     onSuccess: (machine) => {
       qc.setQueryData(machineKeys.detail(id), machine);
       qc.invalidateQueries({ queryKey: machineKeys.all });

@@ -1,12 +1,12 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
-import { railKeys, type Rail } from '../types';
-import type { RailInput } from './create-rail';
+import { answer, client } from '../../../lib/api-client';
+import type { Schemas } from '../../../lib/api/schemas';
+import { railKeys } from '../types';
 
 export function useUpdateRail(id: string) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (patch: Partial<RailInput>) => api.patch<Rail>(`/rails/${id}`, patch),
+    mutationFn: (body: Schemas['UpdateRailDto']) => answer(client.PATCH('/api/rails/{id}', { params: { path: { id } }, body })),
     // A partner change touches the other rail too: refresh every rail query.
     onSuccess: () => qc.invalidateQueries({ queryKey: railKeys.all }),
   });
