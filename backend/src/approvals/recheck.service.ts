@@ -7,7 +7,11 @@ import { ApprovalNotifier } from './approval-notifier.js';
 import { ApprovalsRepository } from './approvals.repository.js';
 
 /** Scheduled work has no person behind it; the history names the product instead. */
-const scheduler = (workshopId: string): AuditActor => ({ id: null, name: 'Railwright (re-check schedule)', workshopId });
+const scheduler = (workshopId: string): AuditActor => ({
+  id: null,
+  name: 'Railwright (re-check schedule)',
+  workshopId,
+});
 
 /**
  * The reminder that an approval's re-check has fallen due. A machine reads as re-check due by

@@ -1,13 +1,14 @@
-import { ConfigModule, ConfigService } from '@nestjs/config';
+import { ConfigModule } from '@nestjs/config';
 import { loadConfig, type AppConfig } from './config.js';
 
-/** What ConfigService holds: the checked configuration under one key (never copied into process.env). */
+/**
+ * What ConfigService holds: the checked configuration under one key (an object, so ConfigModule
+ * copies none of it into process.env). Inject `ConfigService<RailwrightConfig, true>` and read
+ * `config.get('app', { infer: true })`.
+ */
 export interface RailwrightConfig {
   app: AppConfig;
 }
-
-/** Inject this (ConfigService typed for Railwright) and read `config.get('app', { infer: true })`. */
-export class AppConfigService extends ConfigService<RailwrightConfig, true> {}
 
 /**
  * ConfigModule for the environment the app is started with (tests start apps with their own).

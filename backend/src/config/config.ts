@@ -114,7 +114,7 @@ export function validateEnvironment(env: NodeJS.ProcessEnv): AppConfig {
 // (main.ts before the app exists, scripts, tests) read the same object.
 const made = new WeakMap<NodeJS.ProcessEnv, AppConfig>();
 
-/** The configuration outside Nest's injection (main.ts, scripts, tests); inside, inject AppConfigService. */
+/** The configuration outside Nest's injection (main.ts, scripts, tests); inside, inject ConfigService (app-config.module.ts). */
 export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
   let config = made.get(env);
   if (!config) made.set(env, (config = validateEnvironment(env)));
