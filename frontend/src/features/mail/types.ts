@@ -1,14 +1,7 @@
-export interface OutboxMessage {
-  id: string;
-  receivedAt: string;
-  from: string;
-  to: string[];
-  subject: string;
-  text: string;
-  /** A set-your-password link was cut out: only its recipient may see it. */
-  linkHidden: boolean;
-  attachments: { index: number; filename: string; contentType: string; sizeBytes: number }[];
-}
+import type { Schemas } from '../../lib/api/schemas';
+
+/** `linkHidden`: a set-your-password link was cut out; only its recipient may see it. */
+export type OutboxMessage = Schemas['OutboxMessage'];
 
 export const mailKeys = { outbox: ['mail', 'outbox'] as const };
 

@@ -1,27 +1,13 @@
-import { isLengthUnit, LENGTH_UNITS, UNIT_LABELS, type LengthUnit } from '../../lib/units';
+import type { Schemas } from '../../lib/api/schemas';
+import { isLengthUnit, LENGTH_UNITS, UNIT_LABELS } from '../../lib/units';
 
-export type TargetUnit = LengthUnit | 'mm/m' | '%' | 'days' | 'um/mm';
-export type StraightnessReference = 'minimum-zone' | 'least-squares';
+export type TargetSet = Schemas['TargetSetResponse'];
+export type TargetKey = keyof TargetSet['targets'];
+/** One target of a set, with its label; `reference` only on the rail straightness target (minimum zone when absent). */
+export type Target = TargetSet['targets'][TargetKey];
+export type TargetUnit = Target['unit'];
+export type StraightnessReference = NonNullable<Target['reference']>;
 export const REFERENCE_WORDS: Record<StraightnessReference, string> = { 'minimum-zone': 'minimum zone (ISO 1101)', 'least-squares': 'least squares line' };
-
-export interface Target {
-  value: number;
-  unit: TargetUnit;
-  source?: string;
-  /** Read on the rail straightness target: the line it is judged from (minimum zone when absent). */
-  reference?: StraightnessReference;
-  label: string;
-}
-
-export interface TargetSet {
-  id: string;
-  name: string;
-  description: string;
-  targets: Record<string, Target>;
-  updatedAt: string;
-  /** Machines judged against this set; `approved` ones keep the values they were signed with. */
-  usedBy: { id: string; name: string; state: string; approved: boolean }[];
-}
 
 export const UNIT_WORDS: Record<TargetUnit, string> = { ...UNIT_LABELS, 'mm/m': 'mm/m', '%': '%', days: 'days', 'um/mm': 'µm per mm of rail spacing' };
 

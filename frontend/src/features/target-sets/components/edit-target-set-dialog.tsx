@@ -2,7 +2,7 @@ import { useState } from 'react';
 import { Alert, Button, Dialog, DialogActions, DialogContent, DialogTitle, MenuItem, Stack, TextField, Typography } from '@mui/material';
 import { TargetSetUsers } from './target-set-users';
 import { useUpdateTargetSet } from '../api/update-target-set';
-import { REFERENCE_WORDS, unitChoices, UNIT_WORDS, type StraightnessReference, type TargetSet, type TargetUnit } from '../types';
+import { REFERENCE_WORDS, unitChoices, UNIT_WORDS, type StraightnessReference, type TargetKey, type TargetSet, type TargetUnit } from '../types';
 
 type Draft = Record<string, { value: string; unit: TargetUnit; source: string; reference?: StraightnessReference }>;
 
@@ -31,7 +31,7 @@ export function EditTargetSetDialog({ set, onClose }: { set: TargetSet; onClose:
           <TargetSetUsers set={set} />
           <TextField label="Name" value={name} onChange={(e) => setName(e.target.value)} error={!name.trim()} helperText={!name.trim() ? 'A name is needed' : undefined} />
           {Object.entries(draft).map(([key, d]) => {
-            const t = set.targets[key];
+            const t = set.targets[key as TargetKey];
             const wrong = bad.includes(key);
             const patch = (p: Partial<Draft[string]>) => setDraft({ ...draft, [key]: { ...d, ...p } });
             return (
