@@ -1,32 +1,9 @@
-export type EvidenceKind = 'photo' | 'file';
+import type { AnswerOf, Schemas } from '../../lib/api/schemas';
 
-export interface Evidence {
-  id: string;
-  machineId: string;
-  subject: { type: string; id: string; label: string };
-  kind: EvidenceKind;
-  fileName: string;
-  caption: string;
-  contentType: string;
-  /** Bytes. */
-  size: number;
-  sha256: string;
-  widthPx: number | null;
-  heightPx: number | null;
-  contentUrl: string;
-  thumbnailUrl: string | null;
-  uploadedBy: { id: string | null; name: string };
-  uploadedAt: string;
-  locked: boolean;
-  canDelete: boolean;
-  /** Attached while an approval stood: not part of what was signed. */
-  addedAfterApproval: boolean;
-}
-
-export interface EvidenceLimits {
-  maxBytes: number;
-  accepted: { contentType: string; label: string; kind: EvidenceKind; extensions: string[] }[];
-}
+/** `size` in bytes; `addedAfterApproval`: attached while an approval stood, not part of what was signed. */
+export type Evidence = Schemas['EvidenceResponse'];
+export type EvidenceKind = Evidence['kind'];
+export type EvidenceLimits = AnswerOf<'/api/evidence/limits', 'get'>;
 
 export interface EvidenceSubject {
   subjectType: string;

@@ -1,8 +1,8 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
-import { evidenceKeys, type EvidenceLimits } from '../types';
+import { answer, client } from '../../../lib/api-client';
+import { evidenceKeys } from '../types';
 
 export const evidenceLimitsQueryOptions = () =>
-  queryOptions({ queryKey: evidenceKeys.limits(), queryFn: () => api.get<EvidenceLimits>('/evidence/limits'), staleTime: Infinity });
+  queryOptions({ queryKey: evidenceKeys.limits(), queryFn: () => answer(client.GET('/api/evidence/limits')), staleTime: Infinity });
 
 export const useEvidenceLimits = () => useQuery(evidenceLimitsQueryOptions());

@@ -1,11 +1,11 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
-import { evidenceKeys, type Evidence } from '../types';
+import { answer, client } from '../../../lib/api-client';
+import { evidenceKeys } from '../types';
 
 export const subjectEvidenceQueryOptions = (subjectType: string, subjectId: string) =>
   queryOptions({
     queryKey: evidenceKeys.subject(subjectType, subjectId),
-    queryFn: () => api.get<Evidence[]>(`/evidence?subjectType=${encodeURIComponent(subjectType)}&subjectId=${encodeURIComponent(subjectId)}`),
+    queryFn: () => answer(client.GET('/api/evidence', { params: { query: { subjectType, subjectId } } })),
   });
 
 export const useSubjectEvidence = (subjectType: string, subjectId: string) => useQuery(subjectEvidenceQueryOptions(subjectType, subjectId));
