@@ -1,61 +1,18 @@
-import type { LengthUnit } from '../../lib/units';
+import type { Schemas } from '../../lib/api/schemas';
 
-export type PatternReference = 'bottom-left' | 'bottom-right' | 'top-left' | 'top-right' | 'left' | 'right' | 'bottom' | 'top';
+export type HolePattern = Schemas['HolePatternResponse'];
+export type PatternReference = HolePattern['reference'];
 /** The length unit of the outline and every coordinate (the length family). */
-export type PatternUnit = LengthUnit;
-export type PatternEntry = 'list' | 'grid' | 'circle';
+export type PatternUnit = HolePattern['lengthUnit'];
+export type PatternEntry = HolePattern['entry'];
 export type Paper = 'a4' | 'letter';
+export type HoleEntry = NonNullable<HolePattern['holesEntered']>[number];
+export type GridEntry = NonNullable<HolePattern['grid']>;
+export type CircleEntry = NonNullable<HolePattern['circle']>;
+export type HoleMm = Schemas['StoredHole'];
+export type PatternPreview = Schemas['PatternPreviewResponse'];
 
-export interface HoleEntry {
-  x: number;
-  y: number;
-  diameter: number;
-}
-export interface GridEntry {
-  originX: number;
-  originY: number;
-  rows: number;
-  columns: number;
-  pitchX: number;
-  pitchY: number;
-  diameter: number;
-}
-export interface CircleEntry {
-  centreX: number;
-  centreY: number;
-  circleDiameter: number;
-  count: number;
-  startAngleDeg: number;
-  diameter: number;
-}
-
-/** A hole in mm from the outline's lower-left corner, x to the right, y upwards. */
-export interface HoleMm {
-  xMm: number;
-  yMm: number;
-  diameterMm: number;
-}
-
-export interface HolePattern {
-  id: string;
-  machineId: string;
-  name: string;
-  reference: PatternReference;
-  lengthUnit: PatternUnit;
-  widthMm: number;
-  heightMm: number;
-  width: number;
-  height: number;
-  entry: PatternEntry;
-  holesEntered: HoleEntry[] | null;
-  grid: GridEntry | null;
-  circle: CircleEntry | null;
-  holes: HoleMm[];
-  notes: string;
-  createdAt: string;
-  updatedAt: string;
-}
-
+/** Written here until the description gives HoleDto its x and y, and the grid and circle their origin and centre. */
 export interface PatternInput {
   name: string;
   reference: PatternReference;
@@ -69,20 +26,8 @@ export interface PatternInput {
   notes?: string;
 }
 
-export interface PatternPreview {
-  widthMm: number;
-  heightMm: number;
-  holes: HoleMm[];
-}
-
 /** A rail as the templates tab needs it: the server derives its holes. */
-export interface RailForTemplate {
-  id: string;
-  label: string;
-  axis: string;
-  lengthMm: number;
-  holes: { index: number; position: number }[];
-}
+export type RailForTemplate = Pick<Schemas['RailResponse'], 'id' | 'label' | 'axis' | 'lengthMm' | 'holes'>;
 
 export const REFERENCE_LABELS: Record<PatternReference, string> = {
   'bottom-left': 'Lower-left corner',

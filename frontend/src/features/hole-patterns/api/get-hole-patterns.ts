@@ -1,8 +1,8 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
-import { holePatternKeys, type HolePattern } from '../types';
+import { answer, client } from '../../../lib/api-client';
+import { holePatternKeys } from '../types';
 
 export const holePatternsQueryOptions = (machineId: string) =>
-  queryOptions({ queryKey: holePatternKeys.list(machineId), queryFn: () => api.get<HolePattern[]>(`/machines/${machineId}/hole-patterns`) });
+  queryOptions({ queryKey: holePatternKeys.list(machineId), queryFn: () => answer(client.GET('/api/machines/{id}/hole-patterns', { params: { path: { id: machineId } } })) });
 
 export const useHolePatterns = (machineId: string) => useQuery(holePatternsQueryOptions(machineId));
