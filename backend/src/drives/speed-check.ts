@@ -19,11 +19,17 @@ export interface SpeedCheckResponse {
   /** The fastest feed the axis will be asked for, lengthUnit per minute. */
   feedRate: number | null;
   feedRateMmPerMin: number | null;
+  /** Screw speed at that feed, rpm. */
   rpm: number | null;
+  /** Speed at which the screw whirls, rpm. */
   criticalSpeed: number | null;
+  /** The critical speed less its safety factor, rpm. */
   permissibleSpeed: number | null;
+  /** Speed the nut's d·n rating allows at this diameter, rpm. */
   dnLimitSpeed: number | null;
+  /** Nominal diameter (mm) × rpm the nut is rated for. */
   dnLimit: number | null;
+  /** End-fixing factor of the critical-speed formula for the screw's mounting (no unit). */
   mountingFactor: number | null;
   limitedBy: 'critical-speed' | 'dn-limit' | null;
   /** The lower of the permissible speed and the d·n limit speed, rpm: headroom is measured from it. */
@@ -37,6 +43,7 @@ export interface SpeedCheckResponse {
   /** Highest feed within the headroom, lengthUnit per minute. */
   safeFeedRate: number | null;
   safeFeedRateMmPerMin: number | null;
+  /** The target set's speed headroom, as stored with its unit (%). */
   headroom: TargetValue;
   withinLimits: boolean | null;
   source: string;

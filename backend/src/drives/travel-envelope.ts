@@ -8,9 +8,15 @@ import type { DriveTargets } from './drive-targets.js';
 export interface TravelEnvelopeResponse {
   machineId: string;
   status: 'within-target' | 'outside-target' | 'not-started';
+  /** The machine's work area along X and Y, in mm. */
   workArea: { x: number; y: number };
+  /** The target set's travel margin, as stored with its unit. */
   margin: TargetValue;
   marginMm: number;
+  /**
+   * Each X and Y axis, every length in mm: its measured travel, the work size along it, the travel
+   * it needs (work size plus the margin) and what is spare (negative when short).
+   */
   axes: { axisId: string; axis: string; letter: 'X' | 'Y'; measuredTravel: number | null; workSize: number; requiredTravel: number; spare: number | null; covers: boolean | null }[];
   /** What is still missing before the check can be made, in words. */
   missing: string[];

@@ -11713,10 +11713,16 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
           "required": [
             "x",
             "y"
-          ]
+          ],
+          "description": "The machine's work area along X and Y, in mm."
         },
         "margin": {
-          "$ref": "#/components/schemas/TargetValue"
+          "allOf": [
+            {
+              "$ref": "#/components/schemas/TargetValue"
+            }
+          ],
+          "description": "The target set's travel margin, as stored with its unit."
         },
         "marginMm": {
           "type": "number"
@@ -11768,7 +11774,8 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
               "spare",
               "covers"
             ]
-          }
+          },
+          "description": "Each X and Y axis, every length in mm: its measured travel, the work size along it, the travel\nit needs (work size plus the margin) and what is spare (negative when short)."
         },
         "missing": {
           "type": "array",
@@ -11878,27 +11885,33 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
         },
         "rpm": {
           "type": "number",
-          "nullable": true
+          "nullable": true,
+          "description": "Screw speed at that feed, rpm."
         },
         "criticalSpeed": {
           "type": "number",
-          "nullable": true
+          "nullable": true,
+          "description": "Speed at which the screw whirls, rpm."
         },
         "permissibleSpeed": {
           "type": "number",
-          "nullable": true
+          "nullable": true,
+          "description": "The critical speed less its safety factor, rpm."
         },
         "dnLimitSpeed": {
           "type": "number",
-          "nullable": true
+          "nullable": true,
+          "description": "Speed the nut's d·n rating allows at this diameter, rpm."
         },
         "dnLimit": {
           "type": "number",
-          "nullable": true
+          "nullable": true,
+          "description": "Nominal diameter (mm) × rpm the nut is rated for."
         },
         "mountingFactor": {
           "type": "number",
-          "nullable": true
+          "nullable": true,
+          "description": "End-fixing factor of the critical-speed formula for the screw's mounting (no unit)."
         },
         "limitedBy": {
           "type": "string",
@@ -11938,7 +11951,12 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
           "nullable": true
         },
         "headroom": {
-          "$ref": "#/components/schemas/TargetValue"
+          "allOf": [
+            {
+              "$ref": "#/components/schemas/TargetValue"
+            }
+          ],
+          "description": "The target set's speed headroom, as stored with its unit (%)."
         },
         "withinLimits": {
           "type": "boolean",

@@ -33,6 +33,14 @@ function describeProperty(name: string, schema: SchemaObject | ReferenceObject):
   return schema;
 }
 
+/** A stored value beside its own `unit` (targets): the number is in that unit. */
+function describeValueBesideUnit(props: Record<string, SchemaObject | ReferenceObject>) {
+  const value = props.value;
+  const unit = props.unit;
+  if (!value || !unit || '$ref' in value || '$ref' in unit || value.type !== 'number' || value.description) return;
+  props.value = { ...value, description: 'In the `unit` stored beside it.' };
+}
+
 function walk(value: unknown): void {
   if (Array.isArray(value)) {
     value.forEach(walk);
@@ -43,6 +51,7 @@ function walk(value: unknown): void {
   if (record.properties && typeof record.properties === 'object' && record.type === 'object') {
     const props = record.properties as Record<string, SchemaObject | ReferenceObject>;
     for (const key of Object.keys(props)) props[key] = describeProperty(key, props[key]);
+    describeValueBesideUnit(props);
   }
   for (const v of Object.values(record)) walk(v);
 }

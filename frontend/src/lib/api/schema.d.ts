@@ -2237,6 +2237,7 @@ export interface components {
             description: string;
             targets: {
                 reversal: {
+                    /** @description In the `unit` stored beside it. */
                     value: number;
                     /** @enum {string} */
                     unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
@@ -2246,6 +2247,7 @@ export interface components {
                     label: string;
                 };
                 repeatability: {
+                    /** @description In the `unit` stored beside it. */
                     value: number;
                     /** @enum {string} */
                     unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
@@ -2255,6 +2257,7 @@ export interface components {
                     label: string;
                 };
                 squareness: {
+                    /** @description In the `unit` stored beside it. */
                     value: number;
                     /** @enum {string} */
                     unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
@@ -2264,6 +2267,7 @@ export interface components {
                     label: string;
                 };
                 railStraightness: {
+                    /** @description In the `unit` stored beside it. */
                     value: number;
                     /** @enum {string} */
                     unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
@@ -2273,6 +2277,7 @@ export interface components {
                     label: string;
                 };
                 railParallelism: {
+                    /** @description In the `unit` stored beside it. */
                     value: number;
                     /** @enum {string} */
                     unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
@@ -2282,6 +2287,7 @@ export interface components {
                     label: string;
                 };
                 railHeightDifference: {
+                    /** @description In the `unit` stored beside it. */
                     value: number;
                     /** @enum {string} */
                     unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
@@ -2291,6 +2297,7 @@ export interface components {
                     label: string;
                 };
                 bedFlatness: {
+                    /** @description In the `unit` stored beside it. */
                     value: number;
                     /** @enum {string} */
                     unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
@@ -2300,6 +2307,7 @@ export interface components {
                     label: string;
                 };
                 stepsPerMmError: {
+                    /** @description In the `unit` stored beside it. */
                     value: number;
                     /** @enum {string} */
                     unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
@@ -2309,6 +2317,7 @@ export interface components {
                     label: string;
                 };
                 positioningAccuracy: {
+                    /** @description In the `unit` stored beside it. */
                     value: number;
                     /** @enum {string} */
                     unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
@@ -2318,6 +2327,7 @@ export interface components {
                     label: string;
                 };
                 screwSpeedHeadroom: {
+                    /** @description In the `unit` stored beside it. */
                     value: number;
                     /** @enum {string} */
                     unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
@@ -2327,6 +2337,7 @@ export interface components {
                     label: string;
                 };
                 travelMargin: {
+                    /** @description In the `unit` stored beside it. */
                     value: number;
                     /** @enum {string} */
                     unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
@@ -2336,6 +2347,7 @@ export interface components {
                     label: string;
                 };
                 partTolerance: {
+                    /** @description In the `unit` stored beside it. */
                     value: number;
                     /** @enum {string} */
                     unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
@@ -2345,6 +2357,7 @@ export interface components {
                     label: string;
                 };
                 recheckIntervalDays: {
+                    /** @description In the `unit` stored beside it. */
                     value: number;
                     /** @enum {string} */
                     unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
@@ -2554,6 +2567,7 @@ export interface components {
             /** @enum {string} */
             status: "within-target" | "outside-target";
             target: {
+                /** @description In the `unit` stored beside it. */
                 value: number;
                 unit: string;
                 /** @enum {string} */
@@ -2641,6 +2655,7 @@ export interface components {
             /** @enum {string} */
             status: "within-target" | "outside-target";
             target: {
+                /** @description In the `unit` stored beside it. */
                 value: number;
                 unit: string;
                 /** @enum {string} */
@@ -2706,6 +2721,7 @@ export interface components {
             /** @enum {string} */
             status: "within-target" | "outside-target";
             target: {
+                /** @description In the `unit` stored beside it. */
                 value: number;
                 unit: string;
                 /** @enum {string} */
@@ -2903,6 +2919,7 @@ export interface components {
         };
         JudgedTarget: {
             label: string;
+            /** @description In the `unit` stored beside it. */
             value: number;
             /** @enum {string} */
             unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
@@ -3174,13 +3191,19 @@ export interface components {
             machineId: string;
             /** @enum {string} */
             status: "within-target" | "outside-target" | "not-started";
+            /** @description The machine's work area along X and Y, in mm. */
             workArea: {
                 x: number;
                 y: number;
             };
+            /** @description The target set's travel margin, as stored with its unit. */
             margin: components["schemas"]["TargetValue"];
             /** @description In mm. */
             marginMm: number;
+            /**
+             * @description Each X and Y axis, every length in mm: its measured travel, the work size along it, the travel
+             *     it needs (work size plus the margin) and what is spare (negative when short).
+             */
             axes: {
                 axisId: string;
                 axis: string;
@@ -3202,6 +3225,7 @@ export interface components {
          *     (K in S = a × K). `reference` is read on the rail straightness target only.
          */
         TargetValue: {
+            /** @description In the `unit` stored beside it. */
             value: number;
             /** @enum {string} */
             unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
@@ -3226,11 +3250,17 @@ export interface components {
             feedRate: number | null;
             /** @description In mm per minute. */
             feedRateMmPerMin: number | null;
+            /** @description Screw speed at that feed, rpm. */
             rpm: number | null;
+            /** @description Speed at which the screw whirls, rpm. */
             criticalSpeed: number | null;
+            /** @description The critical speed less its safety factor, rpm. */
             permissibleSpeed: number | null;
+            /** @description Speed the nut's d·n rating allows at this diameter, rpm. */
             dnLimitSpeed: number | null;
+            /** @description Nominal diameter (mm) × rpm the nut is rated for. */
             dnLimit: number | null;
+            /** @description End-fixing factor of the critical-speed formula for the screw's mounting (no unit). */
             mountingFactor: number | null;
             /** @enum {string|null} */
             limitedBy: "critical-speed" | "dn-limit" | null;
@@ -3246,6 +3276,7 @@ export interface components {
             safeFeedRate: number | null;
             /** @description In mm per minute. */
             safeFeedRateMmPerMin: number | null;
+            /** @description The target set's speed headroom, as stored with its unit (%). */
             headroom: components["schemas"]["TargetValue"];
             withinLimits: boolean | null;
             source: string;
@@ -3339,6 +3370,7 @@ export interface components {
             /** @enum {string} */
             status: "within-target" | "outside-target" | "not-started" | "waived";
             result: {
+                /** @description In the `unit` stored beside it. */
                 value: number;
                 unit: string;
                 summary: string;
@@ -5824,12 +5856,14 @@ export interface operations {
                         reason: string;
                         targets: {
                             parallelism: {
+                                /** @description In the `unit` stored beside it. */
                                 value: number;
                                 /** @enum {string} */
                                 unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
                             };
                             heightDifference: {
                                 source: string;
+                                /** @description In the `unit` stored beside it. */
                                 value: number;
                                 /** @enum {string} */
                                 unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
@@ -5844,12 +5878,14 @@ export interface operations {
                         partnerRailId: string;
                         targets: {
                             parallelism: {
+                                /** @description In the `unit` stored beside it. */
                                 value: number;
                                 /** @enum {string} */
                                 unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
                             };
                             heightDifference: {
                                 source: string;
+                                /** @description In the `unit` stored beside it. */
                                 value: number;
                                 /** @enum {string} */
                                 unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
@@ -5885,12 +5921,14 @@ export interface operations {
                         partnerRailId: string;
                         targets: {
                             parallelism: {
+                                /** @description In the `unit` stored beside it. */
                                 value: number;
                                 /** @enum {string} */
                                 unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
                             };
                             heightDifference: {
                                 source: string;
+                                /** @description In the `unit` stored beside it. */
                                 value: number;
                                 /** @enum {string} */
                                 unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
@@ -5933,12 +5971,14 @@ export interface operations {
                         partnerRailId: string;
                         targets: {
                             parallelism: {
+                                /** @description In the `unit` stored beside it. */
                                 value: number;
                                 /** @enum {string} */
                                 unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
                             };
                             heightDifference: {
                                 source: string;
+                                /** @description In the `unit` stored beside it. */
                                 value: number;
                                 /** @enum {string} */
                                 unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
@@ -5977,12 +6017,14 @@ export interface operations {
                         partnerRailId: string;
                         targets: {
                             parallelism: {
+                                /** @description In the `unit` stored beside it. */
                                 value: number;
                                 /** @enum {string} */
                                 unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
                             };
                             heightDifference: {
                                 source: string;
+                                /** @description In the `unit` stored beside it. */
                                 value: number;
                                 /** @enum {string} */
                                 unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
@@ -10075,6 +10117,7 @@ export interface operations {
                         target: {
                             /** @description In mm. */
                             valueMm: number;
+                            /** @description In the `unit` stored beside it. */
                             value: number;
                             /** @enum {string} */
                             unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
@@ -10188,6 +10231,7 @@ export interface operations {
                         target: {
                             /** @description In mm. */
                             valueMm: number;
+                            /** @description In the `unit` stored beside it. */
                             value: number;
                             /** @enum {string} */
                             unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
@@ -10316,6 +10360,7 @@ export interface operations {
                         target: {
                             /** @description In mm. */
                             valueMm: number;
+                            /** @description In the `unit` stored beside it. */
                             value: number;
                             /** @enum {string} */
                             unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
@@ -10504,6 +10549,7 @@ export interface operations {
                              */
                             measuredStatus: "within-target" | "outside-target" | "not-started";
                             target: {
+                                /** @description In the `unit` stored beside it. */
                                 value: number;
                                 /** @enum {string} */
                                 unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
@@ -10513,6 +10559,7 @@ export interface operations {
                                 label?: string;
                             } | null;
                             result: {
+                                /** @description In the `unit` stored beside it. */
                                 value: number;
                                 unit: string;
                                 summary: string;
@@ -11059,6 +11106,7 @@ export interface operations {
                             kind: "positioning" | "rail-straightness" | "travel-trial" | "diagonal-check" | "bed-grid" | "test-cut" | "safety-walk" | "rail-parallelism" | "backlash" | "speed-check" | "travel-envelope";
                             subject: string;
                             target: {
+                                /** @description In the `unit` stored beside it. */
                                 value: number;
                                 /** @enum {string} */
                                 unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
