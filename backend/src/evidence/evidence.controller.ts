@@ -5,7 +5,8 @@ import type { SessionUser } from '../auth/session-user.js';
 import { ListEvidenceQueryDto } from './dto/list-evidence.query.js';
 import { EvidenceUploadService } from './evidence-upload.service.js';
 import { EvidenceService, type Download } from './evidence.service.js';
-import { ApiProduces } from '@nestjs/swagger';
+import { ApiBody, ApiConsumes, ApiExtraModels, ApiProduces, getSchemaPath } from '@nestjs/swagger';
+import { UploadFieldsDto } from './dto/upload-fields.dto.js';
 
 @Controller('evidence')
 export class EvidenceController {
@@ -16,6 +17,17 @@ export class EvidenceController {
 
   /** multipart/form-data: file, subjectType, subjectId, caption (optional). */
   @Post()
+  @ApiConsumes('multipart/form-data')
+  @ApiExtraModels(UploadFieldsDto)
+  @ApiBody({
+    required: true,
+    schema: {
+      allOf: [
+        { $ref: getSchemaPath(UploadFieldsDto) },
+        { type: 'object', required: ['file'], properties: { file: { type: 'string', format: 'binary', description: 'The photo or file (one a request).' } } },
+      ],
+    },
+  })
   @Roles(...RECORDERS)
   upload(@CurrentUser() user: SessionUser, @Req() req: FastifyRequest) {
     return this.uploads.upload(user, req);

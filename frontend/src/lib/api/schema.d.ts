@@ -2017,6 +2017,12 @@ export interface components {
             section: "stopping" | "electrical" | "cutting" | "people";
             text: string;
         };
+        UploadFieldsDto: {
+            subjectType: string;
+            /** Format: uuid */
+            subjectId: string;
+            caption?: string;
+        };
         CreateAxisDto: {
             /** @description "X", "Y1", "Y2", "Z": the first letter is the axis letter the test program moves. */
             name: string;
@@ -8272,7 +8278,17 @@ export interface operations {
             path?: never;
             cookie?: never;
         };
-        requestBody?: never;
+        requestBody: {
+            content: {
+                "multipart/form-data": components["schemas"]["UploadFieldsDto"] & {
+                    /**
+                     * Format: binary
+                     * @description The photo or file (one a request).
+                     */
+                    file: string;
+                };
+            };
+        };
         responses: {
             /** @description Done. */
             201: {
