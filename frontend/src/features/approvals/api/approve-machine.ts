@@ -1,19 +1,12 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { answer, client } from '../../../lib/api-client';
+import type { Schemas } from '../../../lib/api/schemas';
 import { invalidateMachine } from './invalidate';
-
-export interface ApprovalResult {
-  id: string;
-  approvedAt: string;
-  approvedBy: string;
-  recordHash: string;
-  recheckDueAt: string;
-}
 
 export function useApproveMachine(machineId: string) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (input: { password: string; statement: string }) => api.post<ApprovalResult>(`/machines/${machineId}/approvals`, input),
+    mutationFn: (body: Schemas['ApproveDto']) => answer(client.POST('/api/machines/{id}/approvals', { params: { path: { id: machineId } }, body })),
     onSuccess: () => invalidateMachine(qc, machineId),
   });
 }

@@ -1,12 +1,12 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { answer, client } from '../../../lib/api-client';
 import { invalidateMachine } from './invalidate';
 
 export function useWaiveCheck(machineId: string) {
   const qc = useQueryClient();
   return useMutation({
     mutationFn: ({ checkKey, reason }: { checkKey: string; reason: string }) =>
-      api.post<{ id: string }>(`/machines/${machineId}/checks/${encodeURIComponent(checkKey)}/waiver`, { reason }),
+      answer(client.POST('/api/machines/{id}/checks/{checkId}/waiver', { params: { path: { id: machineId, checkId: checkKey } }, body: { reason } })),
     onSuccess: () => invalidateMachine(qc, machineId),
   });
 }
