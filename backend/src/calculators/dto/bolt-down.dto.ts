@@ -19,12 +19,15 @@ export class HoleReadingDto {
 
 /** Rail length, hole pitch and first hole in `lengthUnit`; readings in `readingUnit`. */
 export class BoltDownDto extends UnitFamiliesDto {
+  /** Rail length, in lengthUnit. */
   @FiniteNumber('length')
   length: number;
 
+  /** Hole pitch, in lengthUnit. */
   @FiniteNumber('pitch')
   pitch: number;
 
+  /** First hole's centre from the rail's start, in lengthUnit. */
   @FiniteNumber('firstHoleOffset')
   firstHoleOffset: number;
 

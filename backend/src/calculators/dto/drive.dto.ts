@@ -11,15 +11,19 @@ export class DriveDto extends UnitFamiliesDto {
   @IsIn(DRIVE_TYPES, { message: `type must be one of ${DRIVE_TYPES.join(', ')}` })
   type: DriveType;
 
+  /** Full steps per motor revolution. */
   @FiniteNumber('motorStepsPerRev')
   motorStepsPerRev: number;
 
+  /** Microsteps per full step set on the driver. */
   @FiniteNumber('microsteps')
   microsteps: number;
 
+  /** Motor turns per turn of the screw or pulley (no unit); 1 when absent. */
   @OptionalFiniteNumber('gearRatio')
   gearRatio?: number;
 
+  /** Screw lead (travel per turn), in lengthUnit. */
   @OptionalFiniteNumber('lead')
   lead?: number;
 
@@ -27,15 +31,19 @@ export class DriveDto extends UnitFamiliesDto {
   @OptionalFiniteNumber('threadsPerInch')
   threadsPerInch?: number;
 
+  /** Belt tooth pitch, in lengthUnit. */
   @OptionalFiniteNumber('beltPitch')
   beltPitch?: number;
 
+  /** Teeth on the drive pulley. */
   @OptionalFiniteNumber('pulleyTeeth')
   pulleyTeeth?: number;
 
+  /** Teeth on the pinion. */
   @OptionalFiniteNumber('pinionTeeth')
   pinionTeeth?: number;
 
+  /** Pinion module, in mm (a module is defined in mm whatever the unit). */
   @OptionalFiniteNumber('pinionModule')
   pinionModule?: number;
 }

@@ -5,20 +5,25 @@ import { UnitFamiliesDto } from './unit-families.dto.js';
 import { Optional } from '../../common/optional.js';
 
 export class CutSizeDto {
+  /** Size commanded, in lengthUnit. */
   @FiniteNumber('commanded')
   commanded: number;
 
+  /** Size measured, in lengthUnit. */
   @FiniteNumber('measured')
   measured: number;
 }
 
 export class CutCircleDto {
+  /** Diameter commanded, in lengthUnit. */
   @FiniteNumber('commandedDiameter')
   commandedDiameter: number;
 
+  /** Diameter measured along X, in lengthUnit. */
   @FiniteNumber('measuredX')
   measuredX: number;
 
+  /** Diameter measured along Y, in lengthUnit. */
   @FiniteNumber('measuredY')
   measuredY: number;
 }
@@ -35,18 +40,23 @@ export class TestCutDto extends UnitFamiliesDto {
   @Type(() => CutSizeDto)
   y: CutSizeDto;
 
+  /** Steps per mm set for X when the cut was made. */
   @OptionalFiniteNumber('stepsPerMmX')
   stepsPerMmX?: number;
 
+  /** Steps per mm set for Y when the cut was made. */
   @OptionalFiniteNumber('stepsPerMmY')
   stepsPerMmY?: number;
 
+  /** Diagonal from the X0 Y0 corner to the far corner, in lengthUnit. */
   @OptionalFiniteNumber('diagonal1')
   diagonal1?: number;
 
+  /** The other diagonal, in lengthUnit. */
   @OptionalFiniteNumber('diagonal2')
   diagonal2?: number;
 
+  /** Distance between the gantry's two bearing rails, in lengthUnit. */
   @OptionalFiniteNumber('gantrySpan')
   gantrySpan?: number;
 
@@ -56,6 +66,7 @@ export class TestCutDto extends UnitFamiliesDto {
   @Type(() => CutCircleDto)
   circle?: CutCircleDto;
 
+  /** Largest difference of the circle's two diameters that passes, in lengthUnit. */
   @OptionalFiniteNumber('ovalityTolerance')
   ovalityTolerance?: number;
 }

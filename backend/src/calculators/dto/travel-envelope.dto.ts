@@ -9,9 +9,11 @@ export class AxisTravelDto {
   @MaxLength(20, { message: 'axis must be at most 20 characters' })
   axis: string;
 
+  /** Travel measured end to end, in lengthUnit. */
   @FiniteNumber('measuredTravel')
   measuredTravel: number;
 
+  /** Work size along the axis, in lengthUnit. */
   @FiniteNumber('workSize')
   workSize: number;
 }

@@ -10,18 +10,23 @@ import { ApiHideProperty } from '@nestjs/swagger';
  * corner, diagonal 2 from the X-far Y0 corner to the X0 Y-far corner.
  */
 export class CreateDiagonalCheckDto {
+  /** Side along X, in lengthUnit. */
   @PositiveLength('sideX')
   sideX: number;
 
+  /** Side along Y, in lengthUnit. */
   @PositiveLength('sideY')
   sideY: number;
 
+  /** Diagonal from the X0 Y0 corner to the far corner, in lengthUnit. */
   @PositiveLength('diagonal1')
   diagonal1: number;
 
+  /** Diagonal from the X-far Y0 corner to the X0 Y-far corner, in lengthUnit. */
   @PositiveLength('diagonal2')
   diagonal2: number;
 
+  /** Distance between the gantry's two bearing rails, in lengthUnit. */
   @Optional()
   @PositiveLength('gantrySpan')
   gantrySpan?: number;

@@ -8,9 +8,11 @@ import { Optional } from '../../common/optional.js';
 import { ApiHideProperty } from '@nestjs/swagger';
 
 export class TestCutNominalDto {
+  /** Side along X commanded, in lengthUnit. */
   @PositiveLength('nominal.x')
   x: number;
 
+  /** Side along Y commanded, in lengthUnit. */
   @PositiveLength('nominal.y')
   y: number;
 
@@ -20,21 +22,27 @@ export class TestCutNominalDto {
 }
 
 export class TestCutMeasuredDto {
+  /** Side along X measured, in lengthUnit. */
   @PositiveLength('measured.x')
   x: number;
 
+  /** Side along Y measured, in lengthUnit. */
   @PositiveLength('measured.y')
   y: number;
 
+  /** Diagonal from the X0 Y0 corner to the far corner, in lengthUnit. */
   @PositiveLength('measured.diagonal1')
   diagonal1: number;
 
+  /** The other diagonal, in lengthUnit. */
   @PositiveLength('measured.diagonal2')
   diagonal2: number;
 
+  /** Circle diameter measured along X, in lengthUnit. */
   @PositiveLength('measured.circleX')
   circleX: number;
 
+  /** Circle diameter measured along Y, in lengthUnit. */
   @PositiveLength('measured.circleY')
   circleY: number;
 
@@ -47,11 +55,13 @@ export class TestCutMeasuredDto {
 }
 
 export class StepsPerMmDto {
+  /** Steps per mm set for X. */
   @Optional()
   @IsNumber({ allowNaN: false, allowInfinity: false }, { message: 'stepsPerMm.x must be a number' })
   @IsPositive({ message: 'stepsPerMm.x must be greater than zero' })
   x?: number;
 
+  /** Steps per mm set for Y. */
   @Optional()
   @IsNumber({ allowNaN: false, allowInfinity: false }, { message: 'stepsPerMm.y must be a number' })
   @IsPositive({ message: 'stepsPerMm.y must be greater than zero' })

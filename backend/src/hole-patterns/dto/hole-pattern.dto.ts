@@ -12,16 +12,19 @@ const LIMIT = 100_000;
 export const MAX_HOLES = 1000;
 
 export class HoleDto {
+  /** Hole centre from the outline's left edge, in lengthUnit. */
   @IsNumber(FINITE, { message: 'x must be a number in lengthUnit (from the outline’s left edge)' })
   @Min(-LIMIT, { message: `x must be within ±${LIMIT}` })
   @Max(LIMIT, { message: `x must be within ±${LIMIT}` })
   x: number;
 
+  /** Hole centre from the outline's lower edge, in lengthUnit. */
   @IsNumber(FINITE, { message: 'y must be a number in lengthUnit (from the outline’s lower edge)' })
   @Min(-LIMIT, { message: `y must be within ±${LIMIT}` })
   @Max(LIMIT, { message: `y must be within ±${LIMIT}` })
   y: number;
 
+  /** Hole diameter, in lengthUnit. */
   @IsNumber(FINITE, { message: 'diameter must be a number in lengthUnit' })
   @Min(0, { message: 'diameter must be greater than 0' })
   @Max(LIMIT, { message: `diameter must be at most ${LIMIT}` })
@@ -29,36 +32,43 @@ export class HoleDto {
 }
 
 export class GridDto {
+  /** First hole's centre from the outline's left edge, in lengthUnit. */
   @IsNumber(FINITE, { message: 'originX must be the x of the first hole, in lengthUnit' })
   @Min(-LIMIT, { message: `originX must be within ±${LIMIT}` })
   @Max(LIMIT, { message: `originX must be within ±${LIMIT}` })
   originX: number;
 
+  /** First hole's centre from the outline's lower edge, in lengthUnit. */
   @IsNumber(FINITE, { message: 'originY must be the y of the first hole, in lengthUnit' })
   @Min(-LIMIT, { message: `originY must be within ±${LIMIT}` })
   @Max(LIMIT, { message: `originY must be within ±${LIMIT}` })
   originY: number;
 
+  /** Rows of holes. */
   @IsInt({ message: 'rows must be a whole number' })
   @Min(1, { message: 'rows must be at least 1' })
   @Max(100, { message: 'rows must be at most 100' })
   rows: number;
 
+  /** Columns of holes. */
   @IsInt({ message: 'columns must be a whole number' })
   @Min(1, { message: 'columns must be at least 1' })
   @Max(100, { message: 'columns must be at most 100' })
   columns: number;
 
+  /** Distance between columns, in lengthUnit. */
   @IsNumber(FINITE, { message: 'pitchX must be the distance between columns, in lengthUnit' })
   @Min(0, { message: 'pitchX must not be negative' })
   @Max(LIMIT, { message: `pitchX must be at most ${LIMIT}` })
   pitchX: number;
 
+  /** Distance between rows, in lengthUnit. */
   @IsNumber(FINITE, { message: 'pitchY must be the distance between rows, in lengthUnit' })
   @Min(0, { message: 'pitchY must not be negative' })
   @Max(LIMIT, { message: `pitchY must be at most ${LIMIT}` })
   pitchY: number;
 
+  /** Hole diameter, in lengthUnit. */
   @IsNumber(FINITE, { message: 'diameter must be a number in lengthUnit' })
   @Min(0, { message: 'diameter must be greater than 0' })
   @Max(LIMIT, { message: `diameter must be at most ${LIMIT}` })
@@ -66,21 +76,25 @@ export class GridDto {
 }
 
 export class CircleDto {
+  /** Circle centre from the outline's left edge, in lengthUnit. */
   @IsNumber(FINITE, { message: 'centreX must be the x of the circle’s centre, in lengthUnit' })
   @Min(-LIMIT, { message: `centreX must be within ±${LIMIT}` })
   @Max(LIMIT, { message: `centreX must be within ±${LIMIT}` })
   centreX: number;
 
+  /** Circle centre from the outline's lower edge, in lengthUnit. */
   @IsNumber(FINITE, { message: 'centreY must be the y of the circle’s centre, in lengthUnit' })
   @Min(-LIMIT, { message: `centreY must be within ±${LIMIT}` })
   @Max(LIMIT, { message: `centreY must be within ±${LIMIT}` })
   centreY: number;
 
+  /** Diameter of the circle the hole centres lie on, in lengthUnit. */
   @IsNumber(FINITE, { message: 'circleDiameter must be the diameter the hole centres lie on, in lengthUnit' })
   @Min(0, { message: 'circleDiameter must not be negative' })
   @Max(LIMIT, { message: `circleDiameter must be at most ${LIMIT}` })
   circleDiameter: number;
 
+  /** Holes on the circle. */
   @IsInt({ message: 'count must be a whole number of holes' })
   @Min(1, { message: 'count must be at least 1' })
   @Max(360, { message: 'count must be at most 360' })
@@ -91,6 +105,7 @@ export class CircleDto {
   @Max(360, { message: 'startAngleDeg must be within ±360°' })
   startAngleDeg: number;
 
+  /** Hole diameter, in lengthUnit. */
   @IsNumber(FINITE, { message: 'diameter must be a number in lengthUnit' })
   @Min(0, { message: 'diameter must be greater than 0' })
   @Max(LIMIT, { message: `diameter must be at most ${LIMIT}` })
@@ -115,11 +130,13 @@ export class HolePatternDto {
   @ApiHideProperty() // refused when sent, so not part of the described request
   unit?: never;
 
+  /** Outline width, in lengthUnit. */
   @IsNumber(FINITE, { message: 'width must be the outline’s width, in lengthUnit' })
   @Min(0, { message: 'width must be greater than 0' })
   @Max(LIMIT, { message: `width must be at most ${LIMIT}` })
   width: number;
 
+  /** Outline height, in lengthUnit. */
   @IsNumber(FINITE, { message: 'height must be the outline’s height, in lengthUnit' })
   @Min(0, { message: 'height must be greater than 0' })
   @Max(LIMIT, { message: `height must be at most ${LIMIT}` })

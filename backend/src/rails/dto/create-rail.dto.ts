@@ -28,11 +28,13 @@ export class CreateRailDto {
   @ApiHideProperty() // refused when sent, so not part of the described request
   unit?: never;
 
+  /** Rail length, in lengthUnit. */
   @IsDefined({ message: 'length is required, in lengthUnit' })
   @IsNumber(FINITE, { message: `length must be a number ${IN_UNIT}` })
   @Min(0, { message: 'length must be positive' })
   length: number;
 
+  /** Profile (rail) size in mm whatever lengthUnit: the catalogue size, 15, 20, 25 …; null clears it. */
   @Optional()
   @ValidateIf((_, v) => v !== null)
   @IsInt({ message: 'profileSize must be a whole number of mm (the catalogue size: 15, 20, 25)' })
@@ -40,11 +42,13 @@ export class CreateRailDto {
   @Max(100, { message: 'profileSize must be at most 100 mm' })
   profileSize?: number | null;
 
+  /** Distance between neighbouring mounting holes, in lengthUnit. */
   @IsDefined({ message: 'holePitch is required, in lengthUnit' })
   @IsNumber(FINITE, { message: `holePitch must be a number ${IN_UNIT}` })
   @Min(0, { message: 'holePitch must be positive' })
   holePitch: number;
 
+  /** First hole's centre from the rail's start, in lengthUnit. */
   @IsDefined({ message: 'firstHole is required, in lengthUnit' })
   @IsNumber(FINITE, { message: `firstHole must be a number ${IN_UNIT} from the rail's start` })
   @Min(0, { message: 'firstHole must not be negative' })

@@ -1576,10 +1576,15 @@ export interface components {
             readingUnit?: "mm" | "um" | "in" | "thou";
         };
         SquarenessDto: {
+            /** @description Side along X, in lengthUnit. */
             sideX: number;
+            /** @description Side along Y, in lengthUnit. */
             sideY: number;
+            /** @description Diagonal from the X0 Y0 corner to the far corner, in lengthUnit. */
             diagonal1: number;
+            /** @description The other diagonal, in lengthUnit. */
             diagonal2: number;
+            /** @description Distance between the gantry's two bearing rails, in lengthUnit. */
             gantrySpan?: number;
             /**
              * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
@@ -1615,15 +1620,23 @@ export interface components {
         DriveDto: {
             /** @enum {string} */
             type: "screw" | "belt" | "rack";
+            /** @description Full steps per motor revolution. */
             motorStepsPerRev: number;
+            /** @description Microsteps per full step set on the driver. */
             microsteps: number;
+            /** @description Motor turns per turn of the screw or pulley (no unit); 1 when absent. */
             gearRatio?: number;
+            /** @description Screw lead (travel per turn), in lengthUnit. */
             lead?: number;
             /** @description For an inch screw: lead = 1 in ÷ threads per inch (single start); instead of `lead`. */
             threadsPerInch?: number;
+            /** @description Belt tooth pitch, in lengthUnit. */
             beltPitch?: number;
+            /** @description Teeth on the drive pulley. */
             pulleyTeeth?: number;
+            /** @description Teeth on the pinion. */
             pinionTeeth?: number;
+            /** @description Pinion module, in mm (a module is defined in mm whatever the unit). */
             pinionModule?: number;
             /**
              * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
@@ -1682,12 +1695,17 @@ export interface components {
             readingUnit?: "mm" | "um" | "in" | "thou";
         };
         ScrewSpeedDto: {
+            /** @description Screw nominal diameter, in lengthUnit. */
             nominalDiameter: number;
+            /** @description Screw root diameter, in lengthUnit. */
             rootDiameter: number;
+            /** @description Length between bearings (or from the fixed end), in lengthUnit. */
             unsupportedLength: number;
+            /** @description Screw lead (travel per turn), in lengthUnit. */
             lead: number;
             /** @enum {string} */
             mounting: "fixed-free" | "supported-supported" | "fixed-supported" | "fixed-fixed";
+            /** @description Fastest feed, in lengthUnit per minute. */
             feedRate: number;
             /** @description Nominal diameter in mm × rpm limit of the nut (defined in mm whatever the unit); 70 000 (rolled screws) when absent. */
             dnLimit?: number;
@@ -1709,8 +1727,11 @@ export interface components {
             reading: number;
         };
         BoltDownDto: {
+            /** @description Rail length, in lengthUnit. */
             length: number;
+            /** @description Hole pitch, in lengthUnit. */
             pitch: number;
+            /** @description First hole's centre from the rail's start, in lengthUnit. */
             firstHoleOffset: number;
             /**
              * @description Aim at the first fixed hole's reading ("face") or at the line through fixed holes ("line", default).
@@ -1731,7 +1752,9 @@ export interface components {
         };
         AxisTravelDto: {
             axis: string;
+            /** @description Travel measured end to end, in lengthUnit. */
             measuredTravel: number;
+            /** @description Work size along the axis, in lengthUnit. */
             workSize: number;
         };
         TravelEnvelopeDto: {
@@ -1750,23 +1773,34 @@ export interface components {
             readingUnit?: "mm" | "um" | "in" | "thou";
         };
         CutSizeDto: {
+            /** @description Size commanded, in lengthUnit. */
             commanded: number;
+            /** @description Size measured, in lengthUnit. */
             measured: number;
         };
         CutCircleDto: {
+            /** @description Diameter commanded, in lengthUnit. */
             commandedDiameter: number;
+            /** @description Diameter measured along X, in lengthUnit. */
             measuredX: number;
+            /** @description Diameter measured along Y, in lengthUnit. */
             measuredY: number;
         };
         TestCutDto: {
             x: components["schemas"]["CutSizeDto"];
             y: components["schemas"]["CutSizeDto"];
+            /** @description Steps per mm set for X when the cut was made. */
             stepsPerMmX?: number;
+            /** @description Steps per mm set for Y when the cut was made. */
             stepsPerMmY?: number;
+            /** @description Diagonal from the X0 Y0 corner to the far corner, in lengthUnit. */
             diagonal1?: number;
+            /** @description The other diagonal, in lengthUnit. */
             diagonal2?: number;
+            /** @description Distance between the gantry's two bearing rails, in lengthUnit. */
             gantrySpan?: number;
             circle?: components["schemas"]["CutCircleDto"];
+            /** @description Largest difference of the circle's two diameters that passes, in lengthUnit. */
             ovalityTolerance?: number;
             /**
              * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
@@ -1787,9 +1821,13 @@ export interface components {
              * @enum {string}
              */
             lengthUnit?: "mm" | "um" | "in" | "thou";
+            /** @description Rail length, in lengthUnit. */
             length: number;
+            /** @description Profile (rail) size in mm whatever lengthUnit: the catalogue size, 15, 20, 25 …; null clears it. */
             profileSize?: number | null;
+            /** @description Distance between neighbouring mounting holes, in lengthUnit. */
             holePitch: number;
+            /** @description First hole's centre from the rail's start, in lengthUnit. */
             firstHole: number;
             /** @description Centre-to-centre distance to the partner rail (a in S = a × K); null clears it. */
             spacing?: number | null;
@@ -1806,9 +1844,13 @@ export interface components {
              * @enum {string}
              */
             lengthUnit?: "mm" | "um" | "in" | "thou";
+            /** @description Rail length, in lengthUnit. */
             length?: number;
+            /** @description Profile (rail) size in mm whatever lengthUnit: the catalogue size, 15, 20, 25 …; null clears it. */
             profileSize?: number | null;
+            /** @description Distance between neighbouring mounting holes, in lengthUnit. */
             holePitch?: number;
+            /** @description First hole's centre from the rail's start, in lengthUnit. */
             firstHole?: number;
             /** @description Centre-to-centre distance to the partner rail (a in S = a × K); null clears it. */
             spacing?: number | null;
@@ -1934,10 +1976,15 @@ export interface components {
             takenAt?: string;
         };
         CreateDiagonalCheckDto: {
+            /** @description Side along X, in lengthUnit. */
             sideX: number;
+            /** @description Side along Y, in lengthUnit. */
             sideY: number;
+            /** @description Diagonal from the X0 Y0 corner to the far corner, in lengthUnit. */
             diagonal1: number;
+            /** @description Diagonal from the X-far Y0 corner to the X0 Y-far corner, in lengthUnit. */
             diagonal2: number;
+            /** @description Distance between the gantry's two bearing rails, in lengthUnit. */
             gantrySpan?: number;
             /** @description Smallest step of the tape or rule the diagonals were read with, in lengthUnit. */
             resolution?: number;
@@ -1961,29 +2008,41 @@ export interface components {
             readingUnit?: "mm" | "um" | "in" | "thou";
             /** @description Smallest step of the height gauge, in readingUnit. */
             resolution?: number;
+            /** @description Rows of the grid (points along the bed). */
             rows?: number;
+            /** @description Columns of the grid (points across the bed). */
             columns?: number;
             points: components["schemas"]["GridPointDto"][];
             note?: string;
         };
         TestCutNominalDto: {
+            /** @description Side along X commanded, in lengthUnit. */
             x: number;
+            /** @description Side along Y commanded, in lengthUnit. */
             y: number;
             /** @description Commanded diameter of the circle. */
             circle: number;
         };
         TestCutMeasuredDto: {
+            /** @description Side along X measured, in lengthUnit. */
             x: number;
+            /** @description Side along Y measured, in lengthUnit. */
             y: number;
+            /** @description Diagonal from the X0 Y0 corner to the far corner, in lengthUnit. */
             diagonal1: number;
+            /** @description The other diagonal, in lengthUnit. */
             diagonal2: number;
+            /** @description Circle diameter measured along X, in lengthUnit. */
             circleX: number;
+            /** @description Circle diameter measured along Y, in lengthUnit. */
             circleY: number;
             /** @description Width of cut the controller did not compensate for; leave out (or 0) when kerf compensation was on. */
             kerf?: number;
         };
         StepsPerMmDto: {
+            /** @description Steps per mm set for X. */
             x?: number;
+            /** @description Steps per mm set for Y. */
             y?: number;
         };
         CreateTestCutDto: {
@@ -2165,20 +2224,29 @@ export interface components {
             reason: string;
         };
         HoleDto: {
+            /** @description Hole diameter, in lengthUnit. */
             diameter: number;
         };
         GridDto: {
+            /** @description Rows of holes. */
             rows: number;
+            /** @description Columns of holes. */
             columns: number;
+            /** @description Distance between columns, in lengthUnit. */
             pitchX: number;
+            /** @description Distance between rows, in lengthUnit. */
             pitchY: number;
+            /** @description Hole diameter, in lengthUnit. */
             diameter: number;
         };
         CircleDto: {
+            /** @description Diameter of the circle the hole centres lie on, in lengthUnit. */
             circleDiameter: number;
+            /** @description Holes on the circle. */
             count: number;
             /** @description In degrees. */
             startAngleDeg: number;
+            /** @description Hole diameter, in lengthUnit. */
             diameter: number;
         };
         HolePatternDto: {
@@ -2190,7 +2258,9 @@ export interface components {
              * @enum {string}
              */
             lengthUnit?: "mm" | "um" | "in" | "thou";
+            /** @description Outline width, in lengthUnit. */
             width: number;
+            /** @description Outline height, in lengthUnit. */
             height: number;
             /** @enum {string} */
             entry: "list" | "grid" | "circle";
