@@ -113,6 +113,20 @@ describe('kinds, units and references in the database', () => {
     });
   });
 
+  it('refuses a bolt-down hole that names a write never made', async () => {
+    const railId = await newRail('Y1 bolted');
+    const bd = await ws.as.builder.post(`/api/rails/${railId}/bolt-downs`).send({ mode: 'line', band: 0.01 });
+    expect(bd.status).toBe(201);
+    const hole = await ws.as.builder.put(`/api/bolt-downs/${bd.body.id}/holes/0`).send({ reading: 0, fixed: true, writeId: randomUUID() });
+    expect(hole.status).toBe(200);
+    const { rows } = await pool.query<{ id: string; last_write_id: string }>('select id, last_write_id from bolt_down_holes where bolt_down_id = $1', [bd.body.id]);
+    expect(rows).toHaveLength(1);
+    expect(await refusal('update bolt_down_holes set last_write_id = $2 where id = $1', [rows[0].id, randomUUID()])).toEqual({
+      code: '23503',
+      constraint: 'bolt_down_holes_last_write_id_bolt_down_writes_write_id_fk',
+    });
+  });
+
   it('refuses a history entry for a machine that does not exist', async () => {
     expect(
       await refusal("insert into audit_entries (workshop_id, machine_id, record_type, action, actor_name) values ($1, $2, 'machine', 'created', 'script')", [ws.id, randomUUID()]),

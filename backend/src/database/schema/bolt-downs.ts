@@ -1,4 +1,4 @@
-import { boolean, doublePrecision, index, integer, jsonb, pgTable, text, timestamp, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
+import { boolean, doublePrecision, index, integer, jsonb, pgTable, text, timestamp, uniqueIndex, uuid, type AnyPgColumn } from 'drizzle-orm/pg-core';
 import { id, oneOf, timestamps } from './columns.js';
 import { workshops } from './workshops.js';
 import { machines } from './machines.js';
@@ -62,7 +62,8 @@ export const boltDownHoles = pgTable(
     fixedAt: timestamp('fixed_at', { withTimezone: true }),
     fixedById: uuid('fixed_by_id').references(() => users.id),
     fixedByName: text('fixed_by_name'),
-    lastWriteId: uuid('last_write_id'),
+    /** The write that last changed the hole (a write id the browser sent). */
+    lastWriteId: uuid('last_write_id').references((): AnyPgColumn => boltDownWrites.writeId),
     ...timestamps,
   },
   (t) => [uniqueIndex('bolt_down_holes_unique').on(t.boltDownId, t.holeIndex)],
