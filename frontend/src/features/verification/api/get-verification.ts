@@ -1,11 +1,11 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { api, ApiError } from '../../../lib/api-client';
-import { verificationKeys, type PublicVerification } from '../types';
+import { answer, ApiError, client } from '../../../lib/api-client';
+import { verificationKeys } from '../types';
 
 export const verificationQueryOptions = (token: string) =>
   queryOptions({
     queryKey: verificationKeys.byToken(token),
-    queryFn: () => api.get<PublicVerification>(`/public/verify/${encodeURIComponent(token)}`),
+    queryFn: () => answer(client.GET('/api/public/verify/{token}', { params: { path: { token } } })),
     // An unknown address stays unknown: no retries.
     retry: (count, error) => !(error instanceof ApiError && error.status === 404) && count < 2,
   });
