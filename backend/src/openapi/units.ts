@@ -5,13 +5,19 @@ import type { OpenAPIObject, ReferenceObject, SchemaObject } from '@nestjs/swagg
  * written into the description where the type's own comment did not say it.
  */
 const NAMED_UNITS: [RegExp, string, RegExp][] = [
-  [/MmPerMin$/, 'In mm per minute.', /mm per min|mm\/min/i],
-  [/MmPerM$/, 'In mm per metre.', /mm per m|mm\/m/i],
+  [/mmPerMin$/i, 'In mm per minute.', /mm per min|mm\/min/i],
+  [/mmPerMetre$|mmPerM$/i, 'In mm per metre.', /mm per m|mm\/m/i],
   [/Mm$/, 'In mm.', /\bmm\b|millimetres/i],
   [/Um$/, 'In µm.', /µm|\bum\b|micromet/i],
-  [/Degrees$|Deg$/, 'In degrees.', /degree/i],
+  [/Deg$|Degrees$/, 'In degrees.', /degree|°/i],
+  [/Arcsec$/, 'In arcseconds.', /arcsec|″/i],
+  [/Rad$/, 'In radians.', /radian/i],
+  [/Percent$/, 'In %.', /%|per ?cent/i],
+  [/Nm$/, 'In N·m.', /N·m|Nm\b/],
+  [/Px$/, 'In pixels.', /pixel/i],
+  [/Bytes$/, 'In bytes.', /byte/i],
+  [/Days$/, 'In days.', /day/i],
   [/Seconds$/, 'In seconds.', /second/i],
-  [/Celsius$|C$/, 'In °C.', /°C|celsius/i],
 ];
 
 const FAMILIES: Record<string, string> = {

@@ -1882,12 +1882,12 @@ export interface components {
             instrument?: string;
             /** @description Smallest step of the instrument, in `readingUnit`. */
             resolution?: number;
-            /** @description In °C. */
             temperatureC?: number;
             /** @enum {string} */
             phase: "as-found" | "as-left";
             takenBy?: string;
             boltSize?: string;
+            /** @description In N·m. */
             torqueNm?: number;
             datum?: string;
             notes?: string;
@@ -1896,10 +1896,10 @@ export interface components {
         };
         UpdateSweepDetailsDto: {
             instrument?: string;
-            /** @description In °C. */
             temperatureC?: number | null;
             takenBy?: string;
             boltSize?: string | null;
+            /** @description In N·m. */
             torqueNm?: number | null;
             datum?: string | null;
             notes?: string;
@@ -1963,12 +1963,12 @@ export interface components {
             instrument?: string;
             /** @description Smallest step of the instrument, in `readingUnit`. */
             resolution?: number;
-            /** @description In °C. */
             temperatureC?: number;
             /** @enum {string} */
             phase: "as-found" | "as-left";
             takenBy?: string;
             boltSize?: string;
+            /** @description In N·m. */
             torqueNm?: number;
             datum?: string;
             notes?: string;
@@ -2282,6 +2282,7 @@ export interface components {
                 index: number;
                 filename: string;
                 contentType: string;
+                /** @description In bytes. */
                 sizeBytes: number;
             }[];
         };
@@ -2812,6 +2813,7 @@ export interface components {
         };
         /** @description Largest slope between neighbouring stations (or over a stated base), mm per metre. */
         StoredLocalSlope: {
+            /** @description In mm per metre. */
             mmPerM: number;
             /** @description In mm. */
             fromMm: number;
@@ -2961,10 +2963,12 @@ export interface components {
             correction: components["schemas"]["SquaringCorrection"];
             /** @description In degrees. */
             outOfSquareDeg: number;
+            /** @description In arcseconds. */
             outOfSquareArcsec: number;
-            /** @description Lateral error per metre of travel: tan γ × 1000. */
+            /** @description Lateral error per metre of travel: tan γ × 1000. In mm per metre. */
             mmPerMetre: number;
             warnings: string[];
+            /** @description In radians. */
             outOfSquareRad: number;
             /**
              * @description Which diagonal is longer (1 when they are equal, with a zero angle).
@@ -3036,8 +3040,11 @@ export interface components {
                 valueMm: number;
             };
             tilt: {
+                /** @description In mm per metre. */
                 xMmPerMetre: number;
+                /** @description In mm per metre. */
                 yMmPerMetre: number;
+                /** @description In mm per metre. */
                 mmPerMetre: number;
                 /** @description In degrees. */
                 directionDeg: number;
@@ -3073,10 +3080,12 @@ export interface components {
             scaleErrorY: number;
             x: components["schemas"]["AxisReading"];
             y: components["schemas"]["AxisReading"];
+            /** @description In arcseconds. */
             outOfSquareArcsec: number;
             squareness: {
                 /** @description In degrees. */
                 outOfSquareDeg: number;
+                /** @description In mm per metre. */
                 mmPerMetre: number;
                 /** @enum {number} */
                 longDiagonal: 1 | 2;
@@ -3103,6 +3112,7 @@ export interface components {
             afterKerfMm: number;
             /** @description In mm. */
             errorMm: number;
+            /** @description In %. */
             errorPercent: number;
             /** @description Multiply the axis's steps per mm by this: commanded ÷ measured. */
             correctionFactor: number;
@@ -3152,7 +3162,9 @@ export interface components {
             /** @description Bytes. */
             size: number;
             sha256: string;
+            /** @description In pixels. */
             widthPx: number | null;
+            /** @description In pixels. */
             heightPx: number | null;
             contentUrl: string;
             /** @description Photos only. */
@@ -3360,9 +3372,7 @@ export interface components {
         ThermalReference: {
             /** @description True when both temperatures are known and the correction is applied. */
             applied: boolean;
-            /** @description In °C. */
             machineTemperatureC: number | null;
-            /** @description In °C. */
             scaleTemperatureC: number | null;
             /** @enum {string} */
             scaleMaterial: "steel" | "stainless-steel" | "aluminium" | "glass" | "invar";
@@ -3411,6 +3421,7 @@ export interface components {
             recordHash: string;
             statement: string;
             recheckDueAt: string;
+            /** @description In days. */
             recheckIntervalDays: number;
             /** @description The approval stands and its re-check date has passed (worked out when read, never stored). */
             recheckDue: boolean;
@@ -4854,7 +4865,9 @@ export interface operations {
                         };
                         /** @description In degrees. */
                         outOfSquareDeg: number;
+                        /** @description In arcseconds. */
                         outOfSquareArcsec: number;
+                        /** @description In mm per metre. */
                         mmPerMetre: number;
                         /** @enum {number} */
                         longDiagonal: 1 | 2;
@@ -4937,8 +4950,11 @@ export interface operations {
                             flatness: number;
                         };
                         tilt: {
+                            /** @description In mm per metre. */
                             xMmPerMetre: number;
+                            /** @description In mm per metre. */
                             yMmPerMetre: number;
+                            /** @description In mm per metre. */
                             mmPerMetre: number;
                             /** @description In degrees. */
                             directionDeg: number;
@@ -5086,6 +5102,7 @@ export interface operations {
                         /** @description In mm. */
                         correctedStepsPerMm: number;
                         correctedStepsPerIn: number;
+                        /** @description In %. */
                         errorPercent: number;
                         residualMax: number;
                         moves: {
@@ -5486,6 +5503,7 @@ export interface operations {
                         x: {
                             scale: number;
                             error: number;
+                            /** @description In %. */
                             errorPercent: number;
                             /** @description In mm. */
                             correctedStepsPerMm: number | null;
@@ -5494,6 +5512,7 @@ export interface operations {
                         y: {
                             scale: number;
                             error: number;
+                            /** @description In %. */
                             errorPercent: number;
                             /** @description In mm. */
                             correctedStepsPerMm: number | null;
@@ -5503,7 +5522,9 @@ export interface operations {
                             warnings: components["schemas"]["ResultWarning"][];
                             /** @description In degrees. */
                             outOfSquareDeg: number;
+                            /** @description In arcseconds. */
                             outOfSquareArcsec: number;
+                            /** @description In mm per metre. */
                             mmPerMetre: number;
                             /** @enum {number} */
                             longDiagonal: 1 | 2;
@@ -5580,6 +5601,7 @@ export interface operations {
                     "application/json": {
                         bolts: {
                             boltSize: string;
+                            /** @description In N·m. */
                             torqueNm: number;
                         }[];
                         source: string;
@@ -8423,6 +8445,7 @@ export interface operations {
                 };
                 content: {
                     "application/json": {
+                        /** @description In bytes. */
                         maxBytes: number;
                         accepted: {
                             contentType: string;
@@ -9163,6 +9186,7 @@ export interface operations {
                         result: {
                             /** @description In mm. */
                             correctedStepsPerMm: number;
+                            /** @description In %. */
                             errorPercent: number;
                             scale: number;
                             offset: number;
@@ -9241,6 +9265,7 @@ export interface operations {
                         result: {
                             /** @description In mm. */
                             correctedStepsPerMm: number;
+                            /** @description In %. */
                             errorPercent: number;
                             scale: number;
                             offset: number;
@@ -9252,8 +9277,10 @@ export interface operations {
                                 error: number;
                                 residual: number;
                             }[];
+                            /** @description In %. */
                             theoryDifferencePercent: number | null;
                             farFromTheory: boolean;
+                            /** @description In %. */
                             thermalCorrectionPercent: number;
                         } | null;
                         warnings: components["schemas"]["ResultWarning"][];
@@ -9363,6 +9390,7 @@ export interface operations {
                         result: {
                             /** @description In mm. */
                             correctedStepsPerMm: number;
+                            /** @description In %. */
                             errorPercent: number;
                             scale: number;
                             offset: number;
@@ -9374,8 +9402,10 @@ export interface operations {
                                 error: number;
                                 residual: number;
                             }[];
+                            /** @description In %. */
                             theoryDifferencePercent: number | null;
                             farFromTheory: boolean;
+                            /** @description In %. */
                             thermalCorrectionPercent: number;
                         } | null;
                         warnings: components["schemas"]["ResultWarning"][];
@@ -10695,6 +10725,7 @@ export interface operations {
                         targetSet: {
                             id: string;
                             name: string;
+                            /** @description In days. */
                             recheckIntervalDays: number;
                         };
                         defaultStatement: string;
@@ -11337,6 +11368,7 @@ export interface operations {
                         workshop: string;
                         statement: string;
                         recheckDueAt: string;
+                        /** @description In days. */
                         recheckIntervalDays: number;
                         recheckDue: boolean;
                         targetSet: string;
