@@ -1,4 +1,4 @@
-import type { Schemas } from '../../lib/api/schemas';
+import type { AnswerOf, Schemas } from '../../lib/api/schemas';
 
 // Requests and responses of the calculators API. Lengths (positions, moves, sizes, lead, travel)
 // in `lengthUnit`, readings (indicator readings, deviations, heights) in `readingUnit`; every
@@ -8,122 +8,36 @@ import type { Schemas } from '../../lib/api/schemas';
 export type UnitFamilies = Required<Pick<Schemas['StraightnessDto'], 'lengthUnit' | 'readingUnit'>>;
 
 /** Something a person should know about a result: a stable code and a plain sentence. */
-export interface ResultWarning {
-  code: string;
-  message: string;
-}
-
-/** What every calculator answers besides its own figures. */
-export interface CalculatedCommon extends UnitFamilies {
-  units: Record<string, string>;
-  warnings: ResultWarning[];
-}
-
-export interface ReferenceLine {
-  slope: number;
-  intercept: number;
-  straightness: number;
-  residuals: number[];
-}
+export type ResultWarning = Schemas['ResultWarning'];
 
 export type StraightnessRequest = Schemas['StraightnessDto'] & UnitFamilies;
-export interface StraightnessResult extends CalculatedCommon {
-  leastSquares: ReferenceLine;
-  /** Centre line of the band; the band is the line ± straightness / 2. */
-  minimumZone: ReferenceLine;
-  endPoint: ReferenceLine;
-}
+/** Asked with ?residuals=true, so each line carries its residuals. */
+export type StraightnessResult = AnswerOf<'/api/calc/straightness', 'post'> & { leastSquares: { residuals: number[] } };
 
 export type ParallelismRequest = Schemas['ParallelismDto'] & UnitFamilies;
-export interface ParallelismResult extends CalculatedCommon {
-  parallelism: number;
-  meanOffset: number;
-  differences: number[];
-}
+export type ParallelismResult = AnswerOf<'/api/calc/parallelism', 'post'>;
 
 export type SquarenessRequest = Schemas['SquarenessDto'] & UnitFamilies;
-export interface SquarenessResult extends CalculatedCommon {
-  outOfSquareDeg: number;
-  outOfSquareArcsec: number;
-  mmPerMetre: number;
-  longDiagonal: 1 | 2;
-  diagonalDifference: number;
-  correction: number;
-  span: number;
-}
+export type SquarenessResult = AnswerOf<'/api/calc/squareness', 'post'>;
 
 export type FlatnessRequest = Schemas['FlatnessDto'] & UnitFamilies;
-export interface FlatnessResult extends CalculatedCommon {
-  leastSquares: { a: number; b: number; c: number; flatness: number; residuals: number[] };
-  tilt: { xMmPerMetre: number; yMmPerMetre: number; mmPerMetre: number; directionDeg: number };
-}
+/** Asked with ?residuals=true, so the plane carries its residuals. */
+export type FlatnessResult = AnswerOf<'/api/calc/flatness', 'post'> & { leastSquares: { residuals: number[] } };
 
 export type DriveRequest = Schemas['DriveDto'] & UnitFamilies;
 export type DriveType = DriveRequest['type'];
-export interface DriveResult extends CalculatedCommon {
-  travelPerRev: number;
-  travelPerMotorRev: number;
-  stepsPerMm: number;
-  stepsPerIn: number;
-  resolution: number;
-}
+export type DriveResult = AnswerOf<'/api/calc/drive', 'post'>;
 
 export type TravelTrialRequest = Schemas['TravelTrialDto'] & UnitFamilies;
-export interface TravelTrialResult extends CalculatedCommon {
-  scale: number;
-  offset: number;
-  correctedStepsPerMm: number;
-  correctedStepsPerIn: number;
-  errorPercent: number;
-  residualMax: number;
-  moves: { commanded: number; measured: number; error: number; residual: number }[];
-}
+export type TravelTrialResult = AnswerOf<'/api/calc/travel-trial', 'post'>;
 
 export type PositioningRequest = Schemas['PositioningDto'] & UnitFamilies;
-export interface PositioningTarget {
-  target: number;
-  meanUp: number;
-  meanDown: number;
-  mean: number;
-  reversal: number;
-  sUp: number;
-  sDown: number;
-  repeatabilityUp: number;
-  repeatabilityDown: number;
-  repeatability: number;
-}
-export interface PositioningResult extends CalculatedCommon {
-  targets: PositioningTarget[];
-  reversal: number;
-  reversalMean: number;
-  repeatabilityUp: number;
-  repeatabilityDown: number;
-  repeatability: number;
-  systematicUp: number;
-  systematicDown: number;
-  systematic: number;
-  meanRange: number;
-  accuracyUp: number;
-  accuracyDown: number;
-  accuracy: number;
-  runsUp: number;
-  runsDown: number;
-}
+export type PositioningResult = AnswerOf<'/api/calc/positioning', 'post'>;
+export type PositioningTarget = PositioningResult['targets'][number];
 
 export type ScrewSpeedRequest = Schemas['ScrewSpeedDto'] & UnitFamilies;
 export type Mounting = ScrewSpeedRequest['mounting'];
-export interface ScrewSpeedResult extends CalculatedCommon {
-  rpm: number;
-  criticalSpeed: number;
-  permissibleSpeed: number;
-  dnLimitSpeed: number;
-  maxFeedRate: number;
-  withinLimits: boolean;
-  limitedBy: 'critical-speed' | 'dn-limit';
-  mountingFactor: number;
-  dnLimit: number;
-  source: string;
-}
+export type ScrewSpeedResult = AnswerOf<'/api/calc/screw-speed', 'post'>;
 
 /** Query keys: one per calculator, with the request body so equal inputs share a result. */
 export const calculatorKeys = {
