@@ -40,10 +40,19 @@ function registeredHandlers(app: NestFastifyApplication): Handler[] {
         const requestMethod = Reflect.getMetadata(METHOD_METADATA, fn) as RequestMethod | undefined;
         const routePath = Reflect.getMetadata(PATH_METADATA, fn) as string | undefined;
         if (requestMethod === undefined || routePath === undefined) continue;
-        const full = '/' + ['api', base, routePath].map((p) => p.replace(/^\/+|\/+$/g, '')).filter(Boolean).join('/');
-        const args = (Reflect.getMetadata(ROUTE_ARGS_METADATA, controller, name) ?? {}) as Record<string, { index: number }>;
+        const full =
+          '/' +
+          ['api', base, routePath]
+            .map((p) => p.replace(/^\/+|\/+$/g, ''))
+            .filter(Boolean)
+            .join('/');
+        const args = (Reflect.getMetadata(ROUTE_ARGS_METADATA, controller, name) ?? {}) as Record<
+          string,
+          { index: number }
+        >;
         const bodyKey = Object.keys(args).find((k) => k.startsWith(BODY_ARGUMENT));
-        const types = (Reflect.getMetadata('design:paramtypes', controller.prototype, name) ?? []) as (new () => object)[];
+        const types = (Reflect.getMetadata('design:paramtypes', controller.prototype, name) ??
+          []) as (new () => object)[];
         out.push({
           method: RequestMethod[requestMethod].toLowerCase() as Handler['method'],
           path: full.replace(/:([A-Za-z0-9_]+)/g, '{$1}'),
@@ -107,10 +116,21 @@ describe('API description (OpenAPI 3)', () => {
     const fastify = app.getHttpAdapter().getInstance();
     for (const h of handlers) {
       // The path as the router knows it (the cross-check that the metadata read above is right).
-      expect({ route: `${h.method} ${h.path}`, registered: fastify.hasRoute({ method: h.method.toUpperCase() as 'GET', url: h.path.replace(/\{([^}]+)\}/g, ':$1') }) }).toEqual({ route: `${h.method} ${h.path}`, registered: true });
-      expect({ route: `${h.method} ${h.path}`, described: Boolean(served.paths[h.path]?.[h.method]) }).toEqual({ route: `${h.method} ${h.path}`, described: true });
+      expect({
+        route: `${h.method} ${h.path}`,
+        registered: fastify.hasRoute({
+          method: h.method.toUpperCase() as 'GET',
+          url: h.path.replace(/\{([^}]+)\}/g, ':$1'),
+        }),
+      }).toEqual({ route: `${h.method} ${h.path}`, registered: true });
+      expect({ route: `${h.method} ${h.path}`, described: Boolean(served.paths[h.path]?.[h.method]) }).toEqual({
+        route: `${h.method} ${h.path}`,
+        described: true,
+      });
     }
-    const described = Object.entries(served.paths).flatMap(([p, item]) => METHODS.filter((m) => item[m]).map((m) => `${m} ${p}`));
+    const described = Object.entries(served.paths).flatMap(([p, item]) =>
+      METHODS.filter((m) => item[m]).map((m) => `${m} ${p}`),
+    );
     expect(described.sort()).toEqual(handlers.map((h) => `${h.method} ${h.path}`).sort());
   });
 
@@ -127,13 +147,19 @@ describe('API description (OpenAPI 3)', () => {
             expect({ route: `${m} ${p}`, content }).toEqual({ route: `${m} ${p}`, content: undefined });
             continue;
           }
-          expect({ route: `${m} ${p}`, hasContent: Boolean(content && Object.keys(content).length) }).toEqual({ route: `${m} ${p}`, hasContent: true });
+          expect({ route: `${m} ${p}`, hasContent: Boolean(content && Object.keys(content).length) }).toEqual({
+            route: `${m} ${p}`,
+            hasContent: true,
+          });
           for (const [type, media] of Object.entries(content ?? {})) {
             const schema = resolve(served, media.schema!);
             const typed = Boolean(schema.type || schema.oneOf || schema.allOf || schema.nullable);
             expect({ route: `${m} ${p}`, type, typed }).toEqual({ route: `${m} ${p}`, type, typed: true });
             if (type === 'application/json' && schema.type === 'object') {
-              expect({ route: `${m} ${p}`, described: Object.keys(schema.properties ?? {}).length > 0 || Boolean(schema.additionalProperties) }).toEqual({ route: `${m} ${p}`, described: true });
+              expect({
+                route: `${m} ${p}`,
+                described: Object.keys(schema.properties ?? {}).length > 0 || Boolean(schema.additionalProperties),
+              }).toEqual({ route: `${m} ${p}`, described: true });
             }
           }
         }
@@ -152,7 +178,8 @@ describe('API description (OpenAPI 3)', () => {
     for (const h of handlers) {
       if (!h.body || h.body === Object) continue;
       const op = served.paths[h.path][h.method] as OperationObject;
-      const body = op.requestBody && 'content' in op.requestBody ? op.requestBody.content['application/json']?.schema : undefined;
+      const body =
+        op.requestBody && 'content' in op.requestBody ? op.requestBody.content['application/json']?.schema : undefined;
       expect({ route: h.key, body: Boolean(body) }).toEqual({ route: h.key, body: true });
       const schema = resolve(served, body!);
       const rules = storage.getTargetValidationMetadatas(h.body, '', true, false);
@@ -161,13 +188,28 @@ describe('API description (OpenAPI 3)', () => {
         const f = fields.get(rule.propertyName) ?? { optional: false, refused: false };
         if (rule.type === 'conditionalValidation') f.optional = true;
         // A field refused whenever it is sent (the old single `unit`) is left out of the description.
-        if (rule.name === 'isEmpty' || (rule.name === 'equals' && rule.constraints?.[0] === undefined)) f.refused = true;
+        if (rule.name === 'isEmpty' || (rule.name === 'equals' && rule.constraints?.[0] === undefined))
+          f.refused = true;
         fields.set(rule.propertyName, f);
       }
-      const expectedFields = [...fields].filter(([, f]) => !f.refused).map(([n]) => n).sort();
-      const expectedRequired = [...fields].filter(([, f]) => !f.refused && !f.optional).map(([n]) => n).sort();
-      expect({ route: h.key, dto: h.body.name, fields: Object.keys(schema.properties ?? {}).sort() }).toEqual({ route: h.key, dto: h.body.name, fields: expectedFields });
-      expect({ route: h.key, dto: h.body.name, required: [...(schema.required ?? [])].sort() }).toEqual({ route: h.key, dto: h.body.name, required: expectedRequired });
+      const expectedFields = [...fields]
+        .filter(([, f]) => !f.refused)
+        .map(([n]) => n)
+        .sort();
+      const expectedRequired = [...fields]
+        .filter(([, f]) => !f.refused && !f.optional)
+        .map(([n]) => n)
+        .sort();
+      expect({ route: h.key, dto: h.body.name, fields: Object.keys(schema.properties ?? {}).sort() }).toEqual({
+        route: h.key,
+        dto: h.body.name,
+        fields: expectedFields,
+      });
+      expect({ route: h.key, dto: h.body.name, required: [...(schema.required ?? [])].sort() }).toEqual({
+        route: h.key,
+        dto: h.body.name,
+        required: expectedRequired,
+      });
       checked++;
     }
     expect(checked).toBeGreaterThan(30);
@@ -176,7 +218,9 @@ describe('API description (OpenAPI 3)', () => {
   it('documents the refusals: 400 with the validation body, 401 for signed-in routes, 403 where roles are limited, 409 for commands', () => {
     const validation = resolve(served, { $ref: '#/components/schemas/ValidationErrorResponse' });
     expect(validation.required).toEqual(['statusCode', 'message', 'error']);
-    expect(validation.properties?.message).toEqual(expect.objectContaining({ type: 'array', items: { type: 'string' } }));
+    expect(validation.properties?.message).toEqual(
+      expect.objectContaining({ type: 'array', items: { type: 'string' } }),
+    );
     const create = served.paths['/api/machines'].post as OperationObject;
     expect(Object.keys(create.responses).sort()).toEqual(['201', '400', '401', '403', '409']);
     const health = served.paths['/api/health'].get as OperationObject;
@@ -192,7 +236,10 @@ describe('API description (OpenAPI 3)', () => {
         if (!/Mm$/.test(prop)) continue;
         seen++;
         const text = (value as SchemaObject).description ?? '';
-        expect({ field: `${name}.${prop}`, saysMm: /\bmm\b|millimetres/.test(text) }).toEqual({ field: `${name}.${prop}`, saysMm: true });
+        expect({ field: `${name}.${prop}`, saysMm: /\bmm\b|millimetres/.test(text) }).toEqual({
+          field: `${name}.${prop}`,
+          saysMm: true,
+        });
       }
     }
     expect(seen).toBeGreaterThan(10);
@@ -202,7 +249,8 @@ describe('API description (OpenAPI 3)', () => {
     const committed = JSON.parse(readFileSync(COMMITTED, 'utf8')) as unknown;
     // Compared as values: a second document made in one process may list an object's keys in another order.
     const fromSources = JSON.parse(serializeOpenApiDocument(await describeApiWithoutServer())) as unknown;
-    const stale = 'backend/openapi.json is stale: run `npm run openapi -w backend` and commit it with frontend/src/lib/api/schema.d.ts';
+    const stale =
+      'backend/openapi.json is stale: run `npm run openapi -w backend` and commit it with frontend/src/lib/api/schema.d.ts';
     expect({ stale: isDeepStrictEqual(fromSources, committed) ? null : stale }).toEqual({ stale: null });
     expect({ stale: isDeepStrictEqual(served, committed) ? null : stale }).toEqual({ stale: null });
   });

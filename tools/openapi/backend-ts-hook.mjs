@@ -17,7 +17,11 @@ const SWC_OPTIONS = {
 };
 
 export async function resolve(specifier, context, nextResolve) {
-  if ((specifier.startsWith('.') || specifier.startsWith('/')) && specifier.endsWith('.js') && context.parentURL?.endsWith('.ts')) {
+  if (
+    (specifier.startsWith('.') || specifier.startsWith('/')) &&
+    specifier.endsWith('.js') &&
+    context.parentURL?.endsWith('.ts')
+  ) {
     const url = new URL(specifier, context.parentURL);
     const ts = new URL(url.href.replace(/\.js$/, '.ts'));
     if (!existsSync(fileURLToPath(url)) && existsSync(fileURLToPath(ts))) return { url: ts.href, shortCircuit: true };

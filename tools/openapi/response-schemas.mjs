@@ -33,7 +33,10 @@ export function describeResponses(ts, program, sourceRoot) {
     if (!usedNames.has(base)) usedNames.set(base, key);
     if (usedNames.get(base) === key) return base;
     // Same name, another declaration: prefix the folder it lives in.
-    const folder = path.dirname(file).split(path.sep)[0].replace(/(^|-)(\w)/g, (_, __, c) => c.toUpperCase());
+    const folder = path
+      .dirname(file)
+      .split(path.sep)[0]
+      .replace(/(^|-)(\w)/g, (_, __, c) => c.toUpperCase());
     return folder + base;
   }
 
@@ -80,13 +83,23 @@ export function describeResponses(ts, program, sourceRoot) {
       const args = checker.getTypeArguments(type);
       if (checker.isTupleType(type)) {
         const items = dedupe(args.map((a) => schemaOf(a, depth + 1)));
-        return { type: 'array', items: items.length === 1 ? items[0] : { oneOf: items }, minItems: args.length, maxItems: args.length };
+        return {
+          type: 'array',
+          items: items.length === 1 ? items[0] : { oneOf: items },
+          minItems: args.length,
+          maxItems: args.length,
+        };
       }
       return { type: 'array', items: schemaOf(args[0], depth + 1) };
     }
     const symbolName = type.getSymbol()?.getName();
     if (symbolName === 'Date') return { type: 'string', format: 'date-time' };
-    if (symbolName === 'Buffer' || symbolName === 'Uint8Array' || symbolName === 'Readable' || symbolName === 'ReadStream')
+    if (
+      symbolName === 'Buffer' ||
+      symbolName === 'Uint8Array' ||
+      symbolName === 'Readable' ||
+      symbolName === 'ReadStream'
+    )
       return { type: 'string', format: 'binary' };
     if (f & ts.TypeFlags.Object) {
       const symbol = isNamedObject(type);
@@ -154,7 +167,9 @@ export function describeResponses(ts, program, sourceRoot) {
       const text = description(prop);
       if (text) schema = schema.$ref ? { allOf: [schema], description: text } : { ...schema, description: text };
       properties[prop.getName()] = schema;
-      const optional = prop.flags & ts.SymbolFlags.Optional || (propType.isUnion() && propType.types.some((t) => t.flags & ts.TypeFlags.Undefined));
+      const optional =
+        prop.flags & ts.SymbolFlags.Optional ||
+        (propType.isUnion() && propType.types.some((t) => t.flags & ts.TypeFlags.Undefined));
       if (!optional) required.push(prop.getName());
     }
     const schema = { type: 'object', properties };
@@ -167,7 +182,12 @@ export function describeResponses(ts, program, sourceRoot) {
 
   const operations = {};
   for (const file of program.getSourceFiles()) {
-    if (file.isDeclarationFile || !path.resolve(file.fileName).startsWith(sourceRoot) || !file.fileName.endsWith('.controller.ts')) continue;
+    if (
+      file.isDeclarationFile ||
+      !path.resolve(file.fileName).startsWith(sourceRoot) ||
+      !file.fileName.endsWith('.controller.ts')
+    )
+      continue;
     ts.forEachChild(file, (node) => {
       if (!ts.isClassDeclaration(node) || !node.name) return;
       for (const member of node.members) {

@@ -4,7 +4,8 @@
 import { readFileSync } from 'node:fs';
 
 const document = JSON.parse(readFileSync(new URL('../../backend/openapi.json', import.meta.url), 'utf8'));
-const SAYS_UNIT = /\bmm\b|µm|\bum\b|lengthUnit|readingUnit|degree|°|second|minute|%|per ?cent|mm\/m|\bper\b|ratio|steps|N·m|rpm|\bunit\b|how many|number of|index|count|pixel|byte|day|radian|arcsec|rows|columns|teeth|no unit/i;
+const SAYS_UNIT =
+  /\bmm\b|µm|\bum\b|lengthUnit|readingUnit|degree|°|second|minute|%|per ?cent|mm\/m|\bper\b|ratio|steps|N·m|rpm|\bunit\b|how many|number of|index|count|pixel|byte|day|radian|arcsec|rows|columns|teeth|no unit/i;
 const COUNT_NAME = /count|Count|index|Index|^rows$|^columns$|^statusCode$/;
 const missing = new Set();
 
@@ -12,7 +13,8 @@ function walk(owner, schema, path) {
   if (!schema || typeof schema !== 'object') return;
   for (const [name, prop] of Object.entries(schema.properties ?? {})) {
     const type = prop.type ?? prop.items?.type;
-    if ((type === 'number' || type === 'integer') && !SAYS_UNIT.test(prop.description ?? '') && !COUNT_NAME.test(name)) missing.add(`${owner} ${path}${name}`);
+    if ((type === 'number' || type === 'integer') && !SAYS_UNIT.test(prop.description ?? '') && !COUNT_NAME.test(name))
+      missing.add(`${owner} ${path}${name}`);
     walk(owner, prop, `${path}${name}.`);
   }
   for (const key of ['oneOf', 'allOf', 'anyOf']) for (const part of schema[key] ?? []) walk(owner, part, path);

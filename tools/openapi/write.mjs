@@ -12,7 +12,9 @@ if (!process.argv.includes('--skip-metadata')) {
   execFileSync(process.execPath, [path.join(root, 'tools/openapi/generate-metadata.mjs')], { stdio: 'inherit' });
 }
 register('./backend-ts-hook.mjs', import.meta.url);
-const { writeOpenApiDocument } = await import(pathToFileURL(path.join(root, 'backend/src/openapi/write-document.ts')).href);
+const { writeOpenApiDocument } = await import(
+  pathToFileURL(path.join(root, 'backend/src/openapi/write-document.ts')).href
+);
 const target = path.join(root, 'backend/openapi.json');
 await writeOpenApiDocument(target);
 execFileSync(

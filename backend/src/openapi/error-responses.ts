@@ -19,7 +19,11 @@ export const ERROR_SCHEMAS: Record<string, SchemaObject> = {
     description: 'A refused request: each message names the field it is about.',
     properties: {
       statusCode: { type: 'number', enum: [400] },
-      message: { type: 'array', items: { type: 'string' }, description: 'One message per problem, each naming its field.' },
+      message: {
+        type: 'array',
+        items: { type: 'string' },
+        description: 'One message per problem, each naming its field.',
+      },
       error: { type: 'string', enum: ['Bad Request'] },
       field: { type: 'string', description: 'The field a computation could not use, when there is one.' },
     },
@@ -65,12 +69,20 @@ function refusal(description: string, schema: string): ResponseObject {
  * - 409 for commands: a record an approval stands on cannot change, and a repeated
  *   Idempotency-Key is refused while its first request is running or was someone else's.
  */
-export function errorResponses(method: string, path: string, operation: OperationObject, route: RouteFacts): Record<string, ResponseObject> {
+export function errorResponses(
+  method: string,
+  path: string,
+  operation: OperationObject,
+  route: RouteFacts,
+): Record<string, ResponseObject> {
   const out: Record<string, ResponseObject> = {};
   const hasInput = Boolean(operation.requestBody) || (operation.parameters ?? []).length > 0;
   const hasPathParameter = path.includes('{');
   if (hasInput || method !== 'get') {
-    out['400'] = refusal('The request breaks a rule: a field is missing, of the wrong type or out of range.', 'ValidationErrorResponse');
+    out['400'] = refusal(
+      'The request breaks a rule: a field is missing, of the wrong type or out of range.',
+      'ValidationErrorResponse',
+    );
   }
   if (!route.isPublic) out['401'] = refusal('No session: sign in first.', 'ErrorResponse');
   if (!route.isPublic && route.roles) {

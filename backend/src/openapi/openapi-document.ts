@@ -45,7 +45,12 @@ export function createOpenApiDocument(app: INestApplication): OpenAPIObject {
     .setTitle('Railwright API')
     .setDescription(DESCRIPTION)
     .setVersion('1')
-    .addCookieAuth('railwright.sid', { type: 'apiKey', in: 'cookie', name: 'railwright.sid', description: SESSION_COOKIE })
+    .addCookieAuth('railwright.sid', {
+      type: 'apiKey',
+      in: 'cookie',
+      name: 'railwright.sid',
+      description: SESSION_COOKIE,
+    })
     .build();
   const document = SwaggerModule.createDocument(app, config, {
     operationIdFactory: (controllerKey, methodKey) => `${controllerKey.replace(/Controller$/, '')}_${methodKey}`,
@@ -62,7 +67,8 @@ export function createOpenApiDocument(app: INestApplication): OpenAPIObject {
       if (!route) throw new Error(`${method.toUpperCase()} ${path}: no handler ${key}`);
       describeAnswer(operation, key, route, `${method.toUpperCase()} ${path}`);
       for (const parameter of (operation.parameters ?? []) as ParameterObject[]) {
-        if (parameter.in === 'path' && route.uuidParameters.includes(parameter.name)) parameter.schema = { type: 'string', format: 'uuid' };
+        if (parameter.in === 'path' && route.uuidParameters.includes(parameter.name))
+          parameter.schema = { type: 'string', format: 'uuid' };
       }
       Object.assign(operation.responses, errorResponses(method, path, operation, route));
       if (!route.isPublic) operation.security = [{ 'railwright.sid': [] }];
@@ -87,7 +93,8 @@ const TEXT_TYPES = /^(text\/|image\/svg\+xml)/;
 
 /** Puts the handler's answer schema on its 2xx response, for each media type it declares. */
 function describeAnswer(operation: OperationObject, key: string, route: RouteFacts, label: string) {
-  if (!(key in RESPONSE_SCHEMAS.operations)) throw new Error(`${label}: no answer schema for ${key}; run npm run openapi -w backend`);
+  if (!(key in RESPONSE_SCHEMAS.operations))
+    throw new Error(`${label}: no answer schema for ${key}; run npm run openapi -w backend`);
   const schema = RESPONSE_SCHEMAS.operations[key];
   for (const [status, response] of Object.entries(operation.responses)) {
     if (!status.startsWith('2')) continue;
@@ -102,7 +109,14 @@ function describeAnswer(operation: OperationObject, key: string, route: RouteFac
     answer.content = Object.fromEntries(
       mediaTypes.map((type) => [
         type,
-        { schema: type === 'application/json' ? schema : TEXT_TYPES.test(type) ? { type: 'string' } : { type: 'string', format: 'binary' } },
+        {
+          schema:
+            type === 'application/json'
+              ? schema
+              : TEXT_TYPES.test(type)
+                ? { type: 'string' }
+                : { type: 'string', format: 'binary' },
+        },
       ]),
     );
     answer.description ||= 'Done.';
@@ -135,11 +149,20 @@ function routeFacts(app: INestApplication): Map<string, RouteFacts> {
         if (typeof handler !== 'function' || Reflect.getMetadata(METHOD_METADATA, handler) === undefined) continue;
         if (Reflect.getMetadata(PATH_METADATA, handler) === undefined) continue;
         const isPublic = Boolean(Reflect.getMetadata(IS_PUBLIC, handler) ?? Reflect.getMetadata(IS_PUBLIC, controller));
-        const roles = (Reflect.getMetadata(ROLES_KEY, handler) ?? Reflect.getMetadata(ROLES_KEY, controller)) as string[] | undefined;
+        const roles = (Reflect.getMetadata(ROLES_KEY, handler) ?? Reflect.getMetadata(ROLES_KEY, controller)) as
+          string[] | undefined;
         const produces = (Reflect.getMetadata(DECORATORS.API_PRODUCES, handler) as string[] | undefined) ?? null;
-        const args = (Reflect.getMetadata(ROUTE_ARGS_METADATA, controller, name) ?? {}) as Record<string, { data?: unknown; pipes?: unknown[] }>;
+        const args = (Reflect.getMetadata(ROUTE_ARGS_METADATA, controller, name) ?? {}) as Record<
+          string,
+          { data?: unknown; pipes?: unknown[] }
+        >;
         const uuidParameters = Object.entries(args)
-          .filter(([kind, arg]) => kind.startsWith('5:') && typeof arg.data === 'string' && arg.pipes?.some((p) => p === ParseUUIDPipe || p instanceof ParseUUIDPipe))
+          .filter(
+            ([kind, arg]) =>
+              kind.startsWith('5:') &&
+              typeof arg.data === 'string' &&
+              arg.pipes?.some((p) => p === ParseUUIDPipe || p instanceof ParseUUIDPipe),
+          )
           .map(([, arg]) => arg.data as string);
         facts.set(`${controller.name}.${name}`, { isPublic, roles: roles ?? null, produces, uuidParameters });
       }
@@ -163,7 +186,7 @@ const DESCRIPTION = [
   '`lengthUnit` (positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and',
   'travel; feed rates in lengthUnit per minute) and `readingUnit` (indicator readings, deviations and',
   'heights), each one of `mm`, `um`, `in`, `thou` (1 in = 25.4 mm exactly), both mm when absent.',
-  'A number whose name ends in `Mm` is in millimetres whatever the record\'s units (`MmPerM`: mm per metre,',
-  '`MmPerMin`: mm per minute); the numbers beside it without the suffix are in the record\'s unit family.',
-  'Each field\'s description names its unit.',
+  "A number whose name ends in `Mm` is in millimetres whatever the record's units (`MmPerM`: mm per metre,",
+  "`MmPerMin`: mm per minute); the numbers beside it without the suffix are in the record's unit family.",
+  "Each field's description names its unit.",
 ].join('\n');

@@ -23,13 +23,17 @@ const NAMED_UNITS: [RegExp, string, RegExp][] = [
 const FAMILIES: Record<string, string> = {
   lengthUnit:
     'Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).',
-  readingUnit: 'Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).',
+  readingUnit:
+    'Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).',
 };
 
 function describeProperty(name: string, schema: SchemaObject | ReferenceObject): SchemaObject | ReferenceObject {
   if ('$ref' in schema) return schema;
   if (name in FAMILIES && !schema.description) return { ...schema, description: FAMILIES[name] };
-  const isNumber = schema.type === 'number' || schema.type === 'integer' || (schema.type === 'array' && !!schema.items && 'type' in schema.items && schema.items.type === 'number');
+  const isNumber =
+    schema.type === 'number' ||
+    schema.type === 'integer' ||
+    (schema.type === 'array' && !!schema.items && 'type' in schema.items && schema.items.type === 'number');
   if (!isNumber) return schema;
   for (const [pattern, text, said] of NAMED_UNITS) {
     if (!pattern.test(name)) continue;

@@ -20,7 +20,11 @@ function appModule() {
  * making any provider, so no database or configuration is needed.
  */
 export async function describeApiWithoutServer() {
-  const app = await NestFactory.create<NestFastifyApplication>(appModule(), new FastifyAdapter(), { preview: true, logger: ['error'], abortOnError: false });
+  const app = await NestFactory.create<NestFastifyApplication>(appModule(), new FastifyAdapter(), {
+    preview: true,
+    logger: ['error'],
+    abortOnError: false,
+  });
   try {
     app.setGlobalPrefix(API_PREFIX);
     return await buildOpenApiDocument(app);
