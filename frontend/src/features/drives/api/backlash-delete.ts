@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { client } from '../../../lib/api-client';
 import { MACHINE_STATE_KEYS } from '../../../lib/machine-state-keys';
 import { driveKeys } from '../types';
 
@@ -7,7 +7,7 @@ import { driveKeys } from '../types';
 export function useDeleteBacklash(axisId: string) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (checkId: string) => api.delete<void>(`/axes/${axisId}/backlash-checks/${checkId}`),
+    mutationFn: async (checkId: string) => void (await client.DELETE('/api/axes/{id}/backlash-checks/{checkId}', { params: { path: { id: axisId, checkId } } })),
     onSuccess: () => Promise.all([qc.invalidateQueries({ queryKey: driveKeys.all }), ...MACHINE_STATE_KEYS.map((queryKey) => qc.invalidateQueries({ queryKey }))]),
   });
 }

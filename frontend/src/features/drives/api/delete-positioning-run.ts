@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { client } from '../../../lib/api-client';
 import { MACHINE_STATE_KEYS } from '../../../lib/machine-state-keys';
 import { positioningRunQueryOptions } from './get-positioning-run';
 import { driveKeys } from '../types';
@@ -8,7 +8,7 @@ import { driveKeys } from '../types';
 export function useDeletePositioningRun(axisId: string) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (runId: string) => api.delete<void>(`/axes/${axisId}/positioning-runs/${runId}`),
+    mutationFn: async (runId: string) => void (await client.DELETE('/api/axes/{id}/positioning-runs/{runId}', { params: { path: { id: axisId, runId } } })),
     onSuccess: (_: void, runId: string) => {
       // Gone: nothing should ask for it again while the list catches up.
       qc.removeQueries({ queryKey: positioningRunQueryOptions(axisId, runId).queryKey, exact: true });

@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { client } from '../../../lib/api-client';
 import { MACHINE_STATE_KEYS } from '../../../lib/machine-state-keys';
 import { travelTrialQueryOptions } from './get-travel-trial';
 import { driveKeys } from '../types';
@@ -8,7 +8,7 @@ import { driveKeys } from '../types';
 export function useDeleteTravelTrial(axisId: string) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (trialId: string) => api.delete<void>(`/axes/${axisId}/travel-trials/${trialId}`),
+    mutationFn: async (trialId: string) => void (await client.DELETE('/api/axes/{id}/travel-trials/{trialId}', { params: { path: { id: axisId, trialId } } })),
     onSuccess: (_: void, trialId: string) => {
       // Gone: nothing should ask for it again while the list catches up.
       qc.removeQueries({ queryKey: travelTrialQueryOptions(axisId, trialId).queryKey, exact: true });
