@@ -1,5 +1,4 @@
 import type { AnswerOf, Schemas } from '../../lib/api/schemas';
-import type { LengthUnit } from '../../lib/units';
 
 export type Rail = Schemas['RailResponse'];
 export type RailListItem = Schemas['RailListItem'];
@@ -20,22 +19,13 @@ export type SweepListItem = Omit<Schemas['SweepListItem'], 'phase'> & { phase: S
 export const FACE_LABELS: Record<SweepFace, string> = { side: 'Side face (sideways straightness)', top: 'Top face (heights)' };
 export type CheckState = SweepStatus | 'not-comparable' | 'not-started';
 
-export interface NewSweep {
-  id: string;
-  readingUnit: LengthUnit;
-  lengthUnit: LengthUnit;
-  face: SweepFace;
-  stations: { position: number; reading: number }[];
-  instrument?: string;
-  resolution?: number;
-  temperatureC?: number;
-  phase: SweepPhase;
-  takenBy?: string;
-  boltSize?: string;
-  torqueNm?: number;
-  datum?: string;
-  notes?: string;
-}
+/**
+ * A sweep as recorded: the described request with the id the browser makes (also the entry's
+ * Idempotency-Key) and both unit families named. Stations are written here until the description
+ * gives StationDto its fields.
+ */
+export type NewSweep = Omit<Schemas['CreateSweepDto'], 'id' | 'stations'> &
+  Required<Pick<Schemas['CreateSweepDto'], 'readingUnit' | 'lengthUnit' | 'face'>> & { id: string; stations: { position: number; reading: number }[] };
 
 export interface Parallelism {
   railId: string;

@@ -2,23 +2,12 @@ import { useQueryClient } from '@tanstack/react-query';
 import { MACHINE_STATE_KEYS } from '../../../lib/machine-state-keys';
 import { newCommandKey } from '../../../lib/offline/commands';
 import { useCommand } from '../../../lib/offline/use-command';
-import type { LengthUnit } from '../../../lib/units';
+import type { Schemas } from '../../../lib/api/schemas';
 import { boltDownKeys, type BoltDown, type FinalSweepResult } from '../types';
 
-export interface FinalSweepInput {
-  readingUnit: LengthUnit;
-  lengthUnit: LengthUnit;
-  phase: 'as-left' | 'as-found';
-  stations: { position: number; reading: number }[];
-  instrument?: string;
-  resolution?: number;
-  temperatureC?: number;
-  takenBy?: string;
-  boltSize?: string;
-  torqueNm?: number;
-  datum?: string;
-  notes?: string;
-}
+/** The described final-sweep request (a rail sweep's); the id is added when it is sent. Stations as in the rails' NewSweep. */
+export type FinalSweepInput = Omit<Schemas['FinalSweepDto'], 'id' | 'stations'> &
+  Required<Pick<Schemas['FinalSweepDto'], 'readingUnit' | 'lengthUnit'>> & { stations: { position: number; reading: number }[] };
 
 export const finalSweepPath = (boltDownId: string) => `/bolt-downs/${boltDownId}/final-sweep`;
 
