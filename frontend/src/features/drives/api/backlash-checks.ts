@@ -1,6 +1,6 @@
 import { infiniteQueryOptions, useInfiniteQuery } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
-import { backlashKeys, type BacklashCheck } from '../backlash-types';
+import { answer, client } from '../../../lib/api-client';
+import { backlashKeys } from '../backlash-types';
 
 export const BACKLASH_PAGE_SIZE = 50;
 
@@ -8,7 +8,8 @@ export const BACKLASH_PAGE_SIZE = 50;
 export const backlashChecksQueryOptions = (axisId: string) =>
   infiniteQueryOptions({
     queryKey: backlashKeys.list(axisId),
-    queryFn: ({ pageParam }) => api.get<BacklashCheck[]>(`/axes/${axisId}/backlash-checks?limit=${BACKLASH_PAGE_SIZE}${pageParam ? `&cursor=${pageParam}` : ''}`),
+    queryFn: ({ pageParam }) =>
+      answer(client.GET('/api/axes/{id}/backlash-checks', { params: { path: { id: axisId }, query: { limit: BACKLASH_PAGE_SIZE, cursor: pageParam || undefined } } })),
     initialPageParam: '',
     getNextPageParam: (last) => (last.length === BACKLASH_PAGE_SIZE ? last[last.length - 1].id : undefined),
     select: (data) => data.pages.flat(),
