@@ -1,33 +1,16 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { answer, client } from '../../../lib/api-client';
+import type { Schemas } from '../../../lib/api/schemas';
 import { driveKeys } from '../types';
 
-export interface DrivePreviewInput {
-  type: string;
-  lengthUnit: string;
-  motorStepsPerRev: number;
-  microsteps: number;
-  gearRatio?: number;
-  lead?: number;
-  threadsPerInch?: number;
-  beltPitch?: number;
-  pulleyTeeth?: number;
-  pinionModule?: number;
-  pinionTeeth?: number;
-}
-
-export interface DrivePreview {
-  travelPerRev: number;
-  travelPerMotorRev: number;
-  stepsPerMm: number;
-  resolution: number;
-}
+/** The drive calculator's request (the server's DriveDto for /api/calc/drive). */
+export type DrivePreviewInput = Schemas['DriveDto'];
 
 /** Theoretical steps per mm while the form is typed, from the calculators API (nothing saved). */
 export const drivePreviewQueryOptions = (input: DrivePreviewInput | null) =>
   queryOptions({
     queryKey: driveKeys.preview(input),
-    queryFn: () => api.post<DrivePreview>('/calc/drive', input),
+    queryFn: () => answer(client.POST('/api/calc/drive', { body: input! })),
     enabled: input !== null,
     placeholderData: keepPreviousData,
     retry: false,
