@@ -13,9 +13,12 @@ import type { ThermalReference } from '../engine/thermal.js';
 function temperatureOf(row: { machineTemperatureC: number | null; scaleTemperatureC: number | null; scaleMaterial: string | null; instrumentResolution: number | null }, result: unknown) {
   const thermal = result && typeof result === 'object' ? ((result as { thermal?: ThermalReference }).thermal ?? null) : null;
   return {
+    /** Temperature of the machine while measuring, °C. */
     machineTemperature: row.machineTemperatureC,
+    /** Temperature of the scale while measuring, °C. */
     scaleTemperature: row.scaleTemperatureC,
     scaleMaterial: row.scaleMaterial,
+    /** Smallest step the instrument reads, in readingUnit. */
     instrumentResolution: row.instrumentResolution,
     thermal,
   };
@@ -31,10 +34,15 @@ export const storedPositioning = (stored: unknown) => readableResult<Positioning
 export const travelTrialResult = (r: TravelTrialResult) => ({
   correctedStepsPerMm: r.correctedStepsPerMm,
   errorPercent: r.errorPercent,
+  /** Measured ÷ commanded, fitted over the moves (no unit). */
   scale: r.scale,
+  /** The fit's offset, in mm. */
   offset: r.offsetMm,
+  /** Each move's residual about the fit, in mm. */
   residuals: r.moves.map((m) => m.residualMm),
+  /** Largest residual, in mm. */
   residualMax: r.residualMaxMm,
+  /** Each move commanded and measured, its error and its residual, all in mm. */
   moves: r.moves.map((m) => ({ commanded: m.commandedMm, measured: m.measuredMm, error: m.errorMm, residual: m.residualMm })),
   theoryDifferencePercent: r.theoryDifferencePercent ?? null,
   farFromTheory: r.farFromTheory ?? false,

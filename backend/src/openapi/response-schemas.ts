@@ -5393,19 +5393,23 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
               "type": "number"
             },
             "scale": {
-              "type": "number"
+              "type": "number",
+              "description": "Measured ÷ commanded, fitted over the moves (no unit)."
             },
             "offset": {
-              "type": "number"
+              "type": "number",
+              "description": "The fit's offset, in mm."
             },
             "residuals": {
               "type": "array",
               "items": {
                 "type": "number"
-              }
+              },
+              "description": "Each move's residual about the fit, in mm."
             },
             "residualMax": {
-              "type": "number"
+              "type": "number",
+              "description": "Largest residual, in mm."
             },
             "moves": {
               "type": "array",
@@ -5431,7 +5435,8 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
                   "error",
                   "residual"
                 ]
-              }
+              },
+              "description": "Each move commanded and measured, its error and its residual, all in mm."
             },
             "theoryDifferencePercent": {
               "type": "number",
@@ -5473,11 +5478,13 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
         },
         "machineTemperature": {
           "type": "number",
-          "nullable": true
+          "nullable": true,
+          "description": "Temperature of the machine while measuring, °C."
         },
         "scaleTemperature": {
           "type": "number",
-          "nullable": true
+          "nullable": true,
+          "description": "Temperature of the scale while measuring, °C."
         },
         "scaleMaterial": {
           "type": "string",
@@ -5485,7 +5492,8 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
         },
         "instrumentResolution": {
           "type": "number",
-          "nullable": true
+          "nullable": true,
+          "description": "Smallest step the instrument reads, in readingUnit."
         },
         "thermal": {
           "allOf": [
@@ -5612,19 +5620,23 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
               "type": "number"
             },
             "scale": {
-              "type": "number"
+              "type": "number",
+              "description": "Measured ÷ commanded, fitted over the moves (no unit)."
             },
             "offset": {
-              "type": "number"
+              "type": "number",
+              "description": "The fit's offset, in mm."
             },
             "residuals": {
               "type": "array",
               "items": {
                 "type": "number"
-              }
+              },
+              "description": "Each move's residual about the fit, in mm."
             },
             "residualMax": {
-              "type": "number"
+              "type": "number",
+              "description": "Largest residual, in mm."
             },
             "moves": {
               "type": "array",
@@ -5650,7 +5662,8 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
                   "error",
                   "residual"
                 ]
-              }
+              },
+              "description": "Each move commanded and measured, its error and its residual, all in mm."
             },
             "theoryDifferencePercent": {
               "type": "number",
@@ -5692,11 +5705,13 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
         },
         "machineTemperature": {
           "type": "number",
-          "nullable": true
+          "nullable": true,
+          "description": "Temperature of the machine while measuring, °C."
         },
         "scaleTemperature": {
           "type": "number",
-          "nullable": true
+          "nullable": true,
+          "description": "Temperature of the scale while measuring, °C."
         },
         "scaleMaterial": {
           "type": "string",
@@ -5704,7 +5719,8 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
         },
         "instrumentResolution": {
           "type": "number",
-          "nullable": true
+          "nullable": true,
+          "description": "Smallest step the instrument reads, in readingUnit."
         },
         "thermal": {
           "allOf": [
@@ -6238,11 +6254,13 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
         },
         "machineTemperature": {
           "type": "number",
-          "nullable": true
+          "nullable": true,
+          "description": "Temperature of the machine while measuring, °C."
         },
         "scaleTemperature": {
           "type": "number",
-          "nullable": true
+          "nullable": true,
+          "description": "Temperature of the scale while measuring, °C."
         },
         "scaleMaterial": {
           "type": "string",
@@ -6250,7 +6268,8 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
         },
         "instrumentResolution": {
           "type": "number",
-          "nullable": true
+          "nullable": true,
+          "description": "Smallest step the instrument reads, in readingUnit."
         },
         "thermal": {
           "allOf": [
@@ -6607,11 +6626,13 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
         },
         "machineTemperature": {
           "type": "number",
-          "nullable": true
+          "nullable": true,
+          "description": "Temperature of the machine while measuring, °C."
         },
         "scaleTemperature": {
           "type": "number",
-          "nullable": true
+          "nullable": true,
+          "description": "Temperature of the scale while measuring, °C."
         },
         "scaleMaterial": {
           "type": "string",
@@ -6619,7 +6640,8 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
         },
         "instrumentResolution": {
           "type": "number",
-          "nullable": true
+          "nullable": true,
+          "description": "Smallest step the instrument reads, in readingUnit."
         },
         "thermal": {
           "allOf": [

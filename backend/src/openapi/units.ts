@@ -7,6 +7,9 @@ import type { OpenAPIObject, ReferenceObject, SchemaObject } from '@nestjs/swagg
 const NAMED_UNITS: [RegExp, string, RegExp][] = [
   [/mmPerMin$/i, 'In mm per minute.', /mm per min|mm\/min/i],
   [/mmPerMetre$|mmPerM$/i, 'In mm per metre.', /mm per m|mm\/m/i],
+  [/stepsPerMm$/i, 'In steps per mm.', /steps per mm/i],
+  [/UmPerMm$/, 'In µm per mm.', /µm per mm|um\/mm/i],
+  [/PerMm$/, 'Per mm.', /per mm/i],
   [/Mm$/, 'In mm.', /\bmm\b|millimetres/i],
   [/Um$/, 'In µm.', /µm|\bum\b|micromet/i],
   [/Deg$|Degrees$/, 'In degrees.', /degree|°/i],
@@ -30,6 +33,9 @@ const FAMILIES: Record<string, string> = {
 function describeProperty(name: string, schema: SchemaObject | ReferenceObject): SchemaObject | ReferenceObject {
   if ('$ref' in schema) return schema;
   if (name in FAMILIES && !schema.description) return { ...schema, description: FAMILIES[name] };
+  if (name === 'units' && schema.type === 'object' && !schema.description) {
+    return { ...schema, description: 'The unit of each number of this answer, by field name (mm, mm/mm, %, …).' };
+  }
   const isNumber =
     schema.type === 'number' ||
     schema.type === 'integer' ||

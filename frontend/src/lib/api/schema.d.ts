@@ -2095,7 +2095,7 @@ export interface components {
             microsteps: number;
             /** @description Motor revolutions per revolution of the screw, pulley or pinion; 1 when direct. */
             gearRatio?: number;
-            /** @description The value set in the controller now. In mm. */
+            /** @description The value set in the controller now. In steps per mm. */
             stepsPerMm: number;
             /** @description The fastest feed rate the axis will be asked for, lengthUnit per minute. */
             maxFeedRate?: number;
@@ -2118,7 +2118,7 @@ export interface components {
             microsteps?: number;
             /** @description Motor revolutions per revolution of the screw, pulley or pinion; 1 when direct. */
             gearRatio?: number;
-            /** @description The value set in the controller now. In mm. */
+            /** @description The value set in the controller now. In steps per mm. */
             stepsPerMm?: number;
             /** @description The fastest feed rate the axis will be asked for, lengthUnit per minute. */
             maxFeedRate?: number | null;
@@ -3116,7 +3116,7 @@ export interface components {
             errorPercent: number;
             /** @description Multiply the axis's steps per mm by this: commanded ÷ measured. */
             correctionFactor: number;
-            /** @description In mm. */
+            /** @description In steps per mm. */
             suggestedStepsPerMm: number | null;
         };
         PartSizeCheck: {
@@ -4707,6 +4707,7 @@ export interface operations {
                 content: {
                     "application/json": {
                         warnings: components["schemas"]["ResultWarning"][];
+                        /** @description The unit of each number of this answer, by field name (mm, mm/mm, %, …). */
                         units: {
                             [key: string]: string;
                         };
@@ -4791,6 +4792,7 @@ export interface operations {
                 content: {
                     "application/json": {
                         warnings: components["schemas"]["ResultWarning"][];
+                        /** @description The unit of each number of this answer, by field name (mm, mm/mm, %, …). */
                         units: {
                             [key: string]: string;
                         };
@@ -4860,6 +4862,7 @@ export interface operations {
                 content: {
                     "application/json": {
                         warnings: components["schemas"]["ResultWarning"][];
+                        /** @description The unit of each number of this answer, by field name (mm, mm/mm, %, …). */
                         units: {
                             [key: string]: string;
                         };
@@ -4939,6 +4942,7 @@ export interface operations {
                 content: {
                     "application/json": {
                         warnings: components["schemas"]["ResultWarning"][];
+                        /** @description The unit of each number of this answer, by field name (mm, mm/mm, %, …). */
                         units: {
                             [key: string]: string;
                         };
@@ -5022,12 +5026,13 @@ export interface operations {
                 content: {
                     "application/json": {
                         warnings: components["schemas"]["ResultWarning"][];
+                        /** @description The unit of each number of this answer, by field name (mm, mm/mm, %, …). */
                         units: {
                             [key: string]: string;
                         };
                         travelPerRev: number;
                         travelPerMotorRev: number;
-                        /** @description In mm. */
+                        /** @description In steps per mm. */
                         stepsPerMm: number;
                         stepsPerIn: number;
                         resolution: number;
@@ -5094,12 +5099,13 @@ export interface operations {
                 content: {
                     "application/json": {
                         warnings: components["schemas"]["ResultWarning"][];
+                        /** @description The unit of each number of this answer, by field name (mm, mm/mm, %, …). */
                         units: {
                             [key: string]: string;
                         };
                         scale: number;
                         offset: number;
-                        /** @description In mm. */
+                        /** @description In steps per mm. */
                         correctedStepsPerMm: number;
                         correctedStepsPerIn: number;
                         /** @description In %. */
@@ -5174,6 +5180,7 @@ export interface operations {
                 content: {
                     "application/json": {
                         warnings: components["schemas"]["ResultWarning"][];
+                        /** @description The unit of each number of this answer, by field name (mm, mm/mm, %, …). */
                         units: {
                             [key: string]: string;
                         };
@@ -5266,6 +5273,7 @@ export interface operations {
                 content: {
                     "application/json": {
                         warnings: components["schemas"]["ResultWarning"][];
+                        /** @description The unit of each number of this answer, by field name (mm, mm/mm, %, …). */
                         units: {
                             [key: string]: string;
                         };
@@ -5343,6 +5351,7 @@ export interface operations {
                 content: {
                     "application/json": {
                         warnings: components["schemas"]["ResultWarning"][];
+                        /** @description The unit of each number of this answer, by field name (mm, mm/mm, %, …). */
                         units: {
                             [key: string]: string;
                         };
@@ -5421,6 +5430,7 @@ export interface operations {
                 content: {
                     "application/json": {
                         warnings: components["schemas"]["ResultWarning"][];
+                        /** @description The unit of each number of this answer, by field name (mm, mm/mm, %, …). */
                         units: {
                             [key: string]: string;
                         };
@@ -5497,6 +5507,7 @@ export interface operations {
                 content: {
                     "application/json": {
                         warnings: components["schemas"]["ResultWarning"][];
+                        /** @description The unit of each number of this answer, by field name (mm, mm/mm, %, …). */
                         units: {
                             [key: string]: string;
                         };
@@ -5505,7 +5516,7 @@ export interface operations {
                             error: number;
                             /** @description In %. */
                             errorPercent: number;
-                            /** @description In mm. */
+                            /** @description In steps per mm. */
                             correctedStepsPerMm: number | null;
                             correctedStepsPerIn: number | null;
                         };
@@ -5514,7 +5525,7 @@ export interface operations {
                             error: number;
                             /** @description In %. */
                             errorPercent: number;
-                            /** @description In mm. */
+                            /** @description In steps per mm. */
                             correctedStepsPerMm: number | null;
                             correctedStepsPerIn: number | null;
                         };
@@ -6002,7 +6013,7 @@ export interface operations {
                             at: number | null;
                             differences: number[] | null;
                             spacing: number | null;
-                            /** @description In mm. */
+                            /** @description In µm per mm. */
                             kUmPerMm: number | null;
                             permissible: number | null;
                             targetText: string | null;
@@ -6045,7 +6056,7 @@ export interface operations {
                             at: number | null;
                             differences: number[] | null;
                             spacing: number | null;
-                            /** @description In mm. */
+                            /** @description In µm per mm. */
                             kUmPerMm: number | null;
                             permissible: number | null;
                             targetText: string | null;
@@ -6095,7 +6106,7 @@ export interface operations {
                             at: number | null;
                             differences: number[] | null;
                             spacing: number | null;
-                            /** @description In mm. */
+                            /** @description In µm per mm. */
                             kUmPerMm: number | null;
                             permissible: number | null;
                             targetText: string | null;
@@ -6141,7 +6152,7 @@ export interface operations {
                             at: number | null;
                             differences: number[] | null;
                             spacing: number | null;
-                            /** @description In mm. */
+                            /** @description In µm per mm. */
                             kUmPerMm: number | null;
                             permissible: number | null;
                             targetText: string | null;
@@ -9184,7 +9195,7 @@ export interface operations {
                         moveCount: number;
                         warnings: components["schemas"]["ResultWarning"][];
                         result: {
-                            /** @description In mm. */
+                            /** @description In steps per mm. */
                             correctedStepsPerMm: number;
                             /** @description In %. */
                             errorPercent: number;
@@ -9263,14 +9274,19 @@ export interface operations {
                             measured: number;
                         }[];
                         result: {
-                            /** @description In mm. */
+                            /** @description In steps per mm. */
                             correctedStepsPerMm: number;
                             /** @description In %. */
                             errorPercent: number;
+                            /** @description Measured ÷ commanded, fitted over the moves (no unit). */
                             scale: number;
+                            /** @description The fit's offset, in mm. */
                             offset: number;
+                            /** @description Each move's residual about the fit, in mm. */
                             residuals: number[];
+                            /** @description Largest residual, in mm. */
                             residualMax: number;
+                            /** @description Each move commanded and measured, its error and its residual, all in mm. */
                             moves: {
                                 commanded: number;
                                 measured: number;
@@ -9286,9 +9302,12 @@ export interface operations {
                         warnings: components["schemas"]["ResultWarning"][];
                         /** @enum {string} */
                         status: "within-target" | "outside-target";
+                        /** @description Temperature of the machine while measuring, °C. */
                         machineTemperature: number | null;
+                        /** @description Temperature of the scale while measuring, °C. */
                         scaleTemperature: number | null;
                         scaleMaterial: string | null;
+                        /** @description Smallest step the instrument reads, in readingUnit. */
                         instrumentResolution: number | null;
                         thermal: components["schemas"]["ThermalReference"] | null;
                         id: string;
@@ -9388,14 +9407,19 @@ export interface operations {
                             measured: number;
                         }[];
                         result: {
-                            /** @description In mm. */
+                            /** @description In steps per mm. */
                             correctedStepsPerMm: number;
                             /** @description In %. */
                             errorPercent: number;
+                            /** @description Measured ÷ commanded, fitted over the moves (no unit). */
                             scale: number;
+                            /** @description The fit's offset, in mm. */
                             offset: number;
+                            /** @description Each move's residual about the fit, in mm. */
                             residuals: number[];
+                            /** @description Largest residual, in mm. */
                             residualMax: number;
+                            /** @description Each move commanded and measured, its error and its residual, all in mm. */
                             moves: {
                                 commanded: number;
                                 measured: number;
@@ -9411,9 +9435,12 @@ export interface operations {
                         warnings: components["schemas"]["ResultWarning"][];
                         /** @enum {string} */
                         status: "within-target" | "outside-target";
+                        /** @description Temperature of the machine while measuring, °C. */
                         machineTemperature: number | null;
+                        /** @description Temperature of the scale while measuring, °C. */
                         scaleTemperature: number | null;
                         scaleMaterial: string | null;
+                        /** @description Smallest step the instrument reads, in readingUnit. */
                         instrumentResolution: number | null;
                         thermal: components["schemas"]["ThermalReference"] | null;
                         id: string;
@@ -9733,6 +9760,7 @@ export interface operations {
                         result: {
                             warnings: components["schemas"]["ResultWarning"][];
                             thermalCorrectionMax: number;
+                            /** @description The unit of each number of this answer, by field name (mm, mm/mm, %, …). */
                             units: {
                                 [key: string]: string;
                             };
@@ -9799,9 +9827,12 @@ export interface operations {
                         } | null;
                         /** @enum {string} */
                         status: "within-target" | "outside-target";
+                        /** @description Temperature of the machine while measuring, °C. */
                         machineTemperature: number | null;
+                        /** @description Temperature of the scale while measuring, °C. */
                         scaleTemperature: number | null;
                         scaleMaterial: string | null;
+                        /** @description Smallest step the instrument reads, in readingUnit. */
                         instrumentResolution: number | null;
                         thermal: components["schemas"]["ThermalReference"] | null;
                         id: string;
@@ -9900,6 +9931,7 @@ export interface operations {
                         result: {
                             warnings: components["schemas"]["ResultWarning"][];
                             thermalCorrectionMax: number;
+                            /** @description The unit of each number of this answer, by field name (mm, mm/mm, %, …). */
                             units: {
                                 [key: string]: string;
                             };
@@ -9966,9 +9998,12 @@ export interface operations {
                         } | null;
                         /** @enum {string} */
                         status: "within-target" | "outside-target";
+                        /** @description Temperature of the machine while measuring, °C. */
                         machineTemperature: number | null;
+                        /** @description Temperature of the scale while measuring, °C. */
                         scaleTemperature: number | null;
                         scaleMaterial: string | null;
+                        /** @description Smallest step the instrument reads, in readingUnit. */
                         instrumentResolution: number | null;
                         thermal: components["schemas"]["ThermalReference"] | null;
                         id: string;
