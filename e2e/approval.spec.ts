@@ -24,7 +24,9 @@ test.describe('readiness board to signed certificate', () => {
     // Three people's pages, a signature and a certificate: longer than one page's test on a busy machine.
     test.slow();
     const tech = await as(browser, DEMO.technician);
-    const created = await tech.request.post('/api/machines', { data: { name: 'Spindle test router', kind: 'router', workArea: { x: 600, y: 400 } } });
+    const created = await tech.request.post('/api/machines', {
+      data: { name: 'Spindle test router', kind: 'router', workArea: { x: 600, y: 400 } },
+    });
     expect(created.status()).toBe(201);
     const machineId = (await created.json()).id as string;
 
@@ -43,25 +45,34 @@ test.describe('readiness board to signed certificate', () => {
     const walk = await (await tech.request.get(`/api/machines/${machineId}/safety-walk`)).json();
     for (const section of walk.sections as { items: { id: string }[] }[]) {
       for (const item of section.items) {
-        const res = await tech.request.put(`/api/machines/${machineId}/safety-walk/items/${item.id}`, { data: { answer: 'yes' } });
+        const res = await tech.request.put(`/api/machines/${machineId}/safety-walk/items/${item.id}`, {
+          data: { answer: 'yes' },
+        });
         expect(res.status()).toBe(200);
       }
     }
     const open = await blocking(owner, machineId);
     expect(open.length).toBeGreaterThan(0);
     for (const c of open.slice(1)) {
-      const res = await owner.request.post(`/api/machines/${machineId}/checks/${encodeURIComponent(c.key)}/waiver`, { data: { reason: 'Bench-top test machine: checked by hand at assembly.' } });
+      const res = await owner.request.post(`/api/machines/${machineId}/checks/${encodeURIComponent(c.key)}/waiver`, {
+        data: { reason: 'Bench-top test machine: checked by hand at assembly.' },
+      });
       expect(res.status()).toBe(201);
     }
     await owner.goto(`/machines/${machineId}?tab=readiness`);
-    await owner.getByRole('button', { name: /^Waive / }).first().click();
+    await owner
+      .getByRole('button', { name: /^Waive / })
+      .first()
+      .click();
     const waiver = owner.getByRole('dialog', { name: 'Waive a check' });
     await expect(waiver.getByRole('button', { name: 'Waive with this reason' })).toBeDisabled();
     await waiver.getByLabel('Reason').fill('Not fitted yet on this bench machine; checked before the first cut.');
     await snap(owner, 'readiness-waiver-dialog');
     await waiver.getByRole('button', { name: 'Waive with this reason' }).click();
     await expect(waiver).toBeHidden();
-    await expect(owner.getByText('“Not fitted yet on this bench machine; checked before the first cut.”')).toBeVisible();
+    await expect(
+      owner.getByText('“Not fitted yet on this bench machine; checked before the first cut.”'),
+    ).toBeVisible();
     expect(await blocking(owner, machineId)).toEqual([]);
 
     await tech.reload();
@@ -90,8 +101,13 @@ test.describe('readiness board to signed certificate', () => {
     await expect(owner.getByText('Ready to cut').first()).toBeVisible();
     await snap(owner, 'readiness-approved');
 
-    const [download] = await Promise.all([owner.waitForEvent('download'), summary.getByRole('link', { name: 'Download certificate' }).click()]);
-    expect(download.suggestedFilename()).toMatch(/^commissioning-certificate-spindle-test-router-\d{4}-\d\d-\d\d\.pdf$/);
+    const [download] = await Promise.all([
+      owner.waitForEvent('download'),
+      summary.getByRole('link', { name: 'Download certificate' }).click(),
+    ]);
+    expect(download.suggestedFilename()).toMatch(
+      /^commissioning-certificate-spindle-test-router-\d{4}-\d\d-\d\d\.pdf$/,
+    );
     const dir = mkdtempSync(path.join(os.tmpdir(), 'rw-cert-'));
     const file = path.join(dir, 'certificate.pdf');
     await download.saveAs(file);
@@ -103,7 +119,10 @@ test.describe('readiness board to signed certificate', () => {
     expect(text).toContain('Not fitted yet on this bench machine');
     // The certificate's pages as PNG, to be looked at.
     execFileSync('pdftoppm', ['-png', '-r', '80', file, path.join(dir, 'page')]);
-    for (const f of readdirSync(dir).filter((n) => n.endsWith('.png')).sort()) renameSync(path.join(dir, f), path.join(SHOTS, `certificate-${f.replace(/^page-0*/, 'page-')}`));
+    for (const f of readdirSync(dir)
+      .filter((n) => n.endsWith('.png'))
+      .sort())
+      renameSync(path.join(dir, f), path.join(SHOTS, `certificate-${f.replace(/^page-0*/, 'page-')}`));
 
     await owner.goto(`/machines/${machineId}?tab=history`);
     await expect(owner.getByRole('list', { name: 'History' })).toContainText('approved the machine as ready to cut');
@@ -128,9 +147,14 @@ test.describe('readiness board to signed certificate', () => {
     expect(cert.headers()['content-type']).toBe('application/pdf');
     const dir = mkdtempSync(path.join(os.tmpdir(), 'rw-cert-'));
     writeFileSync(path.join(dir, 'router.pdf'), await cert.body());
-    expect(execFileSync('pdftotext', [path.join(dir, 'router.pdf'), '-']).toString('utf8')).toContain((await viewer.getByTestId('record-hash').textContent())!.trim());
+    expect(execFileSync('pdftotext', [path.join(dir, 'router.pdf'), '-']).toString('utf8')).toContain(
+      (await viewer.getByTestId('record-hash').textContent())!.trim(),
+    );
     execFileSync('pdftoppm', ['-png', '-r', '80', path.join(dir, 'router.pdf'), path.join(dir, 'page')]);
-    for (const f of readdirSync(dir).filter((n) => n.endsWith('.png')).sort()) renameSync(path.join(dir, f), path.join(SHOTS, `certificate-router-${f.replace(/^page-0*/, 'page-')}`));
+    for (const f of readdirSync(dir)
+      .filter((n) => n.endsWith('.png'))
+      .sort())
+      renameSync(path.join(dir, f), path.join(SHOTS, `certificate-router-${f.replace(/^page-0*/, 'page-')}`));
     await viewer.setViewportSize({ width: 820, height: 1180 });
     await viewer.getByRole('button', { name: 'Checks' }).click();
     await snap(viewer, 'readiness-board-tablet');
@@ -140,7 +164,11 @@ test.describe('readiness board to signed certificate', () => {
     await viewer.goto(`/machines/${plasma.id}`);
     await expect(viewer.getByRole('table', { name: 'Required checks' })).toContainText('Outside target');
     // A warning sits under the result it is about: the plasma X run has fewer targets than ISO 230-2 asks for.
-    const xRun = viewer.getByRole('table', { name: 'Required checks' }).getByRole('row').filter({ hasText: 'Repeat-and-reverse run' }).filter({ hasText: 'Axis X' });
+    const xRun = viewer
+      .getByRole('table', { name: 'Required checks' })
+      .getByRole('row')
+      .filter({ hasText: 'Repeat-and-reverse run' })
+      .filter({ hasText: 'Axis X' });
     await expect(xRun.getByRole('list', { name: 'Warnings' })).toContainText('ISO 230-2 asks for at least 5 targets');
     await snap(viewer, 'readiness-board-plasma');
 

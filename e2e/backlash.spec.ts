@@ -17,7 +17,9 @@ async function pickReadingUnit(page: Page, label: string) {
 }
 
 test.describe('backlash check', () => {
-  test('a technician enters readings from both sides at both ends and the middle; Enter moves on and never clears', async ({ page }) => {
+  test('a technician enters readings from both sides at both ends and the middle; Enter moves on and never clears', async ({
+    page,
+  }) => {
     await signInAs(page, DEMO.technician);
     const { machineId, axisId } = await newAxis(page.request, `Backlash test ${Date.now()}`);
     await page.goto(`/machines/${machineId}/axes/${axisId}`);
@@ -81,10 +83,14 @@ test.describe('backlash check', () => {
     // A coarse indicator is warned about; a position beyond the travel is refused in words.
     await page.getByLabel('Indicator resolution').fill('10');
     await page.getByRole('button', { name: 'Record backlash check' }).click();
-    await expect(result.getByRole('alert').filter({ hasText: 'coarser than a quarter of the 30.0 µm target' })).toBeVisible();
+    await expect(
+      result.getByRole('alert').filter({ hasText: 'coarser than a quarter of the 30.0 µm target' }),
+    ).toBeVisible();
     await page.getByLabel('Position 3', { exact: true }).fill('950');
     await page.getByRole('button', { name: 'Record backlash check' }).click();
-    await expect(section.getByRole('alert').filter({ hasText: "beyond the axis's measured travel of 926 mm" })).toBeVisible();
+    await expect(
+      section.getByRole('alert').filter({ hasText: "beyond the axis's measured travel of 926 mm" }),
+    ).toBeVisible();
     await expect(page.getByLabel('Down 3 at position 3')).toHaveValue('30');
     await expect(page.getByLabel('Showing the check of')).toBeVisible();
   });
@@ -92,8 +98,16 @@ test.describe('backlash check', () => {
   test('a viewer reads the check but gets no entry grid', async ({ page, browser }) => {
     await signInAs(page, DEMO.technician);
     const { machineId, axisId } = await newAxis(page.request, `Backlash test ${Date.now()}`);
-    const positions = READINGS.map((r, i) => ({ position: [46, 463, 900][i], up: r.up.map(Number), down: r.down.map(Number) }));
-    expect((await page.request.post(`/api/axes/${axisId}/backlash-checks`, { data: { readingUnit: 'um', positions } })).status()).toBe(201);
+    const positions = READINGS.map((r, i) => ({
+      position: [46, 463, 900][i],
+      up: r.up.map(Number),
+      down: r.down.map(Number),
+    }));
+    expect(
+      (
+        await page.request.post(`/api/axes/${axisId}/backlash-checks`, { data: { readingUnit: 'um', positions } })
+      ).status(),
+    ).toBe(201);
     const viewer = await browser.newPage();
     await signInAs(viewer, DEMO.viewer);
     await viewer.goto(`/machines/${machineId}/axes/${axisId}`);
@@ -105,13 +119,18 @@ test.describe('backlash check', () => {
   test('the test program shows the server target list and keeps a note inside its comment', async ({ page }) => {
     await signInAs(page, DEMO.technician);
     const { machineId, axisId } = await newAxis(page.request, `Backlash test ${Date.now()}`);
-    const targets = (await (await page.request.get(`/api/axes/${axisId}/test-targets`)).json()) as { targets: number[] };
+    const targets = (await (await page.request.get(`/api/axes/${axisId}/test-targets`)).json()) as {
+      targets: number[];
+    };
     await page.goto(`/machines/${machineId}/axes/${axisId}`);
     await page.getByRole('button', { name: 'Download test program' }).click();
     const dialog = page.getByRole('dialog');
     await expect(dialog).toContainText(`Blank: ${targets.targets.join(', ')} mm`);
     await dialog.getByLabel("A note for the program's header").fill('dial on carriage (G0 X-500); 100% %');
-    const [download] = await Promise.all([page.waitForEvent('download'), dialog.getByRole('button', { name: 'Download' }).click()]);
+    const [download] = await Promise.all([
+      page.waitForEvent('download'),
+      dialog.getByRole('button', { name: 'Download' }).click(),
+    ]);
     const text = await readFile((await download.path())!, 'utf8');
     expect(text).toContain('(Notes: dial on carriage G0 X-500 100)');
     expect(text).toMatch(/^G17 G21 G90 G94 G40 G80 /m);

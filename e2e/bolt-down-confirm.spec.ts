@@ -6,10 +6,22 @@ const TABLET = { width: 820, height: 1180 };
 
 /** A new plasma machine file with a 300 mm rail (holes every 60 mm from 30 mm: fixed 1, 5, 3, 2, 4), made through the API. */
 async function newRail(request: APIRequestContext, name: string) {
-  const machine = await request.post('/api/machines', { data: { name: `${name} ${Date.now()}`, kind: 'plasma', workArea: { x: 3000, y: 1500 } } });
+  const machine = await request.post('/api/machines', {
+    data: { name: `${name} ${Date.now()}`, kind: 'plasma', workArea: { x: 3000, y: 1500 } },
+  });
   expect(machine.status()).toBe(201);
   const machineId = (await machine.json()).id as string;
-  const made = await request.post(`/api/machines/${machineId}/rails`, { data: { label: 'Y1 (left)', axis: 'Y1', profileSize: 20, lengthUnit: 'mm', length: 300, holePitch: 60, firstHole: 30 } });
+  const made = await request.post(`/api/machines/${machineId}/rails`, {
+    data: {
+      label: 'Y1 (left)',
+      axis: 'Y1',
+      profileSize: 20,
+      lengthUnit: 'mm',
+      length: 300,
+      holePitch: 60,
+      firstHole: 30,
+    },
+  });
   expect(made.status()).toBe(201);
   return { machineId, railId: (await made.json()).id as string };
 }
@@ -23,11 +35,17 @@ async function begin(page: Page, machineId: string, railId: string) {
 
 async function serverHoles(request: APIRequestContext, railId: string) {
   const bd = (await (await request.get(`/api/rails/${railId}/bolt-downs`)).json())[0];
-  return (await (await request.get(`/api/bolt-downs/${bd.id}`)).json()) as { id: string; holes: { index: number; fixed: boolean; reading: number | null; onTarget: boolean | null }[]; abandoned: { reason: string } | null };
+  return (await (await request.get(`/api/bolt-downs/${bd.id}`)).json()) as {
+    id: string;
+    holes: { index: number; fixed: boolean; reading: number | null; onTarget: boolean | null }[];
+    abandoned: { reason: string } | null;
+  };
 }
 
 test.describe('bolt-down: a reading outside its band, and giving a bolt-down up', () => {
-  test('Enter on a miss only shows it; the confirm fixes it, and the table marks the hole as fixed outside its band', async ({ page }) => {
+  test('Enter on a miss only shows it; the confirm fixes it, and the table marks the hole as fixed outside its band', async ({
+    page,
+  }) => {
     await signInAs(page, DEMO.builder);
     const { machineId, railId } = await newRail(page.request, 'Confirm table');
     await begin(page, machineId, railId);
@@ -105,11 +123,15 @@ test.describe('bolt-down: a reading outside its band, and giving a bolt-down up'
     await dialog.getByRole('button', { name: 'Abandon bolt-down' }).click();
     await expect(dialog).toBeHidden();
 
-    await expect(page.getByTestId('abandoned')).toContainText('Reference face has a burr; lifting the rail to clean it');
+    await expect(page.getByTestId('abandoned')).toContainText(
+      'Reference face has a burr; lifting the rail to clean it',
+    );
     await expect(page.getByTestId('abandoned')).toContainText('1 of 5 holes fixed');
     await expect(page.getByRole('button', { name: /Fix hole/ })).toHaveCount(0);
     await snap(page, 'bolt-down-abandoned-tablet');
-    expect((await serverHoles(page.request, railId)).abandoned?.reason).toBe('Reference face has a burr; lifting the rail to clean it');
+    expect((await serverHoles(page.request, railId)).abandoned?.reason).toBe(
+      'Reference face has a burr; lifting the rail to clean it',
+    );
 
     await page.getByRole('button', { name: 'Begin a new bolt-down' }).click();
     await page.getByRole('button', { name: 'Begin the bolt-down' }).click();

@@ -15,13 +15,28 @@ const banner = (page: Page) => page.getByRole('status').filter({ hasText: /Offli
  * At the rail with the connection cut: two holes fixed and a sweep saved wait on the device (the
  * banner counts them), survive a reload, and each is recorded exactly once when it returns.
  */
-test('bolt-down holes and a rail sweep typed offline are each recorded once when the connection returns', async ({ page, context }) => {
+test('bolt-down holes and a rail sweep typed offline are each recorded once when the connection returns', async ({
+  page,
+  context,
+}) => {
   await signInAs(page, DEMO.builder);
   await page.setViewportSize(TABLET);
-  const machine = await page.request.post('/api/machines', { data: { name: `Offline guide ${Date.now()}`, kind: 'plasma', workArea: { x: 3000, y: 1500 } } });
+  const machine = await page.request.post('/api/machines', {
+    data: { name: `Offline guide ${Date.now()}`, kind: 'plasma', workArea: { x: 3000, y: 1500 } },
+  });
   const machineId = (await machine.json()).id as string;
   // 300 mm rail, holes every 60 mm from 30 mm: fixed in the order 1, 5, 3, 2, 4.
-  const rail = await page.request.post(`/api/machines/${machineId}/rails`, { data: { label: 'Y1 (left)', axis: 'Y1', profileSize: 20, lengthUnit: 'mm', length: 300, holePitch: 60, firstHole: 30 } });
+  const rail = await page.request.post(`/api/machines/${machineId}/rails`, {
+    data: {
+      label: 'Y1 (left)',
+      axis: 'Y1',
+      profileSize: 20,
+      lengthUnit: 'mm',
+      length: 300,
+      holePitch: 60,
+      firstHole: 30,
+    },
+  });
   const railId = (await rail.json()).id as string;
 
   // The rail page first (its data stays in memory), then the guide, with one hole fixed online.
@@ -37,11 +52,14 @@ test('bolt-down holes and a rail sweep typed offline are each recorded once when
   // Recorded, and the server's answer read back, before the connection is cut.
   await expect(page.getByRole('row', { name: 'Hole 1', exact: true })).toContainText(/Fixed$/);
   // The service worker has taken the page over: from now on the app opens without a connection.
-  await page.waitForFunction(async () => !!(await navigator.serviceWorker.ready) && !!navigator.serviceWorker.controller);
+  await page.waitForFunction(
+    async () => !!(await navigator.serviceWorker.ready) && !!navigator.serviceWorker.controller,
+  );
 
   const keys: string[] = [];
   page.on('request', (r) => {
-    if (['PUT', 'POST'].includes(r.method()) && /\/api\/(bolt-downs|rails)\//.test(r.url())) keys.push(r.headers()['idempotency-key']);
+    if (['PUT', 'POST'].includes(r.method()) && /\/api\/(bolt-downs|rails)\//.test(r.url()))
+      keys.push(r.headers()['idempotency-key']);
   });
   await context.setOffline(true);
 
@@ -68,7 +86,9 @@ test('bolt-down holes and a rail sweep typed offline are each recorded once when
     await page.keyboard.press('Enter');
   }
   await page.getByRole('button', { name: 'Save sweep' }).click();
-  await expect(page.getByTestId('sweep-waiting')).toContainText('Waiting to send: Sweep of rail Y1 (left) (5 readings)');
+  await expect(page.getByTestId('sweep-waiting')).toContainText(
+    'Waiting to send: Sweep of rail Y1 (left) (5 readings)',
+  );
   await expect(page.getByLabel('Reading at 30 mm')).toHaveValue('');
   await expect(banner(page)).toContainText('Offline: 3 entries waiting on this device');
   await snap(page, 'sweep-offline-waiting-tablet');
@@ -87,12 +107,25 @@ test('bolt-down holes and a rail sweep typed offline are each recorded once when
 
   // On the server: each entry once.
   const state = await (await page.request.get(`/api/bolt-downs/${bd.id}`)).json();
-  expect(Object.fromEntries(state.holes.filter((h: { fixed: boolean }) => h.fixed).map((h: { index: number; reading: number }) => [h.index + 1, h.reading]))).toEqual({ 1: 0, 5: 0.5, 3: 0.25 });
+  expect(
+    Object.fromEntries(
+      state.holes
+        .filter((h: { fixed: boolean }) => h.fixed)
+        .map((h: { index: number; reading: number }) => [h.index + 1, h.reading]),
+    ),
+  ).toEqual({ 1: 0, 5: 0.5, 3: 0.25 });
   const sweeps = await (await page.request.get(`/api/rails/${railId}/sweeps`)).json();
   expect(sweeps).toHaveLength(1);
   expect(sweeps[0].stationCount).toBe(5);
-  const history: HistoryEntry[] = (await (await page.request.get(`/api/machines/${machineId}/history?limit=200`)).json()).entries;
-  expect(history.filter((e) => e.recordType === 'bolt-down' && e.action === 'updated').map((e) => e.changes?.hole).sort()).toEqual([0, 2, 4]);
+  const history: HistoryEntry[] = (
+    await (await page.request.get(`/api/machines/${machineId}/history?limit=200`)).json()
+  ).entries;
+  expect(
+    history
+      .filter((e) => e.recordType === 'bolt-down' && e.action === 'updated')
+      .map((e) => e.changes?.hole)
+      .sort(),
+  ).toEqual([0, 2, 4]);
   expect(history.filter((e) => e.recordType === 'rail-sweep')).toHaveLength(1);
   // Three entries, three keys, whatever the number of sendings.
   expect(keys.length).toBeGreaterThanOrEqual(3);

@@ -10,12 +10,25 @@ interface HistoryEntry {
 }
 
 /** A new plasma machine file and one rail of it, made through the API as the signed-in builder. */
-async function newRail(request: APIRequestContext, rail: { lengthMm: number; holePitchMm: number; firstHoleMm: number }) {
-  const machine = await request.post('/api/machines', { data: { name: `Guide test ${Date.now()}`, kind: 'plasma', workArea: { x: 3000, y: 1500 } } });
+async function newRail(
+  request: APIRequestContext,
+  rail: { lengthMm: number; holePitchMm: number; firstHoleMm: number },
+) {
+  const machine = await request.post('/api/machines', {
+    data: { name: `Guide test ${Date.now()}`, kind: 'plasma', workArea: { x: 3000, y: 1500 } },
+  });
   expect(machine.status()).toBe(201);
   const machineId = (await machine.json()).id as string;
   const made = await request.post(`/api/machines/${machineId}/rails`, {
-    data: { label: 'Y1 (left)', axis: 'Y1', profileSize: 20, lengthUnit: 'mm', length: rail.lengthMm, holePitch: rail.holePitchMm, firstHole: rail.firstHoleMm },
+    data: {
+      label: 'Y1 (left)',
+      axis: 'Y1',
+      profileSize: 20,
+      lengthUnit: 'mm',
+      length: rail.lengthMm,
+      holePitch: rail.holePitchMm,
+      firstHole: rail.firstHoleMm,
+    },
   });
   expect(made.status()).toBe(201);
   return { machineId, railId: (await made.json()).id as string };
@@ -44,7 +57,9 @@ test.describe('bolt-down guide', () => {
     // 300 mm rail, holes every 60 mm from 30 mm: 5 holes, fixed in the order 1, 5, 3, 2, 4.
     const { machineId, railId } = await newRail(page.request, { lengthMm: 300, holePitchMm: 60, firstHoleMm: 30 });
     await begin(page, machineId, railId);
-    await expect(page.getByTestId('mode-explained')).toContainText('Line mode. Each hole is aimed at the straight line between the nearest fixed holes');
+    await expect(page.getByTestId('mode-explained')).toContainText(
+      'Line mode. Each hole is aimed at the straight line between the nearest fixed holes',
+    );
 
     await expect(page.getByRole('heading', { name: 'Hole 1', exact: true })).toBeVisible();
     await expect(page.getByTestId('aim')).toHaveText('any reading');
@@ -110,11 +125,21 @@ test.describe('bolt-down guide', () => {
     expect(sweeps).toHaveLength(1);
     // The list holds summaries; the sweep itself has every detail and reading.
     const sweep = await (await page.request.get(`/api/sweeps/${sweeps[0].id}`)).json();
-    expect(sweep).toMatchObject({ readingUnit: 'thou', phase: 'as-left', boltSize: 'M5', torqueNm: 8.8, temperatureC: 18, datum: 'Straightedge across Y1 and Y2', status: 'within-target' });
+    expect(sweep).toMatchObject({
+      readingUnit: 'thou',
+      phase: 'as-left',
+      boltSize: 'M5',
+      torqueNm: 8.8,
+      temperatureC: 18,
+      datum: 'Straightedge across Y1 and Y2',
+      status: 'within-target',
+    });
     expect(sweep.stations.map((s: { reading: number }) => s.reading)).toEqual([0.5, 0.8, 1, 1.2, 1.3]);
   });
 
-  test('keeps typing and fixing while the connection is cut, then saves every reading exactly once', async ({ page }) => {
+  test('keeps typing and fixing while the connection is cut, then saves every reading exactly once', async ({
+    page,
+  }) => {
     await signInAs(page, DEMO.builder);
     // 500 mm rail, holes every 60 mm from 10 mm: 9 holes, fixed in the order 1, 9, 5, 3, 7, 2, 4, 6, 8.
     const { machineId, railId } = await newRail(page.request, { lengthMm: 500, holePitchMm: 60, firstHoleMm: 10 });
@@ -171,11 +196,17 @@ test.describe('bolt-down guide', () => {
     // The last fix shows at once in the guide; give its write time to reach a busy server.
     const fixedOnServer = async () => {
       const state = await (await page.request.get(`/api/bolt-downs/${bd.id}`)).json();
-      return Object.fromEntries(state.holes.filter((h: { fixed: boolean }) => h.fixed).map((h: { index: number; reading: number }) => [h.index + 1, h.reading]));
+      return Object.fromEntries(
+        state.holes
+          .filter((h: { fixed: boolean }) => h.fixed)
+          .map((h: { index: number; reading: number }) => [h.index + 1, h.reading]),
+      );
     };
     await expect.poll(fixedOnServer, { timeout: 20_000 }).toEqual({ 1: 0, 9: 2, 5: 1.5, 3: 0.5, 7: 2, 2: 0.4, 4: 0.7 });
     // Each fix was applied exactly once, though the first offline one reached the server twice.
-    const history: HistoryEntry[] = (await (await page.request.get(`/api/machines/${machineId}/history?limit=200`)).json()).entries;
+    const history: HistoryEntry[] = (
+      await (await page.request.get(`/api/machines/${machineId}/history?limit=200`)).json()
+    ).entries;
     const writes = history.filter((e) => e.recordType === 'bolt-down' && e.action === 'updated');
     expect(writes).toHaveLength(7);
     expect(new Set(writes.map((e) => e.changes?.writeId)).size).toBe(7);
@@ -186,7 +217,9 @@ test.describe('bolt-down guide', () => {
   test('the demo plasma table has a bolt-down in progress; a viewer follows it without recording', async ({ page }) => {
     await signInAs(page, DEMO.viewer);
     const machines = await (await page.request.get('/api/machines')).json();
-    const plasma = machines.find((m: { kind: string; name: string }) => m.kind === 'plasma' && m.name === 'Big plasma table');
+    const plasma = machines.find(
+      (m: { kind: string; name: string }) => m.kind === 'plasma' && m.name === 'Big plasma table',
+    );
     const rails = await (await page.request.get(`/api/machines/${plasma.id}/rails`)).json();
     const y2 = rails.find((r: { axis: string }) => r.axis === 'Y2');
     await page.goto(`/machines/${plasma.id}/rails/${y2.id}/bolt-down`);

@@ -3,7 +3,19 @@ import { DEMO, signInAs, snap } from './support/session';
 
 // Constructed straightness set S1 (stations mm, readings µm): least squares 81/11 µm,
 // minimum zone 27/4 µm, end points 73/10 µm.
-const S1 = ['0\t0', '100\t3', '200\t7', '300\t8', '400\t6', '500\t9', '600\t12', '700\t10', '800\t7', '900\t8', '1000\t11'].join('\n');
+const S1 = [
+  '0\t0',
+  '100\t3',
+  '200\t7',
+  '300\t8',
+  '400\t6',
+  '500\t9',
+  '600\t12',
+  '700\t10',
+  '800\t7',
+  '900\t8',
+  '1000\t11',
+].join('\n');
 
 test.describe('calculators page', () => {
   test('a technician types a straightness set and the result follows without a submit', async ({ page }) => {
@@ -57,10 +69,17 @@ test.describe('calculators page', () => {
 
     // Constructed ISO 230-2 set (5 targets, 5 runs each way, µm): A = 9 + 2√2, R = 4 + 2√2, B = 4.
     await page.getByRole('tab', { name: 'Repeat-and-reverse run' }).click();
-    await page.getByLabel('Targets and deviations').fill(
-      ['0\t2\t3\t1\t2\t2\t-2\t-1\t-3\t-2\t-2', '125\t5\t6\t4\t5\t5\t1\t2\t0\t1\t1', '250\t3\t4\t2\t4\t2\t0\t1\t-1\t0\t0',
-        '375\t-1\t0\t-2\t-1\t-1\t-4\t-3\t-5\t-4\t-4', '500\t1\t2\t0\t1\t1\t-3\t-2\t-4\t-3\t-3'].join('\n'),
-    );
+    await page
+      .getByLabel('Targets and deviations')
+      .fill(
+        [
+          '0\t2\t3\t1\t2\t2\t-2\t-1\t-3\t-2\t-2',
+          '125\t5\t6\t4\t5\t5\t1\t2\t0\t1\t1',
+          '250\t3\t4\t2\t4\t2\t0\t1\t-1\t0\t0',
+          '375\t-1\t0\t-2\t-1\t-1\t-4\t-3\t-5\t-4\t-4',
+          '500\t1\t2\t0\t1\t1\t-3\t-2\t-4\t-3\t-3',
+        ].join('\n'),
+      );
     const iso = page.getByRole('table', { name: 'Positioning result' });
     await expect(iso.getByRole('row', { name: /Accuracy A/ })).toContainText('11.83 µm');
     await expect(iso.getByRole('row', { name: /Repeatability R/ })).toContainText('6.83 µm');
@@ -74,7 +93,9 @@ test.describe('calculators page', () => {
     await page.getByLabel('Commanded and measured moves').fill('100\t99.8\n200\t199.62\n400\t399.18');
     const trial = page.getByRole('table', { name: 'Travel trial result' });
     await expect(trial.getByRole('row', { name: /Corrected steps per mm/ })).toContainText('steps/mm');
-    await expect(page.getByRole('figure', { name: 'Travel error chart' }).locator('.recharts-scatter-symbol')).toHaveCount(3);
+    await expect(
+      page.getByRole('figure', { name: 'Travel error chart' }).locator('.recharts-scatter-symbol'),
+    ).toHaveCount(3);
     await snap(page, 'calculators-travel-trial');
     await page.getByLabel('Commanded and measured moves').fill('100\t99.8');
     await expect(trial.getByRole('row', { name: /Corrected steps per mm/ })).toContainText('641.2826 steps/mm');
@@ -89,7 +110,9 @@ test.describe('calculators page', () => {
     await page.getByLabel('Move unit').click();
     await page.getByRole('option', { name: 'mm', exact: true }).click();
     await page.getByLabel('Commanded and measured moves').fill('500\t19.69');
-    await expect(page.getByRole('region', { name: 'Warnings' }).getByRole('alert').first()).toContainText(/same unit|lead/);
+    await expect(page.getByRole('region', { name: 'Warnings' }).getByRole('alert').first()).toContainText(
+      /same unit|lead/,
+    );
     await snap(page, 'calculators-travel-trial-warning');
 
     // MISUMI catalogue example: Ø15, root 12.5 mm, fixed–supported, 790 mm → 3024 rpm allowable.
@@ -106,12 +129,16 @@ test.describe('calculators page', () => {
     // 200-step motor, 8 microsteps, 5 mm lead → 320 steps/mm (common practice).
     await page.getByRole('tab', { name: 'Steps per mm' }).click();
     await page.getByLabel('Lead').fill('5');
-    await expect(page.getByRole('table', { name: 'Steps per mm result' }).getByRole('row', { name: /^Steps per mm/ })).toContainText('320 steps/mm');
+    await expect(
+      page.getByRole('table', { name: 'Steps per mm result' }).getByRole('row', { name: /^Steps per mm/ }),
+    ).toContainText('320 steps/mm');
     // A 5 threads-per-inch screw advances 0.2 in a turn: 200 × 8 / 0.2 = 8000 steps/in (definition of TPI).
     await page.getByLabel('Screw given by').click();
     await page.getByRole('option', { name: /Threads per inch/ }).click();
     await page.getByLabel('Threads per inch').fill('5');
-    await expect(page.getByRole('table', { name: 'Steps per mm result' }).getByRole('row', { name: /^Steps per inch/ })).toContainText('8000 steps/in');
+    await expect(
+      page.getByRole('table', { name: 'Steps per mm result' }).getByRole('row', { name: /^Steps per inch/ }),
+    ).toContainText('8000 steps/in');
 
     // Constructed diagonal example: 1000 × 600 mm with the Y side leaning 0.5 mm → 0.5 mm over 600 mm.
     await page.getByRole('tab', { name: 'Diagonal check' }).click();

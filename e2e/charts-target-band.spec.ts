@@ -18,7 +18,9 @@ function roundTicks(ticks: number[]): { ok: boolean; step: number } {
 }
 
 async function axisTicks(figure: Locator, axis: 'x' | 'y'): Promise<number[]> {
-  const texts = await figure.locator(`.recharts-${axis}Axis-tick-labels .recharts-cartesian-axis-tick-value`).allTextContents();
+  const texts = await figure
+    .locator(`.recharts-${axis}Axis-tick-labels .recharts-cartesian-axis-tick-value`)
+    .allTextContents();
   return texts.map((t) => Number(t.replace('−', '-')));
 }
 
@@ -69,7 +71,9 @@ test('sweep and partner charts: round ticks and the target zone', async ({ page 
 
   // The zone is as wide as the target: its drawn height over the y axis' scale (both in SVG units) gives its width.
   const ticks = await axisTicks(partner, 'y');
-  const tickY = (await partner.locator('.recharts-yAxis-tick-lines line').evaluateAll((els) => els.map((e) => Number(e.getAttribute('y1'))))) as number[];
+  const tickY = (await partner
+    .locator('.recharts-yAxis-tick-lines line')
+    .evaluateAll((els) => els.map((e) => Number(e.getAttribute('y1'))))) as number[];
   const unitsPerPx = Math.abs(ticks[ticks.length - 1] - ticks[0]) / Math.abs(tickY[tickY.length - 1] - tickY[0]);
   const bandPx = Number(await partner.locator('.recharts-reference-area-rect').first().getAttribute('height'));
   expect(bandPx * unitsPerPx).toBeCloseTo(Number(target!.split(' ')[0]), 3);
@@ -88,7 +92,9 @@ test('repeat-and-reverse chart: round ticks and the accuracy target zone', async
     await expect(chart).toBeVisible();
     await expectRoundAxes(chart, `axis ${axis.name} positioning`);
     const result = page.getByRole('region', { name: 'Repeat-and-reverse result' }).first();
-    const target = /Positioning accuracy A[\s\S]*?target ≤ ([\d.]+ (?:mm|µm|in|thou))/.exec((await result.textContent()) ?? '')?.[1];
+    const target = /Positioning accuracy A[\s\S]*?target ≤ ([\d.]+ (?:mm|µm|in|thou))/.exec(
+      (await result.textContent()) ?? '',
+    )?.[1];
     expect(target).toBeTruthy();
     await expectTargetBand(chart, new RegExp(`^Accuracy target ${target!.replace('.', '\\.')} wide$`));
     await snap(page, 'charts-positioning');
@@ -102,7 +108,9 @@ test('straightness calculator: round ticks on odd readings', async ({ page }) =>
   await signInAs(page, DEMO.owner);
   await page.goto('/calculators?calc=straightness');
   // Readings that used to give ticks such as −0.44, 1.56, 3.56.
-  await page.getByLabel('Stations and readings').fill(['0\t-0.44', '37\t1.56', '81\t3.56', '133\t2.07', '171\t0.93'].join('\n'));
+  await page
+    .getByLabel('Stations and readings')
+    .fill(['0\t-0.44', '37\t1.56', '81\t3.56', '133\t2.07', '171\t0.93'].join('\n'));
   const chart = page.getByRole('figure', { name: 'Straightness chart' });
   await expect(chart).toBeVisible();
   await expectRoundAxes(chart, 'straightness calculator');
@@ -117,6 +125,9 @@ test('the shared axis helper: round ends and steps for awkward spans', async () 
     expect(roundTicks(ticks).ok, `${values.join(', ')} → ${ticks.join(', ')}`).toBe(true);
     expect(domain[0]).toBeLessThanOrEqual(Math.min(...values, domain[1]));
     expect(domain[1]).toBeGreaterThanOrEqual(Math.max(...values, domain[0]));
-    expect(ticks.map(String).every((t) => t.length <= 8), `no float noise in ${ticks.join(', ')}`).toBe(true);
+    expect(
+      ticks.map(String).every((t) => t.length <= 8),
+      `no float noise in ${ticks.join(', ')}`,
+    ).toBe(true);
   }
 });

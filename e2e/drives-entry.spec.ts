@@ -15,7 +15,9 @@ async function trialsOf(request: APIRequestContext, axisId: string) {
 const cell = (page: Page, k: 'Commanded' | 'Measured', n: number) => page.getByLabel(`${k} move ${n}`, { exact: true });
 
 test.describe('entry grids of the drives', () => {
-  test('travel trial by keyboard: Enter to the next move, Tab skips the remove buttons, a removed move comes back with Undo, three moves are saved as three', async ({ page }) => {
+  test('travel trial by keyboard: Enter to the next move, Tab skips the remove buttons, a removed move comes back with Undo, three moves are saved as three', async ({
+    page,
+  }) => {
     await signInAs(page, DEMO.technician);
     const { machineId, axisId } = await newAxis(page.request, `Entry grid ${Date.now()}`);
     await page.goto(`/machines/${machineId}/axes/${axisId}`);
@@ -72,7 +74,9 @@ test.describe('entry grids of the drives', () => {
     expect(full.moves.map((m: { commanded: number }) => m.commanded)).toEqual([200, 400, 800]);
   });
 
-  test('repeat-and-reverse grid: its targets are the test program’s; Enter goes to the next row’s first cell, Tab along a row', async ({ page }) => {
+  test('repeat-and-reverse grid: its targets are the test program’s; Enter goes to the next row’s first cell, Tab along a row', async ({
+    page,
+  }) => {
     await signInAs(page, DEMO.technician);
     const { machineId, axisId } = await newAxis(page.request, `Entry grid ${Date.now()}`);
     const program = await page.request.get(`/api/axes/${axisId}/test-program?kind=positioning`);
@@ -83,7 +87,9 @@ test.describe('entry grids of the drives', () => {
     expect(programTargets.length).toBeGreaterThanOrEqual(5);
 
     await page.goto(`/machines/${machineId}/axes/${axisId}`);
-    await expect(page.getByTestId('targets-source')).toContainText('the same list the downloaded test program moves to');
+    await expect(page.getByTestId('targets-source')).toContainText(
+      'the same list the downloaded test program moves to',
+    );
     const headers = page.getByLabel(/^Target \d+ \(mm\)$/);
     await expect(headers).toHaveCount(programTargets.length);
     const gridTargets = (await headers.evaluateAll((els) => els.map((e) => (e as HTMLInputElement).value))).map(Number);
@@ -107,7 +113,10 @@ test.describe('entry grids of the drives', () => {
     await expect(page.getByLabel('Down 1, target 2', { exact: true })).toBeFocused();
     await page.getByLabel('From an indicator').uncheck();
 
-    for (const [size, name] of [[TABLET, 'tablet'], [PHONE, 'phone']] as const) {
+    for (const [size, name] of [
+      [TABLET, 'tablet'],
+      [PHONE, 'phone'],
+    ] as const) {
       await page.setViewportSize(size);
       await page.getByRole('heading', { name: 'Record a travel trial' }).scrollIntoViewIfNeeded();
       await snap(page, `drives-trial-grid-${name}`);
@@ -116,20 +125,26 @@ test.describe('entry grids of the drives', () => {
     }
   });
 
-  test('a check recorded outside target changes the machine header, the readiness board and the machines list without a reload', async ({ page }) => {
+  test('a check recorded outside target changes the machine header, the readiness board and the machines list without a reload', async ({
+    page,
+  }) => {
     await signInAs(page, DEMO.owner);
     const name = `Header refresh ${Date.now()}`;
     const { machineId, axisId } = await newAxis(page.request, name);
     // The safety walk answered, every other check waived, then approval requested: the machine awaits approval.
     const walk = await (await page.request.get(`/api/machines/${machineId}/safety-walk`)).json();
     for (const item of (walk.sections as { items: { id: string }[] }[]).flatMap((x) => x.items)) {
-      const a = await page.request.put(`/api/machines/${machineId}/safety-walk/items/${encodeURIComponent(item.id)}`, { data: { answer: 'yes' } });
+      const a = await page.request.put(`/api/machines/${machineId}/safety-walk/items/${encodeURIComponent(item.id)}`, {
+        data: { answer: 'yes' },
+      });
       expect(a.ok(), await a.text()).toBe(true);
     }
     const readiness = await (await page.request.get(`/api/machines/${machineId}/readiness`)).json();
     for (const c of readiness.checks as { key: string; status: string }[]) {
       if (c.status === 'within-target' || c.status === 'waived') continue;
-      const w = await page.request.post(`/api/machines/${machineId}/checks/${encodeURIComponent(c.key)}/waiver`, { data: { reason: 'Not part of this browser test of the header' } });
+      const w = await page.request.post(`/api/machines/${machineId}/checks/${encodeURIComponent(c.key)}/waiver`, {
+        data: { reason: 'Not part of this browser test of the header' },
+      });
       expect(w.ok(), await w.text()).toBe(true);
     }
     const req = await page.request.post(`/api/machines/${machineId}/approval-requests`);

@@ -9,11 +9,15 @@ import { DEMO, signInAs, snap } from './support/session';
  * recorded exactly once when the connection returns.
  */
 
-const listOf = (body: unknown) => (Array.isArray(body) ? body : ((body as { items?: unknown[] }).items ?? [])) as unknown[];
+const listOf = (body: unknown) =>
+  (Array.isArray(body) ? body : ((body as { items?: unknown[] }).items ?? [])) as unknown[];
 const count = async (page: Page, path: string) => listOf(await (await page.request.get(path)).json()).length;
 const banner = (page: Page) => page.getByRole('status').filter({ hasText: 'Offline' });
 
-test('a travel trial, a diagonal check and a photo typed offline wait on the device and are recorded once when the connection returns', async ({ page, context }) => {
+test('a travel trial, a diagonal check and a photo typed offline wait on the device and are recorded once when the connection returns', async ({
+  page,
+  context,
+}) => {
   await signInAs(page, DEMO.technician);
   const { machineId, axisId } = await newAxis(page.request, `Offline entries ${Date.now()}`);
   const sent: Record<string, string[]> = {};
@@ -32,7 +36,9 @@ test('a travel trial, a diagonal check and a photo typed offline wait on the dev
   await page.getByRole('table', { name: 'Axes' }).getByRole('link', { name: 'X' }).click();
   await expect(page.getByRole('heading', { name: 'Axis X' })).toBeVisible();
   // The service worker has the app: its pages open without a connection.
-  await page.waitForFunction(async () => !!(await navigator.serviceWorker.ready) && !!navigator.serviceWorker.controller);
+  await page.waitForFunction(
+    async () => !!(await navigator.serviceWorker.ready) && !!navigator.serviceWorker.controller,
+  );
 
   await context.setOffline(true);
   await page.getByLabel('Commanded move 1', { exact: true }).fill('200');
@@ -59,8 +65,12 @@ test('a travel trial, a diagonal check and a photo typed offline wait on the dev
   await expect(form.getByRole('button', { name: 'Record diagonal check' })).toBeEnabled();
 
   await page.getByRole('tab', { name: 'Evidence' }).click();
-  const photo = await sharp({ create: { width: 64, height: 48, channels: 3, background: '#6f7d7a' } }).jpeg().toBuffer();
-  await page.getByLabel('Choose photos or files').setInputFiles({ name: 'gantry-offline.jpg', mimeType: 'image/jpeg', buffer: photo });
+  const photo = await sharp({ create: { width: 64, height: 48, channels: 3, background: '#6f7d7a' } })
+    .jpeg()
+    .toBuffer();
+  await page
+    .getByLabel('Choose photos or files')
+    .setInputFiles({ name: 'gantry-offline.jpg', mimeType: 'image/jpeg', buffer: photo });
   const uploads = page.getByRole('list', { name: 'Uploads' });
   await expect(uploads).toContainText('Waiting to be sent');
   await expect(banner(page)).toContainText('Offline: 3 entries waiting on this device');
@@ -75,7 +85,11 @@ test('a travel trial, a diagonal check and a photo typed offline wait on the dev
   expect(await count(page, `/api/machines/${machineId}/diagonal-checks`)).toBe(1);
   expect(await count(page, `/api/axes/${axisId}/travel-trials`)).toBe(1);
   expect(await count(page, `/api/evidence?machineId=${machineId}`)).toBe(1);
-  for (const path of [`/api/machines/${machineId}/diagonal-checks`, `/api/axes/${axisId}/travel-trials`, '/api/evidence']) {
+  for (const path of [
+    `/api/machines/${machineId}/diagonal-checks`,
+    `/api/axes/${axisId}/travel-trials`,
+    '/api/evidence',
+  ]) {
     expect(new Set(sent[path] ?? []).size, path).toBe(1);
   }
 });

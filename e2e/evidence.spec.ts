@@ -7,7 +7,9 @@ const TABLET = { width: 820, height: 1180 };
 
 /** A photo-like PNG of random pixels: it does not compress, so it takes a while on a slow link. */
 async function noisyPng(width: number, height: number): Promise<Buffer> {
-  return sharp(randomBytes(width * height * 3), { raw: { width, height, channels: 3 } }).png().toBuffer();
+  return sharp(randomBytes(width * height * 3), { raw: { width, height, channels: 3 } })
+    .png()
+    .toBuffer();
 }
 
 /** A picture with something in it, so a screenshot shows whether thumbnails are cut sensibly. */
@@ -30,7 +32,14 @@ async function newMachine(request: APIRequestContext, name: string) {
   return (await res.json()).id as string;
 }
 
-async function attach(request: APIRequestContext, machineId: string, name: string, buffer: Buffer, mimeType: string, caption = '') {
+async function attach(
+  request: APIRequestContext,
+  machineId: string,
+  name: string,
+  buffer: Buffer,
+  mimeType: string,
+  caption = '',
+) {
   const res = await request.post('/api/evidence', {
     multipart: { subjectType: 'machine', subjectId: machineId, caption, file: { name, mimeType, buffer } },
   });
@@ -54,7 +63,12 @@ async function signInKept(page: Page) {
           if (!db.objectStoreNames.contains('keyval')) return resolve(false);
           const get = db.transaction('keyval', 'readonly').objectStore('keyval').get('railwright.cache.v1');
           get.onerror = () => resolve(false);
-          get.onsuccess = () => resolve(JSON.stringify(get.result?.clientState?.queries?.map((q: { state: { data: unknown } }) => q.state.data) ?? []).includes('"role"'));
+          get.onsuccess = () =>
+            resolve(
+              JSON.stringify(
+                get.result?.clientState?.queries?.map((q: { state: { data: unknown } }) => q.state.data) ?? [],
+              ).includes('"role"'),
+            );
         };
       }),
     undefined,
@@ -68,7 +82,9 @@ async function openEvidence(page: Page, machineId: string) {
 }
 
 test.describe('evidence: photos and files', () => {
-  test('a builder uploads several files with a progress bar each, sees the photo in the gallery and opens it full size', async ({ page }) => {
+  test('a builder uploads several files with a progress bar each, sees the photo in the gallery and opens it full size', async ({
+    page,
+  }) => {
     await signInAs(page, DEMO.builder);
     const machineId = await newMachine(page.request, `Evidence table ${Date.now()}`);
     await openEvidence(page, machineId);
@@ -77,7 +93,12 @@ test.describe('evidence: photos and files', () => {
     // A slow link (about 150 kB/s up) so the progress bar can be seen moving.
     const cdp = await page.context().newCDPSession(page);
     await cdp.send('Network.enable');
-    await cdp.send('Network.emulateNetworkConditions', { offline: false, latency: 20, downloadThroughput: -1, uploadThroughput: 150 * 1024 });
+    await cdp.send('Network.emulateNetworkConditions', {
+      offline: false,
+      latency: 20,
+      downloadThroughput: -1,
+      uploadThroughput: 150 * 1024,
+    });
 
     const photo = await noisyPng(360, 300);
     const elf = Buffer.concat([Buffer.from([0x7f, 0x45, 0x4c, 0x46, 2, 1, 1, 0]), Buffer.alloc(2048, 0x90)]);
@@ -96,14 +117,21 @@ test.describe('evidence: photos and files', () => {
 
     // The renamed program is refused with its own message; the others are attached.
     await expect(page.getByRole('alert').filter({ hasText: 'photo.jpg is a program (ELF)' })).toBeVisible();
-    await cdp.send('Network.emulateNetworkConditions', { offline: false, latency: 0, downloadThroughput: -1, uploadThroughput: -1 });
+    await cdp.send('Network.emulateNetworkConditions', {
+      offline: false,
+      latency: 0,
+      downloadThroughput: -1,
+      uploadThroughput: -1,
+    });
     await expect(bar).toHaveAttribute('aria-valuenow', '100', { timeout: 30_000 });
     await expect(page.getByRole('list', { name: 'Uploads' }).getByText(/^Attached/)).toHaveCount(2);
 
     const thumb = page.getByRole('button', { name: 'View rail-setup.png full size' });
     await expect(thumb).toBeVisible();
     await expect(page.getByRole('list', { name: /^Files:/ }).getByRole('link', { name: 'sweep-y1.csv' })).toBeVisible();
-    const thumbLoaded = await thumb.locator('img').evaluate((img: HTMLImageElement) => img.decode().then(() => img.naturalWidth));
+    const thumbLoaded = await thumb
+      .locator('img')
+      .evaluate((img: HTMLImageElement) => img.decode().then(() => img.naturalWidth));
     expect(thumbLoaded).toBeGreaterThan(0);
     expect(thumbLoaded).toBeLessThanOrEqual(320);
     await snap(page, 'evidence-gallery-desktop');
@@ -137,7 +165,9 @@ test.describe('evidence: photos and files', () => {
       dt.items.add(new File([bytes], 'dropped.jpg', { type: 'image/jpeg' }));
       return dt;
     }, jpeg);
-    await page.getByRole('group', { name: 'Attach photos or files to this machine' }).dispatchEvent('drop', { dataTransfer: data });
+    await page
+      .getByRole('group', { name: 'Attach photos or files to this machine' })
+      .dispatchEvent('drop', { dataTransfer: data });
     await expect(page.getByRole('list', { name: 'Uploads' }).getByText('dropped.jpg')).toBeVisible();
     await expect(page.getByRole('button', { name: 'View dropped.jpg full size' })).toBeVisible();
   });
@@ -146,9 +176,23 @@ test.describe('evidence: photos and files', () => {
     await page.setViewportSize(TABLET);
     await signInAs(page, DEMO.builder);
     const machineId = await newMachine(page.request, `Tablet table ${Date.now()}`);
-    await attach(page.request, machineId, 'indicator-on-carriage.jpg', await railPhoto(), 'image/jpeg', 'Indicator on the X carriage');
+    await attach(
+      page.request,
+      machineId,
+      'indicator-on-carriage.jpg',
+      await railPhoto(),
+      'image/jpeg',
+      'Indicator on the X carriage',
+    );
     await attach(page.request, machineId, 'gantry.png', await noisyPng(200, 150), 'image/png');
-    await attach(page.request, machineId, 'screw-datasheet.pdf', Buffer.from('%PDF-1.4\n%%EOF\n'), 'application/pdf', 'Ball screw data');
+    await attach(
+      page.request,
+      machineId,
+      'screw-datasheet.pdf',
+      Buffer.from('%PDF-1.4\n%%EOF\n'),
+      'application/pdf',
+      'Ball screw data',
+    );
     await openEvidence(page, machineId);
     await expect(page.getByRole('region', { name: /^Evidence: Tablet table/ })).toContainText('2 photos, 1 file');
     await snap(page, 'evidence-gallery-tablet');
@@ -190,10 +234,16 @@ test.describe('evidence: photos and files', () => {
     await page.getByRole('link', { name: 'Small router' }).click();
     await page.getByRole('tab', { name: 'Evidence' }).click();
     await expect(page.getByRole('button', { name: 'View router-y1-sweep.jpg full size' })).toBeVisible();
-    await expect(page.getByRole('list', { name: /^Photos: Sweep of rail Y1/ }).getByLabel('Kept: part of what an approval stands on')).toBeVisible();
+    await expect(
+      page
+        .getByRole('list', { name: /^Photos: Sweep of rail Y1/ })
+        .getByLabel('Kept: part of what an approval stands on'),
+    ).toBeVisible();
     await expect(page.getByRole('button', { name: 'Delete router-y1-sweep.jpg' })).toHaveCount(0);
     // While the approval stands the machine file itself is part of what was signed: its photos are kept too.
-    await expect(page.getByRole('list', { name: /^Photos: Small router/ }).getByLabel('Kept: part of what an approval stands on')).toBeVisible();
+    await expect(
+      page.getByRole('list', { name: /^Photos: Small router/ }).getByLabel('Kept: part of what an approval stands on'),
+    ).toBeVisible();
     await expect(page.getByRole('button', { name: 'Delete router-frame.jpg' })).toHaveCount(0);
     await snap(page, 'evidence-locked-desktop');
   });
@@ -211,15 +261,21 @@ test.describe('evidence: photos and files', () => {
     await expect(page.getByRole('button', { name: 'Choose files' })).toHaveCount(0);
     await expect(page.getByRole('button', { name: 'Delete frame.jpg' })).toHaveCount(0);
   });
-  test('a photo goes straight onto a rail from the rail page, and shows there and in the machine file', async ({ page }) => {
+  test('a photo goes straight onto a rail from the rail page, and shows there and in the machine file', async ({
+    page,
+  }) => {
     await signInAs(page, DEMO.builder);
     const machineId = await newMachine(page.request, `Rail photo table ${Date.now()}`);
-    const rail = await page.request.post(`/api/machines/${machineId}/rails`, { data: { label: 'Y1 (left)', axis: 'Y1', lengthUnit: 'mm', length: 600, holePitch: 60, firstHole: 30 } });
+    const rail = await page.request.post(`/api/machines/${machineId}/rails`, {
+      data: { label: 'Y1 (left)', axis: 'Y1', lengthUnit: 'mm', length: 600, holePitch: 60, firstHole: 30 },
+    });
     expect(rail.status()).toBe(201);
     const railId = (await rail.json()).id as string;
     await page.goto(`/machines/${machineId}/rails/${railId}`);
     const panel = page.getByRole('region', { name: 'Photos and files of this rail' });
-    await panel.getByLabel('Choose photos or files').setInputFiles([{ name: 'indicator-on-y1.jpg', mimeType: 'image/jpeg', buffer: await railPhoto() }]);
+    await panel
+      .getByLabel('Choose photos or files')
+      .setInputFiles([{ name: 'indicator-on-y1.jpg', mimeType: 'image/jpeg', buffer: await railPhoto() }]);
     await expect(panel.getByRole('button', { name: 'View indicator-on-y1.jpg full size' })).toBeVisible();
     const listed = await (await page.request.get(`/api/evidence?subjectType=rail&subjectId=${railId}`)).json();
     expect(listed.map((e: { fileName: string }) => e.fileName)).toContain('indicator-on-y1.jpg');

@@ -48,7 +48,9 @@ test.describe('sign-in and the app frame', () => {
     await page.setViewportSize({ width: 820, height: 1180 });
     await signInAs(page, DEMO.technician);
     await page.getByRole('button', { name: 'Open navigation' }).click();
-    await expect(page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Calculators' })).toBeVisible();
+    await expect(
+      page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Calculators' }),
+    ).toBeVisible();
     await snap(page, 'frame-tablet-drawer');
   });
 
@@ -71,7 +73,10 @@ test.describe('sign-in and the app frame', () => {
     // The local fake mail server caught the sign-in mail: the outbox shows the admin that it went,
     // never its link; the whole message is in the data folder's mail drop, as the person would get it.
     await page.goto('/outbox');
-    await page.getByRole('button', { name: /Your Railwright sign-in for/ }).filter({ hasText: email }).click();
+    await page
+      .getByRole('button', { name: /Your Railwright sign-in for/ })
+      .filter({ hasText: email })
+      .click();
     await expect(page.getByText(/link hidden/).first()).toBeVisible();
     await expect(page.getByRole('link', { name: /set-password\?token=/ })).toHaveCount(0);
     const link = await linkMailedTo(email);
@@ -87,10 +92,14 @@ test.describe('sign-in and the app frame', () => {
     await expect(other.getByRole('heading', { name: 'Machines' })).toBeVisible();
     await other.close();
     await page.goto('/people');
-    await expect(page.getByRole('table', { name: 'Members' }).getByRole('row').filter({ hasText: name })).toContainText('Active');
+    await expect(page.getByRole('table', { name: 'Members' }).getByRole('row').filter({ hasText: name })).toContainText(
+      'Active',
+    );
   });
 
-  test('someone who forgot their password asks for a link from the sign-in page and is signed in after choosing a new one', async ({ page }) => {
+  test('someone who forgot their password asks for a link from the sign-in page and is signed in after choosing a new one', async ({
+    page,
+  }) => {
     const admin = await page.context().browser()!.newPage();
     await signInAs(admin, DEMO.admin);
     await admin.goto('/people');

@@ -10,7 +10,10 @@ async function openTab(page: Page, machine: string, tab: 'Frame' | 'Safety walk'
 
 /** A close look at one figure, beside the full-page shots. */
 const shoot = (page: Page, selector: string, name: string) =>
-  page.locator(selector).first().screenshot({ path: path.join(__dirname, 'screenshots', `${name}.png`) });
+  page
+    .locator(selector)
+    .first()
+    .screenshot({ path: path.join(__dirname, 'screenshots', `${name}.png`) });
 
 test.describe('frame and safety walk', () => {
   test('a technician records a diagonal check and a 3 × 4 bed grid and answers the safety walk', async ({ page }) => {
@@ -33,9 +36,13 @@ test.describe('frame and safety walk', () => {
     // Diagonal 2 long by 0.7 mm on 2000 × 1200: 0.34 mm/m, outside the 0.23 mm/m plasma target
     // (0.5 mm diagonal difference on a 1500 mm square, re-derived from its source).
     await expect(page.getByTestId('squareness-result')).toContainText('0.34');
-    await expect(page.getByRole('region', { name: 'Diagonal check' }).getByText('outside target').first()).toBeVisible();
+    await expect(
+      page.getByRole('region', { name: 'Diagonal check' }).getByText('outside target').first(),
+    ).toBeVisible();
     // No resolution given: a tape (about 1/32 in) is too coarse for the 0.47 mm the target allows here.
-    await expect(page.getByRole('list', { name: 'Diagonal check warnings' })).toContainText(/A tape reads to about 1\/32 in \(0.794 mm\)/);
+    await expect(page.getByRole('list', { name: 'Diagonal check warnings' })).toContainText(
+      /A tape reads to about 1\/32 in \(0.794 mm\)/,
+    );
     await expect(page.getByText(/Lean exaggerated ×\d+/)).toBeVisible();
     await expect(page.getByText(/Move the X0 end back towards Y0 by 1\.0\d mm/)).toBeVisible();
     await shoot(page, 'svg[aria-label^="Measured rectangle"]', 'frame-squareness-drawing-desktop');
@@ -51,7 +58,20 @@ test.describe('frame and safety walk', () => {
     await expect(grid.getByLabel('Height unit')).toBeVisible();
     await expect(grid.getByLabel('Rows')).toHaveValue('3');
     await expect(grid.getByLabel('Columns')).toHaveValue('4');
-    const heights = ['0.10', '0.05', '0.00', '-0.05', '0.08', '0.02', '0.62', '-0.04', '0.04', '0.00', '-0.02', '-0.08'];
+    const heights = [
+      '0.10',
+      '0.05',
+      '0.00',
+      '-0.05',
+      '0.08',
+      '0.02',
+      '0.62',
+      '-0.04',
+      '0.04',
+      '0.00',
+      '-0.02',
+      '-0.08',
+    ];
     await grid.getByLabel('Height at row 1, column 1').click();
     for (const h of heights) {
       await page.keyboard.type(h);
@@ -60,13 +80,21 @@ test.describe('frame and safety walk', () => {
     await expect(grid.getByLabel('Height at row 3, column 4')).toHaveValue('-0.08');
     await grid.getByRole('button', { name: 'Record bed grid' }).click();
     // A plasma table is judged on the range of heights as the gantry-carried gauge read them: 0.62 − (−0.08) = 0.70 mm.
-    await expect(page.getByTestId('flatness-result')).toContainText('Height range to the gantry’s plane of travel (tilt left in): 0.0276 in (0.700 mm)');
+    await expect(page.getByTestId('flatness-result')).toContainText(
+      'Height range to the gantry’s plane of travel (tilt left in): 0.0276 in (0.700 mm)',
+    );
     await expect(page.getByRole('definition').filter({ hasText: /mm/ }).first()).toBeVisible();
     await expect(page.getByText('Minimum-zone flatness (ISO 1101)', { exact: true })).toBeVisible();
     await expect(page.getByText('Least-squares flatness', { exact: true })).toBeVisible();
     // Twelve points on a 3 × 4 grid over part of the bed: fewer than 3 × 3 is fine, but the grid does not cover the bed.
-    await expect(page.getByRole('list', { name: 'Worst points' }).getByRole('listitem').first()).toContainText('row 2, column 3: +0.35');
-    await expect(page.getByRole('img', { name: /Bed grid colour map of heights in mm from the middle of the height range, 3 rows by 4 columns/ })).toBeVisible();
+    await expect(page.getByRole('list', { name: 'Worst points' }).getByRole('listitem').first()).toContainText(
+      'row 2, column 3: +0.35',
+    );
+    await expect(
+      page.getByRole('img', {
+        name: /Bed grid colour map of heights in mm from the middle of the height range, 3 rows by 4 columns/,
+      }),
+    ).toBeVisible();
     await shoot(page, 'svg[aria-label^="Bed grid colour map"]', 'frame-bed-grid-map-desktop');
     await shoot(page, 'section[aria-labelledby="bed-grid-title"]', 'frame-bed-grid-desktop');
     // The seeded cut's 400 mm square is judged in its own ISO 9013 band, not the 35–125 mm one.
@@ -79,7 +107,9 @@ test.describe('frame and safety walk', () => {
 
     // The safety walk: the seeded "no" blocks approval; answer one more item.
     await page.getByRole('tab', { name: 'Safety walk' }).click();
-    await expect(page.getByText(/does not replace local codes, the equipment makers’ instructions, or licensed practice/)).toBeVisible();
+    await expect(
+      page.getByText(/does not replace local codes, the equipment makers’ instructions, or licensed practice/),
+    ).toBeVisible();
     await expect(page.getByText('Blocks approval')).toBeVisible();
     const before = await page.getByTestId('walk-counts').textContent();
     expect(before).toMatch(/^7 of 14 answered/);
@@ -90,10 +120,15 @@ test.describe('frame and safety walk', () => {
     await expect(page.getByTestId('walk-counts')).toContainText('8 of 14 answered');
     await expect(page.getByTestId('walk-status')).toHaveText('Not complete');
     // Put the "no" right: the walk no longer blocks.
-    await page.getByRole('group', { name: /extraction or ventilation/ }).getByRole('button', { name: 'Yes' }).click();
+    await page
+      .getByRole('group', { name: /extraction or ventilation/ })
+      .getByRole('button', { name: 'Yes' })
+      .click();
     await expect(page.getByText('Blocks approval')).toHaveCount(0);
     await page.reload();
-    await expect(page.getByRole('group', { name: /licensed electrician/ }).getByLabel('Note')).toHaveValue('Inspected by the site electrician, certificate in the office');
+    await expect(page.getByRole('group', { name: /licensed electrician/ }).getByLabel('Note')).toHaveValue(
+      'Inspected by the site electrician, certificate in the office',
+    );
     await snap(page, 'safety-walk-desktop');
   });
 
@@ -132,7 +167,10 @@ test.describe('frame and safety walk', () => {
     // Two page loads and six screenshots: more than one ordinary test's time.
     test.setTimeout(180_000);
     await signInAs(page, DEMO.technician);
-    for (const [width, name] of [[390, 'phone'], [1280, 'laptop']] as const) {
+    for (const [width, name] of [
+      [390, 'phone'],
+      [1280, 'laptop'],
+    ] as const) {
       await page.setViewportSize({ width, height: 900 });
       await openTab(page, 'Big plasma table', 'Frame');
       await expect(page.getByTestId('flatness-result')).toContainText('Height range');
@@ -141,13 +179,17 @@ test.describe('frame and safety walk', () => {
       const offenders = await page.evaluate(() => {
         const width = document.documentElement.clientWidth;
         const inScroller = (el: Element) => {
-          for (let p = el.parentElement; p; p = p.parentElement) if (p.scrollWidth > p.clientWidth && getComputedStyle(p).overflowX !== 'visible') return true;
+          for (let p = el.parentElement; p; p = p.parentElement)
+            if (p.scrollWidth > p.clientWidth && getComputedStyle(p).overflowX !== 'visible') return true;
           return false;
         };
         return [...document.querySelectorAll('main *')]
           .filter((el) => el.getBoundingClientRect().right > width + 1 && !inScroller(el))
           .slice(0, 5)
-          .map((el) => `${el.tagName.toLowerCase()}.${[...el.classList].join('.')} "${(el.textContent ?? '').slice(0, 40)}"`);
+          .map(
+            (el) =>
+              `${el.tagName.toLowerCase()}.${[...el.classList].join('.')} "${(el.textContent ?? '').slice(0, 40)}"`,
+          );
       });
       expect(offenders).toEqual([]);
       await shoot(page, 'section[aria-labelledby="bed-grid-title"]', `frame-bed-grid-${name}`);

@@ -7,11 +7,15 @@ const entries = (list: Locator) => list.locator(':scope > li');
 
 /** A fresh machine with a known number of changes, made through the API as the owner. */
 async function machineWithChanges(page: Page, changes: number): Promise<string> {
-  const made = await page.request.post('/api/machines', { data: { name: `History bench ${Date.now() % 100000}`, kind: 'router', workArea: { x: 900, y: 600 } } });
+  const made = await page.request.post('/api/machines', {
+    data: { name: `History bench ${Date.now() % 100000}`, kind: 'router', workArea: { x: 900, y: 600 } },
+  });
   expect(made.status()).toBe(201);
   const { id } = await made.json();
   for (let i = 1; i <= changes; i++) {
-    expect((await page.request.patch(`/api/machines/${id}`, { data: { notes: `Note number ${i}` } })).status()).toBe(200);
+    expect((await page.request.patch(`/api/machines/${id}`, { data: { notes: `Note number ${i}` } })).status()).toBe(
+      200,
+    );
   }
   return id;
 }
@@ -56,7 +60,10 @@ test.describe('history', () => {
     await expect(entries(list)).toHaveCount(31);
   });
 
-  test('the workshop activity page shows people, sign-ins and machines to admins and owners only', async ({ page, browser }) => {
+  test('the workshop activity page shows people, sign-ins and machines to admins and owners only', async ({
+    page,
+    browser,
+  }) => {
     await signInAs(page, DEMO.admin);
     const reset = await page.request.get('/api/people');
     expect(reset.status()).toBe(200);

@@ -13,11 +13,27 @@ function renderFirstPage(pdf: Buffer, name: string): { png: string; width: numbe
   const dir = mkdtempSync(path.join(os.tmpdir(), 'rw-template-'));
   const file = path.join(dir, `${name}.pdf`);
   writeFileSync(file, pdf);
-  execFileSync('pdftoppm', ['-png', '-r', '72', '-f', '1', '-l', '1', '-singlefile', file, path.join(__dirname, 'screenshots', `template-${name}`)]);
+  execFileSync('pdftoppm', [
+    '-png',
+    '-r',
+    '72',
+    '-f',
+    '1',
+    '-l',
+    '1',
+    '-singlefile',
+    file,
+    path.join(__dirname, 'screenshots', `template-${name}`),
+  ]);
   execFileSync('pdftoppm', ['-gray', '-r', '72', '-f', '1', '-l', '1', '-singlefile', file, path.join(dir, 'page')]);
   const pgm = readFileSync(path.join(dir, 'page.pgm'));
   const header = /^P5\s+(\d+)\s+(\d+)\s+255\s/.exec(pgm.subarray(0, 40).toString('latin1'))!;
-  return { png: path.join(__dirname, 'screenshots', `template-${name}.png`), width: Number(header[1]), height: Number(header[2]), grey: pgm.subarray(header[0].length) };
+  return {
+    png: path.join(__dirname, 'screenshots', `template-${name}.png`),
+    width: Number(header[1]),
+    height: Number(header[2]),
+    grey: pgm.subarray(header[0].length),
+  };
 }
 
 /**
@@ -75,7 +91,9 @@ async function plasmaId(page: Page): Promise<string> {
 }
 
 test.describe('drilling templates', () => {
-  test('a builder prints a rail’s and a bracket’s template from the demo; the 100 mm bar measures 283.46 px at 72 dpi', async ({ page }) => {
+  test('a builder prints a rail’s and a bracket’s template from the demo; the 100 mm bar measures 283.46 px at 72 dpi', async ({
+    page,
+  }) => {
     await page.setViewportSize({ width: 1366, height: 900 });
     await signInAs(page, DEMO.builder);
     const machineId = await plasmaId(page);
@@ -102,7 +120,10 @@ test.describe('drilling templates', () => {
   test('the pattern page and the new-pattern dialog read well on a tablet and a phone', async ({ page }) => {
     await signInAs(page, DEMO.builder);
     const machineId = await plasmaId(page);
-    for (const [label, width, height] of [['tablet', 820, 1180], ['phone', 390, 844]] as const) {
+    for (const [label, width, height] of [
+      ['tablet', 820, 1180],
+      ['phone', 390, 844],
+    ] as const) {
       await page.setViewportSize({ width, height });
       await page.goto(`/machines/${machineId}?tab=templates`);
       await expect(page.getByRole('heading', { name: 'Brackets and plates' })).toBeVisible();

@@ -7,11 +7,26 @@ const TABLET = { width: 820, height: 1180 };
 const PHONE = { width: 390, height: 844 };
 
 /** A new machine file with one rail, made through the API as the signed-in person. */
-async function newRail(request: APIRequestContext, rail: { lengthMm: number; holePitchMm: number; firstHoleMm: number }) {
-  const machine = await request.post('/api/machines', { data: { name: `Indicator test ${Date.now()}`, kind: 'plasma', workArea: { x: 3000, y: 1500 } } });
+async function newRail(
+  request: APIRequestContext,
+  rail: { lengthMm: number; holePitchMm: number; firstHoleMm: number },
+) {
+  const machine = await request.post('/api/machines', {
+    data: { name: `Indicator test ${Date.now()}`, kind: 'plasma', workArea: { x: 3000, y: 1500 } },
+  });
   expect(machine.status()).toBe(201);
   const machineId = (await machine.json()).id as string;
-  const made = await request.post(`/api/machines/${machineId}/rails`, { data: { label: 'Y1 (left)', axis: 'Y1', profileSize: 20, lengthUnit: 'mm', length: rail.lengthMm, holePitch: rail.holePitchMm, firstHole: rail.firstHoleMm } });
+  const made = await request.post(`/api/machines/${machineId}/rails`, {
+    data: {
+      label: 'Y1 (left)',
+      axis: 'Y1',
+      profileSize: 20,
+      lengthUnit: 'mm',
+      length: rail.lengthMm,
+      holePitch: rail.holePitchMm,
+      firstHole: rail.firstHoleMm,
+    },
+  });
   expect(made.status()).toBe(201);
   return { machineId, railId: (await made.json()).id as string };
 }
@@ -48,7 +63,9 @@ async function openSweep(page: Page) {
 }
 
 test.describe('indicator input', () => {
-  test('a keyboard-mode indicator fills a sweep station by station, whatever its decimal style or sign, and the sweep saves them', async ({ page }) => {
+  test('a keyboard-mode indicator fills a sweep station by station, whatever its decimal style or sign, and the sweep saves them', async ({
+    page,
+  }) => {
     await signInAs(page, DEMO.builder);
     const railId = await openSweep(page);
 
@@ -107,14 +124,16 @@ test.describe('indicator input', () => {
     const full = await (await page.request.get(`/api/sweeps/${saved.id}`)).json();
     expect(full.readingUnit).toBe('thou');
     expect(full.lengthUnit).toBe('mm');
-    expect(full.stations).toEqual([
-      { position: 50, reading: 0.012 },
-      { position: 150, reading: -0.004 },
-      { position: 250, reading: 0.01 },
-      { position: 350, reading: -0.002 },
-      { position: 450, reading: 0.8 },
-      { position: 550, reading: 0.3 },
-    ].map((s) => expect.objectContaining(s)));
+    expect(full.stations).toEqual(
+      [
+        { position: 50, reading: 0.012 },
+        { position: 150, reading: -0.004 },
+        { position: 250, reading: 0.01 },
+        { position: 350, reading: -0.002 },
+        { position: 450, reading: 0.8 },
+        { position: 550, reading: 0.3 },
+      ].map((s) => expect.objectContaining(s)),
+    );
   });
 
   test('indicator readings fill two bolt-down holes without fixing them; the builder fixes each', async ({ page }) => {
@@ -178,9 +197,13 @@ test.describe('indicator input', () => {
         },
         close: async () => {},
       };
-      Object.defineProperty(Navigator.prototype, 'serial', { configurable: true, get: () => ({ requestPort: async () => port }) });
+      Object.defineProperty(Navigator.prototype, 'serial', {
+        configurable: true,
+        get: () => ({ requestPort: async () => port }),
+      });
     });
-    const push = (text: string) => page.evaluate((t) => (window as unknown as { serialPush: (t: string) => void }).serialPush(t), text);
+    const push = (text: string) =>
+      page.evaluate((t) => (window as unknown as { serialPush: (t: string) => void }).serialPush(t), text);
 
     await signInAs(page, DEMO.builder);
     const railId = await openSweep(page);
@@ -229,7 +252,9 @@ test.describe('indicator input', () => {
     expect(full.stations.map((s: { reading: number }) => s.reading)).toEqual([0.01, -0.003, 0.007, 0.004]);
   });
 
-  test('in the bed grid a reading lands in the selected cell and moves on; Undo goes back to that cell', async ({ page }) => {
+  test('in the bed grid a reading lands in the selected cell and moves on; Undo goes back to that cell', async ({
+    page,
+  }) => {
     await signInAs(page, DEMO.technician);
     await page.goto('/machines');
     await page.getByRole('link', { name: 'Big plasma table' }).click();
@@ -258,7 +283,9 @@ test.describe('indicator input', () => {
     await signInAs(page, DEMO.builder);
     await openSweep(page);
     await page.getByRole('button', { name: 'Serial cable…' }).click();
-    await expect(page.getByText('not available in this browser (use Chrome or Edge on a computer, or keyboard mode)')).toBeVisible();
+    await expect(
+      page.getByText('not available in this browser (use Chrome or Edge on a computer, or keyboard mode)'),
+    ).toBeVisible();
     await reading(page, 50).click();
     await indicatorSends(page, '-0,25');
     await expect(reading(page, 50)).toHaveValue('-0.25');

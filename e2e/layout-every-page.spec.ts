@@ -12,8 +12,27 @@ const SIZES = [
 
 const TARGET = 44;
 
-const MACHINE_TABS = ['readiness', 'overview', 'rails', 'drives', 'frame', 'safety', 'templates', 'evidence', 'history'];
-const CALCULATORS = ['straightness', 'parallelism', 'squareness', 'flatness', 'drive', 'travel-trial', 'positioning', 'screw-speed'];
+const MACHINE_TABS = [
+  'readiness',
+  'overview',
+  'rails',
+  'drives',
+  'frame',
+  'safety',
+  'templates',
+  'evidence',
+  'history',
+];
+const CALCULATORS = [
+  'straightness',
+  'parallelism',
+  'squareness',
+  'flatness',
+  'drive',
+  'travel-trial',
+  'positioning',
+  'screw-speed',
+];
 
 interface Visit {
   name: string;
@@ -29,11 +48,16 @@ interface Problem {
 }
 
 /** What on the page is wider than the window, and which controls are smaller than a fingertip. */
-async function measure(page: Page): Promise<{ scrollWidth: number; innerWidth: number; wide: string[]; small: Problem[] }> {
+async function measure(
+  page: Page,
+): Promise<{ scrollWidth: number; innerWidth: number; wide: string[]; small: Problem[] }> {
   return page.evaluate((target) => {
     const describe = (el: Element) => {
       const name = (el.getAttribute('aria-label') ?? el.textContent ?? '').trim().replace(/\s+/g, ' ').slice(0, 40);
-      const cls = [...el.classList].filter((c) => c.startsWith('Mui') && !c.includes('-')).slice(0, 2).join('.');
+      const cls = [...el.classList]
+        .filter((c) => c.startsWith('Mui') && !c.includes('-'))
+        .slice(0, 2)
+        .join('.');
       return `<${el.tagName.toLowerCase()}${el.getAttribute('role') ? ` role=${el.getAttribute('role')}` : ''}${cls ? ` .${cls}` : ''}> "${name}"`;
     };
     const visible = (el: Element) => {
@@ -59,7 +83,8 @@ async function measure(page: Page): Promise<{ scrollWidth: number; innerWidth: n
       // A text field's target is its whole box, not the bare <input> inside it.
       const box = el.closest('.MuiInputBase-root') ?? el;
       const r = box.getBoundingClientRect();
-      if (r.width + 0.5 < target || r.height + 0.5 < target) small.push({ what: describe(el), width: Math.round(r.width), height: Math.round(r.height) });
+      if (r.width + 0.5 < target || r.height + 0.5 < target)
+        small.push({ what: describe(el), width: Math.round(r.width), height: Math.round(r.height) });
     }
     const wide: string[] = [];
     for (const el of document.body.querySelectorAll('*')) {
@@ -79,7 +104,12 @@ async function measure(page: Page): Promise<{ scrollWidth: number; innerWidth: n
         }
       }
     }
-    return { scrollWidth: document.documentElement.scrollWidth, innerWidth: window.innerWidth, wide: wide.slice(0, 5), small };
+    return {
+      scrollWidth: document.documentElement.scrollWidth,
+      innerWidth: window.innerWidth,
+      wide: wide.slice(0, 5),
+      small,
+    };
   }, TARGET);
 }
 
@@ -100,7 +130,9 @@ async function demoIds(page: Page) {
   expect(rails.length && axes.length && patterns.length).toBeTruthy();
   // The approved demo router's certificate address, which anyone holding the paper opens.
   const router = machines.find((m) => m.name === 'Small router')!;
-  const approvals: { verificationToken: string | null }[] = await (await page.request.get(`/api/machines/${router.id}/approvals`)).json();
+  const approvals: { verificationToken: string | null }[] = await (
+    await page.request.get(`/api/machines/${router.id}/approvals`)
+  ).json();
   const token = approvals.find((a) => a.verificationToken)?.verificationToken;
   const verify = token ? `/verify/${token}` : undefined;
   expect(verify).toMatch(/^\/verify\//);
@@ -117,7 +149,11 @@ function visitsFor(ids: Awaited<ReturnType<typeof demoIds>>): Visit[] {
     { name: 'hole-pattern', path: `${m}/templates/${ids.pattern}`, as: 'owner' },
     { name: 'target-sets', path: '/target-sets', as: 'owner' },
     { name: 'activity', path: '/activity', as: 'owner' },
-    ...CALCULATORS.map((calc): Visit => ({ name: `calculators-${calc}`, path: `/calculators?calc=${calc}`, as: 'owner' })),
+    ...CALCULATORS.map((calc): Visit => ({
+      name: `calculators-${calc}`,
+      path: `/calculators?calc=${calc}`,
+      as: 'owner',
+    })),
     // A builder records where an owner reviews: the entry forms show on these pages.
     { name: 'builder-machine-readiness', path: `${m}?tab=readiness`, as: 'builder' },
     { name: 'builder-machine-rails', path: `${m}?tab=rails`, as: 'builder' },
@@ -150,7 +186,11 @@ for (const size of SIZES) {
 
     // The pages before sign-in first, on a context of their own.
     const guest = await (await browser.newContext({ viewport: { width: size.width, height: size.height } })).newPage();
-    for (const [name, path] of [['sign-in', '/sign-in'], ['forgot-password', '/forgot-password'], ['verify', ids.verify]]) {
+    for (const [name, path] of [
+      ['sign-in', '/sign-in'],
+      ['forgot-password', '/forgot-password'],
+      ['verify', ids.verify],
+    ]) {
       await guest.goto(path);
       await settled(guest);
       await check(guest, `${size.name}-${name}`);

@@ -10,7 +10,8 @@ async function openMachine(page: Page, name: string) {
   await expect(page.getByRole('heading', { name, level: 1 })).toBeVisible();
 }
 
-const newMachineWithRail = (page: Page, name: string) => railOf(page, name, { lengthMm: 600, holePitchMm: 100, firstHoleMm: 50 }, { x: 3000, y: 1500 }, 'Test frame');
+const newMachineWithRail = (page: Page, name: string) =>
+  railOf(page, name, { lengthMm: 600, holePitchMm: 100, firstHoleMm: 50 }, { x: 3000, y: 1500 }, 'Test frame');
 
 test.describe('machines and rails', () => {
   test('a builder opens a machine file, adds a rail and enters a sweep by keyboard', async ({ page }) => {
@@ -37,7 +38,9 @@ test.describe('machines and rails', () => {
     await expect(page.getByLabel('Reading at 550 mm')).toHaveValue('0');
     await expect(page.getByRole('button', { name: 'Save sweep' })).toBeFocused();
     await expect(page.getByRole('figure', { name: 'Live straightness chart' })).toBeVisible();
-    await expect(page.getByRole('figure', { name: 'Live straightness chart' }).locator('.recharts-line-dots circle').first()).toBeVisible();
+    await expect(
+      page.getByRole('figure', { name: 'Live straightness chart' }).locator('.recharts-line-dots circle').first(),
+    ).toBeVisible();
     // A bow of 3 thou on a 2 thou target: the live verdict is outside before saving.
     await expect(page.getByRole('region', { name: 'New sweep' }).getByText('Outside target')).toBeVisible();
     // The usual torque for the rail's typical bolt (M5 on a 20 mm rail) is offered, not imposed.
@@ -51,7 +54,11 @@ test.describe('machines and rails', () => {
     await page.getByRole('button', { name: 'Save sweep' }).click();
     const saved = page.getByRole('region', { name: 'Sweep saved' });
     // Judged on the minimum zone (ISO 1101's definition), the reference the default target names.
-    await expect(saved.getByText(/Minimum-zone straightness \(ISO 1101\) .* thou against a target of 2 thou \(judged on the minimum zone\): outside target/)).toBeVisible();
+    await expect(
+      saved.getByText(
+        /Minimum-zone straightness \(ISO 1101\) .* thou against a target of 2 thou \(judged on the minimum zone\): outside target/,
+      ),
+    ).toBeVisible();
     await expect(saved.getByTestId('local-slope')).toHaveText(/\d\.\d{3} mm\/m/);
     await expect(saved.getByText(/As left .* M5 at 8\.8 N·m/)).toBeVisible();
     await expect(saved.getByRole('table', { name: 'Residual per station' }).getByRole('row')).toHaveCount(7);
@@ -81,7 +88,11 @@ test.describe('machines and rails', () => {
     await importButton.click();
     await expect(page.getByLabel('Reading at 300 mm')).toHaveValue('1.5');
     await page.getByRole('button', { name: 'Save sweep' }).click();
-    await expect(page.getByRole('region', { name: 'Sweep saved' }).getByText(/against a target of 2 thou \(judged on the minimum zone\): within target/)).toBeVisible();
+    await expect(
+      page
+        .getByRole('region', { name: 'Sweep saved' })
+        .getByText(/against a target of 2 thou \(judged on the minimum zone\): within target/),
+    ).toBeVisible();
   });
 
   test('the specification is edited with the target set chosen; a CSV file can be uploaded', async ({ page }) => {
@@ -90,7 +101,11 @@ test.describe('machines and rails', () => {
     await newMachineWithRail(page, name);
     await page.getByRole('button', { name: 'Import CSV' }).click();
     const dialog = page.getByRole('dialog', { name: 'Import readings from CSV' });
-    await dialog.getByLabel('CSV file').setInputFiles({ name: 'sweep.csv', mimeType: 'text/csv', buffer: Buffer.from('position;reading\n0;0\n200;0,5\n400;1\n600;0,5\n') });
+    await dialog.getByLabel('CSV file').setInputFiles({
+      name: 'sweep.csv',
+      mimeType: 'text/csv',
+      buffer: Buffer.from('position;reading\n0;0\n200;0,5\n400;1\n600;0,5\n'),
+    });
     await expect(dialog.getByRole('table', { name: 'Import preview' }).getByRole('row')).toHaveCount(5);
     await dialog.getByRole('button', { name: 'Import 4 stations' }).click();
     await expect(page.getByLabel('Reading at 200 mm')).toHaveValue('0.5');
@@ -121,8 +136,15 @@ test.describe('machines and rails', () => {
       expect(p.status).toBe('within-target');
     }
     const plasmaRails = await (await page.request.get(`/api/machines/${plasma.id}/rails`)).json();
-    expect(plasmaRails.map((r: { label: string }) => r.label).sort()).toEqual(['X front', 'X rear', 'Y1 (left)', 'Y2 (right)']);
-    expect(plasmaRails.some((r: { latestSweep: { status: string } }) => r.latestSweep.status === 'outside-target')).toBe(true);
+    expect(plasmaRails.map((r: { label: string }) => r.label).sort()).toEqual([
+      'X front',
+      'X rear',
+      'Y1 (left)',
+      'Y2 (right)',
+    ]);
+    expect(
+      plasmaRails.some((r: { latestSweep: { status: string } }) => r.latestSweep.status === 'outside-target'),
+    ).toBe(true);
   });
 
   test('a viewer reads rails and target sets but records nothing', async ({ page }) => {
@@ -137,7 +159,9 @@ test.describe('machines and rails', () => {
     await expect(page.getByRole('region', { name: 'New sweep' })).toHaveCount(0);
     await page.goto('/target-sets');
     await expect(page.getByText('Read only').first()).toBeVisible();
-    await expect(page.getByRole('table', { name: 'Targets of Plasma table (default)' })).toContainText('common practice');
+    await expect(page.getByRole('table', { name: 'Targets of Plasma table (default)' })).toContainText(
+      'common practice',
+    );
   });
 
   test('an owner edits a target set', async ({ page }) => {
@@ -161,17 +185,41 @@ test.describe('machines and rails', () => {
 
   // An inch rail with a top-face sweep in thou from a coarse dial: both unit pickers, the face,
   // the reference beside the target, the local slope and the warnings, on a phone and a desktop.
-  for (const [size, viewport] of [['phone', { width: 390, height: 844 }], ['1280', { width: 1280, height: 900 }]] as const) {
+  for (const [size, viewport] of [
+    ['phone', { width: 390, height: 844 }],
+    ['1280', { width: 1280, height: 900 }],
+  ] as const) {
     test(`an inch rail with a warned sweep reads clearly at ${size} size`, async ({ page }) => {
       await page.setViewportSize(viewport);
       await signInAs(page, DEMO.builder);
-      const machine = await page.request.post('/api/machines', { data: { name: `Inch table ${size} ${Date.now()}`, kind: 'plasma', workArea: { x: 1200, y: 800 } } });
+      const machine = await page.request.post('/api/machines', {
+        data: { name: `Inch table ${size} ${Date.now()}`, kind: 'plasma', workArea: { x: 1200, y: 800 } },
+      });
       const machineId = (await machine.json()).id as string;
-      const made = await page.request.post(`/api/machines/${machineId}/rails`, { data: { label: 'Y1 (left)', axis: 'Y1', lengthUnit: 'in', length: 48, holePitch: 2.4, firstHole: 1.2, spacing: 36, profileSize: 20 } });
+      const made = await page.request.post(`/api/machines/${machineId}/rails`, {
+        data: {
+          label: 'Y1 (left)',
+          axis: 'Y1',
+          lengthUnit: 'in',
+          length: 48,
+          holePitch: 2.4,
+          firstHole: 1.2,
+          spacing: 36,
+          profileSize: 20,
+        },
+      });
       expect(made.status()).toBe(201);
       const railId = (await made.json()).id as string;
       const sweep = await page.request.post(`/api/rails/${railId}/sweeps`, {
-        data: { readingUnit: 'thou', lengthUnit: 'in', face: 'top', phase: 'as-found', resolution: 1, datum: 'Level bar', stations: [0, 12, 24, 36].map((position, i) => ({ position, reading: [0, 1, 3, 1][i] })) },
+        data: {
+          readingUnit: 'thou',
+          lengthUnit: 'in',
+          face: 'top',
+          phase: 'as-found',
+          resolution: 1,
+          datum: 'Level bar',
+          stations: [0, 12, 24, 36].map((position, i) => ({ position, reading: [0, 1, 3, 1][i] })),
+        },
       });
       expect(sweep.status()).toBe(201);
       await page.goto(`/machines/${machineId}/rails/${railId}`);
@@ -191,7 +239,10 @@ test.describe('machines and rails', () => {
     });
   }
 
-  for (const [size, viewport] of [['desktop', { width: 1366, height: 900 }], ['tablet', TABLET]] as const) {
+  for (const [size, viewport] of [
+    ['desktop', { width: 1366, height: 900 }],
+    ['tablet', TABLET],
+  ] as const) {
     test(`screenshots at ${size} size: machines list, rails tab, rail page`, async ({ page }) => {
       await page.setViewportSize(viewport);
       await signInAs(page, DEMO.builder);

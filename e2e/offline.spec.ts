@@ -9,7 +9,9 @@ import { DEMO, signInAs, snap } from './support/session';
 
 async function newMachine(page: Page, name: string): Promise<string> {
   await signInAs(page, DEMO.owner);
-  const res = await page.request.post('/api/machines', { data: { name, kind: 'router', workArea: { x: 900, y: 600 } } });
+  const res = await page.request.post('/api/machines', {
+    data: { name, kind: 'router', workArea: { x: 900, y: 600 } },
+  });
   expect(res.status()).toBe(201);
   const id = (await res.json()).id as string;
   await page.getByRole('button', { name: 'Sign out' }).click();
@@ -22,18 +24,30 @@ async function openWalk(page: Page, machineId: string) {
   await page.getByRole('tab', { name: 'Safety walk' }).click();
   await expect(page.getByTestId('walk-counts')).toContainText('0 of');
   // The service worker has taken the page over: from now on the app opens without a connection.
-  await page.waitForFunction(async () => !!(await navigator.serviceWorker.ready) && !!navigator.serviceWorker.controller);
+  await page.waitForFunction(
+    async () => !!(await navigator.serviceWorker.ready) && !!navigator.serviceWorker.controller,
+  );
 }
 
 const item = (page: Page, words: RegExp) => page.getByRole('group', { name: words });
 
 async function answersOf(page: Page, machineId: string): Promise<Record<string, string>> {
-  const walk = (await (await page.request.get(`/api/machines/${machineId}/safety-walk`)).json()) as { sections: { items: { text: string; answer: { answer: string } | null }[] }[] };
-  return Object.fromEntries(walk.sections.flatMap((s) => s.items).filter((i) => i.answer).map((i) => [i.text, i.answer!.answer]));
+  const walk = (await (await page.request.get(`/api/machines/${machineId}/safety-walk`)).json()) as {
+    sections: { items: { text: string; answer: { answer: string } | null }[] }[];
+  };
+  return Object.fromEntries(
+    walk.sections
+      .flatMap((s) => s.items)
+      .filter((i) => i.answer)
+      .map((i) => [i.text, i.answer!.answer]),
+  );
 }
 
 test.describe('offline at the machine', () => {
-  test('answers typed without a connection wait, survive a reload, and are recorded once when it returns', async ({ page, context }) => {
+  test('answers typed without a connection wait, survive a reload, and are recorded once when it returns', async ({
+    page,
+    context,
+  }) => {
     const machineId = await newMachine(page, `Offline router ${Date.now()}`);
     await signInAs(page, DEMO.technician);
     await openWalk(page, machineId);
@@ -44,17 +58,27 @@ test.describe('offline at the machine', () => {
     });
 
     await context.setOffline(true);
-    await item(page, /licensed electrician/).getByRole('button', { name: 'Yes' }).click();
+    await item(page, /licensed electrician/)
+      .getByRole('button', { name: 'Yes' })
+      .click();
     await expect(item(page, /licensed electrician/)).toContainText('Yes · Tamsin Hale');
-    await expect(page.getByRole('status').filter({ hasText: 'Offline' })).toContainText('Offline: 1 entry waiting on this device');
+    await expect(page.getByRole('status').filter({ hasText: 'Offline' })).toContainText(
+      'Offline: 1 entry waiting on this device',
+    );
     // Nothing greys out: a second answer is taken as well.
-    await item(page, /extraction or ventilation/).getByRole('button', { name: 'No', exact: true }).click();
-    await expect(page.getByRole('status').filter({ hasText: 'Offline' })).toContainText('Offline: 2 entries waiting on this device');
+    await item(page, /extraction or ventilation/)
+      .getByRole('button', { name: 'No', exact: true })
+      .click();
+    await expect(page.getByRole('status').filter({ hasText: 'Offline' })).toContainText(
+      'Offline: 2 entries waiting on this device',
+    );
     await snap(page, 'offline-waiting-desktop');
 
     // A reload without a connection opens the app (not the browser's error page), entries still waiting.
     await page.reload();
-    await expect(page.getByRole('status').filter({ hasText: 'Offline' })).toContainText('2 entries waiting', { timeout: 15_000 });
+    await expect(page.getByRole('status').filter({ hasText: 'Offline' })).toContainText('2 entries waiting', {
+      timeout: 15_000,
+    });
     await expect(page.getByRole('button', { name: 'Sign out' })).toBeVisible();
 
     await context.setOffline(false);
@@ -71,8 +95,12 @@ test.describe('offline at the machine', () => {
     await signInAs(page, DEMO.technician);
     await openWalk(page, machineId);
     await context.setOffline(true);
-    await item(page, /licensed electrician/).getByRole('button', { name: 'Yes' }).click();
-    await expect(page.getByRole('status').filter({ hasText: 'Offline' })).toContainText('Offline: 1 entry waiting on this device');
+    await item(page, /licensed electrician/)
+      .getByRole('button', { name: 'Yes' })
+      .click();
+    await expect(page.getByRole('status').filter({ hasText: 'Offline' })).toContainText(
+      'Offline: 1 entry waiting on this device',
+    );
 
     // The technician's session ends while the entry waits (as after an expiry on the server),
     // and the builder signs in on the same tablet once the connection is back.
@@ -80,7 +108,9 @@ test.describe('offline at the machine', () => {
     await context.setOffline(false);
     await page.goto('/sign-in');
     await signInAs(page, DEMO.builder);
-    await expect(page.getByText(/1 entry typed on this device by Tamsin Hale waits until its author signs in here again/)).toBeVisible({ timeout: 15_000 });
+    await expect(
+      page.getByText(/1 entry typed on this device by Tamsin Hale waits until its author signs in here again/),
+    ).toBeVisible({ timeout: 15_000 });
     await page.waitForTimeout(1500);
     expect(await answersOf(page, machineId)).toEqual({});
     await snap(page, 'offline-waiting-for-author');
@@ -89,11 +119,16 @@ test.describe('offline at the machine', () => {
     await page.getByRole('button', { name: 'Sign out' }).click();
     await expect(page).toHaveURL(/sign-in/);
     await signInAs(page, DEMO.technician);
-    await expect.poll(async () => Object.values(await answersOf(page, machineId)), { timeout: 20_000 }).toEqual(['yes']);
+    await expect
+      .poll(async () => Object.values(await answersOf(page, machineId)), { timeout: 20_000 })
+      .toEqual(['yes']);
     await expect(page.getByText(/typed on this device by/)).toHaveCount(0);
   });
 
-  test('signing out needs the connection: without one the person stays signed in and is told so', async ({ page, context }) => {
+  test('signing out needs the connection: without one the person stays signed in and is told so', async ({
+    page,
+    context,
+  }) => {
     await signInAs(page, DEMO.viewer);
     await page.waitForFunction(async () => !!(await navigator.serviceWorker.ready));
     await context.setOffline(true);

@@ -28,7 +28,9 @@ test.describe('the address the start command prints', () => {
     await expect(page).toHaveURL(/\/machines$/);
     await expect(page.getByRole('heading', { name: 'Machines' })).toBeVisible();
     // MUI's run-time styles were applied (a strict CSP without style allowances would leave the page unstyled).
-    const font = await page.getByRole('heading', { name: 'Machines' }).evaluate((el) => getComputedStyle(el).fontFamily);
+    const font = await page
+      .getByRole('heading', { name: 'Machines' })
+      .evaluate((el) => getComputedStyle(el).fontFamily);
     expect(font).toMatch(/Roboto/);
     expect(violations).toEqual([]);
   });

@@ -26,12 +26,20 @@ async function recordScriptsAndStyles(page: Page): Promise<Loaded[]> {
     if (type !== 'script' && type !== 'stylesheet') return;
     const response = await request.response();
     const sizes = await request.sizes();
-    loaded.push({ url: request.url(), type, encoding: response?.headers()['content-encoding'], bytes: sizes.responseBodySize });
+    loaded.push({
+      url: request.url(),
+      type,
+      encoding: response?.headers()['content-encoding'],
+      bytes: sizes.responseBodySize,
+    });
   });
   return loaded;
 }
 
-async function freshPage(browser: Browser, storageState?: Awaited<ReturnType<ReturnType<Page['context']>['storageState']>>) {
+async function freshPage(
+  browser: Browser,
+  storageState?: Awaited<ReturnType<ReturnType<Page['context']>['storageState']>>,
+) {
   const context = await browser.newContext({ storageState });
   return context.newPage();
 }
@@ -43,7 +51,10 @@ function report(name: string, files: Loaded[]) {
 }
 
 test.describe('page weight', () => {
-  test('the sign-in page, the machines list and a machine file load compressed and under their goals', async ({ browser, page }) => {
+  test('the sign-in page, the machines list and a machine file load compressed and under their goals', async ({
+    browser,
+    page,
+  }) => {
     await signInAs(page, DEMO.builder);
     const signedIn = await page.context().storageState();
     await page.goto('/machines');
@@ -71,7 +82,8 @@ test.describe('page weight', () => {
     report('sign-in page', signInFiles);
     report('machines list', listFiles);
     report('machine file (readiness tab)', fileFiles);
-    for (const f of [...signInFiles, ...listFiles, ...fileFiles]) expect(f.encoding, `${f.url} should arrive compressed`).toBe('br');
+    for (const f of [...signInFiles, ...listFiles, ...fileFiles])
+      expect(f.encoding, `${f.url} should arrive compressed`).toBe('br');
     expect(signInFiles.length).toBeGreaterThan(0);
     expect(total(signInFiles)).toBeLessThanOrEqual(150 * KB);
     expect(total(listFiles)).toBeLessThanOrEqual(350 * KB);
@@ -104,7 +116,9 @@ test.describe('page weight', () => {
       await fresh.context().close();
     }
     samples.sort((a, b) => a - b);
-    console.log(`machine file, largest contentful paint over ${samples.length} cold loads: ${samples.map((s) => s.toFixed(0)).join(', ')} ms (median ${samples[1].toFixed(0)} ms; goal < 1000 ms at normal CPU)`);
+    console.log(
+      `machine file, largest contentful paint over ${samples.length} cold loads: ${samples.map((s) => s.toFixed(0)).join(', ')} ms (median ${samples[1].toFixed(0)} ms; goal < 1000 ms at normal CPU)`,
+    );
     expect(samples[1]).toBeGreaterThan(0);
   });
 });

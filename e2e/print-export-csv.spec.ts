@@ -15,7 +15,10 @@ const ISO_UTC = /^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}:\d{2}Z$/;
 type Row = Record<string, string>;
 
 /** Clicks `open` (and then the menu item, if any) and parses the file the browser saves. */
-async function download(page: Page, open: () => Promise<void>): Promise<{ name: string; text: string; rows: Row[]; fields: string[] }> {
+async function download(
+  page: Page,
+  open: () => Promise<void>,
+): Promise<{ name: string; text: string; rows: Row[]; fields: string[] }> {
   const [file] = await Promise.all([page.waitForEvent('download'), open()]);
   const text = readFileSync((await file.path())!, 'utf8');
   const parsed = Papa.parse<Row>(text, { header: true, skipEmptyLines: true });
@@ -24,14 +27,18 @@ async function download(page: Page, open: () => Promise<void>): Promise<{ name: 
 }
 
 // Files give ten significant digits.
-const close = (a: string, b: number) => expect(Math.abs(Number(a) - b)).toBeLessThanOrEqual(1e-9 * Math.max(1, Math.abs(b)));
-const sameSecond = (csv: string, iso: string) => expect(csv).toBe(new Date(iso).toISOString().replace(/\.\d{3}Z$/, 'Z'));
+const close = (a: string, b: number) =>
+  expect(Math.abs(Number(a) - b)).toBeLessThanOrEqual(1e-9 * Math.max(1, Math.abs(b)));
+const sameSecond = (csv: string, iso: string) =>
+  expect(csv).toBe(new Date(iso).toISOString().replace(/\.\d{3}Z$/, 'Z'));
 
-test('sweeps of a rail: one row per reading, in the newest sweep\'s units', async ({ page }) => {
+test("sweeps of a rail: one row per reading, in the newest sweep's units", async ({ page }) => {
   await signInAs(page, DEMO.viewer);
   const m = await demoPlasma(page);
   await page.goto(`/machines/${m.id}/rails/${m.rail.id}`);
-  const file = await download(page, () => page.getByRole('link', { name: `Download CSV: Sweeps of rail ${m.rail.label}` }).click());
+  const file = await download(page, () =>
+    page.getByRole('link', { name: `Download CSV: Sweeps of rail ${m.rail.label}` }).click(),
+  );
   expect(file.name).toBe('rail-y2-right-sweeps.csv');
   expect(file.text.startsWith('Sweep,Taken at,')).toBe(true); // a plain file: no mark or note before the header
   expect(file.text.endsWith('\r\n')).toBe(true);
@@ -69,8 +76,12 @@ test('travel trials and repeat-and-reverse runs of an axis', async ({ page }) =>
   };
   const trialsFile = await download(page, pick(`Travel trials of axis ${m.axis.name}`));
   expect(trialsFile.name).toBe('axis-x-travel-trials.csv');
-  const trialList: { id: string }[] = await (await page.request.get(`/api/axes/${m.axis.id}/travel-trials?limit=50`)).json();
-  const trials = await Promise.all(trialList.map(async (t) => (await page.request.get(`/api/axes/${m.axis.id}/travel-trials/${t.id}`)).json()));
+  const trialList: { id: string }[] = await (
+    await page.request.get(`/api/axes/${m.axis.id}/travel-trials?limit=50`)
+  ).json();
+  const trials = await Promise.all(
+    trialList.map(async (t) => (await page.request.get(`/api/axes/${m.axis.id}/travel-trials/${t.id}`)).json()),
+  );
   const L = trials[0].lengthUnit;
   expect(trialsFile.rows).toHaveLength(trials.reduce((n, t) => n + t.moves.length, 0));
   for (const t of trials) {
@@ -85,8 +96,12 @@ test('travel trials and repeat-and-reverse runs of an axis', async ({ page }) =>
 
   const runsFile = await download(page, pick(`Repeat-and-reverse runs of axis ${m.axis.name}`));
   expect(runsFile.name).toBe('axis-x-repeat-and-reverse-runs.csv');
-  const runList: { id: string }[] = await (await page.request.get(`/api/axes/${m.axis.id}/positioning-runs?limit=50`)).json();
-  const runs = await Promise.all(runList.map(async (r) => (await page.request.get(`/api/axes/${m.axis.id}/positioning-runs/${r.id}`)).json()));
+  const runList: { id: string }[] = await (
+    await page.request.get(`/api/axes/${m.axis.id}/positioning-runs?limit=50`)
+  ).json();
+  const runs = await Promise.all(
+    runList.map(async (r) => (await page.request.get(`/api/axes/${m.axis.id}/positioning-runs/${r.id}`)).json()),
+  );
   const R = runs[0].readingUnit;
   expect(runsFile.fields).toContain(`Deviation (${NAMES[R]})`);
   expect(runsFile.rows).toHaveLength(runs.reduce((n, r) => n + r.runs.length * r.targets.length, 0));
@@ -106,18 +121,28 @@ test('bed grids of a machine', async ({ page }) => {
   await signInAs(page, DEMO.owner);
   const m = await demoPlasma(page);
   await page.goto(`/machines/${m.id}?tab=frame`);
-  const file = await download(page, () => page.getByRole('link', { name: 'Download CSV: Bed grids of Big plasma table' }).click());
+  const file = await download(page, () =>
+    page.getByRole('link', { name: 'Download CSV: Bed grids of Big plasma table' }).click(),
+  );
   expect(file.name).toBe('big-plasma-table-bed-grids.csv');
-  const grids: { id: string; readingUnit: string; lengthUnit: string; recordedAt: string; points: { x: number; y: number; z: number }[] }[] = await (await page.request.get(`/api/machines/${m.id}/bed-grids`)).json();
+  const grids: {
+    id: string;
+    readingUnit: string;
+    lengthUnit: string;
+    recordedAt: string;
+    points: { x: number; y: number; z: number }[];
+  }[] = await (await page.request.get(`/api/machines/${m.id}/bed-grids`)).json();
   expect(grids.length).toBeGreaterThan(0);
   expect(file.rows).toHaveLength(grids.reduce((n, g) => n + g.points.length, 0));
   const newest = [...grids].sort((a, b) => b.recordedAt.localeCompare(a.recordedAt))[0];
   const [L, R] = [newest.lengthUnit, newest.readingUnit];
   for (const g of grids) {
-    file.rows.filter((r) => r['Bed grid'] === g.id).forEach((r, i) => {
-      sameSecond(r['Recorded at'], g.recordedAt);
-      close(r[`X (${NAMES[L]})`], (g.points[i].x * MM[g.lengthUnit]) / MM[L]);
-      close(r[`Height (${NAMES[R]})`], (g.points[i].z * MM[g.readingUnit]) / MM[R]);
-    });
+    file.rows
+      .filter((r) => r['Bed grid'] === g.id)
+      .forEach((r, i) => {
+        sameSecond(r['Recorded at'], g.recordedAt);
+        close(r[`X (${NAMES[L]})`], (g.points[i].x * MM[g.lengthUnit]) / MM[L]);
+        close(r[`Height (${NAMES[R]})`], (g.points[i].z * MM[g.readingUnit]) / MM[R]);
+      });
   }
 });

@@ -11,7 +11,9 @@ async function expectNoControls(page: Page) {
   await expect(page.locator('header.MuiAppBar-root')).toBeHidden();
   await expect(page.locator('nav[aria-label="Main"]')).toBeHidden();
   await expect(page.locator('[role="tablist"]:visible')).toHaveCount(0);
-  await expect(page.locator('button:visible, .MuiButton-root:visible, [role="button"]:not(.MuiChip-root):visible')).toHaveCount(0);
+  await expect(
+    page.locator('button:visible, .MuiButton-root:visible, [role="button"]:not(.MuiChip-root):visible'),
+  ).toHaveCount(0);
   await expect(page.locator('input:visible, textarea:visible, select:visible, form:visible')).toHaveCount(0);
   await expect(page.getByText(/^Railwright · .* · printed \d{4}-\d{2}-\d{2} \d{2}:\d{2} UTC by /)).toBeVisible();
 }

@@ -8,7 +8,11 @@ test.describe('rail form', () => {
 
   test('each problem shows under its own field, goes as it is fixed, and a decimal comma is read', async ({ page }) => {
     await signInAs(page, DEMO.builder);
-    await newMachineWithRail(page, `Rail form table ${Date.now()}`, { lengthMm: 600, holePitchMm: 100, firstHoleMm: 50 });
+    await newMachineWithRail(page, `Rail form table ${Date.now()}`, {
+      lengthMm: 600,
+      holePitchMm: 100,
+      firstHoleMm: 50,
+    });
     await page.getByRole('button', { name: 'Edit rail' }).click();
     const edit = page.getByRole('dialog', { name: 'Edit rail Y1 (left)' });
     await expect(edit.getByLabel('Length')).toHaveValue('600');
@@ -31,6 +35,8 @@ test.describe('rail form', () => {
     await expect(edit).toBeHidden();
     await expect(page.getByRole('heading', { name: 'Rail Y1 (left side)' })).toBeVisible();
     await page.getByRole('button', { name: 'Edit rail' }).click();
-    await expect(page.getByRole('dialog', { name: 'Edit rail Y1 (left side)' }).getByLabel('Length')).toHaveValue('700.5');
+    await expect(page.getByRole('dialog', { name: 'Edit rail Y1 (left side)' }).getByLabel('Length')).toHaveValue(
+      '700.5',
+    );
   });
 });

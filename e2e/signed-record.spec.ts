@@ -26,16 +26,29 @@ test.describe('the signed record', () => {
     test.slow();
     const tech = await as(browser, DEMO.technician);
     const owner = await as(browser, DEMO.owner);
-    const created = await tech.request.post('/api/machines', { data: { name: 'Sealed bench router', kind: 'router', workArea: { x: 600, y: 400 } } });
+    const created = await tech.request.post('/api/machines', {
+      data: { name: 'Sealed bench router', kind: 'router', workArea: { x: 600, y: 400 } },
+    });
     expect(created.status()).toBe(201);
     const machineId = (await created.json()).id as string;
     const walk = await (await tech.request.get(`/api/machines/${machineId}/safety-walk`)).json();
     for (const section of walk.sections as { items: { id: string }[] }[]) {
-      for (const item of section.items) expect((await tech.request.put(`/api/machines/${machineId}/safety-walk/items/${item.id}`, { data: { answer: 'yes' } })).status()).toBe(200);
+      for (const item of section.items)
+        expect(
+          (
+            await tech.request.put(`/api/machines/${machineId}/safety-walk/items/${item.id}`, {
+              data: { answer: 'yes' },
+            })
+          ).status(),
+        ).toBe(200);
     }
-    const blocking = (await (await owner.request.get(`/api/machines/${machineId}/readiness`)).json()).blocking as { key: string }[];
+    const blocking = (await (await owner.request.get(`/api/machines/${machineId}/readiness`)).json()).blocking as {
+      key: string;
+    }[];
     for (const c of blocking) {
-      const res = await owner.request.post(`/api/machines/${machineId}/checks/${encodeURIComponent(c.key)}/waiver`, { data: { reason: 'Bench router: checked by hand at assembly.' } });
+      const res = await owner.request.post(`/api/machines/${machineId}/checks/${encodeURIComponent(c.key)}/waiver`, {
+        data: { reason: 'Bench router: checked by hand at assembly.' },
+      });
       expect(res.status()).toBe(201);
     }
     expect((await tech.request.post(`/api/machines/${machineId}/approval-requests`, { data: {} })).status()).toBe(201);
@@ -67,11 +80,19 @@ test.describe('the signed record', () => {
     await snapAtWidths(stranger, 'verify-valid');
 
     // The downloads: the record's signature checks with node:crypto and the published key alone.
-    const [recordDownload] = await Promise.all([stranger.waitForEvent('download'), stranger.getByRole('link', { name: 'Signed record (JSON)' }).click()]);
+    const [recordDownload] = await Promise.all([
+      stranger.waitForEvent('download'),
+      stranger.getByRole('link', { name: 'Signed record (JSON)' }).click(),
+    ]);
     const record = JSON.parse(readFileSync(await recordDownload.path(), 'utf8'));
     const pem = await (await stranger.request.get('/api/public/signing-key')).text();
-    expect(verify(null, Buffer.from(record.content, 'utf8'), createPublicKey(pem), Buffer.from(record.signature, 'base64'))).toBe(true);
-    await expect(stranger.getByRole('link', { name: 'Public key (PEM)' })).toHaveAttribute('href', '/api/public/signing-key');
+    expect(
+      verify(null, Buffer.from(record.content, 'utf8'), createPublicKey(pem), Buffer.from(record.signature, 'base64')),
+    ).toBe(true);
+    await expect(stranger.getByRole('link', { name: 'Public key (PEM)' })).toHaveAttribute(
+      'href',
+      '/api/public/signing-key',
+    );
 
     // The owner reopens with a reason: short reasons are refused before sending.
     await owner.getByRole('button', { name: 'Reopen for changes…' }).click();

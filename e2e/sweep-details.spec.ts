@@ -17,7 +17,9 @@ async function typeReadings(page: Page, readings: string[]) {
 }
 
 test.describe('sweep entry grid and sweep details', () => {
-  test('Enter goes to the next station, Tab skips the remove buttons, a removed station comes back with Undo', async ({ page }) => {
+  test('Enter goes to the next station, Tab skips the remove buttons, a removed station comes back with Undo', async ({
+    page,
+  }) => {
     await signInAs(page, DEMO.builder);
     await newMachineWithRail(page, `Grid table ${Date.now()}`, RAIL);
     const reading = (mm: number) => page.getByLabel(`Reading at ${mm} mm`);
@@ -61,7 +63,9 @@ test.describe('sweep entry grid and sweep details', () => {
     await expect(page.getByRole('button', { name: /Undo removing station/ })).toHaveCount(0);
   });
 
-  test("a sweep's datum and notes are corrected from the history; the history of the machine names the change", async ({ page }) => {
+  test("a sweep's datum and notes are corrected from the history; the history of the machine names the change", async ({
+    page,
+  }) => {
     await signInAs(page, DEMO.builder);
     await newMachineWithRail(page, `Datum table ${Date.now()}`, RAIL);
     await typeReadings(page, ['0', '1', '2', '1', '0.5', '0']);
@@ -94,23 +98,38 @@ test.describe('sweep entry grid and sweep details', () => {
     await expect(history).toContainText('Granite bar across Y1 and Y2');
 
     const after = await (await page.request.get(`/api/sweeps/${listed.id}`)).json();
-    expect(after).toMatchObject({ datum: 'Granite bar across Y1 and Y2', notes: 'Datum named after the sweep', torqueNm: null, boltSize: 'M5' });
+    expect(after).toMatchObject({
+      datum: 'Granite bar across Y1 and Y2',
+      notes: 'Datum named after the sweep',
+      torqueNm: null,
+      boltSize: 'M5',
+    });
     expect(after.stations).toEqual(saved.stations);
     const machineId = saved.machineId as string;
-    const entries = (await (await page.request.get(`/api/machines/${machineId}/history?limit=50`)).json()).entries as { recordType: string; action: string; changes: { before?: object; after?: object } | null }[];
+    const entries = (await (await page.request.get(`/api/machines/${machineId}/history?limit=50`)).json()).entries as {
+      recordType: string;
+      action: string;
+      changes: { before?: object; after?: object } | null;
+    }[];
     const edits = entries.filter((e) => e.recordType === 'rail-sweep' && e.action === 'updated');
     expect(edits).toHaveLength(1);
-    expect(edits[0].changes).toEqual({ before: { datum: null, notes: '' }, after: { datum: 'Granite bar across Y1 and Y2', notes: 'Datum named after the sweep' } });
+    expect(edits[0].changes).toEqual({
+      before: { datum: null, notes: '' },
+      after: { datum: 'Granite bar across Y1 and Y2', notes: 'Datum named after the sweep' },
+    });
   });
 
-  test('a deleted sweep can be brought back with Undo; otherwise the delete is sent a few seconds later', async ({ page }) => {
+  test('a deleted sweep can be brought back with Undo; otherwise the delete is sent a few seconds later', async ({
+    page,
+  }) => {
     await signInAs(page, DEMO.builder);
     await newMachineWithRail(page, `Delete table ${Date.now()}`, RAIL);
     await typeReadings(page, ['0', '1', '2', '1', '0.5', '0']);
     await page.getByRole('button', { name: 'Save sweep' }).click();
     await expect(page.getByRole('region', { name: 'Sweep saved' })).toBeVisible();
     const railId = page.url().split('/rails/')[1].split(/[/?#]/)[0];
-    const count = async () => ((await (await page.request.get(`/api/rails/${railId}/sweeps`)).json()) as unknown[]).length;
+    const count = async () =>
+      ((await (await page.request.get(`/api/rails/${railId}/sweeps`)).json()) as unknown[]).length;
     const history = page.getByRole('region', { name: 'Sweep history' });
     const rows = history.getByRole('table', { name: 'Sweeps' }).locator('tbody tr');
     await expect(rows).toHaveCount(1);

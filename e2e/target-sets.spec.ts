@@ -2,8 +2,13 @@ import { expect, test } from '@playwright/test';
 import { DEMO, signInAs, snap } from './support/session';
 
 test.describe('target sets', () => {
-  for (const [size, viewport] of [['phone', { width: 390, height: 844 }], ['desktop', { width: 1280, height: 900 }]] as const) {
-    test(`an owner makes a set as a copy, is kept from a name already used, and renames it (${size})`, async ({ page }) => {
+  for (const [size, viewport] of [
+    ['phone', { width: 390, height: 844 }],
+    ['desktop', { width: 1280, height: 900 }],
+  ] as const) {
+    test(`an owner makes a set as a copy, is kept from a name already used, and renames it (${size})`, async ({
+      page,
+    }) => {
       await page.setViewportSize(viewport);
       await signInAs(page, DEMO.owner);
       await page.goto('/target-sets');

@@ -45,7 +45,12 @@ async function countCommits(page: Page) {
 
 /** A machine with one 2250 mm rail, holes every 50 mm from 25 mm: 45 stations. */
 const railWith45Stations = (page: Page) =>
-  newMachineWithRail(page, `Typing table ${Date.now()}`, { lengthMm: 2250, holePitchMm: 50, firstHoleMm: 25 }, { x: 3000, y: 2400 });
+  newMachineWithRail(
+    page,
+    `Typing table ${Date.now()}`,
+    { lengthMm: 2250, holePitchMm: 50, firstHoleMm: 25 },
+    { x: 3000, y: 2400 },
+  );
 
 const position = (i: number) => 25 + 50 * i;
 // A gently bowed rail with a little noise: readings in thou.
@@ -55,11 +60,14 @@ async function fillReadings(page: Page) {
   const table = page.getByRole('table', { name: 'Stations and readings' });
   await expect(table.getByRole('row')).toHaveCount(STATIONS + 1);
   for (let i = 0; i < STATIONS; i++) await page.getByLabel(`Reading at ${position(i)} mm`).fill(reading(i));
-  await expect(page.getByRole('figure', { name: 'Live straightness chart' }).locator('.recharts-line-dots circle').first()).toBeVisible();
+  await expect(
+    page.getByRole('figure', { name: 'Live straightness chart' }).locator('.recharts-line-dots circle').first(),
+  ).toBeVisible();
   await expect(page.getByRole('region', { name: 'New sweep' }).getByText(`${STATIONS} readings`)).toBeVisible();
 }
 
-const percentile = (sorted: number[], p: number) => sorted[Math.min(sorted.length - 1, Math.ceil((p / 100) * sorted.length) - 1)];
+const percentile = (sorted: number[], p: number) =>
+  sorted[Math.min(sorted.length - 1, Math.ceil((p / 100) * sorted.length) - 1)];
 
 test.describe('typing on a slow tablet', () => {
   // Forty-five fields are filled one by one, each asking for a fit: slow on a busy shared machine.

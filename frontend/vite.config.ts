@@ -34,7 +34,10 @@ export default defineConfig({
     // Brotli and gzip copies beside each built file, served as they are by the server
     // (@fastify/static preCompressed): the best compression at build, none at request time.
     compression({
-      algorithms: [defineAlgorithm('brotliCompress', { params: { [constants.BROTLI_PARAM_QUALITY]: 11 } }), defineAlgorithm('gzip', { level: 9 })],
+      algorithms: [
+        defineAlgorithm('brotliCompress', { params: { [constants.BROTLI_PARAM_QUALITY]: 11 } }),
+        defineAlgorithm('gzip', { level: 9 }),
+      ],
       // index.html is left plain: it is tiny and its no-cache header is set by its own name.
       include: /\.(js|css|svg|json|txt)$/,
       exclude: /\.vite\//,
@@ -49,5 +52,11 @@ export default defineConfig({
   },
   // The manifest lets the bench count what each page loads (backend/bench/server/frontend-sizes.ts).
   // Every browser the app supports preloads modules itself: no polyfill in the first download.
-  build: { outDir: 'dist', sourcemap: false, manifest: true, chunkSizeWarningLimit: 600, modulePreload: { polyfill: false } },
+  build: {
+    outDir: 'dist',
+    sourcemap: false,
+    manifest: true,
+    chunkSizeWarningLimit: 600,
+    modulePreload: { polyfill: false },
+  },
 });

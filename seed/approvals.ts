@@ -45,6 +45,9 @@ async function approveRouter(ctx: SeedContext, log: Logger): Promise<void> {
     log.warn(`Small router: waived ${c.kind} (${c.subject}), ${c.status}`);
   }
   await approvals.requestApproval(technician, routerId);
-  const signed = await approvals.approve(owner, routerId, { password: DEMO_PASSWORD, statement: board.defaultStatement });
+  const signed = await approvals.approve(owner, routerId, {
+    password: DEMO_PASSWORD,
+    statement: board.defaultStatement,
+  });
   log.log(`Small router approved by ${signed.approvedBy}, record hash ${signed.recordHash.slice(0, 12)}…`);
 }

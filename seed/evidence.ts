@@ -39,7 +39,8 @@ const squaringMarks = () =>
     <circle cx="215" cy="215" r="26" fill="#b3261e"/><circle cx="1385" cy="985" r="26" fill="#b3261e"/>
     <circle cx="1385" cy="215" r="26" fill="#1d4f4a"/><circle cx="215" cy="985" r="26" fill="#1d4f4a"/>`);
 
-const readingsCsv = 'station_mm,reading_thou\n0,0.0\n400,1.5\n800,2.5\n1200,3.5\n1600,4.0\n2000,3.5\n2400,2.5\n2800,1.0\n3200,0.0\n';
+const readingsCsv =
+  'station_mm,reading_thou\n0,0.0\n400,1.5\n800,2.5\n1200,3.5\n1600,4.0\n2000,3.5\n2400,2.5\n2800,1.0\n3200,0.0\n';
 
 export async function seedEvidence(ctx: SeedContext): Promise<void> {
   if (!ctx.machines) throw new Error('seedEvidence needs the machines seeded first');
@@ -49,21 +50,45 @@ export async function seedEvidence(ctx: SeedContext): Promise<void> {
   const { builder, technician } = ctx.demo.people;
   const file = (name: string, body: Buffer | string) => ({ name, stream: Readable.from([Buffer.from(body)]) });
   try {
-    await evidence.attach(builder, { subjectType: 'machine', subjectId: ctx.machines.router, caption: 'Router frame before the gantry went on' }, file('router-frame.jpg', await weldedFrame()));
+    await evidence.attach(
+      builder,
+      { subjectType: 'machine', subjectId: ctx.machines.router, caption: 'Router frame before the gantry went on' },
+      file('router-frame.jpg', await weldedFrame()),
+    );
     // On the router's final Y1 sweep: the approval that follows locks it, so this photo is kept.
     const routerRails = await ctx.app.get(RailsService).list(builder, ctx.machines.router);
     const routerSweep = routerRails.find((r) => r.label.startsWith('Y1'))?.latestSweep;
     if (routerSweep) {
-      await evidence.attach(builder, { subjectType: 'rail-sweep', subjectId: routerSweep.id, caption: 'Indicator set-up for the final Y1 sweep' }, file('router-y1-sweep.jpg', await indicatorOnRail()));
+      await evidence.attach(
+        builder,
+        { subjectType: 'rail-sweep', subjectId: routerSweep.id, caption: 'Indicator set-up for the final Y1 sweep' },
+        file('router-y1-sweep.jpg', await indicatorOnRail()),
+      );
     }
     const plasma = ctx.machines.plasma;
-    await evidence.attach(builder, { subjectType: 'machine', subjectId: plasma, caption: 'Frame welded and levelled on its feet, before the rails' }, file('frame-on-feet.jpg', await weldedFrame()));
-    await evidence.attach(technician, { subjectType: 'machine', subjectId: plasma, caption: 'Tram marks for the diagonals' }, file('squaring-marks.jpg', await squaringMarks()));
+    await evidence.attach(
+      builder,
+      { subjectType: 'machine', subjectId: plasma, caption: 'Frame welded and levelled on its feet, before the rails' },
+      file('frame-on-feet.jpg', await weldedFrame()),
+    );
+    await evidence.attach(
+      technician,
+      { subjectType: 'machine', subjectId: plasma, caption: 'Tram marks for the diagonals' },
+      file('squaring-marks.jpg', await squaringMarks()),
+    );
     const rails = await ctx.app.get(RailsService).list(builder, plasma);
     const y1 = rails.find((r) => r.label.startsWith('Y1'));
     if (y1) {
-      await evidence.attach(builder, { subjectType: 'rail', subjectId: y1.id, caption: 'Dial indicator riding on the Y1 carriage' }, file('y1-indicator.jpg', await indicatorOnRail()));
-      await evidence.attach(builder, { subjectType: 'rail', subjectId: y1.id, caption: 'As-found readings from the notebook' }, file('y1-as-found.csv', readingsCsv));
+      await evidence.attach(
+        builder,
+        { subjectType: 'rail', subjectId: y1.id, caption: 'Dial indicator riding on the Y1 carriage' },
+        file('y1-indicator.jpg', await indicatorOnRail()),
+      );
+      await evidence.attach(
+        builder,
+        { subjectType: 'rail', subjectId: y1.id, caption: 'As-found readings from the notebook' },
+        file('y1-as-found.csv', readingsCsv),
+      );
     }
   } catch (err) {
     // Storage that does not answer (an S3 bucket not made yet) must not stop the demo seed.

@@ -41,7 +41,15 @@ export async function seedFrame(ctx: SeedContext): Promise<void> {
     const d = diagonals(1200, 2000, Math.abs(step.mmPerMetre), 0.05);
     const [diagonal1, diagonal2] = step.mmPerMetre >= 0 ? [d.diagonal1, d.diagonal2] : [d.diagonal2, d.diagonal1];
     const who: SessionUser = i === 0 ? builder : technician;
-    await diag.create(who, plasma, { sideX: 1200, sideY: 2000, diagonal1, diagonal2, gantrySpan: PLASMA.gantrySpanMm, lengthUnit: 'mm', note: step.note });
+    await diag.create(who, plasma, {
+      sideX: 1200,
+      sideY: 2000,
+      diagonal1,
+      diagonal2,
+      gantrySpan: PLASMA.gantrySpanMm,
+      lengthUnit: 'mm',
+      note: step.note,
+    });
   }
   // Five rows along the 3000 mm of Y, three columns across the 1500 mm of X.
   await grids.create(builder, plasma, {
@@ -49,13 +57,17 @@ export async function seedFrame(ctx: SeedContext): Promise<void> {
     readingUnit: 'mm',
     rows: 5,
     columns: 3,
-    points: gridPoints([0, 750, 1500], [0, 750, 1500, 2250, 3000], [
-      [0.1, 0.2, 0.05],
-      [0.25, 0.35, 0.2],
-      [0.3, -0.55, 0.25],
-      [0.2, 0.3, 0.1],
-      [0.05, 0.15, -0.05],
-    ]),
+    points: gridPoints(
+      [0, 750, 1500],
+      [0, 750, 1500, 2250, 3000],
+      [
+        [0.1, 0.2, 0.05],
+        [0.25, 0.35, 0.2],
+        [0.3, -0.55, 0.25],
+        [0.2, 0.3, 0.1],
+        [0.05, 0.15, -0.05],
+      ],
+    ),
     note: 'Torch-height gauge block at each point, slats as delivered; the middle slat sags at the centre.',
   });
   await cuts.create(technician, plasma, {
@@ -63,7 +75,14 @@ export async function seedFrame(ctx: SeedContext): Promise<void> {
     plateThickness: 6,
     nominal: { x: 400, y: 400, circle: 100 },
     // Without kerf compensation the square comes out a kerf small (diagonals √2 kerf short) and the hole a kerf large.
-    measured: { ...shortenBy(diagonals(399.4, 400.05, 0.15, 0.05), Math.SQRT2 * 1.6), x: 399.4 - 1.6, y: 400.05 - 1.6, circleX: 100 + 1.6, circleY: 99.75 + 1.6, kerf: 1.6 },
+    measured: {
+      ...shortenBy(diagonals(399.4, 400.05, 0.15, 0.05), Math.SQRT2 * 1.6),
+      x: 399.4 - 1.6,
+      y: 400.05 - 1.6,
+      circleX: 100 + 1.6,
+      circleY: 99.75 + 1.6,
+      kerf: 1.6,
+    },
     circleKind: 'hole',
     // The axes' own steps per mm (seed/drives.ts): the cut is judged at the values the controller used.
     stepsPerMm: { x: PLASMA.stepsPerMm, y: PLASMA.stepsPerMm },
@@ -71,17 +90,28 @@ export async function seedFrame(ctx: SeedContext): Promise<void> {
   });
 
   const r = diagonals(800, 500, 0.08, 0.01);
-  await diag.create(technician, router, { sideX: 800, sideY: 500, ...r, gantrySpan: 720, lengthUnit: 'mm', note: 'Pen plotted on MDF, read with a steel rule and a loupe.' });
+  await diag.create(technician, router, {
+    sideX: 800,
+    sideY: 500,
+    ...r,
+    gantrySpan: 720,
+    lengthUnit: 'mm',
+    note: 'Pen plotted on MDF, read with a steel rule and a loupe.',
+  });
   await grids.create(builder, router, {
     lengthUnit: 'mm',
     readingUnit: 'mm',
     rows: 3,
     columns: 4,
-    points: gridPoints([0, 300, 600, 900], [0, 300, 600], [
-      [0.02, 0.01, 0.0, -0.01],
-      [0.01, 0.03, 0.02, 0.0],
-      [0.0, 0.01, -0.02, -0.03],
-    ]),
+    points: gridPoints(
+      [0, 300, 600, 900],
+      [0, 300, 600],
+      [
+        [0.02, 0.01, 0.0, -0.01],
+        [0.01, 0.03, 0.02, 0.0],
+        [0.0, 0.01, -0.02, -0.03],
+      ],
+    ),
     note: 'Spoilboard after surfacing with a 40 mm fly cutter; dial indicator in the spindle.',
   });
   await cuts.create(technician, router, {

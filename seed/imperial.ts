@@ -34,8 +34,27 @@ export async function seedImperialRouter(ctx: SeedContext): Promise<string> {
 
   // Gantry on Y1/Y2 over 25.5 in of travel: 30 in rails (travel + a 2.6 in carriage + stops), 40 in apart.
   const rails = ctx.app.get(RailsService);
-  const y1 = await rails.create(builder, m, { label: 'Y1 (left)', axis: 'Y1', lengthUnit: 'in', length: 30, profileSize: 20, holePitch: 2.5, firstHole: 1.25, spacing: 40 });
-  const y2 = await rails.create(builder, m, { label: 'Y2 (right)', axis: 'Y2', lengthUnit: 'in', length: 30, profileSize: 20, holePitch: 2.5, firstHole: 1.25, spacing: 40, partnerRailId: y1.id });
+  const y1 = await rails.create(builder, m, {
+    label: 'Y1 (left)',
+    axis: 'Y1',
+    lengthUnit: 'in',
+    length: 30,
+    profileSize: 20,
+    holePitch: 2.5,
+    firstHole: 1.25,
+    spacing: 40,
+  });
+  const y2 = await rails.create(builder, m, {
+    label: 'Y2 (right)',
+    axis: 'Y2',
+    lengthUnit: 'in',
+    length: 30,
+    profileSize: 20,
+    holePitch: 2.5,
+    firstHole: 1.25,
+    spacing: 40,
+    partnerRailId: y1.id,
+  });
   const sweeps = ctx.app.get(RailSweepsService);
   const stations = Array.from({ length: 11 }, (_, i) => i * 3);
   for (const [k, rail] of [y1, y2].entries()) {
@@ -46,7 +65,10 @@ export async function seedImperialRouter(ctx: SeedContext): Promise<string> {
       readingUnit: 'thou',
       face: 'side',
       phase: 'as-left',
-      stations: stations.map((position) => ({ position, reading: Math.round((bow * Math.sin((Math.PI * position) / 30) + (rand() - 0.5) * 0.4) * 10) / 10 })),
+      stations: stations.map((position) => ({
+        position,
+        reading: Math.round((bow * Math.sin((Math.PI * position) / 30) + (rand() - 0.5) * 0.4) * 10) / 10,
+      })),
       instrument: 'Test indicator, 0.0001 in, on a carriage',
       resolution: 0.1,
       temperatureC: 19,
@@ -61,7 +83,14 @@ export async function seedImperialRouter(ctx: SeedContext): Promise<string> {
   const screw = (name: string, travel: number, length: number) => ({
     name,
     lengthUnit: 'in' as const,
-    drive: { type: 'screw' as const, threadsPerInch: 5, nominalDiameter: 0.625, rootDiameter: 0.5, unsupportedLength: length, mounting: 'fixed-supported' as const },
+    drive: {
+      type: 'screw' as const,
+      threadsPerInch: 5,
+      nominalDiameter: 0.625,
+      rootDiameter: 0.5,
+      unsupportedLength: length,
+      mounting: 'fixed-supported' as const,
+    },
     motorStepsPerRev: 200,
     microsteps: 8,
     stepsPerMm: 314.9606,
@@ -69,11 +98,29 @@ export async function seedImperialRouter(ctx: SeedContext): Promise<string> {
     measuredTravel: travel,
   });
   const x = await axes.create(technician, m, { ...screw('X', 37.5, 42), notes: 'Travel read on a 48 in rule.' });
-  const y = await axes.create(technician, m, { ...screw('Y', 25.5, 30), notes: 'One screw under the table drives both gantry sides through a belt.' });
+  const y = await axes.create(technician, m, {
+    ...screw('Y', 25.5, 30),
+    notes: 'One screw under the table drives both gantry sides through a belt.',
+  });
 
   const trials = ctx.app.get(TravelTrialsService);
-  await trials.create(technician, x.id, { lengthUnit: 'in', moves: [{ commanded: 10, measured: 9.996 }, { commanded: 20, measured: 19.991 }, { commanded: 30, measured: 29.987 }], notes: '48 in steel rule and a magnifier.' });
-  await trials.create(technician, y.id, { lengthUnit: 'in', moves: [{ commanded: 8, measured: 8.002 }, { commanded: 16, measured: 16.003 }, { commanded: 24, measured: 24.005 }] });
+  await trials.create(technician, x.id, {
+    lengthUnit: 'in',
+    moves: [
+      { commanded: 10, measured: 9.996 },
+      { commanded: 20, measured: 19.991 },
+      { commanded: 30, measured: 29.987 },
+    ],
+    notes: '48 in steel rule and a magnifier.',
+  });
+  await trials.create(technician, y.id, {
+    lengthUnit: 'in',
+    moves: [
+      { commanded: 8, measured: 8.002 },
+      { commanded: 16, measured: 16.003 },
+      { commanded: 24, measured: 24.005 },
+    ],
+  });
 
   const runs = ctx.app.get(PositioningRunsService);
   const targets = [0.5, 9.5, 18.5, 27.5, 36.5];
@@ -83,7 +130,10 @@ export async function seedImperialRouter(ctx: SeedContext): Promise<string> {
     lengthUnit: 'in',
     readingUnit: 'thou',
     targets,
-    runs: Array.from({ length: 10 }, (_, r) => ({ direction: r % 2 ? ('down' as const) : ('up' as const), deviations: targets.map((t) => dev(t, r % 2 ? -1 : 1)) })),
+    runs: Array.from({ length: 10 }, (_, r) => ({
+      direction: r % 2 ? ('down' as const) : ('up' as const),
+      deviations: targets.map((t) => dev(t, r % 2 ? -1 : 1)),
+    })),
     notes: 'Test indicator 0.0001 in against a stop block at each target.',
   });
 
@@ -102,8 +152,18 @@ export async function seedImperialRouter(ctx: SeedContext): Promise<string> {
 
   // A 30 × 20 in rectangle marked with a pen, read with a tape to 1/32 in over a 40 in gantry span.
   const gamma = Math.atan(0.15 / 1000);
-  const diag = (a: number, b: number, sign: number) => Math.round(Math.sqrt(a * a + b * b + sign * 2 * a * b * Math.sin(gamma)) * 32) / 32;
-  await ctx.app.get(DiagonalChecksService).create(technician, m, { lengthUnit: 'in', sideX: 30, sideY: 20, diagonal1: diag(30, 20, 1), diagonal2: diag(30, 20, -1), gantrySpan: 40, resolution: 1 / 32, note: 'Pen on a sheet of hardboard; tape read to 1/32 in.' });
+  const diag = (a: number, b: number, sign: number) =>
+    Math.round(Math.sqrt(a * a + b * b + sign * 2 * a * b * Math.sin(gamma)) * 32) / 32;
+  await ctx.app.get(DiagonalChecksService).create(technician, m, {
+    lengthUnit: 'in',
+    sideX: 30,
+    sideY: 20,
+    diagonal1: diag(30, 20, 1),
+    diagonal2: diag(30, 20, -1),
+    gantrySpan: 40,
+    resolution: 1 / 32,
+    note: 'Pen on a sheet of hardboard; tape read to 1/32 in.',
+  });
 
   const heights = [
     [0.0, 1.5, 2.0, 1.0],
@@ -123,7 +183,7 @@ export async function seedImperialRouter(ctx: SeedContext): Promise<string> {
   await ctx.app.get(TestCutsService).create(technician, m, {
     lengthUnit: 'in',
     nominal: { x: 10, y: 10, circle: 3 },
-    measured: { x: 9.996, y: 10.002, diagonal1: 14.1432, diagonal2: 14.1400, circleX: 2.998, circleY: 3.001 },
+    measured: { x: 9.996, y: 10.002, diagonal1: 14.1432, diagonal2: 14.14, circleX: 2.998, circleY: 3.001 },
     circleKind: 'hole',
     stepsPerMm: { x: 314.9606, y: 314.9606 },
     resolution: 0.001,

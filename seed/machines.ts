@@ -12,7 +12,8 @@ export async function seedMachines(ctx: SeedContext): Promise<NonNullable<SeedCo
     name: 'Big plasma table',
     kind: 'plasma',
     workArea: PLASMA.workArea,
-    notes: 'Welded 100 × 100 × 4 box-section frame, 1500 × 3000 mm bed of slats, 20 mm profile rails; the gantry runs the long axis (Y) on racks with a motor each side (Y1, Y2), 1750 mm apart. Being commissioned.',
+    notes:
+      'Welded 100 × 100 × 4 box-section frame, 1500 × 3000 mm bed of slats, 20 mm profile rails; the gantry runs the long axis (Y) on racks with a motor each side (Y1, Y2), 1750 mm apart. Being commissioned.',
   });
   const router = await machines.create(builder, {
     name: 'Small router',

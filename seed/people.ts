@@ -21,8 +21,18 @@ export async function seedPeople(app: INestApplicationContext): Promise<Omit<See
   const [other] = await db.insert(workshops).values({ name: 'Kestrel Yard Makerspace' }).returning();
   const people = {} as Record<Role, SessionUser>;
   for (const p of DEMO_PEOPLE) {
-    const [row] = await db.insert(users).values({ workshopId: demo.id, ...p, passwordHash }).returning();
-    people[p.role] = { id: row.id, email: row.email, name: row.name, role: row.role, workshopId: demo.id, workshopName: demo.name };
+    const [row] = await db
+      .insert(users)
+      .values({ workshopId: demo.id, ...p, passwordHash })
+      .returning();
+    people[p.role] = {
+      id: row.id,
+      email: row.email,
+      name: row.name,
+      role: row.role,
+      workshopId: demo.id,
+      workshopName: demo.name,
+    };
   }
   const [otherOwner] = await db
     .insert(users)
@@ -33,7 +43,14 @@ export async function seedPeople(app: INestApplicationContext): Promise<Omit<See
     other: {
       workshopId: other.id,
       people: {
-        owner: { id: otherOwner.id, email: otherOwner.email, name: otherOwner.name, role: 'owner', workshopId: other.id, workshopName: other.name },
+        owner: {
+          id: otherOwner.id,
+          email: otherOwner.email,
+          name: otherOwner.name,
+          role: 'owner',
+          workshopId: other.id,
+          workshopName: other.name,
+        },
       },
     },
   };

@@ -32,7 +32,11 @@ interface SweepPlan {
 function readings(stationsMm: number[], lengthMm: number, p: SweepPlan, step: number, seed: number) {
   const rand = seededRandom(seed);
   return stationsMm.map((x) => {
-    const raw = (p.offset ?? 0) + p.bow * Math.sin((Math.PI * x) / lengthMm) + p.tilt * (x / lengthMm) + (rand() - 0.5) * 2 * p.scatter;
+    const raw =
+      (p.offset ?? 0) +
+      p.bow * Math.sin((Math.PI * x) / lengthMm) +
+      p.tilt * (x / lengthMm) +
+      (rand() - 0.5) * 2 * p.scatter;
     return Math.round(raw / step) * step;
   });
 }
@@ -81,54 +85,224 @@ export async function seedRails(ctx: SeedContext): Promise<void> {
   // gantry beam carry the torch over 1546 mm of travel: 1800 mm rails, 150 mm apart.
   const dial = { name: 'Dial indicator, 0.0005 in graduation, on a carriage', unit: 'thou' as const, resolution: 0.5 };
   const p = ctx.machines.plasma;
-  const y1 = await rails.create(builder, p, { label: 'Y1 (left)', axis: 'Y1', lengthUnit: 'mm', length: PLASMA.yRailMm, profileSize: 20, holePitch: 60, firstHole: 40, spacing: PLASMA.gantrySpanMm });
-  const y2 = await rails.create(builder, p, { label: 'Y2 (right)', axis: 'Y2', lengthUnit: 'mm', length: PLASMA.yRailMm, profileSize: 20, holePitch: 60, firstHole: 40, spacing: PLASMA.gantrySpanMm, partnerRailId: y1.id });
-  const xf = await rails.create(builder, p, { label: 'X front', axis: 'X', lengthUnit: 'mm', length: PLASMA.xRailMm, profileSize: 20, holePitch: 60, firstHole: 30, spacing: 150 });
-  const xr = await rails.create(builder, p, { label: 'X rear', axis: 'X', lengthUnit: 'mm', length: PLASMA.xRailMm, profileSize: 20, holePitch: 60, firstHole: 30, spacing: 150, partnerRailId: xf.id });
+  const y1 = await rails.create(builder, p, {
+    label: 'Y1 (left)',
+    axis: 'Y1',
+    lengthUnit: 'mm',
+    length: PLASMA.yRailMm,
+    profileSize: 20,
+    holePitch: 60,
+    firstHole: 40,
+    spacing: PLASMA.gantrySpanMm,
+  });
+  const y2 = await rails.create(builder, p, {
+    label: 'Y2 (right)',
+    axis: 'Y2',
+    lengthUnit: 'mm',
+    length: PLASMA.yRailMm,
+    profileSize: 20,
+    holePitch: 60,
+    firstHole: 40,
+    spacing: PLASMA.gantrySpanMm,
+    partnerRailId: y1.id,
+  });
+  const xf = await rails.create(builder, p, {
+    label: 'X front',
+    axis: 'X',
+    lengthUnit: 'mm',
+    length: PLASMA.xRailMm,
+    profileSize: 20,
+    holePitch: 60,
+    firstHole: 30,
+    spacing: 150,
+  });
+  const xr = await rails.create(builder, p, {
+    label: 'X rear',
+    axis: 'X',
+    lengthUnit: 'mm',
+    length: PLASMA.xRailMm,
+    profileSize: 20,
+    holePitch: 60,
+    firstHole: 30,
+    spacing: 150,
+    partnerRailId: xf.id,
+  });
   const wire = 'Taut wire along the long side';
   const beam = 'Straightedge on the gantry beam';
   const m5 = { boltSize: 'M5', torqueNm: 8.8 };
-  await sweepRail(ctx, builder, y1.id, PLASMA.yRailMm, 200, dial, [
-    { daysAgo: 12, phase: 'as-found', bow: 9, tilt: 4, scatter: 0.6, notes: 'Bolts snug only; rail laid on the welded seat.' },
-    { daysAgo: 9, phase: 'as-found', bow: 4, tilt: 1.5, scatter: 0.5, notes: 'After shimming the middle seats.' },
-    { daysAgo: 6, phase: 'as-left', bow: 1, tilt: 0.5, scatter: 0.4, datum: wire, ...m5, notes: 'All bolts torqued, centre outwards.' },
-  ], 1);
-  await sweepRail(ctx, builder, y2.id, PLASMA.yRailMm, 200, dial, [
-    { daysAgo: 12, phase: 'as-found', bow: -11, tilt: 3, scatter: 0.6, notes: 'Bolts snug only.' },
-    { daysAgo: 8, phase: 'as-found', bow: -6, tilt: 2, scatter: 0.5 },
-    { daysAgo: 5, phase: 'as-left', bow: -3.5, tilt: 1, offset: 3, scatter: 0.4, datum: wire, ...m5, notes: 'Still a dip in the middle; the seat needs another epoxy pour.' },
-  ], 2);
-  await sweepRail(ctx, technician, xf.id, PLASMA.xRailMm, 150, dial, [
-    { daysAgo: 7, phase: 'as-found', bow: 6, tilt: 2, scatter: 0.5 },
-    { daysAgo: 4, phase: 'as-left', bow: 0.8, tilt: 0.5, scatter: 0.3, datum: beam, ...m5 },
-  ], 3);
-  await sweepRail(ctx, technician, xr.id, PLASMA.xRailMm, 150, dial, [
-    { daysAgo: 7, phase: 'as-found', bow: 7, tilt: -2, scatter: 0.5 },
-    { daysAgo: 4, phase: 'as-left', bow: 1.2, tilt: 0.3, offset: 1, scatter: 0.3, datum: beam, ...m5 },
-  ], 4);
+  await sweepRail(
+    ctx,
+    builder,
+    y1.id,
+    PLASMA.yRailMm,
+    200,
+    dial,
+    [
+      {
+        daysAgo: 12,
+        phase: 'as-found',
+        bow: 9,
+        tilt: 4,
+        scatter: 0.6,
+        notes: 'Bolts snug only; rail laid on the welded seat.',
+      },
+      { daysAgo: 9, phase: 'as-found', bow: 4, tilt: 1.5, scatter: 0.5, notes: 'After shimming the middle seats.' },
+      {
+        daysAgo: 6,
+        phase: 'as-left',
+        bow: 1,
+        tilt: 0.5,
+        scatter: 0.4,
+        datum: wire,
+        ...m5,
+        notes: 'All bolts torqued, centre outwards.',
+      },
+    ],
+    1,
+  );
+  await sweepRail(
+    ctx,
+    builder,
+    y2.id,
+    PLASMA.yRailMm,
+    200,
+    dial,
+    [
+      { daysAgo: 12, phase: 'as-found', bow: -11, tilt: 3, scatter: 0.6, notes: 'Bolts snug only.' },
+      { daysAgo: 8, phase: 'as-found', bow: -6, tilt: 2, scatter: 0.5 },
+      {
+        daysAgo: 5,
+        phase: 'as-left',
+        bow: -3.5,
+        tilt: 1,
+        offset: 3,
+        scatter: 0.4,
+        datum: wire,
+        ...m5,
+        notes: 'Still a dip in the middle; the seat needs another epoxy pour.',
+      },
+    ],
+    2,
+  );
+  await sweepRail(
+    ctx,
+    technician,
+    xf.id,
+    PLASMA.xRailMm,
+    150,
+    dial,
+    [
+      { daysAgo: 7, phase: 'as-found', bow: 6, tilt: 2, scatter: 0.5 },
+      { daysAgo: 4, phase: 'as-left', bow: 0.8, tilt: 0.5, scatter: 0.3, datum: beam, ...m5 },
+    ],
+    3,
+  );
+  await sweepRail(
+    ctx,
+    technician,
+    xr.id,
+    PLASMA.xRailMm,
+    150,
+    dial,
+    [
+      { daysAgo: 7, phase: 'as-found', bow: 7, tilt: -2, scatter: 0.5 },
+      { daysAgo: 4, phase: 'as-left', bow: 1.2, tilt: 0.3, offset: 1, scatter: 0.3, datum: beam, ...m5 },
+    ],
+    4,
+  );
 
   // Router: 15 mm rails, M4 bolts; readings in µm on a digital indicator reading 0.001 mm.
   const digital = { name: 'Digital indicator, 0.001 mm, on a carriage', unit: 'um' as const, resolution: 1 };
   const r = ctx.machines.router;
-  const ry1 = await rails.create(builder, r, { label: 'Y1 (left)', axis: 'Y1', lengthUnit: 'mm', length: 1100, profileSize: 15, holePitch: 60, firstHole: 40, spacing: 1000 });
-  const ry2 = await rails.create(builder, r, { label: 'Y2 (right)', axis: 'Y2', lengthUnit: 'mm', length: 1100, profileSize: 15, holePitch: 60, firstHole: 40, spacing: 1000, partnerRailId: ry1.id });
-  const rxt = await rails.create(builder, r, { label: 'X upper', axis: 'X', lengthUnit: 'mm', length: 800, profileSize: 15, holePitch: 60, firstHole: 40, spacing: 120 });
-  const rxb = await rails.create(builder, r, { label: 'X lower', axis: 'X', lengthUnit: 'mm', length: 800, profileSize: 15, holePitch: 60, firstHole: 40, spacing: 120, partnerRailId: rxt.id });
+  const ry1 = await rails.create(builder, r, {
+    label: 'Y1 (left)',
+    axis: 'Y1',
+    lengthUnit: 'mm',
+    length: 1100,
+    profileSize: 15,
+    holePitch: 60,
+    firstHole: 40,
+    spacing: 1000,
+  });
+  const ry2 = await rails.create(builder, r, {
+    label: 'Y2 (right)',
+    axis: 'Y2',
+    lengthUnit: 'mm',
+    length: 1100,
+    profileSize: 15,
+    holePitch: 60,
+    firstHole: 40,
+    spacing: 1000,
+    partnerRailId: ry1.id,
+  });
+  const rxt = await rails.create(builder, r, {
+    label: 'X upper',
+    axis: 'X',
+    lengthUnit: 'mm',
+    length: 800,
+    profileSize: 15,
+    holePitch: 60,
+    firstHole: 40,
+    spacing: 120,
+  });
+  const rxb = await rails.create(builder, r, {
+    label: 'X lower',
+    axis: 'X',
+    lengthUnit: 'mm',
+    length: 800,
+    profileSize: 15,
+    holePitch: 60,
+    firstHole: 40,
+    spacing: 120,
+    partnerRailId: rxt.id,
+  });
   const bar = 'Ground datum bar on the base';
   const gantryBar = 'Ground datum bar on the gantry plate';
   const m4 = { boltSize: 'M4', torqueNm: 4.1 };
-  await sweepRail(ctx, builder, ry1.id, 1100, 100, digital, [
-    { daysAgo: 48, phase: 'as-found', bow: 28, tilt: 10, scatter: 2 },
-    { daysAgo: 45, phase: 'as-left', bow: 5, tilt: 3, scatter: 1.5, datum: bar, ...m4 },
-  ], 5);
-  await sweepRail(ctx, builder, ry2.id, 1100, 100, digital, [
-    { daysAgo: 48, phase: 'as-found', bow: -22, tilt: 6, scatter: 2 },
-    { daysAgo: 45, phase: 'as-left', bow: 4, tilt: 2, offset: 18, scatter: 1.5, datum: bar, ...m4 },
-  ], 6);
-  await sweepRail(ctx, builder, rxt.id, 800, 100, digital, [
-    { daysAgo: 44, phase: 'as-left', bow: 4, tilt: 2, scatter: 1.5, datum: gantryBar, ...m4 },
-  ], 7);
-  await sweepRail(ctx, builder, rxb.id, 800, 100, digital, [
-    { daysAgo: 44, phase: 'as-left', bow: 3, tilt: 1, offset: -9, scatter: 1.5, datum: gantryBar, ...m4 },
-  ], 8);
+  await sweepRail(
+    ctx,
+    builder,
+    ry1.id,
+    1100,
+    100,
+    digital,
+    [
+      { daysAgo: 48, phase: 'as-found', bow: 28, tilt: 10, scatter: 2 },
+      { daysAgo: 45, phase: 'as-left', bow: 5, tilt: 3, scatter: 1.5, datum: bar, ...m4 },
+    ],
+    5,
+  );
+  await sweepRail(
+    ctx,
+    builder,
+    ry2.id,
+    1100,
+    100,
+    digital,
+    [
+      { daysAgo: 48, phase: 'as-found', bow: -22, tilt: 6, scatter: 2 },
+      { daysAgo: 45, phase: 'as-left', bow: 4, tilt: 2, offset: 18, scatter: 1.5, datum: bar, ...m4 },
+    ],
+    6,
+  );
+  await sweepRail(
+    ctx,
+    builder,
+    rxt.id,
+    800,
+    100,
+    digital,
+    [{ daysAgo: 44, phase: 'as-left', bow: 4, tilt: 2, scatter: 1.5, datum: gantryBar, ...m4 }],
+    7,
+  );
+  await sweepRail(
+    ctx,
+    builder,
+    rxb.id,
+    800,
+    100,
+    digital,
+    [{ daysAgo: 44, phase: 'as-left', bow: 3, tilt: 1, offset: -9, scatter: 1.5, datum: gantryBar, ...m4 }],
+    8,
+  );
 }

@@ -11,7 +11,10 @@ export async function seedSafety(ctx: SeedContext): Promise<void> {
   const { owner, technician } = ctx.demo.people;
   const { plasma, router } = ctx.machines!;
   const safety = ctx.app.get(SafetyService);
-  const own = await safety.addItem(owner, { section: 'cutting', text: 'The slag tray is emptied and nothing is stored under the table.' });
+  const own = await safety.addItem(owner, {
+    section: 'cutting',
+    text: 'The slag tray is emptied and nothing is stored under the table.',
+  });
 
   const plasmaAnswers: [string, 'yes' | 'no' | 'na', string?][] = [
     ['stop-estop-motion', 'yes', 'Both Y motors and X stop together; tested at three gantry positions.'],
@@ -19,13 +22,20 @@ export async function seedSafety(ctx: SeedContext): Promise<void> {
     ['stop-limits', 'yes'],
     ['stop-home', 'yes', 'Y1 and Y2 home within one step of each other, five runs.'],
     ['elec-strain-relief', 'yes'],
-    ['cut-fumes', 'no', 'Down-draft fan fitted but not yet ducted outside; do not cut galvanised or stainless until it is.'],
+    [
+      'cut-fumes',
+      'no',
+      'Down-draft fan fitted but not yet ducted outside; do not cut galvanised or stainless until it is.',
+    ],
     ['cut-water', 'na', 'Down-draft table, no water.'],
   ];
   for (const [item, answer, note] of plasmaAnswers) await safety.answer(technician, plasma, item, { answer, note });
 
   const notApplicable = new Set(['elec-plasma-leads', 'cut-water']);
   for (const item of [...BUILT_IN_ITEMS.map((i) => i.id), own.id]) {
-    await safety.answer(technician, router, item, { answer: notApplicable.has(item) ? 'na' : 'yes', note: item === 'cut-fumes' ? 'Dust extraction on the spindle shoe.' : undefined });
+    await safety.answer(technician, router, item, {
+      answer: notApplicable.has(item) ? 'na' : 'yes',
+      note: item === 'cut-fumes' ? 'Dust extraction on the spindle shoe.' : undefined,
+    });
   }
 }

@@ -40,12 +40,27 @@ export function engineTimings(): BenchRow[] {
       const j = Math.floor(rand() * (i + 1));
       [order[i], order[j]] = [order[j], order[i]];
     }
-    const shuffled = { positionsMm: order.map((i) => sweep.positionsMm[i]), readingsMm: order.map((i) => sweep.readingsMm[i]) };
+    const shuffled = {
+      positionsMm: order.map((i) => sweep.positionsMm[i]),
+      readingsMm: order.map((i) => sweep.readingsMm[i]),
+    };
     const runs = n >= 1_000_000 ? 3 : 9;
     const label = n.toLocaleString('en-US');
-    rows.push({ name: `Engine: least squares, ${label} stations`, value: ms(time(runs, () => leastSquaresStraightness(sweep, { maxPoints: Infinity }))), unit: 'ms' });
-    rows.push({ name: `Engine: minimum zone, ${label} stations`, value: ms(time(runs, () => minimumZoneStraightness(sweep, { maxPoints: Infinity }))), unit: 'ms' });
-    rows.push({ name: `Engine: minimum zone, ${label} stations shuffled`, value: ms(time(runs, () => minimumZoneStraightness(shuffled, { maxPoints: Infinity }))), unit: 'ms' });
+    rows.push({
+      name: `Engine: least squares, ${label} stations`,
+      value: ms(time(runs, () => leastSquaresStraightness(sweep, { maxPoints: Infinity }))),
+      unit: 'ms',
+    });
+    rows.push({
+      name: `Engine: minimum zone, ${label} stations`,
+      value: ms(time(runs, () => minimumZoneStraightness(sweep, { maxPoints: Infinity }))),
+      unit: 'ms',
+    });
+    rows.push({
+      name: `Engine: minimum zone, ${label} stations shuffled`,
+      value: ms(time(runs, () => minimumZoneStraightness(shuffled, { maxPoints: Infinity }))),
+      unit: 'ms',
+    });
   }
   const rand = seededRandom(3);
   const targetsMm = Array.from({ length: 20 }, (_, i) => i * 97 + Math.round(rand() * 20));
@@ -56,6 +71,10 @@ export function engineTimings(): BenchRow[] {
       deviationsMm: targetsMm.map((t) => 1e-5 * t + (k < 5 ? 0.004 : -0.004) + (rand() - 0.5) * 0.006),
     });
   }
-  rows.push({ name: 'Engine: ISO 230-2, 20 targets × 5 runs × 2 directions', value: ms(time(200, () => evaluatePositioning({ targetsMm, runs: positioningRuns }))), unit: 'ms' });
+  rows.push({
+    name: 'Engine: ISO 230-2, 20 targets × 5 runs × 2 directions',
+    value: ms(time(200, () => evaluatePositioning({ targetsMm, runs: positioningRuns }))),
+    unit: 'ms',
+  });
   return rows;
 }

@@ -14,7 +14,11 @@ import { writeScenarios } from './server/scenarios-writes.js';
  * Without BENCH_PRODUCT_URL only the engine is timed.
  */
 
-async function optional<T>(file: string, name: string, call: (fn: (...a: never[]) => Promise<T>) => Promise<T>): Promise<T | null> {
+async function optional<T>(
+  file: string,
+  name: string,
+  call: (fn: (...a: never[]) => Promise<T>) => Promise<T>,
+): Promise<T | null> {
   const path = fileURLToPath(new URL(file, import.meta.url));
   if (!existsSync(path)) return null;
   try {
@@ -32,17 +36,25 @@ const started = Date.now();
 const productUrl = process.env.BENCH_PRODUCT_URL;
 if (productUrl) {
   const ctx = await seedBenchWorkshop(productUrl, process.env.BENCH_BARE_URL!, process.env.BENCH_OWNER_DATABASE_URL!);
-  const reads = await optional<BenchRow[]>('./server/scenarios-reads.js', 'readScenarios', (fn) => (fn as unknown as (c: BenchContext) => Promise<BenchRow[]>)(ctx));
+  const reads = await optional<BenchRow[]>('./server/scenarios-reads.js', 'readScenarios', (fn) =>
+    (fn as unknown as (c: BenchContext) => Promise<BenchRow[]>)(ctx),
+  );
   if (reads) rows.push(...reads);
   else console.error('bench: no read scenarios (bench/server/scenarios-reads.ts) in this build');
   rows.push(...(await writeScenarios(ctx)));
 }
-const sizes = await optional<BenchRow[]>('./server/frontend-sizes.js', 'frontendSizes', (fn) => (fn as unknown as () => Promise<BenchRow[]>)());
+const sizes = await optional<BenchRow[]>('./server/frontend-sizes.js', 'frontendSizes', (fn) =>
+  (fn as unknown as () => Promise<BenchRow[]>)(),
+);
 if (sizes) rows.push(...sizes);
 rows.push(...engineTimings());
 
 const cpu = os.cpus()[0]?.model.trim() ?? 'unknown CPU';
-console.log(`\nRailwright bench, ${new Date().toISOString().slice(0, 10)}, ${os.cpus().length} × ${cpu}, Node ${process.version}, ${Math.round((Date.now() - started) / 1000)} s\n`);
+console.log(
+  `\nRailwright bench, ${new Date().toISOString().slice(0, 10)}, ${os.cpus().length} × ${cpu}, Node ${process.version}, ${Math.round((Date.now() - started) / 1000)} s\n`,
+);
 console.log(benchTable(rows));
 const missed = rows.filter((r) => r.met === false);
-console.log(`\n${rows.filter((r) => r.met).length} goals met, ${missed.length} missed${missed.length ? `: ${missed.map((r) => r.name).join('; ')}` : ''}`);
+console.log(
+  `\n${rows.filter((r) => r.met).length} goals met, ${missed.length} missed${missed.length ? `: ${missed.map((r) => r.name).join('; ')}` : ''}`,
+);

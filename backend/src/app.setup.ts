@@ -71,9 +71,13 @@ export async function configureApp(app: NestFastifyApplication, config: AppConfi
   // are served precompressed by @fastify/static; whatever already carries an encoding is left alone.
   // Stored photos and files go out byte for byte, with their length: photos do not shrink, and
   // a download's checksum stays checkable. (Set before compression registers, which reads it.)
-  app.getHttpAdapter().getInstance().addHook('onRoute', (route) => {
-    if (/^\/api\/evidence\/:[^/]+\/(content|thumbnail)$/.test(route.url)) (route as { compress?: boolean }).compress = false;
-  });
+  app
+    .getHttpAdapter()
+    .getInstance()
+    .addHook('onRoute', (route) => {
+      if (/^\/api\/evidence\/:[^/]+\/(content|thumbnail)$/.test(route.url))
+        (route as { compress?: boolean }).compress = false;
+    });
   await app.register(fastifyCompress as never, {
     global: true,
     threshold: COMPRESS_ABOVE_BYTES,
@@ -101,7 +105,9 @@ export async function configureApp(app: NestFastifyApplication, config: AppConfi
   absoluteSessionLifetime(fastify, SESSION_ABSOLUTE_DAYS * 24 * 3600 * 1000);
   refreshSessionsPeriodically(fastify, SESSION_REFRESH_HOURS * 3600 * 1000);
   // Evidence uploads: one file a request, streamed; the size limit comes from EVIDENCE_MAX_BYTES.
-  await app.register(fastifyMultipart as never, { limits: { fileSize: loadEvidenceConfig().maxBytes, files: 1, fields: 10, fieldSize: 4096, parts: 12 } });
+  await app.register(fastifyMultipart as never, {
+    limits: { fileSize: loadEvidenceConfig().maxBytes, files: 1, fields: 10, fieldSize: 4096, parts: 12 },
+  });
   app.useGlobalPipes(
     new AppValidationPipe({ whitelist: true, forbidNonWhitelisted: true, transform: true, stopAtFirstError: false }),
   );

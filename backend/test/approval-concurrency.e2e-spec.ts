@@ -2,7 +2,14 @@ import type { NestFastifyApplication } from '@nestjs/platform-fastify';
 import { and, eq, isNull } from 'drizzle-orm';
 import { DRIZZLE, type Database } from '../src/database/database.tokens.js';
 import { approvalRequests, approvals } from '../src/database/schema/index.js';
-import { createTestApp, createTestWorkshop, signIn, TEST_PASSWORD, type Agent, type TestWorkshop } from './helpers/test-app.js';
+import {
+  createTestApp,
+  createTestWorkshop,
+  signIn,
+  TEST_PASSWORD,
+  type Agent,
+  type TestWorkshop,
+} from './helpers/test-app.js';
 import { board, newMachine, STATEMENT, waiveAllBut } from './support/approval-flow.js';
 
 /**
@@ -18,13 +25,28 @@ describe('one request, one signature, under parallel requests and two instances'
   beforeAll(async () => {
     [one, two] = await Promise.all([createTestApp(), createTestApp()]);
     ws = await createTestWorkshop(one, 'Parallel');
-    onTwo = { owner: await signIn(two, ws.emails.owner, TEST_PASSWORD), technician: await signIn(two, ws.emails.technician, TEST_PASSWORD) };
+    onTwo = {
+      owner: await signIn(two, ws.emails.owner, TEST_PASSWORD),
+      technician: await signIn(two, ws.emails.technician, TEST_PASSWORD),
+    };
   });
   afterAll(() => Promise.all([one.close(), two.close()]));
 
   const db = () => one.get<Database>(DRIZZLE);
-  const openRequests = async (machineId: string) => (await db().select().from(approvalRequests).where(and(eq(approvalRequests.machineId, machineId), eq(approvalRequests.status, 'open')))).length;
-  const standing = async (machineId: string) => (await db().select().from(approvals).where(and(eq(approvals.machineId, machineId), isNull(approvals.endedAt)))).length;
+  const openRequests = async (machineId: string) =>
+    (
+      await db()
+        .select()
+        .from(approvalRequests)
+        .where(and(eq(approvalRequests.machineId, machineId), eq(approvalRequests.status, 'open')))
+    ).length;
+  const standing = async (machineId: string) =>
+    (
+      await db()
+        .select()
+        .from(approvals)
+        .where(and(eq(approvals.machineId, machineId), isNull(approvals.endedAt)))
+    ).length;
   const statuses = (results: { status: number }[]) => results.map((r) => r.status).sort();
 
   async function readyMachine(name: string) {
@@ -35,7 +57,8 @@ describe('one request, one signature, under parallel requests and two instances'
 
   it('8 simultaneous requests for approval over two instances open exactly one', async () => {
     const machineId = await readyMachine('Parallel request router');
-    const send = (i: number) => (i % 2 ? onTwo.technician : ws.as.technician).post(`/api/machines/${machineId}/approval-requests`).send({});
+    const send = (i: number) =>
+      (i % 2 ? onTwo.technician : ws.as.technician).post(`/api/machines/${machineId}/approval-requests`).send({});
     const results = await Promise.all(Array.from({ length: 8 }, (_, i) => send(i)));
     expect(statuses(results)).toEqual([201, 409, 409, 409, 409, 409, 409, 409]);
     expect(await openRequests(machineId)).toBe(1);
@@ -45,7 +68,10 @@ describe('one request, one signature, under parallel requests and two instances'
   it('8 simultaneous approvals over two instances store exactly one signature', async () => {
     const machineId = await readyMachine('Parallel approval router');
     expect((await ws.as.technician.post(`/api/machines/${machineId}/approval-requests`).send({})).status).toBe(201);
-    const send = (i: number) => (i % 2 ? onTwo.owner : ws.as.owner).post(`/api/machines/${machineId}/approvals`).send({ password: TEST_PASSWORD, statement: STATEMENT });
+    const send = (i: number) =>
+      (i % 2 ? onTwo.owner : ws.as.owner)
+        .post(`/api/machines/${machineId}/approvals`)
+        .send({ password: TEST_PASSWORD, statement: STATEMENT });
     const results = await Promise.all(Array.from({ length: 8 }, (_, i) => send(i)));
     expect(statuses(results)).toEqual([201, 409, 409, 409, 409, 409, 409, 409]);
     expect(await standing(machineId)).toBe(1);
@@ -56,8 +82,17 @@ describe('one request, one signature, under parallel requests and two instances'
   it('a double reopen ends the approval once; the machine is reopened, not being built', async () => {
     const machineId = await readyMachine('Parallel reopen router');
     expect((await ws.as.technician.post(`/api/machines/${machineId}/approval-requests`).send({})).status).toBe(201);
-    expect((await ws.as.owner.post(`/api/machines/${machineId}/approvals`).send({ password: TEST_PASSWORD, statement: STATEMENT })).status).toBe(201);
-    const send = (i: number) => (i % 2 ? onTwo.owner : ws.as.owner).post(`/api/machines/${machineId}/reopen`).send({ reason: 'Gantry crashed into the end stop' });
+    expect(
+      (
+        await ws.as.owner
+          .post(`/api/machines/${machineId}/approvals`)
+          .send({ password: TEST_PASSWORD, statement: STATEMENT })
+      ).status,
+    ).toBe(201);
+    const send = (i: number) =>
+      (i % 2 ? onTwo.owner : ws.as.owner)
+        .post(`/api/machines/${machineId}/reopen`)
+        .send({ reason: 'Gantry crashed into the end stop' });
     const results = await Promise.all(Array.from({ length: 4 }, (_, i) => send(i)));
     expect(statuses(results)).toEqual([201, 409, 409, 409]);
     expect(await standing(machineId)).toBe(0);
@@ -66,8 +101,15 @@ describe('one request, one signature, under parallel requests and two instances'
 
   it('the database itself refuses a second open request and a second standing approval', async () => {
     const machineId = await readyMachine('Constraint router');
-    const values = { workshopId: ws.id, machineId, requestedById: ws.userIds.technician, requestedByName: 'technician' };
+    const values = {
+      workshopId: ws.id,
+      machineId,
+      requestedById: ws.userIds.technician,
+      requestedByName: 'technician',
+    };
     await db().insert(approvalRequests).values(values);
-    await expect(db().insert(approvalRequests).values(values)).rejects.toMatchObject({ cause: { code: '23505', constraint: 'approval_requests_one_open' } });
+    await expect(db().insert(approvalRequests).values(values)).rejects.toMatchObject({
+      cause: { code: '23505', constraint: 'approval_requests_one_open' },
+    });
   });
 });

@@ -61,7 +61,16 @@ describe('readiness board, waivers, approval and certificate', () => {
       const b = await board(ws, machineId);
       expect(b.state).toBe('being-built');
       const y1 = b.checks.find((c) => c.key === 'fake-straightness:Y1');
-      expect(y1).toMatchObject({ kind: 'rail-straightness', subject: 'Rail Y1 (left)', status: 'within-target', target: { value: 20, unit: 'um' }, result: { value: 12.5, unit: 'µm' }, place: { machineId, tab: 'rails' }, recordType: 'test-cut', waiver: null });
+      expect(y1).toMatchObject({
+        kind: 'rail-straightness',
+        subject: 'Rail Y1 (left)',
+        status: 'within-target',
+        target: { value: 20, unit: 'um' },
+        result: { value: 12.5, unit: 'µm' },
+        place: { machineId, tab: 'rails' },
+        recordType: 'test-cut',
+        waiver: null,
+      });
       expect(b.blocking.some((c) => isFake(c.key))).toBe(false);
       expect(b.defaultStatement).toMatch(/ready to cut/);
     });
@@ -78,7 +87,9 @@ describe('readiness board, waivers, approval and certificate', () => {
       expect((await ws.as.viewer.post(`/api/machines/${machineId}/approval-requests`).send({})).status).toBe(403);
       const res = await ws.as.technician.post(`/api/machines/${machineId}/approval-requests`).send({});
       expect(res.status).toBe(409);
-      expect(res.body.blocking).toEqual(expect.arrayContaining([expect.objectContaining({ key: 'fake-positioning:X', status: 'outside-target' })]));
+      expect(res.body.blocking).toEqual(
+        expect.arrayContaining([expect.objectContaining({ key: 'fake-positioning:X', status: 'outside-target' })]),
+      );
       expect(res.body.message).toMatch(/Repeat-and-reverse run \(Axis X\)/);
       expect((await board(ws, machineId)).state).toBe('being-built');
     });
@@ -91,28 +102,43 @@ describe('readiness board, waivers, approval and certificate', () => {
       expect(short.status).toBe(400);
       expect(JSON.stringify(short.body.message)).toMatch(/reason/);
       expect((await ws.as.owner.post(url).send({})).status).toBe(400);
-      const unknown = await ws.as.owner.post(`/api/machines/${machineId}/checks/no-such-check/waiver`).send({ reason: 'A reason long enough.' });
+      const unknown = await ws.as.owner
+        .post(`/api/machines/${machineId}/checks/no-such-check/waiver`)
+        .send({ reason: 'A reason long enough.' });
       expect(unknown.status).toBe(400);
       expect(JSON.stringify(unknown.body.message)).toMatch(/checkId/);
-      const within = await ws.as.owner.post(`/api/machines/${machineId}/checks/${encodeURIComponent('fake-straightness:Y1')}/waiver`).send({ reason: 'A reason long enough.' });
+      const within = await ws.as.owner
+        .post(`/api/machines/${machineId}/checks/${encodeURIComponent('fake-straightness:Y1')}/waiver`)
+        .send({ reason: 'A reason long enough.' });
       expect(within.status).toBe(409);
       expect((await other.as.owner.post(url).send({ reason: 'Good enough for sheet work.' })).status).toBe(404);
     });
 
     it('shows a waived check as waived with the reason, who and when; a new record of it needs a new waiver', async () => {
       const url = `/api/machines/${machineId}/checks/${encodeURIComponent('fake-positioning:X')}/waiver`;
-      const res = await ws.as.owner.post(url).send({ reason: '  Rack drive: 0.22 mm is fine for sheet work until the new pinion arrives.  ' });
+      const res = await ws.as.owner
+        .post(url)
+        .send({ reason: '  Rack drive: 0.22 mm is fine for sheet work until the new pinion arrives.  ' });
       expect(res.status).toBe(201);
       let x = (await board(ws, machineId)).checks.find((c) => c.key === 'fake-positioning:X')!;
       expect(x.status).toBe('waived');
-      expect(x.waiver).toEqual({ id: expect.any(String), reason: 'Rack drive: 0.22 mm is fine for sheet work until the new pinion arrives.', by: expect.stringContaining('owner'), at: expect.any(String) });
+      expect(x.waiver).toEqual({
+        id: expect.any(String),
+        reason: 'Rack drive: 0.22 mm is fine for sheet work until the new pinion arrives.',
+        by: expect.stringContaining('owner'),
+        at: expect.any(String),
+      });
       expect((await ws.as.owner.post(url).send({ reason: 'Waiving the same record twice.' })).status).toBe(409);
       fake.record(machineId, 'fake-positioning:X', 0.25, 'outside-target');
       x = (await board(ws, machineId)).checks.find((c) => c.key === 'fake-positioning:X')!;
       expect(x.status).toBe('outside-target');
       expect(x.waiver).toBeNull();
       const history = await ws.as.viewer.get(`/api/machines/${machineId}/history?limit=200`);
-      expect(history.body.entries.find((e: { recordType: string }) => e.recordType === 'waiver')).toMatchObject({ action: 'created', summary: expect.stringContaining('0.22 mm is fine'), actor: expect.stringContaining('owner') });
+      expect(history.body.entries.find((e: { recordType: string }) => e.recordType === 'waiver')).toMatchObject({
+        action: 'created',
+        summary: expect.stringContaining('0.22 mm is fine'),
+        actor: expect.stringContaining('owner'),
+      });
     });
   });
 
@@ -127,26 +153,49 @@ describe('readiness board, waivers, approval and certificate', () => {
     });
 
     it('refuses approval before a request (409), and anyone but an owner (403)', async () => {
-      expect((await ws.as.owner.post(`/api/machines/${machineId}/approvals`).send({ password: TEST_PASSWORD, statement: STATEMENT })).status).toBe(409);
-      expect((await ws.as.technician.post(`/api/machines/${machineId}/approvals`).send({ password: TEST_PASSWORD, statement: STATEMENT })).status).toBe(403);
+      expect(
+        (
+          await ws.as.owner
+            .post(`/api/machines/${machineId}/approvals`)
+            .send({ password: TEST_PASSWORD, statement: STATEMENT })
+        ).status,
+      ).toBe(409);
+      expect(
+        (
+          await ws.as.technician
+            .post(`/api/machines/${machineId}/approvals`)
+            .send({ password: TEST_PASSWORD, statement: STATEMENT })
+        ).status,
+      ).toBe(403);
     });
 
     it('a technician requests approval: 201, awaiting approval, the owners are e-mailed', async () => {
       const res = await ws.as.technician.post(`/api/machines/${machineId}/approval-requests`).send({});
       expect(res.status).toBe(201);
-      expect(res.body).toMatchObject({ id: expect.any(String), state: 'awaiting-approval', requestedBy: expect.stringContaining('technician') });
+      expect(res.body).toMatchObject({
+        id: expect.any(String),
+        state: 'awaiting-approval',
+        requestedBy: expect.stringContaining('technician'),
+      });
       expect((await board(ws, machineId)).state).toBe('awaiting-approval');
       expect((await ws.as.technician.post(`/api/machines/${machineId}/approval-requests`).send({})).status).toBe(409);
-      const mail = await smtp.waitFor((m) => m.subject === 'Approval requested: Signed router' && m.envelopeTo.includes(ws.emails.owner));
+      const mail = await smtp.waitFor(
+        (m) => m.subject === 'Approval requested: Signed router' && m.envelopeTo.includes(ws.emails.owner),
+      );
       expect(mail.envelopeTo).toEqual([ws.emails.owner]);
       expect(mail.text).toContain(`/machines/${machineId}?tab=readiness`);
       const history = await ws.as.viewer.get(`/api/machines/${machineId}/history?limit=200`);
-      expect(history.body.entries[0]).toMatchObject({ action: 'state-changed', changes: { state: { from: 'being-built', to: 'awaiting-approval' } } });
+      expect(history.body.entries[0]).toMatchObject({
+        action: 'state-changed',
+        changes: { state: { from: 'being-built', to: 'awaiting-approval' } },
+      });
     });
 
     it('refuses a technician (403), a wrong password (403) and a missing statement (400)', async () => {
       const url = `/api/machines/${machineId}/approvals`;
-      expect((await ws.as.technician.post(url).send({ password: TEST_PASSWORD, statement: STATEMENT })).status).toBe(403);
+      expect((await ws.as.technician.post(url).send({ password: TEST_PASSWORD, statement: STATEMENT })).status).toBe(
+        403,
+      );
       expect((await ws.as.admin.post(url).send({ password: TEST_PASSWORD, statement: STATEMENT })).status).toBe(403);
       const wrong = await ws.as.owner.post(url).send({ password: 'not my password', statement: STATEMENT });
       expect(wrong.status).toBe(403);
@@ -159,34 +208,74 @@ describe('readiness board, waivers, approval and certificate', () => {
     });
 
     it('an owner approves with password and statement: 201, ready to cut, re-check date from the target set', async () => {
-      const res = await ws.as.owner.post(`/api/machines/${machineId}/approvals`).send({ password: TEST_PASSWORD, statement: STATEMENT });
+      const res = await ws.as.owner
+        .post(`/api/machines/${machineId}/approvals`)
+        .send({ password: TEST_PASSWORD, statement: STATEMENT });
       expect(res.status).toBe(201);
       approval = res.body;
-      expect(approval).toMatchObject({ id: expect.any(String), approvedAt: expect.any(String), approvedBy: expect.stringContaining('owner'), recordHash: expect.stringMatching(/^[0-9a-f]{64}$/) });
+      expect(approval).toMatchObject({
+        id: expect.any(String),
+        approvedAt: expect.any(String),
+        approvedBy: expect.stringContaining('owner'),
+        recordHash: expect.stringMatching(/^[0-9a-f]{64}$/),
+      });
       const b = await board(ws, machineId);
       expect(b.state).toBe('ready-to-cut');
       // The router default target set asks for a re-check every 90 days.
       expect(new Date(b.recheckDueAt!).getTime() - new Date(approval.approvedAt).getTime()).toBe(90 * 24 * 3600_000);
       expect(b.approval).toMatchObject({ id: approval.id, recordHash: approval.recordHash, statement: STATEMENT });
-      expect((await ws.as.owner.post(`/api/machines/${machineId}/approvals`).send({ password: TEST_PASSWORD, statement: STATEMENT })).status).toBe(409);
+      expect(
+        (
+          await ws.as.owner
+            .post(`/api/machines/${machineId}/approvals`)
+            .send({ password: TEST_PASSWORD, statement: STATEMENT })
+        ).status,
+      ).toBe(409);
     });
 
     it('keeps a hash that is the SHA-256 of the canonical JSON of the stored results', async () => {
       const db = app.get<Database>(DRIZZLE);
       const [row] = await db.select().from(approvals).where(eq(approvals.id, approval.id));
       // Independent canonical form: JSON.stringify with keys sorted at every level.
-      const sorted = (v: unknown): unknown => (Array.isArray(v) ? v.map(sorted) : v && typeof v === 'object' ? Object.fromEntries(Object.keys(v).sort().map((k) => [k, sorted((v as Record<string, unknown>)[k])])) : v);
-      expect(createHash('sha256').update(JSON.stringify(sorted(row.snapshot))).digest('hex')).toBe(approval.recordHash);
-      expect(row.snapshot.checks.find((c) => c.key === 'fake-straightness:Y1')).toMatchObject({ status: 'within-target', result: { value: 12.5 }, recordId: fake.get(machineId, 'fake-straightness:Y1').recordId });
+      const sorted = (v: unknown): unknown =>
+        Array.isArray(v)
+          ? v.map(sorted)
+          : v && typeof v === 'object'
+            ? Object.fromEntries(
+                Object.keys(v)
+                  .sort()
+                  .map((k) => [k, sorted((v as Record<string, unknown>)[k])]),
+              )
+            : v;
+      expect(
+        createHash('sha256')
+          .update(JSON.stringify(sorted(row.snapshot)))
+          .digest('hex'),
+      ).toBe(approval.recordHash);
+      expect(row.snapshot.checks.find((c) => c.key === 'fake-straightness:Y1')).toMatchObject({
+        status: 'within-target',
+        result: { value: 12.5 },
+        recordId: fake.get(machineId, 'fake-straightness:Y1').recordId,
+      });
       expect(row.snapshot.checks.filter((c) => c.status === 'waived').every((c) => c.waiver?.reason)).toBe(true);
       const verify = await ws.as.viewer.get(`/api/machines/${machineId}/approvals/${approval.id}/verification`);
-      expect(verify.body).toMatchObject({ approvalId: approval.id, status: 'valid', valid: true, unchanged: true, differences: [], recordHash: approval.recordHash });
+      expect(verify.body).toMatchObject({
+        approvalId: approval.id,
+        status: 'valid',
+        valid: true,
+        unchanged: true,
+        differences: [],
+        recordHash: approval.recordHash,
+      });
     });
 
     it('locks the records it was based on: editing them answers 409', async () => {
       const records = app.get(RecordsService);
       const y1 = fake.get(machineId, 'fake-straightness:Y1');
-      await expect(records.assertEditable('test-cut', y1.recordId!)).rejects.toMatchObject({ status: 409, message: expect.stringMatching(/approved commissioning record/) });
+      await expect(records.assertEditable('test-cut', y1.recordId!)).rejects.toMatchObject({
+        status: 409,
+        message: expect.stringMatching(/approved commissioning record/),
+      });
       await expect(records.assertEditable('test-cut', '00000000-0000-4000-8000-000000000000')).resolves.toBeUndefined();
     });
 
@@ -195,7 +284,10 @@ describe('readiness board, waivers, approval and certificate', () => {
       expect([...mail.envelopeTo].sort()).toEqual(Object.values(ws.emails).sort());
       expect(mail.text).toContain(approval.recordHash);
       expect(mail.attachments).toHaveLength(1);
-      expect(mail.attachments[0]).toMatchObject({ contentType: 'application/pdf', filename: expect.stringMatching(/^commissioning-certificate-signed-router-\d{4}-\d\d-\d\d\.pdf$/) });
+      expect(mail.attachments[0]).toMatchObject({
+        contentType: 'application/pdf',
+        filename: expect.stringMatching(/^commissioning-certificate-signed-router-\d{4}-\d\d-\d\d\.pdf$/),
+      });
       expect(mail.attachments[0].content.subarray(0, 5).toString()).toBe('%PDF-');
       const fromRoute = await pdfOf(ws.as.viewer, machineId);
       expect(Buffer.compare(fromRoute.body, mail.attachments[0].content)).toBe(0);
@@ -205,7 +297,10 @@ describe('readiness board, waivers, approval and certificate', () => {
       const first = await pdfOf(ws.as.viewer, machineId);
       expect(first.status).toBe(200);
       expect(first.headers['content-type']).toBe('application/pdf');
-      expect(disposition(first.headers['content-disposition'])).toEqual({ type: 'attachment', filename: expect.stringMatching(/^commissioning-certificate-signed-router/) });
+      expect(disposition(first.headers['content-disposition'])).toEqual({
+        type: 'attachment',
+        filename: expect.stringMatching(/^commissioning-certificate-signed-router/),
+      });
       const second = await pdfOf(ws.as.builder, machineId);
       expect(Buffer.compare(first.body, second.body)).toBe(0);
       const text = pdfText(first.body);
@@ -225,14 +320,28 @@ describe('readiness board, waivers, approval and certificate', () => {
     it('keeps the record read-only while the approval stands; the owner reopens it with a reason, audited and mailed', async () => {
       const before = await pdfOf(ws.as.viewer, machineId);
       // Only the owner reopens, and only with a reason.
-      expect((await ws.as.technician.post(`/api/machines/${machineId}/reopen`).send({ reason: 'Y2 rail was knocked by a forklift' })).status).toBe(403);
+      expect(
+        (
+          await ws.as.technician
+            .post(`/api/machines/${machineId}/reopen`)
+            .send({ reason: 'Y2 rail was knocked by a forklift' })
+        ).status,
+      ).toBe(403);
       const short = await ws.as.owner.post(`/api/machines/${machineId}/reopen`).send({ reason: 'bump' });
       expect([short.status, short.body.message]).toEqual([400, [expect.stringMatching(/^reason /)]]);
       expect((await board(ws, machineId)).state).toBe('ready-to-cut');
-      const reopened = await ws.as.owner.post(`/api/machines/${machineId}/reopen`).send({ reason: 'Y2 rail was knocked by a forklift' });
+      const reopened = await ws.as.owner
+        .post(`/api/machines/${machineId}/reopen`)
+        .send({ reason: 'Y2 rail was knocked by a forklift' });
       expect([reopened.status, reopened.body.state]).toEqual([201, 'reopened']);
       // A second reopen (a double click) finds nothing standing.
-      expect((await ws.as.owner.post(`/api/machines/${machineId}/reopen`).send({ reason: 'Y2 rail was knocked by a forklift' })).status).toBe(409);
+      expect(
+        (
+          await ws.as.owner
+            .post(`/api/machines/${machineId}/reopen`)
+            .send({ reason: 'Y2 rail was knocked by a forklift' })
+        ).status,
+      ).toBe(409);
       fake.record(machineId, 'fake-straightness:Y2', 31, 'outside-target');
       const b = await board(ws, machineId);
       expect(b.state).toBe('reopened');
@@ -252,7 +361,14 @@ describe('readiness board, waivers, approval and certificate', () => {
       expect(res.status).toBe(200);
       expect(res.body.approval.id).toBe(approval.id);
       const y2 = res.body.rows.find((r: { key: string }) => r.key === 'fake-straightness:Y2');
-      expect(y2).toMatchObject({ approved: { status: 'within-target', result: { value: 9.8 } }, latest: { status: 'outside-target', result: { value: 31 } }, change: 21.2, unit: 'µm', rechecked: true, worse: true });
+      expect(y2).toMatchObject({
+        approved: { status: 'within-target', result: { value: 9.8 } },
+        latest: { status: 'outside-target', result: { value: 31 } },
+        change: 21.2,
+        unit: 'µm',
+        rechecked: true,
+        worse: true,
+      });
       const y1 = res.body.rows.find((r: { key: string }) => r.key === 'fake-straightness:Y1');
       expect(y1).toMatchObject({ change: null, rechecked: false });
     });
@@ -264,18 +380,26 @@ describe('readiness board, waivers, approval and certificate', () => {
     await waiveAllBut(ws, machineId, isFake);
     expect((await ws.as.owner.post(`/api/machines/${machineId}/approval-requests`).send({})).status).toBe(201);
     fake.record(machineId, 'fake-straightness:Y1', 44, 'outside-target');
-    const res = await ws.as.owner.post(`/api/machines/${machineId}/approvals`).send({ password: TEST_PASSWORD, statement: STATEMENT });
+    const res = await ws.as.owner
+      .post(`/api/machines/${machineId}/approvals`)
+      .send({ password: TEST_PASSWORD, statement: STATEMENT });
     expect(res.status).toBe(409);
-    expect(res.body.blocking).toEqual([expect.objectContaining({ key: 'fake-straightness:Y1', status: 'outside-target' })]);
+    expect(res.body.blocking).toEqual([
+      expect.objectContaining({ key: 'fake-straightness:Y1', status: 'outside-target' }),
+    ]);
   });
 
   it('locks a real rail sweep it was based on: deleting it answers 409, and a new sweep takes the machine out of ready to cut', async () => {
     const machineId = await newMachine(ws, 'Swept router');
-    const rail = await ws.as.builder.post(`/api/machines/${machineId}/rails`).send({ label: 'Y1 (left)', axis: 'Y1', length: 800, holePitch: 60, firstHole: 40 });
+    const rail = await ws.as.builder
+      .post(`/api/machines/${machineId}/rails`)
+      .send({ label: 'Y1 (left)', axis: 'Y1', length: 800, holePitch: 60, firstHole: 40 });
     expect([rail.status, rail.body.message]).toEqual([201, undefined]);
     // Readings within a few µm of a straight line: well inside the router's 20 µm.
     const stations = [0, 200, 400, 600, 800].map((position, i) => ({ position, reading: [0, 2, 1, 3, 2][i] }));
-    const sweep = await ws.as.builder.post(`/api/rails/${rail.body.id}/sweeps`).send({ readingUnit: 'um', phase: 'as-left', stations });
+    const sweep = await ws.as.builder
+      .post(`/api/rails/${rail.body.id}/sweeps`)
+      .send({ readingUnit: 'um', phase: 'as-left', stations });
     expect([sweep.status, sweep.body.message]).toEqual([201, undefined]);
     const straightKey = (await board(ws, machineId)).checks.find((c) => c.recordId === sweep.body.id)?.key;
     expect(straightKey).toBeDefined();
@@ -286,10 +410,22 @@ describe('readiness board, waivers, approval and certificate', () => {
     expect(del.body.message).toMatch(/approved commissioning record/);
     expect((await ws.as.builder.get(`/api/sweeps/${sweep.body.id}`)).status).toBe(200);
     // A new sweep is refused while the approval stands; after reopening it is recorded.
-    const badSweep = { readingUnit: 'um', phase: 'as-left', stations: stations.map((st, i) => ({ ...st, reading: [0, 60, -40, 70, 0][i] })) };
+    const badSweep = {
+      readingUnit: 'um',
+      phase: 'as-left',
+      stations: stations.map((st, i) => ({ ...st, reading: [0, 60, -40, 70, 0][i] })),
+    };
     const refused = await ws.as.builder.post(`/api/rails/${rail.body.id}/sweeps`).send(badSweep);
-    expect([refused.status, refused.body.message]).toEqual([409, expect.stringMatching(/Swept router is approved as ready to cut: .* The owner can reopen the machine with a reason/)]);
-    expect((await ws.as.owner.post(`/api/machines/${machineId}/reopen`).send({ reason: 'Rail re-bedded after a crash' })).status).toBe(201);
+    expect([refused.status, refused.body.message]).toEqual([
+      409,
+      expect.stringMatching(
+        /Swept router is approved as ready to cut: .* The owner can reopen the machine with a reason/,
+      ),
+    ]);
+    expect(
+      (await ws.as.owner.post(`/api/machines/${machineId}/reopen`).send({ reason: 'Rail re-bedded after a crash' }))
+        .status,
+    ).toBe(201);
     const bad = await ws.as.builder.post(`/api/rails/${rail.body.id}/sweeps`).send(badSweep);
     expect(bad.status).toBe(201);
     expect((await board(ws, machineId)).state).toBe('reopened');
@@ -310,7 +446,10 @@ describe('readiness board, waivers, approval and certificate', () => {
       const a = await requestAndApprove(ws, machineId, TEST_PASSWORD);
       const db = app.get<Database>(DRIZZLE);
       expect(await app.get(RecheckService).remindDue()).toBe(0); // not due yet: nothing to send
-      await db.update(approvals).set({ recheckDueAt: new Date(Date.now() - 60_000) }).where(eq(approvals.id, a.id));
+      await db
+        .update(approvals)
+        .set({ recheckDueAt: new Date(Date.now() - 60_000) })
+        .where(eq(approvals.id, a.id));
       // Everything the reads could write: the machine's row, the approval's row, the history.
       const written = async () => ({
         machine: (await db.select().from(machines).where(eq(machines.id, machineId)))[0],
@@ -325,16 +464,27 @@ describe('readiness board, waivers, approval and certificate', () => {
       expect((await ws.as.viewer.get(`/api/machines/${machineId}`)).body.state).toBe('recheck-due');
       const b = await board(ws, machineId);
       expect([b.state, b.recheckDueAt]).toEqual(['recheck-due', expect.any(String)]);
-      expect((await ws.as.viewer.get(`/api/machines/${machineId}/approvals`)).body[0]).toMatchObject({ id: a.id, recheckDue: true });
+      expect((await ws.as.viewer.get(`/api/machines/${machineId}/approvals`)).body[0]).toMatchObject({
+        id: a.id,
+        recheckDue: true,
+      });
       const token = before.approval.verificationToken!;
-      expect((await anonymous(app).get(`/api/public/verify/${token}`)).body).toMatchObject({ stands: true, recheckDue: true });
+      expect((await anonymous(app).get(`/api/public/verify/${token}`)).body).toMatchObject({
+        stands: true,
+        recheckDue: true,
+      });
       expect(await written()).toEqual(before);
       // A request while due is refused in the state's own words.
       const requestRefused = await ws.as.technician.post(`/api/machines/${machineId}/approval-requests`);
-      expect([requestRefused.status, requestRefused.body.message]).toEqual([409, expect.stringMatching(/approved and due for its re-check/)]);
+      expect([requestRefused.status, requestRefused.body.message]).toEqual([
+        409,
+        expect.stringMatching(/approved and due for its re-check/),
+      ]);
 
       // The schedule's hourly job sends the reminder once, however often it runs.
-      expect(app.get(SchedulerRegistry).getCronJob('recheck-reminders').cronTime.source).toBe(CronExpression.EVERY_HOUR);
+      expect(app.get(SchedulerRegistry).getCronJob('recheck-reminders').cronTime.source).toBe(
+        CronExpression.EVERY_HOUR,
+      );
       const recheck = app.get(RecheckService);
       expect(await recheck.remindDue()).toBe(1);
       expect(await recheck.remindDue()).toBe(0);
@@ -346,11 +496,18 @@ describe('readiness board, waivers, approval and certificate', () => {
       expect(mails[0].text).toContain(`/machines/${machineId}?tab=readiness`);
       expect((await written()).approval.recheckNotifiedAt).not.toBeNull();
       const history = await ws.as.viewer.get(`/api/machines/${machineId}/history?limit=200`);
-      expect(history.body.entries[0]).toMatchObject({ action: 'state-changed', changes: { state: { from: 'ready-to-cut', to: 'recheck-due' } } });
+      expect(history.body.entries[0]).toMatchObject({
+        action: 'state-changed',
+        changes: { state: { from: 'ready-to-cut', to: 'recheck-due' } },
+      });
       // A re-check round: the owner reopens the machine, and it is approved again through the same flow.
-      expect((await ws.as.owner.post(`/api/machines/${machineId}/reopen`).send({ reason: 'Six-monthly re-check' })).status).toBe(201);
+      expect(
+        (await ws.as.owner.post(`/api/machines/${machineId}/reopen`).send({ reason: 'Six-monthly re-check' })).status,
+      ).toBe(201);
       const reopened = await ws.as.viewer.get(`/api/machines/${machineId}/history?limit=200`);
-      expect(reopened.body.entries.find((e: { action: string }) => e.action === 'state-changed')).toMatchObject({ changes: { state: { from: 'recheck-due', to: 'reopened' } } });
+      expect(reopened.body.entries.find((e: { action: string }) => e.action === 'state-changed')).toMatchObject({
+        changes: { state: { from: 'recheck-due', to: 'reopened' } },
+      });
       fake.record(machineId, 'fake-straightness:Y1', 13.1, 'within-target');
       const again = await requestAndApprove(ws, machineId, TEST_PASSWORD);
       expect(again.recordHash).not.toBe(a.recordHash);

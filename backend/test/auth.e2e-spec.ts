@@ -1,5 +1,12 @@
 import type { NestFastifyApplication } from '@nestjs/platform-fastify';
-import { anonymous, createTestApp, createTestWorkshop, signIn, TEST_PASSWORD, type TestWorkshop } from './helpers/test-app.js';
+import {
+  anonymous,
+  createTestApp,
+  createTestWorkshop,
+  signIn,
+  TEST_PASSWORD,
+  type TestWorkshop,
+} from './helpers/test-app.js';
 
 describe('sign-in, sessions and health', () => {
   let app: NestFastifyApplication;
@@ -35,7 +42,9 @@ describe('sign-in, sessions and health', () => {
   });
 
   it('accepts the e-mail in any letter case', async () => {
-    const res = await anonymous(app).post('/api/auth/login').send({ email: ws.emails.viewer.toUpperCase(), password: TEST_PASSWORD });
+    const res = await anonymous(app)
+      .post('/api/auth/login')
+      .send({ email: ws.emails.viewer.toUpperCase(), password: TEST_PASSWORD });
     expect(res.status).toBe(200);
   });
 
@@ -54,8 +63,12 @@ describe('sign-in, sessions and health', () => {
   });
 
   it('gives the same message for a wrong password and an unknown e-mail', async () => {
-    const wrongPassword = await anonymous(app).post('/api/auth/login').send({ email: ws.emails.builder, password: 'nope' });
-    const unknown = await anonymous(app).post('/api/auth/login').send({ email: 'nobody@test.example.com', password: 'nope' });
+    const wrongPassword = await anonymous(app)
+      .post('/api/auth/login')
+      .send({ email: ws.emails.builder, password: 'nope' });
+    const unknown = await anonymous(app)
+      .post('/api/auth/login')
+      .send({ email: 'nobody@test.example.com', password: 'nope' });
     expect(wrongPassword.status).toBe(401);
     expect(unknown.status).toBe(401);
     expect(wrongPassword.body.message).toEqual(unknown.body.message);
@@ -78,10 +91,14 @@ describe('sign-in, sessions and health', () => {
   it('slows down repeated failures with 429, even for the right password, and tells when to retry', async () => {
     const target = { email: ws.emails.admin };
     for (let i = 0; i < 5; i++) {
-      const res = await anonymous(app).post('/api/auth/login').send({ ...target, password: `wrong-${i}` });
+      const res = await anonymous(app)
+        .post('/api/auth/login')
+        .send({ ...target, password: `wrong-${i}` });
       expect(res.status).toBe(401);
     }
-    const blocked = await anonymous(app).post('/api/auth/login').send({ ...target, password: TEST_PASSWORD });
+    const blocked = await anonymous(app)
+      .post('/api/auth/login')
+      .send({ ...target, password: TEST_PASSWORD });
     expect(blocked.status).toBe(429);
     expect(blocked.body.message).toMatch(/Too many failed sign-ins/);
   });
@@ -92,7 +109,9 @@ describe('sign-in, sessions and health', () => {
     const res = await victim.as.admin.patch(`/api/people/${victim.userIds.viewer}`).send({ active: false });
     expect(res.status).toBe(200);
     expect((await viewerSession.get('/api/auth/me')).status).toBe(401);
-    const login = await anonymous(app).post('/api/auth/login').send({ email: victim.emails.viewer, password: TEST_PASSWORD });
+    const login = await anonymous(app)
+      .post('/api/auth/login')
+      .send({ email: victim.emails.viewer, password: TEST_PASSWORD });
     expect(login.status).toBe(401);
   });
 

@@ -9,7 +9,25 @@ import { newAxis, newMachine, screwAxis } from './helpers/drives.js';
  * Seeded and bounded (fast-check) so it runs in seconds.
  */
 const SEED = 20261202;
-const BAD: unknown[] = [null, '', '\u0000', 'a\u0000b', '\ud800', 'x'.repeat(5000), 1e308, -1e308, -0, 'NaN', true, [], {}, [[[[[[]]]]]], Array.from({ length: 5000 }, () => 1), '(G0 X-500)', 'a\nG0 X-500'];
+const BAD: unknown[] = [
+  null,
+  '',
+  '\u0000',
+  'a\u0000b',
+  '\ud800',
+  'x'.repeat(5000),
+  1e308,
+  -1e308,
+  -0,
+  'NaN',
+  true,
+  [],
+  {},
+  [[[[[[]]]]]],
+  Array.from({ length: 5000 }, () => 1),
+  '(G0 X-500)',
+  'a\nG0 X-500',
+];
 
 const valid = () => ({
   lengthUnit: 'mm',
@@ -53,8 +71,18 @@ describe('fuzz: backlash checks and test programs', () => {
     const all = paths(valid());
     const fields = all.filter((p) => p.length > 0);
     const body = fc.oneof(
-      { weight: 6, arbitrary: fc.tuple(fc.constantFrom(...all), fc.constantFrom(...BAD)).map(([p, v]) => setAt(valid(), p, v, false)) },
-      { weight: 2, arbitrary: fc.tuple(fc.constantFrom(...fields), fc.jsonValue({ maxDepth: 3 })).map(([p, v]) => setAt(valid(), p, v, false)) },
+      {
+        weight: 6,
+        arbitrary: fc
+          .tuple(fc.constantFrom(...all), fc.constantFrom(...BAD))
+          .map(([p, v]) => setAt(valid(), p, v, false)),
+      },
+      {
+        weight: 2,
+        arbitrary: fc
+          .tuple(fc.constantFrom(...fields), fc.jsonValue({ maxDepth: 3 }))
+          .map(([p, v]) => setAt(valid(), p, v, false)),
+      },
       { weight: 1, arbitrary: fc.constantFrom(...fields).map((p) => setAt(valid(), p, undefined, true)) },
       { weight: 1, arbitrary: fc.jsonValue({ maxDepth: 4 }) },
     );
@@ -62,9 +90,13 @@ describe('fuzz: backlash checks and test programs', () => {
     const problems: string[] = [];
     await fc.assert(
       fc.asyncProperty(body, async (b) => {
-        const res = await ws.as.technician.post(`/api/axes/${axisId}/backlash-checks`).set('Content-Type', 'application/json').send(JSON.stringify(b) ?? 'null');
+        const res = await ws.as.technician
+          .post(`/api/axes/${axisId}/backlash-checks`)
+          .set('Content-Type', 'application/json')
+          .send(JSON.stringify(b) ?? 'null');
         if (res.status === 201) stored++;
-        else if (res.status >= 500 || res.status < 400 || !res.body.message) problems.push(`${res.status} for ${JSON.stringify(b).slice(0, 200)}`);
+        else if (res.status >= 500 || res.status < 400 || !res.body.message)
+          problems.push(`${res.status} for ${JSON.stringify(b).slice(0, 200)}`);
         return res.status < 500;
       }),
       { seed: SEED, numRuns: 60, endOnFailure: true },
@@ -77,13 +109,46 @@ describe('fuzz: backlash checks and test programs', () => {
   });
 
   it('no generated query of the test program or its targets gets a 5xx', async () => {
-    const key = fc.constantFrom('kind', 'lengthUnit', 'feed', 'distances', 'targets', 'start', 'runs', 'overrun', 'dwell', 'letter', 'notes', 'format', 'unit');
-    const value = fc.oneof(fc.string({ maxLength: 40 }), fc.constantFrom('positioning', 'travel', 'in', 'thou', '1e308', '-1', '0', 'NaN', '1,2,3', '(', ')\nG0 X-500', '%', ';'));
+    const key = fc.constantFrom(
+      'kind',
+      'lengthUnit',
+      'feed',
+      'distances',
+      'targets',
+      'start',
+      'runs',
+      'overrun',
+      'dwell',
+      'letter',
+      'notes',
+      'format',
+      'unit',
+    );
+    const value = fc.oneof(
+      fc.string({ maxLength: 40 }),
+      fc.constantFrom(
+        'positioning',
+        'travel',
+        'in',
+        'thou',
+        '1e308',
+        '-1',
+        '0',
+        'NaN',
+        '1,2,3',
+        '(',
+        ')\nG0 X-500',
+        '%',
+        ';',
+      ),
+    );
     const query = fc.dictionary(key, value, { maxKeys: 6 });
     const failures: string[] = [];
     await fc.assert(
       fc.asyncProperty(query, fc.boolean(), async (q, targets) => {
-        const res = await ws.as.technician.get(`/api/axes/${axisId}/${targets ? 'test-targets' : 'test-program'}`).query(q);
+        const res = await ws.as.technician
+          .get(`/api/axes/${axisId}/${targets ? 'test-targets' : 'test-program'}`)
+          .query(q);
         if (res.status >= 500) failures.push(`${res.status} for ${JSON.stringify(q)}`);
         if (res.status === 200 && !targets) {
           // Whatever was asked, a program holds no line a person's text could have made.

@@ -32,17 +32,28 @@ describe('abandoning a bolt-down', () => {
   };
   const fix = (id: string, index: number, reading: number, agent: Agent = ws.as.builder) =>
     agent.put(`/api/bolt-downs/${id}/holes/${index}`).send({ reading, fixed: true, writeId: randomUUID() });
-  const abandon = (id: string, body: unknown, agent: Agent = ws.as.builder) => agent.post(`/api/bolt-downs/${id}/abandon`).send(body as object);
+  const abandon = (id: string, body: unknown, agent: Agent = ws.as.builder) =>
+    agent.post(`/api/bolt-downs/${id}/abandon`).send(body as object);
   const history = async () => {
     const res = await ws.as.viewer.get(`/api/machines/${machineId}/history?limit=200`);
-    return res.body.entries as { recordType: string; recordId: string; summary: string; changes: Record<string, unknown> | null; actorName: string }[];
+    return res.body.entries as {
+      recordType: string;
+      recordId: string;
+      summary: string;
+      changes: Record<string, unknown> | null;
+      actorName: string;
+    }[];
   };
 
   beforeAll(async () => {
     app = await createTestApp();
     ws = await createTestWorkshop(app, 'Abandon');
     other = await createTestWorkshop(app, 'Abandon other');
-    machineId = (await ws.as.builder.post('/api/machines').send({ name: 'Plasma A', kind: 'plasma', workArea: { x: 3000, y: 1500 } })).body.id;
+    machineId = (
+      await ws.as.builder
+        .post('/api/machines')
+        .send({ name: 'Plasma A', kind: 'plasma', workArea: { x: 3000, y: 1500 } })
+    ).body.id;
   });
   afterAll(() => app.close());
 
@@ -60,7 +71,9 @@ describe('abandoning a bolt-down', () => {
 
     const read = await ws.as.viewer.get(`/api/bolt-downs/${bd.id}`);
     expect(read.body.abandoned.reason).toBe(REASON);
-    const entry = (await history()).find((e) => e.recordType === 'bolt-down' && e.recordId === bd.id && e.summary.includes('abandoned'));
+    const entry = (await history()).find(
+      (e) => e.recordType === 'bolt-down' && e.recordId === bd.id && e.summary.includes('abandoned'),
+    );
     expect(entry?.summary).toContain(REASON);
     expect(entry?.summary).toContain('1 of 5 holes fixed');
     expect(entry?.changes).toMatchObject({ abandoned: true, reason: REASON });
@@ -71,7 +84,11 @@ describe('abandoning a bolt-down', () => {
     expect((await ws.as.viewer.get(`/api/bolt-downs/${bd.id}`)).body.fixedCount).toBe(1);
     const again = await abandon(bd.id, { reason: 'A second time' });
     expect(again.status).toBe(409);
-    const sweep = await ws.as.builder.post(`/api/bolt-downs/${bd.id}/final-sweep`).send({ readingUnit: 'thou', phase: 'as-left', stations: [30, 90, 150, 210, 270].map((position) => ({ position, reading: 0 })) });
+    const sweep = await ws.as.builder.post(`/api/bolt-downs/${bd.id}/final-sweep`).send({
+      readingUnit: 'thou',
+      phase: 'as-left',
+      stations: [30, 90, 150, 210, 270].map((position) => ({ position, reading: 0 })),
+    });
     expect(sweep.status).toBe(409);
 
     const next = await start(railId);
@@ -103,7 +120,10 @@ describe('abandoning a bolt-down', () => {
 
   it('two people abandoning at once: one is recorded, the other told it was already abandoned', async () => {
     const bd = await start(await newRail());
-    const [a, b] = await Promise.all([abandon(bd.id, { reason: 'First reason given' }), abandon(bd.id, { reason: 'Second reason given' }, ws.as.owner)]);
+    const [a, b] = await Promise.all([
+      abandon(bd.id, { reason: 'First reason given' }),
+      abandon(bd.id, { reason: 'Second reason given' }, ws.as.owner),
+    ]);
     expect([a.status, b.status].sort()).toEqual([200, 409]);
     const entries = (await history()).filter((e) => e.recordId === bd.id && e.summary.includes('abandoned'));
     expect(entries).toHaveLength(1);
@@ -119,9 +139,14 @@ describe('abandoning a bolt-down', () => {
   });
 
   it('is refused (409) while the machine is approved as ready to cut, with the approval named', async () => {
-    const approved = (await ws.as.owner.post('/api/machines').send({ name: 'Approved router', kind: 'router', workArea: { x: 900, y: 600 } })).body.id as string;
+    const approved = (
+      await ws.as.owner
+        .post('/api/machines')
+        .send({ name: 'Approved router', kind: 'router', workArea: { x: 900, y: 600 } })
+    ).body.id as string;
     const railId = (await ws.as.builder.post(`/api/machines/${approved}/rails`).send(RAIL)).body.id as string;
-    const bd = (await ws.as.builder.post(`/api/rails/${railId}/bolt-downs`).send({ mode: 'line', readingUnit: 'thou' })).body as BoltDown;
+    const bd = (await ws.as.builder.post(`/api/rails/${railId}/bolt-downs`).send({ mode: 'line', readingUnit: 'thou' }))
+      .body as BoltDown;
     await waiveAllBut(ws, approved, () => false);
     await requestAndApprove(ws, approved, TEST_PASSWORD);
     expect((await board(ws, approved)).state).toBe('ready-to-cut');

@@ -40,7 +40,11 @@ describe('bolt-down guide API', () => {
     expect(res.status).toBe(201);
     return res.body.id as string;
   };
-  const start = async (railId: string, body: Record<string, unknown> = { mode: 'line', readingUnit: 'thou' }, agent: Agent = ws.as.builder) => {
+  const start = async (
+    railId: string,
+    body: Record<string, unknown> = { mode: 'line', readingUnit: 'thou' },
+    agent: Agent = ws.as.builder,
+  ) => {
     const res = await agent.post(`/api/rails/${railId}/bolt-downs`).send(body);
     expect(res.status).toBe(201);
     return res.body as { id: string; holes: Hole[]; [k: string]: unknown };
@@ -50,11 +54,19 @@ describe('bolt-down guide API', () => {
   const fix = async (id: string, index: number, reading: number, agent: Agent = ws.as.builder) => {
     const res = await put(id, index, { reading, fixed: true, writeId: randomUUID() }, agent);
     expect(res.status).toBe(200);
-    return res.body as { holes: Hole[]; nextHole: number | null; complete: boolean; repeated: boolean; fixedCount: number };
+    return res.body as {
+      holes: Hole[];
+      nextHole: number | null;
+      complete: boolean;
+      repeated: boolean;
+      fixedCount: number;
+    };
   };
   const boltDownHistory = async (writeId?: string) => {
     const res = await ws.as.viewer.get(`/api/machines/${machineId}/history?limit=200`);
-    const entries = (res.body.entries as { recordType: string; changes: { writeId?: string } | null; summary: string }[]).filter((e) => e.recordType === 'bolt-down');
+    const entries = (
+      res.body.entries as { recordType: string; changes: { writeId?: string } | null; summary: string }[]
+    ).filter((e) => e.recordType === 'bolt-down');
     return writeId ? entries.filter((e) => e.changes?.writeId === writeId) : entries;
   };
 
@@ -62,7 +74,9 @@ describe('bolt-down guide API', () => {
     app = await createTestApp();
     ws = await createTestWorkshop(app, 'Bolt-down');
     other = await createTestWorkshop(app, 'Other');
-    const machine = await ws.as.builder.post('/api/machines').send({ name: 'Plasma', kind: 'plasma', workArea: { x: 3000, y: 1500 } });
+    const machine = await ws.as.builder
+      .post('/api/machines')
+      .send({ name: 'Plasma', kind: 'plasma', workArea: { x: 3000, y: 1500 } });
     machineId = machine.body.id;
   });
   afterAll(() => app.close());
@@ -95,19 +109,45 @@ describe('bolt-down guide API', () => {
     await db.update(rails).set({ firstHoleMm: 0 }).where(eq(rails.id, id));
     const res = await ws.as.builder.post(`/api/rails/${id}/bolt-downs`).send({ mode: 'line' });
     expect(res.status).toBe(400);
-    expect(res.body.message).toEqual([expect.stringMatching(/^railId: rail Y1 \(left\) has a hole at 0 mm on or beyond its start .* correct the rail's firstHole, holePitch or length first/)]);
+    expect(res.body.message).toEqual([
+      expect.stringMatching(
+        /^railId: rail Y1 \(left\) has a hole at 0 mm on or beyond its start .* correct the rail's firstHole, holePitch or length first/,
+      ),
+    ]);
   });
 
   it('a builder begins a bolt-down: holes from the rail, the proposed order, nothing fixed yet', async () => {
     const railId = await newRail();
     const res = await ws.as.builder.post(`/api/rails/${railId}/bolt-downs`).send({ mode: 'line', readingUnit: 'thou' });
     expect(res.status).toBe(201);
-    expect(res.body).toMatchObject({ railId, machineId, mode: 'line', readingUnit: 'thou', nextHole: 0, fixedCount: 0, holeCount: 5, complete: false, finalSweepId: null });
+    expect(res.body).toMatchObject({
+      railId,
+      machineId,
+      mode: 'line',
+      readingUnit: 'thou',
+      nextHole: 0,
+      fixedCount: 0,
+      holeCount: 5,
+      complete: false,
+      finalSweepId: null,
+    });
     expect(res.body.rail).toEqual({ label: 'Y1 (left)', axis: 'Y1', lengthMm: 300 });
     expect(res.body.holes.map((h: Hole) => h.position)).toEqual(POSITIONS);
     expect(res.body.holes.map((h: Hole) => h.order)).toEqual([0, 3, 2, 4, 1]);
     expect(res.body.holes[0]).toEqual({
-      index: 0, position: 30, at: 30, order: 0, target: null, targetMm: null, reading: null, readingMm: null, difference: null, onTarget: null, fixed: false, fixedAt: null, fixedBy: null,
+      index: 0,
+      position: 30,
+      at: 30,
+      order: 0,
+      target: null,
+      targetMm: null,
+      reading: null,
+      readingMm: null,
+      difference: null,
+      onTarget: null,
+      fixed: false,
+      fixedAt: null,
+      fixedBy: null,
     });
     // The plasma default target is 2 thou of straightness (common practice); the band is half of it.
     expect(res.body.band).toBeCloseTo(1, 12);
@@ -158,7 +198,11 @@ describe('bolt-down guide API', () => {
     await fix(bd.id, 4, 1.5);
     const again = await ws.as.viewer.get(`/api/bolt-downs/${bd.id}`);
     expect(again.status).toBe(200);
-    expect(again.body.holes[0]).toMatchObject({ reading: 0.5, fixed: true, fixedBy: expect.stringContaining('technician') });
+    expect(again.body.holes[0]).toMatchObject({
+      reading: 0.5,
+      fixed: true,
+      fixedBy: expect.stringContaining('technician'),
+    });
     expect(again.body).toMatchObject({ nextHole: 2, fixedCount: 2 });
     const second = await start(railId, { mode: 'face' });
     const list = await ws.as.viewer.get(`/api/rails/${railId}/bolt-downs`);
@@ -243,7 +287,15 @@ describe('bolt-down guide API', () => {
     expect((await them.get(`/api/rails/${railId}/bolt-downs`)).status).toBe(404);
     expect((await them.post(`/api/rails/${railId}/bolt-downs`).send({ mode: 'line' })).status).toBe(404);
     expect((await put(bd.id, 0, { reading: 1, fixed: true, writeId: randomUUID() }, them)).status).toBe(404);
-    expect((await them.post(`/api/bolt-downs/${bd.id}/final-sweep`).send({ readingUnit: 'thou', phase: 'as-left', stations: POSITIONS.map((position) => ({ position, reading: 0 })) })).status).toBe(404);
+    expect(
+      (
+        await them.post(`/api/bolt-downs/${bd.id}/final-sweep`).send({
+          readingUnit: 'thou',
+          phase: 'as-left',
+          stations: POSITIONS.map((position) => ({ position, reading: 0 })),
+        })
+      ).status,
+    ).toBe(404);
     expect((await ws.as.viewer.get(`/api/bolt-downs/${bd.id}`)).body.fixedCount).toBe(0);
     expect((await ws.as.builder.get(`/api/bolt-downs/${randomUUID()}`)).status).toBe(404);
   });
@@ -282,7 +334,13 @@ describe('bolt-down guide API', () => {
     const noId = await put(bd.id, 1, { reading: 1, fixed: true });
     expect(JSON.stringify(noId.body.message)).toMatch(/writeId must be a uuid/);
     expect((await put(bd.id, 1, { reading: 1, fixed: true, writeId: 'abc' })).status).toBe(400);
-    expect((await ws.as.builder.put(`/api/bolt-downs/not-an-id/holes/0`).send({ reading: 1, fixed: true, writeId: randomUUID() })).status).toBe(400);
+    expect(
+      (
+        await ws.as.builder
+          .put(`/api/bolt-downs/not-an-id/holes/0`)
+          .send({ reading: 1, fixed: true, writeId: randomUUID() })
+      ).status,
+    ).toBe(400);
 
     // A refused write leaves its id unused: the corrected write with the same id is applied.
     const writeId = randomUUID();
@@ -298,7 +356,12 @@ describe('bolt-down guide API', () => {
     const bd = await start(await newRail());
     const subjects = app.get(SubjectsRegistry);
     expect(subjects.types()).toContain('bolt-down');
-    expect(await subjects.resolve(ws.id, 'bolt-down', bd.id)).toEqual({ machineId, recordType: 'bolt-down', recordId: bd.id, label: 'Bolt-down of rail Y1 (left)' });
+    expect(await subjects.resolve(ws.id, 'bolt-down', bd.id)).toEqual({
+      machineId,
+      recordType: 'bolt-down',
+      recordId: bd.id,
+      label: 'Bolt-down of rail Y1 (left)',
+    });
     expect(await subjects.resolve(other.id, 'bolt-down', bd.id)).toBeNull();
   });
 
@@ -337,7 +400,13 @@ describe('bolt-down guide API', () => {
     });
 
     it('is refused until every hole is fixed', async () => {
-      for (const [hole, reading] of [[0, 0], [4, 0], [2, 1], [1, 0]]) await fix(bd.id, hole, reading);
+      for (const [hole, reading] of [
+        [0, 0],
+        [4, 0],
+        [2, 1],
+        [1, 0],
+      ])
+        await fix(bd.id, hole, reading);
       const res = await ws.as.builder.post(`/api/bolt-downs/${bd.id}/final-sweep`).send(sweepBody());
       expect(res.status).toBe(409);
       expect(res.body.message).toMatch(/4 of 5 holes are fixed/);
@@ -346,12 +415,18 @@ describe('bolt-down guide API', () => {
     });
 
     it('needs one station at every hole and names what is wrong', async () => {
-      const missing = await ws.as.builder.post(`/api/bolt-downs/${bd.id}/final-sweep`).send(sweepBody({ stations: POSITIONS.slice(0, 4).map((position) => ({ position, reading: 0 })) }));
+      const missing = await ws.as.builder
+        .post(`/api/bolt-downs/${bd.id}/final-sweep`)
+        .send(sweepBody({ stations: POSITIONS.slice(0, 4).map((position) => ({ position, reading: 0 })) }));
       expect(missing.status).toBe(400);
       expect(JSON.stringify(missing.body.message)).toMatch(/stations must include every hole: missing 270 mm/);
-      const extra = await ws.as.builder.post(`/api/bolt-downs/${bd.id}/final-sweep`).send(sweepBody({ stations: [...POSITIONS, 100].map((position) => ({ position, reading: 0 })) }));
+      const extra = await ws.as.builder
+        .post(`/api/bolt-downs/${bd.id}/final-sweep`)
+        .send(sweepBody({ stations: [...POSITIONS, 100].map((position) => ({ position, reading: 0 })) }));
       expect(JSON.stringify(extra.body.message)).toMatch(/100 mm is not a hole/);
-      const badUnit = await ws.as.builder.post(`/api/bolt-downs/${bd.id}/final-sweep`).send(sweepBody({ readingUnit: 'furlong' }));
+      const badUnit = await ws.as.builder
+        .post(`/api/bolt-downs/${bd.id}/final-sweep`)
+        .send(sweepBody({ readingUnit: 'furlong' }));
       expect(JSON.stringify(badUnit.body.message)).toMatch(/readingUnit must be one of/);
       expect((await ws.as.viewer.get(`/api/rails/${railId}/sweeps`)).body).toHaveLength(0);
     });
@@ -361,7 +436,15 @@ describe('bolt-down guide API', () => {
       const res = await ws.as.builder.post(`/api/bolt-downs/${bd.id}/final-sweep`).send(body);
       expect(res.status).toBe(201);
       expect(res.body.boltDown).toMatchObject({ id: bd.id, finalSweepId: body.id, complete: true });
-      expect(res.body.sweep).toMatchObject({ id: body.id, railId, readingUnit: 'thou', phase: 'as-left', boltSize: 'M5', torqueNm: 8.8, status: 'within-target' });
+      expect(res.body.sweep).toMatchObject({
+        id: body.id,
+        railId,
+        readingUnit: 'thou',
+        phase: 'as-left',
+        boltSize: 'M5',
+        torqueNm: 8.8,
+        status: 'within-target',
+      });
       expect(res.body.sweep.result.leastSquares.straightness).toBeCloseTo(THOU_MM, 9);
       expect(res.body.sweep.result.minimumZone.straightness).toBeCloseTo(THOU_MM, 9);
 

@@ -10,8 +10,18 @@ const VALID: Record<string, object> = {
     readings: [0, 3, 7, 8, 6, 9, 12, 10, 7, 8, 11],
     readingUnit: 'um',
   },
-  parallelism: { positions: [0, 250, 500, 750, 1000], railA: [0, 0.01, 0.02, 0.01, 0], railB: [0.1, 0.12, 0.11, 0.1, 0.13] },
-  squareness: { sideX: 1000, sideY: 600.000208333, diagonal1: 1166.6191537944164, diagonal2: 1165.7616608895662, gantrySpan: 600 },
+  parallelism: {
+    positions: [0, 250, 500, 750, 1000],
+    railA: [0, 0.01, 0.02, 0.01, 0],
+    railB: [0.1, 0.12, 0.11, 0.1, 0.13],
+  },
+  squareness: {
+    sideX: 1000,
+    sideY: 600.000208333,
+    diagonal1: 1166.6191537944164,
+    diagonal2: 1165.7616608895662,
+    gantrySpan: 600,
+  },
   flatness: {
     points: [
       { x: 0, y: 0, z: 0 },
@@ -46,7 +56,17 @@ const VALID: Record<string, object> = {
     mounting: 'fixed-supported',
     feedRate: 10000,
   },
-  'bolt-down': { length: 480, pitch: 60, firstHoleOffset: 0, mode: 'line', readings: [{ hole: 0, reading: 0 }, { hole: 8, reading: 80 }], readingUnit: 'um' },
+  'bolt-down': {
+    length: 480,
+    pitch: 60,
+    firstHoleOffset: 0,
+    mode: 'line',
+    readings: [
+      { hole: 0, reading: 0 },
+      { hole: 8, reading: 80 },
+    ],
+    readingUnit: 'um',
+  },
   'travel-envelope': { axes: [{ axis: 'X', measuredTravel: 1562, workSize: 1500 }], marginPerSide: 25 },
   'test-cut': { x: { commanded: 300, measured: 299.4 }, y: { commanded: 300, measured: 300 }, stepsPerMmX: 80 },
 };
@@ -91,9 +111,17 @@ describe('calculators API', () => {
     });
 
     it('straightness readings in thou and inches convert at 25.4 mm per inch', async () => {
-      const thou = await post('straightness', { positions: [0, 1, 2, 3, 4], readings: [0, 0, 0, 0, 4], readingUnit: 'thou' });
+      const thou = await post('straightness', {
+        positions: [0, 1, 2, 3, 4],
+        readings: [0, 0, 0, 0, 4],
+        readingUnit: 'thou',
+      });
       expect(thou.body.leastSquares.straightness).toBeCloseTo(3.2 * 0.0254, 12);
-      const inch = await post('straightness', { positions: [0, 1, 2, 3, 4], readings: [0, 0, 0, 0, 0.004], readingUnit: 'in' });
+      const inch = await post('straightness', {
+        positions: [0, 1, 2, 3, 4],
+        readings: [0, 0, 0, 0, 0.004],
+        readingUnit: 'in',
+      });
       expect(inch.body.minimumZone.straightness).toBeCloseTo(3 * 0.0254, 12);
     });
 
@@ -111,7 +139,12 @@ describe('calculators API', () => {
       expect(res.body.mmPerMetre).toBeCloseTo(0.8333, 3);
       expect(res.body.longDiagonal).toBe(1);
       expect(res.body.correction).toBeCloseTo(0.5, 4);
-      const swapped = await post('squareness', { ...VALID.squareness, diagonal1: 1165.7616608895662, diagonal2: 1166.6191537944164, gantrySpan: undefined });
+      const swapped = await post('squareness', {
+        ...VALID.squareness,
+        diagonal1: 1165.7616608895662,
+        diagonal2: 1166.6191537944164,
+        gantrySpan: undefined,
+      });
       expect(swapped.body.longDiagonal).toBe(2);
       expect(swapped.body.correction).toBeCloseTo((1000 * 0.5) / 600, 3);
     });
@@ -126,7 +159,13 @@ describe('calculators API', () => {
     it('drive: travel per rev, steps per mm, resolution', async () => {
       const res = await post('drive', VALID.drive);
       expect(res.body).toMatchObject({ travelPerRev: 40, stepsPerMm: 80, resolution: 0.0125 });
-      const rack = await post('drive', { type: 'rack', motorStepsPerRev: 200, microsteps: 8, pinionModule: 1.5, pinionTeeth: 20 });
+      const rack = await post('drive', {
+        type: 'rack',
+        motorStepsPerRev: 200,
+        microsteps: 8,
+        pinionModule: 1.5,
+        pinionTeeth: 20,
+      });
       expect(rack.body.stepsPerMm).toBeCloseTo(16.976527263135505, 10);
     });
 
@@ -137,7 +176,14 @@ describe('calculators API', () => {
       expect(res.body.correctedStepsPerMm).toBeCloseTo(641.2825651302605, 9);
       expect(res.body.errorPercent).toBeCloseTo(-0.2, 10);
       expect(res.body.residualMax).toBeCloseTo(0, 10);
-      const um = await post('travel-trial', { stepsPerMmUsed: 80, moves: [{ commanded: 10000, measured: 10010 }, { commanded: 20000, measured: 20020 }], lengthUnit: 'um' });
+      const um = await post('travel-trial', {
+        stepsPerMmUsed: 80,
+        moves: [
+          { commanded: 10000, measured: 10010 },
+          { commanded: 20000, measured: 20020 },
+        ],
+        lengthUnit: 'um',
+      });
       expect(um.body.scale).toBeCloseTo(1.001, 10);
     });
 
@@ -152,7 +198,14 @@ describe('calculators API', () => {
       expect(res.body.systematic).toBeCloseTo(0.004, 12);
       expect(res.body.meanRange).toBeCloseTo(0.001, 12);
       expect(res.body.accuracy).toBeCloseTo((4 + 2 * Math.SQRT2) / 1000, 12);
-      for (const key of ['repeatabilityUp', 'repeatabilityDown', 'systematicUp', 'systematicDown', 'accuracyUp', 'accuracyDown']) {
+      for (const key of [
+        'repeatabilityUp',
+        'repeatabilityDown',
+        'systematicUp',
+        'systematicDown',
+        'accuracyUp',
+        'accuracyDown',
+      ]) {
         expect(typeof res.body[key]).toBe('number');
       }
       expect(res.body.warnings.map((w: { code: string }) => w.code)).toEqual(['few-runs', 'few-targets']);
@@ -198,23 +251,54 @@ describe('calculators API', () => {
     };
 
     it('too few points', async () => {
-      await expect400('straightness', { positions: [0, 1], readings: [0, 1] }, /positions needs at least 3 values \(got 2\)/);
+      await expect400(
+        'straightness',
+        { positions: [0, 1], readings: [0, 1] },
+        /positions needs at least 3 values \(got 2\)/,
+      );
       await expect400(
         'positioning',
-        { targets: [0, 1], runs: [{ direction: 'up', deviations: [0, 0] }, { direction: 'down', deviations: [0, 0] }, { direction: 'down', deviations: [0, 0] }] },
+        {
+          targets: [0, 1],
+          runs: [
+            { direction: 'up', deviations: [0, 0] },
+            { direction: 'down', deviations: [0, 0] },
+            { direction: 'down', deviations: [0, 0] },
+          ],
+        },
         /at least 2 runs in the up direction \(got 1\)/,
       );
     });
 
     it('mismatched lengths', async () => {
-      await expect400('straightness', { positions: [0, 1, 2], readings: [0, 1] }, /positions and readings must have the same length/);
-      await expect400('parallelism', { positions: [0, 1, 2], railA: [0, 1, 2], railB: [0, 1] }, /positions and railB must have the same length/);
-      await expect400('positioning', { targets: [0, 1, 2], runs: [{ direction: 'up', deviations: [0, 0] }] }, /one value per target/);
+      await expect400(
+        'straightness',
+        { positions: [0, 1, 2], readings: [0, 1] },
+        /positions and readings must have the same length/,
+      );
+      await expect400(
+        'parallelism',
+        { positions: [0, 1, 2], railA: [0, 1, 2], railB: [0, 1] },
+        /positions and railB must have the same length/,
+      );
+      await expect400(
+        'positioning',
+        { targets: [0, 1, 2], runs: [{ direction: 'up', deviations: [0, 0] }] },
+        /one value per target/,
+      );
     });
 
     it('non-finite and non-numeric values', async () => {
-      await expect400('straightness', { positions: [0, 1, 2], readings: [0, 'x', 1] }, /every value in readings must be a finite number/);
-      await expect400('straightness', { positions: [0, 1, 2], readings: [0, null, 1] }, /every value in readings must be a finite number/);
+      await expect400(
+        'straightness',
+        { positions: [0, 1, 2], readings: [0, 'x', 1] },
+        /every value in readings must be a finite number/,
+      );
+      await expect400(
+        'straightness',
+        { positions: [0, 1, 2], readings: [0, null, 1] },
+        /every value in readings must be a finite number/,
+      );
       // JSON numbers beyond double range parse as Infinity.
       const res = await tech
         .post('/api/calc/straightness')
@@ -222,37 +306,105 @@ describe('calculators API', () => {
         .send('{"positions":[0,1,2],"readings":[0,1e999,1]}');
       expect(res.status).toBe(400);
       expect(res.body.message.join(' ')).toMatch(/readings must be a finite number/);
-      await expect400('squareness', { sideX: 'wide', sideY: 600, diagonal1: 1, diagonal2: 1 }, /sideX must be a finite number/);
-      await expect400('flatness', { points: [{ x: 0, y: 0, z: 0 }, { x: 1, y: 0 }, { x: 0, y: 1, z: 0 }] }, /points\.1\.z must be a finite number/);
-      await expect400('travel-trial', { stepsPerMmUsed: 80, moves: [{ commanded: 10 }] }, /moves\.0\.measured must be a finite number/);
+      await expect400(
+        'squareness',
+        { sideX: 'wide', sideY: 600, diagonal1: 1, diagonal2: 1 },
+        /sideX must be a finite number/,
+      );
+      await expect400(
+        'flatness',
+        {
+          points: [
+            { x: 0, y: 0, z: 0 },
+            { x: 1, y: 0 },
+            { x: 0, y: 1, z: 0 },
+          ],
+        },
+        /points\.1\.z must be a finite number/,
+      );
+      await expect400(
+        'travel-trial',
+        { stepsPerMmUsed: 80, moves: [{ commanded: 10 }] },
+        /moves\.0\.measured must be a finite number/,
+      );
     });
 
     it('repeated positions', async () => {
-      await expect400('straightness', { positions: [0, 100, 100], readings: [0, 1, 2] }, /positions repeats the value 100/);
+      await expect400(
+        'straightness',
+        { positions: [0, 100, 100], readings: [0, 1, 2] },
+        /positions repeats the value 100/,
+      );
       await expect400('positioning', { targets: [5, 5], runs: [] }, /targets repeats the value 5/);
-      await expect400('flatness', { points: [{ x: 0, y: 0, z: 0 }, { x: 1, y: 0, z: 0 }, { x: 0, y: 0, z: 1 }] }, /same position/);
+      await expect400(
+        'flatness',
+        {
+          points: [
+            { x: 0, y: 0, z: 0 },
+            { x: 1, y: 0, z: 0 },
+            { x: 0, y: 0, z: 1 },
+          ],
+        },
+        /same position/,
+      );
     });
 
     it('unknown mounting, unit, drive type or direction', async () => {
-      await expect400('screw-speed', { ...VALID['screw-speed'], mounting: 'clamped' }, /mounting must be one of fixed-free, supported-supported, fixed-supported, fixed-fixed/);
-      await expect400('straightness', { ...VALID.straightness, readingUnit: 'cm' }, /readingUnit must be one of mm, um, in, thou/);
-      await expect400('straightness', { ...VALID.straightness, lengthUnit: 'ft' }, /lengthUnit must be one of mm, um, in, thou/);
+      await expect400(
+        'screw-speed',
+        { ...VALID['screw-speed'], mounting: 'clamped' },
+        /mounting must be one of fixed-free, supported-supported, fixed-supported, fixed-fixed/,
+      );
+      await expect400(
+        'straightness',
+        { ...VALID.straightness, readingUnit: 'cm' },
+        /readingUnit must be one of mm, um, in, thou/,
+      );
+      await expect400(
+        'straightness',
+        { ...VALID.straightness, lengthUnit: 'ft' },
+        /lengthUnit must be one of mm, um, in, thou/,
+      );
       await expect400('drive', { ...VALID.drive, type: 'chain' }, /type must be one of screw, belt, rack/);
-      await expect400('positioning', { targets: [0], runs: [{ direction: 'left', deviations: [0] }] }, /runs\.0\.direction must be up or down/);
+      await expect400(
+        'positioning',
+        { targets: [0], runs: [{ direction: 'left', deviations: [0] }] },
+        /runs\.0\.direction must be up or down/,
+      );
     });
 
     it('values the engine refuses, and fields nobody asked for', async () => {
-      await expect400('drive', { type: 'screw', motorStepsPerRev: 200, microsteps: 16 }, /lead is required for a screw drive/);
-      await expect400('screw-speed', { ...VALID['screw-speed'], rootDiameter: 20 }, /rootDiameter must not be larger than nominalDiameter/);
-      await expect400('squareness', { sideX: 10, sideY: 10, diagonal1: 1000, diagonal2: 1 }, /diagonals differ by more than/);
+      await expect400(
+        'drive',
+        { type: 'screw', motorStepsPerRev: 200, microsteps: 16 },
+        /lead is required for a screw drive/,
+      );
+      await expect400(
+        'screw-speed',
+        { ...VALID['screw-speed'], rootDiameter: 20 },
+        /rootDiameter must not be larger than nominalDiameter/,
+      );
+      await expect400(
+        'squareness',
+        { sideX: 10, sideY: 10, diagonal1: 1000, diagonal2: 1 },
+        /diagonals differ by more than/,
+      );
       await expect400('travel-trial', { stepsPerMmUsed: 80, moves: [] }, /moves needs at least 1 value/);
       await expect400('straightness', { ...VALID.straightness, colour: 'red' }, /property colour should not exist/);
-      await expect400('bolt-down', { ...VALID['bolt-down'], readings: [{ hole: 99, reading: 0 }] }, /readings names hole 99/);
+      await expect400(
+        'bolt-down',
+        { ...VALID['bolt-down'], readings: [{ hole: 99, reading: 0 }] },
+        /readings names hole 99/,
+      );
     });
 
     it('refuses more than 200 000 points, and accepts 200 000', async () => {
       const many = Array.from({ length: 200_001 }, (_, i) => i);
-      await expect400('straightness', { positions: many, readings: many }, /positions has more than 200000 values; at most 200000 are accepted/);
+      await expect400(
+        'straightness',
+        { positions: many, readings: many },
+        /positions has more than 200000 values; at most 200000 are accepted/,
+      );
       const most = many.slice(1);
       const ok = await post('straightness', { positions: most, readings: most.map((v) => (v % 7) * 0.001) });
       expect(ok.status).toBe(200);

@@ -14,8 +14,14 @@ import { approvals } from '../src/database/schema/index.js';
 const pdfText = (pdf: Buffer) => execFileSync('pdftotext', ['-layout', '-', '-'], { input: pdf }).toString('utf8');
 const flat = (text: string) => text.replace(/\s+/g, ' ');
 
-const FEW_STATIONS = { code: 'few-stations', message: 'Only 5 stations were read along 800 mm of rail; 9 or more show a bow.' };
-const COARSE = { code: 'coarse-instrument', message: 'The indicator reads 10 µm, coarser than a quarter of the 20 µm target.' };
+const FEW_STATIONS = {
+  code: 'few-stations',
+  message: 'Only 5 stations were read along 800 mm of rail; 9 or more show a bow.',
+};
+const COARSE = {
+  code: 'coarse-instrument',
+  message: 'The indicator reads 10 µm, coarser than a quarter of the 20 µm target.',
+};
 
 /** Checks of the kinds the certificate draws as tables or with value labels, in the shapes their modules send. */
 function extraChecks(machineId: string): ReadinessCheck[] {
@@ -40,7 +46,10 @@ function extraChecks(machineId: string): ReadinessCheck[] {
         y: { label: 'Height', unit: 'mm' },
         lines: [0, 750, 1500].map((y, r) => ({
           label: `Row ${r + 1} · Y = ${y} mm`,
-          points: [0, 500, 1000, 1500].map((x, c): [number, number] => [x, Number((0.05 * r + 0.13 * c + (r === 1 && c === 2 ? 0.3 : 0)).toFixed(2))]),
+          points: [0, 500, 1000, 1500].map((x, c): [number, number] => [
+            x,
+            Number((0.05 * r + 0.13 * c + (r === 1 && c === 2 ? 0.3 : 0)).toFixed(2)),
+          ]),
         })),
         limits: [{ label: 'Target 0.75 mm', value: 0.75 }],
       },
@@ -60,9 +69,21 @@ function extraChecks(machineId: string): ReadinessCheck[] {
         y: { label: 'Deviation from nominal', unit: 'mm' },
         lines: [
           { label: 'Square, X side', points: [[400, -0.4]] },
-          { label: '±1.2 mm: ISO 9013 range 4, 315–1000 mm in 6 mm plate', points: [[400, -1.2], [400, 1.2]] },
+          {
+            label: '±1.2 mm: ISO 9013 range 4, 315–1000 mm in 6 mm plate',
+            points: [
+              [400, -1.2],
+              [400, 1.2],
+            ],
+          },
           { label: 'Circle, X diameter', points: [[100, 0.15]] },
-          { label: '±0.9 mm: ISO 9013 range 4, 35–125 mm in 6 mm plate', points: [[100, -0.9], [100, 0.9]] },
+          {
+            label: '±0.9 mm: ISO 9013 range 4, 35–125 mm in 6 mm plate',
+            points: [
+              [100, -0.9],
+              [100, 0.9],
+            ],
+          },
         ],
       },
       warnings: [],
@@ -79,7 +100,16 @@ function extraChecks(machineId: string): ReadinessCheck[] {
         title: 'Backlash at each position',
         x: { label: 'Position', unit: 'mm' },
         y: { label: 'Backlash', unit: 'um' },
-        lines: [{ label: 'Backlash', points: [[20, 31], [760, 38], [1500, 27]] }],
+        lines: [
+          {
+            label: 'Backlash',
+            points: [
+              [20, 31],
+              [760, 38],
+              [1500, 27],
+            ],
+          },
+        ],
         limits: [{ label: 'Target', value: 50 }],
       },
       warnings: [COARSE],
@@ -97,12 +127,43 @@ function extraChecks(machineId: string): ReadinessCheck[] {
         x: { label: 'Target', unit: 'mm' },
         y: { label: 'Deviation', unit: 'um' },
         lines: [
-          { label: 'Mean up', points: [[0, 4], [750, 12], [1500, 9]] },
-          { label: 'Mean up + 2s', points: [[0, 10], [750, 18], [1500, 16]] },
-          { label: 'Mean up − 2s', points: [[0, -2], [750, 6], [1500, 2]] },
-          { label: 'Mean down', points: [[0, -8], [750, -2], [1500, -5]] },
+          {
+            label: 'Mean up',
+            points: [
+              [0, 4],
+              [750, 12],
+              [1500, 9],
+            ],
+          },
+          {
+            label: 'Mean up + 2s',
+            points: [
+              [0, 10],
+              [750, 18],
+              [1500, 16],
+            ],
+          },
+          {
+            label: 'Mean up − 2s',
+            points: [
+              [0, -2],
+              [750, 6],
+              [1500, 2],
+            ],
+          },
+          {
+            label: 'Mean down',
+            points: [
+              [0, -8],
+              [750, -2],
+              [1500, -5],
+            ],
+          },
         ],
-        limits: [{ label: 'Accuracy target ±50 µm', value: 50 }, { label: '', value: -50 }],
+        limits: [
+          { label: 'Accuracy target ±50 µm', value: 50 },
+          { label: '', value: -50 },
+        ],
       },
       warnings: [],
     },
@@ -144,11 +205,14 @@ describe('certificate: warnings under their checks, charts and tables from the s
     expect(row.snapshot.checks.find((c) => c.key === 'fake-straightness:Y1')!.warnings).toEqual([FEW_STATIONS]);
     expect(row.snapshot.checks.find((c) => c.key === 'fake-backlash:X')!.warnings).toEqual([COARSE]);
 
-    const res = await ws.as.viewer.get(`/api/machines/${machineId}/certificate.pdf`).buffer(true).parse((r, cb) => {
-      const chunks: Buffer[] = [];
-      r.on('data', (c: Buffer) => chunks.push(c));
-      r.on('end', () => cb(null, Buffer.concat(chunks)));
-    });
+    const res = await ws.as.viewer
+      .get(`/api/machines/${machineId}/certificate.pdf`)
+      .buffer(true)
+      .parse((r, cb) => {
+        const chunks: Buffer[] = [];
+        r.on('data', (c: Buffer) => chunks.push(c));
+        r.on('end', () => cb(null, Buffer.concat(chunks)));
+      });
     expect(res.status).toBe(200);
     pdf = res.body as Buffer;
     if (process.env.CERTIFICATE_PDF_OUT) writeFileSync(process.env.CERTIFICATE_PDF_OUT, pdf);

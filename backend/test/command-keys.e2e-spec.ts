@@ -17,7 +17,8 @@ describe('commands with a client-made key run once', () => {
   afterAll(() => app.close());
 
   const machine = (name: string) => ({ name, kind: 'router', workArea: { x: 900, y: 600 } });
-  const named = async (name: string) => ((await ws.as.viewer.get('/api/machines')).body as { name: string }[]).filter((m) => m.name === name).length;
+  const named = async (name: string) =>
+    ((await ws.as.viewer.get('/api/machines')).body as { name: string }[]).filter((m) => m.name === name).length;
 
   it('a repeat gets the first answer and records nothing more', async () => {
     const key = randomUUID();
@@ -33,7 +34,11 @@ describe('commands with a client-made key run once', () => {
 
   it('parallel sendings of one key record one machine, and all get its answer', async () => {
     const key = randomUUID();
-    const answers = await Promise.all(Array.from({ length: 6 }, () => ws.as.owner.post('/api/machines').set('Idempotency-Key', key).send(machine('Raced router'))));
+    const answers = await Promise.all(
+      Array.from({ length: 6 }, () =>
+        ws.as.owner.post('/api/machines').set('Idempotency-Key', key).send(machine('Raced router')),
+      ),
+    );
     expect(answers.map((a) => a.status)).toEqual(Array(6).fill(201));
     expect(new Set(answers.map((a) => a.body.id)).size).toBe(1);
     expect(await named('Raced router')).toBe(1);
@@ -52,13 +57,22 @@ describe('commands with a client-made key run once', () => {
 
   it('one key for two commands is a 422; a malformed key is a 400 naming the header', async () => {
     const key = randomUUID();
-    const created = await ws.as.owner.post('/api/machines').set('Idempotency-Key', key).send(machine('Two-command router'));
+    const created = await ws.as.owner
+      .post('/api/machines')
+      .set('Idempotency-Key', key)
+      .send(machine('Two-command router'));
     expect(created.status).toBe(201);
-    const patched = await ws.as.owner.patch(`/api/machines/${created.body.id}`).set('Idempotency-Key', key).send({ notes: 'reused key' });
+    const patched = await ws.as.owner
+      .patch(`/api/machines/${created.body.id}`)
+      .set('Idempotency-Key', key)
+      .send({ notes: 'reused key' });
     expect(patched.status).toBe(422);
     expect(patched.body.message).toMatch(/another command/);
     for (const bad of ['short', 'has spaces in it, really', 'x'.repeat(101), '<script>alert(1)</script>xx']) {
-      const res = await ws.as.owner.post('/api/machines').set('Idempotency-Key', bad).send(machine('Badly keyed router'));
+      const res = await ws.as.owner
+        .post('/api/machines')
+        .set('Idempotency-Key', bad)
+        .send(machine('Badly keyed router'));
       expect(res.status).toBe(400);
       expect(res.body.message).toMatch(/Idempotency-Key/);
     }
@@ -67,7 +81,10 @@ describe('commands with a client-made key run once', () => {
 
   it('a command that failed keeps no key: sent again corrected, it records', async () => {
     const key = randomUUID();
-    const refused = await ws.as.owner.post('/api/machines').set('Idempotency-Key', key).send({ ...machine('Corrected router'), kind: 'spaceship' });
+    const refused = await ws.as.owner
+      .post('/api/machines')
+      .set('Idempotency-Key', key)
+      .send({ ...machine('Corrected router'), kind: 'spaceship' });
     expect(refused.status).toBe(400);
     const fixed = await ws.as.owner.post('/api/machines').set('Idempotency-Key', key).send(machine('Corrected router'));
     expect(fixed.status).toBe(201);

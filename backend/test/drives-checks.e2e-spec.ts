@@ -11,10 +11,19 @@ import { lockAsApproved } from './support/stand-in-approval.js';
 // CONSTRUCTED ISO 230-2 data set of the reference folder (5 targets, 5 runs each way, µm),
 // computed there from the formulas written from memory: an internal consistency check.
 const iso = referenceJson('iso230_2_constructed_example_expected.json');
-const rows = referenceCsv('iso230_2_constructed_example.csv') as { target_mm: number; direction: string; run: number; deviation_um: number }[];
+const rows = referenceCsv('iso230_2_constructed_example.csv') as {
+  target_mm: number;
+  direction: string;
+  run: number;
+  deviation_um: number;
+}[];
 const ISO_TARGETS = [...new Set(rows.map((r) => r.target_mm))].sort((a, b) => a - b);
 const runOf = (direction: string) =>
-  [1, 2, 3, 4, 5].map((run) => ISO_TARGETS.map((t) => rows.find((r) => r.direction === direction && r.run === run && r.target_mm === t)!.deviation_um));
+  [1, 2, 3, 4, 5].map((run) =>
+    ISO_TARGETS.map(
+      (t) => rows.find((r) => r.direction === direction && r.run === run && r.target_mm === t)!.deviation_um,
+    ),
+  );
 const ISO_UP = runOf('up');
 const ISO_DOWN = runOf('down');
 
@@ -58,15 +67,22 @@ describe('travel trials and repeat-and-reverse runs', () => {
     // Commanded in mm, measured in inches: the calculators' form; the record takes one lengthUnit for both,
     // so the measured moves go to it in mm (× 25.4 exactly, unit_facts.json).
     const movesMm = moves.map((m) => ({ commanded: m.commanded, measured: (m.measured * 254) / 10 }));
-    const res = await ws.as.technician.post(`/api/axes/${axisId}/travel-trials`).send({ lengthUnit: 'mm', stepsPerMmUsed: 640, moves: movesMm });
+    const res = await ws.as.technician
+      .post(`/api/axes/${axisId}/travel-trials`)
+      .send({ lengthUnit: 'mm', stepsPerMmUsed: 640, moves: movesMm });
     expect(res.status).toBe(201);
-    const engine = evaluateTravelTrial({ stepsPerMmUsed: 640, moves: moves.map((m) => ({ commandedMm: m.commanded, measuredMm: (m.measured * 254) / 10 })) });
+    const engine = evaluateTravelTrial({
+      stepsPerMmUsed: 640,
+      moves: moves.map((m) => ({ commandedMm: m.commanded, measuredMm: (m.measured * 254) / 10 })),
+    });
     expect(res.body.result.correctedStepsPerMm).toBe(engine.correctedStepsPerMm);
     expect(res.body.result.errorPercent).toBe(engine.errorPercent);
     expect(res.body.result.offset).toBe(engine.offsetMm);
     expect(res.body.result.residuals).toEqual(engine.moves.map((m) => m.residualMm));
     expect(res.body.moves).toEqual(movesMm); // kept as entered
-    const calc = await ws.as.viewer.post('/api/calc/travel-trial').send({ lengthUnit: 'mm', stepsPerMmUsed: 640, moves: movesMm });
+    const calc = await ws.as.viewer
+      .post('/api/calc/travel-trial')
+      .send({ lengthUnit: 'mm', stepsPerMmUsed: 640, moves: movesMm });
     expect(calc.status).toBe(200);
     expect(res.body.result.correctedStepsPerMm).toBe(calc.body.correctedStepsPerMm);
     expect(res.body.result.residualMax).toBe(calc.body.residualMax);
@@ -79,14 +95,27 @@ describe('travel trials and repeat-and-reverse runs', () => {
     const res = await ws.as.technician.post(`/api/axes/${axisId}/travel-trials/${created.body.id}/apply`);
     expect(res.status).toBe(200);
     expect(res.body.stepsPerMm).toBe(641.2826); // four decimals, as a controller takes it
-    expect(res.body.stepsHistory.at(-1)).toMatchObject({ from: before, to: 641.2826, reason: 'travel-trial', trialId: created.body.id });
+    expect(res.body.stepsHistory.at(-1)).toMatchObject({
+      from: before,
+      to: 641.2826,
+      reason: 'travel-trial',
+      trialId: created.body.id,
+    });
     const trial = await ws.as.viewer.get(`/api/axes/${axisId}/travel-trials/${created.body.id}`);
     expect(trial.body.appliedAt).toEqual(expect.any(String));
     // Applying the same trial again (a double click, a retry) changes nothing and answers the axis.
     const again = await ws.as.technician.post(`/api/axes/${axisId}/travel-trials/${created.body.id}/apply`);
-    expect([again.status, again.body.stepsPerMm, again.body.stepsHistory.length]).toEqual([200, 641.2826, res.body.stepsHistory.length]);
+    expect([again.status, again.body.stepsPerMm, again.body.stepsHistory.length]).toEqual([
+      200,
+      641.2826,
+      res.body.stepsHistory.length,
+    ]);
     const history = await ws.as.viewer.get(`/api/machines/${machineId}/history?limit=200`);
-    expect(history.body.entries[0]).toMatchObject({ recordType: 'axis', recordId: axisId, changes: { stepsPerMm: { from: before, to: 641.2826 } } });
+    expect(history.body.entries[0]).toMatchObject({
+      recordType: 'axis',
+      recordId: axisId,
+      changes: { stepsPerMm: { from: before, to: 641.2826 } },
+    });
     // The list of trials is newest first.
     const list = await ws.as.builder.get(`/api/axes/${axisId}/travel-trials`);
     expect(list.status).toBe(200);
@@ -95,7 +124,14 @@ describe('travel trials and repeat-and-reverse runs', () => {
 
   it('stepsPerMmUsed defaults to the axis value; throughOrigin fits without an offset', async () => {
     const id = await newAxis(ws, machineId, screwAxis('Y'));
-    const res = await ws.as.owner.post(`/api/axes/${id}/travel-trials`).send({ lengthUnit: 'mm', moves: [{ commanded: 200, measured: 200.05 }, { commanded: 400, measured: 400.09 }], throughOrigin: true });
+    const res = await ws.as.owner.post(`/api/axes/${id}/travel-trials`).send({
+      lengthUnit: 'mm',
+      moves: [
+        { commanded: 200, measured: 200.05 },
+        { commanded: 400, measured: 400.09 },
+      ],
+      throughOrigin: true,
+    });
     expect(res.status).toBe(201);
     expect(res.body.stepsPerMmUsed).toBe(640);
     expect(res.body.result.offset).toBe(0);
@@ -147,7 +183,10 @@ describe('travel trials and repeat-and-reverse runs', () => {
   const isoBody = (readingUnit = 'um') => ({
     readingUnit,
     targets: ISO_TARGETS,
-    runs: [...ISO_UP.map((d) => ({ direction: 'up', deviations: d })), ...ISO_DOWN.map((d) => ({ direction: 'down', deviations: d }))],
+    runs: [
+      ...ISO_UP.map((d) => ({ direction: 'up', deviations: d })),
+      ...ISO_DOWN.map((d) => ({ direction: 'down', deviations: d })),
+    ],
   });
 
   it('a repeat-and-reverse run gives the ISO 230-2 values of the constructed example', async () => {
@@ -171,12 +210,19 @@ describe('travel trials and repeat-and-reverse runs', () => {
     expect(res.body.checks.accuracy.pass).toBe(true);
     expect(res.body.status).toBe('within-target');
     // Same data through the engine and the calculators API.
-    const engine = evaluatePositioning({ targetsMm: ISO_TARGETS, runs: isoBody().runs.map((x) => ({ direction: x.direction as 'up' | 'down', deviationsMm: x.deviations.map((d) => d / 1000) })) });
+    const engine = evaluatePositioning({
+      targetsMm: ISO_TARGETS,
+      runs: isoBody().runs.map((x) => ({
+        direction: x.direction as 'up' | 'down',
+        deviationsMm: x.deviations.map((d) => d / 1000),
+      })),
+    });
     expect(r.accuracy).toBe(engine.accuracyMm);
     expect(r.repeatability).toBe(engine.repeatabilityMm);
     const calc = await ws.as.viewer.post('/api/calc/positioning').send(isoBody());
     expect(calc.status).toBe(200);
-    for (const k of ['accuracy', 'repeatability', 'reversal', 'systematic', 'meanRange', 'reversalMean'] as const) expect(r[k]).toBe(calc.body[k]);
+    for (const k of ['accuracy', 'repeatability', 'reversal', 'systematic', 'meanRange', 'reversalMean'] as const)
+      expect(r[k]).toBe(calc.body[k]);
     expect(r.targets).toEqual(calc.body.targets);
   });
 
@@ -189,10 +235,22 @@ describe('travel trials and repeat-and-reverse runs', () => {
   });
 
   it('fewer than 5 runs a direction are kept with a warning', async () => {
-    const body = { readingUnit: 'um', targets: ISO_TARGETS, runs: [...ISO_UP.slice(0, 3).map((d) => ({ direction: 'up', deviations: d })), ...ISO_DOWN.slice(0, 3).map((d) => ({ direction: 'down', deviations: d }))] };
+    const body = {
+      readingUnit: 'um',
+      targets: ISO_TARGETS,
+      runs: [
+        ...ISO_UP.slice(0, 3).map((d) => ({ direction: 'up', deviations: d })),
+        ...ISO_DOWN.slice(0, 3).map((d) => ({ direction: 'down', deviations: d })),
+      ],
+    };
     const res = await ws.as.technician.post(`/api/axes/${axisId}/positioning-runs`).send(body);
     expect(res.status).toBe(201);
-    expect(res.body.warnings).toEqual([expect.objectContaining({ code: 'few-runs', message: expect.stringMatching(/asks for 5 runs in each direction \(got 3 up, 3 down\)/) })]);
+    expect(res.body.warnings).toEqual([
+      expect.objectContaining({
+        code: 'few-runs',
+        message: expect.stringMatching(/asks for 5 runs in each direction \(got 3 up, 3 down\)/),
+      }),
+    ]);
     // Kept with the record: the single read, the list and the readiness board return it.
     const again = await ws.as.viewer.get(`/api/axes/${axisId}/positioning-runs/${res.body.id}`);
     expect(again.body.warnings).toEqual(res.body.warnings);
@@ -205,13 +263,25 @@ describe('travel trials and repeat-and-reverse runs', () => {
 
   const good = isoBody();
   it.each([
-    [{ ...good, runs: [...good.runs.slice(0, 9), { direction: 'down', deviations: [1, 2, 3] }] }, /runs\[9\].deviations must have one value per target \(5, got 3\)/],
+    [
+      { ...good, runs: [...good.runs.slice(0, 9), { direction: 'down', deviations: [1, 2, 3] }] },
+      /runs\[9\].deviations must have one value per target \(5, got 3\)/,
+    ],
     [{ ...good, runs: [good.runs[0], ...good.runs.slice(5)] }, /at least 2 runs in the up direction/],
     [{ ...good, runs: good.runs.slice(0, 5) }, /at least 2 runs in the down direction/],
-    [{ ...good, targets: [0, 250, 125, 375, 500] }, /targets must rise along the axis \(targets\[2\] = 125 is not above 250\)/],
+    [
+      { ...good, targets: [0, 250, 125, 375, 500] },
+      /targets must rise along the axis \(targets\[2\] = 125 is not above 250\)/,
+    ],
     [{ ...good, targets: [0, 125, 125, 375, 500] }, /targets\[2\] = 125 is not above 125/],
-    [{ ...good, runs: [{ direction: 'sideways', deviations: [1, 2, 3, 4, 5] }] }, /runs\[\].direction must be up or down/],
-    [{ ...good, runs: [{ direction: 'up', deviations: [1, 'x', 3, 4, 5] }] }, /every value in runs\[\].deviations must be a finite number/],
+    [
+      { ...good, runs: [{ direction: 'sideways', deviations: [1, 2, 3, 4, 5] }] },
+      /runs\[\].direction must be up or down/,
+    ],
+    [
+      { ...good, runs: [{ direction: 'up', deviations: [1, 'x', 3, 4, 5] }] },
+      /every value in runs\[\].deviations must be a finite number/,
+    ],
     [{ ...good, targets: 'all of them' }, /targets must be a list/],
     [{ ...good, readingUnit: 'cubit' }, /readingUnit must be one of/],
     [{ ...good, unit: 'um' }, /unit is no longer accepted: send lengthUnit and readingUnit/],
@@ -242,16 +312,24 @@ describe('travel trials and repeat-and-reverse runs', () => {
     expect(patch.status).toBe(409);
     expect((await ws.as.technician.get(`/api/axes/${id}`)).body.locked).toBe(true);
     // Records kept by an earlier approval (the machine since reopened) do not stop a recalibration.
-    const again = await ws.as.technician.post(`/api/axes/${id}/travel-trials`).send({ lengthUnit: 'mm', moves: [{ commanded: 100, measured: 100.1 }] });
+    const again = await ws.as.technician
+      .post(`/api/axes/${id}/travel-trials`)
+      .send({ lengthUnit: 'mm', moves: [{ commanded: 100, measured: 100.1 }] });
     const reapplied = await ws.as.technician.post(`/api/axes/${id}/travel-trials/${again.body.id}/apply`);
     expect(reapplied.status).toBe(200);
-    expect(reapplied.body.stepsHistory.at(-1)).toMatchObject({ from: 641.2826, reason: 'travel-trial', trialId: again.body.id });
+    expect(reapplied.body.stepsHistory.at(-1)).toMatchObject({
+      from: 641.2826,
+      reason: 'travel-trial',
+      trialId: again.body.id,
+    });
   });
 
   it('parallel applies of one trial change the axis once', async () => {
     const id = await newAxis(ws, machineId, screwAxis('A'));
     const trial = await ws.as.technician.post(`/api/axes/${id}/travel-trials`).send(trialBody);
-    const results = await Promise.all([1, 2, 3, 4].map(() => ws.as.technician.post(`/api/axes/${id}/travel-trials/${trial.body.id}/apply`)));
+    const results = await Promise.all(
+      [1, 2, 3, 4].map(() => ws.as.technician.post(`/api/axes/${id}/travel-trials/${trial.body.id}/apply`)),
+    );
     expect(results.map((r) => r.status)).toEqual([200, 200, 200, 200]);
     const axis = await ws.as.viewer.get(`/api/axes/${id}`);
     expect(axis.body.stepsPerMm).toBe(641.2826);
@@ -273,20 +351,46 @@ describe('travel trials and repeat-and-reverse runs', () => {
     await newAxis(ws, m, { ...screwAxis('Y'), measuredTravelMm: 605 });
     const ref = await app.get(MachinesService).getRef({ workshopId: ws.id }, m);
     let checks = await app.get(ReadinessRegistry).checksFor(ref);
-    const mine = checks.filter((c) => ['travel-trial', 'positioning', 'speed-check', 'travel-envelope'].includes(c.kind));
-    expect(mine.map((c) => c.kind).sort()).toEqual(['positioning', 'positioning', 'speed-check', 'speed-check', 'travel-envelope', 'travel-trial', 'travel-trial']);
+    const mine = checks.filter((c) =>
+      ['travel-trial', 'positioning', 'speed-check', 'travel-envelope'].includes(c.kind),
+    );
+    expect(mine.map((c) => c.kind).sort()).toEqual([
+      'positioning',
+      'positioning',
+      'speed-check',
+      'speed-check',
+      'travel-envelope',
+      'travel-trial',
+      'travel-trial',
+    ]);
     const trialCheck = mine.find((c) => c.key === `travel-trial:${x}`)!;
-    expect(trialCheck).toMatchObject({ status: 'not-started', subject: 'Axis X', result: null, place: { machineId: m, axisId: x } });
+    expect(trialCheck).toMatchObject({
+      status: 'not-started',
+      subject: 'Axis X',
+      result: null,
+      place: { machineId: m, axisId: x },
+    });
     // Y travels 605 mm; the router needs 600 + 10 mm.
-    expect(mine.find((c) => c.kind === 'travel-envelope')).toMatchObject({ status: 'outside-target', result: { value: 5, unit: 'mm' }, target: { value: 10, unit: 'mm' } });
+    expect(mine.find((c) => c.kind === 'travel-envelope')).toMatchObject({
+      status: 'outside-target',
+      result: { value: 5, unit: 'mm' },
+      target: { value: 10, unit: 'mm' },
+    });
     // 5000 mm/min at 5 mm lead = 1000 rpm, permissible 1947.9 rpm (THK λ2 = 15.1, 12.9 mm root, 1000 mm): 48.66 % headroom
     expect(mine.find((c) => c.key === `speed-check:${x}`)!.result).toMatchObject({ unit: '%' });
     expect(mine.find((c) => c.key === `speed-check:${x}`)!.result!.value).toBeCloseTo((1 - 1000 / 1947.9) * 100, 9);
-    const within = await ws.as.technician.post(`/api/axes/${x}/travel-trials`).send({ lengthUnit: 'mm', moves: [{ commanded: 500, measured: 500.1 }] });
+    const within = await ws.as.technician
+      .post(`/api/axes/${x}/travel-trials`)
+      .send({ lengthUnit: 'mm', moves: [{ commanded: 500, measured: 500.1 }] });
     expect(within.body.status).toBe('within-target'); // 0.02 % ≤ 0.05 %
     checks = await app.get(ReadinessRegistry).checksFor(ref);
     const trialCheck2 = checks.find((c) => c.key === `travel-trial:${x}`)!;
-    expect(trialCheck2).toMatchObject({ status: 'within-target', recordType: 'travel-trial', recordId: within.body.id, result: { unit: '%' } });
+    expect(trialCheck2).toMatchObject({
+      status: 'within-target',
+      recordType: 'travel-trial',
+      recordId: within.body.id,
+      result: { unit: '%' },
+    });
     expect(trialCheck2.series!.lines[0].points[0][0]).toBe(500);
     expect(trialCheck2.series!.lines[0].points[0][1]).toBeCloseTo(0.1, 12);
     await ws.as.technician.post(`/api/axes/${x}/positioning-runs`).send(isoBody());
@@ -294,7 +398,14 @@ describe('travel trials and repeat-and-reverse runs', () => {
     const runCheck = checks.find((c) => c.key === `positioning:${x}`)!;
     expect(runCheck.status).toBe('within-target');
     // chart series in µm: the constructed example's mean up at 125 mm is 5 µm, mean down 1 µm
-    expect(runCheck.series!.lines.map((l) => l.label)).toEqual(['Mean up', 'Mean up + 2s', 'Mean up − 2s', 'Mean down', 'Mean down + 2s', 'Mean down − 2s']);
+    expect(runCheck.series!.lines.map((l) => l.label)).toEqual([
+      'Mean up',
+      'Mean up + 2s',
+      'Mean up − 2s',
+      'Mean down',
+      'Mean down + 2s',
+      'Mean down − 2s',
+    ]);
     const line = (label: string) => runCheck.series!.lines.find((l) => l.label === label)!.points[1][1];
     expect(line('Mean up')).toBeCloseTo(iso.per_target[1].mean_up, 9);
     expect(line('Mean down')).toBeCloseTo(iso.per_target[1].mean_down, 9);
@@ -302,7 +413,10 @@ describe('travel trials and repeat-and-reverse runs', () => {
     expect(line('Mean up + 2s')).toBeCloseTo(iso.per_target[1].mean_up + 2 * iso.per_target[1].s_up, 9);
     expect(line('Mean down − 2s')).toBeCloseTo(iso.per_target[1].mean_down - 2 * iso.per_target[1].s_down, 9);
     // Limits: a band as wide as the accuracy target, centred on zero.
-    const sets = (await ws.as.viewer.get('/api/target-sets')).body as { id: string; targets: Record<string, { value: number; unit: string }> }[];
+    const sets = (await ws.as.viewer.get('/api/target-sets')).body as {
+      id: string;
+      targets: Record<string, { value: number; unit: string }>;
+    }[];
     const accuracy = sets.find((set) => set.id === ref.targetSetId)!.targets.positioningAccuracy;
     const umPer: Record<string, number> = { mm: 1000, um: 1, in: 25400, thou: 25.4 }; // 1 in = 25.4 mm exactly
     const [upper, lower] = runCheck.series!.limits!;
@@ -310,6 +424,9 @@ describe('travel trials and repeat-and-reverse runs', () => {
     expect(upper.value + lower.value).toBeCloseTo(0, 12);
     // The Drives tab's list carries the same statuses.
     const list = await ws.as.viewer.get(`/api/machines/${m}/axes`);
-    expect(list.body.find((a: { id: string }) => a.id === x).checks.travelTrial).toMatchObject({ status: 'within-target', recordId: within.body.id });
+    expect(list.body.find((a: { id: string }) => a.id === x).checks.travelTrial).toMatchObject({
+      status: 'within-target',
+      recordId: within.body.id,
+    });
   });
 });

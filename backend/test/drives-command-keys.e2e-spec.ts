@@ -23,14 +23,29 @@ describe('drive, frame and photo entries with a client-made key are recorded onc
   });
   afterAll(() => app.close());
 
-  const trial = { lengthUnit: 'mm', readingUnit: 'mm', moves: [{ commanded: 200, measured: 199.8 }, { commanded: 400, measured: 399.6 }, { commanded: 800, measured: 799.2 }] };
+  const trial = {
+    lengthUnit: 'mm',
+    readingUnit: 'mm',
+    moves: [
+      { commanded: 200, measured: 199.8 },
+      { commanded: 400, measured: 399.6 },
+      { commanded: 800, measured: 799.2 },
+    ],
+  };
   const listOf = (body: unknown) => (Array.isArray(body) ? body : (body as { items: unknown[] }).items);
 
   it('a travel trial sent three times, twice at once, is one trial with all three moves', async () => {
     const key = randomUUID();
-    const first = await ws.as.technician.post(`/api/axes/${axisId}/travel-trials`).set('Idempotency-Key', key).send(trial);
+    const first = await ws.as.technician
+      .post(`/api/axes/${axisId}/travel-trials`)
+      .set('Idempotency-Key', key)
+      .send(trial);
     expect(first.status).toBe(201);
-    const again = await Promise.all([0, 1].map(() => ws.as.technician.post(`/api/axes/${axisId}/travel-trials`).set('Idempotency-Key', key).send(trial)));
+    const again = await Promise.all(
+      [0, 1].map(() =>
+        ws.as.technician.post(`/api/axes/${axisId}/travel-trials`).set('Idempotency-Key', key).send(trial),
+      ),
+    );
     expect(again.map((a) => a.status)).toEqual([201, 201]);
     expect(again.map((a) => a.body.id)).toEqual([first.body.id, first.body.id]);
     expect(again.every((a) => a.headers['idempotent-replay'] === 'true')).toBe(true);
@@ -43,7 +58,11 @@ describe('drive, frame and photo entries with a client-made key are recorded onc
   it('a diagonal check sent twice is one check', async () => {
     const key = randomUUID();
     const body = { lengthUnit: 'mm', sideX: 800, sideY: 500, diagonal1: 943.4, diagonal2: 943.6 };
-    const answers = await Promise.all([0, 1].map(() => ws.as.builder.post(`/api/machines/${machineId}/diagonal-checks`).set('Idempotency-Key', key).send(body)));
+    const answers = await Promise.all(
+      [0, 1].map(() =>
+        ws.as.builder.post(`/api/machines/${machineId}/diagonal-checks`).set('Idempotency-Key', key).send(body),
+      ),
+    );
     expect(answers.map((a) => a.status)).toEqual([201, 201]);
     expect(answers[0].body.id).toBe(answers[1].body.id);
     expect(listOf((await ws.as.viewer.get(`/api/machines/${machineId}/diagonal-checks`)).body)).toHaveLength(1);
@@ -53,7 +72,12 @@ describe('drive, frame and photo entries with a client-made key are recorded onc
     const key = randomUUID();
     const png = await makePng(40, 30);
     const send = () =>
-      ws.as.builder.post('/api/evidence').set('Idempotency-Key', key).field('subjectType', 'machine').field('subjectId', machineId).attach('file', png, 'gantry.png');
+      ws.as.builder
+        .post('/api/evidence')
+        .set('Idempotency-Key', key)
+        .field('subjectType', 'machine')
+        .field('subjectId', machineId)
+        .attach('file', png, 'gantry.png');
     const first = await send();
     expect(first.status).toBe(201);
     const again = await send();

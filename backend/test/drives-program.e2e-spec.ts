@@ -21,7 +21,13 @@ function expectSafeProgram(text: string, letter: string, travelMm: number, units
   // No motion or axis word before the safety line, and no word of any kind before it.
   expect(run.firstMotionAt).toBeGreaterThan(run.safetyAt);
   expect(run.blocks.slice(0, run.safetyAt).every((b) => b.words.length === 0)).toBe(true);
-  expect(run.modalAfterSafety).toMatchObject({ plane: 'G17', units, distance: 'G90', feedMode: 'G94', cutterComp: 'G40' });
+  expect(run.modalAfterSafety).toMatchObject({
+    plane: 'G17',
+    units,
+    distance: 'G90',
+    feedMode: 'G94',
+    cutterComp: 'G40',
+  });
   // RS-274/NGC: one word of each modal group per block.
   expect(run.groupClashes).toEqual([]);
   expect(run.moves.length).toBeGreaterThan(0);
@@ -53,10 +59,15 @@ describe('test programs, speed check and travel envelope', () => {
 
   it('a repeat-and-reverse program: every target in order, from its side, past the ends by the overrun, at the feed asked', async () => {
     const targets = [20, 215.3, 431.7, 640.2, 880];
-    const res = await ws.as.viewer.get(`/api/axes/${xId}/test-program`).query({ kind: 'positioning', targets: targets.join(','), runs: 5, overrun: 4, feed: 800, dwell: 3 });
+    const res = await ws.as.viewer
+      .get(`/api/axes/${xId}/test-program`)
+      .query({ kind: 'positioning', targets: targets.join(','), runs: 5, overrun: 4, feed: 800, dwell: 3 });
     expect(res.status).toBe(200);
     expect(res.headers['content-type']).toMatch(/^text\/plain/);
-    expect(disposition(res.headers['content-disposition'])).toEqual({ type: 'attachment', filename: expect.stringMatching(/-x-repeat-and-reverse\.nc$/) });
+    expect(disposition(res.headers['content-disposition'])).toEqual({
+      type: 'attachment',
+      filename: expect.stringMatching(/-x-repeat-and-reverse\.nc$/),
+    });
     const text = res.text;
     // The usual cautions (TRADE.md: moving gantry pinch points, E-stop, plasma off; common practice).
     expect(text).toMatch(/\(CAUTIONS - the machine moves on its own while this program runs\.\)/);
@@ -111,7 +122,9 @@ describe('test programs, speed check and travel envelope', () => {
   });
 
   it('a travel-trial program: out to each distance from the start and back, a stop to measure at each', async () => {
-    const res = await ws.as.technician.get(`/api/axes/${xId}/test-program`).query({ kind: 'travel', distances: '100,300,600,850', start: 10, overrun: 5, feed: 1200 });
+    const res = await ws.as.technician
+      .get(`/api/axes/${xId}/test-program`)
+      .query({ kind: 'travel', distances: '100,300,600,850', start: 10, overrun: 5, feed: 1200 });
     expect(res.status).toBe(200);
     expect(disposition(res.headers['content-disposition']).filename).toMatch(/travel-trial\.nc$/);
     const p = parseProgram(res.text, 'X');
@@ -137,7 +150,10 @@ describe('test programs, speed check and travel envelope', () => {
     [{ kind: 'positioning', targets: '100' }, /targets needs at least 2 positions/],
     [{ kind: 'positioning', targets: '100,500,918' }, /beyond its measured travel of 920 mm/],
     [{ kind: 'positioning', targets: '2,500' }, /below 0 of its work coordinates/],
-    [{ kind: 'positioning', lengthUnit: 'in', targets: '1,36.1' }, /targets with the overrun takes the axis to 36.29685 in, beyond its measured travel of 36.220472 in/],
+    [
+      { kind: 'positioning', lengthUnit: 'in', targets: '1,36.1' },
+      /targets with the overrun takes the axis to 36.29685 in, beyond its measured travel of 36.220472 in/,
+    ],
     [{ kind: 'positioning', lengthUnit: 'cm' }, /lengthUnit must be one of mm, um, in, thou/],
     [{ kind: 'positioning', notes: 'x'.repeat(201) }, /notes must be at most 200 characters/],
     [{ kind: 'positioning', feed: 9000 }, /feed must not exceed the axis's fastest feed of 5000 mm\/min/],
@@ -145,7 +161,10 @@ describe('test programs, speed check and travel envelope', () => {
     [{ kind: 'travel', distances: 'far' }, /distances must be comma-separated numbers/],
     [{ kind: 'travel', distances: '100,-50' }, /distances must all be greater than zero/],
     [{ kind: 'travel', start: 2 }, /start less the overrun takes the axis to -3 mm, below 0 of its work coordinates/],
-    [{ kind: 'travel', start: 100, distances: '500,900' }, /distances takes the axis to 1000 mm, beyond its measured travel of 920 mm/],
+    [
+      { kind: 'travel', start: 100, distances: '500,900' },
+      /distances takes the axis to 1000 mm, beyond its measured travel of 920 mm/,
+    ],
     [{ kind: 'travel', letter: 'Q' }, /letter must be one of/],
     [{ kind: 'travel', format: 'pdf' }, /format must be nc or txt/],
   ])('test program %j is refused with 400 naming the field', async (query, message) => {
@@ -163,7 +182,9 @@ describe('test programs, speed check and travel envelope', () => {
     const ok = await ws.as.technician.get(`/api/axes/${id}/test-program?kind=travel&letter=y&distances=50,100`);
     expect(ok.status).toBe(200);
     expect(parseProgram(ok.text, 'Y').stopsAt).toEqual([5, 55, 105]);
-    expect((await other.as.owner.get(`/api/axes/${id}/test-program?kind=travel&letter=Y&distances=50`)).status).toBe(404);
+    expect((await other.as.owner.get(`/api/axes/${id}/test-program?kind=travel&letter=Y&distances=50`)).status).toBe(
+      404,
+    );
   });
 
   describe('text that reaches a program', () => {
@@ -184,22 +205,36 @@ describe('test programs, speed check and travel envelope', () => {
       // Written straight to the rows, so the test holds whatever the forms let through.
       await db.execute(sql`update machines set name = ${name} where id = ${m}`);
       await db.execute(sql`update axes set name = ${`X ${name}`} where id = ${axis}`);
-      const plain = await ws.as.technician.get(`/api/axes/${axis}/test-program`).query({ kind: 'positioning', targets: '20,400,880', runs: 2, letter: 'X' });
+      const plain = await ws.as.technician
+        .get(`/api/axes/${axis}/test-program`)
+        .query({ kind: 'positioning', targets: '20,400,880', runs: 2, letter: 'X' });
       expect(plain.status).toBe(200);
-      const withNotes = await ws.as.technician.get(`/api/axes/${axis}/test-program`).query({ kind: 'positioning', targets: '20,400,880', runs: 2, letter: 'X', notes: name });
+      const withNotes = await ws.as.technician
+        .get(`/api/axes/${axis}/test-program`)
+        .query({ kind: 'positioning', targets: '20,400,880', runs: 2, letter: 'X', notes: name });
       expect(withNotes.status).toBe(200);
       for (const text of [plain.text, withNotes.text]) {
         const run = expectSafeProgram(text, 'X', 920, 'G21');
         expect(run.moves.every((m) => m.toMm !== -500)).toBe(true);
         expect(run.codes.has('M3')).toBe(false);
         // Only the program's own words, each block as written: % twice, comments, and the known words.
-        for (const b of run.blocks) for (const w of b.words) expect(w).toMatch(/^(G(0|1|4|17|21|40|80|90|94)|M(1|2)|X\d+(\.\d+)?|F\d+(\.\d+)?|P\d+(\.\d+)?)$/);
+        for (const b of run.blocks)
+          for (const w of b.words)
+            expect(w).toMatch(/^(G(0|1|4|17|21|40|80|90|94)|M(1|2)|X\d+(\.\d+)?|F\d+(\.\d+)?|P\d+(\.\d+)?)$/);
         expect(text.split('\n').filter((l) => l === '%')).toHaveLength(2);
-        expect(text.split('\n').filter((l) => l !== '' && l !== '%').every((l) => /^(\(|G|M)/.test(l))).toBe(true);
+        expect(
+          text
+            .split('\n')
+            .filter((l) => l !== '' && l !== '%')
+            .every((l) => /^(\(|G|M)/.test(l)),
+        ).toBe(true);
       }
       // The notes add exactly one line to the header, and nothing else.
       expect(withNotes.text.split('\n').length).toBe(plain.text.split('\n').length + 1);
-      expect(disposition(plain.headers['content-disposition'])).toEqual({ type: 'attachment', filename: expect.stringMatching(/^[a-z0-9-]+\.nc$/) });
+      expect(disposition(plain.headers['content-disposition'])).toEqual({
+        type: 'attachment',
+        filename: expect.stringMatching(/^[a-z0-9-]+\.nc$/),
+      });
     });
   });
 
@@ -211,24 +246,34 @@ describe('test programs, speed check and travel envelope', () => {
     });
 
     it('gets its program in G20: every coordinate and feed in inches, the same moves as in mm', async () => {
-      const res = await ws.as.technician.get(`/api/axes/${inchAxis}/test-program`).query({ kind: 'positioning', lengthUnit: 'in', targets: '1,10,20,30,35', runs: 2, overrun: 0.25, feed: 40 });
+      const res = await ws.as.technician
+        .get(`/api/axes/${inchAxis}/test-program`)
+        .query({ kind: 'positioning', lengthUnit: 'in', targets: '1,10,20,30,35', runs: 2, overrun: 0.25, feed: 40 });
       expect(res.status).toBe(200);
       const run = expectSafeProgram(res.text, 'U', 920, 'G20');
       expect(run.codes.has('G21')).toBe(false);
       // 1 in = 25.4 mm exactly (NIST SP 811); the reader converts G20 coordinates back to mm.
-      expect(run.stops.slice(0, 5).map((s) => s.atMm)).toEqual([25.4, 254, 508, 762, 889].map((v) => expect.closeTo(v, 9)));
+      expect(run.stops.slice(0, 5).map((s) => s.atMm)).toEqual(
+        [25.4, 254, 508, 762, 889].map((v) => expect.closeTo(v, 9)),
+      );
       expect(Math.min(...run.moves.map((m) => m.toMm))).toBeCloseTo(0.75 * 25.4, 9);
-      expect(run.moves.filter((m) => m.code === 'G1').every((m) => Math.abs(m.feedMmPerMin! - 40 * 25.4) < 1e-9)).toBe(true);
+      expect(run.moves.filter((m) => m.code === 'G1').every((m) => Math.abs(m.feedMmPerMin! - 40 * 25.4) < 1e-9)).toBe(
+        true,
+      );
       expect(res.text).toMatch(/^G1 U10\.0000 F40$/m);
       expect(res.text).toMatch(/\(Units: inches G20/);
       // The same run asked in mm gives the same moves.
-      const mm = await ws.as.technician.get(`/api/axes/${inchAxis}/test-program`).query({ kind: 'positioning', targets: '25.4,254,508,762,889', runs: 2, overrun: 6.35, feed: 1016 });
+      const mm = await ws.as.technician
+        .get(`/api/axes/${inchAxis}/test-program`)
+        .query({ kind: 'positioning', targets: '25.4,254,508,762,889', runs: 2, overrun: 6.35, feed: 1016 });
       const again = readProgram(mm.text, 'U');
       expect(again.moves.map((m) => m.toMm)).toEqual(run.moves.map((m) => expect.closeTo(m.toMm, 6)));
     });
 
     it('a travel trial in inches keeps its stops where they were asked', async () => {
-      const res = await ws.as.technician.get(`/api/axes/${inchAxis}/test-program`).query({ kind: 'travel', lengthUnit: 'in', start: 0.5, distances: '4,12,24', overrun: 0.25 });
+      const res = await ws.as.technician
+        .get(`/api/axes/${inchAxis}/test-program`)
+        .query({ kind: 'travel', lengthUnit: 'in', start: 0.5, distances: '4,12,24', overrun: 0.25 });
       expect(res.status).toBe(200);
       const run = expectSafeProgram(res.text, 'U', 920, 'G20');
       expect(run.stops.map((s) => s.atMm / 25.4)).toEqual([0.5, 4.5, 12.5, 24.5].map((v) => expect.closeTo(v, 9)));
@@ -285,15 +330,46 @@ describe('test programs, speed check and travel envelope', () => {
       expect(res.body.allowedSpeed).toBeCloseTo(1753.11, 6);
       expect(res.body.safeFeedRate).toBeCloseTo(8765.55, 6);
       expect(res.body.maxFeedRate).toBeCloseTo(9739.5, 6);
-      expect(res.body).toMatchObject({ applicable: true, withinLimits: true, status: 'within-target', limitedBy: 'critical-speed' });
+      expect(res.body).toMatchObject({
+        applicable: true,
+        withinLimits: true,
+        status: 'within-target',
+        limitedBy: 'critical-speed',
+      });
       expect(res.body.source).toMatch(/THK Ball Screw General Catalog/);
-      const calc = await ws.as.viewer.post('/api/calc/screw-speed').send({ nominalDiameter: 16, rootDiameter: 12.9, unsupportedLength: 1000, lead: 5, mounting: 'fixed-supported', feedRate: 5000 });
+      const calc = await ws.as.viewer.post('/api/calc/screw-speed').send({
+        nominalDiameter: 16,
+        rootDiameter: 12.9,
+        unsupportedLength: 1000,
+        lead: 5,
+        mounting: 'fixed-supported',
+        feedRate: 5000,
+      });
       expect(calc.status).toBe(200);
-      for (const k of ['rpm', 'criticalSpeed', 'permissibleSpeed', 'dnLimitSpeed', 'maxFeedRate', 'withinLimits'] as const) expect(res.body[k]).toBe(calc.body[k]);
+      for (const k of [
+        'rpm',
+        'criticalSpeed',
+        'permissibleSpeed',
+        'dnLimitSpeed',
+        'maxFeedRate',
+        'withinLimits',
+      ] as const)
+        expect(res.body[k]).toBe(calc.body[k]);
     });
 
     it('MISUMI worked example: Ø15, lead 5, root 12.5 mm, fixed-support, 790 mm → 3024 rpm allowed', async () => {
-      const id = await newAxis(ws, machineId, { ...screwAxis('Y'), drive: { type: 'screw', lead: 5, nominalDiameter: 15, rootDiameter: 12.5, unsupportedLength: 790, mounting: 'fixed-supported' }, maxFeedRate: 14500 });
+      const id = await newAxis(ws, machineId, {
+        ...screwAxis('Y'),
+        drive: {
+          type: 'screw',
+          lead: 5,
+          nominalDiameter: 15,
+          rootDiameter: 12.5,
+          unsupportedLength: 790,
+          mounting: 'fixed-supported',
+        },
+        maxFeedRate: 14500,
+      });
       const res = await ws.as.technician.get(`/api/axes/${id}/speed-check`);
       // MISUMI Economy Series, allowable rotational speed example: 3024 min⁻¹ (0.8 factor included)
       expect(Math.round(res.body.permissibleSpeed)).toBe(3024);
@@ -304,15 +380,35 @@ describe('test programs, speed check and travel envelope', () => {
     });
 
     it('DENSO example: 3000 rpm over 850 mm needs root ≥ 14.4 mm and d·n ≤ 70 000 gives d ≤ 23.3 mm', async () => {
-      const denso = (root: number, nominal: number, name: string) => ({ ...screwAxis(name), drive: { type: 'screw', lead: 10, nominalDiameter: nominal, rootDiameter: root, unsupportedLength: 850, mounting: 'fixed-supported' }, maxFeedRate: 30000, motorStepsPerRev: 200, microsteps: 8, stepsPerMm: 160 });
-      const pass = await ws.as.technician.get(`/api/axes/${await newAxis(ws, machineId, denso(14.4, 23, 'Z1'))}/speed-check`);
+      const denso = (root: number, nominal: number, name: string) => ({
+        ...screwAxis(name),
+        drive: {
+          type: 'screw',
+          lead: 10,
+          nominalDiameter: nominal,
+          rootDiameter: root,
+          unsupportedLength: 850,
+          mounting: 'fixed-supported',
+        },
+        maxFeedRate: 30000,
+        motorStepsPerRev: 200,
+        microsteps: 8,
+        stepsPerMm: 160,
+      });
+      const pass = await ws.as.technician.get(
+        `/api/axes/${await newAxis(ws, machineId, denso(14.4, 23, 'Z1'))}/speed-check`,
+      );
       expect(pass.body.rpm).toBe(3000);
       expect(pass.body.permissibleSpeed).toBeGreaterThanOrEqual(3000);
       expect(pass.body.withinLimits).toBe(true);
-      const thinRoot = await ws.as.technician.get(`/api/axes/${await newAxis(ws, machineId, denso(14.3, 23, 'Z2'))}/speed-check`);
+      const thinRoot = await ws.as.technician.get(
+        `/api/axes/${await newAxis(ws, machineId, denso(14.3, 23, 'Z2'))}/speed-check`,
+      );
       expect(thinRoot.body.permissibleSpeed).toBeLessThan(3000);
       expect(thinRoot.body.withinLimits).toBe(false);
-      const fat = await ws.as.technician.get(`/api/axes/${await newAxis(ws, machineId, denso(14.4, 24, 'Z3'))}/speed-check`);
+      const fat = await ws.as.technician.get(
+        `/api/axes/${await newAxis(ws, machineId, denso(14.4, 24, 'Z3'))}/speed-check`,
+      );
       expect(fat.body.dnLimitSpeed).toBeLessThan(3000);
       expect(fat.body).toMatchObject({ withinLimits: false, status: 'outside-target' });
     });
@@ -321,7 +417,9 @@ describe('test programs, speed check and travel envelope', () => {
       const rack = await ws.as.technician.get(`/api/axes/${await newAxis(ws, machineId, rackAxis('A'))}/speed-check`);
       expect(rack.body).toMatchObject({ applicable: false, status: 'not-applicable', rpm: null });
       expect(rack.body.reason).toMatch(/rack-and-pinion drive has no screw to whirl/);
-      const bare = await ws.as.technician.get(`/api/axes/${await newAxis(ws, machineId, { ...screwAxis('B'), maxFeedRate: undefined })}/speed-check`);
+      const bare = await ws.as.technician.get(
+        `/api/axes/${await newAxis(ws, machineId, { ...screwAxis('B'), maxFeedRate: undefined })}/speed-check`,
+      );
       expect(bare.body).toMatchObject({ applicable: true, status: 'not-started', missing: ['maxFeedRate'] });
     });
   });

@@ -21,7 +21,16 @@ describe('axes and their drive records', () => {
     const res = await ws.as.technician.post(`/api/machines/${machineId}/axes`).send(screwAxis('X'));
     expect(res.status).toBe(201);
     // 200 steps × 16 microsteps ÷ 5 mm lead = 640 steps/mm (stepper_steps_per_mm.json, Klipper rotation distance)
-    expect(res.body).toMatchObject({ id: expect.any(String), name: 'X', letter: 'X', stepsPerMm: 640, theoreticalStepsPerMm: 640, travelPerRevMm: 5, maxFeedRate: 5000, measuredTravelMm: 920 });
+    expect(res.body).toMatchObject({
+      id: expect.any(String),
+      name: 'X',
+      letter: 'X',
+      stepsPerMm: 640,
+      theoreticalStepsPerMm: 640,
+      travelPerRevMm: 5,
+      maxFeedRate: 5000,
+      measuredTravelMm: 920,
+    });
     expect(res.body.driveSummary).toMatch(/lead 5 mm/);
     const list = await ws.as.viewer.get(`/api/machines/${machineId}/axes`);
     expect(list.status).toBe(200);
@@ -37,11 +46,20 @@ describe('axes and their drive records', () => {
     // rack m = 1.5, z = 20 → 94.2478 mm/rev; 200 × 8 ÷ 94.2478 = 16.9765 steps/mm (stepper_steps_per_mm.json), × 3 gear ratio
     expect(res.body.travelPerRevMm).toBeCloseTo(94.24777960769379, 10);
     expect(res.body.theoreticalStepsPerMm).toBeCloseTo(16.976527263135505 * 3, 9);
-    expect(res.body.stepsPerMmDifferencePercent).toBeCloseTo(((50.93 - 50.92958178940651) / 50.92958178940651) * 100, 6);
+    expect(res.body.stepsPerMmDifferencePercent).toBeCloseTo(
+      ((50.93 - 50.92958178940651) / 50.92958178940651) * 100,
+      6,
+    );
   });
 
   it('a belt axis: belt pitch × pulley teeth per turn', async () => {
-    const res = await ws.as.admin.post(`/api/machines/${machineId}/axes`).send({ name: 'A belt', drive: { type: 'belt', beltPitch: 2, pulleyTeeth: 20 }, motorStepsPerRev: 200, microsteps: 16, stepsPerMm: 80 });
+    const res = await ws.as.admin.post(`/api/machines/${machineId}/axes`).send({
+      name: 'A belt',
+      drive: { type: 'belt', beltPitch: 2, pulleyTeeth: 20 },
+      motorStepsPerRev: 200,
+      microsteps: 16,
+      stepsPerMm: 80,
+    });
     expect(res.status).toBe(201);
     // GT2 2 mm × 20 teeth = 40 mm/rev, 200 × 16 ÷ 40 = 80 steps/mm (Klipper rotation distance)
     expect(res.body.theoreticalStepsPerMm).toBe(80);
@@ -49,9 +67,16 @@ describe('axes and their drive records', () => {
   });
 
   it('the theoretical value on the axis equals the calculators API for the same drive', async () => {
-    const body = { ...rackAxis('R'), drive: { type: 'rack', pinionModule: 2, pinionTeeth: 18 }, microsteps: 10, gearRatio: 4.5 };
+    const body = {
+      ...rackAxis('R'),
+      drive: { type: 'rack', pinionModule: 2, pinionTeeth: 18 },
+      microsteps: 10,
+      gearRatio: 4.5,
+    };
     const axis = await ws.as.technician.post(`/api/machines/${machineId}/axes`).send(body);
-    const calc = await ws.as.viewer.post('/api/calc/drive').send({ type: 'rack', pinionModule: 2, pinionTeeth: 18, motorStepsPerRev: 200, microsteps: 10, gearRatio: 4.5 });
+    const calc = await ws.as.viewer
+      .post('/api/calc/drive')
+      .send({ type: 'rack', pinionModule: 2, pinionTeeth: 18, motorStepsPerRev: 200, microsteps: 10, gearRatio: 4.5 });
     expect(calc.status).toBe(200);
     expect(axis.body.theoreticalStepsPerMm).toBe(calc.body.stepsPerMm);
     expect(axis.body.travelPerRevMm).toBe(calc.body.travelPerRev);
@@ -60,13 +85,37 @@ describe('axes and their drive records', () => {
 
   it('axes, travel trials and runs are subjects evidence can be attached to; another workshop resolves none', async () => {
     const id = await newAxis(ws, machineId, screwAxis('S'));
-    const trial = await ws.as.technician.post(`/api/axes/${id}/travel-trials`).send({ lengthUnit: 'mm', moves: [{ commanded: 100, measured: 100.01 }] });
-    const run = await ws.as.technician.post(`/api/axes/${id}/positioning-runs`).send({ readingUnit: 'um', targets: [10, 20], runs: [{ direction: 'up', deviations: [1, 2] }, { direction: 'up', deviations: [2, 2] }, { direction: 'down', deviations: [0, 1] }, { direction: 'down', deviations: [-1, 0] }] });
+    const trial = await ws.as.technician
+      .post(`/api/axes/${id}/travel-trials`)
+      .send({ lengthUnit: 'mm', moves: [{ commanded: 100, measured: 100.01 }] });
+    const run = await ws.as.technician.post(`/api/axes/${id}/positioning-runs`).send({
+      readingUnit: 'um',
+      targets: [10, 20],
+      runs: [
+        { direction: 'up', deviations: [1, 2] },
+        { direction: 'up', deviations: [2, 2] },
+        { direction: 'down', deviations: [0, 1] },
+        { direction: 'down', deviations: [-1, 0] },
+      ],
+    });
     const subjects = app.get(SubjectsRegistry);
     expect(subjects.types()).toEqual(expect.arrayContaining(['axis', 'travel-trial', 'positioning-run']));
-    expect(await subjects.resolve(ws.id, 'axis', id)).toEqual({ machineId, recordType: 'axis', recordId: id, label: 'Axis S' });
-    expect(await subjects.resolve(ws.id, 'travel-trial', trial.body.id)).toMatchObject({ machineId, recordType: 'travel-trial', label: 'Travel trial of S' });
-    expect(await subjects.resolve(ws.id, 'positioning-run', run.body.id)).toMatchObject({ machineId, recordType: 'positioning-run', label: 'Repeat-and-reverse run of S' });
+    expect(await subjects.resolve(ws.id, 'axis', id)).toEqual({
+      machineId,
+      recordType: 'axis',
+      recordId: id,
+      label: 'Axis S',
+    });
+    expect(await subjects.resolve(ws.id, 'travel-trial', trial.body.id)).toMatchObject({
+      machineId,
+      recordType: 'travel-trial',
+      label: 'Travel trial of S',
+    });
+    expect(await subjects.resolve(ws.id, 'positioning-run', run.body.id)).toMatchObject({
+      machineId,
+      recordType: 'positioning-run',
+      label: 'Repeat-and-reverse run of S',
+    });
     expect(await subjects.resolve(other.id, 'axis', id)).toBeNull();
     expect(await subjects.resolve(other.id, 'travel-trial', trial.body.id)).toBeNull();
   });
@@ -95,32 +144,55 @@ describe('axes and their drive records', () => {
 
   it('changing the steps per mm keeps the old value in the history and the audit', async () => {
     const id = await newAxis(ws, machineId, screwAxis('U'));
-    const res = await ws.as.technician.patch(`/api/axes/${id}`).send({ stepsPerMm: 641.5, notes: 'coupler re-tightened' });
+    const res = await ws.as.technician
+      .patch(`/api/axes/${id}`)
+      .send({ stepsPerMm: 641.5, notes: 'coupler re-tightened' });
     expect(res.status).toBe(200);
     expect(res.body.stepsPerMm).toBe(641.5);
-    expect(res.body.stepsHistory).toEqual([expect.objectContaining({ from: 640, to: 641.5, reason: 'edited', by: expect.stringContaining('technician') })]);
+    expect(res.body.stepsHistory).toEqual([
+      expect.objectContaining({ from: 640, to: 641.5, reason: 'edited', by: expect.stringContaining('technician') }),
+    ]);
     const history = await ws.as.viewer.get(`/api/machines/${machineId}/history?limit=200`);
-    expect(history.body.entries[0]).toMatchObject({ recordType: 'axis', recordId: id, action: 'updated', changes: { stepsPerMm: { from: 640, to: 641.5 } } });
+    expect(history.body.entries[0]).toMatchObject({
+      recordType: 'axis',
+      recordId: id,
+      action: 'updated',
+      changes: { stepsPerMm: { from: 640, to: 641.5 } },
+    });
   });
 
   it('a saved screw drive counts as a recorded speed check; a measured X or Y travel as a recorded travel envelope', async () => {
     const m = await newMachine(ws, 'router', { x: 900, y: 600 });
     const id = await newAxis(ws, m, screwAxis('X'));
-    let history = (await ws.as.viewer.get(`/api/machines/${m}/history?limit=200`)).body.entries as { action: string; summary: string; recordId: string; changes: { status?: string } | null }[];
-    expect(history.find((h) => h.action === 'recorded' && /Speed check of axis X/.test(h.summary))).toMatchObject({ recordId: id, changes: { status: 'within-target' } });
+    let history = (await ws.as.viewer.get(`/api/machines/${m}/history?limit=200`)).body.entries as {
+      action: string;
+      summary: string;
+      recordId: string;
+      changes: { status?: string } | null;
+    }[];
+    expect(history.find((h) => h.action === 'recorded' && /Speed check of axis X/.test(h.summary))).toMatchObject({
+      recordId: id,
+      changes: { status: 'within-target' },
+    });
     // A Y axis completes the envelope: X 920 ≥ 910 mm, Y 605 < 610 mm.
     const y = await newAxis(ws, m, { ...screwAxis('Y'), measuredTravelMm: 605 });
     history = (await ws.as.viewer.get(`/api/machines/${m}/history?limit=200`)).body.entries;
-    expect(history.find((h) => h.action === 'recorded' && h.recordId === y && /Travel envelope/.test(h.summary))).toMatchObject({ changes: { status: 'outside-target' } });
+    expect(
+      history.find((h) => h.action === 'recorded' && h.recordId === y && /Travel envelope/.test(h.summary)),
+    ).toMatchObject({ changes: { status: 'outside-target' } });
     // A faster feed than the screw allows is recorded outside target.
     await ws.as.technician.patch(`/api/axes/${id}`).send({ maxFeedRate: 12000 });
     history = (await ws.as.viewer.get(`/api/machines/${m}/history?limit=200`)).body.entries;
-    expect(history.find((h) => h.action === 'recorded' && /Speed check of axis X: 2400 rpm/.test(h.summary))).toMatchObject({ changes: { status: 'outside-target' } });
+    expect(
+      history.find((h) => h.action === 'recorded' && /Speed check of axis X: 2400 rpm/.test(h.summary)),
+    ).toMatchObject({ changes: { status: 'outside-target' } });
   });
 
   it('a drive given on PATCH replaces the drive; null clears the fastest feed', async () => {
     const id = await newAxis(ws, machineId, screwAxis('V'));
-    const res = await ws.as.technician.patch(`/api/axes/${id}`).send({ drive: { type: 'belt', beltPitch: 3, pulleyTeeth: 20 }, maxFeedRate: null });
+    const res = await ws.as.technician
+      .patch(`/api/axes/${id}`)
+      .send({ drive: { type: 'belt', beltPitch: 3, pulleyTeeth: 20 }, maxFeedRate: null });
     expect(res.status).toBe(200);
     expect(res.body.drive).toEqual({ type: 'belt', beltPitch: 3, pulleyTeeth: 20 });
     expect(res.body.maxFeedRate).toBeNull();
@@ -146,11 +218,17 @@ describe('axes and their drive records', () => {
     [{ ...base, drive: { type: 'screw', nominalDiameter: 16 } }, /drive.lead is required for a screw drive/],
     [{ ...base, drive: { type: 'belt', beltPitch: 2 } }, /drive.pulleyTeeth is required for a belt drive/],
     [{ ...base, drive: { type: 'rack', pinionTeeth: 20 } }, /drive.pinionModule is required/],
-    [{ ...base, drive: { type: 'belt', beltPitch: 2, pulleyTeeth: 20, lead: 5 } }, /drive.lead does not apply to a belt drive/],
+    [
+      { ...base, drive: { type: 'belt', beltPitch: 2, pulleyTeeth: 20, lead: 5 } },
+      /drive.lead does not apply to a belt drive/,
+    ],
     [{ ...base, drive: { type: 'chain' } }, /drive.type must be one of screw, belt, rack/],
     [{ ...base, drive: { ...base.drive, lead: 'five' } }, /drive.lead must be a finite number/],
     [{ ...base, drive: { ...base.drive, lead: -5 } }, /drive.lead must be greater than zero/],
-    [{ ...base, drive: { ...base.drive, rootDiameter: 17 } }, /rootDiameter must not be larger than drive.nominalDiameter/],
+    [
+      { ...base, drive: { ...base.drive, rootDiameter: 17 } },
+      /rootDiameter must not be larger than drive.nominalDiameter/,
+    ],
     [{ ...base, drive: { ...base.drive, mounting: 'glued' } }, /drive.mounting must be one of/],
     [{ ...base, drive: { ...base.drive, pulleyTeeth: 20 } }, /drive.pulleyTeeth does not apply/],
     [{ ...base, drive: undefined }, /drive must be an object/],
@@ -172,7 +250,9 @@ describe('axes and their drive records', () => {
     const res = await ws.as.technician
       .post(`/api/machines/${machineId}/axes`)
       .set('Content-Type', 'application/json')
-      .send('{"name":"D","drive":{"type":"screw","lead":1e999},"motorStepsPerRev":200,"microsteps":16,"stepsPerMm":640}');
+      .send(
+        '{"name":"D","drive":{"type":"screw","lead":1e999},"motorStepsPerRev":200,"microsteps":16,"stepsPerMm":640}',
+      );
     expect(res.status).toBe(400);
     expect(JSON.stringify(res.body.message)).toMatch(/drive.lead must be a finite number/);
     expect((await ws.as.technician.get('/api/axes/not-a-uuid')).status).toBe(400);

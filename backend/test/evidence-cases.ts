@@ -42,14 +42,24 @@ export function evidenceApiCases(driver: string, harness: DriverHarness) {
     ctx.app = await createTestApp();
     ctx.ws = await createTestWorkshop(ctx.app, `Evidence ${driver}`);
     ctx.other = await createTestWorkshop(ctx.app, 'Evidence other');
-    ctx.machineId = (await ctx.ws.as.builder.post('/api/machines').send({ name: 'Evidence table', kind: 'plasma', workArea: { x: 3000, y: 1500 } })).body.id;
-    ctx.otherMachineId = (await ctx.other.as.owner.post('/api/machines').send({ name: 'Theirs', kind: 'router', workArea: { x: 900, y: 600 } })).body.id;
+    ctx.machineId = (
+      await ctx.ws.as.builder
+        .post('/api/machines')
+        .send({ name: 'Evidence table', kind: 'plasma', workArea: { x: 3000, y: 1500 } })
+    ).body.id;
+    ctx.otherMachineId = (
+      await ctx.other.as.owner
+        .post('/api/machines')
+        .send({ name: 'Theirs', kind: 'router', workArea: { x: 900, y: 600 } })
+    ).body.id;
     // A stand-in for a check owned by another module: resolves only inside its own workshop.
     ctx.checkId = randomUUID();
     const checks = new Map([[ctx.checkId, { workshopId: ctx.ws.id, machineId: ctx.machineId }]]);
     ctx.app.get(SubjectsRegistry).register('test-cut', async (workshopId, id) => {
       const c = checks.get(id);
-      return c && c.workshopId === workshopId ? { machineId: c.machineId, recordType: 'test-cut', recordId: id, label: 'Bench check 1' } : null;
+      return c && c.workshopId === workshopId
+        ? { machineId: c.machineId, recordType: 'test-cut', recordId: id, label: 'Bench check 1' }
+        : null;
     });
   });
   afterAll(async () => {
@@ -66,7 +76,11 @@ export function evidenceApiCases(driver: string, harness: DriverHarness) {
     ['admin', 'photo'],
   ])('%s attaches a %s: 201 with its type, size and a thumbnail', async (role) => {
     const png = await makePng();
-    const res = await upload(ctx.ws.as[role], { ...onMachine(), caption: `set-up by ${role}` }, { body: png, name: 'indicator set-up.png', type: 'image/png' });
+    const res = await upload(
+      ctx.ws.as[role],
+      { ...onMachine(), caption: `set-up by ${role}` },
+      { body: png, name: 'indicator set-up.png', type: 'image/png' },
+    );
     expect(res.status).toBe(201);
     expect(res.body).toMatchObject({
       contentType: 'image/png',
@@ -104,13 +118,32 @@ export function evidenceApiCases(driver: string, harness: DriverHarness) {
   it('gives back the same bytes with the right type, disposition and nosniff', async () => {
     const jpeg = await makeJpeg();
     const cases = [
-      { body: jpeg, name: 'squaring marks.jpg', type: 'image/jpeg', disposition: /^inline; filename="squaring marks.jpg"/ },
-      { body: PDF, name: 'screw datasheet.pdf', type: 'application/pdf', disposition: /^attachment; filename="screw datasheet.pdf"/ },
-      { body: CSV, name: 'sweep Y1.csv', type: 'text/csv; charset=utf-8', disposition: /^attachment; filename="sweep Y1.csv"/ },
+      {
+        body: jpeg,
+        name: 'squaring marks.jpg',
+        type: 'image/jpeg',
+        disposition: /^inline; filename="squaring marks.jpg"/,
+      },
+      {
+        body: PDF,
+        name: 'screw datasheet.pdf',
+        type: 'application/pdf',
+        disposition: /^attachment; filename="screw datasheet.pdf"/,
+      },
+      {
+        body: CSV,
+        name: 'sweep Y1.csv',
+        type: 'text/csv; charset=utf-8',
+        disposition: /^attachment; filename="sweep Y1.csv"/,
+      },
       { body: await makeWebp(), name: 'carriage.webp', type: 'image/webp', disposition: /^inline/ },
     ];
     for (const c of cases) {
-      const made = await upload(ctx.ws.as.technician, onMachine(), { body: c.body, name: c.name, type: 'application/octet-stream' });
+      const made = await upload(ctx.ws.as.technician, onMachine(), {
+        body: c.body,
+        name: c.name,
+        type: 'application/octet-stream',
+      });
       expect(made.status).toBe(201);
       const res = await download(ctx.ws.as.viewer, `/api/evidence/${made.body.id}/content`);
       expect(res.status).toBe(200);
@@ -147,7 +180,10 @@ export function evidenceApiCases(driver: string, harness: DriverHarness) {
 
   it('turns a phone photo upright: size and thumbnail follow its camera orientation', async () => {
     // EXIF orientation 6: stored 1200 wide × 900 high, shown turned a quarter, 900 × 1200.
-    const turned = await sharp({ create: { width: 1200, height: 900, channels: 3, background: '#777' } }).jpeg().withMetadata({ orientation: 6 }).toBuffer();
+    const turned = await sharp({ create: { width: 1200, height: 900, channels: 3, background: '#777' } })
+      .jpeg()
+      .withMetadata({ orientation: 6 })
+      .toBuffer();
     const made = await upload(ctx.ws.as.builder, onMachine(), { body: turned, name: 'portrait.jpg' });
     expect(made.body).toMatchObject({ widthPx: 900, heightPx: 1200 });
     const thumb = await download(ctx.ws.as.builder, made.body.thumbnailUrl);
@@ -156,7 +192,11 @@ export function evidenceApiCases(driver: string, harness: DriverHarness) {
 
   it('decides the type from the bytes, not the name', async () => {
     const png = await makePng(32, 32);
-    const misnamed = await upload(ctx.ws.as.builder, onMachine(), { body: png, name: 'really-a-png.jpg', type: 'image/jpeg' });
+    const misnamed = await upload(ctx.ws.as.builder, onMachine(), {
+      body: png,
+      name: 'really-a-png.jpg',
+      type: 'image/jpeg',
+    });
     expect(misnamed.status).toBe(201);
     expect(misnamed.body.contentType).toBe('image/png');
     expect(misnamed.body.fileName).toBe('really-a-png.jpg.png');
@@ -212,7 +252,15 @@ export function evidenceApiCases(driver: string, harness: DriverHarness) {
     const mine = await upload(ctx.ws.as.builder, onMachine(), { body: png, name: 'mine.png' });
     const before = await harness.storedKeys();
     expect((await upload(ctx.other.as.owner, onMachine(), { body: png, name: 'sneak.png' })).status).toBe(404);
-    expect((await upload(ctx.other.as.owner, { subjectType: 'test-cut', subjectId: ctx.checkId }, { body: png, name: 'sneak.png' })).status).toBe(404);
+    expect(
+      (
+        await upload(
+          ctx.other.as.owner,
+          { subjectType: 'test-cut', subjectId: ctx.checkId },
+          { body: png, name: 'sneak.png' },
+        )
+      ).status,
+    ).toBe(404);
     expect(await harness.storedKeys()).toEqual(before);
     for (const path of ['', '/content', '/thumbnail']) {
       expect((await ctx.other.as.owner.get(`/api/evidence/${mine.body.id}${path}`)).status).toBe(404);
@@ -225,7 +273,11 @@ export function evidenceApiCases(driver: string, harness: DriverHarness) {
 
   it('lists a whole machine grouped by subject, and a single subject', async () => {
     const check = { subjectType: 'test-cut', subjectId: ctx.checkId };
-    const made = await upload(ctx.ws.as.technician, { ...check, caption: 'dial at hole 4' }, { body: CSV, name: 'bench.csv' });
+    const made = await upload(
+      ctx.ws.as.technician,
+      { ...check, caption: 'dial at hole 4' },
+      { body: CSV, name: 'bench.csv' },
+    );
     expect(made.status).toBe(201);
     expect(made.body.subject).toEqual({ type: 'test-cut', id: ctx.checkId, label: 'Bench check 1' });
     const one = await ctx.ws.as.viewer.get('/api/evidence').query(check);
@@ -256,13 +308,24 @@ export function evidenceApiCases(driver: string, harness: DriverHarness) {
     expect(refused.body.message).toMatch(/Bench check 1 is part of an approved commissioning record/);
     expect((await ctx.ws.as.admin.delete(`/api/evidence/${c.body.id}`)).status).toBe(409);
     const listed = await ctx.ws.as.owner.get('/api/evidence').query(check);
-    expect(listed.body.find((e: { id: string }) => e.id === c.body.id)).toMatchObject({ locked: true, canDelete: false });
+    expect(listed.body.find((e: { id: string }) => e.id === c.body.id)).toMatchObject({
+      locked: true,
+      canDelete: false,
+    });
     expect((await ctx.ws.as.builder.get(`/api/evidence/${c.body.id}/content`)).status).toBe(200);
 
     const history = await ctx.ws.as.viewer.get(`/api/machines/${ctx.machineId}/history?limit=200`);
     const evidenceEntries = history.body.entries.filter((h: { recordType: string }) => h.recordType === 'evidence');
-    expect(evidenceEntries.find((h: { recordId: string; action: string }) => h.recordId === a.body.id && h.action === 'deleted')).toMatchObject({ summary: 'Photo a.png removed from Bench check 1' });
-    expect(evidenceEntries.find((h: { recordId: string; action: string }) => h.recordId === c.body.id && h.action === 'attached')).toMatchObject({ summary: 'Photo c.png attached to Bench check 1' });
+    expect(
+      evidenceEntries.find(
+        (h: { recordId: string; action: string }) => h.recordId === a.body.id && h.action === 'deleted',
+      ),
+    ).toMatchObject({ summary: 'Photo a.png removed from Bench check 1' });
+    expect(
+      evidenceEntries.find(
+        (h: { recordId: string; action: string }) => h.recordId === c.body.id && h.action === 'attached',
+      ),
+    ).toMatchObject({ summary: 'Photo c.png attached to Bench check 1' });
   });
 
   it('answers 404 with a message when the stored file has gone missing', async () => {

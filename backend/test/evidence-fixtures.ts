@@ -8,13 +8,19 @@ import type { anonymous, Agent } from './helpers/test-app.js';
 export const sha256 = (b: Buffer) => createHash('sha256').update(b).digest('hex');
 
 export async function makePng(width = 800, height = 600): Promise<Buffer> {
-  return sharp({ create: { width, height, channels: 3, background: '#3f7a73' } }).png().toBuffer();
+  return sharp({ create: { width, height, channels: 3, background: '#3f7a73' } })
+    .png()
+    .toBuffer();
 }
 export async function makeJpeg(width = 1200, height = 900): Promise<Buffer> {
-  return sharp({ create: { width, height, channels: 3, background: '#c8932a' } }).jpeg({ quality: 80 }).toBuffer();
+  return sharp({ create: { width, height, channels: 3, background: '#c8932a' } })
+    .jpeg({ quality: 80 })
+    .toBuffer();
 }
 export async function makeWebp(): Promise<Buffer> {
-  return sharp({ create: { width: 400, height: 400, channels: 3, background: '#1d4f4a' } }).webp().toBuffer();
+  return sharp({ create: { width: 400, height: 400, channels: 3, background: '#1d4f4a' } })
+    .webp()
+    .toBuffer();
 }
 /** A Linux program's first bytes (ELF header), padded out. */
 export function makeElf(): Buffer {
@@ -39,9 +45,17 @@ export function makePngBomb(): Buffer {
   ihdr.writeUInt32BE(13000, 4);
   ihdr.set([8, 2, 0, 0, 0], 8);
   const signature = Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]);
-  return Buffer.concat([signature, chunk('IHDR', ihdr), chunk('IDAT', zlib.deflateSync(Buffer.alloc(60_000))), chunk('IEND', Buffer.alloc(0))]);
+  return Buffer.concat([
+    signature,
+    chunk('IHDR', ihdr),
+    chunk('IDAT', zlib.deflateSync(Buffer.alloc(60_000))),
+    chunk('IEND', Buffer.alloc(0)),
+  ]);
 }
-export const PDF = Buffer.from('%PDF-1.4\n1 0 obj << /Type /Catalog >> endobj\ntrailer << /Root 1 0 R >>\n%%EOF\n', 'latin1');
+export const PDF = Buffer.from(
+  '%PDF-1.4\n1 0 obj << /Type /Catalog >> endobj\ntrailer << /Root 1 0 R >>\n%%EOF\n',
+  'latin1',
+);
 export const CSV = Buffer.from('station_mm,reading_mm\n0,0.000\n250,0.012\n500,-0.004\n', 'utf8');
 
 /** A GET whose body is kept as raw bytes, whatever its content type. */
@@ -57,9 +71,14 @@ export function download(agent: Agent, url: string) {
 }
 
 /** Field order as a browser's FormData sends it: fields first, then the file. */
-export function upload(agent: Agent | ReturnType<typeof anonymous>, fields: Record<string, string>, file?: { body: Buffer; name: string; type?: string }) {
+export function upload(
+  agent: Agent | ReturnType<typeof anonymous>,
+  fields: Record<string, string>,
+  file?: { body: Buffer; name: string; type?: string },
+) {
   let req = agent.post('/api/evidence');
   for (const [k, v] of Object.entries(fields)) req = req.field(k, v);
-  if (file) req = req.attach('file', file.body, { filename: file.name, contentType: file.type ?? 'application/octet-stream' });
+  if (file)
+    req = req.attach('file', file.body, { filename: file.name, contentType: file.type ?? 'application/octet-stream' });
   return req;
 }

@@ -17,7 +17,13 @@ let endpoint = '';
 let client: S3Client;
 
 beforeAll(async () => {
-  server = new S3rver({ address: '127.0.0.1', port: 0, silent: true, directory: dir, configureBuckets: [{ name: BUCKET, configs: [] }] });
+  server = new S3rver({
+    address: '127.0.0.1',
+    port: 0,
+    silent: true,
+    directory: dir,
+    configureBuckets: [{ name: BUCKET, configs: [] }],
+  });
   const info = await server.run();
   endpoint = `http://127.0.0.1:${info.port}`;
   client = new S3Client({ endpoint, region: 'us-east-1', forcePathStyle: true, credentials: KEYS });

@@ -19,7 +19,11 @@ describe('CSV downloads', () => {
     app = await createTestApp();
     ws = await createTestWorkshop(app, 'Exports');
     other = await createTestWorkshop(app, 'Elsewhere');
-    machineId = (await ws.as.builder.post('/api/machines').send({ name: 'Export table', kind: 'plasma', workArea: { x: 3000, y: 1500 } })).body.id;
+    machineId = (
+      await ws.as.builder
+        .post('/api/machines')
+        .send({ name: 'Export table', kind: 'plasma', workArea: { x: 3000, y: 1500 } })
+    ).body.id;
     railId = (await ws.as.builder.post(`/api/machines/${machineId}/rails`).send(rail)).body.id;
   });
   afterAll(() => app.close());
@@ -32,18 +36,34 @@ describe('CSV downloads', () => {
     expect(res.text.split('\r\n')).toEqual([expect.stringMatching(/^Sweep,Taken at,/), '']);
   });
 
-  it('gives every reading in the newest sweep\'s units, older sweeps converted exactly, formula-like text inert', async () => {
-    const older = await ws.as.builder.post(`/api/rails/${railId}/sweeps`).send({ readingUnit: 'mm', phase: 'as-found', datum: 'Frame face', stations: positions.map((position, i) => ({ position, reading: [0, 0.0254, 0.0508, 0.0254, 0][i] })) });
+  it("gives every reading in the newest sweep's units, older sweeps converted exactly, formula-like text inert", async () => {
+    const older = await ws.as.builder.post(`/api/rails/${railId}/sweeps`).send({
+      readingUnit: 'mm',
+      phase: 'as-found',
+      datum: 'Frame face',
+      stations: positions.map((position, i) => ({ position, reading: [0, 0.0254, 0.0508, 0.0254, 0][i] })),
+    });
     expect(older.status).toBe(201);
-    const newer = await ws.as.builder.post(`/api/rails/${railId}/sweeps`).send({ readingUnit: 'thou', lengthUnit: 'in', phase: 'as-left', datum: '=HYPERLINK("x")', stations: positions.map((p, i) => ({ position: p / 25.4, reading: [0, 0.5, 1, 0.5, 0][i] })) });
+    const newer = await ws.as.builder.post(`/api/rails/${railId}/sweeps`).send({
+      readingUnit: 'thou',
+      lengthUnit: 'in',
+      phase: 'as-left',
+      datum: '=HYPERLINK("x")',
+      stations: positions.map((p, i) => ({ position: p / 25.4, reading: [0, 0.5, 1, 0.5, 0][i] })),
+    });
     expect(newer.status).toBe(201);
 
     const res = await ws.as.viewer.get(`/api/rails/${railId}/sweeps.csv`);
     const parsed = rowsOf(res.text);
     expect(parsed.errors).toEqual([]);
-    expect(parsed.meta.fields).toEqual(expect.arrayContaining(['Position (in)', 'Reading (thou)', 'Residual from least-squares line (thou)']));
+    expect(parsed.meta.fields).toEqual(
+      expect.arrayContaining(['Position (in)', 'Reading (thou)', 'Residual from least-squares line (thou)']),
+    );
     expect(parsed.data).toHaveLength(10);
-    const [n, o] = [parsed.data.filter((r) => r.Sweep === newer.body.id), parsed.data.filter((r) => r.Sweep === older.body.id)];
+    const [n, o] = [
+      parsed.data.filter((r) => r.Sweep === newer.body.id),
+      parsed.data.filter((r) => r.Sweep === older.body.id),
+    ];
     expect(n.map((r) => Number(r['Reading (thou)']))).toEqual([0, 0.5, 1, 0.5, 0]);
     // 0.0254 mm is 1 thou exactly (1 in = 25.4 mm); 100 mm is 3.937007874 in to ten digits.
     expect(o.map((r) => Number(r['Reading (thou)']))).toEqual([0, 1, 2, 1, 0]);

@@ -27,21 +27,26 @@ describe('forgot password, and signed in after choosing one', () => {
     await app.close();
   });
 
-  const ask = (email: unknown, from: string) => anonymous(app).post('/api/auth/password-reset/request').set('X-Forwarded-For', from).send({ email });
+  const ask = (email: unknown, from: string) =>
+    anonymous(app).post('/api/auth/password-reset/request').set('X-Forwarded-For', from).send({ email });
 
   it('mails a link to the account’s own address, and the old password keeps working until it is used', async () => {
     const email = ws.emails.technician;
     const res = await ask(email, '198.51.100.10');
     expect(res.status).toBe(202);
     expect(res.body.message).toMatch(/If an active account uses this address/);
-    const mail = await smtp.waitFor((m) => m.envelopeTo.includes(email) && /Choose a new Railwright password/.test(m.subject));
+    const mail = await smtp.waitFor(
+      (m) => m.envelopeTo.includes(email) && /Choose a new Railwright password/.test(m.subject),
+    );
     expect(mail.envelopeTo).toEqual([email]);
     expect(mail.text).toMatch(/current password keeps working/);
     expect((await anonymous(app).post('/api/auth/login').send({ email, password: TEST_PASSWORD })).status).toBe(200);
 
     // Choosing the new password signs the person in on this browser, on a new session.
     const browser = request.agent(app.getHttpServer());
-    const set = await browser.post('/api/auth/password-reset').send({ token: tokenOf(mail.text), password: 'a brand new dial reading' });
+    const set = await browser
+      .post('/api/auth/password-reset')
+      .send({ token: tokenOf(mail.text), password: 'a brand new dial reading' });
     expect(set.status).toBe(200);
     expect(set.body).toEqual({ email, signedIn: true });
     const me = await browser.get('/api/auth/me');
@@ -49,7 +54,9 @@ describe('forgot password, and signed in after choosing one', () => {
     expect(me.body.user.email).toBe(email);
     // The old password no longer works; the new one does.
     expect((await anonymous(app).post('/api/auth/login').send({ email, password: TEST_PASSWORD })).status).toBe(401);
-    expect((await anonymous(app).post('/api/auth/login').send({ email, password: 'a brand new dial reading' })).status).toBe(200);
+    expect(
+      (await anonymous(app).post('/api/auth/login').send({ email, password: 'a brand new dial reading' })).status,
+    ).toBe(200);
     const history = await ws.as.owner.get('/api/history?limit=50');
     expect(JSON.stringify(history.body)).toMatch(/asked for on the sign-in page/);
   });

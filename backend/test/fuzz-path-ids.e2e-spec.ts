@@ -38,7 +38,12 @@ const VERBS: Partial<Record<RequestMethod, ParamRoute['method']>> = {
   [RequestMethod.DELETE]: 'delete',
 };
 
-const join = (...parts: string[]) => '/' + parts.map((p) => p.replace(/^\/+|\/+$/g, '')).filter(Boolean).join('/');
+const join = (...parts: string[]) =>
+  '/' +
+  parts
+    .map((p) => p.replace(/^\/+|\/+$/g, ''))
+    .filter(Boolean)
+    .join('/');
 
 /** The routes of every controller with at least one path parameter. */
 function routesWithIds(app: NestFastifyApplication): ParamRoute[] {
@@ -83,19 +88,29 @@ describe('fuzz: ids in paths', () => {
     expect(routes).toContainEqual({ method: 'get', path: '/api/machines/:id' });
   });
 
-  it.each(['owner', 'admin', 'viewer'] as const)('no id that is not an id gets a 5xx, as %s', async (role) => {
-    const agent: Agent = ws.as[role];
-    const failures: string[] = [];
-    for (const route of routes) {
-      for (const bad of NOT_IDS) {
-        const url = route.path.replace(/:[A-Za-z]+/g, bad);
-        const req = agent[route.method](url);
-        const res = route.method === 'get' || route.method === 'delete' ? await req : await req.set('Content-Type', 'application/json').send('{}');
-        if (res.status >= 500) failures.push(`${route.method.toUpperCase()} ${url.slice(0, 120)} → ${res.status} ${JSON.stringify(res.body).slice(0, 200)}`);
+  it.each(['owner', 'admin', 'viewer'] as const)(
+    'no id that is not an id gets a 5xx, as %s',
+    async (role) => {
+      const agent: Agent = ws.as[role];
+      const failures: string[] = [];
+      for (const route of routes) {
+        for (const bad of NOT_IDS) {
+          const url = route.path.replace(/:[A-Za-z]+/g, bad);
+          const req = agent[route.method](url);
+          const res =
+            route.method === 'get' || route.method === 'delete'
+              ? await req
+              : await req.set('Content-Type', 'application/json').send('{}');
+          if (res.status >= 500)
+            failures.push(
+              `${route.method.toUpperCase()} ${url.slice(0, 120)} → ${res.status} ${JSON.stringify(res.body).slice(0, 200)}`,
+            );
+        }
       }
-    }
-    expect(failures).toEqual([]);
-  }, 180_000);
+      expect(failures).toEqual([]);
+    },
+    180_000,
+  );
 
   it('afterwards the lists still load', async () => {
     for (const path of ['/api/machines', '/api/target-sets', '/api/readiness']) {

@@ -68,13 +68,28 @@ const mutation = (valid: Record<string, unknown>) => {
   const all = paths(valid);
   const fields = all.filter((p) => p.length > 0);
   const generators = [
-    { weight: 6, arbitrary: fc.tuple(fc.constantFrom(...all), fc.constantFrom(...BAD_VALUES)).map(([p, v]) => setAt(valid, p, v, false)) },
-    { weight: 1, arbitrary: fc.tuple(fc.string({ maxLength: 12 }), fc.jsonValue({ maxDepth: 2 })).map(([k, v]) => ({ ...valid, [k]: v })) },
+    {
+      weight: 6,
+      arbitrary: fc
+        .tuple(fc.constantFrom(...all), fc.constantFrom(...BAD_VALUES))
+        .map(([p, v]) => setAt(valid, p, v, false)),
+    },
+    {
+      weight: 1,
+      arbitrary: fc
+        .tuple(fc.string({ maxLength: 12 }), fc.jsonValue({ maxDepth: 2 }))
+        .map(([k, v]) => ({ ...valid, [k]: v })),
+    },
     { weight: 1, arbitrary: fc.jsonValue({ maxDepth: 4 }) },
   ];
   if (fields.length) {
     generators.push(
-      { weight: 2, arbitrary: fc.tuple(fc.constantFrom(...fields), fc.jsonValue({ maxDepth: 3 })).map(([p, v]) => setAt(valid, p, v, false)) },
+      {
+        weight: 2,
+        arbitrary: fc
+          .tuple(fc.constantFrom(...fields), fc.jsonValue({ maxDepth: 3 }))
+          .map(([p, v]) => setAt(valid, p, v, false)),
+      },
       { weight: 1, arbitrary: fc.constantFrom(...fields).map((p) => setAt(valid, p, undefined, true)) },
     );
   }
@@ -96,70 +111,326 @@ describe('fuzz: generated bad bodies on every write route', () => {
     ws = await createTestWorkshop(app, 'Fuzz');
     ids.machine = await newMachine(ws, 'plasma');
     ids.axis = await newAxis(ws, ids.machine, screwAxis('X'));
-    const rail = await ws.as.builder.post(`/api/machines/${ids.machine}/rails`).send({ label: 'Y1 (left)', axis: 'Y1', length: 800, holePitch: 60, firstHole: 40 });
+    const rail = await ws.as.builder
+      .post(`/api/machines/${ids.machine}/rails`)
+      .send({ label: 'Y1 (left)', axis: 'Y1', length: 800, holePitch: 60, firstHole: 40 });
     ids.rail = rail.body.id;
-    ids.boltDown = (await ws.as.builder.post(`/api/rails/${ids.rail}/bolt-downs`).send({ mode: 'line', readingUnit: 'um' })).body.id;
-    ids.trial = (await ws.as.technician.post(`/api/axes/${ids.axis}/travel-trials`).send({ lengthUnit: 'mm', stepsPerMmUsed: 640, moves: [{ commanded: 100, measured: 99.8 }] })).body.id;
+    ids.boltDown = (
+      await ws.as.builder.post(`/api/rails/${ids.rail}/bolt-downs`).send({ mode: 'line', readingUnit: 'um' })
+    ).body.id;
+    ids.trial = (
+      await ws.as.technician
+        .post(`/api/axes/${ids.axis}/travel-trials`)
+        .send({ lengthUnit: 'mm', stepsPerMmUsed: 640, moves: [{ commanded: 100, measured: 99.8 }] })
+    ).body.id;
     ids.targetSet = (await ws.as.owner.get('/api/target-sets')).body[0].id;
     ids.person = ws.userIds.viewer;
     const walk = (await ws.as.viewer.get(`/api/machines/${ids.machine}/safety-walk`)).body;
-    ids.safetyItem = (walk.items ?? walk.sections?.flatMap((s: { items: { id: string }[] }) => s.items) ?? [])[0]?.id ?? randomUUID();
+    ids.safetyItem =
+      (walk.items ?? walk.sections?.flatMap((s: { items: { id: string }[] }) => s.items) ?? [])[0]?.id ?? randomUUID();
     for (const [k, v] of Object.entries(ids)) if (typeof v !== 'string') throw new Error(`fixture ${k} missing`);
   });
   afterAll(() => app.close());
 
-  const stations = [0, 100, 200, 300, 400, 500, 600, 700].map((position, i) => ({ position, reading: (i % 3) * 0.002 }));
+  const stations = [0, 100, 200, 300, 400, 500, 600, 700].map((position, i) => ({
+    position,
+    reading: (i % 3) * 0.002,
+  }));
   const routes: Record<string, Route> = {
-    'POST /api/auth/login': { method: 'post', path: () => '/api/auth/login', role: 'viewer', body: () => ({ email: 'nobody@test.example.com', password: 'not the password' }) },
-    'POST /api/auth/password-reset': { method: 'post', path: () => '/api/auth/password-reset', role: 'viewer', body: () => ({ token: 'A'.repeat(30), password: 'a long enough password' }) },
-    'POST /api/machines': { method: 'post', path: () => '/api/machines', role: 'owner', body: () => ({ name: `Fuzz ${randomUUID().slice(0, 6)}`, kind: 'router', workArea: { x: 900, y: 600 }, notes: 'bench\nnotes' }) },
-    'PATCH /api/machines/:id': { method: 'patch', path: () => `/api/machines/${ids.machine}`, role: 'owner', body: () => ({ notes: 'new notes', name: `Fuzz machine ${randomUUID().slice(0, 6)}` }) },
-    'POST /api/machines/:id/rails': { method: 'post', path: () => `/api/machines/${ids.machine}/rails`, role: 'builder', body: () => ({ label: 'X1', axis: 'X', length: 1000, holePitch: 60, firstHole: 20, profileSize: 15 }) },
-    'PATCH /api/rails/:id': { method: 'patch', path: () => `/api/rails/${ids.rail}`, role: 'builder', body: () => ({ label: 'Y1 (left)', holePitch: 60 }) },
-    'POST /api/rails/:id/sweeps': { method: 'post', path: () => `/api/rails/${ids.rail}/sweeps`, role: 'builder', body: () => ({ readingUnit: 'mm', phase: 'as-left', stations, notes: 'ok', instrument: 'dial', temperatureC: 20 }) },
-    'POST /api/rails/:id/bolt-downs': { method: 'post', path: () => `/api/rails/${ids.rail}/bolt-downs`, role: 'builder', body: () => ({ mode: 'line', readingUnit: 'um' }) },
-    'PUT /api/bolt-downs/:id/holes/:index': { method: 'put', path: () => `/api/bolt-downs/${ids.boltDown}/holes/1`, role: 'builder', body: () => ({ reading: 0.001, fixed: false, writeId: randomUUID() }) },
-    'POST /api/bolt-downs/:id/final-sweep': { method: 'post', path: () => `/api/bolt-downs/${ids.boltDown}/final-sweep`, role: 'builder', body: () => ({ readingUnit: 'um', phase: 'as-left', stations }) },
-    'POST /api/machines/:id/axes': { method: 'post', path: () => `/api/machines/${ids.machine}/axes`, role: 'technician', body: () => screwAxis('Z') },
-    'PATCH /api/axes/:id': { method: 'patch', path: () => `/api/axes/${ids.axis}`, role: 'technician', body: () => ({ maxFeedRate: 4000, measuredTravelMm: 900 }) },
-    'POST /api/axes/:id/travel-trials': { method: 'post', path: () => `/api/axes/${ids.axis}/travel-trials`, role: 'technician', body: () => ({ lengthUnit: 'mm', stepsPerMmUsed: 640, moves: [{ commanded: 100, measured: 99.8 }, { commanded: 300, measured: 299.5 }] }) },
-    'POST /api/axes/:id/positioning-runs': { method: 'post', path: () => `/api/axes/${ids.axis}/positioning-runs`, role: 'technician', body: () => ({ readingUnit: 'um', targets: [10, 20], runs: [{ direction: 'up', deviations: [1, 2] }, { direction: 'up', deviations: [2, 2] }, { direction: 'down', deviations: [0, 1] }, { direction: 'down', deviations: [-1, 0] }] }) },
-    'POST /api/machines/:id/diagonal-checks': { method: 'post', path: () => `/api/machines/${ids.machine}/diagonal-checks`, role: 'technician', body: () => ({ lengthUnit: 'mm', sideX: 1000, sideY: 600, diagonal1: 1166.2, diagonal2: 1166.0 }) },
-    'POST /api/machines/:id/bed-grids': { method: 'post', path: () => `/api/machines/${ids.machine}/bed-grids`, role: 'technician', body: () => ({ lengthUnit: 'mm', readingUnit: 'mm', columns: 2, rows: 2, points: [{ x: 0, y: 0, z: 0 }, { x: 100, y: 0, z: 0.01 }, { x: 0, y: 100, z: 0 }, { x: 100, y: 100, z: 0.02 }] }) },
-    'POST /api/machines/:id/test-cuts': { method: 'post', path: () => `/api/machines/${ids.machine}/test-cuts`, role: 'technician', body: () => ({ lengthUnit: 'mm', nominal: { x: 300, y: 300, circle: 100 }, measured: { x: 299.9, y: 300.1, diagonal1: 424.2, diagonal2: 424.3, circleX: 100, circleY: 100.1 }, plateThickness: 6 }) },
-    'POST /api/axes/:id/backlash-checks': { method: 'post', path: () => `/api/axes/${ids.axis}/backlash-checks`, role: 'technician', body: () => ({ lengthUnit: 'mm', readingUnit: 'um', resolution: 1, positions: [{ position: 10, up: [12, 10, 11], down: [-8, -10, -9] }, { position: 450, up: [20, 22, 24], down: [5, 4, 6] }, { position: 880, up: [0, 2, 1], down: [31, 29, 30] }] }) },
-    'PUT /api/machines/:id/safety-walk/items/:itemId': { method: 'put', path: () => `/api/machines/${ids.machine}/safety-walk/items/${ids.safetyItem}`, role: 'owner', body: () => ({ answer: 'yes', note: 'checked' }) },
-    'POST /api/machines/:id/safety-walk/rounds': { method: 'post', path: () => `/api/machines/${ids.machine}/safety-walk/rounds`, role: 'owner', body: () => ({}) },
-    'POST /api/safety-items': { method: 'post', path: () => '/api/safety-items', role: 'owner', body: () => ({ section: 'cutting', text: 'Slag bin emptied' }) },
-    'POST /api/target-sets': { method: 'post', path: () => '/api/target-sets', role: 'owner', body: () => ({ name: `Set ${randomUUID().slice(0, 6)}`, description: 'fuzz', targets: { railStraightness: { value: 0.05, unit: 'mm' } } }) },
-    'PATCH /api/target-sets/:id': { method: 'patch', path: () => `/api/target-sets/${ids.targetSet}`, role: 'owner', body: () => ({ description: 'Edited' }) },
-    'POST /api/people': { method: 'post', path: () => '/api/people', role: 'admin', body: () => ({ name: 'Fuzz Person', email: `fuzz.${randomUUID().slice(0, 8)}@test.example.com`, role: 'viewer' }) },
-    'PATCH /api/people/:id': { method: 'patch', path: () => `/api/people/${ids.person}`, role: 'admin', body: () => ({ role: 'viewer', name: 'Viewer' }) },
-    'POST /api/machines/:id/checks/:checkId/waiver': { method: 'post', path: () => `/api/machines/${ids.machine}/checks/travel-trial:${ids.axis}/waiver`, role: 'owner', body: () => ({ reason: 'A reason long enough to count.' }) },
-    'POST /api/machines/:id/approval-requests': { method: 'post', path: () => `/api/machines/${ids.machine}/approval-requests`, role: 'owner', body: () => ({}) },
-    'POST /api/machines/:id/approvals': { method: 'post', path: () => `/api/machines/${ids.machine}/approvals`, role: 'owner', body: () => ({ password: 'not the password', statement: 'I approve.' }) },
-    'POST /api/machines/:id/reopen': { method: 'post', path: () => `/api/machines/${ids.machine}/reopen`, role: 'owner', body: () => ({ reason: 'Rail knocked by a trolley' }) },
+    'POST /api/auth/login': {
+      method: 'post',
+      path: () => '/api/auth/login',
+      role: 'viewer',
+      body: () => ({ email: 'nobody@test.example.com', password: 'not the password' }),
+    },
+    'POST /api/auth/password-reset': {
+      method: 'post',
+      path: () => '/api/auth/password-reset',
+      role: 'viewer',
+      body: () => ({ token: 'A'.repeat(30), password: 'a long enough password' }),
+    },
+    'POST /api/machines': {
+      method: 'post',
+      path: () => '/api/machines',
+      role: 'owner',
+      body: () => ({
+        name: `Fuzz ${randomUUID().slice(0, 6)}`,
+        kind: 'router',
+        workArea: { x: 900, y: 600 },
+        notes: 'bench\nnotes',
+      }),
+    },
+    'PATCH /api/machines/:id': {
+      method: 'patch',
+      path: () => `/api/machines/${ids.machine}`,
+      role: 'owner',
+      body: () => ({ notes: 'new notes', name: `Fuzz machine ${randomUUID().slice(0, 6)}` }),
+    },
+    'POST /api/machines/:id/rails': {
+      method: 'post',
+      path: () => `/api/machines/${ids.machine}/rails`,
+      role: 'builder',
+      body: () => ({ label: 'X1', axis: 'X', length: 1000, holePitch: 60, firstHole: 20, profileSize: 15 }),
+    },
+    'PATCH /api/rails/:id': {
+      method: 'patch',
+      path: () => `/api/rails/${ids.rail}`,
+      role: 'builder',
+      body: () => ({ label: 'Y1 (left)', holePitch: 60 }),
+    },
+    'POST /api/rails/:id/sweeps': {
+      method: 'post',
+      path: () => `/api/rails/${ids.rail}/sweeps`,
+      role: 'builder',
+      body: () => ({
+        readingUnit: 'mm',
+        phase: 'as-left',
+        stations,
+        notes: 'ok',
+        instrument: 'dial',
+        temperatureC: 20,
+      }),
+    },
+    'POST /api/rails/:id/bolt-downs': {
+      method: 'post',
+      path: () => `/api/rails/${ids.rail}/bolt-downs`,
+      role: 'builder',
+      body: () => ({ mode: 'line', readingUnit: 'um' }),
+    },
+    'PUT /api/bolt-downs/:id/holes/:index': {
+      method: 'put',
+      path: () => `/api/bolt-downs/${ids.boltDown}/holes/1`,
+      role: 'builder',
+      body: () => ({ reading: 0.001, fixed: false, writeId: randomUUID() }),
+    },
+    'POST /api/bolt-downs/:id/final-sweep': {
+      method: 'post',
+      path: () => `/api/bolt-downs/${ids.boltDown}/final-sweep`,
+      role: 'builder',
+      body: () => ({ readingUnit: 'um', phase: 'as-left', stations }),
+    },
+    'POST /api/machines/:id/axes': {
+      method: 'post',
+      path: () => `/api/machines/${ids.machine}/axes`,
+      role: 'technician',
+      body: () => screwAxis('Z'),
+    },
+    'PATCH /api/axes/:id': {
+      method: 'patch',
+      path: () => `/api/axes/${ids.axis}`,
+      role: 'technician',
+      body: () => ({ maxFeedRate: 4000, measuredTravelMm: 900 }),
+    },
+    'POST /api/axes/:id/travel-trials': {
+      method: 'post',
+      path: () => `/api/axes/${ids.axis}/travel-trials`,
+      role: 'technician',
+      body: () => ({
+        lengthUnit: 'mm',
+        stepsPerMmUsed: 640,
+        moves: [
+          { commanded: 100, measured: 99.8 },
+          { commanded: 300, measured: 299.5 },
+        ],
+      }),
+    },
+    'POST /api/axes/:id/positioning-runs': {
+      method: 'post',
+      path: () => `/api/axes/${ids.axis}/positioning-runs`,
+      role: 'technician',
+      body: () => ({
+        readingUnit: 'um',
+        targets: [10, 20],
+        runs: [
+          { direction: 'up', deviations: [1, 2] },
+          { direction: 'up', deviations: [2, 2] },
+          { direction: 'down', deviations: [0, 1] },
+          { direction: 'down', deviations: [-1, 0] },
+        ],
+      }),
+    },
+    'POST /api/machines/:id/diagonal-checks': {
+      method: 'post',
+      path: () => `/api/machines/${ids.machine}/diagonal-checks`,
+      role: 'technician',
+      body: () => ({ lengthUnit: 'mm', sideX: 1000, sideY: 600, diagonal1: 1166.2, diagonal2: 1166.0 }),
+    },
+    'POST /api/machines/:id/bed-grids': {
+      method: 'post',
+      path: () => `/api/machines/${ids.machine}/bed-grids`,
+      role: 'technician',
+      body: () => ({
+        lengthUnit: 'mm',
+        readingUnit: 'mm',
+        columns: 2,
+        rows: 2,
+        points: [
+          { x: 0, y: 0, z: 0 },
+          { x: 100, y: 0, z: 0.01 },
+          { x: 0, y: 100, z: 0 },
+          { x: 100, y: 100, z: 0.02 },
+        ],
+      }),
+    },
+    'POST /api/machines/:id/test-cuts': {
+      method: 'post',
+      path: () => `/api/machines/${ids.machine}/test-cuts`,
+      role: 'technician',
+      body: () => ({
+        lengthUnit: 'mm',
+        nominal: { x: 300, y: 300, circle: 100 },
+        measured: { x: 299.9, y: 300.1, diagonal1: 424.2, diagonal2: 424.3, circleX: 100, circleY: 100.1 },
+        plateThickness: 6,
+      }),
+    },
+    'POST /api/axes/:id/backlash-checks': {
+      method: 'post',
+      path: () => `/api/axes/${ids.axis}/backlash-checks`,
+      role: 'technician',
+      body: () => ({
+        lengthUnit: 'mm',
+        readingUnit: 'um',
+        resolution: 1,
+        positions: [
+          { position: 10, up: [12, 10, 11], down: [-8, -10, -9] },
+          { position: 450, up: [20, 22, 24], down: [5, 4, 6] },
+          { position: 880, up: [0, 2, 1], down: [31, 29, 30] },
+        ],
+      }),
+    },
+    'PUT /api/machines/:id/safety-walk/items/:itemId': {
+      method: 'put',
+      path: () => `/api/machines/${ids.machine}/safety-walk/items/${ids.safetyItem}`,
+      role: 'owner',
+      body: () => ({ answer: 'yes', note: 'checked' }),
+    },
+    'POST /api/machines/:id/safety-walk/rounds': {
+      method: 'post',
+      path: () => `/api/machines/${ids.machine}/safety-walk/rounds`,
+      role: 'owner',
+      body: () => ({}),
+    },
+    'POST /api/safety-items': {
+      method: 'post',
+      path: () => '/api/safety-items',
+      role: 'owner',
+      body: () => ({ section: 'cutting', text: 'Slag bin emptied' }),
+    },
+    'POST /api/target-sets': {
+      method: 'post',
+      path: () => '/api/target-sets',
+      role: 'owner',
+      body: () => ({
+        name: `Set ${randomUUID().slice(0, 6)}`,
+        description: 'fuzz',
+        targets: { railStraightness: { value: 0.05, unit: 'mm' } },
+      }),
+    },
+    'PATCH /api/target-sets/:id': {
+      method: 'patch',
+      path: () => `/api/target-sets/${ids.targetSet}`,
+      role: 'owner',
+      body: () => ({ description: 'Edited' }),
+    },
+    'POST /api/people': {
+      method: 'post',
+      path: () => '/api/people',
+      role: 'admin',
+      body: () => ({ name: 'Fuzz Person', email: `fuzz.${randomUUID().slice(0, 8)}@test.example.com`, role: 'viewer' }),
+    },
+    'PATCH /api/people/:id': {
+      method: 'patch',
+      path: () => `/api/people/${ids.person}`,
+      role: 'admin',
+      body: () => ({ role: 'viewer', name: 'Viewer' }),
+    },
+    'POST /api/machines/:id/checks/:checkId/waiver': {
+      method: 'post',
+      path: () => `/api/machines/${ids.machine}/checks/travel-trial:${ids.axis}/waiver`,
+      role: 'owner',
+      body: () => ({ reason: 'A reason long enough to count.' }),
+    },
+    'POST /api/machines/:id/approval-requests': {
+      method: 'post',
+      path: () => `/api/machines/${ids.machine}/approval-requests`,
+      role: 'owner',
+      body: () => ({}),
+    },
+    'POST /api/machines/:id/approvals': {
+      method: 'post',
+      path: () => `/api/machines/${ids.machine}/approvals`,
+      role: 'owner',
+      body: () => ({ password: 'not the password', statement: 'I approve.' }),
+    },
+    'POST /api/machines/:id/reopen': {
+      method: 'post',
+      path: () => `/api/machines/${ids.machine}/reopen`,
+      role: 'owner',
+      body: () => ({ reason: 'Rail knocked by a trolley' }),
+    },
     ...Object.fromEntries(
       (
         [
           ['straightness', { positions: [0, 100, 200, 300], readings: [0, 3, 7, 8], readingUnit: 'um' }],
           ['parallelism', { positions: [0, 250, 500], railA: [0, 0.01, 0.02], railB: [0.1, 0.12, 0.11] }],
           ['squareness', { sideX: 1000, sideY: 600, diagonal1: 1166.2, diagonal2: 1166.0 }],
-          ['flatness', { points: [{ x: 0, y: 0, z: 0 }, { x: 100, y: 0, z: 0 }, { x: 0, y: 100, z: 0 }, { x: 100, y: 100, z: 1 }], readingUnit: 'um' }],
+          [
+            'flatness',
+            {
+              points: [
+                { x: 0, y: 0, z: 0 },
+                { x: 100, y: 0, z: 0 },
+                { x: 0, y: 100, z: 0 },
+                { x: 100, y: 100, z: 1 },
+              ],
+              readingUnit: 'um',
+            },
+          ],
           ['drive', { type: 'belt', motorStepsPerRev: 200, microsteps: 16, beltPitch: 2, pulleyTeeth: 20 }],
           ['travel-trial', { stepsPerMmUsed: 640, moves: [{ commanded: 100, measured: 99.8 }] }],
-          ['positioning', { targets: [0, 100], runs: [{ direction: 'up', deviations: [1, 0] }, { direction: 'up', deviations: [3, 0] }, { direction: 'down', deviations: [-1, 2] }, { direction: 'down', deviations: [-1, 4] }], readingUnit: 'um' }],
-          ['screw-speed', { nominalDiameter: 16, rootDiameter: 12.9, unsupportedLength: 1000, lead: 5, mounting: 'fixed-supported', feedRate: 5000 }],
-          ['bolt-down', { length: 600, pitch: 60, firstHoleOffset: 30, mode: 'line', readings: [{ hole: 0, reading: 0 }] }],
+          [
+            'positioning',
+            {
+              targets: [0, 100],
+              runs: [
+                { direction: 'up', deviations: [1, 0] },
+                { direction: 'up', deviations: [3, 0] },
+                { direction: 'down', deviations: [-1, 2] },
+                { direction: 'down', deviations: [-1, 4] },
+              ],
+              readingUnit: 'um',
+            },
+          ],
+          [
+            'screw-speed',
+            {
+              nominalDiameter: 16,
+              rootDiameter: 12.9,
+              unsupportedLength: 1000,
+              lead: 5,
+              mounting: 'fixed-supported',
+              feedRate: 5000,
+            },
+          ],
+          [
+            'bolt-down',
+            { length: 600, pitch: 60, firstHoleOffset: 30, mode: 'line', readings: [{ hole: 0, reading: 0 }] },
+          ],
           ['travel-envelope', { axes: [{ name: 'X', measuredTravel: 1000, workSize: 900 }] }],
           ['test-cut', { x: { commanded: 100, measured: 100.1 }, y: { commanded: 100, measured: 99.9 } }],
         ] as [string, Record<string, unknown>][]
-      ).map(([name, body]) => [`POST /api/calc/${name}`, { method: 'post', path: () => `/api/calc/${name}`, role: 'viewer', body: () => body } as Route]),
+      ).map(([name, body]) => [
+        `POST /api/calc/${name}`,
+        { method: 'post', path: () => `/api/calc/${name}`, role: 'viewer', body: () => body } as Route,
+      ]),
     ),
   };
 
   const send = (agent: Agent, route: Route, body: unknown) =>
-    agent[route.method](route.path()).set('X-Forwarded-For', fuzzAddress).set('Content-Type', 'application/json').send(JSON.stringify(body) ?? 'null');
+    agent[route.method](route.path())
+      .set('X-Forwarded-For', fuzzAddress)
+      .set('Content-Type', 'application/json')
+      .send(JSON.stringify(body) ?? 'null');
 
   it.each(Object.keys(routes))('%s: no generated body gets a 5xx', async (name) => {
     const route = routes[name];

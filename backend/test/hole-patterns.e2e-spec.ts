@@ -17,13 +17,20 @@ const bracket = {
   entry: 'circle',
   circle: { centreX: 60, centreY: 45, circleDiameter: 66.68, count: 4, startAngleDeg: 45, diameter: 5.5 },
 };
-const binary = (res: NodeJS.ReadableStream & { setEncoding?: unknown }, cb: (err: Error | null, body: Buffer) => void) => {
+const binary = (
+  res: NodeJS.ReadableStream & { setEncoding?: unknown },
+  cb: (err: Error | null, body: Buffer) => void,
+) => {
   const chunks: Buffer[] = [];
   res.on('data', (c: Buffer) => chunks.push(c));
   res.on('end', () => cb(null, Buffer.concat(chunks)));
 };
 /** The body as bytes (PDF or SVG), whatever its content type. */
-const getPdf = (agent: Agent, url: string) => agent.get(url).buffer(true).parse(binary as never);
+const getPdf = (agent: Agent, url: string) =>
+  agent
+    .get(url)
+    .buffer(true)
+    .parse(binary as never);
 
 describe('hole patterns and drilling templates', () => {
   let app: NestFastifyApplication;
@@ -47,7 +54,15 @@ describe('hole patterns and drilling templates', () => {
 
   it('a builder saves a bolt-circle pattern; every role reads it; its holes are in mm on the circle', async () => {
     const p = await create(bracket);
-    expect(p).toMatchObject({ name: 'Y1 motor bracket', reference: 'bottom-left', lengthUnit: 'mm', widthMm: 120, heightMm: 90, entry: 'circle', circle: bracket.circle });
+    expect(p).toMatchObject({
+      name: 'Y1 motor bracket',
+      reference: 'bottom-left',
+      lengthUnit: 'mm',
+      widthMm: 120,
+      heightMm: 90,
+      entry: 'circle',
+      circle: bracket.circle,
+    });
     expect(p.holes).toHaveLength(4);
     // 66.68 mm PCD at 45°: each hole 66.68 / 2 / √2 = 23.5756 mm from the centre along x and y.
     expect(p.holes[0].xMm).toBeCloseTo(60 + 33.34 / Math.SQRT2, 9);
@@ -60,19 +75,59 @@ describe('hole patterns and drilling templates', () => {
   });
 
   it('takes inches: 1 in = 25.4 mm exactly, and keeps the entry as typed', async () => {
-    const p = await create({ name: 'Carriage plate (inch)', reference: 'left', lengthUnit: 'in', width: 6, height: 4, entry: 'grid', grid: { originX: 0.5, originY: 0.5, rows: 2, columns: 3, pitchX: 2.5, pitchY: 3, diameter: 0.257 } });
+    const p = await create({
+      name: 'Carriage plate (inch)',
+      reference: 'left',
+      lengthUnit: 'in',
+      width: 6,
+      height: 4,
+      entry: 'grid',
+      grid: { originX: 0.5, originY: 0.5, rows: 2, columns: 3, pitchX: 2.5, pitchY: 3, diameter: 0.257 },
+    });
     expect(p.widthMm).toBe(152.4);
     expect(p.heightMm).toBe(101.6);
     expect(p.holes[5]).toEqual({ xMm: 12.7 + 2 * 63.5, yMm: 12.7 + 76.2, diameterMm: expect.closeTo(6.5278, 12) });
-    expect(p.grid).toEqual({ originX: 0.5, originY: 0.5, rows: 2, columns: 3, pitchX: 2.5, pitchY: 3, diameter: 0.257 });
+    expect(p.grid).toEqual({
+      originX: 0.5,
+      originY: 0.5,
+      rows: 2,
+      columns: 3,
+      pitchX: 2.5,
+      pitchY: 3,
+      diameter: 0.257,
+    });
     expect([p.width, p.height]).toEqual([6, 4]);
   });
 
   // 1 in = 25.4 mm, 1 thou = 0.0254 mm exactly: one pattern typed in mm and in thou has the same holes.
   it('mm and thou give the same pattern', async () => {
-    const grid = (k: number) => ({ originX: 10 * k, originY: 12.7 * k, rows: 2, columns: 2, pitchX: 50.8 * k, pitchY: 25.4 * k, diameter: 6.35 * k });
-    const mm = await create({ name: 'Plate mm', reference: 'left', lengthUnit: 'mm', width: 101.6, height: 63.5, entry: 'grid', grid: grid(1) });
-    const thou = await create({ name: 'Plate thou', reference: 'left', lengthUnit: 'thou', width: 4000, height: 2500, entry: 'grid', grid: grid(1000 / 25.4) });
+    const grid = (k: number) => ({
+      originX: 10 * k,
+      originY: 12.7 * k,
+      rows: 2,
+      columns: 2,
+      pitchX: 50.8 * k,
+      pitchY: 25.4 * k,
+      diameter: 6.35 * k,
+    });
+    const mm = await create({
+      name: 'Plate mm',
+      reference: 'left',
+      lengthUnit: 'mm',
+      width: 101.6,
+      height: 63.5,
+      entry: 'grid',
+      grid: grid(1),
+    });
+    const thou = await create({
+      name: 'Plate thou',
+      reference: 'left',
+      lengthUnit: 'thou',
+      width: 4000,
+      height: 2500,
+      entry: 'grid',
+      grid: grid(1000 / 25.4),
+    });
     expect(thou.lengthUnit).toBe('thou');
     expect(thou.widthMm).toBeCloseTo(mm.widthMm, 9);
     thou.holes.forEach((h: { xMm: number; yMm: number; diameterMm: number }, i: number) => {
@@ -87,10 +142,35 @@ describe('hole patterns and drilling templates', () => {
     const before = await count();
     const cases: [Record<string, unknown>, RegExp][] = [
       [{ ...bracket, width: 50 }, /^circle: hole \d .* wholly inside the 50 mm × 90 mm outline/],
-      [{ ...bracket, entry: 'list', circle: undefined, holes: [{ x: 10, y: 10, diameter: 6 }, { x: 14, y: 10, diameter: 6 }] }, /^holes\[1\]: hole 2 overlaps hole 1/],
-      [{ ...bracket, entry: 'list', circle: undefined, holes: [{ x: 10, y: 10, diameter: 0 }] }, /^holes\[0\]: .* diameter greater than 0/],
-      [{ ...bracket, entry: 'list', circle: undefined, holes: [{ x: 10, y: 10, diameter: -1 }] }, /holes\.0\.diameter must be greater than 0/],
-      [{ ...bracket, entry: 'grid', circle: undefined, grid: { originX: 10, originY: 10, rows: 40, columns: 40, pitchX: 1, pitchY: 1, diameter: 0.5 } }, /^grid: rows × columns must be at most 1000/],
+      [
+        {
+          ...bracket,
+          entry: 'list',
+          circle: undefined,
+          holes: [
+            { x: 10, y: 10, diameter: 6 },
+            { x: 14, y: 10, diameter: 6 },
+          ],
+        },
+        /^holes\[1\]: hole 2 overlaps hole 1/,
+      ],
+      [
+        { ...bracket, entry: 'list', circle: undefined, holes: [{ x: 10, y: 10, diameter: 0 }] },
+        /^holes\[0\]: .* diameter greater than 0/,
+      ],
+      [
+        { ...bracket, entry: 'list', circle: undefined, holes: [{ x: 10, y: 10, diameter: -1 }] },
+        /holes\.0\.diameter must be greater than 0/,
+      ],
+      [
+        {
+          ...bracket,
+          entry: 'grid',
+          circle: undefined,
+          grid: { originX: 10, originY: 10, rows: 40, columns: 40, pitchX: 1, pitchY: 1, diameter: 0.5 },
+        },
+        /^grid: rows × columns must be at most 1000/,
+      ],
       [{ ...bracket, entry: 'grid' }, /grid must give originX/],
       [{ ...bracket, lengthUnit: 'cm' }, /lengthUnit must be one of mm, um, in, thou/],
       [{ ...bracket, unit: 'mm' }, /unit is no longer accepted: send lengthUnit and readingUnit/],
@@ -125,16 +205,27 @@ describe('hole patterns and drilling templates', () => {
 
   it('changes and deletions are audited in the history and the change log', async () => {
     const p = await create(bracket);
-    const put = await ws.as.builder.put(`/api/hole-patterns/${p.id}`).send({ ...bracket, name: 'Y2 motor bracket', circle: { ...bracket.circle, count: 6 } });
+    const put = await ws.as.builder
+      .put(`/api/hole-patterns/${p.id}`)
+      .send({ ...bracket, name: 'Y2 motor bracket', circle: { ...bracket.circle, count: 6 } });
     expect(put.status).toBe(200);
     expect(put.body.holes).toHaveLength(6);
     expect((await ws.as.builder.delete(`/api/hole-patterns/${p.id}`)).status).toBe(204);
     expect((await ws.as.viewer.get(`/api/hole-patterns/${p.id}`)).status).toBe(404);
-    const history = (await ws.as.viewer.get(`/api/machines/${machineId}/history`).query({ limit: 200 })).body.entries as { summary: string }[];
+    const history = (await ws.as.viewer.get(`/api/machines/${machineId}/history`).query({ limit: 200 })).body
+      .entries as { summary: string }[];
     const summaries = history.map((e) => e.summary);
-    expect(summaries).toEqual(expect.arrayContaining(['Hole pattern Y1 motor bracket (4 holes) added', 'Hole pattern Y2 motor bracket changed', 'Hole pattern Y2 motor bracket removed']));
+    expect(summaries).toEqual(
+      expect.arrayContaining([
+        'Hole pattern Y1 motor bracket (4 holes) added',
+        'Hole pattern Y2 motor bracket changed',
+        'Hole pattern Y2 motor bracket removed',
+      ]),
+    );
     const db = app.get<Database>(DRIZZLE);
-    const log = await db.execute(sql`select operation from change_log where table_name = 'hole_patterns' and record_id = ${p.id} order by at, txid`);
+    const log = await db.execute(
+      sql`select operation from change_log where table_name = 'hole_patterns' and record_id = ${p.id} order by at, txid`,
+    );
     expect(log.rows.map((r) => r.operation)).toEqual(['insert', 'update', 'delete']);
   });
 
@@ -149,22 +240,36 @@ describe('hole patterns and drilling templates', () => {
     expect(text).toMatch(/Print at actual size/);
     expect(text).toMatch(/Letter/);
     const [page] = readPdfPages(pdf);
-    expect([page.widthPt, page.heightPt].sort((a, b) => a - b)).toEqual([expect.closeTo(215.9 * K, 3), expect.closeTo(279.4 * K, 3)]);
+    expect([page.widthPt, page.heightPt].sort((a, b) => a - b)).toEqual([
+      expect.closeTo(215.9 * K, 3),
+      expect.closeTo(279.4 * K, 3),
+    ]);
     const o = page.outlines[0];
     const found = page.crosshairs.map((c) => ({ x: (c.x - o.x0) / K, y: (o.y1 - c.y) / K }));
     expect(found).toHaveLength(4);
-    const errors = p.holes.map((h: { xMm: number; yMm: number }) => Math.min(...found.map((f) => Math.hypot(f.x - h.xMm, f.y - h.yMm))));
+    const errors = p.holes.map((h: { xMm: number; yMm: number }) =>
+      Math.min(...found.map((f) => Math.hypot(f.x - h.xMm, f.y - h.yMm))),
+    );
     expect(Math.max(...errors)).toBeLessThan(0.01);
-    expect(page.bars.map((b) => b.x1 - b.x0).sort((a, b) => a - b)).toEqual([expect.closeTo(100 * K, 2), expect.closeTo(101.6 * K, 2)]);
+    expect(page.bars.map((b) => b.x1 - b.x0).sort((a, b) => a - b)).toEqual([
+      expect.closeTo(100 * K, 2),
+      expect.closeTo(101.6 * K, 2),
+    ]);
     const svg = await getPdf(ws.as.viewer, `/api/hole-patterns/${p.id}/template.svg`);
     expect(svg.status).toBe(200);
     expect(svg.headers['content-type']).toMatch(/^image\/svg\+xml/);
     expect((svg.body as Buffer).toString('utf8')).toMatch(/class="crosshair"/);
-    expect((await ws.as.viewer.get(`/api/hole-patterns/${p.id}/template.pdf?paper=a3`)).body.message.join()).toMatch(/paper must be one of a4, letter/);
+    expect((await ws.as.viewer.get(`/api/hole-patterns/${p.id}/template.pdf?paper=a3`)).body.message.join()).toMatch(
+      /paper must be one of a4, letter/,
+    );
   });
 
   it('a rail’s template is derived from the rail: holes at its pitch on the centre line, tiled over A4', async () => {
-    const rail = (await ws.as.builder.post(`/api/machines/${machineId}/rails`).send({ label: 'Y1 (left)', axis: 'Y1', length: 1000, profileSize: 20, holePitch: 60, firstHole: 20 })).body;
+    const rail = (
+      await ws.as.builder
+        .post(`/api/machines/${machineId}/rails`)
+        .send({ label: 'Y1 (left)', axis: 'Y1', length: 1000, profileSize: 20, holePitch: 60, firstHole: 20 })
+    ).body;
     const res = await getPdf(ws.as.viewer, `/api/rails/${rail.id}/template.pdf`);
     expect(res.status).toBe(200);
     const pdf = res.body as Buffer;

@@ -80,7 +80,10 @@ describe('instances and database restarts', () => {
 
   it('two instances starting together on an empty database migrate and seed once, and both serve', async () => {
     cluster.createDatabase('together');
-    const [a, b] = [startServer(cluster, 'together', data, await freePort()), startServer(cluster, 'together', data, await freePort())];
+    const [a, b] = [
+      startServer(cluster, 'together', data, await freePort()),
+      startServer(cluster, 'together', data, await freePort()),
+    ];
     servers.push(a, b);
     await waitFor('both instances', async () => (await health(a.port)) === 200 && (await health(b.port)) === 200);
     expect(a.process.exitCode).toBeNull();
@@ -92,7 +95,8 @@ describe('instances and database restarts', () => {
       expect(workshops.rows.length).toBeGreaterThan(0);
       expect(workshops.rows.every((r) => r.n === 1)).toBe(true);
       const applied = await client.query('select count(*)::int as n from drizzle.__drizzle_migrations');
-      const journal = (await import(path.resolve(here, '../../drizzle/meta/_journal.json'), { with: { type: 'json' } })).default as { entries: unknown[] };
+      const journal = (await import(path.resolve(here, '../../drizzle/meta/_journal.json'), { with: { type: 'json' } }))
+        .default as { entries: unknown[] };
       expect(applied.rows[0].n).toBe(journal.entries.length);
       // The application's role is no superuser and cannot rewrite history.
       const role = await client.query(`select rolsuper from pg_roles where rolname = 'railwright_app'`);
@@ -104,7 +108,9 @@ describe('instances and database restarts', () => {
     await history.connect();
     try {
       await expect(history.query('delete from audit_entries')).rejects.toMatchObject({ code: '42501' });
-      await expect(history.query('update change_log set actor_name = $1', ['someone else'])).rejects.toMatchObject({ code: '42501' });
+      await expect(history.query('update change_log set actor_name = $1', ['someone else'])).rejects.toMatchObject({
+        code: '42501',
+      });
     } finally {
       await history.end();
     }

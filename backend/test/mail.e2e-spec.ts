@@ -47,7 +47,10 @@ describe('mail: the fake SMTP server, the outbox, and set-your-password links', 
     const { mail } = await invite(email);
     const token = tokenOf(mail.text);
     const db = app.get<Database>(DRIZZLE);
-    const rows = await db.select().from(passwordLinks).where(eq(passwordLinks.tokenHash, createHash('sha256').update(token).digest('hex')));
+    const rows = await db
+      .select()
+      .from(passwordLinks)
+      .where(eq(passwordLinks.tokenHash, createHash('sha256').update(token).digest('hex')));
     expect(rows).toHaveLength(1);
     expect(JSON.stringify(await db.select().from(passwordLinks))).not.toContain(token);
 
@@ -62,15 +65,23 @@ describe('mail: the fake SMTP server, the outbox, and set-your-password links', 
     const eleven = await anonymous(app).post('/api/auth/password-reset').send({ token, password: 'gantry true' });
     expect(eleven.status).toBe(400);
 
-    const set = await anonymous(app).post('/api/auth/password-reset').send({ token, password: 'gantry square and true' });
+    const set = await anonymous(app)
+      .post('/api/auth/password-reset')
+      .send({ token, password: 'gantry square and true' });
     expect(set.status).toBe(200);
     expect(set.body).toEqual({ email, signedIn: true });
-    expect((await anonymous(app).post('/api/auth/login').send({ email, password: 'gantry square and true' })).status).toBe(200);
+    expect(
+      (await anonymous(app).post('/api/auth/login').send({ email, password: 'gantry square and true' })).status,
+    ).toBe(200);
 
-    const again = await anonymous(app).post('/api/auth/password-reset').send({ token, password: 'someone else entirely' });
+    const again = await anonymous(app)
+      .post('/api/auth/password-reset')
+      .send({ token, password: 'someone else entirely' });
     expect(again.status).toBe(410);
     expect(again.body.message).toMatch(/already been used/);
-    expect((await anonymous(app).post('/api/auth/login').send({ email, password: 'someone else entirely' })).status).toBe(401);
+    expect(
+      (await anonymous(app).post('/api/auth/login').send({ email, password: 'someone else entirely' })).status,
+    ).toBe(401);
   });
 
   it('refuses an expired link (410) and an unknown one (404); a malformed one is 400', async () => {
@@ -78,13 +89,26 @@ describe('mail: the fake SMTP server, the outbox, and set-your-password links', 
     const { mail } = await invite(email);
     const token = tokenOf(mail.text);
     const db = app.get<Database>(DRIZZLE);
-    await db.update(passwordLinks).set({ expiresAt: new Date(Date.now() - 1000) }).where(eq(passwordLinks.tokenHash, createHash('sha256').update(token).digest('hex')));
-    const expired = await anonymous(app).post('/api/auth/password-reset').send({ token, password: 'too late for this one' });
+    await db
+      .update(passwordLinks)
+      .set({ expiresAt: new Date(Date.now() - 1000) })
+      .where(eq(passwordLinks.tokenHash, createHash('sha256').update(token).digest('hex')));
+    const expired = await anonymous(app)
+      .post('/api/auth/password-reset')
+      .send({ token, password: 'too late for this one' });
     expect(expired.status).toBe(410);
     expect(expired.body.message).toMatch(/expired/);
     expect((await anonymous(app).get(`/api/auth/password-reset/${token}`)).status).toBe(410);
-    expect((await anonymous(app).post('/api/auth/password-reset').send({ token: 'A'.repeat(43), password: 'a long enough password' })).status).toBe(404);
-    const bad = await anonymous(app).post('/api/auth/password-reset').send({ token: 'x y', password: 'a long enough password' });
+    expect(
+      (
+        await anonymous(app)
+          .post('/api/auth/password-reset')
+          .send({ token: 'A'.repeat(43), password: 'a long enough password' })
+      ).status,
+    ).toBe(404);
+    const bad = await anonymous(app)
+      .post('/api/auth/password-reset')
+      .send({ token: 'x y', password: 'a long enough password' });
     expect(bad.status).toBe(400);
     expect(JSON.stringify(bad.body.message)).toMatch(/token/);
   });
@@ -99,26 +123,43 @@ describe('mail: the fake SMTP server, the outbox, and set-your-password links', 
     expect(resend.status).toBe(201);
     const second = tokenOf((await smtp.waitFor((m) => m.envelopeTo.includes(email) && !m.text.includes(first))).text);
     expect(second).not.toBe(first);
-    expect((await anonymous(app).post('/api/auth/password-reset').send({ token: second, password: 'the second link works' })).status).toBe(200);
-    expect((await anonymous(app).post('/api/auth/password-reset').send({ token: first, password: 'the first is closed now' })).status).toBe(410);
+    expect(
+      (await anonymous(app).post('/api/auth/password-reset').send({ token: second, password: 'the second link works' }))
+        .status,
+    ).toBe(200);
+    expect(
+      (
+        await anonymous(app)
+          .post('/api/auth/password-reset')
+          .send({ token: first, password: 'the first is closed now' })
+      ).status,
+    ).toBe(410);
   });
 
   describe('the development outbox', () => {
     it('shows an admin the messages of their own workshop only', async () => {
       const email = `outbox.${Date.now()}@test.example.com`;
       await invite(email, 'viewer');
-      await other.as.admin.post('/api/people').send({ name: 'Elsewhere Person', email: `else.${Date.now()}@test.example.com`, role: 'viewer' });
+      await other.as.admin
+        .post('/api/people')
+        .send({ name: 'Elsewhere Person', email: `else.${Date.now()}@test.example.com`, role: 'viewer' });
       const res = await ws.as.admin.get('/api/dev/outbox');
       expect(res.status).toBe(200);
       const mine = res.body.find((m: { to: string[] }) => m.to.includes(email));
       // The set-your-password link is for the person alone: the admin's outbox shows it hidden.
-      expect(mine).toMatchObject({ subject: `Your Railwright sign-in for ${ws.name}`, linkHidden: true, text: expect.stringContaining(`[link hidden: only ${email} can open it]`), attachments: [] });
+      expect(mine).toMatchObject({
+        subject: `Your Railwright sign-in for ${ws.name}`,
+        linkHidden: true,
+        text: expect.stringContaining(`[link hidden: only ${email} can open it]`),
+        attachments: [],
+      });
       expect(JSON.stringify(res.body)).not.toMatch(/token=/);
       expect(res.body.some((m: { subject: string }) => m.subject.includes(other.name))).toBe(false);
     });
 
     it('is for admins only', async () => {
-      for (const role of ['owner', 'technician', 'builder', 'viewer'] as const) expect((await ws.as[role].get('/api/dev/outbox')).status).toBe(403);
+      for (const role of ['owner', 'technician', 'builder', 'viewer'] as const)
+        expect((await ws.as[role].get('/api/dev/outbox')).status).toBe(403);
       expect((await anonymous(app).get('/api/dev/outbox')).status).toBe(401);
     });
   });

@@ -18,14 +18,21 @@ describe('people (admin only, one workshop)', () => {
   describe('the role matrix', () => {
     it('anonymous callers get 401 on every people route', async () => {
       expect((await anonymous(app).get('/api/people')).status).toBe(401);
-      expect((await anonymous(app).post('/api/people').send({ name: 'x', email: 'x@y.z', role: 'viewer' })).status).toBe(401);
-      expect((await anonymous(app).patch(`/api/people/${ws.userIds.viewer}`).send({ role: 'builder' })).status).toBe(401);
+      expect(
+        (await anonymous(app).post('/api/people').send({ name: 'x', email: 'x@y.z', role: 'viewer' })).status,
+      ).toBe(401);
+      expect((await anonymous(app).patch(`/api/people/${ws.userIds.viewer}`).send({ role: 'builder' })).status).toBe(
+        401,
+      );
     });
 
     it.each(ROLES.filter((r) => r !== 'admin'))('%s gets 403 on every people route', async (role) => {
       const agent = ws.as[role];
       expect((await agent.get('/api/people')).status).toBe(403);
-      expect((await agent.post('/api/people').send({ name: 'x', email: `x.${role}@test.example.com`, role: 'viewer' })).status).toBe(403);
+      expect(
+        (await agent.post('/api/people').send({ name: 'x', email: `x.${role}@test.example.com`, role: 'viewer' }))
+          .status,
+      ).toBe(403);
       expect((await agent.patch(`/api/people/${ws.userIds.viewer}`).send({ role: 'builder' })).status).toBe(403);
     });
 
@@ -62,7 +69,9 @@ describe('people (admin only, one workshop)', () => {
   });
 
   it('refuses a second account for the same e-mail with 409', async () => {
-    const res = await ws.as.admin.post('/api/people').send({ name: 'Dup', email: ws.emails.viewer.toUpperCase(), role: 'viewer' });
+    const res = await ws.as.admin
+      .post('/api/people')
+      .send({ name: 'Dup', email: ws.emails.viewer.toUpperCase(), role: 'viewer' });
     expect(res.status).toBe(409);
   });
 

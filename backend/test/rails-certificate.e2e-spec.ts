@@ -19,7 +19,11 @@ describe('rail checks in the approval snapshot', () => {
 
   it('holds a rail straightness series: residuals per station in the reading unit, the target band as limits', async () => {
     const machineId = await newMachine(ws, 'Charted router');
-    const rail = (await ws.as.builder.post(`/api/machines/${machineId}/rails`).send({ label: 'Y1 (left)', axis: 'Y1', lengthUnit: 'in', length: 32, holePitch: 2.4, firstHole: 1 })).body;
+    const rail = (
+      await ws.as.builder
+        .post(`/api/machines/${machineId}/rails`)
+        .send({ label: 'Y1 (left)', axis: 'Y1', lengthUnit: 'in', length: 32, holePitch: 2.4, firstHole: 1 })
+    ).body;
     const positionsIn = [0, 8, 16, 24, 31];
     const readings = [0, 4, 2, 6, 3];
     const sweep = await ws.as.builder.post(`/api/rails/${rail.id}/sweeps`).send({
@@ -35,7 +39,9 @@ describe('rail checks in the approval snapshot', () => {
     const approval = await requestAndApprove(ws, machineId, TEST_PASSWORD);
 
     const [row] = await app.get<Database>(DRIZZLE).select().from(approvals).where(eq(approvals.id, approval.id));
-    const check = (row.snapshot.checks as { key: string; series?: CheckSeries; warnings?: unknown[] }[]).find((c) => c.key === key)!;
+    const check = (row.snapshot.checks as { key: string; series?: CheckSeries; warnings?: unknown[] }[]).find(
+      (c) => c.key === key,
+    )!;
     expect(check.series).toBeDefined();
     const series = check.series!;
     expect(series.x.unit).toBe('in');
@@ -45,7 +51,10 @@ describe('rail checks in the approval snapshot', () => {
     const points = series.lines[0].points;
     expect(points.map((p) => p[0])).toEqual(positionsIn);
     // The residuals' spread is the minimum-zone straightness of the same data through the engine.
-    const engine = evaluateStraightness({ positionsMm: positionsIn.map((p) => p * 25.4), readingsMm: readings.map((r) => r / 1000) });
+    const engine = evaluateStraightness({
+      positionsMm: positionsIn.map((p) => p * 25.4),
+      readingsMm: readings.map((r) => r / 1000),
+    });
     const ys = points.map((p) => p[1]);
     expect(Math.max(...ys) - Math.min(...ys)).toBeCloseTo(engine.minimumZone.straightnessMm * 1000, 9);
     // Centred on the zone's middle, so the band reads around zero.

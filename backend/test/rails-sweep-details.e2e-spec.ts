@@ -6,7 +6,16 @@ import { lockAsApproved } from './support/stand-in-approval.js';
 
 const RAIL = { label: 'Y1 (left)', axis: 'Y1', length: 800, holePitch: 60, firstHole: 40 };
 const stations = [0, 200, 400, 600, 800].map((position, i) => ({ position, reading: [0, 2, 1, 3, 2][i] }));
-const SWEEP = { readingUnit: 'um', phase: 'as-left', face: 'top', stations, instrument: 'Dial 0.01', boltSize: 'M5', torqueNm: 8, notes: 'first pass' };
+const SWEEP = {
+  readingUnit: 'um',
+  phase: 'as-left',
+  face: 'top',
+  stations,
+  instrument: 'Dial 0.01',
+  boltSize: 'M5',
+  torqueNm: 8,
+  notes: 'first pass',
+};
 
 describe("correcting a sweep's details", () => {
   let app: NestFastifyApplication;
@@ -22,23 +31,42 @@ describe("correcting a sweep's details", () => {
   };
   const history = async () => {
     const res = await ws.as.viewer.get(`/api/machines/${machineId}/history?limit=200`);
-    return res.body.entries as { recordType: string; recordId: string; action: string; summary: string; changes: Record<string, unknown> | null }[];
+    return res.body.entries as {
+      recordType: string;
+      recordId: string;
+      action: string;
+      summary: string;
+      changes: Record<string, unknown> | null;
+    }[];
   };
 
   beforeAll(async () => {
     app = await createTestApp();
     ws = await createTestWorkshop(app, 'Sweep details');
     other = await createTestWorkshop(app, 'Sweep details other');
-    machineId = (await ws.as.builder.post('/api/machines').send({ name: 'Plasma S', kind: 'plasma', workArea: { x: 3000, y: 1500 } })).body.id;
+    machineId = (
+      await ws.as.builder
+        .post('/api/machines')
+        .send({ name: 'Plasma S', kind: 'plasma', workArea: { x: 3000, y: 1500 } })
+    ).body.id;
     railId = (await ws.as.builder.post(`/api/machines/${machineId}/rails`).send(RAIL)).body.id;
   });
   afterAll(() => app.close());
 
   it('changes only the fields sent, keeps the readings and result, and audits the old and new values', async () => {
     const sweep = await record();
-    const res = await ws.as.builder.patch(`/api/sweeps/${sweep.id}`).send({ datum: '  Granite bar across both rails ', notes: 'second pass after re-torque', torqueNm: null });
+    const res = await ws.as.builder
+      .patch(`/api/sweeps/${sweep.id}`)
+      .send({ datum: '  Granite bar across both rails ', notes: 'second pass after re-torque', torqueNm: null });
     expect(res.status).toBe(200);
-    expect(res.body).toMatchObject({ id: sweep.id, datum: 'Granite bar across both rails', notes: 'second pass after re-torque', torqueNm: null, instrument: 'Dial 0.01', boltSize: 'M5' });
+    expect(res.body).toMatchObject({
+      id: sweep.id,
+      datum: 'Granite bar across both rails',
+      notes: 'second pass after re-torque',
+      torqueNm: null,
+      instrument: 'Dial 0.01',
+      boltSize: 'M5',
+    });
     expect(res.body.stations).toEqual(sweep.stations);
     expect(res.body.result).toEqual(sweep.result);
     expect(res.body.status).toBe(sweep.status);
@@ -48,7 +76,9 @@ describe("correcting a sweep's details", () => {
     const list = (await ws.as.viewer.get(`/api/rails/${railId}/sweeps`)).body as { id: string; datum: string | null }[];
     expect(list.find((s) => s.id === sweep.id)?.datum).toBe('Granite bar across both rails');
 
-    const entry = (await history()).find((e) => e.recordType === 'rail-sweep' && e.recordId === sweep.id && e.action === 'updated');
+    const entry = (await history()).find(
+      (e) => e.recordType === 'rail-sweep' && e.recordId === sweep.id && e.action === 'updated',
+    );
     expect(entry?.changes).toEqual({
       before: { datum: null, notes: 'first pass', torqueNm: 8 },
       after: { datum: 'Granite bar across both rails', notes: 'second pass after re-torque', torqueNm: null },
@@ -86,7 +116,13 @@ describe("correcting a sweep's details", () => {
       expect(JSON.stringify(res.body.message)).toMatch(field);
     }
     const read = await ws.as.viewer.get(`/api/sweeps/${sweep.id}`);
-    expect(read.body).toMatchObject({ instrument: 'Dial 0.01', boltSize: 'M5', torqueNm: 8, notes: 'first pass', phase: 'as-left' });
+    expect(read.body).toMatchObject({
+      instrument: 'Dial 0.01',
+      boltSize: 'M5',
+      torqueNm: 8,
+      notes: 'first pass',
+      phase: 'as-left',
+    });
   });
 
   it('a viewer is refused (403); another workshop gets 404', async () => {
@@ -106,7 +142,11 @@ describe("correcting a sweep's details", () => {
   });
 
   it('is refused (409) while the machine is approved as ready to cut', async () => {
-    const approved = (await ws.as.owner.post('/api/machines').send({ name: 'Approved router S', kind: 'router', workArea: { x: 900, y: 600 } })).body.id as string;
+    const approved = (
+      await ws.as.owner
+        .post('/api/machines')
+        .send({ name: 'Approved router S', kind: 'router', workArea: { x: 900, y: 600 } })
+    ).body.id as string;
     const rail = (await ws.as.builder.post(`/api/machines/${approved}/rails`).send(RAIL)).body.id as string;
     const sweep = (await ws.as.builder.post(`/api/rails/${rail}/sweeps`).send(SWEEP)).body as { id: string };
     await waiveAllBut(ws, approved, () => false);
@@ -115,13 +155,20 @@ describe("correcting a sweep's details", () => {
     const res = await ws.as.builder.patch(`/api/sweeps/${sweep.id}`).send({ datum: 'Bar', notes: 'after approval' });
     expect(res.status).toBe(409);
     expect(res.body.message).toMatch(/approved as ready to cut/);
-    expect((await ws.as.viewer.get(`/api/sweeps/${sweep.id}`)).body).toMatchObject({ datum: null, notes: 'first pass' });
+    expect((await ws.as.viewer.get(`/api/sweeps/${sweep.id}`)).body).toMatchObject({
+      datum: null,
+      notes: 'first pass',
+    });
   }, 60_000);
 
   it('a correction sent twice with one Idempotency-Key is recorded once', async () => {
     const sweep = await record();
     const key = randomUUID();
-    const send = () => ws.as.builder.patch(`/api/sweeps/${sweep.id}`).set('Idempotency-Key', key).send({ notes: 'typed at the machine' });
+    const send = () =>
+      ws.as.builder
+        .patch(`/api/sweeps/${sweep.id}`)
+        .set('Idempotency-Key', key)
+        .send({ notes: 'typed at the machine' });
     const [a, b] = [await send(), await send()];
     expect([a.status, b.status]).toEqual([200, 200]);
     expect(b.body.notes).toBe('typed at the machine');

@@ -33,7 +33,14 @@ describe('rails', () => {
     expect(rail.holes).toHaveLength(17);
     expect(rail.holes[0]).toEqual({ index: 0, position: 20, at: 20 });
     expect(rail.holes[16]).toEqual({ index: 16, position: 980, at: 980 });
-    expect(rail).toMatchObject({ label: 'Y1 (left)', axis: 'Y1', lengthMm: 1000, profileSize: 20, partnerRailId: null, typicalBoltSize: 'M5' });
+    expect(rail).toMatchObject({
+      label: 'Y1 (left)',
+      axis: 'Y1',
+      lengthMm: 1000,
+      profileSize: 20,
+      partnerRailId: null,
+      typicalBoltSize: 'M5',
+    });
     const list = await ws.as.viewer.get(`/api/machines/${machineId}/rails`);
     expect(list.status).toBe(200);
     expect(list.body.map((r: { id: string }) => r.id)).toContain(rail.id);
@@ -54,11 +61,23 @@ describe('rails', () => {
     expect((await other.as.owner.patch(`/api/rails/${rail.id}`).send({ label: 'x' })).status).toBe(404);
     expect((await other.as.owner.delete(`/api/rails/${rail.id}`)).status).toBe(404);
     expect((await other.as.owner.get(`/api/rails/${rail.id}/sweeps`)).status).toBe(404);
-    expect((await other.as.owner.post(`/api/rails/${rail.id}/sweeps`).send({ readingUnit: 'mm', phase: 'as-found', stations: stations([0, 0, 0]) })).status).toBe(404);
+    expect(
+      (
+        await other.as.owner
+          .post(`/api/rails/${rail.id}/sweeps`)
+          .send({ readingUnit: 'mm', phase: 'as-found', stations: stations([0, 0, 0]) })
+      ).status,
+    ).toBe(404);
     expect((await other.as.owner.get(`/api/rails/${rail.id}/parallelism`)).status).toBe(404);
     expect((await ws.as.viewer.patch(`/api/rails/${rail.id}`).send({ label: 'x' })).status).toBe(403);
     expect((await ws.as.viewer.delete(`/api/rails/${rail.id}`)).status).toBe(403);
-    expect((await ws.as.viewer.post(`/api/rails/${rail.id}/sweeps`).send({ readingUnit: 'mm', phase: 'as-found', stations: stations([0, 0, 0]) })).status).toBe(403);
+    expect(
+      (
+        await ws.as.viewer
+          .post(`/api/rails/${rail.id}/sweeps`)
+          .send({ readingUnit: 'mm', phase: 'as-found', stations: stations([0, 0, 0]) })
+      ).status,
+    ).toBe(403);
   });
 
   it.each([
@@ -70,7 +89,10 @@ describe('rails', () => {
     [{ unit: 'mm' }, /unit is no longer accepted: send lengthUnit and readingUnit/],
     [{ lengthUnit: 'cm' }, /lengthUnit must be one of mm, um, in, thou/],
     // 800 mm rail, 60 mm pitch, first hole at 20 mm: 20 + 13 × 60 = 800, a hole on the far end (by hand).
-    [{ length: 800, holePitch: 60, firstHole: 20 }, /length: the hole at 800 mm sits on the rail's far end; every hole centre needs at least 4.25 mm \(endDistance\)/],
+    [
+      { length: 800, holePitch: 60, firstHole: 20 },
+      /length: the hole at 800 mm sits on the rail's far end; every hole centre needs at least 4.25 mm \(endDistance\)/,
+    ],
     [{ firstHole: 2 }, /firstHole: the hole at 2 mm is 2 mm from the rail's start/],
     [{ firstHole: 0 }, /firstHole: the hole at 0 mm sits on the rail's start/],
     [{ axis: 'left rail!' }, /axis must be a short axis name/],
@@ -112,9 +134,32 @@ describe('rails', () => {
   // 1 in = 25.4 mm exactly (international inch of 1959): a rail typed in inches is the same rail
   // as one typed in mm, and keeps its inches for the form.
   it('an imperial rail works end to end: the same holes, spacing and end distance as in mm', async () => {
-    const mm = await addRail({ label: 'Metric', length: 1219.2, holePitch: 60.96, firstHole: 30.48, spacing: 609.6, endDistance: 6.35 });
-    const inch = await addRail({ label: 'Inch', lengthUnit: 'in', length: 48, holePitch: 2.4, firstHole: 1.2, spacing: 24, endDistance: 0.25 });
-    expect(inch).toMatchObject({ lengthUnit: 'in', length: 48, holePitch: 2.4, firstHole: 1.2, spacing: 24, endDistance: 0.25, endDistanceIsDefault: false });
+    const mm = await addRail({
+      label: 'Metric',
+      length: 1219.2,
+      holePitch: 60.96,
+      firstHole: 30.48,
+      spacing: 609.6,
+      endDistance: 6.35,
+    });
+    const inch = await addRail({
+      label: 'Inch',
+      lengthUnit: 'in',
+      length: 48,
+      holePitch: 2.4,
+      firstHole: 1.2,
+      spacing: 24,
+      endDistance: 0.25,
+    });
+    expect(inch).toMatchObject({
+      lengthUnit: 'in',
+      length: 48,
+      holePitch: 2.4,
+      firstHole: 1.2,
+      spacing: 24,
+      endDistance: 0.25,
+      endDistanceIsDefault: false,
+    });
     expect(inch.lengthMm).toBeCloseTo(1219.2, 9);
     expect(inch.spacingMm).toBeCloseTo(609.6, 9);
     expect(inch.holes.length).toBe(mm.holes.length);
@@ -123,7 +168,9 @@ describe('rails', () => {
       expect(h.at).toBeCloseTo(1.2 + 2.4 * i, 9);
     });
     // The end distance is judged in mm whatever the unit: 48 in, 2.4 in pitch, first hole 0 in sits on the start.
-    const refused = await ws.as.builder.post(`/api/machines/${machineId}/rails`).send({ ...railBody, lengthUnit: 'in', length: 48, holePitch: 2.4, firstHole: 0 });
+    const refused = await ws.as.builder
+      .post(`/api/machines/${machineId}/rails`)
+      .send({ ...railBody, lengthUnit: 'in', length: 48, holePitch: 2.4, firstHole: 0 });
     expect(refused.status).toBe(400);
     expect(JSON.stringify(refused.body.message)).toMatch(/firstHole: the hole at 0 in sits on the rail's start/);
   });
@@ -132,9 +179,15 @@ describe('rails', () => {
     const rail = await addRail({ label: 'Edit me' });
     const res = await ws.as.builder.patch(`/api/rails/${rail.id}`).send({ holePitch: 120, firstHole: 30 });
     expect(res.status).toBe(200);
-    expect(res.body.holes.map((h: { position: number }) => h.position)).toEqual([30, 150, 270, 390, 510, 630, 750, 870, 990]);
+    expect(res.body.holes.map((h: { position: number }) => h.position)).toEqual([
+      30, 150, 270, 390, 510, 630, 750, 870, 990,
+    ]);
     const history = await ws.as.viewer.get(`/api/machines/${machineId}/history?limit=200`);
-    expect(history.body.entries[0]).toMatchObject({ recordType: 'rail', action: 'updated', changes: { holePitchMm: { from: 60, to: 120 } } });
+    expect(history.body.entries[0]).toMatchObject({
+      recordType: 'rail',
+      action: 'updated',
+      changes: { holePitchMm: { from: 60, to: 120 } },
+    });
     const refused = await ws.as.builder.patch(`/api/rails/${rail.id}`).send({ length: 20 });
     expect(refused.status).toBe(400);
     expect(JSON.stringify(refused.body.message)).toMatch(/firstHole must not be larger than length/);
@@ -157,7 +210,9 @@ describe('rails', () => {
   it('deleting a rail removes it with its sweeps and unpairs its partner', async () => {
     const a = await addRail({ label: 'Gone' });
     const b = await addRail({ label: 'Stays', partnerRailId: a.id });
-    await ws.as.builder.post(`/api/rails/${a.id}/sweeps`).send({ readingUnit: 'mm', phase: 'as-found', stations: stations([0, 0.01, 0]) });
+    await ws.as.builder
+      .post(`/api/rails/${a.id}/sweeps`)
+      .send({ readingUnit: 'mm', phase: 'as-found', stations: stations([0, 0.01, 0]) });
     expect((await ws.as.builder.delete(`/api/rails/${a.id}`)).status).toBe(204);
     expect((await ws.as.viewer.get(`/api/rails/${a.id}`)).status).toBe(404);
     expect((await ws.as.viewer.get(`/api/rails/${b.id}`)).body.partnerRailId).toBeNull();
@@ -165,7 +220,11 @@ describe('rails', () => {
 
   it('refuses to delete a rail or sweep an approval was based on (409), and keeps them', async () => {
     const rail = await addRail({ label: 'Approved' });
-    const sweep = (await ws.as.builder.post(`/api/rails/${rail.id}/sweeps`).send({ readingUnit: 'mm', phase: 'as-left', stations: stations([0, 0.005, 0]) })).body;
+    const sweep = (
+      await ws.as.builder
+        .post(`/api/rails/${rail.id}/sweeps`)
+        .send({ readingUnit: 'mm', phase: 'as-left', stations: stations([0, 0.005, 0]) })
+    ).body;
     await lockAsApproved(app, [{ recordType: 'rail-sweep', recordId: sweep.id }]);
     const res = await ws.as.owner.delete(`/api/rails/${rail.id}`);
     expect(res.status).toBe(409);

@@ -3,7 +3,14 @@ import { createTestApp, createTestWorkshop, type TestWorkshop } from './helpers/
 import { newAxis, newMachine, screwAxis } from './helpers/drives.js';
 
 // Five trials a little apart in scale error, so each record is told from the others.
-const trial = (i: number) => ({ lengthUnit: 'mm', stepsPerMmUsed: 640, moves: [{ commanded: 100, measured: 99.8 + i * 0.01 }, { commanded: 300, measured: 299.5 + i * 0.02 }] });
+const trial = (i: number) => ({
+  lengthUnit: 'mm',
+  stepsPerMmUsed: 640,
+  moves: [
+    { commanded: 100, measured: 99.8 + i * 0.01 },
+    { commanded: 300, measured: 299.5 + i * 0.02 },
+  ],
+});
 const run = (i: number) => ({
   readingUnit: 'um',
   targets: [10, 20, 30],
@@ -73,7 +80,16 @@ describe('reads: paged trial and run lists', () => {
 
   it('lists trials without their moves; the single trial keeps them and agrees on the figures', async () => {
     const [first] = (await ws.as.viewer.get(`/api/axes/${axisId}/travel-trials`)).body;
-    expect(first).toMatchObject({ id: trialIds[0], axisId, lengthUnit: 'mm', readingUnit: 'mm', stepsPerMmUsed: 640, moveCount: 2, locked: false, appliedAt: null });
+    expect(first).toMatchObject({
+      id: trialIds[0],
+      axisId,
+      lengthUnit: 'mm',
+      readingUnit: 'mm',
+      stepsPerMmUsed: 640,
+      moveCount: 2,
+      locked: false,
+      appliedAt: null,
+    });
     expect(first.moves).toBeUndefined();
     expect(first.result.moves).toBeUndefined();
     expect(first.result.residuals).toBeUndefined();
@@ -81,13 +97,27 @@ describe('reads: paged trial and run lists', () => {
     expect(one.moves).toHaveLength(2);
     expect(one.result.moves).toHaveLength(2);
     expect(one.result.residuals).toHaveLength(2);
-    for (const key of ['correctedStepsPerMm', 'errorPercent', 'scale', 'offset', 'residualMax']) expect(first.result[key]).toBeCloseTo(one.result[key], 12);
-    expect([first.status, first.target, first.recordedBy, first.recordedAt]).toEqual([one.status, one.target, one.recordedBy, one.recordedAt]);
+    for (const key of ['correctedStepsPerMm', 'errorPercent', 'scale', 'offset', 'residualMax'])
+      expect(first.result[key]).toBeCloseTo(one.result[key], 12);
+    expect([first.status, first.target, first.recordedBy, first.recordedAt]).toEqual([
+      one.status,
+      one.target,
+      one.recordedBy,
+      one.recordedAt,
+    ]);
   });
 
   it('lists runs without their deviations; the single run keeps them and agrees on the verdicts', async () => {
     const [first] = (await ws.as.viewer.get(`/api/axes/${axisId}/positioning-runs`)).body;
-    expect(first).toMatchObject({ id: runIds[0], axisId, lengthUnit: 'mm', readingUnit: 'um', targetCount: 3, runCount: 4, locked: false });
+    expect(first).toMatchObject({
+      id: runIds[0],
+      axisId,
+      lengthUnit: 'mm',
+      readingUnit: 'um',
+      targetCount: 3,
+      runCount: 4,
+      locked: false,
+    });
     expect(first.runs).toBeUndefined();
     expect(first.targets).toBeUndefined();
     expect(first.result.targets).toBeUndefined();
@@ -95,7 +125,8 @@ describe('reads: paged trial and run lists', () => {
     expect(one.runs).toHaveLength(4);
     expect(one.targets).toEqual([10, 20, 30]);
     expect(one.result.targets).toHaveLength(3);
-    for (const key of ['accuracy', 'repeatability', 'reversal']) expect(first.result[key]).toBeCloseTo(one.result[key], 12);
+    for (const key of ['accuracy', 'repeatability', 'reversal'])
+      expect(first.result[key]).toBeCloseTo(one.result[key], 12);
     expect(first.checks).toEqual(one.checks);
     expect(first.status).toBe(one.status);
   });
@@ -107,12 +138,17 @@ describe('reads: paged trial and run lists', () => {
     expect(res.body).toEqual([]);
   });
 
-  it.each(lists.flatMap(([list]) => [
-    [list, 'limit=0', /limit must be at least 1/],
-    [list, 'limit=201', /limit must be at most 200/],
-    [list, 'limit=many', /limit must be a whole number/],
-    [list, 'cursor=yesterday', /cursor must be the X-Next-Cursor/],
-  ] as const))('%s refuses ?%s with a 400 naming the field', async (list, query, message) => {
+  it.each(
+    lists.flatMap(
+      ([list]) =>
+        [
+          [list, 'limit=0', /limit must be at least 1/],
+          [list, 'limit=201', /limit must be at most 200/],
+          [list, 'limit=many', /limit must be a whole number/],
+          [list, 'cursor=yesterday', /cursor must be the X-Next-Cursor/],
+        ] as const,
+    ),
+  )('%s refuses ?%s with a 400 naming the field', async (list, query, message) => {
     const res = await ws.as.viewer.get(`/api/axes/${axisId}/${list}?${query}`);
     expect(res.status).toBe(400);
     expect(JSON.stringify(res.body.message)).toMatch(message);

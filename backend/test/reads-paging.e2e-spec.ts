@@ -21,7 +21,11 @@ describe('reads: paged sweep lists', () => {
   beforeAll(async () => {
     app = await createTestApp();
     ws = await createTestWorkshop(app, 'Paging');
-    const machineId = (await ws.as.builder.post('/api/machines').send({ name: 'Paging table', kind: 'plasma', workArea: { x: 900, y: 600 } })).body.id;
+    const machineId = (
+      await ws.as.builder
+        .post('/api/machines')
+        .send({ name: 'Paging table', kind: 'plasma', workArea: { x: 900, y: 600 } })
+    ).body.id;
     railId = (await ws.as.builder.post(`/api/machines/${machineId}/rails`).send(rail)).body.id;
     for (let i = 0; i < 5; i++) {
       const res = await ws.as.builder.post(`/api/rails/${railId}/sweeps`).send(sweep(i));
@@ -52,7 +56,14 @@ describe('reads: paged sweep lists', () => {
     expect(list.headers['x-next-cursor']).toBeUndefined();
     expect(list.body).toHaveLength(5);
     const [first] = list.body;
-    expect(first).toMatchObject({ id: ids[0], railId, readingUnit: 'mm', phase: 'as-found', stationCount: 10, locked: false });
+    expect(first).toMatchObject({
+      id: ids[0],
+      railId,
+      readingUnit: 'mm',
+      phase: 'as-found',
+      stationCount: 10,
+      locked: false,
+    });
     expect(typeof first.leastSquaresStraightness).toBe('number');
     expect(first.stations).toBeUndefined();
     expect(first.result).toBeUndefined();

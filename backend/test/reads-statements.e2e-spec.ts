@@ -35,17 +35,41 @@ describe('reads: statements per request do not grow with the number of sweeps', 
     app = await createTestApp();
     pool = app.get<pg.Pool>(PG_POOL);
     ws = await createTestWorkshop(app, 'Reads');
-    machineId = (await ws.as.builder.post('/api/machines').send({ name: 'Growth table', kind: 'plasma', workArea: { x: 900, y: 600 } })).body.id;
+    machineId = (
+      await ws.as.builder
+        .post('/api/machines')
+        .send({ name: 'Growth table', kind: 'plasma', workArea: { x: 900, y: 600 } })
+    ).body.id;
     // A second machine, so the list has more than one summary to read.
-    await ws.as.builder.post('/api/machines').send({ name: 'Quiet router', kind: 'router', workArea: { x: 600, y: 400 } });
-    railA = (await ws.as.builder.post(`/api/machines/${machineId}/rails`).send({ ...rail, label: 'Y1 (left)' })).body.id;
-    railB = (await ws.as.builder.post(`/api/machines/${machineId}/rails`).send({ ...rail, label: 'Y2 (right)', partnerRailId: railA })).body.id;
-    expect((await ws.as.builder.post(`/api/rails/${railA}/sweeps`).send(sweep([0, 0.002, 0.004, 0.003, 0.001, 0, 0.002, 0.003, 0.001, 0]))).status).toBe(201);
-    expect((await ws.as.builder.post(`/api/rails/${railB}/sweeps`).send(sweep([0.01, 0.012, 0.013, 0.012, 0.011, 0.01, 0.012, 0.013, 0.011, 0.01]))).status).toBe(201);
+    await ws.as.builder
+      .post('/api/machines')
+      .send({ name: 'Quiet router', kind: 'router', workArea: { x: 600, y: 400 } });
+    railA = (await ws.as.builder.post(`/api/machines/${machineId}/rails`).send({ ...rail, label: 'Y1 (left)' })).body
+      .id;
+    railB = (
+      await ws.as.builder
+        .post(`/api/machines/${machineId}/rails`)
+        .send({ ...rail, label: 'Y2 (right)', partnerRailId: railA })
+    ).body.id;
+    expect(
+      (
+        await ws.as.builder
+          .post(`/api/rails/${railA}/sweeps`)
+          .send(sweep([0, 0.002, 0.004, 0.003, 0.001, 0, 0.002, 0.003, 0.001, 0]))
+      ).status,
+    ).toBe(201);
+    expect(
+      (
+        await ws.as.builder
+          .post(`/api/rails/${railB}/sweeps`)
+          .send(sweep([0.01, 0.012, 0.013, 0.012, 0.011, 0.01, 0.012, 0.013, 0.011, 0.01]))
+      ).status,
+    ).toBe(201);
     await newAxis(ws, machineId, screwAxis('X'));
     // Every statement any pg client sends while counting is on (pool queries and transactions alike).
     pg.Client.prototype.query = function (this: pg.Client, ...args: unknown[]) {
-      if (counting) statements.push(typeof args[0] === 'string' ? args[0] : String((args[0] as { text?: string })?.text ?? ''));
+      if (counting)
+        statements.push(typeof args[0] === 'string' ? args[0] : String((args[0] as { text?: string })?.text ?? ''));
       return (originalQuery as (...a: unknown[]) => unknown).apply(this, args);
     } as typeof pg.Client.prototype.query;
   });
@@ -81,7 +105,8 @@ describe('reads: statements per request do not grow with the number of sweeps', 
     let firstBoard: unknown = null;
     let firstList: unknown = null;
     for (const total of [0, 100, 1000]) {
-      const have = Number((await pool.query('select count(*) from rail_sweeps where rail_id = $1', [railA])).rows[0].count) - 1;
+      const have =
+        Number((await pool.query('select count(*) from rail_sweeps where rail_id = $1', [railA])).rows[0].count) - 1;
       if (total > have) {
         await addOldSweeps(railA, total - have);
         await addOldSweeps(railB, total - have);
@@ -108,11 +133,15 @@ describe('reads: statements per request do not grow with the number of sweeps', 
       const readingArrays = board.statements.filter((s) => /readings_mm|readings_raw|positions_mm\b(?!\))/.test(s));
       expect(readingArrays.every((s) => /lower\(x\.datum\) = k\.dkey/.test(s))).toBe(true);
       // Nothing is due, so neither read runs the re-check schedule's query.
-      expect([...list.statements, ...board.statements].some((s) => /distinct on \("approvals"\."machine_id"\)/.test(s))).toBe(false);
+      expect(
+        [...list.statements, ...board.statements].some((s) => /distinct on \("approvals"\."machine_id"\)/.test(s)),
+      ).toBe(false);
       // The machine, its target set and its waivers come in one statement.
       const context = board.statements.filter((s) => /"target_sets"|"waivers"/.test(s));
       expect(context).toHaveLength(1);
-      expect(context[0]).toMatch(/from "machines" m[\s\S]*"target_sets"[\s\S]*"waivers"|"waivers"[\s\S]*from "machines" m[\s\S]*"target_sets"/);
+      expect(context[0]).toMatch(
+        /from "machines" m[\s\S]*"target_sets"[\s\S]*"waivers"|"waivers"[\s\S]*from "machines" m[\s\S]*"target_sets"/,
+      );
     }
     // Measured on this code: printed so a change in the numbers is seen in the test output.
     console.log(`SQL statements per request by old sweeps per rail: ${JSON.stringify(seen)}`);

@@ -35,9 +35,16 @@ describe('safety walk', () => {
   });
   afterAll(() => app.close());
 
-  const newMachine = async () => (await ws.as.owner.post('/api/machines').send({ name: `P ${randomUUID().slice(0, 4)}`, kind: 'plasma', workArea: { x: 3000, y: 1500 } })).body.id as string;
-  const walkOf = async (agent: Agent, machine: string) => (await agent.get(`/api/machines/${machine}/safety-walk`)).body as Walk;
-  const answer = (agent: Agent, machine: string, item: string, body: object) => agent.put(`/api/machines/${machine}/safety-walk/items/${item}`).send(body);
+  const newMachine = async () =>
+    (
+      await ws.as.owner
+        .post('/api/machines')
+        .send({ name: `P ${randomUUID().slice(0, 4)}`, kind: 'plasma', workArea: { x: 3000, y: 1500 } })
+    ).body.id as string;
+  const walkOf = async (agent: Agent, machine: string) =>
+    (await agent.get(`/api/machines/${machine}/safety-walk`)).body as Walk;
+  const answer = (agent: Agent, machine: string, item: string, body: object) =>
+    agent.put(`/api/machines/${machine}/safety-walk/items/${item}`).send(body);
 
   it('starts not started, in four sections with the stopping, electrical, cutting and people items', async () => {
     const machine = await newMachine();
@@ -47,8 +54,23 @@ describe('safety walk', () => {
     expect(walk.status).toBe('not-started');
     expect(walk.sections.map((s) => s.label)).toEqual(['Stopping', 'Electrical', 'Cutting', 'People']);
     expect(itemsOf(walk).every((i) => i.answer === null)).toBe(true);
-    const text = itemsOf(walk).map((i) => i.text).join(' ');
-    for (const words of [/emergency stop/i, /cutting power/i, /limit switch/i, /home switch/i, /licensed electrician/i, /strain relief/i, /torch lead/i, /extraction or ventilation/i, /extinguisher/i, /water table/i, /pinch points/i, /briefing/i]) {
+    const text = itemsOf(walk)
+      .map((i) => i.text)
+      .join(' ');
+    for (const words of [
+      /emergency stop/i,
+      /cutting power/i,
+      /limit switch/i,
+      /home switch/i,
+      /licensed electrician/i,
+      /strain relief/i,
+      /torch lead/i,
+      /extraction or ventilation/i,
+      /extinguisher/i,
+      /water table/i,
+      /pinch points/i,
+      /briefing/i,
+    ]) {
       expect(text).toMatch(words);
     }
   });
@@ -60,15 +82,31 @@ describe('safety walk', () => {
     const res = await answer(ws.as.technician, machine, first.id, { answer: 'yes', note: 'tested at both ends' });
     expect(res.status).toBe(200);
     const answered = itemsOf(res.body).find((i) => i.id === first.id)!;
-    expect(answered.answer).toMatchObject({ answer: 'yes', note: 'tested at both ends', answeredBy: { name: expect.stringContaining('technician') } });
+    expect(answered.answer).toMatchObject({
+      answer: 'yes',
+      note: 'tested at both ends',
+      answeredBy: { name: expect.stringContaining('technician') },
+    });
     expect(Date.now() - Date.parse(answered.answer!.answeredAt)).toBeLessThan(60_000);
     expect(res.body.status).toBe('outside-target');
-    for (const item of rest) expect((await answer(ws.as.owner, machine, item.id, { answer: item.id === 'cut-water' ? 'na' : 'yes' })).status).toBe(200);
+    for (const item of rest)
+      expect(
+        (await answer(ws.as.owner, machine, item.id, { answer: item.id === 'cut-water' ? 'na' : 'yes' })).status,
+      ).toBe(200);
     const done = await walkOf(ws.as.viewer, machine);
-    expect(done).toMatchObject({ status: 'within-target', blocking: false, counts: { answered: done.counts.total, no: 0 } });
+    expect(done).toMatchObject({
+      status: 'within-target',
+      blocking: false,
+      counts: { answered: done.counts.total, no: 0 },
+    });
     const ref = await app.get(MachinesService).getRef({ workshopId: ws.id }, machine);
     const check = (await app.get(ReadinessRegistry).checksFor(ref)).find((c) => c.kind === 'safety-walk');
-    expect(check).toMatchObject({ status: 'within-target', recordType: 'safety-walk', recordId: done.id, place: { machineId: machine, tab: 'safety' } });
+    expect(check).toMatchObject({
+      status: 'within-target',
+      recordType: 'safety-walk',
+      recordId: done.id,
+      place: { machineId: machine, tab: 'safety' },
+    });
     const history = await ws.as.viewer.get(`/api/machines/${machine}/history?limit=200`);
     expect(history.body.entries[0]).toMatchObject({ recordType: 'safety-walk', action: 'recorded' });
   });
@@ -77,11 +115,19 @@ describe('safety walk', () => {
     const machine = await newMachine();
     const items = itemsOf(await walkOf(ws.as.viewer, machine));
     for (const item of items) await answer(ws.as.technician, machine, item.id, { answer: 'yes' });
-    const res = await answer(ws.as.technician, machine, 'stop-estop-power', { answer: 'no', note: 'the torch keeps firing on E-stop' });
+    const res = await answer(ws.as.technician, machine, 'stop-estop-power', {
+      answer: 'no',
+      note: 'the torch keeps firing on E-stop',
+    });
     expect(res.body).toMatchObject({ status: 'outside-target', blocking: true, counts: { no: 1 } });
-    const fixed = await answer(ws.as.technician, machine, 'stop-estop-power', { answer: 'yes', note: 'relay added in the torch circuit' });
+    const fixed = await answer(ws.as.technician, machine, 'stop-estop-power', {
+      answer: 'yes',
+      note: 'relay added in the torch circuit',
+    });
     expect(fixed.body).toMatchObject({ status: 'within-target', blocking: false });
-    expect(itemsOf(fixed.body).find((i) => i.id === 'stop-estop-power')!.answer!.note).toBe('relay added in the torch circuit');
+    expect(itemsOf(fixed.body).find((i) => i.id === 'stop-estop-power')!.answer!.note).toBe(
+      'relay added in the torch circuit',
+    );
   });
 
   it.each([
@@ -110,10 +156,15 @@ describe('safety walk', () => {
   it("the workshop's own items are asked on every machine's walk (owner or admin adds them)", async () => {
     const m1 = await newMachine();
     const m2 = await newMachine();
-    for (const item of itemsOf(await walkOf(ws.as.viewer, m1))) await answer(ws.as.technician, m1, item.id, { answer: 'yes' });
+    for (const item of itemsOf(await walkOf(ws.as.viewer, m1)))
+      await answer(ws.as.technician, m1, item.id, { answer: 'yes' });
     expect((await walkOf(ws.as.viewer, m1)).status).toBe('within-target');
-    expect((await ws.as.technician.post('/api/safety-items').send({ section: 'cutting', text: 'Slag bin emptied' })).status).toBe(403);
-    const added = await ws.as.owner.post('/api/safety-items').send({ section: 'cutting', text: 'Slag bin emptied and the bin lid closes' });
+    expect(
+      (await ws.as.technician.post('/api/safety-items').send({ section: 'cutting', text: 'Slag bin emptied' })).status,
+    ).toBe(403);
+    const added = await ws.as.owner
+      .post('/api/safety-items')
+      .send({ section: 'cutting', text: 'Slag bin emptied and the bin lid closes' });
     expect(added.status).toBe(201);
     expect(added.body).toMatchObject({ section: 'cutting', builtIn: false });
     const w1 = await walkOf(ws.as.viewer, m1);
@@ -122,10 +173,16 @@ describe('safety walk', () => {
     expect(w1.status).toBe('outside-target');
     expect(itemsOf(await walkOf(ws.as.viewer, m2)).map((i) => i.id)).toContain(added.body.id);
     expect((await answer(ws.as.technician, m1, added.body.id, { answer: 'yes' })).body.status).toBe('within-target');
-    const theirs = await other.as.owner.post('/api/machines').send({ name: 'O', kind: 'router', workArea: { x: 400, y: 300 } });
+    const theirs = await other.as.owner
+      .post('/api/machines')
+      .send({ name: 'O', kind: 'router', workArea: { x: 400, y: 300 } });
     expect(itemsOf(await walkOf(other.as.owner, theirs.body.id)).map((i) => i.id)).not.toContain(added.body.id);
     expect((await answer(other.as.owner, theirs.body.id, added.body.id, { answer: 'yes' })).status).toBe(404);
-    expect((await ws.as.admin.post('/api/safety-items').send({ section: 'kitchen', text: 'Kettle off' })).body.message.join(' ')).toMatch(/section must be one of/);
+    expect(
+      (await ws.as.admin.post('/api/safety-items').send({ section: 'kitchen', text: 'Kettle off' })).body.message.join(
+        ' ',
+      ),
+    ).toMatch(/section must be one of/);
     expect((await ws.as.admin.post('/api/safety-items').send({ section: 'people', text: '' })).status).toBe(400);
     const list = await ws.as.viewer.get('/api/safety-items');
     expect(list.body.workshop.map((i: { id: string }) => i.id)).toContain(added.body.id);
@@ -133,7 +190,9 @@ describe('safety walk', () => {
 
   it('a "no" blocks approval and the walk cannot be waived', async () => {
     const machine = await newMachine();
-    expect((await answer(ws.as.technician, machine, 'stop-limits', { answer: 'no', note: 'Y2 limit switch loose' })).status).toBe(200);
+    expect(
+      (await answer(ws.as.technician, machine, 'stop-limits', { answer: 'no', note: 'Y2 limit switch loose' })).status,
+    ).toBe(200);
     const board = await ws.as.owner.get(`/api/machines/${machine}/readiness`);
     const walk = board.body.checks.find((c: { kind: string }) => c.kind === 'safety-walk');
     expect(walk.status).toBe('outside-target');
@@ -166,7 +225,12 @@ describe('safety walk', () => {
     const res = await answer(ws.as.technician, machine, 'stop-estop-motion', { answer: 'yes' });
     const answerId = itemsOf(res.body).find((i) => i.id === 'stop-estop-motion')!.answer!.id;
     const subject = await app.get(SubjectsRegistry).resolve(ws.id, 'safety-item', answerId);
-    expect(subject).toMatchObject({ machineId: machine, recordType: 'safety-walk', recordId: res.body.id, label: expect.stringMatching(/emergency stop/) });
+    expect(subject).toMatchObject({
+      machineId: machine,
+      recordType: 'safety-walk',
+      recordId: res.body.id,
+      label: expect.stringMatching(/emergency stop/),
+    });
     expect(await app.get(SubjectsRegistry).resolve(other.id, 'safety-item', answerId)).toBeNull();
   });
 });

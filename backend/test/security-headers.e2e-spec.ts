@@ -20,7 +20,10 @@ describe('security headers and caching', () => {
     // A small built front end, so the static rules can be seen without a real build.
     const dist = mkdtempSync(path.join(tmpdir(), 'railwright-dist-'));
     mkdirSync(path.join(dist, 'assets'));
-    writeFileSync(path.join(dist, 'index.html'), '<!doctype html><title>Railwright</title><div id="root"></div><script type="module" src="/assets/index-abc123.js"></script>');
+    writeFileSync(
+      path.join(dist, 'index.html'),
+      '<!doctype html><title>Railwright</title><div id="root"></div><script type="module" src="/assets/index-abc123.js"></script>',
+    );
     writeFileSync(path.join(dist, 'assets', 'index-abc123.js'), 'console.log(1)');
     writeFileSync(path.join(dist, 'railwright.svg'), '<svg xmlns="http://www.w3.org/2000/svg"/>');
     site = await createApp({ ...process.env, FRONTEND_DIST: dist });
@@ -33,7 +36,10 @@ describe('security headers and caching', () => {
   });
 
   it('every answer carries a strict CSP, nosniff, no framing and a same-origin Referrer-Policy', async () => {
-    for (const res of [await ws.as.viewer.get('/api/machines'), await request(site.getHttpServer()).get('/').set('Accept', 'text/html')]) {
+    for (const res of [
+      await ws.as.viewer.get('/api/machines'),
+      await request(site.getHttpServer()).get('/').set('Accept', 'text/html'),
+    ]) {
       const csp = res.headers['content-security-policy'];
       expect(csp).toMatch(/default-src 'self'/);
       expect(csp).toMatch(/script-src 'self'(;|$)/); // no inline script
@@ -86,19 +92,31 @@ describe('security headers and caching', () => {
     expect((await agent.get('/api/auth/me')).status).toBe(401);
 
     expect(loadConfig({ ...process.env, PUBLIC_URL: 'https://railwright.example.org' }).secureCookies).toBe(true);
-    expect(loadConfig({ ...process.env, PUBLIC_URL: 'http://127.0.0.1:3000', SECURE_COOKIES: undefined }).secureCookies).toBe(false);
+    expect(
+      loadConfig({ ...process.env, PUBLIC_URL: 'http://127.0.0.1:3000', SECURE_COOKIES: undefined }).secureCookies,
+    ).toBe(false);
   });
 
   it('served over https, the session cookie is named with the __Host- prefix: Secure, path /, no domain', async () => {
     const w = await createTestWorkshop(api, 'Host cookie');
     // Behind a TLS-terminating proxy, as an https installation runs: the proxy says the request was https.
-    const https = await createApp({ ...process.env, FRONTEND_DIST: '', PUBLIC_URL: 'https://railwright.example.org', TRUST_PROXY: 'true' });
+    const https = await createApp({
+      ...process.env,
+      FRONTEND_DIST: '',
+      PUBLIC_URL: 'https://railwright.example.org',
+      TRUST_PROXY: 'true',
+    });
     await https.init();
     await https.getHttpAdapter().getInstance().ready();
     try {
-      const res = await request(https.getHttpServer()).post('/api/auth/login').set('x-forwarded-proto', 'https').send({ email: w.emails.viewer, password: TEST_PASSWORD });
+      const res = await request(https.getHttpServer())
+        .post('/api/auth/login')
+        .set('x-forwarded-proto', 'https')
+        .send({ email: w.emails.viewer, password: TEST_PASSWORD });
       expect(res.status).toBe(200);
-      const cookie = ([] as string[]).concat(res.headers['set-cookie'] ?? []).find((c) => c.includes('railwright.sid='));
+      const cookie = ([] as string[])
+        .concat(res.headers['set-cookie'] ?? [])
+        .find((c) => c.includes('railwright.sid='));
       expect(cookie).toMatch(/^__Host-railwright\.sid=/);
       expect(cookie).toMatch(/; Secure/);
       expect(cookie).toMatch(/; Path=\/(;|$)/);
@@ -107,11 +125,17 @@ describe('security headers and caching', () => {
       await https.close();
     }
     // Over plain http (a workshop's own network) a __Host- cookie would be refused by browsers.
-    expect(loadConfig({ ...process.env, PUBLIC_URL: 'http://127.0.0.1:3000', SECURE_COOKIES: undefined }).sessionCookieName).toBe('railwright.sid');
+    expect(
+      loadConfig({ ...process.env, PUBLIC_URL: 'http://127.0.0.1:3000', SECURE_COOKIES: undefined }).sessionCookieName,
+    ).toBe('railwright.sid');
   });
 
   it('production refuses to start without a session secret, with a clear message', () => {
-    expect(() => loadConfig({ DATABASE_URL: process.env.DATABASE_URL, NODE_ENV: 'production' })).toThrow(/SESSION_SECRET is required when NODE_ENV=production/);
-    expect(() => loadConfig({ DATABASE_URL: process.env.DATABASE_URL, NODE_ENV: 'production', SESSION_SECRET: 'short' })).toThrow(/at least 32 characters/);
+    expect(() => loadConfig({ DATABASE_URL: process.env.DATABASE_URL, NODE_ENV: 'production' })).toThrow(
+      /SESSION_SECRET is required when NODE_ENV=production/,
+    );
+    expect(() =>
+      loadConfig({ DATABASE_URL: process.env.DATABASE_URL, NODE_ENV: 'production', SESSION_SECRET: 'short' }),
+    ).toThrow(/at least 32 characters/);
   });
 });

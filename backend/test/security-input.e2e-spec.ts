@@ -13,7 +13,11 @@ describe('bad text and null in optional fields', () => {
     app = await createTestApp();
     ws = await createTestWorkshop(app, 'Input');
     machineId = await newMachine(ws, 'router');
-    railId = (await ws.as.builder.post(`/api/machines/${machineId}/rails`).send({ label: 'Y1 (left)', axis: 'Y1', length: 800, holePitch: 60, firstHole: 40 })).body.id;
+    railId = (
+      await ws.as.builder
+        .post(`/api/machines/${machineId}/rails`)
+        .send({ label: 'Y1 (left)', axis: 'Y1', length: 800, holePitch: 60, firstHole: 40 })
+    ).body.id;
   });
   afterAll(() => app.close());
 
@@ -31,13 +35,17 @@ describe('bad text and null in optional fields', () => {
   });
 
   it('keeps line breaks and tabs in a multi-line note', async () => {
-    const res = await ws.as.owner.patch(`/api/machines/${machineId}`).send({ notes: 'Line one\n\tindented\r\nline three' });
+    const res = await ws.as.owner
+      .patch(`/api/machines/${machineId}`)
+      .send({ notes: 'Line one\n\tindented\r\nline three' });
     expect(res.status).toBe(200);
     expect(res.body.notes).toBe('Line one\n\tindented\r\nline three');
   });
 
   it('refuses NUL in the sign-in e-mail (it answered 500) and in query strings', async () => {
-    const res = await ws.as.viewer.post('/api/auth/login').send({ email: 'owner\u0000@test.example.com', password: 'x' });
+    const res = await ws.as.viewer
+      .post('/api/auth/login')
+      .send({ email: 'owner\u0000@test.example.com', password: 'x' });
     expect(res.status).toBe(400);
     expect(res.body.message.join(' ')).toMatch(/^email must not contain control characters/);
     const q = await ws.as.viewer.get('/api/evidence').query({ subjectType: 'rail\u0000' });
@@ -46,11 +54,31 @@ describe('bad text and null in optional fields', () => {
 
   it.each([
     ['machine notes', () => ws.as.owner.patch(`/api/machines/${machineId}`), { notes: null }, /notes/],
-    ['machine notes on create', () => ws.as.owner.post('/api/machines'), { name: 'N', kind: 'router', workArea: { x: 100, y: 100 }, notes: null }, /notes/],
-    ['rail hole pitch', () => ws.as.builder.patch(`/api/rails/${railId}`), { holePitch: null }, /holePitch must be a number/],
-    ['bolt-down band', () => ws.as.builder.post(`/api/rails/${railId}/bolt-downs`), { mode: 'line', band: null }, /band/],
+    [
+      'machine notes on create',
+      () => ws.as.owner.post('/api/machines'),
+      { name: 'N', kind: 'router', workArea: { x: 100, y: 100 }, notes: null },
+      /notes/,
+    ],
+    [
+      'rail hole pitch',
+      () => ws.as.builder.patch(`/api/rails/${railId}`),
+      { holePitch: null },
+      /holePitch must be a number/,
+    ],
+    [
+      'bolt-down band',
+      () => ws.as.builder.post(`/api/rails/${railId}/bolt-downs`),
+      { mode: 'line', band: null },
+      /band/,
+    ],
     ['person role', () => ws.as.admin.patch(`/api/people/${ws.userIds.viewer}`), { role: null }, /role/],
-    ['target-set description', () => ws.as.owner.post('/api/target-sets'), { name: 'With null', description: null, targets: {} }, /description/],
+    [
+      'target-set description',
+      () => ws.as.owner.post('/api/target-sets'),
+      { name: 'With null', description: null, targets: {} },
+      /description/,
+    ],
   ])('null in an optional field (%s) is a 400 naming it, never a 500', async (_label, req, body, field) => {
     const res = await req().send(body);
     expect(res.status).toBe(400);
@@ -58,7 +86,11 @@ describe('bad text and null in optional fields', () => {
   });
 
   it('refuses a NUL in an upload caption (a multipart field, not JSON) with 400 naming it, and attaches nothing', async () => {
-    const png = Buffer.from('89504e470d0a1a0a0000000d4948445200000001000000010806000000' + '1f15c4890000000d49444154789c6360000002000154a24f5d0000000049454e44ae426082', 'hex');
+    const png = Buffer.from(
+      '89504e470d0a1a0a0000000d4948445200000001000000010806000000' +
+        '1f15c4890000000d49444154789c6360000002000154a24f5d0000000049454e44ae426082',
+      'hex',
+    );
     const before = (await ws.as.viewer.get('/api/evidence').query({ machineId })).body;
     const res = await ws.as.builder
       .post('/api/evidence')

@@ -44,7 +44,9 @@ describe('overload: size is checked before work', () => {
 
   it('a 300 000-value calculator body is refused from its length (400 naming the field), and health answers meanwhile', async () => {
     const many = Array.from({ length: 300_000 }, (_, i) => i * 0.001);
-    const { res, order } = await healthDuring(() => ws.as.viewer.post('/api/calc/straightness?residuals=true').send({ positions: many, readings: many }));
+    const { res, order } = await healthDuring(() =>
+      ws.as.viewer.post('/api/calc/straightness?residuals=true').send({ positions: many, readings: many }),
+    );
     expect(res.status).toBe(400);
     expect(JSON.stringify(res.body.message)).toMatch(/positions has more than 200000 values/);
     expect(order.some((o) => o.startsWith('health'))).toBe(true);
@@ -67,7 +69,9 @@ describe('overload: size is checked before work', () => {
   it('health keeps answering while a maximum-size calculator body (200 000 stations) is handled', async () => {
     const positions = Array.from({ length: 200_000 }, (_, i) => i * 0.5);
     const readings = positions.map((p) => Math.round(Math.sin(p / 40) * 10_000) / 1_000_000);
-    const { res, order } = await healthDuring(() => ws.as.viewer.post('/api/calc/straightness?residuals=true').send({ positions, readings }));
+    const { res, order } = await healthDuring(() =>
+      ws.as.viewer.post('/api/calc/straightness?residuals=true').send({ positions, readings }),
+    );
     expect(res.status).toBe(200);
     expect(res.body.leastSquares.residuals).toHaveLength(200_000);
     // The server answered a health check before it finished the big body (on a loaded machine the

@@ -40,14 +40,21 @@ describe('sign-in throttling that holds', () => {
 
   // Waits are measured from the last counted attempt; on a loaded machine a slow password check
   // could outlast a short wait, so the tests that look at a wait start it from now.
-  const freshen = (key: string) => pool.query(`update sign_in_attempts set last_attempt_at = now() where key = $1`, [key]);
-  const age = (key: string, interval: string) => pool.query(`update sign_in_attempts set last_attempt_at = last_attempt_at - $2::interval where key = $1`, [key, interval]);
+  const freshen = (key: string) =>
+    pool.query(`update sign_in_attempts set last_attempt_at = now() where key = $1`, [key]);
+  const age = (key: string, interval: string) =>
+    pool.query(`update sign_in_attempts set last_attempt_at = last_attempt_at - $2::interval where key = $1`, [
+      key,
+      interval,
+    ]);
 
   it('30 parallel wrong passwords: exactly 5 are evaluated, 25 are refused with 429 and Retry-After', async () => {
     const app = await proxiedApp();
     apps.push(app);
     const address = `203.0.113.${run}`;
-    const results = await Promise.all(Array.from({ length: 30 }, (_, i) => login(app, address, ws.emails.builder, `wrong-${i}`)));
+    const results = await Promise.all(
+      Array.from({ length: 30 }, (_, i) => login(app, address, ws.emails.builder, `wrong-${i}`)),
+    );
     const statuses = results.map((r) => r.status).sort();
     expect(statuses.filter((s) => s === 401)).toHaveLength(5);
     expect(statuses.filter((s) => s === 429)).toHaveLength(25);
@@ -69,7 +76,9 @@ describe('sign-in throttling that holds', () => {
     expect((await login(restarted, address, ws.emails.builder, TEST_PASSWORD)).status).toBe(429);
     await age(`account:${ws.emails.builder}`, '20 minutes');
     expect((await login(restarted, address, ws.emails.builder, TEST_PASSWORD)).status).toBe(200);
-    const left = await pool.query(`select failures from sign_in_attempts where key = $1`, [`account:${ws.emails.builder}`]);
+    const left = await pool.query(`select failures from sign_in_attempts where key = $1`, [
+      `account:${ws.emails.builder}`,
+    ]);
     expect(left.rowCount).toBe(0);
   });
 
@@ -78,7 +87,8 @@ describe('sign-in throttling that holds', () => {
     apps.push(a, b);
     const address = `198.51.100.${run}`;
     const statuses: number[] = [];
-    for (let i = 0; i < 5; i++) statuses.push((await login(i % 2 ? b : a, address, ws.emails.technician, `wrong-${i}`)).status);
+    for (let i = 0; i < 5; i++)
+      statuses.push((await login(i % 2 ? b : a, address, ws.emails.technician, `wrong-${i}`)).status);
     expect(statuses).toEqual([401, 401, 401, 401, 401]);
     await freshen(`account:${ws.emails.technician}`);
     expect((await login(a, address, ws.emails.technician, 'wrong-5')).status).toBe(429);
@@ -89,7 +99,9 @@ describe('sign-in throttling that holds', () => {
     const app = apps[0];
     const address = `198.51.100.${run + 1}`;
     // 30 wrong attempts on 30 different (unknown) accounts: no account limit is reached.
-    const guesses = await Promise.all(Array.from({ length: 30 }, (_, i) => login(app, address, `guess${i}.${run}@test.example.com`, 'wrong')));
+    const guesses = await Promise.all(
+      Array.from({ length: 30 }, (_, i) => login(app, address, `guess${i}.${run}@test.example.com`, 'wrong')),
+    );
     expect(guesses.map((r) => r.status)).toEqual(Array(30).fill(401));
     await freshen(`address:${address}`);
     const slowed = await login(app, address, ws.emails.owner, TEST_PASSWORD);
@@ -103,7 +115,9 @@ describe('sign-in throttling that holds', () => {
     await age(`address:${address}`, `${wait} seconds`);
     expect((await login(app, address, ws.emails.owner, TEST_PASSWORD)).status).toBe(200);
     // Even at the longest wait the address is never shut for more than 30 s.
-    await pool.query(`update sign_in_attempts set failures = 1000, last_attempt_at = now() where key = $1`, [`address:${address}`]);
+    await pool.query(`update sign_in_attempts set failures = 1000, last_attempt_at = now() where key = $1`, [
+      `address:${address}`,
+    ]);
     const longest = await login(app, address, ws.emails.owner, TEST_PASSWORD);
     expect(longest.status).toBe(429);
     expect(Number(longest.headers['retry-after'])).toBeLessThanOrEqual(30);

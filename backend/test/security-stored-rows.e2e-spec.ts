@@ -25,7 +25,9 @@ describe('a stored result that cannot be read', () => {
     goodAxisId = await newAxis(ws, machineId, screwAxis('Z'));
     const moves = [{ commanded: 100, measured: 99.8 }];
     for (const id of [axisId, goodAxisId]) {
-      const t = await ws.as.technician.post(`/api/axes/${id}/travel-trials`).send({ lengthUnit: 'mm', stepsPerMmUsed: 640, moves });
+      const t = await ws.as.technician
+        .post(`/api/axes/${id}/travel-trials`)
+        .send({ lengthUnit: 'mm', stepsPerMmUsed: 640, moves });
       expect(t.status).toBe(201);
     }
   });
@@ -44,13 +46,24 @@ describe('a stored result that cannot be read', () => {
 
   const corruptions: [string, string][] = [
     ['a result with a number gone (as JSON stores NaN)', `jsonb_set(result, '{correctedStepsPerMm}', 'null')`],
-    ['a result with numbers as text', `jsonb_set(jsonb_set(result, '{scale}', '"Infinity"'), '{errorPercent}', '"NaN"')`],
+    [
+      'a result with numbers as text',
+      `jsonb_set(jsonb_set(result, '{scale}', '"Infinity"'), '{errorPercent}', '"NaN"')`,
+    ],
     ['an empty result', `'{}'::jsonb`],
   ];
 
   it.each(corruptions)('%s: lists still load, the record is flagged unreadable', async (_label, expr) => {
     await pool.query(`update travel_trials set result = ${expr} where axis_id = $1`, [axisId]);
-    for (const path of ['/api/machines', `/api/machines/${machineId}`, `/api/machines/${machineId}/readiness`, `/api/machines/${machineId}/axes`, `/api/axes/${axisId}`, `/api/axes/${axisId}/travel-trials`, `/api/axes/${goodAxisId}/travel-trials`]) {
+    for (const path of [
+      '/api/machines',
+      `/api/machines/${machineId}`,
+      `/api/machines/${machineId}/readiness`,
+      `/api/machines/${machineId}/axes`,
+      `/api/axes/${axisId}`,
+      `/api/axes/${axisId}/travel-trials`,
+      `/api/axes/${goodAxisId}/travel-trials`,
+    ]) {
       const res = await ws.as.viewer.get(path);
       expect({ path, status: res.status }).toEqual({ path, status: 200 });
     }
@@ -65,7 +78,6 @@ describe('a stored result that cannot be read', () => {
     expect(JSON.stringify(board)).toMatch(/unreadable/i);
   });
 });
-
 
 /**
  * The same for rails, frame checks and bolt-downs: each bad record is flagged, its neighbours read
@@ -91,7 +103,9 @@ describe('stored rail, frame and bolt-down rows that cannot be read', () => {
     return res.body.id as string;
   };
   const newSweep = async (railId: string, readings: number[]) => {
-    const res = await ws.as.builder.post(`/api/rails/${railId}/sweeps`).send({ readingUnit: 'mm', phase: 'as-left', datum: 'granite straightedge', stations: stations(readings) });
+    const res = await ws.as.builder
+      .post(`/api/rails/${railId}/sweeps`)
+      .send({ readingUnit: 'mm', phase: 'as-left', datum: 'granite straightedge', stations: stations(readings) });
     expect(res.status).toBe(201);
     return res.body.id as string;
   };
@@ -116,20 +130,49 @@ describe('stored rail, frame and bolt-down rows that cannot be read', () => {
     const body = { sideX: 1000, sideY: 600, diagonal1: 1166.2, diagonal2: 1166 };
     expect((await ws.as.builder.post(`/api/machines/${machineId}/diagonal-checks`).send(body)).status).toBe(201);
     const points = [0, 400].flatMap((y) => [0, 500].map((x) => ({ x, y, z: 0.01 })));
-    expect((await ws.as.builder.post(`/api/machines/${machineId}/bed-grids`).send({ lengthUnit: 'mm', readingUnit: 'mm', rows: 2, columns: 2, points })).status).toBe(201);
-    const cut = { nominal: { x: 300, y: 300, circle: 100 }, measured: { x: 300, y: 300, diagonal1: Math.hypot(300, 300), diagonal2: Math.hypot(300, 300), circleX: 100, circleY: 100 } };
+    expect(
+      (
+        await ws.as.builder
+          .post(`/api/machines/${machineId}/bed-grids`)
+          .send({ lengthUnit: 'mm', readingUnit: 'mm', rows: 2, columns: 2, points })
+      ).status,
+    ).toBe(201);
+    const cut = {
+      nominal: { x: 300, y: 300, circle: 100 },
+      measured: {
+        x: 300,
+        y: 300,
+        diagonal1: Math.hypot(300, 300),
+        diagonal2: Math.hypot(300, 300),
+        circleX: 100,
+        circleY: 100,
+      },
+    };
     expect((await ws.as.technician.post(`/api/machines/${machineId}/test-cuts`).send(cut)).status).toBe(201);
-    expect((await ws.as.builder.post(`/api/rails/${good}/bolt-downs`).send({ mode: 'line', readingUnit: 'mm' })).status).toBe(201);
-    expect((await ws.as.builder.post(`/api/rails/${good}/bolt-downs`).send({ mode: 'line', readingUnit: 'mm' })).status).toBe(201);
+    expect(
+      (await ws.as.builder.post(`/api/rails/${good}/bolt-downs`).send({ mode: 'line', readingUnit: 'mm' })).status,
+    ).toBe(201);
+    expect(
+      (await ws.as.builder.post(`/api/rails/${good}/bolt-downs`).send({ mode: 'line', readingUnit: 'mm' })).status,
+    ).toBe(201);
 
     // Written straight into the database, as an old row or a hand edit would have left them.
     // JSON has no NaN: a writer that kept it wrote text where the number was.
-    await pool.query(`update rail_sweeps set result = jsonb_set(result, '{leastSquares,straightness}', '"NaN"') where id = $1`, [sweepA]);
-    await pool.query(`update rail_sweeps set readings_mm = jsonb_set(readings_mm, '{2}', 'null') where id = $1`, [sweepB]);
+    await pool.query(
+      `update rail_sweeps set result = jsonb_set(result, '{leastSquares,straightness}', '"NaN"') where id = $1`,
+      [sweepA],
+    );
+    await pool.query(`update rail_sweeps set readings_mm = jsonb_set(readings_mm, '{2}', 'null') where id = $1`, [
+      sweepB,
+    ]);
     await pool.query(`update rails set length_mm = 'NaN' where id = $1`, [bent]);
     await pool.query(`update diagonal_checks set side_x_mm = 'NaN' where machine_id = $1`, [machineId]);
-    await pool.query(`update bed_grids set points = jsonb_set(points, '{0,zMm}', 'null') where machine_id = $1`, [machineId]);
-    await pool.query(`update test_cuts set sizes = jsonb_set(sizes, '{measured,xMm}', '"NaN"') where machine_id = $1`, [machineId]);
+    await pool.query(`update bed_grids set points = jsonb_set(points, '{0,zMm}', 'null') where machine_id = $1`, [
+      machineId,
+    ]);
+    await pool.query(`update test_cuts set sizes = jsonb_set(sizes, '{measured,xMm}', '"NaN"') where machine_id = $1`, [
+      machineId,
+    ]);
     await pool.query(
       `update bolt_downs set hole_positions_mm = jsonb_set(hole_positions_mm, '{0}', 'null') where id = (select id from bolt_downs where rail_id = $1 order by created_at limit 1)`,
       [good],
@@ -138,11 +181,22 @@ describe('stored rail, frame and bolt-down rows that cannot be read', () => {
   afterAll(() => app.close());
 
   it('the machine, its lists and the board still load', async () => {
-    for (const path of ['/api/machines', `/api/machines/${machineId}`, `/api/machines/${machineId}/readiness`, `/api/machines/${machineId}/drift`]) await ok(path);
+    for (const path of [
+      '/api/machines',
+      `/api/machines/${machineId}`,
+      `/api/machines/${machineId}/readiness`,
+      `/api/machines/${machineId}/drift`,
+    ])
+      await ok(path);
   });
 
   it('the rail list flags the rail whose length cannot be read and the rail whose latest sweep cannot be read', async () => {
-    const rails = (await ok(`/api/machines/${machineId}/rails`)) as { id: string; unreadable?: string; holes: unknown[]; latestSweep: { unreadable?: string; leastSquaresStraightness: number | null } | null }[];
+    const rails = (await ok(`/api/machines/${machineId}/rails`)) as {
+      id: string;
+      unreadable?: string;
+      holes: unknown[];
+      latestSweep: { unreadable?: string; leastSquaresStraightness: number | null } | null;
+    }[];
     const byId = new Map(rails.map((r) => [r.id, r]));
     expect(byId.get(bent)!.unreadable).toMatch(/cannot be read/);
     expect(byId.get(bent)!.holes).toEqual([]);
@@ -182,8 +236,17 @@ describe('stored rail, frame and bolt-down rows that cannot be read', () => {
 
   it('the frame tab lists flag each bad record', async () => {
     for (const kind of ['diagonal-checks', 'bed-grids', 'test-cuts']) {
-      const list = (await ok(`/api/machines/${machineId}/${kind}`)) as { result: unknown; unreadable?: string; status: string }[];
-      expect({ kind, n: list.length, result: list[0].result, status: list[0].status }).toEqual({ kind, n: 1, result: null, status: 'outside-target' });
+      const list = (await ok(`/api/machines/${machineId}/${kind}`)) as {
+        result: unknown;
+        unreadable?: string;
+        status: string;
+      }[];
+      expect({ kind, n: list.length, result: list[0].result, status: list[0].status }).toEqual({
+        kind,
+        n: 1,
+        result: null,
+        status: 'outside-target',
+      });
       expect(list[0].unreadable).toMatch(/cannot be read/);
     }
   });
@@ -200,14 +263,25 @@ describe('stored rail, frame and bolt-down rows that cannot be read', () => {
   });
 
   it('the board blocks approval and names each record that cannot be read', async () => {
-    const board = (await ok(`/api/machines/${machineId}/readiness`)) as { blocking: { subject: string; status: string }[] };
+    const board = (await ok(`/api/machines/${machineId}/readiness`)) as {
+      blocking: { subject: string; status: string }[];
+    };
     const subjects = board.blocking.filter((c) => c.status === 'outside-target').map((c) => c.subject);
-    for (const want of [/Rail A.*latest sweep unreadable/, /Rails (A and B|B and A).*latest sweep unreadable/, /latest diagonal check unreadable/, /latest bed grid unreadable/, /latest test cut unreadable/]) {
+    for (const want of [
+      /Rail A.*latest sweep unreadable/,
+      /Rails (A and B|B and A).*latest sweep unreadable/,
+      /latest diagonal check unreadable/,
+      /latest bed grid unreadable/,
+      /latest test cut unreadable/,
+    ]) {
       expect(subjects.some((s) => want.test(s))).toBe(true);
     }
     const req = await ws.as.technician.post(`/api/machines/${machineId}/approval-requests`).send({});
     expect(req.status).toBeLessThan(500);
-    const res = await ws.as.owner.post(`/api/machines/${machineId}/approvals`).send({ password: 'correct horse battery staple', statement: 'I have reviewed every check of this machine and approve it as ready to cut.' });
+    const res = await ws.as.owner.post(`/api/machines/${machineId}/approvals`).send({
+      password: 'correct horse battery staple',
+      statement: 'I have reviewed every check of this machine and approve it as ready to cut.',
+    });
     expect(res.status).toBe(409);
   });
 });

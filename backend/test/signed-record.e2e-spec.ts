@@ -57,17 +57,31 @@ describe('the signed record', () => {
   const verification = async () => {
     const res = await ws.as.viewer.get(`/api/machines/${machineId}/approvals/${approvalId}/verification`);
     expect(res.status).toBe(200);
-    return res.body as { status: string; valid: boolean; unchanged: boolean | null; message: string; differences: Difference[]; signedCopyIntact: boolean | null; keyId: string; signedBy: string; signedAt: string };
+    return res.body as {
+      status: string;
+      valid: boolean;
+      unchanged: boolean | null;
+      message: string;
+      differences: Difference[];
+      signedCopyIntact: boolean | null;
+      keyId: string;
+      signedBy: string;
+      signedAt: string;
+    };
   };
 
   beforeAll(async () => {
     app = await createTestApp();
     ws = await createTestWorkshop(app, 'Signing');
     machineId = await newMachine(ws, 'Sealed router');
-    const rail = await ws.as.builder.post(`/api/machines/${machineId}/rails`).send({ label: 'Y1 (left)', axis: 'Y1', length: 800, holePitch: 60, firstHole: 40 });
+    const rail = await ws.as.builder
+      .post(`/api/machines/${machineId}/rails`)
+      .send({ label: 'Y1 (left)', axis: 'Y1', length: 800, holePitch: 60, firstHole: 40 });
     expect([rail.status, rail.body.message]).toEqual([201, undefined]);
     const stations = [0, 200, 400, 600, 800].map((position, i) => ({ position, reading: readings[i] }));
-    const sweep = await ws.as.builder.post(`/api/rails/${rail.body.id}/sweeps`).send({ readingUnit: 'um', phase: 'as-left', stations });
+    const sweep = await ws.as.builder
+      .post(`/api/rails/${rail.body.id}/sweeps`)
+      .send({ readingUnit: 'um', phase: 'as-left', stations });
     expect([sweep.status, sweep.body.message]).toEqual([201, undefined]);
     sweepId = sweep.body.id;
     const straightKey = (await board(ws, machineId)).checks.find((c) => c.recordId === sweepId)?.key;
@@ -84,9 +98,20 @@ describe('the signed record', () => {
 
   it('verifies as valid and unchanged right after approval, naming signer, time and key', async () => {
     const v = await verification();
-    expect(v).toMatchObject({ status: 'valid', valid: true, unchanged: true, differences: [], signedBy: expect.stringContaining('owner'), signedAt: expect.any(String) });
+    expect(v).toMatchObject({
+      status: 'valid',
+      valid: true,
+      unchanged: true,
+      differences: [],
+      signedBy: expect.stringContaining('owner'),
+      signedAt: expect.any(String),
+    });
     const pem = (await anonymous(app).get('/api/public/signing-key')).text;
-    expect(v.keyId).toBe(createHash('sha256').update(createPublicKey(pem).export({ type: 'spki', format: 'der' })).digest('hex'));
+    expect(v.keyId).toBe(
+      createHash('sha256')
+        .update(createPublicKey(pem).export({ type: 'spki', format: 'der' }))
+        .digest('hex'),
+    );
   });
 
   it('prints the public verification address and its QR code on the certificate, the same bytes every time', async () => {
@@ -130,40 +155,73 @@ describe('the signed record', () => {
       });
     });
 
-    it('offers the signed record, whose signature checks with node:crypto and the public route\'s key alone', async () => {
+    it("offers the signed record, whose signature checks with node:crypto and the public route's key alone", async () => {
       const pem = (await anonymous(app).get('/api/public/signing-key')).text;
       const res = await anonymous(app).get(`/api/public/verify/${token}/record.json`);
       expect(res.status).toBe(200);
-      expect(disposition(res.headers['content-disposition'])).toEqual({ type: 'attachment', filename: expect.stringMatching(/^railwright-signed-record-.*\.json$/) });
-      const record = res.body as { algorithm: string; keyId: string; publicKey: string; content: string; signature: string };
+      expect(disposition(res.headers['content-disposition'])).toEqual({
+        type: 'attachment',
+        filename: expect.stringMatching(/^railwright-signed-record-.*\.json$/),
+      });
+      const record = res.body as {
+        algorithm: string;
+        keyId: string;
+        publicKey: string;
+        content: string;
+        signature: string;
+      };
       expect(record.algorithm).toBe('Ed25519');
-      expect(verify(null, Buffer.from(record.content, 'utf8'), createPublicKey(pem), Buffer.from(record.signature, 'base64'))).toBe(true);
+      expect(
+        verify(
+          null,
+          Buffer.from(record.content, 'utf8'),
+          createPublicKey(pem),
+          Buffer.from(record.signature, 'base64'),
+        ),
+      ).toBe(true);
       // The content is canonical JSON and covers the manifestation, the targets and every reading.
       const content = JSON.parse(record.content);
       expect(canonicalJson(content)).toBe(record.content);
-      expect(content.approval).toMatchObject({ id: approvalId, machineId, statement: STATEMENT, signerName: expect.stringContaining('owner'), recheckIntervalDays: 90 });
+      expect(content.approval).toMatchObject({
+        id: approvalId,
+        machineId,
+        statement: STATEMENT,
+        signerName: expect.stringContaining('owner'),
+        recheckIntervalDays: 90,
+      });
       expect(content.records[`rail-sweep:${sweepId}`].row.readingsRaw).toEqual(readings);
       expect(Object.keys(content.targetValues).length).toBeGreaterThan(0);
       expect(content.records[`machine:${machineId}`].row).toMatchObject({ name: 'Sealed router', workAreaXMm: 900 });
-      const walk = Object.values(content.records as Record<string, { kind: string; answers?: unknown[] }>).find((r) => r.kind === 'safety-walk');
+      const walk = Object.values(content.records as Record<string, { kind: string; answers?: unknown[] }>).find(
+        (r) => r.kind === 'safety-walk',
+      );
       expect(walk?.answers?.length).toBeGreaterThan(0);
     });
 
     it('answers 404 with a message for a made-up or malformed token', async () => {
-      for (const url of ['/api/public/verify/AAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAA', '/api/public/verify/not-a-token', '/api/public/verify/AAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAA/record.json']) {
+      for (const url of [
+        '/api/public/verify/AAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAA',
+        '/api/public/verify/not-a-token',
+        '/api/public/verify/AAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAA/record.json',
+      ]) {
         const res = await anonymous(app).get(url);
-        expect([res.status, res.body.message]).toEqual([404, expect.stringMatching(/No approval has this verification address/)]);
+        expect([res.status, res.body.message]).toEqual([
+          404,
+          expect.stringMatching(/No approval has this verification address/),
+        ]);
       }
     });
 
     it('keeps the other routes closed', async () => {
-      expect((await anonymous(app).get(`/api/machines/${machineId}/approvals/${approvalId}/verification`)).status).toBe(401);
+      expect((await anonymous(app).get(`/api/machines/${machineId}/approvals/${approvalId}/verification`)).status).toBe(
+        401,
+      );
     });
   });
 
   describe('signed before a database upgrade changed the layout of its rows', () => {
     type Content = { records: Record<string, { kind: string; row: Record<string, unknown> }> };
-    const ownerQuery = async <T,>(sql: string, params: unknown[] = []) => {
+    const ownerQuery = async <T>(sql: string, params: unknown[] = []) => {
       const client = new pg.Client({ connectionString: process.env.DATABASE_OWNER_URL ?? process.env.DATABASE_URL });
       await client.connect();
       try {
@@ -180,7 +238,10 @@ describe('the signed record', () => {
      * machine without their length unit, spacing and end distance.
      */
     const signInOldLayout = async () => {
-      [original] = await ownerQuery<{ signed_content: string; signature: string }>('SELECT signed_content, signature FROM approvals WHERE id = $1', [approvalId]);
+      [original] = await ownerQuery<{ signed_content: string; signature: string }>(
+        'SELECT signed_content, signature FROM approvals WHERE id = $1',
+        [approvalId],
+      );
       const old = JSON.parse(original.signed_content) as Content;
       for (const entry of Object.values(old.records)) {
         const row = entry.row;
@@ -194,22 +255,48 @@ describe('the signed record', () => {
       const text = canonicalJson(old);
       const key = createPrivateKey(readFileSync(signingKeyPath(), 'utf8'));
       const signature = sign(null, Buffer.from(text, 'utf8'), key).toString('base64');
-      await tamper('UPDATE approvals SET signed_content = $2, signature = $3 WHERE id = $1', [approvalId, text, signature]);
+      await tamper('UPDATE approvals SET signed_content = $2, signature = $3 WHERE id = $1', [
+        approvalId,
+        text,
+        signature,
+      ]);
       return { text, old };
     };
-    const restore = () => tamper('UPDATE approvals SET signed_content = $2, signature = $3 WHERE id = $1', [approvalId, original.signed_content, original.signature]);
+    const restore = () =>
+      tamper('UPDATE approvals SET signed_content = $2, signature = $3 WHERE id = $1', [
+        approvalId,
+        original.signed_content,
+        original.signature,
+      ]);
 
     it('still verifies as valid and unchanged, and the offered record is the text that was signed', async () => {
       const { text, old } = await signInOldLayout();
       expect(old.records[`rail-sweep:${sweepId}`].row.unit).toBe('um');
       try {
         const v = await verification();
-        expect(v).toMatchObject({ status: 'valid', valid: true, unchanged: true, signedCopyIntact: true, differences: [] });
+        expect(v).toMatchObject({
+          status: 'valid',
+          valid: true,
+          unchanged: true,
+          signedCopyIntact: true,
+          differences: [],
+        });
         expect(v.message).toMatch(/earlier layout/);
         const pem = (await anonymous(app).get('/api/public/signing-key')).text;
-        const record = (await anonymous(app).get(`/api/public/verify/${token}/record.json`)).body as { content: string; currentContent: string; signature: string };
+        const record = (await anonymous(app).get(`/api/public/verify/${token}/record.json`)).body as {
+          content: string;
+          currentContent: string;
+          signature: string;
+        };
         expect(record.content).toBe(text);
-        expect(verify(null, Buffer.from(record.content, 'utf8'), createPublicKey(pem), Buffer.from(record.signature, 'base64'))).toBe(true);
+        expect(
+          verify(
+            null,
+            Buffer.from(record.content, 'utf8'),
+            createPublicKey(pem),
+            Buffer.from(record.signature, 'base64'),
+          ),
+        ).toBe(true);
         expect(JSON.parse(record.currentContent).records[`rail-sweep:${sweepId}`].row.readingUnit).toBe('um');
       } finally {
         await restore();
@@ -222,7 +309,15 @@ describe('the signed record', () => {
         await tamper(`UPDATE rail_sweeps SET readings_raw = '[0,2,1,4,2]'::jsonb WHERE id = $1`, [sweepId]);
         const v = await verification();
         expect(v).toMatchObject({ status: 'changed', valid: false, signedCopyIntact: true });
-        expect(v.differences).toEqual([{ path: `records["rail-sweep:${sweepId}"].row.readingsRaw[3]`, record: { kind: 'rail-sweep', id: sweepId }, change: 'changed', signed: 3, current: 4 }]);
+        expect(v.differences).toEqual([
+          {
+            path: `records["rail-sweep:${sweepId}"].row.readingsRaw[3]`,
+            record: { kind: 'rail-sweep', id: sweepId },
+            change: 'changed',
+            signed: 3,
+            current: 4,
+          },
+        ]);
       } finally {
         await tamper(`UPDATE rail_sweeps SET readings_raw = '[0,2,1,3,2]'::jsonb WHERE id = $1`, [sweepId]);
         await restore();
@@ -236,7 +331,13 @@ describe('the signed record', () => {
         await tamper(`UPDATE rail_sweeps SET reading_unit = 'thou' WHERE id = $1`, [sweepId]);
         const v = await verification();
         expect(v.valid).toBe(false);
-        expect(v.differences).toEqual([expect.objectContaining({ path: `records["rail-sweep:${sweepId}"].row.readingUnit`, signed: 'um', current: 'thou' })]);
+        expect(v.differences).toEqual([
+          expect.objectContaining({
+            path: `records["rail-sweep:${sweepId}"].row.readingUnit`,
+            signed: 'um',
+            current: 'thou',
+          }),
+        ]);
       } finally {
         await tamper(`UPDATE rail_sweeps SET reading_unit = 'um' WHERE id = $1`, [sweepId]);
         await restore();
@@ -246,9 +347,23 @@ describe('the signed record', () => {
     it('converts measured moves to mm exactly as the migration did in PostgreSQL numeric arithmetic', async () => {
       // Independent reference: PostgreSQL's own numeric type, with migration 0024's expression.
       let seed = 7;
-      const next = () => ((seed = (seed * 48271) % 2147483647) / 2147483647);
-      const values = [19.95, 0.1, 1e-7, 3.3333333333333335, -12.7, 1234.56789, 2.5e-13, 1.5e21, ...Array.from({ length: 200 }, () => (next() - 0.3) * 10 ** Math.floor(next() * 8 - 3))];
-      for (const [unit, factor] of [['in', '25.4'], ['thou', '0.0254'], ['um', '0.001']] as const) {
+      const next = () => (seed = (seed * 48271) % 2147483647) / 2147483647;
+      const values = [
+        19.95,
+        0.1,
+        1e-7,
+        3.3333333333333335,
+        -12.7,
+        1234.56789,
+        2.5e-13,
+        1.5e21,
+        ...Array.from({ length: 200 }, () => (next() - 0.3) * 10 ** Math.floor(next() * 8 - 3)),
+      ];
+      for (const [unit, factor] of [
+        ['in', '25.4'],
+        ['thou', '0.0254'],
+        ['um', '0.001'],
+      ] as const) {
         const rows = await ownerQuery<{ v: number }>(
           `SELECT round((e.m->>'measured')::numeric * $2::numeric, 12)::float8 AS v FROM jsonb_array_elements($1::jsonb) WITH ORDINALITY AS e(m, ord) ORDER BY ord`,
           [JSON.stringify(values.map((measured) => ({ measured }))), factor],
@@ -263,7 +378,13 @@ describe('the signed record', () => {
       await tamper(`UPDATE rail_sweeps SET readings_raw = '[0,2,9,3,2]'::jsonb WHERE id = $1`, [sweepId]);
       const v = await verification();
       expect(v).toMatchObject({ status: 'changed', valid: false, unchanged: false, signedCopyIntact: true });
-      expect(v.differences).toContainEqual({ path: `records["rail-sweep:${sweepId}"].row.readingsRaw[2]`, record: { kind: 'rail-sweep', id: sweepId }, change: 'changed', signed: 1, current: 9 });
+      expect(v.differences).toContainEqual({
+        path: `records["rail-sweep:${sweepId}"].row.readingsRaw[2]`,
+        record: { kind: 'rail-sweep', id: sweepId },
+        change: 'changed',
+        signed: 1,
+        current: 9,
+      });
       const pub = await anonymous(app).get(`/api/public/verify/${token}`);
       expect(pub.body).toMatchObject({ valid: false, unchanged: false });
       await tamper(`UPDATE rail_sweeps SET readings_raw = '[0,2,1,3,2]'::jsonb WHERE id = $1`, [sweepId]);
@@ -274,7 +395,15 @@ describe('the signed record', () => {
       await tamper('UPDATE approvals SET statement = $2 WHERE id = $1', [approvalId, 'I approve nothing.']);
       const v = await verification();
       expect(v.valid).toBe(false);
-      expect(v.differences).toEqual([{ path: 'approval.statement', record: null, change: 'changed', signed: STATEMENT, current: 'I approve nothing.' }]);
+      expect(v.differences).toEqual([
+        {
+          path: 'approval.statement',
+          record: null,
+          change: 'changed',
+          signed: STATEMENT,
+          current: 'I approve nothing.',
+        },
+      ]);
       await tamper('UPDATE approvals SET statement = $2 WHERE id = $1', [approvalId, STATEMENT]);
       expect((await verification()).valid).toBe(true);
     });
@@ -282,11 +411,25 @@ describe('the signed record', () => {
     it('a changed target value makes verification fail, naming the target', async () => {
       const record = JSON.parse((await anonymous(app).get(`/api/public/verify/${token}/record.json`)).body.content);
       const [key, target] = Object.entries(record.targetValues as Record<string, { value: number }>)[0];
-      await tamper(`UPDATE approvals SET target_values = jsonb_set(target_values, ARRAY[$2, 'value'], to_jsonb($3::float8)) WHERE id = $1`, [approvalId, key, target.value * 10]);
+      await tamper(
+        `UPDATE approvals SET target_values = jsonb_set(target_values, ARRAY[$2, 'value'], to_jsonb($3::float8)) WHERE id = $1`,
+        [approvalId, key, target.value * 10],
+      );
       const v = await verification();
       expect(v.valid).toBe(false);
-      expect(v.differences).toEqual([{ path: `targetValues.${key}.value`, record: null, change: 'changed', signed: target.value, current: target.value * 10 }]);
-      await tamper(`UPDATE approvals SET target_values = jsonb_set(target_values, ARRAY[$2, 'value'], to_jsonb($3::float8)) WHERE id = $1`, [approvalId, key, target.value]);
+      expect(v.differences).toEqual([
+        {
+          path: `targetValues.${key}.value`,
+          record: null,
+          change: 'changed',
+          signed: target.value,
+          current: target.value * 10,
+        },
+      ]);
+      await tamper(
+        `UPDATE approvals SET target_values = jsonb_set(target_values, ARRAY[$2, 'value'], to_jsonb($3::float8)) WHERE id = $1`,
+        [approvalId, key, target.value],
+      );
       expect((await verification()).valid).toBe(true);
     });
 
@@ -295,9 +438,19 @@ describe('the signed record', () => {
       const forged = (await anonymous(app).get(`/api/public/verify/${token}/record.json`)).body.content as string;
       const saved = JSON.parse((await anonymous(app).get(`/api/public/verify/${token}/record.json`)).body.content);
       expect(saved.records[`rail-sweep:${sweepId}`].row.readingsRaw[4]).toBe(20);
-      await tamper('UPDATE approvals SET signed_content = $2, record_hash = $3 WHERE id = $1', [approvalId, forged, createHash('sha256').update(forged).digest('hex')]);
+      await tamper('UPDATE approvals SET signed_content = $2, record_hash = $3 WHERE id = $1', [
+        approvalId,
+        forged,
+        createHash('sha256').update(forged).digest('hex'),
+      ]);
       const v = await verification();
-      expect(v).toMatchObject({ status: 'changed', valid: false, unchanged: false, signedCopyIntact: false, differences: [] });
+      expect(v).toMatchObject({
+        status: 'changed',
+        valid: false,
+        unchanged: false,
+        signedCopyIntact: false,
+        differences: [],
+      });
       expect(v.message).toMatch(/kept copy of the signed record was altered too/);
       expect((await anonymous(app).get(`/api/public/verify/${token}`)).body.valid).toBe(false);
     });
@@ -305,7 +458,12 @@ describe('the signed record', () => {
     it('an approval signed before signatures were kept says so, and is not valid', async () => {
       await tamper('UPDATE approvals SET signature = NULL, signing_key_id = NULL WHERE id = $1', [approvalId]);
       const v = await verification();
-      expect(v).toMatchObject({ status: 'unsigned', valid: false, unchanged: null, message: expect.stringMatching(/signed before signatures were kept/) });
+      expect(v).toMatchObject({
+        status: 'unsigned',
+        valid: false,
+        unchanged: null,
+        message: expect.stringMatching(/signed before signatures were kept/),
+      });
       expect((await anonymous(app).get(`/api/public/verify/${token}/record.json`)).status).toBe(404);
     });
   });
@@ -316,8 +474,19 @@ describe('the signed record', () => {
     await requestAndApprove(ws, machine2, TEST_PASSWORD);
     const pdf = await ws.as.viewer.get(`/api/machines/${machine2}/certificate.pdf`).buffer(true).parse(binary);
     const token2 = /\/verify\/([A-Za-z0-9_-]+)/.exec(pdfText(pdf.body))![1];
-    expect((await ws.as.owner.post(`/api/machines/${machine2}/reopen`).send({ reason: 'Y2 rail was knocked by a forklift' })).status).toBe(201);
+    expect(
+      (await ws.as.owner.post(`/api/machines/${machine2}/reopen`).send({ reason: 'Y2 rail was knocked by a forklift' }))
+        .status,
+    ).toBe(201);
     const res = await anonymous(app).get(`/api/public/verify/${token2}`);
-    expect(res.body).toMatchObject({ valid: true, stands: false, reopened: { at: expect.any(String), by: expect.stringContaining('owner'), reason: 'Y2 rail was knocked by a forklift' } });
+    expect(res.body).toMatchObject({
+      valid: true,
+      stands: false,
+      reopened: {
+        at: expect.any(String),
+        by: expect.stringContaining('owner'),
+        reason: 'Y2 rail was knocked by a forklift',
+      },
+    });
   });
 });

@@ -30,19 +30,30 @@ describe('a stored target set without a key', () => {
     routerId = await newMachine(ws, 'router');
     routerSetId = (await ws.as.viewer.get(`/api/machines/${routerId}`)).body.targetSet.id;
     // As an older version would have left it: two keys this version judges by are not stored.
-    await pool.query("update target_sets set targets = targets - 'partTolerance' - 'squareness' where id = $1", [routerSetId]);
+    await pool.query("update target_sets set targets = targets - 'partTolerance' - 'squareness' where id = $1", [
+      routerSetId,
+    ]);
   });
   afterAll(async () => {
     await app?.close();
   });
 
-  const stored = async (id: string) => (await pool.query<{ targets: Record<string, { value: number; unit: string }> }>('select targets from target_sets where id = $1', [id])).rows[0].targets;
+  const stored = async (id: string) =>
+    (
+      await pool.query<{ targets: Record<string, { value: number; unit: string }> }>(
+        'select targets from target_sets where id = $1',
+        [id],
+      )
+    ).rows[0].targets;
 
   it('answers the readiness board with the default for the missing keys', async () => {
     const res = await ws.as.viewer.get(`/api/machines/${routerId}/readiness`);
     expect(res.status).toBe(200);
     const cut = res.body.checks.find((c: { kind: string }) => c.kind === 'test-cut');
-    expect(cut.target).toMatchObject({ value: FALLBACK_TARGETS.partTolerance.value, unit: FALLBACK_TARGETS.partTolerance.unit });
+    expect(cut.target).toMatchObject({
+      value: FALLBACK_TARGETS.partTolerance.value,
+      unit: FALLBACK_TARGETS.partTolerance.unit,
+    });
     const square = res.body.checks.find((c: { kind: string }) => c.kind === 'diagonal-check');
     expect(square.target).toMatchObject({ value: FALLBACK_TARGETS.squareness.value, unit: 'mm/m' });
   });
@@ -52,25 +63,35 @@ describe('a stored target set without a key', () => {
     const sets = await ws.as.viewer.get('/api/target-sets');
     expect(sets.status).toBe(200);
     const set = sets.body.find((s: { id: string }) => s.id === routerSetId);
-    expect(set.targets.partTolerance).toMatchObject({ value: FALLBACK_TARGETS.partTolerance.value, unit: FALLBACK_TARGETS.partTolerance.unit });
+    expect(set.targets.partTolerance).toMatchObject({
+      value: FALLBACK_TARGETS.partTolerance.value,
+      unit: FALLBACK_TARGETS.partTolerance.unit,
+    });
     expect(Object.keys(set.targets).sort()).toEqual([...TARGET_KEYS].sort());
     // A check judged against a missing key is recorded and judged against the default.
-    const diag = await ws.as.technician.post(`/api/machines/${routerId}/diagonal-checks`).send({ sideX: 500, sideY: 500, diagonal1: 707.2, diagonal2: 707.0 });
+    const diag = await ws.as.technician
+      .post(`/api/machines/${routerId}/diagonal-checks`)
+      .send({ sideX: 500, sideY: 500, diagonal1: 707.2, diagonal2: 707.0 });
     expect(diag.status).toBe(201);
     expect(diag.body.target).toMatchObject({ value: FALLBACK_TARGETS.squareness.value, unit: 'mm/m' });
   });
 
   it('gets the key written in by the migration: the router default for a set only routers use, else the plasma one', async () => {
-    const plasmaSetId = (await ws.as.viewer.get('/api/target-sets')).body.find((s: { id: string }) => s.id !== routerSetId).id;
+    const plasmaSetId = (await ws.as.viewer.get('/api/target-sets')).body.find(
+      (s: { id: string }) => s.id !== routerSetId,
+    ).id;
     await pool.query("update target_sets set targets = targets - 'reversal' where id = $1", [plasmaSetId]);
-    await pool.query("update target_sets set targets = targets - 'partTolerance' - 'squareness' where id = $1", [routerSetId]);
+    await pool.query("update target_sets set targets = targets - 'partTolerance' - 'squareness' where id = $1", [
+      routerSetId,
+    ]);
     const before = await stored(plasmaSetId);
     const file = readdirSync(MIGRATIONS).find((f) => f.endsWith('_target-sets-every-key.sql'))!;
     // The migration's own statements, run again (they only touch sets that lack a key). Trigger
     // changes need the owner: npm test gives its URL; a single-owner dev database has one URL.
     const owner = new pg.Pool({ connectionString: process.env.DATABASE_OWNER_URL ?? process.env.DATABASE_URL, max: 1 });
     try {
-      for (const statement of readFileSync(path.join(MIGRATIONS, file), 'utf8').split('--> statement-breakpoint')) await owner.query(statement);
+      for (const statement of readFileSync(path.join(MIGRATIONS, file), 'utf8').split('--> statement-breakpoint'))
+        await owner.query(statement);
     } finally {
       await owner.end();
     }

@@ -40,7 +40,9 @@ describe('large calculations', () => {
   it('small calculations keep their residuals unasked, and can refuse them; a bad flag is a 400', async () => {
     const body = { positions: [0, 100, 200, 300], readings: [0, 0.01, 0.03, 0.02] };
     expect((await ws.as.viewer.post('/api/calc/straightness').send(body)).body.leastSquares.residuals).toHaveLength(4);
-    expect((await ws.as.viewer.post('/api/calc/straightness?residuals=false').send(body)).body.leastSquares.residuals).toBeUndefined();
+    expect(
+      (await ws.as.viewer.post('/api/calc/straightness?residuals=false').send(body)).body.leastSquares.residuals,
+    ).toBeUndefined();
     const bad = await ws.as.viewer.post('/api/calc/straightness?residuals=maybe').send(body);
     expect(bad.status).toBe(400);
     expect(bad.body.message).toEqual(['residuals must be true or false']);
@@ -55,7 +57,11 @@ describe('large calculations', () => {
   });
 
   it('long lists of {x, y, z} and nested lists are checked in one pass with the same messages as short ones', async () => {
-    const points = Array.from({ length: 10_000 }, (_, i) => ({ x: (i % 100) * 10, y: Math.floor(i / 100) * 10, z: ((i * 7) % 13) / 1000 }));
+    const points = Array.from({ length: 10_000 }, (_, i) => ({
+      x: (i % 100) * 10,
+      y: Math.floor(i / 100) * 10,
+      z: ((i * 7) % 13) / 1000,
+    }));
     const ok = await ws.as.viewer.post('/api/calc/flatness').send({ points });
     expect(ok.status).toBe(200);
     expect(ok.body.leastSquares.residuals).toBeUndefined();
@@ -66,7 +72,9 @@ describe('large calculations', () => {
     expect(refused.status).toBe(400);
     expect(refused.body.message).toEqual(['points.9000.z must be a finite number']);
     // The same message class-validator gives a short list.
-    const short = await ws.as.viewer.post('/api/calc/flatness').send({ points: [...points.slice(0, 3), { x: 1, y: 1, z: null }] });
+    const short = await ws.as.viewer
+      .post('/api/calc/flatness')
+      .send({ points: [...points.slice(0, 3), { x: 1, y: 1, z: null }] });
     expect(short.body.message).toContain('points.3.z must be a finite number');
 
     const extra = points.map((p, i) => (i === 5_000 ? { ...p, w: 1 } : p));
@@ -91,7 +99,9 @@ describe('large calculations', () => {
   it('answers above 2 kB go out compressed as the client asks; small ones as they are', async () => {
     const body = { positions: sweep.positionsMm.slice(0, 5000), readings: sweep.readingsMm.slice(0, 5000) };
     // Through node's own http client, which (unlike supertest) hands back the bytes as sent.
-    const login = await anonymous(app).post('/api/auth/login').send({ email: ws.emails.viewer, password: TEST_PASSWORD });
+    const login = await anonymous(app)
+      .post('/api/auth/login')
+      .send({ email: ws.emails.viewer, password: TEST_PASSWORD });
     const cookie = String(login.headers['set-cookie']).split(';')[0];
     const server = app.getHttpServer();
     if (!server.listening) await new Promise<void>((resolve) => server.listen(0, '127.0.0.1', resolve));
@@ -99,11 +109,24 @@ describe('large calculations', () => {
     const raw = (encoding: string) =>
       new Promise<{ status: number; encoding?: string; bytes: Buffer }>((resolve, reject) => {
         const req = httpRequest(
-          { host: '127.0.0.1', port, agent: false, method: 'POST', path: '/api/calc/straightness?residuals=true', headers: { cookie, 'accept-encoding': encoding, 'content-type': 'application/json' } },
+          {
+            host: '127.0.0.1',
+            port,
+            agent: false,
+            method: 'POST',
+            path: '/api/calc/straightness?residuals=true',
+            headers: { cookie, 'accept-encoding': encoding, 'content-type': 'application/json' },
+          },
           (res) => {
             const chunks: Buffer[] = [];
             res.on('data', (c: Buffer) => chunks.push(c));
-            res.on('end', () => resolve({ status: res.statusCode!, encoding: res.headers['content-encoding'], bytes: Buffer.concat(chunks) }));
+            res.on('end', () =>
+              resolve({
+                status: res.statusCode!,
+                encoding: res.headers['content-encoding'],
+                bytes: Buffer.concat(chunks),
+              }),
+            );
           },
         );
         req.on('error', reject);

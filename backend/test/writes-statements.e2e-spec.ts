@@ -14,7 +14,8 @@ import { PG_POOL } from '../src/database/database.tokens.js';
  */
 
 // Tables only other contributors read: a sweep's recount must not touch them.
-const OTHER_CONTRIBUTORS = /"?(axes|travel_trials|positioning_runs|backlash_checks|diagonal_checks|bed_grids|test_cuts|safety_walks|safety_items|safety_answers)"?\b/;
+const OTHER_CONTRIBUTORS =
+  /"?(axes|travel_trials|positioning_runs|backlash_checks|diagonal_checks|bed_grids|test_cuts|safety_walks|safety_items|safety_answers)"?\b/;
 
 const RAIL = { label: 'X1', axis: 'X', length: 300, profileSize: 20, holePitch: 60, firstHole: 30 };
 
@@ -47,9 +48,12 @@ describe('statements per write', () => {
     } as typeof pg.Client.prototype.query;
     app = await createTestApp();
     ws = await createTestWorkshop(app, 'Statements');
-    const machine = await ws.as.builder.post('/api/machines').send({ name: 'Router', kind: 'router', workArea: { x: 1200, y: 800 } });
+    const machine = await ws.as.builder
+      .post('/api/machines')
+      .send({ name: 'Router', kind: 'router', workArea: { x: 1200, y: 800 } });
     railId = (await ws.as.builder.post(`/api/machines/${machine.body.id}/rails`).send(RAIL)).body.id;
-    boltDownId = (await ws.as.builder.post(`/api/rails/${railId}/bolt-downs`).send({ mode: 'line', readingUnit: 'mm' })).body.id;
+    boltDownId = (await ws.as.builder.post(`/api/rails/${railId}/bolt-downs`).send({ mode: 'line', readingUnit: 'mm' }))
+      .body.id;
   });
   afterAll(async () => {
     pg.Client.prototype.query = originalQuery;
@@ -57,16 +61,25 @@ describe('statements per write', () => {
   });
 
   const report = (what: string, list: string[]) => {
-    if (process.env.SHOW_STATEMENTS) console.log(`${what}: ${list.length}\n${list.map((s) => `  ${s.replace(/\s+/g, ' ').slice(0, 160)}`).join('\n')}`);
+    if (process.env.SHOW_STATEMENTS)
+      console.log(
+        `${what}: ${list.length}\n${list.map((s) => `  ${s.replace(/\s+/g, ' ').slice(0, 160)}`).join('\n')}`,
+      );
   };
 
   it('a sweep write: session read, transaction, record with its audit, nothing read back, its own contributor recounted', async () => {
     // Warm up once so one-off lookups (e.g. default target sets) are not counted.
-    await ws.as.builder.post(`/api/rails/${railId}/sweeps`).send({ readingUnit: 'mm', phase: 'as-found', stations: [0, 1, 2, 3].map((i) => ({ position: i * 100, reading: i * 0.01 })) });
+    await ws.as.builder.post(`/api/rails/${railId}/sweeps`).send({
+      readingUnit: 'mm',
+      phase: 'as-found',
+      stations: [0, 1, 2, 3].map((i) => ({ position: i * 100, reading: i * 0.01 })),
+    });
     startCounting();
-    const res = await ws.as.builder
-      .post(`/api/rails/${railId}/sweeps`)
-      .send({ readingUnit: 'mm', phase: 'as-found', stations: [0, 1, 2, 3].map((i) => ({ position: i * 100, reading: (i % 2) * 0.01 })) });
+    const res = await ws.as.builder.post(`/api/rails/${railId}/sweeps`).send({
+      readingUnit: 'mm',
+      phase: 'as-found',
+      stations: [0, 1, 2, 3].map((i) => ({ position: i * 100, reading: (i % 2) * 0.01 })),
+    });
     const list = stopCounting();
     report('sweep write', list);
     expect(res.status).toBe(201);
@@ -95,9 +108,13 @@ describe('statements per write', () => {
   });
 
   it('a hole write: the machine locked once, the hole, its audit, the answer from one read of the holes', async () => {
-    await ws.as.builder.put(`/api/bolt-downs/${boltDownId}/holes/0`).send({ reading: 0, fixed: true, writeId: randomUUID() });
+    await ws.as.builder
+      .put(`/api/bolt-downs/${boltDownId}/holes/0`)
+      .send({ reading: 0, fixed: true, writeId: randomUUID() });
     startCounting();
-    const res = await ws.as.builder.put(`/api/bolt-downs/${boltDownId}/holes/1`).send({ reading: 0.01, fixed: true, writeId: randomUUID() });
+    const res = await ws.as.builder
+      .put(`/api/bolt-downs/${boltDownId}/holes/1`)
+      .send({ reading: 0.01, fixed: true, writeId: randomUUID() });
     const list = stopCounting();
     report('hole write', list);
     expect(res.status).toBe(200);
@@ -130,12 +147,18 @@ describe('statements per write', () => {
     expect((await agent.get('/api/auth/me')).status).toBe(200);
     // Last refreshed two days ago: the next request pushes its expiry on and stores it again.
     const twoDaysAgo = Date.now() - 2 * 24 * 3600_000;
-    await pool.query(`update "session" set sess = jsonb_set(sess::jsonb, '{refreshedAt}', to_jsonb($2::bigint))::json where sess->>'userId' = $1`, [ws.userIds.technician, twoDaysAgo]);
+    await pool.query(
+      `update "session" set sess = jsonb_set(sess::jsonb, '{refreshedAt}', to_jsonb($2::bigint))::json where sess->>'userId' = $1`,
+      [ws.userIds.technician, twoDaysAgo],
+    );
     startCounting();
     expect((await agent.get('/api/auth/me')).status).toBe(200);
     const list = stopCounting();
     expect(list.filter((s) => /insert into "session"|update "session"/i.test(s))).toHaveLength(1);
-    const { rows } = await pool.query<{ sess: Record<string, unknown> }>(`select sess from "session" where sess->>'userId' = $1`, [ws.userIds.technician]);
+    const { rows } = await pool.query<{ sess: Record<string, unknown> }>(
+      `select sess from "session" where sess->>'userId' = $1`,
+      [ws.userIds.technician],
+    );
     expect(rows.length).toBeGreaterThanOrEqual(2);
     expect(rows.some((r) => Number(r.sess.refreshedAt) > twoDaysAgo)).toBe(true);
     for (const row of rows) {

@@ -11,7 +11,14 @@ export async function newAxis(request: APIRequestContext, name = `Drives test ${
   const axis = await request.post(`/api/machines/${machineId}/axes`, {
     data: {
       name: 'X',
-      drive: { type: 'screw', lead: 5, nominalDiameter: 16, rootDiameter: 12.9, unsupportedLength: 1050, mounting: 'fixed-supported' },
+      drive: {
+        type: 'screw',
+        lead: 5,
+        nominalDiameter: 16,
+        rootDiameter: 12.9,
+        unsupportedLength: 1050,
+        mounting: 'fixed-supported',
+      },
       motorStepsPerRev: 200,
       microsteps: 16,
       stepsPerMm: 640,

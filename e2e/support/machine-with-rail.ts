@@ -7,7 +7,13 @@ export interface RailSpec {
 }
 
 /** A new machine file made through its dialog, with one rail Y1 (left), left open on the rail's page. */
-export async function newMachineWithRail(page: Page, name: string, rail: RailSpec, workArea = { x: 3000, y: 1500 }, notes?: string) {
+export async function newMachineWithRail(
+  page: Page,
+  name: string,
+  rail: RailSpec,
+  workArea = { x: 3000, y: 1500 },
+  notes?: string,
+) {
   await page.goto('/machines');
   await page.getByRole('button', { name: 'New machine' }).click();
   const dialog = page.getByRole('dialog', { name: 'New machine' });

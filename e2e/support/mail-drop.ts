@@ -3,7 +3,8 @@ import path from 'node:path';
 import { expect } from '@playwright/test';
 
 // The server under test writes each caught message into its data folder (see playwright.config.ts).
-const dropFolder = () => path.join(process.env.RAILWRIGHT_DATA ?? path.resolve(__dirname, '../../.test-data/e2e'), 'mail');
+const dropFolder = () =>
+  path.join(process.env.RAILWRIGHT_DATA ?? path.resolve(__dirname, '../../.test-data/e2e'), 'mail');
 
 /** The set-password link of the newest message to `email` (whose subject matches `subject`, when given) in the local mail drop. */
 export async function linkMailedTo(email: string, subject?: RegExp): Promise<string> {
@@ -35,6 +36,7 @@ function bodyText(raw: string): string {
   const split = raw.search(/\r?\n\r?\n/);
   const headers = raw.slice(0, split);
   const body = raw.slice(split).trim();
-  if (/content-transfer-encoding:\s*base64/i.test(headers)) return Buffer.from(body.replace(/\s+/g, ''), 'base64').toString('utf8');
+  if (/content-transfer-encoding:\s*base64/i.test(headers))
+    return Buffer.from(body.replace(/\s+/g, ''), 'base64').toString('utf8');
   return body.replace(/=\r?\n/g, '').replace(/=3D/g, '=');
 }

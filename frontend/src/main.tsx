@@ -12,7 +12,6 @@ import { createRoot } from 'react-dom/client';
 import { AppProviders } from './app/providers';
 import { AppRouter } from './app/router';
 
-
 createRoot(document.getElementById('root')!).render(
   <StrictMode>
     <AppProviders>

@@ -64,9 +64,12 @@ export function registerBareReads(fastify: FastifyInstance, pool: pg.Pool): void
     const { rows } = await pool.query(MACHINES_SQL, [req.query.workshopId]);
     return rows;
   });
-  fastify.get<{ Params: { id: string }; Querystring: { workshopId?: string } }>('/machines/:id/readiness', async (req, reply) => {
-    const { rows } = await pool.query(READINESS_SQL, [req.query.workshopId, req.params.id]);
-    if (!rows[0]?.machine) return reply.code(404).send({ message: 'No such machine' });
-    return rows[0];
-  });
+  fastify.get<{ Params: { id: string }; Querystring: { workshopId?: string } }>(
+    '/machines/:id/readiness',
+    async (req, reply) => {
+      const { rows } = await pool.query(READINESS_SQL, [req.query.workshopId, req.params.id]);
+      if (!rows[0]?.machine) return reply.code(404).send({ message: 'No such machine' });
+      return rows[0];
+    },
+  );
 }

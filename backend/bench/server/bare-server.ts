@@ -20,7 +20,10 @@ const pool = new pg.Pool({ connectionString: process.env.DATABASE_URL, max: 10 }
 const fastify: FastifyInstance = Fastify({ bodyLimit: 16 * 1024 * 1024 });
 
 /** One transaction with the actor set for the change log, as the product's commands run. */
-async function command<T>(actor: { id: string; name: string; workshopId: string }, work: (c: pg.PoolClient) => Promise<T>): Promise<T> {
+async function command<T>(
+  actor: { id: string; name: string; workshopId: string },
+  work: (c: pg.PoolClient) => Promise<T>,
+): Promise<T> {
   const client = await pool.connect();
   try {
     await client.query('begin');
@@ -45,11 +48,20 @@ const AUDIT_AND_TOUCH = `
     values ($1, $2, $3, $4, $5, $6, $7, $8, $9, clock_timestamp())
   ) update machines set last_activity_at = now() where id = $2`;
 
-const line = (r: ReferenceLineResult) => ({ slope: r.slope, intercept: r.interceptMm, straightness: r.straightnessMm, residuals: r.residualsMm });
+const line = (r: ReferenceLineResult) => ({
+  slope: r.slope,
+  intercept: r.interceptMm,
+  straightness: r.straightnessMm,
+  residuals: r.residualsMm,
+});
 
 // The actor comes in headers (there are no sessions here).
 function actorOf(headers: Record<string, unknown>) {
-  return { id: String(headers['x-actor-id']), name: String(headers['x-actor-name']), workshopId: String(headers['x-workshop-id']) };
+  return {
+    id: String(headers['x-actor-id']),
+    name: String(headers['x-actor-name']),
+    workshopId: String(headers['x-workshop-id']),
+  };
 }
 
 interface SweepBody {
@@ -72,17 +84,61 @@ fastify.post<{ Params: { id: string }; Body: SweepBody }>('/bare/rails/:id/sweep
     const readingsRaw = body.stations.map((s) => s.reading);
     const readingsMm = arrayToMm(readingsRaw, body.readingUnit);
     const fitted = evaluateStraightness({ positionsMm, readingsMm });
-    const result = { leastSquares: line(fitted.leastSquares), minimumZone: line(fitted.minimumZone), endPoint: line(fitted.endPoint) };
-    const { rows: sets } = await c.query('select targets from target_sets where workshop_id = $1 and id = $2', [actor.workshopId, rail.target_set_id]);
+    const result = {
+      leastSquares: line(fitted.leastSquares),
+      minimumZone: line(fitted.minimumZone),
+      endPoint: line(fitted.endPoint),
+    };
+    const { rows: sets } = await c.query('select targets from target_sets where workshop_id = $1 and id = $2', [
+      actor.workshopId,
+      rail.target_set_id,
+    ]);
     const target = (sets[0].targets as Record<string, TargetValue>).railStraightness;
     const status = result.leastSquares.straightness <= targetInBaseUnit(target) ? 'within-target' : 'outside-target';
     const { rows } = await c.query(
       `insert into rail_sweeps (workshop_id, machine_id, rail_id, reading_unit, positions_mm, readings_raw, readings_mm, phase, taken_by, result, status, target, created_by_id)
        values ($1, $2, $3, $4, $5, $6, $7, $8, $9, $10, $11, $12, $13) returning id, taken_at, created_at`,
-      [actor.workshopId, rail.machine_id, rail.id, body.readingUnit, JSON.stringify(positionsMm), JSON.stringify(readingsRaw), JSON.stringify(readingsMm), body.phase, actor.name, JSON.stringify(result), status, JSON.stringify(target), actor.id],
+      [
+        actor.workshopId,
+        rail.machine_id,
+        rail.id,
+        body.readingUnit,
+        JSON.stringify(positionsMm),
+        JSON.stringify(readingsRaw),
+        JSON.stringify(readingsMm),
+        body.phase,
+        actor.name,
+        JSON.stringify(result),
+        status,
+        JSON.stringify(target),
+        actor.id,
+      ],
     );
-    await c.query(AUDIT_AND_TOUCH, [actor.workshopId, rail.machine_id, 'rail-sweep', rows[0].id, 'recorded', `Sweep of rail ${rail.label}`, JSON.stringify({ status }), actor.id, actor.name]);
-    return reply.status(201).send({ id: rows[0].id, railId: rail.id, readingUnit: body.readingUnit, lengthUnit: 'mm', positionsMm, readingsRaw, readingsMm, result, status, target, takenAt: rows[0].taken_at, createdAt: rows[0].created_at });
+    await c.query(AUDIT_AND_TOUCH, [
+      actor.workshopId,
+      rail.machine_id,
+      'rail-sweep',
+      rows[0].id,
+      'recorded',
+      `Sweep of rail ${rail.label}`,
+      JSON.stringify({ status }),
+      actor.id,
+      actor.name,
+    ]);
+    return reply.status(201).send({
+      id: rows[0].id,
+      railId: rail.id,
+      readingUnit: body.readingUnit,
+      lengthUnit: 'mm',
+      positionsMm,
+      readingsRaw,
+      readingsMm,
+      result,
+      status,
+      target,
+      takenAt: rows[0].taken_at,
+      createdAt: rows[0].created_at,
+    });
   });
 });
 
@@ -92,21 +148,29 @@ interface HoleBody {
   writeId: string;
 }
 
-fastify.put<{ Params: { id: string; index: string }; Body: HoleBody }>('/bare/bolt-downs/:id/holes/:index', async (req, reply) => {
-  const actor = actorOf(req.headers);
-  const { reading, fixed, writeId } = req.body;
-  const holeIndex = Number(req.params.index);
-  return command(actor, async (c) => {
-    const { rows: found } = await c.query('select * from bolt_downs where workshop_id = $1 and id = $2', [actor.workshopId, req.params.id]);
-    if (!found.length) return reply.status(404).send({ message: 'no such bolt-down' });
-    const bd = found[0];
-    await c.query('select state from machines where id = $1 for no key update', [bd.machine_id]);
-    const { rows: holes } = await c.query('select * from bolt_down_holes where bolt_down_id = $1 order by hole_index', [bd.id]);
-    const before = holes.find((h) => h.hole_index === holeIndex);
-    const newFix = fixed && !before?.fixed;
-    const keptSeq = fixed && before?.fixed ? before.fix_seq : null;
-    const { rows: written } = await c.query(
-      `with claim as (
+fastify.put<{ Params: { id: string; index: string }; Body: HoleBody }>(
+  '/bare/bolt-downs/:id/holes/:index',
+  async (req, reply) => {
+    const actor = actorOf(req.headers);
+    const { reading, fixed, writeId } = req.body;
+    const holeIndex = Number(req.params.index);
+    return command(actor, async (c) => {
+      const { rows: found } = await c.query('select * from bolt_downs where workshop_id = $1 and id = $2', [
+        actor.workshopId,
+        req.params.id,
+      ]);
+      if (!found.length) return reply.status(404).send({ message: 'no such bolt-down' });
+      const bd = found[0];
+      await c.query('select state from machines where id = $1 for no key update', [bd.machine_id]);
+      const { rows: holes } = await c.query(
+        'select * from bolt_down_holes where bolt_down_id = $1 order by hole_index',
+        [bd.id],
+      );
+      const before = holes.find((h) => h.hole_index === holeIndex);
+      const newFix = fixed && !before?.fixed;
+      const keptSeq = fixed && before?.fixed ? before.fix_seq : null;
+      const { rows: written } = await c.query(
+        `with claim as (
          insert into bolt_down_writes (write_id, workshop_id, bolt_down_id, target) values ($1, $2, $3, $4) on conflict do nothing returning write_id
        ), b as (
          update bolt_downs set fix_counter = fix_counter + $5::int, updated_at = now() where id = $3 and exists (select 1 from claim) returning fix_counter
@@ -117,22 +181,56 @@ fastify.put<{ Params: { id: string; index: string }; Body: HoleBody }>('/bare/bo
          fix_seq = excluded.fix_seq, fixed_at = excluded.fixed_at, fixed_by_id = excluded.fixed_by_id, fixed_by_name = excluded.fixed_by_name,
          last_write_id = excluded.last_write_id, updated_at = excluded.updated_at
        returning *`,
-      [writeId, actor.workshopId, bd.id, `hole:${holeIndex}`, newFix ? 1 : 0, holeIndex, reading, toMm(reading, bd.reading_unit), fixed, keptSeq, fixed ? actor.id : null, fixed ? actor.name : null],
-    );
-    await c.query(AUDIT_AND_TOUCH, [actor.workshopId, bd.machine_id, 'bolt-down', bd.id, 'updated', `Rail: hole ${holeIndex + 1} written`, JSON.stringify({ hole: holeIndex, reading, fixed, writeId }), actor.id, actor.name]);
-    const all = [...holes.filter((h) => h.hole_index !== holeIndex), ...written];
-    const session = boltDownSession(
-      bd.hole_positions_mm,
-      bd.mode,
-      new Map(all.map((h) => [h.hole_index, { readingMm: h.reading_mm, fixed: h.fixed, fixSeq: h.fix_seq }])),
-    );
-    return { id: bd.id, holes: session.holes, nextHole: session.nextHole, fixedCount: session.fixedCount, writeId, repeated: false };
-  });
-});
+        [
+          writeId,
+          actor.workshopId,
+          bd.id,
+          `hole:${holeIndex}`,
+          newFix ? 1 : 0,
+          holeIndex,
+          reading,
+          toMm(reading, bd.reading_unit),
+          fixed,
+          keptSeq,
+          fixed ? actor.id : null,
+          fixed ? actor.name : null,
+        ],
+      );
+      await c.query(AUDIT_AND_TOUCH, [
+        actor.workshopId,
+        bd.machine_id,
+        'bolt-down',
+        bd.id,
+        'updated',
+        `Rail: hole ${holeIndex + 1} written`,
+        JSON.stringify({ hole: holeIndex, reading, fixed, writeId }),
+        actor.id,
+        actor.name,
+      ]);
+      const all = [...holes.filter((h) => h.hole_index !== holeIndex), ...written];
+      const session = boltDownSession(
+        bd.hole_positions_mm,
+        bd.mode,
+        new Map(all.map((h) => [h.hole_index, { readingMm: h.reading_mm, fixed: h.fixed, fixSeq: h.fix_seq }])),
+      );
+      return {
+        id: bd.id,
+        holes: session.holes,
+        nextHole: session.nextHole,
+        fixedCount: session.fixedCount,
+        writeId,
+        repeated: false,
+      };
+    });
+  },
+);
 
 fastify.post<{ Body: { positions: number[]; readings: number[] } }>('/bare/calc/straightness', async (req) => {
   const r = evaluateStraightness({ positionsMm: req.body.positions, readingsMm: req.body.readings });
-  return { leastSquares: { straightness: r.leastSquares.straightnessMm }, minimumZone: { straightness: r.minimumZone.straightnessMm } };
+  return {
+    leastSquares: { straightness: r.leastSquares.straightnessMm },
+    minimumZone: { straightness: r.minimumZone.straightnessMm },
+  };
 });
 
 fastify.get('/bare/health', async () => {
@@ -143,11 +241,20 @@ fastify.get('/bare/health', async () => {
 // The read routes of the same baseline, written beside the product's reads.
 const readsFile = fileURLToPath(new URL('./bare-reads.js', import.meta.url));
 if (existsSync(readsFile)) {
-  const { registerBareReads } = (await import(readsFile)) as { registerBareReads: (f: FastifyInstance, p: pg.Pool) => void };
+  const { registerBareReads } = (await import(readsFile)) as {
+    registerBareReads: (f: FastifyInstance, p: pg.Pool) => void;
+  };
   registerBareReads(fastify, pool);
 }
 
 await fastify.listen({ host: '127.0.0.1', port: Number(process.env.BARE_PORT ?? 3599) });
 for (const signal of ['SIGINT', 'SIGTERM'] as const) {
-  process.once(signal, () => void fastify.close().then(() => pool.end()).then(() => process.exit(0)));
+  process.once(
+    signal,
+    () =>
+      void fastify
+        .close()
+        .then(() => pool.end())
+        .then(() => process.exit(0)),
+  );
 }

@@ -4,7 +4,11 @@ import { hashPassword } from '../../src/auth/password.js';
 import type { BenchContext } from './bench-types.js';
 
 /** The bench's own workshop and owner, written as the database's owner, then signed in through the product. */
-export async function seedBenchWorkshop(productUrl: string, bareUrl: string, ownerDatabaseUrl: string): Promise<BenchContext & { userId: string; userName: string }> {
+export async function seedBenchWorkshop(
+  productUrl: string,
+  bareUrl: string,
+  ownerDatabaseUrl: string,
+): Promise<BenchContext & { userId: string; userName: string }> {
   const tag = randomUUID().slice(0, 8);
   const email = `bench.${tag}@bench.example.com`;
   const password = `bench password ${tag} ${randomUUID()}`;
@@ -14,7 +18,11 @@ export async function seedBenchWorkshop(productUrl: string, bareUrl: string, own
   let workshopId: string;
   let userId: string;
   try {
-    workshopId = (await client.query<{ id: string }>('insert into workshops (name) values ($1) returning id', [`Bench workshop ${tag}`])).rows[0].id;
+    workshopId = (
+      await client.query<{ id: string }>('insert into workshops (name) values ($1) returning id', [
+        `Bench workshop ${tag}`,
+      ])
+    ).rows[0].id;
     userId = (
       await client.query<{ id: string }>(
         `insert into users (workshop_id, email, name, role, password_hash) values ($1, $2, $3, 'owner', $4) returning id`,
@@ -24,7 +32,11 @@ export async function seedBenchWorkshop(productUrl: string, bareUrl: string, own
   } finally {
     await client.end();
   }
-  const res = await fetch(`${productUrl}/api/auth/login`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ email, password }) });
+  const res = await fetch(`${productUrl}/api/auth/login`, {
+    method: 'POST',
+    headers: { 'content-type': 'application/json' },
+    body: JSON.stringify({ email, password }),
+  });
   if (!res.ok) throw new Error(`bench sign-in failed: ${res.status} ${await res.text()}`);
   const cookie = (res.headers.get('set-cookie') ?? '').split(';')[0];
   return { productUrl, bareUrl, ownerDatabaseUrl, cookie, workshopId, userId, userName };
@@ -34,7 +46,11 @@ export async function seedBenchWorkshop(productUrl: string, bareUrl: string, own
 export async function productJson<T>(ctx: BenchContext, method: string, path: string, body?: unknown): Promise<T> {
   const res = await fetch(`${ctx.productUrl}${path}`, {
     method,
-    headers: { cookie: ctx.cookie, accept: 'application/json', ...(body === undefined ? {} : { 'content-type': 'application/json' }) },
+    headers: {
+      cookie: ctx.cookie,
+      accept: 'application/json',
+      ...(body === undefined ? {} : { 'content-type': 'application/json' }),
+    },
     body: body === undefined ? undefined : JSON.stringify(body),
   });
   if (!res.ok) throw new Error(`${method} ${path}: ${res.status} ${await res.text()}`);

@@ -33,7 +33,11 @@ const SIGNED_IN = 'src/app/routes/signed-in-layout.tsx';
 export const PAGES: Page[] = [
   { name: 'sign-in page', modules: [], goalKb: 150 },
   { name: 'machines list', modules: [SIGNED_IN, 'src/app/routes/machines.tsx'], goalKb: 350 },
-  { name: 'machine file (readiness tab)', modules: [SIGNED_IN, 'src/app/routes/machine-file.tsx', 'src/features/approvals/components/readiness-board.tsx'], goalKb: 350 },
+  {
+    name: 'machine file (readiness tab)',
+    modules: [SIGNED_IN, 'src/app/routes/machine-file.tsx', 'src/features/approvals/components/readiness-board.tsx'],
+    goalKb: 350,
+  },
 ];
 
 /** frontend/dist, or FRONTEND_DIST when the build lives elsewhere (a private build). */
@@ -49,7 +53,8 @@ export function frontendDist(): string {
 
 export function readManifest(dist: string): Manifest {
   const file = path.join(dist, '.vite', 'manifest.json');
-  if (!existsSync(file)) throw new Error(`frontend-sizes: ${file} is missing; build the frontend first (npm run build -w frontend)`);
+  if (!existsSync(file))
+    throw new Error(`frontend-sizes: ${file} is missing; build the frontend first (npm run build -w frontend)`);
   return JSON.parse(readFileSync(file, 'utf8')) as Manifest;
 }
 
@@ -90,7 +95,9 @@ export function pageWeights(dist = frontendDist()): PageWeight[] {
   const entry = Object.keys(manifest).filter((k) => manifest[k].isEntry);
   if (entry.length === 0) throw new Error('frontend-sizes: the manifest names no entry');
   return PAGES.map((page) => {
-    const files = [...filesFor(manifest, [...entry, ...page.modules])].filter((f) => f.endsWith('.js') || f.endsWith('.css'));
+    const files = [...filesFor(manifest, [...entry, ...page.modules])].filter(
+      (f) => f.endsWith('.js') || f.endsWith('.css'),
+    );
     return {
       name: page.name,
       files,

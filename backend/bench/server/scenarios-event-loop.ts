@@ -20,14 +20,21 @@ export async function eventLoopDuringLargeBodies(ctx: BenchContext): Promise<Ben
   // The monitor writes one line per 100 ms window: "<epoch ms> <longest delay, ms>".
   const longestSince = async (from: number) => {
     await new Promise((resolve) => setTimeout(resolve, 250));
-    const windows = readFileSync(file, 'utf8').trim().split('\n').map((line) => line.split(' ').map(Number));
+    const windows = readFileSync(file, 'utf8')
+      .trim()
+      .split('\n')
+      .map((line) => line.split(' ').map(Number));
     return Math.max(0, ...windows.filter(([at]) => at > from).map(([, ms]) => ms));
   };
   const sweep = randomRailSweep(FIT_POINTS, 7);
   const body = JSON.stringify({ positions: sweep.positionsMm, readings: sweep.readingsMm });
   // A first fit starts the worker thread and warms the code paths; it is not counted.
   const fit = async () => {
-    const res = await fetch(`${ctx.productUrl}/api/calc/straightness?residuals=true`, { method: 'POST', headers: { 'content-type': 'application/json', 'accept-encoding': 'gzip', cookie: ctx.cookie }, body });
+    const res = await fetch(`${ctx.productUrl}/api/calc/straightness?residuals=true`, {
+      method: 'POST',
+      headers: { 'content-type': 'application/json', 'accept-encoding': 'gzip', cookie: ctx.cookie },
+      body,
+    });
     if (!res.ok) throw new Error(`200 000-point fit with residuals: ${res.status} ${await res.text()}`);
     await res.arrayBuffer();
   };

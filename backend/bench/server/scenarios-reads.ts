@@ -13,7 +13,12 @@ interface AutocannonResult {
   non2xx: number;
   errors: number;
 }
-type Autocannon = (opts: { url: string; connections: number; duration: number; headers?: Record<string, string> }) => Promise<AutocannonResult>;
+type Autocannon = (opts: {
+  url: string;
+  connections: number;
+  duration: number;
+  headers?: Record<string, string>;
+}) => Promise<AutocannonResult>;
 
 const CONNECTIONS = 10;
 const DURATION_S = 5;
@@ -30,7 +35,11 @@ async function loadAutocannon(): Promise<Autocannon> {
 async function json<T>(ctx: BenchContext, method: string, path: string, body?: unknown): Promise<T> {
   const res = await fetch(`${ctx.productUrl}${path}`, {
     method,
-    headers: { cookie: ctx.cookie, accept: 'application/json', ...(body === undefined ? {} : { 'content-type': 'application/json' }) },
+    headers: {
+      cookie: ctx.cookie,
+      accept: 'application/json',
+      ...(body === undefined ? {} : { 'content-type': 'application/json' }),
+    },
     body: body === undefined ? undefined : JSON.stringify(body),
   });
   if (!res.ok) throw new Error(`${method} ${path}: ${res.status} ${await res.text()}`);
@@ -38,19 +47,43 @@ async function json<T>(ctx: BenchContext, method: string, path: string, body?: u
 }
 
 const positions = [0, 100, 200, 300, 400, 500, 600, 700, 800, 900];
-const sweep = (offset: number) => ({ readingUnit: 'mm', lengthUnit: 'mm', phase: 'as-left', datum: 'Frame face', stations: positions.map((position, i) => ({ position, reading: offset + (i % 3) * 0.001 })) });
+const sweep = (offset: number) => ({
+  readingUnit: 'mm',
+  lengthUnit: 'mm',
+  phase: 'as-left',
+  datum: 'Frame face',
+  stations: positions.map((position, i) => ({ position, reading: offset + (i % 3) * 0.001 })),
+});
 
 /** A machine as a builder leaves it mid-commissioning: two partner rails swept once, one screw axis. */
 async function benchMachine(ctx: BenchContext): Promise<{ machineId: string; railId: string }> {
-  const machine = await json<{ id: string }>(ctx, 'POST', '/api/machines', { name: `Bench reads ${Date.now()}`, kind: 'plasma', workArea: { x: 900, y: 600 } });
+  const machine = await json<{ id: string }>(ctx, 'POST', '/api/machines', {
+    name: `Bench reads ${Date.now()}`,
+    kind: 'plasma',
+    workArea: { x: 900, y: 600 },
+  });
   const rail = { axis: 'Y', lengthUnit: 'mm', length: 1000, profileSize: 20, holePitch: 60, firstHole: 20 };
-  const a = await json<{ id: string }>(ctx, 'POST', `/api/machines/${machine.id}/rails`, { ...rail, label: 'Y1 (left)' });
-  const b = await json<{ id: string }>(ctx, 'POST', `/api/machines/${machine.id}/rails`, { ...rail, label: 'Y2 (right)', partnerRailId: a.id });
+  const a = await json<{ id: string }>(ctx, 'POST', `/api/machines/${machine.id}/rails`, {
+    ...rail,
+    label: 'Y1 (left)',
+  });
+  const b = await json<{ id: string }>(ctx, 'POST', `/api/machines/${machine.id}/rails`, {
+    ...rail,
+    label: 'Y2 (right)',
+    partnerRailId: a.id,
+  });
   await json(ctx, 'POST', `/api/rails/${a.id}/sweeps`, sweep(0));
   await json(ctx, 'POST', `/api/rails/${b.id}/sweeps`, sweep(0.01));
   await json(ctx, 'POST', `/api/machines/${machine.id}/axes`, {
     name: 'X',
-    drive: { type: 'screw', lead: 5, nominalDiameter: 16, rootDiameter: 12.9, unsupportedLength: 1000, mounting: 'fixed-supported' },
+    drive: {
+      type: 'screw',
+      lead: 5,
+      nominalDiameter: 16,
+      rootDiameter: 12.9,
+      unsupportedLength: 1000,
+      mounting: 'fixed-supported',
+    },
     motorStepsPerRev: 200,
     microsteps: 16,
     stepsPerMm: 640,
@@ -65,7 +98,9 @@ async function growSweeps(ownerUrl: string, railId: string, total: number): Prom
   const client = new pg.Client({ connectionString: ownerUrl });
   await client.connect();
   try {
-    const { rows } = await client.query<{ n: string }>('select count(*) as n from rail_sweeps where rail_id = $1', [railId]);
+    const { rows } = await client.query<{ n: string }>('select count(*) as n from rail_sweeps where rail_id = $1', [
+      railId,
+    ]);
     const missing = total - (Number(rows[0].n) - 1);
     if (missing <= 0) return;
     await client.query('begin');
@@ -92,7 +127,12 @@ export async function readScenarios(ctx: BenchContext): Promise<BenchRow[]> {
   const machines = (await json<unknown[]>(ctx, 'GET', '/api/machines')).length;
 
   const run = async (url: string, product: boolean, duration = DURATION_S) => {
-    const r = await autocannon({ url, connections: CONNECTIONS, duration, headers: product ? { cookie: ctx.cookie, accept: 'application/json' } : { accept: 'application/json' } });
+    const r = await autocannon({
+      url,
+      connections: CONNECTIONS,
+      duration,
+      headers: product ? { cookie: ctx.cookie, accept: 'application/json' } : { accept: 'application/json' },
+    });
     if (r.non2xx || r.errors) throw new Error(`${url}: ${r.non2xx} non-2xx answers, ${r.errors} errors`);
     return r;
   };
@@ -101,13 +141,33 @@ export async function readScenarios(ctx: BenchContext): Promise<BenchRow[]> {
     const bare = await run(`${ctx.bareUrl}${barePath}`, false);
     const product = await run(`${ctx.productUrl}${productPath}`, true);
     const ratio = product.latency.average / bare.latency.average;
-    rows.push({ name: `${name}: mean latency at ${CONNECTIONS} connections`, value: round(product.latency.average), baseline: round(bare.latency.average), unit: 'ms', ratio: round(ratio), goal: `≤ ${WITHIN_BARE}× bare`, met: ratio <= WITHIN_BARE });
-    rows.push({ name: `${name}: throughput at ${CONNECTIONS} connections`, value: round(product.requests.average), baseline: round(bare.requests.average), unit: 'req/s', ratio: round(product.requests.average / bare.requests.average), goal: `≥ 1/${WITHIN_BARE} of bare`, met: product.requests.average * WITHIN_BARE >= bare.requests.average });
+    rows.push({
+      name: `${name}: mean latency at ${CONNECTIONS} connections`,
+      value: round(product.latency.average),
+      baseline: round(bare.latency.average),
+      unit: 'ms',
+      ratio: round(ratio),
+      goal: `≤ ${WITHIN_BARE}× bare`,
+      met: ratio <= WITHIN_BARE,
+    });
+    rows.push({
+      name: `${name}: throughput at ${CONNECTIONS} connections`,
+      value: round(product.requests.average),
+      baseline: round(bare.requests.average),
+      unit: 'req/s',
+      ratio: round(product.requests.average / bare.requests.average),
+      goal: `≥ 1/${WITHIN_BARE} of bare`,
+      met: product.requests.average * WITHIN_BARE >= bare.requests.average,
+    });
   };
 
   const ws = `workshopId=${ctx.workshopId}`;
   await pair(`GET /api/machines (${machines} machines)`, '/api/machines', `/machines?${ws}`);
-  await pair('GET /api/machines/:id/readiness', `/api/machines/${machineId}/readiness`, `/machines/${machineId}/readiness?${ws}`);
+  await pair(
+    'GET /api/machines/:id/readiness',
+    `/api/machines/${machineId}/readiness`,
+    `/machines/${machineId}/readiness?${ws}`,
+  );
 
   // The growth curve: one rail's history grows; neither read may grow with it.
   const curve: Record<'list' | 'readiness', number[]> = { list: [], readiness: [] };
@@ -118,8 +178,16 @@ export async function readScenarios(ctx: BenchContext): Promise<BenchRow[]> {
     const board = await run(`${ctx.productUrl}/api/machines/${machineId}/readiness`, true, CURVE_DURATION_S);
     curve.list.push(list.latency.average);
     curve.readiness.push(board.latency.average);
-    rows.push({ name: `GET /api/machines with ${n} sweeps on one rail: mean latency`, value: round(list.latency.average), unit: 'ms' });
-    rows.push({ name: `GET /api/machines/:id/readiness with ${n} sweeps on one rail: mean latency`, value: round(board.latency.average), unit: 'ms' });
+    rows.push({
+      name: `GET /api/machines with ${n} sweeps on one rail: mean latency`,
+      value: round(list.latency.average),
+      unit: 'ms',
+    });
+    rows.push({
+      name: `GET /api/machines/:id/readiness with ${n} sweeps on one rail: mean latency`,
+      value: round(board.latency.average),
+      unit: 'ms',
+    });
   }
   for (const key of ['list', 'readiness'] as const) {
     const growth = curve[key][sizes.length - 1] / curve[key][0];

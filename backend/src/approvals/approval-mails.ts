@@ -3,7 +3,14 @@ import type { ApprovalSnapshot } from './snapshot.js';
 
 const day = (d: Date) => d.toISOString().slice(0, 10);
 
-export function approvalRequestedMail(i: { machineName: string; workshopName: string; requestedBy: string; url: string; checkCount: number; waivedCount: number }) {
+export function approvalRequestedMail(i: {
+  machineName: string;
+  workshopName: string;
+  requestedBy: string;
+  url: string;
+  checkCount: number;
+  waivedCount: number;
+}) {
   return {
     subject: `Approval requested: ${i.machineName}`,
     text: [
@@ -16,14 +23,23 @@ export function approvalRequestedMail(i: { machineName: string; workshopName: st
   };
 }
 
-export function approvedMail(i: { snapshot: ApprovalSnapshot; approvedBy: string; approvedAt: Date; recordHash: string; recheckDueAt: Date; url: string }) {
+export function approvedMail(i: {
+  snapshot: ApprovalSnapshot;
+  approvedBy: string;
+  approvedAt: Date;
+  recordHash: string;
+  recheckDueAt: Date;
+  url: string;
+}) {
   const waived = i.snapshot.checks.filter((c) => c.status === 'waived');
   return {
     subject: `Ready to cut: ${i.snapshot.machine.name} approved`,
     text: [
       `${i.approvedBy} approved ${i.snapshot.machine.name} (${i.snapshot.workshop.name}) as ready to cut on ${i.approvedAt.toISOString().replace('T', ' ').slice(0, 16)} UTC.`,
       '',
-      waived.length ? `Checks: ${i.snapshot.checks.length}, of which ${waived.length} waived:` : `Checks: ${i.snapshot.checks.length}, all within target.`,
+      waived.length
+        ? `Checks: ${i.snapshot.checks.length}, of which ${waived.length} waived:`
+        : `Checks: ${i.snapshot.checks.length}, all within target.`,
       ...waived.map((c) => `  Waived: ${KIND_LABELS[c.kind]} \u2014 ${c.subject}: ${c.waiver?.reason ?? ''}`),
       `Re-check due: ${day(i.recheckDueAt)}.`,
       `Record hash (SHA-256): ${i.recordHash}`,
@@ -34,7 +50,13 @@ export function approvedMail(i: { snapshot: ApprovalSnapshot; approvedBy: string
   };
 }
 
-export function recheckDueMail(i: { machineName: string; workshopName: string; approvedAt: Date; recheckDueAt: Date; url: string }) {
+export function recheckDueMail(i: {
+  machineName: string;
+  workshopName: string;
+  approvedAt: Date;
+  recheckDueAt: Date;
+  url: string;
+}) {
   return {
     subject: `Re-check due: ${i.machineName}`,
     text: [
@@ -46,7 +68,14 @@ export function recheckDueMail(i: { machineName: string; workshopName: string; a
   };
 }
 
-export function reopenedMail(i: { machineName: string; workshopName: string; reopenedBy: string; reason: string; approvedAt: Date; url: string }) {
+export function reopenedMail(i: {
+  machineName: string;
+  workshopName: string;
+  reopenedBy: string;
+  reason: string;
+  approvedAt: Date;
+  url: string;
+}) {
   return {
     subject: `Reopened: ${i.machineName} is no longer approved as ready to cut`,
     text: [

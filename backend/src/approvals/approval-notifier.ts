@@ -42,7 +42,9 @@ export class ApprovalNotifier {
       recheckDueAt: approval.recheckDueAt,
       url: this.links.machine(approval.machineId, 'readiness'),
     });
-    const check = approval.verificationToken ? `\n\nAnyone holding the certificate can check its signature, without an account:\n${this.links.verification(approval.verificationToken)}` : '';
+    const check = approval.verificationToken
+      ? `\n\nAnyone holding the certificate can check its signature, without an account:\n${this.links.verification(approval.verificationToken)}`
+      : '';
     await this.mail.send({
       workshopId: actor.workshopId,
       to: everyone.map((m) => m.email),
@@ -53,7 +55,9 @@ export class ApprovalNotifier {
   }
 
   async recheckDue(approval: ApprovalRow, machineName: string) {
-    const people = (await this.repo.members(approval.workshopId)).filter((m) => m.role === 'owner' || m.role === 'technician');
+    const people = (await this.repo.members(approval.workshopId)).filter(
+      (m) => m.role === 'owner' || m.role === 'technician',
+    );
     const { subject, text } = recheckDueMail({
       machineName,
       workshopName: approval.snapshot.workshop.name,
@@ -66,8 +70,17 @@ export class ApprovalNotifier {
 
   /** Everyone who recorded for, requested or signed the approval, and the workshop's owners. */
   async reopened(actor: SessionUser, approval: ApprovalRow, machineName: string, reason: string) {
-    const people = (await this.repo.members(actor.workshopId)).filter((m) => m.role === 'owner' || m.role === 'technician' || m.role === 'builder' || m.id === approval.approvedById);
-    const { subject, text } = reopenedMail({ machineName, workshopName: actor.workshopName, reopenedBy: actor.name, reason, approvedAt: approval.approvedAt, url: this.links.machine(approval.machineId, 'readiness') });
+    const people = (await this.repo.members(actor.workshopId)).filter(
+      (m) => m.role === 'owner' || m.role === 'technician' || m.role === 'builder' || m.id === approval.approvedById,
+    );
+    const { subject, text } = reopenedMail({
+      machineName,
+      workshopName: actor.workshopName,
+      reopenedBy: actor.name,
+      reason,
+      approvedAt: approval.approvedAt,
+      url: this.links.machine(approval.machineId, 'readiness'),
+    });
     await this.mail.send({ workshopId: actor.workshopId, to: people.map((p) => p.email), subject, text });
   }
 }

@@ -20,7 +20,8 @@ export interface ApprovalResponse {
 }
 
 /** A standing approval whose re-check date has passed, at `now`. */
-export const recheckDue = (a: Pick<ApprovalRow, 'endedAt' | 'recheckDueAt'>, now = new Date()): boolean => !a.endedAt && a.recheckDueAt.getTime() <= now.getTime();
+export const recheckDue = (a: Pick<ApprovalRow, 'endedAt' | 'recheckDueAt'>, now = new Date()): boolean =>
+  !a.endedAt && a.recheckDueAt.getTime() <= now.getTime();
 
 export const toApprovalResponse = (a: ApprovalRow): ApprovalResponse => ({
   id: a.id,
@@ -35,7 +36,11 @@ export const toApprovalResponse = (a: ApprovalRow): ApprovalResponse => ({
   reopened: a.endedAt ? { at: a.endedAt.toISOString(), by: a.endedByName, reason: a.endReason } : null,
 });
 
-export const toRequestResponse = (r: RequestRow) => ({ id: r.id, requestedAt: r.requestedAt.toISOString(), requestedBy: r.requestedByName });
+export const toRequestResponse = (r: RequestRow) => ({
+  id: r.id,
+  requestedAt: r.requestedAt.toISOString(),
+  requestedBy: r.requestedByName,
+});
 
 /** A check on the board; the chart series stay in the snapshot, not in this light response. */
 export function toCheckResponse(c: BoardCheck) {

@@ -27,7 +27,12 @@ export class ApprovalsController {
 
   @Post('checks/:checkId/waiver')
   @Roles('owner')
-  waive(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string, @Param('checkId') checkId: string, @Body() dto: WaiverDto) {
+  waive(
+    @CurrentUser() user: SessionUser,
+    @Param('id', ParseUUIDPipe) id: string,
+    @Param('checkId') checkId: string,
+    @Body() dto: WaiverDto,
+  ) {
     return this.approvals.waive(user, id, checkId, dto);
   }
 
@@ -55,7 +60,11 @@ export class ApprovalsController {
   }
 
   @Get('approvals/:approvalId/verification')
-  verify(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string, @Param('approvalId', ParseUUIDPipe) approvalId: string) {
+  verify(
+    @CurrentUser() user: SessionUser,
+    @Param('id', ParseUUIDPipe) id: string,
+    @Param('approvalId', ParseUUIDPipe) approvalId: string,
+  ) {
     return this.certificates.verify(user, id, approvalId);
   }
 
@@ -66,7 +75,12 @@ export class ApprovalsController {
 
   @Get('certificate.pdf')
   @ApiProduces('application/pdf')
-  async certificate(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string, @Query() query: CertificateQueryDto, @Res({ passthrough: true }) reply: FastifyReply) {
+  async certificate(
+    @CurrentUser() user: SessionUser,
+    @Param('id', ParseUUIDPipe) id: string,
+    @Query() query: CertificateQueryDto,
+    @Res({ passthrough: true }) reply: FastifyReply,
+  ) {
     const { pdf, filename } = await this.certificates.forMachine(user, id, query.approval);
     reply.header('Content-Type', 'application/pdf');
     reply.header('Content-Disposition', contentDisposition(filename));

@@ -1,7 +1,16 @@
 import { Inject, Injectable } from '@nestjs/common';
 import { and, asc, desc, eq, inArray, isNull, lte, sql } from 'drizzle-orm';
 import { DRIZZLE, type Database } from '../database/database.tokens.js';
-import { approvalRequests, approvals, axes, machines, rails, users, waivers, workshops } from '../database/schema/index.js';
+import {
+  approvalRequests,
+  approvals,
+  axes,
+  machines,
+  rails,
+  users,
+  waivers,
+  workshops,
+} from '../database/schema/index.js';
 import { APPROVED_STATES } from '../database/schema/machines.js';
 
 export type WaiverRow = typeof waivers.$inferSelect;
@@ -29,7 +38,13 @@ export class ApprovalsRepository {
     const [row] = await this.db
       .select()
       .from(approvalRequests)
-      .where(and(eq(approvalRequests.workshopId, workshopId), eq(approvalRequests.machineId, machineId), eq(approvalRequests.status, 'open')))
+      .where(
+        and(
+          eq(approvalRequests.workshopId, workshopId),
+          eq(approvalRequests.machineId, machineId),
+          eq(approvalRequests.status, 'open'),
+        ),
+      )
       .orderBy(desc(approvalRequests.requestedAt))
       .limit(1);
     return row ?? null;
@@ -44,7 +59,13 @@ export class ApprovalsRepository {
     await this.db
       .update(approvalRequests)
       .set({ status: 'closed' })
-      .where(and(eq(approvalRequests.workshopId, workshopId), eq(approvalRequests.machineId, machineId), eq(approvalRequests.status, 'open')));
+      .where(
+        and(
+          eq(approvalRequests.workshopId, workshopId),
+          eq(approvalRequests.machineId, machineId),
+          eq(approvalRequests.status, 'open'),
+        ),
+      );
   }
 
   /**
@@ -72,12 +93,18 @@ export class ApprovalsRepository {
     return row ?? null;
   }
 
-  async endApproval(id: string, values: Pick<typeof approvals.$inferInsert, 'endedAt' | 'endedById' | 'endedByName' | 'endReason'>): Promise<ApprovalRow> {
+  async endApproval(
+    id: string,
+    values: Pick<typeof approvals.$inferInsert, 'endedAt' | 'endedById' | 'endedByName' | 'endReason'>,
+  ): Promise<ApprovalRow> {
     const [row] = await this.db.update(approvals).set(values).where(eq(approvals.id, id)).returning();
     return row;
   }
 
-  async setSignature(id: string, values: Pick<typeof approvals.$inferInsert, 'signature' | 'signingKeyId' | 'signedContent'>): Promise<ApprovalRow> {
+  async setSignature(
+    id: string,
+    values: Pick<typeof approvals.$inferInsert, 'signature' | 'signingKeyId' | 'signedContent'>,
+  ): Promise<ApprovalRow> {
     const [row] = await this.db.update(approvals).set(values).where(eq(approvals.id, id)).returning();
     return row;
   }
@@ -88,7 +115,10 @@ export class ApprovalsRepository {
       this.db.select({ id: rails.id }).from(rails).where(eq(rails.machineId, machineId)),
       this.db.select({ id: axes.id }).from(axes).where(eq(axes.machineId, machineId)),
     ]);
-    return [...railRows.map((r) => ({ recordType: 'rail' as const, recordId: r.id })), ...axisRows.map((a) => ({ recordType: 'axis' as const, recordId: a.id }))];
+    return [
+      ...railRows.map((r) => ({ recordType: 'rail' as const, recordId: r.id })),
+      ...axisRows.map((a) => ({ recordType: 'axis' as const, recordId: a.id })),
+    ];
   }
 
   /** The standing approval if there is one, else the newest (times are kept to the second, so two may tie). */
@@ -106,7 +136,9 @@ export class ApprovalsRepository {
     const [row] = await this.db
       .select()
       .from(approvals)
-      .where(and(eq(approvals.workshopId, workshopId), eq(approvals.machineId, machineId), eq(approvals.id, approvalId)));
+      .where(
+        and(eq(approvals.workshopId, workshopId), eq(approvals.machineId, machineId), eq(approvals.id, approvalId)),
+      );
     return row ?? null;
   }
 
@@ -127,7 +159,14 @@ export class ApprovalsRepository {
       .select({ approval: approvals, machineName: machines.name })
       .from(approvals)
       .innerJoin(machines, eq(machines.id, approvals.machineId))
-      .where(and(isNull(approvals.endedAt), isNull(approvals.recheckNotifiedAt), lte(approvals.recheckDueAt, now), inArray(machines.state, [...APPROVED_STATES])))
+      .where(
+        and(
+          isNull(approvals.endedAt),
+          isNull(approvals.recheckNotifiedAt),
+          lte(approvals.recheckDueAt, now),
+          inArray(machines.state, [...APPROVED_STATES]),
+        ),
+      )
       .orderBy(asc(approvals.recheckDueAt));
   }
 
@@ -136,7 +175,14 @@ export class ApprovalsRepository {
     const rows = await this.db
       .update(approvals)
       .set({ recheckNotifiedAt: now })
-      .where(and(eq(approvals.id, approvalId), isNull(approvals.recheckNotifiedAt), isNull(approvals.endedAt), lte(approvals.recheckDueAt, now)))
+      .where(
+        and(
+          eq(approvals.id, approvalId),
+          isNull(approvals.recheckNotifiedAt),
+          isNull(approvals.endedAt),
+          lte(approvals.recheckDueAt, now),
+        ),
+      )
       .returning({ id: approvals.id });
     return rows.length > 0;
   }

@@ -45,7 +45,10 @@ export class ApprovalsService implements OnModuleInit {
     // Another workshop's machine is a 404 from the board's first statement, which also gives the
     // state the machine reads as now (re-check due once the date has passed; nothing is written).
     const b = await this.board.board(actor, machineId);
-    const [approval, request] = await Promise.all([this.repo.latestApproval(actor.workshopId, machineId), this.repo.openRequest(actor.workshopId, machineId)]);
+    const [approval, request] = await Promise.all([
+      this.repo.latestApproval(actor.workshopId, machineId),
+      this.repo.openRequest(actor.workshopId, machineId),
+    ]);
     return {
       machineId,
       state: b.machine.state,
@@ -54,7 +57,10 @@ export class ApprovalsService implements OnModuleInit {
       counts: countsOf(b.checks),
       approval: approval ? toApprovalResponse(approval) : null,
       request: request ? toRequestResponse(request) : null,
-      recheckDueAt: approval && ['ready-to-cut', 'recheck-due'].includes(b.machine.state) ? approval.recheckDueAt.toISOString() : null,
+      recheckDueAt:
+        approval && ['ready-to-cut', 'recheck-due'].includes(b.machine.state)
+          ? approval.recheckDueAt.toISOString()
+          : null,
       targetSet: b.targetSet,
       defaultStatement: defaultStatement(b.machine.name, b.targetSet.name),
       cautions: cautionsFor(b.machine.kind).map(({ title, text }) => ({ title, text })),
@@ -67,11 +73,22 @@ export class ApprovalsService implements OnModuleInit {
     const check = b.checks.find((c) => c.key === checkKey);
     if (!check) throw new BadRequestException([`checkId "${checkKey}" is not a required check of this machine`]);
     if (check.kind === 'safety-walk') {
-      throw new ConflictException('The safety walk cannot be waived: put right what was answered "no" and answer it again (items that do not apply can be answered "not applicable")');
+      throw new ConflictException(
+        'The safety walk cannot be waived: put right what was answered "no" and answer it again (items that do not apply can be answered "not applicable")',
+      );
     }
-    if (check.measuredStatus === 'within-target') throw new ConflictException(`${check.subject}: ${KIND_LABELS[check.kind].toLowerCase()} is within target and needs no waiver`);
-    if (check.status === 'waived') throw new ConflictException(`${check.subject}: ${KIND_LABELS[check.kind].toLowerCase()} is already waived for its current record`);
-    if (b.machine.state === 'awaiting-approval') throw new ConflictException('The machine is awaiting approval: waive before requesting it, or record the check again');
+    if (check.measuredStatus === 'within-target')
+      throw new ConflictException(
+        `${check.subject}: ${KIND_LABELS[check.kind].toLowerCase()} is within target and needs no waiver`,
+      );
+    if (check.status === 'waived')
+      throw new ConflictException(
+        `${check.subject}: ${KIND_LABELS[check.kind].toLowerCase()} is already waived for its current record`,
+      );
+    if (b.machine.state === 'awaiting-approval')
+      throw new ConflictException(
+        'The machine is awaiting approval: waive before requesting it, or record the check again',
+      );
     const row = await this.repo.insertWaiver({
       workshopId: actor.workshopId,
       machineId,
@@ -90,23 +107,39 @@ export class ApprovalsService implements OnModuleInit {
       summary: `Waived the ${KIND_LABELS[check.kind].toLowerCase()} (${check.subject}): ${dto.reason}`,
       changes: { check: checkKey, status: { from: check.measuredStatus, to: 'waived' }, reason: dto.reason },
     });
-    return { id: row.id, checkKey, reason: row.reason, waivedBy: row.waivedByName, waivedAt: row.waivedAt.toISOString(), recordId: row.recordId };
+    return {
+      id: row.id,
+      checkKey,
+      reason: row.reason,
+      waivedBy: row.waivedByName,
+      waivedAt: row.waivedAt.toISOString(),
+      recordId: row.recordId,
+    };
   }
 
   async requestApproval(actor: SessionUser, machineId: string) {
     const machine = await this.machines.lockForCommand(actor, machineId);
     refuseUnlessState(machine.state, ['being-built', 'reopened'], 'request approval');
     const b = await this.board.board(actor, machineId);
-    if (!b.checks.length) throw new ConflictException({ message: 'No required checks are reported for this machine yet', blocking: [] });
+    if (!b.checks.length)
+      throw new ConflictException({ message: 'No required checks are reported for this machine yet', blocking: [] });
     if (b.blocking.length) {
       throw new ConflictException({
         message: `${b.blocking.length} check${b.blocking.length === 1 ? '' : 's'} must be within target or waived first: ${b.blocking.map((c) => `${KIND_LABELS[c.kind]} (${c.subject})`).join(', ')}`,
         blocking: b.blocking.map(toBlocking),
       });
     }
-    const request = await this.repo.insertRequest({ workshopId: actor.workshopId, machineId, requestedById: actor.id, requestedByName: actor.name });
+    const request = await this.repo.insertRequest({
+      workshopId: actor.workshopId,
+      machineId,
+      requestedById: actor.id,
+      requestedByName: actor.name,
+    });
     await this.changeState(actor, machineId, machine.state, 'awaiting-approval', `${actor.name} requested approval`);
-    this.mail.later(() => this.notifier.approvalRequested(actor, b.machine.name, machineId, b.checks), 'approval-requested mail');
+    this.mail.later(
+      () => this.notifier.approvalRequested(actor, b.machine.name, machineId, b.checks),
+      'approval-requested mail',
+    );
     return { ...toRequestResponse(request), state: 'awaiting-approval' as const };
   }
 
@@ -142,12 +175,17 @@ export class ApprovalsService implements OnModuleInit {
       targetValues: targetSet.targets,
       verificationToken: randomBytes(24).toString('base64url'),
     });
-    if (!inserted) throw new ConflictException({ message: 'Someone else has just approved or closed this request', blocking: [] });
+    if (!inserted)
+      throw new ConflictException({ message: 'Someone else has just approved or closed this request', blocking: [] });
     await this.records.lock(inserted.id, [
       { recordType: 'machine', recordId: machineId },
       ...(await this.repo.partsOf(machineId)),
-      ...snapshot.checks.filter((c) => c.recordType && c.recordId).map((c) => ({ recordType: c.recordType!, recordId: c.recordId! })),
-      ...snapshot.checks.filter((c) => c.waiver).map((c) => ({ recordType: 'waiver' as const, recordId: c.waiver!.id })),
+      ...snapshot.checks
+        .filter((c) => c.recordType && c.recordId)
+        .map((c) => ({ recordType: c.recordType!, recordId: c.recordId! })),
+      ...snapshot.checks
+        .filter((c) => c.waiver)
+        .map((c) => ({ recordType: 'waiver' as const, recordId: c.waiver!.id })),
     ]);
     const row = await this.signatures.seal(inserted);
     await this.records.audit(actor, {
@@ -156,12 +194,22 @@ export class ApprovalsService implements OnModuleInit {
       recordId: row.id,
       action: 'approved',
       summary: `${actor.name} approved the machine as ready to cut (record hash ${row.recordHash.slice(0, 12)}…, re-check due ${row.recheckDueAt.toISOString().slice(0, 10)})`,
-      changes: { recordHash: row.recordHash, checks: snapshot.checks.length, waived: snapshot.checks.filter((c) => c.status === 'waived').length },
+      changes: {
+        recordHash: row.recordHash,
+        checks: snapshot.checks.length,
+        waived: snapshot.checks.filter((c) => c.status === 'waived').length,
+      },
     });
     await this.changeState(actor, machineId, 'awaiting-approval', 'ready-to-cut', 'Approved as ready to cut');
     this.mail.later(() => this.notifier.approved(actor, row), 'approved mail');
     const response = toApprovalResponse(row);
-    return { id: response.id, approvedAt: response.approvedAt, approvedBy: response.approvedBy, recordHash: response.recordHash, recheckDueAt: response.recheckDueAt };
+    return {
+      id: response.id,
+      approvedAt: response.approvedAt,
+      approvedBy: response.approvedBy,
+      recordHash: response.recordHash,
+      recheckDueAt: response.recheckDueAt,
+    };
   }
 
   /**
@@ -173,16 +221,31 @@ export class ApprovalsService implements OnModuleInit {
     refuseUnlessState(machine.state, APPROVED_STATES, 'reopen');
     const approval = await this.repo.standingApproval(actor.workshopId, machineId);
     if (!approval) throw new ConflictException({ message: 'No approval of this machine stands', blocking: [] });
-    const ended = await this.repo.endApproval(approval.id, { endedAt: new Date(), endedById: actor.id, endedByName: actor.name, endReason: dto.reason });
+    const ended = await this.repo.endApproval(approval.id, {
+      endedAt: new Date(),
+      endedById: actor.id,
+      endedByName: actor.name,
+      endReason: dto.reason,
+    });
     await this.records.audit(actor, {
       machineId,
       recordType: 'approval',
       recordId: approval.id,
       action: 'reopened',
       summary: `${actor.name} reopened the machine for changes: ${dto.reason}`,
-      changes: { reason: dto.reason, approvedAt: approval.approvedAt.toISOString(), approvedBy: approval.approvedByName },
+      changes: {
+        reason: dto.reason,
+        approvedAt: approval.approvedAt.toISOString(),
+        approvedBy: approval.approvedByName,
+      },
     });
-    await this.changeState(actor, machineId, machine.state, 'reopened', `Reopened for changes: the approval of ${approval.approvedAt.toISOString().slice(0, 10)} no longer stands`);
+    await this.changeState(
+      actor,
+      machineId,
+      machine.state,
+      'reopened',
+      `Reopened for changes: the approval of ${approval.approvedAt.toISOString().slice(0, 10)} no longer stands`,
+    );
     this.mail.later(() => this.notifier.reopened(actor, approval, machine.name, dto.reason), 'reopened mail');
     return { state: 'reopened' as const, approval: toApprovalResponse(ended) };
   }
@@ -193,14 +256,35 @@ export class ApprovalsService implements OnModuleInit {
     const machine = await this.machines.lockForCommand(actor, event.machineId);
     if (machine.state !== 'awaiting-approval') return;
     await this.repo.closeOpenRequests(actor.workshopId, machine.id);
-    const to: MachineState = (await this.repo.latestApproval(actor.workshopId, machine.id)) ? 'reopened' : 'being-built';
+    const to: MachineState = (await this.repo.latestApproval(actor.workshopId, machine.id))
+      ? 'reopened'
+      : 'being-built';
     const what = KIND_LABELS[event.kind];
-    await this.changeState(actor, machine.id, machine.state, to, `${what} recorded outside target: the request for approval is closed`);
+    await this.changeState(
+      actor,
+      machine.id,
+      machine.state,
+      to,
+      `${what} recorded outside target: the request for approval is closed`,
+    );
   }
 
-  private async changeState(actor: SessionUser, machineId: string, from: MachineState, to: MachineState, summary: string) {
+  private async changeState(
+    actor: SessionUser,
+    machineId: string,
+    from: MachineState,
+    to: MachineState,
+    summary: string,
+  ) {
     await this.machines.setState(actor.workshopId, machineId, to);
-    await this.records.audit(actor, { machineId, recordType: 'machine', recordId: machineId, action: 'state-changed', summary, changes: { state: { from, to } } });
+    await this.records.audit(actor, {
+      machineId,
+      recordType: 'machine',
+      recordId: machineId,
+      action: 'state-changed',
+      summary,
+      changes: { state: { from, to } },
+    });
   }
 }
 
@@ -221,10 +305,19 @@ function refuseUnlessState(state: MachineState, allowed: readonly MachineState[]
       : APPROVED_STATES.includes(state)
         ? ' The owner reopens it with a reason first.'
         : '';
-  throw new ConflictException({ message: `Cannot ${what}: the machine is ${STATE_WORDS[state]}.${hint}`, blocking: [] });
+  throw new ConflictException({
+    message: `Cannot ${what}: the machine is ${STATE_WORDS[state]}.${hint}`,
+    blocking: [],
+  });
 }
 
 function countsOf(checks: { status: string }[]) {
   const n = (s: string) => checks.filter((c) => c.status === s).length;
-  return { total: checks.length, within: n('within-target'), outside: n('outside-target'), waived: n('waived'), notStarted: n('not-started') };
+  return {
+    total: checks.length,
+    within: n('within-target'),
+    outside: n('outside-target'),
+    waived: n('waived'),
+    notStarted: n('not-started'),
+  };
 }

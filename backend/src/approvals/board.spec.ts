@@ -33,7 +33,11 @@ const waiver = (over: Partial<WaiverRow>): WaiverRow => ({
 describe('boardChecks', () => {
   it('waives a check only for the record the waiver was given on', () => {
     const [same] = boardChecks([check({})], [waiver({})]);
-    expect(same).toMatchObject({ status: 'waived', measuredStatus: 'outside-target', waiver: { reason: 'Good enough for sheet work.', by: 'Owner' } });
+    expect(same).toMatchObject({
+      status: 'waived',
+      measuredStatus: 'outside-target',
+      waiver: { reason: 'Good enough for sheet work.', by: 'Owner' },
+    });
     const [other] = boardChecks([check({ recordId: '22222222-2222-4222-8222-222222222222' })], [waiver({})]);
     expect(other).toMatchObject({ status: 'outside-target', waiver: null });
   });
@@ -46,16 +50,31 @@ describe('boardChecks', () => {
 
   it('ignores waivers on checks within target, and blocks only not-started and outside-target ones', () => {
     const checks = boardChecks(
-      [check({ key: 'a', status: 'within-target' }), check({ key: 'b', status: 'not-started' }), check({ key: 'c' }), check({ key: 'd' })],
+      [
+        check({ key: 'a', status: 'within-target' }),
+        check({ key: 'b', status: 'not-started' }),
+        check({ key: 'c' }),
+        check({ key: 'd' }),
+      ],
       [waiver({ checkKey: 'a' }), waiver({ checkKey: 'd' })],
     );
-    expect(checks.map((c) => [c.key, c.status])).toEqual([['a', 'within-target'], ['b', 'not-started'], ['c', 'outside-target'], ['d', 'waived']]);
+    expect(checks.map((c) => [c.key, c.status])).toEqual([
+      ['a', 'within-target'],
+      ['b', 'not-started'],
+      ['c', 'outside-target'],
+      ['d', 'waived'],
+    ]);
     expect(blockingOf(checks).map((c) => c.key)).toEqual(['b', 'c']);
   });
 
   it('orders checks by kind as the board reads (rails first, safety walk last), then subject', () => {
     const checks = boardChecks(
-      [check({ key: 's', kind: 'safety-walk', subject: 'Machine' }), check({ key: 'p2', kind: 'positioning', subject: 'Axis Y' }), check({ key: 'p1', kind: 'positioning', subject: 'Axis X' }), check({ key: 'r', subject: 'Rail X' })],
+      [
+        check({ key: 's', kind: 'safety-walk', subject: 'Machine' }),
+        check({ key: 'p2', kind: 'positioning', subject: 'Axis Y' }),
+        check({ key: 'p1', kind: 'positioning', subject: 'Axis X' }),
+        check({ key: 'r', subject: 'Rail X' }),
+      ],
       [],
     );
     expect(checks.map((c) => c.key)).toEqual(['r', 'p1', 'p2', 's']);

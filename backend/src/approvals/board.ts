@@ -34,13 +34,22 @@ export function boardChecks(checks: ReadinessCheck[], waivers: WaiverRow[]): Boa
         ...(c.series ? { series: c.series } : {}),
       };
     })
-    .sort((a, b) => KIND_ORDER.indexOf(a.kind) - KIND_ORDER.indexOf(b.kind) || a.subject.localeCompare(b.subject) || a.key.localeCompare(b.key));
+    .sort(
+      (a, b) =>
+        KIND_ORDER.indexOf(a.kind) - KIND_ORDER.indexOf(b.kind) ||
+        a.subject.localeCompare(b.subject) ||
+        a.key.localeCompare(b.key),
+    );
 }
 
 /** Checks that stop a request or an approval: not started or outside target, and not waived. */
-export const blockingOf = (checks: BoardCheck[]) => checks.filter((c) => c.status === 'not-started' || c.status === 'outside-target');
+export const blockingOf = (checks: BoardCheck[]) =>
+  checks.filter((c) => c.status === 'not-started' || c.status === 'outside-target');
 
-export const KIND_LABELS = Object.fromEntries(CHECK_KIND_NAMES.map((k) => [k, CHECK_KINDS[k].label])) as Record<CheckKind, string>;
+export const KIND_LABELS = Object.fromEntries(CHECK_KIND_NAMES.map((k) => [k, CHECK_KINDS[k].label])) as Record<
+  CheckKind,
+  string
+>;
 
 export const STATUS_LABELS: Record<BoardCheck['status'], string> = {
   'not-started': 'Not started',

@@ -3,7 +3,9 @@ import { canonicalJson, sha256Hex } from './canonical-json.js';
 
 describe('canonicalJson', () => {
   it('sorts keys at every level and drops undefined members', () => {
-    expect(canonicalJson({ b: 1, a: { d: [1, { z: 1, y: 2 }], c: undefined } })).toBe('{"a":{"d":[1,{"y":2,"z":1}]},"b":1}');
+    expect(canonicalJson({ b: 1, a: { d: [1, { z: 1, y: 2 }], c: undefined } })).toBe(
+      '{"a":{"d":[1,{"y":2,"z":1}]},"b":1}',
+    );
   });
 
   it('gives the same text whatever order the object was built in', () => {

@@ -28,13 +28,19 @@ export class DriftService {
     if (!approval) return { approval: null, rows: [] };
     const approved = new Map(approval.snapshot.checks.map((c) => [c.key, c]));
     const latest = new Map(b.checks.map((c) => [c.key, c]));
-    const keys = [...approval.snapshot.checks.map((c) => c.key), ...b.checks.map((c) => c.key).filter((k) => !approved.has(k))];
+    const keys = [
+      ...approval.snapshot.checks.map((c) => c.key),
+      ...b.checks.map((c) => c.key).filter((k) => !approved.has(k)),
+    ];
     const rows = keys.map((key) => {
       const a = approved.get(key);
       const l = latest.get(key);
       const ref = l ?? a!;
       const sameRecord = !!a && !!l && a.recordId === l.recordId;
-      const change = a?.result && l?.result && a.result.unit === l.result.unit && !sameRecord ? round(l.result.value - a.result.value) : null;
+      const change =
+        a?.result && l?.result && a.result.unit === l.result.unit && !sameRecord
+          ? round(l.result.value - a.result.value)
+          : null;
       return {
         key,
         kind: ref.kind,
@@ -50,7 +56,12 @@ export class DriftService {
       };
     });
     return {
-      approval: { id: approval.id, approvedAt: approval.approvedAt.toISOString(), approvedBy: approval.approvedByName, recordHash: approval.recordHash },
+      approval: {
+        id: approval.id,
+        approvedAt: approval.approvedAt.toISOString(),
+        approvedBy: approval.approvedByName,
+        recordHash: approval.recordHash,
+      },
       rows,
     };
   }

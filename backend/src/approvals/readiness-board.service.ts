@@ -22,13 +22,24 @@ export class ReadinessBoardService {
     private readonly repo: ApprovalsRepository,
   ) {}
 
-  async board(actor: SessionUser | { workshopId: string }, machineId: string, options: { series: boolean } = { series: false }) {
-    const { machine, checks, blocking, targetSet } = await this.readiness.evaluate(actor.workshopId, machineId, options);
+  async board(
+    actor: SessionUser | { workshopId: string },
+    machineId: string,
+    options: { series: boolean } = { series: false },
+  ) {
+    const { machine, checks, blocking, targetSet } = await this.readiness.evaluate(
+      actor.workshopId,
+      machineId,
+      options,
+    );
     return { machine: machine as BoardMachine, checks, blocking, targetSet };
   }
 
   /** The exact data an approval keeps and the certificate is drawn from. */
-  async snapshot(actor: SessionUser, machineId: string): Promise<{ snapshot: ApprovalSnapshot; blocking: BoardCheck[] }> {
+  async snapshot(
+    actor: SessionUser,
+    machineId: string,
+  ): Promise<{ snapshot: ApprovalSnapshot; blocking: BoardCheck[] }> {
     const b = await this.board(actor, machineId, { series: true });
     const full = await this.machines.get(actor, machineId);
     return {

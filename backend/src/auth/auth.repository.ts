@@ -37,7 +37,9 @@ export class AuthRepository {
   }
 
   /** Any account with this address, active or not: a failed sign-in to it is kept in its workshop's history. */
-  async findAccountByEmail(email: string): Promise<{ id: string; name: string; workshopId: string; active: boolean } | null> {
+  async findAccountByEmail(
+    email: string,
+  ): Promise<{ id: string; name: string; workshopId: string; active: boolean } | null> {
     const [row] = await this.db
       .select({ id: users.id, name: users.name, workshopId: users.workshopId, active: users.active })
       .from(users)

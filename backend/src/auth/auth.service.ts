@@ -7,8 +7,7 @@ import { verifyPassword } from './password.js';
 import type { SessionUser } from './session-user.js';
 
 // Compared against when the e-mail is unknown, so both failures take the same time.
-const DUMMY_HASH =
-  'scrypt$32768$8$1$AAAAAAAAAAAAAAAAAAAAAA==$AAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAA=';
+const DUMMY_HASH = 'scrypt$32768$8$1$AAAAAAAAAAAAAAAAAAAAAA==$AAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAA=';
 
 @Injectable()
 export class AuthService {
@@ -28,7 +27,14 @@ export class AuthService {
       return null;
     }
     const { passwordHash: _omit, ...user } = found;
-    await this.kept(() => this.records.audit(user, { recordType: 'sign-in', recordId: user.id, action: 'signed-in', summary: `${user.name} signed in` }));
+    await this.kept(() =>
+      this.records.audit(user, {
+        recordType: 'sign-in',
+        recordId: user.id,
+        action: 'signed-in',
+        summary: `${user.name} signed in`,
+      }),
+    );
     return user;
   }
 
@@ -59,7 +65,12 @@ export class AuthService {
     await this.kept(() =>
       this.records.audit(
         { id: null, name: `Unknown (from address ${address})`, workshopId: account.workshopId },
-        { recordType: 'sign-in', recordId: account.id, action: 'sign-in-failed', summary: `Failed sign-in to ${account.name}'s account (${why})` },
+        {
+          recordType: 'sign-in',
+          recordId: account.id,
+          action: 'sign-in-failed',
+          summary: `Failed sign-in to ${account.name}'s account (${why})`,
+        },
       ),
     );
   }

@@ -28,7 +28,8 @@ export class LoginBodyGuard implements CanActivate {
     try {
       await this.throttle.check(dto.email, req.ip);
     } catch (err) {
-      if (err instanceof SignInThrottled) ctx.switchToHttp().getResponse<FastifyReply>().header('retry-after', String(err.retryAfterSeconds));
+      if (err instanceof SignInThrottled)
+        ctx.switchToHttp().getResponse<FastifyReply>().header('retry-after', String(err.retryAfterSeconds));
       throw err;
     }
     return true;

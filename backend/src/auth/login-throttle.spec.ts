@@ -54,7 +54,10 @@ describe('SignInThrottle', () => {
     let n = 0;
     while (t < 3600) {
       n++;
-      t += n < ACCOUNT_POLICY.free ? 0 : Math.min(ACCOUNT_POLICY.maxDelaySeconds, ACCOUNT_POLICY.firstDelaySeconds * 2 ** (n - ACCOUNT_POLICY.free));
+      t +=
+        n < ACCOUNT_POLICY.free
+          ? 0
+          : Math.min(ACCOUNT_POLICY.maxDelaySeconds, ACCOUNT_POLICY.firstDelaySeconds * 2 ** (n - ACCOUNT_POLICY.free));
     }
     expect(n).toBeLessThan(100);
   });

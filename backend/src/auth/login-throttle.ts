@@ -2,19 +2,30 @@ import { HttpException, HttpStatus, Injectable, Logger } from '@nestjs/common';
 import { SignInAttemptsRepository, type AttemptPolicy } from './sign-in-attempts.repository.js';
 
 /** Per account: five tries, then a wait from 30 s doubling up to 15 minutes (ASVS 2.2.1: well under 100 failures an hour). */
-export const ACCOUNT_POLICY: AttemptPolicy = { free: 5, firstDelaySeconds: 30, maxDelaySeconds: 15 * 60, quietResetSeconds: 3600 };
+export const ACCOUNT_POLICY: AttemptPolicy = {
+  free: 5,
+  firstDelaySeconds: 30,
+  maxDelaySeconds: 15 * 60,
+  quietResetSeconds: 3600,
+};
 /**
  * Per address: many people may sign in from behind one address (a workshop's router), so the
  * address only slows down — 30 tries, then a wait from 2 s doubling up to 30 s — and never
  * locks out the others behind it.
  */
-export const ADDRESS_POLICY: AttemptPolicy = { free: 30, firstDelaySeconds: 2, maxDelaySeconds: 30, quietResetSeconds: 3600 };
+export const ADDRESS_POLICY: AttemptPolicy = {
+  free: 30,
+  firstDelaySeconds: 2,
+  maxDelaySeconds: 30,
+  quietResetSeconds: 3600,
+};
 
 const PRUNE_EVERY = 200;
 
 export class SignInThrottled extends HttpException {
   constructor(readonly retryAfterSeconds: number) {
-    const wait = retryAfterSeconds >= 60 ? `${Math.ceil(retryAfterSeconds / 60)} minutes` : `${retryAfterSeconds} seconds`;
+    const wait =
+      retryAfterSeconds >= 60 ? `${Math.ceil(retryAfterSeconds / 60)} minutes` : `${retryAfterSeconds} seconds`;
     super(
       { statusCode: 429, message: `Too many failed sign-ins. Try again in ${wait}.`, retryAfterSeconds },
       HttpStatus.TOO_MANY_REQUESTS,

@@ -15,7 +15,10 @@ export class PasswordLinksController {
   @HttpCode(202)
   async request(@Body() dto: ForgotPasswordDto, @Req() req: FastifyRequest) {
     await this.links.requestByEmail(dto.email, req.ip);
-    return { message: 'If an active account uses this address, a link to choose a new password is on its way. It works once, for 72 hours.' };
+    return {
+      message:
+        'If an active account uses this address, a link to choose a new password is on its way. It works once, for 72 hours.',
+    };
   }
 
   @Public()

@@ -1,5 +1,11 @@
 /** The mails about a person's own password; the link goes to that person only, never to anyone else. */
-export function passwordResetMail(input: { name: string; workshopName: string; resetBy: string; url: string; hours: number }) {
+export function passwordResetMail(input: {
+  name: string;
+  workshopName: string;
+  resetBy: string;
+  url: string;
+  hours: number;
+}) {
   const subject = `Your Railwright password for ${input.workshopName} was reset`;
   const text = [
     `Hello ${input.name},`,

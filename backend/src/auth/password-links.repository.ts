@@ -14,7 +14,14 @@ export class PasswordLinksRepository {
 
   async findByHash(tokenHash: string) {
     const [row] = await this.db
-      .select({ link: passwordLinks, email: users.email, name: users.name, active: users.active, workshopId: users.workshopId, workshopName: workshops.name })
+      .select({
+        link: passwordLinks,
+        email: users.email,
+        name: users.name,
+        active: users.active,
+        workshopId: users.workshopId,
+        workshopName: workshops.name,
+      })
       .from(passwordLinks)
       .innerJoin(users, eq(users.id, passwordLinks.userId))
       .innerJoin(workshops, eq(workshops.id, users.workshopId))
@@ -26,7 +33,11 @@ export class PasswordLinksRepository {
    * Marks the link used and sets the password in one step; false when someone used it first.
    * The change log names the person as the one who changed it (nobody is signed in on this page).
    */
-  async consume(linkId: string, person: { id: string; name: string; workshopId: string }, passwordHash: string): Promise<boolean> {
+  async consume(
+    linkId: string,
+    person: { id: string; name: string; workshopId: string },
+    passwordHash: string,
+  ): Promise<boolean> {
     const userId = person.id;
     return this.db.transaction(async (tx) => {
       await tx.execute(
@@ -39,8 +50,14 @@ export class PasswordLinksRepository {
         .returning({ id: passwordLinks.id });
       if (!used.length) return false;
       // Any other link still open for this person stops working too.
-      await tx.update(passwordLinks).set({ usedAt: new Date() }).where(and(eq(passwordLinks.userId, userId), isNull(passwordLinks.usedAt)));
-      await tx.update(users).set({ passwordHash, passwordPending: false, updatedAt: new Date() }).where(eq(users.id, userId));
+      await tx
+        .update(passwordLinks)
+        .set({ usedAt: new Date() })
+        .where(and(eq(passwordLinks.userId, userId), isNull(passwordLinks.usedAt)));
+      await tx
+        .update(users)
+        .set({ passwordHash, passwordPending: false, updatedAt: new Date() })
+        .where(eq(users.id, userId));
       return true;
     });
   }

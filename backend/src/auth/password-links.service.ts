@@ -39,22 +39,48 @@ export class PasswordLinksService {
       await this.transactions.outside(() => this.throttle.check(key, address));
     } catch (err) {
       if (!(err instanceof SignInThrottled)) throw err;
-      const wait = err.retryAfterSeconds >= 60 ? `${Math.ceil(err.retryAfterSeconds / 60)} minutes` : `${err.retryAfterSeconds} seconds`;
-      throw new HttpException({ statusCode: 429, message: `Too many requests for a password link. Try again in ${wait}.`, retryAfterSeconds: err.retryAfterSeconds }, HttpStatus.TOO_MANY_REQUESTS);
+      const wait =
+        err.retryAfterSeconds >= 60
+          ? `${Math.ceil(err.retryAfterSeconds / 60)} minutes`
+          : `${err.retryAfterSeconds} seconds`;
+      throw new HttpException(
+        {
+          statusCode: 429,
+          message: `Too many requests for a password link. Try again in ${wait}.`,
+          retryAfterSeconds: err.retryAfterSeconds,
+        },
+        HttpStatus.TOO_MANY_REQUESTS,
+      );
     }
     const account = await this.accounts.findActiveByEmail(email);
     if (!account) return;
     const link = await this.create(account.id, 'reset');
     await this.records.audit(
       { id: null, name: account.name, workshopId: account.workshopId },
-      { recordType: 'password', recordId: account.id, action: 'password-link-requested', summary: `A link to choose a new password was e-mailed to ${account.name} (asked for on the sign-in page)` },
+      {
+        recordType: 'password',
+        recordId: account.id,
+        action: 'password-link-requested',
+        summary: `A link to choose a new password was e-mailed to ${account.name} (asked for on the sign-in page)`,
+      },
     );
-    const { subject, text } = passwordForgottenMail({ name: account.name, workshopName: account.workshopName, url: link.url, hours: LINK_HOURS });
-    this.mail.later(() => this.mail.send({ workshopId: account.workshopId, to: [account.email], subject, text }), 'password link mail');
+    const { subject, text } = passwordForgottenMail({
+      name: account.name,
+      workshopName: account.workshopName,
+      url: link.url,
+      hours: LINK_HOURS,
+    });
+    this.mail.later(
+      () => this.mail.send({ workshopId: account.workshopId, to: [account.email], subject, text }),
+      'password link mail',
+    );
   }
 
   /** A new link for the person; the token itself is returned once, to be mailed, and never stored. */
-  async create(userId: string, purpose: 'invitation' | 'reset' = 'invitation'): Promise<{ url: string; expiresAt: Date }> {
+  async create(
+    userId: string,
+    purpose: 'invitation' | 'reset' = 'invitation',
+  ): Promise<{ url: string; expiresAt: Date }> {
     const token = randomBytes(32).toString('base64url');
     const expiresAt = new Date(Date.now() + LINK_HOURS * 3600_000);
     await this.repo.insert({ userId, tokenHash: hashToken(token), purpose, expiresAt });
@@ -64,7 +90,12 @@ export class PasswordLinksService {
   /** Whom the link is for, so the page can greet them; 404 unknown, 410 used or expired. */
   async inspect(token: string) {
     const found = await this.usable(token);
-    return { email: found.email, name: found.name, workshop: found.workshopName, expiresAt: found.link.expiresAt.toISOString() };
+    return {
+      email: found.email,
+      name: found.name,
+      workshop: found.workshopName,
+      expiresAt: found.link.expiresAt.toISOString(),
+    };
   }
 
   /**
@@ -83,20 +114,30 @@ export class PasswordLinksService {
       recordType: 'password',
       recordId: person.id,
       action: first ? 'first-password-set' : 'password-changed',
-      summary: first ? `${found.name} chose their first password` : `${found.name} chose a new password; every earlier session was signed out`,
+      summary: first
+        ? `${found.name} chose their first password`
+        : `${found.name} chose a new password; every earlier session was signed out`,
     });
     if (!first) {
       const { subject, text } = passwordChangedMail({ name: found.name, workshopName: found.workshopName, at: now });
-      this.mail.later(() => this.mail.send({ workshopId: found.workshopId, to: [found.email], subject, text }), 'password-changed mail');
+      this.mail.later(
+        () => this.mail.send({ workshopId: found.workshopId, to: [found.email], subject, text }),
+        'password-changed mail',
+      );
     }
     return { email: found.email, userId: person.id };
   }
 
   private async usable(token: string) {
     const found = await this.repo.findByHash(hashToken(token));
-    if (!found || !found.active) throw new NotFoundException('This link is not valid. Ask an admin of your workshop for a new one.');
-    if (found.link.usedAt) throw new GoneException('This link has already been used. Sign in, or ask an admin for a new link.');
-    if (found.link.expiresAt.getTime() <= Date.now()) throw new GoneException(`This link has expired (links work for ${LINK_HOURS} hours). Ask an admin for a new one.`);
+    if (!found || !found.active)
+      throw new NotFoundException('This link is not valid. Ask an admin of your workshop for a new one.');
+    if (found.link.usedAt)
+      throw new GoneException('This link has already been used. Sign in, or ask an admin for a new link.');
+    if (found.link.expiresAt.getTime() <= Date.now())
+      throw new GoneException(
+        `This link has expired (links work for ${LINK_HOURS} hours). Ask an admin for a new one.`,
+      );
     return found;
   }
 }

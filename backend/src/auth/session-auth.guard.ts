@@ -29,7 +29,9 @@ export class SessionAuthGuard implements CanActivate {
     const signedInAt: unknown = req.session.get('createdAt');
     if (typeof signedInAt === 'number' && signedInAt < found.sessionsValidFrom.getTime()) {
       await req.session.destroy();
-      throw new UnauthorizedException('Your session has ended (your password was changed or your account was deactivated). Sign in again.');
+      throw new UnauthorizedException(
+        'Your session has ended (your password was changed or your account was deactivated). Sign in again.',
+      );
     }
     const { sessionsValidFrom: _omit, ...user } = found;
     req.user = user;
@@ -44,7 +46,10 @@ export class SessionAuthGuard implements CanActivate {
    * The person the session store read with the session (one statement for both); asked apart only
    * when the session was not read from the store in this request.
    */
-  private async sessionUser(session: { get(key: string): unknown }, userId: string): Promise<(SessionUser & { sessionsValidFrom: Date }) | null> {
+  private async sessionUser(
+    session: { get(key: string): unknown },
+    userId: string,
+  ): Promise<(SessionUser & { sessionsValidFrom: Date }) | null> {
     const loaded = session.get(LOADED_USER) as LoadedSessionUser | false | undefined;
     if (loaded === false) return null;
     if (loaded && loaded.id === userId) {

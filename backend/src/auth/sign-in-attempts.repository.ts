@@ -61,6 +61,8 @@ export class SignInAttemptsRepository {
 
   /** Forgets keys quiet for longer than the reset time, so random e-mails do not pile up. */
   async prune(quietResetSeconds: number): Promise<void> {
-    await this.pool.query(`delete from sign_in_attempts where last_attempt_at < now() - make_interval(secs => $1)`, [quietResetSeconds]);
+    await this.pool.query(`delete from sign_in_attempts where last_attempt_at < now() - make_interval(secs => $1)`, [
+      quietResetSeconds,
+    ]);
   }
 }

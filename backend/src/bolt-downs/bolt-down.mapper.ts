@@ -64,7 +64,9 @@ export interface HoleWriteResponse extends BoltDownResponse {
 }
 
 export function sessionOf(row: BoltDownRow, holes: BoltDownHoleRow[]) {
-  const inputs = new Map<number, SessionHoleInput>(holes.map((h) => [h.holeIndex, { readingMm: h.readingMm, fixed: h.fixed, fixSeq: h.fixSeq }]));
+  const inputs = new Map<number, SessionHoleInput>(
+    holes.map((h) => [h.holeIndex, { readingMm: h.readingMm, fixed: h.fixed, fixSeq: h.fixSeq }]),
+  );
   return boltDownSession(row.holePositionsMm, row.mode, inputs);
 }
 
@@ -73,7 +75,11 @@ const BAND_SLACK_MM = 1e-12;
 
 /** The guide's state, or null when an old stored row holds a position, band or reading that is not a finite number. */
 function readableSession(row: BoltDownRow, holes: BoltDownHoleRow[]) {
-  const readingsOk = holes.every((h) => (h.readingMm === null || Number.isFinite(h.readingMm)) && (h.readingRaw === null || Number.isFinite(h.readingRaw)));
+  const readingsOk = holes.every(
+    (h) =>
+      (h.readingMm === null || Number.isFinite(h.readingMm)) &&
+      (h.readingRaw === null || Number.isFinite(h.readingRaw)),
+  );
   if (!finiteList(row.holePositionsMm) || !Number.isFinite(row.bandMm) || !readingsOk) return null;
   try {
     return sessionOf(row, holes);
@@ -82,7 +88,11 @@ function readableSession(row: BoltDownRow, holes: BoltDownHoleRow[]) {
   }
 }
 
-export function toBoltDownResponse(row: BoltDownRow, holes: BoltDownHoleRow[], rail: BoltDownResponse['rail']): BoltDownResponse {
+export function toBoltDownResponse(
+  row: BoltDownRow,
+  holes: BoltDownHoleRow[],
+  rail: BoltDownResponse['rail'],
+): BoltDownResponse {
   const session = readableSession(row, holes);
   if (!session) {
     return {
@@ -152,5 +162,7 @@ export function toBoltDownResponse(row: BoltDownRow, holes: BoltDownHoleRow[], r
 }
 
 function abandonedOf(row: BoltDownRow): BoltDownResponse['abandoned'] {
-  return row.abandonedAt ? { at: row.abandonedAt.toISOString(), by: row.abandonedByName, reason: row.abandonedReason ?? '' } : null;
+  return row.abandonedAt
+    ? { at: row.abandonedAt.toISOString(), by: row.abandonedByName, reason: row.abandonedReason ?? '' }
+    : null;
 }

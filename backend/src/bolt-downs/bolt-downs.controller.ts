@@ -31,7 +31,12 @@ export class BoltDownsController {
 
   @Put('bolt-downs/:id/holes/:index')
   @Roles(...RECORDERS)
-  recordHole(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string, @Param('index') index: string, @Body() dto: RecordHoleDto) {
+  recordHole(
+    @CurrentUser() user: SessionUser,
+    @Param('id', ParseUUIDPipe) id: string,
+    @Param('index') index: string,
+    @Body() dto: RecordHoleDto,
+  ) {
     return this.boltDowns.recordHole(user, id, index, dto);
   }
 
@@ -46,7 +51,12 @@ export class BoltDownsController {
   /** 201 with the new sweep; 200 with the same one when its id was seen before. */
   @Post('bolt-downs/:id/final-sweep')
   @Roles(...RECORDERS)
-  async finalSweep(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string, @Body() dto: FinalSweepDto, @Res({ passthrough: true }) reply: FastifyReply) {
+  async finalSweep(
+    @CurrentUser() user: SessionUser,
+    @Param('id', ParseUUIDPipe) id: string,
+    @Body() dto: FinalSweepDto,
+    @Res({ passthrough: true }) reply: FastifyReply,
+  ) {
     const { created, boltDown, sweep } = await this.boltDowns.recordFinalSweep(user, id, dto);
     reply.status(created ? 201 : 200);
     return { boltDown, sweep };

@@ -48,7 +48,10 @@ export class BoltDownsRepository {
   }
 
   async find(workshopId: string, id: string): Promise<BoltDownRow | null> {
-    const [row] = await this.db.select().from(boltDowns).where(and(eq(boltDowns.workshopId, workshopId), eq(boltDowns.id, id)));
+    const [row] = await this.db
+      .select()
+      .from(boltDowns)
+      .where(and(eq(boltDowns.workshopId, workshopId), eq(boltDowns.id, id)));
     return row ?? null;
   }
 
@@ -80,11 +83,22 @@ export class BoltDownsRepository {
   }
 
   /** Marks the bolt-down abandoned unless it is finished or abandoned already; returns it as it now stands. */
-  async abandon(workshopId: string, id: string, by: { reason: string; name: string; at: Date }): Promise<BoltDownRow | null> {
+  async abandon(
+    workshopId: string,
+    id: string,
+    by: { reason: string; name: string; at: Date },
+  ): Promise<BoltDownRow | null> {
     const [row] = await this.db
       .update(boltDowns)
       .set({ abandonedAt: by.at, abandonedReason: by.reason, abandonedByName: by.name, updatedAt: by.at })
-      .where(and(eq(boltDowns.workshopId, workshopId), eq(boltDowns.id, id), sql`${boltDowns.finalSweepId} is null`, sql`${boltDowns.abandonedAt} is null`))
+      .where(
+        and(
+          eq(boltDowns.workshopId, workshopId),
+          eq(boltDowns.id, id),
+          sql`${boltDowns.finalSweepId} is null`,
+          sql`${boltDowns.abandonedAt} is null`,
+        ),
+      )
       .returning();
     return row ?? null;
   }
@@ -94,7 +108,14 @@ export class BoltDownsRepository {
     await this.db
       .update(boltDowns)
       .set({ finalSweepId: sweepId, updatedAt: new Date() })
-      .where(and(eq(boltDowns.workshopId, workshopId), eq(boltDowns.id, id), sql`${boltDowns.finalSweepId} is null`, sql`${boltDowns.abandonedAt} is null`));
+      .where(
+        and(
+          eq(boltDowns.workshopId, workshopId),
+          eq(boltDowns.id, id),
+          sql`${boltDowns.finalSweepId} is null`,
+          sql`${boltDowns.abandonedAt} is null`,
+        ),
+      );
     return (await this.find(workshopId, id))?.finalSweepId ?? null;
   }
 
@@ -104,7 +125,11 @@ export class BoltDownsRepository {
       .select({
         row: boltDowns,
         rail: { label: rails.label, axis: rails.axis, lengthMm: rails.lengthMm },
-        seen: { workshopId: boltDownWrites.workshopId, boltDownId: boltDownWrites.boltDownId, target: boltDownWrites.target },
+        seen: {
+          workshopId: boltDownWrites.workshopId,
+          boltDownId: boltDownWrites.boltDownId,
+          target: boltDownWrites.target,
+        },
         locked: sql<boolean>`exists (select 1 from ${recordLocks} where ${recordLocks.recordType} = 'bolt-down' and ${recordLocks.recordId} = ${boltDowns.id})`,
       })
       .from(boltDowns)
@@ -125,7 +150,12 @@ export class BoltDownsRepository {
     const newFix = w.fixed && !w.before?.fixed;
     const kept = w.fixed && w.before?.fixed ? w.before : null;
     const fixedAt = !w.fixed ? null : kept ? kept.fixedAt : w.now;
-    const result = await this.db.execute<{ claimed: number; fix_counter: number | null; hole_id: string | null; fix_seq: number | null }>(sql`
+    const result = await this.db.execute<{
+      claimed: number;
+      fix_counter: number | null;
+      hole_id: string | null;
+      fix_seq: number | null;
+    }>(sql`
       with claim as (
         insert into ${boltDownWrites} (write_id, workshop_id, bolt_down_id, target)
         values (${w.writeId}::uuid, ${workshopId}::uuid, ${boltDownId}::uuid, ${target})

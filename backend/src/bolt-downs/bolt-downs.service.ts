@@ -45,7 +45,12 @@ export class BoltDownsService implements OnModuleInit {
       const row = await this.repo.find(workshopId, id);
       if (!row) return null;
       const rail = await this.rails.findRow({ workshopId }, row.railId);
-      return { machineId: row.machineId, recordType: RECORD_TYPE, recordId: id, label: `Bolt-down of rail ${rail.label}` };
+      return {
+        machineId: row.machineId,
+        recordType: RECORD_TYPE,
+        recordId: id,
+        label: `Bolt-down of rail ${rail.label}`,
+      };
     });
   }
 
@@ -53,7 +58,11 @@ export class BoltDownsService implements OnModuleInit {
     const rail = await this.rails.findRow(actor, railId);
     const unit: LengthUnit = dto.readingUnit ?? 'mm';
     const lengthUnit: LengthUnit = dto.lengthUnit ?? rail.lengthUnit;
-    const positions = holePositions({ lengthMm: rail.lengthMm, pitchMm: rail.holePitchMm, firstHoleOffsetMm: rail.firstHoleMm });
+    const positions = holePositions({
+      lengthMm: rail.lengthMm,
+      pitchMm: rail.holePitchMm,
+      firstHoleOffsetMm: rail.firstHoleMm,
+    });
     const endDistanceMm = railEndDistanceMm(rail);
     const bad = endDistanceProblem(positions, rail.lengthMm, endDistanceMm);
     if (bad) {
@@ -61,7 +70,8 @@ export class BoltDownsService implements OnModuleInit {
         `railId: rail ${rail.label} has a hole at ${+fromMm(bad.positionMm, lengthUnit).toPrecision(10)} ${lengthUnit} ${bad.clearanceMm <= 0 ? 'on or beyond' : 'too near'} its ${bad.end === 'start' ? 'start' : 'far end'} (each hole centre needs ${+fromMm(endDistanceMm, lengthUnit).toPrecision(6)} ${lengthUnit} from both ends); correct the rail's firstHole, holePitch or length first`,
       ]);
     }
-    if (positions.length > MAX_HOLES) throw new BadRequestException([`the rail has ${positions.length} holes; the guide takes at most ${MAX_HOLES}`]);
+    if (positions.length > MAX_HOLES)
+      throw new BadRequestException([`the rail has ${positions.length} holes; the guide takes at most ${MAX_HOLES}`]);
     const bandMm = dto.band !== undefined ? toMm(dto.band, unit) : await this.defaultBandMm(actor, rail);
     const row = await this.repo.insert({
       workshopId: actor.workshopId,
@@ -88,7 +98,10 @@ export class BoltDownsService implements OnModuleInit {
   async listForRail(actor: SessionUser, railId: string): Promise<BoltDownResponse[]> {
     const rail = await this.rails.findRow(actor, railId);
     const rows = await this.repo.listForRail(actor.workshopId, railId);
-    const holes = await this.repo.holesOf(actor.workshopId, rows.map((r) => r.id));
+    const holes = await this.repo.holesOf(
+      actor.workshopId,
+      rows.map((r) => r.id),
+    );
     return rows.map((r) => toBoltDownResponse(r, holes.get(r.id)!, railInfo(rail)));
   }
 
@@ -108,7 +121,10 @@ export class BoltDownsService implements OnModuleInit {
     const { row, rail, seen } = found;
     const holeIndex = parseIndex(indexParam, row.holePositionsMm.length);
     const readingMm = toMm(dto.reading, row.readingUnit);
-    if (Math.abs(readingMm) > MAX_READING_MM) throw new BadRequestException([`reading must be within ±${fromMm(MAX_READING_MM, row.readingUnit)} ${row.readingUnit}`]);
+    if (Math.abs(readingMm) > MAX_READING_MM)
+      throw new BadRequestException([
+        `reading must be within ±${fromMm(MAX_READING_MM, row.readingUnit)} ${row.readingUnit}`,
+      ]);
     // A repeat of a write already applied answers the same, even once the bolt-down is finished.
     if (seen) {
       if (seen.workshopId !== actor.workshopId || seen.boltDownId !== id || seen.target !== `hole:${holeIndex}`) {
@@ -126,15 +142,27 @@ export class BoltDownsService implements OnModuleInit {
     const holes = (await this.repo.holesOf(actor.workshopId, [id])).get(id)!;
     const before = holes.find((h) => h.holeIndex === holeIndex) ?? null;
     const target = sessionOf(row, holes).holes[holeIndex].targetMm;
-    const outcome = await this.repo.writeHole(actor.workshopId, id, { writeId: dto.writeId, holeIndex, readingRaw: dto.reading, readingMm, fixed: dto.fixed, actor, before, now: new Date() });
-    if (outcome.kind === 'id-taken') throw new ConflictException('writeId was already used for another write; make a new one for each write');
+    const outcome = await this.repo.writeHole(actor.workshopId, id, {
+      writeId: dto.writeId,
+      holeIndex,
+      readingRaw: dto.reading,
+      readingMm,
+      fixed: dto.fixed,
+      actor,
+      before,
+      now: new Date(),
+    });
+    if (outcome.kind === 'id-taken')
+      throw new ConflictException('writeId was already used for another write; make a new one for each write');
     if (outcome.kind === 'finished') {
       const now = await this.repo.find(actor.workshopId, id);
       throw now?.abandonedAt ? abandonedConflict(now) : finishedConflict();
     }
-    if (outcome.kind === 'repeat') return { ...(await this.respond(actor, row, rail)), writeId: dto.writeId, repeated: true };
+    if (outcome.kind === 'repeat')
+      return { ...(await this.respond(actor, row, rail)), writeId: dto.writeId, repeated: true };
 
-    const fmt = (mm: number | null) => (mm === null ? 'none yet' : `${signed(fromMm(mm, row.readingUnit))} ${row.readingUnit}`);
+    const fmt = (mm: number | null) =>
+      mm === null ? 'none yet' : `${signed(fromMm(mm, row.readingUnit))} ${row.readingUnit}`;
     const at = `hole ${holeIndex + 1} at ${+fromMm(row.holePositionsMm[holeIndex], row.lengthUnit).toPrecision(10)} ${row.lengthUnit}`;
     const summary = dto.fixed
       ? `Rail ${rail.label}: ${at} fixed at ${signed(dto.reading)} ${row.readingUnit} (aim ${fmt(target)})`
@@ -149,7 +177,9 @@ export class BoltDownsService implements OnModuleInit {
       summary,
       changes: { hole: holeIndex, reading: dto.reading, unit: row.readingUnit, fixed: dto.fixed, writeId: dto.writeId },
     });
-    const written = [...holes.filter((h) => h.holeIndex !== holeIndex), outcome.hole].sort((a, b) => a.holeIndex - b.holeIndex);
+    const written = [...holes.filter((h) => h.holeIndex !== holeIndex), outcome.hole].sort(
+      (a, b) => a.holeIndex - b.holeIndex,
+    );
     const fresh = { ...row, fixCounter: outcome.fixCounter, updatedAt: outcome.hole.updatedAt };
     return { ...toBoltDownResponse(fresh, written, railInfo(rail)), writeId: dto.writeId, repeated: false };
   }
@@ -159,26 +189,38 @@ export class BoltDownsService implements OnModuleInit {
    * result and status are the engine's like any other sweep. The sweep id (dto.id) makes a retry
    * the same save.
    */
-  async recordFinalSweep(actor: SessionUser, id: string, dto: FinalSweepDto): Promise<{ created: boolean; boltDown: BoltDownResponse; sweep: SweepResponse }> {
+  async recordFinalSweep(
+    actor: SessionUser,
+    id: string,
+    dto: FinalSweepDto,
+  ): Promise<{ created: boolean; boltDown: BoltDownResponse; sweep: SweepResponse }> {
     const { row, rail } = await this.load(actor, id);
     await this.machines.lockForChange(actor, row.machineId);
     if (row.finalSweepId) {
       if (dto.id && dto.id === row.finalSweepId) {
-        return { created: false, boltDown: await this.respond(actor, row, rail), sweep: await this.sweeps.get(actor, row.finalSweepId) };
+        return {
+          created: false,
+          boltDown: await this.respond(actor, row, rail),
+          sweep: await this.sweeps.get(actor, row.finalSweepId),
+        };
       }
       throw new ConflictException('This bolt-down already has its final sweep');
     }
     if (row.abandonedAt) throw abandonedConflict(row);
     const session = sessionOf(row, (await this.repo.holesOf(actor.workshopId, [id])).get(id)!);
     if (!session.complete) {
-      throw new ConflictException(`Fix every hole before the final sweep: ${session.fixedCount} of ${row.holePositionsMm.length} holes are fixed`);
+      throw new ConflictException(
+        `Fix every hole before the final sweep: ${session.fixedCount} of ${row.holePositionsMm.length} holes are fixed`,
+      );
     }
     checkStationsAtHoles(dto, row.holePositionsMm);
     const { created, sweep } = await this.sweeps.record(actor, row.railId, dto);
     const linked = await this.repo.linkFinalSweep(actor.workshopId, id, sweep.id);
     if (linked !== sweep.id) {
       const now = await this.repo.find(actor.workshopId, id);
-      throw now?.abandonedAt ? abandonedConflict(now) : new ConflictException('This bolt-down already has its final sweep');
+      throw now?.abandonedAt
+        ? abandonedConflict(now)
+        : new ConflictException('This bolt-down already has its final sweep');
     }
     if (created) {
       await this.records.audit(actor, {
@@ -204,8 +246,13 @@ export class BoltDownsService implements OnModuleInit {
     await this.records.assertEditable(RECORD_TYPE, id, 'This bolt-down');
     const current = (await this.repo.find(actor.workshopId, id))!;
     if (current.abandonedAt) throw abandonedConflict(current);
-    if (current.finalSweepId) throw new ConflictException('This bolt-down is finished and has its final sweep; it cannot be abandoned');
-    const written = await this.repo.abandon(actor.workshopId, id, { reason: dto.reason, name: actor.name, at: new Date() });
+    if (current.finalSweepId)
+      throw new ConflictException('This bolt-down is finished and has its final sweep; it cannot be abandoned');
+    const written = await this.repo.abandon(actor.workshopId, id, {
+      reason: dto.reason,
+      name: actor.name,
+      at: new Date(),
+    });
     if (!written) throw new ConflictException('This bolt-down was finished or abandoned meanwhile; reload to see it');
     const holes = (await this.repo.holesOf(actor.workshopId, [id])).get(id)!;
     await this.records.audit(actor, {
@@ -240,10 +287,15 @@ export class BoltDownsService implements OnModuleInit {
 
 type RailInfo = Pick<RailRow, 'label' | 'axis' | 'lengthMm'>;
 
-const finishedConflict = () => new ConflictException('This bolt-down is finished and has its final sweep; begin a new bolt-down to re-align the rail');
+const finishedConflict = () =>
+  new ConflictException(
+    'This bolt-down is finished and has its final sweep; begin a new bolt-down to re-align the rail',
+  );
 
 const abandonedConflict = (row: BoltDownRow) =>
-  new ConflictException(`This bolt-down was abandoned${row.abandonedByName ? ` by ${row.abandonedByName}` : ''} (${row.abandonedReason ?? 'no reason given'}); begin a new bolt-down to align the rail`);
+  new ConflictException(
+    `This bolt-down was abandoned${row.abandonedByName ? ` by ${row.abandonedByName}` : ''} (${row.abandonedReason ?? 'no reason given'}); begin a new bolt-down to align the rail`,
+  );
 
 function railInfo(rail: RailInfo) {
   return { label: rail.label, axis: rail.axis, lengthMm: rail.lengthMm };
@@ -261,11 +313,22 @@ function checkStationsAtHoles(dto: FinalSweepDto, positionsMm: number[]) {
   const unit = dto.lengthUnit ?? 'mm';
   const stationsMm = dto.stations.map((s) => toMm(s.position, unit));
   const missing = positionsMm.filter((p) => !stationsMm.some((s) => Math.abs(s - p) <= STATION_SLACK_MM));
-  const extra = dto.stations.filter((_, i) => !positionsMm.some((p) => Math.abs(stationsMm[i] - p) <= STATION_SLACK_MM));
+  const extra = dto.stations.filter(
+    (_, i) => !positionsMm.some((p) => Math.abs(stationsMm[i] - p) <= STATION_SLACK_MM),
+  );
   const show = (mm: number) => +fromMm(mm, unit).toPrecision(10);
   const problems: string[] = [];
-  if (missing.length) problems.push(`stations must include every hole: missing ${missing.slice(0, 5).map(show).join(', ')} ${unit}${missing.length > 5 ? ' …' : ''}`);
-  if (extra.length) problems.push(`stations must be at the holes only: ${extra.slice(0, 5).map((s) => s.position).join(', ')} ${unit} is not a hole`);
+  if (missing.length)
+    problems.push(
+      `stations must include every hole: missing ${missing.slice(0, 5).map(show).join(', ')} ${unit}${missing.length > 5 ? ' …' : ''}`,
+    );
+  if (extra.length)
+    problems.push(
+      `stations must be at the holes only: ${extra
+        .slice(0, 5)
+        .map((s) => s.position)
+        .join(', ')} ${unit} is not a hole`,
+    );
   if (problems.length) throw new BadRequestException(problems);
 }
 

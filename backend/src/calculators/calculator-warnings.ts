@@ -14,7 +14,8 @@ export const ISO_MIN_TARGETS = 5;
 
 const sig = (v: number, digits = 4) => String(Number(v.toPrecision(digits)));
 const UNIT_WORDS: Record<LengthUnit, string> = { mm: 'mm', um: 'µm', in: 'in', thou: 'thou' };
-export const inUnit = (mm: number, unit: LengthUnit, digits = 4) => `${sig(fromMm(mm, unit), digits)} ${UNIT_WORDS[unit]}`;
+export const inUnit = (mm: number, unit: LengthUnit, digits = 4) =>
+  `${sig(fromMm(mm, unit), digits)} ${UNIT_WORDS[unit]}`;
 
 /**
  * A corrected steps per mm far from the expected value means the drive's figures are wrong (lead
@@ -22,7 +23,12 @@ export const inUnit = (mm: number, unit: LengthUnit, digits = 4) => `${sig(fromM
  * the axis needs tuning (TRADE.md, "Drives": measured far from calculated usually means a wrong
  * ratio, lead or pulley).
  */
-export function correctionWarning(subject: string, corrected: number, expected: number, expectedLabel: string): ResultWarning | null {
+export function correctionWarning(
+  subject: string,
+  corrected: number,
+  expected: number,
+  expectedLabel: string,
+): ResultWarning | null {
   if (!(expected > 0) || !Number.isFinite(corrected)) return null;
   const off = corrected / expected - 1;
   if (Math.abs(off) <= CORRECTION_WARNING_FRACTION) return null;
@@ -43,7 +49,10 @@ export function positioningWarnings(runsUp: number, runsDown: number, targets: n
     });
   }
   if (targets < ISO_MIN_TARGETS) {
-    out.push({ code: 'few-targets', message: `ISO 230-2 asks for at least ${ISO_MIN_TARGETS} targets along the axis; this run has ${targets}.` });
+    out.push({
+      code: 'few-targets',
+      message: `ISO 230-2 asks for at least ${ISO_MIN_TARGETS} targets along the axis; this run has ${targets}.`,
+    });
   }
   return out;
 }
@@ -65,7 +74,12 @@ export function engineWarnings(list: unknown): ResultWarning[] {
       const code = ENGINE_CODES.find(([re]) => re.test(w))?.[1] ?? 'calculation-note';
       return [{ code, message: sentence(w) }];
     }
-    if (w && typeof w === 'object' && typeof (w as ResultWarning).code === 'string' && typeof (w as ResultWarning).message === 'string') {
+    if (
+      w &&
+      typeof w === 'object' &&
+      typeof (w as ResultWarning).code === 'string' &&
+      typeof (w as ResultWarning).message === 'string'
+    ) {
       return [{ code: (w as ResultWarning).code, message: (w as ResultWarning).message }];
     }
     return [];

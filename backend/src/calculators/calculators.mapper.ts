@@ -11,7 +11,13 @@ import type { TravelEnvelopeResult } from '../engine/travel-envelope.js';
 import type { TravelTrialResult } from '../engine/travel-trial.js';
 import { toMm } from '../engine/units.js';
 import type { ResultWarning } from '../engine/warnings.js';
-import { correctionWarning, engineWarnings, inUnit, mergeWarnings, positioningWarnings } from './calculator-warnings.js';
+import {
+  correctionWarning,
+  engineWarnings,
+  inUnit,
+  mergeWarnings,
+  positioningWarnings,
+} from './calculator-warnings.js';
 import type { UnitFamilies } from './units-of.js';
 
 // Responses of the calculators API. Each echoes the request's lengthUnit and readingUnit, gives
@@ -40,7 +46,11 @@ export const toStraightnessResponse = (r: StraightnessResult, residuals: boolean
   // Centre line of the band; the band is the line ± straightness / 2.
   minimumZone: line(r.minimumZone, residuals),
   endPoint: line(r.endPoint, residuals),
-  ...named({ ...prefixed('leastSquares', LINE_UNITS), ...prefixed('minimumZone', LINE_UNITS), ...prefixed('endPoint', LINE_UNITS) }),
+  ...named({
+    ...prefixed('leastSquares', LINE_UNITS),
+    ...prefixed('minimumZone', LINE_UNITS),
+    ...prefixed('endPoint', LINE_UNITS),
+  }),
   warnings: engineWarnings((r as { warnings?: unknown }).warnings),
 });
 
@@ -66,7 +76,14 @@ const squarenessFields = (r: SquarenessResult) => ({
   correction: r.correctionMm,
   span: r.spanMm,
 });
-const SQUARENESS_UNITS = { outOfSquareDeg: '°', outOfSquareArcsec: '″', mmPerMetre: 'mm/m', diagonalDifference: 'mm', correction: 'mm', span: 'mm' };
+const SQUARENESS_UNITS = {
+  outOfSquareDeg: '°',
+  outOfSquareArcsec: '″',
+  mmPerMetre: 'mm/m',
+  diagonalDifference: 'mm',
+  correction: 'mm',
+  span: 'mm',
+};
 
 /** Without a span the correction is worked out over side X, which is rarely where the gantry is moved. */
 function spanWarning(r: SquarenessResult, u: UnitFamilies): ResultWarning {
@@ -85,14 +102,28 @@ export const toSquarenessResponse = (r: SquarenessResult, u: UnitFamilies, spanA
 
 export const toFlatnessResponse = (r: FlatnessResult, residuals: boolean, u: UnitFamilies) => ({
   ...echo(u),
-  leastSquares: { a: r.a, b: r.b, c: r.cMm, flatness: r.flatnessMm, ...(residuals ? { residuals: r.residualsMm } : {}) },
+  leastSquares: {
+    a: r.a,
+    b: r.b,
+    c: r.cMm,
+    flatness: r.flatnessMm,
+    ...(residuals ? { residuals: r.residualsMm } : {}),
+  },
   tilt: {
     xMmPerMetre: r.tiltXMmPerMetre,
     yMmPerMetre: r.tiltYMmPerMetre,
     mmPerMetre: r.tiltMmPerMetre,
     directionDeg: r.tiltDirectionDeg,
   },
-  ...named({ 'leastSquares.a': 'mm/mm', 'leastSquares.b': 'mm/mm', 'leastSquares.c': 'mm', 'leastSquares.flatness': 'mm', 'leastSquares.residuals': 'mm', tilt: 'mm/m', 'tilt.directionDeg': '°' }),
+  ...named({
+    'leastSquares.a': 'mm/mm',
+    'leastSquares.b': 'mm/mm',
+    'leastSquares.c': 'mm',
+    'leastSquares.flatness': 'mm',
+    'leastSquares.residuals': 'mm',
+    tilt: 'mm/m',
+    'tilt.directionDeg': '°',
+  }),
   warnings: engineWarnings((r as { warnings?: unknown }).warnings),
 });
 
@@ -104,11 +135,21 @@ export const toDriveResponse = (r: DriveResult, u: UnitFamilies) => ({
   // Steps per inch, for controllers set up in inches: 25.4 mm to the inch exactly.
   stepsPerIn: r.stepsPerMm * MM_PER_IN,
   resolution: r.resolutionMm,
-  ...named({ travelPerRev: 'mm', travelPerMotorRev: 'mm', stepsPerMm: 'steps/mm', stepsPerIn: 'steps/in', resolution: 'mm' }),
+  ...named({
+    travelPerRev: 'mm',
+    travelPerMotorRev: 'mm',
+    stepsPerMm: 'steps/mm',
+    stepsPerIn: 'steps/in',
+    resolution: 'mm',
+  }),
   warnings: engineWarnings((r as { warnings?: unknown }).warnings),
 });
 
-export const toTravelTrialResponse = (r: TravelTrialResult, u: UnitFamilies, check: { expected: number; expectedLabel: string }) => {
+export const toTravelTrialResponse = (
+  r: TravelTrialResult,
+  u: UnitFamilies,
+  check: { expected: number; expectedLabel: string },
+) => {
   const fromEngine = engineWarnings((r as { warnings?: unknown }).warnings);
   // A correction the engine already calls impossible needs no second warning about its size.
   const far = fromEngine.some((w) => w.code === 'correction-cannot-be-right')
@@ -122,8 +163,20 @@ export const toTravelTrialResponse = (r: TravelTrialResult, u: UnitFamilies, che
     correctedStepsPerIn: r.correctedStepsPerMm * MM_PER_IN,
     errorPercent: r.errorPercent,
     residualMax: r.residualMaxMm,
-    moves: r.moves.map((m) => ({ commanded: m.commandedMm, measured: m.measuredMm, error: m.errorMm, residual: m.residualMm })),
-    ...named({ offset: 'mm', correctedStepsPerMm: 'steps/mm', correctedStepsPerIn: 'steps/in', errorPercent: '%', residualMax: 'mm', moves: 'mm' }),
+    moves: r.moves.map((m) => ({
+      commanded: m.commandedMm,
+      measured: m.measuredMm,
+      error: m.errorMm,
+      residual: m.residualMm,
+    })),
+    ...named({
+      offset: 'mm',
+      correctedStepsPerMm: 'steps/mm',
+      correctedStepsPerIn: 'steps/in',
+      errorPercent: '%',
+      residualMax: 'mm',
+      moves: 'mm',
+    }),
     warnings: mergeWarnings(fromEngine, far ? [far] : []),
   };
 };
@@ -159,7 +212,15 @@ export const toPositioningResponse = (r: PositioningResult, u?: UnitFamilies) =>
   accuracy: r.accuracyMm,
   runsUp: r.runsUp,
   runsDown: r.runsDown,
-  ...named({ targets: 'mm', reversal: 'mm', reversalMean: 'mm', repeatability: 'mm', systematic: 'mm', meanRange: 'mm', accuracy: 'mm' }),
+  ...named({
+    targets: 'mm',
+    reversal: 'mm',
+    reversalMean: 'mm',
+    repeatability: 'mm',
+    systematic: 'mm',
+    meanRange: 'mm',
+    accuracy: 'mm',
+  }),
   warnings: mergeWarnings(engineWarnings(r.warnings), positioningWarnings(r.runsUp, r.runsDown, r.targets.length)),
 });
 
@@ -175,8 +236,18 @@ export const toScrewSpeedResponse = (r: ScrewSpeedResult, u: UnitFamilies) => ({
   mountingFactor: r.mountingFactor,
   dnLimit: r.dnLimit,
   source: r.source,
-  ...named({ rpm: 'rpm', criticalSpeed: 'rpm', permissibleSpeed: 'rpm', dnLimitSpeed: 'rpm', maxFeedRate: 'mm/min', dnLimit: 'mm·rpm' }),
-  warnings: mergeWarnings(engineWarnings((r as { warnings?: unknown }).warnings), r.withinLimits ? [] : [overSpeed(r, u)]),
+  ...named({
+    rpm: 'rpm',
+    criticalSpeed: 'rpm',
+    permissibleSpeed: 'rpm',
+    dnLimitSpeed: 'rpm',
+    maxFeedRate: 'mm/min',
+    dnLimit: 'mm·rpm',
+  }),
+  warnings: mergeWarnings(
+    engineWarnings((r as { warnings?: unknown }).warnings),
+    r.withinLimits ? [] : [overSpeed(r, u)],
+  ),
 });
 
 function overSpeed(r: ScrewSpeedResult, u: UnitFamilies): ResultWarning {
@@ -188,10 +259,21 @@ function overSpeed(r: ScrewSpeedResult, u: UnitFamilies): ResultWarning {
   };
 }
 
-export const toBoltDownResponse = (positionsMm: number[], steps: GuideStep[], nextHole: number | null, u: UnitFamilies) => ({
+export const toBoltDownResponse = (
+  positionsMm: number[],
+  steps: GuideStep[],
+  nextHole: number | null,
+  u: UnitFamilies,
+) => ({
   ...echo(u),
   holes: positionsMm.map((position, hole) => ({ hole, position })),
-  steps: steps.map((s, i) => ({ step: i + 1, hole: s.hole, position: s.positionMm, target: s.targetMm, reading: s.readingMm })),
+  steps: steps.map((s, i) => ({
+    step: i + 1,
+    hole: s.hole,
+    position: s.positionMm,
+    target: s.targetMm,
+    reading: s.readingMm,
+  })),
   nextHole,
   ...named({ 'holes.position': 'mm', 'steps.position': 'mm', 'steps.target': 'mm', 'steps.reading': 'mm' }),
   warnings: [] as ResultWarning[],
@@ -209,7 +291,13 @@ export const toTravelEnvelopeResponse = (r: TravelEnvelopeResult, u: UnitFamilie
   })),
   marginPerSide: r.marginPerSideMm,
   coversAll: r.coversAll,
-  ...named({ 'axes.measuredTravel': 'mm', 'axes.workSize': 'mm', 'axes.requiredTravel': 'mm', 'axes.spare': 'mm', marginPerSide: 'mm' }),
+  ...named({
+    'axes.measuredTravel': 'mm',
+    'axes.workSize': 'mm',
+    'axes.requiredTravel': 'mm',
+    'axes.spare': 'mm',
+    marginPerSide: 'mm',
+  }),
   warnings: r.axes
     .filter((a) => !a.covers)
     .map((a): ResultWarning => ({
@@ -232,13 +320,20 @@ export const toTestCutResponse = (
   used: { stepsPerMmX?: number; stepsPerMmY?: number; spanAssumed: boolean },
 ) => {
   const far = [
-    r.x.correctedStepsPerMm != null && used.stepsPerMmX != null ? correctionWarning('Axis X', r.x.correctedStepsPerMm, used.stepsPerMmX, 'in use') : null,
-    r.y.correctedStepsPerMm != null && used.stepsPerMmY != null ? correctionWarning('Axis Y', r.y.correctedStepsPerMm, used.stepsPerMmY, 'in use') : null,
+    r.x.correctedStepsPerMm != null && used.stepsPerMmX != null
+      ? correctionWarning('Axis X', r.x.correctedStepsPerMm, used.stepsPerMmX, 'in use')
+      : null,
+    r.y.correctedStepsPerMm != null && used.stepsPerMmY != null
+      ? correctionWarning('Axis Y', r.y.correctedStepsPerMm, used.stepsPerMmY, 'in use')
+      : null,
   ].filter((w): w is ResultWarning => w !== null);
   const squareness = r.squareness
     ? {
         ...squarenessFields(r.squareness),
-        warnings: mergeWarnings(engineWarnings(r.squareness.warnings), used.spanAssumed ? [spanWarning(r.squareness, u)] : []),
+        warnings: mergeWarnings(
+          engineWarnings(r.squareness.warnings),
+          used.spanAssumed ? [spanWarning(r.squareness, u)] : [],
+        ),
       }
     : null;
   return {
@@ -256,8 +351,22 @@ export const toTestCutResponse = (
         }
       : null,
     notes: r.notes,
-    ...named({ 'x.error': 'mm', 'y.error': 'mm', 'x.errorPercent': '%', 'y.errorPercent': '%', 'x.correctedStepsPerMm': 'steps/mm', 'x.correctedStepsPerIn': 'steps/in', 'y.correctedStepsPerMm': 'steps/mm', 'y.correctedStepsPerIn': 'steps/in', ...prefixed('squareness', SQUARENESS_UNITS), ovality: 'mm' }),
-    warnings: mergeWarnings(engineWarnings([...r.notes, ...engineWarningsRaw(r)]), [...far, ...(squareness?.warnings ?? [])]),
+    ...named({
+      'x.error': 'mm',
+      'y.error': 'mm',
+      'x.errorPercent': '%',
+      'y.errorPercent': '%',
+      'x.correctedStepsPerMm': 'steps/mm',
+      'x.correctedStepsPerIn': 'steps/in',
+      'y.correctedStepsPerMm': 'steps/mm',
+      'y.correctedStepsPerIn': 'steps/in',
+      ...prefixed('squareness', SQUARENESS_UNITS),
+      ovality: 'mm',
+    }),
+    warnings: mergeWarnings(engineWarnings([...r.notes, ...engineWarningsRaw(r)]), [
+      ...far,
+      ...(squareness?.warnings ?? []),
+    ]),
   };
 };
 

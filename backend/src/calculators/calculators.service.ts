@@ -40,7 +40,10 @@ export class CalculatorsService {
     const withResiduals = residualsWanted(residuals, dto.positions.length);
     const result = await this.engine.run({
       kind: 'straightness',
-      input: { positionsMm: arrayToMm(dto.positions, u.lengthUnit), readingsMm: arrayToMm(dto.readings, u.readingUnit) },
+      input: {
+        positionsMm: arrayToMm(dto.positions, u.lengthUnit),
+        readingsMm: arrayToMm(dto.readings, u.readingUnit),
+      },
     });
     return map.toStraightnessResponse(result, withResiduals, u);
   }
@@ -49,7 +52,11 @@ export class CalculatorsService {
     const u = unitsOf(dto);
     const result = await this.engine.run({
       kind: 'parallelism',
-      input: { positionsMm: arrayToMm(dto.positions, u.lengthUnit), railAMm: arrayToMm(dto.railA, u.readingUnit), railBMm: arrayToMm(dto.railB, u.readingUnit) },
+      input: {
+        positionsMm: arrayToMm(dto.positions, u.lengthUnit),
+        railAMm: arrayToMm(dto.railA, u.readingUnit),
+        railBMm: arrayToMm(dto.railB, u.readingUnit),
+      },
     });
     return map.toParallelismResponse(result, u);
   }
@@ -72,7 +79,11 @@ export class CalculatorsService {
     const withResiduals = residualsWanted(residuals, dto.points.length);
     const result = await this.engine.run({
       kind: 'flatness',
-      input: dto.points.map((p) => ({ xMm: toMm(p.x, u.lengthUnit), yMm: toMm(p.y, u.lengthUnit), zMm: toMm(p.z, u.readingUnit) })),
+      input: dto.points.map((p) => ({
+        xMm: toMm(p.x, u.lengthUnit),
+        yMm: toMm(p.y, u.lengthUnit),
+        zMm: toMm(p.z, u.readingUnit),
+      })),
     });
     return map.toFlatnessResponse(result, withResiduals, u);
   }
@@ -107,11 +118,17 @@ export class CalculatorsService {
     const u = unitsOf(dto);
     const result = evaluateTravelTrial({
       stepsPerMmUsed: dto.stepsPerMmUsed,
-      moves: dto.moves.map((m) => ({ commandedMm: toMm(m.commanded, u.lengthUnit), measuredMm: toMm(m.measured, u.lengthUnit) })),
+      moves: dto.moves.map((m) => ({
+        commandedMm: toMm(m.commanded, u.lengthUnit),
+        measuredMm: toMm(m.measured, u.lengthUnit),
+      })),
       throughOrigin: dto.throughOrigin,
     });
     const expected = dto.theoreticalStepsPerMm ?? dto.stepsPerMmUsed;
-    return map.toTravelTrialResponse(result, u, { expected, expectedLabel: dto.theoreticalStepsPerMm != null ? 'worked out from the drive' : 'in use' });
+    return map.toTravelTrialResponse(result, u, {
+      expected,
+      expectedLabel: dto.theoreticalStepsPerMm != null ? 'worked out from the drive' : 'in use',
+    });
   }
 
   positioning(dto: PositioningDto) {
@@ -141,11 +158,18 @@ export class CalculatorsService {
   boltDown(dto: BoltDownDto) {
     const u = unitsOf(dto);
     const mm = (v: number) => toMm(v, u.lengthUnit);
-    const plan = planHoles({ lengthMm: mm(dto.length), pitchMm: mm(dto.pitch), firstHoleOffsetMm: mm(dto.firstHoleOffset) });
+    const plan = planHoles({
+      lengthMm: mm(dto.length),
+      pitchMm: mm(dto.pitch),
+      firstHoleOffsetMm: mm(dto.firstHoleOffset),
+    });
     const readings = new Map<number, number>();
     for (const r of dto.readings ?? []) {
       if (r.hole >= plan.positionsMm.length) {
-        throw new EngineInputError(`readings names hole ${r.hole}, but the rail has holes 0 to ${plan.positionsMm.length - 1}`, 'readings');
+        throw new EngineInputError(
+          `readings names hole ${r.hole}, but the rail has holes 0 to ${plan.positionsMm.length - 1}`,
+          'readings',
+        );
       }
       if (readings.has(r.hole)) throw new EngineInputError(`readings gives hole ${r.hole} twice`, 'readings');
       readings.set(r.hole, toMm(r.reading, u.readingUnit));
@@ -177,10 +201,18 @@ export class CalculatorsService {
       diagonal2Mm: opt(dto.diagonal2),
       gantrySpanMm: opt(dto.gantrySpan),
       circle: dto.circle
-        ? { commandedDiameterMm: mm(dto.circle.commandedDiameter), measuredXMm: mm(dto.circle.measuredX), measuredYMm: mm(dto.circle.measuredY) }
+        ? {
+            commandedDiameterMm: mm(dto.circle.commandedDiameter),
+            measuredXMm: mm(dto.circle.measuredX),
+            measuredYMm: mm(dto.circle.measuredY),
+          }
         : undefined,
       ovalityToleranceMm: opt(dto.ovalityTolerance),
     });
-    return map.toTestCutResponse(result, u, { stepsPerMmX: dto.stepsPerMmX, stepsPerMmY: dto.stepsPerMmY, spanAssumed: dto.gantrySpan == null });
+    return map.toTestCutResponse(result, u, {
+      stepsPerMmX: dto.stepsPerMmX,
+      stepsPerMmY: dto.stepsPerMmY,
+      spanAssumed: dto.gantrySpan == null,
+    });
   }
 }

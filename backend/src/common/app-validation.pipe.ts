@@ -70,11 +70,14 @@ function arrayCapBreach(value: Record<string, unknown>, type: Ctor, prefix: stri
     const v = value[m.propertyName];
     const max = Number(m.constraints?.[0]);
     if (Array.isArray(v) && v.length > max) {
-      const msg = typeof m.message === 'string' ? m.message : `${prefix}${m.propertyName} must hold at most ${max} entries`;
+      const msg =
+        typeof m.message === 'string' ? m.message : `${prefix}${m.propertyName} must hold at most ${max} entries`;
       return msg;
     }
   }
-  const keys = new Set(metas.filter((m) => m.name === undefined && m.type === 'nestedValidation').map((m) => m.propertyName));
+  const keys = new Set(
+    metas.filter((m) => m.name === undefined && m.type === 'nestedValidation').map((m) => m.propertyName),
+  );
   for (const key of keys) {
     const nested = nestedType(type, key);
     const v = value[key];
@@ -96,7 +99,13 @@ function arrayCapBreach(value: Record<string, unknown>, type: Ctor, prefix: stri
  * qualify: a list of numbers (`positions`, also inside nested objects like `runs[i].deviations`),
  * and a list of objects whose every field is a finite number (`points: [{x, y, z}]`).
  */
-function compactLongLists(value: Record<string, unknown>, type: Ctor, path: (string | number)[], out: LongList[], depth: number): Record<string, unknown> {
+function compactLongLists(
+  value: Record<string, unknown>,
+  type: Ctor,
+  path: (string | number)[],
+  out: LongList[],
+  depth: number,
+): Record<string, unknown> {
   if (depth > 4) return value;
   let copy: Record<string, unknown> | null = null;
   const set = (key: string, v: unknown) => ((copy ??= { ...value })[key] = v);
@@ -111,7 +120,12 @@ function compactLongLists(value: Record<string, unknown>, type: Ctor, path: (str
     const nested = metas.some((m) => m.type === 'nestedValidation') ? nestedType(type, key) : null;
     if (!nested || v === null || typeof v !== 'object') continue;
     const fields = numberFieldsOf(nested);
-    if (Array.isArray(v) && v.length > SAMPLE && fields && metas.every((m) => m.type === 'nestedValidation' || (m.name !== undefined && OBJECT_LIST_RULES.has(m.name)))) {
+    if (
+      Array.isArray(v) &&
+      v.length > SAMPLE &&
+      fields &&
+      metas.every((m) => m.type === 'nestedValidation' || (m.name !== undefined && OBJECT_LIST_RULES.has(m.name)))
+    ) {
       checkNumberObjects(v, key, fields, nested);
       out.push({ path: [...path, key], values: v });
       set(key, v.slice(0, SAMPLE));
@@ -119,7 +133,9 @@ function compactLongLists(value: Record<string, unknown>, type: Ctor, path: (str
     }
     const items = Array.isArray(v) ? v : [v];
     const compacted = items.map((item, i) =>
-      isPlainObject(item) ? compactLongLists(item, nested, Array.isArray(v) ? [...path, key, i] : [...path, key], out, depth + 1) : item,
+      isPlainObject(item)
+        ? compactLongLists(item, nested, Array.isArray(v) ? [...path, key, i] : [...path, key], out, depth + 1)
+        : item,
     );
     if (compacted.some((c, i) => c !== items[i])) set(key, Array.isArray(v) ? compacted : compacted[0]);
   }
@@ -136,7 +152,10 @@ function metadatasByKey(type: Ctor): Map<string, ValidationMetadata[]> {
 }
 
 function isNumberList(metas: ValidationMetadata[]): boolean {
-  return metas.every((m) => m.name !== undefined && LIST_RULES.has(m.name)) && metas.some((m) => m.name === 'isNumber' && m.each);
+  return (
+    metas.every((m) => m.name !== undefined && LIST_RULES.has(m.name)) &&
+    metas.some((m) => m.name === 'isNumber' && m.each)
+  );
 }
 
 function messageOf(m: ValidationMetadata | undefined, fallback: string): string {
@@ -148,7 +167,9 @@ function checkNumbers(v: unknown[], key: string, metas: ValidationMetadata[], wh
   for (let i = 0; i < v.length; i++) {
     const x = v[i];
     if (typeof x !== 'number' || !Number.isFinite(x)) {
-      throw new BadRequestException([`${messageOf(rule, `every value in ${key} must be a finite number`)} (${where}[${i}])`]);
+      throw new BadRequestException([
+        `${messageOf(rule, `every value in ${key} must be a finite number`)} (${where}[${i}])`,
+      ]);
     }
   }
 }
@@ -174,7 +195,10 @@ function checkNumberObjects(v: unknown[], key: string, fields: Map<string, Valid
     if (!isPlainObject(item)) throw new BadRequestException([`every entry of ${key} must be ${shape} (${key}[${i}])`]);
     for (const name of names) {
       const x = item[name];
-      if (typeof x !== 'number' || !Number.isFinite(x)) throw new BadRequestException([`${key}.${i}.${messageOf(fields.get(name), `${name} must be a finite number`)}`]);
+      if (typeof x !== 'number' || !Number.isFinite(x))
+        throw new BadRequestException([
+          `${key}.${i}.${messageOf(fields.get(name), `${name} must be a finite number`)}`,
+        ]);
     }
     // The pipe refuses fields the DTO does not name (forbidNonWhitelisted): so does this check.
     for (const extra in item) {

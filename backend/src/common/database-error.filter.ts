@@ -38,7 +38,11 @@ export class DatabaseErrorFilter implements ExceptionFilter {
     const own = code?.startsWith('RW') ? (err.cause?.code === code ? err.cause : err) : null;
     if (own) {
       const status = Number(code!.slice(2));
-      reply.status(status).send({ statusCode: status, message: (own as { message?: string }).message, error: status === 409 ? 'Conflict' : 'Forbidden' });
+      reply.status(status).send({
+        statusCode: status,
+        message: (own as { message?: string }).message,
+        error: status === 409 ? 'Conflict' : 'Forbidden',
+      });
       return;
     }
     const known = code ? CLIENT_CODES[code] : undefined;
@@ -49,7 +53,11 @@ export class DatabaseErrorFilter implements ExceptionFilter {
     // A deadlock or serialization failure that outlived the command's reruns (transaction-context.ts):
     // the change was not made and can be sent again; never a 500.
     if (code === '40P01' || code === '40001') {
-      reply.header('retry-after', '1').status(503).send({ statusCode: 503, message: 'Others were changing the same records at that moment; nothing was saved. Send it again.', error: 'Service Unavailable' });
+      reply.header('retry-after', '1').status(503).send({
+        statusCode: 503,
+        message: 'Others were changing the same records at that moment; nothing was saved. Send it again.',
+        error: 'Service Unavailable',
+      });
       return;
     }
     // Fastify's own errors (bad JSON, body too large) carry their status.
@@ -67,10 +75,20 @@ export class DatabaseErrorFilter implements ExceptionFilter {
  * its parameters (they can hold password hashes, tokens or anything a person typed).
  */
 export function loggable(exception: unknown): string {
-  const e = exception as { query?: unknown; params?: unknown; cause?: { message?: string; code?: string }; stack?: string; name?: string };
+  const e = exception as {
+    query?: unknown;
+    params?: unknown;
+    cause?: { message?: string; code?: string };
+    stack?: string;
+    name?: string;
+  };
   if (e && typeof e === 'object' && typeof e.query === 'string' && 'params' in e) {
     const cause = e.cause ? ` — ${e.cause.code ?? ''} ${e.cause.message ?? ''}`.trimEnd() : '';
-    const where = (e.stack ?? '').split('\n').filter((l) => l.trim().startsWith('at ')).slice(0, 5).join('\n');
+    const where = (e.stack ?? '')
+      .split('\n')
+      .filter((l) => l.trim().startsWith('at '))
+      .slice(0, 5)
+      .join('\n');
     return `Failed query: ${e.query}${cause}\n${where}`;
   }
   return exception instanceof Error ? (exception.stack ?? exception.message) : String(exception);

@@ -72,7 +72,8 @@ export function registerRequestGuards(fastify: FastifyInstance, options: Request
     if (!WRITE_METHODS.has(req.method)) return;
     const refusal = crossSiteRefusal(req, allowed) ?? contentTypeRefusal(req);
     // Returning the reply ends the request here; the handler never runs.
-    if (refusal) return reply.code(refusal.statusCode).send({ statusCode: refusal.statusCode, message: refusal.message });
+    if (refusal)
+      return reply.code(refusal.statusCode).send({ statusCode: refusal.statusCode, message: refusal.message });
   });
 
   fastify.addHook('preValidation', async (req, reply) => {
@@ -107,7 +108,10 @@ function crossSiteRefusal(req: FastifyRequest, allowed: Set<string>): RequestRef
   // The page came from the very host the request is addressed to (a browser sets Host to the
   // server it talks to, so another site cannot match it): e.g. the app opened by its LAN address.
   if (from !== null && req.headers.host && new URL(from).host === req.headers.host) return null;
-  return new RequestRefusal(403, 'Changes are accepted only from the Railwright app itself (the request came from another site)');
+  return new RequestRefusal(
+    403,
+    'Changes are accepted only from the Railwright app itself (the request came from another site)',
+  );
 }
 
 function contentTypeRefusal(req: FastifyRequest): RequestRefusal | null {

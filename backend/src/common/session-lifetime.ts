@@ -5,9 +5,15 @@ import type { FastifyInstance } from 'fastify';
  * too, however active it stays. The sign-in handler writes `createdAt`; a session without it
  * (made before this rule) is treated as made now.
  */
-export function absoluteSessionLifetime(fastify: FastifyInstance, maxAgeMs: number, now: () => number = Date.now): void {
+export function absoluteSessionLifetime(
+  fastify: FastifyInstance,
+  maxAgeMs: number,
+  now: () => number = Date.now,
+): void {
   fastify.addHook('preHandler', async (req) => {
-    const session = (req as { session?: { get(k: string): unknown; set(k: string, v: unknown): void; destroy(): Promise<void> } }).session;
+    const session = (
+      req as { session?: { get(k: string): unknown; set(k: string, v: unknown): void; destroy(): Promise<void> } }
+    ).session;
     if (!session || session.get('userId') === undefined) return;
     const createdAt = session.get('createdAt');
     if (typeof createdAt !== 'number') {

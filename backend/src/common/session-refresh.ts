@@ -8,7 +8,11 @@ type RefreshableSession = { get(k: string): unknown; set(k: string, v: unknown):
  * older than `everyMs`. A session idle for its whole lifetime since that refresh still ends.
  * The refresh moment starts as the sign-in moment (`createdAt`, set at sign-in).
  */
-export function refreshSessionsPeriodically(fastify: FastifyInstance, everyMs: number, now: () => number = Date.now): void {
+export function refreshSessionsPeriodically(
+  fastify: FastifyInstance,
+  everyMs: number,
+  now: () => number = Date.now,
+): void {
   fastify.addHook('preHandler', async (req) => {
     const session = (req as { session?: RefreshableSession }).session;
     if (!session || session.get('userId') === undefined) return;

@@ -9,7 +9,9 @@ export const ShowableText = (field: string, options: ValidationOptions & { multi
   ValidateBy(
     {
       name: 'showableText',
-      validator: { validate: (value: unknown) => typeof value !== 'string' || !hasUnshowableCharacter(value, options.multiLine) },
+      validator: {
+        validate: (value: unknown) => typeof value !== 'string' || !hasUnshowableCharacter(value, options.multiLine),
+      },
     },
     { message: `${field} must not contain control characters (such as NUL) or broken characters`, ...options },
   );

@@ -20,7 +20,11 @@ export class SpaFallbackFilter implements ExceptionFilter {
       req.method === 'GET' && !req.url.startsWith('/api') && (req.headers.accept ?? '').includes('text/html');
     const html = wantsPage ? this.loadIndex() : null;
     if (html) {
-      reply.status(200).header('content-type', 'text/html; charset=utf-8').header('cache-control', 'no-cache').send(html);
+      reply
+        .status(200)
+        .header('content-type', 'text/html; charset=utf-8')
+        .header('cache-control', 'no-cache')
+        .send(html);
       return;
     }
     reply.status(404).send(exception.getResponse());

@@ -11,7 +11,10 @@ interface HeaderTarget {
  */
 export function staticCacheHeaders(reply: HeaderTarget, filePath: string): void {
   // A precompressed copy (index.html.br) is cached like the file it stands for.
-  const rel = filePath.split(path.sep).join('/').replace(/\.(br|gz)$/, '');
+  const rel = filePath
+    .split(path.sep)
+    .join('/')
+    .replace(/\.(br|gz)$/, '');
   if (rel.includes('/assets/')) reply.header('cache-control', 'public, max-age=31536000, immutable');
   else if (rel.endsWith('/index.html')) reply.header('cache-control', 'no-cache');
   else reply.header('cache-control', 'public, max-age=3600');

@@ -37,6 +37,10 @@ describe('reading stored lists and results computed again on read', () => {
   it('a computation that throws or yields a non-finite number reads as unreadable', () => {
     expect(readableComputation(() => ({ mmPerMetre: 0.5 }), ['mmPerMetre'])).toEqual({ mmPerMetre: 0.5 });
     expect(readableComputation(() => ({ mmPerMetre: NaN }), ['mmPerMetre'])).toBeNull();
-    expect(readableComputation(() => { throw new Error('side must be positive'); }, ['mmPerMetre'])).toBeNull();
+    expect(
+      readableComputation(() => {
+        throw new Error('side must be positive');
+      }, ['mmPerMetre']),
+    ).toBeNull();
   });
 });

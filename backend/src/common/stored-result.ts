@@ -26,7 +26,8 @@ export function readableResult<T>(stored: unknown, shape: ResultShape): T | null
 }
 
 /** A stored double column read back as NaN or ±Infinity cannot be shown. */
-export const finiteOrNull = (v: number | null | undefined): number | null => (typeof v === 'number' && Number.isFinite(v) ? v : null);
+export const finiteOrNull = (v: number | null | undefined): number | null =>
+  typeof v === 'number' && Number.isFinite(v) ? v : null;
 
 function pathHolds(value: unknown, parts: string[]): boolean {
   if (parts.length === 0) return typeof value === 'number' && Number.isFinite(value);
@@ -41,7 +42,8 @@ function pathHolds(value: unknown, parts: string[]): boolean {
 }
 
 /** A stored list of numbers (readings, positions) holds only finite numbers. */
-export const finiteList = (v: unknown): v is number[] => Array.isArray(v) && v.every((x) => typeof x === 'number' && Number.isFinite(x));
+export const finiteList = (v: unknown): v is number[] =>
+  Array.isArray(v) && v.every((x) => typeof x === 'number' && Number.isFinite(x));
 
 /**
  * Some results are computed again from the stored input on every read (frame checks, bolt-downs).

@@ -78,7 +78,8 @@ export function validateEnvironment(env: NodeJS.ProcessEnv): AppConfig {
   const databaseUrl = env.DATABASE_URL ?? '';
   if (!/^postgres(ql)?:\/\//.test(databaseUrl)) problems.push('DATABASE_URL must be a postgres:// URL');
   const databaseOwnerUrl = env.DATABASE_OWNER_URL || null;
-  if (databaseOwnerUrl && !/^postgres(ql)?:\/\//.test(databaseOwnerUrl)) problems.push('DATABASE_OWNER_URL must be a postgres:// URL');
+  if (databaseOwnerUrl && !/^postgres(ql)?:\/\//.test(databaseOwnerUrl))
+    problems.push('DATABASE_OWNER_URL must be a postgres:// URL');
   const port = Number(env.PORT ?? 3000);
   if (!Number.isInteger(port) || port < 1 || port > 65535) problems.push('PORT must be a whole number from 1 to 65535');
   const production = env.NODE_ENV === 'production';
@@ -86,7 +87,8 @@ export function validateEnvironment(env: NodeJS.ProcessEnv): AppConfig {
     problems.push('SESSION_SECRET is required when NODE_ENV=production (at least 32 random characters, kept secret)');
   }
   const sessionSecret = env.SESSION_SECRET ?? (production ? '' : developmentSecret(env));
-  if (env.SESSION_SECRET !== undefined && sessionSecret.length < 32) problems.push('SESSION_SECRET must be at least 32 characters');
+  if (env.SESSION_SECRET !== undefined && sessionSecret.length < 32)
+    problems.push('SESSION_SECRET must be at least 32 characters');
   const trustProxy = parseTrustProxy(env.TRUST_PROXY, problems);
   const host = env.HOST ?? '127.0.0.1';
   const appUrl = env.PUBLIC_URL ?? env.APP_URL ?? `http://${host}:${port}`;

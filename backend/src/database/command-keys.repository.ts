@@ -20,20 +20,37 @@ export class CommandKeysRepository {
    * row until the first commits (then finds it taken) or rolls back (then claims it).
    */
   async claim(key: string, userId: string, method: string, path: string): Promise<boolean> {
-    const rows = await this.db.insert(commandKeys).values({ key, userId, method, path }).onConflictDoNothing().returning({ key: commandKeys.key });
+    const rows = await this.db
+      .insert(commandKeys)
+      .values({ key, userId, method, path })
+      .onConflictDoNothing()
+      .returning({ key: commandKeys.key });
     return rows.length === 1;
   }
 
   async find(key: string): Promise<StoredCommand | null> {
-    const [row] = await this.db.select({ userId: commandKeys.userId, method: commandKeys.method, path: commandKeys.path, response: commandKeys.response }).from(commandKeys).where(eq(commandKeys.key, key));
+    const [row] = await this.db
+      .select({
+        userId: commandKeys.userId,
+        method: commandKeys.method,
+        path: commandKeys.path,
+        response: commandKeys.response,
+      })
+      .from(commandKeys)
+      .where(eq(commandKeys.key, key));
     return row ?? null;
   }
 
   async keepAnswer(key: string, response: unknown): Promise<void> {
-    await this.db.update(commandKeys).set({ response: response === undefined ? null : sql`${JSON.stringify(response)}::jsonb` }).where(eq(commandKeys.key, key));
+    await this.db
+      .update(commandKeys)
+      .set({ response: response === undefined ? null : sql`${JSON.stringify(response)}::jsonb` })
+      .where(eq(commandKeys.key, key));
   }
 
   async forgetOlderThan(days: number): Promise<void> {
-    await this.db.delete(commandKeys).where(and(lt(commandKeys.createdAt, sql`now() - make_interval(days => ${days})`)));
+    await this.db
+      .delete(commandKeys)
+      .where(and(lt(commandKeys.createdAt, sql`now() - make_interval(days => ${days})`)));
   }
 }

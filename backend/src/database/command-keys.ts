@@ -36,7 +36,9 @@ export class CommandKeys {
   static keyOf(header: string | string[] | undefined): string | null {
     if (header === undefined) return null;
     if (typeof header !== 'string' || !KEY_PATTERN.test(header)) {
-      throw new BadRequestException('The Idempotency-Key header must be 16 to 100 letters, digits, "-" or "_" (a UUID, for example)');
+      throw new BadRequestException(
+        'The Idempotency-Key header must be 16 to 100 letters, digits, "-" or "_" (a UUID, for example)',
+      );
     }
     return header;
   }
@@ -55,9 +57,12 @@ export class CommandKeys {
     const first = await this.repo.find(keyed.key);
     if (!first) throw new ConflictException('This entry is being recorded right now; try again in a moment');
     // Another person's key, or the key of another command: never answered from, never run again.
-    if (first.userId !== keyed.userId) throw new ConflictException('This entry was sent by someone else; it was not recorded again');
+    if (first.userId !== keyed.userId)
+      throw new ConflictException('This entry was sent by someone else; it was not recorded again');
     if (first.method !== keyed.method || first.path !== keyed.path) {
-      throw new UnprocessableEntityException('This Idempotency-Key belongs to another command; make a new key for each entry');
+      throw new UnprocessableEntityException(
+        'This Idempotency-Key belongs to another command; make a new key for each entry',
+      );
     }
     if (first.response === null) throw new ConflictException('This entry was already recorded; reload to see it');
     return new RepeatedCommand(first.response);

@@ -7,7 +7,12 @@ import { TransactionContext } from './transaction-context.js';
 
 const READS = new Set(['GET', 'HEAD', 'OPTIONS']);
 
-type CommandRequest = { method: string; url: string; user?: SessionUser; headers: Record<string, string | string[] | undefined> };
+type CommandRequest = {
+  method: string;
+  url: string;
+  user?: SessionUser;
+  headers: Record<string, string | string[] | undefined>;
+};
 
 /**
  * Every state-changing request is one transaction: whatever the handler writes commits together
@@ -34,11 +39,13 @@ export class CommandTransactionInterceptor implements NestInterceptor {
     if (!key || !user) return from(this.transactions.run(handle, { actor, retry }));
     const keyed = { key, userId: user.id, method: req.method, path: req.url.split('?')[0] };
     return from(
-      this.transactions.run(() => this.keys.once(keyed, handle), { actor, retry }).then((answer) => {
-        if (!(answer instanceof RepeatedCommand)) return answer;
-        ctx.switchToHttp().getResponse<FastifyReply>().header('idempotent-replay', 'true');
-        return answer.response;
-      }),
+      this.transactions
+        .run(() => this.keys.once(keyed, handle), { actor, retry })
+        .then((answer) => {
+          if (!(answer instanceof RepeatedCommand)) return answer;
+          ctx.switchToHttp().getResponse<FastifyReply>().header('idempotent-replay', 'true');
+          return answer.response;
+        }),
     );
   }
 }

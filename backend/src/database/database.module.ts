@@ -30,7 +30,8 @@ import { CommandKeysRepository } from './command-keys.repository.js';
     {
       provide: TransactionContext,
       inject: [ROOT_DRIZZLE, PG_POOL],
-      useFactory: (root: ReturnType<typeof drizzle<typeof schema>>, pool: pg.Pool) => new TransactionContext(root, pool),
+      useFactory: (root: ReturnType<typeof drizzle<typeof schema>>, pool: pg.Pool) =>
+        new TransactionContext(root, pool),
     },
     {
       provide: DRIZZLE,

@@ -62,28 +62,32 @@ export function createSessionStore(pool: pg.Pool): unknown {
   class SessionWithUserStore extends PgStore {
     get(sid: string, fn: Callback): void {
       // Named: each connection parses and plans it once, not on every request.
-      this.query({ name: 'session_with_user', text: SESSION_WITH_USER }, [sid, Math.floor(Date.now() / 1000)], (err, row) => {
-        if (err) return fn(err);
-        if (!row) return fn(null);
-        let sess: Record<string, unknown>;
-        try {
-          sess = typeof row.sess === 'string' ? (JSON.parse(row.sess) as Record<string, unknown>) : row.sess;
-        } catch {
-          return this.destroy(sid, fn);
-        }
-        const user: LoadedSessionUser | false = row.id
-          ? {
-              id: row.id,
-              email: row.email,
-              name: row.name,
-              role: row.role,
-              workshopId: row.workshop_id,
-              workshopName: row.workshop_name,
-              sessionsValidFrom: new Date(row.sessions_valid_from).getTime(),
-            }
-          : false;
-        fn(null, { ...sess, [LOADED_USER]: user });
-      });
+      this.query(
+        { name: 'session_with_user', text: SESSION_WITH_USER },
+        [sid, Math.floor(Date.now() / 1000)],
+        (err, row) => {
+          if (err) return fn(err);
+          if (!row) return fn(null);
+          let sess: Record<string, unknown>;
+          try {
+            sess = typeof row.sess === 'string' ? (JSON.parse(row.sess) as Record<string, unknown>) : row.sess;
+          } catch {
+            return this.destroy(sid, fn);
+          }
+          const user: LoadedSessionUser | false = row.id
+            ? {
+                id: row.id,
+                email: row.email,
+                name: row.name,
+                role: row.role,
+                workshopId: row.workshop_id,
+                workshopName: row.workshop_name,
+                sessionsValidFrom: new Date(row.sessions_valid_from).getTime(),
+              }
+            : false;
+          fn(null, { ...sess, [LOADED_USER]: user });
+        },
+      );
     }
 
     set(sid: string, sess: Record<string, unknown>, fn?: Callback): void {

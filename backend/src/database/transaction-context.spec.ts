@@ -15,7 +15,9 @@ function fakeDatabase(failures: string[]) {
       const code = failures.shift();
       if (code) {
         // node-postgres errors carry the SQLSTATE in `code`; Drizzle wraps them with the original as `cause`.
-        throw Object.assign(new Error('Failed query'), { cause: Object.assign(new Error('deadlock detected'), { code }) });
+        throw Object.assign(new Error('Failed query'), {
+          cause: Object.assign(new Error('deadlock detected'), { code }),
+        });
       }
       return result;
     },

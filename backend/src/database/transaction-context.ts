@@ -91,17 +91,25 @@ export class TransactionContext {
    * also sets the actor for the change log (`begin; select set_config(...)`): one round trip less
    * on every command. The actor's values go in as escaped literals.
    */
-  private async pooledTransaction<T>(pool: pg.Pool, actor: CommandActor | undefined, work: (tx: Database) => Promise<T>): Promise<T> {
+  private async pooledTransaction<T>(
+    pool: pg.Pool,
+    actor: CommandActor | undefined,
+    work: (tx: Database) => Promise<T>,
+  ): Promise<T> {
     const client = await pool.connect();
-    const root = this.root as unknown as { dialect: ConstructorParameters<typeof NodePgSession>[1]; session: { schema: never; options: object } };
+    const root = this.root as unknown as {
+      dialect: ConstructorParameters<typeof NodePgSession>[1];
+      session: { schema: never; options: object };
+    };
     const session = new NodePgSession(client, root.dialect, root.session.schema, root.session.options);
     const tx = new NodePgTransaction(root.dialect, session, root.session.schema) as unknown as Database;
     // Set when the connection's state is unknown (begin, commit or rollback failed): it is dropped, not reused.
     let broken: Error | undefined;
-    const control = (text: string) => client.query(text).catch((err: Error) => {
-      broken = err;
-      throw err;
-    });
+    const control = (text: string) =>
+      client.query(text).catch((err: Error) => {
+        broken = err;
+        throw err;
+      });
     try {
       await control(actor ? `begin; ${actorStatement(client, actor)}` : 'begin');
       let result: T;

@@ -19,7 +19,10 @@ export class AxesRepository {
   }
 
   async find(workshopId: string, id: string): Promise<AxisRow | null> {
-    const [row] = await this.db.select().from(axes).where(and(eq(axes.workshopId, workshopId), eq(axes.id, id)));
+    const [row] = await this.db
+      .select()
+      .from(axes)
+      .where(and(eq(axes.workshopId, workshopId), eq(axes.id, id)));
     return row ?? null;
   }
 

@@ -58,7 +58,10 @@ export class AxesService implements OnModuleInit {
   }
 
   async respondMany(rows: AxisRow[]): Promise<AxisResponse[]> {
-    const locked = await this.records.lockedIds('axis', rows.map((r) => r.id));
+    const locked = await this.records.lockedIds(
+      'axis',
+      rows.map((r) => r.id),
+    );
     return rows.map((r) => toAxisResponse(r, locked.has(r.id)));
   }
 
@@ -89,7 +92,13 @@ export class AxesService implements OnModuleInit {
     checkNumbers(values);
     await this.assertNameFree(actor, machineId, values.name, null);
     const row = await this.repo.insert(values);
-    await this.records.audit(actor, { machineId, recordType: 'axis', recordId: row.id, action: 'created', summary: `Axis ${row.name} added (${row.drive.type} drive, ${row.stepsPerMm} steps/mm in use)` });
+    await this.records.audit(actor, {
+      machineId,
+      recordType: 'axis',
+      recordId: row.id,
+      action: 'created',
+      summary: `Axis ${row.name} added (${row.drive.type} drive, ${row.stepsPerMm} steps/mm in use)`,
+    });
     await this.notifySaved(actor, row, null);
     return this.respond(row);
   }
@@ -109,16 +118,32 @@ export class AxesService implements OnModuleInit {
       microsteps: dto.microsteps ?? before.microsteps,
       gearRatio: dto.gearRatio ?? before.gearRatio,
       stepsPerMm: dto.stepsPerMm ?? before.stepsPerMm,
-      maxFeedRateMmPerMin: dto.maxFeedRate === undefined ? before.maxFeedRateMmPerMin : dto.maxFeedRate === null ? null : toMm(dto.maxFeedRate, unit),
+      maxFeedRateMmPerMin:
+        dto.maxFeedRate === undefined
+          ? before.maxFeedRateMmPerMin
+          : dto.maxFeedRate === null
+            ? null
+            : toMm(dto.maxFeedRate, unit),
       measuredTravelMm: travel === undefined ? before.measuredTravelMm : travel,
       notes: dto.notes ?? before.notes,
     };
     checkNumbers(next);
-    if (next.name.toLowerCase() !== before.name.toLowerCase()) await this.assertNameFree(actor, before.machineId, next.name, id);
-    const stepsHistory = next.stepsPerMm !== before.stepsPerMm ? [...before.stepsHistory, change(actor, before.stepsPerMm, next.stepsPerMm, 'edited')] : before.stepsHistory;
+    if (next.name.toLowerCase() !== before.name.toLowerCase())
+      await this.assertNameFree(actor, before.machineId, next.name, id);
+    const stepsHistory =
+      next.stepsPerMm !== before.stepsPerMm
+        ? [...before.stepsHistory, change(actor, before.stepsPerMm, next.stepsPerMm, 'edited')]
+        : before.stepsHistory;
     const { id: _id, workshopId: _w, machineId: _m, createdAt: _c, updatedAt: _u, ...fields } = next as AxisRow;
     const row = await this.repo.update(actor.workshopId, id, { ...fields, stepsHistory });
-    await this.records.audit(actor, { machineId: row.machineId, recordType: 'axis', recordId: id, action: 'updated', summary: `Axis ${row.name} changed`, changes: diff(before, row) });
+    await this.records.audit(actor, {
+      machineId: row.machineId,
+      recordType: 'axis',
+      recordId: id,
+      action: 'updated',
+      summary: `Axis ${row.name} changed`,
+      changes: diff(before, row),
+    });
     await this.notifySaved(actor, row, before);
     return this.respond(row);
   }
@@ -128,7 +153,13 @@ export class AxesService implements OnModuleInit {
    * Allowed on a locked axis: the lock keeps the drive record the speed check and the travel
    * envelope were judged on, and a recalibration after approval must stay possible (and audited).
    */
-  async applyStepsPerMm(actor: SessionUser, axis: AxisRow, value: number, trialId: string, confirmedFromTheoryPercent: number | null = null): Promise<AxisRow> {
+  async applyStepsPerMm(
+    actor: SessionUser,
+    axis: AxisRow,
+    value: number,
+    trialId: string,
+    confirmedFromTheoryPercent: number | null = null,
+  ): Promise<AxisRow> {
     const stepsHistory = [...axis.stepsHistory, change(actor, axis.stepsPerMm, value, 'travel-trial', trialId)];
     const row = await this.repo.update(actor.workshopId, axis.id, { stepsPerMm: value, stepsHistory });
     await this.records.audit(actor, {
@@ -146,25 +177,46 @@ export class AxesService implements OnModuleInit {
     const row = await this.findRow(actor, id);
     await this.records.assertEditable('axis', id, `Axis ${row.name}`);
     const { trialIds, runIds } = await this.checks.idsOfAxis(actor.workshopId, id);
-    const [lockedTrials, lockedRuns] = await Promise.all([this.records.lockedIds('travel-trial', trialIds), this.records.lockedIds('positioning-run', runIds)]);
+    const [lockedTrials, lockedRuns] = await Promise.all([
+      this.records.lockedIds('travel-trial', trialIds),
+      this.records.lockedIds('positioning-run', runIds),
+    ]);
     if (lockedTrials.size || lockedRuns.size) {
-      throw new ConflictException(`Axis ${row.name} has checks that are part of an approved commissioning record; it can no longer be deleted.`);
+      throw new ConflictException(
+        `Axis ${row.name} has checks that are part of an approved commissioning record; it can no longer be deleted.`,
+      );
     }
     await this.repo.delete(actor.workshopId, id);
-    await this.records.audit(actor, { machineId: row.machineId, recordType: 'axis', recordId: id, action: 'deleted', summary: `Axis ${row.name} removed with ${trialIds.length} travel trial(s) and ${runIds.length} repeat-and-reverse run(s)` });
+    await this.records.audit(actor, {
+      machineId: row.machineId,
+      recordType: 'axis',
+      recordId: id,
+      action: 'deleted',
+      summary: `Axis ${row.name} removed with ${trialIds.length} travel trial(s) and ${runIds.length} repeat-and-reverse run(s)`,
+    });
   }
 
   private async assertNameFree(actor: SessionUser, machineId: string, name: string, exceptId: string | null) {
-    const taken = (await this.repo.list(actor.workshopId, machineId)).some((a) => a.id !== exceptId && a.name.toLowerCase() === name.toLowerCase());
+    const taken = (await this.repo.list(actor.workshopId, machineId)).some(
+      (a) => a.id !== exceptId && a.name.toLowerCase() === name.toLowerCase(),
+    );
     if (taken) throw new ConflictException(`This machine already has an axis named ${name}`);
   }
 }
 
 /** The measured travel in mm from `measuredTravel` (in the axis's unit) or `measuredTravelMm`; undefined when neither is sent. */
-function travelMm(inUnit: number | null | undefined, mm: number | null | undefined, unit: LengthUnit): number | null | undefined {
-  if (inUnit !== undefined && mm !== undefined) throw new BadRequestException(['measuredTravel and measuredTravelMm give the same thing: send one of them (measuredTravel is in lengthUnit)']);
+function travelMm(
+  inUnit: number | null | undefined,
+  mm: number | null | undefined,
+  unit: LengthUnit,
+): number | null | undefined {
+  if (inUnit !== undefined && mm !== undefined)
+    throw new BadRequestException([
+      'measuredTravel and measuredTravelMm give the same thing: send one of them (measuredTravel is in lengthUnit)',
+    ]);
   const [field, value] = inUnit !== undefined ? ['measuredTravel', inUnit] : ['measuredTravelMm', mm];
-  if (value !== undefined && value !== null && !(value > 0)) throw new BadRequestException([`${field} must be greater than zero`]);
+  if (value !== undefined && value !== null && !(value > 0))
+    throw new BadRequestException([`${field} must be greater than zero`]);
   if (inUnit !== undefined) return inUnit === null ? null : toMm(inUnit, unit);
   return mm;
 }
@@ -173,22 +225,48 @@ function travelMm(inUnit: number | null | undefined, mm: number | null | undefin
 function checkNumbers(v: AxisInsert): void {
   const problems: string[] = [];
   if (!(v.stepsPerMm > 0)) problems.push('stepsPerMm must be greater than zero');
-  if (v.maxFeedRateMmPerMin != null && !(v.maxFeedRateMmPerMin > 0)) problems.push('maxFeedRate must be greater than zero (lengthUnit per minute)');
-  if (v.measuredTravelMm != null && !(v.measuredTravelMm > 0)) problems.push('measuredTravel must be greater than zero');
-  if (!Number.isInteger(v.motorStepsPerRev) || v.motorStepsPerRev <= 0) problems.push('motorStepsPerRev must be a whole number greater than zero');
+  if (v.maxFeedRateMmPerMin != null && !(v.maxFeedRateMmPerMin > 0))
+    problems.push('maxFeedRate must be greater than zero (lengthUnit per minute)');
+  if (v.measuredTravelMm != null && !(v.measuredTravelMm > 0))
+    problems.push('measuredTravel must be greater than zero');
+  if (!Number.isInteger(v.motorStepsPerRev) || v.motorStepsPerRev <= 0)
+    problems.push('motorStepsPerRev must be a whole number greater than zero');
   if (!(v.microsteps > 0)) problems.push('microsteps must be greater than zero');
   if (v.gearRatio != null && !(v.gearRatio > 0)) problems.push('gearRatio must be greater than zero');
   if (problems.length) throw new BadRequestException(problems);
-  evaluateDrive(toEngineDrive(v.drive, { motorStepsPerRev: v.motorStepsPerRev, microsteps: v.microsteps, gearRatio: v.gearRatio ?? 1 }));
+  evaluateDrive(
+    toEngineDrive(v.drive, {
+      motorStepsPerRev: v.motorStepsPerRev,
+      microsteps: v.microsteps,
+      gearRatio: v.gearRatio ?? 1,
+    }),
+  );
 }
 
-function change(actor: SessionUser, from: number, to: number, reason: StepsChange['reason'], trialId?: string): StepsChange {
+function change(
+  actor: SessionUser,
+  from: number,
+  to: number,
+  reason: StepsChange['reason'],
+  trialId?: string,
+): StepsChange {
   return { from, to, at: new Date().toISOString(), by: actor.name, reason, ...(trialId ? { trialId } : {}) };
 }
 
 function diff(before: AxisRow, after: AxisRow): Record<string, unknown> {
   const out: Record<string, unknown> = {};
-  for (const key of ['name', 'lengthUnit', 'drive', 'motorStepsPerRev', 'microsteps', 'gearRatio', 'stepsPerMm', 'maxFeedRateMmPerMin', 'measuredTravelMm', 'notes'] as const) {
+  for (const key of [
+    'name',
+    'lengthUnit',
+    'drive',
+    'motorStepsPerRev',
+    'microsteps',
+    'gearRatio',
+    'stepsPerMm',
+    'maxFeedRateMmPerMin',
+    'measuredTravelMm',
+    'notes',
+  ] as const) {
     if (JSON.stringify(before[key]) !== JSON.stringify(after[key])) out[key] = { from: before[key], to: after[key] };
   }
   return out;

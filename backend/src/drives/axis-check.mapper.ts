@@ -2,7 +2,12 @@ import { toPositioningResponse as positioningResult } from '../calculators/calcu
 import type { TargetValue } from '../database/schema/target-sets.js';
 import type { PositioningResult } from '../engine/positioning.js';
 import type { TravelTrialResult } from '../engine/travel-trial.js';
-import type { PositioningRunListRow, PositioningRunRow, TravelTrialListRow, TravelTrialRow } from './axis-checks.repository.js';
+import type {
+  PositioningRunListRow,
+  PositioningRunRow,
+  TravelTrialListRow,
+  TravelTrialRow,
+} from './axis-checks.repository.js';
 import { positioningVerdicts, travelTrialStatus } from './drive-status.js';
 import type { DriveTargets } from './drive-targets.js';
 import { readableResult, UNREADABLE_RESULT } from '../common/stored-result.js';
@@ -10,8 +15,17 @@ import { storedWarnings } from './result-warnings.js';
 import type { ThermalReference } from '../engine/thermal.js';
 
 /** What a record says about temperature: as recorded, and how the result was referred to 20 °C. */
-function temperatureOf(row: { machineTemperatureC: number | null; scaleTemperatureC: number | null; scaleMaterial: string | null; instrumentResolution: number | null }, result: unknown) {
-  const thermal = result && typeof result === 'object' ? ((result as { thermal?: ThermalReference }).thermal ?? null) : null;
+function temperatureOf(
+  row: {
+    machineTemperatureC: number | null;
+    scaleTemperatureC: number | null;
+    scaleMaterial: string | null;
+    instrumentResolution: number | null;
+  },
+  result: unknown,
+) {
+  const thermal =
+    result && typeof result === 'object' ? ((result as { thermal?: ThermalReference }).thermal ?? null) : null;
   return {
     /** Temperature of the machine while measuring, °C. */
     machineTemperature: row.machineTemperatureC,
@@ -25,8 +39,27 @@ function temperatureOf(row: { machineTemperatureC: number | null; scaleTemperatu
 }
 
 /** The numbers the readers of a stored travel trial and positioning run use. */
-export const TRAVEL_TRIAL_SHAPE = ['correctedStepsPerMm', 'errorPercent', 'scale', 'offsetMm', 'residualMaxMm', 'moves[]', 'moves[].commandedMm', 'moves[].measuredMm', 'moves[].errorMm', 'moves[].residualMm'];
-export const POSITIONING_SHAPE = ['accuracyMm', 'repeatabilityMm', 'reversalMm', 'targets[]', 'targets[].targetMm', 'targets[].meanUpMm', 'targets[].meanDownMm'];
+export const TRAVEL_TRIAL_SHAPE = [
+  'correctedStepsPerMm',
+  'errorPercent',
+  'scale',
+  'offsetMm',
+  'residualMaxMm',
+  'moves[]',
+  'moves[].commandedMm',
+  'moves[].measuredMm',
+  'moves[].errorMm',
+  'moves[].residualMm',
+];
+export const POSITIONING_SHAPE = [
+  'accuracyMm',
+  'repeatabilityMm',
+  'reversalMm',
+  'targets[]',
+  'targets[].targetMm',
+  'targets[].meanUpMm',
+  'targets[].meanDownMm',
+];
 export const storedTravelTrial = (stored: unknown) => readableResult<TravelTrialResult>(stored, TRAVEL_TRIAL_SHAPE);
 export const storedPositioning = (stored: unknown) => readableResult<PositioningResult>(stored, POSITIONING_SHAPE);
 
@@ -43,7 +76,12 @@ export const travelTrialResult = (r: TravelTrialResult) => ({
   /** Largest residual, in mm. */
   residualMax: r.residualMaxMm,
   /** Each move commanded and measured, its error and its residual, all in mm. */
-  moves: r.moves.map((m) => ({ commanded: m.commandedMm, measured: m.measuredMm, error: m.errorMm, residual: m.residualMm })),
+  moves: r.moves.map((m) => ({
+    commanded: m.commandedMm,
+    measured: m.measuredMm,
+    error: m.errorMm,
+    residual: m.residualMm,
+  })),
   theoryDifferencePercent: r.theoryDifferencePercent ?? null,
   farFromTheory: r.farFromTheory ?? false,
   thermalCorrectionPercent: r.thermalCorrectionPercent ?? 0,
@@ -90,7 +128,13 @@ export function toPositioningRunResponse(row: PositioningRunRow, targets: DriveT
     ...temperatureOf(row, row.result),
     targets: row.targets,
     runs: row.runs,
-    result: r ? { ...positioningResult(r), warnings: storedWarnings(row.result), thermalCorrectionMax: r.thermalCorrectionMaxMm ?? 0 } : null,
+    result: r
+      ? {
+          ...positioningResult(r),
+          warnings: storedWarnings(row.result),
+          thermalCorrectionMax: r.thermalCorrectionMaxMm ?? 0,
+        }
+      : null,
     warnings: storedWarnings(row.result),
     checks,
     status,
@@ -108,7 +152,9 @@ export const POSITIONING_LIST_SHAPE = ['accuracyMm', 'repeatabilityMm', 'reversa
 
 /** A trial in its axis's list: headline figures and status, no moves (the single trial has them). */
 export function toTravelTrialListItem(row: TravelTrialListRow, targets: DriveTargets, locked: boolean) {
-  const r = readableResult<Pick<TravelTrialResult, 'correctedStepsPerMm' | 'errorPercent' | 'scale' | 'offsetMm' | 'residualMaxMm'>>(row.result, TRAVEL_TRIAL_LIST_SHAPE);
+  const r = readableResult<
+    Pick<TravelTrialResult, 'correctedStepsPerMm' | 'errorPercent' | 'scale' | 'offsetMm' | 'residualMaxMm'>
+  >(row.result, TRAVEL_TRIAL_LIST_SHAPE);
   return {
     id: row.id,
     axisId: row.axisId,
@@ -119,7 +165,15 @@ export function toTravelTrialListItem(row: TravelTrialListRow, targets: DriveTar
     throughOrigin: row.throughOrigin,
     moveCount: row.moveCount,
     warnings: storedWarnings(row.result),
-    result: r ? { correctedStepsPerMm: r.correctedStepsPerMm, errorPercent: r.errorPercent, scale: r.scale, offset: r.offsetMm, residualMax: r.residualMaxMm } : null,
+    result: r
+      ? {
+          correctedStepsPerMm: r.correctedStepsPerMm,
+          errorPercent: r.errorPercent,
+          scale: r.scale,
+          offset: r.offsetMm,
+          residualMax: r.residualMaxMm,
+        }
+      : null,
     status: r ? travelTrialStatus(r.errorPercent, targets) : ('outside-target' as const),
     ...(r ? {} : { unreadable: UNREADABLE_RESULT }),
     target: targets.stepsPerMmError.target as TargetValue,
@@ -133,7 +187,10 @@ export function toTravelTrialListItem(row: TravelTrialListRow, targets: DriveTar
 
 /** A run in its axis's list: the three figures against their targets, no deviations (the single run has them). */
 export function toPositioningRunListItem(row: PositioningRunListRow, targets: DriveTargets, locked: boolean) {
-  const r = readableResult<Pick<PositioningResult, 'accuracyMm' | 'repeatabilityMm' | 'reversalMm'>>(row.result, POSITIONING_LIST_SHAPE);
+  const r = readableResult<Pick<PositioningResult, 'accuracyMm' | 'repeatabilityMm' | 'reversalMm'>>(
+    row.result,
+    POSITIONING_LIST_SHAPE,
+  );
   const { checks, status } = verdictsOf(r, targets);
   return {
     id: row.id,
@@ -155,7 +212,10 @@ export function toPositioningRunListItem(row: PositioningRunListRow, targets: Dr
 }
 
 /** A run's three figures against their targets; a run that cannot be read is outside target. */
-function verdictsOf(r: Pick<PositioningResult, 'accuracyMm' | 'repeatabilityMm' | 'reversalMm'> | null, targets: DriveTargets) {
+function verdictsOf(
+  r: Pick<PositioningResult, 'accuracyMm' | 'repeatabilityMm' | 'reversalMm'> | null,
+  targets: DriveTargets,
+) {
   return r
     ? positioningVerdicts({ accuracy: r.accuracyMm, repeatability: r.repeatabilityMm, reversal: r.reversalMm }, targets)
     : { checks: null, status: 'outside-target' as const };

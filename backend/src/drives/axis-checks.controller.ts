@@ -25,7 +25,12 @@ export class AxisChecksController {
 
   /** Newest first, without moves, a page at a time: the next page's cursor comes in the X-Next-Cursor header. */
   @Get('travel-trials')
-  async listTrials(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) axisId: string, @Query() query: PageQuery, @Res({ passthrough: true }) reply: FastifyReply) {
+  async listTrials(
+    @CurrentUser() user: SessionUser,
+    @Param('id', ParseUUIDPipe) axisId: string,
+    @Query() query: PageQuery,
+    @Res({ passthrough: true }) reply: FastifyReply,
+  ) {
     const { items, nextCursor } = await this.trials.list(user, axisId, query);
     if (nextCursor) reply.header(NEXT_CURSOR_HEADER, nextCursor);
     return items;
@@ -33,32 +38,54 @@ export class AxisChecksController {
 
   @Post('travel-trials')
   @Roles(...CALIBRATORS)
-  createTrial(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) axisId: string, @Body() dto: CreateTravelTrialDto) {
+  createTrial(
+    @CurrentUser() user: SessionUser,
+    @Param('id', ParseUUIDPipe) axisId: string,
+    @Body() dto: CreateTravelTrialDto,
+  ) {
     return this.trials.create(user, axisId, dto);
   }
 
   @Get('travel-trials/:trialId')
-  getTrial(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) axisId: string, @Param('trialId', ParseUUIDPipe) id: string) {
+  getTrial(
+    @CurrentUser() user: SessionUser,
+    @Param('id', ParseUUIDPipe) axisId: string,
+    @Param('trialId', ParseUUIDPipe) id: string,
+  ) {
     return this.trials.get(user, axisId, id);
   }
 
   @Post('travel-trials/:trialId/apply')
   @Roles(...CALIBRATORS)
   @HttpCode(200)
-  apply(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) axisId: string, @Param('trialId', ParseUUIDPipe) id: string, @Body() dto: ApplyTravelTrialDto) {
+  apply(
+    @CurrentUser() user: SessionUser,
+    @Param('id', ParseUUIDPipe) axisId: string,
+    @Param('trialId', ParseUUIDPipe) id: string,
+    @Body() dto: ApplyTravelTrialDto,
+  ) {
     return this.trials.apply(user, axisId, id, dto ?? {});
   }
 
   @Delete('travel-trials/:trialId')
   @Roles(...CALIBRATORS)
   @HttpCode(204)
-  deleteTrial(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) axisId: string, @Param('trialId', ParseUUIDPipe) id: string) {
+  deleteTrial(
+    @CurrentUser() user: SessionUser,
+    @Param('id', ParseUUIDPipe) axisId: string,
+    @Param('trialId', ParseUUIDPipe) id: string,
+  ) {
     return this.trials.delete(user, axisId, id);
   }
 
   /** Newest first, without deviations, a page at a time, as the trials. */
   @Get('positioning-runs')
-  async listRuns(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) axisId: string, @Query() query: PageQuery, @Res({ passthrough: true }) reply: FastifyReply) {
+  async listRuns(
+    @CurrentUser() user: SessionUser,
+    @Param('id', ParseUUIDPipe) axisId: string,
+    @Query() query: PageQuery,
+    @Res({ passthrough: true }) reply: FastifyReply,
+  ) {
     const { items, nextCursor } = await this.runs.list(user, axisId, query);
     if (nextCursor) reply.header(NEXT_CURSOR_HEADER, nextCursor);
     return items;
@@ -66,31 +93,52 @@ export class AxisChecksController {
 
   @Post('positioning-runs')
   @Roles(...CALIBRATORS)
-  createRun(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) axisId: string, @Body() dto: CreatePositioningRunDto) {
+  createRun(
+    @CurrentUser() user: SessionUser,
+    @Param('id', ParseUUIDPipe) axisId: string,
+    @Body() dto: CreatePositioningRunDto,
+  ) {
     return this.runs.create(user, axisId, dto);
   }
 
   @Get('positioning-runs/:runId')
-  getRun(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) axisId: string, @Param('runId', ParseUUIDPipe) id: string) {
+  getRun(
+    @CurrentUser() user: SessionUser,
+    @Param('id', ParseUUIDPipe) axisId: string,
+    @Param('runId', ParseUUIDPipe) id: string,
+  ) {
     return this.runs.get(user, axisId, id);
   }
 
   @Delete('positioning-runs/:runId')
   @Roles(...CALIBRATORS)
   @HttpCode(204)
-  deleteRun(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) axisId: string, @Param('runId', ParseUUIDPipe) id: string) {
+  deleteRun(
+    @CurrentUser() user: SessionUser,
+    @Param('id', ParseUUIDPipe) axisId: string,
+    @Param('runId', ParseUUIDPipe) id: string,
+  ) {
     return this.runs.delete(user, axisId, id);
   }
 
   /** The default targets of the repeat-and-reverse program, for the entry grid to use the same list. */
   @Get('test-targets')
-  testTargets(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) axisId: string, @Query() q: TestTargetsQuery) {
+  testTargets(
+    @CurrentUser() user: SessionUser,
+    @Param('id', ParseUUIDPipe) axisId: string,
+    @Query() q: TestTargetsQuery,
+  ) {
     return this.programs.targets(user, axisId, q);
   }
 
   @Get('test-program')
   @ApiProduces('text/plain')
-  async testProgram(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) axisId: string, @Query() q: TestProgramQuery, @Res({ passthrough: true }) reply: FastifyReply) {
+  async testProgram(
+    @CurrentUser() user: SessionUser,
+    @Param('id', ParseUUIDPipe) axisId: string,
+    @Query() q: TestProgramQuery,
+    @Res({ passthrough: true }) reply: FastifyReply,
+  ) {
     const { filename, text } = await this.programs.program(user, axisId, q);
     reply.header('Content-Type', 'text/plain; charset=utf-8');
     reply.header('Content-Disposition', contentDisposition(filename));

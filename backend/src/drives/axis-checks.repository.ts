@@ -18,7 +18,8 @@ export type LatestTrial = LatestAxisCheck & { stepsPerMmUsed: number; appliedAt:
 /** The figures the board and the Drives tab read; the certificate's series needs the whole result. */
 const TRIAL_FIGURES = ['errorPercent', 'correctedStepsPerMm', 'warnings'];
 const RUN_FIGURES = ['accuracyMm', 'repeatabilityMm', 'reversalMm', 'warnings'];
-const figures = (names: string[]) => sql.raw(`jsonb_build_object(${names.map((n) => `'${n}', x.result->'${n}'`).join(', ')})`);
+const figures = (names: string[]) =>
+  sql.raw(`jsonb_build_object(${names.map((n) => `'${n}', x.result->'${n}'`).join(', ')})`);
 /** A travel trial as a page of its axis's list shows it: the headline figures, no moves. */
 export interface TravelTrialListRow {
   id: string;
@@ -52,15 +53,28 @@ export interface PositioningRunListRow {
   createdAt: Date;
 }
 
-const TRIAL_LIST_FIGURES = ['correctedStepsPerMm', 'errorPercent', 'scale', 'offsetMm', 'residualMaxMm', 'farFromTheory', 'warnings'];
+const TRIAL_LIST_FIGURES = [
+  'correctedStepsPerMm',
+  'errorPercent',
+  'scale',
+  'offsetMm',
+  'residualMaxMm',
+  'farFromTheory',
+  'warnings',
+];
 // A damaged row may hold something other than a list; it counts as none rather than failing the page.
-const lengthOf = (column: string) => sql.raw(`case jsonb_typeof(x.${column}) when 'array' then jsonb_array_length(x.${column}) else 0 end`);
+const lengthOf = (column: string) =>
+  sql.raw(`case jsonb_typeof(x.${column}) when 'array' then jsonb_array_length(x.${column}) else 0 end`);
 /** Rows after the cursor's record in newest-first order (none when the cursor is not of this axis). */
 const afterCursor = (table: string, workshopId: string, axisId: string, afterId: string | null) =>
   afterId
     ? sql`and (x.created_at, x.id) < (select c.created_at, c.id from ${sql.raw(table)} c where c.id = ${afterId} and c.workshop_id = ${workshopId} and c.axis_id = ${axisId})`
     : sql``;
-const uuidArray = (ids: string[]) => sql`array[${sql.join(ids.map((id) => sql`${id}`), sql`, `)}]::uuid[]`;
+const uuidArray = (ids: string[]) =>
+  sql`array[${sql.join(
+    ids.map((id) => sql`${id}`),
+    sql`, `,
+  )}]::uuid[]`;
 
 /** Travel trials and repeat-and-reverse runs of axes, newest first. */
 @Injectable()
@@ -71,7 +85,12 @@ export class AxisChecksRepository {
    * A page of the axis's trials, newest first, summary columns only: `limit + 1` rows so the
    * caller knows whether another page follows. Walks travel_trials_axis_idx from the cursor.
    */
-  async trialPage(workshopId: string, axisId: string, afterId: string | null, limit: number): Promise<TravelTrialListRow[]> {
+  async trialPage(
+    workshopId: string,
+    axisId: string,
+    afterId: string | null,
+    limit: number,
+  ): Promise<TravelTrialListRow[]> {
     const { rows } = await this.db.execute<{
       id: string;
       axis_id: string;
@@ -119,12 +138,18 @@ export class AxisChecksRepository {
   }
 
   async trialById(workshopId: string, id: string): Promise<TravelTrialRow | null> {
-    const [row] = await this.db.select().from(travelTrials).where(and(eq(travelTrials.workshopId, workshopId), eq(travelTrials.id, id)));
+    const [row] = await this.db
+      .select()
+      .from(travelTrials)
+      .where(and(eq(travelTrials.workshopId, workshopId), eq(travelTrials.id, id)));
     return row ?? null;
   }
 
   async runById(workshopId: string, id: string): Promise<PositioningRunRow | null> {
-    const [row] = await this.db.select().from(positioningRuns).where(and(eq(positioningRuns.workshopId, workshopId), eq(positioningRuns.id, id)));
+    const [row] = await this.db
+      .select()
+      .from(positioningRuns)
+      .where(and(eq(positioningRuns.workshopId, workshopId), eq(positioningRuns.id, id)));
     return row ?? null;
   }
 
@@ -147,7 +172,12 @@ export class AxisChecksRepository {
   }
 
   /** A page of the axis's runs, newest first, summary columns only (`limit + 1` rows, as trialPage). */
-  async runPage(workshopId: string, axisId: string, afterId: string | null, limit: number): Promise<PositioningRunListRow[]> {
+  async runPage(
+    workshopId: string,
+    axisId: string,
+    afterId: string | null,
+    limit: number,
+  ): Promise<PositioningRunListRow[]> {
     const { rows } = await this.db.execute<{
       id: string;
       axis_id: string;
@@ -184,7 +214,9 @@ export class AxisChecksRepository {
     const [row] = await this.db
       .select()
       .from(positioningRuns)
-      .where(and(eq(positioningRuns.workshopId, workshopId), eq(positioningRuns.axisId, axisId), eq(positioningRuns.id, id)));
+      .where(
+        and(eq(positioningRuns.workshopId, workshopId), eq(positioningRuns.axisId, axisId), eq(positioningRuns.id, id)),
+      );
     return row ?? null;
   }
 
@@ -194,7 +226,9 @@ export class AxisChecksRepository {
   }
 
   async deleteRun(workshopId: string, id: string): Promise<void> {
-    await this.db.delete(positioningRuns).where(and(eq(positioningRuns.workshopId, workshopId), eq(positioningRuns.id, id)));
+    await this.db
+      .delete(positioningRuns)
+      .where(and(eq(positioningRuns.workshopId, workshopId), eq(positioningRuns.id, id)));
   }
 
   /**
@@ -203,7 +237,14 @@ export class AxisChecksRepository {
    */
   async latestTrials(workshopId: string, axisIds: string[], full = true): Promise<Map<string, LatestTrial>> {
     if (!axisIds.length) return new Map();
-    const { rows } = await this.db.execute<{ id: string; axis_id: string; created_at: string; steps_per_mm_used: number; applied_at: string | null; result: Record<string, unknown> }>(sql`
+    const { rows } = await this.db.execute<{
+      id: string;
+      axis_id: string;
+      created_at: string;
+      steps_per_mm_used: number;
+      applied_at: string | null;
+      result: Record<string, unknown>;
+    }>(sql`
       select t.* from unnest(${uuidArray(axisIds)}) as a(id)
       cross join lateral (
         select x.id, x.axis_id, x.created_at, x.steps_per_mm_used, x.applied_at, ${full ? sql`x.result` : figures(TRIAL_FIGURES)} as result
@@ -213,7 +254,14 @@ export class AxisChecksRepository {
     return new Map(
       rows.map((r) => [
         r.axis_id,
-        { id: r.id, axisId: r.axis_id, createdAt: new Date(r.created_at), stepsPerMmUsed: Number(r.steps_per_mm_used), appliedAt: r.applied_at ? new Date(r.applied_at) : null, result: r.result },
+        {
+          id: r.id,
+          axisId: r.axis_id,
+          createdAt: new Date(r.created_at),
+          stepsPerMmUsed: Number(r.steps_per_mm_used),
+          appliedAt: r.applied_at ? new Date(r.applied_at) : null,
+          result: r.result,
+        },
       ]),
     );
   }
@@ -221,21 +269,37 @@ export class AxisChecksRepository {
   /** The newest run of each axis listed, the same way. */
   async latestRuns(workshopId: string, axisIds: string[], full = true): Promise<Map<string, LatestAxisCheck>> {
     if (!axisIds.length) return new Map();
-    const { rows } = await this.db.execute<{ id: string; axis_id: string; created_at: string; result: Record<string, unknown> }>(sql`
+    const { rows } = await this.db.execute<{
+      id: string;
+      axis_id: string;
+      created_at: string;
+      result: Record<string, unknown>;
+    }>(sql`
       select r.* from unnest(${uuidArray(axisIds)}) as a(id)
       cross join lateral (
         select x.id, x.axis_id, x.created_at, ${full ? sql`x.result` : figures(RUN_FIGURES)} as result
         from positioning_runs x where x.workshop_id = ${workshopId} and x.axis_id = a.id
         order by x.created_at desc limit 1
       ) r`);
-    return new Map(rows.map((r) => [r.axis_id, { id: r.id, axisId: r.axis_id, createdAt: new Date(r.created_at), result: r.result }]));
+    return new Map(
+      rows.map((r) => [
+        r.axis_id,
+        { id: r.id, axisId: r.axis_id, createdAt: new Date(r.created_at), result: r.result },
+      ]),
+    );
   }
 
   /** Ids of every trial and run of an axis (to check approval locks before deleting it). */
   async idsOfAxis(workshopId: string, axisId: string) {
     const [trials, runs] = await Promise.all([
-      this.db.select({ id: travelTrials.id }).from(travelTrials).where(and(eq(travelTrials.workshopId, workshopId), eq(travelTrials.axisId, axisId))),
-      this.db.select({ id: positioningRuns.id }).from(positioningRuns).where(and(eq(positioningRuns.workshopId, workshopId), eq(positioningRuns.axisId, axisId))),
+      this.db
+        .select({ id: travelTrials.id })
+        .from(travelTrials)
+        .where(and(eq(travelTrials.workshopId, workshopId), eq(travelTrials.axisId, axisId))),
+      this.db
+        .select({ id: positioningRuns.id })
+        .from(positioningRuns)
+        .where(and(eq(positioningRuns.workshopId, workshopId), eq(positioningRuns.axisId, axisId))),
     ]);
     return { trialIds: trials.map((t) => t.id), runIds: runs.map((r) => r.id) };
   }

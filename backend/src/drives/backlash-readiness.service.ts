@@ -29,7 +29,10 @@ export class BacklashReadinessService implements OnModuleInit {
   async checksFor(machine: MachineRef, context: ReadinessContext): Promise<ReadinessCheck[]> {
     const rows = await this.axes.list(machine.workshopId, machine.id);
     if (!rows.length) return [];
-    const latest = await this.repo.latest(machine.workshopId, rows.map((a) => a.id));
+    const latest = await this.repo.latest(
+      machine.workshopId,
+      rows.map((a) => a.id),
+    );
     const target = targetIn(context, 'reversal');
     return rows.map((axis): ReadinessCheck => {
       const row = latest.get(axis.id);
@@ -39,7 +42,9 @@ export class BacklashReadinessService implements OnModuleInit {
       const shown = (mm: number) => `${+fromMm(mm, unit).toPrecision(4)} ${unit}`;
       const summary = r
         ? `largest ${shown(r.backlashMm)} at ${+r.worstPositionMm.toFixed(3)} mm of ${r.positions.length} positions (mean ${shown(r.meanBacklashMm)})`
-        : unreadable ? UNREADABLE_RESULT : 'No backlash check recorded yet';
+        : unreadable
+          ? UNREADABLE_RESULT
+          : 'No backlash check recorded yet';
       return {
         key: `backlash:${axis.id}`,
         kind: 'backlash',
@@ -58,7 +63,12 @@ export class BacklashReadinessService implements OnModuleInit {
                 title: `Backlash at each position. ${BACKLASH_DEFINITION}`,
                 x: { label: 'Position', unit: 'mm' },
                 y: { label: 'Backlash', unit: 'um' },
-                lines: [{ label: 'Backlash', points: r.positions.map((p): [number, number] => [p.positionMm, p.backlashMm * 1000]) }],
+                lines: [
+                  {
+                    label: 'Backlash',
+                    points: r.positions.map((p): [number, number] => [p.positionMm, p.backlashMm * 1000]),
+                  },
+                ],
                 limits: [{ label: 'Target', value: target.base * 1000 }],
               },
             }

@@ -15,7 +15,12 @@ export class BacklashController {
 
   /** Newest first, a page at a time: the next page's cursor comes in the X-Next-Cursor header. */
   @Get()
-  async list(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) axisId: string, @Query() query: PageQuery, @Res({ passthrough: true }) reply: FastifyReply) {
+  async list(
+    @CurrentUser() user: SessionUser,
+    @Param('id', ParseUUIDPipe) axisId: string,
+    @Query() query: PageQuery,
+    @Res({ passthrough: true }) reply: FastifyReply,
+  ) {
     const { items, nextCursor } = await this.backlash.list(user, axisId, query);
     if (nextCursor) reply.header(NEXT_CURSOR_HEADER, nextCursor);
     return items;
@@ -23,19 +28,31 @@ export class BacklashController {
 
   @Post()
   @Roles(...CALIBRATORS)
-  create(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) axisId: string, @Body() dto: CreateBacklashCheckDto) {
+  create(
+    @CurrentUser() user: SessionUser,
+    @Param('id', ParseUUIDPipe) axisId: string,
+    @Body() dto: CreateBacklashCheckDto,
+  ) {
     return this.backlash.create(user, axisId, dto);
   }
 
   @Get(':checkId')
-  get(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) axisId: string, @Param('checkId', ParseUUIDPipe) id: string) {
+  get(
+    @CurrentUser() user: SessionUser,
+    @Param('id', ParseUUIDPipe) axisId: string,
+    @Param('checkId', ParseUUIDPipe) id: string,
+  ) {
     return this.backlash.get(user, axisId, id);
   }
 
   @Delete(':checkId')
   @Roles(...CALIBRATORS)
   @HttpCode(204)
-  delete(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) axisId: string, @Param('checkId', ParseUUIDPipe) id: string) {
+  delete(
+    @CurrentUser() user: SessionUser,
+    @Param('id', ParseUUIDPipe) axisId: string,
+    @Param('checkId', ParseUUIDPipe) id: string,
+  ) {
     return this.backlash.delete(user, axisId, id);
   }
 }

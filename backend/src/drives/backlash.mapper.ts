@@ -30,10 +30,16 @@ export const storedBacklash = (stored: unknown) => readableResult<BacklashResult
 const unitOf = (value: string): LengthUnit => (isLengthUnit(value) ? value : 'mm');
 
 export type BacklashStatus = 'within-target' | 'outside-target';
-export const backlashStatus = (backlashMm: number, target: Target): BacklashStatus => (backlashMm <= target.base ? 'within-target' : 'outside-target');
+export const backlashStatus = (backlashMm: number, target: Target): BacklashStatus =>
+  backlashMm <= target.base ? 'within-target' : 'outside-target';
 
 /** Warnings of a stored result against the target in force now. */
-export function warningsOf(r: BacklashResult, resolution: number | null, readingUnit: string, target: Target): ResultWarning[] {
+export function warningsOf(
+  r: BacklashResult,
+  resolution: number | null,
+  readingUnit: string,
+  target: Target,
+): ResultWarning[] {
   const resolutionMm = resolution === null ? null : toMm(resolution, unitOf(readingUnit));
   return backlashWarnings(r.positions, resolutionMm, target.base);
 }

@@ -15,7 +15,11 @@ export interface LatestBacklash {
   result: Record<string, unknown>;
 }
 
-const uuidArray = (ids: string[]) => sql`array[${sql.join(ids.map((id) => sql`${id}`), sql`, `)}]::uuid[]`;
+const uuidArray = (ids: string[]) =>
+  sql`array[${sql.join(
+    ids.map((id) => sql`${id}`),
+    sql`, `,
+  )}]::uuid[]`;
 
 /** Backlash checks of axes, newest first. */
 @Injectable()
@@ -39,12 +43,17 @@ export class BacklashRepository {
     const [row] = await this.db
       .select()
       .from(backlashChecks)
-      .where(and(eq(backlashChecks.workshopId, workshopId), eq(backlashChecks.axisId, axisId), eq(backlashChecks.id, id)));
+      .where(
+        and(eq(backlashChecks.workshopId, workshopId), eq(backlashChecks.axisId, axisId), eq(backlashChecks.id, id)),
+      );
     return row ?? null;
   }
 
   async byId(workshopId: string, id: string): Promise<BacklashCheckRow | null> {
-    const [row] = await this.db.select().from(backlashChecks).where(and(eq(backlashChecks.workshopId, workshopId), eq(backlashChecks.id, id)));
+    const [row] = await this.db
+      .select()
+      .from(backlashChecks)
+      .where(and(eq(backlashChecks.workshopId, workshopId), eq(backlashChecks.id, id)));
     return row ?? null;
   }
 
@@ -54,13 +63,22 @@ export class BacklashRepository {
   }
 
   async delete(workshopId: string, id: string): Promise<void> {
-    await this.db.delete(backlashChecks).where(and(eq(backlashChecks.workshopId, workshopId), eq(backlashChecks.id, id)));
+    await this.db
+      .delete(backlashChecks)
+      .where(and(eq(backlashChecks.workshopId, workshopId), eq(backlashChecks.id, id)));
   }
 
   /** The newest check of each axis listed: one index step per axis (backlash_checks_axis_idx). */
   async latest(workshopId: string, axisIds: string[]): Promise<Map<string, LatestBacklash>> {
     if (!axisIds.length) return new Map();
-    const { rows } = await this.db.execute<{ id: string; axis_id: string; created_at: string; reading_unit: string; resolution: number | null; result: Record<string, unknown> }>(sql`
+    const { rows } = await this.db.execute<{
+      id: string;
+      axis_id: string;
+      created_at: string;
+      reading_unit: string;
+      resolution: number | null;
+      result: Record<string, unknown>;
+    }>(sql`
       select b.* from unnest(${uuidArray(axisIds)}) as a(id)
       cross join lateral (
         select x.id, x.axis_id, x.created_at, x.reading_unit, x.resolution, x.result
@@ -70,7 +88,14 @@ export class BacklashRepository {
     return new Map(
       rows.map((r) => [
         r.axis_id,
-        { id: r.id, axisId: r.axis_id, createdAt: new Date(r.created_at), readingUnit: r.reading_unit, resolution: r.resolution === null ? null : Number(r.resolution), result: r.result },
+        {
+          id: r.id,
+          axisId: r.axis_id,
+          createdAt: new Date(r.created_at),
+          readingUnit: r.reading_unit,
+          resolution: r.resolution === null ? null : Number(r.resolution),
+          result: r.result,
+        },
       ]),
     );
   }

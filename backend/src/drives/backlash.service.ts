@@ -33,17 +33,31 @@ export class BacklashService implements OnModuleInit {
       const row = await this.repo.byId(workshopId, id);
       if (!row) return null;
       const axis = await this.axes.findRow({ workshopId }, row.axisId);
-      return { machineId: row.machineId, recordType: BACKLASH_RECORD, recordId: id, label: `Backlash check of ${axis.name}` };
+      return {
+        machineId: row.machineId,
+        recordType: BACKLASH_RECORD,
+        recordId: id,
+        label: `Backlash check of ${axis.name}`,
+      };
     });
   }
 
   async list(actor: SessionUser, axisId: string, query: PageQuery = {}) {
     const axis = await this.axes.findRow(actor, axisId);
     const limit = query.limit ?? DEFAULT_PAGE_SIZE;
-    const [rows, target] = await Promise.all([this.repo.page(actor.workshopId, axisId, query.cursor ?? null, limit), this.targetOf(actor, axis.machineId)]);
+    const [rows, target] = await Promise.all([
+      this.repo.page(actor.workshopId, axisId, query.cursor ?? null, limit),
+      this.targetOf(actor, axis.machineId),
+    ]);
     const page = rows.slice(0, limit);
-    const locked = await this.records.lockedIds(BACKLASH_RECORD, page.map((r) => r.id));
-    return { items: page.map((r) => toBacklashResponse(r, target, locked.has(r.id))), nextCursor: rows.length > limit ? page[page.length - 1].id : null };
+    const locked = await this.records.lockedIds(
+      BACKLASH_RECORD,
+      page.map((r) => r.id),
+    );
+    return {
+      items: page.map((r) => toBacklashResponse(r, target, locked.has(r.id))),
+      nextCursor: rows.length > limit ? page[page.length - 1].id : null,
+    };
   }
 
   async get(actor: SessionUser, axisId: string, id: string) {
@@ -58,11 +72,19 @@ export class BacklashService implements OnModuleInit {
     await this.machines.lockForChange(actor, axis.machineId);
     const lengthUnit = dto.lengthUnit ?? 'mm';
     const readingUnit = dto.readingUnit ?? 'mm';
-    const problems = positionProblems(dto.positions.map((p) => p.position), lengthUnit, axis.measuredTravelMm);
+    const problems = positionProblems(
+      dto.positions.map((p) => p.position),
+      lengthUnit,
+      axis.measuredTravelMm,
+    );
     if (problems.length) throw new BadRequestException(problems);
     const target = await this.targetOf(actor, axis.machineId);
     const result = evaluateBacklash({
-      positions: dto.positions.map((p) => ({ positionMm: toMm(p.position, lengthUnit), upMm: arrayToMm(p.up, readingUnit), downMm: arrayToMm(p.down, readingUnit) })),
+      positions: dto.positions.map((p) => ({
+        positionMm: toMm(p.position, lengthUnit),
+        upMm: arrayToMm(p.up, readingUnit),
+        downMm: arrayToMm(p.down, readingUnit),
+      })),
       resolutionMm: dto.resolution === undefined ? null : toMm(dto.resolution, readingUnit),
       targetMm: target.base,
     });
@@ -83,7 +105,13 @@ export class BacklashService implements OnModuleInit {
     const shown = (mm: number) => `${fromMm(mm, readingUnit).toPrecision(3)} ${readingUnit}`;
     await this.records.checkRecorded(
       actor,
-      { machineId: axis.machineId, kind: 'backlash', recordType: BACKLASH_RECORD, recordId: row.id, status: response.status },
+      {
+        machineId: axis.machineId,
+        kind: 'backlash',
+        recordType: BACKLASH_RECORD,
+        recordId: row.id,
+        status: response.status,
+      },
       `Backlash check of axis ${axis.name}: largest ${shown(result.backlashMm)} at ${fromMm(result.worstPositionMm, lengthUnit)} ${lengthUnit} over ${result.positions.length} positions`,
     );
     return response;
@@ -94,7 +122,13 @@ export class BacklashService implements OnModuleInit {
     await this.machines.lockForChange(actor, row.machineId);
     await this.records.assertEditable(BACKLASH_RECORD, id, 'This backlash check');
     await this.repo.delete(actor.workshopId, id);
-    await this.records.audit(actor, { machineId: row.machineId, recordType: BACKLASH_RECORD, recordId: id, action: 'deleted', summary: 'Backlash check deleted' });
+    await this.records.audit(actor, {
+      machineId: row.machineId,
+      recordType: BACKLASH_RECORD,
+      recordId: id,
+      action: 'deleted',
+      summary: 'Backlash check deleted',
+    });
   }
 
   private async findRow(actor: SessionUser, axisId: string, id: string): Promise<BacklashCheckRow> {

@@ -24,14 +24,32 @@ const fmt = (v: number, d = 3) => v.toFixed(d);
 
 // The headline figures the board and the Drives tab read; the whole result (with the moves and
 // per-target means) is read only for the certificate's series.
-const trialFigures = (stored: unknown) => readableResult<Pick<TravelTrialResult, 'errorPercent' | 'correctedStepsPerMm'>>(stored, ['errorPercent', 'correctedStepsPerMm']);
-const runFigures = (stored: unknown) => readableResult<Pick<PositioningResult, 'accuracyMm' | 'repeatabilityMm' | 'reversalMm'>>(stored, ['accuracyMm', 'repeatabilityMm', 'reversalMm']);
+const trialFigures = (stored: unknown) =>
+  readableResult<Pick<TravelTrialResult, 'errorPercent' | 'correctedStepsPerMm'>>(stored, [
+    'errorPercent',
+    'correctedStepsPerMm',
+  ]);
+const runFigures = (stored: unknown) =>
+  readableResult<Pick<PositioningResult, 'accuracyMm' | 'repeatabilityMm' | 'reversalMm'>>(stored, [
+    'accuracyMm',
+    'repeatabilityMm',
+    'reversalMm',
+  ]);
 
-const DRIVE_TARGET_KEYS: Record<DriveTargetKey, true> = { stepsPerMmError: true, positioningAccuracy: true, repeatability: true, reversal: true, screwSpeedHeadroom: true, travelMargin: true };
+const DRIVE_TARGET_KEYS: Record<DriveTargetKey, true> = {
+  stepsPerMmError: true,
+  positioningAccuracy: true,
+  repeatability: true,
+  reversal: true,
+  screwSpeedHeadroom: true,
+  travelMargin: true,
+};
 
 /** The drive targets out of a target set read once for the whole readiness read. */
 function driveTargetsOf(context: ReadinessContext): DriveTargets {
-  return Object.fromEntries((Object.keys(DRIVE_TARGET_KEYS) as DriveTargetKey[]).map((k) => [k, targetIn(context, k)])) as DriveTargets;
+  return Object.fromEntries(
+    (Object.keys(DRIVE_TARGET_KEYS) as DriveTargetKey[]).map((k) => [k, targetIn(context, k)]),
+  ) as DriveTargets;
 }
 /** Feeds in inches keep two decimals; in mm, µm or thou a whole number is enough. */
 const formatFeed = (v: number, unit: string) => (unit === 'in' ? v.toFixed(2) : String(Math.round(v)));
@@ -46,7 +64,6 @@ function speedWarnings(speed: ReturnType<typeof speedCheckOf>): ResultWarning[] 
     },
   ];
 }
-
 
 /**
  * The drive checks of a machine as the readiness board and the Drives tab see them: per axis the
@@ -77,19 +94,36 @@ export class DriveChecksService implements OnModuleInit {
   private async axisSaved(actor: SessionUser, row: AxisRow, before: AxisRow | null) {
     const machine = await this.machines.getRef(actor, row.machineId);
     const targets = await this.targets.forMachine(machine);
-    const changed = (keys: (keyof AxisRow)[]) => !before || keys.some((k) => JSON.stringify(before[k]) !== JSON.stringify(row[k]));
+    const changed = (keys: (keyof AxisRow)[]) =>
+      !before || keys.some((k) => JSON.stringify(before[k]) !== JSON.stringify(row[k]));
     const speed = speedCheckOf(row, targets);
     if (speed.rpm !== null && changed(['drive', 'maxFeedRateMmPerMin'])) {
       await this.records.checkRecorded(
         actor,
-        { machineId: machine.id, kind: 'speed-check', recordType: 'axis', recordId: row.id, status: speed.status as 'within-target' | 'outside-target' },
+        {
+          machineId: machine.id,
+          kind: 'speed-check',
+          recordType: 'axis',
+          recordId: row.id,
+          status: speed.status as 'within-target' | 'outside-target',
+        },
         `Speed check of axis ${row.name}: ${Math.round(speed.rpm)} rpm at ${speed.feedRate} ${speed.lengthUnit}/min, permissible ${Math.round(speed.permissibleSpeed!)} rpm, d·n limit ${Math.round(speed.dnLimitSpeed!)} rpm, ${speed.headroomPercent!.toFixed(0)} % headroom`,
       );
     }
     if (row.measuredTravelMm !== null && changed(['measuredTravelMm', 'name'])) {
       const envelope = travelEnvelopeOf(machine, await this.axesRepo.list(machine.workshopId, machine.id), targets);
       if (envelope.status !== 'not-started' && envelope.axes.some((a) => a.axisId === row.id)) {
-        await this.records.checkRecorded(actor, { machineId: machine.id, kind: 'travel-envelope', recordType: 'axis', recordId: row.id, status: envelope.status }, `Travel envelope: ${envelope.summary}`);
+        await this.records.checkRecorded(
+          actor,
+          {
+            machineId: machine.id,
+            kind: 'travel-envelope',
+            recordType: 'axis',
+            recordId: row.id,
+            status: envelope.status,
+          },
+          `Travel envelope: ${envelope.summary}`,
+        );
       }
     }
   }
@@ -107,7 +141,13 @@ export class DriveChecksService implements OnModuleInit {
       target: { ...envelope.margin, label: TARGET_LABELS.travelMargin },
       result: envelope.axes.some((a) => a.spare !== null)
         ? // The smallest margin beyond the work area, read against the margin the target asks for.
-          { value: Math.min(...envelope.axes.filter((a) => a.measuredTravel !== null).map((a) => a.measuredTravel! - a.workSize)), unit: 'mm', summary: envelope.summary }
+          {
+            value: Math.min(
+              ...envelope.axes.filter((a) => a.measuredTravel !== null).map((a) => a.measuredTravel! - a.workSize),
+            ),
+            unit: 'mm',
+            summary: envelope.summary,
+          }
         : null,
       recordType: null,
       recordId: null,
@@ -118,7 +158,10 @@ export class DriveChecksService implements OnModuleInit {
   }
 
   /** GET /api/machines/:id/axes: each axis with its latest statuses. */
-  async listWithChecks(actor: SessionUser, machineId: string): Promise<(AxisResponse & { checks: Record<'travelTrial' | 'positioning' | 'speedCheck', AxisCheckSummary> })[]> {
+  async listWithChecks(
+    actor: SessionUser,
+    machineId: string,
+  ): Promise<(AxisResponse & { checks: Record<'travelTrial' | 'positioning' | 'speedCheck', AxisCheckSummary> })[]> {
     const machine = await this.machines.getRef(actor, machineId);
     const rows = await this.axesRepo.list(actor.workshopId, machineId);
     const [responses, targets] = await Promise.all([this.axes.respondMany(rows), this.targets.forMachine(machine)]);
@@ -143,7 +186,10 @@ export class DriveChecksService implements OnModuleInit {
 
   private async axisChecks(machine: MachineRef, rows: AxisRow[], targets: DriveTargets, series: boolean) {
     const ids = rows.map((r) => r.id);
-    const [trials, runs] = await Promise.all([this.checks.latestTrials(machine.workshopId, ids, series), this.checks.latestRuns(machine.workshopId, ids, series)]);
+    const [trials, runs] = await Promise.all([
+      this.checks.latestTrials(machine.workshopId, ids, series),
+      this.checks.latestRuns(machine.workshopId, ids, series),
+    ]);
     return rows.map((axis) => {
       const place = { machineId: machine.id, axisId: axis.id };
       const out: ReadinessCheck[] = [];
@@ -156,8 +202,14 @@ export class DriveChecksService implements OnModuleInit {
       const trialUnreadable = trial !== undefined && tr === null;
       const trialSummary = tr
         ? `${fmt(tr.errorPercent)} % scale error at ${trial!.stepsPerMmUsed} steps/mm; corrected ${fmt(tr.correctedStepsPerMm, 4)} steps/mm${trial!.appliedAt ? ' (applied — record a confirming trial)' : ''}`
-        : trialUnreadable ? UNREADABLE_RESULT : 'No travel trial recorded yet';
-      const trialStatus = tr ? travelTrialStatus(tr.errorPercent, targets) : trialUnreadable ? 'outside-target' : 'not-started';
+        : trialUnreadable
+          ? UNREADABLE_RESULT
+          : 'No travel trial recorded yet';
+      const trialStatus = tr
+        ? travelTrialStatus(tr.errorPercent, targets)
+        : trialUnreadable
+          ? 'outside-target'
+          : 'not-started';
       out.push({
         key: `travel-trial:${axis.id}`,
         kind: 'travel-trial',
@@ -177,23 +229,41 @@ export class DriveChecksService implements OnModuleInit {
                 title: 'Error of each move against the commanded distance',
                 x: { label: 'Commanded', unit: 'mm' },
                 y: { label: 'Measured − commanded', unit: 'mm' },
-                lines: [{ label: `At ${trial!.stepsPerMmUsed} steps/mm`, points: moves.map((m): [number, number] => [m.commandedMm, m.errorMm]) }],
+                lines: [
+                  {
+                    label: `At ${trial!.stepsPerMmUsed} steps/mm`,
+                    points: moves.map((m): [number, number] => [m.commandedMm, m.errorMm]),
+                  },
+                ],
               },
             }
           : {}),
       });
-      summaries.push({ status: trialStatus, summary: trialSummary, headline: tr ? `${tr.errorPercent >= 0 ? '+' : ''}${fmt(tr.errorPercent)} % scale error` : null, recordId: trial?.id ?? null, recordedAt: trial?.createdAt.toISOString() ?? null });
+      summaries.push({
+        status: trialStatus,
+        summary: trialSummary,
+        headline: tr ? `${tr.errorPercent >= 0 ? '+' : ''}${fmt(tr.errorPercent)} % scale error` : null,
+        recordId: trial?.id ?? null,
+        recordedAt: trial?.createdAt.toISOString() ?? null,
+      });
 
       const run = runs.get(axis.id);
       const pr = run ? (series ? storedPositioning(run.result) : runFigures(run.result)) : null;
       const perTarget = pr && 'targets' in pr ? (pr as PositioningResult).targets : null;
       const runUnreadable = run !== undefined && pr === null;
       const verdict = pr
-        ? positioningVerdicts({ accuracy: pr.accuracyMm, repeatability: pr.repeatabilityMm, reversal: pr.reversalMm }, targets)
-        : runUnreadable ? { status: 'outside-target' as const } : null;
+        ? positioningVerdicts(
+            { accuracy: pr.accuracyMm, repeatability: pr.repeatabilityMm, reversal: pr.reversalMm },
+            targets,
+          )
+        : runUnreadable
+          ? { status: 'outside-target' as const }
+          : null;
       const runSummary = pr
         ? `accuracy ${fmt(pr.accuracyMm)} mm, repeatability ${fmt(pr.repeatabilityMm)} mm, reversal ${fmt(pr.reversalMm)} mm`
-        : runUnreadable ? UNREADABLE_RESULT : 'No repeat-and-reverse run recorded yet';
+        : runUnreadable
+          ? UNREADABLE_RESULT
+          : 'No repeat-and-reverse run recorded yet';
       const t = targets;
       out.push({
         key: `positioning:${axis.id}`,
@@ -221,21 +291,45 @@ export class DriveChecksService implements OnModuleInit {
                 // centre a band as wide as the accuracy target on zero.
                 lines: [
                   { label: 'Mean up', points: perTarget.map((p): [number, number] => [p.targetMm, p.meanUpMm * 1000]) },
-                  { label: 'Mean up + 2s', points: perTarget.map((p): [number, number] => [p.targetMm, (p.meanUpMm + 2 * p.sUpMm) * 1000]) },
-                  { label: 'Mean up − 2s', points: perTarget.map((p): [number, number] => [p.targetMm, (p.meanUpMm - 2 * p.sUpMm) * 1000]) },
-                  { label: 'Mean down', points: perTarget.map((p): [number, number] => [p.targetMm, p.meanDownMm * 1000]) },
-                  { label: 'Mean down + 2s', points: perTarget.map((p): [number, number] => [p.targetMm, (p.meanDownMm + 2 * p.sDownMm) * 1000]) },
-                  { label: 'Mean down − 2s', points: perTarget.map((p): [number, number] => [p.targetMm, (p.meanDownMm - 2 * p.sDownMm) * 1000]) },
+                  {
+                    label: 'Mean up + 2s',
+                    points: perTarget.map((p): [number, number] => [p.targetMm, (p.meanUpMm + 2 * p.sUpMm) * 1000]),
+                  },
+                  {
+                    label: 'Mean up − 2s',
+                    points: perTarget.map((p): [number, number] => [p.targetMm, (p.meanUpMm - 2 * p.sUpMm) * 1000]),
+                  },
+                  {
+                    label: 'Mean down',
+                    points: perTarget.map((p): [number, number] => [p.targetMm, p.meanDownMm * 1000]),
+                  },
+                  {
+                    label: 'Mean down + 2s',
+                    points: perTarget.map((p): [number, number] => [p.targetMm, (p.meanDownMm + 2 * p.sDownMm) * 1000]),
+                  },
+                  {
+                    label: 'Mean down − 2s',
+                    points: perTarget.map((p): [number, number] => [p.targetMm, (p.meanDownMm - 2 * p.sDownMm) * 1000]),
+                  },
                 ],
                 limits: [
-                  { label: `+A/2 (accuracy target ${t.positioningAccuracy.target.value} ${t.positioningAccuracy.target.unit})`, value: (t.positioningAccuracy.base / 2) * 1000 },
+                  {
+                    label: `+A/2 (accuracy target ${t.positioningAccuracy.target.value} ${t.positioningAccuracy.target.unit})`,
+                    value: (t.positioningAccuracy.base / 2) * 1000,
+                  },
                   { label: '−A/2', value: (-t.positioningAccuracy.base / 2) * 1000 },
                 ],
               },
             }
           : {}),
       });
-      summaries.push({ status: verdict?.status ?? 'not-started', summary: runSummary, headline: pr ? `accuracy ${fmt(pr.accuracyMm)} mm` : null, recordId: run?.id ?? null, recordedAt: run?.createdAt.toISOString() ?? null });
+      summaries.push({
+        status: verdict?.status ?? 'not-started',
+        summary: runSummary,
+        headline: pr ? `accuracy ${fmt(pr.accuracyMm)} mm` : null,
+        recordId: run?.id ?? null,
+        recordedAt: run?.createdAt.toISOString() ?? null,
+      });
 
       const speed = speedCheckOf(axis, targets);
       const speedSummary =
@@ -248,7 +342,10 @@ export class DriveChecksService implements OnModuleInit {
           kind: 'speed-check',
           subject: `Axis ${axis.name}`,
           status: speed.status as ReadinessCheck['status'],
-          target: { ...targets.screwSpeedHeadroom.target, label: `${TARGET_LABELS.screwSpeedHeadroom}, and within the d·n limit` },
+          target: {
+            ...targets.screwSpeedHeadroom.target,
+            label: `${TARGET_LABELS.screwSpeedHeadroom}, and within the d·n limit`,
+          },
           // Headroom below the lower of the permissible and the d·n limit speeds, read against the headroom the target asks for.
           result: speed.rpm !== null ? { value: speed.headroomPercent!, unit: '%', summary: speedSummary } : null,
           warnings: speedWarnings(speed),
@@ -258,7 +355,14 @@ export class DriveChecksService implements OnModuleInit {
           place,
         });
       }
-      summaries.push({ status: speed.status, summary: speedSummary, headline: speed.rpm !== null ? `${Math.round(speed.rpm)} of ${Math.round(speed.allowedSpeed!)} rpm allowed` : null, recordId: speed.applicable ? axis.id : null, recordedAt: null });
+      summaries.push({
+        status: speed.status,
+        summary: speedSummary,
+        headline:
+          speed.rpm !== null ? `${Math.round(speed.rpm)} of ${Math.round(speed.allowedSpeed!)} rpm allowed` : null,
+        recordId: speed.applicable ? axis.id : null,
+        recordedAt: null,
+      });
       return { checks: out, summaries };
     });
   }

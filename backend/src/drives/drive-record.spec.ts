@@ -13,7 +13,11 @@ describe('drive records', () => {
   });
 
   it('keeps only the fields the drive type uses and names each missing or stray one', () => {
-    expect(toDriveRecord({ type: 'belt', beltPitch: 2, pulleyTeeth: 20 })).toEqual({ type: 'belt', beltPitch: 2, pulleyTeeth: 20 });
+    expect(toDriveRecord({ type: 'belt', beltPitch: 2, pulleyTeeth: 20 })).toEqual({
+      type: 'belt',
+      beltPitch: 2,
+      pulleyTeeth: 20,
+    });
     const refuse = (dto: Parameters<typeof toDriveRecord>[0]) => {
       try {
         toDriveRecord(dto);
@@ -31,8 +35,21 @@ describe('drive records', () => {
   });
 
   it('says what the speed check still needs', () => {
-    expect(missingForSpeedCheck({ type: 'screw', lead: 5, rootDiameter: 12.9 }, null)).toEqual(['drive.nominalDiameter', 'drive.unsupportedLength', 'drive.mounting', 'maxFeedRate']);
-    expect(describeDrive({ type: 'screw', lead: 5, nominalDiameter: 16, unsupportedLength: 1050, mounting: 'fixed-supported' })).toBe('Screw Ø16 mm, lead 5 mm, fixed-supported over 1050 mm');
+    expect(missingForSpeedCheck({ type: 'screw', lead: 5, rootDiameter: 12.9 }, null)).toEqual([
+      'drive.nominalDiameter',
+      'drive.unsupportedLength',
+      'drive.mounting',
+      'maxFeedRate',
+    ]);
+    expect(
+      describeDrive({
+        type: 'screw',
+        lead: 5,
+        nominalDiameter: 16,
+        unsupportedLength: 1050,
+        mounting: 'fixed-supported',
+      }),
+    ).toBe('Screw Ø16 mm, lead 5 mm, fixed-supported over 1050 mm');
   });
 });
 
@@ -65,7 +82,9 @@ describe('default targets of a repeat-and-reverse program', () => {
     expect(describeDrive(acme, 'in')).toBe('Screw Ø0.5 in, 10 threads per inch (lead 0.1 in)');
     // The pinion module is millimetres by definition, whatever the axis's unit.
     expect(toDriveRecord({ type: 'rack', pinionModule: 1.5, pinionTeeth: 20 }, 'in').pinionModule).toBe(1.5);
-    expect(() => toDriveRecord({ type: 'belt', beltPitch: 2, pulleyTeeth: 20, threadsPerInch: 5 })).toThrow(BadRequestException);
+    expect(() => toDriveRecord({ type: 'belt', beltPitch: 2, pulleyTeeth: 20, threadsPerInch: 5 })).toThrow(
+      BadRequestException,
+    );
     expect(() => toDriveRecord({ type: 'screw', threadsPerInch: -5 })).toThrow(BadRequestException);
   });
 });

@@ -7,15 +7,35 @@ import { fromMm, toMm, type LengthUnit } from '../engine/units.js';
 
 /** The fields each drive type uses; the first group is needed for steps per mm. */
 const FIELDS = {
-  screw: { required: ['lead'], optional: ['nominalDiameter', 'rootDiameter', 'unsupportedLength', 'mounting', 'dnLimit'] },
+  screw: {
+    required: ['lead'],
+    optional: ['nominalDiameter', 'rootDiameter', 'unsupportedLength', 'mounting', 'dnLimit'],
+  },
   belt: { required: ['beltPitch', 'pulleyTeeth'], optional: [] },
   rack: { required: ['pinionModule', 'pinionTeeth'], optional: [] },
 } as const;
 
 /** Drive fields that are lengths: typed in the axis's lengthUnit, stored in mm (the pinion module is mm by definition). */
-export const DRIVE_LENGTH_FIELDS = ['lead', 'nominalDiameter', 'rootDiameter', 'unsupportedLength', 'beltPitch'] as const;
+export const DRIVE_LENGTH_FIELDS = [
+  'lead',
+  'nominalDiameter',
+  'rootDiameter',
+  'unsupportedLength',
+  'beltPitch',
+] as const;
 
-const ALL_FIELDS = ['lead', 'nominalDiameter', 'rootDiameter', 'unsupportedLength', 'mounting', 'dnLimit', 'beltPitch', 'pulleyTeeth', 'pinionModule', 'pinionTeeth'] as const;
+const ALL_FIELDS = [
+  'lead',
+  'nominalDiameter',
+  'rootDiameter',
+  'unsupportedLength',
+  'mounting',
+  'dnLimit',
+  'beltPitch',
+  'pulleyTeeth',
+  'pinionModule',
+  'pinionTeeth',
+] as const;
 
 const TYPE_WORDS = { screw: 'a screw', belt: 'a belt', rack: 'a rack-and-pinion' } as const;
 
@@ -28,7 +48,8 @@ export function toDriveRecord(given: DriveDto, unit: LengthUnit = 'mm'): DriveRe
   const tpi = given.threadsPerInch;
   if (tpi !== undefined && tpi !== null) {
     if (given.type !== 'screw') problems.push(`drive.threadsPerInch does not apply to ${TYPE_WORDS[given.type]} drive`);
-    else if (given.lead !== undefined && given.lead !== null) problems.push('drive.lead and drive.threadsPerInch give the same thing: send one of them');
+    else if (given.lead !== undefined && given.lead !== null)
+      problems.push('drive.lead and drive.threadsPerInch give the same thing: send one of them');
     else if (!(tpi > 0)) problems.push('drive.threadsPerInch must be greater than zero');
   }
   if (problems.length) throw new BadRequestException(problems);
@@ -36,12 +57,26 @@ export function toDriveRecord(given: DriveDto, unit: LengthUnit = 'mm'): DriveRe
   const dto: DriveDto = tpi ? { ...given, threadsPerInch: undefined, lead: fromMm(25.4 / tpi, unit) } : given;
   const spec = FIELDS[dto.type];
   const allowed = new Set<string>([...spec.required, ...spec.optional]);
-  for (const f of spec.required) if (dto[f] === undefined || dto[f] === null) problems.push(`drive.${f} is required for ${TYPE_WORDS[dto.type]} drive`);
-  for (const f of ALL_FIELDS) if (!allowed.has(f) && dto[f] !== undefined && dto[f] !== null) problems.push(`drive.${f} does not apply to ${TYPE_WORDS[dto.type]} drive`);
-  const positive = ['lead', 'nominalDiameter', 'rootDiameter', 'unsupportedLength', 'dnLimit', 'beltPitch', 'pinionModule'] as const;
-  for (const f of positive) if (typeof dto[f] === 'number' && !(dto[f]! > 0)) problems.push(`drive.${f} must be greater than zero`);
+  for (const f of spec.required)
+    if (dto[f] === undefined || dto[f] === null)
+      problems.push(`drive.${f} is required for ${TYPE_WORDS[dto.type]} drive`);
+  for (const f of ALL_FIELDS)
+    if (!allowed.has(f) && dto[f] !== undefined && dto[f] !== null)
+      problems.push(`drive.${f} does not apply to ${TYPE_WORDS[dto.type]} drive`);
+  const positive = [
+    'lead',
+    'nominalDiameter',
+    'rootDiameter',
+    'unsupportedLength',
+    'dnLimit',
+    'beltPitch',
+    'pinionModule',
+  ] as const;
+  for (const f of positive)
+    if (typeof dto[f] === 'number' && !(dto[f]! > 0)) problems.push(`drive.${f} must be greater than zero`);
   for (const f of ['pulleyTeeth', 'pinionTeeth'] as const) {
-    if (typeof dto[f] === 'number' && !(Number.isInteger(dto[f]) && dto[f]! > 0)) problems.push(`drive.${f} must be a whole number greater than zero`);
+    if (typeof dto[f] === 'number' && !(Number.isInteger(dto[f]) && dto[f]! > 0))
+      problems.push(`drive.${f} must be a whole number greater than zero`);
   }
   if (dto.type === 'screw' && dto.rootDiameter && dto.nominalDiameter && dto.rootDiameter > dto.nominalDiameter) {
     problems.push('drive.rootDiameter must not be larger than drive.nominalDiameter');
@@ -84,7 +119,8 @@ export function toEngineDrive(drive: DriveRecord, axis: AxisDriveNumbers): Drive
 /** What the speed check still needs, by field name; empty when it can run. */
 export function missingForSpeedCheck(drive: DriveRecord, maxFeedRate: number | null): string[] {
   const missing: string[] = [];
-  for (const f of ['nominalDiameter', 'rootDiameter', 'unsupportedLength', 'mounting'] as const) if (drive[f] === undefined) missing.push(`drive.${f}`);
+  for (const f of ['nominalDiameter', 'rootDiameter', 'unsupportedLength', 'mounting'] as const)
+    if (drive[f] === undefined) missing.push(`drive.${f}`);
   if (maxFeedRate === null) missing.push('maxFeedRate');
   return missing;
 }
@@ -123,7 +159,9 @@ export function describeDrive(drive: DriveRecord, unit: LengthUnit = 'mm'): stri
     case 'screw': {
       const size = d.nominalDiameter ? `Ø${d.nominalDiameter} ${u}, ` : '';
       const mount = d.mounting && d.unsupportedLength ? `, ${d.mounting} over ${d.unsupportedLength} ${u}` : '';
-      const lead = drive.threadsPerInch ? `${drive.threadsPerInch} threads per inch (lead ${d.lead} ${u})` : `lead ${d.lead} ${u}`;
+      const lead = drive.threadsPerInch
+        ? `${drive.threadsPerInch} threads per inch (lead ${d.lead} ${u})`
+        : `lead ${d.lead} ${u}`;
       return `Screw ${size}${lead}${mount}`;
     }
     case 'belt':

@@ -22,8 +22,13 @@ export function positioningVerdicts(r: PositioningFigures, targets: DriveTargets
     targetMm: targets[key].base,
     pass: value <= targets[key].base,
   });
-  const checks = { accuracy: one(r.accuracy, 'positioningAccuracy'), repeatability: one(r.repeatability, 'repeatability'), reversal: one(r.reversal, 'reversal') };
-  const status: DriveCheckStatus = checks.accuracy.pass && checks.repeatability.pass && checks.reversal.pass ? 'within-target' : 'outside-target';
+  const checks = {
+    accuracy: one(r.accuracy, 'positioningAccuracy'),
+    repeatability: one(r.repeatability, 'repeatability'),
+    reversal: one(r.reversal, 'reversal'),
+  };
+  const status: DriveCheckStatus =
+    checks.accuracy.pass && checks.repeatability.pass && checks.reversal.pass ? 'within-target' : 'outside-target';
   return { checks, status };
 }
 

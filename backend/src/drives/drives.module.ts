@@ -19,7 +19,19 @@ import { TravelTrialsService } from './travel-trials.service.js';
 @Module({
   imports: [MachinesModule],
   controllers: [AxesController, AxisChecksController, BacklashController],
-  providers: [AxesRepository, AxisChecksRepository, AxesService, DriveTargetsService, TravelTrialsService, PositioningRunsService, DriveChecksService, TestProgramService, BacklashRepository, BacklashService, BacklashReadinessService],
+  providers: [
+    AxesRepository,
+    AxisChecksRepository,
+    AxesService,
+    DriveTargetsService,
+    TravelTrialsService,
+    PositioningRunsService,
+    DriveChecksService,
+    TestProgramService,
+    BacklashRepository,
+    BacklashService,
+    BacklashReadinessService,
+  ],
   exports: [AxesService, DriveChecksService, TravelTrialsService, PositioningRunsService],
 })
 export class DrivesModule {}

@@ -32,7 +32,12 @@ export class PositioningRunsService implements OnModuleInit {
       const row = await this.repo.runById(workshopId, id);
       if (!row) return null;
       const axis = await this.axes.findRow({ workshopId }, row.axisId);
-      return { machineId: row.machineId, recordType: 'positioning-run', recordId: id, label: `Repeat-and-reverse run of ${axis.name}` };
+      return {
+        machineId: row.machineId,
+        recordType: 'positioning-run',
+        recordId: id,
+        label: `Repeat-and-reverse run of ${axis.name}`,
+      };
     });
   }
 
@@ -40,10 +45,19 @@ export class PositioningRunsService implements OnModuleInit {
   async list(actor: SessionUser, axisId: string, query: PageQuery = {}) {
     const axis = await this.axes.findRow(actor, axisId);
     const limit = query.limit ?? DEFAULT_PAGE_SIZE;
-    const [rows, targets] = await Promise.all([this.repo.runPage(actor.workshopId, axisId, query.cursor ?? null, limit), this.targetsOf(actor, axis.machineId)]);
+    const [rows, targets] = await Promise.all([
+      this.repo.runPage(actor.workshopId, axisId, query.cursor ?? null, limit),
+      this.targetsOf(actor, axis.machineId),
+    ]);
     const page = rows.slice(0, limit);
-    const locked = await this.records.lockedIds('positioning-run', page.map((r) => r.id));
-    return { items: page.map((r) => toPositioningRunListItem(r, targets, locked.has(r.id))), nextCursor: rows.length > limit ? page[page.length - 1].id : null };
+    const locked = await this.records.lockedIds(
+      'positioning-run',
+      page.map((r) => r.id),
+    );
+    return {
+      items: page.map((r) => toPositioningRunListItem(r, targets, locked.has(r.id))),
+      nextCursor: rows.length > limit ? page[page.length - 1].id : null,
+    };
   }
 
   async get(actor: SessionUser, axisId: string, id: string) {
@@ -57,12 +71,19 @@ export class PositioningRunsService implements OnModuleInit {
     const axis = await this.axes.findRow(actor, axisId);
     // The grid's columns are positions along the axis; a record keeps them in order.
     for (let i = 1; i < dto.targets.length; i++) {
-      if (!(dto.targets[i] > dto.targets[i - 1])) throw new BadRequestException([`targets must rise along the axis (targets[${i}] = ${dto.targets[i]} is not above ${dto.targets[i - 1]})`]);
+      if (!(dto.targets[i] > dto.targets[i - 1]))
+        throw new BadRequestException([
+          `targets must rise along the axis (targets[${i}] = ${dto.targets[i]} is not above ${dto.targets[i - 1]})`,
+        ]);
     }
     const lengthUnit = dto.lengthUnit ?? 'mm';
     const readingUnit = dto.readingUnit ?? 'mm';
     const targets = await this.targetsOf(actor, axis.machineId);
-    const thermal = thermalReference({ machineTemperatureC: dto.machineTemperature, scaleTemperatureC: dto.scaleTemperature, scaleMaterial: dto.scaleMaterial });
+    const thermal = thermalReference({
+      machineTemperatureC: dto.machineTemperature,
+      scaleTemperatureC: dto.scaleTemperature,
+      scaleMaterial: dto.scaleMaterial,
+    });
     const result = evaluatePositioning({
       targetsMm: arrayToMm(dto.targets, lengthUnit),
       runs: dto.runs.map((r) => ({ direction: r.direction, deviationsMm: arrayToMm(r.deviations, readingUnit) })),
@@ -92,7 +113,13 @@ export class PositioningRunsService implements OnModuleInit {
     const response = toPositioningRunResponse(row, targets, false);
     await this.records.checkRecorded(
       actor,
-      { machineId: axis.machineId, kind: 'positioning', recordType: 'positioning-run', recordId: row.id, status: response.status },
+      {
+        machineId: axis.machineId,
+        kind: 'positioning',
+        recordType: 'positioning-run',
+        recordId: row.id,
+        status: response.status,
+      },
       `Repeat-and-reverse run of axis ${axis.name}: accuracy ${result.accuracyMm.toFixed(3)} mm, repeatability ${result.repeatabilityMm.toFixed(3)} mm, reversal ${result.reversalMm.toFixed(3)} mm`,
     );
     return response;
@@ -102,7 +129,13 @@ export class PositioningRunsService implements OnModuleInit {
     const row = await this.findRow(actor, axisId, id);
     await this.records.assertEditable('positioning-run', id, 'This repeat-and-reverse run');
     await this.repo.deleteRun(actor.workshopId, id);
-    await this.records.audit(actor, { machineId: row.machineId, recordType: 'positioning-run', recordId: id, action: 'deleted', summary: 'Repeat-and-reverse run deleted' });
+    await this.records.audit(actor, {
+      machineId: row.machineId,
+      recordType: 'positioning-run',
+      recordId: id,
+      action: 'deleted',
+      summary: 'Repeat-and-reverse run deleted',
+    });
   }
 
   private async findRow(actor: SessionUser, axisId: string, id: string): Promise<PositioningRunRow> {

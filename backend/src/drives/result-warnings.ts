@@ -10,7 +10,12 @@ export function storedWarnings(result: unknown): ResultWarning[] {
   const out: ResultWarning[] = [];
   for (const w of list) {
     if (typeof w === 'string') out.push({ code: 'note', message: w });
-    else if (w && typeof w === 'object' && typeof (w as ResultWarning).code === 'string' && typeof (w as ResultWarning).message === 'string') {
+    else if (
+      w &&
+      typeof w === 'object' &&
+      typeof (w as ResultWarning).code === 'string' &&
+      typeof (w as ResultWarning).message === 'string'
+    ) {
       out.push({ code: (w as ResultWarning).code, message: (w as ResultWarning).message });
     }
   }
@@ -21,7 +26,12 @@ export function storedWarnings(result: unknown): ResultWarning[] {
  * Travel trial warnings that need the target: an instrument whose step is more than a quarter of
  * the tolerance over the longest move, and a thermal correction bigger than a tenth of it.
  */
-export function trialTargetWarnings(p: { longestMoveMm: number; resolutionMm: number | null; thermalPercent: number; tolerancePercent: number }): ResultWarning[] {
+export function trialTargetWarnings(p: {
+  longestMoveMm: number;
+  resolutionMm: number | null;
+  thermalPercent: number;
+  tolerancePercent: number;
+}): ResultWarning[] {
   const out: ResultWarning[] = [];
   if (p.resolutionMm !== null && p.longestMoveMm > 0) {
     const resolutionPercent = (p.resolutionMm / p.longestMoveMm) * 100;

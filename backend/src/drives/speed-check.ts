@@ -77,11 +77,22 @@ export function speedCheckOf(axis: AxisRow, targets: DriveTargets): SpeedCheckRe
   };
   if (axis.drive.type !== 'screw') {
     const what = axis.drive.type === 'belt' ? 'A belt drive' : 'A rack-and-pinion drive';
-    return { ...base, applicable: false, status: 'not-applicable', reason: `${what} has no screw to whirl: the speed check does not apply. Follow the belt, rack and motor makers' speed limits.` };
+    return {
+      ...base,
+      applicable: false,
+      status: 'not-applicable',
+      reason: `${what} has no screw to whirl: the speed check does not apply. Follow the belt, rack and motor makers' speed limits.`,
+    };
   }
   const missing = missingForSpeedCheck(axis.drive, axis.maxFeedRateMmPerMin);
   if (missing.length) {
-    return { ...base, applicable: true, status: 'not-started', missing, reason: `The speed check needs ${missing.join(', ')}.` };
+    return {
+      ...base,
+      applicable: true,
+      status: 'not-started',
+      missing,
+      reason: `The speed check needs ${missing.join(', ')}.`,
+    };
   }
   const r = evaluateScrewSpeed(toEngineScrew(axis.drive, axis.maxFeedRateMmPerMin!));
   const v = speedVerdict(r, axis.drive.lead!, targets);

@@ -6,7 +6,14 @@ import { AxesService } from './axes.service.js';
 import type { AxisRow } from './axes.repository.js';
 import { axisLetter } from './drive-record.js';
 import type { TestProgramQuery, TestTargetsQuery } from './dto/test-program.query.js';
-import { defaultTargets, inUnit, positioningProgram, programText, travelTrialProgram, type ProgramUnit } from './test-program.js';
+import {
+  defaultTargets,
+  inUnit,
+  positioningProgram,
+  programText,
+  travelTrialProgram,
+  type ProgramUnit,
+} from './test-program.js';
 
 export const DEFAULT_OVERRUN_MM = 5;
 export const DEFAULT_RUNS = 5;
@@ -32,7 +39,8 @@ const TARGETS_SOURCE =
   'ISO 230-2 practice (from memory): at least 5 targets, about 5 per metre, unevenly spaced so periodic errors are not sampled at one phase, 5 runs each way; an overrun of clear travel kept beyond the first and last target for the reversal.';
 
 /** An axis set up in inches or thou gets a program in inches (G20); any metric unit gets G21. */
-export const programUnitOf = (axisUnit: LengthUnit): ProgramUnit => (axisUnit === 'in' || axisUnit === 'thou' ? 'in' : 'mm');
+export const programUnitOf = (axisUnit: LengthUnit): ProgramUnit =>
+  axisUnit === 'in' || axisUnit === 'thou' ? 'in' : 'mm';
 const axisUnitOf = (axis: AxisRow): LengthUnit => (isLengthUnit(axis.lengthUnit) ? axis.lengthUnit : 'mm');
 const tidy = (v: number) => Math.round(v * 1e6) / 1e6;
 
@@ -57,9 +65,18 @@ export class TestProgramService {
     const overrunMm = q.overrun === undefined ? DEFAULT_OVERRUN_MM : toMm(q.overrun, q.lengthUnit ?? 'mm');
     if (!(overrunMm > 0)) throw new BadRequestException(['overrun must be greater than zero (in lengthUnit)']);
     const travel = axis.measuredTravelMm;
-    const base = { lengthUnit: unit, overrun: tidy(fromMm(overrunMm, unit)), overrunMm, runs: DEFAULT_RUNS, source: TARGETS_SOURCE };
+    const base = {
+      lengthUnit: unit,
+      overrun: tidy(fromMm(overrunMm, unit)),
+      overrunMm,
+      runs: DEFAULT_RUNS,
+      source: TARGETS_SOURCE,
+    };
     if (travel == null || travel <= overrunMm * 4) {
-      const reason = travel == null ? 'The axis has no measured travel: record it, or type the targets.' : `The measured travel of ${tidy(fromMm(travel, unit))} ${unit} leaves no room for targets with an overrun of ${base.overrun} ${unit}.`;
+      const reason =
+        travel == null
+          ? 'The axis has no measured travel: record it, or type the targets.'
+          : `The measured travel of ${tidy(fromMm(travel, unit))} ${unit} leaves no room for targets with an overrun of ${base.overrun} ${unit}.`;
       return { ...base, targets: [], targetsMm: [], reason };
     }
     const targetsMm = targetsOver(travel, overrunMm, programUnitOf(unit));
@@ -75,17 +92,31 @@ export class TestProgramService {
     const shown = (vMm: number) => `${tidy(fromMm(vMm, qu))} ${qu}`;
     const problems: string[] = [];
     const letter = (q.letter ?? axisLetter(axis.name))?.toUpperCase();
-    if (!letter) problems.push(`letter is needed: the axis name ${programText(axis.name)} does not start with an axis letter (X, Y, Z…)`);
-    const feedMm = q.feed === undefined ? Math.min(DEFAULT_TEST_FEED_MM_PER_MIN, axis.maxFeedRateMmPerMin ?? DEFAULT_TEST_FEED_MM_PER_MIN) : mm(q.feed);
+    if (!letter)
+      problems.push(
+        `letter is needed: the axis name ${programText(axis.name)} does not start with an axis letter (X, Y, Z…)`,
+      );
+    const feedMm =
+      q.feed === undefined
+        ? Math.min(DEFAULT_TEST_FEED_MM_PER_MIN, axis.maxFeedRateMmPerMin ?? DEFAULT_TEST_FEED_MM_PER_MIN)
+        : mm(q.feed);
     if (!(feedMm > 0)) problems.push(`feed must be greater than zero (${qu}/min)`);
-    if (axis.maxFeedRateMmPerMin && feedMm > axis.maxFeedRateMmPerMin * (1 + 1e-9)) problems.push(`feed must not exceed the axis's fastest feed of ${shown(axis.maxFeedRateMmPerMin)}/min`);
+    if (axis.maxFeedRateMmPerMin && feedMm > axis.maxFeedRateMmPerMin * (1 + 1e-9))
+      problems.push(`feed must not exceed the axis's fastest feed of ${shown(axis.maxFeedRateMmPerMin)}/min`);
     const overrun = q.overrun === undefined ? DEFAULT_OVERRUN_MM : mm(q.overrun);
-    if (!(overrun > 0)) problems.push(`overrun must be greater than zero (${qu}): the axis has to pass the target and come back to approach it from its side`);
+    if (!(overrun > 0))
+      problems.push(
+        `overrun must be greater than zero (${qu}): the axis has to pass the target and come back to approach it from its side`,
+      );
     const dwell = q.dwell ?? DEFAULT_DWELL_S;
     if (!(dwell >= 0) || dwell > 600) problems.push('dwell must be from 0 to 600 seconds');
     const travel = axis.measuredTravelMm;
     const date = new Date().toISOString().slice(0, 10);
-    const safe = (s: string) => s.replace(/[^A-Za-z0-9]+/g, '-').replace(/^-|-$/g, '').toLowerCase();
+    const safe = (s: string) =>
+      s
+        .replace(/[^A-Za-z0-9]+/g, '-')
+        .replace(/^-|-$/g, '')
+        .toLowerCase();
     const filename = `${safe(machine.name) || 'machine'}-${safe(axis.name) || 'axis'}-${q.kind === 'travel' ? 'travel-trial' : 'repeat-and-reverse'}.${q.format ?? 'nc'}`;
     const base = { machine: machine.name, axis: axis.name, letter: letter ?? 'X', date, unit };
     const u = unit === 'in' ? 'in' : 'mm';
@@ -96,7 +127,8 @@ export class TestProgramService {
     const inside = (field: string, values: number[]) => {
       for (const v of values) {
         if (v < -1e-9) problems.push(`${field} takes the axis to ${shown(v)}, below 0 of its work coordinates`);
-        else if (travel != null && v > travel + 1e-9) problems.push(`${field} takes the axis to ${shown(v)}, beyond its measured travel of ${shown(travel)}`);
+        else if (travel != null && v > travel + 1e-9)
+          problems.push(`${field} takes the axis to ${shown(v)}, beyond its measured travel of ${shown(travel)}`);
         else continue;
         break;
       }
@@ -109,11 +141,21 @@ export class TestProgramService {
       else if (travel != null) {
         const usable = inUnit(travel - start - overrun, unit);
         const step = unit === 'in' ? 0.5 : 10;
-        distances = [0.25, 0.5, 0.75, 1].map((f) => toMm(Math.floor((usable * f) / step) * step, unit)).filter((d) => d > 0);
-      } else problems.push(`distances is required when the axis has no measured travel (for example distances=100,200,300 in ${qu})`);
-      if (q.distances !== undefined && distances.some((d) => d <= 0)) problems.push(`distances must all be greater than zero (${qu})`);
+        distances = [0.25, 0.5, 0.75, 1]
+          .map((f) => toMm(Math.floor((usable * f) / step) * step, unit))
+          .filter((d) => d > 0);
+      } else
+        problems.push(
+          `distances is required when the axis has no measured travel (for example distances=100,200,300 in ${qu})`,
+        );
+      if (q.distances !== undefined && distances.some((d) => d <= 0))
+        problems.push(`distances must all be greater than zero (${qu})`);
       if (!problems.length) inside('start less the overrun', [start - overrun]);
-      if (!problems.length) inside('distances', distances.map((d) => start + d));
+      if (!problems.length)
+        inside(
+          'distances',
+          distances.map((d) => start + d),
+        );
       if (problems.length) throw new BadRequestException(problems);
       const text = travelTrialProgram({
         ...base,
@@ -137,19 +179,27 @@ export class TestProgramService {
     }
 
     const runs = q.runs ?? DEFAULT_RUNS;
-    if (!Number.isInteger(runs) || runs < 2 || runs > 20) problems.push('runs must be a whole number from 2 to 20 (ISO 230-2 asks for 5 each way)');
+    if (!Number.isInteger(runs) || runs < 2 || runs > 20)
+      problems.push('runs must be a whole number from 2 to 20 (ISO 230-2 asks for 5 each way)');
     let targets: number[] = [];
     if (q.targets) targets = list('targets', q.targets, qu).map(mm);
     else if (travel != null && overrun > 0) targets = targetsOver(travel, overrun, unit);
-    else if (travel == null) problems.push(`targets is required when the axis has no measured travel (for example targets=10,110,215 in ${qu})`);
-    if (targets.length && targets.length < 2) problems.push('targets needs at least 2 positions (ISO 230-2 asks for 5 or more)');
+    else if (travel == null)
+      problems.push(
+        `targets is required when the axis has no measured travel (for example targets=10,110,215 in ${qu})`,
+      );
+    if (targets.length && targets.length < 2)
+      problems.push('targets needs at least 2 positions (ISO 230-2 asks for 5 or more)');
     for (let i = 1; i < targets.length; i++) {
       if (!(targets[i] > targets[i - 1])) {
-        problems.push(`targets must rise along the axis (targets[${i}] = ${shown(targets[i])} is not above ${shown(targets[i - 1])})`);
+        problems.push(
+          `targets must rise along the axis (targets[${i}] = ${shown(targets[i])} is not above ${shown(targets[i - 1])})`,
+        );
         break;
       }
     }
-    if (!problems.length) inside('targets with the overrun', [targets[0] - overrun, targets[targets.length - 1] + overrun]);
+    if (!problems.length)
+      inside('targets with the overrun', [targets[0] - overrun, targets[targets.length - 1] + overrun]);
     if (problems.length) throw new BadRequestException(problems);
     const text = positioningProgram({
       ...base,

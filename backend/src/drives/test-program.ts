@@ -57,7 +57,8 @@ const comment = (text: string) => `(${programText(text)})`;
 /** A coordinate or feed in the program's unit. */
 export const inUnit = (mm: number, unit: ProgramUnit) => (unit === 'in' ? (mm * 10) / 254 : mm);
 const coord = (mm: number, unit: ProgramUnit) => inUnit(mm, unit).toFixed(unit === 'in' ? 4 : 3);
-const feed = (mmPerMin: number, unit: ProgramUnit) => (unit === 'in' ? String(Math.round(inUnit(mmPerMin, unit) * 10) / 10) : String(Math.round(mmPerMin)));
+const feed = (mmPerMin: number, unit: ProgramUnit) =>
+  unit === 'in' ? String(Math.round(inUnit(mmPerMin, unit) * 10) / 10) : String(Math.round(mmPerMin));
 const unitWord = (unit: ProgramUnit) => (unit === 'in' ? 'in' : 'mm');
 
 /**
@@ -91,8 +92,14 @@ function header(h: ProgramHeader): string[] {
     comment(`WORK ZERO: before running, move the ${h.letter} axis to the end its travel is measured from`),
     comment(`- the negative end, usually the homing end - and set ${h.letter}0 there in the work coordinates in use.`),
     comment(`Positive ${h.letter} moves away from that zero towards the far end. Every position below is from it.`),
-    comment(`The axis will move between ${h.letter}${coord(h.lowestMm, h.unit)} and ${h.letter}${coord(h.highestMm, h.unit)} ${u}.`),
-    comment(h.unit === 'in' ? 'Units: inches G20 - every coordinate and feed below is in inches and inches per minute.' : 'Units: millimetres G21 - every coordinate and feed below is in mm and mm per minute.'),
+    comment(
+      `The axis will move between ${h.letter}${coord(h.lowestMm, h.unit)} and ${h.letter}${coord(h.highestMm, h.unit)} ${u}.`,
+    ),
+    comment(
+      h.unit === 'in'
+        ? 'Units: inches G20 - every coordinate and feed below is in inches and inches per minute.'
+        : 'Units: millimetres G21 - every coordinate and feed below is in mm and mm per minute.',
+    ),
     ...h.lines.map(comment),
     ...CAUTIONS.map(comment),
     safetyLine(h.unit),
@@ -114,10 +121,17 @@ export function travelTrialProgram(p: TravelProgramInput): string {
   const u = p.unit;
   const F = feed(p.feedMmPerMin, u);
   const out = header(p);
-  out.push(`G0 ${L}${coord(p.startMm - p.overrunMm, u)}`, `G1 ${L}${coord(p.startMm, u)} F${F}`, ...readingStop('Zero or mark the indicator, rule or tape at the start', p.dwellS));
+  out.push(
+    `G0 ${L}${coord(p.startMm - p.overrunMm, u)}`,
+    `G1 ${L}${coord(p.startMm, u)} F${F}`,
+    ...readingStop('Zero or mark the indicator, rule or tape at the start', p.dwellS),
+  );
   p.distancesMm.forEach((d, i) => {
     out.push(comment(`Move ${i + 1} of ${p.distancesMm.length}: ${coord(d, u)} ${unitWord(u)}`));
-    out.push(`G1 ${L}${coord(p.startMm + d, u)} F${F}`, ...readingStop(`Measure the move from the start against ${coord(d, u)} ${unitWord(u)}`, p.dwellS));
+    out.push(
+      `G1 ${L}${coord(p.startMm + d, u)} F${F}`,
+      ...readingStop(`Measure the move from the start against ${coord(d, u)} ${unitWord(u)}`, p.dwellS),
+    );
     out.push(`G1 ${L}${coord(p.startMm - p.overrunMm, u)} F${F}`, `G1 ${L}${coord(p.startMm, u)} F${F}`);
   });
   out.push('M2', '%');
@@ -142,10 +156,13 @@ export function positioningProgram(p: PositioningProgramInput): string {
   out.push(`G0 ${L}${coord(low, u)}`);
   for (let run = 1; run <= p.runs; run++) {
     out.push(comment(`Run ${run} up`));
-    targets.forEach((t, i) => out.push(`G1 ${L}${coord(t, u)} F${F}`, ...readingStop(`read up ${run}, target ${i + 1}`, p.dwellS)));
+    targets.forEach((t, i) =>
+      out.push(`G1 ${L}${coord(t, u)} F${F}`, ...readingStop(`read up ${run}, target ${i + 1}`, p.dwellS)),
+    );
     out.push(`G1 ${L}${coord(high, u)} F${F} ${comment('overrun, then reverse')}`);
     out.push(comment(`Run ${run} down`));
-    for (let i = targets.length - 1; i >= 0; i--) out.push(`G1 ${L}${coord(targets[i], u)} F${F}`, ...readingStop(`read down ${run}, target ${i + 1}`, p.dwellS));
+    for (let i = targets.length - 1; i >= 0; i--)
+      out.push(`G1 ${L}${coord(targets[i], u)} F${F}`, ...readingStop(`read down ${run}, target ${i + 1}`, p.dwellS));
     out.push(`G1 ${L}${coord(low, u)} F${F} ${comment('overrun, then reverse')}`);
   }
   out.push('M2', '%');

@@ -17,7 +17,16 @@ export interface TravelEnvelopeResponse {
    * Each X and Y axis, every length in mm: its measured travel, the work size along it, the travel
    * it needs (work size plus the margin) and what is spare (negative when short).
    */
-  axes: { axisId: string; axis: string; letter: 'X' | 'Y'; measuredTravel: number | null; workSize: number; requiredTravel: number; spare: number | null; covers: boolean | null }[];
+  axes: {
+    axisId: string;
+    axis: string;
+    letter: 'X' | 'Y';
+    measuredTravel: number | null;
+    workSize: number;
+    requiredTravel: number;
+    spare: number | null;
+    covers: boolean | null;
+  }[];
   /** What is still missing before the check can be made, in words. */
   missing: string[];
   summary: string;
@@ -34,12 +43,17 @@ export function travelEnvelopeOf(machine: MachineRef, rows: AxisRow[], targets: 
     .map((r) => ({ row: r, letter: axisLetter(r.name) }))
     .filter((a): a is { row: AxisRow; letter: 'X' | 'Y' } => a.letter === 'X' || a.letter === 'Y');
   const missing: string[] = [];
-  for (const l of ['X', 'Y'] as const) if (!relevant.some((a) => a.letter === l)) missing.push(l === 'X' ? 'an X axis' : 'a Y axis');
+  for (const l of ['X', 'Y'] as const)
+    if (!relevant.some((a) => a.letter === l)) missing.push(l === 'X' ? 'an X axis' : 'a Y axis');
   for (const a of relevant) if (a.row.measuredTravelMm == null) missing.push(`the measured travel of ${a.row.name}`);
   const measured = relevant.filter((a) => a.row.measuredTravelMm != null);
   const result = measured.length
     ? evaluateTravelEnvelope({
-        axes: measured.map((a) => ({ axis: a.row.name, measuredTravelMm: a.row.measuredTravelMm!, workSizeMm: a.letter === 'X' ? workArea.x : workArea.y })),
+        axes: measured.map((a) => ({
+          axis: a.row.name,
+          measuredTravelMm: a.row.measuredTravelMm!,
+          workSizeMm: a.letter === 'X' ? workArea.x : workArea.y,
+        })),
         marginPerSideMm: marginMm / 2,
       })
     : null;
@@ -64,5 +78,14 @@ export function travelEnvelopeOf(machine: MachineRef, rows: AxisRow[], targets: 
     : missing.length
       ? `Needs ${missing.join(', ')}`
       : `Every X and Y axis covers the ${workArea.x} × ${workArea.y} mm work area plus ${marginMm} mm`;
-  return { machineId: machine.id, status, workArea, margin: targets.travelMargin.target, marginMm, axes, missing, summary };
+  return {
+    machineId: machine.id,
+    status,
+    workArea,
+    margin: targets.travelMargin.target,
+    marginMm,
+    axes,
+    missing,
+    summary,
+  };
 }

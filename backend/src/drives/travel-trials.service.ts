@@ -1,4 +1,11 @@
-import { BadRequestException, ConflictException, Injectable, NotFoundException, OnModuleInit, UnprocessableEntityException } from '@nestjs/common';
+import {
+  BadRequestException,
+  ConflictException,
+  Injectable,
+  NotFoundException,
+  OnModuleInit,
+  UnprocessableEntityException,
+} from '@nestjs/common';
 import type { SessionUser } from '../auth/session-user.js';
 import { evaluateDrive } from '../engine/steps-per-mm.js';
 import { thermalReference } from '../engine/thermal.js';
@@ -35,7 +42,14 @@ export class TravelTrialsService implements OnModuleInit {
   onModuleInit() {
     this.subjects.register('travel-trial', async (workshopId, id) => {
       const row = await this.findAnywhere(workshopId, id);
-      return row ? { machineId: row.machineId, recordType: 'travel-trial', recordId: id, label: `Travel trial of ${row.axisName}` } : null;
+      return row
+        ? {
+            machineId: row.machineId,
+            recordType: 'travel-trial',
+            recordId: id,
+            label: `Travel trial of ${row.axisName}`,
+          }
+        : null;
     });
   }
 
@@ -51,10 +65,19 @@ export class TravelTrialsService implements OnModuleInit {
   async list(actor: SessionUser, axisId: string, query: PageQuery = {}) {
     const axis = await this.axes.findRow(actor, axisId);
     const limit = query.limit ?? DEFAULT_PAGE_SIZE;
-    const [rows, targets] = await Promise.all([this.repo.trialPage(actor.workshopId, axisId, query.cursor ?? null, limit), this.targetsOf(actor, axis.machineId)]);
+    const [rows, targets] = await Promise.all([
+      this.repo.trialPage(actor.workshopId, axisId, query.cursor ?? null, limit),
+      this.targetsOf(actor, axis.machineId),
+    ]);
     const page = rows.slice(0, limit);
-    const locked = await this.records.lockedIds('travel-trial', page.map((r) => r.id));
-    return { items: page.map((r) => toTravelTrialListItem(r, targets, locked.has(r.id))), nextCursor: rows.length > limit ? page[page.length - 1].id : null };
+    const locked = await this.records.lockedIds(
+      'travel-trial',
+      page.map((r) => r.id),
+    );
+    return {
+      items: page.map((r) => toTravelTrialListItem(r, targets, locked.has(r.id))),
+      nextCursor: rows.length > limit ? page[page.length - 1].id : null,
+    };
   }
 
   async get(actor: SessionUser, axisId: string, id: string) {
@@ -69,11 +92,24 @@ export class TravelTrialsService implements OnModuleInit {
     const readingUnit = dto.readingUnit ?? 'mm';
     const moves = dto.moves.map((m) => ({ commanded: m.commanded, measured: m.measured }));
     const resolutionMm = resolutionMmOf(dto.instrumentResolution, readingUnit);
-    const thermal = thermalReference({ machineTemperatureC: dto.machineTemperature, scaleTemperatureC: dto.scaleTemperature, scaleMaterial: dto.scaleMaterial });
+    const thermal = thermalReference({
+      machineTemperatureC: dto.machineTemperature,
+      scaleTemperatureC: dto.scaleTemperature,
+      scaleMaterial: dto.scaleMaterial,
+    });
     const theory = evaluateDrive(toEngineDrive(axis.drive, axis)).stepsPerMm;
     const targets = await this.targetsOf(actor, axis.machineId);
-    const movesMm = moves.map((m) => ({ commandedMm: toMm(m.commanded, lengthUnit), measuredMm: toMm(m.measured, lengthUnit) }));
-    const result = evaluateTravelTrial({ stepsPerMmUsed, moves: movesMm, throughOrigin: dto.throughOrigin, theoreticalStepsPerMm: theory, thermalFactor: thermal.factor });
+    const movesMm = moves.map((m) => ({
+      commandedMm: toMm(m.commanded, lengthUnit),
+      measuredMm: toMm(m.measured, lengthUnit),
+    }));
+    const result = evaluateTravelTrial({
+      stepsPerMmUsed,
+      moves: movesMm,
+      throughOrigin: dto.throughOrigin,
+      theoreticalStepsPerMm: theory,
+      thermalFactor: thermal.factor,
+    });
     const warnings = [
       ...result.warnings,
       ...trialTargetWarnings({
@@ -105,7 +141,13 @@ export class TravelTrialsService implements OnModuleInit {
     const response = toTravelTrialResponse(row, targets, false);
     await this.records.checkRecorded(
       actor,
-      { machineId: axis.machineId, kind: 'travel-trial', recordType: 'travel-trial', recordId: row.id, status: response.status },
+      {
+        machineId: axis.machineId,
+        kind: 'travel-trial',
+        recordType: 'travel-trial',
+        recordId: row.id,
+        status: response.status,
+      },
       `Travel trial of axis ${axis.name}: ${result.errorPercent.toFixed(3)} % error, corrected ${roundStepsPerMm(result.correctedStepsPerMm)} steps/mm${result.farFromTheory ? ` (${result.theoryDifferencePercent!.toFixed(1)} % from the theoretical ${roundStepsPerMm(theory)} steps/mm: held back until confirmed)` : ''}`,
     );
     return response;
@@ -124,12 +166,17 @@ export class TravelTrialsService implements OnModuleInit {
     const axis = await this.axes.findRow(actor, axisId);
     const trial = await this.findRow(actor, axisId, id);
     const result = storedTravelTrial(trial.result);
-    if (!result) throw new ConflictException('This trial\'s stored result cannot be read, so it cannot be applied: record the trial again');
+    if (!result)
+      throw new ConflictException(
+        "This trial's stored result cannot be read, so it cannot be applied: record the trial again",
+      );
     const corrected = roundStepsPerMm(result.correctedStepsPerMm);
-    if (!(corrected > 0) || !Number.isFinite(corrected)) throw new BadRequestException(['the trial has no usable corrected steps per mm']);
+    if (!(corrected > 0) || !Number.isFinite(corrected))
+      throw new BadRequestException(['the trial has no usable corrected steps per mm']);
     const theory = evaluateDrive(toEngineDrive(axis.drive, axis)).stepsPerMm;
     const fromTheory = (corrected / theory - 1) * 100;
-    const far = Math.abs(fromTheory) > FAR_FROM_THEORY_PERCENT || (result as { farFromTheory?: boolean }).farFromTheory === true;
+    const far =
+      Math.abs(fromTheory) > FAR_FROM_THEORY_PERCENT || (result as { farFromTheory?: boolean }).farFromTheory === true;
     if (far && !trial.appliedAt && dto.confirmFarCorrection !== true) {
       throw new UnprocessableEntityException([
         `confirmFarCorrection: the corrected ${corrected} steps/mm is ${fromTheory >= 0 ? '+' : ''}${fromTheory.toFixed(1)} % from the drive's theoretical ${roundStepsPerMm(theory)} steps/mm (more than ${FAR_FROM_THEORY_PERCENT} %). Check the lead (not the pitch), the pulley teeth and the microsteps first; send confirmFarCorrection: true to apply it anyway.`,
@@ -150,7 +197,13 @@ export class TravelTrialsService implements OnModuleInit {
     const trial = await this.findRow(actor, axisId, id);
     await this.records.assertEditable('travel-trial', id, 'This travel trial');
     await this.repo.deleteTrial(actor.workshopId, id);
-    await this.records.audit(actor, { machineId: trial.machineId, recordType: 'travel-trial', recordId: id, action: 'deleted', summary: 'Travel trial deleted' });
+    await this.records.audit(actor, {
+      machineId: trial.machineId,
+      recordType: 'travel-trial',
+      recordId: id,
+      action: 'deleted',
+      summary: 'Travel trial deleted',
+    });
   }
 
   private async findRow(actor: SessionUser, axisId: string, id: string): Promise<TravelTrialRow> {

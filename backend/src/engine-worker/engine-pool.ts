@@ -60,13 +60,23 @@ export class EnginePool implements OnModuleInit, OnModuleDestroy {
     if (!fastify) return;
     const inline = fastify.getDefaultJsonParser('error', 'error');
     fastify.removeContentTypeParser('application/json');
-    fastify.addContentTypeParser('application/json', { parseAs: 'buffer' }, (req: FastifyRequest, body: Buffer | string, done) => {
-      if (body.length < LARGE_BODY_BYTES) return inline(req, body as string, done); // it takes a Buffer as well (secure-json-parse reads either)
-      this.worker({ kind: 'parse-json', body: body as Buffer }).then(
-        (answer) => (answer.ok ? done(null, unpackNumberArrays(answer.result)) : done(Object.assign(new SyntaxError(`Body is not valid JSON: ${answer.message}`), { statusCode: 400 }), undefined)),
-        (err: Error) => done(err, undefined),
-      );
-    });
+    fastify.addContentTypeParser(
+      'application/json',
+      { parseAs: 'buffer' },
+      (req: FastifyRequest, body: Buffer | string, done) => {
+        if (body.length < LARGE_BODY_BYTES) return inline(req, body as string, done); // it takes a Buffer as well (secure-json-parse reads either)
+        this.worker({ kind: 'parse-json', body: body as Buffer }).then(
+          (answer) =>
+            answer.ok
+              ? done(null, unpackNumberArrays(answer.result))
+              : done(
+                  Object.assign(new SyntaxError(`Body is not valid JSON: ${answer.message}`), { statusCode: 400 }),
+                  undefined,
+                ),
+          (err: Error) => done(err, undefined),
+        );
+      },
+    );
   }
 
   private worker(task: WorkerTask): Promise<WorkerAnswer> {

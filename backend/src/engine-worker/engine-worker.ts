@@ -21,12 +21,16 @@ export interface StringifyJsonTask {
 
 export type WorkerTask = EngineTask | ParseJsonTask | StringifyJsonTask;
 
-export type WorkerAnswer = { ok: true; result: unknown } | { ok: false; message: string; field?: string; badJson?: boolean };
+export type WorkerAnswer =
+  { ok: true; result: unknown } | { ok: false; message: string; field?: string; badJson?: boolean };
 
 function compress(bytes: Buffer, encoding: StringifyJsonTask['encoding']): Uint8Array {
   if (encoding === 'gzip') return gzipSync(bytes, { level: 6 });
   // Quality 4 is brotli's fast end, about gzip's speed at a smaller size; 11 would take seconds for megabytes.
-  if (encoding === 'br') return brotliCompressSync(bytes, { params: { [zlib.BROTLI_PARAM_QUALITY]: 4, [zlib.BROTLI_PARAM_SIZE_HINT]: bytes.length } });
+  if (encoding === 'br')
+    return brotliCompressSync(bytes, {
+      params: { [zlib.BROTLI_PARAM_QUALITY]: 4, [zlib.BROTLI_PARAM_SIZE_HINT]: bytes.length },
+    });
   return bytes;
 }
 
@@ -44,7 +48,10 @@ export default function run(task: WorkerTask): WorkerAnswer {
   try {
     if (task.kind === 'parse-json') {
       const text = Buffer.from(task.body.buffer, task.body.byteOffset, task.body.byteLength).toString('utf8');
-      return { ok: true, result: packNumberArrays(sjson.parse(text, null, { protoAction: 'error', constructorAction: 'error' })) };
+      return {
+        ok: true,
+        result: packNumberArrays(sjson.parse(text, null, { protoAction: 'error', constructorAction: 'error' })),
+      };
     }
     if (task.kind === 'stringify-json') {
       const bytes = Buffer.from(JSON.stringify(unpackNumberArrays(task.value)), 'utf8');

@@ -27,7 +27,7 @@ describe('long lists of numbers across the thread boundary', () => {
     const before = JSON.stringify(value);
     const packed = packNumberArrays(value) as typeof value & Record<string, never>;
     expect((packed.leastSquares as unknown as { residuals: unknown }).residuals).toBeInstanceOf(Float64Array);
-    expect(((packed.nested as unknown[])[0] as unknown)).toBeInstanceOf(Float64Array);
+    expect((packed.nested as unknown[])[0] as unknown).toBeInstanceOf(Float64Array);
     expect(Array.isArray(packed.short)).toBe(true);
     expect(Array.isArray(packed.mixed)).toBe(true);
     expect(JSON.stringify(value)).toBe(before);

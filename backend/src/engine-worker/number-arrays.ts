@@ -12,7 +12,10 @@ const PACK_FROM = 1024;
 // this way, it holds for objects another realm made too (a test runner's, another context's).
 function isPlainObject(value: object): value is Record<string, unknown> {
   const proto = Object.getPrototypeOf(value) as object | null;
-  return proto === null || (Object.getPrototypeOf(proto) === null && Object.prototype.toString.call(value) === '[object Object]');
+  return (
+    proto === null ||
+    (Object.getPrototypeOf(proto) === null && Object.prototype.toString.call(value) === '[object Object]')
+  );
 }
 
 function isNumberList(list: unknown[]): list is number[] {

@@ -19,10 +19,26 @@ describe('backlash at both ends and the middle', () => {
 
   it('reproduces the hand-worked example position by position and for the axis', () => {
     const r = evaluateBacklash({ positions: example });
-    expect(r.positions.map((p) => p.meanUpMm * 1000)).toEqual([expect.closeTo(11, 9), expect.closeTo(22, 9), expect.closeTo(1, 9)]);
-    expect(r.positions.map((p) => p.meanDownMm * 1000)).toEqual([expect.closeTo(-9, 9), expect.closeTo(5, 9), expect.closeTo(30, 9)]);
-    expect(r.positions.map((p) => p.reversalMm * 1000)).toEqual([expect.closeTo(20, 9), expect.closeTo(17, 9), expect.closeTo(-29, 9)]);
-    expect(r.positions.map((p) => p.backlashMm * 1000)).toEqual([expect.closeTo(20, 9), expect.closeTo(17, 9), expect.closeTo(29, 9)]);
+    expect(r.positions.map((p) => p.meanUpMm * 1000)).toEqual([
+      expect.closeTo(11, 9),
+      expect.closeTo(22, 9),
+      expect.closeTo(1, 9),
+    ]);
+    expect(r.positions.map((p) => p.meanDownMm * 1000)).toEqual([
+      expect.closeTo(-9, 9),
+      expect.closeTo(5, 9),
+      expect.closeTo(30, 9),
+    ]);
+    expect(r.positions.map((p) => p.reversalMm * 1000)).toEqual([
+      expect.closeTo(20, 9),
+      expect.closeTo(17, 9),
+      expect.closeTo(-29, 9),
+    ]);
+    expect(r.positions.map((p) => p.backlashMm * 1000)).toEqual([
+      expect.closeTo(20, 9),
+      expect.closeTo(17, 9),
+      expect.closeTo(29, 9),
+    ]);
     expect(r.backlashMm * 1000).toBeCloseTo(29, 9);
     expect(r.worstPositionMm).toBe(890);
     expect(r.meanBacklashMm * 1000).toBeCloseTo(22, 9);
@@ -31,8 +47,21 @@ describe('backlash at both ends and the middle', () => {
   });
 
   it('the same readings in thou give the same backlash (1 in = 25.4 mm exactly, NIST SP 811)', () => {
-    const thou = example.map((p) => ({ ...p, upMm: arrayToMm(p.upMm.map((v) => v / 0.0254), 'thou'), downMm: arrayToMm(p.downMm.map((v) => v / 0.0254), 'thou') }));
-    expect(evaluateBacklash({ positions: thou }).backlashMm).toBeCloseTo(evaluateBacklash({ positions: example }).backlashMm, 12);
+    const thou = example.map((p) => ({
+      ...p,
+      upMm: arrayToMm(
+        p.upMm.map((v) => v / 0.0254),
+        'thou',
+      ),
+      downMm: arrayToMm(
+        p.downMm.map((v) => v / 0.0254),
+        'thou',
+      ),
+    }));
+    expect(evaluateBacklash({ positions: thou }).backlashMm).toBeCloseTo(
+      evaluateBacklash({ positions: example }).backlashMm,
+      12,
+    );
   });
 
   it('swapping the two sides keeps the size and flips the sign (the definition is symmetric in size)', () => {
@@ -56,7 +85,9 @@ describe('backlash at both ends and the middle', () => {
     expect(evaluateBacklash({ positions: example, resolutionMm: 0.01, targetMm: 0.05 }).warnings).toEqual([]);
     const coarse = evaluateBacklash({ positions: example, resolutionMm: 0.02, targetMm: 0.05 });
     expect(coarse.warnings.map((w) => w.code)).toEqual(['coarse-instrument']);
-    expect(coarse.warnings[0].message).toMatch(/steps of 20\.0 µm, coarser than a quarter of the 50\.0 µm target \(12\.5 µm\)/);
+    expect(coarse.warnings[0].message).toMatch(
+      /steps of 20\.0 µm, coarser than a quarter of the 50\.0 µm target \(12\.5 µm\)/,
+    );
   });
 
   it('warns when the readings of one side spread more than the backlash they give', () => {
@@ -68,7 +99,11 @@ describe('backlash at both ends and the middle', () => {
 
   it('refuses positions without readings, naming the field', () => {
     expect(() => evaluateBacklash({ positions: [] })).toThrow(/positions must hold at least one position/);
-    expect(() => evaluateBacklash({ positions: [{ positionMm: 5, upMm: [], downMm: [0.01] }] })).toThrow(/positions\[0\]\.up/);
-    expect(() => evaluateBacklash({ positions: [{ positionMm: 5, upMm: [0.01], downMm: [Number.NaN] }] })).toThrow(/positions\[0\]\.down\[0\] must be a finite number/);
+    expect(() => evaluateBacklash({ positions: [{ positionMm: 5, upMm: [], downMm: [0.01] }] })).toThrow(
+      /positions\[0\]\.up/,
+    );
+    expect(() => evaluateBacklash({ positions: [{ positionMm: 5, upMm: [0.01], downMm: [Number.NaN] }] })).toThrow(
+      /positions\[0\]\.down\[0\] must be a finite number/,
+    );
   });
 });

@@ -68,7 +68,8 @@ const range = (v: number[]) => Math.max(...v) - Math.min(...v);
 const um = (mm: number) => `${(mm * 1000).toFixed(1)} µm`;
 
 export function evaluateBacklash(input: BacklashInput): BacklashResult {
-  if (!Array.isArray(input.positions) || input.positions.length === 0) throw new EngineInputError('positions must hold at least one position', 'positions');
+  if (!Array.isArray(input.positions) || input.positions.length === 0)
+    throw new EngineInputError('positions must hold at least one position', 'positions');
   const positions = input.positions.map((p, i): BacklashAtPosition => {
     const positionMm = requireFinite(`positions[${i}].position`, p.positionMm);
     const up = requireNumberArray(`positions[${i}].up`, p.upMm, 1, 1000);
@@ -99,7 +100,11 @@ export function evaluateBacklash(input: BacklashInput): BacklashResult {
 }
 
 /** The warnings of a result, read again against the target in force (it may have changed since). */
-export function backlashWarnings(positions: BacklashAtPosition[], resolutionMm: number | null, targetMm: number | null): ResultWarning[] {
+export function backlashWarnings(
+  positions: BacklashAtPosition[],
+  resolutionMm: number | null,
+  targetMm: number | null,
+): ResultWarning[] {
   const out: ResultWarning[] = [];
   const few = positions.filter((p) => Math.min(p.approachesUp, p.approachesDown) < MIN_APPROACHES);
   if (few.length) {

@@ -46,7 +46,14 @@ describe('bolt-down session (holes fixed as recorded at the machine)', () => {
   // Common practice for face mode: the indicator rides on a carriage against the frame's
   // reference face, so every hole is brought to the reading of the first hole fixed.
   it('aims every hole at the first fixed reading in face mode', () => {
-    const s = boltDownSession(POSITIONS, 'face', new Map([[0, fixedAt(0.012, 1)], [4, fixedAt(0.02, 2)]]));
+    const s = boltDownSession(
+      POSITIONS,
+      'face',
+      new Map([
+        [0, fixedAt(0.012, 1)],
+        [4, fixedAt(0.02, 2)],
+      ]),
+    );
     for (const i of [1, 2, 3, 4]) expect(s.holes[i].targetMm).toBe(0.012);
     expect(s.holes[0].targetMm).toBeNull(); // the first hole sets the datum
     expect(s.holes[4].differenceMm).toBeCloseTo(0.008, 12);
@@ -54,7 +61,14 @@ describe('bolt-down session (holes fixed as recorded at the machine)', () => {
 
   it('follows the order holes were actually fixed, not the proposed one', () => {
     // Hole 2 fixed first (out of order): it becomes the face datum; the next proposed hole is still 0.
-    const s = boltDownSession(POSITIONS, 'face', new Map([[2, fixedAt(0.05, 1)], [0, fixedAt(0.049, 2)]]));
+    const s = boltDownSession(
+      POSITIONS,
+      'face',
+      new Map([
+        [2, fixedAt(0.05, 1)],
+        [0, fixedAt(0.049, 2)],
+      ]),
+    );
     expect(s.holes[2].targetMm).toBeNull();
     expect(s.holes[0].targetMm).toBe(0.05);
     expect(s.holes[1].targetMm).toBe(0.05);
@@ -77,11 +91,15 @@ describe('bolt-down session (holes fixed as recorded at the machine)', () => {
   });
 
   it('shows the difference of a typed reading that is not fixed yet without counting it', () => {
-    const s = boltDownSession(POSITIONS, 'line', new Map<number, SessionHoleInput>([
-      [0, fixedAt(0, 1)],
-      [4, fixedAt(0.04, 2)],
-      [2, { readingMm: 0.025, fixed: false, fixSeq: null }],
-    ]));
+    const s = boltDownSession(
+      POSITIONS,
+      'line',
+      new Map<number, SessionHoleInput>([
+        [0, fixedAt(0, 1)],
+        [4, fixedAt(0.04, 2)],
+        [2, { readingMm: 0.025, fixed: false, fixSeq: null }],
+      ]),
+    );
     expect(s.holes[2].differenceMm).toBeCloseTo(0.005, 12);
     expect(s.holes[2].fixed).toBe(false);
     expect(s.nextHole).toBe(2);
@@ -114,8 +132,14 @@ describe('bolt-down session (holes fixed as recorded at the machine)', () => {
 
   it('names the problem on bad input', () => {
     expect(() => boltDownSession(POSITIONS, 'edge' as never, new Map())).toThrow('mode must be one of face, line');
-    expect(() => boltDownSession(POSITIONS, 'line', new Map([[5, fixedAt(0, 1)]]))).toThrow('hole 5 is not on this rail');
-    expect(() => boltDownSession(POSITIONS, 'line', new Map([[1, fixedAt(Number.NaN, 1)]]))).toThrow('reading at hole 1 must be a finite number');
-    expect(() => boltDownSession(POSITIONS, 'line', new Map([[1, { readingMm: null, fixed: true, fixSeq: 1 }]]))).toThrow(EngineInputError);
+    expect(() => boltDownSession(POSITIONS, 'line', new Map([[5, fixedAt(0, 1)]]))).toThrow(
+      'hole 5 is not on this rail',
+    );
+    expect(() => boltDownSession(POSITIONS, 'line', new Map([[1, fixedAt(Number.NaN, 1)]]))).toThrow(
+      'reading at hole 1 must be a finite number',
+    );
+    expect(() =>
+      boltDownSession(POSITIONS, 'line', new Map([[1, { readingMm: null, fixed: true, fixSeq: 1 }]])),
+    ).toThrow(EngineInputError);
   });
 });

@@ -55,7 +55,8 @@ export function boltDownSession(
       throw new EngineInputError(`hole ${index} is not on this rail (holes 0 to ${positionsMm.length - 1})`, 'index');
     }
     if (h.readingMm !== null) requireFinite(`reading at hole ${index}`, h.readingMm);
-    if (h.fixed && h.readingMm === null) throw new EngineInputError(`hole ${index} is fixed without a reading`, 'reading');
+    if (h.fixed && h.readingMm === null)
+      throw new EngineInputError(`hole ${index} is fixed without a reading`, 'reading');
   }
 
   const order = fixingOrder(positionsMm.length);
@@ -64,7 +65,10 @@ export function boltDownSession(
   const fixedInSequence = [...holes.entries()]
     .filter(([, h]) => h.fixed)
     .sort(([a, ha], [b, hb]) => (ha.fixSeq ?? Infinity) - (hb.fixSeq ?? Infinity) || rank.get(a)! - rank.get(b)!);
-  const sequence: FixedHole[] = fixedInSequence.map(([index, h]) => ({ positionMm: positionsMm[index], readingMm: h.readingMm! }));
+  const sequence: FixedHole[] = fixedInSequence.map(([index, h]) => ({
+    positionMm: positionsMm[index],
+    readingMm: h.readingMm!,
+  }));
   const seqOf = new Map(fixedInSequence.map(([index], k) => [index, k]));
 
   const states = positionsMm.map((positionMm, index): SessionHoleState => {
@@ -84,5 +88,10 @@ export function boltDownSession(
     };
   });
   const nextHole = order.find((hole) => !states[hole].fixed) ?? null;
-  return requireFiniteResult('readings', { holes: states, nextHole, fixedCount: sequence.length, complete: positionsMm.length > 0 && nextHole === null });
+  return requireFiniteResult('readings', {
+    holes: states,
+    nextHole,
+    fixedCount: sequence.length,
+    complete: positionsMm.length > 0 && nextHole === null,
+  });
 }

@@ -71,7 +71,9 @@ describe('bolt-down guide', () => {
   });
 
   it('names the problem on bad input', () => {
-    expect(() => holePositions({ lengthMm: 1000, pitchMm: 0, firstHoleOffsetMm: 20 })).toThrow('pitch must be greater than zero');
+    expect(() => holePositions({ lengthMm: 1000, pitchMm: 0, firstHoleOffsetMm: 20 })).toThrow(
+      'pitch must be greater than zero',
+    );
     expect(() => holePositions({ lengthMm: 100, pitchMm: 60, firstHoleOffsetMm: 120 })).toThrow(
       'firstHoleOffset must not be larger than the rail length',
     );

@@ -21,12 +21,17 @@ describe('engine refuses what it cannot represent', () => {
   });
 
   it('accepts the largest allowed readings and returns finite numbers', () => {
-    const r = evaluateStraightness({ positionsMm: [0, 1, 2], readingsMm: [MAX_MAGNITUDE, -MAX_MAGNITUDE, MAX_MAGNITUDE] });
+    const r = evaluateStraightness({
+      positionsMm: [0, 1, 2],
+      readingsMm: [MAX_MAGNITUDE, -MAX_MAGNITUDE, MAX_MAGNITUDE],
+    });
     expect(Number.isFinite(r.leastSquares.straightnessMm)).toBe(true);
   });
 
   it('finds a non-finite number deep in a result and names its path', () => {
-    expect(() => requireFiniteResult('runs', { a: [{ b: 1 }, { b: Number.NaN }] })).toThrow(/a\[1\]\.b is not a finite number/);
+    expect(() => requireFiniteResult('runs', { a: [{ b: 1 }, { b: Number.NaN }] })).toThrow(
+      /a\[1\]\.b is not a finite number/,
+    );
     expect(() => requireFiniteResult('runs', { a: new Float64Array([1, Infinity]) })).toThrow(/a\[1\]/);
     expect(requireFiniteResult('runs', { a: [1, null, 'x'] })).toEqual({ a: [1, null, 'x'] });
   });

@@ -18,7 +18,15 @@ const solver: LpSolver = ((lpSolverModule as unknown as { default?: LpSolver }).
  */
 function lpZoneWidth(points: GridPoint[]): number {
   const constraints: Record<string, { max?: number; min?: number }> = {};
-  const vars: Record<string, Record<string, number>> = { h: { width: 1 }, ap: {}, an: {}, bp: {}, bn: {}, cp: {}, cn: {} };
+  const vars: Record<string, Record<string, number>> = {
+    h: { width: 1 },
+    ap: {},
+    an: {},
+    bp: {},
+    bn: {},
+    cp: {},
+    cn: {},
+  };
   points.forEach((p, i) => {
     constraints[`up${i}`] = { max: -p.zMm };
     constraints[`dn${i}`] = { min: -p.zMm };
@@ -39,7 +47,8 @@ function lpZoneWidth(points: GridPoint[]): number {
 
 function grid(nx: number, ny: number, step: number, z: (x: number, y: number) => number): GridPoint[] {
   const out: GridPoint[] = [];
-  for (let j = 0; j < ny; j++) for (let i = 0; i < nx; i++) out.push({ xMm: i * step, yMm: j * step, zMm: z(i * step, j * step) });
+  for (let j = 0; j < ny; j++)
+    for (let i = 0; i < nx; i++) out.push({ xMm: i * step, yMm: j * step, zMm: z(i * step, j * step) });
   return out;
 }
 
@@ -53,7 +62,12 @@ describe('minimum-zone flatness', () => {
       const tiltX = (rand() - 0.5) * 0.002;
       const tiltY = (rand() - 0.5) * 0.002;
       const warp = rand() * 0.3;
-      const pts = grid(nx, ny, 250, (x, y) => tiltX * x + tiltY * y + warp * Math.sin(x / 400) * Math.cos(y / 300) + (rand() - 0.5) * 0.1);
+      const pts = grid(
+        nx,
+        ny,
+        250,
+        (x, y) => tiltX * x + tiltY * y + warp * Math.sin(x / 400) * Math.cos(y / 300) + (rand() - 0.5) * 0.1,
+      );
       const r = minimumZonePlane(pts);
       expect(r.flatnessMm).toBeCloseTo(lpZoneWidth(pts), 7);
       // The zone holds every point, and is never wider than least squares' (the minimum is a minimum).
@@ -65,7 +79,11 @@ describe('minimum-zone flatness', () => {
   it('matches the LP on scattered (not gridded) points with repeated heights', () => {
     const rand = seededRandom(9013);
     for (let trial = 0; trial < 15; trial++) {
-      const pts: GridPoint[] = Array.from({ length: 5 + Math.floor(rand() * 60) }, (_, i) => ({ xMm: rand() * 3000, yMm: rand() * 1500 + i * 1e-3, zMm: Math.round(rand() * 8) * 0.05 }));
+      const pts: GridPoint[] = Array.from({ length: 5 + Math.floor(rand() * 60) }, (_, i) => ({
+        xMm: rand() * 3000,
+        yMm: rand() * 1500 + i * 1e-3,
+        zMm: Math.round(rand() * 8) * 0.05,
+      }));
       expect(minimumZonePlane(pts).flatnessMm).toBeCloseTo(lpZoneWidth(pts), 7);
     }
   });
@@ -84,7 +102,10 @@ describe('minimum-zone flatness', () => {
   // z00 − z10 − z01 + z11 = h, which no plane can take out: the best leaves ±h/4 at the corners,
   // a zone of h/2.
   it('agrees with hand-worked bumps', () => {
-    expect(minimumZonePlane(grid(3, 3, 100, (x, y) => (x === 100 && y === 100 ? 0.09 : 0))).flatnessMm).toBeCloseTo(0.09, 12);
+    expect(minimumZonePlane(grid(3, 3, 100, (x, y) => (x === 100 && y === 100 ? 0.09 : 0))).flatnessMm).toBeCloseTo(
+      0.09,
+      12,
+    );
     const corner = grid(2, 2, 100, (x, y) => (x === 0 && y === 0 ? 0.2 : 0));
     expect(minimumZonePlane(corner).flatnessMm).toBeCloseTo(0.1, 12);
     expect(lpZoneWidth(corner)).toBeCloseTo(0.1, 9);

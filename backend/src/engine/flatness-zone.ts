@@ -96,7 +96,8 @@ function solveDual(X: number[], Y: number[], Z: number[]): number[] {
     if (!isArtificial(basis[r])) continue;
     let j = 0;
     while (j < 2 * n && Math.abs(T[r][j]) <= EPS) j++;
-    if (j === 2 * n) throw new EngineInputError('points all lie on one line; a plane needs points spread in both x and y', 'points');
+    if (j === 2 * n)
+      throw new EngineInputError('points all lie on one line; a plane needs points spread in both x and y', 'points');
     pivot(T, basis, r, j);
   }
   // Phase 2: the dual objective, artificials never re-enter.
@@ -136,7 +137,8 @@ function run(T: Float64Array[], basis: number[], cost: Float64Array, mayEnter: (
       }
     }
     // The dual is bounded (Σ(u + v) = 1), so a column with no positive entry cannot improve it.
-    if (leave < 0) throw new EngineInputError('the heights give no bounded flatness zone; check the values entered', 'points');
+    if (leave < 0)
+      throw new EngineInputError('the heights give no bounded flatness zone; check the values entered', 'points');
     pivot(T, basis, leave, enter);
   }
   throw new EngineInputError('the flatness zone did not settle; check the values entered', 'points');

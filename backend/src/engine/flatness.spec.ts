@@ -55,9 +55,12 @@ describe('flatness', () => {
   });
 
   it('names the problem on bad input', () => {
-    expect(() => evaluateFlatness([{ xMm: 0, yMm: 0, zMm: 0 }, { xMm: 1, yMm: 0, zMm: 0 }])).toThrow(
-      'points needs at least 3 values (got 2)',
-    );
+    expect(() =>
+      evaluateFlatness([
+        { xMm: 0, yMm: 0, zMm: 0 },
+        { xMm: 1, yMm: 0, zMm: 0 },
+      ]),
+    ).toThrow('points needs at least 3 values (got 2)');
     expect(() => evaluateFlatness(grid(4, 1, 10, () => 0))).toThrow(/points all lie on one line/);
     expect(() =>
       evaluateFlatness([

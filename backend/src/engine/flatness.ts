@@ -52,7 +52,10 @@ export function evaluateFlatness(points: readonly GridPoint[]): FlatnessResult {
     const key = `${p.xMm},${p.yMm}`;
     const earlier = seen.get(key);
     if (earlier !== undefined) {
-      throw new EngineInputError(`points[${earlier}] and points[${i}] are at the same position (${p.xMm}, ${p.yMm})`, 'points');
+      throw new EngineInputError(
+        `points[${earlier}] and points[${i}] are at the same position (${p.xMm}, ${p.yMm})`,
+        'points',
+      );
     }
     seen.set(key, i);
     mx += p.xMm;

@@ -4,7 +4,13 @@ describe('ISO 9013 class 2 part tolerance', () => {
   // TRADE.md (common practice, citing ISO 9013): class 2 is about ±0.9 mm on 35–125 mm parts in 3–6 mm plate.
   it('gives ±0.9 mm for 35–125 mm parts in 3.15–6.3 mm plate', () => {
     for (const size of [35, 50, 100, 124.9]) {
-      for (const t of [3.2, 5, 6, 6.3]) expect(iso9013Class2(size, t)).toMatchObject({ toleranceMm: 0.9, sizeBandMm: [35, 125], thicknessBandMm: [3.15, 6.3], outside: null });
+      for (const t of [3.2, 5, 6, 6.3])
+        expect(iso9013Class2(size, t)).toMatchObject({
+          toleranceMm: 0.9,
+          sizeBandMm: [35, 125],
+          thicknessBandMm: [3.15, 6.3],
+          outside: null,
+        });
     }
     expect(ISO9013_REFERENCE.toleranceMm).toBe(0.9);
   });

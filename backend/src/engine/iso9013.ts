@@ -62,18 +62,24 @@ export function iso9013Class2(nominalMm: number, plateThicknessMm: number): Iso9
   let s = ISO9013_SIZE_BANDS_MM.findIndex(([lo, hi]) => nominalMm >= lo && nominalMm < hi);
   if (s < 0) {
     s = ISO9013_SIZE_BANDS_MM.length - 1;
-    reasons.push(`a ${fmt(nominalMm)} mm size is beyond the table's largest band (${ISO9013_SIZE_BANDS_MM[s][0]}–${ISO9013_SIZE_BANDS_MM[s][1]} mm), whose value is used`);
+    reasons.push(
+      `a ${fmt(nominalMm)} mm size is beyond the table's largest band (${ISO9013_SIZE_BANDS_MM[s][0]}–${ISO9013_SIZE_BANDS_MM[s][1]} mm), whose value is used`,
+    );
   }
   let t = ISO9013_THICKNESS_BANDS_MM.findIndex(([lo, hi]) => plateThicknessMm > lo && plateThicknessMm <= hi);
   if (t < 0) {
     t = ISO9013_THICKNESS_BANDS_MM.length - 1;
-    reasons.push(`${fmt(plateThicknessMm)} mm plate is beyond the table's thickest band (${ISO9013_THICKNESS_BANDS_MM[t][0]}–${ISO9013_THICKNESS_BANDS_MM[t][1]} mm), whose value is used`);
+    reasons.push(
+      `${fmt(plateThicknessMm)} mm plate is beyond the table's thickest band (${ISO9013_THICKNESS_BANDS_MM[t][0]}–${ISO9013_THICKNESS_BANDS_MM[t][1]} mm), whose value is used`,
+    );
   }
   let value = CLASS_2[t][s];
   if (value === null) {
     // The standard gives no value for parts this small in plate this thick: the nearest larger size band.
     const next = CLASS_2[t].findIndex((v, i) => i > s && v !== null);
-    reasons.push(`the table gives no value for ${ISO9013_SIZE_BANDS_MM[s][0]}–${ISO9013_SIZE_BANDS_MM[s][1]} mm parts in ${ISO9013_THICKNESS_BANDS_MM[t][0]}–${ISO9013_THICKNESS_BANDS_MM[t][1]} mm plate; the ${ISO9013_SIZE_BANDS_MM[next][0]}–${ISO9013_SIZE_BANDS_MM[next][1]} mm band is used`);
+    reasons.push(
+      `the table gives no value for ${ISO9013_SIZE_BANDS_MM[s][0]}–${ISO9013_SIZE_BANDS_MM[s][1]} mm parts in ${ISO9013_THICKNESS_BANDS_MM[t][0]}–${ISO9013_THICKNESS_BANDS_MM[t][1]} mm plate; the ${ISO9013_SIZE_BANDS_MM[next][0]}–${ISO9013_SIZE_BANDS_MM[next][1]} mm band is used`,
+    );
     s = next;
     value = CLASS_2[t][s]!;
   }

@@ -39,5 +39,9 @@ export function evaluateParallelism(input: ParallelismInput): ParallelismResult 
     if (d > max) max = d;
     sum += d;
   }
-  return requireFiniteResult('railAMm and railBMm', { parallelismMm: max - min, meanOffsetMm: sum / positions.length, differencesMm: differences });
+  return requireFiniteResult('railAMm and railBMm', {
+    parallelismMm: max - min,
+    meanOffsetMm: sum / positions.length,
+    differencesMm: differences,
+  });
 }

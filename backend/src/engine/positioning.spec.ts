@@ -9,7 +9,9 @@ function constructedRuns() {
   const runs: PositioningRun[] = [];
   for (const direction of ['up', 'down'] as const) {
     for (let run = 1; run <= 5; run++) {
-      const um = targets.map((t) => Number(rows.find((r) => r.target_mm === t && r.direction === direction && r.run === run)!.deviation_um));
+      const um = targets.map((t) =>
+        Number(rows.find((r) => r.target_mm === t && r.direction === direction && r.run === run)!.deviation_um),
+      );
       runs.push({ direction, deviationsMm: arrayToMm(um, 'um') });
     }
   }
@@ -85,7 +87,10 @@ describe('ISO 230-2 positioning', () => {
     expect(r.accuracyDownMm).toBeCloseTo(4 + 2 * r2, 14);
     expect(r.accuracyMm).toBeCloseTo(4 + 2 * r2, 14);
     expect(r.warnings).toHaveLength(2);
-    expect(r.warnings[0]).toMatchObject({ code: 'few-runs', message: expect.stringMatching(/5 runs in each direction \(got 2 up, 2 down\)/) });
+    expect(r.warnings[0]).toMatchObject({
+      code: 'few-runs',
+      message: expect.stringMatching(/5 runs in each direction \(got 2 up, 2 down\)/),
+    });
     expect(r.warnings[1].code).toBe('few-targets');
   });
 
@@ -98,7 +103,10 @@ describe('ISO 230-2 positioning', () => {
       deviationsMm: targets.map(() => (rand() - 0.5) * 0.02 + (k % 2 ? -0.005 : 0.005)),
     }));
     const a = evaluatePositioning({ targetsMm: targets, runs });
-    const b = evaluatePositioning({ targetsMm: targets, runs: runs.map((r) => ({ ...r, deviationsMm: r.deviationsMm.map((d) => d + 0.1) })) });
+    const b = evaluatePositioning({
+      targetsMm: targets,
+      runs: runs.map((r) => ({ ...r, deviationsMm: r.deviationsMm.map((d) => d + 0.1) })),
+    });
     for (const key of ['reversalMm', 'repeatabilityMm', 'systematicMm', 'meanRangeMm', 'accuracyMm'] as const) {
       expect(b[key]).toBeCloseTo(a[key], 12);
     }
@@ -121,7 +129,10 @@ describe('ISO 230-2 positioning', () => {
     );
     expect(() => evaluatePositioning({ targetsMm: [0, 0], runs: runs(2) })).toThrow(/targets repeats the value 0/);
     expect(() =>
-      evaluatePositioning({ targetsMm: [0, 10], runs: [...runs(2), { direction: 'sideways' as never, deviationsMm: ok }] }),
+      evaluatePositioning({
+        targetsMm: [0, 10],
+        runs: [...runs(2), { direction: 'sideways' as never, deviationsMm: ok }],
+      }),
     ).toThrow('runs[4].direction must be up or down');
     expect(() =>
       evaluatePositioning({ targetsMm: [0, 10], runs: [...runs(2), { direction: 'up', deviationsMm: [0, Infinity] }] }),
@@ -131,7 +142,9 @@ describe('ISO 230-2 positioning', () => {
 
 describe('positioning warnings and the reference temperature', () => {
   const runsAt = (targets: number[], n: number, dev: (t: number, k: number) => number): PositioningRun[] =>
-    (['up', 'down'] as const).flatMap((direction) => Array.from({ length: n }, (_, k) => ({ direction, deviationsMm: targets.map((t) => dev(t, k)) })));
+    (['up', 'down'] as const).flatMap((direction) =>
+      Array.from({ length: n }, (_, k) => ({ direction, deviationsMm: targets.map((t) => dev(t, k)) })),
+    );
 
   // iso230_2_formulas.md (ISO 230-2, from memory): at least 5 targets, and 5 per metre of travel.
   it('asks for 5 targets per metre: 1000 mm of travel with 5 targets is enough, 1500 mm needs 8', () => {
@@ -162,7 +175,12 @@ describe('positioning warnings and the reference temperature', () => {
     const t = [0, 100, 200, 300, 400];
     const factor = 23.1e-6 * 10;
     const plain = evaluatePositioning({ targetsMm: t, runs: runsAt(t, 5, (x, k) => k * 0.001) });
-    const warm = evaluatePositioning({ targetsMm: t, runs: runsAt(t, 5, (x, k) => k * 0.001), thermalFactor: factor, toleranceMm: 0.05 });
+    const warm = evaluatePositioning({
+      targetsMm: t,
+      runs: runsAt(t, 5, (x, k) => k * 0.001),
+      thermalFactor: factor,
+      toleranceMm: 0.05,
+    });
     expect(warm.targets[4].meanUpMm - plain.targets[4].meanUpMm).toBeCloseTo(400 * factor, 12);
     expect(warm.targets[0].meanUpMm).toBeCloseTo(plain.targets[0].meanUpMm, 15);
     expect(warm.thermalCorrectionMaxMm).toBeCloseTo(0.0924, 12);

@@ -1,5 +1,12 @@
 import { EngineInputError } from './engine-input-error.js';
-import { MAX_POINTS, ascendingOrder, requireFinite, requireNumberArray, requirePositive, requireFiniteResult } from './validate.js';
+import {
+  MAX_POINTS,
+  ascendingOrder,
+  requireFinite,
+  requireNumberArray,
+  requirePositive,
+  requireFiniteResult,
+} from './validate.js';
 import type { ResultWarning } from './warnings.js';
 
 /**
@@ -119,14 +126,18 @@ export function evaluatePositioning(input: PositioningInput): PositioningResult 
   if (!Array.isArray(input.runs)) throw new EngineInputError('runs must be a list of {direction, deviations}', 'runs');
   const m = targets.length;
   if (m * input.runs.length > MAX_POINTS) {
-    throw new EngineInputError(`runs hold ${m * input.runs.length} deviations; at most ${MAX_POINTS} are accepted`, 'runs');
+    throw new EngineInputError(
+      `runs hold ${m * input.runs.length} deviations; at most ${MAX_POINTS} are accepted`,
+      'runs',
+    );
   }
 
   const thermal = input.thermalFactor == null ? 0 : requireFinite('thermalFactor', input.thermalFactor);
   const up: number[][] = targets.map(() => []);
   const down: number[][] = targets.map(() => []);
   input.runs.forEach((run, r) => {
-    if (run === null || typeof run !== 'object') throw new EngineInputError(`runs[${r}] must be {direction, deviations}`, 'runs');
+    if (run === null || typeof run !== 'object')
+      throw new EngineInputError(`runs[${r}] must be {direction, deviations}`, 'runs');
     if (run.direction !== 'up' && run.direction !== 'down') {
       throw new EngineInputError(`runs[${r}].direction must be up or down`, 'runs');
     }
@@ -134,7 +145,10 @@ export function evaluatePositioning(input: PositioningInput): PositioningResult 
     // Referred to 20 °C by the distance from the first target, where the scale reads zero (a copy: the input stays as given).
     const dev = thermal === 0 ? raw : raw.map((d, i) => d + ((targets[i] ?? targets[0]) - targets[0]) * thermal);
     if (dev.length !== m) {
-      throw new EngineInputError(`runs[${r}].deviations must have one value per target (${m}, got ${dev.length})`, 'runs');
+      throw new EngineInputError(
+        `runs[${r}].deviations must have one value per target (${m}, got ${dev.length})`,
+        'runs',
+      );
     }
     const bucket = run.direction === 'up' ? up : down;
     dev.forEach((d, i) => bucket[i].push(d));
@@ -191,7 +205,10 @@ export function evaluatePositioning(input: PositioningInput): PositioningResult 
     repeatabilityMm: maxOf(col((t) => t.repeatabilityMm)),
     systematicUpMm: range(col((t) => t.meanUpMm)),
     systematicDownMm: range(col((t) => t.meanDownMm)),
-    systematicMm: range(col((t) => t.meanUpMm), col((t) => t.meanDownMm)),
+    systematicMm: range(
+      col((t) => t.meanUpMm),
+      col((t) => t.meanDownMm),
+    ),
     meanRangeMm: range(col((t) => t.meanMm)),
     accuracyUpMm: maxOf(upperUp) - minOf(lowerUp),
     accuracyDownMm: maxOf(upperDown) - minOf(lowerDown),
@@ -205,7 +222,13 @@ export function evaluatePositioning(input: PositioningInput): PositioningResult 
 
 const um = (mm: number) => `${(mm * 1000).toPrecision(3)} µm`;
 
-function positioningWarnings(input: PositioningInput, targets: number[], runsUp: number, runsDown: number, thermal: number): ResultWarning[] {
+function positioningWarnings(
+  input: PositioningInput,
+  targets: number[],
+  runsUp: number,
+  runsDown: number,
+  thermal: number,
+): ResultWarning[] {
   const warnings: ResultWarning[] = [];
   const m = targets.length;
   if (runsUp < STANDARD_RUNS_PER_DIRECTION || runsDown < STANDARD_RUNS_PER_DIRECTION) {
@@ -223,7 +246,8 @@ function positioningWarnings(input: PositioningInput, targets: number[], runsUp:
     });
   }
   const tolerance = input.toleranceMm == null ? null : requirePositive('tolerance', input.toleranceMm);
-  const resolution = input.instrumentResolutionMm == null ? null : requirePositive('instrumentResolution', input.instrumentResolutionMm);
+  const resolution =
+    input.instrumentResolutionMm == null ? null : requirePositive('instrumentResolution', input.instrumentResolutionMm);
   if (tolerance !== null && resolution !== null && resolution > tolerance / 4) {
     warnings.push({
       code: 'coarse-instrument',

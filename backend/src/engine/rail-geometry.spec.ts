@@ -28,7 +28,10 @@ describe('local slope along a rail', () => {
   it('reads the residuals, so a set-up tilt of the indicator is not slope', () => {
     const rows = referenceCsv('straightness_examples.csv').filter((r) => r.case === 'S1_rail_dial_indicator');
     const x = rows.map((r) => Number(r.x));
-    const y = arrayToMm(rows.map((r) => Number(r.y)), 'um');
+    const y = arrayToMm(
+      rows.map((r) => Number(r.y)),
+      'um',
+    );
     const tilted = y.map((v, i) => v + 0.0005 * x[i]);
     const a = evaluateStraightness({ positionsMm: x, readingsMm: y }).minimumZone.residualsMm;
     const b = evaluateStraightness({ positionsMm: x, readingsMm: tilted }).minimumZone.residualsMm;
@@ -64,7 +67,11 @@ describe('end distance of rail holes', () => {
   it('finds the hole that sits exactly on the far end', () => {
     const holes = holePositions({ lengthMm: 800, pitchMm: 60, firstHoleOffsetMm: 20 });
     expect(holes[holes.length - 1]).toBe(800);
-    expect(endDistanceProblem(holes, 800, defaultEndDistanceMm('M5'))).toEqual({ end: 'end', positionMm: 800, clearanceMm: 0 });
+    expect(endDistanceProblem(holes, 800, defaultEndDistanceMm('M5'))).toEqual({
+      end: 'end',
+      positionMm: 800,
+      clearanceMm: 0,
+    });
   });
 
   it('finds a hole too near the start and accepts a rail whose holes keep the distance', () => {
@@ -84,15 +91,41 @@ describe('sweep warnings', () => {
   const show = (mm: number) => `${+(mm * 1000).toFixed(3)} µm`;
   // The 4:1 rule of instrument resolution against tolerance (common practice).
   it('warns when the indicator is coarser than a quarter of the tolerance', () => {
-    const w = sweepWarnings({ stationCount: 10, resolutionMm: 0.01, toleranceMm: 0.02, reference: 'minimum-zone', spanMm: 900, railLengthMm: 1000, show });
+    const w = sweepWarnings({
+      stationCount: 10,
+      resolutionMm: 0.01,
+      toleranceMm: 0.02,
+      reference: 'minimum-zone',
+      spanMm: 900,
+      railLengthMm: 1000,
+      show,
+    });
     expect(w.map((x) => x.code)).toEqual(['coarse-instrument']);
     expect(w[0].message).toContain('10 µm');
     expect(w[0].message).toContain('5 µm');
-    expect(sweepWarnings({ stationCount: 10, resolutionMm: 0.005, toleranceMm: 0.02, reference: 'minimum-zone', spanMm: 900, railLengthMm: 1000, show })).toEqual([]);
+    expect(
+      sweepWarnings({
+        stationCount: 10,
+        resolutionMm: 0.005,
+        toleranceMm: 0.02,
+        reference: 'minimum-zone',
+        spanMm: 900,
+        railLengthMm: 1000,
+        show,
+      }),
+    ).toEqual([]);
   });
 
   it('warns of too few stations and of a sweep that covers little of the rail', () => {
-    const w = sweepWarnings({ stationCount: 4, resolutionMm: null, toleranceMm: 0.02, reference: 'least-squares', spanMm: 300, railLengthMm: 1000, show });
+    const w = sweepWarnings({
+      stationCount: 4,
+      resolutionMm: null,
+      toleranceMm: 0.02,
+      reference: 'least-squares',
+      spanMm: 300,
+      railLengthMm: 1000,
+      show,
+    });
     expect(w.map((x) => x.code)).toEqual(['few-stations', 'short-sweep']);
   });
 });

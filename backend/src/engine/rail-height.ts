@@ -15,7 +15,11 @@ export interface HeightDifferenceResult {
   differencesMm: number[];
 }
 
-export function heightDifference(positionsMm: readonly number[], railAMm: readonly number[], railBMm: readonly number[]): HeightDifferenceResult {
+export function heightDifference(
+  positionsMm: readonly number[],
+  railAMm: readonly number[],
+  railBMm: readonly number[],
+): HeightDifferenceResult {
   const x = requireNumberArray('positions', positionsMm, 1);
   const a = requireNumberArray('railA', railAMm, 1);
   const b = requireNumberArray('railB', railBMm, 1);
@@ -24,7 +28,12 @@ export function heightDifference(positionsMm: readonly number[], railAMm: readon
   const differences = a.map((v, i) => b[i] - v);
   let worst = 0;
   for (let i = 1; i < differences.length; i++) if (Math.abs(differences[i]) > Math.abs(differences[worst])) worst = i;
-  return requireFiniteResult('railA and railB', { worstMm: Math.abs(differences[worst]), worstSignedMm: differences[worst], atMm: x[worst], differencesMm: differences });
+  return requireFiniteResult('railA and railB', {
+    worstMm: Math.abs(differences[worst]),
+    worstSignedMm: differences[worst],
+    atMm: x[worst],
+    differencesMm: differences,
+  });
 }
 
 /**
@@ -33,7 +42,9 @@ export function heightDifference(positionsMm: readonly number[], railAMm: readon
  * Returns S in mm.
  */
 export function permissibleHeightDifferenceMm(spacingMm: number, kUmPerMm: number): number {
-  if (!(Number.isFinite(spacingMm) && spacingMm > 0)) throw new EngineInputError('spacing must be a positive length', 'spacing');
-  if (!(Number.isFinite(kUmPerMm) && kUmPerMm > 0)) throw new EngineInputError('K must be a positive number of µm per mm of spacing', 'K');
+  if (!(Number.isFinite(spacingMm) && spacingMm > 0))
+    throw new EngineInputError('spacing must be a positive length', 'spacing');
+  if (!(Number.isFinite(kUmPerMm) && kUmPerMm > 0))
+    throw new EngineInputError('K must be a positive number of µm per mm of spacing', 'K');
   return (spacingMm * kUmPerMm) / 1000;
 }

@@ -25,7 +25,11 @@ export interface EndDistanceProblem {
 }
 
 /** The first hole too near an end, or null when every hole keeps the end distance. */
-export function endDistanceProblem(holePositionsMm: readonly number[], lengthMm: number, endDistanceMm: number): EndDistanceProblem | null {
+export function endDistanceProblem(
+  holePositionsMm: readonly number[],
+  lengthMm: number,
+  endDistanceMm: number,
+): EndDistanceProblem | null {
   if (!holePositionsMm.length) return null;
   const first = Math.min(...holePositionsMm);
   const last = Math.max(...holePositionsMm);

@@ -16,11 +16,16 @@ export interface LocalSlopeResult {
   baseMm: number | null;
 }
 
-export function localSlope(positionsMm: readonly number[], deviationsMm: readonly number[], baseMm: number | null = null): LocalSlopeResult {
+export function localSlope(
+  positionsMm: readonly number[],
+  deviationsMm: readonly number[],
+  baseMm: number | null = null,
+): LocalSlopeResult {
   const x = requireNumberArray('positions', positionsMm, 2);
   const y = requireNumberArray('deviations', deviationsMm, 2);
   requireSameLength('positions', x, 'deviations', y);
-  if (baseMm !== null && !(Number.isFinite(baseMm) && baseMm > 0)) throw new EngineInputError('base must be a positive length', 'base');
+  if (baseMm !== null && !(Number.isFinite(baseMm) && baseMm > 0))
+    throw new EngineInputError('base must be a positive length', 'base');
   const order = x.map((_, i) => i).sort((i, j) => x[i] - x[j]);
   let best: LocalSlopeResult = { mmPerM: 0, fromMm: x[order[0]], toMm: x[order[1]], baseMm };
   let j = 0;

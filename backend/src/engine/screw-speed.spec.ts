@@ -32,7 +32,14 @@ describe('screw speed', () => {
   // root diameter of at least 14.4 mm, and dm·n ≤ 70 000 gives dm ≤ 23.3 mm.
   it('agrees with the DENSO sizing example (root ≥ 14.4 mm, diameter ≤ 23.3 mm at 3000 rpm)', () => {
     const at = (root: number, nominal: number) =>
-      evaluateScrewSpeed({ ...base, nominalDiameterMm: nominal, rootDiameterMm: root, unsupportedLengthMm: 850, leadMm: 10, feedRateMmPerMin: 30000 });
+      evaluateScrewSpeed({
+        ...base,
+        nominalDiameterMm: nominal,
+        rootDiameterMm: root,
+        unsupportedLengthMm: 850,
+        leadMm: 10,
+        feedRateMmPerMin: 30000,
+      });
     expect(at(14.4, 20).permissibleSpeedRpm).toBeGreaterThanOrEqual(3000);
     expect(at(14.3, 20).permissibleSpeedRpm).toBeLessThan(3000);
     expect(at(14.4, 20).withinLimits).toBe(true);
@@ -47,7 +54,11 @@ describe('screw speed', () => {
     const rows = referenceCsv('ballscrew_16x5_derived_speeds.csv').filter((r) => r.source === 'THK');
     expect(rows).toHaveLength(20);
     for (const row of rows) {
-      const r = evaluateScrewSpeed({ ...base, mounting: row.mounting as Mounting, unsupportedLengthMm: Number(row.length_mm) });
+      const r = evaluateScrewSpeed({
+        ...base,
+        mounting: row.mounting as Mounting,
+        unsupportedLengthMm: Number(row.length_mm),
+      });
       // The table lists the critical speed (no safety factor) and the permissible speed (0.8 once).
       expect(r.criticalSpeedRpm).toBeCloseTo(Number(row.critical_speed_no_safety_rpm), 2);
       expect(r.permissibleSpeedRpm).toBeCloseTo(Number(row['permissible_speed_with_0.8_rpm']), 2);
@@ -74,7 +85,10 @@ describe('screw speed', () => {
   // THK example value and the d·n limit of a 16 mm rolled screw (HIWIN rolled: 70 000 / 16 = 4375 rpm).
   it('gives 1947.9 rpm fixed-supported at 1000 mm and a 4375 rpm d·n limit for a 16 mm screw', () => {
     const r = evaluateScrewSpeed(base);
-    expect(r.permissibleSpeedRpm).toBeCloseTo(reference.derived_check_values['example_fixed_supported_L1000_dk12.9'].THK_permissible_rpm, 6);
+    expect(r.permissibleSpeedRpm).toBeCloseTo(
+      reference.derived_check_values['example_fixed_supported_L1000_dk12.9'].THK_permissible_rpm,
+      6,
+    );
     expect(r.dnLimitSpeedRpm).toBe(reference.derived_check_values.dn_limit_rpm_16mm_rolled_HIWIN_70000_over_ds16);
     expect(r.rpm).toBe(1000);
     expect(r.maxFeedRateMmPerMin).toBeCloseTo(5 * 1947.9, 6);
@@ -94,7 +108,12 @@ describe('screw speed', () => {
   });
 
   it('uses a given d·n limit, and the rpm exactly at a limit is within it', () => {
-    const r = evaluateScrewSpeed({ ...base, unsupportedLengthMm: 300, dnLimit: 90_000, feedRateMmPerMin: 5 * (90_000 / 16) });
+    const r = evaluateScrewSpeed({
+      ...base,
+      unsupportedLengthMm: 300,
+      dnLimit: 90_000,
+      feedRateMmPerMin: 5 * (90_000 / 16),
+    });
     expect(r.dnLimitSpeedRpm).toBe(5625);
     expect(r.limitedBy).toBe('dn-limit');
     expect(r.withinLimits).toBe(true);
@@ -104,7 +123,9 @@ describe('screw speed', () => {
     expect(() => evaluateScrewSpeed({ ...base, mounting: 'clamped' as never })).toThrow(
       'mounting must be one of fixed-free, supported-supported, fixed-supported, fixed-fixed',
     );
-    expect(() => evaluateScrewSpeed({ ...base, rootDiameterMm: 17 })).toThrow('rootDiameter must not be larger than nominalDiameter');
+    expect(() => evaluateScrewSpeed({ ...base, rootDiameterMm: 17 })).toThrow(
+      'rootDiameter must not be larger than nominalDiameter',
+    );
     expect(() => evaluateScrewSpeed({ ...base, leadMm: 0 })).toThrow('lead must be greater than zero');
     expect(() => evaluateScrewSpeed({ ...base, feedRateMmPerMin: -1 })).toThrow('feedRate must not be negative');
     expect(() => evaluateScrewSpeed({ ...base, dnLimit: NaN })).toThrow('dnLimit must be a finite number');

@@ -29,7 +29,12 @@ describe('squareness from diagonals', () => {
   it('matches the constructed 500 mm square and the small-angle form', () => {
     const ex = referenceJson('squareness_diagonals.json').worked_examples_derived_here[1];
     const side = Math.hypot(500, 0.25);
-    const r = evaluateSquareness({ sideXMm: 500, sideYMm: side, diagonal1Mm: ex.diagonal_BD_mm, diagonal2Mm: ex.diagonal_AC_mm });
+    const r = evaluateSquareness({
+      sideXMm: 500,
+      sideYMm: side,
+      diagonal1Mm: ex.diagonal_BD_mm,
+      diagonal2Mm: ex.diagonal_AC_mm,
+    });
     expectRelative(r.outOfSquareRad, ex.gamma_true_rad, 1e-9);
     expectRelative(r.outOfSquareRad, ex.gamma_approx_dd_over_d0_rad, 1e-6);
     expect(r.longDiagonal).toBe(2);
@@ -47,7 +52,12 @@ describe('squareness from diagonals', () => {
       // A(0,0) B(a,0) D(b sin g, b cos g) C = B + D.
       const D = [b * Math.sin(g), b * Math.cos(g)];
       const C = [a + D[0], D[1]];
-      const r = evaluateSquareness({ sideXMm: a, sideYMm: b, diagonal1Mm: Math.hypot(C[0], C[1]), diagonal2Mm: Math.hypot(D[0] - a, D[1]) });
+      const r = evaluateSquareness({
+        sideXMm: a,
+        sideYMm: b,
+        diagonal1Mm: Math.hypot(C[0], C[1]),
+        diagonal2Mm: Math.hypot(D[0] - a, D[1]),
+      });
       expectRelative(r.outOfSquareDeg, gammaDeg, 1e-7);
       expectRelative(r.correctionMm, a * Math.tan(g), 1e-7);
     }
@@ -63,7 +73,9 @@ describe('squareness from diagonals', () => {
   it('warns when the diagonals do not belong to the sides, and refuses impossible ones', () => {
     const r = evaluateSquareness({ sideXMm: 1000, sideYMm: 600, diagonal1Mm: 1200, diagonal2Mm: 1199 });
     expect(r.warnings[0]).toMatch(/diagonals do not match the sides/);
-    expect(() => evaluateSquareness({ sideXMm: 10, sideYMm: 10, diagonal1Mm: 1000, diagonal2Mm: 1 })).toThrow(EngineInputError);
+    expect(() => evaluateSquareness({ sideXMm: 10, sideYMm: 10, diagonal1Mm: 1000, diagonal2Mm: 1 })).toThrow(
+      EngineInputError,
+    );
     expect(() => evaluateSquareness({ sideXMm: 0, sideYMm: 10, diagonal1Mm: 14, diagonal2Mm: 14 })).toThrow(
       'sideX must be greater than zero',
     );

@@ -1,7 +1,11 @@
 import { referenceJson } from './reference-data/reference-data.js';
 import { evaluateDrive } from './steps-per-mm.js';
 
-const checks = referenceJson('stepper_steps_per_mm.json').check_values_derived_here as { case: string; travel_per_rev_mm: number; steps_per_mm: number }[];
+const checks = referenceJson('stepper_steps_per_mm.json').check_values_derived_here as {
+  case: string;
+  travel_per_rev_mm: number;
+  steps_per_mm: number;
+}[];
 const check = (prefix: string) => checks.find((c) => c.case.startsWith(prefix))!;
 
 describe('steps per mm', () => {
@@ -16,7 +20,9 @@ describe('steps per mm', () => {
   });
 
   it('gives 400, 640 and 320 steps/mm for 8 mm and 5 mm leads', () => {
-    expect(evaluateDrive({ type: 'screw', motorStepsPerRev: 200, microsteps: 16, leadMm: 8 }).stepsPerMm).toBe(check('T8').steps_per_mm);
+    expect(evaluateDrive({ type: 'screw', motorStepsPerRev: 200, microsteps: 16, leadMm: 8 }).stepsPerMm).toBe(
+      check('T8').steps_per_mm,
+    );
     expect(evaluateDrive({ type: 'screw', motorStepsPerRev: 200, microsteps: 16, leadMm: 5 }).stepsPerMm).toBe(
       check('ball screw 16x5 (5 mm lead), 200 steps, 16').steps_per_mm,
     );
@@ -33,15 +39,26 @@ describe('steps per mm', () => {
   // Rack and pinion: travel per turn π·m·z (pitch diameter d = m·z, the standard gear relation).
   it('uses π·m·z for a rack (m = 1.5, z = 20 → 94.248 mm/rev, 16.977 steps/mm at 200 × 8)', () => {
     const c = check('rack and pinion m=1.5');
-    const r = evaluateDrive({ type: 'rack', motorStepsPerRev: 200, microsteps: 8, pinionModuleMm: 1.5, pinionTeeth: 20 });
+    const r = evaluateDrive({
+      type: 'rack',
+      motorStepsPerRev: 200,
+      microsteps: 8,
+      pinionModuleMm: 1.5,
+      pinionTeeth: 20,
+    });
     expect(r.travelPerRevMm).toBeCloseTo(c.travel_per_rev_mm, 12);
     expect(r.stepsPerMm).toBeCloseTo(c.steps_per_mm, 12);
     // Rack calculator example: m = 2, z = 20 → 125.66 mm per turn.
-    expect(evaluateDrive({ type: 'rack', motorStepsPerRev: 200, microsteps: 1, pinionModuleMm: 2, pinionTeeth: 20 }).travelPerRevMm).toBeCloseTo(125.66, 2);
+    expect(
+      evaluateDrive({ type: 'rack', motorStepsPerRev: 200, microsteps: 1, pinionModuleMm: 2, pinionTeeth: 20 })
+        .travelPerRevMm,
+    ).toBeCloseTo(125.66, 2);
   });
 
   it('names the missing or bad field', () => {
-    expect(() => evaluateDrive({ type: 'screw', motorStepsPerRev: 200, microsteps: 16 })).toThrow('lead is required for a screw drive');
+    expect(() => evaluateDrive({ type: 'screw', motorStepsPerRev: 200, microsteps: 16 })).toThrow(
+      'lead is required for a screw drive',
+    );
     expect(() => evaluateDrive({ type: 'belt', motorStepsPerRev: 200, microsteps: 16, beltPitchMm: 2 })).toThrow(
       'pulleyTeeth is required for a belt drive',
     );

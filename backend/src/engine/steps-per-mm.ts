@@ -54,7 +54,11 @@ export function travelPerRevMm(input: DriveInput): number {
       required('pinionModule', 'rack', input.pinionModuleMm);
       required('pinionTeeth', 'rack', input.pinionTeeth);
       // Pitch diameter d = m·z, so one pinion turn moves the rack π·m·z.
-      return Math.PI * requirePositive('pinionModule', input.pinionModuleMm) * requirePositiveInteger('pinionTeeth', input.pinionTeeth);
+      return (
+        Math.PI *
+        requirePositive('pinionModule', input.pinionModuleMm) *
+        requirePositiveInteger('pinionTeeth', input.pinionTeeth)
+      );
     default:
       throw new EngineInputError(`type must be one of ${DRIVE_TYPES.join(', ')}`, 'type');
   }

@@ -156,7 +156,9 @@ describe('straightness', () => {
       expect(bad([0, '1', 2], [0, 0, 1])).toThrow(/positions\[1\] must be a finite number/);
     });
     it('refuses a repeated station', () => {
-      expect(bad([0, 100, 50, 100], [0, 0, 1, 2])).toThrow(/positions repeats the value 100 \(at positions\[1\] and positions\[3\]\)/);
+      expect(bad([0, 100, 50, 100], [0, 0, 1, 2])).toThrow(
+        /positions repeats the value 100 \(at positions\[1\] and positions\[3\]\)/,
+      );
     });
     it('refuses more than 200 000 stations', () => {
       const many = Array.from({ length: 200_001 }, (_, i) => i);

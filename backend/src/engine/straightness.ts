@@ -65,13 +65,19 @@ function validated(input: StraightnessInput, options: StraightnessOptions) {
   return { positions, readings, order };
 }
 
-export function leastSquaresStraightness(input: StraightnessInput, options: StraightnessOptions = {}): ReferenceLineResult {
+export function leastSquaresStraightness(
+  input: StraightnessInput,
+  options: StraightnessOptions = {},
+): ReferenceLineResult {
   const { positions, readings } = validated(input, options);
   const fit = fitLine(positions, readings);
   return againstLine(positions, readings, fit.slope, fit.intercept);
 }
 
-export function minimumZoneStraightness(input: StraightnessInput, options: StraightnessOptions = {}): ReferenceLineResult {
+export function minimumZoneStraightness(
+  input: StraightnessInput,
+  options: StraightnessOptions = {},
+): ReferenceLineResult {
   const { positions, readings, order } = validated(input, options);
   const zone = minimumZoneLine(positions, readings, order);
   return againstLine(positions, readings, zone.slope, zone.intercept);

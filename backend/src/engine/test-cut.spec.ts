@@ -8,7 +8,12 @@ const base: TestCutInput = {
 describe('test cut', () => {
   // Calibration rule new = old × commanded ÷ measured (common practice), per axis.
   it('gives each axis its scale error and corrected steps per mm', () => {
-    const r = evaluateTestCut({ ...base, x: { commandedMm: 300, measuredMm: 299.4 }, stepsPerMmX: 80, stepsPerMmY: 80 });
+    const r = evaluateTestCut({
+      ...base,
+      x: { commandedMm: 300, measuredMm: 299.4 },
+      stepsPerMmX: 80,
+      stepsPerMmY: 80,
+    });
     expect(r.x.scale).toBeCloseTo(0.998, 14);
     expect(r.x.errorMm).toBeCloseTo(-0.6, 12);
     expect(r.x.errorPercent).toBeCloseTo(-0.2, 12);
@@ -30,7 +35,10 @@ describe('test cut', () => {
   });
 
   it('reads a round circle as round', () => {
-    const r = evaluateTestCut({ ...base, circle: { commandedDiameterMm: 100, measuredXMm: 100.02, measuredYMm: 99.99 } });
+    const r = evaluateTestCut({
+      ...base,
+      circle: { commandedDiameterMm: 100, measuredXMm: 100.02, measuredYMm: 99.99 },
+    });
     expect(r.ovality!.pointsTo).toBe('round');
     expect(r.ovality!.ovalityMm).toBeCloseTo(0.03, 12);
   });
@@ -64,10 +72,12 @@ describe('test cut', () => {
   });
 
   it('names the problem on bad input', () => {
-    expect(() => evaluateTestCut({ ...base, x: { commandedMm: 0, measuredMm: 1 } })).toThrow('x.commanded must be greater than zero');
-    expect(() => evaluateTestCut({ ...base, diagonal1Mm: 424 })).toThrow('give both diagonals or neither');
-    expect(() => evaluateTestCut({ ...base, circle: { commandedDiameterMm: 100, measuredXMm: NaN, measuredYMm: 100 } })).toThrow(
-      'circle.measuredX must be a finite number',
+    expect(() => evaluateTestCut({ ...base, x: { commandedMm: 0, measuredMm: 1 } })).toThrow(
+      'x.commanded must be greater than zero',
     );
+    expect(() => evaluateTestCut({ ...base, diagonal1Mm: 424 })).toThrow('give both diagonals or neither');
+    expect(() =>
+      evaluateTestCut({ ...base, circle: { commandedDiameterMm: 100, measuredXMm: NaN, measuredYMm: 100 } }),
+    ).toThrow('circle.measuredX must be a finite number');
   });
 });

@@ -67,14 +67,18 @@ function axisScale(field: string, size: CutSize, stepsPerMm: number | undefined)
     scale,
     errorMm: measured - commanded,
     errorPercent: (scale - 1) * 100,
-    correctedStepsPerMm: stepsPerMm == null ? null : requirePositive(`stepsPerMm${field.toUpperCase()}`, stepsPerMm) / scale,
+    correctedStepsPerMm:
+      stepsPerMm == null ? null : requirePositive(`stepsPerMm${field.toUpperCase()}`, stepsPerMm) / scale,
   };
 }
 
 export function evaluateTestCut(input: TestCutInput): TestCutResult {
   const x = axisScale('x', input.x, input.stepsPerMmX);
   const y = axisScale('y', input.y, input.stepsPerMmY);
-  const tolerance = input.ovalityToleranceMm == null ? DEFAULT_OVALITY_TOLERANCE_MM : requireNonNegative('ovalityTolerance', input.ovalityToleranceMm);
+  const tolerance =
+    input.ovalityToleranceMm == null
+      ? DEFAULT_OVALITY_TOLERANCE_MM
+      : requireNonNegative('ovalityTolerance', input.ovalityToleranceMm);
   const notes: string[] = [];
 
   let squareness: SquarenessResult | null = null;
@@ -105,15 +109,27 @@ export function evaluateTestCut(input: TestCutInput): TestCutResult {
       else pointsTo = unexplainedMm < 0 ? 'x-backlash' : 'y-backlash';
     }
     const backlash = pointsTo === 'x-backlash' || pointsTo === 'y-backlash';
-    ovality = { ovalityMm, fromScaleMm, unexplainedMm, pointsTo, backlashEstimateMm: backlash ? Math.abs(unexplainedMm) : null };
+    ovality = {
+      ovalityMm,
+      fromScaleMm,
+      unexplainedMm,
+      pointsTo,
+      backlashEstimateMm: backlash ? Math.abs(unexplainedMm) : null,
+    };
 
     // Kerf compensation shifts every edge by the same amount, so it shows as the same error in
     // mm on the square and on the much smaller circle, where a scale error would be proportional.
     const circleError = (cx + cy) / 2 - d;
     const squareError = (x.errorMm + y.errorMm) / 2;
     const sizeRatio = (input.x.commandedMm + input.y.commandedMm) / 2 / d;
-    if (sizeRatio > 2 && Math.abs(squareError) > tolerance && Math.abs(circleError - squareError) < Math.abs(squareError) / 3) {
-      notes.push('the square and the circle are off by about the same amount in mm: check kerf width compensation before changing steps per mm');
+    if (
+      sizeRatio > 2 &&
+      Math.abs(squareError) > tolerance &&
+      Math.abs(circleError - squareError) < Math.abs(squareError) / 3
+    ) {
+      notes.push(
+        'the square and the circle are off by about the same amount in mm: check kerf width compensation before changing steps per mm',
+      );
     }
   }
   if (squareness && (Math.abs(x.errorMm) > tolerance || Math.abs(y.errorMm) > tolerance)) {

@@ -14,7 +14,9 @@ describe('referring lengths to 20 °C', () => {
   // Same material at the same temperature: scale and machine grow alike, nothing to correct
   // (the reason ISO 230-2 practice uses a scale of the machine's own material when it can).
   it('a steel tape on a steel machine at one temperature needs no correction', () => {
-    expect(thermalReference({ machineTemperatureC: 31, scaleTemperatureC: 31, scaleMaterial: 'steel' }).factor).toBeCloseTo(0, 15);
+    expect(
+      thermalReference({ machineTemperatureC: 31, scaleTemperatureC: 31, scaleMaterial: 'steel' }).factor,
+    ).toBeCloseTo(0, 15);
   });
 
   // ΔL = α·L·ΔT for each part by hand: aluminium rule at 30 °C reads 23.1e-6 × 10 short per mm;

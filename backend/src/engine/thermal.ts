@@ -59,7 +59,10 @@ function temperature(field: string, value: number | null | undefined): number | 
   if (value === undefined || value === null) return null;
   const t = requireFinite(field, value);
   if (t < TEMPERATURE_RANGE_C[0] || t > TEMPERATURE_RANGE_C[1]) {
-    throw new EngineInputError(`${field} must be between ${TEMPERATURE_RANGE_C[0]} and ${TEMPERATURE_RANGE_C[1]} °C (got ${t})`, field);
+    throw new EngineInputError(
+      `${field} must be between ${TEMPERATURE_RANGE_C[0]} and ${TEMPERATURE_RANGE_C[1]} °C (got ${t})`,
+      field,
+    );
   }
   return t;
 }
@@ -76,7 +79,8 @@ export function thermalReference(input: ThermalInput): ThermalReference {
   const machine = EXPANSION[MACHINE_MATERIAL];
   const applied = machineT !== null && scaleT !== null;
   const factor = applied
-    ? lengthChangeMm(scale.umPerMK, 1, scaleT - REFERENCE_TEMPERATURE_C) - lengthChangeMm(machine.umPerMK, 1, machineT - REFERENCE_TEMPERATURE_C)
+    ? lengthChangeMm(scale.umPerMK, 1, scaleT - REFERENCE_TEMPERATURE_C) -
+      lengthChangeMm(machine.umPerMK, 1, machineT - REFERENCE_TEMPERATURE_C)
     : 0;
   return {
     applied,

@@ -34,8 +34,8 @@ describe('travel envelope', () => {
     expect(() => evaluateTravelEnvelope({ axes: [{ axis: 'X', measuredTravelMm: -1, workSizeMm: 1 }] })).toThrow(
       'axes[0].measuredTravel must not be negative',
     );
-    expect(() => evaluateTravelEnvelope({ axes: [{ axis: 'X', measuredTravelMm: 1, workSizeMm: 1 }], marginPerSideMm: -2 })).toThrow(
-      'marginPerSide must not be negative',
-    );
+    expect(() =>
+      evaluateTravelEnvelope({ axes: [{ axis: 'X', measuredTravelMm: 1, workSizeMm: 1 }], marginPerSideMm: -2 }),
+    ).toThrow('marginPerSide must not be negative');
   });
 });

@@ -47,7 +47,14 @@ export function evaluateTravelEnvelope(input: TravelEnvelopeInput): TravelEnvelo
     const measured = requireNonNegative(`axes[${i}].measuredTravel`, a.measuredTravelMm);
     const work = requirePositive(`axes[${i}].workSize`, a.workSizeMm);
     const required = work + 2 * margin;
-    return { axis: a.axis, measuredTravelMm: measured, workSizeMm: work, requiredTravelMm: required, spareMm: measured - required, covers: measured >= required };
+    return {
+      axis: a.axis,
+      measuredTravelMm: measured,
+      workSizeMm: work,
+      requiredTravelMm: required,
+      spareMm: measured - required,
+      covers: measured >= required,
+    };
   });
   return requireFiniteResult('axes', { axes, marginPerSideMm: margin, coversAll: axes.every((a) => a.covers) });
 }

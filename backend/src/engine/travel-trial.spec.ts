@@ -33,10 +33,18 @@ describe('travel trial', () => {
 
   // NIST StRD NoInt1 and NoInt2: the through-origin form of the same fit (B1 = 251/121, 8/11).
   it('fits through the origin to the NIST StRD NoInt1 and NoInt2 certified values', () => {
-    const one = evaluateTravelTrial({ stepsPerMmUsed: 80, moves: movesOf('nist_strd_noint1.csv'), throughOrigin: true });
+    const one = evaluateTravelTrial({
+      stepsPerMmUsed: 80,
+      moves: movesOf('nist_strd_noint1.csv'),
+      throughOrigin: true,
+    });
     expectRelative(one.scale, Number(referenceJson('nist_strd_noint1_certified.json').certified.B1.estimate), 1e-13);
     expect(one.offsetMm).toBe(0);
-    const two = evaluateTravelTrial({ stepsPerMmUsed: 80, moves: movesOf('nist_strd_noint2.csv'), throughOrigin: true });
+    const two = evaluateTravelTrial({
+      stepsPerMmUsed: 80,
+      moves: movesOf('nist_strd_noint2.csv'),
+      throughOrigin: true,
+    });
     expectRelative(two.scale, 8 / 11, 1e-14);
     // Largest residual by hand: 3 − 8/11·4 = 1/11, 4 − 40/11 = 4/11, 4 − 48/11 = −4/11.
     expect(two.residualMaxMm).toBeCloseTo(4 / 11, 14);
@@ -55,7 +63,9 @@ describe('travel trial', () => {
   });
 
   it('names the problem on bad input', () => {
-    expect(() => evaluateTravelTrial({ stepsPerMmUsed: 80, moves: [] })).toThrow('moves needs at least 1 value (got 0)');
+    expect(() => evaluateTravelTrial({ stepsPerMmUsed: 80, moves: [] })).toThrow(
+      'moves needs at least 1 value (got 0)',
+    );
     expect(() => evaluateTravelTrial({ stepsPerMmUsed: 80, moves: [{ commandedMm: 0, measuredMm: 1 }] })).toThrow(
       'moves[0].commanded must not be zero',
     );
@@ -75,7 +85,11 @@ describe('travel trial guards', () => {
   // The reported case: 20 in commanded, 19.95 in measured, both in inches (unit_facts.json: 1 in = 25.4 mm
   // exactly) → 508 mm against 506.73 mm; new = old × commanded ÷ measured (TRADE.md, common practice).
   it('20 in commanded, 19.95 in measured corrects 80 steps/mm to 80.2', () => {
-    const r = evaluateTravelTrial({ stepsPerMmUsed: 80, moves: [{ commandedMm: 508, measuredMm: 506.73 }], theoreticalStepsPerMm: 80 });
+    const r = evaluateTravelTrial({
+      stepsPerMmUsed: 80,
+      moves: [{ commandedMm: 508, measuredMm: 506.73 }],
+      theoreticalStepsPerMm: 80,
+    });
     expect(r.correctedStepsPerMm).toBeCloseTo((80 * 508) / 506.73, 10);
     expect(r.correctedStepsPerMm).toBeCloseTo(80.2, 1);
     expect(r.farFromTheory).toBe(false);
@@ -85,7 +99,11 @@ describe('travel trial guards', () => {
   // The same trial with the commanded 20 read as mm: a 25× correction (320 → 12.6 steps/mm). TRADE.md:
   // "measured far from calculated usually means a wrong ratio, lead or pulley, not tuning".
   it('holds back the 25× correction and names the usual causes', () => {
-    const r = evaluateTravelTrial({ stepsPerMmUsed: 320, moves: [{ commandedMm: 20, measuredMm: 506.73 }], theoreticalStepsPerMm: 320 });
+    const r = evaluateTravelTrial({
+      stepsPerMmUsed: 320,
+      moves: [{ commandedMm: 20, measuredMm: 506.73 }],
+      theoreticalStepsPerMm: 320,
+    });
     expect(r.correctedStepsPerMm).toBeCloseTo((320 * 20) / 506.73, 10);
     expect(r.farFromTheory).toBe(true);
     const codes = r.warnings.map((w) => w.code);
@@ -97,7 +115,15 @@ describe('travel trial guards', () => {
   });
 
   it('a correction 6 % from theory is far; 4 % is not (the 5 % rule)', () => {
-    const at = (measured: number) => evaluateTravelTrial({ stepsPerMmUsed: 100, moves: [{ commandedMm: 100, measuredMm: measured }, { commandedMm: 200, measuredMm: measured * 2 }], theoreticalStepsPerMm: 100 });
+    const at = (measured: number) =>
+      evaluateTravelTrial({
+        stepsPerMmUsed: 100,
+        moves: [
+          { commandedMm: 100, measuredMm: measured },
+          { commandedMm: 200, measuredMm: measured * 2 },
+        ],
+        theoreticalStepsPerMm: 100,
+      });
     expect(at(100 / 1.06).farFromTheory).toBe(true);
     expect(at(100 / 1.04).farFromTheory).toBe(false);
   });
@@ -106,7 +132,11 @@ describe('travel trial guards', () => {
   // the machine moved 1000 × (1 + 11.5e-6 × 10) mm; the corrected steps per mm follows.
   it('refers measured moves to 20 °C through the thermal factor', () => {
     const factor = 11.5e-6 * 10;
-    const r = evaluateTravelTrial({ stepsPerMmUsed: 100, moves: [{ commandedMm: 1000, measuredMm: 1000 }], thermalFactor: factor });
+    const r = evaluateTravelTrial({
+      stepsPerMmUsed: 100,
+      moves: [{ commandedMm: 1000, measuredMm: 1000 }],
+      thermalFactor: factor,
+    });
     expect(r.scale).toBeCloseTo(1 + factor, 14);
     expect(r.thermalCorrectionPercent).toBeCloseTo(0.0115, 12);
   });

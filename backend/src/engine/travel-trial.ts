@@ -65,7 +65,8 @@ export function evaluateTravelTrial(input: TravelTrialInput): TravelTrialResult 
   const commanded = new Array<number>(input.moves.length);
   const measured = new Array<number>(input.moves.length);
   input.moves.forEach((m, i) => {
-    if (m === null || typeof m !== 'object') throw new EngineInputError(`moves[${i}] must be {commanded, measured}`, 'moves');
+    if (m === null || typeof m !== 'object')
+      throw new EngineInputError(`moves[${i}] must be {commanded, measured}`, 'moves');
     commanded[i] = requireFinite(`moves[${i}].commanded`, m.commandedMm);
     measured[i] = requireFinite(`moves[${i}].measured`, m.measuredMm) * (1 + thermal);
     if (commanded[i] === 0) throw new EngineInputError(`moves[${i}].commanded must not be zero`, 'moves');
@@ -95,7 +96,8 @@ export function evaluateTravelTrial(input: TravelTrialInput): TravelTrialResult 
   });
 
   const corrected = used / scale;
-  const theory = input.theoreticalStepsPerMm == null ? null : requirePositive('theoreticalStepsPerMm', input.theoreticalStepsPerMm);
+  const theory =
+    input.theoreticalStepsPerMm == null ? null : requirePositive('theoreticalStepsPerMm', input.theoreticalStepsPerMm);
   const theoryDifferencePercent = theory === null ? null : (corrected / theory - 1) * 100;
   const implausible = scale < IMPLAUSIBLE_SCALE.min || scale > IMPLAUSIBLE_SCALE.max;
   const far = theoryDifferencePercent !== null && Math.abs(theoryDifferencePercent) > FAR_FROM_THEORY_PERCENT;
@@ -115,7 +117,8 @@ export function evaluateTravelTrial(input: TravelTrialInput): TravelTrialResult 
   if (commanded.length === 1 || allSame) {
     warnings.push({
       code: 'single-distance',
-      message: 'Every move has the same commanded distance, so a scale error cannot be told from an offset at the start; moves of several lengths, the longest as long as the axis allows, give a firmer correction.',
+      message:
+        'Every move has the same commanded distance, so a scale error cannot be told from an offset at the start; moves of several lengths, the longest as long as the axis allows, give a firmer correction.',
     });
   }
   return requireFiniteResult('moves', {

@@ -20,7 +20,10 @@ export function requireFinite(field: string, value: unknown): number {
 }
 
 function outOfRange(field: string, value: number): EngineInputError {
-  return new EngineInputError(`${field} is out of range (${value}); at most ${MAX_MAGNITUDE} in size is accepted`, field);
+  return new EngineInputError(
+    `${field} is out of range (${value}); at most ${MAX_MAGNITUDE} in size is accepted`,
+    field,
+  );
 }
 
 export function requirePositive(field: string, value: unknown): number {
@@ -42,7 +45,12 @@ export function requirePositiveInteger(field: string, value: unknown): number {
 }
 
 /** Checks an array of finite numbers with a minimum (and the global maximum) length. */
-export function requireNumberArray(field: string, values: unknown, minLength: number, maxLength = MAX_POINTS): number[] {
+export function requireNumberArray(
+  field: string,
+  values: unknown,
+  minLength: number,
+  maxLength = MAX_POINTS,
+): number[] {
   if (!Array.isArray(values)) throw new EngineInputError(`${field} must be a list of numbers`, field);
   requireCount(field, values.length, minLength, maxLength);
   for (let i = 0; i < values.length; i++) {
@@ -76,7 +84,8 @@ function firstNonFinite(value: unknown, path: string): string | null {
   if (value === null || typeof value !== 'object') return null;
   if (ArrayBuffer.isView(value)) {
     const arr = value as unknown as ArrayLike<number>;
-    for (let i = 0; i < arr.length; i++) if (typeof arr[i] === 'number' && !Number.isFinite(arr[i])) return `${path}[${i}]`;
+    for (let i = 0; i < arr.length; i++)
+      if (typeof arr[i] === 'number' && !Number.isFinite(arr[i])) return `${path}[${i}]`;
     return null;
   }
   if (Array.isArray(value)) {
@@ -142,5 +151,8 @@ export function ascendingOrder(field: string, positions: ArrayLike<number>): Uin
 function repeatedValue(field: string, positions: ArrayLike<number>, value: number): EngineInputError {
   const at: number[] = [];
   for (let i = 0; i < positions.length && at.length < 2; i++) if (positions[i] === value) at.push(i);
-  return new EngineInputError(`${field} repeats the value ${value} (at ${field}[${at[0]}] and ${field}[${at[1]}])`, field);
+  return new EngineInputError(
+    `${field} repeats the value ${value} (at ${field}[${at[0]}] and ${field}[${at[1]}])`,
+    field,
+  );
 }

@@ -18,7 +18,21 @@ export const ACCEPTED_TYPES: readonly AcceptedType[] = [
 
 export const ACCEPTED_LABELS = ACCEPTED_TYPES.map((t) => t.label).join(', ');
 
-const PROGRAMS = new Set(['exe', 'elf', 'mach', 'dll', 'class', 'wasm', 'dex', 'msi', 'deb', 'rpm', 'apk', 'cab', 'lnk']);
+const PROGRAMS = new Set([
+  'exe',
+  'elf',
+  'mach',
+  'dll',
+  'class',
+  'wasm',
+  'dex',
+  'msi',
+  'deb',
+  'rpm',
+  'apk',
+  'cab',
+  'lnk',
+]);
 
 export interface SniffResult {
   head: Buffer;
@@ -35,9 +49,13 @@ export async function decideType(fileName: string, sniff: SniffResult): Promise<
   if (found) {
     const accepted = ACCEPTED_TYPES.find((t) => t.contentType === found.mime);
     if (accepted) return { accepted };
-    const what = PROGRAMS.has(found.ext) ? `a program (${found.ext.toUpperCase()})` : `a ${found.ext.toUpperCase()} file (${found.mime})`;
+    const what = PROGRAMS.has(found.ext)
+      ? `a program (${found.ext.toUpperCase()})`
+      : `a ${found.ext.toUpperCase()} file (${found.mime})`;
     const disguised = !fileName.toLowerCase().endsWith(`.${found.ext}`);
-    return { refused: `${fileName} is ${what}${disguised ? ', whatever its name says' : ''}. Accepted: ${ACCEPTED_LABELS}.` };
+    return {
+      refused: `${fileName} is ${what}${disguised ? ', whatever its name says' : ''}. Accepted: ${ACCEPTED_LABELS}.`,
+    };
   }
   if (fileName.toLowerCase().endsWith('.csv')) {
     if (sniff.plainText) return { accepted: ACCEPTED_TYPES.find((t) => t.contentType === 'text/csv')! };

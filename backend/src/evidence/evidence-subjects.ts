@@ -7,7 +7,11 @@ import { SubjectsRegistry, type SubjectRef } from '../records/subjects.registry.
 export class EvidenceSubjects {
   constructor(private readonly registry: SubjectsRegistry) {}
 
-  async resolve(workshopId: string, subjectType: string, subjectId: string): Promise<SubjectRef & { subjectType: EvidenceSubjectType }> {
+  async resolve(
+    workshopId: string,
+    subjectType: string,
+    subjectId: string,
+  ): Promise<SubjectRef & { subjectType: EvidenceSubjectType }> {
     const known = this.registry.types();
     if (!isEvidenceSubjectType(subjectType) || !known.includes(subjectType)) {
       throw new BadRequestException([`subjectType must be one of ${known.join(', ')}`]);

@@ -55,7 +55,10 @@ export class EvidenceUploadService {
   ) {}
 
   async upload(actor: SessionUser, req: FastifyRequest): Promise<EvidenceResponse> {
-    if (!req.isMultipart()) throw new BadRequestException(['Send the upload as multipart/form-data with the photo or file in a field named file']);
+    if (!req.isMultipart())
+      throw new BadRequestException([
+        'Send the upload as multipart/form-data with the photo or file in a field named file',
+      ]);
     const fields: Record<string, string> = {};
     let received: Received | null = null;
     let committed = false;
@@ -69,7 +72,9 @@ export class EvidenceUploadService {
         const file = part as MultipartFile;
         if (file.fieldname !== 'file') {
           file.file.resume();
-          throw new BadRequestException([`${file.fieldname} should not exist: send the photo or file in a field named file`]);
+          throw new BadRequestException([
+            `${file.fieldname} should not exist: send the photo or file in a field named file`,
+          ]);
         }
         // Fields sent ahead of the file are checked before a byte is stored.
         if (fields.subjectType !== undefined || fields.subjectId !== undefined) {
@@ -97,13 +102,22 @@ export class EvidenceUploadService {
    * The same checks for a file made on the server (the demo seed): the stream is stored and
    * checked exactly as an upload is, the size limit included.
    */
-  async attach(actor: SessionUser, fields: { subjectType: string; subjectId: string; caption?: string }, file: { name: string; stream: Readable }): Promise<EvidenceResponse> {
-    const values: Record<string, string> = { subjectType: fields.subjectType, subjectId: fields.subjectId, ...(fields.caption ? { caption: fields.caption } : {}) };
+  async attach(
+    actor: SessionUser,
+    fields: { subjectType: string; subjectId: string; caption?: string },
+    file: { name: string; stream: Readable },
+  ): Promise<EvidenceResponse> {
+    const values: Record<string, string> = {
+      subjectType: fields.subjectType,
+      subjectId: fields.subjectId,
+      ...(fields.caption ? { caption: fields.caption } : {}),
+    };
     const subject = await this.checkedSubject(actor, values);
     const received = await this.receiveStream(file.stream, file.name);
     let committed = false;
     try {
-      if (received.inspector.result().sizeBytes > this.config.maxBytes) throw new PayloadTooLargeException(tooLarge(file.name, this.config.maxBytes));
+      if (received.inspector.result().sizeBytes > this.config.maxBytes)
+        throw new PayloadTooLargeException(tooLarge(file.name, this.config.maxBytes));
       const saved = await this.store(actor, subject, values, received);
       committed = true;
       return saved;
@@ -128,14 +142,22 @@ export class EvidenceUploadService {
     return { tempKey, rawName, inspector };
   }
 
-  private async checkedSubject(actor: SessionUser, fields: Record<string, string>): Promise<SubjectRef & { subjectType: EvidenceSubjectType }> {
+  private async checkedSubject(
+    actor: SessionUser,
+    fields: Record<string, string>,
+  ): Promise<SubjectRef & { subjectType: EvidenceSubjectType }> {
     const dto = plainToInstance(UploadFieldsDto, fields);
     const errors = await validate(dto, { whitelist: true, forbidNonWhitelisted: true });
     if (errors.length) throw new BadRequestException(errors.flatMap((e) => Object.values(e.constraints ?? {})));
     return this.subjects.resolve(actor.workshopId, dto.subjectType, dto.subjectId);
   }
 
-  private async store(actor: SessionUser, subject: SubjectRef & { subjectType: EvidenceSubjectType }, fields: Record<string, string>, received: Received): Promise<EvidenceResponse> {
+  private async store(
+    actor: SessionUser,
+    subject: SubjectRef & { subjectType: EvidenceSubjectType },
+    fields: Record<string, string>,
+    received: Received,
+  ): Promise<EvidenceResponse> {
     const sniff = received.inspector.result();
     const shownName = sanitizeFileName(received.rawName);
     if (sniff.sizeBytes === 0) throw new BadRequestException([`${shownName} is empty (0 bytes)`]);
@@ -183,7 +205,12 @@ export class EvidenceUploadService {
         recordId: id,
         action: 'attached',
         summary: `${type.kind === 'photo' ? 'Photo' : 'File'} ${fileName} attached to ${subject.label}${addedAfterApproval ? ' after the approval (not part of what was signed)' : ''}`,
-        changes: { subjectType: fields.subjectType, subjectId: fields.subjectId, contentType: type.contentType, sizeBytes: sniff.sizeBytes },
+        changes: {
+          subjectType: fields.subjectType,
+          subjectId: fields.subjectId,
+          contentType: type.contentType,
+          sizeBytes: sniff.sizeBytes,
+        },
       });
       return toEvidenceResponse(row, { locked: false, canDelete: true });
     } catch (err) {
@@ -203,10 +230,14 @@ export class EvidenceUploadService {
       stored.stream.destroy();
       const message = (err as Error).message;
       if (/pixel limit/i.test(message)) {
-        throw new UnsupportedMediaTypeException(`${fileName} has more than ${MAX_PHOTO_MEGAPIXELS} megapixels; save it smaller and attach it again`);
+        throw new UnsupportedMediaTypeException(
+          `${fileName} has more than ${MAX_PHOTO_MEGAPIXELS} megapixels; save it smaller and attach it again`,
+        );
       }
       this.logger.warn(`photo refused, not readable: ${message}`);
-      throw new UnsupportedMediaTypeException(`${fileName} starts like a ${type.label} photo but could not be read as one (damaged or cut short?)`);
+      throw new UnsupportedMediaTypeException(
+        `${fileName} starts like a ${type.label} photo but could not be read as one (damaged or cut short?)`,
+      );
     }
   }
 }

@@ -42,7 +42,8 @@ export function loadEvidenceConfig(env: NodeJS.ProcessEnv = process.env): Eviden
   const driverName = (env.RAILWRIGHT_STORAGE ?? 'disk').trim().toLowerCase();
   if (driverName !== 'disk' && driverName !== 's3') problems.push('RAILWRIGHT_STORAGE must be disk or s3');
   const maxBytes = env.EVIDENCE_MAX_BYTES ? Number(env.EVIDENCE_MAX_BYTES) : DEFAULT_MAX_BYTES;
-  if (!Number.isInteger(maxBytes) || maxBytes < 1) problems.push('EVIDENCE_MAX_BYTES must be a whole number of bytes, 1 or more');
+  if (!Number.isInteger(maxBytes) || maxBytes < 1)
+    problems.push('EVIDENCE_MAX_BYTES must be a whole number of bytes, 1 or more');
   let s3: S3Settings | null = null;
   if (driverName === 's3') {
     const bucket = env.S3_BUCKET?.trim() ?? '';
@@ -51,9 +52,11 @@ export function loadEvidenceConfig(env: NodeJS.ProcessEnv = process.env): Eviden
     if (endpoint && !/^https?:\/\//.test(endpoint)) problems.push('S3_ENDPOINT must be an http:// or https:// URL');
     const keyId = env.S3_ACCESS_KEY_ID || undefined;
     const secret = env.S3_SECRET_ACCESS_KEY || undefined;
-    if (!!keyId !== !!secret) problems.push('S3_ACCESS_KEY_ID and S3_SECRET_ACCESS_KEY go together: set both or neither');
+    if (!!keyId !== !!secret)
+      problems.push('S3_ACCESS_KEY_ID and S3_SECRET_ACCESS_KEY go together: set both or neither');
     const pathStyle = env.S3_FORCE_PATH_STYLE;
-    if (pathStyle !== undefined && pathStyle !== 'true' && pathStyle !== 'false') problems.push('S3_FORCE_PATH_STYLE must be true or false');
+    if (pathStyle !== undefined && pathStyle !== 'true' && pathStyle !== 'false')
+      problems.push('S3_FORCE_PATH_STYLE must be true or false');
     s3 = {
       endpoint,
       bucket,

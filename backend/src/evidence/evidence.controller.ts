@@ -24,7 +24,11 @@ export class EvidenceController {
     schema: {
       allOf: [
         { $ref: getSchemaPath(UploadFieldsDto) },
-        { type: 'object', required: ['file'], properties: { file: { type: 'string', format: 'binary', description: 'The photo or file (one a request).' } } },
+        {
+          type: 'object',
+          required: ['file'],
+          properties: { file: { type: 'string', format: 'binary', description: 'The photo or file (one a request).' } },
+        },
       ],
     },
   })
@@ -50,13 +54,21 @@ export class EvidenceController {
 
   @Get(':id/content')
   @ApiProduces('image/jpeg', 'image/png', 'image/webp', 'application/pdf', 'text/csv')
-  async content(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string, @Res({ passthrough: true }) reply: FastifyReply) {
+  async content(
+    @CurrentUser() user: SessionUser,
+    @Param('id', ParseUUIDPipe) id: string,
+    @Res({ passthrough: true }) reply: FastifyReply,
+  ) {
     return send(reply, await this.evidence.content(user, id));
   }
 
   @Get(':id/thumbnail')
   @ApiProduces('image/webp')
-  async thumbnail(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string, @Res({ passthrough: true }) reply: FastifyReply) {
+  async thumbnail(
+    @CurrentUser() user: SessionUser,
+    @Param('id', ParseUUIDPipe) id: string,
+    @Res({ passthrough: true }) reply: FastifyReply,
+  ) {
     return send(reply, await this.evidence.thumbnail(user, id));
   }
 

@@ -27,7 +27,10 @@ export interface EvidenceResponse {
   addedAfterApproval: boolean;
 }
 
-export function toEvidenceResponse(row: EvidenceRow, extra: { subjectLabel?: string; locked: boolean; canDelete: boolean }): EvidenceResponse {
+export function toEvidenceResponse(
+  row: EvidenceRow,
+  extra: { subjectLabel?: string; locked: boolean; canDelete: boolean },
+): EvidenceResponse {
   return {
     id: row.id,
     machineId: row.machineId,

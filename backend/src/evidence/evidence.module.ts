@@ -20,7 +20,8 @@ const STALE_UPLOAD_MS = 60 * 60 * 1000;
     {
       provide: EVIDENCE_STORAGE,
       inject: [EVIDENCE_CONFIG],
-      useFactory: (config: EvidenceConfig): EvidenceStorage => (config.driver === 's3' && config.s3 ? new S3Storage(config.s3) : new DiskStorage(config.diskRoot)),
+      useFactory: (config: EvidenceConfig): EvidenceStorage =>
+        config.driver === 's3' && config.s3 ? new S3Storage(config.s3) : new DiskStorage(config.diskRoot),
     },
     EvidenceRepository,
     EvidenceSubjects,
@@ -37,10 +38,20 @@ export class EvidenceModule implements OnModuleInit, OnApplicationShutdown {
   onModuleInit() {
     // Not awaited: a slow disk or bucket must not hold up the start.
     if (this.storage instanceof DiskStorage) {
-      this.storage.sweepIncoming(STALE_UPLOAD_MS).catch((err) => this.logger.warn(`could not tidy unfinished uploads: ${(err as Error).message}`));
+      this.storage
+        .sweepIncoming(STALE_UPLOAD_MS)
+        .catch((err) => this.logger.warn(`could not tidy unfinished uploads: ${(err as Error).message}`));
     }
     if (this.storage instanceof S3Storage) {
-      this.storage.reachable().then((ok) => ok || this.logger.warn('The S3 bucket does not answer: uploads will fail until it does (check S3_ENDPOINT, S3_BUCKET and the keys)'));
+      this.storage
+        .reachable()
+        .then(
+          (ok) =>
+            ok ||
+            this.logger.warn(
+              'The S3 bucket does not answer: uploads will fail until it does (check S3_ENDPOINT, S3_BUCKET and the keys)',
+            ),
+        );
     }
   }
 

@@ -28,7 +28,13 @@ export class EvidenceRepository {
     return this.db
       .select()
       .from(evidence)
-      .where(and(eq(evidence.workshopId, workshopId), eq(evidence.subjectType, subjectType as EvidenceSubjectType), eq(evidence.subjectId, subjectId)))
+      .where(
+        and(
+          eq(evidence.workshopId, workshopId),
+          eq(evidence.subjectType, subjectType as EvidenceSubjectType),
+          eq(evidence.subjectId, subjectId),
+        ),
+      )
       .orderBy(desc(evidence.createdAt));
   }
 

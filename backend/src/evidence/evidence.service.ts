@@ -1,4 +1,12 @@
-import { BadRequestException, ForbiddenException, Inject, Injectable, Logger, NotFoundException, StreamableFile } from '@nestjs/common';
+import {
+  BadRequestException,
+  ForbiddenException,
+  Inject,
+  Injectable,
+  Logger,
+  NotFoundException,
+  StreamableFile,
+} from '@nestjs/common';
 import type { SessionUser } from '../auth/session-user.js';
 import { MachinesService } from '../machines/machines.service.js';
 import { RecordsService } from '../records/records.service.js';
@@ -37,7 +45,12 @@ export class EvidenceService {
   limits() {
     return {
       maxBytes: this.config.maxBytes,
-      accepted: ACCEPTED_TYPES.map((t) => ({ contentType: t.contentType, label: t.label, kind: t.kind, extensions: t.extensions })),
+      accepted: ACCEPTED_TYPES.map((t) => ({
+        contentType: t.contentType,
+        label: t.label,
+        kind: t.kind,
+        extensions: t.extensions,
+      })),
     };
   }
 
@@ -67,7 +80,10 @@ export class EvidenceService {
     }
     const type = row.contentType === 'text/csv' ? 'text/csv; charset=utf-8' : row.contentType;
     const disposition = contentDisposition(row.kind === 'photo' ? 'inline' : 'attachment', row.fileName);
-    return { file: new StreamableFile(stored.stream, { type, disposition, length: stored.sizeBytes }), headers: safeHeaders() };
+    return {
+      file: new StreamableFile(stored.stream, { type, disposition, length: stored.sizeBytes }),
+      headers: safeHeaders(),
+    };
   }
 
   async thumbnail(actor: SessionUser, id: string): Promise<Download> {
@@ -75,7 +91,14 @@ export class EvidenceService {
     const stored = row.thumbnailKey ? await this.storage.read(row.thumbnailKey) : null;
     if (!stored) throw new NotFoundException('This evidence has no thumbnail');
     const name = row.fileName.replace(/\.[^.]*$/, '') + '-thumbnail.webp';
-    return { file: new StreamableFile(stored.stream, { type: THUMBNAIL_TYPE, disposition: contentDisposition('inline', name), length: stored.sizeBytes }), headers: safeHeaders() };
+    return {
+      file: new StreamableFile(stored.stream, {
+        type: THUMBNAIL_TYPE,
+        disposition: contentDisposition('inline', name),
+        length: stored.sizeBytes,
+      }),
+      headers: safeHeaders(),
+    };
   }
 
   async remove(actor: SessionUser, id: string): Promise<void> {
@@ -85,10 +108,17 @@ export class EvidenceService {
     }
     const ref = await this.subjects.labelOf(actor.workshopId, row.subjectType, row.subjectId);
     const label = ref?.label ?? row.subjectLabel;
-    await this.records.assertEditable(ref?.recordType ?? row.recordType, ref?.recordId ?? row.recordId, `The evidence of ${label}`);
+    await this.records.assertEditable(
+      ref?.recordType ?? row.recordType,
+      ref?.recordId ?? row.recordId,
+      `The evidence of ${label}`,
+    );
     await this.repo.delete(actor.workshopId, id);
     for (const key of [row.storageKey, row.thumbnailKey]) {
-      if (key) await this.storage.remove(key).catch((err) => this.logger.warn(`could not remove ${key}: ${(err as Error).message}`));
+      if (key)
+        await this.storage
+          .remove(key)
+          .catch((err) => this.logger.warn(`could not remove ${key}: ${(err as Error).message}`));
     }
     await this.records.audit(actor, {
       machineId: row.machineId,
@@ -128,7 +158,11 @@ export class EvidenceService {
       const ref = refs.get(key)!;
       const isLocked = locked.has(`${ref.recordType}:${ref.recordId}`);
       const mayDelete = actor.role !== 'viewer' && (DELETES_ANY.has(actor.role) || row.uploadedById === actor.id);
-      return toEvidenceResponse(row, { subjectLabel: labels.get(key), locked: isLocked, canDelete: mayDelete && !isLocked });
+      return toEvidenceResponse(row, {
+        subjectLabel: labels.get(key),
+        locked: isLocked,
+        canDelete: mayDelete && !isLocked,
+      });
     });
   }
 }

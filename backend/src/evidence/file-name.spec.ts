@@ -42,11 +42,14 @@ describe('withExtension', () => {
 describe('contentDisposition', () => {
   // Written and read back by the content-disposition package (RFC 6266 / 8187); the header stays
   // plain ASCII, with the exact name in filename* for names that are not.
-  it.each(['plain.png', 'Rail Y1 — left.jpg', 'quote"back\\slash.pdf', 'Ölwanne (alt).csv', "it's 100%.png"])('%j reads back exactly', (name) => {
-    const header = contentDisposition('attachment', name);
-    const parsed = parse(header);
-    expect(parsed.type).toBe('attachment');
-    expect(parsed.parameters.filename).toBe(name);
-    expect(header).toMatch(/^[\x20-\x7e]+$/);
-  });
+  it.each(['plain.png', 'Rail Y1 — left.jpg', 'quote"back\\slash.pdf', 'Ölwanne (alt).csv', "it's 100%.png"])(
+    '%j reads back exactly',
+    (name) => {
+      const header = contentDisposition('attachment', name);
+      const parsed = parse(header);
+      expect(parsed.type).toBe('attachment');
+      expect(parsed.parameters.filename).toBe(name);
+      expect(header).toMatch(/^[\x20-\x7e]+$/);
+    },
+  );
 });

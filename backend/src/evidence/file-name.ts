@@ -13,14 +13,22 @@ const UNSAFE_CHARS = /[\u0000-\u001f\u007f-\u009f\u200e\u200f\u202a-\u202e\u2066
 export function sanitizeFileName(raw: string | undefined | null, fallback = 'file'): string {
   let name = (raw ?? '').normalize('NFC');
   name = name.split(/[\\/]/).pop() ?? '';
-  name = name.replace(/[\t\n\r\v\f]/g, ' ').replace(UNSAFE_CHARS, '').replace(/\s+/g, ' ').trim();
+  name = name
+    .replace(/[\t\n\r\v\f]/g, ' ')
+    .replace(UNSAFE_CHARS, '')
+    .replace(/\s+/g, ' ')
+    .trim();
   name = name.replace(/^[.\s]+/, '').replace(/[.\s]+$/, '');
   if (!name) name = fallback;
   const chars = [...name];
   if (chars.length > MAX_NAME_CHARS) {
     const dot = name.lastIndexOf('.');
     const ext = dot > 0 && name.length - dot <= 10 ? name.slice(dot) : '';
-    name = chars.slice(0, MAX_NAME_CHARS - [...ext].length).join('').trimEnd() + ext;
+    name =
+      chars
+        .slice(0, MAX_NAME_CHARS - [...ext].length)
+        .join('')
+        .trimEnd() + ext;
   }
   return name;
 }

@@ -1,4 +1,9 @@
-import { BadRequestException, HttpException, PayloadTooLargeException, ServiceUnavailableException } from '@nestjs/common';
+import {
+  BadRequestException,
+  HttpException,
+  PayloadTooLargeException,
+  ServiceUnavailableException,
+} from '@nestjs/common';
 import { sanitizeFileName } from './file-name.js';
 
 export function tooLarge(name: string, maxBytes: number): string {
@@ -18,26 +23,49 @@ export function translateMultipartError(err: unknown, maxBytes: number): unknown
     const name = (err as { part?: { filename?: string } }).part?.filename ?? 'The file';
     return new PayloadTooLargeException(tooLarge(name, maxBytes));
   }
-  if (code === 'FST_FILES_LIMIT') return new BadRequestException(['Send one file per upload; several files go up as several uploads']);
-  if (code === 'FST_PARTS_LIMIT' || code === 'FST_FIELDS_LIMIT') return new BadRequestException(['Too many fields: send file, subjectType, subjectId and caption only']);
-  if (code === 'FST_PROTO_VIOLATION' || code === 'FST_INVALID_MULTIPART_CONTENT_TYPE' || code === 'FST_INVALID_JSON_FIELD_ERROR') return new BadRequestException(['The upload is not a well-formed multipart/form-data body']);
+  if (code === 'FST_FILES_LIMIT')
+    return new BadRequestException(['Send one file per upload; several files go up as several uploads']);
+  if (code === 'FST_PARTS_LIMIT' || code === 'FST_FIELDS_LIMIT')
+    return new BadRequestException(['Too many fields: send file, subjectType, subjectId and caption only']);
+  if (
+    code === 'FST_PROTO_VIOLATION' ||
+    code === 'FST_INVALID_MULTIPART_CONTENT_TYPE' ||
+    code === 'FST_INVALID_JSON_FIELD_ERROR'
+  )
+    return new BadRequestException(['The upload is not a well-formed multipart/form-data body']);
   if (err instanceof Error && /Unexpected end of (multipart|form)|terminated early|Malformed/i.test(err.message)) {
     return new BadRequestException(['The upload was cut off before it finished; try again']);
   }
   if (code === 'FST_MP_PREMATURE_CLOSE' || code === 'ERR_STREAM_PREMATURE_CLOSE') {
     return new BadRequestException(['The upload was cut off before it finished; try again']);
   }
-  if (err instanceof Error && /Multipart: |Boundary required|needle|Unsupported content type|Malformed part header/i.test(err.message)) {
+  if (
+    err instanceof Error &&
+    /Multipart: |Boundary required|needle|Unsupported content type|Malformed part header/i.test(err.message)
+  ) {
     return new BadRequestException(['The upload is not a well-formed multipart/form-data body']);
   }
   if (isStorageFailure(err)) {
-    return new ServiceUnavailableException('The file store did not answer, so nothing was kept. Try again in a moment.');
+    return new ServiceUnavailableException(
+      'The file store did not answer, so nothing was kept. Try again in a moment.',
+    );
   }
   return err;
 }
 
 // S3 SDK errors carry $metadata; disk and network failures carry a system error code.
-const SYSTEM_CODES = new Set(['ECONNREFUSED', 'ECONNRESET', 'ETIMEDOUT', 'ENOTFOUND', 'EAI_AGAIN', 'ENOSPC', 'EROFS', 'EACCES', 'EPERM', 'EIO']);
+const SYSTEM_CODES = new Set([
+  'ECONNREFUSED',
+  'ECONNRESET',
+  'ETIMEDOUT',
+  'ENOTFOUND',
+  'EAI_AGAIN',
+  'ENOSPC',
+  'EROFS',
+  'EACCES',
+  'EPERM',
+  'EIO',
+]);
 
 function isStorageFailure(err: unknown): boolean {
   if (!err || typeof err !== 'object' || err instanceof HttpException) return false;

@@ -51,6 +51,11 @@ export class UploadInspector extends Transform {
   /** Read once the stream has ended. */
   result(): SniffResult & { sha256: string } {
     this.digest ??= this.hash.digest('hex');
-    return { head: Buffer.concat(this.headChunks), sizeBytes: this.sizeBytes, plainText: this.plainText && this.sizeBytes > 0, sha256: this.digest };
+    return {
+      head: Buffer.concat(this.headChunks),
+      sizeBytes: this.sizeBytes,
+      plainText: this.plainText && this.sizeBytes > 0,
+      sha256: this.digest,
+    };
   }
 }

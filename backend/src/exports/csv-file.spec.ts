@@ -3,7 +3,13 @@ import { convert, csvFile, fileName, isoTime, tidy, words } from './csv-file.js'
 
 describe('csvFile', () => {
   it('writes a header and rows with CRLF line ends, quoting what RFC 4180 says to quote', () => {
-    const text = csvFile(['Name', 'Reading (thou)'], [['Rail "Y1", left', -0.5], ['X', 1.25]]);
+    const text = csvFile(
+      ['Name', 'Reading (thou)'],
+      [
+        ['Rail "Y1", left', -0.5],
+        ['X', 1.25],
+      ],
+    );
     // RFC 4180 §2: fields holding commas or quotes are quoted, a quote doubled; lines end in CRLF.
     expect(text).toBe('Name,Reading (thou)\r\n"Rail ""Y1"", left",-0.5\r\nX,1.25\r\n');
     // An independent reading of the file gets the same values back.
@@ -19,7 +25,14 @@ describe('csvFile', () => {
 
   it('keeps text a spreadsheet would run as a formula from running, but leaves negative numbers alone', () => {
     // Common practice (OWASP "CSV injection"): text starting with = + - @ gets a leading apostrophe.
-    const text = csvFile(['Datum', 'Deviation (mm)'], [['=HYPERLINK("x")', -0.02], ['@SUM(A1)', -1], ['-straightedge', 0]]);
+    const text = csvFile(
+      ['Datum', 'Deviation (mm)'],
+      [
+        ['=HYPERLINK("x")', -0.02],
+        ['@SUM(A1)', -1],
+        ['-straightedge', 0],
+      ],
+    );
     const rows = text.trim().split('\r\n').slice(1);
     expect(rows[0]).toBe(`"'=HYPERLINK(""x"")",-0.02`);
     expect(rows[1]).toBe(`"'@SUM(A1)",-1`);

@@ -19,25 +19,41 @@ export class ExportsController {
 
   @Get('rails/:id/sweeps.csv')
   @ApiProduces('text/csv')
-  async sweeps(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string, @Res({ passthrough: true }) reply: FastifyReply) {
+  async sweeps(
+    @CurrentUser() user: SessionUser,
+    @Param('id', ParseUUIDPipe) id: string,
+    @Res({ passthrough: true }) reply: FastifyReply,
+  ) {
     return send(reply, await this.exports.sweeps(user, id));
   }
 
   @Get('axes/:id/travel-trials.csv')
   @ApiProduces('text/csv')
-  async travelTrials(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string, @Res({ passthrough: true }) reply: FastifyReply) {
+  async travelTrials(
+    @CurrentUser() user: SessionUser,
+    @Param('id', ParseUUIDPipe) id: string,
+    @Res({ passthrough: true }) reply: FastifyReply,
+  ) {
     return send(reply, await this.exports.travelTrials(user, id));
   }
 
   @Get('axes/:id/positioning-runs.csv')
   @ApiProduces('text/csv')
-  async positioningRuns(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string, @Res({ passthrough: true }) reply: FastifyReply) {
+  async positioningRuns(
+    @CurrentUser() user: SessionUser,
+    @Param('id', ParseUUIDPipe) id: string,
+    @Res({ passthrough: true }) reply: FastifyReply,
+  ) {
     return send(reply, await this.exports.positioningRuns(user, id));
   }
 
   @Get('machines/:id/bed-grids.csv')
   @ApiProduces('text/csv')
-  async bedGrids(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string, @Res({ passthrough: true }) reply: FastifyReply) {
+  async bedGrids(
+    @CurrentUser() user: SessionUser,
+    @Param('id', ParseUUIDPipe) id: string,
+    @Res({ passthrough: true }) reply: FastifyReply,
+  ) {
     return send(reply, await this.exports.bedGrids(user, id));
   }
 }

@@ -8,7 +8,18 @@ import { BedGridsService } from '../frame/bed-grids.service.js';
 import { MachinesService } from '../machines/machines.service.js';
 import { RailSweepsService } from '../rails/rail-sweeps.service.js';
 import { RailsService } from '../rails/rails.service.js';
-import { convert, csvFile, fileName, fromMmTo, isoTime, tidy, UNIT_NAMES, unitName, words, type Cell } from './csv-file.js';
+import {
+  convert,
+  csvFile,
+  fileName,
+  fromMmTo,
+  isoTime,
+  tidy,
+  UNIT_NAMES,
+  unitName,
+  words,
+  type Cell,
+} from './csv-file.js';
 
 export interface CsvDownload {
   filename: string;
@@ -41,18 +52,42 @@ export class ExportsService {
     const L: LengthUnit = full[0]?.lengthUnit ?? 'mm';
     const R: LengthUnit = full[0]?.readingUnit ?? 'mm';
     const header = [
-      'Sweep', 'Taken at', 'Taken by', 'Phase', 'Face', 'Datum', 'Station', `Position (${UNIT_NAMES[L]})`, `Reading (${UNIT_NAMES[R]})`,
-      `Residual from least-squares line (${UNIT_NAMES[R]})`, `Straightness, least squares (${UNIT_NAMES[R]})`, `Straightness, minimum zone (${UNIT_NAMES[R]})`,
-      'Target', 'Target unit', 'Status',
+      'Sweep',
+      'Taken at',
+      'Taken by',
+      'Phase',
+      'Face',
+      'Datum',
+      'Station',
+      `Position (${UNIT_NAMES[L]})`,
+      `Reading (${UNIT_NAMES[R]})`,
+      `Residual from least-squares line (${UNIT_NAMES[R]})`,
+      `Straightness, least squares (${UNIT_NAMES[R]})`,
+      `Straightness, minimum zone (${UNIT_NAMES[R]})`,
+      'Target',
+      'Target unit',
+      'Status',
     ];
     const rows: Cell[][] = [];
     for (const s of full) {
       const r = s.result;
       s.stations?.forEach((st, i) =>
         rows.push([
-          s.id, isoTime(s.takenAt), s.takenBy, words(s.phase), s.face, s.datum, i + 1, fromMmTo(st.positionMm, L), fromMmTo(st.readingMm, R),
-          fromMmTo(r?.leastSquares.residuals[i], R), fromMmTo(r?.leastSquares.straightness, R), fromMmTo(r?.minimumZone.straightness, R),
-          s.target.value, unitName(s.target.unit), words(s.status),
+          s.id,
+          isoTime(s.takenAt),
+          s.takenBy,
+          words(s.phase),
+          s.face,
+          s.datum,
+          i + 1,
+          fromMmTo(st.positionMm, L),
+          fromMmTo(st.readingMm, R),
+          fromMmTo(r?.leastSquares.residuals[i], R),
+          fromMmTo(r?.leastSquares.straightness, R),
+          fromMmTo(r?.minimumZone.straightness, R),
+          s.target.value,
+          unitName(s.target.unit),
+          words(s.status),
         ]),
       );
     }
@@ -67,8 +102,17 @@ export class ExportsService {
     for (const t of list) full.push(await this.trials.get(actor, axisId, t.id));
     const L: LengthUnit = full[0]?.lengthUnit ?? 'mm';
     const header = [
-      'Trial', 'Recorded at', 'Recorded by', 'Move', `Commanded (${UNIT_NAMES[L]})`, `Measured (${UNIT_NAMES[L]})`, `Measured − commanded (${UNIT_NAMES[L]})`,
-      'Steps per mm used', 'Scale error (%)', 'Corrected steps per mm', 'Status',
+      'Trial',
+      'Recorded at',
+      'Recorded by',
+      'Move',
+      `Commanded (${UNIT_NAMES[L]})`,
+      `Measured (${UNIT_NAMES[L]})`,
+      `Measured − commanded (${UNIT_NAMES[L]})`,
+      'Steps per mm used',
+      'Scale error (%)',
+      'Corrected steps per mm',
+      'Status',
     ];
     const rows: Cell[][] = [];
     for (const t of full) {
@@ -76,8 +120,17 @@ export class ExportsService {
         const commanded = convert(m.commanded, t.lengthUnit, L);
         const measured = convert(m.measured, t.lengthUnit, L);
         rows.push([
-          t.id, isoTime(t.recordedAt), t.recordedBy, i + 1, commanded, measured, convert(m.measured - m.commanded, t.lengthUnit, L),
-          t.stepsPerMmUsed, t.result ? tidy(t.result.errorPercent) : null, t.result ? tidy(t.result.correctedStepsPerMm) : null, words(t.status),
+          t.id,
+          isoTime(t.recordedAt),
+          t.recordedBy,
+          i + 1,
+          commanded,
+          measured,
+          convert(m.measured - m.commanded, t.lengthUnit, L),
+          t.stepsPerMmUsed,
+          t.result ? tidy(t.result.errorPercent) : null,
+          t.result ? tidy(t.result.correctedStepsPerMm) : null,
+          words(t.status),
         ]);
       });
     }
@@ -92,12 +145,32 @@ export class ExportsService {
     for (const r of list) full.push(await this.runs.get(actor, axisId, r.id));
     const L: LengthUnit = full[0]?.lengthUnit ?? 'mm';
     const R: LengthUnit = full[0]?.readingUnit ?? 'mm';
-    const header = ['Run', 'Recorded at', 'Recorded by', 'Pass', 'Direction', 'Target', `Target position (${UNIT_NAMES[L]})`, `Deviation (${UNIT_NAMES[R]})`, 'Status'];
+    const header = [
+      'Run',
+      'Recorded at',
+      'Recorded by',
+      'Pass',
+      'Direction',
+      'Target',
+      `Target position (${UNIT_NAMES[L]})`,
+      `Deviation (${UNIT_NAMES[R]})`,
+      'Status',
+    ];
     const rows: Cell[][] = [];
     for (const run of full) {
       run.runs.forEach((pass, p) =>
         pass.deviations.forEach((d, i) =>
-          rows.push([run.id, isoTime(run.recordedAt), run.recordedBy, p + 1, pass.direction, i + 1, convert(run.targets[i], run.lengthUnit, L), convert(d, run.readingUnit, R), words(run.status)]),
+          rows.push([
+            run.id,
+            isoTime(run.recordedAt),
+            run.recordedBy,
+            p + 1,
+            pass.direction,
+            i + 1,
+            convert(run.targets[i], run.lengthUnit, L),
+            convert(d, run.readingUnit, R),
+            words(run.status),
+          ]),
         ),
       );
     }
@@ -107,16 +180,37 @@ export class ExportsService {
   /** Every height of every bed grid of a machine, newest grid first. */
   async bedGrids(actor: SessionUser, machineId: string): Promise<CsvDownload> {
     const machine = await this.machines.getRef(actor, machineId);
-    const grids = [...(await this.grids.list(actor, machineId))].sort((a, b) => b.recordedAt.localeCompare(a.recordedAt));
+    const grids = [...(await this.grids.list(actor, machineId))].sort((a, b) =>
+      b.recordedAt.localeCompare(a.recordedAt),
+    );
     const L: LengthUnit = grids[0]?.lengthUnit ?? 'mm';
     const R: LengthUnit = grids[0]?.readingUnit ?? 'mm';
-    const header = ['Bed grid', 'Recorded at', 'Recorded by', 'Point', `X (${UNIT_NAMES[L]})`, `Y (${UNIT_NAMES[L]})`, `Height (${UNIT_NAMES[R]})`, `Flatness judged (${UNIT_NAMES[R]})`, 'Judged on', 'Status'];
+    const header = [
+      'Bed grid',
+      'Recorded at',
+      'Recorded by',
+      'Point',
+      `X (${UNIT_NAMES[L]})`,
+      `Y (${UNIT_NAMES[L]})`,
+      `Height (${UNIT_NAMES[R]})`,
+      `Flatness judged (${UNIT_NAMES[R]})`,
+      'Judged on',
+      'Status',
+    ];
     const rows: Cell[][] = [];
     for (const g of grids) {
       g.points.forEach((p, i) =>
         rows.push([
-          g.id, isoTime(g.recordedAt), g.recordedBy.name, i + 1, convert(p.x, g.lengthUnit, L), convert(p.y, g.lengthUnit, L), convert(p.z, g.readingUnit, R),
-          fromMmTo(g.result?.judged.valueMm, R), g.result?.judged.label ?? null, words(g.status),
+          g.id,
+          isoTime(g.recordedAt),
+          g.recordedBy.name,
+          i + 1,
+          convert(p.x, g.lengthUnit, L),
+          convert(p.y, g.lengthUnit, L),
+          convert(p.z, g.readingUnit, R),
+          fromMmTo(g.result?.judged.valueMm, R),
+          g.result?.judged.label ?? null,
+          words(g.status),
         ]),
       );
     }
@@ -124,7 +218,9 @@ export class ExportsService {
   }
 
   /** Every page of a list, following its cursor. */
-  private async all<T>(page: (cursor: string | undefined) => Promise<{ items: T[]; nextCursor: string | null }>): Promise<T[]> {
+  private async all<T>(
+    page: (cursor: string | undefined) => Promise<{ items: T[]; nextCursor: string | null }>,
+  ): Promise<T[]> {
     const out: T[] = [];
     let cursor: string | undefined;
     do {

@@ -35,7 +35,8 @@ export const JUDGED_LABEL: Record<BedJudgedBasis, string> = {
   'minimum-zone': 'Minimum-zone flatness (ISO 1101)',
 };
 
-export const judgedBasisFor = (machineKind: string): BedJudgedBasis => (machineKind === 'plasma' ? 'height-range' : 'minimum-zone');
+export const judgedBasisFor = (machineKind: string): BedJudgedBasis =>
+  machineKind === 'plasma' ? 'height-range' : 'minimum-zone';
 
 export interface BedGridResult {
   leastSquares: {
@@ -77,7 +78,8 @@ export function bedGridResult(points: BedGridPointMm[], basis: BedJudgedBasis): 
   const lowestZ = Math.min(...zs);
   const rangeMm = Math.max(...zs) - lowestZ;
   const judgedValue = basis === 'height-range' ? rangeMm : zone.flatnessMm;
-  const judgedHeight = (i: number) => (basis === 'height-range' ? zs[i] - lowestZ : zone.residualsMm[i] + zone.flatnessMm / 2);
+  const judgedHeight = (i: number) =>
+    basis === 'height-range' ? zs[i] - lowestZ : zone.residualsMm[i] + zone.flatnessMm / 2;
   const rowOf = rankOf(points.map((p) => p.yMm));
   const columnOf = rankOf(points.map((p) => p.xMm));
   const rows = rowOf.size;
@@ -101,7 +103,12 @@ export function bedGridResult(points: BedGridPointMm[], basis: BedJudgedBasis): 
     minimumZone: { a: zone.a, b: zone.b, c: zone.cMm, flatnessMm: zone.flatnessMm },
     heightRange: { rangeMm },
     judged: { basis, label: JUDGED_LABEL[basis], valueMm: judgedValue },
-    tilt: { xMmPerMetre: f.tiltXMmPerMetre, yMmPerMetre: f.tiltYMmPerMetre, mmPerMetre: f.tiltMmPerMetre, directionDeg: f.tiltDirectionDeg },
+    tilt: {
+      xMmPerMetre: f.tiltXMmPerMetre,
+      yMmPerMetre: f.tiltYMmPerMetre,
+      mmPerMetre: f.tiltMmPerMetre,
+      directionDeg: f.tiltDirectionDeg,
+    },
     points: out,
     highest: byHeight[0],
     lowest: byHeight[byHeight.length - 1],

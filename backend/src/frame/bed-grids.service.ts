@@ -15,7 +15,17 @@ import { toBedGridResponse, type BedGridResponse } from './frame.mapper.js';
 import { FrameRepository, type BedGridRow } from './frame.repository.js';
 
 /** The numbers the readers of a bed grid use, computed again from its stored points. */
-const BED_GRID_SHAPE = ['leastSquares.flatnessMm', 'minimumZone.flatnessMm', 'judged.valueMm', 'tilt.mmPerMetre', 'points[]', 'points[].xMm', 'points[].yMm', 'points[].residualMm', 'points[].judgedHeightMm'];
+const BED_GRID_SHAPE = [
+  'leastSquares.flatnessMm',
+  'minimumZone.flatnessMm',
+  'judged.valueMm',
+  'tilt.mmPerMetre',
+  'points[]',
+  'points[].xMm',
+  'points[].yMm',
+  'points[].residualMm',
+  'points[].judgedHeightMm',
+];
 
 export const BED_GRID = 'bed-grid';
 
@@ -34,11 +44,20 @@ export class BedGridsService {
     const machine = await this.machines.getRef(actor, machineId);
     const lengthUnit = dto.lengthUnit ?? 'mm';
     const readingUnit = dto.readingUnit ?? 'mm';
-    if ((dto.rows == null) !== (dto.columns == null)) throw new BadRequestException([`${dto.rows == null ? 'rows' : 'columns'} is needed with ${dto.rows == null ? 'columns' : 'rows'}`]);
+    if ((dto.rows == null) !== (dto.columns == null))
+      throw new BadRequestException([
+        `${dto.rows == null ? 'rows' : 'columns'} is needed with ${dto.rows == null ? 'columns' : 'rows'}`,
+      ]);
     if (dto.rows != null && dto.columns != null && dto.rows * dto.columns !== dto.points.length) {
-      throw new BadRequestException([`points must hold rows × columns = ${dto.rows * dto.columns} points (got ${dto.points.length})`]);
+      throw new BadRequestException([
+        `points must hold rows × columns = ${dto.rows * dto.columns} points (got ${dto.points.length})`,
+      ]);
     }
-    const points: BedGridPointMm[] = dto.points.map((p) => ({ xMm: toMm(p.x, lengthUnit), yMm: toMm(p.y, lengthUnit), zMm: toMm(p.z, readingUnit) }));
+    const points: BedGridPointMm[] = dto.points.map((p) => ({
+      xMm: toMm(p.x, lengthUnit),
+      yMm: toMm(p.y, lengthUnit),
+      zMm: toMm(p.z, readingUnit),
+    }));
     // Evaluated before saving: a grid the engine refuses (all on one line, repeated positions) is never stored.
     bedGridResult(points, judgedBasisFor(machine.kind));
     const row = await this.repo.insertBedGrid({
@@ -71,13 +90,22 @@ export class BedGridsService {
     if (!row || row.machineId !== machine.id) throw new NotFoundException('No such bed grid on this machine');
     await this.records.assertEditable(BED_GRID, row.id, 'This bed grid');
     await this.repo.deleteBedGrid(actor.workshopId, row.id);
-    await this.records.audit(actor, { machineId: machine.id, recordType: BED_GRID, recordId: row.id, action: 'deleted', summary: `Bed grid of ${row.recordedAt.toISOString().slice(0, 10)} by ${row.recordedByName} deleted` });
+    await this.records.audit(actor, {
+      machineId: machine.id,
+      recordType: BED_GRID,
+      recordId: row.id,
+      action: 'deleted',
+      summary: `Bed grid of ${row.recordedAt.toISOString().slice(0, 10)} by ${row.recordedByName} deleted`,
+    });
   }
 
   async list(actor: SessionUser, machineId: string): Promise<BedGridResponse[]> {
     const machine = await this.machines.getRef(actor, machineId);
     const rows = await this.repo.listBedGrids(actor.workshopId, machine.id);
-    const locked = await this.records.lockedIds(BED_GRID, rows.map((r) => r.id));
+    const locked = await this.records.lockedIds(
+      BED_GRID,
+      rows.map((r) => r.id),
+    );
     const target = await this.targets.of(machine, 'bedFlatness');
     return rows.map((r) => this.respond(r, machine, target, locked.has(r.id)));
   }
@@ -102,7 +130,14 @@ export class BedGridsService {
     const r = this.respond(row, machine, t, false);
     if (!r.result) {
       // A latest grid that cannot be read blocks like a failed one and says why.
-      return { ...base, subject: `${base.subject} (latest bed grid unreadable)`, status: 'outside-target', result: null, recordId: row.id, recordedAt: r.recordedAt };
+      return {
+        ...base,
+        subject: `${base.subject} (latest bed grid unreadable)`,
+        status: 'outside-target',
+        result: null,
+        recordId: row.id,
+        recordedAt: r.recordedAt,
+      };
     }
     const unit = row.readingUnit;
     const { judged, leastSquares, minimumZone } = r.result;
@@ -123,15 +158,36 @@ export class BedGridsService {
 
   async resolve(workshopId: string, id: string): Promise<SubjectRef | null> {
     const row = await this.repo.findBedGrid(workshopId, id);
-    return row ? { machineId: row.machineId, recordType: BED_GRID, recordId: row.id, label: `Bed grid of ${row.recordedAt.toISOString().slice(0, 10)}` } : null;
+    return row
+      ? {
+          machineId: row.machineId,
+          recordType: BED_GRID,
+          recordId: row.id,
+          label: `Bed grid of ${row.recordedAt.toISOString().slice(0, 10)}`,
+        }
+      : null;
   }
 
   private respond(row: BedGridRow, machine: GridMachine, { target, base }: TargetOf, locked: boolean): BedGridResponse {
     const result = readableComputation(() => bedGridResult(row.points, judgedBasisFor(machine.kind)), BED_GRID_SHAPE);
     const warnings = result
-      ? bedGridWarnings(row.points, result, { workAreaXMm: machine.workAreaXMm, workAreaYMm: machine.workAreaYMm, targetMm: base, resolutionMm: row.resolutionMm, lengthUnit: row.lengthUnit, readingUnit: row.readingUnit })
+      ? bedGridWarnings(row.points, result, {
+          workAreaXMm: machine.workAreaXMm,
+          workAreaYMm: machine.workAreaYMm,
+          targetMm: base,
+          resolutionMm: row.resolutionMm,
+          lengthUnit: row.lengthUnit,
+          readingUnit: row.readingUnit,
+        })
       : [];
-    return toBedGridResponse(row, result, result ? judge(result.judged.valueMm, base) : 'outside-target', target, locked, warnings);
+    return toBedGridResponse(
+      row,
+      result,
+      result ? judge(result.judged.valueMm, base) : 'outside-target',
+      target,
+      locked,
+      warnings,
+    );
   }
 }
 
@@ -141,7 +197,11 @@ export class BedGridsService {
  * lower bound of the judged zone, so every point lies between 0 and the judged value, and the
  * target is the one limit: a point above it is where the bed is out.
  */
-export function bedMapSeries(r: BedGridResult, row: Pick<BedGridRow, 'lengthUnit' | 'readingUnit'>, t: TargetOf): CheckSeries {
+export function bedMapSeries(
+  r: BedGridResult,
+  row: Pick<BedGridRow, 'lengthUnit' | 'readingUnit'>,
+  t: TargetOf,
+): CheckSeries {
   const { lengthUnit, readingUnit } = row;
   return {
     title: `Bed map: ${lowerFirst(r.judged.label)}, ${r.rows} rows by ${r.columns} columns`,
@@ -149,7 +209,10 @@ export function bedMapSeries(r: BedGridResult, row: Pick<BedGridRow, 'lengthUnit
     y: { label: 'Height above the lowest of the judged zone', unit: readingUnit },
     lines: rowsOf(r.points).map(([n, pts]) => ({
       label: `Row ${n} · Y = ${Number(fromMm(pts[0].yMm, lengthUnit).toFixed(4))} ${lengthUnit}`,
-      points: pts.map((p): [number, number] => [Number(fromMm(p.xMm, lengthUnit).toFixed(6)), fromMm(p.judgedHeightMm, readingUnit)]),
+      points: pts.map((p): [number, number] => [
+        Number(fromMm(p.xMm, lengthUnit).toFixed(6)),
+        fromMm(p.judgedHeightMm, readingUnit),
+      ]),
     })),
     limits: [{ label: `Target ${t.target.value} ${t.target.unit}`, value: fromMm(t.base, readingUnit) }],
   };

@@ -29,7 +29,13 @@ export interface DiagonalCheckResult extends Omit<SquarenessResult, 'correctionM
 export function correctionFor(r: SquarenessResult): SquaringCorrection {
   const moveMm = r.correctionMm;
   if (r.diagonalDifferenceMm === 0) {
-    return { moveMm: 0, spanMm: r.spanMm, end: null, towards: null, instruction: 'The diagonals are equal: the gantry is square; nothing to move.' };
+    return {
+      moveMm: 0,
+      spanMm: r.spanMm,
+      end: null,
+      towards: null,
+      instruction: 'The diagonals are equal: the gantry is square; nothing to move.',
+    };
   }
   const end = r.longDiagonal === 1 ? 'x-far' : 'x0';
   const other = end === 'x-far' ? 'X0' : 'X-far';
@@ -64,8 +70,14 @@ export function impossibleDiagonals(i: DiagonalInputMm): string[] {
   const out: string[] = [];
   const longest = i.sideXMm + i.sideYMm;
   const shortest = Math.abs(i.sideXMm - i.sideYMm);
-  for (const [field, d] of [['diagonal1', i.diagonal1Mm], ['diagonal2', i.diagonal2Mm]] as const) {
-    if (d >= longest) out.push(`${field} must be shorter than sideX + sideY (a diagonal is the third side of a triangle with the two sides)`);
+  for (const [field, d] of [
+    ['diagonal1', i.diagonal1Mm],
+    ['diagonal2', i.diagonal2Mm],
+  ] as const) {
+    if (d >= longest)
+      out.push(
+        `${field} must be shorter than sideX + sideY (a diagonal is the third side of a triangle with the two sides)`,
+      );
     else if (d <= shortest) out.push(`${field} must be longer than the difference of sideX and sideY`);
   }
   return out;

@@ -55,7 +55,13 @@ export class DiagonalChecksService {
     const response = this.respond(row, await this.targets.of(machine, 'squareness'), false);
     await this.records.checkRecorded(
       actor,
-      { machineId: machine.id, kind: DIAGONAL_CHECK, recordType: DIAGONAL_CHECK, recordId: row.id, status: response.status },
+      {
+        machineId: machine.id,
+        kind: DIAGONAL_CHECK,
+        recordType: DIAGONAL_CHECK,
+        recordId: row.id,
+        status: response.status,
+      },
       `Diagonal check: ${response.result!.mmPerMetre.toFixed(3)} mm/m out of square (${response.result!.outOfSquareArcsec.toFixed(0)}″), ${response.status.replace('-', ' ')}`,
     );
     return response;
@@ -68,13 +74,22 @@ export class DiagonalChecksService {
     if (!row || row.machineId !== machine.id) throw new NotFoundException('No such diagonal check on this machine');
     await this.records.assertEditable(DIAGONAL_CHECK, row.id, 'This diagonal check');
     await this.repo.deleteDiagonalCheck(actor.workshopId, row.id);
-    await this.records.audit(actor, { machineId: machine.id, recordType: DIAGONAL_CHECK, recordId: row.id, action: 'deleted', summary: `Diagonal check of ${row.recordedAt.toISOString().slice(0, 10)} by ${row.recordedByName} deleted` });
+    await this.records.audit(actor, {
+      machineId: machine.id,
+      recordType: DIAGONAL_CHECK,
+      recordId: row.id,
+      action: 'deleted',
+      summary: `Diagonal check of ${row.recordedAt.toISOString().slice(0, 10)} by ${row.recordedByName} deleted`,
+    });
   }
 
   async list(actor: SessionUser, machineId: string): Promise<DiagonalCheckResponse[]> {
     const machine = await this.machines.getRef(actor, machineId);
     const rows = await this.repo.listDiagonalChecks(actor.workshopId, machine.id);
-    const locked = await this.records.lockedIds(DIAGONAL_CHECK, rows.map((r) => r.id));
+    const locked = await this.records.lockedIds(
+      DIAGONAL_CHECK,
+      rows.map((r) => r.id),
+    );
     const target = await this.targets.of(machine, 'squareness');
     return rows.map((r) => this.respond(r, target, locked.has(r.id)));
   }
@@ -102,12 +117,23 @@ export class DiagonalChecksService {
     const r = this.respond(row, t, false);
     if (!r.result) {
       // A latest check that cannot be read blocks like a failed one and says why.
-      return { ...base, subject: `${base.subject} (latest diagonal check unreadable)`, status: 'outside-target', result: null, recordId: row.id, recordedAt: r.recordedAt };
+      return {
+        ...base,
+        subject: `${base.subject} (latest diagonal check unreadable)`,
+        status: 'outside-target',
+        result: null,
+        recordId: row.id,
+        recordedAt: r.recordedAt,
+      };
     }
     return {
       ...base,
       status: r.status,
-      result: { value: r.result.mmPerMetre, unit: 'mm/m', summary: `${r.result.mmPerMetre.toFixed(3)} mm/m out of square; move one side ${r.result.correction.moveMm.toFixed(2)} mm` },
+      result: {
+        value: r.result.mmPerMetre,
+        unit: 'mm/m',
+        summary: `${r.result.mmPerMetre.toFixed(3)} mm/m out of square; move one side ${r.result.correction.moveMm.toFixed(2)} mm`,
+      },
       recordId: row.id,
       recordedAt: r.recordedAt,
       warnings: r.warnings,
@@ -117,10 +143,15 @@ export class DiagonalChecksService {
           title: 'Squaring history',
           x: { label: 'Check', unit: '#' },
           y: { label: 'Out of square', unit: 'mm/m' },
-          lines: [{ label: 'Out of square', points: [...rows].reverse().flatMap((x, i): [number, number][] => {
-            const result = storedDiagonal(x);
-            return result ? [[i + 1, result.mmPerMetre]] : [];
-          }) }],
+          lines: [
+            {
+              label: 'Out of square',
+              points: [...rows].reverse().flatMap((x, i): [number, number][] => {
+                const result = storedDiagonal(x);
+                return result ? [[i + 1, result.mmPerMetre]] : [];
+              }),
+            },
+          ],
           limits: [{ label: `Target ${t.target.value} mm/m`, value: t.base }],
         },
       }),
@@ -129,12 +160,26 @@ export class DiagonalChecksService {
 
   async resolve(workshopId: string, id: string): Promise<SubjectRef | null> {
     const row = await this.repo.findDiagonalCheck(workshopId, id);
-    return row ? { machineId: row.machineId, recordType: DIAGONAL_CHECK, recordId: row.id, label: `Diagonal check of ${row.recordedAt.toISOString().slice(0, 10)}` } : null;
+    return row
+      ? {
+          machineId: row.machineId,
+          recordType: DIAGONAL_CHECK,
+          recordId: row.id,
+          label: `Diagonal check of ${row.recordedAt.toISOString().slice(0, 10)}`,
+        }
+      : null;
   }
 
   private respond(row: DiagonalCheckRow, { target, base }: TargetOf, locked: boolean): DiagonalCheckResponse {
     const result = storedDiagonal(row);
     const warnings = result ? diagonalWarnings(row, result.warnings, base, row.resolutionMm, row.lengthUnit) : [];
-    return toDiagonalCheckResponse(row, result, result ? judge(result.mmPerMetre, base) : 'outside-target', target, locked, warnings);
+    return toDiagonalCheckResponse(
+      row,
+      result,
+      result ? judge(result.mmPerMetre, base) : 'outside-target',
+      target,
+      locked,
+      warnings,
+    );
   }
 }

@@ -18,7 +18,12 @@ export class FrameRegistrations implements OnModuleInit {
 
   onModuleInit() {
     this.readiness.register({
-      checksFor: (machine, context) => Promise.all([this.diagonals.readiness(machine, context), this.grids.readiness(machine, context), this.cuts.readiness(machine, context)]),
+      checksFor: (machine, context) =>
+        Promise.all([
+          this.diagonals.readiness(machine, context),
+          this.grids.readiness(machine, context),
+          this.cuts.readiness(machine, context),
+        ]),
     });
     this.subjects.register(DIAGONAL_CHECK, (workshopId, id) => this.diagonals.resolve(workshopId, id));
     this.subjects.register(BED_GRID, (workshopId, id) => this.grids.resolve(workshopId, id));

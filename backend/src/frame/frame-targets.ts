@@ -28,4 +28,5 @@ export function frameTargetIn(context: ReadinessContext, key: TargetKey): Target
 }
 
 /** A result at most the target is within it (targets are limits, inclusive). */
-export const judge = (value: number, limit: number): FrameStatus => (value <= limit ? 'within-target' : 'outside-target');
+export const judge = (value: number, limit: number): FrameStatus =>
+  value <= limit ? 'within-target' : 'outside-target';

@@ -17,7 +17,8 @@ export const MIN_GRID_COVERAGE = 0.75;
 
 const UNIT_LABEL: Record<LengthUnit, string> = { mm: 'mm', um: 'µm', in: 'in', thou: 'thou' };
 const DECIMALS: Record<LengthUnit, number> = { mm: 3, um: 1, in: 4, thou: 2 };
-export const show = (mm: number, unit: LengthUnit) => `${Number(fromMm(mm, unit).toFixed(DECIMALS[unit]))} ${UNIT_LABEL[unit]}`;
+export const show = (mm: number, unit: LengthUnit) =>
+  `${Number(fromMm(mm, unit).toFixed(DECIMALS[unit]))} ${UNIT_LABEL[unit]}`;
 
 /**
  * The diagonal difference a squareness target allows on this rectangle. From the parallelogram
@@ -29,8 +30,17 @@ export function allowedDiagonalDifferenceMm(sideXMm: number, sideYMm: number, ta
   return (2 * sideXMm * sideYMm * Math.sin(gamma)) / Math.hypot(sideXMm, sideYMm);
 }
 
-export function diagonalWarnings(input: DiagonalInputMm, engineWarnings: string[], targetMmPerMetre: number, resolutionMm: number | null, unit: LengthUnit): ResultWarning[] {
-  const out: ResultWarning[] = engineWarnings.map((m) => ({ code: 'diagonals-do-not-match-sides', message: `${m.charAt(0).toUpperCase()}${m.slice(1)}.` }));
+export function diagonalWarnings(
+  input: DiagonalInputMm,
+  engineWarnings: string[],
+  targetMmPerMetre: number,
+  resolutionMm: number | null,
+  unit: LengthUnit,
+): ResultWarning[] {
+  const out: ResultWarning[] = engineWarnings.map((m) => ({
+    code: 'diagonals-do-not-match-sides',
+    message: `${m.charAt(0).toUpperCase()}${m.slice(1)}.`,
+  }));
   const allowed = allowedDiagonalDifferenceMm(input.sideXMm, input.sideYMm, targetMmPerMetre);
   const size = `${show(input.sideXMm, unit)} × ${show(input.sideYMm, unit)}`;
   if (resolutionMm != null && resolutionMm > allowed / RESOLUTION_SHARE) {
@@ -56,7 +66,11 @@ export interface GridContext {
   readingUnit: LengthUnit;
 }
 
-export function bedGridWarnings(points: { xMm: number; yMm: number }[], r: BedGridResult, c: GridContext): ResultWarning[] {
+export function bedGridWarnings(
+  points: { xMm: number; yMm: number }[],
+  r: BedGridResult,
+  c: GridContext,
+): ResultWarning[] {
   const out: ResultWarning[] = [];
   if (points.length < MIN_GRID_POINTS || r.rows < MIN_GRID_LINES || r.columns < MIN_GRID_LINES) {
     out.push({
@@ -66,9 +80,15 @@ export function bedGridWarnings(points: { xMm: number; yMm: number }[], r: BedGr
   }
   const spanX = Math.max(...points.map((p) => p.xMm)) - Math.min(...points.map((p) => p.xMm));
   const spanY = Math.max(...points.map((p) => p.yMm)) - Math.min(...points.map((p) => p.yMm));
-  for (const [axis, span, area] of [['X', spanX, c.workAreaXMm], ['Y', spanY, c.workAreaYMm]] as const) {
+  for (const [axis, span, area] of [
+    ['X', spanX, c.workAreaXMm],
+    ['Y', spanY, c.workAreaYMm],
+  ] as const) {
     if (area > 0 && span < MIN_GRID_COVERAGE * area) {
-      out.push({ code: 'grid-coverage', message: `The grid spans ${show(span, c.lengthUnit)} of the ${show(area, c.lengthUnit)} work area in ${axis}; the rest of the bed is not measured.` });
+      out.push({
+        code: 'grid-coverage',
+        message: `The grid spans ${show(span, c.lengthUnit)} of the ${show(area, c.lengthUnit)} work area in ${axis}; the rest of the bed is not measured.`,
+      });
     }
   }
   if (c.resolutionMm != null && c.resolutionMm > c.targetMm / RESOLUTION_SHARE) {
@@ -78,7 +98,11 @@ export function bedGridWarnings(points: { xMm: number; yMm: number }[], r: BedGr
     });
   }
   // On a plasma table the judged range includes the tilt: say when the tilt alone puts it outside.
-  if (r.judged.basis === 'height-range' && r.heightRange.rangeMm > c.targetMm && r.minimumZone.flatnessMm <= c.targetMm) {
+  if (
+    r.judged.basis === 'height-range' &&
+    r.heightRange.rangeMm > c.targetMm &&
+    r.minimumZone.flatnessMm <= c.targetMm
+  ) {
     out.push({
       code: 'bed-tilted-to-gantry',
       message: `The bed is flat within ${show(r.minimumZone.flatnessMm, c.readingUnit)} but tilted ${r.tilt.mmPerMetre.toFixed(2)} mm/m to the gantry's plane of travel, which makes the torch height vary by ${show(r.heightRange.rangeMm, c.readingUnit)}: shim the bed or slat supports parallel to the gantry.`,
@@ -99,7 +123,10 @@ export interface CutContext {
 const REFERENCE_BAND_MM = ISO9013_SIZE_BANDS_MM[ISO9013_REFERENCE.sizeBand];
 
 export function testCutWarnings(r: TestCutResult, c: CutContext): ResultWarning[] {
-  const out: ResultWarning[] = r.squareness.warnings.map((m) => ({ code: 'diagonals-do-not-match-sides', message: `${m.charAt(0).toUpperCase()}${m.slice(1)}.` }));
+  const out: ResultWarning[] = r.squareness.warnings.map((m) => ({
+    code: 'diagonals-do-not-match-sides',
+    message: `${m.charAt(0).toUpperCase()}${m.slice(1)}.`,
+  }));
   if (c.policy.basis === 'iso9013-class-2' && c.policy.plateThicknessMm == null) {
     out.push({
       code: 'plate-thickness-missing',
@@ -107,7 +134,11 @@ export function testCutWarnings(r: TestCutResult, c: CutContext): ResultWarning[
     });
   }
   for (const p of r.parts) {
-    if (p.outsideBand) out.push({ code: 'outside-iso9013-band', message: `${p.label} (${show(p.nominalMm, c.lengthUnit)}): ${p.outsideBand}.` });
+    if (p.outsideBand)
+      out.push({
+        code: 'outside-iso9013-band',
+        message: `${p.label} (${show(p.nominalMm, c.lengthUnit)}): ${p.outsideBand}.`,
+      });
   }
   if (c.policy.basis === 'target' && /ISO 9013/.test(c.targetSource ?? '')) {
     const outside = r.parts.filter((p) => p.nominalMm < REFERENCE_BAND_MM[0] || p.nominalMm >= REFERENCE_BAND_MM[1]);

@@ -23,7 +23,11 @@ export class FrameController {
 
   @Post('diagonal-checks')
   @Roles(...FRAME_RECORDERS)
-  createDiagonalCheck(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string, @Body() dto: CreateDiagonalCheckDto) {
+  createDiagonalCheck(
+    @CurrentUser() user: SessionUser,
+    @Param('id', ParseUUIDPipe) id: string,
+    @Body() dto: CreateDiagonalCheckDto,
+  ) {
     return this.diagonals.create(user, id, dto);
   }
 
@@ -34,7 +38,11 @@ export class FrameController {
 
   @Post('bed-grids')
   @Roles(...FRAME_RECORDERS)
-  createBedGrid(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string, @Body() dto: CreateBedGridDto) {
+  createBedGrid(
+    @CurrentUser() user: SessionUser,
+    @Param('id', ParseUUIDPipe) id: string,
+    @Body() dto: CreateBedGridDto,
+  ) {
     return this.grids.create(user, id, dto);
   }
 
@@ -45,7 +53,11 @@ export class FrameController {
 
   @Post('test-cuts')
   @Roles(...CUT_RECORDERS)
-  createTestCut(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string, @Body() dto: CreateTestCutDto) {
+  createTestCut(
+    @CurrentUser() user: SessionUser,
+    @Param('id', ParseUUIDPipe) id: string,
+    @Body() dto: CreateTestCutDto,
+  ) {
     return this.cuts.create(user, id, dto);
   }
 
@@ -57,21 +69,33 @@ export class FrameController {
   @Delete('diagonal-checks/:recordId')
   @HttpCode(204)
   @Roles(...FRAME_RECORDERS)
-  deleteDiagonalCheck(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string, @Param('recordId', ParseUUIDPipe) recordId: string) {
+  deleteDiagonalCheck(
+    @CurrentUser() user: SessionUser,
+    @Param('id', ParseUUIDPipe) id: string,
+    @Param('recordId', ParseUUIDPipe) recordId: string,
+  ) {
     return this.diagonals.remove(user, id, recordId);
   }
 
   @Delete('bed-grids/:recordId')
   @HttpCode(204)
   @Roles(...FRAME_RECORDERS)
-  deleteBedGrid(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string, @Param('recordId', ParseUUIDPipe) recordId: string) {
+  deleteBedGrid(
+    @CurrentUser() user: SessionUser,
+    @Param('id', ParseUUIDPipe) id: string,
+    @Param('recordId', ParseUUIDPipe) recordId: string,
+  ) {
     return this.grids.remove(user, id, recordId);
   }
 
   @Delete('test-cuts/:recordId')
   @HttpCode(204)
   @Roles(...CUT_RECORDERS)
-  deleteTestCut(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string, @Param('recordId', ParseUUIDPipe) recordId: string) {
+  deleteTestCut(
+    @CurrentUser() user: SessionUser,
+    @Param('id', ParseUUIDPipe) id: string,
+    @Param('recordId', ParseUUIDPipe) recordId: string,
+  ) {
     return this.cuts.remove(user, id, recordId);
   }
 }

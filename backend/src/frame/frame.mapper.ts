@@ -29,7 +29,13 @@ interface Common {
   warnings: ResultWarning[];
 }
 
-function common(row: DiagonalCheckRow | BedGridRow | TestCutRow, status: FrameStatus, target: JudgedTarget, locked: boolean, warnings: ResultWarning[]): Common {
+function common(
+  row: DiagonalCheckRow | BedGridRow | TestCutRow,
+  status: FrameStatus,
+  target: JudgedTarget,
+  locked: boolean,
+  warnings: ResultWarning[],
+): Common {
   return {
     id: row.id,
     machineId: row.machineId,
@@ -50,11 +56,19 @@ const inUnit = (mm: unknown, unit: LengthUnit): number | null => {
   const v = finiteOrNull(mm as number);
   return v === null ? null : Number(fromMm(v, unit).toPrecision(12));
 };
-const field = (o: unknown, key: string): unknown => (o !== null && typeof o === 'object' ? (o as Record<string, unknown>)[key] : undefined);
+const field = (o: unknown, key: string): unknown =>
+  o !== null && typeof o === 'object' ? (o as Record<string, unknown>)[key] : undefined;
 /** A record whose stored measurements cannot be read carries no result and says so. */
 const unreadable = (result: unknown) => (result === null ? { unreadable: UNREADABLE_INPUT } : {});
 
-export function toDiagonalCheckResponse(row: DiagonalCheckRow, result: DiagonalCheckResult | null, status: FrameStatus, target: JudgedTarget, locked: boolean, warnings: ResultWarning[]) {
+export function toDiagonalCheckResponse(
+  row: DiagonalCheckRow,
+  result: DiagonalCheckResult | null,
+  status: FrameStatus,
+  target: JudgedTarget,
+  locked: boolean,
+  warnings: ResultWarning[],
+) {
   const u = row.lengthUnit;
   return {
     ...common(row, status, target, locked, warnings),
@@ -67,13 +81,26 @@ export function toDiagonalCheckResponse(row: DiagonalCheckRow, result: DiagonalC
       diagonal2: inUnit(row.diagonal2Mm, u),
       gantrySpan: row.gantrySpanMm == null ? null : inUnit(row.gantrySpanMm, u),
     },
-    inputMm: { sideX: finiteOrNull(row.sideXMm), sideY: finiteOrNull(row.sideYMm), diagonal1: finiteOrNull(row.diagonal1Mm), diagonal2: finiteOrNull(row.diagonal2Mm), gantrySpan: finiteOrNull(row.gantrySpanMm) },
+    inputMm: {
+      sideX: finiteOrNull(row.sideXMm),
+      sideY: finiteOrNull(row.sideYMm),
+      diagonal1: finiteOrNull(row.diagonal1Mm),
+      diagonal2: finiteOrNull(row.diagonal2Mm),
+      gantrySpan: finiteOrNull(row.gantrySpanMm),
+    },
     result,
     ...unreadable(result),
   };
 }
 
-export function toBedGridResponse(row: BedGridRow, result: BedGridResult | null, status: FrameStatus, target: JudgedTarget, locked: boolean, warnings: ResultWarning[]) {
+export function toBedGridResponse(
+  row: BedGridRow,
+  result: BedGridResult | null,
+  status: FrameStatus,
+  target: JudgedTarget,
+  locked: boolean,
+  warnings: ResultWarning[],
+) {
   return {
     ...common(row, status, target, locked, warnings),
     /** Unit the heights (and the gauge's resolution) were read in and are given back in. */
@@ -82,13 +109,24 @@ export function toBedGridResponse(row: BedGridRow, result: BedGridResult | null,
     rows: row.rows ?? result?.rows ?? null,
     columns: row.columns ?? result?.columns ?? null,
     // Positions as entered (in `lengthUnit`), heights as entered (in `readingUnit`); the result is in mm.
-    points: (Array.isArray(row.points) ? row.points : []).map((p) => ({ x: inUnit(field(p, 'xMm'), row.lengthUnit), y: inUnit(field(p, 'yMm'), row.lengthUnit), z: inUnit(field(p, 'zMm'), row.readingUnit) })),
+    points: (Array.isArray(row.points) ? row.points : []).map((p) => ({
+      x: inUnit(field(p, 'xMm'), row.lengthUnit),
+      y: inUnit(field(p, 'yMm'), row.lengthUnit),
+      z: inUnit(field(p, 'zMm'), row.readingUnit),
+    })),
     result,
     ...unreadable(result),
   };
 }
 
-export function toTestCutResponse(row: TestCutRow, result: TestCutResult | null, status: FrameStatus, target: { part: JudgedTarget; squareness: JudgedTarget }, locked: boolean, warnings: ResultWarning[]) {
+export function toTestCutResponse(
+  row: TestCutRow,
+  result: TestCutResult | null,
+  status: FrameStatus,
+  target: { part: JudgedTarget; squareness: JudgedTarget },
+  locked: boolean,
+  warnings: ResultWarning[],
+) {
   const u = row.lengthUnit;
   const s = row.sizes;
   const nominal = field(s, 'nominal');
@@ -99,7 +137,11 @@ export function toTestCutResponse(row: TestCutRow, result: TestCutResult | null,
     plateThickness: row.plateThicknessMm == null ? null : inUnit(row.plateThicknessMm, u),
     plateThicknessMm: finiteOrNull(row.plateThicknessMm),
     resolution: row.resolutionMm == null ? null : inUnit(row.resolutionMm, u),
-    nominal: { x: inUnit(field(nominal, 'xMm'), u), y: inUnit(field(nominal, 'yMm'), u), circle: inUnit(field(nominal, 'circleMm'), u) },
+    nominal: {
+      x: inUnit(field(nominal, 'xMm'), u),
+      y: inUnit(field(nominal, 'yMm'), u),
+      circle: inUnit(field(nominal, 'circleMm'), u),
+    },
     measured: {
       x: inUnit(field(measured, 'xMm'), u),
       y: inUnit(field(measured, 'yMm'), u),

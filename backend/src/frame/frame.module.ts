@@ -12,7 +12,14 @@ import { TestCutsService } from './test-cuts.service.js';
 @Module({
   imports: [MachinesModule],
   controllers: [FrameController],
-  providers: [FrameRepository, FrameTargets, DiagonalChecksService, BedGridsService, TestCutsService, FrameRegistrations],
+  providers: [
+    FrameRepository,
+    FrameTargets,
+    DiagonalChecksService,
+    BedGridsService,
+    TestCutsService,
+    FrameRegistrations,
+  ],
   exports: [DiagonalChecksService, BedGridsService, TestCutsService],
 })
 export class FrameModule {}

@@ -27,12 +27,17 @@ export class FrameRepository {
   }
 
   async findDiagonalCheck(workshopId: string, id: string): Promise<DiagonalCheckRow | null> {
-    const [row] = await this.db.select().from(diagonalChecks).where(and(eq(diagonalChecks.workshopId, workshopId), eq(diagonalChecks.id, id)));
+    const [row] = await this.db
+      .select()
+      .from(diagonalChecks)
+      .where(and(eq(diagonalChecks.workshopId, workshopId), eq(diagonalChecks.id, id)));
     return row ?? null;
   }
 
   async deleteDiagonalCheck(workshopId: string, id: string): Promise<void> {
-    await this.db.delete(diagonalChecks).where(and(eq(diagonalChecks.workshopId, workshopId), eq(diagonalChecks.id, id)));
+    await this.db
+      .delete(diagonalChecks)
+      .where(and(eq(diagonalChecks.workshopId, workshopId), eq(diagonalChecks.id, id)));
   }
 
   async insertBedGrid(values: typeof bedGrids.$inferInsert): Promise<BedGridRow> {
@@ -50,7 +55,10 @@ export class FrameRepository {
   }
 
   async findBedGrid(workshopId: string, id: string): Promise<BedGridRow | null> {
-    const [row] = await this.db.select().from(bedGrids).where(and(eq(bedGrids.workshopId, workshopId), eq(bedGrids.id, id)));
+    const [row] = await this.db
+      .select()
+      .from(bedGrids)
+      .where(and(eq(bedGrids.workshopId, workshopId), eq(bedGrids.id, id)));
     return row ?? null;
   }
 
@@ -73,7 +81,10 @@ export class FrameRepository {
   }
 
   async findTestCut(workshopId: string, id: string): Promise<TestCutRow | null> {
-    const [row] = await this.db.select().from(testCuts).where(and(eq(testCuts.workshopId, workshopId), eq(testCuts.id, id)));
+    const [row] = await this.db
+      .select()
+      .from(testCuts)
+      .where(and(eq(testCuts.workshopId, workshopId), eq(testCuts.id, id)));
     return row ?? null;
   }
 

@@ -11,7 +11,12 @@ import { PLASMA_DEFAULTS, ROUTER_DEFAULTS } from '../target-sets/default-target-
 function mmPerMetreFor(side: number, diagonalDifference: number): number {
   // A square skewed by δ: diagonals hypot(a + δ, a) and hypot(a − δ, a) differ by about √2·δ.
   const skew = diagonalDifference / Math.SQRT2;
-  const r = evaluateSquareness({ sideXMm: side, sideYMm: Math.hypot(side, skew), diagonal1Mm: Math.hypot(side + skew, side), diagonal2Mm: Math.hypot(side - skew, side) });
+  const r = evaluateSquareness({
+    sideXMm: side,
+    sideYMm: Math.hypot(side, skew),
+    diagonal1Mm: Math.hypot(side + skew, side),
+    diagonal2Mm: Math.hypot(side - skew, side),
+  });
   expect(r.diagonalDifferenceMm).toBeCloseTo(diagonalDifference, 3);
   return r.mmPerMetre;
 }

@@ -1,4 +1,9 @@
-import { evaluateTestCut, DEFAULT_OVALITY_TOLERANCE_MM, type OvalityCause, type TestCutResult as EngineTestCut } from '../engine/test-cut.js';
+import {
+  evaluateTestCut,
+  DEFAULT_OVALITY_TOLERANCE_MM,
+  type OvalityCause,
+  type TestCutResult as EngineTestCut,
+} from '../engine/test-cut.js';
 import type { TestCutSizesMm } from '../database/schema/frame.js';
 import { iso9013Class2, ISO9013_REFERENCE, ISO9013_THICKNESS_BANDS_MM } from '../engine/iso9013.js';
 
@@ -12,7 +17,9 @@ import { iso9013Class2, ISO9013_REFERENCE, ISO9013_THICKNESS_BANDS_MM } from '..
  * - routers and other machines ('target'): the target as it stands for every size (common
  *   practice: routers are judged in tenths of a millimetre).
  */
-export type PartTolerancePolicy = { basis: 'iso9013-class-2'; targetMm: number; plateThicknessMm: number | null } | { basis: 'target'; targetMm: number };
+export type PartTolerancePolicy =
+  | { basis: 'iso9013-class-2'; targetMm: number; plateThicknessMm: number | null }
+  | { basis: 'target'; targetMm: number };
 
 /** The thickness assumed when none was recorded: the top of the band the target is stated for. */
 export const ASSUMED_THICKNESS_MM = ISO9013_THICKNESS_BANDS_MM[ISO9013_REFERENCE.thicknessBand][1];
@@ -29,11 +36,20 @@ export interface PartTolerance {
 
 export function partToleranceFor(nominalMm: number, policy: PartTolerancePolicy): PartTolerance {
   if (policy.basis === 'target') {
-    return { toleranceMm: policy.targetMm, basis: `target ±${policy.targetMm} mm for every size`, sizeBandMm: null, thicknessBandMm: null, outsideBand: null };
+    return {
+      toleranceMm: policy.targetMm,
+      basis: `target ±${policy.targetMm} mm for every size`,
+      sizeBandMm: null,
+      thicknessBandMm: null,
+      outsideBand: null,
+    };
   }
   const band = iso9013Class2(nominalMm, policy.plateThicknessMm ?? ASSUMED_THICKNESS_MM);
   const toleranceMm = (band.toleranceMm * policy.targetMm) / ISO9013_REFERENCE.toleranceMm;
-  const scaled = policy.targetMm === ISO9013_REFERENCE.toleranceMm ? '' : ` × ${policy.targetMm}/${ISO9013_REFERENCE.toleranceMm} (the target)`;
+  const scaled =
+    policy.targetMm === ISO9013_REFERENCE.toleranceMm
+      ? ''
+      : ` × ${policy.targetMm}/${ISO9013_REFERENCE.toleranceMm} (the target)`;
   return {
     toleranceMm,
     basis: `ISO 9013 class 2, ${band.sizeBandMm[0]}–${band.sizeBandMm[1]} mm parts in ${band.thicknessBandMm[0]}–${band.thicknessBandMm[1]} mm plate: ±${band.toleranceMm} mm${scaled}`,
@@ -75,7 +91,13 @@ export interface TestCutResult {
   x: AxisReading;
   y: AxisReading;
   outOfSquareArcsec: number;
-  squareness: { outOfSquareDeg: number; mmPerMetre: number; longDiagonal: 1 | 2; diagonalDifferenceMm: number; warnings: string[] };
+  squareness: {
+    outOfSquareDeg: number;
+    mmPerMetre: number;
+    longDiagonal: 1 | 2;
+    diagonalDifferenceMm: number;
+    warnings: string[];
+  };
   /** |circleX − circleY| after kerf, mm. */
   ovality: number;
   ovalityPointsTo: OvalityCause;
@@ -180,7 +202,13 @@ export function testCutResult(s: TestCutSizesMm, policy: PartTolerancePolicy): T
     x: axis(s.nominal.xMm, s.measured.xMm, m.xMm, e.x),
     y: axis(s.nominal.yMm, s.measured.yMm, m.yMm, e.y),
     outOfSquareArcsec: sq.outOfSquareArcsec,
-    squareness: { outOfSquareDeg: sq.outOfSquareDeg, mmPerMetre: sq.mmPerMetre, longDiagonal: sq.longDiagonal, diagonalDifferenceMm: sq.diagonalDifferenceMm, warnings: sq.warnings },
+    squareness: {
+      outOfSquareDeg: sq.outOfSquareDeg,
+      mmPerMetre: sq.mmPerMetre,
+      longDiagonal: sq.longDiagonal,
+      diagonalDifferenceMm: sq.diagonalDifferenceMm,
+      warnings: sq.warnings,
+    },
     ovality: Math.abs(e.ovality!.ovalityMm),
     ovalityPointsTo: e.ovality!.pointsTo,
     ovalityExplanation: explainOvality(e),

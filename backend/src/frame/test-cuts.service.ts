@@ -21,8 +21,14 @@ const TEST_CUT_SHAPE = ['squareness.mmPerMetre', 'parts[]', 'parts[].deviationMm
 const MAX_KERF_MM = 25;
 
 /** Plasma tables are judged by ISO 9013's bands; routers and other machines by the target as it stands. */
-function policyFor(machine: Pick<MachineRef, 'kind'>, targetMm: number, plateThicknessMm: number | null): PartTolerancePolicy {
-  return machine.kind === 'plasma' ? { basis: 'iso9013-class-2', targetMm, plateThicknessMm } : { basis: 'target', targetMm };
+function policyFor(
+  machine: Pick<MachineRef, 'kind'>,
+  targetMm: number,
+  plateThicknessMm: number | null,
+): PartTolerancePolicy {
+  return machine.kind === 'plasma'
+    ? { basis: 'iso9013-class-2', targetMm, plateThicknessMm }
+    : { basis: 'target', targetMm };
 }
 
 export const TEST_CUT = 'test-cut';
@@ -45,7 +51,8 @@ export class TestCutsService {
     const machine = await this.machines.getRef(actor, machineId);
     const unit = dto.lengthUnit ?? 'mm';
     const mm = (v: number) => toMm(v, unit);
-    if (dto.measured.kerf != null && mm(dto.measured.kerf) > MAX_KERF_MM) throw new BadRequestException([`measured.kerf must be at most ${MAX_KERF_MM} mm (${show(MAX_KERF_MM, unit)})`]);
+    if (dto.measured.kerf != null && mm(dto.measured.kerf) > MAX_KERF_MM)
+      throw new BadRequestException([`measured.kerf must be at most ${MAX_KERF_MM} mm (${show(MAX_KERF_MM, unit)})`]);
     const plateThicknessMm = dto.plateThickness == null ? null : mm(dto.plateThickness);
     const sizes: TestCutSizesMm = {
       nominal: { xMm: mm(dto.nominal.x), yMm: mm(dto.nominal.y), circleMm: mm(dto.nominal.circle) },
@@ -62,8 +69,15 @@ export class TestCutsService {
       stepsPerMm: { x: dto.stepsPerMm?.x ?? null, y: dto.stepsPerMm?.y ?? null },
     };
     const m = afterKerf(sizes);
-    const impossible = impossibleDiagonals({ sideXMm: m.xMm, sideYMm: m.yMm, diagonal1Mm: m.diagonal1Mm, diagonal2Mm: m.diagonal2Mm, gantrySpanMm: null });
-    if (impossible.length) throw new BadRequestException(impossible.map((msg) => `measured.${msg.replace(/side([XY])/g, 'measured.$1')}`));
+    const impossible = impossibleDiagonals({
+      sideXMm: m.xMm,
+      sideYMm: m.yMm,
+      diagonal1Mm: m.diagonal1Mm,
+      diagonal2Mm: m.diagonal2Mm,
+      gantrySpanMm: null,
+    });
+    if (impossible.length)
+      throw new BadRequestException(impossible.map((msg) => `measured.${msg.replace(/side([XY])/g, 'measured.$1')}`));
     const targets = await this.targetsOf(machine);
     // Evaluated before saving so input the engine refuses is never stored.
     testCutResult(sizes, policyFor(machine, targets.part.base, plateThicknessMm));
@@ -94,13 +108,22 @@ export class TestCutsService {
     if (!row || row.machineId !== machine.id) throw new NotFoundException('No such test cut on this machine');
     await this.records.assertEditable(TEST_CUT, row.id, 'This test cut');
     await this.repo.deleteTestCut(actor.workshopId, row.id);
-    await this.records.audit(actor, { machineId: machine.id, recordType: TEST_CUT, recordId: row.id, action: 'deleted', summary: `Test cut of ${row.recordedAt.toISOString().slice(0, 10)} by ${row.recordedByName} deleted` });
+    await this.records.audit(actor, {
+      machineId: machine.id,
+      recordType: TEST_CUT,
+      recordId: row.id,
+      action: 'deleted',
+      summary: `Test cut of ${row.recordedAt.toISOString().slice(0, 10)} by ${row.recordedByName} deleted`,
+    });
   }
 
   async list(actor: SessionUser, machineId: string): Promise<TestCutResponse[]> {
     const machine = await this.machines.getRef(actor, machineId);
     const rows = await this.repo.listTestCuts(actor.workshopId, machine.id);
-    const locked = await this.records.lockedIds(TEST_CUT, rows.map((r) => r.id));
+    const locked = await this.records.lockedIds(
+      TEST_CUT,
+      rows.map((r) => r.id),
+    );
     const targets = await this.targetsOf(machine);
     return rows.map((r) => this.respond(r, machine, targets, locked.has(r.id)));
   }
@@ -124,7 +147,13 @@ export class TestCutsService {
     const r = this.respond(row, machine, targets, false);
     if (!r.result) {
       // A latest cut that cannot be read blocks like a failed one and says why.
-      return { ...base, subject: `${base.subject} (latest test cut unreadable)`, status: 'outside-target', recordId: row.id, recordedAt: r.recordedAt };
+      return {
+        ...base,
+        subject: `${base.subject} (latest test cut unreadable)`,
+        status: 'outside-target',
+        recordId: row.id,
+        recordedAt: r.recordedAt,
+      };
     }
     const u = row.lengthUnit;
     const worst = r.result.parts.reduce((w, p) => (Math.abs(p.deviationMm) > Math.abs(w.deviationMm) ? p : w));
@@ -147,22 +176,42 @@ export class TestCutsService {
 
   async resolve(workshopId: string, id: string): Promise<SubjectRef | null> {
     const row = await this.repo.findTestCut(workshopId, id);
-    return row ? { machineId: row.machineId, recordType: TEST_CUT, recordId: row.id, label: `Test cut of ${row.recordedAt.toISOString().slice(0, 10)}` } : null;
+    return row
+      ? {
+          machineId: row.machineId,
+          recordType: TEST_CUT,
+          recordId: row.id,
+          label: `Test cut of ${row.recordedAt.toISOString().slice(0, 10)}`,
+        }
+      : null;
   }
 
   private async targetsOf(machine: MachineRef): Promise<TestCutTargets> {
-    return { part: await this.targets.of(machine, 'partTolerance'), squareness: await this.targets.of(machine, 'squareness') };
+    return {
+      part: await this.targets.of(machine, 'partTolerance'),
+      squareness: await this.targets.of(machine, 'squareness'),
+    };
   }
 
   /** Within target only when every part size is within ± the part tolerance and the cut is square enough. */
-  private respond(row: TestCutRow, machine: Pick<MachineRef, 'kind'>, targets: TestCutTargets, locked: boolean): TestCutResponse {
+  private respond(
+    row: TestCutRow,
+    machine: Pick<MachineRef, 'kind'>,
+    targets: TestCutTargets,
+    locked: boolean,
+  ): TestCutResponse {
     const policy = policyFor(machine, targets.part.base, row.plateThicknessMm);
     const judgedBy = { part: targets.part.target, squareness: targets.squareness.target };
     const result = readableComputation(() => testCutResult(row.sizes, policy), TEST_CUT_SHAPE);
     if (!result) return toTestCutResponse(row, null, 'outside-target', judgedBy, locked, []);
     const within = result.parts.every((p) => p.within) && result.squareness.mmPerMetre <= targets.squareness.base;
     const status: FrameStatus = within ? 'within-target' : 'outside-target';
-    const warnings = testCutWarnings(result, { policy, targetSource: targets.part.target.source, resolutionMm: row.resolutionMm, lengthUnit: row.lengthUnit });
+    const warnings = testCutWarnings(result, {
+      policy,
+      targetSource: targets.part.target.source,
+      resolutionMm: row.resolutionMm,
+      lengthUnit: row.lengthUnit,
+    });
     return toTestCutResponse(row, result, status, judgedBy, locked, warnings);
   }
 }
@@ -184,7 +233,13 @@ export function partTableSeries(r: TestCutResult, u: TestCutRow['lengthUnit']): 
     y: { label: 'Deviation from nominal', unit: u },
     lines: r.parts.flatMap((p) => [
       { label: p.label, points: [[at(p.nominalMm), at(p.deviationMm)]] as [number, number][] },
-      { label: `±${show(p.toleranceMm, u)}: ${p.toleranceBasis}`, points: [[at(p.nominalMm), -at(p.toleranceMm)], [at(p.nominalMm), at(p.toleranceMm)]] as [number, number][] },
+      {
+        label: `±${show(p.toleranceMm, u)}: ${p.toleranceBasis}`,
+        points: [
+          [at(p.nominalMm), -at(p.toleranceMm)],
+          [at(p.nominalMm), at(p.toleranceMm)],
+        ] as [number, number][],
+      },
     ]),
   };
 }

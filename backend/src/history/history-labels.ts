@@ -11,7 +11,12 @@ const TABLE_LABELS: Record<string, string> = {
   safety_answers: 'Safety-walk answer',
   record_locks: 'Approval lock',
   password_links: 'Password link',
-  ...Object.fromEntries(RECORD_TYPE_NAMES.flatMap((k) => { const spec: { table?: string; label: string } = RECORD_TYPES[k]; return spec.table ? [[spec.table, spec.label]] : []; })),
+  ...Object.fromEntries(
+    RECORD_TYPE_NAMES.flatMap((k) => {
+      const spec: { table?: string; label: string } = RECORD_TYPES[k];
+      return spec.table ? [[spec.table, spec.label]] : [];
+    }),
+  ),
 };
 
 export const tableLabel = (table: string): string => TABLE_LABELS[table] ?? table.replace(/_/g, ' ');
@@ -20,7 +25,16 @@ export const tableLabel = (table: string): string => TABLE_LABELS[table] ?? tabl
  * Columns not shown to people: internal ids, bookkeeping times and anything that is a secret or
  * a hash (the change log already masks password hashes and link tokens; these keep them out).
  */
-const HIDDEN = new Set(['id', 'created_at', 'updated_at', 'last_activity_at', 'version', 'sessions_valid_from', 'token_hash', 'password_hash']);
+const HIDDEN = new Set([
+  'id',
+  'created_at',
+  'updated_at',
+  'last_activity_at',
+  'version',
+  'sessions_valid_from',
+  'token_hash',
+  'password_hash',
+]);
 
 export function isShownField(column: string): boolean {
   if (HIDDEN.has(column)) return false;

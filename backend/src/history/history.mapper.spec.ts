@@ -10,7 +10,13 @@ describe('history: values as people read them', () => {
       oldValues: null,
       newValues: { id: 'a0c4', bolt_down_id: 'b9e1', hole_index: 2, reading_mm: 0.012, fixed: true },
     });
-    expect(changes).toContainEqual({ record: 'Bolt-down hole', operation: 'created', field: 'hole', before: null, after: 3 });
+    expect(changes).toContainEqual({
+      record: 'Bolt-down hole',
+      operation: 'created',
+      field: 'hole',
+      before: null,
+      after: 3,
+    });
     expect(changes.map((c) => c.field)).not.toContain('hole index');
   });
 

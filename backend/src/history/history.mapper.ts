@@ -78,7 +78,13 @@ export function toFieldChanges(row: ChangeRow): FieldChange[] {
     if (row.operation === 'update' && JSON.stringify(b) === JSON.stringify(a)) continue;
     if (row.operation !== 'update' && (row.operation === 'insert' ? a : b) === null) continue;
     const shown = shownValue(column, b, a);
-    out.push({ record, operation, field: shown.field ?? fieldLabel(column), before: row.operation === 'insert' ? null : shown.before, after: row.operation === 'delete' ? null : shown.after });
+    out.push({
+      record,
+      operation,
+      field: shown.field ?? fieldLabel(column),
+      before: row.operation === 'insert' ? null : shown.before,
+      after: row.operation === 'delete' ? null : shown.after,
+    });
   }
   return out;
 }
@@ -87,7 +93,10 @@ export function toFieldChanges(row: ChangeRow): FieldChange[] {
  * Shares a transaction's row changes out among its summaries: a row goes to the summary about
  * that record, the rest to the first summary the command wrote, so nothing shows twice.
  */
-export function assignChanges(txEntries: { id: string; txid: number; recordId: string | null }[], changes: ChangeRow[]): Map<string, FieldChange[]> {
+export function assignChanges(
+  txEntries: { id: string; txid: number; recordId: string | null }[],
+  changes: ChangeRow[],
+): Map<string, FieldChange[]> {
   const byEntry = new Map<string, FieldChange[]>();
   for (const change of changes) {
     const ofTx = txEntries.filter((e) => e.txid === change.txid);
@@ -130,7 +139,11 @@ export function decodeCursor(cursor: string): { at: string; id: string } | null 
  * Values stored counted from zero (a hole's index) are shown counted from one, as the summary and
  * every screen number them: "hole 3" is the third hole everywhere.
  */
-function shownValue(column: string, before: unknown, after: unknown): { field?: string; before: unknown; after: unknown } {
+function shownValue(
+  column: string,
+  before: unknown,
+  after: unknown,
+): { field?: string; before: unknown; after: unknown } {
   if (column === 'hole_index') {
     const plusOne = (v: unknown) => (typeof v === 'number' ? v + 1 : v);
     return { field: 'hole', before: plusOne(before), after: plusOne(after) };

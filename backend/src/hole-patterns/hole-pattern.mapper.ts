@@ -1,5 +1,11 @@
 import { fromMm } from '../engine/units.js';
-import type { PatternEntryKind, PatternReference, PatternUnit, StoredHole, StoredPatternEntry } from '../database/schema/hole-patterns.js';
+import type {
+  PatternEntryKind,
+  PatternReference,
+  PatternUnit,
+  StoredHole,
+  StoredPatternEntry,
+} from '../database/schema/hole-patterns.js';
 import type { HolePatternRow } from './hole-patterns.repository.js';
 
 export interface HolePatternResponse {

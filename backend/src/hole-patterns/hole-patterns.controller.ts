@@ -54,25 +54,43 @@ export class HolePatternsController {
 
   @Get('hole-patterns/:id/template.pdf')
   @ApiProduces('application/pdf')
-  async patternPdf(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string, @Query() q: TemplateQueryDto, @Res({ passthrough: true }) reply: FastifyReply) {
+  async patternPdf(
+    @CurrentUser() user: SessionUser,
+    @Param('id', ParseUUIDPipe) id: string,
+    @Query() q: TemplateQueryDto,
+    @Res({ passthrough: true }) reply: FastifyReply,
+  ) {
     return send(reply, await this.templates.forPattern(user, id, 'pdf', q.paper));
   }
 
   @Get('hole-patterns/:id/template.svg')
   @ApiProduces('image/svg+xml')
-  async patternSvg(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string, @Res({ passthrough: true }) reply: FastifyReply) {
+  async patternSvg(
+    @CurrentUser() user: SessionUser,
+    @Param('id', ParseUUIDPipe) id: string,
+    @Res({ passthrough: true }) reply: FastifyReply,
+  ) {
     return send(reply, await this.templates.forPattern(user, id, 'svg'));
   }
 
   @Get('rails/:id/template.pdf')
   @ApiProduces('application/pdf')
-  async railPdf(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string, @Query() q: TemplateQueryDto, @Res({ passthrough: true }) reply: FastifyReply) {
+  async railPdf(
+    @CurrentUser() user: SessionUser,
+    @Param('id', ParseUUIDPipe) id: string,
+    @Query() q: TemplateQueryDto,
+    @Res({ passthrough: true }) reply: FastifyReply,
+  ) {
     return send(reply, await this.templates.forRail(user, id, 'pdf', q.paper));
   }
 
   @Get('rails/:id/template.svg')
   @ApiProduces('image/svg+xml')
-  async railSvg(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string, @Res({ passthrough: true }) reply: FastifyReply) {
+  async railSvg(
+    @CurrentUser() user: SessionUser,
+    @Param('id', ParseUUIDPipe) id: string,
+    @Res({ passthrough: true }) reply: FastifyReply,
+  ) {
     return send(reply, await this.templates.forRail(user, id, 'svg'));
   }
 }

@@ -4,7 +4,10 @@ import { DRIZZLE, type Database } from '../database/database.tokens.js';
 import { holePatterns } from '../database/schema/index.js';
 
 export type HolePatternRow = typeof holePatterns.$inferSelect;
-export type HolePatternValues = Omit<typeof holePatterns.$inferInsert, 'id' | 'workshopId' | 'machineId' | 'createdAt' | 'updatedAt'>;
+export type HolePatternValues = Omit<
+  typeof holePatterns.$inferInsert,
+  'id' | 'workshopId' | 'machineId' | 'createdAt' | 'updatedAt'
+>;
 
 @Injectable()
 export class HolePatternsRepository {
@@ -19,12 +22,18 @@ export class HolePatternsRepository {
   }
 
   async find(workshopId: string, id: string): Promise<HolePatternRow | null> {
-    const [row] = await this.db.select().from(holePatterns).where(and(eq(holePatterns.workshopId, workshopId), eq(holePatterns.id, id)));
+    const [row] = await this.db
+      .select()
+      .from(holePatterns)
+      .where(and(eq(holePatterns.workshopId, workshopId), eq(holePatterns.id, id)));
     return row ?? null;
   }
 
   async insert(workshopId: string, machineId: string, values: HolePatternValues): Promise<HolePatternRow> {
-    const [row] = await this.db.insert(holePatterns).values({ ...values, workshopId, machineId }).returning();
+    const [row] = await this.db
+      .insert(holePatterns)
+      .values({ ...values, workshopId, machineId })
+      .returning();
     return row;
   }
 

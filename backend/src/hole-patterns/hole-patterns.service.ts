@@ -46,7 +46,13 @@ export class HolePatternsService {
   async create(actor: SessionUser, machineId: string, dto: HolePatternDto): Promise<HolePatternResponse> {
     await this.machines.getRef(actor, machineId);
     const row = await this.repo.insert(actor.workshopId, machineId, valuesOf(dto, resolveOrRefuse(dto)));
-    await this.records.audit(actor, { machineId, recordType: RECORD_TYPE, recordId: row.id, action: 'created', summary: `Hole pattern ${row.name} (${row.holes.length} holes) added` });
+    await this.records.audit(actor, {
+      machineId,
+      recordType: RECORD_TYPE,
+      recordId: row.id,
+      action: 'created',
+      summary: `Hole pattern ${row.name} (${row.holes.length} holes) added`,
+    });
     return toHolePatternResponse(row);
   }
 
@@ -67,7 +73,13 @@ export class HolePatternsService {
   async remove(actor: SessionUser, id: string): Promise<void> {
     const row = await this.findRow(actor, id);
     await this.repo.delete(actor.workshopId, id);
-    await this.records.audit(actor, { machineId: row.machineId, recordType: RECORD_TYPE, recordId: id, action: 'deleted', summary: `Hole pattern ${row.name} removed` });
+    await this.records.audit(actor, {
+      machineId: row.machineId,
+      recordType: RECORD_TYPE,
+      recordId: id,
+      action: 'deleted',
+      summary: `Hole pattern ${row.name} removed`,
+    });
   }
 }
 
@@ -78,7 +90,16 @@ function resolveOrRefuse(dto: HolePatternDto): ResolvedPattern {
 }
 
 function valuesOf(dto: HolePatternDto, p: ResolvedPattern): HolePatternValues {
-  return { name: dto.name.trim(), reference: dto.reference, lengthUnit: dto.lengthUnit ?? 'mm', widthMm: p.widthMm, heightMm: p.heightMm, entry: p.entry, holes: p.holes, notes: dto.notes?.trim() ?? '' };
+  return {
+    name: dto.name.trim(),
+    reference: dto.reference,
+    lengthUnit: dto.lengthUnit ?? 'mm',
+    widthMm: p.widthMm,
+    heightMm: p.heightMm,
+    entry: p.entry,
+    holes: p.holes,
+    notes: dto.notes?.trim() ?? '',
+  };
 }
 
 function changes(before: HolePatternRow, after: HolePatternRow): Record<string, unknown> {

@@ -16,7 +16,11 @@ export interface TemplateFile {
 }
 
 const mm = (v: number) => `${Number(v.toFixed(2))} mm`;
-const slug = (s: string) => s.replace(/[^\w-]+/g, '-').replace(/^-+|-+$/g, '').toLowerCase() || 'template';
+const slug = (s: string) =>
+  s
+    .replace(/[^\w-]+/g, '-')
+    .replace(/^-+|-+$/g, '')
+    .toLowerCase() || 'template';
 
 /** True-scale drilling templates (PDF tiled over paper, SVG in one piece) of a pattern or a rail. */
 @Injectable()
@@ -27,13 +31,23 @@ export class TemplatesService {
     private readonly machines: MachinesService,
   ) {}
 
-  async forPattern(actor: SessionUser, id: string, format: 'pdf' | 'svg', paper: PaperKey = 'a4'): Promise<TemplateFile> {
+  async forPattern(
+    actor: SessionUser,
+    id: string,
+    format: 'pdf' | 'svg',
+    paper: PaperKey = 'a4',
+  ): Promise<TemplateFile> {
     const row = await this.patterns.findRow(actor, id);
     const machine = await this.machines.getRef(actor, row.machineId);
     const input: TemplateInput = {
       title: row.name,
       machineName: machine.name,
-      details: [`outline ${mm(row.widthMm)} × ${mm(row.heightMm)}`, `${row.holes.length} hole${row.holes.length === 1 ? '' : 's'}`, `reference: ${REFERENCE_LABELS[row.reference]}`, 'x, y from the lower-left corner'],
+      details: [
+        `outline ${mm(row.widthMm)} × ${mm(row.heightMm)}`,
+        `${row.holes.length} hole${row.holes.length === 1 ? '' : 's'}`,
+        `reference: ${REFERENCE_LABELS[row.reference]}`,
+        'x, y from the lower-left corner',
+      ],
       widthMm: row.widthMm,
       heightMm: row.heightMm,
       reference: row.reference,
@@ -43,7 +57,12 @@ export class TemplatesService {
     return render(input, `template-${slug(row.name)}`, format, paper);
   }
 
-  async forRail(actor: SessionUser, railId: string, format: 'pdf' | 'svg', paper: PaperKey = 'a4'): Promise<TemplateFile> {
+  async forRail(
+    actor: SessionUser,
+    railId: string,
+    format: 'pdf' | 'svg',
+    paper: PaperKey = 'a4',
+  ): Promise<TemplateFile> {
     const rail = await this.rails.get(actor, railId);
     const machine = await this.machines.getRef(actor, rail.machineId);
     const p = railPattern({
@@ -75,11 +94,23 @@ export class TemplatesService {
   }
 }
 
-async function render(input: TemplateInput, name: string, format: 'pdf' | 'svg', paper: PaperKey): Promise<TemplateFile> {
-  if (format === 'svg') return { body: renderTemplateSvg(input), filename: `${name}.svg`, contentType: 'image/svg+xml; charset=utf-8' };
+async function render(
+  input: TemplateInput,
+  name: string,
+  format: 'pdf' | 'svg',
+  paper: PaperKey,
+): Promise<TemplateFile> {
+  if (format === 'svg')
+    return { body: renderTemplateSvg(input), filename: `${name}.svg`, contentType: 'image/svg+xml; charset=utf-8' };
   const layout = layoutSheets(input.widthMm, input.heightMm, paper);
   if (layout.sheets.length > MAX_SHEETS) {
-    throw new BadRequestException([`paper: this template would take ${layout.sheets.length} sheets of ${layout.paper.name}; at most ${MAX_SHEETS} are printed — use the SVG for a plotter or a larger sheet`]);
+    throw new BadRequestException([
+      `paper: this template would take ${layout.sheets.length} sheets of ${layout.paper.name}; at most ${MAX_SHEETS} are printed — use the SVG for a plotter or a larger sheet`,
+    ]);
   }
-  return { body: await renderTemplatePdf(input, layout), filename: `${name}-${paper}.pdf`, contentType: 'application/pdf' };
+  return {
+    body: await renderTemplatePdf(input, layout),
+    filename: `${name}-${paper}.pdf`,
+    contentType: 'application/pdf',
+  };
 }

@@ -28,7 +28,14 @@ export interface MachineResponse {
 
 export interface MachineListItem extends MachineResponse {
   /** Numbers of required checks, counted as the readiness board counts (waivers applied); `blocking` names the first check that stops approval. */
-  checks: { total: number; within: number; outside: number; waived: number; notStarted: number; blocking: BlockingCheckRef | null };
+  checks: {
+    total: number;
+    within: number;
+    outside: number;
+    waived: number;
+    notStarted: number;
+    blocking: BlockingCheckRef | null;
+  };
 }
 
 export function toMachineResponse(row: MachineRow, targetSetName: string): MachineResponse {
@@ -49,5 +56,12 @@ export function toMachineResponse(row: MachineRow, targetSetName: string): Machi
 }
 
 export function toListChecks(c: ReadinessCounts): MachineListItem['checks'] {
-  return { total: c.total, within: c.within, outside: c.outside, waived: c.waived, notStarted: c.notStarted, blocking: c.firstBlocking };
+  return {
+    total: c.total,
+    within: c.within,
+    outside: c.outside,
+    waived: c.waived,
+    notStarted: c.notStarted,
+    blocking: c.firstBlocking,
+  };
 }

@@ -25,7 +25,9 @@ export class MachinesRepository {
    */
   list(workshopId: string) {
     if (this.transactions.inTransaction()) return this.listQuery(this.db, eq(machines.workshopId, workshopId));
-    this.preparedList ??= this.listQuery(this.root, eq(machines.workshopId, sql.placeholder('workshopId'))).prepare('machines_list');
+    this.preparedList ??= this.listQuery(this.root, eq(machines.workshopId, sql.placeholder('workshopId'))).prepare(
+      'machines_list',
+    );
     return this.preparedList.execute({ workshopId });
   }
 

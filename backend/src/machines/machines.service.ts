@@ -7,7 +7,13 @@ import { ReadinessSummaryService } from '../records/readiness-summary.service.js
 import { RecordsService } from '../records/records.service.js';
 import { SubjectsRegistry } from '../records/subjects.registry.js';
 import { TargetSetsService } from '../target-sets/target-sets.service.js';
-import { toListChecks, toMachineResponse, type MachineListItem, type MachineResponse, type MachineRow } from './machine.mapper.js';
+import {
+  toListChecks,
+  toMachineResponse,
+  type MachineListItem,
+  type MachineResponse,
+  type MachineRow,
+} from './machine.mapper.js';
 import { MachinesRepository } from './machines.repository.js';
 import type { CreateMachineDto } from './dto/create-machine.dto.js';
 import type { UpdateMachineDto } from './dto/update-machine.dto.js';
@@ -40,7 +46,8 @@ export class MachinesService implements OnModuleInit {
     const rows = await this.repo.list(actor.workshopId);
     const out: MachineListItem[] = [];
     for (const { machine, targetSetName, readiness } of rows) {
-      const counts = readiness?.total == null ? await this.readiness.refresh(machine.workshopId, machine.id) : readiness;
+      const counts =
+        readiness?.total == null ? await this.readiness.refresh(machine.workshopId, machine.id) : readiness;
       out.push({ ...toMachineResponse(machine, targetSetName), checks: toListChecks(counts!) });
     }
     return out;
@@ -53,7 +60,10 @@ export class MachinesService implements OnModuleInit {
   }
 
   /** The machine as other modules need it; another workshop's machine is a 404. */
-  async getRef(actor: SessionUser | { workshopId: string }, id: string): Promise<MachineRef & { name: string; state: MachineState }> {
+  async getRef(
+    actor: SessionUser | { workshopId: string },
+    id: string,
+  ): Promise<MachineRef & { name: string; state: MachineState }> {
     const found = await this.repo.find(actor.workshopId, id);
     if (!found) throw new NotFoundException('No such machine in this workshop');
     return { ...toRef(found.machine), name: found.machine.name, state: found.machine.state };
@@ -87,7 +97,10 @@ export class MachinesService implements OnModuleInit {
     const sets = await this.targetSets.ensureDefaults(actor.workshopId);
     let targetSetId = dto.targetSetId;
     if (targetSetId) await this.targetSets.findRow(actor.workshopId, targetSetId);
-    else targetSetId = (sets.find((s) => s.name.toLowerCase().startsWith(dto.kind === 'router' ? 'router' : 'plasma')) ?? sets[0]).id;
+    else
+      targetSetId = (
+        sets.find((s) => s.name.toLowerCase().startsWith(dto.kind === 'router' ? 'router' : 'plasma')) ?? sets[0]
+      ).id;
     const row = await this.repo.insert({
       workshopId: actor.workshopId,
       name: dto.name.trim(),
@@ -97,7 +110,13 @@ export class MachinesService implements OnModuleInit {
       notes: dto.notes ?? '',
       targetSetId,
     });
-    await this.records.audit(actor, { machineId: row.id, recordType: 'machine', recordId: row.id, action: 'created', summary: `Machine file ${row.name} opened` });
+    await this.records.audit(actor, {
+      machineId: row.id,
+      recordType: 'machine',
+      recordId: row.id,
+      action: 'created',
+      summary: `Machine file ${row.name} opened`,
+    });
     return this.get(actor, row.id);
   }
 
@@ -137,7 +156,14 @@ export class MachinesService implements OnModuleInit {
 }
 
 function toRef(m: MachineRow): MachineRef {
-  return { id: m.id, workshopId: m.workshopId, targetSetId: m.targetSetId, kind: m.kind, workAreaXMm: m.workAreaXMm, workAreaYMm: m.workAreaYMm };
+  return {
+    id: m.id,
+    workshopId: m.workshopId,
+    targetSetId: m.targetSetId,
+    kind: m.kind,
+    workAreaXMm: m.workAreaXMm,
+    workAreaYMm: m.workAreaYMm,
+  };
 }
 
 function diff(before: MachineResponse, after: MachineResponse): Record<string, unknown> {
@@ -152,7 +178,12 @@ function diff(before: MachineResponse, after: MachineResponse): Record<string, u
 function workAreaMm(area: { x: number; y: number }, unit: LengthUnit): { workAreaXMm: number; workAreaYMm: number } {
   const x = toMm(area.x, unit);
   const y = toMm(area.y, unit);
-  const problems = (['x', 'y'] as const).filter((k) => !(({ x, y })[k] >= 1 && ({ x, y })[k] <= 100_000)).map((k) => `workArea.${k} must be between 1 mm and 100 m (${fromMm(1, unit).toPrecision(3)} to ${+fromMm(100_000, unit).toPrecision(6)} ${unit})`);
+  const problems = (['x', 'y'] as const)
+    .filter((k) => !({ x, y }[k] >= 1 && { x, y }[k] <= 100_000))
+    .map(
+      (k) =>
+        `workArea.${k} must be between 1 mm and 100 m (${fromMm(1, unit).toPrecision(3)} to ${+fromMm(100_000, unit).toPrecision(6)} ${unit})`,
+    );
   if (problems.length) throw new BadRequestException(problems);
   return { workAreaXMm: x, workAreaYMm: y };
 }

@@ -85,7 +85,10 @@ export class FakeSmtpServer {
 
   private capture(mail: CapturedMail) {
     if (this.mailDrop) {
-      const file = path.join(this.mailDrop, `${mail.receivedAt.toISOString().replace(/[:.]/g, '-')}-${mail.id.slice(0, 8)}.eml`);
+      const file = path.join(
+        this.mailDrop,
+        `${mail.receivedAt.toISOString().replace(/[:.]/g, '-')}-${mail.id.slice(0, 8)}.eml`,
+      );
       mkdir(this.mailDrop, { recursive: true, mode: 0o700 })
         .then(() => writeFile(file, mail.raw, { mode: 0o600 }))
         .catch(() => undefined);

@@ -11,8 +11,23 @@ describe('mailSettings', () => {
   });
 
   it('uses the named server, port 587 unless told otherwise, with its sign-in', () => {
-    expect(mailSettings({ SMTP_HOST: 'mail.example.com' })).toMatchObject({ mode: 'smtp', host: 'mail.example.com', port: 587, secure: false, user: null });
-    expect(mailSettings({ SMTP_HOST: 'mail.example.com', SMTP_PORT: '465', SMTP_SECURE: 'true', SMTP_USER: 'u', SMTP_PASSWORD: 'p', MAIL_FROM: 'Shop <shop@example.com>' })).toMatchObject({
+    expect(mailSettings({ SMTP_HOST: 'mail.example.com' })).toMatchObject({
+      mode: 'smtp',
+      host: 'mail.example.com',
+      port: 587,
+      secure: false,
+      user: null,
+    });
+    expect(
+      mailSettings({
+        SMTP_HOST: 'mail.example.com',
+        SMTP_PORT: '465',
+        SMTP_SECURE: 'true',
+        SMTP_USER: 'u',
+        SMTP_PASSWORD: 'p',
+        MAIL_FROM: 'Shop <shop@example.com>',
+      }),
+    ).toMatchObject({
       port: 465,
       secure: true,
       user: 'u',
@@ -35,6 +50,8 @@ describe('the outbox without the fake server', () => {
   it('answers 404 with the reason', () => {
     const controller = new OutboxController({ fake: null } as unknown as MailService);
     expect(() => controller.list({ workshopId: 'w' } as SessionUser)).toThrow(NotFoundException);
-    expect(() => controller.list({ workshopId: 'w' } as SessionUser)).toThrow(/only while the local fake mail server is in use/);
+    expect(() => controller.list({ workshopId: 'w' } as SessionUser)).toThrow(
+      /only while the local fake mail server is in use/,
+    );
   });
 });

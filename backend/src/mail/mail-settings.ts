@@ -14,7 +14,8 @@ export function mailSettings(env: NodeJS.ProcessEnv = process.env): MailSettings
   const host = env.SMTP_HOST?.trim() || null;
   const rawPort = env.SMTP_PORT?.trim();
   const port = rawPort ? Number(rawPort) : host ? 587 : 0;
-  if (!Number.isInteger(port) || port < 0 || port > 65535) throw new Error('Configuration: SMTP_PORT must be a whole number from 0 to 65535');
+  if (!Number.isInteger(port) || port < 0 || port > 65535)
+    throw new Error('Configuration: SMTP_PORT must be a whole number from 0 to 65535');
   const mode = host ? 'smtp' : env.NODE_ENV === 'production' ? 'off' : 'fake';
   return {
     mode,

@@ -40,10 +40,14 @@ export class MailService implements OnModuleInit, OnModuleDestroy {
     }
     if (s.mode === 'fake') {
       this.fake = new FakeSmtpServer();
-      if (process.env.RAILWRIGHT_DATA && !process.env.JEST_WORKER_ID) this.fake.mailDrop = path.join(path.resolve(process.env.RAILWRIGHT_DATA), 'mail');
+      if (process.env.RAILWRIGHT_DATA && !process.env.JEST_WORKER_ID)
+        this.fake.mailDrop = path.join(path.resolve(process.env.RAILWRIGHT_DATA), 'mail');
       const port = await this.fake.start(s.port);
       this.transport = nodemailer.createTransport({ host: '127.0.0.1', port, secure: false, ignoreTLS: true });
-      if (!process.env.JEST_WORKER_ID) this.logger.log(`Mail goes to the local fake SMTP server on 127.0.0.1:${port} (read it on the outbox page; whole messages, password links included, in ${this.fake.mailDrop ?? 'memory only'})`);
+      if (!process.env.JEST_WORKER_ID)
+        this.logger.log(
+          `Mail goes to the local fake SMTP server on 127.0.0.1:${port} (read it on the outbox page; whole messages, password links included, in ${this.fake.mailDrop ?? 'memory only'})`,
+        );
       return;
     }
     this.transport = nodemailer.createTransport({
@@ -74,7 +78,9 @@ export class MailService implements OnModuleInit, OnModuleDestroy {
   }
 
   private track(work: Promise<unknown>, what: string): void {
-    const tracked = work.catch((err) => this.logger.error(`${what} failed: ${(err as Error).message}`)).finally(() => this.pending.delete(tracked));
+    const tracked = work
+      .catch((err) => this.logger.error(`${what} failed: ${(err as Error).message}`))
+      .finally(() => this.pending.delete(tracked));
     this.pending.add(tracked);
   }
 

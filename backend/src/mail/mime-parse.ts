@@ -19,7 +19,9 @@ export interface ParsedMail {
 }
 
 const addresses = (field: AddressObject | AddressObject[] | undefined): string[] =>
-  (Array.isArray(field) ? field : field ? [field] : []).flatMap((a) => a.value.map((v) => (v.name ? `${v.name} <${v.address ?? ''}>` : (v.address ?? ''))));
+  (Array.isArray(field) ? field : field ? [field] : []).flatMap((a) =>
+    a.value.map((v) => (v.name ? `${v.name} <${v.address ?? ''}>` : (v.address ?? ''))),
+  );
 
 const headerText = (value: HeaderValue): string => {
   if (typeof value === 'string') return value;
@@ -40,6 +42,10 @@ export async function parseMail(raw: Buffer | string): Promise<ParsedMail> {
     to: addresses(mail.to),
     text: mail.text ?? '',
     html: typeof mail.html === 'string' ? mail.html : '',
-    attachments: mail.attachments.map((a) => ({ filename: a.filename ?? 'attachment', contentType: a.contentType, content: a.content })),
+    attachments: mail.attachments.map((a) => ({
+      filename: a.filename ?? 'attachment',
+      contentType: a.contentType,
+      content: a.content,
+    })),
   };
 }

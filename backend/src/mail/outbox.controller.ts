@@ -36,7 +36,10 @@ export class OutboxController {
 
   private mine(user: SessionUser) {
     const fake = this.mail.fake;
-    if (!fake) throw new NotFoundException('The outbox exists only while the local fake mail server is in use (SMTP_HOST not set)');
+    if (!fake)
+      throw new NotFoundException(
+        'The outbox exists only while the local fake mail server is in use (SMTP_HOST not set)',
+      );
     const header = WORKSHOP_HEADER.toLowerCase();
     return fake.messages.filter((m) => m.headers[header] === user.workshopId);
   }

@@ -28,8 +28,15 @@ export function toOutboxMessage(m: CapturedMail): OutboxMessage {
     from: m.from,
     to: m.envelopeTo,
     subject: m.subject,
-    text: linkHidden ? m.text.replace(PASSWORD_LINK, `[link hidden: only ${m.envelopeTo.join(', ')} can open it]`) : m.text,
+    text: linkHidden
+      ? m.text.replace(PASSWORD_LINK, `[link hidden: only ${m.envelopeTo.join(', ')} can open it]`)
+      : m.text,
     linkHidden,
-    attachments: m.attachments.map((a, index) => ({ index, filename: a.filename, contentType: a.contentType, sizeBytes: a.content.length })),
+    attachments: m.attachments.map((a, index) => ({
+      index,
+      filename: a.filename,
+      contentType: a.contentType,
+      sizeBytes: a.content.length,
+    })),
   };
 }

@@ -2,7 +2,14 @@ import { ROLE_WORDS } from './role-words.js';
 import type { Role } from '../database/schema/users.js';
 
 /** The sign-in mail for a new member: who invited them, their role, and the link. */
-export function invitationMail(input: { name: string; role: Role; workshopName: string; invitedBy: string; url: string; hours: number }) {
+export function invitationMail(input: {
+  name: string;
+  role: Role;
+  workshopName: string;
+  invitedBy: string;
+  url: string;
+  hours: number;
+}) {
   const subject = `Your Railwright sign-in for ${input.workshopName}`;
   const text = [
     `Hello ${input.name},`,

@@ -38,7 +38,10 @@ export class PeopleRepository {
     return !!row;
   }
 
-  async insert(workshopId: string, values: { name: string; email: string; role: Role; passwordHash: string; passwordPending: boolean }) {
+  async insert(
+    workshopId: string,
+    values: { name: string; email: string; role: Role; passwordHash: string; passwordPending: boolean },
+  ) {
     const [row] = await this.db
       .insert(users)
       .values({ workshopId, ...values })
@@ -63,7 +66,9 @@ export class PeopleRepository {
     const [row] = await this.db
       .select({ n: sql<number>`count(*)::int` })
       .from(users)
-      .where(and(eq(users.workshopId, workshopId), eq(users.role, 'admin'), eq(users.active, true), ne(users.id, exceptId)));
+      .where(
+        and(eq(users.workshopId, workshopId), eq(users.role, 'admin'), eq(users.active, true), ne(users.id, exceptId)),
+      );
     return row.n;
   }
 }

@@ -43,7 +43,12 @@ export class PeopleService {
       passwordHash: await hashPassword(temporaryPassword()),
       passwordPending: true,
     });
-    await this.records.audit(actor, { recordType: 'person', recordId: row.id, action: 'created', summary: `${actor.name} added ${row.name} as ${ROLE_NAMES[row.role]}` });
+    await this.records.audit(actor, {
+      recordType: 'person',
+      recordId: row.id,
+      action: 'created',
+      summary: `${actor.name} added ${row.name} as ${ROLE_NAMES[row.role]}`,
+    });
     return { person: toPersonResponse(row), ...(await this.invite(actor, row)) };
   }
 
@@ -52,7 +57,9 @@ export class PeopleService {
     const row = await this.found(actor, id);
     if (!row.active) throw new ConflictException('This member is deactivated: activate them first');
     if (!row.passwordPending) {
-      throw new ConflictException(`${row.name} has already chosen a password. Send them a password reset instead: the link goes to their own e-mail.`);
+      throw new ConflictException(
+        `${row.name} has already chosen a password. Send them a password reset instead: the link goes to their own e-mail.`,
+      );
     }
     return this.invite(actor, row);
   }
@@ -73,14 +80,21 @@ export class PeopleService {
       action: 'password-reset',
       summary: `${actor.name} reset the password of ${row.name}: their sessions were ended and a link to choose a new one was e-mailed to them`,
     });
-    const { subject, text } = passwordResetMail({ name: row.name, workshopName: actor.workshopName, resetBy: actor.name, url: link.url, hours: LINK_HOURS });
+    const { subject, text } = passwordResetMail({
+      name: row.name,
+      workshopName: actor.workshopName,
+      resetBy: actor.name,
+      url: link.url,
+      hours: LINK_HOURS,
+    });
     const sent = await this.mail.send({ workshopId: actor.workshopId, to: [row.email], subject, text });
     return { resetSent: sent, resetExpiresAt: link.expiresAt.toISOString() };
   }
 
   async update(actor: SessionUser, id: string, dto: UpdatePersonDto): Promise<PersonResponse> {
     const current = await this.found(actor, id);
-    const losesAdmin = current.role === 'admin' && current.active && (dto.active === false || (dto.role && dto.role !== 'admin'));
+    const losesAdmin =
+      current.role === 'admin' && current.active && (dto.active === false || (dto.role && dto.role !== 'admin'));
     if (losesAdmin && (await this.repo.countOtherActiveAdmins(actor.workshopId, id)) === 0) {
       throw new ConflictException('The workshop needs at least one active admin: make someone else admin first');
     }
@@ -88,11 +102,17 @@ export class PeopleService {
     // Deactivation signs them out everywhere; reactivation starts from no session at all.
     if (dto.active !== undefined && dto.active !== current.active) await this.auth.endSessions(id);
     const said: string[] = [];
-    if (dto.role && dto.role !== current.role) said.push(`changed the role of ${row.name} from ${ROLE_NAMES[current.role]} to ${ROLE_NAMES[row.role]}`);
+    if (dto.role && dto.role !== current.role)
+      said.push(`changed the role of ${row.name} from ${ROLE_NAMES[current.role]} to ${ROLE_NAMES[row.role]}`);
     if (dto.active === false && current.active) said.push(`deactivated ${row.name} (signed out everywhere)`);
     if (dto.active === true && !current.active) said.push(`reactivated ${row.name}`);
     if (said.length) {
-      await this.records.audit(actor, { recordType: 'person', recordId: id, action: 'updated', summary: `${actor.name} ${said.join(' and ')}` });
+      await this.records.audit(actor, {
+        recordType: 'person',
+        recordId: id,
+        action: 'updated',
+        summary: `${actor.name} ${said.join(' and ')}`,
+      });
     }
     return toPersonResponse(row);
   }
@@ -104,11 +124,26 @@ export class PeopleService {
   }
 
   /** Mails the invitation; the link goes to the person only and never back to the admin. */
-  private async invite(actor: SessionUser, person: { id: string; name: string; email: string; role: PersonResponse['role'] }) {
+  private async invite(
+    actor: SessionUser,
+    person: { id: string; name: string; email: string; role: PersonResponse['role'] },
+  ) {
     const link = await this.links.create(person.id, 'invitation');
-    const { subject, text } = invitationMail({ name: person.name, role: person.role, workshopName: actor.workshopName, invitedBy: actor.name, url: link.url, hours: LINK_HOURS });
+    const { subject, text } = invitationMail({
+      name: person.name,
+      role: person.role,
+      workshopName: actor.workshopName,
+      invitedBy: actor.name,
+      url: link.url,
+      hours: LINK_HOURS,
+    });
     const sent = await this.mail.send({ workshopId: actor.workshopId, to: [person.email], subject, text });
-    await this.records.audit(actor, { recordType: 'person', recordId: person.id, action: 'invited', summary: `${actor.name} e-mailed ${person.name} an invitation to choose a password` });
+    await this.records.audit(actor, {
+      recordType: 'person',
+      recordId: person.id,
+      action: 'invited',
+      summary: `${actor.name} e-mailed ${person.name} an invitation to choose a password`,
+    });
     return { invitationSent: sent, invitationExpiresAt: link.expiresAt.toISOString() };
   }
 }

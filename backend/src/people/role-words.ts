@@ -9,4 +9,10 @@ export const ROLE_WORDS: Record<Role, string> = {
 };
 
 /** The role's short name, for the history. */
-export const ROLE_NAMES: Record<Role, string> = { admin: 'admin', owner: 'owner', technician: 'technician', builder: 'builder', viewer: 'viewer' };
+export const ROLE_NAMES: Record<Role, string> = {
+  admin: 'admin',
+  owner: 'owner',
+  technician: 'technician',
+  builder: 'builder',
+  viewer: 'viewer',
+};

@@ -15,7 +15,8 @@ export const BOLT_TORQUES: readonly BoltTorque[] = [
   { boltSize: 'M8', torqueNm: 30 },
 ];
 
-export const BOLT_TORQUE_SOURCE = "A rail maker's table for rail bolts into steel; follow the maker's instructions for your rails.";
+export const BOLT_TORQUE_SOURCE =
+  "A rail maker's table for rail bolts into steel; follow the maker's instructions for your rails.";
 
 /** Typical bolt for a rail profile size (mm); from memory, so it is only a starting suggestion. */
 export const TYPICAL_BOLT_BY_PROFILE: Readonly<Record<number, string>> = { 15: 'M4', 20: 'M5', 25: 'M6' };
@@ -34,7 +35,10 @@ export function boltTorqueTable() {
   return {
     bolts: BOLT_TORQUES.map((b) => ({ ...b })),
     source: BOLT_TORQUE_SOURCE,
-    typicalByProfile: Object.entries(TYPICAL_BOLT_BY_PROFILE).map(([size, boltSize]) => ({ profileSize: Number(size), boltSize })),
+    typicalByProfile: Object.entries(TYPICAL_BOLT_BY_PROFILE).map(([size, boltSize]) => ({
+      profileSize: Number(size),
+      boltSize,
+    })),
     typicalSource: TYPICAL_BOLT_SOURCE,
   };
 }

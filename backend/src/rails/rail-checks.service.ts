@@ -5,7 +5,14 @@ import { fromMm, isLengthUnit, toMm } from '../engine/units.js';
 import type { ResultWarning } from '../engine/warnings.js';
 import { finiteList } from '../common/stored-result.js';
 import { HEIGHT_SOURCE, judgePair } from './rail-pair.js';
-import { judgedFigure, referenceOf, REFERENCE_WORDS, showIn, targetLengthUnit, warningsForSweep } from './sweep-judgement.js';
+import {
+  judgedFigure,
+  referenceOf,
+  REFERENCE_WORDS,
+  showIn,
+  targetLengthUnit,
+  warningsForSweep,
+} from './sweep-judgement.js';
 import type { CheckSeries, MachineRef, ReadinessCheck, ReadinessContext } from '../records/readiness.js';
 import { ReadinessRegistry } from '../records/readiness.registry.js';
 import { SubjectsRegistry } from '../records/subjects.registry.js';
@@ -17,7 +24,6 @@ import { RailsRepository, type DatumSweep, type LatestSweep, type RailRow, type 
 import { RailsService } from './rails.service.js';
 import { inLengthUnit, storedSweepResult, summaryReadable } from './rail.mapper.js';
 import { UNREADABLE_INPUT } from '../common/stored-result.js';
-
 
 /** In the target's own length unit, so a result reads beside its target. */
 function inUnit(mm: number, t: TargetValue) {
@@ -55,7 +61,12 @@ export class RailChecksService implements OnModuleInit {
       const sweep = await this.repo.findSweep(workshopId, id);
       if (!sweep) return null;
       const rail = await this.repo.findRail(workshopId, sweep.railId);
-      return { machineId: sweep.machineId, recordType: 'rail-sweep', recordId: id, label: `Sweep of rail ${rail?.label ?? ''} (${sweep.phase}, ${sweep.takenAt.toISOString().slice(0, 10)})` };
+      return {
+        machineId: sweep.machineId,
+        recordType: 'rail-sweep',
+        recordId: id,
+        label: `Sweep of rail ${rail?.label ?? ''} (${sweep.phase}, ${sweep.takenAt.toISOString().slice(0, 10)})`,
+      };
     });
   }
 
@@ -67,14 +78,27 @@ export class RailChecksService implements OnModuleInit {
   async checksFor(machine: MachineRef, context: ReadinessContext): Promise<ReadinessCheck[]> {
     const rails = await this.repo.listRails(machine.workshopId, machine.id);
     if (!rails.length) return [];
-    const targets = { straightness: context.targets.railStraightness, parallelism: context.targets.railParallelism, height: context.targets.railHeightDifference };
+    const targets = {
+      straightness: context.targets.railStraightness,
+      parallelism: context.targets.railParallelism,
+      height: context.targets.railHeightDifference,
+    };
     const paired = pairs(rails);
     const ids = rails.map((r) => r.id);
     const [latest, perDatum] = await Promise.all([
       this.repo.latestSweeps(machine.workshopId, ids),
       paired.length ? this.repo.latestSweepsPerDatum(machine.workshopId, ids) : Promise.resolve([]),
     ]);
-    const full = context.series ? new Map((await this.repo.sweepsByIds(machine.workshopId, [...latest.values()].map((s) => s.id))).map((s) => [s.id, s])) : null;
+    const full = context.series
+      ? new Map(
+          (
+            await this.repo.sweepsByIds(
+              machine.workshopId,
+              [...latest.values()].map((s) => s.id),
+            )
+          ).map((s) => [s.id, s]),
+        )
+      : null;
     const checks = rails.map((r) => {
       const newest = latest.get(r.id) ?? null;
       const check = this.straightnessCheck(r, newest, targets.straightness);
@@ -82,7 +106,17 @@ export class RailChecksService implements OnModuleInit {
       if (row && check.result) check.series = straightnessSeries(r, row, targets.straightness);
       return check;
     });
-    for (const [a, b] of paired) checks.push(this.parallelismCheck(a, b, comparedOf(a.id, latest, perDatum), comparedOf(b.id, latest, perDatum), targets, context.series));
+    for (const [a, b] of paired)
+      checks.push(
+        this.parallelismCheck(
+          a,
+          b,
+          comparedOf(a.id, latest, perDatum),
+          comparedOf(b.id, latest, perDatum),
+          targets,
+          context.series,
+        ),
+      );
     return checks;
   }
 
@@ -91,16 +125,32 @@ export class RailChecksService implements OnModuleInit {
     const rail = await this.rails.findRow(actor, railId);
     const machine = await this.machines.getRef(actor, rail.machineId);
     const targets = await this.targetsOf(actor.workshopId, machine.targetSetId);
-    const shownTargets = { parallelism: plain(targets.parallelism), heightDifference: { ...plain(targets.height), source: HEIGHT_SOURCE } };
+    const shownTargets = {
+      parallelism: plain(targets.parallelism),
+      heightDifference: { ...plain(targets.height), source: HEIGHT_SOURCE },
+    };
     const partner = rail.partnerRailId ? await this.repo.findRail(actor.workshopId, rail.partnerRailId) : null;
     if (!partner) {
-      return { railId, partnerRailId: null, status: 'not-comparable' as const, reason: `Rail ${rail.label} has no partner rail`, targets: shownTargets, warnings: [] };
+      return {
+        railId,
+        partnerRailId: null,
+        status: 'not-comparable' as const,
+        reason: `Rail ${rail.label} has no partner rail`,
+        targets: shownTargets,
+        warnings: [],
+      };
     }
     const [latest, perDatum] = await Promise.all([
       this.repo.latestSweeps(actor.workshopId, [rail.id, partner.id]),
       this.repo.latestSweepsPerDatum(actor.workshopId, [rail.id, partner.id]),
     ]);
-    const j = judgePair(rail, partner, comparedOf(rail.id, latest, perDatum), comparedOf(partner.id, latest, perDatum), targets);
+    const j = judgePair(
+      rail,
+      partner,
+      comparedOf(rail.id, latest, perDatum),
+      comparedOf(partner.id, latest, perDatum),
+      targets,
+    );
     const out = j.parallelism;
     const height = {
       measured: j.height.measured,
@@ -117,9 +167,18 @@ export class RailChecksService implements OnModuleInit {
       within: j.height.within ?? null,
       unit: 'mm',
     };
-    const base = { railId, partnerRailId: partner.id, targets: shownTargets, sweeps: { a: out.a?.id ?? null, b: out.b?.id ?? null }, height, warnings: j.warnings };
-    if (!out.comparable && j.status !== 'within-target' && j.status !== 'outside-target') return { ...base, status: 'not-comparable' as const, reason: out.reason };
-    if (!out.comparable && out.unreadable) return { ...base, status: 'not-comparable' as const, reason: out.reason, unreadable: UNREADABLE_INPUT };
+    const base = {
+      railId,
+      partnerRailId: partner.id,
+      targets: shownTargets,
+      sweeps: { a: out.a?.id ?? null, b: out.b?.id ?? null },
+      height,
+      warnings: j.warnings,
+    };
+    if (!out.comparable && j.status !== 'within-target' && j.status !== 'outside-target')
+      return { ...base, status: 'not-comparable' as const, reason: out.reason };
+    if (!out.comparable && out.unreadable)
+      return { ...base, status: 'not-comparable' as const, reason: out.reason, unreadable: UNREADABLE_INPUT };
     return {
       ...base,
       status: j.status as 'within-target' | 'outside-target',
@@ -140,7 +199,11 @@ export class RailChecksService implements OnModuleInit {
 
   private async targetsOf(workshopId: string, targetSetId: string) {
     const { targets } = await this.targetSets.findRow(workshopId, targetSetId);
-    return { straightness: targets.railStraightness, parallelism: targets.railParallelism, height: targets.railHeightDifference };
+    return {
+      straightness: targets.railStraightness,
+      parallelism: targets.railParallelism,
+      height: targets.railHeightDifference,
+    };
   }
 
   private straightnessCheck(rail: RailRow, latest: LatestSweep | null, target: TargetValue): ReadinessCheck {
@@ -150,18 +213,35 @@ export class RailChecksService implements OnModuleInit {
       kind: 'rail-straightness' as const,
       // "Rail Y1 (left)" already names its axis; "Rail left" gets it added.
       subject: rail.label.includes(rail.axis) ? `Rail ${rail.label}` : `Rail ${rail.label} (${rail.axis})`,
-      target: { ...plain(target), reference, label: `${TARGET_LABELS.railStraightness}, judged on the ${REFERENCE_WORDS[reference]}` },
+      target: {
+        ...plain(target),
+        reference,
+        label: `${TARGET_LABELS.railStraightness}, judged on the ${REFERENCE_WORDS[reference]}`,
+      },
       place: { machineId: rail.machineId, railId: rail.id },
       warnings: [] as ResultWarning[],
     };
-    if (!latest) return { ...common, status: 'not-started', result: null, recordType: null, recordId: null, recordedAt: null };
+    if (!latest)
+      return { ...common, status: 'not-started', result: null, recordType: null, recordId: null, recordedAt: null };
     if (!summaryReadable(latest)) {
       // A latest sweep that cannot be read blocks like a failed one and says why.
-      return { ...common, subject: `${common.subject} (latest sweep unreadable)`, status: 'outside-target', result: null, recordType: 'rail-sweep', recordId: latest.id, recordedAt: latest.takenAt.toISOString() };
+      return {
+        ...common,
+        subject: `${common.subject} (latest sweep unreadable)`,
+        status: 'outside-target',
+        result: null,
+        recordType: 'rail-sweep',
+        recordId: latest.id,
+        recordedAt: latest.takenAt.toISOString(),
+      };
     }
     const judged = judgedFigure(latest, reference);
-    const other = reference === 'minimum-zone' ? `least squares ${show(latest.leastSquaresStraightness, target)}` : `minimum zone ${show(latest.minimumZoneStraightness, target)}`;
-    const slope = latest.localSlopeMmPerM === null ? '' : `; largest local slope ${latest.localSlopeMmPerM.toFixed(3)} mm/m`;
+    const other =
+      reference === 'minimum-zone'
+        ? `least squares ${show(latest.leastSquaresStraightness, target)}`
+        : `minimum zone ${show(latest.minimumZoneStraightness, target)}`;
+    const slope =
+      latest.localSlopeMmPerM === null ? '' : `; largest local slope ${latest.localSlopeMmPerM.toFixed(3)} mm/m`;
     const resolutionMm = latest.resolution === null ? null : toMm(latest.resolution, latest.readingUnit);
     return {
       ...common,
@@ -174,11 +254,23 @@ export class RailChecksService implements OnModuleInit {
       recordType: 'rail-sweep',
       recordId: latest.id,
       recordedAt: latest.takenAt.toISOString(),
-      warnings: warningsForSweep({ stationCount: latest.stationCount, resolutionMm, readingUnit: latest.readingUnit, spanMm: latest.spanMm }, rail.lengthMm, target, rail.lengthUnit),
+      warnings: warningsForSweep(
+        { stationCount: latest.stationCount, resolutionMm, readingUnit: latest.readingUnit, spanMm: latest.spanMm },
+        rail.lengthMm,
+        target,
+        rail.lengthUnit,
+      ),
     };
   }
 
-  private parallelismCheck(a: RailRow, b: RailRow, sa: ComparedSweep[], sb: ComparedSweep[], t: { parallelism: TargetValue; height: TargetValue }, withSeries: boolean): ReadinessCheck {
+  private parallelismCheck(
+    a: RailRow,
+    b: RailRow,
+    sa: ComparedSweep[],
+    sb: ComparedSweep[],
+    t: { parallelism: TargetValue; height: TargetValue },
+    withSeries: boolean,
+  ): ReadinessCheck {
     const j = judgePair(a, b, sa, sb, t);
     const out = j.parallelism;
     const common = {
@@ -191,11 +283,27 @@ export class RailChecksService implements OnModuleInit {
     };
     if (!out.comparable && out.unreadable) {
       const bad = out.a!.takenAt >= out.b!.takenAt ? out.a! : out.b!;
-      return { ...common, subject: `${common.subject} (latest sweep unreadable: ${out.reason})`, status: 'outside-target', result: null, recordType: 'rail-sweep', recordId: bad.id, recordedAt: bad.takenAt.toISOString() };
+      return {
+        ...common,
+        subject: `${common.subject} (latest sweep unreadable: ${out.reason})`,
+        status: 'outside-target',
+        result: null,
+        recordType: 'rail-sweep',
+        recordId: bad.id,
+        recordedAt: bad.takenAt.toISOString(),
+      };
     }
     if (j.status === 'not-started') {
       // No number to show yet; the reason goes with the subject so the board says what is missing.
-      return { ...common, subject: `${common.subject} (${out.comparable ? 'no height yet' : out.reason})`, status: 'not-started', result: null, recordType: null, recordId: null, recordedAt: null };
+      return {
+        ...common,
+        subject: `${common.subject} (${out.comparable ? 'no height yet' : out.reason})`,
+        status: 'not-started',
+        result: null,
+        recordType: null,
+        recordId: null,
+        recordedAt: null,
+      };
     }
     const h = j.height;
     const heightText = h.measured
@@ -217,7 +325,8 @@ export class RailChecksService implements OnModuleInit {
       recordId: newer?.id ?? null,
       recordedAt: newer?.takenAt.toISOString() ?? null,
     };
-    if (withSeries && out.comparable) check.series = parallelismSeries(a, b, out.positionsMm, out.differencesMm, t.parallelism);
+    if (withSeries && out.comparable)
+      check.series = parallelismSeries(a, b, out.positionsMm, out.differencesMm, t.parallelism);
     return check;
   }
 }
@@ -230,7 +339,8 @@ const capital = (s: string) => s.charAt(0).toUpperCase() + s.slice(1);
  */
 function straightnessSeries(rail: RailRow, row: SweepRow, target: TargetValue): CheckSeries | undefined {
   const result = storedSweepResult(row.result);
-  if (!result || !finiteList(row.positionsMm) || row.positionsMm.length !== result.leastSquares.residuals.length) return undefined;
+  if (!result || !finiteList(row.positionsMm) || row.positionsMm.length !== result.leastSquares.residuals.length)
+    return undefined;
   const reference = referenceOf(target);
   const residuals = reference === 'least-squares' ? result.leastSquares.residuals : result.minimumZone.residuals;
   const mid = (Math.max(...residuals) + Math.min(...residuals)) / 2;
@@ -242,7 +352,14 @@ function straightnessSeries(rail: RailRow, row: SweepRow, target: TargetValue): 
     title: `Rail ${rail.label}: residuals from the ${REFERENCE_WORDS[reference]}`,
     x: { label: 'Position along the rail', unit: unitLabel(lu) },
     y: { label: 'Deviation', unit: unitLabel(ru) },
-    lines: [{ label: `Sweep of ${row.takenAt.toISOString().slice(0, 10)} (${row.phase}, ${row.face} face)`, points: order.map((i) => [inLengthUnit(row.positionsMm[i], lu), fromMm(residuals[i] - mid, ru)] as [number, number]) }],
+    lines: [
+      {
+        label: `Sweep of ${row.takenAt.toISOString().slice(0, 10)} (${row.phase}, ${row.face} face)`,
+        points: order.map(
+          (i) => [inLengthUnit(row.positionsMm[i], lu), fromMm(residuals[i] - mid, ru)] as [number, number],
+        ),
+      },
+    ],
     limits: [
       { label: `+t/2 (target ${unitWord(target)})`, value: halfBand },
       { label: `−t/2 (target ${unitWord(target)})`, value: -halfBand },
@@ -251,7 +368,13 @@ function straightnessSeries(rail: RailRow, row: SweepRow, target: TargetValue): 
 }
 
 /** B − A per station against the common datum, in the parallelism target's unit, with the band centred on the mean. */
-function parallelismSeries(a: RailRow, b: RailRow, positionsMm: number[], differencesMm: number[], target: TargetValue): CheckSeries {
+function parallelismSeries(
+  a: RailRow,
+  b: RailRow,
+  positionsMm: number[],
+  differencesMm: number[],
+  target: TargetValue,
+): CheckSeries {
   const unit = targetLengthUnit(target);
   const mid = (Math.max(...differencesMm) + Math.min(...differencesMm)) / 2;
   const half = fromMm(targetInBaseUnit(target) / 2, unit);
@@ -259,7 +382,14 @@ function parallelismSeries(a: RailRow, b: RailRow, positionsMm: number[], differ
     title: `Rails ${a.label} and ${b.label}: ${b.label} − ${a.label} against the common datum`,
     x: { label: 'Position along the rails', unit: unitLabel(a.lengthUnit) },
     y: { label: 'Difference', unit: unitLabel(unit) },
-    lines: [{ label: `${b.label} − ${a.label}`, points: positionsMm.map((p, i) => [inLengthUnit(p, a.lengthUnit), fromMm(differencesMm[i] - mid, unit)] as [number, number]) }],
+    lines: [
+      {
+        label: `${b.label} − ${a.label}`,
+        points: positionsMm.map(
+          (p, i) => [inLengthUnit(p, a.lengthUnit), fromMm(differencesMm[i] - mid, unit)] as [number, number],
+        ),
+      },
+    ],
     limits: [
       { label: `+t/2 (target ${unitWord(target)})`, value: half },
       { label: `−t/2 (target ${unitWord(target)})`, value: -half },
@@ -279,7 +409,15 @@ const unitWord = (t: TargetValue) => `${t.value} ${t.unit === 'um' ? 'µm' : t.u
 function comparedOf(railId: string, latest: Map<string, LatestSweep>, perDatum: DatumSweep[]): ComparedSweep[] {
   const own: ComparedSweep[] = perDatum.filter((s) => s.railId === railId);
   const newest = latest.get(railId);
-  if (newest && !own.some((s) => s.id === newest.id)) own.push({ id: newest.id, datum: null, face: newest.face, takenAt: newest.takenAt, positionsMm: [], readingsMm: [] });
+  if (newest && !own.some((s) => s.id === newest.id))
+    own.push({
+      id: newest.id,
+      datum: null,
+      face: newest.face,
+      takenAt: newest.takenAt,
+      positionsMm: [],
+      readingsMm: [],
+    });
   return own.sort((x, y) => y.takenAt.getTime() - x.takenAt.getTime());
 }
 

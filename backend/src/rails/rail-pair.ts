@@ -6,7 +6,8 @@ import { partnerParallelism, type ComparedSweep, type PairOutcome } from './rail
 import type { RailRow } from './rails.repository.js';
 import { showIn, targetLengthUnit } from './sweep-judgement.js';
 
-export const HEIGHT_SOURCE = "S = a × K, K from one maker's catalogue (about 130 µm at 500 mm rail spacing for light preload)";
+export const HEIGHT_SOURCE =
+  "S = a × K, K from one maker's catalogue (about 130 µm at 500 mm rail spacing for light preload)";
 
 export interface HeightJudgement {
   measured: boolean;
@@ -45,7 +46,8 @@ export function judgePair(
   t: { parallelism: TargetValue; height: TargetValue },
 ): PairJudgement {
   const labels = { a: a.label, b: b.label };
-  const face = (f: 'side' | 'top') => (s: ComparedSweep) => (s.face ?? 'side') === f || (s.datum === null && s.positionsMm.length === 0);
+  const face = (f: 'side' | 'top') => (s: ComparedSweep) =>
+    (s.face ?? 'side') === f || (s.datum === null && s.positionsMm.length === 0);
   const side = partnerParallelism(sweepsA.filter(face('side')), sweepsB.filter(face('side')), labels);
   const top = partnerParallelism(sweepsA.filter(face('top')), sweepsB.filter(face('top')), labels);
   // The parallelism target is the sideways one; top-face sweeps are read for the height only.
@@ -53,33 +55,71 @@ export function judgePair(
   const warnings: ResultWarning[] = [];
 
   const height = judgeHeight(a, b, top, t.height, warnings);
-  if (!parallelism.comparable && parallelism.unreadable) return { parallelism, height, status: 'outside-target', parallelismWithin: null, warnings };
-  if (!parallelism.comparable && !height.measured) return { parallelism, height, status: 'not-started', parallelismWithin: null, warnings };
-  const parallelismWithin = parallelism.comparable ? parallelism.parallelismMm <= targetInBaseUnit(t.parallelism) : null;
+  if (!parallelism.comparable && parallelism.unreadable)
+    return { parallelism, height, status: 'outside-target', parallelismWithin: null, warnings };
+  if (!parallelism.comparable && !height.measured)
+    return { parallelism, height, status: 'not-started', parallelismWithin: null, warnings };
+  const parallelismWithin = parallelism.comparable
+    ? parallelism.parallelismMm <= targetInBaseUnit(t.parallelism)
+    : null;
   const heightOk = height.measured ? height.within !== false : true;
   const status = (parallelismWithin ?? true) && heightOk ? 'within-target' : 'outside-target';
   return { parallelism, height, status, parallelismWithin, warnings };
 }
 
-function judgeHeight(a: RailRow, b: RailRow, top: PairOutcome, target: TargetValue, warnings: ResultWarning[]): HeightJudgement {
+function judgeHeight(
+  a: RailRow,
+  b: RailRow,
+  top: PairOutcome,
+  target: TargetValue,
+  warnings: ResultWarning[],
+): HeightJudgement {
   const spacingMm = a.spacingMm ?? b.spacingMm ?? null;
   if (a.spacingMm !== null && b.spacingMm !== null && Math.abs(a.spacingMm - b.spacingMm) > 0.5) {
-    warnings.push({ code: 'spacing-differs', message: `Rails ${a.label} and ${b.label} name different spacings (${showIn(a.spacingMm, a.lengthUnit)} and ${showIn(b.spacingMm, b.lengthUnit)}); ${showIn(spacingMm!, a.lengthUnit)} is used.` });
+    warnings.push({
+      code: 'spacing-differs',
+      message: `Rails ${a.label} and ${b.label} name different spacings (${showIn(a.spacingMm, a.lengthUnit)} and ${showIn(b.spacingMm, b.lengthUnit)}); ${showIn(spacingMm!, a.lengthUnit)} is used.`,
+    });
   }
   if (!top.comparable) {
-    const reason = top.a && top.b ? `top-face sweeps of rails ${a.label} and ${b.label}: ${top.reason}` : `no top-face sweeps of both rails against one common datum yet`;
+    const reason =
+      top.a && top.b
+        ? `top-face sweeps of rails ${a.label} and ${b.label}: ${top.reason}`
+        : `no top-face sweeps of both rails against one common datum yet`;
     warnings.push({
       code: 'height-not-measured',
       message: `No height difference: it needs top-face sweeps of both rails read against one common datum (${reason}); side-face sweeps and sweeps zeroed on each rail give no height.`,
     });
     return { measured: false, reason, spacingMm };
   }
-  const h = heightDifference(top.positionsMm, top.differencesMm.map(() => 0), top.differencesMm);
-  const base = { measured: true, datum: top.datum, worstMm: h.worstMm, worstSignedMm: h.worstSignedMm, atMm: h.atMm, positionsMm: top.positionsMm, differencesMm: top.differencesMm, spacingMm };
+  const h = heightDifference(
+    top.positionsMm,
+    top.differencesMm.map(() => 0),
+    top.differencesMm,
+  );
+  const base = {
+    measured: true,
+    datum: top.datum,
+    worstMm: h.worstMm,
+    worstSignedMm: h.worstSignedMm,
+    atMm: h.atMm,
+    positionsMm: top.positionsMm,
+    differencesMm: top.differencesMm,
+    spacingMm,
+  };
   if (target.unit === 'um/mm') {
     if (spacingMm === null) {
-      warnings.push({ code: 'spacing-missing', message: `The height target scales with rail spacing (S = a × ${target.value} µm/mm); enter the spacing of rails ${a.label} and ${b.label} to judge the ${showIn(h.worstMm, 'mm')} height difference.` });
-      return { ...base, kUmPerMm: target.value, permissibleMm: null, within: false, targetText: `S = a × ${target.value} µm/mm (rail spacing a not entered)` };
+      warnings.push({
+        code: 'spacing-missing',
+        message: `The height target scales with rail spacing (S = a × ${target.value} µm/mm); enter the spacing of rails ${a.label} and ${b.label} to judge the ${showIn(h.worstMm, 'mm')} height difference.`,
+      });
+      return {
+        ...base,
+        kUmPerMm: target.value,
+        permissibleMm: null,
+        within: false,
+        targetText: `S = a × ${target.value} µm/mm (rail spacing a not entered)`,
+      };
     }
     const permissibleMm = permissibleHeightDifferenceMm(spacingMm, target.value);
     const unit = a.lengthUnit;
@@ -93,5 +133,11 @@ function judgeHeight(a: RailRow, b: RailRow, top: PairOutcome, target: TargetVal
   }
   // A set still holding a plain length: judged against it as stored.
   const permissibleMm = targetInBaseUnit(target);
-  return { ...base, kUmPerMm: null, permissibleMm, within: h.worstMm <= permissibleMm, targetText: `${showIn(permissibleMm, targetLengthUnit(target))} (a fixed length, not scaled by spacing)` };
+  return {
+    ...base,
+    kUmPerMm: null,
+    permissibleMm,
+    within: h.worstMm <= permissibleMm,
+    targetText: `${showIn(permissibleMm, targetLengthUnit(target))} (a fixed length, not scaled by spacing)`,
+  };
 }

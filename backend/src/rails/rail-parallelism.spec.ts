@@ -30,8 +30,14 @@ describe('partner parallelism from stored sweeps', () => {
 
   it('says why when stations or datums differ', () => {
     const a = sweep('a', [0, 100, 200], [0, 0, 0], 'wire', 1);
-    expect(partnerParallelism([a], [sweep('b', [0, 100, 250], [0, 0, 0], 'wire', 1)], labels)).toMatchObject({ comparable: false, reason: expect.stringMatching(/stations differ/) });
-    expect(partnerParallelism([a], [sweep('b', [0, 100, 200], [0, 0, 0], 'bar', 1)], labels)).toMatchObject({ comparable: false, reason: expect.stringMatching(/same datum/) });
+    expect(partnerParallelism([a], [sweep('b', [0, 100, 250], [0, 0, 0], 'wire', 1)], labels)).toMatchObject({
+      comparable: false,
+      reason: expect.stringMatching(/stations differ/),
+    });
+    expect(partnerParallelism([a], [sweep('b', [0, 100, 200], [0, 0, 0], 'bar', 1)], labels)).toMatchObject({
+      comparable: false,
+      reason: expect.stringMatching(/same datum/),
+    });
     expect(partnerParallelism([], [a], labels)).toMatchObject({ comparable: false, reason: 'No sweep of rail Y1 yet' });
   });
 });

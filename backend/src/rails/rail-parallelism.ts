@@ -3,13 +3,24 @@ import type { SweepRow } from './rails.repository.js';
 import { finiteList } from '../common/stored-result.js';
 
 /** What the comparison reads of a sweep (full rows fit too). */
-export type ComparedSweep = Pick<SweepRow, 'id' | 'datum' | 'takenAt' | 'positionsMm' | 'readingsMm'> & { face?: SweepRow['face'] | null };
+export type ComparedSweep = Pick<SweepRow, 'id' | 'datum' | 'takenAt' | 'positionsMm' | 'readingsMm'> & {
+  face?: SweepRow['face'] | null;
+};
 
 // Two stations are the same place when they agree to a micrometre (positions are typed in mm).
 const SAME_POSITION_MM = 0.001;
 
 export type PairOutcome<S extends ComparedSweep = ComparedSweep> =
-  | { comparable: true; a: S; b: S; datum: string; positionsMm: number[]; parallelismMm: number; meanOffsetMm: number; differencesMm: number[] }
+  | {
+      comparable: true;
+      a: S;
+      b: S;
+      datum: string;
+      positionsMm: number[];
+      parallelismMm: number;
+      meanOffsetMm: number;
+      differencesMm: number[];
+    }
   | { comparable: false; reason: string; a: S | null; b: S | null; unreadable?: true };
 
 const datumKey = (d: string | null) => (d ?? '').trim().toLowerCase();
@@ -19,10 +30,21 @@ const datumKey = (d: string | null) => (d ?? '').trim().toLowerCase();
  * (sweeps newest first). Differences are B − A at each station; their mean is the height
  * (offset) of B over A. The stations must be the same positions on both rails.
  */
-export function partnerParallelism<S extends ComparedSweep>(sweepsA: S[], sweepsB: S[], labels: { a: string; b: string }): PairOutcome<S> {
+export function partnerParallelism<S extends ComparedSweep>(
+  sweepsA: S[],
+  sweepsB: S[],
+  labels: { a: string; b: string },
+): PairOutcome<S> {
   if (!sweepsA.length || !sweepsB.length) {
-    const missing = [!sweepsA.length ? labels.a : null, !sweepsB.length ? labels.b : null].filter(Boolean).join(' and ');
-    return { comparable: false, reason: `No sweep of rail ${missing} yet`, a: sweepsA[0] ?? null, b: sweepsB[0] ?? null };
+    const missing = [!sweepsA.length ? labels.a : null, !sweepsB.length ? labels.b : null]
+      .filter(Boolean)
+      .join(' and ');
+    return {
+      comparable: false,
+      reason: `No sweep of rail ${missing} yet`,
+      a: sweepsA[0] ?? null,
+      b: sweepsB[0] ?? null,
+    };
   }
   const latestByDatum = (sweeps: S[]) => {
     const out = new Map<string, S>();
@@ -48,9 +70,25 @@ export function partnerParallelism<S extends ComparedSweep>(sweepsA: S[], sweeps
   }
   const { a, b } = best;
   // An old stored sweep with a reading or position that is not a number cannot be compared; say which.
-  const bad = [[a, labels.a], [b, labels.b]].filter(([s]) => !finiteList((s as S).positionsMm) || !finiteList((s as S).readingsMm) || (s as S).positionsMm.length !== (s as S).readingsMm.length).map(([, l]) => l as string);
+  const bad = [
+    [a, labels.a],
+    [b, labels.b],
+  ]
+    .filter(
+      ([s]) =>
+        !finiteList((s as S).positionsMm) ||
+        !finiteList((s as S).readingsMm) ||
+        (s as S).positionsMm.length !== (s as S).readingsMm.length,
+    )
+    .map(([, l]) => l as string);
   if (bad.length) {
-    return { comparable: false, unreadable: true, reason: `The stored readings of the latest sweep of rail ${bad.join(' and rail ')} against datum ${a.datum!.trim()} cannot be read; sweep again and delete that sweep`, a, b };
+    return {
+      comparable: false,
+      unreadable: true,
+      reason: `The stored readings of the latest sweep of rail ${bad.join(' and rail ')} against datum ${a.datum!.trim()} cannot be read; sweep again and delete that sweep`,
+      a,
+      b,
+    };
   }
   const order = a.positionsMm.map((p, i) => ({ p, i })).sort((x, y) => x.p - y.p);
   const bOrder = b.positionsMm.map((p, i) => ({ p, i })).sort((x, y) => x.p - y.p);
@@ -69,5 +107,14 @@ export function partnerParallelism<S extends ComparedSweep>(sweepsA: S[], sweeps
     railAMm: order.map((x) => a.readingsMm[x.i]),
     railBMm: bOrder.map((x) => b.readingsMm[x.i]),
   });
-  return { comparable: true, a, b, datum: a.datum!.trim(), positionsMm, parallelismMm: result.parallelismMm, meanOffsetMm: result.meanOffsetMm, differencesMm: result.differencesMm };
+  return {
+    comparable: true,
+    a,
+    b,
+    datum: a.datum!.trim(),
+    positionsMm,
+    parallelismMm: result.parallelismMm,
+    meanOffsetMm: result.meanOffsetMm,
+    differencesMm: result.differencesMm,
+  };
 }

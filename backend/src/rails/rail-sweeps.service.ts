@@ -2,7 +2,14 @@ import { BadRequestException, ConflictException, Injectable, NotFoundException }
 import type { SessionUser } from '../auth/session-user.js';
 import { evaluateStraightness, type ReferenceLineResult } from '../engine/straightness.js';
 import { arrayToMm, toMm } from '../engine/units.js';
-import { judgedStraightnessMm, referenceOf, REFERENCE_WORDS, showIn, slopeOf, warningsForSweep } from './sweep-judgement.js';
+import {
+  judgedStraightnessMm,
+  referenceOf,
+  REFERENCE_WORDS,
+  showIn,
+  slopeOf,
+  warningsForSweep,
+} from './sweep-judgement.js';
 import type { StoredLine, StoredSweepResult } from '../database/schema/rails.js';
 import { MachinesService } from '../machines/machines.service.js';
 import { RecordsService } from '../records/records.service.js';
@@ -20,7 +27,12 @@ import type { UpdateSweepDetailsDto } from './dto/update-sweep-details.dto.js';
 const DETAIL_FIELDS = ['instrument', 'temperatureC', 'takenBy', 'boltSize', 'torqueNm', 'datum', 'notes'] as const;
 type DetailField = (typeof DETAIL_FIELDS)[number];
 
-const line = (r: ReferenceLineResult): StoredLine => ({ slope: r.slope, intercept: r.interceptMm, straightness: r.straightnessMm, residuals: r.residualsMm });
+const line = (r: ReferenceLineResult): StoredLine => ({
+  slope: r.slope,
+  intercept: r.interceptMm,
+  straightness: r.straightnessMm,
+  residuals: r.residualsMm,
+});
 
 /** Rail sweeps: readings along a rail, fitted by the engine and stored with their result. */
 @Injectable()
@@ -34,14 +46,24 @@ export class RailSweepsService {
   ) {}
 
   /** A page of the rail's sweeps, newest first, summaries only; `nextCursor` asks for the page after. */
-  async list(actor: SessionUser, railId: string, query: PageQuery = {}): Promise<{ items: SweepListItem[]; nextCursor: string | null }> {
+  async list(
+    actor: SessionUser,
+    railId: string,
+    query: PageQuery = {},
+  ): Promise<{ items: SweepListItem[]; nextCursor: string | null }> {
     await this.rails.findRow(actor, railId);
     const limit = query.limit ?? DEFAULT_PAGE_SIZE;
     const rows = await this.repo.sweepPage(actor.workshopId, railId, query.cursor ?? null, limit);
     const page = rows.slice(0, limit);
-    const locked = await this.records.lockedIds('rail-sweep', page.map((r) => r.id));
+    const locked = await this.records.lockedIds(
+      'rail-sweep',
+      page.map((r) => r.id),
+    );
     const last = page[page.length - 1];
-    return { items: page.map((r) => toSweepListItem(r, locked.has(r.id))), nextCursor: rows.length > limit ? last.id : null };
+    return {
+      items: page.map((r) => toSweepListItem(r, locked.has(r.id))),
+      nextCursor: rows.length > limit ? last.id : null,
+    };
   }
 
   async get(actor: SessionUser, id: string): Promise<SweepResponse> {
@@ -53,7 +75,11 @@ export class RailSweepsService {
    * Saves a sweep; a repeat of the same client id answers the sweep already saved
    * (`created: false`) and changes nothing.
    */
-  async record(actor: SessionUser, railId: string, dto: CreateSweepDto): Promise<{ created: boolean; sweep: SweepResponse }> {
+  async record(
+    actor: SessionUser,
+    railId: string,
+    dto: CreateSweepDto,
+  ): Promise<{ created: boolean; sweep: SweepResponse }> {
     const found = await this.repo.findRailForSweep(actor.workshopId, railId);
     if (!found) throw new NotFoundException('No such rail in this workshop');
     const { rail, targets } = found;
@@ -63,25 +89,38 @@ export class RailSweepsService {
     }
     checkStations(dto);
     const takenAt = dto.takenAt ? new Date(dto.takenAt) : new Date();
-    if (takenAt.getTime() > Date.now() + 5 * 60_000) throw new BadRequestException(['takenAt must not be in the future']);
+    if (takenAt.getTime() > Date.now() + 5 * 60_000)
+      throw new BadRequestException(['takenAt must not be in the future']);
 
     const readingUnit = dto.readingUnit ?? 'mm';
     const lengthUnit = dto.lengthUnit ?? 'mm';
-    const positionsMm = arrayToMm(dto.stations.map((s) => s.position), lengthUnit);
+    const positionsMm = arrayToMm(
+      dto.stations.map((s) => s.position),
+      lengthUnit,
+    );
     checkPositionsMm(positionsMm, lengthUnit);
     const readingsRaw = dto.stations.map((s) => s.reading);
     const readingsMm = arrayToMm(readingsRaw, readingUnit);
     const fitted = evaluateStraightness({ positionsMm, readingsMm });
     const target = targets.railStraightness;
     const reference = referenceOf(target);
-    const result: StoredSweepResult = { leastSquares: line(fitted.leastSquares), minimumZone: line(fitted.minimumZone), endPoint: line(fitted.endPoint) };
+    const result: StoredSweepResult = {
+      leastSquares: line(fitted.leastSquares),
+      minimumZone: line(fitted.minimumZone),
+      endPoint: line(fitted.endPoint),
+    };
     const slope = slopeOf(positionsMm, result, reference);
     result.localSlope = { mmPerM: slope.mmPerM, fromMm: slope.fromMm, toMm: slope.toMm, baseMm: slope.baseMm };
     const judged = judgedStraightnessMm(result, reference);
     const status = judged <= targetInBaseUnit(target) ? 'within-target' : 'outside-target';
     const resolutionMm = dto.resolution === undefined ? null : toMm(dto.resolution, readingUnit);
     const warnings = warningsForSweep(
-      { stationCount: positionsMm.length, resolutionMm, readingUnit, spanMm: Math.max(...positionsMm) - Math.min(...positionsMm) },
+      {
+        stationCount: positionsMm.length,
+        resolutionMm,
+        readingUnit,
+        spanMm: Math.max(...positionsMm) - Math.min(...positionsMm),
+      },
       rail.lengthMm,
       target,
       lengthUnit,
@@ -157,7 +196,9 @@ export class RailSweepsService {
     if (!row) throw new NotFoundException('No such sweep in this workshop');
     const rail = await this.rails.findRow(actor, row.railId);
     const words = Object.keys(set)
-      .map((f) => (f === 'notes' ? 'notes rewritten' : `${f} ${JSON.stringify(from[f] ?? '')} → ${JSON.stringify(to[f] ?? '')}`))
+      .map((f) =>
+        f === 'notes' ? 'notes rewritten' : `${f} ${JSON.stringify(from[f] ?? '')} → ${JSON.stringify(to[f] ?? '')}`,
+      )
       .join(', ');
     // The audit row keeps the old and new values whole; the summary names them for people.
     await this.records.audit(actor, {
@@ -165,7 +206,11 @@ export class RailSweepsService {
       recordType: 'rail-sweep',
       recordId: id,
       action: 'updated',
-      summary: `Sweep of rail ${rail.label} of ${row.takenAt.toISOString().slice(0, 10)}: details corrected (${words})`.slice(0, 2000),
+      summary:
+        `Sweep of rail ${rail.label} of ${row.takenAt.toISOString().slice(0, 10)}: details corrected (${words})`.slice(
+          0,
+          2000,
+        ),
       changes: { before: from, after: to },
     });
     return toSweepResponse(row, false);
@@ -175,7 +220,13 @@ export class RailSweepsService {
     const row = await this.findRow(actor, id);
     await this.records.assertEditable('rail-sweep', id, 'This sweep');
     await this.repo.deleteSweep(actor.workshopId, id);
-    await this.records.audit(actor, { machineId: row.machineId, recordType: 'rail-sweep', recordId: id, action: 'deleted', summary: `Sweep of ${row.takenAt.toISOString().slice(0, 10)} (${row.phase}) deleted` });
+    await this.records.audit(actor, {
+      machineId: row.machineId,
+      recordType: 'rail-sweep',
+      recordId: id,
+      action: 'deleted',
+      summary: `Sweep of ${row.takenAt.toISOString().slice(0, 10)} (${row.phase}) deleted`,
+    });
   }
 
   private async findRow(actor: SessionUser, id: string): Promise<SweepRow> {
@@ -187,7 +238,8 @@ export class RailSweepsService {
   private async repeatOf(actor: SessionUser, railId: string, id: string): Promise<SweepResponse | null> {
     const row = await this.repo.findSweep(actor.workshopId, id);
     if (row && row.railId === railId) return this.get(actor, id);
-    if (row || (await this.repo.sweepIdTaken(id))) throw new ConflictException('That sweep id is already used by another record');
+    if (row || (await this.repo.sweepIdTaken(id)))
+      throw new ConflictException('That sweep id is already used by another record');
     return null;
   }
 }
@@ -198,7 +250,10 @@ function checkStations(dto: CreateSweepDto) {
   const problems: string[] = [];
   dto.stations.forEach((s, i) => {
     const first = seen.get(s.position);
-    if (first !== undefined) problems.push(`stations.${i}.position repeats ${s.position} ${dto.lengthUnit ?? 'mm'} (also at stations.${first})`);
+    if (first !== undefined)
+      problems.push(
+        `stations.${i}.position repeats ${s.position} ${dto.lengthUnit ?? 'mm'} (also at stations.${first})`,
+      );
     else seen.set(s.position, i);
   });
   if (problems.length) throw new BadRequestException(problems);
@@ -207,5 +262,6 @@ function checkStations(dto: CreateSweepDto) {
 /** Positions are bounded in mm whatever unit they were typed in. */
 function checkPositionsMm(positionsMm: number[], unit: string) {
   const i = positionsMm.findIndex((p) => Math.abs(p) > 20_000);
-  if (i >= 0) throw new BadRequestException([`stations.${i}.position must be within ±20 000 mm along the rail (in ${unit})`]);
+  if (i >= 0)
+    throw new BadRequestException([`stations.${i}.position must be within ±20 000 mm along the rail (in ${unit})`]);
 }

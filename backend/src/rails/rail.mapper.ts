@@ -6,13 +6,37 @@ import { typicalBoltFor } from './bolt-torques.js';
 import { defaultEndDistanceMm } from '../engine/rail-holes.js';
 import { fromMm, type LengthUnit } from '../engine/units.js';
 import type { LatestSweep, RailRow, SweepListRow, SweepRow } from './rails.repository.js';
-import { finiteList, finiteOrNull, readableResult, UNREADABLE_INPUT, UNREADABLE_RESULT } from '../common/stored-result.js';
+import {
+  finiteList,
+  finiteOrNull,
+  readableResult,
+  UNREADABLE_INPUT,
+  UNREADABLE_RESULT,
+} from '../common/stored-result.js';
 
 /** The numbers the readers of a stored sweep result use (the residual lists are checked element by element below). */
-export const SWEEP_SHAPE = ['leastSquares.slope', 'leastSquares.intercept', 'leastSquares.straightness', 'leastSquares.residuals[]', 'minimumZone.slope', 'minimumZone.intercept', 'minimumZone.straightness', 'minimumZone.residuals[]', 'endPoint.slope', 'endPoint.intercept', 'endPoint.straightness', 'endPoint.residuals[]'];
+export const SWEEP_SHAPE = [
+  'leastSquares.slope',
+  'leastSquares.intercept',
+  'leastSquares.straightness',
+  'leastSquares.residuals[]',
+  'minimumZone.slope',
+  'minimumZone.intercept',
+  'minimumZone.straightness',
+  'minimumZone.residuals[]',
+  'endPoint.slope',
+  'endPoint.intercept',
+  'endPoint.straightness',
+  'endPoint.residuals[]',
+];
 export function storedSweepResult(stored: unknown): StoredSweepResult | null {
   const r = readableResult<StoredSweepResult>(stored, SWEEP_SHAPE);
-  return r && finiteList(r.leastSquares.residuals) && finiteList(r.minimumZone.residuals) && finiteList(r.endPoint.residuals) ? r : null;
+  return r &&
+    finiteList(r.leastSquares.residuals) &&
+    finiteList(r.minimumZone.residuals) &&
+    finiteList(r.endPoint.residuals)
+    ? r
+    : null;
 }
 
 export const UNREADABLE_RAIL =
@@ -126,11 +150,14 @@ export interface SweepResponse {
 }
 
 export function railHoles(row: Pick<RailRow, 'lengthMm' | 'holePitchMm' | 'firstHoleMm'>) {
-  return holePositions({ lengthMm: row.lengthMm, pitchMm: row.holePitchMm, firstHoleOffsetMm: row.firstHoleMm }).map((position, index) => ({ index, position }));
+  return holePositions({ lengthMm: row.lengthMm, pitchMm: row.holePitchMm, firstHoleOffsetMm: row.firstHoleMm }).map(
+    (position, index) => ({ index, position }),
+  );
 }
 
 /** A length in mm back in the unit it was typed in, without binary noise (31.5 in stays 31.5). */
-export const inLengthUnit = (mm: number, unit: LengthUnit) => (unit === 'mm' ? mm : Number(fromMm(mm, unit).toPrecision(15)));
+export const inLengthUnit = (mm: number, unit: LengthUnit) =>
+  unit === 'mm' ? mm : Number(fromMm(mm, unit).toPrecision(15));
 
 export function railEndDistanceMm(row: Pick<RailRow, 'endDistanceMm' | 'profileSizeMm'>): number {
   return row.endDistanceMm ?? defaultEndDistanceMm(typicalBoltFor(row.profileSizeMm));
@@ -216,13 +243,27 @@ export function toLatestSweepSummary(s: LatestSweep): SweepSummary {
 
 function readableFigures(s: Pick<LatestSweep, 'leastSquaresStraightness' | 'minimumZoneStraightness' | 'status'>) {
   return summaryReadable(s)
-    ? { leastSquaresStraightness: s.leastSquaresStraightness, minimumZoneStraightness: s.minimumZoneStraightness, status: s.status }
-    : { leastSquaresStraightness: null, minimumZoneStraightness: null, status: 'outside-target' as const, unreadable: UNREADABLE_RESULT };
+    ? {
+        leastSquaresStraightness: s.leastSquaresStraightness,
+        minimumZoneStraightness: s.minimumZoneStraightness,
+        status: s.status,
+      }
+    : {
+        leastSquaresStraightness: null,
+        minimumZoneStraightness: null,
+        status: 'outside-target' as const,
+        unreadable: UNREADABLE_RESULT,
+      };
 }
 
 export function toSweepResponse(row: SweepRow, locked: boolean): SweepResponse {
   const result = storedSweepResult(row.result);
-  const readings = finiteList(row.positionsMm) && finiteList(row.readingsMm) && finiteList(row.readingsRaw) && row.readingsMm.length === row.positionsMm.length && row.readingsRaw.length === row.positionsMm.length;
+  const readings =
+    finiteList(row.positionsMm) &&
+    finiteList(row.readingsMm) &&
+    finiteList(row.readingsRaw) &&
+    row.readingsMm.length === row.positionsMm.length &&
+    row.readingsRaw.length === row.positionsMm.length;
   return {
     id: row.id,
     railId: row.railId,
@@ -231,9 +272,17 @@ export function toSweepResponse(row: SweepRow, locked: boolean): SweepResponse {
     readingUnit: row.readingUnit,
     face: row.face,
     stations: readings
-      ? row.positionsMm.map((positionMm, i) => ({ position: inLengthUnit(positionMm, row.lengthUnit), positionMm, reading: row.readingsRaw[i], readingMm: row.readingsMm[i] }))
+      ? row.positionsMm.map((positionMm, i) => ({
+          position: inLengthUnit(positionMm, row.lengthUnit),
+          positionMm,
+          reading: row.readingsRaw[i],
+          readingMm: row.readingsMm[i],
+        }))
       : null,
-    localSlope: result && readings ? (result.localSlope ?? slopeOf(row.positionsMm, result, row.target.reference ?? 'least-squares')) : null,
+    localSlope:
+      result && readings
+        ? (result.localSlope ?? slopeOf(row.positionsMm, result, row.target.reference ?? 'least-squares'))
+        : null,
     warnings: Array.isArray(row.warnings) ? row.warnings : [],
     instrument: row.instrument,
     resolution: row.resolution,

@@ -62,7 +62,12 @@ export class RailsController {
 
   /** Newest first, summaries only, a page at a time: the next page's cursor comes in the X-Next-Cursor header. */
   @Get('rails/:id/sweeps')
-  async listSweeps(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string, @Query() query: PageQuery, @Res({ passthrough: true }) reply: FastifyReply) {
+  async listSweeps(
+    @CurrentUser() user: SessionUser,
+    @Param('id', ParseUUIDPipe) id: string,
+    @Query() query: PageQuery,
+    @Res({ passthrough: true }) reply: FastifyReply,
+  ) {
     const { items, nextCursor } = await this.sweeps.list(user, id, query);
     if (nextCursor) reply.header(NEXT_CURSOR_HEADER, nextCursor);
     return items;
@@ -71,7 +76,12 @@ export class RailsController {
   /** 201 for a new sweep; 200 with the same sweep when the client id was seen before. */
   @Post('rails/:id/sweeps')
   @Roles(...RECORDERS)
-  async recordSweep(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string, @Body() dto: CreateSweepDto, @Res({ passthrough: true }) reply: FastifyReply) {
+  async recordSweep(
+    @CurrentUser() user: SessionUser,
+    @Param('id', ParseUUIDPipe) id: string,
+    @Body() dto: CreateSweepDto,
+    @Res({ passthrough: true }) reply: FastifyReply,
+  ) {
     const { created, sweep } = await this.sweeps.record(user, id, dto);
     reply.status(created ? 201 : 200);
     return sweep;
@@ -85,7 +95,11 @@ export class RailsController {
   /** Corrects a sweep's details (not its readings) while no approval stands on it. */
   @Patch('sweeps/:id')
   @Roles(...RECORDERS)
-  updateSweep(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string, @Body() dto: UpdateSweepDetailsDto) {
+  updateSweep(
+    @CurrentUser() user: SessionUser,
+    @Param('id', ParseUUIDPipe) id: string,
+    @Body() dto: UpdateSweepDetailsDto,
+  ) {
     return this.sweeps.updateDetails(user, id, dto);
   }
 

@@ -41,7 +41,11 @@ export interface SweepListRow extends LatestSweep {
   createdAt: Date;
 }
 
-const uuidArray = (ids: string[]) => sql`array[${sql.join(ids.map((id) => sql`${id}`), sql`, `)}]::uuid[]`;
+const uuidArray = (ids: string[]) =>
+  sql`array[${sql.join(
+    ids.map((id) => sql`${id}`),
+    sql`, `,
+  )}]::uuid[]`;
 type SweepInsert = typeof railSweeps.$inferInsert;
 
 @Injectable()
@@ -57,7 +61,10 @@ export class RailsRepository {
   }
 
   async findRail(workshopId: string, id: string): Promise<RailRow | null> {
-    const [row] = await this.db.select().from(rails).where(and(eq(rails.workshopId, workshopId), eq(rails.id, id)));
+    const [row] = await this.db
+      .select()
+      .from(rails)
+      .where(and(eq(rails.workshopId, workshopId), eq(rails.id, id)));
     return row ?? null;
   }
 
@@ -77,17 +84,32 @@ export class RailsRepository {
           .where(and(eq(rails.workshopId, workshopId), eq(rails.id, id)))
           .returning();
       } else {
-        [row] = await tx.insert(rails).values({ ...(values as RailInsert), workshopId, partnerRailId: null }).returning();
+        [row] = await tx
+          .insert(rails)
+          .values({ ...(values as RailInsert), workshopId, partnerRailId: null })
+          .returning();
       }
       if (!partner.set) return row;
       const railId = row.id;
       // Whoever pointed at either rail loses that link first, then the pair names each other.
       const touched = [railId, ...(partner.partnerId ? [partner.partnerId] : [])];
-      await tx.update(rails).set({ partnerRailId: null }).where(and(eq(rails.workshopId, workshopId), inArray(rails.partnerRailId, touched)));
-      await tx.update(rails).set({ partnerRailId: null }).where(and(eq(rails.workshopId, workshopId), inArray(rails.id, touched)));
+      await tx
+        .update(rails)
+        .set({ partnerRailId: null })
+        .where(and(eq(rails.workshopId, workshopId), inArray(rails.partnerRailId, touched)));
+      await tx
+        .update(rails)
+        .set({ partnerRailId: null })
+        .where(and(eq(rails.workshopId, workshopId), inArray(rails.id, touched)));
       if (partner.partnerId) {
-        await tx.update(rails).set({ partnerRailId: partner.partnerId }).where(and(eq(rails.workshopId, workshopId), eq(rails.id, railId)));
-        await tx.update(rails).set({ partnerRailId: railId }).where(and(eq(rails.workshopId, workshopId), eq(rails.id, partner.partnerId)));
+        await tx
+          .update(rails)
+          .set({ partnerRailId: partner.partnerId })
+          .where(and(eq(rails.workshopId, workshopId), eq(rails.id, railId)));
+        await tx
+          .update(rails)
+          .set({ partnerRailId: railId })
+          .where(and(eq(rails.workshopId, workshopId), eq(rails.id, partner.partnerId)));
       }
       const [fresh] = await tx.select().from(rails).where(eq(rails.id, railId));
       return fresh;
@@ -96,7 +118,10 @@ export class RailsRepository {
 
   async deleteRail(workshopId: string, id: string): Promise<void> {
     await this.db.transaction(async (tx) => {
-      await tx.update(rails).set({ partnerRailId: null }).where(and(eq(rails.workshopId, workshopId), eq(rails.partnerRailId, id)));
+      await tx
+        .update(rails)
+        .set({ partnerRailId: null })
+        .where(and(eq(rails.workshopId, workshopId), eq(rails.partnerRailId, id)));
       await tx.delete(railSweeps).where(and(eq(railSweeps.workshopId, workshopId), eq(railSweeps.railId, id)));
       await tx.delete(rails).where(and(eq(rails.workshopId, workshopId), eq(rails.id, id)));
     });
@@ -128,18 +153,20 @@ export class RailsRepository {
    */
   async latestSweeps(workshopId: string, railIds: string[]): Promise<Map<string, LatestSweep>> {
     if (!railIds.length) return new Map();
-    const { rows } = await this.db.execute<{
-      id: string;
-      rail_id: string;
-      taken_at: string;
-      phase: SweepRow['phase'];
-      datum: string | null;
-      status: SweepRow['status'];
-      ls: number;
-      mz: number;
-      stations: number;
-      target: SweepRow['target'];
-    } & SummaryExtras>(sql`
+    const { rows } = await this.db.execute<
+      {
+        id: string;
+        rail_id: string;
+        taken_at: string;
+        phase: SweepRow['phase'];
+        datum: string | null;
+        status: SweepRow['status'];
+        ls: number;
+        mz: number;
+        stations: number;
+        target: SweepRow['target'];
+      } & SummaryExtras
+    >(sql`
       select s.id, s.rail_id, s.taken_at, s.phase, s.datum, s.status, s.target,
              case when jsonb_typeof(s.result #> '{leastSquares,straightness}') = 'number' then (s.result #>> '{leastSquares,straightness}')::float8 end as ls,
              case when jsonb_typeof(s.result #> '{minimumZone,straightness}') = 'number' then (s.result #>> '{minimumZone,straightness}')::float8 end as mz,
@@ -181,7 +208,15 @@ export class RailsRepository {
    */
   async latestSweepsPerDatum(workshopId: string, railIds: string[]): Promise<DatumSweep[]> {
     if (!railIds.length) return [];
-    const { rows } = await this.db.execute<{ id: string; rail_id: string; datum: string; face: SweepRow['face']; taken_at: string; positions_mm: number[]; readings_mm: number[] }>(sql`
+    const { rows } = await this.db.execute<{
+      id: string;
+      rail_id: string;
+      datum: string;
+      face: SweepRow['face'];
+      taken_at: string;
+      positions_mm: number[];
+      readings_mm: number[];
+    }>(sql`
       with recursive keys(rail_id, dkey) as (
         select r.id, (select lower(x.datum) from rail_sweeps x where x.rail_id = r.id and x.datum is not null order by lower(x.datum) limit 1)
         from unnest(${uuidArray(railIds)}) as r(id)
@@ -199,26 +234,36 @@ export class RailsRepository {
         limit 1
       ) s
       where k.dkey is not null`);
-    return rows.map((r) => ({ id: r.id, railId: r.rail_id, datum: r.datum, face: r.face, takenAt: new Date(r.taken_at), positionsMm: r.positions_mm, readingsMm: r.readings_mm }));
+    return rows.map((r) => ({
+      id: r.id,
+      railId: r.rail_id,
+      datum: r.datum,
+      face: r.face,
+      takenAt: new Date(r.taken_at),
+      positionsMm: r.positions_mm,
+      readingsMm: r.readings_mm,
+    }));
   }
 
   /** One page of a rail's sweeps, newest first, after the given one; one row more than asked tells there is a next page. */
   async sweepPage(workshopId: string, railId: string, afterId: string | null, limit: number): Promise<SweepListRow[]> {
-    const { rows } = await this.db.execute<{
-      id: string;
-      rail_id: string;
-      machine_id: string;
-      taken_by: string;
-      taken_at: string;
-      created_at: string;
-      phase: SweepRow['phase'];
-      datum: string | null;
-      status: SweepRow['status'];
-      target: SweepRow['target'];
-      ls: number;
-      mz: number;
-      stations: number;
-    } & SummaryExtras>(sql`
+    const { rows } = await this.db.execute<
+      {
+        id: string;
+        rail_id: string;
+        machine_id: string;
+        taken_by: string;
+        taken_at: string;
+        created_at: string;
+        phase: SweepRow['phase'];
+        datum: string | null;
+        status: SweepRow['status'];
+        target: SweepRow['target'];
+        ls: number;
+        mz: number;
+        stations: number;
+      } & SummaryExtras
+    >(sql`
       select s.id, s.rail_id, s.machine_id, s.taken_by, s.taken_at, s.created_at, s.phase, s.datum, s.status, s.target,
              case when jsonb_typeof(s.result #> '{leastSquares,straightness}') = 'number' then (s.result #>> '{leastSquares,straightness}')::float8 end as ls,
              case when jsonb_typeof(s.result #> '{minimumZone,straightness}') = 'number' then (s.result #>> '{minimumZone,straightness}')::float8 end as mz,
@@ -257,7 +302,10 @@ export class RailsRepository {
   }
 
   async findSweep(workshopId: string, id: string): Promise<SweepRow | null> {
-    const [row] = await this.db.select().from(railSweeps).where(and(eq(railSweeps.workshopId, workshopId), eq(railSweeps.id, id)));
+    const [row] = await this.db
+      .select()
+      .from(railSweeps)
+      .where(and(eq(railSweeps.workshopId, workshopId), eq(railSweeps.id, id)));
     return row ?? null;
   }
 
@@ -270,17 +318,30 @@ export class RailsRepository {
   /** Whole sweeps by id, this workshop's only (the certificate's series read their residuals). */
   sweepsByIds(workshopId: string, ids: string[]): Promise<SweepRow[]> {
     if (!ids.length) return Promise.resolve([]);
-    return this.db.select().from(railSweeps).where(and(eq(railSweeps.workshopId, workshopId), inArray(railSweeps.id, ids)));
+    return this.db
+      .select()
+      .from(railSweeps)
+      .where(and(eq(railSweeps.workshopId, workshopId), inArray(railSweeps.id, ids)));
   }
 
   /** Inserts unless the id exists already; returns null when it did (a retried save). */
   async insertSweep(values: SweepInsert): Promise<SweepRow | null> {
-    const [row] = await this.db.insert(railSweeps).values(values).onConflictDoNothing({ target: railSweeps.id }).returning();
+    const [row] = await this.db
+      .insert(railSweeps)
+      .values(values)
+      .onConflictDoNothing({ target: railSweeps.id })
+      .returning();
     return row ?? null;
   }
 
   /** Writes a sweep's corrected details; returns the row as it now stands. */
-  async updateSweepDetails(workshopId: string, id: string, set: Partial<Pick<SweepRow, 'instrument' | 'temperatureC' | 'takenBy' | 'boltSize' | 'torqueNm' | 'datum' | 'notes'>>): Promise<SweepRow | null> {
+  async updateSweepDetails(
+    workshopId: string,
+    id: string,
+    set: Partial<
+      Pick<SweepRow, 'instrument' | 'temperatureC' | 'takenBy' | 'boltSize' | 'torqueNm' | 'datum' | 'notes'>
+    >,
+  ): Promise<SweepRow | null> {
     const [row] = await this.db
       .update(railSweeps)
       .set({ ...set, updatedAt: new Date() })
@@ -294,7 +355,10 @@ export class RailsRepository {
   }
 
   /** A rail with its machine's target set and that set's targets, in one read, for recording a sweep on it. */
-  async findRailForSweep(workshopId: string, railId: string): Promise<{ rail: RailRow; targetSetId: string; targets: TargetSetRow['targets'] } | null> {
+  async findRailForSweep(
+    workshopId: string,
+    railId: string,
+  ): Promise<{ rail: RailRow; targetSetId: string; targets: TargetSetRow['targets'] } | null> {
     const [found] = await this.db
       .select({ rail: rails, targetSetId: machines.targetSetId, targets: targetSets.targets })
       .from(rails)
@@ -309,7 +373,11 @@ export class RailsRepository {
    * fills are sent back; the rest of the row is what was written.
    */
   async insertSweepFromValues(values: SweepInsert & { createdAt: Date; takenAt: Date }): Promise<SweepRow | null> {
-    const [made] = await this.db.insert(railSweeps).values(values).onConflictDoNothing({ target: railSweeps.id }).returning({ id: railSweeps.id });
+    const [made] = await this.db
+      .insert(railSweeps)
+      .values(values)
+      .onConflictDoNothing({ target: railSweeps.id })
+      .returning({ id: railSweeps.id });
     if (!made) return null;
     return {
       instrument: '',

@@ -6,7 +6,13 @@ import { EngineInputError } from '../engine/engine-input-error.js';
 import { defaultEndDistanceMm, endDistanceProblem } from '../engine/rail-holes.js';
 import { fromMm, toMm, type LengthUnit } from '../engine/units.js';
 import { typicalBoltFor } from './bolt-torques.js';
-import { railHoles, toRailResponse, toLatestSweepSummary, type RailListItem, type RailResponse } from './rail.mapper.js';
+import {
+  railHoles,
+  toRailResponse,
+  toLatestSweepSummary,
+  type RailListItem,
+  type RailResponse,
+} from './rail.mapper.js';
 import { RailsRepository, type RailRow } from './rails.repository.js';
 import type { CreateRailDto } from './dto/create-rail.dto.js';
 import type { UpdateRailDto } from './dto/update-rail.dto.js';
@@ -25,10 +31,17 @@ export class RailsService {
     const rows = await this.repo.listRails(actor.workshopId, machineId);
     const ids = rows.map((r) => r.id);
     // The newest sweep of each rail and a count: the list costs the same at 10 or 10 000 sweeps.
-    const [latest, counts] = await Promise.all([this.repo.latestSweeps(actor.workshopId, ids), this.repo.sweepCounts(actor.workshopId, ids)]);
+    const [latest, counts] = await Promise.all([
+      this.repo.latestSweeps(actor.workshopId, ids),
+      this.repo.sweepCounts(actor.workshopId, ids),
+    ]);
     return rows.map((row) => {
       const newest = latest.get(row.id);
-      return { ...toRailResponse(row), sweepCount: counts.get(row.id) ?? 0, latestSweep: newest ? toLatestSweepSummary(newest) : null };
+      return {
+        ...toRailResponse(row),
+        sweepCount: counts.get(row.id) ?? 0,
+        latestSweep: newest ? toLatestSweepSummary(newest) : null,
+      };
     });
   }
 
@@ -52,10 +65,23 @@ export class RailsService {
     const row = await this.repo.saveRail(
       actor.workshopId,
       null,
-      { machineId, label: dto.label.trim(), axis: dto.axis.trim().toUpperCase(), profileSizeMm: dto.profileSize ?? null, lengthUnit: unit, ...g },
+      {
+        machineId,
+        label: dto.label.trim(),
+        axis: dto.axis.trim().toUpperCase(),
+        profileSizeMm: dto.profileSize ?? null,
+        lengthUnit: unit,
+        ...g,
+      },
       { set: !!dto.partnerRailId, partnerId: dto.partnerRailId ?? null },
     );
-    await this.records.audit(actor, { machineId, recordType: 'rail', recordId: row.id, action: 'created', summary: `Rail ${row.label} (${row.axis}, ${showLength(row.lengthMm, unit)}) added` });
+    await this.records.audit(actor, {
+      machineId,
+      recordType: 'rail',
+      recordId: row.id,
+      action: 'created',
+      summary: `Rail ${row.label} (${row.axis}, ${showLength(row.lengthMm, unit)}) added`,
+    });
     return toRailResponse(row);
   }
 
@@ -63,7 +89,9 @@ export class RailsService {
     const before = await this.findRow(actor, id);
     const unit = dto.lengthUnit ?? before.lengthUnit;
     const g = railGeometryMm(dto, unit, before);
-    const geometryTouched = ['length', 'holePitch', 'firstHole', 'endDistance', 'profileSize'].some((k) => dto[k as keyof UpdateRailDto] !== undefined);
+    const geometryTouched = ['length', 'holePitch', 'firstHole', 'endDistance', 'profileSize'].some(
+      (k) => dto[k as keyof UpdateRailDto] !== undefined,
+    );
     // A rail saved before end distances were kept may be renamed without first fixing its holes.
     if (geometryTouched) checkGeometry(g, dto.profileSize !== undefined ? dto.profileSize : before.profileSizeMm, unit);
     const partnerGiven = dto.partnerRailId !== undefined;
@@ -71,7 +99,13 @@ export class RailsService {
     const row = await this.repo.saveRail(
       actor.workshopId,
       id,
-      { label: dto.label?.trim(), axis: dto.axis?.trim().toUpperCase(), profileSizeMm: dto.profileSize, lengthUnit: unit, ...g },
+      {
+        label: dto.label?.trim(),
+        axis: dto.axis?.trim().toUpperCase(),
+        profileSizeMm: dto.profileSize,
+        lengthUnit: unit,
+        ...g,
+      },
       { set: partnerGiven, partnerId: dto.partnerRailId ?? null },
     );
     await this.records.audit(actor, {
@@ -89,15 +123,24 @@ export class RailsService {
     const row = await this.findRow(actor, id);
     const ids = (await this.repo.sweepIds(actor.workshopId, id)).map((s) => s.id);
     const locked = await this.records.lockedIds('rail-sweep', ids);
-    if (locked.size) await this.records.assertEditable('rail-sweep', [...locked][0], `Rail ${row.label} has a sweep that`);
+    if (locked.size)
+      await this.records.assertEditable('rail-sweep', [...locked][0], `Rail ${row.label} has a sweep that`);
     await this.repo.deleteRail(actor.workshopId, id);
-    await this.records.audit(actor, { machineId: row.machineId, recordType: 'rail', recordId: id, action: 'deleted', summary: `Rail ${row.label} removed with its ${ids.length} sweep(s)` });
+    await this.records.audit(actor, {
+      machineId: row.machineId,
+      recordType: 'rail',
+      recordId: id,
+      action: 'deleted',
+      summary: `Rail ${row.label} removed with its ${ids.length} sweep(s)`,
+    });
   }
 
   private async checkPartner(actor: SessionUser, machineId: string, selfId: string | null, partnerId: string) {
-    if (partnerId === selfId) throw new BadRequestException(['partnerRailId must be another rail, not the rail itself']);
+    if (partnerId === selfId)
+      throw new BadRequestException(['partnerRailId must be another rail, not the rail itself']);
     const partner = await this.repo.findRail(actor.workshopId, partnerId);
-    if (!partner || partner.machineId !== machineId) throw new BadRequestException(['partnerRailId must be the id of another rail of this machine']);
+    if (!partner || partner.machineId !== machineId)
+      throw new BadRequestException(['partnerRailId must be the id of another rail of this machine']);
   }
 }
 
@@ -105,7 +148,8 @@ type Geometry = Pick<RailRow, 'lengthMm' | 'holePitchMm' | 'firstHoleMm' | 'spac
 
 /** The request's lengths in mm (each in `unit`), the stored ones where the request is silent. */
 function railGeometryMm(dto: UpdateRailDto, unit: LengthUnit, before: RailRow | null): Geometry {
-  const mm = (v: number | null | undefined, old: number | null) => (v === undefined ? old : v === null ? null : toMm(v, unit));
+  const mm = (v: number | null | undefined, old: number | null) =>
+    v === undefined ? old : v === null ? null : toMm(v, unit);
   return {
     lengthMm: mm(dto.length, before?.lengthMm ?? null)!,
     holePitchMm: mm(dto.holePitch, before?.holePitchMm ?? null)!,
@@ -115,20 +159,27 @@ function railGeometryMm(dto: UpdateRailDto, unit: LengthUnit, before: RailRow | 
   };
 }
 
-const showLength = (mm: number, unit: LengthUnit) => `${+fromMm(mm, unit).toPrecision(10)} ${unit === 'um' ? 'µm' : unit}`;
+const showLength = (mm: number, unit: LengthUnit) =>
+  `${+fromMm(mm, unit).toPrecision(10)} ${unit === 'um' ? 'µm' : unit}`;
 
 /** Bounds in mm, named by field with the value as sent, then the holes' end distance at both ends. */
 function checkGeometry(g: Geometry, profileSize: number | null, unit: LengthUnit) {
   const problems: string[] = [];
   const within = (field: string, mm: number | null, lo: number, hi: number) => {
     if (mm === null) return;
-    if (mm < lo || mm > hi) problems.push(`${field} must be between ${showLength(lo, unit)} and ${showLength(hi, unit)} (${showLength(mm, unit)} given)`);
+    if (mm < lo || mm > hi)
+      problems.push(
+        `${field} must be between ${showLength(lo, unit)} and ${showLength(hi, unit)} (${showLength(mm, unit)} given)`,
+      );
   };
   within('length', g.lengthMm, 10, 20_000);
   within('holePitch', g.holePitchMm, 5, 1000);
   within('spacing', g.spacingMm, 10, 20_000);
   within('endDistance', g.endDistanceMm, 0, 1000);
-  if (g.firstHoleMm > g.lengthMm) problems.push(`firstHole must not be larger than length (${showLength(g.firstHoleMm, unit)} beyond a ${showLength(g.lengthMm, unit)} rail)`);
+  if (g.firstHoleMm > g.lengthMm)
+    problems.push(
+      `firstHole must not be larger than length (${showLength(g.firstHoleMm, unit)} beyond a ${showLength(g.lengthMm, unit)} rail)`,
+    );
   if (problems.length) throw new BadRequestException(problems);
   let holes: { position: number }[];
   try {
@@ -138,9 +189,18 @@ function checkGeometry(g: Geometry, profileSize: number | null, unit: LengthUnit
     throw e;
   }
   const endDistanceMm = g.endDistanceMm ?? defaultEndDistanceMm(typicalBoltFor(profileSize));
-  const bad = endDistanceProblem(holes.map((h) => h.position), g.lengthMm, endDistanceMm);
+  const bad = endDistanceProblem(
+    holes.map((h) => h.position),
+    g.lengthMm,
+    endDistanceMm,
+  );
   if (bad) {
-    const where = bad.clearanceMm <= 0 ? (bad.clearanceMm === 0 ? 'sits on' : 'lies beyond') : `is ${showLength(bad.clearanceMm, unit)} from`;
+    const where =
+      bad.clearanceMm <= 0
+        ? bad.clearanceMm === 0
+          ? 'sits on'
+          : 'lies beyond'
+        : `is ${showLength(bad.clearanceMm, unit)} from`;
     const field = bad.end === 'start' ? 'firstHole' : 'length';
     throw new BadRequestException([
       `${field}: the hole at ${showLength(bad.positionMm, unit)} ${where} the rail's ${bad.end === 'start' ? 'start' : 'far end'}; every hole centre needs at least ${showLength(endDistanceMm, unit)} (endDistance) from both ends — change firstHole, holePitch or length`,
@@ -150,7 +210,18 @@ function checkGeometry(g: Geometry, profileSize: number | null, unit: LengthUnit
 
 function changes(before: RailRow, after: RailRow): Record<string, unknown> {
   const out: Record<string, unknown> = {};
-  for (const key of ['label', 'axis', 'lengthUnit', 'lengthMm', 'profileSizeMm', 'holePitchMm', 'firstHoleMm', 'spacingMm', 'endDistanceMm', 'partnerRailId'] as const) {
+  for (const key of [
+    'label',
+    'axis',
+    'lengthUnit',
+    'lengthMm',
+    'profileSizeMm',
+    'holePitchMm',
+    'firstHoleMm',
+    'spacingMm',
+    'endDistanceMm',
+    'partnerRailId',
+  ] as const) {
     if (before[key] !== after[key]) out[key] = { from: before[key], to: after[key] };
   }
   return out;

@@ -8,7 +8,8 @@ import type { ResultWarning } from '../engine/warnings.js';
 import { targetInBaseUnit } from '../target-sets/target-keys.js';
 
 /** The reference line the straightness target names; minimum zone (ISO 1101) when it names none. */
-export const referenceOf = (t: Pick<TargetValue, 'reference'> | null | undefined): StraightnessReference => t?.reference ?? 'minimum-zone';
+export const referenceOf = (t: Pick<TargetValue, 'reference'> | null | undefined): StraightnessReference =>
+  t?.reference ?? 'minimum-zone';
 
 export const REFERENCE_WORDS: Record<StraightnessReference, string> = {
   'minimum-zone': 'minimum zone (ISO 1101)',
@@ -16,11 +17,17 @@ export const REFERENCE_WORDS: Record<StraightnessReference, string> = {
 };
 
 /** The straightness judged against the target: the figure of the line the target names. */
-export function judgedStraightnessMm(r: Pick<StoredSweepResult, 'leastSquares' | 'minimumZone'>, reference: StraightnessReference): number {
+export function judgedStraightnessMm(
+  r: Pick<StoredSweepResult, 'leastSquares' | 'minimumZone'>,
+  reference: StraightnessReference,
+): number {
   return reference === 'least-squares' ? r.leastSquares.straightness : r.minimumZone.straightness;
 }
 
-export function judgedFigure(s: { leastSquaresStraightness: number; minimumZoneStraightness: number }, reference: StraightnessReference): number {
+export function judgedFigure(
+  s: { leastSquaresStraightness: number; minimumZoneStraightness: number },
+  reference: StraightnessReference,
+): number {
   return reference === 'least-squares' ? s.leastSquaresStraightness : s.minimumZoneStraightness;
 }
 
@@ -58,4 +65,9 @@ export function warningsForSweep(
 }
 
 /** Resolution of a stored sweep in mm (it is kept in the reading unit). */
-export const resolutionMmOf = (row: Pick<SweepRow, 'resolution' | 'readingUnit'>) => (row.resolution === null ? null : fromMm(1, 'mm') * row.resolution * (row.readingUnit === 'mm' ? 1 : row.readingUnit === 'um' ? 0.001 : row.readingUnit === 'in' ? 25.4 : 0.0254));
+export const resolutionMmOf = (row: Pick<SweepRow, 'resolution' | 'readingUnit'>) =>
+  row.resolution === null
+    ? null
+    : fromMm(1, 'mm') *
+      row.resolution *
+      (row.readingUnit === 'mm' ? 1 : row.readingUnit === 'um' ? 0.001 : row.readingUnit === 'in' ? 25.4 : 0.0254);

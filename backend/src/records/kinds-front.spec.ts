@@ -9,7 +9,10 @@ describe('the browser knows every kind the server has', () => {
   it('has every check kind, in the board order, with its label and sense', () => {
     expect(Object.keys(front.CHECK_KINDS)).toEqual(CHECK_KIND_NAMES);
     for (const kind of CHECK_KIND_NAMES) {
-      expect([kind, front.CHECK_KINDS[kind]]).toEqual([kind, { label: CHECK_KINDS[kind].label, sense: CHECK_KINDS[kind].sense }]);
+      expect([kind, front.CHECK_KINDS[kind]]).toEqual([
+        kind,
+        { label: CHECK_KINDS[kind].label, sense: CHECK_KINDS[kind].sense },
+      ]);
     }
   });
 
@@ -18,12 +21,19 @@ describe('the browser knows every kind the server has', () => {
     for (const type of RECORD_TYPE_NAMES) {
       const server: { label: string; evidence?: string; history: string | null } = RECORD_TYPES[type];
       const browser: { label: string; evidence?: string; history: string | null } = front.RECORD_TYPES[type];
-      expect([type, browser.label, browser.evidence, browser.history]).toEqual([type, server.label, server.evidence, server.history]);
+      expect([type, browser.label, browser.evidence, browser.history]).toEqual([
+        type,
+        server.label,
+        server.evidence,
+        server.history,
+      ]);
     }
   });
 
   it('offers the workshop history its own kinds first, then a machine\u2019s', () => {
-    expect(front.historyKinds('machine').map(([k]) => k)).toEqual(RECORD_TYPE_NAMES.filter((k) => RECORD_TYPES[k].history === 'machine'));
+    expect(front.historyKinds('machine').map(([k]) => k)).toEqual(
+      RECORD_TYPE_NAMES.filter((k) => RECORD_TYPES[k].history === 'machine'),
+    );
     expect(front.historyKinds('workshop').map(([k]) => k)).toEqual([
       ...RECORD_TYPE_NAMES.filter((k) => RECORD_TYPES[k].history === 'workshop'),
       ...RECORD_TYPE_NAMES.filter((k) => RECORD_TYPES[k].history === 'machine'),

@@ -1,5 +1,15 @@
 import type { CheckRecordedEvent, RecordsService } from './records.service.js';
-import { CHECK_KIND_NAMES, CHECK_KINDS, EVIDENCE_SUBJECT_TYPES, isRecordType, RECORD_TYPE_NAMES, RECORD_TYPES, recordTypeLabel, SIGNED_RECORD_TYPES, type CheckKind } from './kinds.js';
+import {
+  CHECK_KIND_NAMES,
+  CHECK_KINDS,
+  EVIDENCE_SUBJECT_TYPES,
+  isRecordType,
+  RECORD_TYPE_NAMES,
+  RECORD_TYPES,
+  recordTypeLabel,
+  SIGNED_RECORD_TYPES,
+  type CheckKind,
+} from './kinds.js';
 
 // Checked by the type-checker (npm run check), which fails on an @ts-expect-error that no longer
 // finds an error: a misspelt kind must not compile where locks, audits and checks take one.
@@ -18,18 +28,26 @@ const typed = [lockable, misspeltLock, unsignedLock, misspeltAudit, misspeltChec
 
 describe('the kinds list', () => {
   it('keeps every check in a record an approval can lock and sign', () => {
-    for (const kind of CHECK_KIND_NAMES) expect([kind, SIGNED_RECORD_TYPES.includes(CHECK_KINDS[kind].recordType)]).toEqual([kind, true]);
-    for (const type of SIGNED_RECORD_TYPES) expect([type, typeof (RECORD_TYPES[type] as { table?: string }).table]).toEqual([type, 'string']);
+    for (const kind of CHECK_KIND_NAMES)
+      expect([kind, SIGNED_RECORD_TYPES.includes(CHECK_KINDS[kind].recordType)]).toEqual([kind, true]);
+    for (const type of SIGNED_RECORD_TYPES)
+      expect([type, typeof (RECORD_TYPES[type] as { table?: string }).table]).toEqual([type, 'string']);
   });
 
   it('names every kind once and in plain words, and an unknown one in words made from it', () => {
     const labels = RECORD_TYPE_NAMES.map((k) => RECORD_TYPES[k].label);
     expect(new Set(labels).size).toBe(labels.length);
     expect(new Set(CHECK_KIND_NAMES.map((k: CheckKind) => CHECK_KINDS[k].label)).size).toBe(CHECK_KIND_NAMES.length);
-    expect(EVIDENCE_SUBJECT_TYPES).toEqual(expect.arrayContaining(['machine', 'rail-sweep', 'backlash-check', 'safety-item']));
+    expect(EVIDENCE_SUBJECT_TYPES).toEqual(
+      expect.arrayContaining(['machine', 'rail-sweep', 'backlash-check', 'safety-item']),
+    );
     expect(recordTypeLabel('positioning-run')).toBe('Positioning run');
     expect(recordTypeLabel('retired-kind')).toBe('Retired kind');
-    expect([isRecordType('rail-sweep'), isRecordType('rail_sweep'), isRecordType('toString')]).toEqual([true, false, false]);
+    expect([isRecordType('rail-sweep'), isRecordType('rail_sweep'), isRecordType('toString')]).toEqual([
+      true,
+      false,
+      false,
+    ]);
     expect(typed).toHaveLength(5);
   });
 });

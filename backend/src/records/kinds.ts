@@ -21,32 +21,106 @@ type RecordTypeSpec = {
   readiness: boolean;
   /** Offered in the history filter: of a machine (and the workshop), of the workshop only, or not at all. */
   history: 'machine' | 'workshop' | null;
-} & (
+} &
   /** An approval can stand on it: it is locked, and its row in `table` is signed (approvals/signing/). */
-  | { signed: true; table: string }
-  | { signed: false; table?: string }
-);
+  ({ signed: true; table: string } | { signed: false; table?: string });
 
 /** Every record type the services audit, lock and attach evidence to; the order is the history filter's. */
 export const RECORD_TYPES = {
-  machine: { table: 'machines', label: 'Machine', signed: true, evidence: 'Machine', readiness: true, history: 'machine' },
+  machine: {
+    table: 'machines',
+    label: 'Machine',
+    signed: true,
+    evidence: 'Machine',
+    readiness: true,
+    history: 'machine',
+  },
   rail: { table: 'rails', label: 'Rail', signed: true, evidence: 'Rail', readiness: true, history: 'machine' },
-  'rail-sweep': { table: 'rail_sweeps', label: 'Rail sweep', signed: true, evidence: 'Rail sweep', readiness: true, history: 'machine' },
-  'bolt-down': { table: 'bolt_downs', label: 'Bolt-down', signed: true, evidence: 'Bolt-down', readiness: false, history: 'machine' },
+  'rail-sweep': {
+    table: 'rail_sweeps',
+    label: 'Rail sweep',
+    signed: true,
+    evidence: 'Rail sweep',
+    readiness: true,
+    history: 'machine',
+  },
+  'bolt-down': {
+    table: 'bolt_downs',
+    label: 'Bolt-down',
+    signed: true,
+    evidence: 'Bolt-down',
+    readiness: false,
+    history: 'machine',
+  },
   axis: { table: 'axes', label: 'Axis', signed: true, evidence: 'Axis', readiness: true, history: 'machine' },
-  'travel-trial': { table: 'travel_trials', label: 'Travel trial', signed: true, evidence: 'Travel trial', readiness: true, history: 'machine' },
-  'positioning-run': { table: 'positioning_runs', label: 'Positioning run', signed: true, evidence: 'Repeat-and-reverse run', readiness: true, history: 'machine' },
-  'backlash-check': { table: 'backlash_checks', label: 'Backlash check', signed: true, evidence: 'Backlash check', readiness: true, history: 'machine' },
-  'diagonal-check': { table: 'diagonal_checks', label: 'Squareness check', signed: true, evidence: 'Diagonal check', readiness: true, history: 'machine' },
-  'bed-grid': { table: 'bed_grids', label: 'Bed flatness', signed: true, evidence: 'Bed grid', readiness: true, history: 'machine' },
-  'test-cut': { table: 'test_cuts', label: 'Test cut', signed: true, evidence: 'Test cut', readiness: true, history: 'machine' },
+  'travel-trial': {
+    table: 'travel_trials',
+    label: 'Travel trial',
+    signed: true,
+    evidence: 'Travel trial',
+    readiness: true,
+    history: 'machine',
+  },
+  'positioning-run': {
+    table: 'positioning_runs',
+    label: 'Positioning run',
+    signed: true,
+    evidence: 'Repeat-and-reverse run',
+    readiness: true,
+    history: 'machine',
+  },
+  'backlash-check': {
+    table: 'backlash_checks',
+    label: 'Backlash check',
+    signed: true,
+    evidence: 'Backlash check',
+    readiness: true,
+    history: 'machine',
+  },
+  'diagonal-check': {
+    table: 'diagonal_checks',
+    label: 'Squareness check',
+    signed: true,
+    evidence: 'Diagonal check',
+    readiness: true,
+    history: 'machine',
+  },
+  'bed-grid': {
+    table: 'bed_grids',
+    label: 'Bed flatness',
+    signed: true,
+    evidence: 'Bed grid',
+    readiness: true,
+    history: 'machine',
+  },
+  'test-cut': {
+    table: 'test_cuts',
+    label: 'Test cut',
+    signed: true,
+    evidence: 'Test cut',
+    readiness: true,
+    history: 'machine',
+  },
   'safety-walk': { table: 'safety_walks', label: 'Safety walk', signed: true, readiness: true, history: 'machine' },
   waiver: { table: 'waivers', label: 'Waiver', signed: true, readiness: true, history: 'machine' },
   approval: { table: 'approvals', label: 'Approval', signed: false, readiness: false, history: 'machine' },
-  'approval-request': { table: 'approval_requests', label: 'Approval request', signed: false, readiness: true, history: null },
+  'approval-request': {
+    table: 'approval_requests',
+    label: 'Approval request',
+    signed: false,
+    readiness: true,
+    history: null,
+  },
   evidence: { table: 'evidence', label: 'Photo or file', signed: false, readiness: false, history: 'machine' },
   'hole-pattern': { table: 'hole_patterns', label: 'Hole pattern', signed: false, readiness: true, history: 'machine' },
-  'safety-item': { table: 'safety_items', label: 'Safety-walk item', signed: false, evidence: 'Safety walk item', readiness: true, history: 'workshop' },
+  'safety-item': {
+    table: 'safety_items',
+    label: 'Safety-walk item',
+    signed: false,
+    evidence: 'Safety walk item',
+    readiness: true,
+    history: 'workshop',
+  },
   'target-set': { table: 'target_sets', label: 'Target set', signed: false, readiness: true, history: 'workshop' },
   person: { table: 'users', label: 'Person', signed: false, readiness: false, history: 'workshop' },
   'sign-in': { label: 'Sign-in', signed: false, readiness: false, history: 'workshop' },
@@ -63,11 +137,15 @@ export type SignedRecordType = { [K in RecordType]: Spec<K>['signed'] extends tr
 export type EvidenceSubjectType = { [K in RecordType]: Spec<K> extends { evidence: string } ? K : never }[RecordType];
 
 export const SIGNED_RECORD_TYPES = RECORD_TYPE_NAMES.filter((k) => RECORD_TYPES[k].signed) as SignedRecordType[];
-export const EVIDENCE_SUBJECT_TYPES = RECORD_TYPE_NAMES.filter((k) => 'evidence' in RECORD_TYPES[k]) as EvidenceSubjectType[];
+export const EVIDENCE_SUBJECT_TYPES = RECORD_TYPE_NAMES.filter(
+  (k) => 'evidence' in RECORD_TYPES[k],
+) as EvidenceSubjectType[];
 
 export const isRecordType = (value: string): value is RecordType => Object.hasOwn(RECORD_TYPES, value);
-export const isSignedRecordType = (value: string): value is SignedRecordType => isRecordType(value) && RECORD_TYPES[value].signed;
-export const isEvidenceSubjectType = (value: string): value is EvidenceSubjectType => isRecordType(value) && 'evidence' in RECORD_TYPES[value];
+export const isSignedRecordType = (value: string): value is SignedRecordType =>
+  isRecordType(value) && RECORD_TYPES[value].signed;
+export const isEvidenceSubjectType = (value: string): value is EvidenceSubjectType =>
+  isRecordType(value) && 'evidence' in RECORD_TYPES[value];
 
 /** How a check's result is read against its target: at most, at least, or within ± the target. */
 export type TargetSense = 'at-most' | 'at-least' | 'plus-minus' | 'all-passed';
@@ -105,4 +183,6 @@ export const isCheckKind = (value: string): value is CheckKind => Object.hasOwn(
 
 /** The record type's plain name; a type no longer known (older history) in words made from it. */
 export const recordTypeLabel = (recordType: string): string =>
-  isRecordType(recordType) ? RECORD_TYPES[recordType].label : recordType.replace(/-/g, ' ').replace(/^./, (c) => c.toUpperCase());
+  isRecordType(recordType)
+    ? RECORD_TYPES[recordType].label
+    : recordType.replace(/-/g, ' ').replace(/^./, (c) => c.toUpperCase());

@@ -14,7 +14,6 @@ import { RecordsService, type RecordChange } from './records.service.js';
 // 3: the summary keeps its checks, so that a recorded check asks only its own contributor again.
 export const SUMMARY_VERSION = 3;
 
-
 export interface ReadinessEvaluation {
   /** In the state it reads as now: "recheck-due" once the standing approval's date has passed. */
   machine: MachineRef & { name: string; state: MachineState };
@@ -42,7 +41,9 @@ export function countBoard(checks: BoardCheck[]): ReadinessCounts {
     within: count('within-target'),
     outside: count('outside-target'),
     waived: count('waived'),
-    firstBlocking: first ? { key: first.key, kind: first.kind, subject: first.subject, status: first.status as BlockingCheckRef['status'] } : null,
+    firstBlocking: first
+      ? { key: first.key, kind: first.kind, subject: first.subject, status: first.status as BlockingCheckRef['status'] }
+      : null,
   };
 }
 
@@ -83,7 +84,10 @@ export class ReadinessSummaryService implements OnModuleInit, OnApplicationBoots
     const found = await this.repo.context(workshopId, machineId, false);
     if (!found) throw new NotFoundException('No such machine in this workshop');
     const targetSet = targetSetOf(found);
-    const checks = boardChecks(await this.registry.checksFor(found.machine, { targets: targetSet.targets, series: options.series }), found.waivers);
+    const checks = boardChecks(
+      await this.registry.checksFor(found.machine, { targets: targetSet.targets, series: options.series }),
+      found.waivers,
+    );
     const interval = targetSet.targets.recheckIntervalDays;
     return {
       machine: found.machine,
@@ -107,12 +111,23 @@ export class ReadinessSummaryService implements OnModuleInit, OnApplicationBoots
     const stored = found.summary?.version === version ? found.summary.checks : null;
     let checks: SummaryCheck[];
     if (only.length && stored) {
-      const fresh = await Promise.all(only.map(async (index) => (await this.registry.checksOf(index, found.machine, context)).map((c) => summaryCheck(index, c))));
+      const fresh = await Promise.all(
+        only.map(async (index) =>
+          (await this.registry.checksOf(index, found.machine, context)).map((c) => summaryCheck(index, c)),
+        ),
+      );
       checks = [...stored.filter((c) => !only.includes(c.contributor)), ...fresh.flat()];
     } else {
-      checks = (await this.registry.byContributor(found.machine, context)).flatMap((list, index) => list.map((c) => summaryCheck(index, c)));
+      checks = (await this.registry.byContributor(found.machine, context)).flatMap((list, index) =>
+        list.map((c) => summaryCheck(index, c)),
+      );
     }
-    const counts = countBoard(boardChecks(checks.map((c) => asReadinessCheck(c, machineId)), found.waivers));
+    const counts = countBoard(
+      boardChecks(
+        checks.map((c) => asReadinessCheck(c, machineId)),
+        found.waivers,
+      ),
+    );
     await this.repo.upsert({ machineId, workshopId, ...counts, checks, version });
     return counts;
   }
@@ -155,5 +170,16 @@ function summaryCheck(contributor: number, c: ReadinessCheck): SummaryCheck {
 
 /** A stored check as the board counts it: waivers match on key and record, order on kind, subject and key. */
 function asReadinessCheck(c: SummaryCheck, machineId: string): ReadinessCheck {
-  return { key: c.key, kind: c.kind, subject: c.subject, status: c.status, recordId: c.recordId, target: null, result: null, recordType: null, recordedAt: null, place: { machineId, tab: 'readiness' } };
+  return {
+    key: c.key,
+    kind: c.kind,
+    subject: c.subject,
+    status: c.status,
+    recordId: c.recordId,
+    target: null,
+    result: null,
+    recordType: null,
+    recordedAt: null,
+    place: { machineId, tab: 'readiness' },
+  };
 }

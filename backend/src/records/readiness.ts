@@ -40,7 +40,10 @@ export interface ReadinessCheck {
  * A machine's screen, as ids: its file (on a tab), one of its rails or one of its axes. The API
  * answers carry no screen paths; the front end turns this into a link (features/approvals/check-place.ts).
  */
-export type CheckPlace = { machineId: string; tab: 'readiness' | 'frame' | 'safety' | 'drives' | 'rails' } | { machineId: string; railId: string } | { machineId: string; axisId: string };
+export type CheckPlace =
+  | { machineId: string; tab: 'readiness' | 'frame' | 'safety' | 'drives' | 'rails' }
+  | { machineId: string; railId: string }
+  | { machineId: string; axisId: string };
 
 /** A chart's data in the units it is drawn in: lines of [x, y] points and optional limit lines. */
 export interface CheckSeries {

@@ -9,7 +9,14 @@ import { SubjectsRegistry } from './subjects.registry.js';
 /** Shared by every domain module: audit history, approval locks, readiness contributors. */
 @Global()
 @Module({
-  providers: [RecordsRepository, RecordsService, ReadinessRegistry, SubjectsRegistry, ReadinessSummaryRepository, ReadinessSummaryService],
+  providers: [
+    RecordsRepository,
+    RecordsService,
+    ReadinessRegistry,
+    SubjectsRegistry,
+    ReadinessSummaryRepository,
+    ReadinessSummaryService,
+  ],
   exports: [RecordsService, ReadinessRegistry, SubjectsRegistry, ReadinessSummaryService],
 })
 export class RecordsModule {}

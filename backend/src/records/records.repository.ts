@@ -30,7 +30,9 @@ export class RecordsRepository {
   /** The audit entry and the machine's last activity in one statement (one round trip per command). */
   async insertAuditAndTouch(values: typeof auditEntries.$inferInsert & { machineId: string }) {
     const insert = this.db.insert(auditEntries).values({ at: sql`clock_timestamp()`, ...values });
-    await this.db.execute(sql`with audit as (${insert.getSQL()}) update ${machines} set last_activity_at = now() where ${machines.id} = ${values.machineId}`);
+    await this.db.execute(
+      sql`with audit as (${insert.getSQL()}) update ${machines} set last_activity_at = now() where ${machines.id} = ${values.machineId}`,
+    );
   }
 
   /** One page of a workshop's (or one machine's) history, newest first; one row more than asked tells there is a next page. */
@@ -44,7 +46,8 @@ export class RecordsRepository {
     }
     if (f.from) where.push(gte(auditEntries.at, f.from));
     if (f.toExclusive) where.push(lt(auditEntries.at, f.toExclusive));
-    if (f.after) where.push(sql`(${auditEntries.at}, ${auditEntries.id}) < (${f.after.at}::timestamptz, ${f.after.id}::uuid)`);
+    if (f.after)
+      where.push(sql`(${auditEntries.at}, ${auditEntries.id}) < (${f.after.at}::timestamptz, ${f.after.id}::uuid)`);
     return this.db
       .select({
         id: auditEntries.id,
@@ -90,7 +93,12 @@ export class RecordsRepository {
         newValues: changeLog.newValues,
       })
       .from(changeLog)
-      .where(and(inArray(changeLog.txid, txids), or(eq(changeLog.workshopId, workshopId), sql`${changeLog.workshopId} is null`)))
+      .where(
+        and(
+          inArray(changeLog.txid, txids),
+          or(eq(changeLog.workshopId, workshopId), sql`${changeLog.workshopId} is null`),
+        ),
+      )
       .orderBy(asc(changeLog.at), asc(changeLog.id));
   }
 
@@ -118,6 +126,9 @@ export class RecordsRepository {
 
   async insertLocks(approvalId: string, refs: { recordType: SignedRecordType; recordId: string }[]) {
     if (!refs.length) return;
-    await this.db.insert(recordLocks).values(refs.map((r) => ({ ...r, approvalId }))).onConflictDoNothing();
+    await this.db
+      .insert(recordLocks)
+      .values(refs.map((r) => ({ ...r, approvalId })))
+      .onConflictDoNothing();
   }
 }

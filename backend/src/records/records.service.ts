@@ -1,6 +1,12 @@
 import { BadRequestException, ConflictException, Injectable, Logger } from '@nestjs/common';
 import type { SessionUser } from '../auth/session-user.js';
-import { assignChanges, decodeCursor, encodeCursor, toHistoryEntry, type HistoryPage } from '../history/history.mapper.js';
+import {
+  assignChanges,
+  decodeCursor,
+  encodeCursor,
+  toHistoryEntry,
+  type HistoryPage,
+} from '../history/history.mapper.js';
 import type { HistoryQueryDto } from '../history/dto/history-query.dto.js';
 import { isRecordType, RECORD_TYPE_NAMES, type CheckKind, type RecordType, type SignedRecordType } from './kinds.js';
 import type { CheckStatus } from './readiness.js';
@@ -8,7 +14,9 @@ import { RecordsRepository } from './records.repository.js';
 
 /** The refusal for a change to a record that an approval was based on. */
 export function lockedRecordConflict(what = 'This record'): ConflictException {
-  return new ConflictException(`${what} is part of an approved commissioning record and can no longer be changed or deleted. Record a new check instead.`);
+  return new ConflictException(
+    `${what} is part of an approved commissioning record and can no longer be changed or deleted. Record a new check instead.`,
+  );
 }
 
 /** Who an audit entry names: a signed-in person, or (for a failed sign-in) nobody known. */
@@ -70,7 +78,13 @@ export class RecordsService {
     else await this.repo.insertAudit(values);
     // After the machine's touch: that row lock makes commands on one machine take turns, so each
     // listener (the readiness summary) reads what the command before it committed.
-    const change: RecordChange = { machineId: input.machineId ?? null, recordType: input.recordType, recordId: input.recordId ?? null, action: input.action, checkKind: input.checkKind };
+    const change: RecordChange = {
+      machineId: input.machineId ?? null,
+      recordType: input.recordType,
+      recordId: input.recordId ?? null,
+      action: input.action,
+      checkKind: input.checkKind,
+    };
     for (const listener of this.changeListeners) await listener(actor.workshopId, change);
   }
 
@@ -81,7 +95,15 @@ export class RecordsService {
 
   /** Call after saving a check's result: audits it and lets approvals react (e.g. leave ready-to-cut). */
   async checkRecorded(actor: SessionUser, event: CheckRecordedEvent, summary: string): Promise<void> {
-    await this.audit(actor, { machineId: event.machineId, recordType: event.recordType, recordId: event.recordId, action: 'recorded', summary, changes: { status: event.status }, checkKind: event.kind });
+    await this.audit(actor, {
+      machineId: event.machineId,
+      recordType: event.recordType,
+      recordId: event.recordId,
+      action: 'recorded',
+      summary,
+      changes: { status: event.status },
+      checkKind: event.kind,
+    });
     for (const listener of this.listeners) {
       try {
         await listener(actor, event);
@@ -116,14 +138,30 @@ export class RecordsService {
     const after = query.cursor ? decodeCursor(query.cursor) : undefined;
     if (after === null) throw new BadRequestException(['cursor must be the nextCursor of an earlier page']);
     const from = query.from ? new Date(query.from) : undefined;
-    const toExclusive = query.to ? (DATE_ONLY.test(query.to) ? new Date(Date.parse(query.to) + 86_400_000) : new Date(Date.parse(query.to) + 1)) : undefined;
+    const toExclusive = query.to
+      ? DATE_ONLY.test(query.to)
+        ? new Date(Date.parse(query.to) + 86_400_000)
+        : new Date(Date.parse(query.to) + 1)
+      : undefined;
     if (from && toExclusive && from >= toExclusive) throw new BadRequestException(['from must be before to']);
-    if (query.kind && !isRecordType(query.kind)) throw new BadRequestException([`kind must be one of ${RECORD_TYPE_NAMES.join(', ')}`]);
+    if (query.kind && !isRecordType(query.kind))
+      throw new BadRequestException([`kind must be one of ${RECORD_TYPE_NAMES.join(', ')}`]);
     const limit = query.limit ?? DEFAULT_PAGE;
-    const rows = await this.repo.historyPage(workshopId, { machineId, recordType: query.kind as RecordType | undefined, person: query.person?.trim() || undefined, from, toExclusive, after, limit });
+    const rows = await this.repo.historyPage(workshopId, {
+      machineId,
+      recordType: query.kind as RecordType | undefined,
+      person: query.person?.trim() || undefined,
+      from,
+      toExclusive,
+      after,
+      limit,
+    });
     const page = rows.slice(0, limit);
     const txids = [...new Set(page.map((r) => r.txid))];
-    const [txEntries, changes] = await Promise.all([this.repo.entriesOfTransactions(workshopId, txids), this.repo.changesOfTransactions(workshopId, txids)]);
+    const [txEntries, changes] = await Promise.all([
+      this.repo.entriesOfTransactions(workshopId, txids),
+      this.repo.changesOfTransactions(workshopId, txids),
+    ]);
     const assigned = assignChanges(txEntries, changes);
     return {
       entries: page.map((r) => toHistoryEntry(r, assigned.get(r.id) ?? [])),

@@ -20,7 +20,12 @@ export class SafetyController {
 
   @Put('machines/:id/safety-walk/items/:itemId')
   @Roles(...WALKERS)
-  answer(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string, @Param('itemId') itemId: string, @Body() dto: AnswerItemDto) {
+  answer(
+    @CurrentUser() user: SessionUser,
+    @Param('id', ParseUUIDPipe) id: string,
+    @Param('itemId') itemId: string,
+    @Body() dto: AnswerItemDto,
+  ) {
     return this.safety.answer(user, id, itemId, dto);
   }
 

@@ -35,10 +35,23 @@ export function countAnswers(items: WalkItem[], answers: Map<string, SafetyAnswe
 }
 
 export function toSafetyItemResponse(row: SafetyItemRow) {
-  return { id: row.id, section: row.section, text: row.text, builtIn: false, createdBy: row.createdByName, createdAt: row.createdAt.toISOString() };
+  return {
+    id: row.id,
+    section: row.section,
+    text: row.text,
+    builtIn: false,
+    createdBy: row.createdByName,
+    createdAt: row.createdAt.toISOString(),
+  };
 }
 
-export function toWalkResponse(machineId: string, walk: SafetyWalkRow | null, items: WalkItem[], answers: Map<string, SafetyAnswerRow>, locked: boolean) {
+export function toWalkResponse(
+  machineId: string,
+  walk: SafetyWalkRow | null,
+  items: WalkItem[],
+  answers: Map<string, SafetyAnswerRow>,
+  locked: boolean,
+) {
   const counts = countAnswers(items, answers);
   const sections = (Object.keys(SECTION_LABELS) as SafetySection[]).map((section) => ({
     id: section,
@@ -52,7 +65,13 @@ export function toWalkResponse(machineId: string, walk: SafetyWalkRow | null, it
           text: i.text,
           builtIn: i.builtIn,
           answer: a
-            ? { id: a.id, answer: a.answer, note: a.note, answeredBy: { id: a.answeredById, name: a.answeredByName }, answeredAt: a.answeredAt.toISOString() }
+            ? {
+                id: a.id,
+                answer: a.answer,
+                note: a.note,
+                answeredBy: { id: a.answeredById, name: a.answeredByName },
+                answeredAt: a.answeredAt.toISOString(),
+              }
             : null,
         };
       }),

@@ -49,7 +49,13 @@ export class SafetyRepository {
       .values(values)
       .onConflictDoUpdate({
         target: [safetyAnswers.walkId, safetyAnswers.itemKey],
-        set: { answer: values.answer, note: values.note, answeredById: values.answeredById, answeredByName: values.answeredByName, answeredAt: sql`now()` },
+        set: {
+          answer: values.answer,
+          note: values.note,
+          answeredById: values.answeredById,
+          answeredByName: values.answeredByName,
+          answeredAt: sql`now()`,
+        },
       })
       .returning();
     return row;

@@ -31,13 +31,21 @@ export class SafetyService implements OnModuleInit {
       const found = await this.repo.findAnswer(workshopId, id);
       if (!found) return null;
       const item = (await this.items(workshopId)).find((i) => i.id === found.answer.itemKey);
-      return { machineId: found.walk.machineId, recordType: SAFETY_WALK, recordId: found.walk.id, label: item?.text ?? 'Safety-walk item' };
+      return {
+        machineId: found.walk.machineId,
+        recordType: SAFETY_WALK,
+        recordId: found.walk.id,
+        label: item?.text ?? 'Safety-walk item',
+      };
     });
   }
 
   async items(workshopId: string): Promise<WalkItem[]> {
     const own = await this.repo.workshopItems(workshopId);
-    return [...BUILT_IN_ITEMS.map((i) => ({ ...i, builtIn: true })), ...own.map((r) => ({ id: r.id, section: r.section, text: r.text, builtIn: false }))];
+    return [
+      ...BUILT_IN_ITEMS.map((i) => ({ ...i, builtIn: true })),
+      ...own.map((r) => ({ id: r.id, section: r.section, text: r.text, builtIn: false })),
+    ];
   }
 
   async listItems(actor: SessionUser) {
@@ -50,8 +58,19 @@ export class SafetyService implements OnModuleInit {
   }
 
   async addItem(actor: SessionUser, dto: CreateSafetyItemDto) {
-    const row = await this.repo.insertItem({ workshopId: actor.workshopId, section: dto.section, text: dto.text.trim(), createdById: actor.id, createdByName: actor.name });
-    await this.records.audit(actor, { recordType: 'safety-item', recordId: row.id, action: 'created', summary: `Safety-walk item added (${SECTION_LABELS[row.section]}): ${row.text}` });
+    const row = await this.repo.insertItem({
+      workshopId: actor.workshopId,
+      section: dto.section,
+      text: dto.text.trim(),
+      createdById: actor.id,
+      createdByName: actor.name,
+    });
+    await this.records.audit(actor, {
+      recordType: 'safety-item',
+      recordId: row.id,
+      action: 'created',
+      summary: `Safety-walk item added (${SECTION_LABELS[row.section]}): ${row.text}`,
+    });
     return toSafetyItemResponse(row);
   }
 
@@ -65,9 +84,18 @@ export class SafetyService implements OnModuleInit {
     const items = await this.items(actor.workshopId);
     const item = items.find((i) => i.id === itemId);
     if (!item) throw new NotFoundException('No such safety-walk item in this workshop');
-    const walk = (await this.repo.currentWalk(actor.workshopId, machine.id)) ?? (await this.repo.insertWalk(actor.workshopId, machine.id));
+    const walk =
+      (await this.repo.currentWalk(actor.workshopId, machine.id)) ??
+      (await this.repo.insertWalk(actor.workshopId, machine.id));
     await this.records.assertEditable(SAFETY_WALK, walk.id, 'This safety walk');
-    await this.repo.upsertAnswer({ walkId: walk.id, itemKey: item.id, answer: dto.answer, note: dto.note?.trim() ?? '', answeredById: actor.id, answeredByName: actor.name });
+    await this.repo.upsertAnswer({
+      walkId: walk.id,
+      itemKey: item.id,
+      answer: dto.answer,
+      note: dto.note?.trim() ?? '',
+      answeredById: actor.id,
+      answeredByName: actor.name,
+    });
     const response = await this.walkOf(machine);
     await this.records.checkRecorded(
       actor,
@@ -81,9 +109,16 @@ export class SafetyService implements OnModuleInit {
   async startNew(actor: SessionUser, machineId: string): Promise<SafetyWalkResponse> {
     const machine = await this.machines.getRef(actor, machineId);
     const current = await this.repo.currentWalk(actor.workshopId, machine.id);
-    if (current && !(await this.repo.answers(current.id)).length) throw new ConflictException('The current safety walk has no answers yet; answer it instead of starting another.');
+    if (current && !(await this.repo.answers(current.id)).length)
+      throw new ConflictException('The current safety walk has no answers yet; answer it instead of starting another.');
     const walk = await this.repo.insertWalk(actor.workshopId, machine.id);
-    await this.records.audit(actor, { machineId: machine.id, recordType: SAFETY_WALK, recordId: walk.id, action: 'started', summary: 'A new safety walk was started' });
+    await this.records.audit(actor, {
+      machineId: machine.id,
+      recordType: SAFETY_WALK,
+      recordId: walk.id,
+      action: 'started',
+      summary: 'A new safety walk was started',
+    });
     return this.walkOf(machine);
   }
 
@@ -98,7 +133,11 @@ export class SafetyService implements OnModuleInit {
       // A checklist has no tolerance: the rule is in the subject.
       target: null,
       result: c.answered
-        ? { value: c.answered, unit: 'items', summary: `${c.answered} of ${c.total} answered${c.no ? `; ${c.no} answered no (blocks approval)` : ''}` }
+        ? {
+            value: c.answered,
+            unit: 'items',
+            summary: `${c.answered} of ${c.total} answered${c.no ? `; ${c.no} answered no (blocks approval)` : ''}`,
+          }
         : null,
       recordType: SAFETY_WALK,
       recordId: walk.id,

@@ -38,5 +38,12 @@ export function toTargetSetResponse(row: TargetSetRow, usedBy: TargetSetUser[] =
     const t = row.targets[key];
     if (t) targets[key] = { ...t, label: TARGET_LABELS[key] };
   }
-  return { id: row.id, name: row.name, description: row.description, targets, updatedAt: row.updatedAt.toISOString(), usedBy };
+  return {
+    id: row.id,
+    name: row.name,
+    description: row.description,
+    targets,
+    updatedAt: row.updatedAt.toISOString(),
+    usedBy,
+  };
 }

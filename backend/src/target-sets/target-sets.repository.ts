@@ -12,7 +12,11 @@ export class TargetSetsRepository {
 
   /** Every set read here has every key: one a stored set lacks is the product's default (default-target-sets.ts). */
   async list(workshopId: string): Promise<TargetSetRow[]> {
-    const rows = await this.db.select().from(targetSets).where(eq(targetSets.workshopId, workshopId)).orderBy(asc(targetSets.createdAt));
+    const rows = await this.db
+      .select()
+      .from(targetSets)
+      .where(eq(targetSets.workshopId, workshopId))
+      .orderBy(asc(targetSets.createdAt));
     return rows.map(complete);
   }
 
@@ -24,12 +28,22 @@ export class TargetSetsRepository {
     return row ? complete(row) : null;
   }
 
-  async insert(workshopId: string, values: { name: string; description: string; targets: Record<string, TargetValue> }) {
-    const [row] = await this.db.insert(targetSets).values({ workshopId, ...values }).returning();
+  async insert(
+    workshopId: string,
+    values: { name: string; description: string; targets: Record<string, TargetValue> },
+  ) {
+    const [row] = await this.db
+      .insert(targetSets)
+      .values({ workshopId, ...values })
+      .returning();
     return row;
   }
 
-  async update(workshopId: string, id: string, values: Partial<{ name: string; description: string; targets: Record<string, TargetValue> }>) {
+  async update(
+    workshopId: string,
+    id: string,
+    values: Partial<{ name: string; description: string; targets: Record<string, TargetValue> }>,
+  ) {
     const [row] = await this.db
       .update(targetSets)
       .set({ ...values, updatedAt: new Date() })

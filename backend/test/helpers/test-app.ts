@@ -40,7 +40,10 @@ export async function createTestWorkshop(app: NestFastifyApplication, label = 'T
   hashed ??= hashPassword(TEST_PASSWORD);
   const passwordHash = await hashed;
   const tag = randomUUID().slice(0, 8);
-  const [ws] = await db.insert(workshops).values({ name: `${label} workshop ${tag}` }).returning();
+  const [ws] = await db
+    .insert(workshops)
+    .values({ name: `${label} workshop ${tag}` })
+    .returning();
   const emails = {} as Record<Role, string>;
   const userIds = {} as Record<Role, string>;
   const as = {} as Record<Role, Agent>;

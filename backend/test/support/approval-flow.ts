@@ -14,7 +14,12 @@ export async function board(ws: TestWorkshop, machineId: string) {
   if (res.status !== 200) throw new Error(`readiness: ${res.status} ${JSON.stringify(res.body)}`);
   return res.body as {
     state: string;
-    checks: { key: string; status: string; recordId: string | null; waiver: { reason: string; by: string; at: string } | null }[];
+    checks: {
+      key: string;
+      status: string;
+      recordId: string | null;
+      waiver: { reason: string; by: string; at: string } | null;
+    }[];
     blocking: { key: string }[];
     approval: { id: string; recordHash: string; recheckDueAt: string } | null;
     recheckDueAt: string | null;
@@ -28,7 +33,9 @@ export async function answerSafetyWalk(ws: TestWorkshop, machineId: string): Pro
   if (walk.status !== 200) throw new Error(`safety walk: ${walk.status} ${JSON.stringify(walk.body)}`);
   for (const section of walk.body.sections as { items: { id: string }[] }[]) {
     for (const item of section.items) {
-      const res = await ws.as.technician.put(`/api/machines/${machineId}/safety-walk/items/${item.id}`).send({ answer: 'yes' });
+      const res = await ws.as.technician
+        .put(`/api/machines/${machineId}/safety-walk/items/${item.id}`)
+        .send({ answer: 'yes' });
       if (res.status !== 200) throw new Error(`safety item ${item.id}: ${res.status} ${JSON.stringify(res.body)}`);
     }
   }
@@ -40,10 +47,13 @@ export async function answerSafetyWalk(ws: TestWorkshop, machineId: string): Pro
  * apply), leaving only the fake ones.
  */
 export async function waiveAllBut(ws: TestWorkshop, machineId: string, keep: (key: string) => boolean): Promise<void> {
-  if ((await board(ws, machineId)).blocking.some((c) => c.key.startsWith('safety-walk') && !keep(c.key))) await answerSafetyWalk(ws, machineId);
+  if ((await board(ws, machineId)).blocking.some((c) => c.key.startsWith('safety-walk') && !keep(c.key)))
+    await answerSafetyWalk(ws, machineId);
   for (const c of (await board(ws, machineId)).blocking) {
     if (keep(c.key)) continue;
-    const res = await ws.as.owner.post(`/api/machines/${machineId}/checks/${encodeURIComponent(c.key)}/waiver`).send({ reason: 'Not part of this test round; checked separately.' });
+    const res = await ws.as.owner
+      .post(`/api/machines/${machineId}/checks/${encodeURIComponent(c.key)}/waiver`)
+      .send({ reason: 'Not part of this test round; checked separately.' });
     if (res.status !== 201) throw new Error(`waiver of ${c.key}: ${res.status} ${JSON.stringify(res.body)}`);
   }
 }

@@ -16,9 +16,36 @@ export class FakeChecks implements ReadinessContributor {
   /** Two rails' straightness and one positioning run, all within target, each with its own record. */
   seed(machineId: string): ReadinessCheck[] {
     const checks: ReadinessCheck[] = [
-      this.check(machineId, 'fake-straightness:Y1', 'rail-straightness', 'Rail Y1 (left)', 12.5, 'µm', { value: 20, unit: 'um' }, true),
-      this.check(machineId, 'fake-straightness:Y2', 'rail-straightness', 'Rail Y2 (right)', 9.8, 'µm', { value: 20, unit: 'um' }, true),
-      this.check(machineId, 'fake-positioning:X', 'positioning', 'Axis X', 0.041, 'mm', { value: 0.1, unit: 'mm' }, false),
+      this.check(
+        machineId,
+        'fake-straightness:Y1',
+        'rail-straightness',
+        'Rail Y1 (left)',
+        12.5,
+        'µm',
+        { value: 20, unit: 'um' },
+        true,
+      ),
+      this.check(
+        machineId,
+        'fake-straightness:Y2',
+        'rail-straightness',
+        'Rail Y2 (right)',
+        9.8,
+        'µm',
+        { value: 20, unit: 'um' },
+        true,
+      ),
+      this.check(
+        machineId,
+        'fake-positioning:X',
+        'positioning',
+        'Axis X',
+        0.041,
+        'mm',
+        { value: 0.1, unit: 'mm' },
+        false,
+      ),
     ];
     this.byMachine.set(machineId, checks);
     return checks;
@@ -28,7 +55,13 @@ export class FakeChecks implements ReadinessContributor {
   record(machineId: string, key: string, value: number, status: ReadinessCheck['status']): ReadinessCheck {
     const list = this.byMachine.get(machineId)!;
     const i = list.findIndex((c) => c.key === key);
-    list[i] = { ...list[i], status, result: { ...list[i].result!, value, summary: `re-measured: ${value} ${list[i].result!.unit}` }, recordId: randomUUID(), recordedAt: new Date().toISOString() };
+    list[i] = {
+      ...list[i],
+      status,
+      result: { ...list[i].result!, value, summary: `re-measured: ${value} ${list[i].result!.unit}` },
+      recordId: randomUUID(),
+      recordedAt: new Date().toISOString(),
+    };
     return list[i];
   }
 
@@ -36,7 +69,15 @@ export class FakeChecks implements ReadinessContributor {
   clear(machineId: string, key: string): void {
     const list = this.byMachine.get(machineId)!;
     const i = list.findIndex((c) => c.key === key);
-    list[i] = { ...list[i], status: 'not-started', result: null, recordId: null, recordType: null, recordedAt: null, series: undefined };
+    list[i] = {
+      ...list[i],
+      status: 'not-started',
+      result: null,
+      recordId: null,
+      recordType: null,
+      recordedAt: null,
+      series: undefined,
+    };
   }
 
   get(machineId: string, key: string): ReadinessCheck {
@@ -70,8 +111,22 @@ export class FakeChecks implements ReadinessContributor {
               title: 'residual from the least-squares line',
               x: { label: 'Station', unit: 'mm' },
               y: { label: 'Residual', unit: 'um' },
-              lines: [{ label: 'residual', points: [[0, 3.1], [200, -2.4], [400, 6.2], [600, -6.3], [800, 1.0]] as [number, number][] }],
-              limits: [{ label: '+t/2', value: 10 }, { label: '−t/2', value: -10 }],
+              lines: [
+                {
+                  label: 'residual',
+                  points: [
+                    [0, 3.1],
+                    [200, -2.4],
+                    [400, 6.2],
+                    [600, -6.3],
+                    [800, 1.0],
+                  ] as [number, number][],
+                },
+              ],
+              limits: [
+                { label: '+t/2', value: 10 },
+                { label: '−t/2', value: -10 },
+              ],
             },
           }
         : {}),

@@ -45,7 +45,12 @@ export async function ownCluster(): Promise<OwnCluster> {
   writeFileSync(pwfile, ownerPassword, { mode: 0o600 });
   const run = (cmd: string, args: string[]) => {
     const env = { ...process.env, PGPASSWORD: ownerPassword };
-    if (root) execFileSync('runuser', ['-u', 'postgres', '--', 'env', `PGPASSWORD=${ownerPassword}`, path.join(bin, cmd), ...args], { stdio: 'pipe', env });
+    if (root)
+      execFileSync(
+        'runuser',
+        ['-u', 'postgres', '--', 'env', `PGPASSWORD=${ownerPassword}`, path.join(bin, cmd), ...args],
+        { stdio: 'pipe', env },
+      );
     else execFileSync(path.join(bin, cmd), args, { stdio: 'pipe', env });
   };
   if (root) {
@@ -55,9 +60,28 @@ export async function ownCluster(): Promise<OwnCluster> {
     chownSync(dir, uid, gid);
     chownSync(pwfile, uid, gid);
   }
-  run('initdb', ['-D', dir, '-U', 'app', '--auth=scram-sha-256', `--pwfile=${pwfile}`, '--encoding=UTF8', '--no-locale']);
+  run('initdb', [
+    '-D',
+    dir,
+    '-U',
+    'app',
+    '--auth=scram-sha-256',
+    `--pwfile=${pwfile}`,
+    '--encoding=UTF8',
+    '--no-locale',
+  ]);
   const port = await freePort();
-  const start = () => run('pg_ctl', ['-D', dir, '-w', '-l', path.join(dir, 'server.log'), '-o', `-c listen_addresses=127.0.0.1 -p ${port} -k ${dir} -c fsync=off`, 'start']);
+  const start = () =>
+    run('pg_ctl', [
+      '-D',
+      dir,
+      '-w',
+      '-l',
+      path.join(dir, 'server.log'),
+      '-o',
+      `-c listen_addresses=127.0.0.1 -p ${port} -k ${dir} -c fsync=off`,
+      'start',
+    ]);
   start();
   return {
     port,

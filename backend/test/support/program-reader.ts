@@ -32,12 +32,24 @@ export interface ProgramRun {
 }
 
 const GROUP: Record<string, string> = {
-  G17: 'plane', G18: 'plane', G19: 'plane',
-  G20: 'units', G21: 'units',
-  G90: 'distance', G91: 'distance',
-  G93: 'feedMode', G94: 'feedMode', G95: 'feedMode',
-  G40: 'cutterComp', G41: 'cutterComp', G42: 'cutterComp',
-  G0: 'motion', G1: 'motion', G2: 'motion', G3: 'motion', G80: 'motion',
+  G17: 'plane',
+  G18: 'plane',
+  G19: 'plane',
+  G20: 'units',
+  G21: 'units',
+  G90: 'distance',
+  G91: 'distance',
+  G93: 'feedMode',
+  G94: 'feedMode',
+  G95: 'feedMode',
+  G40: 'cutterComp',
+  G41: 'cutterComp',
+  G42: 'cutterComp',
+  G0: 'motion',
+  G1: 'motion',
+  G2: 'motion',
+  G3: 'motion',
+  G80: 'motion',
 };
 
 const word = ([letter, value]: [string, number]) => `${letter}${value}`;

@@ -11,16 +11,38 @@ import { RecordsService } from '../../src/records/records.service.js';
  * this one belongs to a machine of a workshop of its own and has ended, so no machine of the
  * spec reads as approved and nothing else the spec looks at changes.
  */
-export async function lockAsApproved(app: NestFastifyApplication, refs: { recordType: SignedRecordType; recordId: string }[]): Promise<string> {
+export async function lockAsApproved(
+  app: NestFastifyApplication,
+  refs: { recordType: SignedRecordType; recordId: string }[],
+): Promise<string> {
   const db = app.get<Database>(DRIZZLE);
   const tag = randomUUID().slice(0, 8);
-  const [ws] = await db.insert(workshops).values({ name: `Stand-in approvals ${tag}` }).returning();
+  const [ws] = await db
+    .insert(workshops)
+    .values({ name: `Stand-in approvals ${tag}` })
+    .returning();
   const [owner] = await db
     .insert(users)
-    .values({ workshopId: ws.id, email: `stand-in.${tag}@test.example.com`, name: `Stand-in owner ${tag}`, role: 'owner', passwordHash: 'not a password' })
+    .values({
+      workshopId: ws.id,
+      email: `stand-in.${tag}@test.example.com`,
+      name: `Stand-in owner ${tag}`,
+      role: 'owner',
+      passwordHash: 'not a password',
+    })
     .returning();
   const [set] = await db.insert(targetSets).values({ workshopId: ws.id, name: 'Stand-in', targets: {} }).returning();
-  const [machine] = await db.insert(machines).values({ workshopId: ws.id, name: 'Stand-in', kind: 'router', workAreaXMm: 1, workAreaYMm: 1, targetSetId: set.id }).returning();
+  const [machine] = await db
+    .insert(machines)
+    .values({
+      workshopId: ws.id,
+      name: 'Stand-in',
+      kind: 'router',
+      workAreaXMm: 1,
+      workAreaYMm: 1,
+      targetSetId: set.id,
+    })
+    .returning();
   const now = new Date();
   const [approval] = await db
     .insert(approvals)

@@ -5,7 +5,9 @@ import { NotFoundRoute } from './routes/not-found';
 
 // Pages load on demand so the sign-in screen stays light; the signed-in frame (navigation,
 // drawer, tooltips) too, as the sign-in page never shows it.
-const page = (load: () => Promise<{ default: React.ComponentType }>) => async () => ({ Component: (await load()).default });
+const page = (load: () => Promise<{ default: React.ComponentType }>) => async () => ({
+  Component: (await load()).default,
+});
 
 const router = createBrowserRouter([
   { path: paths.signIn, Component: SignInRoute },

@@ -10,6 +10,7 @@ export function followSessionEnd(client: QueryClient, meKey: QueryKey): () => vo
   return client.getQueryCache().subscribe((event) => {
     if (event.type !== 'updated' || event.action.type !== 'error') return;
     const error = event.action.error;
-    if (error instanceof ApiError && error.status === 401 && client.getQueryData(meKey)) client.setQueryData(meKey, null);
+    if (error instanceof ApiError && error.status === 401 && client.getQueryData(meKey))
+      client.setQueryData(meKey, null);
   });
 }

@@ -8,7 +8,12 @@ import ReportProblemOutlined from '@mui/icons-material/ReportProblemOutlined';
 export function UnreadableRecord({ message, inline = false }: { message: string; inline?: boolean }) {
   if (inline) {
     return (
-      <Typography variant="body2" color="warning.main" role="note" sx={{ display: 'flex', gap: 0.5, alignItems: 'flex-start' }}>
+      <Typography
+        variant="body2"
+        color="warning.main"
+        role="note"
+        sx={{ display: 'flex', gap: 0.5, alignItems: 'flex-start' }}
+      >
         <ReportProblemOutlined fontSize="inherit" sx={{ mt: '3px' }} aria-hidden />
         <span>Cannot be read. {message}</span>
       </Typography>

@@ -72,8 +72,17 @@ export async function answer<T>(call: Promise<{ data?: T }>): Promise<T> {
  * A request whose path is known only at run time: an entry kept on the device (lib/offline) holds
  * the concrete path it was made for, without /api. Same client, same errors.
  */
-export function sendTo<T>(method: 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE', path: string, body?: unknown, headers: Record<string, string> = {}): Promise<T> {
-  const request = client.request as unknown as (method: string, path: string, init: { body?: unknown; headers: Record<string, string> }) => Promise<{ data?: T }>;
+export function sendTo<T>(
+  method: 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE',
+  path: string,
+  body?: unknown,
+  headers: Record<string, string> = {},
+): Promise<T> {
+  const request = client.request as unknown as (
+    method: string,
+    path: string,
+    init: { body?: unknown; headers: Record<string, string> },
+  ) => Promise<{ data?: T }>;
   return answer(request(method, `/api${path}`, { body, headers }));
 }
 

@@ -25,7 +25,9 @@ export const CHECK_KINDS = {
 
 export type CheckKind = keyof typeof CHECK_KINDS;
 
-export const CHECK_KIND_LABELS = Object.fromEntries(Object.entries(CHECK_KINDS).map(([k, v]) => [k, v.label])) as Record<CheckKind, string>;
+export const CHECK_KIND_LABELS = Object.fromEntries(
+  Object.entries(CHECK_KINDS).map(([k, v]) => [k, v.label]),
+) as Record<CheckKind, string>;
 
 interface RecordTypeWords {
   /** The history's word for it ("Positioning run"). */
@@ -80,6 +82,7 @@ export const evidenceSubjectLabel = (type: string): string => words(type)?.evide
 /** [type, label] pairs of the history filter: a machine's, or the workshop's (its own kinds first). */
 export function historyKinds(scope: 'machine' | 'workshop'): [string, string][] {
   const all = Object.entries(RECORD_TYPES as Record<string, RecordTypeWords>);
-  const pick = (h: 'machine' | 'workshop') => all.filter(([, w]) => w.history === h).map(([k, w]): [string, string] => [k, w.label]);
+  const pick = (h: 'machine' | 'workshop') =>
+    all.filter(([, w]) => w.history === h).map(([k, w]): [string, string] => [k, w.label]);
   return scope === 'machine' ? pick('machine') : [...pick('workshop'), ...pick('machine')];
 }

@@ -34,7 +34,10 @@ export function readRows(input: string): TabularRow[] {
   let delimiter = delimiterOf(text);
   if (delimiter === ' ') {
     // Columns lined up with spaces: any run of spaces or tabs is one separator.
-    text = text.split('\n').map((l) => l.trim().replace(/\s+/g, '\t')).join('\n');
+    text = text
+      .split('\n')
+      .map((l) => l.trim().replace(/\s+/g, '\t'))
+      .join('\n');
     delimiter = '\t';
   }
   const rows: TabularRow[] = [];
@@ -70,7 +73,10 @@ export function parseNumberCell(raw: string): NumberCell {
     return { ok: false, reason: `"${text}" has a thousands separator; write it without one` };
   }
   if (body.includes('.') && body.includes(',')) {
-    return { ok: false, reason: `"${text}" has both a point and a comma; write it without a thousands separator, with one decimal mark` };
+    return {
+      ok: false,
+      reason: `"${text}" has both a point and a comma; write it without a thousands separator, with one decimal mark`,
+    };
   }
   if (!PLAIN.test(body) && !SCIENTIFIC.test(body)) return { ok: false, reason: `"${text}" is not a number` };
   const value = Number(body.replace(',', '.')) * (sign === '' || sign === '+' ? 1 : -1);

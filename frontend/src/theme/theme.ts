@@ -56,10 +56,18 @@ export const theme = createTheme({
     MuiRadio: { styleOverrides: { root: { [onTouch]: { padding: 10 } } } },
     MuiSwitch: { styleOverrides: { switchBase: { [onTouch]: { padding: 12 } } } },
     MuiInputBase: { styleOverrides: { root: { [onTouch]: { minHeight: TOUCH_TARGET } } } },
-    MuiChip: { styleOverrides: { clickable: { [onTouch]: { height: TOUCH_TARGET, minWidth: TOUCH_TARGET, borderRadius: TOUCH_TARGET / 2 } } } },
+    MuiChip: {
+      styleOverrides: {
+        clickable: { [onTouch]: { height: TOUCH_TARGET, minWidth: TOUCH_TARGET, borderRadius: TOUCH_TARGET / 2 } },
+      },
+    },
     MuiTableSortLabel: { styleOverrides: { root: { [onTouch]: { minHeight: TOUCH_TARGET } } } },
     // Breadcrumb links stand alone, so they get the full target too.
-    MuiBreadcrumbs: { styleOverrides: { li: { [onTouch]: { '& > a': { display: 'inline-flex', alignItems: 'center', minHeight: TOUCH_TARGET } } } } },
+    MuiBreadcrumbs: {
+      styleOverrides: {
+        li: { [onTouch]: { '& > a': { display: 'inline-flex', alignItems: 'center', minHeight: TOUCH_TARGET } } },
+      },
+    },
     // A summary's text may be long (a mail's subject): it wraps or ends in an ellipsis, never widens the page.
     MuiAccordionSummary: { styleOverrides: { content: { minWidth: 0 } } },
     MuiTextField: { defaultProps: { size: 'small' } },

@@ -24,13 +24,25 @@ export interface BedMapLayout {
  * Null when the series does not have that shape.
  */
 export function bedMapLayout(s: CheckSeries): BedMapLayout | null {
-  const columns = [...new Set(s.lines.flatMap((l) => l.points.map((p) => p[0])).filter(Number.isFinite))].sort((a, b) => a - b);
+  const columns = [...new Set(s.lines.flatMap((l) => l.points.map((p) => p[0])).filter(Number.isFinite))].sort(
+    (a, b) => a - b,
+  );
   if (!columns.length || columns.length > BED_MAP_MAX_COLUMNS || !s.lines.length) return null;
-  const rows = s.lines.map((l) => ({ label: l.label, cells: new Map(l.points.filter(([x, y]) => Number.isFinite(x) && Number.isFinite(y)).map(([x, y]) => [x, clean(y)])) }));
+  const rows = s.lines.map((l) => ({
+    label: l.label,
+    cells: new Map(
+      l.points.filter(([x, y]) => Number.isFinite(x) && Number.isFinite(y)).map(([x, y]) => [x, clean(y)]),
+    ),
+  }));
   return { columns, rows, height: HEAD_H + rows.length * ROW_H + 22 };
 }
 
-export function drawBedMap(doc: Doc, box: { x: number; y: number; w: number }, s: CheckSeries, layout: BedMapLayout): void {
+export function drawBedMap(
+  doc: Doc,
+  box: { x: number; y: number; w: number },
+  s: CheckSeries,
+  layout: BedMapLayout,
+): void {
   const values = layout.rows.flatMap((r) => [...r.cells.values()]);
   const lo = Math.min(...values);
   const hi = Math.max(...values);
@@ -42,7 +54,13 @@ export function drawBedMap(doc: Doc, box: { x: number; y: number; w: number }, s
 
   doc.fillColor(MUTED);
   write(doc, 'medium', 6.5, `${s.x.label} (${xUnit}):`, box.x, box.y + 3, { width: LABEL_W - 4, lineBreak: false });
-  layout.columns.forEach((x, i) => write(doc, 'medium', 6.5, num(x), box.x + LABEL_W + i * cellW, box.y + 3, { width: cellW, align: 'center', lineBreak: false }));
+  layout.columns.forEach((x, i) =>
+    write(doc, 'medium', 6.5, num(x), box.x + LABEL_W + i * cellW, box.y + 3, {
+      width: cellW,
+      align: 'center',
+      lineBreak: false,
+    }),
+  );
   let y = box.y + HEAD_H;
   for (const row of layout.rows) {
     doc.fillColor(INK);
@@ -55,9 +73,19 @@ export function drawBedMap(doc: Doc, box: { x: number; y: number; w: number }, s
         return;
       }
       const t = hi > lo ? (v - lo) / (hi - lo) : 0;
-      doc.save().rect(cx, y, cellW, ROW_H).fill(mix(PAPER, STEEL, 0.08 + 0.8 * t)).restore();
+      doc
+        .save()
+        .rect(cx, y, cellW, ROW_H)
+        .fill(mix(PAPER, STEEL, 0.08 + 0.8 * t))
+        .restore();
       const over = limit !== undefined && v > limit.value;
-      doc.save().lineWidth(over ? 1.2 : 0.4).strokeColor(over ? STATUS_COLOURS['outside-target'] : '#ffffff').rect(cx + (over ? 0.6 : 0), y + (over ? 0.6 : 0), cellW - (over ? 1.2 : 0), ROW_H - (over ? 1.2 : 0)).stroke().restore();
+      doc
+        .save()
+        .lineWidth(over ? 1.2 : 0.4)
+        .strokeColor(over ? STATUS_COLOURS['outside-target'] : '#ffffff')
+        .rect(cx + (over ? 0.6 : 0), y + (over ? 0.6 : 0), cellW - (over ? 1.2 : 0), ROW_H - (over ? 1.2 : 0))
+        .stroke()
+        .restore();
       doc.fillColor(t > 0.55 ? '#ffffff' : INK);
       write(doc, 'regular', size, num(v), cx, y + 4, { width: cellW, align: 'center', lineBreak: false });
     });
@@ -65,7 +93,9 @@ export function drawBedMap(doc: Doc, box: { x: number; y: number; w: number }, s
   }
   doc.fillColor(MUTED);
   const range = `${s.y.label}, ${yUnit}: lowest ${num(lo)}, highest ${num(hi)}, range ${num(hi - lo)} ${yUnit}`;
-  const target = limit ? `; ${limit.label}${over(layout, limit.value) ? ' \u2014 cells edged in red are above it' : ''}` : '';
+  const target = limit
+    ? `; ${limit.label}${over(layout, limit.value) ? ' \u2014 cells edged in red are above it' : ''}`
+    : '';
   write(doc, 'regular', 7, `${range}${target}. Darker is higher.`, box.x, y + 5, { width: box.w });
   doc.fillColor(INK);
 }
@@ -79,5 +109,11 @@ const over = (l: BedMapLayout, limit: number) => l.rows.some((r) => [...r.cells.
 /** A colour a fraction t of the way from a to b (#rrggbb). */
 function mix(a: string, b: string, t: number): string {
   const ch = (c: string, i: number) => parseInt(c.slice(1 + 2 * i, 3 + 2 * i), 16);
-  return `#${[0, 1, 2].map((i) => Math.round(ch(a, i) + (ch(b, i) - ch(a, i)) * t).toString(16).padStart(2, '0')).join('')}`;
+  return `#${[0, 1, 2]
+    .map((i) =>
+      Math.round(ch(a, i) + (ch(b, i) - ch(a, i)) * t)
+        .toString(16)
+        .padStart(2, '0'),
+    )
+    .join('')}`;
 }

@@ -14,7 +14,14 @@ import { drawQrCode } from './qr-code.js';
 
 export interface CertificateInput {
   snapshot: ApprovalSnapshot;
-  approval: { id: string; approvedAt: Date; approvedBy: string; statement: string; recordHash: string; recheckDueAt: Date };
+  approval: {
+    id: string;
+    approvedAt: Date;
+    approvedBy: string;
+    statement: string;
+    recordHash: string;
+    recheckDueAt: Date;
+  };
   /** Public address where anyone can check the signature; null for approvals signed before signatures were kept. */
   verificationUrl: string | null;
 }
@@ -80,7 +87,14 @@ function heading(doc: Doc, text: string) {
   doc.moveDown(0.8);
   doc.fillColor(STEEL);
   write(doc, 'bold', 12, text, M, doc.y);
-  doc.save().lineWidth(1).strokeColor(BRASS).moveTo(M, doc.y + 2).lineTo(M + WIDTH, doc.y + 2).stroke().restore();
+  doc
+    .save()
+    .lineWidth(1)
+    .strokeColor(BRASS)
+    .moveTo(M, doc.y + 2)
+    .lineTo(M + WIDTH, doc.y + 2)
+    .stroke()
+    .restore();
   doc.y += 8;
   doc.fillColor(INK);
 }
@@ -96,7 +110,15 @@ function header(doc: Doc, s: ApprovalSnapshot, a: CertificateInput['approval']) 
   doc.fillColor('#ffffff');
   write(doc, 'medium', 9, `RAILWRIGHT \u00b7 ${s.workshop.name}`, M, 30, { width: WIDTH, characterSpacing: 0.6 });
   write(doc, 'bold', 22, 'Commissioning certificate', M, 46, { width: WIDTH });
-  write(doc, 'regular', 11, `${s.machine.name} \u00b7 ${KIND_LINES[s.machine.kind] ?? s.machine.kind} \u00b7 work area ${s.machine.workArea.x} \u00d7 ${s.machine.workArea.y} mm`, M, 78, { width: WIDTH });
+  write(
+    doc,
+    'regular',
+    11,
+    `${s.machine.name} \u00b7 ${KIND_LINES[s.machine.kind] ?? s.machine.kind} \u00b7 work area ${s.machine.workArea.x} \u00d7 ${s.machine.workArea.y} mm`,
+    M,
+    78,
+    { width: WIDTH },
+  );
   doc.fillColor(INK);
   doc.y = 134;
   const box = { x: M, y: doc.y, w: WIDTH, h: 74 };
@@ -110,7 +132,13 @@ function header(doc: Doc, s: ApprovalSnapshot, a: CertificateInput['approval']) 
   };
   col('Approved as ready to cut by', a.approvedBy, box.x + 14, box.y + 10, 170);
   col('Approved on', utc(a.approvedAt), box.x + 190, box.y + 10, 140);
-  col('Re-check due by', `${dayOf(a.recheckDueAt)} (every ${s.targetSet.recheckIntervalDays} days)`, box.x + 340, box.y + 10, 160);
+  col(
+    'Re-check due by',
+    `${dayOf(a.recheckDueAt)} (every ${s.targetSet.recheckIntervalDays} days)`,
+    box.x + 340,
+    box.y + 10,
+    160,
+  );
   col('Target set', s.targetSet.name, box.x + 14, box.y + 40, 170);
   col('Record hash (SHA-256)', a.recordHash.replace(/(.{32})/, '$1 '), box.x + 190, box.y + 40, 310);
   doc.y = box.y + box.h + 4;
@@ -121,7 +149,14 @@ function header(doc: Doc, s: ApprovalSnapshot, a: CertificateInput['approval']) 
     : `${s.checks.length} required checks, all within target.`;
   para(doc, summary, 'regular', 9, MUTED);
   const warned = s.checks.filter((c) => c.warnings?.length).length;
-  if (warned) para(doc, `${warned} ${warned === 1 ? 'check carries' : 'checks carry'} warnings, printed under ${warned === 1 ? 'it' : 'each'} below.`, 'regular', 9, WARNING_INK);
+  if (warned)
+    para(
+      doc,
+      `${warned} ${warned === 1 ? 'check carries' : 'checks carry'} warnings, printed under ${warned === 1 ? 'it' : 'each'} below.`,
+      'regular',
+      9,
+      WARNING_INK,
+    );
 }
 
 const countOf = (checks: BoardCheck[]) => ({
@@ -148,7 +183,14 @@ function checksTable(doc: Doc, checks: BoardCheck[]) {
       x += c.w;
     }
     doc.y = y + 12;
-    doc.save().lineWidth(0.8).strokeColor(INK).moveTo(M, doc.y).lineTo(M + WIDTH, doc.y).stroke().restore();
+    doc
+      .save()
+      .lineWidth(0.8)
+      .strokeColor(INK)
+      .moveTo(M, doc.y)
+      .lineTo(M + WIDTH, doc.y)
+      .stroke()
+      .restore();
     doc.y += 4;
     doc.fillColor(INK);
   };
@@ -166,7 +208,11 @@ function checksTable(doc: Doc, checks: BoardCheck[]) {
     let x = M;
     cells.forEach((t, i) => {
       if (i === 4) {
-        doc.save().circle(x + 6, y + 5, 3).fill(STATUS_COLOURS[c.status]).restore();
+        doc
+          .save()
+          .circle(x + 6, y + 5, 3)
+          .fill(STATUS_COLOURS[c.status])
+          .restore();
         doc.fillColor(STATUS_COLOURS[c.status]);
         write(doc, 'medium', 8.5, t, x + 13, y, { width: COLS[i].w - 16 });
         doc.fillColor(INK);
@@ -181,7 +227,14 @@ function checksTable(doc: Doc, checks: BoardCheck[]) {
       doc.y += 2;
     }
     checkWarnings(doc, c);
-    doc.save().lineWidth(0.4).strokeColor(RULE).moveTo(M, doc.y).lineTo(M + WIDTH, doc.y).stroke().restore();
+    doc
+      .save()
+      .lineWidth(0.4)
+      .strokeColor(RULE)
+      .moveTo(M, doc.y)
+      .lineTo(M + WIDTH, doc.y)
+      .stroke()
+      .restore();
     doc.y += 4;
   }
 }
@@ -199,7 +252,11 @@ function checkWarnings(doc: Doc, c: BoardCheck) {
       doc.y = M;
     }
     const y = doc.y;
-    doc.save().rect(x, y + 1, 2, h - 4).fill(BRASS).restore();
+    doc
+      .save()
+      .rect(x, y + 1, 2, h - 4)
+      .fill(BRASS)
+      .restore();
     doc.fillColor(WARNING_INK);
     write(doc, 'regular', 7.5, text, x + 7, y, { width: w - 8, lineGap: 1 });
     doc.fillColor(INK);
@@ -227,14 +284,31 @@ function charts(doc: Doc, checks: BoardCheck[], workArea: { x: number; y: number
   // A check with nothing recorded (waived before it was started) has nothing to draw; the table says so.
   const charted = checks.filter((c) => c.series || (CHECK_KINDS[c.kind]?.gauge && c.result));
   heading(doc, 'Charts and tables of the results');
-  if (!charted.length) return para(doc, 'This machine had no rail, positioning, backlash, squareness, bed or test-cut results to chart.', 'regular', 9, MUTED);
+  if (!charted.length)
+    return para(
+      doc,
+      'This machine had no rail, positioning, backlash, squareness, bed or test-cut results to chart.',
+      'regular',
+      9,
+      MUTED,
+    );
   for (const c of charted) {
     const title = `${KIND_LABELS[c.kind]} \u2014 ${c.subject}`;
     const s = c.series && withoutSubject(c.series, c.subject);
     const bed = s && c.kind === 'bed-grid' ? bedMapLayout(s) : null;
     const parts = s && c.kind === 'test-cut' ? partRows(s) : null;
     const sketch = !s && c.kind === 'diagonal-check' && c.result?.unit === 'mm/m';
-    const h = bed ? bed.height : parts ? partTableHeight(doc, WIDTH, parts) : s ? 170 + (legendRows(doc, s, WIDTH - 56) - 1) * 9 : sketch ? 110 : c.result && c.target ? 66 : 24;
+    const h = bed
+      ? bed.height
+      : parts
+        ? partTableHeight(doc, WIDTH, parts)
+        : s
+          ? 170 + (legendRows(doc, s, WIDTH - 56) - 1) * 9
+          : sketch
+            ? 110
+            : c.result && c.target
+              ? 66
+              : 24;
     doc.font('medium').fontSize(9);
     const titleH = doc.heightOfString(`${title}${s?.title ? `: ${s.title}` : ''}`, { width: WIDTH });
     ensure(doc, h + titleH + 14);
@@ -243,7 +317,10 @@ function charts(doc: Doc, checks: BoardCheck[], workArea: { x: number; y: number
     const box = { x: M, y: doc.y + 4, w: WIDTH, h };
     if (bed && s) drawBedMap(doc, box, s, bed);
     else if (parts && s) drawPartTable(doc, box, s, parts);
-    else if (s) drawSeriesChart(doc, box, s, { valueLabels: c.kind === 'backlash' || s.lines.every((l) => l.points.length <= 1) });
+    else if (s)
+      drawSeriesChart(doc, box, s, {
+        valueLabels: c.kind === 'backlash' || s.lines.every((l) => l.points.length <= 1),
+      });
     else if (sketch) drawSquarenessSketch(doc, box, c, workArea);
     else drawResultGauge(doc, box, c);
     doc.y = box.y + h + 10;
@@ -262,7 +339,13 @@ function signature(doc: Doc, a: CertificateInput['approval']) {
   para(doc, a.statement, 'regular', 9.5);
   doc.moveDown(0.5);
   ensure(doc, 30);
-  para(doc, `Signed by ${a.approvedBy}, by re-entering their password, on ${utc(a.approvedAt)}. Approval ${a.id}.`, 'medium', 8.5, MUTED);
+  para(
+    doc,
+    `Signed by ${a.approvedBy}, by re-entering their password, on ${utc(a.approvedAt)}. Approval ${a.id}.`,
+    'medium',
+    8.5,
+    MUTED,
+  );
 }
 
 function cautions(doc: Doc, kind: string) {
@@ -270,7 +353,11 @@ function cautions(doc: Doc, kind: string) {
   for (const c of cautionsFor(kind)) {
     ensure(doc, 26);
     const y = doc.y;
-    doc.save().rect(M, y + 2, 3, 9).fill(BRASS).restore();
+    doc
+      .save()
+      .rect(M, y + 2, 3, 9)
+      .fill(BRASS)
+      .restore();
     write(doc, 'medium', 8.5, `${c.title}. `, M + 9, y, { width: WIDTH - 9, continued: true });
     doc.font('regular').text(c.text, { width: WIDTH - 9, lineGap: 1 });
     doc.moveDown(0.3);
@@ -297,7 +384,15 @@ function verification(doc: Doc, s: ApprovalSnapshot, a: CertificateInput['approv
   const x = M + qr + 14;
   const w = WIDTH - qr - 14;
   doc.fillColor(INK);
-  write(doc, 'medium', 9, 'Scan the code or open this address to check the certificate, no account needed:', x, top + 6, { width: w });
+  write(
+    doc,
+    'medium',
+    9,
+    'Scan the code or open this address to check the certificate, no account needed:',
+    x,
+    top + 6,
+    { width: w },
+  );
   doc.fillColor(STEEL);
   write(doc, 'medium', 9, url, x, doc.y + 3, { width: w, link: url });
   doc.fillColor(INK);
@@ -322,13 +417,32 @@ function footers(doc: Doc, s: ApprovalSnapshot, a: CertificateInput['approval'])
   for (let i = range.start; i < range.start + range.count; i++) {
     doc.switchToPage(i);
     const y = PAGE.h - M + 10;
-    doc.save().lineWidth(0.4).strokeColor(RULE).moveTo(M, y - 6).lineTo(M + WIDTH, y - 6).stroke().restore();
+    doc
+      .save()
+      .lineWidth(0.4)
+      .strokeColor(RULE)
+      .moveTo(M, y - 6)
+      .lineTo(M + WIDTH, y - 6)
+      .stroke()
+      .restore();
     doc.fillColor(MUTED);
     // No page breaks from the footer itself: it sits below the bottom margin.
     const bottom = doc.page.margins.bottom;
     doc.page.margins.bottom = 0;
-    write(doc, 'regular', 7, `Commissioning certificate \u00b7 ${s.machine.name} \u00b7 ${s.workshop.name} \u00b7 approval ${a.id.slice(0, 8)}`, M, y, { width: WIDTH - 80, lineBreak: false });
-    write(doc, 'regular', 7, `page ${i + 1} of ${range.count}`, M + WIDTH - 80, y, { width: 80, align: 'right', lineBreak: false });
+    write(
+      doc,
+      'regular',
+      7,
+      `Commissioning certificate \u00b7 ${s.machine.name} \u00b7 ${s.workshop.name} \u00b7 approval ${a.id.slice(0, 8)}`,
+      M,
+      y,
+      { width: WIDTH - 80, lineBreak: false },
+    );
+    write(doc, 'regular', 7, `page ${i + 1} of ${range.count}`, M + WIDTH - 80, y, {
+      width: 80,
+      align: 'right',
+      lineBreak: false,
+    });
     doc.page.margins.bottom = bottom;
   }
   doc.fillColor(INK);

@@ -20,21 +20,35 @@ export class CertificateService {
   render(a: ApprovalRow): Promise<Buffer> {
     return renderCertificate({
       snapshot: a.snapshot,
-      approval: { id: a.id, approvedAt: a.approvedAt, approvedBy: a.approvedByName, statement: a.statement, recordHash: a.recordHash, recheckDueAt: a.recheckDueAt },
+      approval: {
+        id: a.id,
+        approvedAt: a.approvedAt,
+        approvedBy: a.approvedByName,
+        statement: a.statement,
+        recordHash: a.recordHash,
+        recheckDueAt: a.recheckDueAt,
+      },
       verificationUrl: a.verificationToken ? this.links.verification(a.verificationToken) : null,
     });
   }
 
   filename(a: ApprovalRow): string {
-    const name = a.snapshot.machine.name.toLowerCase().replace(/[^a-z0-9]+/g, '-').replace(/^-|-$/g, '') || 'machine';
+    const name =
+      a.snapshot.machine.name
+        .toLowerCase()
+        .replace(/[^a-z0-9]+/g, '-')
+        .replace(/^-|-$/g, '') || 'machine';
     return `commissioning-certificate-${name}-${a.approvedAt.toISOString().slice(0, 10)}.pdf`;
   }
 
   async forMachine(actor: SessionUser, machineId: string, approvalId?: string) {
     const machine = await this.machines.getRef(actor, machineId);
-    const a = approvalId ? await this.repo.approval(actor.workshopId, machineId, approvalId) : await this.repo.latestApproval(actor.workshopId, machineId);
+    const a = approvalId
+      ? await this.repo.approval(actor.workshopId, machineId, approvalId)
+      : await this.repo.latestApproval(actor.workshopId, machineId);
     if (!a && approvalId) throw new NotFoundException('No such approval of this machine');
-    if (!a) throw new ConflictException(`${machine.name} has not been approved yet, so it has no commissioning certificate`);
+    if (!a)
+      throw new ConflictException(`${machine.name} has not been approved yet, so it has no commissioning certificate`);
     return { pdf: await this.render(a), filename: this.filename(a) };
   }
 

@@ -6,7 +6,12 @@ import { widthOf, write } from './pdf-text.js';
 import { INK, MUTED, RULE, STATUS_COLOURS } from './palette.js';
 
 type Doc = PDFKit.PDFDocument;
-export interface Box { x: number; y: number; w: number; h: number }
+export interface Box {
+  x: number;
+  y: number;
+  w: number;
+  h: number;
+}
 
 const LINE_COLOURS = ['#1d4f4a', '#c8932a', '#7a5aa6', '#2e7d4f', '#b3261e'];
 
@@ -20,7 +25,13 @@ function lineColours(s: CheckSeries): string[] {
   s.lines.forEach((line, i) => {
     if (isBandEdge(line.label)) {
       const owner = s.lines.findIndex((l, j) => j !== i && !isBandEdge(l.label) && line.label.startsWith(l.label));
-      out.push(owner >= 0 && owner < out.length ? out[owner] : owner >= 0 ? LINE_COLOURS[s.lines.slice(0, owner).filter((l) => !isBandEdge(l.label)).length % LINE_COLOURS.length] : (out[i - 1] ?? LINE_COLOURS[0]));
+      out.push(
+        owner >= 0 && owner < out.length
+          ? out[owner]
+          : owner >= 0
+            ? LINE_COLOURS[s.lines.slice(0, owner).filter((l) => !isBandEdge(l.label)).length % LINE_COLOURS.length]
+            : (out[i - 1] ?? LINE_COLOURS[0]),
+      );
     } else out.push(LINE_COLOURS[next++ % LINE_COLOURS.length]);
   });
   return out;
@@ -51,7 +62,8 @@ function niceStep(range: number, count: number): number {
 function ticks(min: number, max: number, count: number): number[] {
   const step = niceStep(max - min || 1, count);
   const out: number[] = [];
-  for (let v = Math.ceil(min / step) * step; v <= max + step * 1e-9; v += step) out.push(Math.abs(v) < step * 1e-9 ? 0 : v);
+  for (let v = Math.ceil(min / step) * step; v <= max + step * 1e-9; v += step)
+    out.push(Math.abs(v) < step * 1e-9 ? 0 : v);
   return out;
 }
 
@@ -82,17 +94,36 @@ export function drawSeriesChart(doc: Doc, box: Box, s: CheckSeries, options: { v
 
   doc.save().lineWidth(0.4).strokeColor(RULE);
   for (const t of ticks(yMin, yMax, 4)) {
-    doc.moveTo(plot.x, py(t)).lineTo(plot.x + plot.w, py(t)).stroke();
+    doc
+      .moveTo(plot.x, py(t))
+      .lineTo(plot.x + plot.w, py(t))
+      .stroke();
     write(doc, 'regular', 6.5, num(t), plot.x - 44, py(t) - 3, { width: 40, align: 'right', lineBreak: false });
   }
   // A count (check number) has no halves.
   const xTicks = ticks(xMin, xMax, 6).filter((t) => s.x.unit !== '#' || Number.isInteger(t));
-  for (const t of xTicks) write(doc, 'regular', 6.5, num(t), px(t) - 20, plot.y + plot.h + 3, { width: 40, align: 'center', lineBreak: false });
+  for (const t of xTicks)
+    write(doc, 'regular', 6.5, num(t), px(t) - 20, plot.y + plot.h + 3, {
+      width: 40,
+      align: 'center',
+      lineBreak: false,
+    });
   doc.lineWidth(0.8).strokeColor(INK).rect(plot.x, plot.y, plot.w, plot.h).stroke();
   for (const l of s.limits ?? []) {
     if (l.value < yMin || l.value > yMax) continue;
-    doc.lineWidth(0.8).strokeColor(STATUS_COLOURS['outside-target']).dash(3, { space: 2 }).moveTo(plot.x, py(l.value)).lineTo(plot.x + plot.w, py(l.value)).stroke().undash();
-    write(doc, 'regular', 6, l.label, plot.x + plot.w - 120, py(l.value) - 8, { width: 118, align: 'right', lineBreak: false });
+    doc
+      .lineWidth(0.8)
+      .strokeColor(STATUS_COLOURS['outside-target'])
+      .dash(3, { space: 2 })
+      .moveTo(plot.x, py(l.value))
+      .lineTo(plot.x + plot.w, py(l.value))
+      .stroke()
+      .undash();
+    write(doc, 'regular', 6, l.label, plot.x + plot.w - 120, py(l.value) - 8, {
+      width: 118,
+      align: 'right',
+      lineBreak: false,
+    });
   }
   const colours = lineColours(s);
   s.lines.forEach((line, i) => {
@@ -111,13 +142,27 @@ export function drawSeriesChart(doc: Doc, box: Box, s: CheckSeries, options: { v
     doc.fillColor(colour);
     for (const [x, y] of p) doc.circle(px(x), py(y), 1.6).fill();
     // Value labels sit above their point, kept inside the plot at its edges.
-    if (options.valueLabels) for (const [x, y] of p) write(doc, 'medium', 6.5, num(y), Math.min(Math.max(px(x) - 20, plot.x + 2), plot.x + plot.w - 42), py(y) - 10, { width: 40, align: 'center', lineBreak: false });
+    if (options.valueLabels)
+      for (const [x, y] of p)
+        write(
+          doc,
+          'medium',
+          6.5,
+          num(y),
+          Math.min(Math.max(px(x) - 20, plot.x + 2), plot.x + plot.w - 42),
+          py(y) - 10,
+          { width: 40, align: 'center', lineBreak: false },
+        );
   });
   doc.restore();
   const xLabel = `${s.x.label} (${unitLabel(s.x.unit)})`;
   write(doc, 'regular', 7, xLabel, plot.x, plot.y + plot.h + 13, { width: plot.w, align: 'center', lineBreak: false });
   doc.save().rotate(-90, { origin: [box.x + 6, plot.y + plot.h / 2] });
-  write(doc, 'regular', 7, `${s.y.label} (${unitLabel(s.y.unit)})`, box.x + 6 - plot.h / 2, plot.y + plot.h / 2 - 3, { width: plot.h, align: 'center', lineBreak: false });
+  write(doc, 'regular', 7, `${s.y.label} (${unitLabel(s.y.unit)})`, box.x + 6 - plot.h / 2, plot.y + plot.h / 2 - 3, {
+    width: plot.h,
+    align: 'center',
+    lineBreak: false,
+  });
   doc.restore();
   let lx = plot.x;
   let ly = box.y + box.h - 8 - legendExtra;
@@ -129,9 +174,16 @@ export function drawSeriesChart(doc: Doc, box: Box, s: CheckSeries, options: { v
       ly += 9;
     }
     const band = isBandEdge(line.label);
-    doc.save().lineWidth(band ? 0.7 : 1.5).strokeColor(colours[i]);
+    doc
+      .save()
+      .lineWidth(band ? 0.7 : 1.5)
+      .strokeColor(colours[i]);
     if (band) doc.dash(2, { space: 1.5 });
-    doc.moveTo(lx, ly + 3).lineTo(lx + 12, ly + 3).stroke().restore();
+    doc
+      .moveTo(lx, ly + 3)
+      .lineTo(lx + 12, ly + 3)
+      .stroke()
+      .restore();
     write(doc, 'regular', 6.5, line.label, lx + 15, ly, { lineBreak: false });
     lx += w;
   });
@@ -142,18 +194,40 @@ export function drawSeriesChart(doc: Doc, box: Box, s: CheckSeries, options: { v
  * Without a series, draw what there is: the result beside its target on one scale, and say so.
  */
 export function drawResultGauge(doc: Doc, box: Box, c: BoardCheck): void {
-  if (!c.result || !c.target) return drawNoData(doc, box, c.result ? 'no chart data (no target to compare with)' : 'no chart data \u2014 not recorded');
+  if (!c.result || !c.target)
+    return drawNoData(
+      doc,
+      box,
+      c.result ? 'no chart data (no target to compare with)' : 'no chart data \u2014 not recorded',
+    );
   drawNoData(doc, box, 'no chart data \u2014 the result against its target:');
   const max = Math.max(Math.abs(c.result.value), c.target.value, 1e-9) * 1.25;
   const bar = { x: box.x + 16, y: box.y + box.h / 2, w: box.w - 32 };
   const at = (v: number) => bar.x + (Math.min(Math.abs(v), max) / max) * bar.w;
   doc.save();
-  doc.lineWidth(0.6).strokeColor(RULE).moveTo(bar.x, bar.y + 8).lineTo(bar.x + bar.w, bar.y + 8).stroke();
-  doc.fillColor(STATUS_COLOURS[c.status] ?? INK).rect(bar.x, bar.y, Math.max(1, at(c.result.value) - bar.x), 8).fill();
-  doc.lineWidth(1).strokeColor(STATUS_COLOURS['outside-target']).dash(2, { space: 2 }).moveTo(at(c.target.value), bar.y - 6).lineTo(at(c.target.value), bar.y + 14).stroke().undash();
+  doc
+    .lineWidth(0.6)
+    .strokeColor(RULE)
+    .moveTo(bar.x, bar.y + 8)
+    .lineTo(bar.x + bar.w, bar.y + 8)
+    .stroke();
+  doc
+    .fillColor(STATUS_COLOURS[c.status] ?? INK)
+    .rect(bar.x, bar.y, Math.max(1, at(c.result.value) - bar.x), 8)
+    .fill();
+  doc
+    .lineWidth(1)
+    .strokeColor(STATUS_COLOURS['outside-target'])
+    .dash(2, { space: 2 })
+    .moveTo(at(c.target.value), bar.y - 6)
+    .lineTo(at(c.target.value), bar.y + 14)
+    .stroke()
+    .undash();
   doc.restore();
   const same = c.target.unit === c.result.unit;
-  write(doc, 'regular', 7, `result ${num(c.result.value)} ${unitLabel(c.result.unit)}`, bar.x, bar.y + 12, { lineBreak: false });
+  write(doc, 'regular', 7, `result ${num(c.result.value)} ${unitLabel(c.result.unit)}`, bar.x, bar.y + 12, {
+    lineBreak: false,
+  });
   const label = `target ${targetText(c)}${same ? '' : ' (other unit)'}`;
   const tx = Math.min(at(c.target.value) + 4, bar.x + bar.w - widthOf(doc, 'regular', 7, label));
   write(doc, 'regular', 7, label, tx, bar.y - 14, { lineBreak: false });
@@ -182,14 +256,35 @@ export function drawSquarenessSketch(doc: Doc, box: Box, c: BoardCheck, workArea
   doc.save();
   doc.lineWidth(0.6).strokeColor(RULE).dash(2, { space: 2 }).rect(x0, y0, w, h).stroke().undash();
   doc.lineWidth(1.4).strokeColor(STATUS_COLOURS[c.status] ?? INK);
-  doc.moveTo(x0, y0 + h).lineTo(x0 + w, y0 + h).lineTo(x0 + w + lean, y0).lineTo(x0 + lean, y0).closePath().stroke();
-  doc.lineWidth(0.6).strokeColor(MUTED).moveTo(x0, y0 + h).lineTo(x0 + w + lean, y0).moveTo(x0 + w, y0 + h).lineTo(x0 + lean, y0).stroke();
+  doc
+    .moveTo(x0, y0 + h)
+    .lineTo(x0 + w, y0 + h)
+    .lineTo(x0 + w + lean, y0)
+    .lineTo(x0 + lean, y0)
+    .closePath()
+    .stroke();
+  doc
+    .lineWidth(0.6)
+    .strokeColor(MUTED)
+    .moveTo(x0, y0 + h)
+    .lineTo(x0 + w + lean, y0)
+    .moveTo(x0 + w, y0 + h)
+    .lineTo(x0 + lean, y0)
+    .stroke();
   doc.restore();
   const tx = x0 + w + Math.abs(lean) + 24;
   write(doc, 'medium', 8, `${num(c.result.value)} mm/m out of square`, tx, y0 + 4, { lineBreak: false });
   write(doc, 'regular', 7.5, `target ${targetText(c)}`, tx, y0 + 18, { lineBreak: false });
   doc.fillColor(MUTED);
   write(doc, 'regular', 7, c.result.summary, tx, y0 + 32, { width: box.x + box.w - tx - 8 });
-  write(doc, 'regular', 7, `dashed: square; solid: as measured; diagonals drawn thin (work area ${workArea.x} \u00d7 ${workArea.y} mm)`, tx, y0 + h - 10, { width: box.x + box.w - tx - 8, lineBreak: false });
+  write(
+    doc,
+    'regular',
+    7,
+    `dashed: square; solid: as measured; diagonals drawn thin (work area ${workArea.x} \u00d7 ${workArea.y} mm)`,
+    tx,
+    y0 + h - 10,
+    { width: box.x + box.w - tx - 8, lineBreak: false },
+  );
   doc.fillColor(INK);
 }

@@ -20,7 +20,10 @@ let cache: Record<FontName, Buffer> | null = null;
 /** The font files, read and unpacked once; embedded as subsets so the PDF carries only the glyphs it uses. */
 export function certificateFonts(): Record<FontName, Buffer> {
   cache ??= Object.fromEntries(
-    Object.entries(FILES).map(([name, file]) => [name, woffToSfnt(readFileSync(require.resolve(`@fontsource/roboto/files/${file}`)))]),
+    Object.entries(FILES).map(([name, file]) => [
+      name,
+      woffToSfnt(readFileSync(require.resolve(`@fontsource/roboto/files/${file}`))),
+    ]),
   ) as Record<FontName, Buffer>;
   return cache;
 }

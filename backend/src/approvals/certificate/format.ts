@@ -1,7 +1,15 @@
 import { CHECK_KINDS } from '../../records/kinds.js';
 import type { BoardCheck } from '../snapshot.js';
 
-const UNIT_WORDS: Record<string, string> = { um: '\u00b5m', thou: 'thou', in: 'in', mm: 'mm', 'mm/m': 'mm/m', '%': '%', days: 'days' };
+const UNIT_WORDS: Record<string, string> = {
+  um: '\u00b5m',
+  thou: 'thou',
+  in: 'in',
+  mm: 'mm',
+  'mm/m': 'mm/m',
+  '%': '%',
+  days: 'days',
+};
 
 export const unitLabel = (unit: string) => UNIT_WORDS[unit] ?? unit;
 

@@ -19,7 +19,15 @@ export function runs(text: string): { math: boolean; text: string }[] {
  * doc.text with a fallback font: runs of ≤, ≥, Δ… are set in Roboto's math subset so they print
  * instead of turning into blanks. Position and options apply to the whole paragraph.
  */
-export function write(doc: Doc, font: FontName, size: number, text: string, x?: number, y?: number, options: PDFKit.Mixins.TextOptions = {}): void {
+export function write(
+  doc: Doc,
+  font: FontName,
+  size: number,
+  text: string,
+  x?: number,
+  y?: number,
+  options: PDFKit.Mixins.TextOptions = {},
+): void {
   const parts = runs(text);
   doc.fontSize(size);
   if (parts.length <= 1 && !parts[0]?.math) {

@@ -5,7 +5,14 @@ import type PDFKit from 'pdfkit';
  * Draws a QR code of the text as vector squares (no image), so the same text always gives the
  * same PDF bytes. `size` is the printed width in points, quiet zone of 4 modules included.
  */
-export function drawQrCode(doc: PDFKit.PDFDocument, text: string, x: number, y: number, size: number, colour: string): void {
+export function drawQrCode(
+  doc: PDFKit.PDFDocument,
+  text: string,
+  x: number,
+  y: number,
+  size: number,
+  colour: string,
+): void {
   const { modules } = QRCode.create(text, { errorCorrectionLevel: 'M' });
   const count = modules.size + 8;
   const cell = size / count;
@@ -21,5 +28,7 @@ export function drawQrCode(doc: PDFKit.PDFDocument, text: string, x: number, y: 
 /** The dark modules of the QR code of the text, row by row (for tests that read the code back). */
 export function qrMatrix(text: string): boolean[][] {
   const { modules } = QRCode.create(text, { errorCorrectionLevel: 'M' });
-  return Array.from({ length: modules.size }, (_, r) => Array.from({ length: modules.size }, (_, c) => !!modules.get(r, c)));
+  return Array.from({ length: modules.size }, (_, r) =>
+    Array.from({ length: modules.size }, (_, c) => !!modules.get(r, c)),
+  );
 }

@@ -23,8 +23,14 @@ export class PublicVerificationService {
 
   async record(token: string) {
     const a = await this.approval(token);
-    if (!a.signature) throw new NotFoundException('This approval was signed before signatures were kept: it has no signed record to download.');
-    return { record: await this.signatures.publicRecord(a), filename: `railwright-signed-record-${a.approvedAt.toISOString().slice(0, 10)}-${a.id.slice(0, 8)}.json` };
+    if (!a.signature)
+      throw new NotFoundException(
+        'This approval was signed before signatures were kept: it has no signed record to download.',
+      );
+    return {
+      record: await this.signatures.publicRecord(a),
+      filename: `railwright-signed-record-${a.approvedAt.toISOString().slice(0, 10)}-${a.id.slice(0, 8)}.json`,
+    };
   }
 
   publicKey(): string {

@@ -3,7 +3,9 @@ import { diffJson, recordDifferences } from './record-diff.js';
 
 describe('record differences', () => {
   it('names each changed leaf by its path, with the value signed and the value now', () => {
-    expect(diffJson({ a: 1, b: { c: [1, 2, 3] } }, { a: 1, b: { c: [1, 5, 3] } })).toEqual([{ path: '$.b.c[1]', signed: 2, current: 5 }]);
+    expect(diffJson({ a: 1, b: { c: [1, 2, 3] } }, { a: 1, b: { c: [1, 5, 3] } })).toEqual([
+      { path: '$.b.c[1]', signed: 2, current: 5 },
+    ]);
   });
 
   it('reports members and array items added or removed', () => {
@@ -22,7 +24,13 @@ describe('record differences', () => {
     const signed = canonicalJson({ statement: 'Ready.', records: { 'rail-sweep:r1': record(2) } });
     const now = canonicalJson({ statement: 'Ready!', records: { 'rail-sweep:r1': record(7) } });
     expect(recordDifferences(signed, now)).toEqual([
-      { path: 'records["rail-sweep:r1"].row.readingsRaw[1]', record: { kind: 'rail-sweep', id: 'r1' }, change: 'changed', signed: 2, current: 7 },
+      {
+        path: 'records["rail-sweep:r1"].row.readingsRaw[1]',
+        record: { kind: 'rail-sweep', id: 'r1' },
+        change: 'changed',
+        signed: 2,
+        current: 7,
+      },
       { path: 'statement', record: null, change: 'changed', signed: 'Ready.', current: 'Ready!' },
     ]);
   });
@@ -32,7 +40,13 @@ describe('record differences', () => {
     const now = canonicalJson({ records: {}, extra: 1 });
     expect(recordDifferences(signed, now)).toEqual([
       { path: 'extra', record: null, change: 'added', signed: null, current: 1 },
-      { path: 'records["waiver:w1"]', record: { kind: 'waiver', id: 'w1' }, change: 'removed', signed: { kind: 'waiver', id: 'w1', row: { reason: 'r' } }, current: null },
+      {
+        path: 'records["waiver:w1"]',
+        record: { kind: 'waiver', id: 'w1' },
+        change: 'removed',
+        signed: { kind: 'waiver', id: 'w1', row: { reason: 'r' } },
+        current: null,
+      },
     ]);
   });
 });

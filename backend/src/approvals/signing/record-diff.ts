@@ -13,15 +13,21 @@ export interface RecordDifference {
 }
 
 const IDENTIFIER = /^[A-Za-z_$][\w$]*$/;
-const member = (path: string, key: string) => (IDENTIFIER.test(key) ? `${path}.${key}` : `${path}[${JSON.stringify(key)}]`);
+const member = (path: string, key: string) =>
+  IDENTIFIER.test(key) ? `${path}.${key}` : `${path}[${JSON.stringify(key)}]`;
 
 const isObject = (v: unknown): v is Record<string, unknown> => !!v && typeof v === 'object' && !Array.isArray(v);
 
 /** Every leaf where two JSON values differ, in a stable order (keys sorted, arrays by index). */
-export function diffJson(signed: unknown, current: unknown, path = '$'): { path: string; signed: unknown; current: unknown }[] {
+export function diffJson(
+  signed: unknown,
+  current: unknown,
+  path = '$',
+): { path: string; signed: unknown; current: unknown }[] {
   if (Array.isArray(signed) && Array.isArray(current)) {
     const out: { path: string; signed: unknown; current: unknown }[] = [];
-    for (let i = 0; i < Math.max(signed.length, current.length); i++) out.push(...diffJson(signed[i], current[i], `${path}[${i}]`));
+    for (let i = 0; i < Math.max(signed.length, current.length); i++)
+      out.push(...diffJson(signed[i], current[i], `${path}[${i}]`));
     return out;
   }
   if (isObject(signed) && isObject(current)) {
@@ -40,6 +46,12 @@ export function recordDifferences(signedText: string, currentText: string): Reco
     const inRecord = /^\$\.records\["([^"]+)"\]/.exec(d.path);
     const entry = inRecord ? (signed.records?.[inRecord[1]] ?? current.records?.[inRecord[1]]) : undefined;
     const change = d.signed === undefined ? 'added' : d.current === undefined ? 'removed' : 'changed';
-    return { path: d.path.replace(/^\$\.?/, ''), record: entry ? { kind: entry.kind, id: entry.id } : null, change, signed: d.signed ?? null, current: d.current ?? null };
+    return {
+      path: d.path.replace(/^\$\.?/, ''),
+      record: entry ? { kind: entry.kind, id: entry.id } : null,
+      change,
+      signed: d.signed ?? null,
+      current: d.current ?? null,
+    };
   });
 }

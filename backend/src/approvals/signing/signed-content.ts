@@ -17,7 +17,8 @@ export interface LiveRecord {
 export function plain(value: unknown): unknown {
   if (value instanceof Date) return value.toISOString();
   if (Array.isArray(value)) return value.map(plain);
-  if (value && typeof value === 'object') return Object.fromEntries(Object.entries(value).map(([k, v]) => [k, plain(v)]));
+  if (value && typeof value === 'object')
+    return Object.fromEntries(Object.entries(value).map(([k, v]) => [k, plain(v)]));
   return value;
 }
 
@@ -25,7 +26,8 @@ export function plain(value: unknown): unknown {
 export const recordKey = (kind: string, id: string) => `${kind}:${id}`;
 
 function recordEntry(r: LiveRecord): Record<string, unknown> {
-  if (!isSignedRecordKind(r.kind)) return { kind: r.kind, id: r.id, row: null, note: 'a kind of record whose rows are not signed' };
+  if (!isSignedRecordKind(r.kind))
+    return { kind: r.kind, id: r.id, row: null, note: 'a kind of record whose rows are not signed' };
   const spec = SIGNED_RECORDS[r.kind];
   if (!r.row) return { kind: r.kind, id: r.id, row: null, note: 'the record no longer exists' };
   const row = Object.fromEntries(Object.entries(r.row).filter(([k]) => !spec.unsigned?.includes(k)));

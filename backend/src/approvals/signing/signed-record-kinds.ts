@@ -34,20 +34,40 @@ export interface SignedRecordSpec {
 
 /** Child rows signed with their record, and columns left out of the signature: the exceptions. */
 const CHILDREN: Partial<Record<SignedRecordKind, ChildRows>> = {
-  'bolt-down': { name: 'holes', table: boltDownHoles, parent: boltDownHoles.boltDownId, orderBy: [boltDownHoles.holeIndex, boltDownHoles.id] },
-  'safety-walk': { name: 'answers', table: safetyAnswers, parent: safetyAnswers.walkId, orderBy: [safetyAnswers.itemKey, safetyAnswers.id] },
+  'bolt-down': {
+    name: 'holes',
+    table: boltDownHoles,
+    parent: boltDownHoles.boltDownId,
+    orderBy: [boltDownHoles.holeIndex, boltDownHoles.id],
+  },
+  'safety-walk': {
+    name: 'answers',
+    table: safetyAnswers,
+    parent: safetyAnswers.walkId,
+    orderBy: [safetyAnswers.itemKey, safetyAnswers.id],
+  },
 };
-const UNSIGNED: Partial<Record<SignedRecordKind, readonly string[]>> = { machine: ['state', 'version', 'lastActivityAt', 'updatedAt'] };
+const UNSIGNED: Partial<Record<SignedRecordKind, readonly string[]>> = {
+  machine: ['state', 'version', 'lastActivityAt', 'updatedAt'],
+};
 
-const TABLES = new Map((Object.values(schema) as unknown[]).filter((t): t is TableWithId => is(t, PgTable)).map((t) => [getTableName(t), t]));
+const TABLES = new Map(
+  (Object.values(schema) as unknown[]).filter((t): t is TableWithId => is(t, PgTable)).map((t) => [getTableName(t), t]),
+);
 
 function tableOf(kind: SignedRecordKind): TableWithId {
   const table = TABLES.get(RECORD_TYPES[kind].table);
-  if (!table) throw new Error(`records/kinds.ts names table ${RECORD_TYPES[kind].table} for ${kind}, which the schema does not have`);
+  if (!table)
+    throw new Error(
+      `records/kinds.ts names table ${RECORD_TYPES[kind].table} for ${kind}, which the schema does not have`,
+    );
   return table;
 }
 
 /** Where each kind of record lives: the table its entry in records/kinds.ts names, with the exceptions above. */
 export const SIGNED_RECORDS = Object.fromEntries(
-  SIGNED_RECORD_KINDS.map((kind): [SignedRecordKind, SignedRecordSpec] => [kind, { table: tableOf(kind), children: CHILDREN[kind], unsigned: UNSIGNED[kind] }]),
+  SIGNED_RECORD_KINDS.map((kind): [SignedRecordKind, SignedRecordSpec] => [
+    kind,
+    { table: tableOf(kind), children: CHILDREN[kind], unsigned: UNSIGNED[kind] },
+  ]),
 ) as Record<SignedRecordKind, SignedRecordSpec>;

@@ -38,9 +38,16 @@ describe('rows signed in an earlier layout', () => {
       const layouts = snapshots.filter((s) => s.snapshot.tables[`public.${table}`]);
       expect(layouts.length).toBeGreaterThan(0);
       for (const { tag, snapshot } of layouts) {
-        const row = Object.fromEntries(Object.values(snapshot.tables[`public.${table}`].columns).map((c) => [propertyOf.get(c.name) ?? camel(c.name), 'mm']));
+        const row = Object.fromEntries(
+          Object.values(snapshot.tables[`public.${table}`].columns).map((c) => [
+            propertyOf.get(c.name) ?? camel(c.name),
+            'mm',
+          ]),
+        );
         const text = canonicalJson({ records: { [`${kind}:x`]: { kind, id: 'x', row } } });
-        const upgraded = JSON.parse(upgradeSignedContent(text)) as { records: Record<string, { row: Record<string, unknown> }> };
+        const upgraded = JSON.parse(upgradeSignedContent(text)) as {
+          records: Record<string, { row: Record<string, unknown> }>;
+        };
         expect([tag, Object.keys(upgraded.records[`${kind}:x`].row).sort()]).toEqual([tag, Object.keys(today).sort()]);
       }
     });
@@ -48,21 +55,41 @@ describe('rows signed in an earlier layout', () => {
     if (spec.children) {
       const child = getTableName(spec.children.table);
       it(`${kind}: its child rows (${child}) have kept one layout, as no upgrade step covers them`, () => {
-        const now = Object.values(getTableColumns(spec.children!.table)).map((c) => c.name).sort();
+        const now = Object.values(getTableColumns(spec.children!.table))
+          .map((c) => c.name)
+          .sort();
         for (const { tag, snapshot } of snapshots.filter((s) => s.snapshot.tables[`public.${child}`])) {
-          expect([tag, Object.values(snapshot.tables[`public.${child}`].columns).map((c) => c.name).sort()]).toEqual([tag, now]);
+          expect([
+            tag,
+            Object.values(snapshot.tables[`public.${child}`].columns)
+              .map((c) => c.name)
+              .sort(),
+          ]).toEqual([tag, now]);
         }
       });
     }
   }
 
   it('leaves a record signed in today’s layout as it is', () => {
-    const text = canonicalJson({ format: 'x', records: { 'rail-sweep:a': { kind: 'rail-sweep', id: 'a', row: { readingUnit: 'um', lengthUnit: 'in', face: 'top', warnings: [] } } } });
+    const text = canonicalJson({
+      format: 'x',
+      records: {
+        'rail-sweep:a': {
+          kind: 'rail-sweep',
+          id: 'a',
+          row: { readingUnit: 'um', lengthUnit: 'in', face: 'top', warnings: [] },
+        },
+      },
+    });
     expect(upgradeSignedContent(text)).toBe(text);
   });
 
   it('carries a travel trial typed in inches to mm as migration 0024 did', () => {
-    const text = canonicalJson({ records: { 't:a': { kind: 'travel-trial', id: 'a', row: { unit: 'in', moves: [{ commanded: 500, measured: 19.95 }] } } } });
+    const text = canonicalJson({
+      records: {
+        't:a': { kind: 'travel-trial', id: 'a', row: { unit: 'in', moves: [{ commanded: 500, measured: 19.95 }] } },
+      },
+    });
     const row = JSON.parse(upgradeSignedContent(text)).records['t:a'].row;
     // 19.95 in × 25.4 mm/in = 506.73 mm exactly (1 in = 25.4 mm by definition).
     expect(row).toMatchObject({ readingUnit: 'in', lengthUnit: 'mm', moves: [{ commanded: 500, measured: 506.73 }] });

@@ -52,9 +52,15 @@ const READ_UNITS = ['mm', 'um', 'in', 'thou'];
 const MM_PER: Record<string, string> = { in: '25.4', thou: '0.0254', um: '0.001' };
 
 const isMoveList = (moves: unknown): moves is Row[] =>
-  Array.isArray(moves) && moves.every((m) => !!m && typeof m === 'object' && !Array.isArray(m) && typeof (m as Row).measured === 'number');
+  Array.isArray(moves) &&
+  moves.every((m) => !!m && typeof m === 'object' && !Array.isArray(m) && typeof (m as Row).measured === 'number');
 
-const temperatures = { machineTemperatureC: null, scaleTemperatureC: null, scaleMaterial: null, instrumentResolution: null };
+const temperatures = {
+  machineTemperatureC: null,
+  scaleTemperatureC: null,
+  scaleMaterial: null,
+  instrumentResolution: null,
+};
 
 export const SIGNED_ROW_UPGRADES: readonly Step[] = [
   added('0018', 'rail-sweep', { readingUnit: 'mm', lengthUnit: 'mm', face: 'side', warnings: [] }),
@@ -78,10 +84,18 @@ export const SIGNED_ROW_UPGRADES: readonly Step[] = [
   dropped('0023', 'test-cut', 'unit'),
   fromUnit('0024', 'travel-trial', (unit, row) =>
     typeof unit === 'string' && unit in MM_PER && isMoveList(row.moves)
-      ? { readingUnit: unit, moves: row.moves.map((m) => ({ commanded: m.commanded, measured: decimalTimes(m.measured as number, MM_PER[unit], 12) })) }
+      ? {
+          readingUnit: unit,
+          moves: row.moves.map((m) => ({
+            commanded: m.commanded,
+            measured: decimalTimes(m.measured as number, MM_PER[unit], 12),
+          })),
+        }
       : {},
   ),
-  fromUnit('0024', 'positioning-run', (unit) => (typeof unit === 'string' && READ_UNITS.includes(unit) ? { readingUnit: unit } : {})),
+  fromUnit('0024', 'positioning-run', (unit) =>
+    typeof unit === 'string' && READ_UNITS.includes(unit) ? { readingUnit: unit } : {},
+  ),
   dropped('0025', 'positioning-run', 'unit'),
   dropped('0025', 'travel-trial', 'unit'),
   added('0027', 'machine', { lengthUnit: 'mm' }),

@@ -38,7 +38,11 @@ export class SignedRecordService {
   /** Signs the approval's record as it is now; called in the approving command's transaction, after its locks. */
   async seal(approval: ApprovalRow): Promise<ApprovalRow> {
     const content = await this.liveContent(approval);
-    return this.approvals.setSignature(approval.id, { signature: this.key.sign(content), signingKeyId: this.key.keyId, signedContent: content });
+    return this.approvals.setSignature(approval.id, {
+      signature: this.key.sign(content),
+      signingKeyId: this.key.keyId,
+      signedContent: content,
+    });
   }
 
   /** The canonical record, recomputed from the approval's row and every record it stands on as they are now. */
@@ -49,9 +53,11 @@ export class SignedRecordService {
     for (const kind of SIGNED_RECORD_KINDS) {
       const ids = [...new Set(locks.filter((l) => l.recordType === kind).map((l) => l.recordId))];
       const found = await this.rows.rowsOf(kind, ids);
-      for (const id of ids) records.push({ kind, id, row: found.get(id)?.row ?? null, children: found.get(id)?.children });
+      for (const id of ids)
+        records.push({ kind, id, row: found.get(id)?.row ?? null, children: found.get(id)?.children });
     }
-    for (const l of locks) if (!isSignedRecordKind(l.recordType)) records.push({ kind: l.recordType, id: l.recordId, row: null });
+    for (const l of locks)
+      if (!isSignedRecordKind(l.recordType)) records.push({ kind: l.recordType, id: l.recordId, row: null });
     return signedContent(live, records);
   }
 
@@ -62,14 +68,36 @@ export class SignedRecordService {
   async verify(approval: ApprovalRow): Promise<Verification> {
     const base = { keyId: approval.signingKeyId, differences: [] as RecordDifference[], moreDifferences: 0 };
     if (!approval.signature || !approval.signingKeyId) {
-      return { ...base, status: 'unsigned', valid: false, unchanged: null, signedCopyIntact: null, message: 'This approval was signed before signatures were kept: it has a record hash but no signature that can be checked.' };
+      return {
+        ...base,
+        status: 'unsigned',
+        valid: false,
+        unchanged: null,
+        signedCopyIntact: null,
+        message:
+          'This approval was signed before signatures were kept: it has a record hash but no signature that can be checked.',
+      };
     }
     if (approval.signingKeyId !== this.key.keyId) {
-      return { ...base, status: 'unknown-key', valid: false, unchanged: null, signedCopyIntact: null, message: `This approval was signed with a key this server does not hold (key id ${approval.signingKeyId}), so its signature cannot be checked here.` };
+      return {
+        ...base,
+        status: 'unknown-key',
+        valid: false,
+        unchanged: null,
+        signedCopyIntact: null,
+        message: `This approval was signed with a key this server does not hold (key id ${approval.signingKeyId}), so its signature cannot be checked here.`,
+      };
     }
     const live = await this.liveContent(approval);
     if (this.key.verify(live, approval.signature)) {
-      return { ...base, status: 'valid', valid: true, unchanged: true, signedCopyIntact: true, message: 'The signature is valid and the record is unchanged since it was signed.' };
+      return {
+        ...base,
+        status: 'valid',
+        valid: true,
+        unchanged: true,
+        signedCopyIntact: true,
+        message: 'The signature is valid and the record is unchanged since it was signed.',
+      };
     }
     const copyIntact = !!approval.signedContent && this.key.verify(approval.signedContent, approval.signature);
     // A copy signed before a migration changed the shape of its rows is carried through the same
@@ -92,7 +120,16 @@ export class SignedRecordService {
       : all.length
         ? 'The record has changed since it was signed, and the kept copy of the signed record no longer matches its signature either: the differences below are against that altered copy and may not be all that changed.'
         : 'The record has changed since it was signed, and the kept copy of the signed record was altered too, so what changed cannot be named.';
-    return { ...base, status: 'changed', valid: false, unchanged: false, signedCopyIntact: copyIntact, message, differences: all.slice(0, MAX_DIFFERENCES), moreDifferences: Math.max(0, all.length - MAX_DIFFERENCES) };
+    return {
+      ...base,
+      status: 'changed',
+      valid: false,
+      unchanged: false,
+      signedCopyIntact: copyIntact,
+      message,
+      differences: all.slice(0, MAX_DIFFERENCES),
+      moreDifferences: Math.max(0, all.length - MAX_DIFFERENCES),
+    };
   }
 
   /** The signed record as anyone can check it offline: the exact text, recomputed now, with its signature and key. */
@@ -100,7 +137,12 @@ export class SignedRecordService {
     const live = await this.liveContent(approval);
     // A record signed in an earlier layout is given as it was signed, so its signature checks out
     // offline; `currentContent` is the same record in today's layout.
-    const asSigned = approval.signature && approval.signedContent && !this.key.verify(live, approval.signature) && this.key.verify(approval.signedContent, approval.signature) && upgradeSignedContent(approval.signedContent) === live;
+    const asSigned =
+      approval.signature &&
+      approval.signedContent &&
+      !this.key.verify(live, approval.signature) &&
+      this.key.verify(approval.signedContent, approval.signature) &&
+      upgradeSignedContent(approval.signedContent) === live;
     return {
       algorithm: SIGNING_ALGORITHM,
       keyId: approval.signingKeyId,

@@ -13,7 +13,10 @@ export class SignedRecordsRepository {
   constructor(@Inject(DRIZZLE) private readonly db: Database) {}
 
   locksOf(approvalId: string): Promise<{ recordType: string; recordId: string }[]> {
-    return this.db.select({ recordType: recordLocks.recordType, recordId: recordLocks.recordId }).from(recordLocks).where(eq(recordLocks.approvalId, approvalId));
+    return this.db
+      .select({ recordType: recordLocks.recordType, recordId: recordLocks.recordId })
+      .from(recordLocks)
+      .where(eq(recordLocks.approvalId, approvalId));
   }
 
   /** The rows of one kind with the given ids, each with its child rows when the kind has any. */

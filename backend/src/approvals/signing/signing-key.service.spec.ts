@@ -43,7 +43,9 @@ describe('the signing key', () => {
     const der = execFileSync('openssl', ['pkey', '-pubin', '-outform', 'DER'], { input: key.publicKeyPem });
     expect(key.keyId).toBe(createHash('sha256').update(der).digest('hex'));
     const signature = key.sign('{"a":1}');
-    expect(verify(null, Buffer.from('{"a":1}'), createPublicKey(key.publicKeyPem), Buffer.from(signature, 'base64'))).toBe(true);
+    expect(
+      verify(null, Buffer.from('{"a":1}'), createPublicKey(key.publicKeyPem), Buffer.from(signature, 'base64')),
+    ).toBe(true);
     expect(key.verify('{"a":2}', signature)).toBe(false);
     expect(key.verify('{"a":1}', 'not a signature')).toBe(false);
   });

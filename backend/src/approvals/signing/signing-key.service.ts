@@ -1,5 +1,13 @@
 import { Injectable, Logger, OnModuleInit } from '@nestjs/common';
-import { createHash, createPrivateKey, createPublicKey, generateKeyPairSync, sign, verify, type KeyObject } from 'node:crypto';
+import {
+  createHash,
+  createPrivateKey,
+  createPublicKey,
+  generateKeyPairSync,
+  sign,
+  verify,
+  type KeyObject,
+} from 'node:crypto';
 import { existsSync, linkSync, mkdirSync, readFileSync, statSync, unlinkSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
@@ -9,7 +17,10 @@ export const SIGNING_ALGORITHM = 'Ed25519' as const;
 /** SIGNING_KEY_FILE, else signing-key.pem in the data folder ($RAILWRIGHT_DATA, or .data/ in the clone). */
 export function signingKeyPath(env: NodeJS.ProcessEnv = process.env): string {
   if (env.SIGNING_KEY_FILE) return path.resolve(env.SIGNING_KEY_FILE);
-  return path.join(env.RAILWRIGHT_DATA ? path.resolve(env.RAILWRIGHT_DATA) : path.join(cloneRoot(), '.data'), 'signing-key.pem');
+  return path.join(
+    env.RAILWRIGHT_DATA ? path.resolve(env.RAILWRIGHT_DATA) : path.join(cloneRoot(), '.data'),
+    'signing-key.pem',
+  );
 }
 
 function cloneRoot(): string {
@@ -30,7 +41,8 @@ export function loadOrCreateKey(file: string): { key: KeyObject; created: boolea
   try {
     return { key: createPrivateKey(readFileSync(file, 'utf8')), created: false };
   } catch (err) {
-    if ((err as NodeJS.ErrnoException).code !== 'ENOENT') throw new Error(`The signing key ${file} cannot be read: ${(err as Error).message}`, { cause: err });
+    if ((err as NodeJS.ErrnoException).code !== 'ENOENT')
+      throw new Error(`The signing key ${file} cannot be read: ${(err as Error).message}`, { cause: err });
   }
   mkdirSync(path.dirname(file), { recursive: true, mode: 0o700 });
   const { privateKey } = generateKeyPairSync('ed25519');
@@ -62,11 +74,14 @@ export class SigningKeyService implements OnModuleInit {
     const { key, created } = loadOrCreateKey(file);
     if (key.asymmetricKeyType !== 'ed25519') throw new Error(`The signing key ${file} is not an Ed25519 key`);
     if (created) this.logger.log(`Made the approval signing key ${file}`);
-    else if ((statSync(file).mode & 0o077) !== 0) this.logger.warn(`The signing key ${file} can be read by others than its owner: chmod 600 it`);
+    else if ((statSync(file).mode & 0o077) !== 0)
+      this.logger.warn(`The signing key ${file} can be read by others than its owner: chmod 600 it`);
     this.privateKey = key;
     this.publicKey = createPublicKey(key);
     this.publicKeyPem = this.publicKey.export({ type: 'spki', format: 'pem' }).toString();
-    this.keyId = createHash('sha256').update(this.publicKey.export({ type: 'spki', format: 'der' })).digest('hex');
+    this.keyId = createHash('sha256')
+      .update(this.publicKey.export({ type: 'spki', format: 'der' }))
+      .digest('hex');
   }
 
   /** Base64 Ed25519 signature of the text's UTF-8 bytes. */

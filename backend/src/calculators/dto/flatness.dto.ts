@@ -19,7 +19,9 @@ export class GridPointDto {
 
 export class FlatnessDto extends UnitFamiliesDto {
   @IsArray({ message: 'points must be a list of {x, y, z}' })
-  @ArrayMaxSize(MAX_POINTS, { message: `points has more than ${MAX_POINTS} values; at most ${MAX_POINTS} are accepted` })
+  @ArrayMaxSize(MAX_POINTS, {
+    message: `points has more than ${MAX_POINTS} values; at most ${MAX_POINTS} are accepted`,
+  })
   @IsObject({ each: true, message: 'every entry of points must be {x, y, z}' })
   @ValidateNested({ each: true })
   @Type(() => GridPointDto)

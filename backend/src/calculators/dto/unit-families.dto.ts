@@ -20,7 +20,9 @@ export class UnitFamiliesDto {
   // The single `unit` of earlier requests meant different things on different routes; it is
   // refused with a message that names its replacements rather than the pipe's "should not exist".
   @ValidateIf((_: object, v: unknown) => v !== undefined)
-  @Equals(undefined, { message: `unit is no longer accepted: send lengthUnit and readingUnit instead (${UNIT_FAMILY_HINT})` })
+  @Equals(undefined, {
+    message: `unit is no longer accepted: send lengthUnit and readingUnit instead (${UNIT_FAMILY_HINT})`,
+  })
   @ApiHideProperty() // refused when sent, so not part of the described request
   unit?: never;
 }

@@ -14,6 +14,8 @@ export const OptionalFiniteNumber = (field: string) => applyDecorators(Optional(
 export const NumberList = (field: string) =>
   applyDecorators(
     IsArray({ message: `${field} must be a list of numbers` }),
-    ArrayMaxSize(MAX_POINTS, { message: `${field} has more than ${MAX_POINTS} values; at most ${MAX_POINTS} are accepted` }),
+    ArrayMaxSize(MAX_POINTS, {
+      message: `${field} has more than ${MAX_POINTS} values; at most ${MAX_POINTS} are accepted`,
+    }),
     IsNumber(FINITE, { each: true, message: `every value in ${field} must be a finite number` }),
   );

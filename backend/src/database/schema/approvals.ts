@@ -16,18 +16,27 @@ export const waivers = pgTable(
   'waivers',
   {
     id: id(),
-    workshopId: uuid('workshop_id').notNull().references(() => workshops.id),
-    machineId: uuid('machine_id').notNull().references(() => machines.id),
+    workshopId: uuid('workshop_id')
+      .notNull()
+      .references(() => workshops.id),
+    machineId: uuid('machine_id')
+      .notNull()
+      .references(() => machines.id),
     checkKey: text('check_key').notNull(),
     /** The check's record when waived; null for a check never started. */
     recordType: text('record_type').$type<SignedRecordType>(),
     recordId: uuid('record_id'),
     reason: text('reason').notNull(),
-    waivedById: uuid('waived_by_id').notNull().references(() => users.id),
+    waivedById: uuid('waived_by_id')
+      .notNull()
+      .references(() => users.id),
     waivedByName: text('waived_by_name').notNull(),
     waivedAt: timestamp('waived_at', { withTimezone: true }).notNull().defaultNow(),
   },
-  (t) => [index('waivers_machine_idx').on(t.machineId, t.checkKey), oneOf('waivers_record_type_check', t.recordType, SIGNED_RECORD_TYPES)],
+  (t) => [
+    index('waivers_machine_idx').on(t.machineId, t.checkKey),
+    oneOf('waivers_record_type_check', t.recordType, SIGNED_RECORD_TYPES),
+  ],
 );
 
 export const APPROVAL_REQUEST_STATUSES = ['open', 'approved', 'closed'] as const;
@@ -37,9 +46,15 @@ export const approvalRequests = pgTable(
   'approval_requests',
   {
     id: id(),
-    workshopId: uuid('workshop_id').notNull().references(() => workshops.id),
-    machineId: uuid('machine_id').notNull().references(() => machines.id),
-    requestedById: uuid('requested_by_id').notNull().references(() => users.id),
+    workshopId: uuid('workshop_id')
+      .notNull()
+      .references(() => workshops.id),
+    machineId: uuid('machine_id')
+      .notNull()
+      .references(() => machines.id),
+    requestedById: uuid('requested_by_id')
+      .notNull()
+      .references(() => users.id),
     requestedByName: text('requested_by_name').notNull(),
     requestedAt: timestamp('requested_at', { withTimezone: true }).notNull().defaultNow(),
     /** open until approved, or closed when a check leaves the target before that. */
@@ -48,7 +63,9 @@ export const approvalRequests = pgTable(
   (t) => [
     index('approval_requests_machine_idx').on(t.machineId),
     // One open request per machine, however many clicks or server instances ask at once.
-    uniqueIndex('approval_requests_one_open').on(t.machineId).where(sql`${t.status} = 'open'`),
+    uniqueIndex('approval_requests_one_open')
+      .on(t.machineId)
+      .where(sql`${t.status} = 'open'`),
     oneOf('approval_requests_status_check', t.status, APPROVAL_REQUEST_STATUSES),
   ],
 );
@@ -58,10 +75,16 @@ export const approvals = pgTable(
   'approvals',
   {
     id: id(),
-    workshopId: uuid('workshop_id').notNull().references(() => workshops.id),
-    machineId: uuid('machine_id').notNull().references(() => machines.id),
+    workshopId: uuid('workshop_id')
+      .notNull()
+      .references(() => workshops.id),
+    machineId: uuid('machine_id')
+      .notNull()
+      .references(() => machines.id),
     requestId: uuid('request_id').references(() => approvalRequests.id),
-    approvedById: uuid('approved_by_id').notNull().references(() => users.id),
+    approvedById: uuid('approved_by_id')
+      .notNull()
+      .references(() => users.id),
     approvedByName: text('approved_by_name').notNull(),
     approvedAt: timestamp('approved_at', { withTimezone: true }).notNull(),
     statement: text('statement').notNull(),
@@ -92,7 +115,9 @@ export const approvals = pgTable(
     index('approvals_machine_idx').on(t.machineId, t.approvedAt),
     index('approvals_recheck_idx').on(t.recheckDueAt),
     // One standing approval per machine: a second signature for the same request is refused by the database.
-    uniqueIndex('approvals_one_standing').on(t.machineId).where(sql`${t.endedAt} is null`),
+    uniqueIndex('approvals_one_standing')
+      .on(t.machineId)
+      .where(sql`${t.endedAt} is null`),
     uniqueIndex('approvals_verification_token').on(t.verificationToken),
   ],
 );

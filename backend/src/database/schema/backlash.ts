@@ -20,9 +20,15 @@ export const backlashChecks = pgTable(
   'backlash_checks',
   {
     id: id(),
-    workshopId: uuid('workshop_id').notNull().references(() => workshops.id),
-    machineId: uuid('machine_id').notNull().references(() => machines.id),
-    axisId: uuid('axis_id').notNull().references(() => axes.id, { onDelete: 'cascade' }),
+    workshopId: uuid('workshop_id')
+      .notNull()
+      .references(() => workshops.id),
+    machineId: uuid('machine_id')
+      .notNull()
+      .references(() => machines.id),
+    axisId: uuid('axis_id')
+      .notNull()
+      .references(() => axes.id, { onDelete: 'cascade' }),
     lengthUnit: text('length_unit').$type<LengthUnit>().notNull().default('mm'),
     readingUnit: text('reading_unit').$type<LengthUnit>().notNull().default('mm'),
     positions: jsonb('positions').$type<BacklashPositionRecord[]>().notNull(),

@@ -1,4 +1,16 @@
-import { boolean, doublePrecision, index, integer, jsonb, pgTable, text, timestamp, uniqueIndex, uuid, type AnyPgColumn } from 'drizzle-orm/pg-core';
+import {
+  boolean,
+  doublePrecision,
+  index,
+  integer,
+  jsonb,
+  pgTable,
+  text,
+  timestamp,
+  uniqueIndex,
+  uuid,
+  type AnyPgColumn,
+} from 'drizzle-orm/pg-core';
 import { id, oneOf, timestamps } from './columns.js';
 import { workshops } from './workshops.js';
 import { machines } from './machines.js';
@@ -16,9 +28,15 @@ export const boltDowns = pgTable(
   'bolt_downs',
   {
     id: id(),
-    workshopId: uuid('workshop_id').notNull().references(() => workshops.id),
-    machineId: uuid('machine_id').notNull().references(() => machines.id),
-    railId: uuid('rail_id').notNull().references(() => rails.id, { onDelete: 'cascade' }),
+    workshopId: uuid('workshop_id')
+      .notNull()
+      .references(() => workshops.id),
+    machineId: uuid('machine_id')
+      .notNull()
+      .references(() => machines.id),
+    railId: uuid('rail_id')
+      .notNull()
+      .references(() => rails.id, { onDelete: 'cascade' }),
     mode: text('mode', { enum: BOLT_DOWN_MODES }).notNull(),
     /** Unit readings and the band are typed in. */
     readingUnit: text('reading_unit', { enum: BOLT_DOWN_UNITS }).notNull().default('mm'),
@@ -52,7 +70,9 @@ export const boltDownHoles = pgTable(
   'bolt_down_holes',
   {
     id: id(),
-    boltDownId: uuid('bolt_down_id').notNull().references(() => boltDowns.id, { onDelete: 'cascade' }),
+    boltDownId: uuid('bolt_down_id')
+      .notNull()
+      .references(() => boltDowns.id, { onDelete: 'cascade' }),
     holeIndex: integer('hole_index').notNull(),
     /** As typed, in the bolt-down's unit. */
     readingRaw: doublePrecision('reading_raw'),
@@ -77,8 +97,12 @@ export const boltDownWrites = pgTable(
   'bolt_down_writes',
   {
     writeId: uuid('write_id').primaryKey(),
-    workshopId: uuid('workshop_id').notNull().references(() => workshops.id),
-    boltDownId: uuid('bolt_down_id').notNull().references(() => boltDowns.id, { onDelete: 'cascade' }),
+    workshopId: uuid('workshop_id')
+      .notNull()
+      .references(() => workshops.id),
+    boltDownId: uuid('bolt_down_id')
+      .notNull()
+      .references(() => boltDowns.id, { onDelete: 'cascade' }),
     /** "hole:<index>" or "final-sweep". */
     target: text('target').notNull(),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),

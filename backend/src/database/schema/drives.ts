@@ -1,4 +1,15 @@
-import { boolean, doublePrecision, index, integer, jsonb, pgTable, text, timestamp, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
+import {
+  boolean,
+  doublePrecision,
+  index,
+  integer,
+  jsonb,
+  pgTable,
+  text,
+  timestamp,
+  uniqueIndex,
+  uuid,
+} from 'drizzle-orm/pg-core';
 import { sql } from 'drizzle-orm';
 import { id, oneOf, timestamps } from './columns.js';
 import { workshops } from './workshops.js';
@@ -49,8 +60,12 @@ export const axes = pgTable(
   'axes',
   {
     id: id(),
-    workshopId: uuid('workshop_id').notNull().references(() => workshops.id),
-    machineId: uuid('machine_id').notNull().references(() => machines.id),
+    workshopId: uuid('workshop_id')
+      .notNull()
+      .references(() => workshops.id),
+    machineId: uuid('machine_id')
+      .notNull()
+      .references(() => machines.id),
     name: text('name').notNull(),
     /** The unit the axis is set up in: travel, lead, feed rates (per minute) are shown in it; stored in mm. */
     lengthUnit: text('length_unit', { enum: DRIVE_UNITS }).notNull().default('mm'),
@@ -77,9 +92,15 @@ export const travelTrials = pgTable(
   'travel_trials',
   {
     id: id(),
-    workshopId: uuid('workshop_id').notNull().references(() => workshops.id),
-    machineId: uuid('machine_id').notNull().references(() => machines.id),
-    axisId: uuid('axis_id').notNull().references(() => axes.id, { onDelete: 'cascade' }),
+    workshopId: uuid('workshop_id')
+      .notNull()
+      .references(() => workshops.id),
+    machineId: uuid('machine_id')
+      .notNull()
+      .references(() => machines.id),
+    axisId: uuid('axis_id')
+      .notNull()
+      .references(() => axes.id, { onDelete: 'cascade' }),
     /** Unit of the commanded and measured moves. */
     lengthUnit: text('length_unit', { enum: DRIVE_UNITS }).notNull().default('mm'),
     /** Errors and residuals are shown in it; the instrument's resolution is typed in it. */
@@ -115,9 +136,15 @@ export const positioningRuns = pgTable(
   'positioning_runs',
   {
     id: id(),
-    workshopId: uuid('workshop_id').notNull().references(() => workshops.id),
-    machineId: uuid('machine_id').notNull().references(() => machines.id),
-    axisId: uuid('axis_id').notNull().references(() => axes.id, { onDelete: 'cascade' }),
+    workshopId: uuid('workshop_id')
+      .notNull()
+      .references(() => workshops.id),
+    machineId: uuid('machine_id')
+      .notNull()
+      .references(() => machines.id),
+    axisId: uuid('axis_id')
+      .notNull()
+      .references(() => axes.id, { onDelete: 'cascade' }),
     /** Unit of the target positions. */
     lengthUnit: text('length_unit', { enum: DRIVE_UNITS }).notNull().default('mm'),
     /** Unit of the deviations. */

@@ -3,7 +3,12 @@ import { id, oneOf } from './columns.js';
 import { workshops } from './workshops.js';
 import { machines } from './machines.js';
 import { users } from './users.js';
-import { EVIDENCE_SUBJECT_TYPES, SIGNED_RECORD_TYPES, type EvidenceSubjectType, type SignedRecordType } from '../../records/kinds.js';
+import {
+  EVIDENCE_SUBJECT_TYPES,
+  SIGNED_RECORD_TYPES,
+  type EvidenceSubjectType,
+  type SignedRecordType,
+} from '../../records/kinds.js';
 
 export const EVIDENCE_KINDS = ['photo', 'file'] as const;
 export type EvidenceKind = (typeof EVIDENCE_KINDS)[number];
@@ -17,8 +22,12 @@ export const evidence = pgTable(
   'evidence',
   {
     id: id(),
-    workshopId: uuid('workshop_id').notNull().references(() => workshops.id),
-    machineId: uuid('machine_id').notNull().references(() => machines.id),
+    workshopId: uuid('workshop_id')
+      .notNull()
+      .references(() => workshops.id),
+    machineId: uuid('machine_id')
+      .notNull()
+      .references(() => machines.id),
     subjectType: text('subject_type').$type<EvidenceSubjectType>().notNull(),
     subjectId: uuid('subject_id').notNull(),
     /** The subject's name when the file was attached; shown if the subject is gone later. */

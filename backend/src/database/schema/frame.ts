@@ -20,8 +20,12 @@ export const diagonalChecks = pgTable(
   'diagonal_checks',
   {
     id: id(),
-    workshopId: uuid('workshop_id').notNull().references(() => workshops.id),
-    machineId: uuid('machine_id').notNull().references(() => machines.id),
+    workshopId: uuid('workshop_id')
+      .notNull()
+      .references(() => workshops.id),
+    machineId: uuid('machine_id')
+      .notNull()
+      .references(() => machines.id),
     /** Unit the sides, diagonals and gantry span were entered in. */
     lengthUnit: text('length_unit').$type<EnteredUnit>().notNull().default('mm'),
     /** Smallest step of the tape or rule the diagonals were read with, mm (null: not recorded). */
@@ -34,7 +38,10 @@ export const diagonalChecks = pgTable(
     note: text('note').notNull().default(''),
     ...recorded,
   },
-  (t) => [index('diagonal_checks_machine_idx').on(t.workshopId, t.machineId, t.recordedAt), oneOf('diagonal_checks_length_unit_check', t.lengthUnit, LENGTH_UNITS)],
+  (t) => [
+    index('diagonal_checks_machine_idx').on(t.workshopId, t.machineId, t.recordedAt),
+    oneOf('diagonal_checks_length_unit_check', t.lengthUnit, LENGTH_UNITS),
+  ],
 );
 
 export interface BedGridPointMm {
@@ -48,8 +55,12 @@ export const bedGrids = pgTable(
   'bed_grids',
   {
     id: id(),
-    workshopId: uuid('workshop_id').notNull().references(() => workshops.id),
-    machineId: uuid('machine_id').notNull().references(() => machines.id),
+    workshopId: uuid('workshop_id')
+      .notNull()
+      .references(() => workshops.id),
+    machineId: uuid('machine_id')
+      .notNull()
+      .references(() => machines.id),
     /** Unit the grid positions were entered in (stored in mm). */
     lengthUnit: text('length_unit').$type<EnteredUnit>().notNull().default('mm'),
     /** Unit the heights were read in (stored in mm). */
@@ -73,7 +84,14 @@ export type CircleKind = 'hole' | 'disc';
 
 export interface TestCutSizesMm {
   nominal: { xMm: number; yMm: number; circleMm: number };
-  measured: { xMm: number; yMm: number; diagonal1Mm: number; diagonal2Mm: number; circleXMm: number; circleYMm: number };
+  measured: {
+    xMm: number;
+    yMm: number;
+    diagonal1Mm: number;
+    diagonal2Mm: number;
+    circleXMm: number;
+    circleYMm: number;
+  };
   /** Width of cut the controller did not compensate for (0 when kerf compensation was on). */
   kerfMm: number;
   circleKind: CircleKind;
@@ -85,8 +103,12 @@ export const testCuts = pgTable(
   'test_cuts',
   {
     id: id(),
-    workshopId: uuid('workshop_id').notNull().references(() => workshops.id),
-    machineId: uuid('machine_id').notNull().references(() => machines.id),
+    workshopId: uuid('workshop_id')
+      .notNull()
+      .references(() => workshops.id),
+    machineId: uuid('machine_id')
+      .notNull()
+      .references(() => machines.id),
     /** Unit the part sizes, diagonals, circle diameters, kerf and plate thickness were entered in. */
     lengthUnit: text('length_unit').$type<EnteredUnit>().notNull().default('mm'),
     /** Thickness of the plate cut, mm (null on cuts recorded before it was asked). */
@@ -97,5 +119,8 @@ export const testCuts = pgTable(
     note: text('note').notNull().default(''),
     ...recorded,
   },
-  (t) => [index('test_cuts_machine_idx').on(t.workshopId, t.machineId, t.recordedAt), oneOf('test_cuts_length_unit_check', t.lengthUnit, LENGTH_UNITS)],
+  (t) => [
+    index('test_cuts_machine_idx').on(t.workshopId, t.machineId, t.recordedAt),
+    oneOf('test_cuts_length_unit_check', t.lengthUnit, LENGTH_UNITS),
+  ],
 );

@@ -4,7 +4,16 @@ import { workshops } from './workshops.js';
 import { machines } from './machines.js';
 
 /** Which corner or edge of the outline is laid against the workpiece's datum. */
-export const PATTERN_REFERENCES = ['bottom-left', 'bottom-right', 'top-left', 'top-right', 'left', 'right', 'bottom', 'top'] as const;
+export const PATTERN_REFERENCES = [
+  'bottom-left',
+  'bottom-right',
+  'top-left',
+  'top-right',
+  'left',
+  'right',
+  'bottom',
+  'top',
+] as const;
 export type PatternReference = (typeof PATTERN_REFERENCES)[number];
 
 /** Units a pattern may be entered in; holes are kept in mm whatever was typed. */
@@ -17,8 +26,25 @@ export type PatternEntryKind = (typeof PATTERN_ENTRIES)[number];
 /** The pattern as the person entered it, in `lengthUnit` (so it can be edited the way it was typed). */
 export type StoredPatternEntry =
   | { kind: 'list'; holes: { x: number; y: number; diameter: number }[] }
-  | { kind: 'grid'; originX: number; originY: number; rows: number; columns: number; pitchX: number; pitchY: number; diameter: number }
-  | { kind: 'circle'; centreX: number; centreY: number; circleDiameter: number; count: number; startAngleDeg: number; diameter: number };
+  | {
+      kind: 'grid';
+      originX: number;
+      originY: number;
+      rows: number;
+      columns: number;
+      pitchX: number;
+      pitchY: number;
+      diameter: number;
+    }
+  | {
+      kind: 'circle';
+      centreX: number;
+      centreY: number;
+      circleDiameter: number;
+      count: number;
+      startAngleDeg: number;
+      diameter: number;
+    };
 
 export interface StoredHole {
   xMm: number;
@@ -35,8 +61,12 @@ export const holePatterns = pgTable(
   'hole_patterns',
   {
     id: id(),
-    workshopId: uuid('workshop_id').notNull().references(() => workshops.id),
-    machineId: uuid('machine_id').notNull().references(() => machines.id),
+    workshopId: uuid('workshop_id')
+      .notNull()
+      .references(() => workshops.id),
+    machineId: uuid('machine_id')
+      .notNull()
+      .references(() => machines.id),
     name: text('name').notNull(),
     reference: text('reference', { enum: PATTERN_REFERENCES }).notNull(),
     /** Unit the outline and the entry were typed in (holes kept in mm). */

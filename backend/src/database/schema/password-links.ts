@@ -12,7 +12,9 @@ export const passwordLinks = pgTable(
   'password_links',
   {
     id: id(),
-    userId: uuid('user_id').notNull().references(() => users.id),
+    userId: uuid('user_id')
+      .notNull()
+      .references(() => users.id),
     tokenHash: text('token_hash').notNull(),
     purpose: text('purpose', { enum: PASSWORD_LINK_PURPOSES }).notNull().default('invitation'),
     expiresAt: timestamp('expires_at', { withTimezone: true }).notNull(),

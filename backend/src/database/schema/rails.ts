@@ -1,5 +1,15 @@
 import { sql } from 'drizzle-orm';
-import { doublePrecision, index, integer, jsonb, pgTable, text, timestamp, uuid, type AnyPgColumn } from 'drizzle-orm/pg-core';
+import {
+  doublePrecision,
+  index,
+  integer,
+  jsonb,
+  pgTable,
+  text,
+  timestamp,
+  uuid,
+  type AnyPgColumn,
+} from 'drizzle-orm/pg-core';
 import { id, oneOf, timestamps } from './columns.js';
 import { workshops } from './workshops.js';
 import { machines } from './machines.js';
@@ -24,8 +34,12 @@ export const rails = pgTable(
   'rails',
   {
     id: id(),
-    workshopId: uuid('workshop_id').notNull().references(() => workshops.id),
-    machineId: uuid('machine_id').notNull().references(() => machines.id),
+    workshopId: uuid('workshop_id')
+      .notNull()
+      .references(() => workshops.id),
+    machineId: uuid('machine_id')
+      .notNull()
+      .references(() => machines.id),
     label: text('label').notNull(),
     axis: text('axis').notNull(),
     lengthMm: doublePrecision('length_mm').notNull(),
@@ -42,7 +56,10 @@ export const rails = pgTable(
     partnerRailId: uuid('partner_rail_id').references((): AnyPgColumn => rails.id, { onDelete: 'set null' }),
     ...timestamps,
   },
-  (t) => [index('rails_machine_idx').on(t.workshopId, t.machineId), oneOf('rails_length_unit_check', t.lengthUnit, SWEEP_UNITS)],
+  (t) => [
+    index('rails_machine_idx').on(t.workshopId, t.machineId),
+    oneOf('rails_length_unit_check', t.lengthUnit, SWEEP_UNITS),
+  ],
 );
 
 /** Stored engine result of a sweep; every length in mm. */
@@ -73,9 +90,15 @@ export const railSweeps = pgTable(
   {
     /** Made by the browser when it can, so a retried save is the same sweep. */
     id: id(),
-    workshopId: uuid('workshop_id').notNull().references(() => workshops.id),
-    machineId: uuid('machine_id').notNull().references(() => machines.id),
-    railId: uuid('rail_id').notNull().references(() => rails.id, { onDelete: 'cascade' }),
+    workshopId: uuid('workshop_id')
+      .notNull()
+      .references(() => workshops.id),
+    machineId: uuid('machine_id')
+      .notNull()
+      .references(() => machines.id),
+    railId: uuid('rail_id')
+      .notNull()
+      .references(() => rails.id, { onDelete: 'cascade' }),
     /** Unit the readings and the instrument resolution were typed in. */
     readingUnit: text('reading_unit', { enum: SWEEP_UNITS }).notNull().default('mm'),
     /** Unit the station positions were typed in (positions kept in mm). */

@@ -12,7 +12,9 @@ export const auditEntries = pgTable(
   'audit_entries',
   {
     id: id(),
-    workshopId: uuid('workshop_id').notNull().references(() => workshops.id),
+    workshopId: uuid('workshop_id')
+      .notNull()
+      .references(() => workshops.id),
     machineId: uuid('machine_id').references(() => machines.id),
     recordType: text('record_type').$type<RecordType>().notNull(),
     recordId: uuid('record_id'),
@@ -23,7 +25,9 @@ export const auditEntries = pgTable(
     actorName: text('actor_name').notNull(),
     at: timestamp('at', { withTimezone: true }).notNull().defaultNow(),
     /** The transaction that wrote it: joins the summary to the row changes it made. */
-    txid: bigint('txid', { mode: 'number' }).notNull().default(sql`txid_current()`),
+    txid: bigint('txid', { mode: 'number' })
+      .notNull()
+      .default(sql`txid_current()`),
   },
   (t) => [
     index('audit_machine_idx').on(t.machineId, t.at),
@@ -43,7 +47,9 @@ export const changeLog = pgTable(
   {
     id: id(),
     at: timestamp('at', { withTimezone: true }).notNull().defaultNow(),
-    txid: bigint('txid', { mode: 'number' }).notNull().default(sql`txid_current()`),
+    txid: bigint('txid', { mode: 'number' })
+      .notNull()
+      .default(sql`txid_current()`),
     workshopId: uuid('workshop_id'),
     machineId: uuid('machine_id'),
     tableName: text('table_name').notNull(),
@@ -69,7 +75,9 @@ export const recordLocks = pgTable(
     id: id(),
     recordType: text('record_type').$type<SignedRecordType>().notNull(),
     recordId: uuid('record_id').notNull(),
-    approvalId: uuid('approval_id').notNull().references(() => approvals.id),
+    approvalId: uuid('approval_id')
+      .notNull()
+      .references(() => approvals.id),
     lockedAt: timestamp('locked_at', { withTimezone: true }).notNull().defaultNow(),
   },
   (t) => [

@@ -15,7 +15,9 @@ export const safetyItems = pgTable(
   'safety_items',
   {
     id: id(),
-    workshopId: uuid('workshop_id').notNull().references(() => workshops.id),
+    workshopId: uuid('workshop_id')
+      .notNull()
+      .references(() => workshops.id),
     section: text('section', { enum: SAFETY_SECTIONS }).notNull(),
     text: text('text').notNull(),
     active: boolean('active').notNull().default(true),
@@ -23,7 +25,10 @@ export const safetyItems = pgTable(
     createdByName: text('created_by_name').notNull(),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
   },
-  (t) => [index('safety_items_workshop_idx').on(t.workshopId), oneOf('safety_items_section_check', t.section, SAFETY_SECTIONS)],
+  (t) => [
+    index('safety_items_workshop_idx').on(t.workshopId),
+    oneOf('safety_items_section_check', t.section, SAFETY_SECTIONS),
+  ],
 );
 
 /** One round of the safety walk of a machine; the latest is the current walk. */
@@ -31,8 +36,12 @@ export const safetyWalks = pgTable(
   'safety_walks',
   {
     id: id(),
-    workshopId: uuid('workshop_id').notNull().references(() => workshops.id),
-    machineId: uuid('machine_id').notNull().references(() => machines.id),
+    workshopId: uuid('workshop_id')
+      .notNull()
+      .references(() => workshops.id),
+    machineId: uuid('machine_id')
+      .notNull()
+      .references(() => machines.id),
     startedAt: timestamp('started_at', { withTimezone: true }).notNull().defaultNow(),
   },
   (t) => [index('safety_walks_machine_idx').on(t.workshopId, t.machineId, t.startedAt)],
@@ -43,7 +52,9 @@ export const safetyAnswers = pgTable(
   'safety_answers',
   {
     id: id(),
-    walkId: uuid('walk_id').notNull().references(() => safetyWalks.id),
+    walkId: uuid('walk_id')
+      .notNull()
+      .references(() => safetyWalks.id),
     itemKey: text('item_key').notNull(),
     answer: text('answer', { enum: SAFETY_ANSWERS }).notNull(),
     note: text('note').notNull().default(''),
@@ -51,5 +62,8 @@ export const safetyAnswers = pgTable(
     answeredByName: text('answered_by_name').notNull(),
     answeredAt: timestamp('answered_at', { withTimezone: true }).notNull().defaultNow(),
   },
-  (t) => [uniqueIndex('safety_answers_walk_item_unique').on(t.walkId, t.itemKey), oneOf('safety_answers_answer_check', t.answer, SAFETY_ANSWERS)],
+  (t) => [
+    uniqueIndex('safety_answers_walk_item_unique').on(t.walkId, t.itemKey),
+    oneOf('safety_answers_answer_check', t.answer, SAFETY_ANSWERS),
+  ],
 );

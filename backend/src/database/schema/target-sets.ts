@@ -23,7 +23,9 @@ export const targetSets = pgTable(
   'target_sets',
   {
     id: id(),
-    workshopId: uuid('workshop_id').notNull().references(() => workshops.id),
+    workshopId: uuid('workshop_id')
+      .notNull()
+      .references(() => workshops.id),
     name: text('name').notNull(),
     description: text('description').notNull().default(''),
     targets: jsonb('targets').$type<Record<string, TargetValue>>().notNull(),

@@ -1,5 +1,16 @@
 import { Type } from 'class-transformer';
-import { ArrayMaxSize, ArrayMinSize, IsArray, IsEmpty, IsNumber, IsObject, IsString, MaxLength, Min, ValidateNested } from 'class-validator';
+import {
+  ArrayMaxSize,
+  ArrayMinSize,
+  IsArray,
+  IsEmpty,
+  IsNumber,
+  IsObject,
+  IsString,
+  MaxLength,
+  Min,
+  ValidateNested,
+} from 'class-validator';
 import { Optional } from '../../common/optional.js';
 import { LengthUnitField, ReadingUnitField, UNIT_FAMILY_HINT } from '../../common/unit-fields.js';
 import type { LengthUnit } from '../../engine/units.js';
@@ -15,14 +26,18 @@ export class BacklashPositionDto {
 
   /** Readings after approaching while moving in the positive direction, in readingUnit. */
   @IsArray({ message: 'positions[].up must be a list of readings (in readingUnit)' })
-  @ArrayMinSize(MIN_APPROACHES, { message: `positions[].up needs at least ${MIN_APPROACHES} approaches from the negative side moving up` })
+  @ArrayMinSize(MIN_APPROACHES, {
+    message: `positions[].up needs at least ${MIN_APPROACHES} approaches from the negative side moving up`,
+  })
   @ArrayMaxSize(50, { message: 'positions[].up holds at most 50 readings' })
   @IsNumber(FINITE, { each: true, message: 'every value in positions[].up must be a finite number' })
   up: number[];
 
   /** Readings after approaching while moving in the negative direction, in readingUnit. */
   @IsArray({ message: 'positions[].down must be a list of readings (in readingUnit)' })
-  @ArrayMinSize(MIN_APPROACHES, { message: `positions[].down needs at least ${MIN_APPROACHES} approaches from the positive side moving down` })
+  @ArrayMinSize(MIN_APPROACHES, {
+    message: `positions[].down needs at least ${MIN_APPROACHES} approaches from the positive side moving down`,
+  })
   @ArrayMaxSize(50, { message: 'positions[].down holds at most 50 readings' })
   @IsNumber(FINITE, { each: true, message: 'every value in positions[].down must be a finite number' })
   down: number[];
@@ -31,7 +46,9 @@ export class BacklashPositionDto {
 export class CreateBacklashCheckDto {
   /** The single unit field of earlier versions: refused with a pointer to the two families. */
   @Optional()
-  @IsEmpty({ message: `unit is no longer accepted: send lengthUnit for the positions and readingUnit for the readings (${UNIT_FAMILY_HINT})` })
+  @IsEmpty({
+    message: `unit is no longer accepted: send lengthUnit for the positions and readingUnit for the readings (${UNIT_FAMILY_HINT})`,
+  })
   @ApiHideProperty() // refused when sent, so not part of the described request
   unit?: never;
 
@@ -43,7 +60,9 @@ export class CreateBacklashCheckDto {
 
   /** One near each end of the travel and one near its middle (more are welcome). */
   @IsArray({ message: 'positions must be a list of {position, up, down}' })
-  @ArrayMinSize(3, { message: 'positions needs at least 3 entries: one near each end of the travel and one near its middle' })
+  @ArrayMinSize(3, {
+    message: 'positions needs at least 3 entries: one near each end of the travel and one near its middle',
+  })
   @ArrayMaxSize(50, { message: 'positions holds at most 50 entries' })
   @IsObject({ each: true, message: 'every entry of positions must be {position, up, down}' })
   @ValidateNested({ each: true })

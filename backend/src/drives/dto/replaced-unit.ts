@@ -4,4 +4,6 @@ import { UNIT_FAMILY_HINT } from '../../common/unit-fields.js';
 
 /** The old single `unit` field: refused over HTTP with a message that names its two successors. */
 export const ReplacedUnitField = () =>
-  applyDecorators(IsEmpty({ message: `unit is no longer accepted: send lengthUnit and readingUnit instead (${UNIT_FAMILY_HINT})` }));
+  applyDecorators(
+    IsEmpty({ message: `unit is no longer accepted: send lengthUnit and readingUnit instead (${UNIT_FAMILY_HINT})` }),
+  );

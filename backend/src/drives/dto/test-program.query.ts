@@ -28,7 +28,9 @@ export class TestProgramQuery {
 
   /** Travel trial: the commanded distances from the start ("100,250,500"). */
   @Optional()
-  @Matches(/^\s*-?[\d.]+(\s*,\s*-?[\d.]+)*\s*$/, { message: 'distances must be comma-separated numbers (in lengthUnit)' })
+  @Matches(/^\s*-?[\d.]+(\s*,\s*-?[\d.]+)*\s*$/, {
+    message: 'distances must be comma-separated numbers (in lengthUnit)',
+  })
   distances?: string;
 
   /** Repeat-and-reverse run: the targets ("10,212.5,405"). */

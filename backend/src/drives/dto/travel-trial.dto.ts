@@ -1,5 +1,14 @@
 import { Type } from 'class-transformer';
-import { ArrayMaxSize, ArrayMinSize, IsArray, IsBoolean, IsObject, IsString, MaxLength, ValidateNested } from 'class-validator';
+import {
+  ArrayMaxSize,
+  ArrayMinSize,
+  IsArray,
+  IsBoolean,
+  IsObject,
+  IsString,
+  MaxLength,
+  ValidateNested,
+} from 'class-validator';
 import type { LengthUnit } from '../../engine/units.js';
 import { LengthUnitField, ReadingUnitField } from '../../common/unit-fields.js';
 import { Finite, OptionalFinite } from './validators.js';

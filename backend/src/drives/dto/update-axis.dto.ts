@@ -7,7 +7,10 @@ import { CreateAxisDto } from './create-axis.dto.js';
 const Clearable = () => ValidateIf((_: object, v: unknown) => v !== null && v !== undefined);
 type Clearing = 'maxFeedRate' | 'measuredTravel' | 'measuredTravelMm';
 // Typed so that the clearable fields below may be null.
-const Base: Type<Partial<Omit<CreateAxisDto, Clearing>> & { [K in Clearing]?: number | null }> = PartialType(CreateAxisDto, { skipNullProperties: false });
+const Base: Type<Partial<Omit<CreateAxisDto, Clearing>> & { [K in Clearing]?: number | null }> = PartialType(
+  CreateAxisDto,
+  { skipNullProperties: false },
+);
 
 /**
  * Every field of a new axis, each optional, with its rules and messages; a drive given replaces

@@ -15,7 +15,8 @@ export class DiskStorage implements EvidenceStorage {
   private pathOf(key: string): string {
     assertSafeKey(key);
     const full = path.resolve(this.root, ...key.split('/'));
-    if (!full.startsWith(path.resolve(this.root) + path.sep)) throw new Error('Refusing a path outside the evidence folder');
+    if (!full.startsWith(path.resolve(this.root) + path.sep))
+      throw new Error('Refusing a path outside the evidence folder');
     return full;
   }
 

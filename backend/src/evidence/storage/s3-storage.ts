@@ -34,7 +34,10 @@ export class S3Storage implements EvidenceStorage {
       endpoint: settings.endpoint,
       region: settings.region,
       forcePathStyle: settings.forcePathStyle,
-      credentials: settings.accessKeyId && settings.secretAccessKey ? { accessKeyId: settings.accessKeyId, secretAccessKey: settings.secretAccessKey } : undefined,
+      credentials:
+        settings.accessKeyId && settings.secretAccessKey
+          ? { accessKeyId: settings.accessKeyId, secretAccessKey: settings.secretAccessKey }
+          : undefined,
     });
   }
 
@@ -55,12 +58,22 @@ export class S3Storage implements EvidenceStorage {
     let pending: Buffer[] = [];
     let pendingBytes = 0;
     const sendPart = async () => {
-      uploadId ??= (await this.client.send(new CreateMultipartUploadCommand({ Bucket: this.bucket, Key: key }))).UploadId;
+      uploadId ??= (await this.client.send(new CreateMultipartUploadCommand({ Bucket: this.bucket, Key: key })))
+        .UploadId;
       const body = Buffer.concat(pending);
       pending = [];
       pendingBytes = 0;
       const partNumber = parts.length + 1;
-      const res = await this.client.send(new UploadPartCommand({ Bucket: this.bucket, Key: key, UploadId: uploadId, PartNumber: partNumber, Body: body, ContentLength: body.length }));
+      const res = await this.client.send(
+        new UploadPartCommand({
+          Bucket: this.bucket,
+          Key: key,
+          UploadId: uploadId,
+          PartNumber: partNumber,
+          Body: body,
+          ContentLength: body.length,
+        }),
+      );
       parts.push({ ETag: res.ETag, PartNumber: partNumber });
     };
     try {
@@ -71,14 +84,26 @@ export class S3Storage implements EvidenceStorage {
       }
       if (!uploadId) {
         const body = Buffer.concat(pending);
-        await this.client.send(new PutObjectCommand({ Bucket: this.bucket, Key: key, Body: body, ContentLength: body.length }));
+        await this.client.send(
+          new PutObjectCommand({ Bucket: this.bucket, Key: key, Body: body, ContentLength: body.length }),
+        );
         return key;
       }
       if (pendingBytes > 0) await sendPart();
-      await this.client.send(new CompleteMultipartUploadCommand({ Bucket: this.bucket, Key: key, UploadId: uploadId, MultipartUpload: { Parts: parts } }));
+      await this.client.send(
+        new CompleteMultipartUploadCommand({
+          Bucket: this.bucket,
+          Key: key,
+          UploadId: uploadId,
+          MultipartUpload: { Parts: parts },
+        }),
+      );
       return key;
     } catch (err) {
-      if (uploadId) await this.client.send(new AbortMultipartUploadCommand({ Bucket: this.bucket, Key: key, UploadId: uploadId })).catch(() => undefined);
+      if (uploadId)
+        await this.client
+          .send(new AbortMultipartUploadCommand({ Bucket: this.bucket, Key: key, UploadId: uploadId }))
+          .catch(() => undefined);
       throw err;
     }
   }
@@ -87,7 +112,13 @@ export class S3Storage implements EvidenceStorage {
     assertSafeKey(tempKey);
     assertSafeKey(key);
     await this.client.send(
-      new CopyObjectCommand({ Bucket: this.bucket, Key: key, CopySource: `${this.bucket}/${tempKey}`, ContentType: contentType, MetadataDirective: 'REPLACE' }),
+      new CopyObjectCommand({
+        Bucket: this.bucket,
+        Key: key,
+        CopySource: `${this.bucket}/${tempKey}`,
+        ContentType: contentType,
+        MetadataDirective: 'REPLACE',
+      }),
     );
     await this.discard(tempKey);
   }
@@ -99,7 +130,15 @@ export class S3Storage implements EvidenceStorage {
 
   async put(key: string, body: Buffer, contentType: string): Promise<void> {
     assertSafeKey(key);
-    await this.client.send(new PutObjectCommand({ Bucket: this.bucket, Key: key, Body: body, ContentType: contentType, ContentLength: body.length }));
+    await this.client.send(
+      new PutObjectCommand({
+        Bucket: this.bucket,
+        Key: key,
+        Body: body,
+        ContentType: contentType,
+        ContentLength: body.length,
+      }),
+    );
   }
 
   async read(key: string): Promise<StoredObject | null> {

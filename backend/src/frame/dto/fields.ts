@@ -14,7 +14,11 @@ export const PositiveLength = (field: string) =>
   );
 
 export const FiniteNumber = (field: string) =>
-  applyDecorators(IsNumber(FINITE, { message: `${field} must be a number` }), Min(-1_000_000, { message: `${field} is too small` }), Max(1_000_000, { message: `${field} is too large` }));
+  applyDecorators(
+    IsNumber(FINITE, { message: `${field} must be a number` }),
+    Min(-1_000_000, { message: `${field} is too small` }),
+    Max(1_000_000, { message: `${field} is too large` }),
+  );
 
 /**
  * The single `unit` of earlier requests meant every length here but only the heights in a bed
@@ -23,12 +27,23 @@ export const FiniteNumber = (field: string) =>
 export const NoSingleUnit = () =>
   applyDecorators(
     ValidateIf((_: object, v: unknown) => v !== undefined),
-    Equals(undefined, { message: `unit is no longer accepted: send lengthUnit and readingUnit instead (${UNIT_FAMILY_HINT})` }),
+    Equals(undefined, {
+      message: `unit is no longer accepted: send lengthUnit and readingUnit instead (${UNIT_FAMILY_HINT})`,
+    }),
   );
 
 /** An optional length greater than zero (a resolution, a plate thickness), in the request's lengthUnit or readingUnit. */
 export const OptionalPositive = (field: string) =>
-  applyDecorators(Optional(), IsNumber(FINITE, { message: `${field} must be a number` }), IsPositive({ message: `${field} must be greater than zero` }), Max(1_000_000, { message: `${field} is too large` }));
+  applyDecorators(
+    Optional(),
+    IsNumber(FINITE, { message: `${field} must be a number` }),
+    IsPositive({ message: `${field} must be greater than zero` }),
+    Max(1_000_000, { message: `${field} is too large` }),
+  );
 
 export const OptionalNote = () =>
-  applyDecorators(Optional(), IsString({ message: 'note must be text' }), MaxLength(2000, { message: 'note must be at most 2000 characters' }));
+  applyDecorators(
+    Optional(),
+    IsString({ message: 'note must be text' }),
+    MaxLength(2000, { message: 'note must be at most 2000 characters' }),
+  );

@@ -15,11 +15,17 @@ export class HistoryQueryDto {
   person?: string;
 
   @Optional()
-  @IsISO8601({ strict: true }, { message: 'from must be a date or date and time (ISO 8601), e.g. 2026-03-01 or 2026-03-01T00:00:00+01:00' })
+  @IsISO8601(
+    { strict: true },
+    { message: 'from must be a date or date and time (ISO 8601), e.g. 2026-03-01 or 2026-03-01T00:00:00+01:00' },
+  )
   from?: string;
 
   @Optional()
-  @IsISO8601({ strict: true }, { message: 'to must be a date or date and time (ISO 8601), e.g. 2026-03-31 or 2026-03-31T23:59:59+01:00' })
+  @IsISO8601(
+    { strict: true },
+    { message: 'to must be a date or date and time (ISO 8601), e.g. 2026-03-31 or 2026-03-31T23:59:59+01:00' },
+  )
   to?: string;
 
   @Optional()

@@ -1,9 +1,30 @@
 import { LengthUnitField } from '../../common/unit-fields.js';
 import { ReplacedUnitField } from '../../rails/dto/replaced-unit.js';
 import { Type } from 'class-transformer';
-import { ArrayMaxSize, ArrayMinSize, IsArray, IsIn, IsInt, IsNumber, IsObject, IsString, Max, MaxLength, Min, MinLength, ValidateIf, ValidateNested } from 'class-validator';
+import {
+  ArrayMaxSize,
+  ArrayMinSize,
+  IsArray,
+  IsIn,
+  IsInt,
+  IsNumber,
+  IsObject,
+  IsString,
+  Max,
+  MaxLength,
+  Min,
+  MinLength,
+  ValidateIf,
+  ValidateNested,
+} from 'class-validator';
 import { Optional } from '../../common/optional.js';
-import { PATTERN_ENTRIES, PATTERN_REFERENCES, type PatternEntryKind, type PatternReference, type PatternUnit } from '../../database/schema/hole-patterns.js';
+import {
+  PATTERN_ENTRIES,
+  PATTERN_REFERENCES,
+  type PatternEntryKind,
+  type PatternReference,
+  type PatternUnit,
+} from '../../database/schema/hole-patterns.js';
 import { ApiHideProperty } from '@nestjs/swagger';
 
 const FINITE = { allowNaN: false, allowInfinity: false } as const;
@@ -154,13 +175,18 @@ export class HolePatternDto {
   holes?: HoleDto[];
 
   @ValidateIf((o: HolePatternDto) => o.entry === 'grid' || o.grid !== undefined)
-  @IsObject({ message: 'grid must give originX, originY, rows, columns, pitchX, pitchY and diameter when entry is grid' })
+  @IsObject({
+    message: 'grid must give originX, originY, rows, columns, pitchX, pitchY and diameter when entry is grid',
+  })
   @ValidateNested()
   @Type(() => GridDto)
   grid?: GridDto;
 
   @ValidateIf((o: HolePatternDto) => o.entry === 'circle' || o.circle !== undefined)
-  @IsObject({ message: 'circle must give centreX, centreY, circleDiameter, count, startAngleDeg and diameter when entry is circle' })
+  @IsObject({
+    message:
+      'circle must give centreX, centreY, circleDiameter, count, startAngleDeg and diameter when entry is circle',
+  })
   @ValidateNested()
   @Type(() => CircleDto)
   circle?: CircleDto;

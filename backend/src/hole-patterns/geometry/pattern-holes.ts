@@ -48,7 +48,11 @@ export function boltCircleHoles(c: BoltCircleInput): Hole[] {
   const radius = c.circleDiameterMm / 2;
   return Array.from({ length: c.count }, (_, k) => {
     const angle = ((c.startAngleDeg + (360 * k) / c.count) * Math.PI) / 180;
-    return { xMm: c.centreXMm + radius * Math.cos(angle), yMm: c.centreYMm + radius * Math.sin(angle), diameterMm: c.diameterMm };
+    return {
+      xMm: c.centreXMm + radius * Math.cos(angle),
+      yMm: c.centreYMm + radius * Math.sin(angle),
+      diameterMm: c.diameterMm,
+    };
   });
 }
 
@@ -62,7 +66,13 @@ const fmt = (mm: number) => `${Number(mm.toFixed(3))} mm`;
  * `field(i)`) and the hole. Empty when every hole lies wholly inside, has a positive diameter and
  * overlaps no other. Touching holes are allowed (a web of zero width is the person's call).
  */
-export function patternProblems(widthMm: number, heightMm: number, holes: readonly Hole[], field: (index: number) => string, max = 20): string[] {
+export function patternProblems(
+  widthMm: number,
+  heightMm: number,
+  holes: readonly Hole[],
+  field: (index: number) => string,
+  max = 20,
+): string[] {
   const problems: string[] = [];
   holes.forEach((h, i) => {
     const where = `hole ${i + 1} at (${fmt(h.xMm)}, ${fmt(h.yMm)})`;
@@ -71,12 +81,22 @@ export function patternProblems(widthMm: number, heightMm: number, holes: readon
       return;
     }
     const r = h.diameterMm / 2;
-    if (h.xMm - r < -SLACK_MM || h.xMm + r > widthMm + SLACK_MM || h.yMm - r < -SLACK_MM || h.yMm + r > heightMm + SLACK_MM) {
-      problems.push(`${field(i)}: ${where}, Ø ${fmt(h.diameterMm)}, must lie wholly inside the ${fmt(widthMm)} × ${fmt(heightMm)} outline`);
+    if (
+      h.xMm - r < -SLACK_MM ||
+      h.xMm + r > widthMm + SLACK_MM ||
+      h.yMm - r < -SLACK_MM ||
+      h.yMm + r > heightMm + SLACK_MM
+    ) {
+      problems.push(
+        `${field(i)}: ${where}, Ø ${fmt(h.diameterMm)}, must lie wholly inside the ${fmt(widthMm)} × ${fmt(heightMm)} outline`,
+      );
     }
   });
   // Sweep along x: only holes whose x ranges meet can overlap.
-  const order = holes.map((_, i) => i).filter((i) => holes[i].diameterMm > 0).sort((a, b) => holes[a].xMm - holes[b].xMm);
+  const order = holes
+    .map((_, i) => i)
+    .filter((i) => holes[i].diameterMm > 0)
+    .sort((a, b) => holes[a].xMm - holes[b].xMm);
   const maxRadius = Math.max(0, ...order.map((i) => holes[i].diameterMm / 2));
   for (let a = 0; a < order.length && problems.length < max; a++) {
     const p = holes[order[a]];
@@ -86,7 +106,9 @@ export function patternProblems(widthMm: number, heightMm: number, holes: readon
       const reach = p.diameterMm / 2 + q.diameterMm / 2;
       if (Math.hypot(q.xMm - p.xMm, q.yMm - p.yMm) < reach - SLACK_MM) {
         const [first, second] = [order[a], order[b]].sort((x, y) => x - y);
-        problems.push(`${field(second)}: hole ${second + 1} overlaps hole ${first + 1} (centres ${fmt(Math.hypot(q.xMm - p.xMm, q.yMm - p.yMm))} apart, radii add up to ${fmt(reach)})`);
+        problems.push(
+          `${field(second)}: hole ${second + 1} overlaps hole ${first + 1} (centres ${fmt(Math.hypot(q.xMm - p.xMm, q.yMm - p.yMm))} apart, radii add up to ${fmt(reach)})`,
+        );
         if (problems.length >= max) break;
       }
     }

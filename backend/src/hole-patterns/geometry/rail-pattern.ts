@@ -7,7 +7,14 @@ import type { Hole } from './pattern-holes.js';
  */
 
 /** Rail width by profile size, mm — from memory (usual profile rail catalogues): check the rail drawing. */
-export const RAIL_WIDTH_BY_PROFILE_MM: Readonly<Record<number, number>> = { 15: 15, 20: 20, 25: 23, 30: 28, 35: 34, 45: 45 };
+export const RAIL_WIDTH_BY_PROFILE_MM: Readonly<Record<number, number>> = {
+  15: 15,
+  20: 20,
+  25: 23,
+  30: 28,
+  35: 34,
+  45: 45,
+};
 export const DEFAULT_RAIL_WIDTH_MM = 20;
 
 /**
@@ -38,7 +45,8 @@ export interface RailPattern {
 }
 
 export function railPattern(rail: RailGeometry): RailPattern {
-  const railWidthMm = (rail.profileSizeMm && RAIL_WIDTH_BY_PROFILE_MM[rail.profileSizeMm]) || rail.profileSizeMm || DEFAULT_RAIL_WIDTH_MM;
+  const railWidthMm =
+    (rail.profileSizeMm && RAIL_WIDTH_BY_PROFILE_MM[rail.profileSizeMm]) || rail.profileSizeMm || DEFAULT_RAIL_WIDTH_MM;
   const tap = rail.typicalBoltSize ? TAP_DRILL_MM[rail.typicalBoltSize] : undefined;
   const diameterMm = tap ?? DEFAULT_RAIL_HOLE_MM;
   const last = rail.holePositionsMm[rail.holePositionsMm.length - 1] ?? 0;
@@ -48,6 +56,8 @@ export function railPattern(rail: RailGeometry): RailPattern {
     railWidthMm,
     endDistanceMm: rail.lengthMm - last,
     holes: rail.holePositionsMm.map((x) => ({ xMm: x, yMm: railWidthMm / 2, diameterMm })),
-    holeNote: tap ? `${rail.typicalBoltSize} tapped: drill Ø ${tap} mm (typical bolt for this rail size — check the rail drawing)` : `Ø ${diameterMm} mm marks: check the rail drawing for the bolt size`,
+    holeNote: tap
+      ? `${rail.typicalBoltSize} tapped: drill Ø ${tap} mm (typical bolt for this rail size — check the rail drawing)`
+      : `Ø ${diameterMm} mm marks: check the rail drawing for the bolt size`,
   };
 }

@@ -47,7 +47,18 @@ export function readPdfPages(pdf: Buffer): ReadPage[] {
     const count = pageCount(pdf);
     for (let p = 1; p <= count; p++) {
       const out = path.join(dir, `p${p}.svg`);
-      execFileSync('pdftocairo', ['-svg', '-origpagesizes', '-noshrink', '-nocenter', '-f', String(p), '-l', String(p), file, out]);
+      execFileSync('pdftocairo', [
+        '-svg',
+        '-origpagesizes',
+        '-noshrink',
+        '-nocenter',
+        '-f',
+        String(p),
+        '-l',
+        String(p),
+        file,
+        out,
+      ]);
       pages.push(parseCairoSvg(readFileSync(out, 'utf8')));
     }
     return pages;
@@ -58,7 +69,14 @@ export function readPdfPages(pdf: Buffer): ReadPage[] {
 
 function parseCairoSvg(svg: string): ReadPage {
   const size = /<svg[^>]*width="([\d.]+)pt" height="([\d.]+)pt"/.exec(svg)!;
-  const page: ReadPage = { widthPt: Number(size[1]), heightPt: Number(size[2]), crosshairs: [], outlines: [], frames: [], bars: [] };
+  const page: ReadPage = {
+    widthPt: Number(size[1]),
+    heightPt: Number(size[2]),
+    crosshairs: [],
+    outlines: [],
+    frames: [],
+    bars: [],
+  };
   for (const m of svg.matchAll(/<path style="([^"]*)" d="([^"]*)"(?: transform="([^"]*)")?\/>/g)) {
     const [, style, d, transform] = m;
     if (style.includes('stroke:none') || !style.includes('stroke-width')) continue;
@@ -81,7 +99,8 @@ function parseCairoSvg(svg: string): ReadPage {
       continue;
     }
     const line = LINE.exec(path);
-    if (line && width === 0.6 && line[2] === line[4]) page.bars.push({ x0: Number(line[1]), x1: Number(line[3]), y: Number(line[2]) });
+    if (line && width === 0.6 && line[2] === line[4])
+      page.bars.push({ x0: Number(line[1]), x1: Number(line[3]), y: Number(line[2]) });
   }
   return page;
 }

@@ -58,9 +58,15 @@ function countAlong(lengthMm: number, windowMm: number): number {
   return lengthMm <= windowMm ? 1 : Math.ceil((lengthMm - OVERLAP_MM) / (windowMm - OVERLAP_MM));
 }
 
-function layoutFor(widthMm: number, heightMm: number, paperKey: PaperKey, orientation: 'portrait' | 'landscape'): SheetLayout {
+function layoutFor(
+  widthMm: number,
+  heightMm: number,
+  paperKey: PaperKey,
+  orientation: 'portrait' | 'landscape',
+): SheetLayout {
   const paper = PAPERS[paperKey];
-  const [pageWidthMm, pageHeightMm] = orientation === 'portrait' ? [paper.widthMm, paper.heightMm] : [paper.heightMm, paper.widthMm];
+  const [pageWidthMm, pageHeightMm] =
+    orientation === 'portrait' ? [paper.widthMm, paper.heightMm] : [paper.heightMm, paper.widthMm];
   const winW = pageWidthMm - 2 * PAGE_MARGIN_MM;
   const winH = pageHeightMm - 2 * PAGE_MARGIN_MM - HEADER_MM - FOOTER_MM;
   const extent: Box = { x0: -BORDER_MM, x1: widthMm + BORDER_MM, y0: -BORDER_MM, y1: heightMm + BORDER_MM };

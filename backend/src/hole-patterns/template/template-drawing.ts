@@ -15,8 +15,10 @@ export interface TemplateInput {
   holes: Hole[];
 }
 
-export const INSTRUCTION = 'Print at actual size (100 %, scaling off — not “fit to page”). Measure the 100 mm bar before you punch: it must read exactly 100 mm.';
-export const TILING_NOTE = 'Trim each sheet along its dashed line, lay it over its neighbour so the round marks meet, and tape it down.';
+export const INSTRUCTION =
+  'Print at actual size (100 %, scaling off — not “fit to page”). Measure the 100 mm bar before you punch: it must read exactly 100 mm.';
+export const TILING_NOTE =
+  'Trim each sheet along its dashed line, lay it over its neighbour so the round marks meet, and tape it down.';
 
 export const REFERENCE_LABELS: Record<PatternReference, string> = {
   'bottom-left': 'lower-left corner',
@@ -63,7 +65,11 @@ export function referenceSegments(reference: PatternReference, w: number, h: num
 }
 
 /** Where the word "REFERENCE" goes: just outside the reference edge or corner, mm. */
-export function referenceLabelAt(reference: PatternReference, w: number, h: number): { x: number; y: number; vertical: boolean } {
+export function referenceLabelAt(
+  reference: PatternReference,
+  w: number,
+  h: number,
+): { x: number; y: number; vertical: boolean } {
   const outside = 3;
   if (reference === 'left') return { x: -outside, y: h / 2, vertical: true };
   if (reference === 'right') return { x: w + outside, y: h / 2, vertical: true };

@@ -18,7 +18,14 @@ const bracket: TemplateInput = {
   reference: 'bottom-left',
   unit: 'mm',
   holes: [
-    ...boltCircleHoles({ centreXMm: 60, centreYMm: 45, circleDiameterMm: 66.68, count: 4, startAngleDeg: 45, diameterMm: 5.5 }),
+    ...boltCircleHoles({
+      centreXMm: 60,
+      centreYMm: 45,
+      circleDiameterMm: 66.68,
+      count: 4,
+      startAngleDeg: 45,
+      diameterMm: 5.5,
+    }),
     { xMm: 60, yMm: 45, diameterMm: 38.1 },
     ...gridHoles({ originXMm: 8, originYMm: 8, rows: 2, columns: 2, pitchXMm: 104, pitchYMm: 74, diameterMm: 6.6 }),
   ],
@@ -37,7 +44,9 @@ const longRail: TemplateInput = {
 
 /** Each crosshair read off the page, in pattern mm, measured from the outline drawn on that page. */
 function measuredHoles(page: ReadPage, input: TemplateInput) {
-  const outline = page.outlines.find((o) => Math.abs(o.x1 - o.x0 - input.widthMm * K) < 0.02 && Math.abs(o.y1 - o.y0 - input.heightMm * K) < 0.02);
+  const outline = page.outlines.find(
+    (o) => Math.abs(o.x1 - o.x0 - input.widthMm * K) < 0.02 && Math.abs(o.y1 - o.y0 - input.heightMm * K) < 0.02,
+  );
   if (!outline) throw new Error('no outline of the pattern’s size on the page');
   return page.crosshairs.map((c) => ({ xMm: (c.x - outline.x0) / K, yMm: (outline.y1 - c.y) / K, page: c }));
 }
@@ -55,7 +64,10 @@ describe('template PDF read back through poppler', () => {
     expect(found).toHaveLength(bracket.holes.length);
     let worst = 0;
     for (const hole of bracket.holes) {
-      const error = nearest(found.map((f) => ({ xMm: f.xMm, yMm: f.yMm, diameterMm: 0 })), hole);
+      const error = nearest(
+        found.map((f) => ({ xMm: f.xMm, yMm: f.yMm, diameterMm: 0 })),
+        hole,
+      );
       worst = Math.max(worst, error);
     }
     expect(worst).toBeLessThan(TOLERANCE_MM);
@@ -75,8 +87,13 @@ describe('template PDF read back through poppler', () => {
     // As written by pdfkit (6 decimals): each bar's segment from x to x + length, exact to 1e-6 pt.
     const streams = contentStreams(pdf);
     for (const s of streams) {
-      const bars = [...s.matchAll(/0\.6 w\n([\d.]+) ([\d.]+) m\n([\d.]+) ([\d.]+) l\n/g)].map((m) => ({ len: Number(m[3]) - Number(m[1]) }));
-      expect(bars.map((b) => b.len).sort((a, b) => a - b)).toEqual([expect.closeTo(283.464567, 6), expect.closeTo(288, 6)]);
+      const bars = [...s.matchAll(/0\.6 w\n([\d.]+) ([\d.]+) m\n([\d.]+) ([\d.]+) l\n/g)].map((m) => ({
+        len: Number(m[3]) - Number(m[1]),
+      }));
+      expect(bars.map((b) => b.len).sort((a, b) => a - b)).toEqual([
+        expect.closeTo(283.464567, 6),
+        expect.closeTo(288, 6),
+      ]);
     }
   });
 
@@ -93,7 +110,12 @@ describe('template PDF read back through poppler', () => {
       expect(page.frames).toHaveLength(1);
       const f = page.frames[0];
       // The sheet's window in pattern mm, measured from the outline printed on the same sheet.
-      const win = { x0: (f.x0 - outline.x0) / K, x1: (f.x1 - outline.x0) / K, y0: (outline.y1 - f.y1) / K, y1: (outline.y1 - f.y0) / K };
+      const win = {
+        x0: (f.x0 - outline.x0) / K,
+        x1: (f.x1 - outline.x0) / K,
+        y0: (outline.y1 - f.y1) / K,
+        y1: (outline.y1 - f.y0) / K,
+      };
       windows.push(win);
       for (const m of measuredHoles(page, longRail)) {
         const index = longRail.holes.findIndex((h) => Math.hypot(h.xMm - m.xMm, h.yMm - m.yMm) < 1);
@@ -115,7 +137,20 @@ describe('template PDF read back through poppler', () => {
   });
 
   it('tiles a large plate in rows and columns that together cover it', async () => {
-    const plate: TemplateInput = { ...bracket, widthMm: 400, heightMm: 300, holes: gridHoles({ originXMm: 20, originYMm: 20, rows: 3, columns: 4, pitchXMm: 120, pitchYMm: 130, diameterMm: 8 }) };
+    const plate: TemplateInput = {
+      ...bracket,
+      widthMm: 400,
+      heightMm: 300,
+      holes: gridHoles({
+        originXMm: 20,
+        originYMm: 20,
+        rows: 3,
+        columns: 4,
+        pitchXMm: 120,
+        pitchYMm: 130,
+        diameterMm: 8,
+      }),
+    };
     const layout = layoutSheets(plate.widthMm, plate.heightMm, 'a4');
     expect(layout.rows).toBeGreaterThan(1);
     expect(layout.columns).toBeGreaterThan(1);

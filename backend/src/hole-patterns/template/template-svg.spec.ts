@@ -10,7 +10,17 @@ const input: TemplateInput = {
   heightMm: 110,
   reference: 'top-right',
   unit: 'in',
-  holes: [...boltCircleHoles({ centreXMm: 75, centreYMm: 55, circleDiameterMm: 80, count: 6, startAngleDeg: 0, diameterMm: 6.35 }), { xMm: 10, yMm: 100, diameterMm: 4 }],
+  holes: [
+    ...boltCircleHoles({
+      centreXMm: 75,
+      centreYMm: 55,
+      circleDiameterMm: 80,
+      count: 6,
+      startAngleDeg: 0,
+      diameterMm: 6.35,
+    }),
+    { xMm: 10, yMm: 100, diameterMm: 4 },
+  ],
 };
 
 describe('template SVG', () => {
@@ -23,15 +33,23 @@ describe('template SVG', () => {
   });
 
   it('puts every crosshair within 0.01 mm of its hole, measured from the outline’s lower-left corner', () => {
-    const [, ox, oy, ow, oh] = /<rect class="outline" x="([\d.]+)" y="([\d.]+)" width="([\d.]+)" height="([\d.]+)"/.exec(svg)!.map(Number);
+    const [, ox, oy, ow, oh] = /<rect class="outline" x="([\d.]+)" y="([\d.]+)" width="([\d.]+)" height="([\d.]+)"/
+      .exec(svg)!
+      .map(Number);
     expect([ow, oh]).toEqual([150, 110]);
-    const centres = [...svg.matchAll(/class="crosshair" d="M ([\d.-]+) ([\d.-]+) H ([\d.-]+) M ([\d.-]+) ([\d.-]+) V ([\d.-]+)"/g)].map((m) => ({ xMm: Number(m[4]) - ox, yMm: oy + oh - Number(m[2]) }));
+    const centres = [
+      ...svg.matchAll(/class="crosshair" d="M ([\d.-]+) ([\d.-]+) H ([\d.-]+) M ([\d.-]+) ([\d.-]+) V ([\d.-]+)"/g),
+    ].map((m) => ({ xMm: Number(m[4]) - ox, yMm: oy + oh - Number(m[2]) }));
     expect(centres).toHaveLength(input.holes.length);
-    input.holes.forEach((hole, i) => expect(Math.hypot(hole.xMm - centres[i].xMm, hole.yMm - centres[i].yMm)).toBeLessThan(0.01));
+    input.holes.forEach((hole, i) =>
+      expect(Math.hypot(hole.xMm - centres[i].xMm, hole.yMm - centres[i].yMm)).toBeLessThan(0.01),
+    );
   });
 
   it('has a 100 mm bar and a 4 in (101.6 mm) bar', () => {
-    const bars = [...svg.matchAll(/class="bar" x1="([\d.]+)" y1="[\d.]+" x2="([\d.]+)"/g)].map((m) => Number(m[2]) - Number(m[1]));
+    const bars = [...svg.matchAll(/class="bar" x1="([\d.]+)" y1="[\d.]+" x2="([\d.]+)"/g)].map(
+      (m) => Number(m[2]) - Number(m[1]),
+    );
     expect(bars.map((b) => Number(b.toFixed(6)))).toEqual([100, 101.6]);
   });
 

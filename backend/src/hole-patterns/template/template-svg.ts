@@ -32,20 +32,32 @@ export function renderTemplateSvg(input: TemplateInput): string {
   const X = (x: number) => n(originX + x);
   const Y = (y: number) => n(originY - y);
   const out: string[] = [];
-  out.push(`<svg xmlns="http://www.w3.org/2000/svg" width="${n(width)}mm" height="${n(height)}mm" viewBox="0 0 ${n(width)} ${n(height)}" font-family="Roboto, Arial, sans-serif">`);
+  out.push(
+    `<svg xmlns="http://www.w3.org/2000/svg" width="${n(width)}mm" height="${n(height)}mm" viewBox="0 0 ${n(width)} ${n(height)}" font-family="Roboto, Arial, sans-serif">`,
+  );
   out.push(`<title>Drilling template — ${esc(input.title)}</title>`);
   out.push(`<text x="${MARGIN_MM}" y="${MARGIN_MM + 4}" font-size="4.2" font-weight="700">${esc(input.title)}</text>`);
-  out.push(`<text x="${MARGIN_MM}" y="${MARGIN_MM + 9}" font-size="2.6" fill="#4d5855">${esc([input.machineName, ...input.details].join(' · '))}</text>`);
-  out.push(`<text x="${MARGIN_MM}" y="${MARGIN_MM + 14}" font-size="2.6" font-weight="700" fill="#8a1c14">${esc(INSTRUCTION)}</text>`);
-  out.push(`<rect class="outline" x="${X(0)}" y="${Y(input.heightMm)}" width="${n(input.widthMm)}" height="${n(input.heightMm)}" fill="none" stroke="#4d5855" stroke-width="0.18"/>`);
+  out.push(
+    `<text x="${MARGIN_MM}" y="${MARGIN_MM + 9}" font-size="2.6" fill="#4d5855">${esc([input.machineName, ...input.details].join(' · '))}</text>`,
+  );
+  out.push(
+    `<text x="${MARGIN_MM}" y="${MARGIN_MM + 14}" font-size="2.6" font-weight="700" fill="#8a1c14">${esc(INSTRUCTION)}</text>`,
+  );
+  out.push(
+    `<rect class="outline" x="${X(0)}" y="${Y(input.heightMm)}" width="${n(input.widthMm)}" height="${n(input.heightMm)}" fill="none" stroke="#4d5855" stroke-width="0.18"/>`,
+  );
   for (const s of referenceSegments(input.reference, input.widthMm, input.heightMm)) {
-    out.push(`<line class="reference" x1="${X(s.x1)}" y1="${Y(s.y1)}" x2="${X(s.x2)}" y2="${Y(s.y2)}" stroke="#1d4f4a" stroke-width="0.7"/>`);
+    out.push(
+      `<line class="reference" x1="${X(s.x1)}" y1="${Y(s.y1)}" x2="${X(s.x2)}" y2="${Y(s.y2)}" stroke="#1d4f4a" stroke-width="0.7"/>`,
+    );
   }
   const label = referenceLabelAt(input.reference, input.widthMm, input.heightMm);
   const anchor = label.vertical ? 'middle' : label.x === 0 ? 'start' : label.x >= input.widthMm ? 'end' : 'middle';
   const ly = label.vertical ? Number(Y(label.y)) : Number(Y(label.y)) + (label.y < 0 ? 2.4 : -0.8);
   const rotate = label.vertical ? ` transform="rotate(-90 ${X(label.x)} ${n(ly)})"` : '';
-  out.push(`<text x="${X(label.x)}" y="${n(ly)}" font-size="2.3" font-weight="700" fill="#1d4f4a" text-anchor="${anchor}"${rotate}>REFERENCE: ${REFERENCE_LABELS[input.reference]}</text>`);
+  out.push(
+    `<text x="${X(label.x)}" y="${n(ly)}" font-size="2.3" font-weight="700" fill="#1d4f4a" text-anchor="${anchor}"${rotate}>REFERENCE: ${REFERENCE_LABELS[input.reference]}</text>`,
+  );
   for (const h of input.holes) {
     const cx = originX + h.xMm;
     const cy = originY - h.yMm;

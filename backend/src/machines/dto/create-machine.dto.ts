@@ -1,5 +1,16 @@
 import { Type } from 'class-transformer';
-import { IsIn, IsNumber, IsObject, IsPositive, IsString, IsUUID, Max, MaxLength, MinLength, ValidateNested } from 'class-validator';
+import {
+  IsIn,
+  IsNumber,
+  IsObject,
+  IsPositive,
+  IsString,
+  IsUUID,
+  Max,
+  MaxLength,
+  MinLength,
+  ValidateNested,
+} from 'class-validator';
 import { LengthUnitField } from '../../common/unit-fields.js';
 import type { LengthUnit } from '../../engine/units.js';
 import { MACHINE_KINDS, type MachineKind } from '../../database/schema/machines.js';
@@ -7,12 +18,18 @@ import { Optional } from '../../common/optional.js';
 
 /** In the request's lengthUnit; the 1 mm to 100 m range is checked once converted (MachinesService). */
 export class WorkAreaDto {
-  @IsNumber({ allowNaN: false, allowInfinity: false }, { message: 'workArea.x must be a number in lengthUnit (mm when absent)' })
+  @IsNumber(
+    { allowNaN: false, allowInfinity: false },
+    { message: 'workArea.x must be a number in lengthUnit (mm when absent)' },
+  )
   @IsPositive({ message: 'workArea.x must be greater than zero' })
   @Max(100_000_000, { message: 'workArea.x is too large' })
   x: number;
 
-  @IsNumber({ allowNaN: false, allowInfinity: false }, { message: 'workArea.y must be a number in lengthUnit (mm when absent)' })
+  @IsNumber(
+    { allowNaN: false, allowInfinity: false },
+    { message: 'workArea.y must be a number in lengthUnit (mm when absent)' },
+  )
   @IsPositive({ message: 'workArea.y must be greater than zero' })
   @Max(100_000_000, { message: 'workArea.y is too large' })
   y: number;

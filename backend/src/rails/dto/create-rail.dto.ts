@@ -1,4 +1,16 @@
-import { IsDefined, IsInt, IsNumber, IsString, IsUUID, Matches, Max, MaxLength, Min, MinLength, ValidateIf } from 'class-validator';
+import {
+  IsDefined,
+  IsInt,
+  IsNumber,
+  IsString,
+  IsUUID,
+  Matches,
+  Max,
+  MaxLength,
+  Min,
+  MinLength,
+  ValidateIf,
+} from 'class-validator';
 import type { LengthUnit } from '../../engine/units.js';
 import { LengthUnitField } from '../../common/unit-fields.js';
 import { Optional } from '../../common/optional.js';

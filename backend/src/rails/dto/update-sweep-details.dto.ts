@@ -11,7 +11,9 @@ const Clearable = () => ValidateIf((_: object, v: unknown) => v !== null && v !=
 const DETAILS = ['instrument', 'temperatureC', 'takenBy', 'boltSize', 'torqueNm', 'datum', 'notes'] as const;
 type Details = Pick<CreateSweepDto, (typeof DETAILS)[number]>;
 // Typed so that the clearable fields below may be null.
-const Base: Type<{ [K in keyof Details]?: Details[K] | null }> = PartialType(PickType(CreateSweepDto, DETAILS), { skipNullProperties: false });
+const Base: Type<{ [K in keyof Details]?: Details[K] | null }> = PartialType(PickType(CreateSweepDto, DETAILS), {
+  skipNullProperties: false,
+});
 
 /**
  * A correction of a sweep's details, every field optional: the recording's details as in

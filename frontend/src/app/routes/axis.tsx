@@ -37,7 +37,11 @@ export default function AxisRoute() {
   const a = axis.data;
   return (
     <>
-      <Link component={RouterLink} to={`${paths.machine(machineId)}?tab=drives`} sx={{ display: 'inline-flex', alignItems: 'center', gap: 0.5, mb: 1, minHeight: { xs: 44, md: 'auto' } }}>
+      <Link
+        component={RouterLink}
+        to={`${paths.machine(machineId)}?tab=drives`}
+        sx={{ display: 'inline-flex', alignItems: 'center', gap: 0.5, mb: 1, minHeight: { xs: 44, md: 'auto' } }}
+      >
         <ArrowBack fontSize="small" /> {machine.data?.name ?? 'Machine file'} · Drives
       </Link>
       <PageHeader
@@ -56,7 +60,12 @@ export default function AxisRoute() {
               Download test program
             </Button>
             {mayRecord && (
-              <Button variant="outlined" startIcon={<EditOutlined />} onClick={() => setEditing(true)} disabled={a.locked}>
+              <Button
+                variant="outlined"
+                startIcon={<EditOutlined />}
+                onClick={() => setEditing(true)}
+                disabled={a.locked}
+              >
                 Edit axis
               </Button>
             )}
@@ -64,7 +73,12 @@ export default function AxisRoute() {
         }
       />
       <Stack spacing={3}>
-        {a.locked && <Alert severity="info">An approval was based on this axis's drive record, so the drive can no longer be edited. A correction from a new travel trial can still be applied; the old value stays in the history.</Alert>}
+        {a.locked && (
+          <Alert severity="info">
+            An approval was based on this axis's drive record, so the drive can no longer be edited. A correction from a
+            new travel trial can still be applied; the old value stays in the history.
+          </Alert>
+        )}
         <AxisSummary axis={a} />
         <Box sx={{ display: 'grid', gridTemplateColumns: { xs: '1fr', lg: '2fr 1fr' }, gap: 3, alignItems: 'start' }}>
           <TravelTrialSection axis={a} mayRecord={mayRecord} />
@@ -74,7 +88,12 @@ export default function AxisRoute() {
         </Box>
         <PositioningSection axis={a} mayRecord={mayRecord} />
         <BacklashSection axis={a} mayRecord={mayRecord} />
-        <EvidencePanel subjectType="axis" subjectId={a.id} title="Photos and files of this axis" what={`axis ${a.name}`} />
+        <EvidencePanel
+          subjectType="axis"
+          subjectId={a.id}
+          title="Photos and files of this axis"
+          what={`axis ${a.name}`}
+        />
       </Stack>
       {mayRecord && <AxisFormDialog machineId={machineId} axis={a} open={editing} onClose={() => setEditing(false)} />}
       <TestProgramDialog axis={a} open={program} onClose={() => setProgram(false)} />

@@ -33,7 +33,10 @@ export default function BoltDownRoute() {
         </Link>
         <Typography color="text.primary">Bolt-down guide</Typography>
       </Breadcrumbs>
-      <PageHeader title={`Bolt-down guide · ${r.label}`} subtitle={`${machine.data?.name ?? ''} · ${r.axis} rail, ${r.lengthMm} mm, ${r.holes.length} holes`} />
+      <PageHeader
+        title={`Bolt-down guide · ${r.label}`}
+        subtitle={`${machine.data?.name ?? ''} · ${r.axis} rail, ${r.lengthMm} mm, ${r.holes.length} holes`}
+      />
       <BoltDownScreen rail={r} canRecord={canRecord(me.data?.role)} />
     </>
   );

@@ -4,7 +4,10 @@ import { CalculatorsPanel } from '../../features/calculators/components/calculat
 export default function CalculatorsRoute() {
   return (
     <>
-      <PageHeader title="Calculators" subtitle="Work out a result from readings without saving anything to a machine file" />
+      <PageHeader
+        title="Calculators"
+        subtitle="Work out a result from readings without saving anything to a machine file"
+      />
       <CalculatorsPanel />
     </>
   );

@@ -17,14 +17,30 @@ import { readinessQueryOptions } from '../../features/approvals/api/get-readines
 // grids and forms of the other tabs.
 const loadReadinessBoard = () => import('../../features/approvals/components/readiness-board');
 const ReadinessBoard = lazy(() => loadReadinessBoard().then((m) => ({ default: m.ReadinessBoard })));
-const MachineOverview = lazy(() => import('../../features/machines/components/machine-overview').then((m) => ({ default: m.MachineOverview })));
-const RailsPanel = lazy(() => import('../../features/rails/components/rails-panel').then((m) => ({ default: m.RailsPanel })));
-const DrivesPanel = lazy(() => import('../../features/drives/components/drives-panel').then((m) => ({ default: m.DrivesPanel })));
-const FramePanel = lazy(() => import('../../features/frame/components/frame-panel').then((m) => ({ default: m.FramePanel })));
-const SafetyWalkPanel = lazy(() => import('../../features/safety/components/safety-walk-panel').then((m) => ({ default: m.SafetyWalkPanel })));
-const MachineEvidence = lazy(() => import('../../features/evidence/components/machine-evidence').then((m) => ({ default: m.MachineEvidence })));
-const HolePatternsPanel = lazy(() => import('../../features/hole-patterns/components/hole-patterns-panel').then((m) => ({ default: m.HolePatternsPanel })));
-const MachineHistory = lazy(() => import('../../features/machines/components/machine-history').then((m) => ({ default: m.MachineHistory })));
+const MachineOverview = lazy(() =>
+  import('../../features/machines/components/machine-overview').then((m) => ({ default: m.MachineOverview })),
+);
+const RailsPanel = lazy(() =>
+  import('../../features/rails/components/rails-panel').then((m) => ({ default: m.RailsPanel })),
+);
+const DrivesPanel = lazy(() =>
+  import('../../features/drives/components/drives-panel').then((m) => ({ default: m.DrivesPanel })),
+);
+const FramePanel = lazy(() =>
+  import('../../features/frame/components/frame-panel').then((m) => ({ default: m.FramePanel })),
+);
+const SafetyWalkPanel = lazy(() =>
+  import('../../features/safety/components/safety-walk-panel').then((m) => ({ default: m.SafetyWalkPanel })),
+);
+const MachineEvidence = lazy(() =>
+  import('../../features/evidence/components/machine-evidence').then((m) => ({ default: m.MachineEvidence })),
+);
+const HolePatternsPanel = lazy(() =>
+  import('../../features/hole-patterns/components/hole-patterns-panel').then((m) => ({ default: m.HolePatternsPanel })),
+);
+const MachineHistory = lazy(() =>
+  import('../../features/machines/components/machine-history').then((m) => ({ default: m.MachineHistory })),
+);
 
 interface Section {
   id: string;
@@ -72,12 +88,21 @@ export default function MachineFileRoute() {
           <>
             <MachineStateChip state={m.state} />
             <PrintButton what={`${section.label.toLowerCase()} of ${m.name}`} />
-            <CsvDownloads text="Bed grids CSV" files={[{ label: `Bed grids of ${m.name}`, href: `/api/machines/${m.id}/bed-grids.csv` }]} />
+            <CsvDownloads
+              text="Bed grids CSV"
+              files={[{ label: `Bed grids of ${m.name}`, href: `/api/machines/${m.id}/bed-grids.csv` }]}
+            />
           </>
         }
       />
       <Box sx={{ borderBottom: 1, borderColor: 'divider', mb: 2 }}>
-        <Tabs value={tab} onChange={(_, v) => setParams({ tab: v }, { replace: true })} variant="scrollable" allowScrollButtonsMobile aria-label="Machine file sections">
+        <Tabs
+          value={tab}
+          onChange={(_, v) => setParams({ tab: v }, { replace: true })}
+          variant="scrollable"
+          allowScrollButtonsMobile
+          aria-label="Machine file sections"
+        >
           {SECTIONS.map((s) => (
             <Tab key={s.id} value={s.id} label={s.label} />
           ))}
@@ -86,7 +111,9 @@ export default function MachineFileRoute() {
       <Typography data-print="only" variant="h2" sx={{ mb: 2 }}>
         {section.label}
       </Typography>
-      <Suspense fallback={<LoadingState label={`Opening ${section.label.toLowerCase()}…`} />}>{section.render(m)}</Suspense>
+      <Suspense fallback={<LoadingState label={`Opening ${section.label.toLowerCase()}…`} />}>
+        {section.render(m)}
+      </Suspense>
     </>
   );
 }

@@ -7,7 +7,11 @@ export function NotFoundRoute() {
   return (
     <EmptyState
       title="Page not found"
-      action={<Button component={RouterLink} to={paths.home} variant="contained">Go to machines</Button>}
+      action={
+        <Button component={RouterLink} to={paths.home} variant="contained">
+          Go to machines
+        </Button>
+      }
     >
       There is nothing at this address. It may have moved, or the link may be mistyped.
     </EmptyState>

@@ -50,7 +50,12 @@ export default function RailRoute() {
     <>
       {recorder && <RailActions rail={r} others={rails.data ?? []} afterDelete={railsTab} />}
       {/* Bolt-down guide: its link or button goes here, beside the rail's own actions. */}
-      <Button component={RouterLink} to={paths.boltDown(machineId, railId)} variant="outlined" startIcon={<HardwareOutlined />}>
+      <Button
+        component={RouterLink}
+        to={paths.boltDown(machineId, railId)}
+        variant="outlined"
+        startIcon={<HardwareOutlined />}
+      >
         Bolt-down guide
       </Button>
     </>
@@ -65,7 +70,9 @@ export default function RailRoute() {
             <Link component={RouterLink} to={railsTab}>
               {m.name}
             </Link>{' '}
-            · axis {r.axis} · {r.lengthMm} mm · target {target ? `${target.value} ${target.unit === 'um' ? 'µm' : target.unit}` : '…'} straightness ({m.targetSet.name})
+            · axis {r.axis} · {r.lengthMm} mm · target{' '}
+            {target ? `${target.value} ${target.unit === 'um' ? 'µm' : target.unit}` : '…'} straightness (
+            {m.targetSet.name})
           </>
         }
         actions={
@@ -83,15 +90,28 @@ export default function RailRoute() {
           </Grid>
           {partner && (
             <Grid size={{ xs: 12, md: 5 }}>
-              <PairParallelismSummary railId={r.id} title={`Parallel with ${partner.label}`} partnerLabel={partner.label} />
+              <PairParallelismSummary
+                railId={r.id}
+                title={`Parallel with ${partner.label}`}
+                partnerLabel={partner.label}
+              />
             </Grid>
           )}
         </Grid>
-        {recorder && <Box data-print="hide"><SweepEntry key={r.id} rail={r} target={target} takenBy={me.data?.name ?? ''} onSaved={setSaved} /></Box>}
+        {recorder && (
+          <Box data-print="hide">
+            <SweepEntry key={r.id} rail={r} target={target} takenBy={me.data?.name ?? ''} onSaved={setSaved} />
+          </Box>
+        )}
         {saved && <SweepResult sweep={saved} title="Sweep saved" />}
         {sweeps.isError && <ErrorState error={sweeps.error} onRetry={() => sweeps.refetch()} />}
         {sweeps.data && <SweepHistory sweeps={sweeps.data} canRecord={recorder} />}
-        <EvidencePanel subjectType="rail" subjectId={r.id} title="Photos and files of this rail" what={`rail ${r.label}`} />
+        <EvidencePanel
+          subjectType="rail"
+          subjectId={r.id}
+          title="Photos and files of this rail"
+          what={`rail ${r.label}`}
+        />
       </Stack>
     </>
   );

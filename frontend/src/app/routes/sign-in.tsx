@@ -13,7 +13,15 @@ export function SignInRoute() {
   // (a session kept on the device may have ended): the form stays put, with whatever is typed in it.
   if (me.data && !me.isFetching) return <Navigate to={next} replace />;
   return (
-    <Box sx={{ minHeight: '100vh', display: 'grid', placeItems: 'center', p: 2, background: 'linear-gradient(160deg, #0f2f2c 0%, #1d4f4a 55%, #3f7a73 100%)' }}>
+    <Box
+      sx={{
+        minHeight: '100vh',
+        display: 'grid',
+        placeItems: 'center',
+        p: 2,
+        background: 'linear-gradient(160deg, #0f2f2c 0%, #1d4f4a 55%, #3f7a73 100%)',
+      }}
+    >
       <Box sx={{ width: '100%', maxWidth: 420 }}>
         <Box sx={{ display: 'flex', alignItems: 'center', gap: 1.5, mb: 2, color: '#fff' }}>
           <Box component="img" src="/railwright.svg" alt="" sx={{ width: 40, height: 40 }} />

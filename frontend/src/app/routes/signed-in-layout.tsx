@@ -25,7 +25,8 @@ export function SignedInLayout() {
         <ErrorState error={me.error} onRetry={() => me.refetch()} />
       </Box>
     );
-  if (!me.data) return <Navigate to={`${paths.signIn}?next=${encodeURIComponent(location.pathname + location.search)}`} replace />;
+  if (!me.data)
+    return <Navigate to={`${paths.signIn}?next=${encodeURIComponent(location.pathname + location.search)}`} replace />;
   return (
     <AppFrame user={me.data}>
       <WaitingEntriesBanner meId={me.data.id} />

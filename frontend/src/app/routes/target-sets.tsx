@@ -7,7 +7,10 @@ export default function TargetSetsRoute() {
   const me = useMe();
   return (
     <>
-      <PageHeader title="Target sets" subtitle="The tolerances each machine is judged against, with their units and where they come from" />
+      <PageHeader
+        title="Target sets"
+        subtitle="The tolerances each machine is judged against, with their units and where they come from"
+      />
       <TargetSetsPanel canEdit={canManageTargets(me.data?.role)} />
     </>
   );

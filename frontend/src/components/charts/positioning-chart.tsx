@@ -19,7 +19,13 @@ export interface PositioningChartProps {
 }
 
 /** Mean positional deviation approaching each target up and down, with ±2s bands and the target zone. */
-export function PositioningChart({ targets, target, unitLabel, height = 320, label = 'Positioning chart' }: PositioningChartProps) {
+export function PositioningChart({
+  targets,
+  target,
+  unitLabel,
+  height = 320,
+  label = 'Positioning chart',
+}: PositioningChartProps) {
   const rows = [...targets]
     .sort((a, b) => a.target - b.target)
     .map((t) => ({
@@ -38,15 +44,60 @@ export function PositioningChart({ targets, target, unitLabel, height = 320, lab
       <ResponsiveContainer width="100%" height={height}>
         <ComposedChart data={rows} margin={{ top: 8, right: 16, bottom: 24, left: 8 }}>
           <CartesianGrid stroke={chartColors.grid} />
-          <XAxis type="number" dataKey="target" domain={x.domain} ticks={x.ticks} tickFormatter={tickText} label={{ value: 'Target (mm)', position: 'insideBottom', offset: -12 }} />
-          <YAxis type="number" domain={y.domain} ticks={y.ticks} tickFormatter={tickText} width={72} label={{ value: `Deviation (${unitLabel})`, angle: -90, position: 'insideLeft', offset: 4 }} />
-          <Tooltip formatter={(v) => (Array.isArray(v) ? v.map((n) => tickText(Number(n))).join(' to ') : tickText(Number(v)))} labelFormatter={(l) => `Target ${tickText(Number(l))} mm`} />
+          <XAxis
+            type="number"
+            dataKey="target"
+            domain={x.domain}
+            ticks={x.ticks}
+            tickFormatter={tickText}
+            label={{ value: 'Target (mm)', position: 'insideBottom', offset: -12 }}
+          />
+          <YAxis
+            type="number"
+            domain={y.domain}
+            ticks={y.ticks}
+            tickFormatter={tickText}
+            width={72}
+            label={{ value: `Deviation (${unitLabel})`, angle: -90, position: 'insideLeft', offset: 4 }}
+          />
+          <Tooltip
+            formatter={(v) => (Array.isArray(v) ? v.map((n) => tickText(Number(n))).join(' to ') : tickText(Number(v)))}
+            labelFormatter={(l) => `Target ${tickText(Number(l))} mm`}
+          />
           <Legend verticalAlign="top" itemSorter={null} />
           {band && target && targetBandArea(band, target.label)}
-          <Area dataKey="bandUp" name="Up ±2s" stroke="none" fill={chartColors.up} fillOpacity={0.15} isAnimationActive={false} />
-          <Line dataKey="meanUp" name="Mean up" stroke={chartColors.up} strokeWidth={2} dot={{ r: 3 }} isAnimationActive={false} />
-          <Area dataKey="bandDown" name="Down ±2s" stroke="none" fill={chartColors.down} fillOpacity={0.15} isAnimationActive={false} />
-          <Line dataKey="meanDown" name="Mean down" stroke={chartColors.down} strokeWidth={2} dot={{ r: 3 }} isAnimationActive={false} />
+          <Area
+            dataKey="bandUp"
+            name="Up ±2s"
+            stroke="none"
+            fill={chartColors.up}
+            fillOpacity={0.15}
+            isAnimationActive={false}
+          />
+          <Line
+            dataKey="meanUp"
+            name="Mean up"
+            stroke={chartColors.up}
+            strokeWidth={2}
+            dot={{ r: 3 }}
+            isAnimationActive={false}
+          />
+          <Area
+            dataKey="bandDown"
+            name="Down ±2s"
+            stroke="none"
+            fill={chartColors.down}
+            fillOpacity={0.15}
+            isAnimationActive={false}
+          />
+          <Line
+            dataKey="meanDown"
+            name="Mean down"
+            stroke={chartColors.down}
+            strokeWidth={2}
+            dot={{ r: 3 }}
+            isAnimationActive={false}
+          />
         </ComposedChart>
       </ResponsiveContainer>
     </figure>

@@ -17,7 +17,17 @@ interface Props {
  * A text field that looks like MUI's outlined TextField but is built from its parts, so the first
  * page a visitor opens does not load the select, menu and popover code TextField brings along.
  */
-export function LightTextField({ label, value, onChange, type = 'text', autoComplete, required, autoFocus, error, helperText }: Props) {
+export function LightTextField({
+  label,
+  value,
+  onChange,
+  type = 'text',
+  autoComplete,
+  required,
+  autoFocus,
+  error,
+  helperText,
+}: Props) {
   const id = useId();
   return (
     <FormControl variant="outlined" fullWidth required={required} error={error}>

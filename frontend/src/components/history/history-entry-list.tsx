@@ -14,10 +14,19 @@ const show = (v: unknown): string => {
 function ChangeLines({ entry }: { entry: HistoryEntry }) {
   if (!entry.fieldChanges.length) return null;
   return (
-    <Box component="ul" aria-label="Values changed" sx={{ m: 0, mt: 0.5, pl: 2.5, color: 'text.secondary', typography: 'caption', wordBreak: 'break-word' }}>
+    <Box
+      component="ul"
+      aria-label="Values changed"
+      sx={{ m: 0, mt: 0.5, pl: 2.5, color: 'text.secondary', typography: 'caption', wordBreak: 'break-word' }}
+    >
       {entry.fieldChanges.map((c, i) => (
         <li key={i}>
-          {c.record} · {c.field}: {c.operation === 'created' ? show(c.after) : c.operation === 'deleted' ? `${show(c.before)} (deleted)` : `${show(c.before)} → ${show(c.after)}`}
+          {c.record} · {c.field}:{' '}
+          {c.operation === 'created'
+            ? show(c.after)
+            : c.operation === 'deleted'
+              ? `${show(c.before)} (deleted)`
+              : `${show(c.before)} → ${show(c.after)}`}
         </li>
       ))}
     </Box>
@@ -25,7 +34,13 @@ function ChangeLines({ entry }: { entry: HistoryEntry }) {
 }
 
 /** A page-by-page history: newest first, who, when (with the zone), what, and every value changed. */
-export function HistoryEntryList(props: { entries: HistoryEntry[]; hasMore: boolean; loadingMore: boolean; onLoadMore: () => void; showMachine?: boolean }) {
+export function HistoryEntryList(props: {
+  entries: HistoryEntry[];
+  hasMore: boolean;
+  loadingMore: boolean;
+  onLoadMore: () => void;
+  showMachine?: boolean;
+}) {
   return (
     <Paper>
       <List aria-label="History" sx={{ py: 0 }}>

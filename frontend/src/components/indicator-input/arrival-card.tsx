@@ -4,17 +4,44 @@ import { UNIT_LABELS } from '../../lib/units';
 import type { Arrival } from './use-indicator-input';
 
 /** The reading just arrived, large enough to read from the machine, with where it went. */
-export function ArrivalCard({ last, refused, onUndo }: { last: Arrival | null; refused: string | null; onUndo: () => void }) {
+export function ArrivalCard({
+  last,
+  refused,
+  onUndo,
+}: {
+  last: Arrival | null;
+  refused: string | null;
+  onUndo: () => void;
+}) {
   return (
     <>
       {last && (
         <Box
           role="status"
           aria-label="Last reading"
-          sx={{ display: 'flex', alignItems: 'center', gap: 1.5, flexWrap: 'wrap', p: 1.5, borderRadius: 1, bgcolor: '#eef4f2', border: '1px solid #bcd3cd' }}
+          sx={{
+            display: 'flex',
+            alignItems: 'center',
+            gap: 1.5,
+            flexWrap: 'wrap',
+            p: 1.5,
+            borderRadius: 1,
+            bgcolor: '#eef4f2',
+            border: '1px solid #bcd3cd',
+          }}
         >
           <Box sx={{ flex: '1 1 220px', minWidth: 0 }}>
-            <Typography component="p" sx={{ fontSize: { xs: '1.6rem', sm: '2rem' }, fontWeight: 700, lineHeight: 1.15, fontVariantNumeric: 'tabular-nums', overflowWrap: 'anywhere' }} data-testid="indicator-reading">
+            <Typography
+              component="p"
+              sx={{
+                fontSize: { xs: '1.6rem', sm: '2rem' },
+                fontWeight: 700,
+                lineHeight: 1.15,
+                fontVariantNumeric: 'tabular-nums',
+                overflowWrap: 'anywhere',
+              }}
+              data-testid="indicator-reading"
+            >
               {last.text} {UNIT_LABELS[last.unit]}
               <Box component="span" sx={{ fontWeight: 500, color: 'text.secondary' }}>
                 {' → '}
@@ -28,7 +55,12 @@ export function ArrivalCard({ last, refused, onUndo }: { last: Arrival | null; r
             )}
           </Box>
           {last.undo && (
-            <Button variant="outlined" startIcon={<UndoOutlined />} onClick={onUndo} sx={{ minHeight: 44, minWidth: 96 }}>
+            <Button
+              variant="outlined"
+              startIcon={<UndoOutlined />}
+              onClick={onUndo}
+              sx={{ minHeight: 44, minWidth: 96 }}
+            >
               Undo
             </Button>
           )}

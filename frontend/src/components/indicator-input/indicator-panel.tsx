@@ -9,7 +9,13 @@ import type { IndicatorInput } from './use-indicator-input';
  * Above a grid: "From an indicator" (listen for a USB indicator's readings anywhere on the page),
  * the serial cable settings, and the reading just arrived with its Undo.
  */
-export const IndicatorPanel = memo(function IndicatorPanel({ indicator, nextLabel = 'the next empty cell' }: { indicator: IndicatorInput; nextLabel?: string }) {
+export const IndicatorPanel = memo(function IndicatorPanel({
+  indicator,
+  nextLabel = 'the next empty cell',
+}: {
+  indicator: IndicatorInput;
+  nextLabel?: string;
+}) {
   const serial = useSerialState();
   const [serialOpen, setSerialOpen] = useState(serial.status === 'connected');
   return (

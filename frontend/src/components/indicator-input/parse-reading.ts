@@ -13,10 +13,20 @@ export const LINE_FORMATS: Record<LineFormat, string> = {
 };
 
 /** `text` is the number as sent, with a point for a comma and no plus sign ("+0,0120" → "0.0120"): the trailing zeros tell the resolution. */
-export type ParsedReading = { ok: true; value: number; text: string; unit: LengthUnit | null } | { ok: false; message: string };
+export type ParsedReading =
+  { ok: true; value: number; text: string; unit: LengthUnit | null } | { ok: false; message: string };
 
 // Unit words as indicators print them; µ (micro sign) and μ (Greek mu) both occur.
-const UNIT_WORDS: Record<string, LengthUnit> = { mm: 'mm', in: 'in', inch: 'in', '"': 'in', um: 'um', 'µm': 'um', 'μm': 'um', thou: 'thou' };
+const UNIT_WORDS: Record<string, LengthUnit> = {
+  mm: 'mm',
+  in: 'in',
+  inch: 'in',
+  '"': 'in',
+  um: 'um',
+  µm: 'um',
+  μm: 'um',
+  thou: 'thou',
+};
 const NUMBER = String.raw`([+\-−]?)\s*(\d+(?:[.,]\d*)?|[.,]\d+)`;
 const UNIT = String.raw`\s*(mm|inch|in|"|um|µm|μm|thou)?`;
 const WHOLE = new RegExp(`^${NUMBER}${UNIT}$`, 'i');
@@ -30,16 +40,27 @@ export function parseReadingLine(line: string, format: LineFormat = 'number'): P
   const m = (format === 'number' ? WHOLE : LAST).exec(text);
   // "1,234.5" would read as 234.5 in the last-number format: a thousands separator is refused instead.
   if (!m || (format === 'last-number' && /\d[.,]$/.test(text.slice(0, m.index)))) {
-    return { ok: false, message: `“${text.length > 40 ? `${text.slice(0, 40)}…` : text}” is not a reading: ${EXPECTED}` };
+    return {
+      ok: false,
+      message: `“${text.length > 40 ? `${text.slice(0, 40)}…` : text}” is not a reading: ${EXPECTED}`,
+    };
   }
   const magnitude = Number(m[2].replace(',', '.'));
   const value = m[1] === '-' || m[1] === '−' ? -magnitude : magnitude;
   const digits = m[2].replace(',', '.').replace(/^\./, '0.');
-  return { ok: true, value: Object.is(value, -0) ? 0 : value, text: value < 0 ? `-${digits}` : digits, unit: m[3] ? UNIT_WORDS[m[3].toLowerCase()] ?? null : null };
+  return {
+    ok: true,
+    value: Object.is(value, -0) ? 0 : value,
+    text: value < 0 ? `-${digits}` : digits,
+    unit: m[3] ? (UNIT_WORDS[m[3].toLowerCase()] ?? null) : null,
+  };
 }
 
 /** The reading as cell text in the grid's unit: as sent, or converted when sent in another unit. */
-export function readingInUnit(reading: { value: number; text: string; unit: LengthUnit | null }, to: LengthUnit): string {
+export function readingInUnit(
+  reading: { value: number; text: string; unit: LengthUnit | null },
+  to: LengthUnit,
+): string {
   if (!reading.unit || reading.unit === to) return reading.text;
   const v = fromMm(toMm(reading.value, reading.unit), to);
   // Ten significant figures drop the binary noise of the conversion and keep every real digit.

@@ -50,7 +50,11 @@ class SerialIndicator {
     } catch (err) {
       // Closing the port picker without choosing is not an error worth a red message.
       const cancelled = err instanceof DOMException && err.name === 'NotFoundError';
-      this.set(cancelled ? { status: 'idle', message: null } : { status: 'error', message: `Could not open the port: ${(err as Error).message}` });
+      this.set(
+        cancelled
+          ? { status: 'idle', message: null }
+          : { status: 'error', message: `Could not open the port: ${(err as Error).message}` },
+      );
     }
   }
 
@@ -71,7 +75,8 @@ class SerialIndicator {
       }
       if (this.port === port) this.set({ status: 'idle', message: 'The indicator closed the connection.' });
     } catch (err) {
-      if (this.port === port) this.set({ status: 'error', message: `The connection dropped: ${(err as Error).message}` });
+      if (this.port === port)
+        this.set({ status: 'error', message: `The connection dropped: ${(err as Error).message}` });
     } finally {
       if (this.port === port) this.port = null;
     }

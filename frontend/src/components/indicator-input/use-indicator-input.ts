@@ -48,7 +48,11 @@ const FORMAT_KEY = 'railwright.indicator-line-format';
 // Fields a person types text into; a switch or button that has the focus does not count.
 const NOT_TEXT = new Set(['checkbox', 'radio', 'button', 'submit', 'reset', 'range', 'color', 'file']);
 const editable = (el: Element | null) =>
-  !!el && ((el instanceof HTMLInputElement && !NOT_TEXT.has(el.type)) || el instanceof HTMLTextAreaElement || el instanceof HTMLSelectElement || (el as HTMLElement).isContentEditable);
+  !!el &&
+  ((el instanceof HTMLInputElement && !NOT_TEXT.has(el.type)) ||
+    el instanceof HTMLTextAreaElement ||
+    el instanceof HTMLSelectElement ||
+    (el as HTMLElement).isContentEditable);
 
 /**
  * Readings from a digital indicator into a grid, from two sources. Keyboard: a reading closed by
@@ -57,9 +61,19 @@ const editable = (el: Element | null) =>
  * burst is taken, and its Enter held back); with capture on, a fast burst anywhere outside a text
  * field fills the next empty cell. Serial: each line from the connected port fills the next empty cell.
  */
-export function useIndicatorInput({ unit, place, enterMovesOn = true }: { unit: LengthUnit; place: PlaceReading; enterMovesOn?: boolean }): IndicatorInput {
+export function useIndicatorInput({
+  unit,
+  place,
+  enterMovesOn = true,
+}: {
+  unit: LengthUnit;
+  place: PlaceReading;
+  enterMovesOn?: boolean;
+}): IndicatorInput {
   const [capture, setCaptureState] = useState(() => sessionStorage.getItem(CAPTURE_KEY) === 'on');
-  const [lineFormat, setLineFormatState] = useState<LineFormat>(() => (localStorage.getItem(FORMAT_KEY) as LineFormat | null) ?? 'number');
+  const [lineFormat, setLineFormatState] = useState<LineFormat>(
+    () => (localStorage.getItem(FORMAT_KEY) as LineFormat | null) ?? 'number',
+  );
   const [last, setLast] = useState<Arrival | null>(null);
   const [refused, setRefused] = useState<string | null>(null);
   const container = useRef<HTMLElement | null>(null);
@@ -93,7 +107,15 @@ export function useIndicatorInput({ unit, place, enterMovesOn = true }: { unit: 
     const text = readingInUnit(parsed, gridUnit);
     const placed = put(text, next.cell);
     setRefused(placed ? null : `Every cell already has a reading: ${text} ${UNIT_LABELS[gridUnit]} was not filled.`);
-    setLast({ text, unit: gridUnit, sent: parsed.unit && parsed.unit !== gridUnit ? next.line.trim() : null, label: placed?.label ?? null, cell: placed?.cell ?? null, inCell: next.cell !== null, undo: placed?.undo ?? null });
+    setLast({
+      text,
+      unit: gridUnit,
+      sent: parsed.unit && parsed.unit !== gridUnit ? next.line.trim() : null,
+      label: placed?.label ?? null,
+      cell: placed?.cell ?? null,
+      inCell: next.cell !== null,
+      undo: placed?.undo ?? null,
+    });
   });
 
   useEffect(() => {
@@ -103,7 +125,12 @@ export function useIndicatorInput({ unit, place, enterMovesOn = true }: { unit: 
       const target = e.target instanceof Element ? e.target : null;
       if (e.key !== 'Enter') {
         // Listening with no field selected: a space in a reading must not scroll the page.
-        if (live.current.capture && e.key.length === 1 && (target === document.body || target === document.documentElement)) e.preventDefault();
+        if (
+          live.current.capture &&
+          e.key.length === 1 &&
+          (target === document.body || target === document.documentElement)
+        )
+          e.preventDefault();
         return;
       }
       const cell = target?.closest<HTMLElement>('[data-indicator-cell]');
@@ -171,5 +198,8 @@ export function useIndicatorInput({ unit, place, enterMovesOn = true }: { unit: 
     }
   }, []);
 
-  return useMemo(() => ({ containerRef, capture, setCapture, lineFormat, setLineFormat, last, refused, undo }), [containerRef, capture, setCapture, lineFormat, setLineFormat, last, refused, undo]);
+  return useMemo(
+    () => ({ containerRef, capture, setCapture, lineFormat, setLineFormat, last, refused, undo }),
+    [containerRef, capture, setCapture, lineFormat, setLineFormat, last, refused, undo],
+  );
 }

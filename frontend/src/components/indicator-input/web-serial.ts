@@ -9,7 +9,10 @@ export interface SerialLike {
   requestPort(): Promise<SerialPortLike>;
 }
 
-export const webSerial = (): SerialLike | null => (typeof navigator !== 'undefined' && 'serial' in navigator ? ((navigator as { serial?: SerialLike }).serial ?? null) : null);
+export const webSerial = (): SerialLike | null =>
+  typeof navigator !== 'undefined' && 'serial' in navigator
+    ? ((navigator as { serial?: SerialLike }).serial ?? null)
+    : null;
 
 export type LineEnding = 'cr' | 'lf' | 'crlf';
 export const LINE_ENDINGS: Record<LineEnding, { label: string; text: string }> = {

@@ -1,7 +1,15 @@
 import type { ReactNode } from 'react';
 import { Box, Typography } from '@mui/material';
 
-export function PageHeader({ title, subtitle, actions }: { title: ReactNode; subtitle?: ReactNode; actions?: ReactNode }) {
+export function PageHeader({
+  title,
+  subtitle,
+  actions,
+}: {
+  title: ReactNode;
+  subtitle?: ReactNode;
+  actions?: ReactNode;
+}) {
   return (
     <Box sx={{ display: 'flex', flexWrap: 'wrap', alignItems: 'flex-end', gap: 2, mb: 3 }}>
       <Box sx={{ flex: '1 1 320px', minWidth: 0 }}>

@@ -21,12 +21,19 @@ export function WaitingEntriesBanner({ meId }: { meId: string | null }) {
   });
   const refused = useMutationState({
     filters: { mutationKey: COMMAND_KEY, status: 'error' },
-    select: (m) => ({ id: m.mutationId, v: m.state.variables as CommandVariables, message: (m.state.error as Error | null)?.message ?? '' }),
+    select: (m) => ({
+      id: m.mutationId,
+      v: m.state.variables as CommandVariables,
+      message: (m.state.error as Error | null)?.message ?? '',
+    }),
   });
   const mine = waiting.filter((v) => v.ownerId === meId);
   const others = waiting.filter((v) => v.ownerId !== meId);
   const dismiss = (id: number) => {
-    const m = client.getMutationCache().getAll().find((x) => x.mutationId === id);
+    const m = client
+      .getMutationCache()
+      .getAll()
+      .find((x) => x.mutationId === id);
     if (m) client.getMutationCache().remove(m);
   };
   if (online && !waiting.length && !refused.length) return null;
@@ -44,8 +51,16 @@ export function WaitingEntriesBanner({ meId }: { meId: string | null }) {
             )
           }
         >
-          <AlertTitle>{online ? `Sending ${entries(mine.length)}…` : mine.length ? `Offline: ${entries(mine.length)} waiting on this device` : 'Offline'}</AlertTitle>
-          {online ? 'They go out in the order they were typed.' : 'Keep recording: entries are kept on this device and sent once, in order, when the connection returns. Do not clear the browser’s data.'}
+          <AlertTitle>
+            {online
+              ? `Sending ${entries(mine.length)}…`
+              : mine.length
+                ? `Offline: ${entries(mine.length)} waiting on this device`
+                : 'Offline'}
+          </AlertTitle>
+          {online
+            ? 'They go out in the order they were typed.'
+            : 'Keep recording: entries are kept on this device and sent once, in order, when the connection returns. Do not clear the browser’s data.'}
           <Collapse in={open}>
             <Box component="ul" sx={{ m: 0, mt: 1, pl: 2.5 }}>
               {mine.map((v) => (
@@ -58,7 +73,10 @@ export function WaitingEntriesBanner({ meId }: { meId: string | null }) {
       {others.length > 0 && (
         <Alert severity="info" sx={{ mt: 1 }}>
           {entries(others.length)} typed on this device by {[...new Set(others.map((v) => v.ownerName))].join(', ')}{' '}
-          {others.length === 1 ? 'waits until its author signs in here again; it is never sent' : 'wait until their authors sign in here again; they are never sent'} under another person’s sign-in.
+          {others.length === 1
+            ? 'waits until its author signs in here again; it is never sent'
+            : 'wait until their authors sign in here again; they are never sent'}{' '}
+          under another person’s sign-in.
         </Alert>
       )}
       {refused.map((r) => (

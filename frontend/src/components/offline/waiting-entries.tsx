@@ -11,7 +11,13 @@ export function WaitingEntries({ path }: { path: string }) {
       <Box component="ul" sx={{ m: 0, p: 0, listStyle: 'none', display: 'grid', gap: 1 }}>
         {waiting.map((v) => (
           <Box component="li" key={v.key} sx={{ display: 'flex', gap: 1, alignItems: 'center', flexWrap: 'wrap' }}>
-            <Chip size="small" icon={<ScheduleOutlined />} label="Waiting to be sent" color="warning" variant="outlined" />
+            <Chip
+              size="small"
+              icon={<ScheduleOutlined />}
+              label="Waiting to be sent"
+              color="warning"
+              variant="outlined"
+            />
             <Typography variant="body2">{v.label}</Typography>
           </Box>
         ))}

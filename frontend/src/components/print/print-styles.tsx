@@ -40,13 +40,16 @@ export function PrintStyles() {
             '[data-print="hide"]',
           ].join(', ')]: { display: 'none !important' },
           '[data-print="only"]': { display: 'block !important' },
-          'main': { padding: '0 !important' },
+          main: { padding: '0 !important' },
           // Charts were sized for the screen: on paper each scales to the page's width (their
           // drawing has a viewBox), the legend with it.
-          '.recharts-responsive-container, .recharts-responsive-container > div, .recharts-wrapper': { width: '100% !important', height: 'auto !important' },
+          '.recharts-responsive-container, .recharts-responsive-container > div, .recharts-wrapper': {
+            width: '100% !important',
+            height: 'auto !important',
+          },
           '.recharts-wrapper > svg.recharts-surface': { width: '100% !important', height: 'auto !important' },
           '.recharts-legend-wrapper': { width: '100% !important', left: '0 !important' },
-          'a': { color: 'inherit !important', textDecoration: 'none !important' },
+          a: { color: 'inherit !important', textDecoration: 'none !important' },
           'figure, table, tr, .MuiAlert-root': { breakInside: 'avoid' },
           '.MuiPaper-root': { breakInside: 'auto' },
         },

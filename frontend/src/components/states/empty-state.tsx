@@ -3,7 +3,16 @@ import { Box, Typography } from '@mui/material';
 
 export function EmptyState({ title, children, action }: { title: string; children?: ReactNode; action?: ReactNode }) {
   return (
-    <Box sx={{ p: 4, textAlign: 'center', border: '1px dashed', borderColor: 'divider', borderRadius: 1, bgcolor: 'background.paper' }}>
+    <Box
+      sx={{
+        p: 4,
+        textAlign: 'center',
+        border: '1px dashed',
+        borderColor: 'divider',
+        borderRadius: 1,
+        bgcolor: 'background.paper',
+      }}
+    >
       <Typography variant="h4" component="p" gutterBottom>
         {title}
       </Typography>

@@ -21,7 +21,15 @@ export class ErrorBoundary extends Component<{ children: ReactNode }, State> {
     if (!this.state.error) return this.props.children;
     return (
       <Box sx={{ p: 3 }}>
-        <Alert severity="error" role="alert" action={<Button color="inherit" onClick={() => window.location.reload()}>Reload</Button>}>
+        <Alert
+          severity="error"
+          role="alert"
+          action={
+            <Button color="inherit" onClick={() => window.location.reload()}>
+              Reload
+            </Button>
+          }
+        >
           <AlertTitle>Something went wrong on this screen</AlertTitle>
           {this.state.error.message}. Nothing you saved before this is lost; reload to carry on.
         </Alert>

@@ -16,7 +16,7 @@ export function copyHeaderLabels(root: HTMLElement) {
       for (const row of body.rows) {
         let col = 0;
         for (const cell of row.cells) {
-          const label = cell.colSpan > 1 ? '' : labels[col] ?? '';
+          const label = cell.colSpan > 1 ? '' : (labels[col] ?? '');
           if (label) {
             if (cell.getAttribute('data-label') !== label) cell.setAttribute('data-label', label);
           } else if (cell.hasAttribute('data-label')) cell.removeAttribute('data-label');

@@ -28,7 +28,12 @@ export function ResponsiveTable({ children, titleFirst = true, component, sx }: 
     return () => observer.disconnect();
   }, []);
   return (
-    <TableContainer ref={ref} component={component ?? 'div'} data-responsive-table="" sx={[stackedOnPhone(titleFirst), ...(Array.isArray(sx) ? sx : [sx])]}>
+    <TableContainer
+      ref={ref}
+      component={component ?? 'div'}
+      data-responsive-table=""
+      sx={[stackedOnPhone(titleFirst), ...(Array.isArray(sx) ? sx : [sx])]}
+    >
       {children}
     </TableContainer>
   );
@@ -37,14 +42,27 @@ export function ResponsiveTable({ children, titleFirst = true, component, sx }: 
 const stackedOnPhone = (titleFirst: boolean) => (theme: Theme) => ({
   // A link in a cell (a rail's or an axis's name) is a finger's target on phones and tablets.
   [theme.breakpoints.down('md')]: {
-    '& tbody td a:not(.MuiButtonBase-root)': { display: 'inline-flex', alignItems: 'center', minHeight: 44, minWidth: 44 },
+    '& tbody td a:not(.MuiButtonBase-root)': {
+      display: 'inline-flex',
+      alignItems: 'center',
+      minHeight: 44,
+      minWidth: 44,
+    },
   },
   [theme.breakpoints.down('sm')]: {
     overflowX: 'visible',
     '& table, & tbody, & tr, & td': { display: 'block', width: '100%', boxSizing: 'border-box' },
     '& table': { minWidth: 0 },
     // The header is read from each cell's label; keep it for screen readers only.
-    '& thead': { display: 'block', position: 'absolute', width: '1px', height: '1px', overflow: 'hidden', clip: 'rect(0 0 0 0)', whiteSpace: 'nowrap' },
+    '& thead': {
+      display: 'block',
+      position: 'absolute',
+      width: '1px',
+      height: '1px',
+      overflow: 'hidden',
+      clip: 'rect(0 0 0 0)',
+      whiteSpace: 'nowrap',
+    },
     '& tbody tr': {
       border: `1px solid ${theme.palette.divider}`,
       borderRadius: `${theme.shape.borderRadius}px`,

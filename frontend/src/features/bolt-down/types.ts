@@ -7,7 +7,10 @@ export type BoltDownHole = Schemas['BoltDownHoleResponse'];
 export type HoleWriteResult = Schemas['HoleWriteResponse'];
 
 /** The parts of the rail the guide needs before a bolt-down exists. */
-export type RailSummary = Pick<Schemas['RailResponse'], 'id' | 'machineId' | 'label' | 'axis' | 'lengthMm' | 'profileSize' | 'holes' | 'typicalBoltSize'>;
+export type RailSummary = Pick<
+  Schemas['RailResponse'],
+  'id' | 'machineId' | 'label' | 'axis' | 'lengthMm' | 'profileSize' | 'holes' | 'typicalBoltSize'
+>;
 
 export type FinalSweepResult = AnswerOf<'/api/bolt-downs/{id}/final-sweep', 'post'>;
 

@@ -42,7 +42,13 @@ export interface DiagonalCheck extends RecordCommon {
     longDiagonal: 1 | 2;
     diagonalDifferenceMm: number;
     warnings: string[];
-    correction: { moveMm: number; spanMm: number; end: 'x-far' | 'x0' | null; towards: 'y0' | null; instruction: string };
+    correction: {
+      moveMm: number;
+      spanMm: number;
+      end: 'x-far' | 'x0' | null;
+      towards: 'y0' | null;
+      instruction: string;
+    };
   } | null;
   /** Present when the record's stored measurements cannot be read (result is then null). */
   unreadable?: string;
@@ -116,7 +122,15 @@ export interface TestCut extends RecordCommon {
   plateThicknessMm: number | null;
   resolution: number | null;
   nominal: { x: number; y: number; circle: number };
-  measured: { x: number; y: number; diagonal1: number; diagonal2: number; circleX: number; circleY: number; kerf: number };
+  measured: {
+    x: number;
+    y: number;
+    diagonal1: number;
+    diagonal2: number;
+    circleX: number;
+    circleY: number;
+    kerf: number;
+  };
   circleKind: 'hole' | 'disc';
   stepsPerMm: { x: number | null; y: number | null };
   result: {
@@ -125,7 +139,13 @@ export interface TestCut extends RecordCommon {
     x: AxisReading;
     y: AxisReading;
     outOfSquareArcsec: number;
-    squareness: { outOfSquareDeg: number; mmPerMetre: number; longDiagonal: 1 | 2; diagonalDifferenceMm: number; warnings: string[] };
+    squareness: {
+      outOfSquareDeg: number;
+      mmPerMetre: number;
+      longDiagonal: 1 | 2;
+      diagonalDifferenceMm: number;
+      warnings: string[];
+    };
     ovality: number;
     ovalityPointsTo: 'round' | 'scale' | 'x-backlash' | 'y-backlash';
     ovalityExplanation: string;

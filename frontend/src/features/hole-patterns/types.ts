@@ -40,7 +40,11 @@ export const REFERENCE_LABELS: Record<PatternReference, string> = {
   top: 'Upper edge',
 };
 
-export const ENTRY_LABELS: Record<PatternEntry, string> = { list: 'List of holes', grid: 'Grid', circle: 'Bolt circle' };
+export const ENTRY_LABELS: Record<PatternEntry, string> = {
+  list: 'List of holes',
+  grid: 'Grid',
+  circle: 'Bolt circle',
+};
 
 export const holePatternKeys = {
   all: ['hole-patterns'] as const,

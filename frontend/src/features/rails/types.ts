@@ -16,7 +16,10 @@ export type StraightnessResult = Schemas['StoredSweepResult'];
 /** A sweep as the rail's list gives it: the summary, no readings (useSweep has them). The phase is narrowed until the description lists its values. */
 export type SweepListItem = Omit<Schemas['SweepListItem'], 'phase'> & { phase: SweepPhase };
 
-export const FACE_LABELS: Record<SweepFace, string> = { side: 'Side face (sideways straightness)', top: 'Top face (heights)' };
+export const FACE_LABELS: Record<SweepFace, string> = {
+  side: 'Side face (sideways straightness)',
+  top: 'Top face (heights)',
+};
 export type CheckState = SweepStatus | 'not-comparable' | 'not-started';
 
 /**
@@ -25,7 +28,10 @@ export type CheckState = SweepStatus | 'not-comparable' | 'not-started';
  * gives StationDto its fields.
  */
 export type NewSweep = Omit<Schemas['CreateSweepDto'], 'id' | 'stations'> &
-  Required<Pick<Schemas['CreateSweepDto'], 'readingUnit' | 'lengthUnit' | 'face'>> & { id: string; stations: { position: number; reading: number }[] };
+  Required<Pick<Schemas['CreateSweepDto'], 'readingUnit' | 'lengthUnit' | 'face'>> & {
+    id: string;
+    stations: { position: number; reading: number }[];
+  };
 
 export interface Parallelism {
   railId: string;

@@ -7,9 +7,18 @@ export type TargetKey = keyof TargetSet['targets'];
 export type Target = TargetSet['targets'][TargetKey];
 export type TargetUnit = Target['unit'];
 export type StraightnessReference = NonNullable<Target['reference']>;
-export const REFERENCE_WORDS: Record<StraightnessReference, string> = { 'minimum-zone': 'minimum zone (ISO 1101)', 'least-squares': 'least squares line' };
+export const REFERENCE_WORDS: Record<StraightnessReference, string> = {
+  'minimum-zone': 'minimum zone (ISO 1101)',
+  'least-squares': 'least squares line',
+};
 
-export const UNIT_WORDS: Record<TargetUnit, string> = { ...UNIT_LABELS, 'mm/m': 'mm/m', '%': '%', days: 'days', 'um/mm': 'µm per mm of rail spacing' };
+export const UNIT_WORDS: Record<TargetUnit, string> = {
+  ...UNIT_LABELS,
+  'mm/m': 'mm/m',
+  '%': '%',
+  days: 'days',
+  'um/mm': 'µm per mm of rail spacing',
+};
 
 /** Which units a target may be given in: lengths in any length unit, others as they are. */
 export const unitChoices = (unit: TargetUnit): TargetUnit[] => (isLengthUnit(unit) ? LENGTH_UNITS : [unit]);

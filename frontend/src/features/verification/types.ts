@@ -12,6 +12,8 @@ export const verificationKeys = {
 };
 
 /** Plain names for the kinds of record an approval stands on (lib/record-kinds.ts). */
-export const RECORD_KIND_LABELS: Record<string, string> = Object.fromEntries(Object.keys(RECORD_TYPES).map((k) => [k, recordName(k)]));
+export const RECORD_KIND_LABELS: Record<string, string> = Object.fromEntries(
+  Object.keys(RECORD_TYPES).map((k) => [k, recordName(k)]),
+);
 
 export { formatDateTime as dateTime, formatDate as dateOnly } from '../../lib/format-time';

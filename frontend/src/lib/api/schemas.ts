@@ -12,6 +12,7 @@ type JsonOf<R> = R extends { content: { 'application/json': infer T } } ? T : ne
  * A route's JSON answer, for answers the description gives inline rather than by name:
  * `AnswerOf<'/api/calc/drive', 'post'>`.
  */
-export type AnswerOf<P extends keyof paths, M extends 'get' | 'post' | 'put' | 'patch' | 'delete'> = paths[P][M] extends { responses: infer R }
-  ? JsonOf<R[keyof R & (200 | 201 | 202)]>
-  : never;
+export type AnswerOf<
+  P extends keyof paths,
+  M extends 'get' | 'post' | 'put' | 'patch' | 'delete',
+> = paths[P][M] extends { responses: infer R } ? JsonOf<R[keyof R & (200 | 201 | 202)]> : never;

@@ -42,7 +42,9 @@ export async function sendCommand<T>(v: CommandVariables): Promise<T> {
       // Photos and files are the rare entry: their sender is loaded when one is sent, keeping
       // it off the sign-in page's download.
       if (v.form) return await (await import('./send-form')).sendForm<T>(v.path, v.key, v.form, noteNoAnswer);
-      return await sendTo<T>(v.method, v.path, v.body ?? (v.method === 'DELETE' ? undefined : {}), { 'Idempotency-Key': v.key });
+      return await sendTo<T>(v.method, v.path, v.body ?? (v.method === 'DELETE' ? undefined : {}), {
+        'Idempotency-Key': v.key,
+      });
     } catch (err) {
       if (!(err instanceof ApiError) || err.status !== 401) throw err;
       setSessionOwner(null);
@@ -88,5 +90,6 @@ export const isOnline = () => onlineManager.isOnline();
  * resume leaves alone, as they were not paused). Each still waits for its own author.
  */
 export function resumeKeptCommands(client: QueryClient): void {
-  for (const m of client.getMutationCache().findAll({ mutationKey: COMMAND_KEY, status: 'pending' })) void m.continue().catch(() => undefined);
+  for (const m of client.getMutationCache().findAll({ mutationKey: COMMAND_KEY, status: 'pending' }))
+    void m.continue().catch(() => undefined);
 }

@@ -6,7 +6,19 @@ import type { Query } from '@tanstack/react-query';
  * and the machines' own data. Left out: live previews (recomputed as typed), calculators,
  * workshop-wide history, people and the mail outbox (large, or of no use at the machine).
  */
-const KEPT_ROOTS = new Set(['auth', 'machines', 'rails', 'bolt-downs', 'drives', 'frame', 'safety', 'approvals', 'target-sets', 'hole-patterns', 'evidence']);
+const KEPT_ROOTS = new Set([
+  'auth',
+  'machines',
+  'rails',
+  'bolt-downs',
+  'drives',
+  'frame',
+  'safety',
+  'approvals',
+  'target-sets',
+  'hole-patterns',
+  'evidence',
+]);
 
 export function isKeptQuery(query: Query): boolean {
   if (query.state.status !== 'success') return false;

@@ -36,7 +36,16 @@ export const persister: Persister = {
     const { mutations, queries } = client.clientState;
     const me = queries.filter(isMe);
     // Written again only when an entry or who is signed in changed (not on every page read).
-    const mark = JSON.stringify([mutations.map((m) => [m.mutationKey, m.state.status, m.state.isPaused, m.state.submittedAt, m.state.failureCount]), me.map((q) => q.state.dataUpdatedAt)]);
+    const mark = JSON.stringify([
+      mutations.map((m) => [
+        m.mutationKey,
+        m.state.status,
+        m.state.isPaused,
+        m.state.submittedAt,
+        m.state.failureCount,
+      ]),
+      me.map((q) => q.state.dataUpdatedAt),
+    ]);
     writePagesSoon(client);
     if (mark === lastEntries) return;
     lastEntries = mark;
@@ -50,7 +59,10 @@ export const persister: Persister = {
       ...base,
       clientState: {
         mutations: entries?.clientState.mutations ?? [],
-        queries: [...(entries?.clientState.queries ?? []), ...(kept?.buster === base.buster ? kept.clientState.queries : [])],
+        queries: [
+          ...(entries?.clientState.queries ?? []),
+          ...(kept?.buster === base.buster ? kept.clientState.queries : []),
+        ],
       },
     };
   },

@@ -80,7 +80,12 @@ export function sendForm<T>(path: string, key: string, form: CommandForm, onNoAn
     };
     xhr.onerror = () => {
       onNoAnswer();
-      reject(new ApiError(0, 'The upload could not reach the server; it is kept on this device and sent when the connection returns.'));
+      reject(
+        new ApiError(
+          0,
+          'The upload could not reach the server; it is kept on this device and sent when the connection returns.',
+        ),
+      );
     };
     xhr.onabort = () => reject(new ApiError(CANCELLED_STATUS, 'Upload cancelled'));
     xhr.send(body);

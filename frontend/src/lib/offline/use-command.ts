@@ -13,10 +13,18 @@ export type CommandInput = Omit<CommandVariables, 'key' | 'ownerId' | 'ownerName
  */
 export function useCommand<TData = unknown>() {
   const ownerId = sessionOwner() ?? '';
-  const mutation = useMutation<TData, Error, CommandVariables>({ mutationKey: COMMAND_KEY, scope: { id: `entries:${ownerId}` } });
+  const mutation = useMutation<TData, Error, CommandVariables>({
+    mutationKey: COMMAND_KEY,
+    scope: { id: `entries:${ownerId}` },
+  });
   const send = (input: CommandInput, options?: MutateOptions<TData, Error, CommandVariables> & { key?: string }) => {
     const { key, ...callbacks } = options ?? {};
-    const variables: CommandVariables = { ...input, key: key ?? newCommandKey(), ownerId, ownerName: sessionOwnerName() };
+    const variables: CommandVariables = {
+      ...input,
+      key: key ?? newCommandKey(),
+      ownerId,
+      ownerName: sessionOwnerName(),
+    };
     mutation.mutate(variables, callbacks);
     return variables.key;
   };
@@ -55,7 +63,10 @@ export function useRecording<TData = unknown>() {
         queued.current = null;
         setError(err);
         // Shown here, with what was typed still in the form: not again in the banner.
-        const m = client.getMutationCache().findAll({ mutationKey: COMMAND_KEY }).find((x) => (x.state.variables as CommandVariables | undefined)?.key === key);
+        const m = client
+          .getMutationCache()
+          .findAll({ mutationKey: COMMAND_KEY })
+          .find((x) => (x.state.variables as CommandVariables | undefined)?.key === key);
         if (m) client.getMutationCache().remove(m);
       },
     });

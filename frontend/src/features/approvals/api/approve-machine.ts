@@ -6,7 +6,8 @@ import { invalidateMachine } from './invalidate';
 export function useApproveMachine(machineId: string) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (body: Schemas['ApproveDto']) => answer(client.POST('/api/machines/{id}/approvals', { params: { path: { id: machineId } }, body })),
+    mutationFn: (body: Schemas['ApproveDto']) =>
+      answer(client.POST('/api/machines/{id}/approvals', { params: { path: { id: machineId } }, body })),
     onSuccess: () => invalidateMachine(qc, machineId),
   });
 }

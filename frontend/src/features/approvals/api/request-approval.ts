@@ -5,7 +5,8 @@ import { invalidateMachine } from './invalidate';
 export function useRequestApproval(machineId: string) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: () => answer(client.POST('/api/machines/{id}/approval-requests', { params: { path: { id: machineId } } })),
+    mutationFn: () =>
+      answer(client.POST('/api/machines/{id}/approval-requests', { params: { path: { id: machineId } } })),
     // A refusal lists the blocking checks; the board is refreshed either way.
     onSettled: () => invalidateMachine(qc, machineId),
   });

@@ -6,7 +6,12 @@ export function useWaiveCheck(machineId: string) {
   const qc = useQueryClient();
   return useMutation({
     mutationFn: ({ checkKey, reason }: { checkKey: string; reason: string }) =>
-      answer(client.POST('/api/machines/{id}/checks/{checkId}/waiver', { params: { path: { id: machineId, checkId: checkKey } }, body: { reason } })),
+      answer(
+        client.POST('/api/machines/{id}/checks/{checkId}/waiver', {
+          params: { path: { id: machineId, checkId: checkKey } },
+          body: { reason },
+        }),
+      ),
     onSuccess: () => invalidateMachine(qc, machineId),
   });
 }

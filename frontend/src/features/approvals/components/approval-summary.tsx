@@ -11,11 +11,22 @@ import { dateOnly, dateTime } from '../format';
 import { certificateUrl, type Approval } from '../types';
 
 /** The latest approval: who, when, the hash to verify a certificate against, and the download. */
-export function ApprovalSummary({ machineId, approval, current }: { machineId: string; approval: Approval; current: boolean }) {
+export function ApprovalSummary({
+  machineId,
+  approval,
+  current,
+}: {
+  machineId: string;
+  approval: Approval;
+  current: boolean;
+}) {
   const [copied, setCopied] = useState(false);
   const copy = () => navigator.clipboard?.writeText(approval.recordHash).then(() => setCopied(true));
   return (
-    <Paper sx={{ p: 2, borderLeft: `4px solid ${current ? palette.within : palette.notStarted}` }} aria-label="Approval">
+    <Paper
+      sx={{ p: 2, borderLeft: `4px solid ${current ? palette.within : palette.notStarted}` }}
+      aria-label="Approval"
+    >
       <Stack direction={{ xs: 'column', md: 'row' }} spacing={2} sx={{ alignItems: { md: 'center' } }}>
         <VerifiedOutlined sx={{ color: current ? palette.within : palette.notStarted, fontSize: 36 }} />
         <Box sx={{ flexGrow: 1, minWidth: 0 }}>
@@ -24,19 +35,29 @@ export function ApprovalSummary({ machineId, approval, current }: { machineId: s
           </Typography>
           {approval.reopened && (
             <Typography variant="body2" sx={{ color: '#4d2f78' }}>
-              Reopened for changes{approval.reopened.by ? ` by ${approval.reopened.by}` : ''} on {dateTime(approval.reopened.at)}: “{approval.reopened.reason}”
+              Reopened for changes{approval.reopened.by ? ` by ${approval.reopened.by}` : ''} on{' '}
+              {dateTime(approval.reopened.at)}: “{approval.reopened.reason}”
             </Typography>
           )}
           <Typography variant="body2" color="text.secondary">
-            Signed {dateTime(approval.approvedAt)} · {approval.recheckDue ? 're-check fell due on' : 're-check due by'} {dateOnly(approval.recheckDueAt)} (every {approval.recheckIntervalDays} days)
+            Signed {dateTime(approval.approvedAt)} · {approval.recheckDue ? 're-check fell due on' : 're-check due by'}{' '}
+            {dateOnly(approval.recheckDueAt)} (every {approval.recheckIntervalDays} days)
           </Typography>
           <Stack direction="row" spacing={0.5} sx={{ alignItems: 'center', mt: 0.5 }}>
-            <Typography variant="caption" color="text.secondary">Record hash (SHA-256)</Typography>
-            <Typography data-testid="record-hash" variant="caption" sx={{ fontFamily: 'monospace', wordBreak: 'break-all' }}>
+            <Typography variant="caption" color="text.secondary">
+              Record hash (SHA-256)
+            </Typography>
+            <Typography
+              data-testid="record-hash"
+              variant="caption"
+              sx={{ fontFamily: 'monospace', wordBreak: 'break-all' }}
+            >
               {approval.recordHash}
             </Typography>
             <Tooltip title={copied ? 'Copied' : 'Copy the hash'}>
-              <IconButton size="small" onClick={copy} aria-label="Copy the record hash"><ContentCopyOutlined fontSize="inherit" /></IconButton>
+              <IconButton size="small" onClick={copy} aria-label="Copy the record hash">
+                <ContentCopyOutlined fontSize="inherit" />
+              </IconButton>
             </Tooltip>
           </Stack>
           <Typography variant="caption" color="text.secondary" component="p">
@@ -46,11 +67,21 @@ export function ApprovalSummary({ machineId, approval, current }: { machineId: s
           </Typography>
         </Box>
         <Stack direction={{ xs: 'row', md: 'column' }} useFlexGap sx={{ flexShrink: 0, flexWrap: 'wrap', gap: 1 }}>
-          <Button variant="outlined" startIcon={<DownloadOutlined />} href={certificateUrl(machineId, approval.id)} download>
+          <Button
+            variant="outlined"
+            startIcon={<DownloadOutlined />}
+            href={certificateUrl(machineId, approval.id)}
+            download
+          >
             Download certificate
           </Button>
           {approval.verificationToken && (
-            <Button variant="text" startIcon={<FactCheckOutlined />} component={RouterLink} to={paths.verify(approval.verificationToken)}>
+            <Button
+              variant="text"
+              startIcon={<FactCheckOutlined />}
+              component={RouterLink}
+              to={paths.verify(approval.verificationToken)}
+            >
               Check the signature
             </Button>
           )}

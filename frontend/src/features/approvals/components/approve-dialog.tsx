@@ -1,11 +1,35 @@
 import { useState } from 'react';
-import { Alert, Box, Button, Dialog, DialogActions, DialogContent, DialogTitle, List, ListItem, ListItemText, Stack, TextField, Typography } from '@mui/material';
+import {
+  Alert,
+  Box,
+  Button,
+  Dialog,
+  DialogActions,
+  DialogContent,
+  DialogTitle,
+  List,
+  ListItem,
+  ListItemText,
+  Stack,
+  TextField,
+  Typography,
+} from '@mui/material';
 import WarningAmberOutlined from '@mui/icons-material/WarningAmberOutlined';
 import { useApproveMachine } from '../api/approve-machine';
 import { KIND_LABELS, type Readiness } from '../types';
 
 /** The signature: read the statement (edit it if needed), read the cautions, re-enter the password. */
-export function ApproveDialog({ open, onClose, machineName, readiness }: { open: boolean; onClose: () => void; machineName: string; readiness: Readiness }) {
+export function ApproveDialog({
+  open,
+  onClose,
+  machineName,
+  readiness,
+}: {
+  open: boolean;
+  onClose: () => void;
+  machineName: string;
+  readiness: Readiness;
+}) {
   const [statement, setStatement] = useState(readiness.defaultStatement);
   const [password, setPassword] = useState('');
   const approve = useApproveMachine(readiness.machineId);
@@ -22,8 +46,9 @@ export function ApproveDialog({ open, onClose, machineName, readiness }: { open:
       <DialogContent dividers>
         <Stack spacing={2}>
           <Typography>
-            {readiness.counts.total} required checks: {readiness.counts.within} within target, {readiness.counts.waived} waived. The approval keeps these exact results
-            and a hash over them; the records it is based on can no longer be changed.
+            {readiness.counts.total} required checks: {readiness.counts.within} within target, {readiness.counts.waived}{' '}
+            waived. The approval keeps these exact results and a hash over them; the records it is based on can no
+            longer be changed.
           </Typography>
           {waived.length > 0 && (
             <Box>
@@ -31,7 +56,10 @@ export function ApproveDialog({ open, onClose, machineName, readiness }: { open:
               <List dense disablePadding>
                 {waived.map((c) => (
                   <ListItem key={c.key} disableGutters>
-                    <ListItemText primary={`${KIND_LABELS[c.kind]} — ${c.subject}`} secondary={`“${c.waiver?.reason}” (${c.waiver?.by})`} />
+                    <ListItemText
+                      primary={`${KIND_LABELS[c.kind]} — ${c.subject}`}
+                      secondary={`“${c.waiver?.reason}” (${c.waiver?.by})`}
+                    />
                   </ListItem>
                 ))}
               </List>
@@ -44,14 +72,22 @@ export function ApproveDialog({ open, onClose, machineName, readiness }: { open:
             multiline
             minRows={4}
             error={!statementOk}
-            helperText={statementOk ? 'Printed on the certificate as written here.' : 'The statement must be at least 20 characters'}
+            helperText={
+              statementOk
+                ? 'Printed on the certificate as written here.'
+                : 'The statement must be at least 20 characters'
+            }
           />
           <Alert severity="warning" icon={<WarningAmberOutlined />} sx={{ '& ul': { m: 0, pl: 2 } }}>
-            <Typography variant="subtitle2" component="p">Before anyone cuts</Typography>
+            <Typography variant="subtitle2" component="p">
+              Before anyone cuts
+            </Typography>
             <ul>
               {readiness.cautions.map((c) => (
                 <li key={c.title}>
-                  <Typography variant="body2"><strong>{c.title}.</strong> {c.text}</Typography>
+                  <Typography variant="body2">
+                    <strong>{c.title}.</strong> {c.text}
+                  </Typography>
                 </li>
               ))}
             </ul>
@@ -63,13 +99,22 @@ export function ApproveDialog({ open, onClose, machineName, readiness }: { open:
             autoComplete="current-password"
             value={password}
             onChange={(e) => setPassword(e.target.value)}
-            onKeyDown={(e) => e.key === 'Enter' && password && statementOk && approve.mutate({ password, statement: statement.trim() }, { onSuccess: close })}
+            onKeyDown={(e) =>
+              e.key === 'Enter' &&
+              password &&
+              statementOk &&
+              approve.mutate({ password, statement: statement.trim() }, { onSuccess: close })
+            }
           />
         </Stack>
       </DialogContent>
       <DialogActions>
         <Button onClick={close}>Cancel</Button>
-        <Button variant="contained" disabled={!password || !statementOk || approve.isPending} onClick={() => approve.mutate({ password, statement: statement.trim() }, { onSuccess: close })}>
+        <Button
+          variant="contained"
+          disabled={!password || !statementOk || approve.isPending}
+          onClick={() => approve.mutate({ password, statement: statement.trim() }, { onSuccess: close })}
+        >
           Sign and approve
         </Button>
       </DialogActions>

@@ -2,7 +2,15 @@ import { Alert, AlertTitle } from '@mui/material';
 import { KIND_LABELS, STATUS_LABELS, type BlockingCheck } from '../types';
 
 /** Why a request (or an approval) was refused: the checks still in the way. */
-export function BlockingAlert({ message, blocking, onClose }: { message: string; blocking: BlockingCheck[]; onClose: () => void }) {
+export function BlockingAlert({
+  message,
+  blocking,
+  onClose,
+}: {
+  message: string;
+  blocking: BlockingCheck[];
+  onClose: () => void;
+}) {
   return (
     <Alert severity="error" onClose={onClose} role="alert">
       <AlertTitle>Approval cannot be requested yet</AlertTitle>

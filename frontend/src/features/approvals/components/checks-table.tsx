@@ -31,16 +31,32 @@ export function ChecksTable({ checks, onWaive }: Props) {
           {checks.map((c) => (
             <TableRow key={c.key} data-check={c.key}>
               <TableCell sx={{ minWidth: 170 }}>
-                <Typography variant="body2" sx={{ fontWeight: 600 }}>{KIND_LABELS[c.kind]}</Typography>
-                <Typography variant="body2" color="text.secondary">{c.subject}</Typography>
+                <Typography variant="body2" sx={{ fontWeight: 600 }}>
+                  {KIND_LABELS[c.kind]}
+                </Typography>
+                <Typography variant="body2" color="text.secondary">
+                  {c.subject}
+                </Typography>
               </TableCell>
               <TableCell sx={{ minWidth: 150 }}>
-                <Typography variant="body2" sx={{ fontWeight: 600, fontVariantNumeric: 'tabular-nums' }}>{resultText(c.result)}</Typography>
-                {c.result?.summary && <Typography variant="caption" color="text.secondary" component="div">{c.result.summary}</Typography>}
-                {c.recordedAt && <Typography variant="caption" color="text.secondary" component="div">recorded {dateOnly(c.recordedAt)}</Typography>}
+                <Typography variant="body2" sx={{ fontWeight: 600, fontVariantNumeric: 'tabular-nums' }}>
+                  {resultText(c.result)}
+                </Typography>
+                {c.result?.summary && (
+                  <Typography variant="caption" color="text.secondary" component="div">
+                    {c.result.summary}
+                  </Typography>
+                )}
+                {c.recordedAt && (
+                  <Typography variant="caption" color="text.secondary" component="div">
+                    recorded {dateOnly(c.recordedAt)}
+                  </Typography>
+                )}
                 <CheckWarnings warnings={c.warnings} />
               </TableCell>
-              <TableCell sx={{ whiteSpace: 'nowrap', fontVariantNumeric: 'tabular-nums' }}>{targetText(c.kind, c.target)}</TableCell>
+              <TableCell sx={{ whiteSpace: 'nowrap', fontVariantNumeric: 'tabular-nums' }}>
+                {targetText(c.kind, c.target)}
+              </TableCell>
               <TableCell sx={{ minWidth: 150 }}>
                 <CheckStatusChip status={c.status} />
                 {c.waiver && (
@@ -49,14 +65,24 @@ export function ChecksTable({ checks, onWaive }: Props) {
                   </Typography>
                 )}
                 {/* The safety walk is answered, never waived. */}
-                {onWaive && c.kind !== 'safety-walk' && (c.status === 'outside-target' || c.status === 'not-started') && (
-                  <Box sx={{ mt: 0.5 }}>
-                    <Button size="small" onClick={() => onWaive(c)} aria-label={`Waive ${KIND_LABELS[c.kind]} of ${c.subject}`}>Waive…</Button>
-                  </Box>
-                )}
+                {onWaive &&
+                  c.kind !== 'safety-walk' &&
+                  (c.status === 'outside-target' || c.status === 'not-started') && (
+                    <Box sx={{ mt: 0.5 }}>
+                      <Button
+                        size="small"
+                        onClick={() => onWaive(c)}
+                        aria-label={`Waive ${KIND_LABELS[c.kind]} of ${c.subject}`}
+                      >
+                        Waive…
+                      </Button>
+                    </Box>
+                  )}
               </TableCell>
               <TableCell align="right">
-                <Button component={RouterLink} to={checkPath(c.place)} size="small">{c.recordId ? 'Open' : 'Record'}</Button>
+                <Button component={RouterLink} to={checkPath(c.place)} size="small">
+                  {c.recordId ? 'Open' : 'Record'}
+                </Button>
               </TableCell>
             </TableRow>
           ))}

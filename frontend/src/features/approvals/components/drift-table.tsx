@@ -10,23 +10,45 @@ import { KIND_LABELS, type DriftRow, type DriftSide } from '../types';
 import { CheckStatusChip } from './check-status-chip';
 
 function Side({ side }: { side: DriftSide | null }) {
-  if (!side) return <Typography variant="body2" color="text.secondary">not in this round</Typography>;
+  if (!side)
+    return (
+      <Typography variant="body2" color="text.secondary">
+        not in this round
+      </Typography>
+    );
   return (
     <>
-      <Typography variant="body2" sx={{ fontWeight: 600, fontVariantNumeric: 'tabular-nums' }}>{resultText(side.result)}</Typography>
+      <Typography variant="body2" sx={{ fontWeight: 600, fontVariantNumeric: 'tabular-nums' }}>
+        {resultText(side.result)}
+      </Typography>
       <CheckStatusChip status={side.status} />
-      {side.recordedAt && <Typography variant="caption" color="text.secondary" component="div">recorded {dateOnly(side.recordedAt)}</Typography>}
+      {side.recordedAt && (
+        <Typography variant="caption" color="text.secondary" component="div">
+          recorded {dateOnly(side.recordedAt)}
+        </Typography>
+      )}
     </>
   );
 }
 
 function Change({ row }: { row: DriftRow }) {
-  if (!row.rechecked) return <Typography variant="body2" color="text.secondary">not re-checked yet</Typography>;
-  if (row.change === null) return <Typography variant="body2" color="text.secondary">—</Typography>;
+  if (!row.rechecked)
+    return (
+      <Typography variant="body2" color="text.secondary">
+        not re-checked yet
+      </Typography>
+    );
+  if (row.change === null)
+    return (
+      <Typography variant="body2" color="text.secondary">
+        —
+      </Typography>
+    );
   const colour = row.worse ? palette.outside : 'text.primary';
   return (
     <Typography variant="body2" sx={{ color: colour, fontWeight: 600, fontVariantNumeric: 'tabular-nums' }}>
-      {row.change > 0 ? '+' : ''}{num(row.change)} {row.unit ? unitLabel(row.unit) : ''}
+      {row.change > 0 ? '+' : ''}
+      {num(row.change)} {row.unit ? unitLabel(row.unit) : ''}
       {row.worse && ' (now outside target)'}
     </Typography>
   );
@@ -37,11 +59,17 @@ export function DriftTable({ machineId }: { machineId: string }) {
   const drift = useDrift(machineId);
   if (drift.isPending) return <LoadingState label="Comparing with the approved round…" />;
   if (drift.isError) return <ErrorState error={drift.error} onRetry={() => drift.refetch()} />;
-  if (!drift.data.approval) return <EmptyState title="Nothing to compare yet">Once the machine is approved, a re-check round is compared here with the approved one.</EmptyState>;
+  if (!drift.data.approval)
+    return (
+      <EmptyState title="Nothing to compare yet">
+        Once the machine is approved, a re-check round is compared here with the approved one.
+      </EmptyState>
+    );
   return (
     <ResponsiveTable component={Paper}>
       <Typography variant="body2" color="text.secondary" sx={{ px: 2, pt: 1.5 }}>
-        Approved round of {dateTime(drift.data.approval.approvedAt)} by {drift.data.approval.approvedBy}, beside the latest result of each check.
+        Approved round of {dateTime(drift.data.approval.approvedAt)} by {drift.data.approval.approvedBy}, beside the
+        latest result of each check.
       </Typography>
       <Table size="small" aria-label="What drifted">
         <TableHead>
@@ -57,13 +85,23 @@ export function DriftTable({ machineId }: { machineId: string }) {
           {drift.data.rows.map((r) => (
             <TableRow key={r.key}>
               <TableCell>
-                <Typography variant="body2" sx={{ fontWeight: 600 }}>{KIND_LABELS[r.kind]}</Typography>
-                <Typography variant="body2" color="text.secondary">{r.subject}</Typography>
+                <Typography variant="body2" sx={{ fontWeight: 600 }}>
+                  {KIND_LABELS[r.kind]}
+                </Typography>
+                <Typography variant="body2" color="text.secondary">
+                  {r.subject}
+                </Typography>
               </TableCell>
               <TableCell sx={{ whiteSpace: 'nowrap' }}>{targetText(r.kind, r.target)}</TableCell>
-              <TableCell><Side side={r.approved} /></TableCell>
-              <TableCell><Side side={r.latest} /></TableCell>
-              <TableCell><Change row={r} /></TableCell>
+              <TableCell>
+                <Side side={r.approved} />
+              </TableCell>
+              <TableCell>
+                <Side side={r.latest} />
+              </TableCell>
+              <TableCell>
+                <Change row={r} />
+              </TableCell>
             </TableRow>
           ))}
         </TableBody>

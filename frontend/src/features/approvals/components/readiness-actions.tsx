@@ -25,19 +25,22 @@ export function ReadinessActions({ readiness: r, role, requesting, onRequest, on
     <Stack spacing={1.5}>
       {r.state === 'awaiting-approval' && r.request && (
         <Alert severity="info">
-          {r.request.requestedBy} requested approval on {dateTime(r.request.requestedAt)}. {role === 'owner' ? 'Review the checks below, then sign.' : 'An owner reviews and signs.'}
+          {r.request.requestedBy} requested approval on {dateTime(r.request.requestedAt)}.{' '}
+          {role === 'owner' ? 'Review the checks below, then sign.' : 'An owner reviews and signs.'}
         </Alert>
       )}
       {r.state === 'recheck-due' && (
         <Alert severity="warning">
-          The re-check was due by {r.recheckDueAt ? dateOnly(r.recheckDueAt) : 'now'}. {role === 'owner' ? 'Reopen the machine' : 'An owner reopens the machine'} for the re-check
-          round, record the checks again, compare them under “What drifted”, then request approval again.
+          The re-check was due by {r.recheckDueAt ? dateOnly(r.recheckDueAt) : 'now'}.{' '}
+          {role === 'owner' ? 'Reopen the machine' : 'An owner reopens the machine'} for the re-check round, record the
+          checks again, compare them under “What drifted”, then request approval again.
         </Alert>
       )}
       {r.state === 'reopened' && r.approval?.reopened && (
         <Alert severity="info">
-          Reopened for changes{r.approval.reopened.by ? ` by ${r.approval.reopened.by}` : ''} on {dateTime(r.approval.reopened.at)}: “{r.approval.reopened.reason?.replace(/[.\s]+$/, '')}”. Record what changed,
-          then request approval again.
+          Reopened for changes{r.approval.reopened.by ? ` by ${r.approval.reopened.by}` : ''} on{' '}
+          {dateTime(r.approval.reopened.at)}: “{r.approval.reopened.reason?.replace(/[.\s]+$/, '')}”. Record what
+          changed, then request approval again.
         </Alert>
       )}
       {(canRequest || canApprove || canReopen) && (

@@ -38,20 +38,42 @@ export function ReadinessBoard({ machineId, machineName }: { machineId: string; 
   return (
     <Stack spacing={2}>
       <Paper sx={{ p: 2 }}>
-        <Stack direction={{ xs: 'column', sm: 'row' }} spacing={2} sx={{ justifyContent: 'space-between', alignItems: { sm: 'center' } }}>
+        <Stack
+          direction={{ xs: 'column', sm: 'row' }}
+          spacing={2}
+          sx={{ justifyContent: 'space-between', alignItems: { sm: 'center' } }}
+        >
           <Box>
-            <Typography variant="h3" component="h2">Readiness</Typography>
+            <Typography variant="h3" component="h2">
+              Readiness
+            </Typography>
             <Typography color="text.secondary" data-testid="readiness-counts">
-              {r.counts.within} of {r.counts.total} within target · {r.counts.waived} waived · {r.counts.outside} outside · {r.counts.notStarted} not started — judged against {r.targetSet.name}
+              {r.counts.within} of {r.counts.total} within target · {r.counts.waived} waived · {r.counts.outside}{' '}
+              outside · {r.counts.notStarted} not started — judged against {r.targetSet.name}
             </Typography>
           </Box>
-          <ReadinessActions readiness={r} role={role} requesting={request.isPending} onRequest={() => request.mutate()} onApprove={() => setApproving(true)} onReopen={() => setReopening(true)} />
+          <ReadinessActions
+            readiness={r}
+            role={role}
+            requesting={request.isPending}
+            onRequest={() => request.mutate()}
+            onApprove={() => setApproving(true)}
+            onReopen={() => setReopening(true)}
+          />
         </Stack>
       </Paper>
-      {refusal && <BlockingAlert message={refusal.message} blocking={refusedBlocking} onClose={() => request.reset()} />}
+      {refusal && (
+        <BlockingAlert message={refusal.message} blocking={refusedBlocking} onClose={() => request.reset()} />
+      )}
       {r.approval && <ApprovalSummary machineId={machineId} approval={r.approval} current={current} />}
       {r.approval && (
-        <ToggleButtonGroup exclusive size="small" value={view} onChange={(_, v) => v && setView(v)} aria-label="Board view">
+        <ToggleButtonGroup
+          exclusive
+          size="small"
+          value={view}
+          onChange={(_, v) => v && setView(v)}
+          aria-label="Board view"
+        >
           <ToggleButton value="checks">Checks</ToggleButton>
           <ToggleButton value="drift">What drifted</ToggleButton>
         </ToggleButtonGroup>
@@ -59,12 +81,24 @@ export function ReadinessBoard({ machineId, machineName }: { machineId: string; 
       {view === 'drift' && r.approval ? (
         <DriftTable machineId={machineId} />
       ) : r.checks.length ? (
-        <ChecksTable checks={r.checks} onWaive={role === 'owner' && r.state !== 'awaiting-approval' ? setWaiving : undefined} />
+        <ChecksTable
+          checks={r.checks}
+          onWaive={role === 'owner' && r.state !== 'awaiting-approval' ? setWaiving : undefined}
+        />
       ) : (
-        <EmptyState title="No required checks yet">Add the machine’s rails and axes: each brings its checks to this board.</EmptyState>
+        <EmptyState title="No required checks yet">
+          Add the machine’s rails and axes: each brings its checks to this board.
+        </EmptyState>
       )}
       <WaiverDialog machineId={machineId} check={waiving} onClose={() => setWaiving(null)} />
-      {reopening && r.approval && <ReopenDialog machineId={machineId} machineName={machineName} approval={r.approval} onClose={() => setReopening(false)} />}
+      {reopening && r.approval && (
+        <ReopenDialog
+          machineId={machineId}
+          machineName={machineName}
+          approval={r.approval}
+          onClose={() => setReopening(false)}
+        />
+      )}
       {approving && <ApproveDialog open onClose={() => setApproving(false)} machineName={machineName} readiness={r} />}
     </Stack>
   );

@@ -1,5 +1,15 @@
 import { useState } from 'react';
-import { Alert, Button, Dialog, DialogActions, DialogContent, DialogTitle, Stack, TextField, Typography } from '@mui/material';
+import {
+  Alert,
+  Button,
+  Dialog,
+  DialogActions,
+  DialogContent,
+  DialogTitle,
+  Stack,
+  TextField,
+  Typography,
+} from '@mui/material';
 import { useReopenMachine } from '../api/reopen-machine';
 import { dateOnly } from '../format';
 import type { Approval } from '../types';
@@ -7,7 +17,17 @@ import type { Approval } from '../types';
 const MIN_REASON = 10;
 
 /** The owner takes back the approval to change the machine: a written reason, kept in the history and mailed. */
-export function ReopenDialog({ machineId, machineName, approval, onClose }: { machineId: string; machineName: string; approval: Approval; onClose: () => void }) {
+export function ReopenDialog({
+  machineId,
+  machineName,
+  approval,
+  onClose,
+}: {
+  machineId: string;
+  machineName: string;
+  approval: Approval;
+  onClose: () => void;
+}) {
   const [reason, setReason] = useState('');
   const [touched, setTouched] = useState(false);
   const reopen = useReopenMachine(machineId);
@@ -29,12 +49,12 @@ export function ReopenDialog({ machineId, machineName, approval, onClose }: { ma
       <DialogContent>
         <Stack spacing={2} sx={{ pt: 1 }}>
           <Typography>
-            The approval signed by {approval.approvedBy} on {dateOnly(approval.approvedAt)} will no longer stand: the machine is not ready to cut until its changed checks are
-            recorded and it is approved again.
+            The approval signed by {approval.approvedBy} on {dateOnly(approval.approvedAt)} will no longer stand: the
+            machine is not ready to cut until its changed checks are recorded and it is approved again.
           </Typography>
           <Typography variant="body2" color="text.secondary">
-            The reason is kept in the machine’s history and e-mailed to the people who work on it. The signed certificate stays as it was, and its public check will show the
-            approval as reopened.
+            The reason is kept in the machine’s history and e-mailed to the people who work on it. The signed
+            certificate stays as it was, and its public check will show the approval as reopened.
           </Typography>
           {reopen.error && <Alert severity="error">{reopen.error.message}</Alert>}
           <TextField
@@ -48,7 +68,11 @@ export function ReopenDialog({ machineId, machineName, approval, onClose }: { ma
             autoFocus
             disabled={reopen.isPending}
             error={touched && short}
-            helperText={short ? `Say what is to be changed and why, in at least ${MIN_REASON} characters (${length} so far)` : `${length} characters`}
+            helperText={
+              short
+                ? `Say what is to be changed and why, in at least ${MIN_REASON} characters (${length} so far)`
+                : `${length} characters`
+            }
           />
         </Stack>
       </DialogContent>

@@ -12,7 +12,11 @@ export function useLogout() {
   return useMutation({
     networkMode: 'always',
     mutationFn: async () => {
-      if (!onlineManager.isOnline()) throw new ApiError(0, 'You are offline: signing out needs the connection. Entries you typed stay on this device and are sent when it returns.');
+      if (!onlineManager.isOnline())
+        throw new ApiError(
+          0,
+          'You are offline: signing out needs the connection. Entries you typed stay on this device and are sent when it returns.',
+        );
       await client.POST('/api/auth/logout');
     },
     onSuccess: () => signedOut(qc),

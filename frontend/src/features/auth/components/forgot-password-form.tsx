@@ -5,7 +5,13 @@ import { useRequestPasswordLink } from '../api/password-link';
 const looksLikeEmail = (v: string) => /^[^\s@]+@[^\s@]+\.[^\s@]+$/.test(v);
 
 /** Asks for a link to choose a new password; the answer never says whether the address has an account. */
-export function ForgotPasswordForm({ initialEmail, signInLink }: { initialEmail: string; signInLink: React.ReactNode }) {
+export function ForgotPasswordForm({
+  initialEmail,
+  signInLink,
+}: {
+  initialEmail: string;
+  signInLink: React.ReactNode;
+}) {
   const [email, setEmail] = useState(initialEmail);
   const [touched, setTouched] = useState(false);
   const request = useRequestPasswordLink();
@@ -18,9 +24,16 @@ export function ForgotPasswordForm({ initialEmail, signInLink }: { initialEmail:
   if (request.isSuccess) {
     return (
       <Stack spacing={2}>
-        <Typography variant="h2" component="h1">Check your e-mail</Typography>
-        <Alert severity="success" role="status">{request.data.message}</Alert>
-        <Typography color="text.secondary">Your current password keeps working until you use the link. Nothing arrived? Look in the spam folder, or ask an admin of your workshop.</Typography>
+        <Typography variant="h2" component="h1">
+          Check your e-mail
+        </Typography>
+        <Alert severity="success" role="status">
+          {request.data.message}
+        </Alert>
+        <Typography color="text.secondary">
+          Your current password keeps working until you use the link. Nothing arrived? Look in the spam folder, or ask
+          an admin of your workshop.
+        </Typography>
         {signInLink}
       </Stack>
     );
@@ -28,9 +41,17 @@ export function ForgotPasswordForm({ initialEmail, signInLink }: { initialEmail:
   return (
     <Box component="form" onSubmit={submit} noValidate>
       <Stack spacing={2}>
-        <Typography variant="h2" component="h1">Forgot your password?</Typography>
-        <Typography color="text.secondary">Give the e-mail address you sign in with. If it has an account, a link to choose a new password is sent to it.</Typography>
-        {request.error && <Alert severity="error" role="alert">{request.error.message}</Alert>}
+        <Typography variant="h2" component="h1">
+          Forgot your password?
+        </Typography>
+        <Typography color="text.secondary">
+          Give the e-mail address you sign in with. If it has an account, a link to choose a new password is sent to it.
+        </Typography>
+        {request.error && (
+          <Alert severity="error" role="alert">
+            {request.error.message}
+          </Alert>
+        )}
         <TextField
           label="E-mail"
           type="email"

@@ -46,7 +46,11 @@ export function SignInForm({ onSignedIn }: { onSignedIn: () => void }) {
         <Button type="submit" variant="contained" size="large" disabled={login.isPending || !email || !password}>
           {login.isPending ? 'Signing in…' : 'Sign in'}
         </Button>
-        <Link component={RouterLink} to={email ? `${paths.forgotPassword}?email=${encodeURIComponent(email.trim())}` : paths.forgotPassword} sx={{ alignSelf: 'center', py: 1.25 }}>
+        <Link
+          component={RouterLink}
+          to={email ? `${paths.forgotPassword}?email=${encodeURIComponent(email.trim())}` : paths.forgotPassword}
+          sx={{ alignSelf: 'center', py: 1.25 }}
+        >
           Forgot your password?
         </Link>
       </Stack>

@@ -7,10 +7,13 @@ import { boltDownKeys, type BoltDown } from '../types';
 export function useAbandonBoltDown(bd: Pick<BoltDown, 'id' | 'railId'>) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (reason: string) => answer(client.POST('/api/bolt-downs/{id}/abandon', { params: { path: { id: bd.id } }, body: { reason } })),
+    mutationFn: (reason: string) =>
+      answer(client.POST('/api/bolt-downs/{id}/abandon', { params: { path: { id: bd.id } }, body: { reason } })),
     onSuccess: async (fresh) => {
       qc.setQueryData(boltDownKeys.detail(bd.id), fresh);
-      await Promise.all([boltDownKeys.forRail(bd.railId), ...MACHINE_STATE_KEYS].map((queryKey) => qc.invalidateQueries({ queryKey })));
+      await Promise.all(
+        [boltDownKeys.forRail(bd.railId), ...MACHINE_STATE_KEYS].map((queryKey) => qc.invalidateQueries({ queryKey })),
+      );
     },
   });
 }

@@ -6,6 +6,10 @@ import { boltDownKeys } from '../types';
 const REFRESH_MS = 30_000;
 
 export const boltDownQueryOptions = (id: string) =>
-  queryOptions({ queryKey: boltDownKeys.detail(id), queryFn: () => answer(client.GET('/api/bolt-downs/{id}', { params: { path: { id } } })), refetchInterval: REFRESH_MS });
+  queryOptions({
+    queryKey: boltDownKeys.detail(id),
+    queryFn: () => answer(client.GET('/api/bolt-downs/{id}', { params: { path: { id } } })),
+    refetchInterval: REFRESH_MS,
+  });
 
 export const useBoltDown = (id: string | undefined) => useQuery({ ...boltDownQueryOptions(id ?? ''), enabled: !!id });

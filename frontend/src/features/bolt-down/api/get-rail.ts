@@ -3,6 +3,9 @@ import { answer, client } from '../../../lib/api-client';
 import { boltDownKeys, type RailSummary } from '../types';
 
 export const railSummaryQueryOptions = (railId: string) =>
-  queryOptions({ queryKey: boltDownKeys.rail(railId), queryFn: (): Promise<RailSummary> => answer(client.GET('/api/rails/{id}', { params: { path: { id: railId } } })) });
+  queryOptions({
+    queryKey: boltDownKeys.rail(railId),
+    queryFn: (): Promise<RailSummary> => answer(client.GET('/api/rails/{id}', { params: { path: { id: railId } } })),
+  });
 
 export const useRailSummary = (railId: string) => useQuery(railSummaryQueryOptions(railId));

@@ -3,6 +3,10 @@ import { answer, client } from '../../../lib/api-client';
 import { boltDownKeys } from '../types';
 
 export const finalSweepQueryOptions = (sweepId: string) =>
-  queryOptions({ queryKey: [...boltDownKeys.all, 'sweep', sweepId], queryFn: () => answer(client.GET('/api/sweeps/{id}', { params: { path: { id: sweepId } } })) });
+  queryOptions({
+    queryKey: [...boltDownKeys.all, 'sweep', sweepId],
+    queryFn: () => answer(client.GET('/api/sweeps/{id}', { params: { path: { id: sweepId } } })),
+  });
 
-export const useFinalSweep = (sweepId: string | null) => useQuery({ ...finalSweepQueryOptions(sweepId ?? ''), enabled: !!sweepId });
+export const useFinalSweep = (sweepId: string | null) =>
+  useQuery({ ...finalSweepQueryOptions(sweepId ?? ''), enabled: !!sweepId });

@@ -21,7 +21,11 @@ export const holePath = (boltDownId: string, index?: number) => `/bolt-downs/${b
 export type HoleWriteBody = Schemas['RecordHoleDto'];
 
 /** Queries a hole write changes: the bolt-down, the rail's list of them, and the machine's state. */
-export const holeRefreshKeys = (bd: Pick<BoltDown, 'id' | 'railId'>) => [boltDownKeys.detail(bd.id), boltDownKeys.forRail(bd.railId), ...MACHINE_STATE_KEYS];
+export const holeRefreshKeys = (bd: Pick<BoltDown, 'id' | 'railId'>) => [
+  boltDownKeys.detail(bd.id),
+  boltDownKeys.forRail(bd.railId),
+  ...MACHINE_STATE_KEYS,
+];
 
 /**
  * Fixes (or loosens) a hole as an entry of the device's queue (lib/offline): sent at once when
@@ -29,7 +33,10 @@ export const holeRefreshKeys = (bd: Pick<BoltDown, 'id' | 'railId'>) => [boltDow
  * entry's Idempotency-Key, so a resend is the same write. `onRefused` is called when the server
  * refuses it while the guide is open.
  */
-export function useRecordHole(bd: Pick<BoltDown, 'id' | 'railId' | 'readingUnit' | 'lengthUnit'>, onRefused?: (input: RecordHoleInput, message: string) => void) {
+export function useRecordHole(
+  bd: Pick<BoltDown, 'id' | 'railId' | 'readingUnit' | 'lengthUnit'>,
+  onRefused?: (input: RecordHoleInput, message: string) => void,
+) {
   const qc = useQueryClient();
   const command = useCommand<HoleWriteResult>();
   return (input: RecordHoleInput) => {

@@ -7,7 +7,9 @@ import { boltDownKeys, type BoltDown, type FinalSweepResult } from '../types';
 
 /** The described final-sweep request (a rail sweep's); the id is added when it is sent. Stations as in the rails' NewSweep. */
 export type FinalSweepInput = Omit<Schemas['FinalSweepDto'], 'id' | 'stations'> &
-  Required<Pick<Schemas['FinalSweepDto'], 'readingUnit' | 'lengthUnit'>> & { stations: { position: number; reading: number }[] };
+  Required<Pick<Schemas['FinalSweepDto'], 'readingUnit' | 'lengthUnit'>> & {
+    stations: { position: number; reading: number }[];
+  };
 
 export const finalSweepPath = (boltDownId: string) => `/bolt-downs/${boltDownId}/final-sweep`;
 

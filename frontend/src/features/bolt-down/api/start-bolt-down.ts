@@ -8,7 +8,8 @@ export type StartBoltDownInput = Schemas['CreateBoltDownDto'];
 export function useStartBoltDown(railId: string) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (body: StartBoltDownInput) => answer(client.POST('/api/rails/{id}/bolt-downs', { params: { path: { id: railId } }, body })),
+    mutationFn: (body: StartBoltDownInput) =>
+      answer(client.POST('/api/rails/{id}/bolt-downs', { params: { path: { id: railId } }, body })),
     onSuccess: (bd) => {
       qc.setQueryData(boltDownKeys.detail(bd.id), bd);
       return qc.invalidateQueries({ queryKey: boltDownKeys.forRail(railId) });

@@ -1,5 +1,14 @@
 import { useState, type FormEvent } from 'react';
-import { Alert, Button, Dialog, DialogActions, DialogContent, DialogContentText, DialogTitle, TextField } from '@mui/material';
+import {
+  Alert,
+  Button,
+  Dialog,
+  DialogActions,
+  DialogContent,
+  DialogContentText,
+  DialogTitle,
+  TextField,
+} from '@mui/material';
 import { useOnline } from '../../../components/offline/use-online';
 import { useAbandonBoltDown } from '../api/abandon-bolt-down';
 import type { BoltDown } from '../types';
@@ -22,12 +31,18 @@ export function AbandonBoltDownDialog({ bd, open, onClose }: { bd: BoltDown; ope
   }
 
   return (
-    <Dialog open={open} onClose={onClose} fullWidth maxWidth="sm" slotProps={{ paper: { component: 'form', onSubmit: submit, noValidate: true } as object }}>
+    <Dialog
+      open={open}
+      onClose={onClose}
+      fullWidth
+      maxWidth="sm"
+      slotProps={{ paper: { component: 'form', onSubmit: submit, noValidate: true } as object }}
+    >
       <DialogTitle>Abandon this bolt-down?</DialogTitle>
       <DialogContent>
         <DialogContentText sx={{ mb: 2 }}>
-          {bd.fixedCount} of {bd.holeCount} holes are fixed. No more holes can be fixed in it afterwards; what was recorded stays in the history, and a new bolt-down
-          of rail {bd.rail.label} can begin.
+          {bd.fixedCount} of {bd.holeCount} holes are fixed. No more holes can be fixed in it afterwards; what was
+          recorded stays in the history, and a new bolt-down of rail {bd.rail.label} can begin.
         </DialogContentText>
         <TextField
           autoFocus
@@ -39,7 +54,11 @@ export function AbandonBoltDownDialog({ bd, open, onClose }: { bd: BoltDown; ope
           onChange={(e) => setReason(e.target.value)}
           onBlur={() => setTouched(true)}
           error={touched && short}
-          helperText={touched && short ? `Say why, in at least ${MIN_REASON} characters` : 'Kept with the bolt-down, e.g. “rail lifted to clean a burr off the reference face”'}
+          helperText={
+            touched && short
+              ? `Say why, in at least ${MIN_REASON} characters`
+              : 'Kept with the bolt-down, e.g. “rail lifted to clean a burr off the reference face”'
+          }
           slotProps={{ htmlInput: { maxLength: 1000 } }}
         />
         {!online && (

@@ -37,30 +37,41 @@ export function BoltDownGuide({ bd, canRecord, typicalBoltSize }: Props) {
   const hole = selected === null ? null : state.holes[selected];
   const unit = UNIT_LABELS[bd.readingUnit];
   const sweepWaiting = pending.some((w) => w.path === finalSweepPath(bd.id));
-  const fixed = state.holes.filter((h) => h.fixed && h.reading !== null).map((h) => ({ position: h.position, reading: h.reading! }));
+  const fixed = state.holes
+    .filter((h) => h.fixed && h.reading !== null)
+    .map((h) => ({ position: h.position, reading: h.reading! }));
 
   return (
     <Box>
       {bd.abandoned && (
         <Alert severity="warning" sx={{ mb: 2 }} data-testid="abandoned">
           <AlertTitle>Abandoned</AlertTitle>
-          {bd.abandoned.by ?? 'Someone'} abandoned this bolt-down on {formatDateTime(bd.abandoned.at)} with {state.fixedCount} of {bd.holeCount} holes fixed: “{bd.abandoned.reason}”. Its
-          readings stay in the machine&apos;s history; begin a new bolt-down to align the rail.
+          {bd.abandoned.by ?? 'Someone'} abandoned this bolt-down on {formatDateTime(bd.abandoned.at)} with{' '}
+          {state.fixedCount} of {bd.holeCount} holes fixed: “{bd.abandoned.reason}”. Its readings stay in the
+          machine&apos;s history; begin a new bolt-down to align the rail.
         </Alert>
       )}
       <Alert severity="info" icon={false} sx={{ mb: 2 }} role="note" data-testid="mode-explained">
-        <strong>{MODE_LABELS[bd.mode]}.</strong> {MODE_EXPLAINED[bd.mode]} Holes are fixed one end first, then the far end, then the middles of the gaps. Readings in {unit}; on
-        target within ±{plain(bd.band, bd.readingUnit)} of the aim.
+        <strong>{MODE_LABELS[bd.mode]}.</strong> {MODE_EXPLAINED[bd.mode]} Holes are fixed one end first, then the far
+        end, then the middles of the gaps. Readings in {unit}; on target within ±{plain(bd.band, bd.readingUnit)} of the
+        aim.
       </Alert>
 
       <Paper sx={{ p: 2, mb: 2 }}>
         <Typography variant="h3" component="p" data-testid="progress">
           {state.fixedCount} of {bd.holeCount} holes fixed
         </Typography>
-        <LinearProgress variant="determinate" value={(100 * state.fixedCount) / Math.max(bd.holeCount, 1)} sx={{ mt: 1, height: 8, borderRadius: 4 }} aria-label="Holes fixed" />
+        <LinearProgress
+          variant="determinate"
+          value={(100 * state.fixedCount) / Math.max(bd.holeCount, 1)}
+          sx={{ mt: 1, height: 8, borderRadius: 4 }}
+          aria-label="Holes fixed"
+        />
       </Paper>
 
-      <Box sx={{ display: 'grid', gridTemplateColumns: { xs: '1fr', lg: 'minmax(0, 3fr) minmax(0, 2fr)' }, gap: 2, mb: 2 }}>
+      <Box
+        sx={{ display: 'grid', gridTemplateColumns: { xs: '1fr', lg: 'minmax(0, 3fr) minmax(0, 2fr)' }, gap: 2, mb: 2 }}
+      >
         <Box>
           {canRecord && hole && open && (
             <HoleEntryPanel
@@ -83,17 +94,22 @@ export function BoltDownGuide({ bd, canRecord, typicalBoltSize }: Props) {
               <Typography variant="h2" component="h2" sx={{ mb: 0.5 }}>
                 Hole {hole.index + 1} · {positionText(hole.position, bd.lengthUnit)}
               </Typography>
-              <Typography sx={{ fontSize: '1.6rem', fontWeight: 500 }}>Aim {hole.target === null ? 'any reading (sets the datum)' : signed(hole.target, bd.readingUnit)}</Typography>
+              <Typography sx={{ fontSize: '1.6rem', fontWeight: 500 }}>
+                Aim {hole.target === null ? 'any reading (sets the datum)' : signed(hole.target, bd.readingUnit)}
+              </Typography>
               <Alert severity="info" sx={{ mt: 2 }}>
                 You can follow the guide; people who record checks fix the holes.
               </Alert>
             </Paper>
           )}
-          {state.complete && open && canRecord && picked === null && !sweepWaiting && <FinalSweepForm bd={bd} holes={state.holes} typicalBoltSize={typicalBoltSize} />}
+          {state.complete && open && canRecord && picked === null && !sweepWaiting && (
+            <FinalSweepForm bd={bd} holes={state.holes} typicalBoltSize={typicalBoltSize} />
+          )}
           {sweepWaiting && !bd.finalSweepId && (
             <Alert severity="info" sx={{ mb: 2 }} data-testid="final-sweep-waiting">
               <AlertTitle>Final sweep waiting to send</AlertTitle>
-              It is kept on this device and recorded once, after the hole readings before it, when the connection returns.
+              It is kept on this device and recorded once, after the hole readings before it, when the connection
+              returns.
             </Alert>
           )}
           {bd.finalSweepId && <FinalSweepResult sweepId={bd.finalSweepId} />}
@@ -105,7 +121,11 @@ export function BoltDownGuide({ bd, canRecord, typicalBoltSize }: Props) {
           <BoltDownChart
             fixed={fixed}
             holePositions={bd.holes.map((h) => h.position)}
-            aim={open && hole && !hole.fixed && hole.target !== null ? { position: hole.position, reading: hole.target } : null}
+            aim={
+              open && hole && !hole.fixed && hole.target !== null
+                ? { position: hole.position, reading: hole.target }
+                : null
+            }
             lengthMm={bd.rail.lengthMm}
             unitLabel={unit}
           />
@@ -115,7 +135,13 @@ export function BoltDownGuide({ bd, canRecord, typicalBoltSize }: Props) {
       <Typography variant="h4" component="h2" sx={{ mb: 1 }}>
         Holes in fixing order{canRecord && open ? ' (pick one to fix or re-fix it)' : ''}
       </Typography>
-      <HolesTable bd={bd} holes={state.inOrder} nextHole={open ? state.nextHole : null} selected={open ? selected : null} onSelect={canRecord && open ? setPicked : undefined} />
+      <HolesTable
+        bd={bd}
+        holes={state.inOrder}
+        nextHole={open ? state.nextHole : null}
+        selected={open ? selected : null}
+        onSelect={canRecord && open ? setPicked : undefined}
+      />
     </Box>
   );
 }

@@ -28,7 +28,8 @@ export function BoltDownScreen({ rail, canRecord }: Props) {
   if (list.isPending) return <LoadingState label="Loading the bolt-down…" />;
   if (list.isError && !list.data) return <ErrorState error={list.error} onRetry={() => list.refetch()} />;
   if (starting || !id) {
-    if (!canRecord) return <EmptyState title="No bolt-down yet">Nobody has begun fixing this rail down with the guide.</EmptyState>;
+    if (!canRecord)
+      return <EmptyState title="No bolt-down yet">Nobody has begun fixing this rail down with the guide.</EmptyState>;
     return (
       <StartBoltDownForm
         rail={rail}
@@ -51,10 +52,18 @@ export function BoltDownScreen({ rail, canRecord }: Props) {
       {(others.length > 1 || canRecord) && (
         <Box sx={{ display: 'flex', gap: 2, flexWrap: 'wrap', alignItems: 'center', mb: 2 }}>
           {others.length > 1 && (
-            <TextField select label="Bolt-down" value={shown.id} onChange={(e) => setChosen(e.target.value)} sx={{ minWidth: 300 }}>
+            <TextField
+              select
+              label="Bolt-down"
+              value={shown.id}
+              onChange={(e) => setChosen(e.target.value)}
+              sx={{ minWidth: 300 }}
+            >
               {others.map((b, i) => (
                 <MenuItem key={b.id} value={b.id}>
-                  {formatDateTime(b.createdAt)} · {b.fixedCount} of {b.holeCount} fixed{b.abandoned ? ' · abandoned' : ''}{i === 0 ? ' (latest)' : ''}
+                  {formatDateTime(b.createdAt)} · {b.fixedCount} of {b.holeCount} fixed
+                  {b.abandoned ? ' · abandoned' : ''}
+                  {i === 0 ? ' (latest)' : ''}
                 </MenuItem>
               ))}
             </TextField>
@@ -71,7 +80,9 @@ export function BoltDownScreen({ rail, canRecord }: Props) {
           )}
         </Box>
       )}
-      {canRecord && !over && abandoning && <AbandonBoltDownDialog bd={shown} open onClose={() => setAbandoning(false)} />}
+      {canRecord && !over && abandoning && (
+        <AbandonBoltDownDialog bd={shown} open onClose={() => setAbandoning(false)} />
+      )}
       <BoltDownGuide key={shown.id} bd={shown} canRecord={canRecord} typicalBoltSize={rail.typicalBoltSize} />
     </>
   );

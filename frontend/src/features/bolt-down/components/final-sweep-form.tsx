@@ -1,6 +1,20 @@
 import { useRef, useState, type FormEvent, type KeyboardEvent } from 'react';
 import { positionIn, positionText } from '../utils/position-text';
-import { Alert, Box, Button, InputAdornment, MenuItem, Paper, Table, TableBody, TableCell, TableHead, TableRow, TextField, Typography } from '@mui/material';
+import {
+  Alert,
+  Box,
+  Button,
+  InputAdornment,
+  MenuItem,
+  Paper,
+  Table,
+  TableBody,
+  TableCell,
+  TableHead,
+  TableRow,
+  TextField,
+  Typography,
+} from '@mui/material';
 import { useMe } from '../../../lib/session/get-me';
 import { UNIT_LABELS } from '../../../lib/units';
 import { useBoltTorques } from '../api/get-bolt-torques';
@@ -59,7 +73,11 @@ export function FinalSweepForm({ bd, holes, typicalBoltSize }: Props) {
       inputs.current[bad]?.focus();
       return;
     }
-    const numbers = { resolution: optionalNumber(resolution), temperature: optionalNumber(temperature), torque: optionalNumber(torque) };
+    const numbers = {
+      resolution: optionalNumber(resolution),
+      temperature: optionalNumber(temperature),
+      torque: optionalNumber(torque),
+    };
     const badField = Object.entries(numbers).find(([, v]) => v === null);
     if (badField) return setProblem(`The ${badField[0]} must be a number`);
     setProblem(null);
@@ -81,29 +99,54 @@ export function FinalSweepForm({ bd, holes, typicalBoltSize }: Props) {
   }
 
   return (
-    <Paper component="form" onSubmit={onSubmit} noValidate sx={{ p: { xs: 2, md: 3 } }} aria-label="Final sweep at every hole">
+    <Paper
+      component="form"
+      onSubmit={onSubmit}
+      noValidate
+      sx={{ p: { xs: 2, md: 3 } }}
+      aria-label="Final sweep at every hole"
+    >
       <Typography variant="h2" component="h2" gutterBottom>
         Every hole is fixed: take the final sweep
       </Typography>
       <Typography color="text.secondary" sx={{ mb: 2 }}>
-        Run the carriage along the rail once more with every bolt torqued and read the dial at each hole. The stations are filled in with the readings the holes were
-        fixed at; correct any that changed. The sweep is saved as the rail&apos;s sweep and judged against the machine&apos;s straightness target.
+        Run the carriage along the rail once more with every bolt torqued and read the dial at each hole. The stations
+        are filled in with the readings the holes were fixed at; correct any that changed. The sweep is saved as the
+        rail&apos;s sweep and judged against the machine&apos;s straightness target.
       </Typography>
-      <Box sx={{ display: 'grid', gap: 2, mb: 2, gridTemplateColumns: { xs: '1fr', sm: '1fr 1fr', md: '2fr 1fr 1fr' } }}>
-        <TextField label="Instrument" value={instrument} onChange={(e) => setInstrument(e.target.value)} placeholder="Dial indicator on a carriage" />
+      <Box
+        sx={{ display: 'grid', gap: 2, mb: 2, gridTemplateColumns: { xs: '1fr', sm: '1fr 1fr', md: '2fr 1fr 1fr' } }}
+      >
+        <TextField
+          label="Instrument"
+          value={instrument}
+          onChange={(e) => setInstrument(e.target.value)}
+          placeholder="Dial indicator on a carriage"
+        />
         <TextField
           label="Resolution"
           value={resolution}
           onChange={(e) => setResolution(e.target.value)}
-          slotProps={{ htmlInput: { inputMode: 'decimal' }, input: { endAdornment: <InputAdornment position="end">{unit}</InputAdornment> } }}
+          slotProps={{
+            htmlInput: { inputMode: 'decimal' },
+            input: { endAdornment: <InputAdornment position="end">{unit}</InputAdornment> },
+          }}
         />
         <TextField
           label="Temperature"
           value={temperature}
           onChange={(e) => setTemperature(e.target.value)}
-          slotProps={{ htmlInput: { inputMode: 'decimal' }, input: { endAdornment: <InputAdornment position="end">°C</InputAdornment> } }}
+          slotProps={{
+            htmlInput: { inputMode: 'decimal' },
+            input: { endAdornment: <InputAdornment position="end">°C</InputAdornment> },
+          }}
         />
-        <TextField select label="Phase" value={phase} onChange={(e) => setPhase(e.target.value as FinalSweepInput['phase'])}>
+        <TextField
+          select
+          label="Phase"
+          value={phase}
+          onChange={(e) => setPhase(e.target.value as FinalSweepInput['phase'])}
+        >
           <MenuItem value="as-left">As left (final)</MenuItem>
           <MenuItem value="as-found">As found</MenuItem>
         </TextField>
@@ -114,7 +157,13 @@ export function FinalSweepForm({ bd, holes, typicalBoltSize }: Props) {
           helperText="Name the common datum, the same as on the partner rail, to compare the two"
           sx={{ gridColumn: { sm: '1 / -1', md: 'auto' } }}
         />
-        <TextField label="Taken by" value={takenBy} onChange={(e) => setTakenBy(e.target.value)} placeholder={me.data?.name} helperText={takenBy.trim() ? ' ' : 'You, when left empty'} />
+        <TextField
+          label="Taken by"
+          value={takenBy}
+          onChange={(e) => setTakenBy(e.target.value)}
+          placeholder={me.data?.name}
+          helperText={takenBy.trim() ? ' ' : 'You, when left empty'}
+        />
         <TextField select label="Bolt size" value={boltSize} onChange={(e) => setBoltSize(e.target.value)}>
           <MenuItem value="">Not recorded</MenuItem>
           {(torques.data?.bolts ?? []).map((b) => (
@@ -142,10 +191,23 @@ export function FinalSweepForm({ bd, holes, typicalBoltSize }: Props) {
               ),
             },
           }}
-          helperText={usual !== undefined ? (torque.trim() ? ' ' : `Usual for ${boltSize}: ${usual} N·m — not recorded unless typed or used`) : 'Type the torque used, if measured'}
+          helperText={
+            usual !== undefined
+              ? torque.trim()
+                ? ' '
+                : `Usual for ${boltSize}: ${usual} N·m — not recorded unless typed or used`
+              : 'Type the torque used, if measured'
+          }
           sx={{ gridColumn: { sm: '1 / -1', md: 'span 2' } }}
         />
-        <TextField label="Notes" value={notes} onChange={(e) => setNotes(e.target.value)} multiline minRows={1} sx={{ gridColumn: '1 / -1' }} />
+        <TextField
+          label="Notes"
+          value={notes}
+          onChange={(e) => setNotes(e.target.value)}
+          multiline
+          minRows={1}
+          sx={{ gridColumn: '1 / -1' }}
+        />
       </Box>
       {torques.data && (
         <Typography variant="body2" color="text.secondary" sx={{ mb: 2 }}>
@@ -175,7 +237,13 @@ export function FinalSweepForm({ bd, holes, typicalBoltSize }: Props) {
                     onChange={(e) => setReadings((r) => r.map((v, k) => (k === i ? e.target.value : v)))}
                     onKeyDown={onKey(i)}
                     error={parseReading(readings[i]) === null}
-                    slotProps={{ htmlInput: { inputMode: 'decimal', enterKeyHint: 'next', 'aria-label': `Final reading at ${positionText(h.position, bd.lengthUnit)}` } }}
+                    slotProps={{
+                      htmlInput: {
+                        inputMode: 'decimal',
+                        enterKeyHint: 'next',
+                        'aria-label': `Final reading at ${positionText(h.position, bd.lengthUnit)}`,
+                      },
+                    }}
                     sx={{ width: 140 }}
                   />
                 </TableCell>

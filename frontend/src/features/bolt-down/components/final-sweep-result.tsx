@@ -12,7 +12,8 @@ export function FinalSweepResult({ sweepId }: { sweepId: string }) {
   if (sweep.isError) return <ErrorState error={sweep.error} onRetry={() => sweep.refetch()} />;
   const s = sweep.data;
   // A stored sweep that can no longer be read comes without readings or result, saying why.
-  if (!s.result || !s.stations) return <Alert severity="error">{s.unreadable ?? 'The final sweep could not be read.'}</Alert>;
+  if (!s.result || !s.stations)
+    return <Alert severity="error">{s.unreadable ?? 'The final sweep could not be read.'}</Alert>;
   const u = s.readingUnit;
   const within = s.status === 'within-target';
   const k = fromMm(1, u);
@@ -24,7 +25,11 @@ export function FinalSweepResult({ sweepId }: { sweepId: string }) {
         <Typography variant="h2" component="h2">
           Final sweep saved
         </Typography>
-        <Chip color={within ? 'success' : 'error'} label={within ? 'Within target' : 'Outside target'} data-testid="final-sweep-status" />
+        <Chip
+          color={within ? 'success' : 'error'}
+          label={within ? 'Within target' : 'Outside target'}
+          data-testid="final-sweep-status"
+        />
       </Stack>
       <Box sx={{ display: 'flex', gap: 4, flexWrap: 'wrap', mb: 2 }}>
         <Box>
@@ -46,13 +51,22 @@ export function FinalSweepResult({ sweepId }: { sweepId: string }) {
         points={s.stations.map((st) => ({ position: st.position, reading: st.reading }))}
         leastSquares={{ slope: ls.slope * k, intercept: ls.intercept * k }}
         zone={{ slope: mz.slope * k, intercept: mz.intercept * k, width: mz.straightness * k }}
-        target={isLengthUnit(s.target.unit) ? { width: fromMm(toMm(s.target.value, s.target.unit), u), reference: s.target.reference === 'least-squares' ? 'least-squares' : 'minimum-zone', label: `Target zone ${s.target.value} ${UNIT_LABELS[s.target.unit]} wide` } : null}
+        target={
+          isLengthUnit(s.target.unit)
+            ? {
+                width: fromMm(toMm(s.target.value, s.target.unit), u),
+                reference: s.target.reference === 'least-squares' ? 'least-squares' : 'minimum-zone',
+                label: `Target zone ${s.target.value} ${UNIT_LABELS[s.target.unit]} wide`,
+              }
+            : null
+        }
         unitLabel={UNIT_LABELS[u]}
         label="Straightness of the final sweep"
       />
       {!within && (
         <Alert severity="warning" sx={{ mt: 2 }}>
-          The rail is outside its straightness target. Loosen the holes that stand out, re-align them with a new bolt-down, and sweep again.
+          The rail is outside its straightness target. Loosen the holes that stand out, re-align them with a new
+          bolt-down, and sweep again.
         </Alert>
       )}
     </Paper>

@@ -51,7 +51,11 @@ export function HoleEntryPanel({ bd, hole, isNext, refusal, record, onFixed }: P
     enterMovesOn: false,
     place: (t) => {
       typeIn(t);
-      return { cell: 'reading', label: `${holeName(hole.index).toLowerCase()} at ${positionText(hole.position, bd.lengthUnit)}, not fixed yet`, undo: () => typeIn('') };
+      return {
+        cell: 'reading',
+        label: `${holeName(hole.index).toLowerCase()} at ${positionText(hole.position, bd.lengthUnit)}, not fixed yet`,
+        undo: () => typeIn(''),
+      };
     },
   });
 
@@ -70,7 +74,11 @@ export function HoleEntryPanel({ bd, hole, isNext, refusal, record, onFixed }: P
   function fix(e: FormEvent) {
     e.preventDefault();
     if (typed === null) {
-      setProblem(text.trim() ? `“${text}” is not a number: type the indicator reading in ${unit}` : `Type the indicator reading in ${unit} first`);
+      setProblem(
+        text.trim()
+          ? `“${text}” is not a number: type the indicator reading in ${unit}`
+          : `Type the indicator reading in ${unit} first`,
+      );
       return;
     }
     if (difference !== null && !within) {
@@ -83,13 +91,24 @@ export function HoleEntryPanel({ bd, hole, isNext, refusal, record, onFixed }: P
 
   const colour = difference === null ? 'text.secondary' : within ? palette.within : palette.brass;
   return (
-    <Paper ref={indicator.containerRef} component="form" onSubmit={fix} noValidate sx={{ p: { xs: 2, md: 3 } }} aria-label={`Fixing ${holeName(hole.index)}`}>
+    <Paper
+      ref={indicator.containerRef}
+      component="form"
+      onSubmit={fix}
+      noValidate
+      sx={{ p: { xs: 2, md: 3 } }}
+      aria-label={`Fixing ${holeName(hole.index)}`}
+    >
       <Stack direction="row" spacing={1} sx={{ alignItems: 'center', flexWrap: 'wrap', mb: 1 }}>
         <Typography variant="h2" component="h2">
           {holeName(hole.index)}
         </Typography>
         <Typography color="text.secondary">{positionText(hole.position, bd.lengthUnit)} from the rail start</Typography>
-        {isNext ? <Chip size="small" color="primary" label="Next in the order" /> : <Chip size="small" variant="outlined" label={`No. ${hole.order + 1} in the order`} />}
+        {isNext ? (
+          <Chip size="small" color="primary" label="Next in the order" />
+        ) : (
+          <Chip size="small" variant="outlined" label={`No. ${hole.order + 1} in the order`} />
+        )}
         {hole.fixed && (
           <Chip
             size="small"
@@ -104,11 +123,16 @@ export function HoleEntryPanel({ bd, hole, isNext, refusal, record, onFixed }: P
       <Box sx={{ display: 'grid', gridTemplateColumns: { xs: '1fr', sm: '1fr 1fr' }, gap: 2, alignItems: 'start' }}>
         <Box>
           <Typography color="text.secondary">Aim for</Typography>
-          <Typography sx={{ fontSize: { xs: '2rem', md: '2.4rem' }, fontWeight: 500, lineHeight: 1.2 }} data-testid="aim">
+          <Typography
+            sx={{ fontSize: { xs: '2rem', md: '2.4rem' }, fontWeight: 500, lineHeight: 1.2 }}
+            data-testid="aim"
+          >
             {hole.target === null ? 'any reading' : signed(hole.target, bd.readingUnit)}
           </Typography>
           <Typography variant="body2" color="text.secondary">
-            {hole.target === null ? 'The first hole fixed sets the datum the others are aimed at.' : `On target within ±${plain(bd.band, bd.readingUnit)}.`}
+            {hole.target === null
+              ? 'The first hole fixed sets the datum the others are aimed at.'
+              : `On target within ±${plain(bd.band, bd.readingUnit)}.`}
           </Typography>
           <TextField
             autoFocus
@@ -116,16 +140,40 @@ export function HoleEntryPanel({ bd, hole, isNext, refusal, record, onFixed }: P
             value={text}
             onChange={(e) => typeIn(e.target.value)}
             error={!!problem}
-            helperText={problem ?? 'Enter fixes the hole when the reading is within the band (a reading sent by an indicator never does)'}
+            helperText={
+              problem ??
+              'Enter fixes the hole when the reading is within the band (a reading sent by an indicator never does)'
+            }
             inputRef={inputRef}
-            slotProps={{ htmlInput: { inputMode: 'decimal', autoComplete: 'off', 'data-indicator-cell': 'reading', style: { fontSize: '1.8rem', padding: '10px 12px' } } }}
+            slotProps={{
+              htmlInput: {
+                inputMode: 'decimal',
+                autoComplete: 'off',
+                'data-indicator-cell': 'reading',
+                style: { fontSize: '1.8rem', padding: '10px 12px' },
+              },
+            }}
             sx={{ mt: 2, width: '100%', maxWidth: 320 }}
             size="medium"
           />
         </Box>
-        <Box role="status" aria-live="polite" aria-label="Difference from the aim" sx={{ textAlign: { xs: 'left', sm: 'right' } }}>
+        <Box
+          role="status"
+          aria-live="polite"
+          aria-label="Difference from the aim"
+          sx={{ textAlign: { xs: 'left', sm: 'right' } }}
+        >
           <Typography color="text.secondary">Difference from the aim</Typography>
-          <Typography sx={{ fontSize: { xs: '3.2rem', md: '4.2rem' }, fontWeight: 700, lineHeight: 1.1, color: colour, fontVariantNumeric: 'tabular-nums' }} data-testid="difference">
+          <Typography
+            sx={{
+              fontSize: { xs: '3.2rem', md: '4.2rem' },
+              fontWeight: 700,
+              lineHeight: 1.1,
+              color: colour,
+              fontVariantNumeric: 'tabular-nums',
+            }}
+            data-testid="difference"
+          >
             {difference === null ? (typed === null ? '—' : 'datum') : signed(difference, bd.readingUnit)}
           </Typography>
           <Typography sx={{ color: colour, fontWeight: 500 }}>
@@ -143,10 +191,12 @@ export function HoleEntryPanel({ bd, hole, isNext, refusal, record, onFixed }: P
       {confirming && difference !== null && (
         <Alert severity="warning" sx={{ mt: 2 }} role="alert" data-testid="miss-confirm">
           <AlertTitle>
-            {holeName(hole.index)} reads {plain(Math.abs(difference), bd.readingUnit)} {difference > 0 ? 'above' : 'below'} its aim
+            {holeName(hole.index)} reads {plain(Math.abs(difference), bd.readingUnit)}{' '}
+            {difference > 0 ? 'above' : 'below'} its aim
           </AlertTitle>
-          The band is ±{plain(bd.band, bd.readingUnit)}, so this is {plain(Math.max(Math.abs(difference) - bd.band, 0), bd.readingUnit)} outside it. Holes fixed after this one are aimed
-          from it. Nudge the rail to {signed(hole.target, bd.readingUnit)}, or fix it here on purpose.
+          The band is ±{plain(bd.band, bd.readingUnit)}, so this is{' '}
+          {plain(Math.max(Math.abs(difference) - bd.band, 0), bd.readingUnit)} outside it. Holes fixed after this one
+          are aimed from it. Nudge the rail to {signed(hole.target, bd.readingUnit)}, or fix it here on purpose.
           <Stack direction="row" spacing={1} useFlexGap sx={{ mt: 1.5, flexWrap: 'wrap' }}>
             <Button color="warning" variant="contained" onClick={send} sx={{ whiteSpace: 'nowrap' }}>
               Fix it anyway
@@ -170,7 +220,14 @@ export function HoleEntryPanel({ bd, hole, isNext, refusal, record, onFixed }: P
           The server refused the reading {refusal.text} {unit}: {refusal.message}. Nothing else was changed.
         </Alert>
       )}
-      <Button type="submit" variant="contained" size="large" startIcon={<CheckOutlined />} disabled={confirming} sx={{ mt: 2, px: 4, py: 1.25, fontSize: '1.1rem' }}>
+      <Button
+        type="submit"
+        variant="contained"
+        size="large"
+        startIcon={<CheckOutlined />}
+        disabled={confirming}
+        sx={{ mt: 2, px: 4, py: 1.25, fontSize: '1.1rem' }}
+      >
         Fix {holeName(hole.index).toLowerCase()}
       </Button>
     </Paper>

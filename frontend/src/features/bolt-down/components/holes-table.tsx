@@ -20,24 +20,40 @@ interface Props {
 }
 
 function State({ hole, isNext, unit, band }: { hole: GuideHole; isNext: boolean; unit: LengthUnit; band: number }) {
-  if (hole.waiting) return <Chip size="small" icon={<CloudUploadOutlined />} label="Waiting to send" sx={{ bgcolor: 'rgba(200,147,42,0.18)', color: '#6b4a0c' }} />;
+  if (hole.waiting)
+    return (
+      <Chip
+        size="small"
+        icon={<CloudUploadOutlined />}
+        label="Waiting to send"
+        sx={{ bgcolor: 'rgba(200,147,42,0.18)', color: '#6b4a0c' }}
+      />
+    );
   if (hole.fixed && hole.onTarget === false) {
     // Fixed on purpose outside its band: never shown like a hole fixed on target.
     return (
-      <Tooltip title={`Fixed ${hole.difference === null ? '' : `${signed(Math.abs(hole.difference), unit).replace(/^[+−]/, '')} off its aim, `}outside the ±${plain(band, unit)} band${hole.fixedBy ? `, by ${hole.fixedBy}` : ''}`}>
+      <Tooltip
+        title={`Fixed ${hole.difference === null ? '' : `${signed(Math.abs(hole.difference), unit).replace(/^[+−]/, '')} off its aim, `}outside the ±${plain(band, unit)} band${hole.fixedBy ? `, by ${hole.fixedBy}` : ''}`}
+      >
         <Chip size="small" color="warning" icon={<WarningAmberOutlined />} label="Fixed outside band" />
       </Tooltip>
     );
   }
   if (hole.fixed) {
     return (
-      <Tooltip title={hole.fixedAt ? `Fixed by ${hole.fixedBy ?? 'someone'} at ${formatDateTime(hole.fixedAt)}` : 'Fixed'}>
+      <Tooltip
+        title={hole.fixedAt ? `Fixed by ${hole.fixedBy ?? 'someone'} at ${formatDateTime(hole.fixedAt)}` : 'Fixed'}
+      >
         <Chip size="small" color="success" variant="outlined" icon={<CheckCircleOutlined />} label="Fixed" />
       </Tooltip>
     );
   }
   if (isNext) return <Chip size="small" color="primary" label="Next" />;
-  return <Typography variant="body2" color="text.secondary">Open</Typography>;
+  return (
+    <Typography variant="body2" color="text.secondary">
+      Open
+    </Typography>
+  );
 }
 
 /** Every hole in the order to fix it, with its aim, reading and state. */
@@ -46,7 +62,14 @@ export function HolesTable({ bd, holes, nextHole, selected, onSelect }: Props) {
   return (
     // Long rails scroll inside the table so the hole being fixed stays in reach above it.
     // On a phone each hole is a card of label–value lines (its place in the order is the card's place).
-    <ResponsiveTable component={Paper} titleFirst={false} sx={{ maxHeight: holes.length > 20 ? 620 : undefined, '& tr > :first-of-type': { display: { xs: 'none', sm: 'table-cell' } } }}>
+    <ResponsiveTable
+      component={Paper}
+      titleFirst={false}
+      sx={{
+        maxHeight: holes.length > 20 ? 620 : undefined,
+        '& tr > :first-of-type': { display: { xs: 'none', sm: 'table-cell' } },
+      }}
+    >
       <Table size="small" stickyHeader aria-label="Holes in fixing order">
         <TableHead>
           <TableRow>
@@ -72,9 +95,19 @@ export function HolesTable({ bd, holes, nextHole, selected, onSelect }: Props) {
               <TableCell>{h.order + 1}</TableCell>
               <TableCell>{h.index + 1}</TableCell>
               <TableCell align="right">{positionIn(h.position, bd.lengthUnit)}</TableCell>
-              <TableCell align="right">{h.target === null ? '—' : signed(h.target, bd.readingUnit).replace(` ${unit}`, '')}</TableCell>
-              <TableCell align="right">{h.reading === null ? '—' : signed(h.reading, bd.readingUnit).replace(` ${unit}`, '')}</TableCell>
-              <TableCell align="right" sx={{ color: h.onTarget === false ? '#8a5a00' : h.onTarget ? 'success.main' : undefined, fontWeight: h.difference !== null ? 500 : undefined }}>
+              <TableCell align="right">
+                {h.target === null ? '—' : signed(h.target, bd.readingUnit).replace(` ${unit}`, '')}
+              </TableCell>
+              <TableCell align="right">
+                {h.reading === null ? '—' : signed(h.reading, bd.readingUnit).replace(` ${unit}`, '')}
+              </TableCell>
+              <TableCell
+                align="right"
+                sx={{
+                  color: h.onTarget === false ? '#8a5a00' : h.onTarget ? 'success.main' : undefined,
+                  fontWeight: h.difference !== null ? 500 : undefined,
+                }}
+              >
                 {h.difference === null ? '—' : signed(h.difference, bd.readingUnit).replace(` ${unit}`, '')}
               </TableCell>
               <TableCell>

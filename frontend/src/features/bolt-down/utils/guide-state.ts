@@ -31,10 +31,20 @@ export interface GuideState {
  */
 export function guideState(bd: BoltDown, waiting: readonly WaitingWrite[]): GuideState {
   const own = waiting.filter((w) => w.path.startsWith(`/bolt-downs/${bd.id}/holes/`));
-  if (!own.length) return finish(bd.holes.map((h) => ({ ...h, waiting: false })), bd.nextHole, bd.fixedCount, bd.complete, 0);
+  if (!own.length)
+    return finish(
+      bd.holes.map((h) => ({ ...h, waiting: false })),
+      bd.nextHole,
+      bd.fixedCount,
+      bd.complete,
+      0,
+    );
 
   // Fix sequence as the server recorded it, then the waiting fixes in the order they were made.
-  const sequence = bd.holes.filter((h) => h.fixed).sort((a, b) => Date.parse(a.fixedAt!) - Date.parse(b.fixedAt!) || a.order - b.order).map((h) => h.index);
+  const sequence = bd.holes
+    .filter((h) => h.fixed)
+    .sort((a, b) => Date.parse(a.fixedAt!) - Date.parse(b.fixedAt!) || a.order - b.order)
+    .map((h) => h.index);
   const holes: GuideHole[] = bd.holes.map((h) => ({ ...h, waiting: false }));
   for (const w of own) {
     const index = Number(w.path.split('/').pop());
@@ -51,7 +61,11 @@ export function guideState(bd: BoltDown, waiting: readonly WaitingWrite[]): Guid
   const seqOf = new Map(sequence.map((index, k) => [index, k]));
   for (const h of holes) {
     const before = h.fixed ? sequence.slice(0, seqOf.get(h.index)) : sequence;
-    h.target = aim(bd.mode, h.position, before.map((i) => ({ position: holes[i].position, reading: holes[i].reading! })));
+    h.target = aim(
+      bd.mode,
+      h.position,
+      before.map((i) => ({ position: holes[i].position, reading: holes[i].reading! })),
+    );
     h.difference = h.reading !== null && h.target !== null ? h.reading - h.target : null;
     h.onTarget = h.difference === null ? null : Math.abs(h.difference) <= bd.band + 1e-9;
   }
@@ -59,7 +73,13 @@ export function guideState(bd: BoltDown, waiting: readonly WaitingWrite[]): Guid
   return finish(holes, next, sequence.length, holes.length > 0 && next === null, own.length);
 }
 
-function finish(holes: GuideHole[], nextHole: number | null, fixedCount: number, complete: boolean, waitingCount: number): GuideState {
+function finish(
+  holes: GuideHole[],
+  nextHole: number | null,
+  fixedCount: number,
+  complete: boolean,
+  waitingCount: number,
+): GuideState {
   return { holes, inOrder: [...holes].sort((a, b) => a.order - b.order), nextHole, fixedCount, complete, waitingCount };
 }
 
@@ -73,6 +93,9 @@ function aim(mode: BoltDownMode, position: number, fixed: { position: number; re
     if (h.position < position && (!left || h.position > left.position)) left = h;
     if (h.position > position && (!right || h.position < right.position)) right = h;
   }
-  if (left && right) return left.reading + ((position - left.position) / (right.position - left.position)) * (right.reading - left.reading);
+  if (left && right)
+    return (
+      left.reading + ((position - left.position) / (right.position - left.position)) * (right.reading - left.reading)
+    );
   return (left ?? right)!.reading;
 }

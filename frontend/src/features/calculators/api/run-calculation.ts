@@ -15,7 +15,10 @@ export interface Calculated<Req, Res> {
 export function calculationQueryOptions<Req, Res>(route: string, body: Req | null) {
   return queryOptions({
     queryKey: calculatorKeys.run(route, body),
-    queryFn: async (): Promise<Calculated<Req, Res>> => ({ request: body as Req, result: await api.post<Res>(`/calc/${route}`, body) }),
+    queryFn: async (): Promise<Calculated<Req, Res>> => ({
+      request: body as Req,
+      result: await api.post<Res>(`/calc/${route}`, body),
+    }),
     enabled: body !== null,
     placeholderData: keepPreviousData,
     staleTime: Infinity,

@@ -2,11 +2,28 @@ import type { ReactNode } from 'react';
 import { Box, Paper, Typography } from '@mui/material';
 
 /** Inputs on the left, results on the right (stacked on narrow screens); an optional chart below. */
-export function CalculatorLayout({ intro, inputs, results, chart }: { intro: ReactNode; inputs: ReactNode; results: ReactNode; chart?: ReactNode }) {
+export function CalculatorLayout({
+  intro,
+  inputs,
+  results,
+  chart,
+}: {
+  intro: ReactNode;
+  inputs: ReactNode;
+  results: ReactNode;
+  chart?: ReactNode;
+}) {
   return (
     <Box sx={{ display: 'grid', gap: 2 }}>
       <Typography color="text.secondary">{intro}</Typography>
-      <Box sx={{ display: 'grid', gap: 2, gridTemplateColumns: { xs: '1fr', md: 'minmax(300px, 5fr) 6fr' }, alignItems: 'start' }}>
+      <Box
+        sx={{
+          display: 'grid',
+          gap: 2,
+          gridTemplateColumns: { xs: '1fr', md: 'minmax(300px, 5fr) 6fr' },
+          alignItems: 'start',
+        }}
+      >
         <Paper component="section" aria-label="Inputs" sx={{ p: 2, display: 'grid', gap: 2 }}>
           {inputs}
         </Paper>

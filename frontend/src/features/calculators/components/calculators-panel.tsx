@@ -42,7 +42,13 @@ export function CalculatorsPanel() {
         sx={{ mb: 2, borderBottom: 1, borderColor: 'divider' }}
       >
         {TABS.map((t) => (
-          <Tab key={t.key} value={t.key} label={t.label} id={`calc-tab-${t.key}`} aria-controls={`calc-panel-${t.key}`} />
+          <Tab
+            key={t.key}
+            value={t.key}
+            label={t.label}
+            id={`calc-tab-${t.key}`}
+            aria-controls={`calc-panel-${t.key}`}
+          />
         ))}
       </Tabs>
       <Box role="tabpanel" id={`calc-panel-${current.key}`} aria-labelledby={`calc-tab-${current.key}`}>

@@ -18,7 +18,9 @@ export function FlatnessCalculator() {
   const { lengthUnit, readingUnit } = families.units;
   const parsed = useMemo(() => parseTable(text, 3, 3, 'x, y and height'), [text]);
   const ready = parsed.rows.length >= 3 && parsed.errors.length === 0;
-  const body = useStableBody<FlatnessRequest>(ready ? { points: parsed.rows.map(([x, y, z]) => ({ x, y, z })), lengthUnit, readingUnit } : null);
+  const body = useStableBody<FlatnessRequest>(
+    ready ? { points: parsed.rows.map(([x, y, z]) => ({ x, y, z })), lengthUnit, readingUnit } : null,
+  );
   const calc = useFlatnessCalculation(body);
   const r = calc.data?.result;
   const shown = calc.data?.request.readingUnit ?? readingUnit;
@@ -43,23 +45,38 @@ export function FlatnessCalculator() {
       }
       results={
         <CalculationState
-          waitingFor={ready ? null : parsed.errors.length ? 'Correct the lines marked in red.' : 'Enter at least three points that are not all on one line.'}
+          waitingFor={
+            ready
+              ? null
+              : parsed.errors.length
+                ? 'Correct the lines marked in red.'
+                : 'Enter at least three points that are not all on one line.'
+          }
           isFetching={calc.isFetching}
           error={calc.error}
         >
           {r && (
             <>
-            <ResultTable
-              title="Flatness result"
-              rows={[
-                { label: 'Flatness', value: lengthIn(r.leastSquares.flatness, shown), note: 'Spread of the heights about the best-fit plane', strong: true },
-                { label: 'Tilt along X', value: fixed(r.tilt.xMmPerMetre, 3, 'mm/m') },
-                { label: 'Tilt along Y', value: fixed(r.tilt.yMmPerMetre, 3, 'mm/m') },
-                { label: 'Steepest tilt', value: fixed(r.tilt.mmPerMetre, 3, 'mm/m'), note: `Rising towards ${fixed(r.tilt.directionDeg, 0, '°')} from +X` },
-                { label: 'Points', value: String(r.leastSquares.residuals.length) },
-              ]}
-            />
-            <ResultWarnings warnings={r.warnings} />
+              <ResultTable
+                title="Flatness result"
+                rows={[
+                  {
+                    label: 'Flatness',
+                    value: lengthIn(r.leastSquares.flatness, shown),
+                    note: 'Spread of the heights about the best-fit plane',
+                    strong: true,
+                  },
+                  { label: 'Tilt along X', value: fixed(r.tilt.xMmPerMetre, 3, 'mm/m') },
+                  { label: 'Tilt along Y', value: fixed(r.tilt.yMmPerMetre, 3, 'mm/m') },
+                  {
+                    label: 'Steepest tilt',
+                    value: fixed(r.tilt.mmPerMetre, 3, 'mm/m'),
+                    note: `Rising towards ${fixed(r.tilt.directionDeg, 0, '°')} from +X`,
+                  },
+                  { label: 'Points', value: String(r.leastSquares.residuals.length) },
+                ]}
+              />
+              <ResultWarnings warnings={r.warnings} />
             </>
           )}
         </CalculationState>

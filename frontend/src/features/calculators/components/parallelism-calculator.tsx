@@ -20,7 +20,13 @@ export function ParallelismCalculator() {
   const ready = parsed.rows.length >= 2 && parsed.errors.length === 0;
   const body = useStableBody<ParallelismRequest>(
     ready
-      ? { positions: parsed.rows.map((r) => r[0]), railA: parsed.rows.map((r) => r[1]), railB: parsed.rows.map((r) => r[2]), lengthUnit, readingUnit }
+      ? {
+          positions: parsed.rows.map((r) => r[0]),
+          railA: parsed.rows.map((r) => r[1]),
+          railB: parsed.rows.map((r) => r[2]),
+          lengthUnit,
+          readingUnit,
+        }
       : null,
   );
   const calc = useParallelismCalculation(body);
@@ -28,7 +34,9 @@ export function ParallelismCalculator() {
   const req = calc.data?.request;
   const shown = req?.readingUnit ?? readingUnit;
   const spread = r ? r.differences.map((d, i) => ({ d, i })) : [];
-  const widest = spread.length ? spread.reduce((a, b) => (Math.abs(b.d - r!.meanOffset) > Math.abs(a.d - r!.meanOffset) ? b : a)) : null;
+  const widest = spread.length
+    ? spread.reduce((a, b) => (Math.abs(b.d - r!.meanOffset) > Math.abs(a.d - r!.meanOffset) ? b : a))
+    : null;
 
   return (
     <CalculatorLayout
@@ -50,7 +58,13 @@ export function ParallelismCalculator() {
       }
       results={
         <CalculationState
-          waitingFor={ready ? null : parsed.errors.length ? 'Correct the lines marked in red.' : 'Enter at least two stations, each with a reading on both rails.'}
+          waitingFor={
+            ready
+              ? null
+              : parsed.errors.length
+                ? 'Correct the lines marked in red.'
+                : 'Enter at least two stations, each with a reading on both rails.'
+          }
           isFetching={calc.isFetching}
           error={calc.error}
         >
@@ -59,10 +73,24 @@ export function ParallelismCalculator() {
               <ResultTable
                 title="Parallelism result"
                 rows={[
-                  { label: 'Parallelism', value: lengthIn(r.parallelism, shown), note: 'Spread of B − A over the stations', strong: true },
-                  { label: 'Height difference (mean B − A)', value: lengthIn(r.meanOffset, shown), note: 'How far rail B sits above rail A on average' },
+                  {
+                    label: 'Parallelism',
+                    value: lengthIn(r.parallelism, shown),
+                    note: 'Spread of B − A over the stations',
+                    strong: true,
+                  },
+                  {
+                    label: 'Height difference (mean B − A)',
+                    value: lengthIn(r.meanOffset, shown),
+                    note: 'How far rail B sits above rail A on average',
+                  },
                   ...(widest
-                    ? [{ label: 'Furthest from the mean', value: `${lengthIn(r.differences[widest.i], shown)} at ${req.positions[widest.i]} ${UNIT_LABELS[req.lengthUnit]}` }]
+                    ? [
+                        {
+                          label: 'Furthest from the mean',
+                          value: `${lengthIn(r.differences[widest.i], shown)} at ${req.positions[widest.i]} ${UNIT_LABELS[req.lengthUnit]}`,
+                        },
+                      ]
                     : []),
                 ]}
               />

@@ -40,7 +40,16 @@ export function PasteField({
         fullWidth
         slotProps={{
           // No wrapping: a long row of runs scrolls sideways instead of breaking into two lines.
-          htmlInput: { spellCheck: false, wrap: 'off', style: { fontFamily: 'ui-monospace, Menlo, Consolas, monospace', fontSize: 14, overflowX: 'auto', tabSize: 6 } },
+          htmlInput: {
+            spellCheck: false,
+            wrap: 'off',
+            style: {
+              fontFamily: 'ui-monospace, Menlo, Consolas, monospace',
+              fontSize: 14,
+              overflowX: 'auto',
+              tabSize: 6,
+            },
+          },
         }}
         helperText={`${columnsHint} · ${rowCount} ${rowNoun} read`}
       />

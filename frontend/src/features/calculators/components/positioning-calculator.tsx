@@ -20,7 +20,10 @@ function toRequest(rows: number[][], units: UnitFamilies): { body: PositioningRe
   const width = rows[0].length;
   if (rows.some((r) => r.length !== width)) return { body: null, problem: 'Every line needs the same number of runs.' };
   if ((width - 1) % 2 !== 0 || width < 5) {
-    return { body: null, problem: 'Each line needs the target and the same number of up and down runs, at least two of each.' };
+    return {
+      body: null,
+      problem: 'Each line needs the target and the same number of up and down runs, at least two of each.',
+    };
   }
   const n = (width - 1) / 2;
   const runs: PositioningRequest['runs'] = [];
@@ -34,7 +37,10 @@ export function PositioningCalculator() {
   const families = useUnitFamilies({ lengthUnit: 'mm', readingUnit: 'um' });
   const { lengthUnit, readingUnit } = families.units;
   const parsed = useMemo(() => parseTable(text, 1, Infinity, 'target and deviations'), [text]);
-  const { body: request, problem } = useMemo(() => toRequest(parsed.rows, { lengthUnit, readingUnit }), [parsed.rows, lengthUnit, readingUnit]);
+  const { body: request, problem } = useMemo(
+    () => toRequest(parsed.rows, { lengthUnit, readingUnit }),
+    [parsed.rows, lengthUnit, readingUnit],
+  );
   const waiting = parsed.errors.length ? 'Correct the lines marked in red.' : problem;
   const body = useStableBody<PositioningRequest>(waiting ? null : request);
   const calc = usePositioningCalculation(body);
@@ -67,10 +73,24 @@ export function PositioningCalculator() {
               <ResultTable
                 title="Positioning result"
                 rows={[
-                  { label: 'Accuracy A', value: len(r.accuracy), note: `Up ${len(r.accuracyUp)}, down ${len(r.accuracyDown)}`, strong: true },
-                  { label: 'Repeatability R', value: len(r.repeatability), note: `Up ${len(r.repeatabilityUp)}, down ${len(r.repeatabilityDown)}`, strong: true },
+                  {
+                    label: 'Accuracy A',
+                    value: len(r.accuracy),
+                    note: `Up ${len(r.accuracyUp)}, down ${len(r.accuracyDown)}`,
+                    strong: true,
+                  },
+                  {
+                    label: 'Repeatability R',
+                    value: len(r.repeatability),
+                    note: `Up ${len(r.repeatabilityUp)}, down ${len(r.repeatabilityDown)}`,
+                    strong: true,
+                  },
                   { label: 'Reversal value B', value: len(r.reversal), note: `Mean reversal ${len(r.reversalMean)}` },
-                  { label: 'Systematic deviation E', value: len(r.systematic), note: `Up ${len(r.systematicUp)}, down ${len(r.systematicDown)}` },
+                  {
+                    label: 'Systematic deviation E',
+                    value: len(r.systematic),
+                    note: `Up ${len(r.systematicUp)}, down ${len(r.systematicDown)}`,
+                  },
                   { label: 'Range of mean deviation M', value: len(r.meanRange) },
                   { label: 'Runs', value: `${r.runsUp} up, ${r.runsDown} down` },
                 ]}
@@ -81,7 +101,9 @@ export function PositioningCalculator() {
         </CalculationState>
       }
       chart={
-        !waiting && !calc.error && r && (
+        !waiting &&
+        !calc.error &&
+        r && (
           <>
             <PositioningChart
               targets={r.targets.map((t) => ({

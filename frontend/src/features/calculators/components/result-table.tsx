@@ -25,7 +25,16 @@ export function ResultTable({ title, rows }: { title: string; rows: ResultRow[] 
                 </Typography>
               )}
             </TableCell>
-            <TableCell align="right" sx={{ pr: 0, verticalAlign: 'top', fontVariantNumeric: 'tabular-nums', fontWeight: r.strong ? 600 : 400, whiteSpace: 'nowrap' }}>
+            <TableCell
+              align="right"
+              sx={{
+                pr: 0,
+                verticalAlign: 'top',
+                fontVariantNumeric: 'tabular-nums',
+                fontWeight: r.strong ? 600 : 400,
+                whiteSpace: 'nowrap',
+              }}
+            >
               {r.value}
             </TableCell>
           </TableRow>

@@ -24,7 +24,14 @@ type Field = 'nominalDiameter' | 'rootDiameter' | 'unsupportedLength' | 'lead' |
 
 export function ScrewSpeedCalculator() {
   const [mounting, setMounting] = useState<Mounting>('fixed-supported');
-  const [v, setV] = useState<Record<Field, string>>({ nominalDiameter: '16', rootDiameter: '12.9', unsupportedLength: '', lead: '5', feedRate: '', dnLimit: '' });
+  const [v, setV] = useState<Record<Field, string>>({
+    nominalDiameter: '16',
+    rootDiameter: '12.9',
+    unsupportedLength: '',
+    lead: '5',
+    feedRate: '',
+    dnLimit: '',
+  });
   const families = useUnitFamilies({ lengthUnit: 'mm', readingUnit: 'mm' });
   const unit = families.units.lengthUnit;
   const u = UNIT_LABELS[unit];
@@ -56,7 +63,13 @@ export function ScrewSpeedCalculator() {
       intro="A ball screw's speed at a feed rate against its whirling (critical) speed and the nut's d·n limit. Root diameter and end mounting come from the screw maker's data."
       inputs={
         <>
-          <TextField select label="End mounting" value={mounting} onChange={(e) => setMounting(e.target.value as Mounting)} sx={{ minWidth: 260, justifySelf: 'start' }}>
+          <TextField
+            select
+            label="End mounting"
+            value={mounting}
+            onChange={(e) => setMounting(e.target.value as Mounting)}
+            sx={{ minWidth: 260, justifySelf: 'start' }}
+          >
             {MOUNTINGS.map((m) => (
               <MenuItem key={m.value} value={m.value}>
                 {m.label}
@@ -65,17 +78,39 @@ export function ScrewSpeedCalculator() {
           </TextField>
           <UnitFamilyPickers {...families} readings={false} />
           <FieldGrid>
-            <NumberField label="Nominal diameter" value={v.nominalDiameter} onChange={set('nominalDiameter')} unit={u} />
+            <NumberField
+              label="Nominal diameter"
+              value={v.nominalDiameter}
+              onChange={set('nominalDiameter')}
+              unit={u}
+            />
             <NumberField label="Root diameter" value={v.rootDiameter} onChange={set('rootDiameter')} unit={u} />
-            <NumberField label="Unsupported length" value={v.unsupportedLength} onChange={set('unsupportedLength')} unit={u} helperText="Between the bearings, or bearing to nut at full travel" />
+            <NumberField
+              label="Unsupported length"
+              value={v.unsupportedLength}
+              onChange={set('unsupportedLength')}
+              unit={u}
+              helperText="Between the bearings, or bearing to nut at full travel"
+            />
             <NumberField label="Lead" value={v.lead} onChange={set('lead')} unit={u} />
             <NumberField label="Feed rate" value={v.feedRate} onChange={set('feedRate')} unit={`${u}/min`} />
-            <NumberField label="d·n limit" value={v.dnLimit} onChange={set('dnLimit')} unit="mm·rpm" required={false} helperText="Nominal diameter in mm × rpm; 70 000 for rolled screws when blank" />
+            <NumberField
+              label="d·n limit"
+              value={v.dnLimit}
+              onChange={set('dnLimit')}
+              unit="mm·rpm"
+              required={false}
+              helperText="Nominal diameter in mm × rpm; 70 000 for rolled screws when blank"
+            />
           </FieldGrid>
         </>
       }
       results={
-        <CalculationState waitingFor={ready ? null : 'Fill in every field marked *.'} isFetching={calc.isFetching} error={calc.error}>
+        <CalculationState
+          waitingFor={ready ? null : 'Fill in every field marked *.'}
+          isFetching={calc.isFetching}
+          error={calc.error}
+        >
           {r && (
             <>
               <Chip
@@ -87,9 +122,17 @@ export function ScrewSpeedCalculator() {
                 title="Screw speed result"
                 rows={[
                   { label: 'Screw speed at this feed', value: fixed(r.rpm, 0, 'rpm'), strong: true },
-                  { label: 'Permissible speed (whirling)', value: fixed(r.permissibleSpeed, 0, 'rpm'), note: 'Critical speed with the catalogue’s 0.8 safety factor' },
+                  {
+                    label: 'Permissible speed (whirling)',
+                    value: fixed(r.permissibleSpeed, 0, 'rpm'),
+                    note: 'Critical speed with the catalogue’s 0.8 safety factor',
+                  },
                   { label: 'Critical speed', value: fixed(r.criticalSpeed, 0, 'rpm') },
-                  { label: 'd·n limit speed', value: fixed(r.dnLimitSpeed, 0, 'rpm'), note: `${fixed(r.dnLimit, 0)} ÷ nominal diameter` },
+                  {
+                    label: 'd·n limit speed',
+                    value: fixed(r.dnLimitSpeed, 0, 'rpm'),
+                    note: `${fixed(r.dnLimit, 0)} ÷ nominal diameter`,
+                  },
                   {
                     label: 'Highest feed rate',
                     value: fixed(fromMm(r.maxFeedRate, shown), feedDecimals, `${UNIT_LABELS[shown]}/min`),

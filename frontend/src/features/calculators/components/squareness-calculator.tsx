@@ -18,13 +18,26 @@ type Field = (typeof FIELDS)[number];
 export function SquarenessCalculator() {
   const families = useUnitFamilies({ lengthUnit: 'mm', readingUnit: 'mm' });
   const unit = families.units.lengthUnit;
-  const [values, setValues] = useState<Record<Field, string>>({ sideX: '', sideY: '', diagonal1: '', diagonal2: '', gantrySpan: '' });
+  const [values, setValues] = useState<Record<Field, string>>({
+    sideX: '',
+    sideY: '',
+    diagonal1: '',
+    diagonal2: '',
+    gantrySpan: '',
+  });
   const set = (f: Field) => (text: string) => setValues((v) => ({ ...v, [f]: text }));
   const [sideX, sideY, diagonal1, diagonal2, gantrySpan] = FIELDS.map((f) => numberOrNull(values[f]));
   const ready = sideX !== null && sideY !== null && diagonal1 !== null && diagonal2 !== null;
   const body = useStableBody<SquarenessRequest>(
     ready
-      ? { sideX: sideX!, sideY: sideY!, diagonal1: diagonal1!, diagonal2: diagonal2!, ...(gantrySpan !== null ? { gantrySpan } : {}), ...families.units }
+      ? {
+          sideX: sideX!,
+          sideY: sideY!,
+          diagonal1: diagonal1!,
+          diagonal2: diagonal2!,
+          ...(gantrySpan !== null ? { gantrySpan } : {}),
+          ...families.units,
+        }
       : null,
   );
   const calc = useSquarenessCalculation(body);
@@ -55,13 +68,21 @@ export function SquarenessCalculator() {
         </>
       }
       results={
-        <CalculationState waitingFor={ready ? null : 'Enter both sides and both diagonals.'} isFetching={calc.isFetching} error={calc.error}>
+        <CalculationState
+          waitingFor={ready ? null : 'Enter both sides and both diagonals.'}
+          isFetching={calc.isFetching}
+          error={calc.error}
+        >
           {r && (
             <>
               <ResultTable
                 title="Squareness result"
                 rows={[
-                  { label: 'Out of square', value: `${fixed(r.outOfSquareDeg, 4)}° (${fixed(r.outOfSquareArcsec, 0)}″)`, strong: true },
+                  {
+                    label: 'Out of square',
+                    value: `${fixed(r.outOfSquareDeg, 4)}° (${fixed(r.outOfSquareArcsec, 0)}″)`,
+                    strong: true,
+                  },
                   { label: 'Per metre of travel', value: fixed(r.mmPerMetre, 3, 'mm/m') },
                   { label: 'Diagonal difference', value: lengthIn(r.diagonalDifference, shown) },
                   { label: 'Longer diagonal', value: r.outOfSquareDeg === 0 ? 'equal' : `Diagonal ${r.longDiagonal}` },

@@ -21,7 +21,9 @@ export function StraightnessCalculator() {
   const parsed = useMemo(() => parseTable(text, 2, 2, 'station and reading'), [text]);
   const ready = parsed.rows.length >= 3 && parsed.errors.length === 0;
   const body = useStableBody<StraightnessRequest>(
-    ready ? { positions: parsed.rows.map((r) => r[0]), readings: parsed.rows.map((r) => r[1]), lengthUnit, readingUnit } : null,
+    ready
+      ? { positions: parsed.rows.map((r) => r[0]), readings: parsed.rows.map((r) => r[1]), lengthUnit, readingUnit }
+      : null,
   );
   const calc = useStraightnessCalculation(body);
   const r = calc.data?.result;
@@ -49,7 +51,13 @@ export function StraightnessCalculator() {
       }
       results={
         <CalculationState
-          waitingFor={ready ? null : parsed.errors.length ? 'Correct the lines marked in red.' : 'Enter at least three stations with a reading each.'}
+          waitingFor={
+            ready
+              ? null
+              : parsed.errors.length
+                ? 'Correct the lines marked in red.'
+                : 'Enter at least three stations with a reading each.'
+          }
           isFetching={calc.isFetching}
           error={calc.error}
         >
@@ -58,10 +66,27 @@ export function StraightnessCalculator() {
               <ResultTable
                 title="Straightness result"
                 rows={[
-                  { label: 'Straightness, minimum zone', value: lengthIn(r.minimumZone.straightness, shown), note: 'Narrowest band holding every reading (ISO 1101)', strong: true },
-                  { label: 'Straightness, least squares', value: lengthIn(r.leastSquares.straightness, shown), note: 'Spread about the best-fit line' },
-                  { label: 'Straightness, end points', value: lengthIn(r.endPoint.straightness, shown), note: 'Spread about the line through the first and last stations' },
-                  { label: 'Slope of the least-squares line', value: slopePerMetre(r.leastSquares.slope, shown), note: 'Tilt of the rail against the indicator’s reference' },
+                  {
+                    label: 'Straightness, minimum zone',
+                    value: lengthIn(r.minimumZone.straightness, shown),
+                    note: 'Narrowest band holding every reading (ISO 1101)',
+                    strong: true,
+                  },
+                  {
+                    label: 'Straightness, least squares',
+                    value: lengthIn(r.leastSquares.straightness, shown),
+                    note: 'Spread about the best-fit line',
+                  },
+                  {
+                    label: 'Straightness, end points',
+                    value: lengthIn(r.endPoint.straightness, shown),
+                    note: 'Spread about the line through the first and last stations',
+                  },
+                  {
+                    label: 'Slope of the least-squares line',
+                    value: slopePerMetre(r.leastSquares.slope, shown),
+                    note: 'Tilt of the rail against the indicator’s reference',
+                  },
                   { label: 'Stations', value: String(r.leastSquares.residuals.length) },
                 ]}
               />
@@ -71,13 +96,25 @@ export function StraightnessCalculator() {
         </CalculationState>
       }
       chart={
-        ready && !calc.error && r &&
+        ready &&
+        !calc.error &&
+        r &&
         req && (
           <Box>
             <StraightnessChart
-              points={req.positions.map((position, i) => ({ position: toMm(position, req.lengthUnit), reading: req.readings[i] }))}
-              leastSquares={{ slope: fromMm(r.leastSquares.slope, shown), intercept: fromMm(r.leastSquares.intercept, shown) }}
-              zone={{ slope: fromMm(r.minimumZone.slope, shown), intercept: fromMm(r.minimumZone.intercept, shown), width: fromMm(r.minimumZone.straightness, shown) }}
+              points={req.positions.map((position, i) => ({
+                position: toMm(position, req.lengthUnit),
+                reading: req.readings[i],
+              }))}
+              leastSquares={{
+                slope: fromMm(r.leastSquares.slope, shown),
+                intercept: fromMm(r.leastSquares.intercept, shown),
+              }}
+              zone={{
+                slope: fromMm(r.minimumZone.slope, shown),
+                intercept: fromMm(r.minimumZone.intercept, shown),
+                width: fromMm(r.minimumZone.straightness, shown),
+              }}
               unitLabel={UNIT_LABELS[shown]}
             />
           </Box>

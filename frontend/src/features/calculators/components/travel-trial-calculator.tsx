@@ -49,7 +49,14 @@ export function TravelTrialCalculator() {
         <>
           <FieldGrid>
             <NumberField label="Steps per mm used" value={used} onChange={setUsed} unit="steps/mm" />
-            <NumberField label="Steps per mm from the drive" value={theory} onChange={setTheory} unit="steps/mm" required={false} helperText="A correction more than 5 % from it is flagged" />
+            <NumberField
+              label="Steps per mm from the drive"
+              value={theory}
+              onChange={setTheory}
+              unit="steps/mm"
+              required={false}
+              helperText="A correction more than 5 % from it is flagged"
+            />
           </FieldGrid>
           <UnitFamilyPickers {...families} readings={false} lengthLabel="Move unit" />
           <PasteField
@@ -67,7 +74,13 @@ export function TravelTrialCalculator() {
       }
       results={
         <CalculationState
-          waitingFor={ready ? null : parsed.errors.length ? 'Correct the lines marked in red.' : 'Enter the steps per mm in use and at least one move.'}
+          waitingFor={
+            ready
+              ? null
+              : parsed.errors.length
+                ? 'Correct the lines marked in red.'
+                : 'Enter the steps per mm in use and at least one move.'
+          }
           isFetching={calc.isFetching}
           error={calc.error}
         >
@@ -76,12 +89,28 @@ export function TravelTrialCalculator() {
               <ResultTable
                 title="Travel trial result"
                 rows={[
-                  { label: 'Corrected steps per mm', value: significant(r.correctedStepsPerMm, 7, 'steps/mm'), strong: true },
-                  { label: 'Corrected steps per inch', value: significant(r.correctedStepsPerIn, 7, 'steps/in'), note: 'For a controller set up in inches' },
+                  {
+                    label: 'Corrected steps per mm',
+                    value: significant(r.correctedStepsPerMm, 7, 'steps/mm'),
+                    strong: true,
+                  },
+                  {
+                    label: 'Corrected steps per inch',
+                    value: significant(r.correctedStepsPerIn, 7, 'steps/in'),
+                    note: 'For a controller set up in inches',
+                  },
                   { label: 'Scale (measured ÷ commanded)', value: significant(r.scale, 7) },
                   { label: 'Scale error', value: fixed(r.errorPercent, 3, '%') },
-                  { label: 'Offset of the fit', value: lengthIn(r.offset, shown), note: 'Zero for a single move or repeats of one move' },
-                  { label: 'Largest residual', value: lengthIn(r.residualMax, shown), note: 'Scatter of the moves about the fitted line' },
+                  {
+                    label: 'Offset of the fit',
+                    value: lengthIn(r.offset, shown),
+                    note: 'Zero for a single move or repeats of one move',
+                  },
+                  {
+                    label: 'Largest residual',
+                    value: lengthIn(r.residualMax, shown),
+                    note: 'Scatter of the moves about the fitted line',
+                  },
                 ]}
               />
               <ResultWarnings warnings={r.warnings} />
@@ -90,7 +119,9 @@ export function TravelTrialCalculator() {
         </CalculationState>
       }
       chart={
-        ready && !calc.error && r && (
+        ready &&
+        !calc.error &&
+        r && (
           <TravelErrorChart
             moves={r.moves.map((m) => ({ commanded: m.commanded, error: fromMm(m.error, chartUnit) }))}
             fit={{ slope: fromMm(r.scale - 1, chartUnit), offset: fromMm(r.offset, chartUnit) }}

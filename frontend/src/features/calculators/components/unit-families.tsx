@@ -29,7 +29,9 @@ export function UnitFamilyPickers({
   return (
     <Box sx={{ display: 'flex', gap: 2, flexWrap: 'wrap' }}>
       <UnitFamilySelect family="length" label={lengthLabel} value={units.lengthUnit} onChange={setLengthUnit} />
-      {readings && <UnitFamilySelect family="reading" label={readingLabel} value={units.readingUnit} onChange={setReadingUnit} />}
+      {readings && (
+        <UnitFamilySelect family="reading" label={readingLabel} value={units.readingUnit} onChange={setReadingUnit} />
+      )}
     </Box>
   );
 }

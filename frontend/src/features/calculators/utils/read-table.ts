@@ -24,7 +24,9 @@ export function parseTable(text: string, minColumns: number, maxColumns = Infini
   for (const row of readRows(text)) {
     const cells = row.cells.slice(0, maxColumns);
     while (cells.length && cells[cells.length - 1] === '') cells.pop();
-    const parsed = cells.map((cell) => (cell === '' ? { ok: false as const, reason: 'the cell is empty' } : parseNumberCell(cell)));
+    const parsed = cells.map((cell) =>
+      cell === '' ? { ok: false as const, reason: 'the cell is empty' } : parseNumberCell(cell),
+    );
     const bad = parsed.findIndex((p) => !p.ok);
     if (bad >= 0) {
       if (!rows.length && !errors.length && !headerSkipped && parsed.every((p) => !p.ok)) {

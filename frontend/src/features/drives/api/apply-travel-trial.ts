@@ -11,10 +11,18 @@ export function useApplyTravelTrial(axisId: string) {
   const qc = useQueryClient();
   return useMutation({
     mutationFn: ({ trialId, confirmFarCorrection }: { trialId: string; confirmFarCorrection?: boolean }) =>
-      answer(client.POST('/api/axes/{id}/travel-trials/{trialId}/apply', { params: { path: { id: axisId, trialId } }, body: confirmFarCorrection ? { confirmFarCorrection: true } : {} })),
+      answer(
+        client.POST('/api/axes/{id}/travel-trials/{trialId}/apply', {
+          params: { path: { id: axisId, trialId } },
+          body: confirmFarCorrection ? { confirmFarCorrection: true } : {},
+        }),
+      ),
     onSuccess: (axis) => {
       qc.setQueryData(driveKeys.axis(axisId), axis);
-      return Promise.all([qc.invalidateQueries({ queryKey: driveKeys.all }), ...MACHINE_STATE_KEYS.map((queryKey) => qc.invalidateQueries({ queryKey }))]);
+      return Promise.all([
+        qc.invalidateQueries({ queryKey: driveKeys.all }),
+        ...MACHINE_STATE_KEYS.map((queryKey) => qc.invalidateQueries({ queryKey })),
+      ]);
     },
   });
 }

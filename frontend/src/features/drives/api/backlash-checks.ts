@@ -9,7 +9,11 @@ export const backlashChecksQueryOptions = (axisId: string) =>
   infiniteQueryOptions({
     queryKey: backlashKeys.list(axisId),
     queryFn: ({ pageParam }) =>
-      answer(client.GET('/api/axes/{id}/backlash-checks', { params: { path: { id: axisId }, query: { limit: BACKLASH_PAGE_SIZE, cursor: pageParam || undefined } } })),
+      answer(
+        client.GET('/api/axes/{id}/backlash-checks', {
+          params: { path: { id: axisId }, query: { limit: BACKLASH_PAGE_SIZE, cursor: pageParam || undefined } },
+        }),
+      ),
     initialPageParam: '',
     getNextPageParam: (last) => (last.length === BACKLASH_PAGE_SIZE ? last[last.length - 1].id : undefined),
     select: (data) => data.pages.flat(),

@@ -7,7 +7,14 @@ import { driveKeys } from '../types';
 export function useDeleteBacklash(axisId: string) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: async (checkId: string) => void (await client.DELETE('/api/axes/{id}/backlash-checks/{checkId}', { params: { path: { id: axisId, checkId } } })),
-    onSuccess: () => Promise.all([qc.invalidateQueries({ queryKey: driveKeys.all }), ...MACHINE_STATE_KEYS.map((queryKey) => qc.invalidateQueries({ queryKey }))]),
+    mutationFn: async (checkId: string) =>
+      void (await client.DELETE('/api/axes/{id}/backlash-checks/{checkId}', {
+        params: { path: { id: axisId, checkId } },
+      })),
+    onSuccess: () =>
+      Promise.all([
+        qc.invalidateQueries({ queryKey: driveKeys.all }),
+        ...MACHINE_STATE_KEYS.map((queryKey) => qc.invalidateQueries({ queryKey })),
+      ]),
   });
 }

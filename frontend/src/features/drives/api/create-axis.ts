@@ -22,6 +22,10 @@ export function useCreateAxis(machineId: string) {
   const qc = useQueryClient();
   return useMutation({
     mutationFn: (input: AxisInput) => api.post<Axis>(`/machines/${machineId}/axes`, input),
-    onSuccess: () => Promise.all([qc.invalidateQueries({ queryKey: driveKeys.all }), ...MACHINE_STATE_KEYS.map((queryKey) => qc.invalidateQueries({ queryKey }))]),
+    onSuccess: () =>
+      Promise.all([
+        qc.invalidateQueries({ queryKey: driveKeys.all }),
+        ...MACHINE_STATE_KEYS.map((queryKey) => qc.invalidateQueries({ queryKey })),
+      ]),
   });
 }

@@ -8,11 +8,17 @@ import { driveKeys } from '../types';
 export function useDeletePositioningRun(axisId: string) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: async (runId: string) => void (await client.DELETE('/api/axes/{id}/positioning-runs/{runId}', { params: { path: { id: axisId, runId } } })),
+    mutationFn: async (runId: string) =>
+      void (await client.DELETE('/api/axes/{id}/positioning-runs/{runId}', {
+        params: { path: { id: axisId, runId } },
+      })),
     onSuccess: (_: void, runId: string) => {
       // Gone: nothing should ask for it again while the list catches up.
       qc.removeQueries({ queryKey: positioningRunQueryOptions(axisId, runId).queryKey, exact: true });
-      return Promise.all([qc.invalidateQueries({ queryKey: driveKeys.all }), ...MACHINE_STATE_KEYS.map((queryKey) => qc.invalidateQueries({ queryKey }))]);
+      return Promise.all([
+        qc.invalidateQueries({ queryKey: driveKeys.all }),
+        ...MACHINE_STATE_KEYS.map((queryKey) => qc.invalidateQueries({ queryKey })),
+      ]);
     },
   });
 }

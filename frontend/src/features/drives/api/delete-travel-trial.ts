@@ -8,11 +8,17 @@ import { driveKeys } from '../types';
 export function useDeleteTravelTrial(axisId: string) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: async (trialId: string) => void (await client.DELETE('/api/axes/{id}/travel-trials/{trialId}', { params: { path: { id: axisId, trialId } } })),
+    mutationFn: async (trialId: string) =>
+      void (await client.DELETE('/api/axes/{id}/travel-trials/{trialId}', {
+        params: { path: { id: axisId, trialId } },
+      })),
     onSuccess: (_: void, trialId: string) => {
       // Gone: nothing should ask for it again while the list catches up.
       qc.removeQueries({ queryKey: travelTrialQueryOptions(axisId, trialId).queryKey, exact: true });
-      return Promise.all([qc.invalidateQueries({ queryKey: driveKeys.all }), ...MACHINE_STATE_KEYS.map((queryKey) => qc.invalidateQueries({ queryKey }))]);
+      return Promise.all([
+        qc.invalidateQueries({ queryKey: driveKeys.all }),
+        ...MACHINE_STATE_KEYS.map((queryKey) => qc.invalidateQueries({ queryKey })),
+      ]);
     },
   });
 }

@@ -10,7 +10,10 @@ function filenameOf(res: Response): string {
 }
 
 /** Fetches the G-code as text and hands it to the browser as a file download. */
-async function downloadTestProgram(axisId: string, params: TestProgramParams): Promise<{ filename: string; text: string }> {
+async function downloadTestProgram(
+  axisId: string,
+  params: TestProgramParams,
+): Promise<{ filename: string; text: string }> {
   const query = new URLSearchParams();
   for (const [k, v] of Object.entries(params)) if (v !== undefined && v !== '') query.set(k, String(v));
   let res: Response;
@@ -42,4 +45,5 @@ async function downloadTestProgram(axisId: string, params: TestProgramParams): P
   return { filename, text };
 }
 
-export const useDownloadTestProgram = (axisId: string) => useMutation({ mutationFn: (params: TestProgramParams) => downloadTestProgram(axisId, params) });
+export const useDownloadTestProgram = (axisId: string) =>
+  useMutation({ mutationFn: (params: TestProgramParams) => downloadTestProgram(axisId, params) });

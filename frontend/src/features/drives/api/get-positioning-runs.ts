@@ -29,7 +29,10 @@ export const RUN_PAGE_SIZE = 50;
 export const positioningRunsQueryOptions = (axisId: string) =>
   infiniteQueryOptions({
     queryKey: driveKeys.runs(axisId),
-    queryFn: ({ pageParam }) => api.get<PositioningRunListItem[]>(`/axes/${axisId}/positioning-runs?limit=${RUN_PAGE_SIZE}${pageParam ? `&cursor=${pageParam}` : ''}`),
+    queryFn: ({ pageParam }) =>
+      api.get<PositioningRunListItem[]>(
+        `/axes/${axisId}/positioning-runs?limit=${RUN_PAGE_SIZE}${pageParam ? `&cursor=${pageParam}` : ''}`,
+      ),
     initialPageParam: '',
     getNextPageParam: (last) => (last.length === RUN_PAGE_SIZE ? last[last.length - 1].id : undefined),
     select: (data) => data.pages.flat(),

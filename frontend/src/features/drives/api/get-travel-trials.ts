@@ -15,7 +15,10 @@ export interface TravelTrialListItem {
   throughOrigin: boolean;
   moveCount: number;
   /** null when the stored result cannot be read (then `unreadable` says so). */
-  result: Pick<NonNullable<TravelTrial['result']>, 'correctedStepsPerMm' | 'errorPercent' | 'scale' | 'offset' | 'residualMax'> | null;
+  result: Pick<
+    NonNullable<TravelTrial['result']>,
+    'correctedStepsPerMm' | 'errorPercent' | 'scale' | 'offset' | 'residualMax'
+  > | null;
   unreadable?: string;
   status: TravelTrial['status'];
   target: TargetValue;
@@ -32,7 +35,10 @@ export const TRIAL_PAGE_SIZE = 50;
 export const travelTrialsQueryOptions = (axisId: string) =>
   infiniteQueryOptions({
     queryKey: driveKeys.trials(axisId),
-    queryFn: ({ pageParam }) => api.get<TravelTrialListItem[]>(`/axes/${axisId}/travel-trials?limit=${TRIAL_PAGE_SIZE}${pageParam ? `&cursor=${pageParam}` : ''}`),
+    queryFn: ({ pageParam }) =>
+      api.get<TravelTrialListItem[]>(
+        `/axes/${axisId}/travel-trials?limit=${TRIAL_PAGE_SIZE}${pageParam ? `&cursor=${pageParam}` : ''}`,
+      ),
     initialPageParam: '',
     getNextPageParam: (last) => (last.length === TRIAL_PAGE_SIZE ? last[last.length - 1].id : undefined),
     select: (data) => data.pages.flat(),

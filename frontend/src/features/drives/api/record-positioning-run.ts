@@ -12,7 +12,10 @@ export type PositioningRunInput = Schemas['CreatePositioningRunDto'];
 export function useRecordPositioningRun(axisId: string, axisName = '') {
   const qc = useQueryClient();
   const recording = useRecording<PositioningRun>();
-  const record = (input: PositioningRunInput, on: { onRecorded?: (r: PositioningRun) => void; onQueued?: () => void } = {}) =>
+  const record = (
+    input: PositioningRunInput,
+    on: { onRecorded?: (r: PositioningRun) => void; onQueued?: () => void } = {},
+  ) =>
     recording.record(
       {
         method: 'POST',

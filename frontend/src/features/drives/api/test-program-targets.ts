@@ -7,6 +7,9 @@ import { driveKeys } from '../types';
 export type TestTargets = Schemas['TestTargets'];
 
 export const testTargetsQueryOptions = (axisId: string) =>
-  queryOptions({ queryKey: [...driveKeys.axis(axisId), 'test-targets'] as const, queryFn: () => answer(client.GET('/api/axes/{id}/test-targets', { params: { path: { id: axisId } } })) });
+  queryOptions({
+    queryKey: [...driveKeys.axis(axisId), 'test-targets'] as const,
+    queryFn: () => answer(client.GET('/api/axes/{id}/test-targets', { params: { path: { id: axisId } } })),
+  });
 
 export const useTestTargets = (axisId: string) => useQuery(testTargetsQueryOptions(axisId));

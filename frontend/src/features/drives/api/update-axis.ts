@@ -10,7 +10,10 @@ export function useUpdateAxis(axisId: string) {
     mutationFn: (patch: Partial<AxisInput>) => api.patch<Axis>(`/axes/${axisId}`, patch),
     onSuccess: (axis) => {
       qc.setQueryData(driveKeys.axis(axisId), axis);
-      return Promise.all([qc.invalidateQueries({ queryKey: driveKeys.all }), ...MACHINE_STATE_KEYS.map((queryKey) => qc.invalidateQueries({ queryKey }))]);
+      return Promise.all([
+        qc.invalidateQueries({ queryKey: driveKeys.all }),
+        ...MACHINE_STATE_KEYS.map((queryKey) => qc.invalidateQueries({ queryKey })),
+      ]);
     },
   });
 }

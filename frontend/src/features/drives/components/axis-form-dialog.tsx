@@ -1,5 +1,17 @@
 import { useState } from 'react';
-import { Alert, Box, Button, Dialog, DialogActions, DialogContent, DialogTitle, Divider, Stack, TextField, Typography } from '@mui/material';
+import {
+  Alert,
+  Box,
+  Button,
+  Dialog,
+  DialogActions,
+  DialogContent,
+  DialogTitle,
+  Divider,
+  Stack,
+  TextField,
+  Typography,
+} from '@mui/material';
 import { useCreateAxis, type AxisInput } from '../api/create-axis';
 import { useUpdateAxis } from '../api/update-axis';
 import { useDrivePreview, type DrivePreviewInput } from '../api/preview-drive';
@@ -45,15 +57,31 @@ function draftOf(axis?: Axis) {
 
 /** Only the fields the drive type uses are sent. */
 function driveOf(d: DriveDraft): Drive {
-  const pick = (keys: (keyof DriveDraft)[]) => Object.fromEntries(keys.map((k) => [k, numberOf(d[k])]).filter(([, v]) => v !== undefined));
+  const pick = (keys: (keyof DriveDraft)[]) =>
+    Object.fromEntries(keys.map((k) => [k, numberOf(d[k])]).filter(([, v]) => v !== undefined));
   if (d.type === 'belt') return { type: 'belt', ...pick(['beltPitch', 'pulleyTeeth']) };
   if (d.type === 'rack') return { type: 'rack', ...pick(['pinionModule', 'pinionTeeth']) };
   const lead = d.leadAs === 'tpi' ? pick(['threadsPerInch']) : pick(['lead']);
-  return { type: 'screw', ...lead, ...pick(['nominalDiameter', 'rootDiameter', 'unsupportedLength', 'dnLimit']), ...(d.mounting ? { mounting: d.mounting } : {}) };
+  return {
+    type: 'screw',
+    ...lead,
+    ...pick(['nominalDiameter', 'rootDiameter', 'unsupportedLength', 'dnLimit']),
+    ...(d.mounting ? { mounting: d.mounting } : {}),
+  };
 }
 
 /** Adds an axis to a machine, or edits one. */
-export function AxisFormDialog({ machineId, axis, open, onClose }: { machineId: string; axis?: Axis; open: boolean; onClose: () => void }) {
+export function AxisFormDialog({
+  machineId,
+  axis,
+  open,
+  onClose,
+}: {
+  machineId: string;
+  axis?: Axis;
+  open: boolean;
+  onClose: () => void;
+}) {
   const [f, setF] = useState(() => draftOf(axis));
   // Opened (again) or given another axis: the form starts from that axis. Set while rendering, so
   // no render shows the previous draft.
@@ -72,7 +100,21 @@ export function AxisFormDialog({ machineId, axis, open, onClose }: { machineId: 
   const micro = numberOf(f.microsteps);
   const { type, lead, threadsPerInch, beltPitch, pulleyTeeth, pinionModule, pinionTeeth } = drive;
   const previewInput: DrivePreviewInput | null =
-    steps && micro ? { type, lengthUnit: f.lengthUnit, motorStepsPerRev: steps, microsteps: micro, gearRatio: numberOf(f.gearRatio), lead, threadsPerInch, beltPitch, pulleyTeeth, pinionModule, pinionTeeth } : null;
+    steps && micro
+      ? {
+          type,
+          lengthUnit: f.lengthUnit,
+          motorStepsPerRev: steps,
+          microsteps: micro,
+          gearRatio: numberOf(f.gearRatio),
+          lead,
+          threadsPerInch,
+          beltPitch,
+          pulleyTeeth,
+          pinionModule,
+          pinionTeeth,
+        }
+      : null;
   const u = UNIT_LABELS[f.lengthUnit];
   const inches = f.lengthUnit === 'in' || f.lengthUnit === 'thou';
   const debounced = useDebounced(previewInput, 250);
@@ -109,44 +151,105 @@ export function AxisFormDialog({ machineId, axis, open, onClose }: { machineId: 
       <DialogTitle>{axis ? `Edit axis ${axis.name}` : 'Add an axis'}</DialogTitle>
       <DialogContent>
         <Stack spacing={2.5} sx={{ pt: 1 }}>
-          {save.error && (
-            <Alert severity="error">{errorText(save.error)}</Alert>
-          )}
-          <TextField label="Axis name" value={f.name} onChange={(e) => set('name')(e.target.value)} required autoFocus helperText="X, Y1, Y2, Z… — one record per motor; the first letter is the G-code axis" sx={{ maxWidth: 360 }} />
+          {save.error && <Alert severity="error">{errorText(save.error)}</Alert>}
+          <TextField
+            label="Axis name"
+            value={f.name}
+            onChange={(e) => set('name')(e.target.value)}
+            required
+            autoFocus
+            helperText="X, Y1, Y2, Z… — one record per motor; the first letter is the G-code axis"
+            sx={{ maxWidth: 360 }}
+          />
           <Box sx={{ display: 'flex', gap: 2, alignItems: 'center', flexWrap: 'wrap' }}>
-            <UnitFamilySelect family="length" label="Axis set up in" value={f.lengthUnit} onChange={(lengthUnit) => setF((x) => ({ ...x, lengthUnit }))} units={['mm', 'in']} />
+            <UnitFamilySelect
+              family="length"
+              label="Axis set up in"
+              value={f.lengthUnit}
+              onChange={(lengthUnit) => setF((x) => ({ ...x, lengthUnit }))}
+              units={['mm', 'in']}
+            />
             <Typography variant="body2" color="text.secondary" sx={{ flex: '1 1 240px' }}>
-              Lead, diameters, lengths, travel and feed rates below are in {u}{inches ? '; the test programs run in G20 (inches)' : ''}.
+              Lead, diameters, lengths, travel and feed rates below are in {u}
+              {inches ? '; the test programs run in G20 (inches)' : ''}.
             </Typography>
           </Box>
           <DriveFields draft={f.drive} unit={f.lengthUnit} onChange={(drive) => setF((x) => ({ ...x, drive }))} />
           <Divider />
           <Box sx={grid}>
-            <NumberInput label="Motor steps per revolution" value={f.motorStepsPerRev} onChange={set('motorStepsPerRev')} required helperText="200 for a 1.8° motor, 400 for 0.9°" />
-            <NumberInput label="Microsteps" value={f.microsteps} onChange={set('microsteps')} required helperText="As set on the driver" />
-            <NumberInput label="Gear ratio" value={f.gearRatio} onChange={set('gearRatio')} helperText="Motor turns per screw, pulley or pinion turn" />
+            <NumberInput
+              label="Motor steps per revolution"
+              value={f.motorStepsPerRev}
+              onChange={set('motorStepsPerRev')}
+              required
+              helperText="200 for a 1.8° motor, 400 for 0.9°"
+            />
+            <NumberInput
+              label="Microsteps"
+              value={f.microsteps}
+              onChange={set('microsteps')}
+              required
+              helperText="As set on the driver"
+            />
+            <NumberInput
+              label="Gear ratio"
+              value={f.gearRatio}
+              onChange={set('gearRatio')}
+              helperText="Motor turns per screw, pulley or pinion turn"
+            />
           </Box>
           <Box sx={{ display: 'flex', gap: 2, alignItems: 'flex-start', flexWrap: 'wrap' }}>
-            <NumberInput label="Steps per mm in the controller" unit="steps/mm" value={f.stepsPerMm} onChange={set('stepsPerMm')} required sx={{ width: 300 }} />
+            <NumberInput
+              label="Steps per mm in the controller"
+              unit="steps/mm"
+              value={f.stepsPerMm}
+              onChange={set('stepsPerMm')}
+              required
+              sx={{ width: 300 }}
+            />
             <Box sx={{ pt: 0.5 }}>
               <Typography variant="body2" color="text.secondary">
                 Theoretical from the drive
               </Typography>
               <Typography sx={{ fontWeight: 600 }} data-testid="theoretical-steps">
-                {theoretical ? `${Number(theoretical.toFixed(4))} steps/mm${inches ? ` · ${Number((theoretical * 25.4).toFixed(3))} steps/in` : ''}` : '—'}
+                {theoretical
+                  ? `${Number(theoretical.toFixed(4))} steps/mm${inches ? ` · ${Number((theoretical * 25.4).toFixed(3))} steps/in` : ''}`
+                  : '—'}
               </Typography>
             </Box>
             {theoretical && (
-              <Button size="small" sx={{ mt: 1 }} onClick={() => set('stepsPerMm')(String(Number(theoretical.toFixed(4))))}>
+              <Button
+                size="small"
+                sx={{ mt: 1 }}
+                onClick={() => set('stepsPerMm')(String(Number(theoretical.toFixed(4))))}
+              >
                 Use the theoretical value
               </Button>
             )}
           </Box>
           <Box sx={grid}>
-            <NumberInput label="Fastest feed rate" unit={`${u}/min`} value={f.maxFeedRate} onChange={set('maxFeedRate')} helperText="The fastest it will be asked to move" />
-            <NumberInput label="Measured travel" unit={u} value={f.measuredTravel} onChange={set('measuredTravel')} helperText="End to end, limit switch to limit switch" />
+            <NumberInput
+              label="Fastest feed rate"
+              unit={`${u}/min`}
+              value={f.maxFeedRate}
+              onChange={set('maxFeedRate')}
+              helperText="The fastest it will be asked to move"
+            />
+            <NumberInput
+              label="Measured travel"
+              unit={u}
+              value={f.measuredTravel}
+              onChange={set('measuredTravel')}
+              helperText="End to end, limit switch to limit switch"
+            />
           </Box>
-          <TextField label="Notes" value={f.notes} onChange={(e) => set('notes')(e.target.value)} multiline minRows={2} />
+          <TextField
+            label="Notes"
+            value={f.notes}
+            onChange={(e) => set('notes')(e.target.value)}
+            multiline
+            minRows={2}
+          />
         </Stack>
       </DialogContent>
       <DialogActions>

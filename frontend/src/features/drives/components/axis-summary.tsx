@@ -26,10 +26,26 @@ export function AxisSummary({ axis }: { axis: Axis }) {
   return (
     <Paper sx={{ p: 2.5 }}>
       <Box sx={{ display: 'grid', gridTemplateColumns: { xs: '1fr 1fr', md: 'repeat(4, 1fr)' }, gap: 2 }}>
-        <Item label="Steps per mm in use" value={`${showSteps(axis.stepsPerMm)}${inches ? ` · ${showStepsPerInch(axis.stepsPerInch)}` : ''}`} sub={`${showPercent(axis.stepsPerMmDifferencePercent, 3)} from theoretical`} />
-        <Item label="Theoretical from the drive" value={`${showSteps(axis.theoreticalStepsPerMm)}${inches ? ` · ${showStepsPerInch(axis.theoreticalStepsPerInch)}` : ''}`} sub={`${Number(axis.travelPerRev.toFixed(inches ? 5 : 4))} ${u} per ${axis.drive.type === 'screw' ? 'screw' : axis.drive.type === 'belt' ? 'pulley' : 'pinion'} turn`} />
-        <Item label="Drive" value={axis.driveSummary} sub={`${axis.motorStepsPerRev} steps × ${axis.microsteps} microsteps${axis.gearRatio !== 1 ? ` × ${axis.gearRatio}:1` : ''}; ${showLength(axis.resolutionMm, 'um', 2)} per step`} />
-        <Item label="Fastest feed · travel" value={`${axis.maxFeedRate ? showFeed(axis.maxFeedRate, axis.lengthUnit) : 'feed not set'} · ${axis.measuredTravel ? `${axis.measuredTravel} ${u}` : 'travel not measured'}`} sub={`Set up in ${u}`} />
+        <Item
+          label="Steps per mm in use"
+          value={`${showSteps(axis.stepsPerMm)}${inches ? ` · ${showStepsPerInch(axis.stepsPerInch)}` : ''}`}
+          sub={`${showPercent(axis.stepsPerMmDifferencePercent, 3)} from theoretical`}
+        />
+        <Item
+          label="Theoretical from the drive"
+          value={`${showSteps(axis.theoreticalStepsPerMm)}${inches ? ` · ${showStepsPerInch(axis.theoreticalStepsPerInch)}` : ''}`}
+          sub={`${Number(axis.travelPerRev.toFixed(inches ? 5 : 4))} ${u} per ${axis.drive.type === 'screw' ? 'screw' : axis.drive.type === 'belt' ? 'pulley' : 'pinion'} turn`}
+        />
+        <Item
+          label="Drive"
+          value={axis.driveSummary}
+          sub={`${axis.motorStepsPerRev} steps × ${axis.microsteps} microsteps${axis.gearRatio !== 1 ? ` × ${axis.gearRatio}:1` : ''}; ${showLength(axis.resolutionMm, 'um', 2)} per step`}
+        />
+        <Item
+          label="Fastest feed · travel"
+          value={`${axis.maxFeedRate ? showFeed(axis.maxFeedRate, axis.lengthUnit) : 'feed not set'} · ${axis.measuredTravel ? `${axis.measuredTravel} ${u}` : 'travel not measured'}`}
+          sub={`Set up in ${u}`}
+        />
       </Box>
       {axis.notes && (
         <Typography color="text.secondary" sx={{ mt: 1.5 }}>

@@ -17,7 +17,9 @@ const APPROACH_CHOICES = [3, 4, 5, 6, 8, 10];
 function startPositions(axis: Axis, unit: LengthUnit): string[] {
   if (!axis.measuredTravelMm) return ['', '', ''];
   const step = unit === 'in' ? 0.1 : unit === 'thou' ? 100 : unit === 'um' ? 1000 : 1;
-  return [0.05, 0.5, 0.95].map((f) => String(+(Math.round(fromMm(axis.measuredTravelMm! * f, unit) / step) * step).toFixed(4)));
+  return [0.05, 0.5, 0.95].map((f) =>
+    String(+(Math.round(fromMm(axis.measuredTravelMm! * f, unit) / step) * step).toFixed(4)),
+  );
 }
 
 const axisUnit = (axis: Axis): LengthUnit => axis.lengthUnit ?? 'mm';
@@ -41,9 +43,17 @@ export function BacklashEntryGrid({ axis, onRecorded }: { axis: Axis; onRecorded
   const undo = useUndoRemove();
   const width = approaches * 2;
 
-  const setCell = (r: number, c: number, v: string) => setCells((old) => old.map((row, i) => (i === r ? row.map((x, j) => (j === c ? v.replace(',', '.') : x)) : row)));
+  const setCell = (r: number, c: number, v: string) =>
+    setCells((old) => old.map((row, i) => (i === r ? row.map((x, j) => (j === c ? v.replace(',', '.') : x)) : row)));
   // A side can narrow only down to its last typed reading: changing the count never drops one.
-  const typedWidth = Math.max(0, ...cells.flatMap((row) => [row.slice(0, row.length / 2), row.slice(row.length / 2)].map((side) => side.reduce((last, v, i) => (v.trim() !== '' ? i + 1 : last), 0))));
+  const typedWidth = Math.max(
+    0,
+    ...cells.flatMap((row) =>
+      [row.slice(0, row.length / 2), row.slice(row.length / 2)].map((side) =>
+        side.reduce((last, v, i) => (v.trim() !== '' ? i + 1 : last), 0),
+      ),
+    ),
+  );
   const changeApproaches = (n: number) => {
     if (n < typedWidth) return;
     setApproaches(n);
@@ -86,8 +96,19 @@ export function BacklashEntryGrid({ axis, onRecorded }: { axis: Axis; onRecorded
   };
 
   const rowWidth = (row: string[]) => row.length / 2;
-  const values = cells.map((row) => ({ up: row.slice(0, rowWidth(row)).filter((v) => v.trim() !== '').map(Number), down: row.slice(rowWidth(row)).filter((v) => v.trim() !== '').map(Number) }));
-  const complete = positions.every((p) => numberOf(p) !== undefined) && values.every((v) => v.up.length >= 3 && v.down.length >= 3 && [...v.up, ...v.down].every(Number.isFinite));
+  const values = cells.map((row) => ({
+    up: row
+      .slice(0, rowWidth(row))
+      .filter((v) => v.trim() !== '')
+      .map(Number),
+    down: row
+      .slice(rowWidth(row))
+      .filter((v) => v.trim() !== '')
+      .map(Number),
+  }));
+  const complete =
+    positions.every((p) => numberOf(p) !== undefined) &&
+    values.every((v) => v.up.length >= 3 && v.down.length >= 3 && [...v.up, ...v.down].every(Number.isFinite));
   const clear = () => {
     setCells((c) => c.map((row) => row.map(() => '')));
     setNotes('');
@@ -112,31 +133,55 @@ export function BacklashEntryGrid({ axis, onRecorded }: { axis: Axis; onRecorded
     <Paper variant="outlined" sx={{ p: 2 }}>
       <Stack spacing={2}>
         <Typography variant="body2" color="text.secondary">
-          Hold the indicator against the moving part. At each position bring the axis to the same coordinate {approaches} times moving up (from below) and {approaches} times moving down (from above),
-          reading the indicator each time. Read near both ends and in the middle of the travel. Keep clear of the gantry while it moves.
+          Hold the indicator against the moving part. At each position bring the axis to the same coordinate{' '}
+          {approaches} times moving up (from below) and {approaches} times moving down (from above), reading the
+          indicator each time. Read near both ends and in the middle of the travel. Keep clear of the gantry while it
+          moves.
         </Typography>
         <Box sx={{ display: 'flex', gap: 2, flexWrap: 'wrap', alignItems: 'center' }}>
           <UnitFamilySelect family="length" label="Positions in" value={lengthUnit} onChange={setLengthUnit} />
           <UnitFamilySelect family="reading" label="Readings in" value={readingUnit} onChange={setReadingUnit} />
-          <TextField select label="Approaches each way" value={approaches} onChange={(e) => changeApproaches(Number(e.target.value))} sx={{ minWidth: 170 }}>
+          <TextField
+            select
+            label="Approaches each way"
+            value={approaches}
+            onChange={(e) => changeApproaches(Number(e.target.value))}
+            sx={{ minWidth: 170 }}
+          >
             {APPROACH_CHOICES.map((n) => (
               <MenuItem key={n} value={n} disabled={n < typedWidth}>
                 {n}
               </MenuItem>
             ))}
           </TextField>
-          <TextField label="Indicator resolution" value={resolution} onChange={(e) => setResolution(e.target.value.replace(',', '.'))} helperText={`Smallest step it reads, ${ru} (optional)`} sx={{ maxWidth: 200 }} slotProps={{ htmlInput: { inputMode: 'decimal' } }} />
+          <TextField
+            label="Indicator resolution"
+            value={resolution}
+            onChange={(e) => setResolution(e.target.value.replace(',', '.'))}
+            helperText={`Smallest step it reads, ${ru} (optional)`}
+            sx={{ maxWidth: 200 }}
+            slotProps={{ htmlInput: { inputMode: 'decimal' } }}
+          />
         </Box>
         <Box sx={{ overflowX: 'auto' }}>
-          <Box component="table" ref={grid} sx={{ borderCollapse: 'collapse', '& th, & td': { px: 0.5, py: 0.25, textAlign: 'center' } }} aria-label="Backlash readings">
+          <Box
+            component="table"
+            ref={grid}
+            sx={{ borderCollapse: 'collapse', '& th, & td': { px: 0.5, py: 0.25, textAlign: 'center' } }}
+            aria-label="Backlash readings"
+          >
             <thead>
               <tr>
                 <th scope="col">Position ({lu})</th>
                 {Array.from({ length: approaches }, (_, i) => (
-                  <th scope="col" key={`u${i}`}>Up {i + 1} ({ru})</th>
+                  <th scope="col" key={`u${i}`}>
+                    Up {i + 1} ({ru})
+                  </th>
                 ))}
                 {Array.from({ length: approaches }, (_, i) => (
-                  <th scope="col" key={`d${i}`}>Down {i + 1} ({ru})</th>
+                  <th scope="col" key={`d${i}`}>
+                    Down {i + 1} ({ru})
+                  </th>
                 ))}
                 <th />
               </tr>
@@ -145,20 +190,54 @@ export function BacklashEntryGrid({ axis, onRecorded }: { axis: Axis; onRecorded
               {positions.map((p, r) => (
                 <tr key={r}>
                   <td>
-                    <TextField size="small" sx={cellSx} value={p} onChange={(e) => setPositions((old) => old.map((x, i) => (i === r ? e.target.value.replace(',', '.') : x)))} slotProps={{ htmlInput: { 'aria-label': `Position ${r + 1}`, 'data-backlash-cell': `${r}-0`, inputMode: 'decimal', onKeyDown: (e: KeyboardEvent<HTMLInputElement>) => onKey(e, r) } }} />
+                    <TextField
+                      size="small"
+                      sx={cellSx}
+                      value={p}
+                      onChange={(e) =>
+                        setPositions((old) => old.map((x, i) => (i === r ? e.target.value.replace(',', '.') : x)))
+                      }
+                      slotProps={{
+                        htmlInput: {
+                          'aria-label': `Position ${r + 1}`,
+                          'data-backlash-cell': `${r}-0`,
+                          inputMode: 'decimal',
+                          onKeyDown: (e: KeyboardEvent<HTMLInputElement>) => onKey(e, r),
+                        },
+                      }}
+                    />
                   </td>
                   {cells[r].map((v, c) => {
                     const side = c < rowWidth(cells[r]) ? 'Up' : 'Down';
                     const n = side === 'Up' ? c + 1 : c - rowWidth(cells[r]) + 1;
                     return (
                       <td key={c}>
-                        <TextField size="small" sx={cellSx} value={v} error={v.trim() !== '' && !Number.isFinite(Number(v))} onChange={(e) => setCell(r, c, e.target.value)} slotProps={{ htmlInput: { 'aria-label': `${side} ${n} at position ${r + 1}`, 'data-backlash-cell': `${r}-${c + 1}`, inputMode: 'decimal', onKeyDown: (e: KeyboardEvent<HTMLInputElement>) => onKey(e, r) } }} />
+                        <TextField
+                          size="small"
+                          sx={cellSx}
+                          value={v}
+                          error={v.trim() !== '' && !Number.isFinite(Number(v))}
+                          onChange={(e) => setCell(r, c, e.target.value)}
+                          slotProps={{
+                            htmlInput: {
+                              'aria-label': `${side} ${n} at position ${r + 1}`,
+                              'data-backlash-cell': `${r}-${c + 1}`,
+                              inputMode: 'decimal',
+                              onKeyDown: (e: KeyboardEvent<HTMLInputElement>) => onKey(e, r),
+                            },
+                          }}
+                        />
                       </td>
                     );
                   })}
                   <td>
                     {positions.length > 3 && (
-                      <Button size="small" {...removeButtonProps} onClick={() => removeRow(r)} aria-label={`Remove position ${r + 1}`}>
+                      <Button
+                        size="small"
+                        {...removeButtonProps}
+                        onClick={() => removeRow(r)}
+                        aria-label={`Remove position ${r + 1}`}
+                      >
                         Remove
                       </Button>
                     )}
@@ -173,8 +252,19 @@ export function BacklashEntryGrid({ axis, onRecorded }: { axis: Axis; onRecorded
             Add a position
           </Button>
         </Box>
-        <TextField label="Notes" value={notes} onChange={(e) => setNotes(e.target.value)} multiline minRows={1} slotProps={{ htmlInput: { maxLength: 2000 } }} />
-        {!complete && <Typography variant="body2" color="text.secondary">Fill every position and at least 3 readings each way on every row to record the check.</Typography>}
+        <TextField
+          label="Notes"
+          value={notes}
+          onChange={(e) => setNotes(e.target.value)}
+          multiline
+          minRows={1}
+          slotProps={{ htmlInput: { maxLength: 2000 } }}
+        />
+        {!complete && (
+          <Typography variant="body2" color="text.secondary">
+            Fill every position and at least 3 readings each way on every row to record the check.
+          </Typography>
+        )}
         {record.error && <Alert severity="error">{errorText(record.error)}</Alert>}
         <WaitingEntries path={backlashChecksPath(axis.id)} />
         <Box>

@@ -23,7 +23,10 @@ export function BacklashResult({ check, mayDelete }: { check: BacklashCheck; may
           <DriveStatusChip status={check.status} />
           {r ? (
             <Typography variant="h4" component="p">
-              Backlash {show(r.backlash)} <Typography component="span" color="text.secondary">({r.backlashMm.toFixed(4)} mm) largest, at {+r.worstPosition.toFixed(4)} {lu}</Typography>
+              Backlash {show(r.backlash)}{' '}
+              <Typography component="span" color="text.secondary">
+                ({r.backlashMm.toFixed(4)} mm) largest, at {+r.worstPosition.toFixed(4)} {lu}
+              </Typography>
             </Typography>
           ) : (
             <Alert severity="error">{check.unreadable}</Alert>
@@ -40,32 +43,32 @@ export function BacklashResult({ check, mayDelete }: { check: BacklashCheck; may
         ))}
         {r && (
           <ResponsiveTable titleFirst={false}>
-          <Table size="small" aria-label="Backlash at each position">
-            <TableHead>
-              <TableRow>
-                <TableCell>Position ({lu})</TableCell>
-                <TableCell align="right">Mean up ({ru})</TableCell>
-                <TableCell align="right">Mean down ({ru})</TableCell>
-                <TableCell align="right">Backlash ({ru})</TableCell>
-                <TableCell align="right">Approaches</TableCell>
-              </TableRow>
-            </TableHead>
-            <TableBody>
-              {r.positions.map((p) => (
-                <TableRow key={p.positionMm}>
-                  <TableCell>{+p.position.toFixed(4)}</TableCell>
-                  <TableCell align="right">{p.meanUp.toFixed(DIGITS[check.readingUnit])}</TableCell>
-                  <TableCell align="right">{p.meanDown.toFixed(DIGITS[check.readingUnit])}</TableCell>
-                  <TableCell align="right" sx={{ fontWeight: p.positionMm === r.worstPositionMm ? 700 : undefined }}>
-                    {p.backlash.toFixed(DIGITS[check.readingUnit])}
-                  </TableCell>
-                  <TableCell align="right">
-                    {p.approachesUp} up, {p.approachesDown} down
-                  </TableCell>
+            <Table size="small" aria-label="Backlash at each position">
+              <TableHead>
+                <TableRow>
+                  <TableCell>Position ({lu})</TableCell>
+                  <TableCell align="right">Mean up ({ru})</TableCell>
+                  <TableCell align="right">Mean down ({ru})</TableCell>
+                  <TableCell align="right">Backlash ({ru})</TableCell>
+                  <TableCell align="right">Approaches</TableCell>
                 </TableRow>
-              ))}
-            </TableBody>
-          </Table>
+              </TableHead>
+              <TableBody>
+                {r.positions.map((p) => (
+                  <TableRow key={p.positionMm}>
+                    <TableCell>{+p.position.toFixed(4)}</TableCell>
+                    <TableCell align="right">{p.meanUp.toFixed(DIGITS[check.readingUnit])}</TableCell>
+                    <TableCell align="right">{p.meanDown.toFixed(DIGITS[check.readingUnit])}</TableCell>
+                    <TableCell align="right" sx={{ fontWeight: p.positionMm === r.worstPositionMm ? 700 : undefined }}>
+                      {p.backlash.toFixed(DIGITS[check.readingUnit])}
+                    </TableCell>
+                    <TableCell align="right">
+                      {p.approachesUp} up, {p.approachesDown} down
+                    </TableCell>
+                  </TableRow>
+                ))}
+              </TableBody>
+            </Table>
           </ResponsiveTable>
         )}
         <Typography variant="body2" color="text.secondary">
@@ -76,7 +79,15 @@ export function BacklashResult({ check, mayDelete }: { check: BacklashCheck; may
           {check.resolution !== null ? ` · indicator resolution ${check.resolution} ${ru}` : ''}
           {check.notes ? ` · ${check.notes}` : ''}
         </Typography>
-        {mayDelete && <DeleteRecordButton what="backlash check" locked={check.locked} onDelete={() => remove.mutate(check.id)} pending={remove.isPending} error={remove.error} />}
+        {mayDelete && (
+          <DeleteRecordButton
+            what="backlash check"
+            locked={check.locked}
+            onDelete={() => remove.mutate(check.id)}
+            pending={remove.isPending}
+            error={remove.error}
+          />
+        )}
       </Stack>
     </Paper>
   );

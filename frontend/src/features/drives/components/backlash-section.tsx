@@ -20,16 +20,31 @@ export function BacklashSection({ axis, mayRecord }: { axis: Axis; mayRecord: bo
       <Typography variant="h3" component="h2" id="backlash-title">
         Backlash check
       </Typography>
-      {mayRecord && <Box data-print="hide"><BacklashEntryGrid axis={axis} onRecorded={(c) => setSelected(c.id)} /></Box>}
+      {mayRecord && (
+        <Box data-print="hide">
+          <BacklashEntryGrid axis={axis} onRecorded={(c) => setSelected(c.id)} />
+        </Box>
+      )}
       {checks.isPending && <LoadingState label="Loading backlash checks…" />}
       {checks.isError && <ErrorState error={checks.error} onRetry={() => checks.refetch()} />}
-      {checks.data && !shown && <EmptyState title="No backlash check yet">Read the indicator from both sides at both ends and the middle of the travel and enter the readings.</EmptyState>}
+      {checks.data && !shown && (
+        <EmptyState title="No backlash check yet">
+          Read the indicator from both sides at both ends and the middle of the travel and enter the readings.
+        </EmptyState>
+      )}
       {list.length > 1 && (
         <Box sx={{ display: 'flex', alignItems: 'center', gap: 1.5, flexWrap: 'wrap' }}>
-          <TextField select label="Showing the check of" value={shown?.id ?? ''} onChange={(e) => setSelected(e.target.value)} sx={{ minWidth: 280, maxWidth: 360 }}>
+          <TextField
+            select
+            label="Showing the check of"
+            value={shown?.id ?? ''}
+            onChange={(e) => setSelected(e.target.value)}
+            sx={{ minWidth: 280, maxWidth: 360 }}
+          >
             {list.map((c) => (
               <MenuItem key={c.id} value={c.id}>
-                {showDateTime(c.recordedAt)} — {c.unreadable ? 'result unreadable' : c.status === 'within-target' ? 'within target' : 'outside target'}
+                {showDateTime(c.recordedAt)} —{' '}
+                {c.unreadable ? 'result unreadable' : c.status === 'within-target' ? 'within target' : 'outside target'}
               </MenuItem>
             ))}
           </TextField>

@@ -10,11 +10,21 @@ export interface ConditionsDraft {
   instrumentResolution: string;
 }
 
-export const blankConditions = (): ConditionsDraft => ({ machineTemperature: '', scaleTemperature: '', scaleMaterial: 'steel', instrumentResolution: '' });
+export const blankConditions = (): ConditionsDraft => ({
+  machineTemperature: '',
+  scaleTemperature: '',
+  scaleMaterial: 'steel',
+  instrumentResolution: '',
+});
 
 /** The request fields of a draft: blanks are left out (no temperature, no reference to 20 °C). */
 export function conditionsOf(d: ConditionsDraft) {
-  const out: { machineTemperature?: number; scaleTemperature?: number; scaleMaterial?: ScaleMaterial; instrumentResolution?: number } = {};
+  const out: {
+    machineTemperature?: number;
+    scaleTemperature?: number;
+    scaleMaterial?: ScaleMaterial;
+    instrumentResolution?: number;
+  } = {};
   const m = numberOf(d.machineTemperature);
   const s = numberOf(d.scaleTemperature);
   const r = numberOf(d.instrumentResolution);
@@ -26,24 +36,53 @@ export function conditionsOf(d: ConditionsDraft) {
 }
 
 /** Temperatures of the machine and the scale, the scale's material and the instrument's resolution. */
-export function ConditionsFields({ draft, onChange, readingUnit }: { draft: ConditionsDraft; onChange: (d: ConditionsDraft) => void; readingUnit: LengthUnit }) {
+export function ConditionsFields({
+  draft,
+  onChange,
+  readingUnit,
+}: {
+  draft: ConditionsDraft;
+  onChange: (d: ConditionsDraft) => void;
+  readingUnit: LengthUnit;
+}) {
   const set = (k: keyof ConditionsDraft) => (v: string) => onChange({ ...draft, [k]: v });
   return (
     <Box>
       <Box sx={{ display: 'grid', gridTemplateColumns: { xs: '1fr', sm: '1fr 1fr' }, gap: 2 }}>
-        <NumberInput label="Machine temperature" unit="°C" value={draft.machineTemperature} onChange={set('machineTemperature')} />
-        <NumberInput label="Scale temperature" unit="°C" value={draft.scaleTemperature} onChange={set('scaleTemperature')} />
-        <TextField select label="Scale material" value={draft.scaleMaterial} onChange={(e) => onChange({ ...draft, scaleMaterial: e.target.value as ScaleMaterial })}>
+        <NumberInput
+          label="Machine temperature"
+          unit="°C"
+          value={draft.machineTemperature}
+          onChange={set('machineTemperature')}
+        />
+        <NumberInput
+          label="Scale temperature"
+          unit="°C"
+          value={draft.scaleTemperature}
+          onChange={set('scaleTemperature')}
+        />
+        <TextField
+          select
+          label="Scale material"
+          value={draft.scaleMaterial}
+          onChange={(e) => onChange({ ...draft, scaleMaterial: e.target.value as ScaleMaterial })}
+        >
           {(Object.keys(SCALE_MATERIAL_LABELS) as ScaleMaterial[]).map((m) => (
             <MenuItem key={m} value={m}>
               {SCALE_MATERIAL_LABELS[m]}
             </MenuItem>
           ))}
         </TextField>
-        <NumberInput label="Instrument resolution" unit={UNIT_LABELS[readingUnit]} value={draft.instrumentResolution} onChange={set('instrumentResolution')} />
+        <NumberInput
+          label="Instrument resolution"
+          unit={UNIT_LABELS[readingUnit]}
+          value={draft.instrumentResolution}
+          onChange={set('instrumentResolution')}
+        />
       </Box>
       <Typography variant="body2" color="text.secondary" sx={{ mt: 0.5 }}>
-        With both temperatures the result is referred to 20 °C (ΔL = α·L·ΔT, the machine taken as steel). Leave them blank to record without.
+        With both temperatures the result is referred to 20 °C (ΔL = α·L·ΔT, the machine taken as steel). Leave them
+        blank to record without.
       </Typography>
     </Box>
   );

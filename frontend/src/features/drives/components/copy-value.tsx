@@ -26,7 +26,11 @@ export function CopyValue({ value, unit, label }: { value: string; unit: string;
         <Typography variant="body2" color="text.secondary">
           {label}
         </Typography>
-        <Typography component="output" aria-label={label} sx={{ fontFamily: 'monospace', fontSize: '1.5rem', fontWeight: 600 }}>
+        <Typography
+          component="output"
+          aria-label={label}
+          sx={{ fontFamily: 'monospace', fontSize: '1.5rem', fontWeight: 600 }}
+        >
           {value}
         </Typography>{' '}
         <Typography component="span" color="text.secondary">

@@ -3,7 +3,19 @@ import { Alert, Box, Button, Typography } from '@mui/material';
 import { errorText } from '../utils/format';
 
 /** Delete with a second click to confirm; a locked record says why it stays. */
-export function DeleteRecordButton({ what, locked, onDelete, pending, error }: { what: string; locked: boolean; onDelete: () => void; pending: boolean; error: unknown }) {
+export function DeleteRecordButton({
+  what,
+  locked,
+  onDelete,
+  pending,
+  error,
+}: {
+  what: string;
+  locked: boolean;
+  onDelete: () => void;
+  pending: boolean;
+  error: unknown;
+}) {
   const [asking, setAsking] = useState(false);
   if (locked) {
     return (

@@ -23,7 +23,15 @@ export interface DriveDraft {
 const grid = { display: 'grid', gridTemplateColumns: { xs: '1fr', sm: '1fr 1fr' }, gap: 2 } as const;
 
 /** The drive's own fields, switched by its type; lengths in the axis's unit (the pinion module in mm). */
-export function DriveFields({ draft, onChange, unit }: { draft: DriveDraft; onChange: (d: DriveDraft) => void; unit: LengthUnit }) {
+export function DriveFields({
+  draft,
+  onChange,
+  unit,
+}: {
+  draft: DriveDraft;
+  onChange: (d: DriveDraft) => void;
+  unit: LengthUnit;
+}) {
   const set = (k: keyof DriveDraft) => (v: string) => onChange({ ...draft, [k]: v });
   const u = UNIT_LABELS[unit];
   return (
@@ -32,7 +40,13 @@ export function DriveFields({ draft, onChange, unit }: { draft: DriveDraft; onCh
         <Typography variant="body2" color="text.secondary" sx={{ mb: 0.5 }} id="drive-type-label">
           Drive
         </Typography>
-        <ToggleButtonGroup exclusive size="small" value={draft.type} onChange={(_, v) => v && onChange({ ...draft, type: v })} aria-labelledby="drive-type-label">
+        <ToggleButtonGroup
+          exclusive
+          size="small"
+          value={draft.type}
+          onChange={(_, v) => v && onChange({ ...draft, type: v })}
+          aria-labelledby="drive-type-label"
+        >
           {(Object.keys(DRIVE_LABELS) as DriveType[]).map((t) => (
             <ToggleButton key={t} value={t} sx={{ px: 2 }}>
               {DRIVE_LABELS[t]}
@@ -44,20 +58,62 @@ export function DriveFields({ draft, onChange, unit }: { draft: DriveDraft; onCh
         <>
           <Box sx={grid}>
             <Box sx={{ display: 'flex', gap: 1, alignItems: 'flex-start' }}>
-              <TextField select label="Lead given as" value={draft.leadAs} onChange={(e) => onChange({ ...draft, leadAs: e.target.value as DriveDraft['leadAs'] })} sx={{ minWidth: 150 }}>
+              <TextField
+                select
+                label="Lead given as"
+                value={draft.leadAs}
+                onChange={(e) => onChange({ ...draft, leadAs: e.target.value as DriveDraft['leadAs'] })}
+                sx={{ minWidth: 150 }}
+              >
                 <MenuItem value="length">Lead ({u})</MenuItem>
                 <MenuItem value="tpi">Threads per inch</MenuItem>
               </TextField>
               {draft.leadAs === 'tpi' ? (
-                <NumberInput label="Threads per inch" unit="TPI" required value={draft.threadsPerInch} onChange={set('threadsPerInch')} helperText="Single-start screw: lead = 1 ÷ TPI inch" />
+                <NumberInput
+                  label="Threads per inch"
+                  unit="TPI"
+                  required
+                  value={draft.threadsPerInch}
+                  onChange={set('threadsPerInch')}
+                  helperText="Single-start screw: lead = 1 ÷ TPI inch"
+                />
               ) : (
-                <NumberInput label="Lead" unit={u} required value={draft.lead} onChange={set('lead')} helperText="Pitch × starts: travel per screw turn" />
+                <NumberInput
+                  label="Lead"
+                  unit={u}
+                  required
+                  value={draft.lead}
+                  onChange={set('lead')}
+                  helperText="Pitch × starts: travel per screw turn"
+                />
               )}
             </Box>
-            <NumberInput label="Nominal diameter" unit={u} value={draft.nominalDiameter} onChange={set('nominalDiameter')} />
-            <NumberInput label="Root diameter" unit={u} value={draft.rootDiameter} onChange={set('rootDiameter')} helperText="Thread root (core); about 12.9 mm (0.51 in) on a rolled 16 × 5" />
-            <NumberInput label="Length between supports" unit={u} value={draft.unsupportedLength} onChange={set('unsupportedLength')} helperText="Unsupported length the screw can whirl over" />
-            <TextField select label="End mounting" value={draft.mounting} onChange={(e) => onChange({ ...draft, mounting: e.target.value as Mounting })}>
+            <NumberInput
+              label="Nominal diameter"
+              unit={u}
+              value={draft.nominalDiameter}
+              onChange={set('nominalDiameter')}
+            />
+            <NumberInput
+              label="Root diameter"
+              unit={u}
+              value={draft.rootDiameter}
+              onChange={set('rootDiameter')}
+              helperText="Thread root (core); about 12.9 mm (0.51 in) on a rolled 16 × 5"
+            />
+            <NumberInput
+              label="Length between supports"
+              unit={u}
+              value={draft.unsupportedLength}
+              onChange={set('unsupportedLength')}
+              helperText="Unsupported length the screw can whirl over"
+            />
+            <TextField
+              select
+              label="End mounting"
+              value={draft.mounting}
+              onChange={(e) => onChange({ ...draft, mounting: e.target.value as Mounting })}
+            >
               <MenuItem value="">
                 <em>Not known yet</em>
               </MenuItem>
@@ -67,7 +123,13 @@ export function DriveFields({ draft, onChange, unit }: { draft: DriveDraft; onCh
                 </MenuItem>
               ))}
             </TextField>
-            <NumberInput label="d·n limit of the nut" unit="mm·rpm" value={draft.dnLimit} onChange={set('dnLimit')} helperText="Blank: 70 000, usual for rolled screws" />
+            <NumberInput
+              label="d·n limit of the nut"
+              unit="mm·rpm"
+              value={draft.dnLimit}
+              onChange={set('dnLimit')}
+              helperText="Blank: 70 000, usual for rolled screws"
+            />
           </Box>
           <Typography variant="body2" color="text.secondary">
             Diameters, length and mounting are needed only for the speed check.
@@ -82,7 +144,14 @@ export function DriveFields({ draft, onChange, unit }: { draft: DriveDraft; onCh
       )}
       {draft.type === 'rack' && (
         <Box sx={grid}>
-          <NumberInput label="Pinion module" unit="mm" required value={draft.pinionModule} onChange={set('pinionModule')} helperText="Always in mm: one pinion turn moves π × module × teeth" />
+          <NumberInput
+            label="Pinion module"
+            unit="mm"
+            required
+            value={draft.pinionModule}
+            onChange={set('pinionModule')}
+            helperText="Always in mm: one pinion turn moves π × module × teeth"
+          />
           <NumberInput label="Pinion teeth" required value={draft.pinionTeeth} onChange={set('pinionTeeth')} />
         </Box>
       )}

@@ -17,7 +17,11 @@ export function DriveStatusChip({ status, size = 'small' }: { status: DriveStatu
       size={size}
       label={look.label}
       variant={filled ? 'filled' : 'outlined'}
-      sx={filled ? { bgcolor: look.color, color: '#fff', fontWeight: 600 } : { color: look.color, borderColor: look.color }}
+      sx={
+        filled
+          ? { bgcolor: look.color, color: '#fff', fontWeight: 600 }
+          : { color: look.color, borderColor: look.color }
+      }
     />
   );
 }

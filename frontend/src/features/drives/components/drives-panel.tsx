@@ -1,6 +1,18 @@
 import { useState } from 'react';
 import { Link as RouterLink } from 'react-router-dom';
-import { Box, Button, Link, Paper, Stack, Table, TableBody, TableCell, TableHead, TableRow, Typography } from '@mui/material';
+import {
+  Box,
+  Button,
+  Link,
+  Paper,
+  Stack,
+  Table,
+  TableBody,
+  TableCell,
+  TableHead,
+  TableRow,
+  Typography,
+} from '@mui/material';
 import AddOutlined from '@mui/icons-material/AddOutlined';
 import { paths } from '../../../config/paths';
 import { EmptyState } from '../../../components/states/empty-state';
@@ -62,13 +74,15 @@ export function DrivesPanel({ machineId }: { machineId: string }) {
     <Stack spacing={2}>
       <Box sx={{ display: 'flex', alignItems: 'center', gap: 2, flexWrap: 'wrap' }}>
         <Typography color="text.secondary" sx={{ flex: '1 1 320px' }}>
-          One record per motor: a gantry driven from both sides has Y1 and Y2. Open an axis to record travel trials, repeat-and-reverse runs and its speed check.
+          One record per motor: a gantry driven from both sides has Y1 and Y2. Open an axis to record travel trials,
+          repeat-and-reverse runs and its speed check.
         </Typography>
         {list.length > 0 && addButton}
       </Box>
       {list.length === 0 ? (
         <EmptyState title="No axes yet" action={addButton || undefined}>
-          Add each axis with its drive (screw, belt or rack and pinion), motor and driver settings and the steps per mm set in the controller.
+          Add each axis with its drive (screw, belt or rack and pinion), motor and driver settings and the steps per mm
+          set in the controller.
         </EmptyState>
       ) : (
         <ResponsiveTable component={Paper}>
@@ -91,13 +105,16 @@ export function DrivesPanel({ machineId }: { machineId: string }) {
                       {a.name}
                     </Link>
                     <Typography variant="body2" color="text.secondary" sx={{ whiteSpace: 'nowrap' }}>
-                      {a.measuredTravel ? `${a.measuredTravel} ${a.lengthUnit === 'um' ? 'µm' : a.lengthUnit} travel` : 'travel not measured'}
+                      {a.measuredTravel
+                        ? `${a.measuredTravel} ${a.lengthUnit === 'um' ? 'µm' : a.lengthUnit} travel`
+                        : 'travel not measured'}
                     </Typography>
                   </TableCell>
                   <TableCell sx={{ maxWidth: 260, minWidth: 160 }}>
                     {a.driveSummary}
                     <Typography variant="body2" color="text.secondary">
-                      {a.motorStepsPerRev} steps × {a.microsteps} microsteps{a.gearRatio !== 1 ? ` × ${a.gearRatio}:1` : ''}
+                      {a.motorStepsPerRev} steps × {a.microsteps} microsteps
+                      {a.gearRatio !== 1 ? ` × ${a.gearRatio}:1` : ''}
                     </Typography>
                   </TableCell>
                   <StepsCell a={a} />

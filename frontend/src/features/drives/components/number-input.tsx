@@ -19,11 +19,14 @@ export function NumberInput({ value, onChange, unit, slotProps, ...rest }: Props
       slotProps={{
         ...slotProps,
         htmlInput: { inputMode: 'decimal', ...(slotProps?.htmlInput as object) },
-        input: unit ? { endAdornment: <InputAdornment position="end">{unit}</InputAdornment>, ...(slotProps?.input as object) } : slotProps?.input,
+        input: unit
+          ? { endAdornment: <InputAdornment position="end">{unit}</InputAdornment>, ...(slotProps?.input as object) }
+          : slotProps?.input,
       }}
     />
   );
 }
 
 /** The number typed, or undefined when the field is blank or not a number. */
-export const numberOf = (v: string): number | undefined => (v.trim() === '' || !Number.isFinite(Number(v)) ? undefined : Number(v));
+export const numberOf = (v: string): number | undefined =>
+  v.trim() === '' || !Number.isFinite(Number(v)) ? undefined : Number(v);

@@ -44,7 +44,8 @@ export function PositioningGrid({ axis, onRecorded }: { axis: Axis; onRecorded: 
   // null: the server's targets, in the unit picked; a list once the person types, pastes or loads their own.
   const [typedTargets, setTypedTargets] = useState<string[] | null>(null);
   const targets = typedTargets ?? serverTargetsIn(serverTargets.data, lengthUnit);
-  const setTargets = (next: string[] | ((old: string[]) => string[])) => setTypedTargets((old) => (typeof next === 'function' ? next(old ?? targets) : next));
+  const setTargets = (next: string[] | ((old: string[]) => string[])) =>
+    setTypedTargets((old) => (typeof next === 'function' ? next(old ?? targets) : next));
   const [typedCells, setCells] = useState<string[][]>([]);
   const [notes, setNotes] = useState('');
   const [problems, setProblems] = useState<string[]>([]);
@@ -64,21 +65,31 @@ export function PositioningGrid({ axis, onRecorded }: { axis: Axis; onRecorded: 
     setCells((c) => resize(c, rows, n));
   };
 
-  const setCell = (r: number, c: number, v: string) => setCells((x) => resize(x, rows, cols).map((line, i) => (i === r ? line.map((old, j) => (j === c ? v : old)) : line)));
+  const setCell = (r: number, c: number, v: string) =>
+    setCells((x) =>
+      resize(x, rows, cols).map((line, i) => (i === r ? line.map((old, j) => (j === c ? v : old)) : line)),
+    );
   // An indicator's reading goes to the cell it was typed in, or else the first empty one along the rows (the Enter order).
   const indicator = useIndicatorInput({
     unit,
     place: (text, cell) => {
-      const empty = Array.from({ length: rows * cols }, (_, k) => [Math.floor(k / cols), k % cols]).find(([r, c]) => !cells[r]?.[c]?.trim());
+      const empty = Array.from({ length: rows * cols }, (_, k) => [Math.floor(k / cols), k % cols]).find(
+        ([r, c]) => !cells[r]?.[c]?.trim(),
+      );
       const [r, c] = cell ? cell.split('-').map(Number) : (empty ?? [-1, -1]);
       if (r < 0) return null;
       setCell(r, c, text);
       const { direction, run } = rowLabel(r, runs, order);
-      return { cell: `${r}-${c}`, label: `${direction} ${run}, target ${c + 1} at ${targets[c] || '?'} mm`, undo: () => setCell(r, c, '') };
+      return {
+        cell: `${r}-${c}`,
+        label: `${direction} ${run}, target ${c + 1} at ${targets[c] || '?'} mm`,
+        undo: () => setCell(r, c, ''),
+      };
     },
   });
 
-  const focusCell = (r: number, c: number) => setTimeout(() => document.querySelector<HTMLInputElement>(`[data-cell="${r}-${c}"]`)?.focus());
+  const focusCell = (r: number, c: number) =>
+    setTimeout(() => document.querySelector<HTMLInputElement>(`[data-cell="${r}-${c}"]`)?.focus());
   // Enter: the next row's first cell (from the targets row, the first run's); Shift+Enter the row before.
   // With "From an indicator" on, every reading ends in an Enter: it moves along the row, as the
   // readings are taken (target after target), and on to the next row after the last target.
@@ -137,15 +148,23 @@ export function PositioningGrid({ axis, onRecorded }: { axis: Axis; onRecorded: 
       for (let i = 0; i < runCount * 2; i++) {
         const { direction, run } = rowLabel(i, runCount, order);
         const src = (direction === 'up' ? ups : downs)[run - 1];
-        if (src) grid[i] = Array.from({ length: width }, (_, c) => (src.values[c] === null || src.values[c] === undefined ? '' : String(src.values[c])));
+        if (src)
+          grid[i] = Array.from({ length: width }, (_, c) =>
+            src.values[c] === null || src.values[c] === undefined ? '' : String(src.values[c]),
+          );
       }
-    } else parsed.rows.forEach((x, i) => (grid[i] = Array.from({ length: width }, (_, c) => (x.values[c] == null ? '' : String(x.values[c])))));
+    } else
+      parsed.rows.forEach(
+        (x, i) => (grid[i] = Array.from({ length: width }, (_, c) => (x.values[c] == null ? '' : String(x.values[c])))),
+      );
     setTargets(Array.from({ length: width }, (_, i) => t[i] ?? ''));
     setRuns(runCount);
     setCells(grid);
   };
 
-  const allNumbers = targets.every((t) => numberOf(t) !== undefined) && cells.every((row) => row.every((v) => numberOf(v) !== undefined));
+  const allNumbers =
+    targets.every((t) => numberOf(t) !== undefined) &&
+    cells.every((row) => row.every((v) => numberOf(v) !== undefined));
   const clear = () => {
     setCells([]);
     setNotes('');
@@ -178,62 +197,118 @@ export function PositioningGrid({ axis, onRecorded }: { axis: Axis; onRecorded: 
         Record a repeat-and-reverse run
       </Typography>
       <Typography color="text.secondary" sx={{ mb: 2 }}>
-        Approach every target {runs} times moving up and {runs} times moving down (ISO 230-2 asks for five each way) and enter the deviation, actual − target, read at each.
+        Approach every target {runs} times moving up and {runs} times moving down (ISO 230-2 asks for five each way) and
+        enter the deviation, actual − target, read at each.
       </Typography>
       <Stack spacing={2}>
         <Box sx={{ display: 'flex', gap: 2, flexWrap: 'wrap', alignItems: 'center' }}>
-          <UnitFamilySelect family="length" label="Targets in" value={lengthUnit} onChange={setLengthUnit} units={['mm', 'in']} />
+          <UnitFamilySelect
+            family="length"
+            label="Targets in"
+            value={lengthUnit}
+            onChange={setLengthUnit}
+            units={['mm', 'in']}
+          />
           <UnitFamilySelect family="reading" label="Deviations in" value={unit} onChange={setUnit} />
-          <TextField select label="Runs each way" value={runs} onChange={(e) => setRunCount(Number(e.target.value))} sx={{ width: 140 }}>
+          <TextField
+            select
+            label="Runs each way"
+            value={runs}
+            onChange={(e) => setRunCount(Number(e.target.value))}
+            sx={{ width: 140 }}
+          >
             {[2, 3, 4, 5, 6, 7, 8, 9, 10].map((n) => (
               <MenuItem key={n} value={n}>
                 {n}
               </MenuItem>
             ))}
           </TextField>
-          <TextField select label="Targets" value={cols} onChange={(e) => setColCount(Number(e.target.value))} sx={{ width: 110 }}>
+          <TextField
+            select
+            label="Targets"
+            value={cols}
+            onChange={(e) => setColCount(Number(e.target.value))}
+            sx={{ width: 110 }}
+          >
             {Array.from({ length: 20 }, (_, i) => i + 2).map((n) => (
               <MenuItem key={n} value={n}>
                 {n}
               </MenuItem>
             ))}
           </TextField>
-          <TextField select label="Row order" value={order} onChange={(e) => setOrder(e.target.value as RowOrder)} sx={{ width: 230 }}>
+          <TextField
+            select
+            label="Row order"
+            value={order}
+            onChange={(e) => setOrder(e.target.value as RowOrder)}
+            sx={{ width: 230 }}
+          >
             <MenuItem value="alternate">Up, down, up… (as run)</MenuItem>
             <MenuItem value="grouped">All up, then all down</MenuItem>
           </TextField>
           <Button startIcon={<UploadFileOutlined />} onClick={() => file.current?.click()}>
             Load a CSV file
           </Button>
-          <input ref={file} type="file" accept=".csv,.txt,text/csv,text/plain" hidden aria-label="CSV file of runs" onChange={(e) => onFile(e.target.files?.[0]).finally(() => (e.target.value = ''))} />
+          <input
+            ref={file}
+            type="file"
+            accept=".csv,.txt,text/csv,text/plain"
+            hidden
+            aria-label="CSV file of runs"
+            onChange={(e) => onFile(e.target.files?.[0]).finally(() => (e.target.value = ''))}
+          />
         </Box>
         <Typography variant="body2" color="text.secondary" data-testid="targets-source">
           {typedTargets
             ? 'Targets as typed: download the test program with the same targets.'
-            : serverTargets.data?.reason ?? (serverTargets.data ? 'Targets: the same list the downloaded test program moves to.' : 'Loading the targets of the test program…')}
+            : (serverTargets.data?.reason ??
+              (serverTargets.data
+                ? 'Targets: the same list the downloaded test program moves to.'
+                : 'Loading the targets of the test program…'))}
         </Typography>
         <IndicatorPanel indicator={indicator} />
         {problems.length > 0 && <Alert severity="error">{problems.join('; ')}</Alert>}
         {record.error && <Alert severity="error">{errorText(record.error)}</Alert>}
         <WaitingEntries path={positioningRunsPath(axis.id)} />
         <Box sx={{ overflowX: 'auto', pb: 1 }}>
-          <Box component="table" role="grid" aria-label="Repeat-and-reverse readings" sx={{ borderCollapse: 'collapse', '& th, & td': { p: 0.25 }, '& th': { fontWeight: 500, color: 'text.secondary', textAlign: 'left', whiteSpace: 'nowrap', pr: 1 } }}>
+          <Box
+            component="table"
+            role="grid"
+            aria-label="Repeat-and-reverse readings"
+            sx={{
+              borderCollapse: 'collapse',
+              '& th, & td': { p: 0.25 },
+              '& th': { fontWeight: 500, color: 'text.secondary', textAlign: 'left', whiteSpace: 'nowrap', pr: 1 },
+            }}
+          >
             <thead>
               <tr>
                 {/* The row names stay in view while a phone scrolls along the targets. */}
-                <Box component="th" scope="col" sx={{ position: 'sticky', left: 0, zIndex: 1, bgcolor: 'background.paper' }}>
+                <Box
+                  component="th"
+                  scope="col"
+                  sx={{ position: 'sticky', left: 0, zIndex: 1, bgcolor: 'background.paper' }}
+                >
                   Target ({UNIT_LABELS[lengthUnit]})
                 </Box>
                 {targets.map((t, c) => (
                   <th key={c} scope="col">
                     <TextField
                       value={t}
-                      onChange={(e) => setTargets((x) => x.map((v, i) => (i === c ? e.target.value.replace(',', '.') : v)))}
+                      onChange={(e) =>
+                        setTargets((x) => x.map((v, i) => (i === c ? e.target.value.replace(',', '.') : v)))
+                      }
                       onPaste={onPaste(-1, c)}
                       onKeyDown={onKeyDown(-1, c)}
                       error={t.trim() !== '' && numberOf(t) === undefined}
                       sx={{ ...cellSx, '& input': { ...cellSx['& input'], fontWeight: 600 } }}
-                      slotProps={{ htmlInput: { inputMode: 'decimal', 'data-cell': `-1-${c}`, 'aria-label': `Target ${c + 1} (${UNIT_LABELS[lengthUnit]})` } }}
+                      slotProps={{
+                        htmlInput: {
+                          inputMode: 'decimal',
+                          'data-cell': `-1-${c}`,
+                          'aria-label': `Target ${c + 1} (${UNIT_LABELS[lengthUnit]})`,
+                        },
+                      }}
                     />
                   </th>
                 ))}
@@ -244,7 +319,17 @@ export function PositioningGrid({ axis, onRecorded }: { axis: Axis; onRecorded: 
                 const { direction, run } = rowLabel(r, runs, order);
                 return (
                   <tr key={r}>
-                    <Box component="th" scope="row" sx={{ color: direction === 'up' ? '#1d4f4a' : '#a4522f', position: 'sticky', left: 0, zIndex: 1, bgcolor: 'background.paper' }}>
+                    <Box
+                      component="th"
+                      scope="row"
+                      sx={{
+                        color: direction === 'up' ? '#1d4f4a' : '#a4522f',
+                        position: 'sticky',
+                        left: 0,
+                        zIndex: 1,
+                        bgcolor: 'background.paper',
+                      }}
+                    >
                       {direction === 'up' ? '↑ Up' : '↓ Down'} {run} ({UNIT_LABELS[unit]})
                     </Box>
                     {row.map((v, c) => (
@@ -256,7 +341,14 @@ export function PositioningGrid({ axis, onRecorded }: { axis: Axis; onRecorded: 
                           onKeyDown={onKeyDown(r, c)}
                           error={v.trim() !== '' && numberOf(v) === undefined}
                           sx={cellSx}
-                          slotProps={{ htmlInput: { inputMode: 'decimal', 'data-cell': `${r}-${c}`, 'data-indicator-cell': `${r}-${c}`, 'aria-label': `${direction === 'up' ? 'Up' : 'Down'} ${run}, target ${c + 1}` } }}
+                          slotProps={{
+                            htmlInput: {
+                              inputMode: 'decimal',
+                              'data-cell': `${r}-${c}`,
+                              'data-indicator-cell': `${r}-${c}`,
+                              'aria-label': `${direction === 'up' ? 'Up' : 'Down'} ${run}, target ${c + 1}`,
+                            },
+                          }}
                         />
                       </td>
                     ))}
@@ -267,7 +359,9 @@ export function PositioningGrid({ axis, onRecorded }: { axis: Axis; onRecorded: 
           </Box>
         </Box>
         <Typography variant="body2" color="text.secondary">
-          Tab goes along a row and Enter to the next row's first cell (with “From an indicator” on, each reading moves on to the next target). Paste a block copied from a spreadsheet into the first cell; a CSV may start with a row of targets and each row with up or down.
+          Tab goes along a row and Enter to the next row's first cell (with “From an indicator” on, each reading moves
+          on to the next target). Paste a block copied from a spreadsheet into the first cell; a CSV may start with a
+          row of targets and each row with up or down.
         </Typography>
         <TextField label="Notes (instrument, temperature)" value={notes} onChange={(e) => setNotes(e.target.value)} />
         <Box sx={{ display: 'flex', gap: 2, alignItems: 'center', flexWrap: 'wrap' }}>

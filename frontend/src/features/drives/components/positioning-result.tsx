@@ -16,7 +16,9 @@ function Judged({ label, verdict, unit }: { label: string; verdict: Verdict; uni
       <Typography variant="body2" color="text.secondary">
         {label}
       </Typography>
-      <Typography sx={{ fontWeight: 600, color: verdict.pass ? 'success.main' : 'error.main' }}>{showLength(verdict.value, unit)}</Typography>
+      <Typography sx={{ fontWeight: 600, color: verdict.pass ? 'success.main' : 'error.main' }}>
+        {showLength(verdict.value, unit)}
+      </Typography>
       <Typography variant="body2" color="text.secondary">
         target ≤ {showTarget(verdict.target)} · {verdict.pass ? 'passes' : 'fails'}
       </Typography>
@@ -41,7 +43,13 @@ export function PositioningResult({ run, mayDelete }: { run: PositioningRun; may
         <UnreadableRecord message={run.unreadable ?? 'This run cannot be read.'} />
         {mayDelete && (
           <Box sx={{ mt: 1 }}>
-            <DeleteRecordButton what="run" locked={run.locked} onDelete={() => remove.mutate(run.id)} pending={remove.isPending} error={remove.error} />
+            <DeleteRecordButton
+              what="run"
+              locked={run.locked}
+              onDelete={() => remove.mutate(run.id)}
+              pending={remove.isPending}
+              error={remove.error}
+            />
           </Box>
         )}
       </Paper>
@@ -73,8 +81,17 @@ export function PositioningResult({ run, mayDelete }: { run: PositioningRun; may
       <PositioningChart
         label={`Mean deviations up and down with ±2s bands, ${ul}`}
         unitLabel={ul}
-        target={{ width: fromMm(checks.accuracy.targetMm, u), label: `Accuracy target ${showTarget(checks.accuracy.target)} wide` }}
-        targets={r.targets.map((t) => ({ target: t.target, meanUp: fromMm(t.meanUp, u), meanDown: fromMm(t.meanDown, u), sUp: fromMm(t.sUp, u), sDown: fromMm(t.sDown, u) }))}
+        target={{
+          width: fromMm(checks.accuracy.targetMm, u),
+          label: `Accuracy target ${showTarget(checks.accuracy.target)} wide`,
+        }}
+        targets={r.targets.map((t) => ({
+          target: t.target,
+          meanUp: fromMm(t.meanUp, u),
+          meanDown: fromMm(t.meanDown, u),
+          sUp: fromMm(t.sUp, u),
+          sDown: fromMm(t.sDown, u),
+        }))}
       />
       <Box sx={{ overflowX: 'auto', mt: 1 }}>
         <Table size="small" aria-label="Results per target">
@@ -106,12 +123,19 @@ export function PositioningResult({ run, mayDelete }: { run: PositioningRun; may
       </Box>
       <Typography variant="body2" color="text.secondary" sx={{ mt: 1 }}>
         {r.runsUp} runs up, {r.runsDown} down · recorded by {run.recordedBy}
-        {run.notes ? ` · ${run.notes}` : ''}. Accuracy, repeatability and reversal follow ISO 230-2 (±2s bands, 4s repeatability).
+        {run.notes ? ` · ${run.notes}` : ''}. Accuracy, repeatability and reversal follow ISO 230-2 (±2s bands, 4s
+        repeatability).
       </Typography>
       <ThermalNote record={run} />
       {mayDelete && (
         <Box sx={{ mt: 1 }}>
-          <DeleteRecordButton what="run" locked={run.locked} onDelete={() => remove.mutate(run.id)} pending={remove.isPending} error={remove.error} />
+          <DeleteRecordButton
+            what="run"
+            locked={run.locked}
+            onDelete={() => remove.mutate(run.id)}
+            pending={remove.isPending}
+            error={remove.error}
+          />
         </Box>
       )}
     </Paper>

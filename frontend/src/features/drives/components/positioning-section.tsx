@@ -10,7 +10,8 @@ import { showDateTime } from '../utils/format';
 import { PositioningGrid } from './positioning-grid';
 import { PositioningResult } from './positioning-result';
 
-const verdictWords = (status: 'within-target' | 'outside-target', unreadable?: string) => (unreadable ? 'result unreadable' : status === 'within-target' ? 'within target' : 'outside target');
+const verdictWords = (status: 'within-target' | 'outside-target', unreadable?: string) =>
+  unreadable ? 'result unreadable' : status === 'within-target' ? 'within target' : 'outside target';
 
 /** The list holds summaries; the run shown (the newest unless one is picked) is fetched in full for its chart. */
 export function PositioningSection({ axis, mayRecord }: { axis: Axis; mayRecord: boolean }) {
@@ -24,13 +25,27 @@ export function PositioningSection({ axis, mayRecord }: { axis: Axis; mayRecord:
       <Typography variant="h3" component="h2" id="runs-title">
         Repeat-and-reverse run
       </Typography>
-      {mayRecord && <Box data-print="hide"><PositioningGrid axis={axis} onRecorded={(r) => setSelected(r.id)} /></Box>}
+      {mayRecord && (
+        <Box data-print="hide">
+          <PositioningGrid axis={axis} onRecorded={(r) => setSelected(r.id)} />
+        </Box>
+      )}
       {runs.isPending && <LoadingState label="Loading runs…" />}
       {runs.isError && <ErrorState error={runs.error} onRetry={() => runs.refetch()} />}
-      {runs.data && !shownId && <EmptyState title="No repeat-and-reverse run yet">Download the test program, run it with an indicator on the axis and enter the readings.</EmptyState>}
+      {runs.data && !shownId && (
+        <EmptyState title="No repeat-and-reverse run yet">
+          Download the test program, run it with an indicator on the axis and enter the readings.
+        </EmptyState>
+      )}
       {list.length > 1 && (
         <Box sx={{ display: 'flex', alignItems: 'center', gap: 1.5, flexWrap: 'wrap' }}>
-          <TextField select label="Showing the run of" value={shownId ?? ''} onChange={(e) => setSelected(e.target.value)} sx={{ minWidth: 280, maxWidth: 360 }}>
+          <TextField
+            select
+            label="Showing the run of"
+            value={shownId ?? ''}
+            onChange={(e) => setSelected(e.target.value)}
+            sx={{ minWidth: 280, maxWidth: 360 }}
+          >
             {list.map((r) => (
               <MenuItem key={r.id} value={r.id}>
                 {showDateTime(r.recordedAt)} — {verdictWords(r.status, r.unreadable)}

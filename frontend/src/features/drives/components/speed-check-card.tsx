@@ -8,7 +8,16 @@ import { DriveStatusChip } from './drive-status-chip';
 
 function Row({ label, value, strong }: { label: string; value: string; strong?: boolean }) {
   return (
-    <Box sx={{ display: 'flex', justifyContent: 'space-between', gap: 2, py: 0.5, borderBottom: '1px solid', borderColor: 'divider' }}>
+    <Box
+      sx={{
+        display: 'flex',
+        justifyContent: 'space-between',
+        gap: 2,
+        py: 0.5,
+        borderBottom: '1px solid',
+        borderColor: 'divider',
+      }}
+    >
       <Typography color="text.secondary">{label}</Typography>
       <Typography sx={{ fontWeight: strong ? 700 : 500, textAlign: 'right', whiteSpace: 'nowrap' }}>{value}</Typography>
     </Box>
@@ -31,21 +40,41 @@ export function SpeedCheckCard({ axis }: { axis: Axis }) {
       {q.isPending && <LoadingState label="Working out screw speeds…" />}
       {q.isError && <ErrorState error={q.error} onRetry={() => q.refetch()} />}
       {q.data && !q.data.applicable && <Typography color="text.secondary">{q.data.reason}</Typography>}
-      {q.data && q.data.applicable && q.data.rpm === null && <Alert severity="info">{q.data.reason} Edit the axis to add them.</Alert>}
+      {q.data && q.data.applicable && q.data.rpm === null && (
+        <Alert severity="info">{q.data.reason} Edit the axis to add them.</Alert>
+      )}
       {q.data && q.data.rpm !== null && (
         <>
           <Typography color="text.secondary" sx={{ mb: 1 }}>
-            Lead {axis.drive.lead} {ul}, root Ø{axis.drive.rootDiameter} {ul}, {MOUNTING_LABELS[axis.drive.mounting!].toLowerCase()} over {axis.drive.unsupportedLength} {ul}, at {showFeed(q.data.feedRate, u)}.
+            Lead {axis.drive.lead} {ul}, root Ø{axis.drive.rootDiameter} {ul},{' '}
+            {MOUNTING_LABELS[axis.drive.mounting!].toLowerCase()} over {axis.drive.unsupportedLength} {ul}, at{' '}
+            {showFeed(q.data.feedRate, u)}.
           </Typography>
           <Row label="Screw speed at the fastest feed" value={showRpm(q.data.rpm)} strong />
           <Row label="Critical (whirling) speed" value={showRpm(q.data.criticalSpeed)} />
           <Row label="Permissible speed (0.8 × critical)" value={showRpm(q.data.permissibleSpeed)} />
-          <Row label={`d·n limit (${q.data.dnLimit?.toLocaleString('en-GB')} ÷ Ø${axis.driveMm.nominalDiameter} mm)`} value={showRpm(q.data.dnLimitSpeed)} />
-          <Row label={`Lower limit (${q.data.limitedBy === 'dn-limit' ? 'the d·n limit' : 'whirling'})`} value={showRpm(q.data.limitSpeed)} />
-          <Row label="Headroom below the lower limit" value={q.data.headroomPercent === null ? '—' : `${q.data.headroomPercent.toFixed(1)} % (target ≥ ${showTarget(q.data.headroom)})`} strong />
+          <Row
+            label={`d·n limit (${q.data.dnLimit?.toLocaleString('en-GB')} ÷ Ø${axis.driveMm.nominalDiameter} mm)`}
+            value={showRpm(q.data.dnLimitSpeed)}
+          />
+          <Row
+            label={`Lower limit (${q.data.limitedBy === 'dn-limit' ? 'the d·n limit' : 'whirling'})`}
+            value={showRpm(q.data.limitSpeed)}
+          />
+          <Row
+            label="Headroom below the lower limit"
+            value={
+              q.data.headroomPercent === null
+                ? '—'
+                : `${q.data.headroomPercent.toFixed(1)} % (target ≥ ${showTarget(q.data.headroom)})`
+            }
+            strong
+          />
           <Row label={`Allowed with ${showTarget(q.data.headroom)} headroom`} value={showRpm(q.data.allowedSpeed)} />
           <Row label="Highest safe feed rate" value={showFeed(q.data.safeFeedRate, u)} strong />
-          <Typography sx={{ mt: 1.5, fontWeight: 500, color: q.data.status === 'within-target' ? 'success.main' : 'error.main' }}>
+          <Typography
+            sx={{ mt: 1.5, fontWeight: 500, color: q.data.status === 'within-target' ? 'success.main' : 'error.main' }}
+          >
             {q.data.status === 'within-target'
               ? 'Within limits, with the headroom the target set asks for.'
               : q.data.withinLimits

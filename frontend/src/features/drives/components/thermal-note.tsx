@@ -6,7 +6,11 @@ import { SCALE_MATERIAL_LABELS } from '../types';
 export function ThermalNote({ record }: { record: RecordConditions }) {
   const t = record.thermal;
   if (record.machineTemperature === null && record.scaleTemperature === null) {
-    return <Typography variant="body2" color="text.secondary">No temperatures recorded: not referred to 20 °C.</Typography>;
+    return (
+      <Typography variant="body2" color="text.secondary">
+        No temperatures recorded: not referred to 20 °C.
+      </Typography>
+    );
   }
   const parts = [
     record.machineTemperature !== null ? `machine ${record.machineTemperature} °C` : null,
@@ -16,7 +20,9 @@ export function ThermalNote({ record }: { record: RecordConditions }) {
   return (
     <Typography variant="body2" color="text.secondary">
       {parts.join(', ')}
-      {t?.applied ? ` · referred to 20 °C with α = ${t.scaleAlphaUmPerMK} µm/m·K (scale) and ${t.machineAlphaUmPerMK} µm/m·K (machine, steel); ${t.source}` : ' · not referred to 20 °C (both temperatures are needed)'}
+      {t?.applied
+        ? ` · referred to 20 °C with α = ${t.scaleAlphaUmPerMK} µm/m·K (scale) and ${t.machineAlphaUmPerMK} µm/m·K (machine, steel); ${t.source}`
+        : ' · not referred to 20 °C (both temperatures are needed)'}
     </Typography>
   );
 }

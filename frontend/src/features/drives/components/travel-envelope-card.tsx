@@ -22,7 +22,8 @@ export function TravelEnvelopeCard({ machineId }: { machineId: string }) {
         <DriveStatusChip status={e.status} />
       </Box>
       <Typography color="text.secondary" sx={{ mb: 1.5 }}>
-        Work area {e.workArea.x} × {e.workArea.y} mm; each X and Y axis must travel it plus {showTarget(e.margin)} ({e.margin.source ?? 'target set'}). {e.summary}.
+        Work area {e.workArea.x} × {e.workArea.y} mm; each X and Y axis must travel it plus {showTarget(e.margin)} (
+        {e.margin.source ?? 'target set'}). {e.summary}.
       </Typography>
       {e.axes.length > 0 && (
         <Box sx={{ overflowX: 'auto' }}>

@@ -1,5 +1,21 @@
 import { useState } from 'react';
-import { Alert, Box, Button, Checkbox, FormControlLabel, IconButton, Paper, Stack, Table, TableBody, TableCell, TableHead, TableRow, TextField, Typography } from '@mui/material';
+import {
+  Alert,
+  Box,
+  Button,
+  Checkbox,
+  FormControlLabel,
+  IconButton,
+  Paper,
+  Stack,
+  Table,
+  TableBody,
+  TableCell,
+  TableHead,
+  TableRow,
+  TextField,
+  Typography,
+} from '@mui/material';
 import AddOutlined from '@mui/icons-material/AddOutlined';
 import DeleteOutline from '@mui/icons-material/DeleteOutlined';
 import { UNIT_LABELS, type LengthUnit } from '../../../lib/units';
@@ -48,8 +64,12 @@ export function TravelTrialEntry({ axis, onRecorded }: { axis: Axis; onRecorded:
 
   const filled = rows.filter((r) => r.commanded.trim() !== '' || r.measured.trim() !== '');
   const stepsOk = numberOf(steps) !== undefined && Number(steps) > 0;
-  const complete = stepsOk && filled.length > 0 && filled.every((r) => numberOf(r.commanded) !== undefined && numberOf(r.measured) !== undefined);
-  const setCell = (i: number, k: 'commanded' | 'measured', v: string) => setRows((rs) => rs.map((r, j) => (j === i ? { ...r, [k]: v } : r)));
+  const complete =
+    stepsOk &&
+    filled.length > 0 &&
+    filled.every((r) => numberOf(r.commanded) !== undefined && numberOf(r.measured) !== undefined);
+  const setCell = (i: number, k: 'commanded' | 'measured', v: string) =>
+    setRows((rs) => rs.map((r, j) => (j === i ? { ...r, [k]: v } : r)));
 
   const onPaste = (i: number, k: 'commanded' | 'measured') => (e: React.ClipboardEvent) => {
     const text = e.clipboardData.getData('text');
@@ -61,14 +81,18 @@ export function TravelTrialEntry({ axis, onRecorded }: { axis: Axis; onRecorded:
       block.forEach((cells, r) => {
         const at = i + r;
         while (next.length <= at) next.push(blankRow());
-        if (k === 'commanded') next[at] = { id: next[at].id, commanded: cells[0] ?? '', measured: cells[1] ?? next[at].measured };
+        if (k === 'commanded')
+          next[at] = { id: next[at].id, commanded: cells[0] ?? '', measured: cells[1] ?? next[at].measured };
         else next[at] = { ...next[at], measured: cells[0] ?? '' };
       });
       return next;
     });
   };
 
-  const focusRow = (i: number) => setTimeout(() => document.querySelector<HTMLInputElement>(`[data-trial-cell="${Math.max(0, i)}-commanded"]`)?.focus());
+  const focusRow = (i: number) =>
+    setTimeout(() =>
+      document.querySelector<HTMLInputElement>(`[data-trial-cell="${Math.max(0, i)}-commanded"]`)?.focus(),
+    );
   // Enter reads along a move and on to the next: the next move's first cell, a new move after the last.
   const onKeyDown = (i: number) => (e: React.KeyboardEvent) => {
     if (e.key !== 'Enter') return;
@@ -122,7 +146,8 @@ export function TravelTrialEntry({ axis, onRecorded }: { axis: Axis; onRecorded:
         Record a travel trial
       </Typography>
       <Typography color="text.secondary" sx={{ mb: 2 }}>
-        Command moves from a fixed start and measure each one (rule, tape, calipers or indicator), commanded and measured in the same unit. The longer the moves, the better the correction.
+        Command moves from a fixed start and measure each one (rule, tape, calipers or indicator), commanded and
+        measured in the same unit. The longer the moves, the better the correction.
       </Typography>
       <Stack spacing={2}>
         {record.error && <Alert severity="error">{errorText(record.error)}</Alert>}
@@ -130,8 +155,17 @@ export function TravelTrialEntry({ axis, onRecorded }: { axis: Axis; onRecorded:
         <Box sx={{ display: 'flex', gap: 2, flexWrap: 'wrap', alignItems: 'flex-start' }}>
           <UnitFamilySelect family="length" label="Moves in" value={unit} onChange={setUnit} units={['mm', 'in']} />
           <UnitFamilySelect family="reading" label="Errors shown in" value={readingUnit} onChange={setReadingUnit} />
-          <NumberInput label="Steps per mm while measured" unit="steps/mm" value={steps} onChange={setSteps} sx={{ width: 260 }} />
-          <FormControlLabel control={<Checkbox checked={throughOrigin} onChange={(e) => setThroughOrigin(e.target.checked)} />} label="Measured from a zeroed start (fit through zero)" />
+          <NumberInput
+            label="Steps per mm while measured"
+            unit="steps/mm"
+            value={steps}
+            onChange={setSteps}
+            sx={{ width: 260 }}
+          />
+          <FormControlLabel
+            control={<Checkbox checked={throughOrigin} onChange={(e) => setThroughOrigin(e.target.checked)} />}
+            label="Measured from a zeroed start (fit through zero)"
+          />
         </Box>
         <Box sx={{ overflowX: 'auto' }}>
           <Table size="small" aria-label="Travel trial moves" sx={{ maxWidth: 560 }}>
@@ -155,13 +189,24 @@ export function TravelTrialEntry({ axis, onRecorded }: { axis: Axis; onRecorded:
                         onPaste={onPaste(i, k)}
                         onKeyDown={onKeyDown(i)}
                         error={r[k].trim() !== '' && numberOf(r[k]) === undefined}
-                        slotProps={{ htmlInput: { inputMode: 'decimal', 'data-trial-cell': `${i}-${k}`, 'aria-label': `${k === 'commanded' ? 'Commanded' : 'Measured'} move ${i + 1}` } }}
+                        slotProps={{
+                          htmlInput: {
+                            inputMode: 'decimal',
+                            'data-trial-cell': `${i}-${k}`,
+                            'aria-label': `${k === 'commanded' ? 'Commanded' : 'Measured'} move ${i + 1}`,
+                          },
+                        }}
                         fullWidth
                       />
                     </TableCell>
                   ))}
                   <TableCell>
-                    <IconButton aria-label={`Remove move ${i + 1}`} size="small" {...removeButtonProps} onClick={() => remove(i)}>
+                    <IconButton
+                      aria-label={`Remove move ${i + 1}`}
+                      size="small"
+                      {...removeButtonProps}
+                      onClick={() => remove(i)}
+                    >
                       <DeleteOutline fontSize="small" />
                     </IconButton>
                   </TableCell>
@@ -175,11 +220,16 @@ export function TravelTrialEntry({ axis, onRecorded }: { axis: Axis; onRecorded:
             Add a move
           </Button>
           <Typography variant="body2" color="text.secondary" sx={{ alignSelf: 'center' }}>
-            Enter goes to the next move (a new one after the last); paste two columns from a spreadsheet into the first cell.
+            Enter goes to the next move (a new one after the last); paste two columns from a spreadsheet into the first
+            cell.
           </Typography>
         </Box>
         <ConditionsFields draft={conditions} onChange={setConditions} readingUnit={readingUnit} />
-        <TextField label="Notes (instrument, where it was read)" value={notes} onChange={(e) => setNotes(e.target.value)} />
+        <TextField
+          label="Notes (instrument, where it was read)"
+          value={notes}
+          onChange={(e) => setNotes(e.target.value)}
+        />
         <Box>
           <Button variant="contained" onClick={submit} disabled={!complete || record.busy}>
             Record trial

@@ -37,7 +37,13 @@ export function TravelTrialHistory({ trials, selectedId, onSelect, hasOlder, loa
         </TableHead>
         <TableBody>
           {trials.map((t) => (
-            <TableRow key={t.id} hover selected={t.id === selectedId} onClick={() => onSelect(t.id)} sx={{ cursor: 'pointer' }}>
+            <TableRow
+              key={t.id}
+              hover
+              selected={t.id === selectedId}
+              onClick={() => onSelect(t.id)}
+              sx={{ cursor: 'pointer' }}
+            >
               <TableCell>{showDateTime(t.recordedAt)}</TableCell>
               <TableCell align="right">{t.moveCount}</TableCell>
               {t.result ? (
@@ -54,7 +60,9 @@ export function TravelTrialHistory({ trials, selectedId, onSelect, hasOlder, loa
                 <DriveStatusChip status={t.status} />
               </TableCell>
               <TableCell>{t.appliedAt ? `Yes, by ${t.appliedBy}` : 'No'}</TableCell>
-              <TableCell title={t.warnings.map((w) => w.message).join('\n')}>{t.warnings.length ? `${t.warnings.length} warning${t.warnings.length === 1 ? '' : 's'}` : '—'}</TableCell>
+              <TableCell title={t.warnings.map((w) => w.message).join('\n')}>
+                {t.warnings.length ? `${t.warnings.length} warning${t.warnings.length === 1 ? '' : 's'}` : '—'}
+              </TableCell>
             </TableRow>
           ))}
         </TableBody>

@@ -1,5 +1,17 @@
 import { useState } from 'react';
-import { Alert, Box, Button, Dialog, DialogActions, DialogContent, DialogContentText, DialogTitle, Paper, Stack, Typography } from '@mui/material';
+import {
+  Alert,
+  Box,
+  Button,
+  Dialog,
+  DialogActions,
+  DialogContent,
+  DialogContentText,
+  DialogTitle,
+  Paper,
+  Stack,
+  Typography,
+} from '@mui/material';
 import { WarningList } from './warning-list';
 import { ThermalNote } from './thermal-note';
 import { TravelErrorChart } from '../../../components/charts/travel-error-chart';
@@ -12,7 +24,6 @@ import { errorText, showDateTime, showLength, showPercent, showTarget } from '..
 import { CopyValue } from './copy-value';
 import { UnreadableRecord } from '../../../components/unreadable-record';
 import { DriveStatusChip } from './drive-status-chip';
-
 
 function Figure({ label, value }: { label: string; value: string }) {
   return (
@@ -43,7 +54,13 @@ export function TravelTrialResult({ axis, trial, mayApply }: { axis: Axis; trial
         <UnreadableRecord message={trial.unreadable ?? 'This trial cannot be read.'} />
         {mayApply && (
           <Box sx={{ mt: 1 }}>
-            <DeleteRecordButton what="trial" locked={trial.locked} onDelete={() => remove.mutate(trial.id)} pending={remove.isPending} error={remove.error} />
+            <DeleteRecordButton
+              what="trial"
+              locked={trial.locked}
+              onDelete={() => remove.mutate(trial.id)}
+              pending={remove.isPending}
+              error={remove.error}
+            />
           </Box>
         )}
       </Paper>
@@ -71,21 +88,32 @@ export function TravelTrialResult({ axis, trial, mayApply }: { axis: Axis; trial
       </Box>
       <Stack spacing={1.5} sx={{ mb: 2 }}>
         <CopyValue label="Corrected steps per mm" value={corrected} unit="steps/mm" />
-        {inches && <Typography variant="body2">= {Number((r.correctedStepsPerMm * 25.4).toFixed(3))} steps/in (× 25.4)</Typography>}
+        {inches && (
+          <Typography variant="body2">
+            = {Number((r.correctedStepsPerMm * 25.4).toFixed(3))} steps/in (× 25.4)
+          </Typography>
+        )}
         {r.theoryDifferencePercent !== null && (
           <Typography variant="body2" color={r.farFromTheory ? 'warning.main' : 'text.secondary'}>
-            {showPercent(r.theoryDifferencePercent)} from the drive's theoretical {Number(axis.theoreticalStepsPerMm.toFixed(4))} steps/mm
+            {showPercent(r.theoryDifferencePercent)} from the drive's theoretical{' '}
+            {Number(axis.theoreticalStepsPerMm.toFixed(4))} steps/mm
           </Typography>
         )}
         {trial.appliedAt ? (
           <Alert severity="success">
-            Applied on {showDateTime(trial.appliedAt)} by {trial.appliedBy}. Set {corrected} steps/mm in the controller, then record a confirming trial.
+            Applied on {showDateTime(trial.appliedAt)} by {trial.appliedBy}. Set {corrected} steps/mm in the controller,
+            then record a confirming trial.
           </Alert>
         ) : (
           mayApply &&
           differs && (
             <Box sx={{ display: 'flex', gap: 1.5, alignItems: 'center', flexWrap: 'wrap' }}>
-              <Button variant="contained" color={r.farFromTheory ? 'warning' : 'primary'} onClick={applyNow} disabled={apply.isPending}>
+              <Button
+                variant="contained"
+                color={r.farFromTheory ? 'warning' : 'primary'}
+                onClick={applyNow}
+                disabled={apply.isPending}
+              >
                 Apply {corrected} steps/mm to axis {axis.name}
               </Button>
               <Typography variant="body2" color="text.secondary">
@@ -100,7 +128,11 @@ export function TravelTrialResult({ axis, trial, mayApply }: { axis: Axis; trial
         <DialogTitle id="far-correction-title">Apply a correction far from the theoretical value?</DialogTitle>
         <DialogContent>
           <DialogContentText>
-            {corrected} steps/mm is {r.theoryDifferencePercent !== null ? showPercent(r.theoryDifferencePercent) : 'far'} from the {Number(axis.theoreticalStepsPerMm.toFixed(4))} steps/mm the drive gives. A difference this large usually means the screw's pitch was taken for its lead, the pulley has other teeth, the driver's microsteps differ from the setting, or the moves were not all typed in the same unit. Check those first.
+            {corrected} steps/mm is{' '}
+            {r.theoryDifferencePercent !== null ? showPercent(r.theoryDifferencePercent) : 'far'} from the{' '}
+            {Number(axis.theoreticalStepsPerMm.toFixed(4))} steps/mm the drive gives. A difference this large usually
+            means the screw's pitch was taken for its lead, the pulley has other teeth, the driver's microsteps differ
+            from the setting, or the moves were not all typed in the same unit. Check those first.
           </DialogContentText>
         </DialogContent>
         <DialogActions>
@@ -110,7 +142,9 @@ export function TravelTrialResult({ axis, trial, mayApply }: { axis: Axis; trial
           <Button
             color="warning"
             variant="contained"
-            onClick={() => apply.mutate({ trialId: trial.id, confirmFarCorrection: true }, { onSettled: () => setConfirming(false) })}
+            onClick={() =>
+              apply.mutate({ trialId: trial.id, confirmFarCorrection: true }, { onSettled: () => setConfirming(false) })
+            }
             disabled={apply.isPending}
           >
             Apply anyway
@@ -125,14 +159,21 @@ export function TravelTrialResult({ axis, trial, mayApply }: { axis: Axis; trial
         height={260}
       />
       <Typography variant="body2" color="text.secondary" sx={{ mt: 1 }}>
-        {trial.moves.length} move{trial.moves.length === 1 ? '' : 's'} commanded and measured in {UNIT_LABELS[lengthUnit]}
+        {trial.moves.length} move{trial.moves.length === 1 ? '' : 's'} commanded and measured in{' '}
+        {UNIT_LABELS[lengthUnit]}
         {trial.throughOrigin ? ', fitted through zero' : ''} · recorded by {trial.recordedBy}
         {trial.notes ? ` · ${trial.notes}` : ''}
       </Typography>
       <ThermalNote record={trial} />
       {mayApply && (
         <Box sx={{ mt: 1 }}>
-          <DeleteRecordButton what="trial" locked={trial.locked} onDelete={() => remove.mutate(trial.id)} pending={remove.isPending} error={remove.error} />
+          <DeleteRecordButton
+            what="trial"
+            locked={trial.locked}
+            onDelete={() => remove.mutate(trial.id)}
+            pending={remove.isPending}
+            error={remove.error}
+          />
         </Box>
       )}
     </Paper>

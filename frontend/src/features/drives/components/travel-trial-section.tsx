@@ -22,10 +22,18 @@ export function TravelTrialSection({ axis, mayRecord }: { axis: Axis; mayRecord:
       <Typography variant="h3" component="h2" id="trial-title">
         Travel trial
       </Typography>
-      {mayRecord && <Box data-print="hide"><TravelTrialEntry axis={axis} onRecorded={(t) => setSelected(t.id)} /></Box>}
+      {mayRecord && (
+        <Box data-print="hide">
+          <TravelTrialEntry axis={axis} onRecorded={(t) => setSelected(t.id)} />
+        </Box>
+      )}
       {trials.isPending && <LoadingState label="Loading travel trials…" />}
       {trials.isError && <ErrorState error={trials.error} onRetry={() => trials.refetch()} />}
-      {trials.data && !shownId && <EmptyState title="No travel trial yet">Record commanded and measured moves to check and correct the steps per mm.</EmptyState>}
+      {trials.data && !shownId && (
+        <EmptyState title="No travel trial yet">
+          Record commanded and measured moves to check and correct the steps per mm.
+        </EmptyState>
+      )}
       {shownId && shown.isPending && <LoadingState label="Loading the trial…" />}
       {shownId && shown.isError && <ErrorState error={shown.error} onRetry={() => shown.refetch()} />}
       {shown.data && <TravelTrialResult axis={axis} trial={shown.data} mayApply={mayRecord} />}

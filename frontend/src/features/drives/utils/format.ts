@@ -30,7 +30,13 @@ export const showPercent = (v: number, digits = 3) => `${v >= 0 ? '+' : ''}${v.t
 export { formatDate as showDate } from '../../../lib/format-time';
 
 export const showDateTime = (iso: string) =>
-  new Date(iso).toLocaleString('en-GB', { day: 'numeric', month: 'short', year: 'numeric', hour: '2-digit', minute: '2-digit' });
+  new Date(iso).toLocaleString('en-GB', {
+    day: 'numeric',
+    month: 'short',
+    year: 'numeric',
+    hour: '2-digit',
+    minute: '2-digit',
+  });
 
 /** Every message of a refused request (the server names each field at fault). */
 export function errorText(e: unknown): string {

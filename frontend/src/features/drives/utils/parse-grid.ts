@@ -31,7 +31,10 @@ export function parseRunsCsv(text: string): GridImport {
     if (/^(targets?|positions?|direction|run)/i.test(first) && targets === null) {
       const t = cells.slice(1).map(parseNumberCell);
       const bad = t.findIndex((v) => !v.ok);
-      if (bad >= 0) problems.push(`${cellProblem(row, bad + 1, (t[bad] as { reason: string }).reason)}: the targets must be numbers of mm`);
+      if (bad >= 0)
+        problems.push(
+          `${cellProblem(row, bad + 1, (t[bad] as { reason: string }).reason)}: the targets must be numbers of mm`,
+        );
       else targets = t.flatMap((v) => (v.ok && v.value !== null ? [v.value] : []));
       return;
     }

@@ -8,4 +8,5 @@ export const subjectEvidenceQueryOptions = (subjectType: string, subjectId: stri
     queryFn: () => answer(client.GET('/api/evidence', { params: { query: { subjectType, subjectId } } })),
   });
 
-export const useSubjectEvidence = (subjectType: string, subjectId: string) => useQuery(subjectEvidenceQueryOptions(subjectType, subjectId));
+export const useSubjectEvidence = (subjectType: string, subjectId: string) =>
+  useQuery(subjectEvidenceQueryOptions(subjectType, subjectId));

@@ -14,7 +14,8 @@ export function DeleteEvidenceDialog({ item, onClose }: { item: Evidence | null;
       <DialogTitle id="delete-evidence-title">Delete {item?.fileName}?</DialogTitle>
       <DialogContent>
         <DialogContentText>
-          It is removed from {item?.subject.label} for everyone in the workshop. The history keeps a line saying who deleted it.
+          It is removed from {item?.subject.label} for everyone in the workshop. The history keeps a line saying who
+          deleted it.
         </DialogContentText>
         {remove.error && (
           <Alert severity="error" sx={{ mt: 2 }}>
@@ -24,7 +25,12 @@ export function DeleteEvidenceDialog({ item, onClose }: { item: Evidence | null;
       </DialogContent>
       <DialogActions>
         <Button onClick={close}>Keep it</Button>
-        <Button color="error" variant="contained" disabled={remove.isPending} onClick={() => item && remove.mutate(item.id, { onSuccess: close })}>
+        <Button
+          color="error"
+          variant="contained"
+          disabled={remove.isPending}
+          onClick={() => item && remove.mutate(item.id, { onSuccess: close })}
+        >
           Delete
         </Button>
       </DialogActions>

@@ -1,5 +1,16 @@
 import { useState } from 'react';
-import { Box, ButtonBase, IconButton, Link, List, ListItem, ListItemIcon, ListItemText, Tooltip, Typography } from '@mui/material';
+import {
+  Box,
+  ButtonBase,
+  IconButton,
+  Link,
+  List,
+  ListItem,
+  ListItemIcon,
+  ListItemText,
+  Tooltip,
+  Typography,
+} from '@mui/material';
 import DeleteOutline from '@mui/icons-material/DeleteOutlined';
 import DescriptionOutlined from '@mui/icons-material/DescriptionOutlined';
 import LockOutlined from '@mui/icons-material/LockOutlined';
@@ -23,10 +34,35 @@ export function EvidenceGallery({ items, label = 'Evidence' }: { items: Evidence
   return (
     <Box>
       {photos.length > 0 && (
-        <Box component="ul" aria-label={`Photos: ${label}`} sx={{ listStyle: 'none', p: 0, m: 0, display: 'grid', gap: 1.5, gridTemplateColumns: 'repeat(auto-fill, minmax(170px, 1fr))' }}>
+        <Box
+          component="ul"
+          aria-label={`Photos: ${label}`}
+          sx={{
+            listStyle: 'none',
+            p: 0,
+            m: 0,
+            display: 'grid',
+            gap: 1.5,
+            gridTemplateColumns: 'repeat(auto-fill, minmax(170px, 1fr))',
+          }}
+        >
           {photos.map((p, index) => (
-            <Box component="li" key={p.id} sx={{ border: 1, borderColor: 'divider', borderRadius: 1, overflow: 'hidden', bgcolor: 'background.paper' }}>
-              <ButtonBase onClick={() => setViewing(index)} aria-label={`View ${p.fileName} full size`} sx={{ display: 'block', width: '100%' }}>
+            <Box
+              component="li"
+              key={p.id}
+              sx={{
+                border: 1,
+                borderColor: 'divider',
+                borderRadius: 1,
+                overflow: 'hidden',
+                bgcolor: 'background.paper',
+              }}
+            >
+              <ButtonBase
+                onClick={() => setViewing(index)}
+                aria-label={`View ${p.fileName} full size`}
+                sx={{ display: 'block', width: '100%' }}
+              >
                 <Box
                   component="img"
                   src={p.thumbnailUrl ?? p.contentUrl}
@@ -37,7 +73,18 @@ export function EvidenceGallery({ items, label = 'Evidence' }: { items: Evidence
               </ButtonBase>
               <Box sx={{ px: 1, py: 0.75, display: 'flex', alignItems: 'flex-start', gap: 0.5 }}>
                 <Box sx={{ flex: 1, minWidth: 0 }}>
-                  <Typography variant="body2" title={p.fileName} sx={{ fontWeight: 500, display: '-webkit-box', WebkitLineClamp: 2, WebkitBoxOrient: 'vertical', overflow: 'hidden', overflowWrap: 'anywhere' }}>
+                  <Typography
+                    variant="body2"
+                    title={p.fileName}
+                    sx={{
+                      fontWeight: 500,
+                      display: '-webkit-box',
+                      WebkitLineClamp: 2,
+                      WebkitBoxOrient: 'vertical',
+                      overflow: 'hidden',
+                      overflowWrap: 'anywhere',
+                    }}
+                  >
                     {p.caption || p.fileName}
                   </Typography>
                   <Typography variant="caption" color="text.secondary" noWrap component="p">
@@ -62,10 +109,24 @@ export function EvidenceGallery({ items, label = 'Evidence' }: { items: Evidence
         <List dense aria-label={`Files: ${label}`} sx={{ mt: photos.length ? 1 : 0 }}>
           {files.map((f) => (
             <ListItem key={f.id} divider secondaryAction={<ItemActions item={f} onDelete={setDeleting} />}>
-              <ListItemIcon sx={{ minWidth: 36 }}>{f.contentType === 'application/pdf' ? <PictureAsPdfOutlined /> : <DescriptionOutlined />}</ListItemIcon>
+              <ListItemIcon sx={{ minWidth: 36 }}>
+                {f.contentType === 'application/pdf' ? <PictureAsPdfOutlined /> : <DescriptionOutlined />}
+              </ListItemIcon>
               <ListItemText
                 primary={
-                  <Link href={f.contentUrl} download={f.fileName} underline="hover" sx={{ display: 'inline-block', maxWidth: '100%', overflow: 'hidden', textOverflow: 'ellipsis', verticalAlign: 'top', lineHeight: { xs: '44px', md: 'inherit' } }}>
+                  <Link
+                    href={f.contentUrl}
+                    download={f.fileName}
+                    underline="hover"
+                    sx={{
+                      display: 'inline-block',
+                      maxWidth: '100%',
+                      overflow: 'hidden',
+                      textOverflow: 'ellipsis',
+                      verticalAlign: 'top',
+                      lineHeight: { xs: '44px', md: 'inherit' },
+                    }}
+                  >
                     {f.fileName}
                   </Link>
                 }

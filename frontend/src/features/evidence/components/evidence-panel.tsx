@@ -27,7 +27,9 @@ export function EvidencePanel({ subjectType, subjectId, title = 'Photos and file
       </Typography>
       {canRecord(me.data?.role) && (
         <Box sx={{ mb: 2 }}>
-          <Box data-print="hide"><EvidenceUploader subject={subject} what={what} /></Box>
+          <Box data-print="hide">
+            <EvidenceUploader subject={subject} what={what} />
+          </Box>
         </Box>
       )}
       {list.isPending ? (

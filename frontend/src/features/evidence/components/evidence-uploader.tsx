@@ -54,7 +54,8 @@ export function EvidenceUploader({ subject, what }: { subject: EvidenceSubject; 
         <Box sx={{ flex: '1 1 260px', minWidth: 0 }}>
           <Typography sx={{ fontWeight: 500 }}>Drop photos or files here</Typography>
           <Typography variant="body2" color="text.secondary">
-            {types}{max}. Several at once is fine.
+            {types}
+            {max}. Several at once is fine.
           </Typography>
         </Box>
         <TextField
@@ -97,7 +98,12 @@ export function EvidenceUploader({ subject, what }: { subject: EvidenceSubject; 
           }}
         />
       </Paper>
-      <UploadList items={queue.items} onCancel={queue.cancel} onDismiss={queue.dismiss} onClearFinished={queue.clearFinished} />
+      <UploadList
+        items={queue.items}
+        onCancel={queue.cancel}
+        onDismiss={queue.dismiss}
+        onClearFinished={queue.clearFinished}
+      />
     </Box>
   );
 }

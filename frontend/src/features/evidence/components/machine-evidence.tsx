@@ -31,7 +31,8 @@ export function MachineEvidence({ machineId }: { machineId: string }) {
             Attach to this machine
           </Typography>
           <Typography variant="body2" color="text.secondary" sx={{ mb: 1.5 }}>
-            Photos of the frame, the set-up or the nameplate; drawings and datasheets as PDF; readings as CSV. Photos of a single check go on that check.
+            Photos of the frame, the set-up or the nameplate; drawings and datasheets as PDF; readings as CSV. Photos of
+            a single check go on that check.
           </Typography>
           <EvidenceUploader subject={{ subjectType: 'machine', subjectId: machineId }} what="this machine" />
         </Paper>
@@ -42,7 +43,9 @@ export function MachineEvidence({ machineId }: { machineId: string }) {
         <ErrorState error={list.error} onRetry={() => list.refetch()} />
       ) : list.data.length === 0 ? (
         <EmptyState title="No evidence yet">
-          {recorder ? 'Photos and files attached to this machine or any of its checks appear here.' : 'Nothing has been attached to this machine or its checks yet.'}
+          {recorder
+            ? 'Photos and files attached to this machine or any of its checks appear here.'
+            : 'Nothing has been attached to this machine or its checks yet.'}
         </EmptyState>
       ) : (
         groups(list.data).map((g) => (
@@ -79,5 +82,7 @@ function groups(items: Evidence[]): Group[] {
 function count(items: Evidence[]): string {
   const photos = items.filter((i) => i.kind === 'photo').length;
   const files = items.length - photos;
-  return [photos && `${photos} photo${photos === 1 ? '' : 's'}`, files && `${files} file${files === 1 ? '' : 's'}`].filter(Boolean).join(', ');
+  return [photos && `${photos} photo${photos === 1 ? '' : 's'}`, files && `${files} file${files === 1 ? '' : 's'}`]
+    .filter(Boolean)
+    .join(', ');
 }

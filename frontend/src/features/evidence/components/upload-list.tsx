@@ -51,12 +51,23 @@ function UploadRow({ item, onCancel }: { item: UploadItem; onCancel: (key: strin
   return (
     <Box>
       <Box sx={{ display: 'flex', alignItems: 'center', gap: 1 }}>
-        <Typography variant="body2" sx={{ flex: 1, minWidth: 0, overflow: 'hidden', textOverflow: 'ellipsis', whiteSpace: 'nowrap' }}>
+        <Typography
+          variant="body2"
+          sx={{ flex: 1, minWidth: 0, overflow: 'hidden', textOverflow: 'ellipsis', whiteSpace: 'nowrap' }}
+        >
           {item.name}
         </Typography>
-        <Typography variant="body2" color={done ? 'success.main' : 'text.secondary'} sx={{ display: 'flex', alignItems: 'center', gap: 0.5, whiteSpace: 'nowrap' }}>
+        <Typography
+          variant="body2"
+          color={done ? 'success.main' : 'text.secondary'}
+          sx={{ display: 'flex', alignItems: 'center', gap: 0.5, whiteSpace: 'nowrap' }}
+        >
           {done ? <CheckCircleOutline fontSize="small" /> : null}
-          {done ? `Attached · ${formatBytes(item.sizeBytes)}` : waiting ? `Waiting to be sent · ${formatBytes(item.sizeBytes)}` : `${percent} % of ${formatBytes(item.sizeBytes)}`}
+          {done
+            ? `Attached · ${formatBytes(item.sizeBytes)}`
+            : waiting
+              ? `Waiting to be sent · ${formatBytes(item.sizeBytes)}`
+              : `${percent} % of ${formatBytes(item.sizeBytes)}`}
         </Typography>
         {!done && (
           <IconButton size="small" aria-label={`Cancel ${item.name}`} onClick={() => onCancel(item.key)}>

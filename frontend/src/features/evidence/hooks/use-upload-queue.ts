@@ -25,9 +25,14 @@ export interface UploadItem {
 export const EVIDENCE_PATH = '/evidence';
 
 const isUploadFor = (subject: EvidenceSubject) => (v: CommandVariables | undefined) =>
-  !!v?.form && v.path === EVIDENCE_PATH && v.form.fields.subjectType === subject.subjectType && v.form.fields.subjectId === subject.subjectId && v.ownerId === sessionOwner();
+  !!v?.form &&
+  v.path === EVIDENCE_PATH &&
+  v.form.fields.subjectType === subject.subjectType &&
+  v.form.fields.subjectId === subject.subjectId &&
+  v.ownerId === sessionOwner();
 
-const variablesOf = (m: Mutation<unknown, Error, unknown, unknown>) => m.state.variables as CommandVariables | undefined;
+const variablesOf = (m: Mutation<unknown, Error, unknown, unknown>) =>
+  m.state.variables as CommandVariables | undefined;
 
 /** Redraws as bytes go out. */
 function useProgressTick(): number {
@@ -52,7 +57,13 @@ export function useUploadQueue(subject: EvidenceSubject, limits: EvidenceLimits 
   const matches = isUploadFor(subject);
   const queued = useMutationState({
     filters: { mutationKey: COMMAND_KEY, predicate: (m) => matches(variablesOf(m)) },
-    select: (m) => ({ v: variablesOf(m)!, status: m.state.status, paused: m.state.isPaused, data: m.state.data as Evidence | undefined, error: m.state.error }),
+    select: (m) => ({
+      v: variablesOf(m)!,
+      status: m.state.status,
+      paused: m.state.isPaused,
+      data: m.state.data as Evidence | undefined,
+      error: m.state.error,
+    }),
   });
 
   // A refusal (or a cancellation) becomes the list's own line and leaves the queue.
@@ -64,17 +75,32 @@ export function useUploadQueue(subject: EvidenceSubject, limits: EvidenceLimits 
     // removed from the cache in the same step, so the effect is the place for both.
     // eslint-disable-next-line react-hooks/set-state-in-effect
     setOutcomes((list) => [
-      ...failed.map((q): UploadItem => ({ key: q.v.key, name: q.v.form!.fileName, sizeBytes: q.v.form!.file.size, progress: 0, status: cancelled(q.error) ? 'cancelled' : 'refused', message: q.error?.message ?? '' })),
+      ...failed.map((q): UploadItem => ({
+        key: q.v.key,
+        name: q.v.form!.fileName,
+        sizeBytes: q.v.form!.file.size,
+        progress: 0,
+        status: cancelled(q.error) ? 'cancelled' : 'refused',
+        message: q.error?.message ?? '',
+      })),
       ...list,
     ]);
-    for (const m of qc.getMutationCache().findAll({ mutationKey: COMMAND_KEY, status: 'error' })) if (failed.some((q) => q.v.key === variablesOf(m)?.key)) qc.getMutationCache().remove(m);
+    for (const m of qc.getMutationCache().findAll({ mutationKey: COMMAND_KEY, status: 'error' }))
+      if (failed.some((q) => q.v.key === variablesOf(m)?.key)) qc.getMutationCache().remove(m);
   }, [queued, qc]);
 
   const fromQueue = queued
     .filter((q) => q.status !== 'error' && q.status !== 'idle')
     .map((q): UploadItem => {
       const status: UploadStatus = q.status === 'success' ? 'done' : q.paused ? 'waiting' : 'uploading';
-      return { key: q.v.key, name: q.v.form!.fileName, sizeBytes: q.v.form!.file.size, progress: status === 'done' ? 1 : uploadProgress(q.v.key), status, evidence: q.data };
+      return {
+        key: q.v.key,
+        name: q.v.form!.fileName,
+        sizeBytes: q.v.form!.file.size,
+        progress: status === 'done' ? 1 : uploadProgress(q.v.key),
+        status,
+        evidence: q.data,
+      };
     })
     .reverse();
   const items = [...fromQueue, ...outcomes];
@@ -83,10 +109,19 @@ export function useUploadQueue(subject: EvidenceSubject, limits: EvidenceLimits 
     (files: File[], caption?: string) => {
       const refused: UploadItem[] = [];
       for (const file of files) {
-        const item = { key: `refused-${Math.random().toString(36).slice(2)}`, name: file.name, sizeBytes: file.size, progress: 0, status: 'refused' as const };
+        const item = {
+          key: `refused-${Math.random().toString(36).slice(2)}`,
+          name: file.name,
+          sizeBytes: file.size,
+          progress: 0,
+          status: 'refused' as const,
+        };
         if (limits && file.size > limits.maxBytes) {
           // Refused here already: no point sending what the server will refuse.
-          refused.push({ ...item, message: `${file.name} is ${formatBytes(file.size)}, over the limit of ${formatBytes(limits.maxBytes)} a file` });
+          refused.push({
+            ...item,
+            message: `${file.name} is ${formatBytes(file.size)}, over the limit of ${formatBytes(limits.maxBytes)} a file`,
+          });
           continue;
         }
         if (file.size === 0) {
@@ -95,7 +130,13 @@ export function useUploadQueue(subject: EvidenceSubject, limits: EvidenceLimits 
         }
         const fields: Record<string, string> = { subjectType: subject.subjectType, subjectId: subject.subjectId };
         if (caption?.trim()) fields.caption = caption.trim();
-        command.send({ method: 'POST', path: EVIDENCE_PATH, form: { fields, file, fileName: file.name }, label: `Photo or file ${file.name}`, refresh: [evidenceKeys.all] });
+        command.send({
+          method: 'POST',
+          path: EVIDENCE_PATH,
+          form: { fields, file, fileName: file.name },
+          label: `Photo or file ${file.name}`,
+          refresh: [evidenceKeys.all],
+        });
       }
       if (refused.length) setOutcomes((list) => [...refused, ...list]);
     },
@@ -104,7 +145,10 @@ export function useUploadQueue(subject: EvidenceSubject, limits: EvidenceLimits 
 
   const removeFromQueue = useCallback(
     (key: string) => {
-      const m = qc.getMutationCache().findAll({ mutationKey: COMMAND_KEY }).find((x) => variablesOf(x)?.key === key);
+      const m = qc
+        .getMutationCache()
+        .findAll({ mutationKey: COMMAND_KEY })
+        .find((x) => variablesOf(x)?.key === key);
       if (m) qc.getMutationCache().remove(m);
     },
     [qc],
@@ -115,7 +159,8 @@ export function useUploadQueue(subject: EvidenceSubject, limits: EvidenceLimits 
       // Not on its way yet: it leaves the queue here.
       const waiting = fromQueue.find((i) => i.key === key);
       removeFromQueue(key);
-      if (waiting) setOutcomes((list) => [{ ...waiting, status: 'cancelled', message: `${waiting.name}: not sent` }, ...list]);
+      if (waiting)
+        setOutcomes((list) => [{ ...waiting, status: 'cancelled', message: `${waiting.name}: not sent` }, ...list]);
     },
     [fromQueue, removeFromQueue],
   );

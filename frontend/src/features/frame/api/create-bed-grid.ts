@@ -10,6 +10,15 @@ export type BedGridInput = Schemas['CreateBedGridDto'];
 export function useCreateBedGrid(machineId: string) {
   const recording = useRecording<BedGrid>();
   const record = (input: BedGridInput, on: { onRecorded?: (saved: BedGrid) => void; onQueued?: () => void } = {}) =>
-    recording.record({ method: 'POST', path: `/machines/${machineId}/bed-grids`, body: input, label: `Bed grid, ${input.rows} × ${input.columns} points`, refresh: [frameKeys.bedGrids(machineId), ...MACHINE_STATE_KEYS] }, on);
+    recording.record(
+      {
+        method: 'POST',
+        path: `/machines/${machineId}/bed-grids`,
+        body: input,
+        label: `Bed grid, ${input.rows} × ${input.columns} points`,
+        refresh: [frameKeys.bedGrids(machineId), ...MACHINE_STATE_KEYS],
+      },
+      on,
+    );
   return { ...recording, record };
 }

@@ -9,6 +9,15 @@ export type TestCutInput = Schemas['CreateTestCutDto'];
 export function useCreateTestCut(machineId: string) {
   const recording = useRecording<TestCut>();
   const record = (input: TestCutInput, on: { onRecorded?: (saved: TestCut) => void; onQueued?: () => void } = {}) =>
-    recording.record({ method: 'POST', path: `/machines/${machineId}/test-cuts`, body: input, label: 'Test cut', refresh: [frameKeys.testCuts(machineId), ...MACHINE_STATE_KEYS] }, on);
+    recording.record(
+      {
+        method: 'POST',
+        path: `/machines/${machineId}/test-cuts`,
+        body: input,
+        label: 'Test cut',
+        refresh: [frameKeys.testCuts(machineId), ...MACHINE_STATE_KEYS],
+      },
+      on,
+    );
   return { ...recording, record };
 }

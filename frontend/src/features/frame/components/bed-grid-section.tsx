@@ -17,7 +17,17 @@ import type { GridPointResult } from '../types';
 const DIGITS: Record<LengthUnit, number> = { mm: 2, um: 0, in: 4, thou: 1 };
 
 /** Bed flatness: grid entry, the colour map of residuals, the worst points and earlier grids. */
-export function BedGridSection({ machineId, machineKind, workArea, canRecord }: { machineId: string; machineKind: string; workArea: { x: number; y: number }; canRecord: boolean }) {
+export function BedGridSection({
+  machineId,
+  machineKind,
+  workArea,
+  canRecord,
+}: {
+  machineId: string;
+  machineKind: string;
+  workArea: { x: number; y: number };
+  canRecord: boolean;
+}) {
   const grids = useBedGrids(machineId);
   const [selectedId, setSelectedId] = useState<string | null>(null);
   if (grids.isPending) return <LoadingState label="Loading bed grids…" />;
@@ -30,8 +40,10 @@ export function BedGridSection({ machineId, machineKind, workArea, canRecord }: 
   const judgedValue = g?.result?.judged.valueMm ?? 0;
   // Drawn about the middle of the judged zone, so the colours show where the bed is high or low in it.
   const aboutMiddle = (p: GridPointResult) => p.judgedHeightMm - judgedValue / 2;
-  const reference = g?.result?.judged.basis === 'height-range' ? 'the middle of the height range' : 'the middle of the minimum zone';
-  const both = (mm: number) => `${showLength(mm, targetUnit)}${targetUnit !== unit ? ` (${showLength(mm, unit)})` : ''}`;
+  const reference =
+    g?.result?.judged.basis === 'height-range' ? 'the middle of the height range' : 'the middle of the minimum zone';
+  const both = (mm: number) =>
+    `${showLength(mm, targetUnit)}${targetUnit !== unit ? ` (${showLength(mm, unit)})` : ''}`;
 
   return (
     <Paper sx={{ p: { xs: 2, md: 2.5 } }} component="section" aria-labelledby="bed-grid-title">
@@ -43,8 +55,21 @@ export function BedGridSection({ machineId, machineKind, workArea, canRecord }: 
           ? 'Heights over the bed or slats on a grid, read from a gauge carried by the gantry. For a plasma table what matters is the bed parallel to the plane the torch travels in, not level to the floor nor flat after a tilt is taken out: the judged value is the range of the heights as read, tilt left in, against the torch-height target. Minimum-zone flatness (ISO 1101) and least squares are shown beside it.'
           : 'Heights over the bed or spoilboard on a grid. The judged value is minimum-zone flatness (ISO 1101: the smallest distance between two parallel planes holding every point); least-squares flatness and the tilt are shown beside it.'}
       </Typography>
-      <Box sx={{ display: 'grid', gap: 3, gridTemplateColumns: { xs: 'minmax(0, 1fr)', lg: canRecord ? 'minmax(360px, 1fr) minmax(0, 1fr)' : 'minmax(0, 1fr)' } }}>
-        {canRecord && <Box data-print="hide"><BedGridEntry machineId={machineId} workArea={workArea} onSaved={(x) => setSelectedId(x.id)} /></Box>}
+      <Box
+        sx={{
+          display: 'grid',
+          gap: 3,
+          gridTemplateColumns: {
+            xs: 'minmax(0, 1fr)',
+            lg: canRecord ? 'minmax(360px, 1fr) minmax(0, 1fr)' : 'minmax(0, 1fr)',
+          },
+        }}
+      >
+        {canRecord && (
+          <Box data-print="hide">
+            <BedGridEntry machineId={machineId} workArea={workArea} onSaved={(x) => setSelectedId(x.id)} />
+          </Box>
+        )}
         <Box>
           {g && !g.result ? (
             <Stack spacing={1.5}>
@@ -52,7 +77,15 @@ export function BedGridSection({ machineId, machineKind, workArea, canRecord }: 
               <Typography variant="body2" color="text.secondary">
                 Recorded {showDate(g.recordedAt)} by {g.recordedBy.name}
               </Typography>
-              {canRecord && !g.locked && <DeleteRecordButton machineId={machineId} kind="bed-grids" id={g.id} what="this bed grid" onDeleted={() => setSelectedId(null)} />}
+              {canRecord && !g.locked && (
+                <DeleteRecordButton
+                  machineId={machineId}
+                  kind="bed-grids"
+                  id={g.id}
+                  what="this bed grid"
+                  onDeleted={() => setSelectedId(null)}
+                />
+              )}
             </Stack>
           ) : g && g.result ? (
             <Stack spacing={1.5}>
@@ -61,35 +94,79 @@ export function BedGridSection({ machineId, machineKind, workArea, canRecord }: 
                   {g.result.judged.label}: {both(g.result.judged.valueMm)}
                 </Typography>
                 <StatusChip status={g.status} />
-                {canRecord && !g.locked && <DeleteRecordButton machineId={machineId} kind="bed-grids" id={g.id} what="this bed grid" onDeleted={() => setSelectedId(null)} />}
+                {canRecord && !g.locked && (
+                  <DeleteRecordButton
+                    machineId={machineId}
+                    kind="bed-grids"
+                    id={g.id}
+                    what="this bed grid"
+                    onDeleted={() => setSelectedId(null)}
+                  />
+                )}
               </Box>
               <Typography variant="body2" color="text.secondary">
                 Target {showTarget(g.target)} · {g.target.source}
               </Typography>
-              <Box component="dl" sx={{ display: 'grid', gridTemplateColumns: 'auto 1fr', columnGap: 2, rowGap: 0.25, m: 0, '& dd': { m: 0 } }} aria-label="Bed flatness figures">
-                {([
-                  ['height-range', 'Height range, tilt left in', g.result.heightRange.rangeMm],
-                  ['minimum-zone', 'Minimum-zone flatness (ISO 1101)', g.result.minimumZone.flatnessMm],
-                  [null, 'Least-squares flatness', g.result.leastSquares.flatnessMm],
-                ] as const).map(([basis, label, mm]) => (
+              <Box
+                component="dl"
+                sx={{
+                  display: 'grid',
+                  gridTemplateColumns: 'auto 1fr',
+                  columnGap: 2,
+                  rowGap: 0.25,
+                  m: 0,
+                  '& dd': { m: 0 },
+                }}
+                aria-label="Bed flatness figures"
+              >
+                {(
+                  [
+                    ['height-range', 'Height range, tilt left in', g.result.heightRange.rangeMm],
+                    ['minimum-zone', 'Minimum-zone flatness (ISO 1101)', g.result.minimumZone.flatnessMm],
+                    [null, 'Least-squares flatness', g.result.leastSquares.flatnessMm],
+                  ] as const
+                ).map(([basis, label, mm]) => (
                   <Box key={label} sx={{ display: 'contents' }}>
-                    <Typography component="dt" variant="body2" sx={{ fontWeight: basis === g.result!.judged.basis ? 700 : 400 }}>{label}{basis === g.result!.judged.basis ? ' (judged)' : ''}</Typography>
-                    <Typography component="dd" variant="body2">{both(mm)}</Typography>
+                    <Typography
+                      component="dt"
+                      variant="body2"
+                      sx={{ fontWeight: basis === g.result!.judged.basis ? 700 : 400 }}
+                    >
+                      {label}
+                      {basis === g.result!.judged.basis ? ' (judged)' : ''}
+                    </Typography>
+                    <Typography component="dd" variant="body2">
+                      {both(mm)}
+                    </Typography>
                   </Box>
                 ))}
               </Box>
               <ResultWarnings warnings={g.warnings} label="Bed grid warnings" />
               <Typography variant="body2">
-                Tilt {g.result.tilt.mmPerMetre.toFixed(3)} mm/m (X {g.result.tilt.xMmPerMetre.toFixed(3)} mm/m, Y {g.result.tilt.yMmPerMetre.toFixed(3)} mm/m) · {g.rows} × {g.columns} points · {showDate(g.recordedAt)} by {g.recordedBy.name}
+                Tilt {g.result.tilt.mmPerMetre.toFixed(3)} mm/m (X {g.result.tilt.xMmPerMetre.toFixed(3)} mm/m, Y{' '}
+                {g.result.tilt.yMmPerMetre.toFixed(3)} mm/m) · {g.rows} × {g.columns} points · {showDate(g.recordedAt)}{' '}
+                by {g.recordedBy.name}
                 {g.note ? ` · ${g.note}` : ''}
               </Typography>
-              <BedGridMap points={g.result.points} unit={unit} lengthUnit={lengthUnit} valueOf={aboutMiddle} reference={reference} worstIndex={g.result.worstPoints[0]?.index} />
+              <BedGridMap
+                points={g.result.points}
+                unit={unit}
+                lengthUnit={lengthUnit}
+                valueOf={aboutMiddle}
+                reference={reference}
+                worstIndex={g.result.worstPoints[0]?.index}
+              />
               <Box>
-                <Typography variant="h5" component="h4">Furthest from {reference}</Typography>
+                <Typography variant="h5" component="h4">
+                  Furthest from {reference}
+                </Typography>
                 <List dense aria-label="Worst points" disablePadding>
                   {g.result.worstPoints.slice(0, 3).map((p) => (
                     <ListItem key={p.index} disableGutters>
-                      <ListItemText primary={namePoint(p, unit, DIGITS[unit], aboutMiddle(p))} secondary={`X ${showLength(p.xMm, lengthUnit, lengthUnit === 'in' ? 2 : 0)}, Y ${showLength(p.yMm, lengthUnit, lengthUnit === 'in' ? 2 : 0)}`} />
+                      <ListItemText
+                        primary={namePoint(p, unit, DIGITS[unit], aboutMiddle(p))}
+                        secondary={`X ${showLength(p.xMm, lengthUnit, lengthUnit === 'in' ? 2 : 0)}, Y ${showLength(p.yMm, lengthUnit, lengthUnit === 'in' ? 2 : 0)}`}
+                      />
                     </ListItem>
                   ))}
                 </List>
@@ -101,10 +178,19 @@ export function BedGridSection({ machineId, machineKind, workArea, canRecord }: 
         </Box>
       </Box>
       {list.length > 1 && (
-        <TextField select label="Earlier grids" value={g?.id ?? ''} onChange={(e) => setSelectedId(e.target.value)} sx={{ mt: 2, minWidth: { sm: 320 }, maxWidth: '100%' }}>
+        <TextField
+          select
+          label="Earlier grids"
+          value={g?.id ?? ''}
+          onChange={(e) => setSelectedId(e.target.value)}
+          sx={{ mt: 2, minWidth: { sm: 320 }, maxWidth: '100%' }}
+        >
           {list.map((x) => (
             <MenuItem key={x.id} value={x.id}>
-              {showDate(x.recordedAt)} · {x.result ? `${x.result.judged.basis === 'height-range' ? 'height range' : 'flatness'} ${showLength(x.result.judged.valueMm, isLengthUnit(x.target.unit) ? x.target.unit : 'mm')} · ${x.status === 'within-target' ? 'within' : 'outside'}` : 'cannot be read'}
+              {showDate(x.recordedAt)} ·{' '}
+              {x.result
+                ? `${x.result.judged.basis === 'height-range' ? 'height range' : 'flatness'} ${showLength(x.result.judged.valueMm, isLengthUnit(x.target.unit) ? x.target.unit : 'mm')} · ${x.status === 'within-target' ? 'within' : 'outside'}`
+                : 'cannot be read'}
             </MenuItem>
           ))}
         </TextField>

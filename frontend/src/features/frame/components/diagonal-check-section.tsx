@@ -28,10 +28,25 @@ export function DiagonalCheckSection({ machineId, canRecord }: { machineId: stri
         Diagonal check
       </Typography>
       <Typography color="text.secondary" sx={{ mb: 2 }}>
-        Mark or cut a large rectangle with the machine, measure both sides and both diagonals. Equal diagonals mean a square gantry; the difference gives the angle and how far to move one end of a dual-drive gantry (usually by offsetting its home switch), then re-home and check again.
+        Mark or cut a large rectangle with the machine, measure both sides and both diagonals. Equal diagonals mean a
+        square gantry; the difference gives the angle and how far to move one end of a dual-drive gantry (usually by
+        offsetting its home switch), then re-home and check again.
       </Typography>
-      <Box sx={{ display: 'grid', gap: 3, gridTemplateColumns: { xs: 'minmax(0, 1fr)', lg: canRecord ? 'minmax(320px, 5fr) minmax(0, 7fr)' : 'minmax(0, 1fr)' } }}>
-        {canRecord && <Box data-print="hide"><DiagonalCheckForm machineId={machineId} onSaved={(c) => setSelectedId(c.id)} /></Box>}
+      <Box
+        sx={{
+          display: 'grid',
+          gap: 3,
+          gridTemplateColumns: {
+            xs: 'minmax(0, 1fr)',
+            lg: canRecord ? 'minmax(320px, 5fr) minmax(0, 7fr)' : 'minmax(0, 1fr)',
+          },
+        }}
+      >
+        {canRecord && (
+          <Box data-print="hide">
+            <DiagonalCheckForm machineId={machineId} onSaved={(c) => setSelectedId(c.id)} />
+          </Box>
+        )}
         <Box>
           {shown && !shown.result ? (
             <Stack spacing={1.5}>
@@ -39,19 +54,37 @@ export function DiagonalCheckSection({ machineId, canRecord }: { machineId: stri
               <Typography variant="body2" color="text.secondary">
                 Recorded {showDate(shown.recordedAt)} by {shown.recordedBy.name}
               </Typography>
-              {canRecord && !shown.locked && <DeleteRecordButton machineId={machineId} kind="diagonal-checks" id={shown.id} what="this diagonal check" onDeleted={() => setSelectedId(null)} />}
+              {canRecord && !shown.locked && (
+                <DeleteRecordButton
+                  machineId={machineId}
+                  kind="diagonal-checks"
+                  id={shown.id}
+                  what="this diagonal check"
+                  onDeleted={() => setSelectedId(null)}
+                />
+              )}
             </Stack>
           ) : shown && shown.result ? (
             <Stack spacing={1.5}>
               <Box sx={{ display: 'flex', gap: 1.5, alignItems: 'center', flexWrap: 'wrap' }}>
                 <Typography variant="h4" component="p" data-testid="squareness-result">
-                  {shown.result.mmPerMetre.toFixed(3)} mm/m out of square · {shown.result.outOfSquareArcsec.toFixed(0)}″ ({shown.result.outOfSquareDeg.toFixed(4)}°)
+                  {shown.result.mmPerMetre.toFixed(3)} mm/m out of square · {shown.result.outOfSquareArcsec.toFixed(0)}″
+                  ({shown.result.outOfSquareDeg.toFixed(4)}°)
                 </Typography>
                 <StatusChip status={shown.status} />
-                {canRecord && !shown.locked && <DeleteRecordButton machineId={machineId} kind="diagonal-checks" id={shown.id} what="this diagonal check" onDeleted={() => setSelectedId(null)} />}
+                {canRecord && !shown.locked && (
+                  <DeleteRecordButton
+                    machineId={machineId}
+                    kind="diagonal-checks"
+                    id={shown.id}
+                    what="this diagonal check"
+                    onDeleted={() => setSelectedId(null)}
+                  />
+                )}
               </Box>
               <Typography variant="body2" color="text.secondary">
-                Recorded {showDate(shown.recordedAt)} by {shown.recordedBy.name}{shown.note ? ` · ${shown.note}` : ''}
+                Recorded {showDate(shown.recordedAt)} by {shown.recordedBy.name}
+                {shown.note ? ` · ${shown.note}` : ''}
               </Typography>
               <Typography variant="body2" color="text.secondary">
                 Target {showTarget(shown.target)} · {shown.target.source}

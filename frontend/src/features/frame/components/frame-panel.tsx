@@ -12,7 +12,12 @@ export function FramePanel({ machine }: { machine: { id: string; kind: string; w
   return (
     <Stack spacing={3}>
       <DiagonalCheckSection machineId={machine.id} canRecord={canRecord(role)} />
-      <BedGridSection machineId={machine.id} machineKind={machine.kind} workArea={machine.workArea} canRecord={canRecord(role)} />
+      <BedGridSection
+        machineId={machine.id}
+        machineKind={machine.kind}
+        workArea={machine.workArea}
+        canRecord={canRecord(role)}
+      />
       <TestCutSection machineId={machine.id} machineKind={machine.kind} canRecord={canCalibrate(role)} />
     </Stack>
   );

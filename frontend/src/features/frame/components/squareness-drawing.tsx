@@ -72,23 +72,65 @@ export function SquarenessDrawing(p: SquarenessDrawingProps) {
 
   return (
     <Box>
-      <Box component="svg" viewBox={`0 0 ${W} ${H}`} role="img" aria-label={label} sx={{ width: '100%', maxWidth: 720, display: 'block', fontFamily: 'Roboto, sans-serif' }}>
+      <Box
+        component="svg"
+        viewBox={`0 0 ${W} ${H}`}
+        role="img"
+        aria-label={label}
+        sx={{ width: '100%', maxWidth: 720, display: 'block', fontFamily: 'Roboto, sans-serif' }}
+      >
         <defs>
-          <marker id="sq-arrow" viewBox="0 0 10 10" refX="8" refY="5" markerWidth="7" markerHeight="7" orient="auto-start-reverse">
+          <marker
+            id="sq-arrow"
+            viewBox="0 0 10 10"
+            refX="8"
+            refY="5"
+            markerWidth="7"
+            markerHeight="7"
+            orient="auto-start-reverse"
+          >
             <path d="M0,0 L10,5 L0,10 z" fill={palette.brass} />
           </marker>
         </defs>
         <polygon points={poly(ideal)} fill="none" stroke="#b9b3a4" strokeDasharray="6 5" strokeWidth={1.5} />
         <polygon points={poly([a2, b2, c2, d2])} fill="rgba(29, 79, 74, 0.05)" stroke={palette.ink} strokeWidth={2.2} />
-        <line x1={a2[0]} y1={a2[1]} x2={c2[0]} y2={c2[1]} stroke={d1Long ? RUST : palette.steelLight} strokeWidth={d1Long ? 3 : 2} />
-        <line x1={b2[0]} y1={b2[1]} x2={d2[0]} y2={d2[1]} stroke={d2Long ? RUST : palette.steelLight} strokeWidth={d2Long ? 3 : 2} />
+        <line
+          x1={a2[0]}
+          y1={a2[1]}
+          x2={c2[0]}
+          y2={c2[1]}
+          stroke={d1Long ? RUST : palette.steelLight}
+          strokeWidth={d1Long ? 3 : 2}
+        />
+        <line
+          x1={b2[0]}
+          y1={b2[1]}
+          x2={d2[0]}
+          y2={d2[1]}
+          stroke={d2Long ? RUST : palette.steelLight}
+          strokeWidth={d2Long ? 3 : 2}
+        />
         {[
           [l1, '1', d1Long],
           [l2, '2', d2Long],
         ].map(([pt, n, long]) => (
           <g key={n as string}>
-            <circle cx={(pt as P)[0]} cy={(pt as P)[1]} r={10} fill="#ffffff" stroke={long ? RUST : palette.steelLight} strokeWidth={2} />
-            <text x={(pt as P)[0]} y={(pt as P)[1] + 4.5} fontSize={12.5} fontWeight={700} textAnchor="middle" fill={long ? RUST : palette.steel}>
+            <circle
+              cx={(pt as P)[0]}
+              cy={(pt as P)[1]}
+              r={10}
+              fill="#ffffff"
+              stroke={long ? RUST : palette.steelLight}
+              strokeWidth={2}
+            />
+            <text
+              x={(pt as P)[0]}
+              y={(pt as P)[1] + 4.5}
+              fontSize={12.5}
+              fontWeight={700}
+              textAnchor="middle"
+              fill={long ? RUST : palette.steel}
+            >
               {n as string}
             </text>
           </g>
@@ -98,39 +140,93 @@ export function SquarenessDrawing(p: SquarenessDrawingProps) {
           [2, p.diagonal2Mm, d2Long, 'X-far Y0 corner to X0 Y-far corner'],
         ].map(([n, mm, long, path], i) => (
           <g key={n as number}>
-            <line x1={M.l} x2={M.l + 28} y1={figureH + 8 + i * 20} y2={figureH + 8 + i * 20} stroke={long ? RUST : palette.steelLight} strokeWidth={long ? 3 : 2} />
-            <text x={M.l + 36} y={figureH + 12.5 + i * 20} fontSize={13} fill={long ? RUST : palette.ink} fontWeight={long ? 700 : 400}>
+            <line
+              x1={M.l}
+              x2={M.l + 28}
+              y1={figureH + 8 + i * 20}
+              y2={figureH + 8 + i * 20}
+              stroke={long ? RUST : palette.steelLight}
+              strokeWidth={long ? 3 : 2}
+            />
+            <text
+              x={M.l + 36}
+              y={figureH + 12.5 + i * 20}
+              fontSize={13}
+              fill={long ? RUST : palette.ink}
+              fontWeight={long ? 700 : 400}
+            >
               {`Diagonal ${n} · ${len(mm as number)}${long ? ' (long)' : ''} · ${path as string}`}
             </text>
           </g>
         ))}
-        <text x={(a2[0] + b2[0]) / 2} y={Math.max(a2[1], b2[1]) + 24} fontSize={13} textAnchor="middle" fill={palette.ink}>
+        <text
+          x={(a2[0] + b2[0]) / 2}
+          y={Math.max(a2[1], b2[1]) + 24}
+          fontSize={13}
+          textAnchor="middle"
+          fill={palette.ink}
+        >
           X side {len(a)}
         </text>
         {(() => {
           const x = leftArrow ? Math.max(b2[0], c2[0]) + 16 : a2[0] - 14;
           const y = leftArrow ? (b2[1] + c2[1]) / 2 : (a2[1] + d2[1]) / 2;
           return (
-            <text x={x} y={y} fontSize={13} textAnchor="middle" fill={palette.ink} transform={`rotate(${leftArrow ? 90 : -90} ${x} ${y})`}>
+            <text
+              x={x}
+              y={y}
+              fontSize={13}
+              textAnchor="middle"
+              fill={palette.ink}
+              transform={`rotate(${leftArrow ? 90 : -90} ${x} ${y})`}
+            >
               Y side {len(b)}
             </text>
           );
         })()}
-        <text x={a2[0]} y={a2[1] + 44} fontSize={12} fill="#4d5855">X0 Y0 corner</text>
+        <text x={a2[0]} y={a2[1] + 44} fontSize={12} fill="#4d5855">
+          X0 Y0 corner
+        </text>
         {end && p.correction.moveMm > 0 && (
           <g>
-            <line x1={ax} y1={mid[1] - 34} x2={ax} y2={mid[1] + 34} stroke={palette.brass} strokeWidth={3.5} markerEnd="url(#sq-arrow)" />
-            <text x={end === 'x-far' ? ax + 12 : ax - 12} y={mid[1] - 6} fontSize={14} fontWeight={700} textAnchor={end === 'x-far' ? 'start' : 'end'} fill={palette.ink} style={halo}>
+            <line
+              x1={ax}
+              y1={mid[1] - 34}
+              x2={ax}
+              y2={mid[1] + 34}
+              stroke={palette.brass}
+              strokeWidth={3.5}
+              markerEnd="url(#sq-arrow)"
+            />
+            <text
+              x={end === 'x-far' ? ax + 12 : ax - 12}
+              y={mid[1] - 6}
+              fontSize={14}
+              fontWeight={700}
+              textAnchor={end === 'x-far' ? 'start' : 'end'}
+              fill={palette.ink}
+              style={halo}
+            >
               Move {p.correction.moveMm.toFixed(2)} mm
             </text>
-            <text x={end === 'x-far' ? ax + 12 : ax - 12} y={mid[1] + 12} fontSize={12.5} textAnchor={end === 'x-far' ? 'start' : 'end'} fill="#4d5855" style={halo}>
+            <text
+              x={end === 'x-far' ? ax + 12 : ax - 12}
+              y={mid[1] + 12}
+              fontSize={12.5}
+              textAnchor={end === 'x-far' ? 'start' : 'end'}
+              fill="#4d5855"
+              style={halo}
+            >
               {end === 'x-far' ? 'X-far' : 'X0'} end, towards Y0
             </text>
           </g>
         )}
       </Box>
       <Typography variant="body2" color="text.secondary">
-        {factor > 1 ? `Lean exaggerated ×${factor} so it can be seen; lengths are as measured.` : 'Drawn to scale; lengths are as measured.'} The dashed outline is the square rectangle; Y0 is at the bottom.
+        {factor > 1
+          ? `Lean exaggerated ×${factor} so it can be seen; lengths are as measured.`
+          : 'Drawn to scale; lengths are as measured.'}{' '}
+        The dashed outline is the square rectangle; Y0 is at the bottom.
       </Typography>
     </Box>
   );

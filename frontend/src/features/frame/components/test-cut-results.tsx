@@ -1,12 +1,28 @@
 import type { ReactNode } from 'react';
-import { Alert, Box, Stack, Table, TableBody, TableCell, TableContainer, TableHead, TableRow, Typography } from '@mui/material';
+import {
+  Alert,
+  Box,
+  Stack,
+  Table,
+  TableBody,
+  TableCell,
+  TableContainer,
+  TableHead,
+  TableRow,
+  Typography,
+} from '@mui/material';
 import type { TestCut } from '../types';
 import { showDate, showLength, showSigned, showTarget } from '../utils/format';
 import { UnreadableRecord } from '../../../components/unreadable-record';
 import { StatusChip } from './status-chip';
 import { ResultWarnings } from './result-warnings';
 
-const SHORT: Record<string, string> = { 'outside-x': 'Outside X', 'outside-y': 'Outside Y', 'circle-x': 'Circle ⌀ along X', 'circle-y': 'Circle ⌀ along Y' };
+const SHORT: Record<string, string> = {
+  'outside-x': 'Outside X',
+  'outside-y': 'Outside Y',
+  'circle-x': 'Circle ⌀ along X',
+  'circle-y': 'Circle ⌀ along Y',
+};
 
 const POINTS_TO: Record<NonNullable<TestCut['result']>['ovalityPointsTo'], string> = {
   round: 'round',
@@ -23,9 +39,13 @@ export function TestCutResults({ cut, actions }: { cut: TestCut; actions?: React
   const digits = u === 'in' ? 4 : u === 'thou' ? 1 : u === 'um' ? 0 : 2;
   const heading = (
     <Box sx={{ display: 'flex', gap: 1.5, alignItems: 'center', flexWrap: 'wrap' }}>
-      <Typography variant="h4" component="p">Test cut of {showDate(cut.recordedAt)}</Typography>
+      <Typography variant="h4" component="p">
+        Test cut of {showDate(cut.recordedAt)}
+      </Typography>
       <StatusChip status={cut.status} />
-      <Typography variant="body2" color="text.secondary">by {cut.recordedBy.name}</Typography>
+      <Typography variant="body2" color="text.secondary">
+        by {cut.recordedBy.name}
+      </Typography>
       {actions}
     </Box>
   );
@@ -67,28 +87,40 @@ export function TestCutResults({ cut, actions }: { cut: TestCut; actions?: React
                 <TableCell align="right">
                   {r[k].errorPercent >= 0 ? '+' : '−'}
                   {Math.abs(r[k].errorPercent).toFixed(3)} %
-                  <Typography variant="caption" color="text.secondary" component="div">{showSigned(r[k].errorMm, u, digits)}</Typography>
+                  <Typography variant="caption" color="text.secondary" component="div">
+                    {showSigned(r[k].errorMm, u, digits)}
+                  </Typography>
                 </TableCell>
                 <TableCell align="right">× {r[k].correctionFactor.toFixed(5)}</TableCell>
-                <TableCell align="right">{r[k].suggestedStepsPerMm === null ? '—' : `${r[k].suggestedStepsPerMm.toFixed(4)} steps/mm`}</TableCell>
+                <TableCell align="right">
+                  {r[k].suggestedStepsPerMm === null ? '—' : `${r[k].suggestedStepsPerMm.toFixed(4)} steps/mm`}
+                </TableCell>
               </TableRow>
             ))}
           </TableBody>
         </Table>
       </TableContainer>
       <Typography variant="body2" color="text.secondary">
-        New steps per mm = old × commanded ÷ measured, per axis (common practice). Set steps per mm first, then square the gantry, re-home and cut again.
+        New steps per mm = old × commanded ÷ measured, per axis (common practice). Set steps per mm first, then square
+        the gantry, re-home and cut again.
       </Typography>
       <Box sx={{ display: 'grid', gap: 2, gridTemplateColumns: { xs: '1fr', md: '1fr 1fr' } }}>
         <Box>
-          <Typography variant="h5" component="h4">Squareness</Typography>
-          <Typography>
-            {r.squareness.mmPerMetre.toFixed(3)} mm/m · {r.outOfSquareArcsec.toFixed(0)}″ · diagonal {r.squareness.longDiagonal} long by {r.squareness.diagonalDifferenceMm.toFixed(2)} mm
+          <Typography variant="h5" component="h4">
+            Squareness
           </Typography>
-          <Typography variant="body2" color="text.secondary">Target {showTarget(cut.targets.squareness)}</Typography>
+          <Typography>
+            {r.squareness.mmPerMetre.toFixed(3)} mm/m · {r.outOfSquareArcsec.toFixed(0)}″ · diagonal{' '}
+            {r.squareness.longDiagonal} long by {r.squareness.diagonalDifferenceMm.toFixed(2)} mm
+          </Typography>
+          <Typography variant="body2" color="text.secondary">
+            Target {showTarget(cut.targets.squareness)}
+          </Typography>
         </Box>
         <Box>
-          <Typography variant="h5" component="h4">Ovality: {showLength(r.ovality, u, digits)} · {POINTS_TO[r.ovalityPointsTo]}</Typography>
+          <Typography variant="h5" component="h4">
+            Ovality: {showLength(r.ovality, u, digits)} · {POINTS_TO[r.ovalityPointsTo]}
+          </Typography>
           <Typography variant="body2">{r.ovalityExplanation}</Typography>
         </Box>
       </Box>
@@ -109,11 +141,18 @@ export function TestCutResults({ cut, actions }: { cut: TestCut; actions?: React
               <TableRow key={p.part}>
                 <TableCell sx={{ whiteSpace: 'normal !important', minWidth: 180 }}>
                   {SHORT[p.part] ?? p.label}
-                  <Typography variant="caption" color="text.secondary" component="div">{p.toleranceBasis}</Typography>
+                  <Typography variant="caption" color="text.secondary" component="div">
+                    {p.toleranceBasis}
+                  </Typography>
                 </TableCell>
                 <TableCell align="right">{showLength(p.nominalMm, u, digits)}</TableCell>
                 <TableCell align="right">{showLength(p.afterKerfMm, u, digits)}</TableCell>
-                <TableCell align="right" sx={{ color: p.within ? 'inherit' : 'error.main', fontWeight: p.within ? 400 : 600 }}>{showSigned(p.deviationMm, u, digits)}</TableCell>
+                <TableCell
+                  align="right"
+                  sx={{ color: p.within ? 'inherit' : 'error.main', fontWeight: p.within ? 400 : 600 }}
+                >
+                  {showSigned(p.deviationMm, u, digits)}
+                </TableCell>
                 <TableCell align="right">± {showLength(p.toleranceMm, u, digits)}</TableCell>
                 <TableCell>{p.within ? 'within' : 'outside'}</TableCell>
               </TableRow>
@@ -125,7 +164,9 @@ export function TestCutResults({ cut, actions }: { cut: TestCut; actions?: React
         Target ± {showTarget(tol)} · source: {tol.source ?? 'the machine’s target set'}
       </Typography>
       {r.notes.map((n) => (
-        <Alert key={n} severity="info">{n[0].toUpperCase() + n.slice(1)}.</Alert>
+        <Alert key={n} severity="info">
+          {n[0].toUpperCase() + n.slice(1)}.
+        </Alert>
       ))}
     </Stack>
   );

@@ -7,7 +7,9 @@ export { isLengthUnit };
 
 /** A length in mm shown in a unit, always with the unit. */
 export const showLength = (mm: number | null | undefined, unit: LengthUnit = 'mm', digits?: number) =>
-  mm === null || mm === undefined || !Number.isFinite(mm) ? '—' : `${fromMm(mm, unit).toFixed(digits ?? DIGITS[unit])} ${UNIT_LABELS[unit]}`;
+  mm === null || mm === undefined || !Number.isFinite(mm)
+    ? '—'
+    : `${fromMm(mm, unit).toFixed(digits ?? DIGITS[unit])} ${UNIT_LABELS[unit]}`;
 
 /** Signed, for deviations and residuals: "+0.41 mm". */
 export const showSigned = (mm: number, unit: LengthUnit = 'mm', digits?: number) => {

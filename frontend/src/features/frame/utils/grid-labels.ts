@@ -10,7 +10,8 @@ export function residualOf(mm: number, unit: LengthUnit, digits: number): string
 }
 
 /** "row 2, column 3: +0.41 mm" (the least-squares residual, or the value given). */
-export const namePoint = (p: GridPointResult, unit: LengthUnit, digits: number, valueMm = p.residualMm) => `row ${p.row}, column ${p.column}: ${residualOf(valueMm, unit, digits)}`;
+export const namePoint = (p: GridPointResult, unit: LengthUnit, digits: number, valueMm = p.residualMm) =>
+  `row ${p.row}, column ${p.column}: ${residualOf(valueMm, unit, digits)}`;
 
 /** Positions spread evenly from 0 to the length, rounded to whole mm. */
 export const evenPositions = (count: number, lengthMm: number) =>

@@ -6,7 +6,8 @@ import { historyKeys } from '../types';
 export const workshopHistoryQueryOptions = (filters: HistoryFilters) =>
   infiniteQueryOptions({
     queryKey: historyKeys.list(filters),
-    queryFn: ({ pageParam }) => answer(client.GET('/api/history', { params: { query: historyQuery(filters, pageParam) } })),
+    queryFn: ({ pageParam }) =>
+      answer(client.GET('/api/history', { params: { query: historyQuery(filters, pageParam) } })),
     initialPageParam: null as string | null,
     getNextPageParam: (last) => last.nextCursor,
   });

@@ -22,9 +22,21 @@ export function WorkshopActivity() {
       ) : history.isError ? (
         <ErrorState error={history.error} onRetry={() => history.refetch()} />
       ) : !entries.length ? (
-        <EmptyState title={JSON.stringify(deferred) === JSON.stringify(NO_FILTERS) ? 'No activity yet' : 'Nothing matches these filters'} />
+        <EmptyState
+          title={
+            JSON.stringify(deferred) === JSON.stringify(NO_FILTERS)
+              ? 'No activity yet'
+              : 'Nothing matches these filters'
+          }
+        />
       ) : (
-        <HistoryEntryList entries={entries} showMachine hasMore={history.hasNextPage} loadingMore={history.isFetchingNextPage} onLoadMore={() => history.fetchNextPage()} />
+        <HistoryEntryList
+          entries={entries}
+          showMachine
+          hasMore={history.hasNextPage}
+          loadingMore={history.isFetchingNextPage}
+          onLoadMore={() => history.fetchNextPage()}
+        />
       )}
     </>
   );

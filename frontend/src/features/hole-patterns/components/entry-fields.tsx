@@ -40,7 +40,12 @@ export function EntryFields({ draft, set }: { draft: PatternDraft; set: Set }) {
             label={['rows', 'columns', 'count', 'startAngleDeg'].includes(key) ? label : `${label} (${unit})`}
             value={values[key]}
             slotProps={{ htmlInput: num }}
-            onChange={(e) => set((d) => ({ ...d, [d.entry]: { ...(d[d.entry as 'grid' | 'circle'] as object), [key]: e.target.value } }))}
+            onChange={(e) =>
+              set((d) => ({
+                ...d,
+                [d.entry]: { ...(d[d.entry as 'grid' | 'circle'] as object), [key]: e.target.value },
+              }))
+            }
             sx={{ width: { xs: '47%', sm: 170 } }}
           />
         ))}
@@ -58,15 +63,27 @@ export function EntryFields({ draft, set }: { draft: PatternDraft; set: Set }) {
               label={`${k === 'diameter' ? 'Ø' : k} ${i + 1} (${unit})`}
               value={h[k]}
               slotProps={{ htmlInput: num }}
-              onChange={(e) => set((d) => ({ ...d, holes: d.holes.map((o, j) => (j === i ? { ...o, [k]: e.target.value } : o)) }))}
+              onChange={(e) =>
+                set((d) => ({ ...d, holes: d.holes.map((o, j) => (j === i ? { ...o, [k]: e.target.value } : o)) }))
+              }
             />
           ))}
-          <IconButton aria-label={`Remove hole ${i + 1}`} disabled={draft.holes.length === 1} onClick={() => set((d) => ({ ...d, holes: d.holes.filter((_, j) => j !== i) }))}>
+          <IconButton
+            aria-label={`Remove hole ${i + 1}`}
+            disabled={draft.holes.length === 1}
+            onClick={() => set((d) => ({ ...d, holes: d.holes.filter((_, j) => j !== i) }))}
+          >
             <DeleteOutline />
           </IconButton>
         </Stack>
       ))}
-      <Button startIcon={<AddOutlined />} sx={{ alignSelf: 'flex-start' }} onClick={() => set((d) => ({ ...d, holes: [...d.holes, { x: '', y: '', diameter: d.holes[d.holes.length - 1].diameter }] }))}>
+      <Button
+        startIcon={<AddOutlined />}
+        sx={{ alignSelf: 'flex-start' }}
+        onClick={() =>
+          set((d) => ({ ...d, holes: [...d.holes, { x: '', y: '', diameter: d.holes[d.holes.length - 1].diameter }] }))
+        }
+      >
         Add hole
       </Button>
     </Stack>

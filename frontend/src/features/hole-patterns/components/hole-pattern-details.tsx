@@ -1,6 +1,22 @@
 import { useState } from 'react';
 import { useNavigate } from 'react-router-dom';
-import { Alert, Button, Dialog, DialogActions, DialogContent, DialogTitle, Paper as Sheet, Stack, Table, TableBody, TableCell, TableContainer, TableHead, TableRow, Typography } from '@mui/material';
+import {
+  Alert,
+  Button,
+  Dialog,
+  DialogActions,
+  DialogContent,
+  DialogTitle,
+  Paper as Sheet,
+  Stack,
+  Table,
+  TableBody,
+  TableCell,
+  TableContainer,
+  TableHead,
+  TableRow,
+  Typography,
+} from '@mui/material';
 import EditOutlined from '@mui/icons-material/EditOutlined';
 import DeleteOutline from '@mui/icons-material/DeleteOutlined';
 import { useDeleteHolePattern } from '../api/delete-hole-pattern';
@@ -17,7 +33,15 @@ import { TemplateLinks } from './template-links';
 const mm = (v: number) => Number(v.toFixed(3));
 
 /** One pattern: its drawing, every hole in mm, the template links, and edit/delete for recorders. */
-export function HolePatternDetails({ pattern: p, canEdit, afterDelete }: { pattern: HolePattern; canEdit: boolean; afterDelete: string }) {
+export function HolePatternDetails({
+  pattern: p,
+  canEdit,
+  afterDelete,
+}: {
+  pattern: HolePattern;
+  canEdit: boolean;
+  afterDelete: string;
+}) {
   const [paper, setPaper] = usePaper();
   const [editing, setEditing] = useState(false);
   const [deleting, setDeleting] = useState(false);
@@ -28,7 +52,12 @@ export function HolePatternDetails({ pattern: p, canEdit, afterDelete }: { patte
     <Stack spacing={2.5}>
       <PrintAdvice paper={paper} onPaper={setPaper} />
       <Stack direction="row" spacing={1} useFlexGap sx={{ flexWrap: 'wrap' }}>
-        <TemplateLinks what={p.name} paper={paper} pdfUrl={(x) => patternTemplateUrl(p.id, 'pdf', x)} svgUrl={patternTemplateUrl(p.id, 'svg')} />
+        <TemplateLinks
+          what={p.name}
+          paper={paper}
+          pdfUrl={(x) => patternTemplateUrl(p.id, 'pdf', x)}
+          svgUrl={patternTemplateUrl(p.id, 'svg')}
+        />
         {canEdit && (
           <>
             <Button startIcon={<EditOutlined />} onClick={() => setEditing(true)}>
@@ -42,10 +71,17 @@ export function HolePatternDetails({ pattern: p, canEdit, afterDelete }: { patte
       </Stack>
       <Sheet variant="outlined" sx={{ p: 2 }}>
         <Typography variant="body2" color="text.secondary" gutterBottom>
-          Outline {p.widthMm} × {p.heightMm} mm · reference {REFERENCE_LABELS[p.reference].toLowerCase()} · entered in {p.lengthUnit === 'in' ? 'inches' : 'mm'}
+          Outline {p.widthMm} × {p.heightMm} mm · reference {REFERENCE_LABELS[p.reference].toLowerCase()} · entered in{' '}
+          {p.lengthUnit === 'in' ? 'inches' : 'mm'}
           {p.notes ? ` · ${p.notes}` : ''}
         </Typography>
-        <PatternDrawing widthMm={p.widthMm} heightMm={p.heightMm} holes={p.holes} reference={p.reference} label={`Drawing of ${p.name}`} />
+        <PatternDrawing
+          widthMm={p.widthMm}
+          heightMm={p.heightMm}
+          holes={p.holes}
+          reference={p.reference}
+          label={`Drawing of ${p.name}`}
+        />
       </Sheet>
       <TableContainer component={Sheet} variant="outlined">
         <Table size="small" aria-label="Holes">
@@ -87,7 +123,12 @@ export function HolePatternDetails({ pattern: p, canEdit, afterDelete }: { patte
         </DialogContent>
         <DialogActions>
           <Button onClick={() => setDeleting(false)}>Keep it</Button>
-          <Button color="error" variant="contained" disabled={remove.isPending} onClick={() => remove.mutate(undefined, { onSuccess: () => navigate(afterDelete) })}>
+          <Button
+            color="error"
+            variant="contained"
+            disabled={remove.isPending}
+            onClick={() => remove.mutate(undefined, { onSuccess: () => navigate(afterDelete) })}
+          >
             Delete pattern
           </Button>
         </DialogActions>

@@ -38,17 +38,29 @@ export function HolePatternsPanel({ machineId }: { machineId: string }) {
         </Typography>
         {rails.isPending && <LoadingState label="Loading rails…" />}
         {rails.isError && <ErrorState error={rails.error} onRetry={() => rails.refetch()} />}
-        {rails.data?.length === 0 && <Typography color="text.secondary">No rails yet: add them on the Rails tab and their hole layouts appear here.</Typography>}
+        {rails.data?.length === 0 && (
+          <Typography color="text.secondary">
+            No rails yet: add them on the Rails tab and their hole layouts appear here.
+          </Typography>
+        )}
         <Stack spacing={1.5}>
           {rails.data?.map((r) => (
             <Card key={r.id} variant="outlined">
               <CardContent sx={{ pb: 1 }}>
                 <Typography variant="h4" component="h4">
-                  Rail {r.label} <Typography component="span" color="text.secondary">· axis {r.axis} · {r.lengthMm} mm · {r.holes.length} holes</Typography>
+                  Rail {r.label}{' '}
+                  <Typography component="span" color="text.secondary">
+                    · axis {r.axis} · {r.lengthMm} mm · {r.holes.length} holes
+                  </Typography>
                 </Typography>
               </CardContent>
               <CardActions sx={{ px: 2, pb: 2 }}>
-                <TemplateLinks what={`rail ${r.label}`} paper={paper} pdfUrl={(p) => railTemplateUrl(r.id, 'pdf', p)} svgUrl={railTemplateUrl(r.id, 'svg')} />
+                <TemplateLinks
+                  what={`rail ${r.label}`}
+                  paper={paper}
+                  pdfUrl={(p) => railTemplateUrl(r.id, 'pdf', p)}
+                  svgUrl={railTemplateUrl(r.id, 'svg')}
+                />
               </CardActions>
             </Card>
           ))}
@@ -68,23 +80,43 @@ export function HolePatternsPanel({ machineId }: { machineId: string }) {
         {patterns.isPending && <LoadingState label="Loading patterns…" />}
         {patterns.isError && <ErrorState error={patterns.error} onRetry={() => patterns.refetch()} />}
         {patterns.data?.length === 0 && (
-          <EmptyState title="No hole patterns yet">Enter a bracket’s or plate’s holes as a list, a grid or a bolt circle, and print its template at true scale.</EmptyState>
+          <EmptyState title="No hole patterns yet">
+            Enter a bracket’s or plate’s holes as a list, a grid or a bolt circle, and print its template at true scale.
+          </EmptyState>
         )}
         <Grid container spacing={2}>
           {patterns.data?.map((p) => (
             <Grid key={p.id} size={{ xs: 12, sm: 6, lg: 4 }}>
               <Card variant="outlined" sx={{ height: '100%' }}>
                 <CardContent>
-                  <Link component={RouterLink} to={paths.holePattern(machineId, p.id)} variant="h4" sx={{ display: 'inline-flex', alignItems: 'center', minHeight: { xs: 44, md: 'auto' } }}>
+                  <Link
+                    component={RouterLink}
+                    to={paths.holePattern(machineId, p.id)}
+                    variant="h4"
+                    sx={{ display: 'inline-flex', alignItems: 'center', minHeight: { xs: 44, md: 'auto' } }}
+                  >
                     {p.name}
                   </Link>
                   <Typography variant="body2" color="text.secondary" sx={{ mb: 1 }}>
-                    {p.widthMm} × {p.heightMm} mm · {p.holes.length} holes · reference {REFERENCE_LABELS[p.reference].toLowerCase()}
+                    {p.widthMm} × {p.heightMm} mm · {p.holes.length} holes · reference{' '}
+                    {REFERENCE_LABELS[p.reference].toLowerCase()}
                   </Typography>
-                  <PatternDrawing widthMm={p.widthMm} heightMm={p.heightMm} holes={p.holes} reference={p.reference} label={`Drawing of ${p.name}`} maxHeight={160} />
+                  <PatternDrawing
+                    widthMm={p.widthMm}
+                    heightMm={p.heightMm}
+                    holes={p.holes}
+                    reference={p.reference}
+                    label={`Drawing of ${p.name}`}
+                    maxHeight={160}
+                  />
                 </CardContent>
                 <CardActions sx={{ px: 2, pb: 2 }}>
-                  <TemplateLinks what={p.name} paper={paper} pdfUrl={(x) => patternTemplateUrl(p.id, 'pdf', x)} svgUrl={patternTemplateUrl(p.id, 'svg')} />
+                  <TemplateLinks
+                    what={p.name}
+                    paper={paper}
+                    pdfUrl={(x) => patternTemplateUrl(p.id, 'pdf', x)}
+                    svgUrl={patternTemplateUrl(p.id, 'svg')}
+                  />
                 </CardActions>
               </Card>
             </Grid>

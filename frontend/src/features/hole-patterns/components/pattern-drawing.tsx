@@ -17,7 +17,16 @@ function referenceEdges(ref: PatternReference, w: number, h: number): [number, n
   const right: [number, number, number, number] = [w, 0, w, h];
   const bottom: [number, number, number, number] = [0, 0, w, 0];
   const top: [number, number, number, number] = [0, h, w, h];
-  const byName = { left: [left], right: [right], bottom: [bottom], top: [top], 'bottom-left': [left, bottom], 'bottom-right': [right, bottom], 'top-left': [left, top], 'top-right': [right, top] };
+  const byName = {
+    left: [left],
+    right: [right],
+    bottom: [bottom],
+    top: [top],
+    'bottom-left': [left, bottom],
+    'bottom-right': [right, bottom],
+    'top-left': [left, top],
+    'top-right': [right, top],
+  };
   return byName[ref];
 }
 
@@ -31,7 +40,13 @@ export function PatternDrawing({ widthMm, heightMm, holes, reference, label, max
   const Y = (y: number) => heightMm - y;
   return (
     <Box sx={{ width: '100%', maxHeight, display: 'flex', justifyContent: 'center' }}>
-      <svg role="img" aria-label={label} viewBox={`${-pad} ${-pad} ${widthMm + 2 * pad} ${heightMm + 2 * pad}`} style={{ width: '100%', maxHeight, display: 'block' }} preserveAspectRatio="xMidYMid meet">
+      <svg
+        role="img"
+        aria-label={label}
+        viewBox={`${-pad} ${-pad} ${widthMm + 2 * pad} ${heightMm + 2 * pad}`}
+        style={{ width: '100%', maxHeight, display: 'block' }}
+        preserveAspectRatio="xMidYMid meet"
+      >
         <rect x={0} y={0} width={widthMm} height={heightMm} fill="#f6f4ef" stroke="#4d5855" strokeWidth={stroke} />
         {referenceEdges(reference, widthMm, heightMm).map(([x1, y1, x2, y2], i) => (
           <line key={i} x1={x1} y1={Y(y1)} x2={x2} y2={Y(y2)} stroke="#1d4f4a" strokeWidth={stroke * 4} />
@@ -42,7 +57,11 @@ export function PatternDrawing({ widthMm, heightMm, holes, reference, label, max
           return (
             <g key={i}>
               <circle cx={h.xMm} cy={Y(h.yMm)} r={r} fill="#fff" stroke="#1e2624" strokeWidth={stroke} />
-              <path d={`M ${h.xMm - arm} ${Y(h.yMm)} H ${h.xMm + arm} M ${h.xMm} ${Y(h.yMm) - arm} V ${Y(h.yMm) + arm}`} stroke="#1e2624" strokeWidth={stroke * 0.6} />
+              <path
+                d={`M ${h.xMm - arm} ${Y(h.yMm)} H ${h.xMm + arm} M ${h.xMm} ${Y(h.yMm) - arm} V ${Y(h.yMm) + arm}`}
+                stroke="#1e2624"
+                strokeWidth={stroke * 0.6}
+              />
             </g>
           );
         })}

@@ -7,9 +7,18 @@ export function PrintAdvice({ paper, onPaper }: { paper: Paper; onPaper: (p: Pap
     <Alert severity="info" icon={false}>
       <Stack direction={{ xs: 'column', sm: 'row' }} spacing={2} sx={{ alignItems: { sm: 'center' } }}>
         <Typography variant="body2" sx={{ flex: 1 }}>
-          Print templates at <strong>actual size</strong> (100 %, no “fit to page”), then measure the 100 mm bar on the sheet before you centre-punch. Long patterns come on several sheets: trim, overlap on the round marks and tape.
+          Print templates at <strong>actual size</strong> (100 %, no “fit to page”), then measure the 100 mm bar on the
+          sheet before you centre-punch. Long patterns come on several sheets: trim, overlap on the round marks and
+          tape.
         </Typography>
-        <TextField select size="small" label="Paper" value={paper} onChange={(e) => onPaper(e.target.value as Paper)} sx={{ minWidth: 120 }}>
+        <TextField
+          select
+          size="small"
+          label="Paper"
+          value={paper}
+          onChange={(e) => onPaper(e.target.value as Paper)}
+          sx={{ minWidth: 120 }}
+        >
           <MenuItem value="a4">A4</MenuItem>
           <MenuItem value="letter">Letter</MenuItem>
         </TextField>

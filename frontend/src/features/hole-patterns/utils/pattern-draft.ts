@@ -40,8 +40,12 @@ export function draftOf(p: HolePattern): PatternDraft {
     height: s(p.height),
     entry: p.entry,
     holes: p.holesEntered ? p.holesEntered.map((h) => ({ x: s(h.x), y: s(h.y), diameter: s(h.diameter) })) : d.holes,
-    grid: p.grid ? (Object.fromEntries(Object.entries(p.grid).map(([k, v]) => [k, s(v)])) as PatternDraft['grid']) : d.grid,
-    circle: p.circle ? (Object.fromEntries(Object.entries(p.circle).map(([k, v]) => [k, s(v)])) as PatternDraft['circle']) : d.circle,
+    grid: p.grid
+      ? (Object.fromEntries(Object.entries(p.grid).map(([k, v]) => [k, s(v)])) as PatternDraft['grid'])
+      : d.grid,
+    circle: p.circle
+      ? (Object.fromEntries(Object.entries(p.circle).map(([k, v]) => [k, s(v)])) as PatternDraft['circle'])
+      : d.circle,
     notes: p.notes,
   };
 }
@@ -68,10 +72,20 @@ export function inputOf(d: PatternDraft): PatternInput | null {
   const width = parseNumber(d.width);
   const height = parseNumber(d.height);
   if (width === null || height === null || !d.name.trim()) return null;
-  const base = { name: d.name.trim(), reference: d.reference, lengthUnit: d.unit, width, height, entry: d.entry, notes: d.notes };
+  const base = {
+    name: d.name.trim(),
+    reference: d.reference,
+    lengthUnit: d.unit,
+    width,
+    height,
+    entry: d.entry,
+    notes: d.notes,
+  };
   if (d.entry === 'list') {
     const holes = d.holes.map((h) => numbers(h));
-    return holes.every((h) => h !== null) && holes.length ? { ...base, holes: holes as NonNullable<(typeof holes)[number]>[] } : null;
+    return holes.every((h) => h !== null) && holes.length
+      ? { ...base, holes: holes as NonNullable<(typeof holes)[number]>[] }
+      : null;
   }
   if (d.entry === 'grid') {
     const grid = numbers(d.grid);

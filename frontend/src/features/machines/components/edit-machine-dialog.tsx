@@ -15,7 +15,15 @@ const fromMachine = (m: Machine): MachineFormValues => ({
   targetSetId: m.targetSet.id,
 });
 
-export function EditMachineDialog({ machine, open, onClose }: { machine: Machine; open: boolean; onClose: () => void }) {
+export function EditMachineDialog({
+  machine,
+  open,
+  onClose,
+}: {
+  machine: Machine;
+  open: boolean;
+  onClose: () => void;
+}) {
   const [values, setValues] = useState(() => fromMachine(machine));
   const [tried, setTried] = useState(false);
   const update = useUpdateMachine(machine.id);
@@ -34,10 +42,20 @@ export function EditMachineDialog({ machine, open, onClose }: { machine: Machine
 
   return (
     // A stray click beside the form (or one that lands as a menu closes) must not throw away what was typed: Cancel or Escape closes it.
-    <Dialog open={open} onClose={(_e, reason) => reason !== 'backdropClick' && close()} fullWidth maxWidth="sm" slotProps={{ transition: { onEnter: () => setValues(fromMachine(machine)) } }}>
+    <Dialog
+      open={open}
+      onClose={(_e, reason) => reason !== 'backdropClick' && close()}
+      fullWidth
+      maxWidth="sm"
+      slotProps={{ transition: { onEnter: () => setValues(fromMachine(machine)) } }}
+    >
       <DialogTitle>Edit specification</DialogTitle>
       <DialogContent>
-        {update.error && <Alert severity="error" sx={{ mb: 1 }}>{update.error.message}</Alert>}
+        {update.error && (
+          <Alert severity="error" sx={{ mb: 1 }}>
+            {update.error.message}
+          </Alert>
+        )}
         <MachineFormFields values={values} onChange={setValues} targetSets={sets.data ?? []} showErrors={tried} />
       </DialogContent>
       <DialogActions>

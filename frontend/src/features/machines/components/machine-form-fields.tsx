@@ -14,7 +14,15 @@ export interface MachineFormValues {
   targetSetId: string;
 }
 
-export const emptyMachineForm: MachineFormValues = { name: '', kind: 'plasma', lengthUnit: 'mm', x: '', y: '', notes: '', targetSetId: '' };
+export const emptyMachineForm: MachineFormValues = {
+  name: '',
+  kind: 'plasma',
+  lengthUnit: 'mm',
+  x: '',
+  y: '',
+  notes: '',
+  targetSetId: '',
+};
 
 /** Field problems in words, checked before anything is sent (the server checks again). */
 export function machineFormErrors(v: MachineFormValues): Partial<Record<keyof MachineFormValues, string>> {
@@ -54,10 +62,21 @@ export function MachineFormFields({
 }) {
   const errors = showErrors ? machineFormErrors(values) : {};
   const set = (patch: Partial<MachineFormValues>) => onChange({ ...values, ...patch });
-  const unitSlot = { input: { endAdornment: <InputAdornment position="end">{UNIT_LABELS[values.lengthUnit]}</InputAdornment> }, htmlInput: { inputMode: 'decimal' as const } };
+  const unitSlot = {
+    input: { endAdornment: <InputAdornment position="end">{UNIT_LABELS[values.lengthUnit]}</InputAdornment> },
+    htmlInput: { inputMode: 'decimal' as const },
+  };
   return (
     <Stack spacing={2} sx={{ pt: 1 }}>
-      <TextField label="Name" value={values.name} onChange={(e) => set({ name: e.target.value })} required autoFocus={autoFocus} error={!!errors.name} helperText={errors.name} />
+      <TextField
+        label="Name"
+        value={values.name}
+        onChange={(e) => set({ name: e.target.value })}
+        required
+        autoFocus={autoFocus}
+        error={!!errors.name}
+        helperText={errors.name}
+      />
       <TextField select label="Kind" value={values.kind} onChange={(e) => set({ kind: e.target.value as MachineKind })}>
         {(Object.keys(KIND_LABELS) as MachineKind[]).map((k) => (
           <MenuItem key={k} value={k}>
@@ -65,18 +84,50 @@ export function MachineFormFields({
           </MenuItem>
         ))}
       </TextField>
-      <UnitFamilySelect family="length" label="Work area unit" value={values.lengthUnit} onChange={(lengthUnit) => set({ lengthUnit })} units={['mm', 'in']} />
+      <UnitFamilySelect
+        family="length"
+        label="Work area unit"
+        value={values.lengthUnit}
+        onChange={(lengthUnit) => set({ lengthUnit })}
+        units={['mm', 'in']}
+      />
       {/* One above the other on a phone: side by side, a label and its unit do not both fit. */}
-      <Stack direction={{ xs: 'column', sm: 'row' }} spacing={{ xs: 2, sm: 1.5 }} sx={{ alignItems: { sm: 'flex-start' } }}>
-        <TextField label="Work area X" value={values.x} onChange={(e) => set({ x: e.target.value })} required slotProps={unitSlot} error={!!errors.x} helperText={errors.x ?? 'Width to cover'} fullWidth />
-        <TextField label="Work area Y" value={values.y} onChange={(e) => set({ y: e.target.value })} required slotProps={unitSlot} error={!!errors.y} helperText={errors.y ?? 'Length to cover'} fullWidth />
+      <Stack
+        direction={{ xs: 'column', sm: 'row' }}
+        spacing={{ xs: 2, sm: 1.5 }}
+        sx={{ alignItems: { sm: 'flex-start' } }}
+      >
+        <TextField
+          label="Work area X"
+          value={values.x}
+          onChange={(e) => set({ x: e.target.value })}
+          required
+          slotProps={unitSlot}
+          error={!!errors.x}
+          helperText={errors.x ?? 'Width to cover'}
+          fullWidth
+        />
+        <TextField
+          label="Work area Y"
+          value={values.y}
+          onChange={(e) => set({ y: e.target.value })}
+          required
+          slotProps={unitSlot}
+          error={!!errors.y}
+          helperText={errors.y ?? 'Length to cover'}
+          fullWidth
+        />
       </Stack>
       <TextField
         select
         label="Target set"
         value={values.targetSetId}
         onChange={(e) => set({ targetSetId: e.target.value })}
-        helperText={values.targetSetId ? targetSets.find((t) => t.id === values.targetSetId)?.description : 'The default set for the kind of machine'}
+        helperText={
+          values.targetSetId
+            ? targetSets.find((t) => t.id === values.targetSetId)?.description
+            : 'The default set for the kind of machine'
+        }
       >
         <MenuItem value="">Default for the kind</MenuItem>
         {targetSets.map((t) => (
@@ -85,7 +136,13 @@ export function MachineFormFields({
           </MenuItem>
         ))}
       </TextField>
-      <TextField label="Notes" value={values.notes} onChange={(e) => set({ notes: e.target.value })} multiline minRows={3} />
+      <TextField
+        label="Notes"
+        value={values.notes}
+        onChange={(e) => set({ notes: e.target.value })}
+        multiline
+        minRows={3}
+      />
     </Stack>
   );
 }

@@ -22,9 +22,18 @@ export function MachineHistory({ machineId }: { machineId: string }) {
       ) : history.isError ? (
         <ErrorState error={history.error} onRetry={() => history.refetch()} />
       ) : !entries.length ? (
-        <EmptyState title={JSON.stringify(deferred) === JSON.stringify(NO_FILTERS) ? 'No changes yet' : 'Nothing matches these filters'} />
+        <EmptyState
+          title={
+            JSON.stringify(deferred) === JSON.stringify(NO_FILTERS) ? 'No changes yet' : 'Nothing matches these filters'
+          }
+        />
       ) : (
-        <HistoryEntryList entries={entries} hasMore={history.hasNextPage} loadingMore={history.isFetchingNextPage} onLoadMore={() => history.fetchNextPage()} />
+        <HistoryEntryList
+          entries={entries}
+          hasMore={history.hasNextPage}
+          loadingMore={history.isFetchingNextPage}
+          onLoadMore={() => history.fetchNextPage()}
+        />
       )}
     </>
   );

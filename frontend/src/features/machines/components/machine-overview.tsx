@@ -15,7 +15,10 @@ export function MachineOverview({ machine }: { machine: Machine }) {
   const rows: [string, string][] = [
     ['Name', machine.name],
     ['Kind', KIND_LABELS[machine.kind]],
-    ['Work area to cover', `${machine.workAreaInLengthUnit.x} × ${machine.workAreaInLengthUnit.y} ${UNIT_LABELS[machine.lengthUnit]}`],
+    [
+      'Work area to cover',
+      `${machine.workAreaInLengthUnit.x} × ${machine.workAreaInLengthUnit.y} ${UNIT_LABELS[machine.lengthUnit]}`,
+    ],
     ['Target set', machine.targetSet.name],
     ['Last activity', formatDateTime(machine.lastActivityAt)],
   ];

@@ -1,6 +1,21 @@
 import { useMemo, useState } from 'react';
 import { Link as RouterLink } from 'react-router-dom';
-import { Box, Chip, InputAdornment, Link, Paper, Table, TableBody, TableCell, TableContainer, TableHead, TableRow, TableSortLabel, TextField, Typography } from '@mui/material';
+import {
+  Box,
+  Chip,
+  InputAdornment,
+  Link,
+  Paper,
+  Table,
+  TableBody,
+  TableCell,
+  TableContainer,
+  TableHead,
+  TableRow,
+  TableSortLabel,
+  TextField,
+  Typography,
+} from '@mui/material';
 import SearchOutlined from '@mui/icons-material/SearchOutlined';
 import { paths } from '../../../config/paths';
 import type { MachineState } from '../../../lib/machine-state';
@@ -34,19 +49,33 @@ export function MachinesTable({ machines }: { machines: MachineListItem[] }) {
   }, [machines]);
   const shown = useMemo(() => {
     const needle = text.trim().toLowerCase();
-    const kept = machines.filter((m) => (!stateFilter || m.state === stateFilter) && (!needle || m.name.toLowerCase().includes(needle)));
+    const kept = machines.filter(
+      (m) => (!stateFilter || m.state === stateFilter) && (!needle || m.name.toLowerCase().includes(needle)),
+    );
     return sortMachines(kept, sort);
   }, [machines, stateFilter, text, sort]);
-  const sortBy = (by: MachineSort['by']) => setSort((s) => ({ by, direction: s.by === by && s.direction === 'asc' ? 'desc' : 'asc' }));
+  const sortBy = (by: MachineSort['by']) =>
+    setSort((s) => ({ by, direction: s.by === by && s.direction === 'asc' ? 'desc' : 'asc' }));
 
   return (
     <Paper sx={{ width: '100%' }}>
       <Box sx={{ display: 'flex', gap: 1.5, flexWrap: 'wrap', alignItems: 'center', px: 1.5, pt: 1.5 }}>
-        <Box role="group" aria-label="Filter by state" sx={{ display: 'flex', gap: 1, flexWrap: 'wrap', alignItems: 'center', flex: '1 1 420px' }}>
+        <Box
+          role="group"
+          aria-label="Filter by state"
+          sx={{ display: 'flex', gap: 1, flexWrap: 'wrap', alignItems: 'center', flex: '1 1 420px' }}
+        >
           <Typography variant="body2" color="text.secondary" sx={{ mr: 0.5 }}>
             State
           </Typography>
-          <Chip label="All" size="small" color={stateFilter ? 'default' : 'primary'} variant={stateFilter ? 'outlined' : 'filled'} onClick={() => setStateFilter(null)} aria-pressed={!stateFilter} />
+          <Chip
+            label="All"
+            size="small"
+            color={stateFilter ? 'default' : 'primary'}
+            variant={stateFilter ? 'outlined' : 'filled'}
+            onClick={() => setStateFilter(null)}
+            aria-pressed={!stateFilter}
+          />
           {STATES.map((s) => (
             <Chip
               key={s}
@@ -65,7 +94,15 @@ export function MachinesTable({ machines }: { machines: MachineListItem[] }) {
           value={text}
           onChange={(e) => setText(e.target.value)}
           sx={{ width: { xs: '100%', sm: 220 } }}
-          slotProps={{ input: { startAdornment: <InputAdornment position="start"><SearchOutlined fontSize="small" /></InputAdornment> } }}
+          slotProps={{
+            input: {
+              startAdornment: (
+                <InputAdornment position="start">
+                  <SearchOutlined fontSize="small" />
+                </InputAdornment>
+              ),
+            },
+          }}
         />
       </Box>
       <TableContainer>
@@ -73,8 +110,16 @@ export function MachinesTable({ machines }: { machines: MachineListItem[] }) {
           <TableHead>
             <TableRow>
               {COLUMNS.map((c) => (
-                <TableCell key={c.key} sortDirection={sort.by === c.key ? sort.direction : false} sx={c.narrow ? undefined : wideOnly}>
-                  <TableSortLabel active={sort.by === c.key} direction={sort.by === c.key ? sort.direction : 'asc'} onClick={() => sortBy(c.key)}>
+                <TableCell
+                  key={c.key}
+                  sortDirection={sort.by === c.key ? sort.direction : false}
+                  sx={c.narrow ? undefined : wideOnly}
+                >
+                  <TableSortLabel
+                    active={sort.by === c.key}
+                    direction={sort.by === c.key ? sort.direction : 'asc'}
+                    onClick={() => sortBy(c.key)}
+                  >
                     {c.label}
                   </TableSortLabel>
                 </TableCell>
@@ -85,7 +130,16 @@ export function MachinesTable({ machines }: { machines: MachineListItem[] }) {
             {shown.map((m) => (
               <TableRow key={m.id} hover>
                 <TableCell>
-                  <Link component={RouterLink} to={paths.machine(m.id)} sx={{ fontWeight: 500, display: 'inline-flex', alignItems: 'center', minHeight: { xs: 44, md: 'auto' } }}>
+                  <Link
+                    component={RouterLink}
+                    to={paths.machine(m.id)}
+                    sx={{
+                      fontWeight: 500,
+                      display: 'inline-flex',
+                      alignItems: 'center',
+                      minHeight: { xs: 44, md: 'auto' },
+                    }}
+                  >
                     {m.name}
                   </Link>
                   <Typography variant="body2" color="text.secondary" sx={{ display: { sm: 'none' } }}>

@@ -23,15 +23,30 @@ export function NewMachineDialog({ open, onClose }: { open: boolean; onClose: ()
   const submit = () => {
     setTried(true);
     if (Object.keys(machineFormErrors(values)).length) return;
-    create.mutate(toMachineInput(values), { onSuccess: (m) => { close(); navigate(paths.machine(m.id)); } });
+    create.mutate(toMachineInput(values), {
+      onSuccess: (m) => {
+        close();
+        navigate(paths.machine(m.id));
+      },
+    });
   };
 
   return (
     <Dialog open={open} onClose={close} fullWidth maxWidth="sm">
       <DialogTitle>New machine</DialogTitle>
       <DialogContent>
-        {create.error && <Alert severity="error" sx={{ mb: 1 }}>{create.error.message}</Alert>}
-        <MachineFormFields values={values} onChange={setValues} targetSets={sets.data ?? []} showErrors={tried} autoFocus />
+        {create.error && (
+          <Alert severity="error" sx={{ mb: 1 }}>
+            {create.error.message}
+          </Alert>
+        )}
+        <MachineFormFields
+          values={values}
+          onChange={setValues}
+          targetSets={sets.data ?? []}
+          showErrors={tried}
+          autoFocus
+        />
       </DialogContent>
       <DialogActions>
         <Button onClick={close}>Cancel</Button>

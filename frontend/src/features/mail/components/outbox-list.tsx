@@ -1,5 +1,15 @@
 import { useState } from 'react';
-import { Accordion, Alert, AccordionDetails, AccordionSummary, Box, Chip, Link, Stack, Typography } from '@mui/material';
+import {
+  Accordion,
+  Alert,
+  AccordionDetails,
+  AccordionSummary,
+  Box,
+  Chip,
+  Link,
+  Stack,
+  Typography,
+} from '@mui/material';
 import ExpandMoreIcon from '@mui/icons-material/ExpandMore';
 import AttachFileOutlined from '@mui/icons-material/AttachFileOutlined';
 import { LoadingState } from '../../../components/states/loading-state';
@@ -15,7 +25,15 @@ const URL_RE = /(https?:\/\/[^\s]+)/g;
 function Body({ text }: { text: string }) {
   return (
     <Typography component="pre" sx={{ whiteSpace: 'pre-wrap', fontFamily: 'inherit', m: 0, wordBreak: 'break-word' }}>
-      {text.split(URL_RE).map((part, i) => (/^https?:\/\//.test(part) ? <Link key={i} href={part}>{part}</Link> : part))}
+      {text.split(URL_RE).map((part, i) =>
+        /^https?:\/\//.test(part) ? (
+          <Link key={i} href={part}>
+            {part}
+          </Link>
+        ) : (
+          part
+        ),
+      )}
     </Typography>
   );
 }
@@ -26,7 +44,12 @@ export function OutboxList() {
   const [open, setOpen] = useState<string | false>(false);
   if (outbox.isPending) return <LoadingState label="Reading the outbox…" />;
   if (outbox.isError) return <ErrorState error={outbox.error} onRetry={() => outbox.refetch()} />;
-  if (!outbox.data.length) return <EmptyState title="No messages yet">Mail the product sends (invitations, approval requests, approvals, re-checks) appears here.</EmptyState>;
+  if (!outbox.data.length)
+    return (
+      <EmptyState title="No messages yet">
+        Mail the product sends (invitations, approval requests, approvals, re-checks) appears here.
+      </EmptyState>
+    );
   return (
     <Box>
       {outbox.data.map((m) => (
@@ -36,12 +59,15 @@ export function OutboxList() {
               <Typography sx={{ fontWeight: 600 }}>{m.subject}</Typography>
               <Typography variant="body2" color="text.secondary" noWrap>
                 to {m.to.join(', ')} · {formatDateTime(m.receivedAt)}
-                {m.attachments.length > 0 && ` · ${m.attachments.length} attachment${m.attachments.length > 1 ? 's' : ''}`}
+                {m.attachments.length > 0 &&
+                  ` · ${m.attachments.length} attachment${m.attachments.length > 1 ? 's' : ''}`}
               </Typography>
             </Stack>
           </AccordionSummary>
           <AccordionDetails>
-            <Typography variant="caption" color="text.secondary" component="p" sx={{ mb: 1 }}>From {m.from}</Typography>
+            <Typography variant="caption" color="text.secondary" component="p" sx={{ mb: 1 }}>
+              From {m.from}
+            </Typography>
             {m.linkHidden && (
               <Alert severity="info" sx={{ mb: 1 }}>
                 Sent to {m.to.join(', ')}, link hidden: a password link is for its recipient alone.
@@ -49,7 +75,15 @@ export function OutboxList() {
             )}
             <Body text={m.text} />
             {m.attachments.map((a) => (
-              <Chip key={a.index} icon={<AttachFileOutlined />} label={`${a.filename} (${Math.ceil(a.sizeBytes / 1024)} kB)`} component="a" href={attachmentUrl(m.id, a.index)} clickable sx={{ mt: 1, mr: 1 }} />
+              <Chip
+                key={a.index}
+                icon={<AttachFileOutlined />}
+                label={`${a.filename} (${Math.ceil(a.sizeBytes / 1024)} kB)`}
+                component="a"
+                href={attachmentUrl(m.id, a.index)}
+                clickable
+                sx={{ mt: 1, mr: 1 }}
+              />
             ))}
           </AccordionDetails>
         </Accordion>

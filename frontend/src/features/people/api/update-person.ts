@@ -6,7 +6,8 @@ import { peopleKeys } from '../types';
 export function useUpdatePerson() {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: ({ id, ...body }: { id: string } & Schemas['UpdatePersonDto']) => answer(client.PATCH('/api/people/{id}', { params: { path: { id } }, body })),
+    mutationFn: ({ id, ...body }: { id: string } & Schemas['UpdatePersonDto']) =>
+      answer(client.PATCH('/api/people/{id}', { params: { path: { id } }, body })),
     onSettled: () => qc.invalidateQueries({ queryKey: peopleKeys.all }),
   });
 }

@@ -1,5 +1,16 @@
 import { useState } from 'react';
-import { Alert, Button, Dialog, DialogActions, DialogContent, DialogTitle, MenuItem, Stack, TextField, Typography } from '@mui/material';
+import {
+  Alert,
+  Button,
+  Dialog,
+  DialogActions,
+  DialogContent,
+  DialogTitle,
+  MenuItem,
+  Stack,
+  TextField,
+  Typography,
+} from '@mui/material';
 import type { Role } from '../../../lib/session/user';
 import { ROLE_LABELS } from '../../../lib/session/roles';
 import { useAddPerson } from '../api/add-person';
@@ -28,14 +39,18 @@ export function AddPersonDialog({ open, onClose }: { open: boolean; onClose: () 
       <DialogContent>
         {done ? (
           <Stack spacing={2} sx={{ pt: 1 }}>
-            <Alert severity="success">{done.person.name} is a member as {ROLE_LABELS[done.person.role].toLowerCase()}.</Alert>
+            <Alert severity="success">
+              {done.person.name} is a member as {ROLE_LABELS[done.person.role].toLowerCase()}.
+            </Alert>
             {done.invitationSent ? (
               <Typography>
-                We have e-mailed {done.person.email} a link to choose their password. It works once, until {formatDateTime(done.invitationExpiresAt)}.
+                We have e-mailed {done.person.email} a link to choose their password. It works once, until{' '}
+                {formatDateTime(done.invitationExpiresAt)}.
               </Typography>
             ) : (
               <Alert severity="warning">
-                The sign-in mail to {done.person.email} could not be sent. The link is only ever sent to them: check the mail settings, then use “Send sign-in link” on their row.
+                The sign-in mail to {done.person.email} could not be sent. The link is only ever sent to them: check the
+                mail settings, then use “Send sign-in link” on their row.
               </Alert>
             )}
           </Stack>
@@ -57,7 +72,11 @@ export function AddPersonDialog({ open, onClose }: { open: boolean; onClose: () 
       <DialogActions>
         <Button onClick={close}>{done ? 'Done' : 'Cancel'}</Button>
         {!done && (
-          <Button variant="contained" disabled={!name.trim() || !email.trim() || add.isPending} onClick={() => add.mutate({ name: name.trim(), email: email.trim(), role })}>
+          <Button
+            variant="contained"
+            disabled={!name.trim() || !email.trim() || add.isPending}
+            onClick={() => add.mutate({ name: name.trim(), email: email.trim(), role })}
+          >
             Add member
           </Button>
         )}

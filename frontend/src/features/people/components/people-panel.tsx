@@ -1,5 +1,18 @@
 import { useState } from 'react';
-import { Alert, Box, Button, Chip, MenuItem, Paper, Select, Table, TableBody, TableCell, TableHead, TableRow } from '@mui/material';
+import {
+  Alert,
+  Box,
+  Button,
+  Chip,
+  MenuItem,
+  Paper,
+  Select,
+  Table,
+  TableBody,
+  TableCell,
+  TableHead,
+  TableRow,
+} from '@mui/material';
 import PersonAddOutlined from '@mui/icons-material/PersonAddOutlined';
 import type { Role } from '../../../lib/session/user';
 import { ROLE_LABELS } from '../../../lib/session/roles';
@@ -37,8 +50,14 @@ export function PeoplePanel() {
         </Button>
       </Box>
       {resend.data && (
-        <Alert severity={resend.data.invitationSent ? 'success' : 'warning'} sx={{ mb: 2 }} onClose={() => resend.reset()}>
-          {resend.data.invitationSent ? 'A new sign-in link is on its way to them.' : 'The mail could not be sent. Check the mail settings and try again.'}
+        <Alert
+          severity={resend.data.invitationSent ? 'success' : 'warning'}
+          sx={{ mb: 2 }}
+          onClose={() => resend.reset()}
+        >
+          {resend.data.invitationSent
+            ? 'A new sign-in link is on its way to them.'
+            : 'The mail could not be sent. Check the mail settings and try again.'}
         </Alert>
       )}
       {reset.data && (
@@ -77,7 +96,10 @@ export function PeoplePanel() {
           <TableBody>
             {people.data.map((p) => (
               <TableRow key={p.id} sx={{ opacity: p.active ? 1 : 0.6 }}>
-                <TableCell>{p.name}{p.id === me.data?.id ? ' (you)' : ''}</TableCell>
+                <TableCell>
+                  {p.name}
+                  {p.id === me.data?.id ? ' (you)' : ''}
+                </TableCell>
                 <TableCell>{p.email}</TableCell>
                 <TableCell>
                   <Select
@@ -107,7 +129,11 @@ export function PeoplePanel() {
                       Reset password
                     </Button>
                   )}
-                  <Button size="small" color={p.active ? 'error' : 'primary'} onClick={() => update.mutate({ id: p.id, active: !p.active })}>
+                  <Button
+                    size="small"
+                    color={p.active ? 'error' : 'primary'}
+                    onClick={() => update.mutate({ id: p.id, active: !p.active })}
+                  >
                     {p.active ? 'Deactivate' : 'Reactivate'}
                   </Button>
                 </TableCell>

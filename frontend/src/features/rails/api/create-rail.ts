@@ -8,7 +8,9 @@ export type RailInput = Schemas['CreateRailDto'];
 export function useCreateRail(machineId: string) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (body: RailInput) => answer(client.POST('/api/machines/{id}/rails', { params: { path: { id: machineId } }, body })),
-    onSuccess: () => Promise.all([qc.invalidateQueries({ queryKey: railKeys.all }), qc.invalidateQueries({ queryKey: ['machines'] })]),
+    mutationFn: (body: RailInput) =>
+      answer(client.POST('/api/machines/{id}/rails', { params: { path: { id: machineId } }, body })),
+    onSuccess: () =>
+      Promise.all([qc.invalidateQueries({ queryKey: railKeys.all }), qc.invalidateQueries({ queryKey: ['machines'] })]),
   });
 }

@@ -6,6 +6,7 @@ export function useDeleteRail(id: string) {
   const qc = useQueryClient();
   return useMutation({
     mutationFn: async () => void (await client.DELETE('/api/rails/{id}', { params: { path: { id } } })),
-    onSuccess: () => Promise.all([qc.invalidateQueries({ queryKey: railKeys.all }), qc.invalidateQueries({ queryKey: ['machines'] })]),
+    onSuccess: () =>
+      Promise.all([qc.invalidateQueries({ queryKey: railKeys.all }), qc.invalidateQueries({ queryKey: ['machines'] })]),
   });
 }

@@ -6,6 +6,7 @@ export function useDeleteSweep() {
   const qc = useQueryClient();
   return useMutation({
     mutationFn: async (id: string) => void (await client.DELETE('/api/sweeps/{id}', { params: { path: { id } } })),
-    onSuccess: () => Promise.all([qc.invalidateQueries({ queryKey: railKeys.all }), qc.invalidateQueries({ queryKey: ['machines'] })]),
+    onSuccess: () =>
+      Promise.all([qc.invalidateQueries({ queryKey: railKeys.all }), qc.invalidateQueries({ queryKey: ['machines'] })]),
   });
 }

@@ -3,6 +3,10 @@ import { answer, client } from '../../../lib/api-client';
 import { railKeys } from '../types';
 
 export const boltTorquesQueryOptions = () =>
-  queryOptions({ queryKey: railKeys.boltTorques(), queryFn: () => answer(client.GET('/api/rails/bolt-torques')), staleTime: Infinity });
+  queryOptions({
+    queryKey: railKeys.boltTorques(),
+    queryFn: () => answer(client.GET('/api/rails/bolt-torques')),
+    staleTime: Infinity,
+  });
 
 export const useBoltTorques = () => useQuery(boltTorquesQueryOptions());

@@ -11,7 +11,11 @@ export const sweepsQueryOptions = (railId: string) =>
   infiniteQueryOptions({
     queryKey: railKeys.sweeps(railId),
     queryFn: async ({ pageParam }): Promise<SweepListItem[]> =>
-      (await answer(client.GET('/api/rails/{id}/sweeps', { params: { path: { id: railId }, query: { limit: SWEEP_PAGE_SIZE, cursor: pageParam || undefined } } }))) as SweepListItem[],
+      (await answer(
+        client.GET('/api/rails/{id}/sweeps', {
+          params: { path: { id: railId }, query: { limit: SWEEP_PAGE_SIZE, cursor: pageParam || undefined } },
+        }),
+      )) as SweepListItem[],
     initialPageParam: '',
     getNextPageParam: (last) => (last.length === SWEEP_PAGE_SIZE ? last[last.length - 1].id : undefined),
     select: (data) => data.pages.flat(),

@@ -6,7 +6,8 @@ import { railKeys } from '../types';
 export function useUpdateRail(id: string) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (body: Schemas['UpdateRailDto']) => answer(client.PATCH('/api/rails/{id}', { params: { path: { id } }, body })),
+    mutationFn: (body: Schemas['UpdateRailDto']) =>
+      answer(client.PATCH('/api/rails/{id}', { params: { path: { id } }, body })),
     // A partner change touches the other rail too: refresh every rail query.
     onSuccess: () => qc.invalidateQueries({ queryKey: railKeys.all }),
   });

@@ -11,11 +11,14 @@ export type SweepDetailsPatch = Schemas['UpdateSweepDetailsDto'];
 export function useUpdateSweepDetails(sweepId: string) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (body: SweepDetailsPatch) => answer(client.PATCH('/api/sweeps/{id}', { params: { path: { id: sweepId } }, body })),
+    mutationFn: (body: SweepDetailsPatch) =>
+      answer(client.PATCH('/api/sweeps/{id}', { params: { path: { id: sweepId } }, body })),
     onSuccess: async (sweep) => {
       qc.setQueryData([...railKeys.all, 'sweep', sweepId], sweep);
       // The rail's list, its partner's parallelism (the datum) and the machine's state.
-      await Promise.all([railKeys.all, ['bolt-downs'], ...MACHINE_STATE_KEYS].map((queryKey) => qc.invalidateQueries({ queryKey })));
+      await Promise.all(
+        [railKeys.all, ['bolt-downs'], ...MACHINE_STATE_KEYS].map((queryKey) => qc.invalidateQueries({ queryKey })),
+      );
     },
   });
 }

@@ -6,7 +6,17 @@ import type { Rail } from '../types';
 import { RailFormFields } from './rail-form-fields';
 import { emptyRailForm, railFormSchema, toRailInput, type RailFormValues } from './rail-form-schema';
 
-export function AddRailDialog({ machineId, rails, open, onClose }: { machineId: string; rails: Rail[]; open: boolean; onClose: () => void }) {
+export function AddRailDialog({
+  machineId,
+  rails,
+  open,
+  onClose,
+}: {
+  machineId: string;
+  rails: Rail[];
+  open: boolean;
+  onClose: () => void;
+}) {
   const form = useForm<RailFormValues>({ defaultValues: emptyRailForm, resolver: zodResolver(railFormSchema) });
   const create = useCreateRail(machineId);
   const close = () => {
@@ -19,7 +29,11 @@ export function AddRailDialog({ machineId, rails, open, onClose }: { machineId: 
     <Dialog open={open} onClose={close} fullWidth maxWidth="sm">
       <DialogTitle>Add rail</DialogTitle>
       <DialogContent>
-        {create.error && <Alert severity="error" sx={{ mb: 1 }}>{create.error.message}</Alert>}
+        {create.error && (
+          <Alert severity="error" sx={{ mb: 1 }}>
+            {create.error.message}
+          </Alert>
+        )}
         <RailFormFields form={form} others={rails} />
       </DialogContent>
       <DialogActions>

@@ -11,5 +11,16 @@ const LOOK: Record<CheckState, { label: string; color: string }> = {
 
 export function CheckStatusChip({ status, size = 'small' }: { status: CheckState; size?: 'small' | 'medium' }) {
   const look = LOOK[status];
-  return <Chip size={size} label={look.label} variant={status === 'within-target' || status === 'outside-target' ? 'filled' : 'outlined'} sx={status === 'within-target' || status === 'outside-target' ? { bgcolor: look.color, color: '#fff', fontWeight: 600 } : { color: look.color, borderColor: look.color }} />;
+  return (
+    <Chip
+      size={size}
+      label={look.label}
+      variant={status === 'within-target' || status === 'outside-target' ? 'filled' : 'outlined'}
+      sx={
+        status === 'within-target' || status === 'outside-target'
+          ? { bgcolor: look.color, color: '#fff', fontWeight: 600 }
+          : { color: look.color, borderColor: look.color }
+      }
+    />
+  );
 }

@@ -1,6 +1,22 @@
 import { useMemo, useState } from 'react';
 import {
-  Alert, Button, Dialog, DialogActions, DialogContent, DialogTitle, IconButton, Stack, Table, TableBody, TableCell, TableContainer, TableHead, TableRow, TextField, Tooltip, Typography,
+  Alert,
+  Button,
+  Dialog,
+  DialogActions,
+  DialogContent,
+  DialogTitle,
+  IconButton,
+  Stack,
+  Table,
+  TableBody,
+  TableCell,
+  TableContainer,
+  TableHead,
+  TableRow,
+  TextField,
+  Tooltip,
+  Typography,
 } from '@mui/material';
 import DeleteOutline from '@mui/icons-material/DeleteOutlined';
 import UploadFileOutlined from '@mui/icons-material/UploadFileOutlined';
@@ -13,22 +29,46 @@ const MAX_FILE_BYTES = 1_000_000;
  * Readings pasted or uploaded as "position, reading" lines. Every bad line is marked, and the
  * import stays refused until each one is fixed in the text or dropped.
  */
-export function CsvImportDialog({ open, unit, onClose, onImport }: { open: boolean; unit: LengthUnit; onClose: () => void; onImport: (stations: { position: number; reading: number }[]) => void }) {
+export function CsvImportDialog({
+  open,
+  unit,
+  onClose,
+  onImport,
+}: {
+  open: boolean;
+  unit: LengthUnit;
+  onClose: () => void;
+  onImport: (stations: { position: number; reading: number }[]) => void;
+}) {
   const [text, setText] = useState('');
   const [fileError, setFileError] = useState<string | null>(null);
   const parsed = useMemo(() => parseSweepCsv(text), [text]);
   const bad = parsed.rows.filter((r) => r.problem);
   const good = parsed.rows.filter((r) => !r.problem);
 
-  const dropLine = (line: number) => setText(text.replace(/\r\n?/g, '\n').split('\n').filter((_, i) => i + 1 !== line).join('\n'));
+  const dropLine = (line: number) =>
+    setText(
+      text
+        .replace(/\r\n?/g, '\n')
+        .split('\n')
+        .filter((_, i) => i + 1 !== line)
+        .join('\n'),
+    );
   const dropBad = () => {
     const lines = new Set(bad.map((r) => r.line));
-    setText(text.replace(/\r\n?/g, '\n').split('\n').filter((_, i) => !lines.has(i + 1)).join('\n'));
+    setText(
+      text
+        .replace(/\r\n?/g, '\n')
+        .split('\n')
+        .filter((_, i) => !lines.has(i + 1))
+        .join('\n'),
+    );
   };
   const readFile = async (file: File | undefined) => {
     setFileError(null);
     if (!file) return;
-    if (file.size > MAX_FILE_BYTES) return setFileError('That file is larger than 1 MB; a sweep file is a few lines of text.');
+    if (file.size > MAX_FILE_BYTES)
+      return setFileError('That file is larger than 1 MB; a sweep file is a few lines of text.');
     setText(await file.text());
   };
   const close = () => {
@@ -44,17 +84,38 @@ export function CsvImportDialog({ open, unit, onClose, onImport }: { open: boole
       <DialogContent>
         <Stack spacing={2} sx={{ pt: 1 }}>
           <Typography color="text.secondary">
-            One station per line: position in mm, then the reading in {UNIT_LABELS[unit]} (the unit chosen for the sweep). Commas, semicolons, tabs or spaces between them; a header line is skipped.
+            One station per line: position in mm, then the reading in {UNIT_LABELS[unit]} (the unit chosen for the
+            sweep). Commas, semicolons, tabs or spaces between them; a header line is skipped.
           </Typography>
           <Stack direction={{ xs: 'column', sm: 'row' }} spacing={1.5} sx={{ alignItems: { sm: 'flex-start' } }}>
-            <TextField label="Paste readings" value={text} onChange={(e) => setText(e.target.value)} multiline minRows={6} maxRows={14} fullWidth placeholder={'position_mm,reading\n0,0\n200,0.5\n400,1.5'} slotProps={{ htmlInput: { spellCheck: false, style: { fontFamily: 'monospace' } } }} />
+            <TextField
+              label="Paste readings"
+              value={text}
+              onChange={(e) => setText(e.target.value)}
+              multiline
+              minRows={6}
+              maxRows={14}
+              fullWidth
+              placeholder={'position_mm,reading\n0,0\n200,0.5\n400,1.5'}
+              slotProps={{ htmlInput: { spellCheck: false, style: { fontFamily: 'monospace' } } }}
+            />
             <Button component="label" variant="outlined" startIcon={<UploadFileOutlined />} sx={{ flexShrink: 0 }}>
               Upload a file
-              <input hidden type="file" accept=".csv,.txt,text/csv,text/plain" aria-label="CSV file" onChange={(e) => readFile(e.target.files?.[0])} />
+              <input
+                hidden
+                type="file"
+                accept=".csv,.txt,text/csv,text/plain"
+                aria-label="CSV file"
+                onChange={(e) => readFile(e.target.files?.[0])}
+              />
             </Button>
           </Stack>
           {fileError && <Alert severity="error">{fileError}</Alert>}
-          {parsed.header && <Typography variant="body2" color="text.secondary">Header skipped: “{parsed.header}”</Typography>}
+          {parsed.header && (
+            <Typography variant="body2" color="text.secondary">
+              Header skipped: “{parsed.header}”
+            </Typography>
+          )}
           {parsed.rows.length > 0 && (
             <TableContainer sx={{ maxHeight: 320, border: 1, borderColor: 'divider', borderRadius: 1 }}>
               <Table size="small" stickyHeader aria-label="Import preview">
@@ -69,11 +130,19 @@ export function CsvImportDialog({ open, unit, onClose, onImport }: { open: boole
                 </TableHead>
                 <TableBody>
                   {parsed.rows.map((r) => (
-                    <TableRow key={r.line} sx={r.problem ? { bgcolor: '#fbe3df' } : undefined} data-bad={r.problem ? 'true' : undefined}>
+                    <TableRow
+                      key={r.line}
+                      sx={r.problem ? { bgcolor: '#fbe3df' } : undefined}
+                      data-bad={r.problem ? 'true' : undefined}
+                    >
                       <TableCell>{r.line}</TableCell>
                       <TableCell>{r.position ?? '—'}</TableCell>
                       <TableCell>{r.reading ?? '—'}</TableCell>
-                      <TableCell sx={{ color: r.problem ? 'error.main' : 'success.main', fontWeight: r.problem ? 600 : 400 }}>{r.problem ?? 'OK'}</TableCell>
+                      <TableCell
+                        sx={{ color: r.problem ? 'error.main' : 'success.main', fontWeight: r.problem ? 600 : 400 }}
+                      >
+                        {r.problem ?? 'OK'}
+                      </TableCell>
                       <TableCell>
                         <Tooltip title="Drop this line">
                           <IconButton size="small" aria-label={`Drop line ${r.line}`} onClick={() => dropLine(r.line)}>
@@ -88,11 +157,20 @@ export function CsvImportDialog({ open, unit, onClose, onImport }: { open: boole
             </TableContainer>
           )}
           {bad.length > 0 && (
-            <Alert severity="error" action={<Button color="inherit" size="small" onClick={dropBad}>Drop bad rows</Button>}>
+            <Alert
+              severity="error"
+              action={
+                <Button color="inherit" size="small" onClick={dropBad}>
+                  Drop bad rows
+                </Button>
+              }
+            >
               {bad.length} row{bad.length === 1 ? '' : 's'} must be fixed in the text or dropped before the import.
             </Alert>
           )}
-          {!bad.length && parsed.rows.length > 0 && tooFew && <Alert severity="warning">A sweep needs at least three stations.</Alert>}
+          {!bad.length && parsed.rows.length > 0 && tooFew && (
+            <Alert severity="warning">A sweep needs at least three stations.</Alert>
+          )}
         </Stack>
       </DialogContent>
       <DialogActions>

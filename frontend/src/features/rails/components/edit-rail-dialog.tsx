@@ -17,7 +17,11 @@ export function EditRailDialog({ rail, others, onClose }: { rail: Rail; others: 
     <Dialog open onClose={onClose} fullWidth maxWidth="sm">
       <DialogTitle>Edit rail {rail.label}</DialogTitle>
       <DialogContent>
-        {update.error && <Alert severity="error" sx={{ mb: 1 }}>{update.error.message}</Alert>}
+        {update.error && (
+          <Alert severity="error" sx={{ mb: 1 }}>
+            {update.error.message}
+          </Alert>
+        )}
         <RailFormFields form={form} others={others.filter((r) => r.id !== rail.id)} />
       </DialogContent>
       <DialogActions>

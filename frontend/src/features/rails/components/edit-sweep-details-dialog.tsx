@@ -1,6 +1,20 @@
 import { useState, type FormEvent } from 'react';
 import { useQuery } from '@tanstack/react-query';
-import { Alert, Box, Button, Dialog, DialogActions, DialogContent, DialogContentText, DialogTitle, InputAdornment, MenuItem, TextField, useMediaQuery, useTheme } from '@mui/material';
+import {
+  Alert,
+  Box,
+  Button,
+  Dialog,
+  DialogActions,
+  DialogContent,
+  DialogContentText,
+  DialogTitle,
+  InputAdornment,
+  MenuItem,
+  TextField,
+  useMediaQuery,
+  useTheme,
+} from '@mui/material';
 import { useOnline } from '../../../components/offline/use-online';
 import { LoadingState } from '../../../components/states/loading-state';
 import { ErrorState } from '../../../components/states/error-state';
@@ -10,10 +24,23 @@ import { useUpdateSweepDetails, type SweepDetailsPatch } from '../api/update-swe
 import type { Sweep } from '../types';
 
 const text = (v: string | number | null | undefined) => (v === null || v === undefined ? '' : String(v));
-const number = (t: string): number | null | 'bad' => (t.trim() === '' ? null : Number.isFinite(Number(t.trim().replace(',', '.'))) ? Number(t.trim().replace(',', '.')) : 'bad');
+const number = (t: string): number | null | 'bad' =>
+  t.trim() === ''
+    ? null
+    : Number.isFinite(Number(t.trim().replace(',', '.')))
+      ? Number(t.trim().replace(',', '.'))
+      : 'bad';
 
 /** Corrects what was noted with a sweep (datum, notes, instrument, who, bolts); its readings stay as taken. */
-export function EditSweepDetailsDialog({ sweepId, title, onClose }: { sweepId: string; title: string; onClose: () => void }) {
+export function EditSweepDetailsDialog({
+  sweepId,
+  title,
+  onClose,
+}: {
+  sweepId: string;
+  title: string;
+  onClose: () => void;
+}) {
   const sweep = useQuery(sweepQueryOptions(sweepId));
   const fullScreen = useMediaQuery(useTheme().breakpoints.down('sm'));
   return (
@@ -74,7 +101,8 @@ function DetailsForm({ sweep, onClose }: { sweep: Sweep; onClose: () => void }) 
     <Box component="form" onSubmit={submit} noValidate sx={{ display: 'contents' }}>
       <DialogContent>
         <DialogContentText sx={{ mb: 2 }}>
-          The readings and the result stay as they were taken. The change is kept in the machine&apos;s history with the values before and after.
+          The readings and the result stay as they were taken. The change is kept in the machine&apos;s history with the
+          values before and after.
         </DialogContentText>
         <Box sx={{ display: 'grid', gap: 2, gridTemplateColumns: { xs: '1fr', sm: '1fr 1fr' } }}>
           <TextField
@@ -86,18 +114,35 @@ function DetailsForm({ sweep, onClose }: { sweep: Sweep; onClose: () => void }) 
             sx={{ gridColumn: '1 / -1' }}
             slotProps={{ htmlInput: { maxLength: 120 } }}
           />
-          <TextField label="Instrument" value={instrument} onChange={(e) => setInstrument(e.target.value)} sx={{ gridColumn: '1 / -1' }} slotProps={{ htmlInput: { maxLength: 120 } }} />
-          <TextField label="Taken by" value={takenBy} onChange={(e) => setTakenBy(e.target.value)} slotProps={{ htmlInput: { maxLength: 120 } }} />
+          <TextField
+            label="Instrument"
+            value={instrument}
+            onChange={(e) => setInstrument(e.target.value)}
+            sx={{ gridColumn: '1 / -1' }}
+            slotProps={{ htmlInput: { maxLength: 120 } }}
+          />
+          <TextField
+            label="Taken by"
+            value={takenBy}
+            onChange={(e) => setTakenBy(e.target.value)}
+            slotProps={{ htmlInput: { maxLength: 120 } }}
+          />
           <TextField
             label="Temperature"
             value={temperature}
             onChange={(e) => setTemperature(e.target.value)}
-            slotProps={{ htmlInput: { inputMode: 'decimal' }, input: { endAdornment: <InputAdornment position="end">°C</InputAdornment> } }}
+            slotProps={{
+              htmlInput: { inputMode: 'decimal' },
+              input: { endAdornment: <InputAdornment position="end">°C</InputAdornment> },
+            }}
           />
           <TextField select label="Bolt size" value={boltSize} onChange={(e) => setBoltSize(e.target.value)}>
             <MenuItem value="">Not recorded</MenuItem>
             {/* A size recorded earlier stays choosable even if the table no longer lists it. */}
-            {[...bolts.map((b) => b.boltSize), ...(boltSize && !bolts.some((b) => b.boltSize === boltSize) ? [boltSize] : [])].map((b) => (
+            {[
+              ...bolts.map((b) => b.boltSize),
+              ...(boltSize && !bolts.some((b) => b.boltSize === boltSize) ? [boltSize] : []),
+            ].map((b) => (
               <MenuItem key={b} value={b}>
                 {b}
               </MenuItem>
@@ -107,10 +152,23 @@ function DetailsForm({ sweep, onClose }: { sweep: Sweep; onClose: () => void }) 
             label="Torque"
             value={torque}
             onChange={(e) => setTorque(e.target.value)}
-            helperText={usual !== undefined && torque.trim() !== String(usual) ? `Usual for ${boltSize}: ${usual} N·m` : ' '}
-            slotProps={{ htmlInput: { inputMode: 'decimal' }, input: { endAdornment: <InputAdornment position="end">N·m</InputAdornment> } }}
+            helperText={
+              usual !== undefined && torque.trim() !== String(usual) ? `Usual for ${boltSize}: ${usual} N·m` : ' '
+            }
+            slotProps={{
+              htmlInput: { inputMode: 'decimal' },
+              input: { endAdornment: <InputAdornment position="end">N·m</InputAdornment> },
+            }}
           />
-          <TextField label="Notes" value={notes} onChange={(e) => setNotes(e.target.value)} multiline minRows={2} sx={{ gridColumn: '1 / -1' }} slotProps={{ htmlInput: { maxLength: 5000 } }} />
+          <TextField
+            label="Notes"
+            value={notes}
+            onChange={(e) => setNotes(e.target.value)}
+            multiline
+            minRows={2}
+            sx={{ gridColumn: '1 / -1' }}
+            slotProps={{ htmlInput: { maxLength: 5000 } }}
+          />
         </Box>
         {!online && (
           <Alert severity="warning" sx={{ mt: 2 }}>

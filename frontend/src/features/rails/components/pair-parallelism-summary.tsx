@@ -6,16 +6,30 @@ import { isLengthUnit, showInTargetUnit, showLength, showTarget, targetMm } from
 import { CheckStatusChip } from './check-status-chip';
 
 /** Parallelism and height difference of one partner pair, against their targets. */
-export function PairParallelismSummary({ railId, title, partnerLabel }: { railId: string; title: string; partnerLabel?: string }) {
+export function PairParallelismSummary({
+  railId,
+  title,
+  partnerLabel,
+}: {
+  railId: string;
+  title: string;
+  partnerLabel?: string;
+}) {
   const q = useParallelism(railId);
   const unit = q.data && isLengthUnit(q.data.targets.parallelism.unit) ? q.data.targets.parallelism.unit : 'mm';
   return (
-    <Paper component="section" aria-label={`Parallelism ${title}`} sx={{ p: 2, display: 'flex', gap: 2, alignItems: 'center', flexWrap: 'wrap' }}>
+    <Paper
+      component="section"
+      aria-label={`Parallelism ${title}`}
+      sx={{ p: 2, display: 'flex', gap: 2, alignItems: 'center', flexWrap: 'wrap' }}
+    >
       <Box sx={{ flex: '1 1 260px', minWidth: 0 }}>
         <Typography sx={{ fontWeight: 600 }}>{title}</Typography>
         {q.isPending && <Typography color="text.secondary">Comparing…</Typography>}
         {q.isError && <Typography color="error">{q.error.message}</Typography>}
-        {q.data && q.data.status === 'not-comparable' && <Typography color="text.secondary">{q.data.reason}</Typography>}
+        {q.data && q.data.status === 'not-comparable' && (
+          <Typography color="text.secondary">{q.data.reason}</Typography>
+        )}
         {q.data && q.data.status !== 'not-comparable' && (
           <Typography color="text.secondary">
             {q.data.parallelism !== null && q.data.parallelism !== undefined
@@ -51,8 +65,19 @@ export function PairParallelismSummary({ railId, title, partnerLabel }: { railId
             height={200}
             unitLabel={UNIT_LABELS[unit]}
             yLabel="B − A"
-            target={{ width: fromMm(targetMm(q.data.targets.parallelism), unit), label: `Parallelism target ${showTarget(q.data.targets.parallelism)} wide` }}
-            series={[{ name: `B − A: ${partnerLabel} minus this rail`, points: q.data.positions.map((position, i) => ({ position, value: fromMm(q.data!.differences![i], unit) })) }]}
+            target={{
+              width: fromMm(targetMm(q.data.targets.parallelism), unit),
+              label: `Parallelism target ${showTarget(q.data.targets.parallelism)} wide`,
+            }}
+            series={[
+              {
+                name: `B − A: ${partnerLabel} minus this rail`,
+                points: q.data.positions.map((position, i) => ({
+                  position,
+                  value: fromMm(q.data!.differences![i], unit),
+                })),
+              },
+            ]}
           />
         </Box>
       )}

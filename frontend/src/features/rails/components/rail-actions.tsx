@@ -25,12 +25,24 @@ export function RailActions({ rail, others, afterDelete }: { rail: Rail; others:
       <Dialog open={deleting} onClose={() => setDeleting(false)}>
         <DialogTitle>Delete rail {rail.label}?</DialogTitle>
         <DialogContent>
-          {remove.error && <Alert severity="error" sx={{ mb: 1 }}>{remove.error.message}</Alert>}
-          <Typography>The rail and all its sweeps are removed from the machine file. Sweeps that an approval was based on cannot be deleted.</Typography>
+          {remove.error && (
+            <Alert severity="error" sx={{ mb: 1 }}>
+              {remove.error.message}
+            </Alert>
+          )}
+          <Typography>
+            The rail and all its sweeps are removed from the machine file. Sweeps that an approval was based on cannot
+            be deleted.
+          </Typography>
         </DialogContent>
         <DialogActions>
           <Button onClick={() => setDeleting(false)}>Keep it</Button>
-          <Button color="error" variant="contained" disabled={remove.isPending} onClick={() => remove.mutate(undefined, { onSuccess: () => navigate(afterDelete) })}>
+          <Button
+            color="error"
+            variant="contained"
+            disabled={remove.isPending}
+            onClick={() => remove.mutate(undefined, { onSuccess: () => navigate(afterDelete) })}
+          >
             Delete rail
           </Button>
         </DialogActions>

@@ -21,8 +21,16 @@ export function RailFormFields({ form, others }: { form: UseFormReturn<RailFormV
     recheck();
   };
   const unitLabel = UNIT_LABELS[watch('lengthUnit')];
-  const unit = { input: { endAdornment: <InputAdornment position="end">{unitLabel}</InputAdornment> }, htmlInput: { inputMode: 'decimal' as const } };
-  const text = (name: TextName, label: string, hint: string | undefined, extra: { required?: boolean; autoFocus?: boolean; withUnit?: boolean } = {}) => (
+  const unit = {
+    input: { endAdornment: <InputAdornment position="end">{unitLabel}</InputAdornment> },
+    htmlInput: { inputMode: 'decimal' as const },
+  };
+  const text = (
+    name: TextName,
+    label: string,
+    hint: string | undefined,
+    extra: { required?: boolean; autoFocus?: boolean; withUnit?: boolean } = {},
+  ) => (
     <Controller
       name={name}
       control={control}
@@ -56,20 +64,46 @@ export function RailFormFields({ form, others }: { form: UseFormReturn<RailFormV
               options={['X', 'Y', 'Y1', 'Y2', 'Z']}
               inputValue={field.value}
               onInputChange={(_, axis) => change(field.onChange)(axis)}
-              renderInput={(p) => <TextField {...p} label="Axis" required error={!!errors.axis} helperText={errors.axis?.message ?? 'X, Y1, Y2, Z…'} />}
+              renderInput={(p) => (
+                <TextField
+                  {...p}
+                  label="Axis"
+                  required
+                  error={!!errors.axis}
+                  helperText={errors.axis?.message ?? 'X, Y1, Y2, Z…'}
+                />
+              )}
               sx={{ minWidth: 160 }}
             />
           )}
         />
       </Stack>
-      <Controller name="lengthUnit" control={control} render={({ field }) => <UnitFamilySelect family="length" value={field.value} onChange={change(field.onChange)} label="Unit of the rail's dimensions" />} />
+      <Controller
+        name="lengthUnit"
+        control={control}
+        render={({ field }) => (
+          <UnitFamilySelect
+            family="length"
+            value={field.value}
+            onChange={change(field.onChange)}
+            label="Unit of the rail's dimensions"
+          />
+        )}
+      />
       <Stack direction={{ xs: 'column', sm: 'row' }} spacing={1.5}>
         {text('length', 'Length', undefined, { required: true, withUnit: true })}
         <Controller
           name="profileSize"
           control={control}
           render={({ field }) => (
-            <TextField select label="Profile size" value={field.value} onChange={field.onChange} fullWidth helperText="Rail width class (catalogue size in mm)">
+            <TextField
+              select
+              label="Profile size"
+              value={field.value}
+              onChange={field.onChange}
+              fullWidth
+              helperText="Rail width class (catalogue size in mm)"
+            >
               <MenuItem value="">Not given</MenuItem>
               {['12', '15', '20', '25', '30', '35'].map((s) => (
                 <MenuItem key={s} value={s}>
@@ -82,17 +116,28 @@ export function RailFormFields({ form, others }: { form: UseFormReturn<RailFormV
       </Stack>
       <Stack direction={{ xs: 'column', sm: 'row' }} spacing={1.5}>
         {text('holePitch', 'Hole pitch', 'Centre to centre', { required: true, withUnit: true })}
-        {text('firstHole', 'First hole', "From the rail's start to the first hole centre", { required: true, withUnit: true })}
+        {text('firstHole', 'First hole', "From the rail's start to the first hole centre", {
+          required: true,
+          withUnit: true,
+        })}
       </Stack>
       <Stack direction={{ xs: 'column', sm: 'row' }} spacing={1.5}>
         {text('spacing', 'Spacing to partner', 'Centre to centre of the two rails: a in S = a × K', { withUnit: true })}
-        {text('endDistance', 'End distance', 'Least hole centre to rail end; empty: half the bolt head', { withUnit: true })}
+        {text('endDistance', 'End distance', 'Least hole centre to rail end; empty: half the bolt head', {
+          withUnit: true,
+        })}
       </Stack>
       <Controller
         name="partnerRailId"
         control={control}
         render={({ field }) => (
-          <TextField select label="Partner rail" value={field.value} onChange={field.onChange} helperText="The rail this one runs parallel to (Y1 with Y2, the two X rails)">
+          <TextField
+            select
+            label="Partner rail"
+            value={field.value}
+            onChange={field.onChange}
+            helperText="The rail this one runs parallel to (Y1 with Y2, the two X rails)"
+          >
             <MenuItem value="">None</MenuItem>
             {others.map((r) => (
               <MenuItem key={r.id} value={r.id}>

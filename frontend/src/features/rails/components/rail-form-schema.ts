@@ -42,12 +42,24 @@ export const railFormSchema = z
     if (!(first >= 0)) fail('firstHole', `A number of ${UNIT_LABELS[u]}, 0 or more`);
     else if (length >= 10 && first > length) fail('firstHole', 'Must lie on the rail (not beyond its length)');
     if (v.spacing.trim() && !(inMm(v.spacing) >= 10)) fail('spacing', 'At least 10 mm, or leave empty');
-    if (v.endDistance.trim() && !(inMm(v.endDistance) >= 0)) fail('endDistance', `A number of ${UNIT_LABELS[u]}, or leave empty`);
+    if (v.endDistance.trim() && !(inMm(v.endDistance) >= 0))
+      fail('endDistance', `A number of ${UNIT_LABELS[u]}, or leave empty`);
   });
 
 export type RailFormValues = z.input<typeof railFormSchema>;
 
-export const emptyRailForm: RailFormValues = { label: '', axis: '', lengthUnit: 'mm', length: '', profileSize: '20', holePitch: '60', firstHole: '20', spacing: '', endDistance: '', partnerRailId: '' };
+export const emptyRailForm: RailFormValues = {
+  label: '',
+  axis: '',
+  lengthUnit: 'mm',
+  length: '',
+  profileSize: '20',
+  holePitch: '60',
+  firstHole: '20',
+  spacing: '',
+  endDistance: '',
+  partnerRailId: '',
+};
 
 export const railFormOf = (r: Rail): RailFormValues => ({
   label: r.label,

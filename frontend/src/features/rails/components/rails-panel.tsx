@@ -1,7 +1,19 @@
 import { UNIT_LABELS } from '../../../lib/units';
 import { useState } from 'react';
 import { Link as RouterLink } from 'react-router-dom';
-import { Box, Button, Link, Paper, Stack, Table, TableBody, TableCell, TableHead, TableRow, Typography } from '@mui/material';
+import {
+  Box,
+  Button,
+  Link,
+  Paper,
+  Stack,
+  Table,
+  TableBody,
+  TableCell,
+  TableHead,
+  TableRow,
+  Typography,
+} from '@mui/material';
 import AddOutlined from '@mui/icons-material/AddOutlined';
 import { paths } from '../../../config/paths';
 import { LoadingState } from '../../../components/states/loading-state';
@@ -78,7 +90,11 @@ export function RailsPanel({ machineId }: { machineId: string }) {
                       </Typography>
                     </TableCell>
                     <TableCell>
-                      {r.unreadable ? <UnreadableRecord inline message={r.unreadable} /> : `${r.length} ${UNIT_LABELS[r.lengthUnit]} · ${r.holes.length} holes`}
+                      {r.unreadable ? (
+                        <UnreadableRecord inline message={r.unreadable} />
+                      ) : (
+                        `${r.length} ${UNIT_LABELS[r.lengthUnit]} · ${r.holes.length} holes`
+                      )}
                       <Typography variant="body2" color="text.secondary">
                         pitch {r.holePitch} {UNIT_LABELS[r.lengthUnit]}
                       </Typography>
@@ -92,9 +108,17 @@ export function RailsPanel({ machineId }: { machineId: string }) {
                             ? `${showInTargetUnit(s.leastSquaresStraightness, s.target)} least squares`
                             : `${showInTargetUnit(s.minimumZoneStraightness, s.target)} minimum zone`}
                           <Typography variant="body2" color="text.secondary">
-                            {s.target.reference === 'least-squares' ? `${showInTargetUnit(s.minimumZoneStraightness, s.target)} minimum zone` : `${showInTargetUnit(s.leastSquaresStraightness, s.target)} least squares`} · target {showTarget(s.target)} (
-                            {s.target.reference === 'least-squares' ? 'least squares' : s.target.reference ? 'minimum zone' : 'least squares, as saved'})
-                            {s.localSlopeMmPerM !== null ? ` · slope ${s.localSlopeMmPerM.toFixed(3)} mm/m` : ''} · {s.face} face · {r.sweepCount} sweep{r.sweepCount === 1 ? '' : 's'}
+                            {s.target.reference === 'least-squares'
+                              ? `${showInTargetUnit(s.minimumZoneStraightness, s.target)} minimum zone`
+                              : `${showInTargetUnit(s.leastSquaresStraightness, s.target)} least squares`}{' '}
+                            · target {showTarget(s.target)} (
+                            {s.target.reference === 'least-squares'
+                              ? 'least squares'
+                              : s.target.reference
+                                ? 'minimum zone'
+                                : 'least squares, as saved'}
+                            ){s.localSlopeMmPerM !== null ? ` · slope ${s.localSlopeMmPerM.toFixed(3)} mm/m` : ''} ·{' '}
+                            {s.face} face · {r.sweepCount} sweep{r.sweepCount === 1 ? '' : 's'}
                           </Typography>
                         </>
                       ) : (
@@ -118,7 +142,11 @@ export function RailsPanel({ machineId }: { machineId: string }) {
             Partner rails
           </Typography>
           {pairs.map((r) => (
-            <PairParallelismSummary key={r.id} railId={r.id} title={`${r.label} and ${byId.get(r.partnerRailId!)!.label}`} />
+            <PairParallelismSummary
+              key={r.id}
+              railId={r.id}
+              title={`${r.label} and ${byId.get(r.partnerRailId!)!.label}`}
+            />
           ))}
         </Stack>
       )}

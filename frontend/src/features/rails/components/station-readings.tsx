@@ -35,7 +35,11 @@ export const StationReadings = memo(function StationReadings({
   const rows = useDraft(store, (d) => d.stations);
   const problems = useMemo(() => readyStations(rows).problems, [rows]);
   // Residuals back onto the rows they belong to (rows without a reading have none).
-  const byPosition = useMemo(() => (fit ? new Map(fit.body.positions.map((p, k) => [p, fromMm(fit.result.leastSquares.residuals[k], unit)])) : null), [fit, unit]);
+  const byPosition = useMemo(
+    () =>
+      fit ? new Map(fit.body.positions.map((p, k) => [p, fromMm(fit.result.leastSquares.residuals[k], unit)])) : null,
+    [fit, unit],
+  );
   const inputs = useRef<(HTMLInputElement | null)[]>([]);
   const inputRef = useCallback((i: number, el: HTMLInputElement | null) => {
     inputs.current[i] = el;
@@ -52,7 +56,12 @@ export const StationReadings = memo(function StationReadings({
   );
   return (
     <TableContainer sx={{ maxHeight: 520 }}>
-      <Table size="small" stickyHeader aria-label="Stations and readings" sx={{ '& td, & th': { px: { xs: 0.5, sm: 1 } } }}>
+      <Table
+        size="small"
+        stickyHeader
+        aria-label="Stations and readings"
+        sx={{ '& td, & th': { px: { xs: 0.5, sm: 1 } } }}
+      >
         <TableHead>
           <TableRow>
             <TableCell sx={{ width: { xs: 24, sm: 40 } }}>#</TableCell>

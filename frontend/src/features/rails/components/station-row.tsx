@@ -22,7 +22,17 @@ export interface StationRowProps {
  * One station. Memoised with stable callbacks, so a keystroke re-renders the row being typed in,
  * not all forty of them: on a slow tablet that is the difference between instant and laggy.
  */
-export const StationRow = memo(function StationRow({ index: i, row: r, unit, problem, residual, onRowChange, onEnter, onDrop, inputRef }: StationRowProps) {
+export const StationRow = memo(function StationRow({
+  index: i,
+  row: r,
+  unit,
+  problem,
+  residual,
+  onRowChange,
+  onEnter,
+  onDrop,
+  inputRef,
+}: StationRowProps) {
   return (
     <TableRow>
       <TableCell>{i + 1}</TableCell>
@@ -31,7 +41,9 @@ export const StationRow = memo(function StationRow({ index: i, row: r, unit, pro
           value={r.position}
           onChange={(e) => onRowChange(i, { position: e.target.value })}
           variant="standard"
-          slotProps={{ htmlInput: { inputMode: 'decimal', 'aria-label': `Station ${i + 1} position (mm)`, tabIndex: -1 } }}
+          slotProps={{
+            htmlInput: { inputMode: 'decimal', 'aria-label': `Station ${i + 1} position (mm)`, tabIndex: -1 },
+          }}
           sx={{ width: { xs: 60, sm: 80 } }}
         />
       </TableCell>
@@ -54,19 +66,33 @@ export const StationRow = memo(function StationRow({ index: i, row: r, unit, pro
           helperText={problem}
           autoComplete="off"
           slotProps={{
-            htmlInput: { inputMode: 'decimal', 'aria-label': `Reading at ${r.position || '?'} mm`, 'aria-keyshortcuts': 'Control+Delete', enterKeyHint: 'next', 'data-indicator-cell': i },
+            htmlInput: {
+              inputMode: 'decimal',
+              'aria-label': `Reading at ${r.position || '?'} mm`,
+              'aria-keyshortcuts': 'Control+Delete',
+              enterKeyHint: 'next',
+              'data-indicator-cell': i,
+            },
             input: { endAdornment: <InputAdornment position="end">{UNIT_LABELS[unit]}</InputAdornment> },
           }}
           sx={{ width: { xs: 124, sm: 130 } }}
         />
       </TableCell>
       <TableCell align="right" sx={{ color: 'text.secondary', fontVariantNumeric: 'tabular-nums' }}>
-        {residual === null || residual === undefined ? '' : `${residual >= 0 ? '+' : ''}${residual.toFixed(DECIMALS[unit])}`}
+        {residual === null || residual === undefined
+          ? ''
+          : `${residual >= 0 ? '+' : ''}${residual.toFixed(DECIMALS[unit])}`}
       </TableCell>
       <TableCell>
         {/* Out of the tab order, so Tab goes from reading to reading; Ctrl+Delete in the reading drops it too. */}
         <Tooltip title="Drop this station (Ctrl+Delete in its reading)">
-          <IconButton size="small" aria-label={`Drop station ${i + 1}`} aria-keyshortcuts="Control+Delete" tabIndex={-1} onClick={() => onDrop(i)}>
+          <IconButton
+            size="small"
+            aria-label={`Drop station ${i + 1}`}
+            aria-keyshortcuts="Control+Delete"
+            tabIndex={-1}
+            onClick={() => onDrop(i)}
+          >
             <DeleteOutline fontSize="small" />
           </IconButton>
         </Tooltip>

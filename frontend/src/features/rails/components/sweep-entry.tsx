@@ -1,6 +1,20 @@
 import { useCallback, useDeferredValue, useMemo, useRef, useState } from 'react';
 import { useShallow } from 'zustand/react/shallow';
-import { Alert, Box, Button, Grid, InputAdornment, MenuItem, Paper, Snackbar, Stack, TextField, ToggleButton, ToggleButtonGroup, Typography } from '@mui/material';
+import {
+  Alert,
+  Box,
+  Button,
+  Grid,
+  InputAdornment,
+  MenuItem,
+  Paper,
+  Snackbar,
+  Stack,
+  TextField,
+  ToggleButton,
+  ToggleButtonGroup,
+  Typography,
+} from '@mui/material';
 import FileUploadOutlined from '@mui/icons-material/FileUploadOutlined';
 import { IndicatorPanel } from '../../../components/indicator-input/indicator-panel';
 import { useIndicatorInput } from '../../../components/indicator-input/use-indicator-input';
@@ -23,8 +37,24 @@ import { SweepSaveBar } from './sweep-save-bar';
 const num = (s: string) => (s.trim() === '' ? undefined : Number(s.replace(',', '.')));
 
 /** Entering a sweep at the machine: stations from the holes or a fixed step, a reading each, a live fit. */
-export function SweepEntry({ rail, target, takenBy, onSaved }: { rail: Rail; target: TargetValue | null; takenBy: string; onSaved: (s: Sweep) => void }) {
-  const store = useSweepDraft(rail.id, () => newDraft(stationsAtHoles(rail.holes, rail.lengthUnit), { takenBy, boltSize: rail.typicalBoltSize ?? '', lengthUnit: rail.lengthUnit }));
+export function SweepEntry({
+  rail,
+  target,
+  takenBy,
+  onSaved,
+}: {
+  rail: Rail;
+  target: TargetValue | null;
+  takenBy: string;
+  onSaved: (s: Sweep) => void;
+}) {
+  const store = useSweepDraft(rail.id, () =>
+    newDraft(stationsAtHoles(rail.holes, rail.lengthUnit), {
+      takenBy,
+      boltSize: rail.typicalBoltSize ?? '',
+      lengthUnit: rail.lengthUnit,
+    }),
+  );
   // Only the form's own settings are read here; the stations are read by the rows, the count and
   // the fit (each subscribes to what it shows), so a keystroke in a reading re-renders that row only.
   const unit = useDraft(store, (d) => d.unit);
@@ -32,7 +62,17 @@ export function SweepEntry({ rail, target, takenBy, onSaved }: { rail: Rail; tar
   const face = useDraft(store, (d) => d.face);
   const details = useDraft(
     store,
-    useShallow((d: SweepDraft) => ({ instrument: d.instrument, resolution: d.resolution, temperatureC: d.temperatureC, phase: d.phase, takenBy: d.takenBy, boltSize: d.boltSize, torqueNm: d.torqueNm, datum: d.datum, notes: d.notes })),
+    useShallow((d: SweepDraft) => ({
+      instrument: d.instrument,
+      resolution: d.resolution,
+      temperatureC: d.temperatureC,
+      phase: d.phase,
+      takenBy: d.takenBy,
+      boltSize: d.boltSize,
+      torqueNm: d.torqueNm,
+      datum: d.datum,
+      notes: d.notes,
+    })),
   );
   const [stepMm, setStepMm] = useState('100');
   const [source, setSource] = useState<'holes' | 'step'>('holes');
@@ -44,7 +84,11 @@ export function SweepEntry({ rail, target, takenBy, onSaved }: { rail: Rail; tar
   const [refused, setRefused] = useState<string | null>(null);
   // Stable callbacks, so memoised rows and fields skip re-rendering.
   const patch = useCallback((p: Partial<SweepDraft>) => store.setState(p), [store]);
-  const setRow = useCallback((i: number, p: Partial<StationDraft>) => store.setState((d) => ({ stations: d.stations.map((r, k) => (k === i ? { ...r, ...p } : r)) })), [store]);
+  const setRow = useCallback(
+    (i: number, p: Partial<StationDraft>) =>
+      store.setState((d) => ({ stations: d.stations.map((r, k) => (k === i ? { ...r, ...p } : r)) })),
+    [store],
+  );
   // A dropped station can be put back (the snackbar's Undo) where it was, reading and all.
   const [dropped, setDropped] = useState<{ index: number; row: StationDraft } | null>(null);
   const dropRow = useCallback(
@@ -58,7 +102,9 @@ export function SweepEntry({ rail, target, takenBy, onSaved }: { rail: Rail; tar
   );
   const undoDrop = () => {
     if (!dropped) return;
-    store.setState((d) => ({ stations: [...d.stations.slice(0, dropped.index), dropped.row, ...d.stations.slice(dropped.index)] }));
+    store.setState((d) => ({
+      stations: [...d.stations.slice(0, dropped.index), dropped.row, ...d.stations.slice(dropped.index)],
+    }));
     setDropped(null);
   };
   const focusSave = useCallback(() => saveRef.current?.focus(), []);
@@ -71,7 +117,11 @@ export function SweepEntry({ rail, target, takenBy, onSaved }: { rail: Rail; tar
       const row = stations[i];
       if (!row) return null;
       setRow(i, { reading: text });
-      return { cell: String(i), label: `station ${i + 1} at ${row.position} ${UNIT_LABELS[lengthUnit]}`, undo: () => setRow(i, { reading: '' }) };
+      return {
+        cell: String(i),
+        label: `station ${i + 1} at ${row.position} ${UNIT_LABELS[lengthUnit]}`,
+        undo: () => setRow(i, { reading: '' }),
+      };
     },
   });
 
@@ -80,7 +130,12 @@ export function SweepEntry({ rail, target, takenBy, onSaved }: { rail: Rail; tar
   const settled = useSettledBody(store);
   const preview = useStraightnessPreview(settled);
   const result = preview.data?.result ?? null;
-  const chartPoints = useDeferredValue(useMemo(() => (settled ? settled.positions.map((position, k) => ({ position, reading: settled.readings[k] })) : []), [settled]));
+  const chartPoints = useDeferredValue(
+    useMemo(
+      () => (settled ? settled.positions.map((position, k) => ({ position, reading: settled.readings[k] })) : []),
+      [settled],
+    ),
+  );
   const chartResult = useDeferredValue(settled ? result : null);
 
   const layStations = (rows: SweepDraft['stations']) => {
@@ -122,7 +177,13 @@ export function SweepEntry({ rail, target, takenBy, onSaved }: { rail: Rail; tar
     // The entry is kept by the device's queue from here on (sent now, or when the connection
     // returns): keep the set-up (instrument, datum, bolts) for the next sweep; clear the readings.
     const { id: _saved, stations, ...setUp } = draft;
-    store.setState(newDraft(stations.map((s) => ({ ...s, reading: '' })), setUp), true);
+    store.setState(
+      newDraft(
+        stations.map((s) => ({ ...s, reading: '' })),
+        setUp,
+      ),
+      true,
+    );
   };
 
   return (
@@ -138,22 +199,58 @@ export function SweepEntry({ rail, target, takenBy, onSaved }: { rail: Rail; tar
       </Alert>
       <Stack direction="row" spacing={1.5} useFlexGap sx={{ alignItems: 'center', flexWrap: 'wrap', mb: 2 }}>
         <UnitFamilySelect family="reading" value={unit} onChange={(u) => patch({ unit: u })} label="Reading unit" />
-        <UnitFamilySelect family="length" value={lengthUnit} onChange={(u) => patch({ lengthUnit: u })} label="Position unit" />
-        <TextField select label="Face read" value={face} onChange={(e) => patch({ face: e.target.value as SweepFace })} sx={{ minWidth: 220 }} slotProps={{ htmlInput: { 'data-testid': 'sweep-face' } }}>
+        <UnitFamilySelect
+          family="length"
+          value={lengthUnit}
+          onChange={(u) => patch({ lengthUnit: u })}
+          label="Position unit"
+        />
+        <TextField
+          select
+          label="Face read"
+          value={face}
+          onChange={(e) => patch({ face: e.target.value as SweepFace })}
+          sx={{ minWidth: 220 }}
+          slotProps={{ htmlInput: { 'data-testid': 'sweep-face' } }}
+        >
           {(['side', 'top'] as const).map((f) => (
             <MenuItem key={f} value={f}>
               {FACE_LABELS[f]}
             </MenuItem>
           ))}
         </TextField>
-        <ToggleButtonGroup exclusive size="small" value={source} onChange={(_, v) => v && setSource(v)} aria-label="Where the stations are">
+        <ToggleButtonGroup
+          exclusive
+          size="small"
+          value={source}
+          onChange={(_, v) => v && setSource(v)}
+          aria-label="Where the stations are"
+        >
           <ToggleButton value="holes">At the holes</ToggleButton>
           <ToggleButton value="step">Fixed step</ToggleButton>
         </ToggleButtonGroup>
         {source === 'step' && (
-          <TextField label="Step" value={stepMm} onChange={(e) => setStepMm(e.target.value)} sx={{ width: 120 }} slotProps={{ htmlInput: { inputMode: 'decimal' }, input: { endAdornment: <InputAdornment position="end">{UNIT_LABELS[lengthUnit]}</InputAdornment> } }} />
+          <TextField
+            label="Step"
+            value={stepMm}
+            onChange={(e) => setStepMm(e.target.value)}
+            sx={{ width: 120 }}
+            slotProps={{
+              htmlInput: { inputMode: 'decimal' },
+              input: { endAdornment: <InputAdornment position="end">{UNIT_LABELS[lengthUnit]}</InputAdornment> },
+            }}
+          />
         )}
-        <Button variant="outlined" onClick={() => layStations(source === 'holes' ? stationsAtHoles(rail.holes, lengthUnit) : stationsByStep(fromMm(rail.lengthMm, lengthUnit), Number(stepMm)))}>
+        <Button
+          variant="outlined"
+          onClick={() =>
+            layStations(
+              source === 'holes'
+                ? stationsAtHoles(rail.holes, lengthUnit)
+                : stationsByStep(fromMm(rail.lengthMm, lengthUnit), Number(stepMm)),
+            )
+          }
+        >
           {source === 'holes' ? `Lay ${rail.holes.length} stations at the holes` : 'Lay stations'}
         </Button>
         <Button startIcon={<FileUploadOutlined />} onClick={() => setCsvOpen(true)}>
@@ -164,11 +261,31 @@ export function SweepEntry({ rail, target, takenBy, onSaved }: { rail: Rail; tar
       <Grid container spacing={2.5}>
         {/* On a narrow screen the chart comes first, so it stays in view above the readings being typed. */}
         <Grid size={{ xs: 12, md: 6 }} sx={{ order: { xs: 2, md: 1 } }}>
-          <StationReadings store={store} unit={unit} lengthUnit={lengthUnit} fit={preview.data} onRowChange={setRow} onDrop={dropRow} onLastEnter={focusSave} />
+          <StationReadings
+            store={store}
+            unit={unit}
+            lengthUnit={lengthUnit}
+            fit={preview.data}
+            onRowChange={setRow}
+            onDrop={dropRow}
+            onLastEnter={focusSave}
+          />
         </Grid>
         <Grid size={{ xs: 12, md: 6 }} sx={{ order: { xs: 1, md: 2 } }}>
-          <SweepPreview points={chartPoints} unit={settled?.readingUnit ?? unit} lengthUnit={settled?.lengthUnit ?? lengthUnit} result={chartResult} target={target} label="Live straightness chart" pending={preview.isFetching} />
-          {preview.error && <Alert severity="error" sx={{ mt: 1 }}>{preview.error.message}</Alert>}
+          <SweepPreview
+            points={chartPoints}
+            unit={settled?.readingUnit ?? unit}
+            lengthUnit={settled?.lengthUnit ?? lengthUnit}
+            result={chartResult}
+            target={target}
+            label="Live straightness chart"
+            pending={preview.isFetching}
+          />
+          {preview.error && (
+            <Alert severity="error" sx={{ mt: 1 }}>
+              {preview.error.message}
+            </Alert>
+          )}
         </Grid>
         <Grid size={12} sx={{ order: 3 }}>
           <SweepDetailsFields value={details} unitLabel={UNIT_LABELS[unit]} torques={torques.data} onChange={patch} />
@@ -176,7 +293,11 @@ export function SweepEntry({ rail, target, takenBy, onSaved }: { rail: Rail; tar
       </Grid>
       <Box sx={{ display: 'flex', gap: 2, alignItems: 'center', flexWrap: 'wrap', mt: 2.5 }}>
         <SweepSaveBar store={store} saveRef={saveRef} onSave={save} />
-        {refused && <Alert severity="error" sx={{ flex: '1 1 100%' }}>{refused} — nothing was lost; fix it and save again.</Alert>}
+        {refused && (
+          <Alert severity="error" sx={{ flex: '1 1 100%' }}>
+            {refused} — nothing was lost; fix it and save again.
+          </Alert>
+        )}
         {waiting.map((w) => (
           <Alert key={w.key} severity="info" sx={{ flex: '1 1 100%' }} data-testid="sweep-waiting">
             Waiting to send: {w.label}. It is kept on this device and recorded once when the connection returns.
@@ -187,9 +308,18 @@ export function SweepEntry({ rail, target, takenBy, onSaved }: { rail: Rail; tar
         open={!!dropped}
         autoHideDuration={10_000}
         onClose={(_, why) => why !== 'clickaway' && setDropped(null)}
-        message={dropped ? `Removed station ${dropped.index + 1} at ${dropped.row.position || '?'} ${UNIT_LABELS[lengthUnit]}${dropped.row.reading.trim() ? ` (reading ${dropped.row.reading})` : ''}` : ''}
+        message={
+          dropped
+            ? `Removed station ${dropped.index + 1} at ${dropped.row.position || '?'} ${UNIT_LABELS[lengthUnit]}${dropped.row.reading.trim() ? ` (reading ${dropped.row.reading})` : ''}`
+            : ''
+        }
         action={
-          <Button color="inherit" size="small" onClick={undoDrop} aria-label={dropped ? `Undo removing station ${dropped.index + 1}` : 'Undo'}>
+          <Button
+            color="inherit"
+            size="small"
+            onClick={undoDrop}
+            aria-label={dropped ? `Undo removing station ${dropped.index + 1}` : 'Undo'}
+          >
             Undo
           </Button>
         }
@@ -198,7 +328,9 @@ export function SweepEntry({ rail, target, takenBy, onSaved }: { rail: Rail; tar
         open={csvOpen}
         unit={unit}
         onClose={() => setCsvOpen(false)}
-        onImport={(stations) => patch({ stations: stations.map((s) => ({ position: String(s.position), reading: String(s.reading) })) })}
+        onImport={(stations) =>
+          patch({ stations: stations.map((s) => ({ position: String(s.position), reading: String(s.reading) })) })
+        }
       />
     </Paper>
   );

@@ -1,5 +1,21 @@
 import { useEffect, useEffectEvent, useRef, useState } from 'react';
-import { Alert, Box, Button, Checkbox, IconButton, Paper, Snackbar, Stack, Table, TableBody, TableCell, TableHead, TableRow, Tooltip, Typography } from '@mui/material';
+import {
+  Alert,
+  Box,
+  Button,
+  Checkbox,
+  IconButton,
+  Paper,
+  Snackbar,
+  Stack,
+  Table,
+  TableBody,
+  TableCell,
+  TableHead,
+  TableRow,
+  Tooltip,
+  Typography,
+} from '@mui/material';
 import DeleteOutline from '@mui/icons-material/DeleteOutlined';
 import LockOutlined from '@mui/icons-material/LockOutlined';
 import EditOutlined from '@mui/icons-material/EditOutlined';
@@ -71,9 +87,12 @@ export function SweepHistory({ sweeps, canRecord }: { sweeps: SweepListItem[]; c
   const shown = sweeps.filter((s) => s.id !== deleting?.id);
   if (!sweeps.length) return null;
   // A sweep whose readings or result cannot be read has nothing to draw.
-  const chosen = full.filter((s) => picked.includes(s.id)).flatMap((s) => (s.result && s.stations ? [{ ...s, result: s.result, stations: s.stations }] : []));
+  const chosen = full
+    .filter((s) => picked.includes(s.id))
+    .flatMap((s) => (s.result && s.stations ? [{ ...s, result: s.result, stations: s.stations }] : []));
   const unit = chosen[0]?.readingUnit ?? sweeps[0].readingUnit;
-  const toggle = (id: string) => setPicked(picked.includes(id) ? picked.filter((x) => x !== id) : [...picked, id].slice(-2));
+  const toggle = (id: string) =>
+    setPicked(picked.includes(id) ? picked.filter((x) => x !== id) : [...picked, id].slice(-2));
   const opened = full.find((s) => s.id === open);
 
   return (
@@ -82,7 +101,11 @@ export function SweepHistory({ sweeps, canRecord }: { sweeps: SweepListItem[]; c
         <Typography variant="h3" component="h2" gutterBottom>
           Sweep history
         </Typography>
-        {remove.error && <Alert severity="error" sx={{ mb: 1 }}>{remove.error.message}</Alert>}
+        {remove.error && (
+          <Alert severity="error" sx={{ mb: 1 }}>
+            {remove.error.message}
+          </Alert>
+        )}
         <ResponsiveTable titleFirst={false}>
           <Table size="small" aria-label="Sweeps">
             <TableHead>
@@ -100,7 +123,11 @@ export function SweepHistory({ sweeps, canRecord }: { sweeps: SweepListItem[]; c
               {shown.map((s) => (
                 <TableRow key={s.id} hover selected={open === s.id}>
                   <TableCell padding="checkbox">
-                    <Checkbox checked={picked.includes(s.id)} onChange={() => toggle(s.id)} slotProps={{ input: { 'aria-label': `Overlay the sweep of ${when(s)}` } }} />
+                    <Checkbox
+                      checked={picked.includes(s.id)}
+                      onChange={() => toggle(s.id)}
+                      slotProps={{ input: { 'aria-label': `Overlay the sweep of ${when(s)}` } }}
+                    />
                   </TableCell>
                   <TableCell>
                     {when(s)}
@@ -128,17 +155,30 @@ export function SweepHistory({ sweeps, canRecord }: { sweeps: SweepListItem[]; c
                       {open === s.id ? 'Close' : 'Open'}
                     </Button>
                     {canRecord && !s.locked && (
-                      <Button size="small" startIcon={<EditOutlined />} onClick={() => setEditing(s)} aria-label={`Edit details of the sweep of ${when(s)}`}>
+                      <Button
+                        size="small"
+                        startIcon={<EditOutlined />}
+                        onClick={() => setEditing(s)}
+                        aria-label={`Edit details of the sweep of ${when(s)}`}
+                      >
                         Edit details
                       </Button>
                     )}
                     {s.locked ? (
                       <Tooltip title="Part of an approval: kept as it is">
-                        <LockOutlined fontSize="small" sx={{ verticalAlign: 'middle', color: 'text.secondary', ml: 1 }} aria-label="Locked by an approval" />
+                        <LockOutlined
+                          fontSize="small"
+                          sx={{ verticalAlign: 'middle', color: 'text.secondary', ml: 1 }}
+                          aria-label="Locked by an approval"
+                        />
                       </Tooltip>
                     ) : (
                       canRecord && (
-                        <IconButton size="small" aria-label={`Delete the sweep of ${when(s)}`} onClick={() => askDelete(s)}>
+                        <IconButton
+                          size="small"
+                          aria-label={`Delete the sweep of ${when(s)}`}
+                          onClick={() => askDelete(s)}
+                        >
                           <DeleteOutline fontSize="small" />
                         </IconButton>
                       )
@@ -159,7 +199,8 @@ export function SweepHistory({ sweeps, canRecord }: { sweeps: SweepListItem[]; c
         {chosen.length > 0 && (
           <Box sx={{ mt: 2 }}>
             <Typography color="text.secondary" sx={{ mb: 1 }}>
-              Deviation of each sweep from its own least-squares line, so sweeps zeroed differently compare shape for shape.
+              Deviation of each sweep from its own least-squares line, so sweeps zeroed differently compare shape for
+              shape.
             </Typography>
             <SweepOverlayChart
               label="Sweeps overlaid"
@@ -168,19 +209,33 @@ export function SweepHistory({ sweeps, canRecord }: { sweeps: SweepListItem[]; c
               target={targetZone(sweeps.find((s) => s.id === chosen[0].id)?.target, unit)}
               series={chosen.map((s) => ({
                 name: `${when(s)} (${PHASE_LABELS[s.phase].toLowerCase()})`,
-                points: s.stations.map((st, i) => ({ position: st.positionMm, value: fromMm(s.result.leastSquares.residuals[i], unit) })),
+                points: s.stations.map((st, i) => ({
+                  position: st.positionMm,
+                  value: fromMm(s.result.leastSquares.residuals[i], unit),
+                })),
               }))}
             />
           </Box>
         )}
       </Paper>
-      {editing && <EditSweepDetailsDialog sweepId={editing.id} title={`sweep of ${when(editing)}`} onClose={() => setEditing(null)} />}
+      {editing && (
+        <EditSweepDetailsDialog
+          sweepId={editing.id}
+          title={`sweep of ${when(editing)}`}
+          onClose={() => setEditing(null)}
+        />
+      )}
       {opened && <SweepResult sweep={opened} title={`Sweep of ${when(opened)}`} />}
       <Snackbar
         open={!!deleting}
         message={deleting ? `Deleted the sweep of ${when(deleting)}` : ''}
         action={
-          <Button color="inherit" size="small" onClick={undoDelete} aria-label={deleting ? `Undo deleting the sweep of ${when(deleting)}` : 'Undo'}>
+          <Button
+            color="inherit"
+            size="small"
+            onClick={undoDelete}
+            aria-label={deleting ? `Undo deleting the sweep of ${when(deleting)}` : 'Undo'}
+          >
             Undo
           </Button>
         }

@@ -43,14 +43,23 @@ export const SweepPreview = memo(function SweepPreview({
   const judged = leastSquares ? ls.straightness : mz.straightness;
   const status = target ? (judged <= targetMm(target) + 1e-12 ? 'within-target' : 'outside-target') : null;
   // The fit's slope is per mm of travel: the chart draws positions in mm.
-  const pointsMm = lengthUnit === 'mm' ? points : points.map((p) => ({ position: toMm(p.position, lengthUnit), reading: p.reading }));
+  const pointsMm =
+    lengthUnit === 'mm' ? points : points.map((p) => ({ position: toMm(p.position, lengthUnit), reading: p.reading }));
   return (
     <Stack spacing={1.5}>
       <StraightnessChart
         points={pointsMm}
         leastSquares={{ slope: u(ls.slope), intercept: u(ls.intercept) }}
         zone={{ slope: u(mz.slope), intercept: u(mz.intercept), width: u(mz.straightness) }}
-        target={target && isLengthUnit(target.unit) ? { width: u(targetMm(target)), reference: leastSquares ? 'least-squares' : 'minimum-zone', label: `Target zone ${showTarget(target)} wide` } : null}
+        target={
+          target && isLengthUnit(target.unit)
+            ? {
+                width: u(targetMm(target)),
+                reference: leastSquares ? 'least-squares' : 'minimum-zone',
+                label: `Target zone ${showTarget(target)} wide`,
+              }
+            : null
+        }
         unitLabel={UNIT_LABELS[unit]}
         height={300}
         label={label}
@@ -76,14 +85,22 @@ export const SweepPreview = memo(function SweepPreview({
               Target ({leastSquares ? 'least squares' : 'minimum zone, ISO 1101'})
             </Typography>
             <Typography sx={{ fontWeight: 600 }}>
-              {showTarget(target)} <Typography component="span" color="text.secondary">({showInTargetUnit(judged, target)} now)</Typography>
+              {showTarget(target)}{' '}
+              <Typography component="span" color="text.secondary">
+                ({showInTargetUnit(judged, target)} now)
+              </Typography>
             </Typography>
           </Box>
         )}
         {status && <CheckStatusChip status={status} />}
       </Stack>
       {/* Always takes its line, so the readings below (on a phone) do not jump while a fit runs. */}
-      <Typography variant="body2" color="text.secondary" role="status" sx={{ minHeight: '1.5em', visibility: pending ? 'visible' : 'hidden' }}>
+      <Typography
+        variant="body2"
+        color="text.secondary"
+        role="status"
+        sx={{ minHeight: '1.5em', visibility: pending ? 'visible' : 'hidden' }}
+      >
         Updating the fit…
       </Typography>
     </Stack>

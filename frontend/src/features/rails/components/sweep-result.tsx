@@ -1,4 +1,16 @@
-import { Alert, Box, Paper, Stack, Table, TableBody, TableCell, TableContainer, TableHead, TableRow, Typography } from '@mui/material';
+import {
+  Alert,
+  Box,
+  Paper,
+  Stack,
+  Table,
+  TableBody,
+  TableCell,
+  TableContainer,
+  TableHead,
+  TableRow,
+  Typography,
+} from '@mui/material';
 import { fromMm, UNIT_LABELS } from '../../../lib/units';
 import { PHASE_LABELS, type Sweep } from '../types';
 import { showInTargetUnit, showLength, showTarget } from '../utils/display';
@@ -33,7 +45,8 @@ export function SweepResult({ sweep, title = 'Saved sweep' }: { sweep: Sweep; ti
         <CheckStatusChip status={sweep.status} size="medium" />
       </Box>
       <Typography color="text.secondary" sx={{ mb: 2 }}>
-        {PHASE_LABELS[sweep.phase]} · {sweep.face === 'top' ? 'top face' : 'side face'} · {formatDateTime(sweep.takenAt)} · {sweep.takenBy}
+        {PHASE_LABELS[sweep.phase]} · {sweep.face === 'top' ? 'top face' : 'side face'} ·{' '}
+        {formatDateTime(sweep.takenAt)} · {sweep.takenBy}
         {sweep.instrument ? ` · ${sweep.instrument}` : ''}
         {sweep.resolution !== null ? ` (${sweep.resolution} ${UNIT_LABELS[unit]})` : ''}
         {sweep.temperatureC !== null ? ` · ${sweep.temperatureC} °C` : ''}
@@ -44,13 +57,21 @@ export function SweepResult({ sweep, title = 'Saved sweep' }: { sweep: Sweep; ti
         {leastSquares
           ? `Least-squares straightness ${showInTargetUnit(result.leastSquares.straightness, sweep.target)}`
           : `Minimum-zone straightness (ISO 1101) ${showInTargetUnit(result.minimumZone.straightness, sweep.target)}`}{' '}
-        against a target of {showTarget(sweep.target)} ({leastSquares ? 'judged on the least-squares line' : 'judged on the minimum zone'}):{' '}
+        against a target of {showTarget(sweep.target)} (
+        {leastSquares ? 'judged on the least-squares line' : 'judged on the minimum zone'}):{' '}
         {sweep.status === 'within-target' ? 'within target.' : 'outside target.'}{' '}
-        {leastSquares ? `Minimum zone ${showInTargetUnit(result.minimumZone.straightness, sweep.target)}.` : `Least squares ${showInTargetUnit(result.leastSquares.straightness, sweep.target)}.`}
+        {leastSquares
+          ? `Minimum zone ${showInTargetUnit(result.minimumZone.straightness, sweep.target)}.`
+          : `Least squares ${showInTargetUnit(result.leastSquares.straightness, sweep.target)}.`}
         {sweep.localSlope && (
           <>
             {' '}
-            Largest local slope <strong data-testid="local-slope">{sweep.localSlope.mmPerM.toFixed(3)} mm/m</strong> (between {Number(fromMm(sweep.localSlope.fromMm, lengthUnit).toPrecision(6))} and {Number(fromMm(sweep.localSlope.toMm, lengthUnit).toPrecision(6))} {UNIT_LABELS[lengthUnit]} along the rail).
+            Largest local slope <strong data-testid="local-slope">
+              {sweep.localSlope.mmPerM.toFixed(3)} mm/m
+            </strong>{' '}
+            (between {Number(fromMm(sweep.localSlope.fromMm, lengthUnit).toPrecision(6))} and{' '}
+            {Number(fromMm(sweep.localSlope.toMm, lengthUnit).toPrecision(6))} {UNIT_LABELS[lengthUnit]} along the
+            rail).
           </>
         )}
       </Alert>
@@ -63,7 +84,14 @@ export function SweepResult({ sweep, title = 'Saved sweep' }: { sweep: Sweep; ti
       )}
       <Stack direction={{ xs: 'column', lg: 'row' }} spacing={2.5}>
         <Box sx={{ flex: 3, minWidth: 0 }}>
-          <SweepPreview points={stations.map((s) => ({ position: s.position, reading: s.reading }))} unit={unit} lengthUnit={lengthUnit} result={result} target={sweep.target} label="Saved sweep straightness chart" />
+          <SweepPreview
+            points={stations.map((s) => ({ position: s.position, reading: s.reading }))}
+            unit={unit}
+            lengthUnit={lengthUnit}
+            result={result}
+            target={sweep.target}
+            label="Saved sweep straightness chart"
+          />
         </Box>
         <TableContainer sx={{ flex: 2, maxHeight: 380 }}>
           <Table size="small" stickyHeader aria-label="Residual per station">
@@ -93,7 +121,8 @@ export function SweepResult({ sweep, title = 'Saved sweep' }: { sweep: Sweep; ti
         </TableContainer>
       </Stack>
       <Typography variant="body2" color="text.secondary" sx={{ mt: 1 }}>
-        End-point straightness {showLength(result.endPoint.straightness, unit)}. Residuals are from the {leastSquares ? 'least-squares line' : 'minimum-zone line'}, the reference the target names.
+        End-point straightness {showLength(result.endPoint.straightness, unit)}. Residuals are from the{' '}
+        {leastSquares ? 'least-squares line' : 'minimum-zone line'}, the reference the target names.
       </Typography>
     </Paper>
   );

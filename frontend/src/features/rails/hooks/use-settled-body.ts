@@ -10,7 +10,12 @@ export const SETTLE_MS = 400;
 export function previewBodyOf(d: SweepDraft): PreviewBody | null {
   const ready = readyStations(d.stations);
   if (ready.stations.length < 3 || ready.problems.size > 0) return null;
-  return { positions: ready.stations.map((s) => s.position), readings: ready.stations.map((s) => s.reading), readingUnit: d.unit, lengthUnit: d.lengthUnit };
+  return {
+    positions: ready.stations.map((s) => s.position),
+    readings: ready.stations.map((s) => s.reading),
+    readingUnit: d.unit,
+    lengthUnit: d.lengthUnit,
+  };
 }
 
 /**

@@ -76,4 +76,4 @@ export function useSweepDraft(railId: string, initial: () => SweepDraft): SweepD
 }
 
 /** One slice of the draft; the component re-renders only when that slice changes (compared with Object.is). */
-export const useDraft = <S,>(store: SweepDraftStore, select: (d: SweepDraft) => S): S => useStore(store, select);
+export const useDraft = <S>(store: SweepDraftStore, select: (d: SweepDraft) => S): S => useStore(store, select);

@@ -5,7 +5,9 @@ const DIGITS: Record<LengthUnit, number> = { mm: 4, um: 1, in: 5, thou: 2 };
 
 /** A length in mm shown in a unit, always with the unit. */
 export const showLength = (mm: number | null | undefined, unit: LengthUnit) =>
-  mm === null || mm === undefined || !Number.isFinite(mm) ? '—' : `${fromMm(mm, unit).toFixed(DIGITS[unit])} ${UNIT_LABELS[unit]}`;
+  mm === null || mm === undefined || !Number.isFinite(mm)
+    ? '—'
+    : `${fromMm(mm, unit).toFixed(DIGITS[unit])} ${UNIT_LABELS[unit]}`;
 
 export { isLengthUnit };
 

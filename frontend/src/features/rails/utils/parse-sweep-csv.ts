@@ -28,7 +28,12 @@ export function parseSweepCsv(text: string): ParsedCsv {
   const seen = new Map<number, number>();
   readRows(text).forEach(({ line, cells }) => {
     const textLine = (lines[line - 1] ?? '').trim();
-    if (!rows.length && header === null && cells.some((c) => /[a-z]/i.test(c)) && cells.every((c) => numberOrNull(c) === null)) {
+    if (
+      !rows.length &&
+      header === null &&
+      cells.some((c) => /[a-z]/i.test(c)) &&
+      cells.every((c) => numberOrNull(c) === null)
+    ) {
       header = textLine;
       return;
     }

@@ -9,7 +9,10 @@ export const stationsAtHoles = (holes: { position: number }[], unit: LengthUnit 
 export function stationsByStep(length: number, step: number): StationDraft[] {
   if (!(step > 0)) return [];
   const count = Math.min(Math.floor(length / step + 1e-9) + 1, 2000);
-  return Array.from({ length: count }, (_, i) => ({ position: String(Math.round(i * step * 10000) / 10000), reading: '' }));
+  return Array.from({ length: count }, (_, i) => ({
+    position: String(Math.round(i * step * 10000) / 10000),
+    reading: '',
+  }));
 }
 
 const asNumber = (s: string) => {

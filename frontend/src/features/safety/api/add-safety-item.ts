@@ -12,6 +12,7 @@ export function useAddSafetyItem() {
   return useMutation({
     mutationFn: (body: SafetyItemInput) => answer(client.POST('/api/safety-items', { body })),
     // A new item is asked on every walk: each machine's walk is unfinished again until it is answered.
-    onSuccess: () => Promise.all([safetyKeys.all, ...MACHINE_STATE_KEYS].map((queryKey) => qc.invalidateQueries({ queryKey }))),
+    onSuccess: () =>
+      Promise.all([safetyKeys.all, ...MACHINE_STATE_KEYS].map((queryKey) => qc.invalidateQueries({ queryKey }))),
   });
 }

@@ -19,16 +19,29 @@ export function useAnswerSafetyItem(machineId: string) {
   const qc = useQueryClient();
   const command = useCommand<SafetyWalk>();
   const mutate = ({ itemId, itemText, ...body }: AnswerInput) => {
-    qc.setQueryData<SafetyWalk>(safetyKeys.walk(machineId), (walk) =>
-      walk && {
-        ...walk,
-        sections: walk.sections.map((s) => ({
-          ...s,
-          items: s.items.map((i) =>
-            i.id === itemId ? { ...i, answer: { id: i.answer?.id ?? 'waiting', answer: body.answer, note: body.note ?? '', answeredBy: { id: sessionOwner() ?? null, name: sessionOwnerName() }, answeredAt: new Date().toISOString() } } : i,
-          ),
-        })),
-      },
+    qc.setQueryData<SafetyWalk>(
+      safetyKeys.walk(machineId),
+      (walk) =>
+        walk && {
+          ...walk,
+          sections: walk.sections.map((s) => ({
+            ...s,
+            items: s.items.map((i) =>
+              i.id === itemId
+                ? {
+                    ...i,
+                    answer: {
+                      id: i.answer?.id ?? 'waiting',
+                      answer: body.answer,
+                      note: body.note ?? '',
+                      answeredBy: { id: sessionOwner() ?? null, name: sessionOwnerName() },
+                      answeredAt: new Date().toISOString(),
+                    },
+                  }
+                : i,
+            ),
+          })),
+        },
     );
     command.send({
       method: 'PUT',
@@ -39,5 +52,10 @@ export function useAnswerSafetyItem(machineId: string) {
     });
   };
   const sending = command.isPending && !command.isPaused ? (command.variables?.path.split('/').pop() ?? null) : null;
-  return { mutate, sendingItemId: sending ? decodeURIComponent(sending) : null, error: command.error, reset: command.reset };
+  return {
+    mutate,
+    sendingItemId: sending ? decodeURIComponent(sending) : null,
+    error: command.error,
+    reset: command.reset,
+  };
 }

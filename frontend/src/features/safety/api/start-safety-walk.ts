@@ -7,7 +7,8 @@ import { safetyKeys } from '../types';
 export function useStartSafetyWalk(machineId: string) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: () => answer(client.POST('/api/machines/{id}/safety-walk/rounds', { params: { path: { id: machineId } } })),
+    mutationFn: () =>
+      answer(client.POST('/api/machines/{id}/safety-walk/rounds', { params: { path: { id: machineId } } })),
     onSuccess: (walk) => {
       qc.setQueryData(safetyKeys.walk(machineId), walk);
       return Promise.all(MACHINE_STATE_KEYS.map((queryKey) => qc.invalidateQueries({ queryKey })));

@@ -7,7 +7,17 @@ import { formatDateTime } from '../../../lib/format-time';
 const COLOURS: Record<SafetyAnswer, string> = { yes: palette.within, no: palette.outside, na: palette.notStarted };
 
 /** One item of the walk: its answer (yes / no / not applicable), a note, who answered and when. */
-export function SafetyItemRow({ item, canAnswer, busy, onAnswer }: { item: WalkItem; canAnswer: boolean; busy: boolean; onAnswer: (answer: SafetyAnswer, note: string) => void }) {
+export function SafetyItemRow({
+  item,
+  canAnswer,
+  busy,
+  onAnswer,
+}: {
+  item: WalkItem;
+  canAnswer: boolean;
+  busy: boolean;
+  onAnswer: (answer: SafetyAnswer, note: string) => void;
+}) {
   const a = item.answer;
   const savedNote = a?.note ?? '';
   const [note, setNote] = useState(savedNote);
@@ -23,7 +33,14 @@ export function SafetyItemRow({ item, canAnswer, busy, onAnswer }: { item: WalkI
     <Box
       role="group"
       aria-label={item.text}
-      sx={{ py: 1.5, px: 1.5, borderLeft: '4px solid', borderColor: a ? COLOURS[a.answer] : '#d8d3c7', bgcolor: isNo ? 'rgba(179, 38, 30, 0.06)' : 'transparent', borderRadius: '0 4px 4px 0' }}
+      sx={{
+        py: 1.5,
+        px: 1.5,
+        borderLeft: '4px solid',
+        borderColor: a ? COLOURS[a.answer] : '#d8d3c7',
+        bgcolor: isNo ? 'rgba(179, 38, 30, 0.06)' : 'transparent',
+        borderRadius: '0 4px 4px 0',
+      }}
     >
       <Box sx={{ display: 'flex', gap: 2, flexWrap: 'wrap', alignItems: 'flex-start' }}>
         <Box sx={{ flex: '1 1 300px', minWidth: 0 }}>
@@ -32,9 +49,17 @@ export function SafetyItemRow({ item, canAnswer, busy, onAnswer }: { item: WalkI
             {!item.builtIn && <Chip size="small" label="Workshop item" variant="outlined" sx={{ ml: 1, height: 20 }} />}
           </Typography>
           <Typography variant="body2" color="text.secondary" sx={{ mt: 0.25 }}>
-            {a ? `${ANSWER_LABELS[a.answer]} · ${a.answeredBy.name} · ${formatDateTime(a.answeredAt)}` : 'Not answered yet'}
+            {a
+              ? `${ANSWER_LABELS[a.answer]} · ${a.answeredBy.name} · ${formatDateTime(a.answeredAt)}`
+              : 'Not answered yet'}
           </Typography>
-          {isNo && <Chip size="small" label="Blocks approval" sx={{ mt: 0.5, bgcolor: palette.outside, color: '#fff', fontWeight: 600 }} />}
+          {isNo && (
+            <Chip
+              size="small"
+              label="Blocks approval"
+              sx={{ mt: 0.5, bgcolor: palette.outside, color: '#fff', fontWeight: 600 }}
+            />
+          )}
         </Box>
         <ToggleButtonGroup
           exclusive
@@ -45,7 +70,14 @@ export function SafetyItemRow({ item, canAnswer, busy, onAnswer }: { item: WalkI
           aria-label="Answer"
         >
           {(['yes', 'no', 'na'] as const).map((v) => (
-            <ToggleButton key={v} value={v} sx={{ px: 1.5, '&.Mui-selected': { bgcolor: COLOURS[v], color: '#fff', '&:hover': { bgcolor: COLOURS[v] } } }}>
+            <ToggleButton
+              key={v}
+              value={v}
+              sx={{
+                px: 1.5,
+                '&.Mui-selected': { bgcolor: COLOURS[v], color: '#fff', '&:hover': { bgcolor: COLOURS[v] } },
+              }}
+            >
               {ANSWER_LABELS[v]}
             </ToggleButton>
           ))}
@@ -53,7 +85,9 @@ export function SafetyItemRow({ item, canAnswer, busy, onAnswer }: { item: WalkI
       </Box>
       {!canAnswer && a?.note && (
         <Typography variant="body2" sx={{ mt: 0.75 }}>
-          <Box component="span" sx={{ color: 'text.secondary' }}>Note: </Box>
+          <Box component="span" sx={{ color: 'text.secondary' }}>
+            Note:{' '}
+          </Box>
           {a.note}
         </Typography>
       )}

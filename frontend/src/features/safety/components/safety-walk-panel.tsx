@@ -38,8 +38,14 @@ export function SafetyWalkPanel({ machineId }: { machineId: string }) {
       <SafetyCautions />
       <Paper sx={{ p: { xs: 2, md: 2.5 } }}>
         <Box sx={{ display: 'flex', gap: 1.5, alignItems: 'center', flexWrap: 'wrap', mb: 1 }}>
-          <Typography variant="h3" sx={{ flex: '1 1 auto' }}>Safety walk</Typography>
-          <Chip label={look.label} sx={{ bgcolor: look.color, color: '#fff', fontWeight: 600 }} data-testid="walk-status" />
+          <Typography variant="h3" sx={{ flex: '1 1 auto' }}>
+            Safety walk
+          </Typography>
+          <Chip
+            label={look.label}
+            sx={{ bgcolor: look.color, color: '#fff', fontWeight: 600 }}
+            data-testid="walk-status"
+          />
           {canManageTargets(role) && (
             <Button startIcon={<AddOutlined />} onClick={() => setAdding(true)}>
               Add a workshop item
@@ -47,23 +53,45 @@ export function SafetyWalkPanel({ machineId }: { machineId: string }) {
           )}
         </Box>
         <Typography color="text.secondary" data-testid="walk-counts">
-          {w.counts.answered} of {w.counts.total} answered · {w.counts.yes} yes · {w.counts.no} no · {w.counts.na} not applicable. The walk is complete when every item is answered and none is “no”.
+          {w.counts.answered} of {w.counts.total} answered · {w.counts.yes} yes · {w.counts.no} no · {w.counts.na} not
+          applicable. The walk is complete when every item is answered and none is “no”.
         </Typography>
-        {!canCalibrate(role) && <Typography variant="body2" color="text.secondary" sx={{ mt: 0.5 }}>Technicians, owners and admins answer the walk.</Typography>}
+        {!canCalibrate(role) && (
+          <Typography variant="body2" color="text.secondary" sx={{ mt: 0.5 }}>
+            Technicians, owners and admins answer the walk.
+          </Typography>
+        )}
         {w.blocking && (
           <Alert severity="error" sx={{ mt: 1.5 }}>
-            {w.counts.no === 1 ? 'One item is answered “no”' : `${w.counts.no} items are answered “no”`}: the machine cannot be approved until each is put right and answered again.
+            {w.counts.no === 1 ? 'One item is answered “no”' : `${w.counts.no} items are answered “no”`}: the machine
+            cannot be approved until each is put right and answered again.
           </Alert>
         )}
         {w.locked && (
-          <Alert severity="info" sx={{ mt: 1.5 }} action={canCalibrate(role) ? <Button color="inherit" onClick={() => startNew.mutate()}>Start a new walk</Button> : undefined}>
+          <Alert
+            severity="info"
+            sx={{ mt: 1.5 }}
+            action={
+              canCalibrate(role) ? (
+                <Button color="inherit" onClick={() => startNew.mutate()}>
+                  Start a new walk
+                </Button>
+              ) : undefined
+            }
+          >
             This walk is part of an approved commissioning record and can no longer be changed.
           </Alert>
         )}
-        {answer.error && <Alert severity="error" sx={{ mt: 1.5 }} onClose={() => answer.reset()}>{answer.error.message}</Alert>}
+        {answer.error && (
+          <Alert severity="error" sx={{ mt: 1.5 }} onClose={() => answer.reset()}>
+            {answer.error.message}
+          </Alert>
+        )}
         {w.sections.map((s) => (
           <Box key={s.id} component="section" aria-label={s.label} sx={{ mt: 2.5 }}>
-            <Typography variant="h4" component="h4" sx={{ mb: 0.5 }}>{s.label}</Typography>
+            <Typography variant="h4" component="h4" sx={{ mb: 0.5 }}>
+              {s.label}
+            </Typography>
             <Stack spacing={0.75} divider={<Box sx={{ borderTop: '1px solid #ece8de' }} />}>
               {s.items.map((item) => (
                 <SafetyItemRow
@@ -71,7 +99,9 @@ export function SafetyWalkPanel({ machineId }: { machineId: string }) {
                   item={item}
                   canAnswer={canAnswer}
                   busy={answer.sendingItemId === item.id}
-                  onAnswer={(a, note) => answer.mutate({ itemId: item.id, itemText: item.text, answer: a, note: note.trim() || undefined })}
+                  onAnswer={(a, note) =>
+                    answer.mutate({ itemId: item.id, itemText: item.text, answer: a, note: note.trim() || undefined })
+                  }
                 />
               ))}
             </Stack>

@@ -8,7 +8,15 @@ export function useCreateTargetSet() {
   return useMutation({
     mutationFn: ({ from, name, description }: { from: TargetSet; name: string; description: string }) => {
       const targets = Object.fromEntries(
-        Object.entries(from.targets).map(([key, t]) => [key, { value: t.value, unit: t.unit, ...(t.source ? { source: t.source } : {}), ...(t.reference ? { reference: t.reference } : {}) }]),
+        Object.entries(from.targets).map(([key, t]) => [
+          key,
+          {
+            value: t.value,
+            unit: t.unit,
+            ...(t.source ? { source: t.source } : {}),
+            ...(t.reference ? { reference: t.reference } : {}),
+          },
+        ]),
       );
       return answer(client.POST('/api/target-sets', { body: { name, description, targets } }));
     },

@@ -12,8 +12,13 @@ export interface TargetSetPatch {
 export function useUpdateTargetSet(id: string) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (body: TargetSetPatch) => answer(client.PATCH('/api/target-sets/{id}', { params: { path: { id } }, body })),
+    mutationFn: (body: TargetSetPatch) =>
+      answer(client.PATCH('/api/target-sets/{id}', { params: { path: { id } }, body })),
     // Machines are judged against these targets: their counts change too.
-    onSuccess: () => Promise.all([qc.invalidateQueries({ queryKey: targetSetKeys.all }), qc.invalidateQueries({ queryKey: ['machines'] })]),
+    onSuccess: () =>
+      Promise.all([
+        qc.invalidateQueries({ queryKey: targetSetKeys.all }),
+        qc.invalidateQueries({ queryKey: ['machines'] }),
+      ]),
   });
 }

@@ -6,7 +6,17 @@ import { TargetSetUsers } from './target-set-users';
 import { ResponsiveTable } from '../../../components/table/responsive-table';
 
 /** One target set: every target with its value, unit and where the value came from. */
-export function TargetSetCard({ set, canEdit, onEdit, onCopy }: { set: TargetSet; canEdit: boolean; onEdit: () => void; onCopy: () => void }) {
+export function TargetSetCard({
+  set,
+  canEdit,
+  onEdit,
+  onCopy,
+}: {
+  set: TargetSet;
+  canEdit: boolean;
+  onEdit: () => void;
+  onCopy: () => void;
+}) {
   const entries = Object.entries(set.targets);
   return (
     <Paper component="section" aria-label={set.name} sx={{ p: { xs: 1.5, sm: 2.5 } }}>
@@ -19,10 +29,20 @@ export function TargetSetCard({ set, canEdit, onEdit, onCopy }: { set: TargetSet
         </Box>
         {canEdit ? (
           <Box sx={{ display: 'flex', gap: 1 }}>
-            <Button startIcon={<EditOutlined />} onClick={onEdit} aria-label={`Edit ${set.name}`} sx={{ minHeight: 44 }}>
+            <Button
+              startIcon={<EditOutlined />}
+              onClick={onEdit}
+              aria-label={`Edit ${set.name}`}
+              sx={{ minHeight: 44 }}
+            >
               Edit or rename
             </Button>
-            <Button startIcon={<ContentCopyOutlined />} onClick={onCopy} aria-label={`Copy ${set.name}`} sx={{ minHeight: 44 }}>
+            <Button
+              startIcon={<ContentCopyOutlined />}
+              onClick={onCopy}
+              aria-label={`Copy ${set.name}`}
+              sx={{ minHeight: 44 }}
+            >
               Copy
             </Button>
           </Box>
@@ -46,7 +66,9 @@ export function TargetSetCard({ set, canEdit, onEdit, onCopy }: { set: TargetSet
                 <TableCell sx={{ minWidth: 180 }}>{t.label}</TableCell>
                 <TableCell align="right" sx={{ whiteSpace: 'nowrap', fontWeight: 600 }}>
                   {t.value} {UNIT_WORDS[t.unit]}
-                  {key === 'railStraightness' ? `, judged on the ${REFERENCE_WORDS[t.reference ?? 'minimum-zone']}` : ''}
+                  {key === 'railStraightness'
+                    ? `, judged on the ${REFERENCE_WORDS[t.reference ?? 'minimum-zone']}`
+                    : ''}
                 </TableCell>
                 <TableCell sx={{ color: 'text.secondary' }}>{t.source || '—'}</TableCell>
               </TableRow>

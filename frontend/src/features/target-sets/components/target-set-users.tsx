@@ -6,7 +6,8 @@ import type { TargetSet } from '../types';
  * once, while a standing approval keeps the values it was signed with.
  */
 export function TargetSetUsers({ set }: { set: TargetSet }) {
-  if (!set.usedBy.length) return <Typography color="text.secondary">No machine is judged against this set yet.</Typography>;
+  if (!set.usedBy.length)
+    return <Typography color="text.secondary">No machine is judged against this set yet.</Typography>;
   const approved = set.usedBy.filter((m) => m.approved);
   return (
     <Alert severity={approved.length ? 'warning' : 'info'} sx={{ mb: 1.5 }}>

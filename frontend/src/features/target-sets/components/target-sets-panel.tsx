@@ -19,18 +19,30 @@ export function TargetSetsPanel({ canEdit }: { canEdit: boolean }) {
   return (
     <Stack spacing={2.5}>
       <Alert severity="info">
-        The starting values are common practice, not a standard. Every tolerance depends on rail size, preload, spacing, process and material: set them for your machines.
+        The starting values are common practice, not a standard. Every tolerance depends on rail size, preload, spacing,
+        process and material: set them for your machines.
         {!canEdit && ' Owners and admins change them; you can read them.'}
       </Alert>
       {canEdit && sets.data.length > 0 && (
         <Box>
-          <Button variant="contained" startIcon={<AddOutlined />} onClick={() => setCopying(sets.data[0].id)} sx={{ minHeight: 44 }}>
+          <Button
+            variant="contained"
+            startIcon={<AddOutlined />}
+            onClick={() => setCopying(sets.data[0].id)}
+            sx={{ minHeight: 44 }}
+          >
             New target set
           </Button>
         </Box>
       )}
       {sets.data.map((s) => (
-        <TargetSetCard key={s.id} set={s} canEdit={canEdit} onEdit={() => setEditing(s.id)} onCopy={() => setCopying(s.id)} />
+        <TargetSetCard
+          key={s.id}
+          set={s}
+          canEdit={canEdit}
+          onEdit={() => setEditing(s.id)}
+          onCopy={() => setCopying(s.id)}
+        />
       ))}
       {current && <EditTargetSetDialog key={current.id} set={current} onClose={() => setEditing(null)} />}
       {copyFrom && (

@@ -19,7 +19,11 @@ export function VerdictBanner({ v }: { v: PublicVerification }) {
   const colour = good ? palette.within : v.status === 'changed' ? palette.outside : palette.notStarted;
   const Icon = good ? GppGoodOutlined : v.status === 'changed' ? GppBadOutlined : HelpOutlineOutlined;
   return (
-    <Paper role="status" aria-label="Verification result" sx={{ p: { xs: 2, sm: 3 }, borderLeft: `6px solid ${colour}`, display: 'flex', gap: 2, alignItems: 'flex-start' }}>
+    <Paper
+      role="status"
+      aria-label="Verification result"
+      sx={{ p: { xs: 2, sm: 3 }, borderLeft: `6px solid ${colour}`, display: 'flex', gap: 2, alignItems: 'flex-start' }}
+    >
       <Icon sx={{ color: colour, fontSize: { xs: 36, sm: 44 }, flexShrink: 0 }} />
       <Box sx={{ minWidth: 0 }}>
         <Typography variant="h3" component="h2" sx={{ color: colour, fontWeight: 700 }}>

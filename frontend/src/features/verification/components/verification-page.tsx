@@ -39,8 +39,9 @@ export function VerificationPage({ token }: { token: string }) {
           Check it yourself
         </Typography>
         <Typography variant="body2" color="text.secondary" sx={{ mt: 0.5 }}>
-          The signed record is the exact text the owner’s signature covers, rebuilt now from the records as they are kept. Its {v.algorithm} signature checks with the public key
-          below using any standard tool; the README of Railwright gives a one-line command.
+          The signed record is the exact text the owner’s signature covers, rebuilt now from the records as they are
+          kept. Its {v.algorithm} signature checks with the public key below using any standard tool; the README of
+          Railwright gives a one-line command.
         </Typography>
         <Stack direction={{ xs: 'column', sm: 'row' }} useFlexGap sx={{ gap: 1, mt: 1.5 }}>
           {v.status !== 'unsigned' && (
@@ -48,7 +49,12 @@ export function VerificationPage({ token }: { token: string }) {
               Signed record (JSON)
             </Button>
           )}
-          <Button variant="outlined" startIcon={<KeyOutlined />} href={signingKeyUrl} download="railwright-signing-key.pem">
+          <Button
+            variant="outlined"
+            startIcon={<KeyOutlined />}
+            href={signingKeyUrl}
+            download="railwright-signing-key.pem"
+          >
             Public key (PEM)
           </Button>
         </Stack>
