@@ -215,6 +215,36 @@ describe('API description (OpenAPI 3)', () => {
     expect(checked).toBeGreaterThan(30);
   });
 
+  it('describes the DTOs nested in request bodies with all their fields', () => {
+    // The validation rules of every class, nested ones (a sweep's stations, a pattern's holes) included.
+    const byClass = (
+      getMetadataStorage() as unknown as {
+        validationMetadatas: Map<Function, { propertyName: string; name?: string; constraints?: unknown[] }[]>;
+      }
+    ).validationMetadatas;
+    const schemas = served.components?.schemas ?? {};
+    let checked = 0;
+    for (const [target, rules] of byClass) {
+      const schema = schemas[target.name] as SchemaObject | undefined;
+      if (!schema || !target.name.endsWith('Dto')) continue;
+      // A field refused whenever it is sent (the old single `unit`) is left out of the description.
+      const refused = new Set(
+        rules
+          .filter((r) => r.name === 'isEmpty' || (r.name === 'equals' && r.constraints?.[0] === undefined))
+          .map((r) => r.propertyName),
+      );
+      const fields = [...new Set(rules.map((r) => r.propertyName))].filter((f) => !refused.has(f)).sort();
+      const described = Object.keys(schema.properties ?? {});
+      expect({ dto: target.name, missing: fields.filter((f) => !described.includes(f)) }).toEqual({
+        dto: target.name,
+        missing: [],
+      });
+      checked++;
+    }
+    expect(schemas.StationDto).toBeDefined();
+    expect(checked).toBeGreaterThan(40);
+  });
+
   it('documents the refusals: 400 with the validation body, 401 for signed-in routes, 403 where roles are limited, 409 for commands', () => {
     const validation = resolve(served, { $ref: '#/components/schemas/ValidationErrorResponse' });
     expect(validation.required).toEqual(['statusCode', 'message', 'error']);

@@ -1,7 +1,7 @@
 import { Body, Controller, HttpCode, Post, Query } from '@nestjs/common';
 import { CalculatorsService } from './calculators.service.js';
 import { BoltDownDto } from './dto/bolt-down.dto.js';
-import { DriveDto } from './dto/drive.dto.js';
+import { DriveCalculationDto } from './dto/drive.dto.js';
 import { FlatnessDto } from './dto/flatness.dto.js';
 import { ParallelismDto } from './dto/parallelism.dto.js';
 import { PositioningDto } from './dto/positioning.dto.js';
@@ -47,7 +47,7 @@ export class CalculatorsController {
 
   @Post('drive')
   @HttpCode(200)
-  drive(@Body() dto: DriveDto) {
+  drive(@Body() dto: DriveCalculationDto) {
     return this.calc.drive(dto);
   }
 

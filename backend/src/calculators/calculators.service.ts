@@ -14,7 +14,7 @@ import * as map from './calculators.mapper.js';
 import { residualsWanted } from './residuals-option.js';
 import { unitsOf } from './units-of.js';
 import type { BoltDownDto } from './dto/bolt-down.dto.js';
-import type { DriveDto } from './dto/drive.dto.js';
+import type { DriveCalculationDto } from './dto/drive.dto.js';
 import type { FlatnessDto } from './dto/flatness.dto.js';
 import type { ParallelismDto } from './dto/parallelism.dto.js';
 import type { PositioningDto } from './dto/positioning.dto.js';
@@ -88,7 +88,7 @@ export class CalculatorsService {
     return map.toFlatnessResponse(result, withResiduals, u);
   }
 
-  drive(dto: DriveDto) {
+  drive(dto: DriveCalculationDto) {
     const u = unitsOf(dto);
     const mm = (v: number | undefined) => (v == null ? undefined : toMm(v, u.lengthUnit));
     if (dto.lead != null && dto.threadsPerInch != null) {

@@ -7,7 +7,7 @@ import { UnitFamiliesDto } from './unit-families.dto.js';
  * Lead and belt pitch in `lengthUnit` (or a screw's threads per inch); the pinion's module is in
  * mm whatever the unit, as the module is defined (ISO 54). Which fields are needed depends on `type`.
  */
-export class DriveDto extends UnitFamiliesDto {
+export class DriveCalculationDto extends UnitFamiliesDto {
   @IsIn(DRIVE_TYPES, { message: `type must be one of ${DRIVE_TYPES.join(', ')}` })
   type: DriveType;
 

@@ -29,19 +29,21 @@ import { ApiHideProperty } from '@nestjs/swagger';
 
 const FINITE = { allowNaN: false, allowInfinity: false } as const;
 /** Coordinates and sizes are bounded in the entered unit here; the service bounds them in mm. */
+// Bounds are written as plain numbers where they are negative: the API description reads a
+// negative bound only as a literal (-LIMIT or -1_000_000 would drop the field from it).
 const LIMIT = 100_000;
 export const MAX_HOLES = 1000;
 
 export class HoleDto {
   /** Hole centre from the outline's left edge, in lengthUnit. */
   @IsNumber(FINITE, { message: 'x must be a number in lengthUnit (from the outline’s left edge)' })
-  @Min(-LIMIT, { message: `x must be within ±${LIMIT}` })
+  @Min(-100000, { message: `x must be within ±${LIMIT}` })
   @Max(LIMIT, { message: `x must be within ±${LIMIT}` })
   x: number;
 
   /** Hole centre from the outline's lower edge, in lengthUnit. */
   @IsNumber(FINITE, { message: 'y must be a number in lengthUnit (from the outline’s lower edge)' })
-  @Min(-LIMIT, { message: `y must be within ±${LIMIT}` })
+  @Min(-100000, { message: `y must be within ±${LIMIT}` })
   @Max(LIMIT, { message: `y must be within ±${LIMIT}` })
   y: number;
 
@@ -55,13 +57,13 @@ export class HoleDto {
 export class GridDto {
   /** First hole's centre from the outline's left edge, in lengthUnit. */
   @IsNumber(FINITE, { message: 'originX must be the x of the first hole, in lengthUnit' })
-  @Min(-LIMIT, { message: `originX must be within ±${LIMIT}` })
+  @Min(-100000, { message: `originX must be within ±${LIMIT}` })
   @Max(LIMIT, { message: `originX must be within ±${LIMIT}` })
   originX: number;
 
   /** First hole's centre from the outline's lower edge, in lengthUnit. */
   @IsNumber(FINITE, { message: 'originY must be the y of the first hole, in lengthUnit' })
-  @Min(-LIMIT, { message: `originY must be within ±${LIMIT}` })
+  @Min(-100000, { message: `originY must be within ±${LIMIT}` })
   @Max(LIMIT, { message: `originY must be within ±${LIMIT}` })
   originY: number;
 
@@ -99,13 +101,13 @@ export class GridDto {
 export class CircleDto {
   /** Circle centre from the outline's left edge, in lengthUnit. */
   @IsNumber(FINITE, { message: 'centreX must be the x of the circle’s centre, in lengthUnit' })
-  @Min(-LIMIT, { message: `centreX must be within ±${LIMIT}` })
+  @Min(-100000, { message: `centreX must be within ±${LIMIT}` })
   @Max(LIMIT, { message: `centreX must be within ±${LIMIT}` })
   centreX: number;
 
   /** Circle centre from the outline's lower edge, in lengthUnit. */
   @IsNumber(FINITE, { message: 'centreY must be the y of the circle’s centre, in lengthUnit' })
-  @Min(-LIMIT, { message: `centreY must be within ±${LIMIT}` })
+  @Min(-100000, { message: `centreY must be within ±${LIMIT}` })
   @Max(LIMIT, { message: `centreY must be within ±${LIMIT}` })
   centreY: number;
 

@@ -26,13 +26,15 @@ const FINITE = { allowNaN: false, allowInfinity: false } as const;
 export const MAX_STATIONS = 2000;
 
 export class StationDto {
+  /** Where along the rail the reading was taken, in `lengthUnit`. */
   @IsNumber(FINITE, { message: 'position must be a number along the rail, in lengthUnit' })
-  @Min(-1_000_000, { message: 'position must be within ±1 000 000 in lengthUnit' })
+  @Min(-1000000, { message: 'position must be within ±1 000 000 in lengthUnit' })
   @Max(1_000_000, { message: 'position must be within ±1 000 000 in lengthUnit' })
   position: number;
 
+  /** The indicator's reading at that station, in `readingUnit`. */
   @IsNumber(FINITE, { message: 'reading must be a number in readingUnit' })
-  @Min(-1_000_000, { message: 'reading must be within ±1 000 000 in readingUnit' })
+  @Min(-1000000, { message: 'reading must be within ±1 000 000 in readingUnit' })
   @Max(1_000_000, { message: 'reading must be within ±1 000 000 in readingUnit' })
   reading: number;
 }

@@ -24,7 +24,7 @@ export type FlatnessRequest = Schemas['FlatnessDto'] & UnitFamilies;
 /** Asked with ?residuals=true, so the plane carries its residuals. */
 export type FlatnessResult = AnswerOf<'/api/calc/flatness', 'post'> & { leastSquares: { residuals: number[] } };
 
-export type DriveRequest = Schemas['DriveDto'] & UnitFamilies;
+export type DriveRequest = Schemas['DriveCalculationDto'] & UnitFamilies;
 export type DriveType = DriveRequest['type'];
 export type DriveResult = AnswerOf<'/api/calc/drive', 'post'>;
 

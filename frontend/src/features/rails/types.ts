@@ -24,14 +24,15 @@ export type CheckState = SweepStatus | 'not-comparable' | 'not-started';
 
 /**
  * A sweep as recorded: the described request with the id the browser makes (also the entry's
- * Idempotency-Key) and both unit families named. Stations are written here until the description
- * gives StationDto its fields.
+ * Idempotency-Key) and both unit families named.
  */
-export type NewSweep = Omit<Schemas['CreateSweepDto'], 'id' | 'stations'> &
+export type NewSweep = Omit<Schemas['CreateSweepDto'], 'id'> &
   Required<Pick<Schemas['CreateSweepDto'], 'readingUnit' | 'lengthUnit' | 'face'>> & {
     id: string;
-    stations: { position: number; reading: number }[];
   };
+
+/** One station of a sweep: its position in `lengthUnit`, its reading in `readingUnit`. */
+export type Station = Schemas['StationDto'];
 
 export interface Parallelism {
   railId: string;

@@ -1617,7 +1617,7 @@ export interface components {
              */
             readingUnit?: "mm" | "um" | "in" | "thou";
         };
-        DriveDto: {
+        DriveCalculationDto: {
             /** @enum {string} */
             type: "screw" | "belt" | "rack";
             /** @description Full steps per motor revolution. */
@@ -1859,7 +1859,12 @@ export interface components {
             /** Format: uuid */
             partnerRailId?: string | null;
         };
-        StationDto: Record<string, never>;
+        StationDto: {
+            /** @description Where along the rail the reading was taken, in `lengthUnit`. */
+            position: number;
+            /** @description The indicator's reading at that station, in `readingUnit`. */
+            reading: number;
+        };
         CreateSweepDto: {
             /** Format: uuid */
             id?: string;
@@ -2082,6 +2087,23 @@ export interface components {
             subjectId: string;
             caption?: string;
         };
+        DriveDto: {
+            /** @enum {string} */
+            type: "screw" | "belt" | "rack";
+            lead?: number;
+            /** @description A single-start screw's lead given as threads per inch (lead = 1/threadsPerInch in), in place of lead. */
+            threadsPerInch?: number;
+            nominalDiameter?: number;
+            rootDiameter?: number;
+            unsupportedLength?: number;
+            /** @enum {string} */
+            mounting?: "fixed-free" | "supported-supported" | "fixed-supported" | "fixed-fixed";
+            dnLimit?: number;
+            beltPitch?: number;
+            pulleyTeeth?: number;
+            pinionModule?: number;
+            pinionTeeth?: number;
+        };
         CreateAxisDto: {
             /** @description "X", "Y1", "Y2", "Z": the first letter is the axis letter the test program moves. */
             name: string;
@@ -2224,10 +2246,18 @@ export interface components {
             reason: string;
         };
         HoleDto: {
+            /** @description Hole centre from the outline's left edge, in lengthUnit. */
+            x: number;
+            /** @description Hole centre from the outline's lower edge, in lengthUnit. */
+            y: number;
             /** @description Hole diameter, in lengthUnit. */
             diameter: number;
         };
         GridDto: {
+            /** @description First hole's centre from the outline's left edge, in lengthUnit. */
+            originX: number;
+            /** @description First hole's centre from the outline's lower edge, in lengthUnit. */
+            originY: number;
             /** @description Rows of holes. */
             rows: number;
             /** @description Columns of holes. */
@@ -2240,6 +2270,10 @@ export interface components {
             diameter: number;
         };
         CircleDto: {
+            /** @description Circle centre from the outline's left edge, in lengthUnit. */
+            centreX: number;
+            /** @description Circle centre from the outline's lower edge, in lengthUnit. */
+            centreY: number;
             /** @description Diameter of the circle the hole centres lie on, in lengthUnit. */
             circleDiameter: number;
             /** @description Holes on the circle. */
@@ -5014,7 +5048,7 @@ export interface operations {
         };
         requestBody: {
             content: {
-                "application/json": components["schemas"]["DriveDto"];
+                "application/json": components["schemas"]["DriveCalculationDto"];
             };
         };
         responses: {

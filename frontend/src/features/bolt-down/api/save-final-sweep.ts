@@ -6,10 +6,8 @@ import type { Schemas } from '../../../lib/api/schemas';
 import { boltDownKeys, type BoltDown, type FinalSweepResult } from '../types';
 
 /** The described final-sweep request (a rail sweep's); the id is added when it is sent. Stations as in the rails' NewSweep. */
-export type FinalSweepInput = Omit<Schemas['FinalSweepDto'], 'id' | 'stations'> &
-  Required<Pick<Schemas['FinalSweepDto'], 'readingUnit' | 'lengthUnit'>> & {
-    stations: { position: number; reading: number }[];
-  };
+export type FinalSweepInput = Omit<Schemas['FinalSweepDto'], 'id'> &
+  Required<Pick<Schemas['FinalSweepDto'], 'readingUnit' | 'lengthUnit'>>;
 
 export const finalSweepPath = (boltDownId: string) => `/bolt-downs/${boltDownId}/final-sweep`;
 

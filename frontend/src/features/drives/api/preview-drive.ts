@@ -3,8 +3,8 @@ import { answer, client } from '../../../lib/api-client';
 import type { Schemas } from '../../../lib/api/schemas';
 import { driveKeys } from '../types';
 
-/** The drive calculator's request (the server's DriveDto for /api/calc/drive). */
-export type DrivePreviewInput = Schemas['DriveDto'];
+/** The drive calculator's request (the server's DriveCalculationDto for /api/calc/drive). */
+export type DrivePreviewInput = Schemas['DriveCalculationDto'];
 
 /** Theoretical steps per mm while the form is typed, from the calculators API (nothing saved). */
 export const drivePreviewQueryOptions = (input: DrivePreviewInput | null) =>
