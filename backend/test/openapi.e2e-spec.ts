@@ -219,7 +219,10 @@ describe('API description (OpenAPI 3)', () => {
     // The validation rules of every class, nested ones (a sweep's stations, a pattern's holes) included.
     const byClass = (
       getMetadataStorage() as unknown as {
-        validationMetadatas: Map<Function, { propertyName: string; name?: string; constraints?: unknown[] }[]>;
+        validationMetadatas: Map<
+          abstract new (...args: never[]) => unknown,
+          { propertyName: string; name?: string; constraints?: unknown[] }[]
+        >;
       }
     ).validationMetadatas;
     const schemas = served.components?.schemas ?? {};
