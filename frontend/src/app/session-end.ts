@@ -1,5 +1,5 @@
 import type { QueryClient, QueryKey } from '@tanstack/react-query';
-import { ApiError } from '../lib/api-client';
+import { ApiError } from '../lib/api/fetch-json';
 
 /**
  * A read answered 401 means the session ended on the server (expired, signed out elsewhere, the

@@ -1,5 +1,5 @@
 import { onlineManager, type QueryClient, type QueryKey } from '@tanstack/react-query';
-import { ApiError, onNoAnswer, sendTo } from '../api-client';
+import { ApiError, onNoAnswer, sendTo } from '../api/fetch-json';
 import { noteNoAnswer } from './connection';
 import { newClientId } from '../client-id';
 import { setSessionOwner, whenSignedInAs } from './session-owner';

@@ -1,4 +1,4 @@
-import { ApiError } from '../api-client';
+import { ApiError } from '../api/fetch-json';
 
 /** A multipart entry (a photo or file with its fields), kept as it is on the device while it waits. */
 export interface CommandForm {

@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { sendTo } from '../../../lib/api/fetch-json';
 import type { AnswerOf } from '../../../lib/api/schemas';
 import { authKeys } from '../../../lib/session/get-me';
 
@@ -9,7 +9,7 @@ export interface LoginInput {
   password: string;
 }
 
-export const login = (input: LoginInput) => api.post<AnswerOf<'/api/auth/login', 'post'>>('/auth/login', input);
+export const login = (input: LoginInput) => sendTo<AnswerOf<'/api/auth/login', 'post'>>('POST', '/auth/login', input);
 
 export function useLogin() {
   const qc = useQueryClient();
