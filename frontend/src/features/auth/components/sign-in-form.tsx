@@ -1,4 +1,4 @@
-import { useState, type FormEvent } from 'react';
+import { useRef, useState, type FormEvent } from 'react';
 import { Alert, Box, Button, Link, Stack, Typography } from '@mui/material';
 import { Link as RouterLink } from 'react-router-dom';
 import { paths } from '../../../config/paths';
@@ -9,10 +9,27 @@ export function SignInForm({ onSignedIn }: { onSignedIn: () => void }) {
   const [email, setEmail] = useState('');
   const [password, setPassword] = useState('');
   const login = useLogin();
+  // A double click submits twice before the button shows it is busy: one attempt is sent, so a
+  // wrong password counts once towards the sign-in limit.
+  const sending = useRef(false);
+  // The last refusal stays on screen while the next attempt is sent, so the button does not move
+  // under a second click.
+  const [problem, setProblem] = useState<string | null>(null);
 
   const submit = (e: FormEvent) => {
     e.preventDefault();
-    login.mutate({ email: email.trim(), password }, { onSuccess: onSignedIn });
+    if (sending.current) return;
+    sending.current = true;
+    login.mutate(
+      { email: email.trim(), password },
+      {
+        onSuccess: onSignedIn,
+        onError: (err) => setProblem(err.message),
+        onSettled: () => {
+          sending.current = false;
+        },
+      },
+    );
   };
 
   return (
@@ -21,9 +38,9 @@ export function SignInForm({ onSignedIn }: { onSignedIn: () => void }) {
         <Typography variant="h2" component="h1">
           Sign in
         </Typography>
-        {login.error && (
+        {problem && (
           <Alert severity="error" role="alert">
-            {login.error.message}
+            {problem}
           </Alert>
         )}
         <LightTextField
