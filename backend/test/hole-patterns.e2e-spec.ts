@@ -171,6 +171,10 @@ describe('hole patterns and drilling templates', () => {
         },
         /^grid: rows × columns must be at most 1000/,
       ],
+      [
+        { ...bracket, entry: 'list', circle: undefined, holes: [{ x: 10, y: 10, diameter: 6 }, [[]]] },
+        /every entry of holes must be \{x, y, diameter\}/,
+      ],
       [{ ...bracket, entry: 'grid' }, /grid must give originX/],
       [{ ...bracket, lengthUnit: 'cm' }, /lengthUnit must be one of mm, um, in, thou/],
       [{ ...bracket, unit: 'mm' }, /unit is no longer accepted: send lengthUnit and readingUnit/],

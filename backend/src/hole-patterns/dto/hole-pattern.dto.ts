@@ -172,6 +172,7 @@ export class HolePatternDto {
   @IsArray({ message: 'holes must be a list of holes (x, y, diameter) when entry is list' })
   @ArrayMinSize(1, { message: 'holes must hold at least one hole' })
   @ArrayMaxSize(MAX_HOLES, { message: `holes must hold at most ${MAX_HOLES} holes` })
+  @IsObject({ each: true, message: 'every entry of holes must be {x, y, diameter}' })
   @ValidateNested({ each: true })
   @Type(() => HoleDto)
   holes?: HoleDto[];
