@@ -6,15 +6,18 @@
  * constraints (schema/records.ts, evidence.ts, approvals.ts); `kinds-in-database.e2e-spec.ts`
  * compares them with these lists so they cannot drift apart.
  *
- * A new kind is one entry here (and its twin in frontend/src/lib/record-kinds.ts): signing finds
- * a signed record's table by the name given here, and `npm run db:generate` writes the new
- * constraint. See DEVELOPERS.md, "Adding a check type".
+ * A new kind is one entry here: signing finds a signed record's table by the name given here,
+ * `npm run db:generate` writes the new constraint, and the browser reads its words from this same
+ * file (frontend/src/lib/record-kinds.ts imports it, so it imports nothing itself). See
+ * DEVELOPERS.md, "Adding a check type".
  */
 
 /** What one kind of record is: its plain name and what the rest of the product does with it. */
 type RecordTypeSpec = {
   /** Plain words in history ("Travel trial"); also the change log's name for its table. */
   label: string;
+  /** The record's own name on the verification page, when not its evidence name or label. */
+  name?: string;
   /** Evidence can be attached to it; the name shown beside the file ("Repeat-and-reverse run"). */
   evidence?: string;
   /** A change to it can move a machine's readiness (the summary is recounted). */
@@ -30,6 +33,7 @@ export const RECORD_TYPES = {
   machine: {
     table: 'machines',
     label: 'Machine',
+    name: 'Machine specification',
     signed: true,
     evidence: 'Machine',
     readiness: true,
