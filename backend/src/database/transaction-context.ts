@@ -3,6 +3,7 @@ import { sql } from 'drizzle-orm';
 import { NodePgSession, NodePgTransaction } from 'drizzle-orm/node-postgres';
 import type pg from 'pg';
 import type { Database } from './database.tokens.js';
+import { oneQueryAtATime } from './one-query-at-a-time.js';
 
 /** Who a command runs for: the database's change log reads it back from transaction settings. */
 export interface CommandActor {
@@ -101,7 +102,7 @@ export class TransactionContext {
       dialect: ConstructorParameters<typeof NodePgSession>[1];
       session: { schema: never; options: object };
     };
-    const session = new NodePgSession(client, root.dialect, root.session.schema, root.session.options);
+    const session = new NodePgSession(oneQueryAtATime(client), root.dialect, root.session.schema, root.session.options);
     const tx = new NodePgTransaction(root.dialect, session, root.session.schema) as unknown as Database;
     // Set when the connection's state is unknown (begin, commit or rollback failed): it is dropped, not reused.
     let broken: Error | undefined;
