@@ -118,10 +118,15 @@ test.describe('drives', () => {
     // Enter goes to the next row's first cell.
     await page.getByLabel('Up 1, target 2').press('Enter');
     await expect(page.getByLabel('Down 1, target 1')).toBeFocused();
+    // The run's own conditions, beside the trial's on the same page: both temperatures refer it to 20 °C.
+    await page.getByLabel('Machine temperature (runs)').fill('24');
+    await page.getByLabel('Scale temperature (runs)').fill('22');
     await snap(page, 'axis-run-grid-desktop');
     await page.getByRole('button', { name: 'Record run' }).click();
     const run = page.getByRole('region', { name: 'Repeat-and-reverse result' });
     await expect(run.getByText('Positioning accuracy A')).toBeVisible();
+    await expect(run).toContainText('machine 24 °C, scale 22 °C');
+    await expect(run).toContainText('referred to 20 °C');
     await expect(run).toContainText('µm');
     await expect(run.getByText('Within target')).toBeVisible();
     await expect(run.getByRole('figure', { name: /Mean deviations up and down with ±2s bands/ })).toBeVisible();
@@ -261,7 +266,7 @@ test.describe('drives', () => {
     await page.getByLabel('Measured move 1').fill('506.73');
     await page.getByLabel('Moves in').click();
     await page.getByRole('option', { name: 'mm' }).click();
-    await page.getByLabel('Machine temperature').fill('24');
+    await page.getByLabel('Machine temperature', { exact: true }).fill('24');
     await page.getByRole('button', { name: 'Record trial' }).click();
     await expect(trial.locator('[data-warning-code="correction-far-from-theory"]')).toContainText('pulley teeth');
     await expect(trial.locator('[data-warning-code="temperature-incomplete"]')).toBeVisible();

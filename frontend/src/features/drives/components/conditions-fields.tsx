@@ -35,35 +35,42 @@ export function conditionsOf(d: ConditionsDraft) {
   return out;
 }
 
-/** Temperatures of the machine and the scale, the scale's material and the instrument's resolution. */
+/**
+ * Temperatures of the machine and the scale, the scale's material and the instrument's resolution.
+ * `of` names what they belong to when two entry forms share a page ("runs": "Machine temperature
+ * (runs)"), so every field keeps a label of its own.
+ */
 export function ConditionsFields({
   draft,
   onChange,
   readingUnit,
+  of,
 }: {
   draft: ConditionsDraft;
   onChange: (d: ConditionsDraft) => void;
   readingUnit: LengthUnit;
+  of?: string;
 }) {
   const set = (k: keyof ConditionsDraft) => (v: string) => onChange({ ...draft, [k]: v });
+  const label = (words: string) => (of ? `${words} (${of})` : words);
   return (
     <Box>
       <Box sx={{ display: 'grid', gridTemplateColumns: { xs: '1fr', sm: '1fr 1fr' }, gap: 2 }}>
         <NumberInput
-          label="Machine temperature"
+          label={label('Machine temperature')}
           unit="°C"
           value={draft.machineTemperature}
           onChange={set('machineTemperature')}
         />
         <NumberInput
-          label="Scale temperature"
+          label={label('Scale temperature')}
           unit="°C"
           value={draft.scaleTemperature}
           onChange={set('scaleTemperature')}
         />
         <TextField
           select
-          label="Scale material"
+          label={label('Scale material')}
           value={draft.scaleMaterial}
           onChange={(e) => onChange({ ...draft, scaleMaterial: e.target.value as ScaleMaterial })}
         >
@@ -74,7 +81,7 @@ export function ConditionsFields({
           ))}
         </TextField>
         <NumberInput
-          label="Instrument resolution"
+          label={label('Instrument resolution')}
           unit={UNIT_LABELS[readingUnit]}
           value={draft.instrumentResolution}
           onChange={set('instrumentResolution')}

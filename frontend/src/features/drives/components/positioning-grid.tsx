@@ -15,7 +15,7 @@ import { pasteBlock, resize, rowLabel, type RowOrder } from '../utils/run-grid';
 import { numberOf } from './number-input';
 import { UnitFamilySelect } from '../../../components/form/unit-select';
 import { fromMm } from '../../../lib/units';
-import { blankConditions, conditionsOf } from './conditions-fields';
+import { blankConditions, ConditionsFields, conditionsOf } from './conditions-fields';
 
 const cellSx = { width: 92, '& input': { textAlign: 'right', py: 0.75, px: 1 } };
 
@@ -36,7 +36,8 @@ function serverTargetsIn(st: TestTargets | undefined, unit: LengthUnit): string[
 export function PositioningGrid({ axis, onRecorded }: { axis: Axis; onRecorded: (r: PositioningRun) => void }) {
   const [unit, setUnit] = useState<LengthUnit>(axis.lengthUnit === 'in' ? 'thou' : 'mm');
   const [lengthUnit, setLengthUnit] = useState<LengthUnit>(axis.lengthUnit);
-  const [conditions] = useState(blankConditions);
+  // Kept from one run to the next: the conditions of a session of runs rarely change between them.
+  const [conditions, setConditions] = useState(blankConditions);
   const serverTargets = useTestTargets(axis.id);
   const [chosenRuns, setRuns] = useState<number | null>(null);
   const runs = chosenRuns ?? serverTargets.data?.runs ?? 5;
@@ -363,7 +364,12 @@ export function PositioningGrid({ axis, onRecorded }: { axis: Axis; onRecorded: 
           on to the next target). Paste a block copied from a spreadsheet into the first cell; a CSV may start with a
           row of targets and each row with up or down.
         </Typography>
-        <TextField label="Notes (instrument, temperature)" value={notes} onChange={(e) => setNotes(e.target.value)} />
+        <ConditionsFields draft={conditions} onChange={setConditions} readingUnit={unit} of="runs" />
+        <TextField
+          label="Notes (instrument, where it was read)"
+          value={notes}
+          onChange={(e) => setNotes(e.target.value)}
+        />
         <Box sx={{ display: 'flex', gap: 2, alignItems: 'center', flexWrap: 'wrap' }}>
           <Button variant="contained" onClick={submit} disabled={!allNumbers || record.busy}>
             Record run
