@@ -18,7 +18,7 @@ export const ERROR_SCHEMAS: Record<string, SchemaObject> = {
     type: 'object',
     description: 'A refused request: each message names the field it is about.',
     properties: {
-      statusCode: { type: 'number', enum: [400] },
+      statusCode: { type: 'number', enum: [400], description: 'The HTTP status code.' },
       message: {
         type: 'array',
         items: { type: 'string' },
@@ -32,7 +32,7 @@ export const ERROR_SCHEMAS: Record<string, SchemaObject> = {
   ErrorResponse: {
     type: 'object',
     properties: {
-      statusCode: { type: 'number' },
+      statusCode: { type: 'number', description: 'The HTTP status code.' },
       message: { type: 'string', description: 'Written for people: what was refused and why.' },
       error: { type: 'string' },
     },
@@ -42,7 +42,7 @@ export const ERROR_SCHEMAS: Record<string, SchemaObject> = {
     type: 'object',
     description: 'The request clashes with the state of the records.',
     properties: {
-      statusCode: { type: 'number', enum: [409] },
+      statusCode: { type: 'number', enum: [409], description: 'The HTTP status code.' },
       message: { type: 'string', description: 'Written for people: what was refused and why.' },
       error: { type: 'string', enum: ['Conflict'] },
       blocking: {
