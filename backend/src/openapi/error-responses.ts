@@ -1,4 +1,42 @@
+import { SetMetadata } from '@nestjs/common';
 import type { OperationObject, ResponseObject, SchemaObject } from '@nestjs/swagger';
+
+/**
+ * Why a command can be refused with 409, besides a repeated Idempotency-Key (which any command of
+ * a signed-in person can meet, so the document adds it to every one of them):
+ */
+export const CONFLICT_CAUSES = {
+  /** MachinesService.lockForChange, RecordsService.assertEditable and the database's approval guard. */
+  'approval-lock':
+    "An approval stands on the machine's records: they are read-only while it stands (the owner can reopen the machine with a reason).",
+  /** An id or write id the client made for an entry, sent again with another entry. */
+  'reused-id': 'The id the client made for this entry is already used by another record or write.',
+  /** A unique rule: explicit checks, and unique violations the database-error filter turns into 409. */
+  taken: 'The name or address is already taken.',
+  /** An explicit ConflictException about where the record stands (its state, a step already done). */
+  state: 'The record is not in a state that allows it; the message says what stands in the way.',
+} as const;
+export type ConflictCause = keyof typeof CONFLICT_CAUSES;
+
+export const CONFLICTS_KEY = 'railwright:conflicts';
+
+/** The causes of 409 this handler can meet (see CONFLICT_CAUSES); read by the API description. */
+export const ConflictsWhen = (...causes: ConflictCause[]) => SetMetadata(CONFLICTS_KEY, causes);
+
+/**
+ * The two answers of a command whose entry carries an id the client made (a sweep, a final sweep):
+ * 201 when it is recorded, 200 when the same id comes again (an entry sent twice from a device
+ * that lost its connection), with the record as first made and nothing recorded again.
+ */
+export const NEW_OR_REPEATED = {
+  created: (what: string) => `The ${what} is recorded: the new record.`,
+  repeated: (what: string) =>
+    `The ${what} with this \`id\` was recorded before (the same entry sent again): the record as first made; nothing is recorded again.`,
+};
+
+/** The 409 any command of a signed-in person can meet through database/command-keys.ts. */
+export const KEY_CONFLICT =
+  'Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.';
 
 /** What the document needs to know of a handler beyond what the swagger explorer reads. */
 export interface RouteFacts {
@@ -10,6 +48,8 @@ export interface RouteFacts {
   produces: string[] | null;
   /** Path parameters read with ParseUUIDPipe. */
   uuidParameters: string[];
+  /** `@ConflictsWhen(...)`: the causes of 409 of the handler's own. */
+  conflicts: ConflictCause[];
 }
 
 /** The bodies the server answers with when it refuses (Nest's HttpException shape and the filters in common/). */
@@ -66,8 +106,8 @@ function refusal(description: string, schema: string): ResponseObject {
  * - 400 when it takes a body, a query or path parameters (the global validation pipe, the engine);
  * - 401 unless it is public; 403 when it is limited to some roles;
  * - 404 when it names a record in its path (another workshop's record is "not found" too);
- * - 409 for commands: a record an approval stands on cannot change, and a repeated
- *   Idempotency-Key is refused while its first request is running or was someone else's.
+ * - 409 for a signed-in person's commands, naming the causes the route can meet: its own
+ *   (`@ConflictsWhen`) and the Idempotency-Key's. A route without a session takes no key.
  */
 export function errorResponses(
   method: string,
@@ -90,9 +130,9 @@ export function errorResponses(
   }
   if (hasPathParameter) out['404'] = refusal('No such record in the signed-in workshop.', 'ErrorResponse');
   if (method !== 'get' && !route.isPublic) {
+    const causes = [...route.conflicts.map((cause) => CONFLICT_CAUSES[cause]), KEY_CONFLICT];
     out['409'] = refusal(
-      "Refused because of the records' state: an approval stands on the machine's records (record a new check instead), " +
-        'or the same Idempotency-Key was sent by someone else or is still being recorded.',
+      `Refused as a conflict, for one of these reasons:\n- ${causes.join('\n- ')}`,
       'ConflictResponse',
     );
   }

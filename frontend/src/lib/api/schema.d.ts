@@ -3959,7 +3959,11 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - The name or address is already taken.
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
@@ -4029,7 +4033,11 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - The record is not in a state that allows it; the message says what stands in the way.
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
@@ -4099,7 +4107,11 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - The record is not in a state that allows it; the message says what stands in the way.
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
@@ -4170,7 +4182,11 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - The record is not in a state that allows it; the message says what stands in the way.
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
@@ -4259,7 +4275,10 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
@@ -4379,7 +4398,11 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - An approval stands on the machine's records: they are read-only while it stands (the owner can reopen the machine with a reason).
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
@@ -4525,7 +4548,10 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
@@ -4645,7 +4671,10 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
@@ -4738,7 +4767,10 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
@@ -4805,7 +4837,10 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
@@ -4883,7 +4918,10 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
@@ -4968,7 +5006,10 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
@@ -5039,7 +5080,10 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
@@ -5122,7 +5166,10 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
@@ -5233,7 +5280,10 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
@@ -5312,7 +5362,10 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
@@ -5393,7 +5446,10 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
@@ -5469,7 +5525,10 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
@@ -5587,7 +5646,10 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
@@ -5749,7 +5811,11 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - An approval stands on the machine's records: they are read-only while it stands (the owner can reopen the machine with a reason).
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
@@ -5863,7 +5929,11 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - An approval stands on the machine's records: they are read-only while it stands (the owner can reopen the machine with a reason).
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
@@ -5934,7 +6004,11 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - An approval stands on the machine's records: they are read-only while it stands (the owner can reopen the machine with a reason).
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
@@ -6294,7 +6368,16 @@ export interface operations {
             };
         };
         responses: {
-            /** @description Done. */
+            /** @description The sweep with this `id` was recorded before (the same entry sent again): the record as first made; nothing is recorded again. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["SweepResponse"];
+                };
+            };
+            /** @description The sweep is recorded: the new record. */
             201: {
                 headers: {
                     [name: string]: unknown;
@@ -6339,7 +6422,12 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - An approval stands on the machine's records: they are read-only while it stands (the owner can reopen the machine with a reason).
+             *     - The id the client made for this entry is already used by another record or write.
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
@@ -6453,7 +6541,11 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - An approval stands on the machine's records: they are read-only while it stands (the owner can reopen the machine with a reason).
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
@@ -6524,7 +6616,11 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - An approval stands on the machine's records: they are read-only while it stands (the owner can reopen the machine with a reason).
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
@@ -6644,7 +6740,11 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - An approval stands on the machine's records: they are read-only while it stands (the owner can reopen the machine with a reason).
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
@@ -6765,7 +6865,13 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - An approval stands on the machine's records: they are read-only while it stands (the owner can reopen the machine with a reason).
+             *     - The id the client made for this entry is already used by another record or write.
+             *     - The record is not in a state that allows it; the message says what stands in the way.
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
@@ -6836,7 +6942,12 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - An approval stands on the machine's records: they are read-only while it stands (the owner can reopen the machine with a reason).
+             *     - The record is not in a state that allows it; the message says what stands in the way.
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
@@ -6862,7 +6973,19 @@ export interface operations {
             };
         };
         responses: {
-            /** @description Done. */
+            /** @description The final sweep with this `id` was recorded before (the same entry sent again): the record as first made; nothing is recorded again. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": {
+                        boltDown: components["schemas"]["BoltDownResponse"];
+                        sweep: components["schemas"]["SweepResponse"];
+                    };
+                };
+            };
+            /** @description The final sweep is recorded: the new record. */
             201: {
                 headers: {
                     [name: string]: unknown;
@@ -6910,7 +7033,13 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - An approval stands on the machine's records: they are read-only while it stands (the owner can reopen the machine with a reason).
+             *     - The id the client made for this entry is already used by another record or write.
+             *     - The record is not in a state that allows it; the message says what stands in the way.
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
@@ -7210,7 +7339,11 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - An approval stands on the machine's records: they are read-only while it stands (the owner can reopen the machine with a reason).
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
@@ -7470,7 +7603,11 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - An approval stands on the machine's records: they are read-only while it stands (the owner can reopen the machine with a reason).
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
@@ -7834,7 +7971,11 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - An approval stands on the machine's records: they are read-only while it stands (the owner can reopen the machine with a reason).
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
@@ -7900,7 +8041,11 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - An approval stands on the machine's records: they are read-only while it stands (the owner can reopen the machine with a reason).
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
@@ -7966,7 +8111,11 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - An approval stands on the machine's records: they are read-only while it stands (the owner can reopen the machine with a reason).
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
@@ -8032,7 +8181,11 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - An approval stands on the machine's records: they are read-only while it stands (the owner can reopen the machine with a reason).
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
@@ -8215,7 +8368,11 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - An approval stands on the machine's records: they are read-only while it stands (the owner can reopen the machine with a reason).
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
@@ -8313,7 +8470,12 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - An approval stands on the machine's records: they are read-only while it stands (the owner can reopen the machine with a reason).
+             *     - The record is not in a state that allows it; the message says what stands in the way.
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
@@ -8431,7 +8593,10 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
@@ -8539,7 +8704,10 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
@@ -8692,7 +8860,11 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - An approval stands on the machine's records: they are read-only while it stands (the owner can reopen the machine with a reason).
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
@@ -8967,7 +9139,12 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - An approval stands on the machine's records: they are read-only while it stands (the owner can reopen the machine with a reason).
+             *     - The name or address is already taken.
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
@@ -9130,7 +9307,11 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - An approval stands on the machine's records: they are read-only while it stands (the owner can reopen the machine with a reason).
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
@@ -9201,7 +9382,12 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - An approval stands on the machine's records: they are read-only while it stands (the owner can reopen the machine with a reason).
+             *     - The name or address is already taken.
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
@@ -9476,7 +9662,11 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - An approval stands on the machine's records: they are read-only while it stands (the owner can reopen the machine with a reason).
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
@@ -9658,7 +9848,11 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - An approval stands on the machine's records: they are read-only while it stands (the owner can reopen the machine with a reason).
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
@@ -9730,7 +9924,12 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - An approval stands on the machine's records: they are read-only while it stands (the owner can reopen the machine with a reason).
+             *     - The record is not in a state that allows it; the message says what stands in the way.
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
@@ -10029,7 +10228,11 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - An approval stands on the machine's records: they are read-only while it stands (the owner can reopen the machine with a reason).
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
@@ -10266,7 +10469,11 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - An approval stands on the machine's records: they are read-only while it stands (the owner can reopen the machine with a reason).
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
@@ -10647,7 +10854,11 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - An approval stands on the machine's records: they are read-only while it stands (the owner can reopen the machine with a reason).
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
@@ -10828,7 +11039,11 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - An approval stands on the machine's records: they are read-only while it stands (the owner can reopen the machine with a reason).
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
@@ -11047,7 +11262,12 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - An approval stands on the machine's records: they are read-only while it stands (the owner can reopen the machine with a reason).
+             *     - The record is not in a state that allows it; the message says what stands in the way.
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
@@ -11120,7 +11340,11 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - The record is not in a state that allows it; the message says what stands in the way.
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
@@ -11246,7 +11470,11 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - The record is not in a state that allows it; the message says what stands in the way.
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
@@ -11321,7 +11549,11 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - The record is not in a state that allows it; the message says what stands in the way.
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
@@ -11848,7 +12080,10 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
@@ -11908,7 +12143,10 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
@@ -12028,7 +12266,10 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
@@ -12093,7 +12334,10 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
