@@ -84,7 +84,7 @@ export function toDiagonalCheckResponse(
       diagonal1: inUnit(row.diagonal1Mm, u),
       /** The other diagonal, in the record's `lengthUnit`. */
       diagonal2: inUnit(row.diagonal2Mm, u),
-      /** Distance between the gantry's driven sides, in the record's `lengthUnit`. */
+      /** Distance between the gantry's two bearing rails, in the record's `lengthUnit`. */
       gantrySpan: row.gantrySpanMm == null ? null : inUnit(row.gantrySpanMm, u),
     },
     inputMm: {
@@ -96,7 +96,7 @@ export function toDiagonalCheckResponse(
       diagonal1: finiteOrNull(row.diagonal1Mm),
       /** The other diagonal, mm. */
       diagonal2: finiteOrNull(row.diagonal2Mm),
-      /** Distance between the gantry's driven sides, mm. */
+      /** Distance between the gantry's two bearing rails, mm. */
       gantrySpan: finiteOrNull(row.gantrySpanMm),
     },
     result,
@@ -154,7 +154,7 @@ export function toTestCutResponse(
     /** Thickness of the plate cut, in the record's `lengthUnit`. */
     plateThickness: row.plateThicknessMm == null ? null : inUnit(row.plateThicknessMm, u),
     plateThicknessMm: finiteOrNull(row.plateThicknessMm),
-    /** Smallest step of the caliper, in the record's `lengthUnit`. */
+    /** Smallest step of the caliper or rule the sizes were read with, in the record's `lengthUnit`. */
     resolution: row.resolutionMm == null ? null : inUnit(row.resolutionMm, u),
     nominal: {
       /** Commanded size of the square along X, in the record's `lengthUnit`. */

@@ -2499,7 +2499,7 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
                 "gantrySpan": {
                   "type": "number",
                   "nullable": true,
-                  "description": "Distance between the gantry's driven sides, in the record's `lengthUnit`."
+                  "description": "Distance between the gantry's two bearing rails, in the record's `lengthUnit`."
                 }
               },
               "required": [
@@ -2536,7 +2536,7 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
                 "gantrySpan": {
                   "type": "number",
                   "nullable": true,
-                  "description": "Distance between the gantry's driven sides, mm."
+                  "description": "Distance between the gantry's two bearing rails, mm."
                 }
               },
               "required": [
@@ -2667,7 +2667,7 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
                 "gantrySpan": {
                   "type": "number",
                   "nullable": true,
-                  "description": "Distance between the gantry's driven sides, in the record's `lengthUnit`."
+                  "description": "Distance between the gantry's two bearing rails, in the record's `lengthUnit`."
                 }
               },
               "required": [
@@ -2704,7 +2704,7 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
                 "gantrySpan": {
                   "type": "number",
                   "nullable": true,
-                  "description": "Distance between the gantry's driven sides, mm."
+                  "description": "Distance between the gantry's two bearing rails, mm."
                 }
               },
               "required": [
@@ -2842,7 +2842,7 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
                   "gantrySpan": {
                     "type": "number",
                     "nullable": true,
-                    "description": "Distance between the gantry's driven sides, in the record's `lengthUnit`."
+                    "description": "Distance between the gantry's two bearing rails, in the record's `lengthUnit`."
                   }
                 },
                 "required": [
@@ -2879,7 +2879,7 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
                   "gantrySpan": {
                     "type": "number",
                     "nullable": true,
-                    "description": "Distance between the gantry's driven sides, mm."
+                    "description": "Distance between the gantry's two bearing rails, mm."
                   }
                 },
                 "required": [
@@ -3010,7 +3010,7 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
                   "gantrySpan": {
                     "type": "number",
                     "nullable": true,
-                    "description": "Distance between the gantry's driven sides, in the record's `lengthUnit`."
+                    "description": "Distance between the gantry's two bearing rails, in the record's `lengthUnit`."
                   }
                 },
                 "required": [
@@ -3047,7 +3047,7 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
                   "gantrySpan": {
                     "type": "number",
                     "nullable": true,
-                    "description": "Distance between the gantry's driven sides, mm."
+                    "description": "Distance between the gantry's two bearing rails, mm."
                   }
                 },
                 "required": [
@@ -3769,7 +3769,7 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
             "resolution": {
               "type": "number",
               "nullable": true,
-              "description": "Smallest step of the caliper, in the record's `lengthUnit`."
+              "description": "Smallest step of the caliper or rule the sizes were read with, in the record's `lengthUnit`."
             },
             "nominal": {
               "type": "object",
@@ -3994,7 +3994,7 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
             "resolution": {
               "type": "number",
               "nullable": true,
-              "description": "Smallest step of the caliper, in the record's `lengthUnit`."
+              "description": "Smallest step of the caliper or rule the sizes were read with, in the record's `lengthUnit`."
             },
             "nominal": {
               "type": "object",
@@ -4226,7 +4226,7 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
               "resolution": {
                 "type": "number",
                 "nullable": true,
-                "description": "Smallest step of the caliper, in the record's `lengthUnit`."
+                "description": "Smallest step of the caliper or rule the sizes were read with, in the record's `lengthUnit`."
               },
               "nominal": {
                 "type": "object",
@@ -4451,7 +4451,7 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
               "resolution": {
                 "type": "number",
                 "nullable": true,
-                "description": "Smallest step of the caliper, in the record's `lengthUnit`."
+                "description": "Smallest step of the caliper or rule the sizes were read with, in the record's `lengthUnit`."
               },
               "nominal": {
                 "type": "object",

@@ -7080,7 +7080,7 @@ export interface operations {
                             diagonal1: number | null;
                             /** @description The other diagonal, in the record's `lengthUnit`. */
                             diagonal2: number | null;
-                            /** @description Distance between the gantry's driven sides, in the record's `lengthUnit`. */
+                            /** @description Distance between the gantry's two bearing rails, in the record's `lengthUnit`. */
                             gantrySpan: number | null;
                         };
                         inputMm: {
@@ -7092,7 +7092,7 @@ export interface operations {
                             diagonal1: number | null;
                             /** @description The other diagonal, mm. */
                             diagonal2: number | null;
-                            /** @description Distance between the gantry's driven sides, mm. */
+                            /** @description Distance between the gantry's two bearing rails, mm. */
                             gantrySpan: number | null;
                         };
                         result: components["schemas"]["DiagonalCheckResult"] | null;
@@ -7125,7 +7125,7 @@ export interface operations {
                             diagonal1: number | null;
                             /** @description The other diagonal, in the record's `lengthUnit`. */
                             diagonal2: number | null;
-                            /** @description Distance between the gantry's driven sides, in the record's `lengthUnit`. */
+                            /** @description Distance between the gantry's two bearing rails, in the record's `lengthUnit`. */
                             gantrySpan: number | null;
                         };
                         inputMm: {
@@ -7137,7 +7137,7 @@ export interface operations {
                             diagonal1: number | null;
                             /** @description The other diagonal, mm. */
                             diagonal2: number | null;
-                            /** @description Distance between the gantry's driven sides, mm. */
+                            /** @description Distance between the gantry's two bearing rails, mm. */
                             gantrySpan: number | null;
                         };
                         result: components["schemas"]["DiagonalCheckResult"] | null;
@@ -7223,7 +7223,7 @@ export interface operations {
                             diagonal1: number | null;
                             /** @description The other diagonal, in the record's `lengthUnit`. */
                             diagonal2: number | null;
-                            /** @description Distance between the gantry's driven sides, in the record's `lengthUnit`. */
+                            /** @description Distance between the gantry's two bearing rails, in the record's `lengthUnit`. */
                             gantrySpan: number | null;
                         };
                         inputMm: {
@@ -7235,7 +7235,7 @@ export interface operations {
                             diagonal1: number | null;
                             /** @description The other diagonal, mm. */
                             diagonal2: number | null;
-                            /** @description Distance between the gantry's driven sides, mm. */
+                            /** @description Distance between the gantry's two bearing rails, mm. */
                             gantrySpan: number | null;
                         };
                         result: components["schemas"]["DiagonalCheckResult"] | null;
@@ -7268,7 +7268,7 @@ export interface operations {
                             diagonal1: number | null;
                             /** @description The other diagonal, in the record's `lengthUnit`. */
                             diagonal2: number | null;
-                            /** @description Distance between the gantry's driven sides, in the record's `lengthUnit`. */
+                            /** @description Distance between the gantry's two bearing rails, in the record's `lengthUnit`. */
                             gantrySpan: number | null;
                         };
                         inputMm: {
@@ -7280,7 +7280,7 @@ export interface operations {
                             diagonal1: number | null;
                             /** @description The other diagonal, mm. */
                             diagonal2: number | null;
-                            /** @description Distance between the gantry's driven sides, mm. */
+                            /** @description Distance between the gantry's two bearing rails, mm. */
                             gantrySpan: number | null;
                         };
                         result: components["schemas"]["DiagonalCheckResult"] | null;
@@ -7645,7 +7645,7 @@ export interface operations {
                         plateThickness: number | null;
                         /** @description In mm. */
                         plateThicknessMm: number | null;
-                        /** @description Smallest step of the caliper, in the record's `lengthUnit`. */
+                        /** @description Smallest step of the caliper or rule the sizes were read with, in the record's `lengthUnit`. */
                         resolution: number | null;
                         nominal: {
                             /** @description Commanded size of the square along X, in the record's `lengthUnit`. */
@@ -7706,7 +7706,7 @@ export interface operations {
                         plateThickness: number | null;
                         /** @description In mm. */
                         plateThicknessMm: number | null;
-                        /** @description Smallest step of the caliper, in the record's `lengthUnit`. */
+                        /** @description Smallest step of the caliper or rule the sizes were read with, in the record's `lengthUnit`. */
                         resolution: number | null;
                         nominal: {
                             /** @description Commanded size of the square along X, in the record's `lengthUnit`. */
@@ -7820,7 +7820,7 @@ export interface operations {
                         plateThickness: number | null;
                         /** @description In mm. */
                         plateThicknessMm: number | null;
-                        /** @description Smallest step of the caliper, in the record's `lengthUnit`. */
+                        /** @description Smallest step of the caliper or rule the sizes were read with, in the record's `lengthUnit`. */
                         resolution: number | null;
                         nominal: {
                             /** @description Commanded size of the square along X, in the record's `lengthUnit`. */
@@ -7881,7 +7881,7 @@ export interface operations {
                         plateThickness: number | null;
                         /** @description In mm. */
                         plateThicknessMm: number | null;
-                        /** @description Smallest step of the caliper, in the record's `lengthUnit`. */
+                        /** @description Smallest step of the caliper or rule the sizes were read with, in the record's `lengthUnit`. */
                         resolution: number | null;
                         nominal: {
                             /** @description Commanded size of the square along X, in the record's `lengthUnit`. */
