@@ -12,7 +12,7 @@ import { randomUUID } from 'node:crypto';
 import { getMetadataStorage } from 'class-validator';
 import { describeApiWithoutServer } from '../src/openapi/write-document.js';
 import { serializeOpenApiDocument } from '../src/openapi/openapi-document.js';
-import { CONFLICT_CAUSES, KEY_CONFLICT } from '../src/openapi/error-responses.js';
+import { CONFLICT_CAUSES, KEY_CONFLICT, KEY_UNPROCESSABLE } from '../src/openapi/error-responses.js';
 import { numbersWithoutUnit } from '../src/openapi/unit-rule.js';
 import { LENGTH_UNITS } from '../src/engine/units.js';
 import { anonymous, createTestApp, createTestWorkshop } from './helpers/test-app.js';
@@ -265,7 +265,7 @@ describe('API description (OpenAPI 3)', () => {
       expect.objectContaining({ type: 'array', items: { type: 'string' } }),
     );
     const create = served.paths['/api/machines'].post as OperationObject;
-    expect(Object.keys(create.responses).sort()).toEqual(['201', '400', '401', '403', '409']);
+    expect(Object.keys(create.responses).sort()).toEqual(['201', '400', '401', '403', '409', '422']);
     const health = served.paths['/api/health'].get as OperationObject;
     expect(Object.keys(health.responses)).not.toContain('401');
     const people = served.paths['/api/people'].get as OperationObject;
@@ -373,6 +373,27 @@ describe('API description (OpenAPI 3)', () => {
       for (const cause of Object.values(CONFLICT_CAUSES)) expect(described).not.toContain(cause);
     });
 
+    it('one Idempotency-Key for two commands answers 422, described on every command with the route’s own causes', async () => {
+      const ws = await createTestWorkshop(app, 'Key codes');
+      const key = randomUUID();
+      const fit = { positions: [0, 100, 200, 300], readings: [0, 0.01, 0.005, 0] };
+      expect((await ws.as.owner.post('/api/calc/straightness').set('Idempotency-Key', key).send(fit)).status).toBe(200);
+      const other = await ws.as.owner
+        .post('/api/calc/parallelism')
+        .set('Idempotency-Key', key)
+        .send({
+          positions: [0, 100, 200],
+          railA: [0, 0.01, 0],
+          railB: [0, 0, 0.01],
+        });
+      expect(other.status).toBe(422);
+      expect(other.body.message).toMatch(/another command/);
+      expect(responsesOf('/api/calc/parallelism', 'post')['422'].description).toContain(KEY_UNPROCESSABLE);
+      const apply = responsesOf('/api/axes/{id}/travel-trials/{trialId}/apply', 'post')['422'].description;
+      expect(apply).toContain('confirmFarCorrection');
+      expect(apply).toContain(KEY_UNPROCESSABLE);
+    });
+
     it('a route with no cause for 409 does not describe it: a command without a session takes no key', async () => {
       const key = randomUUID();
       const body = { email: `nobody.${key.slice(0, 8)}@test.example.com` };
@@ -383,6 +404,7 @@ describe('API description (OpenAPI 3)', () => {
         );
       expect(answers.map((a) => a.status)).toEqual([202, 202]);
       expect(Object.keys(responsesOf('/api/auth/password-reset/request', 'post'))).not.toContain('409');
+      expect(Object.keys(responsesOf('/api/auth/password-reset/request', 'post'))).not.toContain('422');
       // Nor does any read.
       for (const [p, item] of Object.entries(served.paths))
         if (item.get)

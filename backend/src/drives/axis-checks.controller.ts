@@ -13,7 +13,7 @@ import { TestProgramService } from './test-program.service.js';
 import { TravelTrialsService } from './travel-trials.service.js';
 import { create as contentDisposition } from 'content-disposition';
 import { ApiProduces } from '@nestjs/swagger';
-import { ConflictsWhen } from '../openapi/error-responses.js';
+import { ConflictsWhen, UnprocessableWhen } from '../openapi/error-responses.js';
 
 /** Travel trials, repeat-and-reverse runs and test programs of one axis. */
 @Controller('axes/:id')
@@ -61,6 +61,9 @@ export class AxisChecksController {
   @Roles(...CALIBRATORS)
   @HttpCode(200)
   @ConflictsWhen('approval-lock', 'state')
+  @UnprocessableWhen(
+    "The corrected steps per mm is far from the drive's theoretical value and `confirmFarCorrection` was not sent as true.",
+  )
   apply(
     @CurrentUser() user: SessionUser,
     @Param('id', ParseUUIDPipe) axisId: string,

@@ -34,6 +34,17 @@ export const NEW_OR_REPEATED = {
     `The ${what} with this \`id\` was recorded before (the same entry sent again): the record as first made; nothing is recorded again.`,
 };
 
+/**
+ * A well-formed request refused because of what it asks (422), a cause of the handler's own; every
+ * command of a signed-in person can meet KEY_UNPROCESSABLE besides.
+ */
+export const UNPROCESSABLE_KEY = 'railwright:unprocessable';
+export const UnprocessableWhen = (...reasons: string[]) => SetMetadata(UNPROCESSABLE_KEY, reasons);
+
+/** The 422 any command of a signed-in person can meet through database/command-keys.ts. */
+export const KEY_UNPROCESSABLE =
+  'The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.';
+
 /** The 409 any command of a signed-in person can meet through database/command-keys.ts. */
 export const KEY_CONFLICT =
   'Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.';
@@ -50,6 +61,8 @@ export interface RouteFacts {
   uuidParameters: string[];
   /** `@ConflictsWhen(...)`: the causes of 409 of the handler's own. */
   conflicts: ConflictCause[];
+  /** `@UnprocessableWhen(...)`: the causes of 422 of the handler's own. */
+  unprocessable: string[];
 }
 
 /** The bodies the server answers with when it refuses (Nest's HttpException shape and the filters in common/). */
@@ -93,6 +106,19 @@ export const ERROR_SCHEMAS: Record<string, SchemaObject> = {
     },
     required: ['statusCode', 'message'],
   },
+  UnprocessableResponse: {
+    type: 'object',
+    description: 'A well-formed request refused because of what it asks.',
+    properties: {
+      statusCode: { type: 'number', enum: [422], description: 'The HTTP status code.' },
+      message: {
+        oneOf: [{ type: 'string' }, { type: 'array', items: { type: 'string' } }],
+        description: 'Written for people: what was refused and what to do (a list names the field first).',
+      },
+      error: { type: 'string', enum: ['Unprocessable Entity'] },
+    },
+    required: ['statusCode', 'message'],
+  },
 };
 
 const ref = (name: string) => ({ $ref: `#/components/schemas/${name}` });
@@ -106,8 +132,9 @@ function refusal(description: string, schema: string): ResponseObject {
  * - 400 when it takes a body, a query or path parameters (the global validation pipe, the engine);
  * - 401 unless it is public; 403 when it is limited to some roles;
  * - 404 when it names a record in its path (another workshop's record is "not found" too);
- * - 409 for a signed-in person's commands, naming the causes the route can meet: its own
- *   (`@ConflictsWhen`) and the Idempotency-Key's. A route without a session takes no key.
+ * - 409 and 422 for a signed-in person's commands, naming the causes the route can meet: its own
+ *   (`@ConflictsWhen`, `@UnprocessableWhen`) and the Idempotency-Key's. A route without a session
+ *   takes no key.
  */
 export function errorResponses(
   method: string,
@@ -134,6 +161,11 @@ export function errorResponses(
     out['409'] = refusal(
       `Refused as a conflict, for one of these reasons:\n- ${causes.join('\n- ')}`,
       'ConflictResponse',
+    );
+    const reasons = [...route.unprocessable, KEY_UNPROCESSABLE];
+    out['422'] = refusal(
+      `Refused although well formed, for one of these reasons:\n- ${reasons.join('\n- ')}`,
+      'UnprocessableResponse',
     );
   }
   return out;

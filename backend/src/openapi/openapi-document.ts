@@ -17,6 +17,7 @@ import {
   CONFLICTS_KEY,
   ERROR_SCHEMAS,
   errorResponses,
+  UNPROCESSABLE_KEY,
   type ConflictCause,
   type RouteFacts,
 } from './error-responses.js';
@@ -141,7 +142,7 @@ function addSchemas(document: OpenAPIObject, schemas: Record<string, SchemaObjec
 /**
  * Per handler: who may call it (the metadata the session guard reads), what it produces
  * (@ApiProduces), which path parameters must be uuids (ParseUUIDPipe) and why it can answer 409
- * (@ConflictsWhen).
+ * (@ConflictsWhen) or 422 (@UnprocessableWhen).
  */
 function routeFacts(app: INestApplication): Map<string, RouteFacts> {
   const container = (app as unknown as { container: NestContainer }).container;
@@ -160,6 +161,7 @@ function routeFacts(app: INestApplication): Map<string, RouteFacts> {
           string[] | undefined;
         const produces = (Reflect.getMetadata(DECORATORS.API_PRODUCES, handler) as string[] | undefined) ?? null;
         const conflicts = (Reflect.getMetadata(CONFLICTS_KEY, handler) as ConflictCause[] | undefined) ?? [];
+        const unprocessable = (Reflect.getMetadata(UNPROCESSABLE_KEY, handler) as string[] | undefined) ?? [];
         const args = (Reflect.getMetadata(ROUTE_ARGS_METADATA, controller, name) ?? {}) as Record<
           string,
           { data?: unknown; pipes?: unknown[] }
@@ -178,6 +180,7 @@ function routeFacts(app: INestApplication): Map<string, RouteFacts> {
           produces,
           uuidParameters,
           conflicts,
+          unprocessable,
         });
       }
     }

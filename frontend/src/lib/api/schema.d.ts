@@ -3533,6 +3533,18 @@ export interface components {
                 [key: string]: unknown;
             }[];
         };
+        /** @description A well-formed request refused because of what it asks. */
+        UnprocessableResponse: {
+            /**
+             * @description The HTTP status code.
+             * @enum {number}
+             */
+            statusCode: 422;
+            /** @description Written for people: what was refused and what to do (a list names the field first). */
+            message: string | string[];
+            /** @enum {string} */
+            error?: "Unprocessable Entity";
+        };
     };
     responses: never;
     parameters: never;
@@ -3972,6 +3984,18 @@ export interface operations {
                     "application/json": components["schemas"]["ConflictResponse"];
                 };
             };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
+                };
+            };
         };
     };
     People_resendInvitation: {
@@ -4044,6 +4068,18 @@ export interface operations {
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -4120,6 +4156,18 @@ export interface operations {
                     "application/json": components["schemas"]["ConflictResponse"];
                 };
             };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
+                };
+            };
         };
     };
     People_update: {
@@ -4193,6 +4241,18 @@ export interface operations {
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -4285,6 +4345,18 @@ export interface operations {
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -4409,6 +4481,18 @@ export interface operations {
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -4560,6 +4644,18 @@ export interface operations {
                     "application/json": components["schemas"]["ConflictResponse"];
                 };
             };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
+                };
+            };
         };
     };
     TargetSets_get: {
@@ -4683,6 +4779,18 @@ export interface operations {
                     "application/json": components["schemas"]["ConflictResponse"];
                 };
             };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
+                };
+            };
         };
     };
     Calculators_straightness: {
@@ -4779,6 +4887,18 @@ export interface operations {
                     "application/json": components["schemas"]["ConflictResponse"];
                 };
             };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
+                };
+            };
         };
     };
     Calculators_parallelism: {
@@ -4847,6 +4967,18 @@ export interface operations {
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -4928,6 +5060,18 @@ export interface operations {
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -5018,6 +5162,18 @@ export interface operations {
                     "application/json": components["schemas"]["ConflictResponse"];
                 };
             };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
+                };
+            };
         };
     };
     Calculators_drive: {
@@ -5090,6 +5246,18 @@ export interface operations {
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -5176,6 +5344,18 @@ export interface operations {
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -5292,6 +5472,18 @@ export interface operations {
                     "application/json": components["schemas"]["ConflictResponse"];
                 };
             };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
+                };
+            };
         };
     };
     Calculators_screwSpeed: {
@@ -5372,6 +5564,18 @@ export interface operations {
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -5458,6 +5662,18 @@ export interface operations {
                     "application/json": components["schemas"]["ConflictResponse"];
                 };
             };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
+                };
+            };
         };
     };
     Calculators_travelEnvelope: {
@@ -5535,6 +5751,18 @@ export interface operations {
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -5656,6 +5884,18 @@ export interface operations {
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -5824,6 +6064,18 @@ export interface operations {
                     "application/json": components["schemas"]["ConflictResponse"];
                 };
             };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
+                };
+            };
         };
     };
     Rails_get: {
@@ -5942,6 +6194,18 @@ export interface operations {
                     "application/json": components["schemas"]["ConflictResponse"];
                 };
             };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
+                };
+            };
         };
     };
     Rails_update: {
@@ -6015,6 +6279,18 @@ export interface operations {
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -6436,6 +6712,18 @@ export interface operations {
                     "application/json": components["schemas"]["ConflictResponse"];
                 };
             };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
+                };
+            };
         };
     };
     Rails_getSweep: {
@@ -6554,6 +6842,18 @@ export interface operations {
                     "application/json": components["schemas"]["ConflictResponse"];
                 };
             };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
+                };
+            };
         };
     };
     Rails_updateSweep: {
@@ -6627,6 +6927,18 @@ export interface operations {
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -6751,6 +7063,18 @@ export interface operations {
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -6880,6 +7204,18 @@ export interface operations {
                     "application/json": components["schemas"]["ConflictResponse"];
                 };
             };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
+                };
+            };
         };
     };
     BoltDowns_abandon: {
@@ -6954,6 +7290,18 @@ export interface operations {
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -7046,6 +7394,18 @@ export interface operations {
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -7352,6 +7712,18 @@ export interface operations {
                     "application/json": components["schemas"]["ConflictResponse"];
                 };
             };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
+                };
+            };
         };
     };
     Frame_listBedGrids: {
@@ -7614,6 +7986,18 @@ export interface operations {
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -7984,6 +8368,18 @@ export interface operations {
                     "application/json": components["schemas"]["ConflictResponse"];
                 };
             };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
+                };
+            };
         };
     };
     Frame_deleteDiagonalCheck: {
@@ -8052,6 +8448,18 @@ export interface operations {
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -8124,6 +8532,18 @@ export interface operations {
                     "application/json": components["schemas"]["ConflictResponse"];
                 };
             };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
+                };
+            };
         };
     };
     Frame_deleteTestCut: {
@@ -8192,6 +8612,18 @@ export interface operations {
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -8381,6 +8813,18 @@ export interface operations {
                     "application/json": components["schemas"]["ConflictResponse"];
                 };
             };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
+                };
+            };
         };
     };
     Safety_startNew: {
@@ -8482,6 +8926,18 @@ export interface operations {
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -8605,6 +9061,18 @@ export interface operations {
                     "application/json": components["schemas"]["ConflictResponse"];
                 };
             };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
+                };
+            };
         };
     };
     Evidence_list: {
@@ -8714,6 +9182,18 @@ export interface operations {
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -8871,6 +9351,18 @@ export interface operations {
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -9153,6 +9645,18 @@ export interface operations {
                     "application/json": components["schemas"]["ConflictResponse"];
                 };
             };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
+                };
+            };
         };
     };
     Axes_travelEnvelope: {
@@ -9320,6 +9824,18 @@ export interface operations {
                     "application/json": components["schemas"]["ConflictResponse"];
                 };
             };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
+                };
+            };
         };
     };
     Axes_update: {
@@ -9394,6 +9910,18 @@ export interface operations {
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -9675,6 +10203,18 @@ export interface operations {
                     "application/json": components["schemas"]["ConflictResponse"];
                 };
             };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
+                };
+            };
         };
     };
     AxisChecks_getTrial: {
@@ -9861,6 +10401,18 @@ export interface operations {
                     "application/json": components["schemas"]["ConflictResponse"];
                 };
             };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
+                };
+            };
         };
     };
     AxisChecks_apply: {
@@ -9936,6 +10488,19 @@ export interface operations {
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The corrected steps per mm is far from the drive's theoretical value and `confirmFarCorrection` was not sent as true.
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -10241,6 +10806,18 @@ export interface operations {
                     "application/json": components["schemas"]["ConflictResponse"];
                 };
             };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
+                };
+            };
         };
     };
     AxisChecks_getRun: {
@@ -10480,6 +11057,18 @@ export interface operations {
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -10867,6 +11456,18 @@ export interface operations {
                     "application/json": components["schemas"]["ConflictResponse"];
                 };
             };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
+                };
+            };
         };
     };
     Backlash_get: {
@@ -11050,6 +11651,18 @@ export interface operations {
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -11276,6 +11889,18 @@ export interface operations {
                     "application/json": components["schemas"]["ConflictResponse"];
                 };
             };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
+                };
+            };
         };
     };
     Approvals_requestApproval: {
@@ -11351,6 +11976,18 @@ export interface operations {
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -11483,6 +12120,18 @@ export interface operations {
                     "application/json": components["schemas"]["ConflictResponse"];
                 };
             };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
+                };
+            };
         };
     };
     Approvals_reopen: {
@@ -11560,6 +12209,18 @@ export interface operations {
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -12092,6 +12753,18 @@ export interface operations {
                     "application/json": components["schemas"]["ConflictResponse"];
                 };
             };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
+                };
+            };
         };
     };
     HolePatterns_preview: {
@@ -12153,6 +12826,18 @@ export interface operations {
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -12278,6 +12963,18 @@ export interface operations {
                     "application/json": components["schemas"]["ConflictResponse"];
                 };
             };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
+                };
+            };
         };
     };
     HolePatterns_remove: {
@@ -12344,6 +13041,18 @@ export interface operations {
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
