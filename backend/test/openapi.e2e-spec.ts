@@ -8,10 +8,15 @@ import { METHOD_METADATA, PATH_METADATA, ROUTE_ARGS_METADATA } from '@nestjs/com
 import { RequestMethod } from '@nestjs/common';
 import type { NestContainer } from '@nestjs/core';
 import type { OpenAPIObject, OperationObject, ReferenceObject, SchemaObject } from '@nestjs/swagger';
+import { randomUUID } from 'node:crypto';
 import { getMetadataStorage } from 'class-validator';
 import { describeApiWithoutServer } from '../src/openapi/write-document.js';
 import { serializeOpenApiDocument } from '../src/openapi/openapi-document.js';
-import { anonymous, createTestApp } from './helpers/test-app.js';
+import { CONFLICT_CAUSES, KEY_CONFLICT, KEY_UNPROCESSABLE } from '../src/openapi/error-responses.js';
+import { numbersWithoutUnit } from '../src/openapi/unit-rule.js';
+import { LENGTH_UNITS } from '../src/engine/units.js';
+import { anonymous, createTestApp, createTestWorkshop } from './helpers/test-app.js';
+import { lockAsApproved } from './support/stand-in-approval.js';
 
 const COMMITTED = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../openapi.json');
 const BODY_ARGUMENT = '3:'; // RouteParamtypes.BODY
@@ -140,7 +145,12 @@ describe('API description (OpenAPI 3)', () => {
         const op = item[m] as OperationObject | undefined;
         if (!op) continue;
         const ok = Object.entries(op.responses).filter(([status]) => status.startsWith('2'));
-        expect({ route: `${m} ${p}`, answers: ok.length }).toEqual({ route: `${m} ${p}`, answers: 1 });
+        // One success, or a new record (201) and the same entry sent again (200), each described.
+        const statuses = ok.map(([status]) => status).sort();
+        expect({ route: `${m} ${p}`, oneOrNewAndRepeated: ok.length === 1 || statuses.join() === '200,201' }).toEqual({
+          route: `${m} ${p}`,
+          oneOrNewAndRepeated: true,
+        });
         for (const [status, response] of ok) {
           const content = response && 'content' in response ? response.content : undefined;
           if (status === '204') {
@@ -255,11 +265,42 @@ describe('API description (OpenAPI 3)', () => {
       expect.objectContaining({ type: 'array', items: { type: 'string' } }),
     );
     const create = served.paths['/api/machines'].post as OperationObject;
-    expect(Object.keys(create.responses).sort()).toEqual(['201', '400', '401', '403', '409']);
+    expect(Object.keys(create.responses).sort()).toEqual(['201', '400', '401', '403', '409', '422']);
     const health = served.paths['/api/health'].get as OperationObject;
     expect(Object.keys(health.responses)).not.toContain('401');
     const people = served.paths['/api/people'].get as OperationObject;
     expect(people.responses['403']).toBeDefined();
+  });
+
+  it('says the unit of every number, in requests, answers, nested shapes and parameters, or that it has none', () => {
+    // The rule (src/openapi/unit-rule.ts) wants a unit itself ("mm", "`readingUnit`", "°C", "rpm", …) or
+    // "count", "index from 0/1", "ratio", "no unit": the word "unit" or "number of" alone does not pass.
+    expect(numbersWithoutUnit(served)).toEqual([]);
+  });
+
+  it('gives the two unit families one named list each, which every unit field of requests and answers refers to', () => {
+    const schemas = served.components?.schemas ?? {};
+    for (const name of ['LengthUnit', 'ReadingUnit']) {
+      expect(schemas[name]).toEqual(expect.objectContaining({ type: 'string', enum: [...LENGTH_UNITS] }));
+    }
+    const inline: string[] = [];
+    let referring = 0;
+    const walk = (value: unknown, where: string): void => {
+      if (Array.isArray(value)) return value.forEach((v) => walk(v, where));
+      if (!value || typeof value !== 'object') return;
+      const props = (value as SchemaObject).properties;
+      for (const [name, prop] of Object.entries(props ?? {})) {
+        if (name !== 'lengthUnit' && name !== 'readingUnit') continue;
+        const text = JSON.stringify(prop);
+        if (text.includes(`#/components/schemas/${name === 'lengthUnit' ? 'LengthUnit' : 'ReadingUnit'}`)) referring++;
+        else if ((prop as SchemaObject).enum) inline.push(`${where} ${name}`);
+      }
+      for (const [key, v] of Object.entries(value)) walk(v, `${where}/${key}`);
+    };
+    walk(served.components?.schemas, 'components');
+    walk(served.paths, 'paths');
+    expect(inline).toEqual([]);
+    expect(referring).toBeGreaterThan(60);
   });
 
   it('names the unit of every number whose name carries one', () => {
@@ -276,6 +317,102 @@ describe('API description (OpenAPI 3)', () => {
       }
     }
     expect(seen).toBeGreaterThan(10);
+  });
+
+  describe('answer codes held to what the server answers', () => {
+    const responsesOf = (route: string, method: (typeof METHODS)[number]) =>
+      (served.paths[route][method] as OperationObject).responses as Record<string, { description: string }>;
+
+    it('a sweep sent again with its id answers 200 with the same sweep, and both 201 and 200 are described', async () => {
+      const ws = await createTestWorkshop(app, 'Answer codes');
+      const machine = await ws.as.builder
+        .post('/api/machines')
+        .send({ name: 'Codes table', kind: 'plasma', workArea: { x: 3000, y: 1500 } });
+      const rail = await ws.as.builder
+        .post(`/api/machines/${machine.body.id}/rails`)
+        .send({ label: 'Y1', axis: 'Y1', length: 1000, profileSize: 20, holePitch: 60, firstHole: 20 });
+      const sweep = {
+        id: randomUUID(),
+        phase: 'as-found',
+        stations: [0, 250, 500, 750].map((position, i) => ({ position, reading: [0, 0.01, 0.015, 0][i] })),
+      };
+      const first = await ws.as.builder.post(`/api/rails/${rail.body.id}/sweeps`).send(sweep);
+      const again = await ws.as.builder.post(`/api/rails/${rail.body.id}/sweeps`).send(sweep);
+      expect([first.status, again.status]).toEqual([201, 200]);
+      expect(again.body.id).toBe(first.body.id);
+      for (const route of ['/api/rails/{id}/sweeps', '/api/bolt-downs/{id}/final-sweep']) {
+        const answers = responsesOf(route, 'post');
+        expect(answers['201'].description).toMatch(/recorded/);
+        expect(answers['200'].description).toMatch(/`id` was recorded before/);
+      }
+
+      // A locked sweep (an approval stands on it) is refused with 409, and 409 is described with that reason.
+      await lockAsApproved(app, [{ recordType: 'rail-sweep', recordId: first.body.id }]);
+      const removed = await ws.as.builder.delete(`/api/sweeps/${first.body.id}`);
+      expect(removed.status).toBe(409);
+      expect(removed.body.message).toMatch(/approved commissioning record/);
+      const edited = await ws.as.builder.patch(`/api/sweeps/${first.body.id}`).send({ notes: 'later' });
+      expect(edited.status).toBe(409);
+      for (const [route, method] of [
+        ['/api/sweeps/{id}', 'delete'],
+        ['/api/sweeps/{id}', 'patch'],
+      ] as const) {
+        expect(responsesOf(route, method)['409'].description).toContain(CONFLICT_CAUSES['approval-lock']);
+      }
+    });
+
+    it('a calculator has no cause of its own: its 409 is only the Idempotency-Key’s, which it really answers', async () => {
+      const ws = await createTestWorkshop(app, 'Calculator codes');
+      const key = randomUUID();
+      const fit = { positions: [0, 100, 200, 300], readings: [0, 0.01, 0.005, 0] };
+      expect((await ws.as.owner.post('/api/calc/straightness').set('Idempotency-Key', key).send(fit)).status).toBe(200);
+      const theirs = await ws.as.viewer.post('/api/calc/straightness').set('Idempotency-Key', key).send(fit);
+      expect(theirs.status).toBe(409);
+      const described = responsesOf('/api/calc/straightness', 'post')['409'].description;
+      expect(described).toContain(KEY_CONFLICT);
+      for (const cause of Object.values(CONFLICT_CAUSES)) expect(described).not.toContain(cause);
+    });
+
+    it('one Idempotency-Key for two commands answers 422, described on every command with the route’s own causes', async () => {
+      const ws = await createTestWorkshop(app, 'Key codes');
+      const key = randomUUID();
+      const fit = { positions: [0, 100, 200, 300], readings: [0, 0.01, 0.005, 0] };
+      expect((await ws.as.owner.post('/api/calc/straightness').set('Idempotency-Key', key).send(fit)).status).toBe(200);
+      const other = await ws.as.owner
+        .post('/api/calc/parallelism')
+        .set('Idempotency-Key', key)
+        .send({
+          positions: [0, 100, 200],
+          railA: [0, 0.01, 0],
+          railB: [0, 0, 0.01],
+        });
+      expect(other.status).toBe(422);
+      expect(other.body.message).toMatch(/another command/);
+      expect(responsesOf('/api/calc/parallelism', 'post')['422'].description).toContain(KEY_UNPROCESSABLE);
+      const apply = responsesOf('/api/axes/{id}/travel-trials/{trialId}/apply', 'post')['422'].description;
+      expect(apply).toContain('confirmFarCorrection');
+      expect(apply).toContain(KEY_UNPROCESSABLE);
+    });
+
+    it('a route with no cause for 409 does not describe it: a command without a session takes no key', async () => {
+      const key = randomUUID();
+      const body = { email: `nobody.${key.slice(0, 8)}@test.example.com` };
+      const answers = [];
+      for (let i = 0; i < 2; i++)
+        answers.push(
+          await anonymous(app).post('/api/auth/password-reset/request').set('Idempotency-Key', key).send(body),
+        );
+      expect(answers.map((a) => a.status)).toEqual([202, 202]);
+      expect(Object.keys(responsesOf('/api/auth/password-reset/request', 'post'))).not.toContain('409');
+      expect(Object.keys(responsesOf('/api/auth/password-reset/request', 'post'))).not.toContain('422');
+      // Nor does any read.
+      for (const [p, item] of Object.entries(served.paths))
+        if (item.get)
+          expect({ route: `get ${p}`, has409: '409' in item.get.responses }).toEqual({
+            route: `get ${p}`,
+            has409: false,
+          });
+    });
   });
 
   it('is committed as generated: backend/openapi.json equals what the server serves and what the sources give', async () => {

@@ -63,6 +63,7 @@ export const toVerificationResponse = (a: ApprovalRow, v: Verification) => ({
   keyId: v.keyId,
   signedCopyIntact: v.signedCopyIntact,
   differences: v.differences,
+  /** Count of differences found beyond those listed in `differences`. */
   moreDifferences: v.moreDifferences,
   recordHash: a.recordHash,
   stands: !a.endedAt,
@@ -79,6 +80,8 @@ export const toPublicVerificationResponse = (a: ApprovalRow, v: Verification) =>
   recheckIntervalDays: a.recheckIntervalDays,
   recheckDue: recheckDue(a),
   targetSet: a.snapshot.targetSet.name,
+  /** Count of checks the approval stands on. */
   checkCount: a.snapshot.checks.length,
+  /** Count of those checks that were waived. */
   waivedCount: a.snapshot.checks.filter((c) => c.status === 'waived').length,
 });

@@ -11,6 +11,7 @@ import { WaiverDto } from './dto/waiver.dto.js';
 import { ReopenDto } from './dto/reopen.dto.js';
 import { create as contentDisposition } from 'content-disposition';
 import { ApiProduces } from '@nestjs/swagger';
+import { ConflictsWhen } from '../openapi/error-responses.js';
 
 @Controller('machines/:id')
 export class ApprovalsController {
@@ -27,6 +28,7 @@ export class ApprovalsController {
 
   @Post('checks/:checkId/waiver')
   @Roles('owner')
+  @ConflictsWhen('approval-lock', 'state')
   waive(
     @CurrentUser() user: SessionUser,
     @Param('id', ParseUUIDPipe) id: string,
@@ -38,18 +40,21 @@ export class ApprovalsController {
 
   @Post('approval-requests')
   @Roles('technician', 'owner', 'admin')
+  @ConflictsWhen('state')
   requestApproval(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string) {
     return this.approvals.requestApproval(user, id);
   }
 
   @Post('approvals')
   @Roles('owner')
+  @ConflictsWhen('state')
   approve(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string, @Body() dto: ApproveDto) {
     return this.approvals.approve(user, id, dto);
   }
 
   @Post('reopen')
   @Roles('owner')
+  @ConflictsWhen('state')
   reopen(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string, @Body() dto: ReopenDto) {
     return this.approvals.reopen(user, id, dto);
   }

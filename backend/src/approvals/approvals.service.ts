@@ -314,10 +314,15 @@ function refuseUnlessState(state: MachineState, allowed: readonly MachineState[]
 function countsOf(checks: { status: string }[]) {
   const n = (s: string) => checks.filter((c) => c.status === s).length;
   return {
+    /** Count of required checks. */
     total: checks.length,
+    /** Count of checks within their targets. */
     within: n('within-target'),
+    /** Count of checks outside their targets. */
     outside: n('outside-target'),
+    /** Count of checks waived. */
     waived: n('waived'),
+    /** Count of checks not yet recorded. */
     notStarted: n('not-started'),
   };
 }

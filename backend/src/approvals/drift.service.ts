@@ -48,7 +48,7 @@ export class DriftService {
         target: ref.target,
         approved: side(a),
         latest: side(l),
-        /** Latest minus approved, in the result's unit; null when either is missing or nothing new was recorded. */
+        /** Latest minus approved, in the `unit` beside it; null when either is missing or nothing new was recorded. */
         change,
         unit: ref.result?.unit ?? a?.result?.unit ?? null,
         rechecked: !!l?.recordId && !sameRecord,

@@ -4,12 +4,13 @@ import type { BoltDownHoleRow, BoltDownRow } from './bolt-downs.repository.js';
 import { finiteList, UNREADABLE_INPUT } from '../common/stored-result.js';
 
 export interface BoltDownHoleResponse {
+  /** The hole along the rail from its start, index from 0. */
   index: number;
   /** Hole centre, mm from the rail's start; `at` the same in the bolt-down's lengthUnit. */
   position: number;
   /** Hole centre from the rail's start, in the bolt-down's lengthUnit. */
   at: number;
-  /** Rank in the proposed fixing order (0 = first). */
+  /** Rank in the proposed fixing order, index from 0 (0 = first). */
   order: number;
   /** Reading to aim for, in the bolt-down's readingUnit (null until the first hole is fixed). */
   target: number | null;
@@ -40,11 +41,11 @@ export interface BoltDownResponse {
   band: number;
   bandMm: number;
   holes: BoltDownHoleResponse[];
-  /** Index of the hole to fix next (null when every hole is fixed). */
+  /** The hole to fix next, index from 0 along the rail (null when every hole is fixed). */
   nextHole: number | null;
-  /** How many holes are fixed. */
+  /** Count of holes fixed. */
   fixedCount: number;
-  /** How many holes the rail has. */
+  /** Count of holes the rail has. */
   holeCount: number;
   complete: boolean;
   finalSweepId: string | null;

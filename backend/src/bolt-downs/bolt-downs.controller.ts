@@ -1,4 +1,5 @@
 import { Body, Controller, Get, HttpCode, Param, ParseUUIDPipe, Post, Put, Res } from '@nestjs/common';
+import { ApiResponse } from '@nestjs/swagger';
 import type { FastifyReply } from 'fastify';
 import { CurrentUser, RECORDERS, Roles } from '../auth/decorators.js';
 import type { SessionUser } from '../auth/session-user.js';
@@ -7,6 +8,7 @@ import { AbandonBoltDownDto } from './dto/abandon-bolt-down.dto.js';
 import { CreateBoltDownDto } from './dto/create-bolt-down.dto.js';
 import { FinalSweepDto } from './dto/final-sweep.dto.js';
 import { RecordHoleDto } from './dto/record-hole.dto.js';
+import { ConflictsWhen, NEW_OR_REPEATED } from '../openapi/error-responses.js';
 
 @Controller()
 export class BoltDownsController {
@@ -14,6 +16,7 @@ export class BoltDownsController {
 
   @Post('rails/:id/bolt-downs')
   @Roles(...RECORDERS)
+  @ConflictsWhen('approval-lock')
   start(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) railId: string, @Body() dto: CreateBoltDownDto) {
     return this.boltDowns.start(user, railId, dto);
   }
@@ -31,6 +34,7 @@ export class BoltDownsController {
 
   @Put('bolt-downs/:id/holes/:index')
   @Roles(...RECORDERS)
+  @ConflictsWhen('approval-lock', 'reused-id', 'state')
   recordHole(
     @CurrentUser() user: SessionUser,
     @Param('id', ParseUUIDPipe) id: string,
@@ -44,6 +48,7 @@ export class BoltDownsController {
   @Post('bolt-downs/:id/abandon')
   @Roles(...RECORDERS)
   @HttpCode(200)
+  @ConflictsWhen('approval-lock', 'state')
   abandon(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string, @Body() dto: AbandonBoltDownDto) {
     return this.boltDowns.abandon(user, id, dto);
   }
@@ -51,6 +56,9 @@ export class BoltDownsController {
   /** 201 with the new sweep; 200 with the same one when its id was seen before. */
   @Post('bolt-downs/:id/final-sweep')
   @Roles(...RECORDERS)
+  @ApiResponse({ status: 201, description: NEW_OR_REPEATED.created('final sweep') })
+  @ApiResponse({ status: 200, description: NEW_OR_REPEATED.repeated('final sweep') })
+  @ConflictsWhen('approval-lock', 'reused-id', 'state')
   async finalSweep(
     @CurrentUser() user: SessionUser,
     @Param('id', ParseUUIDPipe) id: string,

@@ -32,10 +32,18 @@ const named = (units: Record<string, string>) => ({ units });
 
 // Residuals (one per point) only when asked: see residuals-option.ts.
 const line = (r: ReferenceLineResult, residuals: boolean) => ({
+  /** Rise of the reference line per unit of position, mm/mm (a ratio of lengths). */
   slope: r.slope,
+  /** Height of the reference line at position 0, mm. */
   intercept: r.interceptMm,
+  /** Straightness about this reference line, mm. */
   straightness: r.straightnessMm,
-  ...(residuals ? { residuals: r.residualsMm } : {}),
+  ...(residuals
+    ? {
+        /** Each station's deviation from the reference line, mm. */
+        residuals: r.residualsMm,
+      }
+    : {}),
 });
 
 const LINE_UNITS = { slope: 'mm/mm', intercept: 'mm', straightness: 'mm', residuals: 'mm' };
@@ -60,8 +68,11 @@ function prefixed(prefix: string, units: Record<string, string>) {
 
 export const toParallelismResponse = (r: ParallelismResult, u: UnitFamilies) => ({
   ...echo(u),
+  /** Parallelism of the two rails, mm. */
   parallelism: r.parallelismMm,
+  /** Mean of the differences between the rails, mm. */
   meanOffset: r.meanOffsetMm,
+  /** Difference between the rails at each position, mm. */
   differences: r.differencesMm,
   ...named({ parallelism: 'mm', meanOffset: 'mm', differences: 'mm' }),
   warnings: engineWarnings((r as { warnings?: unknown }).warnings),
@@ -71,9 +82,13 @@ const squarenessFields = (r: SquarenessResult) => ({
   outOfSquareDeg: r.outOfSquareDeg,
   outOfSquareArcsec: r.outOfSquareArcsec,
   mmPerMetre: r.mmPerMetre,
+  /** Which diagonal is the longer: 1 or 2, its number in the request (no unit). */
   longDiagonal: r.longDiagonal,
+  /** Longer diagonal minus the shorter, mm. */
   diagonalDifference: r.diagonalDifferenceMm,
+  /** How far to move one side of the gantry over the span to square it, mm. */
   correction: r.correctionMm,
+  /** The span the correction is worked out over, mm. */
   span: r.spanMm,
 });
 const SQUARENESS_UNITS = {
@@ -103,11 +118,20 @@ export const toSquarenessResponse = (r: SquarenessResult, u: UnitFamilies, spanA
 export const toFlatnessResponse = (r: FlatnessResult, residuals: boolean, u: UnitFamilies) => ({
   ...echo(u),
   leastSquares: {
+    /** Slope of the plane along x, mm/mm (a ratio of lengths). */
     a: r.a,
+    /** Slope of the plane along y, mm/mm (a ratio of lengths). */
     b: r.b,
+    /** Height of the plane at x = 0, y = 0, mm. */
     c: r.cMm,
+    /** Flatness about the least-squares plane, mm. */
     flatness: r.flatnessMm,
-    ...(residuals ? { residuals: r.residualsMm } : {}),
+    ...(residuals
+      ? {
+          /** Each point's height above the plane, mm. */
+          residuals: r.residualsMm,
+        }
+      : {}),
   },
   tilt: {
     xMmPerMetre: r.tiltXMmPerMetre,
@@ -129,11 +153,15 @@ export const toFlatnessResponse = (r: FlatnessResult, residuals: boolean, u: Uni
 
 export const toDriveResponse = (r: DriveResult, u: UnitFamilies) => ({
   ...echo(u),
+  /** Travel per turn of the screw, pulley or pinion, mm. */
   travelPerRev: r.travelPerRevMm,
+  /** Travel per motor revolution (after the gearing), mm. */
   travelPerMotorRev: r.travelPerMotorRevMm,
   stepsPerMm: r.stepsPerMm,
   // Steps per inch, for controllers set up in inches: 25.4 mm to the inch exactly.
+  /** In steps per inch. */
   stepsPerIn: r.stepsPerMm * MM_PER_IN,
+  /** Travel of one microstep, mm. */
   resolution: r.resolutionMm,
   ...named({
     travelPerRev: 'mm',
@@ -157,16 +185,24 @@ export const toTravelTrialResponse = (
     : correctionWarning('Travel trial', r.correctedStepsPerMm, check.expected, check.expectedLabel);
   return {
     ...echo(u),
+    /** Measured distance over commanded distance (a ratio; 1 is exact). */
     scale: r.scale,
+    /** Offset of the fitted line at a commanded 0, mm. */
     offset: r.offsetMm,
     correctedStepsPerMm: r.correctedStepsPerMm,
+    /** In steps per inch. */
     correctedStepsPerIn: r.correctedStepsPerMm * MM_PER_IN,
     errorPercent: r.errorPercent,
+    /** The largest distance of a move from the fitted line, mm. */
     residualMax: r.residualMaxMm,
     moves: r.moves.map((m) => ({
+      /** Commanded move, mm. */
       commanded: m.commandedMm,
+      /** Measured move, mm. */
       measured: m.measuredMm,
+      /** Measured minus commanded, mm. */
       error: m.errorMm,
+      /** Distance from the fitted line, mm. */
       residual: m.residualMm,
     })),
     ...named({
@@ -182,15 +218,25 @@ export const toTravelTrialResponse = (
 };
 
 const target = (t: TargetResult) => ({
+  /** The target position, mm. */
   target: t.targetMm,
+  /** Mean positional deviation approached moving +, mm. */
   meanUp: t.meanUpMm,
+  /** Mean positional deviation approached moving −, mm. */
   meanDown: t.meanDownMm,
+  /** Mean of the two, mm. */
   mean: t.meanMm,
+  /** Reversal value at this target (mean up − mean down), mm. */
   reversal: t.reversalMm,
+  /** Sample standard deviation of the approaches moving +, mm. */
   sUp: t.sUpMm,
+  /** Sample standard deviation of the approaches moving −, mm. */
   sDown: t.sDownMm,
+  /** Repeatability moving + (4 s), mm. */
   repeatabilityUp: t.repeatabilityUpMm,
+  /** Repeatability moving − (4 s), mm. */
   repeatabilityDown: t.repeatabilityDownMm,
+  /** Bidirectional repeatability at this target, mm. */
   repeatability: t.repeatabilityMm,
 });
 
@@ -198,19 +244,33 @@ const target = (t: TargetResult) => ({
 export const toPositioningResponse = (r: PositioningResult, u?: UnitFamilies) => ({
   ...(u ? echo(u) : {}),
   targets: r.targets.map(target),
+  /** Reversal value of the axis (the largest size over the targets), mm. */
   reversal: r.reversalMm,
+  /** Mean of the signed reversal values over the targets, mm. */
   reversalMean: r.reversalMeanMm,
+  /** Repeatability moving +, mm. */
   repeatabilityUp: r.repeatabilityUpMm,
+  /** Repeatability moving −, mm. */
   repeatabilityDown: r.repeatabilityDownMm,
+  /** Bidirectional repeatability, mm. */
   repeatability: r.repeatabilityMm,
+  /** Range of the mean deviations moving +, mm. */
   systematicUp: r.systematicUpMm,
+  /** Range of the mean deviations moving −, mm. */
   systematicDown: r.systematicDownMm,
+  /** Range of the mean deviations in both directions, mm. */
   systematic: r.systematicMm,
+  /** Range of the mean bidirectional deviations over the targets, mm. */
   meanRange: r.meanRangeMm,
+  /** Accuracy moving +, mm. */
   accuracyUp: r.accuracyUpMm,
+  /** Accuracy moving −, mm. */
   accuracyDown: r.accuracyDownMm,
+  /** Bidirectional accuracy, mm. */
   accuracy: r.accuracyMm,
+  /** Count of runs approaching moving +. */
   runsUp: r.runsUp,
+  /** Count of runs approaching moving −. */
   runsDown: r.runsDown,
   ...named({
     targets: 'mm',
@@ -226,14 +286,21 @@ export const toPositioningResponse = (r: PositioningResult, u?: UnitFamilies) =>
 
 export const toScrewSpeedResponse = (r: ScrewSpeedResult, u: UnitFamilies) => ({
   ...echo(u),
+  /** Screw speed at the feed rate asked about, rpm. */
   rpm: r.rpm,
+  /** Critical (whirling) speed of the screw, rpm. */
   criticalSpeed: r.criticalSpeedRpm,
+  /** Permissible speed (the critical speed with its safety factor), rpm. */
   permissibleSpeed: r.permissibleSpeedRpm,
+  /** Speed the nut's d·n limit allows, rpm. */
   dnLimitSpeed: r.dnLimitSpeedRpm,
+  /** Fastest feed within both limits, mm/min. */
   maxFeedRate: r.maxFeedRateMmPerMin,
   withinLimits: r.withinLimits,
   limitedBy: r.limitedBy,
+  /** Factor of the end mountings in the critical speed formula (no unit). */
   mountingFactor: r.mountingFactor,
+  /** The nut's d·n limit used, mm·rpm (nominal diameter in mm times rpm). */
   dnLimit: r.dnLimit,
   source: r.source,
   ...named({
@@ -266,14 +333,25 @@ export const toBoltDownResponse = (
   u: UnitFamilies,
 ) => ({
   ...echo(u),
-  holes: positionsMm.map((position, hole) => ({ hole, position })),
+  holes: positionsMm.map((position, hole) => ({
+    /** The hole, index from 0 along the rail. */
+    hole,
+    /** Position of the hole along the rail, mm. */
+    position,
+  })),
   steps: steps.map((s, i) => ({
+    /** The step's place in the guide, index from 1. */
     step: i + 1,
+    /** The hole to fix at this step, index from 0. */
     hole: s.hole,
+    /** Position of that hole along the rail, mm. */
     position: s.positionMm,
+    /** Indicator reading to aim for when this hole is tightened, mm; null before any hole is fixed. */
     target: s.targetMm,
+    /** Reading recorded at this hole once fixed, mm; null until then. */
     reading: s.readingMm,
   })),
+  /** The next hole to fix, index from 0; null when every hole is fixed. */
   nextHole,
   ...named({ 'holes.position': 'mm', 'steps.position': 'mm', 'steps.target': 'mm', 'steps.reading': 'mm' }),
   warnings: [] as ResultWarning[],
@@ -283,12 +361,17 @@ export const toTravelEnvelopeResponse = (r: TravelEnvelopeResult, u: UnitFamilie
   ...echo(u),
   axes: r.axes.map((a) => ({
     axis: a.axis,
+    /** Travel measured on the axis, mm. */
     measuredTravel: a.measuredTravelMm,
+    /** Size of the work along the axis, mm. */
     workSize: a.workSizeMm,
+    /** Travel the work needs with its margins, mm. */
     requiredTravel: a.requiredTravelMm,
+    /** Measured travel minus required travel (negative when short), mm. */
     spare: a.spareMm,
     covers: a.covers,
   })),
+  /** Margin kept beyond the work at each end, mm. */
   marginPerSide: r.marginPerSideMm,
   coversAll: r.coversAll,
   ...named({
@@ -307,10 +390,13 @@ export const toTravelEnvelopeResponse = (r: TravelEnvelopeResult, u: UnitFamilie
 });
 
 const axisScale = (a: TestCutResult['x']) => ({
+  /** Measured size over nominal size (a ratio; 1 is exact). */
   scale: a.scale,
+  /** Measured size minus nominal, mm. */
   error: a.errorMm,
   errorPercent: a.errorPercent,
   correctedStepsPerMm: a.correctedStepsPerMm,
+  /** In steps per inch. */
   correctedStepsPerIn: a.correctedStepsPerMm == null ? null : a.correctedStepsPerMm * MM_PER_IN,
 });
 
@@ -343,10 +429,14 @@ export const toTestCutResponse = (
     squareness,
     ovality: r.ovality
       ? {
+          /** Circle's diameter along X minus along Y, mm. */
           ovality: r.ovality.ovalityMm,
+          /** The part of the ovality the two axes' scale errors explain, mm. */
           fromScale: r.ovality.fromScaleMm,
+          /** The rest of the ovality, mm. */
           unexplained: r.ovality.unexplainedMm,
           pointsTo: r.ovality.pointsTo,
+          /** Backlash the unexplained ovality suggests, mm. */
           backlashEstimate: r.ovality.backlashEstimateMm,
         }
       : null,

@@ -6,6 +6,7 @@ import { DriveChecksService } from './drive-checks.service.js';
 import { CALIBRATORS } from './drive-roles.js';
 import { CreateAxisDto } from './dto/create-axis.dto.js';
 import { UpdateAxisDto } from './dto/update-axis.dto.js';
+import { ConflictsWhen } from '../openapi/error-responses.js';
 
 @Controller()
 export class AxesController {
@@ -21,6 +22,7 @@ export class AxesController {
 
   @Post('machines/:id/axes')
   @Roles(...CALIBRATORS)
+  @ConflictsWhen('approval-lock', 'taken')
   create(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) machineId: string, @Body() dto: CreateAxisDto) {
     return this.axes.create(user, machineId, dto);
   }
@@ -37,6 +39,7 @@ export class AxesController {
 
   @Patch('axes/:id')
   @Roles(...CALIBRATORS)
+  @ConflictsWhen('approval-lock', 'taken')
   update(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string, @Body() dto: UpdateAxisDto) {
     return this.axes.update(user, id, dto);
   }
@@ -44,6 +47,7 @@ export class AxesController {
   @Delete('axes/:id')
   @Roles(...CALIBRATORS)
   @HttpCode(204)
+  @ConflictsWhen('approval-lock')
   remove(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string) {
     return this.axes.delete(user, id);
   }

@@ -77,9 +77,13 @@ export const travelTrialResult = (r: TravelTrialResult) => ({
   residualMax: r.residualMaxMm,
   /** Each move commanded and measured, its error and its residual, all in mm. */
   moves: r.moves.map((m) => ({
+    /** Commanded move, mm. */
     commanded: m.commandedMm,
+    /** Measured move, mm. */
     measured: m.measuredMm,
+    /** Measured minus commanded, mm. */
     error: m.errorMm,
+    /** Distance from the fitted line, mm. */
     residual: m.residualMm,
   })),
   theoryDifferencePercent: r.theoryDifferencePercent ?? null,
@@ -96,6 +100,7 @@ export function toTravelTrialResponse(row: TravelTrialRow, targets: DriveTargets
     lengthUnit: row.lengthUnit,
     readingUnit: row.readingUnit,
     ...temperatureOf(row, row.result),
+    /** Steps per mm set in the controller while the moves were made. */
     stepsPerMmUsed: row.stepsPerMmUsed,
     throughOrigin: row.throughOrigin,
     moves: row.moves,
@@ -126,12 +131,14 @@ export function toPositioningRunResponse(row: PositioningRunRow, targets: DriveT
     lengthUnit: row.lengthUnit,
     readingUnit: row.readingUnit,
     ...temperatureOf(row, row.result),
+    /** Target positions, in the record's `lengthUnit`, as typed. */
     targets: row.targets,
     runs: row.runs,
     result: r
       ? {
           ...positioningResult(r),
           warnings: storedWarnings(row.result),
+          /** Largest thermal correction made to a deviation, mm (0 when none). */
           thermalCorrectionMax: r.thermalCorrectionMaxMm ?? 0,
         }
       : null,
@@ -161,16 +168,21 @@ export function toTravelTrialListItem(row: TravelTrialListRow, targets: DriveTar
     machineId: row.machineId,
     lengthUnit: row.lengthUnit,
     readingUnit: row.readingUnit,
+    /** Steps per mm set in the controller while the moves were made. */
     stepsPerMmUsed: row.stepsPerMmUsed,
     throughOrigin: row.throughOrigin,
+    /** Count of moves recorded. */
     moveCount: row.moveCount,
     warnings: storedWarnings(row.result),
     result: r
       ? {
           correctedStepsPerMm: r.correctedStepsPerMm,
           errorPercent: r.errorPercent,
+          /** Measured ÷ commanded, fitted over the moves (no unit). */
           scale: r.scale,
+          /** The fit's offset, mm. */
           offset: r.offsetMm,
+          /** Largest residual, mm. */
           residualMax: r.residualMaxMm,
         }
       : null,
@@ -198,10 +210,21 @@ export function toPositioningRunListItem(row: PositioningRunListRow, targets: Dr
     machineId: row.machineId,
     lengthUnit: row.lengthUnit,
     readingUnit: row.readingUnit,
+    /** Count of target positions. */
     targetCount: row.targetCount,
     warnings: storedWarnings(row.result),
+    /** Count of runs, both directions together. */
     runCount: row.runCount,
-    result: r ? { accuracy: r.accuracyMm, repeatability: r.repeatabilityMm, reversal: r.reversalMm } : null,
+    result: r
+      ? {
+          /** Bidirectional accuracy, mm. */
+          accuracy: r.accuracyMm,
+          /** Bidirectional repeatability, mm. */
+          repeatability: r.repeatabilityMm,
+          /** Reversal value (the largest over the targets), mm. */
+          reversal: r.reversalMm,
+        }
+      : null,
     checks,
     status,
     ...(r ? {} : { unreadable: UNREADABLE_RESULT }),

@@ -13,6 +13,7 @@ import { TestProgramService } from './test-program.service.js';
 import { TravelTrialsService } from './travel-trials.service.js';
 import { create as contentDisposition } from 'content-disposition';
 import { ApiProduces } from '@nestjs/swagger';
+import { ConflictsWhen, UnprocessableWhen } from '../openapi/error-responses.js';
 
 /** Travel trials, repeat-and-reverse runs and test programs of one axis. */
 @Controller('axes/:id')
@@ -38,6 +39,7 @@ export class AxisChecksController {
 
   @Post('travel-trials')
   @Roles(...CALIBRATORS)
+  @ConflictsWhen('approval-lock')
   createTrial(
     @CurrentUser() user: SessionUser,
     @Param('id', ParseUUIDPipe) axisId: string,
@@ -58,6 +60,10 @@ export class AxisChecksController {
   @Post('travel-trials/:trialId/apply')
   @Roles(...CALIBRATORS)
   @HttpCode(200)
+  @ConflictsWhen('approval-lock', 'state')
+  @UnprocessableWhen(
+    "The corrected steps per mm is far from the drive's theoretical value and `confirmFarCorrection` was not sent as true.",
+  )
   apply(
     @CurrentUser() user: SessionUser,
     @Param('id', ParseUUIDPipe) axisId: string,
@@ -70,6 +76,7 @@ export class AxisChecksController {
   @Delete('travel-trials/:trialId')
   @Roles(...CALIBRATORS)
   @HttpCode(204)
+  @ConflictsWhen('approval-lock')
   deleteTrial(
     @CurrentUser() user: SessionUser,
     @Param('id', ParseUUIDPipe) axisId: string,
@@ -93,6 +100,7 @@ export class AxisChecksController {
 
   @Post('positioning-runs')
   @Roles(...CALIBRATORS)
+  @ConflictsWhen('approval-lock')
   createRun(
     @CurrentUser() user: SessionUser,
     @Param('id', ParseUUIDPipe) axisId: string,
@@ -113,6 +121,7 @@ export class AxisChecksController {
   @Delete('positioning-runs/:runId')
   @Roles(...CALIBRATORS)
   @HttpCode(204)
+  @ConflictsWhen('approval-lock')
   deleteRun(
     @CurrentUser() user: SessionUser,
     @Param('id', ParseUUIDPipe) axisId: string,

@@ -28,7 +28,7 @@ export interface AxisResponse {
   driveSummary: string;
   /** Full steps per motor revolution. */
   motorStepsPerRev: number;
-  /** Microsteps per full step set on the driver. */
+  /** Microsteps per full step set on the driver (a count). */
   microsteps: number;
   /** Motor turns per turn of the screw or pinion (no unit). */
   gearRatio: number;

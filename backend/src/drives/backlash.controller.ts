@@ -7,6 +7,7 @@ import { PageQuery } from '../records/page.query.js';
 import { BacklashService } from './backlash.service.js';
 import { CALIBRATORS } from './drive-roles.js';
 import { CreateBacklashCheckDto } from './dto/backlash.dto.js';
+import { ConflictsWhen } from '../openapi/error-responses.js';
 
 /** Backlash checks of one axis. */
 @Controller('axes/:id/backlash-checks')
@@ -28,6 +29,7 @@ export class BacklashController {
 
   @Post()
   @Roles(...CALIBRATORS)
+  @ConflictsWhen('approval-lock')
   create(
     @CurrentUser() user: SessionUser,
     @Param('id', ParseUUIDPipe) axisId: string,
@@ -48,6 +50,7 @@ export class BacklashController {
   @Delete(':checkId')
   @Roles(...CALIBRATORS)
   @HttpCode(204)
+  @ConflictsWhen('approval-lock')
   delete(
     @CurrentUser() user: SessionUser,
     @Param('id', ParseUUIDPipe) axisId: string,

@@ -55,6 +55,7 @@ export function toBacklashResponse(row: BacklashCheckRow, target: Target, locked
     lengthUnit: lu,
     readingUnit: ru,
     positions: row.positions,
+    /** Smallest step the indicator shows, in the record's `readingUnit`. */
     resolution: row.resolution,
     definition: BACKLASH_DEFINITION,
     result: r
@@ -62,19 +63,28 @@ export function toBacklashResponse(row: BacklashCheckRow, target: Target, locked
           /** The largest, in readingUnit and in mm. */
           backlash: fromMm(r.backlashMm, ru),
           backlashMm: r.backlashMm,
+          /** Where the largest was read, in the record's `lengthUnit`. */
           worstPosition: fromMm(r.worstPositionMm, lu),
           worstPositionMm: r.worstPositionMm,
+          /** Mean over the positions, in the record's `readingUnit`. */
           meanBacklash: fromMm(r.meanBacklashMm, ru),
           meanBacklashMm: r.meanBacklashMm,
           positions: r.positions.map((p) => ({
+            /** Where the axis was brought, in the record's `lengthUnit`. */
             position: fromMm(p.positionMm, lu),
             positionMm: p.positionMm,
+            /** Mean of the readings approached moving +, in the record's `readingUnit`. */
             meanUp: fromMm(p.meanUpMm, ru),
+            /** Mean of the readings approached moving −, in the record's `readingUnit`. */
             meanDown: fromMm(p.meanDownMm, ru),
+            /** Signed mean up − mean down, in the record's `readingUnit`. */
             reversal: fromMm(p.reversalMm, ru),
+            /** Size of the reversal, in the record's `readingUnit`. */
             backlash: fromMm(p.backlashMm, ru),
             backlashMm: p.backlashMm,
+            /** Count of readings approached moving +. */
             approachesUp: p.approachesUp,
+            /** Count of readings approached moving −. */
             approachesDown: p.approachesDown,
           })),
         }

@@ -17,6 +17,7 @@ export interface PositioningFigures {
 /** Each of the three figures (mm) against its target; the run passes only when all three do. */
 export function positioningVerdicts(r: PositioningFigures, targets: DriveTargets) {
   const one = (value: number, key: 'positioningAccuracy' | 'repeatability' | 'reversal') => ({
+    /** The figure, mm. */
     value,
     target: targets[key].target,
     targetMm: targets[key].base,

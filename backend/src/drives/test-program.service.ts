@@ -25,10 +25,13 @@ export const DEFAULT_TEST_FEED_MM_PER_MIN = 1000;
 export interface TestTargets {
   /** The unit the axis is set up in (and `targets` and `overrun` are given in). */
   lengthUnit: LengthUnit;
+  /** Target positions, in `lengthUnit`. */
   targets: number[];
   targetsMm: number[];
+  /** Clear travel kept beyond the first and last target, in `lengthUnit`. */
   overrun: number;
   overrunMm: number;
+  /** Count of runs in each direction. */
   runs: number;
   /** Why the list is empty (no measured travel), otherwise null. */
   reason: string | null;

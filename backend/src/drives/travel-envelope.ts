@@ -9,7 +9,12 @@ export interface TravelEnvelopeResponse {
   machineId: string;
   status: 'within-target' | 'outside-target' | 'not-started';
   /** The machine's work area along X and Y, in mm. */
-  workArea: { x: number; y: number };
+  workArea: {
+    /** Along X, mm. */
+    x: number;
+    /** Along Y, mm. */
+    y: number;
+  };
   /** The target set's travel margin, as stored with its unit. */
   margin: TargetValue;
   marginMm: number;
@@ -21,9 +26,13 @@ export interface TravelEnvelopeResponse {
     axisId: string;
     axis: string;
     letter: 'X' | 'Y';
+    /** Measured travel of the axis, mm (null until measured). */
     measuredTravel: number | null;
+    /** Work size along the axis, mm. */
     workSize: number;
+    /** Work size plus the margin at each end, mm. */
     requiredTravel: number;
+    /** Measured travel minus required travel, mm (negative when short). */
     spare: number | null;
     covers: boolean | null;
   }[];

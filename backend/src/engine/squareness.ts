@@ -24,7 +24,7 @@ export interface SquarenessResult {
   outOfSquareArcsec: number;
   /** Lateral error per metre of travel: tan γ × 1000. */
   mmPerMetre: number;
-  /** Which diagonal is longer (1 when they are equal, with a zero angle). */
+  /** Which diagonal is longer: 1 or 2, its number (no unit; 1 when they are equal, with a zero angle). */
   longDiagonal: 1 | 2;
   diagonalDifferenceMm: number;
   /** How far to move one side of the gantry, over the gantry span, to make it square: span × tan γ. */

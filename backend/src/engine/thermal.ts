@@ -38,12 +38,16 @@ export interface ThermalInput {
 export interface ThermalReference {
   /** True when both temperatures are known and the correction is applied. */
   applied: boolean;
+  /** Temperature of the machine while measuring, °C. */
   machineTemperatureC: number | null;
+  /** Temperature of the scale while measuring, °C. */
   scaleTemperatureC: number | null;
   scaleMaterial: ScaleMaterial;
+  /** Expansion coefficient of the scale, µm per metre per kelvin (µm/(m·K)). */
   scaleAlphaUmPerMK: number;
+  /** Expansion coefficient of the machine, µm per metre per kelvin (µm/(m·K)). */
   machineAlphaUmPerMK: number;
-  /** Add factor · L to a length L read on the scale to get the machine's length at 20 °C. */
+  /** Add factor · L to a length L read on the scale to get the machine's length at 20 °C (a ratio, no unit). */
   factor: number;
   source: string;
 }

@@ -7,6 +7,7 @@ import { EvidenceUploadService } from './evidence-upload.service.js';
 import { EvidenceService, type Download } from './evidence.service.js';
 import { ApiBody, ApiConsumes, ApiExtraModels, ApiProduces, getSchemaPath } from '@nestjs/swagger';
 import { UploadFieldsDto } from './dto/upload-fields.dto.js';
+import { ConflictsWhen } from '../openapi/error-responses.js';
 
 @Controller('evidence')
 export class EvidenceController {
@@ -75,6 +76,7 @@ export class EvidenceController {
   @Delete(':id')
   @Roles(...RECORDERS)
   @HttpCode(204)
+  @ConflictsWhen('approval-lock')
   remove(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string) {
     return this.evidence.remove(user, id);
   }

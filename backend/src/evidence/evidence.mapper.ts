@@ -9,7 +9,7 @@ export interface EvidenceResponse {
   fileName: string;
   caption: string;
   contentType: string;
-  /** Bytes. */
+  /** Size of the file, in bytes. */
   size: number;
   sha256: string;
   widthPx: number | null;

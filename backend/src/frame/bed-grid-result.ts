@@ -3,9 +3,11 @@ import { minimumZonePlane } from '../engine/flatness-zone.js';
 import type { BedGridPointMm } from '../database/schema/frame.js';
 
 export interface BedGridPointResult {
+  /** The point's place in the request's list, index from 0. */
   index: number;
-  /** 1-based row (by position along Y, Y0 first) and column (by position along X, X0 first). */
+  /** Row by position along Y, Y0 first: index from 1. */
   row: number;
+  /** Column by position along X, X0 first: index from 1. */
   column: number;
   xMm: number;
   yMm: number;
@@ -42,14 +44,24 @@ export interface BedGridResult {
   leastSquares: {
     /** Slopes of the plane z = a·x + b·y + c (mm per mm) and its height at X0 Y0 (mm). */
     a: number;
+    /** Slope of the plane along Y, mm per mm (a ratio of lengths). */
     b: number;
+    /** Height of the plane at X0 Y0, mm. */
     c: number;
     /** Max − min residual about the plane, mm. */
     flatness: number;
     flatnessMm: number;
   };
   /** The ISO 1101 zone: middle plane z = a·x + b·y + c and the zone's width along the height axis. */
-  minimumZone: { a: number; b: number; c: number; flatnessMm: number };
+  minimumZone: {
+    /** Slope of the middle plane along X, mm per mm (a ratio of lengths). */
+    a: number;
+    /** Slope of the middle plane along Y, mm per mm (a ratio of lengths). */
+    b: number;
+    /** Height of the middle plane at X0 Y0, mm. */
+    c: number;
+    flatnessMm: number;
+  };
   /** Highest minus lowest height as read, tilt left in. */
   heightRange: { rangeMm: number };
   /** The value this machine's bed is judged on (see BedJudgedBasis). */
@@ -60,7 +72,9 @@ export interface BedGridResult {
   lowest: BedGridPointResult;
   /** The points furthest from the middle of the judged zone, largest first (up to five). */
   worstPoints: BedGridPointResult[];
+  /** Count of rows (distinct positions along Y). */
   rows: number;
+  /** Count of columns (distinct positions along X). */
   columns: number;
 }
 

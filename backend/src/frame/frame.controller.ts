@@ -8,6 +8,7 @@ import { CreateBedGridDto } from './dto/create-bed-grid.dto.js';
 import { CreateDiagonalCheckDto } from './dto/create-diagonal-check.dto.js';
 import { CreateTestCutDto } from './dto/create-test-cut.dto.js';
 import { TestCutsService } from './test-cuts.service.js';
+import { ConflictsWhen } from '../openapi/error-responses.js';
 
 // Builders square and level the frame as they build it; the test cut is a technician's job.
 const FRAME_RECORDERS: Role[] = ['admin', 'owner', 'technician', 'builder'];
@@ -23,6 +24,7 @@ export class FrameController {
 
   @Post('diagonal-checks')
   @Roles(...FRAME_RECORDERS)
+  @ConflictsWhen('approval-lock')
   createDiagonalCheck(
     @CurrentUser() user: SessionUser,
     @Param('id', ParseUUIDPipe) id: string,
@@ -38,6 +40,7 @@ export class FrameController {
 
   @Post('bed-grids')
   @Roles(...FRAME_RECORDERS)
+  @ConflictsWhen('approval-lock')
   createBedGrid(
     @CurrentUser() user: SessionUser,
     @Param('id', ParseUUIDPipe) id: string,
@@ -53,6 +56,7 @@ export class FrameController {
 
   @Post('test-cuts')
   @Roles(...CUT_RECORDERS)
+  @ConflictsWhen('approval-lock')
   createTestCut(
     @CurrentUser() user: SessionUser,
     @Param('id', ParseUUIDPipe) id: string,
@@ -69,6 +73,7 @@ export class FrameController {
   @Delete('diagonal-checks/:recordId')
   @HttpCode(204)
   @Roles(...FRAME_RECORDERS)
+  @ConflictsWhen('approval-lock')
   deleteDiagonalCheck(
     @CurrentUser() user: SessionUser,
     @Param('id', ParseUUIDPipe) id: string,
@@ -80,6 +85,7 @@ export class FrameController {
   @Delete('bed-grids/:recordId')
   @HttpCode(204)
   @Roles(...FRAME_RECORDERS)
+  @ConflictsWhen('approval-lock')
   deleteBedGrid(
     @CurrentUser() user: SessionUser,
     @Param('id', ParseUUIDPipe) id: string,
@@ -91,6 +97,7 @@ export class FrameController {
   @Delete('test-cuts/:recordId')
   @HttpCode(204)
   @Roles(...CUT_RECORDERS)
+  @ConflictsWhen('approval-lock')
   deleteTestCut(
     @CurrentUser() user: SessionUser,
     @Param('id', ParseUUIDPipe) id: string,

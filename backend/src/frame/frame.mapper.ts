@@ -72,20 +72,31 @@ export function toDiagonalCheckResponse(
   const u = row.lengthUnit;
   return {
     ...common(row, status, target, locked, warnings),
+    /** Smallest step of the tape or rule, in the record's `lengthUnit`. */
     resolution: row.resolutionMm == null ? null : inUnit(row.resolutionMm, u),
     // As entered (in `lengthUnit`) and in mm.
     input: {
+      /** Side along X, in the record's `lengthUnit`. */
       sideX: inUnit(row.sideXMm, u),
+      /** Side along Y, in the record's `lengthUnit`. */
       sideY: inUnit(row.sideYMm, u),
+      /** Diagonal from the X0 Y0 corner, in the record's `lengthUnit`. */
       diagonal1: inUnit(row.diagonal1Mm, u),
+      /** The other diagonal, in the record's `lengthUnit`. */
       diagonal2: inUnit(row.diagonal2Mm, u),
+      /** Distance between the gantry's two bearing rails, in the record's `lengthUnit`. */
       gantrySpan: row.gantrySpanMm == null ? null : inUnit(row.gantrySpanMm, u),
     },
     inputMm: {
+      /** Side along X, mm. */
       sideX: finiteOrNull(row.sideXMm),
+      /** Side along Y, mm. */
       sideY: finiteOrNull(row.sideYMm),
+      /** Diagonal from the X0 Y0 corner, mm. */
       diagonal1: finiteOrNull(row.diagonal1Mm),
+      /** The other diagonal, mm. */
       diagonal2: finiteOrNull(row.diagonal2Mm),
+      /** Distance between the gantry's two bearing rails, mm. */
       gantrySpan: finiteOrNull(row.gantrySpanMm),
     },
     result,
@@ -105,13 +116,19 @@ export function toBedGridResponse(
     ...common(row, status, target, locked, warnings),
     /** Unit the heights (and the gauge's resolution) were read in and are given back in. */
     readingUnit: row.readingUnit,
+    /** Smallest step of the height gauge, in the record's `readingUnit`. */
     resolution: row.resolutionMm == null ? null : inUnit(row.resolutionMm, row.readingUnit),
+    /** Count of rows of the grid (along Y). */
     rows: row.rows ?? result?.rows ?? null,
+    /** Count of columns of the grid (along X). */
     columns: row.columns ?? result?.columns ?? null,
     // Positions as entered (in `lengthUnit`), heights as entered (in `readingUnit`); the result is in mm.
     points: (Array.isArray(row.points) ? row.points : []).map((p) => ({
+      /** Position along X, in the record's `lengthUnit`. */
       x: inUnit(field(p, 'xMm'), row.lengthUnit),
+      /** Position along Y, in the record's `lengthUnit`. */
       y: inUnit(field(p, 'yMm'), row.lengthUnit),
+      /** Height read, in the record's `readingUnit`. */
       z: inUnit(field(p, 'zMm'), row.readingUnit),
     })),
     result,
@@ -134,21 +151,33 @@ export function toTestCutResponse(
   return {
     ...common(row, status, target.part, locked, warnings),
     targets: target,
+    /** Thickness of the plate cut, in the record's `lengthUnit`. */
     plateThickness: row.plateThicknessMm == null ? null : inUnit(row.plateThicknessMm, u),
     plateThicknessMm: finiteOrNull(row.plateThicknessMm),
+    /** Smallest step of the caliper or rule the sizes were read with, in the record's `lengthUnit`. */
     resolution: row.resolutionMm == null ? null : inUnit(row.resolutionMm, u),
     nominal: {
+      /** Commanded size of the square along X, in the record's `lengthUnit`. */
       x: inUnit(field(nominal, 'xMm'), u),
+      /** Commanded size of the square along Y, in the record's `lengthUnit`. */
       y: inUnit(field(nominal, 'yMm'), u),
+      /** Commanded diameter of the circle, in the record's `lengthUnit`. */
       circle: inUnit(field(nominal, 'circleMm'), u),
     },
     measured: {
+      /** Measured size of the square along X, in the record's `lengthUnit`. */
       x: inUnit(field(measured, 'xMm'), u),
+      /** Measured size of the square along Y, in the record's `lengthUnit`. */
       y: inUnit(field(measured, 'yMm'), u),
+      /** Measured diagonal from the X0 Y0 corner, in the record's `lengthUnit`. */
       diagonal1: inUnit(field(measured, 'diagonal1Mm'), u),
+      /** Measured other diagonal, in the record's `lengthUnit`. */
       diagonal2: inUnit(field(measured, 'diagonal2Mm'), u),
+      /** Measured diameter of the circle along X, in the record's `lengthUnit`. */
       circleX: inUnit(field(measured, 'circleXMm'), u),
+      /** Measured diameter of the circle along Y, in the record's `lengthUnit`. */
       circleY: inUnit(field(measured, 'circleYMm'), u),
+      /** Width of cut the controller did not compensate for, in the record's `lengthUnit`. */
       kerf: inUnit(field(s, 'kerfMm'), u),
     },
     circleKind: (field(s, 'circleKind') ?? null) as TestCutRow['sizes']['circleKind'] | null,

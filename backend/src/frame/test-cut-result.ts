@@ -66,7 +66,7 @@ export interface AxisReading {
   afterKerfMm: number;
   errorMm: number;
   errorPercent: number;
-  /** Multiply the axis's steps per mm by this: commanded ÷ measured. */
+  /** Multiply the axis's steps per mm by this: commanded ÷ measured (a ratio). */
   correctionFactor: number;
   suggestedStepsPerMm: number | null;
 }
@@ -86,7 +86,9 @@ export interface PartSizeCheck {
 }
 
 export interface TestCutResult {
+  /** Scale error of axis X, % (the test cut's errorPercent along X). */
   scaleErrorX: number;
+  /** Scale error of axis Y, % (the test cut's errorPercent along Y). */
   scaleErrorY: number;
   x: AxisReading;
   y: AxisReading;
@@ -94,6 +96,7 @@ export interface TestCutResult {
   squareness: {
     outOfSquareDeg: number;
     mmPerMetre: number;
+    /** Which diagonal is the longer: 1 or 2, its number in the request (no unit). */
     longDiagonal: 1 | 2;
     diagonalDifferenceMm: number;
     warnings: string[];

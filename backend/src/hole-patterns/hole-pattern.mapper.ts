@@ -24,7 +24,16 @@ export interface HolePatternResponse {
   height: number;
   entry: PatternEntryKind;
   /** The entry as typed, in lengthUnit (positions, pitches and diameters; counts are counts): one of these is set, matching `entry`. */
-  holesEntered: { x: number; y: number; diameter: number }[] | null;
+  holesEntered:
+    | {
+        /** Hole centre from the outline's left edge, in `lengthUnit`. */
+        x: number;
+        /** Hole centre from the outline's lower edge, in `lengthUnit`. */
+        y: number;
+        /** Hole diameter, in `lengthUnit`. */
+        diameter: number;
+      }[]
+    | null;
   /** A grid entry as typed: origin, pitches and diameter in lengthUnit. */
   grid: Omit<Extract<StoredPatternEntry, { kind: 'grid' }>, 'kind'> | null;
   /** A bolt-circle entry as typed: centre and diameters in lengthUnit. */

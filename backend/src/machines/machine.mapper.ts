@@ -14,11 +14,21 @@ export interface MachineResponse {
   kind: MachineRow['kind'];
   state: MachineRow['state'];
   /** Usable cutting area along X and Y, in mm. */
-  workArea: { x: number; y: number };
+  workArea: {
+    /** Along X, mm. */
+    x: number;
+    /** Along Y, mm. */
+    y: number;
+  };
   /** The unit the work area was typed in and is shown in. */
   lengthUnit: LengthUnit;
   /** The work area along X and Y, in lengthUnit. */
-  workAreaInLengthUnit: { x: number; y: number };
+  workAreaInLengthUnit: {
+    /** Along X, in `lengthUnit`. */
+    x: number;
+    /** Along Y, in `lengthUnit`. */
+    y: number;
+  };
   notes: string;
   targetSet: { id: string; name: string };
   lastActivityAt: string;
@@ -29,10 +39,15 @@ export interface MachineResponse {
 export interface MachineListItem extends MachineResponse {
   /** Numbers of required checks, counted as the readiness board counts (waivers applied); `blocking` names the first check that stops approval. */
   checks: {
+    /** Count of required checks. */
     total: number;
+    /** Count of checks within their targets. */
     within: number;
+    /** Count of checks outside their targets. */
     outside: number;
+    /** Count of checks waived. */
     waived: number;
+    /** Count of checks not yet recorded. */
     notStarted: number;
     blocking: BlockingCheckRef | null;
   };

@@ -5,6 +5,7 @@ import { CreateMachineDto } from './dto/create-machine.dto.js';
 import { UpdateMachineDto } from './dto/update-machine.dto.js';
 import { MachinesService } from './machines.service.js';
 import { HistoryQueryDto } from '../history/dto/history-query.dto.js';
+import { ConflictsWhen } from '../openapi/error-responses.js';
 
 @Controller('machines')
 export class MachinesController {
@@ -28,6 +29,7 @@ export class MachinesController {
 
   @Patch(':id')
   @Roles(...RECORDERS)
+  @ConflictsWhen('approval-lock')
   update(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string, @Body() dto: UpdateMachineDto) {
     return this.machines.update(user, id, dto);
   }

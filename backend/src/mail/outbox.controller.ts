@@ -5,7 +5,7 @@ import type { SessionUser } from '../auth/session-user.js';
 import { MailService, WORKSHOP_HEADER } from './mail.service.js';
 import { toOutboxMessage } from './outbox.mapper.js';
 import { create as contentDisposition } from 'content-disposition';
-import { ApiProduces } from '@nestjs/swagger';
+import { ApiParam, ApiProduces } from '@nestjs/swagger';
 
 /** The development outbox: what the fake SMTP server caught for this workshop. Admins only. */
 @Controller('dev/outbox')
@@ -21,6 +21,11 @@ export class OutboxController {
 
   @Get(':id/attachments/:index')
   @ApiProduces('application/octet-stream')
+  @ApiParam({
+    name: 'index',
+    type: 'integer',
+    description: 'The attachment, index from 0 (its `attachments[].index`).',
+  })
   attachment(
     @CurrentUser() user: SessionUser,
     @Param('id', ParseUUIDPipe) id: string,

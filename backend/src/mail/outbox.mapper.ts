@@ -9,7 +9,13 @@ export interface OutboxMessage {
   text: string;
   /** The message held a set-your-password link, which only its recipient may see. */
   linkHidden: boolean;
-  attachments: { index: number; filename: string; contentType: string; sizeBytes: number }[];
+  attachments: {
+    /** The attachment's place in the message, index from 0. */
+    index: number;
+    filename: string;
+    contentType: string;
+    sizeBytes: number;
+  }[];
 }
 
 // A set-your-password link, wherever it sits in the text (any host, any token).

@@ -13,7 +13,14 @@ import {
   type SchemaObject,
 } from '@nestjs/swagger';
 import { IS_PUBLIC, ROLES_KEY } from '../auth/decorators.js';
-import { ERROR_SCHEMAS, errorResponses, type RouteFacts } from './error-responses.js';
+import {
+  CONFLICTS_KEY,
+  ERROR_SCHEMAS,
+  errorResponses,
+  UNPROCESSABLE_KEY,
+  type ConflictCause,
+  type RouteFacts,
+} from './error-responses.js';
 import pluginMetadata from './plugin-metadata.js';
 import { RESPONSE_SCHEMAS } from './response-schemas.js';
 import { describeNamedUnits } from './units.js';
@@ -134,7 +141,8 @@ function addSchemas(document: OpenAPIObject, schemas: Record<string, SchemaObjec
 
 /**
  * Per handler: who may call it (the metadata the session guard reads), what it produces
- * (@ApiProduces) and which path parameters must be uuids (ParseUUIDPipe).
+ * (@ApiProduces), which path parameters must be uuids (ParseUUIDPipe) and why it can answer 409
+ * (@ConflictsWhen) or 422 (@UnprocessableWhen).
  */
 function routeFacts(app: INestApplication): Map<string, RouteFacts> {
   const container = (app as unknown as { container: NestContainer }).container;
@@ -152,6 +160,8 @@ function routeFacts(app: INestApplication): Map<string, RouteFacts> {
         const roles = (Reflect.getMetadata(ROLES_KEY, handler) ?? Reflect.getMetadata(ROLES_KEY, controller)) as
           string[] | undefined;
         const produces = (Reflect.getMetadata(DECORATORS.API_PRODUCES, handler) as string[] | undefined) ?? null;
+        const conflicts = (Reflect.getMetadata(CONFLICTS_KEY, handler) as ConflictCause[] | undefined) ?? [];
+        const unprocessable = (Reflect.getMetadata(UNPROCESSABLE_KEY, handler) as string[] | undefined) ?? [];
         const args = (Reflect.getMetadata(ROUTE_ARGS_METADATA, controller, name) ?? {}) as Record<
           string,
           { data?: unknown; pipes?: unknown[] }
@@ -164,7 +174,14 @@ function routeFacts(app: INestApplication): Map<string, RouteFacts> {
               arg.pipes?.some((p) => p === ParseUUIDPipe || p instanceof ParseUUIDPipe),
           )
           .map(([, arg]) => arg.data as string);
-        facts.set(`${controller.name}.${name}`, { isPublic, roles: roles ?? null, produces, uuidParameters });
+        facts.set(`${controller.name}.${name}`, {
+          isPublic,
+          roles: roles ?? null,
+          produces,
+          uuidParameters,
+          conflicts,
+          unprocessable,
+        });
       }
     }
   }

@@ -215,16 +215,20 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
               "type": "array",
               "items": {
                 "type": "number"
-              }
+              },
+              "description": "Each station's deviation from the reference line, mm."
             },
             "slope": {
-              "type": "number"
+              "type": "number",
+              "description": "Rise of the reference line per unit of position, mm/mm (a ratio of lengths)."
             },
             "intercept": {
-              "type": "number"
+              "type": "number",
+              "description": "Height of the reference line at position 0, mm."
             },
             "straightness": {
-              "type": "number"
+              "type": "number",
+              "description": "Straightness about this reference line, mm."
             }
           },
           "required": [
@@ -240,16 +244,20 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
               "type": "array",
               "items": {
                 "type": "number"
-              }
+              },
+              "description": "Each station's deviation from the reference line, mm."
             },
             "slope": {
-              "type": "number"
+              "type": "number",
+              "description": "Rise of the reference line per unit of position, mm/mm (a ratio of lengths)."
             },
             "intercept": {
-              "type": "number"
+              "type": "number",
+              "description": "Height of the reference line at position 0, mm."
             },
             "straightness": {
-              "type": "number"
+              "type": "number",
+              "description": "Straightness about this reference line, mm."
             }
           },
           "required": [
@@ -265,16 +273,20 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
               "type": "array",
               "items": {
                 "type": "number"
-              }
+              },
+              "description": "Each station's deviation from the reference line, mm."
             },
             "slope": {
-              "type": "number"
+              "type": "number",
+              "description": "Rise of the reference line per unit of position, mm/mm (a ratio of lengths)."
             },
             "intercept": {
-              "type": "number"
+              "type": "number",
+              "description": "Height of the reference line at position 0, mm."
             },
             "straightness": {
-              "type": "number"
+              "type": "number",
+              "description": "Straightness about this reference line, mm."
             }
           },
           "required": [
@@ -329,16 +341,19 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
           }
         },
         "parallelism": {
-          "type": "number"
+          "type": "number",
+          "description": "Parallelism of the two rails, mm."
         },
         "meanOffset": {
-          "type": "number"
+          "type": "number",
+          "description": "Mean of the differences between the rails, mm."
         },
         "differences": {
           "type": "array",
           "items": {
             "type": "number"
-          }
+          },
+          "description": "Difference between the rails at each position, mm."
         },
         "lengthUnit": {
           "type": "string",
@@ -399,16 +414,20 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
           "enum": [
             1,
             2
-          ]
+          ],
+          "description": "Which diagonal is the longer: 1 or 2, its number in the request (no unit)."
         },
         "diagonalDifference": {
-          "type": "number"
+          "type": "number",
+          "description": "Longer diagonal minus the shorter, mm."
         },
         "correction": {
-          "type": "number"
+          "type": "number",
+          "description": "How far to move one side of the gantry over the span to square it, mm."
         },
         "span": {
-          "type": "number"
+          "type": "number",
+          "description": "The span the correction is worked out over, mm."
         },
         "lengthUnit": {
           "type": "string",
@@ -466,19 +485,24 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
               "type": "array",
               "items": {
                 "type": "number"
-              }
+              },
+              "description": "Each point's height above the plane, mm."
             },
             "a": {
-              "type": "number"
+              "type": "number",
+              "description": "Slope of the plane along x, mm/mm (a ratio of lengths)."
             },
             "b": {
-              "type": "number"
+              "type": "number",
+              "description": "Slope of the plane along y, mm/mm (a ratio of lengths)."
             },
             "c": {
-              "type": "number"
+              "type": "number",
+              "description": "Height of the plane at x = 0, y = 0, mm."
             },
             "flatness": {
-              "type": "number"
+              "type": "number",
+              "description": "Flatness about the least-squares plane, mm."
             }
           },
           "required": [
@@ -556,19 +580,23 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
           }
         },
         "travelPerRev": {
-          "type": "number"
+          "type": "number",
+          "description": "Travel per turn of the screw, pulley or pinion, mm."
         },
         "travelPerMotorRev": {
-          "type": "number"
+          "type": "number",
+          "description": "Travel per motor revolution (after the gearing), mm."
         },
         "stepsPerMm": {
           "type": "number"
         },
         "stepsPerIn": {
-          "type": "number"
+          "type": "number",
+          "description": "In steps per inch."
         },
         "resolution": {
-          "type": "number"
+          "type": "number",
+          "description": "Travel of one microstep, mm."
         },
         "lengthUnit": {
           "type": "string",
@@ -618,22 +646,26 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
           }
         },
         "scale": {
-          "type": "number"
+          "type": "number",
+          "description": "Measured distance over commanded distance (a ratio; 1 is exact)."
         },
         "offset": {
-          "type": "number"
+          "type": "number",
+          "description": "Offset of the fitted line at a commanded 0, mm."
         },
         "correctedStepsPerMm": {
           "type": "number"
         },
         "correctedStepsPerIn": {
-          "type": "number"
+          "type": "number",
+          "description": "In steps per inch."
         },
         "errorPercent": {
           "type": "number"
         },
         "residualMax": {
-          "type": "number"
+          "type": "number",
+          "description": "The largest distance of a move from the fitted line, mm."
         },
         "moves": {
           "type": "array",
@@ -641,16 +673,20 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
             "type": "object",
             "properties": {
               "commanded": {
-                "type": "number"
+                "type": "number",
+                "description": "Commanded move, mm."
               },
               "measured": {
-                "type": "number"
+                "type": "number",
+                "description": "Measured move, mm."
               },
               "error": {
-                "type": "number"
+                "type": "number",
+                "description": "Measured minus commanded, mm."
               },
               "residual": {
-                "type": "number"
+                "type": "number",
+                "description": "Distance from the fitted line, mm."
               }
             },
             "required": [
@@ -716,34 +752,44 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
             "type": "object",
             "properties": {
               "target": {
-                "type": "number"
+                "type": "number",
+                "description": "The target position, mm."
               },
               "meanUp": {
-                "type": "number"
+                "type": "number",
+                "description": "Mean positional deviation approached moving +, mm."
               },
               "meanDown": {
-                "type": "number"
+                "type": "number",
+                "description": "Mean positional deviation approached moving −, mm."
               },
               "mean": {
-                "type": "number"
+                "type": "number",
+                "description": "Mean of the two, mm."
               },
               "reversal": {
-                "type": "number"
+                "type": "number",
+                "description": "Reversal value at this target (mean up − mean down), mm."
               },
               "sUp": {
-                "type": "number"
+                "type": "number",
+                "description": "Sample standard deviation of the approaches moving +, mm."
               },
               "sDown": {
-                "type": "number"
+                "type": "number",
+                "description": "Sample standard deviation of the approaches moving −, mm."
               },
               "repeatabilityUp": {
-                "type": "number"
+                "type": "number",
+                "description": "Repeatability moving + (4 s), mm."
               },
               "repeatabilityDown": {
-                "type": "number"
+                "type": "number",
+                "description": "Repeatability moving − (4 s), mm."
               },
               "repeatability": {
-                "type": "number"
+                "type": "number",
+                "description": "Bidirectional repeatability at this target, mm."
               }
             },
             "required": [
@@ -761,46 +807,60 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
           }
         },
         "reversal": {
-          "type": "number"
+          "type": "number",
+          "description": "Reversal value of the axis (the largest size over the targets), mm."
         },
         "reversalMean": {
-          "type": "number"
+          "type": "number",
+          "description": "Mean of the signed reversal values over the targets, mm."
         },
         "repeatabilityUp": {
-          "type": "number"
+          "type": "number",
+          "description": "Repeatability moving +, mm."
         },
         "repeatabilityDown": {
-          "type": "number"
+          "type": "number",
+          "description": "Repeatability moving −, mm."
         },
         "repeatability": {
-          "type": "number"
+          "type": "number",
+          "description": "Bidirectional repeatability, mm."
         },
         "systematicUp": {
-          "type": "number"
+          "type": "number",
+          "description": "Range of the mean deviations moving +, mm."
         },
         "systematicDown": {
-          "type": "number"
+          "type": "number",
+          "description": "Range of the mean deviations moving −, mm."
         },
         "systematic": {
-          "type": "number"
+          "type": "number",
+          "description": "Range of the mean deviations in both directions, mm."
         },
         "meanRange": {
-          "type": "number"
+          "type": "number",
+          "description": "Range of the mean bidirectional deviations over the targets, mm."
         },
         "accuracyUp": {
-          "type": "number"
+          "type": "number",
+          "description": "Accuracy moving +, mm."
         },
         "accuracyDown": {
-          "type": "number"
+          "type": "number",
+          "description": "Accuracy moving −, mm."
         },
         "accuracy": {
-          "type": "number"
+          "type": "number",
+          "description": "Bidirectional accuracy, mm."
         },
         "runsUp": {
-          "type": "number"
+          "type": "number",
+          "description": "Count of runs approaching moving +."
         },
         "runsDown": {
-          "type": "number"
+          "type": "number",
+          "description": "Count of runs approaching moving −."
         },
         "lengthUnit": {
           "type": "string",
@@ -858,19 +918,24 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
           }
         },
         "rpm": {
-          "type": "number"
+          "type": "number",
+          "description": "Screw speed at the feed rate asked about, rpm."
         },
         "criticalSpeed": {
-          "type": "number"
+          "type": "number",
+          "description": "Critical (whirling) speed of the screw, rpm."
         },
         "permissibleSpeed": {
-          "type": "number"
+          "type": "number",
+          "description": "Permissible speed (the critical speed with its safety factor), rpm."
         },
         "dnLimitSpeed": {
-          "type": "number"
+          "type": "number",
+          "description": "Speed the nut's d·n limit allows, rpm."
         },
         "maxFeedRate": {
-          "type": "number"
+          "type": "number",
+          "description": "Fastest feed within both limits, mm/min."
         },
         "withinLimits": {
           "type": "boolean"
@@ -883,10 +948,12 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
           ]
         },
         "mountingFactor": {
-          "type": "number"
+          "type": "number",
+          "description": "Factor of the end mountings in the critical speed formula (no unit)."
         },
         "dnLimit": {
-          "type": "number"
+          "type": "number",
+          "description": "The nut's d·n limit used, mm·rpm (nominal diameter in mm times rpm)."
         },
         "source": {
           "type": "string"
@@ -949,10 +1016,12 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
             "type": "object",
             "properties": {
               "hole": {
-                "type": "number"
+                "type": "number",
+                "description": "The hole, index from 0 along the rail."
               },
               "position": {
-                "type": "number"
+                "type": "number",
+                "description": "Position of the hole along the rail, mm."
               }
             },
             "required": [
@@ -967,21 +1036,26 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
             "type": "object",
             "properties": {
               "step": {
-                "type": "number"
+                "type": "number",
+                "description": "The step's place in the guide, index from 1."
               },
               "hole": {
-                "type": "number"
+                "type": "number",
+                "description": "The hole to fix at this step, index from 0."
               },
               "position": {
-                "type": "number"
+                "type": "number",
+                "description": "Position of that hole along the rail, mm."
               },
               "target": {
                 "type": "number",
-                "nullable": true
+                "nullable": true,
+                "description": "Indicator reading to aim for when this hole is tightened, mm; null before any hole is fixed."
               },
               "reading": {
                 "type": "number",
-                "nullable": true
+                "nullable": true,
+                "description": "Reading recorded at this hole once fixed, mm; null until then."
               }
             },
             "required": [
@@ -995,7 +1069,8 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
         },
         "nextHole": {
           "type": "number",
-          "nullable": true
+          "nullable": true,
+          "description": "The next hole to fix, index from 0; null when every hole is fixed."
         },
         "lengthUnit": {
           "type": "string",
@@ -1051,16 +1126,20 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
                 "type": "string"
               },
               "measuredTravel": {
-                "type": "number"
+                "type": "number",
+                "description": "Travel measured on the axis, mm."
               },
               "workSize": {
-                "type": "number"
+                "type": "number",
+                "description": "Size of the work along the axis, mm."
               },
               "requiredTravel": {
-                "type": "number"
+                "type": "number",
+                "description": "Travel the work needs with its margins, mm."
               },
               "spare": {
-                "type": "number"
+                "type": "number",
+                "description": "Measured travel minus required travel (negative when short), mm."
               },
               "covers": {
                 "type": "boolean"
@@ -1077,7 +1156,8 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
           }
         },
         "marginPerSide": {
-          "type": "number"
+          "type": "number",
+          "description": "Margin kept beyond the work at each end, mm."
         },
         "coversAll": {
           "type": "boolean"
@@ -1131,10 +1211,12 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
           "type": "object",
           "properties": {
             "scale": {
-              "type": "number"
+              "type": "number",
+              "description": "Measured size over nominal size (a ratio; 1 is exact)."
             },
             "error": {
-              "type": "number"
+              "type": "number",
+              "description": "Measured size minus nominal, mm."
             },
             "errorPercent": {
               "type": "number"
@@ -1145,7 +1227,8 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
             },
             "correctedStepsPerIn": {
               "type": "number",
-              "nullable": true
+              "nullable": true,
+              "description": "In steps per inch."
             }
           },
           "required": [
@@ -1160,10 +1243,12 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
           "type": "object",
           "properties": {
             "scale": {
-              "type": "number"
+              "type": "number",
+              "description": "Measured size over nominal size (a ratio; 1 is exact)."
             },
             "error": {
-              "type": "number"
+              "type": "number",
+              "description": "Measured size minus nominal, mm."
             },
             "errorPercent": {
               "type": "number"
@@ -1174,7 +1259,8 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
             },
             "correctedStepsPerIn": {
               "type": "number",
-              "nullable": true
+              "nullable": true,
+              "description": "In steps per inch."
             }
           },
           "required": [
@@ -1208,16 +1294,20 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
               "enum": [
                 1,
                 2
-              ]
+              ],
+              "description": "Which diagonal is the longer: 1 or 2, its number in the request (no unit)."
             },
             "diagonalDifference": {
-              "type": "number"
+              "type": "number",
+              "description": "Longer diagonal minus the shorter, mm."
             },
             "correction": {
-              "type": "number"
+              "type": "number",
+              "description": "How far to move one side of the gantry over the span to square it, mm."
             },
             "span": {
-              "type": "number"
+              "type": "number",
+              "description": "The span the correction is worked out over, mm."
             }
           },
           "required": [
@@ -1236,13 +1326,16 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
           "type": "object",
           "properties": {
             "ovality": {
-              "type": "number"
+              "type": "number",
+              "description": "Circle's diameter along X minus along Y, mm."
             },
             "fromScale": {
-              "type": "number"
+              "type": "number",
+              "description": "The part of the ovality the two axes' scale errors explain, mm."
             },
             "unexplained": {
-              "type": "number"
+              "type": "number",
+              "description": "The rest of the ovality, mm."
             },
             "pointsTo": {
               "type": "string",
@@ -1255,7 +1348,8 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
             },
             "backlashEstimate": {
               "type": "number",
-              "nullable": true
+              "nullable": true,
+              "description": "Backlash the unexplained ovality suggests, mm."
             }
           },
           "required": [
@@ -1334,7 +1428,8 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
             "type": "object",
             "properties": {
               "profileSize": {
-                "type": "number"
+                "type": "number",
+                "description": "Rail profile size (the rail's width), mm."
               },
               "boltSize": {
                 "type": "string"
@@ -1584,26 +1679,31 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
                 },
                 "worst": {
                   "type": "number",
-                  "nullable": true
+                  "nullable": true,
+                  "description": "Largest height difference between the rails, mm."
                 },
                 "worstSigned": {
                   "type": "number",
-                  "nullable": true
+                  "nullable": true,
+                  "description": "The same with its sign, mm."
                 },
                 "at": {
                   "type": "number",
-                  "nullable": true
+                  "nullable": true,
+                  "description": "Where it was found along the rails, mm."
                 },
                 "differences": {
                   "type": "array",
                   "items": {
                     "type": "number"
                   },
-                  "nullable": true
+                  "nullable": true,
+                  "description": "Height difference at each compared position, mm."
                 },
                 "spacing": {
                   "type": "number",
-                  "nullable": true
+                  "nullable": true,
+                  "description": "Distance between the rails, mm."
                 },
                 "kUmPerMm": {
                   "type": "number",
@@ -1611,7 +1711,8 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
                 },
                 "permissible": {
                   "type": "number",
-                  "nullable": true
+                  "nullable": true,
+                  "description": "Permissible height difference (spacing × K), mm."
                 },
                 "targetText": {
                   "type": "string",
@@ -1776,26 +1877,31 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
                 },
                 "worst": {
                   "type": "number",
-                  "nullable": true
+                  "nullable": true,
+                  "description": "Largest height difference between the rails, mm."
                 },
                 "worstSigned": {
                   "type": "number",
-                  "nullable": true
+                  "nullable": true,
+                  "description": "The same with its sign, mm."
                 },
                 "at": {
                   "type": "number",
-                  "nullable": true
+                  "nullable": true,
+                  "description": "Where it was found along the rails, mm."
                 },
                 "differences": {
                   "type": "array",
                   "items": {
                     "type": "number"
                   },
-                  "nullable": true
+                  "nullable": true,
+                  "description": "Height difference at each compared position, mm."
                 },
                 "spacing": {
                   "type": "number",
-                  "nullable": true
+                  "nullable": true,
+                  "description": "Distance between the rails, mm."
                 },
                 "kUmPerMm": {
                   "type": "number",
@@ -1803,7 +1909,8 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
                 },
                 "permissible": {
                   "type": "number",
-                  "nullable": true
+                  "nullable": true,
+                  "description": "Permissible height difference (spacing × K), mm."
                 },
                 "targetText": {
                   "type": "string",
@@ -1870,22 +1977,26 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
               ]
             },
             "parallelism": {
-              "type": "number"
+              "type": "number",
+              "description": "Parallelism of the two rails, mm."
             },
             "meanOffset": {
-              "type": "number"
+              "type": "number",
+              "description": "Mean of the differences between the rails, mm."
             },
             "positions": {
               "type": "array",
               "items": {
                 "type": "number"
-              }
+              },
+              "description": "Positions along the rails the two sweeps are compared at, mm."
             },
             "differences": {
               "type": "array",
               "items": {
                 "type": "number"
-              }
+              },
+              "description": "Difference between the rails at each position, mm."
             },
             "parallelismWithin": {
               "type": "boolean",
@@ -2000,26 +2111,31 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
                 },
                 "worst": {
                   "type": "number",
-                  "nullable": true
+                  "nullable": true,
+                  "description": "Largest height difference between the rails, mm."
                 },
                 "worstSigned": {
                   "type": "number",
-                  "nullable": true
+                  "nullable": true,
+                  "description": "The same with its sign, mm."
                 },
                 "at": {
                   "type": "number",
-                  "nullable": true
+                  "nullable": true,
+                  "description": "Where it was found along the rails, mm."
                 },
                 "differences": {
                   "type": "array",
                   "items": {
                     "type": "number"
                   },
-                  "nullable": true
+                  "nullable": true,
+                  "description": "Height difference at each compared position, mm."
                 },
                 "spacing": {
                   "type": "number",
-                  "nullable": true
+                  "nullable": true,
+                  "description": "Distance between the rails, mm."
                 },
                 "kUmPerMm": {
                   "type": "number",
@@ -2027,7 +2143,8 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
                 },
                 "permissible": {
                   "type": "number",
-                  "nullable": true
+                  "nullable": true,
+                  "description": "Permissible height difference (spacing × K), mm."
                 },
                 "targetText": {
                   "type": "string",
@@ -2208,26 +2325,31 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
                 },
                 "worst": {
                   "type": "number",
-                  "nullable": true
+                  "nullable": true,
+                  "description": "Largest height difference between the rails, mm."
                 },
                 "worstSigned": {
                   "type": "number",
-                  "nullable": true
+                  "nullable": true,
+                  "description": "The same with its sign, mm."
                 },
                 "at": {
                   "type": "number",
-                  "nullable": true
+                  "nullable": true,
+                  "description": "Where it was found along the rails, mm."
                 },
                 "differences": {
                   "type": "array",
                   "items": {
                     "type": "number"
                   },
-                  "nullable": true
+                  "nullable": true,
+                  "description": "Height difference at each compared position, mm."
                 },
                 "spacing": {
                   "type": "number",
-                  "nullable": true
+                  "nullable": true,
+                  "description": "Distance between the rails, mm."
                 },
                 "kUmPerMm": {
                   "type": "number",
@@ -2235,7 +2357,8 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
                 },
                 "permissible": {
                   "type": "number",
-                  "nullable": true
+                  "nullable": true,
+                  "description": "Permissible height difference (spacing × K), mm."
                 },
                 "targetText": {
                   "type": "string",
@@ -2347,30 +2470,36 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
             },
             "resolution": {
               "type": "number",
-              "nullable": true
+              "nullable": true,
+              "description": "Smallest step of the tape or rule, in the record's `lengthUnit`."
             },
             "input": {
               "type": "object",
               "properties": {
                 "sideX": {
                   "type": "number",
-                  "nullable": true
+                  "nullable": true,
+                  "description": "Side along X, in the record's `lengthUnit`."
                 },
                 "sideY": {
                   "type": "number",
-                  "nullable": true
+                  "nullable": true,
+                  "description": "Side along Y, in the record's `lengthUnit`."
                 },
                 "diagonal1": {
                   "type": "number",
-                  "nullable": true
+                  "nullable": true,
+                  "description": "Diagonal from the X0 Y0 corner, in the record's `lengthUnit`."
                 },
                 "diagonal2": {
                   "type": "number",
-                  "nullable": true
+                  "nullable": true,
+                  "description": "The other diagonal, in the record's `lengthUnit`."
                 },
                 "gantrySpan": {
                   "type": "number",
-                  "nullable": true
+                  "nullable": true,
+                  "description": "Distance between the gantry's two bearing rails, in the record's `lengthUnit`."
                 }
               },
               "required": [
@@ -2386,23 +2515,28 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
               "properties": {
                 "sideX": {
                   "type": "number",
-                  "nullable": true
+                  "nullable": true,
+                  "description": "Side along X, mm."
                 },
                 "sideY": {
                   "type": "number",
-                  "nullable": true
+                  "nullable": true,
+                  "description": "Side along Y, mm."
                 },
                 "diagonal1": {
                   "type": "number",
-                  "nullable": true
+                  "nullable": true,
+                  "description": "Diagonal from the X0 Y0 corner, mm."
                 },
                 "diagonal2": {
                   "type": "number",
-                  "nullable": true
+                  "nullable": true,
+                  "description": "The other diagonal, mm."
                 },
                 "gantrySpan": {
                   "type": "number",
-                  "nullable": true
+                  "nullable": true,
+                  "description": "Distance between the gantry's two bearing rails, mm."
                 }
               },
               "required": [
@@ -2504,30 +2638,36 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
             "unreadable": {},
             "resolution": {
               "type": "number",
-              "nullable": true
+              "nullable": true,
+              "description": "Smallest step of the tape or rule, in the record's `lengthUnit`."
             },
             "input": {
               "type": "object",
               "properties": {
                 "sideX": {
                   "type": "number",
-                  "nullable": true
+                  "nullable": true,
+                  "description": "Side along X, in the record's `lengthUnit`."
                 },
                 "sideY": {
                   "type": "number",
-                  "nullable": true
+                  "nullable": true,
+                  "description": "Side along Y, in the record's `lengthUnit`."
                 },
                 "diagonal1": {
                   "type": "number",
-                  "nullable": true
+                  "nullable": true,
+                  "description": "Diagonal from the X0 Y0 corner, in the record's `lengthUnit`."
                 },
                 "diagonal2": {
                   "type": "number",
-                  "nullable": true
+                  "nullable": true,
+                  "description": "The other diagonal, in the record's `lengthUnit`."
                 },
                 "gantrySpan": {
                   "type": "number",
-                  "nullable": true
+                  "nullable": true,
+                  "description": "Distance between the gantry's two bearing rails, in the record's `lengthUnit`."
                 }
               },
               "required": [
@@ -2543,23 +2683,28 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
               "properties": {
                 "sideX": {
                   "type": "number",
-                  "nullable": true
+                  "nullable": true,
+                  "description": "Side along X, mm."
                 },
                 "sideY": {
                   "type": "number",
-                  "nullable": true
+                  "nullable": true,
+                  "description": "Side along Y, mm."
                 },
                 "diagonal1": {
                   "type": "number",
-                  "nullable": true
+                  "nullable": true,
+                  "description": "Diagonal from the X0 Y0 corner, mm."
                 },
                 "diagonal2": {
                   "type": "number",
-                  "nullable": true
+                  "nullable": true,
+                  "description": "The other diagonal, mm."
                 },
                 "gantrySpan": {
                   "type": "number",
-                  "nullable": true
+                  "nullable": true,
+                  "description": "Distance between the gantry's two bearing rails, mm."
                 }
               },
               "required": [
@@ -2668,30 +2813,36 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
               },
               "resolution": {
                 "type": "number",
-                "nullable": true
+                "nullable": true,
+                "description": "Smallest step of the tape or rule, in the record's `lengthUnit`."
               },
               "input": {
                 "type": "object",
                 "properties": {
                   "sideX": {
                     "type": "number",
-                    "nullable": true
+                    "nullable": true,
+                    "description": "Side along X, in the record's `lengthUnit`."
                   },
                   "sideY": {
                     "type": "number",
-                    "nullable": true
+                    "nullable": true,
+                    "description": "Side along Y, in the record's `lengthUnit`."
                   },
                   "diagonal1": {
                     "type": "number",
-                    "nullable": true
+                    "nullable": true,
+                    "description": "Diagonal from the X0 Y0 corner, in the record's `lengthUnit`."
                   },
                   "diagonal2": {
                     "type": "number",
-                    "nullable": true
+                    "nullable": true,
+                    "description": "The other diagonal, in the record's `lengthUnit`."
                   },
                   "gantrySpan": {
                     "type": "number",
-                    "nullable": true
+                    "nullable": true,
+                    "description": "Distance between the gantry's two bearing rails, in the record's `lengthUnit`."
                   }
                 },
                 "required": [
@@ -2707,23 +2858,28 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
                 "properties": {
                   "sideX": {
                     "type": "number",
-                    "nullable": true
+                    "nullable": true,
+                    "description": "Side along X, mm."
                   },
                   "sideY": {
                     "type": "number",
-                    "nullable": true
+                    "nullable": true,
+                    "description": "Side along Y, mm."
                   },
                   "diagonal1": {
                     "type": "number",
-                    "nullable": true
+                    "nullable": true,
+                    "description": "Diagonal from the X0 Y0 corner, mm."
                   },
                   "diagonal2": {
                     "type": "number",
-                    "nullable": true
+                    "nullable": true,
+                    "description": "The other diagonal, mm."
                   },
                   "gantrySpan": {
                     "type": "number",
-                    "nullable": true
+                    "nullable": true,
+                    "description": "Distance between the gantry's two bearing rails, mm."
                   }
                 },
                 "required": [
@@ -2825,30 +2981,36 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
               "unreadable": {},
               "resolution": {
                 "type": "number",
-                "nullable": true
+                "nullable": true,
+                "description": "Smallest step of the tape or rule, in the record's `lengthUnit`."
               },
               "input": {
                 "type": "object",
                 "properties": {
                   "sideX": {
                     "type": "number",
-                    "nullable": true
+                    "nullable": true,
+                    "description": "Side along X, in the record's `lengthUnit`."
                   },
                   "sideY": {
                     "type": "number",
-                    "nullable": true
+                    "nullable": true,
+                    "description": "Side along Y, in the record's `lengthUnit`."
                   },
                   "diagonal1": {
                     "type": "number",
-                    "nullable": true
+                    "nullable": true,
+                    "description": "Diagonal from the X0 Y0 corner, in the record's `lengthUnit`."
                   },
                   "diagonal2": {
                     "type": "number",
-                    "nullable": true
+                    "nullable": true,
+                    "description": "The other diagonal, in the record's `lengthUnit`."
                   },
                   "gantrySpan": {
                     "type": "number",
-                    "nullable": true
+                    "nullable": true,
+                    "description": "Distance between the gantry's two bearing rails, in the record's `lengthUnit`."
                   }
                 },
                 "required": [
@@ -2864,23 +3026,28 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
                 "properties": {
                   "sideX": {
                     "type": "number",
-                    "nullable": true
+                    "nullable": true,
+                    "description": "Side along X, mm."
                   },
                   "sideY": {
                     "type": "number",
-                    "nullable": true
+                    "nullable": true,
+                    "description": "Side along Y, mm."
                   },
                   "diagonal1": {
                     "type": "number",
-                    "nullable": true
+                    "nullable": true,
+                    "description": "Diagonal from the X0 Y0 corner, mm."
                   },
                   "diagonal2": {
                     "type": "number",
-                    "nullable": true
+                    "nullable": true,
+                    "description": "The other diagonal, mm."
                   },
                   "gantrySpan": {
                     "type": "number",
-                    "nullable": true
+                    "nullable": true,
+                    "description": "Distance between the gantry's two bearing rails, mm."
                   }
                 },
                 "required": [
@@ -2998,15 +3165,18 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
             },
             "resolution": {
               "type": "number",
-              "nullable": true
+              "nullable": true,
+              "description": "Smallest step of the height gauge, in the record's `readingUnit`."
             },
             "rows": {
               "type": "number",
-              "nullable": true
+              "nullable": true,
+              "description": "Count of rows of the grid (along Y)."
             },
             "columns": {
               "type": "number",
-              "nullable": true
+              "nullable": true,
+              "description": "Count of columns of the grid (along X)."
             },
             "points": {
               "type": "array",
@@ -3015,15 +3185,18 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
                 "properties": {
                   "x": {
                     "type": "number",
-                    "nullable": true
+                    "nullable": true,
+                    "description": "Position along X, in the record's `lengthUnit`."
                   },
                   "y": {
                     "type": "number",
-                    "nullable": true
+                    "nullable": true,
+                    "description": "Position along Y, in the record's `lengthUnit`."
                   },
                   "z": {
                     "type": "number",
-                    "nullable": true
+                    "nullable": true,
+                    "description": "Height read, in the record's `readingUnit`."
                   }
                 },
                 "required": [
@@ -3136,15 +3309,18 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
             },
             "resolution": {
               "type": "number",
-              "nullable": true
+              "nullable": true,
+              "description": "Smallest step of the height gauge, in the record's `readingUnit`."
             },
             "rows": {
               "type": "number",
-              "nullable": true
+              "nullable": true,
+              "description": "Count of rows of the grid (along Y)."
             },
             "columns": {
               "type": "number",
-              "nullable": true
+              "nullable": true,
+              "description": "Count of columns of the grid (along X)."
             },
             "points": {
               "type": "array",
@@ -3153,15 +3329,18 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
                 "properties": {
                   "x": {
                     "type": "number",
-                    "nullable": true
+                    "nullable": true,
+                    "description": "Position along X, in the record's `lengthUnit`."
                   },
                   "y": {
                     "type": "number",
-                    "nullable": true
+                    "nullable": true,
+                    "description": "Position along Y, in the record's `lengthUnit`."
                   },
                   "z": {
                     "type": "number",
-                    "nullable": true
+                    "nullable": true,
+                    "description": "Height read, in the record's `readingUnit`."
                   }
                 },
                 "required": [
@@ -3281,15 +3460,18 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
               },
               "resolution": {
                 "type": "number",
-                "nullable": true
+                "nullable": true,
+                "description": "Smallest step of the height gauge, in the record's `readingUnit`."
               },
               "rows": {
                 "type": "number",
-                "nullable": true
+                "nullable": true,
+                "description": "Count of rows of the grid (along Y)."
               },
               "columns": {
                 "type": "number",
-                "nullable": true
+                "nullable": true,
+                "description": "Count of columns of the grid (along X)."
               },
               "points": {
                 "type": "array",
@@ -3298,15 +3480,18 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
                   "properties": {
                     "x": {
                       "type": "number",
-                      "nullable": true
+                      "nullable": true,
+                      "description": "Position along X, in the record's `lengthUnit`."
                     },
                     "y": {
                       "type": "number",
-                      "nullable": true
+                      "nullable": true,
+                      "description": "Position along Y, in the record's `lengthUnit`."
                     },
                     "z": {
                       "type": "number",
-                      "nullable": true
+                      "nullable": true,
+                      "description": "Height read, in the record's `readingUnit`."
                     }
                   },
                   "required": [
@@ -3419,15 +3604,18 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
               },
               "resolution": {
                 "type": "number",
-                "nullable": true
+                "nullable": true,
+                "description": "Smallest step of the height gauge, in the record's `readingUnit`."
               },
               "rows": {
                 "type": "number",
-                "nullable": true
+                "nullable": true,
+                "description": "Count of rows of the grid (along Y)."
               },
               "columns": {
                 "type": "number",
-                "nullable": true
+                "nullable": true,
+                "description": "Count of columns of the grid (along X)."
               },
               "points": {
                 "type": "array",
@@ -3436,15 +3624,18 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
                   "properties": {
                     "x": {
                       "type": "number",
-                      "nullable": true
+                      "nullable": true,
+                      "description": "Position along X, in the record's `lengthUnit`."
                     },
                     "y": {
                       "type": "number",
-                      "nullable": true
+                      "nullable": true,
+                      "description": "Position along Y, in the record's `lengthUnit`."
                     },
                     "z": {
                       "type": "number",
-                      "nullable": true
+                      "nullable": true,
+                      "description": "Height read, in the record's `readingUnit`."
                     }
                   },
                   "required": [
@@ -3568,7 +3759,8 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
             },
             "plateThickness": {
               "type": "number",
-              "nullable": true
+              "nullable": true,
+              "description": "Thickness of the plate cut, in the record's `lengthUnit`."
             },
             "plateThicknessMm": {
               "type": "number",
@@ -3576,22 +3768,26 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
             },
             "resolution": {
               "type": "number",
-              "nullable": true
+              "nullable": true,
+              "description": "Smallest step of the caliper or rule the sizes were read with, in the record's `lengthUnit`."
             },
             "nominal": {
               "type": "object",
               "properties": {
                 "x": {
                   "type": "number",
-                  "nullable": true
+                  "nullable": true,
+                  "description": "Commanded size of the square along X, in the record's `lengthUnit`."
                 },
                 "y": {
                   "type": "number",
-                  "nullable": true
+                  "nullable": true,
+                  "description": "Commanded size of the square along Y, in the record's `lengthUnit`."
                 },
                 "circle": {
                   "type": "number",
-                  "nullable": true
+                  "nullable": true,
+                  "description": "Commanded diameter of the circle, in the record's `lengthUnit`."
                 }
               },
               "required": [
@@ -3605,31 +3801,38 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
               "properties": {
                 "x": {
                   "type": "number",
-                  "nullable": true
+                  "nullable": true,
+                  "description": "Measured size of the square along X, in the record's `lengthUnit`."
                 },
                 "y": {
                   "type": "number",
-                  "nullable": true
+                  "nullable": true,
+                  "description": "Measured size of the square along Y, in the record's `lengthUnit`."
                 },
                 "diagonal1": {
                   "type": "number",
-                  "nullable": true
+                  "nullable": true,
+                  "description": "Measured diagonal from the X0 Y0 corner, in the record's `lengthUnit`."
                 },
                 "diagonal2": {
                   "type": "number",
-                  "nullable": true
+                  "nullable": true,
+                  "description": "Measured other diagonal, in the record's `lengthUnit`."
                 },
                 "circleX": {
                   "type": "number",
-                  "nullable": true
+                  "nullable": true,
+                  "description": "Measured diameter of the circle along X, in the record's `lengthUnit`."
                 },
                 "circleY": {
                   "type": "number",
-                  "nullable": true
+                  "nullable": true,
+                  "description": "Measured diameter of the circle along Y, in the record's `lengthUnit`."
                 },
                 "kerf": {
                   "type": "number",
-                  "nullable": true
+                  "nullable": true,
+                  "description": "Width of cut the controller did not compensate for, in the record's `lengthUnit`."
                 }
               },
               "required": [
@@ -3655,11 +3858,13 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
               "properties": {
                 "x": {
                   "type": "number",
-                  "nullable": true
+                  "nullable": true,
+                  "description": "Steps per mm of axis X when the cut was made (null when not given)."
                 },
                 "y": {
                   "type": "number",
-                  "nullable": true
+                  "nullable": true,
+                  "description": "Steps per mm of axis Y when the cut was made (null when not given)."
                 }
               },
               "required": [
@@ -3779,7 +3984,8 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
             },
             "plateThickness": {
               "type": "number",
-              "nullable": true
+              "nullable": true,
+              "description": "Thickness of the plate cut, in the record's `lengthUnit`."
             },
             "plateThicknessMm": {
               "type": "number",
@@ -3787,22 +3993,26 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
             },
             "resolution": {
               "type": "number",
-              "nullable": true
+              "nullable": true,
+              "description": "Smallest step of the caliper or rule the sizes were read with, in the record's `lengthUnit`."
             },
             "nominal": {
               "type": "object",
               "properties": {
                 "x": {
                   "type": "number",
-                  "nullable": true
+                  "nullable": true,
+                  "description": "Commanded size of the square along X, in the record's `lengthUnit`."
                 },
                 "y": {
                   "type": "number",
-                  "nullable": true
+                  "nullable": true,
+                  "description": "Commanded size of the square along Y, in the record's `lengthUnit`."
                 },
                 "circle": {
                   "type": "number",
-                  "nullable": true
+                  "nullable": true,
+                  "description": "Commanded diameter of the circle, in the record's `lengthUnit`."
                 }
               },
               "required": [
@@ -3816,31 +4026,38 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
               "properties": {
                 "x": {
                   "type": "number",
-                  "nullable": true
+                  "nullable": true,
+                  "description": "Measured size of the square along X, in the record's `lengthUnit`."
                 },
                 "y": {
                   "type": "number",
-                  "nullable": true
+                  "nullable": true,
+                  "description": "Measured size of the square along Y, in the record's `lengthUnit`."
                 },
                 "diagonal1": {
                   "type": "number",
-                  "nullable": true
+                  "nullable": true,
+                  "description": "Measured diagonal from the X0 Y0 corner, in the record's `lengthUnit`."
                 },
                 "diagonal2": {
                   "type": "number",
-                  "nullable": true
+                  "nullable": true,
+                  "description": "Measured other diagonal, in the record's `lengthUnit`."
                 },
                 "circleX": {
                   "type": "number",
-                  "nullable": true
+                  "nullable": true,
+                  "description": "Measured diameter of the circle along X, in the record's `lengthUnit`."
                 },
                 "circleY": {
                   "type": "number",
-                  "nullable": true
+                  "nullable": true,
+                  "description": "Measured diameter of the circle along Y, in the record's `lengthUnit`."
                 },
                 "kerf": {
                   "type": "number",
-                  "nullable": true
+                  "nullable": true,
+                  "description": "Width of cut the controller did not compensate for, in the record's `lengthUnit`."
                 }
               },
               "required": [
@@ -3866,11 +4083,13 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
               "properties": {
                 "x": {
                   "type": "number",
-                  "nullable": true
+                  "nullable": true,
+                  "description": "Steps per mm of axis X when the cut was made (null when not given)."
                 },
                 "y": {
                   "type": "number",
-                  "nullable": true
+                  "nullable": true,
+                  "description": "Steps per mm of axis Y when the cut was made (null when not given)."
                 }
               },
               "required": [
@@ -3997,7 +4216,8 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
               },
               "plateThickness": {
                 "type": "number",
-                "nullable": true
+                "nullable": true,
+                "description": "Thickness of the plate cut, in the record's `lengthUnit`."
               },
               "plateThicknessMm": {
                 "type": "number",
@@ -4005,22 +4225,26 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
               },
               "resolution": {
                 "type": "number",
-                "nullable": true
+                "nullable": true,
+                "description": "Smallest step of the caliper or rule the sizes were read with, in the record's `lengthUnit`."
               },
               "nominal": {
                 "type": "object",
                 "properties": {
                   "x": {
                     "type": "number",
-                    "nullable": true
+                    "nullable": true,
+                    "description": "Commanded size of the square along X, in the record's `lengthUnit`."
                   },
                   "y": {
                     "type": "number",
-                    "nullable": true
+                    "nullable": true,
+                    "description": "Commanded size of the square along Y, in the record's `lengthUnit`."
                   },
                   "circle": {
                     "type": "number",
-                    "nullable": true
+                    "nullable": true,
+                    "description": "Commanded diameter of the circle, in the record's `lengthUnit`."
                   }
                 },
                 "required": [
@@ -4034,31 +4258,38 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
                 "properties": {
                   "x": {
                     "type": "number",
-                    "nullable": true
+                    "nullable": true,
+                    "description": "Measured size of the square along X, in the record's `lengthUnit`."
                   },
                   "y": {
                     "type": "number",
-                    "nullable": true
+                    "nullable": true,
+                    "description": "Measured size of the square along Y, in the record's `lengthUnit`."
                   },
                   "diagonal1": {
                     "type": "number",
-                    "nullable": true
+                    "nullable": true,
+                    "description": "Measured diagonal from the X0 Y0 corner, in the record's `lengthUnit`."
                   },
                   "diagonal2": {
                     "type": "number",
-                    "nullable": true
+                    "nullable": true,
+                    "description": "Measured other diagonal, in the record's `lengthUnit`."
                   },
                   "circleX": {
                     "type": "number",
-                    "nullable": true
+                    "nullable": true,
+                    "description": "Measured diameter of the circle along X, in the record's `lengthUnit`."
                   },
                   "circleY": {
                     "type": "number",
-                    "nullable": true
+                    "nullable": true,
+                    "description": "Measured diameter of the circle along Y, in the record's `lengthUnit`."
                   },
                   "kerf": {
                     "type": "number",
-                    "nullable": true
+                    "nullable": true,
+                    "description": "Width of cut the controller did not compensate for, in the record's `lengthUnit`."
                   }
                 },
                 "required": [
@@ -4084,11 +4315,13 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
                 "properties": {
                   "x": {
                     "type": "number",
-                    "nullable": true
+                    "nullable": true,
+                    "description": "Steps per mm of axis X when the cut was made (null when not given)."
                   },
                   "y": {
                     "type": "number",
-                    "nullable": true
+                    "nullable": true,
+                    "description": "Steps per mm of axis Y when the cut was made (null when not given)."
                   }
                 },
                 "required": [
@@ -4208,7 +4441,8 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
               },
               "plateThickness": {
                 "type": "number",
-                "nullable": true
+                "nullable": true,
+                "description": "Thickness of the plate cut, in the record's `lengthUnit`."
               },
               "plateThicknessMm": {
                 "type": "number",
@@ -4216,22 +4450,26 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
               },
               "resolution": {
                 "type": "number",
-                "nullable": true
+                "nullable": true,
+                "description": "Smallest step of the caliper or rule the sizes were read with, in the record's `lengthUnit`."
               },
               "nominal": {
                 "type": "object",
                 "properties": {
                   "x": {
                     "type": "number",
-                    "nullable": true
+                    "nullable": true,
+                    "description": "Commanded size of the square along X, in the record's `lengthUnit`."
                   },
                   "y": {
                     "type": "number",
-                    "nullable": true
+                    "nullable": true,
+                    "description": "Commanded size of the square along Y, in the record's `lengthUnit`."
                   },
                   "circle": {
                     "type": "number",
-                    "nullable": true
+                    "nullable": true,
+                    "description": "Commanded diameter of the circle, in the record's `lengthUnit`."
                   }
                 },
                 "required": [
@@ -4245,31 +4483,38 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
                 "properties": {
                   "x": {
                     "type": "number",
-                    "nullable": true
+                    "nullable": true,
+                    "description": "Measured size of the square along X, in the record's `lengthUnit`."
                   },
                   "y": {
                     "type": "number",
-                    "nullable": true
+                    "nullable": true,
+                    "description": "Measured size of the square along Y, in the record's `lengthUnit`."
                   },
                   "diagonal1": {
                     "type": "number",
-                    "nullable": true
+                    "nullable": true,
+                    "description": "Measured diagonal from the X0 Y0 corner, in the record's `lengthUnit`."
                   },
                   "diagonal2": {
                     "type": "number",
-                    "nullable": true
+                    "nullable": true,
+                    "description": "Measured other diagonal, in the record's `lengthUnit`."
                   },
                   "circleX": {
                     "type": "number",
-                    "nullable": true
+                    "nullable": true,
+                    "description": "Measured diameter of the circle along X, in the record's `lengthUnit`."
                   },
                   "circleY": {
                     "type": "number",
-                    "nullable": true
+                    "nullable": true,
+                    "description": "Measured diameter of the circle along Y, in the record's `lengthUnit`."
                   },
                   "kerf": {
                     "type": "number",
-                    "nullable": true
+                    "nullable": true,
+                    "description": "Width of cut the controller did not compensate for, in the record's `lengthUnit`."
                   }
                 },
                 "required": [
@@ -4295,11 +4540,13 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
                 "properties": {
                   "x": {
                     "type": "number",
-                    "nullable": true
+                    "nullable": true,
+                    "description": "Steps per mm of axis X when the cut was made (null when not given)."
                   },
                   "y": {
                     "type": "number",
-                    "nullable": true
+                    "nullable": true,
+                    "description": "Steps per mm of axis Y when the cut was made (null when not given)."
                   }
                 },
                 "required": [
@@ -5074,7 +5321,7 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
           },
           "microsteps": {
             "type": "number",
-            "description": "Microsteps per full step set on the driver."
+            "description": "Microsteps per full step set on the driver (a count)."
           },
           "gearRatio": {
             "type": "number",
@@ -5259,13 +5506,15 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
             "type": "string"
           },
           "stepsPerMmUsed": {
-            "type": "number"
+            "type": "number",
+            "description": "Steps per mm set in the controller while the moves were made."
           },
           "throughOrigin": {
             "type": "boolean"
           },
           "moveCount": {
-            "type": "number"
+            "type": "number",
+            "description": "Count of moves recorded."
           },
           "warnings": {
             "type": "array",
@@ -5283,13 +5532,16 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
                 "type": "number"
               },
               "scale": {
-                "type": "number"
+                "type": "number",
+                "description": "Measured ÷ commanded, fitted over the moves (no unit)."
               },
               "offset": {
-                "type": "number"
+                "type": "number",
+                "description": "The fit's offset, mm."
               },
               "residualMax": {
-                "type": "number"
+                "type": "number",
+                "description": "Largest residual, mm."
               }
             },
             "required": [
@@ -5360,7 +5612,8 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
           "type": "string"
         },
         "stepsPerMmUsed": {
-          "type": "number"
+          "type": "number",
+          "description": "Steps per mm set in the controller while the moves were made."
         },
         "throughOrigin": {
           "type": "boolean"
@@ -5371,10 +5624,12 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
             "type": "object",
             "properties": {
               "commanded": {
-                "type": "number"
+                "type": "number",
+                "description": "Commanded move, in the record's `lengthUnit`."
               },
               "measured": {
-                "type": "number"
+                "type": "number",
+                "description": "Measured move, in the record's `lengthUnit`."
               }
             },
             "required": [
@@ -5417,16 +5672,20 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
                 "type": "object",
                 "properties": {
                   "commanded": {
-                    "type": "number"
+                    "type": "number",
+                    "description": "Commanded move, mm."
                   },
                   "measured": {
-                    "type": "number"
+                    "type": "number",
+                    "description": "Measured move, mm."
                   },
                   "error": {
-                    "type": "number"
+                    "type": "number",
+                    "description": "Measured minus commanded, mm."
                   },
                   "residual": {
-                    "type": "number"
+                    "type": "number",
+                    "description": "Distance from the fitted line, mm."
                   }
                 },
                 "required": [
@@ -5587,7 +5846,8 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
           "type": "string"
         },
         "stepsPerMmUsed": {
-          "type": "number"
+          "type": "number",
+          "description": "Steps per mm set in the controller while the moves were made."
         },
         "throughOrigin": {
           "type": "boolean"
@@ -5598,10 +5858,12 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
             "type": "object",
             "properties": {
               "commanded": {
-                "type": "number"
+                "type": "number",
+                "description": "Commanded move, in the record's `lengthUnit`."
               },
               "measured": {
-                "type": "number"
+                "type": "number",
+                "description": "Measured move, in the record's `lengthUnit`."
               }
             },
             "required": [
@@ -5644,16 +5906,20 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
                 "type": "object",
                 "properties": {
                   "commanded": {
-                    "type": "number"
+                    "type": "number",
+                    "description": "Commanded move, mm."
                   },
                   "measured": {
-                    "type": "number"
+                    "type": "number",
+                    "description": "Measured move, mm."
                   },
                   "error": {
-                    "type": "number"
+                    "type": "number",
+                    "description": "Measured minus commanded, mm."
                   },
                   "residual": {
-                    "type": "number"
+                    "type": "number",
+                    "description": "Distance from the fitted line, mm."
                   }
                 },
                 "required": [
@@ -5821,7 +6087,8 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
             "type": "string"
           },
           "targetCount": {
-            "type": "number"
+            "type": "number",
+            "description": "Count of target positions."
           },
           "warnings": {
             "type": "array",
@@ -5830,19 +6097,23 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
             }
           },
           "runCount": {
-            "type": "number"
+            "type": "number",
+            "description": "Count of runs, both directions together."
           },
           "result": {
             "type": "object",
             "properties": {
               "accuracy": {
-                "type": "number"
+                "type": "number",
+                "description": "Bidirectional accuracy, mm."
               },
               "repeatability": {
-                "type": "number"
+                "type": "number",
+                "description": "Bidirectional repeatability, mm."
               },
               "reversal": {
-                "type": "number"
+                "type": "number",
+                "description": "Reversal value (the largest over the targets), mm."
               }
             },
             "required": [
@@ -5859,7 +6130,8 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
                 "type": "object",
                 "properties": {
                   "value": {
-                    "type": "number"
+                    "type": "number",
+                    "description": "The figure, mm."
                   },
                   "target": {
                     "$ref": "#/components/schemas/TargetValue"
@@ -5882,7 +6154,8 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
                 "type": "object",
                 "properties": {
                   "value": {
-                    "type": "number"
+                    "type": "number",
+                    "description": "The figure, mm."
                   },
                   "target": {
                     "$ref": "#/components/schemas/TargetValue"
@@ -5905,7 +6178,8 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
                 "type": "object",
                 "properties": {
                   "value": {
-                    "type": "number"
+                    "type": "number",
+                    "description": "The figure, mm."
                   },
                   "target": {
                     "$ref": "#/components/schemas/TargetValue"
@@ -5980,7 +6254,8 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
           "type": "array",
           "items": {
             "type": "number"
-          }
+          },
+          "description": "Target positions, in the record's `lengthUnit`, as typed."
         },
         "runs": {
           "type": "array",
@@ -5998,7 +6273,8 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
                 "type": "array",
                 "items": {
                   "type": "number"
-                }
+                },
+                "description": "Deviation (actual − target) at each target, in the record's `readingUnit`."
               }
             },
             "required": [
@@ -6017,7 +6293,8 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
               }
             },
             "thermalCorrectionMax": {
-              "type": "number"
+              "type": "number",
+              "description": "Largest thermal correction made to a deviation, mm (0 when none)."
             },
             "units": {
               "type": "object",
@@ -6032,34 +6309,44 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
                 "type": "object",
                 "properties": {
                   "target": {
-                    "type": "number"
+                    "type": "number",
+                    "description": "The target position, mm."
                   },
                   "meanUp": {
-                    "type": "number"
+                    "type": "number",
+                    "description": "Mean positional deviation approached moving +, mm."
                   },
                   "meanDown": {
-                    "type": "number"
+                    "type": "number",
+                    "description": "Mean positional deviation approached moving −, mm."
                   },
                   "mean": {
-                    "type": "number"
+                    "type": "number",
+                    "description": "Mean of the two, mm."
                   },
                   "reversal": {
-                    "type": "number"
+                    "type": "number",
+                    "description": "Reversal value at this target (mean up − mean down), mm."
                   },
                   "sUp": {
-                    "type": "number"
+                    "type": "number",
+                    "description": "Sample standard deviation of the approaches moving +, mm."
                   },
                   "sDown": {
-                    "type": "number"
+                    "type": "number",
+                    "description": "Sample standard deviation of the approaches moving −, mm."
                   },
                   "repeatabilityUp": {
-                    "type": "number"
+                    "type": "number",
+                    "description": "Repeatability moving + (4 s), mm."
                   },
                   "repeatabilityDown": {
-                    "type": "number"
+                    "type": "number",
+                    "description": "Repeatability moving − (4 s), mm."
                   },
                   "repeatability": {
-                    "type": "number"
+                    "type": "number",
+                    "description": "Bidirectional repeatability at this target, mm."
                   }
                 },
                 "required": [
@@ -6077,46 +6364,60 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
               }
             },
             "reversal": {
-              "type": "number"
+              "type": "number",
+              "description": "Reversal value of the axis (the largest size over the targets), mm."
             },
             "reversalMean": {
-              "type": "number"
+              "type": "number",
+              "description": "Mean of the signed reversal values over the targets, mm."
             },
             "repeatabilityUp": {
-              "type": "number"
+              "type": "number",
+              "description": "Repeatability moving +, mm."
             },
             "repeatabilityDown": {
-              "type": "number"
+              "type": "number",
+              "description": "Repeatability moving −, mm."
             },
             "repeatability": {
-              "type": "number"
+              "type": "number",
+              "description": "Bidirectional repeatability, mm."
             },
             "systematicUp": {
-              "type": "number"
+              "type": "number",
+              "description": "Range of the mean deviations moving +, mm."
             },
             "systematicDown": {
-              "type": "number"
+              "type": "number",
+              "description": "Range of the mean deviations moving −, mm."
             },
             "systematic": {
-              "type": "number"
+              "type": "number",
+              "description": "Range of the mean deviations in both directions, mm."
             },
             "meanRange": {
-              "type": "number"
+              "type": "number",
+              "description": "Range of the mean bidirectional deviations over the targets, mm."
             },
             "accuracyUp": {
-              "type": "number"
+              "type": "number",
+              "description": "Accuracy moving +, mm."
             },
             "accuracyDown": {
-              "type": "number"
+              "type": "number",
+              "description": "Accuracy moving −, mm."
             },
             "accuracy": {
-              "type": "number"
+              "type": "number",
+              "description": "Bidirectional accuracy, mm."
             },
             "runsUp": {
-              "type": "number"
+              "type": "number",
+              "description": "Count of runs approaching moving +."
             },
             "runsDown": {
-              "type": "number"
+              "type": "number",
+              "description": "Count of runs approaching moving −."
             },
             "lengthUnit": {
               "type": "string",
@@ -6172,7 +6473,8 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
               "type": "object",
               "properties": {
                 "value": {
-                  "type": "number"
+                  "type": "number",
+                  "description": "The figure, mm."
                 },
                 "target": {
                   "$ref": "#/components/schemas/TargetValue"
@@ -6195,7 +6497,8 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
               "type": "object",
               "properties": {
                 "value": {
-                  "type": "number"
+                  "type": "number",
+                  "description": "The figure, mm."
                 },
                 "target": {
                   "$ref": "#/components/schemas/TargetValue"
@@ -6218,7 +6521,8 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
               "type": "object",
               "properties": {
                 "value": {
-                  "type": "number"
+                  "type": "number",
+                  "description": "The figure, mm."
                 },
                 "target": {
                   "$ref": "#/components/schemas/TargetValue"
@@ -6352,7 +6656,8 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
           "type": "array",
           "items": {
             "type": "number"
-          }
+          },
+          "description": "Target positions, in the record's `lengthUnit`, as typed."
         },
         "runs": {
           "type": "array",
@@ -6370,7 +6675,8 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
                 "type": "array",
                 "items": {
                   "type": "number"
-                }
+                },
+                "description": "Deviation (actual − target) at each target, in the record's `readingUnit`."
               }
             },
             "required": [
@@ -6389,7 +6695,8 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
               }
             },
             "thermalCorrectionMax": {
-              "type": "number"
+              "type": "number",
+              "description": "Largest thermal correction made to a deviation, mm (0 when none)."
             },
             "units": {
               "type": "object",
@@ -6404,34 +6711,44 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
                 "type": "object",
                 "properties": {
                   "target": {
-                    "type": "number"
+                    "type": "number",
+                    "description": "The target position, mm."
                   },
                   "meanUp": {
-                    "type": "number"
+                    "type": "number",
+                    "description": "Mean positional deviation approached moving +, mm."
                   },
                   "meanDown": {
-                    "type": "number"
+                    "type": "number",
+                    "description": "Mean positional deviation approached moving −, mm."
                   },
                   "mean": {
-                    "type": "number"
+                    "type": "number",
+                    "description": "Mean of the two, mm."
                   },
                   "reversal": {
-                    "type": "number"
+                    "type": "number",
+                    "description": "Reversal value at this target (mean up − mean down), mm."
                   },
                   "sUp": {
-                    "type": "number"
+                    "type": "number",
+                    "description": "Sample standard deviation of the approaches moving +, mm."
                   },
                   "sDown": {
-                    "type": "number"
+                    "type": "number",
+                    "description": "Sample standard deviation of the approaches moving −, mm."
                   },
                   "repeatabilityUp": {
-                    "type": "number"
+                    "type": "number",
+                    "description": "Repeatability moving + (4 s), mm."
                   },
                   "repeatabilityDown": {
-                    "type": "number"
+                    "type": "number",
+                    "description": "Repeatability moving − (4 s), mm."
                   },
                   "repeatability": {
-                    "type": "number"
+                    "type": "number",
+                    "description": "Bidirectional repeatability at this target, mm."
                   }
                 },
                 "required": [
@@ -6449,46 +6766,60 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
               }
             },
             "reversal": {
-              "type": "number"
+              "type": "number",
+              "description": "Reversal value of the axis (the largest size over the targets), mm."
             },
             "reversalMean": {
-              "type": "number"
+              "type": "number",
+              "description": "Mean of the signed reversal values over the targets, mm."
             },
             "repeatabilityUp": {
-              "type": "number"
+              "type": "number",
+              "description": "Repeatability moving +, mm."
             },
             "repeatabilityDown": {
-              "type": "number"
+              "type": "number",
+              "description": "Repeatability moving −, mm."
             },
             "repeatability": {
-              "type": "number"
+              "type": "number",
+              "description": "Bidirectional repeatability, mm."
             },
             "systematicUp": {
-              "type": "number"
+              "type": "number",
+              "description": "Range of the mean deviations moving +, mm."
             },
             "systematicDown": {
-              "type": "number"
+              "type": "number",
+              "description": "Range of the mean deviations moving −, mm."
             },
             "systematic": {
-              "type": "number"
+              "type": "number",
+              "description": "Range of the mean deviations in both directions, mm."
             },
             "meanRange": {
-              "type": "number"
+              "type": "number",
+              "description": "Range of the mean bidirectional deviations over the targets, mm."
             },
             "accuracyUp": {
-              "type": "number"
+              "type": "number",
+              "description": "Accuracy moving +, mm."
             },
             "accuracyDown": {
-              "type": "number"
+              "type": "number",
+              "description": "Accuracy moving −, mm."
             },
             "accuracy": {
-              "type": "number"
+              "type": "number",
+              "description": "Bidirectional accuracy, mm."
             },
             "runsUp": {
-              "type": "number"
+              "type": "number",
+              "description": "Count of runs approaching moving +."
             },
             "runsDown": {
-              "type": "number"
+              "type": "number",
+              "description": "Count of runs approaching moving −."
             },
             "lengthUnit": {
               "type": "string",
@@ -6544,7 +6875,8 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
               "type": "object",
               "properties": {
                 "value": {
-                  "type": "number"
+                  "type": "number",
+                  "description": "The figure, mm."
                 },
                 "target": {
                   "$ref": "#/components/schemas/TargetValue"
@@ -6567,7 +6899,8 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
               "type": "object",
               "properties": {
                 "value": {
-                  "type": "number"
+                  "type": "number",
+                  "description": "The figure, mm."
                 },
                 "target": {
                   "$ref": "#/components/schemas/TargetValue"
@@ -6590,7 +6923,8 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
               "type": "object",
               "properties": {
                 "value": {
-                  "type": "number"
+                  "type": "number",
+                  "description": "The figure, mm."
                 },
                 "target": {
                   "$ref": "#/components/schemas/TargetValue"
@@ -6810,7 +7144,8 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
           },
           "resolution": {
             "type": "number",
-            "nullable": true
+            "nullable": true,
+            "description": "Smallest step the indicator shows, in the record's `readingUnit`."
           },
           "definition": {
             "type": "string"
@@ -6826,13 +7161,15 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
                 "type": "number"
               },
               "worstPosition": {
-                "type": "number"
+                "type": "number",
+                "description": "Where the largest was read, in the record's `lengthUnit`."
               },
               "worstPositionMm": {
                 "type": "number"
               },
               "meanBacklash": {
-                "type": "number"
+                "type": "number",
+                "description": "Mean over the positions, in the record's `readingUnit`."
               },
               "meanBacklashMm": {
                 "type": "number"
@@ -6843,31 +7180,38 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
                   "type": "object",
                   "properties": {
                     "position": {
-                      "type": "number"
+                      "type": "number",
+                      "description": "Where the axis was brought, in the record's `lengthUnit`."
                     },
                     "positionMm": {
                       "type": "number"
                     },
                     "meanUp": {
-                      "type": "number"
+                      "type": "number",
+                      "description": "Mean of the readings approached moving +, in the record's `readingUnit`."
                     },
                     "meanDown": {
-                      "type": "number"
+                      "type": "number",
+                      "description": "Mean of the readings approached moving −, in the record's `readingUnit`."
                     },
                     "reversal": {
-                      "type": "number"
+                      "type": "number",
+                      "description": "Signed mean up − mean down, in the record's `readingUnit`."
                     },
                     "backlash": {
-                      "type": "number"
+                      "type": "number",
+                      "description": "Size of the reversal, in the record's `readingUnit`."
                     },
                     "backlashMm": {
                       "type": "number"
                     },
                     "approachesUp": {
-                      "type": "number"
+                      "type": "number",
+                      "description": "Count of readings approached moving +."
                     },
                     "approachesDown": {
-                      "type": "number"
+                      "type": "number",
+                      "description": "Count of readings approached moving −."
                     }
                   },
                   "required": [
@@ -7021,7 +7365,8 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
         },
         "resolution": {
           "type": "number",
-          "nullable": true
+          "nullable": true,
+          "description": "Smallest step the indicator shows, in the record's `readingUnit`."
         },
         "definition": {
           "type": "string"
@@ -7037,13 +7382,15 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
               "type": "number"
             },
             "worstPosition": {
-              "type": "number"
+              "type": "number",
+              "description": "Where the largest was read, in the record's `lengthUnit`."
             },
             "worstPositionMm": {
               "type": "number"
             },
             "meanBacklash": {
-              "type": "number"
+              "type": "number",
+              "description": "Mean over the positions, in the record's `readingUnit`."
             },
             "meanBacklashMm": {
               "type": "number"
@@ -7054,31 +7401,38 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
                 "type": "object",
                 "properties": {
                   "position": {
-                    "type": "number"
+                    "type": "number",
+                    "description": "Where the axis was brought, in the record's `lengthUnit`."
                   },
                   "positionMm": {
                     "type": "number"
                   },
                   "meanUp": {
-                    "type": "number"
+                    "type": "number",
+                    "description": "Mean of the readings approached moving +, in the record's `readingUnit`."
                   },
                   "meanDown": {
-                    "type": "number"
+                    "type": "number",
+                    "description": "Mean of the readings approached moving −, in the record's `readingUnit`."
                   },
                   "reversal": {
-                    "type": "number"
+                    "type": "number",
+                    "description": "Signed mean up − mean down, in the record's `readingUnit`."
                   },
                   "backlash": {
-                    "type": "number"
+                    "type": "number",
+                    "description": "Size of the reversal, in the record's `readingUnit`."
                   },
                   "backlashMm": {
                     "type": "number"
                   },
                   "approachesUp": {
-                    "type": "number"
+                    "type": "number",
+                    "description": "Count of readings approached moving +."
                   },
                   "approachesDown": {
-                    "type": "number"
+                    "type": "number",
+                    "description": "Count of readings approached moving −."
                   }
                 },
                 "required": [
@@ -7231,7 +7585,8 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
         },
         "resolution": {
           "type": "number",
-          "nullable": true
+          "nullable": true,
+          "description": "Smallest step the indicator shows, in the record's `readingUnit`."
         },
         "definition": {
           "type": "string"
@@ -7247,13 +7602,15 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
               "type": "number"
             },
             "worstPosition": {
-              "type": "number"
+              "type": "number",
+              "description": "Where the largest was read, in the record's `lengthUnit`."
             },
             "worstPositionMm": {
               "type": "number"
             },
             "meanBacklash": {
-              "type": "number"
+              "type": "number",
+              "description": "Mean over the positions, in the record's `readingUnit`."
             },
             "meanBacklashMm": {
               "type": "number"
@@ -7264,31 +7621,38 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
                 "type": "object",
                 "properties": {
                   "position": {
-                    "type": "number"
+                    "type": "number",
+                    "description": "Where the axis was brought, in the record's `lengthUnit`."
                   },
                   "positionMm": {
                     "type": "number"
                   },
                   "meanUp": {
-                    "type": "number"
+                    "type": "number",
+                    "description": "Mean of the readings approached moving +, in the record's `readingUnit`."
                   },
                   "meanDown": {
-                    "type": "number"
+                    "type": "number",
+                    "description": "Mean of the readings approached moving −, in the record's `readingUnit`."
                   },
                   "reversal": {
-                    "type": "number"
+                    "type": "number",
+                    "description": "Signed mean up − mean down, in the record's `readingUnit`."
                   },
                   "backlash": {
-                    "type": "number"
+                    "type": "number",
+                    "description": "Size of the reversal, in the record's `readingUnit`."
                   },
                   "backlashMm": {
                     "type": "number"
                   },
                   "approachesUp": {
-                    "type": "number"
+                    "type": "number",
+                    "description": "Count of readings approached moving +."
                   },
                   "approachesDown": {
-                    "type": "number"
+                    "type": "number",
+                    "description": "Count of readings approached moving −."
                   }
                 },
                 "required": [
@@ -7634,19 +7998,24 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
           "type": "object",
           "properties": {
             "total": {
-              "type": "number"
+              "type": "number",
+              "description": "Count of required checks."
             },
             "within": {
-              "type": "number"
+              "type": "number",
+              "description": "Count of checks within their targets."
             },
             "outside": {
-              "type": "number"
+              "type": "number",
+              "description": "Count of checks outside their targets."
             },
             "waived": {
-              "type": "number"
+              "type": "number",
+              "description": "Count of checks waived."
             },
             "notStarted": {
-              "type": "number"
+              "type": "number",
+              "description": "Count of checks not yet recorded."
             }
           },
           "required": [
@@ -7905,7 +8274,8 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
           }
         },
         "moreDifferences": {
-          "type": "number"
+          "type": "number",
+          "description": "Count of differences found beyond those listed in `differences`."
         },
         "recordHash": {
           "type": "string"
@@ -8083,7 +8453,7 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
                   "change": {
                     "type": "number",
                     "nullable": true,
-                    "description": "Latest minus approved, in the result's unit; null when either is missing or nothing new was recorded."
+                    "description": "Latest minus approved, in the `unit` beside it; null when either is missing or nothing new was recorded."
                   },
                   "unit": {
                     "type": "string",
@@ -8163,10 +8533,12 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
           "type": "string"
         },
         "checkCount": {
-          "type": "number"
+          "type": "number",
+          "description": "Count of checks the approval stands on."
         },
         "waivedCount": {
-          "type": "number"
+          "type": "number",
+          "description": "Count of those checks that were waived."
         },
         "approvalId": {
           "type": "string"
@@ -8217,7 +8589,8 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
           }
         },
         "moreDifferences": {
-          "type": "number"
+          "type": "number",
+          "description": "Count of differences found beyond those listed in `differences`."
         },
         "recordHash": {
           "type": "string"
@@ -8401,7 +8774,8 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
             "type": "object",
             "properties": {
               "index": {
-                "type": "number"
+                "type": "number",
+                "description": "The attachment's place in the message, index from 0."
               },
               "filename": {
                 "type": "string"
@@ -9120,19 +9494,24 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
           "type": "object",
           "properties": {
             "total": {
-              "type": "number"
+              "type": "number",
+              "description": "Count of required checks."
             },
             "within": {
-              "type": "number"
+              "type": "number",
+              "description": "Count of checks within their targets."
             },
             "outside": {
-              "type": "number"
+              "type": "number",
+              "description": "Count of checks outside their targets."
             },
             "waived": {
-              "type": "number"
+              "type": "number",
+              "description": "Count of checks waived."
             },
             "notStarted": {
-              "type": "number"
+              "type": "number",
+              "description": "Count of checks not yet recorded."
             },
             "blocking": {
               "allOf": [
@@ -9182,10 +9561,12 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
           "type": "object",
           "properties": {
             "x": {
-              "type": "number"
+              "type": "number",
+              "description": "Along X, mm."
             },
             "y": {
-              "type": "number"
+              "type": "number",
+              "description": "Along Y, mm."
             }
           },
           "required": [
@@ -9208,10 +9589,12 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
           "type": "object",
           "properties": {
             "x": {
-              "type": "number"
+              "type": "number",
+              "description": "Along X, in `lengthUnit`."
             },
             "y": {
-              "type": "number"
+              "type": "number",
+              "description": "Along Y, in `lengthUnit`."
             }
           },
           "required": [
@@ -9337,10 +9720,12 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
           "type": "object",
           "properties": {
             "x": {
-              "type": "number"
+              "type": "number",
+              "description": "Along X, mm."
             },
             "y": {
-              "type": "number"
+              "type": "number",
+              "description": "Along Y, mm."
             }
           },
           "required": [
@@ -9363,10 +9748,12 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
           "type": "object",
           "properties": {
             "x": {
-              "type": "number"
+              "type": "number",
+              "description": "Along X, in `lengthUnit`."
             },
             "y": {
-              "type": "number"
+              "type": "number",
+              "description": "Along Y, in `lengthUnit`."
             }
           },
           "required": [
@@ -9564,7 +9951,7 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
       "properties": {
         "sweepCount": {
           "type": "number",
-          "description": "How many sweeps the rail has."
+          "description": "Count of sweeps the rail has."
         },
         "latestSweep": {
           "allOf": [
@@ -9652,13 +10039,16 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
             "type": "object",
             "properties": {
               "index": {
-                "type": "number"
+                "type": "number",
+                "description": "The hole from the rail's start, index from 0."
               },
               "position": {
-                "type": "number"
+                "type": "number",
+                "description": "Hole centre from the rail's start, mm."
               },
               "at": {
-                "type": "number"
+                "type": "number",
+                "description": "Hole centre from the rail's start, in `lengthUnit`."
               }
             },
             "required": [
@@ -9896,13 +10286,16 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
             "type": "object",
             "properties": {
               "index": {
-                "type": "number"
+                "type": "number",
+                "description": "The hole from the rail's start, index from 0."
               },
               "position": {
-                "type": "number"
+                "type": "number",
+                "description": "Hole centre from the rail's start, mm."
               },
               "at": {
-                "type": "number"
+                "type": "number",
+                "description": "Hole centre from the rail's start, in `lengthUnit`."
               }
             },
             "required": [
@@ -9967,7 +10360,7 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
         },
         "stationCount": {
           "type": "number",
-          "description": "How many stations were read."
+          "description": "Count of stations read."
         },
         "createdAt": {
           "type": "string"
@@ -10127,13 +10520,15 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
             "type": "object",
             "properties": {
               "position": {
-                "type": "number"
+                "type": "number",
+                "description": "Station position, in `lengthUnit`."
               },
               "positionMm": {
                 "type": "number"
               },
               "reading": {
-                "type": "number"
+                "type": "number",
+                "description": "Indicator reading, in `readingUnit`."
               },
               "readingMm": {
                 "type": "number"
@@ -10337,19 +10732,23 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
       "type": "object",
       "properties": {
         "slope": {
-          "type": "number"
+          "type": "number",
+          "description": "Rise of the line per unit of position, mm/mm (a ratio of lengths)."
         },
         "intercept": {
-          "type": "number"
+          "type": "number",
+          "description": "Height of the line at position 0, mm."
         },
         "straightness": {
-          "type": "number"
+          "type": "number",
+          "description": "Straightness about the line, mm."
         },
         "residuals": {
           "type": "array",
           "items": {
             "type": "number"
-          }
+          },
+          "description": "Each station's deviation from the line, mm."
         }
       },
       "required": [
@@ -10434,15 +10833,15 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
         "nextHole": {
           "type": "number",
           "nullable": true,
-          "description": "Index of the hole to fix next (null when every hole is fixed)."
+          "description": "The hole to fix next, index from 0 along the rail (null when every hole is fixed)."
         },
         "fixedCount": {
           "type": "number",
-          "description": "How many holes are fixed."
+          "description": "Count of holes fixed."
         },
         "holeCount": {
           "type": "number",
-          "description": "How many holes the rail has."
+          "description": "Count of holes the rail has."
         },
         "complete": {
           "type": "boolean"
@@ -10513,7 +10912,8 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
       "type": "object",
       "properties": {
         "index": {
-          "type": "number"
+          "type": "number",
+          "description": "The hole along the rail from its start, index from 0."
         },
         "position": {
           "type": "number",
@@ -10525,7 +10925,7 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
         },
         "order": {
           "type": "number",
-          "description": "Rank in the proposed fixing order (0 = first)."
+          "description": "Rank in the proposed fixing order, index from 0 (0 = first)."
         },
         "target": {
           "type": "number",
@@ -10663,15 +11063,15 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
         "nextHole": {
           "type": "number",
           "nullable": true,
-          "description": "Index of the hole to fix next (null when every hole is fixed)."
+          "description": "The hole to fix next, index from 0 along the rail (null when every hole is fixed)."
         },
         "fixedCount": {
           "type": "number",
-          "description": "How many holes are fixed."
+          "description": "Count of holes fixed."
         },
         "holeCount": {
           "type": "number",
-          "description": "How many holes the rail has."
+          "description": "Count of holes the rail has."
         },
         "complete": {
           "type": "boolean"
@@ -10772,7 +11172,7 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
             1,
             2
           ],
-          "description": "Which diagonal is longer (1 when they are equal, with a zero angle)."
+          "description": "Which diagonal is longer: 1 or 2, its number (no unit; 1 when they are equal, with a zero angle)."
         },
         "diagonalDifferenceMm": {
           "type": "number"
@@ -10877,10 +11277,12 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
               "description": "Slopes of the plane z = a·x + b·y + c (mm per mm) and its height at X0 Y0 (mm)."
             },
             "b": {
-              "type": "number"
+              "type": "number",
+              "description": "Slope of the plane along Y, mm per mm (a ratio of lengths)."
             },
             "c": {
-              "type": "number"
+              "type": "number",
+              "description": "Height of the plane at X0 Y0, mm."
             },
             "flatness": {
               "type": "number",
@@ -10902,13 +11304,16 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
           "type": "object",
           "properties": {
             "a": {
-              "type": "number"
+              "type": "number",
+              "description": "Slope of the middle plane along X, mm per mm (a ratio of lengths)."
             },
             "b": {
-              "type": "number"
+              "type": "number",
+              "description": "Slope of the middle plane along Y, mm per mm (a ratio of lengths)."
             },
             "c": {
-              "type": "number"
+              "type": "number",
+              "description": "Height of the middle plane at X0 Y0, mm."
             },
             "flatnessMm": {
               "type": "number"
@@ -11001,10 +11406,12 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
           "description": "The points furthest from the middle of the judged zone, largest first (up to five)."
         },
         "rows": {
-          "type": "number"
+          "type": "number",
+          "description": "Count of rows (distinct positions along Y)."
         },
         "columns": {
-          "type": "number"
+          "type": "number",
+          "description": "Count of columns (distinct positions along X)."
         }
       },
       "required": [
@@ -11025,14 +11432,16 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
       "type": "object",
       "properties": {
         "index": {
-          "type": "number"
+          "type": "number",
+          "description": "The point's place in the request's list, index from 0."
         },
         "row": {
           "type": "number",
-          "description": "1-based row (by position along Y, Y0 first) and column (by position along X, X0 first)."
+          "description": "Row by position along Y, Y0 first: index from 1."
         },
         "column": {
-          "type": "number"
+          "type": "number",
+          "description": "Column by position along X, X0 first: index from 1."
         },
         "xMm": {
           "type": "number"
@@ -11072,10 +11481,12 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
       "type": "object",
       "properties": {
         "scaleErrorX": {
-          "type": "number"
+          "type": "number",
+          "description": "Scale error of axis X, % (the test cut's errorPercent along X)."
         },
         "scaleErrorY": {
-          "type": "number"
+          "type": "number",
+          "description": "Scale error of axis Y, % (the test cut's errorPercent along Y)."
         },
         "x": {
           "$ref": "#/components/schemas/AxisReading"
@@ -11100,7 +11511,8 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
               "enum": [
                 1,
                 2
-              ]
+              ],
+              "description": "Which diagonal is the longer: 1 or 2, its number in the request (no unit)."
             },
             "diagonalDifferenceMm": {
               "type": "number"
@@ -11188,7 +11600,7 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
         },
         "correctionFactor": {
           "type": "number",
-          "description": "Multiply the axis's steps per mm by this: commanded ÷ measured."
+          "description": "Multiply the axis's steps per mm by this: commanded ÷ measured (a ratio)."
         },
         "suggestedStepsPerMm": {
           "type": "number",
@@ -11279,19 +11691,24 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
       "type": "object",
       "properties": {
         "total": {
-          "type": "number"
+          "type": "number",
+          "description": "Count of items on the walk."
         },
         "answered": {
-          "type": "number"
+          "type": "number",
+          "description": "Count of items answered."
         },
         "yes": {
-          "type": "number"
+          "type": "number",
+          "description": "Count of items answered yes."
         },
         "no": {
-          "type": "number"
+          "type": "number",
+          "description": "Count of items answered no."
         },
         "na": {
-          "type": "number"
+          "type": "number",
+          "description": "Count of items answered not applicable."
         }
       },
       "required": [
@@ -11348,7 +11765,7 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
         },
         "size": {
           "type": "number",
-          "description": "Bytes."
+          "description": "Size of the file, in bytes."
         },
         "sha256": {
           "type": "string"
@@ -11434,20 +11851,24 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
           ]
         },
         "lead": {
-          "type": "number"
+          "type": "number",
+          "description": "Screw lead (travel per turn): mm in `driveMm`, the axis's `lengthUnit` in `drive`."
         },
         "threadsPerInch": {
           "type": "number",
           "description": "Threads per inch, when the lead was given that way (lead = 25.4 / threadsPerInch mm, single start)."
         },
         "nominalDiameter": {
-          "type": "number"
+          "type": "number",
+          "description": "Screw's nominal diameter: mm in `driveMm`, the axis's `lengthUnit` in `drive`."
         },
         "rootDiameter": {
-          "type": "number"
+          "type": "number",
+          "description": "Screw's root diameter: mm in `driveMm`, the axis's `lengthUnit` in `drive`."
         },
         "unsupportedLength": {
-          "type": "number"
+          "type": "number",
+          "description": "Screw length between supports: mm in `driveMm`, the axis's `lengthUnit` in `drive`."
         },
         "mounting": {
           "type": "string",
@@ -11460,19 +11881,23 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
         },
         "dnLimit": {
           "type": "number",
-          "description": "Nominal diameter × rpm the nut is rated for; the rolled-screw 70 000 when absent."
+          "description": "Nominal diameter in mm × rpm the nut is rated for (mm·rpm); the rolled-screw 70 000 when absent."
         },
         "beltPitch": {
-          "type": "number"
+          "type": "number",
+          "description": "Belt tooth pitch: mm in `driveMm`, the axis's `lengthUnit` in `drive`."
         },
         "pulleyTeeth": {
-          "type": "number"
+          "type": "number",
+          "description": "Teeth on the drive pulley (a count)."
         },
         "pinionModule": {
-          "type": "number"
+          "type": "number",
+          "description": "Pinion module, mm (defined in mm whatever the unit)."
         },
         "pinionTeeth": {
-          "type": "number"
+          "type": "number",
+          "description": "Teeth on the pinion (a count)."
         }
       },
       "required": [
@@ -11484,10 +11909,12 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
       "type": "object",
       "properties": {
         "from": {
-          "type": "number"
+          "type": "number",
+          "description": "Steps per mm before the change."
         },
         "to": {
-          "type": "number"
+          "type": "number",
+          "description": "Steps per mm after the change."
         },
         "at": {
           "type": "string"
@@ -11604,7 +12031,7 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
         },
         "microsteps": {
           "type": "number",
-          "description": "Microsteps per full step set on the driver."
+          "description": "Microsteps per full step set on the driver (a count)."
         },
         "gearRatio": {
           "type": "number",
@@ -11726,10 +12153,12 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
           "type": "object",
           "properties": {
             "x": {
-              "type": "number"
+              "type": "number",
+              "description": "Along X, mm."
             },
             "y": {
-              "type": "number"
+              "type": "number",
+              "description": "Along Y, mm."
             }
           },
           "required": [
@@ -11769,17 +12198,21 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
               },
               "measuredTravel": {
                 "type": "number",
-                "nullable": true
+                "nullable": true,
+                "description": "Measured travel of the axis, mm (null until measured)."
               },
               "workSize": {
-                "type": "number"
+                "type": "number",
+                "description": "Work size along the axis, mm."
               },
               "requiredTravel": {
-                "type": "number"
+                "type": "number",
+                "description": "Work size plus the margin at each end, mm."
               },
               "spare": {
                 "type": "number",
-                "nullable": true
+                "nullable": true,
+                "description": "Measured travel minus required travel, mm (negative when short)."
               },
               "covers": {
                 "type": "boolean",
@@ -12024,11 +12457,13 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
         },
         "machineTemperatureC": {
           "type": "number",
-          "nullable": true
+          "nullable": true,
+          "description": "Temperature of the machine while measuring, °C."
         },
         "scaleTemperatureC": {
           "type": "number",
-          "nullable": true
+          "nullable": true,
+          "description": "Temperature of the scale while measuring, °C."
         },
         "scaleMaterial": {
           "type": "string",
@@ -12041,14 +12476,16 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
           ]
         },
         "scaleAlphaUmPerMK": {
-          "type": "number"
+          "type": "number",
+          "description": "Expansion coefficient of the scale, µm per metre per kelvin (µm/(m·K))."
         },
         "machineAlphaUmPerMK": {
-          "type": "number"
+          "type": "number",
+          "description": "Expansion coefficient of the machine, µm per metre per kelvin (µm/(m·K))."
         },
         "factor": {
           "type": "number",
-          "description": "Add factor · L to a length L read on the scale to get the machine's length at 20 °C."
+          "description": "Add factor · L to a length L read on the scale to get the machine's length at 20 °C (a ratio, no unit)."
         },
         "source": {
           "type": "string"
@@ -12082,7 +12519,8 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
           "type": "array",
           "items": {
             "type": "number"
-          }
+          },
+          "description": "Target positions, in `lengthUnit`."
         },
         "targetsMm": {
           "type": "array",
@@ -12091,13 +12529,15 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
           }
         },
         "overrun": {
-          "type": "number"
+          "type": "number",
+          "description": "Clear travel kept beyond the first and last target, in `lengthUnit`."
         },
         "overrunMm": {
           "type": "number"
         },
         "runs": {
-          "type": "number"
+          "type": "number",
+          "description": "Count of runs in each direction."
         },
         "reason": {
           "type": "string",
@@ -12124,21 +12564,22 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
       "type": "object",
       "properties": {
         "position": {
-          "type": "number"
+          "type": "number",
+          "description": "Where the axis was brought, in the record's `lengthUnit`."
         },
         "up": {
           "type": "array",
           "items": {
             "type": "number"
           },
-          "description": "Readings after approaching while moving in the positive direction."
+          "description": "Readings after approaching while moving in the positive direction, in the record's `readingUnit`."
         },
         "down": {
           "type": "array",
           "items": {
             "type": "number"
           },
-          "description": "Readings after approaching while moving in the negative direction."
+          "description": "Readings after approaching while moving in the negative direction, in the record's `readingUnit`."
         }
       },
       "required": [
@@ -12402,13 +12843,16 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
             "type": "object",
             "properties": {
               "x": {
-                "type": "number"
+                "type": "number",
+                "description": "Hole centre from the outline's left edge, in `lengthUnit`."
               },
               "y": {
-                "type": "number"
+                "type": "number",
+                "description": "Hole centre from the outline's lower edge, in `lengthUnit`."
               },
               "diameter": {
-                "type": "number"
+                "type": "number",
+                "description": "Hole diameter, in `lengthUnit`."
               }
             },
             "required": [
@@ -12424,25 +12868,32 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
           "type": "object",
           "properties": {
             "columns": {
-              "type": "number"
+              "type": "number",
+              "description": "Count of columns of holes."
             },
             "rows": {
-              "type": "number"
+              "type": "number",
+              "description": "Count of rows of holes."
             },
             "originX": {
-              "type": "number"
+              "type": "number",
+              "description": "First hole's centre from the outline's left edge, in `lengthUnit`."
             },
             "originY": {
-              "type": "number"
+              "type": "number",
+              "description": "First hole's centre from the outline's lower edge, in `lengthUnit`."
             },
             "pitchX": {
-              "type": "number"
+              "type": "number",
+              "description": "Distance between columns, in `lengthUnit`."
             },
             "pitchY": {
-              "type": "number"
+              "type": "number",
+              "description": "Distance between rows, in `lengthUnit`."
             },
             "diameter": {
-              "type": "number"
+              "type": "number",
+              "description": "Hole diameter, in `lengthUnit`."
             }
           },
           "required": [
@@ -12461,22 +12912,28 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
           "type": "object",
           "properties": {
             "diameter": {
-              "type": "number"
+              "type": "number",
+              "description": "Hole diameter, in `lengthUnit`."
             },
             "centreX": {
-              "type": "number"
+              "type": "number",
+              "description": "Circle centre from the outline's left edge, in `lengthUnit`."
             },
             "centreY": {
-              "type": "number"
+              "type": "number",
+              "description": "Circle centre from the outline's lower edge, in `lengthUnit`."
             },
             "circleDiameter": {
-              "type": "number"
+              "type": "number",
+              "description": "Diameter of the circle the hole centres lie on, in `lengthUnit`."
             },
             "count": {
-              "type": "number"
+              "type": "number",
+              "description": "Count of holes on the circle."
             },
             "startAngleDeg": {
-              "type": "number"
+              "type": "number",
+              "description": "Angle of the first hole from the +x direction, in degrees."
             }
           },
           "required": [

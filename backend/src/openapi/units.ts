@@ -1,4 +1,6 @@
 import type { OpenAPIObject, ReferenceObject, SchemaObject } from '@nestjs/swagger';
+import { UNIT_ENUM_NAMES } from '../common/unit-fields.js';
+import { LENGTH_UNITS } from '../engine/units.js';
 
 /**
  * Units the names already carry (the code's rule: "names carry units where a number has one"),
@@ -30,9 +32,29 @@ const FAMILIES: Record<string, string> = {
     'Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).',
 };
 
+const isUnitList = (schema: SchemaObject) =>
+  schema.type === 'string' &&
+  !schema.nullable &&
+  schema.enum?.length === LENGTH_UNITS.length &&
+  LENGTH_UNITS.every((unit) => schema.enum!.includes(unit));
+
+/**
+ * A unit field of an answer (read from the mapper's type, so its list is written out) refers to the
+ * same named list as the requests' unit fields (`LengthUnit`, `ReadingUnit`), so a client has one list.
+ */
+function unitFamilyReference(name: string, schema: SchemaObject): SchemaObject {
+  if (!(name in UNIT_ENUM_NAMES) || !isUnitList(schema)) return schema;
+  const enumName = UNIT_ENUM_NAMES[name as keyof typeof UNIT_ENUM_NAMES];
+  return {
+    allOf: [{ $ref: `#/components/schemas/${enumName}` }],
+    description: schema.description ?? FAMILIES[name],
+  };
+}
+
 function describeProperty(name: string, schema: SchemaObject | ReferenceObject): SchemaObject | ReferenceObject {
   if ('$ref' in schema) return schema;
-  if (name in FAMILIES && !schema.description) return { ...schema, description: FAMILIES[name] };
+  if (name in FAMILIES && !schema.description) schema = { ...schema, description: FAMILIES[name] };
+  if (name in FAMILIES) return unitFamilyReference(name, schema);
   if (name === 'units' && schema.type === 'object' && !schema.description) {
     return { ...schema, description: 'The unit of each number of this answer, by field name (mm, mm/mm, %, …).' };
   }
@@ -76,4 +98,16 @@ function walk(value: unknown): void {
 export function describeNamedUnits(document: OpenAPIObject): void {
   walk(document.components?.schemas);
   walk(document.paths);
+  // The two lists, each described once (the swagger module would lend them a field's description).
+  const schemas = (document.components ??= {}).schemas ?? (document.components.schemas = {});
+  for (const [field, enumName] of Object.entries(UNIT_ENUM_NAMES)) {
+    schemas[enumName] = { type: 'string', enum: [...LENGTH_UNITS], description: LIST_WORDS[field] };
+  }
 }
+
+const LIST_WORDS: Record<string, string> = {
+  lengthUnit:
+    'A length unit (1 in = 25.4 mm exactly, 1 thou = 0.001 in, um = µm): the unit of positions, geometry, moves, lead, pitch, diameters, lengths and travel (feed rates in it per minute).',
+  readingUnit:
+    'A reading unit (1 in = 25.4 mm exactly, 1 thou = 0.001 in, um = µm): the unit of indicator readings, deviations and heights.',
+};

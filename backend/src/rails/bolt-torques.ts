@@ -36,6 +36,7 @@ export function boltTorqueTable() {
     bolts: BOLT_TORQUES.map((b) => ({ ...b })),
     source: BOLT_TORQUE_SOURCE,
     typicalByProfile: Object.entries(TYPICAL_BOLT_BY_PROFILE).map(([size, boltSize]) => ({
+      /** Rail profile size (the rail's width), mm. */
       profileSize: Number(size),
       boltSize,
     })),

@@ -156,12 +156,18 @@ export class RailChecksService implements OnModuleInit {
       measured: j.height.measured,
       reason: j.height.reason ?? null,
       datum: j.height.datum ?? null,
+      /** Largest height difference between the rails, mm. */
       worst: j.height.worstMm ?? null,
+      /** The same with its sign, mm. */
       worstSigned: j.height.worstSignedMm ?? null,
+      /** Where it was found along the rails, mm. */
       at: j.height.atMm ?? null,
+      /** Height difference at each compared position, mm. */
       differences: j.height.differencesMm ?? null,
+      /** Distance between the rails, mm. */
       spacing: j.height.spacingMm ?? null,
       kUmPerMm: j.height.kUmPerMm ?? null,
+      /** Permissible height difference (spacing × K), mm. */
       permissible: j.height.permissibleMm ?? null,
       targetText: j.height.targetText ?? null,
       within: j.height.within ?? null,
@@ -186,9 +192,13 @@ export class RailChecksService implements OnModuleInit {
         ? {
             datum: out.datum,
             face: out.a.face ?? 'side',
+            /** Parallelism of the two rails, mm. */
             parallelism: out.parallelismMm,
+            /** Mean of the differences between the rails, mm. */
             meanOffset: out.meanOffsetMm,
+            /** Positions along the rails the two sweeps are compared at, mm. */
             positions: out.positionsMm,
+            /** Difference between the rails at each position, mm. */
             differences: out.differencesMm,
             parallelismWithin: j.parallelismWithin,
           }

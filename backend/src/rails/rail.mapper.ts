@@ -70,7 +70,14 @@ export interface RailResponse {
   endDistanceMm: number;
   partnerRailId: string | null;
   /** Hole centres from the rail's start, in mm (`position`) and in lengthUnit (`at`). */
-  holes: { index: number; position: number; at: number }[];
+  holes: {
+    /** The hole from the rail's start, index from 0. */
+    index: number;
+    /** Hole centre from the rail's start, mm. */
+    position: number;
+    /** Hole centre from the rail's start, in `lengthUnit`. */
+    at: number;
+  }[];
   typicalBoltSize: string | null;
   createdAt: string;
   updatedAt: string;
@@ -102,14 +109,14 @@ export interface SweepListItem extends SweepSummary {
   railId: string;
   machineId: string;
   takenBy: string;
-  /** How many stations were read. */
+  /** Count of stations read. */
   stationCount: number;
   createdAt: string;
   locked: boolean;
 }
 
 export interface RailListItem extends RailResponse {
-  /** How many sweeps the rail has. */
+  /** Count of sweeps the rail has. */
   sweepCount: number;
   latestSweep: SweepSummary | null;
 }
@@ -123,7 +130,16 @@ export interface SweepResponse {
   readingUnit: SweepRow['readingUnit'];
   face: SweepRow['face'];
   /** Each station: `position` in lengthUnit and in mm, `reading` in readingUnit as typed and in mm. */
-  stations: { position: number; positionMm: number; reading: number; readingMm: number }[] | null;
+  stations:
+    | {
+        /** Station position, in `lengthUnit`. */
+        position: number;
+        positionMm: number;
+        /** Indicator reading, in `readingUnit`. */
+        reading: number;
+        readingMm: number;
+      }[]
+    | null;
   localSlope: StoredLocalSlope | null;
   warnings: ResultWarning[];
   instrument: string;

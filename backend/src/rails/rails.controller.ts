@@ -1,4 +1,5 @@
 import { Body, Controller, Delete, Get, HttpCode, Param, ParseUUIDPipe, Patch, Post, Query, Res } from '@nestjs/common';
+import { ApiResponse } from '@nestjs/swagger';
 import type { FastifyReply } from 'fastify';
 import { CurrentUser, RECORDERS, Roles } from '../auth/decorators.js';
 import type { SessionUser } from '../auth/session-user.js';
@@ -12,6 +13,7 @@ import { UpdateSweepDetailsDto } from './dto/update-sweep-details.dto.js';
 import { RailChecksService } from './rail-checks.service.js';
 import { RailSweepsService } from './rail-sweeps.service.js';
 import { RailsService } from './rails.service.js';
+import { ConflictsWhen, NEW_OR_REPEATED } from '../openapi/error-responses.js';
 
 @Controller()
 export class RailsController {
@@ -33,6 +35,7 @@ export class RailsController {
 
   @Post('machines/:id/rails')
   @Roles(...RECORDERS)
+  @ConflictsWhen('approval-lock')
   create(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) machineId: string, @Body() dto: CreateRailDto) {
     return this.rails.create(user, machineId, dto);
   }
@@ -44,6 +47,7 @@ export class RailsController {
 
   @Patch('rails/:id')
   @Roles(...RECORDERS)
+  @ConflictsWhen('approval-lock')
   update(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string, @Body() dto: UpdateRailDto) {
     return this.rails.update(user, id, dto);
   }
@@ -51,6 +55,7 @@ export class RailsController {
   @Delete('rails/:id')
   @Roles(...RECORDERS)
   @HttpCode(204)
+  @ConflictsWhen('approval-lock')
   remove(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string) {
     return this.rails.remove(user, id);
   }
@@ -76,6 +81,9 @@ export class RailsController {
   /** 201 for a new sweep; 200 with the same sweep when the client id was seen before. */
   @Post('rails/:id/sweeps')
   @Roles(...RECORDERS)
+  @ApiResponse({ status: 201, description: NEW_OR_REPEATED.created('sweep') })
+  @ApiResponse({ status: 200, description: NEW_OR_REPEATED.repeated('sweep') })
+  @ConflictsWhen('approval-lock', 'reused-id')
   async recordSweep(
     @CurrentUser() user: SessionUser,
     @Param('id', ParseUUIDPipe) id: string,
@@ -95,6 +103,7 @@ export class RailsController {
   /** Corrects a sweep's details (not its readings) while no approval stands on it. */
   @Patch('sweeps/:id')
   @Roles(...RECORDERS)
+  @ConflictsWhen('approval-lock')
   updateSweep(
     @CurrentUser() user: SessionUser,
     @Param('id', ParseUUIDPipe) id: string,
@@ -106,6 +115,7 @@ export class RailsController {
   @Delete('sweeps/:id')
   @Roles(...RECORDERS)
   @HttpCode(204)
+  @ConflictsWhen('approval-lock')
   removeSweep(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string) {
     return this.sweeps.remove(user, id);
   }

@@ -7,6 +7,7 @@ import { Optional } from '../common/optional.js';
  * (default 50), after the page `cursor` ended. See page-cursor.ts.
  */
 export class PageQuery {
+  /** Count of records on the page (1 to 200; 50 when absent). */
   @Optional()
   @Type(() => Number)
   @IsInt({ message: 'limit must be a whole number' })

@@ -5,6 +5,7 @@ import type { Role } from '../database/schema/users.js';
 import { AnswerItemDto } from './dto/answer-item.dto.js';
 import { CreateSafetyItemDto } from './dto/create-safety-item.dto.js';
 import { SafetyService } from './safety.service.js';
+import { ConflictsWhen } from '../openapi/error-responses.js';
 
 // The walk is walked by the people who commission and sign off the machine, not by builders.
 const WALKERS: Role[] = ['admin', 'owner', 'technician'];
@@ -20,6 +21,7 @@ export class SafetyController {
 
   @Put('machines/:id/safety-walk/items/:itemId')
   @Roles(...WALKERS)
+  @ConflictsWhen('approval-lock')
   answer(
     @CurrentUser() user: SessionUser,
     @Param('id', ParseUUIDPipe) id: string,
@@ -31,6 +33,7 @@ export class SafetyController {
 
   @Post('machines/:id/safety-walk/rounds')
   @Roles(...WALKERS)
+  @ConflictsWhen('approval-lock', 'state')
   startNew(@CurrentUser() user: SessionUser, @Param('id', ParseUUIDPipe) id: string) {
     return this.safety.startNew(user, id);
   }

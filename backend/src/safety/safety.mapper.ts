@@ -8,10 +8,15 @@ export interface WalkItem extends SafetyItemDef {
 }
 
 export interface WalkCounts {
+  /** Count of items on the walk. */
   total: number;
+  /** Count of items answered. */
   answered: number;
+  /** Count of items answered yes. */
   yes: number;
+  /** Count of items answered no. */
   no: number;
+  /** Count of items answered not applicable. */
   na: number;
 }
 

@@ -1,7 +1,7 @@
 import { IsBoolean, IsNumber, IsUUID } from 'class-validator';
 
 export class RecordHoleDto {
-  /** Indicator reading at the hole, in the bolt-down's unit. */
+  /** Indicator reading at the hole, in the bolt-down's `readingUnit`. */
   @IsNumber({ allowNaN: false, allowInfinity: false }, { message: "reading must be a number in the bolt-down's unit" })
   reading: number;
 

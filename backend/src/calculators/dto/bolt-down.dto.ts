@@ -7,7 +7,7 @@ import { UnitFamiliesDto } from './unit-families.dto.js';
 import { Optional } from '../../common/optional.js';
 
 export class HoleReadingDto {
-  /** Index of the hole from the rail's start (0 = first hole). */
+  /** The hole from the rail's start, index from 0 (0 = first hole). */
   @IsInt({ message: 'hole must be a whole number' })
   @Min(0, { message: 'hole must not be negative' })
   hole: number;

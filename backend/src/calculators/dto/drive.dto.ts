@@ -15,7 +15,7 @@ export class DriveCalculationDto extends UnitFamiliesDto {
   @FiniteNumber('motorStepsPerRev')
   motorStepsPerRev: number;
 
-  /** Microsteps per full step set on the driver. */
+  /** Microsteps per full step set on the driver (a count). */
   @FiniteNumber('microsteps')
   microsteps: number;
 
@@ -35,11 +35,11 @@ export class DriveCalculationDto extends UnitFamiliesDto {
   @OptionalFiniteNumber('beltPitch')
   beltPitch?: number;
 
-  /** Teeth on the drive pulley. */
+  /** Teeth on the drive pulley (a count). */
   @OptionalFiniteNumber('pulleyTeeth')
   pulleyTeeth?: number;
 
-  /** Teeth on the pinion. */
+  /** Teeth on the pinion (a count). */
   @OptionalFiniteNumber('pinionTeeth')
   pinionTeeth?: number;
 

@@ -9,6 +9,7 @@ export class GridPointDto {
   @FiniteNumber('x')
   x: number;
 
+  /** Position on the bed, in `lengthUnit`. */
   @FiniteNumber('y')
   y: number;
 

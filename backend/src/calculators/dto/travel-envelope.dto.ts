@@ -27,7 +27,7 @@ export class TravelEnvelopeDto extends UnitFamiliesDto {
   @Type(() => AxisTravelDto)
   axes: AxisTravelDto[];
 
-  /** Clearance beyond the work at each end of every axis. */
+  /** Clearance beyond the work at each end of every axis, in `lengthUnit`. */
   @OptionalFiniteNumber('marginPerSide')
   marginPerSide?: number;
 }

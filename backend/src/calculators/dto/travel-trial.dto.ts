@@ -16,6 +16,7 @@ export class TravelMoveDto {
 }
 
 export class TravelTrialDto extends UnitFamiliesDto {
+  /** Steps per mm set in the controller while the moves were made. */
   @FiniteNumber('stepsPerMmUsed')
   stepsPerMmUsed: number;
 

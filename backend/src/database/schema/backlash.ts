@@ -8,10 +8,11 @@ import { axes } from './drives.js';
 
 /** One position of a backlash check as typed: where (lengthUnit) and the readings from each side (readingUnit). */
 export interface BacklashPositionRecord {
+  /** Where the axis was brought, in the record's `lengthUnit`. */
   position: number;
-  /** Readings after approaching while moving in the positive direction. */
+  /** Readings after approaching while moving in the positive direction, in the record's `readingUnit`. */
   up: number[];
-  /** Readings after approaching while moving in the negative direction. */
+  /** Readings after approaching while moving in the negative direction, in the record's `readingUnit`. */
   down: number[];
 }
 

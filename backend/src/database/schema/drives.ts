@@ -30,24 +30,34 @@ export type DriveKind = (typeof DRIVE_KINDS)[number];
  */
 export interface DriveRecord {
   type: DriveKind;
+  /** Screw lead (travel per turn): mm in `driveMm`, the axis's `lengthUnit` in `drive`. */
   lead?: number;
   /** Threads per inch, when the lead was given that way (lead = 25.4 / threadsPerInch mm, single start). */
   threadsPerInch?: number;
+  /** Screw's nominal diameter: mm in `driveMm`, the axis's `lengthUnit` in `drive`. */
   nominalDiameter?: number;
+  /** Screw's root diameter: mm in `driveMm`, the axis's `lengthUnit` in `drive`. */
   rootDiameter?: number;
+  /** Screw length between supports: mm in `driveMm`, the axis's `lengthUnit` in `drive`. */
   unsupportedLength?: number;
   mounting?: 'fixed-free' | 'supported-supported' | 'fixed-supported' | 'fixed-fixed';
-  /** Nominal diameter × rpm the nut is rated for; the rolled-screw 70 000 when absent. */
+  /** Nominal diameter in mm × rpm the nut is rated for (mm·rpm); the rolled-screw 70 000 when absent. */
   dnLimit?: number;
+  /** Belt tooth pitch: mm in `driveMm`, the axis's `lengthUnit` in `drive`. */
   beltPitch?: number;
+  /** Teeth on the drive pulley (a count). */
   pulleyTeeth?: number;
+  /** Pinion module, mm (defined in mm whatever the unit). */
   pinionModule?: number;
+  /** Teeth on the pinion (a count). */
   pinionTeeth?: number;
 }
 
 /** One change of the steps per mm set in the controller. */
 export interface StepsChange {
+  /** Steps per mm before the change. */
   from: number;
+  /** Steps per mm after the change. */
   to: number;
   at: string;
   by: string;
@@ -113,7 +123,16 @@ export const travelTrials = pgTable(
     instrumentResolution: doublePrecision('instrument_resolution'),
     stepsPerMmUsed: doublePrecision('steps_per_mm_used').notNull(),
     /** Commanded and measured in lengthUnit, as typed. */
-    moves: jsonb('moves').$type<{ commanded: number; measured: number }[]>().notNull(),
+    moves: jsonb('moves')
+      .$type<
+        {
+          /** Commanded move, in the record's `lengthUnit`. */
+          commanded: number;
+          /** Measured move, in the record's `lengthUnit`. */
+          measured: number;
+        }[]
+      >()
+      .notNull(),
     throughOrigin: boolean('through_origin').notNull().default(false),
     result: jsonb('result').$type<Record<string, unknown>>().notNull(),
     notes: text('notes').notNull().default(''),
@@ -158,7 +177,15 @@ export const positioningRuns = pgTable(
     /** Target positions in lengthUnit, as typed. */
     targets: jsonb('targets').$type<number[]>().notNull(),
     /** Deviations (actual − target) in readingUnit, as typed. */
-    runs: jsonb('runs').$type<{ direction: 'up' | 'down'; deviations: number[] }[]>().notNull(),
+    runs: jsonb('runs')
+      .$type<
+        {
+          direction: 'up' | 'down';
+          /** Deviation (actual − target) at each target, in the record's `readingUnit`. */
+          deviations: number[];
+        }[]
+      >()
+      .notNull(),
     result: jsonb('result').$type<Record<string, unknown>>().notNull(),
     notes: text('notes').notNull().default(''),
     recordedById: uuid('recorded_by_id').references(() => users.id),

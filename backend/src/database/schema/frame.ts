@@ -95,7 +95,12 @@ export interface TestCutSizesMm {
   /** Width of cut the controller did not compensate for (0 when kerf compensation was on). */
   kerfMm: number;
   circleKind: CircleKind;
-  stepsPerMm: { x: number | null; y: number | null };
+  stepsPerMm: {
+    /** Steps per mm of axis X when the cut was made (null when not given). */
+    x: number | null;
+    /** Steps per mm of axis Y when the cut was made (null when not given). */
+    y: number | null;
+  };
 }
 
 /** The acceptance cut: a large square with a circle, its commanded and measured sizes. */

@@ -28,21 +28,34 @@ export type StoredPatternEntry =
   | { kind: 'list'; holes: { x: number; y: number; diameter: number }[] }
   | {
       kind: 'grid';
+      /** First hole's centre from the outline's left edge, in `lengthUnit`. */
       originX: number;
+      /** First hole's centre from the outline's lower edge, in `lengthUnit`. */
       originY: number;
+      /** Count of rows of holes. */
       rows: number;
+      /** Count of columns of holes. */
       columns: number;
+      /** Distance between columns, in `lengthUnit`. */
       pitchX: number;
+      /** Distance between rows, in `lengthUnit`. */
       pitchY: number;
+      /** Hole diameter, in `lengthUnit`. */
       diameter: number;
     }
   | {
       kind: 'circle';
+      /** Circle centre from the outline's left edge, in `lengthUnit`. */
       centreX: number;
+      /** Circle centre from the outline's lower edge, in `lengthUnit`. */
       centreY: number;
+      /** Diameter of the circle the hole centres lie on, in `lengthUnit`. */
       circleDiameter: number;
+      /** Count of holes on the circle. */
       count: number;
+      /** Angle of the first hole from the +x direction, in degrees. */
       startAngleDeg: number;
+      /** Hole diameter, in `lengthUnit`. */
       diameter: number;
     };
 

@@ -64,9 +64,13 @@ export const rails = pgTable(
 
 /** Stored engine result of a sweep; every length in mm. */
 export interface StoredLine {
+  /** Rise of the line per unit of position, mm/mm (a ratio of lengths). */
   slope: number;
+  /** Height of the line at position 0, mm. */
   intercept: number;
+  /** Straightness about the line, mm. */
   straightness: number;
+  /** Each station's deviation from the line, mm. */
   residuals: number[];
 }
 /** Largest slope between neighbouring stations (or over a stated base), mm per metre. */

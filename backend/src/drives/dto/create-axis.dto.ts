@@ -22,17 +22,19 @@ export class CreateAxisDto {
   @Type(() => DriveDto)
   drive: DriveDto;
 
+  /** Full steps per motor revolution (a count: 200 for a 1.8° motor). */
   @Finite('motorStepsPerRev')
   motorStepsPerRev: number;
 
+  /** Microsteps per full step set on the driver (a count). */
   @Finite('microsteps')
   microsteps: number;
 
-  /** Motor revolutions per revolution of the screw, pulley or pinion; 1 when direct. */
+  /** Motor revolutions per revolution of the screw, pulley or pinion (a ratio, no unit); 1 when direct. */
   @OptionalFinite('gearRatio')
   gearRatio?: number;
 
-  /** The value set in the controller now. */
+  /** The value set in the controller now, in steps per mm. */
   @Finite('stepsPerMm')
   stepsPerMm: number;
 

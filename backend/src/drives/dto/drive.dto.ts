@@ -13,6 +13,7 @@ export class DriveDto {
   @IsIn(DRIVE_TYPES, { message: `drive.type must be one of ${DRIVE_TYPES.join(', ')}` })
   type: DriveType;
 
+  /** Screw lead (travel per turn), in the axis's `lengthUnit`. */
   @OptionalFinite('drive.lead')
   lead?: number;
 
@@ -20,12 +21,15 @@ export class DriveDto {
   @OptionalFinite('drive.threadsPerInch')
   threadsPerInch?: number;
 
+  /** Screw's nominal (outside) diameter, in the axis's `lengthUnit`. */
   @OptionalFinite('drive.nominalDiameter')
   nominalDiameter?: number;
 
+  /** Screw's root diameter, in the axis's `lengthUnit`. */
   @OptionalFinite('drive.rootDiameter')
   rootDiameter?: number;
 
+  /** Screw length between its supports, in the axis's `lengthUnit`. */
   @OptionalFinite('drive.unsupportedLength')
   unsupportedLength?: number;
 
@@ -33,18 +37,23 @@ export class DriveDto {
   @IsIn(MOUNTINGS, { message: `drive.mounting must be one of ${MOUNTINGS.join(', ')}` })
   mounting?: Mounting;
 
+  /** The nut's d·n limit: nominal diameter in mm × rpm (mm·rpm, whatever the unit); 70 000 when absent. */
   @OptionalFinite('drive.dnLimit')
   dnLimit?: number;
 
+  /** Belt tooth pitch, in the axis's `lengthUnit`. */
   @OptionalFinite('drive.beltPitch')
   beltPitch?: number;
 
+  /** Teeth on the drive pulley (a count). */
   @OptionalFinite('drive.pulleyTeeth')
   pulleyTeeth?: number;
 
+  /** Pinion module, in mm (a module is defined in mm whatever the unit). */
   @OptionalFinite('drive.pinionModule')
   pinionModule?: number;
 
+  /** Teeth on the pinion (a count). */
   @OptionalFinite('drive.pinionTeeth')
   pinionTeeth?: number;
 }

@@ -38,19 +38,19 @@ export class TestProgramQuery {
   @Matches(/^\s*-?[\d.]+(\s*,\s*-?[\d.]+)*\s*$/, { message: 'targets must be comma-separated numbers (in lengthUnit)' })
   targets?: string;
 
-  /** Where the travel trial starts. */
+  /** Where the travel trial starts, in `lengthUnit`. */
   @Optional()
   @Transform(toNumber)
   @IsNumber(FINITE, { message: 'start must be a number (in lengthUnit)' })
   start?: number;
 
-  /** Runs in each direction (repeat-and-reverse run). */
+  /** Count of runs in each direction (repeat-and-reverse run). */
   @Optional()
   @Transform(toNumber)
   @IsNumber(FINITE, { message: 'runs must be a whole number' })
   runs?: number;
 
-  /** How far past a target the axis goes before approaching it. */
+  /** How far past a target the axis goes before approaching it, in `lengthUnit`. */
   @Optional()
   @Transform(toNumber)
   @IsNumber(FINITE, { message: 'overrun must be a number (in lengthUnit)' })
@@ -84,6 +84,7 @@ export class TestTargetsQuery {
   @LengthUnitField()
   lengthUnit?: LengthUnit;
 
+  /** Clear travel kept beyond the first and last target, in `lengthUnit`. */
   @Optional()
   @Transform(toNumber)
   @IsNumber(FINITE, { message: 'overrun must be a number (in lengthUnit)' })

@@ -18,6 +18,7 @@ const Base: Type<Partial<Omit<CreateAxisDto, Clearing>> & { [K in Clearing]?: nu
  * here keeps the create DTO's number rule, its own condition replacing the inherited ones).
  */
 export class UpdateAxisDto extends Base {
+  /** The fastest feed rate the axis will be asked for, lengthUnit per minute; null clears it. */
   @Clearable()
   maxFeedRate?: number | null;
 

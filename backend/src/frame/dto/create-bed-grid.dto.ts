@@ -39,14 +39,14 @@ export class CreateBedGridDto {
   @OptionalPositive('resolution')
   resolution?: number;
 
-  /** Rows of the grid (points along the bed). */
+  /** Count of rows of the grid (points along the bed). */
   @Optional()
   @IsInt({ message: 'rows must be a whole number' })
   @Min(1, { message: 'rows must be at least 1' })
   @Max(50, { message: 'rows must be at most 50' })
   rows?: number;
 
-  /** Columns of the grid (points across the bed). */
+  /** Count of columns of the grid (points across the bed). */
   @Optional()
   @IsInt({ message: 'columns must be a whole number' })
   @Min(1, { message: 'columns must be at least 1' })

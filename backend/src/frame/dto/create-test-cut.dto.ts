@@ -16,7 +16,7 @@ export class TestCutNominalDto {
   @PositiveLength('nominal.y')
   y: number;
 
-  /** Commanded diameter of the circle. */
+  /** Commanded diameter of the circle, in lengthUnit. */
   @PositiveLength('nominal.circle')
   circle: number;
 }
@@ -46,7 +46,7 @@ export class TestCutMeasuredDto {
   @PositiveLength('measured.circleY')
   circleY: number;
 
-  /** Width of cut the controller did not compensate for; leave out (or 0) when kerf compensation was on. */
+  /** Width of cut the controller did not compensate for, in lengthUnit; leave out (or 0) when kerf compensation was on. */
   @Optional()
   @IsNumber({ allowNaN: false, allowInfinity: false }, { message: 'measured.kerf must be a number' })
   @Min(0, { message: 'measured.kerf must not be negative' })

@@ -33,6 +33,7 @@ export class HistoryQueryDto {
   @Matches(/^[A-Za-z0-9_-]{1,200}$/, { message: 'cursor must be the nextCursor of an earlier page' })
   cursor?: string;
 
+  /** Count of entries to answer with (1 to 200). */
   @Optional()
   @Type(() => Number)
   @IsInt({ message: 'limit must be a whole number' })

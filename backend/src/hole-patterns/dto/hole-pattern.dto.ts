@@ -67,13 +67,13 @@ export class GridDto {
   @Max(LIMIT, { message: `originY must be within ±${LIMIT}` })
   originY: number;
 
-  /** Rows of holes. */
+  /** Count of rows of holes. */
   @IsInt({ message: 'rows must be a whole number' })
   @Min(1, { message: 'rows must be at least 1' })
   @Max(100, { message: 'rows must be at most 100' })
   rows: number;
 
-  /** Columns of holes. */
+  /** Count of columns of holes. */
   @IsInt({ message: 'columns must be a whole number' })
   @Min(1, { message: 'columns must be at least 1' })
   @Max(100, { message: 'columns must be at most 100' })
@@ -117,12 +117,13 @@ export class CircleDto {
   @Max(LIMIT, { message: `circleDiameter must be at most ${LIMIT}` })
   circleDiameter: number;
 
-  /** Holes on the circle. */
+  /** Count of holes on the circle. */
   @IsInt({ message: 'count must be a whole number of holes' })
   @Min(1, { message: 'count must be at least 1' })
   @Max(360, { message: 'count must be at most 360' })
   count: number;
 
+  /** Angle of the first hole from the +x direction, counter-clockwise, in degrees. */
   @IsNumber(FINITE, { message: 'startAngleDeg must be an angle in degrees from the +x direction' })
   @Min(-360, { message: 'startAngleDeg must be within ±360°' })
   @Max(360, { message: 'startAngleDeg must be within ±360°' })

@@ -18,6 +18,7 @@ import { Optional } from '../../common/optional.js';
 
 /** In the request's lengthUnit; the 1 mm to 100 m range is checked once converted (MachinesService). */
 export class WorkAreaDto {
+  /** Usable area along X, in `lengthUnit`. */
   @IsNumber(
     { allowNaN: false, allowInfinity: false },
     { message: 'workArea.x must be a number in lengthUnit (mm when absent)' },
@@ -26,6 +27,7 @@ export class WorkAreaDto {
   @Max(100_000_000, { message: 'workArea.x is too large' })
   x: number;
 
+  /** Usable area along Y, in `lengthUnit`. */
   @IsNumber(
     { allowNaN: false, allowInfinity: false },
     { message: 'workArea.y must be a number in lengthUnit (mm when absent)' },

@@ -66,14 +66,14 @@ export class CreateRailDto {
   @Min(0, { message: 'firstHole must not be negative' })
   firstHole: number;
 
-  /** Centre-to-centre distance to the partner rail (a in S = a × K); null clears it. */
+  /** Centre-to-centre distance to the partner rail (a in S = a × K), in `lengthUnit`; null clears it. */
   @Optional()
   @ValidateIf((_, v) => v !== null)
   @IsNumber(FINITE, { message: `spacing must be a number ${IN_UNIT}: the distance between partner rails` })
   @Min(0, { message: 'spacing must be positive' })
   spacing?: number | null;
 
-  /** Least distance from a hole centre to either end; null: half the bolt head (common practice). */
+  /** Least distance from a hole centre to either end, in `lengthUnit`; null: half the bolt head (common practice). */
   @Optional()
   @ValidateIf((_, v) => v !== null)
   @IsNumber(FINITE, { message: `endDistance must be a number ${IN_UNIT}` })

@@ -80,6 +80,7 @@ export class CreateSweepDto {
   @Min(0, { message: 'resolution must not be negative' })
   resolution?: number;
 
+  /** Air temperature while the sweep was taken, °C. */
   @Optional()
   @IsNumber(FINITE, { message: 'temperatureC must be a number of °C' })
   @Min(-40, { message: 'temperatureC must be at least -40 °C' })

@@ -26,6 +26,7 @@ export class UpdateSweepDetailsDto extends Base {
   @Transform(trim)
   instrument?: string;
 
+  /** Air temperature while the sweep was taken, °C; null clears it. */
   @Clearable()
   temperatureC?: number | null;
 

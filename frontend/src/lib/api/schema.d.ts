@@ -1497,33 +1497,34 @@ export interface components {
             role?: "admin" | "owner" | "technician" | "builder" | "viewer";
             active?: boolean;
         };
+        /**
+         * @description A length unit (1 in = 25.4 mm exactly, 1 thou = 0.001 in, um = µm): the unit of positions, geometry, moves, lead, pitch, diameters, lengths and travel (feed rates in it per minute).
+         * @enum {string}
+         */
+        LengthUnit: "mm" | "um" | "in" | "thou";
         WorkAreaDto: {
+            /** @description Usable area along X, in `lengthUnit`. */
             x: number;
+            /** @description Usable area along Y, in `lengthUnit`. */
             y: number;
         };
         CreateMachineDto: {
+            /** @description Unit of the work area as typed and shown; the lengths are kept in mm. */
+            lengthUnit?: components["schemas"]["LengthUnit"];
             name: string;
             /** @enum {string} */
             kind: "plasma" | "router" | "other";
-            /**
-             * @description Unit of the work area as typed and shown; the lengths are kept in mm.
-             * @enum {string}
-             */
-            lengthUnit?: "mm" | "um" | "in" | "thou";
             workArea: components["schemas"]["WorkAreaDto"];
             notes?: string;
             /** Format: uuid */
             targetSetId?: string;
         };
         UpdateMachineDto: {
+            /** @description Unit of the work area as typed and shown; the lengths are kept in mm. */
+            lengthUnit?: components["schemas"]["LengthUnit"];
             name?: string;
             /** @enum {string} */
             kind?: "plasma" | "router" | "other";
-            /**
-             * @description Unit of the work area as typed and shown; the lengths are kept in mm.
-             * @enum {string}
-             */
-            lengthUnit?: "mm" | "um" | "in" | "thou";
             workArea?: components["schemas"]["WorkAreaDto"];
             notes?: string;
             /** Format: uuid */
@@ -1544,38 +1545,38 @@ export interface components {
                 [key: string]: unknown;
             };
         };
+        /**
+         * @description A reading unit (1 in = 25.4 mm exactly, 1 thou = 0.001 in, um = µm): the unit of indicator readings, deviations and heights.
+         * @enum {string}
+         */
+        ReadingUnit: "mm" | "um" | "in" | "thou";
         StraightnessDto: {
+            /** @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly). */
+            lengthUnit?: components["schemas"]["LengthUnit"];
+            /** @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly). */
+            readingUnit?: components["schemas"]["ReadingUnit"];
             /** @description Stations along the rail, in `lengthUnit`. */
             positions: number[];
             /** @description Indicator readings in `readingUnit`. */
             readings: number[];
-            /**
-             * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
-             * @enum {string}
-             */
-            lengthUnit?: "mm" | "um" | "in" | "thou";
-            /**
-             * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
-             * @enum {string}
-             */
-            readingUnit?: "mm" | "um" | "in" | "thou";
         };
         ParallelismDto: {
+            /** @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly). */
+            lengthUnit?: components["schemas"]["LengthUnit"];
+            /** @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly). */
+            readingUnit?: components["schemas"]["ReadingUnit"];
+            /** @description Station positions along the rails, in `lengthUnit`. */
             positions: number[];
+            /** @description Rail A's reading at each station, in `readingUnit`. */
             railA: number[];
+            /** @description Rail B's reading at each station, in `readingUnit`. */
             railB: number[];
-            /**
-             * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
-             * @enum {string}
-             */
-            lengthUnit?: "mm" | "um" | "in" | "thou";
-            /**
-             * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
-             * @enum {string}
-             */
-            readingUnit?: "mm" | "um" | "in" | "thou";
         };
         SquarenessDto: {
+            /** @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly). */
+            lengthUnit?: components["schemas"]["LengthUnit"];
+            /** @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly). */
+            readingUnit?: components["schemas"]["ReadingUnit"];
             /** @description Side along X, in lengthUnit. */
             sideX: number;
             /** @description Side along Y, in lengthUnit. */
@@ -1586,43 +1587,32 @@ export interface components {
             diagonal2: number;
             /** @description Distance between the gantry's two bearing rails, in lengthUnit. */
             gantrySpan?: number;
-            /**
-             * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
-             * @enum {string}
-             */
-            lengthUnit?: "mm" | "um" | "in" | "thou";
-            /**
-             * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
-             * @enum {string}
-             */
-            readingUnit?: "mm" | "um" | "in" | "thou";
         };
         GridPointDto: {
             /** @description Position on the bed, in `lengthUnit`. */
             x: number;
+            /** @description Position on the bed, in `lengthUnit`. */
             y: number;
             /** @description Height reading in `readingUnit`. */
             z: number;
         };
         FlatnessDto: {
+            /** @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly). */
+            lengthUnit?: components["schemas"]["LengthUnit"];
+            /** @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly). */
+            readingUnit?: components["schemas"]["ReadingUnit"];
             points: components["schemas"]["GridPointDto"][];
-            /**
-             * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
-             * @enum {string}
-             */
-            lengthUnit?: "mm" | "um" | "in" | "thou";
-            /**
-             * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
-             * @enum {string}
-             */
-            readingUnit?: "mm" | "um" | "in" | "thou";
         };
         DriveCalculationDto: {
+            /** @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly). */
+            lengthUnit?: components["schemas"]["LengthUnit"];
+            /** @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly). */
+            readingUnit?: components["schemas"]["ReadingUnit"];
             /** @enum {string} */
             type: "screw" | "belt" | "rack";
             /** @description Full steps per motor revolution. */
             motorStepsPerRev: number;
-            /** @description Microsteps per full step set on the driver. */
+            /** @description Microsteps per full step set on the driver (a count). */
             microsteps: number;
             /** @description Motor turns per turn of the screw or pulley (no unit); 1 when absent. */
             gearRatio?: number;
@@ -1632,22 +1622,12 @@ export interface components {
             threadsPerInch?: number;
             /** @description Belt tooth pitch, in lengthUnit. */
             beltPitch?: number;
-            /** @description Teeth on the drive pulley. */
+            /** @description Teeth on the drive pulley (a count). */
             pulleyTeeth?: number;
-            /** @description Teeth on the pinion. */
+            /** @description Teeth on the pinion (a count). */
             pinionTeeth?: number;
             /** @description Pinion module, in mm (a module is defined in mm whatever the unit). */
             pinionModule?: number;
-            /**
-             * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
-             * @enum {string}
-             */
-            lengthUnit?: "mm" | "um" | "in" | "thou";
-            /**
-             * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
-             * @enum {string}
-             */
-            readingUnit?: "mm" | "um" | "in" | "thou";
         };
         TravelMoveDto: {
             /** @description Commanded move, in `lengthUnit`. */
@@ -1656,22 +1636,17 @@ export interface components {
             measured: number;
         };
         TravelTrialDto: {
+            /** @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly). */
+            lengthUnit?: components["schemas"]["LengthUnit"];
+            /** @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly). */
+            readingUnit?: components["schemas"]["ReadingUnit"];
+            /** @description Steps per mm set in the controller while the moves were made. */
             stepsPerMmUsed: number;
             /** @description Steps per mm worked out from the drive; a correction far from it is flagged (the value in use when absent). */
             theoreticalStepsPerMm?: number;
             moves: components["schemas"]["TravelMoveDto"][];
             /** @description Fit without an offset (moves measured from a zeroed start). */
             throughOrigin?: boolean;
-            /**
-             * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
-             * @enum {string}
-             */
-            lengthUnit?: "mm" | "um" | "in" | "thou";
-            /**
-             * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
-             * @enum {string}
-             */
-            readingUnit?: "mm" | "um" | "in" | "thou";
         };
         PositioningRunDto: {
             /** @enum {string} */
@@ -1680,21 +1655,19 @@ export interface components {
             deviations: number[];
         };
         PositioningDto: {
+            /** @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly). */
+            lengthUnit?: components["schemas"]["LengthUnit"];
+            /** @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly). */
+            readingUnit?: components["schemas"]["ReadingUnit"];
             /** @description Target positions, in `lengthUnit`. */
             targets: number[];
             runs: components["schemas"]["PositioningRunDto"][];
-            /**
-             * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
-             * @enum {string}
-             */
-            lengthUnit?: "mm" | "um" | "in" | "thou";
-            /**
-             * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
-             * @enum {string}
-             */
-            readingUnit?: "mm" | "um" | "in" | "thou";
         };
         ScrewSpeedDto: {
+            /** @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly). */
+            lengthUnit?: components["schemas"]["LengthUnit"];
+            /** @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly). */
+            readingUnit?: components["schemas"]["ReadingUnit"];
             /** @description Screw nominal diameter, in lengthUnit. */
             nominalDiameter: number;
             /** @description Screw root diameter, in lengthUnit. */
@@ -1709,24 +1682,18 @@ export interface components {
             feedRate: number;
             /** @description Nominal diameter in mm × rpm limit of the nut (defined in mm whatever the unit); 70 000 (rolled screws) when absent. */
             dnLimit?: number;
-            /**
-             * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
-             * @enum {string}
-             */
-            lengthUnit?: "mm" | "um" | "in" | "thou";
-            /**
-             * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
-             * @enum {string}
-             */
-            readingUnit?: "mm" | "um" | "in" | "thou";
         };
         HoleReadingDto: {
-            /** @description Index of the hole from the rail's start (0 = first hole). */
+            /** @description The hole from the rail's start, index from 0 (0 = first hole). */
             hole: number;
             /** @description Reading at the hole once tightened, in `readingUnit`. */
             reading: number;
         };
         BoltDownDto: {
+            /** @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly). */
+            lengthUnit?: components["schemas"]["LengthUnit"];
+            /** @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly). */
+            readingUnit?: components["schemas"]["ReadingUnit"];
             /** @description Rail length, in lengthUnit. */
             length: number;
             /** @description Hole pitch, in lengthUnit. */
@@ -1739,16 +1706,6 @@ export interface components {
              */
             mode?: "face" | "line";
             readings?: components["schemas"]["HoleReadingDto"][];
-            /**
-             * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
-             * @enum {string}
-             */
-            lengthUnit?: "mm" | "um" | "in" | "thou";
-            /**
-             * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
-             * @enum {string}
-             */
-            readingUnit?: "mm" | "um" | "in" | "thou";
         };
         AxisTravelDto: {
             axis: string;
@@ -1758,19 +1715,13 @@ export interface components {
             workSize: number;
         };
         TravelEnvelopeDto: {
+            /** @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly). */
+            lengthUnit?: components["schemas"]["LengthUnit"];
+            /** @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly). */
+            readingUnit?: components["schemas"]["ReadingUnit"];
             axes: components["schemas"]["AxisTravelDto"][];
-            /** @description Clearance beyond the work at each end of every axis. */
+            /** @description Clearance beyond the work at each end of every axis, in `lengthUnit`. */
             marginPerSide?: number;
-            /**
-             * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
-             * @enum {string}
-             */
-            lengthUnit?: "mm" | "um" | "in" | "thou";
-            /**
-             * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
-             * @enum {string}
-             */
-            readingUnit?: "mm" | "um" | "in" | "thou";
         };
         CutSizeDto: {
             /** @description Size commanded, in lengthUnit. */
@@ -1787,6 +1738,10 @@ export interface components {
             measuredY: number;
         };
         TestCutDto: {
+            /** @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly). */
+            lengthUnit?: components["schemas"]["LengthUnit"];
+            /** @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly). */
+            readingUnit?: components["schemas"]["ReadingUnit"];
             x: components["schemas"]["CutSizeDto"];
             y: components["schemas"]["CutSizeDto"];
             /** @description Steps per mm set for X when the cut was made. */
@@ -1802,25 +1757,12 @@ export interface components {
             circle?: components["schemas"]["CutCircleDto"];
             /** @description Largest difference of the circle's two diameters that passes, in lengthUnit. */
             ovalityTolerance?: number;
-            /**
-             * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
-             * @enum {string}
-             */
-            lengthUnit?: "mm" | "um" | "in" | "thou";
-            /**
-             * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
-             * @enum {string}
-             */
-            readingUnit?: "mm" | "um" | "in" | "thou";
         };
         CreateRailDto: {
+            /** @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly). */
+            lengthUnit?: components["schemas"]["LengthUnit"];
             label: string;
             axis: string;
-            /**
-             * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
-             * @enum {string}
-             */
-            lengthUnit?: "mm" | "um" | "in" | "thou";
             /** @description Rail length, in lengthUnit. */
             length: number;
             /** @description Profile (rail) size in mm whatever lengthUnit: the catalogue size, 15, 20, 25 …; null clears it. */
@@ -1829,21 +1771,18 @@ export interface components {
             holePitch: number;
             /** @description First hole's centre from the rail's start, in lengthUnit. */
             firstHole: number;
-            /** @description Centre-to-centre distance to the partner rail (a in S = a × K); null clears it. */
+            /** @description Centre-to-centre distance to the partner rail (a in S = a × K), in `lengthUnit`; null clears it. */
             spacing?: number | null;
-            /** @description Least distance from a hole centre to either end; null: half the bolt head (common practice). */
+            /** @description Least distance from a hole centre to either end, in `lengthUnit`; null: half the bolt head (common practice). */
             endDistance?: number | null;
             /** Format: uuid */
             partnerRailId?: string | null;
         };
         UpdateRailDto: {
+            /** @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly). */
+            lengthUnit?: components["schemas"]["LengthUnit"];
             label?: string;
             axis?: string;
-            /**
-             * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
-             * @enum {string}
-             */
-            lengthUnit?: "mm" | "um" | "in" | "thou";
             /** @description Rail length, in lengthUnit. */
             length?: number;
             /** @description Profile (rail) size in mm whatever lengthUnit: the catalogue size, 15, 20, 25 …; null clears it. */
@@ -1852,9 +1791,9 @@ export interface components {
             holePitch?: number;
             /** @description First hole's centre from the rail's start, in lengthUnit. */
             firstHole?: number;
-            /** @description Centre-to-centre distance to the partner rail (a in S = a × K); null clears it. */
+            /** @description Centre-to-centre distance to the partner rail (a in S = a × K), in `lengthUnit`; null clears it. */
             spacing?: number | null;
-            /** @description Least distance from a hole centre to either end; null: half the bolt head (common practice). */
+            /** @description Least distance from a hole centre to either end, in `lengthUnit`; null: half the bolt head (common practice). */
             endDistance?: number | null;
             /** Format: uuid */
             partnerRailId?: string | null;
@@ -1866,18 +1805,12 @@ export interface components {
             reading: number;
         };
         CreateSweepDto: {
+            /** @description Unit of the readings and of the instrument resolution. */
+            readingUnit?: components["schemas"]["ReadingUnit"];
+            /** @description Unit of the station positions. */
+            lengthUnit?: components["schemas"]["LengthUnit"];
             /** Format: uuid */
             id?: string;
-            /**
-             * @description Unit of the readings and of the instrument resolution.
-             * @enum {string}
-             */
-            readingUnit?: "mm" | "um" | "in" | "thou";
-            /**
-             * @description Unit of the station positions.
-             * @enum {string}
-             */
-            lengthUnit?: "mm" | "um" | "in" | "thou";
             /**
              * @description The face the indicator reads: side (sideways straightness) or top (heights); side when absent.
              * @enum {string}
@@ -1887,6 +1820,7 @@ export interface components {
             instrument?: string;
             /** @description Smallest step of the instrument, in `readingUnit`. */
             resolution?: number;
+            /** @description Air temperature while the sweep was taken, °C. */
             temperatureC?: number;
             /** @enum {string} */
             phase: "as-found" | "as-left";
@@ -1901,6 +1835,7 @@ export interface components {
         };
         UpdateSweepDetailsDto: {
             instrument?: string;
+            /** @description Air temperature while the sweep was taken, °C. */
             temperatureC?: number | null;
             takenBy?: string;
             boltSize?: string | null;
@@ -1910,21 +1845,15 @@ export interface components {
             notes?: string;
         };
         CreateBoltDownDto: {
+            /** @description Unit the readings and the band are typed in; mm when absent. */
+            readingUnit?: components["schemas"]["ReadingUnit"];
+            /** @description Unit the hole positions are shown in; the rail's own length unit when absent. */
+            lengthUnit?: components["schemas"]["LengthUnit"];
             /**
              * @description "face": aim every hole at the first fixed reading; "line": at the line through the nearest fixed holes.
              * @enum {string}
              */
             mode: "face" | "line";
-            /**
-             * @description Unit the readings and the band are typed in; mm when absent.
-             * @enum {string}
-             */
-            readingUnit?: "mm" | "um" | "in" | "thou";
-            /**
-             * @description Unit the hole positions are shown in; the rail's own length unit when absent.
-             * @enum {string}
-             */
-            lengthUnit?: "mm" | "um" | "in" | "thou";
             /**
              * @description Half-width of the band around the aim that counts as on target, in `readingUnit`; when absent, half
              *     the rail straightness target of the machine's target set.
@@ -1932,7 +1861,7 @@ export interface components {
             band?: number;
         };
         RecordHoleDto: {
-            /** @description Indicator reading at the hole, in the bolt-down's unit. */
+            /** @description Indicator reading at the hole, in the bolt-down's `readingUnit`. */
             reading: number;
             /** @description true: the hole is tightened at this reading; false: typed but not tightened, or loosened again. */
             fixed: boolean;
@@ -1947,18 +1876,12 @@ export interface components {
             reason: string;
         };
         FinalSweepDto: {
+            /** @description Unit of the readings and of the instrument resolution. */
+            readingUnit?: components["schemas"]["ReadingUnit"];
+            /** @description Unit of the station positions. */
+            lengthUnit?: components["schemas"]["LengthUnit"];
             /** Format: uuid */
             id?: string;
-            /**
-             * @description Unit of the readings and of the instrument resolution.
-             * @enum {string}
-             */
-            readingUnit?: "mm" | "um" | "in" | "thou";
-            /**
-             * @description Unit of the station positions.
-             * @enum {string}
-             */
-            lengthUnit?: "mm" | "um" | "in" | "thou";
             /**
              * @description The face the indicator reads: side (sideways straightness) or top (heights); side when absent.
              * @enum {string}
@@ -1968,6 +1891,7 @@ export interface components {
             instrument?: string;
             /** @description Smallest step of the instrument, in `readingUnit`. */
             resolution?: number;
+            /** @description Air temperature while the sweep was taken, °C. */
             temperatureC?: number;
             /** @enum {string} */
             phase: "as-found" | "as-left";
@@ -1981,6 +1905,8 @@ export interface components {
             takenAt?: string;
         };
         CreateDiagonalCheckDto: {
+            /** @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly). */
+            lengthUnit?: components["schemas"]["LengthUnit"];
             /** @description Side along X, in lengthUnit. */
             sideX: number;
             /** @description Side along Y, in lengthUnit. */
@@ -1993,29 +1919,18 @@ export interface components {
             gantrySpan?: number;
             /** @description Smallest step of the tape or rule the diagonals were read with, in lengthUnit. */
             resolution?: number;
-            /**
-             * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
-             * @enum {string}
-             */
-            lengthUnit?: "mm" | "um" | "in" | "thou";
             note?: string;
         };
         CreateBedGridDto: {
-            /**
-             * @description Unit of the grid positions x and y (mm when absent).
-             * @enum {string}
-             */
-            lengthUnit?: "mm" | "um" | "in" | "thou";
-            /**
-             * @description Unit of the heights z and of the gauge's resolution (mm when absent).
-             * @enum {string}
-             */
-            readingUnit?: "mm" | "um" | "in" | "thou";
+            /** @description Unit of the grid positions x and y (mm when absent). */
+            lengthUnit?: components["schemas"]["LengthUnit"];
+            /** @description Unit of the heights z and of the gauge's resolution (mm when absent). */
+            readingUnit?: components["schemas"]["ReadingUnit"];
             /** @description Smallest step of the height gauge, in readingUnit. */
             resolution?: number;
-            /** @description Rows of the grid (points along the bed). */
+            /** @description Count of rows of the grid (points along the bed). */
             rows?: number;
-            /** @description Columns of the grid (points across the bed). */
+            /** @description Count of columns of the grid (points across the bed). */
             columns?: number;
             points: components["schemas"]["GridPointDto"][];
             note?: string;
@@ -2025,7 +1940,7 @@ export interface components {
             x: number;
             /** @description Side along Y commanded, in lengthUnit. */
             y: number;
-            /** @description Commanded diameter of the circle. */
+            /** @description Commanded diameter of the circle, in lengthUnit. */
             circle: number;
         };
         TestCutMeasuredDto: {
@@ -2041,7 +1956,7 @@ export interface components {
             circleX: number;
             /** @description Circle diameter measured along Y, in lengthUnit. */
             circleY: number;
-            /** @description Width of cut the controller did not compensate for; leave out (or 0) when kerf compensation was on. */
+            /** @description Width of cut the controller did not compensate for, in lengthUnit; leave out (or 0) when kerf compensation was on. */
             kerf?: number;
         };
         StepsPerMmDto: {
@@ -2051,11 +1966,8 @@ export interface components {
             y?: number;
         };
         CreateTestCutDto: {
-            /**
-             * @description Unit of every size, diagonal, diameter, kerf, plate thickness and resolution (mm when absent).
-             * @enum {string}
-             */
-            lengthUnit?: "mm" | "um" | "in" | "thou";
+            /** @description Unit of every size, diagonal, diameter, kerf, plate thickness and resolution (mm when absent). */
+            lengthUnit?: components["schemas"]["LengthUnit"];
             /** @description Thickness of the plate cut, in lengthUnit: with the part size it picks the ISO 9013 band. */
             plateThickness?: number;
             /** @description Smallest step of the caliper or rule the sizes were read with, in lengthUnit. */
@@ -2090,34 +2002,42 @@ export interface components {
         DriveDto: {
             /** @enum {string} */
             type: "screw" | "belt" | "rack";
+            /** @description Screw lead (travel per turn), in the axis's `lengthUnit`. */
             lead?: number;
             /** @description A single-start screw's lead given as threads per inch (lead = 1/threadsPerInch in), in place of lead. */
             threadsPerInch?: number;
+            /** @description Screw's nominal (outside) diameter, in the axis's `lengthUnit`. */
             nominalDiameter?: number;
+            /** @description Screw's root diameter, in the axis's `lengthUnit`. */
             rootDiameter?: number;
+            /** @description Screw length between its supports, in the axis's `lengthUnit`. */
             unsupportedLength?: number;
             /** @enum {string} */
             mounting?: "fixed-free" | "supported-supported" | "fixed-supported" | "fixed-fixed";
+            /** @description The nut's d·n limit: nominal diameter in mm × rpm (mm·rpm, whatever the unit); 70 000 when absent. */
             dnLimit?: number;
+            /** @description Belt tooth pitch, in the axis's `lengthUnit`. */
             beltPitch?: number;
+            /** @description Teeth on the drive pulley (a count). */
             pulleyTeeth?: number;
+            /** @description Pinion module, in mm (a module is defined in mm whatever the unit). */
             pinionModule?: number;
+            /** @description Teeth on the pinion (a count). */
             pinionTeeth?: number;
         };
         CreateAxisDto: {
+            /** @description The unit the axis is set up in: drive lengths, feed rates (per minute) and travel are typed in it. */
+            lengthUnit?: components["schemas"]["LengthUnit"];
             /** @description "X", "Y1", "Y2", "Z": the first letter is the axis letter the test program moves. */
             name: string;
-            /**
-             * @description The unit the axis is set up in: drive lengths, feed rates (per minute) and travel are typed in it.
-             * @enum {string}
-             */
-            lengthUnit?: "mm" | "um" | "in" | "thou";
             drive: components["schemas"]["DriveDto"];
+            /** @description Full steps per motor revolution (a count: 200 for a 1.8° motor). */
             motorStepsPerRev: number;
+            /** @description Microsteps per full step set on the driver (a count). */
             microsteps: number;
-            /** @description Motor revolutions per revolution of the screw, pulley or pinion; 1 when direct. */
+            /** @description Motor revolutions per revolution of the screw, pulley or pinion (a ratio, no unit); 1 when direct. */
             gearRatio?: number;
-            /** @description The value set in the controller now. In steps per mm. */
+            /** @description The value set in the controller now, in steps per mm. */
             stepsPerMm: number;
             /** @description The fastest feed rate the axis will be asked for, lengthUnit per minute. */
             maxFeedRate?: number;
@@ -2128,19 +2048,18 @@ export interface components {
             notes?: string;
         };
         UpdateAxisDto: {
+            /** @description The unit the axis is set up in: drive lengths, feed rates (per minute) and travel are typed in it. */
+            lengthUnit?: components["schemas"]["LengthUnit"];
             /** @description "X", "Y1", "Y2", "Z": the first letter is the axis letter the test program moves. */
             name?: string;
-            /**
-             * @description The unit the axis is set up in: drive lengths, feed rates (per minute) and travel are typed in it.
-             * @enum {string}
-             */
-            lengthUnit?: "mm" | "um" | "in" | "thou";
             drive?: components["schemas"]["DriveDto"];
+            /** @description Full steps per motor revolution (a count: 200 for a 1.8° motor). */
             motorStepsPerRev?: number;
+            /** @description Microsteps per full step set on the driver (a count). */
             microsteps?: number;
-            /** @description Motor revolutions per revolution of the screw, pulley or pinion; 1 when direct. */
+            /** @description Motor revolutions per revolution of the screw, pulley or pinion (a ratio, no unit); 1 when direct. */
             gearRatio?: number;
-            /** @description The value set in the controller now. In steps per mm. */
+            /** @description The value set in the controller now, in steps per mm. */
             stepsPerMm?: number;
             /** @description The fastest feed rate the axis will be asked for, lengthUnit per minute. */
             maxFeedRate?: number | null;
@@ -2151,16 +2070,10 @@ export interface components {
             notes?: string;
         };
         CreateTravelTrialDto: {
-            /**
-             * @description Unit of the commanded and the measured moves (mm when absent).
-             * @enum {string}
-             */
-            lengthUnit?: "mm" | "um" | "in" | "thou";
-            /**
-             * @description Unit the errors and residuals are shown in, and the instrument resolution is typed in (mm when absent).
-             * @enum {string}
-             */
-            readingUnit?: "mm" | "um" | "in" | "thou";
+            /** @description Unit of the commanded and the measured moves (mm when absent). */
+            lengthUnit?: components["schemas"]["LengthUnit"];
+            /** @description Unit the errors and residuals are shown in, and the instrument resolution is typed in (mm when absent). */
+            readingUnit?: components["schemas"]["ReadingUnit"];
             /** @description Steps per mm in the controller while the moves were made; the axis's value when absent. */
             stepsPerMmUsed?: number;
             moves: components["schemas"]["TravelMoveDto"][];
@@ -2187,16 +2100,10 @@ export interface components {
             deviations: number[];
         };
         CreatePositioningRunDto: {
-            /**
-             * @description Unit of the target positions (mm when absent).
-             * @enum {string}
-             */
-            lengthUnit?: "mm" | "um" | "in" | "thou";
-            /**
-             * @description Unit of the deviations and the instrument resolution (mm when absent).
-             * @enum {string}
-             */
-            readingUnit?: "mm" | "um" | "in" | "thou";
+            /** @description Unit of the target positions (mm when absent). */
+            lengthUnit?: components["schemas"]["LengthUnit"];
+            /** @description Unit of the deviations and the instrument resolution (mm when absent). */
+            readingUnit?: components["schemas"]["ReadingUnit"];
             /** @description Target positions along the axis, in lengthUnit, ascending. */
             targets: number[];
             runs: components["schemas"]["PositioningRunEntryDto"][];
@@ -2219,16 +2126,10 @@ export interface components {
             down: number[];
         };
         CreateBacklashCheckDto: {
-            /**
-             * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
-             * @enum {string}
-             */
-            lengthUnit?: "mm" | "um" | "in" | "thou";
-            /**
-             * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
-             * @enum {string}
-             */
-            readingUnit?: "mm" | "um" | "in" | "thou";
+            /** @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly). */
+            lengthUnit?: components["schemas"]["LengthUnit"];
+            /** @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly). */
+            readingUnit?: components["schemas"]["ReadingUnit"];
             /** @description One near each end of the travel and one near its middle (more are welcome). */
             positions: components["schemas"]["BacklashPositionDto"][];
             /** @description Smallest step the indicator reads, in readingUnit. */
@@ -2258,9 +2159,9 @@ export interface components {
             originX: number;
             /** @description First hole's centre from the outline's lower edge, in lengthUnit. */
             originY: number;
-            /** @description Rows of holes. */
+            /** @description Count of rows of holes. */
             rows: number;
-            /** @description Columns of holes. */
+            /** @description Count of columns of holes. */
             columns: number;
             /** @description Distance between columns, in lengthUnit. */
             pitchX: number;
@@ -2276,22 +2177,19 @@ export interface components {
             centreY: number;
             /** @description Diameter of the circle the hole centres lie on, in lengthUnit. */
             circleDiameter: number;
-            /** @description Holes on the circle. */
+            /** @description Count of holes on the circle. */
             count: number;
-            /** @description In degrees. */
+            /** @description Angle of the first hole from the +x direction, counter-clockwise, in degrees. */
             startAngleDeg: number;
             /** @description Hole diameter, in lengthUnit. */
             diameter: number;
         };
         HolePatternDto: {
+            /** @description Unit of the outline and every coordinate and diameter of the entry; mm when absent. */
+            lengthUnit?: components["schemas"]["LengthUnit"];
             name: string;
             /** @enum {string} */
             reference: "left" | "right" | "top" | "bottom-left" | "bottom-right" | "top-left" | "top-right" | "bottom";
-            /**
-             * @description Unit of the outline and every coordinate and diameter of the entry; mm when absent.
-             * @enum {string}
-             */
-            lengthUnit?: "mm" | "um" | "in" | "thou";
             /** @description Outline width, in lengthUnit. */
             width: number;
             /** @description Outline height, in lengthUnit. */
@@ -2313,6 +2211,7 @@ export interface components {
             /** @description The message held a set-your-password link, which only its recipient may see. */
             linkHidden: boolean;
             attachments: {
+                /** @description The attachment's place in the message, index from 0. */
                 index: number;
                 filename: string;
                 contentType: string;
@@ -2493,10 +2392,15 @@ export interface components {
         MachineListItem: {
             /** @description Numbers of required checks, counted as the readiness board counts (waivers applied); `blocking` names the first check that stops approval. */
             checks: {
+                /** @description Count of required checks. */
                 total: number;
+                /** @description Count of checks within their targets. */
                 within: number;
+                /** @description Count of checks outside their targets. */
                 outside: number;
+                /** @description Count of checks waived. */
                 waived: number;
+                /** @description Count of checks not yet recorded. */
                 notStarted: number;
                 blocking: components["schemas"]["BlockingCheckRef"] | null;
             };
@@ -2508,17 +2412,18 @@ export interface components {
             state: "being-built" | "awaiting-approval" | "ready-to-cut" | "recheck-due" | "reopened" | "retired";
             /** @description Usable cutting area along X and Y, in mm. */
             workArea: {
+                /** @description Along X, mm. */
                 x: number;
+                /** @description Along Y, mm. */
                 y: number;
             };
-            /**
-             * @description The unit the work area was typed in and is shown in.
-             * @enum {string}
-             */
-            lengthUnit: "mm" | "um" | "in" | "thou";
+            /** @description The unit the work area was typed in and is shown in. */
+            lengthUnit: components["schemas"]["LengthUnit"];
             /** @description The work area along X and Y, in lengthUnit. */
             workAreaInLengthUnit: {
+                /** @description Along X, in `lengthUnit`. */
                 x: number;
+                /** @description Along Y, in `lengthUnit`. */
                 y: number;
             };
             notes: string;
@@ -2548,17 +2453,18 @@ export interface components {
             state: "being-built" | "awaiting-approval" | "ready-to-cut" | "recheck-due" | "reopened" | "retired";
             /** @description Usable cutting area along X and Y, in mm. */
             workArea: {
+                /** @description Along X, mm. */
                 x: number;
+                /** @description Along Y, mm. */
                 y: number;
             };
-            /**
-             * @description The unit the work area was typed in and is shown in.
-             * @enum {string}
-             */
-            lengthUnit: "mm" | "um" | "in" | "thou";
+            /** @description The unit the work area was typed in and is shown in. */
+            lengthUnit: components["schemas"]["LengthUnit"];
             /** @description The work area along X and Y, in lengthUnit. */
             workAreaInLengthUnit: {
+                /** @description Along X, in `lengthUnit`. */
                 x: number;
+                /** @description Along Y, in `lengthUnit`. */
                 y: number;
             };
             notes: string;
@@ -2618,18 +2524,15 @@ export interface components {
             message: string;
         };
         RailListItem: {
-            /** @description How many sweeps the rail has. */
+            /** @description Count of sweeps the rail has. */
             sweepCount: number;
             latestSweep: components["schemas"]["SweepSummary"] | null;
             id: string;
             machineId: string;
             label: string;
             axis: string;
-            /**
-             * @description Unit the lengths below were typed in; `length`, `holePitch`, … are in it, the `…Mm` twins in mm.
-             * @enum {string}
-             */
-            lengthUnit: "mm" | "um" | "in" | "thou";
+            /** @description Unit the lengths below were typed in; `length`, `holePitch`, … are in it, the `…Mm` twins in mm. */
+            lengthUnit: components["schemas"]["LengthUnit"];
             /** @description Rail length, in lengthUnit. */
             length: number;
             /** @description Distance between neighbouring mounting holes, in lengthUnit. */
@@ -2656,8 +2559,11 @@ export interface components {
             partnerRailId: string | null;
             /** @description Hole centres from the rail's start, in mm (`position`) and in lengthUnit (`at`). */
             holes: {
+                /** @description The hole from the rail's start, index from 0. */
                 index: number;
+                /** @description Hole centre from the rail's start, mm. */
                 position: number;
+                /** @description Hole centre from the rail's start, in `lengthUnit`. */
                 at: number;
             }[];
             typicalBoltSize: string | null;
@@ -2686,16 +2592,10 @@ export interface components {
             };
             /** @enum {string} */
             face: "side" | "top";
-            /**
-             * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
-             * @enum {string}
-             */
-            readingUnit: "mm" | "um" | "in" | "thou";
-            /**
-             * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
-             * @enum {string}
-             */
-            lengthUnit: "mm" | "um" | "in" | "thou";
+            /** @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly). */
+            readingUnit: components["schemas"]["ReadingUnit"];
+            /** @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly). */
+            lengthUnit: components["schemas"]["LengthUnit"];
             /** @description Largest local slope of the judged residuals, mm/m (null on sweeps saved before it was kept). */
             localSlopeMmPerM: number | null;
             unreadable?: string;
@@ -2705,11 +2605,8 @@ export interface components {
             machineId: string;
             label: string;
             axis: string;
-            /**
-             * @description Unit the lengths below were typed in; `length`, `holePitch`, … are in it, the `…Mm` twins in mm.
-             * @enum {string}
-             */
-            lengthUnit: "mm" | "um" | "in" | "thou";
+            /** @description Unit the lengths below were typed in; `length`, `holePitch`, … are in it, the `…Mm` twins in mm. */
+            lengthUnit: components["schemas"]["LengthUnit"];
             /** @description Rail length, in lengthUnit. */
             length: number;
             /** @description Distance between neighbouring mounting holes, in lengthUnit. */
@@ -2736,8 +2633,11 @@ export interface components {
             partnerRailId: string | null;
             /** @description Hole centres from the rail's start, in mm (`position`) and in lengthUnit (`at`). */
             holes: {
+                /** @description The hole from the rail's start, index from 0. */
                 index: number;
+                /** @description Hole centre from the rail's start, mm. */
                 position: number;
+                /** @description Hole centre from the rail's start, in `lengthUnit`. */
                 at: number;
             }[];
             typicalBoltSize: string | null;
@@ -2751,7 +2651,7 @@ export interface components {
             railId: string;
             machineId: string;
             takenBy: string;
-            /** @description How many stations were read. */
+            /** @description Count of stations read. */
             stationCount: number;
             createdAt: string;
             locked: boolean;
@@ -2774,16 +2674,10 @@ export interface components {
             };
             /** @enum {string} */
             face: "side" | "top";
-            /**
-             * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
-             * @enum {string}
-             */
-            readingUnit: "mm" | "um" | "in" | "thou";
-            /**
-             * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
-             * @enum {string}
-             */
-            lengthUnit: "mm" | "um" | "in" | "thou";
+            /** @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly). */
+            readingUnit: components["schemas"]["ReadingUnit"];
+            /** @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly). */
+            lengthUnit: components["schemas"]["LengthUnit"];
             /** @description Largest local slope of the judged residuals, mm/m (null on sweeps saved before it was kept). */
             localSlopeMmPerM: number | null;
             unreadable?: string;
@@ -2792,23 +2686,19 @@ export interface components {
             id: string;
             railId: string;
             machineId: string;
-            /**
-             * @description Positions are in lengthUnit, readings and resolution in readingUnit, as typed; the `…Mm` twins in mm.
-             * @enum {string}
-             */
-            lengthUnit: "mm" | "um" | "in" | "thou";
-            /**
-             * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
-             * @enum {string}
-             */
-            readingUnit: "mm" | "um" | "in" | "thou";
+            /** @description Positions are in lengthUnit, readings and resolution in readingUnit, as typed; the `…Mm` twins in mm. */
+            lengthUnit: components["schemas"]["LengthUnit"];
+            /** @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly). */
+            readingUnit: components["schemas"]["ReadingUnit"];
             /** @enum {string} */
             face: "side" | "top";
             /** @description Each station: `position` in lengthUnit and in mm, `reading` in readingUnit as typed and in mm. */
             stations: {
+                /** @description Station position, in `lengthUnit`. */
                 position: number;
                 /** @description In mm. */
                 positionMm: number;
+                /** @description Indicator reading, in `readingUnit`. */
                 reading: number;
                 /** @description In mm. */
                 readingMm: number;
@@ -2865,9 +2755,13 @@ export interface components {
         };
         /** @description Stored engine result of a sweep; every length in mm. */
         StoredLine: {
+            /** @description Rise of the line per unit of position, mm/mm (a ratio of lengths). */
             slope: number;
+            /** @description Height of the line at position 0, mm. */
             intercept: number;
+            /** @description Straightness about the line, mm. */
             straightness: number;
+            /** @description Each station's deviation from the line, mm. */
             residuals: number[];
         };
         BoltDownResponse: {
@@ -2883,26 +2777,20 @@ export interface components {
             };
             /** @enum {string} */
             mode: "face" | "line";
-            /**
-             * @description Readings, aims and the band are in readingUnit; hole positions `at` in lengthUnit (`position` in mm).
-             * @enum {string}
-             */
-            readingUnit: "mm" | "um" | "in" | "thou";
-            /**
-             * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
-             * @enum {string}
-             */
-            lengthUnit: "mm" | "um" | "in" | "thou";
+            /** @description Readings, aims and the band are in readingUnit; hole positions `at` in lengthUnit (`position` in mm). */
+            readingUnit: components["schemas"]["ReadingUnit"];
+            /** @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly). */
+            lengthUnit: components["schemas"]["LengthUnit"];
             /** @description Half-width around the aim that counts as on target, in readingUnit (`bandMm`: in mm). */
             band: number;
             /** @description In mm. */
             bandMm: number;
             holes: components["schemas"]["BoltDownHoleResponse"][];
-            /** @description Index of the hole to fix next (null when every hole is fixed). */
+            /** @description The hole to fix next, index from 0 along the rail (null when every hole is fixed). */
             nextHole: number | null;
-            /** @description How many holes are fixed. */
+            /** @description Count of holes fixed. */
             fixedCount: number;
-            /** @description How many holes the rail has. */
+            /** @description Count of holes the rail has. */
             holeCount: number;
             complete: boolean;
             finalSweepId: string | null;
@@ -2919,12 +2807,13 @@ export interface components {
             unreadable?: string;
         };
         BoltDownHoleResponse: {
+            /** @description The hole along the rail from its start, index from 0. */
             index: number;
             /** @description Hole centre, mm from the rail's start; `at` the same in the bolt-down's lengthUnit. */
             position: number;
             /** @description Hole centre from the rail's start, in the bolt-down's lengthUnit. */
             at: number;
-            /** @description Rank in the proposed fixing order (0 = first). */
+            /** @description Rank in the proposed fixing order, index from 0 (0 = first). */
             order: number;
             /** @description Reading to aim for, in the bolt-down's readingUnit (null until the first hole is fixed). */
             target: number | null;
@@ -2958,26 +2847,20 @@ export interface components {
             };
             /** @enum {string} */
             mode: "face" | "line";
-            /**
-             * @description Readings, aims and the band are in readingUnit; hole positions `at` in lengthUnit (`position` in mm).
-             * @enum {string}
-             */
-            readingUnit: "mm" | "um" | "in" | "thou";
-            /**
-             * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
-             * @enum {string}
-             */
-            lengthUnit: "mm" | "um" | "in" | "thou";
+            /** @description Readings, aims and the band are in readingUnit; hole positions `at` in lengthUnit (`position` in mm). */
+            readingUnit: components["schemas"]["ReadingUnit"];
+            /** @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly). */
+            lengthUnit: components["schemas"]["LengthUnit"];
             /** @description Half-width around the aim that counts as on target, in readingUnit (`bandMm`: in mm). */
             band: number;
             /** @description In mm. */
             bandMm: number;
             holes: components["schemas"]["BoltDownHoleResponse"][];
-            /** @description Index of the hole to fix next (null when every hole is fixed). */
+            /** @description The hole to fix next, index from 0 along the rail (null when every hole is fixed). */
             nextHole: number | null;
-            /** @description How many holes are fixed. */
+            /** @description Count of holes fixed. */
             fixedCount: number;
-            /** @description How many holes the rail has. */
+            /** @description Count of holes the rail has. */
             holeCount: number;
             complete: boolean;
             finalSweepId: string | null;
@@ -3005,7 +2888,7 @@ export interface components {
             /** @description In radians. */
             outOfSquareRad: number;
             /**
-             * @description Which diagonal is longer (1 when they are equal, with a zero angle).
+             * @description Which diagonal is longer: 1 or 2, its number (no unit; 1 when they are equal, with a zero angle).
              * @enum {number}
              */
             longDiagonal: 1 | 2;
@@ -3045,7 +2928,9 @@ export interface components {
             leastSquares: {
                 /** @description Slopes of the plane z = a·x + b·y + c (mm per mm) and its height at X0 Y0 (mm). */
                 a: number;
+                /** @description Slope of the plane along Y, mm per mm (a ratio of lengths). */
                 b: number;
+                /** @description Height of the plane at X0 Y0, mm. */
                 c: number;
                 /** @description Max − min residual about the plane, mm. */
                 flatness: number;
@@ -3054,8 +2939,11 @@ export interface components {
             };
             /** @description The ISO 1101 zone: middle plane z = a·x + b·y + c and the zone's width along the height axis. */
             minimumZone: {
+                /** @description Slope of the middle plane along X, mm per mm (a ratio of lengths). */
                 a: number;
+                /** @description Slope of the middle plane along Y, mm per mm (a ratio of lengths). */
                 b: number;
+                /** @description Height of the middle plane at X0 Y0, mm. */
                 c: number;
                 /** @description In mm. */
                 flatnessMm: number;
@@ -3088,13 +2976,17 @@ export interface components {
             lowest: components["schemas"]["BedGridPointResult"];
             /** @description The points furthest from the middle of the judged zone, largest first (up to five). */
             worstPoints: components["schemas"]["BedGridPointResult"][];
+            /** @description Count of rows (distinct positions along Y). */
             rows: number;
+            /** @description Count of columns (distinct positions along X). */
             columns: number;
         };
         BedGridPointResult: {
+            /** @description The point's place in the request's list, index from 0. */
             index: number;
-            /** @description 1-based row (by position along Y, Y0 first) and column (by position along X, X0 first). */
+            /** @description Row by position along Y, Y0 first: index from 1. */
             row: number;
+            /** @description Column by position along X, X0 first: index from 1. */
             column: number;
             /** @description In mm. */
             xMm: number;
@@ -3110,7 +3002,9 @@ export interface components {
             judgedHeightMm: number;
         };
         TestCutResult: {
+            /** @description Scale error of axis X, % (the test cut's errorPercent along X). */
             scaleErrorX: number;
+            /** @description Scale error of axis Y, % (the test cut's errorPercent along Y). */
             scaleErrorY: number;
             x: components["schemas"]["AxisReading"];
             y: components["schemas"]["AxisReading"];
@@ -3121,7 +3015,10 @@ export interface components {
                 outOfSquareDeg: number;
                 /** @description In mm per metre. */
                 mmPerMetre: number;
-                /** @enum {number} */
+                /**
+                 * @description Which diagonal is the longer: 1 or 2, its number in the request (no unit).
+                 * @enum {number}
+                 */
                 longDiagonal: 1 | 2;
                 /** @description In mm. */
                 diagonalDifferenceMm: number;
@@ -3148,7 +3045,7 @@ export interface components {
             errorMm: number;
             /** @description In %. */
             errorPercent: number;
-            /** @description Multiply the axis's steps per mm by this: commanded ÷ measured. */
+            /** @description Multiply the axis's steps per mm by this: commanded ÷ measured (a ratio). */
             correctionFactor: number;
             /** @description In steps per mm. */
             suggestedStepsPerMm: number | null;
@@ -3174,10 +3071,15 @@ export interface components {
             within: boolean;
         };
         WalkCounts: {
+            /** @description Count of items on the walk. */
             total: number;
+            /** @description Count of items answered. */
             answered: number;
+            /** @description Count of items answered yes. */
             yes: number;
+            /** @description Count of items answered no. */
             no: number;
+            /** @description Count of items answered not applicable. */
             na: number;
         };
         EvidenceResponse: {
@@ -3193,7 +3095,7 @@ export interface components {
             fileName: string;
             caption: string;
             contentType: string;
-            /** @description Bytes. */
+            /** @description Size of the file, in bytes. */
             size: number;
             sha256: string;
             /** @description In pixels. */
@@ -3223,24 +3125,34 @@ export interface components {
         DriveRecord: {
             /** @enum {string} */
             type: "screw" | "belt" | "rack";
+            /** @description Screw lead (travel per turn): mm in `driveMm`, the axis's `lengthUnit` in `drive`. */
             lead?: number;
             /** @description Threads per inch, when the lead was given that way (lead = 25.4 / threadsPerInch mm, single start). */
             threadsPerInch?: number;
+            /** @description Screw's nominal diameter: mm in `driveMm`, the axis's `lengthUnit` in `drive`. */
             nominalDiameter?: number;
+            /** @description Screw's root diameter: mm in `driveMm`, the axis's `lengthUnit` in `drive`. */
             rootDiameter?: number;
+            /** @description Screw length between supports: mm in `driveMm`, the axis's `lengthUnit` in `drive`. */
             unsupportedLength?: number;
             /** @enum {string} */
             mounting?: "fixed-free" | "supported-supported" | "fixed-supported" | "fixed-fixed";
-            /** @description Nominal diameter × rpm the nut is rated for; the rolled-screw 70 000 when absent. */
+            /** @description Nominal diameter in mm × rpm the nut is rated for (mm·rpm); the rolled-screw 70 000 when absent. */
             dnLimit?: number;
+            /** @description Belt tooth pitch: mm in `driveMm`, the axis's `lengthUnit` in `drive`. */
             beltPitch?: number;
+            /** @description Teeth on the drive pulley (a count). */
             pulleyTeeth?: number;
+            /** @description Pinion module, mm (defined in mm whatever the unit). */
             pinionModule?: number;
+            /** @description Teeth on the pinion (a count). */
             pinionTeeth?: number;
         };
         /** @description One change of the steps per mm set in the controller. */
         StepsChange: {
+            /** @description Steps per mm before the change. */
             from: number;
+            /** @description Steps per mm after the change. */
             to: number;
             at: string;
             by: string;
@@ -3263,11 +3175,8 @@ export interface components {
             name: string;
             /** @description G-code letter the axis moves under (Y1 and Y2 are both Y), or null. */
             letter: string | null;
-            /**
-             * @description The unit the axis is set up in: drive lengths, feed rates (per minute) and travel below are in it.
-             * @enum {string}
-             */
-            lengthUnit: "mm" | "um" | "in" | "thou";
+            /** @description The unit the axis is set up in: drive lengths, feed rates (per minute) and travel below are in it. */
+            lengthUnit: components["schemas"]["LengthUnit"];
             /** @description The drive's lengths in lengthUnit (the pinion module in mm, as always). */
             drive: components["schemas"]["DriveRecord"];
             /** @description The same drive in mm. */
@@ -3275,7 +3184,7 @@ export interface components {
             driveSummary: string;
             /** @description Full steps per motor revolution. */
             motorStepsPerRev: number;
-            /** @description Microsteps per full step set on the driver. */
+            /** @description Microsteps per full step set on the driver (a count). */
             microsteps: number;
             /** @description Motor turns per turn of the screw or pinion (no unit). */
             gearRatio: number;
@@ -3315,7 +3224,9 @@ export interface components {
             status: "within-target" | "outside-target" | "not-started";
             /** @description The machine's work area along X and Y, in mm. */
             workArea: {
+                /** @description Along X, mm. */
                 x: number;
+                /** @description Along Y, mm. */
                 y: number;
             };
             /** @description The target set's travel margin, as stored with its unit. */
@@ -3331,9 +3242,13 @@ export interface components {
                 axis: string;
                 /** @enum {string} */
                 letter: "X" | "Y";
+                /** @description Measured travel of the axis, mm (null until measured). */
                 measuredTravel: number | null;
+                /** @description Work size along the axis, mm. */
                 workSize: number;
+                /** @description Work size plus the margin at each end, mm. */
                 requiredTravel: number;
+                /** @description Measured travel minus required travel, mm (negative when short). */
                 spare: number | null;
                 covers: boolean | null;
             }[];
@@ -3363,11 +3278,8 @@ export interface components {
             /** @description Why the check cannot run (or does not apply), in words. */
             reason: string | null;
             missing: string[];
-            /**
-             * @description The axis's unit: feed rates below are in it per minute.
-             * @enum {string}
-             */
-            lengthUnit: "mm" | "um" | "in" | "thou";
+            /** @description The axis's unit: feed rates below are in it per minute. */
+            lengthUnit: components["schemas"]["LengthUnit"];
             /** @description The fastest feed the axis will be asked for, lengthUnit per minute. */
             feedRate: number | null;
             /** @description In mm per minute. */
@@ -3406,29 +3318,33 @@ export interface components {
         ThermalReference: {
             /** @description True when both temperatures are known and the correction is applied. */
             applied: boolean;
+            /** @description Temperature of the machine while measuring, °C. */
             machineTemperatureC: number | null;
+            /** @description Temperature of the scale while measuring, °C. */
             scaleTemperatureC: number | null;
             /** @enum {string} */
             scaleMaterial: "steel" | "stainless-steel" | "aluminium" | "glass" | "invar";
+            /** @description Expansion coefficient of the scale, µm per metre per kelvin (µm/(m·K)). */
             scaleAlphaUmPerMK: number;
+            /** @description Expansion coefficient of the machine, µm per metre per kelvin (µm/(m·K)). */
             machineAlphaUmPerMK: number;
-            /** @description Add factor · L to a length L read on the scale to get the machine's length at 20 °C. */
+            /** @description Add factor · L to a length L read on the scale to get the machine's length at 20 °C (a ratio, no unit). */
             factor: number;
             source: string;
         };
         /** @description The targets a repeat-and-reverse run reads at: the program and the entry grid use the same list. */
         TestTargets: {
-            /**
-             * @description The unit the axis is set up in (and `targets` and `overrun` are given in).
-             * @enum {string}
-             */
-            lengthUnit: "mm" | "um" | "in" | "thou";
+            /** @description The unit the axis is set up in (and `targets` and `overrun` are given in). */
+            lengthUnit: components["schemas"]["LengthUnit"];
+            /** @description Target positions, in `lengthUnit`. */
             targets: number[];
             /** @description In mm. */
             targetsMm: number[];
+            /** @description Clear travel kept beyond the first and last target, in `lengthUnit`. */
             overrun: number;
             /** @description In mm. */
             overrunMm: number;
+            /** @description Count of runs in each direction. */
             runs: number;
             /** @description Why the list is empty (no measured travel), otherwise null. */
             reason: string | null;
@@ -3436,10 +3352,11 @@ export interface components {
         };
         /** @description One position of a backlash check as typed: where (lengthUnit) and the readings from each side (readingUnit). */
         BacklashPositionRecord: {
+            /** @description Where the axis was brought, in the record's `lengthUnit`. */
             position: number;
-            /** @description Readings after approaching while moving in the positive direction. */
+            /** @description Readings after approaching while moving in the positive direction, in the record's `readingUnit`. */
             up: number[];
-            /** @description Readings after approaching while moving in the negative direction. */
+            /** @description Readings after approaching while moving in the negative direction, in the record's `readingUnit`. */
             down: number[];
         };
         WaiverInfo: {
@@ -3505,11 +3422,8 @@ export interface components {
             name: string;
             /** @enum {string} */
             reference: "left" | "right" | "top" | "bottom-left" | "bottom-right" | "top-left" | "top-right" | "bottom";
-            /**
-             * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
-             * @enum {string}
-             */
-            lengthUnit: "mm" | "um" | "in" | "thou";
+            /** @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly). */
+            lengthUnit: components["schemas"]["LengthUnit"];
             /** @description Outline width in mm; `width`/`height` as entered, in lengthUnit. */
             widthMm: number;
             /** @description Outline height in mm. */
@@ -3522,28 +3436,43 @@ export interface components {
             entry: "list" | "grid" | "circle";
             /** @description The entry as typed, in lengthUnit (positions, pitches and diameters; counts are counts): one of these is set, matching `entry`. */
             holesEntered: {
+                /** @description Hole centre from the outline's left edge, in `lengthUnit`. */
                 x: number;
+                /** @description Hole centre from the outline's lower edge, in `lengthUnit`. */
                 y: number;
+                /** @description Hole diameter, in `lengthUnit`. */
                 diameter: number;
             }[] | null;
             /** @description A grid entry as typed: origin, pitches and diameter in lengthUnit. */
             grid: {
+                /** @description Count of columns of holes. */
                 columns: number;
+                /** @description Count of rows of holes. */
                 rows: number;
+                /** @description First hole's centre from the outline's left edge, in `lengthUnit`. */
                 originX: number;
+                /** @description First hole's centre from the outline's lower edge, in `lengthUnit`. */
                 originY: number;
+                /** @description Distance between columns, in `lengthUnit`. */
                 pitchX: number;
+                /** @description Distance between rows, in `lengthUnit`. */
                 pitchY: number;
+                /** @description Hole diameter, in `lengthUnit`. */
                 diameter: number;
             } | null;
             /** @description A bolt-circle entry as typed: centre and diameters in lengthUnit. */
             circle: {
+                /** @description Hole diameter, in `lengthUnit`. */
                 diameter: number;
+                /** @description Circle centre from the outline's left edge, in `lengthUnit`. */
                 centreX: number;
+                /** @description Circle centre from the outline's lower edge, in `lengthUnit`. */
                 centreY: number;
+                /** @description Diameter of the circle the hole centres lie on, in `lengthUnit`. */
                 circleDiameter: number;
+                /** @description Count of holes on the circle. */
                 count: number;
-                /** @description In degrees. */
+                /** @description Angle of the first hole from the +x direction, in degrees. */
                 startAngleDeg: number;
             } | null;
             /** @description Every hole centre and diameter, mm, from the outline's lower-left corner. */
@@ -3569,7 +3498,10 @@ export interface components {
         };
         /** @description A refused request: each message names the field it is about. */
         ValidationErrorResponse: {
-            /** @enum {number} */
+            /**
+             * @description The HTTP status code.
+             * @enum {number}
+             */
             statusCode: 400;
             /** @description One message per problem, each naming its field. */
             message: string[];
@@ -3579,6 +3511,7 @@ export interface components {
             field?: string;
         };
         ErrorResponse: {
+            /** @description The HTTP status code. */
             statusCode: number;
             /** @description Written for people: what was refused and why. */
             message: string;
@@ -3586,7 +3519,10 @@ export interface components {
         };
         /** @description The request clashes with the state of the records. */
         ConflictResponse: {
-            /** @enum {number} */
+            /**
+             * @description The HTTP status code.
+             * @enum {number}
+             */
             statusCode: 409;
             /** @description Written for people: what was refused and why. */
             message: string;
@@ -3596,6 +3532,18 @@ export interface components {
             blocking?: {
                 [key: string]: unknown;
             }[];
+        };
+        /** @description A well-formed request refused because of what it asks. */
+        UnprocessableResponse: {
+            /**
+             * @description The HTTP status code.
+             * @enum {number}
+             */
+            statusCode: 422;
+            /** @description Written for people: what was refused and what to do (a list names the field first). */
+            message: string | string[];
+            /** @enum {string} */
+            error?: "Unprocessable Entity";
         };
     };
     responses: never;
@@ -3855,6 +3803,7 @@ export interface operations {
             header?: never;
             path: {
                 id: string;
+                /** @description The attachment, index from 0 (its `attachments[].index`). */
                 index: number;
             };
             cookie?: never;
@@ -4022,13 +3971,29 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - The name or address is already taken.
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -4092,13 +4057,29 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - The record is not in a state that allows it; the message says what stands in the way.
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -4162,13 +4143,29 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - The record is not in a state that allows it; the message says what stands in the way.
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -4233,13 +4230,29 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - The record is not in a state that allows it; the message says what stands in the way.
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -4322,13 +4335,28 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -4442,13 +4470,29 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - An approval stands on the machine's records: they are read-only while it stands (the owner can reopen the machine with a reason).
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -4461,6 +4505,7 @@ export interface operations {
                 from?: string;
                 to?: string;
                 cursor?: string;
+                /** @description Count of entries to answer with (1 to 200). */
                 limit?: number;
             };
             header?: never;
@@ -4587,13 +4632,28 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -4707,13 +4767,28 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -4746,33 +4821,39 @@ export interface operations {
                             [key: string]: string;
                         };
                         leastSquares: {
+                            /** @description Each station's deviation from the reference line, mm. */
                             residuals?: number[];
+                            /** @description Rise of the reference line per unit of position, mm/mm (a ratio of lengths). */
                             slope: number;
+                            /** @description Height of the reference line at position 0, mm. */
                             intercept: number;
+                            /** @description Straightness about this reference line, mm. */
                             straightness: number;
                         };
                         minimumZone: {
+                            /** @description Each station's deviation from the reference line, mm. */
                             residuals?: number[];
+                            /** @description Rise of the reference line per unit of position, mm/mm (a ratio of lengths). */
                             slope: number;
+                            /** @description Height of the reference line at position 0, mm. */
                             intercept: number;
+                            /** @description Straightness about this reference line, mm. */
                             straightness: number;
                         };
                         endPoint: {
+                            /** @description Each station's deviation from the reference line, mm. */
                             residuals?: number[];
+                            /** @description Rise of the reference line per unit of position, mm/mm (a ratio of lengths). */
                             slope: number;
+                            /** @description Height of the reference line at position 0, mm. */
                             intercept: number;
+                            /** @description Straightness about this reference line, mm. */
                             straightness: number;
                         };
-                        /**
-                         * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
-                         * @enum {string}
-                         */
-                        lengthUnit: "mm" | "um" | "in" | "thou";
-                        /**
-                         * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
-                         * @enum {string}
-                         */
-                        readingUnit: "mm" | "um" | "in" | "thou";
+                        /** @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly). */
+                        lengthUnit: components["schemas"]["LengthUnit"];
+                        /** @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly). */
+                        readingUnit: components["schemas"]["ReadingUnit"];
                     };
                 };
             };
@@ -4794,13 +4875,28 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -4830,19 +4926,16 @@ export interface operations {
                         units: {
                             [key: string]: string;
                         };
+                        /** @description Parallelism of the two rails, mm. */
                         parallelism: number;
+                        /** @description Mean of the differences between the rails, mm. */
                         meanOffset: number;
+                        /** @description Difference between the rails at each position, mm. */
                         differences: number[];
-                        /**
-                         * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
-                         * @enum {string}
-                         */
-                        lengthUnit: "mm" | "um" | "in" | "thou";
-                        /**
-                         * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
-                         * @enum {string}
-                         */
-                        readingUnit: "mm" | "um" | "in" | "thou";
+                        /** @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly). */
+                        lengthUnit: components["schemas"]["LengthUnit"];
+                        /** @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly). */
+                        readingUnit: components["schemas"]["ReadingUnit"];
                     };
                 };
             };
@@ -4864,13 +4957,28 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -4906,21 +5014,21 @@ export interface operations {
                         outOfSquareArcsec: number;
                         /** @description In mm per metre. */
                         mmPerMetre: number;
-                        /** @enum {number} */
+                        /**
+                         * @description Which diagonal is the longer: 1 or 2, its number in the request (no unit).
+                         * @enum {number}
+                         */
                         longDiagonal: 1 | 2;
+                        /** @description Longer diagonal minus the shorter, mm. */
                         diagonalDifference: number;
+                        /** @description How far to move one side of the gantry over the span to square it, mm. */
                         correction: number;
+                        /** @description The span the correction is worked out over, mm. */
                         span: number;
-                        /**
-                         * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
-                         * @enum {string}
-                         */
-                        lengthUnit: "mm" | "um" | "in" | "thou";
-                        /**
-                         * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
-                         * @enum {string}
-                         */
-                        readingUnit: "mm" | "um" | "in" | "thou";
+                        /** @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly). */
+                        lengthUnit: components["schemas"]["LengthUnit"];
+                        /** @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly). */
+                        readingUnit: components["schemas"]["ReadingUnit"];
                     };
                 };
             };
@@ -4942,13 +5050,28 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -4981,10 +5104,15 @@ export interface operations {
                             [key: string]: string;
                         };
                         leastSquares: {
+                            /** @description Each point's height above the plane, mm. */
                             residuals?: number[];
+                            /** @description Slope of the plane along x, mm/mm (a ratio of lengths). */
                             a: number;
+                            /** @description Slope of the plane along y, mm/mm (a ratio of lengths). */
                             b: number;
+                            /** @description Height of the plane at x = 0, y = 0, mm. */
                             c: number;
+                            /** @description Flatness about the least-squares plane, mm. */
                             flatness: number;
                         };
                         tilt: {
@@ -4997,16 +5125,10 @@ export interface operations {
                             /** @description In degrees. */
                             directionDeg: number;
                         };
-                        /**
-                         * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
-                         * @enum {string}
-                         */
-                        lengthUnit: "mm" | "um" | "in" | "thou";
-                        /**
-                         * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
-                         * @enum {string}
-                         */
-                        readingUnit: "mm" | "um" | "in" | "thou";
+                        /** @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly). */
+                        lengthUnit: components["schemas"]["LengthUnit"];
+                        /** @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly). */
+                        readingUnit: components["schemas"]["ReadingUnit"];
                     };
                 };
             };
@@ -5028,13 +5150,28 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -5064,22 +5201,20 @@ export interface operations {
                         units: {
                             [key: string]: string;
                         };
+                        /** @description Travel per turn of the screw, pulley or pinion, mm. */
                         travelPerRev: number;
+                        /** @description Travel per motor revolution (after the gearing), mm. */
                         travelPerMotorRev: number;
                         /** @description In steps per mm. */
                         stepsPerMm: number;
+                        /** @description In steps per inch. */
                         stepsPerIn: number;
+                        /** @description Travel of one microstep, mm. */
                         resolution: number;
-                        /**
-                         * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
-                         * @enum {string}
-                         */
-                        lengthUnit: "mm" | "um" | "in" | "thou";
-                        /**
-                         * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
-                         * @enum {string}
-                         */
-                        readingUnit: "mm" | "um" | "in" | "thou";
+                        /** @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly). */
+                        lengthUnit: components["schemas"]["LengthUnit"];
+                        /** @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly). */
+                        readingUnit: components["schemas"]["ReadingUnit"];
                     };
                 };
             };
@@ -5101,13 +5236,28 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -5137,30 +5287,32 @@ export interface operations {
                         units: {
                             [key: string]: string;
                         };
+                        /** @description Measured distance over commanded distance (a ratio; 1 is exact). */
                         scale: number;
+                        /** @description Offset of the fitted line at a commanded 0, mm. */
                         offset: number;
                         /** @description In steps per mm. */
                         correctedStepsPerMm: number;
+                        /** @description In steps per inch. */
                         correctedStepsPerIn: number;
                         /** @description In %. */
                         errorPercent: number;
+                        /** @description The largest distance of a move from the fitted line, mm. */
                         residualMax: number;
                         moves: {
+                            /** @description Commanded move, mm. */
                             commanded: number;
+                            /** @description Measured move, mm. */
                             measured: number;
+                            /** @description Measured minus commanded, mm. */
                             error: number;
+                            /** @description Distance from the fitted line, mm. */
                             residual: number;
                         }[];
-                        /**
-                         * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
-                         * @enum {string}
-                         */
-                        lengthUnit: "mm" | "um" | "in" | "thou";
-                        /**
-                         * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
-                         * @enum {string}
-                         */
-                        readingUnit: "mm" | "um" | "in" | "thou";
+                        /** @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly). */
+                        lengthUnit: components["schemas"]["LengthUnit"];
+                        /** @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly). */
+                        readingUnit: components["schemas"]["ReadingUnit"];
                     };
                 };
             };
@@ -5182,13 +5334,28 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -5219,41 +5386,59 @@ export interface operations {
                             [key: string]: string;
                         };
                         targets: {
+                            /** @description The target position, mm. */
                             target: number;
+                            /** @description Mean positional deviation approached moving +, mm. */
                             meanUp: number;
+                            /** @description Mean positional deviation approached moving −, mm. */
                             meanDown: number;
+                            /** @description Mean of the two, mm. */
                             mean: number;
+                            /** @description Reversal value at this target (mean up − mean down), mm. */
                             reversal: number;
+                            /** @description Sample standard deviation of the approaches moving +, mm. */
                             sUp: number;
+                            /** @description Sample standard deviation of the approaches moving −, mm. */
                             sDown: number;
+                            /** @description Repeatability moving + (4 s), mm. */
                             repeatabilityUp: number;
+                            /** @description Repeatability moving − (4 s), mm. */
                             repeatabilityDown: number;
+                            /** @description Bidirectional repeatability at this target, mm. */
                             repeatability: number;
                         }[];
+                        /** @description Reversal value of the axis (the largest size over the targets), mm. */
                         reversal: number;
+                        /** @description Mean of the signed reversal values over the targets, mm. */
                         reversalMean: number;
+                        /** @description Repeatability moving +, mm. */
                         repeatabilityUp: number;
+                        /** @description Repeatability moving −, mm. */
                         repeatabilityDown: number;
+                        /** @description Bidirectional repeatability, mm. */
                         repeatability: number;
+                        /** @description Range of the mean deviations moving +, mm. */
                         systematicUp: number;
+                        /** @description Range of the mean deviations moving −, mm. */
                         systematicDown: number;
+                        /** @description Range of the mean deviations in both directions, mm. */
                         systematic: number;
+                        /** @description Range of the mean bidirectional deviations over the targets, mm. */
                         meanRange: number;
+                        /** @description Accuracy moving +, mm. */
                         accuracyUp: number;
+                        /** @description Accuracy moving −, mm. */
                         accuracyDown: number;
+                        /** @description Bidirectional accuracy, mm. */
                         accuracy: number;
+                        /** @description Count of runs approaching moving +. */
                         runsUp: number;
+                        /** @description Count of runs approaching moving −. */
                         runsDown: number;
-                        /**
-                         * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
-                         * @enum {string}
-                         */
-                        lengthUnit?: "mm" | "um" | "in" | "thou";
-                        /**
-                         * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
-                         * @enum {string}
-                         */
-                        readingUnit?: "mm" | "um" | "in" | "thou";
+                        /** @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly). */
+                        lengthUnit?: components["schemas"]["LengthUnit"];
+                        /** @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly). */
+                        readingUnit?: components["schemas"]["ReadingUnit"];
                     };
                 };
             };
@@ -5275,13 +5460,28 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -5311,27 +5511,28 @@ export interface operations {
                         units: {
                             [key: string]: string;
                         };
+                        /** @description Screw speed at the feed rate asked about, rpm. */
                         rpm: number;
+                        /** @description Critical (whirling) speed of the screw, rpm. */
                         criticalSpeed: number;
+                        /** @description Permissible speed (the critical speed with its safety factor), rpm. */
                         permissibleSpeed: number;
+                        /** @description Speed the nut's d·n limit allows, rpm. */
                         dnLimitSpeed: number;
+                        /** @description Fastest feed within both limits, mm/min. */
                         maxFeedRate: number;
                         withinLimits: boolean;
                         /** @enum {string} */
                         limitedBy: "critical-speed" | "dn-limit";
+                        /** @description Factor of the end mountings in the critical speed formula (no unit). */
                         mountingFactor: number;
+                        /** @description The nut's d·n limit used, mm·rpm (nominal diameter in mm times rpm). */
                         dnLimit: number;
                         source: string;
-                        /**
-                         * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
-                         * @enum {string}
-                         */
-                        lengthUnit: "mm" | "um" | "in" | "thou";
-                        /**
-                         * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
-                         * @enum {string}
-                         */
-                        readingUnit: "mm" | "um" | "in" | "thou";
+                        /** @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly). */
+                        lengthUnit: components["schemas"]["LengthUnit"];
+                        /** @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly). */
+                        readingUnit: components["schemas"]["ReadingUnit"];
                     };
                 };
             };
@@ -5353,13 +5554,28 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -5390,27 +5606,29 @@ export interface operations {
                             [key: string]: string;
                         };
                         holes: {
+                            /** @description The hole, index from 0 along the rail. */
                             hole: number;
+                            /** @description Position of the hole along the rail, mm. */
                             position: number;
                         }[];
                         steps: {
+                            /** @description The step's place in the guide, index from 1. */
                             step: number;
+                            /** @description The hole to fix at this step, index from 0. */
                             hole: number;
+                            /** @description Position of that hole along the rail, mm. */
                             position: number;
+                            /** @description Indicator reading to aim for when this hole is tightened, mm; null before any hole is fixed. */
                             target: number | null;
+                            /** @description Reading recorded at this hole once fixed, mm; null until then. */
                             reading: number | null;
                         }[];
+                        /** @description The next hole to fix, index from 0; null when every hole is fixed. */
                         nextHole: number | null;
-                        /**
-                         * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
-                         * @enum {string}
-                         */
-                        lengthUnit: "mm" | "um" | "in" | "thou";
-                        /**
-                         * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
-                         * @enum {string}
-                         */
-                        readingUnit: "mm" | "um" | "in" | "thou";
+                        /** @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly). */
+                        lengthUnit: components["schemas"]["LengthUnit"];
+                        /** @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly). */
+                        readingUnit: components["schemas"]["ReadingUnit"];
                     };
                 };
             };
@@ -5432,13 +5650,28 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -5470,24 +5703,23 @@ export interface operations {
                         };
                         axes: {
                             axis: string;
+                            /** @description Travel measured on the axis, mm. */
                             measuredTravel: number;
+                            /** @description Size of the work along the axis, mm. */
                             workSize: number;
+                            /** @description Travel the work needs with its margins, mm. */
                             requiredTravel: number;
+                            /** @description Measured travel minus required travel (negative when short), mm. */
                             spare: number;
                             covers: boolean;
                         }[];
+                        /** @description Margin kept beyond the work at each end, mm. */
                         marginPerSide: number;
                         coversAll: boolean;
-                        /**
-                         * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
-                         * @enum {string}
-                         */
-                        lengthUnit: "mm" | "um" | "in" | "thou";
-                        /**
-                         * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
-                         * @enum {string}
-                         */
-                        readingUnit: "mm" | "um" | "in" | "thou";
+                        /** @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly). */
+                        lengthUnit: components["schemas"]["LengthUnit"];
+                        /** @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly). */
+                        readingUnit: components["schemas"]["ReadingUnit"];
                     };
                 };
             };
@@ -5509,13 +5741,28 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -5546,21 +5793,27 @@ export interface operations {
                             [key: string]: string;
                         };
                         x: {
+                            /** @description Measured size over nominal size (a ratio; 1 is exact). */
                             scale: number;
+                            /** @description Measured size minus nominal, mm. */
                             error: number;
                             /** @description In %. */
                             errorPercent: number;
                             /** @description In steps per mm. */
                             correctedStepsPerMm: number | null;
+                            /** @description In steps per inch. */
                             correctedStepsPerIn: number | null;
                         };
                         y: {
+                            /** @description Measured size over nominal size (a ratio; 1 is exact). */
                             scale: number;
+                            /** @description Measured size minus nominal, mm. */
                             error: number;
                             /** @description In %. */
                             errorPercent: number;
                             /** @description In steps per mm. */
                             correctedStepsPerMm: number | null;
+                            /** @description In steps per inch. */
                             correctedStepsPerIn: number | null;
                         };
                         squareness: {
@@ -5571,31 +5824,35 @@ export interface operations {
                             outOfSquareArcsec: number;
                             /** @description In mm per metre. */
                             mmPerMetre: number;
-                            /** @enum {number} */
+                            /**
+                             * @description Which diagonal is the longer: 1 or 2, its number in the request (no unit).
+                             * @enum {number}
+                             */
                             longDiagonal: 1 | 2;
+                            /** @description Longer diagonal minus the shorter, mm. */
                             diagonalDifference: number;
+                            /** @description How far to move one side of the gantry over the span to square it, mm. */
                             correction: number;
+                            /** @description The span the correction is worked out over, mm. */
                             span: number;
                         } | null;
                         ovality: {
+                            /** @description Circle's diameter along X minus along Y, mm. */
                             ovality: number;
+                            /** @description The part of the ovality the two axes' scale errors explain, mm. */
                             fromScale: number;
+                            /** @description The rest of the ovality, mm. */
                             unexplained: number;
                             /** @enum {string} */
                             pointsTo: "round" | "scale" | "x-backlash" | "y-backlash";
+                            /** @description Backlash the unexplained ovality suggests, mm. */
                             backlashEstimate: number | null;
                         } | null;
                         notes: string[];
-                        /**
-                         * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
-                         * @enum {string}
-                         */
-                        lengthUnit: "mm" | "um" | "in" | "thou";
-                        /**
-                         * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
-                         * @enum {string}
-                         */
-                        readingUnit: "mm" | "um" | "in" | "thou";
+                        /** @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly). */
+                        lengthUnit: components["schemas"]["LengthUnit"];
+                        /** @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly). */
+                        readingUnit: components["schemas"]["ReadingUnit"];
                     };
                 };
             };
@@ -5617,13 +5874,28 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -5651,6 +5923,7 @@ export interface operations {
                         }[];
                         source: string;
                         typicalByProfile: {
+                            /** @description Rail profile size (the rail's width), mm. */
                             profileSize: number;
                             boltSize: string;
                         }[];
@@ -5778,13 +6051,29 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - An approval stands on the machine's records: they are read-only while it stands (the owner can reopen the machine with a reason).
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -5892,13 +6181,29 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - An approval stands on the machine's records: they are read-only while it stands (the owner can reopen the machine with a reason).
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -5963,13 +6268,29 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - An approval stands on the machine's records: they are read-only while it stands (the owner can reopen the machine with a reason).
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -6042,13 +6363,19 @@ export interface operations {
                             measured: boolean;
                             reason: string | null;
                             datum: string | null;
+                            /** @description Largest height difference between the rails, mm. */
                             worst: number | null;
+                            /** @description The same with its sign, mm. */
                             worstSigned: number | null;
+                            /** @description Where it was found along the rails, mm. */
                             at: number | null;
+                            /** @description Height difference at each compared position, mm. */
                             differences: number[] | null;
+                            /** @description Distance between the rails, mm. */
                             spacing: number | null;
                             /** @description In µm per mm. */
                             kUmPerMm: number | null;
+                            /** @description Permissible height difference (spacing × K), mm. */
                             permissible: number | null;
                             targetText: string | null;
                             within: boolean | null;
@@ -6085,13 +6412,19 @@ export interface operations {
                             measured: boolean;
                             reason: string | null;
                             datum: string | null;
+                            /** @description Largest height difference between the rails, mm. */
                             worst: number | null;
+                            /** @description The same with its sign, mm. */
                             worstSigned: number | null;
+                            /** @description Where it was found along the rails, mm. */
                             at: number | null;
+                            /** @description Height difference at each compared position, mm. */
                             differences: number[] | null;
+                            /** @description Distance between the rails, mm. */
                             spacing: number | null;
                             /** @description In µm per mm. */
                             kUmPerMm: number | null;
+                            /** @description Permissible height difference (spacing × K), mm. */
                             permissible: number | null;
                             targetText: string | null;
                             within: boolean | null;
@@ -6103,9 +6436,13 @@ export interface operations {
                         datum: string;
                         /** @enum {string} */
                         face: "side" | "top";
+                        /** @description Parallelism of the two rails, mm. */
                         parallelism: number;
+                        /** @description Mean of the differences between the rails, mm. */
                         meanOffset: number;
+                        /** @description Positions along the rails the two sweeps are compared at, mm. */
                         positions: number[];
+                        /** @description Difference between the rails at each position, mm. */
                         differences: number[];
                         parallelismWithin: boolean | null;
                         /** @enum {string} */
@@ -6135,13 +6472,19 @@ export interface operations {
                             measured: boolean;
                             reason: string | null;
                             datum: string | null;
+                            /** @description Largest height difference between the rails, mm. */
                             worst: number | null;
+                            /** @description The same with its sign, mm. */
                             worstSigned: number | null;
+                            /** @description Where it was found along the rails, mm. */
                             at: number | null;
+                            /** @description Height difference at each compared position, mm. */
                             differences: number[] | null;
+                            /** @description Distance between the rails, mm. */
                             spacing: number | null;
                             /** @description In µm per mm. */
                             kUmPerMm: number | null;
+                            /** @description Permissible height difference (spacing × K), mm. */
                             permissible: number | null;
                             targetText: string | null;
                             within: boolean | null;
@@ -6181,13 +6524,19 @@ export interface operations {
                             measured: boolean;
                             reason: string | null;
                             datum: string | null;
+                            /** @description Largest height difference between the rails, mm. */
                             worst: number | null;
+                            /** @description The same with its sign, mm. */
                             worstSigned: number | null;
+                            /** @description Where it was found along the rails, mm. */
                             at: number | null;
+                            /** @description Height difference at each compared position, mm. */
                             differences: number[] | null;
+                            /** @description Distance between the rails, mm. */
                             spacing: number | null;
                             /** @description In µm per mm. */
                             kUmPerMm: number | null;
+                            /** @description Permissible height difference (spacing × K), mm. */
                             permissible: number | null;
                             targetText: string | null;
                             within: boolean | null;
@@ -6229,6 +6578,7 @@ export interface operations {
     Rails_listSweeps: {
         parameters: {
             query?: {
+                /** @description Count of records on the page (1 to 200; 50 when absent). */
                 limit?: number;
                 /** @description The id of the last record of the page before (the X-Next-Cursor it came with). */
                 cursor?: string;
@@ -6294,7 +6644,16 @@ export interface operations {
             };
         };
         responses: {
-            /** @description Done. */
+            /** @description The sweep with this `id` was recorded before (the same entry sent again): the record as first made; nothing is recorded again. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["SweepResponse"];
+                };
+            };
+            /** @description The sweep is recorded: the new record. */
             201: {
                 headers: {
                     [name: string]: unknown;
@@ -6339,13 +6698,30 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - An approval stands on the machine's records: they are read-only while it stands (the owner can reopen the machine with a reason).
+             *     - The id the client made for this entry is already used by another record or write.
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -6453,13 +6829,29 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - An approval stands on the machine's records: they are read-only while it stands (the owner can reopen the machine with a reason).
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -6524,13 +6916,29 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - An approval stands on the machine's records: they are read-only while it stands (the owner can reopen the machine with a reason).
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -6644,13 +7052,29 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - An approval stands on the machine's records: they are read-only while it stands (the owner can reopen the machine with a reason).
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -6765,13 +7189,31 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - An approval stands on the machine's records: they are read-only while it stands (the owner can reopen the machine with a reason).
+             *     - The id the client made for this entry is already used by another record or write.
+             *     - The record is not in a state that allows it; the message says what stands in the way.
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -6836,13 +7278,30 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - An approval stands on the machine's records: they are read-only while it stands (the owner can reopen the machine with a reason).
+             *     - The record is not in a state that allows it; the message says what stands in the way.
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -6862,7 +7321,19 @@ export interface operations {
             };
         };
         responses: {
-            /** @description Done. */
+            /** @description The final sweep with this `id` was recorded before (the same entry sent again): the record as first made; nothing is recorded again. */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": {
+                        boltDown: components["schemas"]["BoltDownResponse"];
+                        sweep: components["schemas"]["SweepResponse"];
+                    };
+                };
+            };
+            /** @description The final sweep is recorded: the new record. */
             201: {
                 headers: {
                     [name: string]: unknown;
@@ -6910,13 +7381,31 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - An approval stands on the machine's records: they are read-only while it stands (the owner can reopen the machine with a reason).
+             *     - The id the client made for this entry is already used by another record or write.
+             *     - The record is not in a state that allows it; the message says what stands in the way.
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -6940,29 +7429,37 @@ export interface operations {
                 content: {
                     "application/json": ({
                         unreadable: string;
+                        /** @description Smallest step of the tape or rule, in the record's `lengthUnit`. */
                         resolution: number | null;
                         input: {
+                            /** @description Side along X, in the record's `lengthUnit`. */
                             sideX: number | null;
+                            /** @description Side along Y, in the record's `lengthUnit`. */
                             sideY: number | null;
+                            /** @description Diagonal from the X0 Y0 corner, in the record's `lengthUnit`. */
                             diagonal1: number | null;
+                            /** @description The other diagonal, in the record's `lengthUnit`. */
                             diagonal2: number | null;
+                            /** @description Distance between the gantry's two bearing rails, in the record's `lengthUnit`. */
                             gantrySpan: number | null;
                         };
                         inputMm: {
+                            /** @description Side along X, mm. */
                             sideX: number | null;
+                            /** @description Side along Y, mm. */
                             sideY: number | null;
+                            /** @description Diagonal from the X0 Y0 corner, mm. */
                             diagonal1: number | null;
+                            /** @description The other diagonal, mm. */
                             diagonal2: number | null;
+                            /** @description Distance between the gantry's two bearing rails, mm. */
                             gantrySpan: number | null;
                         };
                         result: components["schemas"]["DiagonalCheckResult"] | null;
                         id: string;
                         machineId: string;
-                        /**
-                         * @description Unit the record's lengths were entered in and are given back in.
-                         * @enum {string}
-                         */
-                        lengthUnit: "mm" | "um" | "in" | "thou";
+                        /** @description Unit the record's lengths were entered in and are given back in. */
+                        lengthUnit: components["schemas"]["LengthUnit"];
                         note: string;
                         recordedBy: {
                             id: string | null;
@@ -6977,29 +7474,37 @@ export interface operations {
                         warnings: components["schemas"]["ResultWarning"][];
                     } | {
                         unreadable?: unknown;
+                        /** @description Smallest step of the tape or rule, in the record's `lengthUnit`. */
                         resolution: number | null;
                         input: {
+                            /** @description Side along X, in the record's `lengthUnit`. */
                             sideX: number | null;
+                            /** @description Side along Y, in the record's `lengthUnit`. */
                             sideY: number | null;
+                            /** @description Diagonal from the X0 Y0 corner, in the record's `lengthUnit`. */
                             diagonal1: number | null;
+                            /** @description The other diagonal, in the record's `lengthUnit`. */
                             diagonal2: number | null;
+                            /** @description Distance between the gantry's two bearing rails, in the record's `lengthUnit`. */
                             gantrySpan: number | null;
                         };
                         inputMm: {
+                            /** @description Side along X, mm. */
                             sideX: number | null;
+                            /** @description Side along Y, mm. */
                             sideY: number | null;
+                            /** @description Diagonal from the X0 Y0 corner, mm. */
                             diagonal1: number | null;
+                            /** @description The other diagonal, mm. */
                             diagonal2: number | null;
+                            /** @description Distance between the gantry's two bearing rails, mm. */
                             gantrySpan: number | null;
                         };
                         result: components["schemas"]["DiagonalCheckResult"] | null;
                         id: string;
                         machineId: string;
-                        /**
-                         * @description Unit the record's lengths were entered in and are given back in.
-                         * @enum {string}
-                         */
-                        lengthUnit: "mm" | "um" | "in" | "thou";
+                        /** @description Unit the record's lengths were entered in and are given back in. */
+                        lengthUnit: components["schemas"]["LengthUnit"];
                         note: string;
                         recordedBy: {
                             id: string | null;
@@ -7067,29 +7572,37 @@ export interface operations {
                 content: {
                     "application/json": {
                         unreadable: string;
+                        /** @description Smallest step of the tape or rule, in the record's `lengthUnit`. */
                         resolution: number | null;
                         input: {
+                            /** @description Side along X, in the record's `lengthUnit`. */
                             sideX: number | null;
+                            /** @description Side along Y, in the record's `lengthUnit`. */
                             sideY: number | null;
+                            /** @description Diagonal from the X0 Y0 corner, in the record's `lengthUnit`. */
                             diagonal1: number | null;
+                            /** @description The other diagonal, in the record's `lengthUnit`. */
                             diagonal2: number | null;
+                            /** @description Distance between the gantry's two bearing rails, in the record's `lengthUnit`. */
                             gantrySpan: number | null;
                         };
                         inputMm: {
+                            /** @description Side along X, mm. */
                             sideX: number | null;
+                            /** @description Side along Y, mm. */
                             sideY: number | null;
+                            /** @description Diagonal from the X0 Y0 corner, mm. */
                             diagonal1: number | null;
+                            /** @description The other diagonal, mm. */
                             diagonal2: number | null;
+                            /** @description Distance between the gantry's two bearing rails, mm. */
                             gantrySpan: number | null;
                         };
                         result: components["schemas"]["DiagonalCheckResult"] | null;
                         id: string;
                         machineId: string;
-                        /**
-                         * @description Unit the record's lengths were entered in and are given back in.
-                         * @enum {string}
-                         */
-                        lengthUnit: "mm" | "um" | "in" | "thou";
+                        /** @description Unit the record's lengths were entered in and are given back in. */
+                        lengthUnit: components["schemas"]["LengthUnit"];
                         note: string;
                         recordedBy: {
                             id: string | null;
@@ -7104,29 +7617,37 @@ export interface operations {
                         warnings: components["schemas"]["ResultWarning"][];
                     } | {
                         unreadable?: unknown;
+                        /** @description Smallest step of the tape or rule, in the record's `lengthUnit`. */
                         resolution: number | null;
                         input: {
+                            /** @description Side along X, in the record's `lengthUnit`. */
                             sideX: number | null;
+                            /** @description Side along Y, in the record's `lengthUnit`. */
                             sideY: number | null;
+                            /** @description Diagonal from the X0 Y0 corner, in the record's `lengthUnit`. */
                             diagonal1: number | null;
+                            /** @description The other diagonal, in the record's `lengthUnit`. */
                             diagonal2: number | null;
+                            /** @description Distance between the gantry's two bearing rails, in the record's `lengthUnit`. */
                             gantrySpan: number | null;
                         };
                         inputMm: {
+                            /** @description Side along X, mm. */
                             sideX: number | null;
+                            /** @description Side along Y, mm. */
                             sideY: number | null;
+                            /** @description Diagonal from the X0 Y0 corner, mm. */
                             diagonal1: number | null;
+                            /** @description The other diagonal, mm. */
                             diagonal2: number | null;
+                            /** @description Distance between the gantry's two bearing rails, mm. */
                             gantrySpan: number | null;
                         };
                         result: components["schemas"]["DiagonalCheckResult"] | null;
                         id: string;
                         machineId: string;
-                        /**
-                         * @description Unit the record's lengths were entered in and are given back in.
-                         * @enum {string}
-                         */
-                        lengthUnit: "mm" | "um" | "in" | "thou";
+                        /** @description Unit the record's lengths were entered in and are given back in. */
+                        lengthUnit: components["schemas"]["LengthUnit"];
                         note: string;
                         recordedBy: {
                             id: string | null;
@@ -7178,13 +7699,29 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - An approval stands on the machine's records: they are read-only while it stands (the owner can reopen the machine with a reason).
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -7208,27 +7745,27 @@ export interface operations {
                 content: {
                     "application/json": ({
                         unreadable: string;
-                        /**
-                         * @description Unit the heights (and the gauge's resolution) were read in and are given back in.
-                         * @enum {string}
-                         */
-                        readingUnit: "mm" | "um" | "in" | "thou";
+                        /** @description Unit the heights (and the gauge's resolution) were read in and are given back in. */
+                        readingUnit: components["schemas"]["ReadingUnit"];
+                        /** @description Smallest step of the height gauge, in the record's `readingUnit`. */
                         resolution: number | null;
+                        /** @description Count of rows of the grid (along Y). */
                         rows: number | null;
+                        /** @description Count of columns of the grid (along X). */
                         columns: number | null;
                         points: {
+                            /** @description Position along X, in the record's `lengthUnit`. */
                             x: number | null;
+                            /** @description Position along Y, in the record's `lengthUnit`. */
                             y: number | null;
+                            /** @description Height read, in the record's `readingUnit`. */
                             z: number | null;
                         }[];
                         result: components["schemas"]["BedGridResult"] | null;
                         id: string;
                         machineId: string;
-                        /**
-                         * @description Unit the record's lengths were entered in and are given back in.
-                         * @enum {string}
-                         */
-                        lengthUnit: "mm" | "um" | "in" | "thou";
+                        /** @description Unit the record's lengths were entered in and are given back in. */
+                        lengthUnit: components["schemas"]["LengthUnit"];
                         note: string;
                         recordedBy: {
                             id: string | null;
@@ -7243,27 +7780,27 @@ export interface operations {
                         warnings: components["schemas"]["ResultWarning"][];
                     } | {
                         unreadable?: unknown;
-                        /**
-                         * @description Unit the heights (and the gauge's resolution) were read in and are given back in.
-                         * @enum {string}
-                         */
-                        readingUnit: "mm" | "um" | "in" | "thou";
+                        /** @description Unit the heights (and the gauge's resolution) were read in and are given back in. */
+                        readingUnit: components["schemas"]["ReadingUnit"];
+                        /** @description Smallest step of the height gauge, in the record's `readingUnit`. */
                         resolution: number | null;
+                        /** @description Count of rows of the grid (along Y). */
                         rows: number | null;
+                        /** @description Count of columns of the grid (along X). */
                         columns: number | null;
                         points: {
+                            /** @description Position along X, in the record's `lengthUnit`. */
                             x: number | null;
+                            /** @description Position along Y, in the record's `lengthUnit`. */
                             y: number | null;
+                            /** @description Height read, in the record's `readingUnit`. */
                             z: number | null;
                         }[];
                         result: components["schemas"]["BedGridResult"] | null;
                         id: string;
                         machineId: string;
-                        /**
-                         * @description Unit the record's lengths were entered in and are given back in.
-                         * @enum {string}
-                         */
-                        lengthUnit: "mm" | "um" | "in" | "thou";
+                        /** @description Unit the record's lengths were entered in and are given back in. */
+                        lengthUnit: components["schemas"]["LengthUnit"];
                         note: string;
                         recordedBy: {
                             id: string | null;
@@ -7331,27 +7868,27 @@ export interface operations {
                 content: {
                     "application/json": {
                         unreadable: string;
-                        /**
-                         * @description Unit the heights (and the gauge's resolution) were read in and are given back in.
-                         * @enum {string}
-                         */
-                        readingUnit: "mm" | "um" | "in" | "thou";
+                        /** @description Unit the heights (and the gauge's resolution) were read in and are given back in. */
+                        readingUnit: components["schemas"]["ReadingUnit"];
+                        /** @description Smallest step of the height gauge, in the record's `readingUnit`. */
                         resolution: number | null;
+                        /** @description Count of rows of the grid (along Y). */
                         rows: number | null;
+                        /** @description Count of columns of the grid (along X). */
                         columns: number | null;
                         points: {
+                            /** @description Position along X, in the record's `lengthUnit`. */
                             x: number | null;
+                            /** @description Position along Y, in the record's `lengthUnit`. */
                             y: number | null;
+                            /** @description Height read, in the record's `readingUnit`. */
                             z: number | null;
                         }[];
                         result: components["schemas"]["BedGridResult"] | null;
                         id: string;
                         machineId: string;
-                        /**
-                         * @description Unit the record's lengths were entered in and are given back in.
-                         * @enum {string}
-                         */
-                        lengthUnit: "mm" | "um" | "in" | "thou";
+                        /** @description Unit the record's lengths were entered in and are given back in. */
+                        lengthUnit: components["schemas"]["LengthUnit"];
                         note: string;
                         recordedBy: {
                             id: string | null;
@@ -7366,27 +7903,27 @@ export interface operations {
                         warnings: components["schemas"]["ResultWarning"][];
                     } | {
                         unreadable?: unknown;
-                        /**
-                         * @description Unit the heights (and the gauge's resolution) were read in and are given back in.
-                         * @enum {string}
-                         */
-                        readingUnit: "mm" | "um" | "in" | "thou";
+                        /** @description Unit the heights (and the gauge's resolution) were read in and are given back in. */
+                        readingUnit: components["schemas"]["ReadingUnit"];
+                        /** @description Smallest step of the height gauge, in the record's `readingUnit`. */
                         resolution: number | null;
+                        /** @description Count of rows of the grid (along Y). */
                         rows: number | null;
+                        /** @description Count of columns of the grid (along X). */
                         columns: number | null;
                         points: {
+                            /** @description Position along X, in the record's `lengthUnit`. */
                             x: number | null;
+                            /** @description Position along Y, in the record's `lengthUnit`. */
                             y: number | null;
+                            /** @description Height read, in the record's `readingUnit`. */
                             z: number | null;
                         }[];
                         result: components["schemas"]["BedGridResult"] | null;
                         id: string;
                         machineId: string;
-                        /**
-                         * @description Unit the record's lengths were entered in and are given back in.
-                         * @enum {string}
-                         */
-                        lengthUnit: "mm" | "um" | "in" | "thou";
+                        /** @description Unit the record's lengths were entered in and are given back in. */
+                        lengthUnit: components["schemas"]["LengthUnit"];
                         note: string;
                         recordedBy: {
                             id: string | null;
@@ -7438,13 +7975,29 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - An approval stands on the machine's records: they are read-only while it stands (the owner can reopen the machine with a reason).
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -7472,38 +8025,49 @@ export interface operations {
                             part: components["schemas"]["JudgedTarget"];
                             squareness: components["schemas"]["JudgedTarget"];
                         };
+                        /** @description Thickness of the plate cut, in the record's `lengthUnit`. */
                         plateThickness: number | null;
                         /** @description In mm. */
                         plateThicknessMm: number | null;
+                        /** @description Smallest step of the caliper or rule the sizes were read with, in the record's `lengthUnit`. */
                         resolution: number | null;
                         nominal: {
+                            /** @description Commanded size of the square along X, in the record's `lengthUnit`. */
                             x: number | null;
+                            /** @description Commanded size of the square along Y, in the record's `lengthUnit`. */
                             y: number | null;
+                            /** @description Commanded diameter of the circle, in the record's `lengthUnit`. */
                             circle: number | null;
                         };
                         measured: {
+                            /** @description Measured size of the square along X, in the record's `lengthUnit`. */
                             x: number | null;
+                            /** @description Measured size of the square along Y, in the record's `lengthUnit`. */
                             y: number | null;
+                            /** @description Measured diagonal from the X0 Y0 corner, in the record's `lengthUnit`. */
                             diagonal1: number | null;
+                            /** @description Measured other diagonal, in the record's `lengthUnit`. */
                             diagonal2: number | null;
+                            /** @description Measured diameter of the circle along X, in the record's `lengthUnit`. */
                             circleX: number | null;
+                            /** @description Measured diameter of the circle along Y, in the record's `lengthUnit`. */
                             circleY: number | null;
+                            /** @description Width of cut the controller did not compensate for, in the record's `lengthUnit`. */
                             kerf: number | null;
                         };
                         /** @enum {string|null} */
                         circleKind: "hole" | "disc" | null;
                         stepsPerMm: {
+                            /** @description Steps per mm of axis X when the cut was made (null when not given). */
                             x: number | null;
+                            /** @description Steps per mm of axis Y when the cut was made (null when not given). */
                             y: number | null;
                         } | null;
                         result: components["schemas"]["TestCutResult"] | null;
                         id: string;
                         machineId: string;
-                        /**
-                         * @description Unit the record's lengths were entered in and are given back in.
-                         * @enum {string}
-                         */
-                        lengthUnit: "mm" | "um" | "in" | "thou";
+                        /** @description Unit the record's lengths were entered in and are given back in. */
+                        lengthUnit: components["schemas"]["LengthUnit"];
                         note: string;
                         recordedBy: {
                             id: string | null;
@@ -7522,38 +8086,49 @@ export interface operations {
                             part: components["schemas"]["JudgedTarget"];
                             squareness: components["schemas"]["JudgedTarget"];
                         };
+                        /** @description Thickness of the plate cut, in the record's `lengthUnit`. */
                         plateThickness: number | null;
                         /** @description In mm. */
                         plateThicknessMm: number | null;
+                        /** @description Smallest step of the caliper or rule the sizes were read with, in the record's `lengthUnit`. */
                         resolution: number | null;
                         nominal: {
+                            /** @description Commanded size of the square along X, in the record's `lengthUnit`. */
                             x: number | null;
+                            /** @description Commanded size of the square along Y, in the record's `lengthUnit`. */
                             y: number | null;
+                            /** @description Commanded diameter of the circle, in the record's `lengthUnit`. */
                             circle: number | null;
                         };
                         measured: {
+                            /** @description Measured size of the square along X, in the record's `lengthUnit`. */
                             x: number | null;
+                            /** @description Measured size of the square along Y, in the record's `lengthUnit`. */
                             y: number | null;
+                            /** @description Measured diagonal from the X0 Y0 corner, in the record's `lengthUnit`. */
                             diagonal1: number | null;
+                            /** @description Measured other diagonal, in the record's `lengthUnit`. */
                             diagonal2: number | null;
+                            /** @description Measured diameter of the circle along X, in the record's `lengthUnit`. */
                             circleX: number | null;
+                            /** @description Measured diameter of the circle along Y, in the record's `lengthUnit`. */
                             circleY: number | null;
+                            /** @description Width of cut the controller did not compensate for, in the record's `lengthUnit`. */
                             kerf: number | null;
                         };
                         /** @enum {string|null} */
                         circleKind: "hole" | "disc" | null;
                         stepsPerMm: {
+                            /** @description Steps per mm of axis X when the cut was made (null when not given). */
                             x: number | null;
+                            /** @description Steps per mm of axis Y when the cut was made (null when not given). */
                             y: number | null;
                         } | null;
                         result: components["schemas"]["TestCutResult"] | null;
                         id: string;
                         machineId: string;
-                        /**
-                         * @description Unit the record's lengths were entered in and are given back in.
-                         * @enum {string}
-                         */
-                        lengthUnit: "mm" | "um" | "in" | "thou";
+                        /** @description Unit the record's lengths were entered in and are given back in. */
+                        lengthUnit: components["schemas"]["LengthUnit"];
                         note: string;
                         recordedBy: {
                             id: string | null;
@@ -7625,38 +8200,49 @@ export interface operations {
                             part: components["schemas"]["JudgedTarget"];
                             squareness: components["schemas"]["JudgedTarget"];
                         };
+                        /** @description Thickness of the plate cut, in the record's `lengthUnit`. */
                         plateThickness: number | null;
                         /** @description In mm. */
                         plateThicknessMm: number | null;
+                        /** @description Smallest step of the caliper or rule the sizes were read with, in the record's `lengthUnit`. */
                         resolution: number | null;
                         nominal: {
+                            /** @description Commanded size of the square along X, in the record's `lengthUnit`. */
                             x: number | null;
+                            /** @description Commanded size of the square along Y, in the record's `lengthUnit`. */
                             y: number | null;
+                            /** @description Commanded diameter of the circle, in the record's `lengthUnit`. */
                             circle: number | null;
                         };
                         measured: {
+                            /** @description Measured size of the square along X, in the record's `lengthUnit`. */
                             x: number | null;
+                            /** @description Measured size of the square along Y, in the record's `lengthUnit`. */
                             y: number | null;
+                            /** @description Measured diagonal from the X0 Y0 corner, in the record's `lengthUnit`. */
                             diagonal1: number | null;
+                            /** @description Measured other diagonal, in the record's `lengthUnit`. */
                             diagonal2: number | null;
+                            /** @description Measured diameter of the circle along X, in the record's `lengthUnit`. */
                             circleX: number | null;
+                            /** @description Measured diameter of the circle along Y, in the record's `lengthUnit`. */
                             circleY: number | null;
+                            /** @description Width of cut the controller did not compensate for, in the record's `lengthUnit`. */
                             kerf: number | null;
                         };
                         /** @enum {string|null} */
                         circleKind: "hole" | "disc" | null;
                         stepsPerMm: {
+                            /** @description Steps per mm of axis X when the cut was made (null when not given). */
                             x: number | null;
+                            /** @description Steps per mm of axis Y when the cut was made (null when not given). */
                             y: number | null;
                         } | null;
                         result: components["schemas"]["TestCutResult"] | null;
                         id: string;
                         machineId: string;
-                        /**
-                         * @description Unit the record's lengths were entered in and are given back in.
-                         * @enum {string}
-                         */
-                        lengthUnit: "mm" | "um" | "in" | "thou";
+                        /** @description Unit the record's lengths were entered in and are given back in. */
+                        lengthUnit: components["schemas"]["LengthUnit"];
                         note: string;
                         recordedBy: {
                             id: string | null;
@@ -7675,38 +8261,49 @@ export interface operations {
                             part: components["schemas"]["JudgedTarget"];
                             squareness: components["schemas"]["JudgedTarget"];
                         };
+                        /** @description Thickness of the plate cut, in the record's `lengthUnit`. */
                         plateThickness: number | null;
                         /** @description In mm. */
                         plateThicknessMm: number | null;
+                        /** @description Smallest step of the caliper or rule the sizes were read with, in the record's `lengthUnit`. */
                         resolution: number | null;
                         nominal: {
+                            /** @description Commanded size of the square along X, in the record's `lengthUnit`. */
                             x: number | null;
+                            /** @description Commanded size of the square along Y, in the record's `lengthUnit`. */
                             y: number | null;
+                            /** @description Commanded diameter of the circle, in the record's `lengthUnit`. */
                             circle: number | null;
                         };
                         measured: {
+                            /** @description Measured size of the square along X, in the record's `lengthUnit`. */
                             x: number | null;
+                            /** @description Measured size of the square along Y, in the record's `lengthUnit`. */
                             y: number | null;
+                            /** @description Measured diagonal from the X0 Y0 corner, in the record's `lengthUnit`. */
                             diagonal1: number | null;
+                            /** @description Measured other diagonal, in the record's `lengthUnit`. */
                             diagonal2: number | null;
+                            /** @description Measured diameter of the circle along X, in the record's `lengthUnit`. */
                             circleX: number | null;
+                            /** @description Measured diameter of the circle along Y, in the record's `lengthUnit`. */
                             circleY: number | null;
+                            /** @description Width of cut the controller did not compensate for, in the record's `lengthUnit`. */
                             kerf: number | null;
                         };
                         /** @enum {string|null} */
                         circleKind: "hole" | "disc" | null;
                         stepsPerMm: {
+                            /** @description Steps per mm of axis X when the cut was made (null when not given). */
                             x: number | null;
+                            /** @description Steps per mm of axis Y when the cut was made (null when not given). */
                             y: number | null;
                         } | null;
                         result: components["schemas"]["TestCutResult"] | null;
                         id: string;
                         machineId: string;
-                        /**
-                         * @description Unit the record's lengths were entered in and are given back in.
-                         * @enum {string}
-                         */
-                        lengthUnit: "mm" | "um" | "in" | "thou";
+                        /** @description Unit the record's lengths were entered in and are given back in. */
+                        lengthUnit: components["schemas"]["LengthUnit"];
                         note: string;
                         recordedBy: {
                             id: string | null;
@@ -7758,13 +8355,29 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - An approval stands on the machine's records: they are read-only while it stands (the owner can reopen the machine with a reason).
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -7824,13 +8437,29 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - An approval stands on the machine's records: they are read-only while it stands (the owner can reopen the machine with a reason).
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -7890,13 +8519,29 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - An approval stands on the machine's records: they are read-only while it stands (the owner can reopen the machine with a reason).
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -7956,13 +8601,29 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - An approval stands on the machine's records: they are read-only while it stands (the owner can reopen the machine with a reason).
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -8139,13 +8800,29 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - An approval stands on the machine's records: they are read-only while it stands (the owner can reopen the machine with a reason).
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -8237,13 +8914,30 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - An approval stands on the machine's records: they are read-only while it stands (the owner can reopen the machine with a reason).
+             *     - The record is not in a state that allows it; the message says what stands in the way.
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -8355,13 +9049,28 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -8463,13 +9172,28 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -8616,13 +9340,29 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - An approval stands on the machine's records: they are read-only while it stands (the owner can reopen the machine with a reason).
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -8752,11 +9492,8 @@ export interface operations {
                         name: string;
                         /** @description G-code letter the axis moves under (Y1 and Y2 are both Y), or null. */
                         letter: string | null;
-                        /**
-                         * @description The unit the axis is set up in: drive lengths, feed rates (per minute) and travel below are in it.
-                         * @enum {string}
-                         */
-                        lengthUnit: "mm" | "um" | "in" | "thou";
+                        /** @description The unit the axis is set up in: drive lengths, feed rates (per minute) and travel below are in it. */
+                        lengthUnit: components["schemas"]["LengthUnit"];
                         /** @description The drive's lengths in lengthUnit (the pinion module in mm, as always). */
                         drive: components["schemas"]["DriveRecord"];
                         /** @description The same drive in mm. */
@@ -8764,7 +9501,7 @@ export interface operations {
                         driveSummary: string;
                         /** @description Full steps per motor revolution. */
                         motorStepsPerRev: number;
-                        /** @description Microsteps per full step set on the driver. */
+                        /** @description Microsteps per full step set on the driver (a count). */
                         microsteps: number;
                         /** @description Motor turns per turn of the screw or pinion (no unit). */
                         gearRatio: number;
@@ -8894,13 +9631,30 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - An approval stands on the machine's records: they are read-only while it stands (the owner can reopen the machine with a reason).
+             *     - The name or address is already taken.
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -9057,13 +9811,29 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - An approval stands on the machine's records: they are read-only while it stands (the owner can reopen the machine with a reason).
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -9128,13 +9898,30 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - An approval stands on the machine's records: they are read-only while it stands (the owner can reopen the machine with a reason).
+             *     - The name or address is already taken.
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -9191,6 +9978,7 @@ export interface operations {
     AxisChecks_listTrials: {
         parameters: {
             query?: {
+                /** @description Count of records on the page (1 to 200; 50 when absent). */
                 limit?: number;
                 /** @description The id of the last record of the page before (the X-Next-Cursor it came with). */
                 cursor?: string;
@@ -9224,8 +10012,10 @@ export interface operations {
                         lengthUnit: string;
                         /** @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly). */
                         readingUnit: string;
+                        /** @description Steps per mm set in the controller while the moves were made. */
                         stepsPerMmUsed: number;
                         throughOrigin: boolean;
+                        /** @description Count of moves recorded. */
                         moveCount: number;
                         warnings: components["schemas"]["ResultWarning"][];
                         result: {
@@ -9233,8 +10023,11 @@ export interface operations {
                             correctedStepsPerMm: number;
                             /** @description In %. */
                             errorPercent: number;
+                            /** @description Measured ÷ commanded, fitted over the moves (no unit). */
                             scale: number;
+                            /** @description The fit's offset, mm. */
                             offset: number;
+                            /** @description Largest residual, mm. */
                             residualMax: number;
                         } | null;
                         /** @enum {string} */
@@ -9301,10 +10094,13 @@ export interface operations {
                         appliedBy: string | null;
                         locked: boolean;
                         unreadable?: string;
+                        /** @description Steps per mm set in the controller while the moves were made. */
                         stepsPerMmUsed: number;
                         throughOrigin: boolean;
                         moves: {
+                            /** @description Commanded move, in the record's `lengthUnit`. */
                             commanded: number;
+                            /** @description Measured move, in the record's `lengthUnit`. */
                             measured: number;
                         }[];
                         result: {
@@ -9322,9 +10118,13 @@ export interface operations {
                             residualMax: number;
                             /** @description Each move commanded and measured, its error and its residual, all in mm. */
                             moves: {
+                                /** @description Commanded move, mm. */
                                 commanded: number;
+                                /** @description Measured move, mm. */
                                 measured: number;
+                                /** @description Measured minus commanded, mm. */
                                 error: number;
+                                /** @description Distance from the fitted line, mm. */
                                 residual: number;
                             }[];
                             /** @description In %. */
@@ -9347,16 +10147,10 @@ export interface operations {
                         id: string;
                         axisId: string;
                         machineId: string;
-                        /**
-                         * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
-                         * @enum {string}
-                         */
-                        lengthUnit: "mm" | "um" | "in" | "thou";
-                        /**
-                         * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
-                         * @enum {string}
-                         */
-                        readingUnit: "mm" | "um" | "in" | "thou";
+                        /** @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly). */
+                        lengthUnit: components["schemas"]["LengthUnit"];
+                        /** @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly). */
+                        readingUnit: components["schemas"]["ReadingUnit"];
                     };
                 };
             };
@@ -9396,13 +10190,29 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - An approval stands on the machine's records: they are read-only while it stands (the owner can reopen the machine with a reason).
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -9434,10 +10244,13 @@ export interface operations {
                         appliedBy: string | null;
                         locked: boolean;
                         unreadable?: string;
+                        /** @description Steps per mm set in the controller while the moves were made. */
                         stepsPerMmUsed: number;
                         throughOrigin: boolean;
                         moves: {
+                            /** @description Commanded move, in the record's `lengthUnit`. */
                             commanded: number;
+                            /** @description Measured move, in the record's `lengthUnit`. */
                             measured: number;
                         }[];
                         result: {
@@ -9455,9 +10268,13 @@ export interface operations {
                             residualMax: number;
                             /** @description Each move commanded and measured, its error and its residual, all in mm. */
                             moves: {
+                                /** @description Commanded move, mm. */
                                 commanded: number;
+                                /** @description Measured move, mm. */
                                 measured: number;
+                                /** @description Measured minus commanded, mm. */
                                 error: number;
+                                /** @description Distance from the fitted line, mm. */
                                 residual: number;
                             }[];
                             /** @description In %. */
@@ -9480,16 +10297,10 @@ export interface operations {
                         id: string;
                         axisId: string;
                         machineId: string;
-                        /**
-                         * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
-                         * @enum {string}
-                         */
-                        lengthUnit: "mm" | "um" | "in" | "thou";
-                        /**
-                         * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
-                         * @enum {string}
-                         */
-                        readingUnit: "mm" | "um" | "in" | "thou";
+                        /** @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly). */
+                        lengthUnit: components["schemas"]["LengthUnit"];
+                        /** @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly). */
+                        readingUnit: components["schemas"]["ReadingUnit"];
                     };
                 };
             };
@@ -9577,13 +10388,29 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - An approval stands on the machine's records: they are read-only while it stands (the owner can reopen the machine with a reason).
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -9649,7 +10476,12 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - An approval stands on the machine's records: they are read-only while it stands (the owner can reopen the machine with a reason).
+             *     - The record is not in a state that allows it; the message says what stands in the way.
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
@@ -9658,11 +10490,25 @@ export interface operations {
                     "application/json": components["schemas"]["ConflictResponse"];
                 };
             };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The corrected steps per mm is far from the drive's theoretical value and `confirmFarCorrection` was not sent as true.
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
+                };
+            };
         };
     };
     AxisChecks_listRuns: {
         parameters: {
             query?: {
+                /** @description Count of records on the page (1 to 200; 50 when absent). */
                 limit?: number;
                 /** @description The id of the last record of the page before (the X-Next-Cursor it came with). */
                 cursor?: string;
@@ -9693,16 +10539,22 @@ export interface operations {
                         lengthUnit: string;
                         /** @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly). */
                         readingUnit: string;
+                        /** @description Count of target positions. */
                         targetCount: number;
                         warnings: components["schemas"]["ResultWarning"][];
+                        /** @description Count of runs, both directions together. */
                         runCount: number;
                         result: {
+                            /** @description Bidirectional accuracy, mm. */
                             accuracy: number;
+                            /** @description Bidirectional repeatability, mm. */
                             repeatability: number;
+                            /** @description Reversal value (the largest over the targets), mm. */
                             reversal: number;
                         } | null;
                         checks: {
                             accuracy: {
+                                /** @description The figure, mm. */
                                 value: number;
                                 target: components["schemas"]["TargetValue"];
                                 /** @description In mm. */
@@ -9710,6 +10562,7 @@ export interface operations {
                                 pass: boolean;
                             };
                             repeatability: {
+                                /** @description The figure, mm. */
                                 value: number;
                                 target: components["schemas"]["TargetValue"];
                                 /** @description In mm. */
@@ -9717,6 +10570,7 @@ export interface operations {
                                 pass: boolean;
                             };
                             reversal: {
+                                /** @description The figure, mm. */
                                 value: number;
                                 target: components["schemas"]["TargetValue"];
                                 /** @description In mm. */
@@ -9785,59 +10639,81 @@ export interface operations {
                         recordedAt: string;
                         locked: boolean;
                         unreadable?: string;
+                        /** @description Target positions, in the record's `lengthUnit`, as typed. */
                         targets: number[];
                         runs: {
                             /** @enum {string} */
                             direction: "up" | "down";
+                            /** @description Deviation (actual − target) at each target, in the record's `readingUnit`. */
                             deviations: number[];
                         }[];
                         result: {
                             warnings: components["schemas"]["ResultWarning"][];
+                            /** @description Largest thermal correction made to a deviation, mm (0 when none). */
                             thermalCorrectionMax: number;
                             /** @description The unit of each number of this answer, by field name (mm, mm/mm, %, …). */
                             units: {
                                 [key: string]: string;
                             };
                             targets: {
+                                /** @description The target position, mm. */
                                 target: number;
+                                /** @description Mean positional deviation approached moving +, mm. */
                                 meanUp: number;
+                                /** @description Mean positional deviation approached moving −, mm. */
                                 meanDown: number;
+                                /** @description Mean of the two, mm. */
                                 mean: number;
+                                /** @description Reversal value at this target (mean up − mean down), mm. */
                                 reversal: number;
+                                /** @description Sample standard deviation of the approaches moving +, mm. */
                                 sUp: number;
+                                /** @description Sample standard deviation of the approaches moving −, mm. */
                                 sDown: number;
+                                /** @description Repeatability moving + (4 s), mm. */
                                 repeatabilityUp: number;
+                                /** @description Repeatability moving − (4 s), mm. */
                                 repeatabilityDown: number;
+                                /** @description Bidirectional repeatability at this target, mm. */
                                 repeatability: number;
                             }[];
+                            /** @description Reversal value of the axis (the largest size over the targets), mm. */
                             reversal: number;
+                            /** @description Mean of the signed reversal values over the targets, mm. */
                             reversalMean: number;
+                            /** @description Repeatability moving +, mm. */
                             repeatabilityUp: number;
+                            /** @description Repeatability moving −, mm. */
                             repeatabilityDown: number;
+                            /** @description Bidirectional repeatability, mm. */
                             repeatability: number;
+                            /** @description Range of the mean deviations moving +, mm. */
                             systematicUp: number;
+                            /** @description Range of the mean deviations moving −, mm. */
                             systematicDown: number;
+                            /** @description Range of the mean deviations in both directions, mm. */
                             systematic: number;
+                            /** @description Range of the mean bidirectional deviations over the targets, mm. */
                             meanRange: number;
+                            /** @description Accuracy moving +, mm. */
                             accuracyUp: number;
+                            /** @description Accuracy moving −, mm. */
                             accuracyDown: number;
+                            /** @description Bidirectional accuracy, mm. */
                             accuracy: number;
+                            /** @description Count of runs approaching moving +. */
                             runsUp: number;
+                            /** @description Count of runs approaching moving −. */
                             runsDown: number;
-                            /**
-                             * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
-                             * @enum {string}
-                             */
-                            lengthUnit?: "mm" | "um" | "in" | "thou";
-                            /**
-                             * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
-                             * @enum {string}
-                             */
-                            readingUnit?: "mm" | "um" | "in" | "thou";
+                            /** @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly). */
+                            lengthUnit?: components["schemas"]["LengthUnit"];
+                            /** @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly). */
+                            readingUnit?: components["schemas"]["ReadingUnit"];
                         } | null;
                         warnings: components["schemas"]["ResultWarning"][];
                         checks: {
                             accuracy: {
+                                /** @description The figure, mm. */
                                 value: number;
                                 target: components["schemas"]["TargetValue"];
                                 /** @description In mm. */
@@ -9845,6 +10721,7 @@ export interface operations {
                                 pass: boolean;
                             };
                             repeatability: {
+                                /** @description The figure, mm. */
                                 value: number;
                                 target: components["schemas"]["TargetValue"];
                                 /** @description In mm. */
@@ -9852,6 +10729,7 @@ export interface operations {
                                 pass: boolean;
                             };
                             reversal: {
+                                /** @description The figure, mm. */
                                 value: number;
                                 target: components["schemas"]["TargetValue"];
                                 /** @description In mm. */
@@ -9872,16 +10750,10 @@ export interface operations {
                         id: string;
                         axisId: string;
                         machineId: string;
-                        /**
-                         * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
-                         * @enum {string}
-                         */
-                        lengthUnit: "mm" | "um" | "in" | "thou";
-                        /**
-                         * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
-                         * @enum {string}
-                         */
-                        readingUnit: "mm" | "um" | "in" | "thou";
+                        /** @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly). */
+                        lengthUnit: components["schemas"]["LengthUnit"];
+                        /** @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly). */
+                        readingUnit: components["schemas"]["ReadingUnit"];
                     };
                 };
             };
@@ -9921,13 +10793,29 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - An approval stands on the machine's records: they are read-only while it stands (the owner can reopen the machine with a reason).
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -9956,59 +10844,81 @@ export interface operations {
                         recordedAt: string;
                         locked: boolean;
                         unreadable?: string;
+                        /** @description Target positions, in the record's `lengthUnit`, as typed. */
                         targets: number[];
                         runs: {
                             /** @enum {string} */
                             direction: "up" | "down";
+                            /** @description Deviation (actual − target) at each target, in the record's `readingUnit`. */
                             deviations: number[];
                         }[];
                         result: {
                             warnings: components["schemas"]["ResultWarning"][];
+                            /** @description Largest thermal correction made to a deviation, mm (0 when none). */
                             thermalCorrectionMax: number;
                             /** @description The unit of each number of this answer, by field name (mm, mm/mm, %, …). */
                             units: {
                                 [key: string]: string;
                             };
                             targets: {
+                                /** @description The target position, mm. */
                                 target: number;
+                                /** @description Mean positional deviation approached moving +, mm. */
                                 meanUp: number;
+                                /** @description Mean positional deviation approached moving −, mm. */
                                 meanDown: number;
+                                /** @description Mean of the two, mm. */
                                 mean: number;
+                                /** @description Reversal value at this target (mean up − mean down), mm. */
                                 reversal: number;
+                                /** @description Sample standard deviation of the approaches moving +, mm. */
                                 sUp: number;
+                                /** @description Sample standard deviation of the approaches moving −, mm. */
                                 sDown: number;
+                                /** @description Repeatability moving + (4 s), mm. */
                                 repeatabilityUp: number;
+                                /** @description Repeatability moving − (4 s), mm. */
                                 repeatabilityDown: number;
+                                /** @description Bidirectional repeatability at this target, mm. */
                                 repeatability: number;
                             }[];
+                            /** @description Reversal value of the axis (the largest size over the targets), mm. */
                             reversal: number;
+                            /** @description Mean of the signed reversal values over the targets, mm. */
                             reversalMean: number;
+                            /** @description Repeatability moving +, mm. */
                             repeatabilityUp: number;
+                            /** @description Repeatability moving −, mm. */
                             repeatabilityDown: number;
+                            /** @description Bidirectional repeatability, mm. */
                             repeatability: number;
+                            /** @description Range of the mean deviations moving +, mm. */
                             systematicUp: number;
+                            /** @description Range of the mean deviations moving −, mm. */
                             systematicDown: number;
+                            /** @description Range of the mean deviations in both directions, mm. */
                             systematic: number;
+                            /** @description Range of the mean bidirectional deviations over the targets, mm. */
                             meanRange: number;
+                            /** @description Accuracy moving +, mm. */
                             accuracyUp: number;
+                            /** @description Accuracy moving −, mm. */
                             accuracyDown: number;
+                            /** @description Bidirectional accuracy, mm. */
                             accuracy: number;
+                            /** @description Count of runs approaching moving +. */
                             runsUp: number;
+                            /** @description Count of runs approaching moving −. */
                             runsDown: number;
-                            /**
-                             * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
-                             * @enum {string}
-                             */
-                            lengthUnit?: "mm" | "um" | "in" | "thou";
-                            /**
-                             * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
-                             * @enum {string}
-                             */
-                            readingUnit?: "mm" | "um" | "in" | "thou";
+                            /** @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly). */
+                            lengthUnit?: components["schemas"]["LengthUnit"];
+                            /** @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly). */
+                            readingUnit?: components["schemas"]["ReadingUnit"];
                         } | null;
                         warnings: components["schemas"]["ResultWarning"][];
                         checks: {
                             accuracy: {
+                                /** @description The figure, mm. */
                                 value: number;
                                 target: components["schemas"]["TargetValue"];
                                 /** @description In mm. */
@@ -10016,6 +10926,7 @@ export interface operations {
                                 pass: boolean;
                             };
                             repeatability: {
+                                /** @description The figure, mm. */
                                 value: number;
                                 target: components["schemas"]["TargetValue"];
                                 /** @description In mm. */
@@ -10023,6 +10934,7 @@ export interface operations {
                                 pass: boolean;
                             };
                             reversal: {
+                                /** @description The figure, mm. */
                                 value: number;
                                 target: components["schemas"]["TargetValue"];
                                 /** @description In mm. */
@@ -10043,16 +10955,10 @@ export interface operations {
                         id: string;
                         axisId: string;
                         machineId: string;
-                        /**
-                         * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
-                         * @enum {string}
-                         */
-                        lengthUnit: "mm" | "um" | "in" | "thou";
-                        /**
-                         * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
-                         * @enum {string}
-                         */
-                        readingUnit: "mm" | "um" | "in" | "thou";
+                        /** @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly). */
+                        lengthUnit: components["schemas"]["LengthUnit"];
+                        /** @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly). */
+                        readingUnit: components["schemas"]["ReadingUnit"];
                     };
                 };
             };
@@ -10140,7 +11046,11 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - An approval stands on the machine's records: they are read-only while it stands (the owner can reopen the machine with a reason).
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
@@ -10149,13 +11059,26 @@ export interface operations {
                     "application/json": components["schemas"]["ConflictResponse"];
                 };
             };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
+                };
+            };
         };
     };
     AxisChecks_testTargets: {
         parameters: {
             query?: {
                 /** @description The unit of `overrun` (mm when absent). */
-                lengthUnit?: "mm" | "um" | "in" | "thou";
+                lengthUnit?: components["schemas"]["LengthUnit"];
+                /** @description Clear travel kept beyond the first and last target, in `lengthUnit`. */
                 overrun?: number;
             };
             header?: never;
@@ -10207,20 +11130,20 @@ export interface operations {
     AxisChecks_testProgram: {
         parameters: {
             query: {
-                kind: "positioning" | "travel";
                 /** @description The unit of the values below. */
-                lengthUnit?: "mm" | "um" | "in" | "thou";
+                lengthUnit?: components["schemas"]["LengthUnit"];
+                kind: "positioning" | "travel";
                 /** @description Feed rate of the measuring moves, lengthUnit per minute. */
                 feed?: number;
                 /** @description Travel trial: the commanded distances from the start ("100,250,500"). */
                 distances?: string;
                 /** @description Repeat-and-reverse run: the targets ("10,212.5,405"). */
                 targets?: string;
-                /** @description Where the travel trial starts. */
+                /** @description Where the travel trial starts, in `lengthUnit`. */
                 start?: number;
-                /** @description Runs in each direction (repeat-and-reverse run). */
+                /** @description Count of runs in each direction (repeat-and-reverse run). */
                 runs?: number;
-                /** @description How far past a target the axis goes before approaching it. */
+                /** @description How far past a target the axis goes before approaching it, in `lengthUnit`. */
                 overrun?: number;
                 /** @description Dwell at each target for the reading, seconds (for controls with optional stop off). */
                 dwell?: number;
@@ -10279,6 +11202,7 @@ export interface operations {
     Backlash_list: {
         parameters: {
             query?: {
+                /** @description Count of records on the page (1 to 200; 50 when absent). */
                 limit?: number;
                 /** @description The id of the last record of the page before (the X-Next-Cursor it came with). */
                 cursor?: string;
@@ -10318,17 +11242,12 @@ export interface operations {
                         id: string;
                         axisId: string;
                         machineId: string;
-                        /**
-                         * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
-                         * @enum {string}
-                         */
-                        lengthUnit: "mm" | "um" | "in" | "thou";
-                        /**
-                         * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
-                         * @enum {string}
-                         */
-                        readingUnit: "mm" | "um" | "in" | "thou";
+                        /** @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly). */
+                        lengthUnit: components["schemas"]["LengthUnit"];
+                        /** @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly). */
+                        readingUnit: components["schemas"]["ReadingUnit"];
                         positions: components["schemas"]["BacklashPositionRecord"][];
+                        /** @description Smallest step the indicator shows, in the record's `readingUnit`. */
                         resolution: number | null;
                         definition: string;
                         result: {
@@ -10336,23 +11255,32 @@ export interface operations {
                             backlash: number;
                             /** @description In mm. */
                             backlashMm: number;
+                            /** @description Where the largest was read, in the record's `lengthUnit`. */
                             worstPosition: number;
                             /** @description In mm. */
                             worstPositionMm: number;
+                            /** @description Mean over the positions, in the record's `readingUnit`. */
                             meanBacklash: number;
                             /** @description In mm. */
                             meanBacklashMm: number;
                             positions: {
+                                /** @description Where the axis was brought, in the record's `lengthUnit`. */
                                 position: number;
                                 /** @description In mm. */
                                 positionMm: number;
+                                /** @description Mean of the readings approached moving +, in the record's `readingUnit`. */
                                 meanUp: number;
+                                /** @description Mean of the readings approached moving −, in the record's `readingUnit`. */
                                 meanDown: number;
+                                /** @description Signed mean up − mean down, in the record's `readingUnit`. */
                                 reversal: number;
+                                /** @description Size of the reversal, in the record's `readingUnit`. */
                                 backlash: number;
                                 /** @description In mm. */
                                 backlashMm: number;
+                                /** @description Count of readings approached moving +. */
                                 approachesUp: number;
+                                /** @description Count of readings approached moving −. */
                                 approachesDown: number;
                             }[];
                         } | null;
@@ -10432,17 +11360,12 @@ export interface operations {
                         id: string;
                         axisId: string;
                         machineId: string;
-                        /**
-                         * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
-                         * @enum {string}
-                         */
-                        lengthUnit: "mm" | "um" | "in" | "thou";
-                        /**
-                         * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
-                         * @enum {string}
-                         */
-                        readingUnit: "mm" | "um" | "in" | "thou";
+                        /** @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly). */
+                        lengthUnit: components["schemas"]["LengthUnit"];
+                        /** @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly). */
+                        readingUnit: components["schemas"]["ReadingUnit"];
                         positions: components["schemas"]["BacklashPositionRecord"][];
+                        /** @description Smallest step the indicator shows, in the record's `readingUnit`. */
                         resolution: number | null;
                         definition: string;
                         result: {
@@ -10450,23 +11373,32 @@ export interface operations {
                             backlash: number;
                             /** @description In mm. */
                             backlashMm: number;
+                            /** @description Where the largest was read, in the record's `lengthUnit`. */
                             worstPosition: number;
                             /** @description In mm. */
                             worstPositionMm: number;
+                            /** @description Mean over the positions, in the record's `readingUnit`. */
                             meanBacklash: number;
                             /** @description In mm. */
                             meanBacklashMm: number;
                             positions: {
+                                /** @description Where the axis was brought, in the record's `lengthUnit`. */
                                 position: number;
                                 /** @description In mm. */
                                 positionMm: number;
+                                /** @description Mean of the readings approached moving +, in the record's `readingUnit`. */
                                 meanUp: number;
+                                /** @description Mean of the readings approached moving −, in the record's `readingUnit`. */
                                 meanDown: number;
+                                /** @description Signed mean up − mean down, in the record's `readingUnit`. */
                                 reversal: number;
+                                /** @description Size of the reversal, in the record's `readingUnit`. */
                                 backlash: number;
                                 /** @description In mm. */
                                 backlashMm: number;
+                                /** @description Count of readings approached moving +. */
                                 approachesUp: number;
+                                /** @description Count of readings approached moving −. */
                                 approachesDown: number;
                             }[];
                         } | null;
@@ -10511,13 +11443,29 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - An approval stands on the machine's records: they are read-only while it stands (the owner can reopen the machine with a reason).
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -10561,17 +11509,12 @@ export interface operations {
                         id: string;
                         axisId: string;
                         machineId: string;
-                        /**
-                         * @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly).
-                         * @enum {string}
-                         */
-                        lengthUnit: "mm" | "um" | "in" | "thou";
-                        /**
-                         * @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly).
-                         * @enum {string}
-                         */
-                        readingUnit: "mm" | "um" | "in" | "thou";
+                        /** @description Unit of the positions, geometry, commanded and measured moves, lead, pitch, diameters, lengths and travel of this record (feed rates in it per minute): mm, um, in or thou (1 in = 25.4 mm exactly). */
+                        lengthUnit: components["schemas"]["LengthUnit"];
+                        /** @description Unit of the indicator readings, deviations and heights of this record: mm, um, in or thou (1 in = 25.4 mm exactly). */
+                        readingUnit: components["schemas"]["ReadingUnit"];
                         positions: components["schemas"]["BacklashPositionRecord"][];
+                        /** @description Smallest step the indicator shows, in the record's `readingUnit`. */
                         resolution: number | null;
                         definition: string;
                         result: {
@@ -10579,23 +11522,32 @@ export interface operations {
                             backlash: number;
                             /** @description In mm. */
                             backlashMm: number;
+                            /** @description Where the largest was read, in the record's `lengthUnit`. */
                             worstPosition: number;
                             /** @description In mm. */
                             worstPositionMm: number;
+                            /** @description Mean over the positions, in the record's `readingUnit`. */
                             meanBacklash: number;
                             /** @description In mm. */
                             meanBacklashMm: number;
                             positions: {
+                                /** @description Where the axis was brought, in the record's `lengthUnit`. */
                                 position: number;
                                 /** @description In mm. */
                                 positionMm: number;
+                                /** @description Mean of the readings approached moving +, in the record's `readingUnit`. */
                                 meanUp: number;
+                                /** @description Mean of the readings approached moving −, in the record's `readingUnit`. */
                                 meanDown: number;
+                                /** @description Signed mean up − mean down, in the record's `readingUnit`. */
                                 reversal: number;
+                                /** @description Size of the reversal, in the record's `readingUnit`. */
                                 backlash: number;
                                 /** @description In mm. */
                                 backlashMm: number;
+                                /** @description Count of readings approached moving +. */
                                 approachesUp: number;
+                                /** @description Count of readings approached moving −. */
                                 approachesDown: number;
                             }[];
                         } | null;
@@ -10688,13 +11640,29 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - An approval stands on the machine's records: they are read-only while it stands (the owner can reopen the machine with a reason).
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -10778,10 +11746,15 @@ export interface operations {
                             status: "within-target" | "outside-target" | "not-started" | "waived";
                         }[];
                         counts: {
+                            /** @description Count of required checks. */
                             total: number;
+                            /** @description Count of checks within their targets. */
                             within: number;
+                            /** @description Count of checks outside their targets. */
                             outside: number;
+                            /** @description Count of checks waived. */
                             waived: number;
+                            /** @description Count of checks not yet recorded. */
                             notStarted: number;
                         };
                         approval: components["schemas"]["ApprovalResponse"] | null;
@@ -10902,13 +11875,30 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - An approval stands on the machine's records: they are read-only while it stands (the owner can reopen the machine with a reason).
+             *     - The record is not in a state that allows it; the message says what stands in the way.
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -10975,13 +11965,29 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - The record is not in a state that allows it; the message says what stands in the way.
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -11101,13 +12107,29 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - The record is not in a state that allows it; the message says what stands in the way.
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -11176,13 +12198,29 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - The record is not in a state that allows it; the message says what stands in the way.
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -11219,6 +12257,7 @@ export interface operations {
                         keyId: string | null;
                         signedCopyIntact: boolean | null;
                         differences: components["schemas"]["RecordDifference"][];
+                        /** @description Count of differences found beyond those listed in `differences`. */
                         moreDifferences: number;
                         recordHash: string;
                         stands: boolean;
@@ -11303,7 +12342,7 @@ export interface operations {
                             } | null;
                             approved: components["schemas"]["DriftSide"] | null;
                             latest: components["schemas"]["DriftSide"] | null;
-                            /** @description Latest minus approved, in the result's unit; null when either is missing or nothing new was recorded. */
+                            /** @description Latest minus approved, in the `unit` beside it; null when either is missing or nothing new was recorded. */
                             change: number | null;
                             unit: string | null;
                             rechecked: boolean;
@@ -11441,7 +12480,9 @@ export interface operations {
                         recheckIntervalDays: number;
                         recheckDue: boolean;
                         targetSet: string;
+                        /** @description Count of checks the approval stands on. */
                         checkCount: number;
+                        /** @description Count of those checks that were waived. */
                         waivedCount: number;
                         approvalId: string;
                         /** @enum {string} */
@@ -11456,6 +12497,7 @@ export interface operations {
                         keyId: string | null;
                         signedCopyIntact: boolean | null;
                         differences: components["schemas"]["RecordDifference"][];
+                        /** @description Count of differences found beyond those listed in `differences`. */
                         moreDifferences: number;
                         recordHash: string;
                         stands: boolean;
@@ -11543,6 +12585,7 @@ export interface operations {
                 from?: string;
                 to?: string;
                 cursor?: string;
+                /** @description Count of entries to answer with (1 to 200). */
                 limit?: number;
             };
             header?: never;
@@ -11698,13 +12741,28 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -11758,13 +12816,28 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -11878,13 +12951,28 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
@@ -11943,13 +13031,28 @@ export interface operations {
                     "application/json": components["schemas"]["ErrorResponse"];
                 };
             };
-            /** @description Refused because of the records' state: an approval stands on the machine's records (record a new check instead), or the same Idempotency-Key was sent by someone else or is still being recorded. */
+            /**
+             * @description Refused as a conflict, for one of these reasons:
+             *     - Sent with an Idempotency-Key header only: the same key is still being recorded, was sent by someone else, or its first answer was too large to keep.
+             */
             409: {
                 headers: {
                     [name: string]: unknown;
                 };
                 content: {
                     "application/json": components["schemas"]["ConflictResponse"];
+                };
+            };
+            /**
+             * @description Refused although well formed, for one of these reasons:
+             *     - The Idempotency-Key header was sent before with another command (another method or path): make a new key for each entry.
+             */
+            422: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": components["schemas"]["UnprocessableResponse"];
                 };
             };
         };
