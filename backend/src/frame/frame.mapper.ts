@@ -14,7 +14,8 @@ export interface JudgedTarget extends TargetValue {
   label: string;
 }
 
-interface Common {
+/** What every frame record answers with, before the fields of its own kind. */
+interface FrameRecordCommon {
   id: string;
   machineId: string;
   /** Unit the record's lengths were entered in and are given back in. */
@@ -29,13 +30,95 @@ interface Common {
   warnings: ResultWarning[];
 }
 
+/** The lengths of a diagonal check (null where a stored number cannot be read). */
+export interface DiagonalLengths {
+  sideX: number | null;
+  sideY: number | null;
+  diagonal1: number | null;
+  diagonal2: number | null;
+  gantrySpan: number | null;
+}
+
+export interface DiagonalCheckResponse extends FrameRecordCommon {
+  /** Smallest step of the tape or rule, in lengthUnit (null: not recorded). */
+  resolution: number | null;
+  /** As entered, in lengthUnit. */
+  input: DiagonalLengths;
+  /** The same in mm. */
+  inputMm: DiagonalLengths;
+  result: DiagonalCheckResult | null;
+  /** Present when the record's stored measurements cannot be read (result is then null). */
+  unreadable?: string;
+}
+
+/** One point of a bed grid as entered: position in lengthUnit, height in readingUnit. */
+export interface BedGridPointEntered {
+  x: number | null;
+  y: number | null;
+  z: number | null;
+}
+
+export interface BedGridResponse extends FrameRecordCommon {
+  /** Unit the heights (and the gauge's resolution) were read in and are given back in. */
+  readingUnit: LengthUnit;
+  /** Smallest step of the gauge, in readingUnit (null: not recorded). */
+  resolution: number | null;
+  rows: number | null;
+  columns: number | null;
+  points: BedGridPointEntered[];
+  /** In mm. */
+  result: BedGridResult | null;
+  /** Present when the record's stored measurements cannot be read (result is then null). */
+  unreadable?: string;
+}
+
+/** The two targets a test cut is judged against: part size and squareness. */
+export interface TestCutTargets {
+  part: JudgedTarget;
+  squareness: JudgedTarget;
+}
+
+/** The sizes the test cut was commanded at, in lengthUnit. */
+export interface TestCutNominal {
+  x: number | null;
+  y: number | null;
+  circle: number | null;
+}
+
+/** The sizes measured on the cut part, in lengthUnit. */
+export interface TestCutMeasured {
+  x: number | null;
+  y: number | null;
+  diagonal1: number | null;
+  diagonal2: number | null;
+  circleX: number | null;
+  circleY: number | null;
+  kerf: number | null;
+}
+
+export interface TestCutResponse extends FrameRecordCommon {
+  targets: TestCutTargets;
+  /** Plate thickness in lengthUnit (null: not recorded). */
+  plateThickness: number | null;
+  plateThicknessMm: number | null;
+  /** Smallest step of the caliper or rule, in lengthUnit (null: not recorded). */
+  resolution: number | null;
+  nominal: TestCutNominal;
+  measured: TestCutMeasured;
+  circleKind: TestCutRow['sizes']['circleKind'] | null;
+  stepsPerMm: TestCutRow['sizes']['stepsPerMm'] | null;
+  result: TestCutResult | null;
+  /** Present when the record's stored measurements cannot be read (result is then null). */
+  unreadable?: string;
+}
+
 function common(
   row: DiagonalCheckRow | BedGridRow | TestCutRow,
   status: FrameStatus,
   target: JudgedTarget,
   locked: boolean,
   warnings: ResultWarning[],
-): Common {
+): FrameRecordCommon {
   return {
     id: row.id,
     machineId: row.machineId,
@@ -68,7 +151,7 @@ export function toDiagonalCheckResponse(
   target: JudgedTarget,
   locked: boolean,
   warnings: ResultWarning[],
-) {
+): DiagonalCheckResponse {
   const u = row.lengthUnit;
   return {
     ...common(row, status, target, locked, warnings),
@@ -100,10 +183,9 @@ export function toBedGridResponse(
   target: JudgedTarget,
   locked: boolean,
   warnings: ResultWarning[],
-) {
+): BedGridResponse {
   return {
     ...common(row, status, target, locked, warnings),
-    /** Unit the heights (and the gauge's resolution) were read in and are given back in. */
     readingUnit: row.readingUnit,
     resolution: row.resolutionMm == null ? null : inUnit(row.resolutionMm, row.readingUnit),
     rows: row.rows ?? result?.rows ?? null,
@@ -123,10 +205,10 @@ export function toTestCutResponse(
   row: TestCutRow,
   result: TestCutResult | null,
   status: FrameStatus,
-  target: { part: JudgedTarget; squareness: JudgedTarget },
+  target: TestCutTargets,
   locked: boolean,
   warnings: ResultWarning[],
-) {
+): TestCutResponse {
   const u = row.lengthUnit;
   const s = row.sizes;
   const nominal = field(s, 'nominal');
@@ -157,7 +239,3 @@ export function toTestCutResponse(
     ...unreadable(result),
   };
 }
-
-export type DiagonalCheckResponse = ReturnType<typeof toDiagonalCheckResponse>;
-export type BedGridResponse = ReturnType<typeof toBedGridResponse>;
-export type TestCutResponse = ReturnType<typeof toTestCutResponse>;

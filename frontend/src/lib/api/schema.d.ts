@@ -1477,6 +1477,10 @@ export interface paths {
 export type webhooks = Record<string, never>;
 export interface components {
     schemas: {
+        LoginDto: {
+            email: string;
+            password: string;
+        };
         ForgotPasswordDto: {
             /** Format: email */
             email: string;
@@ -1529,20 +1533,36 @@ export interface components {
             /** Format: uuid */
             targetSetId?: string;
         };
+        TargetValueDto: {
+            /** @description 0 or more, in `unit`. */
+            value: number;
+            /**
+             * @description A length unit for a length target; mm/m, %, days or um/mm as the target's key needs.
+             * @enum {string}
+             */
+            unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
+            /** @description Where the value comes from, at most 500 characters. */
+            source?: string;
+            /**
+             * @description The line straightness is judged from; read on railStraightness only.
+             * @enum {string}
+             */
+            reference?: "minimum-zone" | "least-squares";
+        };
         CreateTargetSetDto: {
-            name: string;
-            description?: string;
             /** @description Keyed by target name; checked one by one in the service, which names any bad entry. */
             targets: {
-                [key: string]: unknown;
+                [key: string]: components["schemas"]["TargetValueDto"];
             };
+            name: string;
+            description?: string;
         };
         UpdateTargetSetDto: {
+            targets?: {
+                [key: string]: components["schemas"]["TargetValueDto"];
+            };
             name?: string;
             description?: string;
-            targets?: {
-                [key: string]: unknown;
-            };
         };
         StraightnessDto: {
             /** @description Stations along the rail, in `lengthUnit`. */
@@ -2537,7 +2557,7 @@ export interface components {
             kind: "positioning" | "rail-straightness" | "travel-trial" | "diagonal-check" | "bed-grid" | "test-cut" | "safety-walk" | "rail-parallelism" | "backlash" | "speed-check" | "travel-envelope";
             subject: string;
             /** @enum {string} */
-            status: "outside-target" | "not-started";
+            status: "not-started" | "outside-target";
         };
         MachineResponse: {
             id: string;
@@ -2745,6 +2765,122 @@ export interface components {
             updatedAt: string;
             /** @description Present when the stored geometry cannot be read: holes is then empty. */
             unreadable?: string;
+        };
+        /** @description A rail without a partner: nothing to compare. */
+        ParallelismWithoutPartner: {
+            railId: string;
+            partnerRailId: unknown;
+            /** @enum {string} */
+            status: "not-comparable";
+            reason: string;
+            targets: components["schemas"]["ParallelismTargets"];
+            warnings: components["schemas"]["ResultWarning"][];
+        };
+        /** @description The two targets a rail pair is judged against. */
+        ParallelismTargets: {
+            parallelism: components["schemas"]["ParallelismTargetShown"];
+            heightDifference: {
+                /** @description In the `unit` beside it. */
+                value: number;
+                /** @enum {string} */
+                unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
+                source: string;
+            };
+        };
+        /** @description A target as the parallelism answer shows it: value and unit only. */
+        ParallelismTargetShown: {
+            /** @description In the `unit` beside it. */
+            value: number;
+            /** @enum {string} */
+            unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
+        };
+        /** @description A pair whose sweeps cannot be compared yet (or whose latest sweep cannot be read: `unreadable`). */
+        ParallelismNotComparable: {
+            /** @enum {string} */
+            status: "not-comparable";
+            reason: string;
+            unreadable?: string;
+            railId: string;
+            partnerRailId: string;
+            targets: components["schemas"]["ParallelismTargets"];
+            /** @description The sweeps of this rail (a) and its partner (b) the comparison used. */
+            sweeps: {
+                a: string | null;
+                b: string | null;
+            };
+            height: components["schemas"]["RailHeightDifference"];
+            warnings: components["schemas"]["ResultWarning"][];
+        };
+        /** @description The height difference of the pair, from top-face sweeps; every length in mm. */
+        RailHeightDifference: {
+            measured: boolean;
+            /** @description Why there is no height (when not measured). */
+            reason: string | null;
+            datum: string | null;
+            /** @description Largest height difference, mm. */
+            worst: number | null;
+            /** @description The same with its sign, mm. */
+            worstSigned: number | null;
+            /** @description Where along the rail the largest difference is, mm. */
+            at: number | null;
+            /** @description Difference at each station, mm. */
+            differences: number[] | null;
+            /** @description Rail spacing, mm. */
+            spacing: number | null;
+            /** @description In µm per mm. */
+            kUmPerMm: number | null;
+            /** @description Permissible height difference, mm (null when the spacing is missing). */
+            permissible: number | null;
+            targetText: string | null;
+            within: boolean | null;
+            unit: string;
+        };
+        /** @description A pair judged on its parallelism (and its height difference when measured); lengths in mm. */
+        ParallelismMeasured: {
+            /** @enum {string} */
+            status: "within-target" | "outside-target";
+            datum: string;
+            /** @enum {string} */
+            face: "side" | "top";
+            /** @description Parallelism of the pair, mm. */
+            parallelism: number;
+            /** @description Mean offset between the rails, mm. */
+            meanOffset: number;
+            /** @description Stations compared, mm along the rail. */
+            positions: number[];
+            /** @description Difference at each station, mm. */
+            differences: number[];
+            parallelismWithin: boolean | null;
+            heightDifferenceWithin: boolean | null;
+            railId: string;
+            partnerRailId: string;
+            targets: components["schemas"]["ParallelismTargets"];
+            /** @description The sweeps of this rail (a) and its partner (b) the comparison used. */
+            sweeps: {
+                a: string | null;
+                b: string | null;
+            };
+            height: components["schemas"]["RailHeightDifference"];
+            warnings: components["schemas"]["ResultWarning"][];
+        };
+        /** @description A pair judged on its height difference alone: the side-face sweeps cannot be compared (`reason`). */
+        ParallelismByHeightOnly: {
+            /** @enum {string} */
+            status: "within-target" | "outside-target";
+            reason: string;
+            parallelism: unknown;
+            parallelismWithin: unknown;
+            heightDifferenceWithin: boolean | null;
+            railId: string;
+            partnerRailId: string;
+            targets: components["schemas"]["ParallelismTargets"];
+            /** @description The sweeps of this rail (a) and its partner (b) the comparison used. */
+            sweeps: {
+                a: string | null;
+                b: string | null;
+            };
+            height: components["schemas"]["RailHeightDifference"];
+            warnings: components["schemas"]["ResultWarning"][];
         };
         /** @description A sweep in its rail's list: the summary and what the history table shows, no readings (GET /api/sweeps/:id has them). */
         SweepListItem: {
@@ -2993,6 +3129,44 @@ export interface components {
             /** @description Present when the stored hole positions, band or readings cannot be read: holes is then empty. */
             unreadable?: string;
         };
+        DiagonalCheckResponse: {
+            /** @description Smallest step of the tape or rule, in lengthUnit (null: not recorded). */
+            resolution: number | null;
+            /** @description As entered, in lengthUnit. */
+            input: components["schemas"]["DiagonalLengths"];
+            /** @description The same in mm. */
+            inputMm: components["schemas"]["DiagonalLengths"];
+            result: components["schemas"]["DiagonalCheckResult"] | null;
+            /** @description Present when the record's stored measurements cannot be read (result is then null). */
+            unreadable?: string;
+            id: string;
+            machineId: string;
+            /**
+             * @description Unit the record's lengths were entered in and are given back in.
+             * @enum {string}
+             */
+            lengthUnit: "mm" | "um" | "in" | "thou";
+            note: string;
+            recordedBy: {
+                id: string | null;
+                name: string;
+            };
+            recordedAt: string;
+            /** @enum {string} */
+            status: "within-target" | "outside-target";
+            target: components["schemas"]["JudgedTarget"];
+            locked: boolean;
+            /** @description What a person should know about the result (empty when none). */
+            warnings: components["schemas"]["ResultWarning"][];
+        };
+        /** @description The lengths of a diagonal check (null where a stored number cannot be read). */
+        DiagonalLengths: {
+            sideX: number | null;
+            sideY: number | null;
+            diagonal1: number | null;
+            diagonal2: number | null;
+            gantrySpan: number | null;
+        };
         DiagonalCheckResult: {
             correction: components["schemas"]["SquaringCorrection"];
             /** @description In degrees. */
@@ -3040,6 +3214,47 @@ export interface components {
             source?: string;
             /** @enum {string} */
             reference?: "minimum-zone" | "least-squares";
+        };
+        BedGridResponse: {
+            /**
+             * @description Unit the heights (and the gauge's resolution) were read in and are given back in.
+             * @enum {string}
+             */
+            readingUnit: "mm" | "um" | "in" | "thou";
+            /** @description Smallest step of the gauge, in readingUnit (null: not recorded). */
+            resolution: number | null;
+            rows: number | null;
+            columns: number | null;
+            points: components["schemas"]["BedGridPointEntered"][];
+            /** @description In mm. */
+            result: components["schemas"]["BedGridResult"] | null;
+            /** @description Present when the record's stored measurements cannot be read (result is then null). */
+            unreadable?: string;
+            id: string;
+            machineId: string;
+            /**
+             * @description Unit the record's lengths were entered in and are given back in.
+             * @enum {string}
+             */
+            lengthUnit: "mm" | "um" | "in" | "thou";
+            note: string;
+            recordedBy: {
+                id: string | null;
+                name: string;
+            };
+            recordedAt: string;
+            /** @enum {string} */
+            status: "within-target" | "outside-target";
+            target: components["schemas"]["JudgedTarget"];
+            locked: boolean;
+            /** @description What a person should know about the result (empty when none). */
+            warnings: components["schemas"]["ResultWarning"][];
+        };
+        /** @description One point of a bed grid as entered: position in lengthUnit, height in readingUnit. */
+        BedGridPointEntered: {
+            x: number | null;
+            y: number | null;
+            z: number | null;
         };
         BedGridResult: {
             leastSquares: {
@@ -3108,6 +3323,66 @@ export interface components {
             zoneResidualMm: number;
             /** @description Height above the lower bound of the judged zone, mm (0 … judged value): what the bed map draws. */
             judgedHeightMm: number;
+        };
+        TestCutResponse: {
+            targets: components["schemas"]["TestCutTargets"];
+            /** @description Plate thickness in lengthUnit (null: not recorded). */
+            plateThickness: number | null;
+            /** @description In mm. */
+            plateThicknessMm: number | null;
+            /** @description Smallest step of the caliper or rule, in lengthUnit (null: not recorded). */
+            resolution: number | null;
+            nominal: components["schemas"]["TestCutNominal"];
+            measured: components["schemas"]["TestCutMeasured"];
+            /** @enum {string|null} */
+            circleKind: "hole" | "disc" | null;
+            stepsPerMm: {
+                x: number | null;
+                y: number | null;
+            } | null;
+            result: components["schemas"]["TestCutResult"] | null;
+            /** @description Present when the record's stored measurements cannot be read (result is then null). */
+            unreadable?: string;
+            id: string;
+            machineId: string;
+            /**
+             * @description Unit the record's lengths were entered in and are given back in.
+             * @enum {string}
+             */
+            lengthUnit: "mm" | "um" | "in" | "thou";
+            note: string;
+            recordedBy: {
+                id: string | null;
+                name: string;
+            };
+            recordedAt: string;
+            /** @enum {string} */
+            status: "within-target" | "outside-target";
+            target: components["schemas"]["JudgedTarget"];
+            locked: boolean;
+            /** @description What a person should know about the result (empty when none). */
+            warnings: components["schemas"]["ResultWarning"][];
+        };
+        /** @description The two targets a test cut is judged against: part size and squareness. */
+        TestCutTargets: {
+            part: components["schemas"]["JudgedTarget"];
+            squareness: components["schemas"]["JudgedTarget"];
+        };
+        /** @description The sizes the test cut was commanded at, in lengthUnit. */
+        TestCutNominal: {
+            x: number | null;
+            y: number | null;
+            circle: number | null;
+        };
+        /** @description The sizes measured on the cut part, in lengthUnit. */
+        TestCutMeasured: {
+            x: number | null;
+            y: number | null;
+            diagonal1: number | null;
+            diagonal2: number | null;
+            circleX: number | null;
+            circleY: number | null;
+            kerf: number | null;
         };
         TestCutResult: {
             scaleErrorX: number;
@@ -3250,7 +3525,7 @@ export interface components {
         };
         AxisCheckSummary: {
             /** @enum {string} */
-            status: "within-target" | "outside-target" | "not-started" | "not-applicable";
+            status: "not-started" | "within-target" | "outside-target" | "not-applicable";
             summary: string;
             /** @description The result in a few words for a table cell ("−0.201 %"), or null when nothing is recorded. */
             headline: string | null;
@@ -3312,7 +3587,7 @@ export interface components {
         TravelEnvelopeResponse: {
             machineId: string;
             /** @enum {string} */
-            status: "within-target" | "outside-target" | "not-started";
+            status: "not-started" | "within-target" | "outside-target";
             /** @description The machine's work area along X and Y, in mm. */
             workArea: {
                 x: number;
@@ -3359,7 +3634,7 @@ export interface components {
             axisId: string;
             applicable: boolean;
             /** @enum {string} */
-            status: "within-target" | "outside-target" | "not-started" | "not-applicable";
+            status: "not-started" | "within-target" | "outside-target" | "not-applicable";
             /** @description Why the check cannot run (or does not apply), in words. */
             reason: string | null;
             missing: string[];
@@ -3487,9 +3762,45 @@ export interface components {
             /** @description Value now (null when absent now). */
             current: unknown;
         };
+        /** @description "What drifted" since the latest approval (no approval: null and no rows). */
+        DriftResponse: {
+            approval: components["schemas"]["DriftApproval"] | null;
+            rows: components["schemas"]["DriftRow"][];
+        };
+        /** @description The approval the drift is measured from. */
+        DriftApproval: {
+            id: string;
+            approvedAt: string;
+            approvedBy: string;
+            recordHash: string;
+        };
+        /** @description One check: what the approval stood on beside its latest result. */
+        DriftRow: {
+            key: string;
+            /** @enum {string} */
+            kind: "positioning" | "rail-straightness" | "travel-trial" | "diagonal-check" | "bed-grid" | "test-cut" | "safety-walk" | "rail-parallelism" | "backlash" | "speed-check" | "travel-envelope";
+            subject: string;
+            target: {
+                /** @description In the `unit` stored beside it. */
+                value: number;
+                /** @enum {string} */
+                unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
+                source?: string;
+                /** @enum {string} */
+                reference?: "minimum-zone" | "least-squares";
+                label?: string;
+            } | null;
+            approved: components["schemas"]["DriftSide"] | null;
+            latest: components["schemas"]["DriftSide"] | null;
+            /** @description Latest minus approved, in the result's unit; null when either is missing or nothing new was recorded. */
+            change: number | null;
+            unit: string | null;
+            rechecked: boolean;
+            worse: boolean;
+        };
         DriftSide: {
             /** @enum {string} */
-            status: "within-target" | "outside-target" | "not-started" | "waived";
+            status: "not-started" | "within-target" | "outside-target" | "waived";
             result: {
                 /** @description In the `unit` stored beside it. */
                 value: number;
@@ -3529,9 +3840,9 @@ export interface components {
             /** @description A grid entry as typed: origin, pitches and diameter in lengthUnit. */
             grid: {
                 columns: number;
-                rows: number;
                 originX: number;
                 originY: number;
+                rows: number;
                 pitchX: number;
                 pitchY: number;
                 diameter: number;
@@ -3613,7 +3924,11 @@ export interface operations {
             path?: never;
             cookie?: never;
         };
-        requestBody?: never;
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["LoginDto"];
+            };
+        };
         responses: {
             /** @description Done. */
             200: {
@@ -5991,210 +6306,7 @@ export interface operations {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": {
-                        railId: string;
-                        partnerRailId: unknown;
-                        /** @enum {string} */
-                        status: "not-comparable";
-                        reason: string;
-                        targets: {
-                            parallelism: {
-                                /** @description In the `unit` stored beside it. */
-                                value: number;
-                                /** @enum {string} */
-                                unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
-                            };
-                            heightDifference: {
-                                source: string;
-                                /** @description In the `unit` stored beside it. */
-                                value: number;
-                                /** @enum {string} */
-                                unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
-                            };
-                        };
-                        warnings: unknown[];
-                    } | {
-                        /** @enum {string} */
-                        status: "not-comparable";
-                        reason: string;
-                        railId: string;
-                        partnerRailId: string;
-                        targets: {
-                            parallelism: {
-                                /** @description In the `unit` stored beside it. */
-                                value: number;
-                                /** @enum {string} */
-                                unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
-                            };
-                            heightDifference: {
-                                source: string;
-                                /** @description In the `unit` stored beside it. */
-                                value: number;
-                                /** @enum {string} */
-                                unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
-                            };
-                        };
-                        sweeps: {
-                            a: string | null;
-                            b: string | null;
-                        };
-                        height: {
-                            measured: boolean;
-                            reason: string | null;
-                            datum: string | null;
-                            worst: number | null;
-                            worstSigned: number | null;
-                            at: number | null;
-                            differences: number[] | null;
-                            spacing: number | null;
-                            /** @description In µm per mm. */
-                            kUmPerMm: number | null;
-                            permissible: number | null;
-                            targetText: string | null;
-                            within: boolean | null;
-                            unit: string;
-                        };
-                        warnings: components["schemas"]["ResultWarning"][];
-                    } | {
-                        /** @enum {string} */
-                        status: "not-comparable";
-                        reason: string;
-                        unreadable: string;
-                        railId: string;
-                        partnerRailId: string;
-                        targets: {
-                            parallelism: {
-                                /** @description In the `unit` stored beside it. */
-                                value: number;
-                                /** @enum {string} */
-                                unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
-                            };
-                            heightDifference: {
-                                source: string;
-                                /** @description In the `unit` stored beside it. */
-                                value: number;
-                                /** @enum {string} */
-                                unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
-                            };
-                        };
-                        sweeps: {
-                            a: string | null;
-                            b: string | null;
-                        };
-                        height: {
-                            measured: boolean;
-                            reason: string | null;
-                            datum: string | null;
-                            worst: number | null;
-                            worstSigned: number | null;
-                            at: number | null;
-                            differences: number[] | null;
-                            spacing: number | null;
-                            /** @description In µm per mm. */
-                            kUmPerMm: number | null;
-                            permissible: number | null;
-                            targetText: string | null;
-                            within: boolean | null;
-                            unit: string;
-                        };
-                        warnings: components["schemas"]["ResultWarning"][];
-                    } | {
-                        heightDifferenceWithin: boolean | null;
-                        datum: string;
-                        /** @enum {string} */
-                        face: "side" | "top";
-                        parallelism: number;
-                        meanOffset: number;
-                        positions: number[];
-                        differences: number[];
-                        parallelismWithin: boolean | null;
-                        /** @enum {string} */
-                        status: "within-target" | "outside-target";
-                        railId: string;
-                        partnerRailId: string;
-                        targets: {
-                            parallelism: {
-                                /** @description In the `unit` stored beside it. */
-                                value: number;
-                                /** @enum {string} */
-                                unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
-                            };
-                            heightDifference: {
-                                source: string;
-                                /** @description In the `unit` stored beside it. */
-                                value: number;
-                                /** @enum {string} */
-                                unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
-                            };
-                        };
-                        sweeps: {
-                            a: string | null;
-                            b: string | null;
-                        };
-                        height: {
-                            measured: boolean;
-                            reason: string | null;
-                            datum: string | null;
-                            worst: number | null;
-                            worstSigned: number | null;
-                            at: number | null;
-                            differences: number[] | null;
-                            spacing: number | null;
-                            /** @description In µm per mm. */
-                            kUmPerMm: number | null;
-                            permissible: number | null;
-                            targetText: string | null;
-                            within: boolean | null;
-                            unit: string;
-                        };
-                        warnings: components["schemas"]["ResultWarning"][];
-                        reason?: unknown;
-                    } | {
-                        heightDifferenceWithin: boolean | null;
-                        reason: string;
-                        parallelism: unknown;
-                        parallelismWithin: unknown;
-                        /** @enum {string} */
-                        status: "within-target" | "outside-target";
-                        railId: string;
-                        partnerRailId: string;
-                        targets: {
-                            parallelism: {
-                                /** @description In the `unit` stored beside it. */
-                                value: number;
-                                /** @enum {string} */
-                                unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
-                            };
-                            heightDifference: {
-                                source: string;
-                                /** @description In the `unit` stored beside it. */
-                                value: number;
-                                /** @enum {string} */
-                                unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
-                            };
-                        };
-                        sweeps: {
-                            a: string | null;
-                            b: string | null;
-                        };
-                        height: {
-                            measured: boolean;
-                            reason: string | null;
-                            datum: string | null;
-                            worst: number | null;
-                            worstSigned: number | null;
-                            at: number | null;
-                            differences: number[] | null;
-                            spacing: number | null;
-                            /** @description In µm per mm. */
-                            kUmPerMm: number | null;
-                            permissible: number | null;
-                            targetText: string | null;
-                            within: boolean | null;
-                            unit: string;
-                        };
-                        warnings: components["schemas"]["ResultWarning"][];
-                    };
+                    "application/json": components["schemas"]["ParallelismWithoutPartner"] | components["schemas"]["ParallelismNotComparable"] | components["schemas"]["ParallelismMeasured"] | components["schemas"]["ParallelismByHeightOnly"];
                 };
             };
             /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
@@ -6938,81 +7050,7 @@ export interface operations {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": ({
-                        unreadable: string;
-                        resolution: number | null;
-                        input: {
-                            sideX: number | null;
-                            sideY: number | null;
-                            diagonal1: number | null;
-                            diagonal2: number | null;
-                            gantrySpan: number | null;
-                        };
-                        inputMm: {
-                            sideX: number | null;
-                            sideY: number | null;
-                            diagonal1: number | null;
-                            diagonal2: number | null;
-                            gantrySpan: number | null;
-                        };
-                        result: components["schemas"]["DiagonalCheckResult"] | null;
-                        id: string;
-                        machineId: string;
-                        /**
-                         * @description Unit the record's lengths were entered in and are given back in.
-                         * @enum {string}
-                         */
-                        lengthUnit: "mm" | "um" | "in" | "thou";
-                        note: string;
-                        recordedBy: {
-                            id: string | null;
-                            name: string;
-                        };
-                        recordedAt: string;
-                        /** @enum {string} */
-                        status: "within-target" | "outside-target";
-                        target: components["schemas"]["JudgedTarget"];
-                        locked: boolean;
-                        /** @description What a person should know about the result (empty when none). */
-                        warnings: components["schemas"]["ResultWarning"][];
-                    } | {
-                        unreadable?: unknown;
-                        resolution: number | null;
-                        input: {
-                            sideX: number | null;
-                            sideY: number | null;
-                            diagonal1: number | null;
-                            diagonal2: number | null;
-                            gantrySpan: number | null;
-                        };
-                        inputMm: {
-                            sideX: number | null;
-                            sideY: number | null;
-                            diagonal1: number | null;
-                            diagonal2: number | null;
-                            gantrySpan: number | null;
-                        };
-                        result: components["schemas"]["DiagonalCheckResult"] | null;
-                        id: string;
-                        machineId: string;
-                        /**
-                         * @description Unit the record's lengths were entered in and are given back in.
-                         * @enum {string}
-                         */
-                        lengthUnit: "mm" | "um" | "in" | "thou";
-                        note: string;
-                        recordedBy: {
-                            id: string | null;
-                            name: string;
-                        };
-                        recordedAt: string;
-                        /** @enum {string} */
-                        status: "within-target" | "outside-target";
-                        target: components["schemas"]["JudgedTarget"];
-                        locked: boolean;
-                        /** @description What a person should know about the result (empty when none). */
-                        warnings: components["schemas"]["ResultWarning"][];
-                    })[];
+                    "application/json": components["schemas"]["DiagonalCheckResponse"][];
                 };
             };
             /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
@@ -7065,81 +7103,7 @@ export interface operations {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": {
-                        unreadable: string;
-                        resolution: number | null;
-                        input: {
-                            sideX: number | null;
-                            sideY: number | null;
-                            diagonal1: number | null;
-                            diagonal2: number | null;
-                            gantrySpan: number | null;
-                        };
-                        inputMm: {
-                            sideX: number | null;
-                            sideY: number | null;
-                            diagonal1: number | null;
-                            diagonal2: number | null;
-                            gantrySpan: number | null;
-                        };
-                        result: components["schemas"]["DiagonalCheckResult"] | null;
-                        id: string;
-                        machineId: string;
-                        /**
-                         * @description Unit the record's lengths were entered in and are given back in.
-                         * @enum {string}
-                         */
-                        lengthUnit: "mm" | "um" | "in" | "thou";
-                        note: string;
-                        recordedBy: {
-                            id: string | null;
-                            name: string;
-                        };
-                        recordedAt: string;
-                        /** @enum {string} */
-                        status: "within-target" | "outside-target";
-                        target: components["schemas"]["JudgedTarget"];
-                        locked: boolean;
-                        /** @description What a person should know about the result (empty when none). */
-                        warnings: components["schemas"]["ResultWarning"][];
-                    } | {
-                        unreadable?: unknown;
-                        resolution: number | null;
-                        input: {
-                            sideX: number | null;
-                            sideY: number | null;
-                            diagonal1: number | null;
-                            diagonal2: number | null;
-                            gantrySpan: number | null;
-                        };
-                        inputMm: {
-                            sideX: number | null;
-                            sideY: number | null;
-                            diagonal1: number | null;
-                            diagonal2: number | null;
-                            gantrySpan: number | null;
-                        };
-                        result: components["schemas"]["DiagonalCheckResult"] | null;
-                        id: string;
-                        machineId: string;
-                        /**
-                         * @description Unit the record's lengths were entered in and are given back in.
-                         * @enum {string}
-                         */
-                        lengthUnit: "mm" | "um" | "in" | "thou";
-                        note: string;
-                        recordedBy: {
-                            id: string | null;
-                            name: string;
-                        };
-                        recordedAt: string;
-                        /** @enum {string} */
-                        status: "within-target" | "outside-target";
-                        target: components["schemas"]["JudgedTarget"];
-                        locked: boolean;
-                        /** @description What a person should know about the result (empty when none). */
-                        warnings: components["schemas"]["ResultWarning"][];
-                    };
+                    "application/json": components["schemas"]["DiagonalCheckResponse"];
                 };
             };
             /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
@@ -7206,77 +7170,7 @@ export interface operations {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": ({
-                        unreadable: string;
-                        /**
-                         * @description Unit the heights (and the gauge's resolution) were read in and are given back in.
-                         * @enum {string}
-                         */
-                        readingUnit: "mm" | "um" | "in" | "thou";
-                        resolution: number | null;
-                        rows: number | null;
-                        columns: number | null;
-                        points: {
-                            x: number | null;
-                            y: number | null;
-                            z: number | null;
-                        }[];
-                        result: components["schemas"]["BedGridResult"] | null;
-                        id: string;
-                        machineId: string;
-                        /**
-                         * @description Unit the record's lengths were entered in and are given back in.
-                         * @enum {string}
-                         */
-                        lengthUnit: "mm" | "um" | "in" | "thou";
-                        note: string;
-                        recordedBy: {
-                            id: string | null;
-                            name: string;
-                        };
-                        recordedAt: string;
-                        /** @enum {string} */
-                        status: "within-target" | "outside-target";
-                        target: components["schemas"]["JudgedTarget"];
-                        locked: boolean;
-                        /** @description What a person should know about the result (empty when none). */
-                        warnings: components["schemas"]["ResultWarning"][];
-                    } | {
-                        unreadable?: unknown;
-                        /**
-                         * @description Unit the heights (and the gauge's resolution) were read in and are given back in.
-                         * @enum {string}
-                         */
-                        readingUnit: "mm" | "um" | "in" | "thou";
-                        resolution: number | null;
-                        rows: number | null;
-                        columns: number | null;
-                        points: {
-                            x: number | null;
-                            y: number | null;
-                            z: number | null;
-                        }[];
-                        result: components["schemas"]["BedGridResult"] | null;
-                        id: string;
-                        machineId: string;
-                        /**
-                         * @description Unit the record's lengths were entered in and are given back in.
-                         * @enum {string}
-                         */
-                        lengthUnit: "mm" | "um" | "in" | "thou";
-                        note: string;
-                        recordedBy: {
-                            id: string | null;
-                            name: string;
-                        };
-                        recordedAt: string;
-                        /** @enum {string} */
-                        status: "within-target" | "outside-target";
-                        target: components["schemas"]["JudgedTarget"];
-                        locked: boolean;
-                        /** @description What a person should know about the result (empty when none). */
-                        warnings: components["schemas"]["ResultWarning"][];
-                    })[];
+                    "application/json": components["schemas"]["BedGridResponse"][];
                 };
             };
             /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
@@ -7329,77 +7223,7 @@ export interface operations {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": {
-                        unreadable: string;
-                        /**
-                         * @description Unit the heights (and the gauge's resolution) were read in and are given back in.
-                         * @enum {string}
-                         */
-                        readingUnit: "mm" | "um" | "in" | "thou";
-                        resolution: number | null;
-                        rows: number | null;
-                        columns: number | null;
-                        points: {
-                            x: number | null;
-                            y: number | null;
-                            z: number | null;
-                        }[];
-                        result: components["schemas"]["BedGridResult"] | null;
-                        id: string;
-                        machineId: string;
-                        /**
-                         * @description Unit the record's lengths were entered in and are given back in.
-                         * @enum {string}
-                         */
-                        lengthUnit: "mm" | "um" | "in" | "thou";
-                        note: string;
-                        recordedBy: {
-                            id: string | null;
-                            name: string;
-                        };
-                        recordedAt: string;
-                        /** @enum {string} */
-                        status: "within-target" | "outside-target";
-                        target: components["schemas"]["JudgedTarget"];
-                        locked: boolean;
-                        /** @description What a person should know about the result (empty when none). */
-                        warnings: components["schemas"]["ResultWarning"][];
-                    } | {
-                        unreadable?: unknown;
-                        /**
-                         * @description Unit the heights (and the gauge's resolution) were read in and are given back in.
-                         * @enum {string}
-                         */
-                        readingUnit: "mm" | "um" | "in" | "thou";
-                        resolution: number | null;
-                        rows: number | null;
-                        columns: number | null;
-                        points: {
-                            x: number | null;
-                            y: number | null;
-                            z: number | null;
-                        }[];
-                        result: components["schemas"]["BedGridResult"] | null;
-                        id: string;
-                        machineId: string;
-                        /**
-                         * @description Unit the record's lengths were entered in and are given back in.
-                         * @enum {string}
-                         */
-                        lengthUnit: "mm" | "um" | "in" | "thou";
-                        note: string;
-                        recordedBy: {
-                            id: string | null;
-                            name: string;
-                        };
-                        recordedAt: string;
-                        /** @enum {string} */
-                        status: "within-target" | "outside-target";
-                        target: components["schemas"]["JudgedTarget"];
-                        locked: boolean;
-                        /** @description What a person should know about the result (empty when none). */
-                        warnings: components["schemas"]["ResultWarning"][];
-                    };
+                    "application/json": components["schemas"]["BedGridResponse"];
                 };
             };
             /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
@@ -7466,107 +7290,7 @@ export interface operations {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": ({
-                        unreadable: string;
-                        targets: {
-                            part: components["schemas"]["JudgedTarget"];
-                            squareness: components["schemas"]["JudgedTarget"];
-                        };
-                        plateThickness: number | null;
-                        /** @description In mm. */
-                        plateThicknessMm: number | null;
-                        resolution: number | null;
-                        nominal: {
-                            x: number | null;
-                            y: number | null;
-                            circle: number | null;
-                        };
-                        measured: {
-                            x: number | null;
-                            y: number | null;
-                            diagonal1: number | null;
-                            diagonal2: number | null;
-                            circleX: number | null;
-                            circleY: number | null;
-                            kerf: number | null;
-                        };
-                        /** @enum {string|null} */
-                        circleKind: "hole" | "disc" | null;
-                        stepsPerMm: {
-                            x: number | null;
-                            y: number | null;
-                        } | null;
-                        result: components["schemas"]["TestCutResult"] | null;
-                        id: string;
-                        machineId: string;
-                        /**
-                         * @description Unit the record's lengths were entered in and are given back in.
-                         * @enum {string}
-                         */
-                        lengthUnit: "mm" | "um" | "in" | "thou";
-                        note: string;
-                        recordedBy: {
-                            id: string | null;
-                            name: string;
-                        };
-                        recordedAt: string;
-                        /** @enum {string} */
-                        status: "within-target" | "outside-target";
-                        target: components["schemas"]["JudgedTarget"];
-                        locked: boolean;
-                        /** @description What a person should know about the result (empty when none). */
-                        warnings: components["schemas"]["ResultWarning"][];
-                    } | {
-                        unreadable?: unknown;
-                        targets: {
-                            part: components["schemas"]["JudgedTarget"];
-                            squareness: components["schemas"]["JudgedTarget"];
-                        };
-                        plateThickness: number | null;
-                        /** @description In mm. */
-                        plateThicknessMm: number | null;
-                        resolution: number | null;
-                        nominal: {
-                            x: number | null;
-                            y: number | null;
-                            circle: number | null;
-                        };
-                        measured: {
-                            x: number | null;
-                            y: number | null;
-                            diagonal1: number | null;
-                            diagonal2: number | null;
-                            circleX: number | null;
-                            circleY: number | null;
-                            kerf: number | null;
-                        };
-                        /** @enum {string|null} */
-                        circleKind: "hole" | "disc" | null;
-                        stepsPerMm: {
-                            x: number | null;
-                            y: number | null;
-                        } | null;
-                        result: components["schemas"]["TestCutResult"] | null;
-                        id: string;
-                        machineId: string;
-                        /**
-                         * @description Unit the record's lengths were entered in and are given back in.
-                         * @enum {string}
-                         */
-                        lengthUnit: "mm" | "um" | "in" | "thou";
-                        note: string;
-                        recordedBy: {
-                            id: string | null;
-                            name: string;
-                        };
-                        recordedAt: string;
-                        /** @enum {string} */
-                        status: "within-target" | "outside-target";
-                        target: components["schemas"]["JudgedTarget"];
-                        locked: boolean;
-                        /** @description What a person should know about the result (empty when none). */
-                        warnings: components["schemas"]["ResultWarning"][];
-                    })[];
+                    "application/json": components["schemas"]["TestCutResponse"][];
                 };
             };
             /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
@@ -7619,107 +7343,7 @@ export interface operations {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": {
-                        unreadable: string;
-                        targets: {
-                            part: components["schemas"]["JudgedTarget"];
-                            squareness: components["schemas"]["JudgedTarget"];
-                        };
-                        plateThickness: number | null;
-                        /** @description In mm. */
-                        plateThicknessMm: number | null;
-                        resolution: number | null;
-                        nominal: {
-                            x: number | null;
-                            y: number | null;
-                            circle: number | null;
-                        };
-                        measured: {
-                            x: number | null;
-                            y: number | null;
-                            diagonal1: number | null;
-                            diagonal2: number | null;
-                            circleX: number | null;
-                            circleY: number | null;
-                            kerf: number | null;
-                        };
-                        /** @enum {string|null} */
-                        circleKind: "hole" | "disc" | null;
-                        stepsPerMm: {
-                            x: number | null;
-                            y: number | null;
-                        } | null;
-                        result: components["schemas"]["TestCutResult"] | null;
-                        id: string;
-                        machineId: string;
-                        /**
-                         * @description Unit the record's lengths were entered in and are given back in.
-                         * @enum {string}
-                         */
-                        lengthUnit: "mm" | "um" | "in" | "thou";
-                        note: string;
-                        recordedBy: {
-                            id: string | null;
-                            name: string;
-                        };
-                        recordedAt: string;
-                        /** @enum {string} */
-                        status: "within-target" | "outside-target";
-                        target: components["schemas"]["JudgedTarget"];
-                        locked: boolean;
-                        /** @description What a person should know about the result (empty when none). */
-                        warnings: components["schemas"]["ResultWarning"][];
-                    } | {
-                        unreadable?: unknown;
-                        targets: {
-                            part: components["schemas"]["JudgedTarget"];
-                            squareness: components["schemas"]["JudgedTarget"];
-                        };
-                        plateThickness: number | null;
-                        /** @description In mm. */
-                        plateThicknessMm: number | null;
-                        resolution: number | null;
-                        nominal: {
-                            x: number | null;
-                            y: number | null;
-                            circle: number | null;
-                        };
-                        measured: {
-                            x: number | null;
-                            y: number | null;
-                            diagonal1: number | null;
-                            diagonal2: number | null;
-                            circleX: number | null;
-                            circleY: number | null;
-                            kerf: number | null;
-                        };
-                        /** @enum {string|null} */
-                        circleKind: "hole" | "disc" | null;
-                        stepsPerMm: {
-                            x: number | null;
-                            y: number | null;
-                        } | null;
-                        result: components["schemas"]["TestCutResult"] | null;
-                        id: string;
-                        machineId: string;
-                        /**
-                         * @description Unit the record's lengths were entered in and are given back in.
-                         * @enum {string}
-                         */
-                        lengthUnit: "mm" | "um" | "in" | "thou";
-                        note: string;
-                        recordedBy: {
-                            id: string | null;
-                            name: string;
-                        };
-                        recordedAt: string;
-                        /** @enum {string} */
-                        status: "within-target" | "outside-target";
-                        target: components["schemas"]["JudgedTarget"];
-                        locked: boolean;
-                        /** @description What a person should know about the result (empty when none). */
-                        warnings: components["schemas"]["ResultWarning"][];
-                    };
+                    "application/json": components["schemas"]["TestCutResponse"];
                 };
             };
             /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
@@ -7989,7 +7613,7 @@ export interface operations {
                         machineId: string;
                         startedAt: string | null;
                         /** @enum {string} */
-                        status: "within-target" | "outside-target" | "not-started";
+                        status: "not-started" | "within-target" | "outside-target";
                         counts: components["schemas"]["WalkCounts"];
                         /** @description A "no" anywhere keeps the machine from being approved. */
                         blocking: boolean;
@@ -8074,7 +7698,7 @@ export interface operations {
                         machineId: string;
                         startedAt: string | null;
                         /** @enum {string} */
-                        status: "within-target" | "outside-target" | "not-started";
+                        status: "not-started" | "within-target" | "outside-target";
                         counts: components["schemas"]["WalkCounts"];
                         /** @description A "no" anywhere keeps the machine from being approved. */
                         blocking: boolean;
@@ -8172,7 +7796,7 @@ export interface operations {
                         machineId: string;
                         startedAt: string | null;
                         /** @enum {string} */
-                        status: "within-target" | "outside-target" | "not-started";
+                        status: "not-started" | "within-target" | "outside-target";
                         counts: components["schemas"]["WalkCounts"];
                         /** @description A "no" anywhere keeps the machine from being approved. */
                         blocking: boolean;
@@ -10727,12 +10351,12 @@ export interface operations {
                             kind: "positioning" | "rail-straightness" | "travel-trial" | "diagonal-check" | "bed-grid" | "test-cut" | "safety-walk" | "rail-parallelism" | "backlash" | "speed-check" | "travel-envelope";
                             subject: string;
                             /** @enum {string} */
-                            status: "within-target" | "outside-target" | "not-started" | "waived";
+                            status: "not-started" | "within-target" | "outside-target" | "waived";
                             /**
                              * @description What the contributor reported before any waiver.
                              * @enum {string}
                              */
-                            measuredStatus: "within-target" | "outside-target" | "not-started";
+                            measuredStatus: "not-started" | "within-target" | "outside-target";
                             target: {
                                 /** @description In the `unit` stored beside it. */
                                 value: number;
@@ -10750,7 +10374,7 @@ export interface operations {
                                 summary: string;
                             } | null;
                             /** @enum {string|null} */
-                            recordType: "axis" | "machine" | "waiver" | "rail-sweep" | "rail" | "bolt-down" | "travel-trial" | "positioning-run" | "backlash-check" | "diagonal-check" | "bed-grid" | "test-cut" | "safety-walk" | null;
+                            recordType: "machine" | "waiver" | "rail-sweep" | "rail" | "bolt-down" | "axis" | "travel-trial" | "positioning-run" | "backlash-check" | "diagonal-check" | "bed-grid" | "test-cut" | "safety-walk" | null;
                             recordId: string | null;
                             recordedAt: string | null;
                             /** @description Where the check's record is shown (snapshots taken before it was kept name a screen path, `link`, instead). */
@@ -10775,7 +10399,7 @@ export interface operations {
                             kind: "positioning" | "rail-straightness" | "travel-trial" | "diagonal-check" | "bed-grid" | "test-cut" | "safety-walk" | "rail-parallelism" | "backlash" | "speed-check" | "travel-envelope";
                             subject: string;
                             /** @enum {string} */
-                            status: "within-target" | "outside-target" | "not-started" | "waived";
+                            status: "not-started" | "within-target" | "outside-target" | "waived";
                         }[];
                         counts: {
                             total: number;
@@ -11276,40 +10900,7 @@ export interface operations {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": {
-                        approval: unknown;
-                        rows: unknown[];
-                    } | {
-                        approval: {
-                            id: string;
-                            approvedAt: string;
-                            approvedBy: string;
-                            recordHash: string;
-                        };
-                        rows: {
-                            key: string;
-                            /** @enum {string} */
-                            kind: "positioning" | "rail-straightness" | "travel-trial" | "diagonal-check" | "bed-grid" | "test-cut" | "safety-walk" | "rail-parallelism" | "backlash" | "speed-check" | "travel-envelope";
-                            subject: string;
-                            target: {
-                                /** @description In the `unit` stored beside it. */
-                                value: number;
-                                /** @enum {string} */
-                                unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
-                                source?: string;
-                                /** @enum {string} */
-                                reference?: "minimum-zone" | "least-squares";
-                                label?: string;
-                            } | null;
-                            approved: components["schemas"]["DriftSide"] | null;
-                            latest: components["schemas"]["DriftSide"] | null;
-                            /** @description Latest minus approved, in the result's unit; null when either is missing or nothing new was recorded. */
-                            change: number | null;
-                            unit: string | null;
-                            rechecked: boolean;
-                            worse: boolean;
-                        }[];
-                    };
+                    "application/json": components["schemas"]["DriftResponse"];
                 };
             };
             /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
