@@ -106,6 +106,7 @@ export interface TestCutResponse extends FrameRecordCommon {
   nominal: TestCutNominal;
   measured: TestCutMeasured;
   circleKind: TestCutRow['sizes']['circleKind'] | null;
+  /** The controller's steps per mm for X and Y when the part was cut (null where not recorded). */
   stepsPerMm: TestCutRow['sizes']['stepsPerMm'] | null;
   result: TestCutResult | null;
   /** Present when the record's stored measurements cannot be read (result is then null). */

@@ -2553,6 +2553,13 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
         },
         "scaleMaterial": {
           "type": "string",
+          "enum": [
+            "steel",
+            "stainless-steel",
+            "aluminium",
+            "glass",
+            "invar"
+          ],
           "nullable": true
         },
         "instrumentResolution": {
@@ -2780,6 +2787,13 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
         },
         "scaleMaterial": {
           "type": "string",
+          "enum": [
+            "steel",
+            "stainless-steel",
+            "aluminium",
+            "glass",
+            "invar"
+          ],
           "nullable": true
         },
         "instrumentResolution": {
@@ -3329,6 +3343,13 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
         },
         "scaleMaterial": {
           "type": "string",
+          "enum": [
+            "steel",
+            "stainless-steel",
+            "aluminium",
+            "glass",
+            "invar"
+          ],
           "nullable": true
         },
         "instrumentResolution": {
@@ -3701,6 +3722,13 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
         },
         "scaleMaterial": {
           "type": "string",
+          "enum": [
+            "steel",
+            "stainless-steel",
+            "aluminium",
+            "glass",
+            "invar"
+          ],
           "nullable": true
         },
         "instrumentResolution": {
@@ -8747,7 +8775,8 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
             "x",
             "y"
           ],
-          "nullable": true
+          "nullable": true,
+          "description": "The controller's steps per mm for X and Y when the part was cut (null where not recorded)."
         },
         "result": {
           "allOf": [

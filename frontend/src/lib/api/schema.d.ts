@@ -3336,6 +3336,7 @@ export interface components {
             measured: components["schemas"]["TestCutMeasured"];
             /** @enum {string|null} */
             circleKind: "hole" | "disc" | null;
+            /** @description The controller's steps per mm for X and Y when the part was cut (null where not recorded). */
             stepsPerMm: {
                 x: number | null;
                 y: number | null;
@@ -8964,7 +8965,8 @@ export interface operations {
                         machineTemperature: number | null;
                         /** @description Temperature of the scale while measuring, °C. */
                         scaleTemperature: number | null;
-                        scaleMaterial: string | null;
+                        /** @enum {string|null} */
+                        scaleMaterial: "steel" | "stainless-steel" | "aluminium" | "glass" | "invar" | null;
                         /** @description Smallest step the instrument reads, in readingUnit. */
                         instrumentResolution: number | null;
                         thermal: components["schemas"]["ThermalReference"] | null;
@@ -9097,7 +9099,8 @@ export interface operations {
                         machineTemperature: number | null;
                         /** @description Temperature of the scale while measuring, °C. */
                         scaleTemperature: number | null;
-                        scaleMaterial: string | null;
+                        /** @enum {string|null} */
+                        scaleMaterial: "steel" | "stainless-steel" | "aluminium" | "glass" | "invar" | null;
                         /** @description Smallest step the instrument reads, in readingUnit. */
                         instrumentResolution: number | null;
                         thermal: components["schemas"]["ThermalReference"] | null;
@@ -9489,7 +9492,8 @@ export interface operations {
                         machineTemperature: number | null;
                         /** @description Temperature of the scale while measuring, °C. */
                         scaleTemperature: number | null;
-                        scaleMaterial: string | null;
+                        /** @enum {string|null} */
+                        scaleMaterial: "steel" | "stainless-steel" | "aluminium" | "glass" | "invar" | null;
                         /** @description Smallest step the instrument reads, in readingUnit. */
                         instrumentResolution: number | null;
                         thermal: components["schemas"]["ThermalReference"] | null;
@@ -9660,7 +9664,8 @@ export interface operations {
                         machineTemperature: number | null;
                         /** @description Temperature of the scale while measuring, °C. */
                         scaleTemperature: number | null;
-                        scaleMaterial: string | null;
+                        /** @enum {string|null} */
+                        scaleMaterial: "steel" | "stainless-steel" | "aluminium" | "glass" | "invar" | null;
                         /** @description Smallest step the instrument reads, in readingUnit. */
                         instrumentResolution: number | null;
                         thermal: components["schemas"]["ThermalReference"] | null;
