@@ -6653,7 +6653,11 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
           "type": "string"
         },
         "phase": {
-          "type": "string"
+          "type": "string",
+          "enum": [
+            "as-found",
+            "as-left"
+          ]
         },
         "datum": {
           "type": "string",
@@ -7348,7 +7352,11 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
           "type": "string"
         },
         "phase": {
-          "type": "string"
+          "type": "string",
+          "enum": [
+            "as-found",
+            "as-left"
+          ]
         },
         "datum": {
           "type": "string",

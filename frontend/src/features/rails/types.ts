@@ -13,8 +13,8 @@ export type ResultWarning = Schemas['ResultWarning'];
 export type FitLine = Schemas['StoredLine'];
 export type LocalSlope = Schemas['StoredLocalSlope'];
 export type StraightnessResult = Schemas['StoredSweepResult'];
-/** A sweep as the rail's list gives it: the summary, no readings (useSweep has them). The phase is narrowed until the description lists its values. */
-export type SweepListItem = Omit<Schemas['SweepListItem'], 'phase'> & { phase: SweepPhase };
+/** A sweep as the rail's list gives it: the summary, no readings (useSweep has them). */
+export type SweepListItem = Schemas['SweepListItem'];
 
 export const FACE_LABELS: Record<SweepFace, string> = {
   side: 'Side face (sideways straightness)',

@@ -2689,7 +2689,8 @@ export interface components {
         SweepSummary: {
             id: string;
             takenAt: string;
-            phase: string;
+            /** @enum {string} */
+            phase: "as-found" | "as-left";
             datum: string | null;
             /** @description Straightness about the least-squares line, in mm; null when the stored result cannot be read (see `unreadable`). */
             leastSquaresStraightness: number | null;
@@ -2893,7 +2894,8 @@ export interface components {
             locked: boolean;
             id: string;
             takenAt: string;
-            phase: string;
+            /** @enum {string} */
+            phase: "as-found" | "as-left";
             datum: string | null;
             /** @description Straightness about the least-squares line, in mm; null when the stored result cannot be read (see `unreadable`). */
             leastSquaresStraightness: number | null;
