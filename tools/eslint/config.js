@@ -26,6 +26,39 @@ const frontendElements = [
 // from it (lib/record-kinds.ts) instead of keeping a copy. No other server file is reachable.
 const sharedWithServer = [{ category: 'server-kinds', pattern: 'backend/src/records/kinds.ts' }];
 
+// Every server call in the browser app goes through the typed client (lib/api-client.ts), whose
+// paths, bodies and answers come from the API description. Only the plain transport and the few
+// files that must load without the typed client (the sign-in page stays small) send requests
+// themselves: the transport, the client, who is signed in, signing in, the entries kept on the
+// device (their paths are known only at run time) and the connection probe.
+const PLAIN_TRANSPORT_FILES = [
+  `${FRONTEND}/lib/api/fetch-json.ts`,
+  `${FRONTEND}/lib/api-client.ts`,
+  `${FRONTEND}/lib/session/get-me.ts`,
+  `${FRONTEND}/lib/offline/commands.ts`,
+  `${FRONTEND}/lib/offline/connection.ts`,
+  `${FRONTEND}/features/auth/api/login.ts`,
+];
+const USE_CLIENT =
+  "Call the server through `client` from lib/api-client.ts (typed from the API description): `answer(client.GET('/api/…', { params }))`.";
+const API_PATH = '/^\\x2Fapi\\b/';
+const plainTransportRules = {
+  'no-restricted-imports': [
+    'error',
+    { patterns: [{ group: ['**/api/fetch-json', '**/api-client'], importNames: ['sendTo'], message: USE_CLIENT }] },
+  ],
+  'no-restricted-syntax': [
+    'error',
+    ...["CallExpression[callee.name='fetch']", "CallExpression[callee.property.name='fetch']"].flatMap((call) => [
+      { selector: `${call} > Literal.arguments:first-child[value=${API_PATH}]`, message: USE_CLIENT },
+      {
+        selector: `${call} > TemplateLiteral.arguments:first-child > TemplateElement:first-child[value.raw=${API_PATH}]`,
+        message: USE_CLIENT,
+      },
+    ]),
+  ],
+};
+
 // typescript-eslint's recommended set without type information: the type-aware set took 3 min 13 s
 // for the server and browser tests alone on this two-core machine (against 24 s) and mostly
 // reports supertest's untyped bodies; each rule here looks at one file at a time.
@@ -109,5 +142,10 @@ export default defineConfig(
         },
       ],
     },
+  },
+  {
+    files: filesIn(FRONTEND),
+    ignores: PLAIN_TRANSPORT_FILES,
+    rules: plainTransportRules,
   },
 );

@@ -11,6 +11,35 @@ export interface DriftSide {
   recordedAt: string | null;
 }
 
+/** One check: what the approval stood on beside its latest result. */
+export interface DriftRow {
+  key: string;
+  kind: BoardCheck['kind'];
+  subject: string;
+  target: BoardCheck['target'];
+  approved: DriftSide | null;
+  latest: DriftSide | null;
+  /** Latest minus approved, in the `unit` beside it; null when either is missing or nothing new was recorded. */
+  change: number | null;
+  unit: string | null;
+  rechecked: boolean;
+  worse: boolean;
+}
+
+/** The approval the drift is measured from. */
+export interface DriftApproval {
+  id: string;
+  approvedAt: string;
+  approvedBy: string;
+  recordHash: string;
+}
+
+/** "What drifted" since the latest approval (no approval: null and no rows). */
+export interface DriftResponse {
+  approval: DriftApproval | null;
+  rows: DriftRow[];
+}
+
 const side = (c: BoardCheck | undefined): DriftSide | null =>
   c ? { status: c.status, result: c.result, recordId: c.recordId, recordedAt: c.recordedAt } : null;
 
@@ -22,7 +51,7 @@ export class DriftService {
     private readonly board: ReadinessBoardService,
   ) {}
 
-  async compare(actor: SessionUser, machineId: string) {
+  async compare(actor: SessionUser, machineId: string): Promise<DriftResponse> {
     const b = await this.board.board(actor, machineId);
     const approval = await this.repo.latestApproval(actor.workshopId, machineId);
     if (!approval) return { approval: null, rows: [] };
@@ -32,7 +61,7 @@ export class DriftService {
       ...approval.snapshot.checks.map((c) => c.key),
       ...b.checks.map((c) => c.key).filter((k) => !approved.has(k)),
     ];
-    const rows = keys.map((key) => {
+    const rows = keys.map((key): DriftRow => {
       const a = approved.get(key);
       const l = latest.get(key);
       const ref = l ?? a!;
@@ -48,7 +77,6 @@ export class DriftService {
         target: ref.target,
         approved: side(a),
         latest: side(l),
-        /** Latest minus approved, in the `unit` beside it; null when either is missing or nothing new was recorded. */
         change,
         unit: ref.result?.unit ?? a?.result?.unit ?? null,
         rechecked: !!l?.recordId && !sameRecord,

@@ -1,7 +1,9 @@
 import { Controller, Get, HttpCode, Post, Req, Res, UseGuards } from '@nestjs/common';
 import { AuthGuard } from '@nestjs/passport';
+import { ApiBody } from '@nestjs/swagger';
 import type { FastifyReply, FastifyRequest } from 'fastify';
 import { CurrentUser, Public } from './decorators.js';
+import { LoginDto } from './dto/login.dto.js';
 import { LoginBodyGuard } from './login-body.guard.js';
 import { toUserResponse, type SessionUser } from './session-user.js';
 import { ConfigService } from '@nestjs/config';
@@ -15,6 +17,8 @@ export class AuthController {
   @Post('login')
   @HttpCode(200)
   @UseGuards(LoginBodyGuard, AuthGuard('local'))
+  // Passport reads the body (checked by LoginBodyGuard against LoginDto), so it is described here.
+  @ApiBody({ type: LoginDto })
   async login(@Req() req: FastifyRequest & { user: SessionUser }) {
     // A new session id on sign-in, so a planted id cannot be taken over.
     await req.session.regenerate();

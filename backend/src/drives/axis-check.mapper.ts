@@ -12,14 +12,14 @@ import { positioningVerdicts, travelTrialStatus } from './drive-status.js';
 import type { DriveTargets } from './drive-targets.js';
 import { readableResult, UNREADABLE_RESULT } from '../common/stored-result.js';
 import { storedWarnings } from './result-warnings.js';
-import type { ThermalReference } from '../engine/thermal.js';
+import type { ScaleMaterial, ThermalReference } from '../engine/thermal.js';
 
 /** What a record says about temperature: as recorded, and how the result was referred to 20 °C. */
 function temperatureOf(
   row: {
     machineTemperatureC: number | null;
     scaleTemperatureC: number | null;
-    scaleMaterial: string | null;
+    scaleMaterial: ScaleMaterial | null;
     instrumentResolution: number | null;
   },
   result: unknown,

@@ -14,7 +14,8 @@ export interface JudgedTarget extends TargetValue {
   label: string;
 }
 
-interface Common {
+/** What every frame record answers with, before the fields of its own kind. */
+interface FrameRecordCommon {
   id: string;
   machineId: string;
   /** Unit the record's lengths were entered in and are given back in. */
@@ -29,13 +30,131 @@ interface Common {
   warnings: ResultWarning[];
 }
 
+/** The lengths of a diagonal check (null where a stored number cannot be read). */
+/** A diagonal check's lengths as entered. */
+export interface DiagonalLengths {
+  /** Side along X, in the record's `lengthUnit`. */
+  sideX: number | null;
+  /** Side along Y, in the record's `lengthUnit`. */
+  sideY: number | null;
+  /** Diagonal from the X0 Y0 corner, in the record's `lengthUnit`. */
+  diagonal1: number | null;
+  /** The other diagonal, in the record's `lengthUnit`. */
+  diagonal2: number | null;
+  /** Distance between the gantry's two bearing rails, in the record's `lengthUnit`. */
+  gantrySpan: number | null;
+}
+
+/** The same lengths in mm. */
+export interface DiagonalLengthsMm {
+  /** Side along X, mm. */
+  sideX: number | null;
+  /** Side along Y, mm. */
+  sideY: number | null;
+  /** Diagonal from the X0 Y0 corner, mm. */
+  diagonal1: number | null;
+  /** The other diagonal, mm. */
+  diagonal2: number | null;
+  /** Distance between the gantry's two bearing rails, mm. */
+  gantrySpan: number | null;
+}
+
+export interface DiagonalCheckResponse extends FrameRecordCommon {
+  /** Smallest step of the tape or rule, in lengthUnit (null: not recorded). */
+  resolution: number | null;
+  /** As entered, in lengthUnit. */
+  input: DiagonalLengths;
+  /** The same in mm. */
+  inputMm: DiagonalLengthsMm;
+  result: DiagonalCheckResult | null;
+  /** Present when the record's stored measurements cannot be read (result is then null). */
+  unreadable?: string;
+}
+
+/** One point of a bed grid as entered: position in lengthUnit, height in readingUnit. */
+export interface BedGridPointEntered {
+  /** Position along X, in the record's `lengthUnit`. */
+  x: number | null;
+  /** Position along Y, in the record's `lengthUnit`. */
+  y: number | null;
+  /** Height read, in the record's `readingUnit`. */
+  z: number | null;
+}
+
+export interface BedGridResponse extends FrameRecordCommon {
+  /** Unit the heights (and the gauge's resolution) were read in and are given back in. */
+  readingUnit: LengthUnit;
+  /** Smallest step of the gauge, in readingUnit (null: not recorded). */
+  resolution: number | null;
+  /** Count of rows of the grid (along Y). */
+  rows: number | null;
+  /** Count of columns of the grid (along X). */
+  columns: number | null;
+  points: BedGridPointEntered[];
+  /** In mm. */
+  result: BedGridResult | null;
+  /** Present when the record's stored measurements cannot be read (result is then null). */
+  unreadable?: string;
+}
+
+/** The two targets a test cut is judged against: part size and squareness. */
+export interface TestCutTargets {
+  part: JudgedTarget;
+  squareness: JudgedTarget;
+}
+
+/** The sizes the test cut was commanded at, in lengthUnit. */
+export interface TestCutNominal {
+  /** Commanded size of the square along X, in the record's `lengthUnit`. */
+  x: number | null;
+  /** Commanded size of the square along Y, in the record's `lengthUnit`. */
+  y: number | null;
+  /** Commanded diameter of the circle, in the record's `lengthUnit`. */
+  circle: number | null;
+}
+
+/** The sizes measured on the cut part, in lengthUnit. */
+export interface TestCutMeasured {
+  /** Measured size of the square along X, in the record's `lengthUnit`. */
+  x: number | null;
+  /** Measured size of the square along Y, in the record's `lengthUnit`. */
+  y: number | null;
+  /** Measured diagonal from the X0 Y0 corner, in the record's `lengthUnit`. */
+  diagonal1: number | null;
+  /** Measured other diagonal, in the record's `lengthUnit`. */
+  diagonal2: number | null;
+  /** Measured diameter of the circle along X, in the record's `lengthUnit`. */
+  circleX: number | null;
+  /** Measured diameter of the circle along Y, in the record's `lengthUnit`. */
+  circleY: number | null;
+  /** Width of cut the controller did not compensate for, in the record's `lengthUnit`. */
+  kerf: number | null;
+}
+
+export interface TestCutResponse extends FrameRecordCommon {
+  targets: TestCutTargets;
+  /** Plate thickness in lengthUnit (null: not recorded). */
+  plateThickness: number | null;
+  plateThicknessMm: number | null;
+  /** Smallest step of the caliper or rule, in lengthUnit (null: not recorded). */
+  resolution: number | null;
+  nominal: TestCutNominal;
+  measured: TestCutMeasured;
+  circleKind: TestCutRow['sizes']['circleKind'] | null;
+  /** The controller's steps per mm for X and Y when the part was cut (null where not recorded). */
+  stepsPerMm: TestCutRow['sizes']['stepsPerMm'] | null;
+  result: TestCutResult | null;
+  /** Present when the record's stored measurements cannot be read (result is then null). */
+  unreadable?: string;
+}
+
 function common(
   row: DiagonalCheckRow | BedGridRow | TestCutRow,
   status: FrameStatus,
   target: JudgedTarget,
   locked: boolean,
   warnings: ResultWarning[],
-): Common {
+): FrameRecordCommon {
   return {
     id: row.id,
     machineId: row.machineId,
@@ -68,7 +187,7 @@ export function toDiagonalCheckResponse(
   target: JudgedTarget,
   locked: boolean,
   warnings: ResultWarning[],
-) {
+): DiagonalCheckResponse {
   const u = row.lengthUnit;
   return {
     ...common(row, status, target, locked, warnings),
@@ -111,10 +230,9 @@ export function toBedGridResponse(
   target: JudgedTarget,
   locked: boolean,
   warnings: ResultWarning[],
-) {
+): BedGridResponse {
   return {
     ...common(row, status, target, locked, warnings),
-    /** Unit the heights (and the gauge's resolution) were read in and are given back in. */
     readingUnit: row.readingUnit,
     /** Smallest step of the height gauge, in the record's `readingUnit`. */
     resolution: row.resolutionMm == null ? null : inUnit(row.resolutionMm, row.readingUnit),
@@ -140,10 +258,10 @@ export function toTestCutResponse(
   row: TestCutRow,
   result: TestCutResult | null,
   status: FrameStatus,
-  target: { part: JudgedTarget; squareness: JudgedTarget },
+  target: TestCutTargets,
   locked: boolean,
   warnings: ResultWarning[],
-) {
+): TestCutResponse {
   const u = row.lengthUnit;
   const s = row.sizes;
   const nominal = field(s, 'nominal');
@@ -186,7 +304,3 @@ export function toTestCutResponse(
     ...unreadable(result),
   };
 }
-
-export type DiagonalCheckResponse = ReturnType<typeof toDiagonalCheckResponse>;
-export type BedGridResponse = ReturnType<typeof toBedGridResponse>;
-export type TestCutResponse = ReturnType<typeof toTestCutResponse>;

@@ -195,6 +195,7 @@ export default async () => {
                     }],
                 [import("../target-sets/dto/target-set.dto.js"), {
                         CreateTargetSetDto: { name: { required: true, type: () => String, minLength: 1, maxLength: 120 }, description: { required: false, type: () => String, maxLength: 2000 }, targets: { required: true, type: "object", additionalProperties: true, description: "Keyed by target name; checked one by one in the service, which names any bad entry." } },
+                        TargetValueDto: { value: { required: true, type: () => Number, description: "0 or more, in `unit`." }, unit: { required: true, description: "A length unit for a length target; mm/m, %, days or um/mm as the target's key needs.", enum: ["mm", "um", "in", "thou", "mm/m", "%", "days", "um/mm"] }, source: { required: false, type: () => String, description: "Where the value comes from, at most 500 characters." }, reference: { required: false, description: "The line straightness is judged from; read on railStraightness only.", enum: ["minimum-zone", "least-squares"] } },
                         UpdateTargetSetDto: { name: { required: false, type: () => String, minLength: 1, maxLength: 120 }, description: { required: false, type: () => String, maxLength: 2000 }, targets: { required: false, type: "object", additionalProperties: true } }
                     }]
             ],

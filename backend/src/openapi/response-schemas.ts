@@ -1471,943 +1471,16 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
     "RailsController.parallelism": {
       "oneOf": [
         {
-          "type": "object",
-          "properties": {
-            "railId": {
-              "type": "string"
-            },
-            "partnerRailId": {
-              "nullable": true
-            },
-            "status": {
-              "type": "string",
-              "enum": [
-                "not-comparable"
-              ]
-            },
-            "reason": {
-              "type": "string"
-            },
-            "targets": {
-              "type": "object",
-              "properties": {
-                "parallelism": {
-                  "type": "object",
-                  "properties": {
-                    "value": {
-                      "type": "number"
-                    },
-                    "unit": {
-                      "type": "string",
-                      "enum": [
-                        "mm",
-                        "um",
-                        "in",
-                        "thou",
-                        "mm/m",
-                        "%",
-                        "days",
-                        "um/mm"
-                      ]
-                    }
-                  },
-                  "required": [
-                    "value",
-                    "unit"
-                  ]
-                },
-                "heightDifference": {
-                  "type": "object",
-                  "properties": {
-                    "source": {
-                      "type": "string"
-                    },
-                    "value": {
-                      "type": "number"
-                    },
-                    "unit": {
-                      "type": "string",
-                      "enum": [
-                        "mm",
-                        "um",
-                        "in",
-                        "thou",
-                        "mm/m",
-                        "%",
-                        "days",
-                        "um/mm"
-                      ]
-                    }
-                  },
-                  "required": [
-                    "source",
-                    "value",
-                    "unit"
-                  ]
-                }
-              },
-              "required": [
-                "parallelism",
-                "heightDifference"
-              ]
-            },
-            "warnings": {
-              "type": "array",
-              "items": {}
-            }
-          },
-          "required": [
-            "railId",
-            "partnerRailId",
-            "status",
-            "reason",
-            "targets",
-            "warnings"
-          ]
+          "$ref": "#/components/schemas/ParallelismWithoutPartner"
         },
         {
-          "type": "object",
-          "properties": {
-            "status": {
-              "type": "string",
-              "enum": [
-                "not-comparable"
-              ]
-            },
-            "reason": {
-              "type": "string"
-            },
-            "railId": {
-              "type": "string"
-            },
-            "partnerRailId": {
-              "type": "string"
-            },
-            "targets": {
-              "type": "object",
-              "properties": {
-                "parallelism": {
-                  "type": "object",
-                  "properties": {
-                    "value": {
-                      "type": "number"
-                    },
-                    "unit": {
-                      "type": "string",
-                      "enum": [
-                        "mm",
-                        "um",
-                        "in",
-                        "thou",
-                        "mm/m",
-                        "%",
-                        "days",
-                        "um/mm"
-                      ]
-                    }
-                  },
-                  "required": [
-                    "value",
-                    "unit"
-                  ]
-                },
-                "heightDifference": {
-                  "type": "object",
-                  "properties": {
-                    "source": {
-                      "type": "string"
-                    },
-                    "value": {
-                      "type": "number"
-                    },
-                    "unit": {
-                      "type": "string",
-                      "enum": [
-                        "mm",
-                        "um",
-                        "in",
-                        "thou",
-                        "mm/m",
-                        "%",
-                        "days",
-                        "um/mm"
-                      ]
-                    }
-                  },
-                  "required": [
-                    "source",
-                    "value",
-                    "unit"
-                  ]
-                }
-              },
-              "required": [
-                "parallelism",
-                "heightDifference"
-              ]
-            },
-            "sweeps": {
-              "type": "object",
-              "properties": {
-                "a": {
-                  "type": "string",
-                  "nullable": true
-                },
-                "b": {
-                  "type": "string",
-                  "nullable": true
-                }
-              },
-              "required": [
-                "a",
-                "b"
-              ]
-            },
-            "height": {
-              "type": "object",
-              "properties": {
-                "measured": {
-                  "type": "boolean"
-                },
-                "reason": {
-                  "type": "string",
-                  "nullable": true
-                },
-                "datum": {
-                  "type": "string",
-                  "nullable": true
-                },
-                "worst": {
-                  "type": "number",
-                  "nullable": true,
-                  "description": "Largest height difference between the rails, mm."
-                },
-                "worstSigned": {
-                  "type": "number",
-                  "nullable": true,
-                  "description": "The same with its sign, mm."
-                },
-                "at": {
-                  "type": "number",
-                  "nullable": true,
-                  "description": "Where it was found along the rails, mm."
-                },
-                "differences": {
-                  "type": "array",
-                  "items": {
-                    "type": "number"
-                  },
-                  "nullable": true,
-                  "description": "Height difference at each compared position, mm."
-                },
-                "spacing": {
-                  "type": "number",
-                  "nullable": true,
-                  "description": "Distance between the rails, mm."
-                },
-                "kUmPerMm": {
-                  "type": "number",
-                  "nullable": true
-                },
-                "permissible": {
-                  "type": "number",
-                  "nullable": true,
-                  "description": "Permissible height difference (spacing × K), mm."
-                },
-                "targetText": {
-                  "type": "string",
-                  "nullable": true
-                },
-                "within": {
-                  "type": "boolean",
-                  "nullable": true
-                },
-                "unit": {
-                  "type": "string"
-                }
-              },
-              "required": [
-                "measured",
-                "reason",
-                "datum",
-                "worst",
-                "worstSigned",
-                "at",
-                "differences",
-                "spacing",
-                "kUmPerMm",
-                "permissible",
-                "targetText",
-                "within",
-                "unit"
-              ]
-            },
-            "warnings": {
-              "type": "array",
-              "items": {
-                "$ref": "#/components/schemas/ResultWarning"
-              }
-            }
-          },
-          "required": [
-            "status",
-            "reason",
-            "railId",
-            "partnerRailId",
-            "targets",
-            "sweeps",
-            "height",
-            "warnings"
-          ]
+          "$ref": "#/components/schemas/ParallelismNotComparable"
         },
         {
-          "type": "object",
-          "properties": {
-            "status": {
-              "type": "string",
-              "enum": [
-                "not-comparable"
-              ]
-            },
-            "reason": {
-              "type": "string"
-            },
-            "unreadable": {
-              "type": "string"
-            },
-            "railId": {
-              "type": "string"
-            },
-            "partnerRailId": {
-              "type": "string"
-            },
-            "targets": {
-              "type": "object",
-              "properties": {
-                "parallelism": {
-                  "type": "object",
-                  "properties": {
-                    "value": {
-                      "type": "number"
-                    },
-                    "unit": {
-                      "type": "string",
-                      "enum": [
-                        "mm",
-                        "um",
-                        "in",
-                        "thou",
-                        "mm/m",
-                        "%",
-                        "days",
-                        "um/mm"
-                      ]
-                    }
-                  },
-                  "required": [
-                    "value",
-                    "unit"
-                  ]
-                },
-                "heightDifference": {
-                  "type": "object",
-                  "properties": {
-                    "source": {
-                      "type": "string"
-                    },
-                    "value": {
-                      "type": "number"
-                    },
-                    "unit": {
-                      "type": "string",
-                      "enum": [
-                        "mm",
-                        "um",
-                        "in",
-                        "thou",
-                        "mm/m",
-                        "%",
-                        "days",
-                        "um/mm"
-                      ]
-                    }
-                  },
-                  "required": [
-                    "source",
-                    "value",
-                    "unit"
-                  ]
-                }
-              },
-              "required": [
-                "parallelism",
-                "heightDifference"
-              ]
-            },
-            "sweeps": {
-              "type": "object",
-              "properties": {
-                "a": {
-                  "type": "string",
-                  "nullable": true
-                },
-                "b": {
-                  "type": "string",
-                  "nullable": true
-                }
-              },
-              "required": [
-                "a",
-                "b"
-              ]
-            },
-            "height": {
-              "type": "object",
-              "properties": {
-                "measured": {
-                  "type": "boolean"
-                },
-                "reason": {
-                  "type": "string",
-                  "nullable": true
-                },
-                "datum": {
-                  "type": "string",
-                  "nullable": true
-                },
-                "worst": {
-                  "type": "number",
-                  "nullable": true,
-                  "description": "Largest height difference between the rails, mm."
-                },
-                "worstSigned": {
-                  "type": "number",
-                  "nullable": true,
-                  "description": "The same with its sign, mm."
-                },
-                "at": {
-                  "type": "number",
-                  "nullable": true,
-                  "description": "Where it was found along the rails, mm."
-                },
-                "differences": {
-                  "type": "array",
-                  "items": {
-                    "type": "number"
-                  },
-                  "nullable": true,
-                  "description": "Height difference at each compared position, mm."
-                },
-                "spacing": {
-                  "type": "number",
-                  "nullable": true,
-                  "description": "Distance between the rails, mm."
-                },
-                "kUmPerMm": {
-                  "type": "number",
-                  "nullable": true
-                },
-                "permissible": {
-                  "type": "number",
-                  "nullable": true,
-                  "description": "Permissible height difference (spacing × K), mm."
-                },
-                "targetText": {
-                  "type": "string",
-                  "nullable": true
-                },
-                "within": {
-                  "type": "boolean",
-                  "nullable": true
-                },
-                "unit": {
-                  "type": "string"
-                }
-              },
-              "required": [
-                "measured",
-                "reason",
-                "datum",
-                "worst",
-                "worstSigned",
-                "at",
-                "differences",
-                "spacing",
-                "kUmPerMm",
-                "permissible",
-                "targetText",
-                "within",
-                "unit"
-              ]
-            },
-            "warnings": {
-              "type": "array",
-              "items": {
-                "$ref": "#/components/schemas/ResultWarning"
-              }
-            }
-          },
-          "required": [
-            "status",
-            "reason",
-            "unreadable",
-            "railId",
-            "partnerRailId",
-            "targets",
-            "sweeps",
-            "height",
-            "warnings"
-          ]
+          "$ref": "#/components/schemas/ParallelismMeasured"
         },
         {
-          "type": "object",
-          "properties": {
-            "heightDifferenceWithin": {
-              "type": "boolean",
-              "nullable": true
-            },
-            "datum": {
-              "type": "string"
-            },
-            "face": {
-              "type": "string",
-              "enum": [
-                "side",
-                "top"
-              ]
-            },
-            "parallelism": {
-              "type": "number",
-              "description": "Parallelism of the two rails, mm."
-            },
-            "meanOffset": {
-              "type": "number",
-              "description": "Mean of the differences between the rails, mm."
-            },
-            "positions": {
-              "type": "array",
-              "items": {
-                "type": "number"
-              },
-              "description": "Positions along the rails the two sweeps are compared at, mm."
-            },
-            "differences": {
-              "type": "array",
-              "items": {
-                "type": "number"
-              },
-              "description": "Difference between the rails at each position, mm."
-            },
-            "parallelismWithin": {
-              "type": "boolean",
-              "nullable": true
-            },
-            "status": {
-              "type": "string",
-              "enum": [
-                "within-target",
-                "outside-target"
-              ]
-            },
-            "railId": {
-              "type": "string"
-            },
-            "partnerRailId": {
-              "type": "string"
-            },
-            "targets": {
-              "type": "object",
-              "properties": {
-                "parallelism": {
-                  "type": "object",
-                  "properties": {
-                    "value": {
-                      "type": "number"
-                    },
-                    "unit": {
-                      "type": "string",
-                      "enum": [
-                        "mm",
-                        "um",
-                        "in",
-                        "thou",
-                        "mm/m",
-                        "%",
-                        "days",
-                        "um/mm"
-                      ]
-                    }
-                  },
-                  "required": [
-                    "value",
-                    "unit"
-                  ]
-                },
-                "heightDifference": {
-                  "type": "object",
-                  "properties": {
-                    "source": {
-                      "type": "string"
-                    },
-                    "value": {
-                      "type": "number"
-                    },
-                    "unit": {
-                      "type": "string",
-                      "enum": [
-                        "mm",
-                        "um",
-                        "in",
-                        "thou",
-                        "mm/m",
-                        "%",
-                        "days",
-                        "um/mm"
-                      ]
-                    }
-                  },
-                  "required": [
-                    "source",
-                    "value",
-                    "unit"
-                  ]
-                }
-              },
-              "required": [
-                "parallelism",
-                "heightDifference"
-              ]
-            },
-            "sweeps": {
-              "type": "object",
-              "properties": {
-                "a": {
-                  "type": "string",
-                  "nullable": true
-                },
-                "b": {
-                  "type": "string",
-                  "nullable": true
-                }
-              },
-              "required": [
-                "a",
-                "b"
-              ]
-            },
-            "height": {
-              "type": "object",
-              "properties": {
-                "measured": {
-                  "type": "boolean"
-                },
-                "reason": {
-                  "type": "string",
-                  "nullable": true
-                },
-                "datum": {
-                  "type": "string",
-                  "nullable": true
-                },
-                "worst": {
-                  "type": "number",
-                  "nullable": true,
-                  "description": "Largest height difference between the rails, mm."
-                },
-                "worstSigned": {
-                  "type": "number",
-                  "nullable": true,
-                  "description": "The same with its sign, mm."
-                },
-                "at": {
-                  "type": "number",
-                  "nullable": true,
-                  "description": "Where it was found along the rails, mm."
-                },
-                "differences": {
-                  "type": "array",
-                  "items": {
-                    "type": "number"
-                  },
-                  "nullable": true,
-                  "description": "Height difference at each compared position, mm."
-                },
-                "spacing": {
-                  "type": "number",
-                  "nullable": true,
-                  "description": "Distance between the rails, mm."
-                },
-                "kUmPerMm": {
-                  "type": "number",
-                  "nullable": true
-                },
-                "permissible": {
-                  "type": "number",
-                  "nullable": true,
-                  "description": "Permissible height difference (spacing × K), mm."
-                },
-                "targetText": {
-                  "type": "string",
-                  "nullable": true
-                },
-                "within": {
-                  "type": "boolean",
-                  "nullable": true
-                },
-                "unit": {
-                  "type": "string"
-                }
-              },
-              "required": [
-                "measured",
-                "reason",
-                "datum",
-                "worst",
-                "worstSigned",
-                "at",
-                "differences",
-                "spacing",
-                "kUmPerMm",
-                "permissible",
-                "targetText",
-                "within",
-                "unit"
-              ]
-            },
-            "warnings": {
-              "type": "array",
-              "items": {
-                "$ref": "#/components/schemas/ResultWarning"
-              }
-            },
-            "reason": {}
-          },
-          "required": [
-            "heightDifferenceWithin",
-            "datum",
-            "face",
-            "parallelism",
-            "meanOffset",
-            "positions",
-            "differences",
-            "parallelismWithin",
-            "status",
-            "railId",
-            "partnerRailId",
-            "targets",
-            "sweeps",
-            "height",
-            "warnings"
-          ]
-        },
-        {
-          "type": "object",
-          "properties": {
-            "heightDifferenceWithin": {
-              "type": "boolean",
-              "nullable": true
-            },
-            "reason": {
-              "type": "string"
-            },
-            "parallelism": {
-              "nullable": true
-            },
-            "parallelismWithin": {
-              "nullable": true
-            },
-            "status": {
-              "type": "string",
-              "enum": [
-                "within-target",
-                "outside-target"
-              ]
-            },
-            "railId": {
-              "type": "string"
-            },
-            "partnerRailId": {
-              "type": "string"
-            },
-            "targets": {
-              "type": "object",
-              "properties": {
-                "parallelism": {
-                  "type": "object",
-                  "properties": {
-                    "value": {
-                      "type": "number"
-                    },
-                    "unit": {
-                      "type": "string",
-                      "enum": [
-                        "mm",
-                        "um",
-                        "in",
-                        "thou",
-                        "mm/m",
-                        "%",
-                        "days",
-                        "um/mm"
-                      ]
-                    }
-                  },
-                  "required": [
-                    "value",
-                    "unit"
-                  ]
-                },
-                "heightDifference": {
-                  "type": "object",
-                  "properties": {
-                    "source": {
-                      "type": "string"
-                    },
-                    "value": {
-                      "type": "number"
-                    },
-                    "unit": {
-                      "type": "string",
-                      "enum": [
-                        "mm",
-                        "um",
-                        "in",
-                        "thou",
-                        "mm/m",
-                        "%",
-                        "days",
-                        "um/mm"
-                      ]
-                    }
-                  },
-                  "required": [
-                    "source",
-                    "value",
-                    "unit"
-                  ]
-                }
-              },
-              "required": [
-                "parallelism",
-                "heightDifference"
-              ]
-            },
-            "sweeps": {
-              "type": "object",
-              "properties": {
-                "a": {
-                  "type": "string",
-                  "nullable": true
-                },
-                "b": {
-                  "type": "string",
-                  "nullable": true
-                }
-              },
-              "required": [
-                "a",
-                "b"
-              ]
-            },
-            "height": {
-              "type": "object",
-              "properties": {
-                "measured": {
-                  "type": "boolean"
-                },
-                "reason": {
-                  "type": "string",
-                  "nullable": true
-                },
-                "datum": {
-                  "type": "string",
-                  "nullable": true
-                },
-                "worst": {
-                  "type": "number",
-                  "nullable": true,
-                  "description": "Largest height difference between the rails, mm."
-                },
-                "worstSigned": {
-                  "type": "number",
-                  "nullable": true,
-                  "description": "The same with its sign, mm."
-                },
-                "at": {
-                  "type": "number",
-                  "nullable": true,
-                  "description": "Where it was found along the rails, mm."
-                },
-                "differences": {
-                  "type": "array",
-                  "items": {
-                    "type": "number"
-                  },
-                  "nullable": true,
-                  "description": "Height difference at each compared position, mm."
-                },
-                "spacing": {
-                  "type": "number",
-                  "nullable": true,
-                  "description": "Distance between the rails, mm."
-                },
-                "kUmPerMm": {
-                  "type": "number",
-                  "nullable": true
-                },
-                "permissible": {
-                  "type": "number",
-                  "nullable": true,
-                  "description": "Permissible height difference (spacing × K), mm."
-                },
-                "targetText": {
-                  "type": "string",
-                  "nullable": true
-                },
-                "within": {
-                  "type": "boolean",
-                  "nullable": true
-                },
-                "unit": {
-                  "type": "string"
-                }
-              },
-              "required": [
-                "measured",
-                "reason",
-                "datum",
-                "worst",
-                "worstSigned",
-                "at",
-                "differences",
-                "spacing",
-                "kUmPerMm",
-                "permissible",
-                "targetText",
-                "within",
-                "unit"
-              ]
-            },
-            "warnings": {
-              "type": "array",
-              "items": {
-                "$ref": "#/components/schemas/ResultWarning"
-              }
-            }
-          },
-          "required": [
-            "heightDifferenceWithin",
-            "reason",
-            "parallelism",
-            "parallelismWithin",
-            "status",
-            "railId",
-            "partnerRailId",
-            "targets",
-            "sweeps",
-            "height",
-            "warnings"
-          ]
+          "$ref": "#/components/schemas/ParallelismByHeightOnly"
         }
       ]
     },
@@ -2461,2190 +1534,30 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
       ]
     },
     "FrameController.createDiagonalCheck": {
-      "oneOf": [
-        {
-          "type": "object",
-          "properties": {
-            "unreadable": {
-              "type": "string"
-            },
-            "resolution": {
-              "type": "number",
-              "nullable": true,
-              "description": "Smallest step of the tape or rule, in the record's `lengthUnit`."
-            },
-            "input": {
-              "type": "object",
-              "properties": {
-                "sideX": {
-                  "type": "number",
-                  "nullable": true,
-                  "description": "Side along X, in the record's `lengthUnit`."
-                },
-                "sideY": {
-                  "type": "number",
-                  "nullable": true,
-                  "description": "Side along Y, in the record's `lengthUnit`."
-                },
-                "diagonal1": {
-                  "type": "number",
-                  "nullable": true,
-                  "description": "Diagonal from the X0 Y0 corner, in the record's `lengthUnit`."
-                },
-                "diagonal2": {
-                  "type": "number",
-                  "nullable": true,
-                  "description": "The other diagonal, in the record's `lengthUnit`."
-                },
-                "gantrySpan": {
-                  "type": "number",
-                  "nullable": true,
-                  "description": "Distance between the gantry's two bearing rails, in the record's `lengthUnit`."
-                }
-              },
-              "required": [
-                "sideX",
-                "sideY",
-                "diagonal1",
-                "diagonal2",
-                "gantrySpan"
-              ]
-            },
-            "inputMm": {
-              "type": "object",
-              "properties": {
-                "sideX": {
-                  "type": "number",
-                  "nullable": true,
-                  "description": "Side along X, mm."
-                },
-                "sideY": {
-                  "type": "number",
-                  "nullable": true,
-                  "description": "Side along Y, mm."
-                },
-                "diagonal1": {
-                  "type": "number",
-                  "nullable": true,
-                  "description": "Diagonal from the X0 Y0 corner, mm."
-                },
-                "diagonal2": {
-                  "type": "number",
-                  "nullable": true,
-                  "description": "The other diagonal, mm."
-                },
-                "gantrySpan": {
-                  "type": "number",
-                  "nullable": true,
-                  "description": "Distance between the gantry's two bearing rails, mm."
-                }
-              },
-              "required": [
-                "sideX",
-                "sideY",
-                "diagonal1",
-                "diagonal2",
-                "gantrySpan"
-              ]
-            },
-            "result": {
-              "allOf": [
-                {
-                  "$ref": "#/components/schemas/DiagonalCheckResult"
-                }
-              ],
-              "nullable": true
-            },
-            "id": {
-              "type": "string"
-            },
-            "machineId": {
-              "type": "string"
-            },
-            "lengthUnit": {
-              "type": "string",
-              "enum": [
-                "mm",
-                "um",
-                "in",
-                "thou"
-              ],
-              "description": "Unit the record's lengths were entered in and are given back in."
-            },
-            "note": {
-              "type": "string"
-            },
-            "recordedBy": {
-              "type": "object",
-              "properties": {
-                "id": {
-                  "type": "string",
-                  "nullable": true
-                },
-                "name": {
-                  "type": "string"
-                }
-              },
-              "required": [
-                "id",
-                "name"
-              ]
-            },
-            "recordedAt": {
-              "type": "string"
-            },
-            "status": {
-              "type": "string",
-              "enum": [
-                "within-target",
-                "outside-target"
-              ]
-            },
-            "target": {
-              "$ref": "#/components/schemas/JudgedTarget"
-            },
-            "locked": {
-              "type": "boolean"
-            },
-            "warnings": {
-              "type": "array",
-              "items": {
-                "$ref": "#/components/schemas/ResultWarning"
-              },
-              "description": "What a person should know about the result (empty when none)."
-            }
-          },
-          "required": [
-            "unreadable",
-            "resolution",
-            "input",
-            "inputMm",
-            "result",
-            "id",
-            "machineId",
-            "lengthUnit",
-            "note",
-            "recordedBy",
-            "recordedAt",
-            "status",
-            "target",
-            "locked",
-            "warnings"
-          ]
-        },
-        {
-          "type": "object",
-          "properties": {
-            "unreadable": {},
-            "resolution": {
-              "type": "number",
-              "nullable": true,
-              "description": "Smallest step of the tape or rule, in the record's `lengthUnit`."
-            },
-            "input": {
-              "type": "object",
-              "properties": {
-                "sideX": {
-                  "type": "number",
-                  "nullable": true,
-                  "description": "Side along X, in the record's `lengthUnit`."
-                },
-                "sideY": {
-                  "type": "number",
-                  "nullable": true,
-                  "description": "Side along Y, in the record's `lengthUnit`."
-                },
-                "diagonal1": {
-                  "type": "number",
-                  "nullable": true,
-                  "description": "Diagonal from the X0 Y0 corner, in the record's `lengthUnit`."
-                },
-                "diagonal2": {
-                  "type": "number",
-                  "nullable": true,
-                  "description": "The other diagonal, in the record's `lengthUnit`."
-                },
-                "gantrySpan": {
-                  "type": "number",
-                  "nullable": true,
-                  "description": "Distance between the gantry's two bearing rails, in the record's `lengthUnit`."
-                }
-              },
-              "required": [
-                "sideX",
-                "sideY",
-                "diagonal1",
-                "diagonal2",
-                "gantrySpan"
-              ]
-            },
-            "inputMm": {
-              "type": "object",
-              "properties": {
-                "sideX": {
-                  "type": "number",
-                  "nullable": true,
-                  "description": "Side along X, mm."
-                },
-                "sideY": {
-                  "type": "number",
-                  "nullable": true,
-                  "description": "Side along Y, mm."
-                },
-                "diagonal1": {
-                  "type": "number",
-                  "nullable": true,
-                  "description": "Diagonal from the X0 Y0 corner, mm."
-                },
-                "diagonal2": {
-                  "type": "number",
-                  "nullable": true,
-                  "description": "The other diagonal, mm."
-                },
-                "gantrySpan": {
-                  "type": "number",
-                  "nullable": true,
-                  "description": "Distance between the gantry's two bearing rails, mm."
-                }
-              },
-              "required": [
-                "sideX",
-                "sideY",
-                "diagonal1",
-                "diagonal2",
-                "gantrySpan"
-              ]
-            },
-            "result": {
-              "allOf": [
-                {
-                  "$ref": "#/components/schemas/DiagonalCheckResult"
-                }
-              ],
-              "nullable": true
-            },
-            "id": {
-              "type": "string"
-            },
-            "machineId": {
-              "type": "string"
-            },
-            "lengthUnit": {
-              "type": "string",
-              "enum": [
-                "mm",
-                "um",
-                "in",
-                "thou"
-              ],
-              "description": "Unit the record's lengths were entered in and are given back in."
-            },
-            "note": {
-              "type": "string"
-            },
-            "recordedBy": {
-              "type": "object",
-              "properties": {
-                "id": {
-                  "type": "string",
-                  "nullable": true
-                },
-                "name": {
-                  "type": "string"
-                }
-              },
-              "required": [
-                "id",
-                "name"
-              ]
-            },
-            "recordedAt": {
-              "type": "string"
-            },
-            "status": {
-              "type": "string",
-              "enum": [
-                "within-target",
-                "outside-target"
-              ]
-            },
-            "target": {
-              "$ref": "#/components/schemas/JudgedTarget"
-            },
-            "locked": {
-              "type": "boolean"
-            },
-            "warnings": {
-              "type": "array",
-              "items": {
-                "$ref": "#/components/schemas/ResultWarning"
-              },
-              "description": "What a person should know about the result (empty when none)."
-            }
-          },
-          "required": [
-            "resolution",
-            "input",
-            "inputMm",
-            "result",
-            "id",
-            "machineId",
-            "lengthUnit",
-            "note",
-            "recordedBy",
-            "recordedAt",
-            "status",
-            "target",
-            "locked",
-            "warnings"
-          ]
-        }
-      ]
+      "$ref": "#/components/schemas/DiagonalCheckResponse"
     },
     "FrameController.listDiagonalChecks": {
       "type": "array",
       "items": {
-        "oneOf": [
-          {
-            "type": "object",
-            "properties": {
-              "unreadable": {
-                "type": "string"
-              },
-              "resolution": {
-                "type": "number",
-                "nullable": true,
-                "description": "Smallest step of the tape or rule, in the record's `lengthUnit`."
-              },
-              "input": {
-                "type": "object",
-                "properties": {
-                  "sideX": {
-                    "type": "number",
-                    "nullable": true,
-                    "description": "Side along X, in the record's `lengthUnit`."
-                  },
-                  "sideY": {
-                    "type": "number",
-                    "nullable": true,
-                    "description": "Side along Y, in the record's `lengthUnit`."
-                  },
-                  "diagonal1": {
-                    "type": "number",
-                    "nullable": true,
-                    "description": "Diagonal from the X0 Y0 corner, in the record's `lengthUnit`."
-                  },
-                  "diagonal2": {
-                    "type": "number",
-                    "nullable": true,
-                    "description": "The other diagonal, in the record's `lengthUnit`."
-                  },
-                  "gantrySpan": {
-                    "type": "number",
-                    "nullable": true,
-                    "description": "Distance between the gantry's two bearing rails, in the record's `lengthUnit`."
-                  }
-                },
-                "required": [
-                  "sideX",
-                  "sideY",
-                  "diagonal1",
-                  "diagonal2",
-                  "gantrySpan"
-                ]
-              },
-              "inputMm": {
-                "type": "object",
-                "properties": {
-                  "sideX": {
-                    "type": "number",
-                    "nullable": true,
-                    "description": "Side along X, mm."
-                  },
-                  "sideY": {
-                    "type": "number",
-                    "nullable": true,
-                    "description": "Side along Y, mm."
-                  },
-                  "diagonal1": {
-                    "type": "number",
-                    "nullable": true,
-                    "description": "Diagonal from the X0 Y0 corner, mm."
-                  },
-                  "diagonal2": {
-                    "type": "number",
-                    "nullable": true,
-                    "description": "The other diagonal, mm."
-                  },
-                  "gantrySpan": {
-                    "type": "number",
-                    "nullable": true,
-                    "description": "Distance between the gantry's two bearing rails, mm."
-                  }
-                },
-                "required": [
-                  "sideX",
-                  "sideY",
-                  "diagonal1",
-                  "diagonal2",
-                  "gantrySpan"
-                ]
-              },
-              "result": {
-                "allOf": [
-                  {
-                    "$ref": "#/components/schemas/DiagonalCheckResult"
-                  }
-                ],
-                "nullable": true
-              },
-              "id": {
-                "type": "string"
-              },
-              "machineId": {
-                "type": "string"
-              },
-              "lengthUnit": {
-                "type": "string",
-                "enum": [
-                  "mm",
-                  "um",
-                  "in",
-                  "thou"
-                ],
-                "description": "Unit the record's lengths were entered in and are given back in."
-              },
-              "note": {
-                "type": "string"
-              },
-              "recordedBy": {
-                "type": "object",
-                "properties": {
-                  "id": {
-                    "type": "string",
-                    "nullable": true
-                  },
-                  "name": {
-                    "type": "string"
-                  }
-                },
-                "required": [
-                  "id",
-                  "name"
-                ]
-              },
-              "recordedAt": {
-                "type": "string"
-              },
-              "status": {
-                "type": "string",
-                "enum": [
-                  "within-target",
-                  "outside-target"
-                ]
-              },
-              "target": {
-                "$ref": "#/components/schemas/JudgedTarget"
-              },
-              "locked": {
-                "type": "boolean"
-              },
-              "warnings": {
-                "type": "array",
-                "items": {
-                  "$ref": "#/components/schemas/ResultWarning"
-                },
-                "description": "What a person should know about the result (empty when none)."
-              }
-            },
-            "required": [
-              "unreadable",
-              "resolution",
-              "input",
-              "inputMm",
-              "result",
-              "id",
-              "machineId",
-              "lengthUnit",
-              "note",
-              "recordedBy",
-              "recordedAt",
-              "status",
-              "target",
-              "locked",
-              "warnings"
-            ]
-          },
-          {
-            "type": "object",
-            "properties": {
-              "unreadable": {},
-              "resolution": {
-                "type": "number",
-                "nullable": true,
-                "description": "Smallest step of the tape or rule, in the record's `lengthUnit`."
-              },
-              "input": {
-                "type": "object",
-                "properties": {
-                  "sideX": {
-                    "type": "number",
-                    "nullable": true,
-                    "description": "Side along X, in the record's `lengthUnit`."
-                  },
-                  "sideY": {
-                    "type": "number",
-                    "nullable": true,
-                    "description": "Side along Y, in the record's `lengthUnit`."
-                  },
-                  "diagonal1": {
-                    "type": "number",
-                    "nullable": true,
-                    "description": "Diagonal from the X0 Y0 corner, in the record's `lengthUnit`."
-                  },
-                  "diagonal2": {
-                    "type": "number",
-                    "nullable": true,
-                    "description": "The other diagonal, in the record's `lengthUnit`."
-                  },
-                  "gantrySpan": {
-                    "type": "number",
-                    "nullable": true,
-                    "description": "Distance between the gantry's two bearing rails, in the record's `lengthUnit`."
-                  }
-                },
-                "required": [
-                  "sideX",
-                  "sideY",
-                  "diagonal1",
-                  "diagonal2",
-                  "gantrySpan"
-                ]
-              },
-              "inputMm": {
-                "type": "object",
-                "properties": {
-                  "sideX": {
-                    "type": "number",
-                    "nullable": true,
-                    "description": "Side along X, mm."
-                  },
-                  "sideY": {
-                    "type": "number",
-                    "nullable": true,
-                    "description": "Side along Y, mm."
-                  },
-                  "diagonal1": {
-                    "type": "number",
-                    "nullable": true,
-                    "description": "Diagonal from the X0 Y0 corner, mm."
-                  },
-                  "diagonal2": {
-                    "type": "number",
-                    "nullable": true,
-                    "description": "The other diagonal, mm."
-                  },
-                  "gantrySpan": {
-                    "type": "number",
-                    "nullable": true,
-                    "description": "Distance between the gantry's two bearing rails, mm."
-                  }
-                },
-                "required": [
-                  "sideX",
-                  "sideY",
-                  "diagonal1",
-                  "diagonal2",
-                  "gantrySpan"
-                ]
-              },
-              "result": {
-                "allOf": [
-                  {
-                    "$ref": "#/components/schemas/DiagonalCheckResult"
-                  }
-                ],
-                "nullable": true
-              },
-              "id": {
-                "type": "string"
-              },
-              "machineId": {
-                "type": "string"
-              },
-              "lengthUnit": {
-                "type": "string",
-                "enum": [
-                  "mm",
-                  "um",
-                  "in",
-                  "thou"
-                ],
-                "description": "Unit the record's lengths were entered in and are given back in."
-              },
-              "note": {
-                "type": "string"
-              },
-              "recordedBy": {
-                "type": "object",
-                "properties": {
-                  "id": {
-                    "type": "string",
-                    "nullable": true
-                  },
-                  "name": {
-                    "type": "string"
-                  }
-                },
-                "required": [
-                  "id",
-                  "name"
-                ]
-              },
-              "recordedAt": {
-                "type": "string"
-              },
-              "status": {
-                "type": "string",
-                "enum": [
-                  "within-target",
-                  "outside-target"
-                ]
-              },
-              "target": {
-                "$ref": "#/components/schemas/JudgedTarget"
-              },
-              "locked": {
-                "type": "boolean"
-              },
-              "warnings": {
-                "type": "array",
-                "items": {
-                  "$ref": "#/components/schemas/ResultWarning"
-                },
-                "description": "What a person should know about the result (empty when none)."
-              }
-            },
-            "required": [
-              "resolution",
-              "input",
-              "inputMm",
-              "result",
-              "id",
-              "machineId",
-              "lengthUnit",
-              "note",
-              "recordedBy",
-              "recordedAt",
-              "status",
-              "target",
-              "locked",
-              "warnings"
-            ]
-          }
-        ]
+        "$ref": "#/components/schemas/DiagonalCheckResponse"
       }
     },
     "FrameController.createBedGrid": {
-      "oneOf": [
-        {
-          "type": "object",
-          "properties": {
-            "unreadable": {
-              "type": "string"
-            },
-            "readingUnit": {
-              "type": "string",
-              "enum": [
-                "mm",
-                "um",
-                "in",
-                "thou"
-              ],
-              "description": "Unit the heights (and the gauge's resolution) were read in and are given back in."
-            },
-            "resolution": {
-              "type": "number",
-              "nullable": true,
-              "description": "Smallest step of the height gauge, in the record's `readingUnit`."
-            },
-            "rows": {
-              "type": "number",
-              "nullable": true,
-              "description": "Count of rows of the grid (along Y)."
-            },
-            "columns": {
-              "type": "number",
-              "nullable": true,
-              "description": "Count of columns of the grid (along X)."
-            },
-            "points": {
-              "type": "array",
-              "items": {
-                "type": "object",
-                "properties": {
-                  "x": {
-                    "type": "number",
-                    "nullable": true,
-                    "description": "Position along X, in the record's `lengthUnit`."
-                  },
-                  "y": {
-                    "type": "number",
-                    "nullable": true,
-                    "description": "Position along Y, in the record's `lengthUnit`."
-                  },
-                  "z": {
-                    "type": "number",
-                    "nullable": true,
-                    "description": "Height read, in the record's `readingUnit`."
-                  }
-                },
-                "required": [
-                  "x",
-                  "y",
-                  "z"
-                ]
-              }
-            },
-            "result": {
-              "allOf": [
-                {
-                  "$ref": "#/components/schemas/BedGridResult"
-                }
-              ],
-              "nullable": true
-            },
-            "id": {
-              "type": "string"
-            },
-            "machineId": {
-              "type": "string"
-            },
-            "lengthUnit": {
-              "type": "string",
-              "enum": [
-                "mm",
-                "um",
-                "in",
-                "thou"
-              ],
-              "description": "Unit the record's lengths were entered in and are given back in."
-            },
-            "note": {
-              "type": "string"
-            },
-            "recordedBy": {
-              "type": "object",
-              "properties": {
-                "id": {
-                  "type": "string",
-                  "nullable": true
-                },
-                "name": {
-                  "type": "string"
-                }
-              },
-              "required": [
-                "id",
-                "name"
-              ]
-            },
-            "recordedAt": {
-              "type": "string"
-            },
-            "status": {
-              "type": "string",
-              "enum": [
-                "within-target",
-                "outside-target"
-              ]
-            },
-            "target": {
-              "$ref": "#/components/schemas/JudgedTarget"
-            },
-            "locked": {
-              "type": "boolean"
-            },
-            "warnings": {
-              "type": "array",
-              "items": {
-                "$ref": "#/components/schemas/ResultWarning"
-              },
-              "description": "What a person should know about the result (empty when none)."
-            }
-          },
-          "required": [
-            "unreadable",
-            "readingUnit",
-            "resolution",
-            "rows",
-            "columns",
-            "points",
-            "result",
-            "id",
-            "machineId",
-            "lengthUnit",
-            "note",
-            "recordedBy",
-            "recordedAt",
-            "status",
-            "target",
-            "locked",
-            "warnings"
-          ]
-        },
-        {
-          "type": "object",
-          "properties": {
-            "unreadable": {},
-            "readingUnit": {
-              "type": "string",
-              "enum": [
-                "mm",
-                "um",
-                "in",
-                "thou"
-              ],
-              "description": "Unit the heights (and the gauge's resolution) were read in and are given back in."
-            },
-            "resolution": {
-              "type": "number",
-              "nullable": true,
-              "description": "Smallest step of the height gauge, in the record's `readingUnit`."
-            },
-            "rows": {
-              "type": "number",
-              "nullable": true,
-              "description": "Count of rows of the grid (along Y)."
-            },
-            "columns": {
-              "type": "number",
-              "nullable": true,
-              "description": "Count of columns of the grid (along X)."
-            },
-            "points": {
-              "type": "array",
-              "items": {
-                "type": "object",
-                "properties": {
-                  "x": {
-                    "type": "number",
-                    "nullable": true,
-                    "description": "Position along X, in the record's `lengthUnit`."
-                  },
-                  "y": {
-                    "type": "number",
-                    "nullable": true,
-                    "description": "Position along Y, in the record's `lengthUnit`."
-                  },
-                  "z": {
-                    "type": "number",
-                    "nullable": true,
-                    "description": "Height read, in the record's `readingUnit`."
-                  }
-                },
-                "required": [
-                  "x",
-                  "y",
-                  "z"
-                ]
-              }
-            },
-            "result": {
-              "allOf": [
-                {
-                  "$ref": "#/components/schemas/BedGridResult"
-                }
-              ],
-              "nullable": true
-            },
-            "id": {
-              "type": "string"
-            },
-            "machineId": {
-              "type": "string"
-            },
-            "lengthUnit": {
-              "type": "string",
-              "enum": [
-                "mm",
-                "um",
-                "in",
-                "thou"
-              ],
-              "description": "Unit the record's lengths were entered in and are given back in."
-            },
-            "note": {
-              "type": "string"
-            },
-            "recordedBy": {
-              "type": "object",
-              "properties": {
-                "id": {
-                  "type": "string",
-                  "nullable": true
-                },
-                "name": {
-                  "type": "string"
-                }
-              },
-              "required": [
-                "id",
-                "name"
-              ]
-            },
-            "recordedAt": {
-              "type": "string"
-            },
-            "status": {
-              "type": "string",
-              "enum": [
-                "within-target",
-                "outside-target"
-              ]
-            },
-            "target": {
-              "$ref": "#/components/schemas/JudgedTarget"
-            },
-            "locked": {
-              "type": "boolean"
-            },
-            "warnings": {
-              "type": "array",
-              "items": {
-                "$ref": "#/components/schemas/ResultWarning"
-              },
-              "description": "What a person should know about the result (empty when none)."
-            }
-          },
-          "required": [
-            "readingUnit",
-            "resolution",
-            "rows",
-            "columns",
-            "points",
-            "result",
-            "id",
-            "machineId",
-            "lengthUnit",
-            "note",
-            "recordedBy",
-            "recordedAt",
-            "status",
-            "target",
-            "locked",
-            "warnings"
-          ]
-        }
-      ]
+      "$ref": "#/components/schemas/BedGridResponse"
     },
     "FrameController.listBedGrids": {
       "type": "array",
       "items": {
-        "oneOf": [
-          {
-            "type": "object",
-            "properties": {
-              "unreadable": {
-                "type": "string"
-              },
-              "readingUnit": {
-                "type": "string",
-                "enum": [
-                  "mm",
-                  "um",
-                  "in",
-                  "thou"
-                ],
-                "description": "Unit the heights (and the gauge's resolution) were read in and are given back in."
-              },
-              "resolution": {
-                "type": "number",
-                "nullable": true,
-                "description": "Smallest step of the height gauge, in the record's `readingUnit`."
-              },
-              "rows": {
-                "type": "number",
-                "nullable": true,
-                "description": "Count of rows of the grid (along Y)."
-              },
-              "columns": {
-                "type": "number",
-                "nullable": true,
-                "description": "Count of columns of the grid (along X)."
-              },
-              "points": {
-                "type": "array",
-                "items": {
-                  "type": "object",
-                  "properties": {
-                    "x": {
-                      "type": "number",
-                      "nullable": true,
-                      "description": "Position along X, in the record's `lengthUnit`."
-                    },
-                    "y": {
-                      "type": "number",
-                      "nullable": true,
-                      "description": "Position along Y, in the record's `lengthUnit`."
-                    },
-                    "z": {
-                      "type": "number",
-                      "nullable": true,
-                      "description": "Height read, in the record's `readingUnit`."
-                    }
-                  },
-                  "required": [
-                    "x",
-                    "y",
-                    "z"
-                  ]
-                }
-              },
-              "result": {
-                "allOf": [
-                  {
-                    "$ref": "#/components/schemas/BedGridResult"
-                  }
-                ],
-                "nullable": true
-              },
-              "id": {
-                "type": "string"
-              },
-              "machineId": {
-                "type": "string"
-              },
-              "lengthUnit": {
-                "type": "string",
-                "enum": [
-                  "mm",
-                  "um",
-                  "in",
-                  "thou"
-                ],
-                "description": "Unit the record's lengths were entered in and are given back in."
-              },
-              "note": {
-                "type": "string"
-              },
-              "recordedBy": {
-                "type": "object",
-                "properties": {
-                  "id": {
-                    "type": "string",
-                    "nullable": true
-                  },
-                  "name": {
-                    "type": "string"
-                  }
-                },
-                "required": [
-                  "id",
-                  "name"
-                ]
-              },
-              "recordedAt": {
-                "type": "string"
-              },
-              "status": {
-                "type": "string",
-                "enum": [
-                  "within-target",
-                  "outside-target"
-                ]
-              },
-              "target": {
-                "$ref": "#/components/schemas/JudgedTarget"
-              },
-              "locked": {
-                "type": "boolean"
-              },
-              "warnings": {
-                "type": "array",
-                "items": {
-                  "$ref": "#/components/schemas/ResultWarning"
-                },
-                "description": "What a person should know about the result (empty when none)."
-              }
-            },
-            "required": [
-              "unreadable",
-              "readingUnit",
-              "resolution",
-              "rows",
-              "columns",
-              "points",
-              "result",
-              "id",
-              "machineId",
-              "lengthUnit",
-              "note",
-              "recordedBy",
-              "recordedAt",
-              "status",
-              "target",
-              "locked",
-              "warnings"
-            ]
-          },
-          {
-            "type": "object",
-            "properties": {
-              "unreadable": {},
-              "readingUnit": {
-                "type": "string",
-                "enum": [
-                  "mm",
-                  "um",
-                  "in",
-                  "thou"
-                ],
-                "description": "Unit the heights (and the gauge's resolution) were read in and are given back in."
-              },
-              "resolution": {
-                "type": "number",
-                "nullable": true,
-                "description": "Smallest step of the height gauge, in the record's `readingUnit`."
-              },
-              "rows": {
-                "type": "number",
-                "nullable": true,
-                "description": "Count of rows of the grid (along Y)."
-              },
-              "columns": {
-                "type": "number",
-                "nullable": true,
-                "description": "Count of columns of the grid (along X)."
-              },
-              "points": {
-                "type": "array",
-                "items": {
-                  "type": "object",
-                  "properties": {
-                    "x": {
-                      "type": "number",
-                      "nullable": true,
-                      "description": "Position along X, in the record's `lengthUnit`."
-                    },
-                    "y": {
-                      "type": "number",
-                      "nullable": true,
-                      "description": "Position along Y, in the record's `lengthUnit`."
-                    },
-                    "z": {
-                      "type": "number",
-                      "nullable": true,
-                      "description": "Height read, in the record's `readingUnit`."
-                    }
-                  },
-                  "required": [
-                    "x",
-                    "y",
-                    "z"
-                  ]
-                }
-              },
-              "result": {
-                "allOf": [
-                  {
-                    "$ref": "#/components/schemas/BedGridResult"
-                  }
-                ],
-                "nullable": true
-              },
-              "id": {
-                "type": "string"
-              },
-              "machineId": {
-                "type": "string"
-              },
-              "lengthUnit": {
-                "type": "string",
-                "enum": [
-                  "mm",
-                  "um",
-                  "in",
-                  "thou"
-                ],
-                "description": "Unit the record's lengths were entered in and are given back in."
-              },
-              "note": {
-                "type": "string"
-              },
-              "recordedBy": {
-                "type": "object",
-                "properties": {
-                  "id": {
-                    "type": "string",
-                    "nullable": true
-                  },
-                  "name": {
-                    "type": "string"
-                  }
-                },
-                "required": [
-                  "id",
-                  "name"
-                ]
-              },
-              "recordedAt": {
-                "type": "string"
-              },
-              "status": {
-                "type": "string",
-                "enum": [
-                  "within-target",
-                  "outside-target"
-                ]
-              },
-              "target": {
-                "$ref": "#/components/schemas/JudgedTarget"
-              },
-              "locked": {
-                "type": "boolean"
-              },
-              "warnings": {
-                "type": "array",
-                "items": {
-                  "$ref": "#/components/schemas/ResultWarning"
-                },
-                "description": "What a person should know about the result (empty when none)."
-              }
-            },
-            "required": [
-              "readingUnit",
-              "resolution",
-              "rows",
-              "columns",
-              "points",
-              "result",
-              "id",
-              "machineId",
-              "lengthUnit",
-              "note",
-              "recordedBy",
-              "recordedAt",
-              "status",
-              "target",
-              "locked",
-              "warnings"
-            ]
-          }
-        ]
+        "$ref": "#/components/schemas/BedGridResponse"
       }
     },
     "FrameController.createTestCut": {
-      "oneOf": [
-        {
-          "type": "object",
-          "properties": {
-            "unreadable": {
-              "type": "string"
-            },
-            "targets": {
-              "type": "object",
-              "properties": {
-                "part": {
-                  "$ref": "#/components/schemas/JudgedTarget"
-                },
-                "squareness": {
-                  "$ref": "#/components/schemas/JudgedTarget"
-                }
-              },
-              "required": [
-                "part",
-                "squareness"
-              ]
-            },
-            "plateThickness": {
-              "type": "number",
-              "nullable": true,
-              "description": "Thickness of the plate cut, in the record's `lengthUnit`."
-            },
-            "plateThicknessMm": {
-              "type": "number",
-              "nullable": true
-            },
-            "resolution": {
-              "type": "number",
-              "nullable": true,
-              "description": "Smallest step of the caliper or rule the sizes were read with, in the record's `lengthUnit`."
-            },
-            "nominal": {
-              "type": "object",
-              "properties": {
-                "x": {
-                  "type": "number",
-                  "nullable": true,
-                  "description": "Commanded size of the square along X, in the record's `lengthUnit`."
-                },
-                "y": {
-                  "type": "number",
-                  "nullable": true,
-                  "description": "Commanded size of the square along Y, in the record's `lengthUnit`."
-                },
-                "circle": {
-                  "type": "number",
-                  "nullable": true,
-                  "description": "Commanded diameter of the circle, in the record's `lengthUnit`."
-                }
-              },
-              "required": [
-                "x",
-                "y",
-                "circle"
-              ]
-            },
-            "measured": {
-              "type": "object",
-              "properties": {
-                "x": {
-                  "type": "number",
-                  "nullable": true,
-                  "description": "Measured size of the square along X, in the record's `lengthUnit`."
-                },
-                "y": {
-                  "type": "number",
-                  "nullable": true,
-                  "description": "Measured size of the square along Y, in the record's `lengthUnit`."
-                },
-                "diagonal1": {
-                  "type": "number",
-                  "nullable": true,
-                  "description": "Measured diagonal from the X0 Y0 corner, in the record's `lengthUnit`."
-                },
-                "diagonal2": {
-                  "type": "number",
-                  "nullable": true,
-                  "description": "Measured other diagonal, in the record's `lengthUnit`."
-                },
-                "circleX": {
-                  "type": "number",
-                  "nullable": true,
-                  "description": "Measured diameter of the circle along X, in the record's `lengthUnit`."
-                },
-                "circleY": {
-                  "type": "number",
-                  "nullable": true,
-                  "description": "Measured diameter of the circle along Y, in the record's `lengthUnit`."
-                },
-                "kerf": {
-                  "type": "number",
-                  "nullable": true,
-                  "description": "Width of cut the controller did not compensate for, in the record's `lengthUnit`."
-                }
-              },
-              "required": [
-                "x",
-                "y",
-                "diagonal1",
-                "diagonal2",
-                "circleX",
-                "circleY",
-                "kerf"
-              ]
-            },
-            "circleKind": {
-              "type": "string",
-              "enum": [
-                "hole",
-                "disc"
-              ],
-              "nullable": true
-            },
-            "stepsPerMm": {
-              "type": "object",
-              "properties": {
-                "x": {
-                  "type": "number",
-                  "nullable": true,
-                  "description": "Steps per mm of axis X when the cut was made (null when not given)."
-                },
-                "y": {
-                  "type": "number",
-                  "nullable": true,
-                  "description": "Steps per mm of axis Y when the cut was made (null when not given)."
-                }
-              },
-              "required": [
-                "x",
-                "y"
-              ],
-              "nullable": true
-            },
-            "result": {
-              "allOf": [
-                {
-                  "$ref": "#/components/schemas/TestCutResult"
-                }
-              ],
-              "nullable": true
-            },
-            "id": {
-              "type": "string"
-            },
-            "machineId": {
-              "type": "string"
-            },
-            "lengthUnit": {
-              "type": "string",
-              "enum": [
-                "mm",
-                "um",
-                "in",
-                "thou"
-              ],
-              "description": "Unit the record's lengths were entered in and are given back in."
-            },
-            "note": {
-              "type": "string"
-            },
-            "recordedBy": {
-              "type": "object",
-              "properties": {
-                "id": {
-                  "type": "string",
-                  "nullable": true
-                },
-                "name": {
-                  "type": "string"
-                }
-              },
-              "required": [
-                "id",
-                "name"
-              ]
-            },
-            "recordedAt": {
-              "type": "string"
-            },
-            "status": {
-              "type": "string",
-              "enum": [
-                "within-target",
-                "outside-target"
-              ]
-            },
-            "target": {
-              "$ref": "#/components/schemas/JudgedTarget"
-            },
-            "locked": {
-              "type": "boolean"
-            },
-            "warnings": {
-              "type": "array",
-              "items": {
-                "$ref": "#/components/schemas/ResultWarning"
-              },
-              "description": "What a person should know about the result (empty when none)."
-            }
-          },
-          "required": [
-            "unreadable",
-            "targets",
-            "plateThickness",
-            "plateThicknessMm",
-            "resolution",
-            "nominal",
-            "measured",
-            "circleKind",
-            "stepsPerMm",
-            "result",
-            "id",
-            "machineId",
-            "lengthUnit",
-            "note",
-            "recordedBy",
-            "recordedAt",
-            "status",
-            "target",
-            "locked",
-            "warnings"
-          ]
-        },
-        {
-          "type": "object",
-          "properties": {
-            "unreadable": {},
-            "targets": {
-              "type": "object",
-              "properties": {
-                "part": {
-                  "$ref": "#/components/schemas/JudgedTarget"
-                },
-                "squareness": {
-                  "$ref": "#/components/schemas/JudgedTarget"
-                }
-              },
-              "required": [
-                "part",
-                "squareness"
-              ]
-            },
-            "plateThickness": {
-              "type": "number",
-              "nullable": true,
-              "description": "Thickness of the plate cut, in the record's `lengthUnit`."
-            },
-            "plateThicknessMm": {
-              "type": "number",
-              "nullable": true
-            },
-            "resolution": {
-              "type": "number",
-              "nullable": true,
-              "description": "Smallest step of the caliper or rule the sizes were read with, in the record's `lengthUnit`."
-            },
-            "nominal": {
-              "type": "object",
-              "properties": {
-                "x": {
-                  "type": "number",
-                  "nullable": true,
-                  "description": "Commanded size of the square along X, in the record's `lengthUnit`."
-                },
-                "y": {
-                  "type": "number",
-                  "nullable": true,
-                  "description": "Commanded size of the square along Y, in the record's `lengthUnit`."
-                },
-                "circle": {
-                  "type": "number",
-                  "nullable": true,
-                  "description": "Commanded diameter of the circle, in the record's `lengthUnit`."
-                }
-              },
-              "required": [
-                "x",
-                "y",
-                "circle"
-              ]
-            },
-            "measured": {
-              "type": "object",
-              "properties": {
-                "x": {
-                  "type": "number",
-                  "nullable": true,
-                  "description": "Measured size of the square along X, in the record's `lengthUnit`."
-                },
-                "y": {
-                  "type": "number",
-                  "nullable": true,
-                  "description": "Measured size of the square along Y, in the record's `lengthUnit`."
-                },
-                "diagonal1": {
-                  "type": "number",
-                  "nullable": true,
-                  "description": "Measured diagonal from the X0 Y0 corner, in the record's `lengthUnit`."
-                },
-                "diagonal2": {
-                  "type": "number",
-                  "nullable": true,
-                  "description": "Measured other diagonal, in the record's `lengthUnit`."
-                },
-                "circleX": {
-                  "type": "number",
-                  "nullable": true,
-                  "description": "Measured diameter of the circle along X, in the record's `lengthUnit`."
-                },
-                "circleY": {
-                  "type": "number",
-                  "nullable": true,
-                  "description": "Measured diameter of the circle along Y, in the record's `lengthUnit`."
-                },
-                "kerf": {
-                  "type": "number",
-                  "nullable": true,
-                  "description": "Width of cut the controller did not compensate for, in the record's `lengthUnit`."
-                }
-              },
-              "required": [
-                "x",
-                "y",
-                "diagonal1",
-                "diagonal2",
-                "circleX",
-                "circleY",
-                "kerf"
-              ]
-            },
-            "circleKind": {
-              "type": "string",
-              "enum": [
-                "hole",
-                "disc"
-              ],
-              "nullable": true
-            },
-            "stepsPerMm": {
-              "type": "object",
-              "properties": {
-                "x": {
-                  "type": "number",
-                  "nullable": true,
-                  "description": "Steps per mm of axis X when the cut was made (null when not given)."
-                },
-                "y": {
-                  "type": "number",
-                  "nullable": true,
-                  "description": "Steps per mm of axis Y when the cut was made (null when not given)."
-                }
-              },
-              "required": [
-                "x",
-                "y"
-              ],
-              "nullable": true
-            },
-            "result": {
-              "allOf": [
-                {
-                  "$ref": "#/components/schemas/TestCutResult"
-                }
-              ],
-              "nullable": true
-            },
-            "id": {
-              "type": "string"
-            },
-            "machineId": {
-              "type": "string"
-            },
-            "lengthUnit": {
-              "type": "string",
-              "enum": [
-                "mm",
-                "um",
-                "in",
-                "thou"
-              ],
-              "description": "Unit the record's lengths were entered in and are given back in."
-            },
-            "note": {
-              "type": "string"
-            },
-            "recordedBy": {
-              "type": "object",
-              "properties": {
-                "id": {
-                  "type": "string",
-                  "nullable": true
-                },
-                "name": {
-                  "type": "string"
-                }
-              },
-              "required": [
-                "id",
-                "name"
-              ]
-            },
-            "recordedAt": {
-              "type": "string"
-            },
-            "status": {
-              "type": "string",
-              "enum": [
-                "within-target",
-                "outside-target"
-              ]
-            },
-            "target": {
-              "$ref": "#/components/schemas/JudgedTarget"
-            },
-            "locked": {
-              "type": "boolean"
-            },
-            "warnings": {
-              "type": "array",
-              "items": {
-                "$ref": "#/components/schemas/ResultWarning"
-              },
-              "description": "What a person should know about the result (empty when none)."
-            }
-          },
-          "required": [
-            "targets",
-            "plateThickness",
-            "plateThicknessMm",
-            "resolution",
-            "nominal",
-            "measured",
-            "circleKind",
-            "stepsPerMm",
-            "result",
-            "id",
-            "machineId",
-            "lengthUnit",
-            "note",
-            "recordedBy",
-            "recordedAt",
-            "status",
-            "target",
-            "locked",
-            "warnings"
-          ]
-        }
-      ]
+      "$ref": "#/components/schemas/TestCutResponse"
     },
     "FrameController.listTestCuts": {
       "type": "array",
       "items": {
-        "oneOf": [
-          {
-            "type": "object",
-            "properties": {
-              "unreadable": {
-                "type": "string"
-              },
-              "targets": {
-                "type": "object",
-                "properties": {
-                  "part": {
-                    "$ref": "#/components/schemas/JudgedTarget"
-                  },
-                  "squareness": {
-                    "$ref": "#/components/schemas/JudgedTarget"
-                  }
-                },
-                "required": [
-                  "part",
-                  "squareness"
-                ]
-              },
-              "plateThickness": {
-                "type": "number",
-                "nullable": true,
-                "description": "Thickness of the plate cut, in the record's `lengthUnit`."
-              },
-              "plateThicknessMm": {
-                "type": "number",
-                "nullable": true
-              },
-              "resolution": {
-                "type": "number",
-                "nullable": true,
-                "description": "Smallest step of the caliper or rule the sizes were read with, in the record's `lengthUnit`."
-              },
-              "nominal": {
-                "type": "object",
-                "properties": {
-                  "x": {
-                    "type": "number",
-                    "nullable": true,
-                    "description": "Commanded size of the square along X, in the record's `lengthUnit`."
-                  },
-                  "y": {
-                    "type": "number",
-                    "nullable": true,
-                    "description": "Commanded size of the square along Y, in the record's `lengthUnit`."
-                  },
-                  "circle": {
-                    "type": "number",
-                    "nullable": true,
-                    "description": "Commanded diameter of the circle, in the record's `lengthUnit`."
-                  }
-                },
-                "required": [
-                  "x",
-                  "y",
-                  "circle"
-                ]
-              },
-              "measured": {
-                "type": "object",
-                "properties": {
-                  "x": {
-                    "type": "number",
-                    "nullable": true,
-                    "description": "Measured size of the square along X, in the record's `lengthUnit`."
-                  },
-                  "y": {
-                    "type": "number",
-                    "nullable": true,
-                    "description": "Measured size of the square along Y, in the record's `lengthUnit`."
-                  },
-                  "diagonal1": {
-                    "type": "number",
-                    "nullable": true,
-                    "description": "Measured diagonal from the X0 Y0 corner, in the record's `lengthUnit`."
-                  },
-                  "diagonal2": {
-                    "type": "number",
-                    "nullable": true,
-                    "description": "Measured other diagonal, in the record's `lengthUnit`."
-                  },
-                  "circleX": {
-                    "type": "number",
-                    "nullable": true,
-                    "description": "Measured diameter of the circle along X, in the record's `lengthUnit`."
-                  },
-                  "circleY": {
-                    "type": "number",
-                    "nullable": true,
-                    "description": "Measured diameter of the circle along Y, in the record's `lengthUnit`."
-                  },
-                  "kerf": {
-                    "type": "number",
-                    "nullable": true,
-                    "description": "Width of cut the controller did not compensate for, in the record's `lengthUnit`."
-                  }
-                },
-                "required": [
-                  "x",
-                  "y",
-                  "diagonal1",
-                  "diagonal2",
-                  "circleX",
-                  "circleY",
-                  "kerf"
-                ]
-              },
-              "circleKind": {
-                "type": "string",
-                "enum": [
-                  "hole",
-                  "disc"
-                ],
-                "nullable": true
-              },
-              "stepsPerMm": {
-                "type": "object",
-                "properties": {
-                  "x": {
-                    "type": "number",
-                    "nullable": true,
-                    "description": "Steps per mm of axis X when the cut was made (null when not given)."
-                  },
-                  "y": {
-                    "type": "number",
-                    "nullable": true,
-                    "description": "Steps per mm of axis Y when the cut was made (null when not given)."
-                  }
-                },
-                "required": [
-                  "x",
-                  "y"
-                ],
-                "nullable": true
-              },
-              "result": {
-                "allOf": [
-                  {
-                    "$ref": "#/components/schemas/TestCutResult"
-                  }
-                ],
-                "nullable": true
-              },
-              "id": {
-                "type": "string"
-              },
-              "machineId": {
-                "type": "string"
-              },
-              "lengthUnit": {
-                "type": "string",
-                "enum": [
-                  "mm",
-                  "um",
-                  "in",
-                  "thou"
-                ],
-                "description": "Unit the record's lengths were entered in and are given back in."
-              },
-              "note": {
-                "type": "string"
-              },
-              "recordedBy": {
-                "type": "object",
-                "properties": {
-                  "id": {
-                    "type": "string",
-                    "nullable": true
-                  },
-                  "name": {
-                    "type": "string"
-                  }
-                },
-                "required": [
-                  "id",
-                  "name"
-                ]
-              },
-              "recordedAt": {
-                "type": "string"
-              },
-              "status": {
-                "type": "string",
-                "enum": [
-                  "within-target",
-                  "outside-target"
-                ]
-              },
-              "target": {
-                "$ref": "#/components/schemas/JudgedTarget"
-              },
-              "locked": {
-                "type": "boolean"
-              },
-              "warnings": {
-                "type": "array",
-                "items": {
-                  "$ref": "#/components/schemas/ResultWarning"
-                },
-                "description": "What a person should know about the result (empty when none)."
-              }
-            },
-            "required": [
-              "unreadable",
-              "targets",
-              "plateThickness",
-              "plateThicknessMm",
-              "resolution",
-              "nominal",
-              "measured",
-              "circleKind",
-              "stepsPerMm",
-              "result",
-              "id",
-              "machineId",
-              "lengthUnit",
-              "note",
-              "recordedBy",
-              "recordedAt",
-              "status",
-              "target",
-              "locked",
-              "warnings"
-            ]
-          },
-          {
-            "type": "object",
-            "properties": {
-              "unreadable": {},
-              "targets": {
-                "type": "object",
-                "properties": {
-                  "part": {
-                    "$ref": "#/components/schemas/JudgedTarget"
-                  },
-                  "squareness": {
-                    "$ref": "#/components/schemas/JudgedTarget"
-                  }
-                },
-                "required": [
-                  "part",
-                  "squareness"
-                ]
-              },
-              "plateThickness": {
-                "type": "number",
-                "nullable": true,
-                "description": "Thickness of the plate cut, in the record's `lengthUnit`."
-              },
-              "plateThicknessMm": {
-                "type": "number",
-                "nullable": true
-              },
-              "resolution": {
-                "type": "number",
-                "nullable": true,
-                "description": "Smallest step of the caliper or rule the sizes were read with, in the record's `lengthUnit`."
-              },
-              "nominal": {
-                "type": "object",
-                "properties": {
-                  "x": {
-                    "type": "number",
-                    "nullable": true,
-                    "description": "Commanded size of the square along X, in the record's `lengthUnit`."
-                  },
-                  "y": {
-                    "type": "number",
-                    "nullable": true,
-                    "description": "Commanded size of the square along Y, in the record's `lengthUnit`."
-                  },
-                  "circle": {
-                    "type": "number",
-                    "nullable": true,
-                    "description": "Commanded diameter of the circle, in the record's `lengthUnit`."
-                  }
-                },
-                "required": [
-                  "x",
-                  "y",
-                  "circle"
-                ]
-              },
-              "measured": {
-                "type": "object",
-                "properties": {
-                  "x": {
-                    "type": "number",
-                    "nullable": true,
-                    "description": "Measured size of the square along X, in the record's `lengthUnit`."
-                  },
-                  "y": {
-                    "type": "number",
-                    "nullable": true,
-                    "description": "Measured size of the square along Y, in the record's `lengthUnit`."
-                  },
-                  "diagonal1": {
-                    "type": "number",
-                    "nullable": true,
-                    "description": "Measured diagonal from the X0 Y0 corner, in the record's `lengthUnit`."
-                  },
-                  "diagonal2": {
-                    "type": "number",
-                    "nullable": true,
-                    "description": "Measured other diagonal, in the record's `lengthUnit`."
-                  },
-                  "circleX": {
-                    "type": "number",
-                    "nullable": true,
-                    "description": "Measured diameter of the circle along X, in the record's `lengthUnit`."
-                  },
-                  "circleY": {
-                    "type": "number",
-                    "nullable": true,
-                    "description": "Measured diameter of the circle along Y, in the record's `lengthUnit`."
-                  },
-                  "kerf": {
-                    "type": "number",
-                    "nullable": true,
-                    "description": "Width of cut the controller did not compensate for, in the record's `lengthUnit`."
-                  }
-                },
-                "required": [
-                  "x",
-                  "y",
-                  "diagonal1",
-                  "diagonal2",
-                  "circleX",
-                  "circleY",
-                  "kerf"
-                ]
-              },
-              "circleKind": {
-                "type": "string",
-                "enum": [
-                  "hole",
-                  "disc"
-                ],
-                "nullable": true
-              },
-              "stepsPerMm": {
-                "type": "object",
-                "properties": {
-                  "x": {
-                    "type": "number",
-                    "nullable": true,
-                    "description": "Steps per mm of axis X when the cut was made (null when not given)."
-                  },
-                  "y": {
-                    "type": "number",
-                    "nullable": true,
-                    "description": "Steps per mm of axis Y when the cut was made (null when not given)."
-                  }
-                },
-                "required": [
-                  "x",
-                  "y"
-                ],
-                "nullable": true
-              },
-              "result": {
-                "allOf": [
-                  {
-                    "$ref": "#/components/schemas/TestCutResult"
-                  }
-                ],
-                "nullable": true
-              },
-              "id": {
-                "type": "string"
-              },
-              "machineId": {
-                "type": "string"
-              },
-              "lengthUnit": {
-                "type": "string",
-                "enum": [
-                  "mm",
-                  "um",
-                  "in",
-                  "thou"
-                ],
-                "description": "Unit the record's lengths were entered in and are given back in."
-              },
-              "note": {
-                "type": "string"
-              },
-              "recordedBy": {
-                "type": "object",
-                "properties": {
-                  "id": {
-                    "type": "string",
-                    "nullable": true
-                  },
-                  "name": {
-                    "type": "string"
-                  }
-                },
-                "required": [
-                  "id",
-                  "name"
-                ]
-              },
-              "recordedAt": {
-                "type": "string"
-              },
-              "status": {
-                "type": "string",
-                "enum": [
-                  "within-target",
-                  "outside-target"
-                ]
-              },
-              "target": {
-                "$ref": "#/components/schemas/JudgedTarget"
-              },
-              "locked": {
-                "type": "boolean"
-              },
-              "warnings": {
-                "type": "array",
-                "items": {
-                  "$ref": "#/components/schemas/ResultWarning"
-                },
-                "description": "What a person should know about the result (empty when none)."
-              }
-            },
-            "required": [
-              "targets",
-              "plateThickness",
-              "plateThicknessMm",
-              "resolution",
-              "nominal",
-              "measured",
-              "circleKind",
-              "stepsPerMm",
-              "result",
-              "id",
-              "machineId",
-              "lengthUnit",
-              "note",
-              "recordedBy",
-              "recordedAt",
-              "status",
-              "target",
-              "locked",
-              "warnings"
-            ]
-          }
-        ]
+        "$ref": "#/components/schemas/TestCutResponse"
       }
     },
     "FrameController.deleteDiagonalCheck": null,
@@ -4667,9 +1580,9 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
         "status": {
           "type": "string",
           "enum": [
+            "not-started",
             "within-target",
-            "outside-target",
-            "not-started"
+            "outside-target"
           ]
         },
         "counts": {
@@ -4805,9 +1718,9 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
         "status": {
           "type": "string",
           "enum": [
+            "not-started",
             "within-target",
-            "outside-target",
-            "not-started"
+            "outside-target"
           ]
         },
         "counts": {
@@ -4943,9 +1856,9 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
         "status": {
           "type": "string",
           "enum": [
+            "not-started",
             "within-target",
-            "outside-target",
-            "not-started"
+            "outside-target"
           ]
         },
         "counts": {
@@ -5747,6 +2660,13 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
         },
         "scaleMaterial": {
           "type": "string",
+          "enum": [
+            "steel",
+            "stainless-steel",
+            "aluminium",
+            "glass",
+            "invar"
+          ],
           "nullable": true
         },
         "instrumentResolution": {
@@ -5981,6 +2901,13 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
         },
         "scaleMaterial": {
           "type": "string",
+          "enum": [
+            "steel",
+            "stainless-steel",
+            "aluminium",
+            "glass",
+            "invar"
+          ],
           "nullable": true
         },
         "instrumentResolution": {
@@ -6568,6 +3495,13 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
         },
         "scaleMaterial": {
           "type": "string",
+          "enum": [
+            "steel",
+            "stainless-steel",
+            "aluminium",
+            "glass",
+            "invar"
+          ],
           "nullable": true
         },
         "instrumentResolution": {
@@ -6970,6 +3904,13 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
         },
         "scaleMaterial": {
           "type": "string",
+          "enum": [
+            "steel",
+            "stainless-steel",
+            "aluminium",
+            "glass",
+            "invar"
+          ],
           "nullable": true
         },
         "instrumentResolution": {
@@ -7758,18 +4699,18 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
               "status": {
                 "type": "string",
                 "enum": [
+                  "not-started",
                   "within-target",
                   "outside-target",
-                  "not-started",
                   "waived"
                 ]
               },
               "measuredStatus": {
                 "type": "string",
                 "enum": [
+                  "not-started",
                   "within-target",
-                  "outside-target",
-                  "not-started"
+                  "outside-target"
                 ],
                 "description": "What the contributor reported before any waiver."
               },
@@ -7835,12 +4776,12 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
               "recordType": {
                 "type": "string",
                 "enum": [
-                  "axis",
                   "machine",
                   "waiver",
                   "rail-sweep",
                   "rail",
                   "bolt-down",
+                  "axis",
                   "travel-trial",
                   "positioning-run",
                   "backlash-check",
@@ -7979,9 +4920,9 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
               "status": {
                 "type": "string",
                 "enum": [
+                  "not-started",
                   "within-target",
                   "outside-target",
-                  "not-started",
                   "waived"
                 ]
               }
@@ -8325,168 +5266,7 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
       ]
     },
     "ApprovalsController.driftOf": {
-      "oneOf": [
-        {
-          "type": "object",
-          "properties": {
-            "approval": {
-              "nullable": true
-            },
-            "rows": {
-              "type": "array",
-              "items": {}
-            }
-          },
-          "required": [
-            "approval",
-            "rows"
-          ]
-        },
-        {
-          "type": "object",
-          "properties": {
-            "approval": {
-              "type": "object",
-              "properties": {
-                "id": {
-                  "type": "string"
-                },
-                "approvedAt": {
-                  "type": "string"
-                },
-                "approvedBy": {
-                  "type": "string"
-                },
-                "recordHash": {
-                  "type": "string"
-                }
-              },
-              "required": [
-                "id",
-                "approvedAt",
-                "approvedBy",
-                "recordHash"
-              ]
-            },
-            "rows": {
-              "type": "array",
-              "items": {
-                "type": "object",
-                "properties": {
-                  "key": {
-                    "type": "string"
-                  },
-                  "kind": {
-                    "type": "string",
-                    "enum": [
-                      "positioning",
-                      "rail-straightness",
-                      "travel-trial",
-                      "diagonal-check",
-                      "bed-grid",
-                      "test-cut",
-                      "safety-walk",
-                      "rail-parallelism",
-                      "backlash",
-                      "speed-check",
-                      "travel-envelope"
-                    ]
-                  },
-                  "subject": {
-                    "type": "string"
-                  },
-                  "target": {
-                    "type": "object",
-                    "properties": {
-                      "value": {
-                        "type": "number"
-                      },
-                      "unit": {
-                        "type": "string",
-                        "enum": [
-                          "mm",
-                          "um",
-                          "in",
-                          "thou",
-                          "mm/m",
-                          "%",
-                          "days",
-                          "um/mm"
-                        ]
-                      },
-                      "source": {
-                        "type": "string"
-                      },
-                      "reference": {
-                        "type": "string",
-                        "enum": [
-                          "minimum-zone",
-                          "least-squares"
-                        ]
-                      },
-                      "label": {
-                        "type": "string"
-                      }
-                    },
-                    "required": [
-                      "value",
-                      "unit"
-                    ],
-                    "nullable": true
-                  },
-                  "approved": {
-                    "allOf": [
-                      {
-                        "$ref": "#/components/schemas/DriftSide"
-                      }
-                    ],
-                    "nullable": true
-                  },
-                  "latest": {
-                    "allOf": [
-                      {
-                        "$ref": "#/components/schemas/DriftSide"
-                      }
-                    ],
-                    "nullable": true
-                  },
-                  "change": {
-                    "type": "number",
-                    "nullable": true,
-                    "description": "Latest minus approved, in the `unit` beside it; null when either is missing or nothing new was recorded."
-                  },
-                  "unit": {
-                    "type": "string",
-                    "nullable": true
-                  },
-                  "rechecked": {
-                    "type": "boolean"
-                  },
-                  "worse": {
-                    "type": "boolean"
-                  }
-                },
-                "required": [
-                  "key",
-                  "kind",
-                  "subject",
-                  "target",
-                  "approved",
-                  "latest",
-                  "change",
-                  "unit",
-                  "rechecked",
-                  "worse"
-                ]
-              }
-            }
-          },
-          "required": [
-            "approval",
-            "rows"
-          ]
-        }
-      ]
+      "$ref": "#/components/schemas/DriftResponse"
     },
     "ApprovalsController.certificate": {
       "type": "string",
@@ -9675,8 +6455,8 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
         "status": {
           "type": "string",
           "enum": [
-            "outside-target",
-            "not-started"
+            "not-started",
+            "outside-target"
           ]
         }
       },
@@ -10111,7 +6891,11 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
           "type": "string"
         },
         "phase": {
-          "type": "string"
+          "type": "string",
+          "enum": [
+            "as-found",
+            "as-left"
+          ]
         },
         "datum": {
           "type": "string",
@@ -10346,6 +7130,440 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
         "updatedAt"
       ]
     },
+    "ParallelismWithoutPartner": {
+      "type": "object",
+      "properties": {
+        "railId": {
+          "type": "string"
+        },
+        "partnerRailId": {
+          "nullable": true
+        },
+        "status": {
+          "type": "string",
+          "enum": [
+            "not-comparable"
+          ]
+        },
+        "reason": {
+          "type": "string"
+        },
+        "targets": {
+          "$ref": "#/components/schemas/ParallelismTargets"
+        },
+        "warnings": {
+          "type": "array",
+          "items": {
+            "$ref": "#/components/schemas/ResultWarning"
+          }
+        }
+      },
+      "required": [
+        "railId",
+        "partnerRailId",
+        "status",
+        "reason",
+        "targets",
+        "warnings"
+      ],
+      "description": "A rail without a partner: nothing to compare."
+    },
+    "ParallelismTargets": {
+      "type": "object",
+      "properties": {
+        "parallelism": {
+          "$ref": "#/components/schemas/ParallelismTargetShown"
+        },
+        "heightDifference": {
+          "type": "object",
+          "properties": {
+            "value": {
+              "type": "number",
+              "description": "In the `unit` beside it."
+            },
+            "unit": {
+              "type": "string",
+              "enum": [
+                "mm",
+                "um",
+                "in",
+                "thou",
+                "mm/m",
+                "%",
+                "days",
+                "um/mm"
+              ]
+            },
+            "source": {
+              "type": "string"
+            }
+          },
+          "required": [
+            "value",
+            "unit",
+            "source"
+          ]
+        }
+      },
+      "required": [
+        "parallelism",
+        "heightDifference"
+      ],
+      "description": "The two targets a rail pair is judged against."
+    },
+    "ParallelismTargetShown": {
+      "type": "object",
+      "properties": {
+        "value": {
+          "type": "number",
+          "description": "In the `unit` beside it."
+        },
+        "unit": {
+          "type": "string",
+          "enum": [
+            "mm",
+            "um",
+            "in",
+            "thou",
+            "mm/m",
+            "%",
+            "days",
+            "um/mm"
+          ]
+        }
+      },
+      "required": [
+        "value",
+        "unit"
+      ],
+      "description": "A target as the parallelism answer shows it: value and unit only."
+    },
+    "ParallelismNotComparable": {
+      "type": "object",
+      "properties": {
+        "status": {
+          "type": "string",
+          "enum": [
+            "not-comparable"
+          ]
+        },
+        "reason": {
+          "type": "string"
+        },
+        "unreadable": {
+          "type": "string"
+        },
+        "railId": {
+          "type": "string"
+        },
+        "partnerRailId": {
+          "type": "string"
+        },
+        "targets": {
+          "$ref": "#/components/schemas/ParallelismTargets"
+        },
+        "sweeps": {
+          "type": "object",
+          "properties": {
+            "a": {
+              "type": "string",
+              "nullable": true
+            },
+            "b": {
+              "type": "string",
+              "nullable": true
+            }
+          },
+          "required": [
+            "a",
+            "b"
+          ],
+          "description": "The sweeps of this rail (a) and its partner (b) the comparison used."
+        },
+        "height": {
+          "$ref": "#/components/schemas/RailHeightDifference"
+        },
+        "warnings": {
+          "type": "array",
+          "items": {
+            "$ref": "#/components/schemas/ResultWarning"
+          }
+        }
+      },
+      "required": [
+        "status",
+        "reason",
+        "railId",
+        "partnerRailId",
+        "targets",
+        "sweeps",
+        "height",
+        "warnings"
+      ],
+      "description": "A pair whose sweeps cannot be compared yet (or whose latest sweep cannot be read: `unreadable`)."
+    },
+    "RailHeightDifference": {
+      "type": "object",
+      "properties": {
+        "measured": {
+          "type": "boolean"
+        },
+        "reason": {
+          "type": "string",
+          "nullable": true,
+          "description": "Why there is no height (when not measured)."
+        },
+        "datum": {
+          "type": "string",
+          "nullable": true
+        },
+        "worst": {
+          "type": "number",
+          "nullable": true,
+          "description": "Largest height difference, mm."
+        },
+        "worstSigned": {
+          "type": "number",
+          "nullable": true,
+          "description": "The same with its sign, mm."
+        },
+        "at": {
+          "type": "number",
+          "nullable": true,
+          "description": "Where along the rail the largest difference is, mm."
+        },
+        "differences": {
+          "type": "array",
+          "items": {
+            "type": "number"
+          },
+          "nullable": true,
+          "description": "Difference at each station, mm."
+        },
+        "spacing": {
+          "type": "number",
+          "nullable": true,
+          "description": "Rail spacing, mm."
+        },
+        "kUmPerMm": {
+          "type": "number",
+          "nullable": true
+        },
+        "permissible": {
+          "type": "number",
+          "nullable": true,
+          "description": "Permissible height difference, mm (null when the spacing is missing)."
+        },
+        "targetText": {
+          "type": "string",
+          "nullable": true
+        },
+        "within": {
+          "type": "boolean",
+          "nullable": true
+        },
+        "unit": {
+          "type": "string"
+        }
+      },
+      "required": [
+        "measured",
+        "reason",
+        "datum",
+        "worst",
+        "worstSigned",
+        "at",
+        "differences",
+        "spacing",
+        "kUmPerMm",
+        "permissible",
+        "targetText",
+        "within",
+        "unit"
+      ],
+      "description": "The height difference of the pair, from top-face sweeps; every length in mm."
+    },
+    "ParallelismMeasured": {
+      "type": "object",
+      "properties": {
+        "status": {
+          "type": "string",
+          "enum": [
+            "within-target",
+            "outside-target"
+          ]
+        },
+        "datum": {
+          "type": "string"
+        },
+        "face": {
+          "type": "string",
+          "enum": [
+            "side",
+            "top"
+          ]
+        },
+        "parallelism": {
+          "type": "number",
+          "description": "Parallelism of the pair, mm."
+        },
+        "meanOffset": {
+          "type": "number",
+          "description": "Mean offset between the rails, mm."
+        },
+        "positions": {
+          "type": "array",
+          "items": {
+            "type": "number"
+          },
+          "description": "Stations compared, mm along the rail."
+        },
+        "differences": {
+          "type": "array",
+          "items": {
+            "type": "number"
+          },
+          "description": "Difference at each station, mm."
+        },
+        "parallelismWithin": {
+          "type": "boolean",
+          "nullable": true
+        },
+        "heightDifferenceWithin": {
+          "type": "boolean",
+          "nullable": true
+        },
+        "railId": {
+          "type": "string"
+        },
+        "partnerRailId": {
+          "type": "string"
+        },
+        "targets": {
+          "$ref": "#/components/schemas/ParallelismTargets"
+        },
+        "sweeps": {
+          "type": "object",
+          "properties": {
+            "a": {
+              "type": "string",
+              "nullable": true
+            },
+            "b": {
+              "type": "string",
+              "nullable": true
+            }
+          },
+          "required": [
+            "a",
+            "b"
+          ],
+          "description": "The sweeps of this rail (a) and its partner (b) the comparison used."
+        },
+        "height": {
+          "$ref": "#/components/schemas/RailHeightDifference"
+        },
+        "warnings": {
+          "type": "array",
+          "items": {
+            "$ref": "#/components/schemas/ResultWarning"
+          }
+        }
+      },
+      "required": [
+        "status",
+        "datum",
+        "face",
+        "parallelism",
+        "meanOffset",
+        "positions",
+        "differences",
+        "parallelismWithin",
+        "heightDifferenceWithin",
+        "railId",
+        "partnerRailId",
+        "targets",
+        "sweeps",
+        "height",
+        "warnings"
+      ],
+      "description": "A pair judged on its parallelism (and its height difference when measured); lengths in mm."
+    },
+    "ParallelismByHeightOnly": {
+      "type": "object",
+      "properties": {
+        "status": {
+          "type": "string",
+          "enum": [
+            "within-target",
+            "outside-target"
+          ]
+        },
+        "reason": {
+          "type": "string"
+        },
+        "parallelism": {
+          "nullable": true
+        },
+        "parallelismWithin": {
+          "nullable": true
+        },
+        "heightDifferenceWithin": {
+          "type": "boolean",
+          "nullable": true
+        },
+        "railId": {
+          "type": "string"
+        },
+        "partnerRailId": {
+          "type": "string"
+        },
+        "targets": {
+          "$ref": "#/components/schemas/ParallelismTargets"
+        },
+        "sweeps": {
+          "type": "object",
+          "properties": {
+            "a": {
+              "type": "string",
+              "nullable": true
+            },
+            "b": {
+              "type": "string",
+              "nullable": true
+            }
+          },
+          "required": [
+            "a",
+            "b"
+          ],
+          "description": "The sweeps of this rail (a) and its partner (b) the comparison used."
+        },
+        "height": {
+          "$ref": "#/components/schemas/RailHeightDifference"
+        },
+        "warnings": {
+          "type": "array",
+          "items": {
+            "$ref": "#/components/schemas/ResultWarning"
+          }
+        }
+      },
+      "required": [
+        "status",
+        "reason",
+        "parallelism",
+        "parallelismWithin",
+        "heightDifferenceWithin",
+        "railId",
+        "partnerRailId",
+        "targets",
+        "sweeps",
+        "height",
+        "warnings"
+      ],
+      "description": "A pair judged on its height difference alone: the side-face sweeps cannot be compared (`reason`)."
+    },
     "SweepListItem": {
       "type": "object",
       "properties": {
@@ -10375,7 +7593,11 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
           "type": "string"
         },
         "phase": {
-          "type": "string"
+          "type": "string",
+          "enum": [
+            "as-found",
+            "as-left"
+          ]
         },
         "datum": {
           "type": "string",
@@ -11141,6 +8363,194 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
       ],
       "description": "A hole write's answer: the whole bolt-down, and whether this write was a repeat of one already applied."
     },
+    "DiagonalCheckResponse": {
+      "type": "object",
+      "properties": {
+        "resolution": {
+          "type": "number",
+          "nullable": true,
+          "description": "Smallest step of the tape or rule, in lengthUnit (null: not recorded)."
+        },
+        "input": {
+          "allOf": [
+            {
+              "$ref": "#/components/schemas/DiagonalLengths"
+            }
+          ],
+          "description": "As entered, in lengthUnit."
+        },
+        "inputMm": {
+          "allOf": [
+            {
+              "$ref": "#/components/schemas/DiagonalLengthsMm"
+            }
+          ],
+          "description": "The same in mm."
+        },
+        "result": {
+          "allOf": [
+            {
+              "$ref": "#/components/schemas/DiagonalCheckResult"
+            }
+          ],
+          "nullable": true
+        },
+        "unreadable": {
+          "type": "string",
+          "description": "Present when the record's stored measurements cannot be read (result is then null)."
+        },
+        "id": {
+          "type": "string"
+        },
+        "machineId": {
+          "type": "string"
+        },
+        "lengthUnit": {
+          "type": "string",
+          "enum": [
+            "mm",
+            "um",
+            "in",
+            "thou"
+          ],
+          "description": "Unit the record's lengths were entered in and are given back in."
+        },
+        "note": {
+          "type": "string"
+        },
+        "recordedBy": {
+          "type": "object",
+          "properties": {
+            "id": {
+              "type": "string",
+              "nullable": true
+            },
+            "name": {
+              "type": "string"
+            }
+          },
+          "required": [
+            "id",
+            "name"
+          ]
+        },
+        "recordedAt": {
+          "type": "string"
+        },
+        "status": {
+          "type": "string",
+          "enum": [
+            "within-target",
+            "outside-target"
+          ]
+        },
+        "target": {
+          "$ref": "#/components/schemas/JudgedTarget"
+        },
+        "locked": {
+          "type": "boolean"
+        },
+        "warnings": {
+          "type": "array",
+          "items": {
+            "$ref": "#/components/schemas/ResultWarning"
+          },
+          "description": "What a person should know about the result (empty when none)."
+        }
+      },
+      "required": [
+        "resolution",
+        "input",
+        "inputMm",
+        "result",
+        "id",
+        "machineId",
+        "lengthUnit",
+        "note",
+        "recordedBy",
+        "recordedAt",
+        "status",
+        "target",
+        "locked",
+        "warnings"
+      ]
+    },
+    "DiagonalLengths": {
+      "type": "object",
+      "properties": {
+        "sideX": {
+          "type": "number",
+          "nullable": true,
+          "description": "Side along X, in the record's `lengthUnit`."
+        },
+        "sideY": {
+          "type": "number",
+          "nullable": true,
+          "description": "Side along Y, in the record's `lengthUnit`."
+        },
+        "diagonal1": {
+          "type": "number",
+          "nullable": true,
+          "description": "Diagonal from the X0 Y0 corner, in the record's `lengthUnit`."
+        },
+        "diagonal2": {
+          "type": "number",
+          "nullable": true,
+          "description": "The other diagonal, in the record's `lengthUnit`."
+        },
+        "gantrySpan": {
+          "type": "number",
+          "nullable": true,
+          "description": "Distance between the gantry's two bearing rails, in the record's `lengthUnit`."
+        }
+      },
+      "required": [
+        "sideX",
+        "sideY",
+        "diagonal1",
+        "diagonal2",
+        "gantrySpan"
+      ],
+      "description": "A diagonal check's lengths as entered."
+    },
+    "DiagonalLengthsMm": {
+      "type": "object",
+      "properties": {
+        "sideX": {
+          "type": "number",
+          "nullable": true,
+          "description": "Side along X, mm."
+        },
+        "sideY": {
+          "type": "number",
+          "nullable": true,
+          "description": "Side along Y, mm."
+        },
+        "diagonal1": {
+          "type": "number",
+          "nullable": true,
+          "description": "Diagonal from the X0 Y0 corner, mm."
+        },
+        "diagonal2": {
+          "type": "number",
+          "nullable": true,
+          "description": "The other diagonal, mm."
+        },
+        "gantrySpan": {
+          "type": "number",
+          "nullable": true,
+          "description": "Distance between the gantry's two bearing rails, mm."
+        }
+      },
+      "required": [
+        "sideX",
+        "sideY",
+        "diagonal1",
+        "diagonal2",
+        "gantrySpan"
+      ],
+      "description": "The same lengths in mm."
+    },
     "DiagonalCheckResult": {
       "type": "object",
       "properties": {
@@ -11265,6 +8675,157 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
         "value",
         "unit"
       ]
+    },
+    "BedGridResponse": {
+      "type": "object",
+      "properties": {
+        "readingUnit": {
+          "type": "string",
+          "enum": [
+            "mm",
+            "um",
+            "in",
+            "thou"
+          ],
+          "description": "Unit the heights (and the gauge's resolution) were read in and are given back in."
+        },
+        "resolution": {
+          "type": "number",
+          "nullable": true,
+          "description": "Smallest step of the gauge, in readingUnit (null: not recorded)."
+        },
+        "rows": {
+          "type": "number",
+          "nullable": true,
+          "description": "Count of rows of the grid (along Y)."
+        },
+        "columns": {
+          "type": "number",
+          "nullable": true,
+          "description": "Count of columns of the grid (along X)."
+        },
+        "points": {
+          "type": "array",
+          "items": {
+            "$ref": "#/components/schemas/BedGridPointEntered"
+          }
+        },
+        "result": {
+          "allOf": [
+            {
+              "$ref": "#/components/schemas/BedGridResult"
+            }
+          ],
+          "nullable": true,
+          "description": "In mm."
+        },
+        "unreadable": {
+          "type": "string",
+          "description": "Present when the record's stored measurements cannot be read (result is then null)."
+        },
+        "id": {
+          "type": "string"
+        },
+        "machineId": {
+          "type": "string"
+        },
+        "lengthUnit": {
+          "type": "string",
+          "enum": [
+            "mm",
+            "um",
+            "in",
+            "thou"
+          ],
+          "description": "Unit the record's lengths were entered in and are given back in."
+        },
+        "note": {
+          "type": "string"
+        },
+        "recordedBy": {
+          "type": "object",
+          "properties": {
+            "id": {
+              "type": "string",
+              "nullable": true
+            },
+            "name": {
+              "type": "string"
+            }
+          },
+          "required": [
+            "id",
+            "name"
+          ]
+        },
+        "recordedAt": {
+          "type": "string"
+        },
+        "status": {
+          "type": "string",
+          "enum": [
+            "within-target",
+            "outside-target"
+          ]
+        },
+        "target": {
+          "$ref": "#/components/schemas/JudgedTarget"
+        },
+        "locked": {
+          "type": "boolean"
+        },
+        "warnings": {
+          "type": "array",
+          "items": {
+            "$ref": "#/components/schemas/ResultWarning"
+          },
+          "description": "What a person should know about the result (empty when none)."
+        }
+      },
+      "required": [
+        "readingUnit",
+        "resolution",
+        "rows",
+        "columns",
+        "points",
+        "result",
+        "id",
+        "machineId",
+        "lengthUnit",
+        "note",
+        "recordedBy",
+        "recordedAt",
+        "status",
+        "target",
+        "locked",
+        "warnings"
+      ]
+    },
+    "BedGridPointEntered": {
+      "type": "object",
+      "properties": {
+        "x": {
+          "type": "number",
+          "nullable": true,
+          "description": "Position along X, in the record's `lengthUnit`."
+        },
+        "y": {
+          "type": "number",
+          "nullable": true,
+          "description": "Position along Y, in the record's `lengthUnit`."
+        },
+        "z": {
+          "type": "number",
+          "nullable": true,
+          "description": "Height read, in the record's `readingUnit`."
+        }
+      },
+      "required": [
+        "x",
+        "y",
+        "z"
+      ],
+      "description": "One point of a bed grid as entered: position in lengthUnit, height in readingUnit."
     },
     "BedGridResult": {
       "type": "object",
@@ -11476,6 +9037,246 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
         "zoneResidualMm",
         "judgedHeightMm"
       ]
+    },
+    "TestCutResponse": {
+      "type": "object",
+      "properties": {
+        "targets": {
+          "$ref": "#/components/schemas/TestCutTargets"
+        },
+        "plateThickness": {
+          "type": "number",
+          "nullable": true,
+          "description": "Plate thickness in lengthUnit (null: not recorded)."
+        },
+        "plateThicknessMm": {
+          "type": "number",
+          "nullable": true
+        },
+        "resolution": {
+          "type": "number",
+          "nullable": true,
+          "description": "Smallest step of the caliper or rule, in lengthUnit (null: not recorded)."
+        },
+        "nominal": {
+          "$ref": "#/components/schemas/TestCutNominal"
+        },
+        "measured": {
+          "$ref": "#/components/schemas/TestCutMeasured"
+        },
+        "circleKind": {
+          "type": "string",
+          "enum": [
+            "hole",
+            "disc"
+          ],
+          "nullable": true
+        },
+        "stepsPerMm": {
+          "type": "object",
+          "properties": {
+            "x": {
+              "type": "number",
+              "nullable": true,
+              "description": "Steps per mm of axis X when the cut was made (null when not given)."
+            },
+            "y": {
+              "type": "number",
+              "nullable": true,
+              "description": "Steps per mm of axis Y when the cut was made (null when not given)."
+            }
+          },
+          "required": [
+            "x",
+            "y"
+          ],
+          "nullable": true,
+          "description": "The controller's steps per mm for X and Y when the part was cut (null where not recorded)."
+        },
+        "result": {
+          "allOf": [
+            {
+              "$ref": "#/components/schemas/TestCutResult"
+            }
+          ],
+          "nullable": true
+        },
+        "unreadable": {
+          "type": "string",
+          "description": "Present when the record's stored measurements cannot be read (result is then null)."
+        },
+        "id": {
+          "type": "string"
+        },
+        "machineId": {
+          "type": "string"
+        },
+        "lengthUnit": {
+          "type": "string",
+          "enum": [
+            "mm",
+            "um",
+            "in",
+            "thou"
+          ],
+          "description": "Unit the record's lengths were entered in and are given back in."
+        },
+        "note": {
+          "type": "string"
+        },
+        "recordedBy": {
+          "type": "object",
+          "properties": {
+            "id": {
+              "type": "string",
+              "nullable": true
+            },
+            "name": {
+              "type": "string"
+            }
+          },
+          "required": [
+            "id",
+            "name"
+          ]
+        },
+        "recordedAt": {
+          "type": "string"
+        },
+        "status": {
+          "type": "string",
+          "enum": [
+            "within-target",
+            "outside-target"
+          ]
+        },
+        "target": {
+          "$ref": "#/components/schemas/JudgedTarget"
+        },
+        "locked": {
+          "type": "boolean"
+        },
+        "warnings": {
+          "type": "array",
+          "items": {
+            "$ref": "#/components/schemas/ResultWarning"
+          },
+          "description": "What a person should know about the result (empty when none)."
+        }
+      },
+      "required": [
+        "targets",
+        "plateThickness",
+        "plateThicknessMm",
+        "resolution",
+        "nominal",
+        "measured",
+        "circleKind",
+        "stepsPerMm",
+        "result",
+        "id",
+        "machineId",
+        "lengthUnit",
+        "note",
+        "recordedBy",
+        "recordedAt",
+        "status",
+        "target",
+        "locked",
+        "warnings"
+      ]
+    },
+    "TestCutTargets": {
+      "type": "object",
+      "properties": {
+        "part": {
+          "$ref": "#/components/schemas/JudgedTarget"
+        },
+        "squareness": {
+          "$ref": "#/components/schemas/JudgedTarget"
+        }
+      },
+      "required": [
+        "part",
+        "squareness"
+      ],
+      "description": "The two targets a test cut is judged against: part size and squareness."
+    },
+    "TestCutNominal": {
+      "type": "object",
+      "properties": {
+        "x": {
+          "type": "number",
+          "nullable": true,
+          "description": "Commanded size of the square along X, in the record's `lengthUnit`."
+        },
+        "y": {
+          "type": "number",
+          "nullable": true,
+          "description": "Commanded size of the square along Y, in the record's `lengthUnit`."
+        },
+        "circle": {
+          "type": "number",
+          "nullable": true,
+          "description": "Commanded diameter of the circle, in the record's `lengthUnit`."
+        }
+      },
+      "required": [
+        "x",
+        "y",
+        "circle"
+      ],
+      "description": "The sizes the test cut was commanded at, in lengthUnit."
+    },
+    "TestCutMeasured": {
+      "type": "object",
+      "properties": {
+        "x": {
+          "type": "number",
+          "nullable": true,
+          "description": "Measured size of the square along X, in the record's `lengthUnit`."
+        },
+        "y": {
+          "type": "number",
+          "nullable": true,
+          "description": "Measured size of the square along Y, in the record's `lengthUnit`."
+        },
+        "diagonal1": {
+          "type": "number",
+          "nullable": true,
+          "description": "Measured diagonal from the X0 Y0 corner, in the record's `lengthUnit`."
+        },
+        "diagonal2": {
+          "type": "number",
+          "nullable": true,
+          "description": "Measured other diagonal, in the record's `lengthUnit`."
+        },
+        "circleX": {
+          "type": "number",
+          "nullable": true,
+          "description": "Measured diameter of the circle along X, in the record's `lengthUnit`."
+        },
+        "circleY": {
+          "type": "number",
+          "nullable": true,
+          "description": "Measured diameter of the circle along Y, in the record's `lengthUnit`."
+        },
+        "kerf": {
+          "type": "number",
+          "nullable": true,
+          "description": "Width of cut the controller did not compensate for, in the record's `lengthUnit`."
+        }
+      },
+      "required": [
+        "x",
+        "y",
+        "diagonal1",
+        "diagonal2",
+        "circleX",
+        "circleY",
+        "kerf"
+      ],
+      "description": "The sizes measured on the cut part, in lengthUnit."
     },
     "TestCutResult": {
       "type": "object",
@@ -11948,9 +9749,9 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
         "status": {
           "type": "string",
           "enum": [
+            "not-started",
             "within-target",
             "outside-target",
-            "not-started",
             "not-applicable"
           ]
         },
@@ -12144,9 +9945,9 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
         "status": {
           "type": "string",
           "enum": [
+            "not-started",
             "within-target",
-            "outside-target",
-            "not-started"
+            "outside-target"
           ]
         },
         "workArea": {
@@ -12302,9 +10103,9 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
         "status": {
           "type": "string",
           "enum": [
+            "not-started",
             "within-target",
             "outside-target",
-            "not-started",
             "not-applicable"
           ]
         },
@@ -12731,15 +10532,173 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
       ],
       "description": "One place where the signed record and the live one differ."
     },
+    "DriftResponse": {
+      "type": "object",
+      "properties": {
+        "approval": {
+          "allOf": [
+            {
+              "$ref": "#/components/schemas/DriftApproval"
+            }
+          ],
+          "nullable": true
+        },
+        "rows": {
+          "type": "array",
+          "items": {
+            "$ref": "#/components/schemas/DriftRow"
+          }
+        }
+      },
+      "required": [
+        "approval",
+        "rows"
+      ],
+      "description": "\"What drifted\" since the latest approval (no approval: null and no rows)."
+    },
+    "DriftApproval": {
+      "type": "object",
+      "properties": {
+        "id": {
+          "type": "string"
+        },
+        "approvedAt": {
+          "type": "string"
+        },
+        "approvedBy": {
+          "type": "string"
+        },
+        "recordHash": {
+          "type": "string"
+        }
+      },
+      "required": [
+        "id",
+        "approvedAt",
+        "approvedBy",
+        "recordHash"
+      ],
+      "description": "The approval the drift is measured from."
+    },
+    "DriftRow": {
+      "type": "object",
+      "properties": {
+        "key": {
+          "type": "string"
+        },
+        "kind": {
+          "type": "string",
+          "enum": [
+            "positioning",
+            "rail-straightness",
+            "travel-trial",
+            "diagonal-check",
+            "bed-grid",
+            "test-cut",
+            "safety-walk",
+            "rail-parallelism",
+            "backlash",
+            "speed-check",
+            "travel-envelope"
+          ]
+        },
+        "subject": {
+          "type": "string"
+        },
+        "target": {
+          "type": "object",
+          "properties": {
+            "value": {
+              "type": "number"
+            },
+            "unit": {
+              "type": "string",
+              "enum": [
+                "mm",
+                "um",
+                "in",
+                "thou",
+                "mm/m",
+                "%",
+                "days",
+                "um/mm"
+              ]
+            },
+            "source": {
+              "type": "string"
+            },
+            "reference": {
+              "type": "string",
+              "enum": [
+                "minimum-zone",
+                "least-squares"
+              ]
+            },
+            "label": {
+              "type": "string"
+            }
+          },
+          "required": [
+            "value",
+            "unit"
+          ],
+          "nullable": true
+        },
+        "approved": {
+          "allOf": [
+            {
+              "$ref": "#/components/schemas/DriftSide"
+            }
+          ],
+          "nullable": true
+        },
+        "latest": {
+          "allOf": [
+            {
+              "$ref": "#/components/schemas/DriftSide"
+            }
+          ],
+          "nullable": true
+        },
+        "change": {
+          "type": "number",
+          "nullable": true,
+          "description": "Latest minus approved, in the `unit` beside it; null when either is missing or nothing new was recorded."
+        },
+        "unit": {
+          "type": "string",
+          "nullable": true
+        },
+        "rechecked": {
+          "type": "boolean"
+        },
+        "worse": {
+          "type": "boolean"
+        }
+      },
+      "required": [
+        "key",
+        "kind",
+        "subject",
+        "target",
+        "approved",
+        "latest",
+        "change",
+        "unit",
+        "rechecked",
+        "worse"
+      ],
+      "description": "One check: what the approval stood on beside its latest result."
+    },
     "DriftSide": {
       "type": "object",
       "properties": {
         "status": {
           "type": "string",
           "enum": [
+            "not-started",
             "within-target",
             "outside-target",
-            "not-started",
             "waived"
           ]
         },
@@ -12871,10 +10830,6 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
               "type": "number",
               "description": "Count of columns of holes."
             },
-            "rows": {
-              "type": "number",
-              "description": "Count of rows of holes."
-            },
             "originX": {
               "type": "number",
               "description": "First hole's centre from the outline's left edge, in `lengthUnit`."
@@ -12882,6 +10837,10 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
             "originY": {
               "type": "number",
               "description": "First hole's centre from the outline's lower edge, in `lengthUnit`."
+            },
+            "rows": {
+              "type": "number",
+              "description": "Count of rows of holes."
             },
             "pitchX": {
               "type": "number",
@@ -12898,9 +10857,9 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
           },
           "required": [
             "columns",
-            "rows",
             "originX",
             "originY",
+            "rows",
             "pitchX",
             "pitchY",
             "diameter"

@@ -24,6 +24,7 @@ import { RailsRepository, type DatumSweep, type LatestSweep, type RailRow, type 
 import { RailsService } from './rails.service.js';
 import { inLengthUnit, storedSweepResult, summaryReadable } from './rail.mapper.js';
 import { UNREADABLE_INPUT } from '../common/stored-result.js';
+import type { ParallelismResponse, RailHeightDifference } from './parallelism-response.js';
 
 /** In the target's own length unit, so a result reads beside its target. */
 function inUnit(mm: number, t: TargetValue) {
@@ -121,7 +122,7 @@ export class RailChecksService implements OnModuleInit {
   }
 
   /** GET /api/rails/:id/parallelism: this rail is A, its partner B. */
-  async parallelismOf(actor: SessionUser, railId: string) {
+  async parallelismOf(actor: SessionUser, railId: string): Promise<ParallelismResponse> {
     const rail = await this.rails.findRow(actor, railId);
     const machine = await this.machines.getRef(actor, rail.machineId);
     const targets = await this.targetsOf(actor.workshopId, machine.targetSetId);
@@ -152,7 +153,7 @@ export class RailChecksService implements OnModuleInit {
       targets,
     );
     const out = j.parallelism;
-    const height = {
+    const height: RailHeightDifference = {
       measured: j.height.measured,
       reason: j.height.reason ?? null,
       datum: j.height.datum ?? null,

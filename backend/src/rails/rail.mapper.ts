@@ -88,7 +88,7 @@ export interface RailResponse {
 export interface SweepSummary {
   id: string;
   takenAt: string;
-  phase: string;
+  phase: SweepRow['phase'];
   datum: string | null;
   /** Straightness about the least-squares line, in mm; null when the stored result cannot be read (see `unreadable`). */
   leastSquaresStraightness: number | null;

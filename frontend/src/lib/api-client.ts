@@ -1,9 +1,9 @@
 import createClient, { type Middleware } from 'openapi-fetch';
 import type { paths } from './api/schema';
 
-import { apiErrorOf, noAnswer, safeParse, sendTo } from './api/fetch-json';
+import { apiErrorOf, noAnswer, safeParse } from './api/fetch-json';
 
-export { ApiError, apiErrorOf, NO_ANSWER_MESSAGE, onNoAnswer, sendTo } from './api/fetch-json';
+export { ApiError, apiErrorOf, NO_ANSWER_MESSAGE, onNoAnswer } from './api/fetch-json';
 
 /** No answer at all and refusals both end as ApiError, so a caller only ever sees the answer's data. */
 const answersOrApiError: Middleware = {
@@ -28,12 +28,3 @@ client.use(answersOrApiError);
 export async function answer<T>(call: Promise<{ data?: T }>): Promise<T> {
   return (await call).data as T;
 }
-
-/** Untyped calls, left only where a feature still uses its own copies of the server's shapes. */
-export const api = {
-  get: <T>(path: string) => sendTo<T>('GET', path),
-  post: <T>(path: string, json?: unknown) => sendTo<T>('POST', path, json ?? {}),
-  put: <T>(path: string, json: unknown) => sendTo<T>('PUT', path, json),
-  patch: <T>(path: string, json: unknown) => sendTo<T>('PATCH', path, json),
-  delete: <T>(path: string) => sendTo<T>('DELETE', path),
-};

@@ -15,24 +15,9 @@ export type BlockingCheck = Readiness['blocking'][number];
 export type Approval = Schemas['ApprovalResponse'];
 export type DriftSide = Schemas['DriftSide'];
 
-/** Written here while the description gives the drift's answer as `{ approval: unknown; rows: unknown[] }` or the full one. */
-export interface DriftRow {
-  key: string;
-  kind: CheckKind;
-  subject: string;
-  target: Target | null;
-  approved: DriftSide | null;
-  latest: DriftSide | null;
-  change: number | null;
-  unit: string | null;
-  rechecked: boolean;
-  worse: boolean;
-}
-
-export interface Drift {
-  approval: { id: string; approvedAt: string; approvedBy: string; recordHash: string } | null;
-  rows: DriftRow[];
-}
+/** What drifted since the latest approval: each check's approved result beside its latest (no approval: null, no rows). */
+export type Drift = Schemas['DriftResponse'];
+export type DriftRow = Schemas['DriftRow'];
 
 export const KIND_LABELS: Record<CheckKind, string> = CHECK_KIND_LABELS;
 

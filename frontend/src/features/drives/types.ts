@@ -1,5 +1,4 @@
 import type { AnswerOf, Schemas } from '../../lib/api/schemas';
-import type { LengthUnit } from '../../lib/units';
 
 export type Drive = Schemas['DriveRecord'];
 export type DriveType = Drive['type'];
@@ -24,104 +23,18 @@ export const SCALE_MATERIAL_LABELS: Record<ScaleMaterial, string> = {
   invar: 'Invar',
 };
 
+/** A trial with its moves and fit: moves in lengthUnit, readings in readingUnit. */
+export type TravelTrial = AnswerOf<'/api/axes/{id}/travel-trials/{trialId}', 'get'>;
+/** A run with its deviations (readingUnit) at its targets (lengthUnit) and its per-target results. */
+export type PositioningRun = AnswerOf<'/api/axes/{id}/positioning-runs/{runId}', 'get'>;
+export type PositioningTargetResult = NonNullable<PositioningRun['result']>['targets'][number];
+export type Verdict = NonNullable<PositioningRun['checks']>['accuracy'];
+
 /** What a trial or run records about temperature and the instrument. */
-export interface RecordConditions {
-  machineTemperature: number | null;
-  scaleTemperature: number | null;
-  scaleMaterial: ScaleMaterial | null;
-  instrumentResolution: number | null;
-  thermal: ThermalReference | null;
-}
-
-export interface TravelTrial extends RecordConditions {
-  id: string;
-  axisId: string;
-  lengthUnit: LengthUnit;
-  readingUnit: LengthUnit;
-  warnings: ResultWarning[];
-  stepsPerMmUsed: number;
-  throughOrigin: boolean;
-  moves: { commanded: number; measured: number }[];
-  result: {
-    correctedStepsPerMm: number;
-    errorPercent: number;
-    scale: number;
-    offset: number;
-    residuals: number[];
-    residualMax: number;
-    moves: { commanded: number; measured: number; error: number; residual: number }[];
-    theoryDifferencePercent: number | null;
-    farFromTheory: boolean;
-    thermalCorrectionPercent: number;
-  } | null;
-  /** Present when the stored result cannot be read (result is then null). */
-  unreadable?: string;
-  status: 'within-target' | 'outside-target';
-  target: TargetValue;
-  notes: string;
-  recordedBy: string;
-  recordedAt: string;
-  appliedAt: string | null;
-  appliedBy: string | null;
-  locked: boolean;
-}
-
-export interface PositioningTargetResult {
-  target: number;
-  meanUp: number;
-  meanDown: number;
-  mean: number;
-  reversal: number;
-  sUp: number;
-  sDown: number;
-  repeatabilityUp: number;
-  repeatabilityDown: number;
-  repeatability: number;
-}
-
-export interface Verdict {
-  value: number;
-  target: TargetValue;
-  targetMm: number;
-  pass: boolean;
-}
-
-export interface PositioningRun extends RecordConditions {
-  id: string;
-  axisId: string;
-  lengthUnit: LengthUnit;
-  readingUnit: LengthUnit;
-  warnings: ResultWarning[];
-  targets: number[];
-  runs: { direction: 'up' | 'down'; deviations: number[] }[];
-  result: {
-    accuracy: number;
-    accuracyUp: number;
-    accuracyDown: number;
-    repeatability: number;
-    repeatabilityUp: number;
-    repeatabilityDown: number;
-    reversal: number;
-    reversalMean: number;
-    systematic: number;
-    systematicUp: number;
-    systematicDown: number;
-    meanRange: number;
-    runsUp: number;
-    runsDown: number;
-    targets: PositioningTargetResult[];
-    warnings: ResultWarning[];
-    thermalCorrectionMax: number;
-  } | null;
-  /** null with `result` when the stored result cannot be read (then `unreadable` says so). */
-  checks: { accuracy: Verdict; repeatability: Verdict; reversal: Verdict } | null;
-  unreadable?: string;
-  status: 'within-target' | 'outside-target';
-  notes: string;
-  recordedBy: string;
-  recordedAt: string;
-  locked: boolean;
-}
+export type RecordConditions = Pick<
+  TravelTrial,
+  'machineTemperature' | 'scaleTemperature' | 'scaleMaterial' | 'instrumentResolution' | 'thermal'
+>;
 
 export const DRIVE_LABELS: Record<DriveType, string> = { screw: 'Screw', belt: 'Belt', rack: 'Rack and pinion' };
 export const MOUNTING_LABELS: Record<Mounting, string> = {

@@ -12,19 +12,8 @@ export type CircleEntry = NonNullable<HolePattern['circle']>;
 export type HoleMm = Schemas['StoredHole'];
 export type PatternPreview = Schemas['PatternPreviewResponse'];
 
-/** Written here until the description gives HoleDto its x and y, and the grid and circle their origin and centre. */
-export interface PatternInput {
-  name: string;
-  reference: PatternReference;
-  lengthUnit: PatternUnit;
-  width: number;
-  height: number;
-  entry: PatternEntry;
-  holes?: HoleEntry[];
-  grid?: GridEntry;
-  circle?: CircleEntry;
-  notes?: string;
-}
+/** A pattern as sent (to save or preview): the outline and every coordinate in lengthUnit. */
+export type PatternInput = Schemas['HolePatternDto'];
 
 /** A rail as the templates tab needs it: the server derives its holes. */
 export type RailForTemplate = Pick<Schemas['RailResponse'], 'id' | 'label' | 'axis' | 'lengthMm' | 'holes'>;

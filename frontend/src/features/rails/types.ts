@@ -13,8 +13,8 @@ export type ResultWarning = Schemas['ResultWarning'];
 export type FitLine = Schemas['StoredLine'];
 export type LocalSlope = Schemas['StoredLocalSlope'];
 export type StraightnessResult = Schemas['StoredSweepResult'];
-/** A sweep as the rail's list gives it: the summary, no readings (useSweep has them). The phase is narrowed until the description lists its values. */
-export type SweepListItem = Omit<Schemas['SweepListItem'], 'phase'> & { phase: SweepPhase };
+/** A sweep as the rail's list gives it: the summary, no readings (useSweep has them). */
+export type SweepListItem = Schemas['SweepListItem'];
 
 export const FACE_LABELS: Record<SweepFace, string> = {
   side: 'Side face (sideways straightness)',
@@ -34,34 +34,8 @@ export type NewSweep = Omit<Schemas['CreateSweepDto'], 'id'> &
 /** One station of a sweep: its position in `lengthUnit`, its reading in `readingUnit`. */
 export type Station = Schemas['StationDto'];
 
-export interface Parallelism {
-  railId: string;
-  partnerRailId: string | null;
-  status: SweepStatus | 'not-comparable';
-  reason?: string;
-  datum?: string;
-  parallelism?: number;
-  meanOffset?: number;
-  positions?: number[];
-  differences?: number[];
-  face?: SweepFace;
-  parallelismWithin?: boolean | null;
-  heightDifferenceWithin?: boolean | null;
-  height?: {
-    measured: boolean;
-    reason: string | null;
-    datum: string | null;
-    worst: number | null;
-    at: number | null;
-    spacing: number | null;
-    kUmPerMm: number | null;
-    permissible: number | null;
-    targetText: string | null;
-    within: boolean | null;
-  };
-  warnings: ResultWarning[];
-  targets: { parallelism: TargetValue; heightDifference: TargetValue & { source?: string } };
-}
+/** A rail's pair: no partner, not comparable yet, judged on parallelism, or on height alone; lengths in mm. */
+export type Parallelism = AnswerOf<'/api/rails/{id}/parallelism', 'get'>;
 
 export type BoltTorques = AnswerOf<'/api/rails/bolt-torques', 'get'>;
 

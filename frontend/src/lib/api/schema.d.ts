@@ -1477,6 +1477,10 @@ export interface paths {
 export type webhooks = Record<string, never>;
 export interface components {
     schemas: {
+        LoginDto: {
+            email: string;
+            password: string;
+        };
         ForgotPasswordDto: {
             /** Format: email */
             email: string;
@@ -1530,20 +1534,36 @@ export interface components {
             /** Format: uuid */
             targetSetId?: string;
         };
+        TargetValueDto: {
+            /** @description 0 or more, in `unit`. */
+            value: number;
+            /**
+             * @description A length unit for a length target; mm/m, %, days or um/mm as the target's key needs.
+             * @enum {string}
+             */
+            unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
+            /** @description Where the value comes from, at most 500 characters. */
+            source?: string;
+            /**
+             * @description The line straightness is judged from; read on railStraightness only.
+             * @enum {string}
+             */
+            reference?: "minimum-zone" | "least-squares";
+        };
         CreateTargetSetDto: {
-            name: string;
-            description?: string;
             /** @description Keyed by target name; checked one by one in the service, which names any bad entry. */
             targets: {
-                [key: string]: unknown;
+                [key: string]: components["schemas"]["TargetValueDto"];
             };
+            name: string;
+            description?: string;
         };
         UpdateTargetSetDto: {
+            targets?: {
+                [key: string]: components["schemas"]["TargetValueDto"];
+            };
             name?: string;
             description?: string;
-            targets?: {
-                [key: string]: unknown;
-            };
         };
         /**
          * @description A reading unit (1 in = 25.4 mm exactly, 1 thou = 0.001 in, um = µm): the unit of indicator readings, deviations and heights.
@@ -2442,7 +2462,7 @@ export interface components {
             kind: "positioning" | "rail-straightness" | "travel-trial" | "diagonal-check" | "bed-grid" | "test-cut" | "safety-walk" | "rail-parallelism" | "backlash" | "speed-check" | "travel-envelope";
             subject: string;
             /** @enum {string} */
-            status: "outside-target" | "not-started";
+            status: "not-started" | "outside-target";
         };
         MachineResponse: {
             id: string;
@@ -2575,7 +2595,8 @@ export interface components {
         SweepSummary: {
             id: string;
             takenAt: string;
-            phase: string;
+            /** @enum {string} */
+            phase: "as-found" | "as-left";
             datum: string | null;
             /** @description Straightness about the least-squares line, in mm; null when the stored result cannot be read (see `unreadable`). */
             leastSquaresStraightness: number | null;
@@ -2646,6 +2667,122 @@ export interface components {
             /** @description Present when the stored geometry cannot be read: holes is then empty. */
             unreadable?: string;
         };
+        /** @description A rail without a partner: nothing to compare. */
+        ParallelismWithoutPartner: {
+            railId: string;
+            partnerRailId: unknown;
+            /** @enum {string} */
+            status: "not-comparable";
+            reason: string;
+            targets: components["schemas"]["ParallelismTargets"];
+            warnings: components["schemas"]["ResultWarning"][];
+        };
+        /** @description The two targets a rail pair is judged against. */
+        ParallelismTargets: {
+            parallelism: components["schemas"]["ParallelismTargetShown"];
+            heightDifference: {
+                /** @description In the `unit` beside it. */
+                value: number;
+                /** @enum {string} */
+                unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
+                source: string;
+            };
+        };
+        /** @description A target as the parallelism answer shows it: value and unit only. */
+        ParallelismTargetShown: {
+            /** @description In the `unit` beside it. */
+            value: number;
+            /** @enum {string} */
+            unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
+        };
+        /** @description A pair whose sweeps cannot be compared yet (or whose latest sweep cannot be read: `unreadable`). */
+        ParallelismNotComparable: {
+            /** @enum {string} */
+            status: "not-comparable";
+            reason: string;
+            unreadable?: string;
+            railId: string;
+            partnerRailId: string;
+            targets: components["schemas"]["ParallelismTargets"];
+            /** @description The sweeps of this rail (a) and its partner (b) the comparison used. */
+            sweeps: {
+                a: string | null;
+                b: string | null;
+            };
+            height: components["schemas"]["RailHeightDifference"];
+            warnings: components["schemas"]["ResultWarning"][];
+        };
+        /** @description The height difference of the pair, from top-face sweeps; every length in mm. */
+        RailHeightDifference: {
+            measured: boolean;
+            /** @description Why there is no height (when not measured). */
+            reason: string | null;
+            datum: string | null;
+            /** @description Largest height difference, mm. */
+            worst: number | null;
+            /** @description The same with its sign, mm. */
+            worstSigned: number | null;
+            /** @description Where along the rail the largest difference is, mm. */
+            at: number | null;
+            /** @description Difference at each station, mm. */
+            differences: number[] | null;
+            /** @description Rail spacing, mm. */
+            spacing: number | null;
+            /** @description In µm per mm. */
+            kUmPerMm: number | null;
+            /** @description Permissible height difference, mm (null when the spacing is missing). */
+            permissible: number | null;
+            targetText: string | null;
+            within: boolean | null;
+            unit: string;
+        };
+        /** @description A pair judged on its parallelism (and its height difference when measured); lengths in mm. */
+        ParallelismMeasured: {
+            /** @enum {string} */
+            status: "within-target" | "outside-target";
+            datum: string;
+            /** @enum {string} */
+            face: "side" | "top";
+            /** @description Parallelism of the pair, mm. */
+            parallelism: number;
+            /** @description Mean offset between the rails, mm. */
+            meanOffset: number;
+            /** @description Stations compared, mm along the rail. */
+            positions: number[];
+            /** @description Difference at each station, mm. */
+            differences: number[];
+            parallelismWithin: boolean | null;
+            heightDifferenceWithin: boolean | null;
+            railId: string;
+            partnerRailId: string;
+            targets: components["schemas"]["ParallelismTargets"];
+            /** @description The sweeps of this rail (a) and its partner (b) the comparison used. */
+            sweeps: {
+                a: string | null;
+                b: string | null;
+            };
+            height: components["schemas"]["RailHeightDifference"];
+            warnings: components["schemas"]["ResultWarning"][];
+        };
+        /** @description A pair judged on its height difference alone: the side-face sweeps cannot be compared (`reason`). */
+        ParallelismByHeightOnly: {
+            /** @enum {string} */
+            status: "within-target" | "outside-target";
+            reason: string;
+            parallelism: unknown;
+            parallelismWithin: unknown;
+            heightDifferenceWithin: boolean | null;
+            railId: string;
+            partnerRailId: string;
+            targets: components["schemas"]["ParallelismTargets"];
+            /** @description The sweeps of this rail (a) and its partner (b) the comparison used. */
+            sweeps: {
+                a: string | null;
+                b: string | null;
+            };
+            height: components["schemas"]["RailHeightDifference"];
+            warnings: components["schemas"]["ResultWarning"][];
+        };
         /** @description A sweep in its rail's list: the summary and what the history table shows, no readings (GET /api/sweeps/:id has them). */
         SweepListItem: {
             railId: string;
@@ -2657,7 +2794,8 @@ export interface components {
             locked: boolean;
             id: string;
             takenAt: string;
-            phase: string;
+            /** @enum {string} */
+            phase: "as-found" | "as-left";
             datum: string | null;
             /** @description Straightness about the least-squares line, in mm; null when the stored result cannot be read (see `unreadable`). */
             leastSquaresStraightness: number | null;
@@ -2876,6 +3014,59 @@ export interface components {
             /** @description Present when the stored hole positions, band or readings cannot be read: holes is then empty. */
             unreadable?: string;
         };
+        DiagonalCheckResponse: {
+            /** @description Smallest step of the tape or rule, in lengthUnit (null: not recorded). */
+            resolution: number | null;
+            /** @description As entered, in lengthUnit. */
+            input: components["schemas"]["DiagonalLengths"];
+            /** @description The same in mm. */
+            inputMm: components["schemas"]["DiagonalLengthsMm"];
+            result: components["schemas"]["DiagonalCheckResult"] | null;
+            /** @description Present when the record's stored measurements cannot be read (result is then null). */
+            unreadable?: string;
+            id: string;
+            machineId: string;
+            /** @description Unit the record's lengths were entered in and are given back in. */
+            lengthUnit: components["schemas"]["LengthUnit"];
+            note: string;
+            recordedBy: {
+                id: string | null;
+                name: string;
+            };
+            recordedAt: string;
+            /** @enum {string} */
+            status: "within-target" | "outside-target";
+            target: components["schemas"]["JudgedTarget"];
+            locked: boolean;
+            /** @description What a person should know about the result (empty when none). */
+            warnings: components["schemas"]["ResultWarning"][];
+        };
+        /** @description A diagonal check's lengths as entered. */
+        DiagonalLengths: {
+            /** @description Side along X, in the record's `lengthUnit`. */
+            sideX: number | null;
+            /** @description Side along Y, in the record's `lengthUnit`. */
+            sideY: number | null;
+            /** @description Diagonal from the X0 Y0 corner, in the record's `lengthUnit`. */
+            diagonal1: number | null;
+            /** @description The other diagonal, in the record's `lengthUnit`. */
+            diagonal2: number | null;
+            /** @description Distance between the gantry's two bearing rails, in the record's `lengthUnit`. */
+            gantrySpan: number | null;
+        };
+        /** @description The same lengths in mm. */
+        DiagonalLengthsMm: {
+            /** @description Side along X, mm. */
+            sideX: number | null;
+            /** @description Side along Y, mm. */
+            sideY: number | null;
+            /** @description Diagonal from the X0 Y0 corner, mm. */
+            diagonal1: number | null;
+            /** @description The other diagonal, mm. */
+            diagonal2: number | null;
+            /** @description Distance between the gantry's two bearing rails, mm. */
+            gantrySpan: number | null;
+        };
         DiagonalCheckResult: {
             correction: components["schemas"]["SquaringCorrection"];
             /** @description In degrees. */
@@ -2923,6 +3114,46 @@ export interface components {
             source?: string;
             /** @enum {string} */
             reference?: "minimum-zone" | "least-squares";
+        };
+        BedGridResponse: {
+            /** @description Unit the heights (and the gauge's resolution) were read in and are given back in. */
+            readingUnit: components["schemas"]["ReadingUnit"];
+            /** @description Smallest step of the gauge, in readingUnit (null: not recorded). */
+            resolution: number | null;
+            /** @description Count of rows of the grid (along Y). */
+            rows: number | null;
+            /** @description Count of columns of the grid (along X). */
+            columns: number | null;
+            points: components["schemas"]["BedGridPointEntered"][];
+            /** @description In mm. */
+            result: components["schemas"]["BedGridResult"] | null;
+            /** @description Present when the record's stored measurements cannot be read (result is then null). */
+            unreadable?: string;
+            id: string;
+            machineId: string;
+            /** @description Unit the record's lengths were entered in and are given back in. */
+            lengthUnit: components["schemas"]["LengthUnit"];
+            note: string;
+            recordedBy: {
+                id: string | null;
+                name: string;
+            };
+            recordedAt: string;
+            /** @enum {string} */
+            status: "within-target" | "outside-target";
+            target: components["schemas"]["JudgedTarget"];
+            locked: boolean;
+            /** @description What a person should know about the result (empty when none). */
+            warnings: components["schemas"]["ResultWarning"][];
+        };
+        /** @description One point of a bed grid as entered: position in lengthUnit, height in readingUnit. */
+        BedGridPointEntered: {
+            /** @description Position along X, in the record's `lengthUnit`. */
+            x: number | null;
+            /** @description Position along Y, in the record's `lengthUnit`. */
+            y: number | null;
+            /** @description Height read, in the record's `readingUnit`. */
+            z: number | null;
         };
         BedGridResult: {
             leastSquares: {
@@ -3000,6 +3231,76 @@ export interface components {
             zoneResidualMm: number;
             /** @description Height above the lower bound of the judged zone, mm (0 … judged value): what the bed map draws. */
             judgedHeightMm: number;
+        };
+        TestCutResponse: {
+            targets: components["schemas"]["TestCutTargets"];
+            /** @description Plate thickness in lengthUnit (null: not recorded). */
+            plateThickness: number | null;
+            /** @description In mm. */
+            plateThicknessMm: number | null;
+            /** @description Smallest step of the caliper or rule, in lengthUnit (null: not recorded). */
+            resolution: number | null;
+            nominal: components["schemas"]["TestCutNominal"];
+            measured: components["schemas"]["TestCutMeasured"];
+            /** @enum {string|null} */
+            circleKind: "hole" | "disc" | null;
+            /** @description The controller's steps per mm for X and Y when the part was cut (null where not recorded). */
+            stepsPerMm: {
+                /** @description Steps per mm of axis X when the cut was made (null when not given). */
+                x: number | null;
+                /** @description Steps per mm of axis Y when the cut was made (null when not given). */
+                y: number | null;
+            } | null;
+            result: components["schemas"]["TestCutResult"] | null;
+            /** @description Present when the record's stored measurements cannot be read (result is then null). */
+            unreadable?: string;
+            id: string;
+            machineId: string;
+            /** @description Unit the record's lengths were entered in and are given back in. */
+            lengthUnit: components["schemas"]["LengthUnit"];
+            note: string;
+            recordedBy: {
+                id: string | null;
+                name: string;
+            };
+            recordedAt: string;
+            /** @enum {string} */
+            status: "within-target" | "outside-target";
+            target: components["schemas"]["JudgedTarget"];
+            locked: boolean;
+            /** @description What a person should know about the result (empty when none). */
+            warnings: components["schemas"]["ResultWarning"][];
+        };
+        /** @description The two targets a test cut is judged against: part size and squareness. */
+        TestCutTargets: {
+            part: components["schemas"]["JudgedTarget"];
+            squareness: components["schemas"]["JudgedTarget"];
+        };
+        /** @description The sizes the test cut was commanded at, in lengthUnit. */
+        TestCutNominal: {
+            /** @description Commanded size of the square along X, in the record's `lengthUnit`. */
+            x: number | null;
+            /** @description Commanded size of the square along Y, in the record's `lengthUnit`. */
+            y: number | null;
+            /** @description Commanded diameter of the circle, in the record's `lengthUnit`. */
+            circle: number | null;
+        };
+        /** @description The sizes measured on the cut part, in lengthUnit. */
+        TestCutMeasured: {
+            /** @description Measured size of the square along X, in the record's `lengthUnit`. */
+            x: number | null;
+            /** @description Measured size of the square along Y, in the record's `lengthUnit`. */
+            y: number | null;
+            /** @description Measured diagonal from the X0 Y0 corner, in the record's `lengthUnit`. */
+            diagonal1: number | null;
+            /** @description Measured other diagonal, in the record's `lengthUnit`. */
+            diagonal2: number | null;
+            /** @description Measured diameter of the circle along X, in the record's `lengthUnit`. */
+            circleX: number | null;
+            /** @description Measured diameter of the circle along Y, in the record's `lengthUnit`. */
+            circleY: number | null;
+            /** @description Width of cut the controller did not compensate for, in the record's `lengthUnit`. */
+            kerf: number | null;
         };
         TestCutResult: {
             /** @description Scale error of axis X, % (the test cut's errorPercent along X). */
@@ -3162,7 +3463,7 @@ export interface components {
         };
         AxisCheckSummary: {
             /** @enum {string} */
-            status: "within-target" | "outside-target" | "not-started" | "not-applicable";
+            status: "not-started" | "within-target" | "outside-target" | "not-applicable";
             summary: string;
             /** @description The result in a few words for a table cell ("−0.201 %"), or null when nothing is recorded. */
             headline: string | null;
@@ -3221,7 +3522,7 @@ export interface components {
         TravelEnvelopeResponse: {
             machineId: string;
             /** @enum {string} */
-            status: "within-target" | "outside-target" | "not-started";
+            status: "not-started" | "within-target" | "outside-target";
             /** @description The machine's work area along X and Y, in mm. */
             workArea: {
                 /** @description Along X, mm. */
@@ -3274,7 +3575,7 @@ export interface components {
             axisId: string;
             applicable: boolean;
             /** @enum {string} */
-            status: "within-target" | "outside-target" | "not-started" | "not-applicable";
+            status: "not-started" | "within-target" | "outside-target" | "not-applicable";
             /** @description Why the check cannot run (or does not apply), in words. */
             reason: string | null;
             missing: string[];
@@ -3404,9 +3705,45 @@ export interface components {
             /** @description Value now (null when absent now). */
             current: unknown;
         };
+        /** @description "What drifted" since the latest approval (no approval: null and no rows). */
+        DriftResponse: {
+            approval: components["schemas"]["DriftApproval"] | null;
+            rows: components["schemas"]["DriftRow"][];
+        };
+        /** @description The approval the drift is measured from. */
+        DriftApproval: {
+            id: string;
+            approvedAt: string;
+            approvedBy: string;
+            recordHash: string;
+        };
+        /** @description One check: what the approval stood on beside its latest result. */
+        DriftRow: {
+            key: string;
+            /** @enum {string} */
+            kind: "positioning" | "rail-straightness" | "travel-trial" | "diagonal-check" | "bed-grid" | "test-cut" | "safety-walk" | "rail-parallelism" | "backlash" | "speed-check" | "travel-envelope";
+            subject: string;
+            target: {
+                /** @description In the `unit` stored beside it. */
+                value: number;
+                /** @enum {string} */
+                unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
+                source?: string;
+                /** @enum {string} */
+                reference?: "minimum-zone" | "least-squares";
+                label?: string;
+            } | null;
+            approved: components["schemas"]["DriftSide"] | null;
+            latest: components["schemas"]["DriftSide"] | null;
+            /** @description Latest minus approved, in the `unit` beside it; null when either is missing or nothing new was recorded. */
+            change: number | null;
+            unit: string | null;
+            rechecked: boolean;
+            worse: boolean;
+        };
         DriftSide: {
             /** @enum {string} */
-            status: "within-target" | "outside-target" | "not-started" | "waived";
+            status: "not-started" | "within-target" | "outside-target" | "waived";
             result: {
                 /** @description In the `unit` stored beside it. */
                 value: number;
@@ -3447,12 +3784,12 @@ export interface components {
             grid: {
                 /** @description Count of columns of holes. */
                 columns: number;
-                /** @description Count of rows of holes. */
-                rows: number;
                 /** @description First hole's centre from the outline's left edge, in `lengthUnit`. */
                 originX: number;
                 /** @description First hole's centre from the outline's lower edge, in `lengthUnit`. */
                 originY: number;
+                /** @description Count of rows of holes. */
+                rows: number;
                 /** @description Distance between columns, in `lengthUnit`. */
                 pitchX: number;
                 /** @description Distance between rows, in `lengthUnit`. */
@@ -3561,7 +3898,11 @@ export interface operations {
             path?: never;
             cookie?: never;
         };
-        requestBody?: never;
+        requestBody: {
+            content: {
+                "application/json": components["schemas"]["LoginDto"];
+            };
+        };
         responses: {
             /** @description Done. */
             200: {
@@ -6312,238 +6653,7 @@ export interface operations {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": {
-                        railId: string;
-                        partnerRailId: unknown;
-                        /** @enum {string} */
-                        status: "not-comparable";
-                        reason: string;
-                        targets: {
-                            parallelism: {
-                                /** @description In the `unit` stored beside it. */
-                                value: number;
-                                /** @enum {string} */
-                                unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
-                            };
-                            heightDifference: {
-                                source: string;
-                                /** @description In the `unit` stored beside it. */
-                                value: number;
-                                /** @enum {string} */
-                                unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
-                            };
-                        };
-                        warnings: unknown[];
-                    } | {
-                        /** @enum {string} */
-                        status: "not-comparable";
-                        reason: string;
-                        railId: string;
-                        partnerRailId: string;
-                        targets: {
-                            parallelism: {
-                                /** @description In the `unit` stored beside it. */
-                                value: number;
-                                /** @enum {string} */
-                                unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
-                            };
-                            heightDifference: {
-                                source: string;
-                                /** @description In the `unit` stored beside it. */
-                                value: number;
-                                /** @enum {string} */
-                                unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
-                            };
-                        };
-                        sweeps: {
-                            a: string | null;
-                            b: string | null;
-                        };
-                        height: {
-                            measured: boolean;
-                            reason: string | null;
-                            datum: string | null;
-                            /** @description Largest height difference between the rails, mm. */
-                            worst: number | null;
-                            /** @description The same with its sign, mm. */
-                            worstSigned: number | null;
-                            /** @description Where it was found along the rails, mm. */
-                            at: number | null;
-                            /** @description Height difference at each compared position, mm. */
-                            differences: number[] | null;
-                            /** @description Distance between the rails, mm. */
-                            spacing: number | null;
-                            /** @description In µm per mm. */
-                            kUmPerMm: number | null;
-                            /** @description Permissible height difference (spacing × K), mm. */
-                            permissible: number | null;
-                            targetText: string | null;
-                            within: boolean | null;
-                            unit: string;
-                        };
-                        warnings: components["schemas"]["ResultWarning"][];
-                    } | {
-                        /** @enum {string} */
-                        status: "not-comparable";
-                        reason: string;
-                        unreadable: string;
-                        railId: string;
-                        partnerRailId: string;
-                        targets: {
-                            parallelism: {
-                                /** @description In the `unit` stored beside it. */
-                                value: number;
-                                /** @enum {string} */
-                                unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
-                            };
-                            heightDifference: {
-                                source: string;
-                                /** @description In the `unit` stored beside it. */
-                                value: number;
-                                /** @enum {string} */
-                                unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
-                            };
-                        };
-                        sweeps: {
-                            a: string | null;
-                            b: string | null;
-                        };
-                        height: {
-                            measured: boolean;
-                            reason: string | null;
-                            datum: string | null;
-                            /** @description Largest height difference between the rails, mm. */
-                            worst: number | null;
-                            /** @description The same with its sign, mm. */
-                            worstSigned: number | null;
-                            /** @description Where it was found along the rails, mm. */
-                            at: number | null;
-                            /** @description Height difference at each compared position, mm. */
-                            differences: number[] | null;
-                            /** @description Distance between the rails, mm. */
-                            spacing: number | null;
-                            /** @description In µm per mm. */
-                            kUmPerMm: number | null;
-                            /** @description Permissible height difference (spacing × K), mm. */
-                            permissible: number | null;
-                            targetText: string | null;
-                            within: boolean | null;
-                            unit: string;
-                        };
-                        warnings: components["schemas"]["ResultWarning"][];
-                    } | {
-                        heightDifferenceWithin: boolean | null;
-                        datum: string;
-                        /** @enum {string} */
-                        face: "side" | "top";
-                        /** @description Parallelism of the two rails, mm. */
-                        parallelism: number;
-                        /** @description Mean of the differences between the rails, mm. */
-                        meanOffset: number;
-                        /** @description Positions along the rails the two sweeps are compared at, mm. */
-                        positions: number[];
-                        /** @description Difference between the rails at each position, mm. */
-                        differences: number[];
-                        parallelismWithin: boolean | null;
-                        /** @enum {string} */
-                        status: "within-target" | "outside-target";
-                        railId: string;
-                        partnerRailId: string;
-                        targets: {
-                            parallelism: {
-                                /** @description In the `unit` stored beside it. */
-                                value: number;
-                                /** @enum {string} */
-                                unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
-                            };
-                            heightDifference: {
-                                source: string;
-                                /** @description In the `unit` stored beside it. */
-                                value: number;
-                                /** @enum {string} */
-                                unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
-                            };
-                        };
-                        sweeps: {
-                            a: string | null;
-                            b: string | null;
-                        };
-                        height: {
-                            measured: boolean;
-                            reason: string | null;
-                            datum: string | null;
-                            /** @description Largest height difference between the rails, mm. */
-                            worst: number | null;
-                            /** @description The same with its sign, mm. */
-                            worstSigned: number | null;
-                            /** @description Where it was found along the rails, mm. */
-                            at: number | null;
-                            /** @description Height difference at each compared position, mm. */
-                            differences: number[] | null;
-                            /** @description Distance between the rails, mm. */
-                            spacing: number | null;
-                            /** @description In µm per mm. */
-                            kUmPerMm: number | null;
-                            /** @description Permissible height difference (spacing × K), mm. */
-                            permissible: number | null;
-                            targetText: string | null;
-                            within: boolean | null;
-                            unit: string;
-                        };
-                        warnings: components["schemas"]["ResultWarning"][];
-                        reason?: unknown;
-                    } | {
-                        heightDifferenceWithin: boolean | null;
-                        reason: string;
-                        parallelism: unknown;
-                        parallelismWithin: unknown;
-                        /** @enum {string} */
-                        status: "within-target" | "outside-target";
-                        railId: string;
-                        partnerRailId: string;
-                        targets: {
-                            parallelism: {
-                                /** @description In the `unit` stored beside it. */
-                                value: number;
-                                /** @enum {string} */
-                                unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
-                            };
-                            heightDifference: {
-                                source: string;
-                                /** @description In the `unit` stored beside it. */
-                                value: number;
-                                /** @enum {string} */
-                                unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
-                            };
-                        };
-                        sweeps: {
-                            a: string | null;
-                            b: string | null;
-                        };
-                        height: {
-                            measured: boolean;
-                            reason: string | null;
-                            datum: string | null;
-                            /** @description Largest height difference between the rails, mm. */
-                            worst: number | null;
-                            /** @description The same with its sign, mm. */
-                            worstSigned: number | null;
-                            /** @description Where it was found along the rails, mm. */
-                            at: number | null;
-                            /** @description Height difference at each compared position, mm. */
-                            differences: number[] | null;
-                            /** @description Distance between the rails, mm. */
-                            spacing: number | null;
-                            /** @description In µm per mm. */
-                            kUmPerMm: number | null;
-                            /** @description Permissible height difference (spacing × K), mm. */
-                            permissible: number | null;
-                            targetText: string | null;
-                            within: boolean | null;
-                            unit: string;
-                        };
-                        warnings: components["schemas"]["ResultWarning"][];
-                    };
+                    "application/json": components["schemas"]["ParallelismWithoutPartner"] | components["schemas"]["ParallelismNotComparable"] | components["schemas"]["ParallelismMeasured"] | components["schemas"]["ParallelismByHeightOnly"];
                 };
             };
             /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
@@ -7427,97 +7537,7 @@ export interface operations {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": ({
-                        unreadable: string;
-                        /** @description Smallest step of the tape or rule, in the record's `lengthUnit`. */
-                        resolution: number | null;
-                        input: {
-                            /** @description Side along X, in the record's `lengthUnit`. */
-                            sideX: number | null;
-                            /** @description Side along Y, in the record's `lengthUnit`. */
-                            sideY: number | null;
-                            /** @description Diagonal from the X0 Y0 corner, in the record's `lengthUnit`. */
-                            diagonal1: number | null;
-                            /** @description The other diagonal, in the record's `lengthUnit`. */
-                            diagonal2: number | null;
-                            /** @description Distance between the gantry's two bearing rails, in the record's `lengthUnit`. */
-                            gantrySpan: number | null;
-                        };
-                        inputMm: {
-                            /** @description Side along X, mm. */
-                            sideX: number | null;
-                            /** @description Side along Y, mm. */
-                            sideY: number | null;
-                            /** @description Diagonal from the X0 Y0 corner, mm. */
-                            diagonal1: number | null;
-                            /** @description The other diagonal, mm. */
-                            diagonal2: number | null;
-                            /** @description Distance between the gantry's two bearing rails, mm. */
-                            gantrySpan: number | null;
-                        };
-                        result: components["schemas"]["DiagonalCheckResult"] | null;
-                        id: string;
-                        machineId: string;
-                        /** @description Unit the record's lengths were entered in and are given back in. */
-                        lengthUnit: components["schemas"]["LengthUnit"];
-                        note: string;
-                        recordedBy: {
-                            id: string | null;
-                            name: string;
-                        };
-                        recordedAt: string;
-                        /** @enum {string} */
-                        status: "within-target" | "outside-target";
-                        target: components["schemas"]["JudgedTarget"];
-                        locked: boolean;
-                        /** @description What a person should know about the result (empty when none). */
-                        warnings: components["schemas"]["ResultWarning"][];
-                    } | {
-                        unreadable?: unknown;
-                        /** @description Smallest step of the tape or rule, in the record's `lengthUnit`. */
-                        resolution: number | null;
-                        input: {
-                            /** @description Side along X, in the record's `lengthUnit`. */
-                            sideX: number | null;
-                            /** @description Side along Y, in the record's `lengthUnit`. */
-                            sideY: number | null;
-                            /** @description Diagonal from the X0 Y0 corner, in the record's `lengthUnit`. */
-                            diagonal1: number | null;
-                            /** @description The other diagonal, in the record's `lengthUnit`. */
-                            diagonal2: number | null;
-                            /** @description Distance between the gantry's two bearing rails, in the record's `lengthUnit`. */
-                            gantrySpan: number | null;
-                        };
-                        inputMm: {
-                            /** @description Side along X, mm. */
-                            sideX: number | null;
-                            /** @description Side along Y, mm. */
-                            sideY: number | null;
-                            /** @description Diagonal from the X0 Y0 corner, mm. */
-                            diagonal1: number | null;
-                            /** @description The other diagonal, mm. */
-                            diagonal2: number | null;
-                            /** @description Distance between the gantry's two bearing rails, mm. */
-                            gantrySpan: number | null;
-                        };
-                        result: components["schemas"]["DiagonalCheckResult"] | null;
-                        id: string;
-                        machineId: string;
-                        /** @description Unit the record's lengths were entered in and are given back in. */
-                        lengthUnit: components["schemas"]["LengthUnit"];
-                        note: string;
-                        recordedBy: {
-                            id: string | null;
-                            name: string;
-                        };
-                        recordedAt: string;
-                        /** @enum {string} */
-                        status: "within-target" | "outside-target";
-                        target: components["schemas"]["JudgedTarget"];
-                        locked: boolean;
-                        /** @description What a person should know about the result (empty when none). */
-                        warnings: components["schemas"]["ResultWarning"][];
-                    })[];
+                    "application/json": components["schemas"]["DiagonalCheckResponse"][];
                 };
             };
             /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
@@ -7570,97 +7590,7 @@ export interface operations {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": {
-                        unreadable: string;
-                        /** @description Smallest step of the tape or rule, in the record's `lengthUnit`. */
-                        resolution: number | null;
-                        input: {
-                            /** @description Side along X, in the record's `lengthUnit`. */
-                            sideX: number | null;
-                            /** @description Side along Y, in the record's `lengthUnit`. */
-                            sideY: number | null;
-                            /** @description Diagonal from the X0 Y0 corner, in the record's `lengthUnit`. */
-                            diagonal1: number | null;
-                            /** @description The other diagonal, in the record's `lengthUnit`. */
-                            diagonal2: number | null;
-                            /** @description Distance between the gantry's two bearing rails, in the record's `lengthUnit`. */
-                            gantrySpan: number | null;
-                        };
-                        inputMm: {
-                            /** @description Side along X, mm. */
-                            sideX: number | null;
-                            /** @description Side along Y, mm. */
-                            sideY: number | null;
-                            /** @description Diagonal from the X0 Y0 corner, mm. */
-                            diagonal1: number | null;
-                            /** @description The other diagonal, mm. */
-                            diagonal2: number | null;
-                            /** @description Distance between the gantry's two bearing rails, mm. */
-                            gantrySpan: number | null;
-                        };
-                        result: components["schemas"]["DiagonalCheckResult"] | null;
-                        id: string;
-                        machineId: string;
-                        /** @description Unit the record's lengths were entered in and are given back in. */
-                        lengthUnit: components["schemas"]["LengthUnit"];
-                        note: string;
-                        recordedBy: {
-                            id: string | null;
-                            name: string;
-                        };
-                        recordedAt: string;
-                        /** @enum {string} */
-                        status: "within-target" | "outside-target";
-                        target: components["schemas"]["JudgedTarget"];
-                        locked: boolean;
-                        /** @description What a person should know about the result (empty when none). */
-                        warnings: components["schemas"]["ResultWarning"][];
-                    } | {
-                        unreadable?: unknown;
-                        /** @description Smallest step of the tape or rule, in the record's `lengthUnit`. */
-                        resolution: number | null;
-                        input: {
-                            /** @description Side along X, in the record's `lengthUnit`. */
-                            sideX: number | null;
-                            /** @description Side along Y, in the record's `lengthUnit`. */
-                            sideY: number | null;
-                            /** @description Diagonal from the X0 Y0 corner, in the record's `lengthUnit`. */
-                            diagonal1: number | null;
-                            /** @description The other diagonal, in the record's `lengthUnit`. */
-                            diagonal2: number | null;
-                            /** @description Distance between the gantry's two bearing rails, in the record's `lengthUnit`. */
-                            gantrySpan: number | null;
-                        };
-                        inputMm: {
-                            /** @description Side along X, mm. */
-                            sideX: number | null;
-                            /** @description Side along Y, mm. */
-                            sideY: number | null;
-                            /** @description Diagonal from the X0 Y0 corner, mm. */
-                            diagonal1: number | null;
-                            /** @description The other diagonal, mm. */
-                            diagonal2: number | null;
-                            /** @description Distance between the gantry's two bearing rails, mm. */
-                            gantrySpan: number | null;
-                        };
-                        result: components["schemas"]["DiagonalCheckResult"] | null;
-                        id: string;
-                        machineId: string;
-                        /** @description Unit the record's lengths were entered in and are given back in. */
-                        lengthUnit: components["schemas"]["LengthUnit"];
-                        note: string;
-                        recordedBy: {
-                            id: string | null;
-                            name: string;
-                        };
-                        recordedAt: string;
-                        /** @enum {string} */
-                        status: "within-target" | "outside-target";
-                        target: components["schemas"]["JudgedTarget"];
-                        locked: boolean;
-                        /** @description What a person should know about the result (empty when none). */
-                        warnings: components["schemas"]["ResultWarning"][];
-                    };
+                    "application/json": components["schemas"]["DiagonalCheckResponse"];
                 };
             };
             /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
@@ -7743,77 +7673,7 @@ export interface operations {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": ({
-                        unreadable: string;
-                        /** @description Unit the heights (and the gauge's resolution) were read in and are given back in. */
-                        readingUnit: components["schemas"]["ReadingUnit"];
-                        /** @description Smallest step of the height gauge, in the record's `readingUnit`. */
-                        resolution: number | null;
-                        /** @description Count of rows of the grid (along Y). */
-                        rows: number | null;
-                        /** @description Count of columns of the grid (along X). */
-                        columns: number | null;
-                        points: {
-                            /** @description Position along X, in the record's `lengthUnit`. */
-                            x: number | null;
-                            /** @description Position along Y, in the record's `lengthUnit`. */
-                            y: number | null;
-                            /** @description Height read, in the record's `readingUnit`. */
-                            z: number | null;
-                        }[];
-                        result: components["schemas"]["BedGridResult"] | null;
-                        id: string;
-                        machineId: string;
-                        /** @description Unit the record's lengths were entered in and are given back in. */
-                        lengthUnit: components["schemas"]["LengthUnit"];
-                        note: string;
-                        recordedBy: {
-                            id: string | null;
-                            name: string;
-                        };
-                        recordedAt: string;
-                        /** @enum {string} */
-                        status: "within-target" | "outside-target";
-                        target: components["schemas"]["JudgedTarget"];
-                        locked: boolean;
-                        /** @description What a person should know about the result (empty when none). */
-                        warnings: components["schemas"]["ResultWarning"][];
-                    } | {
-                        unreadable?: unknown;
-                        /** @description Unit the heights (and the gauge's resolution) were read in and are given back in. */
-                        readingUnit: components["schemas"]["ReadingUnit"];
-                        /** @description Smallest step of the height gauge, in the record's `readingUnit`. */
-                        resolution: number | null;
-                        /** @description Count of rows of the grid (along Y). */
-                        rows: number | null;
-                        /** @description Count of columns of the grid (along X). */
-                        columns: number | null;
-                        points: {
-                            /** @description Position along X, in the record's `lengthUnit`. */
-                            x: number | null;
-                            /** @description Position along Y, in the record's `lengthUnit`. */
-                            y: number | null;
-                            /** @description Height read, in the record's `readingUnit`. */
-                            z: number | null;
-                        }[];
-                        result: components["schemas"]["BedGridResult"] | null;
-                        id: string;
-                        machineId: string;
-                        /** @description Unit the record's lengths were entered in and are given back in. */
-                        lengthUnit: components["schemas"]["LengthUnit"];
-                        note: string;
-                        recordedBy: {
-                            id: string | null;
-                            name: string;
-                        };
-                        recordedAt: string;
-                        /** @enum {string} */
-                        status: "within-target" | "outside-target";
-                        target: components["schemas"]["JudgedTarget"];
-                        locked: boolean;
-                        /** @description What a person should know about the result (empty when none). */
-                        warnings: components["schemas"]["ResultWarning"][];
-                    })[];
+                    "application/json": components["schemas"]["BedGridResponse"][];
                 };
             };
             /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
@@ -7866,77 +7726,7 @@ export interface operations {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": {
-                        unreadable: string;
-                        /** @description Unit the heights (and the gauge's resolution) were read in and are given back in. */
-                        readingUnit: components["schemas"]["ReadingUnit"];
-                        /** @description Smallest step of the height gauge, in the record's `readingUnit`. */
-                        resolution: number | null;
-                        /** @description Count of rows of the grid (along Y). */
-                        rows: number | null;
-                        /** @description Count of columns of the grid (along X). */
-                        columns: number | null;
-                        points: {
-                            /** @description Position along X, in the record's `lengthUnit`. */
-                            x: number | null;
-                            /** @description Position along Y, in the record's `lengthUnit`. */
-                            y: number | null;
-                            /** @description Height read, in the record's `readingUnit`. */
-                            z: number | null;
-                        }[];
-                        result: components["schemas"]["BedGridResult"] | null;
-                        id: string;
-                        machineId: string;
-                        /** @description Unit the record's lengths were entered in and are given back in. */
-                        lengthUnit: components["schemas"]["LengthUnit"];
-                        note: string;
-                        recordedBy: {
-                            id: string | null;
-                            name: string;
-                        };
-                        recordedAt: string;
-                        /** @enum {string} */
-                        status: "within-target" | "outside-target";
-                        target: components["schemas"]["JudgedTarget"];
-                        locked: boolean;
-                        /** @description What a person should know about the result (empty when none). */
-                        warnings: components["schemas"]["ResultWarning"][];
-                    } | {
-                        unreadable?: unknown;
-                        /** @description Unit the heights (and the gauge's resolution) were read in and are given back in. */
-                        readingUnit: components["schemas"]["ReadingUnit"];
-                        /** @description Smallest step of the height gauge, in the record's `readingUnit`. */
-                        resolution: number | null;
-                        /** @description Count of rows of the grid (along Y). */
-                        rows: number | null;
-                        /** @description Count of columns of the grid (along X). */
-                        columns: number | null;
-                        points: {
-                            /** @description Position along X, in the record's `lengthUnit`. */
-                            x: number | null;
-                            /** @description Position along Y, in the record's `lengthUnit`. */
-                            y: number | null;
-                            /** @description Height read, in the record's `readingUnit`. */
-                            z: number | null;
-                        }[];
-                        result: components["schemas"]["BedGridResult"] | null;
-                        id: string;
-                        machineId: string;
-                        /** @description Unit the record's lengths were entered in and are given back in. */
-                        lengthUnit: components["schemas"]["LengthUnit"];
-                        note: string;
-                        recordedBy: {
-                            id: string | null;
-                            name: string;
-                        };
-                        recordedAt: string;
-                        /** @enum {string} */
-                        status: "within-target" | "outside-target";
-                        target: components["schemas"]["JudgedTarget"];
-                        locked: boolean;
-                        /** @description What a person should know about the result (empty when none). */
-                        warnings: components["schemas"]["ResultWarning"][];
-                    };
+                    "application/json": components["schemas"]["BedGridResponse"];
                 };
             };
             /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
@@ -8019,129 +7809,7 @@ export interface operations {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": ({
-                        unreadable: string;
-                        targets: {
-                            part: components["schemas"]["JudgedTarget"];
-                            squareness: components["schemas"]["JudgedTarget"];
-                        };
-                        /** @description Thickness of the plate cut, in the record's `lengthUnit`. */
-                        plateThickness: number | null;
-                        /** @description In mm. */
-                        plateThicknessMm: number | null;
-                        /** @description Smallest step of the caliper or rule the sizes were read with, in the record's `lengthUnit`. */
-                        resolution: number | null;
-                        nominal: {
-                            /** @description Commanded size of the square along X, in the record's `lengthUnit`. */
-                            x: number | null;
-                            /** @description Commanded size of the square along Y, in the record's `lengthUnit`. */
-                            y: number | null;
-                            /** @description Commanded diameter of the circle, in the record's `lengthUnit`. */
-                            circle: number | null;
-                        };
-                        measured: {
-                            /** @description Measured size of the square along X, in the record's `lengthUnit`. */
-                            x: number | null;
-                            /** @description Measured size of the square along Y, in the record's `lengthUnit`. */
-                            y: number | null;
-                            /** @description Measured diagonal from the X0 Y0 corner, in the record's `lengthUnit`. */
-                            diagonal1: number | null;
-                            /** @description Measured other diagonal, in the record's `lengthUnit`. */
-                            diagonal2: number | null;
-                            /** @description Measured diameter of the circle along X, in the record's `lengthUnit`. */
-                            circleX: number | null;
-                            /** @description Measured diameter of the circle along Y, in the record's `lengthUnit`. */
-                            circleY: number | null;
-                            /** @description Width of cut the controller did not compensate for, in the record's `lengthUnit`. */
-                            kerf: number | null;
-                        };
-                        /** @enum {string|null} */
-                        circleKind: "hole" | "disc" | null;
-                        stepsPerMm: {
-                            /** @description Steps per mm of axis X when the cut was made (null when not given). */
-                            x: number | null;
-                            /** @description Steps per mm of axis Y when the cut was made (null when not given). */
-                            y: number | null;
-                        } | null;
-                        result: components["schemas"]["TestCutResult"] | null;
-                        id: string;
-                        machineId: string;
-                        /** @description Unit the record's lengths were entered in and are given back in. */
-                        lengthUnit: components["schemas"]["LengthUnit"];
-                        note: string;
-                        recordedBy: {
-                            id: string | null;
-                            name: string;
-                        };
-                        recordedAt: string;
-                        /** @enum {string} */
-                        status: "within-target" | "outside-target";
-                        target: components["schemas"]["JudgedTarget"];
-                        locked: boolean;
-                        /** @description What a person should know about the result (empty when none). */
-                        warnings: components["schemas"]["ResultWarning"][];
-                    } | {
-                        unreadable?: unknown;
-                        targets: {
-                            part: components["schemas"]["JudgedTarget"];
-                            squareness: components["schemas"]["JudgedTarget"];
-                        };
-                        /** @description Thickness of the plate cut, in the record's `lengthUnit`. */
-                        plateThickness: number | null;
-                        /** @description In mm. */
-                        plateThicknessMm: number | null;
-                        /** @description Smallest step of the caliper or rule the sizes were read with, in the record's `lengthUnit`. */
-                        resolution: number | null;
-                        nominal: {
-                            /** @description Commanded size of the square along X, in the record's `lengthUnit`. */
-                            x: number | null;
-                            /** @description Commanded size of the square along Y, in the record's `lengthUnit`. */
-                            y: number | null;
-                            /** @description Commanded diameter of the circle, in the record's `lengthUnit`. */
-                            circle: number | null;
-                        };
-                        measured: {
-                            /** @description Measured size of the square along X, in the record's `lengthUnit`. */
-                            x: number | null;
-                            /** @description Measured size of the square along Y, in the record's `lengthUnit`. */
-                            y: number | null;
-                            /** @description Measured diagonal from the X0 Y0 corner, in the record's `lengthUnit`. */
-                            diagonal1: number | null;
-                            /** @description Measured other diagonal, in the record's `lengthUnit`. */
-                            diagonal2: number | null;
-                            /** @description Measured diameter of the circle along X, in the record's `lengthUnit`. */
-                            circleX: number | null;
-                            /** @description Measured diameter of the circle along Y, in the record's `lengthUnit`. */
-                            circleY: number | null;
-                            /** @description Width of cut the controller did not compensate for, in the record's `lengthUnit`. */
-                            kerf: number | null;
-                        };
-                        /** @enum {string|null} */
-                        circleKind: "hole" | "disc" | null;
-                        stepsPerMm: {
-                            /** @description Steps per mm of axis X when the cut was made (null when not given). */
-                            x: number | null;
-                            /** @description Steps per mm of axis Y when the cut was made (null when not given). */
-                            y: number | null;
-                        } | null;
-                        result: components["schemas"]["TestCutResult"] | null;
-                        id: string;
-                        machineId: string;
-                        /** @description Unit the record's lengths were entered in and are given back in. */
-                        lengthUnit: components["schemas"]["LengthUnit"];
-                        note: string;
-                        recordedBy: {
-                            id: string | null;
-                            name: string;
-                        };
-                        recordedAt: string;
-                        /** @enum {string} */
-                        status: "within-target" | "outside-target";
-                        target: components["schemas"]["JudgedTarget"];
-                        locked: boolean;
-                        /** @description What a person should know about the result (empty when none). */
-                        warnings: components["schemas"]["ResultWarning"][];
-                    })[];
+                    "application/json": components["schemas"]["TestCutResponse"][];
                 };
             };
             /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
@@ -8194,129 +7862,7 @@ export interface operations {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": {
-                        unreadable: string;
-                        targets: {
-                            part: components["schemas"]["JudgedTarget"];
-                            squareness: components["schemas"]["JudgedTarget"];
-                        };
-                        /** @description Thickness of the plate cut, in the record's `lengthUnit`. */
-                        plateThickness: number | null;
-                        /** @description In mm. */
-                        plateThicknessMm: number | null;
-                        /** @description Smallest step of the caliper or rule the sizes were read with, in the record's `lengthUnit`. */
-                        resolution: number | null;
-                        nominal: {
-                            /** @description Commanded size of the square along X, in the record's `lengthUnit`. */
-                            x: number | null;
-                            /** @description Commanded size of the square along Y, in the record's `lengthUnit`. */
-                            y: number | null;
-                            /** @description Commanded diameter of the circle, in the record's `lengthUnit`. */
-                            circle: number | null;
-                        };
-                        measured: {
-                            /** @description Measured size of the square along X, in the record's `lengthUnit`. */
-                            x: number | null;
-                            /** @description Measured size of the square along Y, in the record's `lengthUnit`. */
-                            y: number | null;
-                            /** @description Measured diagonal from the X0 Y0 corner, in the record's `lengthUnit`. */
-                            diagonal1: number | null;
-                            /** @description Measured other diagonal, in the record's `lengthUnit`. */
-                            diagonal2: number | null;
-                            /** @description Measured diameter of the circle along X, in the record's `lengthUnit`. */
-                            circleX: number | null;
-                            /** @description Measured diameter of the circle along Y, in the record's `lengthUnit`. */
-                            circleY: number | null;
-                            /** @description Width of cut the controller did not compensate for, in the record's `lengthUnit`. */
-                            kerf: number | null;
-                        };
-                        /** @enum {string|null} */
-                        circleKind: "hole" | "disc" | null;
-                        stepsPerMm: {
-                            /** @description Steps per mm of axis X when the cut was made (null when not given). */
-                            x: number | null;
-                            /** @description Steps per mm of axis Y when the cut was made (null when not given). */
-                            y: number | null;
-                        } | null;
-                        result: components["schemas"]["TestCutResult"] | null;
-                        id: string;
-                        machineId: string;
-                        /** @description Unit the record's lengths were entered in and are given back in. */
-                        lengthUnit: components["schemas"]["LengthUnit"];
-                        note: string;
-                        recordedBy: {
-                            id: string | null;
-                            name: string;
-                        };
-                        recordedAt: string;
-                        /** @enum {string} */
-                        status: "within-target" | "outside-target";
-                        target: components["schemas"]["JudgedTarget"];
-                        locked: boolean;
-                        /** @description What a person should know about the result (empty when none). */
-                        warnings: components["schemas"]["ResultWarning"][];
-                    } | {
-                        unreadable?: unknown;
-                        targets: {
-                            part: components["schemas"]["JudgedTarget"];
-                            squareness: components["schemas"]["JudgedTarget"];
-                        };
-                        /** @description Thickness of the plate cut, in the record's `lengthUnit`. */
-                        plateThickness: number | null;
-                        /** @description In mm. */
-                        plateThicknessMm: number | null;
-                        /** @description Smallest step of the caliper or rule the sizes were read with, in the record's `lengthUnit`. */
-                        resolution: number | null;
-                        nominal: {
-                            /** @description Commanded size of the square along X, in the record's `lengthUnit`. */
-                            x: number | null;
-                            /** @description Commanded size of the square along Y, in the record's `lengthUnit`. */
-                            y: number | null;
-                            /** @description Commanded diameter of the circle, in the record's `lengthUnit`. */
-                            circle: number | null;
-                        };
-                        measured: {
-                            /** @description Measured size of the square along X, in the record's `lengthUnit`. */
-                            x: number | null;
-                            /** @description Measured size of the square along Y, in the record's `lengthUnit`. */
-                            y: number | null;
-                            /** @description Measured diagonal from the X0 Y0 corner, in the record's `lengthUnit`. */
-                            diagonal1: number | null;
-                            /** @description Measured other diagonal, in the record's `lengthUnit`. */
-                            diagonal2: number | null;
-                            /** @description Measured diameter of the circle along X, in the record's `lengthUnit`. */
-                            circleX: number | null;
-                            /** @description Measured diameter of the circle along Y, in the record's `lengthUnit`. */
-                            circleY: number | null;
-                            /** @description Width of cut the controller did not compensate for, in the record's `lengthUnit`. */
-                            kerf: number | null;
-                        };
-                        /** @enum {string|null} */
-                        circleKind: "hole" | "disc" | null;
-                        stepsPerMm: {
-                            /** @description Steps per mm of axis X when the cut was made (null when not given). */
-                            x: number | null;
-                            /** @description Steps per mm of axis Y when the cut was made (null when not given). */
-                            y: number | null;
-                        } | null;
-                        result: components["schemas"]["TestCutResult"] | null;
-                        id: string;
-                        machineId: string;
-                        /** @description Unit the record's lengths were entered in and are given back in. */
-                        lengthUnit: components["schemas"]["LengthUnit"];
-                        note: string;
-                        recordedBy: {
-                            id: string | null;
-                            name: string;
-                        };
-                        recordedAt: string;
-                        /** @enum {string} */
-                        status: "within-target" | "outside-target";
-                        target: components["schemas"]["JudgedTarget"];
-                        locked: boolean;
-                        /** @description What a person should know about the result (empty when none). */
-                        warnings: components["schemas"]["ResultWarning"][];
-                    };
+                    "application/json": components["schemas"]["TestCutResponse"];
                 };
             };
             /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */
@@ -8650,7 +8196,7 @@ export interface operations {
                         machineId: string;
                         startedAt: string | null;
                         /** @enum {string} */
-                        status: "within-target" | "outside-target" | "not-started";
+                        status: "not-started" | "within-target" | "outside-target";
                         counts: components["schemas"]["WalkCounts"];
                         /** @description A "no" anywhere keeps the machine from being approved. */
                         blocking: boolean;
@@ -8735,7 +8281,7 @@ export interface operations {
                         machineId: string;
                         startedAt: string | null;
                         /** @enum {string} */
-                        status: "within-target" | "outside-target" | "not-started";
+                        status: "not-started" | "within-target" | "outside-target";
                         counts: components["schemas"]["WalkCounts"];
                         /** @description A "no" anywhere keeps the machine from being approved. */
                         blocking: boolean;
@@ -8849,7 +8395,7 @@ export interface operations {
                         machineId: string;
                         startedAt: string | null;
                         /** @enum {string} */
-                        status: "within-target" | "outside-target" | "not-started";
+                        status: "not-started" | "within-target" | "outside-target";
                         counts: components["schemas"]["WalkCounts"];
                         /** @description A "no" anywhere keeps the machine from being approved. */
                         blocking: boolean;
@@ -10140,7 +9686,8 @@ export interface operations {
                         machineTemperature: number | null;
                         /** @description Temperature of the scale while measuring, °C. */
                         scaleTemperature: number | null;
-                        scaleMaterial: string | null;
+                        /** @enum {string|null} */
+                        scaleMaterial: "steel" | "stainless-steel" | "aluminium" | "glass" | "invar" | null;
                         /** @description Smallest step the instrument reads, in readingUnit. */
                         instrumentResolution: number | null;
                         thermal: components["schemas"]["ThermalReference"] | null;
@@ -10290,7 +9837,8 @@ export interface operations {
                         machineTemperature: number | null;
                         /** @description Temperature of the scale while measuring, °C. */
                         scaleTemperature: number | null;
-                        scaleMaterial: string | null;
+                        /** @enum {string|null} */
+                        scaleMaterial: "steel" | "stainless-steel" | "aluminium" | "glass" | "invar" | null;
                         /** @description Smallest step the instrument reads, in readingUnit. */
                         instrumentResolution: number | null;
                         thermal: components["schemas"]["ThermalReference"] | null;
@@ -10743,7 +10291,8 @@ export interface operations {
                         machineTemperature: number | null;
                         /** @description Temperature of the scale while measuring, °C. */
                         scaleTemperature: number | null;
-                        scaleMaterial: string | null;
+                        /** @enum {string|null} */
+                        scaleMaterial: "steel" | "stainless-steel" | "aluminium" | "glass" | "invar" | null;
                         /** @description Smallest step the instrument reads, in readingUnit. */
                         instrumentResolution: number | null;
                         thermal: components["schemas"]["ThermalReference"] | null;
@@ -10948,7 +10497,8 @@ export interface operations {
                         machineTemperature: number | null;
                         /** @description Temperature of the scale while measuring, °C. */
                         scaleTemperature: number | null;
-                        scaleMaterial: string | null;
+                        /** @enum {string|null} */
+                        scaleMaterial: "steel" | "stainless-steel" | "aluminium" | "glass" | "invar" | null;
                         /** @description Smallest step the instrument reads, in readingUnit. */
                         instrumentResolution: number | null;
                         thermal: components["schemas"]["ThermalReference"] | null;
@@ -11695,12 +11245,12 @@ export interface operations {
                             kind: "positioning" | "rail-straightness" | "travel-trial" | "diagonal-check" | "bed-grid" | "test-cut" | "safety-walk" | "rail-parallelism" | "backlash" | "speed-check" | "travel-envelope";
                             subject: string;
                             /** @enum {string} */
-                            status: "within-target" | "outside-target" | "not-started" | "waived";
+                            status: "not-started" | "within-target" | "outside-target" | "waived";
                             /**
                              * @description What the contributor reported before any waiver.
                              * @enum {string}
                              */
-                            measuredStatus: "within-target" | "outside-target" | "not-started";
+                            measuredStatus: "not-started" | "within-target" | "outside-target";
                             target: {
                                 /** @description In the `unit` stored beside it. */
                                 value: number;
@@ -11718,7 +11268,7 @@ export interface operations {
                                 summary: string;
                             } | null;
                             /** @enum {string|null} */
-                            recordType: "axis" | "machine" | "waiver" | "rail-sweep" | "rail" | "bolt-down" | "travel-trial" | "positioning-run" | "backlash-check" | "diagonal-check" | "bed-grid" | "test-cut" | "safety-walk" | null;
+                            recordType: "machine" | "waiver" | "rail-sweep" | "rail" | "bolt-down" | "axis" | "travel-trial" | "positioning-run" | "backlash-check" | "diagonal-check" | "bed-grid" | "test-cut" | "safety-walk" | null;
                             recordId: string | null;
                             recordedAt: string | null;
                             /** @description Where the check's record is shown (snapshots taken before it was kept name a screen path, `link`, instead). */
@@ -11743,7 +11293,7 @@ export interface operations {
                             kind: "positioning" | "rail-straightness" | "travel-trial" | "diagonal-check" | "bed-grid" | "test-cut" | "safety-walk" | "rail-parallelism" | "backlash" | "speed-check" | "travel-envelope";
                             subject: string;
                             /** @enum {string} */
-                            status: "within-target" | "outside-target" | "not-started" | "waived";
+                            status: "not-started" | "within-target" | "outside-target" | "waived";
                         }[];
                         counts: {
                             /** @description Count of required checks. */
@@ -12315,40 +11865,7 @@ export interface operations {
                     [name: string]: unknown;
                 };
                 content: {
-                    "application/json": {
-                        approval: unknown;
-                        rows: unknown[];
-                    } | {
-                        approval: {
-                            id: string;
-                            approvedAt: string;
-                            approvedBy: string;
-                            recordHash: string;
-                        };
-                        rows: {
-                            key: string;
-                            /** @enum {string} */
-                            kind: "positioning" | "rail-straightness" | "travel-trial" | "diagonal-check" | "bed-grid" | "test-cut" | "safety-walk" | "rail-parallelism" | "backlash" | "speed-check" | "travel-envelope";
-                            subject: string;
-                            target: {
-                                /** @description In the `unit` stored beside it. */
-                                value: number;
-                                /** @enum {string} */
-                                unit: "mm" | "um" | "in" | "thou" | "mm/m" | "%" | "days" | "um/mm";
-                                source?: string;
-                                /** @enum {string} */
-                                reference?: "minimum-zone" | "least-squares";
-                                label?: string;
-                            } | null;
-                            approved: components["schemas"]["DriftSide"] | null;
-                            latest: components["schemas"]["DriftSide"] | null;
-                            /** @description Latest minus approved, in the `unit` beside it; null when either is missing or nothing new was recorded. */
-                            change: number | null;
-                            unit: string | null;
-                            rechecked: boolean;
-                            worse: boolean;
-                        }[];
-                    };
+                    "application/json": components["schemas"]["DriftResponse"];
                 };
             };
             /** @description The request breaks a rule: a field is missing, of the wrong type or out of range. */

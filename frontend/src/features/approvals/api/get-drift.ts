@@ -1,11 +1,11 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
-import { approvalKeys, type Drift } from '../types';
+import { answer, client } from '../../../lib/api-client';
+import { approvalKeys } from '../types';
 
 export const driftQueryOptions = (machineId: string) =>
   queryOptions({
     queryKey: approvalKeys.drift(machineId),
-    queryFn: () => api.get<Drift>(`/machines/${machineId}/drift`),
+    queryFn: () => answer(client.GET('/api/machines/{id}/drift', { params: { path: { id: machineId } } })),
   });
 
 export const useDrift = (machineId: string, enabled = true) => useQuery({ ...driftQueryOptions(machineId), enabled });

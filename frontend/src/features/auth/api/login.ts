@@ -1,14 +1,11 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { sendTo } from '../../../lib/api/fetch-json';
-import type { AnswerOf } from '../../../lib/api/schemas';
+import type { AnswerOf, Schemas } from '../../../lib/api/schemas';
 import { authKeys } from '../../../lib/session/get-me';
 
-/** Written here until the description gives sign-in its request body (passport reads it). */
-export interface LoginInput {
-  email: string;
-  password: string;
-}
+export type LoginInput = Schemas['LoginDto'];
 
+// Through the plain transport, typed from the description: the sign-in page loads without the typed client.
 export const login = (input: LoginInput) => sendTo<AnswerOf<'/api/auth/login', 'post'>>('POST', '/auth/login', input);
 
 export function useLogin() {

@@ -1,6 +1,12 @@
+import { answer, client } from '../../../lib/api-client';
 import { useCalculation } from './run-calculation';
-import type { FlatnessRequest, FlatnessResult } from '../types';
+import type { FlatnessRequest } from '../types';
+import { withResiduals } from '../with-residuals';
 
-/** POST /api/calc/flatness */
+/** POST /api/calc/flatness?residuals=true */
 export const useFlatnessCalculation = (body: FlatnessRequest | null) =>
-  useCalculation<FlatnessRequest, FlatnessResult>('flatness?residuals=true', body);
+  useCalculation('flatness', body, (b) =>
+    answer(client.POST('/api/calc/flatness', { params: { query: { residuals: 'true' } }, body: b })).then(
+      withResiduals,
+    ),
+  );

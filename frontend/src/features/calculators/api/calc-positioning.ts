@@ -1,6 +1,7 @@
+import { answer, client } from '../../../lib/api-client';
 import { useCalculation } from './run-calculation';
-import type { PositioningRequest, PositioningResult } from '../types';
+import type { PositioningRequest } from '../types';
 
 /** POST /api/calc/positioning */
 export const usePositioningCalculation = (body: PositioningRequest | null) =>
-  useCalculation<PositioningRequest, PositioningResult>('positioning', body);
+  useCalculation('positioning', body, (b) => answer(client.POST('/api/calc/positioning', { body: b })));

@@ -1,6 +1,12 @@
+import { answer, client } from '../../../lib/api-client';
 import { useCalculation } from './run-calculation';
-import type { StraightnessRequest, StraightnessResult } from '../types';
+import type { StraightnessRequest } from '../types';
+import { withResiduals } from '../with-residuals';
 
-/** POST /api/calc/straightness */
+/** POST /api/calc/straightness?residuals=true */
 export const useStraightnessCalculation = (body: StraightnessRequest | null) =>
-  useCalculation<StraightnessRequest, StraightnessResult>('straightness?residuals=true', body);
+  useCalculation('straightness', body, (b) =>
+    answer(client.POST('/api/calc/straightness', { params: { query: { residuals: 'true' } }, body: b })).then(
+      withResiduals,
+    ),
+  );

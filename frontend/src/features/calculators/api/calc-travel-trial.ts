@@ -1,6 +1,7 @@
+import { answer, client } from '../../../lib/api-client';
 import { useCalculation } from './run-calculation';
-import type { TravelTrialRequest, TravelTrialResult } from '../types';
+import type { TravelTrialRequest } from '../types';
 
 /** POST /api/calc/travel-trial */
 export const useTravelTrialCalculation = (body: TravelTrialRequest | null) =>
-  useCalculation<TravelTrialRequest, TravelTrialResult>('travel-trial', body);
+  useCalculation('travel-trial', body, (b) => answer(client.POST('/api/calc/travel-trial', { body: b })));

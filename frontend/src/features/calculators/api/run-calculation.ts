@@ -1,5 +1,4 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
 import { calculatorKeys } from '../types';
 
 /** A result together with the request it answers, so charts never mix one input with another's result. */
@@ -11,14 +10,16 @@ export interface Calculated<Req, Res> {
 /**
  * Calculations are POSTs that change nothing, so they are read as queries keyed by their body:
  * the last result stays on screen while the next is computed, and equal inputs are not re-sent.
+ * `send` is the calculator's own typed call (`client.POST('/api/calc/…', { body })`).
  */
-export function calculationQueryOptions<Req, Res>(route: string, body: Req | null) {
+export function calculationQueryOptions<Req, Res>(
+  calculator: string,
+  body: Req | null,
+  send: (body: Req) => Promise<Res>,
+) {
   return queryOptions({
-    queryKey: calculatorKeys.run(route, body),
-    queryFn: async (): Promise<Calculated<Req, Res>> => ({
-      request: body as Req,
-      result: await api.post<Res>(`/calc/${route}`, body),
-    }),
+    queryKey: calculatorKeys.run(calculator, body),
+    queryFn: async (): Promise<Calculated<Req, Res>> => ({ request: body!, result: await send(body!) }),
     enabled: body !== null,
     placeholderData: keepPreviousData,
     staleTime: Infinity,
@@ -26,5 +27,5 @@ export function calculationQueryOptions<Req, Res>(route: string, body: Req | nul
   });
 }
 
-export const useCalculation = <Req, Res>(route: string, body: Req | null) =>
-  useQuery(calculationQueryOptions<Req, Res>(route, body));
+export const useCalculation = <Req, Res>(calculator: string, body: Req | null, send: (body: Req) => Promise<Res>) =>
+  useQuery(calculationQueryOptions(calculator, body, send));

@@ -1,27 +1,17 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
+import { answer, client } from '../../../lib/api-client';
+import type { Schemas } from '../../../lib/api/schemas';
 import { MACHINE_STATE_KEYS } from '../../../lib/machine-state-keys';
-import { driveKeys, type Axis, type Drive } from '../types';
-import type { LengthUnit } from '../../../lib/units';
+import { driveKeys } from '../types';
 
-export interface AxisInput {
-  name: string;
-  /** Drive lengths, travel and feed rates (per minute) are in it. */
-  lengthUnit: LengthUnit;
-  drive: Drive;
-  motorStepsPerRev: number;
-  microsteps: number;
-  gearRatio?: number;
-  stepsPerMm: number;
-  maxFeedRate?: number | null;
-  measuredTravel?: number | null;
-  notes?: string;
-}
+/** A new axis: drive lengths, travel and feed rates (per minute) in its lengthUnit. */
+export type NewAxis = Schemas['CreateAxisDto'];
 
 export function useCreateAxis(machineId: string) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (input: AxisInput) => api.post<Axis>(`/machines/${machineId}/axes`, input),
+    mutationFn: (body: NewAxis) =>
+      answer(client.POST('/api/machines/{id}/axes', { params: { path: { id: machineId } }, body })),
     onSuccess: () =>
       Promise.all([
         qc.invalidateQueries({ queryKey: driveKeys.all }),

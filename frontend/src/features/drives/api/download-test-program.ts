@@ -1,7 +1,9 @@
 import { useMutation } from '@tanstack/react-query';
-import { ApiError } from '../../../lib/api-client';
+import { client } from '../../../lib/api-client';
+import type { paths } from '../../../lib/api/schema';
 
-export type TestProgramParams = Record<string, string | number | undefined>;
+/** The program's settings as the description lists them; left out, the server's defaults. */
+export type TestProgramParams = paths['/api/axes/{id}/test-program']['get']['parameters']['query'];
 
 function filenameOf(res: Response): string {
   // The name is quoted only when it needs to be (RFC 6266): filename="a b.nc" or filename=a-b.nc.
@@ -12,28 +14,16 @@ function filenameOf(res: Response): string {
 /** Fetches the G-code as text and hands it to the browser as a file download. */
 async function downloadTestProgram(
   axisId: string,
-  params: TestProgramParams,
+  query: TestProgramParams,
 ): Promise<{ filename: string; text: string }> {
-  const query = new URLSearchParams();
-  for (const [k, v] of Object.entries(params)) if (v !== undefined && v !== '') query.set(k, String(v));
-  let res: Response;
-  try {
-    res = await fetch(`/api/axes/${axisId}/test-program?${query}`, { credentials: 'same-origin' });
-  } catch {
-    throw new ApiError(0, 'The server could not be reached. Check the connection and try again.');
-  }
-  const text = await res.text();
-  if (!res.ok) {
-    let details: string[];
-    try {
-      const m = JSON.parse(text).message;
-      details = Array.isArray(m) ? m.map(String) : [String(m)];
-    } catch {
-      details = [text];
-    }
-    throw new ApiError(res.status, details.join('; '), details);
-  }
-  const filename = filenameOf(res);
+  // A refusal or a lost connection is thrown as ApiError by the client, as for every other call.
+  const { data, response } = await client.GET('/api/axes/{id}/test-program', {
+    params: { path: { id: axisId }, query },
+    parseAs: 'text',
+    headers: { Accept: 'text/plain' },
+  });
+  const text = data ?? '';
+  const filename = filenameOf(response);
   const url = URL.createObjectURL(new Blob([text], { type: 'text/plain' }));
   const a = document.createElement('a');
   a.href = url;

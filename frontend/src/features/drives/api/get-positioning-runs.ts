@@ -1,27 +1,10 @@
 import { infiniteQueryOptions, useInfiniteQuery } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
-import type { LengthUnit } from '../../../lib/units';
-import { driveKeys, type PositioningRun, type ResultWarning } from '../types';
+import { answer, client } from '../../../lib/api-client';
+import type { AnswerOf } from '../../../lib/api/schemas';
+import { driveKeys } from '../types';
 
 /** A run as the axis's list gives it: the three figures and their verdicts, no deviations (usePositioningRun has them). */
-export interface PositioningRunListItem {
-  id: string;
-  axisId: string;
-  lengthUnit: LengthUnit;
-  readingUnit: LengthUnit;
-  /** Kept with the record: what a person should know about the result. */
-  warnings: ResultWarning[];
-  targetCount: number;
-  runCount: number;
-  /** null when the stored result cannot be read (then `unreadable` says so). */
-  result: Pick<NonNullable<PositioningRun['result']>, 'accuracy' | 'repeatability' | 'reversal'> | null;
-  checks: PositioningRun['checks'] | null;
-  unreadable?: string;
-  status: PositioningRun['status'];
-  recordedBy: string;
-  recordedAt: string;
-  locked: boolean;
-}
+export type PositioningRunListItem = AnswerOf<'/api/axes/{id}/positioning-runs', 'get'>[number];
 
 export const RUN_PAGE_SIZE = 50;
 
@@ -30,8 +13,13 @@ export const positioningRunsQueryOptions = (axisId: string) =>
   infiniteQueryOptions({
     queryKey: driveKeys.runs(axisId),
     queryFn: ({ pageParam }) =>
-      api.get<PositioningRunListItem[]>(
-        `/axes/${axisId}/positioning-runs?limit=${RUN_PAGE_SIZE}${pageParam ? `&cursor=${pageParam}` : ''}`,
+      answer(
+        client.GET('/api/axes/{id}/positioning-runs', {
+          params: {
+            path: { id: axisId },
+            query: { limit: RUN_PAGE_SIZE, ...(pageParam ? { cursor: pageParam } : {}) },
+          },
+        }),
       ),
     initialPageParam: '',
     getNextPageParam: (last) => (last.length === RUN_PAGE_SIZE ? last[last.length - 1].id : undefined),

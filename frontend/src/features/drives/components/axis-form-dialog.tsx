@@ -12,7 +12,7 @@ import {
   TextField,
   Typography,
 } from '@mui/material';
-import { useCreateAxis, type AxisInput } from '../api/create-axis';
+import { useCreateAxis } from '../api/create-axis';
 import { useUpdateAxis } from '../api/update-axis';
 import { useDrivePreview, type DrivePreviewInput } from '../api/preview-drive';
 import type { Axis, Drive } from '../types';
@@ -122,7 +122,7 @@ export function AxisFormDialog({
   const theoretical = preview.isError ? null : preview.data?.stepsPerMm;
 
   const submit = () => {
-    const input: AxisInput = {
+    const input = {
       name: f.name.trim(),
       lengthUnit: f.lengthUnit,
       drive,
@@ -130,15 +130,23 @@ export function AxisFormDialog({
       microsteps: numberOf(f.microsteps) ?? NaN,
       gearRatio: numberOf(f.gearRatio) ?? 1,
       stepsPerMm: numberOf(f.stepsPerMm) ?? NaN,
-      maxFeedRate: numberOf(f.maxFeedRate) ?? null,
-      measuredTravel: numberOf(f.measuredTravel) ?? null,
       notes: f.notes,
     };
-    if (!axis) {
-      if (input.maxFeedRate === null) delete input.maxFeedRate;
-      if (input.measuredTravel === null) delete input.measuredTravel;
-    }
-    save.mutate(input, { onSuccess: () => close() });
+    const maxFeedRate = numberOf(f.maxFeedRate);
+    const measuredTravel = numberOf(f.measuredTravel);
+    const done = { onSuccess: () => close() };
+    // An edit clears an emptied field with null; a new axis leaves it out.
+    if (axis)
+      update.mutate({ ...input, maxFeedRate: maxFeedRate ?? null, measuredTravel: measuredTravel ?? null }, done);
+    else
+      create.mutate(
+        {
+          ...input,
+          ...(maxFeedRate === undefined ? {} : { maxFeedRate }),
+          ...(measuredTravel === undefined ? {} : { measuredTravel }),
+        },
+        done,
+      );
   };
   const close = () => {
     save.reset();

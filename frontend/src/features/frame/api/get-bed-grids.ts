@@ -1,11 +1,11 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
-import { frameKeys, type BedGrid } from '../types';
+import { answer, client } from '../../../lib/api-client';
+import { frameKeys } from '../types';
 
 export const bedGridsQueryOptions = (machineId: string) =>
   queryOptions({
     queryKey: frameKeys.bedGrids(machineId),
-    queryFn: () => api.get<BedGrid[]>(`/machines/${machineId}/bed-grids`),
+    queryFn: () => answer(client.GET('/api/machines/{id}/bed-grids', { params: { path: { id: machineId } } })),
   });
 
 export const useBedGrids = (machineId: string) => useQuery(bedGridsQueryOptions(machineId));

@@ -1,11 +1,11 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
-import { frameKeys, type TestCut } from '../types';
+import { answer, client } from '../../../lib/api-client';
+import { frameKeys } from '../types';
 
 export const testCutsQueryOptions = (machineId: string) =>
   queryOptions({
     queryKey: frameKeys.testCuts(machineId),
-    queryFn: () => api.get<TestCut[]>(`/machines/${machineId}/test-cuts`),
+    queryFn: () => answer(client.GET('/api/machines/{id}/test-cuts', { params: { path: { id: machineId } } })),
   });
 
 export const useTestCuts = (machineId: string) => useQuery(testCutsQueryOptions(machineId));

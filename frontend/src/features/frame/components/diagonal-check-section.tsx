@@ -13,6 +13,14 @@ import { UnreadableRecord } from '../../../components/unreadable-record';
 import { StatusChip } from './status-chip';
 import { ResultWarnings } from './result-warnings';
 
+/** The four lengths the drawing needs, in mm; null when a stored one cannot be read (the record then has no result either). */
+function drawableSides(mm: DiagonalCheck['inputMm']) {
+  const { sideX, sideY, diagonal1, diagonal2 } = mm;
+  return sideX === null || sideY === null || diagonal1 === null || diagonal2 === null
+    ? null
+    : { sideX, sideY, diagonal1, diagonal2 };
+}
+
 /** Squareness from the diagonals: entry, the drawing of the latest (or chosen) check, and the history. */
 export function DiagonalCheckSection({ machineId, canRecord }: { machineId: string; canRecord: boolean }) {
   const checks = useDiagonalChecks(machineId);
@@ -21,6 +29,7 @@ export function DiagonalCheckSection({ machineId, canRecord }: { machineId: stri
   if (checks.isError) return <ErrorState error={checks.error} onRetry={() => checks.refetch()} />;
   const list = checks.data;
   const shown: DiagonalCheck | undefined = list.find((c) => c.id === selectedId) ?? list[0];
+  const sides = shown ? drawableSides(shown.inputMm) : null;
 
   return (
     <Paper sx={{ p: { xs: 2, md: 2.5 } }} component="section" aria-labelledby="diagonal-check-title">
@@ -89,16 +98,18 @@ export function DiagonalCheckSection({ machineId, canRecord }: { machineId: stri
               <Typography variant="body2" color="text.secondary">
                 Target {showTarget(shown.target)} · {shown.target.source}
               </Typography>
-              <SquarenessDrawing
-                sideXMm={shown.inputMm.sideX}
-                sideYMm={shown.inputMm.sideY}
-                diagonal1Mm={shown.inputMm.diagonal1}
-                diagonal2Mm={shown.inputMm.diagonal2}
-                outOfSquareRad={shown.result.outOfSquareRad}
-                longDiagonal={shown.result.longDiagonal}
-                correction={shown.result.correction}
-                unit={shown.lengthUnit}
-              />
+              {sides && (
+                <SquarenessDrawing
+                  sideXMm={sides.sideX}
+                  sideYMm={sides.sideY}
+                  diagonal1Mm={sides.diagonal1}
+                  diagonal2Mm={sides.diagonal2}
+                  outOfSquareRad={shown.result.outOfSquareRad}
+                  longDiagonal={shown.result.longDiagonal}
+                  correction={shown.result.correction}
+                  unit={shown.lengthUnit}
+                />
+              )}
               <Alert severity={shown.result.correction.end ? 'info' : 'success'} icon={false}>
                 {shown.result.correction.instruction}
               </Alert>

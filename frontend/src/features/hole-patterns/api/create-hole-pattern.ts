@@ -1,11 +1,12 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
-import { holePatternKeys, type HolePattern, type PatternInput } from '../types';
+import { answer, client } from '../../../lib/api-client';
+import { holePatternKeys, type PatternInput } from '../types';
 
 export function useCreateHolePattern(machineId: string) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (input: PatternInput) => api.post<HolePattern>(`/machines/${machineId}/hole-patterns`, input),
+    mutationFn: (body: PatternInput) =>
+      answer(client.POST('/api/machines/{id}/hole-patterns', { params: { path: { id: machineId } }, body })),
     onSuccess: () => qc.invalidateQueries({ queryKey: holePatternKeys.all }),
   });
 }

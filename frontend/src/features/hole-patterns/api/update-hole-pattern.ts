@@ -1,11 +1,12 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
-import { holePatternKeys, type HolePattern, type PatternInput } from '../types';
+import { answer, client } from '../../../lib/api-client';
+import { holePatternKeys, type PatternInput } from '../types';
 
 export function useUpdateHolePattern(id: string) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (input: PatternInput) => api.put<HolePattern>(`/hole-patterns/${id}`, input),
+    mutationFn: (body: PatternInput) =>
+      answer(client.PUT('/api/hole-patterns/{id}', { params: { path: { id } }, body })),
     onSuccess: () => qc.invalidateQueries({ queryKey: holePatternKeys.all }),
   });
 }

@@ -1,11 +1,11 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { api } from '../../../lib/api-client';
-import { railKeys, type Parallelism } from '../types';
+import { answer, client } from '../../../lib/api-client';
+import { railKeys } from '../types';
 
 export const parallelismQueryOptions = (railId: string) =>
   queryOptions({
     queryKey: railKeys.parallelism(railId),
-    queryFn: () => api.get<Parallelism>(`/rails/${railId}/parallelism`),
+    queryFn: () => answer(client.GET('/api/rails/{id}/parallelism', { params: { path: { id: railId } } })),
   });
 
 export const useParallelism = (railId: string, enabled = true) =>

@@ -17,6 +17,9 @@ export function PairParallelismSummary({
 }) {
   const q = useParallelism(railId);
   const unit = q.data && isLengthUnit(q.data.targets.parallelism.unit) ? q.data.targets.parallelism.unit : 'mm';
+  // A rail without a partner has no height; only a pair judged on its parallelism has differences.
+  const height = q.data && 'height' in q.data ? q.data.height : null;
+  const compared = q.data && 'positions' in q.data ? q.data : null;
   return (
     <Paper
       component="section"
@@ -32,19 +35,19 @@ export function PairParallelismSummary({
         )}
         {q.data && q.data.status !== 'not-comparable' && (
           <Typography color="text.secondary">
-            {q.data.parallelism !== null && q.data.parallelism !== undefined
-              ? `Parallelism ${showInTargetUnit(q.data.parallelism, q.data.targets.parallelism)} (target ${showTarget(q.data.targets.parallelism)}, ${q.data.face ?? 'side'} face, datum ${q.data.datum})`
-              : `No parallelism yet: ${q.data.reason ?? 'needs side-face sweeps of both rails against one datum'}`}
+            {compared
+              ? `Parallelism ${showInTargetUnit(compared.parallelism, compared.targets.parallelism)} (target ${showTarget(compared.targets.parallelism)}, ${compared.face} face, datum ${compared.datum})`
+              : `No parallelism yet: ${('reason' in q.data && q.data.reason) || 'needs side-face sweeps of both rails against one datum'}`}
           </Typography>
         )}
-        {q.data?.height && (
+        {height && (
           <Typography color="text.secondary" data-testid="height-difference">
-            {q.data.height.measured && q.data.height.worst !== null
-              ? `Height difference ${showLength(q.data.height.worst, unit)} at the worst station (${showLength(q.data.height.at ?? 0, 'mm')} along; top face, datum ${q.data.height.datum}) · target ${q.data.height.targetText}`
+            {height.measured && height.worst !== null
+              ? `Height difference ${showLength(height.worst, unit)} at the worst station (${showLength(height.at ?? 0, 'mm')} along; top face, datum ${height.datum}) · target ${height.targetText}`
               : 'Height difference: not measured. It needs top-face sweeps of both rails read against one common datum.'}
           </Typography>
         )}
-        {q.data?.warnings && q.data.warnings.length > 0 && (
+        {q.data && q.data.warnings.length > 0 && (
           <Alert severity="warning" sx={{ mt: 1 }}>
             {q.data.warnings.map((w) => (
               <div key={w.code}>{w.message}</div>
@@ -58,7 +61,7 @@ export function PairParallelismSummary({
         )}
       </Box>
       {q.data && <CheckStatusChip status={q.data.status} />}
-      {partnerLabel && q.data?.differences && q.data.positions && (
+      {partnerLabel && compared && (
         <Box sx={{ flex: '1 1 100%', minWidth: 0 }}>
           <SweepOverlayChart
             label="Partner rail differences"
@@ -66,15 +69,15 @@ export function PairParallelismSummary({
             unitLabel={UNIT_LABELS[unit]}
             yLabel="B − A"
             target={{
-              width: fromMm(targetMm(q.data.targets.parallelism), unit),
-              label: `Parallelism target ${showTarget(q.data.targets.parallelism)} wide`,
+              width: fromMm(targetMm(compared.targets.parallelism), unit),
+              label: `Parallelism target ${showTarget(compared.targets.parallelism)} wide`,
             }}
             series={[
               {
                 name: `B − A: ${partnerLabel} minus this rail`,
-                points: q.data.positions.map((position, i) => ({
+                points: compared.positions.map((position, i) => ({
                   position,
-                  value: fromMm(q.data!.differences![i], unit),
+                  value: fromMm(compared.differences[i], unit),
                 })),
               },
             ]}

@@ -1,13 +1,10 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { answer, client } from '../../../lib/api-client';
-import { targetSetKeys, type Target } from '../types';
+import type { Schemas } from '../../../lib/api/schemas';
+import { targetSetKeys } from '../types';
 
-export interface TargetSetPatch {
-  name?: string;
-  description?: string;
-  /** The description leaves the targets' values open; they are the set's own. */
-  targets?: Record<string, Pick<Target, 'value' | 'unit' | 'source'>>;
-}
+/** The fields to change; each target sent replaces that target (value, unit, source, reference). */
+export type TargetSetPatch = Schemas['UpdateTargetSetDto'];
 
 export function useUpdateTargetSet(id: string) {
   const qc = useQueryClient();
