@@ -1,12 +1,12 @@
 import { Injectable, OnModuleInit } from '@nestjs/common';
 import { UNREADABLE_RESULT } from '../common/stored-result.js';
 import { fromMm, isLengthUnit } from '../engine/units.js';
+import { CheckRecordsRepository } from '../records/check-records.repository.js';
 import { targetIn, type MachineRef, type ReadinessCheck, type ReadinessContext } from '../records/readiness.js';
 import { ReadinessRegistry } from '../records/readiness.registry.js';
 import { TARGET_LABELS } from '../target-sets/target-keys.js';
 import { AxesRepository } from './axes.repository.js';
 import { backlashStatus, BACKLASH_DEFINITION, storedBacklash, warningsOf } from './backlash.mapper.js';
-import { BacklashRepository } from './backlash.repository.js';
 import { BACKLASH_RECORD } from './backlash.service.js';
 
 /**
@@ -16,11 +16,15 @@ import { BACKLASH_RECORD } from './backlash.service.js';
  */
 @Injectable()
 export class BacklashReadinessService implements OnModuleInit {
+  private readonly repo;
+
   constructor(
     private readonly axes: AxesRepository,
-    private readonly repo: BacklashRepository,
+    checkRecords: CheckRecordsRepository,
     private readonly readiness: ReadinessRegistry,
-  ) {}
+  ) {
+    this.repo = checkRecords.of(BACKLASH_RECORD);
+  }
 
   onModuleInit() {
     this.readiness.register({ checksFor: (machine, context) => this.checksFor(machine, context) });

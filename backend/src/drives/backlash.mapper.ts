@@ -3,7 +3,7 @@ import { backlashWarnings, type BacklashResult } from '../engine/backlash.js';
 import { fromMm, isLengthUnit, toMm, type LengthUnit } from '../engine/units.js';
 import type { ResultWarning } from '../engine/warnings.js';
 import { readableResult, UNREADABLE_RESULT } from '../common/stored-result.js';
-import type { BacklashCheckRow } from './backlash.repository.js';
+import type { CheckRecordRow } from '../records/check-record-tables.js';
 import type { Target } from './drive-targets.js';
 
 /** The definition, said the same way on every screen and in every response. */
@@ -44,7 +44,7 @@ export function warningsOf(
   return backlashWarnings(r.positions, resolutionMm, target.base);
 }
 
-export function toBacklashResponse(row: BacklashCheckRow, target: Target, locked: boolean) {
+export function toBacklashResponse(row: CheckRecordRow<'backlash-check'>, target: Target, locked: boolean) {
   const r = storedBacklash(row.result);
   const lu = unitOf(row.lengthUnit);
   const ru = unitOf(row.readingUnit);

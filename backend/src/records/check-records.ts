@@ -1,0 +1,136 @@
+import { and, eq, getTableColumns, getTableName, sql, type Column } from 'drizzle-orm';
+import type { PgTable } from 'drizzle-orm/pg-core';
+import type { Database } from '../database/database.tokens.js';
+
+/**
+ * A table of check records that hang under a parent (an axis, a rail or a machine): each row has
+ * its own id, the workshop it belongs to, the parent, and the time it was recorded, and the table
+ * has an index on (workshop, parent, time) so the newest of a parent is one index step away.
+ */
+export interface CheckTableSpec<T extends PgTable> {
+  table: T;
+  /** The property (not the SQL name) of the column naming the parent: `axisId`, `machineId`. */
+  parent: keyof T['$inferSelect'] & string;
+  /** The property of the time records are ordered by; `createdAt` unless the table keeps another. */
+  time?: keyof T['$inferSelect'] & string;
+}
+
+/** One entry of CHECK_RECORD_TABLES, its parent and time checked against the table's columns. */
+export const checkTable = <T extends PgTable>(spec: CheckTableSpec<T>) => spec;
+
+const uuidArray = (ids: string[]) =>
+  sql`array[${sql.join(
+    ids.map((id) => sql`${id}`),
+    sql`, `,
+  )}]::uuid[]`;
+
+/**
+ * The SQL of one table of check records, the same for every check: a page newest first, one record
+ * under its parent or in the workshop, insert, delete, and the newest record of each parent. Every
+ * method takes the workshop first and puts it in the `where`; rows come back as the table's own
+ * `$inferSelect`.
+ */
+export class CheckRecords<T extends PgTable> {
+  private readonly name: string;
+  private readonly columns: Record<string, Column>;
+  private readonly id: Column;
+  private readonly workshop: Column;
+  private readonly parent: Column;
+  private readonly time: Column;
+
+  constructor(
+    private readonly db: Database,
+    private readonly spec: CheckTableSpec<T>,
+  ) {
+    this.name = getTableName(spec.table);
+    this.columns = getTableColumns(spec.table) as Record<string, Column>;
+    const column = (key: string) => {
+      const found = this.columns[key];
+      if (!found) throw new Error(`${this.name} has no column ${key}`);
+      return found;
+    };
+    this.id = column('id');
+    this.workshop = column('workshopId');
+    this.parent = column(spec.parent);
+    this.time = column(spec.time ?? 'createdAt');
+  }
+
+  /**
+   * A page of the parent's records, newest first (ties by id): `limit + 1` rows, so the caller
+   * knows whether another page follows. The cursor is the id of the last record of the page
+   * before; one of another parent or workshop matches nothing, so the page is empty.
+   */
+  page(workshopId: string, parentId: string, afterId: string | null, limit: number): Promise<T['$inferSelect'][]> {
+    const table = sql.identifier(this.name);
+    const col = (c: Column) => sql.identifier(c.name);
+    const after = afterId
+      ? sql`and (${this.time}, ${this.id}) < (select c.${col(this.time)}, c.${col(this.id)} from ${table} c where c.${col(this.id)} = ${afterId} and c.${col(this.workshop)} = ${workshopId} and c.${col(this.parent)} = ${parentId})`
+      : sql``;
+    return this.select()
+      .where(sql`${this.workshop} = ${workshopId} and ${this.parent} = ${parentId} ${after}`)
+      .orderBy(sql`${this.time} desc, ${this.id} desc`)
+      .limit(limit + 1) as Promise<T['$inferSelect'][]>;
+  }
+
+  /** The record with this id under this parent, or null. */
+  async find(workshopId: string, parentId: string, id: string): Promise<T['$inferSelect'] | null> {
+    const [row] = await this.select().where(
+      and(eq(this.workshop, workshopId), eq(this.parent, parentId), eq(this.id, id)),
+    );
+    return (row as T['$inferSelect'] | undefined) ?? null;
+  }
+
+  /** The record with this id in the workshop, whatever its parent (evidence and signing name it by id alone). */
+  async byId(workshopId: string, id: string): Promise<T['$inferSelect'] | null> {
+    const [row] = await this.select().where(and(eq(this.workshop, workshopId), eq(this.id, id)));
+    return (row as T['$inferSelect'] | undefined) ?? null;
+  }
+
+  async insert(values: T['$inferInsert']): Promise<T['$inferSelect']> {
+    const [row] = await this.db
+      .insert(this.spec.table)
+      .values(values as never)
+      .returning();
+    return row as T['$inferSelect'];
+  }
+
+  async delete(workshopId: string, id: string): Promise<void> {
+    await this.db.delete(this.spec.table).where(and(eq(this.workshop, workshopId), eq(this.id, id)));
+  }
+
+  /**
+   * The newest record of each parent listed (ties by id), keyed by parent: one index step per
+   * parent, so the cost does not grow with the records kept. A parent without records is absent.
+   */
+  async latest(workshopId: string, parentIds: string[]): Promise<Map<string, T['$inferSelect']>> {
+    if (!parentIds.length) return new Map();
+    const col = (c: Column) => sql.identifier(c.name);
+    const { rows } = await this.db.execute<Record<string, unknown>>(sql`
+      select n.* from unnest(${uuidArray([...new Set(parentIds)])}) as p(id)
+      cross join lateral (
+        select x.* from ${sql.identifier(this.name)} x
+        where x.${col(this.workshop)} = ${workshopId} and x.${col(this.parent)} = p.id
+        order by x.${col(this.time)} desc, x.${col(this.id)} desc limit 1
+      ) n`);
+    const found = new Map<string, T['$inferSelect']>();
+    for (const raw of rows) {
+      const row = this.fromDriver(raw);
+      found.set(row[this.spec.parent] as string, row);
+    }
+    return found;
+  }
+
+  private select() {
+    return this.db.select().from(this.spec.table as PgTable);
+  }
+
+  /** A raw row (SQL names, driver values) as the query builder would have returned it. */
+  private fromDriver(raw: Record<string, unknown>): T['$inferSelect'] {
+    const row: Record<string, unknown> = {};
+    for (const [key, column] of Object.entries(this.columns)) {
+      const value = raw[column.name];
+      row[key] = value === null || value === undefined ? null : column.mapFromDriverValue(value);
+    }
+    return row as T['$inferSelect'];
+  }
+}
