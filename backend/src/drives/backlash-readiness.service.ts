@@ -1,7 +1,7 @@
 import { Injectable, OnModuleInit } from '@nestjs/common';
 import { UNREADABLE_RESULT } from '../common/stored-result.js';
 import { fromMm, isLengthUnit } from '../engine/units.js';
-import { CheckRecordsRepository } from '../records/check-records.repository.js';
+import { CheckRecordsRepository, type CheckRecordsOf } from '../records/check-records.repository.js';
 import { targetIn, type MachineRef, type ReadinessCheck, type ReadinessContext } from '../records/readiness.js';
 import { ReadinessRegistry } from '../records/readiness.registry.js';
 import { TARGET_LABELS } from '../target-sets/target-keys.js';
@@ -16,7 +16,7 @@ import { BACKLASH_RECORD } from './backlash.service.js';
  */
 @Injectable()
 export class BacklashReadinessService implements OnModuleInit {
-  private readonly repo;
+  private readonly repo: CheckRecordsOf<typeof BACKLASH_RECORD>;
 
   constructor(
     private readonly axes: AxesRepository,

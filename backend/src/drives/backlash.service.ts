@@ -4,7 +4,7 @@ import { evaluateBacklash } from '../engine/backlash.js';
 import { arrayToMm, fromMm, toMm } from '../engine/units.js';
 import { MachinesService } from '../machines/machines.service.js';
 import type { CheckRecordRow } from '../records/check-record-tables.js';
-import { CheckRecordsRepository } from '../records/check-records.repository.js';
+import { CheckRecordsRepository, type CheckRecordsOf } from '../records/check-records.repository.js';
 import { DEFAULT_PAGE_SIZE } from '../records/page-cursor.js';
 import type { PageQuery } from '../records/page.query.js';
 import { RecordsService } from '../records/records.service.js';
@@ -21,7 +21,7 @@ type BacklashCheckRow = CheckRecordRow<typeof BACKLASH_RECORD>;
 /** Backlash checks of an axis: readings from both sides at both ends and the middle of its travel. */
 @Injectable()
 export class BacklashService implements OnModuleInit {
-  private readonly repo;
+  private readonly repo: CheckRecordsOf<typeof BACKLASH_RECORD>;
 
   constructor(
     checkRecords: CheckRecordsRepository,

@@ -3,6 +3,9 @@ import { DRIZZLE, type Database } from '../database/database.tokens.js';
 import { CHECK_RECORD_TABLES, type CheckRecordTable, type CheckRecordType } from './check-record-tables.js';
 import { CheckRecords } from './check-records.js';
 
+/** The repository of one record type's checks. */
+export type CheckRecordsOf<K extends CheckRecordType> = CheckRecords<CheckRecordTable<K>>;
+
 /** The check records of every table in CHECK_RECORD_TABLES, one `CheckRecords` per record type. */
 @Injectable()
 export class CheckRecordsRepository {
@@ -10,12 +13,12 @@ export class CheckRecordsRepository {
 
   constructor(@Inject(DRIZZLE) private readonly db: Database) {}
 
-  of<K extends CheckRecordType>(type: K): CheckRecords<CheckRecordTable<K>> {
+  of<K extends CheckRecordType>(type: K): CheckRecordsOf<K> {
     let records = this.made.get(type);
     if (!records) {
       records = new CheckRecords(this.db, CHECK_RECORD_TABLES[type] as never);
       this.made.set(type, records);
     }
-    return records as unknown as CheckRecords<CheckRecordTable<K>>;
+    return records as unknown as CheckRecordsOf<K>;
   }
 }
