@@ -104,6 +104,37 @@ describe('check records: the shared repository', () => {
     expect(await records.page(other.id, xId, null, 50)).toEqual([]);
   });
 
+  it('gives the newest few of a parent as a whole list', async () => {
+    expect((await records.newest(ws.id, xId, 3)).map((r) => r.id)).toEqual(xNewestFirst.slice(0, 3));
+    expect((await records.newest(ws.id, xId, 1)).map((r) => r.id)).toEqual([idOf(6)]);
+    expect(await records.newest(ws.id, emptyAxisId, 5)).toEqual([]);
+  });
+
+  it('orders a table that keeps its own time (recorded_at) by that time, under a machine', async () => {
+    const diagonals = app.get(CheckRecordsRepository).of('diagonal-check');
+    const diagonal = (id: string, recordedAt: Date) =>
+      diagonals.insert({
+        id,
+        workshopId: ws.id,
+        machineId,
+        sideXMm: 800,
+        sideYMm: 500,
+        diagonal1Mm: 943.4,
+        diagonal2Mm: 943.6,
+        recordedByName: 'Paging test',
+        recordedAt,
+      });
+    // Inserted newest first, so the order of insertion cannot pass for the order of time.
+    await diagonal(idOf(21), new Date(base + 60_000));
+    await diagonal(idOf(20), new Date(base));
+    await diagonal(idOf(22), new Date(base));
+    expect((await diagonals.newest(ws.id, machineId, 10)).map((r) => r.id)).toEqual([idOf(21), idOf(22), idOf(20)]);
+    expect((await diagonals.page(ws.id, machineId, idOf(22), 10)).map((r) => r.id)).toEqual([idOf(20)]);
+    const latest = (await diagonals.latest(ws.id, [machineId])).get(machineId);
+    expect(latest).toEqual(await diagonals.byId(ws.id, idOf(21)));
+    expect(latest?.recordedAt.toISOString()).toBe(new Date(base + 60_000).toISOString());
+  });
+
   it('finds a record only under its own parent, and by id only in its own workshop', async () => {
     expect((await records.find(ws.id, xId, idOf(5)))?.id).toBe(idOf(5));
     expect(await records.find(ws.id, yId, idOf(5))).toBeNull();

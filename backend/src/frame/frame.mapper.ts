@@ -3,7 +3,11 @@ import { fromMm, type LengthUnit } from '../engine/units.js';
 import type { CheckStatus } from '../records/readiness.js';
 import type { BedGridResult } from './bed-grid-result.js';
 import type { DiagonalCheckResult } from './diagonal-check-result.js';
-import type { BedGridRow, DiagonalCheckRow, TestCutRow } from './frame.repository.js';
+import type { CheckRecordRow } from '../records/check-record-tables.js';
+
+type DiagonalCheckRow = CheckRecordRow<'diagonal-check'>;
+type BedGridRow = CheckRecordRow<'bed-grid'>;
+type TestCutRow = CheckRecordRow<'test-cut'>;
 import type { TestCutResult } from './test-cut-result.js';
 import { finiteOrNull, UNREADABLE_INPUT } from '../common/stored-result.js';
 import type { ResultWarning } from '../engine/warnings.js';

@@ -7375,12 +7375,12 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
               "kind": {
                 "type": "string",
                 "enum": [
-                  "positioning",
                   "travel-trial",
                   "diagonal-check",
                   "bed-grid",
                   "test-cut",
                   "safety-walk",
+                  "positioning",
                   "rail-straightness",
                   "rail-parallelism",
                   "backlash",
@@ -7472,13 +7472,13 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
                 "type": "string",
                 "enum": [
                   "axis",
-                  "backlash-check",
                   "machine",
                   "rail",
                   "rail-sweep",
                   "bolt-down",
                   "travel-trial",
                   "positioning-run",
+                  "backlash-check",
                   "diagonal-check",
                   "bed-grid",
                   "test-cut",
@@ -7596,12 +7596,12 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
               "kind": {
                 "type": "string",
                 "enum": [
-                  "positioning",
                   "travel-trial",
                   "diagonal-check",
                   "bed-grid",
                   "test-cut",
                   "safety-walk",
+                  "positioning",
                   "rail-straightness",
                   "rail-parallelism",
                   "backlash",
@@ -8009,12 +8009,12 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
                   "kind": {
                     "type": "string",
                     "enum": [
-                      "positioning",
                       "travel-trial",
                       "diagonal-check",
                       "bed-grid",
                       "test-cut",
                       "safety-walk",
+                      "positioning",
                       "rail-straightness",
                       "rail-parallelism",
                       "backlash",
@@ -9273,12 +9273,12 @@ export const RESPONSE_SCHEMAS: ResponseSchemas = {
         "kind": {
           "type": "string",
           "enum": [
-            "positioning",
             "travel-trial",
             "diagonal-check",
             "bed-grid",
             "test-cut",
             "safety-walk",
+            "positioning",
             "rail-straightness",
             "rail-parallelism",
             "backlash",

@@ -1,4 +1,4 @@
-import { backlashChecks } from '../database/schema/index.js';
+import { backlashChecks, bedGrids, diagonalChecks, testCuts } from '../database/schema/index.js';
 import { checkTable } from './check-records.js';
 import type { SignedRecordType } from './kinds.js';
 
@@ -8,6 +8,9 @@ import type { SignedRecordType } from './kinds.js';
  */
 export const CHECK_RECORD_TABLES = {
   'backlash-check': checkTable({ table: backlashChecks, parent: 'axisId' }),
+  'diagonal-check': checkTable({ table: diagonalChecks, parent: 'machineId', time: 'recordedAt' }),
+  'bed-grid': checkTable({ table: bedGrids, parent: 'machineId', time: 'recordedAt' }),
+  'test-cut': checkTable({ table: testCuts, parent: 'machineId', time: 'recordedAt' }),
 } satisfies { [K in SignedRecordType]?: unknown };
 
 export type CheckRecordType = keyof typeof CHECK_RECORD_TABLES;

@@ -72,6 +72,11 @@ export class CheckRecords<T extends PgTable> {
       .limit(limit + 1) as Promise<T['$inferSelect'][]>;
   }
 
+  /** The parent's newest `count` records, newest first (ties by id): a list shown whole, or the newest alone. */
+  newest(workshopId: string, parentId: string, count: number): Promise<T['$inferSelect'][]> {
+    return this.page(workshopId, parentId, null, count - 1);
+  }
+
   /** The record with this id under this parent, or null. */
   async find(workshopId: string, parentId: string, id: string): Promise<T['$inferSelect'] | null> {
     const [row] = await this.select().where(

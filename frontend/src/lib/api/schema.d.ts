@@ -2534,7 +2534,7 @@ export interface components {
         BlockingCheckRef: {
             key: string;
             /** @enum {string} */
-            kind: "positioning" | "travel-trial" | "diagonal-check" | "bed-grid" | "test-cut" | "safety-walk" | "rail-straightness" | "rail-parallelism" | "backlash" | "speed-check" | "travel-envelope";
+            kind: "travel-trial" | "diagonal-check" | "bed-grid" | "test-cut" | "safety-walk" | "positioning" | "rail-straightness" | "rail-parallelism" | "backlash" | "speed-check" | "travel-envelope";
             subject: string;
             /** @enum {string} */
             status: "outside-target" | "not-started";
@@ -10724,7 +10724,7 @@ export interface operations {
                             hasSeries: boolean;
                             key: string;
                             /** @enum {string} */
-                            kind: "positioning" | "travel-trial" | "diagonal-check" | "bed-grid" | "test-cut" | "safety-walk" | "rail-straightness" | "rail-parallelism" | "backlash" | "speed-check" | "travel-envelope";
+                            kind: "travel-trial" | "diagonal-check" | "bed-grid" | "test-cut" | "safety-walk" | "positioning" | "rail-straightness" | "rail-parallelism" | "backlash" | "speed-check" | "travel-envelope";
                             subject: string;
                             /** @enum {string} */
                             status: "within-target" | "outside-target" | "not-started" | "waived";
@@ -10750,7 +10750,7 @@ export interface operations {
                                 summary: string;
                             } | null;
                             /** @enum {string|null} */
-                            recordType: "axis" | "backlash-check" | "machine" | "rail" | "rail-sweep" | "bolt-down" | "travel-trial" | "positioning-run" | "diagonal-check" | "bed-grid" | "test-cut" | "safety-walk" | "waiver" | null;
+                            recordType: "axis" | "machine" | "rail" | "rail-sweep" | "bolt-down" | "travel-trial" | "positioning-run" | "backlash-check" | "diagonal-check" | "bed-grid" | "test-cut" | "safety-walk" | "waiver" | null;
                             recordId: string | null;
                             recordedAt: string | null;
                             /** @description Where the check's record is shown (snapshots taken before it was kept name a screen path, `link`, instead). */
@@ -10772,7 +10772,7 @@ export interface operations {
                         blocking: {
                             key: string;
                             /** @enum {string} */
-                            kind: "positioning" | "travel-trial" | "diagonal-check" | "bed-grid" | "test-cut" | "safety-walk" | "rail-straightness" | "rail-parallelism" | "backlash" | "speed-check" | "travel-envelope";
+                            kind: "travel-trial" | "diagonal-check" | "bed-grid" | "test-cut" | "safety-walk" | "positioning" | "rail-straightness" | "rail-parallelism" | "backlash" | "speed-check" | "travel-envelope";
                             subject: string;
                             /** @enum {string} */
                             status: "within-target" | "outside-target" | "not-started" | "waived";
@@ -11289,7 +11289,7 @@ export interface operations {
                         rows: {
                             key: string;
                             /** @enum {string} */
-                            kind: "positioning" | "travel-trial" | "diagonal-check" | "bed-grid" | "test-cut" | "safety-walk" | "rail-straightness" | "rail-parallelism" | "backlash" | "speed-check" | "travel-envelope";
+                            kind: "travel-trial" | "diagonal-check" | "bed-grid" | "test-cut" | "safety-walk" | "positioning" | "rail-straightness" | "rail-parallelism" | "backlash" | "speed-check" | "travel-envelope";
                             subject: string;
                             target: {
                                 /** @description In the `unit` stored beside it. */
