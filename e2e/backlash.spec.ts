@@ -116,6 +116,63 @@ test.describe('backlash check', () => {
     await viewer.close();
   });
 
+  test('a check typed without a connection waits where it will land, is recorded once when it returns, and one recorded in error is deleted', async ({
+    page,
+    context,
+  }) => {
+    await signInAs(page, DEMO.technician);
+    const { machineId, axisId } = await newAxis(page.request, `Backlash test ${Date.now()}`);
+    const listPath = `/api/axes/${axisId}/backlash-checks`;
+    const keys: string[] = [];
+    page.on('request', (r) => {
+      if (r.method() === 'POST' && new URL(r.url()).pathname === listPath) keys.push(r.headers()['idempotency-key']);
+    });
+    const positions = READINGS.map((r, i) => ({
+      position: [46, 463, 900][i],
+      up: r.up.map(Number),
+      down: r.down.map(Number),
+    }));
+    const first = await page.request.post(listPath, { data: { readingUnit: 'um', positions, notes: 'First mount' } });
+    expect(first.status()).toBe(201);
+    await page.goto(`/machines/${machineId}/axes/${axisId}`);
+    const section = page.getByRole('region', { name: 'Backlash check' });
+    const result = page.getByRole('region', { name: 'Backlash result' });
+    await expect(result).toContainText('First mount', { timeout: 30_000 });
+
+    await context.setOffline(true);
+    await pickReadingUnit(page, 'µm');
+    await page.getByLabel('Position 3', { exact: true }).fill('900');
+    for (let r = 0; r < 3; r++) {
+      for (let i = 0; i < 3; i++) {
+        await page.getByLabel(`Up ${i + 1} at position ${r + 1}`).fill(READINGS[r].up[i]);
+        await page.getByLabel(`Down ${i + 1} at position ${r + 1}`).fill(READINGS[r].down[i]);
+      }
+    }
+    await section.getByLabel('Notes', { exact: true }).fill('Gib tightened');
+    await page.getByRole('button', { name: 'Record backlash check' }).click();
+    // Shown waiting in the form, which is free for the next check.
+    await expect(section.getByLabel('Entries waiting to be sent')).toContainText(
+      'Backlash check of axis X (3 positions)',
+    );
+    await expect(page.getByLabel('Up 1 at position 1')).toHaveValue('');
+
+    await context.setOffline(false);
+    await expect(section.getByLabel('Entries waiting to be sent')).toHaveCount(0, { timeout: 30_000 });
+    // The list is asked again: the new check is shown, the first one offered in the picker.
+    await expect(result).toContainText('Gib tightened');
+    await expect(page.getByLabel('Showing the check of')).toBeVisible();
+    const recorded = (await (await page.request.get(listPath)).json()) as { notes: string }[];
+    expect(recorded.map((c) => c.notes)).toEqual(['Gib tightened', 'First mount']);
+    expect(new Set(keys).size).toBe(1);
+
+    await result.getByRole('button', { name: 'Delete this backlash check' }).click();
+    await result.getByRole('button', { name: 'Delete', exact: true }).click();
+    await expect(result).toContainText('First mount');
+    await expect(page.getByLabel('Showing the check of')).toHaveCount(0);
+    const left = (await (await page.request.get(listPath)).json()) as { notes: string }[];
+    expect(left.map((c) => c.notes)).toEqual(['First mount']);
+  });
+
   test('the test program shows the server target list and keeps a note inside its comment', async ({ page }) => {
     await signInAs(page, DEMO.technician);
     const { machineId, axisId } = await newAxis(page.request, `Backlash test ${Date.now()}`);

@@ -1,13 +1,15 @@
 import { Injectable, OnModuleInit } from '@nestjs/common';
 import { UNREADABLE_RESULT } from '../common/stored-result.js';
 import { fromMm, isLengthUnit } from '../engine/units.js';
+import type { backlashChecks } from '../database/schema/index.js';
+import type { CheckRecords } from '../records/check-records.js';
+import { CheckRecordsRepository } from '../records/check-records.repository.js';
 import { targetIn, type MachineRef, type ReadinessCheck, type ReadinessContext } from '../records/readiness.js';
 import { ReadinessRegistry } from '../records/readiness.registry.js';
 import { TARGET_LABELS } from '../target-sets/target-keys.js';
 import { AxesRepository } from './axes.repository.js';
 import { backlashStatus, BACKLASH_DEFINITION, storedBacklash, warningsOf } from './backlash.mapper.js';
-import { BacklashRepository } from './backlash.repository.js';
-import { BACKLASH_RECORD } from './backlash.service.js';
+import { BACKLASH_RECORD, BACKLASH_TABLE } from './backlash.service.js';
 
 /**
  * The backlash check of each axis on the readiness board: the latest check's largest value
@@ -16,11 +18,15 @@ import { BACKLASH_RECORD } from './backlash.service.js';
  */
 @Injectable()
 export class BacklashReadinessService implements OnModuleInit {
+  private readonly repo: CheckRecords<typeof backlashChecks>;
+
   constructor(
     private readonly axes: AxesRepository,
-    private readonly repo: BacklashRepository,
+    checkRecords: CheckRecordsRepository,
     private readonly readiness: ReadinessRegistry,
-  ) {}
+  ) {
+    this.repo = checkRecords.of(BACKLASH_TABLE);
+  }
 
   onModuleInit() {
     this.readiness.register({ checksFor: (machine, context) => this.checksFor(machine, context) });

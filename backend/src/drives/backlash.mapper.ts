@@ -3,7 +3,7 @@ import { backlashWarnings, type BacklashResult } from '../engine/backlash.js';
 import { fromMm, isLengthUnit, toMm, type LengthUnit } from '../engine/units.js';
 import type { ResultWarning } from '../engine/warnings.js';
 import { readableResult, UNREADABLE_RESULT } from '../common/stored-result.js';
-import type { BacklashCheckRow } from './backlash.repository.js';
+import type { BacklashCheckRow } from './backlash.service.js';
 import type { Target } from './drive-targets.js';
 
 /** The definition, said the same way on every screen and in every response. */

@@ -3,6 +3,9 @@ import type { SessionUser } from '../auth/session-user.js';
 import { evaluateBacklash } from '../engine/backlash.js';
 import { arrayToMm, fromMm, toMm } from '../engine/units.js';
 import { MachinesService } from '../machines/machines.service.js';
+import { backlashChecks } from '../database/schema/index.js';
+import { checkTable, type CheckRecords } from '../records/check-records.js';
+import { CheckRecordsRepository } from '../records/check-records.repository.js';
 import { DEFAULT_PAGE_SIZE } from '../records/page-cursor.js';
 import type { PageQuery } from '../records/page.query.js';
 import { RecordsService } from '../records/records.service.js';
@@ -10,23 +13,29 @@ import { SubjectsRegistry } from '../records/subjects.registry.js';
 import { AxesService } from './axes.service.js';
 import { positionProblems } from './backlash-positions.js';
 import { toBacklashResponse } from './backlash.mapper.js';
-import { BacklashRepository, type BacklashCheckRow } from './backlash.repository.js';
 import { DriveTargetsService } from './drive-targets.js';
 import type { CreateBacklashCheckDto } from './dto/backlash.dto.js';
 
 export const BACKLASH_RECORD = 'backlash-check';
+/** Where backlash checks are kept: under their axis. */
+export const BACKLASH_TABLE = checkTable({ type: BACKLASH_RECORD, table: backlashChecks, parent: 'axisId' });
+export type BacklashCheckRow = typeof backlashChecks.$inferSelect;
 
 /** Backlash checks of an axis: readings from both sides at both ends and the middle of its travel. */
 @Injectable()
 export class BacklashService implements OnModuleInit {
+  private readonly repo: CheckRecords<typeof backlashChecks>;
+
   constructor(
-    private readonly repo: BacklashRepository,
+    checkRecords: CheckRecordsRepository,
     private readonly axes: AxesService,
     private readonly machines: MachinesService,
     private readonly targets: DriveTargetsService,
     private readonly records: RecordsService,
     private readonly subjects: SubjectsRegistry,
-  ) {}
+  ) {
+    this.repo = checkRecords.of(BACKLASH_TABLE);
+  }
 
   onModuleInit() {
     this.subjects.register(BACKLASH_RECORD, async (workshopId, id) => {

@@ -7,7 +7,6 @@ import { AxisChecksController } from './axis-checks.controller.js';
 import { AxisChecksRepository } from './axis-checks.repository.js';
 import { BacklashController } from './backlash.controller.js';
 import { BacklashReadinessService } from './backlash-readiness.service.js';
-import { BacklashRepository } from './backlash.repository.js';
 import { BacklashService } from './backlash.service.js';
 import { DriveChecksService } from './drive-checks.service.js';
 import { DriveTargetsService } from './drive-targets.js';
@@ -28,7 +27,6 @@ import { TravelTrialsService } from './travel-trials.service.js';
     PositioningRunsService,
     DriveChecksService,
     TestProgramService,
-    BacklashRepository,
     BacklashService,
     BacklashReadinessService,
   ],

@@ -1,4 +1,7 @@
 import type { SubjectRef } from '../records/subjects.registry.js';
+import { bedGrids } from '../database/schema/index.js';
+import { checkTable, type CheckRecords } from '../records/check-records.js';
+import { CheckRecordsRepository } from '../records/check-records.repository.js';
 import { BadRequestException, Injectable, NotFoundException } from '@nestjs/common';
 import type { SessionUser } from '../auth/session-user.js';
 import type { BedGridPointMm } from '../database/schema/frame.js';
@@ -12,7 +15,6 @@ import type { CreateBedGridDto } from './dto/create-bed-grid.dto.js';
 import { FrameTargets, frameTargetIn, judge, type TargetOf } from './frame-targets.js';
 import { bedGridWarnings, show } from './frame-warnings.js';
 import { toBedGridResponse, type BedGridResponse } from './frame.mapper.js';
-import { FrameRepository, type BedGridRow } from './frame.repository.js';
 
 /** The numbers the readers of a bed grid use, computed again from its stored points. */
 const BED_GRID_SHAPE = [
@@ -28,17 +30,26 @@ const BED_GRID_SHAPE = [
 ];
 
 export const BED_GRID = 'bed-grid';
+/** Where bed grids are kept: under their machine, newest by the time recorded. */
+export const BED_GRID_TABLE = checkTable({ type: BED_GRID, table: bedGrids, parent: 'machineId', time: 'recordedAt' });
+export type BedGridRow = typeof bedGrids.$inferSelect;
+/** The list shows at most this many, newest first. */
+const LISTED = 100;
 
 type GridMachine = Pick<MachineRef, 'kind' | 'workAreaXMm' | 'workAreaYMm'>;
 
 @Injectable()
 export class BedGridsService {
+  private readonly repo: CheckRecords<typeof bedGrids>;
+
   constructor(
-    private readonly repo: FrameRepository,
+    checkRecords: CheckRecordsRepository,
     private readonly machines: MachinesService,
     private readonly targets: FrameTargets,
     private readonly records: RecordsService,
-  ) {}
+  ) {
+    this.repo = checkRecords.of(BED_GRID_TABLE);
+  }
 
   async create(actor: SessionUser, machineId: string, dto: CreateBedGridDto): Promise<BedGridResponse> {
     const machine = await this.machines.getRef(actor, machineId);
@@ -60,7 +71,7 @@ export class BedGridsService {
     }));
     // Evaluated before saving: a grid the engine refuses (all on one line, repeated positions) is never stored.
     bedGridResult(points, judgedBasisFor(machine.kind));
-    const row = await this.repo.insertBedGrid({
+    const row = await this.repo.insert({
       workshopId: actor.workshopId,
       machineId: machine.id,
       lengthUnit,
@@ -86,10 +97,10 @@ export class BedGridsService {
   /** Removes a record entered by mistake; one an approval was based on is kept (409). */
   async remove(actor: SessionUser, machineId: string, id: string): Promise<void> {
     const machine = await this.machines.getRef(actor, machineId);
-    const row = await this.repo.findBedGrid(actor.workshopId, id);
+    const row = await this.repo.byId(actor.workshopId, id);
     if (!row || row.machineId !== machine.id) throw new NotFoundException('No such bed grid on this machine');
     await this.records.assertEditable(BED_GRID, row.id, 'This bed grid');
-    await this.repo.deleteBedGrid(actor.workshopId, row.id);
+    await this.repo.delete(actor.workshopId, row.id);
     await this.records.audit(actor, {
       machineId: machine.id,
       recordType: BED_GRID,
@@ -101,7 +112,7 @@ export class BedGridsService {
 
   async list(actor: SessionUser, machineId: string): Promise<BedGridResponse[]> {
     const machine = await this.machines.getRef(actor, machineId);
-    const rows = await this.repo.listBedGrids(actor.workshopId, machine.id);
+    const rows = await this.repo.newest(actor.workshopId, machine.id, LISTED);
     const locked = await this.records.lockedIds(
       BED_GRID,
       rows.map((r) => r.id),
@@ -111,7 +122,7 @@ export class BedGridsService {
   }
 
   async readiness(machine: MachineRef, context: ReadinessContext): Promise<ReadinessCheck> {
-    const [row] = await this.repo.listBedGrids(machine.workshopId, machine.id, 1);
+    const [row] = await this.repo.newest(machine.workshopId, machine.id, 1);
     const t = frameTargetIn(context, 'bedFlatness');
     const base: ReadinessCheck = {
       key: `${BED_GRID}:${machine.id}`,
@@ -157,7 +168,7 @@ export class BedGridsService {
   }
 
   async resolve(workshopId: string, id: string): Promise<SubjectRef | null> {
-    const row = await this.repo.findBedGrid(workshopId, id);
+    const row = await this.repo.byId(workshopId, id);
     return row
       ? {
           machineId: row.machineId,

@@ -1,4 +1,7 @@
 import type { SubjectRef } from '../records/subjects.registry.js';
+import { diagonalChecks } from '../database/schema/index.js';
+import { checkTable, type CheckRecords } from '../records/check-records.js';
+import { CheckRecordsRepository } from '../records/check-records.repository.js';
 import { BadRequestException, Injectable, NotFoundException } from '@nestjs/common';
 import type { SessionUser } from '../auth/session-user.js';
 import { toMm } from '../engine/units.js';
@@ -9,7 +12,6 @@ import { diagonalCheckResult, impossibleDiagonals, type DiagonalInputMm } from '
 import type { CreateDiagonalCheckDto } from './dto/create-diagonal-check.dto.js';
 import { FrameTargets, frameTargetIn, judge, type TargetOf } from './frame-targets.js';
 import { toDiagonalCheckResponse, type DiagonalCheckResponse } from './frame.mapper.js';
-import { FrameRepository, type DiagonalCheckRow } from './frame.repository.js';
 import { readableComputation } from '../common/stored-result.js';
 import { diagonalWarnings } from './frame-warnings.js';
 
@@ -18,15 +20,29 @@ const DIAGONAL_SHAPE = ['mmPerMetre', 'outOfSquareArcsec', 'correction.moveMm'];
 const storedDiagonal = (row: DiagonalCheckRow) => readableComputation(() => diagonalCheckResult(row), DIAGONAL_SHAPE);
 
 export const DIAGONAL_CHECK = 'diagonal-check';
+/** Where diagonal checks are kept: under their machine, newest by the time recorded. */
+export const DIAGONAL_CHECK_TABLE = checkTable({
+  type: DIAGONAL_CHECK,
+  table: diagonalChecks,
+  parent: 'machineId',
+  time: 'recordedAt',
+});
+export type DiagonalCheckRow = typeof diagonalChecks.$inferSelect;
+/** The list shows at most this many, newest first. */
+const LISTED = 200;
 
 @Injectable()
 export class DiagonalChecksService {
+  private readonly repo: CheckRecords<typeof diagonalChecks>;
+
   constructor(
-    private readonly repo: FrameRepository,
+    checkRecords: CheckRecordsRepository,
     private readonly machines: MachinesService,
     private readonly targets: FrameTargets,
     private readonly records: RecordsService,
-  ) {}
+  ) {
+    this.repo = checkRecords.of(DIAGONAL_CHECK_TABLE);
+  }
 
   async create(actor: SessionUser, machineId: string, dto: CreateDiagonalCheckDto): Promise<DiagonalCheckResponse> {
     const machine = await this.machines.getRef(actor, machineId);
@@ -42,7 +58,7 @@ export class DiagonalChecksService {
     if (impossible.length) throw new BadRequestException(impossible);
     // Evaluated before saving so input the engine refuses is never stored.
     diagonalCheckResult(input);
-    const row = await this.repo.insertDiagonalCheck({
+    const row = await this.repo.insert({
       workshopId: actor.workshopId,
       machineId: machine.id,
       lengthUnit: unit,
@@ -70,10 +86,10 @@ export class DiagonalChecksService {
   /** Removes a record entered by mistake; one an approval was based on is kept (409). */
   async remove(actor: SessionUser, machineId: string, id: string): Promise<void> {
     const machine = await this.machines.getRef(actor, machineId);
-    const row = await this.repo.findDiagonalCheck(actor.workshopId, id);
+    const row = await this.repo.byId(actor.workshopId, id);
     if (!row || row.machineId !== machine.id) throw new NotFoundException('No such diagonal check on this machine');
     await this.records.assertEditable(DIAGONAL_CHECK, row.id, 'This diagonal check');
-    await this.repo.deleteDiagonalCheck(actor.workshopId, row.id);
+    await this.repo.delete(actor.workshopId, row.id);
     await this.records.audit(actor, {
       machineId: machine.id,
       recordType: DIAGONAL_CHECK,
@@ -85,7 +101,7 @@ export class DiagonalChecksService {
 
   async list(actor: SessionUser, machineId: string): Promise<DiagonalCheckResponse[]> {
     const machine = await this.machines.getRef(actor, machineId);
-    const rows = await this.repo.listDiagonalChecks(actor.workshopId, machine.id);
+    const rows = await this.repo.newest(actor.workshopId, machine.id, LISTED);
     const locked = await this.records.lockedIds(
       DIAGONAL_CHECK,
       rows.map((r) => r.id),
@@ -96,7 +112,7 @@ export class DiagonalChecksService {
 
   async readiness(machine: MachineRef, context: ReadinessContext): Promise<ReadinessCheck> {
     // The squaring history is read only for the certificate's chart; the board needs the newest check.
-    const rows = await this.repo.listDiagonalChecks(machine.workshopId, machine.id, context.series ? 30 : 1);
+    const rows = await this.repo.newest(machine.workshopId, machine.id, context.series ? 30 : 1);
     const row = rows[0];
     const t = frameTargetIn(context, 'squareness');
     const { target } = t;
@@ -159,7 +175,7 @@ export class DiagonalChecksService {
   }
 
   async resolve(workshopId: string, id: string): Promise<SubjectRef | null> {
-    const row = await this.repo.findDiagonalCheck(workshopId, id);
+    const row = await this.repo.byId(workshopId, id);
     return row
       ? {
           machineId: row.machineId,

@@ -3,7 +3,10 @@ import { fromMm, type LengthUnit } from '../engine/units.js';
 import type { CheckStatus } from '../records/readiness.js';
 import type { BedGridResult } from './bed-grid-result.js';
 import type { DiagonalCheckResult } from './diagonal-check-result.js';
-import type { BedGridRow, DiagonalCheckRow, TestCutRow } from './frame.repository.js';
+
+import type { DiagonalCheckRow } from './diagonal-checks.service.js';
+import type { BedGridRow } from './bed-grids.service.js';
+import type { TestCutRow } from './test-cuts.service.js';
 import type { TestCutResult } from './test-cut-result.js';
 import { finiteOrNull, UNREADABLE_INPUT } from '../common/stored-result.js';
 import type { ResultWarning } from '../engine/warnings.js';

@@ -1,4 +1,7 @@
 import type { SubjectRef } from '../records/subjects.registry.js';
+import { testCuts } from '../database/schema/index.js';
+import { checkTable, type CheckRecords } from '../records/check-records.js';
+import { CheckRecordsRepository } from '../records/check-records.repository.js';
 import { BadRequestException, Injectable, NotFoundException } from '@nestjs/common';
 import type { SessionUser } from '../auth/session-user.js';
 import type { TestCutSizesMm } from '../database/schema/frame.js';
@@ -9,7 +12,6 @@ import { RecordsService } from '../records/records.service.js';
 import type { CreateTestCutDto } from './dto/create-test-cut.dto.js';
 import { FrameTargets, frameTargetIn, type TargetOf } from './frame-targets.js';
 import { toTestCutResponse, type FrameStatus, type TestCutResponse } from './frame.mapper.js';
-import { FrameRepository, type TestCutRow } from './frame.repository.js';
 import { afterKerf, testCutResult, type PartTolerancePolicy, type TestCutResult } from './test-cut-result.js';
 import { readableComputation } from '../common/stored-result.js';
 import { impossibleDiagonals } from './diagonal-check-result.js';
@@ -32,6 +34,11 @@ function policyFor(
 }
 
 export const TEST_CUT = 'test-cut';
+/** Where test cuts are kept: under their machine, newest by the time recorded. */
+export const TEST_CUT_TABLE = checkTable({ type: TEST_CUT, table: testCuts, parent: 'machineId', time: 'recordedAt' });
+export type TestCutRow = typeof testCuts.$inferSelect;
+/** The list shows at most this many, newest first. */
+const LISTED = 100;
 
 interface TestCutTargets {
   part: TargetOf;
@@ -40,12 +47,16 @@ interface TestCutTargets {
 
 @Injectable()
 export class TestCutsService {
+  private readonly repo: CheckRecords<typeof testCuts>;
+
   constructor(
-    private readonly repo: FrameRepository,
+    checkRecords: CheckRecordsRepository,
     private readonly machines: MachinesService,
     private readonly targets: FrameTargets,
     private readonly records: RecordsService,
-  ) {}
+  ) {
+    this.repo = checkRecords.of(TEST_CUT_TABLE);
+  }
 
   async create(actor: SessionUser, machineId: string, dto: CreateTestCutDto): Promise<TestCutResponse> {
     const machine = await this.machines.getRef(actor, machineId);
@@ -81,7 +92,7 @@ export class TestCutsService {
     const targets = await this.targetsOf(machine);
     // Evaluated before saving so input the engine refuses is never stored.
     testCutResult(sizes, policyFor(machine, targets.part.base, plateThicknessMm));
-    const row = await this.repo.insertTestCut({
+    const row = await this.repo.insert({
       workshopId: actor.workshopId,
       machineId: machine.id,
       lengthUnit: unit,
@@ -104,10 +115,10 @@ export class TestCutsService {
   /** Removes a record entered by mistake; one an approval was based on is kept (409). */
   async remove(actor: SessionUser, machineId: string, id: string): Promise<void> {
     const machine = await this.machines.getRef(actor, machineId);
-    const row = await this.repo.findTestCut(actor.workshopId, id);
+    const row = await this.repo.byId(actor.workshopId, id);
     if (!row || row.machineId !== machine.id) throw new NotFoundException('No such test cut on this machine');
     await this.records.assertEditable(TEST_CUT, row.id, 'This test cut');
-    await this.repo.deleteTestCut(actor.workshopId, row.id);
+    await this.repo.delete(actor.workshopId, row.id);
     await this.records.audit(actor, {
       machineId: machine.id,
       recordType: TEST_CUT,
@@ -119,7 +130,7 @@ export class TestCutsService {
 
   async list(actor: SessionUser, machineId: string): Promise<TestCutResponse[]> {
     const machine = await this.machines.getRef(actor, machineId);
-    const rows = await this.repo.listTestCuts(actor.workshopId, machine.id);
+    const rows = await this.repo.newest(actor.workshopId, machine.id, LISTED);
     const locked = await this.records.lockedIds(
       TEST_CUT,
       rows.map((r) => r.id),
@@ -129,7 +140,7 @@ export class TestCutsService {
   }
 
   async readiness(machine: MachineRef, context: ReadinessContext): Promise<ReadinessCheck> {
-    const [row] = await this.repo.listTestCuts(machine.workshopId, machine.id, 1);
+    const [row] = await this.repo.newest(machine.workshopId, machine.id, 1);
     const targets = { part: frameTargetIn(context, 'partTolerance'), squareness: frameTargetIn(context, 'squareness') };
     const base: ReadinessCheck = {
       key: `${TEST_CUT}:${machine.id}`,
@@ -175,7 +186,7 @@ export class TestCutsService {
   }
 
   async resolve(workshopId: string, id: string): Promise<SubjectRef | null> {
-    const row = await this.repo.findTestCut(workshopId, id);
+    const row = await this.repo.byId(workshopId, id);
     return row
       ? {
           machineId: row.machineId,

@@ -1,4 +1,5 @@
 import { Global, Module } from '@nestjs/common';
+import { CheckRecordsRepository } from './check-records.repository.js';
 import { ReadinessRegistry } from './readiness.registry.js';
 import { ReadinessSummaryRepository } from './readiness-summary.repository.js';
 import { ReadinessSummaryService } from './readiness-summary.service.js';
@@ -6,7 +7,7 @@ import { RecordsRepository } from './records.repository.js';
 import { RecordsService } from './records.service.js';
 import { SubjectsRegistry } from './subjects.registry.js';
 
-/** Shared by every domain module: audit history, approval locks, readiness contributors. */
+/** Shared by every domain module: audit history, approval locks, readiness contributors, check records. */
 @Global()
 @Module({
   providers: [
@@ -16,7 +17,8 @@ import { SubjectsRegistry } from './subjects.registry.js';
     SubjectsRegistry,
     ReadinessSummaryRepository,
     ReadinessSummaryService,
+    CheckRecordsRepository,
   ],
-  exports: [RecordsService, ReadinessRegistry, SubjectsRegistry, ReadinessSummaryService],
+  exports: [CheckRecordsRepository, RecordsService, ReadinessRegistry, SubjectsRegistry, ReadinessSummaryService],
 })
 export class RecordsModule {}

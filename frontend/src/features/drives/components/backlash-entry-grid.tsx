@@ -2,11 +2,11 @@ import { useRef, useState, type KeyboardEvent } from 'react';
 import { Alert, Box, Button, MenuItem, Paper, Stack, TextField, Typography } from '@mui/material';
 import { UnitFamilySelect } from '../../../components/form/unit-select';
 import { fromMm, UNIT_LABELS, type LengthUnit } from '../../../lib/units';
-import { backlashChecksPath, useRecordBacklash } from '../api/backlash-record';
+import { useRecordCheck } from '../../../lib/check-records/use-record-check';
 import { removeButtonProps, useUndoRemove } from './undo-remove';
 import { WaitingEntries } from '../../../components/offline/waiting-entries';
 import type { BacklashCheck } from '../backlash-types';
-import type { Axis } from '../types';
+import { driveKeys, type Axis } from '../types';
 import { errorText } from '../utils/format';
 import { numberOf } from './number-input';
 
@@ -39,7 +39,10 @@ export function BacklashEntryGrid({ axis, onRecorded }: { axis: Axis; onRecorded
   const [resolution, setResolution] = useState('');
   const [notes, setNotes] = useState('');
   const grid = useRef<HTMLTableElement>(null);
-  const record = useRecordBacklash(axis.id, axis.name);
+  const record = useRecordCheck('/api/axes/{id}/backlash-checks', axis.id, {
+    label: (input) => `Backlash check of axis ${axis.name} (${input.positions.length} positions)`,
+    refresh: [driveKeys.all],
+  });
   const undo = useUndoRemove();
   const width = approaches * 2;
 
@@ -266,7 +269,7 @@ export function BacklashEntryGrid({ axis, onRecorded }: { axis: Axis; onRecorded
           </Typography>
         )}
         {record.error && <Alert severity="error">{errorText(record.error)}</Alert>}
-        <WaitingEntries path={backlashChecksPath(axis.id)} />
+        <WaitingEntries path={record.path} />
         <Box>
           <Button variant="contained" onClick={submit} disabled={!complete || record.busy}>
             {record.busy ? 'Recording…' : 'Record backlash check'}

@@ -1,7 +1,8 @@
 import { Alert, Box, Paper, Stack, Table, TableBody, TableCell, TableHead, TableRow, Typography } from '@mui/material';
 import { UNIT_LABELS } from '../../../lib/units';
-import { useDeleteBacklash } from '../api/backlash-delete';
+import { useDeleteCheck } from '../../../lib/check-records/use-delete-check';
 import type { BacklashCheck } from '../backlash-types';
+import { driveKeys } from '../types';
 import { showDateTime, showTarget } from '../utils/format';
 import { DeleteRecordButton } from './delete-record-button';
 import { DriveStatusChip } from './drive-status-chip';
@@ -11,7 +12,7 @@ const DIGITS = { mm: 4, um: 1, in: 5, thou: 2 } as const;
 
 /** One backlash check: the largest value against the target, each position, warnings and the definition. */
 export function BacklashResult({ check, mayDelete }: { check: BacklashCheck; mayDelete: boolean }) {
-  const remove = useDeleteBacklash(check.axisId);
+  const remove = useDeleteCheck('/api/axes/{id}/backlash-checks/{checkId}', check.axisId, [driveKeys.all]);
   const ru = UNIT_LABELS[check.readingUnit];
   const lu = UNIT_LABELS[check.lengthUnit];
   const r = check.result;

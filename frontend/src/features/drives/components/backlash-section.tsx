@@ -3,7 +3,8 @@ import { Box, Button, MenuItem, Stack, TextField, Typography } from '@mui/materi
 import { EmptyState } from '../../../components/states/empty-state';
 import { ErrorState } from '../../../components/states/error-state';
 import { LoadingState } from '../../../components/states/loading-state';
-import { useBacklashChecks } from '../api/backlash-checks';
+import { useCheckRecords } from '../../../lib/check-records/use-check-records';
+import { backlashKeys } from '../backlash-types';
 import type { Axis } from '../types';
 import { showDateTime } from '../utils/format';
 import { BacklashEntryGrid } from './backlash-entry-grid';
@@ -11,7 +12,7 @@ import { BacklashResult } from './backlash-result';
 
 /** The backlash check of an axis: entry, the newest result (or one picked) and older ones. */
 export function BacklashSection({ axis, mayRecord }: { axis: Axis; mayRecord: boolean }) {
-  const checks = useBacklashChecks(axis.id);
+  const checks = useCheckRecords('/api/axes/{id}/backlash-checks', axis.id, backlashKeys.list(axis.id));
   const [selected, setSelected] = useState<string | null>(null);
   const list = checks.data ?? [];
   const shown = list.find((c) => c.id === selected) ?? list[0] ?? null;
