@@ -6,6 +6,7 @@ import type { CheckRecords } from '../records/check-records.js';
 import { CheckRecordsRepository } from '../records/check-records.repository.js';
 import { targetIn, type MachineRef, type ReadinessCheck, type ReadinessContext } from '../records/readiness.js';
 import { ReadinessRegistry } from '../records/readiness.registry.js';
+import { axesOf } from './axes-of-machine.js';
 import { TARGET_LABELS } from '../target-sets/target-keys.js';
 import { AxesRepository } from './axes.repository.js';
 import { backlashStatus, BACKLASH_DEFINITION, storedBacklash, warningsOf } from './backlash.mapper.js';
@@ -33,7 +34,7 @@ export class BacklashReadinessService implements OnModuleInit {
   }
 
   async checksFor(machine: MachineRef, context: ReadinessContext): Promise<ReadinessCheck[]> {
-    const rows = await this.axes.list(machine.workshopId, machine.id);
+    const rows = await axesOf(this.axes, machine, context);
     if (!rows.length) return [];
     const latest = await this.repo.latest(
       machine.workshopId,

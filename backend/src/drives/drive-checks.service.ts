@@ -5,6 +5,7 @@ import type { TravelTrialResult } from '../engine/travel-trial.js';
 import { MachinesService } from '../machines/machines.service.js';
 import { targetIn, type MachineRef, type ReadinessCheck, type ReadinessContext } from '../records/readiness.js';
 import { ReadinessRegistry } from '../records/readiness.registry.js';
+import { axesOf } from './axes-of-machine.js';
 import { RecordsService } from '../records/records.service.js';
 import { TARGET_LABELS } from '../target-sets/target-keys.js';
 import { AxesRepository, type AxisRow } from './axes.repository.js';
@@ -129,7 +130,7 @@ export class DriveChecksService implements OnModuleInit {
   }
 
   async checksFor(machine: MachineRef, context: ReadinessContext): Promise<ReadinessCheck[]> {
-    const rows = await this.axesRepo.list(machine.workshopId, machine.id);
+    const rows = await axesOf(this.axesRepo, machine, context);
     const targets = driveTargetsOf(context);
     const perAxis = await this.axisChecks(machine, rows, targets, context.series);
     const envelope = travelEnvelopeOf(machine, rows, targets);

@@ -72,6 +72,24 @@ export interface MachineRef {
 export interface ReadinessContext {
   targets: Record<string, TargetValue>;
   series: boolean;
+  /** Reads several contributors need (a machine's axes), made once per evaluation: see readOnce. */
+  reads?: Map<string, Promise<unknown>>;
+}
+
+/**
+ * A read shared by the contributors of one evaluation: the first to ask makes it, the others
+ * wait for the same answer, so the board does not send the same statement twice. `key` names
+ * the read and its machine ("axes:<machine id>").
+ */
+export function readOnce<T>(context: ReadinessContext, key: string, load: () => Promise<T>): Promise<T> {
+  context.reads ??= new Map();
+  let read = context.reads.get(key) as Promise<T> | undefined;
+  if (!read) {
+    // Resolved once into a promise: a query builder is only a thenable, and runs again on every await.
+    read = Promise.resolve(load());
+    context.reads.set(key, read);
+  }
+  return read;
 }
 
 /** A target of the context's set as TargetSetsService.targetFor gives it: stored, and in mm (lengths) or as stored. */
