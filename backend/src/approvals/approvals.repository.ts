@@ -1,5 +1,5 @@
 import { Inject, Injectable } from '@nestjs/common';
-import { and, asc, desc, eq, inArray, isNull, lte, sql } from 'drizzle-orm';
+import { and, asc, desc, eq, getTableColumns, inArray, isNull, lte, sql } from 'drizzle-orm';
 import { DRIZZLE, type Database } from '../database/database.tokens.js';
 import {
   approvalRequests,
@@ -35,18 +35,7 @@ export class ApprovalsRepository {
   }
 
   async openRequest(workshopId: string, machineId: string): Promise<RequestRow | null> {
-    const [row] = await this.db
-      .select()
-      .from(approvalRequests)
-      .where(
-        and(
-          eq(approvalRequests.workshopId, workshopId),
-          eq(approvalRequests.machineId, machineId),
-          eq(approvalRequests.status, 'open'),
-        ),
-      )
-      .orderBy(desc(approvalRequests.requestedAt))
-      .limit(1);
+    const [row] = await this.openRequestQuery(workshopId, machineId);
     return row ?? null;
   }
 
@@ -123,13 +112,57 @@ export class ApprovalsRepository {
 
   /** The standing approval if there is one, else the newest (times are kept to the second, so two may tie). */
   async latestApproval(workshopId: string, machineId: string): Promise<ApprovalRow | null> {
+    const [row] = await this.latestApprovalQuery(workshopId, machineId);
+    return row ?? null;
+  }
+
+  /**
+   * The latest approval and the open request of a machine in one statement (the readiness page
+   * shows both): each is at most one row, joined on true, so either may be missing.
+   */
+  async latestApprovalAndOpenRequest(
+    workshopId: string,
+    machineId: string,
+  ): Promise<{ approval: ApprovalRow | null; request: RequestRow | null }> {
+    const latest = this.latestApprovalQuery(workshopId, machineId).as('latest');
+    const open = this.openRequestQuery(workshopId, machineId).as('open');
+    const fieldsOf = <T extends Record<string, unknown>>(columns: T, alias: Record<string, unknown>) =>
+      Object.fromEntries(Object.keys(columns).map((key) => [key, alias[key]])) as T;
     const [row] = await this.db
+      .select({
+        approval: fieldsOf(getTableColumns(approvals), latest as unknown as Record<string, unknown>),
+        request: fieldsOf(getTableColumns(approvalRequests), open as unknown as Record<string, unknown>),
+      })
+      .from(latest)
+      .fullJoin(open, sql`true`);
+    return {
+      approval: (row?.approval as ApprovalRow | null | undefined) ?? null,
+      request: (row?.request as RequestRow | null | undefined) ?? null,
+    };
+  }
+
+  private latestApprovalQuery(workshopId: string, machineId: string) {
+    return this.db
       .select()
       .from(approvals)
       .where(and(eq(approvals.workshopId, workshopId), eq(approvals.machineId, machineId)))
       .orderBy(sql`${approvals.endedAt} is null desc`, desc(approvals.approvedAt), desc(approvals.endedAt))
       .limit(1);
-    return row ?? null;
+  }
+
+  private openRequestQuery(workshopId: string, machineId: string) {
+    return this.db
+      .select()
+      .from(approvalRequests)
+      .where(
+        and(
+          eq(approvalRequests.workshopId, workshopId),
+          eq(approvalRequests.machineId, machineId),
+          eq(approvalRequests.status, 'open'),
+        ),
+      )
+      .orderBy(desc(approvalRequests.requestedAt))
+      .limit(1);
   }
 
   async approval(workshopId: string, machineId: string, approvalId: string): Promise<ApprovalRow | null> {

@@ -45,10 +45,7 @@ export class ApprovalsService implements OnModuleInit {
     // Another workshop's machine is a 404 from the board's first statement, which also gives the
     // state the machine reads as now (re-check due once the date has passed; nothing is written).
     const b = await this.board.board(actor, machineId);
-    const [approval, request] = await Promise.all([
-      this.repo.latestApproval(actor.workshopId, machineId),
-      this.repo.openRequest(actor.workshopId, machineId),
-    ]);
+    const { approval, request } = await this.repo.latestApprovalAndOpenRequest(actor.workshopId, machineId);
     return {
       machineId,
       state: b.machine.state,
