@@ -72,12 +72,12 @@ export class RailChecksService implements OnModuleInit {
   }
 
   /**
-   * Three queries whatever the history: the rails, the newest sweep of each (summary columns),
-   * and the newest sweep of each rail per datum and face (for the partner pairs); a fourth for
-   * the certificate's series when they are asked for.
+   * Two queries whatever the history: the rails with the newest sweep of each (summary columns),
+   * and the newest sweep of each rail per datum and face (for the partner pairs); a third for the
+   * certificate's series when they are asked for.
    */
   async checksFor(machine: MachineRef, context: ReadinessContext): Promise<ReadinessCheck[]> {
-    const rails = await this.repo.listRails(machine.workshopId, machine.id);
+    const { rails, latest } = await this.repo.railsWithNewestSweeps(machine.workshopId, machine.id);
     if (!rails.length) return [];
     const targets = {
       straightness: context.targets.railStraightness,
@@ -86,10 +86,7 @@ export class RailChecksService implements OnModuleInit {
     };
     const paired = pairs(rails);
     const ids = rails.map((r) => r.id);
-    const [latest, perDatum] = await Promise.all([
-      this.repo.latestSweeps(machine.workshopId, ids),
-      paired.length ? this.repo.latestSweepsPerDatum(machine.workshopId, ids) : Promise.resolve([]),
-    ]);
+    const perDatum = paired.length ? await this.repo.latestSweepsPerDatum(machine.workshopId, ids) : [];
     const full = context.series
       ? new Map(
           (

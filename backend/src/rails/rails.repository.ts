@@ -1,6 +1,7 @@
 import { Inject, Injectable } from '@nestjs/common';
-import { and, asc, count, desc, eq, inArray, sql } from 'drizzle-orm';
+import { and, asc, count, desc, eq, inArray, sql, type SQL } from 'drizzle-orm';
 import { DRIZZLE, type Database } from '../database/database.tokens.js';
+import { rowFromDriver } from '../database/row-from-driver.js';
 import { machines, rails, railSweeps, targetSets } from '../database/schema/index.js';
 
 export type RailRow = typeof rails.$inferSelect;
@@ -153,52 +154,32 @@ export class RailsRepository {
    */
   async latestSweeps(workshopId: string, railIds: string[]): Promise<Map<string, LatestSweep>> {
     if (!railIds.length) return new Map();
-    const { rows } = await this.db.execute<
-      {
-        id: string;
-        rail_id: string;
-        taken_at: string;
-        phase: SweepRow['phase'];
-        datum: string | null;
-        status: SweepRow['status'];
-        ls: number;
-        mz: number;
-        stations: number;
-        target: SweepRow['target'];
-      } & SummaryExtras
-    >(sql`
-      select s.id, s.rail_id, s.taken_at, s.phase, s.datum, s.status, s.target,
-             case when jsonb_typeof(s.result #> '{leastSquares,straightness}') = 'number' then (s.result #>> '{leastSquares,straightness}')::float8 end as ls,
-             case when jsonb_typeof(s.result #> '{minimumZone,straightness}') = 'number' then (s.result #>> '{minimumZone,straightness}')::float8 end as mz,
-             jsonb_array_length(s.positions_mm) as stations,
-             s.face, s.reading_unit, s.length_unit, s.resolution,
-             (select max(v::float8) - min(v::float8) from jsonb_array_elements_text(s.positions_mm) v) as span,
-             case when jsonb_typeof(s.result #> '{localSlope,mmPerM}') = 'number' then (s.result #>> '{localSlope,mmPerM}')::float8 end as slope
-      from unnest(${uuidArray(railIds)}) as r(id)
-      cross join lateral (
-        select * from rail_sweeps x
-        where x.rail_id = r.id and x.workshop_id = ${workshopId}
-        order by x.taken_at desc, x.created_at desc
-        limit 1
-      ) s`);
-    return new Map(
-      rows.map((r) => [
-        r.rail_id,
-        {
-          id: r.id,
-          railId: r.rail_id,
-          takenAt: new Date(r.taken_at),
-          phase: r.phase,
-          datum: r.datum,
-          status: r.status,
-          leastSquaresStraightness: storedNumber(r.ls),
-          minimumZoneStraightness: storedNumber(r.mz),
-          stationCount: Number(r.stations),
-          target: r.target,
-          ...summaryExtras(r),
-        },
-      ]),
-    );
+    const { rows } = await this.db.execute<NewestSweepColumns>(sql`
+      select s.* from unnest(${uuidArray(railIds)}) as r(id)
+      cross join lateral (${newestSweepOf(sql`r.id`, workshopId)}) s`);
+    return new Map(rows.map((r) => [r.rail_id, latestSweepOf(r)]));
+  }
+
+  /**
+   * A machine's rails in their order, each with its newest sweep (summary columns), in one
+   * statement: what the readiness board and the rails tab start from.
+   */
+  async railsWithNewestSweeps(
+    workshopId: string,
+    machineId: string,
+  ): Promise<{ rails: RailRow[]; latest: Map<string, LatestSweep> }> {
+    const { rows } = await this.db.execute<Record<string, unknown>>(sql`
+      select rl.*, to_jsonb(s) as newest_sweep from rails rl
+      left join lateral (${newestSweepOf(sql`rl.id`, workshopId)}) s on true
+      where rl.workshop_id = ${workshopId} and rl.machine_id = ${machineId}
+      order by rl.axis, rl.label, rl.created_at`);
+    const latest = new Map<string, LatestSweep>();
+    const railRows = rows.map((raw) => {
+      const newest = raw.newest_sweep as NewestSweepColumns | null;
+      if (newest) latest.set(newest.rail_id, latestSweepOf(newest));
+      return rowFromDriver(rails, raw);
+    });
+    return { rails: railRows, latest };
   }
 
   /**
@@ -396,6 +377,50 @@ export class RailsRepository {
 }
 
 /** A figure read out of a stored result: missing or not a number stays NaN, so readers flag it instead of showing 0. */
+/** The newest sweep's summary columns as newestSweepOf selects them. */
+type NewestSweepColumns = {
+  id: string;
+  rail_id: string;
+  taken_at: string;
+  phase: SweepRow['phase'];
+  datum: string | null;
+  status: SweepRow['status'];
+  ls: number | null;
+  mz: number | null;
+  stations: number;
+  target: SweepRow['target'];
+} & SummaryExtras;
+
+/** The newest sweep of the rail `railId` names (summary columns, no arrays): one index step. */
+const newestSweepOf = (railId: SQL, workshopId: string) => sql`
+  select x.id, x.rail_id, x.taken_at, x.phase, x.datum, x.status, x.target,
+         case when jsonb_typeof(x.result #> '{leastSquares,straightness}') = 'number' then (x.result #>> '{leastSquares,straightness}')::float8 end as ls,
+         case when jsonb_typeof(x.result #> '{minimumZone,straightness}') = 'number' then (x.result #>> '{minimumZone,straightness}')::float8 end as mz,
+         jsonb_array_length(x.positions_mm) as stations,
+         x.face, x.reading_unit, x.length_unit, x.resolution,
+         (select max(v::float8) - min(v::float8) from jsonb_array_elements_text(x.positions_mm) v) as span,
+         case when jsonb_typeof(x.result #> '{localSlope,mmPerM}') = 'number' then (x.result #>> '{localSlope,mmPerM}')::float8 end as slope
+  from rail_sweeps x
+  where x.rail_id = ${railId} and x.workshop_id = ${workshopId}
+  order by x.taken_at desc, x.created_at desc
+  limit 1`;
+
+function latestSweepOf(r: NewestSweepColumns): LatestSweep {
+  return {
+    id: r.id,
+    railId: r.rail_id,
+    takenAt: new Date(r.taken_at),
+    phase: r.phase,
+    datum: r.datum,
+    status: r.status,
+    leastSquaresStraightness: storedNumber(r.ls),
+    minimumZoneStraightness: storedNumber(r.mz),
+    stationCount: Number(r.stations),
+    target: r.target,
+    ...summaryExtras(r),
+  };
+}
+
 function storedNumber(v: unknown): number {
   return v === null || v === undefined ? NaN : Number(v);
 }

@@ -28,13 +28,12 @@ export class RailsService {
 
   async list(actor: SessionUser, machineId: string): Promise<RailListItem[]> {
     await this.machines.getRef(actor, machineId);
-    const rows = await this.repo.listRails(actor.workshopId, machineId);
-    const ids = rows.map((r) => r.id);
     // The newest sweep of each rail and a count: the list costs the same at 10 or 10 000 sweeps.
-    const [latest, counts] = await Promise.all([
-      this.repo.latestSweeps(actor.workshopId, ids),
-      this.repo.sweepCounts(actor.workshopId, ids),
-    ]);
+    const { rails: rows, latest } = await this.repo.railsWithNewestSweeps(actor.workshopId, machineId);
+    const counts = await this.repo.sweepCounts(
+      actor.workshopId,
+      rows.map((r) => r.id),
+    );
     return rows.map((row) => {
       const newest = latest.get(row.id);
       return {

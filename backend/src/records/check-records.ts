@@ -1,6 +1,7 @@
 import { and, eq, getTableColumns, getTableName, sql, type Column } from 'drizzle-orm';
 import { getTableConfig, type PgTable } from 'drizzle-orm/pg-core';
 import type { Database } from '../database/database.tokens.js';
+import { rowFromDriver } from '../database/row-from-driver.js';
 import { RECORD_TYPES, type SignedRecordType } from './kinds.js';
 
 /**
@@ -157,11 +158,6 @@ export class CheckRecords<T extends PgTable> {
 
   /** A raw row (SQL names, driver values) as the query builder would have returned it. */
   private fromDriver(raw: Record<string, unknown>): T['$inferSelect'] {
-    const row: Record<string, unknown> = {};
-    for (const [key, column] of Object.entries(this.columns)) {
-      const value = raw[column.name];
-      row[key] = value === null || value === undefined ? null : column.mapFromDriverValue(value);
-    }
-    return row as T['$inferSelect'];
+    return rowFromDriver(this.spec.table, raw);
   }
 }
