@@ -153,6 +153,8 @@ test.describe('indicator input', () => {
 
     // The reading field has the focus: the indicator's reading and Enter fill it, nothing more.
     await expect(page.getByLabel('Reading at hole 1 (thou)')).toBeFocused();
+    // The carriage reaches hole 1 once the page has drawn the new bolt-down (see settle).
+    await settle(page);
     await indicatorSends(page, '0,5');
     await expect(page.getByLabel('Reading at hole 1 (thou)')).toHaveValue('0.5');
     await expect(arrived(page)).toContainText('0.5 thou → hole 1 at 30 mm, not fixed yet');
@@ -170,6 +172,7 @@ test.describe('indicator input', () => {
     // The far end, from a negative reading: filled, aimed against, still not fixed.
     await expect(page.getByRole('heading', { name: 'Hole 5', exact: true })).toBeVisible();
     await expect(page.getByLabel('Reading at hole 5 (thou)')).toBeFocused();
+    await settle(page);
     await indicatorSends(page, '-0.4');
     await expect(page.getByLabel('Reading at hole 5 (thou)')).toHaveValue('-0.4');
     await expect(page.getByTestId('difference')).toHaveText('−0.9 thou');
