@@ -99,8 +99,16 @@ export function AxisFormDialog({
   const steps = numberOf(f.motorStepsPerRev);
   const micro = numberOf(f.microsteps);
   const { type, lead, threadsPerInch, beltPitch, pulleyTeeth, pinionModule, pinionTeeth } = drive;
+  // Asked only while the dialog is open and the drive has the numbers that define it: a closed
+  // dialog or a half-typed drive would only be refused.
+  const defined =
+    type === 'belt'
+      ? beltPitch !== undefined && pulleyTeeth !== undefined
+      : type === 'rack'
+        ? pinionModule !== undefined && pinionTeeth !== undefined
+        : lead !== undefined || threadsPerInch !== undefined;
   const previewInput: DrivePreviewInput | null =
-    steps && micro
+    open && steps && micro && defined
       ? {
           type,
           lengthUnit: f.lengthUnit,
