@@ -128,7 +128,9 @@ test.describe('calculators page', () => {
 
     // 200-step motor, 8 microsteps, 5 mm lead → 320 steps/mm (common practice).
     await page.getByRole('tab', { name: 'Steps per mm' }).click();
-    await page.getByLabel('Lead').fill('5');
+    // The speed check has a field named Lead too: type into this tab's own, once it is shown.
+    const drive = page.getByRole('tabpanel', { name: 'Steps per mm' });
+    await drive.getByLabel('Lead').fill('5');
     await expect(
       page.getByRole('table', { name: 'Steps per mm result' }).getByRole('row', { name: /^Steps per mm/ }),
     ).toContainText('320 steps/mm');
