@@ -1,14 +1,8 @@
 import { z } from 'zod';
-import { parseNumberCell } from '../../../lib/tabular-input';
+import { typedNumber as num } from '../../../lib/form-number';
 import { LENGTH_UNITS, toMm, UNIT_LABELS } from '../../../lib/units';
 import type { RailInput } from '../api/create-rail';
 import type { Rail } from '../types';
-
-/** A typed number ("1,5" reads as 1.5); NaN when empty or not a number. */
-const num = (s: string) => {
-  const parsed = parseNumberCell(s);
-  return parsed.ok && parsed.value !== null ? parsed.value : NaN;
-};
 
 /**
  * The rail form as typed (every length in `lengthUnit`) and its quick checks in mm, before the
