@@ -12,6 +12,7 @@ import type pg from 'pg';
 import type { AppConfig } from './config/config.js';
 import { PG_POOL } from './database/database.tokens.js';
 import { createSessionStore } from './database/session-store.js';
+import { SessionCache } from './database/session-cache.js';
 import { DatabaseErrorFilter } from './common/database-error.filter.js';
 import { SpaFallbackFilter } from './common/spa-fallback.filter.js';
 import { appFilters } from './common/app-filters.js';
@@ -85,7 +86,7 @@ export async function configureApp(app: NestFastifyApplication, config: AppConfi
     // Fast brotli: on a 2-core server a quality-11 pass over a large answer costs more than it saves.
     brotliOptions: { params: { [zlibConstants.BROTLI_PARAM_QUALITY]: 4 } },
   });
-  const store = createSessionStore(app.get<pg.Pool>(PG_POOL));
+  const store = createSessionStore(app.get<pg.Pool>(PG_POOL), app.get(SessionCache));
   await app.register(fastifyCookie as never);
   await app.register(fastifySession as never, {
     secret: config.sessionSecret,

@@ -97,7 +97,11 @@ describe('reads: statements per request do not grow with the number of sweeps', 
     const res = await ws.as.viewer.get(path);
     counting = false;
     expect(res.status).toBe(200);
-    return { n: statements.length, body: res.body, statements: [...statements] };
+    // The session is read with its person in one statement when it is not kept from a request a
+    // few seconds before (session-cache.ts); counted apart so the numbers do not hang on timing.
+    const session = statements.filter((s) => /from "session"/.test(s));
+    expect(session.length).toBeLessThanOrEqual(1);
+    return { n: statements.length - session.length, body: res.body, statements: [...statements] };
   }
 
   it('lists machines and shows the board in a fixed number of statements at 0, 100 and 1 000 old sweeps', async () => {
@@ -126,7 +130,6 @@ describe('reads: statements per request do not grow with the number of sweeps', 
       expect(board.body.checks).toEqual(firstBoard);
       // The list reads the summaries only: no record table, no re-check query when nothing is due.
       expect(list.statements.some((s) => /rail_sweeps/.test(s))).toBe(false);
-      expect(list.statements.filter((s) => /from "session"/.test(s))).toHaveLength(1);
       expect(list.statements.filter((s) => /machine_readiness/.test(s))).toHaveLength(1);
       expect(list.statements.some((s) => /"checks"/.test(s))).toBe(false);
       // The board reads a sweep's readings only for the newest sweep per rail, datum and face.
@@ -150,7 +153,7 @@ describe('reads: statements per request do not grow with the number of sweeps', 
     expect(seen[100]).toEqual(seen[0]);
     expect(seen[1000]).toEqual(seen[0]);
     // The list reads the summaries, not the records: a handful of statements, not one per check.
-    expect(seen[0].list).toBe(2);
-    expect(seen[0].board).toBeLessThanOrEqual(14);
+    expect(seen[0].list).toBe(1);
+    expect(seen[0].board).toBeLessThanOrEqual(13);
   });
 });

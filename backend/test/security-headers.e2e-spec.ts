@@ -1,3 +1,4 @@
+import { SessionChangesListener } from '../src/database/session-changes.listener.js';
 import type { NestFastifyApplication } from '@nestjs/platform-fastify';
 import request from 'supertest';
 import { mkdtempSync, mkdirSync, writeFileSync } from 'node:fs';
@@ -89,6 +90,8 @@ describe('security headers and caching', () => {
       [w.userIds.viewer],
     );
     expect(updated.rowCount).toBe(1);
+    // Changed by hand, as another server would: counts once the change's announcement is heard.
+    await api.get(SessionChangesListener).caughtUp();
     expect((await agent.get('/api/auth/me')).status).toBe(401);
 
     expect(loadConfig({ ...process.env, PUBLIC_URL: 'https://railwright.example.org' }).secureCookies).toBe(true);

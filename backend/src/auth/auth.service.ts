@@ -1,3 +1,4 @@
+import { SessionCache } from '../database/session-cache.js';
 import { Injectable } from '@nestjs/common';
 import { TransactionContext } from '../database/transaction-context.js';
 import { RecordsService } from '../records/records.service.js';
@@ -16,6 +17,7 @@ export class AuthService {
     private readonly throttle: SignInThrottle,
     private readonly records: RecordsService,
     private readonly transactions: TransactionContext,
+    private readonly sessions: SessionCache,
   ) {}
 
   async checkCredentials(address: string, email: string, password: string): Promise<SessionUser | null> {
@@ -53,8 +55,17 @@ export class AuthService {
   }
 
   /** Signs the person out everywhere: on a password change, a reset and a deactivation. */
-  endSessions(userId: string): Promise<void> {
-    return this.repo.endSessions(userId, new Date());
+  async endSessions(userId: string): Promise<void> {
+    await this.repo.endSessions(userId, new Date());
+    this.personChanged(userId);
+  }
+
+  /**
+   * The person's sessions are read afresh once the command commits, so a new role, a deactivation
+   * or ended sessions count from the very next request here (other servers hear it from the database).
+   */
+  personChanged(userId: string): void {
+    this.transactions.afterCommit(() => this.sessions.forgetPerson(userId));
   }
 
   /** A failed sign-in to an existing account is kept in that account's workshop history. */

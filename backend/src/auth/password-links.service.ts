@@ -1,3 +1,4 @@
+import { SessionCache } from '../database/session-cache.js';
 import { GoneException, HttpException, HttpStatus, Injectable, NotFoundException } from '@nestjs/common';
 import { createHash, randomBytes } from 'node:crypto';
 import { MailLinks } from '../mail/mail-links.js';
@@ -25,6 +26,7 @@ export class PasswordLinksService {
     private readonly links: MailLinks,
     private readonly throttle: SignInThrottle,
     private readonly transactions: TransactionContext,
+    private readonly sessions: SessionCache,
   ) {}
 
   /**
@@ -109,6 +111,7 @@ export class PasswordLinksService {
     if (!ok) throw new GoneException('This link has already been used. Sign in, or ask an admin for a new link.');
     const now = new Date();
     await this.accounts.endSessions(person.id, now);
+    this.transactions.afterCommit(() => this.sessions.forgetPerson(person.id));
     const first = found.link.purpose === 'invitation';
     await this.records.audit(person, {
       recordType: 'password',

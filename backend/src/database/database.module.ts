@@ -8,6 +8,8 @@ import { DRIZZLE, PG_POOL, ROOT_DRIZZLE } from './database.tokens.js';
 import { TransactionContext, transactionalDatabase } from './transaction-context.js';
 import { CommandKeys } from './command-keys.js';
 import { CommandKeysRepository } from './command-keys.repository.js';
+import { SessionCache } from './session-cache.js';
+import { SessionChangesListener } from './session-changes.listener.js';
 
 @Global()
 @Module({
@@ -40,8 +42,10 @@ import { CommandKeysRepository } from './command-keys.repository.js';
     },
     CommandKeysRepository,
     CommandKeys,
+    { provide: SessionCache, useFactory: () => new SessionCache() },
+    SessionChangesListener,
   ],
-  exports: [PG_POOL, DRIZZLE, ROOT_DRIZZLE, TransactionContext, CommandKeys],
+  exports: [PG_POOL, DRIZZLE, ROOT_DRIZZLE, TransactionContext, CommandKeys, SessionCache],
 })
 export class DatabaseModule implements OnApplicationShutdown {
   constructor(@Inject(PG_POOL) private readonly pool: pg.Pool) {}

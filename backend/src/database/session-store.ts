@@ -3,6 +3,7 @@ import expressSession from 'express-session';
 import type pg from 'pg';
 import type { SessionUser } from '../auth/session-user.js';
 import type { Role } from './schema/users.js';
+import type { SessionCache } from './session-cache.js';
 
 /**
  * The session key under which the store hands the guard the signed-in person it read together
@@ -19,7 +20,7 @@ export interface LoadedSessionUser extends SessionUser {
 // The session and the active person it names in one statement: every authenticated request
 // needs both, and a second round trip per request was a fifth of a short read's cost.
 const SESSION_WITH_USER = `
-  select s.sess, u.id, u.email, u.name, u.role, u.workshop_id, w.name as workshop_name, u.sessions_valid_from
+  select s.sess, s.expire, u.id, u.email, u.name, u.role, u.workshop_id, w.name as workshop_name, u.sessions_valid_from
   from "session" s
   left join users u on u.id = case when s.sess->>'userId' ~* '^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$' then (s.sess->>'userId')::uuid end
     and u.active
@@ -28,6 +29,7 @@ const SESSION_WITH_USER = `
 
 interface Row {
   sess: Record<string, unknown> | string;
+  expire: Date;
   id: string | null;
   email: string;
   name: string;
@@ -56,11 +58,14 @@ function storable(sess: Record<string | symbol, unknown>): Record<string, unknow
 /**
  * connect-pg-simple's store (table "session"), reading the session's person in the same
  * statement. Sessions are stored exactly as before; only what is read grows by the person.
+ * What was read is kept a few seconds in `cache`, which forgets it on any change (session-cache.ts).
  */
-export function createSessionStore(pool: pg.Pool): unknown {
+export function createSessionStore(pool: pg.Pool, cache: SessionCache): unknown {
   const PgStore = connectPgSimple(expressSession as never) as unknown as new (options: object) => PgStoreBase;
   class SessionWithUserStore extends PgStore {
     get(sid: string, fn: Callback): void {
+      const kept = cache.get(sid);
+      if (kept) return fn(null, { ...kept.sess, [LOADED_USER]: kept.user });
       // Named: each connection parses and plans it once, not on every request.
       this.query(
         { name: 'session_with_user', text: SESSION_WITH_USER },
@@ -85,13 +90,27 @@ export function createSessionStore(pool: pg.Pool): unknown {
                 sessionsValidFrom: new Date(row.sessions_valid_from).getTime(),
               }
             : false;
+          cache.put(sid, sess, user, new Date(row.expire).getTime());
           fn(null, { ...sess, [LOADED_USER]: user });
         },
       );
     }
 
     set(sid: string, sess: Record<string, unknown>, fn?: Callback): void {
-      super.set(sid, storable(sess), fn);
+      cache.forgetSession(sid);
+      super.set(sid, storable(sess), (err, value) => {
+        // Forgotten again once stored: a read while the write was under way may have kept the old one.
+        cache.forgetSession(sid);
+        fn?.(err, value);
+      });
+    }
+
+    destroy(sid: string, fn?: Callback): void {
+      cache.forgetSession(sid);
+      super.destroy(sid, (err, value) => {
+        cache.forgetSession(sid);
+        fn?.(err, value);
+      });
     }
   }
   return new SessionWithUserStore({ pool, createTableIfMissing: true, pruneSessionInterval: 60 * 15 });

@@ -99,6 +99,7 @@ export class PeopleService {
       throw new ConflictException('The workshop needs at least one active admin: make someone else admin first');
     }
     const row = await this.repo.update(actor.workshopId, id, dto);
+    this.auth.personChanged(id);
     // Deactivation signs them out everywhere; reactivation starts from no session at all.
     if (dto.active !== undefined && dto.active !== current.active) await this.auth.endSessions(id);
     const said: string[] = [];
