@@ -1,4 +1,5 @@
 import { Autocomplete, InputAdornment, MenuItem, Stack, TextField } from '@mui/material';
+import { FormTextField } from '../../../components/form/form-text-field';
 import { UnitFamilySelect } from '../../../components/form/unit-select';
 import { Controller, type UseFormReturn } from 'react-hook-form';
 import { UNIT_LABELS } from '../../../lib/units';
@@ -31,24 +32,15 @@ export function RailFormFields({ form, others }: { form: UseFormReturn<RailFormV
     hint: string | undefined,
     extra: { required?: boolean; autoFocus?: boolean; withUnit?: boolean } = {},
   ) => (
-    <Controller
+    <FormTextField
+      form={form}
       name={name}
-      control={control}
-      render={({ field }) => (
-        <TextField
-          label={label}
-          value={field.value}
-          onChange={(e) => change(field.onChange)(e.target.value)}
-          onBlur={field.onBlur}
-          inputRef={field.ref}
-          required={extra.required}
-          autoFocus={extra.autoFocus}
-          slotProps={extra.withUnit ? unit : undefined}
-          error={!!errors[name]}
-          helperText={errors[name]?.message ?? hint}
-          fullWidth
-        />
-      )}
+      label={label}
+      helperText={hint}
+      required={extra.required}
+      autoFocus={extra.autoFocus}
+      slotProps={extra.withUnit ? unit : undefined}
+      fullWidth
     />
   );
   return (
