@@ -55,6 +55,7 @@ export function FinalSweepForm({ bd, holes, typicalBoltSize }: Props) {
   const form = useForm<FinalSweepFormValues>({
     defaultValues: finalSweepFormOf(holes, typicalBoltSize),
     resolver: zodResolver(schema),
+    shouldFocusError: false,
   });
   const [takenBy, boltSize, torque] = useWatch({ control: form.control, name: ['takenBy', 'boltSize', 'torque'] });
   // The server's refusal of a sent sweep (a problem with what was typed shows under its field).
@@ -72,11 +73,21 @@ export function FinalSweepForm({ bd, holes, typicalBoltSize }: Props) {
     (inputs.current[i + 1] ?? submit.current)?.focus();
   };
 
-  // A bad field is focused and named under itself; nothing is sent until every field reads.
-  const onSubmit = form.handleSubmit((values) => {
-    setRefused(null);
-    save(toFinalSweepInput(values, bd, holes));
-  });
+  // Nothing is sent until every field reads; each bad one is named under itself. The first bad
+  // reading is focused, else the first bad detail: the readings are what the sweep is for.
+  const onSubmit = form.handleSubmit(
+    (values) => {
+      setRefused(null);
+      save(toFinalSweepInput(values, bd, holes));
+    },
+    (errors) => {
+      const bad = holes.findIndex((_, i) => errors.readings?.[i]);
+      if (bad >= 0) inputs.current[bad]?.focus();
+      else if (errors.resolution) form.setFocus('resolution');
+      else if (errors.temperature) form.setFocus('temperature');
+      else if (errors.torque) form.setFocus('torque');
+    },
+  );
 
   return (
     <Paper
