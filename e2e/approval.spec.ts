@@ -66,7 +66,12 @@ test.describe('readiness board to signed certificate', () => {
       .click();
     const waiver = owner.getByRole('dialog', { name: 'Waive a check' });
     await expect(waiver.getByRole('button', { name: 'Waive with this reason' })).toBeDisabled();
+    // A reason too short keeps the waiver off, the hint saying how long it must be.
+    await waiver.getByLabel('Reason').fill('Not yet');
+    await expect(waiver.getByLabel('Reason')).toHaveAccessibleDescription('Say why, in at least 10 characters');
+    await expect(waiver.getByRole('button', { name: 'Waive with this reason' })).toBeDisabled();
     await waiver.getByLabel('Reason').fill('Not fitted yet on this bench machine; checked before the first cut.');
+    await expect(waiver.getByLabel('Reason')).toHaveAccessibleDescription('67 characters');
     await snap(owner, 'readiness-waiver-dialog');
     await waiver.getByRole('button', { name: 'Waive with this reason' }).click();
     await expect(waiver).toBeHidden();
@@ -87,6 +92,23 @@ test.describe('readiness board to signed certificate', () => {
     await expect(sign.getByLabel('Statement you sign')).toHaveValue(/ready to cut/);
     await expect(sign).toContainText('Moving gantry');
     await expect(sign).toContainText('licensed electrician');
+    // A statement too short to sign is named under it as it is edited; neither the button nor Enter signs it.
+    const signed: string[] = [];
+    owner.on('request', (r) => {
+      if (r.method() === 'POST' && new URL(r.url()).pathname === `/api/machines/${machineId}/approvals`)
+        signed.push(r.url());
+    });
+    const statement = sign.getByLabel('Statement you sign');
+    const offered = await statement.inputValue();
+    await statement.fill('Ready to cut.');
+    await expect(statement).toHaveAccessibleDescription('The statement must be at least 20 characters');
+    await expect(statement).toHaveAttribute('aria-invalid', 'true');
+    await sign.getByLabel('Your password (to sign)').fill('not the password');
+    await expect(sign.getByRole('button', { name: 'Sign and approve' })).toBeDisabled();
+    await sign.getByLabel('Your password (to sign)').press('Enter');
+    await statement.fill(offered);
+    await expect(statement).toHaveAccessibleDescription('Printed on the certificate as written here.');
+    expect(signed).toEqual([]);
     await sign.getByLabel('Your password (to sign)').fill('not the password');
     await sign.getByRole('button', { name: 'Sign and approve' }).click();
     await expect(sign.getByRole('alert').filter({ hasText: 'password is not right' })).toBeVisible();
@@ -94,6 +116,7 @@ test.describe('readiness board to signed certificate', () => {
     await sign.getByLabel('Your password (to sign)').fill(DEMO_PASSWORD);
     await sign.getByRole('button', { name: 'Sign and approve' }).click();
     await expect(sign).toBeHidden();
+    expect(signed).toHaveLength(2);
     const summary = owner.getByLabel('Approval');
     await expect(summary).toContainText('Approved as ready to cut by Owen Pryce');
     const hash = (await owner.getByTestId('record-hash').textContent())!.trim();

@@ -134,8 +134,24 @@ test.describe('bolt-down: a reading outside its band, and giving a bolt-down up'
     );
 
     await page.getByRole('button', { name: 'Begin a new bolt-down' }).click();
+    // A negative band is refused under its field, and no bolt-down is begun.
+    const begun: string[] = [];
+    page.on('request', (r) => {
+      if (r.method() === 'POST' && new URL(r.url()).pathname === `/api/rails/${railId}/bolt-downs`) begun.push(r.url());
+    });
+    const band = page.getByLabel('On-target band ± (thou)');
+    await band.fill('-2');
+    await page.getByRole('button', { name: 'Begin the bolt-down' }).click();
+    await expect(band).toHaveAccessibleDescription('The band must be a number that is not negative');
+    await expect(band).toHaveAttribute('aria-invalid', 'true');
+    expect(begun).toEqual([]);
+    await band.fill('');
+    await expect(band).toHaveAccessibleDescription(
+      "Empty: half the rail straightness target of the machine's target set",
+    );
     await page.getByRole('button', { name: 'Begin the bolt-down' }).click();
     await expect(page.getByTestId('progress')).toHaveText('0 of 5 holes fixed');
+    expect(begun).toHaveLength(1);
     await expect(page.getByTestId('abandoned')).toHaveCount(0);
     const list = (await (await page.request.get(`/api/rails/${railId}/bolt-downs`)).json()) as { abandoned: unknown }[];
     expect(list.map((b) => !!b.abandoned)).toEqual([false, true]);

@@ -103,8 +103,24 @@ test.describe('bolt-down guide', () => {
     const form = page.getByRole('form', { name: 'Final sweep at every hole' });
     await expect(form).toBeVisible();
     await expect(form.getByLabel('Final reading at 150 mm')).toHaveValue('1');
-    await form.getByLabel('Final reading at 270 mm').fill('1.3');
+    // A reading or a detail that is not a number is named under its field; nothing is sent.
+    const sent: string[] = [];
+    page.on('request', (r) => {
+      if (r.method() === 'POST' && new URL(r.url()).pathname.endsWith('/final-sweep')) sent.push(r.url());
+    });
+    const last = form.getByLabel('Final reading at 270 mm');
+    await last.fill('1.3 thou');
+    await form.getByLabel('Temperature').fill('warm');
+    await form.getByRole('button', { name: 'Save the final sweep' }).click();
+    await expect(last).toHaveAccessibleDescription('The reading at 270 mm is not a number');
+    await expect(last).toBeFocused();
+    await expect(form.getByLabel('Temperature')).toHaveAccessibleDescription('The temperature must be a number');
+    await expect(form.getByLabel('Temperature')).toHaveAttribute('aria-invalid', 'true');
+    expect(sent).toEqual([]);
+    await last.fill('1.3');
+    await expect(last).toHaveAttribute('aria-invalid', 'false');
     await form.getByLabel('Temperature').fill('18');
+    await expect(form.getByLabel('Temperature')).toHaveAttribute('aria-invalid', 'false');
     // The final sweep takes the datum like any sweep; the usual torque is recorded only when used.
     await form.getByLabel('Datum').fill('Straightedge across Y1 and Y2');
     await expect(form.getByText('Usual for M5: 8.8 N·m — not recorded unless typed or used')).toBeVisible();
@@ -113,6 +129,7 @@ test.describe('bolt-down guide', () => {
     await form.getByRole('button', { name: 'Save the final sweep' }).click();
     const result = page.getByRole('region', { name: 'Final sweep result' }).or(page.getByLabel('Final sweep result'));
     await expect(result).toBeVisible();
+    expect(sent).toHaveLength(1);
     await expect(page.getByTestId('final-sweep-status')).toHaveText('Within target');
     await expect(page.getByRole('figure', { name: 'Straightness of the final sweep' })).toBeVisible();
     await page.evaluate(() => window.scrollTo(0, 0));

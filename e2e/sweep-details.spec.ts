@@ -82,6 +82,25 @@ test.describe('sweep entry grid and sweep details', () => {
     await history.getByRole('button', { name: /Edit details of the sweep of/ }).click();
     const dialog = page.getByRole('dialog', { name: /Edit details of the sweep of/ });
     await expect(dialog.getByLabel('Instrument')).toHaveValue('');
+    // A temperature that is not a number and an empty "Taken by" are named under their fields; nothing is sent.
+    const patches: string[] = [];
+    page.on('request', (r) => {
+      if (r.method() === 'PATCH' && new URL(r.url()).pathname === `/api/sweeps/${listed.id}`) patches.push(r.url());
+    });
+    const takenBy = dialog.getByLabel('Taken by');
+    const who = await takenBy.inputValue();
+    expect(who).not.toBe('');
+    const temperature = await dialog.getByLabel('Temperature').inputValue();
+    await takenBy.fill('');
+    await dialog.getByLabel('Temperature').fill('warm');
+    await dialog.getByRole('button', { name: 'Save details' }).click();
+    await expect(takenBy).toHaveAccessibleDescription('Say who took the sweep');
+    await expect(dialog.getByLabel('Temperature')).toHaveAccessibleDescription('Temperature must be a number of °C');
+    await expect(dialog.getByLabel('Temperature')).toHaveAttribute('aria-invalid', 'true');
+    expect(patches).toEqual([]);
+    await takenBy.fill(who);
+    await dialog.getByLabel('Temperature').fill(temperature);
+    await expect(dialog.getByLabel('Temperature')).toHaveAttribute('aria-invalid', 'false');
     await dialog.getByLabel('Datum').fill('Granite bar across Y1 and Y2');
     await dialog.getByLabel('Notes').fill('Datum named after the sweep');
     await dialog.getByLabel('Torque').fill('-3');
@@ -95,6 +114,7 @@ test.describe('sweep entry grid and sweep details', () => {
     await dialog.getByLabel('Torque').fill('');
     await dialog.getByRole('button', { name: 'Save details' }).click();
     await expect(dialog).toBeHidden();
+    expect(patches).toHaveLength(2);
     await expect(history).toContainText('Granite bar across Y1 and Y2');
 
     const after = await (await page.request.get(`/api/sweeps/${listed.id}`)).json();

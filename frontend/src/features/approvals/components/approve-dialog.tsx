@@ -1,4 +1,3 @@
-import { useState } from 'react';
 import {
   Alert,
   Box,
@@ -11,12 +10,27 @@ import {
   ListItem,
   ListItemText,
   Stack,
-  TextField,
   Typography,
 } from '@mui/material';
 import WarningAmberOutlined from '@mui/icons-material/WarningAmberOutlined';
+import { useForm, useWatch } from 'react-hook-form';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { z } from 'zod';
+import { FormTextField } from '../../../components/form/form-text-field';
 import { useApproveMachine } from '../api/approve-machine';
 import { KIND_LABELS, type Readiness } from '../types';
+
+const MIN_STATEMENT = 20;
+
+const statementOk = (statement: string) => statement.trim().length >= MIN_STATEMENT;
+
+const approveFormSchema = z.object({
+  statement: z.string().refine(statementOk, { message: `The statement must be at least ${MIN_STATEMENT} characters` }),
+  // No message for the password: signing stays off until one is typed.
+  password: z.string(),
+});
+
+type ApproveFormValues = z.input<typeof approveFormSchema>;
 
 /** The signature: read the statement (edit it if needed), read the cautions, re-enter the password. */
 export function ApproveDialog({
@@ -30,16 +44,24 @@ export function ApproveDialog({
   machineName: string;
   readiness: Readiness;
 }) {
-  const [statement, setStatement] = useState(readiness.defaultStatement);
-  const [password, setPassword] = useState('');
+  // The statement is checked as it is edited; the password only has to be there to sign.
+  const form = useForm<ApproveFormValues>({
+    defaultValues: { statement: readiness.defaultStatement, password: '' },
+    resolver: zodResolver(approveFormSchema),
+    mode: 'onChange',
+  });
+  const [statement, password] = useWatch({ control: form.control, name: ['statement', 'password'] });
+  const canSign = !!password && statementOk(statement);
   const approve = useApproveMachine(readiness.machineId);
   const close = () => {
-    setPassword('');
+    form.resetField('password');
     approve.reset();
     onClose();
   };
+  const sign = form.handleSubmit((values) =>
+    approve.mutate({ password: values.password, statement: values.statement.trim() }, { onSuccess: close }),
+  );
   const waived = readiness.checks.filter((c) => c.status === 'waived');
-  const statementOk = statement.trim().length >= 20;
   return (
     <Dialog open={open} onClose={close} fullWidth maxWidth="md" scroll="paper" aria-labelledby="approve-title">
       <DialogTitle id="approve-title">Approve {machineName} as ready to cut</DialogTitle>
@@ -65,18 +87,13 @@ export function ApproveDialog({
               </List>
             </Box>
           )}
-          <TextField
+          <FormTextField
+            form={form}
+            name="statement"
             label="Statement you sign"
-            value={statement}
-            onChange={(e) => setStatement(e.target.value)}
             multiline
             minRows={4}
-            error={!statementOk}
-            helperText={
-              statementOk
-                ? 'Printed on the certificate as written here.'
-                : 'The statement must be at least 20 characters'
-            }
+            helperText="Printed on the certificate as written here."
           />
           <Alert severity="warning" icon={<WarningAmberOutlined />} sx={{ '& ul': { m: 0, pl: 2 } }}>
             <Typography variant="subtitle2" component="p">
@@ -93,28 +110,19 @@ export function ApproveDialog({
             </ul>
           </Alert>
           {approve.error && <Alert severity="error">{approve.error.message}</Alert>}
-          <TextField
+          <FormTextField
+            form={form}
+            name="password"
             label="Your password (to sign)"
             type="password"
             autoComplete="current-password"
-            value={password}
-            onChange={(e) => setPassword(e.target.value)}
-            onKeyDown={(e) =>
-              e.key === 'Enter' &&
-              password &&
-              statementOk &&
-              approve.mutate({ password, statement: statement.trim() }, { onSuccess: close })
-            }
+            onKeyDown={(e) => e.key === 'Enter' && canSign && void sign()}
           />
         </Stack>
       </DialogContent>
       <DialogActions>
         <Button onClick={close}>Cancel</Button>
-        <Button
-          variant="contained"
-          disabled={!password || !statementOk || approve.isPending}
-          onClick={() => approve.mutate({ password, statement: statement.trim() }, { onSuccess: close })}
-        >
+        <Button variant="contained" disabled={!canSign || approve.isPending} onClick={sign}>
           Sign and approve
         </Button>
       </DialogActions>

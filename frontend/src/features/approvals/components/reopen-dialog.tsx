@@ -1,20 +1,25 @@
-import { useState } from 'react';
-import {
-  Alert,
-  Button,
-  Dialog,
-  DialogActions,
-  DialogContent,
-  DialogTitle,
-  Stack,
-  TextField,
-  Typography,
-} from '@mui/material';
+import { Alert, Button, Dialog, DialogActions, DialogContent, DialogTitle, Stack, Typography } from '@mui/material';
+import { useForm, useWatch } from 'react-hook-form';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { z } from 'zod';
+import { FormTextField } from '../../../components/form/form-text-field';
 import { useReopenMachine } from '../api/reopen-machine';
 import { dateOnly } from '../format';
 import type { Approval } from '../types';
 
 const MIN_REASON = 10;
+
+const shortReason = (length: number) =>
+  `Say what is to be changed and why, in at least ${MIN_REASON} characters (${length} so far)`;
+
+const reopenFormSchema = z.object({
+  reason: z.string().superRefine((reason, ctx) => {
+    const length = reason.trim().length;
+    if (length < MIN_REASON) ctx.addIssue({ code: 'custom', message: shortReason(length) });
+  }),
+});
+
+type ReopenFormValues = z.input<typeof reopenFormSchema>;
 
 /** The owner takes back the approval to change the machine: a written reason, kept in the history and mailed. */
 export function ReopenDialog({
@@ -28,21 +33,24 @@ export function ReopenDialog({
   approval: Approval;
   onClose: () => void;
 }) {
-  const [reason, setReason] = useState('');
-  const [touched, setTouched] = useState(false);
+  // A short reason shows as a problem once the field has been left, and is counted as it is typed.
+  const form = useForm<ReopenFormValues>({
+    defaultValues: { reason: '' },
+    resolver: zodResolver(reopenFormSchema),
+    mode: 'onTouched',
+  });
   const reopen = useReopenMachine(machineId);
-  const length = reason.trim().length;
+  const length = useWatch({ control: form.control, name: 'reason' }).trim().length;
   const short = length < MIN_REASON;
   const close = () => {
     if (reopen.isPending) return;
     reopen.reset();
     onClose();
   };
-  const send = () => {
-    setTouched(true);
-    if (short || reopen.isPending) return;
+  const send = form.handleSubmit(({ reason }) => {
+    if (reopen.isPending) return;
     reopen.mutate({ reason: reason.trim() }, { onSuccess: onClose });
-  };
+  });
   return (
     <Dialog open onClose={close} fullWidth maxWidth="sm" aria-labelledby="reopen-title">
       <DialogTitle id="reopen-title">Reopen {machineName} for changes</DialogTitle>
@@ -57,22 +65,16 @@ export function ReopenDialog({
             certificate stays as it was, and its public check will show the approval as reopened.
           </Typography>
           {reopen.error && <Alert severity="error">{reopen.error.message}</Alert>}
-          <TextField
+          <FormTextField
+            form={form}
+            name="reason"
             label="Reason for reopening"
-            value={reason}
-            onChange={(e) => setReason(e.target.value)}
-            onBlur={() => setTouched(true)}
             multiline
             minRows={3}
             required
             autoFocus
             disabled={reopen.isPending}
-            error={touched && short}
-            helperText={
-              short
-                ? `Say what is to be changed and why, in at least ${MIN_REASON} characters (${length} so far)`
-                : `${length} characters`
-            }
+            helperText={short ? shortReason(length) : `${length} characters`}
           />
         </Stack>
       </DialogContent>

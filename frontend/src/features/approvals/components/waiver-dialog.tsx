@@ -1,20 +1,23 @@
-import { useState } from 'react';
-import {
-  Alert,
-  Button,
-  Dialog,
-  DialogActions,
-  DialogContent,
-  DialogTitle,
-  Stack,
-  TextField,
-  Typography,
-} from '@mui/material';
+import { Alert, Button, Dialog, DialogActions, DialogContent, DialogTitle, Stack, Typography } from '@mui/material';
+import { useForm, useWatch } from 'react-hook-form';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { z } from 'zod';
+import { FormTextField } from '../../../components/form/form-text-field';
 import { useWaiveCheck } from '../api/waive-check';
 import { resultText, targetText } from '../format';
 import { KIND_LABELS, STATUS_LABELS, type BoardCheck } from '../types';
 
 const MIN_REASON = 10;
+
+const waiverFormSchema = z.object({
+  reason: z
+    .string()
+    .refine((s) => s.trim().length >= MIN_REASON, { message: `Say why, in at least ${MIN_REASON} characters` }),
+});
+
+type WaiverFormValues = z.input<typeof waiverFormSchema>;
+
+const emptyWaiverForm: WaiverFormValues = { reason: '' };
 
 /** An owner lets one check pass with a written reason, kept on the record and printed. */
 export function WaiverDialog({
@@ -26,14 +29,19 @@ export function WaiverDialog({
   check: BoardCheck | null;
   onClose: () => void;
 }) {
-  const [reason, setReason] = useState('');
+  const form = useForm<WaiverFormValues>({ defaultValues: emptyWaiverForm, resolver: zodResolver(waiverFormSchema) });
   const waive = useWaiveCheck(machineId);
   const close = () => {
-    setReason('');
+    form.reset(emptyWaiverForm);
     waive.reset();
     onClose();
   };
-  const short = reason.trim().length < MIN_REASON;
+  const length = useWatch({ control: form.control, name: 'reason' }).trim().length;
+  // The button stays off until the reason is long enough; the hint counts meanwhile.
+  const short = length < MIN_REASON;
+  const submit = form.handleSubmit(
+    ({ reason }) => check && waive.mutate({ checkKey: check.key, reason: reason.trim() }, { onSuccess: close }),
+  );
   return (
     <Dialog open={!!check} onClose={close} fullWidth maxWidth="sm">
       <DialogTitle>Waive a check</DialogTitle>
@@ -49,28 +57,22 @@ export function WaiverDialog({
               printed on the certificate.
             </Typography>
             {waive.error && <Alert severity="error">{waive.error.message}</Alert>}
-            <TextField
+            <FormTextField
+              form={form}
+              name="reason"
               label="Reason"
-              value={reason}
-              onChange={(e) => setReason(e.target.value)}
               multiline
               minRows={3}
               required
               autoFocus
-              helperText={
-                short ? `Say why, in at least ${MIN_REASON} characters` : `${reason.trim().length} characters`
-              }
+              helperText={short ? `Say why, in at least ${MIN_REASON} characters` : `${length} characters`}
             />
           </Stack>
         </DialogContent>
       )}
       <DialogActions>
         <Button onClick={close}>Cancel</Button>
-        <Button
-          variant="contained"
-          disabled={short || waive.isPending}
-          onClick={() => check && waive.mutate({ checkKey: check.key, reason: reason.trim() }, { onSuccess: close })}
-        >
+        <Button variant="contained" disabled={short || waive.isPending} onClick={submit}>
           Waive with this reason
         </Button>
       </DialogActions>

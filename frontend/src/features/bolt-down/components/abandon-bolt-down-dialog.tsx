@@ -1,34 +1,37 @@
-import { useState, type FormEvent } from 'react';
-import {
-  Alert,
-  Button,
-  Dialog,
-  DialogActions,
-  DialogContent,
-  DialogContentText,
-  DialogTitle,
-  TextField,
-} from '@mui/material';
+import { Alert, Button, Dialog, DialogActions, DialogContent, DialogContentText, DialogTitle } from '@mui/material';
+import { useForm } from 'react-hook-form';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { z } from 'zod';
+import { FormTextField } from '../../../components/form/form-text-field';
 import { useOnline } from '../../../components/offline/use-online';
 import { useAbandonBoltDown } from '../api/abandon-bolt-down';
 import type { BoltDown } from '../types';
 
 const MIN_REASON = 3;
 
+const abandonFormSchema = z.object({
+  reason: z
+    .string()
+    .refine((s) => s.trim().length >= MIN_REASON, { message: `Say why, in at least ${MIN_REASON} characters` }),
+});
+
+type AbandonFormValues = z.input<typeof abandonFormSchema>;
+
 /** Asks why before a bolt-down is given up; the reason is kept with it and in the history. */
 export function AbandonBoltDownDialog({ bd, open, onClose }: { bd: BoltDown; open: boolean; onClose: () => void }) {
-  const [reason, setReason] = useState('');
-  const [touched, setTouched] = useState(false);
+  // A short reason shows as a problem once the field has been left or the form sent.
+  const form = useForm<AbandonFormValues>({
+    defaultValues: { reason: '' },
+    resolver: zodResolver(abandonFormSchema),
+    mode: 'onTouched',
+  });
   const abandon = useAbandonBoltDown(bd);
   const online = useOnline();
-  const short = reason.trim().length < MIN_REASON;
 
-  function submit(e: FormEvent) {
-    e.preventDefault();
-    setTouched(true);
-    if (short || abandon.isPending) return;
+  const submit = form.handleSubmit(({ reason }) => {
+    if (abandon.isPending) return;
     abandon.mutate(reason.trim(), { onSuccess: onClose });
-  }
+  });
 
   return (
     <Dialog
@@ -44,21 +47,15 @@ export function AbandonBoltDownDialog({ bd, open, onClose }: { bd: BoltDown; ope
           {bd.fixedCount} of {bd.holeCount} holes are fixed. No more holes can be fixed in it afterwards; what was
           recorded stays in the history, and a new bolt-down of rail {bd.rail.label} can begin.
         </DialogContentText>
-        <TextField
+        <FormTextField
+          form={form}
+          name="reason"
           autoFocus
           fullWidth
           multiline
           minRows={2}
           label="Why is it abandoned?"
-          value={reason}
-          onChange={(e) => setReason(e.target.value)}
-          onBlur={() => setTouched(true)}
-          error={touched && short}
-          helperText={
-            touched && short
-              ? `Say why, in at least ${MIN_REASON} characters`
-              : 'Kept with the bolt-down, e.g. “rail lifted to clean a burr off the reference face”'
-          }
+          helperText="Kept with the bolt-down, e.g. “rail lifted to clean a burr off the reference face”"
           slotProps={{ htmlInput: { maxLength: 1000 } }}
         />
         {!online && (

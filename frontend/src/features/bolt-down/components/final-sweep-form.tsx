@@ -1,4 +1,4 @@
-import { useRef, useState, type FormEvent, type KeyboardEvent } from 'react';
+import { useMemo, useRef, useState, type KeyboardEvent } from 'react';
 import { positionIn, positionText } from '../utils/position-text';
 import {
   Alert,
@@ -15,13 +15,22 @@ import {
   TextField,
   Typography,
 } from '@mui/material';
+import { Controller, useForm, useWatch } from 'react-hook-form';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { FormTextField } from '../../../components/form/form-text-field';
 import { useMe } from '../../../lib/session/get-me';
 import { UNIT_LABELS } from '../../../lib/units';
 import { useBoltTorques } from '../api/get-bolt-torques';
-import { useSaveFinalSweep, type FinalSweepInput } from '../api/save-final-sweep';
+import { useSaveFinalSweep } from '../api/save-final-sweep';
 import type { BoltDown } from '../types';
 import type { GuideHole } from '../utils/guide-state';
 import { parseReading } from '../utils/format';
+import {
+  finalSweepFormOf,
+  finalSweepFormSchema,
+  toFinalSweepInput,
+  type FinalSweepFormValues,
+} from './final-sweep-form-schema';
 
 interface Props {
   bd: BoltDown;
@@ -29,8 +38,6 @@ interface Props {
   holes: GuideHole[];
   typicalBoltSize: string | null;
 }
-
-const optionalNumber = (text: string) => (text.trim() === '' ? undefined : parseReading(text));
 
 /**
  * The offer at the end of a bolt-down: one more pass of the carriage with a station at every
@@ -41,19 +48,20 @@ const optionalNumber = (text: string) => (text.trim() === '' ? undefined : parse
 export function FinalSweepForm({ bd, holes, typicalBoltSize }: Props) {
   const unit = UNIT_LABELS[bd.readingUnit];
   const me = useMe();
-  const [readings, setReadings] = useState(() => holes.map((h) => (h.reading === null ? '' : String(h.reading))));
-  const [instrument, setInstrument] = useState('');
-  const [resolution, setResolution] = useState('');
-  const [temperature, setTemperature] = useState('');
-  const [phase, setPhase] = useState<FinalSweepInput['phase']>('as-left');
-  const [takenBy, setTakenBy] = useState('');
-  const [datum, setDatum] = useState('');
-  const [boltSize, setBoltSize] = useState(typicalBoltSize ?? '');
-  const [torque, setTorque] = useState('');
-  const [notes, setNotes] = useState('');
-  const [problem, setProblem] = useState<string | null>(null);
+  const schema = useMemo(
+    () => finalSweepFormSchema(holes.map((h) => positionText(h.position, bd.lengthUnit))),
+    [holes, bd.lengthUnit],
+  );
+  const form = useForm<FinalSweepFormValues>({
+    defaultValues: finalSweepFormOf(holes, typicalBoltSize),
+    resolver: zodResolver(schema),
+    shouldFocusError: false,
+  });
+  const [takenBy, boltSize, torque] = useWatch({ control: form.control, name: ['takenBy', 'boltSize', 'torque'] });
+  // The server's refusal of a sent sweep (a problem with what was typed shows under its field).
+  const [refused, setRefused] = useState<string | null>(null);
   const torques = useBoltTorques();
-  const save = useSaveFinalSweep(bd, setProblem);
+  const save = useSaveFinalSweep(bd, setRefused);
   const inputs = useRef<(HTMLInputElement | null)[]>([]);
   const submit = useRef<HTMLButtonElement>(null);
   const usual = torques.data?.bolts.find((b) => b.boltSize === boltSize)?.torqueNm;
@@ -65,38 +73,21 @@ export function FinalSweepForm({ bd, holes, typicalBoltSize }: Props) {
     (inputs.current[i + 1] ?? submit.current)?.focus();
   };
 
-  function onSubmit(e: FormEvent) {
-    e.preventDefault();
-    const bad = readings.findIndex((r) => parseReading(r) === null);
-    if (bad >= 0) {
-      setProblem(`The reading at ${positionText(holes[bad].position, bd.lengthUnit)} is not a number`);
-      inputs.current[bad]?.focus();
-      return;
-    }
-    const numbers = {
-      resolution: optionalNumber(resolution),
-      temperature: optionalNumber(temperature),
-      torque: optionalNumber(torque),
-    };
-    const badField = Object.entries(numbers).find(([, v]) => v === null);
-    if (badField) return setProblem(`The ${badField[0]} must be a number`);
-    setProblem(null);
-    save({
-      readingUnit: bd.readingUnit,
-      // Hole positions are sent as kept, in mm.
-      lengthUnit: 'mm',
-      phase,
-      stations: holes.map((h, i) => ({ position: h.position, reading: parseReading(readings[i])! })),
-      instrument: instrument.trim() || undefined,
-      resolution: numbers.resolution ?? undefined,
-      temperatureC: numbers.temperature ?? undefined,
-      takenBy: takenBy.trim() || undefined,
-      datum: datum.trim() || undefined,
-      boltSize: boltSize || undefined,
-      torqueNm: numbers.torque ?? undefined,
-      notes: notes.trim() || undefined,
-    });
-  }
+  // Nothing is sent until every field reads; each bad one is named under itself. The first bad
+  // reading is focused, else the first bad detail: the readings are what the sweep is for.
+  const onSubmit = form.handleSubmit(
+    (values) => {
+      setRefused(null);
+      save(toFinalSweepInput(values, bd, holes));
+    },
+    (errors) => {
+      const bad = holes.findIndex((_, i) => errors.readings?.[i]);
+      if (bad >= 0) inputs.current[bad]?.focus();
+      else if (errors.resolution) form.setFocus('resolution');
+      else if (errors.temperature) form.setFocus('temperature');
+      else if (errors.torque) form.setFocus('torque');
+    },
+  );
 
   return (
     <Paper
@@ -117,72 +108,96 @@ export function FinalSweepForm({ bd, holes, typicalBoltSize }: Props) {
       <Box
         sx={{ display: 'grid', gap: 2, mb: 2, gridTemplateColumns: { xs: '1fr', sm: '1fr 1fr', md: '2fr 1fr 1fr' } }}
       >
-        <TextField
-          label="Instrument"
-          value={instrument}
-          onChange={(e) => setInstrument(e.target.value)}
-          placeholder="Dial indicator on a carriage"
-        />
-        <TextField
+        <FormTextField form={form} name="instrument" label="Instrument" placeholder="Dial indicator on a carriage" />
+        <FormTextField
+          form={form}
+          name="resolution"
           label="Resolution"
-          value={resolution}
-          onChange={(e) => setResolution(e.target.value)}
           slotProps={{
             htmlInput: { inputMode: 'decimal' },
             input: { endAdornment: <InputAdornment position="end">{unit}</InputAdornment> },
           }}
         />
-        <TextField
+        <FormTextField
+          form={form}
+          name="temperature"
           label="Temperature"
-          value={temperature}
-          onChange={(e) => setTemperature(e.target.value)}
           slotProps={{
             htmlInput: { inputMode: 'decimal' },
             input: { endAdornment: <InputAdornment position="end">°C</InputAdornment> },
           }}
         />
-        <TextField
-          select
-          label="Phase"
-          value={phase}
-          onChange={(e) => setPhase(e.target.value as FinalSweepInput['phase'])}
-        >
-          <MenuItem value="as-left">As left (final)</MenuItem>
-          <MenuItem value="as-found">As found</MenuItem>
-        </TextField>
-        <TextField
+        <Controller
+          name="phase"
+          control={form.control}
+          render={({ field }) => (
+            <TextField
+              select
+              label="Phase"
+              name={field.name}
+              value={field.value}
+              onChange={(e) => field.onChange(e.target.value)}
+              onBlur={field.onBlur}
+              inputRef={field.ref}
+            >
+              <MenuItem value="as-left">As left (final)</MenuItem>
+              <MenuItem value="as-found">As found</MenuItem>
+            </TextField>
+          )}
+        />
+        <FormTextField
+          form={form}
+          name="datum"
           label="Datum"
-          value={datum}
-          onChange={(e) => setDatum(e.target.value)}
           helperText="Name the common datum, the same as on the partner rail, to compare the two"
           sx={{ gridColumn: { sm: '1 / -1', md: 'auto' } }}
         />
-        <TextField
+        <FormTextField
+          form={form}
+          name="takenBy"
           label="Taken by"
-          value={takenBy}
-          onChange={(e) => setTakenBy(e.target.value)}
           placeholder={me.data?.name}
           helperText={takenBy.trim() ? ' ' : 'You, when left empty'}
         />
-        <TextField select label="Bolt size" value={boltSize} onChange={(e) => setBoltSize(e.target.value)}>
-          <MenuItem value="">Not recorded</MenuItem>
-          {(torques.data?.bolts ?? []).map((b) => (
-            <MenuItem key={b.boltSize} value={b.boltSize}>
-              {b.boltSize}
-            </MenuItem>
-          ))}
-        </TextField>
-        <TextField
+        <Controller
+          name="boltSize"
+          control={form.control}
+          render={({ field }) => (
+            <TextField
+              select
+              label="Bolt size"
+              name={field.name}
+              value={field.value}
+              onChange={(e) => field.onChange(e.target.value)}
+              onBlur={field.onBlur}
+              inputRef={field.ref}
+            >
+              <MenuItem value="">Not recorded</MenuItem>
+              {(torques.data?.bolts ?? []).map((b) => (
+                <MenuItem key={b.boltSize} value={b.boltSize}>
+                  {b.boltSize}
+                </MenuItem>
+              ))}
+            </TextField>
+          )}
+        />
+        <FormTextField
+          form={form}
+          name="torque"
           label="Torque"
-          value={torque}
-          onChange={(e) => setTorque(e.target.value)}
           slotProps={{
             htmlInput: { inputMode: 'decimal', 'data-testid': 'final-torque' },
             input: {
               endAdornment: (
                 <InputAdornment position="end">
                   {usual !== undefined && torque.trim() !== String(usual) && (
-                    <Button size="small" onClick={() => setTorque(String(usual))} sx={{ mr: 1 }}>
+                    <Button
+                      size="small"
+                      onClick={() =>
+                        form.setValue('torque', String(usual), { shouldValidate: form.formState.isSubmitted })
+                      }
+                      sx={{ mr: 1 }}
+                    >
                       Use {usual}
                     </Button>
                   )}
@@ -200,14 +215,7 @@ export function FinalSweepForm({ bd, holes, typicalBoltSize }: Props) {
           }
           sx={{ gridColumn: { sm: '1 / -1', md: 'span 2' } }}
         />
-        <TextField
-          label="Notes"
-          value={notes}
-          onChange={(e) => setNotes(e.target.value)}
-          multiline
-          minRows={1}
-          sx={{ gridColumn: '1 / -1' }}
-        />
+        <FormTextField form={form} name="notes" label="Notes" multiline minRows={1} sx={{ gridColumn: '1 / -1' }} />
       </Box>
       {torques.data && (
         <Typography variant="body2" color="text.secondary" sx={{ mb: 2 }}>
@@ -229,22 +237,33 @@ export function FinalSweepForm({ bd, holes, typicalBoltSize }: Props) {
                 <TableCell>{h.index + 1}</TableCell>
                 <TableCell align="right">{positionIn(h.position, bd.lengthUnit)}</TableCell>
                 <TableCell sx={{ py: 0.5 }}>
-                  <TextField
-                    inputRef={(el: HTMLInputElement | null) => {
-                      inputs.current[i] = el;
-                    }}
-                    value={readings[i]}
-                    onChange={(e) => setReadings((r) => r.map((v, k) => (k === i ? e.target.value : v)))}
-                    onKeyDown={onKey(i)}
-                    error={parseReading(readings[i]) === null}
-                    slotProps={{
-                      htmlInput: {
-                        inputMode: 'decimal',
-                        enterKeyHint: 'next',
-                        'aria-label': `Final reading at ${positionText(h.position, bd.lengthUnit)}`,
-                      },
-                    }}
-                    sx={{ width: 140 }}
+                  <Controller
+                    name={`readings.${i}`}
+                    control={form.control}
+                    render={({ field, fieldState }) => (
+                      <TextField
+                        name={field.name}
+                        inputRef={(el: HTMLInputElement | null) => {
+                          field.ref(el);
+                          inputs.current[i] = el;
+                        }}
+                        value={field.value}
+                        onChange={(e) => field.onChange(e.target.value)}
+                        onBlur={field.onBlur}
+                        onKeyDown={onKey(i)}
+                        // Flagged as it is typed; named once the sweep has been sent.
+                        error={parseReading(field.value) === null}
+                        helperText={fieldState.error?.message}
+                        slotProps={{
+                          htmlInput: {
+                            inputMode: 'decimal',
+                            enterKeyHint: 'next',
+                            'aria-label': `Final reading at ${positionText(h.position, bd.lengthUnit)}`,
+                          },
+                        }}
+                        sx={{ width: 140 }}
+                      />
+                    )}
                   />
                 </TableCell>
               </TableRow>
@@ -252,9 +271,9 @@ export function FinalSweepForm({ bd, holes, typicalBoltSize }: Props) {
           </TableBody>
         </Table>
       </Box>
-      {problem && (
+      {refused && (
         <Alert severity="error" sx={{ mt: 2 }}>
-          {problem}
+          {refused}
         </Alert>
       )}
       <Button ref={submit} type="submit" variant="contained" size="large" sx={{ mt: 2 }}>

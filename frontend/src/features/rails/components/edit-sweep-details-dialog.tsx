@@ -1,4 +1,3 @@
-import { useState, type FormEvent } from 'react';
 import { useQuery } from '@tanstack/react-query';
 import {
   Alert,
@@ -15,21 +14,22 @@ import {
   useMediaQuery,
   useTheme,
 } from '@mui/material';
+import { Controller, useForm, useWatch } from 'react-hook-form';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { FormTextField } from '../../../components/form/form-text-field';
 import { useOnline } from '../../../components/offline/use-online';
 import { LoadingState } from '../../../components/states/loading-state';
 import { ErrorState } from '../../../components/states/error-state';
 import { useBoltTorques } from '../api/get-bolt-torques';
 import { sweepQueryOptions } from '../api/get-sweep';
-import { useUpdateSweepDetails, type SweepDetailsPatch } from '../api/update-sweep-details';
+import { useUpdateSweepDetails } from '../api/update-sweep-details';
 import type { Sweep } from '../types';
-
-const text = (v: string | number | null | undefined) => (v === null || v === undefined ? '' : String(v));
-const number = (t: string): number | null | 'bad' =>
-  t.trim() === ''
-    ? null
-    : Number.isFinite(Number(t.trim().replace(',', '.')))
-      ? Number(t.trim().replace(',', '.'))
-      : 'bad';
+import {
+  sweepDetailsFormOf,
+  sweepDetailsFormSchema,
+  toSweepDetailsPatch,
+  type SweepDetailsFormValues,
+} from './sweep-details-form-schema';
 
 /** Corrects what was noted with a sweep (datum, notes, instrument, who, bolts); its readings stay as taken. */
 export function EditSweepDetailsDialog({
@@ -62,40 +62,22 @@ export function EditSweepDetailsDialog({
 }
 
 function DetailsForm({ sweep, onClose }: { sweep: Sweep; onClose: () => void }) {
-  const [instrument, setInstrument] = useState(sweep.instrument);
-  const [temperature, setTemperature] = useState(text(sweep.temperatureC));
-  const [takenBy, setTakenBy] = useState(sweep.takenBy);
-  const [datum, setDatum] = useState(text(sweep.datum));
-  const [boltSize, setBoltSize] = useState(text(sweep.boltSize));
-  const [torque, setTorque] = useState(text(sweep.torqueNm));
-  const [notes, setNotes] = useState(sweep.notes);
-  const [problem, setProblem] = useState<string | null>(null);
+  const form = useForm<SweepDetailsFormValues>({
+    defaultValues: sweepDetailsFormOf(sweep),
+    resolver: zodResolver(sweepDetailsFormSchema),
+  });
+  const [boltSize, torque] = useWatch({ control: form.control, name: ['boltSize', 'torque'] });
   const torques = useBoltTorques();
   const update = useUpdateSweepDetails(sweep.id);
   const online = useOnline();
   const bolts = torques.data?.bolts ?? [];
   const usual = bolts.find((b) => b.boltSize === boltSize)?.torqueNm;
 
-  function submit(e: FormEvent) {
-    e.preventDefault();
-    const t = number(temperature);
-    const q = number(torque);
-    if (t === 'bad') return setProblem('Temperature must be a number of °C');
-    if (q === 'bad') return setProblem('Torque must be a number of N·m');
-    if (!takenBy.trim()) return setProblem('Say who took the sweep');
-    // Only what changed is sent: the history then names exactly what was corrected.
-    const patch: SweepDetailsPatch = {};
-    if (instrument.trim() !== sweep.instrument) patch.instrument = instrument.trim();
-    if (t !== sweep.temperatureC) patch.temperatureC = t;
-    if (takenBy.trim() !== sweep.takenBy) patch.takenBy = takenBy.trim();
-    if ((datum.trim() || null) !== sweep.datum) patch.datum = datum.trim() || null;
-    if ((boltSize || null) !== sweep.boltSize) patch.boltSize = boltSize || null;
-    if (q !== sweep.torqueNm) patch.torqueNm = q;
-    if (notes !== sweep.notes) patch.notes = notes;
-    setProblem(null);
+  const submit = form.handleSubmit((values) => {
+    const patch = toSweepDetailsPatch(values, sweep);
     if (!Object.keys(patch).length) return onClose();
     update.mutate(patch, { onSuccess: onClose });
-  }
+  });
 
   return (
     <Box component="form" onSubmit={submit} noValidate sx={{ display: 'contents' }}>
@@ -105,53 +87,62 @@ function DetailsForm({ sweep, onClose }: { sweep: Sweep; onClose: () => void }) 
           values before and after.
         </DialogContentText>
         <Box sx={{ display: 'grid', gap: 2, gridTemplateColumns: { xs: '1fr', sm: '1fr 1fr' } }}>
-          <TextField
+          <FormTextField
+            form={form}
+            name="datum"
             autoFocus
             label="Datum"
-            value={datum}
-            onChange={(e) => setDatum(e.target.value)}
             helperText="The common datum, named the same on the partner rail"
             sx={{ gridColumn: '1 / -1' }}
             slotProps={{ htmlInput: { maxLength: 120 } }}
           />
-          <TextField
+          <FormTextField
+            form={form}
+            name="instrument"
             label="Instrument"
-            value={instrument}
-            onChange={(e) => setInstrument(e.target.value)}
             sx={{ gridColumn: '1 / -1' }}
             slotProps={{ htmlInput: { maxLength: 120 } }}
           />
-          <TextField
-            label="Taken by"
-            value={takenBy}
-            onChange={(e) => setTakenBy(e.target.value)}
-            slotProps={{ htmlInput: { maxLength: 120 } }}
-          />
-          <TextField
+          <FormTextField form={form} name="takenBy" label="Taken by" slotProps={{ htmlInput: { maxLength: 120 } }} />
+          <FormTextField
+            form={form}
+            name="temperature"
             label="Temperature"
-            value={temperature}
-            onChange={(e) => setTemperature(e.target.value)}
             slotProps={{
               htmlInput: { inputMode: 'decimal' },
               input: { endAdornment: <InputAdornment position="end">°C</InputAdornment> },
             }}
           />
-          <TextField select label="Bolt size" value={boltSize} onChange={(e) => setBoltSize(e.target.value)}>
-            <MenuItem value="">Not recorded</MenuItem>
-            {/* A size recorded earlier stays choosable even if the table no longer lists it. */}
-            {[
-              ...bolts.map((b) => b.boltSize),
-              ...(boltSize && !bolts.some((b) => b.boltSize === boltSize) ? [boltSize] : []),
-            ].map((b) => (
-              <MenuItem key={b} value={b}>
-                {b}
-              </MenuItem>
-            ))}
-          </TextField>
-          <TextField
+          <Controller
+            name="boltSize"
+            control={form.control}
+            render={({ field }) => (
+              <TextField
+                select
+                label="Bolt size"
+                name={field.name}
+                value={field.value}
+                onChange={(e) => field.onChange(e.target.value)}
+                onBlur={field.onBlur}
+                inputRef={field.ref}
+              >
+                <MenuItem value="">Not recorded</MenuItem>
+                {/* A size recorded earlier stays choosable even if the table no longer lists it. */}
+                {[
+                  ...bolts.map((b) => b.boltSize),
+                  ...(field.value && !bolts.some((b) => b.boltSize === field.value) ? [field.value] : []),
+                ].map((b) => (
+                  <MenuItem key={b} value={b}>
+                    {b}
+                  </MenuItem>
+                ))}
+              </TextField>
+            )}
+          />
+          <FormTextField
+            form={form}
+            name="torque"
             label="Torque"
-            value={torque}
-            onChange={(e) => setTorque(e.target.value)}
             helperText={
               usual !== undefined && torque.trim() !== String(usual) ? `Usual for ${boltSize}: ${usual} N·m` : ' '
             }
@@ -160,10 +151,10 @@ function DetailsForm({ sweep, onClose }: { sweep: Sweep; onClose: () => void }) 
               input: { endAdornment: <InputAdornment position="end">N·m</InputAdornment> },
             }}
           />
-          <TextField
+          <FormTextField
+            form={form}
+            name="notes"
             label="Notes"
-            value={notes}
-            onChange={(e) => setNotes(e.target.value)}
             multiline
             minRows={2}
             sx={{ gridColumn: '1 / -1' }}
@@ -175,9 +166,9 @@ function DetailsForm({ sweep, onClose }: { sweep: Sweep; onClose: () => void }) 
             Correcting a sweep needs the connection; it is not kept on this device.
           </Alert>
         )}
-        {(problem || update.error) && (
+        {update.error && (
           <Alert severity="error" sx={{ mt: 2 }}>
-            {problem ?? update.error?.message}
+            {update.error.message}
           </Alert>
         )}
       </DialogContent>
