@@ -1,7 +1,9 @@
 import { Inject, Injectable } from '@nestjs/common';
 import { and, asc, desc, eq, inArray, sql } from 'drizzle-orm';
 import { DRIZZLE, type Database } from '../database/database.tokens.js';
-import { boltDownHoles, boltDowns, boltDownWrites, rails, recordLocks } from '../database/schema/index.js';
+import { boltDownHoles, boltDowns, boltDownWrites, machines, rails, recordLocks } from '../database/schema/index.js';
+import type { MachineState } from '../database/schema/machines.js';
+import { machineStateNow } from '../machines/machine-state.js';
 
 export type BoltDownRow = typeof boltDowns.$inferSelect;
 export type BoltDownHoleRow = typeof boltDownHoles.$inferSelect;
@@ -34,6 +36,8 @@ export type HoleWriteOutcome =
 export interface HoleWriteContext {
   row: BoltDownRow;
   rail: { label: string; axis: string; lengthMm: number };
+  /** The machine, its row locked for the rest of the command (state as it reads now). */
+  machine: { name: string; state: MachineState };
   seen: { workshopId: string; boltDownId: string; target: string } | null;
   locked: boolean;
 }
@@ -120,11 +124,18 @@ export class BoltDownsRepository {
   }
 
   /** One read for a hole write: the bolt-down, its rail's label, the write id if seen, and whether an approval locked it. */
+  /**
+   * The bolt-down, its rail, an earlier use of the write id and any approval lock, with the
+   * machine's row locked in the same statement: writers of one machine queue here, before any
+   * write, instead of deadlocking. The bolt-down's own columns are as they were when the statement
+   * began; the write itself checks again that it is neither finished nor abandoned.
+   */
   async findForHoleWrite(workshopId: string, id: string, writeId: string): Promise<HoleWriteContext | null> {
     const [found] = await this.db
       .select({
         row: boltDowns,
         rail: { label: rails.label, axis: rails.axis, lengthMm: rails.lengthMm },
+        machine: { name: machines.name, state: machineStateNow() },
         seen: {
           workshopId: boltDownWrites.workshopId,
           boltDownId: boltDownWrites.boltDownId,
@@ -134,8 +145,10 @@ export class BoltDownsRepository {
       })
       .from(boltDowns)
       .innerJoin(rails, eq(rails.id, boltDowns.railId))
+      .innerJoin(machines, eq(machines.id, boltDowns.machineId))
       .leftJoin(boltDownWrites, eq(boltDownWrites.writeId, writeId))
-      .where(and(eq(boltDowns.workshopId, workshopId), eq(boltDowns.id, id)));
+      .where(and(eq(boltDowns.workshopId, workshopId), eq(boltDowns.id, id)))
+      .for('no key update', { of: machines });
     return found ? { ...found, seen: found.seen?.target ? found.seen : null } : null;
   }
 

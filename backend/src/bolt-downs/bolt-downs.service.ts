@@ -4,7 +4,7 @@ import { holePositions } from '../engine/bolt-down.js';
 import { endDistanceProblem } from '../engine/rail-holes.js';
 import { railEndDistanceMm } from '../rails/rail.mapper.js';
 import { fromMm, toMm, type LengthUnit } from '../engine/units.js';
-import { MachinesService } from '../machines/machines.service.js';
+import { MachinesService, refuseWhileApproved } from '../machines/machines.service.js';
 import { RailSweepsService } from '../rails/rail-sweeps.service.js';
 import { RailsService } from '../rails/rails.service.js';
 import type { RailRow } from '../rails/rails.repository.js';
@@ -132,8 +132,8 @@ export class BoltDownsService implements OnModuleInit {
       }
       return { ...(await this.respond(actor, row, rail)), writeId: dto.writeId, repeated: true };
     }
-    // The machine's row before any write: concurrent writers of one bolt-down queue here instead of deadlocking.
-    await this.machines.lockForChange(actor, row.machineId);
+    // The machine's row was locked by the read above, before any write.
+    refuseWhileApproved(found.machine);
     if (row.finalSweepId) throw finishedConflict();
     if (row.abandonedAt) throw abandonedConflict(row);
     if (found.locked) throw lockedRecordConflict('This bolt-down');

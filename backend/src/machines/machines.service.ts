@@ -19,6 +19,18 @@ import type { CreateMachineDto } from './dto/create-machine.dto.js';
 import type { UpdateMachineDto } from './dto/update-machine.dto.js';
 import type { HistoryQueryDto } from '../history/dto/history-query.dto.js';
 
+/**
+ * Refuses (409) a change to what a standing approval was based on, for a command that locked the
+ * machine's row itself (in the statement that read its own record, one round trip less).
+ */
+export function refuseWhileApproved(machine: { name: string; state: MachineState }): void {
+  if (APPROVED_STATES.includes(machine.state)) {
+    throw new ConflictException(
+      `${machine.name} is approved as ready to cut: what the approval stands on is read-only while it stands. The owner can reopen the machine with a reason to change it.`,
+    );
+  }
+}
+
 @Injectable()
 export class MachinesService implements OnModuleInit {
   constructor(
@@ -85,11 +97,7 @@ export class MachinesService implements OnModuleInit {
    */
   async lockForChange(actor: SessionUser, id: string): Promise<MachineRef & { name: string; state: MachineState }> {
     const machine = await this.lockForCommand(actor, id);
-    if (APPROVED_STATES.includes(machine.state)) {
-      throw new ConflictException(
-        `${machine.name} is approved as ready to cut: what the approval stands on is read-only while it stands. The owner can reopen the machine with a reason to change it.`,
-      );
-    }
+    refuseWhileApproved(machine);
     return machine;
   }
 
