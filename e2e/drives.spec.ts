@@ -199,10 +199,18 @@ test.describe('drives', () => {
       data: { name: `Axis form ${Date.now()}`, kind: 'plasma', workArea: { x: 3000, y: 1500 } },
     });
     const machineId = (await machine.json()).id as string;
+    // Every question put to the drive calculator while the tab and the dialog are open.
+    const asked: { type: string; pinionModule?: number; pinionTeeth?: number }[] = [];
+    page.on('request', (r) => {
+      if (new URL(r.url()).pathname === '/api/calc/drive') asked.push(r.postDataJSON());
+    });
     await page.goto(`/machines/${machineId}?tab=drives`);
     await page.getByRole('button', { name: 'Add axis' }).click();
     const dialog = page.getByRole('dialog');
+    // Nothing to save until the axis has a name.
+    await expect(dialog.getByRole('button', { name: 'Add axis' })).toBeDisabled();
     await dialog.getByLabel('Axis name').fill('Y1');
+    await expect(dialog.getByRole('button', { name: 'Add axis' })).toBeEnabled();
     await dialog.getByRole('button', { name: 'Rack and pinion' }).click();
     await expect(dialog.getByLabel('Lead')).toHaveCount(0);
     await dialog.getByLabel('Pinion module').fill('1.5');
@@ -211,6 +219,10 @@ test.describe('drives', () => {
     await dialog.getByLabel('Gear ratio').fill('3');
     // π × 1.5 × 20 = 94.2478 mm per turn; 200 × 8 × 3 ÷ 94.2478 = 50.9296 steps/mm
     await expect(dialog.getByTestId('theoretical-steps')).toHaveText('50.9296 steps/mm');
+    // Asked only once the rack had its module and its teeth: never for the closed dialog, nor for
+    // the screw offered first with no lead, nor for a module without teeth.
+    expect(asked.length).toBeGreaterThan(0);
+    for (const body of asked) expect(body).toMatchObject({ type: 'rack', pinionModule: 1.5, pinionTeeth: 20 });
     await dialog.getByRole('button', { name: 'Use the theoretical value' }).click();
     await dialog.getByLabel('Measured travel').fill('1540');
     await snap(page, 'axis-form-rack-desktop');
@@ -219,6 +231,36 @@ test.describe('drives', () => {
     const row = page.getByRole('table', { name: 'Axes' }).getByRole('row').filter({ hasText: /^Y1/ });
     await expect(row).toContainText('Rack and pinion, module 1.5, 20-tooth pinion');
     await expect(row.getByText('Does not apply')).toBeVisible();
+  });
+  test('the edit dialog opens on the axis as recorded, forgets what was typed when cancelled, and clears an emptied feed rate', async ({
+    page,
+  }) => {
+    await signInAs(page, DEMO.technician);
+    const { machineId, axisId } = await newAxis(page.request, `Axis edit ${Date.now()}`);
+    await page.goto(`/machines/${machineId}/axes/${axisId}`);
+    await page.getByRole('button', { name: 'Edit axis' }).click();
+    const dialog = page.getByRole('dialog', { name: 'Edit axis X' });
+    await expect(dialog.getByLabel('Axis name')).toHaveValue('X');
+    await expect(dialog.getByRole('textbox', { name: 'Lead' })).toHaveValue('5');
+    // 200 steps × 16 microsteps ÷ 5 mm lead = 640 steps/mm (a 5 mm lead screw, common practice).
+    await expect(dialog.getByTestId('theoretical-steps')).toHaveText('640 steps/mm');
+    await dialog.getByRole('textbox', { name: 'Lead' }).fill('10');
+    await expect(dialog.getByTestId('theoretical-steps')).toHaveText('320 steps/mm');
+    await dialog.getByLabel('Notes').fill('Typed, then thought better of');
+    await dialog.getByRole('button', { name: 'Cancel' }).click();
+    await expect(dialog).toBeHidden();
+
+    await page.getByRole('button', { name: 'Edit axis' }).click();
+    await expect(dialog.getByRole('textbox', { name: 'Lead' })).toHaveValue('5');
+    await expect(dialog.getByLabel('Notes')).toHaveValue('');
+    await expect(dialog.getByTestId('theoretical-steps')).toHaveText('640 steps/mm');
+    await expect(dialog.getByLabel('Fastest feed rate')).toHaveValue('5000');
+    await dialog.getByLabel('Fastest feed rate').fill('');
+    await dialog.getByLabel('Measured travel').fill('930');
+    await dialog.getByRole('button', { name: 'Save changes' }).click();
+    await expect(dialog).toBeHidden();
+    const saved = await (await page.request.get(`/api/axes/${axisId}`)).json();
+    expect(saved).toMatchObject({ maxFeedRate: null, measuredTravel: 930, drive: { type: 'screw', lead: 5 } });
   });
   test('an axis in inches: steps per inch, a trial in inches, a far correction asks first, warnings and temperatures on the run', async ({
     page,

@@ -132,6 +132,119 @@ test.describe('frame and safety walk', () => {
     await snap(page, 'safety-walk-desktop');
   });
 
+  test('the diagonal check and the test cut name each bad length under its field, send nothing until put right, then send what was typed', async ({
+    page,
+  }) => {
+    await signInAs(page, DEMO.technician);
+    const machine = await page.request.post('/api/machines', {
+      data: { name: `Frame forms ${Date.now()}`, kind: 'plasma', workArea: { x: 3000, y: 1500 } },
+    });
+    const machineId = (await machine.json()).id as string;
+    const sent: Record<string, unknown[]> = {};
+    page.on('request', (r) => {
+      const kind = /\/(diagonal-checks|test-cuts)$/.exec(new URL(r.url()).pathname)?.[1];
+      if (r.method() === 'POST' && kind) (sent[kind] ??= []).push(r.postDataJSON());
+    });
+    await page.goto(`/machines/${machineId}`);
+    await page.getByRole('tab', { name: 'Frame' }).click();
+
+    const diagonal = page.getByRole('form', { name: 'Diagonal check' });
+    await diagonal.getByLabel('X side').fill('0');
+    await diagonal.getByLabel('Y side').fill('1200');
+    await diagonal.getByLabel(/^Diagonal 1/).fill('2332,15');
+    await diagonal.getByLabel(/^Gantry span/).fill('-5');
+    await diagonal.getByLabel(/^Read to/).fill('0');
+    await diagonal.getByRole('button', { name: 'Record diagonal check' }).click();
+    await expect(diagonal.getByLabel('X side')).toHaveAccessibleDescription(
+      'X side must be a length greater than zero',
+    );
+    await expect(diagonal.getByLabel(/^Diagonal 2/)).toHaveAccessibleDescription(
+      'Diagonal 2 must be a length greater than zero',
+    );
+    await expect(diagonal.getByLabel(/^Gantry span/)).toHaveAccessibleDescription(
+      'Gantry span must be greater than zero, or left empty',
+    );
+    await expect(diagonal.getByLabel(/^Read to/)).toHaveAccessibleDescription(
+      'Resolution must be greater than zero, or left empty',
+    );
+    // A decimal comma is a length; a field typed well keeps its hint.
+    await expect(diagonal.getByLabel(/^Diagonal 1/)).toHaveAccessibleDescription('X0 Y0 corner to the far corner');
+    await expect(diagonal.getByLabel('Y side')).toHaveAccessibleDescription('');
+    // Put right, a field's message goes at once; the others stay until theirs are.
+    await diagonal.getByLabel(/^Gantry span/).fill('');
+    await expect(diagonal.getByLabel(/^Gantry span/)).toHaveAccessibleDescription(
+      'Between the two drives; the X side when empty',
+    );
+    await expect(diagonal.getByLabel('X side')).toHaveAccessibleDescription(
+      'X side must be a length greater than zero',
+    );
+
+    // Enter in a field sends the test cut, as the button does.
+    const cut = page.getByRole('form', { name: 'Test cut' });
+    await cut.getByLabel('Programmed X').fill('400');
+    await cut.getByLabel('Kerf').fill('-0.1');
+    await cut.getByLabel('Plate thickness').fill('0');
+    await cut.getByLabel('Steps/mm X').fill('0');
+    await cut.getByLabel('Programmed X').press('Enter');
+    await expect(cut.getByLabel('Programmed Y')).toHaveAccessibleDescription(
+      'Programmed Y must be a length greater than zero',
+    );
+    await expect(cut.getByLabel('Circle ⌀ along Y')).toHaveAccessibleDescription(
+      'Circle ⌀ along Y must be a length greater than zero',
+    );
+    await expect(cut.getByLabel('Kerf')).toHaveAccessibleDescription('Kerf must be zero or more, or left empty');
+    await expect(cut.getByLabel('Plate thickness')).toHaveAccessibleDescription(
+      'Plate thickness must be greater than zero, or left empty',
+    );
+    await expect(cut.getByLabel('Steps/mm X')).toHaveAccessibleDescription(
+      'Steps per mm X must be greater than zero, or left empty',
+    );
+    await expect(cut.getByLabel('Programmed X')).toHaveAccessibleDescription('');
+    // A kerf of zero is a value (the compensation was exact): its hint comes back.
+    await cut.getByLabel('Kerf').fill('0');
+    await expect(cut.getByLabel('Kerf')).toHaveAccessibleDescription(
+      'Width the controller did not compensate; empty when compensation was on',
+    );
+    expect(sent).toEqual({});
+
+    // Put right, each is sent as typed: lengths in the chosen unit, empty optional fields left out.
+    await diagonal.getByLabel('X side').fill('2000');
+    await diagonal.getByLabel(/^Diagonal 2/).fill('2332.85');
+    await diagonal.getByLabel(/^Read to/).fill('');
+    await diagonal.getByRole('button', { name: 'Record diagonal check' }).click();
+    await expect(page.getByTestId('squareness-result')).toBeVisible();
+    expect(sent['diagonal-checks']).toEqual([
+      { sideX: 2000, sideY: 1200, diagonal1: 2332.15, diagonal2: 2332.85, lengthUnit: 'mm' },
+    ]);
+    for (const [label, value] of [
+      ['Programmed Y', '400'],
+      [/^Circle ⌀\s*\*?$/, '100'],
+      ['Measured X', '399.6'],
+      ['Measured Y', '400.2'],
+      [/^Diagonal 1/, '565.4'],
+      [/^Diagonal 2/, '565.9'],
+      ['Circle ⌀ along X', '99.7'],
+      ['Circle ⌀ along Y', '99.9'],
+      ['Plate thickness', '6'],
+      ['Steps/mm X', '80'],
+    ] as const)
+      await cut.getByLabel(label).fill(value);
+    await cut.getByLabel('Note').fill('  6 mm mild steel, 45 A  ');
+    await cut.getByRole('button', { name: 'Record test cut' }).click();
+    await expect.poll(() => sent['test-cuts']?.length).toBe(1);
+    expect(sent['test-cuts']).toEqual([
+      {
+        lengthUnit: 'mm',
+        plateThickness: 6,
+        nominal: { x: 400, y: 400, circle: 100 },
+        measured: { x: 399.6, y: 400.2, diagonal1: 565.4, diagonal2: 565.9, circleX: 99.7, circleY: 99.9, kerf: 0 },
+        circleKind: 'hole',
+        stepsPerMm: { x: 80 },
+        note: '6 mm mild steel, 45 A',
+      },
+    ]);
+  });
+
   test('the router shows its complete walk; builders record frame checks but not test cuts', async ({ page }) => {
     await signInAs(page, DEMO.builder);
     await openTab(page, 'Small router', 'Frame');

@@ -134,6 +134,8 @@ test.describe('drilling templates', () => {
       await page.goto(`/machines/${machineId}?tab=templates`);
       await page.getByRole('button', { name: 'New pattern' }).click();
       const dialog = page.getByRole('dialog', { name: 'New hole pattern' });
+      // Nothing to save until the pattern has a name.
+      await expect(dialog.getByRole('button', { name: 'Save pattern' })).toBeDisabled();
       await dialog.getByLabel('Name').fill(`Z bearing plate ${label}`);
       await expect(dialog.getByText('4 holes')).toBeVisible();
       await dialog.getByRole('tab', { name: 'Grid' }).click();
@@ -146,5 +148,57 @@ test.describe('drilling templates', () => {
       await expect(dialog).toBeHidden();
       await expect(page.getByRole('link', { name: `Z bearing plate ${label}`, exact: true })).toBeVisible();
     }
+  });
+  test('a pattern typed as a list of holes: a hole added takes the last diameter, one removed goes, and the edit dialog opens on what was saved', async ({
+    page,
+  }) => {
+    await signInAs(page, DEMO.builder);
+    const machine = await page.request.post('/api/machines', {
+      data: { name: `Hole list ${Date.now()}`, kind: 'router', workArea: { x: 900, y: 600 } },
+    });
+    const machineId = (await machine.json()).id as string;
+    await page.goto(`/machines/${machineId}?tab=templates`);
+    await page.getByRole('button', { name: 'New pattern' }).click();
+    const dialog = page.getByRole('dialog', { name: 'New hole pattern' });
+    const save = dialog.getByRole('button', { name: 'Save pattern' });
+    const field = (name: string) => dialog.getByLabel(name, { exact: true });
+    await dialog.getByLabel('Name').fill('X carriage plate');
+    await dialog.getByRole('tab', { name: 'List of holes' }).click();
+    await expect(dialog.getByText('· 1 holes')).toBeVisible();
+    await field('Ø 1 (mm)').fill('6.6');
+    const addHole = dialog.getByRole('button', { name: 'Add hole' });
+    await addHole.click();
+    await expect(addHole).toBeFocused();
+    await expect(field('Ø 2 (mm)')).toHaveValue('6.6');
+    await expect(field('x 2 (mm)')).toHaveValue('');
+    // A hole without its place: no drawing, nothing to save.
+    await expect(dialog.getByText('Give a name and every number to see the holes.')).toBeVisible();
+    await expect(save).toBeDisabled();
+    await field('x 2 (mm)').fill('90');
+    await field('y 2 (mm)').fill('70');
+    await expect(dialog.getByText('· 2 holes')).toBeVisible();
+    await expect(save).toBeEnabled();
+    // The first hole removed: the second moves up, and the last one left cannot be removed.
+    await dialog.getByRole('button', { name: 'Remove hole 1' }).click();
+    await expect(field('x 1 (mm)')).toHaveValue('90');
+    await expect(field('x 2 (mm)')).toHaveCount(0);
+    await expect(dialog.getByRole('button', { name: 'Remove hole 1' })).toBeDisabled();
+    await expect(dialog.getByText('· 1 holes')).toBeVisible();
+    await addHole.click();
+    await field('x 2 (mm)').fill('10');
+    await field('y 2 (mm)').fill('10');
+    await expect(dialog.getByText('· 2 holes')).toBeVisible();
+    await save.click();
+    await expect(dialog).toBeHidden();
+
+    await page.getByRole('link', { name: 'X carriage plate', exact: true }).click();
+    await expect(page.getByRole('table', { name: 'Holes' }).getByRole('row')).toHaveCount(3);
+    await page.getByRole('button', { name: 'Edit pattern' }).click();
+    const edit = page.getByRole('dialog', { name: 'Edit X carriage plate' });
+    await expect(edit.getByLabel('Name')).toHaveValue('X carriage plate');
+    await expect(edit.getByRole('tab', { name: 'List of holes' })).toHaveAttribute('aria-selected', 'true');
+    await expect(edit.getByLabel('x 1 (mm)', { exact: true })).toHaveValue('90');
+    await expect(edit.getByLabel('Ø 2 (mm)', { exact: true })).toHaveValue('6.6');
+    await expect(edit.getByText('· 2 holes')).toBeVisible();
   });
 });

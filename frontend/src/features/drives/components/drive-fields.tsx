@@ -1,38 +1,15 @@
 import { Box, MenuItem, TextField, ToggleButton, ToggleButtonGroup, Typography } from '@mui/material';
+import { Controller, useWatch, type UseFormReturn } from 'react-hook-form';
 import { DRIVE_LABELS, MOUNTING_LABELS, type DriveType, type Mounting } from '../types';
-import { UNIT_LABELS, type LengthUnit } from '../../../lib/units';
-import { NumberInput } from './number-input';
-
-export interface DriveDraft {
-  type: DriveType;
-  /** A screw's lead given as a length or as threads per inch. */
-  leadAs: 'length' | 'tpi';
-  lead: string;
-  threadsPerInch: string;
-  nominalDiameter: string;
-  rootDiameter: string;
-  unsupportedLength: string;
-  mounting: Mounting | '';
-  dnLimit: string;
-  beltPitch: string;
-  pulleyTeeth: string;
-  pinionModule: string;
-  pinionTeeth: string;
-}
+import { UNIT_LABELS } from '../../../lib/units';
+import type { AxisFormValues, DriveDraft } from './axis-form-schema';
+import { FormNumberInput } from './form-number-input';
 
 const grid = { display: 'grid', gridTemplateColumns: { xs: '1fr', sm: '1fr 1fr' }, gap: 2 } as const;
 
 /** The drive's own fields, switched by its type; lengths in the axis's unit (the pinion module in mm). */
-export function DriveFields({
-  draft,
-  onChange,
-  unit,
-}: {
-  draft: DriveDraft;
-  onChange: (d: DriveDraft) => void;
-  unit: LengthUnit;
-}) {
-  const set = (k: keyof DriveDraft) => (v: string) => onChange({ ...draft, [k]: v });
+export function DriveFields({ form }: { form: UseFormReturn<AxisFormValues> }) {
+  const [type, leadAs, unit] = useWatch({ control: form.control, name: ['drive.type', 'drive.leadAs', 'lengthUnit'] });
   const u = UNIT_LABELS[unit];
   return (
     <Box sx={{ display: 'grid', gap: 2 }}>
@@ -40,94 +17,109 @@ export function DriveFields({
         <Typography variant="body2" color="text.secondary" sx={{ mb: 0.5 }} id="drive-type-label">
           Drive
         </Typography>
-        <ToggleButtonGroup
-          exclusive
-          size="small"
-          value={draft.type}
-          onChange={(_, v) => v && onChange({ ...draft, type: v })}
-          aria-labelledby="drive-type-label"
-        >
-          {(Object.keys(DRIVE_LABELS) as DriveType[]).map((t) => (
-            <ToggleButton key={t} value={t} sx={{ px: 2 }}>
-              {DRIVE_LABELS[t]}
-            </ToggleButton>
-          ))}
-        </ToggleButtonGroup>
+        <Controller
+          name="drive.type"
+          control={form.control}
+          render={({ field }) => (
+            <ToggleButtonGroup
+              exclusive
+              size="small"
+              value={field.value}
+              onChange={(_, v: DriveType | null) => v && field.onChange(v)}
+              aria-labelledby="drive-type-label"
+            >
+              {(Object.keys(DRIVE_LABELS) as DriveType[]).map((t) => (
+                <ToggleButton key={t} value={t} sx={{ px: 2 }}>
+                  {DRIVE_LABELS[t]}
+                </ToggleButton>
+              ))}
+            </ToggleButtonGroup>
+          )}
+        />
       </Box>
-      {draft.type === 'screw' && (
+      {type === 'screw' && (
         <>
           <Box sx={grid}>
             <Box sx={{ display: 'flex', gap: 1, alignItems: 'flex-start' }}>
-              <TextField
-                select
-                label="Lead given as"
-                value={draft.leadAs}
-                onChange={(e) => onChange({ ...draft, leadAs: e.target.value as DriveDraft['leadAs'] })}
-                sx={{ minWidth: 150 }}
-              >
-                <MenuItem value="length">Lead ({u})</MenuItem>
-                <MenuItem value="tpi">Threads per inch</MenuItem>
-              </TextField>
-              {draft.leadAs === 'tpi' ? (
-                <NumberInput
+              <Controller
+                name="drive.leadAs"
+                control={form.control}
+                render={({ field }) => (
+                  <TextField
+                    select
+                    label="Lead given as"
+                    value={field.value}
+                    onChange={(e) => field.onChange(e.target.value as DriveDraft['leadAs'])}
+                    sx={{ minWidth: 150 }}
+                  >
+                    <MenuItem value="length">Lead ({u})</MenuItem>
+                    <MenuItem value="tpi">Threads per inch</MenuItem>
+                  </TextField>
+                )}
+              />
+              {leadAs === 'tpi' ? (
+                <FormNumberInput
+                  key="drive.threadsPerInch"
+                  form={form}
+                  name="drive.threadsPerInch"
                   label="Threads per inch"
                   unit="TPI"
                   required
-                  value={draft.threadsPerInch}
-                  onChange={set('threadsPerInch')}
                   helperText="Single-start screw: lead = 1 ÷ TPI inch"
                 />
               ) : (
-                <NumberInput
+                <FormNumberInput
+                  key="drive.lead"
+                  form={form}
+                  name="drive.lead"
                   label="Lead"
                   unit={u}
                   required
-                  value={draft.lead}
-                  onChange={set('lead')}
                   helperText="Pitch × starts: travel per screw turn"
                 />
               )}
             </Box>
-            <NumberInput
-              label="Nominal diameter"
-              unit={u}
-              value={draft.nominalDiameter}
-              onChange={set('nominalDiameter')}
-            />
-            <NumberInput
+            <FormNumberInput form={form} name="drive.nominalDiameter" label="Nominal diameter" unit={u} />
+            <FormNumberInput
+              form={form}
+              name="drive.rootDiameter"
               label="Root diameter"
               unit={u}
-              value={draft.rootDiameter}
-              onChange={set('rootDiameter')}
               helperText="Thread root (core); about 12.9 mm (0.51 in) on a rolled 16 × 5"
             />
-            <NumberInput
+            <FormNumberInput
+              form={form}
+              name="drive.unsupportedLength"
               label="Length between supports"
               unit={u}
-              value={draft.unsupportedLength}
-              onChange={set('unsupportedLength')}
               helperText="Unsupported length the screw can whirl over"
             />
-            <TextField
-              select
-              label="End mounting"
-              value={draft.mounting}
-              onChange={(e) => onChange({ ...draft, mounting: e.target.value as Mounting })}
-            >
-              <MenuItem value="">
-                <em>Not known yet</em>
-              </MenuItem>
-              {(Object.keys(MOUNTING_LABELS) as Mounting[]).map((m) => (
-                <MenuItem key={m} value={m}>
-                  {MOUNTING_LABELS[m]}
-                </MenuItem>
-              ))}
-            </TextField>
-            <NumberInput
+            <Controller
+              name="drive.mounting"
+              control={form.control}
+              render={({ field }) => (
+                <TextField
+                  select
+                  label="End mounting"
+                  value={field.value}
+                  onChange={(e) => field.onChange(e.target.value as Mounting)}
+                >
+                  <MenuItem value="">
+                    <em>Not known yet</em>
+                  </MenuItem>
+                  {(Object.keys(MOUNTING_LABELS) as Mounting[]).map((m) => (
+                    <MenuItem key={m} value={m}>
+                      {MOUNTING_LABELS[m]}
+                    </MenuItem>
+                  ))}
+                </TextField>
+              )}
+            />
+            <FormNumberInput
+              form={form}
+              name="drive.dnLimit"
               label="d·n limit of the nut"
               unit="mm·rpm"
-              value={draft.dnLimit}
-              onChange={set('dnLimit')}
               helperText="Blank: 70 000, usual for rolled screws"
             />
           </Box>
@@ -136,23 +128,23 @@ export function DriveFields({
           </Typography>
         </>
       )}
-      {draft.type === 'belt' && (
+      {type === 'belt' && (
         <Box sx={grid}>
-          <NumberInput label="Belt pitch" unit={u} required value={draft.beltPitch} onChange={set('beltPitch')} />
-          <NumberInput label="Pulley teeth" required value={draft.pulleyTeeth} onChange={set('pulleyTeeth')} />
+          <FormNumberInput form={form} name="drive.beltPitch" label="Belt pitch" unit={u} required />
+          <FormNumberInput form={form} name="drive.pulleyTeeth" label="Pulley teeth" required />
         </Box>
       )}
-      {draft.type === 'rack' && (
+      {type === 'rack' && (
         <Box sx={grid}>
-          <NumberInput
+          <FormNumberInput
+            form={form}
+            name="drive.pinionModule"
             label="Pinion module"
             unit="mm"
             required
-            value={draft.pinionModule}
-            onChange={set('pinionModule')}
             helperText="Always in mm: one pinion turn moves π × module × teeth"
           />
-          <NumberInput label="Pinion teeth" required value={draft.pinionTeeth} onChange={set('pinionTeeth')} />
+          <FormNumberInput form={form} name="drive.pinionTeeth" label="Pinion teeth" required />
         </Box>
       )}
     </Box>

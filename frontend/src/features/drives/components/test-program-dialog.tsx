@@ -1,4 +1,3 @@
-import { useState } from 'react';
 import {
   Alert,
   Box,
@@ -14,47 +13,36 @@ import {
   ToggleButtonGroup,
   Typography,
 } from '@mui/material';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { Controller, useForm, useWatch } from 'react-hook-form';
+import { FormTextField } from '../../../components/form/form-text-field';
 import { UnitFamilySelect } from '../../../components/form/unit-select';
-import { fromMm, UNIT_LABELS, type LengthUnit } from '../../../lib/units';
+import { fromMm, UNIT_LABELS } from '../../../lib/units';
 import { useDownloadTestProgram } from '../api/download-test-program';
 import { useTestTargets } from '../api/test-program-targets';
 import type { Axis } from '../types';
 import { errorText } from '../utils/format';
-import { NumberInput, numberOf } from './number-input';
-
-type Kind = 'travel' | 'positioning';
+import { FormNumberInput } from './form-number-input';
+import {
+  testProgramFormOf,
+  testProgramFormSchema,
+  toTestProgramParams,
+  type TestProgramFormValues,
+} from './test-program-form-schema';
 
 /** Parameters of the G-code test program; blank fields take the server's defaults. */
 export function TestProgramDialog({ axis, open, onClose }: { axis: Axis; open: boolean; onClose: () => void }) {
-  const [kind, setKind] = useState<Kind>('positioning');
-  const [feed, setFeed] = useState('');
-  const [overrun, setOverrun] = useState('');
-  const [runs, setRuns] = useState('5');
-  const [dwell, setDwell] = useState('4');
-  const [targets, setTargets] = useState('');
-  const [distances, setDistances] = useState('');
-  const [start, setStart] = useState('');
-  const [letter, setLetter] = useState(axis.letter ?? '');
-  const [format, setFormat] = useState<'nc' | 'txt'>('nc');
-  const [notes, setNotes] = useState('');
-  const [lengthUnit, setLengthUnit] = useState<LengthUnit>(() => axis.lengthUnit ?? 'mm');
+  // Kept while the page stays: closed and opened again, the dialog offers the settings last used.
+  const form = useForm<TestProgramFormValues>({
+    defaultValues: testProgramFormOf(axis),
+    resolver: zodResolver(testProgramFormSchema),
+  });
+  const [kind, lengthUnit] = useWatch({ control: form.control, name: ['kind', 'lengthUnit'] });
   const serverTargets = useTestTargets(axis.id);
   const download = useDownloadTestProgram(axis.id);
   const done = download.data;
 
-  const submit = () =>
-    download.mutate({
-      kind,
-      feed: numberOf(feed),
-      overrun: numberOf(overrun),
-      letter: letter.trim() || undefined,
-      format,
-      lengthUnit,
-      notes: notes.trim() || undefined,
-      ...(kind === 'positioning'
-        ? { runs: numberOf(runs), dwell: numberOf(dwell), targets: targets.replace(/\s+/g, '') || undefined }
-        : { distances: distances.replace(/\s+/g, '') || undefined, start: numberOf(start) }),
-    });
+  const submit = form.handleSubmit((values) => download.mutate(toTestProgramParams(values)));
   const close = () => {
     download.reset();
     onClose();
@@ -79,16 +67,22 @@ export function TestProgramDialog({ axis, open, onClose }: { axis: Axis; open: b
             Run test programs with the plasma source or torch off and the spindle off, hands and people clear of the
             moving gantry, the E-stop within reach. Check the E-stop and try it at a low feed override first.
           </Alert>
-          <ToggleButtonGroup
-            exclusive
-            size="small"
-            value={kind}
-            onChange={(_, v) => v && setKind(v)}
-            aria-label="Kind of test program"
-          >
-            <ToggleButton value="positioning">Repeat-and-reverse run</ToggleButton>
-            <ToggleButton value="travel">Travel trial</ToggleButton>
-          </ToggleButtonGroup>
+          <Controller
+            name="kind"
+            control={form.control}
+            render={({ field }) => (
+              <ToggleButtonGroup
+                exclusive
+                size="small"
+                value={field.value}
+                onChange={(_, v: TestProgramFormValues['kind'] | null) => v && field.onChange(v)}
+                aria-label="Kind of test program"
+              >
+                <ToggleButton value="positioning">Repeat-and-reverse run</ToggleButton>
+                <ToggleButton value="travel">Travel trial</ToggleButton>
+              </ToggleButtonGroup>
+            )}
+          />
           <Typography variant="body2" color="text.secondary">
             {kind === 'positioning'
               ? 'Each target is approached moving up, then moving down, with an overrun beyond the end targets before reversing; an optional stop (M1) and a dwell at each target for the reading.'
@@ -96,55 +90,73 @@ export function TestProgramDialog({ axis, open, onClose }: { axis: Axis; open: b
             Before running, set the axis zero at the end its travel is measured from; positive moves go away from it. A
             safety line (G17, G21 or G20, G90, G94, G40) comes before any move.
           </Typography>
-          <UnitFamilySelect family="length" label="Values below in" value={lengthUnit} onChange={setLengthUnit} />
+          <Controller
+            name="lengthUnit"
+            control={form.control}
+            render={({ field }) => (
+              <UnitFamilySelect family="length" label="Values below in" value={field.value} onChange={field.onChange} />
+            )}
+          />
           <Box sx={grid}>
-            <NumberInput
+            <FormNumberInput
+              form={form}
+              name="feed"
               label="Feed rate"
               unit={`${lu}/min`}
-              value={feed}
-              onChange={setFeed}
               helperText={`Blank: ${defaultFeed} ${lu}/min`}
             />
-            <NumberInput
+            <FormNumberInput
+              form={form}
+              name="overrun"
               label="Overrun"
               unit={lu}
-              value={overrun}
-              onChange={setOverrun}
               helperText="Past the target before the approach; blank: 5 mm"
             />
             {kind === 'positioning' ? (
               <>
-                <NumberInput label="Runs each way" value={runs} onChange={setRuns} helperText="ISO 230-2 asks for 5" />
-                <NumberInput label="Dwell at each target" unit="s" value={dwell} onChange={setDwell} />
+                <FormNumberInput form={form} name="runs" label="Runs each way" helperText="ISO 230-2 asks for 5" />
+                <FormNumberInput form={form} name="dwell" label="Dwell at each target" unit="s" />
               </>
             ) : (
-              <NumberInput
+              <FormNumberInput
+                form={form}
+                name="start"
                 label="Start"
                 unit={lu}
-                value={start}
-                onChange={setStart}
                 helperText="Blank: the overrun from zero"
               />
             )}
-            <TextField
-              label="G-code axis letter"
-              value={letter}
-              onChange={(e) => setLetter(e.target.value.toUpperCase().slice(0, 1))}
-              helperText={axis.letter ? `From the name ${axis.name}` : 'The name gives none: X, Y or Z…'}
+            <Controller
+              name="letter"
+              control={form.control}
+              render={({ field }) => (
+                <TextField
+                  label="G-code axis letter"
+                  name={field.name}
+                  value={field.value}
+                  // One letter, upper case, as G-code writes an axis.
+                  onChange={(e) => field.onChange(e.target.value.toUpperCase().slice(0, 1))}
+                  onBlur={field.onBlur}
+                  inputRef={field.ref}
+                  helperText={axis.letter ? `From the name ${axis.name}` : 'The name gives none: X, Y or Z…'}
+                />
+              )}
             />
           </Box>
           {kind === 'positioning' ? (
-            <TextField
+            <FormTextField
+              key="targets"
+              form={form}
+              name="targets"
               label={`Targets (${lu}, comma-separated)`}
-              value={targets}
-              onChange={(e) => setTargets(e.target.value)}
               helperText={targetsHint}
             />
           ) : (
-            <TextField
+            <FormTextField
+              key="distances"
+              form={form}
+              name="distances"
               label={`Distances from the start (${lu}, comma-separated)`}
-              value={distances}
-              onChange={(e) => setDistances(e.target.value)}
               helperText={
                 axis.measuredTravelMm
                   ? 'Blank: a quarter, half, three quarters and all of the travel'
@@ -152,23 +164,29 @@ export function TestProgramDialog({ axis, open, onClose }: { axis: Axis; open: b
               }
             />
           )}
-          <TextField
+          <FormTextField
+            form={form}
+            name="notes"
             label="A note for the program's header"
-            value={notes}
-            onChange={(e) => setNotes(e.target.value)}
             helperText="Brackets, semicolons, % and line breaks are left out so the note stays a comment"
             slotProps={{ htmlInput: { maxLength: 200 } }}
           />
-          <TextField
-            select
-            label="File type"
-            value={format}
-            onChange={(e) => setFormat(e.target.value as 'nc' | 'txt')}
-            sx={{ maxWidth: 200 }}
-          >
-            <MenuItem value="nc">.nc (G-code)</MenuItem>
-            <MenuItem value="txt">.txt (plain text)</MenuItem>
-          </TextField>
+          <Controller
+            name="format"
+            control={form.control}
+            render={({ field }) => (
+              <TextField
+                select
+                label="File type"
+                value={field.value}
+                onChange={(e) => field.onChange(e.target.value as TestProgramFormValues['format'])}
+                sx={{ maxWidth: 200 }}
+              >
+                <MenuItem value="nc">.nc (G-code)</MenuItem>
+                <MenuItem value="txt">.txt (plain text)</MenuItem>
+              </TextField>
+            )}
+          />
           {download.error && <Alert severity="error">{errorText(download.error)}</Alert>}
           {done && (
             <Alert severity="success">

@@ -1,9 +1,9 @@
-import { Button, IconButton, Stack, TextField } from '@mui/material';
+import { Button, IconButton, Stack } from '@mui/material';
 import AddOutlined from '@mui/icons-material/AddOutlined';
 import DeleteOutline from '@mui/icons-material/DeleteOutlined';
+import { useFieldArray, useWatch, type UseFormReturn } from 'react-hook-form';
+import { FormTextField } from '../../../components/form/form-text-field';
 import type { PatternDraft } from '../utils/pattern-draft';
-
-type Set = (change: (d: PatternDraft) => PatternDraft) => void;
 
 const num = { inputMode: 'decimal' as const };
 
@@ -24,28 +24,28 @@ const CIRCLE_FIELDS: [keyof PatternDraft['circle'], string][] = [
   ['startAngleDeg', 'First hole angle (°)'],
   ['diameter', 'Hole diameter'],
 ];
+/** Counts and angles have no length unit. */
+const UNITLESS = ['rows', 'columns', 'count', 'startAngleDeg'];
 
 /** The holes as a list, a grid or a bolt circle, in the pattern's unit. */
-export function EntryFields({ draft, set }: { draft: PatternDraft; set: Set }) {
-  const unit = draft.unit;
-  if (draft.entry === 'grid' || draft.entry === 'circle') {
-    const fields = draft.entry === 'grid' ? GRID_FIELDS : CIRCLE_FIELDS;
-    const values = draft[draft.entry] as Record<string, string>;
+export function EntryFields({ form }: { form: UseFormReturn<PatternDraft> }) {
+  const [unit, entry] = useWatch({ control: form.control, name: ['unit', 'entry'] });
+  const holes = useFieldArray({ control: form.control, name: 'holes' });
+  if (entry === 'grid' || entry === 'circle') {
+    const fields =
+      entry === 'grid'
+        ? GRID_FIELDS.map(([key, label]) => [`grid.${key}` as const, key, label] as const)
+        : CIRCLE_FIELDS.map(([key, label]) => [`circle.${key}` as const, key, label] as const);
     return (
       <Stack direction="row" useFlexGap spacing={1.5} sx={{ flexWrap: 'wrap' }}>
-        {fields.map(([key, label]) => (
-          <TextField
-            key={key}
+        {fields.map(([name, key, label]) => (
+          <FormTextField
+            key={name}
+            form={form}
+            name={name}
             size="small"
-            label={['rows', 'columns', 'count', 'startAngleDeg'].includes(key) ? label : `${label} (${unit})`}
-            value={values[key]}
+            label={UNITLESS.includes(key) ? label : `${label} (${unit})`}
             slotProps={{ htmlInput: num }}
-            onChange={(e) =>
-              set((d) => ({
-                ...d,
-                [d.entry]: { ...(d[d.entry as 'grid' | 'circle'] as object), [key]: e.target.value },
-              }))
-            }
             sx={{ width: { xs: '47%', sm: 170 } }}
           />
         ))}
@@ -54,24 +54,22 @@ export function EntryFields({ draft, set }: { draft: PatternDraft; set: Set }) {
   }
   return (
     <Stack spacing={1}>
-      {draft.holes.map((h, i) => (
-        <Stack key={i} direction="row" spacing={1} sx={{ alignItems: 'center' }}>
+      {holes.fields.map((h, i) => (
+        <Stack key={h.id} direction="row" spacing={1} sx={{ alignItems: 'center' }}>
           {(['x', 'y', 'diameter'] as const).map((k) => (
-            <TextField
+            <FormTextField
               key={k}
+              form={form}
+              name={`holes.${i}.${k}`}
               size="small"
               label={`${k === 'diameter' ? 'Ø' : k} ${i + 1} (${unit})`}
-              value={h[k]}
               slotProps={{ htmlInput: num }}
-              onChange={(e) =>
-                set((d) => ({ ...d, holes: d.holes.map((o, j) => (j === i ? { ...o, [k]: e.target.value } : o)) }))
-              }
             />
           ))}
           <IconButton
             aria-label={`Remove hole ${i + 1}`}
-            disabled={draft.holes.length === 1}
-            onClick={() => set((d) => ({ ...d, holes: d.holes.filter((_, j) => j !== i) }))}
+            disabled={holes.fields.length === 1}
+            onClick={() => holes.remove(i)}
           >
             <DeleteOutline />
           </IconButton>
@@ -81,7 +79,11 @@ export function EntryFields({ draft, set }: { draft: PatternDraft; set: Set }) {
         startIcon={<AddOutlined />}
         sx={{ alignSelf: 'flex-start' }}
         onClick={() =>
-          set((d) => ({ ...d, holes: [...d.holes, { x: '', y: '', diameter: d.holes[d.holes.length - 1].diameter }] }))
+          // The new hole takes the last one’s diameter; the focus stays on the button to add the next.
+          holes.append(
+            { x: '', y: '', diameter: form.getValues(`holes.${holes.fields.length - 1}.diameter`) },
+            { shouldFocus: false },
+          )
         }
       >
         Add hole

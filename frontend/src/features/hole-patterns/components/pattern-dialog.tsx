@@ -1,5 +1,6 @@
 import { UnitFamilySelect } from '../../../components/form/unit-select';
-import { useState } from 'react';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { Controller, useForm, useWatch } from 'react-hook-form';
 import {
   Alert,
   Box,
@@ -17,12 +18,14 @@ import {
   TextField,
   Typography,
 } from '@mui/material';
+import { FormTextField } from '../../../components/form/form-text-field';
 import { ApiError } from '../../../lib/api-client';
 import { useDebounced } from '../../../lib/use-debounced';
 import { usePatternPreview } from '../api/preview-hole-pattern';
 import { ENTRY_LABELS, REFERENCE_LABELS, type PatternEntry, type PatternInput, type PatternReference } from '../types';
 import { emptyDraft, inputOf, type PatternDraft } from '../utils/pattern-draft';
 import { EntryFields } from './entry-fields';
+import { patternFormSchema } from './pattern-form-schema';
 import { PatternDrawing } from './pattern-drawing';
 
 interface Props {
@@ -36,14 +39,23 @@ interface Props {
 
 /** Enter or change a pattern, with a live drawing of the holes the server works out. */
 export function PatternDialog({ title, initial, saving, error, onSave, onClose }: Props) {
-  const [draft, setDraft] = useState<PatternDraft>(initial ?? emptyDraft());
-  const input = inputOf(draft);
+  const form = useForm<PatternDraft>({
+    defaultValues: initial ?? emptyDraft(),
+    resolver: zodResolver(patternFormSchema),
+  });
+  // The request as typed so far (null until complete), kept while it does not change, so the
+  // drawing is asked for only once the typing settles on something new.
+  const input = useWatch({ control: form.control, compute: inputOf });
+  const [unit, reference] = useWatch({ control: form.control, name: ['unit', 'reference'] });
   const settled = useDebounced(input, 250);
   const preview = usePatternPreview(settled);
   const problems =
     preview.error instanceof ApiError ? preview.error.details : preview.error ? [preview.error.message] : [];
   const saveProblems = error instanceof ApiError && error.details.length ? error.details : error ? [error.message] : [];
-  const set = (change: (d: PatternDraft) => PatternDraft) => setDraft(change);
+  const save = form.handleSubmit((values) => {
+    const complete = inputOf(values);
+    if (complete) onSave(complete);
+  });
   // On a phone the form and its drawing get the whole screen rather than a cramped box.
   const phone = useMediaQuery(useTheme().breakpoints.down('sm'));
 
@@ -52,68 +64,69 @@ export function PatternDialog({ title, initial, saving, error, onSave, onClose }
       <DialogTitle id="pattern-dialog-title">{title}</DialogTitle>
       <DialogContent>
         <Stack spacing={2} sx={{ pt: 1 }}>
-          <TextField
-            label="Name"
-            placeholder="Y1 motor bracket"
-            required
-            value={draft.name}
-            onChange={(e) => set((d) => ({ ...d, name: e.target.value }))}
-          />
+          <FormTextField form={form} name="name" label="Name" placeholder="Y1 motor bracket" required />
           <Stack direction={{ xs: 'column', sm: 'row' }} spacing={1.5}>
-            <TextField
-              select
-              label="Reference (datum)"
-              value={draft.reference}
-              onChange={(e) => set((d) => ({ ...d, reference: e.target.value as PatternReference }))}
-              sx={{ minWidth: 200 }}
-            >
-              {Object.entries(REFERENCE_LABELS).map(([k, v]) => (
-                <MenuItem key={k} value={k}>
-                  {v}
-                </MenuItem>
-              ))}
-            </TextField>
-            <UnitFamilySelect
-              family="length"
-              value={draft.unit}
-              onChange={(unit) => set((d) => ({ ...d, unit }))}
-              label="Length unit"
+            <Controller
+              name="reference"
+              control={form.control}
+              render={({ field }) => (
+                <TextField
+                  select
+                  label="Reference (datum)"
+                  value={field.value}
+                  onChange={(e) => field.onChange(e.target.value as PatternReference)}
+                  sx={{ minWidth: 200 }}
+                >
+                  {Object.entries(REFERENCE_LABELS).map(([k, v]) => (
+                    <MenuItem key={k} value={k}>
+                      {v}
+                    </MenuItem>
+                  ))}
+                </TextField>
+              )}
             />
-            <TextField
-              label={`Outline width (${draft.unit})`}
-              value={draft.width}
-              slotProps={{ htmlInput: { inputMode: 'decimal' } }}
-              onChange={(e) => set((d) => ({ ...d, width: e.target.value }))}
+            <Controller
+              name="unit"
+              control={form.control}
+              render={({ field }) => (
+                <UnitFamilySelect family="length" value={field.value} onChange={field.onChange} label="Length unit" />
+              )}
             />
-            <TextField
-              label={`Outline height (${draft.unit})`}
-              value={draft.height}
+            <FormTextField
+              form={form}
+              name="width"
+              label={`Outline width (${unit})`}
               slotProps={{ htmlInput: { inputMode: 'decimal' } }}
-              onChange={(e) => set((d) => ({ ...d, height: e.target.value }))}
+            />
+            <FormTextField
+              form={form}
+              name="height"
+              label={`Outline height (${unit})`}
+              slotProps={{ htmlInput: { inputMode: 'decimal' } }}
             />
           </Stack>
           <Typography variant="body2" color="text.secondary">
             x and y run from the outline’s lower-left corner: x to the right, y upwards.
           </Typography>
-          <Tabs
-            value={draft.entry}
-            onChange={(_, v: PatternEntry) => set((d) => ({ ...d, entry: v }))}
-            aria-label="How the holes are entered"
-            variant="scrollable"
-            allowScrollButtonsMobile
-          >
-            {(Object.keys(ENTRY_LABELS) as PatternEntry[]).map((k) => (
-              <Tab key={k} value={k} label={ENTRY_LABELS[k]} />
-            ))}
-          </Tabs>
-          <EntryFields draft={draft} set={set} />
-          <TextField
-            label="Notes"
-            multiline
-            minRows={1}
-            value={draft.notes}
-            onChange={(e) => set((d) => ({ ...d, notes: e.target.value }))}
+          <Controller
+            name="entry"
+            control={form.control}
+            render={({ field }) => (
+              <Tabs
+                value={field.value}
+                onChange={(_, v: PatternEntry) => field.onChange(v)}
+                aria-label="How the holes are entered"
+                variant="scrollable"
+                allowScrollButtonsMobile
+              >
+                {(Object.keys(ENTRY_LABELS) as PatternEntry[]).map((k) => (
+                  <Tab key={k} value={k} label={ENTRY_LABELS[k]} />
+                ))}
+              </Tabs>
+            )}
           />
+          <EntryFields form={form} />
+          <FormTextField form={form} name="notes" label="Notes" multiline minRows={1} />
           <Box sx={{ border: 1, borderColor: 'divider', borderRadius: 1, p: 1 }}>
             <Typography variant="subtitle2" component="h3" sx={{ mb: 1 }}>
               Preview {preview.data ? `· ${preview.data.holes.length} holes` : ''}{' '}
@@ -132,7 +145,7 @@ export function PatternDialog({ title, initial, saving, error, onSave, onClose }
                 widthMm={preview.data.widthMm}
                 heightMm={preview.data.heightMm}
                 holes={preview.data.holes}
-                reference={draft.reference}
+                reference={reference}
                 label="Preview of the pattern"
                 maxHeight={260}
               />
@@ -149,7 +162,7 @@ export function PatternDialog({ title, initial, saving, error, onSave, onClose }
       </DialogContent>
       <DialogActions>
         <Button onClick={onClose}>Cancel</Button>
-        <Button variant="contained" disabled={!input || saving} onClick={() => input && onSave(input)}>
+        <Button variant="contained" disabled={!input || saving} onClick={save}>
           {saving ? 'Saving…' : 'Save pattern'}
         </Button>
       </DialogActions>
