@@ -51,12 +51,13 @@ export function SetPasswordForm({ token, onDone }: { token: string; onDone: (ema
             {set.error.message}
           </Alert>
         )}
-        {/* A field left empty is not flagged: its problem shows once something is typed in it. */}
+        {/* A field left empty is not flagged: its problem shows once something is typed in it. The error
+            is read first on every render, so that the field hears of one found while it was still empty. */}
         <Controller
           name="password"
           control={form.control}
           rules={{ deps: ['repeat'] }}
-          render={({ field, fieldState }) => (
+          render={({ field, fieldState: { error } }) => (
             <TextField
               label="New password"
               type="password"
@@ -67,7 +68,7 @@ export function SetPasswordForm({ token, onDone }: { token: string; onDone: (ema
               onBlur={field.onBlur}
               inputRef={field.ref}
               helperText={`At least ${MIN} characters`}
-              error={field.value.length > 0 && !!fieldState.error}
+              error={!!error && field.value.length > 0}
               required
               fullWidth
               autoFocus
@@ -77,8 +78,8 @@ export function SetPasswordForm({ token, onDone }: { token: string; onDone: (ema
         <Controller
           name="repeat"
           control={form.control}
-          render={({ field, fieldState }) => {
-            const mismatch = field.value.length > 0 && fieldState.error;
+          render={({ field, fieldState: { error } }) => {
+            const mismatch = error && field.value.length > 0 ? error : undefined;
             return (
               <TextField
                 label="Repeat the password"
