@@ -62,7 +62,9 @@ test.describe('sign-in and the app frame', () => {
     const email = `new.${stamp}@example.com`;
     // A name of its own, so a second run on the same database finds this member and no other.
     const name = `Nell Carver ${stamp % 100000}`;
+    // The button waits for both a name and an address.
     await page.getByLabel('Name').fill(name);
+    await expect(page.getByRole('dialog').getByRole('button', { name: 'Add member' })).toBeDisabled();
     await page.getByLabel('E-mail').fill(email);
     await page.getByRole('dialog').getByRole('button', { name: 'Add member' }).click();
     await expect(page.getByRole('dialog')).toContainText(`We have e-mailed ${email}`);
@@ -82,9 +84,34 @@ test.describe('sign-in and the app frame', () => {
     const link = await linkMailedTo(email);
     const other = await browser.newPage();
     await other.goto(link);
-    await other.getByLabel('New password').fill('nell chooses this one');
-    await other.getByLabel('Repeat the password').fill('nell chooses this one');
-    await expect(other.getByRole('button', { name: 'Set password and sign in' })).toBeEnabled();
+    const resets: string[] = [];
+    other.on('request', (r) => {
+      if (r.method() === 'POST' && new URL(r.url()).pathname === '/api/auth/password-reset') resets.push(r.url());
+    });
+    const password = other.getByLabel('New password');
+    const repeat = other.getByLabel('Repeat the password');
+    const setIt = other.getByRole('button', { name: 'Set password and sign in' });
+    // Too short: flagged as it is typed, the hint saying why; the repeat is not flagged while empty.
+    await password.fill('too short');
+    await expect(password).toHaveAttribute('aria-invalid', 'true');
+    await expect(password).toHaveAccessibleDescription('At least 12 characters');
+    await expect(repeat).toHaveAccessibleDescription('');
+    await expect(setIt).toBeDisabled();
+    await password.fill('nell chooses this one');
+    await expect(password).toHaveAttribute('aria-invalid', 'false');
+    await repeat.fill('nell chooses this');
+    await expect(repeat).toHaveAccessibleDescription('The two entries differ');
+    await expect(setIt).toBeDisabled();
+    await repeat.press('Enter');
+    await repeat.fill('nell chooses this one');
+    await expect(repeat).toHaveAccessibleDescription('');
+    // A change of the password checks the repeat again.
+    await password.fill('nell chooses this one!');
+    await expect(repeat).toHaveAccessibleDescription('The two entries differ');
+    await password.fill('nell chooses this one');
+    await expect(repeat).toHaveAccessibleDescription('');
+    expect(resets).toEqual([]);
+    await expect(setIt).toBeEnabled();
     await snap(other, 'set-password');
     await other.getByRole('button', { name: 'Set password and sign in' }).click();
     // Signed in straight away, on the machines list; the admin now sees her as active.
@@ -114,7 +141,24 @@ test.describe('sign-in and the app frame', () => {
     await page.goto('/sign-in');
     await page.getByLabel('E-mail').fill(email);
     await page.getByRole('link', { name: 'Forgot your password?' }).click();
+    // The page loads on demand: until its heading shows, the sign-in form's own E-mail field is still there.
+    await expect(page.getByRole('heading', { name: 'Forgot your password?' })).toBeVisible();
     await expect(page.getByLabel('E-mail')).toHaveValue(email);
+    const asked: string[] = [];
+    page.on('request', (r) => {
+      if (r.method() === 'POST' && new URL(r.url()).pathname === '/api/auth/password-reset/request')
+        asked.push(r.url());
+    });
+    // Not an address: refused under the field once it is left, and nothing is sent.
+    await page.getByLabel('E-mail').fill(email.replace('@', ' at '));
+    await expect(page.getByLabel('E-mail')).toHaveAccessibleDescription('');
+    await page.getByRole('button', { name: 'Send me a link' }).click();
+    await expect(page.getByLabel('E-mail')).toHaveAccessibleDescription(
+      'Enter an e-mail address, such as name@example.com',
+    );
+    expect(asked).toEqual([]);
+    await page.getByLabel('E-mail').fill(email);
+    await expect(page.getByLabel('E-mail')).toHaveAccessibleDescription('');
     await page.getByRole('button', { name: 'Send me a link' }).click();
     await expect(page.getByRole('status')).toContainText('If an active account uses this address');
     await snap(page, 'forgot-password-sent');

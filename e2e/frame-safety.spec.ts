@@ -263,6 +263,9 @@ test.describe('frame and safety walk', () => {
     await openTab(page, 'Big plasma table', 'Safety walk');
     const total = Number((await page.getByTestId('walk-counts').textContent())!.match(/of (\d+) answered/)![1]);
     await page.getByRole('button', { name: 'Add a workshop item' }).click();
+    // Fewer than five characters: the button waits.
+    await page.getByRole('dialog').getByLabel('What is checked').fill('Dry ');
+    await expect(page.getByRole('dialog').getByRole('button', { name: 'Add item' })).toBeDisabled();
     await page.getByRole('dialog').getByLabel('What is checked').fill('The spare torch consumables are stored dry');
     await page.getByRole('dialog').getByRole('button', { name: 'Add item' }).click();
     const item = page.getByRole('group', { name: 'The spare torch consumables are stored dry' });

@@ -123,6 +123,51 @@ test.describe('machines and rails', () => {
     await expect(page.getByText(/work area 2500 × 1500 mm · Router \(default\)/)).toBeVisible();
   });
 
+  test('a new machine is not sent until its name and work area are right, each problem shown under its field', async ({
+    page,
+  }) => {
+    await signInAs(page, DEMO.builder);
+    const sent: unknown[] = [];
+    page.on('request', (r) => {
+      if (r.method() === 'POST' && new URL(r.url()).pathname === '/api/machines') sent.push(r.postDataJSON());
+    });
+    await page.goto('/machines');
+    await page.getByRole('button', { name: 'New machine' }).click();
+    const dialog = page.getByRole('dialog', { name: 'New machine' });
+    const name = dialog.getByLabel('Name');
+    const x = dialog.getByLabel('Work area X');
+    const y = dialog.getByLabel('Work area Y');
+    const open = dialog.getByRole('button', { name: 'Open machine file' });
+    // Nothing is flagged before the first try.
+    await expect(x).toHaveAccessibleDescription('Width to cover');
+    await open.click();
+    await expect(name).toHaveAccessibleDescription('Give the machine a name');
+    await expect(x).toHaveAccessibleDescription('A number of mm');
+    await expect(y).toHaveAccessibleDescription('A number of mm');
+    // From then on every change is checked: half a millimetre is below the 1 mm floor.
+    await x.fill('0.5');
+    await expect(x).toHaveAccessibleDescription('Between 1 mm and 100 m');
+    // In inches, 0.5 in is 12.7 mm (1 in = 25.4 mm exactly) and passes; 5000 in (127 m) is beyond 100 m.
+    await dialog.getByLabel('Work area unit').click();
+    await page.getByRole('option', { name: 'in', exact: true }).click();
+    await expect(x).toHaveAccessibleDescription('Width to cover');
+    await y.fill('5000');
+    await expect(y).toHaveAccessibleDescription('Between 1 mm and 100 m');
+    await expect(name).toHaveAccessibleDescription('Give the machine a name');
+    await open.click();
+    await expect(dialog).toBeVisible();
+    expect(sent).toEqual([]);
+    const machine = `Checked table ${Date.now()}`;
+    await name.fill(machine);
+    await x.fill('120,5');
+    await y.fill('50');
+    await expect(y).toHaveAccessibleDescription('Length to cover');
+    await open.click();
+    await expect(page.getByRole('heading', { name: machine, level: 1 })).toBeVisible();
+    // A decimal comma reads as a point, as in the entry grids.
+    expect(sent).toEqual([expect.objectContaining({ name: machine, lengthUnit: 'in', workArea: { x: 120.5, y: 50 } })]);
+  });
+
   test('the demo router is within target on every rail and pair; the plasma table is not', async ({ page }) => {
     await signInAs(page, DEMO.viewer);
     const machines = await (await page.request.get('/api/machines')).json();

@@ -19,6 +19,9 @@ test.describe('target sets', () => {
       await dialog.getByLabel('Name').fill('plasma table (default)');
       await expect(dialog).toContainText('Another target set has this name');
       await expect(dialog.getByRole('button', { name: 'Make target set' })).toBeDisabled();
+      await dialog.getByLabel('Name').fill('  ');
+      await expect(dialog.getByLabel('Name')).toHaveAccessibleDescription('A name is needed');
+      await expect(dialog.getByRole('button', { name: 'Make target set' })).toBeDisabled();
       const name = `Router tight ${size} ${Date.now()}`;
       await dialog.getByLabel('Name').fill(name);
       await snap(page, `target-set-new-${size}`);
@@ -32,7 +35,20 @@ test.describe('target sets', () => {
       // Renamed through its edit dialog.
       await page.getByRole('button', { name: `Edit ${name}` }).click();
       const edit = page.getByRole('dialog');
+      // Each field's problem shows under it as it is typed, and nothing can be saved meanwhile.
+      const save = edit.getByRole('button', { name: 'Save targets' });
+      const interval = edit.getByLabel('Re-check interval: value');
+      const before = await interval.inputValue();
+      await interval.fill('-1');
+      await expect(interval).toHaveAccessibleDescription('A number of 0 or more');
+      await edit.getByLabel('Name').fill('');
+      await expect(edit.getByLabel('Name')).toHaveAccessibleDescription('A name is needed');
+      await expect(save).toBeDisabled();
+      await interval.fill(before);
+      await expect(interval).toHaveAccessibleDescription('');
+      await expect(save).toBeDisabled();
       await edit.getByLabel('Name').fill(`${name} (renamed)`);
+      await expect(edit.getByLabel('Name')).toHaveAccessibleDescription('');
       await edit.getByRole('button', { name: 'Save targets' }).click();
       await expect(page.getByRole('heading', { name: `${name} (renamed)` })).toBeVisible();
       expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(viewport.width);

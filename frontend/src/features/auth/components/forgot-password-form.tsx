@@ -1,8 +1,16 @@
-import { useState, type FormEvent } from 'react';
-import { Alert, Box, Button, Stack, TextField, Typography } from '@mui/material';
+import { Alert, Box, Button, Stack, Typography } from '@mui/material';
+import { useForm } from 'react-hook-form';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { z } from 'zod';
+import { FormTextField } from '../../../components/form/form-text-field';
 import { useRequestPasswordLink } from '../api/password-link';
 
 const looksLikeEmail = (v: string) => /^[^\s@]+@[^\s@]+\.[^\s@]+$/.test(v);
+
+const forgotPasswordSchema = z.object({
+  email: z.string().refine((v) => looksLikeEmail(v.trim()), 'Enter an e-mail address, such as name@example.com'),
+});
+type ForgotPasswordValues = z.input<typeof forgotPasswordSchema>;
 
 /** Asks for a link to choose a new password; the answer never says whether the address has an account. */
 export function ForgotPasswordForm({
@@ -12,15 +20,14 @@ export function ForgotPasswordForm({
   initialEmail: string;
   signInLink: React.ReactNode;
 }) {
-  const [email, setEmail] = useState(initialEmail);
-  const [touched, setTouched] = useState(false);
+  // The address is checked once the field is left (or the form sent), then on every change.
+  const form = useForm<ForgotPasswordValues>({
+    mode: 'onTouched',
+    defaultValues: { email: initialEmail },
+    resolver: zodResolver(forgotPasswordSchema),
+  });
   const request = useRequestPasswordLink();
-  const bad = !looksLikeEmail(email.trim());
-  const submit = (e: FormEvent) => {
-    e.preventDefault();
-    setTouched(true);
-    if (!bad) request.mutate({ email: email.trim() });
-  };
+  const submit = form.handleSubmit(({ email }) => request.mutate({ email: email.trim() }));
   if (request.isSuccess) {
     return (
       <Stack spacing={2}>
@@ -52,15 +59,13 @@ export function ForgotPasswordForm({
             {request.error.message}
           </Alert>
         )}
-        <TextField
+        <FormTextField
+          form={form}
+          name="email"
           label="E-mail"
           type="email"
           autoComplete="username"
-          value={email}
-          onChange={(e) => setEmail(e.target.value)}
-          onBlur={() => setTouched(true)}
-          error={touched && bad}
-          helperText={touched && bad ? 'Enter an e-mail address, such as name@example.com' : ' '}
+          helperText=" "
           required
           fullWidth
           autoFocus

@@ -1,19 +1,11 @@
-import { useState } from 'react';
 import { Alert, Button, Dialog, DialogActions, DialogContent, DialogTitle } from '@mui/material';
+import { useForm } from 'react-hook-form';
+import { zodResolver } from '@hookform/resolvers/zod';
 import { useUpdateMachine } from '../api/update-machine';
 import { useTargetSetChoices } from '../api/get-target-set-choices';
 import type { Machine } from '../types';
-import { MachineFormFields, machineFormErrors, toMachineInput, type MachineFormValues } from './machine-form-fields';
-
-const fromMachine = (m: Machine): MachineFormValues => ({
-  name: m.name,
-  kind: m.kind,
-  lengthUnit: m.lengthUnit,
-  x: String(m.workAreaInLengthUnit.x),
-  y: String(m.workAreaInLengthUnit.y),
-  notes: m.notes,
-  targetSetId: m.targetSet.id,
-});
+import { MachineFormFields } from './machine-form-fields';
+import { machineFormOf, machineFormSchema, toMachineInput, type MachineFormValues } from './machine-form-schema';
 
 export function EditMachineDialog({
   machine,
@@ -24,21 +16,21 @@ export function EditMachineDialog({
   open: boolean;
   onClose: () => void;
 }) {
-  const [values, setValues] = useState(() => fromMachine(machine));
-  const [tried, setTried] = useState(false);
+  const form = useForm<MachineFormValues>({
+    defaultValues: machineFormOf(machine),
+    resolver: zodResolver(machineFormSchema),
+  });
   const update = useUpdateMachine(machine.id);
   const sets = useTargetSetChoices();
 
   const close = () => {
     update.reset();
-    setTried(false);
+    // What was typed stays until the dialog opens again (then it starts from the machine as saved);
+    // only the messages of the last try go at once.
+    form.reset(undefined, { keepValues: true });
     onClose();
   };
-  const submit = () => {
-    setTried(true);
-    if (Object.keys(machineFormErrors(values)).length) return;
-    update.mutate(toMachineInput(values), { onSuccess: close });
-  };
+  const submit = form.handleSubmit((values) => update.mutate(toMachineInput(values), { onSuccess: close }));
 
   return (
     // A stray click beside the form (or one that lands as a menu closes) must not throw away what was typed: Cancel or Escape closes it.
@@ -47,7 +39,7 @@ export function EditMachineDialog({
       onClose={(_e, reason) => reason !== 'backdropClick' && close()}
       fullWidth
       maxWidth="sm"
-      slotProps={{ transition: { onEnter: () => setValues(fromMachine(machine)) } }}
+      slotProps={{ transition: { onEnter: () => form.reset(machineFormOf(machine)) } }}
     >
       <DialogTitle>Edit specification</DialogTitle>
       <DialogContent>
@@ -56,11 +48,11 @@ export function EditMachineDialog({
             {update.error.message}
           </Alert>
         )}
-        <MachineFormFields values={values} onChange={setValues} targetSets={sets.data ?? []} showErrors={tried} />
+        <MachineFormFields form={form} targetSets={sets.data ?? []} />
       </DialogContent>
       <DialogActions>
         <Button onClick={close}>Cancel</Button>
-        <Button variant="contained" onClick={submit} disabled={update.isPending}>
+        <Button variant="contained" onClick={submit} disabled={update.isPending || form.formState.isSubmitting}>
           Save specification
         </Button>
       </DialogActions>

@@ -1,35 +1,36 @@
-import { useState } from 'react';
 import { useNavigate } from 'react-router-dom';
 import { Alert, Button, Dialog, DialogActions, DialogContent, DialogTitle } from '@mui/material';
+import { useForm } from 'react-hook-form';
+import { zodResolver } from '@hookform/resolvers/zod';
 import { paths } from '../../../config/paths';
 import { useCreateMachine } from '../api/create-machine';
 import { useTargetSetChoices } from '../api/get-target-set-choices';
-import { emptyMachineForm, MachineFormFields, machineFormErrors, toMachineInput } from './machine-form-fields';
+import { MachineFormFields } from './machine-form-fields';
+import { emptyMachineForm, machineFormSchema, toMachineInput, type MachineFormValues } from './machine-form-schema';
 
 /** Opens a new machine file and goes to it. */
 export function NewMachineDialog({ open, onClose }: { open: boolean; onClose: () => void }) {
-  const [values, setValues] = useState(emptyMachineForm);
-  const [tried, setTried] = useState(false);
+  const form = useForm<MachineFormValues>({
+    defaultValues: emptyMachineForm,
+    resolver: zodResolver(machineFormSchema),
+  });
   const create = useCreateMachine();
   const sets = useTargetSetChoices();
   const navigate = useNavigate();
 
   const close = () => {
-    setValues(emptyMachineForm);
-    setTried(false);
+    form.reset(emptyMachineForm);
     create.reset();
     onClose();
   };
-  const submit = () => {
-    setTried(true);
-    if (Object.keys(machineFormErrors(values)).length) return;
+  const submit = form.handleSubmit((values) =>
     create.mutate(toMachineInput(values), {
       onSuccess: (m) => {
         close();
         navigate(paths.machine(m.id));
       },
-    });
-  };
+    }),
+  );
 
   return (
     <Dialog open={open} onClose={close} fullWidth maxWidth="sm">
@@ -40,17 +41,11 @@ export function NewMachineDialog({ open, onClose }: { open: boolean; onClose: ()
             {create.error.message}
           </Alert>
         )}
-        <MachineFormFields
-          values={values}
-          onChange={setValues}
-          targetSets={sets.data ?? []}
-          showErrors={tried}
-          autoFocus
-        />
+        <MachineFormFields form={form} targetSets={sets.data ?? []} autoFocus />
       </DialogContent>
       <DialogActions>
         <Button onClick={close}>Cancel</Button>
-        <Button variant="contained" onClick={submit} disabled={create.isPending}>
+        <Button variant="contained" onClick={submit} disabled={create.isPending || form.formState.isSubmitting}>
           Open machine file
         </Button>
       </DialogActions>

@@ -1,4 +1,3 @@
-import { useState } from 'react';
 import {
   Alert,
   Button,
@@ -10,6 +9,10 @@ import {
   Stack,
   TextField,
 } from '@mui/material';
+import { Controller, useForm, useWatch } from 'react-hook-form';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { z } from 'zod';
+import { FormTextField } from '../../../components/form/form-text-field';
 import { useAddSafetyItem } from '../api/add-safety-item';
 import type { SafetySection } from '../types';
 
@@ -20,38 +23,59 @@ const SECTIONS: [SafetySection, string][] = [
   ['people', 'People'],
 ];
 
+/** The item as typed; the button waits for five characters of it, so the form has no message of its own. */
+const safetyItemSchema = z.object({
+  section: z.enum(SECTIONS.map(([id]) => id)),
+  text: z.string(),
+});
+type SafetyItemValues = z.input<typeof safetyItemSchema>;
+
 /** Owners and admins add the workshop's own items; every machine's walk asks them. */
 export function AddSafetyItemDialog({ open, onClose }: { open: boolean; onClose: () => void }) {
-  const [section, setSection] = useState<SafetySection>('cutting');
-  const [text, setText] = useState('');
+  const form = useForm<SafetyItemValues>({
+    defaultValues: { section: 'cutting', text: '' },
+    resolver: zodResolver(safetyItemSchema),
+  });
+  // The button waits for five characters (useWatch rather than watch: the compiler can keep it).
+  const typed = useWatch({ control: form.control, name: 'text' });
   const add = useAddSafetyItem();
   const close = () => {
     add.reset();
-    setText('');
+    // The section chosen stays for the next item; the text goes.
+    form.reset({ section: form.getValues('section'), text: '' });
     onClose();
   };
+  const submit = form.handleSubmit(({ section, text }) =>
+    add.mutate({ section, text: text.trim() }, { onSuccess: close }),
+  );
   return (
     <Dialog open={open} onClose={close} fullWidth maxWidth="sm">
       <DialogTitle>Add a workshop item</DialogTitle>
       <DialogContent>
         <Stack spacing={2} sx={{ pt: 1 }}>
           {add.error && <Alert severity="error">{(add.error as Error).message}</Alert>}
-          <TextField
-            select
-            label="Section"
-            value={section}
-            onChange={(e) => setSection(e.target.value as SafetySection)}
-          >
-            {SECTIONS.map(([id, label]) => (
-              <MenuItem key={id} value={id}>
-                {label}
-              </MenuItem>
-            ))}
-          </TextField>
-          <TextField
+          <Controller
+            name="section"
+            control={form.control}
+            render={({ field }) => (
+              <TextField
+                select
+                label="Section"
+                value={field.value}
+                onChange={(e) => field.onChange(e.target.value as SafetySection)}
+              >
+                {SECTIONS.map(([id, label]) => (
+                  <MenuItem key={id} value={id}>
+                    {label}
+                  </MenuItem>
+                ))}
+              </TextField>
+            )}
+          />
+          <FormTextField
+            form={form}
+            name="text"
             label="What is checked"
-            value={text}
-            onChange={(e) => setText(e.target.value)}
             multiline
             minRows={2}
             autoFocus
@@ -61,11 +85,7 @@ export function AddSafetyItemDialog({ open, onClose }: { open: boolean; onClose:
       </DialogContent>
       <DialogActions>
         <Button onClick={close}>Cancel</Button>
-        <Button
-          variant="contained"
-          disabled={text.trim().length < 5 || add.isPending}
-          onClick={() => add.mutate({ section, text: text.trim() }, { onSuccess: close })}
-        >
+        <Button variant="contained" disabled={typed.trim().length < 5 || add.isPending} onClick={submit}>
           Add item
         </Button>
       </DialogActions>

@@ -1,4 +1,4 @@
-import { useState } from 'react';
+import { useEffect } from 'react';
 import {
   Alert,
   Button,
@@ -11,6 +11,11 @@ import {
   TextField,
   Typography,
 } from '@mui/material';
+import { Controller, useForm } from 'react-hook-form';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { z } from 'zod';
+import { FormTextField } from '../../../components/form/form-text-field';
+import { typedNumber } from '../../../lib/form-number';
 import { TargetSetUsers } from './target-set-users';
 import { useUpdateTargetSet } from '../api/update-target-set';
 import {
@@ -23,7 +28,23 @@ import {
   type TargetUnit,
 } from '../types';
 
-type Draft = Record<string, { value: string; unit: TargetUnit; source: string; reference?: StraightnessReference }>;
+const REFERENCES = Object.keys(REFERENCE_WORDS) as StraightnessReference[];
+
+/** The set as typed: a name, and for every target its value (as typed), unit, source and reference. */
+const targetSetFormSchema = z.object({
+  name: z.string().refine((s) => s.trim() !== '', 'A name is needed'),
+  targets: z.record(
+    z.string(),
+    z.object({
+      value: z.string().refine((s) => typedNumber(s) >= 0, 'A number of 0 or more'),
+      unit: z.enum(Object.keys(UNIT_WORDS) as TargetUnit[]),
+      source: z.string(),
+      reference: z.enum(REFERENCES).optional(),
+    }),
+  ),
+});
+type TargetSetFormValues = z.input<typeof targetSetFormSchema>;
+type Draft = TargetSetFormValues['targets'];
 
 const draftOf = (set: TargetSet): Draft =>
   Object.fromEntries(
@@ -40,28 +61,33 @@ const draftOf = (set: TargetSet): Draft =>
 
 /** Owners and admins change tolerances; each keeps its unit and a note of where it came from. */
 export function EditTargetSetDialog({ set, onClose }: { set: TargetSet; onClose: () => void }) {
-  const [name, setName] = useState(set.name);
-  const [draft, setDraft] = useState<Draft>(() => draftOf(set));
+  const draft = draftOf(set);
+  // Checked as it is typed, and from the start, with the button held until every field is right.
+  const form = useForm<TargetSetFormValues>({
+    mode: 'onChange',
+    defaultValues: { name: set.name, targets: draft },
+    resolver: zodResolver(targetSetFormSchema),
+  });
+  useEffect(() => {
+    void form.trigger();
+  }, [form]);
   const update = useUpdateTargetSet(set.id);
-  const bad = Object.entries(draft)
-    .filter(([, d]) => d.value.trim() === '' || !Number.isFinite(Number(d.value)) || Number(d.value) < 0)
-    .map(([k]) => k);
+  const bad = Object.keys(form.formState.errors).length > 0;
 
-  const save = () => {
-    if (bad.length || !name.trim()) return;
+  const save = form.handleSubmit((values) => {
     const targets = Object.fromEntries(
-      Object.entries(draft).map(([k, d]) => [
+      Object.entries(values.targets).map(([k, d]) => [
         k,
         {
-          value: Number(d.value),
+          value: typedNumber(d.value),
           unit: d.unit,
           ...(d.source.trim() ? { source: d.source.trim() } : {}),
           ...(d.reference ? { reference: d.reference } : {}),
         },
       ]),
     );
-    update.mutate({ name: name.trim(), targets }, { onSuccess: onClose });
-  };
+    update.mutate({ name: values.name.trim(), targets }, { onSuccess: onClose });
+  });
 
   return (
     <Dialog open onClose={onClose} fullWidth maxWidth="md">
@@ -70,64 +96,61 @@ export function EditTargetSetDialog({ set, onClose }: { set: TargetSet; onClose:
         <Stack spacing={2} sx={{ pt: 1 }}>
           {update.error && <Alert severity="error">{update.error.message}</Alert>}
           <TargetSetUsers set={set} />
-          <TextField
-            label="Name"
-            value={name}
-            onChange={(e) => setName(e.target.value)}
-            error={!name.trim()}
-            helperText={!name.trim() ? 'A name is needed' : undefined}
-          />
+          <FormTextField form={form} name="name" label="Name" />
           {Object.entries(draft).map(([key, d]) => {
             const t = set.targets[key as TargetKey];
-            const wrong = bad.includes(key);
-            const patch = (p: Partial<Draft[string]>) => setDraft({ ...draft, [key]: { ...d, ...p } });
             return (
               <Stack key={key} spacing={1} sx={{ pb: 1.5, borderBottom: 1, borderColor: 'divider' }}>
                 <Typography sx={{ fontWeight: 500 }}>{t.label}</Typography>
                 <Stack direction={{ xs: 'column', sm: 'row' }} spacing={1.5}>
-                  <TextField
+                  <FormTextField
+                    form={form}
+                    name={`targets.${key}.value`}
                     label={`${t.label}: value`}
-                    value={d.value}
-                    onChange={(e) => patch({ value: e.target.value })}
-                    error={wrong}
-                    helperText={wrong ? 'A number of 0 or more' : undefined}
                     sx={{ width: { sm: 160 } }}
                     slotProps={{ htmlInput: { inputMode: 'decimal' } }}
                   />
-                  <TextField
-                    select
-                    label="Unit"
-                    value={d.unit}
-                    onChange={(e) => patch({ unit: e.target.value as TargetUnit })}
-                    sx={{ width: { sm: d.unit === 'um/mm' ? 260 : 110 } }}
-                  >
-                    {unitChoices(t.unit).map((u) => (
-                      <MenuItem key={u} value={u}>
-                        {UNIT_WORDS[u]}
-                      </MenuItem>
-                    ))}
-                  </TextField>
-                  {d.reference && (
-                    <TextField
-                      select
-                      label="Judged on"
-                      value={d.reference}
-                      onChange={(e) => patch({ reference: e.target.value as StraightnessReference })}
-                      sx={{ minWidth: { sm: 200 } }}
-                    >
-                      {(['minimum-zone', 'least-squares'] as const).map((r) => (
-                        <MenuItem key={r} value={r}>
-                          {REFERENCE_WORDS[r]}
-                        </MenuItem>
-                      ))}
-                    </TextField>
-                  )}
-                  <TextField
-                    label="Where it comes from"
-                    value={d.source}
-                    onChange={(e) => patch({ source: e.target.value })}
-                    fullWidth
+                  <Controller
+                    name={`targets.${key}.unit`}
+                    control={form.control}
+                    render={({ field }) => (
+                      <TextField
+                        select
+                        label="Unit"
+                        value={field.value}
+                        onChange={(e) => field.onChange(e.target.value as TargetUnit)}
+                        sx={{ width: { sm: field.value === 'um/mm' ? 260 : 110 } }}
+                      >
+                        {unitChoices(t.unit).map((u) => (
+                          <MenuItem key={u} value={u}>
+                            {UNIT_WORDS[u]}
+                          </MenuItem>
+                        ))}
+                      </TextField>
+                    )}
                   />
+                  {d.reference && (
+                    <Controller
+                      name={`targets.${key}.reference`}
+                      control={form.control}
+                      render={({ field }) => (
+                        <TextField
+                          select
+                          label="Judged on"
+                          value={field.value}
+                          onChange={(e) => field.onChange(e.target.value as StraightnessReference)}
+                          sx={{ minWidth: { sm: 200 } }}
+                        >
+                          {REFERENCES.map((r) => (
+                            <MenuItem key={r} value={r}>
+                              {REFERENCE_WORDS[r]}
+                            </MenuItem>
+                          ))}
+                        </TextField>
+                      )}
+                    />
+                  )}
+                  <FormTextField form={form} name={`targets.${key}.source`} label="Where it comes from" fullWidth />
                 </Stack>
               </Stack>
             );
@@ -136,7 +159,7 @@ export function EditTargetSetDialog({ set, onClose }: { set: TargetSet; onClose:
       </DialogContent>
       <DialogActions>
         <Button onClick={onClose}>Cancel</Button>
-        <Button variant="contained" onClick={save} disabled={update.isPending || bad.length > 0 || !name.trim()}>
+        <Button variant="contained" onClick={save} disabled={update.isPending || bad}>
           Save targets
         </Button>
       </DialogActions>
