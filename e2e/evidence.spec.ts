@@ -158,6 +158,10 @@ test.describe('evidence: photos and files', () => {
     const machineId = await newMachine(page.request, `Drop table ${Date.now()}`);
     await openEvidence(page, machineId);
     await expect(page.getByText('No evidence yet')).toBeVisible();
+    // A caption longer than the server takes is cut at 500 characters as it is typed, and goes with the drop.
+    const caption = `Dropped at the Y2 end ${'·'.repeat(510)}`.slice(0, 500);
+    await page.getByLabel('Caption (optional)').fill(`${caption}, and more`);
+    await expect(page.getByLabel('Caption (optional)')).toHaveValue(caption);
     const jpeg = (await railPhoto()).toString('base64');
     const data = await page.evaluateHandle((b64) => {
       const bytes = Uint8Array.from(atob(b64), (c) => c.charCodeAt(0));
@@ -170,6 +174,8 @@ test.describe('evidence: photos and files', () => {
       .dispatchEvent('drop', { dataTransfer: data });
     await expect(page.getByRole('list', { name: 'Uploads' }).getByText('dropped.jpg')).toBeVisible();
     await expect(page.getByRole('button', { name: 'View dropped.jpg full size' })).toBeVisible();
+    const listed = await (await page.request.get(`/api/evidence?subjectType=machine&subjectId=${machineId}`)).json();
+    expect(listed.map((e: { caption: string | null }) => e.caption)).toEqual([caption]);
   });
 
   test('at tablet size: the gallery, the full-size view, and delete for what you attached', async ({ page }) => {

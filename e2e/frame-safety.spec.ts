@@ -129,6 +129,26 @@ test.describe('frame and safety walk', () => {
     await expect(page.getByRole('group', { name: /licensed electrician/ }).getByLabel('Note')).toHaveValue(
       'Inspected by the site electrician, certificate in the office',
     );
+    // Leaving a note unchanged sends nothing; leaving it changed saves it with the answer already given.
+    const sent: { answer: string; note?: string }[] = [];
+    page.on('request', (r) => {
+      if (r.method() === 'PUT' && r.url().includes('/safety-walk/items/')) sent.push(r.postDataJSON());
+    });
+    const note = page.getByRole('group', { name: /licensed electrician/ }).getByLabel('Note');
+    await note.click();
+    await note.press('Tab');
+    await note.fill('  Inspected by the site electrician, certificate on the wall  ');
+    const saved = page.waitForResponse(
+      (r) => r.request().method() === 'PUT' && r.url().includes('/safety-walk/items/'),
+    );
+    await note.press('Tab');
+    expect((await saved).ok()).toBe(true);
+    expect(sent).toEqual([{ answer: 'yes', note: 'Inspected by the site electrician, certificate on the wall' }]);
+    await expect(note).toHaveValue('Inspected by the site electrician, certificate on the wall');
+    await page.reload();
+    await expect(page.getByRole('group', { name: /licensed electrician/ }).getByLabel('Note')).toHaveValue(
+      'Inspected by the site electrician, certificate on the wall',
+    );
     await snap(page, 'safety-walk-desktop');
   });
 

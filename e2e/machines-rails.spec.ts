@@ -72,13 +72,20 @@ test.describe('machines and rails', () => {
     await newMachineWithRail(page, `CSV table ${Date.now()}`);
     await page.getByRole('button', { name: 'Import CSV' }).click();
     const dialog = page.getByRole('dialog', { name: 'Import readings from CSV' });
+    const importButton = dialog.getByRole('button', { name: /^Import \d+ station/ });
+    // Two good lines are not a sweep: said before any import is tried, and the import stays refused.
+    await dialog.getByLabel('Paste readings').fill('position_mm,reading\n0,0\n150,0.5\n');
+    await expect(dialog.getByRole('alert').filter({ hasText: 'A sweep needs at least three stations.' })).toBeVisible();
+    await expect(importButton).toHaveText('Import 2 stations');
+    await expect(importButton).toBeDisabled();
     await dialog.getByLabel('Paste readings').fill('position_mm,reading\n0,0\n150,0.5\n300,abc\n450,1\n450,0.5\n600\n');
     const preview = dialog.getByRole('table', { name: 'Import preview' });
     await expect(preview.getByText('Reading "abc" is not a number')).toBeVisible();
     await expect(preview.getByText('Position 450 mm repeats line 5')).toBeVisible();
     await expect(preview.getByText('Missing reading')).toBeVisible();
     await expect(dialog.getByText('3 rows must be fixed in the text or dropped before the import.')).toBeVisible();
-    const importButton = dialog.getByRole('button', { name: /^Import \d+ station/ });
+    // With bad rows the stations-count warning gives way to the rows to fix.
+    await expect(dialog.getByText('A sweep needs at least three stations.')).toHaveCount(0);
     await expect(importButton).toBeDisabled();
     await snap(page, 'rail-csv-refused-desktop');
     // Fix one in the text, drop the other two.

@@ -1,5 +1,8 @@
 import { useRef, useState, type DragEvent } from 'react';
 import { Box, Button, Paper, TextField, Typography } from '@mui/material';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { Controller, useForm } from 'react-hook-form';
+import { z } from 'zod';
 import CloudUploadOutlined from '@mui/icons-material/CloudUploadOutlined';
 import PhotoCameraOutlined from '@mui/icons-material/PhotoCameraOutlined';
 import { useEvidenceLimits } from '../api/get-evidence-limits';
@@ -8,18 +11,39 @@ import { ACCEPT_ATTRIBUTE, type EvidenceSubject } from '../types';
 import { formatBytes } from '../utils/format-bytes';
 import { UploadList } from './upload-list';
 
+const MAX_CAPTION = 500;
+
+/** The caption typed and the files just chosen, dropped or photographed; at least one file goes. */
+const evidenceUploadFormSchema = z.object({
+  caption: z.string().max(MAX_CAPTION),
+  files: z.array(z.instanceof(File)).min(1),
+});
+
+type EvidenceUploadFormValues = z.input<typeof evidenceUploadFormSchema>;
+
+const emptyEvidenceUploadForm: EvidenceUploadFormValues = { caption: '', files: [] };
+
 /** Drop zone, file picker and phone camera; each file is sent on its own with its own progress. */
 export function EvidenceUploader({ subject, what }: { subject: EvidenceSubject; what?: string }) {
   const limits = useEvidenceLimits();
   const queue = useUploadQueue(subject, limits.data);
-  const [caption, setCaption] = useState('');
+  const form = useForm<EvidenceUploadFormValues>({
+    defaultValues: emptyEvidenceUploadForm,
+    resolver: zodResolver(evidenceUploadFormSchema),
+  });
   const [over, setOver] = useState(false);
   const picker = useRef<HTMLInputElement>(null);
   const camera = useRef<HTMLInputElement>(null);
 
+  // The files are sent as soon as they are chosen; the caption stays for the next ones.
+  const send = form.handleSubmit(({ files, caption }) => {
+    queue.add(files, caption);
+    form.setValue('files', []);
+  });
   const take = (list: FileList | null) => {
-    const files = list ? Array.from(list) : [];
-    if (files.length) queue.add(files, caption);
+    // Copied now: the input is emptied right after, so the same file can be chosen again.
+    form.setValue('files', list ? Array.from(list) : []);
+    void send();
   };
   const onDrop = (e: DragEvent) => {
     e.preventDefault();
@@ -58,12 +82,22 @@ export function EvidenceUploader({ subject, what }: { subject: EvidenceSubject; 
             {max}. Several at once is fine.
           </Typography>
         </Box>
-        <TextField
-          label="Caption (optional)"
-          value={caption}
-          onChange={(e) => setCaption(e.target.value.slice(0, 500))}
-          helperText="Given to the files you add next"
-          sx={{ flex: '1 1 220px' }}
+        <Controller
+          name="caption"
+          control={form.control}
+          render={({ field }) => (
+            <TextField
+              label="Caption (optional)"
+              name={field.name}
+              value={field.value}
+              // Cut at the limit as typed or pasted rather than refused later: the caption is optional.
+              onChange={(e) => field.onChange(e.target.value.slice(0, MAX_CAPTION))}
+              onBlur={field.onBlur}
+              inputRef={field.ref}
+              helperText="Given to the files you add next"
+              sx={{ flex: '1 1 220px' }}
+            />
+          )}
         />
         <Box sx={{ display: 'flex', gap: 1, flexWrap: 'wrap' }}>
           <Button variant="contained" startIcon={<CloudUploadOutlined />} onClick={() => picker.current?.click()}>

@@ -14,14 +14,26 @@ import {
   TableContainer,
   TableHead,
   TableRow,
-  TextField,
   Tooltip,
   Typography,
 } from '@mui/material';
 import DeleteOutline from '@mui/icons-material/DeleteOutlined';
 import UploadFileOutlined from '@mui/icons-material/UploadFileOutlined';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useForm, useWatch } from 'react-hook-form';
+import { FormTextField } from '../../../components/form/form-text-field';
 import { UNIT_LABELS, type LengthUnit } from '../../../lib/units';
 import { parseSweepCsv } from '../utils/parse-sweep-csv';
+import {
+  badRowsMessage,
+  csvImportFormSchema,
+  emptyCsvImportForm,
+  goodRows,
+  MIN_IMPORTED_STATIONS,
+  TOO_FEW_STATIONS_MESSAGE,
+  toImportedStations,
+  type CsvImportFormValues,
+} from './csv-import-form-schema';
 
 const MAX_FILE_BYTES = 1_000_000;
 
@@ -40,11 +52,17 @@ export function CsvImportDialog({
   onClose: () => void;
   onImport: (stations: { position: number; reading: number }[]) => void;
 }) {
-  const [text, setText] = useState('');
+  const form = useForm<CsvImportFormValues>({
+    defaultValues: emptyCsvImportForm,
+    resolver: zodResolver(csvImportFormSchema),
+  });
   const [fileError, setFileError] = useState<string | null>(null);
+  // The preview and its problems follow the text as it is typed, before any import is tried.
+  const text = useWatch({ control: form.control, name: 'text' });
   const parsed = useMemo(() => parseSweepCsv(text), [text]);
   const bad = parsed.rows.filter((r) => r.problem);
-  const good = parsed.rows.filter((r) => !r.problem);
+  const good = goodRows(parsed.rows);
+  const setText = (next: string) => form.setValue('text', next);
 
   const dropLine = (line: number) =>
     setText(
@@ -72,11 +90,15 @@ export function CsvImportDialog({
     setText(await file.text());
   };
   const close = () => {
-    setText('');
+    form.reset(emptyCsvImportForm);
     setFileError(null);
     onClose();
   };
-  const tooFew = good.length < 3;
+  const submit = form.handleSubmit((values) => {
+    onImport(toImportedStations(values));
+    close();
+  });
+  const tooFew = good.length < MIN_IMPORTED_STATIONS;
 
   return (
     <Dialog open={open} onClose={close} fullWidth maxWidth="md">
@@ -88,10 +110,10 @@ export function CsvImportDialog({
             sweep). Commas, semicolons, tabs or spaces between them; a header line is skipped.
           </Typography>
           <Stack direction={{ xs: 'column', sm: 'row' }} spacing={1.5} sx={{ alignItems: { sm: 'flex-start' } }}>
-            <TextField
+            <FormTextField
+              form={form}
+              name="text"
               label="Paste readings"
-              value={text}
-              onChange={(e) => setText(e.target.value)}
               multiline
               minRows={6}
               maxRows={14}
@@ -165,24 +187,17 @@ export function CsvImportDialog({
                 </Button>
               }
             >
-              {bad.length} row{bad.length === 1 ? '' : 's'} must be fixed in the text or dropped before the import.
+              {badRowsMessage(bad.length)}
             </Alert>
           )}
           {!bad.length && parsed.rows.length > 0 && tooFew && (
-            <Alert severity="warning">A sweep needs at least three stations.</Alert>
+            <Alert severity="warning">{TOO_FEW_STATIONS_MESSAGE}</Alert>
           )}
         </Stack>
       </DialogContent>
       <DialogActions>
         <Button onClick={close}>Cancel</Button>
-        <Button
-          variant="contained"
-          disabled={bad.length > 0 || tooFew}
-          onClick={() => {
-            onImport(good.map((r) => ({ position: r.position!, reading: r.reading! })));
-            close();
-          }}
-        >
+        <Button variant="contained" disabled={bad.length > 0 || tooFew} onClick={submit}>
           Import {good.length} station{good.length === 1 ? '' : 's'}
         </Button>
       </DialogActions>

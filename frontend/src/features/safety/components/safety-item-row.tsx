@@ -1,10 +1,18 @@
-import { useState } from 'react';
+import { useMemo } from 'react';
 import { Box, Chip, TextField, ToggleButton, ToggleButtonGroup, Typography } from '@mui/material';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { Controller, useForm } from 'react-hook-form';
+import { z } from 'zod';
 import { palette } from '../../../theme/theme';
 import { ANSWER_LABELS, type SafetyAnswer, type WalkItem } from '../types';
 import { formatDateTime } from '../../../lib/format-time';
 
 const COLOURS: Record<SafetyAnswer, string> = { yes: palette.within, no: palette.outside, na: palette.notStarted };
+
+/** The note typed for one item; any text, trimmed by the walk when it is saved. */
+const safetyNoteFormSchema = z.object({ note: z.string() });
+
+type SafetyNoteFormValues = z.input<typeof safetyNoteFormSchema>;
 
 /** One item of the walk: its answer (yes / no / not applicable), a note, who answered and when. */
 export function SafetyItemRow({
@@ -20,13 +28,12 @@ export function SafetyItemRow({
 }) {
   const a = item.answer;
   const savedNote = a?.note ?? '';
-  const [note, setNote] = useState(savedNote);
-  // A newly saved note replaces what is typed; set while rendering, so no render shows the old one.
-  const [shownNote, setShownNote] = useState(savedNote);
-  if (savedNote !== shownNote) {
-    setShownNote(savedNote);
-    setNote(savedNote);
-  }
+  // A newly saved note replaces what is typed: the form follows `values` whenever the saved note changes.
+  const saved = useMemo<SafetyNoteFormValues>(() => ({ note: savedNote }), [savedNote]);
+  const form = useForm<SafetyNoteFormValues>({ values: saved, resolver: zodResolver(safetyNoteFormSchema) });
+  // An answer goes with the note as typed; leaving the note saves it with the answer already given, if it changed.
+  const answerWith = (answer: SafetyAnswer) => form.handleSubmit(({ note }) => onAnswer(answer, note))();
+  const saveNote = form.handleSubmit(({ note }) => a && note.trim() !== a.note && onAnswer(a.answer, note));
   const isNo = a?.answer === 'no';
 
   return (
@@ -66,7 +73,9 @@ export function SafetyItemRow({
           size="small"
           value={a?.answer ?? null}
           disabled={!canAnswer || busy}
-          onChange={(_, v: SafetyAnswer | null) => v && onAnswer(v, note)}
+          onChange={(_, v: SafetyAnswer | null) => {
+            if (v) void answerWith(v);
+          }}
           aria-label="Answer"
         >
           {(['yes', 'no', 'na'] as const).map((v) => (
@@ -92,15 +101,26 @@ export function SafetyItemRow({
         </Typography>
       )}
       {canAnswer && (
-        <TextField
-          label="Note"
-          value={note}
-          onChange={(e) => setNote(e.target.value)}
-          onBlur={() => a && note.trim() !== a.note && onAnswer(a.answer, note)}
-          disabled={!canAnswer || busy}
-          fullWidth
-          sx={{ mt: 1 }}
-          helperText={canAnswer && !a ? 'Saved with the answer' : undefined}
+        <Controller
+          name="note"
+          control={form.control}
+          render={({ field }) => (
+            <TextField
+              label="Note"
+              name={field.name}
+              value={field.value}
+              onChange={(e) => field.onChange(e.target.value)}
+              onBlur={() => {
+                field.onBlur();
+                void saveNote();
+              }}
+              inputRef={field.ref}
+              disabled={!canAnswer || busy}
+              fullWidth
+              sx={{ mt: 1 }}
+              helperText={canAnswer && !a ? 'Saved with the answer' : undefined}
+            />
+          )}
         />
       )}
     </Box>
