@@ -127,24 +127,10 @@ export function FinalSweepForm({ bd, holes, typicalBoltSize }: Props) {
             input: { endAdornment: <InputAdornment position="end">°C</InputAdornment> },
           }}
         />
-        <Controller
-          name="phase"
-          control={form.control}
-          render={({ field }) => (
-            <TextField
-              select
-              label="Phase"
-              name={field.name}
-              value={field.value}
-              onChange={(e) => field.onChange(e.target.value)}
-              onBlur={field.onBlur}
-              inputRef={field.ref}
-            >
-              <MenuItem value="as-left">As left (final)</MenuItem>
-              <MenuItem value="as-found">As found</MenuItem>
-            </TextField>
-          )}
-        />
+        <FormTextField form={form} name="phase" select label="Phase">
+          <MenuItem value="as-left">As left (final)</MenuItem>
+          <MenuItem value="as-found">As found</MenuItem>
+        </FormTextField>
         <FormTextField
           form={form}
           name="datum"
@@ -159,28 +145,14 @@ export function FinalSweepForm({ bd, holes, typicalBoltSize }: Props) {
           placeholder={me.data?.name}
           helperText={takenBy.trim() ? ' ' : 'You, when left empty'}
         />
-        <Controller
-          name="boltSize"
-          control={form.control}
-          render={({ field }) => (
-            <TextField
-              select
-              label="Bolt size"
-              name={field.name}
-              value={field.value}
-              onChange={(e) => field.onChange(e.target.value)}
-              onBlur={field.onBlur}
-              inputRef={field.ref}
-            >
-              <MenuItem value="">Not recorded</MenuItem>
-              {(torques.data?.bolts ?? []).map((b) => (
-                <MenuItem key={b.boltSize} value={b.boltSize}>
-                  {b.boltSize}
-                </MenuItem>
-              ))}
-            </TextField>
-          )}
-        />
+        <FormTextField form={form} name="boltSize" select label="Bolt size">
+          <MenuItem value="">Not recorded</MenuItem>
+          {(torques.data?.bolts ?? []).map((b) => (
+            <MenuItem key={b.boltSize} value={b.boltSize}>
+              {b.boltSize}
+            </MenuItem>
+          ))}
+        </FormTextField>
         <FormTextField
           form={form}
           name="torque"

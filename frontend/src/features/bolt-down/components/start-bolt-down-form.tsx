@@ -9,7 +9,6 @@ import {
   Radio,
   RadioGroup,
   Stack,
-  TextField,
   Typography,
 } from '@mui/material';
 import { Controller, useForm, useWatch } from 'react-hook-form';
@@ -114,28 +113,13 @@ export function StartBoltDownForm({ rail, onStarted }: Props) {
         />
       </FormControl>
       <Stack direction={{ xs: 'column', sm: 'row' }} spacing={2} sx={{ mb: 2 }}>
-        <Controller
-          name="readingUnit"
-          control={form.control}
-          render={({ field }) => (
-            <TextField
-              select
-              label="Dial reads in"
-              name={field.name}
-              value={field.value}
-              onChange={(e) => field.onChange(e.target.value as LengthUnit)}
-              onBlur={field.onBlur}
-              inputRef={field.ref}
-              sx={{ width: 180 }}
-            >
-              {(Object.keys(UNIT_LABELS) as LengthUnit[]).map((u) => (
-                <MenuItem key={u} value={u}>
-                  {UNIT_LABELS[u]}
-                </MenuItem>
-              ))}
-            </TextField>
-          )}
-        />
+        <FormTextField form={form} name="readingUnit" select label="Dial reads in" sx={{ width: 180 }}>
+          {(Object.keys(UNIT_LABELS) as LengthUnit[]).map((u) => (
+            <MenuItem key={u} value={u}>
+              {UNIT_LABELS[u]}
+            </MenuItem>
+          ))}
+        </FormTextField>
         <FormTextField
           form={form}
           name="band"

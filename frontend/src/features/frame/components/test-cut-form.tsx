@@ -1,4 +1,4 @@
-import { Alert, Box, Button, MenuItem, Stack, TextField, Typography } from '@mui/material';
+import { Alert, Box, Button, MenuItem, Stack, Typography } from '@mui/material';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { Controller, useForm, useWatch } from 'react-hook-form';
 import { UNIT_LABELS } from '../../../lib/units';
@@ -62,21 +62,10 @@ export function TestCutForm({
             control={form.control}
             render={({ field }) => <UnitFamilySelect family="length" value={field.value} onChange={field.onChange} />}
           />
-          <Controller
-            name="circleKind"
-            control={form.control}
-            render={({ field }) => (
-              <TextField
-                select
-                label="The circle is"
-                value={field.value}
-                onChange={(e) => field.onChange(e.target.value as 'hole' | 'disc')}
-              >
-                <MenuItem value="hole">a hole in the square</MenuItem>
-                <MenuItem value="disc">a disc cut on its own</MenuItem>
-              </TextField>
-            )}
-          />
+          <FormTextField form={form} name="circleKind" select label="The circle is">
+            <MenuItem value="hole">a hole in the square</MenuItem>
+            <MenuItem value="disc">a disc cut on its own</MenuItem>
+          </FormTextField>
         </Box>
         <Typography variant="h5" component="h4">
           As programmed

@@ -15,14 +15,13 @@ import {
   Stack,
   Tab,
   Tabs,
-  TextField,
   Typography,
 } from '@mui/material';
 import { FormTextField } from '../../../components/form/form-text-field';
 import { ApiError } from '../../../lib/api-client';
 import { useDebounced } from '../../../lib/use-debounced';
 import { usePatternPreview } from '../api/preview-hole-pattern';
-import { ENTRY_LABELS, REFERENCE_LABELS, type PatternEntry, type PatternInput, type PatternReference } from '../types';
+import { ENTRY_LABELS, REFERENCE_LABELS, type PatternEntry, type PatternInput } from '../types';
 import { emptyDraft, inputOf, type PatternDraft } from '../utils/pattern-draft';
 import { EntryFields } from './entry-fields';
 import { patternFormSchema } from './pattern-form-schema';
@@ -66,25 +65,13 @@ export function PatternDialog({ title, initial, saving, error, onSave, onClose }
         <Stack spacing={2} sx={{ pt: 1 }}>
           <FormTextField form={form} name="name" label="Name" placeholder="Y1 motor bracket" required />
           <Stack direction={{ xs: 'column', sm: 'row' }} spacing={1.5}>
-            <Controller
-              name="reference"
-              control={form.control}
-              render={({ field }) => (
-                <TextField
-                  select
-                  label="Reference (datum)"
-                  value={field.value}
-                  onChange={(e) => field.onChange(e.target.value as PatternReference)}
-                  sx={{ minWidth: 200 }}
-                >
-                  {Object.entries(REFERENCE_LABELS).map(([k, v]) => (
-                    <MenuItem key={k} value={k}>
-                      {v}
-                    </MenuItem>
-                  ))}
-                </TextField>
-              )}
-            />
+            <FormTextField form={form} name="reference" select label="Reference (datum)" sx={{ minWidth: 200 }}>
+              {Object.entries(REFERENCE_LABELS).map(([k, v]) => (
+                <MenuItem key={k} value={k}>
+                  {v}
+                </MenuItem>
+              ))}
+            </FormTextField>
             <Controller
               name="unit"
               control={form.control}

@@ -1,4 +1,4 @@
-import { InputAdornment, MenuItem, Stack, TextField } from '@mui/material';
+import { InputAdornment, MenuItem, Stack } from '@mui/material';
 import { Controller, type UseFormReturn } from 'react-hook-form';
 import type { TargetSetChoice } from '../api/get-target-set-choices';
 import { KIND_LABELS, type MachineKind } from '../types';
@@ -26,24 +26,13 @@ export function MachineFormFields({
   return (
     <Stack spacing={2} sx={{ pt: 1 }}>
       <FormTextField form={form} name="name" label="Name" required autoFocus={autoFocus} />
-      <Controller
-        name="kind"
-        control={control}
-        render={({ field }) => (
-          <TextField
-            select
-            label="Kind"
-            value={field.value}
-            onChange={(e) => field.onChange(e.target.value as MachineKind)}
-          >
-            {(Object.keys(KIND_LABELS) as MachineKind[]).map((k) => (
-              <MenuItem key={k} value={k}>
-                {KIND_LABELS[k]}
-              </MenuItem>
-            ))}
-          </TextField>
-        )}
-      />
+      <FormTextField form={form} name="kind" select label="Kind">
+        {(Object.keys(KIND_LABELS) as MachineKind[]).map((k) => (
+          <MenuItem key={k} value={k}>
+            {KIND_LABELS[k]}
+          </MenuItem>
+        ))}
+      </FormTextField>
       <Controller
         name="lengthUnit"
         control={control}
@@ -86,30 +75,24 @@ export function MachineFormFields({
           fullWidth
         />
       </Stack>
-      <Controller
+      <FormTextField
+        form={form}
         name="targetSetId"
-        control={control}
-        render={({ field }) => (
-          <TextField
-            select
-            label="Target set"
-            value={field.value}
-            onChange={field.onChange}
-            helperText={
-              targetSetId
-                ? targetSets.find((t) => t.id === targetSetId)?.description
-                : 'The default set for the kind of machine'
-            }
-          >
-            <MenuItem value="">Default for the kind</MenuItem>
-            {targetSets.map((t) => (
-              <MenuItem key={t.id} value={t.id}>
-                {t.name}
-              </MenuItem>
-            ))}
-          </TextField>
-        )}
-      />
+        select
+        label="Target set"
+        helperText={
+          targetSetId
+            ? targetSets.find((t) => t.id === targetSetId)?.description
+            : 'The default set for the kind of machine'
+        }
+      >
+        <MenuItem value="">Default for the kind</MenuItem>
+        {targetSets.map((t) => (
+          <MenuItem key={t.id} value={t.id}>
+            {t.name}
+          </MenuItem>
+        ))}
+      </FormTextField>
       <FormTextField form={form} name="notes" label="Notes" multiline minRows={3} />
     </Stack>
   );

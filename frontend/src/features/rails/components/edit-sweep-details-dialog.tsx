@@ -10,11 +10,10 @@ import {
   DialogTitle,
   InputAdornment,
   MenuItem,
-  TextField,
   useMediaQuery,
   useTheme,
 } from '@mui/material';
-import { Controller, useForm, useWatch } from 'react-hook-form';
+import { useForm, useWatch } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { FormTextField } from '../../../components/form/form-text-field';
 import { useOnline } from '../../../components/offline/use-online';
@@ -113,32 +112,18 @@ function DetailsForm({ sweep, onClose }: { sweep: Sweep; onClose: () => void }) 
               input: { endAdornment: <InputAdornment position="end">°C</InputAdornment> },
             }}
           />
-          <Controller
-            name="boltSize"
-            control={form.control}
-            render={({ field }) => (
-              <TextField
-                select
-                label="Bolt size"
-                name={field.name}
-                value={field.value}
-                onChange={(e) => field.onChange(e.target.value)}
-                onBlur={field.onBlur}
-                inputRef={field.ref}
-              >
-                <MenuItem value="">Not recorded</MenuItem>
-                {/* A size recorded earlier stays choosable even if the table no longer lists it. */}
-                {[
-                  ...bolts.map((b) => b.boltSize),
-                  ...(field.value && !bolts.some((b) => b.boltSize === field.value) ? [field.value] : []),
-                ].map((b) => (
-                  <MenuItem key={b} value={b}>
-                    {b}
-                  </MenuItem>
-                ))}
-              </TextField>
-            )}
-          />
+          <FormTextField form={form} name="boltSize" select label="Bolt size">
+            <MenuItem value="">Not recorded</MenuItem>
+            {/* A size recorded earlier stays choosable even if the table no longer lists it. */}
+            {[
+              ...bolts.map((b) => b.boltSize),
+              ...(boltSize && !bolts.some((b) => b.boltSize === boltSize) ? [boltSize] : []),
+            ].map((b) => (
+              <MenuItem key={b} value={b}>
+                {b}
+              </MenuItem>
+            ))}
+          </FormTextField>
           <FormTextField
             form={form}
             name="torque"

@@ -84,27 +84,21 @@ export function RailFormFields({ form, others }: { form: UseFormReturn<RailFormV
       />
       <Stack direction={{ xs: 'column', sm: 'row' }} spacing={1.5}>
         {text('length', 'Length', undefined, { required: true, withUnit: true })}
-        <Controller
+        <FormTextField
+          form={form}
           name="profileSize"
-          control={control}
-          render={({ field }) => (
-            <TextField
-              select
-              label="Profile size"
-              value={field.value}
-              onChange={field.onChange}
-              fullWidth
-              helperText="Rail width class (catalogue size in mm)"
-            >
-              <MenuItem value="">Not given</MenuItem>
-              {['12', '15', '20', '25', '30', '35'].map((s) => (
-                <MenuItem key={s} value={s}>
-                  {s} mm
-                </MenuItem>
-              ))}
-            </TextField>
-          )}
-        />
+          select
+          label="Profile size"
+          fullWidth
+          helperText="Rail width class (catalogue size in mm)"
+        >
+          <MenuItem value="">Not given</MenuItem>
+          {['12', '15', '20', '25', '30', '35'].map((s) => (
+            <MenuItem key={s} value={s}>
+              {s} mm
+            </MenuItem>
+          ))}
+        </FormTextField>
       </Stack>
       <Stack direction={{ xs: 'column', sm: 'row' }} spacing={1.5}>
         {text('holePitch', 'Hole pitch', 'Centre to centre', { required: true, withUnit: true })}
@@ -119,26 +113,20 @@ export function RailFormFields({ form, others }: { form: UseFormReturn<RailFormV
           withUnit: true,
         })}
       </Stack>
-      <Controller
+      <FormTextField
+        form={form}
         name="partnerRailId"
-        control={control}
-        render={({ field }) => (
-          <TextField
-            select
-            label="Partner rail"
-            value={field.value}
-            onChange={field.onChange}
-            helperText="The rail this one runs parallel to (Y1 with Y2, the two X rails)"
-          >
-            <MenuItem value="">None</MenuItem>
-            {others.map((r) => (
-              <MenuItem key={r.id} value={r.id}>
-                {r.label} ({r.axis})
-              </MenuItem>
-            ))}
-          </TextField>
-        )}
-      />
+        select
+        label="Partner rail"
+        helperText="The rail this one runs parallel to (Y1 with Y2, the two X rails)"
+      >
+        <MenuItem value="">None</MenuItem>
+        {others.map((r) => (
+          <MenuItem key={r.id} value={r.id}>
+            {r.label} ({r.axis})
+          </MenuItem>
+        ))}
+      </FormTextField>
     </Stack>
   );
 }

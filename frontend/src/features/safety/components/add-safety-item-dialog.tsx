@@ -1,15 +1,5 @@
-import {
-  Alert,
-  Button,
-  Dialog,
-  DialogActions,
-  DialogContent,
-  DialogTitle,
-  MenuItem,
-  Stack,
-  TextField,
-} from '@mui/material';
-import { Controller, useForm, useWatch } from 'react-hook-form';
+import { Alert, Button, Dialog, DialogActions, DialogContent, DialogTitle, MenuItem, Stack } from '@mui/material';
+import { useForm, useWatch } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { z } from 'zod';
 import { FormTextField } from '../../../components/form/form-text-field';
@@ -54,24 +44,13 @@ export function AddSafetyItemDialog({ open, onClose }: { open: boolean; onClose:
       <DialogContent>
         <Stack spacing={2} sx={{ pt: 1 }}>
           {add.error && <Alert severity="error">{(add.error as Error).message}</Alert>}
-          <Controller
-            name="section"
-            control={form.control}
-            render={({ field }) => (
-              <TextField
-                select
-                label="Section"
-                value={field.value}
-                onChange={(e) => field.onChange(e.target.value as SafetySection)}
-              >
-                {SECTIONS.map(([id, label]) => (
-                  <MenuItem key={id} value={id}>
-                    {label}
-                  </MenuItem>
-                ))}
-              </TextField>
-            )}
-          />
+          <FormTextField form={form} name="section" select label="Section">
+            {SECTIONS.map(([id, label]) => (
+              <MenuItem key={id} value={id}>
+                {label}
+              </MenuItem>
+            ))}
+          </FormTextField>
           <FormTextField
             form={form}
             name="text"
