@@ -70,9 +70,8 @@ export class SessionCache {
   }
 
   forgetPerson(userId: string): void {
-    for (const [sid, e] of this.entries) if (e.user && e.user.id === userId) this.entries.delete(sid);
     // A session naming nobody (false) may name this person once they can sign in again.
-    for (const [sid, e] of this.entries) if (e.user === false) this.entries.delete(sid);
+    for (const [sid, e] of this.entries) if (e.user === false || e.user.id === userId) this.entries.delete(sid);
   }
 
   forgetWorkshop(workshopId: string): void {

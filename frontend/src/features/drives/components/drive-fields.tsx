@@ -1,8 +1,9 @@
+import { FormTextField } from '../../../components/form/form-text-field';
 import { Box, MenuItem, TextField, ToggleButton, ToggleButtonGroup, Typography } from '@mui/material';
 import { Controller, useWatch, type UseFormReturn } from 'react-hook-form';
 import { DRIVE_LABELS, MOUNTING_LABELS, type DriveType, type Mounting } from '../types';
 import { UNIT_LABELS } from '../../../lib/units';
-import type { AxisFormValues, DriveDraft } from './axis-form-schema';
+import type { AxisFormValues } from './axis-form-schema';
 import { FormNumberInput } from './form-number-input';
 
 const grid = { display: 'grid', gridTemplateColumns: { xs: '1fr', sm: '1fr 1fr' }, gap: 2 } as const;
@@ -41,22 +42,10 @@ export function DriveFields({ form }: { form: UseFormReturn<AxisFormValues> }) {
         <>
           <Box sx={grid}>
             <Box sx={{ display: 'flex', gap: 1, alignItems: 'flex-start' }}>
-              <Controller
-                name="drive.leadAs"
-                control={form.control}
-                render={({ field }) => (
-                  <TextField
-                    select
-                    label="Lead given as"
-                    value={field.value}
-                    onChange={(e) => field.onChange(e.target.value as DriveDraft['leadAs'])}
-                    sx={{ minWidth: 150 }}
-                  >
-                    <MenuItem value="length">Lead ({u})</MenuItem>
-                    <MenuItem value="tpi">Threads per inch</MenuItem>
-                  </TextField>
-                )}
-              />
+              <FormTextField form={form} name="drive.leadAs" select label="Lead given as" sx={{ minWidth: 150 }}>
+                <MenuItem value="length">Lead ({u})</MenuItem>
+                <MenuItem value="tpi">Threads per inch</MenuItem>
+              </FormTextField>
               {leadAs === 'tpi' ? (
                 <FormNumberInput
                   key="drive.threadsPerInch"

@@ -171,22 +171,10 @@ export function TestProgramDialog({ axis, open, onClose }: { axis: Axis; open: b
             helperText="Brackets, semicolons, % and line breaks are left out so the note stays a comment"
             slotProps={{ htmlInput: { maxLength: 200 } }}
           />
-          <Controller
-            name="format"
-            control={form.control}
-            render={({ field }) => (
-              <TextField
-                select
-                label="File type"
-                value={field.value}
-                onChange={(e) => field.onChange(e.target.value as TestProgramFormValues['format'])}
-                sx={{ maxWidth: 200 }}
-              >
-                <MenuItem value="nc">.nc (G-code)</MenuItem>
-                <MenuItem value="txt">.txt (plain text)</MenuItem>
-              </TextField>
-            )}
-          />
+          <FormTextField form={form} name="format" select label="File type" sx={{ maxWidth: 200 }}>
+            <MenuItem value="nc">.nc (G-code)</MenuItem>
+            <MenuItem value="txt">.txt (plain text)</MenuItem>
+          </FormTextField>
           {download.error && <Alert severity="error">{errorText(download.error)}</Alert>}
           {done && (
             <Alert severity="success">
