@@ -9,6 +9,7 @@ import { TransactionContext, transactionalDatabase } from './transaction-context
 import { CommandKeys } from './command-keys.js';
 import { CommandKeysRepository } from './command-keys.repository.js';
 import { SessionCache } from './session-cache.js';
+import { prepareRepeatedStatements } from './prepared-statements.js';
 import { SessionChangesListener } from './session-changes.listener.js';
 
 @Global()
@@ -21,6 +22,7 @@ import { SessionChangesListener } from './session-changes.listener.js';
         const pool = new pg.Pool({ connectionString: config.get('app', { infer: true }).databaseUrl, max: 10 });
         // An idle connection dropped by the server must not take the process down; the pool reconnects.
         pool.on('error', (err) => console.error(`Database connection lost: ${err.message}`));
+        pool.on('connect', (client) => prepareRepeatedStatements(client));
         return pool;
       },
     },
