@@ -18,7 +18,7 @@ import { TargetSetsService } from '../target-sets/target-sets.service.js';
 import { toSweepListItem, toSweepResponse, type SweepListItem, type SweepResponse } from './rail.mapper.js';
 import { DEFAULT_PAGE_SIZE } from '../records/page-cursor.js';
 import type { PageQuery } from '../records/page.query.js';
-import { RailsRepository, type SweepRow } from './rails.repository.js';
+import { RailsRepository, type SweepRow, type SweepValues } from './rails.repository.js';
 import { RailsService } from './rails.service.js';
 import type { CreateSweepDto } from './dto/create-sweep.dto.js';
 import type { UpdateSweepDetailsDto } from './dto/update-sweep-details.dto.js';
@@ -127,7 +127,7 @@ export class RailSweepsService {
     );
 
     const now = new Date();
-    const row = await this.repo.insertSweepFromValues({
+    const values: SweepValues = {
       ...(dto.id ? { id: dto.id } : {}),
       workshopId: actor.workshopId,
       machineId: rail.machineId,
@@ -154,19 +154,21 @@ export class RailSweepsService {
       createdById: actor.id,
       takenAt,
       createdAt: now,
-    });
-    if (!row) {
+    };
+    const id = await this.records.saveCheck(
+      actor,
+      this.repo.sweepInsert(values),
+      { machineId: rail.machineId, kind: 'rail-straightness', recordType: 'rail-sweep', status },
+      `Sweep of rail ${rail.label} (${dto.phase}, ${values.face} face): ${REFERENCE_WORDS[reference]} ${showIn(judged, readingUnit)} against a target of ${target.value} ${target.unit === 'um' ? 'µm' : target.unit}` +
+        ` (least squares ${showIn(result.leastSquares.straightness, readingUnit)}, minimum zone ${showIn(result.minimumZone.straightness, readingUnit)}); largest local slope ${slope.mmPerM.toFixed(3)} mm/m`,
+    );
+    if (!id) {
       // Two copies of one save raced; the first one won.
       const existing = await this.repeatOf(actor, railId, dto.id!);
       if (existing) return { created: false, sweep: existing };
       throw new ConflictException('That sweep id is already used by another record');
     }
-    await this.records.checkRecorded(
-      actor,
-      { machineId: rail.machineId, kind: 'rail-straightness', recordType: 'rail-sweep', recordId: row.id, status },
-      `Sweep of rail ${rail.label} (${dto.phase}, ${row.face} face): ${REFERENCE_WORDS[reference]} ${showIn(judged, readingUnit)} against a target of ${target.value} ${target.unit === 'um' ? 'µm' : target.unit}` +
-        ` (least squares ${showIn(result.leastSquares.straightness, readingUnit)}, minimum zone ${showIn(result.minimumZone.straightness, readingUnit)}); largest local slope ${slope.mmPerM.toFixed(3)} mm/m`,
-    );
+    const row = this.repo.sweepRowOf(values, id);
     return { created: true, sweep: toSweepResponse(row, false) };
   }
 

@@ -48,6 +48,8 @@ const uuidArray = (ids: string[]) =>
     sql`, `,
   )}]::uuid[]`;
 type SweepInsert = typeof railSweeps.$inferInsert;
+/** A new sweep as the service writes it: its times are always given. */
+export type SweepValues = SweepInsert & { createdAt: Date; takenAt: Date };
 
 @Injectable()
 export class RailsRepository {
@@ -353,13 +355,18 @@ export class RailsRepository {
    * Inserts unless the id exists already (a retried save: null). Only the columns the database
    * fills are sent back; the rest of the row is what was written.
    */
-  async insertSweepFromValues(values: SweepInsert & { createdAt: Date; takenAt: Date }): Promise<SweepRow | null> {
-    const [made] = await this.db
+  /** A sweep's insert (`… on conflict do nothing returning id`), to be sent with its audit entry. */
+  sweepInsert(values: SweepValues): SQL {
+    return this.db
       .insert(railSweeps)
       .values(values)
       .onConflictDoNothing({ target: railSweeps.id })
-      .returning({ id: railSweeps.id });
-    if (!made) return null;
+      .returning({ id: railSweeps.id })
+      .getSQL();
+  }
+
+  /** The row a sweep insert wrote, from the values it was given: no read back. */
+  sweepRowOf(values: SweepValues, id: string): SweepRow {
     return {
       instrument: '',
       resolution: null,
@@ -371,7 +378,7 @@ export class RailsRepository {
       createdById: null,
       updatedAt: values.createdAt,
       ...values,
-      id: made.id,
+      id,
     } as SweepRow;
   }
 }

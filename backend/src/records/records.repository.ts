@@ -35,6 +35,29 @@ export class RecordsRepository {
     );
   }
 
+  /**
+   * A record's insert (`insert … returning id`), its audit entry and the machine's last activity
+   * in one statement. The entry and the touch happen only if the insert wrote a row; answers the
+   * new row's id, or null when it wrote none (its id was already taken).
+   */
+  async insertWithAuditAndTouch(
+    insert: SQL,
+    values: Omit<typeof auditEntries.$inferInsert, 'recordId'> & { machineId: string },
+  ): Promise<string | null> {
+    const { rows } = await this.db.execute<{ id: string }>(sql`
+      with rec as (${insert}),
+      audit as (
+        insert into ${auditEntries} (workshop_id, machine_id, record_type, record_id, action, summary, changes, actor_id, actor_name, at)
+        select ${values.workshopId}, ${values.machineId}, ${values.recordType}, rec.id, ${values.action}, ${values.summary},
+               ${values.changes === null || values.changes === undefined ? null : JSON.stringify(values.changes)}::jsonb,
+               ${values.actorId ?? null}::uuid, ${values.actorName}, clock_timestamp()
+        from rec),
+      touch as (
+        update ${machines} set last_activity_at = now() where ${machines.id} = ${values.machineId} and exists (select 1 from rec))
+      select id from rec`);
+    return rows[0]?.id ?? null;
+  }
+
   /** One page of a workshop's (or one machine's) history, newest first; one row more than asked tells there is a next page. */
   historyPage(workshopId: string, f: HistoryFilter) {
     const where: (SQL | undefined)[] = [eq(auditEntries.workshopId, workshopId)];

@@ -1,4 +1,5 @@
 import { BadRequestException, ConflictException, Injectable, Logger } from '@nestjs/common';
+import type { SQL } from 'drizzle-orm';
 import type { SessionUser } from '../auth/session-user.js';
 import {
   assignChanges,
@@ -76,8 +77,12 @@ export class RecordsService {
     };
     if (input.machineId) await this.repo.insertAuditAndTouch({ ...values, machineId: input.machineId });
     else await this.repo.insertAudit(values);
-    // After the machine's touch: that row lock makes commands on one machine take turns, so each
-    // listener (the readiness summary) reads what the command before it committed.
+    await this.changed(actor.workshopId, input);
+  }
+
+  // After the machine's touch: that row lock makes commands on one machine take turns, so each
+  // listener (the readiness summary) reads what the command before it committed.
+  private async changed(workshopId: string, input: AuditInput): Promise<void> {
     const change: RecordChange = {
       machineId: input.machineId ?? null,
       recordType: input.recordType,
@@ -85,7 +90,7 @@ export class RecordsService {
       action: input.action,
       checkKind: input.checkKind,
     };
-    for (const listener of this.changeListeners) await listener(actor.workshopId, change);
+    for (const listener of this.changeListeners) await listener(workshopId, change);
   }
 
   /** Runs in the changing command's transaction after every audited change; a failure fails the command. */
@@ -95,15 +100,39 @@ export class RecordsService {
 
   /** Call after saving a check's result: audits it and lets approvals react (e.g. leave ready-to-cut). */
   async checkRecorded(actor: SessionUser, event: CheckRecordedEvent, summary: string): Promise<void> {
-    await this.audit(actor, {
+    await this.audit(actor, recordedEntry(event, summary));
+    await this.tellCheckListeners(actor, event);
+  }
+
+  /**
+   * Saves a check's record together with its audit entry and the machine's last activity, in one
+   * statement (`insert` is the record's `insert … returning id`), then reacts as checkRecorded
+   * does. Answers the new record's id, or null when the insert wrote nothing (the id was taken).
+   */
+  async saveCheck(
+    actor: SessionUser,
+    insert: SQL,
+    event: Omit<CheckRecordedEvent, 'recordId'>,
+    summary: string,
+  ): Promise<string | null> {
+    const entry = recordedEntry({ ...event, recordId: null }, summary);
+    const recordId = await this.repo.insertWithAuditAndTouch(insert, {
+      workshopId: actor.workshopId,
       machineId: event.machineId,
-      recordType: event.recordType,
-      recordId: event.recordId,
-      action: 'recorded',
-      summary,
-      changes: { status: event.status },
-      checkKind: event.kind,
+      recordType: entry.recordType,
+      action: entry.action,
+      summary: entry.summary,
+      changes: entry.changes,
+      actorId: actor.id,
+      actorName: actor.name,
     });
+    if (!recordId) return null;
+    await this.changed(actor.workshopId, { ...entry, recordId });
+    await this.tellCheckListeners(actor, { ...event, recordId });
+    return recordId;
+  }
+
+  private async tellCheckListeners(actor: SessionUser, event: CheckRecordedEvent): Promise<void> {
     for (const listener of this.listeners) {
       try {
         await listener(actor, event);
@@ -168,4 +197,20 @@ export class RecordsService {
       nextCursor: rows.length > limit ? encodeCursor(page[page.length - 1]) : null,
     };
   }
+}
+
+/** The audit entry of a recorded check. */
+function recordedEntry(
+  event: Omit<CheckRecordedEvent, 'recordId'> & { recordId: string | null },
+  summary: string,
+): AuditInput & { changes: Record<string, unknown> } {
+  return {
+    machineId: event.machineId,
+    recordType: event.recordType,
+    recordId: event.recordId,
+    action: 'recorded',
+    summary,
+    changes: { status: event.status },
+    checkKind: event.kind,
+  };
 }
