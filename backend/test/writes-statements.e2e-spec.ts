@@ -9,10 +9,11 @@ import { SessionChangesListener } from '../src/database/session-changes.listener
  * How many SQL statements one sweep write and one hole write send to PostgreSQL, counted at the
  * pg client (session store, transaction control and the command's own statements alike). A sweep
  * write took 21 (12 of its own and 13 recounting the machine's readiness from every contributor)
- * and a hole write 10; now 7 and 6: the session and its person are read together and kept a few
+ * and a hole write 10; now 6 and 6: the session and its person are read together and kept a few
  * seconds between requests, the transaction opens with its actor, a sweep goes in with its audit
  * entry and the machine's touch in one statement, and a recorded check asks only
- * its own contributor again (the rails with their newest sweeps in one statement); a hole write
+ * its own contributor again (the rails with their newest sweeps, read in the statement that reads
+ * the machine's context); a hole write
  * locks the machine in the statement that reads the bolt-down.
  * The bounds are the counts now, so a change that adds a round trip to the hot paths fails here.
  */
@@ -106,12 +107,12 @@ describe('statements per write', () => {
     // The sweep, its audit entry and the machine's touch go in one statement.
     expect(list.filter((s) => /insert into "rail_sweeps"/.test(s))).toEqual([expect.stringMatching(/audit_entries/)]);
     expect(own.length).toBeLessThanOrEqual(4);
-    // Only the rails' contributor is asked again: the machine's context, its rails with their
-    // newest sweeps, and the summary written; nothing of the axes, frame or safety walk.
+    // Only the rails' contributor is asked again: the machine's context read with its rails and
+    // their newest sweeps, and the summary written; nothing of the axes, frame or safety walk.
     expect(listeners.filter((s) => OTHER_CONTRIBUTORS.test(s))).toEqual([]);
     expect(listeners.filter((s) => /machine_readiness/.test(s) && /^insert/i.test(s.trim()))).toHaveLength(1);
-    expect(listeners.length).toBeLessThanOrEqual(3);
-    expect(list.length).toBeLessThanOrEqual(7);
+    expect(listeners.length).toBeLessThanOrEqual(2);
+    expect(list.length).toBeLessThanOrEqual(6);
   });
 
   it('a hole write: the bolt-down read with the machine locked, the hole, its audit, the answer from one read of the holes', async () => {

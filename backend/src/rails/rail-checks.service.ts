@@ -20,7 +20,14 @@ import { TargetSetsService } from '../target-sets/target-sets.service.js';
 import { TARGET_LABELS, targetInBaseUnit } from '../target-sets/target-keys.js';
 import { MachinesService } from '../machines/machines.service.js';
 import type { ComparedSweep } from './rail-parallelism.js';
-import { RailsRepository, type DatumSweep, type LatestSweep, type RailRow, type SweepRow } from './rails.repository.js';
+import {
+  RailsRepository,
+  type DatumSweep,
+  type LatestSweep,
+  type RailRow,
+  type RailsWithNewestSweeps,
+  type SweepRow,
+} from './rails.repository.js';
 import { RailsService } from './rails.service.js';
 import { inLengthUnit, storedSweepResult, summaryReadable } from './rail.mapper.js';
 import { UNREADABLE_INPUT } from '../common/stored-result.js';
@@ -53,7 +60,14 @@ export class RailChecksService implements OnModuleInit {
   ) {}
 
   onModuleInit() {
-    this.readiness.register({ checksFor: (m, context) => this.checksFor(m, context) });
+    this.readiness.register({
+      checksFor: (m, context) => this.checksFor(m, context),
+      firstRead: {
+        sql: (workshopId, machineId) => this.repo.railsWithNewestSweepsAsJson(workshopId, machineId),
+        checks: (value, m, context) =>
+          this.checksFromRails(this.repo.railsWithNewestSweepsFrom(value as Record<string, unknown>[]), m, context),
+      },
+    });
     this.subjects.register('rail', async (workshopId, id) => {
       const rail = await this.repo.findRail(workshopId, id);
       return rail ? { machineId: rail.machineId, recordType: 'rail', recordId: id, label: `Rail ${rail.label}` } : null;
@@ -77,7 +91,19 @@ export class RailChecksService implements OnModuleInit {
    * certificate's series when they are asked for.
    */
   async checksFor(machine: MachineRef, context: ReadinessContext): Promise<ReadinessCheck[]> {
-    const { rails, latest } = await this.repo.railsWithNewestSweeps(machine.workshopId, machine.id);
+    return this.checksFromRails(
+      await this.repo.railsWithNewestSweeps(machine.workshopId, machine.id),
+      machine,
+      context,
+    );
+  }
+
+  /** The checks from the rails and their newest sweeps (the first read), reading the rest it needs. */
+  private async checksFromRails(
+    { rails, latest }: RailsWithNewestSweeps,
+    machine: MachineRef,
+    context: ReadinessContext,
+  ): Promise<ReadinessCheck[]> {
     if (!rails.length) return [];
     const targets = {
       straightness: context.targets.railStraightness,

@@ -166,15 +166,19 @@ export class RailsRepository {
    * A machine's rails in their order, each with its newest sweep (summary columns), in one
    * statement: what the readiness board and the rails tab start from.
    */
-  async railsWithNewestSweeps(
-    workshopId: string,
-    machineId: string,
-  ): Promise<{ rails: RailRow[]; latest: Map<string, LatestSweep> }> {
-    const { rows } = await this.db.execute<Record<string, unknown>>(sql`
-      select rl.*, to_jsonb(s) as newest_sweep from rails rl
-      left join lateral (${newestSweepOf(sql`rl.id`, workshopId)}) s on true
-      where rl.workshop_id = ${workshopId} and rl.machine_id = ${machineId}
-      order by rl.axis, rl.label, rl.created_at`);
+  async railsWithNewestSweeps(workshopId: string, machineId: string): Promise<RailsWithNewestSweeps> {
+    const { rows } = await this.db.execute<Record<string, unknown>>(railsWithNewestSweepsQuery(workshopId, machineId));
+    return this.railsWithNewestSweepsFrom(rows);
+  }
+
+  /** The same read as one SQL expression whose value is the rows as a JSON array, to send along another statement. */
+  railsWithNewestSweepsAsJson(workshopId: string, machineId: string): SQL {
+    return sql`select coalesce(jsonb_agg(to_jsonb(q) order by q.axis, q.label, q.created_at), '[]'::jsonb)
+      from (${railsWithNewestSweepsQuery(workshopId, machineId)}) q`;
+  }
+
+  /** The rails and their newest sweeps from the rows of either read. */
+  railsWithNewestSweepsFrom(rows: Record<string, unknown>[]): RailsWithNewestSweeps {
     const latest = new Map<string, LatestSweep>();
     const railRows = rows.map((raw) => {
       const newest = raw.newest_sweep as NewestSweepColumns | null;
@@ -399,6 +403,18 @@ type NewestSweepColumns = {
 } & SummaryExtras;
 
 /** The newest sweep of the rail `railId` names (summary columns, no arrays): one index step. */
+/** A machine's rails in their order, each with its newest sweep (summary columns) as JSON. */
+const railsWithNewestSweepsQuery = (workshopId: string, machineId: string) => sql`
+  select rl.*, to_jsonb(s) as newest_sweep from rails rl
+  left join lateral (${newestSweepOf(sql`rl.id`, workshopId)}) s on true
+  where rl.workshop_id = ${workshopId} and rl.machine_id = ${machineId}
+  order by rl.axis, rl.label, rl.created_at`;
+
+export interface RailsWithNewestSweeps {
+  rails: RailRow[];
+  latest: Map<string, LatestSweep>;
+}
+
 const newestSweepOf = (railId: SQL, workshopId: string) => sql`
   select x.id, x.rail_id, x.taken_at, x.phase, x.datum, x.status, x.target,
          case when jsonb_typeof(x.result #> '{leastSquares,straightness}') = 'number' then (x.result #>> '{leastSquares,straightness}')::float8 end as ls,

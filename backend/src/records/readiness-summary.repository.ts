@@ -1,5 +1,5 @@
 import { Inject, Injectable } from '@nestjs/common';
-import { and, eq, isNull, ne, or, sql } from 'drizzle-orm';
+import { and, eq, isNull, ne, or, sql, type SQL } from 'drizzle-orm';
 import { DRIZZLE, type Database } from '../database/database.tokens.js';
 import { machineReadiness, machines, targetSets, waivers } from '../database/schema/index.js';
 import { machineStateNow } from '../machines/machine-state.js';
@@ -20,6 +20,8 @@ export interface ReadinessContextRow {
   waivers: SummaryWaiverRow[];
   /** The stored summary's checks and how they were counted (only when asked for). */
   summary: { checks: SummaryCheck[] | null; version: number } | null;
+  /** The values of the contributors' first reads sent along, in the order they were given. */
+  firstReads: unknown[];
 }
 
 /** The reads a readiness count needs besides the contributors', and the summary rows themselves. */
@@ -31,7 +33,12 @@ export class ReadinessSummaryRepository {
    * The machine, its target set and its waivers (and its stored summary when asked for) in one
    * statement: a count costs this plus the contributors' own reads, whatever the history.
    */
-  async context(workshopId: string, machineId: string, withSummary: boolean): Promise<ReadinessContextRow | null> {
+  async context(
+    workshopId: string,
+    machineId: string,
+    withSummary: boolean,
+    firstReads: SQL[] = [],
+  ): Promise<ReadinessContextRow | null> {
     const { rows } = await this.db.execute<{
       id: string;
       workshop_id: string;
@@ -47,6 +54,7 @@ export class ReadinessSummaryRepository {
       waivers: (Omit<SummaryWaiverRow, 'waivedAt'> & { waivedAt: string })[];
       s_checks: SummaryCheck[] | null;
       s_version: number | null;
+      [firstRead: `first_read_${number}`]: unknown;
     }>(sql`
       select m.id, m.workshop_id, m.target_set_id, m.kind, m.work_area_x_mm, m.work_area_y_mm, m.name,
              ${machineStateNow(sql`m`)} as state,
@@ -59,6 +67,10 @@ export class ReadinessSummaryRepository {
                from ${waivers} w where w.workshop_id = m.workshop_id and w.machine_id = m.id
              ), '[]'::jsonb) as waivers,
              ${withSummary ? sql`r.checks` : sql`null::jsonb`} as s_checks, ${withSummary ? sql`r.version` : sql`null::int`} as s_version
+             ${sql.join(
+               firstReads.map((read, i) => sql`, (${read}) as ${sql.identifier(`first_read_${i}`)}`),
+               sql``,
+             )}
       from ${machines} m
       left join ${targetSets} t on t.id = m.target_set_id and t.workshop_id = m.workshop_id
       left join ${machineReadiness} r on ${withSummary ? sql`r.machine_id = m.id` : sql`false`}
@@ -80,6 +92,7 @@ export class ReadinessSummaryRepository {
       targetSet: row.t_id ? { id: row.t_id, name: row.t_name!, targets: withDefaultTargets(row.targets) } : null,
       waivers: row.waivers.map((w) => ({ ...w, waivedAt: new Date(w.waivedAt) })),
       summary: row.s_version === null ? null : { checks: row.s_checks, version: row.s_version },
+      firstReads: firstReads.map((_, i) => row[`first_read_${i}`]),
     };
   }
 

@@ -1,4 +1,5 @@
 import { Injectable, Logger, NotFoundException, OnApplicationBootstrap, OnModuleInit } from '@nestjs/common';
+import type { SQL } from 'drizzle-orm';
 import { blockingOf, boardChecks } from '../approvals/board.js';
 import type { BoardCheck } from '../approvals/snapshot.js';
 import type { BlockingCheckRef, SummaryCheck } from '../database/schema/machine-readiness.js';
@@ -103,17 +104,23 @@ export class ReadinessSummaryService implements OnModuleInit, OnApplicationBoots
    * again; the other checks are taken from the stored summary. Anything else asks every contributor.
    */
   async refresh(workshopId: string, machineId: string, checkKind?: string): Promise<ReadinessCounts | null> {
-    const found = await this.repo.context(workshopId, machineId, true);
+    const only = checkKind ? this.registry.contributorsOf(checkKind) : [];
+    // The contributors asked again send their first read with the context, when they offer one.
+    const firstReads = only.map((index) => this.registry.firstReadOf(index, workshopId, machineId));
+    const sendAlong = firstReads.every((read) => read !== undefined) ? (firstReads as SQL[]) : [];
+    const found = await this.repo.context(workshopId, machineId, true, sendAlong);
     if (!found) return null;
     const context: ReadinessContext = { targets: targetSetOf(found).targets, series: false };
     const version = this.countVersion();
-    const only = checkKind ? this.registry.contributorsOf(checkKind) : [];
     const stored = found.summary?.version === version ? found.summary.checks : null;
     let checks: SummaryCheck[];
     if (only.length && stored) {
       const fresh = await Promise.all(
-        only.map(async (index) =>
-          (await this.registry.checksOf(index, found.machine, context)).map((c) => summaryCheck(index, c)),
+        only.map(async (index, k) =>
+          (sendAlong.length
+            ? await this.registry.checksFromFirstRead(index, found.firstReads[k], found.machine, context)
+            : await this.registry.checksOf(index, found.machine, context)
+          ).map((c) => summaryCheck(index, c)),
         ),
       );
       checks = [...stored.filter((c) => !only.includes(c.contributor)), ...fresh.flat()];

@@ -1,4 +1,5 @@
 import { Injectable, NotFoundException } from '@nestjs/common';
+import type { SQL } from 'drizzle-orm';
 import { ReadinessSummaryRepository } from './readiness-summary.repository.js';
 import type { MachineRef, ReadinessCheck, ReadinessContext, ReadinessContributor } from './readiness.js';
 
@@ -40,6 +41,23 @@ export class ReadinessRegistry {
   /** One contributor's checks. */
   async checksOf(index: number, machine: MachineRef, context: ReadinessContext): Promise<ReadinessCheck[]> {
     const list = await this.contributors[index].checksFor(machine, context);
+    this.learn(index, list);
+    return list;
+  }
+
+  /** The first read a contributor offers to send with the machine's context, if it offers one. */
+  firstReadOf(index: number, workshopId: string, machineId: string): SQL | undefined {
+    return this.contributors[index].firstRead?.sql(workshopId, machineId);
+  }
+
+  /** One contributor's checks from the value of its first read (see firstReadOf). */
+  async checksFromFirstRead(
+    index: number,
+    value: unknown,
+    machine: MachineRef,
+    context: ReadinessContext,
+  ): Promise<ReadinessCheck[]> {
+    const list = await this.contributors[index].firstRead!.checks(value, machine, context);
     this.learn(index, list);
     return list;
   }

@@ -1,3 +1,4 @@
+import type { SQL } from 'drizzle-orm';
 import type { TargetValue } from '../database/schema/target-sets.js';
 import type { ResultWarning } from '../engine/warnings.js';
 import { targetInBaseUnit, type TargetKey } from '../target-sets/target-keys.js';
@@ -100,4 +101,13 @@ export function targetIn(context: ReadinessContext, key: TargetKey): { target: T
 
 export interface ReadinessContributor {
   checksFor(machine: MachineRef, context: ReadinessContext): Promise<ReadinessCheck[]>;
+  /**
+   * Optionally, the contributor's first read as one SQL expression whose value is JSON, and its
+   * checks from that value (reading more itself if it must). A recount after a recorded check
+   * sends that read in the statement that reads the machine's context: one round trip less.
+   */
+  firstRead?: {
+    sql(workshopId: string, machineId: string): SQL;
+    checks(value: unknown, machine: MachineRef, context: ReadinessContext): Promise<ReadinessCheck[]>;
+  };
 }
