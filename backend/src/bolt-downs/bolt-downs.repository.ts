@@ -1,5 +1,5 @@
 import { Inject, Injectable } from '@nestjs/common';
-import { and, asc, desc, eq, inArray, sql } from 'drizzle-orm';
+import { and, asc, desc, eq, inArray, sql, type SQL } from 'drizzle-orm';
 import { DRIZZLE, type Database } from '../database/database.tokens.js';
 import { boltDownHoles, boltDowns, boltDownWrites, machines, rails, recordLocks } from '../database/schema/index.js';
 import type { MachineState } from '../database/schema/machines.js';
@@ -157,8 +157,10 @@ export class BoltDownsRepository {
    * copy of the same write (a retry after a lost answer, even one racing the first) finds it taken
    * and changes nothing. Callers lock the machine first, so writers of one bolt-down take turns
    * and fixes are numbered in the order they land; a bolt-down finished meanwhile is not written.
+   * `along` are more common table expressions sent in the same statement (the audit entry, which
+   * may read `h`, the hole written).
    */
-  async writeHole(workshopId: string, boltDownId: string, w: HoleWrite): Promise<HoleWriteOutcome> {
+  async writeHole(workshopId: string, boltDownId: string, w: HoleWrite, along?: SQL): Promise<HoleWriteOutcome> {
     const target = `hole:${w.holeIndex}`;
     const newFix = w.fixed && !w.before?.fixed;
     const kept = w.fixed && w.before?.fixed ? w.before : null;
@@ -188,7 +190,7 @@ export class BoltDownsRepository {
           fixed = excluded.fixed, fix_seq = excluded.fix_seq, fixed_at = excluded.fixed_at, fixed_by_id = excluded.fixed_by_id,
           fixed_by_name = excluded.fixed_by_name, last_write_id = excluded.last_write_id, updated_at = excluded.updated_at
         returning id, fix_seq
-      )
+      )${along ? sql`, ${along}` : sql``}
       select (select count(*) from claim)::int as claimed, (select fix_counter from b) as fix_counter,
         (select id from h) as hole_id, (select fix_seq from h) as fix_seq`);
     const out = result.rows[0];

@@ -9,7 +9,7 @@ import { RailSweepsService } from '../rails/rail-sweeps.service.js';
 import { RailsService } from '../rails/rails.service.js';
 import type { RailRow } from '../rails/rails.repository.js';
 import type { SweepResponse } from '../rails/rail.mapper.js';
-import { lockedRecordConflict, RecordsService } from '../records/records.service.js';
+import { lockedRecordConflict, RecordsService, type AuditInput } from '../records/records.service.js';
 import { SubjectsRegistry } from '../records/subjects.registry.js';
 import { TargetSetsService } from '../target-sets/target-sets.service.js';
 import { sessionOf, toBoltDownResponse, type BoltDownResponse, type HoleWriteResponse } from './bolt-down.mapper.js';
@@ -142,16 +142,37 @@ export class BoltDownsService implements OnModuleInit {
     const holes = (await this.repo.holesOf(actor.workshopId, [id])).get(id)!;
     const before = holes.find((h) => h.holeIndex === holeIndex) ?? null;
     const target = sessionOf(row, holes).holes[holeIndex].targetMm;
-    const outcome = await this.repo.writeHole(actor.workshopId, id, {
-      writeId: dto.writeId,
-      holeIndex,
-      readingRaw: dto.reading,
-      readingMm,
-      fixed: dto.fixed,
-      actor,
-      before,
-      now: new Date(),
-    });
+    const fmt = (mm: number | null) =>
+      mm === null ? 'none yet' : `${signed(fromMm(mm, row.readingUnit))} ${row.readingUnit}`;
+    const at = `hole ${holeIndex + 1} at ${+fromMm(row.holePositionsMm[holeIndex], row.lengthUnit).toPrecision(10)} ${row.lengthUnit}`;
+    const summary = dto.fixed
+      ? `Rail ${rail.label}: ${at} fixed at ${signed(dto.reading)} ${row.readingUnit} (aim ${fmt(target)})`
+      : before?.fixed
+        ? `Rail ${rail.label}: ${at} loosened again (reading ${signed(dto.reading)} ${row.readingUnit})`
+        : `Rail ${rail.label}: reading ${signed(dto.reading)} ${row.readingUnit} typed at ${at}`;
+    const entry: AuditInput & { machineId: string } = {
+      machineId: row.machineId,
+      recordType: RECORD_TYPE,
+      recordId: id,
+      action: 'updated',
+      summary,
+      changes: { hole: holeIndex, reading: dto.reading, unit: row.readingUnit, fixed: dto.fixed, writeId: dto.writeId },
+    };
+    const outcome = await this.repo.writeHole(
+      actor.workshopId,
+      id,
+      {
+        writeId: dto.writeId,
+        holeIndex,
+        readingRaw: dto.reading,
+        readingMm,
+        fixed: dto.fixed,
+        actor,
+        before,
+        now: new Date(),
+      },
+      this.records.auditAlong(actor, entry, 'h'),
+    );
     if (outcome.kind === 'id-taken')
       throw new ConflictException('writeId was already used for another write; make a new one for each write');
     if (outcome.kind === 'finished') {
@@ -161,22 +182,7 @@ export class BoltDownsService implements OnModuleInit {
     if (outcome.kind === 'repeat')
       return { ...(await this.respond(actor, row, rail)), writeId: dto.writeId, repeated: true };
 
-    const fmt = (mm: number | null) =>
-      mm === null ? 'none yet' : `${signed(fromMm(mm, row.readingUnit))} ${row.readingUnit}`;
-    const at = `hole ${holeIndex + 1} at ${+fromMm(row.holePositionsMm[holeIndex], row.lengthUnit).toPrecision(10)} ${row.lengthUnit}`;
-    const summary = dto.fixed
-      ? `Rail ${rail.label}: ${at} fixed at ${signed(dto.reading)} ${row.readingUnit} (aim ${fmt(target)})`
-      : before?.fixed
-        ? `Rail ${rail.label}: ${at} loosened again (reading ${signed(dto.reading)} ${row.readingUnit})`
-        : `Rail ${rail.label}: reading ${signed(dto.reading)} ${row.readingUnit} typed at ${at}`;
-    await this.records.audit(actor, {
-      machineId: row.machineId,
-      recordType: RECORD_TYPE,
-      recordId: id,
-      action: 'updated',
-      summary,
-      changes: { hole: holeIndex, reading: dto.reading, unit: row.readingUnit, fixed: dto.fixed, writeId: dto.writeId },
-    });
+    await this.records.auditedAlong(actor, entry);
     const written = [...holes.filter((h) => h.holeIndex !== holeIndex), outcome.hole].sort(
       (a, b) => a.holeIndex - b.holeIndex,
     );

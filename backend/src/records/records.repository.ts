@@ -45,17 +45,31 @@ export class RecordsRepository {
     values: Omit<typeof auditEntries.$inferInsert, 'recordId'> & { machineId: string },
   ): Promise<string | null> {
     const { rows } = await this.db.execute<{ id: string }>(sql`
-      with rec as (${insert}),
-      audit as (
-        insert into ${auditEntries} (workshop_id, machine_id, record_type, record_id, action, summary, changes, actor_id, actor_name, at)
-        select ${values.workshopId}, ${values.machineId}, ${values.recordType}, rec.id, ${values.action}, ${values.summary},
-               ${values.changes === null || values.changes === undefined ? null : JSON.stringify(values.changes)}::jsonb,
-               ${values.actorId ?? null}::uuid, ${values.actorName}, clock_timestamp()
-        from rec),
-      touch as (
-        update ${machines} set last_activity_at = now() where ${machines.id} = ${values.machineId} and exists (select 1 from rec))
+      with rec as (${insert}), ${this.auditAndTouchAfter('rec', { ...values, recordId: sql`rec.id` })}
       select id from rec`);
     return rows[0]?.id ?? null;
+  }
+
+  /**
+   * Two common table expressions for a command's own write statement: the audit entry and the
+   * machine's last activity, written only if the expression named `when` yields a row (the write
+   * happened). `recordId` may be a column of that expression.
+   */
+  auditAndTouchAfter(
+    when: string,
+    values: Omit<typeof auditEntries.$inferInsert, 'recordId'> & { machineId: string; recordId: string | SQL | null },
+  ): SQL {
+    const from = sql.identifier(when);
+    const recordId =
+      typeof values.recordId === 'string' ? sql`${values.recordId}::uuid` : (values.recordId ?? sql`null::uuid`);
+    return sql`audit as (
+        insert into ${auditEntries} (workshop_id, machine_id, record_type, record_id, action, summary, changes, actor_id, actor_name, at)
+        select ${values.workshopId}::uuid, ${values.machineId}::uuid, ${values.recordType}, ${recordId}, ${values.action}, ${values.summary},
+               ${values.changes === null || values.changes === undefined ? null : JSON.stringify(values.changes)}::jsonb,
+               ${values.actorId ?? null}::uuid, ${values.actorName}, clock_timestamp()
+        from ${from} limit 1),
+      touch as (
+        update ${machines} set last_activity_at = now() where ${machines.id} = ${values.machineId} and exists (select 1 from ${from}))`;
   }
 
   /** One page of a workshop's (or one machine's) history, newest first; one row more than asked tells there is a next page. */

@@ -132,6 +132,30 @@ export class RecordsService {
     return recordId;
   }
 
+  /**
+   * A change's audit entry and the machine's last activity, to be sent inside the command's own
+   * write statement as common table expressions, written only if the expression `when` yields a
+   * row. Call `auditedAlong` once that statement has written.
+   */
+  auditAlong(actor: AuditActor, input: AuditInput & { machineId: string }, when: string): SQL {
+    return this.repo.auditAndTouchAfter(when, {
+      workshopId: actor.workshopId,
+      machineId: input.machineId,
+      recordType: input.recordType,
+      recordId: input.recordId ?? null,
+      action: input.action,
+      summary: input.summary,
+      changes: input.changes ?? null,
+      actorId: actor.id,
+      actorName: actor.name,
+    });
+  }
+
+  /** After a write that carried its audit entry (auditAlong): what audit() does once the entry is written. */
+  auditedAlong(actor: AuditActor, input: AuditInput): Promise<void> {
+    return this.changed(actor.workshopId, input);
+  }
+
   private async tellCheckListeners(actor: SessionUser, event: CheckRecordedEvent): Promise<void> {
     for (const listener of this.listeners) {
       try {
