@@ -12,7 +12,6 @@ import { VitePWA } from 'vite-plugin-pwa';
 const FIRST_SCREENS: [string, string][] = [
   ['signed-in', 'src/app/routes/signed-in-layout.tsx'],
   ['machine-file', 'src/app/routes/machine-file.tsx'],
-  ['readiness-board', 'src/features/approvals/components/readiness-board.tsx'],
 ];
 type ChunkingContext = { getModuleInfo(id: string): { importedIds: readonly string[] } | null };
 const screensOfBuild = new WeakMap<ChunkingContext, Map<string, string>>();

@@ -2,6 +2,7 @@ import type { QueryClient } from '@tanstack/react-query';
 import { matchPath } from 'react-router-dom';
 import { meQueryOptions } from '../../lib/session/get-me';
 import { paths } from '../../config/paths';
+import { prefetchMachineFile } from './machine-file';
 
 // Pages open to everyone that never ask who is signed in.
 const PUBLIC_PAGES = [paths.setPassword, paths.forgotPassword, '/verify/:token'];
@@ -16,9 +17,6 @@ export function startEarlyRequests(queryClient: QueryClient, { pathname, search 
   void queryClient.prefetchQuery(meQueryOptions());
   const file = matchPath('/machines/:machineId', pathname);
   if (file?.params.machineId) {
-    const { machineId } = file.params;
-    const tab = new URLSearchParams(search).get('tab');
-    // Its own small chunk: the entry (and so the sign-in page) carries none of the machine file's code.
-    void import('./machine-file').then((m) => m.prefetchMachineFile(queryClient, machineId, tab));
+    prefetchMachineFile(queryClient, file.params.machineId, new URLSearchParams(search).get('tab'));
   }
 }
