@@ -34,6 +34,18 @@ describe('long lists of numbers across the thread boundary', () => {
     expect(Array.isArray(value.leastSquares.residuals)).toBe(true);
   });
 
+  it('names the memory of every array it made, which can be handed over instead of copied, the input untouched', () => {
+    const before = JSON.stringify(value);
+    const made: ArrayBuffer[] = [];
+    const packed = packNumberArrays(value, made);
+    // Both residual lists, the first nested list and the deeper list: the short and mixed ones stay lists.
+    expect(made).toHaveLength(4);
+    const moved = structuredClone(packed, { transfer: made });
+    expect(made.every((memory) => memory.byteLength === 0)).toBe(true);
+    expect(JSON.stringify(unpackNumberArrays(moved))).toBe(before);
+    expect(JSON.stringify(value)).toBe(before);
+  });
+
   it('keeps -0, very small and very large numbers exactly (IEEE 754 doubles both ways)', () => {
     const edge = Array.from({ length: 2048 }, (_, i) => [-0, 5e-324, 1.7976931348623157e308, 0.1 + 0.2][i % 4]);
     const back = unpackNumberArrays(threadCopy(packNumberArrays(edge))) as number[];

@@ -23,14 +23,22 @@ function isNumberList(list: unknown[]): list is number[] {
   return true;
 }
 
-/** The value with every long list of numbers (at any depth) as a Float64Array; the input is not changed. */
-export function packNumberArrays(value: unknown): unknown {
+/**
+ * The value with every long list of numbers (at any depth) as a Float64Array; the input is not
+ * changed. The memory of each array made is added to `made`, when given, so it can be handed to
+ * the other thread rather than copied.
+ */
+export function packNumberArrays(value: unknown, made?: ArrayBuffer[]): unknown {
   if (value === null || typeof value !== 'object') return value;
   if (Array.isArray(value)) {
-    if (value.length >= PACK_FROM && isNumberList(value)) return toFloat64Array(value);
+    if (value.length >= PACK_FROM && isNumberList(value)) {
+      const packed = toFloat64Array(value);
+      made?.push(packed.buffer as ArrayBuffer);
+      return packed;
+    }
     let copy: unknown[] | null = null;
     for (let i = 0; i < value.length; i++) {
-      const packed = packNumberArrays(value[i]);
+      const packed = packNumberArrays(value[i], made);
       if (packed !== value[i]) (copy ??= value.slice())[i] = packed;
     }
     return copy ?? value;
@@ -38,7 +46,7 @@ export function packNumberArrays(value: unknown): unknown {
   if (!isPlainObject(value)) return value;
   let copy: Record<string, unknown> | null = null;
   for (const key of Object.keys(value)) {
-    const packed = packNumberArrays(value[key]);
+    const packed = packNumberArrays(value[key], made);
     if (packed !== value[key]) (copy ??= { ...value })[key] = packed;
   }
   return copy ?? value;
