@@ -1,10 +1,9 @@
-import { memo, useCallback, useMemo, useRef } from 'react';
+import { memo, useCallback, useDeferredValue, useMemo, useRef } from 'react';
 import { Table, TableBody, TableCell, TableContainer, TableHead, TableRow } from '@mui/material';
 import { fromMm, UNIT_LABELS, type LengthUnit } from '../../../lib/units';
 import { useDraft, type StationDraft, type SweepDraftStore } from '../hooks/use-sweep-draft';
 import type { PreviewBody } from '../api/preview-straightness';
 import type { StraightnessResult } from '../types';
-import { readyStations } from '../utils/stations';
 import { StationRow } from './station-row';
 
 /**
@@ -31,14 +30,18 @@ export const StationReadings = memo(function StationReadings({
   onDrop: (index: number) => void;
   onLastEnter: () => void;
 }) {
-  // The rows are read here (not by the form), so a keystroke re-renders this table and its one row.
-  const rows = useDraft(store, (d) => d.stations);
-  const problems = useMemo(() => readyStations(rows).problems, [rows]);
+  // Only the number of stations is read here: each row reads its own station, so a keystroke
+  // re-renders neither this table nor the other rows.
+  const count = useDraft(store, (d) => d.stations.length);
+  // A new fit changes every row's residual: drawn at low priority, so it never holds up a keystroke.
+  const shownFit = useDeferredValue(fit);
   // Residuals back onto the rows they belong to (rows without a reading have none).
-  const byPosition = useMemo(
+  const residuals = useMemo(
     () =>
-      fit ? new Map(fit.body.positions.map((p, k) => [p, fromMm(fit.result.leastSquares.residuals[k], unit)])) : null,
-    [fit, unit],
+      shownFit
+        ? new Map(shownFit.body.positions.map((p, k) => [p, fromMm(shownFit.result.leastSquares.residuals[k], unit)]))
+        : null,
+    [shownFit, unit],
   );
   const inputs = useRef<(HTMLInputElement | null)[]>([]);
   const inputRef = useCallback((i: number, el: HTMLInputElement | null) => {
@@ -74,14 +77,13 @@ export const StationReadings = memo(function StationReadings({
           </TableRow>
         </TableHead>
         <TableBody>
-          {rows.map((r, i) => (
+          {Array.from({ length: count }, (_, i) => (
             <StationRow
               key={i}
+              store={store}
               index={i}
-              row={r}
               unit={unit}
-              problem={problems.get(i)}
-              residual={byPosition ? (byPosition.get(Number(r.position)) ?? null) : undefined}
+              residuals={residuals}
               onRowChange={onRowChange}
               onEnter={next}
               onDrop={onDrop}
