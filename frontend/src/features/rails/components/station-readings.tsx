@@ -1,4 +1,4 @@
-import { memo, useCallback, useDeferredValue, useMemo, useRef } from 'react';
+import { memo, useCallback, useMemo, useRef } from 'react';
 import { Table, TableBody, TableCell, TableContainer, TableHead, TableRow } from '@mui/material';
 import { fromMm, UNIT_LABELS, type LengthUnit } from '../../../lib/units';
 import { useDraft, type StationDraft, type SweepDraftStore } from '../hooks/use-sweep-draft';
@@ -33,15 +33,11 @@ export const StationReadings = memo(function StationReadings({
   // Only the number of stations is read here: each row reads its own station, so a keystroke
   // re-renders neither this table nor the other rows.
   const count = useDraft(store, (d) => d.stations.length);
-  // A new fit changes every row's residual: drawn at low priority, so it never holds up a keystroke.
-  const shownFit = useDeferredValue(fit);
   // Residuals back onto the rows they belong to (rows without a reading have none).
   const residuals = useMemo(
     () =>
-      shownFit
-        ? new Map(shownFit.body.positions.map((p, k) => [p, fromMm(shownFit.result.leastSquares.residuals[k], unit)]))
-        : null,
-    [shownFit, unit],
+      fit ? new Map(fit.body.positions.map((p, k) => [p, fromMm(fit.result.leastSquares.residuals[k], unit)])) : null,
+    [fit, unit],
   );
   const inputs = useRef<(HTMLInputElement | null)[]>([]);
   const inputRef = useCallback((i: number, el: HTMLInputElement | null) => {

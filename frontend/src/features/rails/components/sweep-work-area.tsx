@@ -1,7 +1,8 @@
-import { memo, useDeferredValue, useMemo } from 'react';
+import { memo, useMemo } from 'react';
 import { Alert, Grid } from '@mui/material';
 import type { LengthUnit } from '../../../lib/units';
 import { useStraightnessPreview } from '../api/preview-straightness';
+import { useAfterTypingPause } from '../hooks/use-after-typing-pause';
 import { useSettledBody } from '../hooks/use-settled-body';
 import type { StationDraft, SweepDraftStore } from '../hooks/use-sweep-draft';
 import type { TargetValue } from '../types';
@@ -10,8 +11,8 @@ import { SweepPreview } from './sweep-preview';
 
 /**
  * The readings and the live chart. The fit lives here rather than in the form, so asking for it
- * and its answer re-render these two alone; the chart and the residuals are drawn at low
- * priority, so a keystroke never waits for them.
+ * and its answer re-render these two alone; the chart and the residuals are drawn once typing
+ * pauses and at low priority, so a keystroke never waits for them.
  */
 export const SweepWorkArea = memo(function SweepWorkArea({
   store,
@@ -33,9 +34,13 @@ export const SweepWorkArea = memo(function SweepWorkArea({
   // The fit is asked for once typing pauses (useSettledBody).
   const settled = useSettledBody(store);
   const preview = useStraightnessPreview(settled);
-  // The chart draws the readings the fit was made from, so the line always belongs to its points.
-  const fit = settled ? preview.data : undefined;
-  const shown = useDeferredValue(fit);
+  // Drawn once typing pauses, at low priority; the chart draws the readings the fit was made
+  // from, so the line always belongs to its points.
+  const drawn = useAfterTypingPause(preview.data, store);
+  // Readings that cannot be fitted (fewer than three, or one to fix) take the chart away, also
+  // once typing pauses; the residuals stay beside the rows meanwhile.
+  const fittable = useAfterTypingPause(settled !== null, store);
+  const shown = fittable ? drawn : undefined;
   const chartPoints = useMemo(
     () => (shown ? shown.body.positions.map((position, k) => ({ position, reading: shown.body.readings[k] })) : []),
     [shown],
@@ -48,7 +53,7 @@ export const SweepWorkArea = memo(function SweepWorkArea({
           store={store}
           unit={unit}
           lengthUnit={lengthUnit}
-          fit={preview.data}
+          fit={drawn}
           onRowChange={onRowChange}
           onDrop={onDrop}
           onLastEnter={onLastEnter}
