@@ -16,6 +16,8 @@ declare global {
   interface Window {
     __railwrightCommits: number;
     __railwrightKeyToPaint: number[];
+    /** While set, the count of components each commit rendered is pushed here. */
+    __railwrightRenders?: number[];
   }
 }
 
@@ -23,6 +25,18 @@ const STATIONS = 45;
 
 async function countCommits(page: Page) {
   await page.addInitScript(() => {
+    type Fiber = { flags: number; type: unknown; child: Fiber | null; sibling: Fiber | null; alternate: Fiber | null };
+    // A component ran in a commit when React marked its fiber with PerformedWork (flag 1); a
+    // subtree whose children are still the ones on screen was skipped whole and is not walked.
+    const rendered = (first: Fiber | null): number => {
+      let n = 0;
+      for (let f = first; f; f = f.sibling) {
+        const component = typeof f.type === 'function' || (typeof f.type === 'object' && f.type !== null);
+        if (component && (f.flags & 1) === 1) n++;
+        if (f.child && f.child !== f.alternate?.child) n += rendered(f.child);
+      }
+      return n;
+    };
     window.__railwrightCommits = 0;
     const renderers = new Map<number, unknown>();
     (window as unknown as Record<string, unknown>).__REACT_DEVTOOLS_GLOBAL_HOOK__ = {
@@ -33,8 +47,9 @@ async function countCommits(page: Page) {
         return renderers.size;
       },
       onScheduleFiberRoot: () => {},
-      onCommitFiberRoot: () => {
+      onCommitFiberRoot: (_id: number, root: { current: Fiber }) => {
         window.__railwrightCommits++;
+        window.__railwrightRenders?.push(rendered(root.current));
       },
       onCommitFiberUnmount: () => {},
       onPostCommitFiberRoot: () => {},
@@ -89,6 +104,27 @@ test.describe('typing on a slow tablet', () => {
     const idleCommits = (await page.evaluate(() => window.__railwrightCommits)) - before;
     console.log(`sweep form idle for 2 s with ${STATIONS} readings: ${idleCommits} React commits`);
     expect(idleCommits).toBe(0);
+  });
+
+  test('a keystroke in one reading re-renders that reading, not the table', async ({ page }) => {
+    await fillReadings(page);
+    await page.waitForTimeout(1500);
+    const field = page.getByLabel(`Reading at ${position(20)} mm`);
+    await field.click();
+    await field.press('End');
+    await page.evaluate(() => (window.__railwrightRenders = []));
+    // Quicker than the fit waits for, so only the keystrokes themselves commit.
+    for (const key of ['5', 'Backspace', '5']) await page.keyboard.press(key);
+    const renders = await page.evaluate(() => {
+      const counts = window.__railwrightRenders ?? [];
+      window.__railwrightRenders = undefined;
+      return counts;
+    });
+    console.log(`components rendered per commit while typing one reading: ${renders.join(', ')}`);
+    expect(renders.length, 'each keystroke committed').toBeGreaterThanOrEqual(3);
+    // One station's field is a few dozen components; the table alone would be more than one per station.
+    expect(Math.max(...renders)).toBeLessThan(STATIONS);
+    expect(Math.min(...renders), 'the counter saw the field render').toBeGreaterThan(0);
   });
 
   test('keystroke-to-paint at CPU ×4 with 45 readings (printed)', async ({ page }) => {

@@ -4,7 +4,6 @@ import { fromMm, UNIT_LABELS, type LengthUnit } from '../../../lib/units';
 import { useDraft, type StationDraft, type SweepDraftStore } from '../hooks/use-sweep-draft';
 import type { PreviewBody } from '../api/preview-straightness';
 import type { StraightnessResult } from '../types';
-import { readyStations } from '../utils/stations';
 import { StationRow } from './station-row';
 
 /**
@@ -31,11 +30,11 @@ export const StationReadings = memo(function StationReadings({
   onDrop: (index: number) => void;
   onLastEnter: () => void;
 }) {
-  // The rows are read here (not by the form), so a keystroke re-renders this table and its one row.
-  const rows = useDraft(store, (d) => d.stations);
-  const problems = useMemo(() => readyStations(rows).problems, [rows]);
+  // Only the number of stations is read here: each row reads its own station, so a keystroke
+  // re-renders neither this table nor the other rows.
+  const count = useDraft(store, (d) => d.stations.length);
   // Residuals back onto the rows they belong to (rows without a reading have none).
-  const byPosition = useMemo(
+  const residuals = useMemo(
     () =>
       fit ? new Map(fit.body.positions.map((p, k) => [p, fromMm(fit.result.leastSquares.residuals[k], unit)])) : null,
     [fit, unit],
@@ -74,14 +73,13 @@ export const StationReadings = memo(function StationReadings({
           </TableRow>
         </TableHead>
         <TableBody>
-          {rows.map((r, i) => (
+          {Array.from({ length: count }, (_, i) => (
             <StationRow
               key={i}
+              store={store}
               index={i}
-              row={r}
               unit={unit}
-              problem={problems.get(i)}
-              residual={byPosition ? (byPosition.get(Number(r.position)) ?? null) : undefined}
+              residuals={residuals}
               onRowChange={onRowChange}
               onEnter={next}
               onDrop={onDrop}

@@ -1,4 +1,4 @@
-import { useCallback, useDeferredValue, useMemo, useRef, useState } from 'react';
+import { useCallback, useRef, useState } from 'react';
 import { useShallow } from 'zustand/react/shallow';
 import {
   Alert,
@@ -23,16 +23,13 @@ import { UnitFamilySelect } from '../../../components/form/unit-select';
 import { useBoltTorques } from '../api/get-bolt-torques';
 import { sweepsPath, useRecordSweep } from '../api/record-sweep';
 import { useWaitingEntries } from '../../../lib/offline/use-waiting-entries';
-import { useStraightnessPreview } from '../api/preview-straightness';
 import { newDraft, useDraft, useSweepDraft, type StationDraft, type SweepDraft } from '../hooks/use-sweep-draft';
-import { useSettledBody } from '../hooks/use-settled-body';
 import { FACE_LABELS, type Rail, type Sweep, type SweepFace, type TargetValue } from '../types';
 import { readyStations, stationsAtHoles, stationsByStep } from '../utils/stations';
 import { CsvImportDialog } from './csv-import-dialog';
-import { StationReadings } from './station-readings';
 import { SweepDetailsFields } from './sweep-details-fields';
-import { SweepPreview } from './sweep-preview';
 import { SweepSaveBar } from './sweep-save-bar';
+import { SweepWorkArea } from './sweep-work-area';
 
 const num = (s: string) => (s.trim() === '' ? undefined : Number(s.replace(',', '.')));
 
@@ -56,7 +53,7 @@ export function SweepEntry({
     }),
   );
   // Only the form's own settings are read here; the stations are read by the rows, the count and
-  // the fit (each subscribes to what it shows), so a keystroke in a reading re-renders that row only.
+  // the fit (each subscribes to what it shows), so a keystroke in a reading re-renders that field only.
   const unit = useDraft(store, (d) => d.unit);
   const lengthUnit = useDraft(store, (d) => d.lengthUnit);
   const face = useDraft(store, (d) => d.face);
@@ -124,19 +121,6 @@ export function SweepEntry({
       };
     },
   });
-
-  // The fit is asked for once typing pauses; the chart draws the same settled readings, at low
-  // priority (deferred), so a keystroke never waits for the chart.
-  const settled = useSettledBody(store);
-  const preview = useStraightnessPreview(settled);
-  const result = preview.data?.result ?? null;
-  const chartPoints = useDeferredValue(
-    useMemo(
-      () => (settled ? settled.positions.map((position, k) => ({ position, reading: settled.readings[k] })) : []),
-      [settled],
-    ),
-  );
-  const chartResult = useDeferredValue(settled ? result : null);
 
   const layStations = (rows: SweepDraft['stations']) => {
     const hasReadings = store.getState().stations.some((s) => s.reading.trim() !== '');
@@ -259,34 +243,15 @@ export function SweepEntry({
       </Stack>
       <IndicatorPanel indicator={indicator} nextLabel="the next station without a reading" />
       <Grid container spacing={2.5}>
-        {/* On a narrow screen the chart comes first, so it stays in view above the readings being typed. */}
-        <Grid size={{ xs: 12, md: 6 }} sx={{ order: { xs: 2, md: 1 } }}>
-          <StationReadings
-            store={store}
-            unit={unit}
-            lengthUnit={lengthUnit}
-            fit={preview.data}
-            onRowChange={setRow}
-            onDrop={dropRow}
-            onLastEnter={focusSave}
-          />
-        </Grid>
-        <Grid size={{ xs: 12, md: 6 }} sx={{ order: { xs: 1, md: 2 } }}>
-          <SweepPreview
-            points={chartPoints}
-            unit={settled?.readingUnit ?? unit}
-            lengthUnit={settled?.lengthUnit ?? lengthUnit}
-            result={chartResult}
-            target={target}
-            label="Live straightness chart"
-            pending={preview.isFetching}
-          />
-          {preview.error && (
-            <Alert severity="error" sx={{ mt: 1 }}>
-              {preview.error.message}
-            </Alert>
-          )}
-        </Grid>
+        <SweepWorkArea
+          store={store}
+          unit={unit}
+          lengthUnit={lengthUnit}
+          target={target}
+          onRowChange={setRow}
+          onDrop={dropRow}
+          onLastEnter={focusSave}
+        />
         <Grid size={12} sx={{ order: 3 }}>
           <SweepDetailsFields value={details} unitLabel={UNIT_LABELS[unit]} torques={torques.data} onChange={patch} />
         </Grid>

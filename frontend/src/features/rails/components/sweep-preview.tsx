@@ -6,19 +6,7 @@ import type { StraightnessResult, TargetValue } from '../types';
 import { isLengthUnit, showInTargetUnit, showLength, showTarget, targetMm } from '../utils/display';
 import { CheckStatusChip } from './check-status-chip';
 
-/**
- * Readings with their fitted line and band, in the entry unit, and the result against the target.
- * Memoised: the chart is the costliest thing on the entry form and redraws only when its data does.
- */
-export const SweepPreview = memo(function SweepPreview({
-  points,
-  unit,
-  lengthUnit = 'mm',
-  result,
-  target,
-  label,
-  pending,
-}: {
+type PreviewProps = {
   /** Positions in `lengthUnit`, readings in `unit`. */
   points: { position: number; reading: number }[];
   unit: LengthUnit;
@@ -27,14 +15,45 @@ export const SweepPreview = memo(function SweepPreview({
   target: TargetValue | null;
   label: string;
   pending?: boolean;
-}) {
-  if (points.length < 3 || !result) {
+};
+
+/**
+ * Readings with their fitted line and band, in the entry unit, and the result against the target.
+ * Memoised: the chart is the costliest thing on the entry form and redraws only when its data
+ * does (a fit being asked for and answered changes the line under it, not the chart).
+ */
+export const SweepPreview = memo(function SweepPreview({ pending, ...fit }: PreviewProps) {
+  if (fit.points.length < 3 || !fit.result) {
     return (
       <Box sx={{ p: 3, border: '1px dashed', borderColor: 'divider', borderRadius: 1, color: 'text.secondary' }}>
         {pending ? 'Fitting…' : 'Type at least three readings: the chart and the straightness appear as you go.'}
       </Box>
     );
   }
+  return (
+    <Stack spacing={1.5}>
+      <FitFigures {...fit} result={fit.result} />
+      {/* Always takes its line, so the readings below (on a phone) do not jump while a fit runs. */}
+      <Typography
+        variant="body2"
+        color="text.secondary"
+        role="status"
+        sx={{ minHeight: '1.5em', visibility: pending ? 'visible' : 'hidden' }}
+      >
+        Updating the fit…
+      </Typography>
+    </Stack>
+  );
+});
+
+const FitFigures = memo(function FitFigures({
+  points,
+  unit,
+  lengthUnit = 'mm',
+  result,
+  target,
+  label,
+}: Omit<PreviewProps, 'pending' | 'result'> & { result: StraightnessResult }) {
   const u = (mm: number) => fromMm(mm, unit);
   const ls = result.leastSquares;
   const mz = result.minimumZone;
@@ -46,7 +65,7 @@ export const SweepPreview = memo(function SweepPreview({
   const pointsMm =
     lengthUnit === 'mm' ? points : points.map((p) => ({ position: toMm(p.position, lengthUnit), reading: p.reading }));
   return (
-    <Stack spacing={1.5}>
+    <>
       <StraightnessChart
         points={pointsMm}
         leastSquares={{ slope: u(ls.slope), intercept: u(ls.intercept) }}
@@ -94,15 +113,6 @@ export const SweepPreview = memo(function SweepPreview({
         )}
         {status && <CheckStatusChip status={status} />}
       </Stack>
-      {/* Always takes its line, so the readings below (on a phone) do not jump while a fit runs. */}
-      <Typography
-        variant="body2"
-        color="text.secondary"
-        role="status"
-        sx={{ minHeight: '1.5em', visibility: pending ? 'visible' : 'hidden' }}
-      >
-        Updating the fit…
-      </Typography>
-    </Stack>
+    </>
   );
 });

@@ -1,11 +1,12 @@
-import { memo, useMemo, type RefObject } from 'react';
+import { memo, type RefObject } from 'react';
+import { useShallow } from 'zustand/react/shallow';
 import { Button, Typography } from '@mui/material';
-import { useDraft, type SweepDraftStore } from '../hooks/use-sweep-draft';
-import { readyStations } from '../utils/stations';
+import { useDraft, type SweepDraft, type SweepDraftStore } from '../hooks/use-sweep-draft';
+import { readyStationsOf } from '../utils/stations';
 
 /**
- * Save and the count of readings: the one part of the form besides the row being typed that
- * changes with each reading, so it subscribes to the stations by itself.
+ * Save and the count of readings. It reads the counts alone, so correcting a reading (the count
+ * stays) re-renders nothing here.
  */
 export const SweepSaveBar = memo(function SweepSaveBar({
   store,
@@ -16,20 +17,23 @@ export const SweepSaveBar = memo(function SweepSaveBar({
   saveRef: RefObject<HTMLButtonElement | null>;
   onSave: () => void;
 }) {
-  const stations = useDraft(store, (d) => d.stations);
-  const ready = useMemo(() => readyStations(stations), [stations]);
-  const canSave = ready.stations.length >= 3 && ready.problems.size === 0;
+  const { readings, blank, toFix } = useDraft(
+    store,
+    useShallow((d: SweepDraft) => {
+      const ready = readyStationsOf(d.stations);
+      return { readings: ready.stations.length, blank: ready.blank, toFix: ready.problems.size };
+    }),
+  );
+  const canSave = readings >= 3 && toFix === 0;
   return (
     <>
       <Button ref={saveRef} variant="contained" size="large" onClick={onSave} disabled={!canSave}>
         Save sweep
       </Button>
       <Typography color="text.secondary">
-        {ready.stations.length} reading{ready.stations.length === 1 ? '' : 's'}
-        {ready.blank
-          ? ` · ${ready.blank} station${ready.blank === 1 ? '' : 's'} without a reading will be left out`
-          : ''}
-        {ready.problems.size ? ` · ${ready.problems.size} to fix` : ''}
+        {readings} reading{readings === 1 ? '' : 's'}
+        {blank ? ` · ${blank} station${blank === 1 ? '' : 's'} without a reading will be left out` : ''}
+        {toFix ? ` · ${toFix} to fix` : ''}
       </Typography>
     </>
   );

@@ -1,6 +1,6 @@
-import { useEffect, useState } from 'react';
+import { startTransition, useEffect, useState } from 'react';
 import type { PreviewBody } from '../api/preview-straightness';
-import { readyStations } from '../utils/stations';
+import { readyStationsOf } from '../utils/stations';
 import type { SweepDraft, SweepDraftStore } from './use-sweep-draft';
 
 /** How long typing must pause before the readings are fitted. */
@@ -8,7 +8,7 @@ export const SETTLE_MS = 400;
 
 /** What the fit is asked for: three or more readings and nothing to fix, else nothing. */
 export function previewBodyOf(d: SweepDraft): PreviewBody | null {
-  const ready = readyStations(d.stations);
+  const ready = readyStationsOf(d.stations);
   if (ready.stations.length < 3 || ready.problems.size > 0) return null;
   return {
     positions: ready.stations.map((s) => s.position),
@@ -33,7 +33,8 @@ export function useSettledBody(store: SweepDraftStore): PreviewBody | null {
       const json = JSON.stringify(body);
       if (json === last) return;
       last = json;
-      setSettled({ body, json });
+      // At low priority: the fit it asks for must not hold up the next keystroke.
+      startTransition(() => setSettled({ body, json }));
     };
     const unsubscribe = store.subscribe(() => {
       clearTimeout(timer);

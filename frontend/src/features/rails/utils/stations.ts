@@ -50,3 +50,18 @@ export function readyStations(rows: StationDraft[]): ReadyStations {
   });
   return { stations, problems, blank };
 }
+
+const readyCache = new WeakMap<StationDraft[], ReadyStations>();
+
+/**
+ * readyStations, worked out once per list of rows: the rows, the count and the fit all ask after
+ * each keystroke, and a draft's stations are a new array whenever any of them changes.
+ */
+export function readyStationsOf(rows: StationDraft[]): ReadyStations {
+  let ready = readyCache.get(rows);
+  if (!ready) {
+    ready = readyStations(rows);
+    readyCache.set(rows, ready);
+  }
+  return ready;
+}
