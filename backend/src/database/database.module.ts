@@ -19,7 +19,14 @@ import { SessionChangesListener } from './session-changes.listener.js';
       provide: PG_POOL,
       inject: [ConfigService],
       useFactory: (config: ConfigService<RailwrightConfig, true>) => {
-        const pool = new pg.Pool({ connectionString: config.get('app', { infer: true }).databaseUrl, max: 10 });
+        // Connections are kept five minutes when idle, not node-postgres's ten seconds: a new one
+        // costs a connection set-up, and its first statements are planned again with the
+        // database process's caches cold (tens of ms on the first request after a pause).
+        const pool = new pg.Pool({
+          connectionString: config.get('app', { infer: true }).databaseUrl,
+          max: 10,
+          idleTimeoutMillis: 5 * 60_000,
+        });
         // An idle connection dropped by the server must not take the process down; the pool reconnects.
         pool.on('error', (err) => console.error(`Database connection lost: ${err.message}`));
         pool.on('connect', (client) => prepareRepeatedStatements(client));
