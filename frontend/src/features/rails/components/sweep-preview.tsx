@@ -26,7 +26,9 @@ export const SweepPreview = memo(function SweepPreview({ pending, ...fit }: Prev
   if (fit.points.length < 3 || !fit.result) {
     return (
       <Box sx={{ p: 3, border: '1px dashed', borderColor: 'divider', borderRadius: 1, color: 'text.secondary' }}>
-        {pending ? 'Fitting…' : 'Type at least three readings: the chart and the straightness appear as you go.'}
+        {pending
+          ? 'Fitting… the chart is drawn when you pause typing.'
+          : 'Type at least three readings: the chart and the straightness appear as you go.'}
       </Box>
     );
   }

@@ -67,7 +67,8 @@ export const SweepWorkArea = memo(function SweepWorkArea({
           result={shown?.result ?? null}
           target={target}
           label="Live straightness chart"
-          pending={preview.isFetching}
+          // Readings enough for a fit whose chart is not drawn yet (asked for, or waiting for a pause).
+          pending={preview.isFetching || (settled !== null && !shown)}
         />
         {preview.error && (
           <Alert severity="error" sx={{ mt: 1 }}>
