@@ -125,6 +125,29 @@ test.describe('offline at the machine', () => {
     await expect(page.getByText(/typed on this device by/)).toHaveCount(0);
   });
 
+  test('a machine file reloaded without a connection opens on its readiness as last seen', async ({
+    page,
+    context,
+  }) => {
+    const machineId = await newMachine(page, `Kept board ${Date.now()}`);
+    await signInAs(page, DEMO.builder);
+    await page.goto(`/machines/${machineId}`);
+    const counts = page.getByText(/within target · \d+ waived/);
+    await expect(counts).toBeVisible();
+    const seen = await counts.textContent();
+    await page.waitForFunction(
+      async () => !!(await navigator.serviceWorker.ready) && !!navigator.serviceWorker.controller,
+    );
+    // Kept on the device a moment after it was drawn.
+    await page.waitForTimeout(1500);
+    await context.setOffline(true);
+    await page.reload();
+    await expect(page.getByRole('heading', { name: /Kept board/ })).toBeVisible();
+    await expect(page.getByText(seen!)).toBeVisible();
+    await expect(page.getByText('Gathering the checks…')).toHaveCount(0);
+    await context.setOffline(false);
+  });
+
   test('signing out needs the connection: without one the person stays signed in and is told so', async ({
     page,
     context,

@@ -14,6 +14,9 @@ const PUBLIC_PAGES = [paths.setPassword, paths.forgotPassword, '/verify/:token']
  */
 export function startEarlyRequests(queryClient: QueryClient, { pathname, search }: Location) {
   if (PUBLIC_PAGES.some((p) => matchPath(p, pathname))) return;
+  // Without a connection the page opens from what the device kept: a request made now would
+  // only wait, and would stand in the cache as an empty answer ahead of the kept one.
+  if (!navigator.onLine) return;
   void queryClient.prefetchQuery(meQueryOptions());
   const file = matchPath('/machines/:machineId', pathname);
   if (file?.params.machineId) {
