@@ -64,17 +64,7 @@ export class RecordsService {
   constructor(private readonly repo: RecordsRepository) {}
 
   async audit(actor: AuditActor, input: AuditInput): Promise<void> {
-    const values = {
-      workshopId: actor.workshopId,
-      machineId: input.machineId ?? null,
-      recordType: input.recordType,
-      recordId: input.recordId ?? null,
-      action: input.action,
-      summary: input.summary,
-      changes: input.changes ?? null,
-      actorId: actor.id,
-      actorName: actor.name,
-    };
+    const values = auditValues(actor, input);
     if (input.machineId) await this.repo.insertAuditAndTouch({ ...values, machineId: input.machineId });
     else await this.repo.insertAudit(values);
     await this.changed(actor.workshopId, input);
@@ -117,14 +107,8 @@ export class RecordsService {
   ): Promise<string | null> {
     const entry = recordedEntry({ ...event, recordId: null }, summary);
     const recordId = await this.repo.insertWithAuditAndTouch(insert, {
-      workshopId: actor.workshopId,
+      ...auditValues(actor, entry),
       machineId: event.machineId,
-      recordType: entry.recordType,
-      action: entry.action,
-      summary: entry.summary,
-      changes: entry.changes,
-      actorId: actor.id,
-      actorName: actor.name,
     });
     if (!recordId) return null;
     await this.changed(actor.workshopId, { ...entry, recordId });
@@ -138,17 +122,7 @@ export class RecordsService {
    * row. Call `auditedAlong` once that statement has written.
    */
   auditAlong(actor: AuditActor, input: AuditInput & { machineId: string }, when: string): SQL {
-    return this.repo.auditAndTouchAfter(when, {
-      workshopId: actor.workshopId,
-      machineId: input.machineId,
-      recordType: input.recordType,
-      recordId: input.recordId ?? null,
-      action: input.action,
-      summary: input.summary,
-      changes: input.changes ?? null,
-      actorId: actor.id,
-      actorName: actor.name,
-    });
+    return this.repo.auditAndTouchAfter(when, { ...auditValues(actor, input), machineId: input.machineId });
   }
 
   /** After a write that carried its audit entry (auditAlong): what audit() does once the entry is written. */
@@ -236,5 +210,20 @@ function recordedEntry(
     summary,
     changes: { status: event.status },
     checkKind: event.kind,
+  };
+}
+
+/** The audit row of a change made by `actor`. */
+function auditValues(actor: AuditActor, input: AuditInput) {
+  return {
+    workshopId: actor.workshopId,
+    machineId: input.machineId ?? null,
+    recordType: input.recordType,
+    recordId: input.recordId ?? null,
+    action: input.action,
+    summary: input.summary,
+    changes: input.changes ?? null,
+    actorId: actor.id,
+    actorName: actor.name,
   };
 }
