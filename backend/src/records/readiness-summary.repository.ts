@@ -121,11 +121,18 @@ export class ReadinessSummaryRepository {
       .where(or(isNull(machineReadiness.machineId), ne(machineReadiness.version, version)));
   }
 
+  /** Writes a machine's summary; an existing row takes the new values from the row offered (`excluded`), sent once. */
   async upsert(values: typeof machineReadiness.$inferInsert): Promise<void> {
     const { machineId: _m, ...rest } = values;
+    const set = Object.fromEntries(
+      Object.keys(rest).map((key) => {
+        const column = machineReadiness[key as keyof typeof rest];
+        return [key, sql`excluded.${sql.identifier(column.name)}`];
+      }),
+    );
     await this.db
       .insert(machineReadiness)
       .values(values)
-      .onConflictDoUpdate({ target: machineReadiness.machineId, set: { ...rest, refreshedAt: new Date() } });
+      .onConflictDoUpdate({ target: machineReadiness.machineId, set: { ...set, refreshedAt: sql`now()` } });
   }
 }
