@@ -138,8 +138,26 @@ test.describe('offline at the machine', () => {
     await page.waitForFunction(
       async () => !!(await navigator.serviceWorker.ready) && !!navigator.serviceWorker.controller,
     );
-    // Kept on the device a moment after it was drawn.
-    await page.waitForTimeout(1500);
+    // The pages' answers are kept on the device (IndexedDB) at most once a second: wait until the
+    // machine and its readiness are in what was kept.
+    await page.waitForFunction(async (id) => {
+      const db = await new Promise<IDBDatabase>((resolve, reject) => {
+        const open = indexedDB.open('keyval-store');
+        open.onsuccess = () => resolve(open.result);
+        open.onerror = () => reject(open.error);
+      });
+      const kept = await new Promise<{ clientState?: { queries?: { queryKey: unknown[] }[] } } | undefined>(
+        (resolve) => {
+          const read = db.transaction('keyval').objectStore('keyval').get('railwright.pages.v1');
+          read.onsuccess = () => resolve(read.result);
+          read.onerror = () => resolve(undefined);
+        },
+      );
+      db.close();
+      const keys = (kept?.clientState?.queries ?? []).map((q) => JSON.stringify(q.queryKey));
+      const ofMachine = keys.filter((k) => k.includes(id));
+      return ofMachine.some((k) => k.startsWith('["machines"')) && ofMachine.some((k) => k.includes('readiness'));
+    }, machineId);
     await context.setOffline(true);
     await page.reload();
     await expect(page.getByRole('heading', { name: /Kept board/ })).toBeVisible();

@@ -3,8 +3,7 @@ import { CssBaseline, ThemeProvider } from '@mui/material';
 import { useIsRestoring, type Query } from '@tanstack/react-query';
 import { PersistQueryClientProvider, type PersistQueryClientOptions } from '@tanstack/react-query-persist-client';
 import { queryClient } from '../lib/query-client';
-import { PERSIST_MAX_AGE_MS } from '../lib/offline/persister';
-import { keptAnswersPersister } from './prefetch/kept-answers';
+import { persister, PERSIST_MAX_AGE_MS } from '../lib/offline/persister';
 import { COMMAND_KEY, registerCommands, resumeKeptCommands } from '../lib/offline/commands';
 import { trackSessionOwner } from '../lib/offline/track-session-owner';
 import { isKeptQuery } from '../lib/offline/kept-queries';
@@ -33,9 +32,9 @@ const dehydrateOptions: PersistQueryClientOptions['dehydrateOptions'] = {
 };
 
 /**
- * Pages are drawn once what was kept is read back (started with the app, prefetch/kept-answers.ts):
- * the end of the reading re-renders everything that uses data, so a page drawn meanwhile is drawn
- * twice, and its first drawing is thrown away unfinished.
+ * Pages are drawn once what was kept is read back: the end of the reading re-renders everything
+ * that uses data, so a page drawn meanwhile is drawn twice, and its first drawing is thrown away
+ * unfinished.
  */
 function WhenKeptAnswersRead({ children }: { children: ReactNode }) {
   return useIsRestoring() ? null : children;
@@ -52,7 +51,7 @@ export function AppProviders({ children }: { children: ReactNode }) {
       <PersistQueryClientProvider
         client={queryClient}
         persistOptions={{
-          persister: keptAnswersPersister,
+          persister,
           maxAge: PERSIST_MAX_AGE_MS,
           buster: KEPT_FORMAT,
           dehydrateOptions,
