@@ -1,40 +1,8 @@
-import path from 'node:path';
 import { constants } from 'node:zlib';
 import { defineConfig } from 'vite';
 import react from '@vitejs/plugin-react';
 import { compression, defineAlgorithm } from 'vite-plugin-compression2';
 import { VitePWA } from 'vite-plugin-pwa';
-
-// The first screens' code, each in one file instead of dozens of small ones: a browser asks a
-// server for six files at a time, so 50 small files cost several round trips where 3 cost one.
-// The entry's code (all the sign-in page loads) stays one file of its own; every other module
-// goes to the first screen below that reaches it by static imports (none: split as usual).
-const FIRST_SCREENS: [string, string][] = [
-  ['signed-in', 'src/app/routes/signed-in-layout.tsx'],
-  ['machine-file', 'src/app/routes/machine-file.tsx'],
-];
-type ChunkingContext = { getModuleInfo(id: string): { importedIds: readonly string[] } | null };
-const screensOfBuild = new WeakMap<ChunkingContext, Map<string, string>>();
-function firstScreenOf(id: string, ctx: ChunkingContext): string | null {
-  let screens = screensOfBuild.get(ctx);
-  if (!screens) {
-    screens = new Map();
-    for (const [name, root] of FIRST_SCREENS) {
-      const todo = [path.join(import.meta.dirname, root)];
-      for (let m = todo.pop(); m !== undefined; m = todo.pop()) {
-        if (screens.has(m)) continue;
-        screens.set(m, name);
-        todo.push(...(ctx.getModuleInfo(m)?.importedIds ?? []));
-      }
-    }
-    screensOfBuild.set(ctx, screens);
-  }
-  return screens.get(id) ?? null;
-}
-const CHUNK_GROUPS = [
-  { name: 'entry', tags: ['$initial' as const], priority: 1, includeDependenciesRecursively: false },
-  { name: firstScreenOf, includeDependenciesRecursively: false },
-];
 
 export default defineConfig({
   plugins: [
@@ -90,6 +58,5 @@ export default defineConfig({
     manifest: true,
     chunkSizeWarningLimit: 600,
     modulePreload: { polyfill: false },
-    rolldownOptions: { output: { codeSplitting: { groups: CHUNK_GROUPS } } },
   },
 });

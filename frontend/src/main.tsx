@@ -7,8 +7,6 @@ import '@fontsource/roboto/latin-500.css';
 import '@fontsource/roboto/latin-ext-500.css';
 import '@fontsource/roboto/latin-700.css';
 import '@fontsource/roboto/latin-ext-700.css';
-// The opened page's first requests go out before anything else is made (see the file).
-import './app/prefetch/open-page';
 import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
 import { AppProviders } from './app/providers';

@@ -11,12 +11,12 @@ import { ErrorState } from '../../components/states/error-state';
 import { useMachine } from '../../features/machines/api/get-machine';
 import { MachineStateChip } from '../../features/machines/components/machine-state-chip';
 import { KIND_LABELS, type Machine } from '../../features/machines/types';
-import { ReadinessBoard } from '../../features/approvals/components/readiness-board';
-import { prefetchMachineFile } from '../prefetch/machine-file';
+import { readinessQueryOptions } from '../../features/approvals/api/get-readiness';
 
-// The file opens on readiness: its board comes with the page, drawn with the header as soon as
-// its data is here (a lazy board would wait a turn more, then be revealed on React's next beat).
-// Each other tab's code loads when the tab opens: the charts, grids and forms stay out.
+// Each tab's code loads when the tab opens: the file opens on readiness without the charts,
+// grids and forms of the other tabs.
+const loadReadinessBoard = () => import('../../features/approvals/components/readiness-board');
+const ReadinessBoard = lazy(() => loadReadinessBoard().then((m) => ({ default: m.ReadinessBoard })));
 const MachineOverview = lazy(() =>
   import('../../features/machines/components/machine-overview').then((m) => ({ default: m.MachineOverview })),
 );
@@ -67,10 +67,11 @@ export default function MachineFileRoute() {
   const machine = useMachine(machineId);
   const tab = SECTIONS.some((s) => s.id === params.get('tab')) ? params.get('tab')! : SECTIONS[0].id;
   const queryClient = useQueryClient();
-  // The file opens on readiness: fetch its data alongside the machine, not after it (already under
-  // way when the app opened on this page).
+  // The file opens on readiness: fetch its code and its data alongside the machine, not after it.
   useEffect(() => {
-    if (machineId) prefetchMachineFile(queryClient, machineId, tab);
+    if (tab !== 'readiness' || !machineId) return;
+    void loadReadinessBoard();
+    void queryClient.prefetchQuery(readinessQueryOptions(machineId));
   }, [tab, machineId, queryClient]);
 
   if (machine.isPending) return <LoadingState label="Opening the machine file…" />;
