@@ -58,24 +58,6 @@ export function readManifest(dist: string): Manifest {
   return JSON.parse(readFileSync(file, 'utf8')) as Manifest;
 }
 
-/**
- * The first screens' modules are built into one file per screen (frontend/vite.config.ts,
- * FIRST_SCREENS), which the manifest names after the screen, not after the module.
- */
-const FIRST_SCREEN_OF: Record<string, string> = {
-  'src/app/routes/signed-in-layout.tsx': 'signed-in',
-  'src/app/routes/machine-file.tsx': 'machine-file',
-  'src/features/approvals/components/readiness-board.tsx': 'machine-file',
-};
-
-/** The manifest key of a source module: its own, or its first screen's file. */
-function keyOf(manifest: Manifest, source: string): string {
-  if (manifest[source]) return source;
-  const screen = FIRST_SCREEN_OF[source];
-  const key = screen && Object.keys(manifest).find((k) => k.startsWith(`_${screen}-`) && k.endsWith('.js'));
-  return key || source;
-}
-
 /** Every JS and CSS file a set of manifest keys needs, following static imports only. */
 export function filesFor(manifest: Manifest, keys: string[]): Set<string> {
   const files = new Set<string>();
@@ -89,7 +71,7 @@ export function filesFor(manifest: Manifest, keys: string[]): Set<string> {
     chunk.css?.forEach((c) => files.add(c));
     chunk.imports?.forEach(visit);
   };
-  keys.map((key) => keyOf(manifest, key)).forEach(visit);
+  keys.forEach(visit);
   return files;
 }
 
