@@ -3,7 +3,7 @@ import { IconButton, InputAdornment, TableCell, TableRow, TextField, Tooltip } f
 import DeleteOutline from '@mui/icons-material/DeleteOutlined';
 import { UNIT_LABELS, type LengthUnit } from '../../../lib/units';
 import { useDraft, type StationDraft, type SweepDraftStore } from '../hooks/use-sweep-draft';
-import { readyStationsOf } from '../utils/stations';
+import { readyStations } from '../utils/stations';
 
 const DECIMALS: Record<LengthUnit, number> = { um: 1, mm: 4, in: 5, thou: 2 };
 
@@ -117,7 +117,7 @@ const ReadingField = memo(function ReadingField({
   inputRef,
 }: Omit<StationRowProps, 'residuals'> & { position: string }) {
   const reading = useDraft(store, (d) => d.stations[i]?.reading ?? '');
-  const problem = useDraft(store, (d) => readyStationsOf(d.stations).problems.get(i));
+  const problem = useDraft(store, (d) => readyStations(d.stations).problems.get(i));
   const ref = useCallback((el: HTMLInputElement | null) => inputRef(i, el), [inputRef, i]);
   return (
     <FieldForm>

@@ -2,7 +2,7 @@ import { memo, type RefObject } from 'react';
 import { useShallow } from 'zustand/react/shallow';
 import { Button, Typography } from '@mui/material';
 import { useDraft, type SweepDraft, type SweepDraftStore } from '../hooks/use-sweep-draft';
-import { readyStationsOf } from '../utils/stations';
+import { readyStations } from '../utils/stations';
 
 /**
  * Save and the count of readings. It reads the counts alone, so correcting a reading (the count
@@ -20,7 +20,7 @@ export const SweepSaveBar = memo(function SweepSaveBar({
   const { readings, blank, toFix } = useDraft(
     store,
     useShallow((d: SweepDraft) => {
-      const ready = readyStationsOf(d.stations);
+      const ready = readyStations(d.stations);
       return { readings: ready.stations.length, blank: ready.blank, toFix: ready.problems.size };
     }),
   );

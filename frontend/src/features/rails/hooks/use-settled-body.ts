@@ -1,6 +1,6 @@
 import { startTransition, useEffect, useState } from 'react';
 import type { PreviewBody } from '../api/preview-straightness';
-import { readyStationsOf } from '../utils/stations';
+import { readyStations } from '../utils/stations';
 import type { SweepDraft, SweepDraftStore } from './use-sweep-draft';
 
 /** How long typing must pause before the readings are fitted. */
@@ -8,7 +8,7 @@ export const SETTLE_MS = 400;
 
 /** What the fit is asked for: three or more readings and nothing to fix, else nothing. */
 export function previewBodyOf(d: SweepDraft): PreviewBody | null {
-  const ready = readyStationsOf(d.stations);
+  const ready = readyStations(d.stations);
   if (ready.stations.length < 3 || ready.problems.size > 0) return null;
   return {
     positions: ready.stations.map((s) => s.position),

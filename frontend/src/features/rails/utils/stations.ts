@@ -27,8 +27,7 @@ export interface ReadyStations {
   blank: number;
 }
 
-/** The stations that can be sent: both numbers, no repeated position; blank readings are left out. */
-export function readyStations(rows: StationDraft[]): ReadyStations {
+function countReady(rows: StationDraft[]): ReadyStations {
   const problems = new Map<number, string>();
   const seen = new Map<number, number>();
   const stations: { position: number; reading: number }[] = [];
@@ -54,13 +53,14 @@ export function readyStations(rows: StationDraft[]): ReadyStations {
 const readyCache = new WeakMap<StationDraft[], ReadyStations>();
 
 /**
- * readyStations, worked out once per list of rows: the rows, the count and the fit all ask after
- * each keystroke, and a draft's stations are a new array whenever any of them changes.
+ * The stations that can be sent: both numbers, no repeated position; blank readings are left out.
+ * Worked out once per list of rows: the fields, the count and the fit all ask after each
+ * keystroke, and a draft's stations are a new array whenever any of them changes.
  */
-export function readyStationsOf(rows: StationDraft[]): ReadyStations {
+export function readyStations(rows: StationDraft[]): ReadyStations {
   let ready = readyCache.get(rows);
   if (!ready) {
-    ready = readyStations(rows);
+    ready = countReady(rows);
     readyCache.set(rows, ready);
   }
   return ready;
