@@ -7,11 +7,13 @@ import type pg from 'pg';
  */
 export const MAX_PREPARED_PER_CONNECTION = 400;
 
-// One name per statement text for the whole process, so a name never means two texts.
+// One name per statement text for the whole process, so a name never means two texts; bounded
+// like each connection's own list, so text that varies cannot grow it without end.
+const MAX_NAMES = 4_000;
 const names = new Map<string, string>();
-const nameOf = (text: string) => {
+const nameOf = (text: string): string | undefined => {
   let name = names.get(text);
-  if (!name) names.set(text, (name = `rw${names.size + 1}`));
+  if (!name && names.size < MAX_NAMES) names.set(text, (name = `rw${names.size + 1}`));
   return name;
 };
 
@@ -32,7 +34,7 @@ export function prepareRepeatedStatements(client: pg.Client, most = MAX_PREPARED
   const prepared = new Set<string>();
   const named = (text: string): string | undefined => {
     const name = nameOf(text);
-    if (prepared.has(name)) return name;
+    if (!name || prepared.has(name)) return name;
     if (prepared.size >= most) return undefined;
     prepared.add(name);
     return name;
