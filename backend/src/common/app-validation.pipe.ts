@@ -2,6 +2,7 @@ import { BadRequestException, ValidationPipe, type ArgumentMetadata, type Valida
 import { getMetadataStorage } from 'class-validator';
 import type { ValidationMetadata } from 'class-validator/types/metadata/ValidationMetadata.js';
 import { defaultMetadataStorage } from 'class-transformer/cjs/storage.js';
+import { cacheValidationMetadata } from './validation-metadata-cache.js';
 
 type Ctor = new (...args: unknown[]) => object;
 
@@ -19,6 +20,7 @@ const SAMPLE = 64;
 export class AppValidationPipe extends ValidationPipe {
   constructor(options: ValidationPipeOptions) {
     super(options);
+    cacheValidationMetadata();
   }
 
   override async transform(value: unknown, metadata: ArgumentMetadata): Promise<unknown> {

@@ -157,7 +157,7 @@ export class RailSweepsService {
     };
     const id = await this.records.saveCheck(
       actor,
-      this.repo.sweepInsert(values),
+      this.repo.sweepRecord(values),
       { machineId: rail.machineId, kind: 'rail-straightness', recordType: 'rail-sweep', status },
       `Sweep of rail ${rail.label} (${dto.phase}, ${values.face} face): ${REFERENCE_WORDS[reference]} ${showIn(judged, readingUnit)} against a target of ${target.value} ${target.unit === 'um' ? 'µm' : target.unit}` +
         ` (least squares ${showIn(result.leastSquares.straightness, readingUnit)}, minimum zone ${showIn(result.minimumZone.straightness, readingUnit)}); largest local slope ${slope.mmPerM.toFixed(3)} mm/m`,

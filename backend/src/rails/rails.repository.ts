@@ -1,6 +1,8 @@
 import { Inject, Injectable } from '@nestjs/common';
 import { and, asc, count, desc, eq, inArray, sql, type SQL } from 'drizzle-orm';
+import { compiledQuery, type Slots } from '../database/compiled-statement.js';
 import { DRIZZLE, type Database } from '../database/database.tokens.js';
+import type { CheckInsert } from '../records/records.repository.js';
 import { rowFromDriver } from '../database/row-from-driver.js';
 import { machines, rails, railSweeps, targetSets } from '../database/schema/index.js';
 
@@ -346,27 +348,27 @@ export class RailsRepository {
     workshopId: string,
     railId: string,
   ): Promise<{ rail: RailRow; targetSetId: string; targets: TargetSetRow['targets'] } | null> {
-    const [found] = await this.db
+    const [found] = await this.railForSweep(this.db, { workshopId, railId });
+    return found ?? null;
+  }
+
+  // Every sweep's first read: built once (compiled-statement.ts).
+  private readonly railForSweep = compiledQuery((s: Slots<{ workshopId: string; railId: string }>) =>
+    this.db
       .select({ rail: rails, targetSetId: machines.targetSetId, targets: targetSets.targets })
       .from(rails)
       .innerJoin(machines, eq(machines.id, rails.machineId))
-      .innerJoin(targetSets, and(eq(targetSets.id, machines.targetSetId), eq(targetSets.workshopId, workshopId)))
-      .where(and(eq(rails.workshopId, workshopId), eq(rails.id, railId)));
-    return found ?? null;
-  }
+      .innerJoin(targetSets, and(eq(targetSets.id, machines.targetSetId), eq(targetSets.workshopId, s.workshopId)))
+      .where(and(eq(rails.workshopId, s.workshopId), eq(rails.id, s.railId))),
+  );
 
   /**
    * Inserts unless the id exists already (a retried save: null). Only the columns the database
    * fills are sent back; the rest of the row is what was written.
    */
-  /** A sweep's insert (`… on conflict do nothing returning id`), to be sent with its audit entry. */
-  sweepInsert(values: SweepValues): SQL {
-    return this.db
-      .insert(railSweeps)
-      .values(values)
-      .onConflictDoNothing({ target: railSweeps.id })
-      .returning({ id: railSweeps.id })
-      .getSQL();
+  /** A sweep's row to insert, to be sent with its audit entry (RecordsService.saveCheck). */
+  sweepRecord(values: SweepValues): CheckInsert<typeof railSweeps> {
+    return { table: railSweeps, values };
   }
 
   /** The row a sweep insert wrote, from the values it was given: no read back. */

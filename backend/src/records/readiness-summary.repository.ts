@@ -1,5 +1,6 @@
 import { Inject, Injectable } from '@nestjs/common';
 import { and, eq, isNull, ne, or, sql, type SQL } from 'drizzle-orm';
+import { compiledQuery, keysShape, slotsOf, type Slots } from '../database/compiled-statement.js';
 import { DRIZZLE, type Database } from '../database/database.tokens.js';
 import { machineReadiness, machines, targetSets, waivers } from '../database/schema/index.js';
 import { machineStateNow } from '../machines/machine-state.js';
@@ -121,18 +122,28 @@ export class ReadinessSummaryRepository {
       .where(or(isNull(machineReadiness.machineId), ne(machineReadiness.version, version)));
   }
 
-  /** Writes a machine's summary; an existing row takes the new values from the row offered (`excluded`), sent once. */
+  /**
+   * Writes a machine's summary; an existing row takes the new values from the row offered
+   * (`excluded`), sent once. Built once per set of columns: every recorded check writes it.
+   */
   async upsert(values: typeof machineReadiness.$inferInsert): Promise<void> {
-    const { machineId: _m, ...rest } = values;
-    const set = Object.fromEntries(
-      Object.keys(rest).map((key) => {
-        const column = machineReadiness[key as keyof typeof rest];
-        return [key, sql`excluded.${sql.identifier(column.name)}`];
-      }),
-    );
-    await this.db
-      .insert(machineReadiness)
-      .values(values)
-      .onConflictDoUpdate({ target: machineReadiness.machineId, set: { ...set, refreshedAt: sql`now()` } });
+    await this.summaryUpsert(this.db, values);
   }
+
+  private readonly summaryUpsert = compiledQuery(
+    (s: Slots<typeof machineReadiness.$inferInsert>, values: typeof machineReadiness.$inferInsert) => {
+      const { machineId: _m, ...rest } = values;
+      const set = Object.fromEntries(
+        Object.keys(rest).map((key) => {
+          const column = machineReadiness[key as keyof typeof rest];
+          return [key, sql`excluded.${sql.identifier(column.name)}`];
+        }),
+      );
+      return this.db
+        .insert(machineReadiness)
+        .values(slotsOf(s, values) as never)
+        .onConflictDoUpdate({ target: machineReadiness.machineId, set: { ...set, refreshedAt: sql`now()` } });
+    },
+    keysShape,
+  );
 }

@@ -1,5 +1,7 @@
 import { Inject, Injectable } from '@nestjs/common';
-import { and, asc, desc, eq, gte, ilike, inArray, lt, or, sql, type SQL } from 'drizzle-orm';
+import { and, asc, desc, eq, gte, ilike, inArray, lt, or, sql, type Placeholder, type SQL } from 'drizzle-orm';
+import type { PgColumn, PgTable } from 'drizzle-orm/pg-core';
+import { compiledSql, keysShape, slotsOf } from '../database/compiled-statement.js';
 import { DRIZZLE, type Database } from '../database/database.tokens.js';
 import { auditEntries, changeLog, machines, recordLocks } from '../database/schema/index.js';
 import type { RecordType, SignedRecordType } from './kinds.js';
@@ -36,18 +38,52 @@ export class RecordsRepository {
   }
 
   /**
-   * A record's insert (`insert … returning id`), its audit entry and the machine's last activity
-   * in one statement. The entry and the touch happen only if the insert wrote a row; answers the
-   * new row's id, or null when it wrote none (its id was already taken).
+   * A record's insert, its audit entry and the machine's last activity in one statement. The entry
+   * and the touch happen only if the insert wrote a row (`on conflict (id) do nothing`); answers
+   * the new row's id, or null when it wrote none (its id was already taken). Built once per table
+   * and set of columns (compiled-statement.ts): this is every sweep's write.
    */
-  async insertWithAuditAndTouch(
-    insert: SQL,
-    values: Omit<typeof auditEntries.$inferInsert, 'recordId'> & { machineId: string },
+  async insertWithAuditAndTouch<T extends RecordTable>(
+    record: CheckInsert<T>,
+    audit: Omit<typeof auditEntries.$inferInsert, 'recordId'> & { machineId: string },
   ): Promise<string | null> {
-    const { rows } = await this.db.execute<{ id: string }>(sql`
-      with rec as (${insert}), ${this.auditAndTouchAfter('rec', { ...values, recordId: sql`rec.id` })}
-      select id from rec`);
+    let statement = this.checkInserts.get(record.table);
+    if (!statement) this.checkInserts.set(record.table, (statement = this.checkInsertOf(record.table)));
+    const values: Record<string, unknown> = { ...record.values };
+    for (const [key, value] of Object.entries(auditSlotValues(audit))) values[`audit.${key}`] = value;
+    const { rows } = await statement(this.db, values);
     return rows[0]?.id ?? null;
+  }
+
+  private readonly checkInserts = new Map<RecordTable, ReturnType<RecordsRepository['checkInsertOf']>>();
+
+  private checkInsertOf(table: RecordTable) {
+    return compiledSql<{ id: string }, Record<string, unknown>>((s, values) => {
+      const recordValues = Object.fromEntries(
+        Object.keys(values)
+          .filter((k) => !k.startsWith('audit.'))
+          .map((k) => [k, values[k]]),
+      );
+      const insert = this.db
+        .insert(table)
+        .values(slotsOf(s, recordValues) as never)
+        .onConflictDoNothing({ target: table.id })
+        .returning({ id: table.id });
+      const a = (key: keyof AuditSlotValues) => s[`audit.${key}`];
+      return sql`
+      with rec as (${insert.getSQL()}), ${auditCtes('rec', {
+        workshopId: a('workshopId'),
+        machineId: a('machineId'),
+        recordType: a('recordType'),
+        recordId: sql`rec.id`,
+        action: a('action'),
+        summary: a('summary'),
+        changes: a('changes'),
+        actorId: a('actorId'),
+        actorName: a('actorName'),
+      })}
+      select id from rec`;
+    }, keysShape);
   }
 
   /**
@@ -59,17 +95,9 @@ export class RecordsRepository {
     when: string,
     values: Omit<typeof auditEntries.$inferInsert, 'recordId'> & { machineId: string; recordId: string | SQL | null },
   ): SQL {
-    const from = sql.identifier(when);
     const recordId =
       typeof values.recordId === 'string' ? sql`${values.recordId}::uuid` : (values.recordId ?? sql`null::uuid`);
-    return sql`audit as (
-        insert into ${auditEntries} (workshop_id, machine_id, record_type, record_id, action, summary, changes, actor_id, actor_name, at)
-        select ${values.workshopId}::uuid, ${values.machineId}::uuid, ${values.recordType}, ${recordId}, ${values.action}, ${values.summary},
-               ${values.changes === null || values.changes === undefined ? null : JSON.stringify(values.changes)}::jsonb,
-               ${values.actorId ?? null}::uuid, ${values.actorName}, clock_timestamp()
-        from ${from} limit 1),
-      touch as (
-        update ${machines} set last_activity_at = now() where ${machines.id} = ${values.machineId} and exists (select 1 from ${from}))`;
+    return auditCtes(when, { ...auditSlotValues(values), recordId });
   }
 
   /** One page of a workshop's (or one machine's) history, newest first; one row more than asked tells there is a next page. */
@@ -168,4 +196,54 @@ export class RecordsRepository {
       .values(refs.map((r) => ({ ...r, approvalId })))
       .onConflictDoNothing();
   }
+}
+
+/** A table a check's record goes into: its rows have a uuid `id`. */
+export type RecordTable = PgTable & { id: PgColumn };
+
+/** A check's record to insert: its table and the values of its row. */
+export interface CheckInsert<T extends RecordTable = RecordTable> {
+  table: T;
+  values: T['$inferInsert'] & Record<string, unknown>;
+}
+
+/** An audit entry's values as they go into its statement (the changes already as JSON text). */
+interface AuditSlotValues {
+  workshopId: string;
+  machineId: string;
+  recordType: string;
+  action: string;
+  summary: string;
+  changes: string | null;
+  actorId: string | null;
+  actorName: string;
+}
+
+function auditSlotValues(
+  values: Omit<typeof auditEntries.$inferInsert, 'recordId'> & { machineId: string },
+): AuditSlotValues {
+  return {
+    workshopId: values.workshopId,
+    machineId: values.machineId,
+    recordType: values.recordType,
+    action: values.action,
+    summary: values.summary ?? '',
+    changes: values.changes === null || values.changes === undefined ? null : JSON.stringify(values.changes),
+    actorId: values.actorId ?? null,
+    actorName: values.actorName,
+  };
+}
+
+type SqlValue = string | null | SQL | Placeholder;
+
+/** The audit entry and the touch as common table expressions, from values or a compiled statement's slots. */
+function auditCtes(when: string, v: { [K in keyof AuditSlotValues]: SqlValue } & { recordId: SQL }): SQL {
+  const from = sql.identifier(when);
+  return sql`audit as (
+        insert into ${auditEntries} (workshop_id, machine_id, record_type, record_id, action, summary, changes, actor_id, actor_name, at)
+        select ${v.workshopId}::uuid, ${v.machineId}::uuid, ${v.recordType}, ${v.recordId}, ${v.action}, ${v.summary},
+               ${v.changes}::jsonb, ${v.actorId}::uuid, ${v.actorName}, clock_timestamp()
+        from ${from} limit 1),
+      touch as (
+        update ${machines} set last_activity_at = now() where ${machines.id} = ${v.machineId}::uuid and exists (select 1 from ${from}))`;
 }

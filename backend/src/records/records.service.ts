@@ -11,7 +11,7 @@ import {
 import type { HistoryQueryDto } from '../history/dto/history-query.dto.js';
 import { isRecordType, RECORD_TYPE_NAMES, type CheckKind, type RecordType, type SignedRecordType } from './kinds.js';
 import type { CheckStatus } from './readiness.js';
-import { RecordsRepository } from './records.repository.js';
+import { RecordsRepository, type CheckInsert } from './records.repository.js';
 
 /** The refusal for a change to a record that an approval was based on. */
 export function lockedRecordConflict(what = 'This record'): ConflictException {
@@ -96,17 +96,17 @@ export class RecordsService {
 
   /**
    * Saves a check's record together with its audit entry and the machine's last activity, in one
-   * statement (`insert` is the record's `insert … returning id`), then reacts as checkRecorded
-   * does. Answers the new record's id, or null when the insert wrote nothing (the id was taken).
+   * statement (`record` is its table and row; see RecordsRepository.insertWithAuditAndTouch), then
+   * reacts as checkRecorded does. Answers the new record's id, or null when the insert wrote nothing (the id was taken).
    */
   async saveCheck(
     actor: SessionUser,
-    insert: SQL,
+    record: CheckInsert,
     event: Omit<CheckRecordedEvent, 'recordId'>,
     summary: string,
   ): Promise<string | null> {
     const entry = recordedEntry({ ...event, recordId: null }, summary);
-    const recordId = await this.repo.insertWithAuditAndTouch(insert, {
+    const recordId = await this.repo.insertWithAuditAndTouch(record, {
       ...auditValues(actor, entry),
       machineId: event.machineId,
     });
