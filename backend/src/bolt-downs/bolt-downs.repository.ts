@@ -1,5 +1,6 @@
 import { Inject, Injectable } from '@nestjs/common';
-import { and, asc, desc, eq, inArray, sql, type SQL } from 'drizzle-orm';
+import { and, asc, desc, eq, sql, type SQL } from 'drizzle-orm';
+import { compiledQuery, type Slots } from '../database/compiled-statement.js';
 import { DRIZZLE, type Database } from '../database/database.tokens.js';
 import { boltDownHoles, boltDowns, boltDownWrites, machines, rails, recordLocks } from '../database/schema/index.js';
 import type { MachineState } from '../database/schema/machines.js';
@@ -71,15 +72,21 @@ export class BoltDownsRepository {
   async holesOf(workshopId: string, ids: string[]): Promise<Map<string, BoltDownHoleRow[]>> {
     const out = new Map<string, BoltDownHoleRow[]>(ids.map((id) => [id, []]));
     if (!ids.length) return out;
-    const rows = await this.db
-      .select({ hole: boltDownHoles })
-      .from(boltDownHoles)
-      .innerJoin(boltDowns, eq(boltDowns.id, boltDownHoles.boltDownId))
-      .where(and(eq(boltDowns.workshopId, workshopId), inArray(boltDownHoles.boltDownId, ids)))
-      .orderBy(asc(boltDownHoles.holeIndex));
+    const rows = await this.holesOfIds(this.db, { workshopId, ids });
     for (const { hole } of rows) out.get(hole.boltDownId)!.push(hole);
     return out;
   }
+
+  // Every hole write answers from this read: built once (compiled-statement.ts), one text for any
+  // number of ids.
+  private readonly holesOfIds = compiledQuery((s: Slots<{ workshopId: string; ids: string[] }>) =>
+    this.db
+      .select({ hole: boltDownHoles })
+      .from(boltDownHoles)
+      .innerJoin(boltDowns, eq(boltDowns.id, boltDownHoles.boltDownId))
+      .where(and(eq(boltDowns.workshopId, s.workshopId), sql`${boltDownHoles.boltDownId} = any(${s.ids}::uuid[])`))
+      .orderBy(asc(boltDownHoles.holeIndex)),
+  );
 
   async writeSeen(writeId: string) {
     const [row] = await this.db.select().from(boltDownWrites).where(eq(boltDownWrites.writeId, writeId));
@@ -131,7 +138,13 @@ export class BoltDownsRepository {
    * began; the write itself checks again that it is neither finished nor abandoned.
    */
   async findForHoleWrite(workshopId: string, id: string, writeId: string): Promise<HoleWriteContext | null> {
-    const [found] = await this.db
+    const [found] = await this.holeWriteContext(this.db, { workshopId, id, writeId });
+    return found ? { ...found, seen: found.seen?.target ? found.seen : null } : null;
+  }
+
+  // Every hole write's first read: built once (compiled-statement.ts).
+  private readonly holeWriteContext = compiledQuery((s: Slots<{ workshopId: string; id: string; writeId: string }>) =>
+    this.db
       .select({
         row: boltDowns,
         rail: { label: rails.label, axis: rails.axis, lengthMm: rails.lengthMm },
@@ -146,11 +159,10 @@ export class BoltDownsRepository {
       .from(boltDowns)
       .innerJoin(rails, eq(rails.id, boltDowns.railId))
       .innerJoin(machines, eq(machines.id, boltDowns.machineId))
-      .leftJoin(boltDownWrites, eq(boltDownWrites.writeId, writeId))
-      .where(and(eq(boltDowns.workshopId, workshopId), eq(boltDowns.id, id)))
-      .for('no key update', { of: machines });
-    return found ? { ...found, seen: found.seen?.target ? found.seen : null } : null;
-  }
+      .leftJoin(boltDownWrites, eq(boltDownWrites.writeId, s.writeId))
+      .where(and(eq(boltDowns.workshopId, s.workshopId), eq(boltDowns.id, s.id)))
+      .for('no key update', { of: machines }),
+  );
 
   /**
    * Applies one hole write exactly once, in one statement. The write id goes in first: a second
