@@ -3,6 +3,7 @@ import { IconButton, InputAdornment, TableCell, TableRow, TextField, Tooltip } f
 import DeleteOutline from '@mui/icons-material/DeleteOutlined';
 import { UNIT_LABELS, type LengthUnit } from '../../../lib/units';
 import { useDraft, type StationDraft, type SweepDraftStore } from '../hooks/use-sweep-draft';
+import { useFieldLayoutBoundary } from '../hooks/use-field-layout-boundary';
 import { readyStations } from '../utils/stations';
 
 const DECIMALS: Record<LengthUnit, number> = { um: 1, mm: 4, in: 5, thou: 2 };
@@ -136,9 +137,11 @@ const ReadingField = memo(function ReadingField({
     show(store.getState().stations[i]?.reading ?? '');
     return store.subscribe((d) => show(d.stations[i]?.reading ?? ''));
   }, [store, i]);
+  const boundary = useFieldLayoutBoundary(!problem);
   return (
     <FieldForm>
       <TextField
+        ref={boundary.field}
         onChange={(e) => onRowChange(i, { reading: e.target.value })}
         onKeyDown={(e) => {
           if (e.key === 'Enter') {
@@ -162,7 +165,10 @@ const ReadingField = memo(function ReadingField({
             enterKeyHint: 'next',
             'data-indicator-cell': i,
           },
-          input: { endAdornment: <InputAdornment position="end">{UNIT_LABELS[unit]}</InputAdornment> },
+          input: {
+            ref: boundary.line,
+            endAdornment: <InputAdornment position="end">{UNIT_LABELS[unit]}</InputAdornment>,
+          },
         }}
         sx={{ width: { xs: 124, sm: 130 } }}
       />
