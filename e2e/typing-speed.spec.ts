@@ -131,10 +131,10 @@ test.describe('typing on a slow tablet', () => {
     // A letter makes it a reading to fix and Backspace mends it: the field's message and the count change.
     const fixing = await rendersWhileTyping(['x', 'Backspace']);
     console.log(`components rendered per commit while a reading turns wrong and back: ${fixing.join(', ')}`);
-    expect(fixing.length, 'both keystrokes committed').toBeGreaterThanOrEqual(2);
+    // (A commit that renders nothing may follow; the counter must see both keystrokes render the field.)
+    expect(fixing.filter((n) => n > 0).length, 'both keystrokes rendered the field').toBeGreaterThanOrEqual(2);
     // One station's field is a few dozen components; the table alone would be more than one per station.
     expect(Math.max(...fixing)).toBeLessThan(STATIONS);
-    expect(Math.min(...fixing), 'the counter saw the field render').toBeGreaterThan(0);
     await expect(field).toHaveValue(`${reading(20)}5`);
     await expect(page.getByText('Reading is not a number')).toHaveCount(0);
   });
