@@ -1,8 +1,9 @@
-import { memo, useCallback, type FormEvent, type ReactNode } from 'react';
+import { memo, useCallback, useLayoutEffect, useRef, type FormEvent, type ReactNode } from 'react';
 import { IconButton, InputAdornment, TableCell, TableRow, TextField, Tooltip } from '@mui/material';
 import DeleteOutline from '@mui/icons-material/DeleteOutlined';
 import { UNIT_LABELS, type LengthUnit } from '../../../lib/units';
 import { useDraft, type StationDraft, type SweepDraftStore } from '../hooks/use-sweep-draft';
+import { useFieldLayoutBoundary } from '../hooks/use-field-layout-boundary';
 import { readyStations } from '../utils/stations';
 
 const DECIMALS: Record<LengthUnit, number> = { um: 1, mm: 4, in: 5, thou: 2 };
@@ -116,13 +117,31 @@ const ReadingField = memo(function ReadingField({
   onDrop,
   inputRef,
 }: Omit<StationRowProps, 'residuals'> & { position: string }) {
-  const reading = useDraft(store, (d) => d.stations[i]?.reading ?? '');
   const problem = useDraft(store, (d) => readyStations(d.stations).problems.get(i));
-  const ref = useCallback((el: HTMLInputElement | null) => inputRef(i, el), [inputRef, i]);
+  const own = useRef<HTMLInputElement | null>(null);
+  const ref = useCallback(
+    (el: HTMLInputElement | null) => {
+      own.current = el;
+      inputRef(i, el);
+    },
+    [inputRef, i],
+  );
+  // The field keeps what is typed in it and writes it to the draft, so a keystroke re-renders
+  // nothing unless the reading's problem changes: on a slow tablet re-rendering the field was a
+  // third of the keystroke. A reading put in from elsewhere (an indicator, an imported file, an
+  // undone drop, the readings cleared after saving) is written into the field here.
+  useLayoutEffect(() => {
+    const show = (reading: string) => {
+      if (own.current && own.current.value !== reading) own.current.value = reading;
+    };
+    show(store.getState().stations[i]?.reading ?? '');
+    return store.subscribe((d) => show(d.stations[i]?.reading ?? ''));
+  }, [store, i]);
+  const boundary = useFieldLayoutBoundary(!problem);
   return (
     <FieldForm>
       <TextField
-        value={reading}
+        ref={boundary.field}
         onChange={(e) => onRowChange(i, { reading: e.target.value })}
         onKeyDown={(e) => {
           if (e.key === 'Enter') {
@@ -146,7 +165,10 @@ const ReadingField = memo(function ReadingField({
             enterKeyHint: 'next',
             'data-indicator-cell': i,
           },
-          input: { endAdornment: <InputAdornment position="end">{UNIT_LABELS[unit]}</InputAdornment> },
+          input: {
+            ref: boundary.line,
+            endAdornment: <InputAdornment position="end">{UNIT_LABELS[unit]}</InputAdornment>,
+          },
         }}
         sx={{ width: { xs: 124, sm: 130 } }}
       />
