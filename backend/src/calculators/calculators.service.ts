@@ -44,6 +44,7 @@ export class CalculatorsService {
         positionsMm: arrayToMm(dto.positions, u.lengthUnit),
         readingsMm: arrayToMm(dto.readings, u.readingUnit),
       },
+      residuals: withResiduals,
     });
     return map.toStraightnessResponse(result, withResiduals, u);
   }

@@ -3,6 +3,8 @@ import { getMetadataStorage } from 'class-validator';
 import type { ValidationMetadata } from 'class-validator/types/metadata/ValidationMetadata.js';
 import { defaultMetadataStorage } from 'class-transformer/cjs/storage.js';
 import { cacheValidationMetadata } from './validation-metadata-cache.js';
+import { keepsNumberListsPacked } from './keeps-number-lists-packed.js';
+import { isPackedBody, toPlainArray, unpackNumberArrays } from '../engine-worker/number-arrays.js';
 
 type Ctor = new (...args: unknown[]) => object;
 
@@ -25,14 +27,22 @@ export class AppValidationPipe extends ValidationPipe {
 
   override async transform(value: unknown, metadata: ArgumentMetadata): Promise<unknown> {
     const type = metadata.metatype as Ctor | undefined;
-    if (!type || !isPlainObject(value) || !isDto(type)) return super.transform(value, metadata);
+    // A large body parsed in the worker thread holds its long number lists as Float64Arrays.
+    const packed = isPackedBody(value);
+    if (!type || !isPlainObject(value) || !isDto(type))
+      return super.transform(packed ? unpackNumberArrays(value) : value, metadata);
     const tooLong = arrayCapBreach(value, type, '', 0);
     if (tooLong) throw new BadRequestException([tooLong]);
     const long: LongList[] = [];
-    const sampled = compactLongLists(value, type, [], long, 0);
-    if (!long.length) return super.transform(value, metadata);
+    const compacted = compactLongLists(value, type, [], long, 0);
+    // A packed list the DTO does not take as a number list is a plain one again, so class-validator
+    // judges it as it judges any list.
+    const sampled = packed ? unpackNumberArrays(compacted) : compacted;
+    if (!long.length) return super.transform(sampled, metadata);
     const dto = await super.transform(sampled, metadata);
-    for (const { path, values } of long) putAt(dto, path, values);
+    const keep = keepsNumberListsPacked(type);
+    for (const { path, values } of long)
+      putAt(dto, path, !keep && values instanceof Float64Array ? toPlainArray(values) : values);
     // A long computation follows: let requests that arrived meanwhile (health checks, page loads) go first.
     await new Promise((resolve) => setImmediate(resolve));
     return dto;
@@ -42,7 +52,7 @@ export class AppValidationPipe extends ValidationPipe {
 /** A long list checked in one pass, where it sits in the body, and its values to put back. */
 interface LongList {
   path: (string | number)[];
-  values: unknown[];
+  values: unknown[] | Float64Array;
 }
 
 function isPlainObject(v: unknown): v is Record<string, unknown> {
@@ -71,7 +81,7 @@ function arrayCapBreach(value: Record<string, unknown>, type: Ctor, prefix: stri
     if (m.name !== 'arrayMaxSize' || m.each) continue;
     const v = value[m.propertyName];
     const max = Number(m.constraints?.[0]);
-    if (Array.isArray(v) && v.length > max) {
+    if ((Array.isArray(v) || v instanceof Float64Array) && v.length > max) {
       const msg =
         typeof m.message === 'string' ? m.message : `${prefix}${m.propertyName} must hold at most ${max} entries`;
       return msg;
@@ -113,10 +123,10 @@ function compactLongLists(
   const set = (key: string, v: unknown) => ((copy ??= { ...value })[key] = v);
   for (const [key, metas] of metadatasByKey(type)) {
     const v = value[key];
-    if (Array.isArray(v) && v.length > SAMPLE && isNumberList(metas)) {
+    if ((Array.isArray(v) || v instanceof Float64Array) && v.length > SAMPLE && isNumberList(metas)) {
       checkNumbers(v, key, metas, `${[...path, key].join('.')}`);
       out.push({ path: [...path, key], values: v });
-      set(key, v.slice(0, SAMPLE));
+      set(key, v instanceof Float64Array ? Array.from(v.subarray(0, SAMPLE)) : v.slice(0, SAMPLE));
       continue;
     }
     const nested = metas.some((m) => m.type === 'nestedValidation') ? nestedType(type, key) : null;
@@ -164,7 +174,7 @@ function messageOf(m: ValidationMetadata | undefined, fallback: string): string 
   return typeof m?.message === 'string' ? m.message : fallback;
 }
 
-function checkNumbers(v: unknown[], key: string, metas: ValidationMetadata[], where: string) {
+function checkNumbers(v: ArrayLike<unknown>, key: string, metas: ValidationMetadata[], where: string) {
   const rule = metas.find((m) => m.name === 'isNumber' && m.each);
   for (let i = 0; i < v.length; i++) {
     const x = v[i];
@@ -210,7 +220,7 @@ function checkNumberObjects(v: unknown[], key: string, fields: Map<string, Valid
   void type;
 }
 
-function putAt(target: unknown, path: (string | number)[], values: unknown[]) {
+function putAt(target: unknown, path: (string | number)[], values: unknown[] | Float64Array) {
   let at = target as Record<string | number, unknown>;
   for (const step of path.slice(0, -1)) at = at[step] as Record<string | number, unknown>;
   at[path[path.length - 1]] = values;

@@ -135,6 +135,8 @@ export function controlCharacterIn(value: unknown, path: string, key = ''): stri
     return pattern.test(value) || LONE_SURROGATE.test(value) ? path : null;
   }
   if (value === null || typeof value !== 'object') return null;
+  // A large body's long number lists (Float64Array, see markPackedBody) hold no text.
+  if (ArrayBuffer.isView(value)) return null;
   if (Array.isArray(value)) {
     for (let i = 0; i < value.length; i++) {
       const v = value[i];

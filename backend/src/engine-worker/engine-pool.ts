@@ -7,7 +7,7 @@ import { Piscina } from 'piscina';
 import { EngineInputError } from '../engine/engine-input-error.js';
 import { runEngineTask, taskSize, type EngineTask, type EngineTaskResult } from './engine-tasks.js';
 import type { StringifyJsonTask, WorkerAnswer, WorkerTask } from './engine-worker.js';
-import { packNumberArrays, unpackNumberArraysInTurns } from './number-arrays.js';
+import { markPackedBody, packNumberArrays, unpackNumberArraysInTurns } from './number-arrays.js';
 
 /** Up to this many points a computation stays on the event loop: a thread hand-off costs more than it. */
 export const INLINE_MAX_POINTS = 5_000;
@@ -55,6 +55,9 @@ export class EnginePool implements OnModuleInit, OnModuleDestroy {
   /**
    * Nest has registered its JSON parser by now (before module init): large bodies go to the
    * worker, the rest to Fastify's own parser, with the same refusals (bad JSON, prototype keys).
+   * A large body comes back with its long number lists as Float64Arrays (markPackedBody); the
+   * validation pipe checks them in place and makes plain lists of them only where the DTO does not
+   * take them as they are (KeepsNumberListsPacked).
    */
   onModuleInit() {
     if (!this.threaded) return;
@@ -70,7 +73,7 @@ export class EnginePool implements OnModuleInit, OnModuleDestroy {
         this.worker({ kind: 'parse-json', body: body as Buffer }, movableBytes(body as Buffer))
           .then(async (answer) =>
             answer.ok
-              ? done(null, await unpackNumberArraysInTurns(answer.result))
+              ? done(null, markPackedBody(answer.result))
               : done(
                   Object.assign(new SyntaxError(`Body is not valid JSON: ${answer.message}`), { statusCode: 400 }),
                   undefined,

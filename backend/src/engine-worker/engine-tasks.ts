@@ -8,7 +8,8 @@ import { evaluateStraightness, type StraightnessInput } from '../engine/straight
  * the engine only (no NestJS, no database).
  */
 export type EngineTask =
-  | { kind: 'straightness'; input: StraightnessInput }
+  /** `residuals: false` leaves the residuals out of the answer (none is sent back across the threads). */
+  | { kind: 'straightness'; input: StraightnessInput; residuals?: boolean }
   | { kind: 'parallelism'; input: ParallelismInput }
   | { kind: 'flatness'; input: GridPoint[] };
 
@@ -20,8 +21,19 @@ export type EngineTaskResult<K extends EngineTask['kind']> = K extends 'straight
 
 export function runEngineTask(task: EngineTask): unknown {
   switch (task.kind) {
-    case 'straightness':
-      return evaluateStraightness(task.input);
+    case 'straightness': {
+      const result = evaluateStraightness(task.input);
+      if (task.residuals !== false) return result;
+      // Three lists as long as the input, copied back to the event loop for nothing when the
+      // request did not ask for them.
+      const none = (line: (typeof result)['leastSquares']) => ({ ...line, residualsMm: [] });
+      return {
+        ...result,
+        leastSquares: none(result.leastSquares),
+        minimumZone: none(result.minimumZone),
+        endPoint: none(result.endPoint),
+      };
+    }
     case 'parallelism':
       return evaluateParallelism(task.input);
     case 'flatness':

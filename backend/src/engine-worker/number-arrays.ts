@@ -59,7 +59,7 @@ function plainArrayOf(length: number): number[] {
   return new Array<number>(length).fill(0);
 }
 
-function toPlainArray(values: Float64Array): number[] {
+export function toPlainArray(values: Float64Array): number[] {
   const out = plainArrayOf(values.length);
   for (let i = 0; i < values.length; i++) out[i] = values[i];
   return out;
@@ -133,4 +133,21 @@ export async function unpackNumberArraysInTurns(value: unknown): Promise<unknown
   if (!isPlainObject(value)) return value;
   for (const key of Object.keys(value)) value[key] = await unpackNumberArraysInTurns(value[key]);
   return value;
+}
+
+// Bodies parsed in the worker thread, whose long number lists are still Float64Arrays.
+const packedBodies = new WeakSet<object>();
+
+/**
+ * A body parsed in the worker thread, its long number lists left as Float64Arrays: a plain array
+ * of 200 000 numbers costs the event loop 5–15 ms to make in one piece, and the calculation sends
+ * the list back to the worker anyway. The validation pipe knows such a body by this mark.
+ */
+export function markPackedBody<T>(body: T): T {
+  if (body !== null && typeof body === 'object') packedBodies.add(body);
+  return body;
+}
+
+export function isPackedBody(body: unknown): boolean {
+  return body !== null && typeof body === 'object' && packedBodies.has(body);
 }

@@ -1,7 +1,10 @@
 import { NumberList } from './validators.js';
 import { UnitFamiliesDto } from './unit-families.dto.js';
+import { KeepsNumberListsPacked } from '../../common/keeps-number-lists-packed.js';
 
 /** Stations in `lengthUnit`; both rails' readings, against one datum, in `readingUnit`. */
+// The calculation hands its lists straight to the engine pool: large ones stay Float64Arrays.
+@KeepsNumberListsPacked()
 export class ParallelismDto extends UnitFamiliesDto {
   /** Station positions along the rails, in `lengthUnit`. */
   @NumberList('positions')
