@@ -7,7 +7,7 @@ import { Piscina } from 'piscina';
 import { EngineInputError } from '../engine/engine-input-error.js';
 import { runEngineTask, taskSize, type EngineTask, type EngineTaskResult } from './engine-tasks.js';
 import type { StringifyJsonTask, WorkerAnswer, WorkerTask } from './engine-worker.js';
-import { markPackedBody, packNumberArrays, unpackNumberArraysInTurns } from './number-arrays.js';
+import { markPackedBody, packNumberArrays, unpackNumberArrays } from './number-arrays.js';
 
 /** Up to this many points a computation stays on the event loop: a thread hand-off costs more than it. */
 export const INLINE_MAX_POINTS = 5_000;
@@ -40,7 +40,7 @@ export class EnginePool implements OnModuleInit, OnModuleDestroy {
     const made: ArrayBuffer[] = [];
     const answer = await this.worker(packNumberArrays(task, made) as WorkerTask, made);
     if (!answer.ok) throw new EngineInputError(answer.message, answer.field);
-    return (await unpackNumberArraysInTurns(answer.result)) as EngineTaskResult<K>;
+    return unpackNumberArrays(answer.result) as EngineTaskResult<K>;
   }
 
   /** A response as JSON bytes, compressed with `encoding` when given, written in the worker thread. */
@@ -71,7 +71,7 @@ export class EnginePool implements OnModuleInit, OnModuleDestroy {
       (req: FastifyRequest, body: Buffer | string, done) => {
         if (body.length < LARGE_BODY_BYTES) return inline(req, body as string, done); // it takes a Buffer as well (secure-json-parse reads either)
         this.worker({ kind: 'parse-json', body: body as Buffer }, movableBytes(body as Buffer))
-          .then(async (answer) =>
+          .then((answer) =>
             answer.ok
               ? done(null, markPackedBody(answer.result))
               : done(

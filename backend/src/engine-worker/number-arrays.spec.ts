@@ -1,11 +1,5 @@
 import { deserialize, serialize } from 'node:v8';
-import {
-  NUMBERS_PER_TURN,
-  packNumberArrays,
-  sizeOf,
-  unpackNumberArrays,
-  unpackNumberArraysInTurns,
-} from './number-arrays.js';
+import { packNumberArrays, sizeOf, unpackNumberArrays } from './number-arrays.js';
 
 /** What a worker thread's message does to a value: V8's serializer, as worker_threads uses it. */
 const threadCopy = <T>(value: T): T => deserialize(serialize(value)) as T;
@@ -50,26 +44,6 @@ describe('long lists of numbers across the thread boundary', () => {
     expect(made.every((memory) => memory.byteLength === 0)).toBe(true);
     expect(JSON.stringify(unpackNumberArrays(moved))).toBe(before);
     expect(JSON.stringify(value)).toBe(before);
-  });
-
-  it('unpacks in turns to the same JSON text, letting other work run between slices of a long list', async () => {
-    const copied = threadCopy(packNumberArrays(value));
-    expect(JSON.stringify(await unpackNumberArraysInTurns(copied)) === JSON.stringify(value)).toBe(true);
-
-    const list = Float64Array.from({ length: NUMBERS_PER_TURN * 3 + 5 }, (_, i) => i * 0.25 - 7);
-    const order: string[] = [];
-    const unpacked = unpackNumberArraysInTurns({ list }).then((out) => {
-      order.push('unpacked');
-      return out as { list: number[] };
-    });
-    setImmediate(() => order.push('other work'));
-    const out = await unpacked;
-    expect(order).toEqual(['other work', 'unpacked']);
-    expect(Array.isArray(out.list)).toBe(true);
-    expect(out.list).toHaveLength(list.length);
-    out.list.forEach((v, i) => {
-      if (v !== list[i]) throw new Error(`entry ${i}: ${v} is not ${list[i]}`);
-    });
   });
 
   it('keeps -0, very small and very large numbers exactly (IEEE 754 doubles both ways)', () => {

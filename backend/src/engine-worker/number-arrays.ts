@@ -105,36 +105,6 @@ export function sizeOf(value: unknown, limit: number): number {
   return count;
 }
 
-/** How many numbers are copied between two turns of the event loop (about a millisecond's work). */
-export const NUMBERS_PER_TURN = 20_000;
-
-const nextTurn = () => new Promise<void>((resolve) => setImmediate(resolve));
-
-/**
- * unpackNumberArrays for the event loop: a long list is copied a slice at a time, and requests
- * that arrived meanwhile are answered between slices. Two lists of 200 000 numbers held the loop
- * for 20–80 ms in one piece on a busy machine.
- */
-export async function unpackNumberArraysInTurns(value: unknown): Promise<unknown> {
-  if (types.isFloat64Array(value)) {
-    const out = plainArrayOf(value.length);
-    for (let from = 0; from < value.length; from += NUMBERS_PER_TURN) {
-      if (from > 0) await nextTurn();
-      const to = Math.min(value.length, from + NUMBERS_PER_TURN);
-      for (let i = from; i < to; i++) out[i] = value[i];
-    }
-    return out;
-  }
-  if (value === null || typeof value !== 'object' || ArrayBuffer.isView(value)) return value;
-  if (Array.isArray(value)) {
-    for (let i = 0; i < value.length; i++) value[i] = await unpackNumberArraysInTurns(value[i]);
-    return value;
-  }
-  if (!isPlainObject(value)) return value;
-  for (const key of Object.keys(value)) value[key] = await unpackNumberArraysInTurns(value[key]);
-  return value;
-}
-
 // Bodies parsed in the worker thread, whose long number lists are still Float64Arrays.
 const packedBodies = new WeakSet<object>();
 

@@ -362,10 +362,6 @@ export class RailsRepository {
       .where(and(eq(rails.workshopId, s.workshopId), eq(rails.id, s.railId))),
   );
 
-  /**
-   * Inserts unless the id exists already (a retried save: null). Only the columns the database
-   * fills are sent back; the rest of the row is what was written.
-   */
   /** A sweep's row to insert, to be sent with its audit entry (RecordsService.saveCheck). */
   sweepRecord(values: SweepValues): CheckInsert<typeof railSweeps> {
     return { table: railSweeps, values };

@@ -97,7 +97,8 @@ export class RecordsService {
   /**
    * Saves a check's record together with its audit entry and the machine's last activity, in one
    * statement (`record` is its table and row; see RecordsRepository.insertWithAuditAndTouch), then
-   * reacts as checkRecorded does. Answers the new record's id, or null when the insert wrote nothing (the id was taken).
+   * reacts as checkRecorded does. Answers the new record's id, or null when the insert wrote
+   * nothing (the id was taken).
    */
   async saveCheck(
     actor: SessionUser,
